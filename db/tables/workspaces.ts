@@ -1,0 +1,28 @@
+import { sql } from "drizzle-orm";
+import { index, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { user } from "./auth";
+
+/** owner: members, settings, everything · editor: create, edit, save, fork · checker: read, comment, check · viewer: read. */
+export const workspaceRole = pgEnum("workspace_role", ["owner", "editor", "checker", "viewer"]);
+
+export const workspace = pgTable("workspace", {
+  id: uuid("id").primaryKey().default(sql`gen_random_uuid()`),
+  name: text("name").notNull(),
+  personalOf: text("personal_of").references(() => user.id, { onDelete: "cascade" }),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const membership = pgTable(
+  "membership",
+  {
+    workspaceId: uuid("workspace_id")
+      .notNull()
+      .references(() => workspace.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    role: workspaceRole("role").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("membership_pk").on(t.workspaceId, t.userId), index("membership_user_idx").on(t.userId)],
+);

@@ -1,0 +1,41 @@
+import type { BrowserContext } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { BASE_URL, openBrowser, shot } from "./browser";
+
+describe("first page", () => {
+  let ctx: BrowserContext;
+  beforeAll(async () => {
+    ctx = await openBrowser();
+  });
+  afterAll(async () => {
+    await ctx?.close();
+  });
+
+  it("shows the product, the entry points and the cautions in the shipped font", async () => {
+    const page = await ctx.newPage();
+    const res = await page.goto(BASE_URL + "/");
+    expect(res?.status()).toBe(200);
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toContain("What holds it in place");
+    expect(await page.getByRole("link", { name: "Sign in", exact: true }).getAttribute("href")).toBe("/sign-in");
+    expect(await page.getByRole("link", { name: "Try a sketch", exact: true }).getAttribute("href")).toBe("/sketches/new");
+    const footer = await page.locator("footer").textContent();
+    expect(footer).toMatch(/reviewed by a qualified engineer/);
+    expect(footer).toMatch(/Local codes, standards and licensed engineering practice govern/);
+    // The font comes from the app itself: loaded, and nothing requested from another host.
+    await page.evaluate(() => document.fonts.ready);
+    const fontLoaded = await page.evaluate(() =>
+      [...document.fonts].some((f) => f.status === "loaded" && /Inter|sans/i.test(f.family)),
+    );
+    expect(fontLoaded).toBe(true);
+    const family = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
+    expect(family).toMatch(/sans/i);
+    await shot(page, "home");
+  });
+
+  it("reports the database as up", async () => {
+    const page = await ctx.newPage();
+    const res = await page.goto(BASE_URL + "/api/health");
+    expect(res?.status()).toBe(200);
+    expect(await res?.json()).toEqual({ ok: true, db: "up" });
+  });
+});
