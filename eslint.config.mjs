@@ -5,7 +5,7 @@ const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
   {
-    ignores: [".next/**", ".next-test/**", "node_modules/**", "db/migrations/**", "next-env.d.ts", "test-results/**"],
+    ignores: [".next/**", ".next-test*/**", "node_modules/**", "db/migrations/**", "next-env.d.ts", "test-results/**"],
   },
   {
     rules: {

@@ -15,6 +15,8 @@ const skipE2e = args.includes("--skip-e2e");
 const onlyE2e = args.includes("--only-e2e");
 const keepDb = args.includes("--keep-db");
 const appPort = Number(process.env.TEST_APP_PORT || 3100);
+// Parallel runs on one machine each set their own TEST_* ports and TEST_DIST_DIR.
+const distDir = process.env.TEST_DIST_DIR || ".next-test";
 
 const children = [];
 function cleanup() {
@@ -42,7 +44,7 @@ async function main() {
     SMTP_PORT: process.env.TEST_SMTP_PORT || "2526",
     MAILBOX_PORT: process.env.TEST_MAILBOX_PORT || "2527",
     S3_PORT: process.env.TEST_S3_PORT || "4570",
-    COUNTERPOISE_LOCAL_STATE: "/tmp/counterpoise-test-state",
+    COUNTERPOISE_LOCAL_STATE: `/tmp/counterpoise-test-state-${appPort}`,
   };
   run(process.execPath, [nodeBin("tsx"), "scripts/db-setup.ts"], { env });
 
@@ -59,9 +61,9 @@ async function main() {
   }
 
   if (!skipE2e) {
-    log("test", "building the app into .next-test");
+    log("test", `building the app into ${distDir}`);
     const appUrl = `http://127.0.0.1:${appPort}`;
-    const appEnv = { ...env, NODE_ENV: "production", NEXT_DIST_DIR: ".next-test", APP_URL: appUrl, AUTH_RATE_LIMIT_MAX: process.env.AUTH_RATE_LIMIT_MAX || "1000" };
+    const appEnv = { ...env, NODE_ENV: "production", NEXT_DIST_DIR: distDir, APP_URL: appUrl, AUTH_RATE_LIMIT_MAX: process.env.AUTH_RATE_LIMIT_MAX || "1000" };
     run(process.execPath, [nodeBin("next"), "build"], { env: appEnv });
     const app = startChild(process.execPath, [nodeBin("next"), "start", "-H", "127.0.0.1", "-p", String(appPort)], {
       env: appEnv,
