@@ -1,0 +1,24 @@
+// npm run solve -- FILE   prints the solve result JSON on stdout; invalid input exits 1 with
+// { ok: false, errors } on stdout. Nothing else is written to stdout.
+import { readFileSync } from "node:fs";
+import { solveFile } from "./index";
+
+function main(argv: string[]): number {
+  const file = argv[0];
+  if (!file || argv.length > 1) {
+    process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: "usage: npm run solve -- FILE" }] }, null, 2) + "\n");
+    return 1;
+  }
+  let text: string;
+  try {
+    text = readFileSync(file === "-" ? 0 : file, "utf8");
+  } catch (err) {
+    process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: `cannot read ${file}: ${(err as NodeJS.ErrnoException).code ?? (err as Error).message}` }] }, null, 2) + "\n");
+    return 1;
+  }
+  const result = solveFile(text);
+  process.stdout.write(JSON.stringify(result, null, 2) + "\n");
+  return result.ok ? 0 : 1;
+}
+
+process.exitCode = main(process.argv.slice(2));

@@ -1,0 +1,16 @@
+// Exact conversion factors (NIST SP 811, Appendix B) and standard gravity (3rd CGPM, 1901).
+
+/** standard acceleration of gravity, m/s² */
+export const G0 = 9.80665;
+/** pound-force, N */
+export const LBF_N = 4.4482216152605;
+/** inch, m */
+export const INCH_M = 0.0254;
+/** foot, m */
+export const FOOT_M = 0.3048;
+/** pound (avoirdupois) mass, kg */
+export const LBM_KG = 0.45359237;
+/** US liquid gallon, m³ */
+export const GALLON_US_M3 = 3.785411784e-3;
+/** pound-force per square inch, Pa */
+export const PSI_PA = LBF_N / (INCH_M * INCH_M);

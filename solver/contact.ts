@@ -1,0 +1,121 @@
+// Reactions of a rigid body on stiff springs, some of them one-sided (contacts push, ties pull).
+//
+// With the engaged springs H = Σ k g gᵀ, the body's small displacement solves H q = Q and each
+// spring carries r = −k gᵀq. A one-sided group (a contact with its friction spring, or a tie) is
+// engaged while it carries n ≥ 0 and released while its gap gᵀq ≥ 0. The active set is searched
+// one change at a time from "everything engaged": release the most negative, or engage the one
+// that penetrates most; when the engaged springs cannot hold Q, follow the motion Q drives —
+// it closes released groups (engage them) or closes none, and then nothing can hold the body:
+// that motion is the free motion of a body that tips.
+import { addOuter, dot3, norm3, solvePsd, zeroMat3, type Vec3 } from "./linalg";
+import type { BodyModel } from "./model";
+
+export interface SpringSolution {
+  /** force in each spring (N, or N·m for a rotational spring) */
+  r: Float64Array;
+  /** generalized displacement */
+  q: Vec3;
+  /** per group: engaged? */
+  engaged: boolean[];
+  /** when nothing can hold the body: the motion the loads drive (scaled generalized direction) */
+  ray?: Vec3;
+  /** Q's part that the engaged springs cannot balance (non-zero only with a ray) */
+  unbalanced: Vec3;
+}
+
+const MAX_ITERATIONS = 200;
+const ENUMERATE_UP_TO = 12;
+
+/** Solve with a given engagement; springs of released groups carry nothing. */
+export function solveEngaged(model: BodyModel, engaged: boolean[]): SpringSolution {
+  const h = zeroMat3();
+  const { springs } = model;
+  for (const s of springs) if (s.group < 0 || engaged[s.group]) addOuter(h, s.g, s.k);
+  const { x: q, nullPart } = solvePsd(h, model.Q);
+  const r = new Float64Array(springs.length);
+  for (let i = 0; i < springs.length; i++) {
+    const s = springs[i];
+    if (s.group < 0 || engaged[s.group]) r[i] = -s.k * dot3(s.g, q);
+  }
+  return { r, q, engaged, unbalanced: nullPart };
+}
+
+/** Every support bilateral (the "required" reactions, and the unrestrained check). */
+export function solveBilateral(model: BodyModel): SpringSolution {
+  return solveEngaged(model, model.groups.map(() => true));
+}
+
+export function solveOneSided(model: BodyModel): SpringSolution {
+  const { groups, springs, scale } = model;
+  const forceTol = 1e-9 * scale;
+  let engaged = groups.map(() => true);
+  if (groups.length === 0) return solveEngaged(model, engaged);
+  const seen = new Set<string>();
+
+  for (let iter = 0; iter < MAX_ITERATIONS; iter++) {
+    const key = engaged.map((e) => (e ? "1" : "0")).join("");
+    if (seen.has(key)) break;
+    seen.add(key);
+    const sol = solveEngaged(model, engaged);
+
+    if (norm3(sol.unbalanced) > forceTol) {
+      // The engaged springs cannot hold Q: the body moves along z (Qᵀz > 0, z in H's null space).
+      const z = sol.unbalanced;
+      const zn = norm3(z);
+      const closing: number[] = [];
+      groups.forEach((g, gi) => {
+        if (engaged[gi]) return;
+        const gn = springs[g.normal].g;
+        if (dot3(gn, z) < -1e-9 * norm3(gn) * zn) closing.push(gi);
+      });
+      if (closing.length === 0) return { ...sol, ray: z };
+      engaged = engaged.slice();
+      for (const gi of closing) engaged[gi] = true;
+      continue;
+    }
+
+    // Most negative engaged group, and most penetrating released group (as a force: k × overlap).
+    let worstPull = -forceTol;
+    let release = -1;
+    let worstPen = -forceTol;
+    let engage = -1;
+    groups.forEach((g, gi) => {
+      const s = springs[g.normal];
+      if (engaged[gi]) {
+        if (sol.r[g.normal] < worstPull) {
+          worstPull = sol.r[g.normal];
+          release = gi;
+        }
+      } else {
+        const pen = s.k * dot3(s.g, sol.q); // gap × k; negative when overlapping
+        if (pen < worstPen) {
+          worstPen = pen;
+          engage = gi;
+        }
+      }
+    });
+    if (release < 0 && engage < 0) return sol;
+    engaged = engaged.slice();
+    if (release >= 0) engaged[release] = false;
+    else engaged[engage] = true;
+  }
+  return enumerate(model) ?? solveEngaged(model, engaged);
+}
+
+/** Last resort after a cycle: try every engagement (few groups only) and keep a consistent one. */
+function enumerate(model: BodyModel): SpringSolution | null {
+  const { groups, springs, scale } = model;
+  if (groups.length > ENUMERATE_UP_TO) return null;
+  const forceTol = 1e-9 * scale;
+  for (let mask = (1 << groups.length) - 1; mask >= 0; mask--) {
+    const engaged = groups.map((_, i) => (mask & (1 << i)) !== 0);
+    const sol = solveEngaged(model, engaged);
+    if (norm3(sol.unbalanced) > forceTol) continue;
+    const ok = groups.every((g, gi) => {
+      const s = springs[g.normal];
+      return engaged[gi] ? sol.r[g.normal] >= -forceTol : s.k * dot3(s.g, sol.q) >= -forceTol;
+    });
+    if (ok) return sol;
+  }
+  return null;
+}

@@ -1,0 +1,30 @@
+// Static determinacy of the supports as drawn, every one taken as bilateral: rank of the
+// support directions (with motion.freeX, the free acceleration counts as one more unknown).
+import { addOuter, eigenSym3, norm3, zeroMat3 } from "./linalg";
+import type { BodyModel } from "./model";
+import type { Determinacy } from "./types";
+
+export function determinacyOf(model: BodyModel): Determinacy {
+  const gram = zeroMat3();
+  let unknowns = 0;
+  for (const s of model.springs) {
+    const n = norm3(s.g);
+    if (n > 0) addOuter(gram, s.g, 1 / (n * n));
+    unknowns++;
+  }
+  if (model.freeX) {
+    unknowns++;
+    const m = model.body.mass;
+    if (m > 0) {
+      // the inertial force −m·ax at the centre of gravity, per unit ax
+      const col = new Float64Array([-m, 0, (m * (model.cg[1] - model.origin[1])) / model.L]);
+      addOuter(gram, col, 1 / (norm3(col) ** 2));
+    }
+  }
+  const { values } = eigenSym3(gram);
+  const tol = Math.max(values[0], 1e-300) * 1e-10;
+  const rank = values.filter((v) => v > tol).length;
+  if (rank < 3) return { kind: "mechanism", degree: 3 - rank };
+  if (unknowns > 3) return { kind: "indeterminate", degree: unknowns - 3 };
+  return { kind: "determinate", degree: 0 };
+}

@@ -1,0 +1,345 @@
+// Expressions with units (mathjs), compiled once when a sketch is parsed.
+//
+// mathjs resolves an unknown name that happens to be a unit as that unit ("rho*A*V" with no A in
+// scope is kg·A·V/m³), and a parameter called `m` turns "2 m" into 2 × m. Two rules close both
+// traps: only the units this trade uses are units here (A, V, L, h, t, d stay free for parameters),
+// every other name must be a parameter (checked in the parse tree, so nothing is silently a unit),
+// and a parameter may not take the name of one of our units.
+import {
+  absDependencies,
+  acosDependencies,
+  addDependencies,
+  asinDependencies,
+  atan2Dependencies,
+  atanDependencies,
+  cbrtDependencies,
+  compileDependencies,
+  cosDependencies,
+  create,
+  createUnitDependencies,
+  divideDependencies,
+  eDependencies,
+  expDependencies,
+  hypotDependencies,
+  log10Dependencies,
+  logDependencies,
+  maxDependencies,
+  minDependencies,
+  multiplyDependencies,
+  parseDependencies,
+  piDependencies,
+  powDependencies,
+  roundDependencies,
+  sinDependencies,
+  sqrtDependencies,
+  subtractDependencies,
+  tanDependencies,
+  toDependencies,
+  unaryMinusDependencies,
+  unaryPlusDependencies,
+  unitDependencies,
+  type MathNode,
+  type Unit,
+} from "mathjs";
+import { GALLON_US_M3, LBF_N, INCH_M } from "./constants";
+
+const math = create({
+  absDependencies,
+  acosDependencies,
+  addDependencies,
+  asinDependencies,
+  atan2Dependencies,
+  atanDependencies,
+  cbrtDependencies,
+  compileDependencies,
+  cosDependencies,
+  createUnitDependencies,
+  divideDependencies,
+  eDependencies,
+  expDependencies,
+  hypotDependencies,
+  log10Dependencies,
+  logDependencies,
+  maxDependencies,
+  minDependencies,
+  multiplyDependencies,
+  parseDependencies,
+  piDependencies,
+  powDependencies,
+  roundDependencies,
+  sinDependencies,
+  sqrtDependencies,
+  subtractDependencies,
+  tanDependencies,
+  toDependencies,
+  unaryMinusDependencies,
+  unaryPlusDependencies,
+  unitDependencies,
+});
+
+// Exact definitions (NIST SP 811): psi as lbf/in², US gallon 3.785411784 L.
+math.createUnit("psi", { definition: `${LBF_N / (INCH_M * INCH_M)} Pa` }, { override: true });
+math.createUnit("ksi", { definition: `${(1000 * LBF_N) / (INCH_M * INCH_M)} Pa` });
+math.createUnit("gpm", { definition: `${GALLON_US_M3 / 60} m^3/s` });
+math.createUnit("lpm", { definition: `${0.001 / 60} m^3/s` });
+
+// Inverse trigonometry returns an angle with its unit, so `atan(0.5)` in an angle field is 26.57°, not 0.4636°.
+const asAngle = (x: number) => math.unit(x, "rad");
+const plain = (v: unknown): number => {
+  if (typeof v === "number") return v;
+  if (isUnit(v) && v.equalBase(math.unit(1, "m") as Unit)) return v.toNumber("m");
+  if (isUnit(v)) return unitlessValue(v);
+  throw new Error("expects a number");
+};
+math.import(
+  {
+    asin: (x: unknown) => asAngle(Math.asin(plain(x))),
+    acos: (x: unknown) => asAngle(Math.acos(plain(x))),
+    atan: (x: unknown) => asAngle(Math.atan(plain(x))),
+    atan2: (y: unknown, x: unknown) => {
+      if (isUnit(y) && isUnit(x)) {
+        if (!y.equalBase(x)) throw new Error("atan2 needs both arguments in the same dimension");
+        return asAngle(Math.atan2(y.toSI().toNumeric() as number, x.toSI().toNumeric() as number));
+      }
+      return asAngle(Math.atan2(plain(y), plain(x)));
+    },
+  },
+  { override: true },
+);
+
+/** The only unit names an expression may use; everything else is a parameter or an error. */
+export const UNIT_NAMES: ReadonlySet<string> = new Set([
+  // length
+  "m", "mm", "cm", "km", "in", "inch", "ft", "foot", "feet", "yd",
+  // mass
+  "kg", "g", "tonne", "lbm", "lb",
+  // time
+  "s", "ms", "hr", "hour",
+  // force
+  "N", "kN", "MN", "lbf", "kip", "kgf",
+  // pressure
+  "Pa", "kPa", "MPa", "GPa", "bar", "mbar", "psi", "ksi", "atm",
+  // angle
+  "deg", "degree", "degrees", "rad",
+  // volume and flow
+  "litre", "liter", "gal", "gpm", "lpm",
+]);
+
+/** Functions and constants an expression may call. */
+export const FUNCTION_NAMES: ReadonlySet<string> = new Set([
+  "sqrt", "cbrt", "abs", "min", "max", "hypot", "exp", "log", "log10", "round",
+  "sin", "cos", "tan", "asin", "acos", "atan", "atan2", "to",
+]);
+export const CONSTANT_NAMES: ReadonlySet<string> = new Set(["pi", "e"]);
+const TRIG = new Set(["sin", "cos", "tan"]);
+
+/** What a numeric field holds, and its SI unit (angles in degrees). */
+export const FIELD_UNITS = {
+  length: "m",
+  angle: "deg",
+  mass: "kg",
+  force: "N",
+  moment: "N m",
+  lineLoad: "N/m",
+  massFlow: "kg/s",
+  velocity: "m/s",
+  pressure: "Pa",
+  area: "m^2",
+  density: "kg/m^3",
+  volumeFlow: "m^3/s",
+  stiffness: "N/m",
+  rotationalStiffness: "N m/rad",
+  acceleration: "m/s^2",
+  ratio: "",
+} as const;
+export type FieldKind = keyof typeof FIELD_UNITS;
+
+const KIND_WORDS: Record<FieldKind, string> = {
+  length: "a length (m)",
+  angle: "an angle (deg)",
+  mass: "a mass (kg)",
+  force: "a force (N)",
+  moment: "a moment (N·m)",
+  lineLoad: "a load per length (N/m)",
+  massFlow: "a mass flow (kg/s)",
+  velocity: "a velocity (m/s)",
+  pressure: "a pressure (Pa)",
+  area: "an area (m²)",
+  density: "a density (kg/m³)",
+  volumeFlow: "a volume flow (m³/s)",
+  stiffness: "a stiffness (N/m)",
+  rotationalStiffness: "a rotational stiffness (N·m/rad)",
+  acceleration: "an acceleration (m/s²)",
+  ratio: "a plain number",
+};
+
+const targetUnits = new Map<FieldKind, Unit>();
+for (const [k, u] of Object.entries(FIELD_UNITS) as [FieldKind, string][]) {
+  if (u) targetUnits.set(k, math.unit(1, u) as Unit);
+}
+// A moment given as "N m" where a rotational stiffness is wanted is read per radian.
+const momentUnit = math.unit(1, "N m") as Unit;
+
+export type MathValue = number | Unit;
+
+export function isUnit(v: unknown): v is Unit {
+  return typeof v === "object" && v !== null && (v as { type?: string }).type === "Unit";
+}
+
+function unitlessValue(u: Unit): number {
+  // A dimensionless unit (m/m) still carries a value.
+  const dims = (u as unknown as { dimensions: number[] }).dimensions;
+  if (dims.every((d) => d === 0)) return u.toSI().toNumeric() as number;
+  throw new Error("has units where a plain number is needed");
+}
+
+/** Text users type that mathjs does not read: 30°, N·m, m², L/min, the minus sign. */
+export function normaliseExpressionText(text: string): string {
+  return text
+    .replace(/°/g, " deg")
+    .replace(/[·×]/g, "*")
+    .replace(/²/g, "^2")
+    .replace(/³/g, "^3")
+    .replace(/−/g, "-")
+    .replace(/\b[Ll]\s*\/\s*min\b/g, "lpm")
+    .trim();
+}
+
+export interface CompiledExpression {
+  text: string;
+  /** parameter names the expression reads directly */
+  deps: string[];
+  evaluate: (scope: Map<string, MathValue>) => MathValue;
+  /** `sin(30)`-style calls whose argument may be a unitless number, checked after evaluation */
+  trigArgs: Array<{ call: string; evaluate: (scope: Map<string, MathValue>) => MathValue }>;
+}
+
+export class ExpressionError extends Error {}
+
+/**
+ * Parse and check an expression once. Unknown names are errors found in the parse tree;
+ * `parameterNames` are the names that may be read.
+ */
+export function compileExpression(text: string, parameterNames: ReadonlySet<string>): CompiledExpression {
+  let node: MathNode;
+  const source = normaliseExpressionText(text);
+  try {
+    node = math.parse(source);
+  } catch (err) {
+    throw new ExpressionError(`cannot read "${text}": ${(err as Error).message}`);
+  }
+  const deps = new Set<string>();
+  const problems: string[] = [];
+  const trigArgs: CompiledExpression["trigArgs"] = [];
+  node.traverse((n, _path, parent) => {
+    if (n.type === "FunctionNode") {
+      const fn = (n as unknown as { fn: { name?: string }; args: MathNode[] }).fn;
+      const name = fn?.name ?? "";
+      if (!FUNCTION_NAMES.has(name)) problems.push(`unknown function "${name}"`);
+      else if (TRIG.has(name)) {
+        const arg = (n as unknown as { args: MathNode[] }).args[0];
+        if (arg) {
+          const code = arg.compile();
+          trigArgs.push({ call: `${name}(${arg.toString()})`, evaluate: (scope) => code.evaluate(scope) });
+        }
+      }
+      return;
+    }
+    if (n.type !== "SymbolNode") return;
+    // The function name of a call is a SymbolNode too; it was checked above.
+    if (parent && parent.type === "FunctionNode" && (parent as unknown as { fn: MathNode }).fn === n) return;
+    const name = (n as unknown as { name: string }).name;
+    if (parameterNames.has(name)) deps.add(name);
+    else if (UNIT_NAMES.has(name) || CONSTANT_NAMES.has(name)) return;
+    else problems.push(unknownNameMessage(name));
+  });
+  if (problems.length) throw new ExpressionError(problems.join("; "));
+  const code = node.compile();
+  return {
+    text,
+    deps: [...deps],
+    evaluate: (scope) => code.evaluate(scope) as MathValue,
+    trigArgs,
+  };
+}
+
+function unknownNameMessage(name: string): string {
+  const known = math.Unit.isValuelessUnit(name);
+  return known
+    ? `unknown name "${name}": it is not a parameter, and Counterpoise does not read "${name}" as a unit (define a parameter ${name}, or write the unit out)`
+    : `unknown name "${name}": define it as a parameter or use a unit such as m, kN, psi, deg`;
+}
+
+/** Why a name cannot be a parameter, or null when it can. */
+export function reservedNameReason(name: string): string | null {
+  if (UNIT_NAMES.has(name))
+    return `"${name}" is a unit here, so "2 ${name}" would be ambiguous; name the parameter something else (e.g. ${name}_1)`;
+  if (FUNCTION_NAMES.has(name) || CONSTANT_NAMES.has(name))
+    return `"${name}" is a built-in function or constant; name the parameter something else`;
+  return null;
+}
+
+/** Convert an evaluated value to the SI number of a field kind, or explain why not. */
+export function toFieldNumber(value: MathValue, kind: FieldKind): number {
+  let out: number;
+  if (typeof value === "number") out = value;
+  else if (isUnit(value)) {
+    if (kind === "ratio") out = unitlessValue(value);
+    else if (kind === "rotationalStiffness" && value.equalBase(momentUnit)) out = value.toNumber("N m");
+    else {
+      const target = targetUnits.get(kind)!;
+      if (!value.equalBase(target)) {
+        throw new ExpressionError(`${value.format({ precision: 6 })} is ${describeDimension(value)}, but this field needs ${KIND_WORDS[kind]}`);
+      }
+      out = value.toNumber(FIELD_UNITS[kind]);
+    }
+  } else if (typeof value === "boolean") {
+    throw new ExpressionError("gives true/false, not a number");
+  } else {
+    throw new ExpressionError("does not give a single number");
+  }
+  if (!Number.isFinite(out)) throw new ExpressionError("does not give a finite number");
+  return out;
+}
+
+function describeDimension(u: Unit): string {
+  for (const [k, t] of targetUnits) if (u.equalBase(t)) return KIND_WORDS[k];
+  return "in other units";
+}
+
+/** The value of a parameter as written by the user: its number in its own units. */
+export function describeValue(value: MathValue): { value: number; unit: string; si: number } {
+  if (typeof value === "number") return { value, unit: "", si: value };
+  const unit = value.formatUnits();
+  const si = value.toSI();
+  return { value: value.toNumeric(unit) as number, unit, si: si.toNumeric() as number };
+}
+
+/** Does a trigonometric call receive a unitless non-zero number (probably meant as degrees)? */
+export function unitlessTrigWarning(expr: CompiledExpression, scope: Map<string, MathValue>): string | null {
+  for (const t of expr.trigArgs) {
+    let v: MathValue;
+    try {
+      v = t.evaluate(scope);
+    } catch {
+      continue;
+    }
+    if (typeof v === "number" && v !== 0) {
+      return `${t.call} reads ${v} as radians: did you mean ${v} deg?`;
+    }
+  }
+  return null;
+}
+
+/** Build a value in a given unit (for sweeps that set a parameter). */
+export function makeValue(value: number, unit: string): MathValue {
+  return unit ? (math.unit(value, unit) as Unit) : value;
+}
+
+/** Evaluate a standalone expression to an SI number of a field kind (no parameters). */
+export function evaluateToNumber(text: string, kind: FieldKind, scope = new Map<string, MathValue>()): number {
+  const expr = compileExpression(text, new Set(scope.keys()));
+  return toFieldNumber(expr.evaluate(scope), kind);
+}
+
+export { math as mathForTests };

@@ -1,0 +1,67 @@
+// Plane geometry on plain [x, y] pairs.
+import type { Vec2 } from "./types";
+
+export const DEG = Math.PI / 180;
+
+/** Unit vector at an angle in degrees, counter-clockwise from +x. */
+export function direction(angleDeg: number): Vec2 {
+  const a = angleDeg * DEG;
+  // exact zeros at the quarter turns keep reactions clean (cos 90° is not 6e-17)
+  const r = ((angleDeg % 360) + 360) % 360;
+  if (r === 0) return [1, 0];
+  if (r === 90) return [0, 1];
+  if (r === 180) return [-1, 0];
+  if (r === 270) return [0, -1];
+  return [Math.cos(a), Math.sin(a)];
+}
+
+/** Signed area (counter-clockwise positive), shoelace formula. */
+export function polygonArea(pts: Vec2[]): number {
+  let a = 0;
+  for (let i = 0, n = pts.length; i < n; i++) {
+    const [x1, y1] = pts[i];
+    const [x2, y2] = pts[(i + 1) % n];
+    a += x1 * y2 - x2 * y1;
+  }
+  return a / 2;
+}
+
+/** Area centroid of a simple polygon. */
+export function polygonCentroid(pts: Vec2[]): Vec2 {
+  let a = 0;
+  let cx = 0;
+  let cy = 0;
+  // Shift to the first corner to keep the sums well conditioned far from the origin.
+  const [ox, oy] = pts[0];
+  for (let i = 0, n = pts.length; i < n; i++) {
+    const x1 = pts[i][0] - ox;
+    const y1 = pts[i][1] - oy;
+    const x2 = pts[(i + 1) % n][0] - ox;
+    const y2 = pts[(i + 1) % n][1] - oy;
+    const c = x1 * y2 - x2 * y1;
+    a += c;
+    cx += (x1 + x2) * c;
+    cy += (y1 + y2) * c;
+  }
+  if (Math.abs(a) < 1e-300) return [ox, oy];
+  return [cx / (3 * a) + ox, cy / (3 * a) + oy];
+}
+
+export function boundingBox(pts: Vec2[]): { minX: number; minY: number; maxX: number; maxY: number } {
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (const [x, y] of pts) {
+    if (x < minX) minX = x;
+    if (y < minY) minY = y;
+    if (x > maxX) maxX = x;
+    if (y > maxY) maxY = y;
+  }
+  return { minX, minY, maxX, maxY };
+}
+
+/** Moment about the origin of a force (fx, fy) acting at (x, y): x·Fy − y·Fx. */
+export function momentOf(x: number, y: number, fx: number, fy: number): number {
+  return x * fy - y * fx;
+}

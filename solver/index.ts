@@ -1,0 +1,26 @@
+// The public surface of the solver. Pure TypeScript: no React, Konva, Next or database.
+import { parseSketch } from "./parse";
+import { solve } from "./solve";
+import type { SolveFailure, SolveResult } from "./types";
+
+export { parseSketch, planOf, zodErrors, type ParseResult } from "./parse";
+export { solve } from "./solve";
+export { solveSweep, createSweeper, linspace, type SweepResult, type SweepPoint } from "./sweep";
+export { findLimit, brent, type LimitResult, type LimitOptions } from "./limit";
+export { readQuantity, describeQuantity, type QuantitySpec, type QuantityComponent } from "./quantity";
+export { handCheckSums, termMomentAbout, type HandCheckSums } from "./equations";
+export { formatQuantity, formatNumber, convert, unitsFor, type UnitSystem, type Quantity } from "./units";
+export { sketchSchema, CURRENT_VERSION, FORMAT, formatPath } from "./schema";
+export type { SketchFile, SketchFileInput, SupportKind, LoadKind } from "./schema";
+export { migrateSketch, MIGRATIONS } from "./migrations";
+export { CAUTIONS, CAUTION_SHORT, ASSUMPTIONS } from "./cautions";
+export * from "./types";
+
+/** Parse and solve in one step: the contract's output of `npm run solve`. */
+export function solveFile(input: unknown): SolveResult | SolveFailure {
+  const parsed = parseSketch(input);
+  if (!parsed.ok) return { ok: false, errors: parsed.errors };
+  const result = solve(parsed.sketch);
+  result.warnings.unshift(...parsed.warnings);
+  return result;
+}

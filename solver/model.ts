@@ -1,0 +1,230 @@
+// One body as the solver sees it: the known generalized load Q (every force on the control
+// volume except the reactions, with the momentum flux moved to the force side) and the supports
+// as stiff springs. Generalized coordinates are scaled by the body size L so that forces and
+// moments compare: Q = (Fx, Fy, M/L) about a reference point O near the body, q = (ux, uy, L·θ).
+import { boundingBox, direction, momentOf, polygonCentroid } from "./geometry";
+import type { PortFlow } from "./ports";
+import type { Body, EquationTerm, Sketch, Support, Vec2 } from "./types";
+
+/** Stiffness shared by supports when none is given (N/m). Only ratios matter. */
+export const DEFAULT_STIFFNESS = 1e9;
+
+export interface Spring {
+  /** index into model.supports */
+  support: number;
+  role: "x" | "y" | "n" | "t" | "rot";
+  /** generalized direction (scaled) */
+  g: Float64Array;
+  /** N/m, or N·m/rad for the rotational spring */
+  k: number;
+  /** contact or tie group this spring belongs to, or -1 when always engaged */
+  group: number;
+}
+
+export interface Group {
+  support: number;
+  normal: number;
+  tangent: number;
+  kind: "contact" | "tie";
+}
+
+export interface BodyModel {
+  body: Body;
+  cg: Vec2;
+  /** reference point for moments */
+  origin: Vec2;
+  /** length scale (m) */
+  L: number;
+  supports: Support[];
+  springs: Spring[];
+  groups: Group[];
+  /** known generalized load, scaled */
+  Q: [number, number, number];
+  /** force scale for tolerances (N) */
+  scale: number;
+  /** with motion.freeX: the solved ax (m/s²) */
+  ax: number;
+  ay: number;
+  freeX: boolean;
+  forceTerms: EquationTerm[];
+  momentumTerms: EquationTerm[];
+  /** Σ_out ṁV − Σ_in ṁV, moment about the world origin */
+  momentum: { fx: number; fy: number; m: number };
+}
+
+function supportStiffnesses(supports: Support[]): number[] {
+  const given = supports.map((s) => s.stiffness).filter((k): k is number => k !== undefined);
+  const mean = given.length ? given.reduce((a, b) => a + b, 0) / given.length : DEFAULT_STIFFNESS;
+  return supports.map((s) => s.stiffness ?? mean);
+}
+
+export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, PortFlow>): BodyModel {
+  const bb = boundingBox(body.outline);
+  const L = Math.hypot(bb.maxX - bb.minX, bb.maxY - bb.minY) || 1;
+  const origin: Vec2 = [(bb.minX + bb.maxX) / 2, (bb.minY + bb.maxY) / 2];
+  const [ox, oy] = origin;
+  const cg = body.cg ?? polygonCentroid(body.outline);
+  const supports = sketch.supports.filter((s) => s.body === body.id);
+  const springs: Spring[] = [];
+  const groups: Group[] = [];
+  const ks = supportStiffnesses(supports);
+
+  const forceSpring = (si: number, role: Spring["role"], e: Vec2, at: Vec2, k: number, group: number) => {
+    const g = new Float64Array([e[0], e[1], momentOf(at[0] - ox, at[1] - oy, e[0], e[1]) / L]);
+    springs.push({ support: si, role, g, k, group });
+    return springs.length - 1;
+  };
+
+  supports.forEach((s, si) => {
+    const k = ks[si];
+    switch (s.kind) {
+      case "pin":
+        forceSpring(si, "x", [1, 0], s.at, k, -1);
+        forceSpring(si, "y", [0, 1], s.at, k, -1);
+        break;
+      case "fixed": {
+        forceSpring(si, "x", [1, 0], s.at, k, -1);
+        forceSpring(si, "y", [0, 1], s.at, k, -1);
+        const kr = s.rotationalStiffness ?? k * L * L;
+        springs.push({ support: si, role: "rot", g: new Float64Array([0, 0, 1 / L]), k: kr, group: -1 });
+        break;
+      }
+      case "roller":
+        forceSpring(si, "n", direction(s.angle), s.at, k, -1);
+        break;
+      case "contact":
+      case "tie": {
+        const gi = groups.length;
+        const normal = forceSpring(si, "n", direction(s.angle), s.at, k, gi);
+        const tangent = s.kind === "contact" && s.mu !== undefined ? forceSpring(si, "t", direction(s.angle + 90), s.at, k, gi) : -1;
+        groups.push({ support: si, normal, tangent, kind: s.kind });
+        break;
+      }
+    }
+  });
+
+  // ---- known loads, as equation terms with their points of action
+  const forceTerms: EquationTerm[] = [];
+  const momentumTerms: EquationTerm[] = [];
+  const name = body.label || body.id;
+  const g = sketch.gravity;
+  const m = body.mass;
+  const motion = sketch.motion ?? {};
+  const freeX = motion.freeX === true;
+
+  if (m * g !== 0) forceTerms.push({ id: body.id, body: body.id, kind: "weight", label: `weight of ${name}`, fx: 0, fy: -m * g, m: 0, at: cg });
+
+  for (const l of sketch.loads) {
+    if (l.body !== body.id) continue;
+    const lname = l.label || l.id;
+    if (l.kind === "force") {
+      let fx: number;
+      let fy: number;
+      if (l.magnitude !== undefined) {
+        const e = direction(l.angle ?? 0);
+        fx = l.magnitude * e[0];
+        fy = l.magnitude * e[1];
+      } else {
+        fx = l.fx ?? 0;
+        fy = l.fy ?? 0;
+      }
+      forceTerms.push({ id: l.id, body: body.id, kind: "force", label: `force ${lname}`, fx, fy, m: 0, at: l.at });
+    } else if (l.kind === "couple") {
+      forceTerms.push({ id: l.id, body: body.id, kind: "couple", label: `couple ${lname}`, fx: 0, fy: 0, m: l.value, at: l.at });
+    } else {
+      // A linear load = two triangles: w1·ℓ/2 at ℓ/3 from `from`, w2·ℓ/2 at ℓ/3 from `to`.
+      const len = Math.hypot(l.to[0] - l.from[0], l.to[1] - l.from[1]);
+      const e = direction(l.angle ?? -90);
+      const p1: Vec2 = [l.from[0] + (l.to[0] - l.from[0]) / 3, l.from[1] + (l.to[1] - l.from[1]) / 3];
+      const p2: Vec2 = [l.from[0] + (2 * (l.to[0] - l.from[0])) / 3, l.from[1] + (2 * (l.to[1] - l.from[1])) / 3];
+      const total = ((l.w1 + l.w2) * len) / 2;
+      if (Math.abs(l.w1 + l.w2) > 1e-12 * (Math.abs(l.w1) + Math.abs(l.w2))) {
+        // one resultant at the trapezoid's centroid
+        const s = (l.w1 + 2 * l.w2) / (3 * (l.w1 + l.w2));
+        const at: Vec2 = [l.from[0] + s * (l.to[0] - l.from[0]), l.from[1] + s * (l.to[1] - l.from[1])];
+        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (resultant)`, fx: total * e[0], fy: total * e[1], m: 0, at });
+      } else {
+        const a = (l.w1 * len) / 2;
+        const b = (l.w2 * len) / 2;
+        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (part at ⅓)`, fx: a * e[0], fy: a * e[1], m: 0, at: p1 });
+        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (part at ⅔)`, fx: b * e[0], fy: b * e[1], m: 0, at: p2 });
+      }
+    }
+  }
+
+  let mfx = 0;
+  let mfy = 0;
+  let mm = 0;
+  for (const p of sketch.ports) {
+    if (p.body !== body.id) continue;
+    const pname = p.label || p.id;
+    const e = direction(p.angle);
+    const pressure = p.pressure ?? 0;
+    if (pressure !== 0) {
+      // pushes inward at both: along the flow at an inlet, against it at an outlet
+      const f = pressure * (p.area ?? 0) * (p.kind === "inlet" ? 1 : -1);
+      forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: `pressure at ${pname}`, fx: f * e[0], fy: f * e[1], m: 0, at: p.at });
+    }
+    const flow = flows.get(p.id)!;
+    const mv = flow.massFlow * flow.velocity * (p.kind === "outlet" ? 1 : -1);
+    if (mv !== 0) {
+      const fx = mv * e[0];
+      const fy = mv * e[1];
+      momentumTerms.push({
+        id: p.id,
+        body: body.id,
+        kind: "momentum",
+        label: p.kind === "outlet" ? `momentum out at ${pname}` : `momentum in at ${pname}`,
+        fx,
+        fy,
+        m: 0,
+        at: p.at,
+      });
+      mfx += fx;
+      mfy += fy;
+      mm += momentOf(p.at[0], p.at[1], fx, fy);
+    }
+  }
+
+  // ---- the scaled generalized load Q = Σ forces − Σ momentum flux, about `origin`
+  const Q: [number, number, number] = [0, 0, 0];
+  let scale = 0;
+  const addTerm = (t: EquationTerm, sign: number) => {
+    Q[0] += sign * t.fx;
+    Q[1] += sign * t.fy;
+    const arm = t.at ? momentOf(t.at[0] - ox, t.at[1] - oy, t.fx, t.fy) : 0;
+    Q[2] += (sign * (arm + t.m)) / L;
+    scale += Math.abs(t.fx) + Math.abs(t.fy) + Math.abs(t.m) / L;
+  };
+  forceTerms.forEach((t) => addTerm(t, 1));
+  momentumTerms.forEach((t) => addTerm(t, -1));
+
+  // ---- motion: prescribed acceleration, or ax found from the x equation (supports cannot push in x)
+  let ax = motion.ax ?? 0;
+  const ay = motion.ay ?? 0;
+  if (freeX) ax = m > 0 ? Q[0] / m : 0;
+  if (m !== 0 && (ax !== 0 || ay !== 0)) {
+    const t: EquationTerm = { id: body.id, body: body.id, kind: "inertia", label: `inertia of ${name} (−m·a)`, fx: -m * ax, fy: -m * ay, m: 0, at: cg };
+    forceTerms.push(t);
+    addTerm(t, 1);
+    if (freeX) Q[0] = 0; // exactly balanced by construction
+  }
+
+  return {
+    body,
+    cg,
+    origin,
+    L,
+    supports,
+    springs,
+    groups,
+    Q,
+    scale: scale || 1,
+    ax,
+    ay,
+    freeX,
+    forceTerms,
+    momentumTerms,
+    momentum: { fx: mfx, fy: mfy, m: mm },
+  };
+}

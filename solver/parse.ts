@@ -1,0 +1,83 @@
+// parseSketch: JSON text or value → the validated sketch with every expression evaluated, or
+// errors that name the field. Stages: read JSON, migrate to the current version, check the
+// structure (zod), evaluate expressions (mathjs, once), check references and value ranges.
+import type { z } from "zod";
+import { migrateSketch } from "./migrations";
+import { resolveSketch, type EvaluationPlan, type FieldValue, type ResolveOutput } from "./resolve";
+import { formatPath, sketchSchema, type SketchFile } from "./schema";
+import type { FieldError, Sketch, SolveWarning } from "./types";
+import { validateReferences, validateValues } from "./validate";
+
+export type ParseResult =
+  | {
+      ok: true;
+      sketch: Sketch;
+      /** the file as validated (expressions kept), at the current version */
+      file: SketchFile;
+      warnings: SolveWarning[];
+      fields: Record<string, FieldValue>;
+      parameterValues: ResolveOutput["parameterValues"];
+      /** format versions migrated through, e.g. [1] for a version-1 file read as version 2 */
+      migratedFrom: number[];
+    }
+  | {
+      ok: false;
+      errors: FieldError[];
+      warnings: SolveWarning[];
+      fields: Record<string, FieldValue>;
+      parameterValues: ResolveOutput["parameterValues"];
+    };
+
+const plans = new WeakMap<Sketch, EvaluationPlan>();
+
+/** The compiled expressions behind a parsed sketch (for sweeps). */
+export function planOf(sketch: Sketch): EvaluationPlan | undefined {
+  return plans.get(sketch);
+}
+
+export function zodErrors(error: z.ZodError): FieldError[] {
+  const out: FieldError[] = [];
+  for (const issue of error.issues) {
+    if (issue.code === "unrecognized_keys") {
+      for (const key of issue.keys) out.push({ path: formatPath([...issue.path, key]), message: "is not a field here (check the spelling)" });
+      continue;
+    }
+    out.push({ path: formatPath(issue.path), message: issue.message });
+  }
+  return out;
+}
+
+function dedupe(errors: FieldError[]): FieldError[] {
+  const seen = new Set<string>();
+  return errors.filter((e) => {
+    const k = `${e.path}\u0000${e.message}`;
+    if (seen.has(k)) return false;
+    seen.add(k);
+    return true;
+  });
+}
+
+export function parseSketch(input: unknown): ParseResult {
+  const empty = { warnings: [], fields: {}, parameterValues: {} };
+  let json = input;
+  if (typeof input === "string") {
+    try {
+      json = JSON.parse(input);
+    } catch (err) {
+      return { ok: false, errors: [{ path: "", message: `not valid JSON: ${(err as Error).message}` }], ...empty };
+    }
+  }
+  const migrated = migrateSketch(json);
+  if (!migrated.ok) return { ok: false, errors: migrated.errors, ...empty };
+  const parsed = sketchSchema.safeParse(migrated.doc);
+  if (!parsed.success) return { ok: false, errors: dedupe(zodErrors(parsed.error)), ...empty };
+
+  const resolved = resolveSketch(parsed.data);
+  const errors = [...resolved.errors];
+  errors.push(...validateReferences(resolved.sketch));
+  if (resolved.errors.length === 0) errors.push(...validateValues(resolved.sketch));
+  const { warnings, fields, parameterValues } = resolved;
+  if (errors.length) return { ok: false, errors: dedupe(errors), warnings, fields, parameterValues };
+  plans.set(resolved.sketch, resolved.plan);
+  return { ok: true, sketch: resolved.sketch, file: parsed.data, warnings, fields, parameterValues, migratedFrom: migrated.applied };
+}

@@ -1,0 +1,62 @@
+// A scalar read from a solve result, for sweeps and the limit finder.
+import type { SolveResult } from "./types";
+
+export type QuantityComponent =
+  | "fx"
+  | "fy"
+  | "m"
+  | "n"
+  | "t"
+  | "resultant"
+  | "margin"
+  | "frictionRatio"
+  | "frictionMargin";
+
+export interface QuantitySpec {
+  /** a support id */
+  support: string;
+  component: QuantityComponent;
+}
+
+/** The value of a quantity, or NaN when the result does not have it. */
+export function readQuantity(result: SolveResult, q: QuantitySpec): number {
+  const r = result.reactions[q.support];
+  if (!r) return Number.NaN;
+  switch (q.component) {
+    case "fx":
+    case "fy":
+    case "m":
+      return r[q.component];
+    case "n":
+    case "t":
+      return r[q.component] ?? Number.NaN;
+    case "resultant":
+      return Math.hypot(r.fx, r.fy);
+    case "margin":
+      return r.margin ?? Number.NaN;
+    case "frictionRatio":
+      // |t| / n, and for a lifted contact the ratio it would need is unbounded
+      return r.friction ? r.friction.needed : Number.NaN;
+    case "frictionMargin": {
+      // μ·n − |t|: positive while friction holds, crossing zero where it is used up
+      if (r.kind !== "contact" || r.t === undefined || r.n === undefined) return Number.NaN;
+      const mu = r.friction?.mu ?? 0;
+      return mu * Math.max(r.n, 0) - Math.abs(r.t);
+    }
+  }
+}
+
+export function describeQuantity(q: QuantitySpec): string {
+  const words: Record<QuantityComponent, string> = {
+    fx: "x-reaction",
+    fy: "y-reaction",
+    m: "moment",
+    n: "normal force",
+    t: "tangential force",
+    resultant: "resultant",
+    margin: "margin",
+    frictionRatio: "friction needed",
+    frictionMargin: "friction margin (μ·n − |t|)",
+  };
+  return `${words[q.component]} at ${q.support}`;
+}

@@ -1,0 +1,180 @@
+// Evaluate every numeric field of a validated sketch file once, to plain SI numbers.
+// The plan it keeps (compiled expressions and where each value goes) lets a sweep
+// re-evaluate only the fields that depend on the swept parameter.
+import {
+  compileExpression,
+  describeValue,
+  toFieldNumber,
+  unitlessTrigWarning,
+  type CompiledExpression,
+  type FieldKind,
+  type MathValue,
+} from "./expressions";
+import { resolveParameters, type ParameterPlan } from "./parameters";
+import type { SketchFile } from "./schema";
+import type { FieldError, Sketch, SolveWarning } from "./types";
+import { G0 } from "./constants";
+
+/** Where an evaluated expression is written, and how to evaluate it again. */
+export interface FieldSlot {
+  path: string;
+  kind: FieldKind;
+  expr: CompiledExpression;
+  target: Record<string | number, unknown>;
+  key: string | number;
+}
+
+export interface EvaluationPlan {
+  parameters: ParameterPlan[];
+  scope: Map<string, MathValue>;
+  /** unit each parameter was written in (for sweeps given in that unit) */
+  parameterUnits: Record<string, string>;
+  slots: FieldSlot[];
+}
+
+export type FieldValue = { value: number } | { error: string };
+
+export interface ResolveOutput {
+  sketch: Sketch;
+  plan: EvaluationPlan;
+  errors: FieldError[];
+  warnings: SolveWarning[];
+  /** every numeric field by path: its SI value (degrees for angles) or its error */
+  fields: Record<string, FieldValue>;
+  /** every parameter: its value in the unit it was written in, and in SI */
+  parameterValues: Record<string, { value: number; unit: string; si: number } | { error: string }>;
+}
+
+/** The kind of each numeric field, by element and field name. */
+const FIELD_KINDS: Record<string, Record<string, FieldKind>> = {
+  body: { mass: "mass" },
+  support: { angle: "angle", mu: "ratio", stiffness: "stiffness", rotationalStiffness: "rotationalStiffness" },
+  load: { magnitude: "force", angle: "angle", fx: "force", fy: "force", value: "moment", w1: "lineLoad", w2: "lineLoad" },
+  port: {
+    angle: "angle",
+    massFlow: "massFlow",
+    velocity: "velocity",
+    pressure: "pressure",
+    area: "area",
+    density: "density",
+    volumeFlow: "volumeFlow",
+  },
+  massSource: { massFlow: "massFlow" },
+  motion: { ax: "acceleration", ay: "acceleration" },
+};
+const POINT_FIELDS = new Set(["at", "from", "to", "cg"]);
+
+export function resolveSketch(file: SketchFile): ResolveOutput {
+  const params = resolveParameters(file.parameters);
+  const errors: FieldError[] = [...params.errors];
+  const warnings: SolveWarning[] = [];
+  const fields: Record<string, FieldValue> = {};
+  const slots: FieldSlot[] = [];
+  const names = new Set(Object.keys(file.parameters ?? {}));
+  const scope = params.scope;
+  const trigWarned = new Set<string>();
+
+  const parameterValues: ResolveOutput["parameterValues"] = {};
+  const parameterUnits: Record<string, string> = {};
+  for (const name of Object.keys(file.parameters ?? {})) {
+    const v = scope.get(name);
+    const err = params.errors.find((e) => e.path === `parameters.${name}`);
+    if (v === undefined) parameterValues[name] = { error: err?.message ?? "could not be evaluated (a parameter it reads failed)" };
+    else {
+      const d = describeValue(v);
+      parameterValues[name] = d;
+      parameterUnits[name] = d.unit;
+    }
+  }
+  for (const p of params.order) {
+    const w = p.expr && scope.has(p.name) ? unitlessTrigWarning(p.expr, scope) : null;
+    if (w) warnings.push({ code: "TRIG_UNITLESS", message: `parameters.${p.name}: ${w}`, ids: [] });
+  }
+
+  /** Evaluate one field value in place; returns the number or undefined on error. */
+  const evalField = (raw: unknown, kind: FieldKind, path: string, target: Record<string | number, unknown>, key: string | number) => {
+    if (typeof raw === "number") {
+      if (!Number.isFinite(raw)) {
+        errors.push({ path, message: "must be a finite number" });
+        fields[path] = { error: "must be a finite number" };
+        return;
+      }
+      // A plain number in an angle field is degrees; everything else SI.
+      target[key] = raw;
+      fields[path] = { value: raw };
+      return;
+    }
+    if (typeof raw !== "string") return;
+    try {
+      const expr = compileExpression(raw, names);
+      const missing = expr.deps.filter((d) => !scope.has(d));
+      if (missing.length) throw new Error(`reads parameter ${missing.join(", ")}, which has an error`);
+      const value = toFieldNumber(expr.evaluate(scope), kind);
+      target[key] = value;
+      fields[path] = { value };
+      if (expr.deps.length) slots.push({ path, kind, expr, target, key });
+      const w = unitlessTrigWarning(expr, scope);
+      if (w && !trigWarned.has(path)) {
+        trigWarned.add(path);
+        warnings.push({ code: "TRIG_UNITLESS", message: `${path}: ${w}`, ids: [] });
+      }
+    } catch (err) {
+      const message = (err as Error).message;
+      errors.push({ path, message });
+      fields[path] = { error: message };
+      target[key] = Number.NaN;
+    }
+  };
+
+  const evalPoint = (raw: unknown, path: string): [number, number] => {
+    const pt: [number, number] = [Number.NaN, Number.NaN];
+    const arr = raw as unknown[];
+    evalField(arr[0], "length", `${path}[0]`, pt as unknown as Record<number, unknown>, 0);
+    evalField(arr[1], "length", `${path}[1]`, pt as unknown as Record<number, unknown>, 1);
+    return pt;
+  };
+
+  const evalElement = <T extends Record<string, unknown>>(el: T, group: string, path: string): Record<string, unknown> => {
+    const out: Record<string, unknown> = {};
+    const kinds = FIELD_KINDS[group] ?? {};
+    for (const [k, v] of Object.entries(el)) {
+      const p = `${path}.${k}`;
+      if (POINT_FIELDS.has(k)) out[k] = evalPoint(v, p);
+      else if (k === "outline") out[k] = (v as unknown[]).map((pt, i) => evalPoint(pt, `${p}[${i}]`));
+      else if (kinds[k]) evalField(v, kinds[k], p, out, k);
+      else out[k] = v;
+    }
+    return out;
+  };
+
+  const top: Record<string, unknown> = {};
+  evalField(file.gravity ?? G0, "acceleration", "gravity", top, "gravity");
+
+  const sketch: Sketch = {
+    format: file.format,
+    version: file.version,
+    title: file.title,
+    description: file.description,
+    gravity: top.gravity as number,
+    parameters: Object.fromEntries(
+      Object.entries(parameterValues).flatMap(([n, v]) => ("si" in v ? [[n, v.si]] : [])),
+    ),
+    bodies: file.bodies.map((b, i) => evalElement(b, "body", `bodies[${i}]`)) as unknown as Sketch["bodies"],
+    supports: file.supports.map((s, i) => evalElement(s, "support", `supports[${i}]`)) as unknown as Sketch["supports"],
+    loads: file.loads.map((l, i) => evalElement(l, "load", `loads[${i}]`)) as unknown as Sketch["loads"],
+    ports: file.ports.map((p, i) => evalElement(p, "port", `ports[${i}]`)) as unknown as Sketch["ports"],
+    massSources: file.massSources.map((m, i) => evalElement(m, "massSource", `massSources[${i}]`)) as unknown as Sketch["massSources"],
+  };
+  if (file.motion) sketch.motion = evalElement(file.motion, "motion", "motion") as Sketch["motion"];
+  // gravity is a top-level slot: re-point its target at the sketch itself
+  for (const s of slots) if (s.path === "gravity") s.target = sketch as unknown as Record<string, unknown>;
+
+  return {
+    sketch,
+    plan: { parameters: params.order, scope, parameterUnits, slots },
+    errors,
+    warnings,
+    fields,
+    parameterValues,
+  };
+}

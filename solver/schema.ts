@@ -1,0 +1,130 @@
+// The sketch file (format "counterpoise.sketch"): the one zod schema that the editor's store,
+// the API and the command line validate with. Numeric fields take a number (SI units) or a
+// string expression with units ("12 kN", "theta + 5 deg"); expressions are evaluated later
+// (solver/resolve.ts), so this schema checks structure only.
+import { z } from "zod";
+
+export const FORMAT = "counterpoise.sketch";
+/** The newest format version this solver writes. Older files are migrated (solver/migrations). */
+export const CURRENT_VERSION = 1;
+
+const numeric = z.union([z.number(), z.string().min(1, { error: "is empty: give a number or an expression" })], {
+  error: (iss) =>
+    iss.input === undefined ? "is required" : 'must be a number or an expression such as "12 kN" or "theta + 5 deg"',
+});
+export type Numeric = z.infer<typeof numeric>;
+
+const point = z.tuple([numeric, numeric], { error: "must be a point [x, y]" });
+const id = z.string({ error: "must be a text id" }).min(1, { error: "must not be empty" });
+const label = z.string().max(200, { error: "is longer than 200 characters" }).optional();
+
+const elementBase = { id, label, body: id };
+
+export const bodySchema = z.strictObject({
+  id,
+  label,
+  outline: z.array(point).min(3, { error: "needs at least 3 corners" }),
+  mass: numeric,
+  cg: point.optional(),
+});
+
+const stiffness = { stiffness: numeric.optional() };
+
+export const supportSchema = z.discriminatedUnion(
+  "kind",
+  [
+    z.strictObject({ ...elementBase, kind: z.literal("pin"), at: point, ...stiffness }),
+    z.strictObject({ ...elementBase, kind: z.literal("roller"), at: point, angle: numeric, ...stiffness }),
+    z.strictObject({ ...elementBase, kind: z.literal("contact"), at: point, angle: numeric, mu: numeric.optional(), ...stiffness }),
+    z.strictObject({ ...elementBase, kind: z.literal("fixed"), at: point, ...stiffness, rotationalStiffness: numeric.optional() }),
+    z.strictObject({ ...elementBase, kind: z.literal("tie"), at: point, angle: numeric, ...stiffness }),
+  ],
+  { error: "kind must be one of pin, roller, contact, fixed, tie" },
+);
+
+export const loadSchema = z.discriminatedUnion(
+  "kind",
+  [
+    z.strictObject({
+      ...elementBase,
+      kind: z.literal("force"),
+      at: point,
+      magnitude: numeric.optional(),
+      angle: numeric.optional(),
+      fx: numeric.optional(),
+      fy: numeric.optional(),
+    }),
+    z.strictObject({ ...elementBase, kind: z.literal("couple"), value: numeric, at: point.optional() }),
+    z.strictObject({
+      ...elementBase,
+      kind: z.literal("distributed"),
+      from: point,
+      to: point,
+      w1: numeric,
+      w2: numeric,
+      angle: numeric.optional(),
+    }),
+  ],
+  { error: "kind must be one of force, couple, distributed" },
+);
+
+export const portSchema = z.strictObject({
+  ...elementBase,
+  kind: z.enum(["inlet", "outlet"], { error: "kind must be inlet or outlet" }),
+  at: point,
+  angle: numeric,
+  massFlow: numeric.optional(),
+  velocity: numeric.optional(),
+  pressure: numeric.optional(),
+  area: numeric.optional(),
+  density: numeric.optional(),
+  volumeFlow: numeric.optional(),
+});
+
+export const massSourceSchema = z.strictObject({ ...elementBase, massFlow: numeric, at: point.optional() });
+
+export const motionSchema = z.strictObject({
+  ax: numeric.optional(),
+  ay: numeric.optional(),
+  freeX: z.boolean({ error: "must be true or false" }).optional(),
+});
+
+const parameterName = z
+  .string()
+  .regex(/^[A-Za-z_][A-Za-z0-9_]*$/, { error: "must start with a letter or _ and hold only letters, digits and _" });
+
+export const sketchSchema = z.strictObject({
+  format: z.literal(FORMAT, { error: `must be "${FORMAT}"` }),
+  version: z.literal(CURRENT_VERSION, { error: `must be ${CURRENT_VERSION}` }),
+  title: z.string().max(300).optional(),
+  description: z.string().max(5000).optional(),
+  gravity: numeric.optional(),
+  parameters: z.record(parameterName, numeric).optional(),
+  bodies: z.array(bodySchema).default([]),
+  supports: z.array(supportSchema).default([]),
+  loads: z.array(loadSchema).default([]),
+  ports: z.array(portSchema).default([]),
+  massSources: z.array(massSourceSchema).default([]),
+  motion: motionSchema.optional(),
+});
+
+/** A sketch file as written (numbers or expressions). */
+export type SketchFile = z.infer<typeof sketchSchema>;
+export type SketchFileInput = z.input<typeof sketchSchema>;
+export type BodyFile = z.infer<typeof bodySchema>;
+export type SupportFile = z.infer<typeof supportSchema>;
+export type LoadFile = z.infer<typeof loadSchema>;
+export type PortFile = z.infer<typeof portSchema>;
+export type MassSourceFile = z.infer<typeof massSourceSchema>;
+export type SupportKind = SupportFile["kind"];
+export type LoadKind = LoadFile["kind"];
+
+/** Format a zod path as the contract writes it: `ports[1].area`. */
+export function formatPath(path: ReadonlyArray<PropertyKey>): string {
+  let out = "";
+  for (const p of path) {
+    if (typeof p === "number") out += `[${p}]`;
+    else out += out ? `.${String(p)}` : String(p);
+  }
+  return out;
+}

@@ -1,0 +1,213 @@
+// The solve: for each body, the reactions from the linear momentum and moment-of-momentum
+// equations of its control volume, with one-sided contacts and ties, its status and warnings.
+// Input is the numeric sketch (no expressions); output is the contract's result object.
+import { solveBilateral, solveOneSided, type SpringSolution } from "./contact";
+import { determinacyOf } from "./determinacy";
+import { direction, momentOf } from "./geometry";
+import { dot3, norm3, type Vec3 } from "./linalg";
+import { buildBodyModel, type BodyModel } from "./model";
+import { massBalanceWarnings, portFlow, type PortFlow } from "./ports";
+import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResult, SolveWarning, Status, Vec2 } from "./types";
+import { describeSupport, fmtForce } from "./words";
+
+export function solve(sketch: Sketch): SolveResult {
+  const warnings: SolveWarning[] = [];
+  const flows = new Map<string, PortFlow>();
+  for (const p of sketch.ports) flows.set(p.id, portFlow(p, warnings));
+  warnings.push(...massBalanceWarnings(sketch, flows));
+
+  const result: SolveResult = { ok: true, bodies: {}, reactions: {}, warnings, equations: {} };
+  for (const body of sketch.bodies) {
+    const model = buildBodyModel(sketch, body, flows);
+    solveBody(model, result);
+  }
+  return result;
+}
+
+function solveBody(model: BodyModel, out: SolveResult): void {
+  const { body, groups, springs, scale, supports } = model;
+  const warnings = out.warnings;
+  const tol = 1e-9 * scale;
+  const determinacy = determinacyOf(model);
+
+  const bilateral = solveBilateral(model);
+  let status: Status;
+  let used: SpringSolution;
+  let freeMotion: FreeMotion | undefined;
+  /** groups shown as lifted/slack */
+  let released: boolean[];
+
+  if (norm3(bilateral.unbalanced) > tol) {
+    status = "unrestrained";
+    used = bilateral;
+    freeMotion = describeMotion(model, bilateral.unbalanced);
+    released = groups.map((g) => bilateral.r[g.normal] < -tol);
+  } else {
+    const one = solveOneSided(model);
+    if (one.ray) {
+      status = "tips";
+      used = bilateral;
+      freeMotion = describeMotion(model, one.ray);
+      released = groups.map((g) => bilateral.r[g.normal] < -tol);
+    } else {
+      used = one;
+      released = one.engaged.map((e) => !e);
+      status = released.some(Boolean) ? "lifts" : "holds";
+    }
+  }
+
+  // ---- reactions
+  const clean = (x: number) => (Math.abs(x) < 1e-11 * scale ? 0 : x);
+  const groupOf = new Map(groups.map((g, gi) => [g.support, gi]));
+  let largest = 0;
+  let sumN = 0;
+  let sumMuN = 0;
+  let tx = 0;
+  let ty = 0;
+  const resid: Vec3 = [...model.Q] as Vec3;
+  const reactionTerms: EquationTerm[] = [];
+  const supportForces = supports.map(() => ({ fx: 0, fy: 0, m: 0, n: 0, t: 0 }));
+  springs.forEach((s, i) => {
+    const r = used.r[i];
+    const f = supportForces[s.support];
+    resid[0] += s.g[0] * r;
+    resid[1] += s.g[1] * r;
+    resid[2] += s.g[2] * r;
+    if (s.role === "rot") f.m += r;
+    else {
+      f.fx += r * s.g[0];
+      f.fy += r * s.g[1];
+      if (s.role === "n") f.n = r;
+      if (s.role === "t") f.t = r;
+    }
+  });
+
+  supports.forEach((s, si) => {
+    const f = supportForces[si];
+    const gi = groupOf.get(si);
+    const isReleased = gi !== undefined && released[gi];
+    const reaction: Reaction = { body: body.id, kind: s.kind, fx: clean(f.fx), fy: clean(f.fy), m: clean(f.m), state: "active" };
+    if (s.kind === "roller" || s.kind === "contact" || s.kind === "tie") reaction.n = clean(f.n);
+    if (s.kind === "contact" && s.mu !== undefined) reaction.t = clean(f.t);
+    if (gi !== undefined) {
+      const g = groups[gi];
+      reaction.state = s.kind === "contact" ? (isReleased ? "lifted" : "bearing") : isReleased ? "slack" : "taut";
+      // continuous through lift-off: n while engaged, −k·gap once released (the same formula)
+      const sn = springs[g.normal];
+      reaction.margin = clean(status === "lifts" || status === "holds" ? -sn.k * dot3(sn.g, used.q) : f.n);
+      if (isReleased) {
+        warnings.push(
+          status === "tips" || status === "unrestrained"
+            ? {
+                code: s.kind === "contact" ? "LIFTOFF" : "SLACK",
+                message: `${describeSupport(s)} would have to ${s.kind === "contact" ? "pull" : "push"} ${fmtForce(Math.abs(f.n))} to hold ${body.label || body.id}`,
+                ids: [s.id],
+              }
+            : {
+                code: s.kind === "contact" ? "LIFTOFF" : "SLACK",
+                message: s.kind === "contact" ? `${describeSupport(s)} lifts off` : `${describeSupport(s)} goes slack`,
+                ids: [s.id],
+              },
+        );
+      }
+      if (s.kind === "contact" && s.mu !== undefined && !isReleased) {
+        const n = f.n;
+        const needed = n > tol ? Math.abs(f.t) / n : Math.abs(f.t) > tol ? Infinity : 0;
+        reaction.friction = { needed, mu: s.mu };
+        sumN += n;
+        sumMuN += s.mu * n;
+        const et = direction(s.angle + 90);
+        tx += f.t * et[0];
+        ty += f.t * et[1];
+        if (needed > s.mu * (1 + 1e-9) + 1e-12) {
+          warnings.push({
+            code: "SLIP",
+            message: `${describeSupport(s)} slips: it needs a friction coefficient of ${fmtRatio(needed)}, and has μ = ${fmtRatio(s.mu)}`,
+            ids: [s.id],
+          });
+        }
+      }
+    }
+    largest = Math.max(largest, Math.hypot(reaction.fx, reaction.fy));
+    out.reactions[s.id] = reaction;
+    reactionTerms.push({
+      id: s.id,
+      body: body.id,
+      kind: "reaction" as const,
+      label: `reaction at ${s.label || s.id}`,
+      fx: reaction.fx,
+      fy: reaction.fy,
+      m: reaction.m,
+      at: s.at,
+    });
+  });
+
+  // ---- body-level friction: can the friction contacts together resist the sliding force?
+  let friction: BodyResult["friction"];
+  if (sumN > 0) {
+    const demand = Math.hypot(tx, ty);
+    friction = { needed: demand / sumN, available: sumMuN / sumN };
+    if (demand > sumMuN * (1 + 1e-9) + tol && !warnings.some((w) => w.code === "SLIP" && supports.some((s) => w.ids.includes(s.id)))) {
+      const ids = supports.filter((s) => s.kind === "contact" && s.mu !== undefined).map((s) => s.id);
+      warnings.push({
+        code: "SLIP",
+        message: `${body.label || body.id} slides: its friction contacts must resist ${fmtForce(demand)} and can give ${fmtForce(sumMuN)}`,
+        ids,
+      });
+    }
+  }
+
+  if (determinacy.kind === "indeterminate") {
+    warnings.push({
+      code: "INDETERMINATE",
+      message: `${body.label || body.id} is statically indeterminate (degree ${determinacy.degree}): the reactions depend on the support stiffnesses`,
+      ids: supports.map((s) => s.id),
+    });
+  } else if (determinacy.kind === "mechanism" && status !== "unrestrained") {
+    warnings.push({
+      code: "MECHANISM",
+      message: `${body.label || body.id}: the supports leave ${determinacy.degree === 1 ? "one motion" : `${determinacy.degree} motions`} free, but the loads do not drive ${determinacy.degree === 1 ? "it" : "them"}`,
+      ids: [body.id],
+    });
+  }
+
+  // residual about the world origin
+  const [ox, oy] = model.origin;
+  const rfx = resid[0];
+  const rfy = resid[1];
+  const rm = resid[2] * model.L + momentOf(ox, oy, rfx, rfy);
+  const cleanR = (x: number) => (Math.abs(x) < 1e-10 * scale ? 0 : x);
+
+  out.bodies[body.id] = {
+    status,
+    determinacy,
+    acceleration: { ax: model.ax, ay: model.ay },
+    momentum: model.momentum,
+    residual: { fx: cleanR(rfx), fy: cleanR(rfy), m: cleanR(rm) },
+    ...(freeMotion ? { freeMotion } : {}),
+    largestReaction: largest,
+    ...(friction ? { friction } : {}),
+  };
+  out.equations[body.id] = { forces: [...reactionTerms, ...model.forceTerms], momentum: model.momentumTerms };
+}
+
+/** A generalized motion z (scaled) as a translation or a rotation about a point. */
+function describeMotion(model: BodyModel, z: Vec3): FreeMotion {
+  const [ux, uy, lt] = z;
+  const theta = lt / model.L;
+  const mag = Math.hypot(ux, uy);
+  if (Math.abs(lt) <= 1e-6 * Math.max(mag, 1e-300)) {
+    const angle = (Math.atan2(uy, ux) * 180) / Math.PI;
+    return { kind: "translation", angle: roundAngle(angle) };
+  }
+  const [ox, oy] = model.origin;
+  const about: Vec2 = [ox - uy / theta, oy + ux / theta];
+  return { kind: "rotation", about: [roundTiny(about[0], model.L), roundTiny(about[1], model.L)] };
+}
+
+const roundAngle = (a: number) => {
+  const r = Math.round(a * 1e6) / 1e6;
+  return r === -180 ? 180 : r === 0 ? 0 : r;
+};
+const roundTiny = (x: number, L: number) => (Math.abs(x) < 1e-9 * L ? 0 : Math.round(x * 1e9) / 1e9);
+const fmtRatio = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(3)).toString() : "∞");

@@ -1,0 +1,92 @@
+// Sweeps: solve a parsed sketch for many values of one parameter, re-evaluating only the
+// expressions that depend on it (their compiled form is kept from parsing).
+import { makeValue, toFieldNumber, type MathValue } from "./expressions";
+import { planOf } from "./parse";
+import { solve } from "./solve";
+import type { FieldError, Sketch, SolveResult } from "./types";
+import { validateValues } from "./validate";
+
+export type SweepPoint = { value: number; ok: true; result: SolveResult } | { value: number; ok: false; errors: FieldError[] };
+
+export interface SweepResult {
+  parameter: string;
+  /** the unit the parameter was written in; sweep values are in this unit */
+  unit: string;
+  points: SweepPoint[];
+}
+
+export interface Sweeper {
+  parameter: string;
+  unit: string;
+  /** solve with the parameter at `value` (in `unit`) */
+  at(value: number): SweepPoint;
+  /** put every swept value back as parsed */
+  restore(): void;
+}
+
+export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
+  const plan = planOf(sketch);
+  if (!plan) throw new Error("a sweep needs a sketch returned by parseSketch");
+  if (!plan.scope.has(parameter)) {
+    const names = [...plan.scope.keys()];
+    throw new Error(`the sketch has no parameter "${parameter}"${names.length ? ` (it has ${names.join(", ")})` : " (it has none)"}`);
+  }
+  const unit = plan.parameterUnits[parameter] ?? "";
+  const affected = new Set([parameter]);
+  const params = plan.parameters.filter((p) => {
+    if (p.expr && p.expr.deps.some((d) => affected.has(d))) {
+      affected.add(p.name);
+      return true;
+    }
+    return false;
+  });
+  const slots = plan.slots.filter((s) => s.expr.deps.some((d) => affected.has(d)));
+  const savedScope = new Map<string, MathValue>([...affected].map((n) => [n, plan.scope.get(n)!]));
+  const savedSlots = slots.map((s) => s.target[s.key]);
+
+  return {
+    parameter,
+    unit,
+    at(value: number): SweepPoint {
+      const errors: FieldError[] = [];
+      plan.scope.set(parameter, makeValue(value, unit));
+      for (const p of params) {
+        try {
+          plan.scope.set(p.name, p.expr!.evaluate(plan.scope));
+        } catch (err) {
+          errors.push({ path: `parameters.${p.name}`, message: (err as Error).message });
+        }
+      }
+      for (const s of slots) {
+        try {
+          s.target[s.key] = toFieldNumber(s.expr.evaluate(plan.scope), s.kind);
+        } catch (err) {
+          errors.push({ path: s.path, message: (err as Error).message });
+        }
+      }
+      if (errors.length === 0) errors.push(...validateValues(sketch));
+      if (errors.length) return { value, ok: false, errors };
+      return { value, ok: true, result: solve(sketch) };
+    },
+    restore() {
+      for (const [n, v] of savedScope) plan.scope.set(n, v);
+      slots.forEach((s, i) => (s.target[s.key] = savedSlots[i]));
+    },
+  };
+}
+
+/** Solve the sketch at each value of `parameter` (values in the unit the parameter was written in). */
+export function solveSweep(sketch: Sketch, parameter: string, values: readonly number[]): SweepResult {
+  const sweeper = createSweeper(sketch, parameter);
+  try {
+    return { parameter, unit: sweeper.unit, points: values.map((v) => sweeper.at(v)) };
+  } finally {
+    sweeper.restore();
+  }
+}
+
+/** `count` evenly spaced values from `lo` to `hi` inclusive. */
+export function linspace(lo: number, hi: number, count: number): number[] {
+  if (count < 2) return [lo];
+  return Array.from({ length: count }, (_, i) => lo + ((hi - lo) * i) / (count - 1));
+}

@@ -1,0 +1,108 @@
+// Display of SI values in SI or US customary units, with 3–4 significant figures.
+// Conversion factors are the exact ones of NIST SP 811 (solver/constants.ts).
+import { FOOT_M, GALLON_US_M3, INCH_M, LBF_N, LBM_KG, PSI_PA } from "./constants";
+
+export type UnitSystem = "SI" | "US";
+export type Quantity =
+  | "force"
+  | "moment"
+  | "length"
+  | "smallLength"
+  | "mass"
+  | "massFlow"
+  | "pressure"
+  | "velocity"
+  | "volumeFlow"
+  | "area"
+  | "density"
+  | "lineLoad"
+  | "stiffness"
+  | "acceleration"
+  | "angle"
+  | "ratio";
+
+interface Scale {
+  unit: string;
+  /** SI value per one of this unit */
+  factor: number;
+}
+
+/** Units per quantity and system, largest first; the first whose value is ≥ 1 is chosen. */
+const UNITS: Record<Quantity, Record<UnitSystem, Scale[]>> = {
+  force: {
+    SI: [{ unit: "MN", factor: 1e6 }, { unit: "kN", factor: 1e3 }, { unit: "N", factor: 1 }],
+    US: [{ unit: "kip", factor: 1000 * LBF_N }, { unit: "lbf", factor: LBF_N }],
+  },
+  moment: {
+    SI: [{ unit: "MN·m", factor: 1e6 }, { unit: "kN·m", factor: 1e3 }, { unit: "N·m", factor: 1 }],
+    US: [{ unit: "kip·ft", factor: 1000 * LBF_N * FOOT_M }, { unit: "lbf·ft", factor: LBF_N * FOOT_M }],
+  },
+  length: { SI: [{ unit: "m", factor: 1 }], US: [{ unit: "ft", factor: FOOT_M }] },
+  smallLength: { SI: [{ unit: "mm", factor: 1e-3 }], US: [{ unit: "in", factor: INCH_M }] },
+  mass: {
+    SI: [{ unit: "t", factor: 1000 }, { unit: "kg", factor: 1 }],
+    US: [{ unit: "lb", factor: LBM_KG }],
+  },
+  massFlow: { SI: [{ unit: "kg/s", factor: 1 }], US: [{ unit: "lb/s", factor: LBM_KG }] },
+  pressure: {
+    SI: [{ unit: "MPa", factor: 1e6 }, { unit: "kPa", factor: 1e3 }, { unit: "Pa", factor: 1 }],
+    US: [{ unit: "ksi", factor: 1000 * PSI_PA }, { unit: "psi", factor: PSI_PA }],
+  },
+  velocity: { SI: [{ unit: "m/s", factor: 1 }], US: [{ unit: "ft/s", factor: FOOT_M }] },
+  volumeFlow: {
+    SI: [{ unit: "m³/s", factor: 1 }, { unit: "L/min", factor: 1e-3 / 60 }],
+    US: [{ unit: "gpm", factor: GALLON_US_M3 / 60 }],
+  },
+  area: { SI: [{ unit: "m²", factor: 1 }, { unit: "mm²", factor: 1e-6 }], US: [{ unit: "ft²", factor: FOOT_M ** 2 }, { unit: "in²", factor: INCH_M ** 2 }] },
+  density: { SI: [{ unit: "kg/m³", factor: 1 }], US: [{ unit: "lb/ft³", factor: LBM_KG / FOOT_M ** 3 }] },
+  lineLoad: {
+    SI: [{ unit: "kN/m", factor: 1e3 }, { unit: "N/m", factor: 1 }],
+    US: [{ unit: "kip/ft", factor: (1000 * LBF_N) / FOOT_M }, { unit: "lbf/ft", factor: LBF_N / FOOT_M }],
+  },
+  stiffness: {
+    SI: [{ unit: "MN/m", factor: 1e6 }, { unit: "kN/m", factor: 1e3 }, { unit: "N/m", factor: 1 }],
+    US: [{ unit: "kip/in", factor: (1000 * LBF_N) / INCH_M }, { unit: "lbf/in", factor: LBF_N / INCH_M }],
+  },
+  acceleration: { SI: [{ unit: "m/s²", factor: 1 }], US: [{ unit: "ft/s²", factor: FOOT_M }] },
+  angle: { SI: [{ unit: "°", factor: 1 }], US: [{ unit: "°", factor: 1 }] },
+  ratio: { SI: [{ unit: "", factor: 1 }], US: [{ unit: "", factor: 1 }] },
+};
+
+/** The value in the chosen unit, without formatting. */
+export function convert(valueSI: number, q: Quantity, system: UnitSystem, unit?: string): { value: number; unit: string } {
+  const list = UNITS[q][system];
+  let scale = unit ? list.find((s) => s.unit === unit) : undefined;
+  if (!scale) {
+    const abs = Math.abs(valueSI);
+    scale = list.find((s) => abs >= s.factor * 0.9999) ?? list[list.length - 1];
+    if (abs === 0) scale = list.find((s) => s.factor === 1) ?? list[list.length - 1];
+  }
+  return { value: valueSI / scale.factor, unit: scale.unit };
+}
+
+/** A number with 3–4 significant figures: 4 below 10 000 units, grouped thousands above. */
+export function formatNumber(x: number, sig = 4): string {
+  if (!Number.isFinite(x)) return x > 0 ? "∞" : x < 0 ? "−∞" : "—";
+  if (x === 0 || Math.abs(x) < 1e-12) return "0";
+  const abs = Math.abs(x);
+  let s: string;
+  if (abs >= 10 ** sig) s = Math.round(x).toLocaleString("en-US");
+  else {
+    const digits = Math.max(0, sig - 1 - Math.floor(Math.log10(abs)));
+    s = x.toFixed(Math.min(digits, 12));
+    if (s.includes(".")) s = s.replace(/0+$/, "").replace(/\.$/, "");
+  }
+  return s.replace(/^-/, "−");
+}
+
+/** "2.40 kN", "1,151 lbf", "35.0°" */
+export function formatQuantity(valueSI: number, q: Quantity, system: UnitSystem = "SI", opts: { sig?: number; unit?: string } = {}): string {
+  const { value, unit } = convert(valueSI, q, system, opts.unit);
+  const num = formatNumber(value, opts.sig ?? 4);
+  if (!unit) return num;
+  return unit === "°" ? `${num}°` : `${num} ${unit}`;
+}
+
+export function unitsFor(q: Quantity, system: UnitSystem): string[] {
+  return UNITS[q][system].map((s) => s.unit);
+}
