@@ -1,3 +1,51 @@
 // The whole database schema: tables (one file per area under db/tables), then relations, then types.
+import { relations } from "drizzle-orm";
+import { account, session, user } from "./tables/auth";
+import { auditEvent } from "./tables/audit";
+import { invitation, membership, workspace } from "./tables/workspaces";
+
 export * from "./tables/auth";
 export * from "./tables/workspaces";
+export * from "./tables/audit";
+export * from "./tables/dev-mail";
+
+export const userRelations = relations(user, ({ many }) => ({
+  sessions: many(session),
+  accounts: many(account),
+  memberships: many(membership),
+}));
+
+export const sessionRelations = relations(session, ({ one }) => ({
+  user: one(user, { fields: [session.userId], references: [user.id] }),
+}));
+
+export const accountRelations = relations(account, ({ one }) => ({
+  user: one(user, { fields: [account.userId], references: [user.id] }),
+}));
+
+export const workspaceRelations = relations(workspace, ({ many }) => ({
+  memberships: many(membership),
+  invitations: many(invitation),
+  auditEvents: many(auditEvent),
+}));
+
+export const membershipRelations = relations(membership, ({ one }) => ({
+  workspace: one(workspace, { fields: [membership.workspaceId], references: [workspace.id] }),
+  user: one(user, { fields: [membership.userId], references: [user.id] }),
+}));
+
+export const invitationRelations = relations(invitation, ({ one }) => ({
+  workspace: one(workspace, { fields: [invitation.workspaceId], references: [workspace.id] }),
+  inviter: one(user, { fields: [invitation.invitedBy], references: [user.id] }),
+}));
+
+export const auditEventRelations = relations(auditEvent, ({ one }) => ({
+  workspace: one(workspace, { fields: [auditEvent.workspaceId], references: [workspace.id] }),
+  actor: one(user, { fields: [auditEvent.actorId], references: [user.id] }),
+}));
+
+export type User = typeof user.$inferSelect;
+export type Workspace = typeof workspace.$inferSelect;
+export type Membership = typeof membership.$inferSelect;
+export type Invitation = typeof invitation.$inferSelect;
+export type AuditEvent = typeof auditEvent.$inferSelect;

@@ -1,10 +1,40 @@
 // Local stand-ins for hosted services, on loopback: started by `npm start`, `npm run dev` and `npm test`.
 // Each later service (mail, object storage) registers here.
-const services: Array<{ name: string; start: () => Promise<() => Promise<void>> }> = [];
+import { localDatabaseUrl } from "../lib/database-url";
+import { smtpSettings } from "../lib/env";
+import { devMailStore, startMailFake } from "../lib/mail-fake";
+
+const services: Array<{ name: string; start: () => Promise<() => Promise<void>> }> = [
+  {
+    // Mail: with no SMTP_HOST configured the app sends to this fake; /dev/mailbox lists what arrived.
+    name: "mail",
+    async start() {
+      const smtp = smtpSettings();
+      if (smtp.kind === "real") {
+        console.error(`[services] SMTP_HOST is set (${smtp.host}): the local mail fake is not started`);
+        return async () => undefined;
+      }
+      const store = devMailStore(process.env.DATABASE_URL || localDatabaseUrl());
+      const stop = await startMailFake({ port: smtp.port, host: smtp.host, onMail: store.save });
+      console.error(`[services] local SMTP on ${smtp.host}:${smtp.port} (mail listed at /dev/mailbox)`);
+      return async () => {
+        await stop();
+        await store.close();
+      };
+    },
+  },
+];
 
 async function main() {
   const stops: Array<() => Promise<void>> = [];
-  for (const s of services) stops.push(await s.start());
+  for (const s of services) {
+    try {
+      stops.push(await s.start());
+    } catch (err) {
+      const reason = err instanceof Error ? err.message : String(err);
+      throw new Error(`the local ${s.name} service did not start: ${reason}`);
+    }
+  }
   const shutdown = async () => {
     for (const stop of stops) await stop().catch(() => undefined);
     process.exit(0);
@@ -16,6 +46,6 @@ async function main() {
 }
 
 main().catch((err) => {
-  console.error("[services]", err);
+  console.error("[services]", err instanceof Error ? err.message : err);
   process.exit(1);
 });

@@ -26,3 +26,27 @@ export const membership = pgTable(
   },
   (t) => [uniqueIndex("membership_pk").on(t.workspaceId, t.userId), index("membership_user_idx").on(t.userId)],
 );
+
+/**
+ * An invitation by e-mail. Only the SHA-256 of the link's token is stored; a link works once
+ * (accepted_at), until expires_at, and not after an owner withdraws it (withdrawn_at).
+ */
+export const invitation = pgTable(
+  "invitation",
+  {
+    id: uuid("id").primaryKey().default(sql`gen_random_uuid()`),
+    workspaceId: uuid("workspace_id")
+      .notNull()
+      .references(() => workspace.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    role: workspaceRole("role").notNull(),
+    tokenHash: text("token_hash").notNull().unique(),
+    invitedBy: text("invited_by").references(() => user.id, { onDelete: "set null" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    acceptedBy: text("accepted_by").references(() => user.id, { onDelete: "set null" }),
+    withdrawnAt: timestamp("withdrawn_at", { withTimezone: true }),
+  },
+  (t) => [index("invitation_workspace_idx").on(t.workspaceId, t.createdAt), index("invitation_email_idx").on(t.email)],
+);

@@ -1,0 +1,23 @@
+import { getWorkspaceForMember } from "@/db/queries/workspaces";
+import { route } from "@/lib/api";
+import { AppError } from "@/lib/errors";
+import { rename } from "@/lib/members";
+import { renameWorkspaceInput, workspaceParams } from "@/lib/schemas";
+
+export const dynamic = "force-dynamic";
+
+/** The workspace and the caller's role in it. */
+export const GET = route(
+  { params: workspaceParams, workspace: { param: "id", permission: "workspace.read" } },
+  async ({ params, user }) => {
+    const ws = await getWorkspaceForMember(params.id, user.id);
+    if (!ws) throw new AppError("not_found");
+    return { workspace: { id: ws.id, name: ws.name, personal: ws.personal, role: ws.role, createdAt: ws.createdAt } };
+  },
+);
+
+/** Rename (owners). */
+export const PATCH = route(
+  { params: workspaceParams, body: renameWorkspaceInput, workspace: { param: "id", permission: "workspace.rename" } },
+  async ({ params, user, body }) => ({ workspace: await rename(params.id, user, body.name) }),
+);

@@ -1,0 +1,162 @@
+import "server-only";
+import type { z } from "zod";
+import { getRole } from "@/db/queries/workspaces";
+import type { AuthSession } from "./auth";
+import { appOrigin } from "./env";
+import { AppError, errorResponse, fieldErrors } from "./errors";
+import { can, type Permission, type Role } from "./roles";
+import { sessionFrom } from "./session";
+
+/**
+ * One route handler's contract. Every handler runs the same steps, in this order:
+ *   1. refuse cross-origin mutations (Origin against APP_URL),
+ *   2. read the session (401 when it is required and missing),
+ *   3. parse the path parameters (a malformed id names nothing: 404),
+ *   4. load the caller's role in the workspace (not a member: 404; role lacks the permission: 403),
+ *   5. parse the query and the JSON body with zod (400 with field paths; 413 over the size cap),
+ *   6. act, and return JSON.
+ * The session comes before parsing so a signed-out caller learns nothing but "sign in".
+ */
+export type RouteSpec = {
+  params?: z.ZodType;
+  query?: z.ZodType;
+  body?: z.ZodType;
+  /** "required" (default), "optional" (session may be null) or "none" (not read at all). */
+  auth?: "required" | "optional" | "none";
+  /** Workspace-scoped routes: which path parameter holds the workspace id, and what the caller must be allowed. */
+  workspace?: { param: string; permission: Permission };
+  /** Request body cap in bytes (default 64 KiB). */
+  maxBodyBytes?: number;
+};
+
+type Out<T> = T extends z.ZodType ? z.output<T> : undefined;
+type SessionFor<S extends RouteSpec> = S["auth"] extends "none" ? null : S["auth"] extends "optional" ? AuthSession | null : AuthSession;
+
+export type RouteContext<S extends RouteSpec> = {
+  req: Request;
+  params: Out<S["params"]>;
+  query: Out<S["query"]>;
+  body: Out<S["body"]>;
+  session: SessionFor<S>;
+  user: SessionFor<S> extends AuthSession ? AuthSession["user"] : AuthSession["user"] | null;
+  /** The caller's role in the route's workspace (set when the spec names a workspace). */
+  role: S["workspace"] extends object ? Role : undefined;
+};
+
+type NextRouteContext = { params: Promise<Record<string, string | string[] | undefined>> };
+
+const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
+const DEFAULT_MAX_BODY = 64 * 1024;
+
+/** JSON with no-store caching (every answer depends on who asks). */
+export function json(data: unknown, status = 200, headers: Record<string, string> = {}): Response {
+  return Response.json(data, { status, headers: { "Cache-Control": "no-store", ...headers } });
+}
+
+/**
+ * Refuse a state-changing request that a browser sent from another site. Browsers send Origin
+ * (and Sec-Fetch-Site) on every such request; a request with neither is not from a browser
+ * page (curl, scripts), and its cookies were not sent by a third-party site.
+ */
+export function assertSameOrigin(req: Request): void {
+  if (SAFE_METHODS.has(req.method.toUpperCase())) return;
+  const origin = req.headers.get("origin");
+  if (origin !== null) {
+    if (origin !== appOrigin()) throw new AppError("cross_origin");
+    return;
+  }
+  const site = req.headers.get("sec-fetch-site");
+  if (site !== null && site !== "same-origin" && site !== "none") throw new AppError("cross_origin");
+}
+
+async function readBodyCapped(req: Request, max: number): Promise<string> {
+  const declared = Number(req.headers.get("content-length"));
+  if (Number.isFinite(declared) && declared > max) throw tooLarge(max);
+  if (!req.body) return "";
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > max) {
+      await reader.cancel().catch(() => undefined);
+      throw tooLarge(max);
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString("utf8");
+}
+
+function tooLarge(max: number): AppError {
+  const limit = max >= 1024 * 1024 ? `${(max / (1024 * 1024)).toFixed(0)} MB` : `${Math.round(max / 1024)} KB`;
+  return new AppError("payload_too_large", `The request body is larger than the ${limit} this endpoint accepts.`);
+}
+
+/** Parse the JSON body against a schema: 415 when not JSON, 400 for bad JSON or bad fields (with their paths). */
+export async function parseJsonBody<T extends z.ZodType>(req: Request, schema: T, max = DEFAULT_MAX_BODY): Promise<z.output<T>> {
+  const type = req.headers.get("content-type") ?? "";
+  if (!/^application\/([\w.+-]+\+)?json\b/i.test(type)) throw new AppError("unsupported_media_type");
+  const text = await readBodyCapped(req, max);
+  let data: unknown;
+  try {
+    data = text.trim() === "" ? undefined : JSON.parse(text);
+  } catch {
+    throw new AppError("invalid_json");
+  }
+  if (data === undefined) throw new AppError("invalid_json", "The request needs a JSON body.");
+  const parsed = schema.safeParse(data);
+  if (!parsed.success) throw new AppError("validation_failed", undefined, { fields: fieldErrors(parsed.error) });
+  return parsed.data;
+}
+
+export function parseQuery<T extends z.ZodType>(req: Request, schema: T): z.output<T> {
+  const url = new URL(req.url);
+  const parsed = schema.safeParse(Object.fromEntries(url.searchParams));
+  if (!parsed.success) throw new AppError("validation_failed", "Some query parameters are not valid.", { fields: fieldErrors(parsed.error, ["query"]) });
+  return parsed.data;
+}
+
+/** The caller's role where a permission is needed: 404 for non-members (nothing leaks), 403 for a role without it. */
+export async function requireWorkspaceRole(workspaceId: string, userId: string, permission: Permission): Promise<Role> {
+  const role = await getRole(workspaceId, userId);
+  if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.");
+  if (!can(role, permission)) throw new AppError("forbidden");
+  return role;
+}
+
+/** Wrap a route handler in the shared steps above. */
+export function route<const S extends RouteSpec>(spec: S, handler: (ctx: RouteContext<S>) => Promise<unknown>) {
+  return async (req: Request, next?: NextRouteContext): Promise<Response> => {
+    try {
+      assertSameOrigin(req);
+      const auth = spec.auth ?? "required";
+      const session = auth === "none" ? null : await sessionFrom(req.headers);
+      if (auth === "required" && !session) throw new AppError("unauthenticated");
+
+      const rawParams = (await next?.params) ?? {};
+      let params: unknown = rawParams;
+      if (spec.params) {
+        const parsed = spec.params.safeParse(rawParams);
+        if (!parsed.success) throw new AppError("not_found");
+        params = parsed.data;
+      }
+
+      let role: Role | undefined;
+      if (spec.workspace) {
+        if (!session) throw new AppError("unauthenticated");
+        const workspaceId = String((params as Record<string, unknown>)[spec.workspace.param]);
+        role = await requireWorkspaceRole(workspaceId, session.user.id, spec.workspace.permission);
+      }
+
+      const query = spec.query ? parseQuery(req, spec.query) : undefined;
+      const body = spec.body ? await parseJsonBody(req, spec.body, spec.maxBodyBytes ?? DEFAULT_MAX_BODY) : undefined;
+
+      const result = await handler({ req, params, query, body, session, user: session?.user ?? null, role } as RouteContext<S>);
+      return result instanceof Response ? result : json(result ?? { ok: true });
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}

@@ -1,0 +1,21 @@
+// The audit log's actions and how each reads on the owners' audit page. Browser-safe.
+// Later work (sketches, versions, review) adds its actions here.
+
+export const AUDIT_ACTIONS = {
+  "auth.sign_in": "signed in",
+  "auth.password_reset": "reset their password",
+  "workspace.create": "created the workspace",
+  "workspace.rename": "renamed the workspace",
+  "invitation.create": "invited",
+  "invitation.withdraw": "withdrew the invitation of",
+  "invitation.accept": "joined through an invitation",
+  "member.role_change": "changed the role of",
+  "member.remove": "removed",
+  "member.leave": "left the workspace",
+} as const;
+
+export type AuditAction = keyof typeof AUDIT_ACTIONS;
+
+export function auditActionLabel(action: string): string {
+  return (AUDIT_ACTIONS as Record<string, string>)[action] ?? action;
+}

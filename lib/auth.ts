@@ -1,0 +1,101 @@
+import "server-only";
+import { betterAuth } from "better-auth";
+import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { db } from "@/db";
+import { ensurePersonalWorkspace } from "@/db/queries/workspaces";
+import { account, session, user, verification } from "@/db/schema";
+import { recordAudit } from "./audit";
+import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp } from "./env";
+import { sendMailInBackground } from "./mail";
+import { passwordResetMail, verificationMail } from "./mail-templates";
+
+/** Paths (after /api/auth) that take a password or send mail: these get the AUTH_RATE_LIMIT_* budget. */
+export const CREDENTIAL_PATHS = [
+  "/sign-in/*",
+  "/sign-up/*",
+  "/change-password",
+  "/change-email",
+  "/request-password-reset",
+  "/reset-password",
+  "/send-verification-email",
+] as const;
+
+export type AuthOverrides = { rateLimit?: { max: number; window: number } };
+
+/** The better-auth instance: e-mail and password on PostgreSQL, mail through lib/mail. */
+export function createAuth(overrides: AuthOverrides = {}) {
+  const limit = overrides.rateLimit ?? authRateLimit();
+  const customRules = Object.fromEntries(CREDENTIAL_PATHS.map((p) => [p, { window: limit.window, max: limit.max }]));
+  return betterAuth({
+    appName: "Counterpoise",
+    baseURL: appUrl(),
+    basePath: "/api/auth",
+    secret: authSecret(),
+    trustedOrigins: [appOrigin()],
+    database: drizzleAdapter(db, { provider: "pg", schema: { user, session, account, verification }, transaction: true }),
+    user: {
+      additionalFields: {
+        emailNotifications: { type: "boolean", required: false, defaultValue: true, input: true },
+      },
+    },
+    emailAndPassword: {
+      enabled: true,
+      requireEmailVerification: true,
+      minPasswordLength: 8,
+      maxPasswordLength: 128,
+      revokeSessionsOnPasswordReset: true,
+      resetPasswordTokenExpiresIn: 60 * 60,
+      async sendResetPassword({ user: u, url }) {
+        sendMailInBackground(passwordResetMail({ to: u.email, name: u.name, url }));
+      },
+      async onPasswordReset({ user: u }) {
+        await recordAudit({ action: "auth.password_reset", actorId: u.id, actorEmail: u.email });
+      },
+    },
+    emailVerification: {
+      sendOnSignUp: true,
+      sendOnSignIn: true,
+      autoSignInAfterVerification: false,
+      expiresIn: 60 * 60,
+      async sendVerificationEmail({ user: u, url }) {
+        sendMailInBackground(verificationMail({ to: u.email, name: u.name, url }));
+      },
+    },
+    session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+    rateLimit: { enabled: true, storage: "memory", window: 60, max: 600, customRules },
+    advanced: {
+      // Secure cookies only over https: a browser drops Secure cookies on plain http://127.0.0.1.
+      useSecureCookies: isHttpsApp(),
+      cookiePrefix: "counterpoise",
+      defaultCookieAttributes: { httpOnly: true, sameSite: "lax", path: "/" },
+    },
+    databaseHooks: {
+      user: {
+        create: {
+          async after(u) {
+            await ensurePersonalWorkspace({ id: u.id, name: u.name });
+          },
+        },
+      },
+      session: {
+        create: {
+          async after(s) {
+            await recordAudit({ action: "auth.sign_in", actorId: s.userId, detail: { ip: s.ipAddress ?? null } });
+          },
+        },
+      },
+    },
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;
+export type AuthSession = NonNullable<Awaited<ReturnType<Auth["api"]["getSession"]>>>;
+export type SessionUser = AuthSession["user"];
+
+const globalForAuth = globalThis as unknown as { counterpoiseAuth?: Auth };
+
+/** The app's one auth instance, made on first use (so `next build` never needs the secret). */
+export function getAuth(): Auth {
+  globalForAuth.counterpoiseAuth ??= createAuth();
+  return globalForAuth.counterpoiseAuth;
+}

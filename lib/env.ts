@@ -1,0 +1,94 @@
+// Settings read from the environment, in one place. Plain functions (no `server-only`) so the
+// lifecycle scripts and the local SMTP fake read the same values as the app.
+
+const DEV_SECRET = "counterpoise-development-secret-not-for-production";
+
+/** The app's public URL without a trailing slash (cookies, links in e-mails, origin checks). */
+export function appUrl(): string {
+  const raw = process.env.APP_URL || `http://127.0.0.1:${process.env.PORT || 3000}`;
+  return raw.replace(/\/+$/, "");
+}
+
+/** The app's origin (scheme, host and port) that browsers send in the Origin header. */
+export function appOrigin(): string {
+  return new URL(appUrl()).origin;
+}
+
+/** Cookies get the Secure attribute only when the app is served over https. */
+export function isHttpsApp(): boolean {
+  return appUrl().startsWith("https://");
+}
+
+export class MissingSecretError extends Error {
+  constructor() {
+    super(
+      "BETTER_AUTH_SECRET is not set. The app signs session cookies with it and refuses to run in production without one. " +
+        "Set it in the environment or in .env.local (generate one with `openssl rand -base64 32`); `npm start` writes one for you.",
+    );
+    this.name = "MissingSecretError";
+  }
+}
+
+/** The secret that signs cookies and tokens. Production refuses to run without a real one. */
+export function authSecret(): string {
+  const secret = process.env.BETTER_AUTH_SECRET;
+  if (secret) return secret;
+  if (process.env.NODE_ENV === "production") throw new MissingSecretError();
+  return DEV_SECRET;
+}
+
+function positiveNumber(name: string, fallback: number): number {
+  const value = Number(process.env[name]);
+  return Number.isFinite(value) && value > 0 ? value : fallback;
+}
+
+/** Sign-in (and sign-up, password change) attempts allowed per window before 429. */
+export function authRateLimit(): { max: number; window: number } {
+  return { max: positiveNumber("AUTH_RATE_LIMIT_MAX", 5), window: positiveNumber("AUTH_RATE_LIMIT_WINDOW", 10) };
+}
+
+/** How long an invitation link stays valid. */
+export function invitationTtlHours(): number {
+  return positiveNumber("INVITE_TTL_HOURS", 7 * 24);
+}
+
+export type SmtpSettings =
+  | { kind: "real"; host: string; port: number; secure: boolean; user?: string; password?: string }
+  | { kind: "local"; host: "127.0.0.1"; port: number };
+
+/** Real SMTP when SMTP_HOST is set; otherwise the local fake that `npm start` and `npm test` run. */
+export function smtpSettings(): SmtpSettings {
+  const port = positiveNumber("SMTP_PORT", 2525);
+  const host = process.env.SMTP_HOST;
+  if (!host) return { kind: "local", host: "127.0.0.1", port };
+  return {
+    kind: "real",
+    host,
+    port,
+    secure: process.env.SMTP_SECURE === "true" || port === 465,
+    user: process.env.SMTP_USER || undefined,
+    password: process.env.SMTP_PASSWORD || undefined,
+  };
+}
+
+export function mailFrom(): string {
+  return process.env.MAIL_FROM || "Counterpoise <no-reply@counterpoise.local>";
+}
+
+function isLoopbackUrl(url: string): boolean {
+  try {
+    const host = new URL(url).hostname;
+    return host === "127.0.0.1" || host === "localhost" || host === "[::1]" || host.endsWith(".localhost");
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * The local mailbox page lists every mail the fake received, reset links included, so it is
+ * only served when no real SMTP is configured and the app runs on loopback (or DEV_MAILBOX=1).
+ */
+export function mailboxEnabled(): boolean {
+  if (process.env.SMTP_HOST) return false;
+  return isLoopbackUrl(appUrl()) || process.env.DEV_MAILBOX === "1";
+}

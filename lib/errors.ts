@@ -1,0 +1,107 @@
+// Typed error codes → HTTP statuses and safe JSON bodies: `{ error: { code, message, fields? } }`.
+// Nothing else reaches a response: database and library errors become `internal` with a
+// generic message (the details go to the server log).
+import { ZodError } from "zod";
+
+export const ERROR_STATUS = {
+  bad_request: 400,
+  invalid_json: 400,
+  validation_failed: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  cross_origin: 403,
+  email_mismatch: 403,
+  not_found: 404,
+  conflict: 409,
+  already_member: 409,
+  last_owner: 409,
+  gone: 410,
+  invitation_expired: 410,
+  invitation_used: 410,
+  invitation_withdrawn: 410,
+  payload_too_large: 413,
+  unsupported_media_type: 415,
+  rate_limited: 429,
+  internal: 500,
+  unavailable: 503,
+} as const;
+
+export type ErrorCode = keyof typeof ERROR_STATUS;
+
+const DEFAULT_MESSAGE: Record<ErrorCode, string> = {
+  bad_request: "The request is not valid.",
+  invalid_json: "The request body is not valid JSON.",
+  validation_failed: "Some fields are not valid.",
+  unauthenticated: "Sign in to continue.",
+  forbidden: "Your role in this workspace does not allow this.",
+  cross_origin: "Requests from another site are refused.",
+  email_mismatch: "This invitation was sent to a different e-mail address.",
+  not_found: "Not found.",
+  conflict: "This conflicts with the current state; reload and try again.",
+  already_member: "That person is already a member of this workspace.",
+  last_owner: "A workspace needs at least one owner: make someone else an owner first.",
+  gone: "This is no longer available.",
+  invitation_expired: "This invitation has expired. Ask an owner of the workspace to send a new one.",
+  invitation_used: "This invitation has already been used.",
+  invitation_withdrawn: "This invitation was withdrawn by an owner of the workspace.",
+  payload_too_large: "The request body is too large.",
+  unsupported_media_type: "Send the request body as application/json.",
+  rate_limited: "Too many requests; wait a moment and try again.",
+  internal: "Something went wrong on our side. Try again; if it keeps happening, tell us.",
+  unavailable: "A service the app needs is not answering. Try again shortly.",
+};
+
+/** A field path (`members.0.email`) and what is wrong with it. */
+export type FieldError = { path: string; message: string };
+
+export type ErrorBody = { error: { code: ErrorCode; message: string; fields?: FieldError[] } };
+
+/** An error that is safe to show: its code picks the status, its message is for people. */
+export class AppError extends Error {
+  readonly code: ErrorCode;
+  readonly fields?: FieldError[];
+  readonly headers?: Record<string, string>;
+
+  constructor(code: ErrorCode, message?: string, opts: { fields?: FieldError[]; headers?: Record<string, string> } = {}) {
+    super(message ?? DEFAULT_MESSAGE[code]);
+    this.name = "AppError";
+    this.code = code;
+    this.fields = opts.fields;
+    this.headers = opts.headers;
+  }
+
+  get status(): number {
+    return ERROR_STATUS[this.code];
+  }
+}
+
+export function defaultMessage(code: ErrorCode): string {
+  return DEFAULT_MESSAGE[code];
+}
+
+export function fieldErrors(err: ZodError, prefix: string[] = []): FieldError[] {
+  return err.issues.map((issue) => ({
+    path: [...prefix, ...issue.path.map(String)].join(".") || "(root)",
+    message: issue.message,
+  }));
+}
+
+/** Any thrown value → the AppError that may be shown for it. */
+export function toAppError(err: unknown): AppError {
+  if (err instanceof AppError) return err;
+  if (err instanceof ZodError) return new AppError("validation_failed", undefined, { fields: fieldErrors(err) });
+  return new AppError("internal");
+}
+
+export function errorBody(err: AppError): ErrorBody {
+  return { error: { code: err.code, message: err.message, ...(err.fields?.length ? { fields: err.fields } : {}) } };
+}
+
+/** The JSON response for any thrown value; unexpected errors are logged, never echoed. */
+export function errorResponse(err: unknown): Response {
+  const appError = toAppError(err);
+  if (appError.code === "internal" && !(err instanceof AppError)) {
+    console.error("[api] unexpected error", err);
+  }
+  return Response.json(errorBody(appError), { status: appError.status, headers: appError.headers });
+}

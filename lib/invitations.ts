@@ -1,0 +1,128 @@
+import "server-only";
+import { createHash, randomBytes } from "node:crypto";
+import { eq, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { claimInvitation, createInvitation, findInvitation, type InvitationView } from "@/db/queries/invitations";
+import { addMember, isMemberByEmail } from "@/db/queries/workspaces";
+import { user } from "@/db/schema";
+import { recordAudit } from "./audit";
+import { appUrl, invitationTtlHours } from "./env";
+import { AppError } from "./errors";
+import { sendMail } from "./mail";
+import { invitationMail } from "./mail-templates";
+import type { Role } from "./roles";
+
+/** Links carry a random token; the database keeps only its SHA-256. */
+export function newInvitationToken(): string {
+  return randomBytes(32).toString("base64url");
+}
+
+export function hashInvitationToken(token: string): string {
+  return createHash("sha256").update(token).digest("hex");
+}
+
+export function invitationUrl(token: string): string {
+  return `${appUrl()}/invite/${encodeURIComponent(token)}`;
+}
+
+export function normalizeEmail(email: string): string {
+  return email.trim().toLowerCase();
+}
+
+/** An owner invites someone by e-mail. The mail goes out at once; `mailSent` says whether it did. */
+export async function inviteMember(input: {
+  workspaceId: string;
+  actor: { id: string; name: string; email: string };
+  email: string;
+  role: Role;
+}): Promise<{ id: string; email: string; role: Role; expiresAt: Date; url: string; mailSent: boolean }> {
+  const email = normalizeEmail(input.email);
+  if (await isMemberByEmail(input.workspaceId, email)) {
+    throw new AppError("already_member", `${email} is already a member of this workspace.`);
+  }
+  const token = newInvitationToken();
+  const expiresAt = new Date(Date.now() + invitationTtlHours() * 3600 * 1000);
+  const created = await db.transaction(async (tx) => {
+    const made = await createInvitation(
+      { workspaceId: input.workspaceId, actorId: input.actor.id, email, role: input.role, tokenHash: hashInvitationToken(token), expiresAt },
+      tx,
+    );
+    if (!made) throw new AppError("forbidden");
+    await recordAudit(
+      {
+        action: "invitation.create",
+        actorId: input.actor.id,
+        actorEmail: input.actor.email,
+        workspaceId: input.workspaceId,
+        targetType: "invitation",
+        targetId: made.invitation.id,
+        detail: { email, role: input.role },
+      },
+      tx,
+    );
+    return made;
+  });
+  const url = invitationUrl(token);
+  let mailSent = true;
+  try {
+    await sendMail(
+      invitationMail({ to: email, inviterName: input.actor.name, workspaceName: created.workspaceName, role: input.role, url, expiresAt }),
+    );
+  } catch (err) {
+    mailSent = false;
+    console.error(`[mail] invitation to ${email} was not sent:`, err instanceof Error ? err.message : err);
+  }
+  return { id: created.invitation.id, email, role: input.role, expiresAt, url, mailSent };
+}
+
+/** What a token leads to, or null for a link that never existed. */
+export async function lookUpInvitation(token: string): Promise<InvitationView | null> {
+  if (!token || token.length > 200) return null;
+  return findInvitation(hashInvitationToken(token));
+}
+
+/** The error an invitation in this state answers with (null while it can still be used). */
+export function invitationStateError(view: InvitationView | null): AppError | null {
+  if (!view) return new AppError("not_found", "This invitation link is not valid. Check that the whole link was copied.");
+  if (view.status === "expired") return new AppError("invitation_expired");
+  if (view.status === "used") return new AppError("invitation_used");
+  if (view.status === "withdrawn") return new AppError("invitation_withdrawn");
+  return null;
+}
+
+/**
+ * The signed-in user accepts: the link must be open and addressed to their e-mail. The claim
+ * and the membership are one transaction, so a link works exactly once.
+ */
+export async function acceptInvitation(token: string, who: { id: string; email: string }): Promise<{ workspaceId: string; role: Role }> {
+  const view = await lookUpInvitation(token);
+  const stateError = invitationStateError(view);
+  if (stateError) throw stateError;
+  if (normalizeEmail(who.email) !== view!.email) {
+    throw new AppError("email_mismatch", `This invitation was sent to ${view!.email}. Sign in with that address to accept it.`);
+  }
+  return db.transaction(async (tx) => {
+    const claimed = await claimInvitation({ tokenHash: hashInvitationToken(token), userId: who.id }, tx);
+    if (!claimed) throw invitationStateError(await lookUpInvitation(token)) ?? new AppError("invitation_used");
+    const joined = await addMember({ workspaceId: claimed.workspaceId, userId: who.id, role: claimed.role }, tx);
+    await recordAudit(
+      {
+        action: "invitation.accept",
+        actorId: who.id,
+        actorEmail: who.email,
+        workspaceId: claimed.workspaceId,
+        targetType: "invitation",
+        targetId: claimed.id,
+        detail: { role: joined.role, alreadyMember: !joined.added },
+      },
+      tx,
+    );
+    return { workspaceId: claimed.workspaceId, role: joined.role };
+  });
+}
+
+/** True when an account already uses this e-mail (the invitation page then offers sign-in instead). */
+export async function accountExists(email: string): Promise<boolean> {
+  const [row] = await db.select({ id: user.id }).from(user).where(eq(sql`lower(${user.email})`, normalizeEmail(email)));
+  return Boolean(row);
+}

@@ -1,0 +1,69 @@
+// The words and layout of the mail the app sends. Plain text first; the HTML is the same text
+// with one button-like link, escaped.
+import { ROLE_INFO, type Role } from "./roles";
+import type { Mail } from "./mail";
+
+function escapeHtml(s: string): string {
+  return s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+}
+
+function layout(paragraphs: string[], action: { label: string; url: string }, closing: string): string {
+  const p = (t: string) => `<p style="margin:0 0 14px;line-height:1.5">${escapeHtml(t)}</p>`;
+  return [
+    `<div style="font-family:system-ui,sans-serif;color:#1d2329;background:#f6f3ec;padding:24px">`,
+    `<div style="max-width:520px;margin:0 auto;background:#fbfaf6;border:1px solid #cfc8b8;border-radius:6px;padding:24px">`,
+    `<p style="margin:0 0 18px;font-weight:600;font-size:17px">Counterpoise</p>`,
+    ...paragraphs.map(p),
+    `<p style="margin:20px 0"><a href="${escapeHtml(action.url)}" style="background:#1d2329;color:#fbfaf6;padding:10px 16px;border-radius:5px;text-decoration:none">${escapeHtml(action.label)}</a></p>`,
+    p(`Or paste this address into your browser: ${action.url}`),
+    `<p style="margin:18px 0 0;color:#6b7580;font-size:13px">${escapeHtml(closing)}</p>`,
+    `</div></div>`,
+  ].join("\n");
+}
+
+function compose(to: string, subject: string, paragraphs: string[], action: { label: string; url: string }, closing: string): Mail {
+  const text = [...paragraphs, `${action.label}: ${action.url}`, closing].join("\n\n");
+  return { to, subject, text, html: layout(paragraphs, action, closing) };
+}
+
+export function verificationMail(input: { to: string; name: string; url: string }): Mail {
+  return compose(
+    input.to,
+    "Confirm your e-mail address for Counterpoise",
+    [`Hello ${input.name},`, "Confirm that this address is yours to finish setting up your Counterpoise account. The link works for one hour."],
+    { label: "Confirm e-mail address", url: input.url },
+    "If you did not create an account, ignore this mail: nothing happens without the link.",
+  );
+}
+
+export function passwordResetMail(input: { to: string; name: string; url: string }): Mail {
+  return compose(
+    input.to,
+    "Choose a new Counterpoise password",
+    [`Hello ${input.name},`, "Someone asked to reset the password of your Counterpoise account. The link works once, for one hour."],
+    { label: "Choose a new password", url: input.url },
+    "If it was not you, ignore this mail: your password stays as it is.",
+  );
+}
+
+export function invitationMail(input: {
+  to: string;
+  inviterName: string;
+  workspaceName: string;
+  role: Role;
+  url: string;
+  expiresAt: Date;
+}): Mail {
+  const role = ROLE_INFO[input.role];
+  const until = input.expiresAt.toUTCString().replace(/:\d\d GMT$/, " UTC");
+  return compose(
+    input.to,
+    `${input.inviterName} invited you to "${input.workspaceName}" on Counterpoise`,
+    [
+      `${input.inviterName} invited you to join the workspace "${input.workspaceName}" as ${role.label.toLowerCase()}: ${role.summary}`,
+      `The link works once, until ${until}.`,
+    ],
+    { label: "Open the invitation", url: input.url },
+    "If you did not expect this, ignore this mail.",
+  );
+}

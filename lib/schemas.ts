@@ -1,0 +1,40 @@
+// Request shapes shared by the route handlers (which enforce them) and the forms (which show
+// the same messages before sending). Browser-safe.
+import { z } from "zod";
+import { ROLES } from "./roles";
+
+export const roleSchema = z.enum(ROLES, { error: "Choose owner, editor, checker or viewer." });
+
+export const workspaceNameSchema = z
+  .string()
+  .trim()
+  .min(2, "Give the workspace a name of at least 2 characters.")
+  .max(80, "Keep the workspace name under 80 characters.");
+
+export const emailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ error: "Enter an e-mail address like name@company.com." }).max(254, "That e-mail address is too long."));
+
+export const passwordSchema = z
+  .string()
+  .min(8, "Use at least 8 characters.")
+  .max(128, "Use at most 128 characters.");
+
+export const personNameSchema = z.string().trim().min(1, "Enter your name.").max(80, "Keep the name under 80 characters.");
+
+export const createWorkspaceInput = z.object({ name: workspaceNameSchema });
+export const renameWorkspaceInput = z.object({ name: workspaceNameSchema });
+export const inviteInput = z.object({ email: emailSchema, role: roleSchema });
+export const changeRoleInput = z.object({ role: roleSchema });
+export const invitationSignUpInput = z.object({ name: personNameSchema, password: passwordSchema });
+
+export const workspaceParams = z.object({ id: z.uuid() });
+export const memberParams = z.object({ id: z.uuid(), userId: z.string().min(1).max(100) });
+export const invitationParams = z.object({ id: z.uuid(), invitationId: z.uuid() });
+export const tokenParams = z.object({ token: z.string().min(10).max(200) });
+export const auditQuery = z.object({
+  before: z.coerce.number().int().positive().optional(),
+  limit: z.coerce.number().int().min(1).max(200).optional(),
+});

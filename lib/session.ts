@@ -1,0 +1,43 @@
+import "server-only";
+import { headers } from "next/headers";
+import { notFound, redirect } from "next/navigation";
+import { cache } from "react";
+import { getRole } from "@/db/queries/workspaces";
+import { getAuth, type AuthSession } from "./auth";
+import { can, type Permission, type Role } from "./roles";
+
+/** The session behind a request's cookies, or null. */
+export async function sessionFrom(reqHeaders: Headers): Promise<AuthSession | null> {
+  return getAuth().api.getSession({ headers: reqHeaders });
+}
+
+/** The signed-in session of the page being rendered (once per request), or null. */
+export const currentSession = cache(async (): Promise<AuthSession | null> => sessionFrom(await headers()));
+
+/** Only paths on this site may follow sign-in (never `//host` or a full URL). */
+export function safeNext(next: string | null | undefined, fallback = "/workspaces"): string {
+  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return fallback;
+  return next;
+}
+
+/** Pages for signed-in people call this first: signed out → /sign-in, then back to `next`. */
+export async function requirePageSession(next: string): Promise<AuthSession> {
+  const s = await currentSession();
+  if (!s) redirect(`/sign-in?next=${encodeURIComponent(safeNext(next))}`);
+  return s;
+}
+
+/**
+ * A workspace page's guard: signed in, a member (else the not-found page, so nobody learns
+ * what exists), and, when a permission is named, a role that has it (else `forbidden`).
+ */
+export async function requirePageRole(
+  workspaceId: string,
+  next: string,
+  permission?: Permission,
+): Promise<{ session: AuthSession; role: Role; allowed: boolean }> {
+  const session = await requirePageSession(next);
+  const role = /^[0-9a-f-]{36}$/i.test(workspaceId) ? await getRole(workspaceId, session.user.id) : null;
+  if (!role) notFound();
+  return { session, role, allowed: permission ? can(role, permission) : true };
+}
