@@ -9,6 +9,7 @@
 // that motion is the free motion of a body that tips.
 import { addOuter, dot3, norm3, solvePsd, zeroMat3, type Vec3 } from "./linalg";
 import type { BodyModel } from "./model";
+import { findRay } from "./ray";
 
 export interface SpringSolution {
   /** force in each spring (N, or N·m for a rotational spring) */
@@ -21,6 +22,8 @@ export interface SpringSolution {
   ray?: Vec3;
   /** Q's part that the engaged springs cannot balance (non-zero only with a ray) */
   unbalanced: Vec3;
+  /** set when no consistent engagement was found (a degenerate case); the result is the last tried */
+  inconsistent?: boolean;
 }
 
 const MAX_ITERATIONS = 200;
@@ -66,7 +69,9 @@ export function solveOneSided(model: BodyModel): SpringSolution {
       groups.forEach((g, gi) => {
         if (engaged[gi]) return;
         const gn = springs[g.normal].g;
-        if (dot3(gn, z) < -1e-9 * norm3(gn) * zn) closing.push(gi);
+        // closes, or (a friction contact) would grip the sliding motion
+        const gt = g.tangent >= 0 ? springs[g.tangent].g : null;
+        if (dot3(gn, z) < -1e-9 * norm3(gn) * zn || (gt && Math.abs(dot3(gt, z)) > 1e-9 * norm3(gt) * zn)) closing.push(gi);
       });
       if (closing.length === 0) return { ...sol, ray: z };
       engaged = engaged.slice();
@@ -99,7 +104,11 @@ export function solveOneSided(model: BodyModel): SpringSolution {
     if (release >= 0) engaged[release] = false;
     else engaged[engage] = true;
   }
-  return enumerate(model) ?? solveEngaged(model, engaged);
+  // The search cycled: settle it exactly, by a proof that nothing holds the body, or by trying
+  // every engagement when there are few.
+  const ray = findRay(model);
+  if (ray) return { ...solveEngaged(model, groups.map(() => false)), ray };
+  return enumerate(model) ?? { ...solveEngaged(model, engaged), inconsistent: true };
 }
 
 /** Last resort after a cycle: try every engagement (few groups only) and keep a consistent one. */

@@ -61,9 +61,11 @@ function supportStiffnesses(supports: Support[]): number[] {
 export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, PortFlow>): BodyModel {
   const bb = boundingBox(body.outline);
   const L = Math.hypot(bb.maxX - bb.minX, bb.maxY - bb.minY) || 1;
-  const origin: Vec2 = [(bb.minX + bb.maxX) / 2, (bb.minY + bb.maxY) / 2];
-  const [ox, oy] = origin;
   const cg = body.cg ?? polygonCentroid(body.outline);
+  // Moments are taken about the centre of gravity: an unbalanced force (unrestrained body) is
+  // then reported through the cg, where the inertial force of the motion it starts would act.
+  const origin: Vec2 = [cg[0], cg[1]];
+  const [ox, oy] = origin;
   const supports = sketch.supports.filter((s) => s.body === body.id);
   const springs: Spring[] = [];
   const groups: Group[] = [];

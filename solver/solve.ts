@@ -44,10 +44,10 @@ function solveBody(model: BodyModel, out: SolveResult): void {
     released = groups.map((g) => bilateral.r[g.normal] < -tol);
   } else {
     const one = solveOneSided(model);
-    if (one.ray) {
+    if (one.ray || one.inconsistent) {
       status = "tips";
       used = bilateral;
-      freeMotion = describeMotion(model, one.ray);
+      if (one.ray) freeMotion = describeMotion(model, one.ray);
       released = groups.map((g) => bilateral.r[g.normal] < -tol);
     } else {
       used = one;
