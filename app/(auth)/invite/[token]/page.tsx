@@ -1,0 +1,103 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { AuthCard } from "@/components/auth/AuthFrame";
+import { AcceptInvitationButton, InvitationSignUpForm, SwitchAccountButton } from "@/components/auth/InvitationActions";
+import { RoleBadge } from "@/components/workspaces/RoleBadge";
+import { Notice } from "@/components/shell/controls";
+import { accountExists, lookUpInvitation } from "@/lib/invitations";
+import { ROLE_INFO } from "@/lib/roles";
+import { currentSession } from "@/lib/session";
+
+export const metadata: Metadata = { title: "Invitation" };
+export const dynamic = "force-dynamic";
+
+const primary = "inline-flex w-full justify-center rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft";
+
+const REFUSALS = {
+  expired: { title: "This invitation has expired", body: "Invitation links work for a limited time. Ask an owner of the workspace to invite you again; the new mail has a fresh link." },
+  used: { title: "This invitation has already been used", body: "Each invitation link works once. If you joined with it, sign in to find the workspace; otherwise ask an owner for a new invitation." },
+  withdrawn: { title: "This invitation was withdrawn", body: "An owner of the workspace withdrew it, or sent a newer one that replaces it. Use the newest invitation mail, or ask an owner." },
+} as const;
+
+export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
+  const { token } = await params;
+  const view = await lookUpInvitation(token);
+  const session = await currentSession();
+  const here = `/invite/${token}`;
+
+  if (!view) {
+    return (
+      <AuthCard title="This invitation link is not valid">
+        <div className="space-y-4">
+          <Notice tone="error">We do not know this link. Check that the whole address from the mail was copied, or ask for a new invitation.</Notice>
+          <Link href={session ? "/workspaces" : "/sign-in"} className={primary}>
+            {session ? "Go to your workspaces" : "Sign in"}
+          </Link>
+        </div>
+      </AuthCard>
+    );
+  }
+
+  if (view.status !== "pending") {
+    const r = REFUSALS[view.status];
+    return (
+      <AuthCard title={r.title} lead={<>Workspace: <strong className="text-ink">{view.workspaceName}</strong></>}>
+        <div className="space-y-4">
+          <Notice tone="error">{r.body}</Notice>
+          <Link href={session ? "/workspaces" : "/sign-in"} className={primary}>
+            {session ? "Go to your workspaces" : "Sign in"}
+          </Link>
+        </div>
+      </AuthCard>
+    );
+  }
+
+  const lead = (
+    <div className="space-y-3">
+      <p>
+        {view.inviterName ?? "An owner"} invited <strong className="text-ink">{view.email}</strong> to the workspace{" "}
+        <strong className="text-ink">{view.workspaceName}</strong>.
+      </p>
+      <p className="flex items-center gap-2">
+        <RoleBadge role={view.role} />
+        <span>{ROLE_INFO[view.role].summary}</span>
+      </p>
+    </div>
+  );
+
+  if (session) {
+    if (session.user.email.toLowerCase() === view.email) {
+      return (
+        <AuthCard title="Join the workspace" lead={lead}>
+          <AcceptInvitationButton token={token} workspaceName={view.workspaceName} />
+        </AuthCard>
+      );
+    }
+    return (
+      <AuthCard title="This invitation is for another address" lead={lead}>
+        <div className="space-y-4">
+          <Notice tone="info">
+            You are signed in as <strong>{session.user.email}</strong>. Only {view.email} can accept this invitation.
+          </Notice>
+          <SwitchAccountButton next={here} email={view.email} />
+        </div>
+      </AuthCard>
+    );
+  }
+
+  if (await accountExists(view.email)) {
+    return (
+      <AuthCard title="Join the workspace" lead={lead}>
+        <Link href={`/sign-in?next=${encodeURIComponent(here)}&email=${encodeURIComponent(view.email)}`} className={primary}>
+          Sign in as {view.email} to join
+        </Link>
+      </AuthCard>
+    );
+  }
+
+  return (
+    <AuthCard title="Create your account to join" lead={lead} foot={<>Expires {view.expiresAt.toUTCString().replace(/:\d\d GMT$/, " UTC")}</>}>
+      <InvitationSignUpForm token={token} email={view.email} />
+    </AuthCard>
+  );
+}

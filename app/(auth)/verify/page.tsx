@@ -1,0 +1,67 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { AuthCard } from "@/components/auth/AuthFrame";
+import { MailboxHint } from "@/components/auth/MailboxHint";
+import { ResendVerificationForm } from "@/components/auth/ResendVerificationForm";
+import { Notice } from "@/components/shell/controls";
+
+export const metadata: Metadata = { title: "Confirm your e-mail" };
+
+type Search = Promise<{ sent?: string; confirmed?: string; error?: string }>;
+
+const primary = "inline-flex w-full justify-center rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft";
+
+export default async function VerifyPage({ searchParams }: { searchParams: Search }) {
+  const { sent, confirmed, error } = await searchParams;
+
+  if (error) {
+    const expired = error === "TOKEN_EXPIRED";
+    return (
+      <AuthCard title={expired ? "This link has expired" : "This link does not work"}>
+        <div className="space-y-5">
+          <Notice tone="error">
+            {expired
+              ? "Confirmation links work for one hour. Send yourself a new one below."
+              : "The confirmation link is not valid: it may have been used already, or copied only in part."}
+          </Notice>
+          <ResendVerificationForm />
+          <MailboxHint />
+        </div>
+      </AuthCard>
+    );
+  }
+
+  if (confirmed) {
+    return (
+      <AuthCard title="E-mail address confirmed">
+        <div className="space-y-4">
+          <Notice tone="success">Your account is ready. Sign in to open your personal workspace.</Notice>
+          <Link href="/sign-in" className={primary}>
+            Sign in
+          </Link>
+        </div>
+      </AuthCard>
+    );
+  }
+
+  return (
+    <AuthCard
+      title="Check your inbox"
+      lead={
+        sent ? (
+          <>
+            We sent a confirmation link to <strong className="text-ink">{sent}</strong>. Open it to finish setting up your account; it works for one hour.
+          </>
+        ) : (
+          "We sent you a confirmation link. Open it to finish setting up your account; it works for one hour."
+        )
+      }
+    >
+      <div className="space-y-4">
+        <p className="text-sm text-ink-soft">Nothing arrived after a few minutes? Check the spam folder, or send the link again.</p>
+        <ResendVerificationForm defaultEmail={sent ?? ""} label="Send the link again" />
+        <MailboxHint />
+      </div>
+    </AuthCard>
+  );
+}

@@ -1,0 +1,71 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { EmptyState, Panel } from "@/components/shell/controls";
+import { RoleBadge } from "@/components/workspaces/RoleBadge";
+import { RenameWorkspaceForm } from "@/components/workspaces/WorkspaceForms";
+import { getWorkspaceForMember, listMembers } from "@/db/queries/workspaces";
+import { can, ROLE_INFO } from "@/lib/roles";
+import { requirePageRole } from "@/lib/session";
+
+export const metadata: Metadata = { title: "Workspace" };
+
+export default async function WorkspacePage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const { session, role } = await requirePageRole(id, `/workspaces/${id}`);
+  const [ws, members] = await Promise.all([getWorkspaceForMember(id, session.user.id), listMembers(id, session.user.id)]);
+  if (!ws) return null;
+  const shown = members.slice(0, 6);
+  return (
+    <div className="space-y-6">
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <div>
+          <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">{ws.personal ? "Personal workspace" : "Workspace"}</p>
+          <h1 className="mt-1 text-2xl font-semibold tracking-tight">{ws.name}</h1>
+          <p className="mt-1.5 flex items-center gap-2 text-sm text-ink-soft">
+            You are <RoleBadge role={role} /> <span>{ROLE_INFO[role].summary}</span>
+          </p>
+        </div>
+        {can(role, "sketch.create") ? (
+          <Link href="/sketches/new" className="rounded-md bg-accent px-4 py-2 text-sm font-medium text-white hover:bg-accent-deep">
+            Start a sketch
+          </Link>
+        ) : null}
+      </div>
+
+      <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
+        <Panel title="Sketches" description="Free-body diagrams with their control volumes, saved in versions.">
+          <EmptyState title="No sketches saved here yet">
+            {can(role, "sketch.create")
+              ? "Start a sketch, then save it into this workspace. Its versions, checks and approvals will be listed here."
+              : "When an editor saves a sketch into this workspace, it will be listed here for you to read."}
+          </EmptyState>
+        </Panel>
+        <div className="space-y-6">
+          <Panel
+            title="People"
+            aside={
+              <Link href={`/workspaces/${id}/members`} className="text-sm font-medium text-ink-soft underline decoration-rule underline-offset-2 hover:text-ink">
+                {can(role, "invitations.create") ? "Manage" : "All members"}
+              </Link>
+            }
+          >
+            <ul className="space-y-2 text-sm">
+              {shown.map((m) => (
+                <li key={m.userId} className="flex items-center justify-between gap-2">
+                  <span className="truncate text-ink">{m.name}</span>
+                  <RoleBadge role={m.role} />
+                </li>
+              ))}
+            </ul>
+            {members.length > shown.length ? <p className="mt-2 text-xs text-ink-faint">and {members.length - shown.length} more</p> : null}
+          </Panel>
+          {can(role, "workspace.rename") ? (
+            <Panel title="Settings">
+              <RenameWorkspaceForm workspaceId={id} name={ws.name} />
+            </Panel>
+          ) : null}
+        </div>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { AppShell } from "@/components/shell/AppShell";
+import { EmptyState, Panel } from "@/components/shell/controls";
+import { RoleBadge } from "@/components/workspaces/RoleBadge";
+import { CreateWorkspaceForm } from "@/components/workspaces/WorkspaceForms";
+import { listWorkspacesForUser } from "@/db/queries/workspaces";
+import { requirePageSession } from "@/lib/session";
+
+export const metadata: Metadata = { title: "Workspaces" };
+
+export default async function WorkspacesPage() {
+  const session = await requirePageSession("/workspaces");
+  const workspaces = await listWorkspacesForUser(session.user.id);
+  return (
+    <AppShell next="/workspaces">
+      <div className="space-y-8">
+        <div>
+          <h1 className="text-2xl font-semibold tracking-tight">Workspaces</h1>
+          <p className="mt-1 text-ink-soft">Each workspace holds sketches and the people who prepare, check and approve them.</p>
+        </div>
+        {workspaces.length ? (
+          <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+            {workspaces.map((w) => (
+              <li key={w.id}>
+                <Link href={`/workspaces/${w.id}`} className="block h-full rounded-lg border border-rule bg-paper-card px-4 py-3.5 shadow-[0_1px_0_#e2dccf] hover:border-ink/40">
+                  <span className="flex items-start justify-between gap-3">
+                    <span className="font-semibold text-ink">{w.name}</span>
+                    <RoleBadge role={w.role} />
+                  </span>
+                  <span className="mt-2 block text-sm text-ink-soft">
+                    {w.personal ? "Personal · " : ""}
+                    <span className="num">{w.memberCount}</span> {w.memberCount === 1 ? "member" : "members"}
+                  </span>
+                </Link>
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <EmptyState title="You are not in any workspace">Create one below, or ask a colleague to invite you to theirs.</EmptyState>
+        )}
+        <div id="new">
+          <Panel title="New workspace" description="For a project or a team. You become its owner and can invite colleagues.">
+            <CreateWorkspaceForm />
+          </Panel>
+        </div>
+      </div>
+    </AppShell>
+  );
+}

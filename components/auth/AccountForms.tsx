@@ -1,0 +1,118 @@
+"use client";
+import { useRouter } from "next/navigation";
+import { useState, type FormEvent } from "react";
+import { Button, Field, Notice } from "@/components/shell/controls";
+import { authClient } from "@/lib/auth-client";
+import { passwordSchema, personNameSchema } from "@/lib/schemas";
+import { authErrorMessage } from "./messages";
+
+type Status = { tone: "success" | "error"; text: string } | null;
+
+export function ProfileForm({ name: initial, email }: { name: string; email: string }) {
+  const router = useRouter();
+  const [name, setName] = useState(initial);
+  const [error, setError] = useState<string | undefined>();
+  const [status, setStatus] = useState<Status>(null);
+  const [busy, setBusy] = useState(false);
+  async function onSubmit(e: FormEvent) {
+    e.preventDefault();
+    const parsed = personNameSchema.safeParse(name);
+    setError(parsed.error?.issues[0]?.message);
+    if (!parsed.success) return;
+    setBusy(true);
+    const { error: err } = await authClient.updateUser({ name: parsed.data });
+    setBusy(false);
+    setStatus(err ? { tone: "error", text: authErrorMessage(err) } : { tone: "success", text: "Name saved." });
+    if (!err) router.refresh();
+  }
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+      {status ? <Notice tone={status.tone}>{status.text}</Notice> : null}
+      <Field id="profile-name" label="Name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={error} hint="Shown on versions you prepare, check or approve." />
+      <Field id="profile-email" label="E-mail address" value={email} readOnly disabled hint="You sign in with this address; it is confirmed." />
+      <Button type="submit" tone="secondary" busy={busy} disabled={name.trim() === initial}>
+        Save name
+      </Button>
+    </form>
+  );
+}
+
+export function ChangePasswordForm() {
+  const [current, setCurrent] = useState("");
+  const [next, setNext] = useState("");
+  const [repeat, setRepeat] = useState("");
+  const [signOutOthers, setSignOutOthers] = useState(true);
+  const [errors, setErrors] = useState<{ current?: string; next?: string; repeat?: string }>({});
+  const [status, setStatus] = useState<Status>(null);
+  const [busy, setBusy] = useState(false);
+
+  async function onSubmit(e: FormEvent) {
+    e.preventDefault();
+    const found = {
+      current: current ? undefined : "Enter your current password.",
+      next: passwordSchema.safeParse(next).error?.issues[0]?.message,
+      repeat: next !== repeat ? "The two new passwords are not the same." : undefined,
+    };
+    setErrors(found);
+    if (found.current || found.next || found.repeat) return;
+    setBusy(true);
+    setStatus(null);
+    const { error } = await authClient.changePassword({ currentPassword: current, newPassword: next, revokeOtherSessions: signOutOthers });
+    setBusy(false);
+    if (error) {
+      if (error.code === "INVALID_PASSWORD") setErrors({ current: authErrorMessage(error) });
+      else setStatus({ tone: "error", text: authErrorMessage(error) });
+      return;
+    }
+    setCurrent("");
+    setNext("");
+    setRepeat("");
+    setStatus({ tone: "success", text: signOutOthers ? "Password changed. Other devices were signed out." : "Password changed." });
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+      {status ? <Notice tone={status.tone}>{status.text}</Notice> : null}
+      <Field id="current-password" type="password" label="Current password" autoComplete="current-password" value={current} onChange={(e) => setCurrent(e.target.value)} error={errors.current} />
+      <div className="grid gap-4 sm:grid-cols-2">
+        <Field id="new-password" type="password" label="New password" autoComplete="new-password" value={next} onChange={(e) => setNext(e.target.value)} error={errors.next} hint="At least 8 characters." />
+        <Field id="repeat-password" type="password" label="New password, again" autoComplete="new-password" value={repeat} onChange={(e) => setRepeat(e.target.value)} error={errors.repeat} />
+      </div>
+      <label className="flex items-center gap-2 text-sm text-ink-soft">
+        <input type="checkbox" checked={signOutOthers} onChange={(e) => setSignOutOthers(e.target.checked)} className="h-4 w-4 accent-[#1d2329]" />
+        Sign out every other device
+      </label>
+      <Button type="submit" busy={busy}>
+        Change password
+      </Button>
+    </form>
+  );
+}
+
+export function NotificationsForm({ enabled: initial }: { enabled: boolean }) {
+  const [enabled, setEnabled] = useState(initial);
+  const [status, setStatus] = useState<Status>(null);
+  const [busy, setBusy] = useState(false);
+  async function toggle(value: boolean) {
+    setEnabled(value);
+    setBusy(true);
+    const { error } = await authClient.updateUser({ emailNotifications: value });
+    setBusy(false);
+    if (error) {
+      setEnabled(!value);
+      setStatus({ tone: "error", text: authErrorMessage(error) });
+    } else setStatus({ tone: "success", text: value ? "You will get these mails." : "You will not get these mails." });
+  }
+  return (
+    <div className="space-y-3">
+      <label className="flex items-start gap-3 text-sm">
+        <input type="checkbox" checked={enabled} disabled={busy} onChange={(e) => toggle(e.target.checked)} className="mt-0.5 h-4 w-4 accent-[#1d2329]" />
+        <span>
+          <span className="font-medium text-ink">E-mail me about my calcs</span>
+          <span className="block text-ink-soft">When someone mentions me in a comment, or a version I prepared is checked, returned or approved.</span>
+        </span>
+      </label>
+      {status ? <Notice tone={status.tone}>{status.text}</Notice> : null}
+    </div>
+  );
+}

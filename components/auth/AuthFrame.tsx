@@ -1,0 +1,36 @@
+import Link from "next/link";
+import type { ReactNode } from "react";
+import { CautionFooter } from "@/components/site/CautionFooter";
+import { Wordmark } from "@/components/site/Wordmark";
+
+/** The frame of the signed-out pages: the mark, one card on the drafting grid, the cautions below. */
+export function AuthFrame({ children }: { children: ReactNode }) {
+  return (
+    <div className="flex min-h-screen flex-col">
+      <header className="border-b border-rule/70">
+        <nav className="mx-auto flex max-w-6xl items-center justify-between px-6 py-4" aria-label="Main">
+          <Wordmark />
+          <Link href="/sketches/new" className="text-sm font-medium text-ink-soft hover:text-ink">
+            Try a sketch without an account
+          </Link>
+        </nav>
+      </header>
+      <main className="drafting-grid flex flex-1 items-start justify-center px-4 py-12 md:py-16">{children}</main>
+      <CautionFooter />
+    </div>
+  );
+}
+
+/** One titled card of the signed-out pages. */
+export function AuthCard({ title, lead, children, foot }: { title: string; lead?: ReactNode; children: ReactNode; foot?: ReactNode }) {
+  return (
+    <div className="w-full max-w-[420px]">
+      <div className="rounded-lg border border-rule bg-paper-card px-7 py-7 shadow-[0_1px_0_#cfc8b8,0_12px_32px_-18px_rgba(29,35,41,0.35)]">
+        <h1 className="text-2xl font-semibold tracking-tight text-ink">{title}</h1>
+        {lead ? <div className="mt-1.5 text-sm leading-relaxed text-ink-soft">{lead}</div> : null}
+        <div className="mt-6">{children}</div>
+      </div>
+      {foot ? <div className="mt-4 text-center text-sm text-ink-soft">{foot}</div> : null}
+    </div>
+  );
+}

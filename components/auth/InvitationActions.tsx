@@ -1,0 +1,96 @@
+"use client";
+import { useRouter } from "next/navigation";
+import { useState, type FormEvent } from "react";
+import { Button, Field, Notice } from "@/components/shell/controls";
+import { apiFetch, ApiError } from "@/lib/api-client";
+import { authClient } from "@/lib/auth-client";
+import { passwordSchema, personNameSchema } from "@/lib/schemas";
+
+const path = (token: string, action: string) => `/api/invitations/${encodeURIComponent(token)}/${action}`;
+
+/** Signed in with the invited address: one button to join. */
+export function AcceptInvitationButton({ token, workspaceName }: { token: string; workspaceName: string }) {
+  const router = useRouter();
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  async function accept() {
+    setBusy(true);
+    setError(null);
+    try {
+      const r = await apiFetch<{ workspaceId: string }>(path(token, "accept"), { method: "POST" });
+      router.push(`/workspaces/${r.workspaceId}`);
+      router.refresh();
+    } catch (err) {
+      setBusy(false);
+      setError(err instanceof ApiError ? err.message : "Something went wrong. Try again.");
+    }
+  }
+  return (
+    <div className="space-y-3">
+      {error ? <Notice tone="error">{error}</Notice> : null}
+      <Button onClick={accept} busy={busy} className="w-full">
+        Join {workspaceName}
+      </Button>
+    </div>
+  );
+}
+
+/** No account yet: name and password, and the link itself vouches for the e-mail address. */
+export function InvitationSignUpForm({ token, email }: { token: string; email: string }) {
+  const router = useRouter();
+  const [name, setName] = useState("");
+  const [password, setPassword] = useState("");
+  const [errors, setErrors] = useState<{ name?: string; password?: string }>({});
+  const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  async function onSubmit(e: FormEvent) {
+    e.preventDefault();
+    const next = {
+      name: personNameSchema.safeParse(name).error?.issues[0]?.message,
+      password: passwordSchema.safeParse(password).error?.issues[0]?.message,
+    };
+    setErrors(next);
+    if (next.name || next.password) return;
+    setBusy(true);
+    setError(null);
+    try {
+      const r = await apiFetch<{ workspaceId: string }>(path(token, "sign-up"), { method: "POST", body: { name: name.trim(), password } });
+      router.push(`/workspaces/${r.workspaceId}`);
+      router.refresh();
+    } catch (err) {
+      setBusy(false);
+      if (err instanceof ApiError && err.fields.length) setErrors({ name: err.field("name"), password: err.field("password") });
+      else setError(err instanceof ApiError ? err.message : "Something went wrong. Try again.");
+    }
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+      {error ? <Notice tone="error">{error}</Notice> : null}
+      <Field id="invite-email" label="E-mail address" value={email} readOnly disabled hint="The invitation was sent here, so it needs no separate confirmation." />
+      <Field id="name" name="name" label="Your name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
+      <Field id="password" name="password" type="password" label="Choose a password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} error={errors.password} hint="At least 8 characters." />
+      <Button type="submit" busy={busy} className="w-full">
+        Create account and join
+      </Button>
+    </form>
+  );
+}
+
+/** Signed in as someone else: sign out, then sign in with the invited address. */
+export function SwitchAccountButton({ next, email }: { next: string; email: string }) {
+  const router = useRouter();
+  const [busy, setBusy] = useState(false);
+  async function switchAccount() {
+    setBusy(true);
+    await authClient.signOut();
+    router.push(`/sign-in?next=${encodeURIComponent(next)}&email=${encodeURIComponent(email)}`);
+    router.refresh();
+  }
+  return (
+    <Button tone="secondary" onClick={switchAccount} busy={busy} className="w-full">
+      Sign out and sign in as {email}
+    </Button>
+  );
+}

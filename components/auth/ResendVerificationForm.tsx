@@ -1,0 +1,37 @@
+"use client";
+import { useState, type FormEvent } from "react";
+import { Button, Field, Notice } from "@/components/shell/controls";
+import { authClient } from "@/lib/auth-client";
+import { emailSchema } from "@/lib/schemas";
+import { authErrorMessage } from "./messages";
+
+/** Ask for a new confirmation link (the old one expired or was used). */
+export function ResendVerificationForm({ defaultEmail = "", label = "Send a new link" }: { defaultEmail?: string; label?: string }) {
+  const [email, setEmail] = useState(defaultEmail);
+  const [state, setState] = useState<{ kind: "idle" | "sent" | "error"; text?: string }>({ kind: "idle" });
+  const [busy, setBusy] = useState(false);
+
+  async function onSubmit(e: FormEvent) {
+    e.preventDefault();
+    const parsed = emailSchema.safeParse(email);
+    if (!parsed.success) {
+      setState({ kind: "error", text: parsed.error.issues[0].message });
+      return;
+    }
+    setBusy(true);
+    const { error } = await authClient.sendVerificationEmail({ email: parsed.data, callbackURL: "/verify?confirmed=1" });
+    setBusy(false);
+    setState(error ? { kind: "error", text: authErrorMessage(error) } : { kind: "sent", text: parsed.data });
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="space-y-3" noValidate>
+      {state.kind === "sent" ? <Notice tone="success">A new link is on its way to {state.text} (if it has an account waiting for confirmation).</Notice> : null}
+      {state.kind === "error" ? <Notice tone="error">{state.text}</Notice> : null}
+      <Field id="resend-email" type="email" label="E-mail address" autoComplete="email" value={email} onChange={(e) => setEmail(e.target.value)} />
+      <Button type="submit" tone="secondary" busy={busy} className="w-full">
+        {label}
+      </Button>
+    </form>
+  );
+}

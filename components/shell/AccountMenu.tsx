@@ -1,0 +1,53 @@
+"use client";
+import { useRouter } from "next/navigation";
+import Link from "next/link";
+import { useState } from "react";
+import { authClient } from "@/lib/auth-client";
+import { Disclosure } from "./Disclosure";
+
+function initials(name: string): string {
+  const parts = name.trim().split(/\s+/);
+  return ((parts[0]?.[0] ?? "") + (parts.length > 1 ? parts[parts.length - 1][0] : "")).toUpperCase() || "?";
+}
+
+/** The signed-in person: their settings, and signing out. */
+export function AccountMenu({ name, email }: { name: string; email: string }) {
+  const router = useRouter();
+  const [leaving, setLeaving] = useState(false);
+  async function signOut() {
+    setLeaving(true);
+    await authClient.signOut();
+    router.push("/sign-in");
+    router.refresh();
+  }
+  return (
+    <Disclosure
+      label={`Account: ${name}`}
+      align="right"
+      width="w-64"
+      button={
+        <span aria-hidden="true" className="flex h-8 w-8 items-center justify-center rounded-full border border-ink/20 bg-paper-deep text-xs font-semibold text-ink">
+          {initials(name)}
+        </span>
+      }
+    >
+      {(close) => (
+        <div>
+          <div className="border-b border-rule-soft px-2.5 pb-2 pt-1.5">
+            <p className="truncate text-sm font-semibold text-ink">{name}</p>
+            <p className="truncate text-xs text-ink-faint">{email}</p>
+          </div>
+          <Link href="/account" onClick={close} className="mt-1 block rounded-md px-2.5 py-2 text-sm text-ink hover:bg-paper-deep">
+            Account settings
+          </Link>
+          <Link href="/workspaces" onClick={close} className="block rounded-md px-2.5 py-2 text-sm text-ink hover:bg-paper-deep">
+            All workspaces
+          </Link>
+          <button type="button" onClick={signOut} disabled={leaving} className="block w-full rounded-md px-2.5 py-2 text-left text-sm text-accent-deep hover:bg-accent-soft/50">
+            {leaving ? "Signing out…" : "Sign out"}
+          </button>
+        </div>
+      )}
+    </Disclosure>
+  );
+}

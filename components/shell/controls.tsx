@@ -1,0 +1,153 @@
+// Form controls and small status pieces shared by the account, workspace and (later) sketch screens.
+import type { ButtonHTMLAttributes, InputHTMLAttributes, ReactNode, SelectHTMLAttributes } from "react";
+
+type Tone = "primary" | "secondary" | "danger" | "quiet";
+
+const TONES: Record<Tone, string> = {
+  primary: "bg-ink text-paper hover:bg-ink-soft disabled:bg-ink-faint",
+  secondary: "border border-ink/20 bg-paper-card text-ink hover:border-ink/45 disabled:text-ink-faint",
+  danger: "border border-accent/40 bg-paper-card text-accent-deep hover:border-accent hover:bg-accent-soft/40 disabled:text-ink-faint",
+  quiet: "text-ink-soft hover:text-ink hover:bg-paper-deep disabled:text-ink-faint",
+};
+
+export function Button({
+  tone = "primary",
+  busy = false,
+  size = "md",
+  className = "",
+  children,
+  ...rest
+}: ButtonHTMLAttributes<HTMLButtonElement> & { tone?: Tone; busy?: boolean; size?: "sm" | "md" }) {
+  const sizing = size === "sm" ? "px-2.5 py-1 text-[13px]" : "px-4 py-2 text-sm";
+  return (
+    <button
+      {...rest}
+      disabled={rest.disabled || busy}
+      aria-busy={busy || undefined}
+      className={`inline-flex items-center justify-center gap-2 rounded-md font-medium transition-colors disabled:cursor-not-allowed ${sizing} ${TONES[tone]} ${className}`}
+    >
+      {busy ? <Spinner /> : null}
+      {children}
+    </button>
+  );
+}
+
+export function Spinner({ label }: { label?: string }) {
+  return (
+    <span className="inline-flex items-center gap-2" role={label ? "status" : undefined}>
+      <span aria-hidden="true" className="inline-block h-3.5 w-3.5 animate-spin rounded-full border-2 border-current border-r-transparent" />
+      {label ? <span>{label}</span> : null}
+    </span>
+  );
+}
+
+export function Field({
+  label,
+  hint,
+  error,
+  id,
+  ...input
+}: InputHTMLAttributes<HTMLInputElement> & { label: string; hint?: ReactNode; error?: string; id: string }) {
+  const described = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ") || undefined;
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-medium text-ink">
+        {label}
+      </label>
+      <input
+        id={id}
+        {...input}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={described}
+        className={`block w-full rounded-md border bg-paper-card px-3 py-2 text-[15px] text-ink shadow-[inset_0_1px_0_rgba(29,35,41,0.04)] outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25 disabled:bg-paper-deep ${
+          error ? "border-accent" : "border-rule"
+        }`}
+      />
+      {hint && !error ? (
+        <p id={`${id}-hint`} className="text-xs text-ink-faint">
+          {hint}
+        </p>
+      ) : null}
+      {error ? (
+        <p id={`${id}-error`} className="text-xs font-medium text-accent-deep">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+export function Select({
+  label,
+  id,
+  hideLabel = false,
+  children,
+  ...props
+}: SelectHTMLAttributes<HTMLSelectElement> & { label: string; id: string; hideLabel?: boolean }) {
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className={hideLabel ? "sr-only" : "block text-sm font-medium text-ink"}>
+        {label}
+      </label>
+      <select
+        id={id}
+        {...props}
+        className="block w-full rounded-md border border-rule bg-paper-card px-2.5 py-2 text-sm text-ink outline-none focus:border-ink focus:ring-2 focus:ring-accent/25 disabled:bg-paper-deep disabled:text-ink-faint"
+      >
+        {children}
+      </select>
+    </div>
+  );
+}
+
+type NoticeTone = "error" | "success" | "info";
+const NOTICE: Record<NoticeTone, { box: string; mark: string }> = {
+  error: { box: "border-accent/40 bg-accent-soft/50 text-accent-deep", mark: "!" },
+  success: { box: "border-reaction/30 bg-reaction-soft/70 text-reaction", mark: "✓" },
+  info: { box: "border-rule bg-paper-deep/70 text-ink-soft", mark: "i" },
+};
+
+/** A message box marked by a symbol and words, not colour alone. */
+export function Notice({ tone = "info", title, children }: { tone?: NoticeTone; title?: string; children?: ReactNode }) {
+  const t = NOTICE[tone];
+  return (
+    <div role={tone === "error" ? "alert" : "status"} className={`flex gap-3 rounded-md border px-3.5 py-3 text-sm ${t.box}`}>
+      <span aria-hidden="true" className="mt-px flex h-5 w-5 shrink-0 items-center justify-center rounded-full border border-current text-xs font-bold">
+        {t.mark}
+      </span>
+      <div className="space-y-1">
+        {title ? <p className="font-semibold">{title}</p> : null}
+        {children ? <div className="leading-relaxed">{children}</div> : null}
+      </div>
+    </div>
+  );
+}
+
+export function Skeleton({ className = "" }: { className?: string }) {
+  return <span aria-hidden="true" className={`block animate-pulse rounded bg-rule-soft ${className}`} />;
+}
+
+export function EmptyState({ title, children, action }: { title: string; children?: ReactNode; action?: ReactNode }) {
+  return (
+    <div className="drafting-grid rounded-lg border border-dashed border-rule px-6 py-10 text-center">
+      <p className="font-semibold text-ink">{title}</p>
+      {children ? <div className="mx-auto mt-1.5 max-w-md text-sm text-ink-soft">{children}</div> : null}
+      {action ? <div className="mt-4 flex justify-center">{action}</div> : null}
+    </div>
+  );
+}
+
+export function Panel({ title, description, children, aside }: { title: string; description?: ReactNode; children: ReactNode; aside?: ReactNode }) {
+  return (
+    <section className="rounded-lg border border-rule bg-paper-card shadow-[0_1px_0_#e2dccf]" aria-label={title}>
+      <header className="flex flex-wrap items-start justify-between gap-3 border-b border-rule-soft px-5 py-4">
+        <div>
+          <h2 className="text-base font-semibold text-ink">{title}</h2>
+          {description ? <p className="mt-0.5 text-sm text-ink-soft">{description}</p> : null}
+        </div>
+        {aside}
+      </header>
+      <div className="px-5 py-4">{children}</div>
+    </section>
+  );
+}

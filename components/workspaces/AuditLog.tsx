@@ -1,0 +1,74 @@
+"use client";
+import { useInfiniteQuery } from "@tanstack/react-query";
+import { Button, EmptyState, Notice, Skeleton } from "@/components/shell/controls";
+import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
+import { auditSentence, type AuditEntry } from "./auditSentence";
+import { formatDateTime } from "./format";
+
+type Page = { events: AuditEntry[]; nextBefore: number | null };
+
+/** The owners' audit log, newest first, fifty at a time. */
+export function AuditLog({ workspaceId }: { workspaceId: string }) {
+  const path = `/api/workspaces/${workspaceId}/audit`;
+  const q = useInfiniteQuery({
+    queryKey: apiKey(path),
+    queryFn: ({ pageParam }) => apiFetch<Page>(pageParam ? `${path}?before=${pageParam}` : path),
+    initialPageParam: 0,
+    getNextPageParam: (last) => last.nextBefore ?? undefined,
+  });
+
+  if (q.isPending) {
+    return (
+      <div className="space-y-3" aria-label="Loading the audit log">
+        {[0, 1, 2, 3].map((i) => (
+          <Skeleton key={i} className="h-5 w-full" />
+        ))}
+      </div>
+    );
+  }
+  if (q.isError) {
+    return (
+      <Notice tone="error" title="The audit log could not be loaded">
+        {q.error instanceof ApiError ? q.error.message : "Try again in a moment."}
+      </Notice>
+    );
+  }
+  const events = q.data.pages.flatMap((p) => p.events);
+  if (!events.length) return <EmptyState title="Nothing recorded yet">Sign-ins, invitations, role changes and removals appear here.</EmptyState>;
+
+  return (
+    <div className="space-y-4">
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm">
+          <caption className="sr-only">Audit log, newest first</caption>
+          <thead>
+            <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
+              <th scope="col" className="w-52 py-2 pr-4 font-semibold">When</th>
+              <th scope="col" className="w-56 py-2 pr-4 font-semibold">Who</th>
+              <th scope="col" className="py-2 font-semibold">What</th>
+            </tr>
+          </thead>
+          <tbody>
+            {events.map((e) => (
+              <tr key={e.id} className="border-b border-rule-soft align-top last:border-0">
+                <td className="num whitespace-nowrap py-2.5 pr-4 text-ink-soft">{formatDateTime(e.at)}</td>
+                <td className="py-2.5 pr-4">
+                  <span className="font-medium text-ink">{e.actorName ?? "Deleted account"}</span>
+                  {e.actorEmail ? <span className="block text-xs text-ink-faint">{e.actorEmail}</span> : null}
+                </td>
+                <td className="py-2.5 text-ink">{auditSentence(e)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {q.hasNextPage ? (
+        <Button tone="secondary" busy={q.isFetchingNextPage} onClick={() => q.fetchNextPage()}>
+          Show older entries
+        </Button>
+      ) : (
+        <p className="text-xs text-ink-faint">That is everything recorded for this workspace.</p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,85 @@
+"use client";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { Button, EmptyState, Notice, Skeleton } from "@/components/shell/controls";
+import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
+import type { Role } from "@/lib/roles";
+import { formatDate, relativeExpiry } from "./format";
+import { RoleBadge } from "./RoleBadge";
+
+type Invitation = { id: string; email: string; role: Role; invitedBy: string | null; createdAt: string; expiresAt: string; status: "pending" | "expired" };
+
+/** Open invitations (owners): who, which role, by whom, until when; withdraw or send again. */
+export function InvitationsTable({ workspaceId }: { workspaceId: string }) {
+  const qc = useQueryClient();
+  const path = `/api/workspaces/${workspaceId}/invitations`;
+  const query = useQuery({ queryKey: apiKey(path), queryFn: () => apiFetch<{ invitations: Invitation[] }>(path) });
+  const refresh = () => qc.invalidateQueries({ queryKey: apiKey(path) });
+  const withdraw = useMutation({ mutationFn: (id: string) => apiFetch(`${path}/${id}`, { method: "DELETE" }), onSettled: refresh });
+  const resend = useMutation({ mutationFn: (inv: Invitation) => apiFetch(path, { method: "POST", body: { email: inv.email, role: inv.role } }), onSettled: refresh });
+
+  if (query.isPending) {
+    return (
+      <div className="space-y-2" aria-label="Loading the invitations">
+        <Skeleton className="h-4 w-2/3" />
+        <Skeleton className="h-4 w-1/2" />
+      </div>
+    );
+  }
+  if (query.isError) {
+    return <Notice tone="error">{query.error instanceof ApiError ? query.error.message : "The invitations could not be loaded."}</Notice>;
+  }
+  const rows = query.data.invitations;
+  if (!rows.length) {
+    return <EmptyState title="No open invitations">Invitations you send appear here until they are accepted, withdrawn or replaced.</EmptyState>;
+  }
+  const failure = withdraw.error ?? resend.error;
+  return (
+    <div className="space-y-3">
+      {failure ? <Notice tone="error">{failure instanceof ApiError ? failure.message : "That did not work. Try again."}</Notice> : null}
+      {resend.isSuccess ? <Notice tone="success">A new link was sent; the old one no longer works.</Notice> : null}
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm">
+          <caption className="sr-only">Open invitations</caption>
+          <thead>
+            <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
+              <th scope="col" className="py-2 pr-3 font-semibold">E-mail</th>
+              <th scope="col" className="py-2 pr-3 font-semibold">Role</th>
+              <th scope="col" className="py-2 pr-3 font-semibold">Invited</th>
+              <th scope="col" className="py-2 pr-3 font-semibold">Link</th>
+              <th scope="col" className="py-2 text-right font-semibold"><span className="sr-only">Actions</span></th>
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((inv) => (
+              <tr key={inv.id} className="border-b border-rule-soft last:border-0" data-testid={`invitation-${inv.email}`}>
+                <td className="py-2.5 pr-3 font-medium text-ink">{inv.email}</td>
+                <td className="py-2.5 pr-3"><RoleBadge role={inv.role} /></td>
+                <td className="num py-2.5 pr-3 text-ink-soft">
+                  {formatDate(inv.createdAt)}
+                  {inv.invitedBy ? <span className="text-ink-faint"> by {inv.invitedBy}</span> : null}
+                </td>
+                <td className="py-2.5 pr-3">
+                  {inv.status === "expired" ? (
+                    <span className="font-medium text-accent-deep">✕ Expired {relativeExpiry(inv.expiresAt).replace("expired ", "")}</span>
+                  ) : (
+                    <span className="text-ink-soft">Expires {relativeExpiry(inv.expiresAt)}</span>
+                  )}
+                </td>
+                <td className="py-2 text-right">
+                  <span className="inline-flex gap-1.5">
+                    <Button size="sm" tone="secondary" busy={resend.isPending && resend.variables?.id === inv.id} onClick={() => resend.mutate(inv)}>
+                      Send again
+                    </Button>
+                    <Button size="sm" tone="danger" busy={withdraw.isPending && withdraw.variables === inv.id} onClick={() => withdraw.mutate(inv.id)} aria-label={`Withdraw the invitation of ${inv.email}`}>
+                      Withdraw
+                    </Button>
+                  </span>
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,164 @@
+"use client";
+import { useRouter } from "next/navigation";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useState } from "react";
+import { Button, Notice, Select, Skeleton } from "@/components/shell/controls";
+import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
+import { can, ROLE_INFO, ROLES, type Role } from "@/lib/roles";
+import { formatDate } from "./format";
+import { RoleBadge } from "./RoleBadge";
+
+export type Member = { userId: string; name: string; email: string; role: Role; joinedAt: string };
+
+function RowActions({ member, canRemove, isSelf, lastOwner, onRemove, busy }: {
+  member: Member;
+  canRemove: boolean;
+  isSelf: boolean;
+  lastOwner: boolean;
+  onRemove: () => void;
+  busy: boolean;
+}) {
+  const [confirming, setConfirming] = useState(false);
+  if (lastOwner) return <span className="text-xs text-ink-faint">Last owner</span>;
+  if (!isSelf && !canRemove) return null;
+  const verb = isSelf ? "Leave" : "Remove";
+  if (!confirming) {
+    return (
+      <Button size="sm" tone="danger" onClick={() => setConfirming(true)} aria-label={`${verb} ${isSelf ? "this workspace" : member.name}`}>
+        {verb}
+      </Button>
+    );
+  }
+  return (
+    <span className="inline-flex items-center gap-1.5">
+      <Button size="sm" tone="danger" busy={busy} onClick={onRemove}>
+        {isSelf ? "Yes, leave" : `Yes, remove ${member.name.split(" ")[0]}`}
+      </Button>
+      <Button size="sm" tone="quiet" onClick={() => setConfirming(false)}>
+        Cancel
+      </Button>
+    </span>
+  );
+}
+
+/** Members and their roles. Owners change roles and remove people; everyone may leave (but the last owner). */
+export function MembersTable({
+  workspaceId,
+  members,
+  viewerRole,
+  viewerId,
+  loading,
+}: {
+  workspaceId: string;
+  members: Member[] | undefined;
+  viewerRole: Role;
+  viewerId: string;
+  loading: boolean;
+}) {
+  const router = useRouter();
+  const qc = useQueryClient();
+  const membersPath = `/api/workspaces/${workspaceId}/members`;
+  const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
+  const owners = members?.filter((m) => m.role === "owner").length ?? 0;
+  const manage = can(viewerRole, "members.changeRole");
+
+  const changeRole = useMutation({
+    mutationFn: (v: { member: Member; role: Role }) => apiFetch(`${membersPath}/${encodeURIComponent(v.member.userId)}`, { method: "PATCH", body: { role: v.role } }),
+    onSuccess: (_d, v) => setMessage({ tone: "success", text: `${v.member.name} is now ${ROLE_INFO[v.role].label.toLowerCase()}.` }),
+    onError: (err) => setMessage({ tone: "error", text: err instanceof ApiError ? err.message : "The role was not changed." }),
+    onSettled: () => qc.invalidateQueries({ queryKey: apiKey(`/api/workspaces/${workspaceId}`) }),
+  });
+
+  const remove = useMutation({
+    mutationFn: (member: Member) => apiFetch(`${membersPath}/${encodeURIComponent(member.userId)}`, { method: "DELETE" }),
+    onSuccess: (_d, member) => {
+      if (member.userId === viewerId) {
+        router.push("/workspaces");
+        router.refresh();
+        return;
+      }
+      setMessage({ tone: "success", text: `${member.name} was removed from the workspace.` });
+    },
+    onError: (err) => setMessage({ tone: "error", text: err instanceof ApiError ? err.message : "Nobody was removed." }),
+    onSettled: () => qc.invalidateQueries({ queryKey: apiKey(`/api/workspaces/${workspaceId}`) }),
+  });
+
+  return (
+    <div className="space-y-3">
+      {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm">
+          <caption className="sr-only">{loading ? "Loading the members" : "Members of this workspace"}</caption>
+          <thead>
+            <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
+              <th scope="col" className="py-2 pr-3 font-semibold">Name</th>
+              <th scope="col" className="py-2 pr-3 font-semibold">E-mail</th>
+              <th scope="col" className="w-44 py-2 pr-3 font-semibold">Role</th>
+              <th scope="col" className="py-2 pr-3 font-semibold">Joined</th>
+              <th scope="col" className="py-2 text-right font-semibold">
+                <span className="sr-only">Actions</span>
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {loading
+              ? ["w-32", "w-48", "w-24"].map((w, i) => (
+                  <tr key={i} className="border-b border-rule-soft" aria-hidden="true">
+                    {[w, "w-44", "w-20", "w-16", "w-12"].map((cw, j) => (
+                      <td key={j} className="py-3 pr-3">
+                        <Skeleton className={`h-4 ${cw}`} />
+                      </td>
+                    ))}
+                  </tr>
+                ))
+              : members?.map((m) => {
+                  const isSelf = m.userId === viewerId;
+                  const lastOwner = m.role === "owner" && owners <= 1;
+                  return (
+                    <tr key={m.userId} className="border-b border-rule-soft last:border-0" data-testid={`member-${m.email}`}>
+                      <td className="py-2.5 pr-3 font-medium text-ink">
+                        {m.name}
+                        {isSelf ? <span className="ml-1.5 rounded bg-paper-deep px-1.5 py-0.5 text-[11px] font-medium text-ink-soft">you</span> : null}
+                      </td>
+                      <td className="py-2.5 pr-3 text-ink-soft">{m.email}</td>
+                      <td className="py-2 pr-3">
+                        {manage ? (
+                          <Select
+                            id={`role-${m.userId}`}
+                            label={`Role of ${m.name}`}
+                            hideLabel
+                            value={m.role}
+                            disabled={lastOwner || changeRole.isPending}
+                            title={lastOwner ? "The last owner keeps the owner role: make someone else an owner first." : undefined}
+                            onChange={(e) => changeRole.mutate({ member: m, role: e.target.value as Role })}
+                          >
+                            {ROLES.map((r) => (
+                              <option key={r} value={r}>
+                                {ROLE_INFO[r].label}
+                              </option>
+                            ))}
+                          </Select>
+                        ) : (
+                          <RoleBadge role={m.role} />
+                        )}
+                      </td>
+                      <td className="num py-2.5 pr-3 text-ink-soft">{formatDate(m.joinedAt)}</td>
+                      <td className="py-2 text-right">
+                        <RowActions
+                          member={m}
+                          isSelf={isSelf}
+                          lastOwner={lastOwner}
+                          canRemove={can(viewerRole, "members.remove")}
+                          busy={remove.isPending}
+                          onRemove={() => remove.mutate(m)}
+                        />
+                      </td>
+                    </tr>
+                  );
+                })}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}
