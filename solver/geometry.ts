@@ -65,3 +65,16 @@ export function boundingBox(pts: Vec2[]): { minX: number; minY: number; maxX: nu
 export function momentOf(x: number, y: number, fx: number, fy: number): number {
   return x * fy - y * fx;
 }
+
+/** Largest distance between two corners. */
+export function polygonDiameter(pts: Vec2[]): number {
+  let d2 = 0;
+  for (let i = 0; i < pts.length; i++) {
+    for (let j = i + 1; j < pts.length; j++) {
+      const dx = pts[i][0] - pts[j][0];
+      const dy = pts[i][1] - pts[j][1];
+      if (dx * dx + dy * dy > d2) d2 = dx * dx + dy * dy;
+    }
+  }
+  return Math.sqrt(d2);
+}

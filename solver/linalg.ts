@@ -33,7 +33,13 @@ export interface Eigen3 {
 
 /** Eigen-decomposition of a symmetric 3 × 3 matrix by cyclic Jacobi rotations. */
 export function eigenSym3(input: Mat3): Eigen3 {
-  const a = Float64Array.from(input);
+  // Work on the matrix scaled to unit size: no overflow or denormals in the rotations.
+  let size = 0;
+  for (let i = 0; i < 9; i++) size = Math.max(size, Math.abs(input[i]));
+  if (!(size > 1e-290) || !Number.isFinite(size)) {
+    return { values: [0, 0, 0], vectors: [[1, 0, 0], [0, 1, 0], [0, 0, 1]] };
+  }
+  const a = Float64Array.from(input, (x) => x / size);
   // v holds eigenvectors as columns
   const v = new Float64Array([1, 0, 0, 0, 1, 0, 0, 0, 1]);
   for (let sweep = 0; sweep < 50; sweep++) {
@@ -72,7 +78,7 @@ export function eigenSym3(input: Mat3): Eigen3 {
     }
   }
   const order = [0, 1, 2].sort((i, j) => a[j * 4] - a[i * 4]);
-  const values = order.map((i) => a[i * 4]) as Vec3;
+  const values = order.map((i) => a[i * 4] * size) as Vec3;
   const vectors = order.map((i) => [v[i], v[3 + i], v[6 + i]]) as [Vec3, Vec3, Vec3];
   return { values, vectors };
 }

@@ -2,7 +2,7 @@
 // volume except the reactions, with the momentum flux moved to the force side) and the supports
 // as stiff springs. Generalized coordinates are scaled by the body size L so that forces and
 // moments compare: Q = (Fx, Fy, M/L) about a reference point O near the body, q = (ux, uy, L·θ).
-import { boundingBox, direction, momentOf, polygonCentroid } from "./geometry";
+import { boundingBox, direction, momentOf, polygonCentroid, polygonDiameter } from "./geometry";
 import type { PortFlow } from "./ports";
 import type { Body, EquationTerm, Sketch, Support, Vec2 } from "./types";
 
@@ -60,7 +60,11 @@ function supportStiffnesses(supports: Support[]): number[] {
 
 export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, PortFlow>): BodyModel {
   const bb = boundingBox(body.outline);
-  const L = Math.hypot(bb.maxX - bb.minX, bb.maxY - bb.minY) || 1;
+  /** the contract's length for a fixed support's default rotational stiffness k·L² */
+  const bboxDiagonal = Math.hypot(bb.maxX - bb.minX, bb.maxY - bb.minY) || 1;
+  // The scale of the generalized coordinates: the outline's diameter, which (unlike the box)
+  // does not change when the sketch is turned, so least-squares answers turn with it.
+  const L = polygonDiameter(body.outline) || 1;
   const cg = body.cg ?? polygonCentroid(body.outline);
   // Moments are taken about the centre of gravity: an unbalanced force (unrestrained body) is
   // then reported through the cg, where the inertial force of the motion it starts would act.
@@ -87,7 +91,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
       case "fixed": {
         forceSpring(si, "x", [1, 0], s.at, k, -1);
         forceSpring(si, "y", [0, 1], s.at, k, -1);
-        const kr = s.rotationalStiffness ?? k * L * L;
+        const kr = s.rotationalStiffness ?? k * bboxDiagonal * bboxDiagonal;
         springs.push({ support: si, role: "rot", g: new Float64Array([0, 0, 1 / L]), k: kr, group: -1 });
         break;
       }

@@ -1,0 +1,91 @@
+// Bad input: every error names the field and says what is wrong; nothing is solved.
+import { describe, expect, it } from "vitest";
+import { parseSketch, solveFile } from "@/solver";
+import { box, loadFixture, sketch } from "./helpers";
+
+const errorsOf = (doc: unknown) => {
+  const p = parseSketch(doc);
+  if (p.ok) throw new Error("expected errors");
+  return p.errors;
+};
+
+describe("invalid sketch files", () => {
+  it("not JSON", () => {
+    expect(errorsOf("{ bodies: ")[0].message).toMatch(/^not valid JSON/);
+  });
+  it("not a Counterpoise file", () => {
+    expect(errorsOf({ hello: 1 })).toEqual([{ path: "format", message: 'must be "counterpoise.sketch" (this does not look like a Counterpoise sketch file)' }]);
+  });
+  it("a newer version than this solver reads", () => {
+    expect(errorsOf({ format: "counterpoise.sketch", version: 99 })[0]).toEqual({
+      path: "version",
+      message: "is 99, newer than this version of Counterpoise reads (1); update Counterpoise to open it",
+    });
+  });
+
+  const doc = () => loadFixture("pump-skid-discharge.json") as Record<string, unknown> & { [k: string]: unknown[] };
+
+  it.each([
+    ["a port area of the wrong type", (d: ReturnType<typeof doc>) => ((d.ports[1] as Record<string, unknown>).area = true), "ports[1].area", /must be a number or an expression/],
+    ["a misspelt field", (d: ReturnType<typeof doc>) => ((d.ports[0] as Record<string, unknown>).massflow = 3), "ports[0].massflow", /is not a field here/],
+    ["an unknown support kind", (d: ReturnType<typeof doc>) => ((d.supports[0] as Record<string, unknown>).kind = "clamp"), "supports[0].kind", /pin, roller, contact, fixed, tie/],
+    ["a body with two corners", (d: ReturnType<typeof doc>) => ((d.bodies[0] as Record<string, unknown>).outline = [[0, 0], [1, 0]]), "bodies[0].outline", /at least 3 corners/],
+    ["a negative mass", (d: ReturnType<typeof doc>) => ((d.bodies[0] as Record<string, unknown>).mass = -5), "bodies[0].mass", /zero or more/],
+    ["a negative friction coefficient", (d: ReturnType<typeof doc>) => ((d.supports[1] as Record<string, unknown>).mu = -0.1), "supports[1].mu", /zero or more/],
+    ["a zero area", (d: ReturnType<typeof doc>) => ((d.ports[0] as Record<string, unknown>).area = 0), "ports[0].area", /more than zero/],
+    ["a length where a pressure belongs", (d: ReturnType<typeof doc>) => ((d.ports[0] as Record<string, unknown>).pressure = "3 m"), "ports[0].pressure", /is a length \(m\), but this field needs a pressure/],
+    ["a reference to a missing body", (d: ReturnType<typeof doc>) => ((d.supports[0] as Record<string, unknown>).body = "nope"), "supports[0].body", /names body "nope", which does not exist/],
+    ["a duplicate id", (d: ReturnType<typeof doc>) => ((d.supports[1] as Record<string, unknown>).id = "rear"), "supports[1].id", /already used by supports\[0\]/],
+    ["an empty expression", (d: ReturnType<typeof doc>) => ((d.ports[1] as Record<string, unknown>).velocity = ""), "ports[1].velocity", /is empty/],
+    ["a broken expression", (d: ReturnType<typeof doc>) => ((d.ports[1] as Record<string, unknown>).velocity = "24 m/"), "ports[1].velocity", /cannot read "24 m\/"/],
+  ] as const)("%s", (_name, mutate, path, message) => {
+    const d = doc();
+    mutate(d);
+    const errors = errorsOf(d);
+    const e = errors.find((x) => x.path === path);
+    expect(e, JSON.stringify(errors)).toBeDefined();
+    expect(e!.message).toMatch(message);
+  });
+
+  it("a port without enough information names the port and what is missing", () => {
+    const errors = errorsOf(
+      sketch({
+        bodies: [{ id: "b", outline: box(1, 1), mass: 0 }],
+        ports: [{ id: "jet", body: "b", kind: "outlet", at: [1, 0.5], angle: 0, velocity: 10 }],
+      }),
+    );
+    expect(errors).toEqual([{ path: "ports[0]", message: 'port "jet" needs a mass flow: give massFlow, or density and volumeFlow, or density, area and velocity' }]);
+  });
+
+  it("a gauge pressure without an area", () => {
+    const errors = errorsOf(
+      sketch({
+        bodies: [{ id: "b", outline: box(1, 1), mass: 0 }],
+        ports: [{ id: "jet", body: "b", kind: "inlet", at: [0, 0.5], angle: 0, massFlow: 0, pressure: "2 bar" }],
+      }),
+    );
+    expect(errors).toEqual([{ path: "ports[0].area", message: 'is required: port "jet" has a gauge pressure, and its force is pressure × area' }]);
+  });
+
+  it("a support that restrains x on a body free in x", () => {
+    const d = loadFixture("thrust-cart-free.json");
+    d.supports!.push({ id: "brake", body: "cart", kind: "pin", at: [1, 0] });
+    expect(errorsOf(d)).toEqual([
+      { path: "supports[2]", message: "restrains x, but the body is free to move in x (motion.freeX): remove the support or turn it to act along y only" },
+    ]);
+  });
+
+  it("a force needs magnitude and angle, or fx and fy", () => {
+    const errors = errorsOf(
+      sketch({ bodies: [{ id: "b", outline: box(1, 1), mass: 0 }], loads: [{ id: "F", body: "b", kind: "force", at: [0, 0], magnitude: 5 }] }),
+    );
+    expect(errors).toEqual([{ path: "loads[0].angle", message: "is required with magnitude" }]);
+  });
+
+  it("solveFile returns { ok: false, errors } and nothing partial", () => {
+    const d = loadFixture("pump-skid-discharge.json");
+    (d.ports![0] as Record<string, unknown>).area = "3 kg";
+    const r = solveFile(d);
+    expect(r).toEqual({ ok: false, errors: [{ path: "ports[0].area", message: "3 kg is a mass (kg), but this field needs an area (m²)" }] });
+  });
+});
