@@ -13,7 +13,7 @@ import { findRay } from "./ray";
 
 export interface SpringSolution {
   /** force in each spring (N, or N·m for a rotational spring) */
-  r: Float64Array;
+  r: number[];
   /** generalized displacement */
   q: Vec3;
   /** per group: engaged? */
@@ -35,7 +35,7 @@ export function solveEngaged(model: BodyModel, engaged: boolean[]): SpringSoluti
   const { springs } = model;
   for (const s of springs) if (s.group < 0 || engaged[s.group]) addOuter(h, s.g, s.k);
   const { x: q, nullPart } = solvePsd(h, model.Q);
-  const r = new Float64Array(springs.length);
+  const r: number[] = new Array(springs.length).fill(0);
   for (let i = 0; i < springs.length; i++) {
     const s = springs[i];
     if (s.group < 0 || engaged[s.group]) r[i] = -s.k * dot3(s.g, q);

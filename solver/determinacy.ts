@@ -1,6 +1,6 @@
 // Static determinacy of the supports as drawn, every one taken as bilateral: rank of the
 // support directions (with motion.freeX, the free acceleration counts as one more unknown).
-import { addOuter, eigenSym3, norm3, zeroMat3 } from "./linalg";
+import { addOuter, clearlyFullRank, eigenSym3, norm3, zeroMat3 } from "./linalg";
 import type { BodyModel } from "./model";
 import type { Determinacy } from "./types";
 
@@ -17,13 +17,16 @@ export function determinacyOf(model: BodyModel): Determinacy {
     const m = model.body.mass;
     if (m > 0) {
       // the inertial force −m·ax at the centre of gravity, per unit ax
-      const col = new Float64Array([-m, 0, (m * (model.cg[1] - model.origin[1])) / model.L]);
+      const col = [-m, 0, (m * (model.cg[1] - model.origin[1])) / model.L];
       addOuter(gram, col, 1 / (norm3(col) ** 2));
     }
   }
-  const { values } = eigenSym3(gram);
-  const tol = Math.max(values[0], 1e-300) * 1e-10;
-  const rank = values.filter((v) => v > tol).length;
+  let rank = 3;
+  if (!clearlyFullRank(gram)) {
+    const { values } = eigenSym3(gram);
+    const tol = Math.max(values[0], 1e-300) * 1e-10;
+    rank = values.filter((v) => v > tol).length;
+  }
   if (rank < 3) return { kind: "mechanism", degree: 3 - rank };
   if (unknowns > 3) return { kind: "indeterminate", degree: unknowns - 3 };
   return { kind: "determinate", degree: 0 };

@@ -1,15 +1,15 @@
 // Small dense linear algebra for the 3 × 3 systems of a rigid body in the plane.
-// Matrices are row-major Float64Array(9); vectors plain [a, b, c].
+// Matrices are row-major arrays of 9 (plain arrays: cheaper to make than typed ones); vectors [a, b, c].
 
 export type Vec3 = [number, number, number];
-export type Mat3 = Float64Array;
+export type Mat3 = number[];
 
 export function zeroMat3(): Mat3 {
-  return new Float64Array(9);
+  return [0, 0, 0, 0, 0, 0, 0, 0, 0];
 }
 
 /** M += k · g gᵀ */
-export function addOuter(m: Mat3, g: Vec3 | Float64Array, k: number): void {
+export function addOuter(m: Mat3, g: ArrayLike<number>, k: number): void {
   const a = g[0];
   const b = g[1];
   const c = g[2];
@@ -39,9 +39,9 @@ export function eigenSym3(input: Mat3): Eigen3 {
   if (!(size > 1e-290) || !Number.isFinite(size)) {
     return { values: [0, 0, 0], vectors: [[1, 0, 0], [0, 1, 0], [0, 0, 1]] };
   }
-  const a = Float64Array.from(input, (x) => x / size);
+  const a = input.map((x) => x / size);
   // v holds eigenvectors as columns
-  const v = new Float64Array([1, 0, 0, 0, 1, 0, 0, 0, 1]);
+  const v = [1, 0, 0, 0, 1, 0, 0, 0, 1];
   for (let sweep = 0; sweep < 50; sweep++) {
     const off = a[1] * a[1] + a[2] * a[2] + a[5] * a[5];
     const diag = a[0] * a[0] + a[4] * a[4] + a[8] * a[8];
@@ -92,8 +92,38 @@ export interface PseudoSolve {
   rank: number;
 }
 
+/**
+ * det(H) / (trace/3)³ above this means λmin/λmax > 3.7e-9, so H is safely of full rank (by the
+ * eigenvalue test too) and can be inverted directly: the common, fast case.
+ */
+const WELL_CONDITIONED = 1e-7;
+
+function det3(h: Mat3): number {
+  return h[0] * (h[4] * h[8] - h[5] * h[7]) - h[1] * (h[3] * h[8] - h[5] * h[6]) + h[2] * (h[3] * h[7] - h[4] * h[6]);
+}
+
+/** Is a positive semi-definite H clearly of full rank? */
+export function clearlyFullRank(h: Mat3): boolean {
+  const tr = (h[0] + h[4] + h[8]) / 3;
+  return tr > 0 && det3(h) > WELL_CONDITIONED * tr * tr * tr;
+}
+
 /** Solve H x = b for symmetric positive semi-definite H, splitting off H's null space. */
 export function solvePsd(h: Mat3, b: Vec3, relTol = 1e-10): PseudoSolve {
+  if (clearlyFullRank(h)) {
+    const d = det3(h);
+    const c00 = h[4] * h[8] - h[5] * h[7];
+    const c01 = h[2] * h[7] - h[1] * h[8];
+    const c02 = h[1] * h[5] - h[2] * h[4];
+    const c11 = h[0] * h[8] - h[2] * h[6];
+    const c12 = h[2] * h[3] - h[0] * h[5];
+    const c22 = h[0] * h[4] - h[1] * h[3];
+    return {
+      x: [(c00 * b[0] + c01 * b[1] + c02 * b[2]) / d, (c01 * b[0] + c11 * b[1] + c12 * b[2]) / d, (c02 * b[0] + c12 * b[1] + c22 * b[2]) / d],
+      nullPart: [0, 0, 0],
+      rank: 3,
+    };
+  }
   const { values, vectors } = eigenSym3(h);
   const tol = Math.max(values[0], 0) * relTol;
   const x: Vec3 = [0, 0, 0];

@@ -14,7 +14,7 @@ export interface Spring {
   support: number;
   role: "x" | "y" | "n" | "t" | "rot";
   /** generalized direction (scaled) */
-  g: Float64Array;
+  g: number[];
   /** N/m, or N·m/rad for the rotational spring */
   k: number;
   /** contact or tie group this spring belongs to, or -1 when always engaged */
@@ -65,7 +65,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   // The scale of the generalized coordinates: the outline's diameter, which (unlike the box)
   // does not change when the sketch is turned, so least-squares answers turn with it.
   const L = polygonDiameter(body.outline) || 1;
-  const cg = body.cg ?? polygonCentroid(body.outline);
+  const cg: Vec2 = body.cg ? copy(body.cg) : polygonCentroid(body.outline);
   // Moments are taken about the centre of gravity: an unbalanced force (unrestrained body) is
   // then reported through the cg, where the inertial force of the motion it starts would act.
   const origin: Vec2 = [cg[0], cg[1]];
@@ -76,7 +76,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   const ks = supportStiffnesses(supports);
 
   const forceSpring = (si: number, role: Spring["role"], e: Vec2, at: Vec2, k: number, group: number) => {
-    const g = new Float64Array([e[0], e[1], momentOf(at[0] - ox, at[1] - oy, e[0], e[1]) / L]);
+    const g = [e[0], e[1], momentOf(at[0] - ox, at[1] - oy, e[0], e[1]) / L];
     springs.push({ support: si, role, g, k, group });
     return springs.length - 1;
   };
@@ -92,7 +92,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         forceSpring(si, "x", [1, 0], s.at, k, -1);
         forceSpring(si, "y", [0, 1], s.at, k, -1);
         const kr = s.rotationalStiffness ?? k * bboxDiagonal * bboxDiagonal;
-        springs.push({ support: si, role: "rot", g: new Float64Array([0, 0, 1 / L]), k: kr, group: -1 });
+        springs.push({ support: si, role: "rot", g: [0, 0, 1 / L], k: kr, group: -1 });
         break;
       }
       case "roller":
@@ -134,9 +134,9 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         fx = l.fx ?? 0;
         fy = l.fy ?? 0;
       }
-      forceTerms.push({ id: l.id, body: body.id, kind: "force", label: `force ${lname}`, fx, fy, m: 0, at: l.at });
+      forceTerms.push({ id: l.id, body: body.id, kind: "force", label: `force ${lname}`, fx, fy, m: 0, at: copy(l.at) });
     } else if (l.kind === "couple") {
-      forceTerms.push({ id: l.id, body: body.id, kind: "couple", label: `couple ${lname}`, fx: 0, fy: 0, m: l.value, at: l.at });
+      forceTerms.push({ id: l.id, body: body.id, kind: "couple", label: `couple ${lname}`, fx: 0, fy: 0, m: l.value, ...(l.at ? { at: copy(l.at) } : {}) });
     } else {
       // A linear load = two triangles: w1·ℓ/2 at ℓ/3 from `from`, w2·ℓ/2 at ℓ/3 from `to`.
       const len = Math.hypot(l.to[0] - l.from[0], l.to[1] - l.from[1]);
@@ -169,7 +169,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
     if (pressure !== 0) {
       // pushes inward at both: along the flow at an inlet, against it at an outlet
       const f = pressure * (p.area ?? 0) * (p.kind === "inlet" ? 1 : -1);
-      forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: `pressure at ${pname}`, fx: f * e[0], fy: f * e[1], m: 0, at: p.at });
+      forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: `pressure at ${pname}`, fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) });
     }
     const flow = flows.get(p.id)!;
     const mv = flow.massFlow * flow.velocity * (p.kind === "outlet" ? 1 : -1);
@@ -184,7 +184,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         fx,
         fy,
         m: 0,
-        at: p.at,
+        at: copy(p.at),
       });
       mfx += fx;
       mfy += fy;
@@ -234,3 +234,6 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
     momentum: { fx: mfx, fy: mfy, m: mm },
   };
 }
+
+/** Results never share arrays with the sketch (a sweep changes the sketch in place). */
+const copy = (p: Vec2): Vec2 => [p[0], p[1]];

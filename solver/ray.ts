@@ -38,10 +38,10 @@ function orthonormal(rows: ArrayLike<number>[]): Vec3[] {
 }
 
 export function findRay(model: BodyModel): Vec3 | null {
-  const bilateral: Float64Array[] = [];
-  const oneSided: Float64Array[] = [];
+  const bilateral: number[][] = [];
+  const oneSided: number[][] = [];
   /** friction springs, by the index of their contact's normal in `oneSided` */
-  const friction: Array<Float64Array | null> = [];
+  const friction: Array<number[] | null> = [];
   for (const g of model.groups) {
     oneSided.push(model.springs[g.normal].g);
     friction.push(g.tangent >= 0 ? model.springs[g.tangent].g : null);
@@ -88,7 +88,7 @@ export function findRay(model: BodyModel): Vec3 | null {
     const onPlane = projectOut(qFree, [[gFree[0] / gn, gFree[1] / gn, gFree[2] / gn]]);
     consider(onPlane);
   }
-  const planes: ArrayLike<number>[] = [...eq, ...oneSided, ...friction.filter((t): t is Float64Array => t !== null)];
+  const planes: ArrayLike<number>[] = [...eq, ...oneSided, ...friction.filter((t): t is number[] => t !== null)];
   for (let i = 0; i < planes.length; i++) {
     for (let j = i + 1; j < planes.length; j++) {
       const c = cross(planes[i], planes[j]);

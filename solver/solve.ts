@@ -138,7 +138,7 @@ function solveBody(model: BodyModel, out: SolveResult): void {
       fx: reaction.fx,
       fy: reaction.fy,
       m: reaction.m,
-      at: s.at,
+      at: [s.at[0], s.at[1]],
     });
   });
 

@@ -25,17 +25,19 @@ interface Scale {
   unit: string;
   /** SI value per one of this unit */
   factor: number;
+  /** smallest value (in this unit) shown in it; default 1 */
+  min?: number;
 }
 
 /** Units per quantity and system, largest first; the first whose value is ≥ 1 is chosen. */
 const UNITS: Record<Quantity, Record<UnitSystem, Scale[]>> = {
   force: {
     SI: [{ unit: "MN", factor: 1e6 }, { unit: "kN", factor: 1e3 }, { unit: "N", factor: 1 }],
-    US: [{ unit: "kip", factor: 1000 * LBF_N }, { unit: "lbf", factor: LBF_N }],
+    US: [{ unit: "kip", factor: 1000 * LBF_N, min: 10 }, { unit: "lbf", factor: LBF_N }],
   },
   moment: {
     SI: [{ unit: "MN·m", factor: 1e6 }, { unit: "kN·m", factor: 1e3 }, { unit: "N·m", factor: 1 }],
-    US: [{ unit: "kip·ft", factor: 1000 * LBF_N * FOOT_M }, { unit: "lbf·ft", factor: LBF_N * FOOT_M }],
+    US: [{ unit: "kip·ft", factor: 1000 * LBF_N * FOOT_M, min: 10 }, { unit: "lbf·ft", factor: LBF_N * FOOT_M }],
   },
   length: { SI: [{ unit: "m", factor: 1 }], US: [{ unit: "ft", factor: FOOT_M }] },
   smallLength: { SI: [{ unit: "mm", factor: 1e-3 }], US: [{ unit: "in", factor: INCH_M }] },
@@ -46,11 +48,11 @@ const UNITS: Record<Quantity, Record<UnitSystem, Scale[]>> = {
   massFlow: { SI: [{ unit: "kg/s", factor: 1 }], US: [{ unit: "lb/s", factor: LBM_KG }] },
   pressure: {
     SI: [{ unit: "MPa", factor: 1e6 }, { unit: "kPa", factor: 1e3 }, { unit: "Pa", factor: 1 }],
-    US: [{ unit: "ksi", factor: 1000 * PSI_PA }, { unit: "psi", factor: PSI_PA }],
+    US: [{ unit: "ksi", factor: 1000 * PSI_PA, min: 10 }, { unit: "psi", factor: PSI_PA }],
   },
   velocity: { SI: [{ unit: "m/s", factor: 1 }], US: [{ unit: "ft/s", factor: FOOT_M }] },
   volumeFlow: {
-    SI: [{ unit: "m³/s", factor: 1 }, { unit: "L/min", factor: 1e-3 / 60 }],
+    SI: [{ unit: "m³/s", factor: 1 }, { unit: "L/s", factor: 1e-3 }],
     US: [{ unit: "gpm", factor: GALLON_US_M3 / 60 }],
   },
   area: { SI: [{ unit: "m²", factor: 1 }, { unit: "mm²", factor: 1e-6 }], US: [{ unit: "ft²", factor: FOOT_M ** 2 }, { unit: "in²", factor: INCH_M ** 2 }] },
@@ -74,7 +76,7 @@ export function convert(valueSI: number, q: Quantity, system: UnitSystem, unit?:
   let scale = unit ? list.find((s) => s.unit === unit) : undefined;
   if (!scale) {
     const abs = Math.abs(valueSI);
-    scale = list.find((s) => abs >= s.factor * 0.9999) ?? list[list.length - 1];
+    scale = list.find((s) => abs >= s.factor * (s.min ?? 1) * 0.99995) ?? list[list.length - 1];
     if (abs === 0) scale = list.find((s) => s.factor === 1) ?? list[list.length - 1];
   }
   return { value: valueSI / scale.factor, unit: scale.unit };
@@ -86,8 +88,10 @@ export function formatNumber(x: number, sig = 4): string {
   if (x === 0 || Math.abs(x) < 1e-12) return "0";
   const abs = Math.abs(x);
   let s: string;
-  if (abs >= 10 ** sig) s = Math.round(x).toLocaleString("en-US");
-  else {
+  if (abs >= 1000) {
+    const digits = Math.max(0, sig - 1 - Math.floor(Math.log10(abs)));
+    s = x.toLocaleString("en-US", { maximumFractionDigits: digits, minimumFractionDigits: 0 });
+  } else {
     const digits = Math.max(0, sig - 1 - Math.floor(Math.log10(abs)));
     s = x.toFixed(Math.min(digits, 12));
     if (s.includes(".")) s = s.replace(/0+$/, "").replace(/\.$/, "");

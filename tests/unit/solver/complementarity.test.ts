@@ -27,7 +27,9 @@ const scenario = (friction: boolean) =>
     load: fc.record({ at: pointOnBox, fx: fc.integer({ min: -2000, max: 2000 }), fy: fc.integer({ min: -1000, max: 1000 }) }),
   });
 
-function build(s: fc.RecordValue<ReturnType<typeof scenario>> extends never ? never : ReturnType<typeof scenario> extends fc.Arbitrary<infer T> ? T : never) {
+type Scenario = ReturnType<typeof scenario> extends fc.Arbitrary<infer T> ? T : never;
+
+function build(s: Scenario) {
   const supports = s.supports.map((x, i) => ({
     id: `s${i}`,
     body: "b",

@@ -23,21 +23,22 @@ describe("invalid sketch files", () => {
     });
   });
 
-  const doc = () => loadFixture("pump-skid-discharge.json") as Record<string, unknown> & { [k: string]: unknown[] };
+  type Doc = { ports: Record<string, unknown>[]; supports: Record<string, unknown>[]; bodies: Record<string, unknown>[] };
+  const doc = (): Doc => loadFixture("pump-skid-discharge.json") as unknown as Doc;
 
   it.each([
-    ["a port area of the wrong type", (d: ReturnType<typeof doc>) => ((d.ports[1] as Record<string, unknown>).area = true), "ports[1].area", /must be a number or an expression/],
-    ["a misspelt field", (d: ReturnType<typeof doc>) => ((d.ports[0] as Record<string, unknown>).massflow = 3), "ports[0].massflow", /is not a field here/],
-    ["an unknown support kind", (d: ReturnType<typeof doc>) => ((d.supports[0] as Record<string, unknown>).kind = "clamp"), "supports[0].kind", /pin, roller, contact, fixed, tie/],
-    ["a body with two corners", (d: ReturnType<typeof doc>) => ((d.bodies[0] as Record<string, unknown>).outline = [[0, 0], [1, 0]]), "bodies[0].outline", /at least 3 corners/],
-    ["a negative mass", (d: ReturnType<typeof doc>) => ((d.bodies[0] as Record<string, unknown>).mass = -5), "bodies[0].mass", /zero or more/],
-    ["a negative friction coefficient", (d: ReturnType<typeof doc>) => ((d.supports[1] as Record<string, unknown>).mu = -0.1), "supports[1].mu", /zero or more/],
-    ["a zero area", (d: ReturnType<typeof doc>) => ((d.ports[0] as Record<string, unknown>).area = 0), "ports[0].area", /more than zero/],
-    ["a length where a pressure belongs", (d: ReturnType<typeof doc>) => ((d.ports[0] as Record<string, unknown>).pressure = "3 m"), "ports[0].pressure", /is a length \(m\), but this field needs a pressure/],
-    ["a reference to a missing body", (d: ReturnType<typeof doc>) => ((d.supports[0] as Record<string, unknown>).body = "nope"), "supports[0].body", /names body "nope", which does not exist/],
-    ["a duplicate id", (d: ReturnType<typeof doc>) => ((d.supports[1] as Record<string, unknown>).id = "rear"), "supports[1].id", /already used by supports\[0\]/],
-    ["an empty expression", (d: ReturnType<typeof doc>) => ((d.ports[1] as Record<string, unknown>).velocity = ""), "ports[1].velocity", /is empty/],
-    ["a broken expression", (d: ReturnType<typeof doc>) => ((d.ports[1] as Record<string, unknown>).velocity = "24 m/"), "ports[1].velocity", /cannot read "24 m\/"/],
+    ["a port area of the wrong type", (d: Doc): void => void (d.ports[1].area = true), "ports[1].area", /must be a number or an expression/],
+    ["a misspelt field", (d: Doc): void => void (d.ports[0].massflow = 3), "ports[0].massflow", /is not a field here/],
+    ["an unknown support kind", (d: Doc): void => void (d.supports[0].kind = "clamp"), "supports[0].kind", /pin, roller, contact, fixed, tie/],
+    ["a body with two corners", (d: Doc): void => void (d.bodies[0].outline = [[0, 0], [1, 0]]), "bodies[0].outline", /at least 3 corners/],
+    ["a negative mass", (d: Doc): void => void (d.bodies[0].mass = -5), "bodies[0].mass", /zero or more/],
+    ["a negative friction coefficient", (d: Doc): void => void (d.supports[1].mu = -0.1), "supports[1].mu", /zero or more/],
+    ["a zero area", (d: Doc): void => void (d.ports[0].area = 0), "ports[0].area", /more than zero/],
+    ["a length where a pressure belongs", (d: Doc): void => void (d.ports[0].pressure = "3 m"), "ports[0].pressure", /is a length \(m\), but this field needs a pressure/],
+    ["a reference to a missing body", (d: Doc): void => void (d.supports[0].body = "nope"), "supports[0].body", /names body "nope", which does not exist/],
+    ["a duplicate id", (d: Doc): void => void (d.supports[1].id = "rear"), "supports[1].id", /already used by supports\[0\]/],
+    ["an empty expression", (d: Doc): void => void (d.ports[1].velocity = ""), "ports[1].velocity", /is empty/],
+    ["a broken expression", (d: Doc): void => void (d.ports[1].velocity = "24 m/"), "ports[1].velocity", /cannot read "24 m\/"/],
   ] as const)("%s", (_name, mutate, path, message) => {
     const d = doc();
     mutate(d);

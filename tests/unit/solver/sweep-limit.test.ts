@@ -1,0 +1,144 @@
+// Sweeps and the limit finder.
+import { describe, expect, it } from "vitest";
+import { findLimit, linspace, parseSketch, solve, solveSweep, brent } from "@/solver";
+import { G0 } from "@/solver/constants";
+import { box, expectRel, loadFixture, sketch } from "./helpers";
+
+const parse = (doc: unknown) => {
+  const p = parseSketch(doc);
+  if (!p.ok) throw new Error(JSON.stringify(p.errors));
+  return p.sketch;
+};
+
+describe("solveSweep", () => {
+  it("re-evaluates the swept parameter and what depends on it, and leaves the sketch as parsed", () => {
+    const sk = parse(loadFixture("pipe-bend-anchor.json"));
+    const before = JSON.stringify(sk);
+    const sweep = solveSweep(sk, "theta", [30, 60, 90]);
+    expect(sweep.unit).toBe("deg");
+    expect(sweep.points).toHaveLength(3);
+    const at60 = sweep.points[1];
+    expect(at60.ok).toBe(true);
+    if (at60.ok) expect(at60.result.reactions.anchor.fx).toBeCloseTo(solve(sk).reactions.anchor.fx, 9);
+    // the outlet moved with theta (its position is an expression of theta)
+    const at90 = sweep.points[2];
+    if (at90.ok) expect(at90.result.equations.bend.momentum[1].at).toEqual([expect.closeTo(0, 12), 0.6]);
+    expect(JSON.stringify(sk)).toBe(before);
+  });
+
+  it("each point equals a fresh parse with that value", () => {
+    const doc = loadFixture("fire-monitor-trailer.json");
+    const sk = parse(doc);
+    const values = [5, 25, 45];
+    const sweep = solveSweep(sk, "theta", values);
+    values.forEach((v, i) => {
+      const fresh = solve(parse({ ...doc, parameters: { ...doc.parameters, theta: `${v} deg` } }));
+      const p = sweep.points[i];
+      if (!p.ok) throw new Error();
+      for (const id of ["leg", "wheel", "jack"]) {
+        expect(p.result.reactions[id].fx).toBeCloseTo(fresh.reactions[id].fx, 6);
+        expect(p.result.reactions[id].fy).toBeCloseTo(fresh.reactions[id].fy, 6);
+        expect(p.result.reactions[id].state).toBe(fresh.reactions[id].state);
+      }
+    });
+  });
+
+  it("a value that makes a field invalid gives that point's errors, not an exception", () => {
+    const sk = parse(sketch({ parameters: { a: "0.01 m^2" }, bodies: [{ id: "b", outline: box(1, 1), mass: 0 }], supports: [{ id: "s", body: "b", kind: "fixed", at: [0, 0] }], ports: [{ id: "p", body: "b", kind: "inlet", at: [0, 0.5], angle: 0, massFlow: 0, pressure: 1e5, area: "a" }] }));
+    const sweep = solveSweep(sk, "a", [0.02, -0.01]);
+    expect(sweep.points[0].ok).toBe(true);
+    expect(sweep.points[1]).toEqual({ value: -0.01, ok: false, errors: [{ path: "ports[0].area", message: "must be more than zero" }] });
+  });
+
+  it("refuses a parameter the sketch does not have", () => {
+    const sk = parse(loadFixture("pipe-bend-anchor.json"));
+    expect(() => solveSweep(sk, "phi", [1])).toThrow(/no parameter "phi" \(it has rho, Q, D1, D2, A1, A2, p1, p2, theta\)/);
+  });
+});
+
+describe("findLimit", () => {
+  it("the jet angle at which a contact's normal force reaches zero, against a closed form", () => {
+    // A block of weight W on a pin at x = 0 and a contact at x = b, with one jet of thrust J at
+    // (x0, y0) leaving at angle θ. The jet's reaction on the block is −J(cos θ, sin θ). Moments
+    // about the pin: b·N − W·xg + [x0·(−J sin θ) − y0·(−J cos θ)] = 0, so
+    //   N(θ) = (W·xg + J·(x0·sin θ − y0·cos θ)) / b,
+    // and N = 0 where x0·sin θ − y0·cos θ = −W·xg/J, i.e. R·sin(θ − φ) = −W·xg/J with
+    // R = √(x0² + y0²), φ = atan2(y0, x0):  θ = φ + asin(−W·xg/(J·R)).
+    const W = 120 * G0;
+    const xg = 0.5;
+    const b = 1.0;
+    const J = 1500;
+    const [x0, y0] = [0.2, 0.9];
+    const doc = sketch({
+      parameters: { theta: "0 deg" },
+      bodies: [{ id: "blk", outline: box(1, 1), mass: 120, cg: [xg, 0.5] }],
+      supports: [
+        { id: "pin", body: "blk", kind: "pin", at: [0, 0] },
+        { id: "pad", body: "blk", kind: "contact", at: [b, 0], angle: 90 },
+      ],
+      ports: [{ id: "jet", body: "blk", kind: "outlet", at: [x0, y0], angle: "theta", massFlow: 15, velocity: 100 }],
+      massSources: [{ id: "feed", body: "blk", massFlow: 15 }],
+    });
+    const R = Math.hypot(x0, y0);
+    const phi = Math.atan2(y0, x0);
+    const theta = ((phi + Math.asin((-W * xg) / (J * R))) * 180) / Math.PI;
+    const lim = findLimit(parse(doc), "theta", [-10, 60], { support: "pad", component: "margin" });
+    expect(lim.found).toBe(true);
+    if (lim.found) {
+      expectRel(lim.value, theta, 1e-8);
+      expect(lim.unit).toBe("deg");
+    }
+  });
+
+  it("the flow at which friction is used up (μ·n − |t| = 0)", () => {
+    // A skid on one friction contact and one frictionless contact under a horizontal jet J = ṁ·V:
+    // the friction contact carries all of J. Friction is used up where μ·n = J.
+    const doc = sketch({
+      parameters: { mdot: "5 kg/s" },
+      bodies: [{ id: "s", outline: box(2, 1), mass: 400, cg: [1, 0.5] }],
+      supports: [
+        { id: "grip", body: "s", kind: "contact", at: [0, 0], angle: 90, mu: 0.3 },
+        { id: "slide", body: "s", kind: "contact", at: [2, 0], angle: 90 },
+      ],
+      ports: [{ id: "jet", body: "s", kind: "outlet", at: [2, 0], angle: 0, massFlow: "mdot", velocity: 40 }],
+      massSources: [{ id: "m", body: "s", massFlow: "mdot" }],
+    });
+    const sk = parse(doc);
+    const lim = findLimit(sk, "mdot", [0, 100], { support: "grip", component: "frictionMargin" });
+    // the jet acts on the line of the contacts (y = 0): n = W/2 whatever the flow
+    const expected = (0.3 * (400 * G0) / 2) / 40;
+    expect(lim.found).toBe(true);
+    if (lim.found) expectRel(lim.value, expected, 1e-8);
+  });
+
+  it("no crossing in the range is a clear answer, with the range of the quantity", () => {
+    const sk = parse(loadFixture("pump-skid-discharge.json"));
+    const lim = findLimit(sk, "mdot", [0, 20], { support: "front", component: "n" });
+    expect(lim.found).toBe(false);
+    if (!lim.found) {
+      expect(lim.reason).toBe("no crossing in this range: the quantity stays above 0 from 0 to 20");
+      expect(lim.min).toBeGreaterThan(0);
+    }
+  });
+
+  it("a sweep's sign changes agree with findLimit to the sweep's resolution", () => {
+    const sk = parse(loadFixture("thrust-stand-tips.json"));
+    const values = linspace(0, 3, 61); // kN, step 0.05
+    const sweep = solveSweep(sk, "T", values);
+    const margins = sweep.points.map((p) => (p.ok ? p.result.reactions.rear.margin! : NaN));
+    const i = margins.findIndex((m, k) => k > 0 && Math.sign(m) !== Math.sign(margins[k - 1]));
+    const lim = findLimit(sk, "T", [0, 3], { support: "rear", component: "margin" });
+    expect(lim.found).toBe(true);
+    if (lim.found) {
+      expect(lim.value).toBeGreaterThanOrEqual(values[i - 1]);
+      expect(lim.value).toBeLessThanOrEqual(values[i]);
+      // and against T = W·d/h (common practice): 200·g0·0.8/1.5 N
+      expectRel(lim.value * 1000, (200 * G0 * 0.8) / 1.5, 1e-8);
+    }
+  });
+
+  it("Brent's method on a function with a known root", () => {
+    const f = (x: number) => x ** 3 - 2 * x - 5; // root 2.0945514815423265 (Wallis's example)
+    expect(brent(f, 2, 3, f(2), f(3), 1e-14)).toBeCloseTo(2.0945514815423265, 12);
+  });
+});

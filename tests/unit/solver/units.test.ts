@@ -1,0 +1,39 @@
+// Display in SI or US customary units (factors from NIST SP 811).
+import { describe, expect, it } from "vitest";
+import { convert, formatNumber, formatQuantity } from "@/solver/units";
+
+describe("formatQuantity", () => {
+  it.each([
+    [2400, "force", "SI", "2.4 kN"],
+    [2400, "force", "US", "539.5 lbf"],
+    [120e3, "force", "US", "26.98 kip"],
+    [-2400, "force", "SI", "−2.4 kN"],
+    [5120.4, "force", "SI", "5.12 kN"],
+    [1356, "moment", "US", "1,000 lbf·ft"],
+    [689475.7293168361, "pressure", "US", "100 psi"],
+    [689475.7293168361, "pressure", "SI", "689.5 kPa"],
+    [14.2, "massFlow", "US", "31.31 lb/s"],
+    [31, "velocity", "US", "101.7 ft/s"],
+    [0.0252362, "volumeFlow", "US", "400 gpm"],
+    [0.01, "volumeFlow", "SI", "10 L/s"],
+    [1356, "moment", "SI", "1.356 kN·m"],
+    [35, "angle", "SI", "35°"],
+    [0, "force", "SI", "0 N"],
+    [0.00045, "area", "US", "0.6975 in²"],
+  ] as const)("%s %s in %s → %s", (v, q, sys, out) => {
+    expect(formatQuantity(v, q, sys)).toBe(out);
+  });
+
+  it("keeps a requested unit", () => {
+    expect(formatQuantity(2400, "force", "SI", { unit: "N" })).toBe("2,400 N");
+    expect(convert(4.4482216152605, "force", "US", "lbf").value).toBe(1);
+  });
+
+  it("3–4 significant figures, grouped thousands, a true minus sign", () => {
+    expect(formatNumber(0.0012346)).toBe("0.001235");
+    expect(formatNumber(1234.56)).toBe("1,235");
+    expect(formatNumber(12345.6)).toBe("12,346");
+    expect(formatNumber(-1.5)).toBe("−1.5");
+    expect(formatNumber(Infinity)).toBe("∞");
+  });
+});
