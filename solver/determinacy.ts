@@ -1,10 +1,16 @@
 // Static determinacy of the supports as drawn, every one taken as bilateral: rank of the
 // support directions (with motion.freeX, the free acceleration counts as one more unknown).
-import { addOuter, clearlyFullRank, eigenSym3, norm3, zeroMat3 } from "./linalg";
+import { addOuter, clearlyFullRank, eigenSym3, norm3, zeroMat3, type Vec3 } from "./linalg";
 import type { BodyModel } from "./model";
 import type { Determinacy } from "./types";
 
-export function determinacyOf(model: BodyModel): Determinacy {
+export interface DeterminacyOutput {
+  determinacy: Determinacy;
+  /** with a mechanism: the motions nothing resists (scaled generalized directions) */
+  freeMotions: Vec3[];
+}
+
+export function determinacyOf(model: BodyModel): DeterminacyOutput {
   const gram = zeroMat3();
   let unknowns = 0;
   for (const s of model.springs) {
@@ -22,12 +28,16 @@ export function determinacyOf(model: BodyModel): Determinacy {
     }
   }
   let rank = 3;
+  const freeMotions: Vec3[] = [];
   if (!clearlyFullRank(gram)) {
-    const { values } = eigenSym3(gram);
+    const { values, vectors } = eigenSym3(gram);
     const tol = Math.max(values[0], 1e-300) * 1e-10;
     rank = values.filter((v) => v > tol).length;
+    values.forEach((v, i) => {
+      if (!(v > tol)) freeMotions.push(vectors[i]);
+    });
   }
-  if (rank < 3) return { kind: "mechanism", degree: 3 - rank };
-  if (unknowns > 3) return { kind: "indeterminate", degree: unknowns - 3 };
-  return { kind: "determinate", degree: 0 };
+  if (rank < 3) return { determinacy: { kind: "mechanism", degree: 3 - rank }, freeMotions };
+  if (unknowns > 3) return { determinacy: { kind: "indeterminate", degree: unknowns - 3 }, freeMotions };
+  return { determinacy: { kind: "determinate", degree: 0 }, freeMotions };
 }

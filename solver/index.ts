@@ -9,6 +9,7 @@ export { solveSweep, createSweeper, linspace, type SweepResult, type SweepPoint 
 export { findLimit, brent, type LimitResult, type LimitOptions } from "./limit";
 export { readQuantity, describeQuantity, type QuantitySpec, type QuantityComponent } from "./quantity";
 export { handCheckSums, termMomentAbout, type HandCheckSums } from "./equations";
+export { describeFreeMotion, describeSupport } from "./words";
 export { formatQuantity, formatNumber, convert, unitsFor, type UnitSystem, type Quantity } from "./units";
 export { sketchSchema, CURRENT_VERSION, FORMAT, formatPath } from "./schema";
 export type { SketchFile, SketchFileInput, SupportKind, LoadKind } from "./schema";

@@ -8,7 +8,7 @@ import { dot3, norm3, type Vec3 } from "./linalg";
 import { buildBodyModel, type BodyModel } from "./model";
 import { massBalanceWarnings, portFlow, type PortFlow } from "./ports";
 import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResult, SolveWarning, Status, Vec2 } from "./types";
-import { describeSupport, fmtForce } from "./words";
+import { describeFreeMotion, describeSupport, fmtForce } from "./words";
 
 export function solve(sketch: Sketch): SolveResult {
   const warnings: SolveWarning[] = [];
@@ -28,7 +28,7 @@ function solveBody(model: BodyModel, out: SolveResult): void {
   const { body, groups, springs, scale, supports } = model;
   const warnings = out.warnings;
   const tol = 1e-9 * scale;
-  const determinacy = determinacyOf(model);
+  const { determinacy, freeMotions } = determinacyOf(model);
 
   const bilateral = solveBilateral(model);
   let status: Status;
@@ -166,7 +166,7 @@ function solveBody(model: BodyModel, out: SolveResult): void {
   } else if (determinacy.kind === "mechanism" && status !== "unrestrained") {
     warnings.push({
       code: "MECHANISM",
-      message: `${body.label || body.id}: the supports leave ${determinacy.degree === 1 ? "one motion" : `${determinacy.degree} motions`} free, but the loads do not drive ${determinacy.degree === 1 ? "it" : "them"}`,
+      message: `${body.label || body.id}: ${freeMotions.map((z) => describeFreeMotion(describeMotion(model, z), supports)).join("; ")}, but the loads do not push that way`,
       ids: [body.id],
     });
   }

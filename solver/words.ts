@@ -1,6 +1,6 @@
 // Short phrases shared by warnings and status sentences.
 import { formatQuantity } from "./units";
-import type { Support } from "./types";
+import type { FreeMotion, Support } from "./types";
 
 const KIND_WORD: Record<Support["kind"], string> = {
   pin: "Pin",
@@ -17,4 +17,17 @@ export function describeSupport(s: Pick<Support, "kind" | "id" | "label">): stri
 
 export function fmtForce(n: number): string {
   return formatQuantity(n, "force", "SI");
+}
+
+/** "nothing resists motion in x", "nothing resists rotation about pin A (0, 1.5)" */
+export function describeFreeMotion(fm: FreeMotion, supports: Pick<Support, "kind" | "id" | "label" | "at">[] = []): string {
+  if (fm.kind === "translation") {
+    const a = ((fm.angle % 180) + 180) % 180;
+    const along = a < 1e-6 || Math.abs(a - 180) < 1e-6 ? "in x" : Math.abs(a - 90) < 1e-6 ? "in y" : `along ${Number(fm.angle.toFixed(1))}°`;
+    return `nothing resists motion ${along}`;
+  }
+  const [x, y] = fm.about;
+  const at = supports.find((s) => Math.hypot(s.at[0] - x, s.at[1] - y) < 1e-6);
+  const point = `(${Number(x.toFixed(3))}, ${Number(y.toFixed(3))})`;
+  return `nothing resists rotation about ${at ? `${describeSupport(at).replace(/^\w/, (c) => c.toLowerCase())} ${point}` : point}`;
 }

@@ -99,6 +99,6 @@ for (const friction of [false, true]) {
         }),
         { seed: friction ? 4242 : 1701, numRuns: 1500 },
       );
-    });
+    }, 120_000);
   });
 }

@@ -290,3 +290,39 @@ describe("the fixtures cover every status and every warning code", () => {
     );
   });
 });
+
+describe("the hand-check sums", () => {
+  it("ΣF and ΣM about any point balance for every fixture that holds, lifts or tips", async () => {
+    const { readdirSync } = await import("node:fs");
+    const { FIXTURES } = await import("./helpers");
+    const { handCheckSums } = await import("@/solver");
+    for (const f of readdirSync(FIXTURES).filter((n) => n.endsWith(".json"))) {
+      const r = run(f);
+      for (const [id, b] of Object.entries(r.bodies)) {
+        for (const p of [[0, 0], [3.7, -1.2], [-20, 40]] as [number, number][]) {
+          const s = handCheckSums(r.equations[id], p);
+          const scale = r.equations[id].forces.reduce((a, t) => a + Math.abs(t.fx) + Math.abs(t.fy), 1);
+          if (b.status === "unrestrained") {
+            // the imbalance is the residual the result reports
+            expect(s.imbalance.fx).toBeCloseTo(b.residual.fx, 6);
+          } else {
+            expect(Math.abs(s.imbalance.fx), `${f} ΣFx`).toBeLessThan(1e-9 * scale);
+            expect(Math.abs(s.imbalance.fy), `${f} ΣFy`).toBeLessThan(1e-9 * scale);
+            expect(Math.abs(s.imbalance.m), `${f} ΣM about ${p}`).toBeLessThan(1e-9 * scale * 50);
+          }
+        }
+      }
+    }
+  });
+
+  it("names free motions in words", async () => {
+    const { describeFreeMotion } = await import("@/solver");
+    expect(describeFreeMotion({ kind: "translation", angle: 180 })).toBe("nothing resists motion in x");
+    expect(describeFreeMotion({ kind: "translation", angle: 90 })).toBe("nothing resists motion in y");
+    expect(describeFreeMotion({ kind: "translation", angle: 35 })).toBe("nothing resists motion along 35°");
+    expect(describeFreeMotion({ kind: "rotation", about: [1.6, 0] }, [{ kind: "pin", id: "front", label: "front pin", at: [1.6, 0] }])).toBe(
+      "nothing resists rotation about pin front (front pin) (1.6, 0)",
+    );
+    expect(run("skid-vertical-mechanism.json").warnings[0].message).toBe("Skid: nothing resists motion in x, but the loads do not push that way");
+  });
+});

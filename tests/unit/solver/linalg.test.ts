@@ -29,7 +29,7 @@ describe("linear algebra against ml-matrix", () => {
       }),
       { seed: 20261201, numRuns: 300 },
     );
-  });
+  }, 120_000);
 
   it("the least-norm solution equals the Moore–Penrose pseudo-inverse times b", () => {
     fc.assert(
@@ -46,7 +46,7 @@ describe("linear algebra against ml-matrix", () => {
       }),
       { seed: 7, numRuns: 300 },
     );
-  });
+  }, 120_000);
 
   it("rank of a rank-deficient matrix", () => {
     const m = psd([[1, 0, 0], [2, 0, 0]], [1, 1]);

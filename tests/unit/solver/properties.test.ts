@@ -120,7 +120,7 @@ describe("invariants", () => {
       }),
       { seed: 101, ...RUNS },
     );
-  });
+  }, 120_000);
 
   it("a determinate body's reactions do not depend on the support stiffnesses", () => {
     fc.assert(
@@ -137,7 +137,7 @@ describe("invariants", () => {
       }),
       { seed: 202, ...RUNS },
     );
-  });
+  }, 120_000);
 
   it("translating the whole sketch changes no reaction", () => {
     fc.assert(
@@ -153,7 +153,7 @@ describe("invariants", () => {
       }),
       { seed: 303, ...RUNS },
     );
-  });
+  }, 120_000);
 
   it("rotating the sketch with gravity 0 rotates the reactions and keeps their magnitudes", () => {
     fc.assert(
@@ -176,7 +176,7 @@ describe("invariants", () => {
       }),
       { seed: 404, ...RUNS },
     );
-  });
+  }, 120_000);
 
   it("scaling every force, mass, pressure and mass flow by s scales every reaction by s", () => {
     fc.assert(
@@ -191,5 +191,5 @@ describe("invariants", () => {
       }),
       { seed: 505, ...RUNS },
     );
-  });
+  }, 120_000);
 });
