@@ -20,6 +20,14 @@ export const CREDENTIAL_PATHS = [
   "/send-verification-email",
 ] as const;
 
+/** Confirmation links land on /verify (sign-in resends them without a page to return to). */
+export function withVerifyCallback(url: string): string {
+  const u = new URL(url);
+  const callback = u.searchParams.get("callbackURL");
+  if (!callback || callback === "/") u.searchParams.set("callbackURL", "/verify?confirmed=1");
+  return u.toString();
+}
+
 export type AuthOverrides = { rateLimit?: { max: number; window: number } };
 
 /** The better-auth instance: e-mail and password on PostgreSQL, mail through lib/mail. */
@@ -58,7 +66,7 @@ export function createAuth(overrides: AuthOverrides = {}) {
       autoSignInAfterVerification: false,
       expiresIn: 60 * 60,
       async sendVerificationEmail({ user: u, url }) {
-        sendMailInBackground(verificationMail({ to: u.email, name: u.name, url }));
+        sendMailInBackground(verificationMail({ to: u.email, name: u.name, url: withVerifyCallback(url) }));
       },
     },
     session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },

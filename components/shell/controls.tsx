@@ -111,7 +111,7 @@ const NOTICE: Record<NoticeTone, { box: string; mark: string }> = {
 export function Notice({ tone = "info", title, children }: { tone?: NoticeTone; title?: string; children?: ReactNode }) {
   const t = NOTICE[tone];
   return (
-    <div role={tone === "error" ? "alert" : "status"} className={`flex gap-3 rounded-md border px-3.5 py-3 text-sm ${t.box}`}>
+    <div role={tone === "error" ? "alert" : "status"} data-notice={tone} className={`flex gap-3 rounded-md border px-3.5 py-3 text-sm ${t.box}`}>
       <span aria-hidden="true" className="mt-px flex h-5 w-5 shrink-0 items-center justify-center rounded-full border border-current text-xs font-bold">
         {t.mark}
       </span>

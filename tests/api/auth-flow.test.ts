@@ -47,10 +47,13 @@ describe("sign-up, verification and sign-in", () => {
     expect(firstLink(mail.text)).toMatch(new RegExp(`^${appOrigin()}/api/auth/verify-email\\?token=.+&callbackURL=%2Fverify%3Fconfirmed%3D1$`));
   });
 
-  it("refuses to sign in before the address is confirmed (403 EMAIL_NOT_VERIFIED)", async () => {
+  it("refuses to sign in before the address is confirmed (403 EMAIL_NOT_VERIFIED) and mails a fresh link that also leads to /verify", async () => {
+    const before = await waitForMail(email, { subject: /Confirm your e-mail/ });
     const res = await post("/sign-in/email", { email, password: PASSWORD });
     expect(res.status).toBe(403);
     expect((await res.json()).code).toBe("EMAIL_NOT_VERIFIED");
+    const fresh = await waitForMail(email, { subject: /Confirm your e-mail/, after: before.id });
+    expect(firstLink(fresh.text)).toMatch(/&callbackURL=%2Fverify%3Fconfirmed%3D1$/);
   });
 
   it("confirms the address from the mailed link and redirects to /verify", async () => {
