@@ -11,6 +11,7 @@ export function WorkspaceSwitcher({ workspaces, currentId }: { workspaces: Switc
   const current = workspaces.find((w) => w.id === currentId) ?? null;
   return (
     <Disclosure
+      width="w-80"
       label={current ? `Workspace: ${current.name}. Switch workspace` : "Choose a workspace"}
       button={
         <span className="flex min-w-0 flex-col leading-tight">

@@ -58,7 +58,7 @@ export function InvitationsTable({ workspaceId }: { workspaceId: string }) {
                   {formatDate(inv.createdAt)}
                   {inv.invitedBy ? <span className="text-ink-faint"> by {inv.invitedBy}</span> : null}
                 </td>
-                <td className="py-2.5 pr-3">
+                <td className="whitespace-nowrap py-2.5 pr-3">
                   {inv.status === "expired" ? (
                     <span className="font-medium text-accent-deep">✕ Expired {relativeExpiry(inv.expiresAt).replace("expired ", "")}</span>
                   ) : (

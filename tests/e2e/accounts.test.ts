@@ -76,6 +76,7 @@ describe("accounts, workspaces and roles in the browser", () => {
     await page.getByRole("button", { name: "Sign in" }).click();
     await page.locator("[data-notice=error]").waitFor();
     expect(await page.locator("[data-notice=error]").textContent()).toContain(`Confirm your e-mail address first: we have sent a new link to ${owner.email}.`);
+    await shot(page, "accounts-02a-sign-in-unconfirmed");
 
     await openMail(page, owner.email, /Confirm your e-mail address/);
     await shot(page, "accounts-03-mailbox-verification");
@@ -124,6 +125,7 @@ describe("accounts, workspaces and roles in the browser", () => {
     await page.waitForURL(workspaceUrl);
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe(workspaceName);
     expect(await page.locator("main").textContent()).toContain("You are ✓Checker");
+    await shot(page, "accounts-07a-workspace-as-checker");
     // A checker sees no owner tabs and no invite form.
     expect(await page.getByRole("link", { name: "Audit log" }).count()).toBe(0);
     await page.getByRole("link", { name: "Members", exact: true }).click();
