@@ -27,6 +27,12 @@ async function openMail(page: Page, to: string, subject: RegExp): Promise<void> 
   }
 }
 
+/** Wait until the page's main area shows `text` (content streams in behind a loading skeleton), then return all of it. */
+async function mainText(page: Page, text: string): Promise<string> {
+  await page.locator("main", { hasText: text }).waitFor();
+  return (await page.locator("main").textContent()) ?? "";
+}
+
 async function signIn(page: Page, email: string, password: string): Promise<void> {
   await page.goto(`${BASE_URL}/sign-in`);
   await page.getByLabel("E-mail address").fill(email);
@@ -66,7 +72,7 @@ describe("accounts, workspaces and roles in the browser", () => {
     await page.getByRole("button", { name: "Create account" }).click();
     await page.waitForURL(/\/verify\?sent=/);
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("Check your inbox");
-    expect(await page.locator("main").textContent()).toContain(owner.email);
+    expect(await mainText(page, owner.email)).toContain(owner.email);
     await shot(page, "accounts-02-check-inbox");
 
     // Signing in before confirming is refused with words that say why.
@@ -85,6 +91,7 @@ describe("accounts, workspaces and roles in the browser", () => {
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("E-mail address confirmed");
 
     await signIn(page, owner.email, owner.password);
+    await page.getByRole("link", { name: /Ada's workspace/ }).waitFor();
     expect(await page.getByRole("link", { name: /Ada's workspace/ }).count()).toBe(1);
     await shot(page, "accounts-04-workspaces");
   });
@@ -124,7 +131,7 @@ describe("accounts, workspaces and roles in the browser", () => {
     await page.getByRole("button", { name: "Create account and join" }).click();
     await page.waitForURL(workspaceUrl);
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe(workspaceName);
-    expect(await page.locator("main").textContent()).toContain("You are ✓Checker");
+    expect(await mainText(page, "You are ✓Checker")).toContain("You are ✓Checker");
     await shot(page, "accounts-07a-workspace-as-checker");
     // A checker sees no owner tabs and no invite form.
     expect(await page.getByRole("link", { name: "Audit log" }).count()).toBe(0);
@@ -146,7 +153,7 @@ describe("accounts, workspaces and roles in the browser", () => {
     await shot(page, "accounts-08-role-changed");
 
     await colleaguePage.goto(workspaceUrl);
-    expect(await colleaguePage.locator("main").textContent()).toContain("You are ○Viewer");
+    expect(await mainText(colleaguePage, "You are ○Viewer")).toContain("You are ○Viewer");
     expect(await colleaguePage.getByRole("link", { name: "Start a sketch" }).count()).toBe(0);
   });
 
@@ -186,6 +193,7 @@ describe("accounts, workspaces and roles in the browser", () => {
     await page.locator("[data-notice=error]").waitFor();
     expect(await page.locator("[data-notice=error]").textContent()).toContain("That e-mail address and password do not match an account.");
     await signIn(page, colleague.email, "a-new-checker-password");
+    await page.getByRole("link", { name: new RegExp(workspaceName) }).waitFor();
     expect(await page.getByRole("link", { name: new RegExp(workspaceName) }).count()).toBe(1);
   });
 
