@@ -56,7 +56,7 @@ export function InvitationsTable({ workspaceId }: { workspaceId: string }) {
                 <td className="py-2.5 pr-3"><RoleBadge role={inv.role} /></td>
                 <td className="num py-2.5 pr-3 text-ink-soft">
                   {formatDate(inv.createdAt)}
-                  {inv.invitedBy ? <span className="text-ink-faint"> by {inv.invitedBy}</span> : null}
+                  {inv.invitedBy ? <span className="block text-xs text-ink-faint">by {inv.invitedBy}</span> : null}
                 </td>
                 <td className="whitespace-nowrap py-2.5 pr-3">
                   {inv.status === "expired" ? (

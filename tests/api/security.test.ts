@@ -12,7 +12,7 @@ import { call, makeAccount, makeWorkspace, PASSWORD, type Person } from "./helpe
 
 const saved = { ...process.env };
 afterEach(() => {
-  for (const k of ["APP_URL", "NODE_ENV", "BETTER_AUTH_SECRET", "SMTP_HOST", "DEV_MAILBOX"]) {
+  for (const k of ["APP_URL", "NODE_ENV", "BETTER_AUTH_SECRET", "SMTP_HOST", "DEV_MAILBOX", "AUTH_RATE_LIMIT_MAX", "AUTH_RATE_LIMIT_WINDOW"]) {
     if (saved[k] === undefined) delete process.env[k];
     else process.env[k] = saved[k];
   }
@@ -50,6 +50,17 @@ describe("sign-in rate limit", () => {
 
     // Another client address has its own budget, and the right password works there.
     expect((await auth.handler(signInRequest(origin, person.email, PASSWORD, "203.0.113.8"))).status).toBe(200);
+  });
+
+  it("takes its budget from AUTH_RATE_LIMIT_MAX and AUTH_RATE_LIMIT_WINDOW", async () => {
+    setEnv("AUTH_RATE_LIMIT_MAX", "2");
+    setEnv("AUTH_RATE_LIMIT_WINDOW", "30");
+    const auth = createAuth();
+    const origin = "http://127.0.0.1:3000";
+    const statuses: number[] = [];
+    for (let i = 0; i < 3; i++) statuses.push((await auth.handler(signInRequest(origin, person.email, "wrong-password", "203.0.113.9"))).status);
+    expect(statuses).toEqual([401, 401, 429]);
+    expect(Number((await auth.handler(signInRequest(origin, person.email, PASSWORD, "203.0.113.9"))).headers.get("x-retry-after"))).toBeGreaterThan(20);
   });
 });
 
