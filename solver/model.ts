@@ -4,7 +4,7 @@
 // moments compare: Q = (Fx, Fy, M/L) about a reference point O near the body, q = (ux, uy, L·θ).
 import { boundingBox, direction, momentOf, polygonCentroid, polygonDiameter } from "./geometry";
 import type { PortFlow } from "./ports";
-import type { Body, EquationTerm, Sketch, Support, Vec2 } from "./types";
+import { DEFAULT_GROUPS, type Body, type EquationTerm, type Sketch, type Support, type Vec2 } from "./types";
 
 /** Stiffness shared by supports when none is given (N/m). Only ratios matter. */
 export const DEFAULT_STIFFNESS = 1e9;
@@ -118,11 +118,20 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   const motion = sketch.motion ?? {};
   const freeX = motion.freeX === true;
 
-  if (m * g !== 0) forceTerms.push({ id: body.id, body: body.id, kind: "weight", label: `weight of ${name}`, fx: 0, fy: -m * g, m: 0, at: cg });
+  // Operating cases scale load groups; a factor shows in the term's label for the hand check.
+  const factors = sketch.scaling?.factors;
+  const factorOf = (group: string | undefined, fallback: string) => factors?.[group ?? fallback] ?? 1;
+  const tag = (label: string, f: number) => (f === 1 ? label : `${label} × ${Number(f.toPrecision(6))}`);
+
+  const fw = factorOf(body.group, DEFAULT_GROUPS.weight);
+  if (m * g * fw !== 0) forceTerms.push({ id: body.id, body: body.id, kind: "weight", label: tag(`weight of ${name}`, fw), fx: 0, fy: -m * g * fw, m: 0, at: cg });
 
   for (const l of sketch.loads) {
     if (l.body !== body.id) continue;
     const lname = l.label || l.id;
+    const fl = factorOf(l.group, DEFAULT_GROUPS.load);
+    if (fl === 0) continue;
+    const first = forceTerms.length;
     if (l.kind === "force") {
       let fx: number;
       let fy: number;
@@ -156,6 +165,12 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (part at ⅔)`, fx: b * e[0], fy: b * e[1], m: 0, at: p2 });
       }
     }
+    if (fl !== 1) {
+      for (let i = first; i < forceTerms.length; i++) {
+        const t = forceTerms[i];
+        forceTerms[i] = { ...t, label: tag(t.label, fl), fx: t.fx * fl, fy: t.fy * fl, m: t.m * fl };
+      }
+    }
   }
 
   let mfx = 0;
@@ -166,13 +181,14 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
     const pname = p.label || p.id;
     const e = direction(p.angle);
     const pressure = p.pressure ?? 0;
-    if (pressure !== 0) {
+    const fp = factorOf(p.group, DEFAULT_GROUPS.flow);
+    if (pressure * fp !== 0) {
       // pushes inward at both: along the flow at an inlet, against it at an outlet
-      const f = pressure * (p.area ?? 0) * (p.kind === "inlet" ? 1 : -1);
-      forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: `pressure at ${pname}`, fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) });
+      const f = pressure * (p.area ?? 0) * (p.kind === "inlet" ? 1 : -1) * fp;
+      forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: tag(`pressure at ${pname}`, fp), fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) });
     }
     const flow = flows.get(p.id)!;
-    const mv = flow.massFlow * flow.velocity * (p.kind === "outlet" ? 1 : -1);
+    const mv = flow.massFlow * flow.velocity * (p.kind === "outlet" ? 1 : -1) * fp;
     if (mv !== 0) {
       const fx = mv * e[0];
       const fy = mv * e[1];
@@ -180,7 +196,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         id: p.id,
         body: body.id,
         kind: "momentum",
-        label: p.kind === "outlet" ? `momentum out at ${pname}` : `momentum in at ${pname}`,
+        label: tag(p.kind === "outlet" ? `momentum out at ${pname}` : `momentum in at ${pname}`, fp),
         fx,
         fy,
         m: 0,
@@ -193,17 +209,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   }
 
   // ---- the scaled generalized load Q = Σ forces − Σ momentum flux, about `origin`
-  const Q: [number, number, number] = [0, 0, 0];
-  let scale = 0;
-  const addTerm = (t: EquationTerm, sign: number) => {
-    Q[0] += sign * t.fx;
-    Q[1] += sign * t.fy;
-    const arm = t.at ? momentOf(t.at[0] - ox, t.at[1] - oy, t.fx, t.fy) : 0;
-    Q[2] += (sign * (arm + t.m)) / L;
-    scale += Math.abs(t.fx) + Math.abs(t.fy) + Math.abs(t.m) / L;
-  };
-  forceTerms.forEach((t) => addTerm(t, 1));
-  momentumTerms.forEach((t) => addTerm(t, -1));
+  const { Q, scale } = generalizedLoad(forceTerms, momentumTerms, origin, L);
 
   // ---- motion: prescribed acceleration, or ax found from the x equation (supports cannot push in x)
   let ax = motion.ax ?? 0;
@@ -212,7 +218,9 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   if (m !== 0 && (ax !== 0 || ay !== 0)) {
     const t: EquationTerm = { id: body.id, body: body.id, kind: "inertia", label: `inertia of ${name} (−m·a)`, fx: -m * ax, fy: -m * ay, m: 0, at: cg };
     forceTerms.push(t);
-    addTerm(t, 1);
+    Q[0] += t.fx;
+    Q[1] += t.fy;
+    Q[2] += momentOf(cg[0] - ox, cg[1] - oy, t.fx, t.fy) / L;
     if (freeX) Q[0] = 0; // exactly balanced by construction
   }
 
@@ -225,7 +233,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
     springs,
     groups,
     Q,
-    scale: scale || 1,
+    scale,
     ax,
     ay,
     freeX,
@@ -233,6 +241,25 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
     momentumTerms,
     momentum: { fx: mfx, fy: mfy, m: mm },
   };
+}
+
+/**
+ * The scaled generalized load Q = Σ forces − Σ momentum flux about `origin` (the momentum flux
+ * moves to the force side with its sign changed), and a force scale for tolerances.
+ */
+export function generalizedLoad(forceTerms: EquationTerm[], momentumTerms: EquationTerm[], origin: Vec2, L: number) {
+  const Q: [number, number, number] = [0, 0, 0];
+  let scale = 0;
+  const add = (t: EquationTerm, sign: number) => {
+    Q[0] += sign * t.fx;
+    Q[1] += sign * t.fy;
+    const arm = t.at ? momentOf(t.at[0] - origin[0], t.at[1] - origin[1], t.fx, t.fy) : 0;
+    Q[2] += (sign * (arm + t.m)) / L;
+    scale += Math.abs(t.fx) + Math.abs(t.fy) + Math.abs(t.m) / L;
+  };
+  forceTerms.forEach((t) => add(t, 1));
+  momentumTerms.forEach((t) => add(t, -1));
+  return { Q, scale: scale || 1 };
 }
 
 /** Results never share arrays with the sketch (a sweep changes the sketch in place). */

@@ -5,6 +5,7 @@ import type { z } from "zod";
 import { migrateSketch } from "./migrations";
 import { resolveSketch, type EvaluationPlan, type FieldValue, type ResolveOutput } from "./resolve";
 import { formatPath, sketchSchema, type SketchFile } from "./schema";
+
 import type { FieldError, Sketch, SolveWarning } from "./types";
 import { validateReferences, validateValues } from "./validate";
 
@@ -72,12 +73,43 @@ export function parseSketch(input: unknown): ParseResult {
   const parsed = sketchSchema.safeParse(migrated.doc);
   if (!parsed.success) return { ok: false, errors: dedupe(zodErrors(parsed.error)), ...empty };
 
-  const resolved = resolveSketch(parsed.data);
+  const r = resolveFile(parsed.data);
+  if (!r.ok) return r;
+  return { ...r, migratedFrom: migrated.applied };
+}
+
+/** Evaluate and check a file that already passed the schema (also used for operating cases). */
+export function resolveFile(file: SketchFile): Exclude<ParseResult, { ok: true }> | (Omit<Extract<ParseResult, { ok: true }>, "migratedFrom">) {
+  const resolved = resolveSketch(file);
   const errors = [...resolved.errors];
   errors.push(...validateReferences(resolved.sketch));
   if (resolved.errors.length === 0) errors.push(...validateValues(resolved.sketch));
+  errors.push(...validateCases(file));
   const { warnings, fields, parameterValues } = resolved;
   if (errors.length) return { ok: false, errors: dedupe(errors), warnings, fields, parameterValues };
   plans.set(resolved.sketch, resolved.plan);
-  return { ok: true, sketch: resolved.sketch, file: parsed.data, warnings, fields, parameterValues, migratedFrom: migrated.applied };
+  return { ok: true, sketch: resolved.sketch, file, warnings, fields, parameterValues };
+}
+
+/** Case ids unique, combinations name existing cases, overridden parameters exist. */
+function validateCases(file: SketchFile): FieldError[] {
+  const errors: FieldError[] = [];
+  const names = new Set(Object.keys(file.parameters ?? {}));
+  const ids = new Map<string, string>();
+  (file.cases ?? []).forEach((c, i) => {
+    if (ids.has(c.id)) errors.push({ path: `cases[${i}].id`, message: `id "${c.id}" is already used by ${ids.get(c.id)}` });
+    ids.set(c.id, `cases[${i}]`);
+    for (const p of Object.keys(c.parameters ?? {})) {
+      if (!names.has(p)) errors.push({ path: `cases[${i}].parameters.${p}`, message: `the sketch has no parameter "${p}" to override` });
+    }
+  });
+  const caseIds = new Set((file.cases ?? []).map((c) => c.id));
+  (file.combinations ?? []).forEach((k, i) => {
+    if (ids.has(k.id)) errors.push({ path: `combinations[${i}].id`, message: `id "${k.id}" is already used by ${ids.get(k.id)}` });
+    ids.set(k.id, `combinations[${i}]`);
+    k.terms.forEach((t, j) => {
+      if (!caseIds.has(t.case)) errors.push({ path: `combinations[${i}].terms[${j}].case`, message: `names case "${t.case}", which does not exist` });
+    });
+  });
+  return errors;
 }

@@ -49,7 +49,7 @@ const round = (x: number) => Number(x.toPrecision(4));
 const fmt = (xs: number[]) => xs.map(round).join(" vs ");
 
 /** Σ ṁ(inlets) + Σ mass sources = Σ ṁ(outlets) per body, within 0.5 % of the larger side. */
-export function massBalanceWarnings(sketch: Sketch, flows: Map<string, PortFlow>): SolveWarning[] {
+export function massBalanceWarnings(sketch: Sketch, flows: Map<string, PortFlow>, flowFactor = 1): SolveWarning[] {
   const warnings: SolveWarning[] = [];
   for (const b of sketch.bodies) {
     let inflow = 0;
@@ -65,7 +65,7 @@ export function massBalanceWarnings(sketch: Sketch, flows: Map<string, PortFlow>
     for (const s of sketch.massSources) {
       if (s.body !== b.id) continue;
       ids.push(s.id);
-      inflow += s.massFlow;
+      inflow += s.massFlow * flowFactor;
     }
     const larger = Math.max(inflow, outflow);
     if (larger > 0 && Math.abs(inflow - outflow) > AGREEMENT * larger) {

@@ -5,7 +5,8 @@
 import { z } from "zod";
 
 export const FORMAT = "counterpoise.sketch";
-/** The newest format version this solver writes. Older files are migrated (solver/migrations). */
+/** The newest format version this solver writes. Older files are migrated (solver/migrations).
+ *  1: the published contract. 2: load groups, operating cases, combinations, stability requirements. */
 export const CURRENT_VERSION = 1;
 
 const numeric = z.union([z.number(), z.string().min(1, { error: "is empty: give a number or an expression" })], {
@@ -18,11 +19,19 @@ const point = z.tuple([numeric, numeric], { error: "must be a point [x, y]" });
 const id = z.string({ error: "must be a text id" }).min(1, { error: "must not be empty" });
 const label = z.string().max(200, { error: "is longer than 200 characters" }).optional();
 
-const elementBase = { id, label, body: id };
+/** Load group an element's forces belong to, for the factors of operating cases ("dead", "flow"…). */
+const group = z
+  .string()
+  .regex(/^[A-Za-z][A-Za-z0-9 _-]{0,39}$/, { error: "must start with a letter and use letters, digits, spaces, _ or - (40 at most)" })
+  .optional();
+
+const elementBase = { id, label, body: id, group };
 
 export const bodySchema = z.strictObject({
   id,
   label,
+  /** the group of the body's weight (default "dead") */
+  group,
   outline: z.array(point).min(3, { error: "needs at least 3 corners" }),
   mass: numeric,
   cg: point.optional(),
@@ -93,6 +102,29 @@ const parameterName = z
   .string()
   .regex(/^[A-Za-z_][A-Za-z0-9_]*$/, { error: "must start with a letter or _ and hold only letters, digits and _" });
 
+/** An operating case: parameter overrides, group factors and the flow factor. */
+export const caseSchema = z.strictObject({
+  id,
+  name: z.string().min(1, { error: "must not be empty" }).max(120),
+  parameters: z.record(z.string(), numeric).optional(),
+  factors: z.record(z.string(), z.number({ error: "must be a number" }).finite()).optional(),
+  flowFactor: z.number({ error: "must be a number" }).nonnegative({ error: "must be zero or more" }).optional(),
+});
+
+/** A combination: cases added as one factored load set (solved once, never by adding results). */
+export const combinationSchema = z.strictObject({
+  id,
+  name: z.string().min(1, { error: "must not be empty" }).max(120),
+  terms: z
+    .array(z.strictObject({ case: id, factor: z.number({ error: "must be a number" }).finite() }))
+    .min(1, { error: "needs at least one case" }),
+});
+
+export const stabilitySchema = z.strictObject({
+  overturning: z.number().positive({ error: "must be more than zero" }).optional(),
+  sliding: z.number().positive({ error: "must be more than zero" }).optional(),
+});
+
 export const sketchSchema = z.strictObject({
   format: z.literal(FORMAT, { error: `must be "${FORMAT}"` }),
   version: z.literal(CURRENT_VERSION, { error: `must be ${CURRENT_VERSION}` }),
@@ -106,6 +138,10 @@ export const sketchSchema = z.strictObject({
   ports: z.array(portSchema).default([]),
   massSources: z.array(massSourceSchema).default([]),
   motion: motionSchema.optional(),
+  cases: z.array(caseSchema).optional(),
+  combinations: z.array(combinationSchema).optional(),
+  /** required factors of safety (default 1.5 each) */
+  stability: stabilitySchema.optional(),
 });
 
 /** A sketch file as written (numbers or expressions). */
@@ -117,6 +153,8 @@ export type LoadFile = z.infer<typeof loadSchema>;
 export type PortFile = z.infer<typeof portSchema>;
 export type MassSourceFile = z.infer<typeof massSourceSchema>;
 export type SupportKind = SupportFile["kind"];
+export type CaseFile = z.infer<typeof caseSchema>;
+export type CombinationFile = z.infer<typeof combinationSchema>;
 export type LoadKind = LoadFile["kind"];
 
 /** Format a zod path as the contract writes it: `ports[1].area`. */

@@ -11,16 +11,26 @@ import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResul
 import { describeFreeMotion, describeSupport, fmtForce } from "./words";
 
 export function solve(sketch: Sketch): SolveResult {
-  const warnings: SolveWarning[] = [];
-  const flows = new Map<string, PortFlow>();
-  for (const p of sketch.ports) flows.set(p.id, portFlow(p, warnings));
-  warnings.push(...massBalanceWarnings(sketch, flows));
+  const { models, warnings } = prepare(sketch);
+  return solveModels(models, warnings);
+}
 
-  const result: SolveResult = { ok: true, bodies: {}, reactions: {}, warnings, equations: {} };
-  for (const body of sketch.bodies) {
-    const model = buildBodyModel(sketch, body, flows);
-    solveBody(model, result);
+/** Port flows (with the flow factor), flow warnings and one model per body. */
+export function prepare(sketch: Sketch): { models: BodyModel[]; warnings: SolveWarning[] } {
+  const warnings: SolveWarning[] = [];
+  const f = sketch.scaling?.flowFactor ?? 1;
+  const flows = new Map<string, PortFlow>();
+  for (const p of sketch.ports) {
+    const flow = portFlow(p, warnings);
+    flows.set(p.id, f === 1 ? flow : { massFlow: flow.massFlow * f, velocity: flow.velocity * f });
   }
+  warnings.push(...massBalanceWarnings(sketch, flows, f));
+  return { models: sketch.bodies.map((body) => buildBodyModel(sketch, body, flows)), warnings };
+}
+
+export function solveModels(models: BodyModel[], warnings: SolveWarning[]): SolveResult {
+  const result: SolveResult = { ok: true, bodies: {}, reactions: {}, warnings, equations: {} };
+  for (const model of models) solveBody(model, result);
   return result;
 }
 

@@ -24,12 +24,30 @@ export interface Sweeper {
   restore(): void;
 }
 
+/** The built-in parameter that scales every port's flow (ṁ and V × f, momentum flux × f²). */
+export const FLOW_FACTOR = "flowFactor";
+
 export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
   const plan = planOf(sketch);
   if (!plan) throw new Error("a sweep needs a sketch returned by parseSketch");
+  if (parameter === FLOW_FACTOR && !plan.scope.has(FLOW_FACTOR)) {
+    const saved = sketch.scaling;
+    return {
+      parameter,
+      unit: "",
+      at(value: number): SweepPoint {
+        sketch.scaling = { ...saved, flowFactor: value };
+        if (!(value >= 0)) return { value, ok: false, errors: [{ path: FLOW_FACTOR, message: "must be zero or more" }] };
+        return { value, ok: true, result: solve(sketch) };
+      },
+      restore() {
+        sketch.scaling = saved;
+      },
+    };
+  }
   if (!plan.scope.has(parameter)) {
     const names = [...plan.scope.keys()];
-    throw new Error(`the sketch has no parameter "${parameter}"${names.length ? ` (it has ${names.join(", ")})` : " (it has none)"}`);
+    throw new Error(`the sketch has no parameter "${parameter}" (it has ${[...names, FLOW_FACTOR].join(", ")})`);
   }
   const unit = plan.parameterUnits[parameter] ?? "";
   const affected = new Set([parameter]);

@@ -6,6 +6,8 @@ export type Vec2 = [number, number];
 export interface Body {
   id: string;
   label?: string;
+  /** load group of its weight (default "dead") */
+  group?: string;
   outline: Vec2[];
   /** kg, everything inside the control volume (fluid included) */
   mass: number;
@@ -17,6 +19,8 @@ interface ElementBase {
   id: string;
   label?: string;
   body: string;
+  /** load group (defaults: loads "loads", ports and mass sources "flow") */
+  group?: string;
 }
 
 export interface PinSupport extends ElementBase { kind: "pin"; at: Vec2; stiffness?: number }
@@ -84,7 +88,17 @@ export interface Sketch {
   ports: Port[];
   massSources: MassSource[];
   motion?: Motion;
+  /** applied by operating cases: factors per load group, and the flow factor */
+  scaling?: Scaling;
 }
+
+export interface Scaling {
+  factors?: Record<string, number>;
+  /** every port's ṁ and V × f at fixed areas (momentum flux × f²); mass sources × f */
+  flowFactor?: number;
+}
+
+export const DEFAULT_GROUPS = { weight: "dead", load: "loads", flow: "flow" } as const;
 
 // ---------------------------------------------------------------- result
 

@@ -1,7 +1,6 @@
 // The chain of sketch-format migrations: each step takes a document of version `from` to
-// `from + 1`. A file is brought up to CURRENT_VERSION before it is validated. Version 1 is the
-// first published format, so the chain starts empty; a later format adds its step here
-// (solver/migrations/NNN-<what>.ts) with a test of its own.
+// `from + 1`. A file is brought up to CURRENT_VERSION before it is validated. Each format adds
+// its step here (solver/migrations/NNN-<what>.ts) with a test of its own.
 import { CURRENT_VERSION, FORMAT } from "../schema";
 import type { FieldError } from "../types";
 

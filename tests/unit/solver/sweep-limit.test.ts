@@ -52,7 +52,7 @@ describe("solveSweep", () => {
 
   it("refuses a parameter the sketch does not have", () => {
     const sk = parse(loadFixture("pipe-bend-anchor.json"));
-    expect(() => solveSweep(sk, "phi", [1])).toThrow(/no parameter "phi" \(it has rho, Q, D1, D2, A1, A2, p1, p2, theta\)/);
+    expect(() => solveSweep(sk, "phi", [1])).toThrow(/no parameter "phi" \(it has rho, Q, D1, D2, A1, A2, p1, p2, theta, flowFactor\)/);
   });
 });
 

@@ -1,0 +1,142 @@
+// Operating cases and combinations. A case re-evaluates the sketch with its parameter overrides,
+// scales load groups and the flow; a combination adds the load sets of its cases with factors
+// and is solved once as its own factored load set: one-sided supports make the response
+// non-linear, so results of cases are never added. Then the table of reactions per case, the
+// governing case of each component, the envelope and each support's design load.
+import { resolveFile } from "./parse";
+import type { CaseFile, SketchFile } from "./schema";
+import { prepare, solveModels } from "./solve";
+import { bodyStability, DEFAULT_REQUIREMENTS, type BodyStability, type Requirements } from "./stability";
+import type { EquationTerm, FieldError, Reaction, SolveResult, SolveWarning } from "./types";
+import { generalizedLoad, type BodyModel } from "./model";
+
+export type CaseRun =
+  | { id: string; name: string; kind: "case" | "combination"; ok: true; result: SolveResult; stability: Record<string, BodyStability> }
+  | { id: string; name: string; kind: "case" | "combination"; ok: false; errors: FieldError[] };
+
+export const COMPONENTS = ["fx", "fy", "m", "n", "t", "resultant"] as const;
+export type Component = (typeof COMPONENTS)[number];
+
+export interface EnvelopeEntry {
+  max: { value: number; case: string };
+  min: { value: number; case: string };
+}
+
+export interface SupportEnvelope {
+  components: Partial<Record<Component, EnvelopeEntry>>;
+  /** the largest resultant over the cases, with its direction (on the body) and case */
+  design: { resultant: number; angle: number; fx: number; fy: number; m: number; case: string };
+  /** governing case per component: the one with the largest magnitude */
+  governing: Partial<Record<Component, string>>;
+}
+
+export interface StudyResult {
+  runs: CaseRun[];
+  envelope: Record<string, SupportEnvelope>;
+  requirements: Requirements;
+}
+
+const AS_DRAWN: CaseFile = { id: "as-drawn", name: "As drawn" };
+
+/** A case's numeric sketch: the file with its parameter overrides, and its scaling. */
+function caseSketch(file: SketchFile, c: CaseFile) {
+  const variant: SketchFile = c.parameters ? { ...file, parameters: { ...(file.parameters ?? {}), ...c.parameters } } : file;
+  const r = resolveFile(variant);
+  if (!r.ok) {
+    return { ok: false as const, errors: r.errors.map((e) => (e.path.startsWith("parameters.") && c.parameters?.[e.path.slice(11)] !== undefined ? { ...e, path: `cases[${c.id}].${e.path}` } : e)) };
+  }
+  r.sketch.scaling = { factors: c.factors, flowFactor: c.flowFactor ?? 1 };
+  return { ok: true as const, sketch: r.sketch, warnings: r.warnings };
+}
+
+/** Add the load sets of several cases (each × its factor) on the geometry of the first. */
+export function combineModels(parts: Array<{ models: BodyModel[]; factor: number; name: string }>): BodyModel[] {
+  const base = parts[0].models;
+  return base.map((m, bi) => {
+    const forceTerms: EquationTerm[] = [];
+    const momentumTerms: EquationTerm[] = [];
+    const momentum = { fx: 0, fy: 0, m: 0 };
+    let ax = 0;
+    let ay = 0;
+    for (const part of parts) {
+      const pm = part.models[bi];
+      const f = part.factor;
+      const prefix = `${Number(f.toPrecision(6))} × [${part.name}] `;
+      for (const t of pm.forceTerms) forceTerms.push({ ...t, label: prefix + t.label, fx: t.fx * f, fy: t.fy * f, m: t.m * f });
+      for (const t of pm.momentumTerms) momentumTerms.push({ ...t, label: prefix + t.label, fx: t.fx * f, fy: t.fy * f, m: t.m * f });
+      momentum.fx += f * pm.momentum.fx;
+      momentum.fy += f * pm.momentum.fy;
+      momentum.m += f * pm.momentum.m;
+      ax += f * pm.ax;
+      ay += f * pm.ay;
+    }
+    // Q from the combined terms about the first case's reference point
+    const { Q, scale } = generalizedLoad(forceTerms, momentumTerms, m.origin, m.L);
+    if (m.freeX) Q[0] = 0;
+    return { ...m, Q, forceTerms, momentumTerms, momentum, scale, ax, ay };
+  });
+}
+
+export function solveCases(file: SketchFile): StudyResult {
+  const requirements: Requirements = { ...DEFAULT_REQUIREMENTS, ...(file.stability ?? {}) };
+  const cases = file.cases?.length ? file.cases : [AS_DRAWN];
+  const runs: CaseRun[] = [];
+  const prepared = new Map<string, { models: BodyModel[]; warnings: SolveWarning[] }>();
+
+  const finish = (id: string, name: string, kind: "case" | "combination", models: BodyModel[], warnings: SolveWarning[]) => {
+    const result = solveModels(models, warnings);
+    const stability = Object.fromEntries(models.map((m) => [m.body.id, bodyStability(m, result, requirements)]));
+    runs.push({ id, name, kind, ok: true, result, stability });
+  };
+
+  for (const c of cases) {
+    const cs = caseSketch(file, c);
+    if (!cs.ok) {
+      runs.push({ id: c.id, name: c.name, kind: "case", ok: false, errors: cs.errors });
+      continue;
+    }
+    const p = prepare(cs.sketch);
+    p.warnings.unshift(...cs.warnings);
+    prepared.set(c.id, p);
+    finish(c.id, c.name, "case", p.models, [...p.warnings]);
+  }
+
+  for (const k of file.combinations ?? []) {
+    const missing = k.terms.filter((t) => !prepared.has(t.case));
+    if (missing.length) {
+      runs.push({ id: k.id, name: k.name, kind: "combination", ok: false, errors: [{ path: `combinations[${k.id}]`, message: `case ${missing.map((t) => t.case).join(", ")} could not be evaluated` }] });
+      continue;
+    }
+    const parts = k.terms.map((t) => ({ models: prepared.get(t.case)!.models, factor: t.factor, name: cases.find((c) => c.id === t.case)!.name }));
+    const warnings = k.terms.flatMap((t) => prepared.get(t.case)!.warnings).filter((w, i, all) => all.findIndex((x) => x.message === w.message) === i);
+    finish(k.id, k.name, "combination", combineModels(parts), warnings);
+  }
+
+  return { runs, envelope: envelopeOf(runs), requirements };
+}
+
+const componentOf = (r: Reaction, c: Component): number | undefined =>
+  c === "resultant" ? Math.hypot(r.fx, r.fy) : c === "n" || c === "t" ? r[c] : r[c];
+
+export function envelopeOf(runs: CaseRun[]): Record<string, SupportEnvelope> {
+  const out: Record<string, SupportEnvelope> = {};
+  for (const run of runs) {
+    if (!run.ok) continue;
+    for (const [id, r] of Object.entries(run.result.reactions)) {
+      const env = (out[id] ??= { components: {}, design: { resultant: -1, angle: 0, fx: 0, fy: 0, m: 0, case: run.id }, governing: {} });
+      for (const c of COMPONENTS) {
+        const v = componentOf(r, c);
+        if (v === undefined) continue;
+        const e = (env.components[c] ??= { max: { value: v, case: run.id }, min: { value: v, case: run.id } });
+        if (v > e.max.value) e.max = { value: v, case: run.id };
+        if (v < e.min.value) e.min = { value: v, case: run.id };
+        env.governing[c] = Math.abs(e.max.value) >= Math.abs(e.min.value) ? e.max.case : e.min.case;
+      }
+      const res = Math.hypot(r.fx, r.fy);
+      if (res > env.design.resultant) {
+        env.design = { resultant: res, angle: (Math.atan2(r.fy, r.fx) * 180) / Math.PI, fx: r.fx, fy: r.fy, m: r.m, case: run.id };
+      }
+    }
+  }
+  return out;
+}

@@ -1,0 +1,118 @@
+// Factors of safety per body (common practice):
+//  - against overturning: the restoring over the overturning moment of the applied loads about
+//    the contact the body would tip about (each contact and each sense of turning is tried; a
+//    mode counts only if every other support lets it happen: other contacts open, nothing
+//    bilateral or pulling holds it), the smallest ratio governs;
+//  - against sliding: the friction the bearing contacts can give, Σ μ·n, over the tangential
+//    force they must resist, |Σ t|. Only for bodies held by contacts and ties alone.
+import { dot3 } from "./linalg";
+import type { BodyModel } from "./model";
+import { direction, momentOf } from "./geometry";
+import type { BodyResult, Reaction, Vec2 } from "./types";
+
+export interface OverturningCheck {
+  factor: number;
+  /** the contact it would tip about */
+  about: string;
+  pivot: Vec2;
+  /** turning sense: +1 counter-clockwise, −1 clockwise */
+  sense: 1 | -1;
+  restoring: number;
+  overturning: number;
+  required: number;
+  pass: boolean;
+}
+
+export interface SlidingCheck {
+  factor: number;
+  available: number;
+  driving: number;
+  required: number;
+  pass: boolean;
+}
+
+export interface BodyStability {
+  overturning: OverturningCheck | { notApplicable: string };
+  sliding: SlidingCheck | { notApplicable: string };
+}
+
+export interface Requirements {
+  overturning: number;
+  sliding: number;
+}
+
+/** 1.5 for each is common practice (from memory). */
+export const DEFAULT_REQUIREMENTS: Requirements = { overturning: 1.5, sliding: 1.5 };
+
+export function overturningCheck(model: BodyModel, required: number): BodyStability["overturning"] {
+  const { supports, springs, groups, origin, L } = model;
+  const contacts = groups.filter((g) => g.kind === "contact");
+  if (contacts.length === 0) return { notApplicable: "no contacts to tip about" };
+  let best: OverturningCheck | null = null;
+  let blockedBy = "";
+  for (const g of contacts) {
+    const s = supports[g.support];
+    const P = s.at;
+    for (const sense of [1, -1] as const) {
+      // rotation about P: displacement of the reference point and scaled turn
+      const d = [sense * (P[1] - origin[1]), sense * (origin[0] - P[0]), sense * L];
+      let valid = true;
+      const eps = 1e-9 * L;
+      for (let i = 0; i < springs.length; i++) {
+        const sp = springs[i];
+        if (sp.support === g.support) continue;
+        const v = dot3(sp.g, d);
+        const grp = sp.group >= 0 ? groups[sp.group] : null;
+        // another contact or tie must open (or stay); a bilateral support must not move at all;
+        // the friction spring of a contact that opens does not matter
+        const blocks = grp === null ? Math.abs(v) > eps : grp.normal === i ? v < -eps : false;
+        if (blocks) {
+          valid = false;
+          blockedBy = supports[sp.support].id;
+          break;
+        }
+      }
+      if (!valid) continue;
+      let restoring = 0;
+      let overturning = 0;
+      const add = (work: number) => (work > 0 ? (overturning += work) : (restoring -= work));
+      for (const t of model.forceTerms) add(sense * ((t.at ? momentOf(t.at[0] - P[0], t.at[1] - P[1], t.fx, t.fy) : 0) + t.m));
+      // momentum flux terms sit on the other side of the equation: the body feels −ṁV
+      for (const t of model.momentumTerms) add(-sense * (t.at ? momentOf(t.at[0] - P[0], t.at[1] - P[1], t.fx, t.fy) : 0));
+      if (overturning <= 1e-12 * (restoring + 1)) continue;
+      const factor = restoring / overturning;
+      if (!best || factor < best.factor) {
+        best = { factor, about: s.id, pivot: [P[0], P[1]], sense, restoring, overturning, required, pass: factor >= required };
+      }
+    }
+  }
+  if (best) return best;
+  return { notApplicable: blockedBy ? `tipping is prevented by support ${blockedBy}` : "no load tends to tip it" };
+}
+
+export function slidingCheck(model: BodyModel, reactions: Record<string, Reaction>, required: number): BodyStability["sliding"] {
+  const holder = model.supports.find((s) => s.kind === "pin" || s.kind === "fixed" || s.kind === "roller");
+  if (holder) return { notApplicable: `sliding is resisted by ${holder.kind === "fixed" ? "fixed support" : holder.kind} ${holder.id}` };
+  let available = 0;
+  let tx = 0;
+  let ty = 0;
+  let any = false;
+  for (const s of model.supports) {
+    if (s.kind !== "contact" || s.mu === undefined) continue;
+    const r = reactions[s.id];
+    if (!r || r.state !== "bearing") continue;
+    any = true;
+    available += s.mu * Math.max(r.n ?? 0, 0);
+    const e = direction(s.angle + 90);
+    tx += (r.t ?? 0) * e[0];
+    ty += (r.t ?? 0) * e[1];
+  }
+  if (!any) return { notApplicable: "no bearing contact with friction" };
+  const driving = Math.hypot(tx, ty);
+  const factor = driving > 1e-12 ? available / driving : Infinity;
+  return { factor, available, driving, required, pass: factor >= required };
+}
+
+export function bodyStability(model: BodyModel, result: { reactions: Record<string, Reaction>; bodies: Record<string, BodyResult> }, req: Requirements): BodyStability {
+  return { overturning: overturningCheck(model, req.overturning), sliding: slidingCheck(model, result.reactions, req.sliding) };
+}
