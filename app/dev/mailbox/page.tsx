@@ -36,29 +36,31 @@ export default async function MailboxPage({ searchParams }: { searchParams: Prom
       </div>
       <div className="mt-6">
         {mails.length ? (
-          <table className="w-full overflow-hidden rounded-lg border border-rule bg-paper-card text-sm">
-            <caption className="sr-only">Received mail, newest first</caption>
-            <thead>
-              <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
-                <th scope="col" className="px-4 py-2 font-semibold">Received</th>
-                <th scope="col" className="px-4 py-2 font-semibold">To</th>
-                <th scope="col" className="px-4 py-2 font-semibold">Subject</th>
-              </tr>
-            </thead>
-            <tbody>
-              {mails.map((m) => (
-                <tr key={m.id} className="border-b border-rule-soft last:border-0 hover:bg-paper-deep/50">
-                  <td className="num whitespace-nowrap px-4 py-2.5 text-ink-soft">{formatDateTime(m.receivedAt)}</td>
-                  <td className="px-4 py-2.5 text-ink-soft">{m.to.join(", ")}</td>
-                  <td className="px-4 py-2.5">
-                    <Link href={`/dev/mailbox/${m.id}`} className="font-medium text-ink underline decoration-rule underline-offset-2 hover:decoration-ink">
-                      {m.subject}
-                    </Link>
-                  </td>
+          <div className="overflow-hidden rounded-lg border border-rule bg-paper-card">
+            <table className="w-full text-sm">
+              <caption className="sr-only">Received mail, newest first</caption>
+              <thead>
+                <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
+                  <th scope="col" className="px-4 py-2 font-semibold">Received</th>
+                  <th scope="col" className="px-4 py-2 font-semibold">To</th>
+                  <th scope="col" className="px-4 py-2 font-semibold">Subject</th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {mails.map((m) => (
+                  <tr key={m.id} className="border-b border-rule-soft last:border-0 hover:bg-paper-deep/50">
+                    <td className="num whitespace-nowrap px-4 py-2.5 text-ink-soft">{formatDateTime(m.receivedAt)}</td>
+                    <td className="px-4 py-2.5 text-ink-soft">{m.to.join(", ")}</td>
+                    <td className="px-4 py-2.5">
+                      <Link href={`/dev/mailbox/${m.id}`} className="font-medium text-ink underline decoration-rule underline-offset-2 hover:decoration-ink">
+                        {m.subject}
+                      </Link>
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
         ) : (
           <EmptyState title={to ? `No mail to ${to} yet` : "No mail yet"}>
             Sign up, ask for a password reset or invite someone: the mail appears here within a second or two. Refresh to look again.
