@@ -75,8 +75,8 @@ export async function createWorkspace(
 export async function ensurePersonalWorkspace(u: { id: string; name: string }, tx: DbOrTx = db): Promise<string> {
   const [existing] = await tx.select({ id: workspace.id }).from(workspace).where(eq(workspace.personalOf, u.id));
   if (existing) return existing.id;
-  const first = u.name.trim().split(/\s+/)[0] || "My";
-  const ws = await createWorkspace({ name: `${first}'s workspace`, ownerId: u.id, personalOf: u.id }, tx);
+  const first = u.name.trim().split(/\s+/)[0];
+  const ws = await createWorkspace({ name: first ? `${first}'s workspace` : "Personal workspace", ownerId: u.id, personalOf: u.id }, tx);
   return ws.id;
 }
 
