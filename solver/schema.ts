@@ -120,6 +120,28 @@ export const combinationSchema = z.strictObject({
     .min(1, { error: "needs at least one case" }),
 });
 
+/** A saved sweep: a parameter over a range, and the quantities to plot. */
+export const sweepSchema = z.strictObject({
+  id,
+  parameter: z.string().min(1, { error: "must name a parameter (or flowFactor)" }),
+  from: z.number({ error: "must be a number" }).finite(),
+  to: z.number({ error: "must be a number" }).finite(),
+  points: z.number().int().min(2, { error: "needs at least 2 points" }).max(20000, { error: "is more than 20,000 points" }),
+  /** the case whose overrides apply (default: the sketch as drawn) */
+  case: id.optional(),
+  quantities: z
+    .array(
+      z.strictObject({
+        support: id,
+        component: z.enum(["fx", "fy", "m", "n", "t", "resultant", "margin", "frictionRatio", "frictionMargin"], {
+          error: "must be one of fx, fy, m, n, t, resultant, margin, frictionRatio, frictionMargin",
+        }),
+      }),
+    )
+    .max(24)
+    .optional(),
+});
+
 export const stabilitySchema = z.strictObject({
   overturning: z.number().positive({ error: "must be more than zero" }).optional(),
   sliding: z.number().positive({ error: "must be more than zero" }).optional(),
@@ -139,6 +161,7 @@ export const sketchSchema = z.strictObject({
   massSources: z.array(massSourceSchema).default([]),
   motion: motionSchema.optional(),
   cases: z.array(caseSchema).optional(),
+  sweeps: z.array(sweepSchema).optional(),
   combinations: z.array(combinationSchema).optional(),
   /** required factors of safety (default 1.5 each) */
   stability: stabilitySchema.optional(),
@@ -155,6 +178,7 @@ export type MassSourceFile = z.infer<typeof massSourceSchema>;
 export type SupportKind = SupportFile["kind"];
 export type CaseFile = z.infer<typeof caseSchema>;
 export type CombinationFile = z.infer<typeof combinationSchema>;
+export type SweepFile = z.infer<typeof sweepSchema>;
 export type LoadKind = LoadFile["kind"];
 
 /** Format a zod path as the contract writes it: `ports[1].area`. */

@@ -1,0 +1,73 @@
+// Result tables shared by the panel, the CSV export and the calc sheet.
+import Papa from "papaparse";
+import { describe, expect, it } from "vitest";
+import { caseReactionTable, envelopeTable, handCheckTable, inputsTable, parseSketch, reactionTable, solve, solveCases, stabilityTable, tableToCsv } from "@/solver";
+import { LBF_N } from "@/solver/constants";
+import { loadFixture } from "./helpers";
+
+const parsedFixture = (name: string) => {
+  const p = parseSketch(loadFixture(name));
+  if (!p.ok) throw new Error();
+  return p;
+};
+
+describe("result tables", () => {
+  it("reactions in kN, and the load on the support is the same with its sign reversed", () => {
+    const r = solve(parsedFixture("thrust-stand-tips.json").sketch);
+    const onBody = reactionTable(r, "SI");
+    const onSupport = reactionTable(r, "SI", { onSupport: true });
+    const fx = onBody.columns.findIndex((c) => c.key === "fx");
+    expect(onBody.columns[fx].unit).toBe("kN");
+    expect(onBody.rows[0][0]).toBe("front");
+    expect(onBody.rows[0][fx]).toBeCloseTo(r.reactions.front.fx / 1000, 12);
+    expect(onSupport.rows[0][fx]).toBeCloseTo(-r.reactions.front.fx / 1000, 12);
+    expect(onSupport.notes![0]).toMatch(/sign reversed/);
+  });
+
+  it("US customary columns in lbf", () => {
+    const r = solve(parsedFixture("thrust-stand-tips.json").sketch);
+    const t = reactionTable(r, "US");
+    const fx = t.columns.findIndex((c) => c.key === "fx");
+    expect(t.columns[fx].unit).toBe("lbf");
+    expect(t.rows[0][fx]).toBeCloseTo(r.reactions.front.fx / LBF_N, 9);
+  });
+
+  it("the hand-check table closes: the imbalance row is zero", () => {
+    const r = solve(parsedFixture("pump-skid-discharge.json").sketch);
+    const t = handCheckTable(r, "skid", [2, 1], "SI");
+    const last = t.rows[t.rows.length - 1];
+    expect(last[1]).toMatch(/imbalance/);
+    for (const k of [2, 3, 5]) expect(Math.abs(last[k] as number)).toBeLessThan(1e-9);
+    expect(t.rows.some((row) => row[1] === "momentum out at discharge")).toBe(true);
+  });
+
+  it("case, envelope and stability tables, and CSV with units in the header", () => {
+    const doc = loadFixture("fire-monitor-trailer.json");
+    doc.cases = [
+      { id: "low", name: "Low", parameters: { theta: "15 deg" } },
+      { id: "high", name: "High", parameters: { theta: "60 deg" } },
+    ];
+    const p = parseSketch(doc);
+    if (!p.ok) throw new Error();
+    const study = solveCases(p.file);
+    const cases = caseReactionTable(study, "SI");
+    expect(cases.rows).toHaveLength(6);
+    const env = envelopeTable(study, "SI");
+    expect(env.rows.map((r) => r[0])).toEqual(["leg", "wheel", "jack"]);
+    const st = stabilityTable(study);
+    expect(st.rows.filter((r) => r[2] === "overturning")).toHaveLength(2);
+    const csv = tableToCsv(env, Papa.unparse);
+    expect(csv.split("\r\n")[0]).toBe("Support,Fx max (kN),Fx min (kN),Fy max (kN),Fy min (kN),M max (kN·m),M min (kN·m),Design load (kN),at angle (°),from case");
+    const back = Papa.parse<string[]>(csv).data;
+    expect(Number(back[1][7])).toBeCloseTo(study.envelope.leg.design.resultant / 1000, 4);
+  });
+
+  it("inputs as typed and as evaluated", () => {
+    const p = parsedFixture("pipe-bend-anchor.json");
+    const t = inputsTable(p);
+    const row = t.rows.find((r) => r[0] === "ports[1].angle")!;
+    expect(row[1]).toBe("theta");
+    expect(row[2]).toBeCloseTo(60, 9);
+    expect(t.rows.find((r) => r[0] === "parameters.p1")![2]).toBe("600 kPa");
+  });
+});
