@@ -12,7 +12,7 @@ export { bodyStability, DEFAULT_REQUIREMENTS, type BodyStability, type Overturni
 export { findLimit, brent, type LimitResult, type LimitOptions } from "./limit";
 export { readQuantity, describeQuantity, type QuantitySpec, type QuantityComponent } from "./quantity";
 export { handCheckSums, termMomentAbout, type HandCheckSums } from "./equations";
-export { reactionTable, caseReactionTable, envelopeTable, stabilityTable, handCheckTable, inputsTable, tableToCsv, columnUnit, type Table, type Cell } from "./report";
+export { reactionTable, caseReactionTable, envelopeTable, stabilityTable, handCheckTable, inputsTable, parametersTable, tableToCsv, columnUnit, type Table, type Cell } from "./report";
 export { describeFreeMotion, describeSupport } from "./words";
 export { formatQuantity, formatNumber, convert, unitsFor, type UnitSystem, type Quantity } from "./units";
 export { sketchSchema, CURRENT_VERSION, FORMAT, formatPath } from "./schema";

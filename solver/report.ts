@@ -6,7 +6,7 @@ import { handCheckSums, termMomentAbout } from "./equations";
 import type { ParseResult } from "./parse";
 import type { BodyStability } from "./stability";
 import type { SolveResult, Vec2 } from "./types";
-import { convert, unitsFor, type Quantity, type UnitSystem } from "./units";
+import { convert, formatNumber, unitsFor, type Quantity, type UnitSystem } from "./units";
 
 export type Cell = string | number | null;
 
@@ -213,27 +213,79 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
       ["total", "Σ(ṁV)out − Σ(ṁV)in", inUnit(sums.momentum.fx, "force", system), inUnit(sums.momentum.fy, "force", system), "", inUnit(sums.momentum.m, "moment", system)],
       ["total", "imbalance (0 when the body holds)", inUnit(sums.imbalance.fx, "force", system), inUnit(sums.imbalance.fy, "force", system), "", inUnit(sums.imbalance.m, "moment", system)],
     ],
+    notes: [
+      `ΣFx = ${fmt(sums.forces.fx, "force")} and Σ(ṁV)x = ${fmt(sums.momentum.fx, "force")}; ΣFy = ${fmt(sums.forces.fy, "force")} and Σ(ṁV)y = ${fmt(sums.momentum.fy, "force")}; ΣM about (${about[0]}, ${about[1]}) = ${fmt(sums.forces.m, "moment")} and Σ r × ṁV = ${fmt(sums.momentum.m, "moment")}.`,
+    ],
+  };
+  function fmt(v: number, q: Quantity) {
+    return `${formatNumber(inUnit(v, q, system) ?? 0, 4)} ${columnUnit(q, system)}`;
+  }
+}
+
+/** SI unit shown after an evaluated field, by field name. */
+const FIELD_UNIT: Record<string, string> = {
+  mass: "kg", angle: "°", mu: "", stiffness: "N/m", rotationalStiffness: "N·m/rad", magnitude: "N", fx: "N", fy: "N",
+  value: "N·m", w1: "N/m", w2: "N/m", massFlow: "kg/s", velocity: "m/s", pressure: "Pa", area: "m²", density: "kg/m³",
+  volumeFlow: "m³/s", ax: "m/s²", ay: "m/s²", gravity: "m/s²",
+};
+
+/** Parameters as typed and as evaluated. */
+export function parametersTable(parsed: Extract<ParseResult, { ok: true }>): Table {
+  return {
+    id: "parameters",
+    title: "Parameters",
+    columns: [
+      { key: "name", label: "Name", align: "left" },
+      { key: "typed", label: "Expression", align: "left" },
+      { key: "value", label: "Value", align: "left" },
+    ],
+    rows: Object.entries(parsed.parameterValues).map(([name, v]) => [
+      name,
+      String(parsed.file.parameters?.[name]),
+      "value" in v ? `${Number(v.value.toPrecision(6))}${v.unit ? " " + v.unit : ""}` : v.error,
+    ]),
   };
 }
 
-/** Inputs as typed and as evaluated: every numeric field and every parameter. */
+/** Every element with its fields: as typed, and (for expressions) the value in SI units. */
 export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
   const rows: Cell[][] = [];
-  for (const [name, v] of Object.entries(parsed.parameterValues)) {
-    const expr = parsed.file.parameters?.[name];
-    rows.push([`parameters.${name}`, String(expr), "value" in v ? `${Number(v.value.toPrecision(6))}${v.unit ? " " + v.unit : ""}` : v.error]);
+  const groups = ["bodies", "supports", "loads", "ports", "massSources"] as const;
+  const show = (raw: unknown, path: string, name: string): string => {
+    const v = parsed.fields[path];
+    const unit = FIELD_UNIT[name] ?? "";
+    if (typeof raw === "number") return `${Number(raw.toPrecision(6))}${unit ? " " + unit : ""}`;
+    if (typeof raw === "string" && v && "value" in v) return `${raw} = ${Number(v.value.toPrecision(5))}${unit ? " " + unit : ""}`;
+    return String(raw);
+  };
+  const point = (raw: unknown, path: string): string => {
+    const pt = raw as unknown[];
+    return `(${show(pt[0], `${path}[0]`, "")}, ${show(pt[1], `${path}[1]`, "")}) m`;
+  };
+  for (const g of groups) {
+    (parsed.file[g] as Array<Record<string, unknown>>).forEach((el, i) => {
+      const parts: string[] = [];
+      for (const [k, raw] of Object.entries(el)) {
+        if (["id", "label", "body", "kind"].includes(k)) continue;
+        const path = `${g}[${i}].${k}`;
+        if (k === "outline") parts.push(`outline ${(raw as unknown[]).map((p, j) => point(p, `${path}[${j}]`).replace(/ m$/, "")).join(" ")} m`);
+        else if (Array.isArray(raw)) parts.push(`${k} ${point(raw, path)}`);
+        else parts.push(`${k} ${show(raw, path, k)}`);
+      }
+      rows.push([el.id as string, (el.kind as string | undefined) ?? g.replace(/ies$/, "y").replace(/s$/, ""), (el.label as string | undefined) ?? "", (el.body as string | undefined) ?? "", parts.join("; ")]);
+    });
   }
-  for (const [path, v] of Object.entries(parsed.fields)) {
-    const raw = readPath(parsed.file, path);
-    rows.push([path, raw === undefined ? "" : String(raw), "value" in v ? Number(v.value.toPrecision(6)) : v.error]);
-  }
+  const gv = parsed.fields.gravity;
+  rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (acts in −y)`]);
   return {
     id: "inputs",
-    title: "Inputs (as typed, and their values in SI units; angles in degrees)",
+    title: "Elements (as typed; expressions with their values in SI units, angles in degrees)",
     columns: [
-      { key: "field", label: "Field", align: "left" },
-      { key: "typed", label: "Typed", align: "left" },
-      { key: "value", label: "Value (SI)" },
+      { key: "id", label: "Id", align: "left" },
+      { key: "kind", label: "Kind", align: "left" },
+      { key: "label", label: "Label", align: "left" },
+      { key: "body", label: "Body", align: "left" },
+      { key: "fields", label: "Fields", align: "left" },
     ],
     rows,
   };

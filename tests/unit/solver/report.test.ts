@@ -1,7 +1,7 @@
 // Result tables shared by the panel, the CSV export and the calc sheet.
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { caseReactionTable, envelopeTable, handCheckTable, inputsTable, parseSketch, reactionTable, solve, solveCases, stabilityTable, tableToCsv } from "@/solver";
+import { caseReactionTable, envelopeTable, handCheckTable, inputsTable, parametersTable, parseSketch, reactionTable, solve, solveCases, stabilityTable, tableToCsv } from "@/solver";
 import { LBF_N } from "@/solver/constants";
 import { loadFixture } from "./helpers";
 
@@ -65,9 +65,12 @@ describe("result tables", () => {
   it("inputs as typed and as evaluated", () => {
     const p = parsedFixture("pipe-bend-anchor.json");
     const t = inputsTable(p);
-    const row = t.rows.find((r) => r[0] === "ports[1].angle")!;
-    expect(row[1]).toBe("theta");
-    expect(row[2]).toBeCloseTo(60, 9);
-    expect(t.rows.find((r) => r[0] === "parameters.p1")![2]).toBe("600 kPa");
+    const out = t.rows.find((r) => r[0] === "out")!;
+    expect(out[1]).toBe("outlet");
+    expect(out[4]).toContain("angle theta = 60 °");
+    expect(out[4]).toContain("at (0.6 * cos(theta) = 0.3, 0.6 * sin(theta) = 0.51962) m");
+    expect(t.rows[0]).toEqual(["gravity", "", "", "", "0 m/s² (acts in −y)"]);
+    const params = parametersTable(p);
+    expect(params.rows.find((r) => r[0] === "p1")).toEqual(["p1", "600 kPa", "600 kPa"]);
   });
 });
