@@ -291,16 +291,6 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
   };
 }
 
-function readPath(obj: unknown, path: string): unknown {
-  const parts = path.match(/[^.[\]]+/g) ?? [];
-  let cur: unknown = obj;
-  for (const p of parts) {
-    if (cur === null || typeof cur !== "object") return undefined;
-    cur = (cur as Record<string, unknown>)[p];
-  }
-  return cur;
-}
-
 /** CSV of a table: a header with units, numbers unformatted (6 significant figures). */
 export function tableToCsv(t: Table, unparse: (rows: unknown[][]) => string): string {
   const header = t.columns.map((c) => (c.unit ? `${c.label} (${c.unit})` : c.label || c.key));
