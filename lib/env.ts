@@ -92,3 +92,43 @@ export function mailboxEnabled(): boolean {
   if (process.env.SMTP_HOST) return false;
   return isLoopbackUrl(appUrl()) || process.env.DEV_MAILBOX === "1";
 }
+
+export type StorageSettings = {
+  kind: "real" | "local";
+  endpoint: string;
+  region: string;
+  bucket: string;
+  accessKeyId: string;
+  secretAccessKey: string;
+  /** path-style URLs (the local fake and most S3-compatible servers need them) */
+  forcePathStyle: boolean;
+  port: number;
+};
+
+/** A real bucket when S3_ENDPOINT is set; otherwise the local fake that `npm start` and `npm test` run. */
+export function storageSettings(): StorageSettings {
+  const port = positiveNumber("S3_PORT", 4569);
+  if (process.env.S3_ENDPOINT) {
+    return {
+      kind: "real",
+      endpoint: process.env.S3_ENDPOINT,
+      region: process.env.S3_REGION || "us-east-1",
+      bucket: process.env.S3_BUCKET || "counterpoise-uploads",
+      accessKeyId: process.env.S3_ACCESS_KEY_ID || "",
+      secretAccessKey: process.env.S3_SECRET_ACCESS_KEY || "",
+      forcePathStyle: process.env.S3_FORCE_PATH_STYLE === "true",
+      port,
+    };
+  }
+  return {
+    kind: "local",
+    endpoint: `http://127.0.0.1:${port}`,
+    region: "us-east-1",
+    bucket: process.env.S3_BUCKET || "counterpoise-uploads",
+    // the local fake's fixed credentials
+    accessKeyId: "S3RVER",
+    secretAccessKey: "S3RVER",
+    forcePathStyle: true,
+    port,
+  };
+}

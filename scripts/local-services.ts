@@ -1,7 +1,8 @@
 // Local stand-ins for hosted services, on loopback: started by `npm start`, `npm run dev` and `npm test`.
 // Each later service (mail, object storage) registers here.
 import { localDatabaseUrl } from "../lib/database-url";
-import { smtpSettings } from "../lib/env";
+import { smtpSettings, storageSettings } from "../lib/env";
+import { startS3Fake } from "../lib/local-s3";
 import { devMailStore, startMailFake } from "../lib/mail-fake";
 
 const services: Array<{ name: string; start: () => Promise<() => Promise<void>> }> = [
@@ -21,6 +22,21 @@ const services: Array<{ name: string; start: () => Promise<() => Promise<void>> 
         await stop();
         await store.close();
       };
+    },
+  },
+  {
+    // Object storage: with no S3_ENDPOINT configured the app stores uploads in this fake.
+    name: "storage",
+    async start() {
+      const st = storageSettings();
+      if (st.kind === "real") {
+        console.error(`[services] S3_ENDPOINT is set (${st.endpoint}): the local storage fake is not started`);
+        return async () => undefined;
+      }
+      const directory = `${process.env.COUNTERPOISE_LOCAL_STATE || `/tmp/counterpoise-state-${st.port}`}/s3`;
+      const stop = await startS3Fake({ port: st.port, bucket: st.bucket, directory });
+      console.error(`[services] local S3 on 127.0.0.1:${st.port} (bucket ${st.bucket}, files in ${directory})`);
+      return stop;
     },
   },
 ];

@@ -1,0 +1,59 @@
+import "server-only";
+// Object storage through the S3 API (@aws-sdk/client-s3): a real bucket when S3_ENDPOINT is set,
+// the local fake on loopback otherwise. Keys are made here, never by users.
+import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
+import { randomUUID } from "node:crypto";
+import { storageSettings } from "./env";
+
+const globalForS3 = globalThis as unknown as { counterpoiseS3?: S3Client };
+
+export function s3(): S3Client {
+  if (globalForS3.counterpoiseS3) return globalForS3.counterpoiseS3;
+  const st = storageSettings();
+  const client = new S3Client({
+    endpoint: st.endpoint,
+    region: st.region,
+    forcePathStyle: st.forcePathStyle,
+    credentials: { accessKeyId: st.accessKeyId, secretAccessKey: st.secretAccessKey },
+  });
+  globalForS3.counterpoiseS3 = client;
+  return client;
+}
+
+const bucket = () => storageSettings().bucket;
+
+/** A fresh storage key under a workspace: `w/<workspace>/<uuid>.<ext>`. */
+export function newStorageKey(workspaceId: string, ext: string): string {
+  return `w/${workspaceId}/${randomUUID()}.${ext.replace(/[^a-z0-9]/gi, "")}`;
+}
+
+export async function putObject(key: string, body: Buffer, contentType: string): Promise<void> {
+  await s3().send(new PutObjectCommand({ Bucket: bucket(), Key: key, Body: body, ContentType: contentType, ContentLength: body.length }));
+}
+
+export async function getObject(key: string): Promise<Buffer> {
+  const res = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
+  const bytes = await res.Body!.transformToByteArray();
+  return Buffer.from(bytes);
+}
+
+export async function objectExists(key: string): Promise<boolean> {
+  try {
+    await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
+    return true;
+  } catch (err) {
+    const status = (err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+    if (status === 404) return false;
+    throw err;
+  }
+}
+
+export async function deleteObject(key: string): Promise<void> {
+  await s3().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
+}
+
+/** A short-lived signed URL for reading an object (after the caller's role was checked). */
+export async function signedReadUrl(key: string, seconds = 60): Promise<string> {
+  return getSignedUrl(s3(), new GetObjectCommand({ Bucket: bucket(), Key: key }), { expiresIn: seconds });
+}
