@@ -16,7 +16,7 @@ export { reactionTable, caseReactionTable, envelopeTable, stabilityTable, handCh
 export { describeFreeMotion, describeSupport } from "./words";
 export { formatQuantity, formatNumber, convert, unitsFor, type UnitSystem, type Quantity } from "./units";
 export { sketchSchema, CURRENT_VERSION, FORMAT, formatPath } from "./schema";
-export type { SketchFile, SketchFileInput, SupportKind, LoadKind, CaseFile, CombinationFile } from "./schema";
+export type { SketchFile, SketchFileInput, SupportKind, LoadKind, CaseFile, CombinationFile, SweepFile, UnderlayFile } from "./schema";
 export { migrateSketch, MIGRATIONS } from "./migrations";
 export { CAUTIONS, CAUTION_SHORT, ASSUMPTIONS } from "./cautions";
 export * from "./types";
@@ -33,3 +33,4 @@ export function solveFile(input: unknown): (SolveResult & { study?: StudyResult 
   if (parsed.file.cases?.length || parsed.file.combinations?.length) result.study = solveCases(parsed.file);
   return result;
 }
+export { calibrate, imageToWorld, worldToImage, rescaleAbout, type UnderlayPlacement } from "./underlay";

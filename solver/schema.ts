@@ -142,6 +142,27 @@ export const sweepSchema = z.strictObject({
     .optional(),
 });
 
+const pixel = z.tuple([z.number().finite(), z.number().finite()], { error: "must be a pixel position [x, y]" });
+
+/** A drawing or photo under the sketch (an uploaded file), placed and scaled in the world. */
+export const underlaySchema = z.strictObject({
+  /** the upload's id */
+  upload: z.string().min(1),
+  /** image size in pixels */
+  width: z.number().int().positive(),
+  height: z.number().int().positive(),
+  /** world position (m) of the image's top-left corner */
+  origin: z.tuple([z.number().finite(), z.number().finite()]),
+  metresPerPixel: z.number().positive({ error: "must be more than zero" }),
+  /** degrees, counter-clockwise */
+  rotation: z.number().finite().default(0),
+  opacity: z.number().min(0).max(1).default(0.6),
+  hidden: z.boolean().optional(),
+  locked: z.boolean().optional(),
+  /** the two marks and the distance the user typed to set the scale */
+  calibration: z.strictObject({ a: pixel, b: pixel, distance: numeric }).optional(),
+});
+
 export const stabilitySchema = z.strictObject({
   overturning: z.number().positive({ error: "must be more than zero" }).optional(),
   sliding: z.number().positive({ error: "must be more than zero" }).optional(),
@@ -165,6 +186,7 @@ export const sketchSchema = z.strictObject({
   combinations: z.array(combinationSchema).optional(),
   /** required factors of safety (default 1.5 each) */
   stability: stabilitySchema.optional(),
+  underlay: underlaySchema.optional(),
 });
 
 /** A sketch file as written (numbers or expressions). */
@@ -179,6 +201,7 @@ export type SupportKind = SupportFile["kind"];
 export type CaseFile = z.infer<typeof caseSchema>;
 export type CombinationFile = z.infer<typeof combinationSchema>;
 export type SweepFile = z.infer<typeof sweepSchema>;
+export type UnderlayFile = z.infer<typeof underlaySchema>;
 export type LoadKind = LoadFile["kind"];
 
 /** Format a zod path as the contract writes it: `ports[1].area`. */
