@@ -3,11 +3,13 @@ import { relations } from "drizzle-orm";
 import { account, session, user } from "./tables/auth";
 import { auditEvent } from "./tables/audit";
 import { invitation, membership, workspace } from "./tables/workspaces";
+import { sketch, sketchVersion } from "./tables/sketches";
 
 export * from "./tables/auth";
 export * from "./tables/workspaces";
 export * from "./tables/audit";
 export * from "./tables/dev-mail";
+export * from "./tables/sketches";
 
 export const userRelations = relations(user, ({ many }) => ({
   sessions: many(session),
@@ -44,8 +46,20 @@ export const auditEventRelations = relations(auditEvent, ({ one }) => ({
   actor: one(user, { fields: [auditEvent.actorId], references: [user.id] }),
 }));
 
+export const sketchRelations = relations(sketch, ({ one, many }) => ({
+  workspace: one(workspace, { fields: [sketch.workspaceId], references: [workspace.id] }),
+  versions: many(sketchVersion),
+}));
+
+export const sketchVersionRelations = relations(sketchVersion, ({ one }) => ({
+  sketch: one(sketch, { fields: [sketchVersion.sketchId], references: [sketch.id] }),
+  author: one(user, { fields: [sketchVersion.authorId], references: [user.id] }),
+}));
+
 export type User = typeof user.$inferSelect;
 export type Workspace = typeof workspace.$inferSelect;
 export type Membership = typeof membership.$inferSelect;
 export type Invitation = typeof invitation.$inferSelect;
 export type AuditEvent = typeof auditEvent.$inferSelect;
+export type Sketch = typeof sketch.$inferSelect;
+export type SketchVersion = typeof sketchVersion.$inferSelect;

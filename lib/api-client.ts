@@ -8,6 +8,8 @@ export class ApiError extends Error {
     readonly code: ErrorCode | "network",
     message: string,
     readonly fields: FieldError[] = [],
+    /** the whole error object the server sent (extra facts such as `latest` on a version conflict) */
+    readonly detail: Record<string, unknown> = {},
   ) {
     super(message);
     this.name = "ApiError";
@@ -40,8 +42,8 @@ export async function apiFetch<T>(path: string, init: { method?: string; body?: 
   const text = await res.text();
   const data = text ? safeJson(text) : null;
   if (!res.ok) {
-    const err = (data as { error?: { code?: ErrorCode; message?: string; fields?: FieldError[] } } | null)?.error;
-    throw new ApiError(res.status, err?.code ?? "internal", err?.message ?? `The server answered ${res.status}.`, err?.fields ?? []);
+    const err = (data as { error?: { code?: ErrorCode; message?: string; fields?: FieldError[] } & Record<string, unknown> } | null)?.error;
+    throw new ApiError(res.status, err?.code ?? "internal", err?.message ?? `The server answered ${res.status}.`, err?.fields ?? [], err ?? {});
   }
   return data as T;
 }

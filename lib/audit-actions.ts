@@ -12,6 +12,19 @@ export const AUDIT_ACTIONS = {
   "member.role_change": "changed the role of",
   "member.remove": "removed",
   "member.leave": "left the workspace",
+  "sketch.create": "created the sketch",
+  "sketch.save": "saved a version of",
+  "sketch.fork": "forked",
+  "sketch.rename": "renamed the sketch",
+  "sketch.delete": "deleted the sketch",
+  "comment.create": "commented on",
+  "comment.resolve": "resolved a comment on",
+  "comment.reopen": "reopened a comment on",
+  "signoff.submit": "submitted for checking",
+  "signoff.check": "checked",
+  "signoff.return": "returned",
+  "signoff.approve": "approved",
+  "signoff.withdraw": "withdrew the approval of",
 } as const;
 
 export type AuditAction = keyof typeof AUDIT_ACTIONS;

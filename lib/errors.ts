@@ -13,6 +13,8 @@ export const ERROR_STATUS = {
   email_mismatch: 403,
   not_found: 404,
   conflict: 409,
+  version_conflict: 409,
+  review_state: 409,
   already_member: 409,
   last_owner: 409,
   gone: 410,
@@ -38,6 +40,8 @@ const DEFAULT_MESSAGE: Record<ErrorCode, string> = {
   email_mismatch: "This invitation was sent to a different e-mail address.",
   not_found: "Not found.",
   conflict: "This conflicts with the current state; reload and try again.",
+  version_conflict: "Someone saved a newer version since you opened this one.",
+  review_state: "This sign-off step does not apply to the version as it stands.",
   already_member: "That person is already a member of this workspace.",
   last_owner: "A workspace needs at least one owner: make someone else an owner first.",
   gone: "This is no longer available.",
@@ -54,20 +58,27 @@ const DEFAULT_MESSAGE: Record<ErrorCode, string> = {
 /** A field path (`members.0.email`) and what is wrong with it. */
 export type FieldError = { path: string; message: string };
 
-export type ErrorBody = { error: { code: ErrorCode; message: string; fields?: FieldError[] } };
+export type ErrorBody = { error: { code: ErrorCode; message: string; fields?: FieldError[] } & Record<string, unknown> };
 
 /** An error that is safe to show: its code picks the status, its message is for people. */
 export class AppError extends Error {
   readonly code: ErrorCode;
   readonly fields?: FieldError[];
   readonly headers?: Record<string, string>;
+  /** Extra safe facts for the caller, merged into the error object (e.g. the latest version on a 409). */
+  readonly extra?: Record<string, unknown>;
 
-  constructor(code: ErrorCode, message?: string, opts: { fields?: FieldError[]; headers?: Record<string, string> } = {}) {
+  constructor(
+    code: ErrorCode,
+    message?: string,
+    opts: { fields?: FieldError[]; headers?: Record<string, string>; extra?: Record<string, unknown> } = {},
+  ) {
     super(message ?? DEFAULT_MESSAGE[code]);
     this.name = "AppError";
     this.code = code;
     this.fields = opts.fields;
     this.headers = opts.headers;
+    this.extra = opts.extra;
   }
 
   get status(): number {
@@ -80,10 +91,12 @@ export function defaultMessage(code: ErrorCode): string {
 }
 
 export function fieldErrors(err: ZodError, prefix: string[] = []): FieldError[] {
-  return err.issues.map((issue) => ({
-    path: [...prefix, ...issue.path.map(String)].join(".") || "(root)",
-    message: issue.message,
-  }));
+  return err.issues.flatMap((issue) => {
+    const at = (extra: string[] = []) => [...prefix, ...issue.path.map(String), ...extra].join(".") || "(root)";
+    // A strict object names each unknown key as its own field.
+    if (issue.code === "unrecognized_keys") return issue.keys.map((key) => ({ path: at([key]), message: "Is not a field here (check the spelling)." }));
+    return [{ path: at(), message: issue.message }];
+  });
 }
 
 /** Any thrown value → the AppError that may be shown for it. */
@@ -94,7 +107,7 @@ export function toAppError(err: unknown): AppError {
 }
 
 export function errorBody(err: AppError): ErrorBody {
-  return { error: { code: err.code, message: err.message, ...(err.fields?.length ? { fields: err.fields } : {}) } };
+  return { error: { ...err.extra, code: err.code, message: err.message, ...(err.fields?.length ? { fields: err.fields } : {}) } };
 }
 
 /** The JSON response for any thrown value; unexpected errors are logged, never echoed. */

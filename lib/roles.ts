@@ -32,8 +32,12 @@ export const PERMISSIONS = {
   "version.save": ["owner", "editor"],
   "sketch.fork": ["owner", "editor"],
   "comment.create": ["owner", "editor", "checker"],
+  /** resolve or reopen anyone's thread (authors may always edit, delete and resolve their own) */
+  "comment.resolve": ["owner", "editor", "checker"],
+  "version.submit": ["owner", "editor"],
   "version.check": ["owner", "checker"],
   "version.approve": ["owner"],
+  "version.withdraw": ["owner"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -1,0 +1,232 @@
+import "server-only";
+import { and, asc, count, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+import { db } from "@/db";
+import { membership, sketch, sketchVersion, user, workspace, type SolveSummary } from "@/db/schema";
+import type { Role } from "@/lib/roles";
+import type { ListSketchesQuery, SketchStatus } from "@/lib/sketch-schemas";
+import type { DbOrTx } from "./tx";
+import { actorMay } from "./workspaces";
+
+const updater = alias(user, "updater");
+const creator = alias(user, "creator");
+const latest = alias(sketchVersion, "latest");
+const origin = alias(sketchVersion, "origin");
+const originSketch = alias(sketch, "origin_sketch");
+
+/** A sketch and the caller's role in its workspace (null role: not a member). Null when no such sketch. */
+export async function getSketchAccess(sketchId: string, userId: string, tx: DbOrTx = db) {
+  const [row] = await tx
+    .select({ id: sketch.id, workspaceId: sketch.workspaceId, title: sketch.title, latestVersion: sketch.latestVersion, role: membership.role })
+    .from(sketch)
+    .leftJoin(membership, and(eq(membership.workspaceId, sketch.workspaceId), eq(membership.userId, userId)))
+    .where(eq(sketch.id, sketchId));
+  return row ?? null;
+}
+
+/**
+ * Hold the member's row for the rest of the transaction (FOR SHARE) and return their role: an
+ * insert that follows cannot outlive a removal or role change that races it.
+ */
+export async function lockRole(tx: DbOrTx, workspaceId: string, userId: string): Promise<Role | null> {
+  const [row] = await tx
+    .select({ role: membership.role })
+    .from(membership)
+    .where(and(eq(membership.workspaceId, workspaceId), eq(membership.userId, userId)))
+    .for("share");
+  return row?.role ?? null;
+}
+
+/** `LIKE` pattern for a literal substring. */
+function containing(text: string): string {
+  return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+const STATUS_RANK = sql`array_position(array['holds','lifts','tips','unrestrained']::text[], ${latest.status})`;
+
+export type SketchListItem = {
+  id: string;
+  title: string;
+  tags: string[];
+  latestVersion: number;
+  status: SketchStatus | null;
+  largestReaction: number | null;
+  warnings: string[];
+  latestMessage: string;
+  updatedAt: Date;
+  updatedBy: { id: string; name: string } | null;
+  forked: boolean;
+};
+
+export type SketchListPage = { items: SketchListItem[]; total: number; page: number; pageSize: number };
+
+/**
+ * A workspace's sketches with their latest version's status, filtered by text (title,
+ * description, tags), tag and status, sorted, one page at a time. Empty unless the viewer may read.
+ */
+export async function listSketches(workspaceId: string, viewerId: string, q: ListSketchesQuery = {}): Promise<SketchListPage> {
+  const page = q.page ?? 1;
+  const pageSize = q.pageSize ?? 25;
+  const where = and(
+    eq(sketch.workspaceId, workspaceId),
+    actorMay(workspaceId, viewerId, "sketch.read"),
+    q.q
+      ? or(ilike(sketch.title, containing(q.q)), ilike(sketch.description, containing(q.q)), sql`exists (select 1 from unnest(${sketch.tags}) t where t ilike ${containing(q.q)})`)
+      : undefined,
+    q.tag ? sql`${sketch.tags} @> array[${q.tag}]::text[]` : undefined,
+    q.status ? eq(latest.status, q.status) : undefined,
+  );
+  const dir = q.dir ?? (q.sort === "title" ? "asc" : q.sort === "status" ? "desc" : "desc");
+  const by = (c: SQL | typeof sketch.title) => (dir === "asc" ? sql`${c} asc nulls last` : sql`${c} desc nulls last`);
+  const order: SQL[] =
+    q.sort === "title"
+      ? [by(sql`lower(${sketch.title})`)]
+      : q.sort === "status"
+        ? [by(STATUS_RANK), desc(sketch.updatedAt)]
+        : q.sort === "created"
+          ? [by(sql`${sketch.createdAt}`)]
+          : [by(sql`${sketch.updatedAt}`)];
+
+  const base = db
+    .select({
+      id: sketch.id,
+      title: sketch.title,
+      tags: sketch.tags,
+      latestVersion: sketch.latestVersion,
+      status: latest.status,
+      largestReaction: latest.largestReaction,
+      summary: latest.summary,
+      latestMessage: latest.message,
+      updatedAt: sketch.updatedAt,
+      updaterId: updater.id,
+      updaterName: updater.name,
+      forkedFrom: sketch.forkedFromVersionId,
+    })
+    .from(sketch)
+    .leftJoin(latest, and(eq(latest.sketchId, sketch.id), eq(latest.number, sketch.latestVersion)))
+    .leftJoin(updater, eq(updater.id, sketch.updatedBy))
+    .where(where);
+  const [rows, [{ n }]] = await Promise.all([
+    base.orderBy(...order, asc(sketch.id)).limit(pageSize).offset((page - 1) * pageSize),
+    db
+      .select({ n: count() })
+      .from(sketch)
+      .leftJoin(latest, and(eq(latest.sketchId, sketch.id), eq(latest.number, sketch.latestVersion)))
+      .where(where),
+  ]);
+  return {
+    page,
+    pageSize,
+    total: Number(n),
+    items: rows.map((r) => ({
+      id: r.id,
+      title: r.title,
+      tags: r.tags,
+      latestVersion: r.latestVersion,
+      status: (r.status ?? null) as SketchStatus | null,
+      largestReaction: r.largestReaction,
+      warnings: (r.summary as SolveSummary | null)?.warnings ?? [],
+      latestMessage: r.latestMessage ?? "",
+      updatedAt: r.updatedAt,
+      updatedBy: r.updaterId ? { id: r.updaterId, name: r.updaterName ?? "" } : null,
+      forked: r.forkedFrom !== null,
+    })),
+  };
+}
+
+/** Every tag used in a workspace, for the filter (empty unless the viewer may read). */
+export async function listWorkspaceTags(workspaceId: string, viewerId: string): Promise<string[]> {
+  const rows = await db
+    .selectDistinct({ tag: sql<string>`unnest(${sketch.tags})` })
+    .from(sketch)
+    .where(and(eq(sketch.workspaceId, workspaceId), actorMay(workspaceId, viewerId, "sketch.read")));
+  return rows.map((r) => r.tag).sort();
+}
+
+export type ForkOrigin =
+  | { visible: true; sketchId: string; title: string; workspaceId: string; versionNumber: number }
+  | { visible: false; title: string | null; versionNumber: number };
+
+/** One sketch as a member sees it, with where it was forked from (named only when the viewer may read the origin). */
+export async function getSketchForMember(sketchId: string, viewerId: string) {
+  const [row] = await db
+    .select({
+      id: sketch.id,
+      workspaceId: sketch.workspaceId,
+      workspaceName: workspace.name,
+      title: sketch.title,
+      description: sketch.description,
+      tags: sketch.tags,
+      latestVersion: sketch.latestVersion,
+      createdAt: sketch.createdAt,
+      createdBy: creator.name,
+      updatedAt: sketch.updatedAt,
+      updatedBy: updater.name,
+      role: membership.role,
+      originNumber: origin.number,
+      forkedFromTitle: sketch.forkedFromTitle,
+      originSketchId: originSketch.id,
+      originTitle: originSketch.title,
+      originWorkspaceId: originSketch.workspaceId,
+      originVisible: sql<boolean>`${actorMay(originSketch.workspaceId, viewerId, "sketch.read")}`,
+    })
+    .from(sketch)
+    .innerJoin(workspace, eq(workspace.id, sketch.workspaceId))
+    .innerJoin(membership, and(eq(membership.workspaceId, sketch.workspaceId), eq(membership.userId, viewerId)))
+    .leftJoin(creator, eq(creator.id, sketch.createdBy))
+    .leftJoin(updater, eq(updater.id, sketch.updatedBy))
+    .leftJoin(origin, eq(origin.id, sketch.forkedFromVersionId))
+    .leftJoin(originSketch, eq(originSketch.id, origin.sketchId))
+    .where(and(eq(sketch.id, sketchId), actorMay(sketch.workspaceId, viewerId, "sketch.read")));
+  if (!row) return null;
+  const forkedFrom: ForkOrigin | null =
+    row.originNumber === null
+      ? null
+      : row.originVisible && row.originSketchId && row.originTitle && row.originWorkspaceId
+        ? { visible: true, sketchId: row.originSketchId, title: row.originTitle, workspaceId: row.originWorkspaceId, versionNumber: row.originNumber }
+        : { visible: false, title: row.forkedFromTitle, versionNumber: row.originNumber };
+  return {
+    id: row.id,
+    workspaceId: row.workspaceId,
+    workspaceName: row.workspaceName,
+    title: row.title,
+    description: row.description,
+    tags: row.tags,
+    latestVersion: row.latestVersion,
+    createdAt: row.createdAt,
+    createdBy: row.createdBy,
+    updatedAt: row.updatedAt,
+    updatedBy: row.updatedBy,
+    role: row.role,
+    forkedFrom,
+  };
+}
+export type SketchDetail = NonNullable<Awaited<ReturnType<typeof getSketchForMember>>>;
+
+/** Rename, describe or re-tag (editors and owners; the role is checked in the UPDATE). */
+export async function updateSketch(
+  input: { sketchId: string; actorId: string; title?: string; description?: string; tags?: string[] },
+  tx: DbOrTx = db,
+) {
+  const [row] = await tx
+    .update(sketch)
+    .set({
+      ...(input.title !== undefined ? { title: input.title } : {}),
+      ...(input.description !== undefined ? { description: input.description } : {}),
+      ...(input.tags !== undefined ? { tags: input.tags } : {}),
+      updatedAt: new Date(),
+      updatedBy: input.actorId,
+    })
+    .where(and(eq(sketch.id, input.sketchId), actorMay(sketch.workspaceId, input.actorId, "sketch.edit")))
+    .returning({ id: sketch.id, title: sketch.title, description: sketch.description, tags: sketch.tags, workspaceId: sketch.workspaceId });
+  return row ?? null;
+}
+
+/** Delete a sketch and its versions (owners; checked in the DELETE). Forks of it keep their copy. */
+export async function deleteSketch(input: { sketchId: string; actorId: string }, tx: DbOrTx = db) {
+  const [row] = await tx
+    .delete(sketch)
+    .where(and(eq(sketch.id, input.sketchId), actorMay(sketch.workspaceId, input.actorId, "sketch.delete")))
+    .returning({ id: sketch.id, title: sketch.title, workspaceId: sketch.workspaceId, latestVersion: sketch.latestVersion });
+  return row ?? null;
+}

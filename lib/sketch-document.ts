@@ -1,0 +1,70 @@
+// A sketch document as the API receives it: validated and migrated by the solver's parseSketch,
+// and the summary of its solve that listings show. Browser-safe (the solver is pure).
+import { z } from "zod";
+import { parseSketch, solve, type ParseResult } from "@/solver";
+import { CURRENT_VERSION, FORMAT, type SketchFile } from "@/solver/schema";
+import type { SolveSummary } from "@/db/tables/sketches";
+import { sketchDescriptionSchema, sketchTitleSchema, tagsSchema, versionMessageSchema, versionNumberSchema, STATUS_ORDER } from "./sketch-schemas";
+
+export type ParsedSketch = Extract<ParseResult, { ok: true }>;
+
+/** A sketch is at most 1 MB of JSON. */
+export const MAX_SKETCH_BYTES = 1024 * 1024;
+
+
+/**
+ * The zod schema of a sketch document field: parseSketch's errors become field issues whose
+ * path is the contract's (`document.ports[1].area`), so a bad sketch is a 400 like any bad field.
+ */
+export const sketchDocumentSchema = z.unknown().transform((value, ctx): ParsedSketch => {
+  if (value === undefined || value === null) {
+    ctx.addIssue({ code: "custom", message: "Send the sketch file (format counterpoise.sketch)." });
+    return z.NEVER;
+  }
+  const parsed = parseSketch(value);
+  if (!parsed.ok) {
+    for (const e of parsed.errors.slice(0, 50)) ctx.addIssue({ code: "custom", message: e.message, path: e.path ? [e.path] : [] });
+    return z.NEVER;
+  }
+  return parsed;
+});
+
+/** An empty sketch file with a title (a sketch created without a document starts from this). */
+export function emptySketchFile(title: string): SketchFile {
+  return { format: FORMAT, version: CURRENT_VERSION, title, bodies: [], supports: [], loads: [], ports: [], massSources: [] } as SketchFile;
+}
+
+/** Solve once and keep what listings need. Never throws: a solver failure is recorded, not raised. */
+export function summarizeSolve(parsed: ParsedSketch): SolveSummary {
+  try {
+    const result = solve(parsed.sketch);
+    const bodies: SolveSummary["bodies"] = {};
+    let worst = -1;
+    let largest: number | null = null;
+    for (const [id, b] of Object.entries(result.bodies)) {
+      bodies[id] = { status: b.status, largestReaction: b.largestReaction };
+      worst = Math.max(worst, STATUS_ORDER.indexOf(b.status));
+      if (Number.isFinite(b.largestReaction)) largest = Math.max(largest ?? 0, b.largestReaction);
+    }
+    const warnings = [...new Set([...parsed.warnings, ...result.warnings].map((w) => w.code))];
+    return { status: worst >= 0 ? STATUS_ORDER[worst] : null, largestReaction: largest, bodies, warnings };
+  } catch (err) {
+    return { status: null, largestReaction: null, bodies: {}, warnings: [], error: err instanceof Error ? err.message.slice(0, 200) : "the solve failed" };
+  }
+}
+
+/** A new sketch in a workspace; without a document it starts empty. Its first version is v1. */
+export const createSketchInput = z.strictObject({
+  title: sketchTitleSchema.optional(),
+  description: sketchDescriptionSchema.optional(),
+  tags: tagsSchema.optional(),
+  message: versionMessageSchema.optional(),
+  document: sketchDocumentSchema.optional(),
+});
+
+/** A new version, naming the version the edits started from. */
+export const saveVersionInput = z.strictObject({
+  baseVersion: versionNumberSchema,
+  message: versionMessageSchema.optional(),
+  document: sketchDocumentSchema,
+});

@@ -1,0 +1,202 @@
+import "server-only";
+import { db } from "@/db";
+import { deleteSketch, getSketchAccess, lockRole, updateSketch } from "@/db/queries/sketches";
+import { getVersion, insertSketchWithFirstVersion, saveNextVersion, type NewVersion, type VersionListItem } from "@/db/queries/versions";
+import { recordAudit } from "./audit";
+import { AppError } from "./errors";
+import { can, type Permission, type Role } from "./roles";
+import { emptySketchFile, summarizeSolve, type ParsedSketch } from "./sketch-document";
+import { parseSketch } from "@/solver";
+
+type Actor = { id: string; email: string };
+
+const NO_SKETCH = "No such sketch, or you are not a member of its workspace.";
+
+/**
+ * The caller's role on a sketch, for routes that reach the workspace through a sketch id:
+ * 404 when the sketch does not exist or the caller is not a member (nothing leaks), 403 when
+ * the role lacks the permission.
+ */
+export async function requireSketchRole(sketchId: string, userId: string, permission: Permission) {
+  const access = await getSketchAccess(sketchId, userId);
+  if (!access || !access.role) throw new AppError("not_found", NO_SKETCH);
+  if (!can(access.role, permission)) throw new AppError("forbidden");
+  return access as typeof access & { role: Role };
+}
+
+/** What is stored for a parsed document: the file as validated and migrated, its format version and its solve summary. */
+export function versionContent(parsed: ParsedSketch, message: string | undefined): NewVersion {
+  return { document: parsed.file, formatVersion: parsed.file.version, summary: summarizeSolve(parsed), message: message ?? "" };
+}
+
+function parsedEmpty(title: string): ParsedSketch {
+  const parsed = parseSketch(emptySketchFile(title));
+  if (!parsed.ok) throw new Error("the empty sketch does not parse");
+  return parsed;
+}
+
+/** A new sketch with version 1 in a workspace where the actor may create sketches. */
+export async function createSketch(
+  workspaceId: string,
+  actor: Actor,
+  input: { title?: string; description?: string; tags?: string[]; message?: string; document?: ParsedSketch },
+) {
+  const title = input.title ?? (input.document?.file.title?.trim() || "Untitled sketch");
+  const parsed = input.document ?? parsedEmpty(title);
+  return db.transaction(async (tx) => {
+    const role = await lockRole(tx, workspaceId, actor.id);
+    if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.");
+    if (!can(role, "sketch.create")) throw new AppError("forbidden");
+    const made = await insertSketchWithFirstVersion(tx, {
+      ...versionContent(parsed, input.message ?? "First version"),
+      workspaceId,
+      actorId: actor.id,
+      title: title.slice(0, 120),
+      description: input.description,
+      tags: input.tags,
+    });
+    await recordAudit(
+      { action: "sketch.create", actorId: actor.id, actorEmail: actor.email, workspaceId, targetType: "sketch", targetId: made.sketch.id, detail: { title: made.sketch.title, sketchId: made.sketch.id } },
+      tx,
+    );
+    return made;
+  });
+}
+
+/** 409 body facts about the version that won. */
+function conflictError(latest: VersionListItem, base: number): AppError {
+  const who = latest.authorName ? `${latest.authorName} saved` : "Someone saved";
+  return new AppError("version_conflict", `${who} version ${latest.number} since you opened version ${base}. Nothing was overwritten.`, {
+    extra: {
+      latest: {
+        number: latest.number,
+        message: latest.message,
+        authorName: latest.authorName,
+        createdAt: latest.createdAt,
+        status: latest.status,
+      },
+    },
+  });
+}
+
+function isUniqueViolation(err: unknown): boolean {
+  const code = (err as { code?: string; cause?: { code?: string } })?.code ?? (err as { cause?: { code?: string } })?.cause?.code;
+  return code === "23505";
+}
+
+/** Save the next version on top of `baseVersion`; 409 with the latest version when someone saved since. */
+export async function saveVersion(sketchId: string, actor: Actor, input: { baseVersion: number; message?: string; document: ParsedSketch }) {
+  await requireSketchRole(sketchId, actor.id, "version.save");
+  const content = versionContent(input.document, input.message);
+  try {
+    return await db.transaction(async (tx) => {
+      const out = await saveNextVersion(tx, { ...content, sketchId, actorId: actor.id, baseVersion: input.baseVersion });
+      if (!out.ok && out.reason === "forbidden") throw new AppError("forbidden");
+      if (!out.ok) throw conflictError(out.latest, input.baseVersion);
+      await recordAudit(
+        {
+          action: "sketch.save",
+          actorId: actor.id,
+          actorEmail: actor.email,
+          workspaceId: out.workspaceId,
+          targetType: "sketch",
+          targetId: sketchId,
+          detail: { sketchId, title: out.title, number: out.version.number, message: content.message },
+        },
+        tx,
+      );
+      return { ...out.version, message: content.message, status: content.summary.status, largestReaction: content.summary.largestReaction };
+    });
+  } catch (err) {
+    if (!isUniqueViolation(err)) throw err;
+    // A lost race that slipped past the lock (it cannot with READ COMMITTED, but the unique index is the last word).
+    const access = await getSketchAccess(sketchId, actor.id);
+    const latest = access ? await getVersion(sketchId, access.latestVersion, actor.id) : null;
+    if (!latest) throw new AppError("conflict");
+    throw conflictError(latest, input.baseVersion);
+  }
+}
+
+/** Rename, describe or re-tag a sketch. */
+export async function editSketch(sketchId: string, actor: Actor, input: { title?: string; description?: string; tags?: string[] }) {
+  const before = await requireSketchRole(sketchId, actor.id, "sketch.edit");
+  return db.transaction(async (tx) => {
+    const row = await updateSketch({ sketchId, actorId: actor.id, ...input }, tx);
+    if (!row) throw new AppError("forbidden");
+    await recordAudit(
+      {
+        action: "sketch.rename",
+        actorId: actor.id,
+        actorEmail: actor.email,
+        workspaceId: row.workspaceId,
+        targetType: "sketch",
+        targetId: sketchId,
+        detail: { sketchId, title: row.title, from: before.title, ...(input.tags ? { tags: row.tags } : {}), ...(input.description !== undefined ? { described: true } : {}) },
+      },
+      tx,
+    );
+    return row;
+  });
+}
+
+/** Delete a sketch with all its versions (owners). */
+export async function removeSketch(sketchId: string, actor: Actor) {
+  await requireSketchRole(sketchId, actor.id, "sketch.delete");
+  return db.transaction(async (tx) => {
+    const row = await deleteSketch({ sketchId, actorId: actor.id }, tx);
+    if (!row) throw new AppError("forbidden");
+    await recordAudit(
+      { action: "sketch.delete", actorId: actor.id, actorEmail: actor.email, workspaceId: row.workspaceId, targetType: "sketch", targetId: sketchId, detail: { sketchId, title: row.title, versions: row.latestVersion } },
+      tx,
+    );
+    return { id: row.id, deleted: true };
+  });
+}
+
+/**
+ * Copy a version the actor may read into a workspace where they may fork: a new sketch whose
+ * version 1 is that document, remembering where it came from.
+ */
+export async function forkSketch(sourceSketchId: string, actor: Actor, input: { workspaceId: string; version?: number; title?: string }) {
+  const source = await requireSketchRole(sourceSketchId, actor.id, "sketch.read");
+  const number = input.version ?? source.latestVersion;
+  const version = await getVersion(sourceSketchId, number, actor.id);
+  if (!version) throw new AppError("not_found", `This sketch has no version ${number}.`, { fields: [{ path: "version", message: `There is no version ${number}.` }] });
+  return db.transaction(async (tx) => {
+    const role = await lockRole(tx, input.workspaceId, actor.id);
+    if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.", { fields: [{ path: "workspaceId", message: "You are not a member of that workspace." }] });
+    if (!can(role, "sketch.fork")) throw new AppError("forbidden", "Your role in that workspace does not allow forking into it.");
+    const title = input.title ?? `${source.title} (fork)`.slice(0, 120);
+    const made = await insertSketchWithFirstVersion(tx, {
+      document: version.document,
+      formatVersion: version.formatVersion,
+      summary: version.summary,
+      message: `Forked from “${source.title}” v${number}`,
+      workspaceId: input.workspaceId,
+      actorId: actor.id,
+      title,
+      forkedFromVersionId: version.id,
+      forkedFromTitle: source.title,
+    });
+    await recordAudit(
+      {
+        action: "sketch.fork",
+        actorId: actor.id,
+        actorEmail: actor.email,
+        workspaceId: input.workspaceId,
+        targetType: "sketch",
+        targetId: made.sketch.id,
+        detail: { sketchId: made.sketch.id, title, fromSketchId: sourceSketchId, fromVersion: number },
+      },
+      tx,
+    );
+    if (input.workspaceId !== source.workspaceId) {
+      // The origin's workspace learns its sketch was forked (not where to).
+      await recordAudit(
+        { action: "sketch.fork", actorId: actor.id, actorEmail: actor.email, workspaceId: source.workspaceId, targetType: "sketch", targetId: sourceSketchId, detail: { sketchId: sourceSketchId, title: source.title, fromVersion: number, elsewhere: true } },
+        tx,
+      );
+    }
+    return made;
+  });
+}
