@@ -1,0 +1,9 @@
+"use client";
+import { useState } from "react";
+import { Editor } from "@/components/editor/Editor";
+import { scratchPersistence } from "@/canvas/persistence";
+
+export function NewSketchClient({ example }: { example?: string }) {
+  const [persistence] = useState(() => scratchPersistence());
+  return <Editor persistence={persistence} example={example} />;
+}

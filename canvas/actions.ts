@@ -1,0 +1,270 @@
+// Registered actions: one entry per thing a user can do (id, label, shortcut, run). The tray,
+// the menus, the keyboard and the element outline read this list, so a new tool is one entry.
+import type { Vec2 } from "@/solver/types";
+import type { EditorStores } from "./context";
+import type { PointerController } from "./konva/pointer";
+import type { Command } from "./commands/define";
+import { deleteElements, duplicateElements } from "./commands/elements";
+import { moveElement } from "./commands/move";
+import { rotateElement } from "./commands/shape";
+import { DIRECTED, findElement, type ElementKind } from "./model/elements";
+import { fitScene } from "./geometry/fit";
+import { gridStep, zoomAt } from "./geometry/view";
+
+/** What the page around the editor provides to actions (dialogs, downloads, saving). */
+export interface EditorUi {
+  openImport(): void;
+  exportJson(): void;
+  exportSvg(): void;
+  exportPng(): void;
+  newSketch(): void;
+  save(): void;
+}
+
+export interface ActionContext {
+  stores: EditorStores;
+  controller: PointerController | null;
+  ui: EditorUi;
+}
+
+export type ActionGroup = "add" | "edit" | "view" | "file" | "results";
+
+export interface Action {
+  id: string;
+  label: string;
+  group: ActionGroup;
+  /** e.g. ["Mod+Z"]; Mod is Ctrl, or ⌘ on a Mac */
+  shortcuts?: string[];
+  /** longer words for a tooltip */
+  hint?: string;
+  /** for the tray: the element kind it places */
+  kind?: ElementKind;
+  friction?: boolean;
+  enabled?: (ctx: ActionContext) => boolean;
+  run: (ctx: ActionContext) => void;
+}
+
+const ed = (ctx: ActionContext) => ctx.stores.editor.getState();
+const hasSelection = (ctx: ActionContext) => ed(ctx).selection.length > 0;
+const hasBody = (ctx: ActionContext) => ed(ctx).sketch.bodies.length > 0;
+
+function placeAction(id: string, label: string, kind: Exclude<ElementKind, "body">, shortcut: string, hint: string, friction = false): Action {
+  return {
+    id,
+    label,
+    group: "add",
+    kind,
+    friction,
+    shortcuts: [shortcut],
+    hint,
+    enabled: hasBody,
+    run: (ctx) => {
+      const s = ed(ctx);
+      s.setTool({ kind: "place", element: kind, friction });
+      s.notify(`${label}: click on a body to place it (Shift+click to place several). Esc to stop.`);
+    },
+  };
+}
+
+function nudge(id: string, label: string, key: string, d: Vec2, far: boolean): Action {
+  return {
+    id,
+    label,
+    group: "edit",
+    shortcuts: [far ? `Shift+${key}` : key],
+    enabled: hasSelection,
+    run: (ctx) => {
+      const s = ed(ctx);
+      const step = gridStep(s.view.scale) * (far ? 10 : 1);
+      s.apply(moveElement({ ids: s.selection, delta: [d[0] * step, d[1] * step] }) as Command<unknown>);
+    },
+  };
+}
+
+function turn(id: string, label: string, key: string, by: number): Action {
+  return {
+    id,
+    label,
+    group: "edit",
+    shortcuts: [key],
+    enabled: (ctx) => {
+      const s = ed(ctx);
+      return s.selection.length === 1 && DIRECTED.has(findElement(s.sketch, s.selection[0])?.kind ?? "body");
+    },
+    run: (ctx) => {
+      const s = ed(ctx);
+      const id0 = s.selection[0];
+      const item = ctx.stores.scene.getState().byId.get(id0);
+      if (!item || !("angle" in item)) return;
+      const angle = Math.round(((item.angle as number) + by) / 5) * 5;
+      s.apply(rotateElement({ id: id0, angle, magnitude: item.kind === "force" ? item.magnitude : undefined }) as Command<unknown>);
+    },
+  };
+}
+
+export const ACTIONS: readonly Action[] = [
+  // ---- add (the tray)
+  {
+    id: "add.body",
+    label: "Body (rectangle)",
+    group: "add",
+    kind: "body",
+    shortcuts: ["B"],
+    hint: "Drag on the canvas to draw a rectangle; a click makes a 2 m × 1 m body.",
+    run: (ctx) => {
+      ed(ctx).setTool({ kind: "body", shape: "rectangle", points: [] });
+      ed(ctx).notify("Body: drag a rectangle on the canvas (a click makes 2 m × 1 m). Esc to stop.");
+    },
+  },
+  {
+    id: "add.polygon",
+    label: "Body (polygon)",
+    group: "add",
+    kind: "body",
+    shortcuts: ["Shift+B"],
+    hint: "Click each corner; click the first corner, double-click or press Enter to close.",
+    run: (ctx) => {
+      ed(ctx).setTool({ kind: "body", shape: "polygon", points: [] });
+      ed(ctx).notify("Polygon body: click each corner, then click the first corner or press Enter. Backspace removes the last corner.");
+    },
+  },
+  placeAction("add.pin", "Pin", "pin", "P", "Holds x and y; free to turn."),
+  placeAction("add.roller", "Roller", "roller", "R", "Holds along its direction, either way."),
+  placeAction("add.contact", "Contact", "contact", "C", "Pushes only: lifts off rather than pull."),
+  placeAction("add.contact-friction", "Contact with friction", "contact", "Shift+C", "Pushes only, and holds sideways up to μ times the normal force.", true),
+  placeAction("add.fixed", "Fixed support", "fixed", "X", "Holds x, y and turning."),
+  placeAction("add.tie", "Tie", "tie", "T", "Pulls only: goes slack rather than push."),
+  placeAction("add.force", "Point force", "force", "L", "A given force at a point."),
+  placeAction("add.couple", "Couple", "couple", "M", "A given moment, counter-clockwise positive."),
+  placeAction("add.distributed", "Distributed load", "distributed", "W", "A load per length along a line, w₁ to w₂."),
+  placeAction("add.inlet", "Inlet", "inlet", "I", "Fluid entering the control volume."),
+  placeAction("add.outlet", "Outlet", "outlet", "O", "Fluid leaving the control volume."),
+  placeAction("add.massSource", "Mass source", "massSource", "S", "Mass added inside with no momentum of its own."),
+
+  // ---- edit
+  { id: "edit.undo", label: "Undo", group: "edit", shortcuts: ["Mod+Z"], enabled: (c) => ed(c).past.length > 0 || !!ed(c).gesture, run: (c) => ed(c).undo() },
+  { id: "edit.redo", label: "Redo", group: "edit", shortcuts: ["Shift+Mod+Z", "Mod+Y"], enabled: (c) => ed(c).future.length > 0, run: (c) => ed(c).redo() },
+  {
+    id: "edit.delete",
+    label: "Delete",
+    group: "edit",
+    shortcuts: ["Delete", "Backspace"],
+    enabled: hasSelection,
+    run: (c) => ed(c).apply(deleteElements({ ids: ed(c).selection }) as Command<unknown>),
+  },
+  {
+    id: "edit.duplicate",
+    label: "Duplicate",
+    group: "edit",
+    shortcuts: ["Mod+D"],
+    enabled: hasSelection,
+    run: (c) => {
+      const s = ed(c);
+      const g = gridStep(s.view.scale);
+      s.apply(duplicateElements({ ids: s.selection, offset: [2 * g, -2 * g] }) as Command<unknown>);
+    },
+  },
+  {
+    id: "edit.selectAll",
+    label: "Select all",
+    group: "edit",
+    shortcuts: ["Mod+A"],
+    run: (c) => {
+      const scene = c.stores.scene.getState();
+      ed(c).select([...scene.byId.keys()]);
+    },
+  },
+  nudge("edit.nudgeLeft", "Nudge left", "ArrowLeft", [-1, 0], false),
+  nudge("edit.nudgeRight", "Nudge right", "ArrowRight", [1, 0], false),
+  nudge("edit.nudgeUp", "Nudge up", "ArrowUp", [0, 1], false),
+  nudge("edit.nudgeDown", "Nudge down", "ArrowDown", [0, -1], false),
+  nudge("edit.nudgeLeftFar", "Nudge left ×10", "ArrowLeft", [-1, 0], true),
+  nudge("edit.nudgeRightFar", "Nudge right ×10", "ArrowRight", [1, 0], true),
+  nudge("edit.nudgeUpFar", "Nudge up ×10", "ArrowUp", [0, 1], true),
+  nudge("edit.nudgeDownFar", "Nudge down ×10", "ArrowDown", [0, -1], true),
+  turn("edit.turnLeft", "Turn 15° counter-clockwise", "]", 15),
+  turn("edit.turnRight", "Turn 15° clockwise", "[", -15),
+
+  // ---- view
+  {
+    id: "view.fit",
+    label: "Fit to view",
+    group: "view",
+    shortcuts: ["F"],
+    run: (c) => {
+      const s = ed(c);
+      s.setView(fitScene(c.stores.scene.getState(), s.viewport.width, s.viewport.height));
+    },
+  },
+  { id: "view.zoomIn", label: "Zoom in", group: "view", shortcuts: ["+", "="], run: (c) => zoomBy(c, 1.25) },
+  { id: "view.zoomOut", label: "Zoom out", group: "view", shortcuts: ["-"], run: (c) => zoomBy(c, 0.8) },
+  { id: "view.units", label: "Switch SI / US units", group: "view", shortcuts: ["U"], run: (c) => ed(c).setUnits(ed(c).units === "SI" ? "US" : "SI") },
+  { id: "view.snap", label: "Snap to grid and edges", group: "view", run: (c) => ed(c).setSnap(!ed(c).snap) },
+
+  // ---- file
+  { id: "file.new", label: "New sketch", group: "file", run: (c) => c.ui.newSketch() },
+  { id: "file.import", label: "Import JSON…", group: "file", shortcuts: ["Mod+O"], run: (c) => c.ui.openImport() },
+  { id: "file.exportJson", label: "Export JSON", group: "file", shortcuts: ["Mod+E"], run: (c) => c.ui.exportJson() },
+  { id: "file.exportSvg", label: "Export drawing as SVG", group: "file", run: (c) => c.ui.exportSvg() },
+  { id: "file.exportPng", label: "Export drawing as PNG", group: "file", run: (c) => c.ui.exportPng() },
+  { id: "file.save", label: "Save", group: "file", shortcuts: ["Mod+S"], run: (c) => c.ui.save() },
+
+  // ---- results
+  {
+    id: "results.pickPoint",
+    label: "Pick the point for moments",
+    group: "results",
+    shortcuts: ["K"],
+    hint: "Click on the canvas to take the hand check's moments about that point.",
+    run: (c) => {
+      ed(c).setTool({ kind: "pick-point" });
+      ed(c).notify("Click on the canvas: the hand check takes moments about that point.");
+    },
+  },
+];
+
+function zoomBy(c: ActionContext, f: number) {
+  const s = ed(c);
+  s.setView(zoomAt(s.view, f, [s.viewport.width / 2, s.viewport.height / 2]));
+}
+
+export function actionById(id: string): Action {
+  const a = ACTIONS.find((x) => x.id === id);
+  if (!a) throw new Error(`no action ${id}`);
+  return a;
+}
+
+// ---------------------------------------------------------------- shortcuts
+
+interface KeyLike {
+  key: string;
+  ctrlKey: boolean;
+  metaKey: boolean;
+  shiftKey: boolean;
+  altKey: boolean;
+}
+
+export function matchesShortcut(e: KeyLike, spec: string): boolean {
+  const parts = spec.split("+");
+  // "+" itself is a key: "Shift++" is not used; a lone "+" splits into ["", ""]
+  const key = spec === "+" ? "+" : parts[parts.length - 1];
+  const mods = new Set(spec === "+" ? [] : parts.slice(0, -1));
+  const mod = e.ctrlKey || e.metaKey;
+  if (mods.has("Mod") !== mod) return false;
+  if (mods.has("Alt") !== e.altKey) return false;
+  const symbol = key.length === 1 && !/[a-z0-9]/i.test(key);
+  if (!symbol && mods.has("Shift") !== e.shiftKey) return false;
+  return e.key.toLowerCase() === key.toLowerCase();
+}
+
+/** The action a key press runs, if any (the most specific match wins). */
+export function actionForKey(e: KeyLike, actions: readonly Action[] = ACTIONS): Action | undefined {
+  return actions.find((a) => a.shortcuts?.some((s) => matchesShortcut(e, s)));
+}
+
+export function shortcutLabel(spec: string, mac = typeof navigator !== "undefined" && /Mac|iPhone|iPad/.test(navigator.platform)): string {
+  return spec
+    .split(/\+(?!$)/)
+    .map((p) => (p === "Mod" ? (mac ? "⌘" : "Ctrl") : p === "Shift" ? (mac ? "⇧" : "Shift") : p.replace("Arrow", "")))
+    .join(mac ? "" : "+");
+}

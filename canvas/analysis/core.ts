@@ -1,0 +1,38 @@
+// One analysis of a sketch: parse (expressions evaluated once) and solve. Pure and
+// serialisable, so it runs the same on the main thread, in the worker and on the server.
+import { parseSketch, solve, type FieldError, type SolveResult, type SolveWarning, type Sketch } from "@/solver/index";
+import type { FieldValue } from "@/solver/resolve";
+import type { SketchFile } from "@/solver/schema";
+
+export interface AnalysisCore {
+  ok: boolean;
+  errors: FieldError[];
+  warnings: SolveWarning[];
+  fields: Record<string, FieldValue>;
+  parameterValues: Record<string, { value: number; unit: string; si: number } | { error: string }>;
+  /** the numeric sketch (SI numbers) when the input is valid */
+  numeric: Sketch | null;
+  result: SolveResult | null;
+  /** milliseconds spent parsing and solving */
+  timeMs: number;
+}
+
+export function analyseCore(file: SketchFile): AnalysisCore {
+  const t0 = typeof performance !== "undefined" ? performance.now() : Date.now();
+  let core: Omit<AnalysisCore, "timeMs">;
+  try {
+    const parsed = parseSketch(file);
+    if (!parsed.ok) {
+      core = { ok: false, errors: parsed.errors, warnings: parsed.warnings, fields: parsed.fields, parameterValues: parsed.parameterValues, numeric: null, result: null };
+    } else {
+      const result = solve(parsed.sketch);
+      result.warnings.unshift(...parsed.warnings);
+      core = { ok: true, errors: [], warnings: result.warnings, fields: parsed.fields, parameterValues: parsed.parameterValues, numeric: parsed.sketch, result };
+    }
+  } catch (err) {
+    // the solver should never throw; if it does, the editor keeps working and says so
+    core = { ok: false, errors: [{ path: "", message: `the solve failed: ${(err as Error).message}` }], warnings: [], fields: {}, parameterValues: {}, numeric: null, result: null };
+  }
+  const t1 = typeof performance !== "undefined" ? performance.now() : Date.now();
+  return { ...core, timeMs: t1 - t0 };
+}

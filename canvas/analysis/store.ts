@@ -1,0 +1,115 @@
+// The live analysis beside the editor store: every change of the sketch is parsed and solved
+// (in a worker when the browser has one; measured at ~2–4 ms for 200 elements, which would
+// otherwise sit between a pointer move and its frame). An input error keeps the last good
+// result on screen, marked stale.
+import { createStore, type StoreApi } from "zustand/vanilla";
+import type { SketchFile } from "@/solver/schema";
+import type { SolveResult, Sketch } from "@/solver/types";
+import { fieldValuesById, NO_VALUES, type FieldValues } from "../scene";
+import type { EditorStore } from "../store";
+import { analyseCore, type AnalysisCore } from "./core";
+
+export interface Analysis {
+  /** the sketch this analysis is of */
+  sketch: SketchFile | null;
+  core: AnalysisCore | null;
+  /** expression values and errors by element id */
+  fieldValues: FieldValues;
+  /** the result on screen: this sketch's, or the last good one when this sketch has errors */
+  shown: SolveResult | null;
+  /** the numeric sketch `shown` belongs to */
+  shownSketch: Sketch | null;
+  /** true when `shown` is an earlier sketch's result */
+  stale: boolean;
+  /** true while a newer sketch is being solved */
+  pending: boolean;
+}
+
+export type AnalysisStore = StoreApi<Analysis>;
+
+export const EMPTY_ANALYSIS: Analysis = {
+  sketch: null,
+  core: null,
+  fieldValues: NO_VALUES,
+  shown: null,
+  shownSketch: null,
+  stale: false,
+  pending: false,
+};
+
+/** Fold a new core into the previous analysis. */
+export function nextAnalysis(prev: Analysis, sketch: SketchFile, core: AnalysisCore): Analysis {
+  const fieldValues = fieldValuesById(sketch, core.fields, core.errors);
+  if (core.ok && core.result) {
+    return { sketch, core, fieldValues, shown: core.result, shownSketch: core.numeric, stale: false, pending: false };
+  }
+  return { sketch, core, fieldValues, shown: prev.shown, shownSketch: prev.shownSketch, stale: prev.shown !== null, pending: false };
+}
+
+export type Runner = (sketch: SketchFile, done: (core: AnalysisCore) => void) => void;
+
+/** Parse and solve on the calling thread. */
+export const syncRunner: Runner = (sketch, done) => done(analyseCore(sketch));
+
+/**
+ * A runner backed by a worker: one sketch in flight at a time; while it is solved, only the
+ * newest change waits (a drag's intermediate frames are skipped, never queued).
+ */
+export function workerRunner(worker: Worker): Runner {
+  let seq = 0;
+  let inFlight: { seq: number; done: (c: AnalysisCore) => void } | null = null;
+  let waiting: { sketch: SketchFile; done: (c: AnalysisCore) => void } | null = null;
+  const send = (sketch: SketchFile, done: (c: AnalysisCore) => void) => {
+    inFlight = { seq: ++seq, done };
+    worker.postMessage({ seq: inFlight.seq, sketch });
+  };
+  worker.onmessage = (e: MessageEvent<{ seq: number; core: AnalysisCore }>) => {
+    if (!inFlight || e.data.seq !== inFlight.seq) return;
+    const finished = inFlight;
+    inFlight = null;
+    // deliver every answer (it is newer than what is on screen), then solve the newest change
+    finished.done(e.data.core);
+    if (waiting) {
+      const w = waiting;
+      waiting = null;
+      send(w.sketch, w.done);
+    }
+  };
+  return (sketch, done) => {
+    if (inFlight) waiting = { sketch, done };
+    else send(sketch, done);
+  };
+}
+
+export function createAnalysisStore(): AnalysisStore {
+  return createStore<Analysis>(() => EMPTY_ANALYSIS);
+}
+
+/** Keep an analysis store in step with the editor's sketch; returns the function that stops it. */
+export function linkAnalysis(editor: EditorStore, store: AnalysisStore, runner: Runner = syncRunner): () => void {
+  let latest: SketchFile | null = null;
+  let live = true;
+  const start = (sketch: SketchFile) => {
+    latest = sketch;
+    if (!store.getState().pending) store.setState({ pending: true });
+    runner(sketch, (core) => {
+      if (!live) return;
+      const next = nextAnalysis(store.getState(), sketch, core);
+      store.setState({ ...next, pending: latest !== sketch }, true);
+    });
+  };
+  if (store.getState().sketch !== editor.getState().sketch) start(editor.getState().sketch);
+  const unsubscribe = editor.subscribe((s, prev) => {
+    if (s.sketch !== prev.sketch) start(s.sketch);
+  });
+  return () => {
+    live = false;
+    unsubscribe();
+  };
+}
+
+/** An analysis store already linked (tests and scripts). */
+export function connectAnalysis(editor: EditorStore, runner: Runner = syncRunner): { store: AnalysisStore; stop: () => void } {
+  const store = createAnalysisStore();
+  return { store, stop: linkAnalysis(editor, store, runner) };
+}

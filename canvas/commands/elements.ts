@@ -1,0 +1,117 @@
+// Adding, deleting, duplicating and re-attaching elements.
+import type { SketchFile } from "@/solver/schema";
+import type { Vec2 } from "@/solver/types";
+import { childrenOf, elementIndex, findElement, GROUP_OF, nextId, type AnyElement, type Attached, type ElementKind, type Group } from "../model/elements";
+import { defineCommand, edit, plural } from "./define";
+import { shiftElement } from "./move";
+
+/** Ids in `after` that were not in `before`, in file order. */
+export function newIds(before: SketchFile, after: SketchFile): string[] {
+  const old = elementIndex(before);
+  return [...elementIndex(after).keys()].filter((id) => !old.has(id));
+}
+
+export const addElement = defineCommand<{ kind: ElementKind; element: AnyElement }>({
+  name: "addElement",
+  label: ({ kind }) => `Add ${kind === "massSource" ? "mass source" : kind}`,
+  undoable: true,
+  run: (sketch, { kind, element }) => {
+    const group = GROUP_OF[kind];
+    const id = element.id && !findElement(sketch, element.id) ? element.id : nextId(sketch, group);
+    return edit(sketch, (d) => {
+      (d[group] as AnyElement[]).push({ ...element, id });
+    });
+  },
+  select: (before, after) => newIds(before, after),
+});
+
+/** Every id to delete: the given ones and the elements of deleted bodies. */
+function withChildren(sketch: SketchFile, ids: readonly string[]): Set<string> {
+  const out = new Set(ids.filter((id) => findElement(sketch, id)));
+  for (const id of ids) {
+    const l = findElement(sketch, id);
+    if (l?.group === "bodies") for (const c of childrenOf(sketch, id)) out.add(c.el.id);
+  }
+  return out;
+}
+
+export const deleteElements = defineCommand<{ ids: string[] }>({
+  name: "deleteElements",
+  label: ({ ids }, sketch) => `Delete ${plural(withChildren(sketch, ids).size, "element")}`,
+  undoable: true,
+  run: (sketch, { ids }) => {
+    const gone = withChildren(sketch, ids);
+    if (!gone.size) return sketch;
+    return edit(sketch, (d) => {
+      for (const g of Object.keys(GROUP_NAMES) as Group[]) {
+        const list = d[g] as AnyElement[];
+        if (list.some((e) => gone.has(e.id))) d[g] = list.filter((e) => !gone.has(e.id)) as never;
+      }
+    });
+  },
+  select: (_b, after, _a, selection) => selection.filter((id) => findElement(after, id)),
+});
+
+const GROUP_NAMES: Record<Group, true> = { bodies: true, supports: true, loads: true, ports: true, massSources: true };
+
+/** The copies a duplicate makes: bodies bring their elements along. Deterministic, so `select` can replay it. */
+export function planDuplicate(sketch: SketchFile, ids: readonly string[], offset: Vec2) {
+  const chosen = ids.filter((id) => findElement(sketch, id));
+  const taken = new Set<string>();
+  const copies: Array<{ group: Group; el: AnyElement }> = [];
+  const copyOf = new Map<string, string>();
+  const fresh = (group: Group) => {
+    const id = nextId(sketch, group, taken);
+    taken.add(id);
+    return id;
+  };
+  const copy = (id: string, body?: string) => {
+    const l = findElement(sketch, id)!;
+    const nid = fresh(l.group);
+    copyOf.set(id, nid);
+    const el = structuredClone(l.el) as AnyElement;
+    el.id = nid;
+    if (l.group !== "bodies") (el as Attached).body = body ?? copyOf.get((el as Attached).body) ?? (el as Attached).body;
+    copies.push({ group: l.group, el: shiftElement(el, l.kind, offset) });
+    return nid;
+  };
+  for (const id of chosen) {
+    if (findElement(sketch, id)!.group !== "bodies" || copyOf.has(id)) continue;
+    const nid = copy(id);
+    for (const c of childrenOf(sketch, id)) if (!copyOf.has(c.el.id)) copy(c.el.id, nid);
+  }
+  for (const id of chosen) if (!copyOf.has(id)) copy(id);
+  return { copies, copyOf, chosen };
+}
+
+export const duplicateElements = defineCommand<{ ids: string[]; offset: Vec2 }>({
+  name: "duplicateElements",
+  label: ({ ids }) => `Duplicate ${plural(ids.length, "element")}`,
+  undoable: true,
+  run: (sketch, { ids, offset }) => {
+    const { copies } = planDuplicate(sketch, ids, offset);
+    if (!copies.length) return sketch;
+    return edit(sketch, (d) => {
+      for (const c of copies) (d[c.group] as AnyElement[]).push(c.el);
+    });
+  },
+  select: (before, _after, { ids, offset }) => {
+    const { copyOf, chosen } = planDuplicate(before, ids, offset);
+    return chosen.map((id) => copyOf.get(id)!).filter(Boolean);
+  },
+});
+
+export const attachToBody = defineCommand<{ ids: string[]; body: string }>({
+  name: "attachToBody",
+  label: ({ ids, body }) => `Attach ${plural(ids.length, "element")} to ${body}`,
+  undoable: true,
+  run: (sketch, { ids, body }) => {
+    const target = findElement(sketch, body);
+    if (!target || target.group !== "bodies") return sketch;
+    const todo = ids.map((id) => findElement(sketch, id)).filter((l) => l && l.group !== "bodies" && (l.el as Attached).body !== body);
+    if (!todo.length) return sketch;
+    return edit(sketch, (d) => {
+      for (const l of todo) ((d[l!.group] as AnyElement[])[l!.index] as Attached).body = body;
+    });
+  },
+});

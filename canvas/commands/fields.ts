@@ -1,0 +1,155 @@
+// Editing values: one field of an element, the sketch's own fields, motion and parameters.
+import type { Numeric, SketchFile } from "@/solver/schema";
+import { findElement, type AnyElement, type Group } from "../model/elements";
+import { roundTo } from "../model/numeric";
+import { defineCommand, edit } from "./define";
+
+export type FieldPath = string | ReadonlyArray<string | number>;
+export type FieldValue = Numeric | boolean | null | undefined | Numeric[] | Numeric[][];
+
+const pathOf = (p: FieldPath) => (typeof p === "string" ? [p] : [...p]);
+const pathText = (p: FieldPath) => pathOf(p).map((k, i) => (typeof k === "number" ? `[${k}]` : i ? `.${k}` : k)).join("");
+
+/** Keys a blank never deletes, by list (what the file format requires). */
+const REQUIRED: Record<Group, ReadonlySet<string>> = {
+  bodies: new Set(["id", "outline", "mass"]),
+  supports: new Set(["id", "kind", "body", "at", "angle"]),
+  loads: new Set(["id", "kind", "body", "at", "value", "from", "to", "w1", "w2"]),
+  ports: new Set(["id", "kind", "body", "at", "angle"]),
+  massSources: new Set(["id", "body", "massFlow"]),
+};
+
+export const setField = defineCommand<{ id: string; field: FieldPath; value: FieldValue }>({
+  name: "setField",
+  label: ({ id, field }) => `Change ${pathText(field)} of ${id}`,
+  undoable: true,
+  run: (sketch, { id, field, value }) => {
+    const l = findElement(sketch, id);
+    if (!l) return sketch;
+    const path = pathOf(field);
+    if (path[0] === "id" || path[0] === "kind") return sketch;
+    return edit(sketch, (d) => {
+      let target = (d[l.group] as AnyElement[])[l.index] as unknown as Record<string | number, unknown>;
+      for (const k of path.slice(0, -1)) {
+        if (target[k] === undefined || target[k] === null) return;
+        target = target[k] as Record<string | number, unknown>;
+      }
+      const last = path[path.length - 1];
+      if (value === undefined || value === null || value === "") {
+        if (path.length === 1 && REQUIRED[l.group].has(String(last))) return;
+        if (path.length === 1) delete target[last];
+        return;
+      }
+      target[last] = value;
+    });
+  },
+});
+
+/** Switch a force between magnitude + angle and components fx, fy (values in N and degrees). */
+export const setForceForm = defineCommand<{ id: string; form: "polar" | "components"; magnitude: number; angle: number }>({
+  name: "setForceForm",
+  label: ({ id, form }) => `Give ${id} as ${form === "polar" ? "magnitude and angle" : "components"}`,
+  undoable: true,
+  run: (sketch, { id, form, magnitude, angle }) => {
+    const l = findElement(sketch, id);
+    if (!l || l.kind !== "force") return sketch;
+    const m = Number.isFinite(magnitude) ? magnitude : 0;
+    const a = Number.isFinite(angle) ? angle : 0;
+    return edit(sketch, (d) => {
+      const f = d.loads[l.index] as Record<string, unknown>;
+      delete f.magnitude;
+      delete f.angle;
+      delete f.fx;
+      delete f.fy;
+      if (form === "polar") {
+        f.magnitude = roundTo(m, 1e-6);
+        f.angle = roundTo(a, 1e-3);
+      } else {
+        const rad = (a * Math.PI) / 180;
+        f.fx = roundTo(m * Math.cos(rad), 1e-6);
+        f.fy = roundTo(m * Math.sin(rad), 1e-6);
+      }
+    });
+  },
+});
+
+type SketchField = "title" | "description" | "gravity";
+
+export const setSketchField = defineCommand<{ field: SketchField; value: string | Numeric | undefined }>({
+  name: "setSketchField",
+  label: ({ field }) => `Change the sketch's ${field}`,
+  undoable: true,
+  run: (sketch, { field, value }) =>
+    edit(sketch, (d) => {
+      if (value === undefined || value === "") delete d[field];
+      else (d as Record<string, unknown>)[field] = value;
+    }),
+});
+
+export const setMotion = defineCommand<{ motion: SketchFile["motion"] | undefined }>({
+  name: "setMotion",
+  label: () => "Change the motion",
+  undoable: true,
+  run: (sketch, { motion }) =>
+    edit(sketch, (d) => {
+      const clean = motion ? Object.fromEntries(Object.entries(motion).filter(([, v]) => v !== undefined && v !== "" && v !== false)) : {};
+      if (Object.keys(clean).length) d.motion = clean as SketchFile["motion"];
+      else delete d.motion;
+    }),
+});
+
+const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
+
+export const setParameter = defineCommand<{ name: string; expression: Numeric }>({
+  name: "setParameter",
+  label: ({ name }) => `Set parameter ${name}`,
+  undoable: true,
+  run: (sketch, { name, expression }) => {
+    if (!NAME.test(name)) return sketch;
+    return edit(sketch, (d) => {
+      d.parameters = { ...(d.parameters ?? {}), [name]: expression };
+    });
+  },
+});
+
+export const deleteParameter = defineCommand<{ name: string }>({
+  name: "deleteParameter",
+  label: ({ name }) => `Delete parameter ${name}`,
+  undoable: true,
+  run: (sketch, { name }) => {
+    if (!sketch.parameters || !(name in sketch.parameters)) return sketch;
+    return edit(sketch, (d) => {
+      delete d.parameters![name];
+    });
+  },
+});
+
+/** Rename a parameter everywhere it is read: every expression in the sketch follows. */
+export const renameParameter = defineCommand<{ from: string; to: string }>({
+  name: "renameParameter",
+  label: ({ from, to }) => `Rename parameter ${from} to ${to}`,
+  undoable: true,
+  run: (sketch, { from, to }) => {
+    const params = sketch.parameters ?? {};
+    if (!(from in params) || !NAME.test(to) || to in params || from === to) return sketch;
+    const word = new RegExp(`(?<![A-Za-z0-9_.])${from}(?![A-Za-z0-9_])`, "g");
+    const rewrite = (x: unknown): unknown => {
+      if (typeof x === "string") return x.replace(word, to);
+      if (Array.isArray(x)) return x.map(rewrite);
+      if (x && typeof x === "object") return Object.fromEntries(Object.entries(x).map(([k, v]) => [k, k === "id" || k === "label" || k === "body" || k === "kind" ? v : rewrite(v)]));
+      return x;
+    };
+    // keep the parameter's place in the table
+    const entries = Object.entries(params).map(([k, v]) => [k === from ? to : k, rewrite(v)] as const);
+    const { parameters: _p, title: _t, description: _d, format: _f, ...rest } = sketch;
+    return { ...sketch, ...(rewrite(rest) as object), parameters: Object.fromEntries(entries) as SketchFile["parameters"] };
+  },
+});
+
+export const replaceSketch = defineCommand<{ sketch: SketchFile; label: string }>({
+  name: "replaceSketch",
+  label: ({ label }) => label,
+  undoable: true,
+  run: (_sketch, { sketch }) => sketch,
+  select: () => [],
+});

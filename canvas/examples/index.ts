@@ -1,0 +1,34 @@
+// The examples the new-sketch page offers: our own invented scenarios, each solving to a clear
+// result that the status sentence explains.
+import { migrateSketch } from "@/solver/migrations";
+import { sketchSchema, type SketchFile } from "@/solver/schema";
+import fireMonitor from "./fire-monitor-trailer.json";
+import pipeBend from "./pipe-bend-anchor.json";
+import washingCart from "./washing-cart.json";
+import pumpSkid from "./pump-skid.json";
+
+export interface Example {
+  id: string;
+  title: string;
+  /** one line for the menu */
+  summary: string;
+  sketch: SketchFile;
+}
+
+/** An example as the current format version reads it (migrated and validated once). */
+function load(json: unknown): SketchFile {
+  const m = migrateSketch(json);
+  if (!m.ok) throw new Error(`example does not load: ${m.errors[0]?.message}`);
+  return sketchSchema.parse(m.doc);
+}
+
+export const EXAMPLES: readonly Example[] = [
+  { id: "fire-monitor-trailer", title: "Fire-fighting monitor on a trailer", summary: "A jet from 2.4 m unloads the front jack; friction at the foot and the axle.", sketch: load(fireMonitor) },
+  { id: "pipe-bend-anchor", title: "Pressure-pipe bend on an anchor", summary: "10 bar in a DN150 bend: pressure thrust, momentum and weight on one anchor.", sketch: load(pipeBend) },
+  { id: "washing-cart", title: "Pressure-washing cart with a lance", summary: "Raise the lance and the cart tips back off its front caster.", sketch: load(washingCart) },
+  { id: "pump-skid", title: "Dewatering pump skid", summary: "Suction and discharge on a skid held by friction at two bearers.", sketch: load(pumpSkid) },
+];
+
+export function exampleById(id: string): Example | undefined {
+  return EXAMPLES.find((e) => e.id === id);
+}

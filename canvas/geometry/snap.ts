@@ -1,0 +1,69 @@
+// Snapping a point while placing or dragging: body corners first, then body edges, then the grid.
+import type { Vec2 } from "@/solver/types";
+import { nearestOnOutline } from "./polygon";
+
+export type SnapKind = "corner" | "edge" | "grid" | "none";
+
+export interface SnapResult {
+  point: Vec2;
+  kind: SnapKind;
+  /** the body whose corner or edge was used */
+  body?: string;
+  /** edge index on that body */
+  edge?: number;
+}
+
+export interface SnapOptions {
+  bodies: ReadonlyArray<{ id: string; outline: Vec2[] }>;
+  /** grid step, m (0: no grid) */
+  grid: number;
+  /** capture distance, m (a few pixels at the current zoom) */
+  tolerance: number;
+  /** bodies whose corners and edges are not targets (the one being dragged) */
+  exclude?: ReadonlySet<string>;
+  /** false while the user holds the key that turns snapping off */
+  enabled?: boolean;
+}
+
+export function snapPoint(p: Vec2, o: SnapOptions): SnapResult {
+  if (o.enabled === false) return { point: p, kind: "none" };
+  let best: SnapResult | null = null;
+  let bestD = o.tolerance;
+  for (const b of o.bodies) {
+    if (o.exclude?.has(b.id)) continue;
+    for (const c of b.outline) {
+      const d = Math.hypot(c[0] - p[0], c[1] - p[1]);
+      if (d <= bestD) {
+        bestD = d;
+        best = { point: [c[0], c[1]], kind: "corner", body: b.id };
+      }
+    }
+  }
+  if (best) return best;
+  bestD = o.tolerance;
+  for (const b of o.bodies) {
+    if (o.exclude?.has(b.id) || b.outline.length < 2) continue;
+    const h = nearestOnOutline(p, b.outline);
+    if (h.distance <= bestD) {
+      bestD = h.distance;
+      // on an edge that runs along an axis, keep the other coordinate on the grid
+      const a = b.outline[h.edge];
+      const c = b.outline[(h.edge + 1) % b.outline.length];
+      const pt: Vec2 = [h.point[0], h.point[1]];
+      if (o.grid > 0 && a[1] === c[1]) pt[0] = clamp(snapTo(pt[0], o.grid), Math.min(a[0], c[0]), Math.max(a[0], c[0]));
+      if (o.grid > 0 && a[0] === c[0]) pt[1] = clamp(snapTo(pt[1], o.grid), Math.min(a[1], c[1]), Math.max(a[1], c[1]));
+      best = { point: pt, kind: "edge", body: b.id, edge: h.edge };
+    }
+  }
+  if (best) return best;
+  if (o.grid > 0) return { point: [snapTo(p[0], o.grid), snapTo(p[1], o.grid)], kind: "grid" };
+  return { point: p, kind: "none" };
+}
+
+export function snapTo(x: number, step: number): number {
+  const r = Math.round(x / step) * step;
+  // keep grid values clean in the file: 0.30000000000000004 → 0.3
+  return Number(r.toFixed(Math.max(0, Math.ceil(-Math.log10(step)) + 2))) || 0;
+}
+
+const clamp = (x: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, x));

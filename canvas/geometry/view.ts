@@ -1,0 +1,54 @@
+// The view: world metres (y up) to screen pixels (y down). screen = (x + wx·scale, y − wy·scale).
+import type { Vec2 } from "@/solver/types";
+import type { Box } from "./polygon";
+
+export interface View {
+  /** pixels per metre */
+  scale: number;
+  /** screen position of the world origin */
+  x: number;
+  y: number;
+}
+
+export const MIN_SCALE = 2;
+export const MAX_SCALE = 5000;
+export const DEFAULT_VIEW: View = { scale: 120, x: 160, y: 420 };
+
+export function toScreen(v: View, p: Vec2): Vec2 {
+  return [v.x + p[0] * v.scale, v.y - p[1] * v.scale];
+}
+
+export function toWorld(v: View, s: Vec2): Vec2 {
+  return [(s[0] - v.x) / v.scale, (v.y - s[1]) / v.scale];
+}
+
+/** Zoom by a factor keeping the world point under the screen point `at` still. */
+export function zoomAt(v: View, factor: number, at: Vec2): View {
+  const scale = Math.min(MAX_SCALE, Math.max(MIN_SCALE, v.scale * factor));
+  const w = toWorld(v, at);
+  return { scale, x: at[0] - w[0] * scale, y: at[1] + w[1] * scale };
+}
+
+export type Margins = number | { top: number; right: number; bottom: number; left: number };
+
+/** The view that shows a box of the world inside a screen of width × height, leaving margins (px). */
+export function fitView(box: Box, width: number, height: number, margin: Margins = 64): View {
+  const m = typeof margin === "number" ? { top: margin, right: margin, bottom: margin, left: margin } : margin;
+  if (!Number.isFinite(box.minX) || width <= 0 || height <= 0) return { ...DEFAULT_VIEW, y: Math.max(200, height * 0.7) };
+  const w = Math.max(box.maxX - box.minX, 0.5);
+  const h = Math.max(box.maxY - box.minY, 0.5);
+  const availW = Math.max(40, width - m.left - m.right);
+  const availH = Math.max(40, height - m.top - m.bottom);
+  const scale = Math.min(MAX_SCALE, Math.max(MIN_SCALE, Math.min(availW / w, availH / h)));
+  const cx = (box.minX + box.maxX) / 2;
+  const cy = (box.minY + box.maxY) / 2;
+  return { scale, x: m.left + availW / 2 - cx * scale, y: m.top + availH / 2 + cy * scale };
+}
+
+const STEPS = [0.001, 0.002, 0.005, 0.01, 0.02, 0.05, 0.1, 0.2, 0.25, 0.5, 1, 2, 5, 10, 20, 50, 100, 200, 500, 1000];
+
+/** A round grid step (m) whose spacing on screen is at least `minPx` pixels. */
+export function gridStep(scale: number, minPx = 18): number {
+  for (const s of STEPS) if (s * scale >= minPx) return s;
+  return STEPS[STEPS.length - 1];
+}

@@ -1,0 +1,258 @@
+"use client";
+// The canvas: a react-konva stage with four layers — the drafting grid, the drawing (one node
+// per element), the solve's results, and the interaction overlay (handles, snap, band, drafts).
+// Pointer input goes to the controller in pointer.ts; this component only wires it up.
+import { useEffect, useRef, useState, type DragEvent } from "react";
+import { Group, Layer, Shape, Stage } from "react-konva";
+import type Konva from "konva";
+import { useShallow } from "zustand/react/shallow";
+import { useStore } from "zustand";
+import type { Vec2 } from "@/solver/types";
+import { useEditor, useStores } from "../context";
+import { gridStep } from "../geometry/view";
+import { fitScene } from "../geometry/fit";
+import type { ElementKind } from "../model/elements";
+import { placeCommand } from "../placement";
+import { snapPoint } from "../geometry/snap";
+import { toWorld } from "../geometry/view";
+import { GRID_MAJOR, GRID_MINOR } from "../render/palette";
+import { markFrame } from "../perf";
+import { BodyNode, CgNode, ItemNode } from "./nodes";
+import { PointerOverlay, ResultsShape, SelectionHandles } from "./overlays";
+import { createPointerController, type HitInfo, type PointerController } from "./pointer";
+import { TRAY_MIME, type InteractionStore } from "./interaction";
+import { resolveCanvasFont } from "./font";
+
+
+
+function Grid({ width, height }: { width: number; height: number }) {
+  const view = useEditor((s) => s.view);
+  return (
+    <Shape
+      listening={false}
+      perfectDrawEnabled={false}
+      sceneFunc={(kctx) => {
+        const ctx = kctx._context;
+        const step = gridStep(view.scale);
+        const major = step * 5;
+        const x0 = Math.floor(-view.x / view.scale / step) * step;
+        const x1 = (width - view.x) / view.scale;
+        const y0 = Math.floor((view.y - height) / view.scale / step) * step;
+        const y1 = view.y / view.scale;
+        const isMajor = (v: number) => Math.abs(v / major - Math.round(v / major)) < 1e-6;
+        for (const pass of [false, true]) {
+          ctx.beginPath();
+          for (let x = x0; x <= x1; x += step) {
+            if (isMajor(x) !== pass) continue;
+            const sx = Math.round(view.x + x * view.scale) + 0.5;
+            ctx.moveTo(sx, 0);
+            ctx.lineTo(sx, height);
+          }
+          for (let y = y0; y <= y1; y += step) {
+            if (isMajor(y) !== pass) continue;
+            const sy = Math.round(view.y - y * view.scale) + 0.5;
+            ctx.moveTo(0, sy);
+            ctx.lineTo(width, sy);
+          }
+          ctx.strokeStyle = pass ? GRID_MAJOR : GRID_MINOR;
+          ctx.lineWidth = 1;
+          ctx.stroke();
+        }
+        // the world axes, faintly
+        ctx.beginPath();
+        ctx.moveTo(Math.round(view.x) + 0.5, 0);
+        ctx.lineTo(Math.round(view.x) + 0.5, height);
+        ctx.moveTo(0, Math.round(view.y) + 0.5);
+        ctx.lineTo(width, Math.round(view.y) + 0.5);
+        ctx.strokeStyle = "rgba(29,35,41,0.16)";
+        ctx.stroke();
+      }}
+    />
+  );
+}
+
+function Elements() {
+  const bodyIds = useStores().scene;
+  const bodies = useStore(bodyIds, useShallow((s) => s.bodies.map((b) => b.id)));
+  const items = useStore(bodyIds, useShallow((s) => s.items.map((i) => i.id)));
+  return (
+    <>
+      {bodies.map((id) => (
+        <BodyNode key={id} id={id} />
+      ))}
+      {items.map((id) => (
+        <ItemNode key={id} id={id} />
+      ))}
+      {bodies.map((id) => (
+        <CgNode key={`cg-${id}`} id={id} />
+      ))}
+    </>
+  );
+}
+
+export interface SketchCanvasProps {
+  interaction: InteractionStore;
+  /** receives the pointer controller (the editor's keyboard uses it for Escape and Enter) */
+  onController?: (c: PointerController | null) => void;
+}
+
+export default function SketchCanvas({ interaction, onController }: SketchCanvasProps) {
+  const stores = useStores();
+  const containerRef = useRef<HTMLDivElement>(null);
+  const stageRef = useRef<Konva.Stage>(null);
+  const [size, setSize] = useState<{ width: number; height: number } | null>(null);
+  const view = useEditor((s) => s.view);
+  const dragging = useStore(interaction, (s) => s.dragging);
+  const panning = useStore(interaction, (s) => s.panning || s.spaceHeld);
+  const tool = useEditor((s) => s.tool.kind);
+
+  // size follows the container; the first size fits the sketch into view
+  useEffect(() => {
+    const el = containerRef.current;
+    if (!el) return;
+    let first = true;
+    const measure = () => {
+      const r = el.getBoundingClientRect();
+      const next = { width: Math.max(1, Math.floor(r.width)), height: Math.max(1, Math.floor(r.height)) };
+      setSize(next);
+      const s = stores.editor.getState();
+      s.setViewport(next);
+      if (first) {
+        first = false;
+        const scene = stores.scene.getState();
+        if (scene.bodies.length) s.setView(fitScene(scene, next.width, next.height));
+        else s.setView({ scale: 120, x: Math.round(next.width * 0.3), y: Math.round(next.height * 0.7) });
+      }
+    };
+    measure();
+    const ro = new ResizeObserver(measure);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, [stores]);
+
+  // the pointer controller and its native listeners (wheel must not be passive); all outside render
+  useEffect(() => {
+    const el = containerRef.current;
+    if (!el) return;
+    const controller = createPointerController({
+      stores,
+      interaction,
+      container: () => containerRef.current,
+      hitTest: (p: Vec2): HitInfo | null => {
+        const stage = stageRef.current;
+        if (!stage) return null;
+        let node: Konva.Node | null = stage.getIntersection({ x: p[0], y: p[1] });
+        while (node) {
+          const hit = node.getAttr("hit") as HitInfo | undefined;
+          if (hit) return hit;
+          node = node.getParent();
+        }
+        return null;
+      },
+    });
+    onController?.(controller);
+    const down = (e: PointerEvent) => {
+      el.focus({ preventScroll: true });
+      controller.down(e);
+    };
+    const move = (e: PointerEvent) => controller.hover(e);
+    const leave = () => controller.leave();
+    const wheel = (e: WheelEvent) => controller.wheel(e);
+    const dbl = () => controller.finishPolygon();
+    el.addEventListener("pointerdown", down);
+    el.addEventListener("pointermove", move);
+    el.addEventListener("pointerleave", leave);
+    el.addEventListener("wheel", wheel, { passive: false });
+    el.addEventListener("dblclick", dbl);
+    return () => {
+      el.removeEventListener("pointerdown", down);
+      el.removeEventListener("pointermove", move);
+      el.removeEventListener("pointerleave", leave);
+      el.removeEventListener("wheel", wheel);
+      el.removeEventListener("dblclick", dbl);
+      onController?.(null);
+      controller.dispose();
+    };
+  }, [stores, interaction, onController]);
+
+  // redraw once the page font has loaded, so canvas text uses it
+  useEffect(() => {
+    resolveCanvasFont();
+    let live = true;
+    document.fonts?.ready.then(() => {
+      if (!live) return;
+      resolveCanvasFont();
+      stageRef.current?.batchDraw();
+    });
+    return () => {
+      live = false;
+    };
+  }, []);
+
+  const onDrop = (e: DragEvent<HTMLDivElement>) => {
+    const raw = e.dataTransfer.getData(TRAY_MIME);
+    if (!raw) return;
+    e.preventDefault();
+    const { kind, friction } = JSON.parse(raw) as { kind: ElementKind; friction?: boolean };
+    const r = containerRef.current!.getBoundingClientRect();
+    const s = stores.editor.getState();
+    const world = toWorld(s.view, [e.clientX - r.left, e.clientY - r.top]);
+    const scene = stores.scene.getState();
+    const tol = 9 / s.view.scale;
+    const p = snapPoint(world, { bodies: scene.bodies, grid: gridStep(s.view.scale), tolerance: tol, enabled: s.snap && !e.altKey }).point;
+    if (kind === "body") {
+      s.setTool({ kind: "body", shape: "rectangle", points: [] });
+      s.notify("Drag on the canvas to draw the body's rectangle.");
+      return;
+    }
+    const out = placeCommand(s.sketch, scene, kind, p, tol, { friction });
+    if (out.ok) s.apply(out.command);
+    else s.notify(out.message);
+  };
+
+  const cursor = panning ? "grab" : tool === "place" || tool === "body" || tool === "pick-point" ? "crosshair" : "default";
+
+  return (
+    <div
+      ref={containerRef}
+      className="relative h-full w-full overflow-hidden bg-paper-card outline-none focus-visible:ring-2 focus-visible:ring-accent/60 focus-visible:ring-inset"
+      style={{ cursor, touchAction: "none" }}
+      tabIndex={0}
+      role="application"
+      aria-label="Drawing of the free-body diagram"
+      aria-describedby="canvas-help"
+      data-testid="sketch-canvas"
+      onDragOver={(e) => {
+        if (e.dataTransfer.types.includes(TRAY_MIME)) {
+          e.preventDefault();
+          e.dataTransfer.dropEffect = "copy";
+        }
+      }}
+      onDrop={onDrop}
+    >
+      {size && (
+        <Stage ref={stageRef} width={size.width} height={size.height}>
+          <Layer listening={false}>
+            <Grid width={size.width} height={size.height} />
+          </Layer>
+          <Layer listening={!dragging} onDraw={() => queueMicrotask(markFrame)}>
+            <Group x={view.x} y={view.y}>
+              <Elements />
+            </Group>
+          </Layer>
+          <Layer listening={false} onDraw={() => queueMicrotask(markFrame)}>
+            <Group x={view.x} y={view.y}>
+              <ResultsShape />
+            </Group>
+          </Layer>
+          <Layer>
+            <Group x={view.x} y={view.y}>
+              <SelectionHandles />
+              <PointerOverlay interaction={interaction} />
+            </Group>
+          </Layer>
+        </Stage>
+      )}
+    </div>
+  );
+}

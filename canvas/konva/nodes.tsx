@@ -1,0 +1,110 @@
+"use client";
+// The drawing layer's nodes: one per element, each re-rendered only when its own scene object,
+// selection, state, zoom or units change. Symbols come from the shared primitives.
+import { memo, useMemo } from "react";
+import { Group, Shape } from "react-konva";
+import type Konva from "konva";
+import type { SolveResult } from "@/solver/types";
+import { useAnalysis, useEditor, useScene } from "../context";
+import type { SceneBody, SceneItem } from "../scene";
+import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld } from "../render/symbols";
+import { supportStates } from "../render/results";
+import { primsBox, type Prim } from "../render/prims";
+import { ACCENT, INK } from "../render/palette";
+import { drawPrims } from "./drawPrims";
+import { canvasFont } from "./font";
+
+const statesCache = new WeakMap<SolveResult, ReturnType<typeof supportStates>>();
+function stateOf(result: SolveResult | null, id: string) {
+  if (!result) return undefined;
+  let m = statesCache.get(result);
+  if (!m) {
+    m = supportStates(result);
+    statesCache.set(result, m);
+  }
+  return m.get(id);
+}
+
+function sceneFunc(prims: readonly Prim[]) {
+  return (ctx: Konva.Context) => drawPrims(ctx._context, prims, canvasFont());
+}
+
+function boxHit(prims: readonly Prim[], pad = 4) {
+  const shapes = prims.filter((p) => p.t !== "text");
+  const b = primsBox(shapes.length ? (shapes as Prim[]) : (prims as Prim[]));
+  return (ctx: Konva.Context, shape: Konva.Shape) => {
+    if (!Number.isFinite(b.minX)) return;
+    ctx.beginPath();
+    ctx.rect(b.minX - pad, b.minY - pad, b.maxX - b.minX + 2 * pad, b.maxY - b.minY + 2 * pad);
+    ctx.closePath();
+    ctx.fillStrokeShape(shape);
+  };
+}
+
+export const BodyNode = memo(function BodyNode({ id }: { id: string }) {
+  const body = useScene((s) => s.byId.get(id)) as SceneBody | undefined;
+  const selected = useEditor((s) => s.selection.includes(id));
+  const scale = useEditor((s) => s.view.scale);
+  const units = useEditor((s) => s.units);
+  const prims = useMemo(() => (body ? bodyPrims(body, { units, scale, color: selected ? ACCENT : INK }) : []), [body, units, scale, selected]);
+  if (!body || body.outline.length < 3) return null;
+  const pts = body.outline.map((p) => [p[0] * scale, -p[1] * scale]);
+  return (
+    <Shape
+      hit={{ type: "element", id }}
+      sceneFunc={sceneFunc(prims)}
+      hitFunc={(ctx, shape) => {
+        ctx.beginPath();
+        pts.forEach((p, i) => (i ? ctx.lineTo(p[0], p[1]) : ctx.moveTo(p[0], p[1])));
+        ctx.closePath();
+        ctx.fillStrokeShape(shape);
+      }}
+      perfectDrawEnabled={false}
+    />
+  );
+});
+
+export const CgNode = memo(function CgNode({ id }: { id: string }) {
+  const cg = useScene((s) => (s.byId.get(id) as SceneBody | undefined)?.cg);
+  const scale = useEditor((s) => s.view.scale);
+  const selected = useEditor((s) => s.selection.includes(id));
+  const prims = useMemo(() => cgPrims(selected ? ACCENT : INK), [selected]);
+  if (!cg || !Number.isFinite(cg[0]) || !Number.isFinite(cg[1])) return null;
+  return (
+    <Group x={cg[0] * scale} y={-cg[1] * scale} hit={{ type: "cg", id }}>
+      <Shape
+        sceneFunc={sceneFunc(prims)}
+        hitFunc={(ctx, shape) => {
+          ctx.beginPath();
+          ctx.arc(0, 0, 10, 0, Math.PI * 2);
+          ctx.closePath();
+          ctx.fillStrokeShape(shape);
+        }}
+        perfectDrawEnabled={false}
+      />
+    </Group>
+  );
+});
+
+export const ItemNode = memo(function ItemNode({ id }: { id: string }) {
+  const item = useScene((s) => s.byId.get(id)) as SceneItem | undefined;
+  const needsBody = item?.kind === "pin" || item?.kind === "fixed";
+  const body = useScene((s) => (needsBody && item ? (s.byId.get(item.body) as SceneBody | undefined) : undefined));
+  const selected = useEditor((s) => s.selection.includes(id));
+  const scale = useEditor((s) => s.view.scale);
+  const units = useEditor((s) => s.units);
+  const state = useAnalysis((s) => stateOf(s.shown, id));
+  const prims = useMemo(
+    () => (item ? itemPrims(item, { units, scale, color: selected ? ACCENT : INK, groundSide: groundSideOf(item, body), state }) : []),
+    [item, body, units, scale, selected, state],
+  );
+  const hit = useMemo(() => boxHit(prims), [prims]);
+  if (!item) return null;
+  const a = anchorWorld(item);
+  if (!Number.isFinite(a[0]) || !Number.isFinite(a[1])) return null;
+  return (
+    <Group x={a[0] * scale} y={-a[1] * scale} hit={{ type: "element", id }}>
+      <Shape sceneFunc={sceneFunc(prims)} hitFunc={hit} perfectDrawEnabled={false} />
+    </Group>
+  );
+});

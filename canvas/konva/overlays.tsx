@@ -1,0 +1,160 @@
+"use client";
+// The interaction layer: handles of the selection (turn, reshape), the snap target, the rubber
+// band, a body being drawn and a preview of what a click will place. Results get their own layer.
+import { memo, useMemo } from "react";
+import { Circle, Group, Line, Rect, Shape, Text } from "react-konva";
+import { useStore } from "zustand";
+import type { Vec2 } from "@/solver/types";
+import { useAnalysis, useEditor, useScene, useStores } from "../context";
+import { DIRECTED } from "../model/elements";
+import { resultPrims } from "../render/results";
+import { itemPrims } from "../render/symbols";
+import { dir } from "../render/prims";
+import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
+import { angleOnEdge, bodyAt } from "../placement";
+import { anchorOf, type SceneItem } from "../scene";
+import { drawPrims } from "./drawPrims";
+import { canvasFont } from "./font";
+import type { InteractionStore } from "./interaction";
+import { handleSign } from "./pointer";
+
+const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
+export const ROTATE_HANDLE_PX = 66;
+
+export const ResultsShape = memo(function ResultsShape() {
+  const shown = useAnalysis((s) => s.shown);
+  const stale = useAnalysis((s) => s.stale);
+  const scene = useScene((s) => s);
+  const scale = useEditor((s) => s.view.scale);
+  const units = useEditor((s) => s.units);
+  const prims = useMemo(() => (shown ? resultPrims(scene, shown, { units, scale, stale }).prims : []), [shown, scene, units, scale, stale]);
+  if (!prims.length) return null;
+  return <Shape sceneFunc={(ctx) => drawPrims(ctx._context, prims, canvasFont())} listening={false} perfectDrawEnabled={false} />;
+});
+
+export const SelectionHandles = memo(function SelectionHandles() {
+  const only = useEditor((s) => (s.selection.length === 1 ? s.selection[0] : null));
+  const el = useScene((s) => (only ? s.byId.get(only) : undefined));
+  const scale = useEditor((s) => s.view.scale);
+  const tool = useEditor((s) => s.tool.kind);
+  if (!el || tool !== "select") return null;
+  if (el.kind === "body") {
+    return (
+      <Group>
+        {el.outline.map((p, i) => {
+          const [x, y] = px(p, scale);
+          return (
+            <Rect
+              key={i}
+              x={x - 4.5}
+              y={y - 4.5}
+              width={9}
+              height={9}
+              fill={PAPER_CARD}
+              stroke={ACCENT}
+              strokeWidth={1.5}
+              hit={{ type: "corner", id: el.id, index: i }}
+              hitStrokeWidth={8}
+            />
+          );
+        })}
+      </Group>
+    );
+  }
+  if (!DIRECTED.has(el.kind) || !("angle" in el)) return null;
+  const item = el as SceneItem & { angle: number };
+  const a = px(anchorOf(item), scale);
+  const d = dir(item.kind === "force" && "magnitude" in item && item.magnitude < 0 ? item.angle + 180 : item.angle);
+  const sign = handleSign(item);
+  const h: [number, number] = [a[0] + d[0] * ROTATE_HANDLE_PX * sign, a[1] + d[1] * ROTATE_HANDLE_PX * sign];
+  return (
+    <Group>
+      <Line points={[a[0], a[1], h[0], h[1]]} stroke={ACCENT} strokeWidth={1} dash={[3, 3]} listening={false} />
+      <Circle x={h[0]} y={h[1]} radius={6.5} fill={PAPER_CARD} stroke={ACCENT} strokeWidth={1.8} hit={{ type: "rotate", id: item.id }} hitStrokeWidth={10} />
+      <Text x={h[0] + 9} y={h[1] - 15} text={`${Math.round(item.angle * 10) / 10}°`} fontSize={10.5} fill={ACCENT} fontFamily={canvasFont()} listening={false} />
+    </Group>
+  );
+});
+
+export const PointerOverlay = memo(function PointerOverlay({ interaction }: { interaction: InteractionStore }) {
+  const snap = useStore(interaction, (s) => s.snap);
+  const band = useStore(interaction, (s) => s.band);
+  const rect = useStore(interaction, (s) => s.rect);
+  const hover = useStore(interaction, (s) => s.hover);
+  const scale = useEditor((s) => s.view.scale);
+  const tool = useEditor((s) => s.tool);
+  const units = useEditor((s) => s.units);
+  const momentPoint = useEditor((s) => s.momentPoint);
+  const { scene } = useStores();
+  const ghost = useMemo(() => {
+    if (tool.kind !== "place" || !hover) return null;
+    const bodies = scene.getState().bodies;
+    const tol = 9 / scale;
+    const body = bodyAt(bodies, hover, tol);
+    const angle = angleOnEdge(tool.element, body, hover, tol) ?? 0;
+    const fake = { id: "", body: body?.id ?? "", kind: tool.element, at: hover, angle, magnitude: 1000, value: 500, from: [hover[0] - 0.5, hover[1]], to: [hover[0] + 0.5, hover[1]], w1: 2000, w2: 2000, massFlow: 10, velocity: 5, pressure: 0, ...(tool.friction ? { mu: 0.3 } : {}) } as unknown as SceneItem;
+    return itemPrims(fake, { units, scale, color: ACCENT, showName: false }).map((p) => ({ ...p, opacity: 0.55 }));
+  }, [tool, hover, scale, units, scene]);
+
+  return (
+    <Group listening={false}>
+      {snap && snap.kind !== "none" && snap.kind !== "grid" && (
+        <Group x={snap.point[0] * scale} y={-snap.point[1] * scale}>
+          <Rect x={-5} y={-5} width={10} height={10} rotation={snap.kind === "corner" ? 45 : 0} offsetX={0} stroke={ACCENT} strokeWidth={1.4} />
+          <Text x={8} y={6} text={snap.kind === "corner" ? "corner" : "on edge"} fontSize={10} fill={ACCENT} fontFamily={canvasFont()} />
+        </Group>
+      )}
+      {band && (
+        <Rect
+          x={band.minX * scale}
+          y={-band.maxY * scale}
+          width={(band.maxX - band.minX) * scale}
+          height={(band.maxY - band.minY) * scale}
+          stroke={ACCENT}
+          dash={[4, 3]}
+          strokeWidth={1}
+          fill="rgba(180,70,43,0.05)"
+        />
+      )}
+      {rect && (
+        <Rect
+          x={Math.min(rect[0][0], rect[1][0]) * scale}
+          y={-Math.max(rect[0][1], rect[1][1]) * scale}
+          width={Math.abs(rect[1][0] - rect[0][0]) * scale}
+          height={Math.abs(rect[1][1] - rect[0][1]) * scale}
+          stroke={ACCENT}
+          strokeWidth={1.5}
+          dash={[6, 4]}
+          fill="rgba(230,223,208,0.6)"
+        />
+      )}
+      {tool.kind === "body" && tool.shape === "polygon" && tool.points.length > 0 && (
+        <Group>
+          <Line points={[...tool.points, ...(hover ? [hover] : [])].flatMap((p) => px(p, scale))} stroke={ACCENT} strokeWidth={1.5} dash={[6, 4]} />
+          {tool.points.map((p, i) => (
+            <Circle key={i} x={p[0] * scale} y={-p[1] * scale} radius={i === 0 ? 6 : 3.5} stroke={ACCENT} strokeWidth={1.4} fill={PAPER_CARD} />
+          ))}
+        </Group>
+      )}
+      {ghost && hover && (
+        <Group x={hover[0] * scale} y={-hover[1] * scale}>
+          <Shape sceneFunc={(ctx) => drawPrims(ctx._context, ghost, canvasFont())} />
+        </Group>
+      )}
+      {momentPoint && (
+        <Group x={momentPoint[0] * scale} y={-momentPoint[1] * scale}>
+          <Circle radius={7} stroke={REACTION} strokeWidth={1.5} dash={[2, 2]} />
+          <Line points={[-11, 0, 11, 0]} stroke={REACTION} strokeWidth={1} />
+          <Line points={[0, -11, 0, 11]} stroke={REACTION} strokeWidth={1} />
+          <Text x={10} y={-20} text="moments about P" fontSize={10.5} fill={REACTION} fontFamily={canvasFont()} />
+        </Group>
+      )}
+      {tool.kind === "pick-point" && hover && (
+        <Group x={hover[0] * scale} y={-hover[1] * scale}>
+          <Circle radius={7} stroke={CAUTION} strokeWidth={1.5} />
+          <Text x={10} y={8} text="click: take moments about this point" fontSize={10.5} fill={INK_FAINT} fontFamily={canvasFont()} />
+        </Group>
+      )}
+    </Group>
+  );
+});

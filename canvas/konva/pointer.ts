@@ -1,0 +1,357 @@
+// Pointer handling for the canvas, outside React: pick, place, drag (one gesture = one undo
+// step), turn, reshape, rubber-band select, draw bodies, pan and zoom. Drags listen on the
+// window so they continue when the pointer leaves the canvas.
+import type { Vec2 } from "@/solver/types";
+import { moveElement, moveCentreOfGravity } from "../commands/move";
+import { rotateElement, reshapeBody } from "../commands/shape";
+import { attachToBody } from "../commands/elements";
+import type { Command } from "../commands/define";
+import type { EditorStores } from "../context";
+import { findElement, type Attached } from "../model/elements";
+import { snapPoint, snapTo, type SnapResult } from "../geometry/snap";
+import { gridStep, toWorld, zoomAt } from "../geometry/view";
+import { angleOf } from "../geometry/polygon";
+import { anchorOf, type SceneItem } from "../scene";
+import { bodyAt, bodyCommand, elementsInBox, placeCommand } from "../placement";
+import { rectangleOutline } from "../model/factory";
+import { markInput } from "../perf";
+import type { InteractionStore } from "./interaction";
+
+export type HitInfo =
+  | { type: "element"; id: string }
+  | { type: "cg"; id: string }
+  | { type: "corner"; id: string; index: number }
+  | { type: "rotate"; id: string };
+
+export interface PointerDeps {
+  stores: EditorStores;
+  interaction: InteractionStore;
+  container: () => HTMLElement | null;
+  hitTest: (screen: Vec2) => HitInfo | null;
+}
+
+type Mode =
+  | { kind: "idle" }
+  | { kind: "pan"; start: Vec2; view: { scale: number; x: number; y: number } }
+  | { kind: "move"; ids: string[]; start: Vec2; anchor: Vec2; moved: boolean; exclude: Set<string>; snapAnchor: boolean; last?: Command<unknown> }
+  | { kind: "rotate"; id: string; anchor: Vec2; flip: boolean; magnitude?: number }
+  | { kind: "corner"; id: string; index: number }
+  | { kind: "cg"; id: string; start: Vec2; origin: Vec2 }
+  | { kind: "band"; start: Vec2; mode: "replace" | "add" }
+  | { kind: "rect"; start: Vec2 };
+
+const DRAG_THRESHOLD_PX = 3;
+const ANGLE_STEP = 5;
+
+/** Which way a rotate handle points from the anchor: the arrow's tail side for forces and inlets. */
+export function handleSign(item: SceneItem): 1 | -1 {
+  return item.kind === "outlet" || item.kind === "tie" ? 1 : -1;
+}
+
+export function createPointerController(deps: PointerDeps) {
+  const { stores, interaction } = deps;
+  const ed = () => stores.editor.getState();
+  let mode: Mode = { kind: "idle" };
+  let downScreen: Vec2 = [0, 0];
+  let polygonLastClick = 0;
+
+  const screenOf = (e: { clientX: number; clientY: number }): Vec2 => {
+    const r = deps.container()?.getBoundingClientRect();
+    return r ? [e.clientX - r.left, e.clientY - r.top] : [e.clientX, e.clientY];
+  };
+  const worldOf = (s: Vec2) => toWorld(ed().view, s);
+  const tolerance = () => 9 / ed().view.scale;
+
+  function snap(p: Vec2, e: { altKey: boolean }, exclude?: Set<string>): SnapResult {
+    const s = ed();
+    const scene = stores.scene.getState();
+    return snapPoint(p, { bodies: scene.bodies, grid: gridStep(s.view.scale), tolerance: tolerance(), exclude, enabled: s.snap && !e.altKey });
+  }
+
+  const valueOf = (id: string, field: string) => stores.analysis.getState().fieldValues.values.get(`${id}.${field}`);
+
+  function startWindowDrag() {
+    window.addEventListener("pointermove", onDragMove);
+    window.addEventListener("pointerup", onDragUp);
+    window.addEventListener("pointercancel", onDragCancel);
+  }
+  function stopWindowDrag() {
+    window.removeEventListener("pointermove", onDragMove);
+    window.removeEventListener("pointerup", onDragUp);
+    window.removeEventListener("pointercancel", onDragCancel);
+    interaction.setState({ dragging: false, panning: false, band: null, rect: null });
+  }
+
+  function down(e: PointerEvent) {
+    const s = ed();
+    const screen = screenOf(e);
+    downScreen = screen;
+    const world = worldOf(screen);
+    if (e.button === 1 || (e.button === 0 && interaction.getState().spaceHeld)) {
+      mode = { kind: "pan", start: screen, view: { ...s.view } };
+      interaction.setState({ panning: true });
+      startWindowDrag();
+      e.preventDefault();
+      return;
+    }
+    if (e.button !== 0) return;
+    const tool = s.tool;
+
+    if (tool.kind === "pick-point") {
+      const p = snap(world, e).point;
+      s.setMomentPoint([snapTo(p[0], 1e-4), snapTo(p[1], 1e-4)]);
+      s.setTool({ kind: "select" });
+      return;
+    }
+    if (tool.kind === "place") {
+      const p = snap(world, e).point;
+      const out = placeCommand(s.sketch, stores.scene.getState(), tool.element, p, tolerance(), { friction: tool.friction });
+      if (!out.ok) s.notify(out.message);
+      else {
+        s.apply(out.command);
+        if (!e.shiftKey) s.setTool({ kind: "select" });
+      }
+      return;
+    }
+    if (tool.kind === "body" && tool.shape === "rectangle") {
+      mode = { kind: "rect", start: snap(world, e).point };
+      interaction.setState({ rect: [mode.start, mode.start], dragging: true });
+      startWindowDrag();
+      return;
+    }
+    if (tool.kind === "body" && tool.shape === "polygon") {
+      const p = snap(world, e).point;
+      const pts = tool.points;
+      const now = e.timeStamp;
+      const closeToFirst = pts.length >= 3 && Math.hypot(p[0] - pts[0][0], p[1] - pts[0][1]) * s.view.scale < 10;
+      const last = pts[pts.length - 1];
+      const doubleClick = pts.length >= 3 && now - polygonLastClick < 400 && Math.hypot(p[0] - last[0], p[1] - last[1]) * s.view.scale < 6;
+      if (closeToFirst || doubleClick) {
+        finishPolygon();
+        return;
+      }
+      polygonLastClick = now;
+      s.setTool({ ...tool, points: [...pts, p] });
+      return;
+    }
+
+    // select tool
+    const hit = deps.hitTest(screen);
+    if (hit?.type === "rotate") {
+      const item = stores.scene.getState().byId.get(hit.id) as SceneItem | undefined;
+      if (!item) return;
+      const l = findElement(s.sketch, hit.id);
+      const el = l?.el as Record<string, unknown> | undefined;
+      const cartesian = item.kind === "force" && el && el.magnitude === undefined && el.angle === undefined;
+      mode = { kind: "rotate", id: hit.id, anchor: anchorOf(item), flip: handleSign(item) < 0, magnitude: cartesian && item.kind === "force" ? item.magnitude : undefined };
+      s.beginGesture("Turn");
+    } else if (hit?.type === "corner") {
+      mode = { kind: "corner", id: hit.id, index: hit.index };
+      s.beginGesture("Reshape");
+    } else if (hit?.type === "cg") {
+      const b = stores.scene.getState().byId.get(hit.id);
+      if (!b || b.kind !== "body") return;
+      mode = { kind: "cg", id: hit.id, start: world, origin: b.cg };
+      s.beginGesture("Move the centre of gravity");
+    } else if (hit?.type === "element") {
+      const already = s.selection.includes(hit.id);
+      if (e.shiftKey || e.ctrlKey || e.metaKey) {
+        s.select([hit.id], "toggle");
+        if (already) return;
+      } else if (!already) s.select([hit.id]);
+      const ids = ed().selection;
+      const scene = stores.scene.getState();
+      const primary = scene.byId.get(hit.id);
+      if (!primary) return;
+      const exclude = new Set(ids.filter((id) => scene.byId.get(id)?.kind === "body"));
+      mode = { kind: "move", ids, start: world, anchor: anchorOf(primary), moved: false, exclude, snapAnchor: primary.kind !== "body" };
+      s.beginGesture("Move");
+    } else {
+      mode = { kind: "band", start: world, mode: e.shiftKey ? "add" : "replace" };
+      if (!e.shiftKey) s.select([]);
+    }
+    interaction.setState({ dragging: true });
+    startWindowDrag();
+  }
+
+  function onDragMove(e: PointerEvent) {
+    const s = ed();
+    const screen = screenOf(e);
+    const world = worldOf(screen);
+    switch (mode.kind) {
+      case "pan":
+        s.setView({ ...mode.view, x: mode.view.x + screen[0] - mode.start[0], y: mode.view.y + screen[1] - mode.start[1] });
+        return;
+      case "move": {
+        if (!mode.moved && Math.hypot(screen[0] - downScreen[0], screen[1] - downScreen[1]) < DRAG_THRESHOLD_PX) return;
+        mode.moved = true;
+        markInput(e.timeStamp);
+        let delta: Vec2 = [world[0] - mode.start[0], world[1] - mode.start[1]];
+        if (mode.snapAnchor) {
+          const r = snap([mode.anchor[0] + delta[0], mode.anchor[1] + delta[1]], e, mode.exclude);
+          delta = [r.point[0] - mode.anchor[0], r.point[1] - mode.anchor[1]];
+          interaction.setState({ snap: r.kind === "none" ? null : r });
+        } else if (s.snap && !e.altKey) {
+          const g = gridStep(s.view.scale);
+          delta = [snapTo(delta[0], g), snapTo(delta[1], g)];
+        }
+        mode.last = moveElement({ ids: mode.ids, delta, lookup: valueOf }) as Command<unknown>;
+        s.updateGesture(mode.last);
+        return;
+      }
+      case "rotate": {
+        const v: Vec2 = [world[0] - mode.anchor[0], world[1] - mode.anchor[1]];
+        if (Math.hypot(v[0], v[1]) < 1e-9) return;
+        markInput(e.timeStamp);
+        let a = angleOf(v) + (mode.flip ? 180 : 0);
+        a = e.altKey ? Math.round(a * 10) / 10 : Math.round(a / ANGLE_STEP) * ANGLE_STEP;
+        s.updateGesture(rotateElement({ id: mode.id, angle: a, magnitude: mode.magnitude }) as Command<unknown>);
+        return;
+      }
+      case "corner": {
+        const r = snap(world, e, new Set([mode.id]));
+        interaction.setState({ snap: r.kind === "none" ? null : r });
+        markInput(e.timeStamp);
+        s.updateGesture(reshapeBody({ id: mode.id, corner: mode.index, to: r.point, keepRectangle: !e.shiftKey }) as Command<unknown>);
+        return;
+      }
+      case "cg": {
+        const p: Vec2 = [mode.origin[0] + world[0] - mode.start[0], mode.origin[1] + world[1] - mode.start[1]];
+        const r = snap(p, e);
+        markInput(e.timeStamp);
+        s.updateGesture(moveCentreOfGravity({ id: mode.id, to: r.point }) as Command<unknown>);
+        return;
+      }
+      case "band":
+        interaction.setState({ band: { minX: Math.min(mode.start[0], world[0]), minY: Math.min(mode.start[1], world[1]), maxX: Math.max(mode.start[0], world[0]), maxY: Math.max(mode.start[1], world[1]) } });
+        return;
+      case "rect":
+        interaction.setState({ rect: [mode.start, snap(world, e).point] });
+        return;
+    }
+  }
+
+  function onDragUp(e: PointerEvent) {
+    const s = ed();
+    const m = mode;
+    const band = interaction.getState().band;
+    mode = { kind: "idle" };
+    stopWindowDrag();
+    interaction.setState({ snap: null });
+    switch (m.kind) {
+      case "move": {
+        if (!m.moved) {
+          s.cancelGesture();
+          return;
+        }
+        // supports, loads and ports attach to the body they are dropped on
+        const sketch = s.sketch;
+        const scene = stores.scene.getState();
+        const cmds: Command<unknown>[] = [];
+        const movingBodies = new Set(m.ids.filter((id) => findElement(sketch, id)?.group === "bodies"));
+        for (const id of m.ids) {
+          const l = findElement(sketch, id);
+          const item = scene.byId.get(id);
+          if (!l || l.group === "bodies" || !item || movingBodies.has((l.el as Attached).body)) continue;
+          const target = bodyAt(scene.bodies.filter((b) => !movingBodies.has(b.id)), anchorOf(item), tolerance());
+          if (target && target.id !== (l.el as Attached).body) cmds.push(attachToBody({ ids: [id], body: target.id }) as Command<unknown>);
+        }
+        // the move from the origin, then the attachments: still one undo step
+        if (cmds.length && m.last) s.updateGesture([m.last, ...cmds]);
+        s.endGesture();
+        return;
+      }
+      case "rotate":
+      case "corner":
+      case "cg":
+        s.endGesture();
+        return;
+      case "band": {
+        if (band && (band.maxX - band.minX) * s.view.scale > 2) s.select(elementsInBox(stores.scene.getState(), band), m.mode === "add" ? "add" : "replace");
+        return;
+      }
+      case "rect": {
+        const end = snap(worldOf(screenOf(e)), e).point;
+        interaction.setState({ rect: null });
+        let a = m.start;
+        let b = end;
+        if (Math.abs(b[0] - a[0]) * s.view.scale < 6 || Math.abs(b[1] - a[1]) * s.view.scale < 6) {
+          // a click: a 2 m × 1 m body with its bottom-left corner here
+          a = m.start;
+          b = [m.start[0] + 2, m.start[1] + 1];
+        }
+        s.apply(bodyCommand(s.sketch, rectangleOutline(a, b)));
+        s.setTool({ kind: "select" });
+        return;
+      }
+    }
+  }
+
+  function onDragCancel() {
+    cancel();
+  }
+
+  /** Escape: roll back the drag in progress, or leave the current tool. */
+  function cancel(): boolean {
+    const s = ed();
+    if (mode.kind !== "idle") {
+      const wasGesture = mode.kind === "move" || mode.kind === "rotate" || mode.kind === "corner" || mode.kind === "cg";
+      if (mode.kind === "pan") s.setView(mode.view);
+      mode = { kind: "idle" };
+      stopWindowDrag();
+      interaction.setState({ snap: null });
+      if (wasGesture) s.cancelGesture();
+      return true;
+    }
+    if (s.tool.kind !== "select") {
+      s.setTool({ kind: "select" });
+      interaction.setState({ snap: null, hover: null });
+      return true;
+    }
+    return false;
+  }
+
+  function finishPolygon() {
+    const s = ed();
+    const tool = s.tool;
+    if (tool.kind !== "body" || tool.shape !== "polygon") return;
+    if (tool.points.length >= 3) s.apply(bodyCommand(s.sketch, tool.points));
+    else s.notify("A body needs at least three corners.");
+    s.setTool({ kind: "select" });
+  }
+
+  /** Pointer moving over the canvas with no button: hover and snap preview for tools. */
+  function hover(e: PointerEvent) {
+    if (mode.kind !== "idle") return;
+    const world = worldOf(screenOf(e));
+    const tool = ed().tool;
+    if (tool.kind === "select") {
+      if (interaction.getState().hover) interaction.setState({ hover: null, snap: null });
+      return;
+    }
+    const r = snap(world, e);
+    interaction.setState({ hover: r.point, snap: r.kind === "none" || r.kind === "grid" ? null : r });
+  }
+
+  function leave() {
+    if (mode.kind === "idle") interaction.setState({ hover: null, snap: null });
+  }
+
+  function wheel(e: WheelEvent) {
+    e.preventDefault();
+    const s = ed();
+    const at = screenOf(e);
+    // a trackpad pinch arrives as a wheel event with ctrlKey
+    const k = e.ctrlKey ? 0.01 : 0.0016;
+    const factor = Math.exp(-e.deltaY * k * (e.deltaMode === 1 ? 16 : 1));
+    s.setView(zoomAt(s.view, factor, at));
+  }
+
+  function dispose() {
+    stopWindowDrag();
+  }
+
+  return { down, hover, leave, wheel, cancel, finishPolygon, dispose, get mode() { return mode.kind; } };
+}
+
+export type PointerController = ReturnType<typeof createPointerController>;

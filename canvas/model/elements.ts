@@ -1,0 +1,144 @@
+// The elements of a sketch as the editor sees them: one id space across the five lists of the
+// file, a kind per element (the tray's words), and lookups that do not care which list holds it.
+import { CURRENT_VERSION, type SketchFile } from "@/solver/schema";
+
+export type Group = "bodies" | "supports" | "loads" | "ports" | "massSources";
+export const GROUPS: readonly Group[] = ["bodies", "supports", "loads", "ports", "massSources"];
+
+export type ElementKind =
+  | "body"
+  | "pin"
+  | "roller"
+  | "contact"
+  | "fixed"
+  | "tie"
+  | "force"
+  | "couple"
+  | "distributed"
+  | "inlet"
+  | "outlet"
+  | "massSource";
+
+export type BodyEl = SketchFile["bodies"][number];
+export type SupportEl = SketchFile["supports"][number];
+export type LoadEl = SketchFile["loads"][number];
+export type PortEl = SketchFile["ports"][number];
+export type MassSourceEl = SketchFile["massSources"][number];
+export type AnyElement = BodyEl | SupportEl | LoadEl | PortEl | MassSourceEl;
+/** Elements that belong to a body. */
+export type Attached = SupportEl | LoadEl | PortEl | MassSourceEl;
+
+export const GROUP_OF: Record<ElementKind, Group> = {
+  body: "bodies",
+  pin: "supports",
+  roller: "supports",
+  contact: "supports",
+  fixed: "supports",
+  tie: "supports",
+  force: "loads",
+  couple: "loads",
+  distributed: "loads",
+  inlet: "ports",
+  outlet: "ports",
+  massSource: "massSources",
+};
+
+/** Words for each kind, as the tray, the outline and the status sentences use them. */
+export const KIND_LABEL: Record<ElementKind, string> = {
+  body: "Body",
+  pin: "Pin",
+  roller: "Roller",
+  contact: "Contact",
+  fixed: "Fixed support",
+  tie: "Tie",
+  force: "Point force",
+  couple: "Couple",
+  distributed: "Distributed load",
+  inlet: "Inlet",
+  outlet: "Outlet",
+  massSource: "Mass source",
+};
+
+/** Kinds with a direction the rotate handle turns. */
+export const DIRECTED: ReadonlySet<ElementKind> = new Set(["roller", "contact", "tie", "force", "inlet", "outlet", "distributed"]);
+
+export interface Located {
+  group: Group;
+  index: number;
+  kind: ElementKind;
+  el: AnyElement;
+}
+
+export function kindOf(group: Group, el: AnyElement): ElementKind {
+  if (group === "bodies") return "body";
+  if (group === "massSources") return "massSource";
+  return (el as SupportEl | LoadEl | PortEl).kind;
+}
+
+const indexCache = new WeakMap<SketchFile, Map<string, Located>>();
+
+/** Every element by id (cached per sketch object, which commands never mutate). */
+export function elementIndex(sketch: SketchFile): Map<string, Located> {
+  let map = indexCache.get(sketch);
+  if (map) return map;
+  map = new Map();
+  for (const group of GROUPS) {
+    const list = sketch[group] as AnyElement[];
+    list.forEach((el, index) => {
+      if (!map!.has(el.id)) map!.set(el.id, { group, index, kind: kindOf(group, el), el });
+    });
+  }
+  indexCache.set(sketch, map);
+  return map;
+}
+
+export function findElement(sketch: SketchFile, id: string): Located | undefined {
+  return elementIndex(sketch).get(id);
+}
+
+/** Every element in file order (bodies first). */
+export function allElements(sketch: SketchFile): Located[] {
+  return [...elementIndex(sketch).values()];
+}
+
+/** Elements attached to a body. */
+export function childrenOf(sketch: SketchFile, bodyId: string): Located[] {
+  return allElements(sketch).filter((l) => l.group !== "bodies" && (l.el as Attached).body === bodyId);
+}
+
+const PREFIX: Record<Group, string> = { bodies: "b", supports: "s", loads: "l", ports: "p", massSources: "ms" };
+
+/** The next free id for a group: b1, b2… (never reusing an id in the sketch or in `taken`). */
+export function nextId(sketch: SketchFile, group: Group, taken: ReadonlySet<string> = new Set()): string {
+  const used = elementIndex(sketch);
+  const prefix = PREFIX[group];
+  for (let i = 1; ; i++) {
+    const id = `${prefix}${i}`;
+    if (!used.has(id) && !taken.has(id)) return id;
+  }
+}
+
+/** "Pin s1 (rear foot)" */
+export function describeElement(l: Pick<Located, "kind" | "el">): string {
+  const base = `${KIND_LABEL[l.kind]} ${l.el.id}`;
+  return l.el.label ? `${base} (${l.el.label})` : base;
+}
+
+/** The short name a sentence uses: the label, or "contact s2". */
+export function nameOf(l: Pick<Located, "kind" | "el">): string {
+  return l.el.label || `${KIND_LABEL[l.kind].toLowerCase()} ${l.el.id}`;
+}
+
+export function emptySketch(title = "Untitled sketch"): SketchFile {
+  return {
+    format: "counterpoise.sketch",
+    version: CURRENT_VERSION,
+    title,
+    parameters: {},
+    bodies: [],
+    supports: [],
+    loads: [],
+    ports: [],
+    massSources: [],
+  };
+}

@@ -1,0 +1,95 @@
+// Where a sketch is kept. The editor talks only to this seam: the scratch sketch of
+// /sketches/new lives in the browser's local storage; saved, versioned sketches (the versions
+// work) implement the same interface over the API — load the latest version, save a new one
+// based on a known version, and report a conflict instead of overwriting.
+import type { SketchFile } from "@/solver/schema";
+import { importSketchText } from "./files";
+
+export type LoadOutcome =
+  | { ok: true; sketch: SketchFile; /** the saved version this is (saved sketches) */ version?: number; readOnly?: boolean; migratedFrom?: number[] }
+  | { ok: true; sketch: null }
+  | { ok: false; reason: "not-found" | "signed-out" | "forbidden" | "unavailable" | "invalid"; message: string };
+
+export type SaveOutcome =
+  | { ok: true; version?: number; savedAt: string }
+  | { ok: false; reason: "conflict"; message: string; latestVersion: number }
+  | { ok: false; reason: "signed-out" | "forbidden" | "invalid" | "error"; message: string };
+
+export interface SaveOptions {
+  /** the version the edits started from (saved sketches) */
+  baseVersion?: number;
+  /** the version's message */
+  message?: string;
+}
+
+export interface SketchPersistence {
+  readonly kind: "scratch" | "saved";
+  /** true: every change is kept as it happens (debounced); false: the user saves */
+  readonly autosave: boolean;
+  /** a short phrase for the header, e.g. "Scratch sketch · kept in this browser" */
+  describe(): string;
+  load(): Promise<LoadOutcome>;
+  save(sketch: SketchFile, opts?: SaveOptions): Promise<SaveOutcome>;
+}
+
+export const SCRATCH_KEY = "counterpoise:scratch-sketch:v1";
+
+interface StorageLike {
+  getItem(key: string): string | null;
+  setItem(key: string, value: string): void;
+  removeItem(key: string): void;
+}
+
+/** The scratch sketch: works before sign-in, kept in local storage until saved to an account. */
+export function scratchPersistence(storage: StorageLike | null = typeof window !== "undefined" ? window.localStorage : null, key = SCRATCH_KEY): SketchPersistence {
+  return {
+    kind: "scratch",
+    autosave: true,
+    describe: () => "Scratch sketch · kept in this browser",
+    async load() {
+      const text = storage?.getItem(key);
+      if (!text) return { ok: true, sketch: null };
+      let stored: unknown;
+      try {
+        stored = JSON.parse(text);
+      } catch {
+        return { ok: false, reason: "invalid", message: "The scratch sketch in this browser is damaged; starting a new one." };
+      }
+      const doc = (stored as { sketch?: unknown }).sketch;
+      const out = importSketchText(JSON.stringify(doc));
+      if (!out.ok) return { ok: false, reason: "invalid", message: `The scratch sketch in this browser could not be read (${out.errors[0]?.message}); starting a new one.` };
+      return { ok: true, sketch: out.sketch, migratedFrom: out.migratedFrom };
+    },
+    async save(sketch) {
+      const savedAt = new Date().toISOString();
+      try {
+        storage?.setItem(key, JSON.stringify({ savedAt, sketch }));
+      } catch (err) {
+        return { ok: false, reason: "error", message: `This browser would not keep the sketch (${(err as Error).message}).` };
+      }
+      return { ok: true, savedAt };
+    },
+  };
+}
+
+/**
+ * A saved sketch before the versions API exists (or when it cannot be reached): it says so,
+ * and the page offers sign-in and a scratch sketch instead.
+ */
+export function unavailablePersistence(id: string, reason: "not-found" | "signed-out" | "unavailable" = "not-found"): SketchPersistence {
+  const message =
+    reason === "signed-out"
+      ? "Sign in to open this sketch."
+      : `There is no sketch "${id}" that you can open. Saved sketches belong to a workspace: sign in with an account that is a member of it.`;
+  return {
+    kind: "saved",
+    autosave: false,
+    describe: () => `Saved sketch ${id}`,
+    async load() {
+      return { ok: false, reason, message };
+    },
+    async save() {
+      return { ok: false, reason: "error", message: "Saving to a workspace is not available here yet." };
+    },
+  };
+}

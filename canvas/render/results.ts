@@ -1,0 +1,152 @@
+// The solve drawn on the diagram: reactions as double-line arrows (dashed where a one-sided
+// support would have to pull), the weight at the centre of gravity, momentum flux as dashed
+// arrows, port pressure forces, and the pivot or free direction of a body that tips or is
+// unrestrained. Primitives are in content pixels (world × scale, y down).
+import { formatQuantity, type UnitSystem } from "@/solver/units";
+import type { SolveResult, Vec2 } from "@/solver/types";
+import type { Scene, SceneBody, SceneItem } from "../scene";
+import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp, solidArrow, sub, text, unit, type Prim, type Pt } from "./prims";
+import { groundSideOf, labelAt, type DrawState } from "./symbols";
+import { CAUTION, INK, INK_SOFT, REACTION } from "./palette";
+
+export interface ResultOptions {
+  units: UnitSystem;
+  scale: number;
+  /** the result is an earlier sketch's (input errors now): drawn faded */
+  stale?: boolean;
+}
+
+export interface ResultDrawing {
+  prims: Prim[];
+  /** states the support symbols show by shape */
+  states: Map<string, DrawState>;
+}
+
+const SUPPORT_KINDS = new Set(["pin", "roller", "contact", "fixed", "tie"]);
+const px = (p: Vec2, s: number): Pt => [p[0] * s, -p[1] * s];
+const fq = (v: number, k: Parameters<typeof formatQuantity>[1], u: UnitSystem) => formatQuantity(v, k, u);
+
+/** The drawing states of every support: lifted and slack from the result, slips from its warnings. */
+export function supportStates(result: SolveResult): Map<string, DrawState> {
+  const states = new Map<string, DrawState>();
+  for (const [id, r] of Object.entries(result.reactions)) states.set(id, r.state);
+  for (const w of result.warnings) if (w.code === "SLIP") for (const id of w.ids) if (states.get(id) === "bearing") states.set(id, "slips");
+  return states;
+}
+
+export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions): ResultDrawing {
+  const s = o.scale;
+  const prims: Prim[] = [];
+  const states = supportStates(result);
+  const bodyOf = (id: string) => scene.byId.get(id) as SceneBody | undefined;
+
+  let maxR = 0;
+  for (const r of Object.values(result.reactions)) maxR = Math.max(maxR, Math.hypot(r.fx, r.fy));
+
+  // ---- reactions
+  for (const item of scene.items) {
+    if (!SUPPORT_KINDS.has(item.kind)) continue;
+    const r = result.reactions[item.id];
+    const body = result.bodies[item.body];
+    if (!r || !body) continue;
+    const at = px((item as Extract<SceneItem, { at: Vec2 }>).at, s);
+    const R = Math.hypot(r.fx, r.fy);
+    const impossible = (r.state === "lifted" || r.state === "slack") && (body.status === "tips" || body.status === "unrestrained");
+    if (R > 1e-9 * Math.max(maxR, 1)) {
+      const u = unit([r.fx, -r.fy]);
+      const g = dir(groundSideOf(item, bodyOf(item.body)));
+      const L = 26 + 50 * (R / (maxR || R));
+      const off = item.kind === "tie" ? 10 : 25;
+      const color = impossible ? CAUTION : REACTION;
+      const dash = impossible ? [5, 3] : undefined;
+      // push: the arrow arrives at the support from the ground side; pull: it leaves toward the ground
+      const push = -u[0] * g[0] - u[1] * g[1] >= -1e-9;
+      let from: Pt;
+      let to: Pt;
+      if (item.kind === "tie") {
+        const side = mul(perp(u), 11);
+        from = add(add(at, side), mul(u, 4));
+        to = add(from, mul(u, L));
+      } else if (push) {
+        to = sub(at, mul(u, off));
+        from = sub(to, mul(u, L));
+      } else {
+        from = add(at, mul(u, off));
+        to = add(from, mul(u, L));
+      }
+      prims.push(...doubleArrow(from, to, color, 1.5, 11, dash));
+      const words = impossible ? `would have to ${item.kind === "tie" ? "push" : "pull"} ${fq(Math.abs(r.n ?? R), "force", o.units)}` : fq(R, "force", o.units);
+      const tail = push || item.kind === "tie" ? from : to;
+      const away = push ? mul(u, -1) : u;
+      prims.push(...labelAt(add(tail, mul(away, 4)), away, [words], color, 11.5, { weight: 600 }));
+    }
+    if (Math.abs(r.m) > 1e-9 * Math.max(maxR, 1)) {
+      prims.push(...curvedArrow(at, 24, r.m > 0, REACTION, 1.5, true));
+      prims.push(...labelAt(add(at, [20, 24]), [1, 1], [fq(Math.abs(r.m), "moment", o.units) + (r.m > 0 ? " ↺" : " ↻")], REACTION, 11.5, { weight: 600 }));
+    }
+  }
+
+  // ---- known forces from the equations: weight, momentum flux, pressure
+  for (const [bodyId, eq] of Object.entries(result.equations)) {
+    const b = bodyOf(bodyId);
+    if (!b) continue;
+    for (const t of eq.forces) {
+      if (t.kind === "weight" && Number.isFinite(b.cg[0])) {
+        const cg = px(b.cg, s);
+        const W = Math.abs(t.fy);
+        prims.push(...solidArrow(add(cg, [0, 8]), add(cg, [0, 52]), INK, 1.9, 11));
+        prims.push(text(add(cg, [7, 38]), `W ${fq(W, "force", o.units)}`, INK, 11.5, { weight: 600, align: "left", baseline: "middle" }));
+      }
+      if (t.kind === "pressure") {
+        const port = scene.byId.get(t.id) as Extract<SceneItem, { kind: "inlet" | "outlet" }> | undefined;
+        if (!port) continue;
+        // p·A pushes inward across the port face: drawn just inside the control surface
+        const P = px(port.at, s);
+        const u = unit([t.fx, -t.fy]);
+        const n = perp(dir(port.angle));
+        const start = add(P, add(mul(n, -16), mul(u, 4)));
+        const end = add(start, mul(u, 34));
+        prims.push(...solidArrow(start, end, INK_SOFT, 1.4, 8));
+        prims.push(...labelAt(add(end, mul(u, 4)), u, [`pA ${fq(Math.hypot(t.fx, t.fy), "force", o.units)}`], INK_SOFT, 10.5));
+      }
+    }
+    for (const t of eq.momentum) {
+      const port = scene.byId.get(t.id) as Extract<SceneItem, { kind: "inlet" | "outlet" }> | undefined;
+      if (!port) continue;
+      const P = px(port.at, s);
+      const d = dir(port.angle);
+      const n = perp(d);
+      const base = add(P, mul(n, 17));
+      const outlet = port.kind === "outlet";
+      const from = outlet ? add(base, mul(d, 6)) : add(base, mul(d, -50));
+      const to = outlet ? add(base, mul(d, 50)) : add(base, mul(d, -6));
+      prims.push(...dashedArrow(from, to, INK_SOFT));
+      const mid: Pt = [(from[0] + to[0]) / 2 + n[0] * 10, (from[1] + to[1]) / 2 + n[1] * 10];
+      prims.push(...labelAt(mid, n, [`ṁV ${fq(Math.hypot(t.fx, t.fy), "force", o.units)}`], INK_SOFT, 10.5));
+    }
+  }
+
+  // ---- how a body that tips or is unrestrained would move
+  for (const b of scene.bodies) {
+    const br = result.bodies[b.id];
+    if (!br?.freeMotion || (br.status !== "tips" && br.status !== "unrestrained")) continue;
+    const fm = br.freeMotion;
+    if (fm.kind === "rotation") {
+      const c = px(fm.about, s);
+      prims.push({ t: "circle", c, r: 7, stroke: CAUTION, width: 1.8, fill: "#f6ebcf" });
+      prims.push({ t: "circle", c, r: 2.2, fill: CAUTION });
+      prims.push(...curvedArrow(c, 20, true, CAUTION, 1.4).map((p) => ({ ...p, dash: p.t === "poly" && !("closed" in p && p.closed) ? [4, 3] : undefined }) as Prim));
+      prims.push(...labelAt(add(c, [0, 30]), [0, 1], [br.status === "tips" ? "pivot: tips about here" : "free to turn about here"], CAUTION, 11.5, { weight: 600 }));
+    } else {
+      const c = px(b.cg, s);
+      const d = dir(fm.angle);
+      const from = add(c, mul(d, 14));
+      const to = add(c, mul(d, 84));
+      prims.push(...hollowArrow(from, to, CAUTION, 2.2, 16));
+      prims.push(...labelAt(add(to, mul(d, 6)), d, ["free to move: nothing resists"], CAUTION, 11.5, { weight: 600 }));
+    }
+  }
+
+  if (o.stale) for (const p of prims) (p as { opacity?: number }).opacity = 0.38;
+  return { prims, states };
+}

@@ -1,0 +1,274 @@
+// The symbols of the design language, as primitives around each element's anchor (screen px).
+// Supports sit on their ground side; given loads are solid arrows; ports are hollow arrows
+// across a short stub of the control surface. States (lifts, slack, slips) change the shape.
+import { formatQuantity, type UnitSystem } from "@/solver/units";
+import type { Vec2 } from "@/solver/types";
+import type { SceneBody, SceneItem, SceneElement } from "../scene";
+import { nearestOnOutline, outwardNormal, angleOf, pointInPolygon } from "../geometry/polygon";
+import { add, curvedArrow, dir, hatch, hollowArrow, line, mul, perp, solidArrow, sub, text, unit, zigzag, type Prim, type Pt } from "./prims";
+import { BODY_FILL, CAUTION, INK, INK_FAINT, PAPER_CARD } from "./palette";
+
+export type DrawState = "bearing" | "lifted" | "taut" | "slack" | "active" | "slips";
+
+export interface SymbolOptions {
+  units: UnitSystem;
+  /** pixels per metre (bodies and distributed loads scale; symbols do not) */
+  scale: number;
+  color?: string;
+  /** world angle from the anchor toward the ground (pins and fixed supports) */
+  groundSide?: number;
+  state?: DrawState;
+  /** show the element's label (or id) beside it */
+  showName?: boolean;
+}
+
+const q = (v: number, kind: Parameters<typeof formatQuantity>[1], units: UnitSystem) => (Number.isFinite(v) ? formatQuantity(v, kind, units) : "?");
+
+/** Where a label goes beyond point p along screen direction d. */
+export function labelAt(p: Pt, d: Pt, lines: string[], color: string, size = 11, extra: Partial<Extract<Prim, { t: "text" }>> = {}): Prim[] {
+  const align = d[0] > 0.35 ? "left" : d[0] < -0.35 ? "right" : "center";
+  const lh = size + 3;
+  const total = lh * lines.length;
+  let y0: number;
+  if (d[1] > 0.35) y0 = p[1] + size / 2 + 1;
+  else if (d[1] < -0.35) y0 = p[1] - total + size / 2 + 2;
+  else y0 = p[1] - total / 2 + lh / 2;
+  return lines.map((s, i) => text([p[0], y0 + i * lh], s, color, size, { align, baseline: "middle", ...extra }));
+}
+
+/** World angle toward the ground for a pin or a fixed support: away from the body edge it sits on. */
+export function groundSideOf(item: SceneItem, body: SceneBody | undefined): number {
+  if (item.kind === "contact" || item.kind === "roller") return item.angle + 180;
+  if (item.kind === "tie") return item.angle;
+  if (!body || body.outline.length < 3 || !("at" in item)) return -90;
+  const hit = nearestOnOutline(item.at as Vec2, body.outline);
+  const size = Math.max(...body.outline.map((p) => Math.hypot(p[0] - body.cg[0], p[1] - body.cg[1])), 1e-9);
+  if (hit.edge < 0 || hit.distance > 0.15 * size) return -90;
+  return angleOf(outwardNormal(body.outline, hit.edge));
+}
+
+function ground(a: Pt, b: Pt, away: Pt, color: string, rough: boolean): Prim[] {
+  return [rough ? zigzag(a, b, color) : line(a, b, { stroke: color, width: 1.4 }), ...hatch(a, b, away, INK_FAINT)];
+}
+
+function supportPrims(item: Extract<SceneItem, { kind: "pin" | "roller" | "contact" | "fixed" | "tie" }>, o: SymbolOptions): Prim[] {
+  const c = o.color ?? INK;
+  const O: Pt = [0, 0];
+  const side = item.kind === "pin" || item.kind === "fixed" ? (o.groundSide ?? -90) : groundSideOf(item, undefined);
+  const g = dir(side);
+  const n = perp(g);
+  const out: Prim[] = [];
+  switch (item.kind) {
+    case "pin": {
+      const base = mul(g, 16);
+      out.push({ t: "poly", closed: true, pts: [O, add(base, mul(n, 10)), sub(base, mul(n, 10))], stroke: c, width: 1.4, fill: PAPER_CARD });
+      out.push({ t: "circle", c: O, r: 3.6, stroke: c, width: 1.4, fill: PAPER_CARD });
+      out.push(...ground(add(base, mul(n, -15)), add(base, mul(n, 15)), g, c, false));
+      break;
+    }
+    case "roller": {
+      const base = mul(g, 11);
+      out.push({ t: "poly", closed: true, pts: [O, add(base, mul(n, 9)), sub(base, mul(n, 9))], stroke: c, width: 1.4, fill: PAPER_CARD });
+      out.push({ t: "circle", c: O, r: 3, stroke: c, width: 1.3, fill: PAPER_CARD });
+      for (const k of [-5, 5]) out.push({ t: "circle", c: add(mul(g, 14.2), mul(n, k)), r: 3.1, stroke: c, width: 1.2, fill: PAPER_CARD });
+      const gl = mul(g, 17.5);
+      out.push(...ground(add(gl, mul(n, -14)), add(gl, mul(n, 14)), g, c, false));
+      break;
+    }
+    case "contact": {
+      const lifted = o.state === "lifted";
+      const foot = mul(g, 7);
+      out.push({ t: "poly", closed: true, pts: [add(O, mul(n, -6)), add(O, mul(n, 6)), add(foot, mul(n, 9)), add(foot, mul(n, -9))], stroke: c, width: 1.4, fill: BODY_FILL });
+      const gap = lifted ? 7 : 0;
+      const gl = mul(g, 7 + gap);
+      out.push(...ground(add(gl, mul(n, -15)), add(gl, mul(n, 15)), g, c, item.mu !== undefined));
+      if (lifted) {
+        // the gap, with ticks across it, and the word
+        out.push(line(add(foot, mul(n, 12)), add(gl, mul(n, 12)), { stroke: CAUTION, width: 1, dash: [2, 2] }));
+        out.push(...labelAt(add(mul(g, 12), mul(n, -18)), mul(n, -1), ["lifts"], CAUTION, 11, { weight: 600 }));
+      }
+      if (o.state === "slips") {
+        const t = mul(n, 1);
+        out.push(...solidArrow(add(mul(g, 22), mul(t, -8)), add(mul(g, 22), mul(t, 10)), CAUTION, 1.3, 7));
+        out.push(...labelAt(add(mul(g, 22), mul(t, 13)), t, ["slips"], CAUTION, 11, { weight: 600 }));
+      }
+      break;
+    }
+    case "fixed": {
+      out.push(line(mul(n, -15), mul(n, 15), { stroke: c, width: 3.6 }));
+      out.push(...hatch(add(mul(g, 1.8), mul(n, -15)), add(mul(g, 1.8), mul(n, 15)), g, INK_FAINT, 5, 8));
+      break;
+    }
+    case "tie": {
+      const d = dir(item.angle);
+      const m = perp(d);
+      const end = mul(d, 34);
+      if (o.state === "slack") {
+        // a sagging dashed line and the word
+        const pts: Pt[] = [];
+        for (let i = 0; i <= 12; i++) {
+          const t = i / 12;
+          pts.push(add(mul(end, t), mul([0, 1], 7 * Math.sin(Math.PI * t))));
+        }
+        out.push({ t: "poly", pts, stroke: CAUTION, width: 1.3, dash: [4, 3] });
+        out.push(...labelAt(add(mul(end, 0.5), mul(m, -12)), mul(m, -1), ["slack"], CAUTION, 11, { weight: 600 }));
+      } else out.push(line(O, end, { stroke: c, width: 1.3 }));
+      out.push({ t: "circle", c: O, r: 2.4, stroke: c, width: 1.2, fill: PAPER_CARD });
+      out.push({ t: "circle", c: end, r: 3, stroke: c, width: 1.3, fill: PAPER_CARD });
+      const base = add(end, mul(d, 3));
+      out.push(...ground(add(base, mul(m, -9)), add(base, mul(m, 9)), d, c, false));
+      break;
+    }
+  }
+  return out;
+}
+
+function portPrims(item: Extract<SceneItem, { kind: "inlet" | "outlet" }>, o: SymbolOptions): Prim[] {
+  const c = o.color ?? INK;
+  const d = dir(item.angle);
+  const n = perp(d);
+  const outlet = item.kind === "outlet";
+  const from = outlet ? mul(d, -10) : mul(d, -48);
+  const to = outlet ? mul(d, 48) : mul(d, 10);
+  const out: Prim[] = [line(mul(n, -11), mul(n, 11), { stroke: c, width: 3 }), ...hollowArrow(from, to, c, 1.5)];
+  const lines = [`ṁ ${q(item.massFlow, "massFlow", o.units)} · V ${q(item.velocity, "velocity", o.units)}`];
+  if (item.pressure) lines.push(`p ${q(item.pressure, "pressure", o.units)}`);
+  const tipOut = outlet ? mul(d, 56) : mul(d, -56);
+  const away = outlet ? d : mul(d, -1);
+  if (o.showName !== false) out.push(...labelAt(tipOut, away, [item.label || item.id, ...lines], c, 11).map((p, i) => (i === 0 && p.t === "text" ? { ...p, italic: true, color: INK_FAINT, size: 10 } : p)));
+  else out.push(...labelAt(tipOut, away, lines, c, 11));
+  return out;
+}
+
+function loadPrims(item: Extract<SceneItem, { kind: "force" | "couple" | "distributed" }>, o: SymbolOptions): Prim[] {
+  const c = o.color ?? INK;
+  if (item.kind === "force") {
+    const ang = item.magnitude < 0 ? item.angle + 180 : item.angle;
+    const d = dir(ang);
+    const tail = mul(d, -54);
+    return [...solidArrow(tail, [0, 0], c, 1.9, 11), ...labelAt(add(tail, mul(d, -4)), mul(d, -1), [q(Math.abs(item.magnitude), "force", o.units)], c, 11, { weight: 600 })];
+  }
+  if (item.kind === "couple") {
+    return [...curvedArrow([0, 0], 15, item.value >= 0, c), { t: "circle", c: [0, 0], r: 2, fill: c }, ...labelAt([14, -20], [1, -1], [q(Math.abs(item.value), "moment", o.units)], c, 11, { weight: 600 })];
+  }
+  // distributed, local to `from`
+  const T: Pt = [(item.to[0] - item.from[0]) * o.scale, -(item.to[1] - item.from[1]) * o.scale];
+  const L = Math.hypot(T[0], T[1]);
+  const d = dir(item.angle);
+  const wmax = Math.max(Math.abs(item.w1), Math.abs(item.w2)) || 1;
+  const count = Math.max(3, Math.min(14, Math.floor(L / 16) + 1));
+  const tails: Pt[] = [];
+  const out: Prim[] = [];
+  for (let i = 0; i < count; i++) {
+    const t = i / (count - 1);
+    const p = mul(T, t);
+    const w = item.w1 + (item.w2 - item.w1) * t;
+    const h = 6 + 26 * (Math.abs(w) / wmax);
+    const tail = sub(p, mul(d, w >= 0 ? h : -h));
+    tails.push(tail);
+    if (Math.abs(w) > 1e-12) out.push(...solidArrow(tail, w >= 0 ? p : add(p, mul(d, 0)), c, 1.1, 6));
+  }
+  out.push({ t: "poly", pts: tails, stroke: c, width: 1.2 });
+  out.push(line([0, 0], T, { stroke: c, width: 0.8, dash: [2, 3] }));
+  const away = mul(d, -1);
+  out.push(...labelAt(add(tails[0], mul(away, 5)), away, [`w₁ ${q(item.w1, "lineLoad", o.units)}`], c, 10.5));
+  out.push(...labelAt(add(tails[tails.length - 1], mul(away, 5)), away, [`w₂ ${q(item.w2, "lineLoad", o.units)}`], c, 10.5));
+  return out;
+}
+
+function sourcePrims(item: Extract<SceneItem, { kind: "massSource" }>, o: SymbolOptions): Prim[] {
+  const c = o.color ?? INK;
+  const drop: Pt[] = [[0, -9]];
+  for (let i = 0; i <= 16; i++) {
+    const a = (-30 + (240 * i) / 16) * (Math.PI / 180);
+    drop.push([5 * Math.cos(a), 1.5 + 5 * Math.sin(a)]);
+  }
+  return [{ t: "poly", closed: true, pts: drop, stroke: c, width: 1.3, fill: "#dfe9ee" }, ...labelAt([9, 0], [1, 0], [`ṁ ${q(item.massFlow, "massFlow", o.units)}`], c, 10.5)];
+}
+
+/** The symbol of an attached element, around its anchor (`from` for a distributed load). */
+export function itemPrims(item: SceneItem, o: SymbolOptions): Prim[] {
+  let prims: Prim[];
+  switch (item.kind) {
+    case "pin":
+    case "roller":
+    case "contact":
+    case "fixed":
+    case "tie":
+      prims = supportPrims(item, o);
+      break;
+    case "inlet":
+    case "outlet":
+      prims = portPrims(item, o);
+      break;
+    case "massSource":
+      prims = sourcePrims(item, o);
+      break;
+    default:
+      prims = loadPrims(item, o);
+  }
+  if (o.showName !== false && item.kind !== "inlet" && item.kind !== "outlet") {
+    const name = item.label || item.id;
+    const side = item.kind === "distributed" ? [0, 0] : nameOffset(item, o);
+    prims.push(text(side as Pt, name, INK_FAINT, 10, { align: "left", baseline: "middle", italic: true }));
+  }
+  return prims;
+}
+
+function nameOffset(item: SceneItem, o: SymbolOptions): Pt {
+  // beside the symbol, across from where it points
+  let a = -90;
+  if (item.kind === "pin" || item.kind === "fixed") a = o.groundSide ?? -90;
+  else if ("angle" in item && item.kind !== "force") a = item.angle + (item.kind === "contact" || item.kind === "roller" ? 180 : 0);
+  const d = dir(a);
+  const n = perp(d);
+  return add(mul(d, 10), mul(n, item.kind === "inlet" || item.kind === "outlet" ? 16 : 20));
+}
+
+/** A body: the filled outline in content pixels (world × scale, y down), its name and mass. */
+export function bodyPrims(b: SceneBody, o: SymbolOptions & { gravityOn?: boolean }): Prim[] {
+  const c = o.color ?? INK;
+  const pts: Pt[] = b.outline.map((p) => [p[0] * o.scale, -p[1] * o.scale]);
+  const out: Prim[] = [{ t: "poly", closed: true, pts, fill: BODY_FILL, stroke: c, width: o.color && o.color !== INK ? 2 : 1.4 }];
+  if (o.showName !== false && pts.length) {
+    const words = `${b.label || b.id} · ${q(b.mass, "mass", o.units)}`;
+    const at = bodyLabelPoint(pts, words.length * 6.4 + 8);
+    out.push(text(at, words, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
+  }
+  return out;
+}
+
+/** A corner inside the outline where the body's name fits (top corners first). */
+function bodyLabelPoint(pts: Pt[], width: number): Pt {
+  const poly = pts.map((p) => [p[0], -p[1]] as Vec2);
+  const inside = (p: Pt) => pointInPolygon([p[0], -p[1]], poly);
+  const order = [...pts].sort((a, b) => a[0] + a[1] - (b[0] + b[1]) || a[1] - b[1]);
+  for (const v of order) {
+    const at: Pt = [v[0] + 7, v[1] + 13];
+    if (inside(at) && inside([at[0] + width, at[1]]) && inside([at[0], at[1] - 6]) && inside([at[0] + width, at[1] + 6])) return at;
+  }
+  return [order[0][0] + 7, order[0][1] + 13];
+}
+
+/** The centre of gravity: a small quartered circle, around (0, 0). */
+export function cgPrims(color = INK): Prim[] {
+  const r = 6.5;
+  const wedge = (a0: number): Prim => {
+    const pts: Pt[] = [[0, 0]];
+    for (let i = 0; i <= 8; i++) {
+      const a = ((a0 + (90 * i) / 8) * Math.PI) / 180;
+      pts.push([r * Math.cos(a), r * Math.sin(a)]);
+    }
+    return { t: "poly", closed: true, pts, fill: color };
+  };
+  return [{ t: "circle", c: [0, 0], r, fill: PAPER_CARD, stroke: color, width: 1.3 }, wedge(-90), wedge(90)];
+}
+
+/** Local anchor of an element in world metres. */
+export function anchorWorld(s: SceneElement): Vec2 {
+  if (s.kind === "body") return [0, 0];
+  if (s.kind === "distributed") return s.from;
+  return s.at;
+}
+
+export { unit };

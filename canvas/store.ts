@@ -1,0 +1,266 @@
+// The editor's store (zustand + immer): the sketch exactly in the file format, the selection,
+// the undo history and the view. Components read it through narrow selectors and change the
+// sketch only through `apply` (one command) or a gesture (a drag: many frames, one undo step).
+import { createStore, type StoreApi } from "zustand/vanilla";
+import { immer } from "zustand/middleware/immer";
+import type { SketchFile } from "@/solver/schema";
+import type { UnitSystem } from "@/solver/units";
+import type { Vec2 } from "@/solver/types";
+import type { Command } from "./commands/define";
+import { findElement, emptySketch, type ElementKind } from "./model/elements";
+import { DEFAULT_VIEW, type View } from "./geometry/view";
+
+export interface HistoryEntry {
+  label: string;
+  before: SketchFile;
+  after: SketchFile;
+  selectionBefore: string[];
+  selectionAfter: string[];
+  /** consecutive applies with the same key (typing in one field) merge into this entry */
+  coalesce?: string;
+}
+
+/** What a pointer press on the canvas does. */
+export type Tool =
+  | { kind: "select" }
+  | { kind: "place"; element: Exclude<ElementKind, "body">; friction?: boolean }
+  | { kind: "body"; shape: "rectangle" | "polygon"; points: Vec2[] }
+  | { kind: "pick-point" };
+
+interface Gesture {
+  origin: SketchFile;
+  selection: string[];
+  label: string;
+}
+
+export interface EditorState {
+  sketch: SketchFile;
+  selection: string[];
+  past: HistoryEntry[];
+  future: HistoryEntry[];
+  gesture: Gesture | null;
+  tool: Tool;
+  view: View;
+  units: UnitSystem;
+  /** grid and edge snapping (a held Alt turns it off for one drag) */
+  snap: boolean;
+  /** the point the hand check takes moments about (world, m); null: the first support */
+  momentPoint: Vec2 | null;
+  /** a short message for the status line ("Draw a body first") */
+  notice: string | null;
+  /** bumps on every change of the sketch (autosave watches it) */
+  revision: number;
+  /** size of the canvas on screen, px (fit to view needs it) */
+  viewport: { width: number; height: number };
+
+  apply: (cmd: Command<never> | Command<unknown>, opts?: { coalesce?: string }) => boolean;
+  undo: () => void;
+  redo: () => void;
+  beginGesture: (label?: string) => void;
+  /** Replace the gesture's frame: the commands run on the sketch as it was when the gesture began. */
+  updateGesture: (cmds: Command<unknown> | Command<unknown>[]) => void;
+  endGesture: () => void;
+  cancelGesture: () => void;
+  select: (ids: string[], mode?: "replace" | "toggle" | "add") => void;
+  setTool: (tool: Tool) => void;
+  setView: (view: View) => void;
+  setUnits: (units: UnitSystem) => void;
+  setSnap: (on: boolean) => void;
+  setMomentPoint: (p: Vec2 | null) => void;
+  notify: (text: string | null) => void;
+  setViewport: (size: { width: number; height: number }) => void;
+  /** Open a document (not undoable): history starts afresh. */
+  reset: (sketch: SketchFile) => void;
+}
+
+export const HISTORY_LIMIT = 300;
+
+export type EditorStore = StoreApi<EditorState>;
+
+const run = (sketch: SketchFile, cmd: Command<unknown>) => cmd.def.run(sketch, cmd.args);
+
+export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | "view" | "units" | "snap">> = {}): EditorStore {
+  return createStore<EditorState>()(
+    immer((set, get) => ({
+      sketch: initial.sketch ?? emptySketch(),
+      selection: [],
+      past: [],
+      future: [],
+      gesture: null,
+      tool: { kind: "select" },
+      view: initial.view ?? DEFAULT_VIEW,
+      units: initial.units ?? "SI",
+      snap: initial.snap ?? true,
+      momentPoint: null,
+      notice: null,
+      revision: 0,
+      viewport: { width: 800, height: 600 },
+
+      apply: (cmd, opts) => {
+        const s = get();
+        if (s.gesture) s.cancelGesture();
+        const c = cmd as Command<unknown>;
+        const before = get().sketch;
+        const after = run(before, c);
+        if (after === before) return false;
+        const selectionBefore = get().selection;
+        const selectionAfter = c.def.select?.(before, after, c.args, selectionBefore) ?? selectionBefore.filter((id) => findElement(after, id));
+        const label = c.def.label(c.args, before);
+        set((d) => {
+          d.sketch = after;
+          d.selection = selectionAfter;
+          d.revision += 1;
+          if (!c.def.undoable) return;
+          const top = d.past[d.past.length - 1];
+          if (opts?.coalesce && top && top.coalesce === opts.coalesce && d.future.length === 0) {
+            top.after = after;
+            top.selectionAfter = selectionAfter;
+            return;
+          }
+          d.past.push({ label, before, after, selectionBefore, selectionAfter, coalesce: opts?.coalesce });
+          if (d.past.length > HISTORY_LIMIT) d.past.splice(0, d.past.length - HISTORY_LIMIT);
+          d.future = [];
+        });
+        return true;
+      },
+
+      undo: () => {
+        const s = get();
+        if (s.gesture) return s.cancelGesture();
+        const entry = s.past[s.past.length - 1];
+        if (!entry) return;
+        set((d) => {
+          d.past.pop();
+          d.future.push(entry);
+          d.sketch = entry.before;
+          d.selection = entry.selectionBefore.filter((id) => findElement(entry.before, id));
+          d.revision += 1;
+          d.notice = `Undid: ${entry.label}`;
+        });
+      },
+
+      redo: () => {
+        const s = get();
+        if (s.gesture) return;
+        const entry = s.future[s.future.length - 1];
+        if (!entry) return;
+        set((d) => {
+          d.future.pop();
+          d.past.push(entry);
+          d.sketch = entry.after;
+          d.selection = entry.selectionAfter.filter((id) => findElement(entry.after, id));
+          d.revision += 1;
+          d.notice = `Redid: ${entry.label}`;
+        });
+      },
+
+      beginGesture: (label = "Drag") => {
+        const s = get();
+        if (s.gesture) s.cancelGesture();
+        set((d) => {
+          d.gesture = { origin: s.sketch, selection: s.selection, label };
+        });
+      },
+
+      updateGesture: (cmds) => {
+        const g = get().gesture;
+        if (!g) return;
+        const list = Array.isArray(cmds) ? cmds : [cmds];
+        let next = g.origin;
+        for (const c of list) next = run(next, c);
+        const label = list.length ? list[list.length - 1].def.label(list[list.length - 1].args, g.origin) : g.label;
+        if (next === get().sketch) return;
+        set((d) => {
+          d.sketch = next;
+          d.revision += 1;
+          if (d.gesture) d.gesture.label = label;
+        });
+      },
+
+      endGesture: () => {
+        const s = get();
+        const g = s.gesture;
+        if (!g) return;
+        set((d) => {
+          d.gesture = null;
+          if (s.sketch === g.origin) return;
+          d.past.push({ label: g.label, before: g.origin, after: s.sketch, selectionBefore: g.selection, selectionAfter: s.selection });
+          if (d.past.length > HISTORY_LIMIT) d.past.splice(0, d.past.length - HISTORY_LIMIT);
+          d.future = [];
+        });
+      },
+
+      cancelGesture: () => {
+        const g = get().gesture;
+        if (!g) return;
+        set((d) => {
+          const changed = d.sketch !== g.origin;
+          d.sketch = g.origin;
+          d.selection = g.selection;
+          d.gesture = null;
+          if (changed) d.revision += 1;
+        });
+      },
+
+      select: (ids, mode = "replace") => {
+        const s = get();
+        const valid = ids.filter((id) => findElement(s.sketch, id));
+        let next: string[];
+        if (mode === "replace") next = valid;
+        else if (mode === "add") next = [...new Set([...s.selection, ...valid])];
+        else {
+          const cur = new Set(s.selection);
+          for (const id of valid) {
+            if (cur.has(id)) cur.delete(id);
+            else cur.add(id);
+          }
+          next = [...cur];
+        }
+        if (next.length === s.selection.length && next.every((id, i) => id === s.selection[i])) return;
+        set((d) => {
+          d.selection = next;
+        });
+      },
+
+      setTool: (tool) =>
+        set((d) => {
+          d.tool = tool as never;
+        }),
+      setView: (view) =>
+        set((d) => {
+          d.view = view;
+        }),
+      setUnits: (units) =>
+        set((d) => {
+          d.units = units;
+        }),
+      setSnap: (on) =>
+        set((d) => {
+          d.snap = on;
+        }),
+      setMomentPoint: (p) =>
+        set((d) => {
+          d.momentPoint = p;
+        }),
+      notify: (text) =>
+        set((d) => {
+          d.notice = text;
+        }),
+      setViewport: (size) =>
+        set((d) => {
+          d.viewport = size;
+        }),
+      reset: (sketch) =>
+        set((d) => {
+          d.sketch = sketch;
+          d.selection = [];
+          d.past = [];
+          d.future = [];
+          d.gesture = null;
+          d.tool = { kind: "select" };
+          d.momentPoint = null;
+          d.revision += 1;
+        }),
+    })),
+  );
+}

@@ -1,0 +1,216 @@
+"use client";
+// The sketch editor: the tray and element list on the left, the canvas in the middle with the
+// results under it, properties and parameters on the right. The sketch is loaded from and kept
+// by a SketchPersistence (local storage for the scratch sketch; the versions API later).
+import dynamic from "next/dynamic";
+import Link from "next/link";
+import { useCallback, useEffect, useRef, useState } from "react";
+import { EditorProvider, useEditor, useStores } from "@/canvas/context";
+import { createEditorStore, type EditorStore } from "@/canvas/store";
+import { createInteractionStore } from "@/canvas/konva/interaction";
+import type { PointerController } from "@/canvas/konva/pointer";
+import type { ActionContext } from "@/canvas/actions";
+import type { SketchPersistence } from "@/canvas/persistence";
+import { exampleById } from "@/canvas/examples";
+import { emptySketch } from "@/canvas/model/elements";
+import { replaceSketch } from "@/canvas/commands/fields";
+import type { Command } from "@/canvas/commands/define";
+import type { UnitSystem } from "@/solver/units";
+import { ResultsDock } from "@/components/results/ResultsDock";
+import { ImportErrorDialog } from "./ImportErrorDialog";
+import { Outline } from "./Outline";
+import { PropertiesPanel } from "./PropertiesPanel";
+import { Toolbar } from "./Toolbar";
+import { Tray } from "./Tray";
+import { ActionContextCtx } from "./useActions";
+import { useFileOps } from "./useFileOps";
+import { useShortcuts } from "./useShortcuts";
+
+const SketchCanvas = dynamic(() => import("@/canvas/konva/SketchCanvas"), {
+  ssr: false,
+  loading: () => <div className="flex h-full items-center justify-center text-sm text-ink-faint">Preparing the drawing…</div>,
+});
+
+const UNITS_KEY = "counterpoise:units";
+
+function StatusLine() {
+  const notice = useEditor((s) => s.notice);
+  const tool = useEditor((s) => s.tool.kind);
+  const hint =
+    tool === "select"
+      ? "Drag to move · handles turn and reshape · Shift+click adds to the selection · Alt: no snapping · Space+drag or middle button: pan · wheel: zoom"
+      : "Esc: back to selecting · Alt: no snapping";
+  return (
+    <div className="flex h-7 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px]" id="canvas-help">
+      <p className="truncate text-ink-soft" aria-live="polite" data-testid="notice">
+        {notice}
+      </p>
+      <p className="ml-auto truncate text-ink-faint">{hint}</p>
+    </div>
+  );
+}
+
+function Workspace({ persistence, saved }: { persistence: SketchPersistence; saved: string | null }) {
+  const stores = useStores();
+  const [interaction] = useState(createInteractionStore);
+  const controllerRef = useRef<PointerController | null>(null);
+  const setController = useCallback((c: PointerController | null) => {
+    controllerRef.current = c;
+  }, []);
+  const inputRef = useRef<HTMLInputElement>(null);
+  const files = useFileOps(stores, inputRef);
+  const filesRef = useRef(files);
+  useEffect(() => {
+    filesRef.current = files;
+  });
+
+  const getCtx = useCallback(
+    (): ActionContext => ({
+      stores,
+      controller: controllerRef.current,
+      ui: {
+        openImport: () => filesRef.current.openImport(),
+        exportJson: () => filesRef.current.exportJson(),
+        exportSvg: () => filesRef.current.exportSvg(),
+        exportPng: () => void filesRef.current.exportPng(),
+        newSketch: () => {
+          stores.editor.getState().apply(replaceSketch({ sketch: emptySketch(), label: "New sketch" }) as Command<unknown>);
+          stores.editor.getState().notify("A new, empty sketch. Undo brings the previous one back.");
+        },
+        save: () => {
+          void persistence.save(stores.editor.getState().sketch);
+          stores.editor.getState().notify(persistence.kind === "scratch" ? "Kept in this browser. Sign in to save it to a workspace." : "Saving…");
+        },
+      },
+    }),
+    [stores, persistence],
+  );
+  useShortcuts(getCtx, interaction);
+
+  const openExample = (id: string) => {
+    const ex = exampleById(id);
+    if (!ex) return;
+    const s = stores.editor.getState();
+    s.apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
+    s.notify(`${ex.title}: ${ex.summary} Undo returns to your sketch.`);
+    files.fit();
+  };
+
+  return (
+    <ActionContextCtx.Provider value={getCtx}>
+      <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
+        <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} />
+        <div className="flex min-h-0 flex-1">
+          <aside className="flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper" aria-label="Add and elements">
+            <Tray />
+            <Outline />
+          </aside>
+          <main className="flex min-w-0 flex-1 flex-col" aria-label="Drawing and results">
+            <div className="relative min-h-0 flex-1">
+              <SketchCanvas interaction={interaction} onController={setController} />
+            </div>
+            <StatusLine />
+            <ResultsDock />
+          </main>
+          <aside className="w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper" aria-label="Properties and parameters">
+            <PropertiesPanel />
+          </aside>
+        </div>
+        <input ref={inputRef} type="file" accept=".json,application/json" className="hidden" aria-label="Import a sketch file" data-testid="import-input" onChange={(e) => void files.onFile(e.target.files?.[0])} />
+        {files.problem && <ImportErrorDialog problem={files.problem} onClose={files.clearProblem} />}
+      </div>
+    </ActionContextCtx.Provider>
+  );
+}
+
+function useAutosave(store: EditorStore, persistence: SketchPersistence, ready: boolean) {
+  const [saved, setSaved] = useState<string | null>(null);
+  useEffect(() => {
+    if (!ready || !persistence.autosave) return;
+    let timer: ReturnType<typeof setTimeout> | null = null;
+    const flush = () => {
+      timer = null;
+      void persistence.save(store.getState().sketch).then((out) => {
+        if (out.ok) setSaved(new Date(out.savedAt).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit", second: "2-digit" }));
+      });
+    };
+    const unsub = store.subscribe((s, p) => {
+      if (s.revision === p.revision || s.gesture) return;
+      if (timer) clearTimeout(timer);
+      timer = setTimeout(flush, 350);
+    });
+    const hide = () => {
+      if (timer) {
+        clearTimeout(timer);
+        flush();
+      }
+    };
+    window.addEventListener("pagehide", hide);
+    return () => {
+      unsub();
+      window.removeEventListener("pagehide", hide);
+      hide();
+    };
+  }, [store, persistence, ready]);
+  return saved;
+}
+
+export function SketchUnavailable({ message }: { message: string }) {
+  return (
+    <div className="drafting-grid flex min-h-screen items-center justify-center px-6">
+      <div className="max-w-md rounded-lg border border-rule bg-paper-card p-6 shadow-[0_1px_0_#cfc8b8]">
+        <h1 className="text-lg font-semibold">This sketch cannot be opened</h1>
+        <p className="mt-2 text-[14px] leading-relaxed text-ink-soft" data-testid="unavailable-message">
+          {message}
+        </p>
+        <div className="mt-5 flex gap-3 text-sm">
+          <Link href="/sign-in" className="rounded-md bg-ink px-3.5 py-1.5 font-medium text-paper hover:bg-ink-soft">
+            Sign in
+          </Link>
+          <Link href="/sketches/new" className="rounded-md border border-ink/20 px-3.5 py-1.5 font-medium hover:border-ink/40">
+            Open a scratch sketch
+          </Link>
+        </div>
+      </div>
+    </div>
+  );
+}
+
+export function Editor({ persistence, example }: { persistence: SketchPersistence; example?: string }) {
+  const [store] = useState(() => createEditorStore());
+  const [phase, setPhase] = useState<{ kind: "loading" } | { kind: "ready" } | { kind: "failed"; message: string }>({ kind: "loading" });
+  const saved = useAutosave(store, persistence, phase.kind === "ready");
+
+  useEffect(() => {
+    let live = true;
+    const units = window.localStorage.getItem(UNITS_KEY);
+    if (units === "US" || units === "SI") store.getState().setUnits(units as UnitSystem);
+    const unsub = store.subscribe((s, p) => {
+      if (s.units !== p.units) window.localStorage.setItem(UNITS_KEY, s.units);
+    });
+    void persistence.load().then((out) => {
+      if (!live) return;
+      if (!out.ok && out.reason !== "invalid") {
+        setPhase({ kind: "failed", message: out.message });
+        return;
+      }
+      const ex = example ? exampleById(example) : undefined;
+      if (ex) store.getState().reset(ex.sketch);
+      else if (out.ok && out.sketch) store.getState().reset(out.sketch);
+      if (!out.ok) store.getState().notify(out.message);
+      setPhase({ kind: "ready" });
+    });
+    return () => {
+      live = false;
+      unsub();
+    };
+  }, [persistence, store, example]);
+
+  if (phase.kind === "failed") return <SketchUnavailable message={phase.message} />;
+  if (phase.kind === "loading") return <div className="flex min-h-screen items-center justify-center text-sm text-ink-faint">Opening the sketch…</div>;
+  return (
+    <EditorProvider editor={store}>
+      <Workspace persistence={persistence} saved={saved} />
+    </EditorProvider>
+  );
+}

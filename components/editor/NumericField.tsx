@@ -1,0 +1,100 @@
+"use client";
+// One numeric field: takes a number or an expression with units ("350 psi", "2*r", "theta + 5 deg"),
+// stores it as typed, and shows under it the value the solver's parser found — or its error.
+import { useId, useRef, useState } from "react";
+import type { Numeric } from "@/solver/schema";
+import { formatNumber, formatQuantity } from "@/solver/units";
+import { useAnalysis, useEditor } from "@/canvas/context";
+import { numericText, toNumeric } from "@/canvas/model/numeric";
+import type { Display } from "./fieldDefs";
+import { INPUT } from "./ui";
+
+let session = 0;
+
+export interface NumericFieldProps {
+  /** key of the value in the analysis: `${elementId}.${path}` or a top-level path like "gravity" */
+  valueKey: string;
+  label: string;
+  value: Numeric | undefined;
+  display: Display;
+  optional?: boolean;
+  example?: string;
+  hint?: string;
+  /** store the typed value; returns an error to show (and nothing is stored) or null */
+  onCommit: (value: Numeric | undefined, coalesce: string) => string | null;
+  /** visually compact (the x / y pair of a point) */
+  compact?: boolean;
+  testId?: string;
+}
+
+export function formatDisplay(v: number, display: Display, units: "SI" | "US"): string {
+  if (display === "rotationalStiffness") return `${formatNumber(v)} N·m/rad`;
+  if (display === "ratio") return formatNumber(v);
+  return formatQuantity(v, display, units);
+}
+
+export function NumericField({ valueKey, label, value, display, optional, example, hint, onCommit, compact, testId }: NumericFieldProps) {
+  const id = useId();
+  const [draft, setDraft] = useState<string | null>(null);
+  const [localError, setLocalError] = useState<string | null>(null);
+  const sessionRef = useRef(0);
+  const units = useEditor((s) => s.units);
+  const evaluated = useAnalysis((s) => s.fieldValues.values.get(valueKey));
+  const evalError = useAnalysis((s) => s.fieldValues.errors.get(valueKey));
+  const text = draft ?? numericText(value);
+  const error = localError ?? (text.trim() ? evalError : undefined);
+  const describedBy = `${id}-value`;
+
+  const change = (t: string) => {
+    setDraft(t);
+    const v = toNumeric(t);
+    if (v === undefined && !optional) {
+      setLocalError("is required: give a number or an expression");
+      return;
+    }
+    setLocalError(onCommit(v, `${valueKey}#${sessionRef.current}`));
+  };
+
+  let line: string;
+  if (error) line = error;
+  else if (!text.trim()) line = hint ?? (optional ? "not given" : "");
+  else if (evaluated !== undefined) line = `= ${formatDisplay(evaluated, display, units)}`;
+  else line = "";
+
+  return (
+    <div className={compact ? "min-w-0 flex-1" : ""}>
+      <label htmlFor={id} className={compact ? "sr-only" : "mb-0.5 block text-[12px] font-medium text-ink-soft"}>
+        {label}
+      </label>
+      <div className="relative">
+        {compact && <span className="pointer-events-none absolute left-2 top-1/2 -translate-y-1/2 text-[11px] text-ink-faint" aria-hidden="true">{label.slice(-1)}</span>}
+        <input
+          id={id}
+          className={`${INPUT} ${compact ? "pl-5" : ""}`}
+          value={text}
+          placeholder={example ? `e.g. ${example}` : undefined}
+          spellCheck={false}
+          autoComplete="off"
+          aria-invalid={!!error}
+          aria-describedby={describedBy}
+          data-testid={testId}
+          onFocus={() => {
+            sessionRef.current = ++session;
+            setDraft(numericText(value));
+          }}
+          onBlur={() => {
+            setDraft(null);
+            setLocalError(null);
+          }}
+          onChange={(e) => change(e.target.value)}
+          onKeyDown={(e) => {
+            if (e.key === "Enter" || e.key === "Escape") (e.target as HTMLInputElement).blur();
+          }}
+        />
+      </div>
+      <p id={describedBy} className={`mt-0.5 min-h-[15px] text-[11px] leading-snug ${error ? "text-caution" : "num text-ink-faint"}`} aria-live="polite">
+        {error ? `⚠ ${line}` : line}
+      </p>
+    </div>
+  );
+}

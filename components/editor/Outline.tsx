@@ -1,0 +1,94 @@
+"use client";
+// "Elements": every element, grouped under its body, for selecting and editing without a mouse.
+// Up/Down move between rows, Enter or Space selects (Shift or Ctrl adds), Delete deletes.
+import { useRef, type KeyboardEvent } from "react";
+import { useShallow } from "zustand/react/shallow";
+import { useEditor, useStores } from "@/canvas/context";
+import { allElements, KIND_LABEL, type Attached, type Located } from "@/canvas/model/elements";
+import { SymbolIcon } from "./SymbolIcon";
+import { useActionRunner } from "./useActions";
+import { HEADING } from "./ui";
+
+interface Row {
+  l: Located;
+  depth: number;
+}
+
+function rowsOf(list: Located[]): Row[] {
+  const rows: Row[] = [];
+  const bodies = list.filter((l) => l.group === "bodies");
+  const ids = new Set(bodies.map((b) => b.el.id));
+  for (const b of bodies) {
+    rows.push({ l: b, depth: 0 });
+    for (const c of list) if (c.group !== "bodies" && (c.el as Attached).body === b.el.id) rows.push({ l: c, depth: 1 });
+  }
+  for (const c of list) if (c.group !== "bodies" && !ids.has((c.el as Attached).body)) rows.push({ l: c, depth: 0 });
+  return rows;
+}
+
+export function Outline() {
+  const { editor } = useStores();
+  const list = useEditor(useShallow((s) => allElements(s.sketch)));
+  const selection = useEditor((s) => s.selection);
+  const run = useActionRunner();
+  const listRef = useRef<HTMLUListElement>(null);
+  const rows = rowsOf(list);
+  const focusIndex = Math.max(0, rows.findIndex((r) => selection.includes(r.l.el.id)));
+
+  const onKey = (e: KeyboardEvent<HTMLButtonElement>, i: number) => {
+    const buttons = listRef.current?.querySelectorAll<HTMLButtonElement>("button[data-row]");
+    if (!buttons) return;
+    let next = -1;
+    if (e.key === "ArrowDown") next = Math.min(rows.length - 1, i + 1);
+    else if (e.key === "ArrowUp") next = Math.max(0, i - 1);
+    else if (e.key === "Home") next = 0;
+    else if (e.key === "End") next = rows.length - 1;
+    else if (e.key === "Delete" || e.key === "Backspace") {
+      e.preventDefault();
+      run("edit.delete");
+      return;
+    }
+    if (next >= 0) {
+      e.preventDefault();
+      buttons[next]?.focus();
+    }
+  };
+
+  return (
+    <section aria-labelledby="outline-heading" className="flex min-h-0 flex-1 flex-col px-3 pb-2 pt-2">
+      <h2 id="outline-heading" className={HEADING}>
+        Elements <span className="num font-normal normal-case tracking-normal">({rows.length})</span>
+      </h2>
+      {rows.length === 0 ? (
+        <p className="mt-2 text-[12px] leading-snug text-ink-faint">Nothing drawn yet. Start with a body from “Add”, or open an example.</p>
+      ) : (
+        <ul ref={listRef} className="mt-1 min-h-0 flex-1 overflow-auto pr-1" aria-label="Elements of the sketch">
+          {rows.map((r, i) => {
+            const { l } = r;
+            const selected = selection.includes(l.el.id);
+            return (
+              <li key={l.el.id}>
+                <button
+                  type="button"
+                  data-row
+                  tabIndex={i === focusIndex ? 0 : -1}
+                  aria-pressed={selected}
+                  aria-label={`${KIND_LABEL[l.kind]} ${l.el.id}${l.el.label ? `, ${l.el.label}` : ""}`}
+                  onKeyDown={(e) => onKey(e, i)}
+                  onClick={(e) => editor.getState().select([l.el.id], e.shiftKey || e.ctrlKey || e.metaKey ? "toggle" : "replace")}
+                  className={`flex w-full items-center gap-1.5 rounded px-1.5 py-[3px] text-left text-[12.5px] ${r.depth ? "pl-5" : ""} ${
+                    selected ? "bg-accent-soft text-accent-deep" : "text-ink-soft hover:bg-paper-deep"
+                  }`}
+                >
+                  <SymbolIcon kind={l.kind} friction={l.kind === "contact" && (l.el as { mu?: unknown }).mu !== undefined} size={16} />
+                  <span className="num shrink-0 text-ink-faint">{l.el.id}</span>
+                  <span className="truncate">{l.el.label || KIND_LABEL[l.kind]}</span>
+                </button>
+              </li>
+            );
+          })}
+        </ul>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,53 @@
+"use client";
+// "Properties": the form of the selected element, the sketch's own fields when nothing is
+// selected, or what to do with several selected elements.
+import { useEditor } from "@/canvas/context";
+import { findElement, KIND_LABEL } from "@/canvas/model/elements";
+import { ElementForm } from "./ElementForm";
+import { ParametersTable } from "./ParametersTable";
+import { SketchForm } from "./SketchForm";
+import { useActionRunner } from "./useActions";
+import { BUTTON, HEADING } from "./ui";
+
+function Several() {
+  const selection = useEditor((s) => s.selection);
+  const sketch = useEditor((s) => s.sketch);
+  const run = useActionRunner();
+  return (
+    <div className="space-y-2">
+      <p className="text-[13px] font-semibold text-ink">{selection.length} elements selected</p>
+      <ul className="num max-h-40 overflow-auto text-[12px] text-ink-soft">
+        {selection.map((id) => {
+          const l = findElement(sketch, id);
+          return <li key={id}>{l ? `${KIND_LABEL[l.kind]} ${id}${l.el.label ? ` — ${l.el.label}` : ""}` : id}</li>;
+        })}
+      </ul>
+      <p className="text-[11.5px] text-ink-faint">Drag any of them to move them together; arrow keys nudge.</p>
+      <div className="flex gap-1.5">
+        <button type="button" className={BUTTON} onClick={() => run("edit.duplicate")}>
+          Duplicate
+        </button>
+        <button type="button" className={BUTTON} onClick={() => run("edit.delete")}>
+          Delete
+        </button>
+      </div>
+    </div>
+  );
+}
+
+export function PropertiesPanel() {
+  const selection = useEditor((s) => s.selection);
+  return (
+    <div className="flex h-full flex-col">
+      <section aria-labelledby="props-heading" className="border-b border-rule px-3 pb-3 pt-2">
+        <h2 id="props-heading" className={`${HEADING} mb-2`}>
+          Properties
+        </h2>
+        {selection.length === 0 ? <SketchForm /> : selection.length === 1 ? <ElementForm key={selection[0]} id={selection[0]} /> : <Several />}
+      </section>
+      <div className="px-3 pb-4 pt-2">
+        <ParametersTable />
+      </div>
+    </div>
+  );
+}

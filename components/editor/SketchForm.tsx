@@ -1,0 +1,59 @@
+"use client";
+// Properties of the sketch itself (nothing selected): title, notes, gravity and motion.
+import type { Numeric } from "@/solver/schema";
+import { useEditor, useStores } from "@/canvas/context";
+import { setMotion, setSketchField } from "@/canvas/commands/fields";
+import type { Command } from "@/canvas/commands/define";
+import { NumericField } from "./NumericField";
+import { TextField } from "./TextField";
+
+export function SketchForm() {
+  const { editor } = useStores();
+  const title = useEditor((s) => s.sketch.title);
+  const description = useEditor((s) => s.sketch.description);
+  const gravity = useEditor((s) => s.sketch.gravity);
+  const motion = useEditor((s) => s.sketch.motion);
+  const apply = (c: Command<unknown>, coalesce?: string) => editor.getState().apply(c, coalesce ? { coalesce } : undefined);
+  const setMotionField = (k: "ax" | "ay" | "freeX", v: Numeric | boolean | undefined, c?: string) => {
+    apply(setMotion({ motion: { ...(motion ?? {}), [k]: v } }) as Command<unknown>, c);
+    return null;
+  };
+  return (
+    <div className="space-y-2.5" data-testid="sketch-form">
+      <p className="text-[13px] font-semibold text-ink">Sketch</p>
+      <p className="text-[12px] leading-snug text-ink-faint">Nothing selected. Pick an element on the drawing or in the list to edit it.</p>
+      <TextField label="Title" value={title} maxLength={300} onCommit={(v, c) => apply(setSketchField({ field: "title", value: v || undefined }) as Command<unknown>, c)} />
+      <TextField label="Notes" value={description} multiline maxLength={5000} onCommit={(v, c) => apply(setSketchField({ field: "description", value: v || undefined }) as Command<unknown>, c)} />
+      <NumericField
+        valueKey="gravity"
+        label="Gravity"
+        value={gravity}
+        display="acceleration"
+        optional
+        example="9.80665"
+        hint="Blank: standard gravity 9.807 m/s², acting in −y. 0 turns weights off (a plan view)."
+        testId="field-gravity"
+        onCommit={(v, c) => {
+          apply(setSketchField({ field: "gravity", value: v }) as Command<unknown>, c);
+          return null;
+        }}
+      />
+      <fieldset className="rounded border border-rule-soft px-2 pb-2 pt-1">
+        <legend className="px-1 text-[12px] font-medium text-ink-soft">Motion of the body</legend>
+        <p className="mb-1.5 text-[11.5px] leading-snug text-ink-faint">A prescribed acceleration (the inertial force −m·a acts at the centre of gravity), or free to move in x.</p>
+        <div className="flex gap-2">
+          <div className="flex-1">
+            <NumericField valueKey="motion.ax" label="ax" value={motion?.ax} display="acceleration" optional example="0.5 m/s^2" onCommit={(v, c) => setMotionField("ax", v, c)} />
+          </div>
+          <div className="flex-1">
+            <NumericField valueKey="motion.ay" label="ay" value={motion?.ay} display="acceleration" optional example="0" onCommit={(v, c) => setMotionField("ay", v, c)} />
+          </div>
+        </div>
+        <label className="mt-1 flex items-center gap-2 text-[12px] text-ink-soft">
+          <input type="checkbox" className="accent-accent" checked={motion?.freeX === true} onChange={(e) => setMotionField("freeX", e.target.checked || undefined)} />
+          Free to move in x (find ax)
+        </label>
+      </fieldset>
+    </div>
+  );
+}

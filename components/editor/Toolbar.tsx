@@ -1,0 +1,106 @@
+"use client";
+// The editor's header: the sketch's name and where it is kept, File and Examples menus, undo
+// and redo, the view, snapping and the SI / US switch. Every button runs a registered action.
+import Link from "next/link";
+import { ACTIONS, shortcutLabel } from "@/canvas/actions";
+import { useEditor } from "@/canvas/context";
+import { EXAMPLES } from "@/canvas/examples";
+import { Menu, type MenuItem } from "./Menu";
+import { useActionRunner } from "./useActions";
+import { ICON_BUTTON } from "./ui";
+
+function menuItems(ids: string[], run: (id: string) => boolean): MenuItem[] {
+  return ids.map((id) => {
+    const a = ACTIONS.find((x) => x.id === id)!;
+    return { id, label: a.label, shortcut: a.shortcuts?.[0] ? shortcutLabel(a.shortcuts[0]) : undefined, onSelect: () => run(id) };
+  });
+}
+
+export function UnitSwitch() {
+  const units = useEditor((s) => s.units);
+  const run = useActionRunner();
+  return (
+    <div role="radiogroup" aria-label="Units shown" className="flex h-7 items-center rounded border border-rule bg-paper-card p-0.5 text-[12px]" data-testid="units">
+      {(["SI", "US"] as const).map((u) => (
+        <button
+          key={u}
+          type="button"
+          role="radio"
+          aria-checked={units === u}
+          title={u === "SI" ? "SI units (kN, m, kPa)" : "US customary units (lbf, ft, psi)"}
+          onClick={() => units !== u && run("view.units")}
+          className={`h-6 rounded-[3px] px-2 font-medium ${units === u ? "bg-ink text-paper" : "text-ink-soft hover:text-ink"}`}
+        >
+          {u}
+        </button>
+      ))}
+    </div>
+  );
+}
+
+export function Toolbar({ where, saved, onOpenExample }: { where: string; saved: string | null; onOpenExample: (id: string) => void }) {
+  const run = useActionRunner();
+  const canUndo = useEditor((s) => s.past.length > 0);
+  const canRedo = useEditor((s) => s.future.length > 0);
+  const undoLabel = useEditor((s) => s.past[s.past.length - 1]?.label);
+  const redoLabel = useEditor((s) => s.future[s.future.length - 1]?.label);
+  const title = useEditor((s) => s.sketch.title);
+  const scale = useEditor((s) => s.view.scale);
+  const snap = useEditor((s) => s.snap);
+  return (
+    <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3">
+      <Link href="/" className="mr-2 flex items-center gap-1.5 text-ink" aria-label="Counterpoise home">
+        <svg width="22" height="22" viewBox="0 0 28 28" aria-hidden="true">
+          <path d="M3 13h22" stroke="currentColor" strokeWidth="2.2" strokeLinecap="round" />
+          <path d="M14 14l-4 7h8z" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinejoin="round" />
+          <path d="M7 21h14" stroke="currentColor" strokeWidth="1.2" />
+          <rect x="19" y="6.5" width="5" height="5" fill="#b4462b" rx="0.5" />
+          <path d="M8 10V4.5M8 4.5l-2 2.3M8 4.5l2 2.3" stroke="#1f5f7a" strokeWidth="1.5" fill="none" strokeLinecap="round" />
+        </svg>
+      </Link>
+      <div className="mr-3 min-w-0 max-w-[22rem]">
+        <p className="truncate text-[13.5px] font-semibold leading-tight text-ink" data-testid="sketch-title">
+          {title || "Untitled sketch"}
+        </p>
+        <p className="truncate text-[11px] leading-tight text-ink-faint" aria-live="polite">
+          {where}
+          {saved ? ` · saved ${saved}` : ""}
+        </p>
+      </div>
+      <Menu label="File" testId="menu-file" items={menuItems(["file.new", "file.import", "file.exportJson", "file.exportSvg", "file.exportPng"], run)} />
+      <Menu
+        label="Open an example"
+        testId="menu-examples"
+        wide
+        items={EXAMPLES.map((e) => ({ id: `example-${e.id}`, label: e.title, detail: e.summary, onSelect: () => onOpenExample(e.id) }))}
+      />
+      <div className="mx-2 h-5 w-px bg-rule" aria-hidden="true" />
+      <button type="button" className={ICON_BUTTON} disabled={!canUndo} onClick={() => run("edit.undo")} title={canUndo ? `Undo: ${undoLabel} (${shortcutLabel("Mod+Z")})` : "Nothing to undo"} aria-label="Undo" data-testid="undo">
+        <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true"><path d="M5 4L2 7l3 3M2.5 7H10a3.5 3.5 0 010 7H7" fill="none" stroke="currentColor" strokeWidth="1.5" strokeLinecap="round" strokeLinejoin="round" /></svg>
+      </button>
+      <button type="button" className={ICON_BUTTON} disabled={!canRedo} onClick={() => run("edit.redo")} title={canRedo ? `Redo: ${redoLabel} (${shortcutLabel("Shift+Mod+Z")})` : "Nothing to redo"} aria-label="Redo" data-testid="redo">
+        <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true"><path d="M11 4l3 3-3 3M13.5 7H6a3.5 3.5 0 000 7h3" fill="none" stroke="currentColor" strokeWidth="1.5" strokeLinecap="round" strokeLinejoin="round" /></svg>
+      </button>
+      <div className="flex-1" />
+      <button type="button" className={ICON_BUTTON} onClick={() => run("view.zoomOut")} aria-label="Zoom out" title="Zoom out (−)">
+        −
+      </button>
+      <span className="num w-16 text-center text-[11.5px] text-ink-faint" title="Drawing scale" aria-label="Drawing scale">
+        {scale >= 100 ? `${Math.round(scale)} px/m` : `${scale.toFixed(1)} px/m`}
+      </span>
+      <button type="button" className={ICON_BUTTON} onClick={() => run("view.zoomIn")} aria-label="Zoom in" title="Zoom in (+)">
+        +
+      </button>
+      <button type="button" className={`${ICON_BUTTON} text-[12px]`} onClick={() => run("view.fit")} title="Fit to view (F)">
+        Fit
+      </button>
+      <label className="ml-2 flex items-center gap-1.5 text-[12px] text-ink-soft" title="Snap to the grid and to body corners and edges (hold Alt to place freely)">
+        <input type="checkbox" checked={snap} onChange={() => run("view.snap")} className="accent-accent" />
+        Snap
+      </label>
+      <div className="ml-3">
+        <UnitSwitch />
+      </div>
+    </header>
+  );
+}

@@ -1,0 +1,79 @@
+"use client";
+// "Add": the element kinds, drawn with their symbols. Click to choose the tool (then click on the
+// canvas), or drag one onto the canvas. Generated from the registered actions.
+import { ACTIONS, shortcutLabel, type Action } from "@/canvas/actions";
+import { TRAY_MIME } from "@/canvas/konva/interaction";
+import { useEditor } from "@/canvas/context";
+import { SymbolIcon } from "./SymbolIcon";
+import { useActionRunner } from "./useActions";
+import { HEADING } from "./ui";
+
+const SECTIONS: Array<{ title: string; ids: string[] }> = [
+  { title: "Body", ids: ["add.body", "add.polygon"] },
+  { title: "Supports", ids: ["add.pin", "add.roller", "add.contact", "add.contact-friction", "add.fixed", "add.tie"] },
+  { title: "Loads", ids: ["add.force", "add.couple", "add.distributed"] },
+  { title: "Flow", ids: ["add.inlet", "add.outlet", "add.massSource"] },
+];
+
+function isActive(a: Action, tool: ReturnType<typeof useToolKey>) {
+  if (a.id === "add.body") return tool === "body:rectangle";
+  if (a.id === "add.polygon") return tool === "body:polygon";
+  return tool === `place:${a.kind}${a.friction ? ":f" : ""}`;
+}
+
+function useToolKey() {
+  return useEditor((s) => {
+    const t = s.tool;
+    if (t.kind === "body") return `body:${t.shape}`;
+    if (t.kind === "place") return `place:${t.element}${t.friction ? ":f" : ""}`;
+    return t.kind;
+  });
+}
+
+export function Tray() {
+  const run = useActionRunner();
+  const tool = useToolKey();
+  const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
+  return (
+    <section aria-labelledby="tray-heading" className="border-b border-rule px-3 pb-3 pt-2">
+      <h2 id="tray-heading" className={HEADING}>
+        Add
+      </h2>
+      {SECTIONS.map((sec) => (
+        <div key={sec.title} className="mt-2">
+          <p className="mb-1 text-[10.5px] font-medium uppercase tracking-wider text-ink-faint">{sec.title}</p>
+          <div className="grid grid-cols-3 gap-1">
+            {sec.ids.map((id) => {
+              const a = ACTIONS.find((x) => x.id === id)!;
+              const disabled = a.kind !== "body" && !hasBody;
+              const active = isActive(a, tool);
+              const key = a.shortcuts?.[0];
+              return (
+                <button
+                  key={id}
+                  type="button"
+                  aria-pressed={active}
+                  aria-disabled={disabled}
+                  title={`${a.label}${key ? ` (${shortcutLabel(key)})` : ""} — ${disabled ? "draw a body first" : a.hint}`}
+                  draggable={!disabled}
+                  onDragStart={(e) => {
+                    e.dataTransfer.setData(TRAY_MIME, JSON.stringify({ kind: a.kind, friction: a.friction }));
+                    e.dataTransfer.effectAllowed = "copy";
+                  }}
+                  onClick={() => (disabled ? undefined : run(a.id))}
+                  className={`group flex h-[58px] flex-col items-center justify-center gap-0.5 rounded border text-center text-[10.5px] leading-tight transition-colors ${
+                    active ? "border-accent bg-accent-soft text-accent-deep" : "border-transparent text-ink-soft hover:border-rule hover:bg-paper"
+                  } ${disabled ? "cursor-not-allowed opacity-40" : "cursor-grab"}`}
+                  data-testid={`tray-${id.slice(4)}`}
+                >
+                  <SymbolIcon kind={a.kind!} friction={a.friction} polygon={id === "add.polygon"} size={28} />
+                  <span>{a.label.replace("Body (", "").replace(")", "").replace("Contact with friction", "Contact, μ").replace("Distributed load", "Distributed").replace("Fixed support", "Fixed")}</span>
+                </button>
+              );
+            })}
+          </div>
+        </div>
+      ))}
+    </section>
+  );
+}

@@ -1,0 +1,86 @@
+// The properties form of each element kind: which fields, in what words, and in what quantity
+// their value is displayed. Field names are the file format's.
+import type { ElementKind } from "@/canvas/model/elements";
+import type { Quantity } from "@/solver/units";
+
+export type Display = Quantity | "rotationalStiffness";
+
+export interface NumberFieldDef {
+  key: string;
+  label: string;
+  /** what the value is, for showing it with a unit */
+  display: Display;
+  optional?: boolean;
+  /** placeholder text: an example of what to type */
+  example?: string;
+  hint?: string;
+  advanced?: boolean;
+}
+
+export interface PointFieldDef {
+  key: string;
+  label: string;
+  point: true;
+  optional?: boolean;
+  hint?: string;
+}
+
+export type FieldDef = NumberFieldDef | PointFieldDef;
+
+const at: PointFieldDef = { key: "at", label: "Position", point: true };
+const stiffness: NumberFieldDef = { key: "stiffness", label: "Stiffness", display: "stiffness", optional: true, example: "200 kN/m", hint: "Only matters when the supports are statically indeterminate.", advanced: true };
+const angle = (label: string, hint: string): NumberFieldDef => ({ key: "angle", label, display: "angle", example: "90 deg", hint });
+
+export const FORM: Record<ElementKind, FieldDef[]> = {
+  body: [
+    { key: "mass", label: "Mass", display: "mass", example: "850 kg", hint: "Everything inside the control volume, the fluid in it included." },
+    { key: "cg", label: "Centre of gravity", point: true, optional: true, hint: "Blank: the outline's centroid." },
+  ],
+  pin: [at, stiffness],
+  roller: [at, angle("Direction", "The line along which it holds (either way), degrees from +x."), stiffness],
+  contact: [
+    at,
+    angle("Pushes toward", "The direction the ground pushes on the body: 90 for level ground under it."),
+    { key: "mu", label: "Friction μ", display: "ratio", optional: true, example: "0.3", hint: "Blank: no friction." },
+    stiffness,
+  ],
+  fixed: [at, stiffness, { key: "rotationalStiffness", label: "Rotational stiffness", display: "rotationalStiffness", optional: true, example: "50 kN m", advanced: true }],
+  tie: [at, angle("Toward anchor", "The direction from the body to the anchor; a tie only pulls."), stiffness],
+  force: [at],
+  couple: [{ key: "value", label: "Moment", display: "moment", example: "1.2 kN m", hint: "Counter-clockwise positive." }, { key: "at", label: "Drawn at", point: true, optional: true }],
+  distributed: [
+    { key: "from", label: "From", point: true },
+    { key: "to", label: "To", point: true },
+    { key: "w1", label: "w₁ at from", display: "lineLoad", example: "2 kN/m" },
+    { key: "w2", label: "w₂ at to", display: "lineLoad", example: "2 kN/m" },
+    { key: "angle", label: "Direction", display: "angle", optional: true, example: "-90 deg", hint: "Blank: straight down (−90°)." },
+  ],
+  inlet: portFields("into the body"),
+  outlet: portFields("out of the body"),
+  massSource: [
+    { key: "massFlow", label: "Mass flow ṁ", display: "massFlow", example: "2 kg/s" },
+    { key: "at", label: "Drawn at", point: true, optional: true },
+  ],
+};
+
+function portFields(way: string): FieldDef[] {
+  return [
+    at,
+    { key: "angle", label: "Flow direction", display: "angle", example: "0 deg", hint: `Direction of the fluid velocity ${way}, degrees from +x.` },
+    { key: "massFlow", label: "Mass flow ṁ", display: "massFlow", optional: true, example: "14 kg/s" },
+    { key: "velocity", label: "Velocity V", display: "velocity", optional: true, example: "31 m/s" },
+    { key: "pressure", label: "Gauge pressure", display: "pressure", optional: true, example: "350 psi", hint: "Needs the area; pushes inward at inlets and outlets alike." },
+    { key: "area", label: "Area", display: "area", optional: true, example: "pi/4 * (50 mm)^2" },
+    { key: "density", label: "Density ρ", display: "density", optional: true, example: "998 kg/m^3" },
+    { key: "volumeFlow", label: "Volume flow", display: "volumeFlow", optional: true, example: "600 lpm" },
+  ];
+}
+
+export const FORCE_POLAR: NumberFieldDef[] = [
+  { key: "magnitude", label: "Magnitude", display: "force", example: "12 kN" },
+  { key: "angle", label: "Direction", display: "angle", example: "-90 deg", hint: "Degrees counter-clockwise from +x; −90 is straight down." },
+];
+export const FORCE_COMPONENTS: NumberFieldDef[] = [
+  { key: "fx", label: "Fx", display: "force", example: "0 N" },
+  { key: "fy", label: "Fy", display: "force", example: "-2 kN" },
+];

@@ -1,0 +1,82 @@
+"use client";
+// File work for the editor: import (a bad file changes nothing), export JSON, SVG and PNG.
+import { useCallback, useState, type RefObject } from "react";
+import type { EditorStores } from "@/canvas/context";
+import { download, exportSketchText, fileStem, importSketchText, svgToPng } from "@/canvas/files";
+import { renderSketchSvg } from "@/canvas/render/svg";
+import { replaceSketch } from "@/canvas/commands/fields";
+import type { Command } from "@/canvas/commands/define";
+import { fitScene } from "@/canvas/geometry/fit";
+import type { FieldError } from "@/solver/types";
+
+export interface ImportProblem {
+  file: string;
+  errors: FieldError[];
+}
+
+export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputElement | null>) {
+  const [problem, setProblem] = useState<ImportProblem | null>(null);
+
+  const fit = useCallback(() => {
+    // after React has drawn the new sketch's scene
+    requestAnimationFrame(() => {
+      const s = stores.editor.getState();
+      s.setView(fitScene(stores.scene.getState(), s.viewport.width, s.viewport.height));
+    });
+  }, [stores]);
+
+  const importText = useCallback(
+    (text: string, name: string) => {
+      const out = importSketchText(text);
+      if (!out.ok) {
+        setProblem({ file: name, errors: out.errors });
+        return false;
+      }
+      const s = stores.editor.getState();
+      s.apply(replaceSketch({ sketch: out.sketch, label: `Import ${name}` }) as Command<unknown>);
+      s.notify(out.migratedFrom.length ? `Opened ${name} (format version ${out.migratedFrom[0]}, brought up to date).` : `Opened ${name}.`);
+      fit();
+      return true;
+    },
+    [stores, fit],
+  );
+
+  const onFile = useCallback(
+    async (file: File | undefined) => {
+      if (!file) return;
+      if (file.size > 1_000_000) {
+        setProblem({ file: file.name, errors: [{ path: "", message: "The file is larger than 1 MB; a sketch file is much smaller than that." }] });
+        return;
+      }
+      importText(await file.text(), file.name);
+      if (inputRef.current) inputRef.current.value = "";
+    },
+    [importText, inputRef],
+  );
+
+  const svgNow = useCallback(() => {
+    const s = stores.editor.getState();
+    const a = stores.analysis.getState();
+    return renderSketchSvg(s.sketch, a.shown, { units: s.units, width: 1400, height: 900, stale: a.stale });
+  }, [stores]);
+
+  const stem = () => fileStem(stores.editor.getState().sketch.title);
+
+  return {
+    problem,
+    clearProblem: () => setProblem(null),
+    onFile,
+    importText,
+    fit,
+    openImport: () => inputRef.current?.click(),
+    exportJson: () => download(new Blob([exportSketchText(stores.editor.getState().sketch)], { type: "application/json" }), `${stem()}.counterpoise.json`),
+    exportSvg: () => download(new Blob([svgNow()], { type: "image/svg+xml" }), `${stem()}.svg`),
+    exportPng: async () => {
+      try {
+        download(await svgToPng(svgNow(), 1400, 900, 2), `${stem()}.png`);
+      } catch (err) {
+        stores.editor.getState().notify(`The PNG could not be made: ${(err as Error).message}`);
+      }
+    },
+  };
+}

@@ -1,0 +1,79 @@
+"use client";
+// The keyboard: registered actions by their shortcuts, plus the keys a drag or a drawing
+// needs (Escape cancels, Enter closes a polygon, Space held pans).
+import { useEffect } from "react";
+import { actionForKey, type ActionContext } from "@/canvas/actions";
+import type { InteractionStore } from "@/canvas/konva/interaction";
+
+function typingIn(target: EventTarget | null): boolean {
+  const el = target as HTMLElement | null;
+  if (!el || !el.tagName) return false;
+  const tag = el.tagName;
+  return tag === "INPUT" || tag === "TEXTAREA" || tag === "SELECT" || el.isContentEditable;
+}
+
+export function useShortcuts(getCtx: () => ActionContext, interaction: InteractionStore) {
+  useEffect(() => {
+    const down = (e: KeyboardEvent) => {
+      if (e.defaultPrevented || typingIn(e.target)) return;
+      const ctx = getCtx();
+      const s = ctx.stores.editor.getState();
+      if (e.key === "Escape") {
+        if (ctx.controller?.cancel()) {
+          e.preventDefault();
+          return;
+        }
+        if (s.selection.length) {
+          s.select([]);
+          e.preventDefault();
+        }
+        s.notify(null);
+        return;
+      }
+      if (s.tool.kind === "body" && s.tool.shape === "polygon") {
+        if (e.key === "Enter") {
+          e.preventDefault();
+          ctx.controller?.finishPolygon();
+          return;
+        }
+        if (e.key === "Backspace" || e.key === "Delete") {
+          e.preventDefault();
+          s.setTool({ ...s.tool, points: s.tool.points.slice(0, -1) });
+          return;
+        }
+      }
+      if (e.key === " " && !e.repeat) {
+        const active = document.activeElement as HTMLElement | null;
+        const onCanvas = !active || active === document.body || active.dataset.testid === "sketch-canvas";
+        if (onCanvas) {
+          e.preventDefault();
+          interaction.setState({ spaceHeld: true });
+          return;
+        }
+      }
+      // a focused button or link keeps Enter and Space; arrows belong to lists that handle them
+      const onControl = (e.target as HTMLElement | null)?.closest?.("button, a, [role=menu]");
+      if (onControl && (e.key === "Enter" || e.key === " " || e.key.startsWith("Arrow"))) return;
+      const action = actionForKey(e);
+      if (!action) return;
+      if (action.enabled && !action.enabled(ctx)) {
+        if (action.group === "edit") e.preventDefault();
+        return;
+      }
+      e.preventDefault();
+      action.run(ctx);
+    };
+    const up = (e: KeyboardEvent) => {
+      if (e.key === " ") interaction.setState({ spaceHeld: false });
+    };
+    const blur = () => interaction.setState({ spaceHeld: false });
+    window.addEventListener("keydown", down);
+    window.addEventListener("keyup", up);
+    window.addEventListener("blur", blur);
+    return () => {
+      window.removeEventListener("keydown", down);
+      window.removeEventListener("keyup", up);
+      window.removeEventListener("blur", blur);
+    };
+  }, [getCtx, interaction]);
+}

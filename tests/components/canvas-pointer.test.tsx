@@ -1,0 +1,168 @@
+// The canvas's pointer controller (jsdom, no Konva): a drag is one undo step and Escape rolls it
+// back; a support dropped on another body attaches to it; handles turn and reshape; tools place.
+import { afterEach, beforeEach, describe, expect, it } from "vitest";
+import type { SketchFile } from "@/solver/schema";
+import { createEditorStore } from "@/canvas/store";
+import { createAnalysisStore, linkAnalysis } from "@/canvas/analysis/store";
+import { createSceneStore, linkScene, type EditorStores } from "@/canvas/context";
+import { createInteractionStore } from "@/canvas/konva/interaction";
+import { createPointerController, type HitInfo } from "@/canvas/konva/pointer";
+import { emptySketch, findElement } from "@/canvas/model/elements";
+import { newBody } from "@/canvas/model/factory";
+
+function sketch(): SketchFile {
+  return {
+    ...emptySketch("Two crates"),
+    bodies: [newBody("b1", [[0, 0], [2, 0], [2, 1], [0, 1]], "Left"), newBody("b2", [[4, 0], [6, 0], [6, 1], [4, 1]], "Right")],
+    supports: [{ id: "s1", body: "b1", kind: "contact", at: [1, 0], angle: 90 }],
+    ports: [{ id: "p1", body: "b1", kind: "outlet", at: [2, 0.5], angle: 0, massFlow: 1, velocity: 1 }],
+  };
+}
+
+// view: 100 px per metre, world origin at screen (100, 500)
+const VIEW = { scale: 100, x: 100, y: 500 };
+const screenOf = (x: number, y: number) => ({ clientX: VIEW.x + x * VIEW.scale, clientY: VIEW.y - y * VIEW.scale });
+
+let stores: EditorStores;
+let stops: Array<() => void> = [];
+let hit: HitInfo | null = null;
+let controller: ReturnType<typeof createPointerController>;
+
+function pointer(type: "pointermove" | "pointerup", x: number, y: number, extra: Partial<PointerEventInit> = {}) {
+  window.dispatchEvent(new MouseEvent(type, { ...screenOf(x, y), bubbles: true, ...extra }));
+}
+function down(x: number, y: number, extra: { shiftKey?: boolean; altKey?: boolean } = {}) {
+  controller.down({ ...screenOf(x, y), button: 0, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, timeStamp: performance.now(), preventDefault() {}, ...extra } as unknown as PointerEvent);
+}
+
+beforeEach(() => {
+  const editor = createEditorStore({ sketch: sketch(), view: VIEW });
+  const analysis = createAnalysisStore();
+  const scene = createSceneStore(editor, analysis);
+  stops = [linkAnalysis(editor, analysis), linkScene(editor, analysis, scene)];
+  stores = { editor, analysis, scene };
+  hit = null;
+  controller = createPointerController({ stores, interaction: createInteractionStore(), container: () => null, hitTest: () => hit });
+});
+afterEach(() => {
+  controller.dispose();
+  stops.forEach((s) => s());
+});
+
+const ed = () => stores.editor.getState();
+const el = (id: string) => findElement(ed().sketch, id)?.el as unknown as Record<string, unknown>;
+
+describe("dragging", () => {
+  it("moves the element with the pointer, snapped, as one undo step", () => {
+    hit = { type: "element", id: "s1" };
+    down(1, 0);
+    expect(ed().selection).toEqual(["s1"]);
+    for (const x of [1.1, 1.25, 1.38, 1.52]) pointer("pointermove", x, 0);
+    pointer("pointerup", 1.52, 0);
+    // the grid at 100 px/m is 0.2 m; on the bottom edge the anchor stays on the edge
+    expect(el("s1").at).toEqual([1.6, 0]);
+    expect(ed().past).toHaveLength(1);
+    ed().undo();
+    expect(el("s1").at).toEqual([1, 0]);
+  });
+
+  it("rolls the drag back on Escape, recording nothing", () => {
+    hit = { type: "element", id: "s1" };
+    down(1, 0);
+    pointer("pointermove", 1.7, 0.4);
+    expect(el("s1").at).not.toEqual([1, 0]);
+    expect(controller.cancel()).toBe(true);
+    expect(el("s1").at).toEqual([1, 0]);
+    expect(ed().past).toHaveLength(0);
+    pointer("pointerup", 1.7, 0.4);
+    expect(ed().past).toHaveLength(0);
+  });
+
+  it("attaches a support dropped on another body to that body, in the same step", () => {
+    hit = { type: "element", id: "s1" };
+    down(1, 0);
+    pointer("pointermove", 5, 0);
+    pointer("pointerup", 5, 0);
+    expect(el("s1")).toMatchObject({ body: "b2", at: [5, 0] });
+    expect(ed().past).toHaveLength(1);
+    ed().undo();
+    expect(el("s1")).toMatchObject({ body: "b1", at: [1, 0] });
+  });
+
+  it("moves a body with its elements; Alt turns snapping off", () => {
+    hit = { type: "element", id: "b1" };
+    down(1, 0.5);
+    pointer("pointermove", 1.33, 0.5, { altKey: true });
+    pointer("pointerup", 1.33, 0.5, { altKey: true });
+    expect((ed().sketch.bodies[0].outline[0] as number[])[0]).toBeCloseTo(0.33, 9);
+    expect((el("s1").at as number[])[0]).toBeCloseTo(1.33, 9);
+    expect((el("p1").at as number[])[0]).toBeCloseTo(2.33, 9);
+  });
+
+  it("a click without movement only selects", () => {
+    hit = { type: "element", id: "p1" };
+    down(2, 0.5);
+    pointer("pointerup", 2, 0.5);
+    expect(ed().selection).toEqual(["p1"]);
+    expect(ed().past).toHaveLength(0);
+  });
+});
+
+describe("handles", () => {
+  it("turns a port with its handle in 5° steps", () => {
+    hit = { type: "rotate", id: "p1" };
+    down(2.66, 0.5);
+    pointer("pointermove", 2.5, 1.03);
+    pointer("pointerup", 2.5, 1.03);
+    // direction from the port (2, 0.5) to the pointer: atan2(0.53, 0.5) = 46.7° → 45°
+    expect(el("p1").angle).toBe(45);
+    expect(ed().past).toHaveLength(1);
+  });
+
+  it("reshapes a rectangle by its corner, keeping it a rectangle", () => {
+    hit = { type: "corner", id: "b1", index: 2 };
+    down(2, 1);
+    pointer("pointermove", 2.8, 1.6);
+    pointer("pointerup", 2.8, 1.6);
+    expect(ed().sketch.bodies[0].outline).toEqual([[0, 0], [2.8, 0], [2.8, 1.6], [0, 1.6]]);
+  });
+});
+
+describe("tools", () => {
+  it("places a contact on an edge pointing into the body, then goes back to selecting", () => {
+    ed().setTool({ kind: "place", element: "contact" });
+    down(5.02, 1.03);
+    const added = ed().sketch.supports[1];
+    expect(added).toMatchObject({ id: "s2", body: "b2", kind: "contact", at: [5, 1], angle: -90 });
+    expect(ed().tool.kind).toBe("select");
+    expect(ed().selection).toEqual(["s2"]);
+  });
+
+  it("draws a polygon body corner by corner, closing on the first corner", () => {
+    ed().setTool({ kind: "body", shape: "polygon", points: [] });
+    for (const [x, y] of [[0, 3], [2, 3], [1, 4.4], [0.01, 3.02]]) down(x, y);
+    expect(ed().sketch.bodies).toHaveLength(3);
+    expect(ed().sketch.bodies[2]).toMatchObject({ id: "b3", outline: [[0, 3], [2, 3], [1, 4.4]] });
+  });
+
+  it("draws a rectangle body by dragging", () => {
+    ed().setTool({ kind: "body", shape: "rectangle", points: [] });
+    down(0, 2);
+    pointer("pointermove", 3, 3.4);
+    pointer("pointerup", 3, 3.4);
+    expect(ed().sketch.bodies[2].outline).toEqual([[0, 2], [3, 2], [3, 3.4], [0, 3.4]]);
+  });
+
+  it("selects what a rubber band encloses", () => {
+    down(-0.5, -0.5);
+    pointer("pointermove", 2.5, 1.5);
+    pointer("pointerup", 2.5, 1.5);
+    expect([...ed().selection].sort()).toEqual(["b1", "p1", "s1"]);
+  });
+
+  it("picks the point the hand check takes moments about", () => {
+    ed().setTool({ kind: "pick-point" });
+    down(1.97, 0.02);
+    expect(ed().momentPoint).toEqual([2, 0]);
+  });
+});

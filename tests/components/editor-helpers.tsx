@@ -1,0 +1,34 @@
+// Rendering the editor under jsdom: in-memory persistence, a ResizeObserver stand-in, and the
+// store of the mounted editor for assertions.
+import { render, screen } from "@testing-library/react";
+import { Editor } from "@/components/editor/Editor";
+import { scratchPersistence } from "@/canvas/persistence";
+import type { SketchFile } from "@/solver/schema";
+
+export function memoryStorage(initial?: SketchFile) {
+  const mem = new Map<string, string>();
+  if (initial) mem.set("counterpoise:scratch-sketch:v1", JSON.stringify({ savedAt: "", sketch: initial }));
+  return { mem, storage: { getItem: (k: string) => mem.get(k) ?? null, setItem: (k: string, v: string) => void mem.set(k, v), removeItem: (k: string) => void mem.delete(k) } };
+}
+
+if (typeof globalThis.ResizeObserver === "undefined") {
+  globalThis.ResizeObserver = class {
+    observe() {}
+    unobserve() {}
+    disconnect() {}
+  } as unknown as typeof ResizeObserver;
+}
+
+export async function renderEditor(sketch?: SketchFile, example?: string) {
+  const { storage, mem } = memoryStorage(sketch);
+  const persistence = scratchPersistence(storage);
+  const utils = render(<Editor persistence={persistence} example={example} />);
+  await screen.findByRole("heading", { name: "Add" });
+  return { ...utils, mem };
+}
+
+/** The sketch as the page would export it: read from the scratch storage after autosave. */
+export function storedSketch(mem: Map<string, string>): SketchFile | undefined {
+  const raw = mem.get("counterpoise:scratch-sketch:v1");
+  return raw ? (JSON.parse(raw).sketch as SketchFile) : undefined;
+}

@@ -1,0 +1,151 @@
+// The editor's panels with Testing Library: tray, element list, properties (expressions with
+// units, errors at the field), parameters, keyboard, undo, import errors.
+import { act, fireEvent, screen, waitFor, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { describe, expect, it } from "vitest";
+import { exampleById } from "@/canvas/examples";
+import { emptySketch } from "@/canvas/model/elements";
+import { newBody } from "@/canvas/model/factory";
+import type { SketchFile } from "@/solver/schema";
+import { renderEditor, storedSketch } from "./editor-helpers";
+
+function beam(): SketchFile {
+  return {
+    ...emptySketch("Beam on a pin and a contact"),
+    bodies: [newBody("b1", [[0, 0], [4, 0], [4, 0.5], [0, 0.5]], "Beam")],
+    supports: [
+      { id: "s1", body: "b1", kind: "pin", at: [0, 0], label: "left pin" },
+      { id: "s2", body: "b1", kind: "contact", at: [4, 0], angle: 90, label: "right pad" },
+    ],
+    loads: [{ id: "l1", body: "b1", kind: "force", at: [2, 0.5], magnitude: "10 kN", angle: -90 }],
+  };
+}
+
+const outlineRow = (name: RegExp) => within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name });
+
+describe("editor", () => {
+  it("shows the tray, the element list and the sketch's properties", async () => {
+    await renderEditor(beam());
+    for (const name of [/^Pin/, /^Roller/, /^Contact \(C\)/, /^Contact with friction/, /^Fixed support/, /^Tie/, /^Point force/, /^Couple/, /^Distributed load/, /^Inlet/, /^Outlet/, /^Mass source/, /^Body \(rectangle\)/, /^Body \(polygon\)/])
+      expect(screen.getByTitle(name)).toBeInTheDocument();
+    expect(screen.getByRole("heading", { name: /Elements/ })).toHaveTextContent("(4)");
+    expect(outlineRow(/Pin s1, left pin/)).toBeInTheDocument();
+    expect(screen.getByTestId("sketch-form")).toBeInTheDocument();
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent("Beam on a pin and a contact");
+  });
+
+  it("disables supports in the tray until a body exists, and chooses a tool on click", async () => {
+    const user = userEvent.setup();
+    await renderEditor(emptySketch());
+    expect(screen.getByTitle(/^Pin/)).toHaveAttribute("aria-disabled", "true");
+    await user.click(screen.getByTitle(/^Body \(rectangle\)/));
+    expect(screen.getByTitle(/^Body \(rectangle\)/)).toHaveAttribute("aria-pressed", "true");
+    expect(screen.getByTestId("notice")).toHaveTextContent(/drag a rectangle/);
+  });
+
+  it("edits a field with an expression with units and shows its value; an unknown name shows the error there", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(beam());
+    await user.click(outlineRow(/Point force l1/));
+    const form = screen.getByTestId("element-form");
+    const magnitude = within(form).getByLabelText("Magnitude");
+    await user.clear(magnitude);
+    await user.type(magnitude, "2.5 kip");
+    expect(within(form).getByText("= 11.12 kN")).toBeInTheDocument();
+    await user.clear(magnitude);
+    await user.type(magnitude, "3 * span");
+    expect(magnitude).toHaveAttribute("aria-invalid", "true");
+    expect(within(form).getByText(/unknown name "span"/)).toBeInTheDocument();
+    // the file keeps what was typed
+    await waitFor(() => expect((storedSketch(mem)!.loads[0] as { magnitude: unknown }).magnitude).toBe("3 * span"));
+  });
+
+  it("refuses a blank required field at the field and changes nothing", async () => {
+    const user = userEvent.setup();
+    await renderEditor(beam());
+    await user.click(outlineRow(/Contact s2/));
+    const angle = screen.getByLabelText("Pushes toward");
+    await user.clear(angle);
+    expect(screen.getByText(/is required/)).toBeInTheDocument();
+    await user.tab();
+    expect(screen.getByLabelText("Pushes toward")).toHaveValue("90");
+  });
+
+  it("adds a parameter that fields can use, and renaming it rewrites them", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(beam());
+    await user.type(screen.getByLabelText("New parameter name"), "P");
+    await user.type(screen.getByLabelText("New parameter expression"), "12 kN");
+    await user.click(screen.getByRole("button", { name: "Add" }));
+    expect(within(screen.getByTestId("parameters")).getByText("12 kN")).toBeInTheDocument();
+    await user.click(outlineRow(/Point force l1/));
+    const magnitude = screen.getByLabelText("Magnitude");
+    await user.clear(magnitude);
+    await user.type(magnitude, "P / 2");
+    expect(screen.getByText("= 6 kN")).toBeInTheDocument();
+    const name = screen.getByLabelText("Name of parameter P");
+    await user.clear(name);
+    await user.type(name, "load{Enter}");
+    await waitFor(() => expect((storedSketch(mem)!.loads[0] as { magnitude: unknown }).magnitude).toBe("load / 2"));
+    expect(storedSketch(mem)!.parameters).toEqual({ load: "12 kN" });
+  });
+
+  it("selects from the keyboard in the element list, deletes, and undoes", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(beam());
+    const first = outlineRow(/Body b1/);
+    first.focus();
+    await user.keyboard("{ArrowDown}{ArrowDown}");
+    expect(outlineRow(/Contact s2/)).toHaveFocus();
+    await user.keyboard("{Enter}");
+    expect(outlineRow(/Contact s2/)).toHaveAttribute("aria-pressed", "true");
+    await user.keyboard("{Delete}");
+    expect(screen.queryByRole("button", { name: /Contact s2/ })).toBeNull();
+    await waitFor(() => expect(storedSketch(mem)!.supports.map((s) => s.id)).toEqual(["s1"]));
+    await user.click(screen.getByTestId("undo"));
+    expect(outlineRow(/Contact s2/)).toBeInTheDocument();
+    await user.click(screen.getByTestId("redo"));
+    expect(screen.queryByRole("button", { name: /Contact s2/ })).toBeNull();
+  });
+
+  it("runs shortcuts from the registered actions: undo, duplicate, nudge, units", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(beam());
+    await user.click(outlineRow(/Pin s1/));
+    fireEvent.keyDown(document.body, { key: "d", ctrlKey: true });
+    await waitFor(() => expect(storedSketch(mem)!.supports.map((s) => s.id)).toEqual(["s1", "s2", "s3"]));
+    fireEvent.keyDown(document.body, { key: "ArrowRight" });
+    fireEvent.keyDown(document.body, { key: "z", ctrlKey: true });
+    fireEvent.keyDown(document.body, { key: "z", ctrlKey: true });
+    await waitFor(() => expect(storedSketch(mem)!.supports).toHaveLength(2));
+    fireEvent.keyDown(document.body, { key: "u" });
+    expect(within(screen.getByTestId("units")).getByRole("radio", { name: "US" })).toHaveAttribute("aria-checked", "true");
+  });
+
+  it("opens an example from the menu, and undo returns to the sketch before", async () => {
+    const user = userEvent.setup();
+    await renderEditor(beam());
+    await user.click(screen.getByTestId("menu-examples"));
+    await user.click(screen.getByRole("menuitem", { name: /Pressure-pipe bend on an anchor/ }));
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent(exampleById("pipe-bend-anchor")!.sketch.title!);
+    await user.click(screen.getByTestId("undo"));
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent("Beam on a pin and a contact");
+  });
+
+  it("refuses a bad file with its reasons and leaves the sketch alone", async () => {
+    const { mem } = await renderEditor(beam());
+    await waitFor(() => expect(storedSketch(mem)).toBeDefined());
+    const before = mem.get("counterpoise:scratch-sketch:v1");
+    const input = screen.getByTestId("import-input") as HTMLInputElement;
+    const file = new File(['{"format": "counterpoise.sketch", "version": 1, "bodies": [{"id": "b1"}]}'], "broken.json", { type: "application/json" });
+    await act(async () => {
+      fireEvent.change(input, { target: { files: [file] } });
+    });
+    const dialog = await screen.findByRole("alertdialog");
+    expect(dialog).toHaveTextContent("“broken.json” could not be opened");
+    expect(dialog).toHaveTextContent("Nothing in your sketch has changed");
+    expect(dialog).toHaveTextContent("bodies[0].outline");
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent("Beam on a pin and a contact");
+    expect(mem.get("counterpoise:scratch-sketch:v1")).toBe(before);
+  });
+});

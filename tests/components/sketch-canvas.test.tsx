@@ -1,0 +1,47 @@
+// The Konva canvas under jsdom (vitest-canvas-mock): a node per element in the drawing layer,
+// handles for the selection, and the results drawn on their own layer.
+import { render, waitFor } from "@testing-library/react";
+import Konva from "konva";
+import { describe, expect, it } from "vitest";
+import { createEditorStore } from "@/canvas/store";
+import { EditorProvider } from "@/canvas/context";
+import { createInteractionStore } from "@/canvas/konva/interaction";
+import SketchCanvas from "@/canvas/konva/SketchCanvas";
+import { exampleById } from "@/canvas/examples";
+import "./editor-helpers";
+
+function mount(id: string) {
+  const editor = createEditorStore({ sketch: exampleById(id)!.sketch });
+  const utils = render(
+    <EditorProvider editor={editor}>
+      <div style={{ width: 800, height: 600 }}>
+        <SketchCanvas interaction={createInteractionStore()} />
+      </div>
+    </EditorProvider>,
+  );
+  return { editor, ...utils };
+}
+
+const stage = () => Konva.stages[Konva.stages.length - 1];
+const hits = () => stage().find((n: Konva.Node) => !!n.getAttr("hit")).map((n) => n.getAttr("hit") as { type: string; id: string });
+
+describe("SketchCanvas", () => {
+  it("draws every element as its own node on the drawing layer, above the grid", async () => {
+    const { container } = mount("fire-monitor-trailer");
+    await waitFor(() => expect(container.querySelector("canvas")).not.toBeNull());
+    expect(stage().getLayers()).toHaveLength(4);
+    const ids = hits().filter((h) => h.type === "element").map((h) => h.id);
+    expect(ids.sort()).toEqual(["axle", "foot", "jack", "nozzle", "supply", "trailer"]);
+    expect(hits().filter((h) => h.type === "cg").map((h) => h.id)).toEqual(["trailer"]);
+    expect(container.querySelector("[role=application]")).toHaveAccessibleName("Drawing of the free-body diagram");
+  });
+
+  it("shows the turn handle of a selected directed element and the corners of a selected body", async () => {
+    const { editor, container } = mount("washing-cart");
+    await waitFor(() => expect(container.querySelector("canvas")).not.toBeNull());
+    editor.getState().select(["lance"]);
+    await waitFor(() => expect(hits().some((h) => h.type === "rotate" && h.id === "lance")).toBe(true));
+    editor.getState().select(["cart"]);
+    await waitFor(() => expect(hits().filter((h) => h.type === "corner")).toHaveLength(8));
+  });
+});

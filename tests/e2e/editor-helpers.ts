@@ -1,0 +1,59 @@
+// Helpers for driving the sketch editor in Chromium: world coordinates on the canvas, fields in
+// the properties panel, the tray, and reading a download.
+import { readFileSync } from "node:fs";
+import type { Locator, Page } from "playwright-core";
+
+export interface CanvasMap {
+  at: (x: number, y: number) => { x: number; y: number };
+}
+
+/** Screen position of a world point for the view a new, empty sketch opens with. */
+export async function emptySketchView(page: Page): Promise<CanvasMap> {
+  const box = (await page.getByTestId("sketch-canvas").boundingBox())!;
+  const w = Math.floor(box.width);
+  const h = Math.floor(box.height);
+  const view = { scale: 120, x: Math.round(w * 0.3), y: Math.round(h * 0.7) };
+  return { at: (x, y) => ({ x: box.x + view.x + x * view.scale, y: box.y + view.y - y * view.scale }) };
+}
+
+export async function clickAt(page: Page, p: { x: number; y: number }) {
+  await page.mouse.move(p.x, p.y);
+  await page.mouse.down();
+  await page.mouse.up();
+}
+
+/** Drag with many small moves, like a hand. */
+export async function dragFromTo(page: Page, a: { x: number; y: number }, b: { x: number; y: number }, steps = 12) {
+  await page.mouse.move(a.x, a.y);
+  await page.mouse.down();
+  await page.mouse.move(b.x, b.y, { steps });
+  await page.mouse.up();
+}
+
+export function form(page: Page): Locator {
+  return page.getByTestId("element-form");
+}
+
+/** Replace a field's text (label text as shown in the panel). */
+export async function fill(scope: Locator, testId: string, value: string) {
+  const input = scope.getByTestId(testId);
+  await input.click();
+  await input.fill(value);
+  await input.press("Enter");
+}
+
+export async function tray(page: Page, name: string) {
+  await page.getByTestId(`tray-${name}`).click();
+}
+
+export async function addParameter(page: Page, name: string, expression: string) {
+  await page.getByLabel("New parameter name").fill(name);
+  await page.getByLabel("New parameter expression").fill(expression);
+  await page.getByTestId("parameters").getByRole("button", { name: "Add" }).click();
+}
+
+export async function download(page: Page, run: () => Promise<void>): Promise<{ name: string; text: string; path: string }> {
+  const [dl] = await Promise.all([page.waitForEvent("download"), run()]);
+  const path = await dl.path();
+  return { name: dl.suggestedFilename(), text: readFileSync(path, "utf8"), path };
+}

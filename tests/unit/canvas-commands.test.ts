@@ -1,0 +1,239 @@
+// Every editor command is a pure (sketch, args) → sketch: these check each one's effect, that the
+// input is never changed, and that untouched elements keep their identity (narrow redraws).
+import { describe, expect, it } from "vitest";
+import type { SketchFile } from "@/solver/schema";
+import { parseSketch } from "@/solver/index";
+import {
+  addElement,
+  attachToBody,
+  deleteElements,
+  deleteParameter,
+  duplicateElements,
+  insertCorner,
+  moveCentreOfGravity,
+  moveElement,
+  removeCorner,
+  renameParameter,
+  replaceSketch,
+  reshapeBody,
+  rotateElement,
+  setField,
+  setForceForm,
+  setMotion,
+  setOutline,
+  setParameter,
+  setSketchField,
+} from "@/canvas/commands";
+import { emptySketch, findElement } from "@/canvas/model/elements";
+import { newAttached, newBody } from "@/canvas/model/factory";
+
+function base(): SketchFile {
+  const s = emptySketch("Test");
+  return {
+    ...s,
+    parameters: { L: "2 m", theta: "30 deg" },
+    bodies: [newBody("b1", [[0, 0], [2, 0], [2, 1], [0, 1]], "Skid"), newBody("b2", [[5, 0], [6, 0], [6, 1], [5, 1]], "Other")],
+    supports: [
+      { id: "s1", body: "b1", kind: "pin", at: [0, 0] },
+      { id: "s2", body: "b1", kind: "contact", at: ["L", 0], angle: 90 },
+    ],
+    loads: [
+      { id: "l1", body: "b1", kind: "force", at: [1, 1], magnitude: "1 kN", angle: -90 },
+      { id: "l2", body: "b1", kind: "force", at: [1.5, 1], fx: 3, fy: 4 },
+    ],
+    ports: [{ id: "p1", body: "b2", kind: "outlet", at: [6, 0.5], angle: "theta", massFlow: 2, velocity: 10 }],
+    massSources: [],
+  };
+}
+
+const frozen = () => Object.freeze(base()) as SketchFile;
+const el = (s: SketchFile, id: string) => findElement(s, id)!.el as unknown as Record<string, unknown>;
+
+describe("addElement", () => {
+  it("adds an element to its list, keeping a free id or choosing the next", () => {
+    const s = base();
+    const pin = newAttached("pin", "s9", { at: [1, 0], body: "b1" });
+    const a = addElement.run(s, { kind: "pin", element: pin });
+    expect(a.supports.map((x) => x.id)).toEqual(["s1", "s2", "s9"]);
+    const clash = addElement.run(s, { kind: "pin", element: { ...pin, id: "s1" } });
+    expect(clash.supports.map((x) => x.id)).toEqual(["s1", "s2", "s3"]);
+    expect(addElement.def.select!(s, clash, { kind: "pin", element: pin }, [])).toEqual(["s3"]);
+    expect(s.supports).toHaveLength(2);
+    // untouched lists and elements keep their identity
+    expect(a.loads).toBe(s.loads);
+    expect(a.supports[0]).toBe(s.supports[0]);
+  });
+});
+
+describe("deleteElements", () => {
+  it("deletes the elements, and with a body everything attached to it", () => {
+    const s = base();
+    const a = deleteElements.run(s, { ids: ["l1"] });
+    expect(a.loads.map((l) => l.id)).toEqual(["l2"]);
+    const b = deleteElements.run(s, { ids: ["b1"] });
+    expect(b.bodies.map((x) => x.id)).toEqual(["b2"]);
+    expect(b.supports).toHaveLength(0);
+    expect(b.loads).toHaveLength(0);
+    expect(b.ports.map((p) => p.id)).toEqual(["p1"]);
+    expect(deleteElements.def.label({ ids: ["b1"] }, s)).toBe("Delete 5 elements");
+    expect(deleteElements.run(s, { ids: ["nope"] })).toBe(s);
+  });
+});
+
+describe("duplicateElements", () => {
+  it("copies an element with a new id, offset", () => {
+    const s = base();
+    const a = duplicateElements.run(s, { ids: ["s1"], offset: [0.5, 0.25] });
+    expect(a.supports).toHaveLength(3);
+    expect(a.supports[2]).toEqual({ id: "s3", body: "b1", kind: "pin", at: [0.5, 0.25] });
+    expect(duplicateElements.def.select!(s, a, { ids: ["s1"], offset: [0.5, 0.25] }, [])).toEqual(["s3"]);
+  });
+  it("copies a body with its elements, which belong to the copy", () => {
+    const s = base();
+    const a = duplicateElements.run(s, { ids: ["b2"], offset: [0, 2] });
+    expect(a.bodies.map((b) => b.id)).toEqual(["b1", "b2", "b3"]);
+    expect(a.bodies[2].outline[0]).toEqual([5, 2]);
+    const copy = a.ports[1];
+    expect(copy).toMatchObject({ id: "p2", body: "b3", at: [6, 2.5], angle: "theta" });
+    expect(duplicateElements.def.select!(s, a, { ids: ["b2"], offset: [0, 2] }, [])).toEqual(["b3"]);
+  });
+});
+
+describe("attachToBody", () => {
+  it("moves elements to another body, and ignores bodies and unknown targets", () => {
+    const s = base();
+    const a = attachToBody.run(s, { ids: ["l1", "b2"], body: "b2" });
+    expect((el(a, "l1") as { body: string }).body).toBe("b2");
+    expect(attachToBody.run(s, { ids: ["l1"], body: "s1" })).toBe(s);
+    expect(attachToBody.run(s, { ids: ["l1"], body: "b1" })).toBe(s);
+  });
+});
+
+describe("moveElement", () => {
+  it("moves a support by the delta, rounding away float noise", () => {
+    const s = frozen();
+    const a = moveElement.run(s, { ids: ["s1"], delta: [0.1, 0.2] });
+    expect(el(a, "s1").at).toEqual([0.1, 0.2]);
+    expect(moveElement.run(s, { ids: ["s1"], delta: [0, 0] })).toBe(s);
+  });
+  it("moves a body with everything attached to it, once", () => {
+    const s = base();
+    const a = moveElement.run(s, { ids: ["b1", "s1"], delta: [1, 0] });
+    expect(a.bodies[0].outline).toEqual([[1, 0], [3, 0], [3, 1], [1, 1]]);
+    expect(el(a, "s1").at).toEqual([1, 0]);
+    expect(el(a, "l2").at).toEqual([2.5, 1]);
+    expect(a.bodies[1]).toBe(s.bodies[1]);
+    expect(a.ports).toBe(s.ports);
+  });
+  it("turns a moved expression coordinate into its value plus the move; without a value it stays", () => {
+    const s = base();
+    const lookup = (id: string, field: string) => (id === "s2" && field === "at[0]" ? 2 : undefined);
+    expect(el(moveElement.run(s, { ids: ["s2"], delta: [0.5, 0.1], lookup }), "s2").at).toEqual([2.5, 0.1]);
+    expect(el(moveElement.run(s, { ids: ["s2"], delta: [0.5, 0.1] }), "s2").at).toEqual(["L", 0.1]);
+  });
+  it("moves both ends of a distributed load", () => {
+    const s = addElement.run(base(), { kind: "distributed", element: newAttached("distributed", "l3", { at: [1, 1], body: "b1" }) });
+    const a = moveElement.run(s, { ids: ["l3"], delta: [0, -0.5] });
+    expect(el(a, "l3")).toMatchObject({ from: [0.5, 0.5], to: [1.5, 0.5] });
+  });
+});
+
+describe("moveCentreOfGravity", () => {
+  it("gives the body a centre of gravity, or takes it back to the centroid", () => {
+    const s = base();
+    const a = moveCentreOfGravity.run(s, { id: "b1", to: [0.7, 0.4] });
+    expect(a.bodies[0].cg).toEqual([0.7, 0.4]);
+    expect(moveCentreOfGravity.run(a, { id: "b1", to: null }).bodies[0].cg).toBeUndefined();
+    expect(moveCentreOfGravity.run(s, { id: "s1", to: [0, 0] })).toBe(s);
+  });
+});
+
+describe("rotateElement", () => {
+  it("sets the direction in (−180, 180]", () => {
+    const s = base();
+    expect(el(rotateElement.run(s, { id: "s2", angle: 450 }), "s2").angle).toBe(90);
+    expect(el(rotateElement.run(s, { id: "p1", angle: 200 }), "p1").angle).toBe(-160);
+    expect(rotateElement.run(s, { id: "s1", angle: 30 })).toBe(s);
+  });
+  it("turns a force given as components, keeping its magnitude", () => {
+    const a = rotateElement.run(base(), { id: "l2", angle: 90 });
+    expect(el(a, "l2")).toMatchObject({ fx: 0, fy: 5 });
+  });
+});
+
+describe("body shape", () => {
+  it("keeps a rectangle a rectangle when a corner is dragged", () => {
+    const a = reshapeBody.run(base(), { id: "b1", corner: 2, to: [3, 1.5] });
+    expect(a.bodies[0].outline).toEqual([[0, 0], [3, 0], [3, 1.5], [0, 1.5]]);
+  });
+  it("moves one corner of a polygon (or of a rectangle when asked)", () => {
+    const a = reshapeBody.run(base(), { id: "b1", corner: 2, to: [3, 1.5], keepRectangle: false });
+    expect(a.bodies[0].outline).toEqual([[0, 0], [2, 0], [3, 1.5], [0, 1]]);
+  });
+  it("adds and removes corners, never below three", () => {
+    const a = insertCorner.run(base(), { id: "b1", after: 1 });
+    expect(a.bodies[0].outline).toEqual([[0, 0], [2, 0], [2, 0.5], [2, 1], [0, 1]]);
+    const b = removeCorner.run(removeCorner.run(base(), { id: "b1", corner: 0 }), { id: "b1", corner: 0 });
+    expect(b.bodies[0].outline).toHaveLength(3);
+    expect(setOutline.run(base(), { id: "b1", outline: [[0, 0], [1, 1]] })).toEqual(base());
+    expect(setOutline.run(base(), { id: "b1", outline: [[0, 0], [1, 0], [0, 1]] }).bodies[0].outline).toEqual([[0, 0], [1, 0], [0, 1]]);
+  });
+});
+
+describe("setField", () => {
+  it("sets a value, a coordinate, a label; a blank removes an optional field only", () => {
+    const s = base();
+    expect(el(setField.run(s, { id: "p1", field: "pressure", value: "350 psi" }), "p1").pressure).toBe("350 psi");
+    expect(el(setField.run(s, { id: "s1", field: ["at", 1], value: "L/2" }), "s1").at).toEqual([0, "L/2"]);
+    expect(el(setField.run(s, { id: "s1", field: "label", value: "rear foot" }), "s1").label).toBe("rear foot");
+    const withMu = setField.run(s, { id: "s2", field: "mu", value: 0.3 });
+    expect(el(setField.run(withMu, { id: "s2", field: "mu", value: undefined }), "s2").mu).toBeUndefined();
+    expect(el(setField.run(s, { id: "s2", field: "angle", value: undefined }), "s2").angle).toBe(90);
+    expect(setField.run(s, { id: "s2", field: "id", value: "x" })).toBe(s);
+  });
+  it("switches a force between magnitude + angle and components", () => {
+    const a = setForceForm.run(base(), { id: "l1", form: "components", magnitude: 1000, angle: -90 });
+    expect(el(a, "l1")).toMatchObject({ fx: 0, fy: -1000 });
+    expect(el(a, "l1").magnitude).toBeUndefined();
+    const b = setForceForm.run(a, { id: "l1", form: "polar", magnitude: 1000, angle: -90 });
+    expect(el(b, "l1")).toMatchObject({ magnitude: 1000, angle: -90 });
+  });
+  it("edits the sketch's own fields and motion", () => {
+    const s = base();
+    expect(setSketchField.run(s, { field: "gravity", value: 0 }).gravity).toBe(0);
+    expect(setSketchField.run(s, { field: "title", value: undefined }).title).toBeUndefined();
+    expect(setMotion.run(s, { motion: { ax: "0.5 m/s^2", freeX: false } }).motion).toEqual({ ax: "0.5 m/s^2" });
+    expect(setMotion.run(s, { motion: { freeX: false } }).motion).toBeUndefined();
+  });
+});
+
+describe("parameters", () => {
+  it("sets, renames (rewriting every expression that reads it) and deletes", () => {
+    const s = base();
+    expect(setParameter.run(s, { name: "rho", expression: "998 kg/m^3" }).parameters).toMatchObject({ rho: "998 kg/m^3" });
+    expect(setParameter.run(s, { name: "2x", expression: 1 })).toBe(s);
+    const r = renameParameter.run(s, { from: "L", to: "span" });
+    expect(Object.keys(r.parameters!)).toEqual(["span", "theta"]);
+    expect(el(r, "s2").at).toEqual(["span", 0]);
+    // a label and an id are words, not expressions
+    const labelled = setField.run(s, { id: "s1", field: "label", value: "L" });
+    expect(el(renameParameter.run(labelled, { from: "L", to: "span" }), "s1").label).toBe("L");
+    expect(renameParameter.run(s, { from: "L", to: "theta" })).toBe(s);
+    expect(deleteParameter.run(s, { name: "theta" }).parameters).toEqual({ L: "2 m" });
+  });
+  it("keeps the renamed sketch solving the same", () => {
+    const r = renameParameter.run(base(), { from: "theta", to: "jet_angle" });
+    const a = parseSketch(base());
+    const b = parseSketch(r);
+    expect(a.ok && b.ok).toBe(true);
+    if (a.ok && b.ok) expect(b.sketch.ports[0].angle).toBeCloseTo(a.sketch.ports[0].angle, 12);
+  });
+});
+
+describe("replaceSketch", () => {
+  it("replaces the document and clears the selection", () => {
+    const other = emptySketch("Other");
+    expect(replaceSketch.run(base(), { sketch: other, label: "New" })).toBe(other);
+    expect(replaceSketch.def.select!(base(), other, { sketch: other, label: "New" }, ["s1"])).toEqual([]);
+  });
+});

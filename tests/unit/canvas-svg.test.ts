@@ -1,0 +1,88 @@
+// @vitest-environment jsdom
+// The one SVG renderer (sketch + result → SVG text, no Konva, no DOM): a snapshot of a worked
+// example, and structural checks that every element is drawn with its values and units.
+import { readFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import { solveFile, type SolveResult } from "@/solver/index";
+import { renderSketchSvg } from "@/canvas/render/svg";
+import { EXAMPLES, exampleById } from "@/canvas/examples";
+
+const parse = (svg: string) => new DOMParser().parseFromString(svg, "image/svg+xml");
+
+function solved(id: string) {
+  const sketch = exampleById(id)!.sketch;
+  const result = solveFile(sketch) as SolveResult;
+  expect(result.ok).toBe(true);
+  return { sketch, result };
+}
+
+describe("renderSketchSvg", () => {
+  it("draws the pipe-bend example the same as last time", async () => {
+    const { sketch, result } = solved("pipe-bend-anchor");
+    const svg = renderSketchSvg(sketch, result, { width: 900, height: 600 });
+    await expect(svg).toMatchFileSnapshot("./canvas-svg.pipe-bend.snap.svg");
+  });
+
+  it("is well-formed SVG with a group for every element and no unreadable numbers", () => {
+    for (const ex of EXAMPLES) {
+      const result = solveFile(ex.sketch) as SolveResult;
+      const svg = renderSketchSvg(ex.sketch, result);
+      const doc = parse(svg);
+      expect(doc.getElementsByTagName("parsererror")).toHaveLength(0);
+      const ids = [...doc.querySelectorAll("g[data-id]")].map((g) => g.getAttribute("data-id"));
+      const expected = [ex.sketch.bodies, ex.sketch.supports, ex.sketch.loads, ex.sketch.ports, ex.sketch.massSources].flat().map((e) => e.id);
+      expect(ids.sort()).toEqual(expected.sort());
+      expect(svg).not.toMatch(/NaN|undefined|Infinity/);
+      expect(doc.querySelector("title")?.textContent).toBe(ex.sketch.title);
+    }
+  });
+
+  it("labels values with units: the reaction, the port flow, the weight", () => {
+    const { sketch, result } = solved("washing-cart");
+    const svg = renderSketchSvg(sketch, result);
+    const doc = parse(svg);
+    const text = [...doc.querySelectorAll("text")].map((t) => t.textContent);
+    const rear = result.reactions.rear;
+    // 3–4 significant figures, with the unit
+    const R = Math.hypot(rear.fx, rear.fy);
+    expect(text).toContain(`${R.toPrecision(4).replace(/\.?0+$/, "")} N`);
+    expect(text.some((t) => /^ṁ 0\.6653 kg\/s · V \d+(\.\d+)? m\/s$/.test(t ?? ""))).toBe(true);
+    expect(text).toContain("W 833.6 N");
+    expect(doc.querySelector("g.results")).not.toBeNull();
+    expect(text.some((t) => /double lines: reactions found/.test(t ?? ""))).toBe(true);
+  });
+
+  it("writes US customary units when asked", () => {
+    const { sketch, result } = solved("pipe-bend-anchor");
+    const svg = renderSketchSvg(sketch, result, { units: "US" });
+    expect(svg).toMatch(/\d (lbf|kip)</);
+    expect(svg).toMatch(/ psi</);
+    expect(svg).not.toMatch(/ kN</);
+  });
+
+  it("shows the states by shape and word: a contact that would have to pull, and the pivot", () => {
+    const sketch = structuredClone(exampleById("washing-cart")!.sketch);
+    sketch.parameters = { ...sketch.parameters, theta: "-35 deg" };
+    const result = solveFile(sketch) as SolveResult;
+    expect(result.bodies.cart.status).toBe("tips");
+    const svg = renderSketchSvg(sketch, result);
+    expect(svg).toMatch(/would have to pull \d/);
+    expect(svg).toMatch(/lifts</);
+    expect(svg).toMatch(/pivot: tips about here/);
+  });
+
+  it("draws a sketch without a result, and fades a stale one", () => {
+    const { sketch, result } = solved("pump-skid");
+    const plain = renderSketchSvg(sketch);
+    expect(plain).not.toMatch(/class="results"/);
+    const stale = renderSketchSvg(sketch, result, { stale: true });
+    expect(stale).toMatch(/class="results"><[^>]+opacity="0.38"/);
+  });
+
+  it("reads any supported file (expressions, the lead's fixtures) and says when it cannot draw", () => {
+    const fixture = JSON.parse(readFileSync("tests/fixtures/sketches/pipe-bend-anchor.json", "utf8"));
+    const svg = renderSketchSvg(fixture, solveFile(fixture) as SolveResult);
+    expect(svg).toMatch(/data-id="anchor"/);
+    expect(renderSketchSvg({ format: "nope" } as never)).toMatch(/cannot be drawn/);
+  });
+});
