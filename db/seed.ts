@@ -1,7 +1,7 @@
 // The demo workspace: four people, one per role, all verified, password "counterpoise-demo".
 // Idempotent (fixed ids, inserts that skip what exists). Runs under tsx from scripts/db-setup.ts,
 // so it opens its own pool and uses relative imports (db/index.ts is server-only).
-// The versions and review work add their demo sketches next to DEMO_WORKSPACE_ID.
+// The demo sketches and their versions come from db/seed-sketches.ts.
 import { hashPassword } from "better-auth/crypto";
 import { and, eq, isNull } from "drizzle-orm";
 import { drizzle } from "drizzle-orm/node-postgres";
@@ -9,6 +9,7 @@ import { createHash } from "node:crypto";
 import { Pool } from "pg";
 import { localDatabaseUrl } from "../lib/database-url";
 import * as schema from "./schema";
+import { seedDemoSketches } from "./seed-sketches";
 
 export const DEMO_PASSWORD = "counterpoise-demo";
 export const DEMO_WORKSPACE_ID = "6d656d6f-0000-4000-8000-000000000001";
@@ -90,6 +91,7 @@ export async function seedDemo(url = process.env.DATABASE_URL || localDatabaseUr
     const db = drizzle(pool, { schema, casing: "snake_case" });
     await seedPeople(db);
     await seedWorkspace(db);
+    await seedDemoSketches(db, DEMO_WORKSPACE_ID);
   } finally {
     await pool.end();
   }

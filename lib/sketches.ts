@@ -1,6 +1,6 @@
 import "server-only";
 import { db } from "@/db";
-import { deleteSketch, getSketchAccess, lockRole, updateSketch } from "@/db/queries/sketches";
+import { deleteSketch, getSketchAccess, getSketchForMember, lockRole, updateSketch } from "@/db/queries/sketches";
 import { getVersion, insertSketchWithFirstVersion, saveNextVersion, type NewVersion, type VersionListItem } from "@/db/queries/versions";
 import { recordAudit } from "./audit";
 import { AppError } from "./errors";
@@ -23,6 +23,18 @@ export async function requireSketchRole(sketchId: string, userId: string, permis
   if (!can(access.role, permission)) throw new AppError("forbidden");
   return access as typeof access & { role: Role };
 }
+
+/** The sketch as GET /api/sketches/:id answers it (also read by the sketch page): the sketch and its latest version's summary. */
+export async function readSketch(sketchId: string, userId: string) {
+  await requireSketchRole(sketchId, userId, "sketch.read");
+  const s = await getSketchForMember(sketchId, userId);
+  if (!s) throw new AppError("not_found", NO_SKETCH);
+  const latest = await getVersion(sketchId, s.latestVersion, userId);
+  if (!latest) return { sketch: s, latest: null };
+  const { document: _document, ...summary } = latest;
+  return { sketch: s, latest: summary };
+}
+export type SketchRead = Awaited<ReturnType<typeof readSketch>>;
 
 /** What is stored for a parsed document: the file as validated and migrated, its format version and its solve summary. */
 export function versionContent(parsed: ParsedSketch, message: string | undefined): NewVersion {

@@ -13,6 +13,7 @@ export type AuditEntry = {
 };
 
 const str = (v: unknown) => (typeof v === "string" ? v : "");
+const num = (v: unknown) => (typeof v === "number" ? String(v) : "?");
 
 /** What happened, as the rest of a sentence that starts with who did it. */
 export function auditSentence(e: AuditEntry): string {
@@ -33,7 +34,20 @@ export function auditSentence(e: AuditEntry): string {
       return `created the workspace "${str(d.name)}"`;
     case "workspace.rename":
       return `renamed the workspace to "${str(d.name)}"`;
+    case "sketch.create":
+      return `created the sketch "${str(d.title)}"`;
+    case "sketch.save":
+      return `saved v${num(d.number)} of "${str(d.title)}"${d.message ? `: ${str(d.message)}` : ""}`;
+    case "sketch.fork":
+      return d.elsewhere ? `forked v${num(d.fromVersion)} of "${str(d.title)}" into another workspace` : `forked v${num(d.fromVersion)} of another sketch as "${str(d.title)}"`;
+    case "sketch.rename":
+      return str(d.from) && str(d.from) !== str(d.title) ? `renamed the sketch "${str(d.from)}" to "${str(d.title)}"` : `edited the details of "${str(d.title)}"`;
+    case "sketch.delete":
+      return `deleted the sketch "${str(d.title)}" with its ${num(d.versions)} version${d.versions === 1 ? "" : "s"}`;
     default:
+      if (e.action.startsWith("signoff.") || e.action.startsWith("comment.")) {
+        return `${auditActionLabel(e.action)} v${num(d.number)} of "${str(d.title)}"${d.note ? `: ${str(d.note)}` : ""}`;
+      }
       return auditActionLabel(e.action);
   }
 }

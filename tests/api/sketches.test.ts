@@ -9,7 +9,7 @@ import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
 import { auditEvent, sketchVersion } from "@/db/schema";
-import { solveFile } from "@/solver";
+import { CURRENT_VERSION, solveFile } from "@/solver";
 import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { edited, fixture } from "./sketch-fixtures";
 
@@ -54,7 +54,7 @@ describe("creating and reading a sketch", () => {
     expect(read.body.sketch).toMatchObject({ id, workspaceId: ws, title: "Skid at pier 7", latestVersion: 1, role: "checker", forkedFrom: null });
     const expected = solveFile(doc);
     if (!expected.ok) throw new Error("fixture does not solve");
-    expect(read.body.latest).toMatchObject({ number: 1, message: "As drawn from the GA", status: "holds", authorName: eddie.name, formatVersion: 1 });
+    expect(read.body.latest).toMatchObject({ number: 1, message: "As drawn from the GA", status: "holds", authorName: eddie.name, formatVersion: CURRENT_VERSION });
     expect(read.body.latest.largestReaction).toBeCloseTo(expected.bodies.skid.largestReaction, 6);
     expect(read.body.latest.document).toBeUndefined();
 
@@ -71,7 +71,7 @@ describe("creating and reading a sketch", () => {
     const res = await create({ title: "Blank bend" });
     expect(res.status).toBe(201);
     const v1 = await call(versionRoute.GET, { params: { id: res.body.sketch.id, number: "1" }, cookie: eddie.cookie });
-    expect(v1.body.version.document).toMatchObject({ format: "counterpoise.sketch", version: 1, title: "Blank bend", bodies: [] });
+    expect(v1.body.version.document).toMatchObject({ format: "counterpoise.sketch", version: CURRENT_VERSION, title: "Blank bend", bodies: [] });
     expect(v1.body.version.status).toBeNull();
     expect(v1.body.version.message).toBe("First version");
   });

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { EmptyState, Panel } from "@/components/shell/controls";
+import { Panel } from "@/components/shell/controls";
+import { SketchesTable } from "@/components/sketches/SketchesTable";
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
 import { RenameWorkspaceForm } from "@/components/workspaces/WorkspaceForms";
 import { getWorkspaceForMember, listMembers } from "@/db/queries/workspaces";
@@ -26,45 +27,39 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
           </p>
         </div>
         {can(role, "sketch.create") ? (
-          <Link href="/sketches/new" className="rounded-md bg-accent px-4 py-2 text-sm font-medium text-white hover:bg-accent-deep">
+          <Link href={`/sketches/new?workspace=${id}`} className="rounded-md bg-accent px-4 py-2 text-sm font-medium text-white hover:bg-accent-deep">
             Start a sketch
           </Link>
         ) : null}
       </div>
 
-      <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
-        <Panel title="Sketches" description="Free-body diagrams with their control volumes, saved in versions.">
-          <EmptyState title="No sketches saved here yet">
-            {can(role, "sketch.create")
-              ? "Start a sketch, then save it into this workspace. Its versions, checks and approvals will be listed here."
-              : "When an editor saves a sketch into this workspace, it will be listed here for you to read."}
-          </EmptyState>
+      <Panel title="Sketches" description="Free-body diagrams with their control volumes, saved in versions.">
+        <SketchesTable workspaceId={id} canCreate={can(role, "sketch.create")} />
+      </Panel>
+      <div className="grid gap-6 md:grid-cols-2">
+        <Panel
+          title="People"
+          aside={
+            <Link href={`/workspaces/${id}/members`} className="text-sm font-medium text-ink-soft underline decoration-rule underline-offset-2 hover:text-ink">
+              {can(role, "invitations.create") ? "Manage" : "All members"}
+            </Link>
+          }
+        >
+          <ul className="space-y-2 text-sm">
+            {shown.map((m) => (
+              <li key={m.userId} className="flex items-center justify-between gap-2">
+                <span className="truncate text-ink">{m.name}</span>
+                <RoleBadge role={m.role} />
+              </li>
+            ))}
+          </ul>
+          {members.length > shown.length ? <p className="mt-2 text-xs text-ink-faint">and {members.length - shown.length} more</p> : null}
         </Panel>
-        <div className="space-y-6">
-          <Panel
-            title="People"
-            aside={
-              <Link href={`/workspaces/${id}/members`} className="text-sm font-medium text-ink-soft underline decoration-rule underline-offset-2 hover:text-ink">
-                {can(role, "invitations.create") ? "Manage" : "All members"}
-              </Link>
-            }
-          >
-            <ul className="space-y-2 text-sm">
-              {shown.map((m) => (
-                <li key={m.userId} className="flex items-center justify-between gap-2">
-                  <span className="truncate text-ink">{m.name}</span>
-                  <RoleBadge role={m.role} />
-                </li>
-              ))}
-            </ul>
-            {members.length > shown.length ? <p className="mt-2 text-xs text-ink-faint">and {members.length - shown.length} more</p> : null}
+        {can(role, "workspace.rename") ? (
+          <Panel title="Settings">
+            <RenameWorkspaceForm workspaceId={id} name={ws.name} />
           </Panel>
-          {can(role, "workspace.rename") ? (
-            <Panel title="Settings">
-              <RenameWorkspaceForm workspaceId={id} name={ws.name} />
-            </Panel>
-          ) : null}
-        </div>
+        ) : null}
       </div>
     </div>
   );

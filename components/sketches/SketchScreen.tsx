@@ -1,0 +1,187 @@
+"use client";
+// A sketch's page: its title, tags and origin, the actions on it, and its version history.
+import { useMutation, useQuery } from "@tanstack/react-query";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState, type ReactNode } from "react";
+import { Button, Notice, Panel } from "@/components/shell/controls";
+import { Dialog } from "@/components/versions/Dialog";
+import { editorHref, VersionHistory, type VersionItem } from "@/components/versions/VersionHistory";
+import { formatDateTime } from "@/components/workspaces/format";
+import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
+import { can, type Role } from "@/lib/roles";
+import type { SketchStatus } from "@/lib/sketch-schemas";
+import { ForkDialog, useForkTargets } from "./ForkDialog";
+import { formatForce } from "./format";
+import { SketchDetailsForm } from "./SketchDetailsForm";
+import { StatusMark } from "./StatusMark";
+
+export type ForkOrigin =
+  | { visible: true; sketchId: string; title: string; workspaceId: string; versionNumber: number }
+  | { visible: false; title: string | null; versionNumber: number };
+
+export type SketchData = {
+  sketch: {
+    id: string;
+    workspaceId: string;
+    workspaceName: string;
+    title: string;
+    description: string;
+    tags: string[];
+    latestVersion: number;
+    createdAt: string;
+    createdBy: string | null;
+    updatedAt: string;
+    updatedBy: string | null;
+    role: Role;
+    forkedFrom: ForkOrigin | null;
+  };
+  latest: { number: number; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; message: string } | null;
+};
+
+export function ForkedFrom({ origin }: { origin: ForkOrigin }) {
+  if (origin.visible)
+    return (
+      <p className="text-sm text-ink-soft" data-testid="forked-from">
+        ⑂ Forked from{" "}
+        <Link href={`/workspaces/${origin.workspaceId}/sketches/${origin.sketchId}`} className="font-medium text-ink underline decoration-rule underline-offset-2 hover:decoration-ink">
+          {origin.title} v{origin.versionNumber}
+        </Link>
+      </p>
+    );
+  return (
+    <p className="text-sm text-ink-soft" data-testid="forked-from">
+      ⑂ Forked from {origin.title ? `“${origin.title}”` : "a sketch"} v{origin.versionNumber}, in a workspace you are not a member of
+    </p>
+  );
+}
+
+export function SketchScreen({ initial, extra }: { initial: SketchData; extra?: { reviewCell?: (v: VersionItem) => ReactNode; below?: ReactNode } }) {
+  const router = useRouter();
+  const path = `/api/sketches/${initial.sketch.id}`;
+  const q = useQuery({ queryKey: apiKey(path), queryFn: () => apiFetch<SketchData>(path), initialData: initial });
+  const { sketch, latest } = q.data;
+  const role = sketch.role;
+  const targets = useForkTargets();
+  const canFork = (targets.data?.length ?? 0) > 0;
+  const [editing, setEditing] = useState(false);
+  const [forking, setForking] = useState<number | null>(null);
+  const [deleting, setDeleting] = useState(false);
+  const base = `/workspaces/${sketch.workspaceId}/sketches/${sketch.id}`;
+
+  const remove = useMutation({
+    mutationFn: () => apiFetch(path, { method: "DELETE" }),
+    onSuccess: () => {
+      router.push(`/workspaces/${sketch.workspaceId}`);
+      router.refresh();
+    },
+  });
+
+  return (
+    <div className="space-y-6">
+      <div className="space-y-2">
+        <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">
+          <Link href={`/workspaces/${sketch.workspaceId}`} className="hover:text-ink">
+            {sketch.workspaceName}
+          </Link>{" "}
+          › Sketch
+        </p>
+        <div className="flex flex-wrap items-start justify-between gap-4">
+          <div className="min-w-0 space-y-1.5">
+            <h1 className="text-2xl font-semibold tracking-tight">{sketch.title}</h1>
+            {latest ? (
+              <p className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-ink-soft" data-testid="latest-summary">
+                <span>Latest: v{latest.number}</span>
+                <StatusMark status={latest.status} warnings={latest.warnings} />
+                <span>largest reaction {formatForce(latest.largestReaction)}</span>
+              </p>
+            ) : null}
+            {sketch.forkedFrom ? <ForkedFrom origin={sketch.forkedFrom} /> : null}
+          </div>
+          <div className="flex flex-wrap gap-2">
+            <Link href={editorHref(sketch.id, sketch.latestVersion, sketch.latestVersion)} className="rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft">
+              {can(role, "version.save") ? "Open in the editor" : "Open (read only)"}
+            </Link>
+            {canFork ? (
+              <Button tone="secondary" onClick={() => setForking(sketch.latestVersion)}>
+                Fork
+              </Button>
+            ) : null}
+            {can(role, "sketch.edit") && !editing ? (
+              <Button tone="secondary" onClick={() => setEditing(true)}>
+                Edit details
+              </Button>
+            ) : null}
+            {can(role, "sketch.delete") ? (
+              <Button tone="danger" onClick={() => setDeleting(true)}>
+                Delete
+              </Button>
+            ) : null}
+          </div>
+        </div>
+        {sketch.description && !editing ? <p className="max-w-3xl whitespace-pre-line text-sm text-ink-soft">{sketch.description}</p> : null}
+        {sketch.tags.length && !editing ? (
+          <ul className="flex flex-wrap gap-1" aria-label="Tags">
+            {sketch.tags.map((t) => (
+              <li key={t} className="rounded border border-rule bg-paper-deep/60 px-1.5 py-0.5 text-xs text-ink-soft">
+                {t}
+              </li>
+            ))}
+          </ul>
+        ) : null}
+        <p className="text-xs text-ink-faint">
+          Created {formatDateTime(sketch.createdAt)}
+          {sketch.createdBy ? ` by ${sketch.createdBy}` : ""} · updated {formatDateTime(sketch.updatedAt)}
+          {sketch.updatedBy ? ` by ${sketch.updatedBy}` : ""}
+        </p>
+      </div>
+
+      {editing ? (
+        <Panel title="Details">
+          <SketchDetailsForm sketchId={sketch.id} title={sketch.title} description={sketch.description} tags={sketch.tags} onDone={() => setEditing(false)} />
+        </Panel>
+      ) : null}
+
+      <Panel title="History" description="Every saved version, newest first. Saved versions never change; a new save makes a new version.">
+        <VersionHistory
+          sketchId={sketch.id}
+          latest={sketch.latestVersion}
+          canFork={canFork}
+          onFork={setForking}
+          reviewCell={extra?.reviewCell}
+          reviewHref={extra?.reviewCell ? (n) => `${base}/versions/${n}` : undefined}
+          compareHref={extra?.reviewCell ? (a, b) => `${base}/compare?from=${a}&to=${b}` : undefined}
+        />
+      </Panel>
+      {extra?.below}
+
+      {forking !== null ? (
+        <ForkDialog
+          open
+          onClose={() => setForking(null)}
+          sketchId={sketch.id}
+          sketchTitle={sketch.title}
+          version={forking}
+          defaultWorkspaceId={sketch.workspaceId}
+          onForked={(made) => router.push(`/workspaces/${made.sketch.workspaceId}/sketches/${made.sketch.id}`)}
+        />
+      ) : null}
+      <Dialog open={deleting} onClose={() => setDeleting(false)} title={`Delete “${sketch.title}”?`} testId="delete-dialog">
+        <div className="space-y-4 text-sm">
+          <p className="text-ink-soft">
+            All {sketch.latestVersion} version{sketch.latestVersion === 1 ? "" : "s"} go with it, for everyone in {sketch.workspaceName}. Forks elsewhere keep their own copies. This cannot be undone.
+          </p>
+          {remove.error ? <Notice tone="error">{remove.error instanceof ApiError ? remove.error.message : "Nothing was deleted."}</Notice> : null}
+          <div className="flex justify-end gap-2">
+            <Button tone="quiet" onClick={() => setDeleting(false)}>
+              Keep it
+            </Button>
+            <Button tone="danger" busy={remove.isPending} onClick={() => remove.mutate()}>
+              Delete the sketch
+            </Button>
+          </div>
+        </div>
+      </Dialog>
+    </div>
+  );
+}

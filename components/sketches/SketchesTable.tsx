@@ -1,0 +1,216 @@
+"use client";
+// The workspace's sketches: search, filter by tag and status, sort by column, page through.
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import Link from "next/link";
+import { useEffect, useState } from "react";
+import { Button, EmptyState, Notice, Select, Skeleton } from "@/components/shell/controls";
+import { formatDate, formatDateTime } from "@/components/workspaces/format";
+import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
+import { STATUS_ORDER, type SketchSort, type SketchStatus } from "@/lib/sketch-schemas";
+import { formatForce, timeAgo } from "./format";
+import { StatusMark } from "./StatusMark";
+
+export type SketchRow = {
+  id: string;
+  title: string;
+  tags: string[];
+  latestVersion: number;
+  status: SketchStatus | null;
+  largestReaction: number | null;
+  warnings: string[];
+  latestMessage: string;
+  updatedAt: string;
+  updatedBy: { id: string; name: string } | null;
+  forked: boolean;
+  approvedVersion?: number | null;
+};
+
+type Page = { items: SketchRow[]; total: number; page: number; pageSize: number; tags: string[] };
+type Filters = { q: string; tag: string; status: string; sort: SketchSort; dir: "asc" | "desc"; page: number };
+
+const PAGE_SIZE = 20;
+
+function useDebounced<T>(value: T, ms: number): T {
+  const [v, setV] = useState(value);
+  useEffect(() => {
+    const t = setTimeout(() => setV(value), ms);
+    return () => clearTimeout(t);
+  }, [value, ms]);
+  return v;
+}
+
+function SortHeader({ label, sort, filters, onSort, className = "" }: { label: string; sort: SketchSort; filters: Filters; onSort: (s: SketchSort) => void; className?: string }) {
+  const active = filters.sort === sort;
+  const ariaSort = active ? (filters.dir === "asc" ? "ascending" : "descending") : "none";
+  return (
+    <th scope="col" aria-sort={ariaSort} className={`py-2 pr-3 font-semibold ${className}`}>
+      <button type="button" onClick={() => onSort(sort)} className="inline-flex items-center gap-1 uppercase tracking-wider hover:text-ink">
+        {label}
+        <span aria-hidden="true" className={active ? "text-ink" : "text-rule"}>
+          {active && filters.dir === "asc" ? "▲" : "▼"}
+        </span>
+      </button>
+    </th>
+  );
+}
+
+export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string; canCreate: boolean }) {
+  const [filters, setFilters] = useState<Filters>({ q: "", tag: "", status: "", sort: "updated", dir: "desc", page: 1 });
+  const q = useDebounced(filters.q.trim(), 250);
+  const path = `/api/workspaces/${workspaceId}/sketches`;
+  const params = new URLSearchParams({ sort: filters.sort, dir: filters.dir, page: String(filters.page), pageSize: String(PAGE_SIZE) });
+  if (q) params.set("q", q);
+  if (filters.tag) params.set("tag", filters.tag);
+  if (filters.status) params.set("status", filters.status);
+  const query = useQuery({
+    queryKey: [...apiKey(path), Object.fromEntries(params)],
+    queryFn: () => apiFetch<Page>(`${path}?${params}`),
+    placeholderData: keepPreviousData,
+  });
+
+  const set = (patch: Partial<Filters>) => setFilters((f) => ({ ...f, page: 1, ...patch }));
+  const onSort = (sort: SketchSort) =>
+    setFilters((f) => ({ ...f, page: 1, sort, dir: f.sort === sort ? (f.dir === "asc" ? "desc" : "asc") : sort === "title" ? "asc" : "desc" }));
+  const filtered = Boolean(q || filters.tag || filters.status);
+  const data = query.data;
+
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-end gap-3" role="search" aria-label="Find sketches">
+        <div className="min-w-[14rem] flex-1 space-y-1">
+          <label htmlFor="sketch-search" className="block text-sm font-medium text-ink">
+            Search
+          </label>
+          <input
+            id="sketch-search"
+            type="search"
+            value={filters.q}
+            placeholder="Title, description or tag"
+            onChange={(e) => set({ q: e.target.value })}
+            className="block w-full rounded-md border border-rule bg-paper-card px-3 py-2 text-sm text-ink outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25"
+          />
+        </div>
+        <div className="w-40">
+          <Select id="sketch-tag" label="Tag" value={filters.tag} onChange={(e) => set({ tag: e.target.value })}>
+            <option value="">Any tag</option>
+            {(data?.tags ?? []).map((t) => (
+              <option key={t} value={t}>
+                {t}
+              </option>
+            ))}
+          </Select>
+        </div>
+        <div className="w-40">
+          <Select id="sketch-status" label="Status" value={filters.status} onChange={(e) => set({ status: e.target.value })}>
+            <option value="">Any status</option>
+            {STATUS_ORDER.map((s) => (
+              <option key={s} value={s}>
+                {s}
+              </option>
+            ))}
+          </Select>
+        </div>
+        {filtered ? (
+          <Button tone="quiet" onClick={() => set({ q: "", tag: "", status: "" })}>
+            Clear filters
+          </Button>
+        ) : null}
+      </div>
+
+      {query.isError ? (
+        <Notice tone="error" title="The sketches could not be loaded">
+          {query.error instanceof ApiError ? query.error.message : "Try again in a moment."}
+        </Notice>
+      ) : query.isPending ? (
+        <div className="space-y-2" aria-label="Loading the sketches">
+          {[0, 1, 2].map((i) => (
+            <Skeleton key={i} className="h-9 w-full" />
+          ))}
+        </div>
+      ) : data && data.items.length === 0 ? (
+        filtered ? (
+          <EmptyState title="No sketch matches">Nothing here has that text, tag and status. Clear the filters to see every sketch.</EmptyState>
+        ) : (
+          <EmptyState title="No sketches saved here yet">
+            {canCreate
+              ? "Start a sketch, then save it into this workspace. Its versions, checks and approvals will be listed here."
+              : "When an editor saves a sketch into this workspace, it will be listed here for you to read."}
+          </EmptyState>
+        )
+      ) : data ? (
+        <>
+          <div className="overflow-x-auto">
+            <table className="w-full text-sm" aria-busy={query.isFetching || undefined}>
+              <caption className="sr-only">Sketches in this workspace</caption>
+              <thead>
+                <tr className="border-b border-rule text-left text-xs text-ink-faint">
+                  <SortHeader label="Title" sort="title" filters={filters} onSort={onSort} />
+                  <SortHeader label="Status" sort="status" filters={filters} onSort={onSort} className="w-40" />
+                  <th scope="col" className="w-28 py-2 pr-3 text-right font-semibold uppercase tracking-wider">Largest reaction</th>
+                  <SortHeader label="Updated" sort="updated" filters={filters} onSort={onSort} className="w-44" />
+                  <th scope="col" className="py-2 font-semibold uppercase tracking-wider">Tags</th>
+                </tr>
+              </thead>
+              <tbody>
+                {data.items.map((s) => (
+                  <tr key={s.id} className="border-b border-rule-soft align-top last:border-0" data-testid={`sketch-row-${s.title}`}>
+                    <td className="py-2.5 pr-3">
+                      <Link href={`/workspaces/${workspaceId}/sketches/${s.id}`} className="font-medium text-ink underline decoration-rule underline-offset-2 hover:decoration-ink">
+                        {s.title}
+                      </Link>
+                      <span className="ml-2 text-xs text-ink-faint">v{s.latestVersion}</span>
+                      {s.approvedVersion ? (
+                        <span className="ml-2 rounded border border-reaction/40 px-1 text-[11px] font-medium text-reaction" title={`Version ${s.approvedVersion} is approved`}>
+                          ✓ v{s.approvedVersion} approved
+                        </span>
+                      ) : null}
+                      {s.forked ? <span className="ml-2 text-[11px] text-ink-faint" title="Forked from another sketch">⑂ fork</span> : null}
+                      {s.latestMessage ? <span className="block truncate text-xs text-ink-faint">{s.latestMessage}</span> : null}
+                    </td>
+                    <td className="py-2.5 pr-3">
+                      <StatusMark status={s.status} warnings={s.warnings} />
+                    </td>
+                    <td className="num py-2.5 pr-3 text-right text-ink">{formatForce(s.largestReaction)}</td>
+                    <td className="py-2.5 pr-3 text-ink-soft">
+                      <span title={formatDateTime(s.updatedAt)}>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
+                      {s.updatedBy ? <span className="block text-xs text-ink-faint">by {s.updatedBy.name}</span> : null}
+                    </td>
+                    <td className="py-2">
+                      <ul className="flex max-w-[14rem] flex-wrap gap-1">
+                        {s.tags.map((t) => (
+                          <li key={t}>
+                            <button
+                              type="button"
+                              onClick={() => set({ tag: t })}
+                              className="whitespace-nowrap rounded border border-rule bg-paper-deep/60 px-1.5 py-0.5 text-xs text-ink-soft hover:border-ink/40 hover:text-ink"
+                              title={`Show sketches tagged “${t}”`}
+                            >
+                              {t}
+                            </button>
+                          </li>
+                        ))}
+                      </ul>
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+          <div className="flex items-center justify-between gap-3 text-xs text-ink-faint">
+            <p aria-live="polite">
+              {(data.page - 1) * data.pageSize + 1}–{Math.min(data.page * data.pageSize, data.total)} of {data.total}
+            </p>
+            <div className="flex gap-2">
+              <Button size="sm" tone="secondary" disabled={data.page <= 1} onClick={() => setFilters((f) => ({ ...f, page: f.page - 1 }))}>
+                Previous
+              </Button>
+              <Button size="sm" tone="secondary" disabled={data.page * data.pageSize >= data.total} onClick={() => setFilters((f) => ({ ...f, page: f.page + 1 }))}>
+                Next
+              </Button>
+            </div>
+          </div>
+        </>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+"use client";
+// A modal dialog on the native <dialog> element: focus stays inside, Escape closes, the page
+// behind is inert. Used by the save, conflict, fork and sign-off dialogs.
+import { useEffect, useId, useRef, type ReactNode } from "react";
+
+export function Dialog({
+  open,
+  title,
+  onClose,
+  children,
+  wide = false,
+  testId,
+}: {
+  open: boolean;
+  title: string;
+  onClose: () => void;
+  children: ReactNode;
+  wide?: boolean;
+  testId?: string;
+}) {
+  const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+  useEffect(() => {
+    const d = ref.current;
+    if (!d) return;
+    if (open && !d.open) d.showModal();
+    if (!open && d.open) d.close();
+  }, [open]);
+  return (
+    <dialog
+      ref={ref}
+      aria-labelledby={titleId}
+      data-testid={testId}
+      onCancel={(e) => {
+        e.preventDefault();
+        onClose();
+      }}
+      className={`m-auto w-[calc(100%-2rem)] ${wide ? "max-w-2xl" : "max-w-md"} rounded-lg border border-rule bg-paper-card p-0 text-ink shadow-[0_12px_40px_rgba(29,35,41,0.22)] backdrop:bg-ink/30`}
+    >
+      {open ? (
+        <div className="p-5">
+          <h2 id={titleId} className="text-base font-semibold">
+            {title}
+          </h2>
+          <div className="mt-3">{children}</div>
+        </div>
+      ) : null}
+    </dialog>
+  );
+}
