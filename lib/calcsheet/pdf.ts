@@ -1,0 +1,291 @@
+import "server-only";
+// The calc sheet: a PDF of one saved version, made on the server with pdfkit. The drawing is
+// the shared SVG renderer's; tables come from solver/report.ts, so they match the screen.
+import { createRequire } from "node:module";
+import PDFDocument from "pdfkit";
+import SVGtoPDF from "svg-to-pdfkit";
+import { renderSketchSvg } from "@/canvas/render/svg";
+import {
+  ASSUMPTIONS,
+  CAUTIONS,
+  caseReactionTable,
+  envelopeTable,
+  findLimit,
+  formatNumber,
+  handCheckTable,
+  inputsTable,
+  parametersTable,
+  parseSketch,
+  solve,
+  solveCases,
+  solveSweep,
+  stabilityTable,
+  linspace,
+  describeQuantity,
+  readQuantity,
+  type Table,
+  type UnitSystem,
+  type SolveResult,
+} from "@/solver";
+import { lineChartSvg } from "./chart";
+
+const require = createRequire(import.meta.url);
+const FONT_REGULAR = require.resolve("@expo-google-fonts/inter/400Regular/Inter_400Regular.ttf");
+const FONT_SEMIBOLD = require.resolve("@expo-google-fonts/inter/600SemiBold/Inter_600SemiBold.ttf");
+
+export interface SignoffEntry {
+  role: "prepared" | "checked" | "approved";
+  name: string;
+  at: Date;
+}
+
+export interface CalcSheetInput {
+  workspace: string;
+  sketchTitle: string;
+  version: number;
+  versionMessage?: string;
+  savedAt: Date;
+  generatedAt?: Date;
+  /** prepared / checked / approved, when signed */
+  signoff: SignoffEntry[];
+  /** the saved sketch file */
+  file: unknown;
+  units?: UnitSystem;
+}
+
+const INK = "#1d2329";
+const SOFT = "#3d4650";
+const FAINT = "#6b7580";
+const RULE = "#cfc8b8";
+const ACCENT = "#b4462b";
+const CAUTION_BG = "#f6ebcf";
+
+const fmtDate = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
+
+export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
+  const units = input.units ?? "SI";
+  const parsed = parseSketch(input.file);
+  if (!parsed.ok) throw new Error(`the saved sketch does not parse: ${parsed.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`);
+  const result: SolveResult = solve(parsed.sketch);
+  result.warnings.unshift(...parsed.warnings);
+  const study = solveCases(parsed.file);
+
+  const doc = new PDFDocument({ size: "A4", margins: { top: 44, bottom: 54, left: 44, right: 44 }, bufferPages: true, info: { Title: `${input.sketchTitle} v${input.version}`, Author: "Counterpoise", Subject: "Calculation sheet" } });
+  doc.registerFont("Inter", FONT_REGULAR);
+  doc.registerFont("Inter-SemiBold", FONT_SEMIBOLD);
+  const chunks: Buffer[] = [];
+  doc.on("data", (c: Buffer) => chunks.push(c));
+  const done = new Promise<Buffer>((resolve) => doc.on("end", () => resolve(Buffer.concat(chunks))));
+  const left = doc.page.margins.left;
+  const width = doc.page.width - left - doc.page.margins.right;
+
+  const heading = (text: string) => {
+    ensureSpace(doc, 60);
+    doc.moveDown(0.6).font("Inter-SemiBold").fontSize(11.5).fillColor(INK).text(text, left, doc.y, { width });
+    doc.moveTo(left, doc.y + 2).lineTo(left + width, doc.y + 2).lineWidth(0.6).strokeColor(RULE).stroke();
+    doc.moveDown(0.5);
+  };
+  const para = (text: string, size = 9, color = SOFT) => doc.font("Inter").fontSize(size).fillColor(color).text(text, left, doc.y, { width });
+
+  // ---- title block
+  titleBlock(doc, input, left, width);
+
+  // ---- short cautions under the title block
+  cautionBox(doc, left, width, [CAUTIONS[0], CAUTIONS[1] + " " + CAUTIONS[2]]);
+
+  // ---- status
+  heading("Result");
+  for (const [id, b] of Object.entries(result.bodies)) {
+    para(`${id}: ${b.status} — ${b.determinacy.kind}${b.determinacy.degree ? ` (degree ${b.determinacy.degree})` : ""}; largest reaction ${formatNumber(b.largestReaction / (units === "SI" ? 1000 : 4.4482216152605), 4)} ${units === "SI" ? "kN" : "lbf"}`, 9.5, INK);
+  }
+  if (result.warnings.length) {
+    doc.moveDown(0.3);
+    for (const w of result.warnings) para(`${w.code}: ${w.message}`, 8.5, w.code === "SLIP" || w.code === "LIFTOFF" || w.code === "SLACK" ? ACCENT : SOFT);
+  }
+
+  // ---- drawing
+  heading("Free-body diagram (control volume)");
+  // svg-to-pdfkit ignores paint-order, so the paper-coloured halo behind labels would cover them
+  const svg = renderSketchSvg(parsed.file, result, { units, width: 900, height: 560 }).replace(/ stroke="#[0-9a-f]{6}" stroke-width="3" paint-order="stroke" stroke-linejoin="round"/g, "");
+  ensureSpace(doc, 320);
+  SVGtoPDF(doc, svg, left, doc.y, { width, height: width * (560 / 900), preserveAspectRatio: "xMidYMid meet", fontCallback: (family: string, bold: boolean) => (bold ? "Inter-SemiBold" : "Inter") });
+  doc.y += width * (560 / 900) + 6;
+  para("Solid arrows: applied loads. Dashed: momentum flux ṁV at the ports. Double lines: reactions found (forces on the body).", 8, FAINT);
+
+  // ---- inputs
+  heading("Inputs");
+  if (Object.keys(parsed.parameterValues).length) drawTable(doc, parametersTable(parsed), left, width, units, 7.5);
+  drawTable(doc, inputsTable(parsed), left, width, units, 7.5);
+
+  // ---- cases
+  if (parsed.file.cases?.length || parsed.file.combinations?.length) {
+    heading("Operating cases and combinations");
+    for (const c of parsed.file.cases ?? []) {
+      const over = Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${v}`);
+      const fac = Object.entries(c.factors ?? {}).map(([k, v]) => `${k} × ${v}`);
+      const bits = [...over, ...fac, ...(c.flowFactor !== undefined && c.flowFactor !== 1 ? [`flow × ${c.flowFactor}`] : [])];
+      para(`${c.name} (${c.id}): ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
+    }
+    for (const k of parsed.file.combinations ?? []) para(`${k.name} (${k.id}): ${k.terms.map((t) => `${t.factor} × ${t.case}`).join(" + ")}, solved as one factored load set`, 8.5, INK);
+  }
+
+  // ---- hand check
+  for (const bodyId of Object.keys(result.bodies)) {
+    heading(`Hand check — ${bodyId}`);
+    drawTable(doc, handCheckTable(result, bodyId, [0, 0], units), left, width, units, 7.5);
+  }
+
+  // ---- reactions per case, envelope, stability
+  heading("Reactions per case");
+  drawTable(doc, caseReactionTable(study, units), left, width, units, 7.5);
+  heading("Envelope and design loads");
+  drawTable(doc, envelopeTable(study, units), left, width, units, 7.5);
+  heading("Stability");
+  drawTable(doc, stabilityTable(study), left, width, units, 7.5);
+
+  // ---- sweeps
+  for (const sw of parsed.file.sweeps ?? []) {
+    ensureSpace(doc, 320);
+    heading(`Sweep of ${sw.parameter}`);
+    try {
+      const values = linspace(sw.from, sw.to, Math.min(sw.points, 400));
+      const res = solveSweep(parsed.sketch, sw.parameter, values);
+      const quantities = sw.quantities?.length ? sw.quantities : Object.keys(result.reactions).map((s) => ({ support: s, component: "resultant" as const }));
+      const toDisplay = units === "SI" ? 1 / 1000 : 1 / 4.4482216152605;
+      const series = quantities.map((q) => ({
+        label: describeQuantity(q),
+        markZero: q.component === "margin" || q.component === "frictionMargin",
+        points: res.points.map((p) => [p.value, p.ok ? readQuantity(p.result, q) * (q.component === "frictionRatio" ? 1 : toDisplay) : null] as [number, number | null]),
+      }));
+      const markers = quantities
+        .filter((q) => q.component === "margin" || q.component === "frictionMargin")
+        .flatMap((q) => {
+          const lim = findLimit(parsed.sketch, sw.parameter, [sw.from, sw.to], q);
+          return lim.found ? [{ x: lim.value, label: `${q.support} at ${formatNumber(lim.value, 4)} ${lim.unit}` }] : [];
+        });
+      const chart = lineChartSvg({ title: `${sw.parameter} from ${sw.from} to ${sw.to} ${res.unit}`, xLabel: `${sw.parameter}${res.unit ? ` (${res.unit})` : ""}`, yLabel: units === "SI" ? "kN" : "lbf", series, markers });
+      ensureSpace(doc, 280);
+      SVGtoPDF(doc, chart, left, doc.y, { width, height: width * (260 / 500), fontCallback: () => "Inter" });
+      doc.y += width * (260 / 500) + 4;
+      for (const mk of markers) para(`Crossing: ${mk.label}.`, 8.5, INK);
+    } catch (err) {
+      para(`This sweep could not be run: ${(err as Error).message}`, 8.5, ACCENT);
+    }
+  }
+
+  // ---- method, assumptions, cautions
+  heading("Method");
+  para(
+    "For each body, the linear momentum and moment-of-momentum equations of a control volume fixed to the body, in steady flow: ΣF(reactions) + ΣF(loads) + W + ΣF(pressure) − m·a = Σ(ṁV)out − Σ(ṁV)in, and the same for moments. Gauge pressure at a port pushes inward (p·A along the flow at an inlet, against it at an outlet). Supports are stiff springs on the rigid body: a statically determinate body's reactions follow from equilibrium alone; an indeterminate one's from the support stiffnesses. Contacts push only and ties pull only; a contact or tie that would have to pull or push is released (lifts, goes slack), and a body that no engagement can hold tips (the reactions shown are then those equilibrium would require with every support bilateral). Friction is checked (|t| ≤ μ·n), not enforced.",
+  );
+  heading("Assumptions");
+  for (const a of ASSUMPTIONS) para(`• ${a}`);
+  heading("Cautions");
+  cautionBox(doc, left, width, [...CAUTIONS]);
+
+  footer(doc, input);
+  doc.end();
+  return done;
+}
+
+function ensureSpace(doc: PDFKit.PDFDocument, needed: number) {
+  if (doc.y + needed > doc.page.height - doc.page.margins.bottom) doc.addPage();
+}
+
+function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number, width: number) {
+  const top = doc.y;
+  const h = 104;
+  doc.rect(left, top, width, h).lineWidth(1).strokeColor(INK).stroke();
+  const split = left + width * 0.52;
+  doc.moveTo(split, top).lineTo(split, top + h).lineWidth(0.6).stroke();
+  doc.font("Inter-SemiBold").fontSize(8).fillColor(ACCENT).text("COUNTERPOISE · CALCULATION SHEET", left + 10, top + 9, { width: split - left - 20 });
+  doc.font("Inter-SemiBold").fontSize(13).fillColor(INK).text(input.sketchTitle, left + 10, top + 24, { width: split - left - 20, height: 36, ellipsis: true });
+  doc.font("Inter").fontSize(8.5).fillColor(SOFT).text(`Workspace: ${input.workspace}`, left + 10, top + 62, { width: split - left - 20 });
+  doc.text(`Version ${input.version}${input.versionMessage ? ` — ${input.versionMessage}` : ""}`, left + 10, top + 74, { width: split - left - 20, height: 22, ellipsis: true });
+  const rows: Array<[string, string]> = [
+    ["Saved", fmtDate(input.savedAt)],
+    ["Printed", fmtDate(input.generatedAt ?? new Date())],
+  ];
+  for (const role of ["prepared", "checked", "approved"] as const) {
+    const s = input.signoff.find((x) => x.role === role);
+    rows.push([`${role[0].toUpperCase()}${role.slice(1)} by`, s ? `${s.name}, ${fmtDate(s.at)}` : "—"]);
+  }
+  rows.forEach(([k, v], i) => {
+    const y = top + 9 + i * 18.5;
+    doc.font("Inter").fontSize(7.5).fillColor(FAINT).text(k, split + 10, y, { width: 62 });
+    doc.font("Inter-SemiBold").fontSize(7.8).fillColor(INK).text(v, split + 72, y - 0.5, { width: left + width - split - 78, height: 12, lineBreak: false });
+  });
+  doc.y = top + h + 8;
+}
+
+function cautionBox(doc: PDFKit.PDFDocument, left: number, width: number, lines: string[]) {
+  const text = lines.join(" ");
+  doc.font("Inter").fontSize(8.5);
+  const h = doc.heightOfString(text, { width: width - 20 }) + 22;
+  ensureSpace(doc, h + 4);
+  const top = doc.y;
+  doc.rect(left, top, width, h).fillColor(CAUTION_BG).fill();
+  doc.font("Inter-SemiBold").fontSize(7.5).fillColor("#8a6212").text("ENGINEERING CAUTIONS", left + 10, top + 6, { width: width - 20 });
+  doc.font("Inter").fontSize(8.5).fillColor(INK).text(text, left + 10, top + 17, { width: width - 20 });
+  doc.y = top + h + 6;
+}
+
+function fmtCell(c: Table["rows"][number][number]): string {
+  if (c === null || c === undefined) return "—";
+  if (typeof c === "number") return formatNumber(c, 4);
+  return c;
+}
+
+function drawTable(doc: PDFKit.PDFDocument, t: Table, left: number, width: number, _units: UnitSystem, size: number) {
+  if (t.rows.length === 0) {
+    doc.font("Inter").fontSize(8.5).fillColor(FAINT).text("(none)", left, doc.y, { width });
+    return;
+  }
+  const headers = t.columns.map((c) => (c.unit ? `${c.label} (${c.unit})` : c.label));
+  const cells = t.rows.map((r) => r.map(fmtCell));
+  doc.font("Inter").fontSize(size);
+  // widths from content, shrunk to the page
+  const natural = headers.map((h, i) => Math.max(doc.widthOfString(h) + 8, ...cells.map((r) => Math.min(doc.widthOfString(r[i] ?? "") + 8, 220))));
+  const total = natural.reduce((a, b) => a + b, 0);
+  const widths = natural.map((w) => (w * width) / Math.max(total, width));
+  const rowHeight = (r: string[], font: string) => {
+    doc.font(font).fontSize(size);
+    return Math.max(...r.map((c, i) => doc.heightOfString(c, { width: widths[i] - 6 }))) + 5;
+  };
+  const drawRow = (r: string[], font: string, fill?: string) => {
+    const h = rowHeight(r, font);
+    if (doc.y + h > doc.page.height - doc.page.margins.bottom) {
+      doc.addPage();
+      drawRow(headers, "Inter-SemiBold", "#ece7dc");
+    }
+    const y = doc.y;
+    if (fill) doc.rect(left, y, width, h).fillColor(fill).fill();
+    let x = left;
+    r.forEach((c, i) => {
+      const align = t.columns[i].align ?? (font === "Inter-SemiBold" ? "left" : "right");
+      doc.font(font).fontSize(size).fillColor(INK).text(c, x + 3, y + 2.5, { width: widths[i] - 6, align });
+      x += widths[i];
+    });
+    doc.moveTo(left, y + h).lineTo(left + width, y + h).lineWidth(0.4).strokeColor(RULE).stroke();
+    doc.y = y + h;
+  };
+  drawRow(headers, "Inter-SemiBold", "#ece7dc");
+  cells.forEach((r) => drawRow(r, "Inter"));
+  for (const n of t.notes ?? []) doc.font("Inter").fontSize(7.5).fillColor(FAINT).text(n, left, doc.y + 3, { width });
+  doc.x = left;
+  doc.moveDown(0.4);
+}
+
+function footer(doc: PDFKit.PDFDocument, input: CalcSheetInput) {
+  const range = doc.bufferedPageRange();
+  for (let i = range.start; i < range.start + range.count; i++) {
+    doc.switchToPage(i);
+    const y = doc.page.height - 34;
+    const bottom = doc.page.margins.bottom;
+    doc.page.margins.bottom = 0;
+    doc.font("Inter").fontSize(7).fillColor(FAINT);
+    doc.text(`${input.sketchTitle} · v${input.version} · for design checking; review by a qualified engineer required; local codes govern`, doc.page.margins.left, y, { width: 420, lineBreak: false });
+    doc.text(`page ${i + 1} of ${range.count}`, doc.page.width - doc.page.margins.right - 80, y, { width: 80, align: "right", lineBreak: false });
+    doc.page.margins.bottom = bottom;
+  }
+}

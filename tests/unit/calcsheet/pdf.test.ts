@@ -1,0 +1,72 @@
+// The calc sheet PDF: its text, extracted with pdfjs-dist, carries the title block, the hand-check
+// sums, the reactions with units, ṁ and μ in the embedded font, and the cautions.
+import { describe, expect, it } from "vitest";
+import { buildCalcSheet } from "@/lib/calcsheet/pdf";
+import { loadFixture } from "../solver/helpers";
+
+async function pdfText(buf: Buffer): Promise<{ text: string; pages: number }> {
+  const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
+  const doc = await pdfjs.getDocument({ data: new Uint8Array(buf), useSystemFonts: false, isEvalSupported: false }).promise;
+  let text = "";
+  for (let i = 1; i <= doc.numPages; i++) {
+    const page = await doc.getPage(i);
+    const content = await page.getTextContent();
+    text += content.items.map((it) => ("str" in it ? it.str : "")).join(" ") + "\n";
+  }
+  return { text: text.replace(/\s+/g, " "), pages: doc.numPages };
+}
+
+describe("calc sheet PDF", () => {
+  it("has the title block, inputs, hand check, reactions with units, cases, sweeps and cautions", async () => {
+    const file = loadFixture("fire-monitor-trailer.json");
+    file.cases = [
+      { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
+      { id: "high", name: "High throw", parameters: { theta: "60 deg" } },
+    ];
+    file.sweeps = [{ id: "sw", parameter: "theta", from: 0, to: 80, points: 41, quantities: [{ support: "jack", component: "margin" }] }];
+    const buf = await buildCalcSheet({
+      workspace: "Demo: Riverside Pump Station",
+      sketchTitle: "Monitor trailer",
+      version: 3,
+      versionMessage: "raised the riser to 2.8 m",
+      savedAt: new Date("2026-11-30T10:00:00Z"),
+      generatedAt: new Date("2026-12-01T08:00:00Z"),
+      signoff: [
+        { role: "prepared", name: "Eddie Editor", at: new Date("2026-11-30T10:00:00Z") },
+        { role: "checked", name: "Chen Checker", at: new Date("2026-11-30T15:30:00Z") },
+      ],
+      file,
+    });
+    expect(buf.subarray(0, 5).toString()).toBe("%PDF-");
+    const { text, pages } = await pdfText(buf);
+    expect(pages).toBeGreaterThan(1);
+    expect(text).toContain("COUNTERPOISE · CALCULATION SHEET");
+    expect(text).toContain("Monitor trailer");
+    expect(text).toContain("Workspace: Demo: Riverside Pump Station");
+    expect(text).toContain("Version 3 — raised the riser to 2.8 m");
+    expect(text).toMatch(/Prepared by Eddie Editor, 2026-11-30 10:00 UTC/);
+    expect(text).toMatch(/Checked by Chen Checker, 2026-11-30 15:30 UTC/);
+    expect(text).toMatch(/Approved by —/);
+    // the font carries Σ, ṁ and μ
+    expect(text).toMatch(/ΣFx = 4\.847 kN and Σ\(ṁV\)x = 4\.847 kN/);
+    expect(text).toContain("total Σ(ṁV)out − Σ(ṁV)in");
+    expect(text).toContain("μ·n");
+    // reactions with units
+    expect(text).toMatch(/Fx \(kN\)/);
+    expect(text).toMatch(/Design load \(kN\)/);
+    expect(text).toContain("Low throw");
+    expect(text).toContain("High throw");
+    expect(text).toMatch(/Sweep of theta/);
+    expect(text).toMatch(/Crossing: jack at \d+(\.\d+)? deg/);
+    // cautions
+    expect(text).toContain("must be reviewed by a qualified engineer");
+    expect(text).toContain("Local codes, standards and licensed engineering practice govern");
+    expect(text).toContain("water hammer");
+  }, 60000);
+
+  it("US customary units on request", async () => {
+    const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Bend", version: 1, savedAt: new Date(), signoff: [], file: loadFixture("pipe-bend-anchor.json"), units: "US" });
+    const { text } = await pdfText(buf);
+    expect(text).toMatch(/Fx \(lbf\)/);
+  }, 60000);
+});
