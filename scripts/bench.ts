@@ -27,7 +27,7 @@ export function benchSketch(n: number): SketchFileInput {
   supports!.push({ id: "anchor", body: "b", kind: "pin", at: [5, 0] });
   return {
     format: "counterpoise.sketch",
-    version: 1,
+    version: 1 as unknown as SketchFileInput["version"],
     parameters: { theta: "20 deg" },
     bodies: [{ id: "b", outline: [[0, 0], [w, 0], [w, 2], [0, 2]], mass: 5000 }],
     supports,

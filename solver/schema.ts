@@ -6,8 +6,9 @@ import { z } from "zod";
 
 export const FORMAT = "counterpoise.sketch";
 /** The newest format version this solver writes. Older files are migrated (solver/migrations).
- *  1: the published contract. 2: load groups, operating cases, combinations, stability requirements. */
-export const CURRENT_VERSION = 1;
+ *  1: the published contract. 2: load groups, operating cases, combinations, saved sweeps,
+ *  stability requirements. 3: the underlay. */
+export const CURRENT_VERSION = 3;
 
 const numeric = z.union([z.number(), z.string().min(1, { error: "is empty: give a number or an expression" })], {
   error: (iss) =>

@@ -3,6 +3,8 @@
 // its step here (solver/migrations/NNN-<what>.ts) with a test of its own.
 import { CURRENT_VERSION, FORMAT } from "../schema";
 import type { FieldError } from "../types";
+import { loadCases } from "./002-load-cases";
+import { underlay } from "./003-underlay";
 
 export interface Migration {
   from: number;
@@ -11,7 +13,7 @@ export interface Migration {
   up: (doc: Record<string, unknown>) => Record<string, unknown>;
 }
 
-export const MIGRATIONS: readonly Migration[] = [];
+export const MIGRATIONS: readonly Migration[] = [loadCases, underlay];
 
 export type MigrateResult = { ok: true; doc: Record<string, unknown>; applied: number[] } | { ok: false; errors: FieldError[] };
 
