@@ -2,6 +2,7 @@
 // The editor's header: the sketch's name and where it is kept, File and Examples menus, undo
 // and redo, the view, snapping and the SI / US switch. Every button runs a registered action.
 import Link from "next/link";
+import type { ReactNode } from "react";
 import { ACTIONS, shortcutLabel } from "@/canvas/actions";
 import { useEditor } from "@/canvas/context";
 import { EXAMPLES } from "@/canvas/examples";
@@ -38,7 +39,7 @@ export function UnitSwitch() {
   );
 }
 
-export function Toolbar({ where, saved, onOpenExample }: { where: string; saved: string | null; onOpenExample: (id: string) => void }) {
+export function Toolbar({ where, saved, onOpenExample, extra }: { where: string; saved: string | null; onOpenExample: (id: string) => void; extra?: ReactNode }) {
   const run = useActionRunner();
   const canUndo = useEditor((s) => s.past.length > 0);
   const canRedo = useEditor((s) => s.future.length > 0);
@@ -101,6 +102,7 @@ export function Toolbar({ where, saved, onOpenExample }: { where: string; saved:
       <div className="ml-3">
         <UnitSwitch />
       </div>
+      {extra}
     </header>
   );
 }

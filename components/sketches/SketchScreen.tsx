@@ -12,6 +12,7 @@ import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
 import type { SketchStatus } from "@/lib/sketch-schemas";
 import { ForkDialog, useForkTargets } from "./ForkDialog";
+import { ForkGlyph } from "./ForkGlyph";
 import { formatForce } from "./format";
 import { SketchDetailsForm } from "./SketchDetailsForm";
 import { StatusMark } from "./StatusMark";
@@ -43,7 +44,7 @@ export function ForkedFrom({ origin }: { origin: ForkOrigin }) {
   if (origin.visible)
     return (
       <p className="text-sm text-ink-soft" data-testid="forked-from">
-        ⑂ Forked from{" "}
+        <ForkGlyph /> Forked from{" "}
         <Link href={`/workspaces/${origin.workspaceId}/sketches/${origin.sketchId}`} className="font-medium text-ink underline decoration-rule underline-offset-2 hover:decoration-ink">
           {origin.title} v{origin.versionNumber}
         </Link>
@@ -51,7 +52,7 @@ export function ForkedFrom({ origin }: { origin: ForkOrigin }) {
     );
   return (
     <p className="text-sm text-ink-soft" data-testid="forked-from">
-      ⑂ Forked from {origin.title ? `“${origin.title}”` : "a sketch"} v{origin.versionNumber}, in a workspace you are not a member of
+      <ForkGlyph /> Forked from {origin.title ? `“${origin.title}”` : "a sketch"} v{origin.versionNumber}, in a workspace you are not a member of
     </p>
   );
 }

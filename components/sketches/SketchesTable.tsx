@@ -7,6 +7,7 @@ import { Button, EmptyState, Notice, Select, Skeleton } from "@/components/shell
 import { formatDate, formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { STATUS_ORDER, type SketchSort, type SketchStatus } from "@/lib/sketch-schemas";
+import { ForkGlyph } from "./ForkGlyph";
 import { formatForce, timeAgo } from "./format";
 import { StatusMark } from "./StatusMark";
 
@@ -164,7 +165,11 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                           ✓ v{s.approvedVersion} approved
                         </span>
                       ) : null}
-                      {s.forked ? <span className="ml-2 text-[11px] text-ink-faint" title="Forked from another sketch">⑂ fork</span> : null}
+                      {s.forked ? (
+                        <span className="ml-2 inline-flex items-center gap-0.5 text-[11px] text-ink-faint" title="Forked from another sketch">
+                          <ForkGlyph /> fork
+                        </span>
+                      ) : null}
                       {s.latestMessage ? <span className="block truncate text-xs text-ink-faint">{s.latestMessage}</span> : null}
                     </td>
                     <td className="py-2.5 pr-3">

@@ -1,11 +1,7 @@
 "use client";
-// A saved sketch. Until the versions API plugs its SketchPersistence in here, every id answers
-// "not found" with a way to sign in or start a scratch sketch.
-import { useState } from "react";
-import { Editor } from "@/components/editor/Editor";
-import { unavailablePersistence } from "@/canvas/persistence";
+// A saved sketch: the versions work's persistence and toolbar (components/versions/editor).
+import { SavedSketchEditor } from "@/components/versions/editor/SavedSketchEditor";
 
 export function SavedSketchClient({ id }: { id: string }) {
-  const [persistence] = useState(() => unavailablePersistence(id));
-  return <Editor persistence={persistence} />;
+  return <SavedSketchEditor id={id} />;
 }

@@ -1,0 +1,197 @@
+"use client";
+// The editor's save dialog (a message for the new version) and the conflict dialog (someone
+// saved since: save as a fork, or keep the work here, reload the latest and compare).
+import { useState } from "react";
+import { ForkDialog, type ForkResult } from "@/components/sketches/ForkDialog";
+import { formatDateTime } from "@/components/workspaces/format";
+import { Button, Notice } from "@/components/shell/controls";
+import { apiFetch, ApiError } from "@/lib/api-client";
+import type { SketchFile } from "@/solver/schema";
+import { Dialog } from "../Dialog";
+
+export type LatestVersion = { number: number; message: string; authorName: string | null; createdAt: string };
+export type SavedVersion = { number: number; createdAt: string };
+
+export function saveVersionRequest(sketchId: string, baseVersion: number, message: string, document: SketchFile) {
+  return apiFetch<{ version: SavedVersion }>(`/api/sketches/${sketchId}/versions`, { method: "POST", body: { baseVersion, message, document } });
+}
+
+/** Field errors of a refused sketch, as lines people can read. */
+export function problemLines(err: ApiError): string[] {
+  return err.fields.slice(0, 6).map((f) => `${f.path.replace(/^document\.?/, "") || "sketch"}: ${f.message}`);
+}
+
+export function SaveDialog({
+  open,
+  base,
+  title,
+  busy,
+  error,
+  onSave,
+  onCancel,
+}: {
+  open: boolean;
+  base: number;
+  title: string;
+  busy: boolean;
+  error: ApiError | null;
+  onSave: (message: string) => void;
+  onCancel: () => void;
+}) {
+  const [message, setMessage] = useState("");
+  return (
+    <Dialog open={open} onClose={onCancel} title={`Save version ${base + 1} of “${title}”`} testId="save-dialog">
+      <form
+        className="space-y-4"
+        onSubmit={(e) => {
+          e.preventDefault();
+          onSave(message.trim());
+        }}
+      >
+        <p className="text-sm text-ink-soft">
+          The new version goes on top of v{base}. Saved versions never change, so say what this one changes: the checker reads it in the history.
+        </p>
+        <div className="space-y-1">
+          <label htmlFor="version-message" className="block text-sm font-medium text-ink">
+            What changed
+          </label>
+          <textarea
+            id="version-message"
+            rows={3}
+            maxLength={500}
+            value={message}
+            autoFocus
+            placeholder="e.g. moved the anchor 0.3 m east"
+            onChange={(e) => setMessage(e.target.value)}
+            onKeyDown={(e) => {
+              if (e.key === "Enter" && (e.metaKey || e.ctrlKey)) onSave(message.trim());
+            }}
+            className="block w-full rounded-md border border-rule bg-paper-card px-3 py-2 text-sm text-ink outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25"
+          />
+        </div>
+        {error ? (
+          <Notice tone="error" title={error.fields.length ? "The sketch was not saved: some fields are not valid" : "The sketch was not saved"}>
+            {error.fields.length ? (
+              <ul className="list-disc pl-4">
+                {problemLines(error).map((l) => (
+                  <li key={l}>{l}</li>
+                ))}
+              </ul>
+            ) : (
+              error.message
+            )}
+          </Notice>
+        ) : null}
+        <div className="flex justify-end gap-2">
+          <Button type="button" tone="quiet" onClick={onCancel}>
+            Cancel
+          </Button>
+          <Button type="submit" busy={busy}>
+            Save v{base + 1}
+          </Button>
+        </div>
+      </form>
+    </Dialog>
+  );
+}
+
+export function ConflictDialog({
+  open,
+  base,
+  latest,
+  onFork,
+  onReload,
+  onKeepEditing,
+}: {
+  open: boolean;
+  base: number;
+  latest: LatestVersion;
+  onFork: () => void;
+  onReload: () => void;
+  onKeepEditing: () => void;
+}) {
+  return (
+    <Dialog open={open} onClose={onKeepEditing} title="Someone saved a newer version" testId="conflict-dialog" wide>
+      <div className="space-y-4 text-sm">
+        <p className="text-ink">
+          <strong>{latest.authorName ?? "Someone"}</strong> saved <strong>v{latest.number}</strong> on {formatDateTime(latest.createdAt)}, after you opened v{base}
+          {latest.message ? (
+            <>
+              : <q>{latest.message}</q>
+            </>
+          ) : null}
+          .
+        </p>
+        <p className="text-ink-soft">Nothing was overwritten, and your changes are still here. Choose what to do with them:</p>
+        <ul className="space-y-3">
+          <li className="rounded-md border border-rule p-3">
+            <Button onClick={onFork}>Save as a fork</Button>
+            <p className="mt-1.5 text-ink-soft">A new sketch that starts from v{base} and saves your changes as its next version. This sketch stays as it is.</p>
+          </li>
+          <li className="rounded-md border border-rule p-3">
+            <Button tone="secondary" onClick={onReload}>
+              Reload and compare
+            </Button>
+            <p className="mt-1.5 text-ink-soft">Your changes are kept in this browser; the editor opens v{latest.number}, and you can compare the two and bring your changes back on top.</p>
+          </li>
+        </ul>
+        <div className="flex justify-end">
+          <Button tone="quiet" onClick={onKeepEditing}>
+            Keep editing without saving
+          </Button>
+        </div>
+      </div>
+    </Dialog>
+  );
+}
+
+/** Fork the version the edits started from, then save the edits as the fork's v2. */
+export function ForkAndSave({
+  open,
+  sketchId,
+  title,
+  base,
+  sketch,
+  message,
+  defaultWorkspaceId,
+  onClose,
+  onDone,
+}: {
+  open: boolean;
+  sketchId: string;
+  title: string;
+  base: number;
+  sketch: SketchFile;
+  message: string;
+  defaultWorkspaceId: string;
+  onClose: () => void;
+  onDone: (made: ForkResult, version: SavedVersion) => void;
+}) {
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <>
+      <ForkDialog
+        open={open}
+        onClose={onClose}
+        sketchId={sketchId}
+        sketchTitle={title}
+        version={base}
+        defaultWorkspaceId={defaultWorkspaceId}
+        intro={`The fork starts from v${base}, the version your changes were made on, and your changes become its v2. This sketch stays as it is.`}
+        onForked={async (made) => {
+          try {
+            const saved = await saveVersionRequest(made.sketch.id, 1, message || "My changes, saved as a fork after a conflict", sketch);
+            onDone(made, saved.version);
+          } catch (err) {
+            setError(`The fork was made, but your changes could not be saved into it: ${err instanceof ApiError ? err.message : "try again"}. They are still in the editor.`);
+          }
+        }}
+      />
+      {error ? (
+        <Dialog open onClose={() => setError(null)} title="Your changes are still here">
+          <Notice tone="error">{error}</Notice>
+        </Dialog>
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,192 @@
+"use client";
+// The saved sketch's corner of the editor's toolbar: which version is open, whether there are
+// unsaved changes, the Save button, and the save, conflict and kept-work dialogs.
+import Link from "next/link";
+import { useEffect, useRef, useState } from "react";
+import { useStore } from "zustand";
+import { useEditor, useStores } from "@/canvas/context";
+import { useActionRunner } from "@/components/editor/useActions";
+import { Providers } from "@/components/shell/Providers";
+import { formatDateTime } from "@/components/workspaces/format";
+import { ApiError } from "@/lib/api-client";
+import { can } from "@/lib/roles";
+import { discardDraft, keepDraft, readDraft, type Draft } from "./drafts";
+import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
+import type { SaveFlow } from "./savedPersistence";
+
+const CHIP = "h-7 rounded px-2.5 text-[12.5px] font-medium";
+
+function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; latest: number; workspaceId: string; onDiscard: () => void }) {
+  return (
+    <div role="status" data-testid="kept-work" className="fixed bottom-10 right-4 z-40 max-w-sm rounded-lg border border-caution/40 bg-caution-soft p-3 text-[13px] text-ink shadow-[0_6px_24px_rgba(29,35,41,0.14)]">
+      <p className="font-semibold">Your unsaved changes are kept in this browser</p>
+      <p className="mt-1 text-ink-soft">
+        Made on v{draft.baseVersion}, kept {formatDateTime(draft.keptAt)}. The editor shows v{latest}.
+      </p>
+      <div className="mt-2 flex flex-wrap gap-2">
+        <Link href={`/workspaces/${workspaceId}/sketches/${draft.sketchId}/compare?from=${latest}&to=draft`} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
+          Compare v{latest} with them
+        </Link>
+        <a href={`/sketches/${draft.sketchId}?restore=1`} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+          Bring them back
+        </a>
+        <button type="button" onClick={onDiscard} className="rounded-md px-2 py-1 text-ink-soft hover:text-ink">
+          Discard
+        </button>
+      </div>
+    </div>
+  );
+}
+
+function Bar({ flow }: { flow: SaveFlow }) {
+  const { info, base, pending, lastSaved, restored } = useStore(flow);
+  const stores = useStores();
+  const run = useActionRunner();
+  const revision = useEditor((s) => s.revision);
+  const [clean, setClean] = useState(revision);
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<ApiError | null>(null);
+  const [conflict, setConflict] = useState<{ latest: LatestVersion; message: string } | null>(null);
+  const [forking, setForking] = useState(false);
+  // the Bar mounts once the sketch has loaded, so `info` is known here
+  const [draft, setDraft] = useState<Draft | null>(() => (info && !restored ? readDraft(info.sketchId) : null));
+  const dirty = revision !== clean || restored;
+  const leaving = useRef(false);
+  const leave = (href: string) => {
+    leaving.current = true;
+    window.location.assign(href);
+  };
+
+  useEffect(() => {
+    flow.setState({ notice: (text) => stores.editor.getState().notify(text) });
+  }, [flow, stores]);
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (e: BeforeUnloadEvent) => {
+      if (!leaving.current) e.preventDefault();
+    };
+    window.addEventListener("beforeunload", warn);
+    return () => window.removeEventListener("beforeunload", warn);
+  }, [dirty]);
+
+  if (!info || base === null) return null;
+  const canSave = can(info.role, "version.save");
+  const settle = (outcome: Parameters<NonNullable<typeof pending>["resolve"]>[0]) => {
+    pending?.resolve(outcome);
+    flow.setState({ pending: null });
+  };
+
+  const save = async (message: string) => {
+    if (!pending) return;
+    setBusy(true);
+    setError(null);
+    try {
+      const { version } = await saveVersionRequest(info.sketchId, base, message, pending.sketch);
+      flow.setState({ base: version.number, lastSaved: { number: version.number, at: version.createdAt }, info: { ...info, latest: version.number }, restored: false });
+      if (restored) discardDraft(info.sketchId);
+      setClean(stores.editor.getState().revision);
+      stores.editor.getState().notify(`Saved as v${version.number}.`);
+      settle({ ok: true, version: version.number, savedAt: version.createdAt });
+    } catch (err) {
+      const e = err instanceof ApiError ? err : new ApiError(0, "network", "The sketch could not be saved.");
+      if (e.code === "version_conflict") {
+        setConflict({ latest: e.detail.latest as LatestVersion, message });
+      } else if (e.status === 401) {
+        keepDraft({ sketchId: info.sketchId, baseVersion: base, latestVersion: base, message, sketch: pending.sketch });
+        setError(new ApiError(401, "unauthenticated", "Your session has ended. Your changes are kept in this browser: sign in again and bring them back."));
+      } else setError(e);
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <div className="ml-3 flex items-center gap-2" data-testid="version-bar">
+      <span className="num text-[12px] text-ink-faint" data-testid="version-label">
+        {restored ? `kept changes on v${base}` : `v${base}${base < info.latest ? ` of ${info.latest}` : ""}`}
+        {dirty && canSave ? <span className="ml-1.5 text-caution">● unsaved</span> : null}
+        {lastSaved && !dirty ? <span className="ml-1.5">✓ saved</span> : null}
+      </span>
+      {canSave ? (
+        <button type="button" onClick={() => run("file.save")} className={`${CHIP} bg-ink text-paper hover:bg-ink-soft`} data-testid="save-version">
+          Save version
+        </button>
+      ) : (
+        <span className={`${CHIP} inline-flex items-center border border-rule text-ink-soft`} title="Your role reads sketches but does not save versions" data-testid="read-only">
+          Read only · {info.role}
+        </span>
+      )}
+      <Link href={`/workspaces/${info.workspaceId}/sketches/${info.sketchId}`} className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45`}>
+        History
+      </Link>
+
+      {pending && !conflict && !forking ? (
+        <SaveDialog
+          open
+          base={base}
+          title={info.title}
+          busy={busy}
+          error={error}
+          onSave={save}
+          onCancel={() => {
+            setError(null);
+            stores.editor.getState().notify("Not saved; your changes are still here.");
+            settle({ ok: false, reason: "error", message: "Not saved; your changes are still here." });
+          }}
+        />
+      ) : null}
+      {conflict && pending && !forking ? (
+        <ConflictDialog
+          open
+          base={base}
+          latest={conflict.latest}
+          onFork={() => setForking(true)}
+          onReload={() => {
+            keepDraft({ sketchId: info.sketchId, baseVersion: base, latestVersion: conflict.latest.number, message: conflict.message, sketch: pending.sketch });
+            leave(`/sketches/${info.sketchId}`);
+          }}
+          onKeepEditing={() => {
+            setConflict(null);
+            stores.editor.getState().notify(`Not saved: v${conflict.latest.number} is newer than the v${base} you are editing. Your changes are still here.`);
+            settle({ ok: false, reason: "conflict", message: "Not saved: someone saved a newer version.", latestVersion: conflict.latest.number });
+          }}
+        />
+      ) : null}
+      {forking && pending ? (
+        <ForkAndSave
+          open
+          sketchId={info.sketchId}
+          title={info.title}
+          base={base}
+          sketch={pending.sketch}
+          message={conflict?.message ?? ""}
+          defaultWorkspaceId={info.workspaceId}
+          onClose={() => setForking(false)}
+          onDone={(made) => {
+            leave(`/sketches/${made.sketch.id}`);
+          }}
+        />
+      ) : null}
+      {draft && !restored ? (
+        <KeptWork
+          draft={draft}
+          latest={info.latest}
+          workspaceId={info.workspaceId}
+          onDiscard={() => {
+            discardDraft(info.sketchId);
+            setDraft(null);
+          }}
+        />
+      ) : null}
+    </div>
+  );
+}
+
+/** The toolbar slot of a saved sketch (its own query client: the editor page has none). */
+export function SavedSketchBar({ flow }: { flow: SaveFlow }) {
+  return (
+    <Providers>
+      <Bar flow={flow} />
+    </Providers>
+  );
+}

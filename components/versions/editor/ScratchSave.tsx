@@ -1,0 +1,118 @@
+"use client";
+// Save the scratch sketch of /sketches/new into a workspace: signed in, pick the workspace (one
+// where you may create sketches), a title and a message; signed out, sign in first (the
+// scratch sketch waits in this browser) and come back with the dialog open.
+import { useMutation } from "@tanstack/react-query";
+import Link from "next/link";
+import { useRouter, useSearchParams } from "next/navigation";
+import { useState } from "react";
+import { useStores } from "@/canvas/context";
+import { useForkTargets } from "@/components/sketches/ForkDialog";
+import { Button, Field, Notice, Select } from "@/components/shell/controls";
+import { Providers } from "@/components/shell/Providers";
+import { apiFetch, ApiError } from "@/lib/api-client";
+import { Dialog } from "../Dialog";
+import { problemLines } from "./SaveDialogs";
+
+type Created = { sketch: { id: string; workspaceId: string; title: string } };
+
+function SaveToWorkspace({ onClose }: { onClose: () => void }) {
+  const stores = useStores();
+  const router = useRouter();
+  const params = useSearchParams();
+  const targets = useForkTargets();
+  const sketch = stores.editor.getState().sketch;
+  const [workspaceId, setWorkspaceId] = useState(params.get("workspace") ?? "");
+  const [title, setTitle] = useState(sketch.title?.trim() || "Untitled sketch");
+  const [message, setMessage] = useState("First version");
+  const chosen = targets.data?.some((w) => w.id === workspaceId) ? workspaceId : (targets.data?.[0]?.id ?? "");
+  const create = useMutation({
+    mutationFn: () =>
+      apiFetch<Created>(`/api/workspaces/${chosen}/sketches`, {
+        method: "POST",
+        body: { title: title.trim(), message: message.trim(), document: stores.editor.getState().sketch },
+      }),
+    onSuccess: (made) => router.push(`/sketches/${made.sketch.id}`),
+  });
+  const signedOut = targets.error instanceof ApiError && targets.error.status === 401;
+  const err = create.error instanceof ApiError ? create.error : null;
+
+  if (signedOut) {
+    return (
+      <Dialog open onClose={onClose} title="Sign in to save this sketch" testId="scratch-save-dialog">
+        <div className="space-y-4 text-sm">
+          <p className="text-ink-soft">Saved sketches live in a workspace, with versions your colleagues can check. Your sketch stays in this browser while you sign in.</p>
+          <div className="flex justify-end gap-2">
+            <Button tone="quiet" onClick={onClose}>
+              Not now
+            </Button>
+            <Link href={`/sign-in?next=${encodeURIComponent("/sketches/new?save=1")}`} className="rounded-md bg-ink px-4 py-2 font-medium text-paper hover:bg-ink-soft">
+              Sign in
+            </Link>
+          </div>
+        </div>
+      </Dialog>
+    );
+  }
+  return (
+    <Dialog open onClose={onClose} title="Save to a workspace" testId="scratch-save-dialog">
+      <form
+        className="space-y-4"
+        onSubmit={(e) => {
+          e.preventDefault();
+          create.mutate();
+        }}
+      >
+        {targets.data && targets.data.length === 0 ? (
+          <Notice tone="info">You are not an editor or owner of any workspace yet. Create one from your workspaces page.</Notice>
+        ) : (
+          <Select id="save-workspace" label="Workspace" value={chosen} onChange={(e) => setWorkspaceId(e.target.value)} disabled={!targets.data}>
+            {(targets.data ?? []).map((w) => (
+              <option key={w.id} value={w.id}>
+                {w.name}
+                {w.personal ? " (personal)" : ""}
+              </option>
+            ))}
+          </Select>
+        )}
+        <Field id="save-title" label="Title" value={title} maxLength={120} onChange={(e) => setTitle(e.target.value)} error={err?.field("title")} />
+        <Field id="save-message" label="Message of version 1" value={message} maxLength={500} onChange={(e) => setMessage(e.target.value)} error={err?.field("message")} />
+        {err && !err.field("title") && !err.field("message") ? (
+          <Notice tone="error" title="The sketch was not saved">
+            {err.fields.length ? problemLines(err).join("; ") : err.message}
+          </Notice>
+        ) : null}
+        <div className="flex justify-end gap-2">
+          <Button type="button" tone="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" busy={create.isPending} disabled={!chosen}>
+            Save as version 1
+          </Button>
+        </div>
+      </form>
+    </Dialog>
+  );
+}
+
+function ScratchSaveButton() {
+  const params = useSearchParams();
+  const [open, setOpen] = useState(params.get("save") === "1");
+  return (
+    <div className="ml-3">
+      <button type="button" onClick={() => setOpen(true)} className="h-7 rounded bg-ink px-2.5 text-[12.5px] font-medium text-paper hover:bg-ink-soft" data-testid="save-to-workspace">
+        Save to a workspace
+      </button>
+      {open ? <SaveToWorkspace onClose={() => setOpen(false)} /> : null}
+    </div>
+  );
+}
+
+/** The scratch sketch's corner of the editor's toolbar. */
+export function ScratchSave() {
+  return (
+    <Providers>
+      <ScratchSaveButton />
+    </Providers>
+  );
+}

@@ -1,0 +1,89 @@
+// The editor's persistence for a saved sketch, over the versions API: load a version, and save
+// the next one on top of it. Saving asks for a message first and may meet a conflict; those
+// steps are shown by <SavedSketchBar>, which reads and answers the controller's state.
+import { createStore, type StoreApi } from "zustand/vanilla";
+import type { LoadOutcome, SaveOutcome, SketchPersistence } from "@/canvas/persistence";
+import { apiFetch, ApiError } from "@/lib/api-client";
+import { can, type Role } from "@/lib/roles";
+import type { SketchFile } from "@/solver/schema";
+import { readDraft } from "./drafts";
+
+export type SketchInfo = { sketchId: string; workspaceId: string; workspaceName: string; title: string; role: Role; latest: number };
+
+export type SaveFlowState = {
+  info: SketchInfo | null;
+  /** the version the editor's sketch is based on (the next save names it) */
+  base: number | null;
+  /** a save the user started: the message dialog is open until it resolves */
+  pending: { sketch: SketchFile; resolve: (o: SaveOutcome) => void } | null;
+  /** the last version saved from this page */
+  lastSaved: { number: number; at: string } | null;
+  /** the editor shows kept work (restored draft) instead of a saved version */
+  restored: boolean;
+  /** the editor's status line (set by the toolbar slot once it is mounted) */
+  notice?: (text: string) => void;
+};
+
+export type SaveFlow = StoreApi<SaveFlowState>;
+
+type SketchResponse = { sketch: { id: string; workspaceId: string; workspaceName: string; title: string; role: Role; latestVersion: number } };
+type VersionResponse = { version: { number: number; document: SketchFile } };
+
+export function createSaveFlow(): SaveFlow {
+  return createStore<SaveFlowState>(() => ({ info: null, base: null, pending: null, lastSaved: null, restored: false }));
+}
+
+function loadFailure(err: unknown): LoadOutcome {
+  if (err instanceof ApiError && err.status === 401) return { ok: false, reason: "signed-out", message: "Sign in to open this sketch." };
+  if (err instanceof ApiError && err.status === 404)
+    return {
+      ok: false,
+      reason: "not-found",
+      message: "This sketch does not exist, or you are not a member of its workspace. Saved sketches belong to a workspace: sign in with an account that is a member of it.",
+    };
+  return { ok: false, reason: "unavailable", message: err instanceof ApiError ? err.message : "The sketch could not be loaded. Try again in a moment." };
+}
+
+/**
+ * `version`: open that version instead of the latest. `restore`: open the work kept in this
+ * browser (after a conflict) on top of the latest version.
+ */
+export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { version?: number; restore?: boolean } = {}): SketchPersistence {
+  return {
+    kind: "saved",
+    autosave: false,
+    describe() {
+      const info = flow.getState().info;
+      return info ? `${info.title} · ${info.workspaceName}` : "Saved sketch";
+    },
+    async load() {
+      try {
+        const { sketch: s } = await apiFetch<SketchResponse>(`/api/sketches/${sketchId}`);
+        const info: SketchInfo = { sketchId, workspaceId: s.workspaceId, workspaceName: s.workspaceName, title: s.title, role: s.role, latest: s.latestVersion };
+        const draft = opts.restore ? readDraft(sketchId) : null;
+        if (draft) {
+          flow.setState({ info, base: s.latestVersion, restored: true });
+          return { ok: true, sketch: draft.sketch, version: s.latestVersion, readOnly: !can(s.role, "version.save") };
+        }
+        const number = opts.version && opts.version <= s.latestVersion ? opts.version : s.latestVersion;
+        const { version } = await apiFetch<VersionResponse>(`/api/sketches/${sketchId}/versions/${number}`);
+        flow.setState({ info, base: version.number, restored: false });
+        return { ok: true, sketch: version.document, version: version.number, readOnly: !can(s.role, "version.save") };
+      } catch (err) {
+        return loadFailure(err);
+      }
+    },
+    save(sketch) {
+      const { info, pending } = flow.getState();
+      if (!info) return Promise.resolve({ ok: false, reason: "error", message: "The sketch has not finished loading." });
+      if (!can(info.role, "version.save")) {
+        const message = `Not saved: as ${info.role} in ${info.workspaceName} you read sketches but do not save versions.`;
+        // after the editor's own "Saving…", which it writes once this call returns
+        setTimeout(() => flow.getState().notice?.(message), 0);
+        return Promise.resolve({ ok: false, reason: "forbidden", message });
+      }
+      if (pending) return Promise.resolve({ ok: false, reason: "error", message: "A save is already waiting for its message." });
+      return new Promise<SaveOutcome>((resolve) => flow.setState({ pending: { sketch, resolve } }));
+    },
+  };
+}

@@ -1,0 +1,158 @@
+// Versions in Chromium: an editor saves a scratch sketch into a workspace (v1) and a change (v2)
+// and sees the history; a checker reads but cannot save; a viewer has no way to edit; an
+// outsider gets the not-found page; two people saving on the same version meet the conflict
+// dialog, and "save as a fork" keeps the second person's work.
+import { randomBytes } from "node:crypto";
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { BASE_URL, shot } from "./browser";
+import { makeCast, openEditor, retitle, saveVersion, signInAs, type Cast } from "./versions-helpers";
+
+const tag = randomBytes(3).toString("hex");
+
+describe("versioned sketches in the browser", () => {
+  let cast: Cast;
+  let ws = "";
+  let sketchId = "";
+  const open: BrowserContext[] = [];
+  const as = async (who: keyof Cast): Promise<Page> => {
+    const s = await signInAs(cast[who]);
+    open.push(s.ctx);
+    return s.page;
+  };
+
+  beforeAll(async () => {
+    ({ cast, ws } = await makeCast(tag, { editor: "Eddie Drafter", owner: "Olive Lead" }));
+  });
+  afterAll(async () => {
+    for (const c of open) await c.close();
+  });
+
+  it("saves the scratch sketch into a workspace as v1, then a change as v2, and shows the history", async () => {
+    const page = await as("editor");
+    await page.goto(`${BASE_URL}/workspaces/${ws}`);
+    await page.getByRole("link", { name: "Start a sketch" }).click();
+    await page.waitForURL(/\/sketches\/new\?workspace=/);
+    await page.getByTestId("menu-examples").click();
+    await page.getByTestId("menu-example-pipe-bend-anchor").click();
+    await page.getByTestId("save-to-workspace").click();
+    const dialog = page.getByTestId("scratch-save-dialog");
+    await dialog.locator(`option[value="${ws}"]`).waitFor({ state: "attached" });
+    expect(await dialog.getByLabel("Workspace").inputValue()).toBe(ws);
+    await dialog.getByLabel("Title").fill(`Bend on anchor ${tag}`);
+    await shot(page, "versions-01-save-scratch");
+    await dialog.getByRole("button", { name: "Save as version 1" }).click();
+    await page.waitForURL(/\/sketches\/[0-9a-f-]{36}$/);
+    sketchId = page.url().split("/").pop()!;
+    await page.getByTestId("version-bar").waitFor();
+    expect(await page.getByTestId("version-label").textContent()).toBe("v1");
+
+    await retitle(page, "Bend at the hydrotest pressure");
+    expect(await page.getByTestId("version-label").textContent()).toContain("unsaved");
+    await page.getByTestId("save-version").click();
+    await page.getByTestId("save-dialog").getByLabel("What changed").fill("Hydrotest case: 9 bar at the inlet");
+    await shot(page, "versions-02-save-dialog");
+    await page.getByTestId("save-dialog").getByRole("button", { name: "Save v2" }).click();
+    await page.getByText("✓ saved").waitFor();
+    expect(await page.getByTestId("version-label").textContent()).toBe("v2✓ saved");
+    await shot(page, "versions-03-saved-v2");
+
+    await page.getByRole("link", { name: "History" }).click();
+    await page.waitForURL(new RegExp(`/workspaces/${ws}/sketches/${sketchId}$`));
+    await page.getByTestId("version-row-2").waitFor();
+    expect(await page.getByTestId("version-row-2").textContent()).toContain("Hydrotest case: 9 bar at the inlet");
+    expect(await page.getByTestId("version-row-2").textContent()).toContain("Eddie Drafter");
+    expect(await page.getByTestId("version-row-1").textContent()).toContain("First version");
+    await shot(page, "versions-04-history");
+
+    await page.goto(`${BASE_URL}/workspaces/${ws}`);
+    const row = page.getByTestId(`sketch-row-Bend on anchor ${tag}`);
+    await row.waitFor();
+    expect(await row.textContent()).toContain("v2");
+    expect(await row.textContent()).toContain("holds");
+    await shot(page, "versions-05-dashboard");
+  });
+
+  it("a checker reads the sketch but cannot save a version", async () => {
+    const page = await as("checker");
+    await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    await page.getByTestId("version-row-2").waitFor();
+    expect(await page.getByRole("button", { name: "Edit details" }).count()).toBe(0);
+    await page.getByRole("link", { name: "Open (read only)" }).click();
+    await page.getByTestId("version-bar").waitFor();
+    expect(await page.getByTestId("read-only").textContent()).toBe("Read only · checker");
+    expect(await page.getByTestId("save-version").count()).toBe(0);
+    await page.keyboard.press("ControlOrMeta+s");
+    await page.getByTestId("notice").getByText("Not saved: as checker").waitFor();
+    expect(await page.getByTestId("save-dialog").count()).toBe(0);
+    await shot(page, "versions-06-checker-read-only");
+  });
+
+  it("a viewer has no way to edit or save", async () => {
+    const page = await as("viewer");
+    await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    await page.getByTestId("version-row-2").waitFor();
+    for (const name of ["Edit details", "Delete"]) expect(await page.getByRole("button", { name, exact: true }).count()).toBe(0);
+    // forking is still open to them: into their own personal workspace, where they are the owner
+    await page.getByRole("button", { name: "Fork", exact: true }).click();
+    const fork = page.getByTestId("fork-dialog");
+    await fork.locator("option").first().waitFor({ state: "attached" });
+    expect(await fork.getByLabel("Into the workspace").locator("option").allTextContents()).toEqual([expect.stringContaining("(personal)")]);
+    await fork.getByRole("button", { name: "Cancel" }).click();
+    await openEditor(page, sketchId);
+    expect(await page.getByTestId("read-only").textContent()).toBe("Read only · viewer");
+    expect(await page.getByTestId("save-version").count()).toBe(0);
+  });
+
+  it("an outsider gets the not-found page and an editor that cannot open the sketch", async () => {
+    const page = await as("outsider");
+    await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    await page.getByText("No such workspace here").waitFor();
+    expect(await page.content()).not.toContain("Bend on anchor");
+    await page.goto(`${BASE_URL}/sketches/${sketchId}`);
+    await page.getByTestId("unavailable-message").waitFor();
+    expect(await page.getByTestId("unavailable-message").textContent()).toContain("you are not a member of its workspace");
+    await shot(page, "versions-07-outsider");
+  });
+
+  it("two people saving on v2: the second meets the conflict dialog and keeps the work as a fork", async () => {
+    const lead = await as("owner");
+    const drafter = await as("editor");
+    await openEditor(lead, sketchId);
+    await openEditor(drafter, sketchId);
+
+    await retitle(lead, "Bend, lead's revision");
+    await saveVersion(lead, "Anchor block enlarged");
+    await lead.getByText("✓ saved").waitFor();
+
+    await retitle(drafter, "Bend, drafter's revision");
+    await saveVersion(drafter, "Thicker wall at the outlet");
+    const conflict = drafter.getByTestId("conflict-dialog");
+    await conflict.waitFor();
+    expect(await conflict.textContent()).toContain("Olive Lead saved v3");
+    expect(await conflict.textContent()).toContain("Anchor block enlarged");
+    await shot(drafter, "versions-08-conflict");
+
+    await conflict.getByRole("button", { name: "Save as a fork" }).click();
+    const fork = drafter.getByTestId("fork-dialog");
+    await fork.getByLabel("Title of the fork").fill(`Drafter's bend ${tag}`);
+    await shot(drafter, "versions-09-fork-dialog");
+    await fork.getByRole("button", { name: "Fork" }).click();
+    await drafter.waitForURL((u) => /\/sketches\/[0-9a-f-]{36}$/.test(u.pathname) && !u.pathname.endsWith(sketchId));
+    await drafter.getByTestId("version-bar").waitFor();
+    expect(await drafter.getByTestId("version-label").textContent()).toBe("v2");
+    expect(await drafter.getByTestId("sketch-form").getByLabel("Title").inputValue()).toBe("Bend, drafter's revision");
+
+    await drafter.getByRole("link", { name: "History" }).click();
+    await drafter.getByTestId("forked-from").waitFor();
+    expect(await drafter.getByTestId("forked-from").textContent()).toContain(`Bend on anchor ${tag} v2`);
+    expect(await drafter.getByTestId("version-row-2").textContent()).toContain("Thicker wall at the outlet");
+    await shot(drafter, "versions-10-fork-history");
+
+    // the original is untouched by the drafter: v3 is the lead's
+    await lead.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    await lead.getByTestId("version-row-3").waitFor();
+    expect(await lead.getByTestId("version-row-3").textContent()).toContain("Anchor block enlarged");
+    expect(await lead.getByTestId("version-row-4").count()).toBe(0);
+  });
+});
