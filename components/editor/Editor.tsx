@@ -4,7 +4,7 @@
 // by a SketchPersistence (local storage for the scratch sketch; the versions API later).
 import dynamic from "next/dynamic";
 import Link from "next/link";
-import { useCallback, useEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useRef, useState, type ReactNode } from "react";
 import { EditorProvider, useEditor, useStores } from "@/canvas/context";
 import { createEditorStore, type EditorStore } from "@/canvas/store";
 import { createInteractionStore } from "@/canvas/konva/interaction";
@@ -50,7 +50,7 @@ function StatusLine() {
   );
 }
 
-function Workspace({ persistence, saved }: { persistence: SketchPersistence; saved: string | null }) {
+function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPersistence; saved: string | null; toolbarExtra?: ReactNode }) {
   const stores = useStores();
   const [interaction] = useState(createInteractionStore);
   const controllerRef = useRef<PointerController | null>(null);
@@ -99,7 +99,7 @@ function Workspace({ persistence, saved }: { persistence: SketchPersistence; sav
   return (
     <ActionContextCtx.Provider value={getCtx}>
       <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
-        <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} />
+        <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} />
         <div className="flex min-h-0 flex-1">
           <aside className="flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper" aria-label="Add and elements">
             <Tray />
@@ -176,7 +176,8 @@ export function SketchUnavailable({ message }: { message: string }) {
   );
 }
 
-export function Editor({ persistence, example }: { persistence: SketchPersistence; example?: string }) {
+/** `toolbarExtra`: what the page adds at the toolbar's end (the versions work: save, version, history). */
+export function Editor({ persistence, example, toolbarExtra }: { persistence: SketchPersistence; example?: string; toolbarExtra?: ReactNode }) {
   const [store] = useState(() => createEditorStore());
   const [phase, setPhase] = useState<{ kind: "loading" } | { kind: "ready" } | { kind: "failed"; message: string }>({ kind: "loading" });
   const saved = useAutosave(store, persistence, phase.kind === "ready");
@@ -210,7 +211,7 @@ export function Editor({ persistence, example }: { persistence: SketchPersistenc
   if (phase.kind === "loading") return <div className="flex min-h-screen items-center justify-center text-sm text-ink-faint">Opening the sketch…</div>;
   return (
     <EditorProvider editor={store}>
-      <Workspace persistence={persistence} saved={saved} />
+      <Workspace persistence={persistence} saved={saved} toolbarExtra={toolbarExtra} />
     </EditorProvider>
   );
 }
