@@ -103,7 +103,14 @@ export interface Scene {
   bodies: SceneBody[];
   items: SceneItem[];
   byId: Map<string, SceneElement>;
+  /** ids in drawing order; the same array objects while the ids do not change (narrow redraws) */
+  bodyIds?: readonly string[];
+  itemIds?: readonly string[];
 }
+
+let lastBodyIds: readonly string[] = [];
+let lastItemIds: readonly string[] = [];
+const sameIds = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((x, i) => x === b[i]);
 
 type Reader = (raw: unknown, field: string) => number;
 
@@ -199,6 +206,19 @@ export function sceneItem(kind: ElementKind, el: AnyElement, fv: FieldValues, bo
   }
 }
 
+/** Same numbers, same scene object: a new analysis with unchanged values must not redraw anything. */
+function sameValue(a: unknown, b: unknown): boolean {
+  if (a === b) return true;
+  if (typeof a === "number" && typeof b === "number") return Number.isNaN(a) && Number.isNaN(b);
+  if (Array.isArray(a) && Array.isArray(b)) return a.length === b.length && a.every((x, i) => sameValue(x, b[i]));
+  if (a && b && typeof a === "object" && typeof b === "object") {
+    const ka = Object.keys(a);
+    const kb = Object.keys(b);
+    return ka.length === kb.length && ka.every((k) => sameValue((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k]));
+  }
+  return false;
+}
+
 interface CacheEntry {
   fv: FieldValues;
   body?: SceneBody;
@@ -217,6 +237,7 @@ export function buildScene(file: SketchFile, fv: FieldValues = NO_VALUES): Scene
     if (hit && (hit.fv === fv || !dependsOnValues(b))) s = hit.scene as SceneBody;
     else {
       s = sceneBody(b, fv);
+      if (hit && sameValue(s, hit.scene)) s = hit.scene as SceneBody;
       cache.set(b, { fv, scene: s });
     }
     bodies.push(s);
@@ -232,13 +253,18 @@ export function buildScene(file: SketchFile, fv: FieldValues = NO_VALUES): Scene
       if (hit && hit.body === body && (hit.fv === fv || !dependsOnValues(el))) s = hit.scene as SceneItem;
       else {
         s = sceneItem(kind, el, fv, body);
+        if (hit && sameValue(s, hit.scene)) s = hit.scene as SceneItem;
         cache.set(el, { fv, body, scene: s });
       }
       items.push(s);
       if (!byId.has(el.id)) byId.set(el.id, s);
     }
   }
-  return { bodies, items, byId };
+  const bodyIds = bodies.map((b) => b.id);
+  const itemIds = items.map((i) => i.id);
+  if (!sameIds(bodyIds, lastBodyIds)) lastBodyIds = bodyIds;
+  if (!sameIds(itemIds, lastItemIds)) lastItemIds = itemIds;
+  return { bodies, items, byId, bodyIds: lastBodyIds, itemIds: lastItemIds };
 }
 
 /** The point an element is held by: where a drag snaps and the outline's "at". */

@@ -55,13 +55,23 @@ export const syncRunner: Runner = (sketch, done) => done(analyseCore(sketch));
  * A runner backed by a worker: one sketch in flight at a time; while it is solved, only the
  * newest change waits (a drag's intermediate frames are skipped, never queued).
  */
-export function workerRunner(worker: Worker): Runner {
+export function workerRunner(worker: Worker, schedule: (fn: () => void) => void = afterFrame): Runner {
   let seq = 0;
   let inFlight: { seq: number; done: (c: AnalysisCore) => void } | null = null;
   let waiting: { sketch: SketchFile; done: (c: AnalysisCore) => void } | null = null;
+  let posting = false;
   const send = (sketch: SketchFile, done: (c: AnalysisCore) => void) => {
     inFlight = { seq: ++seq, done };
     worker.postMessage({ seq: inFlight.seq, sketch });
+  };
+  // copying the sketch to the worker costs ~1 ms for 200 elements: do it after the frame
+  // that shows the change, not between the pointer move and that frame
+  const post = () => {
+    posting = false;
+    if (inFlight || !waiting) return;
+    const w = waiting;
+    waiting = null;
+    send(w.sketch, w.done);
   };
   worker.onmessage = (e: MessageEvent<{ seq: number; core: AnalysisCore }>) => {
     if (!inFlight || e.data.seq !== inFlight.seq) return;
@@ -69,16 +79,24 @@ export function workerRunner(worker: Worker): Runner {
     inFlight = null;
     // deliver every answer (it is newer than what is on screen), then solve the newest change
     finished.done(e.data.core);
-    if (waiting) {
-      const w = waiting;
-      waiting = null;
-      send(w.sketch, w.done);
+    if (waiting && !posting) {
+      posting = true;
+      schedule(post);
     }
   };
   return (sketch, done) => {
-    if (inFlight) waiting = { sketch, done };
-    else send(sketch, done);
+    waiting = { sketch, done };
+    if (!inFlight && !posting) {
+      posting = true;
+      schedule(post);
+    }
   };
+}
+
+/** Run after the next frame has been drawn. */
+export function afterFrame(fn: () => void): void {
+  if (typeof requestAnimationFrame === "undefined") setTimeout(fn, 0);
+  else requestAnimationFrame(() => setTimeout(fn, 0));
 }
 
 export function createAnalysisStore(): AnalysisStore {

@@ -9,5 +9,5 @@ export function fitScene(scene: Scene, width: number, height: number): View {
   // symbols and labels do not scale: keep a generous margin for them
   // reactions hang below the supports and jets leave above: more room at the bottom and top
   const k = Math.min(1, Math.min(width, height) / 600);
-  return fitView(box, width, height, { top: 90 * k, right: 130 * k, bottom: 150 * k, left: 130 * k });
+  return fitView(box, width, height, { top: 100 * k, right: 160 * k, bottom: 165 * k, left: 160 * k });
 }

@@ -2,10 +2,9 @@
 // The canvas: a react-konva stage with four layers — the drafting grid, the drawing (one node
 // per element), the solve's results, and the interaction overlay (handles, snap, band, drafts).
 // Pointer input goes to the controller in pointer.ts; this component only wires it up.
-import { useEffect, useRef, useState, type DragEvent } from "react";
+import { useEffect, useMemo, useRef, useState, type DragEvent } from "react";
 import { Group, Layer, Shape, Stage } from "react-konva";
 import type Konva from "konva";
-import { useShallow } from "zustand/react/shallow";
 import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
 import { useEditor, useStores } from "../context";
@@ -22,6 +21,7 @@ import { PointerOverlay, ResultsShape, SelectionHandles } from "./overlays";
 import { createPointerController, type HitInfo, type PointerController } from "./pointer";
 import { TRAY_MIME, type InteractionStore } from "./interaction";
 import { resolveCanvasFont } from "./font";
+import { CanvasLegend } from "./CanvasLegend";
 
 
 
@@ -71,10 +71,14 @@ function Grid({ width, height }: { width: number; height: number }) {
   );
 }
 
-function Elements() {
-  const bodyIds = useStores().scene;
-  const bodies = useStore(bodyIds, useShallow((s) => s.bodies.map((b) => b.id)));
-  const items = useStore(bodyIds, useShallow((s) => s.items.map((i) => i.id)));
+/** The elements of one layer: those not lifted (drawing layer), or only the lifted ones (interaction layer). */
+function Elements({ interaction, lifted }: { interaction: InteractionStore; lifted: boolean }) {
+  const sceneStore = useStores().scene;
+  const up = useStore(interaction, (s) => s.lifted);
+  const bodyIds = useStore(sceneStore, (s) => s.bodyIds ?? s.bodies.map((b) => b.id));
+  const itemIds = useStore(sceneStore, (s) => s.itemIds ?? s.items.map((i) => i.id));
+  const bodies = useMemo(() => bodyIds.filter((id) => up.has(id) === lifted), [bodyIds, up, lifted]);
+  const items = useMemo(() => itemIds.filter((id) => up.has(id) === lifted), [itemIds, up, lifted]);
   return (
     <>
       {bodies.map((id) => (
@@ -222,6 +226,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
       aria-label="Drawing of the free-body diagram"
       aria-describedby="canvas-help"
       data-testid="sketch-canvas"
+      data-view={`${view.scale} ${view.x} ${view.y}`}
       onDragOver={(e) => {
         if (e.dataTransfer.types.includes(TRAY_MIME)) {
           e.preventDefault();
@@ -237,7 +242,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
           </Layer>
           <Layer listening={!dragging} onDraw={() => queueMicrotask(markFrame)}>
             <Group x={view.x} y={view.y}>
-              <Elements />
+              <Elements interaction={interaction} lifted={false} />
             </Group>
           </Layer>
           <Layer listening={false} onDraw={() => queueMicrotask(markFrame)}>
@@ -245,14 +250,16 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
               <ResultsShape />
             </Group>
           </Layer>
-          <Layer>
+          <Layer onDraw={() => queueMicrotask(markFrame)}>
             <Group x={view.x} y={view.y}>
+              <Elements interaction={interaction} lifted />
               <SelectionHandles />
               <PointerOverlay interaction={interaction} />
             </Group>
           </Layer>
         </Stage>
       )}
+      <CanvasLegend />
     </div>
   );
 }

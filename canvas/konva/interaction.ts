@@ -18,10 +18,14 @@ export interface InteractionState {
   /** true while a drag is in progress (the drawing layer stops hit-testing) */
   dragging: boolean;
   panning: boolean;
+  /** elements a drag is changing: drawn on the interaction layer, so the drawing layer (every other element) is not redrawn each frame */
+  lifted: ReadonlySet<string>;
 }
 
+export const NOTHING_LIFTED: ReadonlySet<string> = new Set();
+
 export const createInteractionStore = () =>
-  createStore<InteractionState>(() => ({ hover: null, snap: null, band: null, rect: null, spaceHeld: false, dragging: false, panning: false }));
+  createStore<InteractionState>(() => ({ hover: null, snap: null, band: null, rect: null, spaceHeld: false, dragging: false, panning: false, lifted: NOTHING_LIFTED }));
 
 export type InteractionStore = ReturnType<typeof createInteractionStore>;
 

@@ -4,6 +4,7 @@
 import { memo, useMemo } from "react";
 import { Circle, Group, Line, Rect, Shape, Text } from "react-konva";
 import { useStore } from "zustand";
+import { useShallow } from "zustand/react/shallow";
 import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useScene, useStores } from "../context";
 import { DIRECTED } from "../model/elements";
@@ -12,7 +13,7 @@ import { itemPrims } from "../render/symbols";
 import { dir } from "../render/prims";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
 import { angleOnEdge, bodyAt } from "../placement";
-import { anchorOf, type SceneItem } from "../scene";
+import { anchorOf, type Scene, type SceneBody, type SceneItem } from "../scene";
 import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
@@ -21,10 +22,18 @@ import { handleSign } from "./pointer";
 const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
 export const ROTATE_HANDLE_PX = 66;
 
+const DRAWN_WITH_RESULTS = new Set(["pin", "roller", "contact", "fixed", "tie", "inlet", "outlet"]);
+
 export const ResultsShape = memo(function ResultsShape() {
   const shown = useAnalysis((s) => s.shown);
   const stale = useAnalysis((s) => s.stale);
-  const scene = useScene((s) => s);
+  // only what the results are drawn at: dragging a load does not redraw this layer until its result arrives
+  const parts = useScene(useShallow((s) => [...s.bodies, ...s.items.filter((i) => DRAWN_WITH_RESULTS.has(i.kind))]));
+  const scene = useMemo<Scene>(() => {
+    const bodies = parts.filter((p): p is SceneBody => p.kind === "body");
+    const items = parts.filter((p): p is SceneItem => p.kind !== "body");
+    return { bodies, items, byId: new Map(parts.map((p) => [p.id, p])) };
+  }, [parts]);
   const scale = useEditor((s) => s.view.scale);
   const units = useEditor((s) => s.units);
   const prims = useMemo(() => (shown ? resultPrims(scene, shown, { units, scale, stale }).prims : []), [shown, scene, units, scale, stale]);

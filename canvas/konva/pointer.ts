@@ -7,7 +7,7 @@ import { rotateElement, reshapeBody } from "../commands/shape";
 import { attachToBody } from "../commands/elements";
 import type { Command } from "../commands/define";
 import type { EditorStores } from "../context";
-import { findElement, type Attached } from "../model/elements";
+import { childrenOf, findElement, type Attached } from "../model/elements";
 import { snapPoint, snapTo, type SnapResult } from "../geometry/snap";
 import { gridStep, toWorld, zoomAt } from "../geometry/view";
 import { angleOf } from "../geometry/polygon";
@@ -15,7 +15,7 @@ import { anchorOf, type SceneItem } from "../scene";
 import { bodyAt, bodyCommand, elementsInBox, placeCommand } from "../placement";
 import { rectangleOutline } from "../model/factory";
 import { markInput } from "../perf";
-import type { InteractionStore } from "./interaction";
+import { NOTHING_LIFTED, type InteractionStore } from "./interaction";
 
 export type HitInfo =
   | { type: "element"; id: string }
@@ -68,6 +68,17 @@ export function createPointerController(deps: PointerDeps) {
     return snapPoint(p, { bodies: scene.bodies, grid: gridStep(s.view.scale), tolerance: tolerance(), exclude, enabled: s.snap && !e.altKey });
   }
 
+  /** Draw these elements (and a moved body's elements) on the interaction layer while the drag lasts. */
+  function lift(ids: string[]) {
+    const sketch = ed().sketch;
+    const out = new Set<string>();
+    for (const id of ids) {
+      out.add(id);
+      if (findElement(sketch, id)?.group === "bodies") for (const c of childrenOf(sketch, id)) out.add(c.el.id);
+    }
+    interaction.setState({ lifted: out });
+  }
+
   const valueOf = (id: string, field: string) => stores.analysis.getState().fieldValues.values.get(`${id}.${field}`);
 
   function startWindowDrag() {
@@ -79,7 +90,7 @@ export function createPointerController(deps: PointerDeps) {
     window.removeEventListener("pointermove", onDragMove);
     window.removeEventListener("pointerup", onDragUp);
     window.removeEventListener("pointercancel", onDragCancel);
-    interaction.setState({ dragging: false, panning: false, band: null, rect: null });
+    interaction.setState({ dragging: false, panning: false, band: null, rect: null, lifted: NOTHING_LIFTED });
   }
 
   function down(e: PointerEvent) {
@@ -145,9 +156,11 @@ export function createPointerController(deps: PointerDeps) {
       const cartesian = item.kind === "force" && el && el.magnitude === undefined && el.angle === undefined;
       mode = { kind: "rotate", id: hit.id, anchor: anchorOf(item), flip: handleSign(item) < 0, magnitude: cartesian && item.kind === "force" ? item.magnitude : undefined };
       s.beginGesture("Turn");
+      lift([hit.id]);
     } else if (hit?.type === "corner") {
       mode = { kind: "corner", id: hit.id, index: hit.index };
       s.beginGesture("Reshape");
+      lift([hit.id]);
     } else if (hit?.type === "cg") {
       const b = stores.scene.getState().byId.get(hit.id);
       if (!b || b.kind !== "body") return;
@@ -184,6 +197,7 @@ export function createPointerController(deps: PointerDeps) {
         return;
       case "move": {
         if (!mode.moved && Math.hypot(screen[0] - downScreen[0], screen[1] - downScreen[1]) < DRAG_THRESHOLD_PX) return;
+        if (!mode.moved) lift(mode.ids);
         mode.moved = true;
         markInput(e.timeStamp);
         let delta: Vec2 = [world[0] - mode.start[0], world[1] - mode.start[1]];

@@ -42,10 +42,12 @@ function StatusLine() {
       : "Esc: back to selecting · Alt: no snapping";
   return (
     <div className="flex h-7 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px]" id="canvas-help">
-      <p className="truncate text-ink-soft" aria-live="polite" data-testid="notice">
+      <p className="min-w-0 flex-1 truncate text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? undefined}>
         {notice}
       </p>
-      <p className="ml-auto truncate text-ink-faint">{hint}</p>
+      <p className="min-w-0 max-w-[55%] truncate text-right text-ink-faint" title={hint}>
+        {hint}
+      </p>
     </div>
   );
 }

@@ -1,5 +1,6 @@
 "use client";
 // The properties of one element: its name, the body it belongs to, and each field of its kind.
+import { useDeferredValue } from "react";
 import type { Numeric } from "@/solver/schema";
 import { useAnalysis, useEditor, useScene, useStores } from "@/canvas/context";
 import { findElement, KIND_LABEL, type Attached, type BodyEl } from "@/canvas/model/elements";
@@ -149,7 +150,8 @@ function PortFlow({ id }: { id: string }) {
 }
 
 export function ElementForm({ id }: { id: string }) {
-  const located = useEditor((s) => findElement(s.sketch, id));
+  // deferred: while a drag moves this element, its frames come before the form's x and y
+  const located = useDeferredValue(useEditor((s) => findElement(s.sketch, id)));
   const bodies = useEditor((s) => s.sketch.bodies);
   const elementError = useAnalysis((s) => s.fieldValues.errors.get(id));
   const { editor } = useStores();

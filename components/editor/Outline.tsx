@@ -1,7 +1,7 @@
 "use client";
 // "Elements": every element, grouped under its body, for selecting and editing without a mouse.
 // Up/Down move between rows, Enter or Space selects (Shift or Ctrl adds), Delete deletes.
-import { useRef, type KeyboardEvent } from "react";
+import { useMemo, useRef, type KeyboardEvent } from "react";
 import { useShallow } from "zustand/react/shallow";
 import { useEditor, useStores } from "@/canvas/context";
 import { allElements, KIND_LABEL, type Attached, type Located } from "@/canvas/model/elements";
@@ -12,6 +12,13 @@ import { HEADING } from "./ui";
 interface Row {
   l: Located;
   depth: number;
+}
+
+/** A light stand-in for an element, rebuilt from the list's key. */
+function rowOf(key: string): Located {
+  const [id, kind, label, body, mu] = key.split("\u0000");
+  const el = { id, label: label || undefined, body: body || undefined, ...(mu === "1" ? { mu: 1 } : {}) } as unknown as Located["el"];
+  return { group: kind === "body" ? "bodies" : "supports", index: 0, kind: kind as Located["kind"], el };
 }
 
 function rowsOf(list: Located[]): Row[] {
@@ -28,7 +35,9 @@ function rowsOf(list: Located[]): Row[] {
 
 export function Outline() {
   const { editor } = useStores();
-  const list = useEditor(useShallow((s) => allElements(s.sketch)));
+  // a narrow selector: a drag changes positions, not the rows of this list
+  const keys = useEditor(useShallow((s) => allElements(s.sketch).map((l) => `${l.el.id}\u0000${l.kind}\u0000${l.el.label ?? ""}\u0000${(l.el as Attached).body ?? ""}\u0000${l.kind === "contact" && (l.el as { mu?: unknown }).mu !== undefined ? 1 : 0}`)));
+  const list = useMemo(() => keys.map(rowOf), [keys]);
   const selection = useEditor((s) => s.selection);
   const run = useActionRunner();
   const listRef = useRef<HTMLUListElement>(null);

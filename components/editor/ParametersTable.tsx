@@ -1,12 +1,12 @@
 "use client";
 // Parameters: named values every expression may use ("theta", "rho", "Q"). Name, expression, value.
 import { useId, useState } from "react";
-import { reservedNameReason } from "@/solver/expressions";
+import { evaluateToNumber, reservedNameReason, type FieldKind } from "@/solver/expressions";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { deleteParameter, renameParameter, setParameter } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
 import { numericText, toNumeric } from "@/canvas/model/numeric";
-import { formatNumber } from "@/solver/units";
+import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
 import { BUTTON, HEADING, ICON_BUTTON, INPUT } from "./ui";
 
 const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
@@ -14,6 +14,28 @@ const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
 /** mathjs writes "kg / m^3"; people write "kg/m³". */
 export function prettyUnit(u: string): string {
   return u.replace(/\s*\/\s*/g, "/").replace(/\^2\b/g, "²").replace(/\^3\b/g, "³").replace(/\s\*\s/g, "·");
+}
+
+const KINDS: Array<[FieldKind, Quantity]> = [
+  ["length", "length"], ["angle", "angle"], ["mass", "mass"], ["force", "force"], ["moment", "moment"], ["pressure", "pressure"],
+  ["velocity", "velocity"], ["massFlow", "massFlow"], ["volumeFlow", "volumeFlow"], ["area", "area"], ["density", "density"],
+  ["lineLoad", "lineLoad"], ["acceleration", "acceleration"],
+];
+
+/** A parameter's value in a unit people read: mathjs keeps "(bar^0.5 m^1.5)/kg^0.5" for √(p/ρ); that is a velocity. */
+export function readableValue(value: number, unit: string, units: UnitSystem): string {
+  if (!unit) return formatNumber(value);
+  const plain = /^[A-Za-z]+(\^[23])?(\s*\/\s*[A-Za-z]+(\^[23])?)?$/.test(unit);
+  if (plain) return `${formatNumber(value)} ${prettyUnit(unit)}`;
+  for (const [kind, q] of KINDS) {
+    try {
+      const si = evaluateToNumber(`${value} * (${unit})`, kind);
+      return formatQuantity(si, q, units);
+    } catch {
+      // not this dimension
+    }
+  }
+  return `${formatNumber(value)} ${prettyUnit(unit)}`;
 }
 
 export function nameProblem(name: string, taken: string[], self?: string): string | null {
@@ -29,9 +51,10 @@ function ParamRow({ name, expression, taken }: { name: string; expression: strin
   const [nameDraft, setNameDraft] = useState<string | null>(null);
   const [exprDraft, setExprDraft] = useState<string | null>(null);
   const value = useAnalysis((s) => s.core?.parameterValues[name]);
+  const units = useEditor((s) => s.units);
   const apply = (c: Command<unknown>, coalesce?: string) => editor.getState().apply(c, coalesce ? { coalesce } : undefined);
   const nameErr = nameDraft !== null ? nameProblem(nameDraft, taken, name) : null;
-  const shown = value === undefined ? "" : "error" in value ? value.error : `${formatNumber(value.value)}${value.unit ? ` ${prettyUnit(value.unit)}` : ""}`;
+  const shown = value === undefined ? "" : "error" in value ? value.error : readableValue(value.value, value.unit, units);
   return (
     <tr className="align-top">
       <td className="py-1 pr-1">

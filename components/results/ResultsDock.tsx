@@ -1,15 +1,72 @@
 "use client";
-// The results under the canvas (expanded with the live results work).
-import { useAnalysis } from "@/canvas/context";
-import { CAUTION_SHORT } from "@/solver/cautions";
+// "Results", under the drawing: the status in words, the reactions (force on the body or load on
+// the support), the hand check, and the cautions and assumptions beside them.
+import { useState } from "react";
+import { useEditor } from "@/canvas/context";
+import { CautionsAside } from "./CautionsAside";
+import { HandCheckView } from "./HandCheckView";
+import { ReactionsTable, type Sense } from "./ReactionsTable";
+import { StatusBanner } from "./StatusBanner";
+
+type Tab = "reactions" | "hand";
 
 export function ResultsDock() {
-  const shown = useAnalysis((s) => s.shown);
-  const statuses = shown ? Object.entries(shown.bodies).map(([id, b]) => `${id}: ${b.status}`) : [];
+  const [tab, setTab] = useState<Tab>("reactions");
+  const [sense, setSense] = useState<Sense>("body");
+  const flows = useEditor((s) => s.sketch.ports.length > 0);
   return (
-    <section aria-label="Results" className="h-[240px] shrink-0 overflow-auto border-t border-rule bg-paper px-3 py-2 text-[13px]">
-      <p data-testid="status">{statuses.join(" · ") || "Draw a body with supports to see its reactions."}</p>
-      <p className="mt-2 text-[11.5px] text-caution">{CAUTION_SHORT}</p>
+    <section aria-label="Results" className="flex h-[292px] shrink-0 border-t border-rule bg-paper">
+      <div className="flex min-w-0 flex-1 flex-col px-3 pt-2">
+        <StatusBanner />
+        <div className="mt-2 flex items-center gap-1 border-b border-rule">
+          <div role="tablist" aria-label="Results views" className="flex">
+            {(
+              [
+                ["reactions", "Reactions"],
+                ["hand", "Hand check"],
+              ] as const
+            ).map(([id, label]) => (
+              <button
+                key={id}
+                type="button"
+                role="tab"
+                id={`tab-${id}`}
+                aria-selected={tab === id}
+                aria-controls={`panel-${id}`}
+                onClick={() => setTab(id)}
+                className={`-mb-px border-b-2 px-3 py-1 text-[12.5px] font-medium ${tab === id ? "border-accent text-ink" : "border-transparent text-ink-faint hover:text-ink"}`}
+              >
+                {label}
+              </button>
+            ))}
+          </div>
+          {tab === "reactions" && (
+            <div role="radiogroup" aria-label="Show the reactions as" className="ml-auto flex items-center gap-0.5 pb-1 text-[12px]" data-testid="sense">
+              {(
+                [
+                  ["body", "Force on the body"],
+                  ["support", "Load on the support"],
+                ] as const
+              ).map(([id, label]) => (
+                <button
+                  key={id}
+                  type="button"
+                  role="radio"
+                  aria-checked={sense === id}
+                  onClick={() => setSense(id)}
+                  className={`rounded px-2 py-0.5 ${sense === id ? "bg-reaction-soft font-semibold text-reaction" : "text-ink-soft hover:text-ink"}`}
+                >
+                  {label}
+                </button>
+              ))}
+            </div>
+          )}
+        </div>
+        <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} className="min-h-0 flex-1 overflow-auto py-2">
+          {tab === "reactions" ? <ReactionsTable sense={sense} /> : <HandCheckView />}
+        </div>
+      </div>
+      <CautionsAside flows={flows} />
     </section>
   );
 }

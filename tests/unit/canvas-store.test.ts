@@ -166,7 +166,7 @@ describe("live analysis", () => {
   it("with a worker, delivers every answer in order and solves only the newest of a burst", () => {
     const posted: Array<{ seq: number; sketch: SketchFile }> = [];
     const fake = { postMessage: (m: { seq: number; sketch: SketchFile }) => posted.push(m), onmessage: null as null | ((e: MessageEvent) => void) };
-    const run = workerRunner(fake as unknown as Worker);
+    const run = workerRunner(fake as unknown as Worker, (fn) => fn());
     const got: number[] = [];
     const a = sketch();
     const b = { ...sketch(), title: "b" };

@@ -1,0 +1,153 @@
+"use client";
+// "Hand check": ΣFx, ΣFy and ΣM about a point P, term by term, against the momentum flux out
+// minus in — so a checker can follow the calculation line by line and compare with their own.
+// P is picked on the canvas (the "Pick on the drawing" button) or typed.
+import { useDeferredValue, useMemo, useState } from "react";
+import { evaluateToNumber } from "@/solver/expressions";
+import { columnUnit } from "@/solver/report";
+import { convert, formatNumber, type UnitSystem } from "@/solver/units";
+import type { Vec2 } from "@/solver/types";
+import { useAnalysis, useEditor, useStores } from "@/canvas/context";
+import { BUTTON, INPUT } from "@/components/editor/ui";
+import { useActionRunner } from "@/components/editor/useActions";
+import { defaultMomentPoint, handCheckBlocks, type HandCheckBlock } from "./handCheck";
+
+function fmt(v: number, key: "fx" | "fy" | "m", units: UnitSystem): string {
+  const q = key === "m" ? "moment" : "force";
+  const u = columnUnit(q, units);
+  return `${formatNumber(convert(v, q, units, u).value, 4)} ${u}`;
+}
+
+function Block({ b, units }: { b: HandCheckBlock; units: UnitSystem }) {
+  const len = (v: number) => formatNumber(convert(v, "length", units).value, 3);
+  return (
+    <section aria-label={b.title} className="min-w-0" data-testid={`hand-${b.key}`}>
+      <h3 className="mb-1 text-[12.5px] font-semibold text-ink">{b.title}</h3>
+      <ol className="space-y-[1px] text-[12px]">
+        {b.forces.map((t, i) => (
+          <li key={`${t.id}-${i}`} className="flex justify-between gap-2 border-b border-dotted border-rule-soft">
+            <span className="truncate text-ink-soft" title={t.label}>
+              {i > 0 ? "+ " : "  "}
+              {t.label}
+              {b.key === "m" && t.at && !t.couple && <span className="text-ink-faint"> at ({len(t.at[0])}, {len(t.at[1])})</span>}
+            </span>
+            <span className="num shrink-0 text-ink" data-testid="term-value">
+              {fmt(t.value, b.key, units)}
+            </span>
+          </li>
+        ))}
+        <li className="flex justify-between gap-2 pt-0.5 font-semibold">
+          <span>= Σ forces on the control volume</span>
+          <span className="num" data-testid="forces-sum">
+            {fmt(b.forcesSum, b.key, units)}
+          </span>
+        </li>
+        {b.momentum.map((t, i) => (
+          <li key={`m-${t.id}-${i}`} className="flex justify-between gap-2 border-b border-dotted border-rule-soft">
+            <span className="truncate text-ink-soft" title={t.label}>
+              {t.label}
+            </span>
+            <span className="num shrink-0 text-ink">{fmt(t.value, b.key, units)}</span>
+          </li>
+        ))}
+        <li className="flex justify-between gap-2 pt-0.5 font-semibold">
+          <span>= Σ(ṁV)out − Σ(ṁV)in</span>
+          <span className="num" data-testid="momentum-sum">
+            {fmt(b.momentumSum, b.key, units)}
+          </span>
+        </li>
+        <li className="flex justify-between gap-2 text-ink-faint">
+          <span>difference (0 when it holds)</span>
+          <span className="num" data-testid="imbalance">
+            {fmt(Math.abs(b.imbalance) < 1e-9 * Math.max(1, Math.abs(b.forcesSum)) ? 0 : b.imbalance, b.key, units)}
+          </span>
+        </li>
+      </ol>
+    </section>
+  );
+}
+
+export function HandCheckView() {
+  // deferred: a drag's frames come first, the panel catches up when the main thread is free
+  const shown = useDeferredValue(useAnalysis((s) => s.shown));
+  const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
+  const units = useEditor((s) => s.units);
+  const picked = useEditor((s) => s.momentPoint);
+  const { editor } = useStores();
+  const run = useActionRunner();
+  const bodies = numeric?.bodies ?? [];
+  const [bodyId, setBodyId] = useState<string | null>(null);
+  const body = bodies.find((b) => b.id === bodyId) ?? bodies[0];
+  const eq = body && shown ? shown.equations[body.id] : undefined;
+  const about: Vec2 = picked ?? defaultMomentPoint(eq, body?.cg);
+  const blocks = useMemo(() => (eq ? handCheckBlocks(eq, about) : []), [eq, about]);
+  const [draft, setDraft] = useState<{ x: string; y: string } | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  if (!eq || !body) return <p className="p-2 text-[12.5px] text-ink-faint">No result to check yet.</p>;
+
+  const commitPoint = (x: string, y: string) => {
+    try {
+      const p: Vec2 = [evaluateToNumber(x || "0", "length"), evaluateToNumber(y || "0", "length")];
+      editor.getState().setMomentPoint(p);
+      setError(null);
+    } catch (e) {
+      setError((e as Error).message);
+    }
+  };
+  const shownText = (v: number) => String(Number(v.toFixed(4)));
+
+  return (
+    <div data-testid="hand-check">
+      <div className="mb-2 flex flex-wrap items-end gap-2 text-[12px]">
+        {bodies.length > 1 && (
+          <label className="flex flex-col">
+            <span className="text-ink-soft">Body</span>
+            <select className={`${INPUT} w-40`} value={body.id} onChange={(e) => setBodyId(e.target.value)}>
+              {bodies.map((b) => (
+                <option key={b.id} value={b.id}>
+                  {b.label || b.id}
+                </option>
+              ))}
+            </select>
+          </label>
+        )}
+        <span className="pb-1.5 text-ink-soft">Moments about P =</span>
+        {(["x", "y"] as const).map((k, i) => (
+          <label key={k} className="flex flex-col">
+            <span className="text-ink-faint">P{k} (m, or with a unit)</span>
+            <input
+              className={`${INPUT} w-24`}
+              aria-label={`Moment point ${k}`}
+              data-testid={`moment-${k}`}
+              value={draft ? draft[k] : shownText(about[i])}
+              onFocus={() => setDraft({ x: shownText(about[0]), y: shownText(about[1]) })}
+              onChange={(e) => setDraft((d) => ({ ...(d ?? { x: "", y: "" }), [k]: e.target.value }))}
+              onBlur={() => {
+                if (draft) commitPoint(draft.x, draft.y);
+                setDraft(null);
+              }}
+              onKeyDown={(e) => e.key === "Enter" && (e.target as HTMLInputElement).blur()}
+            />
+          </label>
+        ))}
+        <button type="button" className={BUTTON} onClick={() => run("results.pickPoint")}>
+          Pick on the drawing
+        </button>
+        {picked && (
+          <button type="button" className="pb-1.5 text-accent hover:underline" onClick={() => editor.getState().setMomentPoint(null)}>
+            Back to the first support
+          </button>
+        )}
+        {error && <span className="pb-1.5 text-caution">⚠ {error}</span>}
+      </div>
+      <p className="mb-2 text-[11.5px] text-ink-faint">
+        Steady flow through a control volume fixed to the body: ΣF = Σ(ṁV)out − Σ(ṁV)in and ΣM_P = Σ r × ṁV. Forces in x and y, moments counter-clockwise positive.
+      </p>
+      <div className="grid grid-cols-3 gap-4">
+        {blocks.map((b) => (
+          <Block key={b.key} b={b} units={units} />
+        ))}
+      </div>
+    </div>
+  );
+}

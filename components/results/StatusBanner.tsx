@@ -1,0 +1,56 @@
+"use client";
+// The result in words above the tables: one sentence per body, and a plain note when the result
+// shown is an earlier one because the input has errors.
+import { useDeferredValue, useMemo } from "react";
+import { useAnalysis, useEditor } from "@/canvas/context";
+import { statusSentences, type Tone } from "./statusSentence";
+
+const BADGE: Record<Tone, { word: string; cls: string }> = {
+  holds: { word: "Holds", cls: "border-ink/40 text-ink" },
+  lifts: { word: "Lifts", cls: "border-dashed border-caution text-caution" },
+  slips: { word: "Slips", cls: "border-dashed border-caution text-caution" },
+  tips: { word: "Tips", cls: "border-caution bg-caution text-white" },
+  unrestrained: { word: "Free", cls: "border-caution bg-caution text-white" },
+};
+
+export function StatusBanner() {
+  // deferred: a drag's frames come first, the panel catches up when the main thread is free
+  const shown = useDeferredValue(useAnalysis((s) => s.shown));
+  const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
+  const stale = useAnalysis((s) => s.stale);
+  const errors = useAnalysis((s) => s.core?.errors ?? []);
+  const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
+  const units = useEditor((s) => s.units);
+  const sentences = useMemo(() => (shown && numeric ? statusSentences(numeric, shown, units) : []), [shown, numeric, units]);
+
+  if (!hasBody) return <p className="text-[13px] text-ink-faint" data-testid="status">Draw a body, then its supports, to see the reactions.</p>;
+  return (
+    <div className="space-y-1" data-testid="status" aria-live="polite">
+      {stale && (
+        <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution" data-testid="stale">
+          Showing the last good result (faded on the drawing): the input has {errors.length === 1 ? "an error" : `${errors.length} errors`} — {errors[0]?.path ? `${errors[0].path}: ` : ""}
+          {errors[0]?.message}
+        </p>
+      )}
+      {!shown && !stale && errors.length > 0 && (
+        <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution">
+          No result yet: {errors[0].path ? `${errors[0].path}: ` : ""}
+          {errors[0].message}
+        </p>
+      )}
+      {sentences.map((s) => (
+        <div key={s.body} className={stale ? "opacity-60" : ""}>
+          <p className="flex items-start gap-2 text-[14px] font-semibold leading-snug text-ink" data-testid="status-sentence" data-tone={s.tone}>
+            <span className={`mt-[1px] shrink-0 rounded border px-1.5 py-[1px] text-[10.5px] font-semibold uppercase tracking-wider ${BADGE[s.tone].cls}`}>{BADGE[s.tone].word}</span>
+            <span>{s.headline}</span>
+          </p>
+          {s.details.map((d) => (
+            <p key={d} className="ml-[3.6rem] text-[12px] leading-snug text-ink-soft">
+              {d}
+            </p>
+          ))}
+        </div>
+      ))}
+    </div>
+  );
+}

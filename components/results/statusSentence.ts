@@ -1,0 +1,147 @@
+// The result in words, one sentence per body, leading with what matters: slip first (the status
+// stays "holds" but a contact cannot hold what it must), then tipping, lift-off and the rest.
+// Pure: the results panel, the calc sheet and the tests all use it.
+import { describeFreeMotion } from "@/solver/words";
+import { formatQuantity, type UnitSystem } from "@/solver/units";
+import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
+
+export type Tone = "holds" | "lifts" | "slips" | "tips" | "unrestrained";
+
+export interface StatusSentence {
+  body: string;
+  tone: Tone;
+  /** the sentence: "Tips about the front contact — the rear contact would have to pull 2.4 kN" */
+  headline: string;
+  /** further facts, each a sentence */
+  details: string[];
+}
+
+const KIND_WORD: Record<Support["kind"], string> = { pin: "pin", roller: "roller", contact: "contact", fixed: "fixed support", tie: "tie" };
+
+/** "the rear stabiliser foot", "Front jack", or "contact s2" */
+export function supportName(s: Pick<Support, "kind" | "id" | "label">): string {
+  if (!s.label) return `${KIND_WORD[s.kind]} ${s.id}`;
+  return /^[a-z]/.test(s.label) ? `the ${s.label}` : s.label;
+}
+
+const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+const ratio = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(2)).toString() : "∞");
+
+function list(names: string[]): string {
+  if (names.length <= 1) return names.join("");
+  return `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`;
+}
+
+interface Context {
+  id: string;
+  body: BodyResult;
+  supports: Support[];
+  reactions: Array<[Support, Reaction]>;
+  result: SolveResult;
+  units: UnitSystem;
+  name: string;
+}
+
+const force = (c: Context, v: number) => formatQuantity(Math.abs(v), "force", c.units);
+
+function slipSentence(c: Context): string | null {
+  const ids = new Set(c.supports.map((s) => s.id));
+  const slips = c.result.warnings.filter((w) => w.code === "SLIP" && w.ids.some((i) => ids.has(i)));
+  if (!slips.length) return null;
+  const slipping = c.reactions.filter(([, r]) => r.friction && r.state === "bearing" && r.friction.needed > r.friction.mu * (1 + 1e-9) + 1e-12);
+  if (slipping.length) {
+    slipping.sort((a, b) => b[1].friction!.needed / Math.max(b[1].friction!.mu, 1e-12) - a[1].friction!.needed / Math.max(a[1].friction!.mu, 1e-12));
+    const [s, r] = slipping[0];
+    const more = slipping.length > 1 ? ` (and at ${list(slipping.slice(1).map(([x]) => supportName(x)))})` : "";
+    return `Slips at ${supportName(s)} — needs ${ratio(r.friction!.needed)}, has μ = ${ratio(r.friction!.mu)}${more}`;
+  }
+  // the body as a whole: Σ|t| demand against Σ μ·n
+  const bearing = c.reactions.filter(([, r]) => r.friction && r.state === "bearing");
+  const sumN = bearing.reduce((a, [, r]) => a + (r.n ?? 0), 0);
+  const f = c.body.friction;
+  if (f && sumN > 0) return `Slides — its friction contacts must resist ${force(c, f.needed * sumN)} and can give ${force(c, f.available * sumN)}`;
+  return "Slides — the friction contacts cannot hold it";
+}
+
+function pivotName(c: Context, about: Vec2): string {
+  const near = c.supports.find((s) => Math.hypot(s.at[0] - about[0], s.at[1] - about[1]) < 1e-6 * Math.max(1, Math.hypot(about[0], about[1])) + 1e-9);
+  if (near) return supportName(near);
+  const L = c.units === "SI" ? "m" : "ft";
+  const k = c.units === "SI" ? 1 : 1 / 0.3048;
+  return `the point (${Number((about[0] * k).toPrecision(3))}, ${Number((about[1] * k).toPrecision(3))}) ${L}`;
+}
+
+function tipSentence(c: Context): string {
+  const pulling = c.reactions.filter(([, r]) => r.state === "lifted" || r.state === "slack").sort((a, b) => Math.abs(b[1].n ?? 0) - Math.abs(a[1].n ?? 0));
+  const fm = c.body.freeMotion;
+  const head = fm?.kind === "rotation" ? `Tips about ${pivotName(c, fm.about)}` : fm ? `Would move along ${Number(fm.angle.toFixed(1))}°` : "Tips";
+  if (!pulling.length) return head;
+  const [s, r] = pulling[0];
+  const verb = s.kind === "tie" ? "push" : "pull";
+  return `${head} — ${supportName(s)} would have to ${verb} ${force(c, r.n ?? Math.hypot(r.fx, r.fy))}`;
+}
+
+function liftSentence(c: Context): string {
+  const off = c.reactions.filter(([, r]) => r.state === "lifted" || r.state === "slack");
+  const holding = c.reactions.filter(([, r]) => r.state !== "lifted" && r.state !== "slack").map(([s]) => supportName(s));
+  const lifted = off.filter(([s]) => s.kind === "contact").map(([s]) => supportName(s));
+  const slack = off.filter(([s]) => s.kind === "tie").map(([s]) => supportName(s));
+  const parts: string[] = [];
+  if (lifted.length) parts.push(`Lifts off at ${list(lifted)}`);
+  if (slack.length) parts.push(`${list(slack)} ${slack.length === 1 ? "goes" : "go"} slack`);
+  const first = cap(parts.join("; "));
+  return holding.length ? `${first} — ${list(holding)} still ${holding.length === 1 ? "holds" : "hold"} the body` : first;
+}
+
+function holdSentence(c: Context): string {
+  const mech = c.result.warnings.find((w) => w.code === "MECHANISM" && w.ids.includes(c.id));
+  if (mech) {
+    const words = mech.message.slice(mech.message.indexOf(": ") + 2);
+    return `Holds — ${words}`;
+  }
+  let best: [Support, Reaction] | undefined;
+  for (const pair of c.reactions) if (!best || Math.hypot(pair[1].fx, pair[1].fy) > Math.hypot(best[1].fx, best[1].fy)) best = pair;
+  if (!best) return "Holds — all supports within their limits";
+  return `Holds — all supports within their limits; the largest reaction is ${force(c, Math.hypot(best[1].fx, best[1].fy))} at ${supportName(best[0])}`;
+}
+
+/** One sentence per body of a solved sketch. */
+export function statusSentences(sketch: Sketch, result: SolveResult, units: UnitSystem = "SI"): StatusSentence[] {
+  const out: StatusSentence[] = [];
+  for (const b of sketch.bodies) {
+    const body = result.bodies[b.id];
+    if (!body) continue;
+    const supports = sketch.supports.filter((s) => s.body === b.id);
+    const reactions = supports.filter((s) => result.reactions[s.id]).map((s) => [s, result.reactions[s.id]] as [Support, Reaction]);
+    const c: Context = { id: b.id, body, supports, reactions, result, units, name: b.label || b.id };
+    let tone: Tone = body.status;
+    let headline: string;
+    const slip = body.status === "holds" || body.status === "lifts" ? slipSentence(c) : null;
+    if (body.status === "unrestrained") {
+      headline = body.freeMotion ? `Unrestrained — ${describeFreeMotion(body.freeMotion, supports)}; add a support or a tie` : "Unrestrained — add a support or a tie";
+      if (!supports.length) headline = "Unrestrained — the body has no supports yet; add a support or a tie";
+    } else if (body.status === "tips") headline = tipSentence(c);
+    else if (slip) {
+      tone = "slips";
+      headline = slip;
+    } else if (body.status === "lifts") headline = liftSentence(c);
+    else headline = holdSentence(c);
+
+    const details: string[] = [];
+    if (slip && body.status === "lifts") details.push(`${liftSentence(c)}.`);
+    if (body.determinacy.kind === "indeterminate")
+      details.push(`Statically indeterminate (degree ${body.determinacy.degree}): the reactions depend on the support stiffnesses.`);
+    const ids = new Set([b.id, ...supports.map((s) => s.id), ...sketch.ports.filter((p) => p.body === b.id).map((p) => p.id), ...sketch.massSources.filter((m) => m.body === b.id).map((m) => m.id)]);
+    for (const w of result.warnings) {
+      if (w.code === "MASS_IMBALANCE" || w.code === "PORT_INCONSISTENT") {
+        if (w.ids.some((i) => ids.has(i))) details.push(w.message.endsWith(".") ? w.message : `${w.message}.`);
+      }
+    }
+    out.push({ body: b.id, tone, headline, details });
+  }
+  // warnings that belong to no body (unitless trigonometry in a parameter)
+  const general = result.warnings.filter((w) => w.code === "TRIG_UNITLESS").map((w) => (/[.?!]$/.test(w.message) ? w.message : `${w.message}.`));
+  if (general.length && out.length) out[0].details.push(...general);
+  if (sketch.bodies.length > 1) for (const s of out) s.headline = `${sketch.bodies.find((b) => b.id === s.body)?.label || s.body}: ${s.headline}`;
+  return out;
+}

@@ -1,0 +1,178 @@
+// The results panel: the status sentence for every status and warning (the solver's worked
+// examples), the hand check's sums against the solver's, and the force-on-body / load-on-support
+// switch flipping every sign and saying so.
+import { readFileSync, readdirSync } from "node:fs";
+import { render, screen, within, act } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { describe, expect, it } from "vitest";
+import { handCheckSums, parseSketch, solve, type SolveResult, type Sketch } from "@/solver/index";
+import { formatQuantity } from "@/solver/units";
+import { createEditorStore } from "@/canvas/store";
+import { EditorProvider } from "@/canvas/context";
+import { ResultsDock } from "@/components/results/ResultsDock";
+import { statusSentences } from "@/components/results/statusSentence";
+import { handCheckBlocks } from "@/components/results/handCheck";
+import { ActionContextCtx } from "@/components/editor/useActions";
+import { importSketchText } from "@/canvas/files";
+import type { ActionContext } from "@/canvas/actions";
+
+const DIR = "tests/fixtures/sketches";
+const load = (name: string) => JSON.parse(readFileSync(`${DIR}/${name}.json`, "utf8"));
+
+function solved(doc: unknown): { sketch: Sketch; result: SolveResult } {
+  const p = parseSketch(doc);
+  if (!p.ok) throw new Error(JSON.stringify(p.errors));
+  const result = solve(p.sketch);
+  result.warnings.unshift(...p.warnings);
+  return { sketch: p.sketch, result };
+}
+
+const f = (n: number) => formatQuantity(Math.abs(n), "force", "SI");
+
+describe("status sentence", () => {
+  it("holds: names the largest reaction and where", () => {
+    const { sketch, result } = solved(load("pipe-bend-anchor"));
+    const [s] = statusSentences(sketch, result);
+    expect(s.tone).toBe("holds");
+    expect(s.headline).toBe(`Holds — all supports within their limits; the largest reaction is ${f(result.bodies.bend.largestReaction)} at the anchor block`);
+  });
+
+  it("tips: the pivot, and the support that would have to pull, with the force", () => {
+    const { sketch, result } = solved(load("thrust-stand-tips"));
+    const [s] = statusSentences(sketch, result);
+    expect(s.tone).toBe("tips");
+    // hand check (W·d/h, common practice): the rear pad must pull (T·h − W·d)/b = (2200·1.5 − 1961·0.8)/1.6
+    const pull = (2200 * 1.5 - 200 * 9.80665 * 0.8) / 1.6;
+    expect(Math.abs(result.reactions.rear.n!)).toBeCloseTo(pull, 6);
+    expect(s.headline).toBe(`Tips about the front pin — the rear pad would have to pull ${f(pull)}`);
+  });
+
+  it("tips with a tie: the tie would have to push", () => {
+    const { sketch, result } = solved(load("exhaust-stack-one-guy-tips"));
+    const [s] = statusSentences(sketch, result);
+    expect(s.headline).toMatch(/^Tips about the base pin — the \w+ guy would have to push \d/);
+  });
+
+  it("unrestrained: the free direction and what to do", () => {
+    const { sketch, result } = solved(load("skid-on-rollers-unrestrained"));
+    expect(statusSentences(sketch, result)[0]).toMatchObject({ tone: "unrestrained", headline: "Unrestrained — nothing resists motion in x; add a support or a tie" });
+  });
+
+  it("a mechanism the loads do not drive: holds, and says which motion is free", () => {
+    const { sketch, result } = solved(load("skid-vertical-mechanism"));
+    expect(statusSentences(sketch, result)[0].headline).toBe("Holds — nothing resists motion in x, but the loads do not push that way");
+  });
+
+  it("slip leads, with the friction needed and the μ available", () => {
+    const { sketch, result } = solved(load("pump-skid-slip"));
+    const [s] = statusSentences(sketch, result);
+    expect(s.tone).toBe("slips");
+    const slipping = Object.entries(result.reactions).filter(([, r]) => r.friction && r.friction.needed > r.friction.mu);
+    const worst = slipping.sort((a, b) => b[1].friction!.needed / b[1].friction!.mu - a[1].friction!.needed / a[1].friction!.mu)[0][1];
+    expect(s.headline).toMatch(new RegExp(`^Slips at the \\w+ foot — needs ${Number(worst.friction!.needed.toPrecision(2))}, has μ = ${worst.friction!.mu}`));
+  });
+
+  it("lifts, and a slack tie: who still holds the body", () => {
+    const stack = solved(load("exhaust-stack-guyed"));
+    const [s] = statusSentences(stack.sketch, stack.result);
+    expect(s.tone).toBe("lifts");
+    expect(s.headline).toMatch(/^The \w+ guy goes slack — the base pin and the \w+ guy still hold the body$/);
+    expect(s.details[0]).toMatch(/^Statically indeterminate \(degree 1\)/);
+  });
+
+  it("lists the flow checks (inconsistent port, mass imbalance) and unitless trigonometry", () => {
+    const fan = solved(load("ducted-fan-checks"));
+    const [s] = statusSentences(fan.sketch, fan.result);
+    expect(s.details.some((d) => /disagree by more than 0\.5 %/.test(d))).toBe(true);
+    expect(s.details.some((d) => /mass in .* differs from mass out/.test(d))).toBe(true);
+    const trig = solved(load("trig-unitless"));
+    expect(statusSentences(trig.sketch, trig.result)[0].details.join(" ")).toMatch(/sin\(30\) reads 30 as radians: did you mean 30 deg\?/);
+  });
+
+  it("has a sentence for every worked example, in US units too", () => {
+    for (const file of readdirSync(DIR).filter((n) => n.endsWith(".json"))) {
+      const p = parseSketch(JSON.parse(readFileSync(`${DIR}/${file}`, "utf8")));
+      if (!p.ok) continue;
+      const out = statusSentences(p.sketch, solve(p.sketch), "US");
+      expect(out.length, file).toBe(p.sketch.bodies.length);
+      for (const s of out) expect(s.headline, file).toMatch(/^(.*: )?(Holds|Lifts|The |Tips|Slips|Slides|Unrestrained|Would move)/);
+      for (const s of out) expect(s.headline, file).not.toMatch(/ kN| N\b/);
+    }
+  });
+});
+
+describe("hand check", () => {
+  it("sums, term by term, to the solver's totals about any point, and the difference is zero", () => {
+    const { result } = solved(load("fire-monitor-trailer"));
+    const eq = result.equations.trailer;
+    for (const P of [[0, 0], [1.2, 0.3], [-4, 7]] as [number, number][]) {
+      const blocks = handCheckBlocks(eq, P);
+      const sums = handCheckSums(eq, P);
+      for (const b of blocks) {
+        expect(b.forces.reduce((a, t) => a + t.value, 0)).toBeCloseTo(sums.forces[b.key], 6);
+        expect(b.momentum.reduce((a, t) => a + t.value, 0)).toBeCloseTo(sums.momentum[b.key], 6);
+        expect(Math.abs(b.imbalance)).toBeLessThan(1e-6 * (1 + Math.abs(b.forcesSum)));
+      }
+      // an independent check of the moment: Σ (r − P) × F over every force term
+      const m = eq.forces.reduce((a, t) => a + (t.at ? (t.at[0] - P[0]) * t.fy - (t.at[1] - P[1]) * t.fx : 0) + t.m, 0);
+      expect(blocks[2].forcesSum).toBeCloseTo(m, 6);
+    }
+  });
+});
+
+function mountDock(doc: unknown) {
+  const file = importSketchText(JSON.stringify(doc));
+  if (!file.ok) throw new Error("fixture does not import");
+  const editor = createEditorStore({ sketch: file.sketch });
+  const ctx = { stores: null as never, controller: null, ui: {} as ActionContext["ui"] };
+  render(
+    <EditorProvider editor={editor}>
+      <ActionContextCtx.Provider value={() => ctx}>
+        <ResultsDock />
+      </ActionContextCtx.Provider>
+    </EditorProvider>,
+  );
+  return editor;
+}
+
+const cells = (col: string) => [...document.querySelectorAll(`[data-testid=reactions] td[data-col=${col}]`)].map((c) => c.textContent!);
+const num = (t: string) => (t === "—" ? null : Number(t.replace(/,/g, "").replace("−", "-")));
+
+describe("results panel", () => {
+  it("switches between force on the body and load on the support: every sign flips, and it says so", async () => {
+    const user = userEvent.setup();
+    mountDock(load("fire-monitor-trailer"));
+    expect(screen.getByTestId("status-sentence")).toHaveTextContent(/Lifts off at the front jack/);
+    const cols = ["fx", "fy", "m", "n", "t"];
+    const before = Object.fromEntries(cols.map((c) => [c, cells(c).map(num)]));
+    const dir = cells("angle").map(num);
+    expect(screen.getByRole("caption")).toHaveTextContent("Forces on the body from each support");
+    await user.click(within(screen.getByTestId("sense")).getByRole("radio", { name: "Load on the support" }));
+    for (const c of cols) cells(c).map(num).forEach((v, i) => expect(v === null ? null : v + 0).toBe(before[c][i] === null ? null : -before[c][i]! + 0));
+    cells("angle").map(num).forEach((a, i) => {
+      if (a !== null) expect(Math.abs(((a - dir[i]! + 720) % 360) - 180)).toBeLessThan(0.1);
+    });
+    expect(screen.getByRole("caption")).toHaveTextContent("Loads on the supports: every reaction reversed");
+    expect(screen.getByTestId("reactions-note")).toHaveTextContent("Loads on the supports are the reactions with the sign reversed");
+  });
+
+  it("shows the hand check's sums about the point picked", async () => {
+    const user = userEvent.setup();
+    const editor = mountDock(load("thrust-stand-tips"));
+    await user.click(screen.getByRole("tab", { name: "Hand check" }));
+    act(() => editor.getState().setMomentPoint([1.6, 0]));
+    expect(screen.getByTestId("moment-x")).toHaveValue("1.6");
+    const p = parseSketch(load("thrust-stand-tips"));
+    const sums = handCheckSums(solve((p as { sketch: Sketch }).sketch).equations.stand, [1.6, 0]);
+    expect(within(screen.getByTestId("hand-m")).getByTestId("forces-sum")).toHaveTextContent(`${formatQuantity(sums.forces.m, "moment", "SI", { unit: "kN·m" }).replace("−", "−")}`);
+    expect(within(screen.getByTestId("hand-fy")).getAllByTestId("term-value").length).toBeGreaterThan(2);
+  });
+
+  it("keeps cautions and the model's assumptions beside the results", () => {
+    mountDock(load("pipe-bend-anchor"));
+    const aside = screen.getByTestId("cautions");
+    expect(aside).toHaveTextContent("reviewed by a qualified engineer");
+    expect(aside).toHaveTextContent("water hammer");
+    expect(aside).toHaveTextContent("Rigid body");
+  });
+});
