@@ -33,7 +33,9 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
     if (!shown) return null;
     const t = reactionTable(shown, units, { onSupport: sense === "support" });
     // the kind shows in the support's tooltip; the columns keep their keys for tests and CSV
-    const keep = t.columns.map((c, i) => (c.key === "kind" ? -1 : i)).filter((i) => i >= 0);
+    // columns with nothing to say (no moments without a fixed support, no t without friction) step aside
+    const empty = (i: number) => t.rows.every((r) => r[i] === null || r[i] === 0);
+    const keep = t.columns.map((c, i) => (c.key === "kind" || (["m", "n", "t", "margin"].includes(c.key) && empty(i)) ? -1 : i)).filter((i) => i >= 0);
     return { ...t, columns: keep.map((i) => t.columns[i]), rows: t.rows.map((r) => keep.map((i) => r[i])), kinds: t.rows.map((r) => String(r[1])) };
   }, [shown, units, sense]);
   if (!table || !shown) return <p className="p-2 text-[12.5px] text-ink-faint">No reactions yet.</p>;

