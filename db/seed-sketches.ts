@@ -1,6 +1,7 @@
 // The demo workspace's sketches: each demo scenario with two or three versions whose messages
 // tell how the design moved. Fixed ids, and a sketch that exists is left alone (idempotent).
-// Invented scenarios for the demo only. Runs under tsx from db/seed.ts (relative imports).
+// Invented scenarios for the demo only (the editor's examples and a worked example). Runs under
+// tsx from db/seed.ts (relative imports).
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import type { drizzle } from "drizzle-orm/node-postgres";
@@ -15,47 +16,47 @@ export type DemoSketch = { id: string; file: string; title: string; description:
 
 const DEMO_AUTHORS = { eddie: "demo-eddie-editor", olivia: "demo-olivia-owner" } as const;
 
-/** A sketch file of the demo, read from the committed worked examples. */
-function readSketchFile(name: string): Doc {
-  return JSON.parse(readFileSync(fileURLToPath(new URL(`../tests/fixtures/sketches/${name}.json`, import.meta.url)), "utf8"));
+/** A sketch file of the demo: the editor's examples and the worked examples, by path from the repository root. */
+function readSketchFile(path: string): Doc {
+  return JSON.parse(readFileSync(fileURLToPath(new URL(`../${path}`, import.meta.url)), "utf8"));
 }
 
 export const DEMO_SKETCHES: DemoSketch[] = [
   {
     id: "6d656d6f-0000-4000-8000-0000000000a1",
-    file: "pump-skid-discharge",
+    file: "canvas/examples/pump-skid.json",
     title: "Dewatering pump skid, discharge test",
-    description: "850 kg skid on two steel feet with friction (μ = 0.4): side suction, raised discharge at 120°. Are the feet enough without anchor bolts?",
+    description: "850 kg diesel pump skid on two timber bearers (μ = 0.4): suction low at the rear, discharge up through a bend at the front. Do the bearers hold it without anchor bolts?",
     tags: ["pumps", "pier 7"],
     steps: [
-      { by: "eddie", daysAgo: 9, message: "Skid as drawn from the general arrangement: two steel feet on the slab, 10 kg/s", edit: (d) => (d.parameters!.mdot = "10 kg/s") },
-      { by: "eddie", daysAgo: 7, message: "Raised the flow to the pump's duty point, 10 → 12 kg/s" },
-      { by: "eddie", daysAgo: 5, message: "Moved the rear foot 0.3 m east to clear the drain channel", edit: (d) => (d.supports[0].at = [0.5, 0]) },
+      { by: "eddie", daysAgo: 9, message: "Skid as drawn from the general arrangement, at half the duty flow" },
+      { by: "eddie", daysAgo: 7, message: "Full duty flow: 1800 → 3600 L/min", edit: (d) => (d.parameters!.Q = "60 lpm * 60") },
+      { by: "eddie", daysAgo: 5, message: "Moved the rear bearer 0.3 m east to clear the drain channel", edit: (d) => (d.supports[0].at = [0.6, 0]) },
     ],
   },
   {
     id: "6d656d6f-0000-4000-8000-0000000000a2",
-    file: "fire-monitor-trailer",
-    title: "Fire-fighting monitor trailer, forward low throw",
-    description: "Monitor trailer on a rear stabiliser leg, its wheel and a front jack on asphalt (μ = 0.7), throwing forward at 15° from 2.8 m. Does the front jack stay down at the rated flow?",
+    file: "canvas/examples/fire-monitor-trailer.json",
+    title: "Fire-fighting monitor trailer",
+    description: "950 kg monitor trailer on its axle, a rear stabiliser foot and a front jack on wet asphalt, throwing forward and up from 2.4 m. Does the front jack stay down at the rated flow?",
     tags: ["fire water", "mobile"],
     steps: [
-      { by: "eddie", daysAgo: 6, message: "Trailer on its leg, wheel and front jack; monitor throwing 1500 gpm at 15° from 2.8 m", edit: (d) => (d.parameters!.Q = "1500 gpm") },
-      { by: "eddie", daysAgo: 4, message: "Raised the flow to the monitor's 2000 gpm rating: the front jack lifts off" },
+      { by: "eddie", daysAgo: 6, message: "Trailer set up on foot, axle and jack; monitor at 1250 gpm" },
+      { by: "eddie", daysAgo: 4, message: "Raised the flow to the 2000 gpm rating: the front jack lifts off and the foot slips", edit: (d) => (d.parameters!.Q = "2000 gpm") },
       {
         by: "olivia",
         daysAgo: 2,
-        message: "Added 400 kg of water ballast over the front jack: all three feet bear again",
+        message: "Added 300 kg of water ballast toward the front: the jack bears again; the foot still slips",
         edit: (d) => {
-          d.bodies[0].mass = 1500;
-          d.bodies[0].cg = [2.0, 0.8];
+          d.bodies[0].mass = "1250 kg";
+          d.bodies[0].cg = [2.1, 0.85];
         },
       },
     ],
   },
   {
     id: "6d656d6f-0000-4000-8000-0000000000a3",
-    file: "thrust-stand-tips",
+    file: "tests/fixtures/sketches/thrust-stand-tips.json",
     title: "Jet thrust stand, overturning check",
     description: "200 kg stand pinned at its front edge, resting on a rear pad, with a 2.2 kN test jet. Where must the jet sit so the rear pad never has to pull?",
     tags: ["test rig"],
@@ -66,13 +67,33 @@ export const DEMO_SKETCHES: DemoSketch[] = [
   },
   {
     id: "6d656d6f-0000-4000-8000-0000000000a4",
-    file: "pipe-bend-anchor",
-    title: "DN300 × DN200 reducing bend on a thrust anchor",
-    description: "60° reducing bend of a buried water main, plan view, on a concrete anchor block. Anchor load at working pressure and at the hydrotest.",
-    tags: ["pipework", "buried main"],
+    file: "canvas/examples/pipe-bend-anchor.json",
+    title: "DN150 bend on the riser anchor",
+    description: "Long-radius 90° bend where the pump discharge turns up the riser, on one anchor: pressure thrust, momentum and the weight of the bend full of water.",
+    tags: ["pipework", "anchors"],
     steps: [
-      { by: "olivia", daysAgo: 12, message: "Bend at the 6 bar working pressure, anchor block at the meeting point of the axes" },
-      { by: "eddie", daysAgo: 10, message: "Hydrotest case: 9 bar at the inlet", edit: (d) => (d.parameters!.p1 = "900 kPa") },
+      { by: "olivia", daysAgo: 12, message: "Bend at the 10 bar working pressure" },
+      {
+        by: "eddie",
+        daysAgo: 10,
+        message: "Hydrotest case: 15 bar at the inlet",
+        edit: (d) => {
+          d.parameters!.p_in = "15 bar";
+          d.parameters!.p_out = "14.6 bar";
+        },
+      },
+    ],
+  },
+  {
+    id: "6d656d6f-0000-4000-8000-0000000000a5",
+    file: "canvas/examples/washing-cart.json",
+    title: "Pressure-washing cart with a fixed lance",
+    description: "85 kg cart with a lance clamped at 1.15 m, 40 L/min at 500 bar. How far can the lance be raised before the cart tips back off its front caster?",
+    tags: ["cleaning", "mobile"],
+    steps: [
+      { by: "eddie", daysAgo: 3, message: "Lance aimed steeply down at −75° for the tank foot" },
+      { by: "eddie", daysAgo: 2, message: "Raised the lance to −50°: the cart tips back off its front caster", edit: (d) => (d.parameters!.theta = "-50 deg") },
+      { by: "olivia", daysAgo: 1, message: "Clamped 45 kg of ballast to the base: the caster bears again", edit: (d) => (d.bodies[0].mass = "130 kg") },
     ],
   },
 ];

@@ -26,11 +26,12 @@ describe("demo sketches", () => {
     expect(story(DEMO_SKETCHES[1].id)).toEqual(["v1 holds", "v2 lifts", "v3 holds"]);
     expect(story(DEMO_SKETCHES[2].id)).toEqual(["v1 tips", "v2 holds"]);
     expect(story(DEMO_SKETCHES[3].id)).toEqual(["v1 holds", "v2 holds"]);
+    expect(story(DEMO_SKETCHES[4].id)).toEqual(["v1 holds", "v2 tips", "v3 holds"]);
     for (const s of sketches) expect(s.latestVersion).toBe(rows.filter((r) => r.sketchId === s.id).length);
-    expect(rows.find((r) => r.sketchId === DEMO_SKETCHES[0].id && r.number === 3)?.message).toBe("Moved the rear foot 0.3 m east to clear the drain channel");
+    expect(rows.find((r) => r.sketchId === DEMO_SKETCHES[0].id && r.number === 3)?.message).toBe("Moved the rear bearer 0.3 m east to clear the drain channel");
 
-    // the skid's rear foot really moved 0.3 m east in v3
+    // the skid's rear bearer really moved 0.3 m east in v3
     const [v3] = await db.select().from(sketchVersion).where(eq(sketchVersion.sketchId, DEMO_SKETCHES[0].id)).orderBy(asc(sketchVersion.number)).offset(2);
-    expect(v3.document.supports[0].at).toEqual([0.5, 0]);
+    expect(v3.document.supports[0].at).toEqual([0.6, 0]);
   });
 });
