@@ -4,12 +4,15 @@ import { account, session, user } from "./tables/auth";
 import { auditEvent } from "./tables/audit";
 import { invitation, membership, workspace } from "./tables/workspaces";
 import { sketch, sketchVersion } from "./tables/sketches";
+import { comment, signOff } from "./tables/review";
 
 export * from "./tables/auth";
 export * from "./tables/workspaces";
 export * from "./tables/audit";
 export * from "./tables/dev-mail";
 export * from "./tables/sketches";
+export * from "./tables/review-enums";
+export * from "./tables/review";
 
 export const userRelations = relations(user, ({ many }) => ({
   sessions: many(session),
@@ -51,9 +54,20 @@ export const sketchRelations = relations(sketch, ({ one, many }) => ({
   versions: many(sketchVersion),
 }));
 
-export const sketchVersionRelations = relations(sketchVersion, ({ one }) => ({
+export const sketchVersionRelations = relations(sketchVersion, ({ one, many }) => ({
   sketch: one(sketch, { fields: [sketchVersion.sketchId], references: [sketch.id] }),
   author: one(user, { fields: [sketchVersion.authorId], references: [user.id] }),
+  signOffs: many(signOff),
+  comments: many(comment),
+}));
+
+export const signOffRelations = relations(signOff, ({ one }) => ({
+  version: one(sketchVersion, { fields: [signOff.versionId], references: [sketchVersion.id] }),
+}));
+
+export const commentRelations = relations(comment, ({ one }) => ({
+  version: one(sketchVersion, { fields: [comment.versionId], references: [sketchVersion.id] }),
+  author: one(user, { fields: [comment.authorId], references: [user.id] }),
 }));
 
 export type User = typeof user.$inferSelect;
@@ -63,3 +77,5 @@ export type Invitation = typeof invitation.$inferSelect;
 export type AuditEvent = typeof auditEvent.$inferSelect;
 export type Sketch = typeof sketch.$inferSelect;
 export type SketchVersion = typeof sketchVersion.$inferSelect;
+export type SignOff = typeof signOff.$inferSelect;
+export type Comment = typeof comment.$inferSelect;

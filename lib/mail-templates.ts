@@ -21,7 +21,7 @@ function layout(paragraphs: string[], action: { label: string; url: string }, cl
   ].join("\n");
 }
 
-function compose(to: string, subject: string, paragraphs: string[], action: { label: string; url: string }, closing: string): Mail {
+export function compose(to: string, subject: string, paragraphs: string[], action: { label: string; url: string }, closing: string): Mail {
   const text = [...paragraphs, `${action.label}: ${action.url}`, closing].join("\n\n");
   return { to, subject, text, html: layout(paragraphs, action, closing) };
 }

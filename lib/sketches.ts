@@ -202,13 +202,20 @@ export async function forkSketch(sourceSketchId: string, actor: Actor, input: { 
       },
       tx,
     );
-    if (input.workspaceId !== source.workspaceId) {
-      // The origin's workspace learns its sketch was forked (not where to).
-      await recordAudit(
-        { action: "sketch.fork", actorId: actor.id, actorEmail: actor.email, workspaceId: source.workspaceId, targetType: "sketch", targetId: sourceSketchId, detail: { sketchId: sourceSketchId, title: source.title, fromVersion: number, elsewhere: true } },
-        tx,
-      );
-    }
+    // The origin's feed learns it was forked: into which sketch only when that is in the same workspace.
+    const elsewhere = input.workspaceId !== source.workspaceId;
+    await recordAudit(
+      {
+        action: "sketch.fork",
+        actorId: actor.id,
+        actorEmail: actor.email,
+        workspaceId: source.workspaceId,
+        targetType: "sketch",
+        targetId: sourceSketchId,
+        detail: { sketchId: sourceSketchId, title: source.title, fromVersion: number, origin: true, elsewhere, ...(elsewhere ? {} : { forkTitle: title, forkSketchId: made.sketch.id }) },
+      },
+      tx,
+    );
     return made;
   });
 }

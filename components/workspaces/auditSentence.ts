@@ -39,7 +39,8 @@ export function auditSentence(e: AuditEntry): string {
     case "sketch.save":
       return `saved v${num(d.number)} of "${str(d.title)}"${d.message ? `: ${str(d.message)}` : ""}`;
     case "sketch.fork":
-      return d.elsewhere ? `forked v${num(d.fromVersion)} of "${str(d.title)}" into another workspace` : `forked v${num(d.fromVersion)} of another sketch as "${str(d.title)}"`;
+      if (d.origin) return d.elsewhere ? `forked v${num(d.fromVersion)} of "${str(d.title)}" into another workspace` : `forked v${num(d.fromVersion)} of "${str(d.title)}" as "${str(d.forkTitle)}"`;
+      return `made "${str(d.title)}" as a fork of another sketch's v${num(d.fromVersion)}`;
     case "sketch.rename":
       return str(d.from) && str(d.from) !== str(d.title) ? `renamed the sketch "${str(d.from)}" to "${str(d.title)}"` : `edited the details of "${str(d.title)}"`;
     case "sketch.delete":

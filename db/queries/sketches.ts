@@ -56,6 +56,8 @@ export type SketchListItem = {
   updatedAt: Date;
   updatedBy: { id: string; name: string } | null;
   forked: boolean;
+  /** the newest approved version, if any */
+  approvedVersion: number | null;
 };
 
 export type SketchListPage = { items: SketchListItem[]; total: number; page: number; pageSize: number };
@@ -101,6 +103,7 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       updaterId: updater.id,
       updaterName: updater.name,
       forkedFrom: sketch.forkedFromVersionId,
+      approvedVersion: sql<number | null>`(select max(av.number) from sketch_version av where av.sketch_id = ${sketch.id} and av.review_state = 'approved')`,
     })
     .from(sketch)
     .leftJoin(latest, and(eq(latest.sketchId, sketch.id), eq(latest.number, sketch.latestVersion)))
@@ -130,6 +133,7 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       updatedAt: r.updatedAt,
       updatedBy: r.updaterId ? { id: r.updaterId, name: r.updaterName ?? "" } : null,
       forked: r.forkedFrom !== null,
+      approvedVersion: r.approvedVersion === null ? null : Number(r.approvedVersion),
     })),
   };
 }
@@ -169,6 +173,7 @@ export async function getSketchForMember(sketchId: string, viewerId: string) {
       originTitle: originSketch.title,
       originWorkspaceId: originSketch.workspaceId,
       originVisible: sql<boolean>`${actorMay(originSketch.workspaceId, viewerId, "sketch.read")}`,
+      approvedVersion: sql<number | null>`(select max(av.number) from sketch_version av where av.sketch_id = ${sketch.id} and av.review_state = 'approved')`,
     })
     .from(sketch)
     .innerJoin(workspace, eq(workspace.id, sketch.workspaceId))
@@ -199,6 +204,7 @@ export async function getSketchForMember(sketchId: string, viewerId: string) {
     updatedBy: row.updatedBy,
     role: row.role,
     forkedFrom,
+    approvedVersion: row.approvedVersion === null ? null : Number(row.approvedVersion),
   };
 }
 export type SketchDetail = NonNullable<Awaited<ReturnType<typeof getSketchForMember>>>;

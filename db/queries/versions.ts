@@ -2,6 +2,7 @@ import "server-only";
 import { and, desc, eq, getTableColumns } from "drizzle-orm";
 import { db } from "@/db";
 import { sketch, sketchVersion, user, type SolveSummary } from "@/db/schema";
+import type { ReviewState } from "@/lib/review/rules";
 import type { SketchStatus } from "@/lib/sketch-schemas";
 import type { SketchFile } from "@/solver/schema";
 import type { DbOrTx } from "./tx";
@@ -18,6 +19,8 @@ export type VersionListItem = {
   largestReaction: number | null;
   warnings: string[];
   formatVersion: number;
+  /** where the version stands in the sign-off */
+  reviewState: ReviewState;
 };
 
 const listColumns = {
@@ -31,6 +34,7 @@ const listColumns = {
   largestReaction: sketchVersion.largestReaction,
   summary: sketchVersion.summary,
   formatVersion: sketchVersion.formatVersion,
+  reviewState: sketchVersion.reviewState,
 };
 
 type ListRow = { summary: SolveSummary; status: SolveSummary["status"] } & Omit<VersionListItem, "warnings" | "status">;

@@ -19,5 +19,10 @@ export const auditEvent = pgTable(
     targetId: text("target_id"),
     detail: jsonb("detail").$type<Record<string, unknown>>().notNull().default({}),
   },
-  (t) => [index("audit_workspace_idx").on(t.workspaceId, t.id), index("audit_actor_idx").on(t.actorId, t.id)],
+  (t) => [
+    index("audit_workspace_idx").on(t.workspaceId, t.id),
+    index("audit_actor_idx").on(t.actorId, t.id),
+    // a sketch's activity feed reads its events by target
+    index("audit_target_idx").on(t.targetType, t.targetId, t.id),
+  ],
 );

@@ -2,6 +2,7 @@ import { sql } from "drizzle-orm";
 import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from "drizzle-orm/pg-core";
 import type { SketchFile } from "@/solver/schema";
 import { user } from "./auth";
+import { reviewState } from "./review-enums";
 import { workspace } from "./workspaces";
 
 /** What a version's solve said, kept for listings (the document is solved again wherever detail is shown). */
@@ -70,10 +71,15 @@ export const sketchVersion = pgTable(
     summary: jsonb("summary").$type<SolveSummary>().notNull(),
     authorId: text("author_id").references(() => user.id, { onDelete: "set null" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    /** the sign-off state (not part of what was saved: it moves while the version stays) */
+    reviewState: reviewState("review_state").notNull().default("draft"),
+    /** who checked it in the current round (approval may not be theirs) */
+    checkedBy: text("checked_by").references(() => user.id, { onDelete: "set null" }),
   },
   (t) => [
     uniqueIndex("sketch_version_number_idx").on(t.sketchId, t.number),
     index("sketch_version_author_idx").on(t.authorId),
+    index("sketch_version_review_idx").on(t.sketchId, t.reviewState),
     check("sketch_version_number_positive", sql`${t.number} >= 1`),
   ],
 );

@@ -1,0 +1,254 @@
+// What changed between two sketch files: elements added, removed and changed field by field
+// (old → new, with units), parameters, and the result: every support's reaction before and
+// after with the change (absolute and %), and each body's status ("holds → lifts").
+// Pure and browser-safe: the API, the comparison page and "compare with my kept changes" share it.
+import { parseSketch, solve, type ParseResult, type SolveResult } from "@/solver";
+import type { SketchFile } from "@/solver/schema";
+import type { FieldError } from "@/solver/types";
+import { formatNumber, formatQuantity, type Quantity } from "@/solver/units";
+
+export const COLLECTIONS = ["bodies", "supports", "loads", "ports", "massSources"] as const;
+export type Collection = (typeof COLLECTIONS)[number];
+
+export type ElementRef = { id: string; collection: Collection; kind: string; label: string };
+export type FieldChange = { field: string; before: string | null; after: string | null };
+export type ElementChange = ElementRef & { fields: FieldChange[] };
+export type ReactionSnapshot = { fx: number; fy: number; m: number; resultant: number; n: number | null; state: string };
+export type ReactionChange = {
+  id: string;
+  label: string;
+  body: string;
+  before: ReactionSnapshot | null;
+  after: ReactionSnapshot | null;
+  /** of the resultant (N), and relative to before (%; null when before was zero or missing) */
+  change: { abs: number; pct: number | null } | null;
+  /** "bearing → lifted", when the state changed */
+  stateChange: string | null;
+};
+export type BodyChange = { id: string; label: string; before: string | null; after: string | null; words: string | null };
+
+export type Comparison = {
+  sketch: FieldChange[];
+  parameters: { added: FieldChange[]; removed: FieldChange[]; changed: FieldChange[] };
+  elements: { added: ElementRef[]; removed: ElementRef[]; changed: ElementChange[] };
+  bodies: BodyChange[];
+  reactions: ReactionChange[];
+  errors: { before: FieldError[]; after: FieldError[] };
+  /** element ids to mark on each drawing */
+  marks: { before: Record<string, "removed" | "changed">; after: Record<string, "added" | "changed"> };
+};
+
+/** The unit of each numeric field, by its name. */
+const FIELD_QUANTITY: Record<string, Quantity | "rotationalStiffness"> = {
+  mass: "mass",
+  cg: "length",
+  at: "length",
+  from: "length",
+  to: "length",
+  outline: "length",
+  angle: "angle",
+  mu: "ratio",
+  stiffness: "stiffness",
+  rotationalStiffness: "rotationalStiffness",
+  magnitude: "force",
+  fx: "force",
+  fy: "force",
+  value: "moment",
+  w1: "lineLoad",
+  w2: "lineLoad",
+  massFlow: "massFlow",
+  velocity: "velocity",
+  pressure: "pressure",
+  area: "area",
+  density: "density",
+  volumeFlow: "volumeFlow",
+  gravity: "acceleration",
+  ax: "acceleration",
+  ay: "acceleration",
+};
+
+type Side = { file: SketchFile; parsed: ParseResult; result: SolveResult | null };
+
+function side(file: SketchFile): Side {
+  const parsed = parseSketch(file);
+  let result: SolveResult | null = null;
+  if (parsed.ok) {
+    try {
+      result = solve(parsed.sketch);
+    } catch {
+      result = null;
+    }
+  }
+  return { file: parsed.ok ? parsed.file : file, parsed, result };
+}
+
+const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
+/** "1,250 gpm" and "1250gpm" say the same. */
+const sameText = (a: string, b: string) => a.replace(/[\s,]/g, "") === b.replace(/[\s,]/g, "");
+
+function quantityText(si: number, q: Quantity | "rotationalStiffness"): string {
+  return q === "rotationalStiffness" ? `${formatNumber(si)} N·m/rad` : formatQuantity(si, q, "SI");
+}
+
+/** A value as written, with its evaluated value and unit beside an expression. */
+function show(raw: unknown, path: string, field: string, fields: ParseResult["fields"]): string | null {
+  if (raw === undefined) return null;
+  const q = FIELD_QUANTITY[field];
+  const resolved = (p: string) => {
+    const v = fields[p];
+    return v && "value" in v ? v.value : undefined;
+  };
+  if (q && Array.isArray(raw) && raw.length === 2 && !Array.isArray(raw[0])) {
+    const xs = [0, 1].map((i) => resolved(`${path}[${i}]`));
+    const written = raw.every((x) => typeof x === "number");
+    const values = xs.every((x) => x !== undefined) ? `(${xs.map((x) => formatNumber(x!)).join(", ")}) m` : null;
+    return written ? (values ?? `(${raw.join(", ")}) m`) : `(${raw.map((x) => String(x)).join(", ")})${values ? ` = ${values}` : ""}`;
+  }
+  if (q && (typeof raw === "number" || typeof raw === "string")) {
+    const si = resolved(path);
+    if (si === undefined) return String(raw);
+    const text = quantityText(si, q);
+    return typeof raw === "number" || sameText(raw, text) ? text : `${raw} (= ${text})`;
+  }
+  if (typeof raw === "string") return raw;
+  if (typeof raw === "number" || typeof raw === "boolean") return String(raw);
+  return JSON.stringify(raw);
+}
+
+function outlineChange(before: unknown[], after: unknown[]): FieldChange {
+  if (before.length !== after.length) return { field: "outline", before: `${before.length} corners`, after: `${after.length} corners` };
+  const moved = before.map((p, i) => (same(p, after[i]) ? null : i)).filter((i): i is number => i !== null);
+  const pt = (p: unknown) => `(${(p as unknown[]).map((x) => (typeof x === "number" ? formatNumber(x) : String(x))).join(", ")})`;
+  return {
+    field: "outline",
+    before: moved.map((i) => `corner ${i + 1} ${pt(before[i])}`).join("; ") + " m",
+    after: moved.map((i) => `corner ${i + 1} ${pt(after[i])}`).join("; ") + " m",
+  };
+}
+
+type AnyElement = Record<string, unknown> & { id: string; kind?: string; label?: string; body?: string };
+
+function elementsOf(file: SketchFile): Map<string, { el: AnyElement; collection: Collection; index: number }> {
+  const out = new Map<string, { el: AnyElement; collection: Collection; index: number }>();
+  for (const c of COLLECTIONS) {
+    ((file[c] ?? []) as AnyElement[]).forEach((el, index) => out.set(el.id, { el, collection: c, index }));
+  }
+  return out;
+}
+
+const KIND_OF: Record<Collection, string> = { bodies: "body", supports: "support", loads: "load", ports: "port", massSources: "mass source" };
+const refOf = (e: { el: AnyElement; collection: Collection }): ElementRef => ({
+  id: e.el.id,
+  collection: e.collection,
+  kind: e.el.kind ?? KIND_OF[e.collection],
+  label: e.el.label || e.el.id,
+});
+
+function elementFields(a: { el: AnyElement; collection: Collection; index: number }, b: { el: AnyElement; collection: Collection; index: number }, fa: ParseResult["fields"], fb: ParseResult["fields"]) {
+  const keys = [...new Set([...Object.keys(a.el), ...Object.keys(b.el)])].filter((k) => k !== "id");
+  const changes: FieldChange[] = [];
+  for (const k of keys) {
+    if (same(a.el[k], b.el[k])) continue;
+    if (k === "outline" && Array.isArray(a.el[k]) && Array.isArray(b.el[k])) {
+      changes.push(outlineChange(a.el[k] as unknown[], b.el[k] as unknown[]));
+      continue;
+    }
+    changes.push({ field: k, before: show(a.el[k], `${a.collection}[${a.index}].${k}`, k, fa), after: show(b.el[k], `${b.collection}[${b.index}].${k}`, k, fb) });
+  }
+  return changes;
+}
+
+function parameterText(name: string, raw: unknown, values: ParseResult["parameterValues"]): string {
+  const v = values[name];
+  const written = String(raw);
+  if (!v || "error" in v) return written;
+  const evaluated = `${formatNumber(v.value)}${v.unit ? ` ${v.unit}` : ""}`;
+  return sameText(written, evaluated) ? written : `${written} (= ${evaluated})`;
+}
+
+function snapshot(r: SolveResult["reactions"][string] | undefined): ReactionSnapshot | null {
+  if (!r) return null;
+  return { fx: r.fx, fy: r.fy, m: r.m, resultant: Math.hypot(r.fx, r.fy), n: r.n ?? null, state: r.state };
+}
+
+/** Compare sketch `a` (before) with sketch `b` (after). */
+export function compareSketches(fileA: SketchFile, fileB: SketchFile): Comparison {
+  const A = side(fileA);
+  const B = side(fileB);
+  const fa = A.parsed.fields;
+  const fb = B.parsed.fields;
+
+  const sketch: FieldChange[] = [];
+  for (const k of ["title", "description", "gravity", "motion"] as const) {
+    if (same(A.file[k], B.file[k])) continue;
+    if (k === "motion") sketch.push({ field: "motion", before: A.file.motion ? JSON.stringify(A.file.motion) : null, after: B.file.motion ? JSON.stringify(B.file.motion) : null });
+    else sketch.push({ field: k, before: show(A.file[k], k, k, fa), after: show(B.file[k], k, k, fb) });
+  }
+
+  const pa = A.file.parameters ?? {};
+  const pb = B.file.parameters ?? {};
+  const parameters: Comparison["parameters"] = { added: [], removed: [], changed: [] };
+  for (const name of [...new Set([...Object.keys(pa), ...Object.keys(pb)])]) {
+    const before = name in pa ? parameterText(name, pa[name], A.parsed.parameterValues) : null;
+    const after = name in pb ? parameterText(name, pb[name], B.parsed.parameterValues) : null;
+    if (before === null) parameters.added.push({ field: name, before, after });
+    else if (after === null) parameters.removed.push({ field: name, before, after });
+    else if (!same(pa[name], pb[name])) parameters.changed.push({ field: name, before, after });
+  }
+
+  const ea = elementsOf(A.file);
+  const eb = elementsOf(B.file);
+  const elements: Comparison["elements"] = { added: [], removed: [], changed: [] };
+  const marks: Comparison["marks"] = { before: {}, after: {} };
+  for (const [id, a] of ea) {
+    const b = eb.get(id);
+    if (!b) {
+      elements.removed.push(refOf(a));
+      marks.before[id] = "removed";
+      continue;
+    }
+    const fields = elementFields(a, b, fa, fb);
+    if (fields.length) {
+      elements.changed.push({ ...refOf(b), fields });
+      marks.before[id] = "changed";
+      marks.after[id] = "changed";
+    }
+  }
+  for (const [id, b] of eb) {
+    if (ea.has(id)) continue;
+    elements.added.push(refOf(b));
+    marks.after[id] = "added";
+  }
+
+  const label = (id: string) => (eb.get(id) ?? ea.get(id))?.el.label || id;
+  const bodyIds = [...new Set([...ea.values(), ...eb.values()].filter((e) => e.collection === "bodies").map((e) => e.el.id))];
+  const bodies: BodyChange[] = bodyIds.map((id) => {
+    const before = A.result?.bodies[id]?.status ?? null;
+    const after = B.result?.bodies[id]?.status ?? null;
+    return { id, label: label(id), before, after, words: before !== after ? `${before ?? "—"} → ${after ?? "—"}` : null };
+  });
+
+  const supportIds = [...new Set([...ea.values(), ...eb.values()].filter((e) => e.collection === "supports").map((e) => e.el.id))];
+  const reactions: ReactionChange[] = supportIds.map((id) => {
+    const before = snapshot(A.result?.reactions[id]);
+    const after = snapshot(B.result?.reactions[id]);
+    const change = before && after ? { abs: after.resultant - before.resultant, pct: before.resultant > 1e-9 ? ((after.resultant - before.resultant) / before.resultant) * 100 : null } : null;
+    const stateChange = before && after && before.state !== after.state ? `${before.state} → ${after.state}` : null;
+    return { id, label: label(id), body: String((eb.get(id) ?? ea.get(id))?.el.body ?? ""), before, after, change, stateChange };
+  });
+
+  return {
+    sketch,
+    parameters,
+    elements,
+    bodies,
+    reactions,
+    errors: { before: A.parsed.ok ? [] : A.parsed.errors, after: B.parsed.ok ? [] : B.parsed.errors },
+    marks,
+  };
+}
+
+/** How many things changed in the inputs (not counting the result). */
+export function changeCount(c: Comparison): number {
+  return c.sketch.length + c.parameters.added.length + c.parameters.removed.length + c.parameters.changed.length + c.elements.added.length + c.elements.removed.length + c.elements.changed.length;
+}

@@ -1,0 +1,139 @@
+// The sign-off of a version: one table of who may take which step from which state, read by
+// the server (to refuse, with a reason) and by the screens (to offer only what is allowed).
+// The tests walk the same table, every step by every kind of person from every state.
+// Browser-safe.
+import type { Role } from "../roles";
+
+export const REVIEW_STATES = ["draft", "submitted", "returned", "checked", "approved", "withdrawn"] as const;
+export type ReviewState = (typeof REVIEW_STATES)[number];
+
+export const SIGN_OFF_STEPS = ["submit", "check", "return", "approve", "withdraw"] as const;
+export type SignOffStep = (typeof SIGN_OFF_STEPS)[number];
+
+export const STATE_WORDS: Record<ReviewState, { label: string; sentence: string }> = {
+  draft: { label: "prepared", sentence: "Prepared; not yet submitted for checking." },
+  submitted: { label: "submitted", sentence: "Submitted for checking." },
+  returned: { label: "returned", sentence: "Returned to its author with comments." },
+  checked: { label: "checked", sentence: "Checked; waiting for approval." },
+  approved: { label: "approved", sentence: "Approved. Locked: no new comments, and no sign-off step but withdrawal." },
+  withdrawn: { label: "approval withdrawn", sentence: "Its approval was withdrawn; it may be submitted again." },
+};
+
+export type SignOffRule = {
+  /** the button */
+  label: string;
+  /** "checked v3", as the record reads */
+  done: string;
+  /** the states it may start from, and where it leads */
+  from: readonly ReviewState[];
+  to: ReviewState;
+  /** roles that may take the step */
+  roles: readonly Role[];
+  /** the version's author: "also" may take it whatever their role; "never" may not */
+  author: "also" | "never" | "as role";
+  /** the person who checked the version may never take it */
+  notChecker: boolean;
+  /** a note is required (the reason of a return or a withdrawal) */
+  noteRequired: boolean;
+  /** reasons of refusal, for people */
+  refused: { role: string; author?: string; checker?: string; state: (state: ReviewState) => string };
+};
+
+export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
+  submit: {
+    label: "Submit for checking",
+    done: "submitted for checking",
+    from: ["draft", "returned", "withdrawn"],
+    to: "submitted",
+    roles: ["owner", "editor"],
+    author: "also",
+    notChecker: false,
+    noteRequired: false,
+    refused: {
+      role: "Submitting is for the version's author, editors and owners.",
+      state: (s) => `This version is already ${STATE_WORDS[s].label}: it is submitted once per round.`,
+    },
+  },
+  check: {
+    label: "Mark checked",
+    done: "checked",
+    from: ["submitted"],
+    to: "checked",
+    roles: ["owner", "checker"],
+    author: "never",
+    notChecker: false,
+    noteRequired: false,
+    refused: {
+      role: "Checking is for checkers and owners.",
+      author: "You prepared this version: someone else must check it.",
+      state: (s) => `Only a submitted version can be checked; this one is ${STATE_WORDS[s].label}.`,
+    },
+  },
+  return: {
+    label: "Return with comments",
+    done: "returned",
+    from: ["submitted"],
+    to: "returned",
+    roles: ["owner", "checker"],
+    author: "never",
+    notChecker: false,
+    noteRequired: true,
+    refused: {
+      role: "Returning a version is for checkers and owners.",
+      author: "You prepared this version: someone else must check it.",
+      state: (s) => `Only a submitted version can be returned; this one is ${STATE_WORDS[s].label}.`,
+    },
+  },
+  approve: {
+    label: "Approve",
+    done: "approved",
+    from: ["checked"],
+    to: "approved",
+    roles: ["owner"],
+    author: "never",
+    notChecker: true,
+    noteRequired: false,
+    refused: {
+      role: "Approval is for owners of the workspace.",
+      author: "You prepared this version: another owner must approve it.",
+      checker: "You checked this version: another owner must approve it.",
+      state: (s) => `Only a checked version can be approved; this one is ${STATE_WORDS[s].label}.`,
+    },
+  },
+  withdraw: {
+    label: "Withdraw the approval",
+    done: "withdrew the approval of",
+    from: ["approved"],
+    to: "withdrawn",
+    roles: ["owner"],
+    author: "as role",
+    notChecker: false,
+    noteRequired: true,
+    refused: {
+      role: "Withdrawing an approval is for owners of the workspace.",
+      state: (s) => `Only an approved version can have its approval withdrawn; this one is ${STATE_WORDS[s].label}.`,
+    },
+  },
+};
+
+export type SignOffInput = { step: SignOffStep; role: Role; isAuthor: boolean; isChecker: boolean; state: ReviewState };
+export type SignOffDecision = { ok: true; to: ReviewState } | { ok: false; status: 403 | 409; code: "forbidden" | "review_state"; reason: string };
+
+/**
+ * May this person take this step now? Who they are is asked first (403), then where the version
+ * stands (409): a refusal always names the first rule that stops it.
+ */
+export function decideSignOff({ step, role, isAuthor, isChecker, state }: SignOffInput): SignOffDecision {
+  const rule = SIGN_OFF_RULES[step];
+  const byRole = rule.roles.includes(role) || (rule.author === "also" && isAuthor);
+  if (!byRole) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.role };
+  if (rule.author === "never" && isAuthor) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.author! };
+  if (rule.notChecker && isChecker) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.checker! };
+  if (!rule.from.includes(state)) return { ok: false, status: 409, code: "review_state", reason: rule.refused.state(state) };
+  return { ok: true, to: rule.to };
+}
+
+/** The steps this person may take on the version now (for the buttons). */
+export function allowedSteps(input: Omit<SignOffInput, "step">): SignOffStep[] {
+  return SIGN_OFF_STEPS.filter((step) => decideSignOff({ ...input, step }).ok);
+}

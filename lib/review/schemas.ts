@@ -1,0 +1,44 @@
+// Request shapes of the review endpoints (comments, sign-off, comparison, activity). Browser-safe.
+import { z } from "zod";
+import { MAX_COMMENT_LENGTH } from "./comment-text";
+import { SIGN_OFF_STEPS } from "./rules";
+
+const coordinate = z.number({ error: "A coordinate is a number (m)." }).finite().min(-1e6).max(1e6);
+
+export const commentPinSchema = z.discriminatedUnion("kind", [
+  z.strictObject({ kind: z.literal("element"), elementId: z.string().min(1).max(100) }),
+  z.strictObject({ kind: z.literal("point"), at: z.tuple([coordinate, coordinate]) }),
+]);
+
+export const commentBodySchema = z
+  .string({ error: "A comment is text." })
+  .trim()
+  .min(1, "Write something first.")
+  .max(MAX_COMMENT_LENGTH, `Keep a comment under ${MAX_COMMENT_LENGTH} characters.`);
+
+export const createCommentInput = z.strictObject({
+  body: commentBodySchema,
+  pin: commentPinSchema.nullish(),
+  parentId: z.uuid({ error: "Not a comment id." }).nullish(),
+});
+
+export const updateCommentInput = z
+  .strictObject({ body: commentBodySchema.optional(), resolved: z.boolean({ error: "resolved is true or false." }).optional() })
+  .refine((v) => (v.body === undefined) !== (v.resolved === undefined), { error: "Send either the new text (body) or resolved." });
+
+export const signOffInput = z.strictObject({
+  step: z.enum(SIGN_OFF_STEPS, { error: "The step is submit, check, return, approve or withdraw." }),
+  note: z.string({ error: "The note is text." }).trim().max(2000, "Keep the note under 2000 characters.").optional(),
+});
+
+export const commentParams = z.object({ commentId: z.uuid() });
+
+export const compareQuery = z.object({
+  from: z.coerce.number().int().min(1, "Versions start at 1."),
+  to: z.coerce.number().int().min(1, "Versions start at 1."),
+});
+
+export const activityQuery = z.object({
+  before: z.coerce.number().int().positive().optional(),
+  limit: z.coerce.number().int().min(1).max(100).optional(),
+});

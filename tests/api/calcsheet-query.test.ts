@@ -1,0 +1,56 @@
+// What the calc sheet's title block reads for a version: workspace, sketch, number, message,
+// saved date, and the sign-off of the current round, for members only.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { getVersionForCalcSheet } from "@/db/queries/review";
+import { takeSignOffStep } from "@/lib/review/signoff";
+import { createSketch } from "@/lib/sketches";
+import { parseSketch } from "@/solver";
+import { ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
+import { fixture } from "./sketch-fixtures";
+
+let stopMail: () => Promise<void>;
+let prep: Person;
+let chk: Person;
+let lead: Person;
+let outsider: Person;
+beforeAll(async () => {
+  stopMail = await ensureMailFake();
+  prep = await makeAccount("prep", { name: "Pat Preparer" });
+  chk = await makeAccount("chk", { name: "Cam Checker" });
+  lead = await makeAccount("lead", { name: "Lee Lead" });
+  outsider = await makeAccount("outsider");
+});
+afterAll(async () => stopMail?.());
+
+describe("getVersionForCalcSheet", () => {
+  it("returns the title block's facts and the sign-off entries with names and dates", async () => {
+    const ws = await makeWorkspace("Calc sheet bay", [
+      [prep, "editor"],
+      [chk, "checker"],
+      [lead, "owner"],
+    ]);
+    const parsed = parseSketch(fixture("pipe-bend-anchor"));
+    if (!parsed.ok) throw new Error("fixture does not parse");
+    const made = await createSketch(ws, prep, { title: "Bend anchor", document: parsed, message: "As designed" });
+    const sketchId = made.sketch.id;
+
+    const draft = await getVersionForCalcSheet(made.version.id, lead.id);
+    expect(draft).toMatchObject({ workspaceName: "Calc sheet bay", sketchTitle: "Bend anchor", versionNumber: 1, message: "As designed", authorName: "Pat Preparer", reviewState: "draft" });
+    expect(draft!.signOff).toEqual([{ role: "prepared", name: "Pat Preparer", date: made.version.createdAt }]);
+    expect(draft!.document.title).toBe(parsed.file.title);
+
+    await takeSignOffStep(sketchId, 1, prep, { step: "submit" });
+    const checked = await takeSignOffStep(sketchId, 1, chk, { step: "check" });
+    const approved = await takeSignOffStep(sketchId, 1, lead, { step: "approve" });
+    const sheet = await getVersionForCalcSheet(made.version.id, chk.id);
+    expect(sheet!.reviewState).toBe("approved");
+    expect(sheet!.signOff).toEqual([
+      { role: "prepared", name: "Pat Preparer", date: made.version.createdAt },
+      { role: "checked", name: "Cam Checker", date: checked.entry.at },
+      { role: "approved", name: "Lee Lead", date: approved.entry.at },
+    ]);
+    expect(sheet!.savedAt).toEqual(made.version.createdAt);
+
+    expect(await getVersionForCalcSheet(made.version.id, outsider.id)).toBeNull();
+  });
+});

@@ -1,0 +1,185 @@
+// Comments on a version: threads pinned to an element, a point or the whole version; replies;
+// resolve and reopen; editing and deleting your own; @mentions mailed through the SMTP fake
+// unless the member turned mail off; an approved version takes no new comments.
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import * as commentRoute from "@/app/api/comments/[commentId]/route";
+import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
+import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
+import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
+import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
+import { db } from "@/db";
+import { devMail, user } from "@/db/schema";
+import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Person } from "./helpers";
+import { fixture } from "./sketch-fixtures";
+
+let stopMail: () => Promise<void>;
+let eddie: Person;
+let chen: Person;
+let olivia: Person;
+let vera: Person;
+let quiet: Person;
+let ws: string;
+
+beforeAll(async () => {
+  stopMail = await ensureMailFake();
+  eddie = await makeAccount("eddie", { name: "Eddie Drafter" });
+  chen = await makeAccount("chen", { name: "Chen Checkwell" });
+  olivia = await makeAccount("olivia", { name: "Olivia Lead" });
+  vera = await makeAccount("vera", { name: "Vera Reader" });
+  quiet = await makeAccount("quiet", { name: "Quinn Quiet" });
+  await db.update(user).set({ emailNotifications: false }).where(eq(user.id, quiet.id));
+  ws = await makeWorkspace("Comment bay", [
+    [olivia, "owner"],
+    [eddie, "editor"],
+    [chen, "checker"],
+    [vera, "viewer"],
+    [quiet, "checker"],
+  ]);
+});
+afterAll(async () => stopMail?.());
+
+async function newSketch(): Promise<string> {
+  const res = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title: "Skid for comments", document: fixture("pump-skid-discharge") } });
+  return res.body.sketch.id;
+}
+const p = (sketchId: string) => ({ id: sketchId, number: "1" });
+const post = (sketchId: string, who: Person, body: Record<string, unknown>) => call(commentsRoute.POST, { method: "POST", params: p(sketchId), cookie: who.cookie, body });
+const list = (sketchId: string, who: Person) => call(commentsRoute.GET, { params: p(sketchId), cookie: who.cookie });
+const patch = (id: string, who: Person, body: Record<string, unknown>) => call(commentRoute.PATCH, { method: "PATCH", params: { commentId: id }, cookie: who.cookie, body });
+
+describe("threads", () => {
+  it("pins a thread to a support, answers it, resolves and reopens it", async () => {
+    const id = await newSketch();
+    const made = await post(id, chen, { body: "Is **μ = 0.4** right for steel on concrete?", pin: { kind: "element", elementId: "rear" } });
+    expect(made.status).toBe(201);
+    const point = await post(id, chen, { body: "Where does the drain channel run?", pin: { kind: "point", at: [1.2, -0.1] } });
+    const whole = await post(id, olivia, { body: "Looks tidy overall." });
+    expect([point.status, whole.status]).toEqual([201, 201]);
+    expect((await post(id, eddie, { body: "Taken from the site survey, table 3.", parentId: made.body.comment.id })).status).toBe(201);
+
+    const read = await list(id, vera);
+    expect(read.status).toBe(200);
+    expect(read.body.threads.map((t: { pin: unknown; comments: unknown[] }) => [t.pin, t.comments.length])).toEqual([
+      [{ kind: "element", elementId: "rear" }, 2],
+      [{ kind: "point", at: [1.2, -0.1] }, 1],
+      [null, 1],
+    ]);
+    expect(read.body.threads[0].comments[1]).toMatchObject({ authorName: "Eddie Drafter", body: "Taken from the site survey, table 3.", deleted: false });
+    expect(read.body.canComment).toBe(false); // a viewer reads
+    expect((await list(id, chen)).body.canComment).toBe(true);
+
+    const threadId = made.body.comment.id;
+    expect((await patch(threadId, vera, { resolved: true })).status).toBe(403);
+    expect((await patch(threadId, eddie, { resolved: true })).status).toBe(200);
+    let t = (await list(id, chen)).body.threads[0];
+    expect(t).toMatchObject({ resolvedByName: "Eddie Drafter" });
+    expect(t.resolvedAt).not.toBeNull();
+    expect((await patch(threadId, chen, { resolved: false })).status).toBe(200);
+    t = (await list(id, chen)).body.threads[0];
+    expect(t.resolvedAt).toBeNull();
+    // a reply is not a thread
+    const replyId = (await list(id, chen)).body.threads[0].comments[1].id;
+    expect((await patch(replyId, chen, { resolved: true })).status).toBe(400);
+
+    const feed = await call(activityRoute.GET, { params: { id }, cookie: vera.cookie });
+    expect(feed.body.events.map((e: { action: string }) => e.action).slice(0, 6)).toEqual([
+      "comment.reopen",
+      "comment.resolve",
+      "comment.create",
+      "comment.create",
+      "comment.create",
+      "comment.create",
+    ]);
+    expect(feed.body.events.at(-1)).toMatchObject({ action: "sketch.create", actorName: "Eddie Drafter" });
+  });
+
+  it("edits and deletes only your own comments; a deleted reply keeps its place", async () => {
+    const id = await newSketch();
+    const root = (await post(id, chen, { body: "First remark" })).body.comment.id;
+    const reply = (await post(id, eddie, { body: "An answer", parentId: root })).body.comment.id;
+    expect((await patch(reply, chen, { body: "Not mine to edit" })).status).toBe(403);
+    expect((await patch(reply, eddie, { body: "A better answer" })).status).toBe(200);
+    expect((await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: reply }, cookie: chen.cookie })).status).toBe(403);
+    expect((await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: reply }, cookie: eddie.cookie })).status).toBe(200);
+    expect((await patch(reply, eddie, { body: "again" })).status).toBe(410);
+    const thread = (await list(id, chen)).body.threads[0];
+    expect(thread.comments[1]).toMatchObject({ deleted: true, body: "" });
+    expect(thread.comments[0].editedAt).toBeNull();
+
+    // a first comment deleted with no replies disappears
+    const lone = (await post(id, chen, { body: "Never mind" })).body.comment.id;
+    await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: lone }, cookie: chen.cookie });
+    expect((await list(id, chen)).body.threads).toHaveLength(1);
+  });
+
+  it("refuses bad pins, replies to replies, empty text and outsiders", async () => {
+    const id = await newSketch();
+    const outsider = await makeAccount("outsider");
+    const root = (await post(id, chen, { body: "root" })).body.comment.id;
+    const reply = (await post(id, chen, { body: "reply", parentId: root })).body.comment.id;
+    const cases = [
+      [await post(id, chen, { body: "x", pin: { kind: "element", elementId: "nope" } }), 400, "pin.elementId"],
+      [await post(id, chen, { body: "x", pin: { kind: "point", at: [1, "a"] } }), 400, "pin.at.1"],
+      [await post(id, chen, { body: "x", parentId: reply }), 400, "parentId"],
+      [await post(id, chen, { body: "   " }), 400, "body"],
+      [await post(id, chen, { body: "x".repeat(4001) }), 400, "body"],
+      [await post(id, outsider, { body: "hello" }), 404, null],
+      [await post(id, vera, { body: "a viewer writes" }), 403, null],
+    ] as const;
+    for (const [res, status, path] of cases) {
+      expect(res.status).toBe(status);
+      if (path) expect(res.body.error.fields.map((f: { path: string }) => f.path)).toContain(path);
+    }
+    expect((await list(id, chen)).body.threads).toHaveLength(1);
+    expect((await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: root }, cookie: outsider.cookie })).status).toBe(404);
+  });
+});
+
+describe("mentions", () => {
+  it("mails the mentioned members, not the author, and nobody who turned mail off", async () => {
+    const id = await newSketch();
+    const before = (await db.select({ id: devMail.id }).from(devMail).orderBy(devMail.id)).at(-1)?.id ?? 0;
+    const made = await post(id, chen, { body: "@Eddie Drafter please check the suction pressure; @olivia FYI; @Quinn Quiet too; and @Chen Checkwell (me)." });
+    expect(made.status).toBe(201);
+    expect(made.body.comment.mentions.sort()).toEqual([chen.id, eddie.id, olivia.id, quiet.id].sort());
+    const toEddie = await waitForMail(eddie.email, { subject: /mentioned you on v1 of "Skid for comments"/, after: before });
+    expect(toEddie.subject).toBe('Chen Checkwell mentioned you on v1 of "Skid for comments"');
+    expect(toEddie.text).toContain("please check the suction pressure");
+    expect(toEddie.text).toContain(`/workspaces/${ws}/sketches/${id}/versions/1`);
+    await waitForMail(olivia.email, { subject: /mentioned you/, after: before });
+    await new Promise((r) => setTimeout(r, 500));
+    const rest = await db.select({ to: devMail.to }).from(devMail);
+    const addressed = rest.slice(-50).flatMap((m) => m.to);
+    expect(addressed).not.toContain(quiet.email.toLowerCase());
+    expect((await db.select({ to: devMail.to, id: devMail.id }).from(devMail)).filter((m) => m.id > before && m.to.includes(chen.email.toLowerCase()))).toEqual([]);
+
+    const read = await list(id, vera);
+    expect(read.body.threads[0].comments[0].mentions.map((m: { name: string }) => m.name).sort()).toEqual(["Chen Checkwell", "Eddie Drafter", "Olivia Lead", "Quinn Quiet"]);
+  });
+});
+
+describe("an approved version", () => {
+  it("takes no new comments, replies, edits or resolutions, until its approval is withdrawn", async () => {
+    const id = await newSketch();
+    const root = (await post(id, chen, { body: "Before approval" })).body.comment.id;
+    const step = (who: Person, s: string, note?: string) => call(signoffRoute.POST, { method: "POST", params: p(id), cookie: who.cookie, body: { step: s, note } });
+    for (const [who, s] of [[eddie, "submit"], [chen, "check"], [olivia, "approve"]] as const) expect((await step(who, s)).status).toBe(200);
+    const refused = [
+      await post(id, chen, { body: "After approval" }),
+      await post(id, chen, { body: "A reply", parentId: root }),
+      await patch(root, chen, { body: "changed" }),
+      await patch(root, chen, { resolved: true }),
+      await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: root }, cookie: chen.cookie }),
+    ];
+    expect(refused.map((r) => r.status)).toEqual([409, 409, 409, 409, 409]);
+    expect(refused[0].body.error.code).toBe("review_state");
+    expect(refused[0].body.error.message).toContain("This version is approved");
+    const read = await list(id, chen);
+    expect(read.body).toMatchObject({ locked: true, canComment: false });
+    expect(read.body.threads[0].comments[0].body).toBe("Before approval");
+
+    expect((await step(olivia, "withdraw", "Flow rate was wrong")).status).toBe(200);
+    expect((await post(id, chen, { body: "After withdrawal" })).status).toBe(201);
+  });
+});
