@@ -17,6 +17,26 @@ export interface AnalysisCore {
   timeMs: number;
 }
 
+/** The raw value at a field path of the file ("supports[2].at[0]"). */
+function rawAt(file: unknown, path: string): unknown {
+  let cur: unknown = file;
+  for (const m of path.matchAll(/([^.[\]]+)|\[(\d+)\]/g)) {
+    if (cur === null || typeof cur !== "object") return undefined;
+    cur = (cur as Record<string, unknown>)[m[1] ?? Number(m[2])];
+  }
+  return cur;
+}
+
+/**
+ * Only the fields the editor cannot read by itself: expressions (a plain number is its own
+ * value). Keeps the worker's answer small — a drag sends one per frame.
+ */
+export function expressionFields(file: SketchFile, fields: AnalysisCore["fields"]): AnalysisCore["fields"] {
+  const out: AnalysisCore["fields"] = {};
+  for (const [path, v] of Object.entries(fields)) if ("error" in v || typeof rawAt(file, path) === "string") out[path] = v;
+  return out;
+}
+
 export function analyseCore(file: SketchFile): AnalysisCore {
   const t0 = typeof performance !== "undefined" ? performance.now() : Date.now();
   let core: Omit<AnalysisCore, "timeMs">;

@@ -38,8 +38,16 @@ export const EMPTY_ANALYSIS: Analysis = {
 };
 
 /** Fold a new core into the previous analysis. */
+function sameMap<V>(a: ReadonlyMap<string, V>, b: ReadonlyMap<string, V>): boolean {
+  if (a.size !== b.size) return false;
+  for (const [k, v] of a) if (b.get(k) !== v) return false;
+  return true;
+}
+
 export function nextAnalysis(prev: Analysis, sketch: SketchFile, core: AnalysisCore): Analysis {
-  const fieldValues = fieldValuesById(sketch, core.fields, core.errors);
+  const fresh = fieldValuesById(sketch, core.fields, core.errors);
+  // unchanged values keep their identity: the scene (and the drawing) need not be rebuilt
+  const fieldValues = sameMap(fresh.values, prev.fieldValues.values) && sameMap(fresh.errors, prev.fieldValues.errors) ? prev.fieldValues : fresh;
   if (core.ok && core.result) {
     return { sketch, core, fieldValues, shown: core.result, shownSketch: core.numeric, stale: false, pending: false };
   }
@@ -62,7 +70,7 @@ export function workerRunner(worker: Worker, schedule: (fn: () => void) => void 
   let posting = false;
   const send = (sketch: SketchFile, done: (c: AnalysisCore) => void) => {
     inFlight = { seq: ++seq, done };
-    worker.postMessage({ seq: inFlight.seq, sketch });
+    worker.postMessage({ seq: inFlight.seq, text: JSON.stringify(sketch) });
   };
   // copying the sketch to the worker costs ~1 ms for 200 elements: do it after the frame
   // that shows the change, not between the pointer move and that frame
@@ -73,12 +81,12 @@ export function workerRunner(worker: Worker, schedule: (fn: () => void) => void 
     waiting = null;
     send(w.sketch, w.done);
   };
-  worker.onmessage = (e: MessageEvent<{ seq: number; core: AnalysisCore }>) => {
+  worker.onmessage = (e: MessageEvent<{ seq: number; core?: AnalysisCore }>) => {
     if (!inFlight || e.data.seq !== inFlight.seq) return;
     const finished = inFlight;
     inFlight = null;
     // deliver every answer (it is newer than what is on screen), then solve the newest change
-    finished.done(e.data.core);
+    finished.done(e.data.core!);
     if (waiting && !posting) {
       posting = true;
       schedule(post);

@@ -8,7 +8,25 @@ export type FieldPath = string | ReadonlyArray<string | number>;
 export type FieldValue = Numeric | boolean | null | undefined | Numeric[] | Numeric[][];
 
 const pathOf = (p: FieldPath) => (typeof p === "string" ? [p] : [...p]);
-const pathText = (p: FieldPath) => pathOf(p).map((k, i) => (typeof k === "number" ? `[${k}]` : i ? `.${k}` : k)).join("");
+const WORDS: Record<string, string> = {
+  at: "position",
+  cg: "centre of gravity",
+  massFlow: "mass flow",
+  volumeFlow: "volume flow",
+  mu: "friction",
+  rotationalStiffness: "rotational stiffness",
+  from: "start",
+  to: "end",
+  outline: "outline",
+};
+/** "the position (x)", "the mass flow", "corner 3 (y) of the outline" — for the undo history. */
+const pathText = (p: FieldPath) => {
+  const [head, i, j] = pathOf(p);
+  const word = WORDS[String(head)] ?? String(head);
+  if (head === "outline" && typeof i === "number") return `corner ${i + 1}${typeof j === "number" ? ` (${j ? "y" : "x"})` : ""}`;
+  if (typeof i === "number") return `the ${word} (${i ? "y" : "x"})`;
+  return `the ${word}`;
+};
 
 /** Keys a blank never deletes, by list (what the file format requires). */
 const REQUIRED: Record<Group, ReadonlySet<string>> = {

@@ -7,7 +7,7 @@ import { Group, Layer, Shape, Stage } from "react-konva";
 import type Konva from "konva";
 import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
-import { useEditor, useStores } from "../context";
+import { useAnalysis, useEditor, useStores } from "../context";
 import { gridStep } from "../geometry/view";
 import { fitScene } from "../geometry/fit";
 import type { ElementKind } from "../model/elements";
@@ -16,7 +16,7 @@ import { snapPoint } from "../geometry/snap";
 import { toWorld } from "../geometry/view";
 import { GRID_MAJOR, GRID_MINOR } from "../render/palette";
 import { markFrame } from "../perf";
-import { BodyNode, CgNode, ItemNode } from "./nodes";
+import { BodyNode, CgNode, ItemNode, statesOf } from "./nodes";
 import { PointerOverlay, ResultsShape, SelectionHandles } from "./overlays";
 import { createPointerController, type HitInfo, type PointerController } from "./pointer";
 import { TRAY_MIME, type InteractionStore } from "./interaction";
@@ -77,18 +77,24 @@ function Elements({ interaction, lifted }: { interaction: InteractionStore; lift
   const up = useStore(interaction, (s) => s.lifted);
   const bodyIds = useStore(sceneStore, (s) => s.bodyIds ?? s.bodies.map((b) => b.id));
   const itemIds = useStore(sceneStore, (s) => s.itemIds ?? s.items.map((i) => i.id));
+  // one subscription each here, not one per node
+  const selection = useEditor((s) => s.selection);
+  const scale = useEditor((s) => s.view.scale);
+  const units = useEditor((s) => s.units);
+  const states = useAnalysis((s) => statesOf(s.shown));
+  const selected = useMemo(() => new Set(selection), [selection]);
   const bodies = useMemo(() => bodyIds.filter((id) => up.has(id) === lifted), [bodyIds, up, lifted]);
   const items = useMemo(() => itemIds.filter((id) => up.has(id) === lifted), [itemIds, up, lifted]);
   return (
     <>
       {bodies.map((id) => (
-        <BodyNode key={id} id={id} />
+        <BodyNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} />
       ))}
       {items.map((id) => (
-        <ItemNode key={id} id={id} />
+        <ItemNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} state={states.get(id)} />
       ))}
       {bodies.map((id) => (
-        <CgNode key={`cg-${id}`} id={id} />
+        <CgNode key={`cg-${id}`} id={id} selected={selected.has(id)} scale={scale} units={units} />
       ))}
     </>
   );

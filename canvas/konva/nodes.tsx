@@ -5,24 +5,27 @@ import { memo, useMemo } from "react";
 import { Group, Shape } from "react-konva";
 import type Konva from "konva";
 import type { SolveResult } from "@/solver/types";
-import { useAnalysis, useEditor, useScene } from "../context";
+import type { UnitSystem } from "@/solver/units";
+import { useScene } from "../context";
 import type { SceneBody, SceneItem } from "../scene";
-import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld } from "../render/symbols";
+import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, type DrawState } from "../render/symbols";
 import { supportStates } from "../render/results";
 import { primsBox, type Prim } from "../render/prims";
 import { ACCENT, INK } from "../render/palette";
 import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
 
-const statesCache = new WeakMap<SolveResult, ReturnType<typeof supportStates>>();
-function stateOf(result: SolveResult | null, id: string) {
-  if (!result) return undefined;
+const NO_STATES: ReadonlyMap<string, DrawState> = new Map();
+const statesCache = new WeakMap<SolveResult, ReadonlyMap<string, DrawState>>();
+/** The drawing states of a result's supports (cached per result). */
+export function statesOf(result: SolveResult | null): ReadonlyMap<string, DrawState> {
+  if (!result) return NO_STATES;
   let m = statesCache.get(result);
   if (!m) {
     m = supportStates(result);
     statesCache.set(result, m);
   }
-  return m.get(id);
+  return m;
 }
 
 function sceneFunc(prims: readonly Prim[]) {
@@ -41,11 +44,16 @@ function boxHit(prims: readonly Prim[], pad = 4) {
   };
 }
 
-export const BodyNode = memo(function BodyNode({ id }: { id: string }) {
+/** What every node takes from its parent (one subscription there instead of one per node). */
+export interface NodeProps {
+  id: string;
+  selected: boolean;
+  scale: number;
+  units: UnitSystem;
+}
+
+export const BodyNode = memo(function BodyNode({ id, selected, scale, units }: NodeProps) {
   const body = useScene((s) => s.byId.get(id)) as SceneBody | undefined;
-  const selected = useEditor((s) => s.selection.includes(id));
-  const scale = useEditor((s) => s.view.scale);
-  const units = useEditor((s) => s.units);
   const prims = useMemo(() => (body ? bodyPrims(body, { units, scale, color: selected ? ACCENT : INK }) : []), [body, units, scale, selected]);
   if (!body || body.outline.length < 3) return null;
   const pts = body.outline.map((p) => [p[0] * scale, -p[1] * scale]);
@@ -64,10 +72,8 @@ export const BodyNode = memo(function BodyNode({ id }: { id: string }) {
   );
 });
 
-export const CgNode = memo(function CgNode({ id }: { id: string }) {
+export const CgNode = memo(function CgNode({ id, selected, scale }: NodeProps) {
   const cg = useScene((s) => (s.byId.get(id) as SceneBody | undefined)?.cg);
-  const scale = useEditor((s) => s.view.scale);
-  const selected = useEditor((s) => s.selection.includes(id));
   const prims = useMemo(() => cgPrims(selected ? ACCENT : INK), [selected]);
   if (!cg || !Number.isFinite(cg[0]) || !Number.isFinite(cg[1])) return null;
   return (
@@ -86,14 +92,10 @@ export const CgNode = memo(function CgNode({ id }: { id: string }) {
   );
 });
 
-export const ItemNode = memo(function ItemNode({ id }: { id: string }) {
+export const ItemNode = memo(function ItemNode({ id, selected, scale, units, state }: NodeProps & { state?: DrawState }) {
   const item = useScene((s) => s.byId.get(id)) as SceneItem | undefined;
   const needsBody = item?.kind === "pin" || item?.kind === "fixed";
   const body = useScene((s) => (needsBody && item ? (s.byId.get(item.body) as SceneBody | undefined) : undefined));
-  const selected = useEditor((s) => s.selection.includes(id));
-  const scale = useEditor((s) => s.view.scale);
-  const units = useEditor((s) => s.units);
-  const state = useAnalysis((s) => stateOf(s.shown, id));
   const prims = useMemo(
     () => (item ? itemPrims(item, { units, scale, color: selected ? ACCENT : INK, groundSide: groundSideOf(item, body), state }) : []),
     [item, body, units, scale, selected, state],

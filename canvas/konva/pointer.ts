@@ -38,7 +38,8 @@ type Mode =
   | { kind: "corner"; id: string; index: number }
   | { kind: "cg"; id: string; start: Vec2; origin: Vec2 }
   | { kind: "band"; start: Vec2; mode: "replace" | "add" }
-  | { kind: "rect"; start: Vec2 };
+  | { kind: "rect"; start: Vec2 }
+  | { kind: "pinch"; dist: number; mid: Vec2; view: { scale: number; x: number; y: number } };
 
 const DRAG_THRESHOLD_PX = 3;
 const ANGLE_STEP = 5;
@@ -54,6 +55,8 @@ export function createPointerController(deps: PointerDeps) {
   let mode: Mode = { kind: "idle" };
   let downScreen: Vec2 = [0, 0];
   let polygonLastClick = 0;
+  /** touch points down on the canvas (two of them pinch-zoom and pan) */
+  const touches = new Map<number, Vec2>();
 
   const screenOf = (e: { clientX: number; clientY: number }): Vec2 => {
     const r = deps.container()?.getBoundingClientRect();
@@ -96,6 +99,18 @@ export function createPointerController(deps: PointerDeps) {
   function down(e: PointerEvent) {
     const s = ed();
     const screen = screenOf(e);
+    if (e.pointerType === "touch") {
+      touches.set(e.pointerId, screen);
+      if (touches.size === 2) {
+        // a second finger: whatever the first one started becomes a pinch
+        if (mode.kind === "move" || mode.kind === "rotate" || mode.kind === "corner" || mode.kind === "cg") s.cancelGesture();
+        const [a, b] = [...touches.values()];
+        mode = { kind: "pinch", dist: Math.hypot(a[0] - b[0], a[1] - b[1]) || 1, mid: [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2], view: { ...s.view } };
+        interaction.setState({ band: null, snap: null });
+        startWindowDrag();
+        return;
+      }
+    }
     downScreen = screen;
     const world = worldOf(screen);
     if (e.button === 1 || (e.button === 0 && interaction.getState().spaceHeld)) {
@@ -191,7 +206,17 @@ export function createPointerController(deps: PointerDeps) {
     const s = ed();
     const screen = screenOf(e);
     const world = worldOf(screen);
+    if (e.pointerType === "touch" && touches.has(e.pointerId)) touches.set(e.pointerId, screen);
     switch (mode.kind) {
+      case "pinch": {
+        if (touches.size < 2) return;
+        const [a, b] = [...touches.values()];
+        const dist = Math.hypot(a[0] - b[0], a[1] - b[1]) || 1;
+        const mid: Vec2 = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
+        const zoomed = zoomAt(mode.view, dist / mode.dist, mode.mid);
+        s.setView({ ...zoomed, x: zoomed.x + mid[0] - mode.mid[0], y: zoomed.y + mid[1] - mode.mid[1] });
+        return;
+      }
       case "pan":
         s.setView({ ...mode.view, x: mode.view.x + screen[0] - mode.start[0], y: mode.view.y + screen[1] - mode.start[1] });
         return;
@@ -246,6 +271,14 @@ export function createPointerController(deps: PointerDeps) {
   }
 
   function onDragUp(e: PointerEvent) {
+    if (e.pointerType === "touch") touches.delete(e.pointerId);
+    if (mode.kind === "pinch") {
+      if (touches.size === 0) {
+        mode = { kind: "idle" };
+        stopWindowDrag();
+      }
+      return;
+    }
     const s = ed();
     const m = mode;
     const band = interaction.getState().band;
@@ -301,7 +334,8 @@ export function createPointerController(deps: PointerDeps) {
     }
   }
 
-  function onDragCancel() {
+  function onDragCancel(e: PointerEvent) {
+    touches.delete(e.pointerId);
     cancel();
   }
 

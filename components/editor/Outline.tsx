@@ -4,7 +4,8 @@
 import { useMemo, useRef, type KeyboardEvent } from "react";
 import { useShallow } from "zustand/react/shallow";
 import { useEditor, useStores } from "@/canvas/context";
-import { allElements, KIND_LABEL, type Attached, type Located } from "@/canvas/model/elements";
+import { GROUPS, KIND_LABEL, kindOf, type AnyElement, type Attached, type Located } from "@/canvas/model/elements";
+import type { SketchFile } from "@/solver/schema";
 import { SymbolIcon } from "./SymbolIcon";
 import { useActionRunner } from "./useActions";
 import { HEADING } from "./ui";
@@ -12,6 +13,25 @@ import { HEADING } from "./ui";
 interface Row {
   l: Located;
   depth: number;
+}
+
+const keyCache = new WeakMap<object, string>();
+
+/** One string per element with what the list shows; cached per element object (a drag replaces one). */
+function outlineKeys(sketch: SketchFile): string[] {
+  const out: string[] = [];
+  for (const g of GROUPS) {
+    for (const el of sketch[g] as AnyElement[]) {
+      let k = keyCache.get(el);
+      if (k === undefined) {
+        const kind = kindOf(g, el);
+        k = `${el.id}\u0000${kind}\u0000${el.label ?? ""}\u0000${(el as Attached).body ?? ""}\u0000${kind === "contact" && (el as { mu?: unknown }).mu !== undefined ? 1 : 0}`;
+        keyCache.set(el, k);
+      }
+      out.push(k);
+    }
+  }
+  return out;
 }
 
 /** A light stand-in for an element, rebuilt from the list's key. */
@@ -36,7 +56,7 @@ function rowsOf(list: Located[]): Row[] {
 export function Outline() {
   const { editor } = useStores();
   // a narrow selector: a drag changes positions, not the rows of this list
-  const keys = useEditor(useShallow((s) => allElements(s.sketch).map((l) => `${l.el.id}\u0000${l.kind}\u0000${l.el.label ?? ""}\u0000${(l.el as Attached).body ?? ""}\u0000${l.kind === "contact" && (l.el as { mu?: unknown }).mu !== undefined ? 1 : 0}`)));
+  const keys = useEditor(useShallow((s) => outlineKeys(s.sketch)));
   const list = useMemo(() => keys.map(rowOf), [keys]);
   const selection = useEditor((s) => s.selection);
   const run = useActionRunner();

@@ -128,6 +128,28 @@ describe("handles", () => {
   });
 });
 
+describe("zoom and pan", () => {
+  it("pinches with two fingers: zooms about their midpoint and follows it", () => {
+    const touch = (id: number, x: number, y: number) =>
+      controller.down({ clientX: x, clientY: y, button: 0, pointerType: "touch", pointerId: id, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, timeStamp: 0, preventDefault() {} } as unknown as PointerEvent);
+    const move = (id: number, x: number, y: number) => window.dispatchEvent(Object.assign(new MouseEvent("pointermove", { clientX: x, clientY: y }), { pointerType: "touch", pointerId: id }));
+    touch(1, 300, 300);
+    touch(2, 400, 300);
+    move(2, 500, 300);
+    // the fingers are twice as far apart: twice the scale, about (350, 300), then the midpoint moved to (400, 300)
+    expect(ed().view.scale).toBeCloseTo(200, 9);
+    expect(ed().view.x).toBeCloseTo(350 - (350 - 100) * 2 + 50, 9);
+    window.dispatchEvent(Object.assign(new MouseEvent("pointerup", { clientX: 500, clientY: 300 }), { pointerType: "touch", pointerId: 2 }));
+    window.dispatchEvent(Object.assign(new MouseEvent("pointerup", { clientX: 300, clientY: 300 }), { pointerType: "touch", pointerId: 1 }));
+    expect(ed().past).toHaveLength(0);
+  });
+
+  it("zooms with the wheel about the pointer", () => {
+    controller.wheel({ clientX: 300, clientY: 300, deltaY: -100, deltaMode: 0, ctrlKey: false, preventDefault() {} } as unknown as WheelEvent);
+    expect(ed().view.scale).toBeCloseTo(100 * Math.exp(0.16), 9);
+  });
+});
+
 describe("tools", () => {
   it("places a contact on an edge pointing into the body, then goes back to selecting", () => {
     ed().setTool({ kind: "place", element: "contact" });

@@ -5,7 +5,8 @@
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { BASE_URL, openBrowser, shot } from "./browser";
-import { dragFromTo } from "./editor-helpers";
+import { readFileSync } from "node:fs";
+import { download, dragFromTo } from "./editor-helpers";
 
 const BEAM = {
   format: "counterpoise.sketch",
@@ -158,5 +159,25 @@ describe("live results", () => {
     await theta.press("Enter");
     await expect.poll(() => sentence(page)).toMatch(/^TipsTips about the rear wheels \(braked\) — the front caster would have to pull \d/);
     await shot(page, "example-washing-cart-tips");
+  });
+
+  it("exports the drawing with its results as SVG and PNG", async () => {
+    const svg = await download(page, async () => {
+      await page.getByTestId("menu-file").click();
+      await page.getByRole("menuitem", { name: "Export drawing as SVG" }).click();
+    });
+    expect(svg.name).toBe("pressure-washing-cart-with-a-fixed-lance.svg");
+    expect(svg.text).toMatch(/^<svg xmlns="http:\/\/www.w3.org\/2000\/svg"/);
+    expect(svg.text).toMatch(/would have to pull \d/);
+    expect(svg.text).toMatch(/data-id="lance"/);
+    const png = await download(page, async () => {
+      await page.getByTestId("menu-file").click();
+      await page.getByRole("menuitem", { name: "Export drawing as PNG" }).click();
+    });
+    const bytes = readFileSync(png.path);
+    expect(bytes.subarray(1, 4).toString("latin1")).toBe("PNG");
+    // 1400 × 900 drawn at twice the pixels
+    expect(bytes.readUInt32BE(16)).toBe(2800);
+    expect(bytes.readUInt32BE(20)).toBe(1800);
   });
 });

@@ -7,7 +7,8 @@ import { addElement, attachToBody, moveElement, setField, type Command } from "@
 import { emptySketch, findElement } from "@/canvas/model/elements";
 import { newAttached, newBody } from "@/canvas/model/factory";
 import { connectAnalysis, workerRunner } from "@/canvas/analysis/store";
-import { analyseCore } from "@/canvas/analysis/core";
+import { analyseCore, expressionFields } from "@/canvas/analysis/core";
+
 
 const c = <A,>(cmd: Command<A>) => cmd as unknown as Command<unknown>;
 
@@ -163,9 +164,17 @@ describe("live analysis", () => {
     stop();
   });
 
+  it("the worker answers only the fields the editor cannot read itself: expressions and errors", () => {
+    const file = { ...sketch(), supports: [{ id: "s1", body: "b1", kind: "pin" as const, at: ["1 m + 1 m", 0] as [string, number] }] };
+    const core = analyseCore(file);
+    expect(Object.keys(core.fields).length).toBeGreaterThan(10);
+    // the bodies' masses are "100 kg", the pin's x is an expression; its y and every corner are numbers
+    expect(expressionFields(file, core.fields)).toEqual({ "bodies[0].mass": { value: 100 }, "bodies[1].mass": { value: 100 }, "supports[0].at[0]": { value: 2 } });
+  });
+
   it("with a worker, delivers every answer in order and solves only the newest of a burst", () => {
     const posted: Array<{ seq: number; sketch: SketchFile }> = [];
-    const fake = { postMessage: (m: { seq: number; sketch: SketchFile }) => posted.push(m), onmessage: null as null | ((e: MessageEvent) => void) };
+    const fake = { postMessage: (m: { seq: number; text: string }) => posted.push({ seq: m.seq, sketch: JSON.parse(m.text) }), onmessage: null as null | ((e: MessageEvent) => void) };
     const run = workerRunner(fake as unknown as Worker, (fn) => fn());
     const got: number[] = [];
     const a = sketch();
