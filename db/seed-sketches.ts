@@ -4,6 +4,7 @@
 // tsx from db/seed.ts (relative imports).
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
+import { and, eq } from "drizzle-orm";
 import type { drizzle } from "drizzle-orm/node-postgres";
 import { parseSketch } from "../solver";
 import { summarizeSolve } from "../lib/sketch-document";
@@ -11,10 +12,15 @@ import * as schema from "./schema";
 
 type SeedDb = ReturnType<typeof drizzle<typeof schema>>;
 type Doc = Record<string, unknown> & { parameters?: Record<string, unknown>; bodies: Array<Record<string, unknown>>; supports: Array<Record<string, unknown>>; ports: Array<Record<string, unknown>> };
-type Step = { by: "eddie" | "olivia"; daysAgo: number; message: string; edit?: (d: Doc) => void };
-export type DemoSketch = { id: string; file: string; title: string; description: string; tags: string[]; steps: Step[] };
+type Who = "eddie" | "olivia" | "chen";
+type Step = { by: Who; daysAgo: number; message: string; edit?: (d: Doc) => void };
+type ReviewStep = { version: number; step: "submit" | "check" | "return" | "approve"; by: Who; daysAgo: number; note?: string };
+type DemoComment = { version: number; by: Who; daysAgo: number; body: string; pin?: schema.CommentPin; replies?: Array<{ by: Who; daysAgo: number; body: string }>; resolved?: Who };
+export type DemoSketch = { id: string; file: string; title: string; description: string; tags: string[]; steps: Step[]; review?: ReviewStep[]; comments?: DemoComment[] };
 
-const DEMO_AUTHORS = { eddie: "demo-eddie-editor", olivia: "demo-olivia-owner" } as const;
+const DEMO_AUTHORS = { eddie: "demo-eddie-editor", olivia: "demo-olivia-owner", chen: "demo-chen-checker" } as const;
+const DEMO_NAMES = { eddie: "Eddie Editor", olivia: "Olivia Owner", chen: "Chen Checker" } as const;
+const NEXT_STATE = { submit: "submitted", check: "checked", return: "returned", approve: "approved" } as const;
 
 /** A sketch file of the demo: the editor's examples and the worked examples, by path from the repository root. */
 function readSketchFile(path: string): Doc {
@@ -32,6 +38,22 @@ export const DEMO_SKETCHES: DemoSketch[] = [
       { by: "eddie", daysAgo: 9, message: "Skid as drawn from the general arrangement, at half the duty flow" },
       { by: "eddie", daysAgo: 7, message: "Full duty flow: 1800 → 3600 L/min", edit: (d) => (d.parameters!.Q = "60 lpm * 60") },
       { by: "eddie", daysAgo: 5, message: "Moved the rear bearer 0.3 m east to clear the drain channel", edit: (d) => (d.supports[0].at = [0.6, 0]) },
+    ],
+    review: [
+      { version: 2, step: "submit", by: "eddie", daysAgo: 6.9 },
+      { version: 2, step: "check", by: "chen", daysAgo: 6.5, note: "Friction demand is well under μ = 0.4 at both bearers." },
+      { version: 2, step: "approve", by: "olivia", daysAgo: 6 },
+    ],
+    comments: [
+      {
+        version: 2,
+        by: "chen",
+        daysAgo: 6.6,
+        body: "Suction gauge pressure of **−0.4 bar**: is that at the duty flow? @Eddie please confirm.",
+        pin: { kind: "element", elementId: "suction" },
+        replies: [{ by: "eddie", daysAgo: 6.55, body: "Yes, from the pump curve at 3600 L/min." }],
+        resolved: "chen",
+      },
     ],
   },
   {
@@ -52,6 +74,11 @@ export const DEMO_SKETCHES: DemoSketch[] = [
           d.bodies[0].cg = [2.1, 0.85];
         },
       },
+    ],
+    review: [{ version: 3, step: "submit", by: "olivia", daysAgo: 1.9 }],
+    comments: [
+      { version: 3, by: "chen", daysAgo: 1.5, body: "The foot still slips: is a chock at the stabiliser foot allowed on site?", pin: { kind: "element", elementId: "foot" } },
+      { version: 3, by: "chen", daysAgo: 1.4, body: "Jet reaction taken at the tip, not the monitor's swivel: fine for this check." },
     ],
   },
   {
@@ -113,8 +140,12 @@ export function demoVersions(s: DemoSketch): Array<{ step: Step; doc: Doc }> {
   return out;
 }
 
+type PendingEvent = typeof schema.auditEvent.$inferInsert & { at: Date };
+
 export async function seedDemoSketches(db: SeedDb, workspaceId: string): Promise<void> {
   const { sketch, sketchVersion, auditEvent } = schema;
+  // audit rows go in last, oldest first, so their ids run in time order as they would in use
+  const events: PendingEvent[] = [];
   for (const s of DEMO_SKETCHES) {
     const versions = demoVersions(s);
     const first = versions[0].step;
@@ -153,7 +184,7 @@ export async function seedDemoSketches(db: SeedDb, workspaceId: string): Promise
         authorId: DEMO_AUTHORS[step.by],
         createdAt: at(step.daysAgo),
       });
-      await db.insert(auditEvent).values({
+      events.push({
         action: i === 0 ? "sketch.create" : "sketch.save",
         at: at(step.daysAgo),
         actorId: DEMO_AUTHORS[step.by],
@@ -163,5 +194,41 @@ export async function seedDemoSketches(db: SeedDb, workspaceId: string): Promise
         detail: i === 0 ? { sketchId: s.id, title: s.title } : { sketchId: s.id, title: s.title, number: i + 1, message: step.message },
       });
     }
+    events.push(...(await seedReview(db, workspaceId, s)));
   }
+  events.sort((a, b) => a.at.getTime() - b.at.getTime());
+  for (const e of events) await db.insert(auditEvent).values(e);
+}
+
+/** The demo's sign-off steps and comment threads (written straight to the tables, as the API would). */
+async function seedReview(db: SeedDb, workspaceId: string, s: DemoSketch): Promise<PendingEvent[]> {
+  const { sketchVersion, signOff, comment } = schema;
+  const events: PendingEvent[] = [];
+  const at = (daysAgo: number) => new Date(Date.now() - daysAgo * 86_400_000);
+  const versionId = async (n: number) => (await db.select({ id: sketchVersion.id }).from(sketchVersion).where(and(eq(sketchVersion.sketchId, s.id), eq(sketchVersion.number, n))))[0].id;
+  const event = (action: string, by: Who, daysAgo: number, detail: Record<string, unknown>) =>
+    events.push({ action, at: at(daysAgo), actorId: DEMO_AUTHORS[by], workspaceId, targetType: "sketch", targetId: s.id, detail: { sketchId: s.id, title: s.title, ...detail } });
+  let state: schema.SketchVersion["reviewState"] = "draft";
+  for (const r of s.review ?? []) {
+    const id = await versionId(r.version);
+    const to = NEXT_STATE[r.step];
+    await db.insert(signOff).values({ versionId: id, step: r.step, fromState: state, toState: to, actorId: DEMO_AUTHORS[r.by], actorName: DEMO_NAMES[r.by], note: r.note ?? "", at: at(r.daysAgo) });
+    await db.update(sketchVersion).set({ reviewState: to, ...(r.step === "check" ? { checkedBy: DEMO_AUTHORS[r.by] } : {}) }).where(eq(sketchVersion.id, id));
+    event(`signoff.${r.step}`, r.by, r.daysAgo, { number: r.version, ...(r.note ? { note: r.note } : {}) });
+    state = to;
+  }
+  for (const c of s.comments ?? []) {
+    const id = await versionId(c.version);
+    const mentions = /@Eddie/.test(c.body) ? [DEMO_AUTHORS.eddie] : [];
+    const [root] = await db
+      .insert(comment)
+      .values({ versionId: id, authorId: DEMO_AUTHORS[c.by], body: c.body, pin: c.pin ?? null, mentions, createdAt: at(c.daysAgo), ...(c.resolved ? { resolvedAt: at(c.daysAgo - 0.1), resolvedBy: DEMO_AUTHORS[c.resolved] } : {}) })
+      .returning({ id: comment.id });
+    event("comment.create", c.by, c.daysAgo, { number: c.version, commentId: root.id, reply: false, note: c.body.slice(0, 140) });
+    for (const r of c.replies ?? []) {
+      await db.insert(comment).values({ versionId: id, parentId: root.id, authorId: DEMO_AUTHORS[r.by], body: r.body, createdAt: at(r.daysAgo) });
+      event("comment.create", r.by, r.daysAgo, { number: c.version, commentId: root.id, reply: true, note: r.body.slice(0, 140) });
+    }
+  }
+  return events;
 }

@@ -3,10 +3,12 @@
 import { useMutation, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useState, type ReactNode } from "react";
+import { useState } from "react";
+import { ActivityFeed } from "@/components/review/ActivityFeed";
+import { ReviewBadge } from "@/components/review/SignOff";
 import { Button, Notice, Panel } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
-import { editorHref, VersionHistory, type VersionItem } from "@/components/versions/VersionHistory";
+import { editorHref, VersionHistory } from "@/components/versions/VersionHistory";
 import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
@@ -36,6 +38,7 @@ export type SketchData = {
     updatedBy: string | null;
     role: Role;
     forkedFrom: ForkOrigin | null;
+    approvedVersion: number | null;
   };
   latest: { number: number; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; message: string } | null;
 };
@@ -57,7 +60,7 @@ export function ForkedFrom({ origin }: { origin: ForkOrigin }) {
   );
 }
 
-export function SketchScreen({ initial, extra }: { initial: SketchData; extra?: { reviewCell?: (v: VersionItem) => ReactNode; below?: ReactNode } }) {
+export function SketchScreen({ initial }: { initial: SketchData }) {
   const router = useRouter();
   const path = `/api/sketches/${initial.sketch.id}`;
   const q = useQuery({ queryKey: apiKey(path), queryFn: () => apiFetch<SketchData>(path), initialData: initial });
@@ -95,6 +98,11 @@ export function SketchScreen({ initial, extra }: { initial: SketchData; extra?: 
                 <span>Latest: v{latest.number}</span>
                 <StatusMark status={latest.status} warnings={latest.warnings} />
                 <span>largest reaction {formatForce(latest.largestReaction)}</span>
+                {sketch.approvedVersion ? (
+                  <Link href={`${base}/versions/${sketch.approvedVersion}`} className="font-medium text-reaction underline decoration-reaction/40 underline-offset-2" data-testid="approved-version">
+                    ✓✓ v{sketch.approvedVersion} approved
+                  </Link>
+                ) : null}
               </p>
             ) : null}
             {sketch.forkedFrom ? <ForkedFrom origin={sketch.forkedFrom} /> : null}
@@ -149,12 +157,14 @@ export function SketchScreen({ initial, extra }: { initial: SketchData; extra?: 
           latest={sketch.latestVersion}
           canFork={canFork}
           onFork={setForking}
-          reviewCell={extra?.reviewCell}
-          reviewHref={extra?.reviewCell ? (n) => `${base}/versions/${n}` : undefined}
-          compareHref={extra?.reviewCell ? (a, b) => `${base}/compare?from=${a}&to=${b}` : undefined}
+          reviewCell={(v) => <ReviewBadge state={v.reviewState} />}
+          reviewHref={(n) => `${base}/versions/${n}`}
+          compareHref={(a, b) => `${base}/compare?from=${a}&to=${b}`}
         />
       </Panel>
-      {extra?.below}
+      <Panel title="Activity" description="Saves, forks, comments and sign-off steps, newest first.">
+        <ActivityFeed sketchId={sketch.id} />
+      </Panel>
 
       {forking !== null ? (
         <ForkDialog

@@ -9,6 +9,7 @@ import { StatusMark } from "@/components/sketches/StatusMark";
 import { Button, Notice, Skeleton } from "@/components/shell/controls";
 import { formatDate, formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
+import type { ReviewState } from "@/lib/review/rules";
 import type { SketchStatus } from "@/lib/sketch-schemas";
 
 export type VersionItem = {
@@ -21,7 +22,7 @@ export type VersionItem = {
   status: SketchStatus | null;
   largestReaction: number | null;
   warnings: string[];
-  review?: { state: string } | null;
+  reviewState: ReviewState;
 };
 
 export function useVersions(sketchId: string) {

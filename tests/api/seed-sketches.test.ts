@@ -3,7 +3,7 @@
 import { asc, eq, inArray } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db";
-import { sketch, sketchVersion } from "@/db/schema";
+import { comment, signOff, sketch, sketchVersion } from "@/db/schema";
 import { DEMO_WORKSPACE_ID, seedDemo } from "@/db/seed";
 import { DEMO_SKETCHES } from "@/db/seed-sketches";
 
@@ -33,5 +33,20 @@ describe("demo sketches", () => {
     // the skid's rear bearer really moved 0.3 m east in v3
     const [v3] = await db.select().from(sketchVersion).where(eq(sketchVersion.sketchId, DEMO_SKETCHES[0].id)).orderBy(asc(sketchVersion.number)).offset(2);
     expect(v3.document.supports[0].at).toEqual([0.6, 0]);
+  });
+
+  it("shows the review at work: the skid's v2 approved (prepared, checked, approved), the trailer's v3 submitted with open threads", async () => {
+    const versions = await db.select().from(sketchVersion).where(inArray(sketchVersion.sketchId, [DEMO_SKETCHES[0].id, DEMO_SKETCHES[1].id]));
+    const skidV2 = versions.find((v) => v.sketchId === DEMO_SKETCHES[0].id && v.number === 2)!;
+    const trailerV3 = versions.find((v) => v.sketchId === DEMO_SKETCHES[1].id && v.number === 3)!;
+    expect([skidV2.reviewState, trailerV3.reviewState]).toEqual(["approved", "submitted"]);
+    const steps = await db.select({ step: signOff.step, by: signOff.actorName }).from(signOff).where(eq(signOff.versionId, skidV2.id)).orderBy(asc(signOff.id));
+    expect(steps).toEqual([
+      { step: "submit", by: "Eddie Editor" },
+      { step: "check", by: "Chen Checker" },
+      { step: "approve", by: "Olivia Owner" },
+    ]);
+    const threads = await db.select().from(comment).where(eq(comment.versionId, trailerV3.id));
+    expect(threads.map((c) => c.pin)).toEqual([{ kind: "element", elementId: "foot" }, null]);
   });
 });

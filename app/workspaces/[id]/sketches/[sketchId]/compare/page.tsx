@@ -1,0 +1,20 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { CompareScreen } from "@/components/review/CompareScreen";
+import { loadSketchPage } from "@/lib/sketch-page";
+
+export const metadata: Metadata = { title: "Compare versions" };
+
+/** `?from=2&to=3` compares two versions; `?to=draft` compares with the changes kept in this browser. */
+export default async function ComparePage({ params, searchParams }: { params: Promise<{ id: string; sketchId: string }>; searchParams: Promise<{ from?: string; to?: string }> }) {
+  const { id, sketchId } = await params;
+  const q = await searchParams;
+  const { data } = await loadSketchPage(id, sketchId, `/workspaces/${id}/sketches/${sketchId}/compare`);
+  const latest = data.sketch.latestVersion;
+  const num = (v: string | undefined, fallback: number) => (v === undefined ? fallback : Number(v));
+  const from = num(q.from, Math.max(1, latest - 1));
+  const to = q.to === "draft" ? "draft" : num(q.to, latest);
+  const valid = (n: number) => Number.isInteger(n) && n >= 1 && n <= latest;
+  if (!valid(from) || (to !== "draft" && !valid(to))) notFound();
+  return <CompareScreen key={`${from}-${to}`} workspaceId={id} sketchId={sketchId} sketchTitle={data.sketch.title} from={from} to={to} />;
+}

@@ -1,0 +1,14 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { VersionReview } from "@/components/review/VersionReview";
+import { loadSketchPage } from "@/lib/sketch-page";
+
+export const metadata: Metadata = { title: "Review a version" };
+
+export default async function VersionReviewPage({ params }: { params: Promise<{ id: string; sketchId: string; number: string }> }) {
+  const { id, sketchId, number } = await params;
+  const { session, data } = await loadSketchPage(id, sketchId, `/workspaces/${id}/sketches/${sketchId}/versions/${number}`);
+  const n = Number(number);
+  if (!Number.isInteger(n) || n < 1 || n > data.sketch.latestVersion) notFound();
+  return <VersionReview workspaceId={id} sketchId={sketchId} sketchTitle={data.sketch.title} number={n} latest={data.sketch.latestVersion} viewerId={session.user.id} />;
+}

@@ -1,0 +1,258 @@
+"use client";
+// A version's comment threads: pinned to an element, a point or the whole version; replies;
+// resolve and reopen; edit and delete your own; @mentions offered as you type.
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useEffect, useRef, useState } from "react";
+import { Button, EmptyState, Notice } from "@/components/shell/controls";
+import { formatDateTime } from "@/components/workspaces/format";
+import { apiFetch, ApiError } from "@/lib/api-client";
+import type { Member } from "@/lib/review/comment-text";
+import { formatNumber } from "@/solver/units";
+import { CommentText } from "./CommentText";
+import type { PickedPin } from "./ReviewDrawing";
+
+export type CommentPin = { kind: "element"; elementId: string } | { kind: "point"; at: [number, number] };
+export type CommentItem = { id: string; authorId: string | null; authorName: string | null; body: string; deleted: boolean; editedAt: string | null; createdAt: string };
+export type ThreadItem = { id: string; pin: CommentPin | null; resolvedAt: string | null; resolvedByName: string | null; comments: CommentItem[] };
+export type CommentsData = { threads: ThreadItem[]; members: Member[]; locked: boolean; canComment: boolean };
+
+export function pinWords(pin: CommentPin | PickedPin | null, labels: Record<string, string>): string {
+  if (!pin) return "on the whole version";
+  if (pin.kind === "element") return `on ${labels[pin.elementId] ?? pin.elementId}`;
+  return `at (${formatNumber(pin.at[0], 3)}, ${formatNumber(pin.at[1], 3)}) m`;
+}
+
+/** A text box that offers the workspace's members after “@”. */
+function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label }: { id: string; value: string; onChange: (v: string) => void; members: Member[]; placeholder?: string; rows?: number; label: string }) {
+  const ref = useRef<HTMLTextAreaElement>(null);
+  const [query, setQuery] = useState<string | null>(null);
+  const matches = query === null ? [] : members.filter((m) => m.name.toLowerCase().startsWith(query.toLowerCase()) || m.name.toLowerCase().includes(` ${query.toLowerCase()}`)).slice(0, 5);
+  const track = (text: string, caret: number) => {
+    const m = /(^|\s)@([\p{L}\p{N} ]{0,30})$/u.exec(text.slice(0, caret));
+    setQuery(m && !/\s{2}|\s$/.test(m[2]) ? m[2] : m && m[2] === "" ? "" : null);
+  };
+  const insert = (name: string) => {
+    const el = ref.current;
+    const caret = el?.selectionStart ?? value.length;
+    const before = value.slice(0, caret).replace(/@([\p{L}\p{N} ]{0,30})$/u, `@${name} `);
+    onChange(before + value.slice(caret));
+    setQuery(null);
+    requestAnimationFrame(() => el?.focus());
+  };
+  return (
+    <div className="relative">
+      <label htmlFor={id} className="sr-only">
+        {label}
+      </label>
+      <textarea
+        id={id}
+        ref={ref}
+        rows={rows}
+        value={value}
+        placeholder={placeholder}
+        maxLength={4000}
+        onChange={(e) => {
+          onChange(e.target.value);
+          track(e.target.value, e.target.selectionStart);
+        }}
+        onKeyDown={(e) => {
+          if (e.key === "Escape") setQuery(null);
+        }}
+        className="block w-full rounded-md border border-rule bg-paper-card px-3 py-2 text-[13.5px] text-ink outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25"
+      />
+      {matches.length ? (
+        <ul className="absolute left-2 top-full z-20 mt-1 w-56 rounded-md border border-rule bg-paper-card py-1 shadow-[0_6px_24px_rgba(29,35,41,0.14)]" role="listbox" aria-label="Mention a member">
+          {matches.map((m) => (
+            <li key={m.id}>
+              <button type="button" role="option" aria-selected="false" onMouseDown={(e) => e.preventDefault()} onClick={() => insert(m.name)} className="block w-full px-3 py-1 text-left text-[13px] hover:bg-paper-deep">
+                @{m.name}
+              </button>
+            </li>
+          ))}
+        </ul>
+      ) : null}
+    </div>
+  );
+}
+
+function useCommentMutations(commentsPath: string, onChanged: () => void) {
+  const qc = useQueryClient();
+  const done = () => {
+    void qc.invalidateQueries({ queryKey: ["api", "sketches"] });
+    onChanged();
+  };
+  return {
+    post: useMutation({ mutationFn: (body: { body: string; pin?: CommentPin | null; parentId?: string }) => apiFetch(commentsPath, { method: "POST", body }), onSuccess: done }),
+    patch: useMutation({ mutationFn: (v: { id: string; body: { body?: string; resolved?: boolean } }) => apiFetch(`/api/comments/${v.id}`, { method: "PATCH", body: v.body }), onSuccess: done }),
+    remove: useMutation({ mutationFn: (id: string) => apiFetch(`/api/comments/${id}`, { method: "DELETE" }), onSuccess: done }),
+  };
+}
+
+function OneComment({ c, viewerId, members, writable, m }: { c: CommentItem; viewerId: string; members: Member[]; writable: boolean; m: ReturnType<typeof useCommentMutations> }) {
+  const [editing, setEditing] = useState(false);
+  const [text, setText] = useState(c.body);
+  const mine = c.authorId === viewerId && !c.deleted && writable;
+  return (
+    <li className="space-y-1" data-testid="comment">
+      <p className="text-xs text-ink-faint">
+        <span className="font-semibold text-ink">{c.authorName ?? "A deleted account"}</span> · <span className="num">{formatDateTime(c.createdAt)}</span>
+        {c.editedAt ? " · edited" : ""}
+      </p>
+      {c.deleted ? (
+        <p className="text-[13px] italic text-ink-faint">This comment was deleted.</p>
+      ) : editing ? (
+        <div className="space-y-1.5">
+          <MentionBox id={`edit-${c.id}`} label="Edit the comment" value={text} onChange={setText} members={members} />
+          <div className="flex gap-2">
+            <Button size="sm" busy={m.patch.isPending} disabled={!text.trim()} onClick={() => m.patch.mutate({ id: c.id, body: { body: text } }, { onSuccess: () => setEditing(false) })}>
+              Save
+            </Button>
+            <Button size="sm" tone="quiet" onClick={() => setEditing(false)}>
+              Cancel
+            </Button>
+          </div>
+        </div>
+      ) : (
+        <CommentText text={c.body} members={members} />
+      )}
+      {mine && !editing ? (
+        <p className="flex gap-3 text-xs">
+          <button type="button" className="text-ink-soft hover:text-ink" onClick={() => setEditing(true)}>
+            Edit
+          </button>
+          <button type="button" className="text-ink-soft hover:text-accent-deep" onClick={() => window.confirm("Delete this comment?") && m.remove.mutate(c.id)}>
+            Delete
+          </button>
+        </p>
+      ) : null}
+    </li>
+  );
+}
+
+function ThreadView({ t, n, labels, data, viewerId, selected, onSelect, m }: { t: ThreadItem; n: number; labels: Record<string, string>; data: CommentsData; viewerId: string; selected: boolean; onSelect: () => void; m: ReturnType<typeof useCommentMutations> }) {
+  const [reply, setReply] = useState("");
+  const [replying, setReplying] = useState(false);
+  const ref = useRef<HTMLElement>(null);
+  useEffect(() => {
+    if (selected) ref.current?.scrollIntoView({ block: "nearest", behavior: "smooth" });
+  }, [selected]);
+  const writable = !data.locked && data.canComment;
+  return (
+    <article ref={ref} onClick={onSelect} data-testid={`thread-${n}`} className={`space-y-2 rounded-md border p-3 ${selected ? "border-accent bg-accent-soft/20" : "border-rule bg-paper-card"} ${t.resolvedAt ? "opacity-75" : ""}`}>
+      <header className="flex items-center justify-between gap-2 text-xs">
+        <span className="flex items-center gap-1.5 font-semibold text-ink">
+          <span className={`inline-flex h-5 min-w-5 items-center justify-center rounded-full px-1 text-[11px] ${t.resolvedAt ? "bg-rule-soft text-ink-soft" : "bg-ink text-paper"}`}>{t.resolvedAt ? `✓${n}` : n}</span>
+          {pinWords(t.pin, labels)}
+        </span>
+        {t.resolvedAt ? <span className="text-ink-faint">resolved by {t.resolvedByName ?? "someone"}</span> : null}
+      </header>
+      <ul className="space-y-2.5">
+        {t.comments.map((c) => (
+          <OneComment key={c.id} c={c} viewerId={viewerId} members={data.members} writable={writable} m={m} />
+        ))}
+      </ul>
+      {writable ? (
+        <div className="flex flex-wrap items-center gap-2 text-xs">
+          {replying ? (
+            <div className="w-full space-y-1.5">
+              <MentionBox id={`reply-${t.id}`} label="Reply" value={reply} onChange={setReply} members={data.members} rows={2} placeholder="Reply…" />
+              <div className="flex gap-2">
+                <Button size="sm" busy={m.post.isPending} disabled={!reply.trim()} onClick={() => m.post.mutate({ body: reply, parentId: t.id }, { onSuccess: () => (setReply(""), setReplying(false)) })}>
+                  Reply
+                </Button>
+                <Button size="sm" tone="quiet" onClick={() => setReplying(false)}>
+                  Cancel
+                </Button>
+              </div>
+            </div>
+          ) : (
+            <Button size="sm" tone="secondary" onClick={() => setReplying(true)}>
+              Reply
+            </Button>
+          )}
+          {!replying ? (
+            <Button size="sm" tone="quiet" onClick={() => m.patch.mutate({ id: t.id, body: { resolved: !t.resolvedAt } })}>
+              {t.resolvedAt ? "Reopen" : "Resolve"}
+            </Button>
+          ) : null}
+        </div>
+      ) : null}
+    </article>
+  );
+}
+
+export function CommentsPanel({
+  data,
+  commentsPath,
+  viewerId,
+  labels,
+  pin,
+  picking,
+  onPicking,
+  onClearPin,
+  selected,
+  onSelect,
+  onChanged,
+}: {
+  data: CommentsData;
+  commentsPath: string;
+  viewerId: string;
+  labels: Record<string, string>;
+  pin: PickedPin | null;
+  picking: boolean;
+  onPicking: (on: boolean) => void;
+  onClearPin: () => void;
+  selected: string | null;
+  onSelect: (id: string) => void;
+  onChanged: () => void;
+}) {
+  const m = useCommentMutations(commentsPath, onChanged);
+  const [text, setText] = useState("");
+  const err = [m.post.error, m.patch.error, m.remove.error].find((e) => e instanceof ApiError) as ApiError | undefined;
+  const open = data.threads.filter((t) => !t.resolvedAt).length;
+  return (
+    <div className="space-y-3">
+      {data.locked ? <Notice tone="info" title="Approved: locked">This version takes no new comments. Comment on a newer version, or ask an owner to withdraw the approval.</Notice> : null}
+      {data.canComment ? (
+        <form
+          className="space-y-2 rounded-md border border-rule bg-paper-card p-3"
+          aria-label="New comment"
+          onSubmit={(e) => {
+            e.preventDefault();
+            const body = pin ? { body: text, pin: pin.kind === "element" ? { kind: "element" as const, elementId: pin.elementId } : { kind: "point" as const, at: pin.at } } : { body: text };
+            m.post.mutate(body, { onSuccess: () => (setText(""), onClearPin()) });
+          }}
+        >
+          <MentionBox id="new-comment" label="New comment" value={text} onChange={setText} members={data.members} placeholder="Comment… (@name mentions a colleague; **bold**, *italic*, `code`)" />
+          <div className="flex flex-wrap items-center gap-2 text-xs">
+            <span className="text-ink-soft" data-testid="new-comment-pin">
+              {picking ? "Click an element or a point on the drawing…" : `Pinned ${pinWords(pin, labels)}`}
+            </span>
+            {pin ? (
+              <button type="button" className="text-ink-faint hover:text-ink" onClick={onClearPin} aria-label="Unpin">
+                ✕
+              </button>
+            ) : null}
+            <Button type="button" size="sm" tone="secondary" onClick={() => onPicking(!picking)}>
+              {picking ? "Stop pinning" : "Pin to the drawing"}
+            </Button>
+            <span className="flex-1" />
+            <Button type="submit" size="sm" busy={m.post.isPending} disabled={!text.trim()}>
+              Comment
+            </Button>
+          </div>
+        </form>
+      ) : null}
+      {err ? <Notice tone="error">{err.fields[0]?.message ?? err.message}</Notice> : null}
+      <p className="text-xs text-ink-faint">
+        {data.threads.length} thread{data.threads.length === 1 ? "" : "s"}, {open} open
+      </p>
+      {data.threads.length === 0 ? <EmptyState title="No comments yet">Pin a comment to a support, a port or a point, or comment on the whole version.</EmptyState> : null}
+      <div className="space-y-2">
+        {data.threads.map((t, i) => (
+          <ThreadView key={t.id} t={t} n={i + 1} labels={labels} data={data} viewerId={viewerId} selected={selected === t.id} onSelect={() => onSelect(t.id)} m={m} />
+        ))}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,129 @@
+"use client";
+// Two versions side by side (or the newest version and your kept, unsaved changes): what
+// changed in the inputs, field by field with units, and what it did to the reactions.
+import { useQuery } from "@tanstack/react-query";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useMemo, useState } from "react";
+import { Notice, Panel, Select, Skeleton } from "@/components/shell/controls";
+import { discardDraft, readDraft } from "@/components/versions/editor/drafts";
+import { useVersions } from "@/components/versions/VersionHistory";
+import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
+import { changeCount, compareSketches } from "@/lib/review/compare";
+import { CAUTION_SHORT } from "@/solver/cautions";
+import type { SketchFile } from "@/solver/schema";
+import { ChangesTable, ReactionsTable } from "./CompareTables";
+import { ReviewDrawing } from "./ReviewDrawing";
+
+type VersionDoc = { version: { number: number; message: string; document: SketchFile } };
+
+function useDocument(sketchId: string, which: number | "draft") {
+  const path = `/api/sketches/${sketchId}/versions/${which}`;
+  const remote = useQuery({ queryKey: apiKey(path), queryFn: () => apiFetch<VersionDoc>(path), enabled: which !== "draft", staleTime: Infinity });
+  const [draft] = useState(() => (which === "draft" ? readDraft(sketchId) : null));
+  if (which === "draft") return { doc: draft?.sketch ?? null, label: draft ? `your kept changes (made on v${draft.baseVersion})` : null, error: draft ? null : "There are no kept changes for this sketch in this browser.", pending: false };
+  return {
+    doc: remote.data?.version.document ?? null,
+    label: remote.data ? `v${remote.data.version.number}${remote.data.version.message ? ` — ${remote.data.version.message}` : ""}` : null,
+    error: remote.error instanceof ApiError ? remote.error.message : remote.error ? "The version could not be loaded." : null,
+    pending: remote.isPending,
+  };
+}
+
+export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: { workspaceId: string; sketchId: string; sketchTitle: string; from: number; to: number | "draft" }) {
+  const router = useRouter();
+  const versions = useVersions(sketchId);
+  const a = useDocument(sketchId, from);
+  const b = useDocument(sketchId, to);
+  const comparison = useMemo(() => (a.doc && b.doc ? compareSketches(a.doc, b.doc) : null), [a.doc, b.doc]);
+  const base = `/workspaces/${workspaceId}/sketches/${sketchId}`;
+  const go = (f: number, t: number | "draft") => router.replace(`${base}/compare?from=${f}&to=${t}`);
+  const toLabel = to === "draft" ? "your changes" : `v${to}`;
+
+  return (
+    <div className="space-y-5">
+      <div className="space-y-2">
+        <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">
+          <Link href={base} className="hover:text-ink">
+            {sketchTitle}
+          </Link>{" "}
+          › Compare
+        </p>
+        <h1 className="text-2xl font-semibold tracking-tight">
+          Compare v{from} → {toLabel}
+        </h1>
+        <div className="flex flex-wrap items-end gap-3">
+          <div className="w-44">
+            <Select id="compare-from" label="Before" value={from} onChange={(e) => go(Number(e.target.value), to)}>
+              {(versions.data?.versions ?? [{ number: from }]).map((v) => (
+                <option key={v.number} value={v.number}>
+                  v{v.number}
+                </option>
+              ))}
+            </Select>
+          </div>
+          <div className="w-44">
+            <Select id="compare-to" label="After" value={to} onChange={(e) => go(from, e.target.value === "draft" ? "draft" : Number(e.target.value))}>
+              {to === "draft" ? <option value="draft">your kept changes</option> : null}
+              {(versions.data?.versions ?? (to === "draft" ? [] : [{ number: to }])).map((v) => (
+                <option key={v.number} value={v.number}>
+                  v{v.number}
+                </option>
+              ))}
+            </Select>
+          </div>
+          {to === "draft" && b.doc ? (
+            <div className="flex gap-2 text-sm">
+              <a href={`/sketches/${sketchId}?restore=1`} className="rounded-md bg-ink px-3 py-2 font-medium text-paper hover:bg-ink-soft">
+                Bring my changes back on top of the newest version
+              </a>
+              <button
+                type="button"
+                className="rounded-md px-3 py-2 text-ink-soft hover:text-ink"
+                onClick={() => {
+                  discardDraft(sketchId);
+                  router.push(base);
+                }}
+              >
+                Discard them
+              </button>
+            </div>
+          ) : null}
+        </div>
+      </div>
+
+      {a.error || b.error ? <Notice tone="error">{a.error ?? b.error}</Notice> : null}
+      {!comparison ? (
+        a.pending || b.pending ? (
+          <Skeleton className="h-96 w-full" />
+        ) : null
+      ) : (
+        <>
+          <p className="text-sm text-ink-soft" data-testid="compare-summary">
+            {changeCount(comparison) === 0 ? "The inputs are the same." : `${changeCount(comparison)} change${changeCount(comparison) === 1 ? "" : "s"} in the inputs.`}{" "}
+            {comparison.bodies.map((x) => (x.words ? `${x.label}: ${x.words}. ` : `${x.label} ${x.after ?? "—"}, as before. `))}
+          </p>
+          <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side">
+            <figure className="space-y-1">
+              <figcaption className="text-sm font-semibold">Before: {a.label}</figcaption>
+              <ReviewDrawing document={a.doc!} marks={comparison.marks.before} label={`Before: ${a.label}`} width={620} height={520} />
+            </figure>
+            <figure className="space-y-1">
+              <figcaption className="text-sm font-semibold">After: {b.label}</figcaption>
+              <ReviewDrawing document={b.doc!} marks={comparison.marks.after} label={`After: ${b.label}`} width={620} height={520} />
+            </figure>
+          </div>
+          <p className="text-xs text-ink-faint">
+            Outlines: dashed with △ changed, solid with + added, dotted with × removed. <span className="font-semibold text-caution">Caution:</span> {CAUTION_SHORT}
+          </p>
+          <Panel title="Reactions" description="The resultant force at each support, before and after, and how much it changed.">
+            <ReactionsTable comparison={comparison} />
+          </Panel>
+          <Panel title="What changed" description="Every input that differs, as written, with its value in SI units.">
+            <ChangesTable comparison={comparison} />
+          </Panel>
+        </>
+      )}
+    </div>
+  );
+}

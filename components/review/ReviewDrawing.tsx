@@ -1,0 +1,94 @@
+"use client";
+// A version's drawing with its solved reactions, from the shared SVG renderer, with review
+// marks on top: comment pins, outlines around what a comparison found changed, and (while
+// pinning a new comment) a click picks an element or a point.
+import { useLayoutEffect, useMemo, useRef } from "react";
+import { renderSketchSvg } from "@/canvas/render/svg";
+import { parseSketch, solve, type SolveResult } from "@/solver";
+import type { SketchFile } from "@/solver/schema";
+import { drawingScale, drawMarks, drawPins, worldPoint, type MarkKind, type PinMarker } from "./drawingOverlay";
+
+export type PickedPin = { kind: "element"; elementId: string; label: string } | { kind: "point"; at: [number, number] };
+
+export function useSolved(document: SketchFile) {
+  return useMemo(() => {
+    const parsed = parseSketch(document);
+    let result: SolveResult | null = null;
+    if (parsed.ok) {
+      try {
+        result = solve(parsed.sketch);
+      } catch {
+        result = null;
+      }
+    }
+    return { parsed, result, sketch: parsed.ok ? parsed.sketch : null };
+  }, [document]);
+}
+
+export function ReviewDrawing({
+  document,
+  marks,
+  pins,
+  picking = false,
+  onPick,
+  onSelectThread,
+  caption,
+  label,
+  width = 760,
+  height = 560,
+}: {
+  document: SketchFile;
+  marks?: Record<string, MarkKind>;
+  pins?: PinMarker[];
+  picking?: boolean;
+  onPick?: (pin: PickedPin) => void;
+  onSelectThread?: (threadId: string) => void;
+  caption?: string;
+  label: string;
+  /** the drawing's size in SVG pixels; it is shown at the width of its column */
+  width?: number;
+  height?: number;
+}) {
+  const box = useRef<HTMLDivElement>(null);
+  const { result, sketch } = useSolved(document);
+  // The renderer escapes every text it draws (titles, labels, values), so its output is markup we made.
+  const svg = useMemo(() => renderSketchSvg(document, result, { width, height, caption, legend: true }), [document, result, width, height, caption]);
+
+  useLayoutEffect(() => {
+    const el = box.current?.querySelector("svg");
+    if (!el) return;
+    if (marks) drawMarks(el, marks);
+    if (pins) drawPins(el, pins, drawingScale(el, sketch));
+  }, [svg, marks, pins, sketch]);
+
+  return (
+    <div
+      ref={box}
+      role="img"
+      aria-label={label}
+      data-testid="review-drawing"
+      data-picking={picking || undefined}
+      className={`overflow-hidden rounded-md border border-rule bg-paper [&>svg]:block [&>svg]:h-auto [&>svg]:w-full ${picking ? "cursor-crosshair ring-2 ring-accent/40" : ""}`}
+      onClick={(e) => {
+        const target = e.target as Element;
+        const thread = target.closest("[data-thread]");
+        if (thread && onSelectThread) {
+          onSelectThread(thread.getAttribute("data-thread")!);
+          return;
+        }
+        if (!picking || !onPick) return;
+        const element = target.closest("g[data-id]");
+        if (element) {
+          const id = element.getAttribute("data-id")!;
+          const all = sketch ? [...sketch.bodies, ...sketch.supports, ...sketch.loads, ...sketch.ports, ...sketch.massSources] : [];
+          onPick({ kind: "element", elementId: id, label: all.find((x) => x.id === id)?.label || id });
+          return;
+        }
+        const svgEl = box.current?.querySelector("svg");
+        const at = svgEl ? worldPoint(svgEl, e.clientX, e.clientY, drawingScale(svgEl, sketch)) : null;
+        if (at) onPick({ kind: "point", at });
+      }}
+      dangerouslySetInnerHTML={{ __html: svg }}
+    />
+  );
+}

@@ -1,0 +1,156 @@
+"use client";
+// The sign-off of a version: where it stands, the title block (prepared / checked / approved,
+// with names and dates), the steps open to the reader, and the record of every step.
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useState } from "react";
+import { Button, Notice } from "@/components/shell/controls";
+import { Dialog } from "@/components/versions/Dialog";
+import { formatDateTime } from "@/components/workspaces/format";
+import { apiFetch, ApiError } from "@/lib/api-client";
+import { SIGN_OFF_RULES, STATE_WORDS, type ReviewState, type SignOffStep } from "@/lib/review/rules";
+
+export type TitleBlockEntry = { name: string; date: string };
+export type SignOffData = {
+  state: ReviewState;
+  sentence: string;
+  entries: Array<{ id: number; step: SignOffStep; actorName: string; note: string; at: string }>;
+  titleBlock: { prepared: TitleBlockEntry; checked: TitleBlockEntry | null; approved: TitleBlockEntry | null };
+  allowed: SignOffStep[];
+};
+
+const RECORD: Record<SignOffStep, string> = {
+  submit: "submitted it for checking",
+  check: "checked it",
+  return: "returned it",
+  approve: "approved it",
+  withdraw: "withdrew the approval",
+};
+
+const MARK: Record<ReviewState, { mark: string; box: string }> = {
+  draft: { mark: "○", box: "border-rule bg-paper-deep text-ink-soft" },
+  submitted: { mark: "◐", box: "border-caution/40 bg-caution-soft text-caution" },
+  returned: { mark: "↩", box: "border-accent/40 bg-accent-soft/60 text-accent-deep" },
+  checked: { mark: "✓", box: "border-reaction/35 bg-reaction-soft text-reaction" },
+  approved: { mark: "✓✓", box: "border-ink/40 bg-ink text-paper" },
+  withdrawn: { mark: "⊘", box: "border-accent/40 bg-paper-card text-accent-deep" },
+};
+
+/** The sign-off state as a mark and a word. */
+export function ReviewBadge({ state }: { state: ReviewState }) {
+  const m = MARK[state];
+  return (
+    <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded border px-1.5 py-0.5 text-xs font-medium ${m.box}`} title={STATE_WORDS[state].sentence} data-review-state={state}>
+      <span aria-hidden="true">{m.mark}</span>
+      {STATE_WORDS[state].label}
+    </span>
+  );
+}
+
+export function TitleBlock({ block, state }: { block: SignOffData["titleBlock"]; state: ReviewState }) {
+  const cell = (what: string, e: TitleBlockEntry | null) => (
+    <div className="border-rule px-3 py-2 [&:not(:first-child)]:border-l" data-testid={`title-block-${what}`}>
+      <p className="text-[11px] font-semibold uppercase tracking-wider text-ink-faint">{what} by</p>
+      <p className="mt-0.5 font-medium text-ink">{e ? e.name : "—"}</p>
+      <p className="num text-xs text-ink-soft">{e ? formatDateTime(e.date) : "not yet"}</p>
+    </div>
+  );
+  return (
+    <div className={`grid grid-cols-3 rounded-md border text-sm ${state === "approved" ? "border-ink" : "border-rule"}`} aria-label="Title block" role="group">
+      {cell("prepared", block.prepared)}
+      {cell("checked", block.checked)}
+      {cell("approved", block.approved)}
+    </div>
+  );
+}
+
+function StepDialog({ step, path, onClose, onDone }: { step: SignOffStep; path: string; onClose: () => void; onDone: () => void }) {
+  const rule = SIGN_OFF_RULES[step];
+  const [note, setNote] = useState("");
+  const take = useMutation({ mutationFn: () => apiFetch(path, { method: "POST", body: { step, ...(note.trim() ? { note: note.trim() } : {}) } }), onSuccess: onDone });
+  const err = take.error instanceof ApiError ? take.error : null;
+  const prompt: Record<SignOffStep, string> = {
+    submit: "Anything the checker should know (optional)",
+    check: "A note for the record (optional)",
+    return: "What needs to change (required)",
+    approve: "A note for the record (optional)",
+    withdraw: "Why the approval is withdrawn (required)",
+  };
+  return (
+    <Dialog open onClose={onClose} title={rule.label} testId="signoff-dialog">
+      <form
+        className="space-y-3"
+        onSubmit={(e) => {
+          e.preventDefault();
+          take.mutate();
+        }}
+      >
+        <label htmlFor="signoff-note" className="block text-sm font-medium text-ink">
+          {prompt[step]}
+        </label>
+        <textarea
+          id="signoff-note"
+          rows={3}
+          maxLength={2000}
+          value={note}
+          onChange={(e) => setNote(e.target.value)}
+          className="block w-full rounded-md border border-rule bg-paper-card px-3 py-2 text-sm outline-none focus:border-ink focus:ring-2 focus:ring-accent/25"
+        />
+        {err ? <Notice tone="error">{err.field("note") ?? err.message}</Notice> : null}
+        <div className="flex justify-end gap-2">
+          <Button type="button" tone="quiet" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button type="submit" busy={take.isPending} disabled={rule.noteRequired && !note.trim()}>
+            {rule.label}
+          </Button>
+        </div>
+      </form>
+    </Dialog>
+  );
+}
+
+export function SignOffPanel({ data, path, onChanged }: { data: SignOffData; path: string; onChanged: () => void }) {
+  const [step, setStep] = useState<SignOffStep | null>(null);
+  const qc = useQueryClient();
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-center gap-2">
+        <ReviewBadge state={data.state} />
+        <p className="text-sm text-ink-soft">{data.sentence}</p>
+      </div>
+      <TitleBlock block={data.titleBlock} state={data.state} />
+      {data.allowed.length ? (
+        <div className="flex flex-wrap gap-2">
+          {data.allowed.map((s) => (
+            <Button key={s} size="sm" tone={s === "return" || s === "withdraw" ? "danger" : "primary"} onClick={() => setStep(s)} data-testid={`signoff-${s}`}>
+              {SIGN_OFF_RULES[s].label}
+            </Button>
+          ))}
+        </div>
+      ) : null}
+      {data.entries.length ? (
+        <ol className="space-y-1.5 border-l-2 border-rule-soft pl-3 text-[13px]" aria-label="Sign-off record">
+          {data.entries.map((e) => (
+            <li key={e.id}>
+              <span className="font-medium text-ink">{e.actorName}</span> <span className="text-ink-soft">{RECORD[e.step]}</span>{" "}
+              <span className="num text-xs text-ink-faint">· {formatDateTime(e.at)}</span>
+              {e.note ? <q className="block text-ink-soft">{e.note}</q> : null}
+            </li>
+          ))}
+        </ol>
+      ) : null}
+      {step ? (
+        <StepDialog
+          step={step}
+          path={path}
+          onClose={() => setStep(null)}
+          onDone={() => {
+            setStep(null);
+            void qc.invalidateQueries({ queryKey: ["api", "sketches"] });
+            onChanged();
+          }}
+        />
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,170 @@
+"use client";
+// One version under review: its drawing with comment pins, its reactions, the sign-off with
+// the title block, and the comment threads.
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import { formatForce } from "@/components/sketches/format";
+import { StatusMark } from "@/components/sketches/StatusMark";
+import { Notice, Panel, Skeleton } from "@/components/shell/controls";
+import { formatDateTime } from "@/components/workspaces/format";
+import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
+import type { SketchStatus } from "@/lib/sketch-schemas";
+import { CAUTION_SHORT } from "@/solver/cautions";
+import type { SketchFile } from "@/solver/schema";
+import { formatQuantity } from "@/solver/units";
+import { CommentsPanel, type CommentsData } from "./Comments";
+import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
+import { SignOffPanel, type SignOffData } from "./SignOff";
+
+type VersionData = {
+  version: { id: string; number: number; message: string; authorName: string | null; createdAt: string; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; document: SketchFile };
+};
+
+function Reactions({ document }: { document: SketchFile }) {
+  const { result, parsed } = useSolved(document);
+  if (!result) return <Notice tone="error">This version does not solve{!parsed.ok ? `: ${parsed.errors[0]?.path} ${parsed.errors[0]?.message}` : "."}</Notice>;
+  const labels = new Map(document.supports.map((s) => [s.id, s.label || s.id]));
+  return (
+    <table className="w-full text-sm">
+      <caption className="sr-only">Reactions on the body</caption>
+      <thead>
+        <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
+          <th scope="col" className="py-1.5 pr-3 font-semibold">Support</th>
+          <th scope="col" className="py-1.5 pr-3 font-semibold">State</th>
+          <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Fx</th>
+          <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Fy</th>
+          <th scope="col" className="py-1.5 pr-3 text-right font-semibold">M</th>
+          <th scope="col" className="py-1.5 text-right font-semibold">Resultant</th>
+        </tr>
+      </thead>
+      <tbody>
+        {Object.entries(result.reactions).map(([id, r]) => (
+          <tr key={id} className="num border-b border-rule-soft last:border-0">
+            <td className="py-1.5 pr-3 font-medium">{labels.get(id) ?? id}</td>
+            <td className="py-1.5 pr-3">{r.state}</td>
+            <td className="py-1.5 pr-3 text-right">{formatForce(r.fx)}</td>
+            <td className="py-1.5 pr-3 text-right">{formatForce(r.fy)}</td>
+            <td className="py-1.5 pr-3 text-right">{r.kind === "fixed" ? formatQuantity(r.m, "moment") : "—"}</td>
+            <td className="py-1.5 text-right font-medium">{formatForce(Math.hypot(r.fx, r.fy))}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+export function VersionReview({ workspaceId, sketchId, sketchTitle, number, latest, viewerId }: { workspaceId: string; sketchId: string; sketchTitle: string; number: number; latest: number; viewerId: string }) {
+  const base = `/api/sketches/${sketchId}/versions/${number}`;
+  const qc = useQueryClient();
+  const version = useQuery({ queryKey: apiKey(base), queryFn: () => apiFetch<VersionData>(base), staleTime: Infinity });
+  const signoff = useQuery({ queryKey: apiKey(`${base}/signoff`), queryFn: () => apiFetch<SignOffData>(`${base}/signoff`) });
+  const comments = useQuery({ queryKey: apiKey(`${base}/comments`), queryFn: () => apiFetch<CommentsData>(`${base}/comments`) });
+  const [pin, setPin] = useState<PickedPin | null>(null);
+  const [picking, setPicking] = useState(false);
+  const [selected, setSelected] = useState<string | null>(null);
+  const doc = version.data?.version.document;
+  const labels = useMemo(() => {
+    const out: Record<string, string> = {};
+    if (doc) for (const e of [...doc.bodies, ...doc.supports, ...doc.loads, ...doc.ports, ...doc.massSources]) out[e.id] = e.label || e.id;
+    return out;
+  }, [doc]);
+  const pins = useMemo(
+    () =>
+      (comments.data?.threads ?? []).flatMap((t, i) =>
+        t.pin ? [{ threadId: t.id, n: i + 1, at: t.pin.kind === "element" ? { elementId: t.pin.elementId } : { point: t.pin.at }, resolved: t.resolvedAt !== null, selected: t.id === selected }] : [],
+      ),
+    [comments.data, selected],
+  );
+  const refresh = () => void qc.invalidateQueries({ queryKey: apiKey(`/api/sketches/${sketchId}`) });
+
+  if (version.isError) return <Notice tone="error">{version.error instanceof ApiError ? version.error.message : "The version could not be loaded."}</Notice>;
+  const v = version.data?.version;
+  const sketchHref = `/workspaces/${workspaceId}/sketches/${sketchId}`;
+  return (
+    <div className="space-y-5">
+      <div className="space-y-1.5">
+        <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">
+          <Link href={sketchHref} className="hover:text-ink">
+            {sketchTitle}
+          </Link>{" "}
+          › Version {number}
+        </p>
+        <div className="flex flex-wrap items-start justify-between gap-3">
+          <h1 className="text-2xl font-semibold tracking-tight">
+            v{number}
+            {v?.message ? <span className="font-normal text-ink-soft"> — {v.message}</span> : null}
+          </h1>
+          <div className="flex flex-wrap gap-2 text-sm">
+            {number > 1 ? (
+              <Link href={`${sketchHref}/compare?from=${number - 1}&to=${number}`} className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45">
+                Compare with v{number - 1}
+              </Link>
+            ) : null}
+            <Link href={number === latest ? `/sketches/${sketchId}` : `/sketches/${sketchId}?version=${number}`} className="rounded-md bg-ink px-3 py-1.5 font-medium text-paper hover:bg-ink-soft">
+              Open in the editor
+            </Link>
+          </div>
+        </div>
+        {v ? (
+          <p className="flex flex-wrap items-center gap-x-3 text-sm text-ink-soft">
+            <StatusMark status={v.status} warnings={v.warnings} />
+            <span>largest reaction {formatForce(v.largestReaction)}</span>
+            <span>
+              saved by {v.authorName ?? "a deleted account"}, {formatDateTime(v.createdAt)}
+            </span>
+            {number < latest ? <span className="text-caution">v{latest} is newer</span> : null}
+          </p>
+        ) : null}
+      </div>
+
+      <Panel title="Sign-off" description="Prepared by one engineer, checked by another, approved by an owner.">
+        {signoff.data ? <SignOffPanel data={signoff.data} path={`${base}/signoff`} onChanged={refresh} /> : <Skeleton className="h-24 w-full" />}
+      </Panel>
+
+      <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">
+        <div className="space-y-3">
+          {doc ? (
+            <ReviewDrawing
+              document={doc}
+              pins={pins}
+              picking={picking}
+              onPick={(p) => {
+                setPin(p);
+                setPicking(false);
+              }}
+              onSelectThread={setSelected}
+              label={`Drawing of version ${number} with its reactions and ${pins.length} comment pins`}
+            />
+          ) : (
+            <Skeleton className="h-[420px] w-full" />
+          )}
+          <p className="text-xs text-ink-faint">
+            <span className="font-semibold text-caution">Caution:</span> {CAUTION_SHORT}
+          </p>
+          {doc ? <Reactions document={doc} /> : null}
+        </div>
+        <aside aria-label="Comments">
+          <h2 className="mb-2 text-base font-semibold">Comments</h2>
+          {comments.data ? (
+            <CommentsPanel
+              data={comments.data}
+              commentsPath={`${base}/comments`}
+              viewerId={viewerId}
+              labels={labels}
+              pin={pin}
+              picking={picking}
+              onPicking={setPicking}
+              onClearPin={() => setPin(null)}
+              selected={selected}
+              onSelect={setSelected}
+              onChanged={refresh}
+            />
+          ) : (
+            <Skeleton className="h-40 w-full" />
+          )}
+        </aside>
+      </div>
+    </div>
+  );
+}

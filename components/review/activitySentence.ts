@@ -1,0 +1,43 @@
+// A sketch's activity, one sentence per event (after the name of whoever did it). Browser-safe.
+export type ActivityEvent = { id: number; at: string; action: string; actorName: string | null; detail: Record<string, unknown> };
+
+const s = (v: unknown) => (typeof v === "string" ? v : "");
+const n = (v: unknown) => (typeof v === "number" ? `v${v}` : "a version");
+const quote = (v: unknown, max = 90) => {
+  // formatting marks read as noise in a one-line quote
+  const t = s(v).replace(/\*\*|`/g, "").replace(/\s+/g, " ").trim();
+  return t ? `: “${t.length > max ? `${t.slice(0, max - 1)}…` : t}”` : "";
+};
+
+export function activitySentence(e: ActivityEvent): string {
+  const d = e.detail ?? {};
+  switch (e.action) {
+    case "sketch.create":
+      return "created the sketch";
+    case "sketch.save":
+      return `saved ${n(d.number)}${quote(d.message)}`;
+    case "sketch.rename":
+      return s(d.from) && s(d.from) !== s(d.title) ? `renamed it from “${s(d.from)}” to “${s(d.title)}”` : "edited its details";
+    case "sketch.fork":
+      if (!d.origin) return `started it as a fork of ${n(d.fromVersion)} of another sketch`;
+      return d.elsewhere ? `forked ${n(d.fromVersion)} into another workspace` : `forked ${n(d.fromVersion)} as “${s(d.forkTitle)}”`;
+    case "comment.create":
+      return `${d.reply ? "replied on" : "commented on"} ${n(d.number)}${quote(d.note)}`;
+    case "comment.resolve":
+      return `resolved a thread on ${n(d.number)}`;
+    case "comment.reopen":
+      return `reopened a thread on ${n(d.number)}`;
+    case "signoff.submit":
+      return `submitted ${n(d.number)} for checking${quote(d.note)}`;
+    case "signoff.check":
+      return `checked ${n(d.number)}${quote(d.note)}`;
+    case "signoff.return":
+      return `returned ${n(d.number)}${quote(d.note)}`;
+    case "signoff.approve":
+      return `approved ${n(d.number)}${quote(d.note)}`;
+    case "signoff.withdraw":
+      return `withdrew the approval of ${n(d.number)}${quote(d.note)}`;
+    default:
+      return e.action;
+  }
+}
