@@ -216,7 +216,7 @@ export function CommentsPanel({
       {data.canComment ? (
         <form
           className="space-y-2 rounded-md border border-rule bg-paper-card p-3"
-          aria-label="New comment"
+          aria-label="Write a comment"
           onSubmit={(e) => {
             e.preventDefault();
             const body = pin ? { body: text, pin: pin.kind === "element" ? { kind: "element" as const, elementId: pin.elementId } : { kind: "point" as const, at: pin.at } } : { body: text };

@@ -106,11 +106,11 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
           <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side">
             <figure className="space-y-1">
               <figcaption className="text-sm font-semibold">Before: {a.label}</figcaption>
-              <ReviewDrawing document={a.doc!} marks={comparison.marks.before} label={`Before: ${a.label}`} width={620} height={520} />
+              <ReviewDrawing document={a.doc!} marks={comparison.marks.before} label={`Before: ${a.label}`} width={840} height={520} />
             </figure>
             <figure className="space-y-1">
               <figcaption className="text-sm font-semibold">After: {b.label}</figcaption>
-              <ReviewDrawing document={b.doc!} marks={comparison.marks.after} label={`After: ${b.label}`} width={620} height={520} />
+              <ReviewDrawing document={b.doc!} marks={comparison.marks.after} label={`After: ${b.label}`} width={840} height={520} />
             </figure>
           </div>
           <p className="text-xs text-ink-faint">

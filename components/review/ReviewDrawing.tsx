@@ -34,8 +34,8 @@ export function ReviewDrawing({
   onSelectThread,
   caption,
   label,
-  width = 760,
-  height = 560,
+  width = 880,
+  height = 520,
 }: {
   document: SketchFile;
   marks?: Record<string, MarkKind>;

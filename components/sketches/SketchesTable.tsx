@@ -162,7 +162,7 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                       <span className="ml-2 text-xs text-ink-faint">v{s.latestVersion}</span>
                       {s.approvedVersion ? (
                         <span className="ml-2 rounded border border-reaction/40 px-1 text-[11px] font-medium text-reaction" title={`Version ${s.approvedVersion} is approved`}>
-                          ✓ v{s.approvedVersion} approved
+                          ✓✓ v{s.approvedVersion} approved
                         </span>
                       ) : null}
                       {s.forked ? (

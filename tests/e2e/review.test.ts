@@ -1,0 +1,155 @@
+// Review in Chromium: the author submits v2; the checker pins a comment on a support (mentioning
+// the owner) and returns it; the author saves v3 and submits it; the checker checks it; the
+// owner approves it; v3 shows locked with the title block; the owner's mention mail is in the
+// local mailbox.
+import { randomBytes } from "node:crypto";
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createSketch, saveVersion as saveVersionApi } from "@/lib/sketches";
+import { parseSketch } from "@/solver";
+import { fixture } from "../api/sketch-fixtures";
+import { BASE_URL, shot } from "./browser";
+import { makeCast, openEditor, retitle, saveVersion, signInAs, type Cast } from "./versions-helpers";
+
+const tag = randomBytes(3).toString("hex");
+
+function parsed(doc: unknown) {
+  const p = parseSketch(doc);
+  if (!p.ok) throw new Error("fixture does not parse");
+  return p;
+}
+
+describe("review of a calculation in the browser", () => {
+  let cast: Cast;
+  let ws = "";
+  let sketchId = "";
+  const pages = {} as Record<"editor" | "checker" | "owner", Page>;
+  const contexts: BrowserContext[] = [];
+  const review = (n: number) => `${BASE_URL}/workspaces/${ws}/sketches/${sketchId}/versions/${n}`;
+  const stepButton = (page: Page, step: string) => page.getByTestId(`signoff-${step}`);
+
+  async function takeStep(page: Page, step: string, note?: string) {
+    await stepButton(page, step).click();
+    const dialog = page.getByTestId("signoff-dialog");
+    if (note) await dialog.getByRole("textbox").fill(note);
+    await dialog.locator("button[type=submit]").click();
+    await dialog.waitFor({ state: "detached" });
+  }
+
+  beforeAll(async () => {
+    ({ cast, ws } = await makeCast(tag, { editor: "Edda Preparer", checker: "Chet Checkley", owner: "Orla Approver" }));
+    const v1 = fixture("pump-skid-discharge");
+    const made = await createSketch(ws, cast.editor, { title: `Skid ${tag}`, document: parsed(v1), message: "As drawn" });
+    sketchId = made.sketch.id;
+    await saveVersionApi(sketchId, cast.editor, { baseVersion: 1, message: "Duty flow 12 → 15 kg/s", document: parsed({ ...v1, parameters: { mdot: "15 kg/s" } }) });
+    for (const who of ["editor", "checker", "owner"] as const) {
+      const s = await signInAs(cast[who]);
+      contexts.push(s.ctx);
+      pages[who] = s.page;
+    }
+  });
+  afterAll(async () => {
+    for (const c of contexts) await c.close();
+  });
+
+  it("the author submits v2 for checking", async () => {
+    const page = pages.editor;
+    await page.goto(review(2));
+    await stepButton(page, "submit").waitFor();
+    expect(await page.getByTestId("title-block-prepared").textContent()).toContain("Edda Preparer");
+    await takeStep(page, "submit", "Ready for a check of the feet.");
+    await page.locator('[data-review-state="submitted"]').first().waitFor();
+    await shot(page, "review-01-submitted");
+  });
+
+  it("the checker pins a comment on a support, mentions the owner, and returns the version", async () => {
+    const page = pages.checker;
+    await page.goto(review(2));
+    await stepButton(page, "return").waitFor();
+    await page.getByRole("button", { name: "Pin to the drawing" }).click();
+    await page.locator('[data-testid="review-drawing"] g[data-id="rear"]').click();
+    expect(await page.getByTestId("new-comment-pin").textContent()).toBe("Pinned on rear foot");
+    const box = page.getByLabel("New comment");
+    await box.fill("Rear foot friction: is μ = 0.4 right on a wet slab? @Orla");
+    await page.getByRole("option", { name: "@Orla Approver" }).click();
+    expect(await box.inputValue()).toBe("Rear foot friction: is μ = 0.4 right on a wet slab? @Orla Approver ");
+    await page.getByRole("button", { name: "Comment", exact: true }).click();
+    const thread = page.getByTestId("thread-1");
+    await thread.waitFor();
+    expect(await thread.textContent()).toContain("on rear foot");
+    expect(await thread.locator("[data-mention]").textContent()).toBe("@Orla Approver");
+    await page.locator('[data-testid="review-drawing"] [data-thread]').first().waitFor();
+    await shot(page, "review-02-pinned-comment");
+
+    await takeStep(page, "return", "See the pinned comment on the rear foot.");
+    await page.locator('[data-review-state="returned"]').first().waitFor();
+    expect(await page.getByText("See the pinned comment on the rear foot.").count()).toBe(1);
+    await shot(page, "review-03-returned");
+  });
+
+  it("the author saves v3 in the editor and submits it", async () => {
+    const page = pages.editor;
+    await openEditor(page, sketchId);
+    await retitle(page, "Skid with μ = 0.3 on the wet slab");
+    await saveVersion(page, "Friction 0.3 on a wet slab, as the checker asked");
+    await page.getByText("✓ saved").waitFor();
+    await page.goto(review(3));
+    await stepButton(page, "submit").waitFor();
+    await takeStep(page, "submit");
+    await page.locator('[data-review-state="submitted"]').first().waitFor();
+  });
+
+  it("the checker checks v3, and the owner approves it: it shows locked with the title block", async () => {
+    const checker = pages.checker;
+    await checker.goto(review(3));
+    await stepButton(checker, "check").waitFor();
+    expect(await stepButton(checker, "approve").count()).toBe(0);
+    await takeStep(checker, "check", "Friction demand now well inside μ = 0.3.");
+    await checker.locator('[data-review-state="checked"]').first().waitFor();
+
+    const owner = pages.owner;
+    await owner.goto(review(3));
+    await stepButton(owner, "approve").waitFor();
+    await takeStep(owner, "approve");
+    await owner.locator('[data-review-state="approved"]').first().waitFor();
+    expect(await owner.getByTestId("title-block-prepared").textContent()).toContain("Edda Preparer");
+    expect(await owner.getByTestId("title-block-checked").textContent()).toContain("Chet Checkley");
+    expect(await owner.getByTestId("title-block-approved").textContent()).toContain("Orla Approver");
+    expect(await owner.getByText("Approved: locked").count()).toBe(1);
+    expect(await owner.getByLabel("New comment").count()).toBe(0);
+    expect(await stepButton(owner, "withdraw").count()).toBe(1);
+    await shot(owner, "review-04-approved-locked");
+
+    await owner.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    await owner.getByTestId("approved-version").waitFor();
+    expect(await owner.getByTestId("approved-version").textContent()).toContain("v3 approved");
+    expect(await owner.getByTestId("version-row-3").textContent()).toContain("approved");
+    expect(await owner.getByTestId("version-row-2").textContent()).toContain("returned");
+    const activity = await owner.getByTestId("activity").textContent();
+    for (const words of ["approved v3", "checked v3", "submitted v3 for checking", "returned v2", "commented on v2"]) expect(activity).toContain(words);
+    await shot(owner, "review-05-history-activity");
+
+    await owner.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}/compare?from=2&to=3`);
+    await owner.getByTestId("reaction-changes").waitFor();
+    expect(await owner.getByTestId("compare-summary").textContent()).toContain("1 change in the inputs");
+    await shot(owner, "review-06-compare");
+  });
+
+  it("the owner's mention mail is in the local mailbox", async () => {
+    const page = pages.owner;
+    const deadline = Date.now() + 15_000;
+    for (;;) {
+      await page.goto(`${BASE_URL}/dev/mailbox?to=${encodeURIComponent(cast.owner.email)}`);
+      const link = page.getByRole("link", { name: /Chet Checkley mentioned you on v2/ });
+      if (await link.count()) {
+        await link.first().click();
+        await page.waitForURL(/\/dev\/mailbox\/\d+$/);
+        break;
+      }
+      if (Date.now() > deadline) throw new Error("no mention mail for the owner");
+      await page.waitForTimeout(400);
+    }
+    expect(await page.locator("pre").textContent()).toContain("Rear foot friction: is μ = 0.4 right on a wet slab?");
+    await shot(page, "review-07-mention-mail");
+  });
+});
