@@ -251,7 +251,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
               <Elements interaction={interaction} lifted={false} />
             </Group>
           </Layer>
-          <Layer listening={false} onDraw={() => queueMicrotask(markFrame)}>
+          <Layer listening={false}>
             <Group x={view.x} y={view.y}>
               <ResultsShape />
             </Group>

@@ -1,16 +1,16 @@
 "use client";
 // The interaction layer: handles of the selection (turn, reshape), the snap target, the rubber
 // band, a body being drawn and a preview of what a click will place. Results get their own layer.
-import { memo, useMemo } from "react";
+import { memo, useEffect, useMemo, useRef } from "react";
+import type Konva from "konva";
 import { Circle, Group, Line, Rect, Shape, Text } from "react-konva";
 import { useStore } from "zustand";
-import { useShallow } from "zustand/react/shallow";
 import type { Vec2 } from "@/solver/types";
-import { useAnalysis, useEditor, useScene, useStores } from "../context";
+import { useEditor, useScene, useStores } from "../context";
 import { DIRECTED } from "../model/elements";
 import { resultPrims } from "../render/results";
 import { itemPrims } from "../render/symbols";
-import { dir } from "../render/prims";
+import { dir, type Prim } from "../render/prims";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
 import { angleOnEdge, bodyAt } from "../placement";
 import { anchorOf, type Scene, type SceneBody, type SceneItem } from "../scene";
@@ -24,22 +24,49 @@ export const ROTATE_HANDLE_PX = 66;
 
 const DRAWN_WITH_RESULTS = new Set(["pin", "roller", "contact", "fixed", "tie", "inlet", "outlet"]);
 
-export const ResultsShape = memo(function ResultsShape() {
-  const shown = useAnalysis((s) => s.shown);
-  const stale = useAnalysis((s) => s.stale);
-  // only what the results are drawn at: dragging a load does not redraw this layer until its result arrives
-  const parts = useScene(useShallow((s) => [...s.bodies, ...s.items.filter((i) => DRAWN_WITH_RESULTS.has(i.kind))]));
-  const scene = useMemo<Scene>(() => {
-    const bodies = parts.filter((p): p is SceneBody => p.kind === "body");
-    const items = parts.filter((p): p is SceneItem => p.kind !== "body");
-    return { bodies, items, byId: new Map(parts.map((p) => [p.id, p])) };
-  }, [parts]);
-  const scale = useEditor((s) => s.view.scale);
-  const units = useEditor((s) => s.units);
-  const prims = useMemo(() => (shown ? resultPrims(scene, shown, { units, scale, stale }).prims : []), [shown, scene, units, scale, stale]);
-  if (!prims.length) return null;
-  return <Shape sceneFunc={(ctx) => drawPrims(ctx._context, prims, canvasFont())} listening={false} perfectDrawEnabled={false} />;
-});
+/**
+ * The results layer's one shape. It follows the stores itself rather than through React props: a
+ * new result (from the worker, between frames) is drawn at once in that task, so the frames that
+ * answer the pointer only draw what the pointer moved.
+ */
+export function ResultsShape() {
+  const stores = useStores();
+  const shapeRef = useRef<Konva.Shape>(null);
+  const primsRef = useRef<Prim[]>([]);
+  useEffect(() => {
+    let last: unknown[] = [];
+    const redraw = (now: boolean) => {
+      const a = stores.analysis.getState();
+      const e = stores.editor.getState();
+      const sc = stores.scene.getState();
+      // only what the results are drawn at: dragging a load changes none of these until its result arrives
+      const parts = [...sc.bodies, ...sc.items.filter((i) => DRAWN_WITH_RESULTS.has(i.kind))];
+      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, ...parts];
+      if (key.length === last.length && key.every((k, i) => k === last[i])) return;
+      last = key;
+      const scene: Scene = {
+        bodies: parts.filter((p): p is SceneBody => p.kind === "body"),
+        items: parts.filter((p): p is SceneItem => p.kind !== "body"),
+        byId: new Map(parts.map((p) => [p.id, p])),
+      };
+      primsRef.current = a.shown ? resultPrims(scene, a.shown, { units: e.units, scale: e.view.scale, stale: a.stale }).prims : [];
+      const layer = shapeRef.current?.getLayer();
+      if (!layer) return;
+      if (now) layer.draw();
+      else layer.batchDraw();
+    };
+    const stops = [
+      stores.analysis.subscribe(() => redraw(true)),
+      stores.scene.subscribe(() => redraw(false)),
+      stores.editor.subscribe((s, p) => {
+        if (s.view.scale !== p.view.scale || s.units !== p.units) redraw(false);
+      }),
+    ];
+    redraw(false);
+    return () => stops.forEach((stop) => stop());
+  }, [stores]);
+  return <Shape ref={shapeRef} sceneFunc={(ctx) => drawPrims(ctx._context, primsRef.current, canvasFont())} listening={false} perfectDrawEnabled={false} />;
+}
 
 export const SelectionHandles = memo(function SelectionHandles() {
   const only = useEditor((s) => (s.selection.length === 1 ? s.selection[0] : null));

@@ -92,8 +92,45 @@ export function elementIndex(sketch: SketchFile): Map<string, Located> {
   return map;
 }
 
+/** Where each id was last found: a new sketch from a drag keeps its elements in place, so most lookups need no index. */
+const lastPos = new Map<string, { group: Group; index: number }>();
+
+/** Elements found without the full index, per sketch (the same object for the same question: React selectors rely on it). */
+const partial = new WeakMap<SketchFile, Map<string, Located>>();
+
 export function findElement(sketch: SketchFile, id: string): Located | undefined {
-  return elementIndex(sketch).get(id);
+  const cached = indexCache.get(sketch);
+  if (cached) return cached.get(id);
+  let found = partial.get(sketch);
+  const hit = found?.get(id);
+  if (hit) return hit;
+  const pos = lastPos.get(id);
+  if (pos) {
+    const el = (sketch[pos.group] as AnyElement[] | undefined)?.[pos.index];
+    if (el && el.id === id && firstWithId(sketch, pos.group, pos.index, id)) {
+      const l: Located = { group: pos.group, index: pos.index, kind: kindOf(pos.group, el), el };
+      if (!found) partial.set(sketch, (found = new Map()));
+      found.set(id, l);
+      return l;
+    }
+  }
+  const l = elementIndex(sketch).get(id);
+  if (l) {
+    if (lastPos.size > 10_000) lastPos.clear();
+    lastPos.set(id, { group: l.group, index: l.index });
+  }
+  return l;
+}
+
+/** True when no earlier element holds the same id (ids should be unique; the first one wins). */
+function firstWithId(sketch: SketchFile, group: Group, index: number, id: string): boolean {
+  for (const g of GROUPS) {
+    const list = sketch[g] as AnyElement[];
+    const end = g === group ? index : list.length;
+    for (let i = 0; i < end; i++) if (list[i].id === id) return false;
+    if (g === group) return true;
+  }
+  return true;
 }
 
 /** Every element in file order (bodies first). */
