@@ -3,19 +3,22 @@
 // the support), the hand check, and the cautions and assumptions beside them.
 import { useState } from "react";
 import { useEditor } from "@/canvas/context";
+import { CasesPanel } from "@/components/studies/CasesPanel";
+import { SweepPanel } from "@/components/studies/SweepPanel";
 import { CautionsAside } from "./CautionsAside";
 import { HandCheckView } from "./HandCheckView";
 import { ReactionsTable, type Sense } from "./ReactionsTable";
 import { StatusBanner } from "./StatusBanner";
 
-type Tab = "reactions" | "hand";
+type Tab = "reactions" | "hand" | "cases" | "sweep";
 
 export function ResultsDock() {
   const [tab, setTab] = useState<Tab>("reactions");
   const [sense, setSense] = useState<Sense>("body");
   const flows = useEditor((s) => s.sketch.ports.length > 0);
   return (
-    <section aria-label="Results" className="flex h-[292px] shrink-0 border-t border-rule bg-paper">
+    // the studies need room: the dock grows while one of them is open
+    <section aria-label="Results" className={`flex shrink-0 border-t border-rule bg-paper ${tab === "cases" || tab === "sweep" ? "h-[440px]" : "h-[292px]"}`}>
       <div className="flex min-w-0 flex-1 flex-col px-3 pt-2">
         <StatusBanner />
         <div className="mt-2 flex items-center gap-1 border-b border-rule">
@@ -24,6 +27,8 @@ export function ResultsDock() {
               [
                 ["reactions", "Reactions"],
                 ["hand", "Hand check"],
+                ["cases", "Cases"],
+                ["sweep", "Sweep"],
               ] as const
             ).map(([id, label]) => (
               <button
@@ -63,7 +68,7 @@ export function ResultsDock() {
           )}
         </div>
         <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} className="min-h-0 flex-1 overflow-auto py-2">
-          {tab === "reactions" ? <ReactionsTable sense={sense} /> : <HandCheckView />}
+          {tab === "reactions" ? <ReactionsTable sense={sense} /> : tab === "hand" ? <HandCheckView /> : tab === "cases" ? <CasesPanel /> : <SweepPanel />}
         </div>
       </div>
       <CautionsAside flows={flows} />

@@ -1,0 +1,110 @@
+// The studies' work, as plain functions that run in a worker (or directly in tests): all cases
+// and combinations at once, a sweep in chunks with progress and a way to stop, and the limit finder.
+import { findLimit, type LimitResult } from "@/solver/limit";
+import { parseSketch } from "@/solver/parse";
+import { readQuantity, type QuantitySpec } from "@/solver/quantity";
+import { createSweeper, linspace } from "@/solver/sweep";
+import { solveCases, type StudyResult } from "@/solver/cases";
+import type { SketchFile } from "@/solver/schema";
+import type { FieldError, Sketch } from "@/solver/types";
+
+export interface SweepSpec {
+  parameter: string;
+  from: number;
+  to: number;
+  points: number;
+  /** apply this case's overrides and factors first */
+  caseId?: string;
+  quantities: QuantitySpec[];
+}
+
+export interface SweepData {
+  parameter: string;
+  unit: string;
+  /** what each series is */
+  quantities: QuantitySpec[];
+  xs: number[];
+  /** one series per quantity, NaN where the point did not solve */
+  series: number[][];
+  /** per point: worst status of the bodies, or an error */
+  statuses: string[];
+  /** where each series crosses zero (margins, friction margins): from a sign change between two points */
+  crossings: Array<{ quantity: number; between: [number, number] }>;
+  errors: Array<{ value: number; errors: FieldError[] }>;
+}
+
+const STATUS_RANK: Record<string, number> = { holds: 0, lifts: 1, tips: 2, unrestrained: 3 };
+
+/** The sketch a case makes: its parameter overrides in the file, its factors as scaling. */
+export function sketchForCase(file: SketchFile, caseId?: string): Sketch {
+  const c = caseId ? file.cases?.find((x) => x.id === caseId) : undefined;
+  const variant = c?.parameters ? { ...file, parameters: { ...(file.parameters ?? {}), ...c.parameters } } : file;
+  const p = parseSketch(variant);
+  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  if (c) p.sketch.scaling = { factors: c.factors, flowFactor: c.flowFactor ?? 1 };
+  return p.sketch;
+}
+
+export function runCases(file: unknown): StudyResult {
+  const p = parseSketch(file);
+  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  return solveCases(p.file);
+}
+
+/**
+ * A sweep in chunks. `onChunk` gets the fraction done after each chunk and may return false to
+ * stop (the data so far is returned, marked with the last value reached).
+ */
+export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number) => boolean = () => true, chunk = 100): SweepData {
+  const p = parseSketch(file);
+  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  const sketch = spec.caseId ? sketchForCase(p.file, spec.caseId) : p.sketch;
+  const xs = linspace(spec.from, spec.to, spec.points);
+  const sweeper = createSweeper(sketch, spec.parameter);
+  const data: SweepData = { parameter: spec.parameter, unit: sweeper.unit, quantities: spec.quantities, xs: [], series: spec.quantities.map(() => []), statuses: [], crossings: [], errors: [] };
+  try {
+    for (let i = 0; i < xs.length; i++) {
+      const pt = sweeper.at(xs[i]);
+      data.xs.push(xs[i]);
+      if (pt.ok) {
+        spec.quantities.forEach((q, k) => data.series[k].push(readQuantity(pt.result, q)));
+        const worst = Object.values(pt.result.bodies).reduce((w, b) => (STATUS_RANK[b.status] > STATUS_RANK[w] ? b.status : w), "holds");
+        data.statuses.push(worst);
+      } else {
+        spec.quantities.forEach((_, k) => data.series[k].push(Number.NaN));
+        data.statuses.push("error");
+        data.errors.push({ value: xs[i], errors: pt.errors });
+      }
+      if ((i + 1) % chunk === 0 && i + 1 < xs.length && !onChunk((i + 1) / xs.length)) break;
+    }
+  } finally {
+    sweeper.restore();
+  }
+  data.series.forEach((ys, k) => {
+    for (let i = 1; i < ys.length; i++) {
+      const a = ys[i - 1];
+      const b = ys[i];
+      if (Number.isFinite(a) && Number.isFinite(b) && ((a > 0 && b <= 0) || (a < 0 && b >= 0) || (a === 0 && b !== 0 && i === 1))) {
+        data.crossings.push({ quantity: k, between: [data.xs[i - 1], data.xs[i]] });
+      }
+    }
+  });
+  onChunk(1);
+  return data;
+}
+
+export interface LimitSpec {
+  parameter: string;
+  from: number;
+  to: number;
+  caseId?: string;
+  quantity: QuantitySpec;
+  target: number;
+}
+
+export function runLimit(file: unknown, spec: LimitSpec): LimitResult {
+  const p = parseSketch(file);
+  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  const sketch = spec.caseId ? sketchForCase(p.file, spec.caseId) : p.sketch;
+  return findLimit(sketch, spec.parameter, [spec.from, spec.to], spec.quantity, spec.target);
+}

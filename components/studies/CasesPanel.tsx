@@ -1,0 +1,248 @@
+"use client";
+// "Cases": operating cases (parameter changes, group factors, flow), combinations (cases added
+// with factors, solved as one factored load set), the required factors of safety, and the results
+// of all of them at once: reactions per case with the governing case, the envelope with each
+// support's design load, and the factors of safety against overturning and sliding.
+import { useEffect, useMemo, useRef, useState } from "react";
+import type { StudyResult } from "@/solver/cases";
+import { caseReactionTable, envelopeTable, stabilityTable } from "@/solver/report";
+import type { CaseFile, CombinationFile } from "@/solver/schema";
+import type { Command } from "@/canvas/commands/define";
+import { setStudy } from "@/canvas/commands/studies";
+import { useEditor, useStores } from "@/canvas/context";
+import { CancelledError, StudyRunner } from "@/canvas/studies/client";
+import { BUTTON, HEADING, INPUT } from "@/components/editor/ui";
+import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms } from "./casesText";
+import { ReportTable } from "./ReportTable";
+
+/** A text field that commits a parsed value on blur or Enter and shows its error at the field. */
+function TextCell({ label, value, parse, onCommit, placeholder, width }: {
+  label: string;
+  value: string;
+  parse: (t: string) => { ok: true } | { ok: false; error: string };
+  onCommit: (t: string) => void;
+  placeholder?: string;
+  width?: string;
+}) {
+  const [text, setText] = useState(value);
+  const [error, setError] = useState<string | null>(null);
+  // follow the document when it changes underneath (undo, another field)
+  const [shown, setShown] = useState(value);
+  if (shown !== value) {
+    setShown(value);
+    setText(value);
+  }
+  const commit = () => {
+    const r = parse(text);
+    if (!r.ok) return setError(r.error);
+    setError(null);
+    if (text !== value) onCommit(text);
+  };
+  return (
+    <label className={`flex flex-col ${width ?? ""}`}>
+      <span className="sr-only">{label}</span>
+      <input
+        className={INPUT}
+        value={text}
+        placeholder={placeholder}
+        aria-label={label}
+        aria-invalid={error ? true : undefined}
+        onChange={(e) => setText(e.target.value)}
+        onBlur={commit}
+        onKeyDown={(e) => e.key === "Enter" && commit()}
+      />
+      {error && <span className="mt-0.5 text-[11px] text-caution" role="alert">{error}</span>}
+    </label>
+  );
+}
+
+export function CasesPanel() {
+  const { editor } = useStores();
+  const sketch = useEditor((s) => s.sketch);
+  const units = useEditor((s) => s.units);
+  const cases = useMemo(() => sketch.cases ?? [], [sketch.cases]);
+  const combinations = sketch.combinations ?? [];
+  const parameters = Object.keys(sketch.parameters ?? {});
+  const runner = useRef<StudyRunner | null>(null);
+  const [study, setStudyResult] = useState<{ result: StudyResult; of: typeof sketch } | null>(null);
+  const [running, setRunning] = useState<(() => void) | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  useEffect(() => {
+    runner.current = new StudyRunner();
+    return () => runner.current?.dispose();
+  }, []);
+
+  const putCases = (next: CaseFile[]) => editor.getState().apply(setStudy({ key: "cases", value: next }) as Command<unknown>);
+  const putCombos = (next: CombinationFile[]) => editor.getState().apply(setStudy({ key: "combinations", value: next }) as Command<unknown>);
+  const updateCase = (i: number, patch: Partial<CaseFile>) => putCases(cases.map((c, k) => (k === i ? { ...c, ...patch } : c)));
+  const takenIds = [...cases.map((c) => c.id), ...combinations.map((c) => c.id)];
+
+  const addCase = () => {
+    const name = cases.length ? `Case ${cases.length + 1}` : "Normal operation";
+    putCases([...cases, { id: idFromName(name, takenIds), name }]);
+  };
+  const addCombination = () => {
+    if (!cases.length) return;
+    const name = `Combination ${combinations.length + 1}`;
+    putCombos([...combinations, { id: idFromName(name, takenIds), name, terms: cases.slice(0, 2).map((c) => ({ case: c.id, factor: 1 })) }]);
+  };
+
+  const run = () => {
+    if (!runner.current) return;
+    setError(null);
+    const job = runner.current.run({ kind: "cases", text: JSON.stringify(sketch) });
+    setRunning(() => job.cancel);
+    const of = sketch;
+    job.promise
+      .then((result) => setStudyResult({ result, of }))
+      .catch((err) => setError(err instanceof CancelledError ? "Stopped." : err.message))
+      .finally(() => setRunning(null));
+  };
+
+  const staleResult = study && study.of !== sketch;
+  const nameOf = (id: string) => study?.result.runs.find((r) => r.id === id)?.name ?? id;
+
+  return (
+    <div className="grid min-h-0 gap-4 lg:grid-cols-[minmax(22rem,1fr)_minmax(24rem,1.4fr)]" data-testid="cases-panel">
+      <div className="min-w-0 space-y-3">
+        <section aria-labelledby="cases-h">
+          <div className="flex items-center gap-2">
+            <h3 id="cases-h" className={HEADING}>Operating cases</h3>
+            <button type="button" className={`${BUTTON} ml-auto h-6 text-[11.5px]`} onClick={addCase}>
+              Add a case
+            </button>
+          </div>
+          {cases.length === 0 ? (
+            <p className="mt-1 text-[12px] text-ink-faint">
+              No cases yet: the sketch is solved as drawn. A case changes parameters (“Q = 1500 gpm”), scales load groups (“dead 1.2, flow 1.5”; weights are in
+              “dead”, loads in “loads”, ports in “flow” unless given a group) or the flow (× f: momentum flux × f²).
+            </p>
+          ) : (
+            <table className="mt-1 w-full text-[12px]" data-testid="cases-table">
+              <thead>
+                <tr className="text-left text-[11px] text-ink-faint">
+                  <th className="font-medium">Name</th>
+                  <th className="font-medium">Parameter changes</th>
+                  <th className="font-medium">Group factors</th>
+                  <th className="w-16 font-medium">Flow ×</th>
+                  <th />
+                </tr>
+              </thead>
+              <tbody>
+                {cases.map((c, i) => (
+                  <tr key={c.id} className="align-top" data-case={c.id}>
+                    <td className="pr-1 pb-1">
+                      <TextCell label={`Name of case ${c.id}`} value={c.name} parse={(t) => (t.trim() ? { ok: true } : { ok: false, error: "needs a name" })} onCommit={(t) => updateCase(i, { name: t.trim() })} />
+                      <span className="text-[10.5px] text-ink-faint">id {c.id}</span>
+                    </td>
+                    <td className="pr-1 pb-1">
+                      <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder="theta = 30 deg" parse={(t) => parseOverrides(t, parameters)} onCommit={(t) => { const r = parseOverrides(t, parameters); if (r.ok) updateCase(i, { parameters: r.value }); }} />
+                    </td>
+                    <td className="pr-1 pb-1">
+                      <TextCell label={`Group factors of ${c.name}`} value={formatFactors(c.factors)} placeholder="dead 1.2, flow 1.5" parse={parseFactors} onCommit={(t) => { const r = parseFactors(t); if (r.ok) updateCase(i, { factors: r.value }); }} />
+                    </td>
+                    <td className="pr-1 pb-1">
+                      <TextCell label={`Flow factor of ${c.name}`} value={c.flowFactor === undefined ? "" : String(c.flowFactor)} placeholder="1" parse={(t) => (!t.trim() || Number(t) >= 0 ? { ok: true } : { ok: false, error: "a number, 0 or more" })} onCommit={(t) => updateCase(i, { flowFactor: t.trim() ? Number(t) : undefined })} />
+                    </td>
+                    <td className="pb-1">
+                      <button type="button" className="px-1 text-ink-faint hover:text-accent" aria-label={`Remove case ${c.name}`} onClick={() => putCases(cases.filter((_, k) => k !== i))}>
+                        ×
+                      </button>
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          )}
+        </section>
+
+        <section aria-labelledby="combos-h">
+          <div className="flex items-center gap-2">
+            <h3 id="combos-h" className={HEADING}>Combinations</h3>
+            <button type="button" className={`${BUTTON} ml-auto h-6 text-[11.5px]`} onClick={addCombination} disabled={!cases.length}>
+              Add a combination
+            </button>
+          </div>
+          {combinations.length === 0 ? (
+            <p className="mt-1 text-[12px] text-ink-faint">A combination adds cases with factors (“1.2 normal + 1.5 test”) and is solved as one factored load set, never by adding results.</p>
+          ) : (
+            <ul className="mt-1 space-y-1">
+              {combinations.map((k, i) => (
+                <li key={k.id} className="grid grid-cols-[10rem_1fr_auto] items-start gap-1">
+                  <TextCell label={`Name of combination ${k.id}`} value={k.name} parse={(t) => (t.trim() ? { ok: true } : { ok: false, error: "needs a name" })} onCommit={(t) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name: t.trim() } : x)))} />
+                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 normal + 1.5 test" parse={(t) => parseTerms(t, cases.map((c) => c.id))} onCommit={(t) => { const r = parseTerms(t, cases.map((c) => c.id)); if (r.ok) putCombos(combinations.map((x, j) => (j === i ? { ...x, terms: r.value } : x))); }} />
+                  <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => putCombos(combinations.filter((_, j) => j !== i))}>
+                    ×
+                  </button>
+                </li>
+              ))}
+            </ul>
+          )}
+        </section>
+
+        <section aria-labelledby="req-h" className="flex flex-wrap items-end gap-3">
+          <h3 id="req-h" className={`${HEADING} w-full`}>Required factors of safety</h3>
+          {(["overturning", "sliding"] as const).map((k) => (
+            <label key={k} className="flex items-center gap-1.5 text-[12px] text-ink-soft">
+              against {k}
+              <span className="w-16">
+                <TextCell label={`Required factor against ${k}`} value={String(sketch.stability?.[k] ?? 1.5)} parse={(t) => (Number(t) > 0 ? { ok: true } : { ok: false, error: "more than 0" })} onCommit={(t) => editor.getState().apply(setStudy({ key: "stability", value: { ...sketch.stability, [k]: Number(t) } }) as Command<unknown>)} />
+              </span>
+            </label>
+          ))}
+          <span className="text-[11px] text-ink-faint">1.5 each is common practice; your code or client may ask for other values.</span>
+        </section>
+
+        <div className="flex items-center gap-2">
+          <button type="button" className={`${BUTTON} border-ink bg-ink text-paper hover:bg-ink-soft hover:text-paper`} onClick={run} disabled={!!running}>
+            {cases.length || combinations.length ? "Run all cases" : "Run as drawn"}
+          </button>
+          {running && (
+            <>
+              <span className="text-[12px] text-ink-faint" role="status">Solving…</span>
+              <button type="button" className={BUTTON} onClick={() => running()}>
+                Stop
+              </button>
+            </>
+          )}
+          {error && <span className="text-[12px] text-caution" role="alert">{error}</span>}
+        </div>
+      </div>
+
+      <div className="min-w-0 space-y-3" aria-live="polite">
+        {!study ? (
+          <p className="text-[12.5px] text-ink-faint">Run the cases to see the reactions per case, the governing case of each support, the envelope and the factors of safety.</p>
+        ) : (
+          <div className={staleResult ? "opacity-60" : ""} data-testid="case-results">
+            {staleResult && <p className="mb-1 text-[12px] font-medium text-caution">The sketch changed since this run: run the cases again.</p>}
+            {study.result.runs.filter((r) => !r.ok).map((r) => (
+              <p key={r.id} className="text-[12px] text-caution" role="alert">
+                {r.name} could not be solved: {!r.ok && r.errors.map((e) => `${e.path} ${e.message}`).join("; ")}
+              </p>
+            ))}
+            <ReportTable
+              table={caseReactionTable(study.result, units)}
+              fileName="reactions-per-case"
+              testId="case-reactions"
+              caption="“design load”: the case that gives this support its largest resultant (its governing case)."
+            />
+            <div className="mt-3">
+              <ReportTable table={envelopeTable(study.result, units)} fileName="envelope" testId="envelope" />
+            </div>
+            <div className="mt-3">
+              <ReportTable
+                table={stabilityTable(study.result)}
+                fileName="factors-of-safety"
+                testId="stability"
+                mark={(row, key) => (key === "verdict" && row[5] === "FAIL" ? <span className="ml-1 font-semibold text-caution">(below {row[4]})</span> : null)}
+              />
+            </div>
+            <p className="mt-2 text-[11.5px] text-ink-faint">
+              Governing cases — {Object.entries(study.result.envelope).map(([id, e]) => `${id}: ${nameOf(e.design.case)}`).join(" · ")}
+            </p>
+          </div>
+        )}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,69 @@
+"use client";
+// A result table from the solver's report (the rows the CSV and the calc sheet use), with a CSV button.
+import type { ReactNode } from "react";
+import type { Cell, Table } from "@/solver/report";
+import { formatNumber } from "@/solver/units";
+import { BUTTON } from "@/components/editor/ui";
+import { downloadCsv } from "./csv";
+
+export function ReportTable({
+  table,
+  fileName,
+  mark,
+  caption,
+  testId,
+}: {
+  table: Table;
+  fileName: string;
+  /** words to show after a cell (e.g. "governs"), by row and column key */
+  mark?: (row: Cell[], key: string) => ReactNode;
+  caption?: string;
+  testId?: string;
+}) {
+  return (
+    <div className="min-w-0">
+      <div className="mb-1 flex items-center gap-2">
+        <h3 className="text-[12.5px] font-semibold text-ink">{table.title}</h3>
+        <button type="button" className={`${BUTTON} ml-auto h-6 px-2 text-[11.5px]`} onClick={() => downloadCsv(table, fileName)} aria-label={`Download “${table.title}” as CSV`}>
+          CSV
+        </button>
+      </div>
+      <div className="overflow-x-auto">
+        <table className="num w-full border-collapse text-[12px]" data-testid={testId}>
+          {caption && <caption className="caption-top pb-1 text-left text-[11.5px] text-ink-faint">{caption}</caption>}
+          <thead>
+            <tr className="border-b border-rule text-[11px] text-ink-faint">
+              {table.columns.map((c) => (
+                <th key={c.key} scope="col" className={`whitespace-nowrap px-1.5 py-1 font-medium ${c.align === "left" ? "text-left" : "text-right"}`}>
+                  {c.label}
+                  {c.unit && <span className="ml-0.5 font-normal">({c.unit})</span>}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {table.rows.map((row, ri) => (
+              <tr key={ri} className="border-b border-rule-soft">
+                {row.map((cell, i) => {
+                  const col = table.columns[i];
+                  const extra = mark?.(row, col.key);
+                  return (
+                    <td key={col.key} data-col={col.key} className={`whitespace-nowrap px-1.5 py-[3px] ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"}`}>
+                      {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4) : cell}
+                      {extra}
+                    </td>
+                  );
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {table.notes?.map((n) => (
+        <p key={n} className="mt-1 text-[11.5px] text-ink-faint">
+          {n}
+        </p>
+      ))}
+    </div>
+  );
+}

@@ -1,0 +1,213 @@
+"use client";
+// "Sweep": one parameter (or the flow factor) over a range, the reactions and margins plotted
+// against it with the points where a contact lifts, a tie goes slack or friction is used up;
+// and the limit finder: where does a quantity reach a value?
+import { useEffect, useMemo, useRef, useState } from "react";
+import type { LimitResult } from "@/solver/limit";
+import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
+import { FLOW_FACTOR } from "@/solver/sweep";
+import { columnUnit } from "@/solver/report";
+import { convert, formatNumber } from "@/solver/units";
+import type { Command } from "@/canvas/commands/define";
+import { setStudy } from "@/canvas/commands/studies";
+import { useEditor, useStores } from "@/canvas/context";
+import { CancelledError, StudyRunner } from "@/canvas/studies/client";
+import type { SweepData, SweepSpec } from "@/canvas/studies/run";
+import { BUTTON, HEADING, INPUT, LABEL } from "@/components/editor/ui";
+import { SweepChart } from "./SweepChart";
+
+const COMPONENT_WORDS: Partial<Record<QuantityComponent, string>> = {
+  margin: "margin (n; below 0 once lifted or slack)",
+  n: "normal force n",
+  resultant: "resultant",
+  fx: "Fx",
+  fy: "Fy",
+  m: "moment",
+  frictionMargin: "friction margin μ·n − |t|",
+};
+
+export function SweepPanel() {
+  const { editor } = useStores();
+  const sketch = useEditor((s) => s.sketch);
+  const units = useEditor((s) => s.units);
+  const parameters = Object.keys(sketch.parameters ?? {});
+  const choices = useMemo(() => {
+    const out: Array<{ spec: QuantitySpec; label: string }> = [];
+    for (const s of sketch.supports) {
+      const name = s.label ? `${s.id} (${s.label})` : s.id;
+      if (s.kind === "contact" || s.kind === "tie") {
+        out.push({ spec: { support: s.id, component: "margin" }, label: `${name}: ${COMPONENT_WORDS.margin}` });
+        if (s.kind === "contact" && s.mu !== undefined) out.push({ spec: { support: s.id, component: "frictionMargin" }, label: `${name}: ${COMPONENT_WORDS.frictionMargin}` });
+      } else {
+        out.push({ spec: { support: s.id, component: "resultant" }, label: `${name}: resultant` });
+        if (s.kind === "fixed") out.push({ spec: { support: s.id, component: "m" }, label: `${name}: moment` });
+      }
+    }
+    return out;
+  }, [sketch.supports]);
+
+  const saved = sketch.sweeps?.[0];
+  const [parameter, setParameter] = useState(saved?.parameter ?? parameters[0] ?? FLOW_FACTOR);
+  const [from, setFrom] = useState(String(saved?.from ?? 0));
+  const [to, setTo] = useState(String(saved?.to ?? (parameter === FLOW_FACTOR ? 2 : 90)));
+  const [points, setPoints] = useState(String(saved?.points ?? 201));
+  const [caseId, setCaseId] = useState<string>(saved?.case ?? "");
+  const [picked, setPicked] = useState<string[]>(() => (saved?.quantities ?? choices.map((c) => c.spec)).map((q) => `${q.support}:${q.component}`));
+  const [data, setData] = useState<SweepData | null>(null);
+  const [progress, setProgress] = useState<number | null>(null);
+  const [cancel, setCancel] = useState<(() => void) | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const [limitQ, setLimitQ] = useState(0);
+  const [target, setTarget] = useState("0");
+  const [limit, setLimit] = useState<{ result: LimitResult; label: string; target: number } | null>(null);
+  const runner = useRef<StudyRunner | null>(null);
+  useEffect(() => {
+    runner.current = new StudyRunner();
+    return () => runner.current?.dispose();
+  }, []);
+
+  const quantities = choices.filter((c) => picked.includes(`${c.spec.support}:${c.spec.component}`)).map((c) => c.spec);
+  const spec = (): SweepSpec | string => {
+    const f = Number(from);
+    const t = Number(to);
+    const n = Math.round(Number(points));
+    if (!Number.isFinite(f) || !Number.isFinite(t) || f === t) return "Give a range: two different numbers.";
+    if (!(n >= 2 && n <= 20000)) return "Points: 2 to 20,000.";
+    if (!quantities.length) return "Pick at least one quantity to plot.";
+    return { parameter, from: f, to: t, points: n, caseId: caseId || undefined, quantities };
+  };
+
+  const run = () => {
+    const s = spec();
+    if (typeof s === "string") return setError(s);
+    setError(null);
+    setProgress(0);
+    const job = runner.current!.run({ kind: "sweep", text: JSON.stringify(sketch), spec: s }, setProgress);
+    setCancel(() => job.cancel);
+    performance.mark("sweep-run");
+    job.promise
+      .then((d) => {
+        setData(d);
+        setLimit(null);
+      })
+      .catch((err) => setError(err instanceof CancelledError ? "Stopped: nothing plotted." : err.message))
+      .finally(() => {
+        setProgress(null);
+        setCancel(null);
+      });
+  };
+
+  const findLimit = () => {
+    const s = spec();
+    if (typeof s === "string") return setError(s);
+    const q = quantities[limitQ] ?? quantities[0];
+    const unitFactor = q.component === "frictionRatio" ? 1 : convert(1, "force", units, columnUnit("force", units)).value;
+    const tgt = Number(target) / unitFactor;
+    if (!Number.isFinite(tgt)) return setError("The target must be a number.");
+    setError(null);
+    const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt } });
+    job.promise.then((result) => setLimit({ result, label: describeQuantity(q), target: Number(target) })).catch((err) => setError(err.message));
+  };
+
+  const keep = () => {
+    const s = spec();
+    if (typeof s === "string") return setError(s);
+    const sweep = { id: "sweep-1", parameter: s.parameter, from: s.from, to: s.to, points: s.points, ...(s.caseId ? { case: s.caseId } : {}), quantities: s.quantities };
+    editor.getState().apply(setStudy({ key: "sweeps", value: [sweep, ...(sketch.sweeps ?? []).filter((x) => x.id !== "sweep-1")] }) as Command<unknown>);
+  };
+
+  const forceUnit = columnUnit("force", units);
+  const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
+
+  return (
+    <div className="grid min-h-0 gap-4 lg:grid-cols-[19rem_1fr]" data-testid="sweep-panel">
+      <form className="space-y-2" onSubmit={(e) => { e.preventDefault(); run(); }} aria-label="Sweep settings">
+        <h3 className={HEADING}>Sweep</h3>
+        <label className="block">
+          <span className={LABEL}>Parameter</span>
+          <select className={INPUT} value={parameter} onChange={(e) => setParameter(e.target.value)} aria-label="Parameter to sweep">
+            {parameters.map((p) => (
+              <option key={p} value={p}>{p} = {String(sketch.parameters?.[p])}</option>
+            ))}
+            <option value={FLOW_FACTOR}>flow factor (every port’s ṁ and V × f)</option>
+          </select>
+        </label>
+        <div className="grid grid-cols-3 gap-1.5">
+          <label><span className={LABEL}>From</span><input className={INPUT} value={from} onChange={(e) => setFrom(e.target.value)} aria-label="From" /></label>
+          <label><span className={LABEL}>To</span><input className={INPUT} value={to} onChange={(e) => setTo(e.target.value)} aria-label="To" /></label>
+          <label><span className={LABEL}>Points</span><input className={INPUT} value={points} onChange={(e) => setPoints(e.target.value)} aria-label="Points" /></label>
+        </div>
+        <p className="text-[11px] text-ink-faint">Values in the unit the parameter is written in{data?.unit ? ` (${data.unit})` : ""}.</p>
+        {(sketch.cases?.length ?? 0) > 0 && (
+          <label className="block">
+            <span className={LABEL}>Case</span>
+            <select className={INPUT} value={caseId} onChange={(e) => setCaseId(e.target.value)} aria-label="Case to sweep">
+              <option value="">As drawn</option>
+              {sketch.cases!.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+            </select>
+          </label>
+        )}
+        <fieldset className="max-h-28 overflow-auto rounded border border-rule-soft p-1.5">
+          <legend className={LABEL}>Plot</legend>
+          {choices.map((c) => {
+            const key = `${c.spec.support}:${c.spec.component}`;
+            return (
+              <label key={key} className="flex items-center gap-1.5 text-[12px] text-ink-soft">
+                <input type="checkbox" checked={picked.includes(key)} onChange={(e) => setPicked(e.target.checked ? [...picked, key] : picked.filter((k) => k !== key))} />
+                {c.label}
+              </label>
+            );
+          })}
+          {!choices.length && <p className="text-[12px] text-ink-faint">Add supports to plot their reactions.</p>}
+        </fieldset>
+        <div className="flex flex-wrap items-center gap-1.5">
+          <button type="submit" className={`${BUTTON} border-ink bg-ink text-paper hover:bg-ink-soft hover:text-paper`} disabled={progress !== null}>Run the sweep</button>
+          <button type="button" className={BUTTON} onClick={keep} title="Save this sweep in the sketch: the calc sheet plots it">Keep on the calc sheet</button>
+          {progress !== null && (
+            <>
+              <progress className="h-2 w-20" max={1} value={progress} aria-label="Sweep progress" />
+              <button type="button" className={BUTTON} onClick={() => cancel?.()}>Stop</button>
+            </>
+          )}
+        </div>
+        {error && <p className="text-[12px] text-caution" role="alert">{error}</p>}
+      </form>
+
+      <div className="min-w-0" aria-live="polite">
+        {!data ? (
+          <p className="text-[12.5px] text-ink-faint">Run a sweep to plot each reaction and margin against {pLabel}. Where a margin crosses zero a contact lifts, a tie goes slack or friction is used up: those points are marked.</p>
+        ) : (
+          <>
+            <SweepChart data={data} units={units} parameterLabel={pLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target} ${forceUnit}` } : null} />
+            <ul className="mt-1 space-y-0.5 text-[12px]" data-testid="crossings">
+              {data.crossings.length === 0 && <li className="text-ink-faint">No margin crosses zero in this range.</li>}
+              {data.crossings.map((c, i) => (
+                <li key={i} className="text-ink-soft">
+                  <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity])} crosses zero between {pLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${data.unit}` : ""}
+                </li>
+              ))}
+              {data.errors.length > 0 && <li className="text-caution">{data.errors.length} point(s) could not be solved (e.g. {data.errors[0].errors[0]?.path}: {data.errors[0].errors[0]?.message}).</li>}
+            </ul>
+            <div className="mt-2 flex flex-wrap items-end gap-1.5 border-t border-rule-soft pt-2" role="group" aria-label="Limit finder">
+              <span className={LABEL}>At what {pLabel} does</span>
+              <select className={`${INPUT} w-auto`} value={limitQ} onChange={(e) => setLimitQ(Number(e.target.value))} aria-label="Quantity for the limit">
+                {quantities.map((q, i) => <option key={i} value={i}>{describeQuantity(q)}</option>)}
+              </select>
+              <span className={LABEL}>reach</span>
+              <input className={`${INPUT} w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
+              <span className={LABEL}>{forceUnit}?</span>
+              <button type="button" className={BUTTON} onClick={findLimit}>Find</button>
+            </div>
+            {limit && (
+              <p className="mt-1 text-[12.5px]" data-testid="limit-answer" role="status">
+                {limit.result.found
+                  ? `The ${limit.label} reaches ${limit.target} ${forceUnit} at ${pLabel} = ${formatNumber(limit.result.value, 5)}${limit.result.unit ? ` ${limit.result.unit}` : ""}${limit.result.crossings.length > 1 ? ` (and again at ${limit.result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
+                  : `No crossing in this range: ${limit.result.reason.replace(/^no crossing in this range: /, "")}.`}
+              </p>
+            )}
+          </>
+        )}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,75 @@
+// The short text forms used to edit cases in a table, and their checks. Pure functions.
+//   parameter changes:  "theta = 30 deg; Q = 1500 gpm"
+//   group factors:      "dead 1.2, flow 1.5"   (a group, then its factor)
+//   combination terms:  "1.2 normal + 1.5 test"  (a factor, then a case id)
+export type Parsed<T> = { ok: true; value: T } | { ok: false; error: string };
+
+export function parseOverrides(text: string, parameters: readonly string[]): Parsed<Record<string, string> | undefined> {
+  const t = text.trim();
+  if (!t) return { ok: true, value: undefined };
+  const out: Record<string, string> = {};
+  for (const part of t.split(";").map((s) => s.trim()).filter(Boolean)) {
+    const m = /^([A-Za-z_][A-Za-z0-9_]*)\s*=\s*(.+)$/.exec(part);
+    if (!m) return { ok: false, error: `"${part}" should read name = value (e.g. theta = 30 deg)` };
+    if (!parameters.includes(m[1])) return { ok: false, error: `the sketch has no parameter "${m[1]}"${parameters.length ? ` (it has ${parameters.join(", ")})` : ""}` };
+    out[m[1]] = m[2].trim();
+  }
+  return { ok: true, value: out };
+}
+
+export function formatOverrides(o: Record<string, string | number> | undefined): string {
+  return Object.entries(o ?? {})
+    .map(([k, v]) => `${k} = ${v}`)
+    .join("; ");
+}
+
+export function parseFactors(text: string): Parsed<Record<string, number> | undefined> {
+  const t = text.trim();
+  if (!t) return { ok: true, value: undefined };
+  const out: Record<string, number> = {};
+  for (const part of t.split(",").map((s) => s.trim()).filter(Boolean)) {
+    const m = /^([A-Za-z][A-Za-z0-9 _-]*?)\s*[×x*]?\s*(-?\d+(?:\.\d+)?(?:e-?\d+)?)$/i.exec(part);
+    if (!m) return { ok: false, error: `"${part}" should read group factor (e.g. dead 1.2)` };
+    out[m[1].trim()] = Number(m[2]);
+  }
+  return { ok: true, value: out };
+}
+
+export function formatFactors(f: Record<string, number> | undefined): string {
+  return Object.entries(f ?? {})
+    .map(([k, v]) => `${k} ${v}`)
+    .join(", ");
+}
+
+export function parseTerms(text: string, caseIds: readonly string[]): Parsed<Array<{ case: string; factor: number }>> {
+  const parts = text
+    .split("+")
+    .map((s) => s.trim())
+    .filter(Boolean);
+  if (!parts.length) return { ok: false, error: "add at least one case, e.g. 1.2 normal + 1.5 test" };
+  const out: Array<{ case: string; factor: number }> = [];
+  for (const part of parts) {
+    const m = /^(?:(-?\d+(?:\.\d+)?)\s*[×x*]?\s*)?([A-Za-z0-9_-]+)$/i.exec(part);
+    if (!m) return { ok: false, error: `"${part}" should read factor case (e.g. 1.2 normal)` };
+    if (!caseIds.includes(m[2])) return { ok: false, error: `there is no case "${m[2]}"${caseIds.length ? ` (cases: ${caseIds.join(", ")})` : ""}` };
+    out.push({ case: m[2], factor: m[1] === undefined ? 1 : Number(m[1]) });
+  }
+  return { ok: true, value: out };
+}
+
+export function formatTerms(terms: Array<{ case: string; factor: number }>): string {
+  return terms.map((t) => `${t.factor} ${t.case}`).join(" + ");
+}
+
+/** A new id from a name: "Test pressure" → "test-pressure", unique among `taken`. */
+export function idFromName(name: string, taken: readonly string[]): string {
+  const base =
+    name
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .slice(0, 24) || "case";
+  let id = base;
+  for (let i = 2; taken.includes(id); i++) id = `${base}-${i}`;
+  return id;
+}

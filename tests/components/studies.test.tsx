@@ -1,0 +1,109 @@
+// The Cases and Sweep tabs: the case table equals the cases solved one by one, with the governing
+// case marked; a sweep plots and marks the crossing; the limit finder answers in words.
+import { readFileSync } from "node:fs";
+import { render, screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { describe, expect, it } from "vitest";
+import { parseSketch, solve, solveCases } from "@/solver/index";
+import { createEditorStore } from "@/canvas/store";
+import { EditorProvider } from "@/canvas/context";
+import { importSketchText } from "@/canvas/files";
+import { ResultsDock } from "@/components/results/ResultsDock";
+import { ActionContextCtx } from "@/components/editor/useActions";
+import type { ActionContext } from "@/canvas/actions";
+
+const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n}.json`, "utf8"));
+
+function mount(doc: unknown) {
+  const file = importSketchText(JSON.stringify(doc));
+  if (!file.ok) throw new Error("fixture does not import");
+  const editor = createEditorStore({ sketch: file.sketch });
+  const ctx = { stores: null as never, controller: null, ui: {} as ActionContext["ui"] };
+  render(
+    <EditorProvider editor={editor}>
+      <ActionContextCtx.Provider value={() => ctx}>
+        <ResultsDock />
+      </ActionContextCtx.Provider>
+    </EditorProvider>,
+  );
+  return editor;
+}
+
+const num = (t: string) => Number(t.replace(/,/g, "").replace("−", "-"));
+
+describe("Cases tab", () => {
+  it("adds cases in the table, runs them, and the table equals the cases solved one by one", async () => {
+    const user = userEvent.setup();
+    const editor = mount(load("fire-monitor-trailer"));
+    await user.click(screen.getByRole("tab", { name: "Cases" }));
+    await user.click(screen.getByRole("button", { name: "Add a case" }));
+    await user.click(screen.getByRole("button", { name: "Add a case" }));
+    const changes = screen.getAllByRole("textbox", { name: /Parameter changes of/ });
+    await user.type(changes[0], "theta = 15 deg{Enter}");
+    await user.type(changes[1], "theta = 60 deg{Enter}");
+    const names = screen.getAllByRole("textbox", { name: /Name of case/ });
+    await user.clear(names[1]);
+    await user.type(names[1], "High throw{Enter}");
+    const doc = editor.getState().sketch;
+    expect(doc.cases).toEqual([
+      { id: "normal-operation", name: "Normal operation", parameters: { theta: "15 deg" } },
+      { id: "case-2", name: "High throw", parameters: { theta: "60 deg" } },
+    ]);
+    await user.click(screen.getByRole("button", { name: "Run all cases" }));
+    const table = await screen.findByTestId("case-reactions");
+    // one by one, independently: parse the file with each override and solve
+    const one = (theta: string) => {
+      const p = parseSketch({ ...load("fire-monitor-trailer"), parameters: { ...load("fire-monitor-trailer").parameters, theta } });
+      if (!p.ok) throw new Error();
+      return solve(p.sketch);
+    };
+    const expected = [one("15 deg"), one("60 deg")];
+    const rows = within(table).getAllByRole("row").slice(1);
+    expect(rows).toHaveLength(6);
+    rows.forEach((row, i) => {
+      const c = expected[Math.floor(i / 3)];
+      const support = row.querySelector("[data-col=support]")!.textContent!;
+      const fy = num(row.querySelector("[data-col=fy]")!.textContent!);
+      expect(fy).toBeCloseTo(c.reactions[support].fy / 1000, 2);
+    });
+    // the governing case of each support is the one with its largest resultant
+    const parsedDoc = parseSketch(doc);
+    if (!parsedDoc.ok) throw new Error();
+    const study = solveCases(parsedDoc.file);
+    for (const [support, env] of Object.entries(study.envelope)) {
+      const row = rows.find((r) => r.querySelector("[data-col=support]")!.textContent === support && r.querySelector("[data-col=governs]")!.textContent === "design load")!;
+      expect(row.querySelector("[data-col=case]")!.textContent).toBe(study.runs.find((r) => r.id === env.design.case)!.name);
+    }
+    expect(screen.getByTestId("stability").textContent).toMatch(/overturning/);
+  });
+
+  it("a wrong parameter name is an error at the field, and nothing changes", async () => {
+    const user = userEvent.setup();
+    const editor = mount(load("fire-monitor-trailer"));
+    await user.click(screen.getByRole("tab", { name: "Cases" }));
+    await user.click(screen.getByRole("button", { name: "Add a case" }));
+    await user.type(screen.getByRole("textbox", { name: /Parameter changes of/ }), "phi = 3 deg{Enter}");
+    expect(screen.getByRole("alert").textContent).toBe('the sketch has no parameter "phi" (it has rho, Q, d, theta)');
+    expect(editor.getState().sketch.cases![0].parameters).toBeUndefined();
+  });
+});
+
+describe("Sweep tab", () => {
+  it("plots a sweep, lists the crossing, and the limit finder answers in words", async () => {
+    const user = userEvent.setup();
+    mount(load("fire-monitor-trailer"));
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "theta");
+    await user.clear(screen.getByRole("textbox", { name: "To" }));
+    await user.type(screen.getByRole("textbox", { name: "To" }), "80");
+    await user.clear(screen.getByRole("textbox", { name: "Points" }));
+    await user.type(screen.getByRole("textbox", { name: "Points" }), "81");
+    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    const crossings = await screen.findByTestId("crossings");
+    expect(crossings.textContent).toMatch(/margin at jack crosses zero between theta = 18 and 19 deg/);
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at jack");
+    await user.click(screen.getByRole("button", { name: "Find" }));
+    const answer = await screen.findByTestId("limit-answer");
+    expect(answer.textContent).toMatch(/^The margin at jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
+  });
+});

@@ -1,0 +1,28 @@
+// The short text forms of the Cases panel.
+import { describe, expect, it } from "vitest";
+import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms } from "@/components/studies/casesText";
+
+describe("case text forms", () => {
+  it("parameter changes", () => {
+    expect(parseOverrides("theta = 30 deg; Q = 1500 gpm", ["theta", "Q"])).toEqual({ ok: true, value: { theta: "30 deg", Q: "1500 gpm" } });
+    expect(parseOverrides("", ["theta"])).toEqual({ ok: true, value: undefined });
+    expect(parseOverrides("phi = 3", ["theta"])).toEqual({ ok: false, error: 'the sketch has no parameter "phi" (it has theta)' });
+    expect(parseOverrides("theta 30", ["theta"])).toEqual({ ok: false, error: '"theta 30" should read name = value (e.g. theta = 30 deg)' });
+    expect(formatOverrides({ theta: "30 deg", Q: 2 })).toBe("theta = 30 deg; Q = 2");
+  });
+  it("group factors", () => {
+    expect(parseFactors("dead 1.2, flow × 1.5, test pressure 1.1")).toEqual({ ok: true, value: { dead: 1.2, flow: 1.5, "test pressure": 1.1 } });
+    expect(parseFactors("dead").ok).toBe(false);
+    expect(formatFactors({ dead: 1.2, flow: 1.5 })).toBe("dead 1.2, flow 1.5");
+  });
+  it("combination terms", () => {
+    expect(parseTerms("1.2 normal + 1.5 test", ["normal", "test"])).toEqual({ ok: true, value: [{ case: "normal", factor: 1.2 }, { case: "test", factor: 1.5 }] });
+    expect(parseTerms("normal", ["normal"])).toEqual({ ok: true, value: [{ case: "normal", factor: 1 }] });
+    expect(parseTerms("1.2 nope", ["normal"])).toEqual({ ok: false, error: 'there is no case "nope" (cases: normal)' });
+    expect(formatTerms([{ case: "normal", factor: 1.2 }])).toBe("1.2 normal");
+  });
+  it("ids from names", () => {
+    expect(idFromName("Test pressure", [])).toBe("test-pressure");
+    expect(idFromName("Test pressure", ["test-pressure"])).toBe("test-pressure-2");
+  });
+});
