@@ -6,7 +6,7 @@ import { immer } from "zustand/middleware/immer";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
-import type { Command } from "./commands/define";
+import type { AnyCommand, Command } from "./commands/define";
 import { findElement, emptySketch, type ElementKind } from "./model/elements";
 import { DEFAULT_VIEW, type View } from "./geometry/view";
 
@@ -53,12 +53,13 @@ export interface EditorState {
   /** size of the canvas on screen, px (fit to view needs it) */
   viewport: { width: number; height: number };
 
-  apply: (cmd: Command<never> | Command<unknown>, opts?: { coalesce?: string }) => boolean;
+  /** Any command, whatever its arguments' type. */
+  apply: (cmd: AnyCommand, opts?: { coalesce?: string }) => boolean;
   undo: () => void;
   redo: () => void;
   beginGesture: (label?: string) => void;
   /** Replace the gesture's frame: the commands run on the sketch as it was when the gesture began. */
-  updateGesture: (cmds: Command<unknown> | Command<unknown>[]) => void;
+  updateGesture: (cmds: AnyCommand | readonly AnyCommand[]) => void;
   endGesture: () => void;
   cancelGesture: () => void;
   select: (ids: string[], mode?: "replace" | "toggle" | "add") => void;
@@ -99,7 +100,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
       apply: (cmd, opts) => {
         const s = get();
         if (s.gesture) s.cancelGesture();
-        const c = cmd as Command<unknown>;
+        const c = cmd as unknown as Command<unknown>;
         const before = get().sketch;
         const after = run(before, c);
         if (after === before) return false;
@@ -165,7 +166,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
       updateGesture: (cmds) => {
         const g = get().gesture;
         if (!g) return;
-        const list = Array.isArray(cmds) ? cmds : [cmds];
+        const list = (Array.isArray(cmds) ? cmds : [cmds]) as Command<unknown>[];
         let next = g.origin;
         for (const c of list) next = run(next, c);
         const label = list.length ? list[list.length - 1].def.label(list[list.length - 1].args, g.origin) : g.label;

@@ -22,6 +22,12 @@ export interface Command<A = unknown> {
   args: A;
 }
 
+/** Any command, whatever the type of its arguments (what the store accepts). */
+export interface AnyCommand {
+  def: CommandDef<never>;
+  args: unknown;
+}
+
 export type CommandFactory<A> = ((args: A) => Command<A>) & { def: CommandDef<A>; run: CommandDef<A>["run"] };
 
 export function defineCommand<A>(def: CommandDef<A>): CommandFactory<A> {

@@ -1,5 +1,5 @@
 // Every command the editor applies. Each is a pure (sketch, args) → sketch named for what the user does.
-export { defineCommand, runCommand, type Command, type CommandDef, type CommandFactory } from "./define";
+export { defineCommand, runCommand, type AnyCommand, type Command, type CommandDef, type CommandFactory } from "./define";
 export { addElement, attachToBody, deleteElements, duplicateElements, newIds, planDuplicate } from "./elements";
 export { moveElement, moveCentreOfGravity, shiftElement, bodyOf, type ValueOf, type MoveArgs } from "./move";
 export { rotateElement, reshapeBody, setOutline, insertCorner, removeCorner, type RotateArgs, type ReshapeArgs } from "./shape";

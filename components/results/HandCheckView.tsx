@@ -100,9 +100,9 @@ export function HandCheckView() {
     <div data-testid="hand-check">
       <div className="mb-2 flex flex-wrap items-end gap-2 text-[12px]">
         {bodies.length > 1 && (
-          <label className="flex flex-col">
+          <label className="flex w-40 flex-col">
             <span className="text-ink-soft">Body</span>
-            <select className={`${INPUT} w-40`} value={body.id} onChange={(e) => setBodyId(e.target.value)}>
+            <select className={INPUT} value={body.id} onChange={(e) => setBodyId(e.target.value)}>
               {bodies.map((b) => (
                 <option key={b.id} value={b.id}>
                   {b.label || b.id}
@@ -113,10 +113,10 @@ export function HandCheckView() {
         )}
         <span className="pb-1.5 text-ink-soft">Moments about P =</span>
         {(["x", "y"] as const).map((k, i) => (
-          <label key={k} className="flex flex-col">
+          <label key={k} className="flex w-28 flex-col">
             <span className="text-ink-faint">P{k} (m, or with a unit)</span>
             <input
-              className={`${INPUT} w-24`}
+              className={INPUT}
               aria-label={`Moment point ${k}`}
               data-testid={`moment-${k}`}
               value={draft ? draft[k] : shownText(about[i])}
