@@ -79,6 +79,27 @@ describe("review of a calculation in the browser", () => {
     expect(await thread.textContent()).toContain("on rear foot");
     expect(await thread.locator("[data-mention]").textContent()).toBe("@Orla Approver");
     await page.locator('[data-testid="review-drawing"] [data-thread]').first().waitFor();
+
+    // a point of the drawing: on the ground line between the two feet, a little below the body
+    await page.getByRole("button", { name: "Pin to the drawing" }).click();
+    const rear = (await page.locator('[data-testid="review-drawing"] g[data-id="rear"]').boundingBox())!;
+    const front = (await page.locator('[data-testid="review-drawing"] g[data-id="front"]').boundingBox())!;
+    await page.mouse.click((rear.x + rear.width / 2 + front.x + front.width / 2) / 2, Math.max(rear.y + rear.height, front.y + front.height) + 12);
+    const where = (await page.getByTestId("new-comment-pin").textContent()) ?? "";
+    const m = /^Pinned at \(([−-]?[\d.]+), ([−-]?[\d.]+)\) m$/.exec(where.replace(/−/g, "-"));
+    expect(m, where).not.toBeNull();
+    // the feet stand at x = 0.2 m and 2.8 m on the ground (y = 0): half way is 1.5 m (their labels,
+    // drawn to the right of each foot, shift the boxes a little), below is y < 0
+    expect(Number(m![1])).toBeGreaterThan(1.2);
+    expect(Number(m![1])).toBeLessThan(1.8);
+    expect(Number(m![2])).toBeLessThan(0);
+    await box.fill("Where does the drain channel run?");
+    await page.getByRole("button", { name: "Comment", exact: true }).click();
+    await page.getByTestId("thread-2").waitFor();
+    expect(await page.locator('[data-testid="review-drawing"] [data-thread]').count()).toBe(2);
+    // a pin on the drawing opens its thread
+    await page.locator('[data-testid="review-drawing"] [data-thread]').first().click();
+    await page.locator('[data-testid="thread-1"][data-selected]').waitFor();
     await shot(page, "review-02-pinned-comment");
 
     await takeStep(page, "return", "See the pinned comment on the rear foot.");
