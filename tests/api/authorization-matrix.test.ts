@@ -12,6 +12,7 @@ import { parseSketch } from "@/solver";
 import { call, ensureMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 import { fixture as sketchFile } from "./sketch-fixtures";
 import { REVIEW_ROWS } from "./matrix-review-rows";
+import { STUDIES_ROWS } from "./matrix-studies-rows";
 import { all, editors, MATRIX_CALLERS, members, ownersOnly, signedIn, type Caller, type Fixture, type Handler, type Row } from "./matrix-types";
 
 const METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
@@ -91,6 +92,7 @@ const ROWS: Record<string, Row> = {
   "GET /api/sketches/[id]/versions/[number]": { expect: members(200), run: (h, f, p) => call(h, { params: { id: f.sketchId, number: "1" }, cookie: p.cookie }) },
   "POST /api/sketches/[id]/fork": { expect: editors(201), run: (h, f, p) => call(h, { method: "POST", params: S(f), cookie: p.cookie, body: { workspaceId: f.ws } }) },
   ...REVIEW_ROWS,
+  ...STUDIES_ROWS,
 };
 
 describe("authorization matrix of every API route", () => {

@@ -1,0 +1,40 @@
+import { z } from "zod";
+import { getVersion } from "@/db/queries/versions";
+import { getVersionForCalcSheet } from "@/db/queries/review";
+import { route } from "@/lib/api";
+import { buildCalcSheet } from "@/lib/calcsheet/pdf";
+import { AppError } from "@/lib/errors";
+import { versionParams } from "@/lib/sketch-schemas";
+import { requireSketchRole } from "@/lib/sketches";
+
+export const dynamic = "force-dynamic";
+export const runtime = "nodejs";
+
+const query = z.object({ units: z.enum(["SI", "US"], { error: "units must be SI or US" }).default("SI") });
+
+/** The calc sheet of a saved version as a PDF, for anyone who may read the sketch. */
+export const GET = route({ params: versionParams, query }, async ({ params, query, user }) => {
+  await requireSketchRole(params.id, user.id, "sketch.read");
+  const version = await getVersion(params.id, params.number, user.id);
+  if (!version) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
+  const sheet = await getVersionForCalcSheet(version.id, user.id);
+  if (!sheet) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
+  const pdf = await buildCalcSheet({
+    workspace: sheet.workspaceName,
+    sketchTitle: sheet.sketchTitle,
+    version: sheet.versionNumber,
+    versionMessage: sheet.message ?? undefined,
+    savedAt: sheet.savedAt,
+    signoff: sheet.signOff.map((s) => ({ role: s.role, name: s.name, at: s.date })),
+    file: sheet.document,
+    units: query.units,
+  });
+  const name = `${sheet.sketchTitle.replace(/[^\w.-]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "sketch"}-v${sheet.versionNumber}-calc-sheet.pdf`;
+  return new Response(new Uint8Array(pdf), {
+    headers: {
+      "content-type": "application/pdf",
+      "content-disposition": `attachment; filename="${name}"`,
+      "cache-control": "private, no-store",
+    },
+  });
+});
