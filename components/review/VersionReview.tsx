@@ -101,6 +101,14 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
                 Compare with v{number - 1}
               </Link>
             ) : null}
+            <a
+              href={`/api/sketches/${sketchId}/versions/${number}/calc-sheet?units=SI`}
+              download
+              className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45"
+              title="A PDF of this version: title block, drawing, inputs, hand check, reactions per case, envelope, sweeps, method and cautions"
+            >
+              Calc sheet (PDF)
+            </a>
             <Link href={number === latest ? `/sketches/${sketchId}` : `/sketches/${sketchId}?version=${number}`} className="rounded-md bg-ink px-3 py-1.5 font-medium text-paper hover:bg-ink-soft">
               Open in the editor
             </Link>
