@@ -103,7 +103,7 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
       <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
         <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} />
         <div className="flex min-h-0 flex-1">
-          <aside className="flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper" aria-label="Add and elements">
+          <aside className="relative flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper" aria-label="Add and elements">
             <Tray />
             <Outline />
           </aside>
@@ -114,7 +114,7 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
             <StatusLine />
             <ResultsDock />
           </main>
-          <aside className="w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper" aria-label="Properties and parameters">
+          <aside className="relative w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper" aria-label="Properties and parameters">
             <PropertiesPanel />
           </aside>
         </div>

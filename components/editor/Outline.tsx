@@ -91,7 +91,7 @@ export function Outline() {
       {rows.length === 0 ? (
         <p className="mt-2 text-[12px] leading-snug text-ink-faint">Nothing drawn yet. Start with a body from “Add”, or open an example.</p>
       ) : (
-        <ul ref={listRef} className="mt-1 min-h-0 flex-1 overflow-auto pr-1" aria-label="Elements of the sketch">
+        <ul ref={listRef} className="relative mt-1 min-h-0 flex-1 overflow-auto pr-1" aria-label="Elements of the sketch">
           {rows.map((r, i) => {
             const { l } = r;
             const selected = selection.includes(l.el.id);

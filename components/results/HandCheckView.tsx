@@ -114,7 +114,9 @@ export function HandCheckView() {
         <span className="pb-1.5 text-ink-soft">Moments about P =</span>
         {(["x", "y"] as const).map((k, i) => (
           <label key={k} className="flex w-28 flex-col">
-            <span className="text-ink-faint">P{k} (m, or with a unit)</span>
+            <span className="text-ink-faint" title="metres, or a length with its unit (“4 ft”)">
+              P{k}
+            </span>
             <input
               className={INPUT}
               aria-label={`Moment point ${k}`}

@@ -18,7 +18,7 @@ export function ResultsDock() {
   const flows = useEditor((s) => s.sketch.ports.length > 0);
   return (
     // the studies need room: the dock grows while one of them is open
-    <section aria-label="Results" className={`flex shrink-0 border-t border-rule bg-paper ${tab === "cases" || tab === "sweep" ? "h-[440px]" : "h-[292px]"}`}>
+    <section aria-label="Results" className={`flex shrink-0 border-t border-rule bg-paper ${tab === "cases" || tab === "sweep" ? "h-[min(600px,64vh)]" : "h-[292px]"}`}>
       <div className="flex min-w-0 flex-1 flex-col px-3 pt-2">
         <StatusBanner />
         <div className="mt-2 flex items-center gap-1 border-b border-rule">
@@ -67,7 +67,7 @@ export function ResultsDock() {
             </div>
           )}
         </div>
-        <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} className="min-h-0 flex-1 overflow-auto py-2">
+        <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} className="relative min-h-0 flex-1 overflow-auto py-2">
           {tab === "reactions" ? <ReactionsTable sense={sense} /> : tab === "hand" ? <HandCheckView /> : tab === "cases" ? <CasesPanel /> : <SweepPanel />}
         </div>
       </div>
