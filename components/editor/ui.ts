@@ -7,3 +7,5 @@ export const BUTTON =
 export const ICON_BUTTON =
   "inline-flex h-7 min-w-7 items-center justify-center rounded px-1.5 text-[13px] text-ink-soft hover:bg-paper-deep hover:text-ink disabled:cursor-not-allowed disabled:opacity-35";
 export const LABEL = "text-[12px] font-medium text-ink-soft";
+export const PRIMARY_BUTTON =
+  "inline-flex h-7 items-center gap-1.5 rounded bg-ink px-3 text-[12.5px] font-medium text-paper hover:bg-ink-soft disabled:cursor-not-allowed disabled:opacity-40";

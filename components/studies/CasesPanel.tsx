@@ -11,7 +11,7 @@ import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import { useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
-import { BUTTON, HEADING, INPUT } from "@/components/editor/ui";
+import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms } from "./casesText";
 import { ReportTable } from "./ReportTable";
 
@@ -103,7 +103,8 @@ export function CasesPanel() {
   const nameOf = (id: string) => study?.result.runs.find((r) => r.id === id)?.name ?? id;
 
   return (
-    <div className="grid min-h-0 gap-4 lg:grid-cols-[minmax(22rem,1fr)_minmax(24rem,1.4fr)]" data-testid="cases-panel">
+    <div className="@container" data-testid="cases-panel">
+    <div className="grid min-h-0 gap-4 @5xl:grid-cols-[minmax(22rem,1fr)_minmax(24rem,1.4fr)]">
       <div className="min-w-0 space-y-3">
         <section aria-labelledby="cases-h">
           <div className="flex items-center gap-2">
@@ -194,7 +195,7 @@ export function CasesPanel() {
         </section>
 
         <div className="flex items-center gap-2">
-          <button type="button" className={`${BUTTON} border-ink bg-ink text-paper hover:bg-ink-soft hover:text-paper`} onClick={run} disabled={!!running}>
+          <button type="button" className={PRIMARY_BUTTON} onClick={run} disabled={!!running}>
             {cases.length || combinations.length ? "Run all cases" : "Run as drawn"}
           </button>
           {running && (
@@ -243,6 +244,7 @@ export function CasesPanel() {
           </div>
         )}
       </div>
+    </div>
     </div>
   );
 }

@@ -10,20 +10,25 @@ import { columnUnit } from "@/solver/report";
 import { convert, formatNumber } from "@/solver/units";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
+import type { SketchFile } from "@/solver/schema";
 import { useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import type { SweepData, SweepSpec } from "@/canvas/studies/run";
-import { BUTTON, HEADING, INPUT, LABEL } from "@/components/editor/ui";
+import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { SweepChart } from "./SweepChart";
 
 const COMPONENT_WORDS: Partial<Record<QuantityComponent, string>> = {
-  margin: "margin (n; below 0 once lifted or slack)",
+  margin: "margin",
   n: "normal force n",
   resultant: "resultant",
   fx: "Fx",
   fy: "Fy",
   m: "moment",
-  frictionMargin: "friction margin μ·n − |t|",
+  frictionMargin: "friction margin",
+};
+const COMPONENT_TITLES: Partial<Record<QuantityComponent, string>> = {
+  margin: "The normal force while bearing (taut); below zero once the contact lifts (the tie goes slack)",
+  frictionMargin: "μ·n − |t|: below zero where the contact needs more friction than it has",
 };
 
 export function SweepPanel() {
@@ -32,15 +37,16 @@ export function SweepPanel() {
   const units = useEditor((s) => s.units);
   const parameters = Object.keys(sketch.parameters ?? {});
   const choices = useMemo(() => {
-    const out: Array<{ spec: QuantitySpec; label: string }> = [];
+    const out: Array<{ spec: QuantitySpec; label: string; title: string }> = [];
+    const add = (s: SketchFile["supports"][number], component: QuantityComponent) =>
+      out.push({ spec: { support: s.id, component }, label: `${s.id}: ${COMPONENT_WORDS[component]}`, title: `${s.label ? `${s.label} — ` : ""}${COMPONENT_TITLES[component] ?? COMPONENT_WORDS[component]}` });
     for (const s of sketch.supports) {
-      const name = s.label ? `${s.id} (${s.label})` : s.id;
       if (s.kind === "contact" || s.kind === "tie") {
-        out.push({ spec: { support: s.id, component: "margin" }, label: `${name}: ${COMPONENT_WORDS.margin}` });
-        if (s.kind === "contact" && s.mu !== undefined) out.push({ spec: { support: s.id, component: "frictionMargin" }, label: `${name}: ${COMPONENT_WORDS.frictionMargin}` });
+        add(s, "margin");
+        if (s.kind === "contact" && s.mu !== undefined) add(s, "frictionMargin");
       } else {
-        out.push({ spec: { support: s.id, component: "resultant" }, label: `${name}: resultant` });
-        if (s.kind === "fixed") out.push({ spec: { support: s.id, component: "m" }, label: `${name}: moment` });
+        add(s, "resultant");
+        if (s.kind === "fixed") add(s, "m");
       }
     }
     return out;
@@ -52,7 +58,10 @@ export function SweepPanel() {
   const [to, setTo] = useState(String(saved?.to ?? (parameter === FLOW_FACTOR ? 2 : 90)));
   const [points, setPoints] = useState(String(saved?.points ?? 201));
   const [caseId, setCaseId] = useState<string>(saved?.case ?? "");
-  const [picked, setPicked] = useState<string[]>(() => (saved?.quantities ?? choices.map((c) => c.spec)).map((q) => `${q.support}:${q.component}`));
+  // by default the margins and resultants (friction margins on request)
+  const [picked, setPicked] = useState<string[]>(() =>
+    (saved?.quantities ?? choices.map((c) => c.spec).filter((q) => q.component !== "frictionMargin" && q.component !== "m")).map((q) => `${q.support}:${q.component}`),
+  );
   const [data, setData] = useState<SweepData | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
   const [cancel, setCancel] = useState<(() => void) | null>(null);
@@ -120,10 +129,10 @@ export function SweepPanel() {
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
 
   return (
-    <div className="grid min-h-0 gap-4 lg:grid-cols-[19rem_1fr]" data-testid="sweep-panel">
-      <form className="space-y-2" onSubmit={(e) => { e.preventDefault(); run(); }} aria-label="Sweep settings">
-        <h3 className={HEADING}>Sweep</h3>
-        <label className="block">
+    <div className="@container" data-testid="sweep-panel">
+    <div className="grid min-h-0 gap-4 @4xl:grid-cols-[19rem_1fr]">
+      <form className="grid grid-cols-2 gap-x-3 gap-y-2 @xl:grid-cols-4 @4xl:grid-cols-1" onSubmit={(e) => { e.preventDefault(); run(); }} aria-label="Sweep settings">
+        <label className="col-span-2 block @4xl:col-span-1">
           <span className={LABEL}>Parameter</span>
           <select className={INPUT} value={parameter} onChange={(e) => setParameter(e.target.value)} aria-label="Parameter to sweep">
             {parameters.map((p) => (
@@ -132,12 +141,12 @@ export function SweepPanel() {
             <option value={FLOW_FACTOR}>flow factor (every port’s ṁ and V × f)</option>
           </select>
         </label>
-        <div className="grid grid-cols-3 gap-1.5">
+        <div className="col-span-2 grid grid-cols-3 gap-1.5 @4xl:col-span-1">
           <label><span className={LABEL}>From</span><input className={INPUT} value={from} onChange={(e) => setFrom(e.target.value)} aria-label="From" /></label>
           <label><span className={LABEL}>To</span><input className={INPUT} value={to} onChange={(e) => setTo(e.target.value)} aria-label="To" /></label>
           <label><span className={LABEL}>Points</span><input className={INPUT} value={points} onChange={(e) => setPoints(e.target.value)} aria-label="Points" /></label>
         </div>
-        <p className="text-[11px] text-ink-faint">Values in the unit the parameter is written in{data?.unit ? ` (${data.unit})` : ""}.</p>
+        <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1">Values in the unit the parameter is written in{data?.unit ? ` (${data.unit})` : ""}; the flow factor is a plain number.</p>
         {(sketch.cases?.length ?? 0) > 0 && (
           <label className="block">
             <span className={LABEL}>Case</span>
@@ -147,12 +156,12 @@ export function SweepPanel() {
             </select>
           </label>
         )}
-        <fieldset className="max-h-28 overflow-auto rounded border border-rule-soft p-1.5">
+        <fieldset className="col-span-2 flex flex-wrap gap-x-3 gap-y-0.5 rounded border border-rule-soft p-1.5 @xl:col-span-4 @4xl:col-span-1">
           <legend className={LABEL}>Plot</legend>
           {choices.map((c) => {
             const key = `${c.spec.support}:${c.spec.component}`;
             return (
-              <label key={key} className="flex items-center gap-1.5 text-[12px] text-ink-soft">
+              <label key={key} title={c.title} className="flex items-center gap-1.5 text-[12px] text-ink-soft">
                 <input type="checkbox" checked={picked.includes(key)} onChange={(e) => setPicked(e.target.checked ? [...picked, key] : picked.filter((k) => k !== key))} />
                 {c.label}
               </label>
@@ -160,8 +169,8 @@ export function SweepPanel() {
           })}
           {!choices.length && <p className="text-[12px] text-ink-faint">Add supports to plot their reactions.</p>}
         </fieldset>
-        <div className="flex flex-wrap items-center gap-1.5">
-          <button type="submit" className={`${BUTTON} border-ink bg-ink text-paper hover:bg-ink-soft hover:text-paper`} disabled={progress !== null}>Run the sweep</button>
+        <div className="col-span-2 flex flex-wrap items-center gap-1.5 @xl:col-span-4 @4xl:col-span-1">
+          <button type="submit" className={PRIMARY_BUTTON} disabled={progress !== null}>Run the sweep</button>
           <button type="button" className={BUTTON} onClick={keep} title="Save this sweep in the sketch: the calc sheet plots it">Keep on the calc sheet</button>
           {progress !== null && (
             <>
@@ -170,7 +179,7 @@ export function SweepPanel() {
             </>
           )}
         </div>
-        {error && <p className="text-[12px] text-caution" role="alert">{error}</p>}
+        {error && <p className="col-span-2 text-[12px] text-caution @xl:col-span-4 @4xl:col-span-1" role="alert">{error}</p>}
       </form>
 
       <div className="min-w-0" aria-live="polite">
@@ -188,14 +197,14 @@ export function SweepPanel() {
               ))}
               {data.errors.length > 0 && <li className="text-caution">{data.errors.length} point(s) could not be solved (e.g. {data.errors[0].errors[0]?.path}: {data.errors[0].errors[0]?.message}).</li>}
             </ul>
-            <div className="mt-2 flex flex-wrap items-end gap-1.5 border-t border-rule-soft pt-2" role="group" aria-label="Limit finder">
-              <span className={LABEL}>At what {pLabel} does</span>
-              <select className={`${INPUT} w-auto`} value={limitQ} onChange={(e) => setLimitQ(Number(e.target.value))} aria-label="Quantity for the limit">
+            <div className="mt-2 flex flex-wrap items-center gap-1.5 border-t border-rule-soft pt-2" role="group" aria-label="Limit finder">
+              <span className={`${LABEL} whitespace-nowrap`}>At what {pLabel} does</span>
+              <select className={`${INPUT} !w-auto min-w-0`} value={limitQ} onChange={(e) => setLimitQ(Number(e.target.value))} aria-label="Quantity for the limit">
                 {quantities.map((q, i) => <option key={i} value={i}>{describeQuantity(q)}</option>)}
               </select>
               <span className={LABEL}>reach</span>
-              <input className={`${INPUT} w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
-              <span className={LABEL}>{forceUnit}?</span>
+              <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
+              <span className={`${LABEL} whitespace-nowrap`}>{forceUnit}?</span>
               <button type="button" className={BUTTON} onClick={findLimit}>Find</button>
             </div>
             {limit && (
@@ -208,6 +217,7 @@ export function SweepPanel() {
           </>
         )}
       </div>
+    </div>
     </div>
   );
 }

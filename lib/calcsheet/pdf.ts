@@ -1,7 +1,7 @@
 import "server-only";
 // The calc sheet: a PDF of one saved version, made on the server with pdfkit. The drawing is
 // the shared SVG renderer's; tables come from solver/report.ts, so they match the screen.
-import { createRequire } from "node:module";
+import { join } from "node:path";
 import PDFDocument from "pdfkit";
 import SVGtoPDF from "svg-to-pdfkit";
 import { renderSketchSvg } from "@/canvas/render/svg";
@@ -29,9 +29,11 @@ import {
 } from "@/solver";
 import { lineChartSvg } from "./chart";
 
-const require = createRequire(import.meta.url);
-const FONT_REGULAR = require.resolve("@expo-google-fonts/inter/400Regular/Inter_400Regular.ttf");
-const FONT_SEMIBOLD = require.resolve("@expo-google-fonts/inter/600SemiBold/Inter_600SemiBold.ttf");
+// TrueType files (pdfkit cannot subset the web fonts' WOFF2), read from the installed package at
+// run time: the bundler must not try to bundle a font file.
+const FONT_DIR = join(process.cwd(), "node_modules", "@expo-google-fonts", "inter");
+const FONT_REGULAR = join(FONT_DIR, "400Regular", "Inter_400Regular.ttf");
+const FONT_SEMIBOLD = join(FONT_DIR, "600SemiBold", "Inter_600SemiBold.ttf");
 
 export interface SignoffEntry {
   role: "prepared" | "checked" | "approved";
