@@ -220,7 +220,32 @@ export class ExpressionError extends Error {}
  * Parse and check an expression once. Unknown names are errors found in the parse tree;
  * `parameterNames` are the names that may be read.
  */
+/** Compiled expressions by text and the parameter names they may read: a live editor parses the
+ *  same sketch on every change, and most of its expressions have not changed. */
+const compiled = new Map<string, CompiledExpression | ExpressionError>();
+const CACHE_LIMIT = 5000;
+
 export function compileExpression(text: string, parameterNames: ReadonlySet<string>): CompiledExpression {
+  const key = `${text}\u0000${[...parameterNames].sort().join(",")}`;
+  const hit = compiled.get(key);
+  if (hit instanceof ExpressionError) throw hit;
+  if (hit) return hit;
+  try {
+    const out = compileUncached(text, parameterNames);
+    remember(key, out);
+    return out;
+  } catch (err) {
+    if (err instanceof ExpressionError) remember(key, err);
+    throw err;
+  }
+}
+
+function remember(key: string, value: CompiledExpression | ExpressionError) {
+  if (compiled.size >= CACHE_LIMIT) compiled.delete(compiled.keys().next().value!);
+  compiled.set(key, value);
+}
+
+function compileUncached(text: string, parameterNames: ReadonlySet<string>): CompiledExpression {
   let node: MathNode;
   const source = normaliseExpressionText(text);
   try {
@@ -307,11 +332,20 @@ function describeDimension(u: Unit): string {
   return "in other units";
 }
 
-/** The value of a parameter as written by the user: its number in its own units. */
+/** The value of a parameter as written by the user: its number in its own units. A result in
+ *  tangled units (√(p/ρ) gives bar^0.5 m^1.5/kg^0.5) is shown in the SI unit of its kind (m/s). */
 export function describeValue(value: MathValue): { value: number; unit: string; si: number } {
   if (typeof value === "number") return { value, unit: "", si: value };
-  const unit = value.formatUnits();
+  let unit = value.formatUnits();
   const si = value.toSI();
+  if (/\^[0-9.]*\.|\^0\./.test(unit) || unit.split(/[ */]/).filter(Boolean).length > 3) {
+    for (const [kind, target] of targetUnits) {
+      if (value.equalBase(target)) {
+        unit = FIELD_UNITS[kind];
+        break;
+      }
+    }
+  }
   return { value: value.toNumeric(unit) as number, unit, si: si.toNumeric() as number };
 }
 

@@ -126,3 +126,21 @@ describe("parameters", () => {
     }
   });
 });
+
+describe("compiled expressions are kept", () => {
+  it("the same text and names give the same compiled expression; other names compile anew", () => {
+    const a = compileExpression("rho * A * V", new Set(["rho", "A", "V"]));
+    const b = compileExpression("rho * A * V", new Set(["V", "A", "rho"]));
+    expect(b).toBe(a);
+    expect(() => compileExpression("rho * A * V", new Set(["rho"]))).toThrow(/unknown name "A"/);
+    // an error is kept too, and thrown again
+    expect(() => compileExpression("2 *", new Set())).toThrow(/cannot read/);
+    expect(() => compileExpression("2 *", new Set())).toThrow(/cannot read/);
+  });
+
+  it("a parameter in tangled units is shown in the SI unit of its kind", () => {
+    const p = parseSketch(sketch({ parameters: { P: "5 bar", rho: "998 kg/m^3", V: "sqrt(2 * P / rho)" } }));
+    expect(p.parameterValues.V).toEqual({ value: expect.closeTo(Math.sqrt((2 * 5e5) / 998), 12), unit: "m/s", si: expect.closeTo(Math.sqrt((2 * 5e5) / 998), 12) });
+    expect(p.parameterValues.P).toEqual({ value: 5, unit: "bar", si: 500000 });
+  });
+});
