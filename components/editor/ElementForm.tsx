@@ -198,6 +198,15 @@ export function ElementForm({ id }: { id: string }) {
       {kind === "force" && <ForceFields id={id} el={record} commit={commit} />}
       {(kind === "inlet" || kind === "outlet") && <PortFlow id={id} />}
       {kind === "body" && <Corners id={id} body={el as BodyEl} />}
+      {group !== "supports" && (
+        <TextField
+          label={kind === "body" ? "Load group of its weight" : "Load group"}
+          value={(el as { group?: string }).group}
+          placeholder={kind === "body" ? "dead" : group === "loads" ? "loads" : "flow"}
+          testId="field-group"
+          onCommit={(v, c) => commit(["group"], v.trim() || undefined, c)}
+        />
+      )}
       {advanced.length > 0 && (
         <details className="rounded border border-rule-soft px-2 py-1">
           <summary className="cursor-pointer text-[12px] text-ink-soft">Stiffness (indeterminate supports)</summary>

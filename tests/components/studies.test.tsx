@@ -1,7 +1,7 @@
 // The Cases and Sweep tabs: the case table equals the cases solved one by one, with the governing
 // case marked; a sweep plots and marks the crossing; the limit finder answers in words.
 import { readFileSync } from "node:fs";
-import { render, screen, within } from "@testing-library/react";
+import { render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { parseSketch, solve, solveCases } from "@/solver/index";
@@ -105,5 +105,37 @@ describe("Sweep tab", () => {
     await user.click(screen.getByRole("button", { name: "Find" }));
     const answer = await screen.findByTestId("limit-answer");
     expect(answer.textContent).toMatch(/^The margin at jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
+  });
+});
+
+describe("load groups in the properties", () => {
+  it("puts a load into a group that a case's factor then scales", async () => {
+    const { renderEditor, storedSketch } = await import("./editor-helpers");
+    const { emptySketch } = await import("@/canvas/model/elements");
+    const { newBody } = await import("@/canvas/model/factory");
+    const user = userEvent.setup();
+    const beam = {
+      ...emptySketch("Beam"),
+      bodies: [newBody("b1", [[0, 0], [4, 0], [4, 0.5], [0, 0.5]], "Beam")],
+      supports: [
+        { id: "s1", body: "b1", kind: "pin" as const, at: [0, 0] as [number, number] },
+        { id: "s2", body: "b1", kind: "roller" as const, at: [4, 0] as [number, number], angle: 90 },
+      ],
+      loads: [{ id: "l1", body: "b1", kind: "force" as const, at: [2, 0.5] as [number, number], magnitude: "10 kN", angle: -90 }],
+    };
+    const { mem } = await renderEditor(beam);
+    await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Point force l1/ }));
+    const field = within(screen.getByTestId("element-form")).getByLabelText("Load group");
+    await user.type(field, "snow");
+    await user.tab();
+    await waitFor(() => expect((storedSketch(mem)!.loads[0] as { group?: string }).group).toBe("snow"));
+    // a case with "snow 1.5" scales that load: the roller carries half of 15 kN and half the weight
+    const doc = { ...storedSketch(mem)!, cases: [{ id: "c", name: "Snow", factors: { snow: 1.5 } }] };
+    const p = parseSketch(doc);
+    if (!p.ok) throw new Error(JSON.stringify(p.errors));
+    const run = solveCases(p.file).runs[0];
+    if (!run.ok) throw new Error();
+    const W = p.sketch.bodies[0].mass * p.sketch.gravity;
+    expect(run.result.reactions.s2.fy).toBeCloseTo(7500 + W / 2, 9);
   });
 });
