@@ -1,9 +1,10 @@
 // npm run bench: solver speed (median µs per solve for 10, 100 and 1000 elements; a 1000-point
 // sweep of a 20-element sketch) and the gzip size mathjs adds to the client bundle.
-// Then the browser benchmarks of the editor, when present (scripts/bench-canvas.ts).
+// Then the browser benchmarks: the editor's drag (scripts/bench-canvas.ts) and the studies' sweep
+// plot (scripts/bench-studies.ts). `--solver-only` skips them.
 import { buildSync } from "esbuild";
-import { existsSync } from "node:fs";
 import { spawnSync } from "node:child_process";
+import { loadavg } from "node:os";
 import { gzipSync } from "node:zlib";
 import { linspace, parseSketch, solve, solveSweep, type SketchFileInput } from "../solver";
 
@@ -76,18 +77,23 @@ function gzipBytes(entry: string): number {
   return gzipSync(out.outputFiles[0].contents).length;
 }
 
-if (process.argv[1]?.endsWith("bench.ts")) main();
 function main() {
-const results: Record<string, string> = {};
-for (const n of [10, 100, 1000]) results[`solve, ${n} elements (median µs)`] = benchSolve(n).toFixed(1);
-results["solveSweep, 1000 points of a 20-element sketch (median ms)"] = benchSweep().toFixed(1);
-results["mathjs parts used, minified + gzip (kB)"] = (gzipBytes("solver/expressions.ts") / 1024).toFixed(1);
-results["whole solver incl. mathjs and zod, minified + gzip (kB)"] = (gzipBytes("solver/index.ts") / 1024).toFixed(1);
-console.log("\nSolver benchmarks (this machine):");
-for (const [k, v] of Object.entries(results)) console.log(`  ${k.padEnd(62)} ${v}`);
+  const results: Record<string, string> = {};
+  for (const n of [10, 100, 1000]) results[`solve, ${n} elements (median µs)`] = benchSolve(n).toFixed(1);
+  results["solveSweep, 1000 points of a 20-element sketch (median ms)"] = benchSweep().toFixed(1);
+  results["mathjs parts used, minified + gzip (kB)"] = (gzipBytes("solver/expressions.ts") / 1024).toFixed(1);
+  results["whole solver incl. mathjs and zod, minified + gzip (kB)"] = (gzipBytes("solver/index.ts") / 1024).toFixed(1);
+  const load = loadavg()[0];
+  console.log(`\nSolver benchmarks (this machine, load average ${load.toFixed(1)}):`);
+  for (const [k, v] of Object.entries(results)) console.log(`  ${k.padEnd(62)} ${v}`);
 
-if (existsSync("scripts/bench-canvas.ts") && !process.argv.includes("--solver-only")) {
-  const r = spawnSync(process.execPath, ["node_modules/.bin/tsx", "scripts/bench-canvas.ts"], { stdio: "inherit" });
-  process.exitCode = r.status ?? 1;
+  if (!process.argv.includes("--solver-only")) {
+    // the browser benchmarks: the editor's drag, then the studies' sweep
+    for (const script of ["scripts/bench-canvas.ts", "scripts/bench-studies.ts"]) {
+      const r = spawnSync(process.execPath, ["node_modules/.bin/tsx", script], { stdio: "inherit" });
+      if (r.status !== 0) process.exitCode = r.status ?? 1;
+    }
+  }
 }
-}
+
+if (process.argv[1]?.endsWith("bench.ts")) main();

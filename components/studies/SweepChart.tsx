@@ -10,7 +10,7 @@ import type { SweepData } from "@/canvas/studies/run";
 const COLORS = ["#1f5f7a", "#b4462b", "#1d2329", "#8a6212", "#4d7a3a", "#6b4c9a"];
 const DASHES = ["", "6 3", "2 3", "8 3 2 3", "1 2", "10 4"];
 
-export function SweepChart({ data, units, parameterLabel, limit }: { data: SweepData; units: UnitSystem; parameterLabel: string; limit: { x: number; label: string } | null }) {
+export function SweepChart({ data, units, parameterLabel, limit, run }: { data: SweepData; units: UnitSystem; parameterLabel: string; limit: { x: number; label: string } | null; run: number }) {
   const unit = columnUnit("force", units);
   const k = convert(1, "force", units, unit).value;
   const rows = data.xs.map((x, i) => {
@@ -29,7 +29,7 @@ export function SweepChart({ data, units, parameterLabel, limit }: { data: Sweep
     return { ...c, x: c.between[0] + ((c.between[1] - c.between[0]) * a) / (a - b) };
   });
   return (
-    <figure className="h-56 w-full" data-testid="sweep-chart" aria-label={`Reactions and margins against ${parameterLabel}`}>
+    <figure className="h-56 w-full" data-testid="sweep-chart" data-run={run} aria-label={`Reactions and margins against ${parameterLabel}`}>
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={rows} margin={{ top: 6, right: 16, bottom: 4, left: 4 }}>
           <CartesianGrid stroke="#e2dccf" strokeDasharray="0" />

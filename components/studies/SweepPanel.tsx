@@ -63,6 +63,7 @@ export function SweepPanel() {
     (saved?.quantities ?? choices.map((c) => c.spec).filter((q) => q.component !== "frictionMargin" && q.component !== "m")).map((q) => `${q.support}:${q.component}`),
   );
   const [data, setData] = useState<SweepData | null>(null);
+  const [runs, setRuns] = useState(0);
   const [progress, setProgress] = useState<number | null>(null);
   const [cancel, setCancel] = useState<(() => void) | null>(null);
   const [error, setError] = useState<string | null>(null);
@@ -93,10 +94,10 @@ export function SweepPanel() {
     setProgress(0);
     const job = runner.current!.run({ kind: "sweep", text: JSON.stringify(sketch), spec: s }, setProgress);
     setCancel(() => job.cancel);
-    performance.mark("sweep-run");
     job.promise
       .then((d) => {
         setData(d);
+        setRuns((n) => n + 1);
         setLimit(null);
       })
       .catch((err) => setError(err instanceof CancelledError ? "Stopped: nothing plotted." : err.message))
@@ -187,7 +188,7 @@ export function SweepPanel() {
           <p className="text-[12.5px] text-ink-faint">Run a sweep to plot each reaction and margin against {pLabel}. Where a margin crosses zero a contact lifts, a tie goes slack or friction is used up: those points are marked.</p>
         ) : (
           <>
-            <SweepChart data={data} units={units} parameterLabel={pLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target} ${forceUnit}` } : null} />
+            <SweepChart data={data} run={runs} units={units} parameterLabel={pLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target} ${forceUnit}` } : null} />
             <ul className="mt-1 space-y-0.5 text-[12px]" data-testid="crossings">
               {data.crossings.length === 0 && <li className="text-ink-faint">No margin crosses zero in this range.</li>}
               {data.crossings.map((c, i) => (
