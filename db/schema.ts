@@ -5,6 +5,7 @@ import { auditEvent } from "./tables/audit";
 import { invitation, membership, workspace } from "./tables/workspaces";
 import { sketch, sketchVersion } from "./tables/sketches";
 import { comment, signOff } from "./tables/review";
+import { upload } from "./tables/uploads";
 
 export * from "./tables/auth";
 export * from "./tables/workspaces";
@@ -13,6 +14,7 @@ export * from "./tables/dev-mail";
 export * from "./tables/sketches";
 export * from "./tables/review-enums";
 export * from "./tables/review";
+export * from "./tables/uploads";
 
 export const userRelations = relations(user, ({ many }) => ({
   sessions: many(session),
@@ -65,9 +67,16 @@ export const signOffRelations = relations(signOff, ({ one }) => ({
   version: one(sketchVersion, { fields: [signOff.versionId], references: [sketchVersion.id] }),
 }));
 
-export const commentRelations = relations(comment, ({ one }) => ({
+export const commentRelations = relations(comment, ({ one, many }) => ({
   version: one(sketchVersion, { fields: [comment.versionId], references: [sketchVersion.id] }),
   author: one(user, { fields: [comment.authorId], references: [user.id] }),
+  attachments: many(upload),
+}));
+
+export const uploadRelations = relations(upload, ({ one }) => ({
+  workspace: one(workspace, { fields: [upload.workspaceId], references: [workspace.id] }),
+  uploader: one(user, { fields: [upload.uploadedBy], references: [user.id] }),
+  comment: one(comment, { fields: [upload.commentId], references: [comment.id] }),
 }));
 
 export type User = typeof user.$inferSelect;
@@ -79,3 +88,4 @@ export type Sketch = typeof sketch.$inferSelect;
 export type SketchVersion = typeof sketchVersion.$inferSelect;
 export type SignOff = typeof signOff.$inferSelect;
 export type Comment = typeof comment.$inferSelect;
+export type Upload = typeof upload.$inferSelect;

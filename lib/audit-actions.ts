@@ -25,6 +25,8 @@ export const AUDIT_ACTIONS = {
   "signoff.return": "returned",
   "signoff.approve": "approved",
   "signoff.withdraw": "withdrew the approval of",
+  "upload.create": "uploaded a file to",
+  "upload.delete": "deleted an uploaded file from",
 } as const;
 
 export type AuditAction = keyof typeof AUDIT_ACTIONS;

@@ -38,6 +38,12 @@ export const PERMISSIONS = {
   "version.check": ["owner", "checker"],
   "version.approve": ["owner"],
   "version.withdraw": ["owner"],
+  /** upload a drawing or photo to trace over (an underlay) */
+  "upload.underlay": ["owner", "editor"],
+  /** attach images and PDFs to your comments */
+  "upload.attach": ["owner", "editor", "checker"],
+  /** fetch uploaded files and their thumbnails */
+  "upload.read": ["owner", "editor", "checker", "viewer"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -7,6 +7,8 @@ import { AppError } from "./errors";
 import { can, type Permission, type Role } from "./roles";
 import { emptySketchFile, summarizeSolve, type ParsedSketch } from "./sketch-document";
 import { parseSketch } from "@/solver";
+import { deleteObjectsQuietly } from "./uploads/objects";
+import { assertUnderlayIn, copyUnderlayForFork, keysOfSketch, type UnderlayCopy } from "./uploads/underlay";
 
 type Actor = { id: string; email: string };
 
@@ -59,6 +61,7 @@ export async function createSketch(
     const role = await lockRole(tx, workspaceId, actor.id);
     if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.");
     if (!can(role, "sketch.create")) throw new AppError("forbidden");
+    await assertUnderlayIn(workspaceId, parsed.file, tx);
     const made = await insertSketchWithFirstVersion(tx, {
       ...versionContent(parsed, input.message ?? "First version"),
       workspaceId,
@@ -98,7 +101,8 @@ function isUniqueViolation(err: unknown): boolean {
 
 /** Save the next version on top of `baseVersion`; 409 with the latest version when someone saved since. */
 export async function saveVersion(sketchId: string, actor: Actor, input: { baseVersion: number; message?: string; document: ParsedSketch }) {
-  await requireSketchRole(sketchId, actor.id, "version.save");
+  const access = await requireSketchRole(sketchId, actor.id, "version.save");
+  await assertUnderlayIn(access.workspaceId, input.document.file);
   const content = versionContent(input.document, input.message);
   try {
     return await db.transaction(async (tx) => {
@@ -154,7 +158,10 @@ export async function editSketch(sketchId: string, actor: Actor, input: { title?
 /** Delete a sketch with all its versions (owners). */
 export async function removeSketch(sketchId: string, actor: Actor) {
   await requireSketchRole(sketchId, actor.id, "sketch.delete");
-  return db.transaction(async (tx) => {
+  let keys: string[] = [];
+  const out = await db.transaction(async (tx) => {
+    // its files' rows go with it (cascade); their objects are deleted once that commits
+    keys = await keysOfSketch(sketchId, tx);
     const row = await deleteSketch({ sketchId, actorId: actor.id }, tx);
     if (!row) throw new AppError("forbidden");
     await recordAudit(
@@ -163,6 +170,8 @@ export async function removeSketch(sketchId: string, actor: Actor) {
     );
     return { id: row.id, deleted: true };
   });
+  await deleteObjectsQuietly(keys);
+  return out;
 }
 
 /**
@@ -174,13 +183,32 @@ export async function forkSketch(sourceSketchId: string, actor: Actor, input: { 
   const number = input.version ?? source.latestVersion;
   const version = await getVersion(sourceSketchId, number, actor.id);
   if (!version) throw new AppError("not_found", `This sketch has no version ${number}.`, { fields: [{ path: "version", message: `There is no version ${number}.` }] });
+  // a fork into another workspace takes its own copy of the underlay's file
+  const copy = await copyUnderlayForFork(version.document, source.workspaceId, input.workspaceId);
+  try {
+    return await forkInTransaction(sourceSketchId, source, version, number, copy, actor, input);
+  } catch (err) {
+    await copy.discard();
+    throw err;
+  }
+}
+
+function forkInTransaction(
+  sourceSketchId: string,
+  source: Awaited<ReturnType<typeof requireSketchRole>>,
+  version: NonNullable<Awaited<ReturnType<typeof getVersion>>>,
+  number: number,
+  copy: UnderlayCopy,
+  actor: Actor,
+  input: { workspaceId: string; title?: string },
+) {
   return db.transaction(async (tx) => {
     const role = await lockRole(tx, input.workspaceId, actor.id);
     if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.", { fields: [{ path: "workspaceId", message: "You are not a member of that workspace." }] });
     if (!can(role, "sketch.fork")) throw new AppError("forbidden", "Your role in that workspace does not allow forking into it.");
     const title = input.title ?? `${source.title} (fork)`.slice(0, 120);
     const made = await insertSketchWithFirstVersion(tx, {
-      document: version.document,
+      document: copy.document,
       formatVersion: version.formatVersion,
       summary: version.summary,
       message: `Forked from “${source.title}” v${number}`,
@@ -190,6 +218,7 @@ export async function forkSketch(sourceSketchId: string, actor: Actor, input: { 
       forkedFromVersionId: version.id,
       forkedFromTitle: source.title,
     });
+    await copy.insert(tx, made.sketch.id, actor.id);
     await recordAudit(
       {
         action: "sketch.fork",

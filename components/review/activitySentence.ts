@@ -37,6 +37,10 @@ export function activitySentence(e: ActivityEvent): string {
       return `approved ${n(d.number)}${quote(d.note)}`;
     case "signoff.withdraw":
       return `withdrew the approval of ${n(d.number)}${quote(d.note)}`;
+    case "upload.create":
+      return d.purpose === "attachment" ? `attached “${s(d.name) || "a file"}” to a comment on ${n(d.number)}` : `uploaded “${s(d.name) || "a drawing"}” to trace over`;
+    case "upload.delete":
+      return d.purpose === "attachment" ? `removed the attachment “${s(d.name) || "a file"}” from a comment` : `deleted the uploaded drawing “${s(d.name) || "a drawing"}”`;
     default:
       return e.action;
   }

@@ -45,6 +45,9 @@ export function auditSentence(e: AuditEntry): string {
       return str(d.from) && str(d.from) !== str(d.title) ? `renamed the sketch "${str(d.from)}" to "${str(d.title)}"` : `edited the details of "${str(d.title)}"`;
     case "sketch.delete":
       return `deleted the sketch "${str(d.title)}" with its ${num(d.versions)} version${d.versions === 1 ? "" : "s"}`;
+    case "upload.create":
+    case "upload.delete":
+      return `${auditActionLabel(e.action)} "${str(d.title)}": ${str(d.name) || "a file"} (${d.purpose === "attachment" ? "a comment's attachment" : "an underlay"})`;
     default:
       if (e.action.startsWith("signoff.") || e.action.startsWith("comment.")) {
         return `${auditActionLabel(e.action)} v${num(d.number)} of "${str(d.title)}"${d.note ? `: ${str(d.note)}` : ""}`;

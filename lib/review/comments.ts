@@ -4,6 +4,7 @@ import { getCommentAccess, insertComment, listVersionComments, setThreadResolved
 import { getVersionAccess } from "@/db/queries/review";
 import { lockRole } from "@/db/queries/sketches";
 import { getVersion } from "@/db/queries/versions";
+import { attachmentsOf, commentAttachmentKeys, deleteCommentAttachments } from "@/db/queries/uploads";
 import type { CommentPin } from "@/db/schema";
 import type { DbOrTx } from "@/db/queries/tx";
 import { recordAudit } from "../audit";
@@ -13,6 +14,8 @@ import { can } from "../roles";
 import { mentionedIds } from "./comment-text";
 import { mentionMail } from "./mail";
 import { versionUrl } from "./signoff";
+import { deleteObjectsQuietly } from "../uploads/objects";
+import { uploadView, type UploadView } from "../uploads/service";
 
 type Actor = { id: string; email: string; name: string };
 
@@ -20,7 +23,7 @@ const NO_VERSION = "No such version, or you are not a member of its workspace.";
 const NO_COMMENT = "No such comment, or you are not a member of its workspace.";
 const LOCKED = "This version is approved: it takes no new comments or changes to them. Comment on a newer version, or ask an owner to withdraw the approval.";
 
-export type CommentView = Omit<CommentRow, "mentions" | "parentId" | "pin" | "resolvedAt" | "resolvedByName"> & { mentions: Array<{ id: string; name: string }>; deleted: boolean };
+export type CommentView = Omit<CommentRow, "mentions" | "parentId" | "pin" | "resolvedAt" | "resolvedByName"> & { mentions: Array<{ id: string; name: string }>; deleted: boolean; attachments: UploadView[] };
 export type Thread = { id: string; pin: CommentPin | null; resolvedAt: Date | null; resolvedByName: string | null; comments: CommentView[] };
 
 /** A version's comments as threads (first comment, then replies), with the members who can be mentioned. */
@@ -29,6 +32,8 @@ export async function readComments(sketchId: string, number: number, viewerId: s
   if (!access || !access.role) throw new AppError("not_found", NO_VERSION);
   const [rows, contacts] = await Promise.all([listVersionComments(access.versionId, viewerId), workspaceContacts(access.workspaceId)]);
   const names = new Map(contacts.map((c) => [c.id, c.name]));
+  const files = new Map<string, UploadView[]>();
+  for (const u of await attachmentsOf(rows.filter((r) => !r.deletedAt).map((r) => r.id), viewerId)) files.set(u.commentId!, [...(files.get(u.commentId!) ?? []), uploadView(u)]);
   const view = (r: CommentRow): CommentView => ({
     id: r.id,
     authorId: r.authorId,
@@ -39,6 +44,7 @@ export async function readComments(sketchId: string, number: number, viewerId: s
     deleted: r.deletedAt !== null,
     createdAt: r.createdAt,
     mentions: r.mentions.filter((id) => names.has(id)).map((id) => ({ id, name: names.get(id)! })),
+    attachments: r.deletedAt ? [] : (files.get(r.id) ?? []),
   });
   const threads: Thread[] = rows
     .filter((r) => r.parentId === null)
@@ -126,13 +132,18 @@ export async function editComment(commentId: string, actor: Actor, body: string)
   return { id: commentId, edited: true };
 }
 
+/** Delete your own comment; its attached files go with its text. */
 export async function deleteComment(commentId: string, actor: Actor) {
-  return db.transaction(async (tx) => {
+  const out = await db.transaction(async (tx) => {
     const c = await writable(commentId, actor, tx);
     if (c.authorId !== actor.id) throw new AppError("forbidden", "Only its author may delete a comment.");
     await softDeleteComment(tx, { commentId, authorId: actor.id });
-    return { id: commentId, deleted: true };
+    const keys = await commentAttachmentKeys(commentId, tx);
+    await deleteCommentAttachments(tx, commentId);
+    return { keys };
   });
+  await deleteObjectsQuietly(out.keys);
+  return { id: commentId, deleted: true };
 }
 
 /** Resolve or reopen a thread: its author, or anyone whose role may resolve threads. */

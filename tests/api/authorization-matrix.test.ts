@@ -13,6 +13,7 @@ import { call, ensureMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueE
 import { fixture as sketchFile } from "./sketch-fixtures";
 import { REVIEW_ROWS } from "./matrix-review-rows";
 import { STUDIES_ROWS } from "./matrix-studies-rows";
+import { UPLOADS_ROWS } from "./matrix-uploads-rows";
 import { all, editors, MATRIX_CALLERS, members, ownersOnly, signedIn, type Caller, type Fixture, type Handler, type Row } from "./matrix-types";
 
 const METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
@@ -93,6 +94,7 @@ const ROWS: Record<string, Row> = {
   "POST /api/sketches/[id]/fork": { expect: editors(201), run: (h, f, p) => call(h, { method: "POST", params: S(f), cookie: p.cookie, body: { workspaceId: f.ws } }) },
   ...REVIEW_ROWS,
   ...STUDIES_ROWS,
+  ...UPLOADS_ROWS,
 };
 
 describe("authorization matrix of every API route", () => {

@@ -65,7 +65,7 @@ describe("role table", () => {
   it("gives owners every permission and viewers only reading", () => {
     for (const p of Object.keys(PERMISSIONS) as (keyof typeof PERMISSIONS)[]) expect(can("owner", p)).toBe(true);
     const viewer = (Object.keys(PERMISSIONS) as (keyof typeof PERMISSIONS)[]).filter((p) => can("viewer", p));
-    expect(viewer.sort()).toEqual(["members.list", "sketch.read", "workspace.read"]);
+    expect(viewer.sort()).toEqual(["members.list", "sketch.read", "upload.read", "workspace.read"]);
     expect(can("checker", "version.check")).toBe(true);
     expect(can("editor", "version.check")).toBe(false);
     expect(can(null, "workspace.read")).toBe(false);

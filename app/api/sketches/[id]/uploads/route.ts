@@ -1,0 +1,12 @@
+import { json, route } from "@/lib/api";
+import { sketchParams } from "@/lib/sketch-schemas";
+import { readUploadBody } from "@/lib/uploads/request";
+import { createUnderlay } from "@/lib/uploads/service";
+
+export const dynamic = "force-dynamic";
+
+/**
+ * Upload a drawing, photo or PDF to trace over in this sketch (editors, owners): multipart/form-data
+ * with a `file` field, or the raw bytes (`?name=` for the display name). 10 MB at most.
+ */
+export const POST = route({ params: sketchParams }, async ({ req, params, user }) => json({ upload: await createUnderlay(params.id, user, () => readUploadBody(req)) }, 201));
