@@ -4,7 +4,8 @@
 // P is picked on the canvas (the "Pick on the drawing" button) or typed.
 import { useDeferredValue, useMemo, useState } from "react";
 import { evaluateToNumber } from "@/solver/expressions";
-import { columnUnit } from "@/solver/report";
+import { columnUnit, handCheckTable } from "@/solver/report";
+import { downloadCsv } from "@/components/studies/csv";
 import { convert, formatNumber, type UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
@@ -141,6 +142,14 @@ export function HandCheckView() {
           </button>
         )}
         {error && <span className="pb-1.5 text-caution">⚠ {error}</span>}
+        <button
+          type="button"
+          className={`${BUTTON} ml-auto`}
+          aria-label="Download the hand check as CSV"
+          onClick={() => shown && downloadCsv(handCheckTable(shown, body.id, about, units), `hand-check-${body.id}`)}
+        >
+          CSV
+        </button>
       </div>
       <p className="mb-2 text-[11.5px] text-ink-faint">
         Steady flow through a control volume fixed to the body: ΣF = Σ(ṁV)out − Σ(ṁV)in and ΣM_P = Σ r × ṁV. Forces in x and y, moments counter-clockwise positive.

@@ -2,8 +2,10 @@
 // "Results", under the drawing: the status in words, the reactions (force on the body or load on
 // the support), the hand check, and the cautions and assumptions beside them.
 import { useState } from "react";
-import { useEditor } from "@/canvas/context";
+import { useAnalysis, useEditor } from "@/canvas/context";
 import { CasesPanel } from "@/components/studies/CasesPanel";
+import { downloadCsv } from "@/components/studies/csv";
+import { reactionTable } from "@/solver/report";
 import { SweepPanel } from "@/components/studies/SweepPanel";
 import { CautionsAside } from "./CautionsAside";
 import { HandCheckView } from "./HandCheckView";
@@ -45,6 +47,7 @@ export function ResultsDock() {
               </button>
             ))}
           </div>
+          {tab === "reactions" && <ReactionsCsv sense={sense} />}
           {tab === "reactions" && (
             <div role="radiogroup" aria-label="Show the reactions as" className="ml-auto flex items-center gap-0.5 pb-1 text-[12px]" data-testid="sense">
               {(
@@ -73,5 +76,22 @@ export function ResultsDock() {
       </div>
       <CautionsAside flows={flows} />
     </section>
+  );
+}
+
+/** The reactions as CSV, in the sense and units on screen. */
+function ReactionsCsv({ sense }: { sense: Sense }) {
+  const shown = useAnalysis((s) => s.shown);
+  const units = useEditor((s) => s.units);
+  return (
+    <button
+      type="button"
+      className="order-last ml-2 pb-1 text-[12px] text-ink-soft hover:text-ink disabled:opacity-40"
+      disabled={!shown}
+      aria-label="Download the reactions as CSV"
+      onClick={() => shown && downloadCsv(reactionTable(shown, units, { onSupport: sense === "support" }), sense === "support" ? "loads-on-supports" : "reactions")}
+    >
+      CSV
+    </button>
   );
 }

@@ -139,3 +139,26 @@ describe("load groups in the properties", () => {
     expect(run.result.reactions.s2.fy).toBeCloseTo(7500 + W / 2, 9);
   });
 });
+
+describe("CSV of the result tables", () => {
+  it("the reactions table downloads with units in its header and the sign of the chosen sense", async () => {
+    const user = userEvent.setup();
+    const blobs: Blob[] = [];
+    const orig = URL.createObjectURL;
+    URL.createObjectURL = ((b: Blob) => (blobs.push(b), "blob:x")) as typeof URL.createObjectURL;
+    try {
+      mount(load("thrust-stand-tips"));
+      await user.click(screen.getByRole("button", { name: "Download the reactions as CSV" }));
+      await user.click(screen.getByRole("radio", { name: "Load on the support" }));
+      await user.click(screen.getByRole("button", { name: "Download the reactions as CSV" }));
+    } finally {
+      URL.createObjectURL = orig;
+    }
+    const [onBody, onSupport] = await Promise.all(blobs.map((b) => b.text()));
+    expect(onBody.split("\r\n")[0]).toBe("Support,Kind,Fx (kN),Fy (kN),Resultant (kN),Direction (°),M (kN·m),Normal n (kN),Tangential t (kN),State,Margin (kN)");
+    const fxBody = Number(onBody.split("\r\n")[1].split(",")[2]);
+    const fxSupport = Number(onSupport.split("\r\n")[1].split(",")[2]);
+    expect(fxBody).toBeCloseTo(-2.2, 6);
+    expect(fxSupport).toBeCloseTo(2.2, 6);
+  });
+});
