@@ -22,6 +22,9 @@ export interface SaveOptions {
   message?: string;
 }
 
+/** An uploaded drawing to trace over, as the editor needs it. */
+export type UnderlayUpload = { id: string; width: number; height: number; name: string };
+
 export interface SketchPersistence {
   readonly kind: "scratch" | "saved";
   /** true: every change is kept as it happens (debounced); false: the user saves */
@@ -30,6 +33,11 @@ export interface SketchPersistence {
   describe(): string;
   load(): Promise<LoadOutcome>;
   save(sketch: SketchFile, opts?: SaveOptions): Promise<SaveOutcome>;
+  /**
+   * Upload a drawing, photo or PDF to trace over (saved sketches; it throws an Error whose
+   * message is for people). Absent: underlays need a saved sketch, and the editor says so.
+   */
+  uploadUnderlay?(file: File): Promise<UnderlayUpload>;
 }
 
 export const SCRATCH_KEY = "counterpoise:scratch-sketch:v1";

@@ -25,7 +25,9 @@ export type Tool =
   | { kind: "select" }
   | { kind: "place"; element: Exclude<ElementKind, "body">; friction?: boolean }
   | { kind: "body"; shape: "rectangle" | "polygon"; points: Vec2[] }
-  | { kind: "pick-point" };
+  | { kind: "pick-point" }
+  /** setting the underlay's scale: the marks clicked so far, in image pixels */
+  | { kind: "calibrate"; points: Vec2[] };
 
 interface Gesture {
   origin: SketchFile;
@@ -52,6 +54,8 @@ export interface EditorState {
   revision: number;
   /** size of the canvas on screen, px (fit to view needs it) */
   viewport: { width: number; height: number };
+  /** the caller's role may not change this sketch: commands and gestures are refused */
+  readOnly: boolean;
 
   /** Any command, whatever its arguments' type. */
   apply: (cmd: AnyCommand, opts?: { coalesce?: string }) => boolean;
@@ -70,11 +74,14 @@ export interface EditorState {
   setMomentPoint: (p: Vec2 | null) => void;
   notify: (text: string | null) => void;
   setViewport: (size: { width: number; height: number }) => void;
+  setReadOnly: (on: boolean) => void;
   /** Open a document (not undoable): history starts afresh. */
   reset: (sketch: SketchFile) => void;
 }
 
 export const HISTORY_LIMIT = 300;
+
+export const READ_ONLY_NOTICE = "Read only — your role may not edit this sketch. Select, measure and read results freely.";
 
 export type EditorStore = StoreApi<EditorState>;
 
@@ -96,9 +103,14 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
       notice: null,
       revision: 0,
       viewport: { width: 800, height: 600 },
+      readOnly: false,
 
       apply: (cmd, opts) => {
         const s = get();
+        if (s.readOnly) {
+          s.notify(READ_ONLY_NOTICE);
+          return false;
+        }
         if (s.gesture) s.cancelGesture();
         const c = cmd as unknown as Command<unknown>;
         const before = get().sketch;
@@ -157,6 +169,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
 
       beginGesture: (label = "Drag") => {
         const s = get();
+        if (s.readOnly) return;
         if (s.gesture) s.cancelGesture();
         set((d) => {
           d.gesture = { origin: s.sketch, selection: s.selection, label };
@@ -223,10 +236,15 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
         });
       },
 
-      setTool: (tool) =>
+      setTool: (tool) => {
+        if (get().readOnly && tool.kind !== "select" && tool.kind !== "pick-point") {
+          get().notify(READ_ONLY_NOTICE);
+          return;
+        }
         set((d) => {
           d.tool = tool as never;
-        }),
+        });
+      },
       setView: (view) =>
         set((d) => {
           d.view = view;
@@ -250,6 +268,11 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
       setViewport: (size) =>
         set((d) => {
           d.viewport = size;
+        }),
+      setReadOnly: (on) =>
+        set((d) => {
+          d.readOnly = on;
+          if (on) d.tool = { kind: "select" };
         }),
       reset: (sketch) =>
         set((d) => {

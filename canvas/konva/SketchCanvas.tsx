@@ -22,6 +22,7 @@ import { createPointerController, type HitInfo, type PointerController } from ".
 import { TRAY_MIME, type InteractionStore } from "./interaction";
 import { resolveCanvasFont } from "./font";
 import { CanvasLegend } from "./CanvasLegend";
+import { UnderlayLayer } from "./UnderlayLayer";
 
 
 
@@ -220,7 +221,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
     else s.notify(out.message);
   };
 
-  const cursor = panning ? "grab" : tool === "place" || tool === "body" || tool === "pick-point" ? "crosshair" : "default";
+  const cursor = panning ? "grab" : tool === "place" || tool === "body" || tool === "pick-point" || tool === "calibrate" ? "crosshair" : "default";
 
   return (
     <div
@@ -243,6 +244,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
     >
       {size && (
         <Stage ref={stageRef} width={size.width} height={size.height}>
+          <UnderlayLayer interaction={interaction} />
           <Layer listening={false}>
             <Grid width={size.width} height={size.height} />
           </Layer>

@@ -15,13 +15,16 @@ import { anchorOf, type SceneItem } from "../scene";
 import { bodyAt, bodyCommand, elementsInBox, placeCommand } from "../placement";
 import { rectangleOutline } from "../model/factory";
 import { markInput } from "../perf";
+import { moveUnderlay } from "../commands/underlay";
+import { calibrationClick } from "./underlayPointer";
 import { NOTHING_LIFTED, type InteractionStore } from "./interaction";
 
 export type HitInfo =
   | { type: "element"; id: string }
   | { type: "cg"; id: string }
   | { type: "corner"; id: string; index: number }
-  | { type: "rotate"; id: string };
+  | { type: "rotate"; id: string }
+  | { type: "underlay" };
 
 export interface PointerDeps {
   stores: EditorStores;
@@ -39,7 +42,8 @@ type Mode =
   | { kind: "cg"; id: string; start: Vec2; origin: Vec2 }
   | { kind: "band"; start: Vec2; mode: "replace" | "add" }
   | { kind: "rect"; start: Vec2 }
-  | { kind: "pinch"; dist: number; mid: Vec2; view: { scale: number; x: number; y: number } };
+  | { kind: "pinch"; dist: number; mid: Vec2; view: { scale: number; x: number; y: number } }
+  | { kind: "underlay"; start: Vec2; origin: Vec2 };
 
 const DRAG_THRESHOLD_PX = 3;
 const ANGLE_STEP = 5;
@@ -129,6 +133,10 @@ export function createPointerController(deps: PointerDeps) {
       s.setTool({ kind: "select" });
       return;
     }
+    if (tool.kind === "calibrate") {
+      calibrationClick(s, world);
+      return;
+    }
     if (tool.kind === "place") {
       const p = snap(world, e).point;
       const out = placeCommand(s.sketch, stores.scene.getState(), tool.element, p, tolerance(), { friction: tool.friction });
@@ -181,6 +189,10 @@ export function createPointerController(deps: PointerDeps) {
       if (!b || b.kind !== "body") return;
       mode = { kind: "cg", id: hit.id, start: world, origin: b.cg };
       s.beginGesture("Move the centre of gravity");
+    } else if (hit?.type === "underlay" && s.sketch.underlay) {
+      mode = { kind: "underlay", start: world, origin: s.sketch.underlay.origin };
+      s.beginGesture("Move the underlay");
+      if (s.selection.length) s.select([]);
     } else if (hit?.type === "element") {
       const already = s.selection.includes(hit.id);
       if (e.shiftKey || e.ctrlKey || e.metaKey) {
@@ -261,6 +273,9 @@ export function createPointerController(deps: PointerDeps) {
         s.updateGesture(moveCentreOfGravity({ id: mode.id, to: r.point }) as Command<unknown>);
         return;
       }
+      case "underlay":
+        s.updateGesture(moveUnderlay({ to: [mode.origin[0] + world[0] - mode.start[0], mode.origin[1] + world[1] - mode.start[1]] }) as Command<unknown>);
+        return;
       case "band":
         interaction.setState({ band: { minX: Math.min(mode.start[0], world[0]), minY: Math.min(mode.start[1], world[1]), maxX: Math.max(mode.start[0], world[0]), maxY: Math.max(mode.start[1], world[1]) } });
         return;
@@ -311,6 +326,7 @@ export function createPointerController(deps: PointerDeps) {
       case "rotate":
       case "corner":
       case "cg":
+      case "underlay":
         s.endGesture();
         return;
       case "band": {
@@ -343,7 +359,7 @@ export function createPointerController(deps: PointerDeps) {
   function cancel(): boolean {
     const s = ed();
     if (mode.kind !== "idle") {
-      const wasGesture = mode.kind === "move" || mode.kind === "rotate" || mode.kind === "corner" || mode.kind === "cg";
+      const wasGesture = mode.kind === "move" || mode.kind === "rotate" || mode.kind === "corner" || mode.kind === "cg" || mode.kind === "underlay";
       if (mode.kind === "pan") s.setView(mode.view);
       mode = { kind: "idle" };
       stopWindowDrag();
@@ -377,6 +393,8 @@ export function createPointerController(deps: PointerDeps) {
       if (interaction.getState().hover) interaction.setState({ hover: null, snap: null });
       return;
     }
+    // the underlay's marks are features of the image: never snapped
+    if (tool.kind === "calibrate") return interaction.setState({ hover: world, snap: null });
     const r = snap(world, e);
     interaction.setState({ hover: r.point, snap: r.kind === "none" || r.kind === "grid" ? null : r });
   }

@@ -23,6 +23,7 @@ import { PropertiesPanel } from "./PropertiesPanel";
 import { Toolbar } from "./Toolbar";
 import { Tray } from "./Tray";
 import { ActionContextCtx } from "./useActions";
+import { PersistenceCtx } from "./usePersistence";
 import { useFileOps } from "./useFileOps";
 import { useShortcuts } from "./useShortcuts";
 
@@ -48,6 +49,18 @@ function StatusLine() {
       <p className="min-w-0 max-w-[55%] truncate text-right text-ink-faint" title={hint}>
         {hint}
       </p>
+    </div>
+  );
+}
+
+/** The tray of element kinds, or (for a role that may not edit) why there is none. */
+function TrayOrReadOnly() {
+  const readOnly = useEditor((s) => s.readOnly);
+  if (!readOnly) return <Tray />;
+  return (
+    <div className="border-b border-rule px-3 py-3" role="note" data-testid="read-only-note">
+      <p className="text-[12.5px] font-semibold text-ink">Read only — your role may not edit</p>
+      <p className="mt-1 text-[12px] leading-snug text-ink-soft">You can select elements, read their properties and the results, and take moments about any point; nothing you do here changes the sketch.</p>
     </div>
   );
 }
@@ -99,29 +112,31 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
   };
 
   return (
-    <ActionContextCtx.Provider value={getCtx}>
-      <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
-        <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} />
-        <div className="flex min-h-0 flex-1">
-          <aside className="relative flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper" aria-label="Add and elements">
-            <Tray />
-            <Outline />
-          </aside>
-          <main className="flex min-w-0 flex-1 flex-col" aria-label="Drawing and results">
-            <div className="relative min-h-0 flex-1">
-              <SketchCanvas interaction={interaction} onController={setController} />
-            </div>
-            <StatusLine />
-            <ResultsDock />
-          </main>
-          <aside className="relative w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper" aria-label="Properties and parameters">
-            <PropertiesPanel />
-          </aside>
+    <PersistenceCtx.Provider value={persistence}>
+      <ActionContextCtx.Provider value={getCtx}>
+        <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
+          <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} />
+          <div className="flex min-h-0 flex-1">
+            <aside className="relative flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper" aria-label="Add and elements">
+              <TrayOrReadOnly />
+              <Outline />
+            </aside>
+            <main className="flex min-w-0 flex-1 flex-col" aria-label="Drawing and results">
+              <div className="relative min-h-0 flex-1">
+                <SketchCanvas interaction={interaction} onController={setController} />
+              </div>
+              <StatusLine />
+              <ResultsDock />
+            </main>
+            <aside className="relative w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper" aria-label="Properties and parameters">
+              <PropertiesPanel />
+            </aside>
+          </div>
+          <input ref={inputRef} type="file" accept=".json,application/json" className="hidden" aria-label="Import a sketch file" data-testid="import-input" onChange={(e) => void files.onFile(e.target.files?.[0])} />
+          {files.problem && <ImportErrorDialog problem={files.problem} onClose={files.clearProblem} />}
         </div>
-        <input ref={inputRef} type="file" accept=".json,application/json" className="hidden" aria-label="Import a sketch file" data-testid="import-input" onChange={(e) => void files.onFile(e.target.files?.[0])} />
-        {files.problem && <ImportErrorDialog problem={files.problem} onClose={files.clearProblem} />}
-      </div>
-    </ActionContextCtx.Provider>
+      </ActionContextCtx.Provider>
+    </PersistenceCtx.Provider>
   );
 }
 
@@ -200,6 +215,7 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
       const ex = example ? exampleById(example) : undefined;
       if (ex) store.getState().reset(ex.sketch);
       else if (out.ok && out.sketch) store.getState().reset(out.sketch);
+      store.getState().setReadOnly(Boolean(out.ok && out.sketch && out.readOnly));
       if (!out.ok) store.getState().notify(out.message);
       setPhase({ kind: "ready" });
     });

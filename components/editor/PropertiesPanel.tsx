@@ -6,6 +6,7 @@ import { findElement, KIND_LABEL } from "@/canvas/model/elements";
 import { ElementForm } from "./ElementForm";
 import { ParametersTable } from "./ParametersTable";
 import { SketchForm } from "./SketchForm";
+import { UnderlayPanel } from "./UnderlayPanel";
 import { useActionRunner } from "./useActions";
 import { BUTTON, HEADING } from "./ui";
 
@@ -37,17 +38,27 @@ function Several() {
 
 export function PropertiesPanel() {
   const selection = useEditor((s) => s.selection);
+  const readOnly = useEditor((s) => s.readOnly);
   return (
     <div className="flex h-full flex-col">
       <section aria-labelledby="props-heading" className="border-b border-rule px-3 pb-3 pt-2">
         <h2 id="props-heading" className={`${HEADING} mb-2`}>
           Properties
         </h2>
-        {selection.length === 0 ? <SketchForm /> : selection.length === 1 ? <ElementForm key={selection[0]} id={selection[0]} /> : <Several />}
+        {readOnly ? (
+          <p className="mb-2 rounded border border-rule bg-paper-deep/60 px-2 py-1 text-[12px] text-ink-soft" data-testid="read-only-fields">
+            Read only — your role may not edit this sketch.
+          </p>
+        ) : null}
+        {/* a disabled fieldset disables every field and button of the forms inside it */}
+        <fieldset disabled={readOnly} className="min-w-0">
+          {selection.length === 0 ? <SketchForm /> : selection.length === 1 ? <ElementForm key={selection[0]} id={selection[0]} /> : <Several />}
+        </fieldset>
       </section>
-      <div className="px-3 pb-4 pt-2">
+      <UnderlayPanel />
+      <fieldset disabled={readOnly} className="min-w-0 px-3 pb-4 pt-2">
         <ParametersTable />
-      </div>
+      </fieldset>
     </div>
   );
 }

@@ -3,6 +3,7 @@
 // steps are shown by <SavedSketchBar>, which reads and answers the controller's state.
 import { createStore, type StoreApi } from "zustand/vanilla";
 import type { LoadOutcome, SaveOutcome, SketchPersistence } from "@/canvas/persistence";
+import { uploadFile } from "@/components/uploads/uploadFile";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
 import type { SketchFile } from "@/solver/schema";
@@ -84,6 +85,13 @@ export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { versi
       }
       if (pending) return Promise.resolve({ ok: false, reason: "error", message: "A save is already waiting for its message." });
       return new Promise<SaveOutcome>((resolve) => flow.setState({ pending: { sketch, resolve } }));
+    },
+    async uploadUnderlay(file) {
+      const info = flow.getState().info;
+      if (!info) throw new Error("The sketch has not finished loading.");
+      if (!can(info.role, "upload.underlay")) throw new Error(`As ${info.role} in ${info.workspaceName} you may not upload drawings to this sketch.`);
+      const u = await uploadFile(`/api/sketches/${sketchId}/uploads`, file);
+      return { id: u.id, width: u.width, height: u.height, name: u.name };
     },
   };
 }

@@ -1,0 +1,109 @@
+"use client";
+// Setting the underlay's scale: click two marks on the image, type the real distance between
+// them with a unit ("2.4 m", "96 in"); the solver's expression reader turns it into metres.
+import { useState } from "react";
+import { useEditor, useStores } from "@/canvas/context";
+import { calibrateUnderlay } from "@/canvas/commands/underlay";
+import type { Command } from "@/canvas/commands/define";
+import { readScale } from "@/canvas/geometry/underlay";
+import { formatNumber } from "@/solver/units";
+import type { UnderlayFile } from "@/solver/schema";
+import { BUTTON, INPUT, PRIMARY_BUTTON } from "./ui";
+
+/** "5.000 mm a pixel" / "1.27 cm a pixel". */
+export function scaleWords(metresPerPixel: number, units: "SI" | "US"): string {
+  if (units === "US") return `${formatNumber(metresPerPixel / 0.0254, 4)} in a pixel`;
+  return metresPerPixel < 0.01 ? `${formatNumber(metresPerPixel * 1000, 4)} mm a pixel` : metresPerPixel < 1 ? `${formatNumber(metresPerPixel * 100, 4)} cm a pixel` : `${formatNumber(metresPerPixel, 4)} m a pixel`;
+}
+
+export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: boolean }) {
+  const { editor } = useStores();
+  const tool = useEditor((s) => s.tool);
+  const units = useEditor((s) => s.units);
+  const [text, setText] = useState("");
+  const calibrating = tool.kind === "calibrate";
+  const marks = calibrating ? tool.points : [];
+  const reading = marks.length === 2 ? readScale(marks[0], marks[1], text) : null;
+
+  const start = () => {
+    setText(typeof u.calibration?.distance === "string" ? u.calibration.distance : u.calibration ? `${u.calibration.distance} m` : "");
+    editor.getState().setTool({ kind: "calibrate", points: [] });
+    editor.getState().notify("Setting the scale: click the first of two marks a known distance apart on the drawing. Esc to stop.");
+  };
+  const stop = () => editor.getState().setTool({ kind: "select" });
+  const commit = () => {
+    if (!reading?.ok) return;
+    const s = editor.getState();
+    s.apply(calibrateUnderlay({ a: marks[0], b: marks[1], distance: text.trim(), metresPerPixel: reading.metresPerPixel }) as Command<unknown>);
+    s.setTool({ kind: "select" });
+    s.notify(`Scale set: ${formatNumber(reading.pixels, 4)} px between the marks is ${text.trim()}, so ${scaleWords(reading.metresPerPixel, units)}. Lock the underlay before tracing over it.`);
+  };
+
+  const c = u.calibration;
+  return (
+    <div className="space-y-1.5 rounded border border-rule-soft px-2 py-1.5" data-testid="underlay-scale">
+      <p className="text-[12px] text-ink-soft">
+        Scale: <span className="num font-medium text-ink" data-testid="underlay-mpp" data-mpp={u.metresPerPixel}>{scaleWords(u.metresPerPixel, units)}</span>
+        {c ? (
+          <span className="text-ink-faint">
+            {" "}
+            · from {typeof c.distance === "number" ? `${formatNumber(c.distance, 4)} m` : c.distance} between two marks
+          </span>
+        ) : (
+          <span className="text-caution"> · not set from the drawing yet</span>
+        )}
+      </p>
+      {!calibrating ? (
+        <button type="button" className={BUTTON} disabled={disabled || u.hidden} onClick={start} data-testid="underlay-calibrate">
+          Set the scale from two marks
+        </button>
+      ) : marks.length < 2 ? (
+        <div className="flex items-center gap-2">
+          <p className="flex-1 text-[12px] text-accent-deep" aria-live="polite">
+            {marks.length === 0 ? "Click the first mark on the drawing…" : "Click the second mark…"}
+          </p>
+          <button type="button" className={BUTTON} onClick={stop}>
+            Stop
+          </button>
+        </div>
+      ) : (
+        <form
+          className="space-y-1"
+          onSubmit={(e) => {
+            e.preventDefault();
+            commit();
+          }}
+        >
+          <label htmlFor="underlay-distance" className="block text-[12px] font-medium text-ink-soft">
+            Real distance between the marks ({formatNumber(Math.hypot(marks[1][0] - marks[0][0], marks[1][1] - marks[0][1]), 4)} px apart)
+          </label>
+          <input
+            id="underlay-distance"
+            autoFocus
+            className={INPUT}
+            value={text}
+            placeholder="e.g. 2.4 m or 96 in"
+            aria-invalid={text.trim() !== "" && reading?.ok === false}
+            aria-describedby="underlay-distance-note"
+            onChange={(e) => setText(e.target.value)}
+            data-testid="underlay-distance"
+          />
+          <p id="underlay-distance-note" className={`text-[11.5px] leading-snug ${reading && !reading.ok && text.trim() ? "text-caution" : "text-ink-faint"}`}>
+            {reading?.ok ? `= ${formatNumber(reading.distanceM, 4)} m, so ${scaleWords(reading.metresPerPixel, units)}` : text.trim() ? reading?.message : "A length with its unit: m, mm, ft, in…"}
+          </p>
+          <div className="flex gap-1.5">
+            <button type="submit" className={PRIMARY_BUTTON} disabled={!reading?.ok} data-testid="underlay-set-scale">
+              Set the scale
+            </button>
+            <button type="button" className={BUTTON} onClick={start}>
+              Pick again
+            </button>
+            <button type="button" className={BUTTON} onClick={stop}>
+              Cancel
+            </button>
+          </div>
+        </form>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,40 @@
+// Browser side of an upload: a form post of one file, refused here already when it is over the
+// server's cap (so a 40 MB photo never leaves the machine); errors come back as ApiError.
+import { ApiError } from "@/lib/api-client";
+import type { ErrorCode, FieldError } from "@/lib/errors";
+
+/** The server's cap (lib/uploads/process.ts UPLOAD_LIMITS.maxBytes; a test keeps them equal). */
+export const MAX_UPLOAD_BYTES = 10 * 1024 * 1024;
+export const ACCEPT_UPLOADS = "image/png,image/jpeg,image/webp,application/pdf,.png,.jpg,.jpeg,.webp,.pdf";
+
+export type UploadAnswer = {
+  id: string;
+  name: string;
+  purpose: "underlay" | "attachment";
+  sourceType: string;
+  storedType: string;
+  size: number;
+  width: number;
+  height: number;
+  url: string;
+  thumbnailUrl: string;
+};
+
+export async function uploadFile(path: string, file: File): Promise<UploadAnswer> {
+  if (file.size > MAX_UPLOAD_BYTES) {
+    throw new ApiError(413, "payload_too_large", `“${file.name}” is ${(file.size / 1048576).toFixed(1)} MB; uploads are limited to ${MAX_UPLOAD_BYTES / 1048576} MB.`);
+  }
+  const form = new FormData();
+  form.set("file", file, file.name);
+  let res: Response;
+  try {
+    res = await fetch(path, { method: "POST", body: form, credentials: "same-origin", cache: "no-store" });
+  } catch {
+    throw new ApiError(0, "network", "The app could not be reached. Check the connection and try again.");
+  }
+  const data = (await res.json().catch(() => null)) as { upload?: UploadAnswer; error?: { code?: ErrorCode; message?: string; fields?: FieldError[] } } | null;
+  if (!res.ok || !data?.upload) {
+    throw new ApiError(res.status, data?.error?.code ?? "internal", data?.error?.message ?? `The server answered ${res.status}.`, data?.error?.fields ?? []);
+  }
+  return data.upload;
+}
