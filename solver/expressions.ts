@@ -366,8 +366,18 @@ export function unitlessTrigWarning(expr: CompiledExpression, scope: Map<string,
 }
 
 /** Build a value in a given unit (for sweeps that set a parameter). */
+const unitOnes = new Map<string, Unit>();
 export function makeValue(value: number, unit: string): MathValue {
-  return unit ? (math.unit(value, unit) as Unit) : value;
+  if (!unit) return value;
+  // Parse the unit once; our units are all multiplicative, so the stored (SI) value scales.
+  let one = unitOnes.get(unit);
+  if (!one) {
+    one = math.unit(1, unit) as Unit;
+    unitOnes.set(unit, one);
+  }
+  const u = one.clone();
+  (u as unknown as { value: number }).value = (one as unknown as { value: number }).value * value;
+  return u;
 }
 
 /** Evaluate a standalone expression to an SI number of a field kind (no parameters). */
