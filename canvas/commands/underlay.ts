@@ -7,7 +7,11 @@ import type { UnderlayFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
 import { defineCommand, edit } from "./define";
 
-const round = (v: number, step = 1e-6) => Math.round(v / step) * step;
+/** Round to a step given as a power of ten (1e-6 m, 0.01): multiplying by its inverse keeps decimals clean. */
+const round = (v: number, step = 1e-6) => {
+  const k = Math.round(1 / step);
+  return Math.round(v * k) / k;
+};
 const pt = (p: Vec2): Vec2 => [round(p[0]), round(p[1])];
 
 /** Put an uploaded image under the sketch (replacing any underlay there was). */

@@ -1,0 +1,148 @@
+// The editor's Underlay section and its read-only mode, with Testing Library: the scratch sketch
+// says underlays need a saved sketch; a saved one uploads, places the image, sets the scale from
+// two marks and a typed distance, fades, hides and locks it (each an undo step); a role that may
+// not edit sees a note, no tray, and disabled fields.
+import { act, fireEvent, render, screen, waitFor } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { describe, expect, it, vi } from "vitest";
+import { Editor } from "@/components/editor/Editor";
+import { UnderlayPanel } from "@/components/editor/UnderlayPanel";
+import { PersistenceCtx } from "@/components/editor/usePersistence";
+import { EditorProvider } from "@/canvas/context";
+import { createEditorStore } from "@/canvas/store";
+import type { SketchPersistence } from "@/canvas/persistence";
+import { emptySketch } from "@/canvas/model/elements";
+import { newBody } from "@/canvas/model/factory";
+import type { SketchFile } from "@/solver/schema";
+import { renderEditor } from "./editor-helpers";
+
+const UPLOAD = "0b7d1f52-9a51-4c8e-8f4e-2a7b8c1d0e11";
+
+function savedPersistence(sketch: SketchFile, opts: { readOnly?: boolean } = {}) {
+  const uploadUnderlay = vi.fn(async (file: File) => ({ id: UPLOAD, width: 1000, height: 600, name: file.name }));
+  const saved: SketchFile[] = [];
+  const persistence: SketchPersistence = {
+    kind: "saved",
+    autosave: false,
+    describe: () => "Skid · Test bay",
+    load: async () => ({ ok: true, sketch, version: 1, readOnly: opts.readOnly }),
+    save: async (s) => {
+      saved.push(s);
+      return { ok: true, version: 2, savedAt: new Date().toISOString() };
+    },
+    uploadUnderlay,
+  };
+  return { persistence, uploadUnderlay, saved };
+}
+
+function skid(): SketchFile {
+  return { ...emptySketch("Skid"), bodies: [newBody("b1", [[0, 0], [3, 0], [3, 1.2], [0, 1.2]], "Skid")], supports: [{ id: "s1", body: "b1", kind: "pin", at: [0, 0] }] };
+}
+
+async function open(persistence: SketchPersistence) {
+  const utils = render(<Editor persistence={persistence} />);
+  await screen.findByTestId("underlay-panel");
+  return utils;
+}
+
+describe("the Underlay section", () => {
+  it("on the scratch sketch, explains that underlays need a saved sketch", async () => {
+    await renderEditor(skid());
+    expect(screen.getByTestId("underlay-needs-saved")).toHaveTextContent("Underlays need a saved sketch");
+    expect(screen.queryByTestId("underlay-upload")).toBeNull();
+  });
+
+  it("uploads a drawing, sets its scale from two marks and a typed distance, fades, hides and locks it; undo walks back", async () => {
+    const user = userEvent.setup();
+    const { persistence, uploadUnderlay } = savedPersistence(skid());
+    const store = createEditorStore({ sketch: skid() });
+    store.getState().setViewport({ width: 1000, height: 700 });
+    render(
+      <EditorProvider editor={store}>
+        <PersistenceCtx.Provider value={persistence}>
+          <UnderlayPanel />
+        </PersistenceCtx.Provider>
+      </EditorProvider>,
+    );
+    const file = new File([new Uint8Array([137, 80, 78, 71])], "GA skid.png", { type: "image/png" });
+    fireEvent.change(screen.getByTestId("underlay-input"), { target: { files: [file] } });
+    await screen.findByTestId("underlay-controls");
+    expect(uploadUnderlay).toHaveBeenCalledWith(file);
+    const placed = store.getState().sketch.underlay!;
+    expect(placed).toMatchObject({ upload: UPLOAD, width: 1000, height: 600, rotation: 0, opacity: 0.6 });
+    // fitted into four fifths of the 1000 × 700 canvas at the view's 120 px/m: 800 px wide
+    expect(placed.metresPerPixel * 1000 * store.getState().view.scale).toBeCloseTo(800, 6);
+    expect(store.getState().notice).toMatch(/^“GA skid.png” is under the sketch\. Set its scale/);
+    expect(screen.getByTestId("underlay-scale")).toHaveTextContent("not set from the drawing yet");
+
+    // the marks come from clicks on the canvas (pointer.ts, and the e2e story); here the tool is given them
+    await user.click(screen.getByTestId("underlay-calibrate"));
+    expect(store.getState().tool).toEqual({ kind: "calibrate", points: [] });
+    expect(screen.getByTestId("underlay-scale")).toHaveTextContent("Click the first mark on the drawing");
+    act(() => store.getState().setTool({ kind: "calibrate", points: [[300, 520], [700, 520]] }));
+    const distance = screen.getByTestId("underlay-distance");
+    await user.type(distance, "2 kg");
+    expect(screen.getByTestId("underlay-scale")).toHaveTextContent("2 kg is a mass (kg), but this field needs a length (m)");
+    expect(screen.getByTestId("underlay-set-scale")).toBeDisabled();
+    await user.clear(distance);
+    await user.type(distance, "78.74 in");
+    expect(screen.getByTestId("underlay-scale")).toHaveTextContent("= 2 m, so 5 mm a pixel");
+    await user.click(screen.getByTestId("underlay-set-scale"));
+    const cal = store.getState().sketch.underlay!;
+    // 78.74 in = 1.999996 m over 400 px
+    expect(cal.metresPerPixel).toBeCloseTo((78.74 * 0.0254) / 400, 12);
+    expect(cal.calibration).toEqual({ a: [300, 520], b: [700, 520], distance: "78.74 in" });
+    expect(store.getState().tool).toEqual({ kind: "select" });
+    expect(screen.getByTestId("underlay-scale")).toHaveTextContent("from 78.74 in between two marks");
+
+    fireEvent.change(screen.getByTestId("underlay-opacity"), { target: { value: "0.35" } });
+    await user.click(screen.getByTestId("underlay-shown"));
+    await user.click(screen.getByTestId("underlay-locked"));
+    expect(store.getState().sketch.underlay).toMatchObject({ opacity: 0.35, hidden: true, locked: true });
+    expect(screen.getByTestId("underlay-x")).toBeDisabled();
+    await user.click(screen.getByTestId("underlay-locked"));
+    const x = screen.getByTestId("underlay-x");
+    await user.clear(x);
+    await user.type(x, "1500 mm{Enter}");
+    expect(store.getState().sketch.underlay!.origin[0]).toBeCloseTo(1.5, 9);
+    expect(store.getState().past.map((e) => e.label)).toEqual([
+      "Put a drawing under the sketch",
+      "Set the underlay's scale (78.74 in)",
+      "Underlay at 35 % opacity",
+      "Hide the underlay",
+      "Lock the underlay",
+      "Unlock the underlay",
+      "Move the underlay",
+    ]);
+    for (let i = 0; i < 7; i++) act(() => store.getState().undo());
+    expect(store.getState().sketch.underlay).toBeUndefined();
+    expect(screen.getByTestId("underlay-upload")).toBeInTheDocument();
+  });
+
+  it("an upload the server refuses shows its reason and changes nothing", async () => {
+    const { persistence } = savedPersistence(skid());
+    persistence.uploadUnderlay = async () => {
+      throw new Error("This file is not a PNG, JPEG or WebP image or a PDF (whatever its name says).");
+    };
+    await open(persistence);
+    fireEvent.change(screen.getByTestId("underlay-input"), { target: { files: [new File(["text"], "drawing.png", { type: "image/png" })] } });
+    expect(await screen.findByTestId("underlay-problem")).toHaveTextContent("whatever its name says");
+    expect(screen.queryByTestId("underlay-controls")).toBeNull();
+  });
+});
+
+describe("a read-only editor (a viewer or a checker on a saved sketch)", () => {
+  it("shows the note, hides the tray, and disables every field and underlay control", async () => {
+    const sketch = { ...skid(), underlay: { upload: UPLOAD, width: 1000, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.005, rotation: 0, opacity: 0.6 } };
+    const { persistence } = savedPersistence(sketch, { readOnly: true });
+    await open(persistence);
+    expect(screen.getByTestId("read-only-note")).toHaveTextContent("Read only — your role may not edit");
+    expect(screen.queryByRole("heading", { name: "Add" })).toBeNull();
+    expect(screen.queryByTitle(/^Pin/)).toBeNull();
+    expect(screen.getByTestId("sketch-form").closest("fieldset")).toBeDisabled();
+    expect(screen.getByTestId("sketch-form").querySelector("input")).toBeDisabled();
+    for (const id of ["underlay-calibrate", "underlay-shown", "underlay-locked", "underlay-opacity", "underlay-remove", "underlay-x"]) expect(screen.getByTestId(id)).toBeDisabled();
+    expect(screen.queryByTestId("underlay-upload")).toBeNull();
+    await waitFor(() => expect(screen.getByTestId("sketch-title")).toHaveTextContent("Skid"));
+  });
+});
