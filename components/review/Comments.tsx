@@ -8,11 +8,12 @@ import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import type { Member } from "@/lib/review/comment-text";
 import { formatNumber } from "@/solver/units";
+import { AttachmentList, attachFiles, FilePicker, removeAttachment, type Attachment } from "./Attachments";
 import { CommentText } from "./CommentText";
 import type { PickedPin } from "./ReviewDrawing";
 
 export type CommentPin = { kind: "element"; elementId: string } | { kind: "point"; at: [number, number] };
-export type CommentItem = { id: string; authorId: string | null; authorName: string | null; body: string; deleted: boolean; editedAt: string | null; createdAt: string };
+export type CommentItem = { id: string; authorId: string | null; authorName: string | null; body: string; deleted: boolean; editedAt: string | null; createdAt: string; attachments?: Attachment[] };
 export type ThreadItem = { id: string; pin: CommentPin | null; resolvedAt: string | null; resolvedByName: string | null; comments: CommentItem[] };
 export type CommentsData = { threads: ThreadItem[]; members: Member[]; locked: boolean; canComment: boolean };
 
@@ -82,7 +83,15 @@ function useCommentMutations(commentsPath: string, onChanged: () => void) {
     onChanged();
   };
   return {
-    post: useMutation({ mutationFn: (body: { body: string; pin?: CommentPin | null; parentId?: string }) => apiFetch(commentsPath, { method: "POST", body }), onSuccess: done }),
+    // the comment first, then its files (each attached to the comment that now exists)
+    post: useMutation({
+      mutationFn: async ({ files, ...body }: { body: string; pin?: CommentPin | null; parentId?: string; files?: File[] }) => {
+        const made = await apiFetch<{ comment: { id: string } }>(commentsPath, { method: "POST", body });
+        return { problems: files?.length ? await attachFiles(made.comment.id, files) : [] };
+      },
+      onSuccess: done,
+    }),
+    unattach: useMutation({ mutationFn: removeAttachment, onSuccess: done }),
     patch: useMutation({ mutationFn: (v: { id: string; body: { body?: string; resolved?: boolean } }) => apiFetch(`/api/comments/${v.id}`, { method: "PATCH", body: v.body }), onSuccess: done }),
     remove: useMutation({ mutationFn: (id: string) => apiFetch(`/api/comments/${id}`, { method: "DELETE" }), onSuccess: done }),
   };
@@ -115,6 +124,7 @@ function OneComment({ c, viewerId, members, writable, m }: { c: CommentItem; vie
       ) : (
         <CommentText text={c.body} members={members} />
       )}
+      {!c.deleted ? <AttachmentList files={c.attachments ?? []} onRemove={mine ? (a) => m.unattach.mutate(a) : undefined} /> : null}
       {mine && !editing ? (
         <p className="flex gap-3 text-xs">
           <button type="button" className="text-ink-soft hover:text-ink" onClick={() => setEditing(true)}>
@@ -131,6 +141,7 @@ function OneComment({ c, viewerId, members, writable, m }: { c: CommentItem; vie
 
 function ThreadView({ t, n, labels, data, viewerId, selected, onSelect, m }: { t: ThreadItem; n: number; labels: Record<string, string>; data: CommentsData; viewerId: string; selected: boolean; onSelect: () => void; m: ReturnType<typeof useCommentMutations> }) {
   const [reply, setReply] = useState("");
+  const [replyFiles, setReplyFiles] = useState<File[]>([]);
   const [replying, setReplying] = useState(false);
   const ref = useRef<HTMLElement>(null);
   useEffect(() => {
@@ -156,8 +167,9 @@ function ThreadView({ t, n, labels, data, viewerId, selected, onSelect, m }: { t
           {replying ? (
             <div className="w-full space-y-1.5">
               <MentionBox id={`reply-${t.id}`} label="Reply" value={reply} onChange={setReply} members={data.members} rows={2} placeholder="Reply…" />
+              <FilePicker id={`reply-${t.id}`} files={replyFiles} onChange={setReplyFiles} />
               <div className="flex gap-2">
-                <Button size="sm" busy={m.post.isPending} disabled={!reply.trim()} onClick={() => m.post.mutate({ body: reply, parentId: t.id }, { onSuccess: () => (setReply(""), setReplying(false)) })}>
+                <Button size="sm" busy={m.post.isPending} disabled={!reply.trim()} onClick={() => m.post.mutate({ body: reply, parentId: t.id, files: replyFiles }, { onSuccess: () => (setReply(""), setReplyFiles([]), setReplying(false)) })}>
                   Reply
                 </Button>
                 <Button size="sm" tone="quiet" onClick={() => setReplying(false)}>
@@ -208,7 +220,9 @@ export function CommentsPanel({
 }) {
   const m = useCommentMutations(commentsPath, onChanged);
   const [text, setText] = useState("");
-  const err = [m.post.error, m.patch.error, m.remove.error].find((e) => e instanceof ApiError) as ApiError | undefined;
+  const [files, setFiles] = useState<File[]>([]);
+  const err = [m.post.error, m.patch.error, m.remove.error, m.unattach.error].find((e) => e instanceof ApiError) as ApiError | undefined;
+  const attachProblems = m.post.data?.problems ?? [];
   const open = data.threads.filter((t) => !t.resolvedAt).length;
   return (
     <div className="space-y-3">
@@ -220,10 +234,11 @@ export function CommentsPanel({
           onSubmit={(e) => {
             e.preventDefault();
             const body = pin ? { body: text, pin: pin.kind === "element" ? { kind: "element" as const, elementId: pin.elementId } : { kind: "point" as const, at: pin.at } } : { body: text };
-            m.post.mutate(body, { onSuccess: () => (setText(""), onClearPin()) });
+            m.post.mutate({ ...body, files }, { onSuccess: () => (setText(""), setFiles([]), onClearPin()) });
           }}
         >
           <MentionBox id="new-comment" label="New comment" value={text} onChange={setText} members={data.members} placeholder="Comment… (@name mentions a colleague; **bold**, *italic*, `code`)" />
+          <FilePicker id="new-comment" files={files} onChange={setFiles} />
           <div className="flex flex-wrap items-center gap-2 text-xs">
             <span className="text-ink-soft" data-testid="new-comment-pin">
               {picking ? "Click an element or a point on the drawing…" : `Pinned ${pinWords(pin, labels)}`}
@@ -244,6 +259,15 @@ export function CommentsPanel({
         </form>
       ) : null}
       {err ? <Notice tone="error">{err.fields[0]?.message ?? err.message}</Notice> : null}
+      {attachProblems.length ? (
+        <Notice tone="error" title="The comment was posted, but not every file was attached">
+          <ul data-testid="attach-problems">
+            {attachProblems.map((p) => (
+              <li key={p}>{p}</li>
+            ))}
+          </ul>
+        </Notice>
+      ) : null}
       <p className="text-xs text-ink-faint">
         {data.threads.length} thread{data.threads.length === 1 ? "" : "s"}, {open} open
       </p>

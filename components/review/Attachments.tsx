@@ -1,0 +1,100 @@
+"use client";
+// Files on comments: thumbnails that open the whole file (served only to readers of the
+// workspace), a picker for the files of a comment being written, and sending them once the
+// comment exists. A PDF opens whole; its thumbnail is its first page.
+import { useRef } from "react";
+import { ACCEPT_UPLOADS, MAX_UPLOAD_BYTES, uploadFile } from "@/components/uploads/uploadFile";
+import { apiFetch } from "@/lib/api-client";
+
+export type Attachment = { id: string; name: string; storedType: string; sourceType: string; size: number; width: number; height: number; url: string; thumbnailUrl: string };
+
+export function sizeWords(bytes: number): string {
+  return bytes >= 1048576 ? `${(bytes / 1048576).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
+}
+
+/** The thumbnails of a comment's files; each opens the whole file in a new tab. */
+export function AttachmentList({ files, onRemove }: { files: Attachment[]; onRemove?: (a: Attachment) => void }) {
+  if (!files.length) return null;
+  return (
+    <ul className="flex flex-wrap gap-2 pt-0.5" aria-label="Attached files" data-testid="attachments">
+      {files.map((a) => (
+        <li key={a.id} className="group relative w-[104px]" data-testid="attachment">
+          <a
+            href={a.url}
+            target="_blank"
+            rel="noopener"
+            className="block overflow-hidden rounded border border-rule bg-paper-card hover:border-ink/40 focus-visible:outline-2 focus-visible:outline-accent"
+            title={`Open ${a.name || "the file"} (${a.storedType === "application/pdf" ? "PDF" : `${a.width} × ${a.height} px`}, ${sizeWords(a.size)})`}
+          >
+            {/* eslint-disable-next-line @next/next/no-img-element -- a private file behind a role check, not a static asset */}
+            <img src={a.thumbnailUrl} alt={a.name ? `Thumbnail of ${a.name}` : "Thumbnail of an attached file"} className="h-[72px] w-full object-contain bg-white" loading="lazy" />
+            <span className="block truncate border-t border-rule-soft px-1.5 py-0.5 text-[11px] text-ink-soft">
+              {a.storedType === "application/pdf" ? "PDF · " : ""}
+              {a.name || "file"}
+            </span>
+          </a>
+          {onRemove ? (
+            <button
+              type="button"
+              onClick={() => window.confirm(`Remove ${a.name || "this file"} from the comment?`) && onRemove(a)}
+              className="absolute right-1 top-1 hidden h-5 w-5 items-center justify-center rounded-full bg-paper-card/95 text-[11px] text-ink-soft shadow group-hover:flex group-focus-within:flex hover:text-accent-deep"
+              aria-label={`Remove ${a.name || "the file"}`}
+            >
+              ✕
+            </button>
+          ) : null}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+/** Files chosen for a comment not sent yet: a button to add, their names to take back. */
+export function FilePicker({ files, onChange, id }: { files: File[]; onChange: (files: File[]) => void; id: string }) {
+  const input = useRef<HTMLInputElement>(null);
+  const over = files.filter((f) => f.size > MAX_UPLOAD_BYTES);
+  return (
+    <div className="flex min-w-0 flex-wrap items-center gap-1.5 text-xs">
+      <button type="button" className="rounded border border-rule bg-paper-card px-2 py-0.5 text-ink-soft hover:border-ink/30 hover:text-ink" onClick={() => input.current?.click()} data-testid={`${id}-attach`}>
+        Attach files…
+      </button>
+      <input
+        ref={input}
+        type="file"
+        multiple
+        accept={ACCEPT_UPLOADS}
+        className="hidden"
+        aria-label="Attach images or PDFs"
+        data-testid={`${id}-files`}
+        onChange={(e) => {
+          onChange([...files, ...Array.from(e.target.files ?? [])].slice(0, 8));
+          e.target.value = "";
+        }}
+      />
+      {files.map((f, i) => (
+        <span key={`${f.name}-${i}`} className={`inline-flex max-w-[12rem] items-center gap-1 rounded-full px-2 py-0.5 ${f.size > MAX_UPLOAD_BYTES ? "bg-caution-soft text-caution" : "bg-paper-deep text-ink-soft"}`}>
+          <span className="truncate">{f.name}</span>
+          <button type="button" aria-label={`Do not attach ${f.name}`} className="text-ink-faint hover:text-ink" onClick={() => onChange(files.filter((_, j) => j !== i))}>
+            ✕
+          </button>
+        </span>
+      ))}
+      {over.length ? <span className="text-caution">over {MAX_UPLOAD_BYTES / 1048576} MB: it will not be attached</span> : null}
+    </div>
+  );
+}
+
+/** Send files to a comment one by one; what failed comes back in words. */
+export async function attachFiles(commentId: string, files: File[]): Promise<string[]> {
+  const problems: string[] = [];
+  for (const f of files) {
+    try {
+      await uploadFile(`/api/comments/${commentId}/attachments`, f);
+    } catch (err) {
+      problems.push(`${f.name}: ${(err as Error).message}`);
+    }
+  }
+  return problems;
+}
+
+export const removeAttachment = (a: Attachment) => apiFetch(`/api/uploads/${a.id}`, { method: "DELETE" });

@@ -1,0 +1,49 @@
+// Files on comments, as the review page shows them: thumbnails that open the whole file, a
+// picker that marks what is over the cap, and a remove button only where one may remove.
+import { fireEvent, render, screen, within } from "@testing-library/react";
+import { describe, expect, it, vi } from "vitest";
+import { AttachmentList, FilePicker, sizeWords, type Attachment } from "@/components/review/Attachments";
+import { MAX_UPLOAD_BYTES } from "@/components/uploads/uploadFile";
+import { UPLOAD_LIMITS } from "@/lib/uploads/process";
+
+const photo: Attachment = { id: "a1", name: "foot.jpg", storedType: "image/jpeg", sourceType: "image/jpeg", size: 240_000, width: 1600, height: 1200, url: "/api/uploads/a1", thumbnailUrl: "/api/uploads/a1/thumbnail" };
+const sheet: Attachment = { id: "a2", name: "pump datasheet.pdf", storedType: "application/pdf", sourceType: "application/pdf", size: 3_400_000, width: 1275, height: 1650, url: "/api/uploads/a2", thumbnailUrl: "/api/uploads/a2/thumbnail" };
+
+describe("attachments on comments", () => {
+  it("shows each file as a thumbnail that opens the whole file in a new tab", () => {
+    render(<AttachmentList files={[photo, sheet]} />);
+    const items = screen.getAllByTestId("attachment");
+    expect(items).toHaveLength(2);
+    const link = within(items[1]).getByRole("link");
+    expect(link).toHaveAttribute("href", "/api/uploads/a2");
+    expect(link).toHaveAttribute("target", "_blank");
+    expect(link).toHaveAttribute("title", "Open pump datasheet.pdf (PDF, 3.2 MB)");
+    expect(within(items[1]).getByRole("img")).toHaveAttribute("src", "/api/uploads/a2/thumbnail");
+    expect(within(items[0]).getByRole("img")).toHaveAttribute("alt", "Thumbnail of foot.jpg");
+    expect(items[1]).toHaveTextContent("PDF · pump datasheet.pdf");
+    expect(screen.queryByRole("button", { name: /Remove/ })).toBeNull();
+  });
+
+  it("offers removal to the comment's author, after asking", () => {
+    const onRemove = vi.fn();
+    vi.spyOn(window, "confirm").mockReturnValue(true);
+    render(<AttachmentList files={[photo]} onRemove={onRemove} />);
+    fireEvent.click(screen.getByRole("button", { name: "Remove foot.jpg" }));
+    expect(onRemove).toHaveBeenCalledWith(photo);
+  });
+
+  it("the picker lists chosen files, marks one over the cap, and lets one go", () => {
+    const onChange = vi.fn();
+    const big = new File([new Uint8Array(8)], "site survey.png");
+    Object.defineProperty(big, "size", { value: MAX_UPLOAD_BYTES + 1 });
+    render(<FilePicker id="t" files={[new File(["x"], "a.png"), big]} onChange={onChange} />);
+    expect(screen.getByText("over 10 MB: it will not be attached")).toBeInTheDocument();
+    fireEvent.click(screen.getByRole("button", { name: "Do not attach a.png" }));
+    expect(onChange).toHaveBeenCalledWith([big]);
+  });
+
+  it("the browser's cap is the server's", () => {
+    expect(MAX_UPLOAD_BYTES).toBe(UPLOAD_LIMITS.maxBytes);
+    expect(sizeWords(2048)).toBe("2 KB");
+  });
+});
