@@ -154,6 +154,26 @@ export const FIELD_UNITS = {
 } as const;
 export type FieldKind = keyof typeof FIELD_UNITS;
 
+/** How each field kind's SI unit is written for people (angles in degrees). */
+export const FIELD_UNIT_LABELS: Record<FieldKind, string> = {
+  length: "m",
+  angle: "°",
+  mass: "kg",
+  force: "N",
+  moment: "N·m",
+  lineLoad: "N/m",
+  massFlow: "kg/s",
+  velocity: "m/s",
+  pressure: "Pa",
+  area: "m²",
+  density: "kg/m³",
+  volumeFlow: "m³/s",
+  stiffness: "N/m",
+  rotationalStiffness: "N·m/rad",
+  acceleration: "m/s²",
+  ratio: "",
+};
+
 const KIND_WORDS: Record<FieldKind, string> = {
   length: "a length (m)",
   angle: "an angle (deg)",

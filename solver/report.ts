@@ -3,6 +3,8 @@
 // (or text); formatting is left to whoever shows them.
 import type { CaseRun, StudyResult } from "./cases";
 import { handCheckSums, termMomentAbout } from "./equations";
+import { FIELD_UNIT_LABELS } from "./expressions";
+import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { BodyStability } from "./stability";
 import type { SolveResult, Vec2 } from "./types";
@@ -222,13 +224,6 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
   }
 }
 
-/** SI unit shown after an evaluated field, by field name. */
-const FIELD_UNIT: Record<string, string> = {
-  mass: "kg", angle: "°", mu: "", stiffness: "N/m", rotationalStiffness: "N·m/rad", magnitude: "N", fx: "N", fy: "N",
-  value: "N·m", w1: "N/m", w2: "N/m", massFlow: "kg/s", velocity: "m/s", pressure: "Pa", area: "m²", density: "kg/m³",
-  volumeFlow: "m³/s", ax: "m/s²", ay: "m/s²", gravity: "m/s²",
-};
-
 /** Parameters as typed and as evaluated. */
 export function parametersTable(parsed: Extract<ParseResult, { ok: true }>): Table {
   return {
@@ -253,7 +248,8 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
   const groups = ["bodies", "supports", "loads", "ports", "massSources"] as const;
   const show = (raw: unknown, path: string, name: string): string => {
     const v = parsed.fields[path];
-    const unit = FIELD_UNIT[name] ?? "";
+    const kind = FIELD_KIND_BY_NAME[name];
+    const unit = kind ? FIELD_UNIT_LABELS[kind] : "";
     if (typeof raw === "number") return `${Number(raw.toPrecision(6))}${unit ? " " + unit : ""}`;
     if (typeof raw === "string" && v && "value" in v) return `${raw} = ${Number(v.value.toPrecision(5))}${unit ? " " + unit : ""}`;
     return String(raw);

@@ -64,6 +64,9 @@ const FIELD_KINDS: Record<string, Record<string, FieldKind>> = {
 };
 const POINT_FIELDS = new Set(["at", "from", "to", "cg"]);
 
+/** The kind of a numeric field by its name alone (no name means two things in the format). */
+export const FIELD_KIND_BY_NAME: Readonly<Record<string, FieldKind>> = Object.assign({ gravity: "acceleration" as FieldKind }, ...Object.values(FIELD_KINDS));
+
 export function resolveSketch(file: SketchFile): ResolveOutput {
   const params = resolveParameters(file.parameters);
   const errors: FieldError[] = [...params.errors];

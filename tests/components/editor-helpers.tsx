@@ -4,6 +4,12 @@ import { render, screen } from "@testing-library/react";
 import { Editor } from "@/components/editor/Editor";
 import { scratchPersistence } from "@/canvas/persistence";
 import type { SketchFile } from "@/solver/schema";
+import { createEditorStore } from "@/canvas/store";
+import { EditorProvider } from "@/canvas/context";
+import { importSketchText } from "@/canvas/files";
+import type { ActionContext } from "@/canvas/actions";
+import { ResultsDock } from "@/components/results/ResultsDock";
+import { ActionContextCtx } from "@/components/editor/useActions";
 
 export function memoryStorage(initial?: SketchFile) {
   const mem = new Map<string, string>();
@@ -31,4 +37,20 @@ export async function renderEditor(sketch?: SketchFile, example?: string) {
 export function storedSketch(mem: Map<string, string>): SketchFile | undefined {
   const raw = mem.get("counterpoise:scratch-sketch:v1");
   return raw ? (JSON.parse(raw).sketch as SketchFile) : undefined;
+}
+
+/** The results dock alone, around an editor store holding `doc` (a sketch file as JSON). */
+export function mountResultsDock(doc: unknown) {
+  const file = importSketchText(JSON.stringify(doc));
+  if (!file.ok) throw new Error("fixture does not import");
+  const editor = createEditorStore({ sketch: file.sketch });
+  const ctx = { stores: null as never, controller: null, ui: {} as ActionContext["ui"] };
+  render(
+    <EditorProvider editor={editor}>
+      <ActionContextCtx.Provider value={() => ctx}>
+        <ResultsDock />
+      </ActionContextCtx.Provider>
+    </EditorProvider>,
+  );
+  return editor;
 }

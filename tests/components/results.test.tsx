@@ -2,19 +2,14 @@
 // examples), the hand check's sums against the solver's, and the force-on-body / load-on-support
 // switch flipping every sign and saying so.
 import { readFileSync, readdirSync } from "node:fs";
-import { render, screen, within, act } from "@testing-library/react";
+import { screen, within, act } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
+import { mountResultsDock } from "./editor-helpers";
 import { handCheckSums, parseSketch, solve, type SolveResult, type Sketch } from "@/solver/index";
 import { formatQuantity } from "@/solver/units";
-import { createEditorStore } from "@/canvas/store";
-import { EditorProvider } from "@/canvas/context";
-import { ResultsDock } from "@/components/results/ResultsDock";
 import { statusSentences } from "@/components/results/statusSentence";
 import { handCheckBlocks } from "@/components/results/handCheck";
-import { ActionContextCtx } from "@/components/editor/useActions";
-import { importSketchText } from "@/canvas/files";
-import type { ActionContext } from "@/canvas/actions";
 
 const DIR = "tests/fixtures/sketches";
 const load = (name: string) => JSON.parse(readFileSync(`${DIR}/${name}.json`, "utf8"));
@@ -120,20 +115,7 @@ describe("hand check", () => {
   });
 });
 
-function mountDock(doc: unknown) {
-  const file = importSketchText(JSON.stringify(doc));
-  if (!file.ok) throw new Error("fixture does not import");
-  const editor = createEditorStore({ sketch: file.sketch });
-  const ctx = { stores: null as never, controller: null, ui: {} as ActionContext["ui"] };
-  render(
-    <EditorProvider editor={editor}>
-      <ActionContextCtx.Provider value={() => ctx}>
-        <ResultsDock />
-      </ActionContextCtx.Provider>
-    </EditorProvider>,
-  );
-  return editor;
-}
+const mountDock = mountResultsDock;
 
 const cells = (col: string) => [...document.querySelectorAll(`[data-testid=reactions] td[data-col=${col}]`)].map((c) => c.textContent!);
 const num = (t: string) => (t === "—" ? null : Number(t.replace(/,/g, "").replace("−", "-")));

@@ -1,33 +1,15 @@
 // The Cases and Sweep tabs: the case table equals the cases solved one by one, with the governing
 // case marked; a sweep plots and marks the crossing; the limit finder answers in words.
 import { readFileSync } from "node:fs";
-import { render, screen, waitFor, within } from "@testing-library/react";
+import { screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
+import { mountResultsDock } from "./editor-helpers";
 import { parseSketch, solve, solveCases } from "@/solver/index";
-import { createEditorStore } from "@/canvas/store";
-import { EditorProvider } from "@/canvas/context";
-import { importSketchText } from "@/canvas/files";
-import { ResultsDock } from "@/components/results/ResultsDock";
-import { ActionContextCtx } from "@/components/editor/useActions";
-import type { ActionContext } from "@/canvas/actions";
 
 const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n}.json`, "utf8"));
 
-function mount(doc: unknown) {
-  const file = importSketchText(JSON.stringify(doc));
-  if (!file.ok) throw new Error("fixture does not import");
-  const editor = createEditorStore({ sketch: file.sketch });
-  const ctx = { stores: null as never, controller: null, ui: {} as ActionContext["ui"] };
-  render(
-    <EditorProvider editor={editor}>
-      <ActionContextCtx.Provider value={() => ctx}>
-        <ResultsDock />
-      </ActionContextCtx.Provider>
-    </EditorProvider>,
-  );
-  return editor;
-}
+const mount = mountResultsDock;
 
 const num = (t: string) => Number(t.replace(/,/g, "").replace("−", "-"));
 
