@@ -2,10 +2,10 @@
 // it lands on an edge (a contact pushes into the body, an outlet flows out of it).
 import type { SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
-import { addElement } from "./commands/elements";
+import { addElement, attachToBody } from "./commands/elements";
 import type { Command } from "./commands/define";
 import { nearestOnOutline, outwardNormal, angleOf, pointInPolygon, boxContains, type Box } from "./geometry/polygon";
-import { nextId, type ElementKind, GROUP_OF } from "./model/elements";
+import { findElement, nextId, type Attached, type ElementKind, GROUP_OF } from "./model/elements";
 import { newAttached, newBody, DEFAULT_ANGLE } from "./model/factory";
 import { anchorOf, pointsOf, type Scene, type SceneBody } from "./scene";
 
@@ -75,4 +75,18 @@ export function elementsInBox(scene: Scene, box: Box): string[] {
   for (const b of scene.bodies) if (b.outline.length && b.outline.every((p) => boxContains(box, p))) out.push(b.id);
   for (const it of scene.items) if (pointsOf(it).every((p) => boxContains(box, p)) || boxContains(box, anchorOf(it))) out.push(it.id);
   return out;
+}
+
+/** After a drag: supports, loads and ports dropped on another body attach to it (moving bodies carry theirs). */
+export function dropAttachments(sketch: SketchFile, scene: Scene, ids: readonly string[], tol: number): Command<unknown>[] {
+  const cmds: Command<unknown>[] = [];
+  const movingBodies = new Set(ids.filter((id) => findElement(sketch, id)?.group === "bodies"));
+  for (const id of ids) {
+    const l = findElement(sketch, id);
+    const item = scene.byId.get(id);
+    if (!l || l.group === "bodies" || !item || movingBodies.has((l.el as Attached).body)) continue;
+    const target = bodyAt(scene.bodies.filter((b) => !movingBodies.has(b.id)), anchorOf(item), tol);
+    if (target && target.id !== (l.el as Attached).body) cmds.push(attachToBody({ ids: [id], body: target.id }) as Command<unknown>);
+  }
+  return cmds;
 }

@@ -83,13 +83,14 @@ function Elements({ interaction, lifted }: { interaction: InteractionStore; lift
   const scale = useEditor((s) => s.view.scale);
   const units = useEditor((s) => s.units);
   const states = useAnalysis((s) => statesOf(s.shown));
+  const seeThrough = useEditor((s) => Boolean(s.sketch.underlay && !s.sketch.underlay.hidden));
   const selected = useMemo(() => new Set(selection), [selection]);
   const bodies = useMemo(() => bodyIds.filter((id) => up.has(id) === lifted), [bodyIds, up, lifted]);
   const items = useMemo(() => itemIds.filter((id) => up.has(id) === lifted), [itemIds, up, lifted]);
   return (
     <>
       {bodies.map((id) => (
-        <BodyNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} />
+        <BodyNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} seeThrough={seeThrough} />
       ))}
       {items.map((id) => (
         <ItemNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} state={states.get(id)} />

@@ -11,7 +11,7 @@ import type { SceneBody, SceneItem } from "../scene";
 import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, type DrawState } from "../render/symbols";
 import { supportStates } from "../render/results";
 import { primsBox, type Prim } from "../render/prims";
-import { ACCENT, INK } from "../render/palette";
+import { ACCENT, BODY_FILL, INK } from "../render/palette";
 import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
 
@@ -52,9 +52,15 @@ export interface NodeProps {
   units: UnitSystem;
 }
 
-export const BodyNode = memo(function BodyNode({ id, selected, scale, units }: NodeProps) {
+/** A body's fill over an underlay: the drawing shows through, so the trace can be checked. */
+const SEE_THROUGH_FILL = "rgba(230,223,208,0.42)";
+
+export const BodyNode = memo(function BodyNode({ id, selected, scale, units, seeThrough }: NodeProps & { seeThrough?: boolean }) {
   const body = useScene((s) => s.byId.get(id)) as SceneBody | undefined;
-  const prims = useMemo(() => (body ? bodyPrims(body, { units, scale, color: selected ? ACCENT : INK }) : []), [body, units, scale, selected]);
+  const prims = useMemo(() => {
+    const out = body ? bodyPrims(body, { units, scale, color: selected ? ACCENT : INK }) : [];
+    return seeThrough ? out.map((p) => ("fill" in p && p.fill === BODY_FILL ? { ...p, fill: SEE_THROUGH_FILL } : p)) : out;
+  }, [body, units, scale, selected, seeThrough]);
   if (!body || body.outline.length < 3) return null;
   const pts = body.outline.map((p) => [p[0] * scale, -p[1] * scale]);
   return (

@@ -4,15 +4,14 @@
 import type { Vec2 } from "@/solver/types";
 import { moveElement, moveCentreOfGravity } from "../commands/move";
 import { rotateElement, reshapeBody } from "../commands/shape";
-import { attachToBody } from "../commands/elements";
 import type { Command } from "../commands/define";
 import type { EditorStores } from "../context";
-import { childrenOf, findElement, type Attached } from "../model/elements";
+import { childrenOf, findElement } from "../model/elements";
 import { snapPoint, snapTo, type SnapResult } from "../geometry/snap";
 import { gridStep, toWorld, zoomAt } from "../geometry/view";
 import { angleOf } from "../geometry/polygon";
 import { anchorOf, type SceneItem } from "../scene";
-import { bodyAt, bodyCommand, elementsInBox, placeCommand } from "../placement";
+import { bodyCommand, dropAttachments, elementsInBox, placeCommand } from "../placement";
 import { rectangleOutline } from "../model/factory";
 import { markInput } from "../perf";
 import { moveUnderlay } from "../commands/underlay";
@@ -307,17 +306,7 @@ export function createPointerController(deps: PointerDeps) {
           return;
         }
         // supports, loads and ports attach to the body they are dropped on
-        const sketch = s.sketch;
-        const scene = stores.scene.getState();
-        const cmds: Command<unknown>[] = [];
-        const movingBodies = new Set(m.ids.filter((id) => findElement(sketch, id)?.group === "bodies"));
-        for (const id of m.ids) {
-          const l = findElement(sketch, id);
-          const item = scene.byId.get(id);
-          if (!l || l.group === "bodies" || !item || movingBodies.has((l.el as Attached).body)) continue;
-          const target = bodyAt(scene.bodies.filter((b) => !movingBodies.has(b.id)), anchorOf(item), tolerance());
-          if (target && target.id !== (l.el as Attached).body) cmds.push(attachToBody({ ids: [id], body: target.id }) as Command<unknown>);
-        }
+        const cmds = dropAttachments(s.sketch, stores.scene.getState(), m.ids, tolerance());
         // the move from the origin, then the attachments: still one undo step
         if (cmds.length && m.last) s.updateGesture([m.last, ...cmds]);
         s.endGesture();

@@ -1,7 +1,7 @@
 // Shared class names of the editor's panels: one look for headings, inputs and small buttons.
 export const HEADING = "text-[11px] font-semibold uppercase tracking-[0.14em] text-ink-faint";
 export const INPUT =
-  "num h-7 w-full rounded border border-rule bg-white px-2 text-[13px] text-ink placeholder:text-ink-faint/70 focus:border-accent focus:outline-none focus:ring-2 focus:ring-accent/25 aria-[invalid=true]:border-caution aria-[invalid=true]:bg-caution-soft/40";
+  "num h-7 w-full rounded border border-rule bg-white px-2 text-[13px] text-ink placeholder:text-ink-faint/70 focus:border-accent focus:outline-none focus:ring-2 focus:ring-accent/25 aria-[invalid=true]:border-caution aria-[invalid=true]:bg-caution-soft/40 disabled:cursor-not-allowed disabled:bg-paper disabled:text-ink-soft";
 export const BUTTON =
   "inline-flex h-7 items-center gap-1.5 rounded border border-rule bg-paper-card px-2.5 text-[12.5px] font-medium text-ink-soft hover:border-ink/30 hover:text-ink disabled:cursor-not-allowed disabled:opacity-40";
 export const ICON_BUTTON =
