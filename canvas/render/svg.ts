@@ -24,7 +24,14 @@ export interface SvgOptions {
   caption?: string;
   /** the legend of line styles under the drawing (default true when a result is drawn) */
   legend?: boolean;
+  /**
+   * fit this world box (m) instead of the sketch's own, centred on it: two drawings given the
+   * same box share scale and origin, so they can be laid over each other
+   */
+  world?: WorldBox;
 }
+
+export type WorldBox = { minX: number; minY: number; maxX: number; maxY: number };
 
 const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 const n = (x: number) => (Math.round(x * 100) / 100).toString();
@@ -75,6 +82,28 @@ export function scenePrims(scene: Scene, scale: number, units: UnitSystem, resul
   return { groups, results: drawing?.prims ?? [] };
 }
 
+function sceneOf(file: SketchFile | SketchFileInput) {
+  const parsed = parseSketch(file);
+  const doc = ("file" in parsed && parsed.ok ? parsed.file : file) as SketchFile;
+  const structural = parsed.ok || Object.keys(parsed.fields).length > 0;
+  const scene = structural ? buildScene(doc, fieldValuesById(doc, parsed.fields, parsed.ok ? [] : parsed.errors)) : null;
+  return { parsed, doc, scene };
+}
+
+const worldOf = (scene: Scene): WorldBox => boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
+
+/** The box (m) around every body and element of the given sketches: a shared frame for an overlay. */
+export function sketchWorldBox(...files: Array<SketchFile | SketchFileInput>): WorldBox | undefined {
+  const boxes = files.map((f) => sceneOf(f).scene).filter((s): s is Scene => s !== null).map(worldOf).filter((b) => Number.isFinite(b.minX));
+  if (!boxes.length) return undefined;
+  return {
+    minX: Math.min(...boxes.map((b) => b.minX)),
+    minY: Math.min(...boxes.map((b) => b.minY)),
+    maxX: Math.max(...boxes.map((b) => b.maxX)),
+    maxY: Math.max(...boxes.map((b) => b.maxY)),
+  };
+}
+
 /**
  * Render a sketch file (numbers or expressions, any supported format version) and optionally
  * its solve result as a standalone SVG document.
@@ -83,32 +112,34 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
   const units = opts.units ?? "SI";
   const width = opts.width ?? 960;
   const height = opts.height ?? 640;
-  const parsed = parseSketch(file);
-  const doc = ("file" in parsed && parsed.ok ? parsed.file : file) as SketchFile;
-  const structural = parsed.ok || Object.keys(parsed.fields).length > 0;
+  const { parsed, doc, scene } = sceneOf(file);
   const bg = opts.background === "none" ? "" : `<rect width="100%" height="100%" fill="${PAPER}"/>`;
   const head = `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" font-family="${FONT_STACK}">`;
   const title = `<title>${esc(doc.title || "Counterpoise sketch")}</title>`;
-  if (!structural) {
+  if (!scene) {
     const msg = parsed.ok ? "" : parsed.errors.map((e) => `${e.path || "file"}: ${e.message}`).join("; ");
     return `${head}${title}${bg}<text x="24" y="40" font-size="14" fill="${INK_FAINT}">This sketch cannot be drawn: ${esc(msg)}</text></svg>`;
   }
-  const fv = fieldValuesById(doc, parsed.fields, parsed.ok ? [] : parsed.errors);
-  const scene = buildScene(doc, fv);
   const footer = (opts.caption ? 22 : 0) + ((opts.legend ?? !!result) ? 22 : 0);
 
   // fit: world box → pixels, leaving room for symbols and labels that do not scale
-  const world = boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
+  const world = opts.world ?? worldOf(scene);
   const pad = 96;
   const w = Math.max(world.maxX - world.minX, 0.2);
   const h = Math.max(world.maxY - world.minY, 0.2);
   const scale = Number.isFinite(w) ? Math.min((width - 2 * pad) / w, (height - footer - 2 * pad) / h) : 100;
   const { groups, results } = scenePrims(scene, scale, units, result, opts.stale);
-  // centre what is actually drawn (labels included)
-  const all = [...groups.flatMap((g) => g.prims), ...results];
-  const box = primsBox(all);
-  const dx = Number.isFinite(box.minX) ? (width - (box.maxX - box.minX)) / 2 - box.minX : width / 2;
-  const dy = Number.isFinite(box.minY) ? (height - footer - (box.maxY - box.minY)) / 2 - box.minY : height / 2;
+  // centre what is actually drawn (labels included), or the shared world box
+  let dx: number;
+  let dy: number;
+  if (opts.world && Number.isFinite(w)) {
+    dx = width / 2 - ((world.minX + world.maxX) / 2) * scale;
+    dy = (height - footer) / 2 + ((world.minY + world.maxY) / 2) * scale;
+  } else {
+    const box = primsBox([...groups.flatMap((g) => g.prims), ...results]);
+    dx = Number.isFinite(box.minX) ? (width - (box.maxX - box.minX)) / 2 - box.minX : width / 2;
+    dy = Number.isFinite(box.minY) ? (height - footer - (box.maxY - box.minY)) / 2 - box.minY : height / 2;
+  }
 
   const body = groups.map((g) => `<g data-id="${esc(g.id)}" data-kind="${g.kind}">${primsToSvg(g.prims)}</g>`).join("");
   const res = results.length ? `<g class="results">${primsToSvg(results)}</g>` : "";

@@ -15,7 +15,7 @@ import { exampleById } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
 import { replaceSketch } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
-import type { UnitSystem } from "@/solver/units";
+import { readUnitsPreference, writeUnitsPreference } from "@/components/sketches/format";
 import { ResultsDock } from "@/components/results/ResultsDock";
 import { ImportErrorDialog } from "./ImportErrorDialog";
 import { Outline } from "./Outline";
@@ -32,7 +32,6 @@ const SketchCanvas = dynamic(() => import("@/canvas/konva/SketchCanvas"), {
   loading: () => <div className="flex h-full items-center justify-center text-sm text-ink-faint">Preparing the drawing…</div>,
 });
 
-const UNITS_KEY = "counterpoise:units";
 
 function StatusLine() {
   const notice = useEditor((s) => s.notice);
@@ -201,10 +200,9 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
 
   useEffect(() => {
     let live = true;
-    const units = window.localStorage.getItem(UNITS_KEY);
-    if (units === "US" || units === "SI") store.getState().setUnits(units as UnitSystem);
+    store.getState().setUnits(readUnitsPreference());
     const unsub = store.subscribe((s, p) => {
-      if (s.units !== p.units) window.localStorage.setItem(UNITS_KEY, s.units);
+      if (s.units !== p.units) writeUnitsPreference(s.units);
     });
     void persistence.load().then((out) => {
       if (!live) return;

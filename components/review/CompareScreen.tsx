@@ -5,13 +5,16 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
-import { Notice, Panel, Select, Skeleton } from "@/components/shell/controls";
+import { sketchWorldBox } from "@/canvas/render/svg";
+import { useUnitsPreference } from "@/components/sketches/useUnitsPreference";
+import { Notice, Panel, Segmented, Select, Skeleton } from "@/components/shell/controls";
 import { discardDraft, readDraft } from "@/components/versions/editor/drafts";
 import { useVersions } from "@/components/versions/VersionHistory";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { changeCount, compareSketches } from "@/lib/review/compare";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
+import type { UnitSystem } from "@/solver/units";
 import { ChangesTable, ReactionsTable } from "./CompareTables";
 import { ReviewDrawing } from "./ReviewDrawing";
 
@@ -35,7 +38,9 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
   const versions = useVersions(sketchId);
   const a = useDocument(sketchId, from);
   const b = useDocument(sketchId, to);
-  const comparison = useMemo(() => (a.doc && b.doc ? compareSketches(a.doc, b.doc) : null), [a.doc, b.doc]);
+  const [units, setUnits] = useUnitsPreference();
+  const [layout, setLayout] = useState<"side" | "overlay">("side");
+  const comparison = useMemo(() => (a.doc && b.doc ? compareSketches(a.doc, b.doc, units) : null), [a.doc, b.doc, units]);
   const base = `/workspaces/${workspaceId}/sketches/${sketchId}`;
   const go = (f: number, t: number | "draft") => router.replace(`${base}/compare?from=${f}&to=${t}`);
   const toLabel = to === "draft" ? "your changes" : `v${to}`;
@@ -72,6 +77,26 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
               ))}
             </Select>
           </div>
+          <Segmented
+            label="Drawings"
+            testId="compare-layout"
+            value={layout}
+            onChange={setLayout}
+            options={[
+              { value: "side", label: "Side by side" },
+              { value: "overlay", label: "Overlaid", title: "The earlier version faint and grey under the later one, at the same scale" },
+            ]}
+          />
+          <Segmented
+            label="Units"
+            testId="compare-units"
+            value={units}
+            onChange={setUnits}
+            options={[
+              { value: "SI", label: "SI", title: "SI units (kN, m, kPa)" },
+              { value: "US", label: "US", title: "US customary units (lbf, ft, psi)" },
+            ]}
+          />
           {to === "draft" && b.doc ? (
             <div className="flex gap-2 text-sm">
               <a href={`/sketches/${sketchId}?restore=1`} className="rounded-md bg-ink px-3 py-2 font-medium text-paper hover:bg-ink-soft">
@@ -103,27 +128,63 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
             {changeCount(comparison) === 0 ? "The inputs are the same." : `${changeCount(comparison)} change${changeCount(comparison) === 1 ? "" : "s"} in the inputs.`}{" "}
             {comparison.bodies.map((x) => (x.words ? `${x.label}: ${x.words}. ` : `${x.label} ${x.after ?? "—"}, as before. `))}
           </p>
-          <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side">
-            <figure className="space-y-1">
-              <figcaption className="text-sm font-semibold">Before: {a.label}</figcaption>
-              <ReviewDrawing document={a.doc!} marks={comparison.marks.before} label={`Before: ${a.label}`} width={840} height={520} />
-            </figure>
-            <figure className="space-y-1">
-              <figcaption className="text-sm font-semibold">After: {b.label}</figcaption>
-              <ReviewDrawing document={b.doc!} marks={comparison.marks.after} label={`After: ${b.label}`} width={840} height={520} />
-            </figure>
-          </div>
+          {layout === "side" ? (
+            <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side">
+              <figure className="space-y-1">
+                <figcaption className="text-sm font-semibold">Before: {a.label}</figcaption>
+                <ReviewDrawing document={a.doc!} marks={comparison.marks.before} label={`Before: ${a.label}`} width={840} height={520} units={units} />
+              </figure>
+              <figure className="space-y-1">
+                <figcaption className="text-sm font-semibold">After: {b.label}</figcaption>
+                <ReviewDrawing document={b.doc!} marks={comparison.marks.after} label={`After: ${b.label}`} width={840} height={520} units={units} />
+              </figure>
+            </div>
+          ) : (
+            <Overlay before={a.doc!} after={b.doc!} beforeLabel={a.label ?? ""} afterLabel={b.label ?? ""} marks={comparison.marks} units={units} />
+          )}
           <p className="text-xs text-ink-faint">
             Outlines: dashed with △ changed, solid with + added, dotted with × removed. <span className="font-semibold text-caution">Caution:</span> {CAUTION_SHORT}
           </p>
-          <Panel title="Reactions" description="The resultant force at each support, before and after, and how much it changed.">
-            <ReactionsTable comparison={comparison} />
+          <Panel title="Reactions" description="Each support's reaction on the body, before and after: the resultant and how much it changed, then its components.">
+            <ReactionsTable comparison={comparison} units={units} />
           </Panel>
-          <Panel title="What changed" description="Every input that differs, as written, with its value in SI units.">
+          <Panel title="What changed" description={`Every input that differs, as written, with its value in ${units === "SI" ? "SI" : "US customary"} units.`}>
             <ChangesTable comparison={comparison} />
           </Panel>
         </>
       )}
     </div>
+  );
+}
+
+/** Both drawings at one scale and origin: the earlier one faint and grey, the later one over it. */
+function Overlay({
+  before,
+  after,
+  beforeLabel,
+  afterLabel,
+  marks,
+  units,
+}: {
+  before: SketchFile;
+  after: SketchFile;
+  beforeLabel: string;
+  afterLabel: string;
+  marks: { before: Record<string, "removed" | "changed">; after: Record<string, "added" | "changed"> };
+  units: UnitSystem;
+}) {
+  const world = useMemo(() => sketchWorldBox(before, after), [before, after]);
+  const removed = useMemo(() => Object.fromEntries(Object.entries(marks.before).filter(([, k]) => k === "removed")), [marks.before]);
+  return (
+    <figure className="space-y-1" data-testid="compare-overlay">
+      <figcaption className="text-sm">
+        <span className="font-semibold">After: {afterLabel}</span> <span className="text-ink-soft">in full, over</span>{" "}
+        <span className="font-semibold text-ink-soft">before: {beforeLabel}</span> <span className="text-ink-soft">drawn faint and grey, at the same scale.</span>
+      </figcaption>
+      <div className="relative overflow-hidden rounded-md border border-rule bg-paper">
+        <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} world={world} layer className="opacity-40 grayscale" />
+        <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} world={world} layer className="compare-over absolute inset-0" />
+      </div>
+    </figure>
   );
 }

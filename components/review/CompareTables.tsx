@@ -1,15 +1,29 @@
 // The tables of a comparison: reactions before and after with the change, and every changed input.
 import { Fragment } from "react";
 import { formatForce } from "@/components/sketches/format";
-import type { Comparison, FieldChange } from "@/lib/review/compare";
-import { formatNumber } from "@/solver/units";
+import type { Comparison, FieldChange, ReactionChange, ReactionSnapshot } from "@/lib/review/compare";
+import { formatNumber, formatQuantity, type UnitSystem } from "@/solver/units";
 
-function signed(newtons: number): string {
-  if (Math.abs(newtons) < 0.5) return "±0 N";
-  return `${newtons > 0 ? "+" : "−"}${formatForce(Math.abs(newtons))}`;
+function signed(newtons: number, units: UnitSystem): string {
+  if (Math.abs(newtons) < 0.5) return units === "SI" ? "±0 N" : "±0 lbf";
+  return `${newtons > 0 ? "+" : "−"}${formatForce(Math.abs(newtons), units)}`;
 }
 
-export function ReactionsTable({ comparison }: { comparison: Comparison }) {
+const COMPONENTS: Array<{ key: keyof Pick<ReactionSnapshot, "fx" | "fy" | "m">; label: string }> = [
+  { key: "fx", label: "Fx" },
+  { key: "fy", label: "Fy" },
+  { key: "m", label: "M" },
+];
+
+/** "Fx 1.2 kN → 1.4 kN · Fy … · M …": the components that are not zero on either side. */
+function componentsText(r: ReactionChange, units: UnitSystem): string {
+  const show = (s: ReactionSnapshot | null, key: "fx" | "fy" | "m") => (s ? formatQuantity(s[key], key === "m" ? "moment" : "force", units) : "—");
+  return COMPONENTS.filter(({ key }) => Math.abs(r.before?.[key] ?? 0) > 1e-9 || Math.abs(r.after?.[key] ?? 0) > 1e-9 || key !== "m")
+    .map(({ key, label }) => `${label} ${show(r.before, key)} → ${show(r.after, key)}`)
+    .join(" · ");
+}
+
+export function ReactionsTable({ comparison, units = "SI" }: { comparison: Comparison; units?: UnitSystem }) {
   if (!comparison.reactions.length) return <p className="text-sm text-ink-soft">Neither version has a support.</p>;
   return (
     <div className="overflow-x-auto">
@@ -18,7 +32,7 @@ export function ReactionsTable({ comparison }: { comparison: Comparison }) {
         <thead>
           <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
             <th scope="col" className="py-1.5 pr-3 font-semibold">Support</th>
-            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Before</th>
+            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Resultant before</th>
             <th scope="col" className="py-1.5 pr-3 text-right font-semibold">After</th>
             <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Change</th>
             <th scope="col" className="py-1.5 pr-3 text-right font-semibold">%</th>
@@ -27,14 +41,21 @@ export function ReactionsTable({ comparison }: { comparison: Comparison }) {
         </thead>
         <tbody>
           {comparison.reactions.map((r) => (
-            <tr key={r.id} className="num border-b border-rule-soft last:border-0" data-testid={`reaction-${r.id}`}>
-              <td className="py-1.5 pr-3 font-medium">{r.label}</td>
-              <td className="py-1.5 pr-3 text-right">{r.before ? formatForce(r.before.resultant) : "— (new)"}</td>
-              <td className="py-1.5 pr-3 text-right">{r.after ? formatForce(r.after.resultant) : "— (removed)"}</td>
-              <td className="py-1.5 pr-3 text-right font-medium">{r.change ? signed(r.change.abs) : "—"}</td>
-              <td className="py-1.5 pr-3 text-right">{r.change?.pct === null || !r.change ? "—" : `${r.change.pct > 0 ? "+" : r.change.pct < 0 ? "−" : ""}${formatNumber(Math.abs(r.change.pct), 3)} %`}</td>
-              <td className="py-1.5">{r.stateChange ? <strong className="text-caution">{r.stateChange}</strong> : (r.after?.state ?? r.before?.state ?? "—")}</td>
-            </tr>
+            <Fragment key={r.id}>
+              <tr className="num" data-testid={`reaction-${r.id}`}>
+                <td className="pt-1.5 pr-3 font-medium">{r.label}</td>
+                <td className="pt-1.5 pr-3 text-right">{r.before ? formatForce(r.before.resultant, units) : "— (new)"}</td>
+                <td className="pt-1.5 pr-3 text-right">{r.after ? formatForce(r.after.resultant, units) : "— (removed)"}</td>
+                <td className="pt-1.5 pr-3 text-right font-medium">{r.change ? signed(r.change.abs, units) : "—"}</td>
+                <td className="pt-1.5 pr-3 text-right">{r.change?.pct === null || !r.change ? "—" : `${r.change.pct > 0 ? "+" : r.change.pct < 0 ? "−" : ""}${formatNumber(Math.abs(r.change.pct), 3)} %`}</td>
+                <td className="pt-1.5">{r.stateChange ? <strong className="text-caution">{r.stateChange}</strong> : (r.after?.state ?? r.before?.state ?? "—")}</td>
+              </tr>
+              <tr className="num border-b border-rule-soft last:border-0" data-testid={`reaction-${r.id}-components`}>
+                <td colSpan={6} className="pb-1.5 pl-3 pt-0.5 text-xs text-ink-soft">
+                  {componentsText(r, units)}
+                </td>
+              </tr>
+            </Fragment>
           ))}
         </tbody>
       </table>

@@ -3,9 +3,10 @@
 // marks on top: comment pins, outlines around what a comparison found changed, and (while
 // pinning a new comment) a click picks an element or a point.
 import { useLayoutEffect, useMemo, useRef } from "react";
-import { renderSketchSvg } from "@/canvas/render/svg";
+import { renderSketchSvg, type WorldBox } from "@/canvas/render/svg";
 import { parseSketch, solve, type SolveResult } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
+import type { UnitSystem } from "@/solver/units";
 import { drawingScale, drawMarks, drawPins, worldPoint, type MarkKind, type PinMarker } from "./drawingOverlay";
 
 export type PickedPin = { kind: "element"; elementId: string; label: string } | { kind: "point"; at: [number, number] };
@@ -36,6 +37,10 @@ export function ReviewDrawing({
   label,
   width = 880,
   height = 520,
+  units = "SI",
+  world,
+  layer = false,
+  className = "",
 }: {
   document: SketchFile;
   marks?: Record<string, MarkKind>;
@@ -48,11 +53,20 @@ export function ReviewDrawing({
   /** the drawing's size in SVG pixels; it is shown at the width of its column */
   width?: number;
   height?: number;
+  units?: UnitSystem;
+  /** a shared frame (m), so that two drawings line up */
+  world?: WorldBox;
+  /** drawn as a see-through layer over another drawing: no paper, no legend, no border */
+  layer?: boolean;
+  className?: string;
 }) {
   const box = useRef<HTMLDivElement>(null);
   const { result, sketch } = useSolved(document);
   // The renderer escapes every text it draws (titles, labels, values), so its output is markup we made.
-  const svg = useMemo(() => renderSketchSvg(document, result, { width, height, caption, legend: true }), [document, result, width, height, caption]);
+  const svg = useMemo(
+    () => renderSketchSvg(document, result, { width, height, caption, units, world, legend: !layer, background: layer ? "none" : "paper" }),
+    [document, result, width, height, caption, units, world, layer],
+  );
 
   useLayoutEffect(() => {
     const el = box.current?.querySelector("svg");
@@ -68,7 +82,7 @@ export function ReviewDrawing({
       aria-label={label}
       data-testid="review-drawing"
       data-picking={picking || undefined}
-      className={`overflow-hidden rounded-md border border-rule bg-paper [&>svg]:block [&>svg]:h-auto [&>svg]:w-full ${picking ? "cursor-crosshair ring-2 ring-accent/40" : ""}`}
+      className={`overflow-hidden [&>svg]:block [&>svg]:h-auto [&>svg]:w-full ${layer ? "" : "rounded-md border border-rule bg-paper"} ${picking ? "cursor-crosshair ring-2 ring-accent/40" : ""} ${className}`}
       onClick={(e) => {
         const target = e.target as Element;
         const thread = target.closest("[data-thread]");

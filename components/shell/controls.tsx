@@ -151,3 +151,29 @@ export function Panel({ title, description, children, aside }: { title: string; 
     </section>
   );
 }
+
+/** A choice of two or three ways to show the same thing (a labelled radio group of buttons). */
+export function Segmented<T extends string>({ label, value, options, onChange, testId }: { label: string; value: T; options: ReadonlyArray<{ value: T; label: string; title?: string }>; onChange: (v: T) => void; testId?: string }) {
+  return (
+    <div className="space-y-1">
+      <span className="block text-sm font-medium text-ink" id={testId ? `${testId}-label` : undefined}>
+        {label}
+      </span>
+      <div role="radiogroup" aria-label={label} data-testid={testId} className="inline-flex h-[42px] items-center rounded-md border border-rule bg-paper-card p-1 text-sm">
+        {options.map((o) => (
+          <button
+            key={o.value}
+            type="button"
+            role="radio"
+            aria-checked={value === o.value}
+            title={o.title}
+            onClick={() => value !== o.value && onChange(o.value)}
+            className={`h-full rounded px-3 font-medium focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-accent/50 ${value === o.value ? "bg-ink text-paper" : "text-ink-soft hover:text-ink"}`}
+          >
+            {o.label}
+          </button>
+        ))}
+      </div>
+    </div>
+  );
+}

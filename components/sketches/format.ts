@@ -1,9 +1,21 @@
 // Numbers and words the sketch screens share. Browser-safe.
-import { formatQuantity } from "@/solver/units";
+import { formatQuantity, type UnitSystem } from "@/solver/units";
 
-/** A force in SI with 3–4 significant figures ("4.62 kN"), or a dash. */
-export function formatForce(newtons: number | null | undefined): string {
-  return newtons === null || newtons === undefined || !Number.isFinite(newtons) ? "—" : formatQuantity(newtons, "force", "SI");
+/** Where the browser keeps the reader's choice of SI or US customary units (editor and review screens). */
+export const UNITS_KEY = "counterpoise:units";
+
+export function readUnitsPreference(): UnitSystem {
+  if (typeof window === "undefined") return "SI";
+  return window.localStorage.getItem(UNITS_KEY) === "US" ? "US" : "SI";
+}
+
+export function writeUnitsPreference(units: UnitSystem): void {
+  if (typeof window !== "undefined") window.localStorage.setItem(UNITS_KEY, units);
+}
+
+/** A force with 3–4 significant figures ("4.62 kN", "1,039 lbf"), or a dash. */
+export function formatForce(newtons: number | null | undefined, units: UnitSystem = "SI"): string {
+  return newtons === null || newtons === undefined || !Number.isFinite(newtons) ? "—" : formatQuantity(newtons, "force", units);
 }
 
 /** "just now", "5 min ago", "3 h ago", "2 days ago" (then the date). */

@@ -5,7 +5,8 @@
 import { parseSketch, solve, type ParseResult, type SolveResult } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
 import type { FieldError } from "@/solver/types";
-import { formatNumber, formatQuantity, type Quantity } from "@/solver/units";
+import { FOOT_M, LBF_N } from "@/solver/constants";
+import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
 
 export const COLLECTIONS = ["bodies", "supports", "loads", "ports", "massSources"] as const;
 export type Collection = (typeof COLLECTIONS)[number];
@@ -86,12 +87,20 @@ const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b)
 /** "1,250 gpm" and "1250gpm" say the same. */
 const sameText = (a: string, b: string) => a.replace(/[\s,]/g, "") === b.replace(/[\s,]/g, "");
 
-function quantityText(si: number, q: Quantity | "rotationalStiffness"): string {
-  return q === "rotationalStiffness" ? `${formatNumber(si)} N·m/rad` : formatQuantity(si, q, "SI");
+const LBF_FT_PER_NM = 1 / (LBF_N * FOOT_M);
+
+function quantityText(si: number, q: Quantity | "rotationalStiffness", units: UnitSystem): string {
+  if (q === "rotationalStiffness") return units === "SI" ? `${formatNumber(si)} N·m/rad` : `${formatNumber(si * LBF_FT_PER_NM)} lbf·ft/rad`;
+  return formatQuantity(si, q, units);
+}
+
+/** A point (m) in the chosen units. */
+function pointText(xs: number[], units: UnitSystem): string {
+  return units === "SI" ? `(${xs.map((x) => formatNumber(x)).join(", ")}) m` : `(${xs.map((x) => formatNumber(x / FOOT_M)).join(", ")}) ft`;
 }
 
 /** A value as written, with its evaluated value and unit beside an expression. */
-function show(raw: unknown, path: string, field: string, fields: ParseResult["fields"]): string | null {
+function show(raw: unknown, path: string, field: string, fields: ParseResult["fields"], units: UnitSystem): string | null {
   if (raw === undefined) return null;
   const q = FIELD_QUANTITY[field];
   const resolved = (p: string) => {
@@ -101,13 +110,13 @@ function show(raw: unknown, path: string, field: string, fields: ParseResult["fi
   if (q && Array.isArray(raw) && raw.length === 2 && !Array.isArray(raw[0])) {
     const xs = [0, 1].map((i) => resolved(`${path}[${i}]`));
     const written = raw.every((x) => typeof x === "number");
-    const values = xs.every((x) => x !== undefined) ? `(${xs.map((x) => formatNumber(x!)).join(", ")}) m` : null;
+    const values = xs.every((x) => x !== undefined) ? pointText(xs as number[], units) : null;
     return written ? (values ?? `(${raw.join(", ")}) m`) : `(${raw.map((x) => String(x)).join(", ")})${values ? ` = ${values}` : ""}`;
   }
   if (q && (typeof raw === "number" || typeof raw === "string")) {
     const si = resolved(path);
     if (si === undefined) return String(raw);
-    const text = quantityText(si, q);
+    const text = quantityText(si, q, units);
     return typeof raw === "number" || sameText(raw, text) ? text : `${raw} (= ${text})`;
   }
   if (typeof raw === "string") return raw;
@@ -115,14 +124,16 @@ function show(raw: unknown, path: string, field: string, fields: ParseResult["fi
   return JSON.stringify(raw);
 }
 
-function outlineChange(before: unknown[], after: unknown[]): FieldChange {
+function outlineChange(before: unknown[], after: unknown[], units: UnitSystem): FieldChange {
   if (before.length !== after.length) return { field: "outline", before: `${before.length} corners`, after: `${after.length} corners` };
   const moved = before.map((p, i) => (same(p, after[i]) ? null : i)).filter((i): i is number => i !== null);
-  const pt = (p: unknown) => `(${(p as unknown[]).map((x) => (typeof x === "number" ? formatNumber(x) : String(x))).join(", ")})`;
+  const k = units === "SI" ? 1 : 1 / FOOT_M;
+  const pt = (p: unknown) => `(${(p as unknown[]).map((x) => (typeof x === "number" ? formatNumber(x * k) : String(x))).join(", ")})`;
+  const unit = units === "SI" ? " m" : " ft";
   return {
     field: "outline",
-    before: moved.map((i) => `corner ${i + 1} ${pt(before[i])}`).join("; ") + " m",
-    after: moved.map((i) => `corner ${i + 1} ${pt(after[i])}`).join("; ") + " m",
+    before: moved.map((i) => `corner ${i + 1} ${pt(before[i])}`).join("; ") + unit,
+    after: moved.map((i) => `corner ${i + 1} ${pt(after[i])}`).join("; ") + unit,
   };
 }
 
@@ -144,16 +155,16 @@ const refOf = (e: { el: AnyElement; collection: Collection }): ElementRef => ({
   label: e.el.label || e.el.id,
 });
 
-function elementFields(a: { el: AnyElement; collection: Collection; index: number }, b: { el: AnyElement; collection: Collection; index: number }, fa: ParseResult["fields"], fb: ParseResult["fields"]) {
+function elementFields(a: { el: AnyElement; collection: Collection; index: number }, b: { el: AnyElement; collection: Collection; index: number }, fa: ParseResult["fields"], fb: ParseResult["fields"], units: UnitSystem) {
   const keys = [...new Set([...Object.keys(a.el), ...Object.keys(b.el)])].filter((k) => k !== "id");
   const changes: FieldChange[] = [];
   for (const k of keys) {
     if (same(a.el[k], b.el[k])) continue;
     if (k === "outline" && Array.isArray(a.el[k]) && Array.isArray(b.el[k])) {
-      changes.push(outlineChange(a.el[k] as unknown[], b.el[k] as unknown[]));
+      changes.push(outlineChange(a.el[k] as unknown[], b.el[k] as unknown[], units));
       continue;
     }
-    changes.push({ field: k, before: show(a.el[k], `${a.collection}[${a.index}].${k}`, k, fa), after: show(b.el[k], `${b.collection}[${b.index}].${k}`, k, fb) });
+    changes.push({ field: k, before: show(a.el[k], `${a.collection}[${a.index}].${k}`, k, fa, units), after: show(b.el[k], `${b.collection}[${b.index}].${k}`, k, fb, units) });
   }
   return changes;
 }
@@ -171,8 +182,8 @@ function snapshot(r: SolveResult["reactions"][string] | undefined): ReactionSnap
   return { fx: r.fx, fy: r.fy, m: r.m, resultant: Math.hypot(r.fx, r.fy), n: r.n ?? null, state: r.state };
 }
 
-/** Compare sketch `a` (before) with sketch `b` (after). */
-export function compareSketches(fileA: SketchFile, fileB: SketchFile): Comparison {
+/** Compare sketch `a` (before) with sketch `b` (after); evaluated values are written in `units`. */
+export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: UnitSystem = "SI"): Comparison {
   const A = side(fileA);
   const B = side(fileB);
   const fa = A.parsed.fields;
@@ -182,7 +193,7 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile): Compariso
   for (const k of ["title", "description", "gravity", "motion"] as const) {
     if (same(A.file[k], B.file[k])) continue;
     if (k === "motion") sketch.push({ field: "motion", before: A.file.motion ? JSON.stringify(A.file.motion) : null, after: B.file.motion ? JSON.stringify(B.file.motion) : null });
-    else sketch.push({ field: k, before: show(A.file[k], k, k, fa), after: show(B.file[k], k, k, fb) });
+    else sketch.push({ field: k, before: show(A.file[k], k, k, fa, units), after: show(B.file[k], k, k, fb, units) });
   }
 
   const pa = A.file.parameters ?? {};
@@ -207,7 +218,7 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile): Compariso
       marks.before[id] = "removed";
       continue;
     }
-    const fields = elementFields(a, b, fa, fb);
+    const fields = elementFields(a, b, fa, fb, units);
     if (fields.length) {
       elements.changed.push({ ...refOf(b), fields });
       marks.before[id] = "changed";

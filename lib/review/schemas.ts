@@ -36,6 +36,7 @@ export const commentParams = z.object({ commentId: z.uuid() });
 export const compareQuery = z.object({
   from: z.coerce.number().int().min(1, "Versions start at 1."),
   to: z.coerce.number().int().min(1, "Versions start at 1."),
+  units: z.enum(["SI", "US"], { error: "units must be SI or US" }).default("SI"),
 });
 
 export const activityQuery = z.object({

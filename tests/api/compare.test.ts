@@ -66,6 +66,13 @@ describe("GET /api/sketches/:id/compare", () => {
     expect(c.marks).toEqual({ before: { trailer: "changed", jack: "changed", nozzle: "changed", supply: "removed" }, after: { trailer: "changed", jack: "changed", nozzle: "changed", wind: "added" } });
   });
 
+  it("writes the evaluated values in US customary units when asked (1 lb = 0.45359237 kg, NIST SP 811)", async () => {
+    const res = await call(compareRoute.GET, { params: { id: sketchId }, cookie: eddie.cookie, path: `/api/sketches/${sketchId}/compare?from=1&to=2&units=US` });
+    expect(res.status).toBe(200);
+    const trailer = res.body.comparison.elements.changed.find((e: { id: string }) => e.id === "trailer");
+    expect(trailer.fields).toEqual([{ field: "mass", before: "2,425 lb", after: "3,086 lb" }]);
+  });
+
   it("gives every support's reaction before and after, the change and the status change, as two solves do", async () => {
     const res = await call(compareRoute.GET, { params: { id: sketchId }, cookie: eddie.cookie, path: `/api/sketches/${sketchId}/compare?from=1&to=2` });
     const c = res.body.comparison;
@@ -100,6 +107,9 @@ describe("GET /api/sketches/:id/compare", () => {
     const bad = await get("from=one&to=2");
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields[0].path).toBe("query.from");
+    const units = await get("from=1&to=2&units=metric");
+    expect(units.status).toBe(400);
+    expect(units.body.error.fields[0].path).toBe("query.units");
     expect((await get("from=1&to=2", outsider)).status).toBe(404);
   });
 });

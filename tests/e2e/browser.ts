@@ -1,5 +1,5 @@
 // Debian's Chromium driven by playwright-core (never a downloaded browser).
-import { mkdirSync, mkdtempSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
@@ -9,7 +9,7 @@ export const SHOTS_DIR = join(process.cwd(), "test-results", "screenshots");
 
 export async function openBrowser(): Promise<BrowserContext> {
   const dir = mkdtempSync(join(tmpdir(), "cp-chromium-"));
-  return chromium.launchPersistentContext(dir, {
+  const context = await chromium.launchPersistentContext(dir, {
     executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
     headless: true,
     viewport: { width: 1440, height: 900 },
@@ -24,6 +24,17 @@ export async function openBrowser(): Promise<BrowserContext> {
       "--disable-sync",
     ],
   });
+  // the profile folder (~15 MB) goes once the browser has exited; never fail a test over it
+  const close = context.close.bind(context);
+  context.close = async (...args: Parameters<BrowserContext["close"]>) => {
+    await close(...args);
+    try {
+      rmSync(dir, { recursive: true, force: true, maxRetries: 5, retryDelay: 100 });
+    } catch {
+      // a folder left in the temp dir is harmless
+    }
+  };
+  return context;
 }
 
 export async function shot(page: Page, name: string): Promise<string> {

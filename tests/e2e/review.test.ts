@@ -154,6 +154,16 @@ describe("review of a calculation in the browser", () => {
     await owner.getByTestId("reaction-changes").waitFor();
     expect(await owner.getByTestId("compare-summary").textContent()).toContain("1 change in the inputs");
     await shot(owner, "review-06-compare");
+    // the two drawings laid over each other at one scale, and the tables in US customary units
+    await owner.getByRole("radio", { name: "Overlaid" }).click();
+    await owner.getByTestId("compare-overlay").waitFor();
+    expect(await owner.getByTestId("compare-overlay").locator("svg").count()).toBe(2);
+    await owner.getByTestId("compare-units").getByRole("radio", { name: "US" }).click();
+    await owner.waitForFunction(() => /lbf|kip/.test(document.querySelector("[data-testid=reaction-changes]")?.textContent ?? ""));
+    expect(await owner.getByTestId("reaction-changes").textContent()).not.toContain("kN");
+    await shot(owner, "review-06b-compare-overlaid-us");
+    // the choice of units is the reader's: put it back for the next screens
+    await owner.getByTestId("compare-units").getByRole("radio", { name: "SI" }).click();
   });
 
   it("the owner's mention mail is in the local mailbox", async () => {

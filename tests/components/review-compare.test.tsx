@@ -1,0 +1,89 @@
+// The comparison in US customary units, each reaction's components before and after, and the
+// overlay's shared frame: two drawings given one world box put an unchanged point on one pixel.
+import { render, screen } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { renderSketchSvg, sketchWorldBox } from "@/canvas/render/svg";
+import { ReactionsTable } from "@/components/review/CompareTables";
+import { compareSketches } from "@/lib/review/compare";
+import { parseSketch, solve } from "@/solver";
+import type { SketchFile } from "@/solver/schema";
+import { fixture } from "../api/sketch-fixtures";
+
+const before = fixture("fire-monitor-trailer") as unknown as SketchFile;
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+const after: any = structuredClone(before);
+after.bodies[0].mass = 1400;
+after.supports[2].at = [3.1, 0.3];
+after.parameters.Q = "1250 gpm";
+
+function solved(doc: unknown) {
+  const p = parseSketch(doc);
+  if (!p.ok) throw new Error("does not parse");
+  return solve(p.sketch);
+}
+
+describe("compareSketches in US customary units", () => {
+  it("writes evaluated values in lb and ft (1 lb = 0.45359237 kg, 1 ft = 0.3048 m: NIST SP 811)", () => {
+    const c = compareSketches(before, after, "US");
+    const trailer = c.elements.changed.find((e) => e.id === "trailer")!;
+    // 1100 kg / 0.45359237 = 2425.08 lb; 1400 kg = 3086.47 lb
+    expect(trailer.fields).toEqual([{ field: "mass", before: "2,425 lb", after: "3,086 lb" }]);
+    const jack = c.elements.changed.find((e) => e.id === "jack")!;
+    // 3.4 m = 11.155 ft, 3.1 m = 10.171 ft, 0.3 m = 0.98425 ft
+    expect(jack.fields).toEqual([{ field: "at", before: "(11.15, 0.9843) ft", after: "(10.17, 0.9843) ft" }]);
+    // a parameter is shown as written, whatever the units
+    expect(c.parameters.changed).toEqual([{ field: "Q", before: "2000 gpm", after: "1250 gpm" }]);
+    // SI stays the default
+    expect(compareSketches(before, after).elements.changed.find((e) => e.id === "jack")!.fields[0].before).toBe("(3.4, 0.3) m");
+  });
+});
+
+describe("the reactions table of a comparison", () => {
+  it("gives each support's Fx and Fy before and after, as two solves do, in the units asked for", () => {
+    const c = compareSketches(before, after);
+    const a = solved(before);
+    const b = solved(after);
+    const { unmount } = render(<ReactionsTable comparison={c} units="SI" />);
+    const wheel = screen.getByTestId("reaction-wheel-components").textContent!;
+    // 4 significant figures, in kN from 1 kN up and in N below
+    const f = (n: number) => (Math.abs(n) >= 1000 ? `${(n / 1000).toPrecision(4)} kN` : `${n.toPrecision(4)} N`).replace(/\.?0+ /, " ").replace("-", "−");
+    expect(wheel).toContain(`Fx ${f(a.reactions.wheel.fx)} → ${f(b.reactions.wheel.fx)}`);
+    expect(wheel).toContain(`Fy ${f(a.reactions.wheel.fy)} → ${f(b.reactions.wheel.fy)}`);
+    // contacts carry no moment: M is left out when it is zero on both sides
+    expect(wheel).not.toContain("M ");
+    unmount();
+
+    render(<ReactionsTable comparison={c} units="US" />);
+    const row = screen.getByTestId("reaction-wheel").textContent!;
+    // lbf = 4.4482216152605 N (NIST SP 811)
+    const lbf = Math.hypot(b.reactions.wheel.fx, b.reactions.wheel.fy) / 4.4482216152605;
+    expect(lbf).toBeGreaterThan(1000); // 4 figures: a whole number of lbf (kip only from 10 kip)
+    expect(row).toContain(`${Math.round(lbf).toLocaleString("en-US")} lbf`);
+    expect(row).not.toContain("kN");
+  });
+});
+
+describe("a shared frame for the overlaid drawings", () => {
+  const origin = (svg: string) => svg.match(/<g transform="translate\(([-\d.]+) ([-\d.]+)\)">/)!.slice(1).map(Number);
+  const firstCorner = (svg: string, id: string) => {
+    const path = new DOMParser().parseFromString(svg, "image/svg+xml").querySelector(`g[data-id="${id}"] path`)!.getAttribute("d")!;
+    return path.match(/M([-\d.]+) ([-\d.]+)/)!.slice(1).map(Number);
+  };
+
+  it("spans both sketches and puts the unchanged trailer on the same pixels in both drawings", () => {
+    const world = sketchWorldBox(before, after)!;
+    expect(world).toEqual({ minX: 0, minY: expect.any(Number), maxX: 3.4, maxY: expect.any(Number) });
+    const A = renderSketchSvg(before, solved(before), { width: 1280, height: 640, world });
+    const B = renderSketchSvg(after, solved(after), { width: 1280, height: 640, world });
+    expect(origin(A)).toEqual(origin(B));
+    expect(firstCorner(A, "trailer")).toEqual(firstCorner(B, "trailer"));
+    // without the shared frame each drawing centres itself, and the two need not line up
+    const ownA = renderSketchSvg(before, solved(before), { width: 1280, height: 640 });
+    const ownB = renderSketchSvg(after, solved(after), { width: 1280, height: 640 });
+    expect(origin(ownA)).not.toEqual(origin(ownB));
+  });
+
+  it("has no frame when nothing can be drawn", () => {
+    expect(sketchWorldBox({ format: "nope" } as never)).toBeUndefined();
+  });
+});
