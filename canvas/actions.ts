@@ -193,7 +193,7 @@ export const ACTIONS: readonly Action[] = [
     shortcuts: ["F"],
     run: (c) => {
       const s = ed(c);
-      s.setView(fitScene(c.stores.scene.getState(), s.viewport.width, s.viewport.height));
+      s.setView(fitScene(c.stores.scene.getState(), s.viewport.width, s.viewport.height, { result: c.stores.analysis.getState().shown, units: s.units }));
     },
   },
   { id: "view.zoomIn", label: "Zoom in", group: "view", shortcuts: ["+", "="], run: (c) => zoomBy(c, 1.25) },

@@ -132,7 +132,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
       if (first) {
         first = false;
         const scene = stores.scene.getState();
-        if (scene.bodies.length) s.setView(fitScene(scene, next.width, next.height));
+        if (scene.bodies.length) s.setView(fitScene(scene, next.width, next.height, { result: stores.analysis.getState().shown, units: s.units }));
         else s.setView({ scale: 120, x: Math.round(next.width * 0.3), y: Math.round(next.height * 0.7) });
       }
     };

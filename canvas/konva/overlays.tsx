@@ -8,7 +8,7 @@ import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
 import { useEditor, useScene, useStores } from "../context";
 import { DIRECTED } from "../model/elements";
-import { resultPrims } from "../render/results";
+import { scenePrims } from "../render/svg";
 import { itemPrims } from "../render/symbols";
 import { dir, type Prim } from "../render/prims";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
@@ -49,7 +49,8 @@ export function ResultsShape() {
         items: parts.filter((p): p is SceneItem => p.kind !== "body"),
         byId: new Map(parts.map((p) => [p.id, p])),
       };
-      primsRef.current = a.shown ? resultPrims(scene, a.shown, { units: e.units, scale: e.view.scale, stale: a.stale }).prims : [];
+      // the supports' and ports' own labels are drawn by their nodes; the result's labels keep off them
+      primsRef.current = a.shown ? scenePrims(scene, e.view.scale, e.units, a.shown, a.stale).results : [];
       const layer = shapeRef.current?.getLayer();
       if (!layer) return;
       if (now) layer.draw();

@@ -178,6 +178,14 @@ export function text(at: Pt, s: string, color: string, size = 11, extra: Partial
 }
 
 /** Bounding box of primitives (text approximated by its size). */
+/** The box a text takes, from an average glyph width (no font metrics: this runs on the server too). */
+export function textExtent(p: Extract<Prim, { t: "text" }>): { x0: number; y0: number; x1: number; y1: number } {
+  const w = p.text.length * p.size * 0.56;
+  const x0 = p.align === "center" ? p.at[0] - w / 2 : p.align === "right" ? p.at[0] - w : p.at[0];
+  const y0 = p.baseline === "top" ? p.at[1] : p.baseline === "bottom" ? p.at[1] - p.size : p.at[1] - p.size / 2;
+  return { x0, y0, x1: x0 + w, y1: y0 + p.size };
+}
+
 export function primsBox(prims: Prim[]): { minX: number; minY: number; maxX: number; maxY: number } {
   let minX = Infinity;
   let minY = Infinity;
@@ -196,11 +204,9 @@ export function primsBox(prims: Prim[]): { minX: number; minY: number; maxX: num
       addPt(p.c[0] - p.r, p.c[1] - p.r);
       addPt(p.c[0] + p.r, p.c[1] + p.r);
     } else {
-      const w = p.text.length * p.size * 0.56;
-      const x0 = p.align === "center" ? p.at[0] - w / 2 : p.align === "right" ? p.at[0] - w : p.at[0];
-      const y0 = p.baseline === "top" ? p.at[1] : p.baseline === "bottom" ? p.at[1] - p.size : p.at[1] - p.size / 2;
-      addPt(x0, y0);
-      addPt(x0 + w, y0 + p.size);
+      const b = textExtent(p);
+      addPt(b.x0, b.y0);
+      addPt(b.x1, b.y1);
     }
   }
   return { minX, minY, maxX, maxY };

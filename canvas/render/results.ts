@@ -8,12 +8,15 @@ import type { Scene, SceneBody, SceneItem } from "../scene";
 import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp, solidArrow, sub, text, unit, type Prim, type Pt } from "./prims";
 import { groundSideOf, labelAt, type DrawState } from "./symbols";
 import { CAUTION, INK, INK_SOFT, REACTION } from "./palette";
+import { declutter } from "./declutter";
 
 export interface ResultOptions {
   units: UnitSystem;
   scale: number;
   /** the result is an earlier sketch's (input errors now): drawn faded */
   stale?: boolean;
+  /** what the elements draw (their labels): the result's labels are moved off their texts */
+  obstacles?: readonly Prim[];
 }
 
 export interface ResultDrawing {
@@ -147,6 +150,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     }
   }
 
-  if (o.stale) for (const p of prims) (p as { opacity?: number }).opacity = 0.38;
-  return { prims, states };
+  const out = o.obstacles ? declutter(prims, o.obstacles) : prims;
+  if (o.stale) for (const p of out) (p as { opacity?: number }).opacity = 0.38;
+  return { prims: out, states };
 }

@@ -115,3 +115,29 @@ describe("scene", () => {
     expect(roundTo(1.23456789, 1e-3)).toBe(1.235);
   });
 });
+
+describe("fit to view", () => {
+  it("keeps every symbol, label and reaction arrow of each example on the canvas and clear of the legend", async () => {
+    const { EXAMPLES } = await import("@/canvas/examples");
+    const { fitScene, LEGEND_ROOM } = await import("@/canvas/geometry/fit");
+    const { scenePrims } = await import("@/canvas/render/svg");
+    const { primsBox } = await import("@/canvas/render/prims");
+    const { solve } = await import("@/solver/index");
+    for (const ex of EXAMPLES) {
+      const parsed = parseSketch(ex.sketch);
+      if (!parsed.ok) throw new Error(ex.id);
+      const result = solve(parsed.sketch);
+      const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+      for (const [W, H] of [[870, 510], [1200, 700], [600, 420]]) {
+        const v = fitScene(scene, W, H, { result });
+        const { groups, results } = scenePrims(scene, v.scale, "SI", result);
+        const p = primsBox([...groups.flatMap((g) => g.prims), ...results]);
+        const where = `${ex.id} at ${W}×${H}`;
+        expect(v.x + p.minX, where).toBeGreaterThanOrEqual(0);
+        expect(v.x + p.maxX, where).toBeLessThanOrEqual(W);
+        expect(v.y + p.minY, where).toBeGreaterThanOrEqual(LEGEND_ROOM);
+        expect(v.y + p.maxY, where).toBeLessThanOrEqual(H);
+      }
+    }
+  });
+});

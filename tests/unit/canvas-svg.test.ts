@@ -86,3 +86,39 @@ describe("renderSketchSvg", () => {
     expect(renderSketchSvg({ format: "nope" } as never)).toMatch(/cannot be drawn/);
   });
 });
+
+describe("the result's labels keep off other texts", () => {
+  it("moves a label that lands on another by a line, and leaves a free one alone", async () => {
+    const { declutter } = await import("@/canvas/render/declutter");
+    const { text } = await import("@/canvas/render/prims");
+    const obstacle = text([0, 0], "p −20 kPa", "#000", 11, { align: "left", baseline: "middle" });
+    const onTop = text([4, 2], "pA 314.2 N", "#000", 10.5, { align: "left", baseline: "middle" });
+    const away = text([300, 0], "5.531 kN", "#000", 11.5, { align: "left", baseline: "middle" });
+    const [moved, kept] = declutter([onTop, away], [obstacle]);
+    expect(kept).toBe(away);
+    expect(moved.t === "text" && moved.at).toEqual([4, 2 + 13.5]);
+  });
+
+  it("in every example, no result label overlaps an element's label or another result label", async () => {
+    const { textBox } = await import("@/canvas/render/declutter");
+    const { scenePrims } = await import("@/canvas/render/svg");
+    const { buildScene, fieldValuesById } = await import("@/canvas/scene");
+    const { parseSketch } = await import("@/solver/index");
+    const overlap = (a: ReturnType<typeof textBox>, b: ReturnType<typeof textBox>) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
+    for (const ex of EXAMPLES) {
+      const parsed = parseSketch(ex.sketch);
+      if (!parsed.ok) throw new Error(ex.id);
+      const result = solveFile(ex.sketch) as SolveResult;
+      const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+      for (const units of ["SI", "US"] as const) {
+        const { groups, results } = scenePrims(scene, 120, units, result);
+        const fixed = groups.flatMap((g) => g.prims).flatMap((p) => (p.t === "text" ? [textBox(p)] : []));
+        const labels = results.flatMap((p) => (p.t === "text" ? [{ text: p.text, box: textBox(p) }] : []));
+        labels.forEach((l, i) => {
+          expect(fixed.some((f) => overlap(l.box, f)), `${ex.id} (${units}): "${l.text}" on an element's label`).toBe(false);
+          expect(labels.slice(0, i).some((m) => overlap(l.box, m.box)), `${ex.id} (${units}): "${l.text}" on another result label`).toBe(false);
+        });
+      }
+    }
+  });
+});
