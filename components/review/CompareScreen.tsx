@@ -6,7 +6,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { sketchWorldBox } from "@/canvas/render/svg";
-import { useUnitsPreference } from "@/components/sketches/useUnitsPreference";
+import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { Notice, Panel, Segmented, Select, Skeleton } from "@/components/shell/controls";
 import { discardDraft, readDraft } from "@/components/versions/editor/drafts";
 import { useVersions } from "@/components/versions/VersionHistory";
@@ -92,10 +92,7 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
             testId="compare-units"
             value={units}
             onChange={setUnits}
-            options={[
-              { value: "SI", label: "SI", title: "SI units (kN, m, kPa)" },
-              { value: "US", label: "US", title: "US customary units (lbf, ft, psi)" },
-            ]}
+            options={UNIT_OPTIONS}
           />
           {to === "draft" && b.doc ? (
             <div className="flex gap-2 text-sm">

@@ -6,13 +6,14 @@ import Link from "next/link";
 import { useMemo, useState } from "react";
 import { formatForce } from "@/components/sketches/format";
 import { StatusMark } from "@/components/sketches/StatusMark";
-import { Notice, Panel, Skeleton } from "@/components/shell/controls";
+import { Notice, Panel, Segmented, Skeleton } from "@/components/shell/controls";
 import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import type { SketchStatus } from "@/lib/sketch-schemas";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
-import { formatQuantity } from "@/solver/units";
+import { formatQuantity, type UnitSystem } from "@/solver/units";
+import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { CommentsPanel, type CommentsData } from "./Comments";
 import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
 import { SignOffPanel, type SignOffData } from "./SignOff";
@@ -21,12 +22,12 @@ type VersionData = {
   version: { id: string; number: number; message: string; authorName: string | null; createdAt: string; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; document: SketchFile };
 };
 
-function Reactions({ document }: { document: SketchFile }) {
+function Reactions({ document, units }: { document: SketchFile; units: UnitSystem }) {
   const { result, parsed } = useSolved(document);
   if (!result) return <Notice tone="error">This version does not solve{!parsed.ok ? `: ${parsed.errors[0]?.path} ${parsed.errors[0]?.message}` : "."}</Notice>;
   const labels = new Map(document.supports.map((s) => [s.id, s.label || s.id]));
   return (
-    <table className="w-full text-sm">
+    <table className="w-full text-sm" data-testid="version-reactions">
       <caption className="sr-only">Reactions on the body</caption>
       <thead>
         <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
@@ -43,10 +44,10 @@ function Reactions({ document }: { document: SketchFile }) {
           <tr key={id} className="num border-b border-rule-soft last:border-0">
             <td className="py-1.5 pr-3 font-medium">{labels.get(id) ?? id}</td>
             <td className="py-1.5 pr-3">{r.state}</td>
-            <td className="py-1.5 pr-3 text-right">{formatForce(r.fx)}</td>
-            <td className="py-1.5 pr-3 text-right">{formatForce(r.fy)}</td>
-            <td className="py-1.5 pr-3 text-right">{r.kind === "fixed" ? formatQuantity(r.m, "moment") : "—"}</td>
-            <td className="py-1.5 text-right font-medium">{formatForce(Math.hypot(r.fx, r.fy))}</td>
+            <td className="py-1.5 pr-3 text-right">{formatForce(r.fx, units)}</td>
+            <td className="py-1.5 pr-3 text-right">{formatForce(r.fy, units)}</td>
+            <td className="py-1.5 pr-3 text-right">{r.kind === "fixed" ? formatQuantity(r.m, "moment", units) : "—"}</td>
+            <td className="py-1.5 text-right font-medium">{formatForce(Math.hypot(r.fx, r.fy), units)}</td>
           </tr>
         ))}
       </tbody>
@@ -60,6 +61,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   const version = useQuery({ queryKey: apiKey(base), queryFn: () => apiFetch<VersionData>(base), staleTime: Infinity });
   const signoff = useQuery({ queryKey: apiKey(`${base}/signoff`), queryFn: () => apiFetch<SignOffData>(`${base}/signoff`) });
   const comments = useQuery({ queryKey: apiKey(`${base}/comments`), queryFn: () => apiFetch<CommentsData>(`${base}/comments`) });
+  const [units, setUnits] = useUnitsPreference();
   const [pin, setPin] = useState<PickedPin | null>(null);
   const [picking, setPicking] = useState(false);
   const [selected, setSelected] = useState<string | null>(null);
@@ -95,14 +97,22 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             v{number}
             {v?.message ? <span className="font-normal text-ink-soft"> — {v.message}</span> : null}
           </h1>
-          <div className="flex flex-wrap gap-2 text-sm">
+          <div className="flex flex-wrap items-center gap-2 text-sm">
+            <Segmented
+              compact
+              label="Units shown"
+              testId="version-units"
+              value={units}
+              onChange={setUnits}
+              options={UNIT_OPTIONS}
+            />
             {number > 1 ? (
               <Link href={`${sketchHref}/compare?from=${number - 1}&to=${number}`} className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45">
                 Compare with v{number - 1}
               </Link>
             ) : null}
             <a
-              href={`/api/sketches/${sketchId}/versions/${number}/calc-sheet?units=SI`}
+              href={`/api/sketches/${sketchId}/versions/${number}/calc-sheet?units=${units}`}
               download
               className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45"
               title="A PDF of this version: title block, drawing, inputs, hand check, reactions per case, envelope, sweeps, method and cautions"
@@ -117,7 +127,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
         {v ? (
           <p className="flex flex-wrap items-center gap-x-3 text-sm text-ink-soft">
             <StatusMark status={v.status} warnings={v.warnings} />
-            <span>largest reaction {formatForce(v.largestReaction)}</span>
+            <span>largest reaction {formatForce(v.largestReaction, units)}</span>
             <span>
               saved by {v.authorName ?? "a deleted account"}, {formatDateTime(v.createdAt)}
             </span>
@@ -142,6 +152,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
                 setPicking(false);
               }}
               onSelectThread={setSelected}
+              units={units}
               label={`Drawing of version ${number} with its reactions and ${pins.length} comment pins`}
             />
           ) : (
@@ -150,7 +161,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
           <p className="text-xs text-ink-faint">
             <span className="font-semibold text-caution">Caution:</span> {CAUTION_SHORT}
           </p>
-          {doc ? <Reactions document={doc} /> : null}
+          {doc ? <Reactions document={doc} units={units} /> : null}
         </div>
         <aside aria-label="Comments">
           <h2 className="mb-2 text-base font-semibold">Comments</h2>

@@ -153,13 +153,26 @@ export function Panel({ title, description, children, aside }: { title: string; 
 }
 
 /** A choice of two or three ways to show the same thing (a labelled radio group of buttons). */
-export function Segmented<T extends string>({ label, value, options, onChange, testId }: { label: string; value: T; options: ReadonlyArray<{ value: T; label: string; title?: string }>; onChange: (v: T) => void; testId?: string }) {
+export function Segmented<T extends string>({
+  label,
+  value,
+  options,
+  onChange,
+  testId,
+  compact = false,
+}: {
+  label: string;
+  value: T;
+  options: ReadonlyArray<{ value: T; label: string; title?: string }>;
+  onChange: (v: T) => void;
+  testId?: string;
+  /** a toolbar-sized switch whose label is read out but not shown */
+  compact?: boolean;
+}) {
   return (
-    <div className="space-y-1">
-      <span className="block text-sm font-medium text-ink" id={testId ? `${testId}-label` : undefined}>
-        {label}
-      </span>
-      <div role="radiogroup" aria-label={label} data-testid={testId} className="inline-flex h-[42px] items-center rounded-md border border-rule bg-paper-card p-1 text-sm">
+    <div className={compact ? "" : "space-y-1"}>
+      <span className={compact ? "sr-only" : "block text-sm font-medium text-ink"}>{label}</span>
+      <div role="radiogroup" aria-label={label} data-testid={testId} className={`inline-flex items-center rounded-md border border-rule bg-paper-card p-1 text-sm ${compact ? "h-[34px]" : "h-[42px]"}`}>
         {options.map((o) => (
           <button
             key={o.value}

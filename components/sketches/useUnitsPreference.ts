@@ -25,3 +25,9 @@ export function useUnitsPreference(): [UnitSystem, (units: UnitSystem) => void] 
   }, []);
   return [units, set];
 }
+
+/** The two choices of the SI / US switch on the review screens. */
+export const UNIT_OPTIONS = [
+  { value: "SI", label: "SI", title: "SI units (kN, m, kPa)" },
+  { value: "US", label: "US", title: "US customary units (lbf, ft, psi)" },
+] as const satisfies ReadonlyArray<{ value: UnitSystem; label: string; title: string }>;

@@ -113,5 +113,10 @@ describe("design studies", () => {
     expect(text).toContain("Sweep of theta");
     expect(text).toMatch(/Prepared by\s+Ines Study/);
     await shot(page, "studies-03-version-page");
+    // in US customary units: the version's table, and a calc sheet in lbf
+    await page.getByTestId("version-units").getByRole("radio", { name: "US" }).click();
+    await page.waitForFunction(() => /lbf|kip/.test(document.querySelector("[data-testid=version-reactions]")?.textContent ?? ""));
+    expect(await page.getByRole("link", { name: "Calc sheet (PDF)" }).getAttribute("href")).toMatch(/units=US$/);
+    await page.getByTestId("version-units").getByRole("radio", { name: "SI" }).click();
   });
 });
