@@ -16,6 +16,7 @@ import type { SketchStatus } from "@/lib/sketch-schemas";
 import { ForkDialog, useForkTargets } from "./ForkDialog";
 import { ForkGlyph } from "./ForkGlyph";
 import { formatForce } from "./format";
+import { useUnitsPreference } from "./useUnitsPreference";
 import { SketchDetailsForm } from "./SketchDetailsForm";
 import { StatusMark } from "./StatusMark";
 
@@ -61,6 +62,7 @@ export function ForkedFrom({ origin }: { origin: ForkOrigin }) {
 }
 
 export function SketchScreen({ initial }: { initial: SketchData }) {
+  const [units] = useUnitsPreference();
   const router = useRouter();
   const path = `/api/sketches/${initial.sketch.id}`;
   const q = useQuery({ queryKey: apiKey(path), queryFn: () => apiFetch<SketchData>(path), initialData: initial });
@@ -97,7 +99,7 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
               <p className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-ink-soft" data-testid="latest-summary">
                 <span>Latest: v{latest.number}</span>
                 <StatusMark status={latest.status} warnings={latest.warnings} />
-                <span>largest reaction {formatForce(latest.largestReaction)}</span>
+                <span>largest reaction {formatForce(latest.largestReaction, units)}</span>
                 {sketch.approvedVersion ? (
                   <Link href={`${base}/versions/${sketch.approvedVersion}`} className="font-medium text-reaction underline decoration-reaction/40 underline-offset-2" data-testid="approved-version">
                     ✓✓ v{sketch.approvedVersion} approved

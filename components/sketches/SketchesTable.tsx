@@ -9,6 +9,7 @@ import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { STATUS_ORDER, type SketchSort, type SketchStatus } from "@/lib/sketch-schemas";
 import { ForkGlyph } from "./ForkGlyph";
 import { formatForce, timeAgo } from "./format";
+import { useUnitsPreference } from "./useUnitsPreference";
 import { StatusMark } from "./StatusMark";
 
 export type SketchRow = {
@@ -56,6 +57,7 @@ function SortHeader({ label, sort, filters, onSort, className = "" }: { label: s
 }
 
 export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string; canCreate: boolean }) {
+  const [units] = useUnitsPreference();
   const [filters, setFilters] = useState<Filters>({ q: "", tag: "", status: "", sort: "updated", dir: "desc", page: 1 });
   const q = useDebounced(filters.q.trim(), 250);
   const path = `/api/workspaces/${workspaceId}/sketches`;
@@ -175,7 +177,7 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                     <td className="py-2.5 pr-3">
                       <StatusMark status={s.status} warnings={s.warnings} />
                     </td>
-                    <td className="num py-2.5 pr-3 text-right text-ink">{formatForce(s.largestReaction)}</td>
+                    <td className="num py-2.5 pr-3 text-right text-ink">{formatForce(s.largestReaction, units)}</td>
                     <td className="py-2.5 pr-3 text-ink-soft">
                       <span title={formatDateTime(s.updatedAt)}>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
                       {s.updatedBy ? <span className="block text-xs text-ink-faint">by {s.updatedBy.name}</span> : null}

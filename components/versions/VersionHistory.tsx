@@ -5,6 +5,7 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState, type ReactNode } from "react";
 import { formatForce, timeAgo } from "@/components/sketches/format";
+import { useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { StatusMark } from "@/components/sketches/StatusMark";
 import { Button, Notice, Skeleton } from "@/components/shell/controls";
 import { formatDate, formatDateTime } from "@/components/workspaces/format";
@@ -53,6 +54,7 @@ export function VersionHistory({
   /** the comparison of two versions */
   compareHref?: (from: number, to: number) => string;
 }) {
+  const [units] = useUnitsPreference();
   const q = useVersions(sketchId);
   const [picked, setPicked] = useState<number[]>([]);
   if (q.isPending) return <Skeleton className="h-32 w-full" />;
@@ -117,7 +119,7 @@ export function VersionHistory({
                 <td className="py-2.5 pr-3">
                   <StatusMark status={v.status} warnings={v.warnings} />
                 </td>
-                <td className="num py-2.5 pr-3 text-right">{formatForce(v.largestReaction)}</td>
+                <td className="num py-2.5 pr-3 text-right">{formatForce(v.largestReaction, units)}</td>
                 {reviewCell ? <td className="py-2.5 pr-3">{reviewCell(v)}</td> : null}
                 <td className="py-2 text-right">
                   <span className="inline-flex justify-end gap-1.5 whitespace-nowrap">
