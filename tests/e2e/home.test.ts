@@ -13,6 +13,13 @@ describe("first page", () => {
 
   it("shows the product, the entry points and the cautions in the shipped font", async () => {
     const page = await ctx.newPage();
+    const failed: string[] = [];
+    page.on("response", (r) => {
+      if (r.status() >= 400) failed.push(`${r.status()} ${r.url()}`);
+    });
+    page.on("console", (m) => {
+      if (m.type() === "error") failed.push(m.text());
+    });
     const res = await page.goto(BASE_URL + "/");
     expect(res?.status()).toBe(200);
     await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toContain("What holds it in place");
@@ -29,6 +36,14 @@ describe("first page", () => {
     expect(fontLoaded).toBe(true);
     const family = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
     expect(family).toMatch(/sans/i);
+    // the product mark is the tab's icon, and the page asks for nothing that is missing
+    const icon = await page.locator('link[rel="icon"]').first().getAttribute("href");
+    expect(icon).toMatch(/^\/icon\.svg/);
+    const iconRes = await page.request.get(BASE_URL + icon);
+    expect(iconRes.status()).toBe(200);
+    expect(iconRes.headers()["content-type"]).toContain("image/svg+xml");
+    await page.waitForLoadState("networkidle");
+    expect(failed).toEqual([]);
     await shot(page, "home");
   });
 
