@@ -1,42 +1,60 @@
-// Fit the whole sketch into the canvas: the bodies and elements, and also what is drawn around
-// them at a fixed size on screen (symbols, labels, reaction arrows, the legend's corner), so that
-// nothing lands off the canvas or under the legend.
+// Fit sketches into a drawing area: the bodies and elements, and also what is drawn around them
+// at a fixed size on screen (symbols, labels, reaction arrows), so that nothing lands off the
+// area — or, on the canvas, under the legend. Several scenes fitted together share one frame
+// (scale and origin), which lets two versions be laid over each other.
 import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
 import { primsBox } from "../render/prims";
-import { scenePrims } from "../render/svg";
+import { scenePrims } from "../render/scenePrims";
 import type { Scene } from "../scene";
 import { pointsOf } from "../scene";
 import { boxOf } from "./polygon";
 import { fitView, type View } from "./view";
 
-/** Room kept at the top for the legend of line styles, which sits over the canvas's top edge. */
+/** Room kept at the top of the canvas for the legend of line styles, which sits over its top edge. */
 export const LEGEND_ROOM = 44;
 const GAP = 14;
 
-export function fitScene(scene: Scene, width: number, height: number, drawn: { result?: SolveResult | null; units?: UnitSystem } = {}): View {
-  const box = boxOf([...scene.bodies.flatMap((b) => [...b.outline, b.cg]), ...scene.items.flatMap(pointsOf)].filter((p) => Number.isFinite(p[0]) && Number.isFinite(p[1])));
+type Drawn = { scene: Scene; result?: SolveResult | null };
+
+function geometryBox(scene: Scene) {
+  return boxOf([...scene.bodies.flatMap((b) => [...b.outline, b.cg]), ...scene.items.flatMap(pointsOf)].filter((p) => Number.isFinite(p[0]) && Number.isFinite(p[1])));
+}
+
+/** One frame for every scene: the union of their geometry, with room for what each draws around it. */
+export function fitScenes(drawn: Drawn[], width: number, height: number, opts: { units?: UnitSystem; top?: number } = {}): View {
+  const boxes = drawn.map((d) => geometryBox(d.scene)).filter((b) => Number.isFinite(b.minX));
+  const box = boxes.length
+    ? { minX: Math.min(...boxes.map((b) => b.minX)), minY: Math.min(...boxes.map((b) => b.minY)), maxX: Math.max(...boxes.map((b) => b.maxX)), maxY: Math.max(...boxes.map((b) => b.maxY)) }
+    : geometryBox({ bodies: [], items: [], byId: new Map() });
   // a first guess: symbols and labels do not scale, so keep a generous margin for them
   const k = Math.min(1, Math.min(width, height) / 600);
   const guess = { top: 100 * k, right: 160 * k, bottom: 165 * k, left: 160 * k };
   let view = fitView(box, width, height, guess);
   if (!Number.isFinite(box.minX)) return view;
-  // then measure what is drawn at that scale, beyond the geometry, and fit again (twice: the
+  // then measure what is drawn at that scale beyond the geometry, and fit again (twice: the
   // margins hardly change with the scale, as arrows and labels keep their size on screen)
   for (let i = 0; i < 2; i++) {
     const s = view.scale;
-    const { groups, results } = scenePrims(scene, s, drawn.units ?? "SI", drawn.result ?? null);
-    const p = primsBox([...groups.flatMap((g) => g.prims), ...results]);
-    if (!Number.isFinite(p.minX)) break;
-    const m = {
-      left: Math.max(0, box.minX * s - p.minX) + GAP,
-      right: Math.max(0, p.maxX - box.maxX * s) + GAP,
-      top: Math.max(0, -box.maxY * s - p.minY) + GAP + LEGEND_ROOM,
-      bottom: Math.max(0, p.maxY + box.minY * s) + GAP,
-    };
+    const m = { left: 0, right: 0, top: 0, bottom: 0 };
+    for (const d of drawn) {
+      const { groups, results } = scenePrims(d.scene, s, opts.units ?? "SI", d.result ?? null);
+      const p = primsBox([...groups.flatMap((g) => g.prims), ...results]);
+      if (!Number.isFinite(p.minX)) continue;
+      m.left = Math.max(m.left, box.minX * s - p.minX);
+      m.right = Math.max(m.right, p.maxX - box.maxX * s);
+      m.top = Math.max(m.top, -box.maxY * s - p.minY);
+      m.bottom = Math.max(m.bottom, p.maxY + box.minY * s);
+    }
+    const margins = { left: m.left + GAP, right: m.right + GAP, top: m.top + GAP + (opts.top ?? 0), bottom: m.bottom + GAP };
     // without a result yet, the reactions' arrows are not measured: keep the first guess's room for them
-    if (!drawn.result) for (const side of ["left", "right", "top", "bottom"] as const) m[side] = Math.max(m[side], guess[side]);
-    view = fitView(box, width, height, m);
+    if (drawn.some((d) => !d.result)) for (const side of ["left", "right", "top", "bottom"] as const) margins[side] = Math.max(margins[side], guess[side]);
+    view = fitView(box, width, height, margins);
   }
   return view;
+}
+
+/** The canvas's fit to view: one scene, clear of the legend. */
+export function fitScene(scene: Scene, width: number, height: number, drawn: { result?: SolveResult | null; units?: UnitSystem } = {}): View {
+  return fitScenes([{ scene, result: drawn.result }], width, height, { units: drawn.units, top: LEGEND_ROOM });
 }

@@ -8,7 +8,7 @@ import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
 import { useEditor, useScene, useStores } from "../context";
 import { DIRECTED } from "../model/elements";
-import { scenePrims } from "../render/svg";
+import { scenePrims } from "../render/scenePrims";
 import { itemPrims } from "../render/symbols";
 import { dir, type Prim } from "../render/prims";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";

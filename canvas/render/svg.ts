@@ -4,11 +4,12 @@ import { parseSketch } from "@/solver/parse";
 import type { SketchFile, SketchFileInput } from "@/solver/schema";
 import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
-import { buildScene, fieldValuesById, pointsOf, type Scene } from "../scene";
+import { buildScene, fieldValuesById, pointsOf } from "../scene";
 import { boxOf } from "../geometry/polygon";
-import { resultPrims, supportStates } from "./results";
-import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims } from "./symbols";
-import { primsBox, translate, type Prim } from "./prims";
+import { scenePrims } from "./scenePrims";
+import { fitScenes } from "../geometry/fit";
+import type { View } from "../geometry/view";
+import { primsBox, type Prim } from "./prims";
 import { FONT_STACK, INK_FAINT, PAPER, PAPER_CARD } from "./palette";
 
 export interface SvgOptions {
@@ -25,13 +26,11 @@ export interface SvgOptions {
   /** the legend of line styles under the drawing (default true when a result is drawn) */
   legend?: boolean;
   /**
-   * fit this world box (m) instead of the sketch's own, centred on it: two drawings given the
-   * same box share scale and origin, so they can be laid over each other
+   * draw at this scale and origin (from `sharedFrame`) instead of fitting the sketch on its own:
+   * two drawings given the same frame can be laid over each other
    */
-  world?: WorldBox;
+  frame?: View;
 }
-
-export type WorldBox = { minX: number; minY: number; maxX: number; maxY: number };
 
 const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 const n = (x: number) => (Math.round(x * 100) / 100).toString();
@@ -58,50 +57,6 @@ export function primsToSvg(prims: Prim[]): string {
   return prims.map(primToSvg).join("");
 }
 
-// An element's primitives depend only on its scene object (which the editor replaces when it
-// changes), the zoom, the units and its drawn state: kept per object, so redrawing the result on
-// every move of a drag does not rebuild every support's and port's symbol.
-const primsCache = new WeakMap<object, { key: string; prims: Prim[]; texts: Prim[] }>();
-function cachedPrims(owner: object, key: string, make: () => Prim[]): { prims: Prim[]; texts: Prim[] } {
-  const hit = primsCache.get(owner);
-  if (hit && hit.key === key) return hit;
-  const prims = make();
-  const entry = { key, prims, texts: prims.filter((p) => p.t === "text") };
-  primsCache.set(owner, entry);
-  return entry;
-}
-
-/** Every element's primitives in content pixels, keyed for the SVG's groups. */
-export function scenePrims(scene: Scene, scale: number, units: UnitSystem, result: SolveResult | null, stale = false) {
-  const states = result ? supportStates(result) : null;
-  const groups: Array<{ id: string; kind: string; prims: Prim[] }> = [];
-  // the elements' texts, which the result's labels keep off
-  const obstacles: Prim[] = [];
-  for (const b of scene.bodies) {
-    const { prims, texts } = cachedPrims(b, `${scale}|${units}`, () => {
-      const out = bodyPrims(b, { units, scale });
-      if (Number.isFinite(b.cg[0])) out.push(...translate(cgPrims(), [b.cg[0] * scale, -b.cg[1] * scale]));
-      return out;
-    });
-    groups.push({ id: b.id, kind: "body", prims });
-    for (const t of texts) obstacles.push(t);
-  }
-  for (const item of scene.items) {
-    const a = anchorWorld(item);
-    if (!Number.isFinite(a[0]) || !Number.isFinite(a[1])) continue;
-    const body = scene.byId.get(item.body);
-    const groundSide = groundSideOf(item, body?.kind === "body" ? body : undefined);
-    const state = states?.get(item.id);
-    const { prims, texts } = cachedPrims(item, `${scale}|${units}|${groundSide}|${state ?? ""}`, () =>
-      translate(itemPrims(item, { units, scale, groundSide, state }), [a[0] * scale, -a[1] * scale]),
-    );
-    groups.push({ id: item.id, kind: item.kind, prims });
-    for (const t of texts) obstacles.push(t);
-  }
-  const drawing = result ? resultPrims(scene, result, { units, scale, stale, obstacles }) : null;
-  return { groups, results: drawing?.prims ?? [] };
-}
-
 function sceneOf(file: SketchFile | SketchFileInput) {
   const parsed = parseSketch(file);
   const doc = ("file" in parsed && parsed.ok ? parsed.file : file) as SketchFile;
@@ -110,18 +65,13 @@ function sceneOf(file: SketchFile | SketchFileInput) {
   return { parsed, doc, scene };
 }
 
-const worldOf = (scene: Scene): WorldBox => boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
-
-/** The box (m) around every body and element of the given sketches: a shared frame for an overlay. */
-export function sketchWorldBox(...files: Array<SketchFile | SketchFileInput>): WorldBox | undefined {
-  const boxes = files.map((f) => sceneOf(f).scene).filter((s): s is Scene => s !== null).map(worldOf).filter((b) => Number.isFinite(b.minX));
-  if (!boxes.length) return undefined;
-  return {
-    minX: Math.min(...boxes.map((b) => b.minX)),
-    minY: Math.min(...boxes.map((b) => b.minY)),
-    maxX: Math.max(...boxes.map((b) => b.maxX)),
-    maxY: Math.max(...boxes.map((b) => b.maxY)),
-  };
+/** One frame (scale and origin) that fits every sketch given, with its result, into width × height. */
+export function sharedFrame(drawings: Array<{ file: SketchFile | SketchFileInput; result: SolveResult | null }>, width: number, height: number, units: UnitSystem = "SI"): View | undefined {
+  const drawn = drawings.flatMap((d) => {
+    const scene = sceneOf(d.file).scene;
+    return scene ? [{ scene, result: d.result }] : [];
+  });
+  return drawn.length ? fitScenes(drawn, width, height, { units }) : undefined;
 }
 
 /**
@@ -142,20 +92,23 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
   }
   const footer = (opts.caption ? 22 : 0) + ((opts.legend ?? !!result) ? 22 : 0);
 
-  // fit: world box → pixels, leaving room for symbols and labels that do not scale
-  const world = opts.world ?? worldOf(scene);
-  const pad = 96;
-  const w = Math.max(world.maxX - world.minX, 0.2);
-  const h = Math.max(world.maxY - world.minY, 0.2);
-  const scale = Number.isFinite(w) ? Math.min((width - 2 * pad) / w, (height - footer - 2 * pad) / h) : 100;
-  const { groups, results } = scenePrims(scene, scale, units, result, opts.stale);
-  // centre what is actually drawn (labels included), or the shared world box
+  // fit: world box → pixels, leaving room for symbols and labels that do not scale; then centre
+  // what is actually drawn (labels included) — or use the shared frame as given
+  let scale: number;
   let dx: number;
   let dy: number;
-  if (opts.world && Number.isFinite(w)) {
-    dx = width / 2 - ((world.minX + world.maxX) / 2) * scale;
-    dy = (height - footer) / 2 + ((world.minY + world.maxY) / 2) * scale;
+  let groups: ReturnType<typeof scenePrims>["groups"];
+  let results: Prim[];
+  if (opts.frame) {
+    ({ scale, x: dx, y: dy } = opts.frame);
+    ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale));
   } else {
+    const world = boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
+    const pad = 96;
+    const w = Math.max(world.maxX - world.minX, 0.2);
+    const h = Math.max(world.maxY - world.minY, 0.2);
+    scale = Number.isFinite(w) ? Math.min((width - 2 * pad) / w, (height - footer - 2 * pad) / h) : 100;
+    ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale));
     const box = primsBox([...groups.flatMap((g) => g.prims), ...results]);
     dx = Number.isFinite(box.minX) ? (width - (box.maxX - box.minX)) / 2 - box.minX : width / 2;
     dy = Number.isFinite(box.minY) ? (height - footer - (box.maxY - box.minY)) / 2 - box.minY : height / 2;

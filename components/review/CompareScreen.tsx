@@ -5,7 +5,7 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
-import { sketchWorldBox } from "@/canvas/render/svg";
+import { sharedFrame } from "@/canvas/render/svg";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { Notice, Panel, Segmented, Select, Skeleton } from "@/components/shell/controls";
 import { discardDraft, readDraft } from "@/components/versions/editor/drafts";
@@ -16,7 +16,7 @@ import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
 import { ChangesTable, ReactionsTable } from "./CompareTables";
-import { ReviewDrawing } from "./ReviewDrawing";
+import { ReviewDrawing, useSolved } from "./ReviewDrawing";
 
 type VersionDoc = { version: { number: number; message: string; document: SketchFile } };
 
@@ -170,7 +170,9 @@ function Overlay({
   marks: { before: Record<string, "removed" | "changed">; after: Record<string, "added" | "changed"> };
   units: UnitSystem;
 }) {
-  const world = useMemo(() => sketchWorldBox(before, after), [before, after]);
+  const a = useSolved(before).result;
+  const b = useSolved(after).result;
+  const frame = useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], 1280, 640, units), [before, after, a, b, units]);
   const removed = useMemo(() => Object.fromEntries(Object.entries(marks.before).filter(([, k]) => k === "removed")), [marks.before]);
   return (
     <figure className="space-y-1" data-testid="compare-overlay">
@@ -179,8 +181,8 @@ function Overlay({
         <span className="font-semibold text-ink-soft">before: {beforeLabel}</span> <span className="text-ink-soft">drawn faint and grey, at the same scale.</span>
       </figcaption>
       <div className="relative overflow-hidden rounded-md border border-rule bg-paper">
-        <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} world={world} layer className="opacity-40 grayscale" />
-        <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} world={world} layer className="compare-over absolute inset-0" />
+        <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} frame={frame} layer className="opacity-40 grayscale" />
+        <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} frame={frame} layer className="compare-over absolute inset-0" />
       </div>
     </figure>
   );

@@ -3,7 +3,8 @@
 // marks on top: comment pins, outlines around what a comparison found changed, and (while
 // pinning a new comment) a click picks an element or a point.
 import { useLayoutEffect, useMemo, useRef } from "react";
-import { renderSketchSvg, type WorldBox } from "@/canvas/render/svg";
+import type { View } from "@/canvas/geometry/view";
+import { renderSketchSvg } from "@/canvas/render/svg";
 import { parseSketch, solve, type SolveResult } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
@@ -38,7 +39,7 @@ export function ReviewDrawing({
   width = 880,
   height = 520,
   units = "SI",
-  world,
+  frame,
   layer = false,
   className = "",
 }: {
@@ -54,8 +55,8 @@ export function ReviewDrawing({
   width?: number;
   height?: number;
   units?: UnitSystem;
-  /** a shared frame (m), so that two drawings line up */
-  world?: WorldBox;
+  /** a shared scale and origin (from `sharedFrame`), so that two drawings line up */
+  frame?: View;
   /** drawn as a see-through layer over another drawing: no paper, no legend, no border */
   layer?: boolean;
   className?: string;
@@ -64,8 +65,8 @@ export function ReviewDrawing({
   const { result, sketch } = useSolved(document);
   // The renderer escapes every text it draws (titles, labels, values), so its output is markup we made.
   const svg = useMemo(
-    () => renderSketchSvg(document, result, { width, height, caption, units, world, legend: !layer, background: layer ? "none" : "paper" }),
-    [document, result, width, height, caption, units, world, layer],
+    () => renderSketchSvg(document, result, { width, height, caption, units, frame, legend: !layer, background: layer ? "none" : "paper" }),
+    [document, result, width, height, caption, units, frame, layer],
   );
 
   useLayoutEffect(() => {

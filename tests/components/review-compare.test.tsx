@@ -2,7 +2,7 @@
 // overlay's shared frame: two drawings given one world box put an unchanged point on one pixel.
 import { render, screen } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import { renderSketchSvg, sketchWorldBox } from "@/canvas/render/svg";
+import { renderSketchSvg, sharedFrame } from "@/canvas/render/svg";
 import { ReactionsTable } from "@/components/review/CompareTables";
 import { compareSketches } from "@/lib/review/compare";
 import { parseSketch, solve } from "@/solver";
@@ -70,20 +70,36 @@ describe("a shared frame for the overlaid drawings", () => {
     return path.match(/M([-\d.]+) ([-\d.]+)/)!.slice(1).map(Number);
   };
 
-  it("spans both sketches and puts the unchanged trailer on the same pixels in both drawings", () => {
-    const world = sketchWorldBox(before, after)!;
-    expect(world).toEqual({ minX: 0, minY: expect.any(Number), maxX: 3.4, maxY: expect.any(Number) });
-    const A = renderSketchSvg(before, solved(before), { width: 1280, height: 640, world });
-    const B = renderSketchSvg(after, solved(after), { width: 1280, height: 640, world });
+  it("puts the unchanged trailer on the same pixels in both drawings, and everything drawn inside the frame", async () => {
+    const { scenePrims } = await import("@/canvas/render/scenePrims");
+    const { primsBox } = await import("@/canvas/render/prims");
+    const { buildScene, fieldValuesById } = await import("@/canvas/scene");
+    const ra = solved(before);
+    const rb = solved(after);
+    const frame = sharedFrame([{ file: before, result: ra }, { file: after, result: rb }], 1280, 640)!;
+    const A = renderSketchSvg(before, ra, { width: 1280, height: 640, frame });
+    const B = renderSketchSvg(after, rb, { width: 1280, height: 640, frame });
     expect(origin(A)).toEqual(origin(B));
     expect(firstCorner(A, "trailer")).toEqual(firstCorner(B, "trailer"));
+    // every symbol, label and reaction arrow of both drawings lies inside the 1280 × 640 frame
+    for (const [doc, r] of [[before, ra], [after, rb]] as const) {
+      const p = parseSketch(doc);
+      if (!p.ok) throw new Error("does not parse");
+      const scene = buildScene(p.file, fieldValuesById(p.file, p.fields, []));
+      const { groups, results } = scenePrims(scene, frame.scale, "SI", r);
+      const box = primsBox([...groups.flatMap((g) => g.prims), ...results]);
+      expect(frame.x + box.minX).toBeGreaterThanOrEqual(0);
+      expect(frame.x + box.maxX).toBeLessThanOrEqual(1280);
+      expect(frame.y + box.minY).toBeGreaterThanOrEqual(0);
+      expect(frame.y + box.maxY).toBeLessThanOrEqual(640);
+    }
     // without the shared frame each drawing centres itself, and the two need not line up
-    const ownA = renderSketchSvg(before, solved(before), { width: 1280, height: 640 });
-    const ownB = renderSketchSvg(after, solved(after), { width: 1280, height: 640 });
+    const ownA = renderSketchSvg(before, ra, { width: 1280, height: 640 });
+    const ownB = renderSketchSvg(after, rb, { width: 1280, height: 640 });
     expect(origin(ownA)).not.toEqual(origin(ownB));
   });
 
   it("has no frame when nothing can be drawn", () => {
-    expect(sketchWorldBox({ format: "nope" } as never)).toBeUndefined();
+    expect(sharedFrame([{ file: { format: "nope" } as never, result: null }], 800, 600)).toBeUndefined();
   });
 });

@@ -120,7 +120,7 @@ describe("fit to view", () => {
   it("keeps every symbol, label and reaction arrow of each example on the canvas and clear of the legend", async () => {
     const { EXAMPLES } = await import("@/canvas/examples");
     const { fitScene, LEGEND_ROOM } = await import("@/canvas/geometry/fit");
-    const { scenePrims } = await import("@/canvas/render/svg");
+    const { scenePrims } = await import("@/canvas/render/scenePrims");
     const { primsBox } = await import("@/canvas/render/prims");
     const { solve } = await import("@/solver/index");
     for (const ex of EXAMPLES) {

@@ -101,7 +101,7 @@ describe("the result's labels keep off other texts", () => {
 
   it("in every example, no result label overlaps an element's label or another result label", async () => {
     const { textBox } = await import("@/canvas/render/declutter");
-    const { scenePrims } = await import("@/canvas/render/svg");
+    const { scenePrims } = await import("@/canvas/render/scenePrims");
     const { buildScene, fieldValuesById } = await import("@/canvas/scene");
     const { parseSketch } = await import("@/solver/index");
     const overlap = (a: ReturnType<typeof textBox>, b: ReturnType<typeof textBox>) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
