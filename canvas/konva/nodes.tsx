@@ -17,14 +17,21 @@ import { canvasFont } from "./font";
 
 const NO_STATES: ReadonlyMap<string, DrawState> = new Map();
 const statesCache = new WeakMap<SolveResult, ReadonlyMap<string, DrawState>>();
-/** The drawing states of a result's supports (cached per result). */
+let lastStates: ReadonlyMap<string, DrawState> = NO_STATES;
+const sameStates = (a: ReadonlyMap<string, DrawState>, b: ReadonlyMap<string, DrawState>) => a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
+/**
+ * The drawing states of a result's supports (cached per result). A new result whose states are
+ * all as before gives back the same map, so a drag that changes no state re-renders no node.
+ */
 export function statesOf(result: SolveResult | null): ReadonlyMap<string, DrawState> {
   if (!result) return NO_STATES;
   let m = statesCache.get(result);
   if (!m) {
     m = supportStates(result);
+    if (sameStates(m, lastStates)) m = lastStates;
     statesCache.set(result, m);
   }
+  lastStates = m;
   return m;
 }
 

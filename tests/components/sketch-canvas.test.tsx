@@ -45,3 +45,21 @@ describe("SketchCanvas", () => {
     await waitFor(() => expect(hits().filter((h) => h.type === "corner")).toHaveLength(8));
   });
 });
+
+describe("support states for the drawing", () => {
+  it("a new result with the same states gives back the same map (no node re-renders), a changed state a new one", async () => {
+    const { statesOf } = await import("@/canvas/konva/nodes");
+    const { solveFile } = await import("@/solver/index");
+    const cart = structuredClone(exampleById("washing-cart")!.sketch);
+    const r1 = solveFile(cart);
+    const r2 = solveFile({ ...cart, parameters: { ...cart.parameters, theta: "-74 deg" } });
+    const tipped = solveFile({ ...cart, parameters: { ...cart.parameters, theta: "-35 deg" } });
+    if (!r1.ok || !r2.ok || !tipped.ok) throw new Error("does not solve");
+    const a = statesOf(r1);
+    expect(statesOf(r2)).toBe(a);
+    const b = statesOf(tipped);
+    expect(b).not.toBe(a);
+    expect(b.get("front")).toBe("lifted");
+    expect(a.get("front")).toBe("bearing");
+  });
+});
