@@ -51,6 +51,9 @@ export async function startMailFake(opts: {
     server.once("error", reject);
     server.listen(opts.port, opts.host ?? "127.0.0.1", () => {
       server.off("error", reject);
+      // A client that drops its connection (a test process ending mid-session resets the socket)
+      // is reported here; unheard, the error would end the process and every local service in it.
+      server.on("error", (err: Error) => console.error("[mail] a connection to the local SMTP fake failed:", err.message));
       resolve();
     });
   });
