@@ -69,10 +69,11 @@ export function assertSameOrigin(req: Request): void {
   if (site !== null && site !== "same-origin" && site !== "none") throw new AppError("cross_origin");
 }
 
-async function readBodyCapped(req: Request, max: number): Promise<string> {
+/** The request body, refused with `tooLarge()` as soon as it passes `max` bytes (declared or read). */
+export async function readBytesCapped(req: Request, max: number, tooLarge: () => AppError): Promise<Buffer> {
   const declared = Number(req.headers.get("content-length"));
-  if (Number.isFinite(declared) && declared > max) throw tooLarge(max);
-  if (!req.body) return "";
+  if (Number.isFinite(declared) && declared > max) throw tooLarge();
+  if (!req.body) return Buffer.alloc(0);
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -82,11 +83,15 @@ async function readBodyCapped(req: Request, max: number): Promise<string> {
     size += value.byteLength;
     if (size > max) {
       await reader.cancel().catch(() => undefined);
-      throw tooLarge(max);
+      throw tooLarge();
     }
     chunks.push(value);
   }
-  return Buffer.concat(chunks).toString("utf8");
+  return Buffer.concat(chunks);
+}
+
+async function readBodyCapped(req: Request, max: number): Promise<string> {
+  return (await readBytesCapped(req, max, () => tooLarge(max))).toString("utf8");
 }
 
 function tooLarge(max: number): AppError {

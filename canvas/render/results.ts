@@ -17,6 +17,8 @@ export interface ResultOptions {
   stale?: boolean;
   /** what the elements draw (their labels): the result's labels are moved off their texts */
   obstacles?: readonly Prim[];
+  /** the supports' states, when the caller has them already (`supportStates(result)`) */
+  states?: Map<string, DrawState>;
 }
 
 export interface ResultDrawing {
@@ -40,7 +42,7 @@ export function supportStates(result: SolveResult): Map<string, DrawState> {
 export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions): ResultDrawing {
   const s = o.scale;
   const prims: Prim[] = [];
-  const states = supportStates(result);
+  const states = o.states ?? supportStates(result);
   const bodyOf = (id: string) => scene.byId.get(id) as SceneBody | undefined;
 
   let maxR = 0;

@@ -9,14 +9,16 @@ import { resultPrims, supportStates } from "./results";
 import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims } from "./symbols";
 
 // An element's primitives depend only on its scene object (which the editor replaces when it
-// changes), the zoom, the units and its drawn state: kept per object, so redrawing the result on
-// every move of a drag does not rebuild every support's and port's symbol.
-const primsCache = new WeakMap<object, { key: string; prims: Prim[]; texts: Prim[] }>();
-function cachedPrims(owner: object, key: string, make: () => Prim[]): { prims: Prim[]; texts: Prim[] } {
+// changes), its body's (a pin or fixed support faces away from the body's edge), the zoom, the
+// units and its drawn state: kept per object, so redrawing the result on every move of a drag does
+// not rebuild every support's and port's symbol.
+type Entry = { deps: readonly unknown[]; prims: Prim[]; texts: Prim[] };
+const primsCache = new WeakMap<object, Entry>();
+function cachedPrims(owner: object, deps: readonly unknown[], make: () => Prim[]): Entry {
   const hit = primsCache.get(owner);
-  if (hit && hit.key === key) return hit;
+  if (hit && hit.deps.length === deps.length && hit.deps.every((d, i) => d === deps[i])) return hit;
   const prims = make();
-  const entry = { key, prims, texts: prims.filter((p) => p.t === "text") };
+  const entry = { deps, prims, texts: prims.filter((p) => p.t === "text") };
   primsCache.set(owner, entry);
   return entry;
 }
@@ -28,7 +30,7 @@ export function scenePrims(scene: Scene, scale: number, units: UnitSystem, resul
   // the elements' texts, which the result's labels keep off
   const obstacles: Prim[] = [];
   for (const b of scene.bodies) {
-    const { prims, texts } = cachedPrims(b, `${scale}|${units}`, () => {
+    const { prims, texts } = cachedPrims(b, [scale, units], () => {
       const out = bodyPrims(b, { units, scale });
       if (Number.isFinite(b.cg[0])) out.push(...translate(cgPrims(), [b.cg[0] * scale, -b.cg[1] * scale]));
       return out;
@@ -39,15 +41,15 @@ export function scenePrims(scene: Scene, scale: number, units: UnitSystem, resul
   for (const item of scene.items) {
     const a = anchorWorld(item);
     if (!Number.isFinite(a[0]) || !Number.isFinite(a[1])) continue;
-    const body = scene.byId.get(item.body);
-    const groundSide = groundSideOf(item, body?.kind === "body" ? body : undefined);
+    const found = scene.byId.get(item.body);
+    const body = found?.kind === "body" ? found : undefined;
     const state = states?.get(item.id);
-    const { prims, texts } = cachedPrims(item, `${scale}|${units}|${groundSide}|${state ?? ""}`, () =>
-      translate(itemPrims(item, { units, scale, groundSide, state }), [a[0] * scale, -a[1] * scale]),
+    const { prims, texts } = cachedPrims(item, [scale, units, state, body], () =>
+      translate(itemPrims(item, { units, scale, groundSide: groundSideOf(item, body), state }), [a[0] * scale, -a[1] * scale]),
     );
     groups.push({ id: item.id, kind: item.kind, prims });
     for (const t of texts) obstacles.push(t);
   }
-  const drawing = result ? resultPrims(scene, result, { units, scale, stale, obstacles }) : null;
+  const drawing = result && states ? resultPrims(scene, result, { units, scale, stale, obstacles, states }) : null;
   return { groups, results: drawing?.prims ?? [] };
 }

@@ -5,7 +5,7 @@
 import { useLayoutEffect, useMemo, useRef } from "react";
 import type { View } from "@/canvas/geometry/view";
 import { renderSketchSvg } from "@/canvas/render/svg";
-import { parseSketch, solve, type SolveResult } from "@/solver";
+import { solveDocument } from "@/lib/review/compare";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
 import { drawingScale, drawMarks, drawPins, worldPoint, type MarkKind, type PinMarker } from "./drawingOverlay";
@@ -14,15 +14,7 @@ export type PickedPin = { kind: "element"; elementId: string; label: string } | 
 
 export function useSolved(document: SketchFile) {
   return useMemo(() => {
-    const parsed = parseSketch(document);
-    let result: SolveResult | null = null;
-    if (parsed.ok) {
-      try {
-        result = solve(parsed.sketch);
-      } catch {
-        result = null;
-      }
-    }
+    const { parsed, result } = solveDocument(document);
     return { parsed, result, sketch: parsed.ok ? parsed.sketch : null };
   }, [document]);
 }

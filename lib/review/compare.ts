@@ -70,7 +70,15 @@ const FIELD_QUANTITY: Record<string, Quantity | "rotationalStiffness"> = {
 
 type Side = { file: SketchFile; parsed: ParseResult; result: SolveResult | null };
 
-function side(file: SketchFile): Side {
+type Solved = { parsed: ParseResult; result: SolveResult | null };
+// Saved documents are never changed in place: each is parsed and solved once, however many
+// tables and drawings of a page show it.
+const solvedCache = new WeakMap<SketchFile, Solved>();
+
+/** A saved document parsed and solved (once per document object); the result is null when it does not parse or solve. */
+export function solveDocument(file: SketchFile): Solved {
+  const hit = solvedCache.get(file);
+  if (hit) return hit;
   const parsed = parseSketch(file);
   let result: SolveResult | null = null;
   if (parsed.ok) {
@@ -80,6 +88,13 @@ function side(file: SketchFile): Side {
       result = null;
     }
   }
+  const solved = { parsed, result };
+  solvedCache.set(file, solved);
+  return solved;
+}
+
+function side(file: SketchFile): Side {
+  const { parsed, result } = solveDocument(file);
   return { file: parsed.ok ? parsed.file : file, parsed, result };
 }
 

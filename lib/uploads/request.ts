@@ -3,6 +3,7 @@ import "server-only";
 // it) or the raw bytes (any other content type, as `curl --data-binary` sends them). The cap is
 // enforced while the body streams in: a declared length over it is refused before reading, and
 // reading stops at the first byte over it, so nothing larger is ever held in memory.
+import { readBytesCapped } from "../api";
 import { AppError } from "../errors";
 import { UPLOAD_LIMITS } from "./process";
 
@@ -15,25 +16,7 @@ function tooLarge(): AppError {
   return new AppError("payload_too_large", `The file is larger than the ${UPLOAD_LIMITS.maxBytes / 1048576} MB an upload may be.`);
 }
 
-async function readCapped(req: Request, max: number): Promise<Buffer> {
-  const declared = Number(req.headers.get("content-length"));
-  if (Number.isFinite(declared) && declared > max) throw tooLarge();
-  if (!req.body) return Buffer.alloc(0);
-  const reader = req.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > max) {
-      await reader.cancel().catch(() => undefined);
-      throw tooLarge();
-    }
-    chunks.push(value);
-  }
-  return Buffer.concat(chunks);
-}
+const readCapped = (req: Request, max: number) => readBytesCapped(req, max, tooLarge);
 
 /** A file name for display: no folders, no control characters, at most 200 characters. */
 export function displayName(raw: string | null | undefined): string {

@@ -3,29 +3,7 @@
 import sharp from "sharp";
 import { describe, expect, it } from "vitest";
 import { processUpload, UPLOAD_LIMITS } from "@/lib/uploads/process";
-
-const png = (w: number, h: number) => sharp({ create: { width: w, height: h, channels: 3, background: "#ffffff" } }).png().toBuffer();
-
-/** A minimal one-page PDF (its xref offsets are not checked by poppler when wrong, it recovers). */
-function pdf(pages: number): Buffer {
-  const kids = Array.from({ length: pages }, (_, i) => `${4 + i} 0 R`).join(" ");
-  const objs = [
-    "<< /Type /Catalog /Pages 2 0 R >>",
-    `<< /Type /Pages /Kids [${kids}] /Count ${pages} >>`,
-    "<< /Length 44 >>\nstream\n0 0 1 rg 20 20 100 100 re f\nendstream",
-    ...Array.from({ length: pages }, () => "<< /Type /Page /Parent 2 0 R /MediaBox [0 0 200 150] /Contents 3 0 R >>"),
-  ];
-  let body = "%PDF-1.4\n";
-  const offsets: number[] = [];
-  objs.forEach((o, i) => {
-    offsets.push(body.length);
-    body += `${i + 1} 0 obj\n${o}\nendobj\n`;
-  });
-  const xref = body.length;
-  body += `xref\n0 ${objs.length + 1}\n0000000000 65535 f \n${offsets.map((o) => `${String(o).padStart(10, "0")} 00000 n \n`).join("")}`;
-  body += `trailer\n<< /Size ${objs.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
-  return Buffer.from(body, "latin1");
-}
+import { pdf, png } from "../../fixtures/uploads";
 
 describe("processUpload", () => {
   it("keeps a PNG as PNG with its size, a checksum and a thumbnail", async () => {
