@@ -2,7 +2,7 @@
 // The canvas: a react-konva stage with four layers — the drafting grid, the drawing (one node
 // per element), the solve's results, and the interaction overlay (handles, snap, band, drafts).
 // Pointer input goes to the controller in pointer.ts; this component only wires it up.
-import { useEffect, useMemo, useRef, useState, type DragEvent } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent } from "react";
 import { Group, Layer, Shape, Stage } from "react-konva";
 import type Konva from "konva";
 import { useStore } from "zustand";
@@ -23,8 +23,7 @@ import { TRAY_MIME, type InteractionStore } from "./interaction";
 import { resolveCanvasFont } from "./font";
 import { CanvasLegend } from "./CanvasLegend";
 import { UnderlayLayer } from "./UnderlayLayer";
-
-
+import { drawAfterCommit, ignoreStagePointerInput } from "./immediate";
 
 function Grid({ width, height }: { width: number; height: number }) {
   const view = useEditor((s) => s.view);
@@ -111,7 +110,15 @@ export interface SketchCanvasProps {
 export default function SketchCanvas({ interaction, onController }: SketchCanvasProps) {
   const stores = useStores();
   const containerRef = useRef<HTMLDivElement>(null);
-  const stageRef = useRef<Konva.Stage>(null);
+  const stageRef = useRef<Konva.Stage | null>(null);
+  const stageCallbackRef = useCallback((stage: Konva.Stage | null) => {
+    stageRef.current = stage;
+    if (stage) ignoreStagePointerInput(stage);
+  }, []);
+  // the interaction layer is drawn as soon as a change is committed (see immediate.ts)
+  const liftedLayerRef = useCallback((layer: Konva.Layer | null) => {
+    if (layer) drawAfterCommit(layer);
+  }, []);
   const [size, setSize] = useState<{ width: number; height: number } | null>(null);
   const view = useEditor((s) => s.view);
   const dragging = useStore(interaction, (s) => s.dragging);
@@ -244,7 +251,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
       onDrop={onDrop}
     >
       {size && (
-        <Stage ref={stageRef} width={size.width} height={size.height}>
+        <Stage ref={stageCallbackRef} width={size.width} height={size.height}>
           <UnderlayLayer interaction={interaction} />
           <Layer listening={false}>
             <Grid width={size.width} height={size.height} />
@@ -259,7 +266,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
               <ResultsShape />
             </Group>
           </Layer>
-          <Layer onDraw={() => queueMicrotask(markFrame)}>
+          <Layer ref={liftedLayerRef} listening={!dragging} onDraw={() => queueMicrotask(markFrame)}>
             <Group x={view.x} y={view.y}>
               <Elements interaction={interaction} lifted />
               <SelectionHandles />

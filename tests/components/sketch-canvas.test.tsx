@@ -1,8 +1,8 @@
 // The Konva canvas under jsdom (vitest-canvas-mock): a node per element in the drawing layer,
 // handles for the selection, and the results drawn on their own layer.
-import { render, waitFor } from "@testing-library/react";
+import { act, render, waitFor } from "@testing-library/react";
 import Konva from "konva";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { createEditorStore } from "@/canvas/store";
 import { EditorProvider } from "@/canvas/context";
 import { createInteractionStore } from "@/canvas/konva/interaction";
@@ -43,6 +43,51 @@ describe("SketchCanvas", () => {
     await waitFor(() => expect(hits().some((h) => h.type === "rotate" && h.id === "lance")).toBe(true));
     editor.getState().select(["cart"]);
     await waitFor(() => expect(hits().filter((h) => h.type === "corner")).toHaveLength(8));
+  });
+
+  it("redraws the interaction layer as soon as a change is committed, without waiting for a frame", async () => {
+    const { editor, container } = mount("washing-cart");
+    await waitFor(() => expect(container.querySelector("canvas")).not.toBeNull());
+    const [, , , interactionLayer] = stage().getLayers();
+    const draws: number[] = [];
+    interactionLayer.on("draw", () => draws.push(draws.length));
+    // no animation frame runs here: a redraw that waited for one would never come
+    const raf = vi.spyOn(window, "requestAnimationFrame").mockImplementation(() => 0);
+    try {
+      act(() => editor.getState().select(["lance"]));
+      await Promise.resolve();
+      expect(draws.length).toBe(1);
+      expect(hits().some((h) => h.type === "rotate" && h.id === "lance")).toBe(true);
+    } finally {
+      raf.mockRestore();
+    }
+    // Konva's own DOM listeners are bypassed: pointer input lands on the editor's container
+    expect(stage().content.style.pointerEvents).toBe("none");
+  });
+});
+
+describe("drawing a layer right after a commit", () => {
+  it("coalesces the changes of one task into one draw, and skips a layer destroyed before it", async () => {
+    const { drawAfterCommit } = await import("@/canvas/konva/immediate");
+    const div = document.createElement("div");
+    document.body.appendChild(div);
+    const st = new Konva.Stage({ container: div, width: 100, height: 80 });
+    const layer = new Konva.Layer();
+    st.add(layer);
+    drawAfterCommit(layer);
+    drawAfterCommit(layer); // a second call changes nothing
+    const draw = vi.spyOn(layer, "draw");
+    layer.batchDraw();
+    layer.batchDraw();
+    layer.add(new Konva.Rect({ width: 10, height: 10, fill: "black" }));
+    expect(draw).not.toHaveBeenCalled();
+    await Promise.resolve();
+    expect(draw).toHaveBeenCalledTimes(1);
+    layer.batchDraw();
+    layer.remove();
+    await Promise.resolve();
+    expect(draw).toHaveBeenCalledTimes(1);
+    st.destroy();
   });
 });
 
