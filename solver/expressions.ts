@@ -336,7 +336,10 @@ export function toFieldNumber(value: MathValue, kind: FieldKind): number {
       if (!value.equalBase(target)) {
         throw new ExpressionError(`${value.format({ precision: 6 })} is ${describeDimension(value)}, but this field needs ${KIND_WORDS[kind]}`);
       }
-      out = value.toNumber(FIELD_UNITS[kind]);
+      // every field unit is multiplicative (no offset): the stored SI values divide, which
+      // spares parsing the unit's name again at each sweep point
+      const si = (value as unknown as { value: number | null }).value;
+      out = si === null ? value.toNumber(FIELD_UNITS[kind]) : si / (target as unknown as { value: number }).value;
     }
   } else if (typeof value === "boolean") {
     throw new ExpressionError("gives true/false, not a number");

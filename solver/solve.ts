@@ -8,11 +8,14 @@ import { dot3, norm3, type Vec3 } from "./linalg";
 import { buildBodyModel, type BodyModel } from "./model";
 import { massBalanceWarnings, portFlow, type PortFlow } from "./ports";
 import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResult, SolveWarning, Status, Vec2 } from "./types";
+import { reuseEqual, sameWarning, warningKey } from "./reuse";
 import { describeFreeMotion, describeSupport, fmtForce } from "./words";
 
 export function solve(sketch: Sketch): SolveResult {
   const { models, warnings } = prepare(sketch);
-  return solveModels(models, warnings);
+  const result = solveModels(models, warnings);
+  reuseEqual(sketch, "warnings", result.warnings, warningKey, sameWarning);
+  return result;
 }
 
 /** Port flows (with the flow factor), flow warnings and one model per body. */

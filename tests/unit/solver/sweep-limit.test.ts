@@ -50,6 +50,30 @@ describe("solveSweep", () => {
     expect(sweep.points[1]).toEqual({ value: -0.01, ok: false, errors: [{ path: "ports[0].area", message: "must be more than zero" }] });
   });
 
+  it("points share the terms and warnings the swept parameter leaves alone, and each still equals a fresh solve", () => {
+    const doc = loadFixture("fire-monitor-trailer.json");
+    const sk = parse(doc);
+    const sweep = solveSweep(sk, "theta", [10, 20]);
+    const [a, b] = sweep.points;
+    if (!a.ok || !b.ok) throw new Error("does not solve");
+    const termsA = Object.values(a.result.equations).flatMap((e) => [...e.forces, ...e.momentum]);
+    const termsB = Object.values(b.result.equations).flatMap((e) => [...e.forces, ...e.momentum]);
+    // the weight does not depend on the jet's angle: one object; the jet's momentum term does
+    const weight = (ts: typeof termsA) => ts.find((t) => t.kind === "weight")!;
+    const jet = (ts: typeof termsA) => ts.find((t) => t.kind === "momentum" && t.label.startsWith("momentum out"))!;
+    expect(weight(termsB)).toBe(weight(termsA));
+    expect(jet(termsB)).not.toBe(jet(termsA));
+    expect(jet(termsB).fx).not.toBeCloseTo(jet(termsA).fx, 3);
+    // sharing changes no value: each point is what a fresh parse and solve gives
+    [10, 20].forEach((v, i) => {
+      const p = sweep.points[i];
+      if (!p.ok) throw new Error("does not solve");
+      const fresh = solve(parse({ ...doc, parameters: { ...doc.parameters, theta: `${v} deg` } }));
+      expect(p.result.equations).toEqual(fresh.equations);
+      expect(p.result.warnings).toEqual(fresh.warnings);
+    });
+  });
+
   it("refuses a parameter the sketch does not have", () => {
     const sk = parse(loadFixture("pipe-bend-anchor.json"));
     expect(() => solveSweep(sk, "phi", [1])).toThrow(/no parameter "phi" \(it has rho, Q, D1, D2, A1, A2, p1, p2, theta, flowFactor\)/);
