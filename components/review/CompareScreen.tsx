@@ -2,12 +2,11 @@
 // Two versions side by side (or the newest version and your kept, unsaved changes): what
 // changed in the inputs, field by field with units, and what it did to the reactions.
 import { useQuery } from "@tanstack/react-query";
-import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { sharedFrame } from "@/canvas/render/svg";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
-import { Notice, Panel, Segmented, Select, Skeleton } from "@/components/shell/controls";
+import { Crumb, Notice, Panel, Segmented, Select, Skeleton } from "@/components/shell/controls";
 import { discardDraft, readDraft } from "@/components/versions/editor/drafts";
 import { useVersions } from "@/components/versions/VersionHistory";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
@@ -48,12 +47,7 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
   return (
     <div className="space-y-5">
       <div className="space-y-2">
-        <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">
-          <Link href={base} className="hover:text-ink">
-            {sketchTitle}
-          </Link>{" "}
-          › Compare
-        </p>
+        <Crumb href={base} parent={sketchTitle} here="Compare" />
         <h1 className="text-2xl font-semibold tracking-tight">
           Compare v{from} → {toLabel}
         </h1>

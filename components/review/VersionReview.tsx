@@ -6,7 +6,7 @@ import Link from "next/link";
 import { useMemo, useState } from "react";
 import { formatForce } from "@/components/sketches/format";
 import { StatusMark } from "@/components/sketches/StatusMark";
-import { Notice, Panel, Segmented, Skeleton } from "@/components/shell/controls";
+import { Crumb, Notice, Panel, Segmented, Skeleton } from "@/components/shell/controls";
 import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import type { SketchStatus } from "@/lib/sketch-schemas";
@@ -86,12 +86,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   return (
     <div className="space-y-5">
       <div className="space-y-1.5">
-        <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">
-          <Link href={sketchHref} className="hover:text-ink">
-            {sketchTitle}
-          </Link>{" "}
-          › Version {number}
-        </p>
+        <Crumb href={sketchHref} parent={sketchTitle} here={`Version ${number}`} />
         <div className="flex flex-wrap items-start justify-between gap-3">
           <h1 className="text-2xl font-semibold tracking-tight">
             v{number}

@@ -1,4 +1,5 @@
 // Form controls and small status pieces shared by the account, workspace and (later) sketch screens.
+import Link from "next/link";
 import type { ButtonHTMLAttributes, InputHTMLAttributes, ReactNode, SelectHTMLAttributes } from "react";
 
 type Tone = "primary" | "secondary" | "danger" | "quiet";
@@ -188,5 +189,17 @@ export function Segmented<T extends string>({
         ))}
       </div>
     </div>
+  );
+}
+
+/** "Parent › here" above a page title: the parent is a link back. */
+export function Crumb({ href, parent, here }: { href: string; parent: ReactNode; here: ReactNode }) {
+  return (
+    <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">
+      <Link href={href} className="hover:text-ink">
+        {parent}
+      </Link>{" "}
+      › {here}
+    </p>
   );
 }

@@ -6,7 +6,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ActivityFeed } from "@/components/review/ActivityFeed";
 import { ReviewBadge } from "@/components/review/SignOff";
-import { Button, Notice, Panel } from "@/components/shell/controls";
+import { Button, Crumb, Notice, Panel } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
 import { editorHref, VersionHistory } from "@/components/versions/VersionHistory";
 import { formatDateTime } from "@/components/workspaces/format";
@@ -86,12 +86,7 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
   return (
     <div className="space-y-6">
       <div className="space-y-2">
-        <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">
-          <Link href={`/workspaces/${sketch.workspaceId}`} className="hover:text-ink">
-            {sketch.workspaceName}
-          </Link>{" "}
-          › Sketch
-        </p>
+        <Crumb href={`/workspaces/${sketch.workspaceId}`} parent={sketch.workspaceName} here="Sketch" />
         <div className="flex flex-wrap items-start justify-between gap-4">
           <div className="min-w-0 space-y-1.5">
             <h1 className="text-2xl font-semibold tracking-tight">{sketch.title}</h1>
