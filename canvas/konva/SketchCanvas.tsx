@@ -24,6 +24,7 @@ import { resolveCanvasFont } from "./font";
 import { CanvasLegend } from "./CanvasLegend";
 import { UnderlayLayer } from "./UnderlayLayer";
 import { drawAfterCommit, ignoreStagePointerInput } from "./immediate";
+import { followLabelLayout } from "./labelLayout";
 
 function Grid({ width, height }: { width: number; height: number }) {
   const view = useEditor((s) => s.view);
@@ -83,6 +84,7 @@ function Elements({ interaction, lifted }: { interaction: InteractionStore; lift
   const units = useEditor((s) => s.units);
   const states = useAnalysis((s) => statesOf(s.shown));
   const seeThrough = useEditor((s) => Boolean(s.sketch.underlay && !s.sketch.underlay.hidden));
+  const shifts = useStore(interaction, (s) => s.labelShifts);
   const selected = useMemo(() => new Set(selection), [selection]);
   const bodies = useMemo(() => bodyIds.filter((id) => up.has(id) === lifted), [bodyIds, up, lifted]);
   const items = useMemo(() => itemIds.filter((id) => up.has(id) === lifted), [itemIds, up, lifted]);
@@ -92,7 +94,7 @@ function Elements({ interaction, lifted }: { interaction: InteractionStore; lift
         <BodyNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} seeThrough={seeThrough} />
       ))}
       {items.map((id) => (
-        <ItemNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} state={states.get(id)} />
+        <ItemNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} state={states.get(id)} shift={shifts.get(id)} />
       ))}
       {bodies.map((id) => (
         <CgNode key={`cg-${id}`} id={id} selected={selected.has(id)} scale={scale} units={units} />
@@ -194,6 +196,10 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
     };
   }, [stores, interaction, onController]);
 
+  // crowded element names move off other texts: placed for the whole sketch, again after each
+  // change, but not while a drag lasts (a drag stays one small redraw; names settle on release)
+  useEffect(() => followLabelLayout(stores, interaction), [stores, interaction]);
+
   // redraw once the page font has loaded, so canvas text uses it
   useEffect(() => {
     resolveCanvasFont();
@@ -263,7 +269,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
           </Layer>
           <Layer listening={false}>
             <Group x={view.x} y={view.y}>
-              <ResultsShape />
+              <ResultsShape interaction={interaction} />
             </Group>
           </Layer>
           <Layer ref={liftedLayerRef} listening={!dragging} onDraw={() => queueMicrotask(markFrame)}>

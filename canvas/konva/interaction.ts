@@ -5,6 +5,7 @@ import { createStore } from "zustand/vanilla";
 import type { Vec2 } from "@/solver/types";
 import type { SnapResult } from "../geometry/snap";
 import type { Box } from "../geometry/polygon";
+import { NO_SHIFTS, type LabelShifts } from "../render/declutter";
 
 export interface InteractionState {
   /** pointer in world metres while over the canvas */
@@ -20,12 +21,14 @@ export interface InteractionState {
   panning: boolean;
   /** elements a drag is changing: drawn on the interaction layer, so the drawing layer (every other element) is not redrawn each frame */
   lifted: ReadonlySet<string>;
+  /** element names moved off crowded texts, placed for the whole sketch (kept while a drag lasts) */
+  labelShifts: LabelShifts;
 }
 
 export const NOTHING_LIFTED: ReadonlySet<string> = new Set();
 
 export const createInteractionStore = () =>
-  createStore<InteractionState>(() => ({ hover: null, snap: null, band: null, rect: null, spaceHeld: false, dragging: false, panning: false, lifted: NOTHING_LIFTED }));
+  createStore<InteractionState>(() => ({ hover: null, snap: null, band: null, rect: null, spaceHeld: false, dragging: false, panning: false, lifted: NOTHING_LIFTED, labelShifts: NO_SHIFTS }));
 
 export type InteractionStore = ReturnType<typeof createInteractionStore>;
 

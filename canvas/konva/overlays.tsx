@@ -29,7 +29,7 @@ const DRAWN_WITH_RESULTS = new Set(["pin", "roller", "contact", "fixed", "tie", 
  * new result (from the worker, between frames) is drawn at once in that task, so the frames that
  * answer the pointer only draw what the pointer moved.
  */
-export function ResultsShape() {
+export function ResultsShape({ interaction }: { interaction: InteractionStore }) {
   const stores = useStores();
   const shapeRef = useRef<Konva.Shape>(null);
   const primsRef = useRef<Prim[]>([]);
@@ -41,7 +41,8 @@ export function ResultsShape() {
       const sc = stores.scene.getState();
       // only what the results are drawn at: dragging a load changes none of these until its result arrives
       const parts = [...sc.bodies, ...sc.items.filter((i) => DRAWN_WITH_RESULTS.has(i.kind))];
-      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, ...parts];
+      const shifts = interaction.getState().labelShifts;
+      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, shifts, ...parts];
       if (key.length === last.length && key.every((k, i) => k === last[i])) return;
       last = key;
       const scene: Scene = {
@@ -50,7 +51,7 @@ export function ResultsShape() {
         byId: new Map(parts.map((p) => [p.id, p])),
       };
       // the supports' and ports' own labels are drawn by their nodes; the result's labels keep off them
-      primsRef.current = a.shown ? scenePrims(scene, e.view.scale, e.units, a.shown, a.stale).results : [];
+      primsRef.current = a.shown ? scenePrims(scene, e.view.scale, e.units, a.shown, a.stale, shifts).results : [];
       const layer = shapeRef.current?.getLayer();
       if (!layer) return;
       if (now) layer.draw();
@@ -62,10 +63,13 @@ export function ResultsShape() {
       stores.editor.subscribe((s, p) => {
         if (s.view.scale !== p.view.scale || s.units !== p.units) redraw(false);
       }),
+      interaction.subscribe((s, p) => {
+        if (s.labelShifts !== p.labelShifts) redraw(false);
+      }),
     ];
     redraw(false);
     return () => stops.forEach((stop) => stop());
-  }, [stores]);
+  }, [stores, interaction]);
   return <Shape ref={shapeRef} sceneFunc={(ctx) => drawPrims(ctx._context, primsRef.current, canvasFont())} listening={false} perfectDrawEnabled={false} />;
 }
 

@@ -40,3 +40,53 @@ export function declutter(labels: Prim[], obstacles: readonly Prim[]): Prim[] {
     return p;
   });
 }
+
+/** Per element id: the vertical moves of its name texts, as [index of the text prim, dy in px]. */
+export type LabelShifts = ReadonlyMap<string, ReadonlyArray<readonly [number, number]>>;
+export const NO_SHIFTS: LabelShifts = new Map();
+
+/**
+ * Keep the elements' names readable where elements crowd: every value and state word (and each
+ * body's name) stays where its symbol puts it; then each element's name (the italic text beside
+ * a support or a load), in drawing order, moves a line or two down or up when it would sit on a
+ * text placed before it. `prev` keeps the identity of unchanged entries (and of the whole map
+ * when nothing changed), so a canvas node is drawn again only when its own names move.
+ */
+export function placeElementNames(groups: ReadonlyArray<{ id: string; prims: readonly Prim[] }>, prev: LabelShifts = NO_SHIFTS): LabelShifts {
+  const placed: Box[] = [];
+  for (const g of groups) for (const p of g.prims) if (p.t === "text" && !p.italic) placed.push(textBox(p));
+  const out = new Map<string, ReadonlyArray<readonly [number, number]>>();
+  for (const g of groups) {
+    const moves: Array<[number, number]> = [];
+    g.prims.forEach((p, i) => {
+      if (p.t !== "text" || !p.italic) return;
+      const b = textBox(p);
+      const step = p.size + 3;
+      for (const dy of [0, step, -step, 2 * step, -2 * step]) {
+        const moved = { ...b, y0: b.y0 + dy, y1: b.y1 + dy };
+        if (free(moved, placed)) {
+          placed.push(moved);
+          if (dy) moves.push([i, dy]);
+          return;
+        }
+      }
+      placed.push(b);
+    });
+    if (!moves.length) continue;
+    const before = prev.get(g.id);
+    out.set(g.id, before && before.length === moves.length && before.every(([i, d], k) => i === moves[k][0] && d === moves[k][1]) ? before : moves);
+  }
+  if (out.size === prev.size && [...out].every(([id, m]) => prev.get(id) === m)) return prev;
+  return out;
+}
+
+/** `prims` with the given texts moved (a new array only when something moves). */
+export function shiftTexts(prims: Prim[], moves: ReadonlyArray<readonly [number, number]> | undefined): Prim[] {
+  if (!moves?.length) return prims;
+  const out = prims.slice();
+  for (const [i, dy] of moves) {
+    const p = out[i];
+    if (p?.t === "text") out[i] = { ...p, at: [p.at[0], p.at[1] + dy] };
+  }
+  return out;
+}

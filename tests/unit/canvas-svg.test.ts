@@ -6,6 +6,12 @@ import { describe, expect, it } from "vitest";
 import { solveFile, type SolveResult } from "@/solver/index";
 import { renderSketchSvg } from "@/canvas/render/svg";
 import { EXAMPLES, exampleById } from "@/canvas/examples";
+import { textBox } from "@/canvas/render/declutter";
+import { scenePrims } from "@/canvas/render/scenePrims";
+import { buildScene, fieldValuesById } from "@/canvas/scene";
+import { parseSketch } from "@/solver/index";
+
+const overlap = (a: ReturnType<typeof textBox>, b: ReturnType<typeof textBox>) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
 
 const parse = (svg: string) => new DOMParser().parseFromString(svg, "image/svg+xml");
 
@@ -100,11 +106,6 @@ describe("the result's labels keep off other texts", () => {
   });
 
   it("in every example, no result label overlaps an element's label or another result label", async () => {
-    const { textBox } = await import("@/canvas/render/declutter");
-    const { scenePrims } = await import("@/canvas/render/scenePrims");
-    const { buildScene, fieldValuesById } = await import("@/canvas/scene");
-    const { parseSketch } = await import("@/solver/index");
-    const overlap = (a: ReturnType<typeof textBox>, b: ReturnType<typeof textBox>) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
     for (const ex of EXAMPLES) {
       const parsed = parseSketch(ex.sketch);
       if (!parsed.ok) throw new Error(ex.id);
@@ -122,3 +123,51 @@ describe("the result's labels keep off other texts", () => {
     }
   });
 });
+
+describe("element names keep off other texts", () => {
+  it("moves a name that lands on another element's text by a line; values, states and free names stay", async () => {
+    const { placeElementNames, shiftTexts } = await import("@/canvas/render/declutter");
+    const { text } = await import("@/canvas/render/prims");
+    const state = text([100, 0], "lifts", "#000", 11, { weight: 600, align: "left", baseline: "middle" });
+    const name = text([60, 2], "rear wheels (braked)", "#000", 10, { italic: true, align: "left", baseline: "middle" });
+    const farName = text([400, 0], "front caster", "#000", 10, { italic: true, align: "left", baseline: "middle" });
+    const groups = [
+      { id: "rear", prims: [name] },
+      { id: "front", prims: [state, farName] },
+    ];
+    const shifts = placeElementNames(groups);
+    expect([...shifts.keys()]).toEqual(["rear"]);
+    expect(shifts.get("rear")).toEqual([[0, 13]]);
+    const [moved] = shiftTexts(groups[0].prims, shifts.get("rear"));
+    expect(moved.t === "text" && moved.at).toEqual([60, 15]);
+    // placed again with nothing changed: the same map, so no canvas node redraws
+    expect(placeElementNames(groups, shifts)).toBe(shifts);
+    // nothing crowded: nothing moves
+    expect(placeElementNames([{ id: "front", prims: [state, farName] }]).size).toBe(0);
+  });
+
+  it("in every example and at a tipping angle of the cart, no element name sits on another text", async () => {
+    const cart = exampleById("washing-cart")!.sketch;
+    const docs = [...EXAMPLES.map((ex) => ({ id: ex.id, doc: ex.sketch })), { id: "washing-cart tipping", doc: { ...cart, parameters: { ...cart.parameters, theta: "-35 deg" } } }];
+    let moved = 0;
+    for (const { id, doc } of docs) {
+      const parsed = parseSketch(doc);
+      if (!parsed.ok) throw new Error(id);
+      const result = solveFile(doc) as SolveResult;
+      const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+      for (const scale of [120, 320]) {
+        const { groups } = scenePrims(scene, scale, "SI", result);
+        const texts = groups.flatMap((g) => g.prims.flatMap((p) => (p.t === "text" ? [{ id: g.id, text: p.text, name: !!p.italic, box: textBox(p) }] : [])));
+        for (const t of texts.filter((x) => x.name)) {
+          const on = texts.find((o) => o !== t && o.id !== t.id && overlap(t.box, o.box));
+          expect(on, `${id} at ${scale} px/m: "${t.text}" on "${on?.text}"`).toBeUndefined();
+        }
+        const drawn = scenePrims(scene, scale, "SI", result, false, new Map()).groups;
+        moved += groups.filter((g, i) => g.prims !== drawn[i].prims).length;
+      }
+    }
+    // the tipping cart at 320 px/m crowds the rear wheels' name against the front contact's state
+    expect(moved).toBeGreaterThan(0);
+  });
+});
+
