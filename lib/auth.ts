@@ -3,7 +3,7 @@ import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { db } from "@/db";
 import { ensurePersonalWorkspace } from "@/db/queries/workspaces";
-import { account, session, user, verification } from "@/db/schema";
+import { account, rateLimit, session, user, verification } from "@/db/schema";
 import { recordAudit } from "./audit";
 import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp } from "./env";
 import { sendMailInBackground } from "./mail";
@@ -40,7 +40,7 @@ export function createAuth(overrides: AuthOverrides = {}) {
     basePath: "/api/auth",
     secret: authSecret(),
     trustedOrigins: [appOrigin()],
-    database: drizzleAdapter(db, { provider: "pg", schema: { user, session, account, verification }, transaction: true }),
+    database: drizzleAdapter(db, { provider: "pg", schema: { user, session, account, verification, rateLimit }, transaction: true }),
     user: {
       additionalFields: {
         emailNotifications: { type: "boolean", required: false, defaultValue: true, input: true },
@@ -70,7 +70,8 @@ export function createAuth(overrides: AuthOverrides = {}) {
       },
     },
     session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
-    rateLimit: { enabled: true, storage: "memory", window: 60, max: 600, customRules },
+    // counted in PostgreSQL, so every app server behind a balancer spends the same budget
+    rateLimit: { enabled: true, storage: "database", window: 60, max: 600, customRules },
     advanced: {
       // Secure cookies only over https: a browser drops Secure cookies on plain http://127.0.0.1.
       useSecureCookies: isHttpsApp(),

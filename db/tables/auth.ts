@@ -1,6 +1,6 @@
 // Tables that better-auth reads and writes (its documented core schema), written by hand:
 // the schema generator CLI does not run on Node 20.
-import { boolean, index, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import { bigint, boolean, index, integer, pgTable, text, timestamp } from "drizzle-orm/pg-core";
 
 export const user = pgTable("user", {
   id: text("id").primaryKey(),
@@ -65,3 +65,28 @@ export const verification = pgTable(
   },
   (t) => [index("verification_identifier_idx").on(t.identifier)],
 );
+
+/**
+ * better-auth's sign-in budgets per client address and path (its `rateLimit` model), shared by
+ * every app server. `last_request` is when the key's current window began, in ms since the epoch.
+ */
+export const rateLimit = pgTable("rate_limit", {
+  id: text("id").primaryKey(),
+  key: text("key").notNull().unique(),
+  count: integer("count").notNull(),
+  lastRequest: bigint("last_request", { mode: "number" }).notNull(),
+});
+
+/** The app's own request budgets (POST /api/solve) per "<name>:<client address>", shared by every app server. */
+export const appRateLimit = pgTable(
+  "app_rate_limit",
+  {
+    key: text("key").primaryKey(),
+    count: integer("count").notNull(),
+    /** the current window, in ms since the epoch */
+    windowStart: bigint("window_start", { mode: "number" }).notNull(),
+    windowEnd: bigint("window_end", { mode: "number" }).notNull(),
+  },
+  (t) => [index("app_rate_limit_window_end_idx").on(t.windowEnd)],
+);
+

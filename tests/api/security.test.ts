@@ -52,6 +52,19 @@ describe("sign-in rate limit", () => {
     expect((await auth.handler(signInRequest(origin, person.email, PASSWORD, "203.0.113.8"))).status).toBe(200);
   });
 
+  it("is one budget for every app server: attempts counted by one instance count on another", async () => {
+    // two auth instances stand for two app servers behind a balancer, sharing the database
+    const origin = "http://127.0.0.1:3000";
+    const serverA = createAuth({ rateLimit: { max: 3, window: 60 } });
+    const serverB = createAuth({ rateLimit: { max: 3, window: 60 } });
+    const statuses: number[] = [];
+    statuses.push((await serverA.handler(signInRequest(origin, person.email, "wrong-password", "203.0.113.17"))).status);
+    statuses.push((await serverB.handler(signInRequest(origin, person.email, "wrong-password", "203.0.113.17"))).status);
+    statuses.push((await serverA.handler(signInRequest(origin, person.email, "wrong-password", "203.0.113.17"))).status);
+    statuses.push((await serverB.handler(signInRequest(origin, person.email, PASSWORD, "203.0.113.17"))).status);
+    expect(statuses).toEqual([401, 401, 401, 429]);
+  });
+
   it("takes its budget from AUTH_RATE_LIMIT_MAX and AUTH_RATE_LIMIT_WINDOW", async () => {
     setEnv("AUTH_RATE_LIMIT_MAX", "2");
     setEnv("AUTH_RATE_LIMIT_WINDOW", "30");

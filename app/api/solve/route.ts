@@ -22,7 +22,7 @@ function budget(): { max: number; window: number } {
  */
 export const POST = route({ auth: "none", body: z.unknown(), maxBodyBytes: MAX_SKETCH_BYTES }, async ({ req, body }) => {
   const { max, window } = budget();
-  limiter.hit(clientAddress(req), max, window);
+  await limiter.hit(clientAddress(req), max, window);
   const result = solveFile(body);
   if (!result.ok) {
     throw new AppError("validation_failed", "The sketch is not valid; the fields say why.", { fields: result.errors.slice(0, 50).map((e) => ({ path: e.path || "(root)", message: e.message })) });
