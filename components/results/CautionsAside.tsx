@@ -4,7 +4,7 @@ import { HEADING } from "@/components/editor/ui";
 
 export function CautionsAside({ flows }: { flows: boolean }) {
   return (
-    <aside aria-labelledby="cautions-title" className="w-[228px] shrink-0 overflow-y-auto border-l border-rule bg-caution-soft/30 px-3 py-2 text-[11.5px] leading-snug text-ink-soft" data-testid="cautions">
+    <aside aria-labelledby="cautions-title" className="w-[196px] shrink-0 2xl:w-[228px] overflow-y-auto border-l border-rule bg-caution-soft/30 px-3 py-2 text-[11.5px] leading-snug text-ink-soft" data-testid="cautions">
       <h2 id="cautions-title" className={`${HEADING} text-caution`}>
         Cautions
       </h2>

@@ -51,9 +51,10 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
         <thead>
           <tr className="border-b border-rule text-[11px] text-ink-faint">
             {table.columns.map((c) => (
-              <th key={c.key} scope="col" title={TITLES[c.key]} className={`whitespace-nowrap px-1 py-1 font-medium ${c.align === "left" ? "text-left" : "text-right"}`}>
+              <th key={c.key} scope="col" title={TITLES[c.key]} className={`whitespace-nowrap px-1 py-1 align-bottom font-medium ${c.align === "left" ? "text-left" : "text-right"}`}>
                 {SHORT[c.key] ?? c.label}
-                {c.unit && <span className="ml-0.5 font-normal">({c.unit})</span>}
+                {/* the unit on its own line: the columns are as wide as their numbers, not their headings */}
+                {c.unit && <span className="block font-normal">({c.unit})</span>}
               </th>
             ))}
           </tr>

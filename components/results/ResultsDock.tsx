@@ -23,7 +23,8 @@ export function ResultsDock() {
     <section aria-label="Results" className={`flex shrink-0 border-t border-rule bg-paper ${tab === "cases" || tab === "sweep" ? "h-[min(600px,64vh)]" : "h-[292px]"}`}>
       <div className="flex min-w-0 flex-1 flex-col px-3 pt-2">
         <StatusBanner />
-        <div className="mt-2 flex items-center gap-1 border-b border-rule">
+        {/* on a narrow screen the switch goes under the tabs, never breaking a label over lines */}
+        <div className="mt-2 flex flex-wrap items-center gap-x-1 border-b border-rule">
           <div role="tablist" aria-label="Results views" className="flex">
             {(
               [
@@ -41,7 +42,7 @@ export function ResultsDock() {
                 aria-selected={tab === id}
                 aria-controls={`panel-${id}`}
                 onClick={() => setTab(id)}
-                className={`-mb-px border-b-2 px-3 py-1 text-[12.5px] font-medium ${tab === id ? "border-accent text-ink" : "border-transparent text-ink-faint hover:text-ink"}`}
+                className={`-mb-px whitespace-nowrap border-b-2 px-3 py-1 text-[12.5px] font-medium ${tab === id ? "border-accent text-ink" : "border-transparent text-ink-faint hover:text-ink"}`}
               >
                 {label}
               </button>
@@ -49,7 +50,7 @@ export function ResultsDock() {
           </div>
           {tab === "reactions" && <ReactionsCsv sense={sense} />}
           {tab === "reactions" && (
-            <div role="radiogroup" aria-label="Show the reactions as" className="ml-auto flex items-center gap-0.5 pb-1 text-[12px]" data-testid="sense">
+            <div role="radiogroup" aria-label="Show the reactions as" className="ml-auto flex items-center gap-0.5 whitespace-nowrap pb-1 text-[12px]" data-testid="sense">
               {(
                 [
                   ["body", "Force on the body"],
