@@ -154,10 +154,13 @@ export function HandCheckView() {
       <p className="mb-2 text-[11.5px] text-ink-faint">
         Steady flow through a control volume fixed to the body: ΣF = Σ(ṁV)out − Σ(ṁV)in and ΣM_P = Σ r × ṁV. Forces in x and y, moments counter-clockwise positive.
       </p>
-      <div className="grid grid-cols-3 gap-4">
-        {blocks.map((b) => (
-          <Block key={b.key} b={b} units={units} />
-        ))}
+      {/* three sums side by side only where each has room for its terms' names; else one under another */}
+      <div className="@container">
+        <div className="grid grid-cols-1 gap-x-4 gap-y-3 @4xl:grid-cols-3">
+          {blocks.map((b) => (
+            <Block key={b.key} b={b} units={units} />
+          ))}
+        </div>
       </div>
     </div>
   );

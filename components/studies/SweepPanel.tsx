@@ -11,11 +11,14 @@ import { convert, formatNumber } from "@/solver/units";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile } from "@/solver/schema";
-import { useEditor, useStores } from "@/canvas/context";
+import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import type { SweepData, SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { SweepChart } from "./SweepChart";
+import { defaultSweepParameter, defaultSweepRange, type ParameterValue } from "./sweepRange";
+
+const NO_VALUES: Record<string, ParameterValue> = {};
 
 const COMPONENT_WORDS: Partial<Record<QuantityComponent, string>> = {
   margin: "margin",
@@ -53,9 +56,16 @@ export function SweepPanel() {
   }, [sketch.supports]);
 
   const saved = sketch.sweeps?.[0];
-  const [parameter, setParameter] = useState(saved?.parameter ?? parameters[0] ?? FLOW_FACTOR);
-  const [from, setFrom] = useState(String(saved?.from ?? 0));
-  const [to, setTo] = useState(String(saved?.to ?? (parameter === FLOW_FACTOR ? 2 : 90)));
+  const values = useAnalysis((s) => s.core?.parameterValues) ?? NO_VALUES;
+  const [parameter, setParameter] = useState(() => saved?.parameter ?? defaultSweepParameter(parameters, values));
+  const [from, setFrom] = useState(() => String(saved?.from ?? defaultSweepRange(parameter, values[parameter]).from));
+  const [to, setTo] = useState(() => String(saved?.to ?? defaultSweepRange(parameter, values[parameter]).to));
+  const pickParameter = (name: string) => {
+    setParameter(name);
+    const range = saved?.parameter === name ? saved : defaultSweepRange(name, values[name]);
+    setFrom(String(range.from));
+    setTo(String(range.to));
+  };
   const [points, setPoints] = useState(String(saved?.points ?? 201));
   const [caseId, setCaseId] = useState<string>(saved?.case ?? "");
   // by default the margins and resultants (friction margins on request)
@@ -135,7 +145,7 @@ export function SweepPanel() {
       <form className="grid grid-cols-2 gap-x-3 gap-y-2 @xl:grid-cols-4 @4xl:grid-cols-1" onSubmit={(e) => { e.preventDefault(); run(); }} aria-label="Sweep settings">
         <label className="col-span-2 block @4xl:col-span-1">
           <span className={LABEL}>Parameter</span>
-          <select className={INPUT} value={parameter} onChange={(e) => setParameter(e.target.value)} aria-label="Parameter to sweep">
+          <select className={INPUT} value={parameter} onChange={(e) => pickParameter(e.target.value)} aria-label="Parameter to sweep">
             {parameters.map((p) => (
               <option key={p} value={p}>{p} = {String(sketch.parameters?.[p])}</option>
             ))}

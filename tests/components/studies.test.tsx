@@ -76,6 +76,11 @@ describe("Sweep tab", () => {
     mount(load("fire-monitor-trailer"));
     await user.click(screen.getByRole("tab", { name: "Sweep" }));
     await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "theta");
+    // picking an angle offers ±90° about its value (theta = 15 deg here)
+    expect(screen.getByRole("textbox", { name: "From" })).toHaveValue("-75");
+    expect(screen.getByRole("textbox", { name: "To" })).toHaveValue("105");
+    await user.clear(screen.getByRole("textbox", { name: "From" }));
+    await user.type(screen.getByRole("textbox", { name: "From" }), "0");
     await user.clear(screen.getByRole("textbox", { name: "To" }));
     await user.type(screen.getByRole("textbox", { name: "To" }), "80");
     await user.clear(screen.getByRole("textbox", { name: "Points" }));
