@@ -4,7 +4,7 @@
 // moments compare: Q = (Fx, Fy, M/L) about a reference point O near the body, q = (ux, uy, L·θ).
 import { boundingBox, direction, momentOf, polygonCentroid, polygonDiameter } from "./geometry";
 import type { PortFlow } from "./ports";
-import { reuseEqual, sameTerm, termKey } from "./reuse";
+import { isShared, reuseEqual, sameTerm } from "./reuse";
 import { DEFAULT_GROUPS, type Body, type EquationTerm, type Sketch, type Support, type Vec2 } from "./types";
 
 /** Stiffness shared by supports when none is given (N/m). Only ratios matter. */
@@ -209,9 +209,11 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
     }
   }
 
-  // most terms come out as the last solve of this sketch made them (see reuse.ts)
-  reuseEqual(sketch, "forces", forceTerms, termKey, sameTerm);
-  reuseEqual(sketch, "momentum", momentumTerms, termKey, sameTerm);
+  // in a sweep, most terms come out as the last point's solve made them (see reuse.ts)
+  if (isShared(sketch)) {
+    reuseEqual(body, 0, forceTerms, sameTerm);
+    reuseEqual(body, 1, momentumTerms, sameTerm);
+  }
 
   // ---- the scaled generalized load Q = Σ forces − Σ momentum flux, about `origin`
   const { Q, scale } = generalizedLoad(forceTerms, momentumTerms, origin, L);

@@ -8,13 +8,13 @@ import { dot3, norm3, type Vec3 } from "./linalg";
 import { buildBodyModel, type BodyModel } from "./model";
 import { massBalanceWarnings, portFlow, type PortFlow } from "./ports";
 import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResult, SolveWarning, Status, Vec2 } from "./types";
-import { reuseEqual, sameWarning, warningKey } from "./reuse";
+import { isShared, reuseEqual, sameWarning } from "./reuse";
 import { describeFreeMotion, describeSupport, fmtForce } from "./words";
 
 export function solve(sketch: Sketch): SolveResult {
   const { models, warnings } = prepare(sketch);
   const result = solveModels(models, warnings);
-  reuseEqual(sketch, "warnings", result.warnings, warningKey, sameWarning);
+  if (isShared(sketch)) reuseEqual(sketch, 0, result.warnings, sameWarning);
   return result;
 }
 

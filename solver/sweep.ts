@@ -5,6 +5,7 @@ import { planOf } from "./parse";
 import { solve } from "./solve";
 import type { FieldError, Sketch, SolveResult } from "./types";
 import { validateValues } from "./validate";
+import { shareAcrossSolves } from "./reuse";
 
 export type SweepPoint = { value: number; ok: true; result: SolveResult } | { value: number; ok: false; errors: FieldError[] };
 
@@ -32,6 +33,8 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
   if (!plan) throw new Error("a sweep needs a sketch returned by parseSketch");
   if (parameter === FLOW_FACTOR && !plan.scope.has(FLOW_FACTOR)) {
     const saved = sketch.scaling;
+    // the points share the terms and warnings the swept value leaves alone (reuse.ts)
+    shareAcrossSolves(sketch, true);
     return {
       parameter,
       unit: "",
@@ -42,6 +45,7 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
       },
       restore() {
         sketch.scaling = saved;
+        shareAcrossSolves(sketch, false);
       },
     };
   }
@@ -62,6 +66,7 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
   const savedScope = new Map<string, MathValue>([...affected].map((n) => [n, plan.scope.get(n)!]));
   const savedSlots = slots.map((s) => s.target[s.key]);
 
+  shareAcrossSolves(sketch, true);
   return {
     parameter,
     unit,
@@ -87,6 +92,7 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
       return { value, ok: true, result: solve(sketch) };
     },
     restore() {
+      shareAcrossSolves(sketch, false);
       for (const [n, v] of savedScope) plan.scope.set(n, v);
       slots.forEach((s, i) => (s.target[s.key] = savedSlots[i]));
     },

@@ -74,6 +74,15 @@ describe("solveSweep", () => {
     });
   });
 
+  it("only a sweep shares: single solves, before and after one, make their own terms", () => {
+    const sk = parse(loadFixture("fire-monitor-trailer.json"));
+    const weightOf = () => Object.values(solve(sk).equations).flatMap((e) => e.forces).find((t) => t.kind === "weight")!;
+    expect(weightOf()).not.toBe(weightOf());
+    solveSweep(sk, "theta", [10, 20]);
+    expect(weightOf()).not.toBe(weightOf());
+    expect(weightOf()).toEqual(weightOf());
+  });
+
   it("refuses a parameter the sketch does not have", () => {
     const sk = parse(loadFixture("pipe-bend-anchor.json"));
     expect(() => solveSweep(sk, "phi", [1])).toThrow(/no parameter "phi" \(it has rho, Q, D1, D2, A1, A2, p1, p2, theta, flowFactor\)/);
