@@ -15,6 +15,7 @@ export * from "./tables/sketches";
 export * from "./tables/review-enums";
 export * from "./tables/review";
 export * from "./tables/uploads";
+export * from "./tables/rate-limits";
 
 export const userRelations = relations(user, ({ many }) => ({
   sessions: many(session),

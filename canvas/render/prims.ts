@@ -177,7 +177,6 @@ export function text(at: Pt, s: string, color: string, size = 11, extra: Partial
   return { t: "text", at, text: s, size, color, halo: true, ...extra };
 }
 
-/** Bounding box of primitives (text approximated by its size). */
 /** The box a text takes, from an average glyph width (no font metrics: this runs on the server too). */
 export function textExtent(p: Extract<Prim, { t: "text" }>): { x0: number; y0: number; x1: number; y1: number } {
   const w = p.text.length * p.size * 0.56;
@@ -186,6 +185,7 @@ export function textExtent(p: Extract<Prim, { t: "text" }>): { x0: number; y0: n
   return { x0, y0, x1: x0 + w, y1: y0 + p.size };
 }
 
+/** Bounding box of primitives (text approximated by its size). */
 export function primsBox(prims: Prim[]): { minX: number; minY: number; maxX: number; maxY: number } {
   let minX = Infinity;
   let minY = Infinity;

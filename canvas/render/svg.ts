@@ -4,7 +4,7 @@ import { parseSketch } from "@/solver/parse";
 import type { SketchFile, SketchFileInput } from "@/solver/schema";
 import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
-import { buildScene, fieldValuesById, pointsOf } from "../scene";
+import { buildScene, fieldValuesById, pointsOf, type Scene } from "../scene";
 import { boxOf } from "../geometry/polygon";
 import { scenePrims } from "./scenePrims";
 import { fitScenes } from "../geometry/fit";
@@ -65,6 +65,15 @@ function sceneOf(file: SketchFile | SketchFileInput) {
   return { parsed, doc, scene };
 }
 
+/** The scale that fits a sketch's geometry into width × height with room for symbols and labels. */
+function ownScale(scene: Scene, width: number, height: number): number {
+  const world = boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
+  const pad = 96;
+  const w = Math.max(world.maxX - world.minX, 0.2);
+  const h = Math.max(world.maxY - world.minY, 0.2);
+  return Number.isFinite(w) ? Math.min((width - 2 * pad) / w, (height - 2 * pad) / h) : 100;
+}
+
 /** One frame (scale and origin) that fits every sketch given, with its result, into width × height. */
 export function sharedFrame(drawings: Array<{ file: SketchFile | SketchFileInput; result: SolveResult | null }>, width: number, height: number, units: UnitSystem = "SI"): View | undefined {
   const drawn = drawings.flatMap((d) => {
@@ -94,21 +103,12 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
 
   // fit: world box → pixels, leaving room for symbols and labels that do not scale; then centre
   // what is actually drawn (labels included) — or use the shared frame as given
-  let scale: number;
+  const scale = opts.frame ? opts.frame.scale : ownScale(scene, width, height - footer);
+  const { groups, results } = scenePrims(scene, scale, units, result, opts.stale);
   let dx: number;
   let dy: number;
-  let groups: ReturnType<typeof scenePrims>["groups"];
-  let results: Prim[];
-  if (opts.frame) {
-    ({ scale, x: dx, y: dy } = opts.frame);
-    ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale));
-  } else {
-    const world = boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
-    const pad = 96;
-    const w = Math.max(world.maxX - world.minX, 0.2);
-    const h = Math.max(world.maxY - world.minY, 0.2);
-    scale = Number.isFinite(w) ? Math.min((width - 2 * pad) / w, (height - footer - 2 * pad) / h) : 100;
-    ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale));
+  if (opts.frame) ({ x: dx, y: dy } = opts.frame);
+  else {
     const box = primsBox([...groups.flatMap((g) => g.prims), ...results]);
     dx = Number.isFinite(box.minX) ? (width - (box.maxX - box.minX)) / 2 - box.minX : width / 2;
     dy = Number.isFinite(box.minY) ? (height - footer - (box.maxY - box.minY)) / 2 - box.minY : height / 2;
