@@ -7,7 +7,7 @@ import { CasesPanel } from "@/components/studies/CasesPanel";
 import { downloadCsv } from "@/components/studies/csv";
 import { reactionTable } from "@/solver/report";
 import { SweepPanel } from "@/components/studies/SweepPanel";
-import { CautionsAside } from "./CautionsAside";
+import { CautionsAside, CautionsLine } from "./CautionsAside";
 import { HandCheckView } from "./HandCheckView";
 import { ReactionsTable, type Sense } from "./ReactionsTable";
 import { StatusBanner } from "./StatusBanner";
@@ -23,6 +23,7 @@ export function ResultsDock() {
     <section aria-label="Results" className={`flex shrink-0 border-t border-rule bg-paper ${tab === "cases" || tab === "sweep" ? "h-[min(600px,64vh)]" : "h-[292px]"}`}>
       <div className="flex min-w-0 flex-1 flex-col px-3 pt-2">
         <StatusBanner />
+        <CautionsLine flows={flows} />
         {/* on a narrow screen the switch goes under the tabs, never breaking a label over lines */}
         <div className="mt-2 flex flex-wrap items-center gap-x-1 border-b border-rule">
           <div role="tablist" aria-label="Results views" className="flex">

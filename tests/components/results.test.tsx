@@ -157,4 +157,15 @@ describe("results panel", () => {
     expect(aside).toHaveTextContent("water hammer");
     expect(aside).toHaveTextContent("Rigid body");
   });
+
+  it("in a narrower window keeps the short caution on a line that opens to the same lists", () => {
+    mountDock(load("pipe-bend-anchor"));
+    const line = screen.getByTestId("cautions-line");
+    // the summary is the one-line caution; the lists are inside the disclosure
+    expect(line.querySelector("summary")).toHaveTextContent("reviewed by a qualified engineer");
+    expect(line).toHaveTextContent("water hammer");
+    expect(line).toHaveTextContent("Rigid body");
+    // one labelled region: the line's lists do not repeat the aside's heading id
+    expect(document.querySelectorAll("#cautions-title")).toHaveLength(1);
+  });
 });
