@@ -69,7 +69,8 @@ export function solveOneSided(model: BodyModel): SpringSolution {
       groups.forEach((g, gi) => {
         if (engaged[gi]) return;
         const gn = springs[g.normal].g;
-        // closes, or (a friction contact) would grip the sliding motion
+        // closes, or (a friction contact) would grip the sliding motion: even one that the motion
+        // opens may hold, engaged, by friction under a small normal force
         const gt = g.tangent >= 0 ? springs[g.tangent].g : null;
         if (dot3(gn, z) < -1e-9 * norm3(gn) * zn || (gt && Math.abs(dot3(gt, z)) > 1e-9 * norm3(gt) * zn)) closing.push(gi);
       });
@@ -106,13 +107,42 @@ export function solveOneSided(model: BodyModel): SpringSolution {
   }
   // The search cycled: settle it exactly, by a proof that nothing holds the body, or by trying
   // every engagement when there are few.
-  const ray = findRay(model);
-  if (ray) return { ...solveEngaged(model, groups.map(() => false)), ray };
-  return enumerate(model) ?? { ...solveEngaged(model, engaged), inconsistent: true };
+  const released = () => solveEngaged(model, groups.map(() => false));
+  const proof = findRay(model, "proof");
+  if (proof) return { ...released(), ray: proof };
+  const found = enumerate(model);
+  if (found && found !== "none") return found;
+  // No engagement is consistent with the friction springs (engaged, a friction contact's
+  // tangential spring makes it pull; released, the body closes it), or there are too many to try.
+  // Normal forces alone may still hold the body: that answer (t = 0) meets equilibrium, n ≥ 0,
+  // the gaps and |t| ≤ μ·n, so it stands — a body on a fixed support never "tips".
+  const frictionless = withoutFriction(model);
+  if (frictionless) {
+    const held = solveOneSided(frictionless);
+    if (!held.ray && !held.inconsistent) return held;
+  }
+  // Friction contacts spoil the proof that nothing holds the body (engaged, one can hold any
+  // tangential force under a vanishing normal one). The motion that opens them and slides along
+  // them describes how the body goes.
+  const motion = found === "none" ? findRay(model, "motion") : null;
+  return motion ? { ...released(), ray: motion } : { ...solveEngaged(model, engaged), inconsistent: true };
 }
 
-/** Last resort after a cycle: try every engagement (few groups only) and keep a consistent one. */
-function enumerate(model: BodyModel): SpringSolution | null {
+/** The model with its friction springs left out: contacts carry normal force only (null without any). */
+function withoutFriction(model: BodyModel): BodyModel | null {
+  if (!model.groups.some((g) => g.tangent >= 0)) return null;
+  return {
+    ...model,
+    springs: model.springs.map((s) => (s.role === "t" ? { ...s, k: 0 } : s)),
+    groups: model.groups.map((g) => ({ ...g, tangent: -1 })),
+  };
+}
+
+/**
+ * Last resort after a cycle: try every engagement (few groups only) and keep a consistent one;
+ * "none" when every one was tried, null when there are too many to try.
+ */
+function enumerate(model: BodyModel): SpringSolution | "none" | null {
   const { groups, springs, scale } = model;
   if (groups.length > ENUMERATE_UP_TO) return null;
   const forceTol = 1e-9 * scale;
@@ -126,5 +156,5 @@ function enumerate(model: BodyModel): SpringSolution | null {
     });
     if (ok) return sol;
   }
-  return null;
+  return "none";
 }

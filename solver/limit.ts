@@ -1,6 +1,14 @@
 // The limit finder: where does a quantity (a reaction component, a margin, a friction ratio)
-// reach a target as one parameter varies? The range is scanned for sign changes of
-// quantity − target, and each bracket is refined with Brent's method (bracketing root finder).
+// reach a target as one parameter varies? The range is sampled; each sign change of
+// quantity − target is refined with Brent's method (bracketing root finder), and each run of
+// samples exactly at the target (a contact's n once it has lifted) counts once, at the first
+// point where it starts, found by bisection.
+//
+// Where the body starts or stops tipping the reported reactions switch from the one-sided
+// solution to the ones equilibrium would require with every support bilateral, so the quantity
+// jumps. Such a change of status is found by bisection too; it is a crossing when the quantity
+// jumps across the target there, or when it reaches the target on the side where the body
+// holds (the contact whose lift-off starts the tipping: its n falls to zero just before).
 import { readQuantity, type QuantitySpec } from "./quantity";
 import { createSweeper } from "./sweep";
 import type { Sketch } from "./types";
@@ -31,6 +39,19 @@ export type LimitResult =
       max: number;
     };
 
+/** How close to the target, relative to the quantity's size in the range, counts as reaching it at a change of status. */
+const TOUCH = 1e-6;
+
+interface Sample {
+  x: number;
+  /** quantity − target (NaN where the sketch is invalid or the quantity undefined) */
+  f: number;
+  /** the support's body holds or lifts (its reactions are the one-sided solution) */
+  held: boolean;
+  /** this sample and the next one sit either side of a change of status, closer than the tolerance */
+  boundary?: boolean;
+}
+
 export function findLimit(
   sketch: Sketch,
   parameter: string,
@@ -44,34 +65,82 @@ export function findLimit(
   const tol = options.tolerance ?? Math.max(1e-12, 1e-9 * (hi - lo || 1));
   const sweeper = createSweeper(sketch, parameter);
   let iterations = 0;
-  const f = (x: number): number => {
+  const at = (x: number): Sample => {
     iterations++;
     const p = sweeper.at(x);
-    return p.ok ? readQuantity(p.result, quantity) - target : Number.NaN;
+    if (!p.ok) return { x, f: Number.NaN, held: false };
+    const body = p.result.reactions[quantity.support]?.body;
+    const status = body === undefined ? undefined : p.result.bodies[body]?.status;
+    return { x, f: readQuantity(p.result, quantity) - target, held: status === "holds" || status === "lifts" };
   };
+  const f = (x: number) => at(x).f;
   try {
-    const xs: number[] = [];
-    const fs: number[] = [];
-    for (let i = 0; i <= samples; i++) {
-      const x = lo + ((hi - lo) * i) / samples;
-      xs.push(x);
-      fs.push(f(x));
-    }
-    const crossings: number[] = [];
+    const grid: Sample[] = [];
+    for (let i = 0; i <= samples; i++) grid.push(at(lo + ((hi - lo) * i) / samples));
+    const finite = grid.map((s) => s.f).filter(Number.isFinite);
+    const size = finite.reduce((m, v) => Math.max(m, Math.abs(v), Math.abs(v + target)), 0);
+
+    // Between samples of different status, insert the two points either side of the change.
+    const points: Sample[] = [grid[0]];
     for (let i = 0; i < samples; i++) {
-      const a = fs[i];
-      const b = fs[i + 1];
-      if (!Number.isFinite(a) || !Number.isFinite(b)) continue;
-      if (a === 0) {
-        if (!crossings.length || crossings[crossings.length - 1] !== xs[i]) crossings.push(xs[i]);
+      const a = grid[i];
+      const b = grid[i + 1];
+      if (Number.isFinite(a.f) && Number.isFinite(b.f) && a.held !== b.held) {
+        let u = a;
+        let v = b;
+        while (v.x - u.x > tol) {
+          const m = at((u.x + v.x) / 2);
+          if (m.held === a.held && Number.isFinite(m.f)) u = m;
+          else v = m;
+        }
+        if (u === a) points[points.length - 1] = { ...a, boundary: true };
+        else points.push({ ...u, boundary: true });
+        if (v !== b) points.push(v);
+      }
+      points.push(b);
+    }
+
+    const crossings: number[] = [];
+    // crossings closer than this are one event (a support's state and the body's status can
+    // change a few tolerances apart, as the solver's own force tolerance allows)
+    const merge = Math.max(10 * tol, 1e-6 * (hi - lo));
+    const add = (x: number) => {
+      if (!crossings.length || x > crossings[crossings.length - 1] + merge) crossings.push(x);
+    };
+    /** the first point of (a, b] where the quantity reaches or passes the target, given f(a) ≠ 0 = f(b) */
+    const firstZero = (a: number, fa: number, b: number): number => {
+      while (b - a > tol) {
+        const m = (a + b) / 2;
+        const fm = f(m);
+        if (fm === 0 || Math.sign(fm) === -Math.sign(fa)) b = m;
+        else a = m;
+      }
+      return b;
+    };
+    if (points[0].f === 0) add(points[0].x);
+    for (let i = 0; i + 1 < points.length; i++) {
+      const a = points[i];
+      const b = points[i + 1];
+      if (!Number.isFinite(a.f) || !Number.isFinite(b.f)) {
+        if (b.f === 0) add(b.x);
         continue;
       }
-      if (b === 0) continue; // counted at the next interval's start
-      if (Math.sign(a) !== Math.sign(b)) crossings.push(brent(f, xs[i], xs[i + 1], a, b, tol));
+      if (a.f === 0) continue; // inside a run at the target, counted where it began
+      if (a.boundary) {
+        // a change of status: the quantity jumps across the target, or reaches it where the body holds
+        const heldSide = a.held ? a : b;
+        if (b.f === 0 || Math.sign(a.f) !== Math.sign(b.f) || Math.abs(heldSide.f) <= TOUCH * size) add(heldSide.x);
+        continue;
+      }
+      if (b.f === 0) add(firstZero(a.x, a.f, b.x));
+      else if (Math.sign(a.f) !== Math.sign(b.f)) {
+        const root = brent(f, a.x, b.x, a.f, b.f, tol);
+        // Brent stops at any point where the quantity is exactly at the target: if it sits on
+        // a flat run, move to where the run starts
+        add(f(root) === 0 ? firstZero(a.x, a.f, root) : root);
+      }
     }
-    if (fs[samples] === 0) crossings.push(xs[samples]);
     if (crossings.length) return { found: true, value: crossings[0], unit: sweeper.unit, crossings, iterations };
-    const finite = fs.filter(Number.isFinite);
     return {
       found: false,
       unit: sweeper.unit,

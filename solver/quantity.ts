@@ -39,7 +39,8 @@ export function readQuantity(result: SolveResult, q: QuantitySpec): number {
       return r.friction ? r.friction.needed : Number.NaN;
     case "frictionMargin": {
       // μ·n − |t|: positive while friction holds, crossing zero where it is used up
-      if (r.kind !== "contact" || r.t === undefined || r.n === undefined) return Number.NaN;
+      // a bearing contact without friction data has no μ (frictionless): nothing to use up
+      if (r.kind !== "contact" || r.t === undefined || r.n === undefined || (r.state === "bearing" && !r.friction)) return Number.NaN;
       const mu = r.friction?.mu ?? 0;
       return mu * Math.max(r.n, 0) - Math.abs(r.t);
     }

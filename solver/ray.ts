@@ -1,9 +1,15 @@
-// When no engagement of the one-sided supports can hold the body, find the motion that proves
-// it: a direction d with Qᵀd > 0 that every bilateral spring allows (gᵀd = 0), that opens or
-// keeps every contact and tie (gᵀd ≥ 0) and slides along no friction contact. Such a d exists exactly when no equilibrium with
-// pushing contacts and pulling ties exists (Farkas' lemma). The cone lives in three dimensions,
-// so its extreme rays lie on intersections of two constraint planes: try those, the load's own
-// direction, and its projections onto each plane, and keep the feasible one doing most work.
+// When no engagement of the one-sided supports can hold the body, find the motion that shows it:
+// a direction d with Qᵀd > 0 that every bilateral spring allows (gᵀd = 0) and that opens or keeps
+// every contact and tie (gᵀd ≥ 0).
+//  - "proof": d also slides along no friction contact. Friction is checked, not enforced, so a
+//    contact with μ can hold any tangential force under a vanishing normal one; with that, such
+//    a d exists exactly when no equilibrium with pushing contacts and pulling ties exists
+//    (Farkas' lemma).
+//  - "motion": d may slide along a friction contact that it opens (open, it carries nothing).
+//    Not a proof; it describes the motion once the engagements have all been tried and failed.
+// The cones live in three dimensions, so their extreme rays lie on intersections of two constraint
+// planes: try those, the load's own direction, and its projections onto each plane, and keep the
+// feasible one doing most work.
 import { dot3, norm3, type Vec3 } from "./linalg";
 import type { BodyModel } from "./model";
 
@@ -37,7 +43,7 @@ function orthonormal(rows: ArrayLike<number>[]): Vec3[] {
   return basis;
 }
 
-export function findRay(model: BodyModel): Vec3 | null {
+export function findRay(model: BodyModel, kind: "proof" | "motion" = "proof"): Vec3 | null {
   const bilateral: number[][] = [];
   const oneSided: number[][] = [];
   /** friction springs, by the index of their contact's normal in `oneSided` */
@@ -62,10 +68,8 @@ export function findRay(model: BodyModel): Vec3 | null {
       const opening = dot3(g, d);
       const eps = 1e-9 * n * norm3(g);
       if (opening < -eps) return -Infinity;
-      // Friction is checked, not enforced: a contact with μ can hold any tangential force for
-      // a vanishing normal one, so a motion that slides along it proves nothing.
       const t = friction[i];
-      if (t && Math.abs(dot3(t, d)) > 1e-9 * n * norm3(t)) return -Infinity;
+      if (t && (kind === "proof" || opening <= eps) && Math.abs(dot3(t, d)) > 1e-9 * n * norm3(t)) return -Infinity;
     }
     return dot3(Q, d) / n;
   };

@@ -101,7 +101,8 @@ function solveBody(model: BodyModel, out: SolveResult): void {
     const isReleased = gi !== undefined && released[gi];
     const reaction: Reaction = { body: body.id, kind: s.kind, fx: clean(f.fx), fy: clean(f.fy), m: clean(f.m), state: "active" };
     if (s.kind === "roller" || s.kind === "contact" || s.kind === "tie") reaction.n = clean(f.n);
-    if (s.kind === "contact" && s.mu !== undefined) reaction.t = clean(f.t);
+    // the contract reports n and t for every contact: a frictionless one carries t = 0
+    if (s.kind === "contact") reaction.t = clean(f.t);
     if (gi !== undefined) {
       const g = groups[gi];
       reaction.state = s.kind === "contact" ? (isReleased ? "lifted" : "bearing") : isReleased ? "slack" : "taut";
@@ -155,20 +156,10 @@ function solveBody(model: BodyModel, out: SolveResult): void {
     });
   });
 
-  // ---- body-level friction: can the friction contacts together resist the sliding force?
-  let friction: BodyResult["friction"];
-  if (sumN > 0) {
-    const demand = Math.hypot(tx, ty);
-    friction = { needed: demand / sumN, available: sumMuN / sumN };
-    if (demand > sumMuN * (1 + 1e-9) + tol && !warnings.some((w) => w.code === "SLIP" && supports.some((s) => w.ids.includes(s.id)))) {
-      const ids = supports.filter((s) => s.kind === "contact" && s.mu !== undefined).map((s) => s.id);
-      warnings.push({
-        code: "SLIP",
-        message: `${body.label || body.id} slides: its friction contacts must resist ${fmtForce(demand)} and can give ${fmtForce(sumMuN)}`,
-        ids,
-      });
-    }
-  }
+  // ---- body-level friction, for the result's summary. It needs no warning of its own: when
+  // every contact has |t| ≤ μ·n, then |Σ t| ≤ Σ |t| ≤ Σ μ·n, so a body can only need more friction
+  // than its contacts give when one of them already warns SLIP.
+  const friction: BodyResult["friction"] = sumN > 0 ? { needed: Math.hypot(tx, ty) / sumN, available: sumMuN / sumN } : undefined;
 
   if (determinacy.kind === "indeterminate") {
     warnings.push({

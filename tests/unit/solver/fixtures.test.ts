@@ -51,9 +51,37 @@ describe("pump-skid-discharge: holds, INDETERMINATE", () => {
 describe("pump-skid-slip: SLIP at each foot", () => {
   it("each foot needs |t|/n > μ = 0.02 and says so", () => {
     const r = run("pump-skid-slip.json");
+    // The discharge-test skid above with μ = 0.02 (friction is checked, not enforced, so the
+    // reactions are the same). Statics, as worked above:
+    //   momentum flux out − in, x: 12·24·cos 120° − (−12·2.4) = −144 + 28.8 = −115.2 N
+    //   suction pressure force, x: −20 kPa · 0.005 m² · (−1) = +100 N
+    //   ΣFx: Rx + 100 = −115.2  →  Rx = −215.2 N, shared equally by the two equal feet
+    //   (indeterminate, equal stiffness): fx = −107.6 N each. The tangent of a contact at 90°
+    //   points along 180°, so t = −fx = +107.6 N.
+    //   n from ΣFy and ΣM: rear N1 = 4619 N, front N2 = 3966 N (rounded, as above).
+    // needed = |t|/n: rear 107.6/4619 = 0.0233, front 107.6/3966 = 0.0271, both above 0.02.
     const rear = r.reactions.rear;
-    expect(rear.friction!.needed).toBeCloseTo(Math.abs(rear.t!) / rear.n!, 12);
-    expect(rear.friction!.needed).toBeGreaterThan(0.02);
+    const front = r.reactions.front;
+    const W = 850 * G0;
+    const out = [12 * 24 * Math.cos(120 * DEG), 12 * 24 * Math.sin(120 * DEG)];
+    const inn = [-12 * 2.4, 0];
+    const P = [100, 0];
+    const Rx = out[0] - inn[0] - P[0];
+    const Ry = out[1] - inn[1] + W;
+    const sumXN = 0.3 * out[1] - 1.8 * out[0] - (3 * inn[1] - 0.35 * inn[0]) + 1.4 * W - (3 * P[1] - 0.35 * P[0]);
+    const N1 = (2.8 * Ry - sumXN) / 2.6;
+    const N2 = Ry - N1;
+    expectRel(Rx, -215.2, 1e-9);
+    expectRel(rear.t!, -Rx / 2, 1e-9);
+    expectRel(front.t!, -Rx / 2, 1e-9);
+    expectRel(rear.n!, N1, 1e-9);
+    expectRel(front.n!, N2, 1e-9);
+    expect(Math.round(rear.n!)).toBe(4619);
+    expect(Math.round(front.n!)).toBe(3966);
+    expect(rear.friction!.needed).toBeCloseTo(107.6 / N1, 12);
+    expect(front.friction!.needed).toBeCloseTo(107.6 / N2, 12);
+    expect(rear.friction!.needed).toBeCloseTo(0.0233, 4);
+    expect(front.friction!.needed).toBeCloseTo(0.0271, 4);
     const slips = r.warnings.filter((w) => w.code === "SLIP");
     expect(slips.map((w) => w.ids[0]).sort()).toEqual(["front", "rear"]);
     expect(slips[0].message).toMatch(/needs a friction coefficient of 0\.0\d+, and has μ = 0\.02/);

@@ -170,6 +170,58 @@ describe("findLimit", () => {
     }
   });
 
+  // A 4 m × 1 m block of 1000 kg (cg at x = 2) on three level frictionless contacts at x = 0, 2
+  // and 4 of equal stiffness, lifted by an upward force T at x = 0.5.
+  const W = 1000 * G0;
+  const threeFeet = () =>
+    parse(
+      sketch({
+        parameters: { T: "1 kN" },
+        bodies: [{ id: "b", outline: box(4, 1), mass: 1000 }],
+        supports: [0, 2, 4].map((x, i) => ({ id: `c${i}`, body: "b", kind: "contact" as const, at: [x, 0] as [number, number], angle: 90 })),
+        loads: [{ id: "lift", body: "b", kind: "force", at: [0.5, 1], fx: 0, fy: "T" }],
+      }),
+    );
+
+  it("finds where the body starts to tip, though the reported reactions jump there", () => {
+    // Once c0 has lifted, the block stands on c1 and c2. Moments about c2 (x = 4), statics:
+    //   n1·(2 − 4) + T·(0.5 − 4) − W·(2 − 4) = 0  →  n1 = (2W − 3.5T)/2,
+    // so c1 lifts, and with it the block tips about c2, at T = 2W/3.5 = 5603.8 N. Past it the
+    // result reports the reactions every support bilateral would need (c1 then carries about
+    // 1.4 kN), so the margin jumps instead of crossing zero.
+    const sk = threeFeet();
+    const before = solveSweep(sk, "T", [5.6, 5.61]).points.map((p) => (p.ok ? p.result : null)!);
+    expect(before[0].bodies.b.status).toBe("lifts");
+    expect(before[1].bodies.b.status).toBe("tips");
+    expect(before[1].reactions.c1.margin!).toBeGreaterThan(1000);
+    const lim = findLimit(sk, "T", [5, 6], { support: "c1", component: "margin" });
+    expect(lim.found).toBe(true);
+    if (lim.found) {
+      expectRel(lim.value * 1000, (2 * W) / 3.5, 1e-8);
+      expect(lim.crossings).toHaveLength(1);
+    }
+    // c2 bears on both sides of the change and never reaches zero: no limit there
+    expect(findLimit(sk, "T", [5, 6], { support: "c2", component: "n" }).found).toBe(false);
+  });
+
+  it("a quantity that falls to zero and stays there: its limit is where it gets there, counted once", () => {
+    // All three bear while T is small. Equal springs under a rigid block share the load as
+    // n_i = P/3 + M·(x_i − x̄)/Σ(x_j − x̄)² (the elastic method, common practice), with the net
+    // downward load P = W − T and the moment of T about x̄ = 2 giving M·(x_i − x̄)/8 = −1.5·T·(x_i − 2)/8:
+    //   n0 = (W − T)/3 − 1.5·T·2/8 = 0  at  T = W/(1 + 9/8) = 8W/17 = 4614.9 N.
+    // Past it c0 has lifted and its n stays exactly 0.
+    const sk = threeFeet();
+    const expected = (8 * W) / 17;
+    for (const component of ["n", "margin"] as const) {
+      const lim = findLimit(sk, "T", [0, 5], { support: "c0", component });
+      expect(lim.found).toBe(true);
+      if (lim.found) {
+        expectRel(lim.value * 1000, expected, 1e-8);
+        expect(lim.crossings).toEqual([lim.value]);
+      }
+    }
+  });
+
   it("Brent's method on a function with a known root", () => {
     const f = (x: number) => x ** 3 - 2 * x - 5; // root 2.0945514815423265 (Wallis's example)
     expect(brent(f, 2, 3, f(2), f(3), 1e-14)).toBeCloseTo(2.0945514815423265, 12);
