@@ -1,12 +1,13 @@
-// npm run solve -- FILE   prints the solve result JSON on stdout; invalid input exits 1 with
-// { ok: false, errors } on stdout. Nothing else is written to stdout.
+// npm run -s solve -- FILE   prints the solve result JSON on stdout; invalid input exits 1 with
+// { ok: false, errors } on stdout. Nothing else is written to stdout by this program; without -s,
+// npm itself prints a banner ("> counterpoise@… solve") there first, which breaks a pipe into jq.
 import { readFileSync } from "node:fs";
 import { solveFile } from "./index";
 
 function main(argv: string[]): number {
   const file = argv[0];
   if (!file || argv.length > 1) {
-    process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: "usage: npm run solve -- FILE" }] }, null, 2) + "\n");
+    process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: "usage: npm run -s solve -- FILE (FILE is a sketch file, or - for standard input; -s keeps npm's banner off standard output)" }] }, null, 2) + "\n");
     return 1;
   }
   let text: string;

@@ -42,6 +42,10 @@ import {
   type Unit,
 } from "mathjs";
 import { GALLON_US_M3, LBF_N, INCH_M } from "./constants";
+import { explainEvaluation, isRealValue, PlainMathError } from "./expressionErrors";
+import { CONSTANT_NAMES, FUNCTION_NAMES, shapeProblem, UNIT_NAMES } from "./expressionVocabulary";
+
+export { CONSTANT_NAMES, FUNCTION_NAMES, reservedNameReason, UNIT_NAMES } from "./expressionVocabulary";
 
 const math = create({
   absDependencies,
@@ -89,7 +93,18 @@ const plain = (v: unknown): number => {
   if (typeof v === "number") return v;
   if (isUnit(v) && v.equalBase(math.unit(1, "m") as Unit)) return v.toNumber("m");
   if (isUnit(v)) return unitlessValue(v);
-  throw new Error("expects a number");
+  throw new PlainMathError("needs a number");
+};
+/** hypot of plain numbers, or of quantities of one kind (the length of a vector given in metres). */
+const hypot = (...xs: unknown[]) => {
+  if (xs.every((x) => typeof x === "number")) return Math.hypot(...(xs as number[]));
+  if (!xs.every(isUnit)) throw new PlainMathError("mixes quantities with units and plain numbers: give every argument a unit of the same kind");
+  const [first, ...rest] = xs as Unit[];
+  if (rest.some((u) => !u.equalBase(first))) throw new PlainMathError("needs every argument in units of the same kind");
+  // a Unit stores its SI value: the result keeps the first argument's unit
+  const out = first.clone();
+  (out as unknown as { value: number }).value = Math.hypot(...xs.map((u) => (u as unknown as { value: number }).value));
+  return out;
 };
 math.import(
   {
@@ -98,39 +113,16 @@ math.import(
     atan: (x: unknown) => asAngle(Math.atan(plain(x))),
     atan2: (y: unknown, x: unknown) => {
       if (isUnit(y) && isUnit(x)) {
-        if (!y.equalBase(x)) throw new Error("atan2 needs both arguments in the same dimension");
+        if (!y.equalBase(x)) throw new PlainMathError("needs both arguments in units of the same kind");
         return asAngle(Math.atan2(y.toSI().toNumeric() as number, x.toSI().toNumeric() as number));
       }
       return asAngle(Math.atan2(plain(y), plain(x)));
     },
+    hypot,
   },
   { override: true },
 );
 
-/** The only unit names an expression may use; everything else is a parameter or an error. */
-export const UNIT_NAMES: ReadonlySet<string> = new Set([
-  // length
-  "m", "mm", "cm", "km", "in", "inch", "ft", "foot", "feet", "yd",
-  // mass
-  "kg", "g", "tonne", "lbm", "lb",
-  // time
-  "s", "ms", "hr", "hour",
-  // force
-  "N", "kN", "MN", "lbf", "kip", "kgf",
-  // pressure
-  "Pa", "kPa", "MPa", "GPa", "bar", "mbar", "psi", "ksi", "atm",
-  // angle
-  "deg", "degree", "degrees", "rad",
-  // volume and flow
-  "litre", "liter", "gal", "gpm", "lpm",
-]);
-
-/** Functions and constants an expression may call. */
-export const FUNCTION_NAMES: ReadonlySet<string> = new Set([
-  "sqrt", "cbrt", "abs", "min", "max", "hypot", "exp", "log", "log10", "round",
-  "sin", "cos", "tan", "asin", "acos", "atan", "atan2", "to",
-]);
-export const CONSTANT_NAMES: ReadonlySet<string> = new Set(["pi", "e"]);
 const TRIG = new Set(["sin", "cos", "tan"]);
 
 /** What a numeric field holds, and its SI unit (angles in degrees). */
@@ -210,18 +202,20 @@ function unitlessValue(u: Unit): number {
   // A dimensionless unit (m/m) still carries a value.
   const dims = (u as unknown as { dimensions: number[] }).dimensions;
   if (dims.every((d) => d === 0)) return u.toSI().toNumeric() as number;
-  throw new Error("has units where a plain number is needed");
+  throw new PlainMathError(`has units (${u.formatUnits()}) where a plain number is needed`);
 }
 
-/** Text users type that mathjs does not read: 30°, N·m, m², L/min, the minus sign. */
-export function normaliseExpressionText(text: string): string {
+/** Text users type that mathjs does not read: 30°, N·m, m², L/min, the minus sign. "L/min" is
+ *  litres per minute only when it cannot be anything else: not `L / min(a, b)`, and not when a
+ *  parameter is called L (or l). */
+export function normaliseExpressionText(text: string, parameterNames: ReadonlySet<string> = new Set()): string {
   return text
     .replace(/°/g, " deg")
     .replace(/[·×]/g, "*")
     .replace(/²/g, "^2")
     .replace(/³/g, "^3")
     .replace(/−/g, "-")
-    .replace(/\b[Ll]\s*\/\s*min\b/g, "lpm")
+    .replace(/\b([Ll])\s*\/\s*min\b(?!\s*\()/g, (all, letter: string) => (parameterNames.has(letter) ? all : "lpm"))
     .trim();
 }
 
@@ -267,7 +261,7 @@ function remember(key: string, value: CompiledExpression | ExpressionError) {
 
 function compileUncached(text: string, parameterNames: ReadonlySet<string>): CompiledExpression {
   let node: MathNode;
-  const source = normaliseExpressionText(text);
+  const source = normaliseExpressionText(text, parameterNames);
   try {
     node = math.parse(source);
   } catch (err) {
@@ -277,6 +271,11 @@ function compileUncached(text: string, parameterNames: ReadonlySet<string>): Com
   const problems: string[] = [];
   const trigArgs: CompiledExpression["trigArgs"] = [];
   node.traverse((n, _path, parent) => {
+    const shape = shapeProblem(n);
+    if (shape) {
+      problems.push(shape);
+      return;
+    }
     if (n.type === "FunctionNode") {
       const fn = (n as unknown as { fn: { name?: string }; args: MathNode[] }).fn;
       const name = fn?.name ?? "";
@@ -296,16 +295,34 @@ function compileUncached(text: string, parameterNames: ReadonlySet<string>): Com
     const name = (n as unknown as { name: string }).name;
     if (parameterNames.has(name)) deps.add(name);
     else if (UNIT_NAMES.has(name) || CONSTANT_NAMES.has(name)) return;
+    else if (FUNCTION_NAMES.has(name)) problems.push(functionAsNameMessage(name, source, parameterNames));
     else problems.push(unknownNameMessage(name));
   });
-  if (problems.length) throw new ExpressionError(problems.join("; "));
+  if (problems.length) throw new ExpressionError([...new Set(problems)].join("; "));
   const code = node.compile();
+  const root = node;
   return {
     text,
     deps: [...deps],
-    evaluate: (scope) => code.evaluate(scope) as MathValue,
+    evaluate: (scope) => {
+      let value: unknown;
+      try {
+        value = code.evaluate(scope);
+      } catch {
+        throw new ExpressionError(explainEvaluation(root, scope));
+      }
+      if (!isRealValue(value)) throw new ExpressionError(explainEvaluation(root, scope));
+      return value as MathValue;
+    },
     trigArgs,
   };
+}
+
+function functionAsNameMessage(name: string, source: string, parameterNames: ReadonlySet<string>): string {
+  const letter = /\b([Ll])\s*\/\s*min\b/.exec(source)?.[1];
+  if (name === "min" && letter && parameterNames.has(letter))
+    return `"${letter}/min" reads the parameter ${letter} divided by min here, not litres per minute: write litres per minute as lpm`;
+  return `"${name}" is a function: call it with its arguments, as in ${name}(…)`;
 }
 
 function unknownNameMessage(name: string): string {
@@ -313,15 +330,6 @@ function unknownNameMessage(name: string): string {
   return known
     ? `unknown name "${name}": it is not a parameter, and Counterpoise does not read "${name}" as a unit (define a parameter ${name}, or write the unit out)`
     : `unknown name "${name}": define it as a parameter or use a unit such as m, kN, psi, deg`;
-}
-
-/** Why a name cannot be a parameter, or null when it can. */
-export function reservedNameReason(name: string): string | null {
-  if (UNIT_NAMES.has(name))
-    return `"${name}" is a unit here, so "2 ${name}" would be ambiguous; name the parameter something else (e.g. ${name}_1)`;
-  if (FUNCTION_NAMES.has(name) || CONSTANT_NAMES.has(name))
-    return `"${name}" is a built-in function or constant; name the parameter something else`;
-  return null;
 }
 
 /** Convert an evaluated value to the SI number of a field kind, or explain why not. */

@@ -89,13 +89,21 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
       parameterUnits[name] = d.unit;
     }
   }
+  // A parameter belongs to no element: its warning names the elements whose fields read it
+  // (filled in once every field has been compiled).
+  const parameterWarnings: Array<{ name: string; ids: string[] }> = [];
   for (const p of params.order) {
     const w = p.expr && scope.has(p.name) ? unitlessTrigWarning(p.expr, scope) : null;
-    if (w) warnings.push({ code: "TRIG_UNITLESS", message: `parameters.${p.name}: ${w}`, ids: [] });
+    if (!w) continue;
+    const ids: string[] = [];
+    warnings.push({ code: "TRIG_UNITLESS", message: `parameters.${p.name}: ${w}`, ids });
+    parameterWarnings.push({ name: p.name, ids });
   }
+  /** parameter name → ids of the elements whose fields read it directly */
+  const readers = new Map<string, Set<string>>();
 
-  /** Evaluate one field value in place; returns the number or undefined on error. */
-  const evalField = (raw: unknown, kind: FieldKind, path: string, target: Record<string | number, unknown>, key: string | number) => {
+  /** Evaluate one field value in place; `ids` names the element it belongs to (for warnings). */
+  const evalField = (raw: unknown, kind: FieldKind, path: string, target: Record<string | number, unknown>, key: string | number, ids: string[] = []) => {
     if (typeof raw === "number") {
       if (!Number.isFinite(raw)) {
         errors.push({ path, message: "must be a finite number" });
@@ -111,6 +119,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
     try {
       const expr = compileExpression(raw, names);
       const missing = expr.deps.filter((d) => !scope.has(d));
+      for (const d of expr.deps) for (const id of ids) (readers.get(d) ?? readers.set(d, new Set()).get(d)!).add(id);
       if (missing.length) throw new Error(`reads parameter ${missing.join(", ")}, which has an error`);
       const value = toFieldNumber(expr.evaluate(scope), kind);
       target[key] = value;
@@ -119,7 +128,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
       const w = unitlessTrigWarning(expr, scope);
       if (w && !trigWarned.has(path)) {
         trigWarned.add(path);
-        warnings.push({ code: "TRIG_UNITLESS", message: `${path}: ${w}`, ids: [] });
+        warnings.push({ code: "TRIG_UNITLESS", message: `${path}: ${w}`, ids });
       }
     } catch (err) {
       const message = (err as Error).message;
@@ -129,22 +138,23 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
     }
   };
 
-  const evalPoint = (raw: unknown, path: string): [number, number] => {
+  const evalPoint = (raw: unknown, path: string, ids: string[]): [number, number] => {
     const pt: [number, number] = [Number.NaN, Number.NaN];
     const arr = raw as unknown[];
-    evalField(arr[0], "length", `${path}[0]`, pt as unknown as Record<number, unknown>, 0);
-    evalField(arr[1], "length", `${path}[1]`, pt as unknown as Record<number, unknown>, 1);
+    evalField(arr[0], "length", `${path}[0]`, pt as unknown as Record<number, unknown>, 0, ids);
+    evalField(arr[1], "length", `${path}[1]`, pt as unknown as Record<number, unknown>, 1, ids);
     return pt;
   };
 
   const evalElement = <T extends Record<string, unknown>>(el: T, group: string, path: string): Record<string, unknown> => {
     const out: Record<string, unknown> = {};
     const kinds = FIELD_KINDS[group] ?? {};
+    const ids = typeof el.id === "string" ? [el.id] : [];
     for (const [k, v] of Object.entries(el)) {
       const p = `${path}.${k}`;
-      if (POINT_FIELDS.has(k)) out[k] = evalPoint(v, p);
-      else if (k === "outline") out[k] = (v as unknown[]).map((pt, i) => evalPoint(pt, `${p}[${i}]`));
-      else if (kinds[k]) evalField(v, kinds[k], p, out, k);
+      if (POINT_FIELDS.has(k)) out[k] = evalPoint(v, p, ids);
+      else if (k === "outline") out[k] = (v as unknown[]).map((pt, i) => evalPoint(pt, `${p}[${i}]`, ids));
+      else if (kinds[k]) evalField(v, kinds[k], p, out, k, ids);
       else out[k] = v;
     }
     return out;
@@ -152,6 +162,12 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
 
   const top: Record<string, unknown> = {};
   evalField(file.gravity ?? G0, "acceleration", "gravity", top, "gravity");
+  if (typeof top.gravity === "number" && top.gravity < 0) {
+    // the format fixes gravity's direction; a negative value would silently turn every weight upward
+    const message = "must not be negative: gravity acts in −y (to have it act another way, rotate the sketch; 0 turns weights off)";
+    errors.push({ path: "gravity", message });
+    fields.gravity = { error: message };
+  }
 
   const sketch: Sketch = {
     format: file.format,
@@ -169,6 +185,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
     massSources: file.massSources.map((m, i) => evalElement(m, "massSource", `massSources[${i}]`)) as unknown as Sketch["massSources"],
   };
   if (file.motion) sketch.motion = evalElement(file.motion, "motion", "motion") as Sketch["motion"];
+  for (const w of parameterWarnings) w.ids.push(...elementsReading(w.name, params.order, readers));
   // gravity is a top-level slot: re-point its target at the sketch itself
   for (const s of slots) if (s.path === "gravity") s.target = sketch as unknown as Record<string, unknown>;
 
@@ -180,4 +197,14 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
     fields,
     parameterValues,
   };
+}
+
+/** Ids of the elements whose fields read a parameter, directly or through other parameters. */
+function elementsReading(name: string, order: ParameterPlan[], readers: Map<string, Set<string>>): string[] {
+  const reach = new Set([name]);
+  // `order` puts every parameter after the ones it reads, so one pass finds every reader
+  for (const p of order) if (p.expr?.deps.some((d) => reach.has(d))) reach.add(p.name);
+  const ids = new Set<string>();
+  for (const n of reach) for (const id of readers.get(n) ?? []) ids.add(id);
+  return [...ids];
 }
