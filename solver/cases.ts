@@ -4,17 +4,17 @@
 // non-linear, so results of cases are never added. Then the table of reactions per case, the
 // governing case of each component, the envelope and each support's design load.
 import { resolveFile } from "./parse";
-import type { CaseFile, SketchFile } from "./schema";
+import type { CaseFile, CombinationFile, SketchFile } from "./schema";
 import { prepare, solveModels } from "./solve";
 import { bodyStability, DEFAULT_REQUIREMENTS, type BodyStability, type Requirements } from "./stability";
-import type { EquationTerm, FieldError, Reaction, SolveResult, SolveWarning } from "./types";
+import { DEFAULT_GROUPS, type EquationTerm, type FieldError, type Reaction, type SolveResult, type SolveWarning } from "./types";
 import { generalizedLoad, type BodyModel } from "./model";
 
 export type CaseRun =
   | { id: string; name: string; kind: "case" | "combination"; ok: true; result: SolveResult; stability: Record<string, BodyStability> }
   | { id: string; name: string; kind: "case" | "combination"; ok: false; errors: FieldError[] };
 
-export const COMPONENTS = ["fx", "fy", "m", "n", "t", "resultant"] as const;
+export const COMPONENTS = ["fx", "fy", "m", "n", "t", "resultant", "margin"] as const;
 export type Component = (typeof COMPONENTS)[number];
 
 export interface EnvelopeEntry {
@@ -23,16 +23,28 @@ export interface EnvelopeEntry {
 }
 
 export interface SupportEnvelope {
+  kind: Reaction["kind"];
   components: Partial<Record<Component, EnvelopeEntry>>;
   /** the largest resultant over the cases, with its direction (on the body) and case */
   design: { resultant: number; angle: number; fx: number; fy: number; m: number; case: string };
-  /** governing case per component: the one with the largest magnitude */
+  /** governing case per component: the one with the largest magnitude (for the margin of a
+   *  contact or tie: the smallest, where it comes closest to lifting or going slack) */
   governing: Partial<Record<Component, string>>;
+}
+
+/** A body that tips or is unrestrained in a run: its reactions assume every support can pull,
+ *  so they are no design values and stay out of the envelope. */
+export interface ExcludedRun {
+  case: string;
+  body: string;
+  status: "tips" | "unrestrained";
 }
 
 export interface StudyResult {
   runs: CaseRun[];
   envelope: Record<string, SupportEnvelope>;
+  /** runs (per body) left out of the envelope and the design loads */
+  excluded: ExcludedRun[];
   requirements: Requirements;
 }
 
@@ -112,25 +124,40 @@ export function solveCases(file: SketchFile): StudyResult {
     finish(k.id, k.name, "combination", combineModels(parts), warnings);
   }
 
-  return { runs, envelope: envelopeOf(runs), requirements };
+  return { runs, envelope: envelopeOf(runs), excluded: excludedRuns(runs), requirements };
 }
 
-const componentOf = (r: Reaction, c: Component): number | undefined =>
-  c === "resultant" ? Math.hypot(r.fx, r.fy) : c === "n" || c === "t" ? r[c] : r[c];
+const componentOf = (r: Reaction, c: Component): number | undefined => (c === "resultant" ? Math.hypot(r.fx, r.fy) : r[c]);
 
+const notHeld = (status: string): status is ExcludedRun["status"] => status === "tips" || status === "unrestrained";
+
+/** The runs whose body is not held (tips, or is unrestrained), per body. */
+export function excludedRuns(runs: CaseRun[]): ExcludedRun[] {
+  const out: ExcludedRun[] = [];
+  for (const run of runs) {
+    if (!run.ok) continue;
+    for (const [body, b] of Object.entries(run.result.bodies)) if (notHeld(b.status)) out.push({ case: run.id, body, status: b.status });
+  }
+  return out;
+}
+
+/** Max and min of each component over the runs, and each support's design load. A run in which
+ *  the support's body tips or is unrestrained is left out: its reactions are those every support
+ *  would need if it could pull, which no support gives. */
 export function envelopeOf(runs: CaseRun[]): Record<string, SupportEnvelope> {
   const out: Record<string, SupportEnvelope> = {};
   for (const run of runs) {
     if (!run.ok) continue;
     for (const [id, r] of Object.entries(run.result.reactions)) {
-      const env = (out[id] ??= { components: {}, design: { resultant: -1, angle: 0, fx: 0, fy: 0, m: 0, case: run.id }, governing: {} });
+      if (notHeld(run.result.bodies[r.body]?.status ?? "holds")) continue;
+      const env = (out[id] ??= { kind: r.kind, components: {}, design: { resultant: -1, angle: 0, fx: 0, fy: 0, m: 0, case: run.id }, governing: {} });
       for (const c of COMPONENTS) {
         const v = componentOf(r, c);
         if (v === undefined) continue;
         const e = (env.components[c] ??= { max: { value: v, case: run.id }, min: { value: v, case: run.id } });
         if (v > e.max.value) e.max = { value: v, case: run.id };
         if (v < e.min.value) e.min = { value: v, case: run.id };
-        env.governing[c] = Math.abs(e.max.value) >= Math.abs(e.min.value) ? e.max.case : e.min.case;
+        env.governing[c] = c === "margin" ? e.min.case : Math.abs(e.max.value) >= Math.abs(e.min.value) ? e.max.case : e.min.case;
       }
       const res = Math.hypot(r.fx, r.fy);
       if (res > env.design.resultant) {
@@ -139,4 +166,53 @@ export function envelopeOf(runs: CaseRun[]): Record<string, SupportEnvelope> {
     }
   }
   return out;
+}
+
+/** A load group with a non-zero factor in more than one term of a combination: counted more than once. */
+export interface GroupOverlap {
+  group: string;
+  /** the terms that carry it: case id, the combination's factor × the case's group factor */
+  terms: Array<{ case: string; factor: number }>;
+  /** how many times the group's loads are counted in all */
+  total: number;
+}
+
+/** The load groups that hold loads in the file: weights ("dead" unless a body names a group), loads
+ *  ("loads") and ports ("flow"). Mass sources carry no force of their own. */
+export function loadGroupsOf(file: SketchFile): string[] {
+  const groups = new Set<string>();
+  const gravityOff = file.gravity === 0;
+  for (const b of file.bodies) if (!gravityOff && b.mass !== 0) groups.add(b.group ?? DEFAULT_GROUPS.weight);
+  for (const l of file.loads) groups.add(l.group ?? DEFAULT_GROUPS.load);
+  for (const p of file.ports) groups.add(p.group ?? DEFAULT_GROUPS.flow);
+  return [...groups];
+}
+
+/**
+ * The groups a combination counts more than once. Each case carries its whole load set (a group
+ * it does not scale counts × 1), so "1.2 normal + 1.5 test" of two full cases counts the weight
+ * 2.7 times. A combination is right when each group is in only one of its terms.
+ */
+export function combinationOverlaps(file: SketchFile, combination: CombinationFile): GroupOverlap[] {
+  const out: GroupOverlap[] = [];
+  for (const group of loadGroupsOf(file)) {
+    const terms = combination.terms
+      .map((t) => {
+        const c = file.cases?.find((x) => x.id === t.case);
+        return { case: t.case, factor: t.factor * (c?.factors?.[group] ?? 1) };
+      })
+      .filter((t) => t.factor !== 0);
+    if (terms.length > 1) out.push({ group, terms, total: terms.reduce((a, t) => a + t.factor, 0) });
+  }
+  return out;
+}
+
+/** Words for a combination's overlaps, one sentence a group (empty when there are none). */
+export function combinationWarnings(file: SketchFile, combination: CombinationFile): string[] {
+  const words = (g: string) => (g === DEFAULT_GROUPS.weight ? `"${g}" (the weights)` : `"${g}"`);
+  const n = (x: number) => Number(x.toPrecision(6));
+  return combinationOverlaps(file, combination).map(
+    (o) =>
+      `Load group ${words(o.group)} is in ${o.terms.map((t) => `${t.case} (× ${n(t.factor)})`).join(" and ")}: it is counted ${n(o.total)} times. Give each case of a combination its own load groups (set the others to 0 in the case) so each load is counted once.`,
+  );
 }

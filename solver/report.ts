@@ -1,12 +1,11 @@
 // Result tables as plain data: the results panel, the CSV export and the calc sheet all read
 // the same rows, so a number cannot differ between them. Cells are numbers in the column's unit
 // (or text); formatting is left to whoever shows them.
-import type { CaseRun, StudyResult } from "./cases";
+import type { CaseRun, Component, StudyResult, SupportEnvelope } from "./cases";
 import { handCheckSums, termMomentAbout } from "./equations";
 import { FIELD_UNIT_LABELS } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
-import type { BodyStability } from "./stability";
 import type { SolveResult, Vec2 } from "./types";
 import { convert, formatNumber, unitsFor, type Quantity, type UnitSystem } from "./units";
 
@@ -19,6 +18,13 @@ export interface Table {
   rows: Cell[][];
   /** notes printed under the table */
   notes?: string[];
+  /** per row, by column key: a mark shown beside the cell (a shape, and words for screen readers) */
+  marks?: Array<Record<string, CellMark> | undefined>;
+}
+
+export interface CellMark {
+  symbol: string;
+  text: string;
 }
 
 /** The fixed display unit of a column: kN / kN·m in SI, lbf / lbf·ft in US. */
@@ -76,22 +82,78 @@ export function reactionTable(result: SolveResult, system: UnitSystem, opts: { o
   };
 }
 
-/** Every support in every case: the table of the studies. */
+/** Words for a run left out of the envelope: "Case X — trailer tips: not in the envelope; …". */
+export function excludedWords(study: StudyResult): string[] {
+  const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
+  return (study.excluded ?? []).map(
+    (e) =>
+      `${name(e.case)} — ${e.body} ${e.status === "tips" ? "tips" : "is unrestrained"}: not in the envelope or the design loads; the body is not held in this case (its reactions would need every support to pull).`,
+  );
+}
+
+const COMPONENT_LABEL: Record<Component, string> = { fx: "Fx", fy: "Fy", resultant: "Resultant", m: "M", n: "Normal n", t: "Tangential t", margin: "Margin" };
+/** Below this (N, N·m) a component is zero in every case, and no case governs it. */
+const NOTHING = 1e-9;
+
+/** Does `run` govern component `c` of a support, and by its maximum (▲) or its minimum (▼)? */
+function governs(env: SupportEnvelope, c: Component, run: string): "max" | "min" | null {
+  const e = env.components[c];
+  if (!e || env.governing[c] !== run || Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING) return null;
+  if (c === "margin") return "min";
+  return Math.abs(e.max.value) >= Math.abs(e.min.value) ? "max" : "min";
+}
+
+/** Every support in every case: the table of the studies. The governing case of each component is
+ *  marked in its cell (▲ by its maximum, ▼ by its minimum) and named in the "Governs" column. */
 export function caseReactionTable(study: StudyResult, system: UnitSystem): Table {
   const f = columnUnit("force", system);
   const m = columnUnit("moment", system);
   const rows: Cell[][] = [];
+  const marks: Table["marks"] = [];
+  const excluded = new Set((study.excluded ?? []).map((e) => `${e.case}/${e.body}`));
   for (const run of study.runs) {
     if (!run.ok) {
-      rows.push([run.name, "—", null, null, null, null, null, `not solved: ${run.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`, ""]);
+      rows.push([run.name, "—", null, null, null, null, null, null, `not solved: ${run.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`, ""]);
+      marks.push(undefined);
       continue;
     }
     for (const [id, r] of Object.entries(run.result.reactions)) {
       const env = study.envelope[id];
-      const gov = env?.design.case === run.id ? "design load" : "";
-      rows.push([run.name, id, inUnit(r.fx, "force", system), inUnit(r.fy, "force", system), inUnit(Math.hypot(r.fx, r.fy), "force", system), inUnit(r.m, "moment", system), inUnit(r.n, "force", system), r.state, gov]);
+      const status = run.result.bodies[r.body]?.status;
+      const rowMarks: Record<string, CellMark> = {};
+      const words: string[] = [];
+      if (excluded.has(`${run.id}/${r.body}`)) {
+        words.push(`not in the envelope: ${r.body} ${status === "tips" ? "tips" : "is unrestrained"}`);
+      } else if (env) {
+        if (env.design.case === run.id) words.push("design load");
+        const gov: string[] = [];
+        // the resultant's governing case is the design load, said above
+        for (const c of ["fx", "fy", "m", "n", "t"] as const) {
+          const by = governs(env, c, run.id);
+          if (!by) continue;
+          const symbol = by === "max" ? "▲" : "▼";
+          rowMarks[c] = { symbol, text: `governing case of ${COMPONENT_LABEL[c]}: the largest magnitude over the cases (its ${by === "max" ? "maximum" : "minimum"})` };
+          gov.push(`${COMPONENT_LABEL[c]} ${symbol}`);
+        }
+        if (gov.length) words.push(`governs ${gov.join(", ")}`);
+        if (governs(env, "margin", run.id)) words.push(`least margin (closest to ${r.kind === "tie" ? "going slack" : "lifting"})`);
+      }
+      rows.push([
+        run.name,
+        id,
+        inUnit(r.fx, "force", system),
+        inUnit(r.fy, "force", system),
+        inUnit(Math.hypot(r.fx, r.fy), "force", system),
+        inUnit(r.m, "moment", system),
+        inUnit(r.n, "force", system),
+        inUnit(r.t, "force", system),
+        r.state,
+        words.join("; "),
+      ]);
+      marks.push(Object.keys(rowMarks).length ? rowMarks : undefined);
     }
   }
+  const notes = ["▲ / ▼: the governing case of that component (its largest magnitude over the cases), by its maximum (▲) or its minimum (▼). “design load”: the case of the support's largest resultant."];
   return {
     id: "cases",
     title: "Reactions per case (forces on the body)",
@@ -103,63 +165,102 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem): Table
       { key: "resultant", label: "Resultant", unit: f },
       { key: "m", label: "M", unit: m },
       { key: "n", label: "Normal n", unit: f },
+      { key: "t", label: "Tangential t", unit: f },
       { key: "state", label: "State", align: "left" },
       { key: "governs", label: "Governs", align: "left" },
     ],
     rows,
+    marks,
+    notes,
   };
 }
 
+/** The components of a support's envelope, in the order shown. */
+function envelopeComponents(env: SupportEnvelope): Component[] {
+  const out: Component[] = ["fx", "fy"];
+  if (env.kind === "fixed" || Math.max(Math.abs(env.components.m?.max.value ?? 0), Math.abs(env.components.m?.min.value ?? 0)) >= NOTHING) out.push("m");
+  for (const c of ["n", "t", "margin"] as const) if (env.components[c]) out.push(c);
+  return out;
+}
+
+/** Max and min of each reaction component over the cases, each with the case that gives it, and
+ *  the governing case (the largest magnitude; for a margin the smallest value). */
 export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
-  const f = columnUnit("force", system);
-  const m = columnUnit("moment", system);
   const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
   const rows: Cell[][] = [];
   for (const [id, env] of Object.entries(study.envelope)) {
-    const c = env.components;
-    rows.push([
-      id,
-      inUnit(c.fx?.max.value, "force", system),
-      inUnit(c.fx?.min.value, "force", system),
-      inUnit(c.fy?.max.value, "force", system),
-      inUnit(c.fy?.min.value, "force", system),
-      inUnit(c.m?.max.value, "moment", system),
-      inUnit(c.m?.min.value, "moment", system),
-      inUnit(env.design.resultant, "force", system),
-      Number(env.design.angle.toFixed(2)),
-      name(env.design.case),
-    ]);
+    for (const c of envelopeComponents(env)) {
+      const e = env.components[c]!;
+      const q: Quantity = c === "m" ? "moment" : "force";
+      const gov = env.governing[c];
+      rows.push([id, COMPONENT_LABEL[c], columnUnit(q, system), inUnit(e.max.value, q, system), name(e.max.case), inUnit(e.min.value, q, system), name(e.min.case), gov ? name(gov) : ""]);
+    }
   }
   return {
     id: "envelope",
-    title: "Envelope and design loads",
+    title: "Envelope of the reactions (forces on the body)",
     columns: [
       { key: "support", label: "Support", align: "left" },
-      { key: "fxMax", label: "Fx max", unit: f },
-      { key: "fxMin", label: "Fx min", unit: f },
-      { key: "fyMax", label: "Fy max", unit: f },
-      { key: "fyMin", label: "Fy min", unit: f },
-      { key: "mMax", label: "M max", unit: m },
-      { key: "mMin", label: "M min", unit: m },
-      { key: "design", label: "Design load", unit: f },
-      { key: "angle", label: "at angle", unit: "°" },
-      { key: "case", label: "from case", align: "left" },
+      { key: "component", label: "Component", align: "left" },
+      { key: "unit", label: "Unit", align: "left" },
+      { key: "max", label: "Max" },
+      { key: "maxCase", label: "Case of max", align: "left" },
+      { key: "min", label: "Min" },
+      { key: "minCase", label: "Case of min", align: "left" },
+      { key: "governs", label: "Governing case", align: "left" },
     ],
     rows,
-    notes: ["The design load of a support is its largest resultant over all cases and combinations, with its direction (force on the body)."],
+    notes: [
+      "Governing case: the one with the largest magnitude; for the margin of a contact or tie, the smallest (the case where it comes closest to lifting or going slack; below zero it has lifted or gone slack).",
+      "A case in which the body tips or is unrestrained is not in the envelope or the design loads (see the note above the tables).",
+    ],
   };
 }
 
-export function stabilityTable(study: StudyResult): Table {
+/** Each support's design load: its largest resultant over the cases, with its direction. */
+export function designLoadTable(study: StudyResult, system: UnitSystem): Table {
+  const f = columnUnit("force", system);
+  const m = columnUnit("moment", system);
+  const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
+  return {
+    id: "design-loads",
+    title: "Design loads (forces on the body)",
+    columns: [
+      { key: "support", label: "Support", align: "left" },
+      { key: "design", label: "Design load", unit: f },
+      { key: "angle", label: "at angle", unit: "°" },
+      { key: "fx", label: "Fx", unit: f },
+      { key: "fy", label: "Fy", unit: f },
+      { key: "m", label: "M", unit: m },
+      { key: "case", label: "from case", align: "left" },
+    ],
+    rows: Object.entries(study.envelope).map(([id, env]) => [
+      id,
+      inUnit(env.design.resultant, "force", system),
+      Number(env.design.angle.toFixed(2)),
+      inUnit(env.design.fx, "force", system),
+      inUnit(env.design.fy, "force", system),
+      inUnit(env.design.m, "moment", system),
+      name(env.design.case),
+    ]),
+    notes: ["The design load of a support is its largest resultant over all cases and combinations in which its body is held, with its direction (force on the body)."],
+  };
+}
+
+/** Factors of safety with the figures behind them: restoring and overturning moment, or the
+ *  friction available and the force that drives sliding. */
+export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): Table {
   const rows: Cell[][] = [];
-  const fmt = (s: BodyStability[keyof BodyStability]) =>
-    "notApplicable" in s ? [null, null, s.notApplicable] : [Number(s.factor.toFixed(3)), s.required, s.pass ? "pass" : "FAIL"];
+  const verdict = (s: { factor: number; required: number; pass: boolean }) => [Number.isFinite(s.factor) ? Number(s.factor.toFixed(3)) : "∞", s.required, s.pass ? "pass" : "FAIL"];
   for (const run of study.runs as CaseRun[]) {
     if (!run.ok) continue;
     for (const [body, st] of Object.entries(run.stability)) {
       const ot = st.overturning;
-      rows.push([run.name, body, "overturning", ...fmt(ot), "notApplicable" in ot ? "" : `about ${ot.about}`]);
-      rows.push([run.name, body, "sliding", ...fmt(st.sliding), ""]);
+      if ("notApplicable" in ot) rows.push([run.name, body, "overturning", null, null, "", null, null, ot.notApplicable, ""]);
+      else rows.push([run.name, body, "overturning", inUnit(ot.restoring, "moment", system), inUnit(ot.overturning, "moment", system), columnUnit("moment", system), ...verdict(ot), `about ${ot.about}`]);
+      const sl = st.sliding;
+      if ("notApplicable" in sl) rows.push([run.name, body, "sliding", null, null, "", null, null, sl.notApplicable, ""]);
+      else rows.push([run.name, body, "sliding", inUnit(sl.available, "force", system), inUnit(sl.driving, "force", system), columnUnit("force", system), ...verdict(sl), ""]);
     }
   }
   return {
@@ -169,6 +270,9 @@ export function stabilityTable(study: StudyResult): Table {
       { key: "case", label: "Case", align: "left" },
       { key: "body", label: "Body", align: "left" },
       { key: "check", label: "Against", align: "left" },
+      { key: "resisting", label: "Restoring M / friction available" },
+      { key: "acting", label: "Overturning M / driving force" },
+      { key: "unit", label: "Unit", align: "left" },
       { key: "factor", label: "Factor" },
       { key: "required", label: "Required" },
       { key: "verdict", label: "Verdict", align: "left" },
@@ -176,8 +280,8 @@ export function stabilityTable(study: StudyResult): Table {
     ],
     rows,
     notes: [
-      "Overturning: restoring over overturning moment of the applied loads about the contact the body would tip about.",
-      "Sliding: friction the bearing contacts can give (Σ μ·n) over the tangential force they must resist.",
+      "Overturning: factor = restoring over overturning moment of the applied loads about the contact the body would tip about.",
+      "Sliding: factor = friction the bearing contacts can give (Σ μ·n) over the tangential force they must resist (|Σ t|).",
     ],
   };
 }

@@ -7,6 +7,7 @@ import { createSweeper, linspace } from "@/solver/sweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
 import type { SketchFile } from "@/solver/schema";
 import type { FieldError, Sketch } from "@/solver/types";
+import { marksZero } from "./display";
 
 export interface SweepSpec {
   parameter: string;
@@ -28,7 +29,8 @@ export interface SweepData {
   series: number[][];
   /** per point: worst status of the bodies, or an error */
   statuses: string[];
-  /** where each series crosses zero (margins, friction margins): from a sign change between two points */
+  /** where a margin or friction margin crosses zero (a contact lifts, a tie goes slack, friction is
+   *  used up): from a sign change between two points. Other quantities changing sign are not marked. */
   crossings: Array<{ quantity: number; between: [number, number] }>;
   errors: Array<{ value: number; errors: FieldError[] }>;
 }
@@ -38,6 +40,10 @@ const STATUS_RANK: Record<string, number> = { holds: 0, lifts: 1, tips: 2, unres
 /** The sketch a case makes: its parameter overrides in the file, its factors as scaling. */
 export function sketchForCase(file: SketchFile, caseId?: string): Sketch {
   const c = caseId ? file.cases?.find((x) => x.id === caseId) : undefined;
+  if (caseId && !c) {
+    const ids = (file.cases ?? []).map((x) => x.id);
+    throw new Error(`case: there is no case "${caseId}"${ids.length ? ` (cases: ${ids.join(", ")})` : ""}`);
+  }
   const variant = c?.parameters ? { ...file, parameters: { ...(file.parameters ?? {}), ...c.parameters } } : file;
   const p = parseSketch(variant);
   if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
@@ -81,6 +87,7 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
     sweeper.restore();
   }
   data.series.forEach((ys, k) => {
+    if (!marksZero(spec.quantities[k].component)) return;
     for (let i = 1; i < ys.length; i++) {
       const a = ys[i - 1];
       const b = ys[i];

@@ -85,7 +85,9 @@ function Rows({ group, rows }: { group: string; rows: FieldChange[] }) {
 
 export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
   const params = [...c.parameters.changed, ...c.parameters.added, ...c.parameters.removed];
-  const nothing = !c.sketch.length && !params.length && !c.elements.added.length && !c.elements.removed.length && !c.elements.changed.length;
+  // a change of a case or a required factor of safety is a change in the inputs: never "nothing"
+  const studies = (c.studies ?? []).map((s) => ({ ...s, field: s.change === "changed" ? s.field : `${s.field} (${s.change})` }));
+  const nothing = !c.sketch.length && !params.length && !studies.length && !c.elements.added.length && !c.elements.removed.length && !c.elements.changed.length;
   if (nothing) return <p className="text-sm text-ink-soft">Nothing in the inputs differs.</p>;
   return (
     <div className="space-y-4">
@@ -120,6 +122,7 @@ export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
           <tbody>
             <Rows group="Sketch" rows={c.sketch} />
             <Rows group="Parameters" rows={params} />
+            <Rows group="Cases and studies" rows={studies} />
             {c.elements.changed.map((e) => (
               <Fragment key={e.id}>
                 <Rows group={`${e.label} (${e.kind})`} rows={e.fields} />

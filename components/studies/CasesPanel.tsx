@@ -4,8 +4,8 @@
 // of all of them at once: reactions per case with the governing case, the envelope with each
 // support's design load, and the factors of safety against overturning and sliding.
 import { useEffect, useMemo, useRef, useState } from "react";
-import type { StudyResult } from "@/solver/cases";
-import { caseReactionTable, envelopeTable, stabilityTable } from "@/solver/report";
+import { combinationWarnings, type StudyResult } from "@/solver/cases";
+import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, stabilityTable } from "@/solver/report";
 import type { CaseFile, CombinationFile } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
@@ -165,16 +165,24 @@ export function CasesPanel() {
             </button>
           </div>
           {combinations.length === 0 ? (
-            <p className="mt-1 text-[12px] text-ink-faint">A combination adds cases with factors (“1.2 normal + 1.5 test”) and is solved as one factored load set, never by adding results.</p>
+            <p className="mt-1 text-[12px] text-ink-faint">
+              A combination adds cases with factors and is solved as one factored load set, never by adding results. Each case carries its whole load set, so give each
+              case of a combination its own load groups: a case “dead” with “loads 0, flow 0” and a case “flow” with “dead 0, loads 0” make “1.2 dead + 1.5 flow”.
+            </p>
           ) : (
             <ul className="mt-1 space-y-1">
               {combinations.map((k, i) => (
-                <li key={k.id} className="grid grid-cols-[10rem_1fr_auto] items-start gap-1">
+                <li key={k.id} className="grid grid-cols-[10rem_1fr_auto] items-start gap-1" data-combination={k.id}>
                   <TextCell label={`Name of combination ${k.id}`} value={k.name} parse={(t) => (t.trim() ? { ok: true } : { ok: false, error: "needs a name" })} onCommit={(t) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name: t.trim() } : x)))} />
-                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 normal + 1.5 test" parse={(t) => parseTerms(t, cases.map((c) => c.id))} onCommit={(t) => { const r = parseTerms(t, cases.map((c) => c.id)); if (r.ok) putCombos(combinations.map((x, j) => (j === i ? { ...x, terms: r.value } : x))); }} />
+                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases.map((c) => c.id))} onCommit={(t) => { const r = parseTerms(t, cases.map((c) => c.id)); if (r.ok) putCombos(combinations.map((x, j) => (j === i ? { ...x, terms: r.value } : x))); }} />
                   <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => putCombos(combinations.filter((_, j) => j !== i))}>
                     ×
                   </button>
+                  {combinationWarnings(sketch, k).map((w) => (
+                    <p key={w} className="col-span-3 text-[11.5px] font-medium text-caution" role="note">
+                      ⚠ {w}
+                    </p>
+                  ))}
                 </li>
               ))}
             </ul>
@@ -221,25 +229,34 @@ export function CasesPanel() {
                 {r.name} could not be solved: {!r.ok && r.errors.map((e) => `${e.path} ${e.message}`).join("; ")}
               </p>
             ))}
+            {excludedWords(study.result).map((w) => (
+              <p key={w} className="mb-1 text-[12px] font-medium text-caution" data-testid="not-in-envelope">
+                <span aria-hidden="true">⚠ </span>
+                {w}
+              </p>
+            ))}
             <ReportTable
               table={caseReactionTable(study.result, units)}
               fileName="reactions-per-case"
               testId="case-reactions"
-              caption="“design load”: the case that gives this support its largest resultant (its governing case)."
+              caption="▲ / ▼ beside a value: this case governs that component (largest magnitude; ▲ its maximum, ▼ its minimum). “design load”: the case of the support's largest resultant."
             />
             <div className="mt-3">
               <ReportTable table={envelopeTable(study.result, units)} fileName="envelope" testId="envelope" />
             </div>
             <div className="mt-3">
+              <ReportTable table={designLoadTable(study.result, units)} fileName="design-loads" testId="design-loads" />
+            </div>
+            <div className="mt-3">
               <ReportTable
-                table={stabilityTable(study.result)}
+                table={stabilityTable(study.result, units)}
                 fileName="factors-of-safety"
                 testId="stability"
-                mark={(row, key) => (key === "verdict" && row[5] === "FAIL" ? <span className="ml-1 font-semibold text-caution">(below {row[4]})</span> : null)}
+                mark={(row, key) => (key === "verdict" && row[8] === "FAIL" ? <span className="ml-1 font-semibold text-caution">(below {row[7]})</span> : null)}
               />
             </div>
             <p className="mt-2 text-[11.5px] text-ink-faint">
-              Governing cases — {Object.entries(study.result.envelope).map(([id, e]) => `${id}: ${nameOf(e.design.case)}`).join(" · ")}
+              Design load from — {Object.entries(study.result.envelope).map(([id, e]) => `${id}: ${nameOf(e.design.case)}`).join(" · ")}
             </p>
           </div>
         )}

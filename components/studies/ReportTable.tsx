@@ -15,7 +15,7 @@ export function ReportTable({
 }: {
   table: Table;
   fileName: string;
-  /** words to show after a cell (e.g. "governs"), by row and column key */
+  /** words to show after a cell, by row and column key (the table's own marks show before it) */
   mark?: (row: Cell[], key: string) => ReactNode;
   caption?: string;
   testId?: string;
@@ -47,8 +47,20 @@ export function ReportTable({
                 {row.map((cell, i) => {
                   const col = table.columns[i];
                   const extra = mark?.(row, col.key);
+                  const cellMark = table.marks?.[ri]?.[col.key];
                   return (
-                    <td key={col.key} data-col={col.key} className={`whitespace-nowrap px-1.5 py-[3px] ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"}`}>
+                    <td
+                      key={col.key}
+                      data-col={col.key}
+                      data-mark={cellMark ? cellMark.symbol : undefined}
+                      title={cellMark?.text}
+                      className={`whitespace-nowrap px-1.5 py-[3px] ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
+                    >
+                      {cellMark && (
+                        <span role="img" aria-label={cellMark.text} className="mr-0.5">
+                          {cellMark.symbol}
+                        </span>
+                      )}
                       {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4) : cell}
                       {extra}
                     </td>

@@ -1,26 +1,36 @@
 "use client";
-// The sweep's plot (recharts): each quantity against the swept parameter, in the display unit,
-// with zero crossings marked (✕ and a dashed line) and the limit found, if any. Hover shows values.
+// The sweep's plot (recharts): each quantity against the swept parameter, in its display unit
+// (forces on the left axis, a moment on the right), with the margins' zero crossings marked (✕)
+// and the limit found, if any. Hover shows values.
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { columnUnit } from "@/solver/report";
 import { describeQuantity } from "@/solver/quantity";
-import { convert, formatNumber, type UnitSystem } from "@/solver/units";
+import { formatNumber, type UnitSystem } from "@/solver/units";
+import { displayKind, displayUnit, toDisplay } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 
 const COLORS = ["#1f5f7a", "#b4462b", "#1d2329", "#8a6212", "#4d7a3a", "#6b4c9a"];
 const DASHES = ["", "6 3", "2 3", "8 3 2 3", "1 2", "10 4"];
 
-export function SweepChart({ data, units, parameterLabel, limit, run }: { data: SweepData; units: UnitSystem; parameterLabel: string; limit: { x: number; label: string } | null; run: number }) {
-  const unit = columnUnit("force", units);
-  const k = convert(1, "force", units, unit).value;
-  const rows = data.xs.map((x, i) => {
+/** The chart's rows: each series in its own display unit (kN or kN·m, lbf or lbf·ft). */
+export function chartRows(data: SweepData, units: UnitSystem): Array<Record<string, number | null>> {
+  return data.xs.map((x, i) => {
     const row: Record<string, number | null> = { x };
     data.series.forEach((ys, s) => {
       const v = ys[i];
-      row[`q${s}`] = Number.isFinite(v) ? (data.quantities[s].component === "frictionRatio" ? v : v * k) : null;
+      row[`q${s}`] = Number.isFinite(v) ? toDisplay(v, data.quantities[s].component, units) : null;
     });
     return row;
   });
+}
+
+export function SweepChart({ data, units, parameterLabel, limit, run }: { data: SweepData; units: UnitSystem; parameterLabel: string; limit: { x: number; label: string } | null; run: number }) {
+  const rows = chartRows(data, units);
+  // forces on the left axis; a moment (or a ratio) on its own axis on the right, in its own unit
+  const kinds = [...new Set(data.quantities.map((q) => displayKind(q.component)))];
+  const axisOf = (s: number) => (displayKind(data.quantities[s].component) === kinds[0] ? "left" : "right");
+  const unitOf = (s: number) => displayUnit(data.quantities[s].component, units);
+  const leftUnit = displayUnit(data.quantities.find((q) => displayKind(q.component) === kinds[0])?.component ?? "fx", units);
+  const rightUnits = [...new Set(data.quantities.map((q, s) => (axisOf(s) === "right" ? unitOf(s) : null)).filter((u): u is string => u !== null))];
   const crossingsX = data.crossings.map((c) => {
     const ys = data.series[c.quantity];
     const i = data.xs.indexOf(c.between[1]);
@@ -35,22 +45,29 @@ export function SweepChart({ data, units, parameterLabel, limit, run }: { data: 
           <CartesianGrid stroke="#e2dccf" strokeDasharray="0" />
           <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)}
             label={{ value: `${parameterLabel}${data.unit ? ` (${data.unit})` : ""}`, position: "insideBottom", offset: -2, fontSize: 11, fill: "#1d2329" }} height={34} />
-          <YAxis tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
-            label={{ value: unit, angle: -90, position: "insideLeft", fontSize: 11, fill: "#1d2329" }} />
+          <YAxis yAxisId="left" tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
+            label={{ value: leftUnit, angle: -90, position: "insideLeft", fontSize: 11, fill: "#1d2329" }} />
+          {rightUnits.length > 0 && (
+            <YAxis yAxisId="right" orientation="right" tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
+              label={{ value: rightUnits.join(", "), angle: 90, position: "insideRight", fontSize: 11, fill: "#1d2329" }} />
+          )}
           <Tooltip
-            formatter={(v, name) => [typeof v === "number" ? `${formatNumber(v, 4)} ${unit}` : "—", String(name)]}
+            formatter={(v, name, item) => {
+              const s = Number(String(item?.dataKey ?? "q0").slice(1));
+              return [typeof v === "number" ? `${formatNumber(v, 4)}${unitOf(s) ? ` ${unitOf(s)}` : ""}` : "—", String(name)];
+            }}
             labelFormatter={(x) => `${parameterLabel} = ${formatNumber(Number(x), 5)}${data.unit ? ` ${data.unit}` : ""}`}
             contentStyle={{ fontSize: 12, borderColor: "#cfc8b8" }}
           />
           <Legend wrapperStyle={{ fontSize: 11 }} />
-          <ReferenceLine y={0} stroke="#6b7580" />
+          <ReferenceLine yAxisId="left" y={0} stroke="#6b7580" />
           {data.quantities.map((q, s) => (
-            <Line key={s} type="linear" dataKey={`q${s}`} name={describeQuantity(q)} stroke={COLORS[s % COLORS.length]} strokeDasharray={DASHES[s % DASHES.length]} strokeWidth={1.6} dot={false} isAnimationActive={false} connectNulls={false} />
+            <Line key={s} yAxisId={axisOf(s)} type="linear" dataKey={`q${s}`} name={`${describeQuantity(q)}${axisOf(s) === "right" && unitOf(s) ? ` (${unitOf(s)}, right)` : ""}`} stroke={COLORS[s % COLORS.length]} strokeDasharray={DASHES[s % DASHES.length]} strokeWidth={1.6} dot={false} isAnimationActive={false} connectNulls={false} />
           ))}
           {crossingsX.map((c, i) => (
-            <ReferenceDot key={i} x={c.x} y={0} r={5} fill="#fbfaf6" stroke={COLORS[c.quantity % COLORS.length]} strokeWidth={2} label={{ value: "✕", position: "top", fontSize: 12, fill: COLORS[c.quantity % COLORS.length] }} />
+            <ReferenceDot key={i} yAxisId={axisOf(c.quantity)} x={c.x} y={0} r={5} fill="#fbfaf6" stroke={COLORS[c.quantity % COLORS.length]} strokeWidth={2} label={{ value: "✕", position: "top", fontSize: 12, fill: COLORS[c.quantity % COLORS.length] }} />
           ))}
-          {limit && <ReferenceLine x={limit.x} stroke="#b4462b" strokeDasharray="4 3" label={{ value: `limit: ${formatNumber(limit.x, 4)}`, position: "insideTopRight", fontSize: 11, fill: "#b4462b" }} />}
+          {limit && <ReferenceLine yAxisId="left" x={limit.x} stroke="#b4462b" strokeDasharray="4 3" label={{ value: `limit: ${formatNumber(limit.x, 4)}`, position: "insideTopRight", fontSize: 11, fill: "#b4462b" }} />}
         </LineChart>
       </ResponsiveContainer>
     </figure>

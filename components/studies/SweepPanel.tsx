@@ -6,8 +6,8 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import type { LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
 import { FLOW_FACTOR } from "@/solver/sweep";
-import { columnUnit } from "@/solver/report";
-import { convert, formatNumber } from "@/solver/units";
+import { formatNumber } from "@/solver/units";
+import { displayUnit, fromDisplay } from "@/canvas/studies/display";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile } from "@/solver/schema";
@@ -79,7 +79,7 @@ export function SweepPanel() {
   const [error, setError] = useState<string | null>(null);
   const [limitQ, setLimitQ] = useState(0);
   const [target, setTarget] = useState("0");
-  const [limit, setLimit] = useState<{ result: LimitResult; label: string; target: number } | null>(null);
+  const [limit, setLimit] = useState<{ result: LimitResult; label: string; target: number; unit: string } | null>(null);
   const runner = useRef<StudyRunner | null>(null);
   useEffect(() => {
     runner.current = new StudyRunner();
@@ -121,12 +121,13 @@ export function SweepPanel() {
     const s = spec();
     if (typeof s === "string") return setError(s);
     const q = quantities[limitQ] ?? quantities[0];
-    const unitFactor = q.component === "frictionRatio" ? 1 : convert(1, "force", units, columnUnit("force", units)).value;
-    const tgt = Number(target) / unitFactor;
-    if (!Number.isFinite(tgt)) return setError("The target must be a number.");
+    const typed = Number(target);
+    if (!target.trim() || !Number.isFinite(typed)) return setError("The target must be a number.");
+    // the target is typed in the quantity's own unit (kN, or kN·m for a moment)
+    const tgt = fromDisplay(typed, q.component, units);
     setError(null);
     const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt } });
-    job.promise.then((result) => setLimit({ result, label: describeQuantity(q), target: Number(target) })).catch((err) => setError(err.message));
+    job.promise.then((result) => setLimit({ result, label: describeQuantity(q), target: typed, unit: displayUnit(q.component, units) })).catch((err) => setError(err.message));
   };
 
   const keep = () => {
@@ -136,7 +137,9 @@ export function SweepPanel() {
     editor.getState().apply(setStudy({ key: "sweeps", value: [sweep, ...(sketch.sweeps ?? []).filter((x) => x.id !== "sweep-1")] }) as Command<unknown>);
   };
 
-  const forceUnit = columnUnit("force", units);
+  const limitQuantity = quantities[limitQ] ?? quantities[0];
+  const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units) : "";
+  const withUnit = (v: number, unit: string) => `${v}${unit ? ` ${unit}` : ""}`;
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
 
   return (
@@ -198,7 +201,7 @@ export function SweepPanel() {
           <p className="text-[12.5px] text-ink-faint">Run a sweep to plot each reaction and margin against {pLabel}. Where a margin crosses zero a contact lifts, a tie goes slack or friction is used up: those points are marked.</p>
         ) : (
           <>
-            <SweepChart data={data} run={runs} units={units} parameterLabel={pLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target} ${forceUnit}` } : null} />
+            <SweepChart data={data} run={runs} units={units} parameterLabel={pLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${withUnit(limit.target, limit.unit)}` } : null} />
             <ul className="mt-1 space-y-0.5 text-[12px]" data-testid="crossings">
               {data.crossings.length === 0 && <li className="text-ink-faint">No margin crosses zero in this range.</li>}
               {data.crossings.map((c, i) => (
@@ -215,13 +218,13 @@ export function SweepPanel() {
               </select>
               <span className={LABEL}>reach</span>
               <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
-              <span className={`${LABEL} whitespace-nowrap`}>{forceUnit}?</span>
+              <span className={`${LABEL} whitespace-nowrap`}>{targetUnit}?</span>
               <button type="button" className={BUTTON} onClick={findLimit}>Find</button>
             </div>
             {limit && (
               <p className="mt-1 text-[12.5px]" data-testid="limit-answer" role="status">
                 {limit.result.found
-                  ? `The ${limit.label} reaches ${limit.target} ${forceUnit} at ${pLabel} = ${formatNumber(limit.result.value, 5)}${limit.result.unit ? ` ${limit.result.unit}` : ""}${limit.result.crossings.length > 1 ? ` (and again at ${limit.result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
+                  ? `The ${limit.label} reaches ${withUnit(limit.target, limit.unit)} at ${pLabel} = ${formatNumber(limit.result.value, 5)}${limit.result.unit ? ` ${limit.result.unit}` : ""}${limit.result.crossings.length > 1 ? ` (and again at ${limit.result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
                   : `No crossing in this range: ${limit.result.reason.replace(/^no crossing in this range: /, "")}.`}
               </p>
             )}

@@ -10,7 +10,6 @@ import {
   CAUTIONS,
   caseReactionTable,
   envelopeTable,
-  findLimit,
   formatNumber,
   handCheckTable,
   inputsTable,
@@ -18,16 +17,15 @@ import {
   parseSketch,
   solve,
   solveCases,
-  solveSweep,
   stabilityTable,
-  linspace,
-  describeQuantity,
-  readQuantity,
   type Table,
   type UnitSystem,
   type SolveResult,
 } from "@/solver";
+import { combinationWarnings } from "@/solver/cases";
+import { designLoadTable, excludedWords } from "@/solver/report";
 import { lineChartSvg } from "./chart";
+import { sweepCharts } from "./sweeps";
 
 // TrueType files (pdfkit cannot subset the web fonts' WOFF2), read from the installed package at
 // run time: the bundler must not try to bundle a font file.
@@ -128,7 +126,10 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       const bits = [...over, ...fac, ...(c.flowFactor !== undefined && c.flowFactor !== 1 ? [`flow × ${c.flowFactor}`] : [])];
       para(`${c.name} (${c.id}): ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
     }
-    for (const k of parsed.file.combinations ?? []) para(`${k.name} (${k.id}): ${k.terms.map((t) => `${t.factor} × ${t.case}`).join(" + ")}, solved as one factored load set`, 8.5, INK);
+    for (const k of parsed.file.combinations ?? []) {
+      para(`${k.name} (${k.id}): ${k.terms.map((t) => `${t.factor} × ${t.case}`).join(" + ")}, solved as one factored load set`, 8.5, INK);
+      for (const w of combinationWarnings(parsed.file, k)) para(`Warning: ${w}`, 8.5, ACCENT);
+    }
   }
 
   // ---- hand check
@@ -141,34 +142,24 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   heading("Reactions per case");
   drawTable(doc, caseReactionTable(study, units), left, width, units, 7.5);
   heading("Envelope and design loads");
+  for (const w of excludedWords(study)) para(w, 8.5, ACCENT);
   drawTable(doc, envelopeTable(study, units), left, width, units, 7.5);
+  drawTable(doc, designLoadTable(study, units), left, width, units, 7.5);
   heading("Stability");
-  drawTable(doc, stabilityTable(study), left, width, units, 7.5);
+  drawTable(doc, stabilityTable(study, units), left, width, units, 7.5);
 
-  // ---- sweeps
+  // ---- sweeps: each on its saved case, one chart per unit (forces, moments, ratios)
   for (const sw of parsed.file.sweeps ?? []) {
     ensureSpace(doc, 320);
-    heading(`Sweep of ${sw.parameter}`);
+    const caseName = sw.case ? (parsed.file.cases?.find((c) => c.id === sw.case)?.name ?? sw.case) : null;
+    heading(`Sweep of ${sw.parameter}${caseName ? ` — case ${caseName}` : ""}`);
     try {
-      const values = linspace(sw.from, sw.to, Math.min(sw.points, 400));
-      const res = solveSweep(parsed.sketch, sw.parameter, values);
-      const quantities = sw.quantities?.length ? sw.quantities : Object.keys(result.reactions).map((s) => ({ support: s, component: "resultant" as const }));
-      const toDisplay = units === "SI" ? 1 / 1000 : 1 / 4.4482216152605;
-      const series = quantities.map((q) => ({
-        label: describeQuantity(q),
-        markZero: q.component === "margin" || q.component === "frictionMargin",
-        points: res.points.map((p) => [p.value, p.ok ? readQuantity(p.result, q) * (q.component === "frictionRatio" ? 1 : toDisplay) : null] as [number, number | null]),
-      }));
-      const markers = quantities
-        .filter((q) => q.component === "margin" || q.component === "frictionMargin")
-        .flatMap((q) => {
-          const lim = findLimit(parsed.sketch, sw.parameter, [sw.from, sw.to], q);
-          return lim.found ? [{ x: lim.value, label: `${q.support} at ${formatNumber(lim.value, 4)} ${lim.unit}` }] : [];
-        });
-      const chart = lineChartSvg({ title: `${sw.parameter} from ${sw.from} to ${sw.to} ${res.unit}`, xLabel: `${sw.parameter}${res.unit ? ` (${res.unit})` : ""}`, yLabel: units === "SI" ? "kN" : "lbf", series, markers });
-      ensureSpace(doc, 280);
-      SVGtoPDF(doc, chart, left, doc.y, { width, height: width * (260 / 500), fontCallback: () => "Inter" });
-      doc.y += width * (260 / 500) + 4;
+      const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions));
+      for (const spec of charts) {
+        ensureSpace(doc, 280);
+        SVGtoPDF(doc, lineChartSvg(spec), left, doc.y, { width, height: width * (260 / 500), fontCallback: () => "Inter" });
+        doc.y += width * (260 / 500) + 4;
+      }
       for (const mk of markers) para(`Crossing: ${mk.label}.`, 8.5, INK);
     } catch (err) {
       para(`This sweep could not be run: ${(err as Error).message}`, 8.5, ACCENT);
@@ -244,7 +235,11 @@ function drawTable(doc: PDFKit.PDFDocument, t: Table, left: number, width: numbe
     return;
   }
   const headers = t.columns.map((c) => (c.unit ? `${c.label} (${c.unit})` : c.label));
-  const cells = t.rows.map((r) => r.map(fmtCell));
+  // a marked cell (the governing case) carries its shape before the number: the mark is not colour alone
+  const cells = t.rows.map((r, ri) => r.map((c, ci) => {
+    const mark = t.marks?.[ri]?.[t.columns[ci].key];
+    return mark ? `${mark.symbol}\u00a0${fmtCell(c)}` : fmtCell(c);
+  }));
   doc.font("Inter").fontSize(size);
   // widths from content, shrunk to the page
   const natural = headers.map((h, i) => Math.max(doc.widthOfString(h) + 8, ...cells.map((r) => Math.min(doc.widthOfString(r[i] ?? "") + 8, 220))));

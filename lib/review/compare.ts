@@ -1,9 +1,11 @@
 // What changed between two sketch files: elements added, removed and changed field by field
-// (old → new, with units), parameters, and the result: every support's reaction before and
+// (old → new, with units), parameters, the design studies (cases, combinations, required factors
+// of safety, sweeps, underlay), and the result: every support's reaction before and
 // after with the change (absolute and %), and each body's status ("holds → lifts").
 // Pure and browser-safe: the API, the comparison page and "compare with my kept changes" share it.
 import { parseSketch, solve, type ParseResult, type SolveResult } from "@/solver";
-import type { SketchFile } from "@/solver/schema";
+import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } from "@/solver/schema";
+import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
 import type { FieldError } from "@/solver/types";
 import { FOOT_M, LBF_N } from "@/solver/constants";
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
@@ -26,12 +28,16 @@ export type ReactionChange = {
   /** "bearing → lifted", when the state changed */
   stateChange: string | null;
 };
+/** A change to the design studies: a case, combination, sweep, required factor or the underlay. */
+export type StudyChange = FieldChange & { change: "added" | "removed" | "changed" };
 export type BodyChange = { id: string; label: string; before: string | null; after: string | null; words: string | null };
 
 export type Comparison = {
   sketch: FieldChange[];
   parameters: { added: FieldChange[]; removed: FieldChange[]; changed: FieldChange[] };
   elements: { added: ElementRef[]; removed: ElementRef[]; changed: ElementChange[] };
+  /** operating cases, combinations, required factors of safety, saved sweeps and the underlay */
+  studies: StudyChange[];
   bodies: BodyChange[];
   reactions: ReactionChange[];
   errors: { before: FieldError[]; after: FieldError[] };
@@ -197,6 +203,69 @@ function snapshot(r: SolveResult["reactions"][string] | undefined): ReactionSnap
   return { fx: r.fx, fy: r.fy, m: r.m, resultant: Math.hypot(r.fx, r.fy), n: r.n ?? null, state: r.state };
 }
 
+const num = (x: number) => formatNumber(x, 6);
+
+function caseText(c: CaseFile): string {
+  const bits = [
+    ...Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${v}`),
+    ...Object.entries(c.factors ?? {}).map(([k, v]) => `${k} × ${num(v)}`),
+    ...(c.flowFactor !== undefined && c.flowFactor !== 1 ? [`flow × ${num(c.flowFactor)}`] : []),
+  ];
+  return `${c.name}: ${bits.length ? bits.join(", ") : "as drawn"}`;
+}
+
+const combinationText = (k: CombinationFile) => `${k.name}: ${k.terms.map((t) => `${num(t.factor)} × ${t.case}`).join(" + ")}`;
+
+function sweepText(s: SweepFile): string {
+  const plots = s.quantities?.length ? `; plots ${s.quantities.map((q) => `${q.component} at ${q.support}`).join(", ")}` : "";
+  return `${s.parameter} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case ${s.case}` : ""}${plots}`;
+}
+
+function underlayText(u: UnderlayFile): string {
+  return `upload ${u.upload}, ${num(u.metresPerPixel)} m/px, corner (${num(u.origin[0])}, ${num(u.origin[1])}) m, turned ${num(u.rotation ?? 0)}°, opacity ${num(u.opacity ?? 0.6)}${u.calibration ? `, scale from two marks ${u.calibration.distance} apart` : ""}${u.hidden ? ", hidden" : ""}${u.locked ? ", locked" : ""}`;
+}
+
+/** Items of a list matched by id: added, removed, or changed (old → new). */
+function listChanges<T extends { id: string }>(what: string, a: T[] | undefined, b: T[] | undefined, text: (x: T) => string): StudyChange[] {
+  const out: StudyChange[] = [];
+  const before = new Map((a ?? []).map((x) => [x.id, x]));
+  const after = new Map((b ?? []).map((x) => [x.id, x]));
+  for (const [id, x] of before) {
+    const y = after.get(id);
+    if (!y) out.push({ field: `${what} ${id}`, before: text(x), after: null, change: "removed" });
+    else if (!same(x, y)) out.push({ field: `${what} ${id}`, before: text(x), after: text(y), change: "changed" });
+  }
+  for (const [id, y] of after) if (!before.has(id)) out.push({ field: `${what} ${id}`, before: null, after: text(y), change: "added" });
+  return out;
+}
+
+/** What changed in the design studies: cases, combinations, the required factors of safety,
+ *  saved sweeps and the underlay. A checker must see a changed required factor. */
+export function studyChanges(a: SketchFile, b: SketchFile): StudyChange[] {
+  const out: StudyChange[] = [
+    ...listChanges("case", a.cases, b.cases, caseText),
+    ...listChanges("combination", a.combinations, b.combinations, combinationText),
+  ];
+  for (const k of ["overturning", "sliding"] as const) {
+    const x = a.stability?.[k];
+    const y = b.stability?.[k];
+    if (x === y) continue;
+    const shown = (v: number | undefined) => (v === undefined ? `${num(DEFAULT_REQUIREMENTS[k])} (default)` : num(v));
+    if (shown(x) === shown(y)) continue;
+    out.push({ field: `required factor against ${k}`, before: shown(x), after: shown(y), change: "changed" });
+  }
+  out.push(...listChanges("sweep", a.sweeps, b.sweeps, sweepText));
+  if (!same(a.underlay, b.underlay)) {
+    out.push({
+      field: "underlay",
+      before: a.underlay ? underlayText(a.underlay) : null,
+      after: b.underlay ? underlayText(b.underlay) : null,
+      change: !a.underlay ? "added" : !b.underlay ? "removed" : "changed",
+    });
+  }
+  return out;
+}
+
 /** Compare sketch `a` (before) with sketch `b` (after); evaluated values are written in `units`. */
 export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: UnitSystem = "SI"): Comparison {
   const A = side(fileA);
@@ -246,6 +315,8 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: Uni
     marks.after[id] = "added";
   }
 
+  const studies = studyChanges(A.file, B.file);
+
   const label = (id: string) => (eb.get(id) ?? ea.get(id))?.el.label || id;
   const bodyIds = [...new Set([...ea.values(), ...eb.values()].filter((e) => e.collection === "bodies").map((e) => e.el.id))];
   const bodies: BodyChange[] = bodyIds.map((id) => {
@@ -267,6 +338,7 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: Uni
     sketch,
     parameters,
     elements,
+    studies,
     bodies,
     reactions,
     errors: { before: A.parsed.ok ? [] : A.parsed.errors, after: B.parsed.ok ? [] : B.parsed.errors },
@@ -276,5 +348,14 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: Uni
 
 /** How many things changed in the inputs (not counting the result). */
 export function changeCount(c: Comparison): number {
-  return c.sketch.length + c.parameters.added.length + c.parameters.removed.length + c.parameters.changed.length + c.elements.added.length + c.elements.removed.length + c.elements.changed.length;
+  return (
+    c.sketch.length +
+    c.parameters.added.length +
+    c.parameters.removed.length +
+    c.parameters.changed.length +
+    c.elements.added.length +
+    c.elements.removed.length +
+    c.elements.changed.length +
+    (c.studies?.length ?? 0)
+  );
 }

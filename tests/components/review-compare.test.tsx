@@ -1,10 +1,10 @@
-// The comparison in US customary units, each reaction's components before and after, and the
+// The comparison in US customary units, the design studies' changes, each reaction's components before and after, and the
 // overlay's shared frame: two drawings given one world box put an unchanged point on one pixel.
 import { render, screen } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { renderSketchSvg, sharedFrame } from "@/canvas/render/svg";
-import { ReactionsTable } from "@/components/review/CompareTables";
-import { compareSketches } from "@/lib/review/compare";
+import { ChangesTable, ReactionsTable } from "@/components/review/CompareTables";
+import { changeCount, compareSketches } from "@/lib/review/compare";
 import { parseSketch, solve } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
 import { fixture } from "../api/sketch-fixtures";
@@ -35,6 +35,56 @@ describe("compareSketches in US customary units", () => {
     expect(c.parameters.changed).toEqual([{ field: "Q", before: "2000 gpm", after: "1250 gpm" }]);
     // SI stays the default
     expect(compareSketches(before, after).elements.changed.find((e) => e.id === "jack")!.fields[0].before).toBe("(3.4, 0.3) m");
+  });
+});
+
+describe("changes to the design studies", () => {
+  const withStudies = (): SketchFile => ({
+    ...structuredClone(before),
+    version: 3,
+    cases: [
+      { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
+      { id: "dead", name: "Dead", factors: { flow: 0 } },
+    ],
+    combinations: [{ id: "k", name: "Factored", terms: [{ case: "dead", factor: 1.2 }] }],
+    sweeps: [{ id: "sw", parameter: "theta", from: 0, to: 80, points: 41 }],
+  });
+
+  it("lists cases, combinations, required factors, sweeps and the underlay added, removed or changed (old → new)", () => {
+    const a = withStudies();
+    const b = withStudies();
+    b.cases = [{ id: "low", name: "Low throw", parameters: { theta: "20 deg" } }, { id: "high", name: "High throw", parameters: { theta: "60 deg" } }];
+    b.combinations = [{ id: "k", name: "Factored", terms: [{ case: "low", factor: 1.4 }] }];
+    b.stability = { overturning: 2 };
+    b.sweeps = [];
+    b.underlay = { upload: "u1", width: 800, height: 600, origin: [0, 3], metresPerPixel: 0.005, rotation: 0, opacity: 0.6, locked: true };
+    const c = compareSketches(a, b);
+    expect(c.studies).toEqual([
+      { field: "case low", before: "Low throw: theta = 15 deg", after: "Low throw: theta = 20 deg", change: "changed" },
+      { field: "case dead", before: "Dead: flow × 0", after: null, change: "removed" },
+      { field: "case high", before: null, after: "High throw: theta = 60 deg", change: "added" },
+      { field: "combination k", before: "Factored: 1.2 × dead", after: "Factored: 1.4 × low", change: "changed" },
+      { field: "required factor against overturning", before: "1.5 (default)", after: "2", change: "changed" },
+      { field: "sweep sw", before: "theta from 0 to 80, 41 points", after: null, change: "removed" },
+      { field: "underlay", before: null, after: "upload u1, 0.005 m/px, corner (0, 3) m, turned 0°, opacity 0.6, locked", change: "added" },
+    ]);
+    expect(changeCount(c)).toBe(7);
+  });
+
+  it("a changed required factor of safety alone is a change, shown in the table", () => {
+    const a = withStudies();
+    const b = withStudies();
+    b.stability = { sliding: 1.3 };
+    const c = compareSketches(a, b);
+    expect(changeCount(c)).toBe(1);
+    render(<ChangesTable comparison={c} />);
+    expect(screen.queryByText("Nothing in the inputs differs.")).toBeNull();
+    const row = screen.getByText("required factor against sliding").closest("tr")!;
+    expect(row.textContent).toBe("Cases and studiesrequired factor against sliding1.5 (default)→1.3");
+  });
+
+  it("the same studies: nothing listed", () => {
+    expect(compareSketches(withStudies(), withStudies()).studies).toEqual([]);
   });
 });
 

@@ -11,7 +11,7 @@ const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n
 
 const mount = mountResultsDock;
 
-const num = (t: string) => Number(t.replace(/,/g, "").replace("−", "-"));
+const num = (t: string) => Number(t.replace(/[,▲▼]/g, "").replace("−", "-"));
 
 describe("Cases tab", () => {
   it("adds cases in the table, runs them, and the table equals the cases solved one by one", async () => {
@@ -52,11 +52,23 @@ describe("Cases tab", () => {
     const parsedDoc = parseSketch(doc);
     if (!parsedDoc.ok) throw new Error();
     const study = solveCases(parsedDoc.file);
+    const nameOf = (id: string) => study.runs.find((r) => r.id === id)!.name;
     for (const [support, env] of Object.entries(study.envelope)) {
-      const row = rows.find((r) => r.querySelector("[data-col=support]")!.textContent === support && r.querySelector("[data-col=governs]")!.textContent === "design load")!;
-      expect(row.querySelector("[data-col=case]")!.textContent).toBe(study.runs.find((r) => r.id === env.design.case)!.name);
+      const design = rows.filter((r) => r.querySelector("[data-col=support]")!.textContent === support && r.querySelector("[data-col=governs]")!.textContent!.startsWith("design load"));
+      expect(design).toHaveLength(1);
+      expect(design[0].querySelector("[data-col=case]")!.textContent).toBe(nameOf(env.design.case));
+      // the governing case of Fy is marked in its cell by shape, with words for a screen reader
+      const govFy = rows.find((r) => r.querySelector("[data-col=support]")!.textContent === support && r.querySelector("[data-col=case]")!.textContent === nameOf(env.governing.fy!))!;
+      const mark = within(govFy.querySelector<HTMLElement>("[data-col=fy]")!).getByRole("img");
+      expect(mark.textContent).toMatch(/^[▲▼]$/);
+      expect(mark.getAttribute("aria-label")).toMatch(/^governing case of Fy: the largest magnitude over the cases \((its maximum|its minimum)\)$/);
     }
+    // the envelope names the case of the jack's smallest margin: where it comes closest to lifting
+    const envelope = screen.getByTestId("envelope");
+    const jackMargin = within(envelope).getAllByRole("row").find((r) => r.querySelector("[data-col=support]")?.textContent === "jack" && r.querySelector("[data-col=component]")?.textContent === "Margin")!;
+    expect(jackMargin.querySelector("[data-col=minCase]")!.textContent).toBe(nameOf(study.envelope.jack.components.margin!.min.case));
     expect(screen.getByTestId("stability").textContent).toMatch(/overturning/);
+    expect(screen.getByTestId("stability").textContent).toMatch(/kN·m/);
   });
 
   it("a wrong parameter name is an error at the field, and nothing changes", async () => {
@@ -70,7 +82,81 @@ describe("Cases tab", () => {
   });
 });
 
+describe("combinations that count a load group twice", () => {
+  it("warns in the combination's row; single-group cases do not", async () => {
+    const user = userEvent.setup();
+    const doc = {
+      ...load("fire-monitor-trailer"),
+      version: 3,
+      cases: [
+        { id: "normal", name: "Normal" },
+        { id: "test", name: "Test", parameters: { Q: "2500 gpm" } },
+        { id: "dead", name: "Dead", factors: { flow: 0 } },
+        { id: "flow", name: "Flow", factors: { dead: 0 } },
+      ],
+      combinations: [
+        { id: "bad", name: "Bad", terms: [{ case: "normal", factor: 1.2 }, { case: "test", factor: 1.5 }] },
+        { id: "good", name: "Good", terms: [{ case: "dead", factor: 1.2 }, { case: "flow", factor: 1.5 }] },
+      ],
+    };
+    mount(doc);
+    const container = document.body;
+    await user.click(screen.getByRole("tab", { name: "Cases" }));
+    const bad = container.querySelector("[data-combination=bad]")!;
+    const notes = within(bad as HTMLElement).getAllByRole("note").map((n) => n.textContent);
+    // the weights 1.2 + 1.5 = 2.7 times, the flow too
+    expect(notes[0]).toMatch(/^⚠ Load group "dead" \(the weights\) is in normal \(× 1\.2\) and test \(× 1\.5\): it is counted 2\.7 times\./);
+    expect(notes[1]).toMatch(/^⚠ Load group "flow" is in normal \(× 1\.2\) and test \(× 1\.5\)/);
+    expect(within(container.querySelector("[data-combination=good]") as HTMLElement).queryAllByRole("note")).toHaveLength(0);
+  });
+});
+
+describe("cases in which the body is not held", () => {
+  it("says on screen that a tipping case is not in the envelope", async () => {
+    const user = userEvent.setup();
+    mount({ ...load("fire-monitor-trailer"), version: 3, cases: [{ id: "normal", name: "Normal" }, { id: "flood", name: "Flood flow", parameters: { Q: "4000 gpm" } }] });
+    await user.click(screen.getByRole("tab", { name: "Cases" }));
+    await user.click(screen.getByRole("button", { name: "Run all cases" }));
+    const note = await screen.findByTestId("not-in-envelope");
+    expect(note.textContent).toMatch(/^⚠ Flood flow — trailer tips: not in the envelope or the design loads; the body is not held in this case/);
+    expect(within(screen.getByTestId("envelope")).queryByText("Flood flow")).toBeNull();
+  });
+});
+
 describe("Sweep tab", () => {
+  it("the limit finder takes a fixed support's moment in lbf·ft (1 lbf·ft = 1.3558179483 N·m, NIST SP 811)", async () => {
+    const user = userEvent.setup();
+    // a post on a fixed base at x = 1 m, 1 kN down at x = a: M_base = 1000 N·(a − 1 m) (statics),
+    // so M = 1 lbf·ft at a = 1 m + 1.3558179483 N·m / 1000 N = 1.0013558 m
+    const editor = mount({
+      format: "counterpoise.sketch",
+      version: 3,
+      parameters: { a: "0.5 m" },
+      bodies: [{ id: "p", outline: [[0, 0], [2, 0], [2, 1], [0, 1]], mass: 0 }],
+      supports: [{ id: "base", body: "p", kind: "fixed", at: [1, 0] }],
+      loads: [{ id: "w", body: "p", kind: "force", at: ["a", 1], fx: 0, fy: -1000 }],
+      ports: [],
+      massSources: [],
+    });
+    editor.getState().setUnits("US");
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "a");
+    for (const [name, v] of [["From", "0"], ["To", "2"], ["Points", "21"]]) {
+      await user.clear(screen.getByRole("textbox", { name }));
+      await user.type(screen.getByRole("textbox", { name }), v);
+    }
+    await user.click(screen.getByRole("checkbox", { name: "base: moment" }));
+    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    // the moment changes sign at a = 1 m, which is no event: nothing is marked
+    expect((await screen.findByTestId("crossings")).textContent).toContain("No margin crosses zero in this range.");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
+    expect(screen.getByRole("group", { name: "Limit finder" }).textContent).toContain("lbf·ft?");
+    await user.clear(screen.getByRole("textbox", { name: "Target value" }));
+    await user.type(screen.getByRole("textbox", { name: "Target value" }), "1");
+    await user.click(screen.getByRole("button", { name: "Find" }));
+    expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 1 lbf·ft at a = 1.0014 m.");
+  });
+
   it("plots a sweep, lists the crossing, and the limit finder answers in words", async () => {
     const user = userEvent.setup();
     mount(load("fire-monitor-trailer"));

@@ -2,6 +2,8 @@
 // sums, the reactions with units, ṁ and μ in the embedded font, and the cautions.
 import { describe, expect, it } from "vitest";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
+import { runLimit } from "@/canvas/studies/run";
+import { formatNumber } from "@/solver/units";
 import { loadFixture } from "../solver/helpers";
 
 async function pdfText(buf: Buffer): Promise<{ text: string; pages: number }> {
@@ -62,6 +64,34 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("must be reviewed by a qualified engineer");
     expect(text).toContain("Local codes, standards and licensed engineering practice govern");
     expect(text).toContain("water hammer");
+  }, 60000);
+
+  it("names the governing cases, leaves a tipping case out of the envelope, warns of a load counted twice, sweeps on the saved case", async () => {
+    const file = loadFixture("fire-monitor-trailer.json");
+    file.cases = [
+      { id: "normal", name: "Normal", parameters: { Q: "2000 gpm" } },
+      { id: "flood", name: "Flood flow", parameters: { Q: "4000 gpm" } },
+      { id: "more", name: "More flow", parameters: { Q: "2500 gpm" } },
+    ];
+    // two whole cases in one combination: the weight is counted 1.2 + 1.5 = 2.7 times
+    file.combinations = [{ id: "k", name: "Both", terms: [{ case: "normal", factor: 1.2 }, { case: "more", factor: 1.5 }] }];
+    file.sweeps = [{ id: "sw", parameter: "theta", from: 0, to: 80, points: 41, case: "more", quantities: [{ support: "jack", component: "margin" }] }];
+    const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file });
+    const { text } = await pdfText(buf);
+    // the flood case tips (the trailer is not held): named, and left out
+    expect(text).toContain("Flood flow — trailer tips: not in the envelope or the design loads; the body is not held in this case");
+    expect(text).toContain('Warning: Load group "dead" (the weights) is in normal (× 1.2) and more (× 1.5): it is counted 2.7 times.');
+    // the envelope names the case of each max and min; the cases table marks the governing cells by shape
+    expect(text).toContain("Case of max");
+    expect(text).toContain("Governing case");
+    expect(text).toMatch(/▲ [−\d]/);
+    // the stability figures behind each factor
+    expect(text).toContain("Restoring M / friction available");
+    // the saved sweep runs on its case: the jack lifts where the limit finder says for "More flow"
+    const lim = runLimit(file, { parameter: "theta", from: 0, to: 80, caseId: "more", quantity: { support: "jack", component: "margin" }, target: 0 });
+    if (!lim.found) throw new Error("expected a crossing");
+    expect(text).toContain("Sweep of theta — case More flow");
+    expect(text).toContain(`Crossing: jack at ${formatNumber(lim.value, 4)} deg`);
   }, 60000);
 
   it("US customary units on request", async () => {

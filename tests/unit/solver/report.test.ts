@@ -3,6 +3,7 @@ import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { caseReactionTable, envelopeTable, handCheckTable, inputsTable, parametersTable, parseSketch, reactionTable, solve, solveCases, stabilityTable, tableToCsv } from "@/solver";
 import { LBF_N } from "@/solver/constants";
+import { designLoadTable } from "@/solver/report";
 import { loadFixture } from "./helpers";
 
 const parsedFixture = (name: string) => {
@@ -53,13 +54,15 @@ describe("result tables", () => {
     const cases = caseReactionTable(study, "SI");
     expect(cases.rows).toHaveLength(6);
     const env = envelopeTable(study, "SI");
-    expect(env.rows.map((r) => r[0])).toEqual(["leg", "wheel", "jack"]);
+    // three friction contacts: Fx, Fy, n, t and the margin of each, no moment
+    expect(env.rows.map((r) => `${r[0]} ${r[1]}`)).toEqual(["leg", "wheel", "jack"].flatMap((s) => ["Fx", "Fy", "Normal n", "Tangential t", "Margin"].map((c) => `${s} ${c}`)));
     const st = stabilityTable(study);
     expect(st.rows.filter((r) => r[2] === "overturning")).toHaveLength(2);
-    const csv = tableToCsv(env, Papa.unparse);
-    expect(csv.split("\r\n")[0]).toBe("Support,Fx max (kN),Fx min (kN),Fy max (kN),Fy min (kN),M max (kN·m),M min (kN·m),Design load (kN),at angle (°),from case");
+    const design = designLoadTable(study, "SI");
+    const csv = tableToCsv(design, Papa.unparse);
+    expect(csv.split("\r\n")[0]).toBe("Support,Design load (kN),at angle (°),Fx (kN),Fy (kN),M (kN·m),from case");
     const back = Papa.parse<string[]>(csv).data;
-    expect(Number(back[1][7])).toBeCloseTo(study.envelope.leg.design.resultant / 1000, 4);
+    expect(Number(back[1][1])).toBeCloseTo(study.envelope.leg.design.resultant / 1000, 4);
   });
 
   it("inputs as typed and as evaluated", () => {

@@ -1,0 +1,188 @@
+// The envelope and the tables built on it: the governing case of each component (named beside
+// each max and min, marked by shape in the cases table), runs whose body tips left out, load
+// groups counted twice in a combination, and the figures behind each factor of safety.
+import Papa from "papaparse";
+import { describe, expect, it } from "vitest";
+import { parseSketch, solveCases, tableToCsv, type SketchFileInput } from "@/solver";
+import { combinationOverlaps, combinationWarnings } from "@/solver/cases";
+import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, stabilityTable } from "@/solver/report";
+import { G0 } from "@/solver/constants";
+import { box, expectRel, sketch } from "./helpers";
+
+const fileOf = (doc: unknown) => {
+  const p = parseSketch(doc);
+  if (!p.ok) throw new Error(JSON.stringify(p.errors));
+  return p.file;
+};
+
+// A stand (200 kg, weight at x = 1 m) on a front pin at x = 2 m and a rear contact at x = 0, with
+// a thrust T in +x at 1.2 m in its own load group. Statics by hand (common practice), moments
+// about the pin: rear n·2 = (weight factor)·W·1 − (thrust factor)·T·1.2.
+const W = 200 * G0;
+const T = 500;
+const stand = (extra: Partial<SketchFileInput> = {}): SketchFileInput =>
+  sketch({
+    bodies: [{ id: "s", outline: box(2, 1.5), mass: 200, cg: [1, 0.7] }],
+    supports: [
+      { id: "front", body: "s", kind: "pin", at: [2, 0] },
+      { id: "rear", body: "s", kind: "contact", at: [0, 0], angle: 90 },
+    ],
+    loads: [{ id: "thrust", body: "s", kind: "force", at: [0, 1.2], fx: T, fy: 0, group: "thrust" }],
+    cases: [
+      { id: "dead", name: "Dead", factors: { thrust: 0 } },
+      { id: "push", name: "Thrust", factors: { dead: 0 } },
+    ],
+    combinations: [{ id: "ult", name: "Ultimate", terms: [{ case: "dead", factor: 1.2 }, { case: "push", factor: 1.5 }] }],
+    ...extra,
+  });
+
+describe("runs whose body is not held stay out of the envelope", () => {
+  const study = solveCases(fileOf(stand()));
+  // dead: n = W/2; the thrust alone needs the rear to pull (n = −T·1.2/2 = −300 N): it tips;
+  // 1.2 dead + 1.5 thrust: n = (1.2·W − 1.5·T·1.2)/2, still bearing
+  const nDead = W / 2;
+  const nUlt = (1.2 * W - 1.5 * T * 1.2) / 2;
+
+  it("the thrust case tips and is listed as left out", () => {
+    const push = study.runs.find((r) => r.id === "push")!;
+    if (!push.ok) throw new Error();
+    expect(push.result.bodies.s.status).toBe("tips");
+    expectRel(push.result.reactions.rear.n!, (-T * 1.2) / 2, 1e-9);
+    expect(study.excluded).toEqual([{ case: "push", body: "s", status: "tips" }]);
+    expect(excludedWords(study)).toEqual([
+      "Thrust — s tips: not in the envelope or the design loads; the body is not held in this case (its reactions would need every support to pull).",
+    ]);
+  });
+
+  it("max and min come from the held runs only, each with its case", () => {
+    const rear = study.envelope.rear;
+    expectRel(rear.components.n!.max.value, nDead, 1e-9);
+    expect(rear.components.n!.max.case).toBe("dead");
+    // with the tipping run the minimum would be −300 N from "push"
+    expectRel(rear.components.n!.min.value, nUlt, 1e-9);
+    expect(rear.components.n!.min.case).toBe("ult");
+    // the margin's governing case is its smallest: where the rear comes closest to lifting
+    expect(rear.governing.margin).toBe("ult");
+    // the pin resists the factored thrust: Fx = −1.5·T in "ult", 0 in "dead"
+    const fx = study.envelope.front.components.fx!;
+    expectRel(fx.min.value, -1.5 * T, 1e-9);
+    expect(fx.min.case).toBe("ult");
+    expect(study.envelope.front.governing.fx).toBe("ult");
+  });
+
+  it("the envelope table names the case beside each max and min, with n, t and the margin", () => {
+    const t = envelopeTable(study, "SI");
+    expect(t.columns.map((c) => c.label)).toEqual(["Support", "Component", "Unit", "Max", "Case of max", "Min", "Case of min", "Governing case"]);
+    const row = (support: string, comp: string) => t.rows.find((r) => r[0] === support && r[1] === comp)!;
+    const n = row("rear", "Normal n");
+    expect(n[2]).toBe("kN");
+    expect(n[3]).toBeCloseTo(nDead / 1000, 12);
+    expect(n[4]).toBe("Dead");
+    expect(n[5]).toBeCloseTo(nUlt / 1000, 12);
+    expect(n[6]).toBe("Ultimate");
+    expect(n[7]).toBe("Dead");
+    expect(row("rear", "Margin")[7]).toBe("Ultimate");
+    expect(row("front", "Fx")[7]).toBe("Ultimate");
+    // a pin carries no moment: no M row; nothing of the tipping case anywhere
+    expect(t.rows.some((r) => r[1] === "M")).toBe(false);
+    expect(t.rows.some((r) => r.includes("Thrust"))).toBe(false);
+    expect(t.notes![1]).toBe("A case in which the body tips or is unrestrained is not in the envelope or the design loads (see the note above the tables).");
+    const csv = tableToCsv(t, Papa.unparse).split("\r\n");
+    expect(csv[0]).toBe("Support,Component,Unit,Max,Case of max,Min,Case of min,Governing case");
+    expect(csv.find((l) => l.startsWith("rear,Normal n,kN,"))).toBe(`rear,Normal n,kN,${Number((nDead / 1000).toPrecision(6))},Dead,${Number((nUlt / 1000).toPrecision(6))},Ultimate,Dead`);
+  });
+
+  it("design loads only from held runs", () => {
+    const t = designLoadTable(study, "SI");
+    const front = t.rows.find((r) => r[0] === "front")!;
+    // ult: Fx = −750 N, Fy = 1.2·W − n_ult; dead: Fy = W/2. The larger resultant is ult's.
+    expectRel(front[1] as number, Math.hypot(1.5 * T, 1.2 * W - nUlt) / 1000, 1e-9);
+    expect(front[6]).toBe("Ultimate");
+    expect(t.rows.find((r) => r[0] === "rear")![6]).toBe("Dead");
+  });
+
+  it("the cases table marks the governing cell by shape and names it in words", () => {
+    const t = caseReactionTable(study, "SI");
+    const at = (caseName: string, support: string) => t.rows.findIndex((r) => r[0] === caseName && r[1] === support);
+    const gov = t.columns.findIndex((c) => c.key === "governs");
+    const ultFront = at("Ultimate", "front");
+    expect(t.marks![ultFront]!.fx).toEqual({ symbol: "▼", text: "governing case of Fx: the largest magnitude over the cases (its minimum)" });
+    expect(t.rows[ultFront][gov]).toBe("design load; governs Fx ▼, Fy ▲");
+    const deadRear = at("Dead", "rear");
+    expect(t.marks![deadRear]!.n.symbol).toBe("▲");
+    expect(t.rows[deadRear][gov]).toBe("design load; governs Fy ▲, Normal n ▲");
+    expect(t.rows[at("Ultimate", "rear")][gov]).toBe("least margin (closest to lifting)");
+    expect(t.rows[at("Thrust", "rear")][gov]).toBe("not in the envelope: s tips");
+    expect(t.marks![at("Thrust", "rear")]).toBeUndefined();
+  });
+});
+
+describe("load groups counted more than once in a combination", () => {
+  it("cases of one load group each: nothing to warn about", () => {
+    const file = fileOf(stand());
+    expect(combinationOverlaps(file, file.combinations![0])).toEqual([]);
+  });
+
+  it("1.2 normal + 1.5 test of two whole cases counts the weight 2.7 times", () => {
+    const file = fileOf(
+      stand({
+        cases: [
+          { id: "normal", name: "Normal" },
+          { id: "test", name: "Test", factors: { thrust: 2 } },
+        ],
+        combinations: [{ id: "k", name: "K", terms: [{ case: "normal", factor: 1.2 }, { case: "test", factor: 1.5 }] }],
+      }),
+    );
+    const k = file.combinations![0];
+    expect(combinationOverlaps(file, k)).toEqual([
+      { group: "dead", terms: [{ case: "normal", factor: 1.2 }, { case: "test", factor: 1.5 }], total: 2.7 },
+      { group: "thrust", terms: [{ case: "normal", factor: 1.2 }, { case: "test", factor: 3 }], total: 4.2 },
+    ]);
+    expect(combinationWarnings(file, k)[0]).toBe(
+      'Load group "dead" (the weights) is in normal (× 1.2) and test (× 1.5): it is counted 2.7 times. Give each case of a combination its own load groups (set the others to 0 in the case) so each load is counted once.',
+    );
+  });
+});
+
+describe("factors of safety with their figures (common practice)", () => {
+  // A block of weight W, base b, on two friction contacts, pushed by P at height h:
+  // overturning W·b/2 over P·h about the toe; sliding μ·W over P.
+  const Wb = 800 * G0;
+  const b = 1.2;
+  const h = 1.5;
+  const mu = 0.45;
+  const P = 1400;
+  const doc = sketch({
+    bodies: [{ id: "blk", outline: box(b, 2), mass: 800, cg: [b / 2, 1] }],
+    supports: [
+      { id: "heel", body: "blk", kind: "contact", at: [0, 0], angle: 90, mu },
+      { id: "toe", body: "blk", kind: "contact", at: [b, 0], angle: 90, mu },
+    ],
+    loads: [{ id: "P", body: "blk", kind: "force", at: [0, h], fx: P, fy: 0 }],
+  });
+
+  it("restoring and overturning moments, friction available and driving force, in kN·m and kN", () => {
+    const t = stabilityTable(solveCases(fileOf(doc)), "SI");
+    expect(t.columns.map((c) => c.key)).toEqual(["case", "body", "check", "resisting", "acting", "unit", "factor", "required", "verdict", "note"]);
+    const [ot, sl] = t.rows;
+    expect(ot[2]).toBe("overturning");
+    expectRel(ot[3] as number, (Wb * b) / 2 / 1000, 1e-9);
+    expectRel(ot[4] as number, (P * h) / 1000, 1e-9);
+    expect(ot[5]).toBe("kN·m");
+    expect(ot[6]).toBe(Number(((Wb * b) / 2 / (P * h)).toFixed(3)));
+    expect(ot[9]).toBe("about toe");
+    expect(sl[2]).toBe("sliding");
+    expectRel(sl[3] as number, (mu * Wb) / 1000, 1e-9);
+    expectRel(sl[4] as number, P / 1000, 1e-9);
+    expect(sl[5]).toBe("kN");
+  });
+
+  it("in US units the moments are in lbf·ft (1 lbf·ft = 1.3558179483 N·m, NIST SP 811)", () => {
+    const t = stabilityTable(solveCases(fileOf(doc)), "US");
+    const [ot, sl] = t.rows;
+    expect(ot[5]).toBe("lbf·ft");
+    expectRel(ot[3] as number, (Wb * b) / 2 / 1.3558179483, 1e-9);
+    expect(sl[5]).toBe("lbf");
+    expectRel(sl[4] as number, P / 4.4482216152605, 1e-9);
+  });
+});
