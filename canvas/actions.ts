@@ -37,6 +37,8 @@ export interface Action {
   shortcuts?: string[];
   /** longer words for a tooltip */
   hint?: string;
+  /** listed in the toolbar's menu of its group (the File menu) */
+  menu?: boolean;
   /** for the tray: the element kind it places */
   kind?: ElementKind;
   friction?: boolean;
@@ -202,11 +204,12 @@ export const ACTIONS: readonly Action[] = [
   { id: "view.snap", label: "Snap to grid and edges", group: "view", run: (c) => ed(c).setSnap(!ed(c).snap) },
 
   // ---- file
-  { id: "file.new", label: "New sketch", group: "file", run: (c) => c.ui.newSketch() },
-  { id: "file.import", label: "Import JSON…", group: "file", shortcuts: ["Mod+O"], run: (c) => c.ui.openImport() },
-  { id: "file.exportJson", label: "Export JSON", group: "file", shortcuts: ["Mod+E"], run: (c) => c.ui.exportJson() },
-  { id: "file.exportSvg", label: "Export drawing as SVG", group: "file", run: (c) => c.ui.exportSvg() },
-  { id: "file.exportPng", label: "Export drawing as PNG", group: "file", run: (c) => c.ui.exportPng() },
+  { id: "file.new", label: "New sketch", group: "file", menu: true, run: (c) => c.ui.newSketch() },
+  { id: "file.import", label: "Import JSON…", group: "file", menu: true, shortcuts: ["Mod+O"], run: (c) => c.ui.openImport() },
+  { id: "file.exportJson", label: "Export JSON", group: "file", menu: true, shortcuts: ["Mod+E"], run: (c) => c.ui.exportJson() },
+  { id: "file.exportSvg", label: "Export drawing as SVG", group: "file", menu: true, run: (c) => c.ui.exportSvg() },
+  { id: "file.exportPng", label: "Export drawing as PNG", group: "file", menu: true, run: (c) => c.ui.exportPng() },
+  // not in the menu: the scratch sketch keeps itself, and a saved sketch has its own Save button
   { id: "file.save", label: "Save", group: "file", shortcuts: ["Mod+S"], run: (c) => c.ui.save() },
 
   // ---- results
@@ -232,6 +235,18 @@ export function actionById(id: string): Action {
   const a = ACTIONS.find((x) => x.id === id);
   if (!a) throw new Error(`no action ${id}`);
   return a;
+}
+
+/** The actions a toolbar menu lists, in registration order. */
+export function menuActions(group: ActionGroup): Action[] {
+  return ACTIONS.filter((a) => a.group === group && a.menu);
+}
+
+/** A button's tooltip from its action: "Zoom out (-)"; `label` replaces the action's words. */
+export function actionTitle(id: string, label?: string): string {
+  const a = actionById(id);
+  const key = a.shortcuts?.[0];
+  return key ? `${label ?? a.label} (${shortcutLabel(key)})` : (label ?? a.label);
 }
 
 // ---------------------------------------------------------------- shortcuts

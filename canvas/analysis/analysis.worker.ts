@@ -11,8 +11,13 @@ interface Request {
 const scope = self as unknown as { onmessage: ((e: MessageEvent<Request>) => void) | null; postMessage: (m: unknown) => void };
 scope.onmessage = (e) => {
   const { seq, text } = e.data;
-  const sketch = JSON.parse(text) as SketchFile;
-  const core = analyseCore(sketch);
-  // structured clone on the way back: native, and it keeps ∞ (a friction ratio) as it is
-  scope.postMessage({ seq, core: { ...core, fields: expressionFields(sketch, core.fields) } });
+  try {
+    const sketch = JSON.parse(text) as SketchFile;
+    const core = analyseCore(sketch);
+    // structured clone on the way back: native, and it keeps ∞ (a friction ratio) as it is
+    scope.postMessage({ seq, core: { ...core, fields: expressionFields(sketch, core.fields) } });
+  } catch (err) {
+    // the editor then solves on the main thread instead
+    scope.postMessage({ seq, error: (err as Error).message });
+  }
 };

@@ -61,38 +61,64 @@ export const syncRunner: Runner = (sketch, done) => done(analyseCore(sketch));
 
 /**
  * A runner backed by a worker: one sketch in flight at a time; while it is solved, only the
- * newest change waits (a drag's intermediate frames are skipped, never queued).
+ * newest change waits (a drag's intermediate frames are skipped, never queued). If the worker
+ * fails (its script does not load, or it throws), the solve moves to the main thread for good:
+ * slower, but the results keep following the sketch instead of freezing.
  */
-export function workerRunner(worker: Worker, schedule: (fn: () => void) => void = afterFrame): Runner {
+export function workerRunner(worker: Worker, schedule: (fn: () => void) => void = afterFrame, warn: (message: string) => void = console.warn): Runner {
+  type Job = { sketch: SketchFile; done: (c: AnalysisCore) => void };
   let seq = 0;
-  let inFlight: { seq: number; done: (c: AnalysisCore) => void } | null = null;
-  let waiting: { sketch: SketchFile; done: (c: AnalysisCore) => void } | null = null;
+  let failed = false;
+  let inFlight: (Job & { seq: number }) | null = null;
+  let waiting: Job | null = null;
   let posting = false;
-  const send = (sketch: SketchFile, done: (c: AnalysisCore) => void) => {
-    inFlight = { seq: ++seq, done };
-    worker.postMessage({ seq: inFlight.seq, text: JSON.stringify(sketch) });
+  const send = (job: Job) => {
+    inFlight = { ...job, seq: ++seq };
+    worker.postMessage({ seq: inFlight.seq, text: JSON.stringify(job.sketch) });
+  };
+  const fallBack = (why: string) => {
+    if (failed) return;
+    failed = true;
+    warn(`Counterpoise: the live solve now runs on the main thread, because its worker failed (${why}).`);
+    worker.onmessage = null;
+    worker.onerror = null;
+    worker.onmessageerror = null;
+    worker.terminate();
+    // the sketches it held are solved here, oldest first, so the newest ends on screen
+    const jobs = [inFlight, waiting].filter((j): j is Job => j !== null);
+    inFlight = null;
+    waiting = null;
+    for (const j of jobs) syncRunner(j.sketch, j.done);
   };
   // copying the sketch to the worker costs ~1 ms for 200 elements: do it after the frame
   // that shows the change, not between the pointer move and that frame
   const post = () => {
     posting = false;
-    if (inFlight || !waiting) return;
+    if (failed || inFlight || !waiting) return;
     const w = waiting;
     waiting = null;
-    send(w.sketch, w.done);
+    send(w);
   };
-  worker.onmessage = (e: MessageEvent<{ seq: number; core?: AnalysisCore }>) => {
+  worker.onmessage = (e: MessageEvent<{ seq: number; core?: AnalysisCore; error?: string }>) => {
     if (!inFlight || e.data.seq !== inFlight.seq) return;
+    if (!e.data.core) return fallBack(e.data.error ?? "it gave no answer");
     const finished = inFlight;
     inFlight = null;
     // deliver every answer (it is newer than what is on screen), then solve the newest change
-    finished.done(e.data.core!);
+    finished.done(e.data.core);
     if (waiting && !posting) {
       posting = true;
       schedule(post);
     }
   };
+  worker.onerror = (e: ErrorEvent) => {
+    // handled here: the browser need not report it as uncaught as well
+    e.preventDefault?.();
+    fallBack(e.message || "its script could not be loaded");
+  };
+  worker.onmessageerror = () => fallBack("an answer could not be read");
   return (sketch, done) => {
+    if (failed) return syncRunner(sketch, done);
     waiting = { sketch, done };
     if (!inFlight && !posting) {
       posting = true;

@@ -39,7 +39,8 @@ type Mode =
   | { kind: "rotate"; id: string; anchor: Vec2; flip: boolean; magnitude?: number }
   | { kind: "corner"; id: string; index: number }
   | { kind: "cg"; id: string; start: Vec2; origin: Vec2 }
-  | { kind: "band"; start: Vec2; mode: "replace" | "add" }
+  /** `before`: the selection when the band began, which Escape gives back */
+  | { kind: "band"; start: Vec2; mode: "replace" | "add"; before: string[] }
   | { kind: "rect"; start: Vec2 }
   | { kind: "pinch"; dist: number; mid: Vec2; view: { scale: number; x: number; y: number } }
   | { kind: "underlay"; start: Vec2; origin: Vec2 };
@@ -99,11 +100,28 @@ export function createPointerController(deps: PointerDeps) {
     interaction.setState({ dragging: false, panning: false, band: null, rect: null, lifted: NOTHING_LIFTED });
   }
 
+  // A finger is forgotten when it lifts, whatever its press did: a tap that placed an element
+  // starts no drag, and a finger still counted would make the next single touch a pinch.
+  function onTouchEnd(e: PointerEvent) {
+    if (e.pointerType !== "touch") return;
+    touches.delete(e.pointerId);
+    if (touches.size === 0) stopTouchWatch();
+  }
+  function startTouchWatch() {
+    window.addEventListener("pointerup", onTouchEnd);
+    window.addEventListener("pointercancel", onTouchEnd);
+  }
+  function stopTouchWatch() {
+    window.removeEventListener("pointerup", onTouchEnd);
+    window.removeEventListener("pointercancel", onTouchEnd);
+  }
+
   function down(e: PointerEvent) {
     const s = ed();
     const screen = screenOf(e);
     if (e.pointerType === "touch") {
       touches.set(e.pointerId, screen);
+      startTouchWatch();
       if (touches.size === 2) {
         // a second finger: whatever the first one started becomes a pinch
         if (mode.kind === "move" || mode.kind === "rotate" || mode.kind === "corner" || mode.kind === "cg") s.cancelGesture();
@@ -206,7 +224,7 @@ export function createPointerController(deps: PointerDeps) {
       mode = { kind: "move", ids, start: world, anchor: anchorOf(primary), moved: false, exclude, snapAnchor: primary.kind !== "body" };
       s.beginGesture("Move");
     } else {
-      mode = { kind: "band", start: world, mode: e.shiftKey ? "add" : "replace" };
+      mode = { kind: "band", start: world, mode: e.shiftKey ? "add" : "replace", before: s.selection };
       if (!e.shiftKey) s.select([]);
     }
     interaction.setState({ dragging: true });
@@ -340,16 +358,19 @@ export function createPointerController(deps: PointerDeps) {
   }
 
   function onDragCancel(e: PointerEvent) {
-    touches.delete(e.pointerId);
+    if (e.pointerType === "touch") touches.delete(e.pointerId);
     cancel();
   }
 
   /** Escape: roll back the drag in progress, or leave the current tool. */
   function cancel(): boolean {
     const s = ed();
+    touches.clear();
+    stopTouchWatch();
     if (mode.kind !== "idle") {
       const wasGesture = mode.kind === "move" || mode.kind === "rotate" || mode.kind === "corner" || mode.kind === "cg" || mode.kind === "underlay";
       if (mode.kind === "pan") s.setView(mode.view);
+      if (mode.kind === "band") s.select(mode.before);
       mode = { kind: "idle" };
       stopWindowDrag();
       interaction.setState({ snap: null });
@@ -404,6 +425,8 @@ export function createPointerController(deps: PointerDeps) {
 
   function dispose() {
     stopWindowDrag();
+    stopTouchWatch();
+    touches.clear();
   }
 
   return { down, hover, leave, wheel, cancel, finishPolygon, dispose, get mode() { return mode.kind; } };

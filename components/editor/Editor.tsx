@@ -11,6 +11,7 @@ import { createInteractionStore } from "@/canvas/konva/interaction";
 import type { PointerController } from "@/canvas/konva/pointer";
 import type { ActionContext } from "@/canvas/actions";
 import type { SketchPersistence } from "@/canvas/persistence";
+import { startAutosave } from "@/canvas/autosave";
 import { exampleById } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
 import { replaceSketch } from "@/canvas/commands/fields";
@@ -143,29 +144,16 @@ function useAutosave(store: EditorStore, persistence: SketchPersistence, ready: 
   const [saved, setSaved] = useState<string | null>(null);
   useEffect(() => {
     if (!ready || !persistence.autosave) return;
-    let timer: ReturnType<typeof setTimeout> | null = null;
-    const flush = () => {
-      timer = null;
-      void persistence.save(store.getState().sketch).then((out) => {
+    const autosave = startAutosave(store, persistence, {
+      onSaved: (out) => {
         if (out.ok) setSaved(new Date(out.savedAt).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit", second: "2-digit" }));
-      });
-    };
-    const unsub = store.subscribe((s, p) => {
-      if (s.revision === p.revision || s.gesture) return;
-      if (timer) clearTimeout(timer);
-      timer = setTimeout(flush, 350);
+      },
     });
-    const hide = () => {
-      if (timer) {
-        clearTimeout(timer);
-        flush();
-      }
-    };
-    window.addEventListener("pagehide", hide);
+    window.addEventListener("pagehide", autosave.flush);
     return () => {
-      unsub();
-      window.removeEventListener("pagehide", hide);
-      hide();
+      window.removeEventListener("pagehide", autosave.flush);
+      autosave.flush();
+      autosave.stop();
     };
   }, [store, persistence, ready]);
   return saved;

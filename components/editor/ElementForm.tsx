@@ -9,7 +9,7 @@ import { insertCorner, removeCorner } from "@/canvas/commands/shape";
 import { moveCentreOfGravity } from "@/canvas/commands/move";
 import { setForceForm } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
-import { formatQuantity } from "@/solver/units";
+import { convert, formatQuantity } from "@/solver/units";
 import { FORCE_COMPONENTS, FORCE_POLAR, FORM, type FieldDef, type NumberFieldDef, type PointFieldDef } from "./fieldDefs";
 import { NumericField } from "./NumericField";
 import { TextField } from "./TextField";
@@ -61,6 +61,8 @@ function CentreOfGravity({ id, body }: { id: string; body: BodyEl }) {
   const { editor } = useStores();
   const commit = useCommit(id);
   const centroid = useScene((s) => (s.byId.get(id) as { cg?: [number, number] } | undefined)?.cg);
+  const units = useEditor((s) => s.units);
+  const len = (m: number) => convert(m, "length", units);
   if (body.cg) {
     return (
       <div>
@@ -75,7 +77,7 @@ function CentreOfGravity({ id, body }: { id: string; body: BodyEl }) {
     <div>
       <p className="text-[12px] font-medium text-ink-soft">Centre of gravity</p>
       <p className="num text-[11.5px] text-ink-faint">
-        At the outline&apos;s centroid{centroid ? ` (${centroid[0].toFixed(3)}, ${centroid[1].toFixed(3)}) m` : ""}.{" "}
+        At the outline&apos;s centroid{centroid ? ` (${len(centroid[0]).value.toFixed(3)}, ${len(centroid[1]).value.toFixed(3)}) ${len(1).unit}` : ""}.{" "}
         <button
           type="button"
           className="text-accent hover:underline"

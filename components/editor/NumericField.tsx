@@ -44,6 +44,8 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   const text = draft ?? numericText(value);
   const error = localError ?? (text.trim() ? evalError : undefined);
   const describedBy = `${id}-value`;
+  // a plain number is SI (degrees for angles) and is its own value: the worker's answer leaves it out
+  const typed = toNumeric(text);
 
   const change = (t: string) => {
     setDraft(t);
@@ -59,6 +61,7 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   if (error) line = error;
   else if (!text.trim()) line = hint ?? (optional ? "not given" : "");
   else if (evaluated !== undefined) line = `= ${formatDisplay(evaluated, display, units)}`;
+  else if (typeof typed === "number") line = `= ${formatDisplay(typed, display, units)}`;
   else line = "";
 
   return (

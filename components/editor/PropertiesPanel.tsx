@@ -1,6 +1,7 @@
 "use client";
 // "Properties": the form of the selected element, the sketch's own fields when nothing is
 // selected, or what to do with several selected elements.
+import { actionById, actionTitle } from "@/canvas/actions";
 import { useEditor } from "@/canvas/context";
 import { findElement, KIND_LABEL } from "@/canvas/model/elements";
 import { ElementForm } from "./ElementForm";
@@ -10,10 +11,25 @@ import { UnderlayPanel } from "./UnderlayPanel";
 import { useActionRunner } from "./useActions";
 import { BUTTON, HEADING } from "./ui";
 
+/** Duplicate and Delete for the selection, by their registered actions (the same as Ctrl+D and Delete). */
+function SelectionActions() {
+  const run = useActionRunner();
+  const readOnly = useEditor((s) => s.readOnly);
+  if (readOnly) return null;
+  return (
+    <div className="flex gap-1.5" data-testid="selection-actions">
+      {["edit.duplicate", "edit.delete"].map((id) => (
+        <button key={id} type="button" className={BUTTON} title={actionTitle(id)} onClick={() => run(id)}>
+          {actionById(id).label}
+        </button>
+      ))}
+    </div>
+  );
+}
+
 function Several() {
   const selection = useEditor((s) => s.selection);
   const sketch = useEditor((s) => s.sketch);
-  const run = useActionRunner();
   return (
     <div className="space-y-2">
       <p className="text-[13px] font-semibold text-ink">{selection.length} elements selected</p>
@@ -24,14 +40,7 @@ function Several() {
         })}
       </ul>
       <p className="text-[11.5px] text-ink-faint">Drag any of them to move them together; arrow keys nudge.</p>
-      <div className="flex gap-1.5">
-        <button type="button" className={BUTTON} onClick={() => run("edit.duplicate")}>
-          Duplicate
-        </button>
-        <button type="button" className={BUTTON} onClick={() => run("edit.delete")}>
-          Delete
-        </button>
-      </div>
+      <SelectionActions />
     </div>
   );
 }
@@ -52,7 +61,16 @@ export function PropertiesPanel() {
         ) : null}
         {/* a disabled fieldset disables every field and button of the forms inside it */}
         <fieldset disabled={readOnly} className="min-w-0">
-          {selection.length === 0 ? <SketchForm /> : selection.length === 1 ? <ElementForm key={selection[0]} id={selection[0]} /> : <Several />}
+          {selection.length === 0 ? (
+            <SketchForm />
+          ) : selection.length === 1 ? (
+            <div className="space-y-3">
+              <ElementForm key={selection[0]} id={selection[0]} />
+              <SelectionActions />
+            </div>
+          ) : (
+            <Several />
+          )}
         </fieldset>
       </section>
       <UnderlayPanel />

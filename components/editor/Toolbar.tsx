@@ -3,18 +3,23 @@
 // and redo, the view, snapping and the SI / US switch. Every button runs a registered action.
 import Link from "next/link";
 import type { ReactNode } from "react";
-import { ACTIONS, shortcutLabel } from "@/canvas/actions";
+import { actionTitle, menuActions, shortcutLabel, type Action } from "@/canvas/actions";
 import { useEditor } from "@/canvas/context";
 import { EXAMPLES } from "@/canvas/examples";
+import { convert, type UnitSystem } from "@/solver/units";
 import { Menu, type MenuItem } from "./Menu";
 import { useActionRunner } from "./useActions";
 import { ICON_BUTTON } from "./ui";
 
-function menuItems(ids: string[], run: (id: string) => boolean): MenuItem[] {
-  return ids.map((id) => {
-    const a = ACTIONS.find((x) => x.id === id)!;
-    return { id, label: a.label, shortcut: a.shortcuts?.[0] ? shortcutLabel(a.shortcuts[0]) : undefined, onSelect: () => run(id) };
-  });
+function menuItems(actions: Action[], run: (id: string) => boolean): MenuItem[] {
+  return actions.map((a) => ({ id: a.id, label: a.label, shortcut: a.shortcuts?.[0] ? shortcutLabel(a.shortcuts[0]) : undefined, onSelect: () => run(a.id) }));
+}
+
+/** The zoom as screen pixels per metre, or per foot in US units. */
+export function drawingScale(pxPerM: number, units: UnitSystem): string {
+  const one = convert(1, "length", units);
+  const px = pxPerM / one.value;
+  return `${px >= 100 ? Math.round(px) : px.toFixed(1)} px/${one.unit}`;
 }
 
 export function UnitSwitch() {
@@ -48,6 +53,7 @@ export function Toolbar({ where, saved, onOpenExample, extra }: { where: string;
   const title = useEditor((s) => s.sketch.title);
   const scale = useEditor((s) => s.view.scale);
   const snap = useEditor((s) => s.snap);
+  const units = useEditor((s) => s.units);
   return (
     <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3">
       <Link href="/" className="mr-2 flex items-center gap-1.5 text-ink" aria-label="Counterpoise home">
@@ -68,7 +74,7 @@ export function Toolbar({ where, saved, onOpenExample, extra }: { where: string;
           {saved ? ` · saved ${saved}` : ""}
         </p>
       </div>
-      <Menu label="File" testId="menu-file" items={menuItems(["file.new", "file.import", "file.exportJson", "file.exportSvg", "file.exportPng"], run)} />
+      <Menu label="File" testId="menu-file" items={menuItems(menuActions("file"), run)} />
       <Menu
         label="Open an example"
         testId="menu-examples"
@@ -76,23 +82,23 @@ export function Toolbar({ where, saved, onOpenExample, extra }: { where: string;
         items={EXAMPLES.map((e) => ({ id: `example-${e.id}`, label: e.title, detail: e.summary, onSelect: () => onOpenExample(e.id) }))}
       />
       <div className="mx-2 h-5 w-px bg-rule" aria-hidden="true" />
-      <button type="button" className={ICON_BUTTON} disabled={!canUndo} onClick={() => run("edit.undo")} title={canUndo ? `Undo: ${undoLabel} (${shortcutLabel("Mod+Z")})` : "Nothing to undo"} aria-label="Undo" data-testid="undo">
+      <button type="button" className={ICON_BUTTON} disabled={!canUndo} onClick={() => run("edit.undo")} title={canUndo ? actionTitle("edit.undo", `Undo: ${undoLabel}`) : "Nothing to undo"} aria-label="Undo" data-testid="undo">
         <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true"><path d="M5 4L2 7l3 3M2.5 7H10a3.5 3.5 0 010 7H7" fill="none" stroke="currentColor" strokeWidth="1.5" strokeLinecap="round" strokeLinejoin="round" /></svg>
       </button>
-      <button type="button" className={ICON_BUTTON} disabled={!canRedo} onClick={() => run("edit.redo")} title={canRedo ? `Redo: ${redoLabel} (${shortcutLabel("Shift+Mod+Z")})` : "Nothing to redo"} aria-label="Redo" data-testid="redo">
+      <button type="button" className={ICON_BUTTON} disabled={!canRedo} onClick={() => run("edit.redo")} title={canRedo ? actionTitle("edit.redo", `Redo: ${redoLabel}`) : "Nothing to redo"} aria-label="Redo" data-testid="redo">
         <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true"><path d="M11 4l3 3-3 3M13.5 7H6a3.5 3.5 0 000 7h3" fill="none" stroke="currentColor" strokeWidth="1.5" strokeLinecap="round" strokeLinejoin="round" /></svg>
       </button>
       <div className="flex-1" />
-      <button type="button" className={ICON_BUTTON} onClick={() => run("view.zoomOut")} aria-label="Zoom out" title="Zoom out (−)">
+      <button type="button" className={ICON_BUTTON} onClick={() => run("view.zoomOut")} aria-label="Zoom out" title={actionTitle("view.zoomOut")}>
         −
       </button>
       <span className="num w-16 text-center text-[11.5px] text-ink-faint" title="Drawing scale" aria-label="Drawing scale">
-        {scale >= 100 ? `${Math.round(scale)} px/m` : `${scale.toFixed(1)} px/m`}
+        {drawingScale(scale, units)}
       </span>
-      <button type="button" className={ICON_BUTTON} onClick={() => run("view.zoomIn")} aria-label="Zoom in" title="Zoom in (+)">
+      <button type="button" className={ICON_BUTTON} onClick={() => run("view.zoomIn")} aria-label="Zoom in" title={actionTitle("view.zoomIn")}>
         +
       </button>
-      <button type="button" className={`${ICON_BUTTON} text-[12px]`} onClick={() => run("view.fit")} title="Fit to view (F)">
+      <button type="button" className={`${ICON_BUTTON} text-[12px]`} onClick={() => run("view.fit")} title={actionTitle("view.fit")}>
         Fit
       </button>
       <label className="ml-2 flex items-center gap-1.5 text-[12px] text-ink-soft" title="Snap to the grid and to body corners and edges (hold Alt to place freely)">

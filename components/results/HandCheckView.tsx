@@ -3,7 +3,7 @@
 // minus in — so a checker can follow the calculation line by line and compare with their own.
 // P is picked on the canvas (the "Pick on the drawing" button) or typed.
 import { useDeferredValue, useMemo, useState } from "react";
-import { evaluateToNumber } from "@/solver/expressions";
+import { compileExpression, toFieldNumber } from "@/solver/expressions";
 import { columnUnit, handCheckTable } from "@/solver/report";
 import { downloadCsv } from "@/components/studies/csv";
 import { convert, formatNumber, type UnitSystem } from "@/solver/units";
@@ -12,6 +12,19 @@ import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { BUTTON, INPUT } from "@/components/editor/ui";
 import { useActionRunner } from "@/components/editor/useActions";
 import { defaultMomentPoint, handCheckBlocks, type HandCheckBlock } from "./handCheck";
+
+/**
+ * A coordinate of P as typed: a length with its unit ("3 ft", "900 mm"), or a plain number in
+ * the length unit on screen (feet in US units, metres in SI). Returns metres.
+ */
+export function parseLength(text: string, units: UnitSystem): number {
+  const v = compileExpression(text.trim() || "0", new Set()).evaluate(new Map());
+  if (typeof v === "number") {
+    if (!Number.isFinite(v)) throw new Error("does not give a finite number");
+    return v / convert(1, "length", units).value;
+  }
+  return toFieldNumber(v, "length");
+}
 
 function fmt(v: number, key: "fx" | "fy" | "m", units: UnitSystem): string {
   const q = key === "m" ? "moment" : "force";
@@ -74,6 +87,7 @@ export function HandCheckView() {
   const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
   const units = useEditor((s) => s.units);
   const picked = useEditor((s) => s.momentPoint);
+  const stale = useAnalysis((s) => s.stale);
   const { editor } = useStores();
   const run = useActionRunner();
   const bodies = numeric?.bodies ?? [];
@@ -86,16 +100,22 @@ export function HandCheckView() {
   const [error, setError] = useState<string | null>(null);
   if (!eq || !body) return <p className="p-2 text-[12.5px] text-ink-faint">No result to check yet.</p>;
 
+  const lengthUnit = convert(1, "length", units).unit;
   const commitPoint = (x: string, y: string) => {
-    try {
-      const p: Vec2 = [evaluateToNumber(x || "0", "length"), evaluateToNumber(y || "0", "length")];
-      editor.getState().setMomentPoint(p);
-      setError(null);
-    } catch (e) {
-      setError((e as Error).message);
+    const p: number[] = [];
+    for (const [k, text] of [["x", x], ["y", y]] as const) {
+      try {
+        p.push(parseLength(text, units));
+      } catch (e) {
+        setError(`P${k}: ${(e as Error).message}`);
+        return;
+      }
     }
+    editor.getState().setMomentPoint(p as Vec2);
+    setError(null);
   };
-  const shownText = (v: number) => String(Number(v.toFixed(4)));
+  // in the length unit on screen, like the terms' positions
+  const shownText = (m: number) => String(Number(convert(m, "length", units).value.toFixed(4)));
 
   return (
     <div data-testid="hand-check">
@@ -115,8 +135,8 @@ export function HandCheckView() {
         <span className="pb-1.5 text-ink-soft">Moments about P =</span>
         {(["x", "y"] as const).map((k, i) => (
           <label key={k} className="flex w-28 flex-col">
-            <span className="text-ink-faint" title="metres, or a length with its unit (“4 ft”)">
-              P{k}
+            <span className="text-ink-faint" title={`${lengthUnit === "ft" ? "feet" : "metres"}, or a length with its unit (“${lengthUnit === "ft" ? "2 m" : "4 ft"}”)`}>
+              P{k} ({lengthUnit})
             </span>
             <input
               className={INPUT}
@@ -155,7 +175,8 @@ export function HandCheckView() {
         Steady flow through a control volume fixed to the body: ΣF = Σ(ṁV)out − Σ(ṁV)in and ΣM_P = Σ r × ṁV. Forces in x and y, moments counter-clockwise positive.
       </p>
       {/* three sums side by side only where each has room for its terms' names; else one under another */}
-      <div className="@container">
+      {/* faded like the reactions table while the result shown is an earlier sketch's */}
+      <div className={`@container ${stale ? "opacity-60" : ""}`} data-testid="hand-sums" data-stale={stale || undefined}>
         <div className="grid grid-cols-1 gap-x-4 gap-y-3 @4xl:grid-cols-3">
           {blocks.map((b) => (
             <Block key={b.key} b={b} units={units} />

@@ -3,6 +3,7 @@
 // shown is an earlier one because the input has errors.
 import { useDeferredValue, useMemo } from "react";
 import { useAnalysis, useEditor } from "@/canvas/context";
+import { errorInWords } from "./errorPlace";
 import { statusSentences, type Tone } from "./statusSentence";
 
 const BADGE: Record<Tone, { word: string; cls: string }> = {
@@ -19,6 +20,7 @@ export function StatusBanner() {
   const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
   const stale = useAnalysis((s) => s.stale);
   const errors = useAnalysis((s) => s.core?.errors ?? []);
+  const analysed = useAnalysis((s) => s.sketch);
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
   const units = useEditor((s) => s.units);
   const sentences = useMemo(() => (shown && numeric ? statusSentences(numeric, shown, units) : []), [shown, numeric, units]);
@@ -28,14 +30,13 @@ export function StatusBanner() {
     <div className="space-y-1" data-testid="status" aria-live="polite">
       {stale && (
         <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution" data-testid="stale">
-          Showing the last good result (faded on the drawing): the input has {errors.length === 1 ? "an error" : `${errors.length} errors`} — {errors[0]?.path ? `${errors[0].path}: ` : ""}
-          {errors[0]?.message}
+          Showing the last good result (faded on the drawing): the input has {errors.length === 1 ? "an error" : `${errors.length} errors`}
+          {errors[0] ? ` — ${errorInWords(analysed, errors[0])}` : ""}
         </p>
       )}
       {!shown && !stale && errors.length > 0 && (
         <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution">
-          No result yet: {errors[0].path ? `${errors[0].path}: ` : ""}
-          {errors[0].message}
+          No result yet: {errorInWords(analysed, errors[0])}
         </p>
       )}
       {sentences.map((s) => (

@@ -1,6 +1,9 @@
 // The canvas's pointer controller (jsdom, no Konva): a drag is one undo step and Escape rolls it
-// back; a support dropped on another body attaches to it; handles turn and reshape; tools place.
-import { afterEach, beforeEach, describe, expect, it } from "vitest";
+// back (from the keyboard too); a support dropped on another body attaches to it; handles turn
+// and reshape; tools place; a finger is forgotten when it lifts; a finished drag is autosaved.
+import { useCallback } from "react";
+import { fireEvent, render } from "@testing-library/react";
+import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import type { SketchFile } from "@/solver/schema";
 import { createEditorStore } from "@/canvas/store";
 import { createAnalysisStore, linkAnalysis } from "@/canvas/analysis/store";
@@ -9,6 +12,10 @@ import { createInteractionStore } from "@/canvas/konva/interaction";
 import { createPointerController, type HitInfo } from "@/canvas/konva/pointer";
 import { emptySketch, findElement } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
+import type { ActionContext } from "@/canvas/actions";
+import { startAutosave } from "@/canvas/autosave";
+import type { SketchPersistence } from "@/canvas/persistence";
+import { useShortcuts } from "@/components/editor/useShortcuts";
 
 function sketch(): SketchFile {
   return {
@@ -186,5 +193,116 @@ describe("tools", () => {
     ed().setTool({ kind: "pick-point" });
     down(1.97, 0.02);
     expect(ed().momentPoint).toEqual([2, 0]);
+  });
+});
+
+describe("touch", () => {
+  const touch = (id: number, x: number, y: number) =>
+    controller.down({ ...screenOf(x, y), button: 0, pointerType: "touch", pointerId: id, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, timeStamp: 0, preventDefault() {} } as unknown as PointerEvent);
+  const finger = (type: "pointermove" | "pointerup" | "pointercancel", id: number, x: number, y: number) =>
+    window.dispatchEvent(Object.assign(new MouseEvent(type, screenOf(x, y)), { pointerType: "touch", pointerId: id }));
+
+  it("a tap that places an element is forgotten when the finger lifts: the next finger drags, not pinches", () => {
+    ed().setTool({ kind: "place", element: "contact" });
+    touch(1, 5.02, 1.03);
+    finger("pointerup", 1, 5.02, 1.03);
+    expect(ed().sketch.supports.map((s) => s.id)).toEqual(["s1", "s2"]);
+    hit = { type: "element", id: "s1" };
+    touch(2, 1, 0);
+    expect(controller.mode).toBe("move");
+    finger("pointermove", 2, 1.6, 0);
+    finger("pointerup", 2, 1.6, 0);
+    expect(ed().view.scale).toBe(100);
+    expect(el("s1").at).toEqual([1.6, 0]);
+    expect(controller.mode).toBe("idle");
+  });
+
+  it("a tap with the moment-point tool and a polygon corner do not leave a finger behind", () => {
+    ed().setTool({ kind: "pick-point" });
+    touch(1, 2, 0);
+    finger("pointerup", 1, 2, 0);
+    ed().setTool({ kind: "body", shape: "polygon", points: [] });
+    touch(2, 0, 3);
+    finger("pointercancel", 2, 0, 3);
+    expect(ed().tool).toMatchObject({ kind: "body", points: [[0, 3]] });
+    // then one finger on empty paper: a rubber band, not a pinch
+    ed().setTool({ kind: "select" });
+    touch(3, -0.5, -0.5);
+    expect(controller.mode).toBe("band");
+    finger("pointerup", 3, -0.5, -0.5);
+    expect(controller.mode).toBe("idle");
+    expect(ed().view.scale).toBe(100);
+  });
+
+  it("Escape forgets the fingers counted so far", () => {
+    ed().setTool({ kind: "place", element: "contact" });
+    touch(1, 5.02, 1.03);
+    expect(controller.cancel()).toBe(false);
+    hit = { type: "element", id: "s1" };
+    touch(2, 1, 0);
+    expect(controller.mode).toBe("move");
+  });
+});
+
+describe("Escape", () => {
+  function Keys({ interaction }: { interaction: ReturnType<typeof createInteractionStore> }) {
+    const getCtx = useCallback((): ActionContext => ({ stores, controller, ui: {} as ActionContext["ui"] }), []);
+    useShortcuts(getCtx, interaction);
+    return null;
+  }
+
+  it("pressed on the keyboard rolls back a drag in progress, recording nothing", () => {
+    render(<Keys interaction={createInteractionStore()} />);
+    hit = { type: "element", id: "s1" };
+    down(1, 0);
+    pointer("pointermove", 1.52, 0);
+    expect(el("s1").at).toEqual([1.6, 0]);
+    fireEvent.keyDown(window, { key: "Escape" });
+    expect(el("s1").at).toEqual([1, 0]);
+    expect(ed().gesture).toBeNull();
+    expect(controller.mode).toBe("idle");
+    pointer("pointerup", 1.7, 0);
+    expect(ed().past).toHaveLength(0);
+    // the element stays selected: Escape spent itself on the drag
+    expect(ed().selection).toEqual(["s1"]);
+  });
+
+  it("during a rubber band gives back the selection from before it", () => {
+    render(<Keys interaction={createInteractionStore()} />);
+    ed().select(["p1", "b2"]);
+    down(-0.5, -0.5);
+    expect(ed().selection).toEqual([]);
+    pointer("pointermove", 2.5, 1.5);
+    fireEvent.keyDown(window, { key: "Escape" });
+    expect(ed().selection).toEqual(["p1", "b2"]);
+    pointer("pointerup", 2.5, 1.5);
+    expect(ed().selection).toEqual(["p1", "b2"]);
+  });
+});
+
+describe("autosave of a drag", () => {
+  it("saves the moved position once the drag ends, and nothing for a cancelled one", async () => {
+    vi.useFakeTimers();
+    const saved: SketchFile[] = [];
+    const persistence: SketchPersistence = { kind: "scratch", autosave: true, describe: () => "", load: async () => ({ ok: true, sketch: null }), save: async (s) => (saved.push(s), { ok: true, savedAt: "" }) };
+    const autosave = startAutosave(stores.editor, persistence);
+    try {
+      hit = { type: "element", id: "s1" };
+      down(1, 0);
+      pointer("pointermove", 1.7, 0.4);
+      controller.cancel();
+      pointer("pointerup", 1.7, 0.4);
+      await vi.advanceTimersByTimeAsync(1000);
+      expect(saved).toHaveLength(0);
+      down(1, 0);
+      for (const x of [1.2, 1.38, 1.52]) pointer("pointermove", x, 0);
+      pointer("pointerup", 1.52, 0);
+      await vi.advanceTimersByTimeAsync(1000);
+      expect(saved).toHaveLength(1);
+      expect((findElement(saved[0], "s1")!.el as { at: unknown }).at).toEqual([1.6, 0]);
+    } finally {
+      autosave.stop();
+      vi.useRealTimers();
+    }
   });
 });

@@ -3,6 +3,7 @@
 import { act, fireEvent, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
+import { ACTIONS, actionById, shortcutLabel } from "@/canvas/actions";
 import { exampleById } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
@@ -57,8 +58,9 @@ describe("editor", () => {
     expect(magnitude).toHaveAttribute("aria-invalid", "true");
     expect(within(form).getByText(/unknown name "span"/)).toBeInTheDocument();
     // the file keeps what was typed
-    await waitFor(() => expect((storedSketch(mem)!.loads[0] as { magnitude: unknown }).magnitude).toBe("3 * span"));
-  });
+    // (the autosave waits for a pause in the typing: allow for a busy machine)
+    await waitFor(() => expect((storedSketch(mem)!.loads[0] as { magnitude: unknown }).magnitude).toBe("3 * span"), { timeout: 3000 });
+  }, 15_000);
 
   it("refuses a blank required field at the field and changes nothing", async () => {
     const user = userEvent.setup();
@@ -114,12 +116,58 @@ describe("editor", () => {
     await user.click(outlineRow(/Pin s1/));
     fireEvent.keyDown(document.body, { key: "d", ctrlKey: true });
     await waitFor(() => expect(storedSketch(mem)!.supports.map((s) => s.id)).toEqual(["s1", "s2", "s3"]));
+    // the copy is selected, offset by two grid steps right and down (the grid follows the zoom,
+    // and the canvas may fit the view when it mounts)
+    const at = () => storedSketch(mem)!.supports[2].at as number[];
+    const g = at()[0] / 2;
+    expect(g).toBeGreaterThan(0);
+    expect(at()[1]).toBeCloseTo(-2 * g, 9);
     fireEvent.keyDown(document.body, { key: "ArrowRight" });
+    // one grid step to the right; the original stays where it was
+    await waitFor(() => expect(at()[0]).toBeCloseTo(3 * g, 9));
+    expect(at()[1]).toBeCloseTo(-2 * g, 9);
+    expect(storedSketch(mem)!.supports[0].at).toEqual([0, 0]);
+    // Shift: ten steps up
+    fireEvent.keyDown(document.body, { key: "ArrowUp", shiftKey: true });
+    await waitFor(() => expect(at()[1]).toBeCloseTo(8 * g, 9));
+    expect(at()[0]).toBeCloseTo(3 * g, 9);
+    fireEvent.keyDown(document.body, { key: "z", ctrlKey: true });
+    await waitFor(() => expect(at()[1]).toBeCloseTo(-2 * g, 9));
     fireEvent.keyDown(document.body, { key: "z", ctrlKey: true });
     fireEvent.keyDown(document.body, { key: "z", ctrlKey: true });
     await waitFor(() => expect(storedSketch(mem)!.supports).toHaveLength(2));
     fireEvent.keyDown(document.body, { key: "u" });
     expect(within(screen.getByTestId("units")).getByRole("radio", { name: "US" })).toHaveAttribute("aria-checked", "true");
+    // each step waits for the autosave's pause
+  }, 15_000);
+
+  it("duplicates and deletes a single selected element with the mouse", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(beam());
+    await user.click(outlineRow(/Contact s2/));
+    const panel = within(screen.getByTestId("selection-actions"));
+    await user.click(panel.getByRole("button", { name: "Duplicate" }));
+    await waitFor(() => expect(storedSketch(mem)!.supports.map((s) => s.id)).toEqual(["s1", "s2", "s3"]));
+    // the copy is selected; Delete removes it and leaves the original
+    expect(outlineRow(/Contact s3/)).toHaveAttribute("aria-pressed", "true");
+    await user.click(within(screen.getByTestId("selection-actions")).getByRole("button", { name: "Delete" }));
+    await waitFor(() => expect(storedSketch(mem)!.supports.map((s) => s.id)).toEqual(["s1", "s2"]));
+    expect(screen.getByTestId("sketch-form")).toBeInTheDocument();
+  }, 15_000);
+
+  it("lists the File menu and the toolbar's shortcuts from the registered actions", async () => {
+    const user = userEvent.setup();
+    await renderEditor(beam());
+    await user.click(screen.getByTestId("menu-file"));
+    const items = screen.getAllByRole("menuitem").map((i) => i.textContent);
+    const listed = ACTIONS.filter((a) => a.group === "file" && a.menu);
+    expect(listed.map((a) => a.id)).toEqual(["file.new", "file.import", "file.exportJson", "file.exportSvg", "file.exportPng"]);
+    expect(items).toHaveLength(listed.length);
+    listed.forEach((a, i) => expect(items[i]).toContain(a.label));
+    expect(items[2]).toContain(shortcutLabel("Mod+E"));
+    await user.keyboard("{Escape}");
+    expect(screen.getByRole("button", { name: "Zoom out" })).toHaveAttribute("title", `Zoom out (${actionById("view.zoomOut").shortcuts![0]})`);
+    expect(screen.getByRole("button", { name: "Fit" })).toHaveAttribute("title", "Fit to view (F)");
   });
 
   it("opens an example from the menu, and undo returns to the sketch before", async () => {

@@ -190,4 +190,58 @@ describe("live analysis", () => {
     expect(posted).toHaveLength(2);
     expect(posted[1].sketch.title).toBe("d");
   });
+
+  function fakeWorker() {
+    const posted: Array<{ seq: number; sketch: SketchFile }> = [];
+    const fake = {
+      terminated: false,
+      postMessage: (m: { seq: number; text: string }) => posted.push({ seq: m.seq, sketch: JSON.parse(m.text) }),
+      terminate() {
+        this.terminated = true;
+      },
+      onmessage: null as null | ((e: MessageEvent) => void),
+      onerror: null as null | ((e: ErrorEvent) => void),
+      onmessageerror: null as null | (() => void),
+    };
+    return { fake, posted };
+  }
+
+  it("when the worker fails, solves on the main thread from then on and says so once", () => {
+    const { fake, posted } = fakeWorker();
+    const notes: string[] = [];
+    const loaded = { ...sketch(), loads: [{ id: "l1", body: "b1", kind: "force" as const, at: [2, 1] as [number, number], magnitude: "4 kN", angle: -90 }] };
+    const store = createEditorStore({ sketch: loaded });
+    const { store: analysis, stop } = connectAnalysis(store, workerRunner(fake as unknown as Worker, (fn) => fn(), (m) => notes.push(m)));
+    expect(posted).toHaveLength(1);
+    expect(analysis.getState().pending).toBe(true);
+    // the worker's script did not load
+    fake.onerror!({ message: "404 analysis.worker.js", preventDefault() {} } as unknown as ErrorEvent);
+    expect(fake.terminated).toBe(true);
+    expect(notes).toHaveLength(1);
+    expect(notes[0]).toMatch(/main thread.*404 analysis\.worker\.js/);
+    // the sketch it held is solved here: 100 kg at the centroid (2, 0.5) and 4 kN at x = 2 on a
+    // 4 m span, so the contact carries half of each (statics by hand, common practice)
+    const w = 100 * 9.80665;
+    expect(analysis.getState().pending).toBe(false);
+    expect(analysis.getState().shown!.reactions.s2.n).toBeCloseTo((w + 4000) / 2, 6);
+    // later changes follow the sketch without the worker
+    store.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "8 kN" })));
+    expect(posted).toHaveLength(1);
+    expect(analysis.getState().stale).toBe(false);
+    expect(analysis.getState().shown!.reactions.s2.n).toBeCloseTo((w + 8000) / 2, 6);
+    fake.onerror?.({ message: "again", preventDefault() {} } as unknown as ErrorEvent);
+    expect(notes).toHaveLength(1);
+    stop();
+  });
+
+  it("when the worker answers with an error, solves that sketch on the main thread", () => {
+    const { fake, posted } = fakeWorker();
+    const notes: string[] = [];
+    const run = workerRunner(fake as unknown as Worker, (fn) => fn(), (m) => notes.push(m));
+    const got: boolean[] = [];
+    run(sketch(), (core) => got.push(core.ok));
+    fake.onmessage!({ data: { seq: posted[0].seq, error: "out of memory" } } as MessageEvent);
+    expect(got).toEqual([true]);
+    expect(notes[0]).toMatch(/out of memory/);
+  });
 });

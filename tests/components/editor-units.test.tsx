@@ -1,0 +1,142 @@
+// Values on screen in the editor and the results: a plain number shows its value with the
+// worker's answer too; input errors are named in words; the stale hand check is faded; the
+// SI / US switch reaches the hand check's point P, the centroid and the drawing scale.
+import { act, render, screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { describe, expect, it } from "vitest";
+import { createEditorStore } from "@/canvas/store";
+import { EditorProvider } from "@/canvas/context";
+import { analyseCore, expressionFields } from "@/canvas/analysis/core";
+import type { Runner } from "@/canvas/analysis/store";
+import { setField, type Command } from "@/canvas/commands";
+import { emptySketch } from "@/canvas/model/elements";
+import { newBody } from "@/canvas/model/factory";
+import type { SketchFile } from "@/solver/schema";
+import { ElementForm } from "@/components/editor/ElementForm";
+import { drawingScale } from "@/components/editor/Toolbar";
+import { errorPlace } from "@/components/results/errorPlace";
+import { parseLength } from "@/components/results/HandCheckView";
+import { mountResultsDock, renderEditor } from "./editor-helpers";
+
+const c = <A,>(cmd: Command<A>) => cmd as unknown as Command<unknown>;
+
+function beam(): SketchFile {
+  return {
+    ...emptySketch("Beam on a pin and a contact"),
+    bodies: [newBody("b1", [[0, 0], [4, 0], [4, 0.5], [0, 0.5]], "Beam")],
+    supports: [
+      { id: "s1", body: "b1", kind: "pin", at: [0, 0], label: "left pin" },
+      { id: "s2", body: "b1", kind: "contact", at: [4, 0], angle: 90, label: "right pad" },
+    ],
+    loads: [{ id: "l1", body: "b1", kind: "force", at: [2, 0.5], magnitude: "10 kN", angle: -90, label: "F1" }],
+  };
+}
+
+/** What the browser's worker answers: only the fields that are expressions (or errors). */
+const workerLike: Runner = (sketch, done) => {
+  const core = analyseCore(sketch);
+  done({ ...core, fields: expressionFields(sketch, core.fields) });
+};
+
+describe("numeric fields with the worker's answer", () => {
+  it("shows a plain number's value in the field's unit, in SI and in US", async () => {
+    const user = userEvent.setup();
+    const editor = createEditorStore({ sketch: beam() });
+    render(
+      <EditorProvider editor={editor} runner={workerLike}>
+        <ElementForm id="l1" />
+      </EditorProvider>,
+    );
+    const form = screen.getByTestId("element-form");
+    const magnitude = within(form).getByLabelText("Magnitude");
+    await user.clear(magnitude);
+    await user.type(magnitude, "12");
+    // the worker left the plain numbers out: the field shows its own number, in newtons
+    expect(within(form).getByText("= 12 N")).toBeInTheDocument();
+    expect(within(form).getByText("= −90°")).toBeInTheDocument();
+    await user.clear(magnitude);
+    await user.type(magnitude, "4448.22");
+    act(() => editor.getState().setUnits("US"));
+    // 1 lbf = 4.448 222 N (NIST SP 811)
+    expect(within(form).getByText("= 1000 lbf")).toBeInTheDocument();
+  });
+});
+
+describe("input errors in words", () => {
+  it("names the element by its label and the field in words, not the file path", async () => {
+    const editor = mountResultsDock(beam());
+    act(() => void editor.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "3 * span" }))));
+    const stale = screen.getByTestId("stale");
+    expect(stale).toHaveTextContent('the input has an error — Point force F1 — magnitude: unknown name "span"');
+    expect(stale).not.toHaveTextContent("loads[0]");
+  });
+
+  it("words each kind of path", () => {
+    const s = beam();
+    expect(errorPlace(s, "supports[1].at[0]")).toBe("Contact right pad — position x");
+    expect(errorPlace(s, "supports[1].angle")).toBe("Contact right pad — pushes toward");
+    expect(errorPlace(s, "bodies[0].outline[2][1]")).toBe("Body Beam — outline corner 3 y");
+    expect(errorPlace({ ...s, loads: [{ ...s.loads[0], label: undefined }] } as SketchFile, "loads[0].magnitude")).toBe("Point force l1 — magnitude");
+    expect(errorPlace(s, "parameters.span")).toBe("Parameter span");
+    expect(errorPlace(s, "cases[0].id")).toBe("cases[0].id");
+  });
+
+  it("fades the hand check while the result shown is an earlier one", async () => {
+    const user = userEvent.setup();
+    const editor = mountResultsDock(beam());
+    await user.click(screen.getByRole("tab", { name: "Hand check" }));
+    expect(screen.getByTestId("hand-sums")).not.toHaveClass("opacity-60");
+    act(() => void editor.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "3 * span" }))));
+    expect(screen.getByTestId("hand-sums")).toHaveClass("opacity-60");
+    act(() => editor.getState().undo());
+    expect(screen.getByTestId("hand-sums")).not.toHaveClass("opacity-60");
+  });
+});
+
+describe("US units reach every length on screen", () => {
+  it("shows and takes the hand check's point P in feet; a typed unit is kept", async () => {
+    const user = userEvent.setup();
+    const editor = mountResultsDock(beam());
+    await user.click(screen.getByRole("tab", { name: "Hand check" }));
+    act(() => {
+      editor.getState().setUnits("US");
+      // 1 ft = 0.3048 m exactly (NIST SP 811)
+      editor.getState().setMomentPoint([1.2192, 0]);
+    });
+    expect(screen.getByTestId("moment-x")).toHaveValue("4");
+    expect(screen.getByText("Px (ft)")).toBeInTheDocument();
+    const x = screen.getByTestId("moment-x");
+    await user.clear(x);
+    await user.type(x, "3{Enter}");
+    expect(editor.getState().momentPoint![0]).toBeCloseTo(0.9144, 12);
+    await user.clear(x);
+    await user.type(x, "2 m{Enter}");
+    expect(editor.getState().momentPoint![0]).toBeCloseTo(2, 12);
+    expect(screen.getByTestId("moment-x")).toHaveValue("6.5617");
+    await user.clear(x);
+    await user.type(x, "2 kg{Enter}");
+    expect(screen.getByText(/Px: .*needs a length/)).toBeInTheDocument();
+    expect(editor.getState().momentPoint![0]).toBeCloseTo(2, 12);
+  });
+
+  it("parses a plain number in the length unit on screen", () => {
+    expect(parseLength("10", "US")).toBeCloseTo(3.048, 12);
+    expect(parseLength("10", "SI")).toBe(10);
+    expect(parseLength("6 in", "SI")).toBeCloseTo(0.1524, 12);
+    expect(() => parseLength("2 * span", "SI")).toThrow(/span/);
+  });
+
+  it("gives the centroid and the drawing scale in feet", async () => {
+    const user = userEvent.setup();
+    await renderEditor(beam());
+    await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Body b1/ }));
+    expect(screen.getByTestId("element-form")).toHaveTextContent("At the outline's centroid (2.000, 0.250) m.");
+    await user.click(within(screen.getByTestId("units")).getByRole("radio", { name: "US" }));
+    // (2, 0.25) m / 0.3048 m/ft = (6.562, 0.820) ft
+    expect(screen.getByTestId("element-form")).toHaveTextContent("At the outline's centroid (6.562, 0.820) ft.");
+    expect(screen.getByLabelText("Drawing scale")).toHaveTextContent(/ px\/ft$/);
+    expect(drawingScale(100, "US")).toBe("30.5 px/ft");
+    expect(drawingScale(1000, "US")).toBe("305 px/ft");
+    expect(drawingScale(120, "SI")).toBe("120 px/m");
+  });
+});
