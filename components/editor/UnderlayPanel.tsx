@@ -159,6 +159,7 @@ export function UnderlayPanel() {
           </div>
           <p className="text-[11.5px] leading-snug text-ink-faint">{u.locked ? "Locked: unlock to drag, move or turn it." : "Drag the drawing on the canvas to move it (where no element is)."}</p>
           <div className="flex flex-wrap gap-1.5">
+            {/* replacing or removing keeps the uploaded file (undo may bring it back); lib/uploads/sweep.ts clears unsaved ones later */}
             {canUpload ? <Upload label="Replace…" disabled={false} /> : null}
             <button type="button" className={BUTTON} disabled={readOnly} onClick={() => apply(removeUnderlay({}))} data-testid="underlay-remove">
               Remove

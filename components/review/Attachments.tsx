@@ -1,7 +1,7 @@
 "use client";
 // Files on comments: thumbnails that open the whole file (served only to readers of the
 // workspace), a picker for the files of a comment being written, and sending them once the
-// comment exists. A PDF opens whole; its thumbnail is its first page.
+// comment exists. A PDF is downloaded whole; its thumbnail is its first page.
 import { useRef } from "react";
 import { ACCEPT_UPLOADS, MAX_UPLOAD_BYTES, uploadFile } from "@/components/uploads/uploadFile";
 import { apiFetch } from "@/lib/api-client";
@@ -12,7 +12,7 @@ export function sizeWords(bytes: number): string {
   return bytes >= 1048576 ? `${(bytes / 1048576).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
 }
 
-/** The thumbnails of a comment's files; each opens the whole file in a new tab. */
+/** The thumbnails of a comment's files: an image opens whole in a new tab, a PDF downloads. */
 export function AttachmentList({ files, onRemove }: { files: Attachment[]; onRemove?: (a: Attachment) => void }) {
   if (!files.length) return null;
   return (
@@ -21,10 +21,10 @@ export function AttachmentList({ files, onRemove }: { files: Attachment[]; onRem
         <li key={a.id} className="group relative w-[104px]" data-testid="attachment">
           <a
             href={a.url}
-            target="_blank"
-            rel="noopener"
+            // the server hands a PDF over as a download (never shown in the app's origin)
+            {...(a.storedType === "application/pdf" ? { download: a.name || true } : { target: "_blank", rel: "noopener" })}
             className="block overflow-hidden rounded border border-rule bg-paper-card hover:border-ink/40 focus-visible:outline-2 focus-visible:outline-accent"
-            title={`Open ${a.name || "the file"} (${a.storedType === "application/pdf" ? "PDF" : `${a.width} × ${a.height} px`}, ${sizeWords(a.size)})`}
+            title={a.storedType === "application/pdf" ? `Download ${a.name || "the file"} (PDF, ${sizeWords(a.size)})` : `Open ${a.name || "the file"} (${a.width} × ${a.height} px, ${sizeWords(a.size)})`}
           >
             {/* eslint-disable-next-line @next/next/no-img-element -- a private file behind a role check, not a static asset */}
             <img src={a.thumbnailUrl} alt={a.name ? `Thumbnail of ${a.name}` : "Thumbnail of an attached file"} className="h-[72px] w-full object-contain bg-white" loading="lazy" />

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, inArray, isNull, or, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, isNull, lt, or, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { comment, sketchVersion, upload, type Upload } from "@/db/schema";
 import type { DbOrTx } from "./tx";
@@ -68,6 +68,36 @@ export async function uploadUsedByVersions(uploadId: string, tx: DbOrTx = db): P
   return Boolean(row);
 }
 
+/** No saved version, of any sketch, draws this upload (a condition on the upload row). */
+const drawnByNoVersion = sql`not exists (select 1 from ${sketchVersion} where ${sketchVersion.document} -> 'underlay' ->> 'upload' = ${upload.id}::text)`;
+
+/**
+ * Underlays uploaded before `before` that no saved version draws, oldest first, locked for the
+ * rest of the transaction (rows another transaction holds are skipped, not waited for).
+ */
+export async function lockUnusedUnderlays(tx: DbOrTx, opts: { before: Date; workspaceId?: string; limit: number }): Promise<string[]> {
+  const rows = await tx
+    .select({ id: upload.id })
+    .from(upload)
+    .where(and(eq(upload.purpose, "underlay"), lt(upload.createdAt, opts.before), opts.workspaceId ? eq(upload.workspaceId, opts.workspaceId) : undefined, drawnByNoVersion))
+    .orderBy(asc(upload.createdAt))
+    .limit(opts.limit)
+    .for("update", { skipLocked: true });
+  return rows.map((r) => r.id);
+}
+
+/**
+ * Delete locked underlay rows that still no saved version draws. A statement of its own, so it
+ * sees versions committed while the rows were being locked.
+ */
+export async function deleteUnusedUnderlays(tx: DbOrTx, ids: string[]) {
+  if (!ids.length) return [];
+  return tx
+    .delete(upload)
+    .where(and(inArray(upload.id, ids), eq(upload.purpose, "underlay"), drawnByNoVersion))
+    .returning({ id: upload.id, workspaceId: upload.workspaceId, storageKey: upload.storageKey, thumbnailKey: upload.thumbnailKey });
+}
+
 export async function deleteUploadRow(tx: DbOrTx, uploadId: string) {
   const [row] = await tx.delete(upload).where(eq(upload.id, uploadId)).returning({ storageKey: upload.storageKey, thumbnailKey: upload.thumbnailKey });
   return row ?? null;
@@ -108,11 +138,16 @@ export async function sketchUploadKeys(sketchId: string, tx: DbOrTx = db): Promi
   return rows.flatMap((r) => [r.a, r.b]);
 }
 
-/** An underlay upload in a workspace (a saved document may only draw files of its own workspace). */
-export async function underlayInWorkspace(uploadId: string, workspaceId: string, tx: DbOrTx = db) {
-  const [row] = await tx
+/**
+ * An underlay upload in a workspace (a saved document may only draw files of its own workspace).
+ * `lock` holds the row until the transaction ends, so the sweep of unused underlays cannot
+ * delete it while a version that draws it is being written.
+ */
+export async function underlayInWorkspace(uploadId: string, workspaceId: string, tx: DbOrTx = db, lock = false) {
+  const q = tx
     .select()
     .from(upload)
     .where(and(eq(upload.id, uploadId), eq(upload.workspaceId, workspaceId), eq(upload.purpose, "underlay")));
+  const [row] = lock ? await q.for("share") : await q;
   return row ?? null;
 }

@@ -110,14 +110,35 @@ export async function addComment(sketchId: string, number: number, actor: Actor,
   return { id: made.row.id, createdAt: made.row.createdAt, mentions: made.mentions };
 }
 
-/** Edit, delete, resolve or reopen: the comment must exist for a member, and its version must not be approved. */
+/**
+ * Edit, delete, resolve or reopen: the comment must exist for a member whose role (read now,
+ * under a lock) may still comment, and its version must not be approved. A member demoted to
+ * viewer keeps what they wrote but no longer changes it.
+ */
 async function writable(commentId: string, actor: Actor, tx: DbOrTx): Promise<CommentAccess> {
   const c = await getCommentAccess(commentId, actor.id, tx, true);
   const role = c ? await lockRole(tx, c.workspaceId, actor.id) : null;
   if (!c || !role) throw new AppError("not_found", NO_COMMENT);
+  if (!can(role, "comment.create")) throw new AppError("forbidden", "Your role reads comments but does not write them, your own included.");
   if (c.deletedAt) throw new AppError("gone", "This comment was deleted.");
   if (c.reviewState === "approved") throw new AppError("review_state", LOCKED);
   return { ...c, role };
+}
+
+/** An edit or a deletion in the sketch's activity and the audit log (a deletion keeps no text). */
+function recordChange(tx: DbOrTx, action: "comment.edit" | "comment.delete", c: CommentAccess, actor: Actor, body?: string) {
+  return recordAudit(
+    {
+      action,
+      actorId: actor.id,
+      actorEmail: actor.email,
+      workspaceId: c.workspaceId,
+      targetType: "sketch",
+      targetId: c.sketchId,
+      detail: { sketchId: c.sketchId, title: c.sketchTitle, number: c.number, commentId: c.id, reply: c.parentId !== null, ...(body !== undefined ? { note: body.slice(0, 140) } : {}) },
+    },
+    tx,
+  );
 }
 
 export async function editComment(commentId: string, actor: Actor, body: string) {
@@ -126,6 +147,7 @@ export async function editComment(commentId: string, actor: Actor, body: string)
     if (c.authorId !== actor.id) throw new AppError("forbidden", "Only its author may edit a comment.");
     const mentions = mentionedIds(body, await workspaceContacts(c.workspaceId, tx));
     await updateCommentBody(tx, { commentId, authorId: actor.id, body, mentions });
+    await recordChange(tx, "comment.edit", c, actor, body);
     return { c, added: mentions.filter((id) => !c.mentions.includes(id)) };
   });
   await mailMentions(out.added, actor, { workspaceId: out.c.workspaceId, sketchId: out.c.sketchId, sketchTitle: out.c.sketchTitle, number: out.c.number }, body);
@@ -138,6 +160,7 @@ export async function deleteComment(commentId: string, actor: Actor) {
     const c = await writable(commentId, actor, tx);
     if (c.authorId !== actor.id) throw new AppError("forbidden", "Only its author may delete a comment.");
     await softDeleteComment(tx, { commentId, authorId: actor.id });
+    await recordChange(tx, "comment.delete", c, actor);
     const keys = await commentAttachmentKeys(commentId, tx);
     await deleteCommentAttachments(tx, commentId);
     return { keys };

@@ -1,21 +1,15 @@
 import "server-only";
 // Checks and cleans an uploaded file before anything is stored: the type is sniffed from the
 // bytes (never the name or the client's header), images are capped in size, turned upright and
-// re-encoded without their metadata (EXIF, GPS), and a PDF's first page is rendered to PNG with
-// Debian's poppler-utils (sharp reads no PDF). Each refusal is an AppError with a clear message.
-import { execFile } from "node:child_process";
+// re-encoded without their metadata (EXIF, GPS), and a PDF's first page is measured, then drawn
+// to PNG (pdf.ts) and cleaned like an image. Each refusal is an AppError with a clear message.
 import { createHash } from "node:crypto";
-import { mkdtemp, readFile, rm, writeFile } from "node:fs/promises";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
-import { promisify } from "node:util";
 import { fileTypeFromBuffer } from "file-type";
 import sharp, { type Metadata, type OutputInfo } from "sharp";
 import { AppError } from "../errors";
+import { firstPageOfPdf } from "./pdf";
 
-const run = promisify(execFile);
-
-export const UPLOAD_LIMITS = {
+export const UPLOAD_LIMITS: UploadLimits = {
   /** bytes */
   maxBytes: 10 * 1024 * 1024,
   /** pixels on the longer side */
@@ -24,6 +18,19 @@ export const UPLOAD_LIMITS = {
   maxPixels: 60e6,
   /** resolution of a PDF's first page, dots per inch */
   pdfDpi: 150,
+  /** the lowest resolution a large page is drawn at to fit the caps; a larger page is refused */
+  pdfMinDpi: 72,
+  /** pixels on the shorter side of a drawn page, below which it shows nothing to trace */
+  pdfMinSide: 8,
+};
+
+export type UploadLimits = {
+  maxBytes: number;
+  maxSide: number;
+  maxPixels: number;
+  pdfDpi: number;
+  pdfMinDpi: number;
+  pdfMinSide: number;
 };
 
 const ACCEPTED = {
@@ -61,7 +68,7 @@ export async function processUpload(input: Buffer): Promise<ProcessedUpload> {
       sniffed ? `This file is ${sniffed.mime}, whatever its name says; upload a PNG, JPEG or WebP image, or a PDF.` : "This file is not a PNG, JPEG or WebP image or a PDF (whatever its name says).",
     );
   }
-  const image = mime === "application/pdf" ? await firstPageOfPdf(input) : input;
+  const image = mime === "application/pdf" ? await firstPageOfPdf(input, UPLOAD_LIMITS) : input;
   return cleanImage(image, mime);
 }
 
@@ -99,31 +106,4 @@ async function cleanImage(input: Buffer, sourceMime: AcceptedMime): Promise<Proc
     checksum: createHash("sha256").update(bytes).digest("hex"),
     thumbnail,
   };
-}
-
-/** The first page of a PDF as PNG (pdfinfo counts the pages, pdftoppm renders page 1). */
-async function firstPageOfPdf(pdf: Buffer): Promise<Buffer> {
-  const dir = await mkdtemp(join(tmpdir(), "cp-pdf-"));
-  try {
-    const src = join(dir, "in.pdf");
-    await writeFile(src, pdf);
-    let pages = 0;
-    try {
-      const { stdout } = await run("pdfinfo", [src], { timeout: 20000 });
-      pages = Number(/^Pages:\s+(\d+)/m.exec(stdout)?.[1] ?? 0);
-    } catch (err) {
-      // poppler refuses a document whose page tree is empty ("Invalid page count 0")
-      if (/page count 0|last page \(0\)/.test(String((err as { stderr?: string }).stderr ?? ""))) pages = 0;
-      else throw new AppError("validation_failed", "The PDF could not be read: it is damaged, encrypted or not really a PDF.");
-    }
-    if (pages < 1) throw new AppError("validation_failed", "The PDF has no pages.");
-    try {
-      await run("pdftoppm", ["-f", "1", "-l", "1", "-r", String(UPLOAD_LIMITS.pdfDpi), "-png", "-singlefile", src, join(dir, "page")], { timeout: 60000 });
-    } catch {
-      throw new AppError("validation_failed", "The PDF's first page could not be drawn.");
-    }
-    return await readFile(join(dir, "page.png"));
-  } finally {
-    await rm(dir, { recursive: true, force: true });
-  }
 }

@@ -1,7 +1,8 @@
 import "server-only";
 // Serving an uploaded file or its thumbnail to a reader of its workspace, streamed from object
 // storage. Everyone else gets the same 404 as for a file that does not exist. Answers are
-// private to the browser (never a shared cache) and carry the stored type, never a sniffed one.
+// private to the browser (never a shared cache) and carry the stored type, never a sniffed one;
+// images are shown inline, PDFs downloaded.
 import { GetObjectCommand } from "@aws-sdk/client-s3";
 import { getUploadForReader } from "@/db/queries/uploads";
 import { storageSettings } from "../env";
@@ -27,8 +28,11 @@ export async function serveUpload(req: Request, uploadId: string, userId: string
     ETag: etag,
     "X-Content-Type-Options": "nosniff",
   };
-  // an image is shown, never run (a PDF keeps the browser's own viewer, which such a policy would block)
-  if (which === "thumbnail" || u.storedType !== "application/pdf") headers["Content-Security-Policy"] = "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'";
+  // An image is shown, never run. A PDF is handed over as a download: shown inline it would run
+  // in the app's origin in whatever viewer the browser has (scripts and forms included), and the
+  // sandbox stops it running anything should a browser open it anyway.
+  const pdf = which === "file" && u.storedType === "application/pdf";
+  headers["Content-Security-Policy"] = pdf ? "sandbox; default-src 'none'" : "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'";
   if (req.headers.get("if-none-match") === etag) return new Response(null, { status: 304, headers });
   const key = which === "thumbnail" ? u.thumbnailKey : u.storageKey;
   let body: ReadableStream;
@@ -54,7 +58,7 @@ export async function serveUpload(req: Request, uploadId: string, userId: string
       ...headers,
       "Content-Type": which === "thumbnail" ? "image/png" : u.storedType,
       ...(length !== undefined ? { "Content-Length": String(length) } : {}),
-      "Content-Disposition": disposition("inline", name),
+      "Content-Disposition": disposition(pdf ? "attachment" : "inline", name),
     },
   });
 }

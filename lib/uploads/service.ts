@@ -16,7 +16,9 @@ import { can, type Permission } from "../roles";
 import { requireSketchRole } from "../sketches";
 import { newStorageKey, putObject } from "../storage";
 import { deleteObjectsQuietly } from "./objects";
+import { withoutDocumentMetadata } from "./pdf";
 import { processUpload } from "./process";
+import { sweepUnusedUnderlays } from "./sweep";
 import type { UploadBody } from "./request";
 
 type Actor = { id: string; email: string };
@@ -25,6 +27,7 @@ type Actor = { id: string; email: string };
 export const MAX_ATTACHMENTS = 8;
 
 const NO_COMMENT = "No such comment, or you are not a member of its workspace.";
+const TOO_MANY = `A comment carries at most ${MAX_ATTACHMENTS} files.`;
 const LOCKED = "This version is approved: its comments take no new attachments.";
 
 /** An upload as the API answers it: its metadata and where to fetch it (never a storage key). */
@@ -39,12 +42,13 @@ type Stored = { storageKey: string; thumbnailKey: string; values: Omit<Parameter
 
 /**
  * Clean the file and put its objects. An attachment sent as a PDF keeps the PDF itself (a vendor
- * sheet has more than one page); everything else keeps the cleaned image.
+ * sheet has more than one page), rewritten without its document metadata where poppler can
+ * (pdf.ts says what goes and what stays); everything else keeps the cleaned image.
  */
 async function storeObjects(workspaceId: string, body: UploadBody, keepPdf: boolean): Promise<Stored> {
   const p = await processUpload(body.bytes);
   const pdf = keepPdf && p.sourceMime === "application/pdf";
-  const file = pdf ? { bytes: body.bytes, mime: "application/pdf", ext: "pdf" } : { bytes: p.bytes, mime: p.mime, ext: p.ext };
+  const file = pdf ? { bytes: (await withoutDocumentMetadata(body.bytes)) ?? body.bytes, mime: "application/pdf", ext: "pdf" } : { bytes: p.bytes, mime: p.mime, ext: p.ext };
   const storageKey = newStorageKey(workspaceId, file.ext);
   const thumbnailKey = newStorageKey(workspaceId, "png");
   try {
@@ -110,6 +114,8 @@ export async function createUnderlay(sketchId: string, actor: Actor, read: () =>
     );
     return made;
   });
+  // each new underlay clears the workspace's old ones that were never saved (sweep.ts says why then)
+  await sweepUnusedUnderlays({ workspaceId: access.workspaceId }).catch((err) => console.error("[uploads] the sweep of unused underlays failed", err));
   return uploadView(row);
 }
 
@@ -126,13 +132,15 @@ async function attachable(commentId: string, actor: Actor, tx: DbOrTx = db, lock
 /** Attach an image or a PDF to your own comment (not on an approved version). */
 export async function attachToComment(commentId: string, actor: Actor, read: () => Promise<UploadBody>): Promise<UploadView> {
   const first = await attachable(commentId, actor);
+  // refused before anything is read or stored; the transaction counts again for a race
+  if ((await countAttachments(db, commentId)) >= MAX_ATTACHMENTS) throw new AppError("conflict", TOO_MANY);
   const body = await read();
   const stored = await storeObjects(first.workspaceId, body, true);
   const row = await commitOrClean(stored, async (tx) => {
     // the version row stays locked until commit: no approval slips in between
     const c = await attachable(commentId, actor, tx, true);
     await lockedRole(tx, c.workspaceId, actor.id, "upload.attach", NO_COMMENT);
-    if ((await countAttachments(tx, commentId)) >= MAX_ATTACHMENTS) throw new AppError("conflict", `A comment carries at most ${MAX_ATTACHMENTS} files.`);
+    if ((await countAttachments(tx, commentId)) >= MAX_ATTACHMENTS) throw new AppError("conflict", TOO_MANY);
     const made = await insertUpload(tx, { ...stored.values, id: randomUUID(), workspaceId: c.workspaceId, uploadedBy: actor.id, originalName: body.name, purpose: "attachment", commentId });
     await recordAudit(
       {

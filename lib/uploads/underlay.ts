@@ -10,11 +10,14 @@ import { AppError } from "../errors";
 import { getObject, newStorageKey, putObject } from "../storage";
 import { deleteObjectsQuietly } from "./objects";
 
-/** 400 when the document draws an underlay that is not an underlay upload of this workspace. */
+/**
+ * 400 when the document draws an underlay that is not an underlay upload of this workspace.
+ * Inside a transaction the upload's row stays locked until it ends (see sweep.ts).
+ */
 export async function assertUnderlayIn(workspaceId: string, file: SketchFile, tx?: DbOrTx): Promise<void> {
   const id = file.underlay?.upload;
   if (!id) return;
-  const known = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id) ? await underlayInWorkspace(id, workspaceId, tx) : null;
+  const known = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id) ? await underlayInWorkspace(id, workspaceId, tx, tx !== undefined) : null;
   if (!known) {
     throw new AppError("validation_failed", "The sketch's underlay is not a file uploaded to this workspace: upload it again from the editor's Underlay section.", {
       fields: [{ path: "document.underlay.upload", message: "No underlay with this id in this workspace." }],

@@ -1,6 +1,12 @@
 // Files attached to comments: images and PDFs (a PDF is kept whole, with a thumbnail of its first
 // page), listed with their comment for readers of the workspace, attached only by the comment's
 // author, never on an approved version, and gone with their comment.
+import { execFile } from "node:child_process";
+import { mkdtemp, rm, writeFile } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { promisify } from "node:util";
+import { ListObjectsV2Command } from "@aws-sdk/client-s3";
 import { eq } from "drizzle-orm";
 import sharp from "sharp";
 import { beforeAll, afterAll, describe, expect, it } from "vitest";
@@ -13,10 +19,10 @@ import * as uploadRoute from "@/app/api/uploads/[uploadId]/route";
 import * as thumbnailRoute from "@/app/api/uploads/[uploadId]/thumbnail/route";
 import { db } from "@/db";
 import { upload } from "@/db/schema";
-import { appOrigin } from "@/lib/env";
-import { objectExists } from "@/lib/storage";
+import { appOrigin, storageSettings } from "@/lib/env";
+import { getObject, objectExists, s3 } from "@/lib/storage";
 import { MAX_ATTACHMENTS } from "@/lib/uploads/service";
-import { pdf, png, textPretendingToBePng } from "../fixtures/uploads";
+import { PDF_AUTHOR, PDF_XMP_CREATOR, pdf, png, textPretendingToBePng } from "../fixtures/uploads";
 import { call, ensureMailFake, makeAccount, makeWorkspace, type Json, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 
@@ -61,7 +67,24 @@ async function attach(commentId: string, who: Person, file: Buffer, name: string
 
 async function get(handler: Handler, uploadId: string, who: Person) {
   const res = await handler(new Request(`${appOrigin()}/api/uploads/${uploadId}`, { headers: { cookie: who.cookie } }), { params: Promise.resolve({ uploadId }) });
-  return { status: res.status, type: res.headers.get("content-type"), bytes: Buffer.from(await res.arrayBuffer()) };
+  return { status: res.status, type: res.headers.get("content-type"), headers: res.headers, bytes: Buffer.from(await res.arrayBuffer()) };
+}
+
+/** The page count poppler reads from a PDF. */
+async function pdfPages(bytes: Buffer): Promise<number> {
+  const dir = await mkdtemp(join(tmpdir(), "cp-test-"));
+  try {
+    await writeFile(join(dir, "f.pdf"), bytes);
+    const { stdout } = await promisify(execFile)("pdfinfo", [join(dir, "f.pdf")]);
+    return Number(/^Pages:\s+(\d+)/m.exec(stdout)?.[1]);
+  } finally {
+    await rm(dir, { recursive: true, force: true });
+  }
+}
+
+async function bucketKeys(workspaceId: string): Promise<string[]> {
+  const out = await s3().send(new ListObjectsV2Command({ Bucket: storageSettings().bucket, Prefix: `w/${workspaceId}/` }));
+  return (out.Contents ?? []).map((o) => o.Key!).sort();
 }
 
 describe("attachments on comments", () => {
@@ -72,7 +95,7 @@ describe("attachments on comments", () => {
     expect([photo.status, sheet.status]).toEqual([201, 201]);
     expect(photo.body.upload).toMatchObject({ purpose: "attachment", name: "foot.png", storedType: "image/png", width: 640, height: 480 });
     // the PDF is kept whole (all its pages); its thumbnail is the first page
-    expect(sheet.body.upload).toMatchObject({ purpose: "attachment", name: "pump datasheet.pdf", sourceType: "application/pdf", storedType: "application/pdf", size: pdf(2).length });
+    expect(sheet.body.upload).toMatchObject({ purpose: "attachment", name: "pump datasheet.pdf", sourceType: "application/pdf", storedType: "application/pdf" });
 
     const list = await call(commentsRoute.GET, { params: { id: sketchId, number: "1" }, cookie: vera.cookie });
     const files = list.body.threads[0].comments[0].attachments as Json[];
@@ -82,13 +105,32 @@ describe("attachments on comments", () => {
     const full = await get(uploadRoute.GET as Handler, sheet.body.upload.id, vera);
     expect(full.status).toBe(200);
     expect(full.type).toBe("application/pdf");
-    expect(full.bytes.equals(pdf(2))).toBe(true);
+    expect(full.bytes.length).toBe(sheet.body.upload.size);
+    expect(await pdfPages(full.bytes)).toBe(2);
+    // a PDF is handed over as a download, sandboxed, never sniffed into something else
+    expect(full.headers.get("content-disposition")).toBe(`attachment; filename="pump datasheet.pdf"; filename*=UTF-8''pump%20datasheet.pdf`);
+    expect(full.headers.get("content-security-policy")).toMatch(/^sandbox;/);
+    expect(full.headers.get("x-content-type-options")).toBe("nosniff");
+    // an image is still shown inline
+    expect((await get(uploadRoute.GET as Handler, photo.body.upload.id, vera)).headers.get("content-disposition")).toMatch(/^inline;/);
     const thumb = await get(thumbnailRoute.GET as Handler, sheet.body.upload.id, vera);
     expect(thumb.type).toBe("image/png");
     expect((await sharp(thumb.bytes).metadata()).width).toBe(320);
     // someone outside the workspace gets 404 for both
     expect((await get(uploadRoute.GET as Handler, photo.body.upload.id, stranger)).status).toBe(404);
     expect((await get(thumbnailRoute.GET as Handler, sheet.body.upload.id, stranger)).status).toBe(404);
+  });
+
+  it("a PDF is stored without its author, title and XMP", async () => {
+    const { commentId } = await sketchWithComment();
+    const sent = pdf(2, { meta: true });
+    const res = await attach(commentId, chen, sent, "sheet.pdf", "application/pdf");
+    expect(res.status).toBe(201);
+    const [row] = await db.select().from(upload).where(eq(upload.id, res.body.upload.id));
+    const stored = await getObject(row.storageKey);
+    for (const s of ["/Author", PDF_AUTHOR, PDF_XMP_CREATOR, "/Metadata", "Pump data sheet"]) expect(stored.includes(Buffer.from(s))).toBe(false);
+    expect(await pdfPages(stored)).toBe(2);
+    expect(row.size).toBe(stored.length);
   });
 
   it("only the comment's author attaches; viewers and strangers are refused", async () => {
@@ -106,10 +148,17 @@ describe("attachments on comments", () => {
     expect(text.status).toBe(415);
     const file = await png(10, 10);
     for (let i = 0; i < MAX_ATTACHMENTS; i++) expect((await attach(commentId, chen, file, `p${i}.png`, "image/png")).status).toBe(201);
+    const before = await bucketKeys(ws);
     const over = await attach(commentId, chen, file, "one-more.png", "image/png");
     expect(over.status).toBe(409);
     expect(over.body.error.message).toBe(`A comment carries at most ${MAX_ATTACHMENTS} files.`);
     expect(await db.select().from(upload).where(eq(upload.commentId, commentId))).toHaveLength(MAX_ATTACHMENTS);
+    // refused before anything was stored: the bucket holds what it held
+    expect(await bucketKeys(ws)).toEqual(before);
+    // the count is checked before the file is even read: not-an-image gets the same 409, not a 415
+    expect((await attach(commentId, chen, textPretendingToBePng(), "photo.png", "image/png")).status).toBe(409);
+    // two objects (the file and its thumbnail) for each row of the workspace, and no more
+    expect(before).toHaveLength(2 * (await db.select().from(upload).where(eq(upload.workspaceId, ws))).length);
   });
 
   it("an approved version takes no new attachments", async () => {

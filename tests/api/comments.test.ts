@@ -1,7 +1,8 @@
 // Comments on a version: threads pinned to an element, a point or the whole version; replies;
-// resolve and reopen; editing and deleting your own; @mentions mailed through the SMTP fake
-// unless the member turned mail off; an approved version takes no new comments.
-import { eq } from "drizzle-orm";
+// resolve and reopen; editing and deleting your own while your role may comment, each in the
+// sketch's activity; @mentions mailed through the SMTP fake unless the member turned mail off;
+// an approved version takes no new comments.
+import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as commentRoute from "@/app/api/comments/[commentId]/route";
 import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
@@ -9,7 +10,7 @@ import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff
 import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
-import { devMail, user } from "@/db/schema";
+import { devMail, membership, user } from "@/db/schema";
 import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 
@@ -111,6 +112,39 @@ describe("threads", () => {
     const lone = (await post(id, chen, { body: "Never mind" })).body.comment.id;
     await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: lone }, cookie: chen.cookie });
     expect((await list(id, chen)).body.threads).toHaveLength(1);
+  });
+
+  it("a member demoted to viewer keeps their comments but no longer edits, deletes or resolves them", async () => {
+    const id = await newSketch();
+    const demoted = await makeAccount("demoted", { name: "Dee Moted" });
+    await db.insert(membership).values({ workspaceId: ws, userId: demoted.id, role: "checker" });
+    const mine = (await post(id, demoted, { body: "Check the anchor bolts" })).body.comment.id;
+    await db.update(membership).set({ role: "viewer" }).where(and(eq(membership.workspaceId, ws), eq(membership.userId, demoted.id)));
+    const refused = [await patch(mine, demoted, { body: "rewritten as a viewer" }), await patch(mine, demoted, { resolved: true }), await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: mine }, cookie: demoted.cookie })];
+    expect(refused.map((r) => r.status)).toEqual([403, 403, 403]);
+    expect(refused[0].body.error.message).toBe("Your role reads comments but does not write them, your own included.");
+    const c = (await list(id, chen)).body.threads[0];
+    expect(c.comments[0]).toMatchObject({ body: "Check the anchor bolts", deleted: false, editedAt: null });
+    expect(c.resolvedAt).toBeNull();
+    // promoted back, the author may change it again
+    await db.update(membership).set({ role: "editor" }).where(and(eq(membership.workspaceId, ws), eq(membership.userId, demoted.id)));
+    expect((await patch(mine, demoted, { body: "Check the anchor bolts (M16)" })).status).toBe(200);
+  });
+
+  it("records edits and deletions in the sketch's activity, without the deleted text", async () => {
+    const id = await newSketch();
+    const root = (await post(id, chen, { body: "Friction taken as 0.3" })).body.comment.id;
+    const reply = (await post(id, eddie, { body: "From the site survey", parentId: root })).body.comment.id;
+    expect((await patch(root, chen, { body: "Friction taken as 0.4" })).status).toBe(200);
+    expect((await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: reply }, cookie: eddie.cookie })).status).toBe(200);
+    const feed = await call(activityRoute.GET, { params: { id }, cookie: vera.cookie });
+    const [deleted, edited] = feed.body.events;
+    expect(deleted).toMatchObject({ action: "comment.delete", actorName: "Eddie Drafter", detail: { number: 1, commentId: reply, reply: true } });
+    expect(deleted.detail.note).toBeUndefined();
+    expect(edited).toMatchObject({ action: "comment.edit", actorName: "Chen Checkwell", detail: { number: 1, commentId: root, reply: false, note: "Friction taken as 0.4" } });
+    // a refused change records nothing
+    expect((await patch(root, eddie, { body: "not mine" })).status).toBe(403);
+    expect((await call(activityRoute.GET, { params: { id }, cookie: vera.cookie })).body.events).toHaveLength(feed.body.events.length);
   });
 
   it("refuses bad pins, replies to replies, empty text and outsiders", async () => {

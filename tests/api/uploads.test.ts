@@ -1,6 +1,6 @@
 // Uploads through the API against the test database and the local S3 fake: an underlay for a
 // sketch, files served only to readers of their workspace, every refusal a clear 4xx that leaves
-// no row and no object behind, metadata stripped from what is stored.
+// no row and no object behind, metadata stripped from what is stored, unsaved underlays swept.
 import { ListObjectsV2Command } from "@aws-sdk/client-s3";
 import { and, eq } from "drizzle-orm";
 import sharp from "sharp";
@@ -16,6 +16,7 @@ import { auditEvent, upload } from "@/db/schema";
 import { appOrigin, storageSettings } from "@/lib/env";
 import { getObject, objectExists, s3 } from "@/lib/storage";
 import { UPLOAD_LIMITS } from "@/lib/uploads/process";
+import { sweepUnusedUnderlays } from "@/lib/uploads/sweep";
 import { markedDrawing, pdf, photoWithExif, png, textPretendingToBePng } from "../fixtures/uploads";
 import { call, makeAccount, makeWorkspace, type Json, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
@@ -201,12 +202,18 @@ describe("refusals leave nothing behind", () => {
     ["a PDF with no pages", async () => pdf(0), { name: "empty.pdf", type: "application/pdf" }, 400, "validation_failed", /^The PDF has no pages\.$/],
     ["an image too large in pixels", () => png(12001, 8), { name: "strip.png" }, 400, "validation_failed", /12001 × 8 pixels; the limit is 12000 pixels a side/],
     ["an empty file", async () => Buffer.alloc(0), { raw: true }, 400, "validation_failed", /empty/],
+    // a few hundred bytes whose page poppler would draw as 30000 px square (or, failing, as one blank pixel)
+    ["a tiny PDF with a 5 m page", async () => pdf(1, { page: "/MediaBox [0 0 14400 14400]" }), { name: "huge.pdf", type: "application/pdf" }, 400, "validation_failed", /^The PDF's first page is 5080 × 5080 mm, too large to draw/],
   ];
   for (const [what, make, opts, status, code, message] of cases) {
     it(`${what}: ${status} ${code}`, async () => {
       const bay = await makeWorkspace(`Refusal bay ${what}`, [[eddie, "editor"]]);
       const sketchId = await newSketch(bay);
-      const res = await underlay(sketchId, eddie, await make(), opts);
+      const file = await make();
+      const t0 = Date.now();
+      const res = await underlay(sketchId, eddie, file, opts);
+      // each refusal comes before any costly work (a drawn page, a stored object)
+      expect(Date.now() - t0).toBeLessThan(3000);
       expect(res.status).toBe(status);
       expect(res.body.error.code).toBe(code);
       expect(res.body.error.message).toMatch(message);
@@ -281,6 +288,34 @@ describe("the underlay and the sketch's versions", () => {
     // the other workspace's viewer reads the copy, never the original
     expect((await fetchFile(uploadRoute.GET as Handler, copyId, stranger)).status).toBe(200);
     expect((await fetchFile(uploadRoute.GET as Handler, up.id, stranger)).status).toBe(404);
+  });
+
+  it("underlays never saved in a version are swept once old; saved ones and recent ones stay", async () => {
+    const bay = await makeWorkspace("Sweep bay", [[eddie, "editor"]]);
+    const sketchId = await newSketch(bay);
+    const removed = (await underlay(sketchId, eddie, await png(30, 30))).body.upload;
+    const kept = (await underlay(sketchId, eddie, await png(32, 32))).body.upload;
+    const recent = (await underlay(sketchId, eddie, await png(34, 34))).body.upload;
+    const document = { ...fixture("pump-skid-discharge"), version: 3, underlay: { upload: kept.id, width: 32, height: 32, origin: [0, 0], metresPerPixel: 0.01 } };
+    expect((await call(versionsRoute.POST, { method: "POST", params: { id: sketchId }, cookie: eddie.cookie, body: { baseVersion: 1, document } })).status).toBe(201);
+    // the first two were uploaded eight days ago (past the seven days an unsaved underlay is kept)
+    const eightDaysAgo = new Date(Date.now() - 8 * 24 * 3600_000);
+    for (const id of [removed.id, kept.id]) await db.update(upload).set({ createdAt: eightDaysAgo }).where(eq(upload.id, id));
+    const [removedRow] = await db.select().from(upload).where(eq(upload.id, removed.id));
+    expect(await bucketKeys(bay)).toHaveLength(6);
+
+    // the next upload to the workspace sweeps
+    const next = (await underlay(sketchId, eddie, await png(36, 36))).body.upload;
+    expect((await rowsOf(bay)).map((r) => r.id).sort()).toEqual([kept.id, recent.id, next.id].sort());
+    const keys = await bucketKeys(bay);
+    expect(keys).toHaveLength(6);
+    expect(keys).not.toContain(removedRow.storageKey);
+    expect(keys).not.toContain(removedRow.thumbnailKey);
+    expect((await fetchFile(uploadRoute.GET as Handler, removed.id, eddie)).status).toBe(404);
+    // the version still draws its file
+    expect((await fetchFile(uploadRoute.GET as Handler, kept.id, eddie)).status).toBe(200);
+    // a sweep run by hand finds nothing more to take
+    expect(await sweepUnusedUnderlays({ workspaceId: bay })).toEqual([]);
   });
 
   it("deleting the sketch deletes its files from the bucket", async () => {

@@ -1,4 +1,4 @@
-// Files on comments, as the review page shows them: thumbnails that open the whole file, a
+// Files on comments, as the review page shows them: thumbnails that open or download the file, a
 // picker that marks what is over the cap, and a remove button only where one may remove.
 import { fireEvent, render, screen, within } from "@testing-library/react";
 import { describe, expect, it, vi } from "vitest";
@@ -10,14 +10,19 @@ const photo: Attachment = { id: "a1", name: "foot.jpg", storedType: "image/jpeg"
 const sheet: Attachment = { id: "a2", name: "pump datasheet.pdf", storedType: "application/pdf", sourceType: "application/pdf", size: 3_400_000, width: 1275, height: 1650, url: "/api/uploads/a2", thumbnailUrl: "/api/uploads/a2/thumbnail" };
 
 describe("attachments on comments", () => {
-  it("shows each file as a thumbnail that opens the whole file in a new tab", () => {
+  it("shows each file as a thumbnail: an image opens in a new tab, a PDF downloads", () => {
     render(<AttachmentList files={[photo, sheet]} />);
     const items = screen.getAllByTestId("attachment");
     expect(items).toHaveLength(2);
+    const photoLink = within(items[0]).getByRole("link");
+    expect(photoLink).toHaveAttribute("target", "_blank");
+    expect(photoLink).not.toHaveAttribute("download");
+    expect(photoLink).toHaveAttribute("title", "Open foot.jpg (1600 × 1200 px, 234 KB)");
     const link = within(items[1]).getByRole("link");
     expect(link).toHaveAttribute("href", "/api/uploads/a2");
-    expect(link).toHaveAttribute("target", "_blank");
-    expect(link).toHaveAttribute("title", "Open pump datasheet.pdf (PDF, 3.2 MB)");
+    expect(link).not.toHaveAttribute("target");
+    expect(link).toHaveAttribute("download", "pump datasheet.pdf");
+    expect(link).toHaveAttribute("title", "Download pump datasheet.pdf (PDF, 3.2 MB)");
     expect(within(items[1]).getByRole("img")).toHaveAttribute("src", "/api/uploads/a2/thumbnail");
     expect(within(items[0]).getByRole("img")).toHaveAttribute("alt", "Thumbnail of foot.jpg");
     expect(items[1]).toHaveTextContent("PDF · pump datasheet.pdf");

@@ -1,0 +1,14 @@
+// How an edited or deleted comment reads in a sketch's activity feed.
+import { describe, expect, it } from "vitest";
+import { activitySentence } from "@/components/review/activitySentence";
+
+const event = (action: string, detail: Record<string, unknown>) => ({ id: 1, at: "2031-05-04T10:00:00Z", action, actorName: "Chen Checkwell", detail });
+
+describe("comment changes in the activity feed", () => {
+  it("an edit quotes the new text; a deletion quotes nothing", () => {
+    expect(activitySentence(event("comment.edit", { number: 3, reply: false, note: "Friction taken as **0.4**" }))).toBe("edited a comment on v3: “Friction taken as 0.4”");
+    expect(activitySentence(event("comment.edit", { number: 3, reply: true, note: "" }))).toBe("edited a reply on v3");
+    expect(activitySentence(event("comment.delete", { number: 2, reply: true }))).toBe("deleted a reply on v2");
+    expect(activitySentence(event("comment.delete", { number: 2, reply: false }))).toBe("deleted a comment on v2");
+  });
+});
