@@ -1,13 +1,15 @@
 import "server-only";
 import { betterAuth } from "better-auth";
+import { APIError } from "better-auth/api";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { db } from "@/db";
 import { ensurePersonalWorkspace } from "@/db/queries/workspaces";
 import { account, rateLimit, session, user, verification } from "@/db/schema";
 import { recordAudit } from "./audit";
-import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp } from "./env";
+import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp, trustedProxies } from "./env";
 import { sendMailInBackground } from "./mail";
 import { passwordResetMail, verificationMail } from "./mail-templates";
+import { personNameSchema } from "./schemas";
 
 /** Paths (after /api/auth) that take a password or send mail: these get the AUTH_RATE_LIMIT_* budget. */
 export const CREDENTIAL_PATHS = [
@@ -26,6 +28,20 @@ export function withVerifyCallback(url: string): string {
   const callback = u.searchParams.get("callbackURL");
   if (!callback || callback === "/") u.searchParams.set("callbackURL", "/verify?confirmed=1");
   return u.toString();
+}
+
+/** Sign-up, sign-in and the rest carry a few short fields; nothing legitimate comes near this. */
+export const MAX_AUTH_BODY_BYTES = 64 * 1024;
+
+/**
+ * The name as stored, or a 400 naming the field: better-auth takes any string, so sign-up and
+ * profile updates are held to the same rule as the invitation sign-up form.
+ */
+export function checkedName(name: unknown): string {
+  const parsed = personNameSchema.safeParse(name);
+  if (parsed.success) return parsed.data;
+  const message = parsed.error.issues[0]?.code === "invalid_type" ? "The name is text." : parsed.error.issues[0]?.message ?? "The name is not valid.";
+  throw new APIError("BAD_REQUEST", { code: "INVALID_NAME", field: "name", message: `name: ${message}` });
 }
 
 export type AuthOverrides = { rateLimit?: { max: number; window: number } };
@@ -77,12 +93,23 @@ export function createAuth(overrides: AuthOverrides = {}) {
       useSecureCookies: isHttpsApp(),
       cookiePrefix: "counterpoise",
       defaultCookieAttributes: { httpOnly: true, sameSite: "lax", path: "/" },
+      // The auth route hands over X-Forwarded-For already cut down to the client address
+      // (lib/client-address.ts); the same proxies are named here for calls that pass raw headers.
+      ipAddress: { ipAddressHeaders: ["x-forwarded-for"], trustedProxies: trustedProxies() },
     },
     databaseHooks: {
       user: {
         create: {
+          async before(u) {
+            return { data: { ...u, name: checkedName(u.name) } };
+          },
           async after(u) {
             await ensurePersonalWorkspace({ id: u.id, name: u.name });
+          },
+        },
+        update: {
+          async before(u) {
+            return u.name === undefined ? undefined : { data: { ...u, name: checkedName(u.name) } };
           },
         },
       },

@@ -75,10 +75,18 @@ export function mailFrom(): string {
   return process.env.MAIL_FROM || "Counterpoise <no-reply@counterpoise.local>";
 }
 
+/** A host name or address that only this machine reaches (an optional :port is ignored). */
+export function isLoopbackHost(host: string): boolean {
+  let name = host.trim().toLowerCase();
+  const bracketed = /^\[([^\]]*)\]/.exec(name); // [::1] or [::1]:3000
+  if (bracketed) name = bracketed[1];
+  else if (name.split(":").length === 2) name = name.split(":")[0]; // name:port (a bare IPv6 address has more colons)
+  return name === "localhost" || name.endsWith(".localhost") || name === "::1" || /^127(\.\d{1,3}){3}$/.test(name);
+}
+
 function isLoopbackUrl(url: string): boolean {
   try {
-    const host = new URL(url).hostname;
-    return host === "127.0.0.1" || host === "localhost" || host === "[::1]" || host.endsWith(".localhost");
+    return isLoopbackHost(new URL(url).hostname);
   } catch {
     return false;
   }
@@ -86,11 +94,29 @@ function isLoopbackUrl(url: string): boolean {
 
 /**
  * The local mailbox page lists every mail the fake received, reset links included, so it is
- * only served when no real SMTP is configured and the app runs on loopback (or DEV_MAILBOX=1).
+ * only served when no real SMTP is configured, the app runs on loopback (APP_URL, the address it
+ * listens on, and, when given, the Host the request came to), or DEV_MAILBOX=1 says otherwise.
+ * APP_URL alone is not enough: `HOST=0.0.0.0 npm start` keeps a loopback APP_URL while the whole
+ * network can reach the app.
  */
-export function mailboxEnabled(): boolean {
+export function mailboxEnabled(requestHost?: string | null): boolean {
   if (process.env.SMTP_HOST) return false;
-  return isLoopbackUrl(appUrl()) || process.env.DEV_MAILBOX === "1";
+  if (process.env.DEV_MAILBOX === "1") return true;
+  const bindHost = process.env.HOST;
+  if (bindHost && !isLoopbackHost(bindHost)) return false;
+  if (requestHost !== undefined && !(requestHost && isLoopbackHost(requestHost))) return false;
+  return isLoopbackUrl(appUrl());
+}
+
+/**
+ * The reverse proxies whose X-Forwarded-For entries are believed (TRUSTED_PROXIES: addresses or
+ * CIDR ranges, comma-separated). Empty by default: then only the last hop counts.
+ */
+export function trustedProxies(): string[] {
+  return (process.env.TRUSTED_PROXIES ?? "")
+    .split(",")
+    .map((s) => s.trim())
+    .filter(Boolean);
 }
 
 export type StorageSettings = {

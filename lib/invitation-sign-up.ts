@@ -1,5 +1,6 @@
 import "server-only";
 import { getAuth } from "./auth";
+import { withClientAddress } from "./client-address";
 import { AppError } from "./errors";
 import { accountExists, acceptInvitation, invitationStateError, lookUpInvitation } from "./invitations";
 
@@ -40,6 +41,6 @@ export async function signUpFromInvitation(
   }
 
   const joined = await acceptInvitation(token, { id: userId, email });
-  const signedIn = await auth.api.signInEmail({ body: { email, password: input.password }, headers: reqHeaders, returnHeaders: true });
+  const signedIn = await auth.api.signInEmail({ body: { email, password: input.password }, headers: withClientAddress(reqHeaders), returnHeaders: true });
   return { workspaceId: joined.workspaceId, setCookies: signedIn.headers.getSetCookie() };
 }

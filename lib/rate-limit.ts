@@ -39,7 +39,5 @@ export function createRateLimiter(name: string) {
   };
 }
 
-/** The client address as the reverse proxy reports it (first X-Forwarded-For entry), or "local". */
-export function clientAddress(req: Request): string {
-  return req.headers.get("x-forwarded-for")?.split(",")[0]?.trim() || req.headers.get("x-real-ip") || "local";
-}
+// the address a budget is counted against (X-Forwarded-For read as TRUSTED_PROXIES says)
+export { clientAddress } from "./client-address";

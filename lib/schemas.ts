@@ -30,6 +30,12 @@ export const inviteInput = z.object({ email: emailSchema, role: roleSchema });
 export const changeRoleInput = z.object({ role: roleSchema });
 export const invitationSignUpInput = z.object({ name: personNameSchema, password: passwordSchema });
 
+const uuidSchema = z.uuid();
+/** A well-formed id of a workspace, sketch or other uuid-keyed row: anything else names nothing (and must not reach PostgreSQL). */
+export function isUuid(id: string): boolean {
+  return uuidSchema.safeParse(id).success;
+}
+
 export const workspaceParams = z.object({ id: z.uuid() });
 export const memberParams = z.object({ id: z.uuid(), userId: z.string().min(1).max(100) });
 export const invitationParams = z.object({ id: z.uuid(), invitationId: z.uuid() });

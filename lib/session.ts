@@ -5,6 +5,7 @@ import { cache } from "react";
 import { getRole } from "@/db/queries/workspaces";
 import { getAuth, type AuthSession } from "./auth";
 import { can, type Permission, type Role } from "./roles";
+import { isUuid } from "./schemas";
 
 /** The session behind a request's cookies, or null. */
 export async function sessionFrom(reqHeaders: Headers): Promise<AuthSession | null> {
@@ -37,7 +38,7 @@ export async function requirePageRole(
   permission?: Permission,
 ): Promise<{ session: AuthSession; role: Role; allowed: boolean }> {
   const session = await requirePageSession(next);
-  const role = /^[0-9a-f-]{36}$/i.test(workspaceId) ? await getRole(workspaceId, session.user.id) : null;
+  const role = isUuid(workspaceId) ? await getRole(workspaceId, session.user.id) : null;
   if (!role) notFound();
   return { session, role, allowed: permission ? can(role, permission) : true };
 }

@@ -2,6 +2,7 @@ import "server-only";
 import { notFound } from "next/navigation";
 import type { SketchData } from "@/components/sketches/SketchScreen";
 import { AppError } from "./errors";
+import { isUuid } from "./schemas";
 import { requirePageRole } from "./session";
 import { readSketch } from "./sketches";
 
@@ -12,7 +13,7 @@ import { readSketch } from "./sketches";
  */
 export async function loadSketchPage(workspaceId: string, sketchId: string, path: string) {
   const { session, role } = await requirePageRole(workspaceId, path);
-  if (!/^[0-9a-f-]{36}$/i.test(sketchId)) notFound();
+  if (!isUuid(sketchId)) notFound();
   const data = await readSketch(sketchId, session.user.id).catch((err: unknown) => {
     if (err instanceof AppError && err.status < 500) notFound();
     throw err;

@@ -32,10 +32,17 @@ export const versionMessageSchema = z
   .trim()
   .max(500, "Keep the message under 500 characters.");
 
-export const versionNumberSchema = z.number({ error: "A version number is a whole number." }).int("A version number is a whole number.").min(1, "Versions start at 1.");
+/** No sketch gets near this many versions; the bound keeps a huge number from reaching PostgreSQL's integer column. */
+export const MAX_VERSION_NUMBER = 1_000_000;
+
+export const versionNumberSchema = z
+  .number({ error: "A version number is a whole number." })
+  .int("A version number is a whole number.")
+  .min(1, "Versions start at 1.")
+  .max(MAX_VERSION_NUMBER, `There are at most ${MAX_VERSION_NUMBER} versions.`);
 
 export const sketchParams = z.object({ id: z.uuid() });
-export const versionParams = z.object({ id: z.uuid(), number: z.coerce.number().int().min(1).max(1_000_000) });
+export const versionParams = z.object({ id: z.uuid(), number: z.coerce.number().int().min(1).max(MAX_VERSION_NUMBER) });
 
 export const SKETCH_SORTS = ["updated", "title", "status", "created"] as const;
 export type SketchSort = (typeof SKETCH_SORTS)[number];

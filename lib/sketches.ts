@@ -1,6 +1,8 @@
 import "server-only";
 import { db } from "@/db";
 import { deleteSketch, getSketchAccess, getSketchForMember, lockRole, updateSketch } from "@/db/queries/sketches";
+import type { DbOrTx } from "@/db/queries/tx";
+import { getRole } from "@/db/queries/workspaces";
 import { getVersion, insertSketchWithFirstVersion, saveNextVersion, type NewVersion, type VersionListItem } from "@/db/queries/versions";
 import { recordAudit } from "./audit";
 import { AppError } from "./errors";
@@ -24,6 +26,17 @@ export async function requireSketchRole(sketchId: string, userId: string, permis
   if (!access || !access.role) throw new AppError("not_found", NO_SKETCH);
   if (!can(access.role, permission)) throw new AppError("forbidden");
   return access as typeof access & { role: Role };
+}
+
+/**
+ * Why a write whose WHERE clause matched no row found nothing, asked again once it has: the
+ * sketch is gone (deleted since the request began) or the caller left the workspace → 404; the
+ * role no longer allows it → 403.
+ */
+export async function accessLostError(sketchId: string, userId: string, permission: Permission, tx: DbOrTx = db): Promise<AppError> {
+  const access = await getSketchAccess(sketchId, userId, tx);
+  if (!access || !access.role) return new AppError("not_found", NO_SKETCH);
+  return can(access.role, permission) ? new AppError("conflict") : new AppError("forbidden");
 }
 
 /** The sketch as GET /api/sketches/:id answers it (also read by the sketch page): the sketch and its latest version's summary. */
@@ -102,12 +115,14 @@ function isUniqueViolation(err: unknown): boolean {
 /** Save the next version on top of `baseVersion`; 409 with the latest version when someone saved since. */
 export async function saveVersion(sketchId: string, actor: Actor, input: { baseVersion: number; message?: string; document: ParsedSketch }) {
   const access = await requireSketchRole(sketchId, actor.id, "version.save");
-  await assertUnderlayIn(access.workspaceId, input.document.file);
   const content = versionContent(input.document, input.message);
   try {
     return await db.transaction(async (tx) => {
+      // inside the transaction: the underlay row stays locked until the version that draws it
+      // is stored, so the sweep of unused underlays cannot remove it in between
+      await assertUnderlayIn(access.workspaceId, input.document.file, tx);
       const out = await saveNextVersion(tx, { ...content, sketchId, actorId: actor.id, baseVersion: input.baseVersion });
-      if (!out.ok && out.reason === "forbidden") throw new AppError("forbidden");
+      if (!out.ok && out.reason === "forbidden") throw await accessLostError(sketchId, actor.id, "version.save", tx);
       if (!out.ok) throw conflictError(out.latest, input.baseVersion);
       await recordAudit(
         {
@@ -133,21 +148,26 @@ export async function saveVersion(sketchId: string, actor: Actor, input: { baseV
   }
 }
 
-/** Rename, describe or re-tag a sketch. */
+/**
+ * Rename, describe or re-tag a sketch. The log says sketch.rename when the title changed and
+ * sketch.edit otherwise, with the fields that were sent in `changed`.
+ */
 export async function editSketch(sketchId: string, actor: Actor, input: { title?: string; description?: string; tags?: string[] }) {
   const before = await requireSketchRole(sketchId, actor.id, "sketch.edit");
   return db.transaction(async (tx) => {
     const row = await updateSketch({ sketchId, actorId: actor.id, ...input }, tx);
-    if (!row) throw new AppError("forbidden");
+    if (!row) throw await accessLostError(sketchId, actor.id, "sketch.edit", tx);
+    const renamed = input.title !== undefined && row.title !== before.title;
+    const changed = [...(renamed ? ["title"] : []), ...(input.description !== undefined ? ["description"] : []), ...(input.tags !== undefined ? ["tags"] : [])];
     await recordAudit(
       {
-        action: "sketch.rename",
+        action: renamed ? "sketch.rename" : "sketch.edit",
         actorId: actor.id,
         actorEmail: actor.email,
         workspaceId: row.workspaceId,
         targetType: "sketch",
         targetId: sketchId,
-        detail: { sketchId, title: row.title, from: before.title, ...(input.tags ? { tags: row.tags } : {}), ...(input.description !== undefined ? { described: true } : {}) },
+        detail: { sketchId, title: row.title, from: before.title, changed, ...(input.tags ? { tags: row.tags } : {}), ...(input.description !== undefined ? { described: true } : {}) },
       },
       tx,
     );
@@ -163,7 +183,7 @@ export async function removeSketch(sketchId: string, actor: Actor) {
     // its files' rows go with it (cascade); their objects are deleted once that commits
     keys = await keysOfSketch(sketchId, tx);
     const row = await deleteSketch({ sketchId, actorId: actor.id }, tx);
-    if (!row) throw new AppError("forbidden");
+    if (!row) throw await accessLostError(sketchId, actor.id, "sketch.delete", tx);
     await recordAudit(
       { action: "sketch.delete", actorId: actor.id, actorEmail: actor.email, workspaceId: row.workspaceId, targetType: "sketch", targetId: sketchId, detail: { sketchId, title: row.title, versions: row.latestVersion } },
       tx,
@@ -183,6 +203,9 @@ export async function forkSketch(sourceSketchId: string, actor: Actor, input: { 
   const number = input.version ?? source.latestVersion;
   const version = await getVersion(sourceSketchId, number, actor.id);
   if (!version) throw new AppError("not_found", `This sketch has no version ${number}.`, { fields: [{ path: "version", message: `There is no version ${number}.` }] });
+  // the role in the target is checked before any file is copied (and again, locked, in the transaction)
+  const refused = forkTargetError(await getRole(input.workspaceId, actor.id));
+  if (refused) throw refused;
   // a fork into another workspace takes its own copy of the underlay's file
   const copy = await copyUnderlayForFork(version.document, source.workspaceId, input.workspaceId);
   try {
@@ -191,6 +214,13 @@ export async function forkSketch(sourceSketchId: string, actor: Actor, input: { 
     await copy.discard();
     throw err;
   }
+}
+
+/** Why the caller may not fork into a workspace where they hold `role` (null: not a member), or null. */
+function forkTargetError(role: Role | null): AppError | null {
+  if (!role) return new AppError("not_found", "No such workspace, or you are not a member of it.", { fields: [{ path: "workspaceId", message: "You are not a member of that workspace." }] });
+  if (!can(role, "sketch.fork")) return new AppError("forbidden", "Your role in that workspace does not allow forking into it.");
+  return null;
 }
 
 function forkInTransaction(
@@ -203,9 +233,8 @@ function forkInTransaction(
   input: { workspaceId: string; title?: string },
 ) {
   return db.transaction(async (tx) => {
-    const role = await lockRole(tx, input.workspaceId, actor.id);
-    if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.", { fields: [{ path: "workspaceId", message: "You are not a member of that workspace." }] });
-    if (!can(role, "sketch.fork")) throw new AppError("forbidden", "Your role in that workspace does not allow forking into it.");
+    const refused = forkTargetError(await lockRole(tx, input.workspaceId, actor.id));
+    if (refused) throw refused;
     const title = input.title ?? `${source.title} (fork)`.slice(0, 120);
     const made = await insertSketchWithFirstVersion(tx, {
       document: copy.document,
@@ -227,7 +256,8 @@ function forkInTransaction(
         workspaceId: input.workspaceId,
         targetType: "sketch",
         targetId: made.sketch.id,
-        detail: { sketchId: made.sketch.id, title, fromSketchId: sourceSketchId, fromVersion: number },
+        // not the origin's id: members here may not be allowed to see that sketch
+        detail: { sketchId: made.sketch.id, title, fromVersion: number },
       },
       tx,
     );

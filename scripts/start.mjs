@@ -46,7 +46,7 @@ async function main() {
   await waitForHttp(`${env.APP_URL}/api/health`, { timeoutMs: 120000 });
   console.log(`
   Counterpoise is running at ${env.APP_URL}
-  Local mailbox (development mail): ${env.APP_URL}/dev/mailbox
+  ${/^(127\.|localhost$|::1$)/.test(host) ? `Local mailbox (development mail): ${env.APP_URL}/dev/mailbox` : "Local mailbox: off while the app listens beyond this machine (HOST)"}
 
   Demo sign-ins (local only, password "counterpoise-demo"):
     owner    olivia.owner@demo.counterpoise.local

@@ -9,6 +9,12 @@ const quote = (v: unknown, max = 90) => {
   return t ? `: “${t.length > max ? `${t.slice(0, max - 1)}…` : t}”` : "";
 };
 
+/** ["description", "tags"] → "description and tags" (what a sketch.edit changed). */
+export const fieldList = (v: unknown) => {
+  const f = Array.isArray(v) ? v.filter((x): x is string => typeof x === "string") : [];
+  return f.length ? (f.length === 1 ? f[0] : `${f.slice(0, -1).join(", ")} and ${f[f.length - 1]}`) : "details";
+};
+
 export function activitySentence(e: ActivityEvent): string {
   const d = e.detail ?? {};
   switch (e.action) {
@@ -18,11 +24,17 @@ export function activitySentence(e: ActivityEvent): string {
       return `saved ${n(d.number)}${quote(d.message)}`;
     case "sketch.rename":
       return s(d.from) && s(d.from) !== s(d.title) ? `renamed it from “${s(d.from)}” to “${s(d.title)}”` : "edited its details";
+    case "sketch.edit":
+      return `edited its ${fieldList(d.changed)}`;
     case "sketch.fork":
       if (!d.origin) return `started it as a fork of ${n(d.fromVersion)} of another sketch`;
       return d.elsewhere ? `forked ${n(d.fromVersion)} into another workspace` : `forked ${n(d.fromVersion)} as “${s(d.forkTitle)}”`;
     case "comment.create":
       return `${d.reply ? "replied on" : "commented on"} ${n(d.number)}${quote(d.note)}`;
+    case "comment.edit":
+      return `edited ${d.reply ? "a reply" : "a comment"} on ${n(d.number)}${quote(d.note)}`;
+    case "comment.delete":
+      return `deleted ${d.reply ? "a reply" : "a comment"} on ${n(d.number)}`;
     case "comment.resolve":
       return `resolved a thread on ${n(d.number)}`;
     case "comment.reopen":

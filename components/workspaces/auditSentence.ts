@@ -1,3 +1,4 @@
+import { fieldList } from "@/components/review/activitySentence";
 import { auditActionLabel } from "@/lib/audit-actions";
 
 export type AuditEntry = {
@@ -43,6 +44,8 @@ export function auditSentence(e: AuditEntry): string {
       return `made "${str(d.title)}" as a fork of another sketch's v${num(d.fromVersion)}`;
     case "sketch.rename":
       return str(d.from) && str(d.from) !== str(d.title) ? `renamed the sketch "${str(d.from)}" to "${str(d.title)}"` : `edited the details of "${str(d.title)}"`;
+    case "sketch.edit":
+      return `edited the ${fieldList(d.changed)} of "${str(d.title)}"`;
     case "sketch.delete":
       return `deleted the sketch "${str(d.title)}" with its ${num(d.versions)} version${d.versions === 1 ? "" : "s"}`;
     case "upload.create":

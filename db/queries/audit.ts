@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, inArray, isNull, lt, or, sql } from "drizzle-orm";
+import { and, desc, eq, exists, isNull, lt, lte, or, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { auditEvent, membership, user } from "@/db/schema";
@@ -20,9 +20,17 @@ export type AuditRow = {
   detail: Record<string, unknown>;
 };
 
+/** Details no reader of a log needs and some may not see: a fork's origin sketch, perhaps in another workspace. */
+export function withoutHiddenDetail<T extends { detail: Record<string, unknown> }>(row: T): T {
+  if (!("fromSketchId" in row.detail)) return row;
+  const { fromSketchId: _hidden, ...detail } = row.detail;
+  return { ...row, detail };
+}
+
 /**
  * A workspace's audit log, newest first: its own events plus the sign-ins of its current
- * members. Empty unless the viewer may read it. `before` pages back by event id.
+ * members made since they joined (what they did before is not this workspace's business).
+ * Empty unless the viewer may read it. `before` pages back by event id.
  */
 export async function listAuditEvents(
   workspaceId: string,
@@ -30,7 +38,12 @@ export async function listAuditEvents(
   opts: { before?: number; limit?: number } = {},
 ): Promise<{ events: AuditRow[]; nextBefore: number | null }> {
   const limit = Math.min(Math.max(opts.limit ?? 50, 1), 200);
-  const members = db.select({ id: membership.userId }).from(membership).where(eq(membership.workspaceId, workspaceId));
+  const memberAtTheTime = exists(
+    db
+      .select({ one: sql`1` })
+      .from(membership)
+      .where(and(eq(membership.workspaceId, workspaceId), eq(membership.userId, auditEvent.actorId), lte(membership.createdAt, auditEvent.at))),
+  );
   const rows = await db
     .select({
       id: auditEvent.id,
@@ -50,7 +63,7 @@ export async function listAuditEvents(
       and(
         or(
           eq(auditEvent.workspaceId, workspaceId),
-          and(isNull(auditEvent.workspaceId), eq(auditEvent.action, "auth.sign_in"), inArray(auditEvent.actorId, members)),
+          and(isNull(auditEvent.workspaceId), eq(auditEvent.action, "auth.sign_in"), memberAtTheTime),
         ),
         opts.before ? lt(auditEvent.id, opts.before) : undefined,
         actorMay(workspaceId, viewerId, "audit.read"),
@@ -59,6 +72,6 @@ export async function listAuditEvents(
     .orderBy(desc(auditEvent.id))
     .limit(limit + 1);
   const more = rows.length > limit;
-  const events = rows.slice(0, limit);
+  const events = rows.slice(0, limit).map(withoutHiddenDetail);
   return { events, nextBefore: more ? events[events.length - 1].id : null };
 }

@@ -2,10 +2,11 @@ import "server-only";
 import { and, asc, desc, eq, lt, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
-import { auditEvent, membership, signOff, sketch, sketchVersion, user, workspace } from "@/db/schema";
+import { auditEvent, comment, membership, signOff, sketch, sketchVersion, user, workspace } from "@/db/schema";
 import type { ReviewState, SignOffStep } from "@/lib/review/rules";
 import type { SketchFile } from "@/solver/schema";
 import type { DbOrTx } from "./tx";
+import { withoutHiddenDetail } from "./audit";
 import { actorMay } from "./workspaces";
 
 const actorUser = alias(user, "actor_user");
@@ -158,7 +159,15 @@ export async function listSketchActivity(
 ): Promise<{ events: ActivityRow[]; nextBefore: number | null }> {
   const limit = Math.min(Math.max(opts.limit ?? 30, 1), 100);
   const rows = await db
-    .select({ id: auditEvent.id, at: auditEvent.at, action: auditEvent.action, actorName: sql<string | null>`coalesce(${actorUser.name}, ${auditEvent.actorEmail})`, detail: auditEvent.detail })
+    .select({
+      id: auditEvent.id,
+      at: auditEvent.at,
+      action: auditEvent.action,
+      actorName: sql<string | null>`coalesce(${actorUser.name}, ${auditEvent.actorEmail})`,
+      detail: auditEvent.detail,
+      // the comment an event quotes has since been deleted: its words leave the feed with it
+      commentDeleted: sql<boolean>`exists (select 1 from ${comment} where ${comment.id}::text = ${auditEvent.detail} ->> 'commentId' and ${comment.deletedAt} is not null)`,
+    })
     .from(auditEvent)
     .leftJoin(actorUser, eq(actorUser.id, auditEvent.actorId))
     .where(
@@ -173,6 +182,11 @@ export async function listSketchActivity(
     .orderBy(desc(auditEvent.id))
     .limit(limit + 1);
   const more = rows.length > limit;
-  const events = rows.slice(0, limit);
+  const events = rows.slice(0, limit).map(({ commentDeleted, ...row }) => {
+    const shown = withoutHiddenDetail(row);
+    if (!commentDeleted || !("note" in shown.detail)) return shown;
+    const { note: _deleted, ...detail } = shown.detail;
+    return { ...shown, detail };
+  });
   return { events, nextBefore: more ? events[events.length - 1].id : null };
 }

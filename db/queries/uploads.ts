@@ -68,6 +68,23 @@ export async function uploadUsedByVersions(uploadId: string, tx: DbOrTx = db): P
   return Boolean(row);
 }
 
+/**
+ * Before a sketch is deleted: its underlays that a version of another sketch draws (a fork in the
+ * same workspace shares the file) move to the oldest such sketch, so they outlive this one.
+ * Returns their ids; their objects must not be deleted with the sketch.
+ */
+export async function rehomeSharedUnderlays(sketchId: string, tx: DbOrTx): Promise<string[]> {
+  const heir = sql`(select ${sketchVersion.sketchId} from ${sketchVersion}
+    where ${sketchVersion.document} -> 'underlay' ->> 'upload' = ${upload.id}::text and ${sketchVersion.sketchId} <> ${sketchId}
+    order by ${sketchVersion.createdAt} limit 1)`;
+  const rows = await tx
+    .update(upload)
+    .set({ sketchId: heir })
+    .where(and(eq(upload.sketchId, sketchId), eq(upload.purpose, "underlay"), sql`${heir} is not null`))
+    .returning({ id: upload.id });
+  return rows.map((r) => r.id);
+}
+
 /** No saved version, of any sketch, draws this upload (a condition on the upload row). */
 const drawnByNoVersion = sql`not exists (select 1 from ${sketchVersion} where ${sketchVersion.document} -> 'underlay' ->> 'upload' = ${upload.id}::text)`;
 

@@ -2,6 +2,7 @@
 import { z } from "zod";
 import { MAX_COMMENT_LENGTH } from "./comment-text";
 import { SIGN_OFF_STEPS } from "./rules";
+import { MAX_VERSION_NUMBER } from "../sketch-schemas";
 
 const coordinate = z.number({ error: "A coordinate is a number (m)." }).finite().min(-1e6).max(1e6);
 
@@ -33,9 +34,15 @@ export const signOffInput = z.strictObject({
 
 export const commentParams = z.object({ commentId: z.uuid() });
 
+const queryVersionNumber = z.coerce
+  .number({ error: "A version number is a whole number." })
+  .int("A version number is a whole number.")
+  .min(1, "Versions start at 1.")
+  .max(MAX_VERSION_NUMBER, `There are at most ${MAX_VERSION_NUMBER} versions.`);
+
 export const compareQuery = z.object({
-  from: z.coerce.number().int().min(1, "Versions start at 1."),
-  to: z.coerce.number().int().min(1, "Versions start at 1."),
+  from: queryVersionNumber,
+  to: queryVersionNumber,
   units: z.enum(["SI", "US"], { error: "units must be SI or US" }).default("SI"),
 });
 

@@ -3,7 +3,7 @@ import "server-only";
 // uploaded to its own workspace, and a fork into another workspace takes a copy of the file, so
 // its readers can see what they trace over (and nothing of the origin's workspace leaks).
 import { randomUUID } from "node:crypto";
-import { insertUpload, sketchUploadKeys, underlayInWorkspace } from "@/db/queries/uploads";
+import { insertUpload, rehomeSharedUnderlays, sketchUploadKeys, underlayInWorkspace } from "@/db/queries/uploads";
 import type { DbOrTx } from "@/db/queries/tx";
 import type { SketchFile } from "@/solver/schema";
 import { AppError } from "../errors";
@@ -66,5 +66,12 @@ export async function copyUnderlayForFork(document: SketchFile, fromWorkspaceId:
   };
 }
 
-/** The object keys of a sketch's files, read before the sketch is deleted (rows go with it). */
-export const keysOfSketch = sketchUploadKeys;
+/**
+ * The object keys of a sketch's files, read before the sketch is deleted (rows go with it). An
+ * underlay that another sketch's version draws (a fork in the same workspace) is handed to that
+ * sketch first, so its file stays.
+ */
+export async function keysOfSketch(sketchId: string, tx: DbOrTx): Promise<string[]> {
+  await rehomeSharedUnderlays(sketchId, tx);
+  return sketchUploadKeys(sketchId, tx);
+}

@@ -11,7 +11,7 @@ import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
 import { devMail, membership, user } from "@/db/schema";
-import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Person } from "./helpers";
+import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Person, type Json } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 
 let stopMail: () => Promise<void>;
@@ -142,6 +142,11 @@ describe("threads", () => {
     expect(deleted).toMatchObject({ action: "comment.delete", actorName: "Eddie Drafter", detail: { number: 1, commentId: reply, reply: true } });
     expect(deleted.detail.note).toBeUndefined();
     expect(edited).toMatchObject({ action: "comment.edit", actorName: "Chen Checkwell", detail: { number: 1, commentId: root, reply: false, note: "Friction taken as 0.4" } });
+    // the deleted reply's words leave the feed: its "replied on" entry no longer quotes it
+    const posted = feed.body.events.find((e: Json) => e.action === "comment.create" && e.detail.commentId === reply);
+    expect(posted).toMatchObject({ detail: { reply: true } });
+    expect(posted.detail.note).toBeUndefined();
+    expect(feed.body.events.find((e: Json) => e.action === "comment.create" && e.detail.commentId === root).detail.note).toBe("Friction taken as 0.3");
     // a refused change records nothing
     expect((await patch(root, eddie, { body: "not mine" })).status).toBe(403);
     expect((await call(activityRoute.GET, { params: { id }, cookie: vera.cookie })).body.events).toHaveLength(feed.body.events.length);

@@ -290,6 +290,35 @@ describe("the underlay and the sketch's versions", () => {
     expect((await fetchFile(uploadRoute.GET as Handler, up.id, stranger)).status).toBe(404);
   });
 
+  it("deleting a sketch keeps the underlay a fork in the same workspace still draws", async () => {
+    const orla = await makeAccount("up-orla");
+    const bay = await makeWorkspace("Fork bay", [
+      [eddie, "editor"],
+      [orla, "owner"],
+    ]);
+    const origin = await newSketch(bay);
+    const up = (await underlay(origin, eddie, await png(40, 40))).body.upload;
+    const document = { ...fixture("pump-skid-discharge"), version: 3, underlay: { upload: up.id, width: 40, height: 40, origin: [0, 0], metresPerPixel: 0.01 } };
+    expect((await call(versionsRoute.POST, { method: "POST", params: { id: origin }, cookie: eddie.cookie, body: { baseVersion: 1, document } })).status).toBe(201);
+    const fork = await call((await import("@/app/api/sketches/[id]/fork/route")).POST, { method: "POST", params: { id: origin }, cookie: eddie.cookie, body: { workspaceId: bay, version: 2 } });
+    expect(fork.status).toBe(201);
+    const forkId = fork.body.sketch.id;
+    // same workspace: the fork draws the same file
+    const v1 = await call((await import("@/app/api/sketches/[id]/versions/[number]/route")).GET, { params: { id: forkId, number: "1" }, cookie: eddie.cookie });
+    expect(v1.body.version.document.underlay.upload).toBe(up.id);
+    const [row] = await db.select().from(upload).where(eq(upload.id, up.id));
+
+    const del = await call((await import("@/app/api/sketches/[id]/route")).DELETE, { method: "DELETE", params: { id: origin }, cookie: orla.cookie });
+    expect(del.status).toBe(200);
+    // the file now belongs to the fork, and it is still served and in the bucket
+    const [after] = await db.select().from(upload).where(eq(upload.id, up.id));
+    expect(after.sketchId).toBe(forkId);
+    expect((await fetchFile(uploadRoute.GET as Handler, up.id, eddie)).status).toBe(200);
+    expect(await objectExists(row.storageKey)).toBe(true);
+    // and the fork can be saved again over it
+    expect((await call(versionsRoute.POST, { method: "POST", params: { id: forkId }, cookie: eddie.cookie, body: { baseVersion: 1, document } })).status).toBe(201);
+  });
+
   it("underlays never saved in a version are swept once old; saved ones and recent ones stay", async () => {
     const bay = await makeWorkspace("Sweep bay", [[eddie, "editor"]]);
     const sketchId = await newSketch(bay);

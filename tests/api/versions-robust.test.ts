@@ -1,13 +1,15 @@
 // Ten saves racing on one base version; malformed, mistyped, invalid and oversized requests
 // (4xx with field paths, never 500, nothing written); the public solve endpoint.
-import { count, eq } from "drizzle-orm";
-import { afterEach, beforeAll, describe, expect, it } from "vitest";
+import { count, eq, like } from "drizzle-orm";
+import { afterEach, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import * as solveRoute from "@/app/api/solve/route";
+import * as compareRoute from "@/app/api/sketches/[id]/compare/route";
+import * as forkRoute from "@/app/api/sketches/[id]/fork/route";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
-import { auditEvent, sketch, sketchVersion } from "@/db/schema";
+import { appRateLimit, auditEvent, sketch, sketchVersion } from "@/db/schema";
 import { solveFile } from "@/solver";
 import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { edited, fixture } from "./sketch-fixtures";
@@ -141,6 +143,27 @@ describe("bad input is refused with field paths, never a 500, and writes nothing
     expect(res.body.error.message).toBe("The request body is larger than the 1 MB this endpoint accepts.");
   });
 
+  // PostgreSQL's integer stops at 2 147 483 647: a larger number once reached it and came back as a 500
+  it("version numbers past any real version → 400 naming the field, never a 500", async () => {
+    const [{ n: before }] = await db.select({ n: count() }).from(sketch).where(eq(sketch.workspaceId, ws));
+    const fork = await call(forkRoute.POST, { method: "POST", params: { id }, cookie: eddie.cookie, body: { workspaceId: ws, version: 3_000_000_000 } });
+    expect(fork.status).toBe(400);
+    expect(fork.body.error.fields).toEqual([{ path: "version", message: "There are at most 1000000 versions." }]);
+    const save = await post({ body: { baseVersion: 3_000_000_000, document: fixture("pipe-bend-anchor") } });
+    expect(save.status).toBe(400);
+    expect(save.body.error.fields.map((f: { path: string }) => f.path)).toEqual(["baseVersion"]);
+    for (const [from, to, field] of [
+      ["3000000000", "1", "query.from"],
+      ["1", "99999999999999", "query.to"],
+    ]) {
+      const res = await call(compareRoute.GET, { path: `/api/sketches/${id}/compare?from=${from}&to=${to}`, params: { id }, cookie: eddie.cookie });
+      expect(res.status).toBe(400);
+      expect(res.body.error.fields).toEqual([{ path: field, message: "There are at most 1000000 versions." }]);
+    }
+    const [{ n: after }] = await db.select({ n: count() }).from(sketch).where(eq(sketch.workspaceId, ws));
+    expect(after).toBe(before);
+  });
+
   it("bad creates, renames and ids write nothing either", async () => {
     const [{ n: before }] = await db.select({ n: count() }).from(sketch).where(eq(sketch.workspaceId, ws));
     const bad = [
@@ -163,6 +186,10 @@ describe("bad input is refused with field paths, never a 500, and writes nothing
 
 describe("POST /api/solve", () => {
   const saved = { ...process.env };
+  // budgets outlive a run by their window: a rerun within a minute starts from a clean count
+  beforeEach(async () => {
+    await db.delete(appRateLimit).where(like(appRateLimit.key, "solve:203.0.113.%"));
+  });
   afterEach(() => {
     for (const k of ["SOLVE_RATE_LIMIT_MAX", "SOLVE_RATE_LIMIT_WINDOW"]) {
       if (saved[k] === undefined) delete process.env[k];
@@ -200,5 +227,18 @@ describe("POST /api/solve", () => {
     expect(limited.body.error.code).toBe("rate_limited");
     expect(Number(limited.res.headers.get("retry-after"))).toBeGreaterThan(50);
     expect((await solve(doc, "203.0.113.51")).status).toBe(200);
+  });
+
+  it("counts malformed, non-JSON and oversized requests against the budget too", async () => {
+    process.env.SOLVE_RATE_LIMIT_MAX = "3";
+    process.env.SOLVE_RATE_LIMIT_WINDOW = "60";
+    const ip = "203.0.113.60";
+    const statuses = [
+      (await solve(undefined, ip, '{"format": ')).status,
+      (await call(solveRoute.POST, { method: "POST", rawBody: "x=1", origin: null, headers: { "x-forwarded-for": ip, "content-type": "text/plain" } })).status,
+      (await solve({ ...fixture("thrust-stand-tips"), description: "z".repeat(1024 * 1024) }, ip)).status,
+      (await solve(fixture("pipe-bend-anchor"), ip)).status,
+    ];
+    expect(statuses).toEqual([400, 415, 413, 429]);
   });
 });

@@ -136,6 +136,8 @@ describe("review of a calculation in the browser", () => {
     expect(await owner.getByTestId("title-block-prepared").textContent()).toContain("Edda Preparer");
     expect(await owner.getByTestId("title-block-checked").textContent()).toContain("Chet Checkley");
     expect(await owner.getByTestId("title-block-approved").textContent()).toContain("Orla Approver");
+    // the comments refetch after the step: wait for the lock notice before counting it
+    await owner.getByText("Approved: locked").waitFor();
     expect(await owner.getByText("Approved: locked").count()).toBe(1);
     expect(await owner.getByLabel("New comment").count()).toBe(0);
     expect(await stepButton(owner, "withdraw").count()).toBe(1);

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { json, route } from "@/lib/api";
+import { json, parseJsonBody, route } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 import { clientAddress, createRateLimiter } from "@/lib/rate-limit";
 import { MAX_SKETCH_BYTES } from "@/lib/sketch-document";
@@ -20,9 +20,11 @@ function budget(): { max: number; window: number } {
  * budget of SOLVE_RATE_LIMIT_MAX requests per SOLVE_RATE_LIMIT_WINDOW seconds per address.
  * The answer is what `npm run solve` prints; an invalid sketch is a 400 naming the fields.
  */
-export const POST = route({ auth: "none", body: z.unknown(), maxBodyBytes: MAX_SKETCH_BYTES }, async ({ req, body }) => {
+export const POST = route({ auth: "none" }, async ({ req }) => {
   const { max, window } = budget();
+  // counted before the body is read, so malformed and oversized requests spend the budget too
   await limiter.hit(clientAddress(req), max, window);
+  const body = await parseJsonBody(req, z.unknown(), MAX_SKETCH_BYTES);
   const result = solveFile(body);
   if (!result.ok) {
     throw new AppError("validation_failed", "The sketch is not valid; the fields say why.", { fields: result.errors.slice(0, 50).map((e) => ({ path: e.path || "(root)", message: e.message })) });

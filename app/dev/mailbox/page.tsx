@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 import { MailboxFrame } from "@/components/auth/MailboxFrame";
 import { EmptyState } from "@/components/shell/controls";
@@ -11,7 +12,7 @@ export const metadata: Metadata = { title: "Local mailbox" };
 export const dynamic = "force-dynamic";
 
 export default async function MailboxPage({ searchParams }: { searchParams: Promise<{ to?: string }> }) {
-  if (!mailboxEnabled()) notFound();
+  if (!mailboxEnabled((await headers()).get("host"))) notFound();
   const { to } = await searchParams;
   const mails = await listDevMail({ to: to || undefined, limit: 200 });
   return (

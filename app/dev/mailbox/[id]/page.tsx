@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 import { LinkedText, MailboxFrame } from "@/components/auth/MailboxFrame";
 import { formatDateTime } from "@/components/workspaces/format";
@@ -10,7 +11,7 @@ export const metadata: Metadata = { title: "Local mailbox" };
 export const dynamic = "force-dynamic";
 
 export default async function MailPage({ params }: { params: Promise<{ id: string }> }) {
-  if (!mailboxEnabled()) notFound();
+  if (!mailboxEnabled((await headers()).get("host"))) notFound();
   const { id } = await params;
   const mail = /^\d{1,15}$/.test(id) ? await getDevMail(Number(id)) : null;
   if (!mail) notFound();
