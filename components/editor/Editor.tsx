@@ -11,6 +11,7 @@ import { createInteractionStore } from "@/canvas/konva/interaction";
 import type { PointerController } from "@/canvas/konva/pointer";
 import type { ActionContext } from "@/canvas/actions";
 import type { SketchPersistence } from "@/canvas/persistence";
+import type { SketchFile } from "@/solver/schema";
 import { startAutosave } from "@/canvas/autosave";
 import { exampleById } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
@@ -181,6 +182,11 @@ export function SketchUnavailable({ message }: { message: string }) {
 }
 
 /** `toolbarExtra`: what the page adds at the toolbar's end (the versions work: save, version, history). */
+/** Anything drawn or typed: an empty scratch sketch may simply be replaced. */
+function hasContent(sketch: SketchFile): boolean {
+  return sketch.bodies.length + sketch.supports.length + sketch.loads.length + sketch.ports.length + sketch.massSources.length > 0 || Object.keys(sketch.parameters ?? {}).length > 0;
+}
+
 export function Editor({ persistence, example, toolbarExtra }: { persistence: SketchPersistence; example?: string; toolbarExtra?: ReactNode }) {
   const [store] = useState(() => createEditorStore());
   const [phase, setPhase] = useState<{ kind: "loading" } | { kind: "ready" } | { kind: "failed"; message: string }>({ kind: "loading" });
@@ -199,8 +205,13 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
         return;
       }
       const ex = example ? exampleById(example) : undefined;
-      if (ex) store.getState().reset(ex.sketch);
-      else if (out.ok && out.sketch) store.getState().reset(out.sketch);
+      const kept = out.ok && out.sketch ? out : null;
+      if (kept) store.getState().reset(kept.sketch);
+      if (ex && kept && !kept.readOnly && hasContent(kept.sketch)) {
+        // an example link never throws away the sketch kept here: opening it is one undo step
+        store.getState().apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
+        store.getState().notify(`${ex.title}: ${ex.summary} Undo (Ctrl+Z) returns to the sketch you had here.`);
+      } else if (ex) store.getState().reset(ex.sketch);
       store.getState().setReadOnly(Boolean(out.ok && out.sketch && out.readOnly));
       if (!out.ok) store.getState().notify(out.message);
       setPhase({ kind: "ready" });

@@ -197,3 +197,24 @@ describe("editor", () => {
     expect(mem.get("counterpoise:scratch-sketch:v1")).toBe(before);
   });
 });
+
+describe("an example link over a kept scratch sketch", () => {
+  it("opens the example as one undo step, so the sketch kept here comes back with Undo", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(beam(), "pump-skid");
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent(exampleById("pump-skid")!.sketch.title!);
+    expect(screen.getByTestId("notice")).toHaveTextContent(/Undo .* returns to the sketch you had here/);
+    await user.click(screen.getByTestId("undo"));
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent("Beam on a pin and a contact");
+    // and the autosave keeps it again
+    await waitFor(() => expect(storedSketch(mem)?.title).toBe("Beam on a pin and a contact"), { timeout: 3000 });
+    expect(storedSketch(mem)?.supports.map((s) => s.id)).toEqual(["s1", "s2"]);
+  });
+
+  it("an empty scratch sketch is simply replaced (nothing to undo to)", async () => {
+    await renderEditor(undefined, "pump-skid");
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent(exampleById("pump-skid")!.sketch.title!);
+    expect(screen.getByTestId("undo")).toBeDisabled();
+  });
+});
+
