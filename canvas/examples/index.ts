@@ -25,7 +25,7 @@ function load(json: unknown): SketchFile {
 export const EXAMPLES: readonly Example[] = [
   { id: "fire-monitor-trailer", title: "Fire-fighting monitor on a trailer", summary: "A jet from 2.4 m unloads the front jack; friction at the foot and the axle.", sketch: load(fireMonitor) },
   { id: "pipe-bend-anchor", title: "Pressure-pipe bend on an anchor", summary: "10 bar in a DN150 bend: pressure thrust, momentum and weight on one anchor.", sketch: load(pipeBend) },
-  { id: "washing-cart", title: "Pressure-washing cart with a lance", summary: "Raise the lance and the cart tips back off its front caster.", sketch: load(washingCart) },
+  { id: "washing-cart", title: "Pressure-washing cart with a lance", summary: "Raise the lance and the cart tips back off its front caster; four operating cases and a lance-angle sweep.", sketch: load(washingCart) },
   { id: "pump-skid", title: "Dewatering pump skid", summary: "Suction and discharge on a skid held by friction at two bearers.", sketch: load(pumpSkid) },
 ];
 
