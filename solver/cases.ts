@@ -89,22 +89,28 @@ export function combineModels(parts: Array<{ models: BodyModel[]; factor: number
   });
 }
 
-export function solveCases(file: SketchFile): StudyResult {
+export function solveCases(file: SketchFile, onProgress: (done: number, total: number) => void = () => {}): StudyResult {
   const requirements: Requirements = { ...DEFAULT_REQUIREMENTS, ...(file.stability ?? {}) };
   const cases = file.cases?.length ? file.cases : [AS_DRAWN];
+  const total = cases.length + (file.combinations?.length ?? 0);
   const runs: CaseRun[] = [];
+  // each run, solved or not, counts towards the progress a long study shows
+  const record = (run: CaseRun) => {
+    runs.push(run);
+    onProgress(runs.length, total);
+  };
   const prepared = new Map<string, { models: BodyModel[]; warnings: SolveWarning[] }>();
 
   const finish = (id: string, name: string, kind: "case" | "combination", models: BodyModel[], warnings: SolveWarning[]) => {
     const result = solveModels(models, warnings);
     const stability = Object.fromEntries(models.map((m) => [m.body.id, bodyStability(m, result, requirements)]));
-    runs.push({ id, name, kind, ok: true, result, stability });
+    record({ id, name, kind, ok: true, result, stability });
   };
 
   for (const c of cases) {
     const cs = caseSketch(file, c);
     if (!cs.ok) {
-      runs.push({ id: c.id, name: c.name, kind: "case", ok: false, errors: cs.errors });
+      record({ id: c.id, name: c.name, kind: "case", ok: false, errors: cs.errors });
       continue;
     }
     const p = prepare(cs.sketch);
@@ -116,7 +122,7 @@ export function solveCases(file: SketchFile): StudyResult {
   for (const k of file.combinations ?? []) {
     const missing = k.terms.filter((t) => !prepared.has(t.case));
     if (missing.length) {
-      runs.push({ id: k.id, name: k.name, kind: "combination", ok: false, errors: [{ path: `combinations[${k.id}]`, message: `case ${missing.map((t) => t.case).join(", ")} could not be evaluated` }] });
+      record({ id: k.id, name: k.name, kind: "combination", ok: false, errors: [{ path: `combinations[${k.id}]`, message: `case ${missing.map((t) => t.case).join(", ")} could not be evaluated` }] });
       continue;
     }
     const parts = k.terms.map((t) => ({ models: prepared.get(t.case)!.models, factor: t.factor, name: cases.find((c) => c.id === t.case)!.name }));

@@ -37,10 +37,16 @@ export function validateReferences(sketch: Sketch): FieldError[] {
 const nonNegative = (v: number | undefined) => v === undefined || v >= 0;
 const positive = (v: number | undefined) => v === undefined || v > 0;
 
+/** The words resolve.ts gives a negative gravity at parse time; a sweep point says the same. */
+export const NEGATIVE_GRAVITY = "must not be negative: gravity acts in −y (to have it act another way, rotate the sketch; 0 turns weights off)";
+
 /** Value ranges, the information each port needs, and loads that must be fully given. */
 export function validateValues(sketch: Sketch): FieldError[] {
   const errors: FieldError[] = [];
   const err = (path: string, message: string) => errors.push({ path, message });
+
+  // parsing refuses this already; a swept parameter can still drive gravity below zero
+  if (!(sketch.gravity >= 0)) err("gravity", NEGATIVE_GRAVITY);
 
   sketch.bodies.forEach((b, i) => {
     if (!(b.mass >= 0)) err(`bodies[${i}].mass`, "must be zero or more (kg)");

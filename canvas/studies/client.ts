@@ -2,8 +2,7 @@
 // no worker exists (tests).
 import type { LimitResult } from "@/solver/limit";
 import type { StudyResult } from "@/solver/cases";
-import { runCases, runLimit, runSweep, type LimitSpec, type SweepData, type SweepSpec } from "./run";
-import type { StudyJob } from "./studies.worker";
+import { runJob, type OnProgress, type StudyJob, type StudyMessage, type SweepData } from "./run";
 
 export interface Running<T> {
   promise: Promise<T>;
@@ -13,10 +12,13 @@ export interface Running<T> {
 type Result<J extends StudyJob> = J extends { kind: "cases" } ? StudyResult : J extends { kind: "sweep" } ? SweepData : LimitResult;
 
 export class CancelledError extends Error {
-  constructor() {
-    super("stopped");
+  constructor(message = "stopped") {
+    super(message);
   }
 }
+
+/** Makes the worker, or null where none can run (the jobs then run on the calling thread). */
+export type WorkerFactory = () => Worker | null;
 
 function makeWorker(): Worker | null {
   if (typeof Worker === "undefined" || process.env.NODE_ENV === "test") return null;
@@ -27,51 +29,98 @@ function makeWorker(): Worker | null {
   }
 }
 
-export class StudyRunner {
-  private worker: Worker | null = makeWorker();
-  private seq = 0;
+interface Pending {
+  resolve: (data: unknown) => void;
+  reject: (err: Error) => void;
+  onProgress: OnProgress;
+}
 
-  run<J extends StudyJob>(job: J, onProgress: (done: number) => void = () => {}): Running<Result<J>> {
+export class StudyRunner {
+  private worker: Worker | null;
+  /** every job sent to the current worker and not yet answered */
+  private pending = new Map<number, Pending>();
+  private seq = 0;
+  private disposed = false;
+
+  constructor(private readonly createWorker: WorkerFactory = makeWorker) {
+    this.worker = this.start();
+  }
+
+  run<J extends StudyJob>(job: J, onProgress: OnProgress = () => {}): Running<Result<J>> {
+    if (this.disposed) return { promise: Promise.reject(new CancelledError()), cancel: () => {} };
     const id = ++this.seq;
     const worker = this.worker;
-    if (!worker) {
-      const promise = new Promise<Result<J>>((resolve, reject) => {
-        setTimeout(() => {
-          try {
-            const file = JSON.parse(job.text);
-            const data = job.kind === "cases" ? runCases(file) : job.kind === "sweep" ? runSweep(file, (job as { spec: SweepSpec }).spec, (d) => (onProgress(d), true)) : runLimit(file, (job as { spec: LimitSpec }).spec);
-            resolve(data as Result<J>);
-          } catch (err) {
-            reject(err);
-          }
-        }, 0);
-      });
-      return { promise, cancel: () => {} };
-    }
-    let cancel = () => {};
+    if (!worker) return runHere(job, onProgress);
     const promise = new Promise<Result<J>>((resolve, reject) => {
-      const onMessage = (e: MessageEvent<{ id: number; progress?: number; data?: unknown; error?: string }>) => {
-        if (e.data.id !== id) return;
-        if (e.data.progress !== undefined) return onProgress(e.data.progress);
-        worker.removeEventListener("message", onMessage);
-        if (e.data.error) reject(new Error(e.data.error));
-        else resolve(e.data.data as Result<J>);
-      };
-      worker.addEventListener("message", onMessage);
-      cancel = () => {
-        worker.removeEventListener("message", onMessage);
-        // a running job cannot be interrupted inside the worker: replace the worker
-        worker.terminate();
-        this.worker = makeWorker();
-        reject(new CancelledError());
-      };
-      worker.postMessage({ id, job });
+      this.pending.set(id, { resolve: resolve as (d: unknown) => void, reject, onProgress });
     });
+    worker.postMessage({ id, job });
+    // A running job cannot be interrupted inside the worker: the worker is replaced, and every
+    // job it held is settled, or a limit search sharing it with a stopped sweep would never answer.
+    const cancel = () => {
+      if (this.worker === worker && this.pending.has(id)) this.restart(() => new CancelledError());
+    };
     return { promise, cancel };
   }
 
   dispose() {
+    this.disposed = true;
+    this.restart(() => new CancelledError());
+  }
+
+  private start(): Worker | null {
+    const worker = this.disposed ? null : this.createWorker();
+    if (!worker) return null;
+    worker.addEventListener("message", (e: MessageEvent<StudyMessage>) => {
+      const m = e.data;
+      const p = worker === this.worker ? this.pending.get(m.id) : undefined;
+      if (!p) return;
+      if ("done" in m) return p.onProgress(m.done, m.total);
+      this.pending.delete(m.id);
+      if ("error" in m) p.reject(new Error(m.error));
+      else p.resolve(m.data);
+    });
+    // the worker failed to load or died: its jobs will never answer
+    worker.addEventListener("error", (e: ErrorEvent) => {
+      if (worker !== this.worker) return;
+      e.preventDefault?.();
+      this.restart(() => new Error(`the study could not run${e.message ? `: ${e.message}` : ""}`));
+    });
+    return worker;
+  }
+
+  /** End the current worker, settle every job it held with `reason`, and start a fresh one. */
+  private restart(reason: () => Error) {
+    const held = [...this.pending.values()];
+    this.pending.clear();
     this.worker?.terminate();
-    this.worker = null;
+    this.worker = this.start();
+    for (const p of held) p.reject(reason());
   }
 }
+
+/** The same work on this thread, a turn of the event loop later (as a worker would answer). */
+function runHere<J extends StudyJob>(job: J, onProgress: OnProgress): Running<Result<J>> {
+  let rejectIt: ((err: Error) => void) | null = null;
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const promise = new Promise<Result<J>>((resolve, reject) => {
+    rejectIt = reject;
+    timer = setTimeout(() => {
+      rejectIt = null;
+      try {
+        resolve(runJob(job, onProgress) as Result<J>);
+      } catch (err) {
+        reject(err);
+      }
+    }, 0);
+  });
+  const cancel = () => {
+    if (!rejectIt) return;
+    clearTimeout(timer);
+    rejectIt(new CancelledError());
+    rejectIt = null;
+  };
+  return { promise, cancel };
+}
+
+export type { OnProgress };

@@ -9,6 +9,14 @@ import type { SketchFile } from "@/solver/schema";
 import type { FieldError, Sketch } from "@/solver/types";
 import { marksZero } from "./display";
 
+/** How far a job is: sweep points or runs (cases and combinations) done, of how many. */
+export type OnProgress = (done: number, total: number) => void;
+
+export type StudyJob = { kind: "cases"; text: string } | { kind: "sweep"; text: string; spec: SweepSpec } | { kind: "limit"; text: string; spec: LimitSpec };
+
+/** What the worker sends back for job `id`: progress, then its data or its error. */
+export type StudyMessage = { id: number; done: number; total: number } | { id: number; data: unknown } | { id: number; error: string };
+
 export interface SweepSpec {
   parameter: string;
   from: number;
@@ -51,10 +59,11 @@ export function sketchForCase(file: SketchFile, caseId?: string): Sketch {
   return p.sketch;
 }
 
-export function runCases(file: unknown): StudyResult {
+/** Every case and combination; `onProgress` hears the runs done of the total after each one. */
+export function runCases(file: unknown, onProgress: OnProgress = () => {}): StudyResult {
   const p = parseSketch(file);
   if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
-  return solveCases(p.file);
+  return solveCases(p.file, onProgress);
 }
 
 /**
@@ -114,4 +123,13 @@ export function runLimit(file: unknown, spec: LimitSpec): LimitResult {
   if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
   const sketch = spec.caseId ? sketchForCase(p.file, spec.caseId) : p.sketch;
   return findLimit(sketch, spec.parameter, [spec.from, spec.to], spec.quantity, spec.target);
+}
+
+/** One job, as the worker runs it (or the page, where no worker can run). */
+export function runJob(job: StudyJob, onProgress: OnProgress): StudyResult | SweepData | LimitResult {
+  const file = JSON.parse(job.text);
+  if (job.kind === "cases") return runCases(file, onProgress);
+  // runSweep reports the fraction done; the page hears points done of the total
+  if (job.kind === "sweep") return runSweep(file, job.spec, (fraction) => (onProgress(Math.round(fraction * job.spec.points), job.spec.points), true));
+  return runLimit(file, job.spec);
 }

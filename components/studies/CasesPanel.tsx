@@ -66,6 +66,7 @@ export function CasesPanel() {
   const runner = useRef<StudyRunner | null>(null);
   const [study, setStudyResult] = useState<{ result: StudyResult; of: typeof sketch } | null>(null);
   const [running, setRunning] = useState<(() => void) | null>(null);
+  const [progress, setProgress] = useState<{ done: number; total: number; noun: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
   useEffect(() => {
     runner.current = new StudyRunner();
@@ -90,13 +91,20 @@ export function CasesPanel() {
   const run = () => {
     if (!runner.current) return;
     setError(null);
-    const job = runner.current.run({ kind: "cases", text: JSON.stringify(sketch) });
+    // the sketch as drawn is one run when there are no cases (solveCases)
+    const total = Math.max(cases.length, 1) + combinations.length;
+    const noun = combinations.length ? "cases and combinations" : total === 1 ? "case" : "cases";
+    setProgress({ done: 0, total, noun });
+    const job = runner.current.run({ kind: "cases", text: JSON.stringify(sketch) }, (done, total) => setProgress({ done, total, noun }));
     setRunning(() => job.cancel);
     const of = sketch;
     job.promise
       .then((result) => setStudyResult({ result, of }))
       .catch((err) => setError(err instanceof CancelledError ? "Stopped." : err.message))
-      .finally(() => setRunning(null));
+      .finally(() => {
+        setRunning(null);
+        setProgress(null);
+      });
   };
 
   const staleResult = study && study.of !== sketch;
@@ -206,9 +214,12 @@ export function CasesPanel() {
           <button type="button" className={PRIMARY_BUTTON} onClick={run} disabled={!!running}>
             {cases.length || combinations.length ? "Run all cases" : "Run as drawn"}
           </button>
-          {running && (
+          {running && progress && (
             <>
-              <span className="text-[12px] text-ink-faint" role="status">Solving…</span>
+              <progress className="h-2 w-20" max={progress.total} value={progress.done} aria-label="Cases progress" />
+              <span className="text-[12px] text-ink-faint" role="status">
+                {progress.done} of {progress.total} {progress.noun}
+              </span>
               <button type="button" className={BUTTON} onClick={() => running()}>
                 Stop
               </button>

@@ -15,10 +15,14 @@ import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import type { SweepData, SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
+import { errorInWords } from "@/components/results/errorPlace";
 import { SweepChart } from "./SweepChart";
+import { invalidStretches } from "./sweepErrors";
 import { defaultSweepParameter, defaultSweepRange, type ParameterValue } from "./sweepRange";
 
 const NO_VALUES: Record<string, ParameterValue> = {};
+/** stretches of invalid sweep points listed one by one; more are counted */
+const MAX_STRETCHES = 4;
 
 const COMPONENT_WORDS: Partial<Record<QuantityComponent, string>> = {
   margin: "margin",
@@ -80,6 +84,8 @@ export function SweepPanel() {
   const [limitQ, setLimitQ] = useState(0);
   const [target, setTarget] = useState("0");
   const [limit, setLimit] = useState<{ result: LimitResult; label: string; target: number; unit: string } | null>(null);
+  const [searching, setSearching] = useState<(() => void) | null>(null);
+  const [limitStopped, setLimitStopped] = useState(false);
   const runner = useRef<StudyRunner | null>(null);
   useEffect(() => {
     runner.current = new StudyRunner();
@@ -102,13 +108,14 @@ export function SweepPanel() {
     if (typeof s === "string") return setError(s);
     setError(null);
     setProgress(0);
-    const job = runner.current!.run({ kind: "sweep", text: JSON.stringify(sketch), spec: s }, setProgress);
+    const job = runner.current!.run({ kind: "sweep", text: JSON.stringify(sketch), spec: s }, (done, total) => setProgress(done / total));
     setCancel(() => job.cancel);
     job.promise
       .then((d) => {
         setData(d);
         setRuns((n) => n + 1);
         setLimit(null);
+        setLimitStopped(false);
       })
       .catch((err) => setError(err instanceof CancelledError ? "Stopped: nothing plotted." : err.message))
       .finally(() => {
@@ -127,7 +134,13 @@ export function SweepPanel() {
     const tgt = fromDisplay(typed, q.component, units);
     setError(null);
     const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt } });
-    job.promise.then((result) => setLimit({ result, label: describeQuantity(q), target: typed, unit: displayUnit(q.component, units) })).catch((err) => setError(err.message));
+    setSearching(() => job.cancel);
+    setLimitStopped(false);
+    job.promise
+      .then((result) => setLimit({ result, label: describeQuantity(q), target: typed, unit: displayUnit(q.component, units) }))
+      // Stop ends every study of this panel at once (they share one worker)
+      .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
+      .finally(() => setSearching(null));
   };
 
   const keep = () => {
@@ -141,6 +154,7 @@ export function SweepPanel() {
   const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units) : "";
   const withUnit = (v: number, unit: string) => `${v}${unit ? ` ${unit}` : ""}`;
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
+  const invalid = data ? invalidStretches(data) : [];
 
   return (
     <div className="@container" data-testid="sweep-panel">
@@ -209,7 +223,13 @@ export function SweepPanel() {
                   <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity])} crosses zero between {pLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${data.unit}` : ""}
                 </li>
               ))}
-              {data.errors.length > 0 && <li className="text-caution">{data.errors.length} point(s) could not be solved (e.g. {data.errors[0].errors[0]?.path}: {data.errors[0].errors[0]?.message}).</li>}
+              {invalid.slice(0, MAX_STRETCHES).map((r, i) => (
+                <li key={`invalid-${i}`} className="text-caution" data-testid="invalid-points">
+                  Not solved at {pLabel} = {formatNumber(r.from, 4)}{r.count > 1 ? ` to ${formatNumber(r.to, 4)}` : ""}{data.unit ? ` ${data.unit}` : ""} ({r.count} {r.count === 1 ? "point" : "points"}), where the sketch is invalid:{" "}
+                  {r.errors.map((e) => errorInWords(sketch, e)).join("; ")}.
+                </li>
+              ))}
+              {invalid.length > MAX_STRETCHES && <li className="text-caution">… and {invalid.length - MAX_STRETCHES} more stretches of invalid points.</li>}
             </ul>
             <div className="mt-2 flex flex-wrap items-center gap-1.5 border-t border-rule-soft pt-2" role="group" aria-label="Limit finder">
               <span className={`${LABEL} whitespace-nowrap`}>At what {pLabel} does</span>
@@ -219,9 +239,20 @@ export function SweepPanel() {
               <span className={LABEL}>reach</span>
               <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
               <span className={`${LABEL} whitespace-nowrap`}>{targetUnit}?</span>
-              <button type="button" className={BUTTON} onClick={findLimit}>Find</button>
+              <button type="button" className={BUTTON} onClick={findLimit} disabled={!!searching}>Find</button>
+              {searching && (
+                <>
+                  <span className="text-[12px] text-ink-faint" role="status">Searching…</span>
+                  <button type="button" className={BUTTON} onClick={() => searching()} title="Stops the sweep too, if one is running: they share one worker">Stop</button>
+                </>
+              )}
             </div>
-            {limit && (
+            {limitStopped && (
+              <p className="mt-1 text-[12.5px] text-caution" data-testid="limit-stopped">
+                Stopped: the limit search did not finish. Press Find to search again.
+              </p>
+            )}
+            {limit && !limitStopped && (
               <p className="mt-1 text-[12.5px]" data-testid="limit-answer" role="status">
                 {limit.result.found
                   ? `The ${limit.label} reaches ${withUnit(limit.target, limit.unit)} at ${pLabel} = ${formatNumber(limit.result.value, 5)}${limit.result.unit ? ` ${limit.result.unit}` : ""}${limit.result.crossings.length > 1 ? ` (and again at ${limit.result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
