@@ -23,6 +23,9 @@ export interface ChartSpec {
 const COLORS = ["#1f5f7a", "#b4462b", "#1d2329", "#8a6212", "#4d7a3a", "#6b4c9a"];
 const DASHES = ["", "6 3", "2 3", "8 3 2 3", "1 2", "10 4"];
 
+/** About the width of a character at 8 px (a generous average, so a label is never cut off). */
+const LABEL_CHAR = 4.6;
+
 const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
 
 function niceTicks(lo: number, hi: number, count = 5): number[] {
@@ -38,7 +41,8 @@ function niceTicks(lo: number, hi: number, count = 5): number[] {
 export function lineChartSvg(spec: ChartSpec): string {
   const W = spec.width ?? 500;
   const H = spec.height ?? 260;
-  const m = { l: 62, r: 14, t: 26, b: 42 };
+  // the legend sits between the title and the plot, where no line can run through it
+  const m = { l: 62, r: 14, t: 30 + 11 * spec.series.length, b: 42 };
   const xs = spec.series.flatMap((s) => s.points.map((p) => p[0]));
   const ys = spec.series.flatMap((s) => s.points.map((p) => p[1]).filter((v): v is number => v !== null && Number.isFinite(v)));
   const x0 = Math.min(...xs);
@@ -91,13 +95,16 @@ export function lineChartSvg(spec: ChartSpec): string {
       }
     }
     // legend
-    const ly = m.t + 10 + i * 11;
-    parts.push(`<line x1="${W - m.r - 150}" x2="${W - m.r - 132}" y1="${ly - 3}" y2="${ly - 3}" stroke="${color}" stroke-width="1.4"${DASHES[i % DASHES.length] ? ` stroke-dasharray="${DASHES[i % DASHES.length]}"` : ""}/>`);
-    parts.push(`<text x="${W - m.r - 128}" y="${ly}" font-size="8" fill="#1d2329">${esc(s.label)}</text>`);
+    const ly = 30 + i * 11;
+    parts.push(`<line x1="${m.l}" x2="${m.l + 18}" y1="${ly - 3}" y2="${ly - 3}" stroke="${color}" stroke-width="1.4"${DASHES[i % DASHES.length] ? ` stroke-dasharray="${DASHES[i % DASHES.length]}"` : ""}/>`);
+    parts.push(`<text x="${m.l + 22}" y="${ly}" font-size="8" fill="#1d2329">${esc(s.label)}</text>`);
   });
-  for (const mk of spec.markers ?? []) {
+  (spec.markers ?? []).forEach((mk, k) => {
     parts.push(`<line x1="${X(mk.x)}" x2="${X(mk.x)}" y1="${m.t}" y2="${H - m.b}" stroke="#b4462b" stroke-width="1" stroke-dasharray="3 2"/>`);
-    parts.push(`<text x="${X(mk.x) + 3}" y="${m.t + 9}" font-size="8" fill="#b4462b">${esc(mk.label)}</text>`);
-  }
+    // one label a line, so markers close together do not print over each other; a label that
+    // would run past the plot's right edge goes on the left of its line
+    const right = X(mk.x) + 3 + mk.label.length * LABEL_CHAR <= W - m.r;
+    parts.push(`<text x="${X(mk.x) + (right ? 3 : -3)}" y="${m.t + 9 + k * 10}" font-size="8" text-anchor="${right ? "start" : "end"}" fill="#b4462b">${esc(mk.label)}</text>`);
+  });
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" font-family="Inter">${parts.join("")}</svg>`;
 }

@@ -1,7 +1,6 @@
 import "server-only";
 // The calc sheet: a PDF of one saved version, made on the server with pdfkit. The drawing is
 // the shared SVG renderer's; tables come from solver/report.ts, so they match the screen.
-import { join } from "node:path";
 import PDFDocument from "pdfkit";
 import SVGtoPDF from "svg-to-pdfkit";
 import { renderSketchSvg } from "@/canvas/render/svg";
@@ -18,7 +17,6 @@ import {
   solve,
   solveCases,
   stabilityTable,
-  type Table,
   type UnitSystem,
   type SolveResult,
 } from "@/solver";
@@ -26,12 +24,8 @@ import { combinationWarnings } from "@/solver/cases";
 import { designLoadTable, excludedWords } from "@/solver/report";
 import { lineChartSvg } from "./chart";
 import { sweepCharts } from "./sweeps";
-
-// TrueType files (pdfkit cannot subset the web fonts' WOFF2), read from the installed package at
-// run time: the bundler must not try to bundle a font file.
-const FONT_DIR = join(process.cwd(), "node_modules", "@expo-google-fonts", "inter");
-const FONT_REGULAR = join(FONT_DIR, "400Regular", "Inter_400Regular.ttf");
-const FONT_SEMIBOLD = join(FONT_DIR, "600SemiBold", "Inter_600SemiBold.ttf");
+import { registerFonts } from "./fonts";
+import { drawTable } from "./table";
 
 export interface SignoffEntry {
   role: "prepared" | "checked" | "approved";
@@ -71,8 +65,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const study = solveCases(parsed.file);
 
   const doc = new PDFDocument({ size: "A4", margins: { top: 44, bottom: 54, left: 44, right: 44 }, bufferPages: true, info: { Title: `${input.sketchTitle} v${input.version}`, Author: "Counterpoise", Subject: "Calculation sheet" } });
-  doc.registerFont("Inter", FONT_REGULAR);
-  doc.registerFont("Inter-SemiBold", FONT_SEMIBOLD);
+  registerFonts(doc);
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve) => doc.on("end", () => resolve(Buffer.concat(chunks))));
@@ -114,8 +107,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
 
   // ---- inputs
   heading("Inputs");
-  if (Object.keys(parsed.parameterValues).length) drawTable(doc, parametersTable(parsed), left, width, units, 7.5);
-  drawTable(doc, inputsTable(parsed), left, width, units, 7.5);
+  if (Object.keys(parsed.parameterValues).length) drawTable(doc, parametersTable(parsed), left, width);
+  drawTable(doc, inputsTable(parsed), left, width);
 
   // ---- cases
   if (parsed.file.cases?.length || parsed.file.combinations?.length) {
@@ -135,18 +128,18 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // ---- hand check
   for (const bodyId of Object.keys(result.bodies)) {
     heading(`Hand check — ${bodyId}`);
-    drawTable(doc, handCheckTable(result, bodyId, [0, 0], units), left, width, units, 7.5);
+    drawTable(doc, handCheckTable(result, bodyId, [0, 0], units), left, width);
   }
 
   // ---- reactions per case, envelope, stability
   heading("Reactions per case");
-  drawTable(doc, caseReactionTable(study, units), left, width, units, 7.5);
+  drawTable(doc, caseReactionTable(study, units), left, width);
   heading("Envelope and design loads");
   for (const w of excludedWords(study)) para(w, 8.5, ACCENT);
-  drawTable(doc, envelopeTable(study, units), left, width, units, 7.5);
-  drawTable(doc, designLoadTable(study, units), left, width, units, 7.5);
+  drawTable(doc, envelopeTable(study, units), left, width);
+  drawTable(doc, designLoadTable(study, units), left, width);
   heading("Stability");
-  drawTable(doc, stabilityTable(study, units), left, width, units, 7.5);
+  drawTable(doc, stabilityTable(study, units), left, width);
 
   // ---- sweeps: each on its saved case, one chart per unit (forces, moments, ratios)
   for (const sw of parsed.file.sweeps ?? []) {
@@ -157,7 +150,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions));
       for (const spec of charts) {
         ensureSpace(doc, 280);
-        SVGtoPDF(doc, lineChartSvg(spec), left, doc.y, { width, height: width * (260 / 500), fontCallback: () => "Inter" });
+        SVGtoPDF(doc, lineChartSvg(spec), left, doc.y, { width, height: width * (260 / 500), preserveAspectRatio: "xMidYMid meet", fontCallback: () => "Inter" });
         doc.y += width * (260 / 500) + 4;
       }
       for (const mk of markers) para(`Crossing: ${mk.label}.`, 8.5, INK);
@@ -221,56 +214,6 @@ function cautionBox(doc: PDFKit.PDFDocument, left: number, width: number, lines:
   doc.font("Inter-SemiBold").fontSize(7.5).fillColor("#8a6212").text("ENGINEERING CAUTIONS", left + 10, top + 6, { width: width - 20 });
   doc.font("Inter").fontSize(8.5).fillColor(INK).text(text, left + 10, top + 17, { width: width - 20 });
   doc.y = top + h + 6;
-}
-
-function fmtCell(c: Table["rows"][number][number]): string {
-  if (c === null || c === undefined) return "—";
-  if (typeof c === "number") return formatNumber(c, 4);
-  return c;
-}
-
-function drawTable(doc: PDFKit.PDFDocument, t: Table, left: number, width: number, _units: UnitSystem, size: number) {
-  if (t.rows.length === 0) {
-    doc.font("Inter").fontSize(8.5).fillColor(FAINT).text("(none)", left, doc.y, { width });
-    return;
-  }
-  const headers = t.columns.map((c) => (c.unit ? `${c.label} (${c.unit})` : c.label));
-  // a marked cell (the governing case) carries its shape before the number: the mark is not colour alone
-  const cells = t.rows.map((r, ri) => r.map((c, ci) => {
-    const mark = t.marks?.[ri]?.[t.columns[ci].key];
-    return mark ? `${mark.symbol}\u00a0${fmtCell(c)}` : fmtCell(c);
-  }));
-  doc.font("Inter").fontSize(size);
-  // widths from content, shrunk to the page
-  const natural = headers.map((h, i) => Math.max(doc.widthOfString(h) + 8, ...cells.map((r) => Math.min(doc.widthOfString(r[i] ?? "") + 8, 220))));
-  const total = natural.reduce((a, b) => a + b, 0);
-  const widths = natural.map((w) => (w * width) / Math.max(total, width));
-  const rowHeight = (r: string[], font: string) => {
-    doc.font(font).fontSize(size);
-    return Math.max(...r.map((c, i) => doc.heightOfString(c, { width: widths[i] - 6 }))) + 5;
-  };
-  const drawRow = (r: string[], font: string, fill?: string) => {
-    const h = rowHeight(r, font);
-    if (doc.y + h > doc.page.height - doc.page.margins.bottom) {
-      doc.addPage();
-      drawRow(headers, "Inter-SemiBold", "#ece7dc");
-    }
-    const y = doc.y;
-    if (fill) doc.rect(left, y, width, h).fillColor(fill).fill();
-    let x = left;
-    r.forEach((c, i) => {
-      const align = t.columns[i].align ?? (font === "Inter-SemiBold" ? "left" : "right");
-      doc.font(font).fontSize(size).fillColor(INK).text(c, x + 3, y + 2.5, { width: widths[i] - 6, align });
-      x += widths[i];
-    });
-    doc.moveTo(left, y + h).lineTo(left + width, y + h).lineWidth(0.4).strokeColor(RULE).stroke();
-    doc.y = y + h;
-  };
-  drawRow(headers, "Inter-SemiBold", "#ece7dc");
-  cells.forEach((r) => drawRow(r, "Inter"));
-  for (const n of t.notes ?? []) doc.font("Inter").fontSize(7.5).fillColor(FAINT).text(n, left, doc.y + 3, { width });
-  doc.x = left;
-  doc.moveDown(0.4);
 }
 
 function footer(doc: PDFKit.PDFDocument, input: CalcSheetInput) {

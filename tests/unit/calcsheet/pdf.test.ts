@@ -4,6 +4,9 @@ import { describe, expect, it } from "vitest";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
 import { runLimit } from "@/canvas/studies/run";
 import { formatNumber } from "@/solver/units";
+import { tableCells } from "@/lib/calcsheet/table-layout";
+import { parseSketch, solveCases } from "@/solver";
+import { caseReactionTable, designLoadTable, envelopeTable, stabilityTable, type Table } from "@/solver/report";
 import { loadFixture } from "../solver/helpers";
 
 async function pdfText(buf: Buffer): Promise<{ text: string; pages: number }> {
@@ -16,6 +19,57 @@ async function pdfText(buf: Buffer): Promise<{ text: string; pages: number }> {
     text += content.items.map((it) => ("str" in it ? it.str : "")).join(" ") + "\n";
   }
   return { text: text.replace(/\s+/g, " "), pages: doc.numPages };
+}
+
+interface PageItem {
+  str: string;
+  /** left edge and width (pt) */
+  x: number;
+  width: number;
+}
+
+async function pdfItems(buf: Buffer): Promise<{ pages: PageItem[][]; pageWidth: number }> {
+  const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
+  const doc = await pdfjs.getDocument({ data: new Uint8Array(buf), useSystemFonts: false, isEvalSupported: false }).promise;
+  const pages: PageItem[][] = [];
+  let pageWidth = 0;
+  for (let i = 1; i <= doc.numPages; i++) {
+    const page = await doc.getPage(i);
+    pageWidth = page.view[2];
+    const content = await page.getTextContent();
+    pages.push(content.items.flatMap((it) => ("str" in it && it.str.trim() ? [{ str: it.str, x: it.transform[4], width: it.width }] : [])));
+  }
+  return { pages, pageWidth };
+}
+
+/** The pump set with long support ids, long case names, a combination and a sweep (demo data). */
+function longLabelFile() {
+  const file = loadFixture("pump-set-hold-down.json");
+  const ids: Record<string, string> = { leftPad: "leftRubberBearingPadUnderEngine", rightPad: "rightRubberBearingPadUnderPump", strap: "holdDownStrapToFloorAnchor" };
+  for (const s of file.supports ?? []) s.id = ids[s.id];
+  file.parameters = { mdot: "40 kg/s" };
+  file.ports![0].massFlow = "mdot";
+  file.massSources![0].massFlow = "mdot";
+  file.cases = [
+    { id: "idle", name: "Idling with the discharge valve shut", parameters: { mdot: "0.001 kg/s" } },
+    { id: "duty", name: "Duty point", parameters: { mdot: "40 kg/s" } },
+    { id: "runout", name: "Run-out at the end of the curve", parameters: { mdot: "55 kg/s" } },
+  ];
+  file.combinations = [{ id: "c", name: "Duty point with the dead load factored", terms: [{ case: "duty", factor: 1.2 }] }];
+  file.sweeps = [{ id: "s", parameter: "mdot", from: 0, to: 60, points: 31, quantities: [{ support: "holdDownStrapToFloorAnchor", component: "margin" }] }];
+  return file;
+}
+
+/** A word printed as two pieces ("Supp ort", "beari ng"): what a squeezed column does. */
+function brokenWords(text: string, tables: Table[]): string[] {
+  const found = new Set<string>();
+  for (const t of tables) {
+    const all = [...t.columns.map((c) => c.label), ...tableCells(t).flat()];
+    for (const w of all.flatMap((s) => s.split(/\s+/))) {
+      for (let k = 2; k <= w.length - 2; k++) if (text.includes(` ${w.slice(0, k)} ${w.slice(k)} `)) found.add(`${w.slice(0, k)}/${w.slice(k)}`);
+    }
+  }
+  return [...found];
 }
 
 describe("calc sheet PDF", () => {
@@ -98,5 +152,53 @@ describe("calc sheet PDF", () => {
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Bend", version: 1, savedAt: new Date(), signoff: [], file: loadFixture("pipe-bend-anchor.json"), units: "US" });
     const { text } = await pdfText(buf);
     expect(text).toMatch(/Fx \(lbf\)/);
+  }, 60000);
+
+  it("prints every table word whole, inside the margins, with the cautions on every page", async () => {
+    const file = longLabelFile();
+    const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Pump set", version: 2, savedAt: new Date(), signoff: [], file, units: "US" });
+    const { text } = await pdfText(buf);
+    const { pages, pageWidth } = await pdfItems(buf);
+    const parsed = parseSketch(file);
+    if (!parsed.ok) throw new Error("the sketch did not parse");
+    const study = solveCases(parsed.file);
+    const tables = [caseReactionTable(study, "US"), envelopeTable(study, "US"), designLoadTable(study, "US"), stabilityTable(study, "US")];
+    // the old layout printed "Supp ort", "beari ng" and "leftRubberBearingPa dUnderEngine"
+    expect(brokenWords(text, tables)).toEqual([]);
+    for (const w of ["Support", "bearing", "Tangential t", "leftRubberBearingPadUnderEngine", "rightRubberBearingPadUnderPump", "holdDownStrapToFloorAnchor"]) expect(text).toContain(` ${w} `);
+    // the wide cases table comes in stacked parts that say so
+    expect(text).toMatch(/Part 1 of \d: the table is too wide for the page; each part repeats Case and Support\./);
+    expect(text).toMatch(/Part 2 of \d: the same rows, more columns\./);
+    // units on the heading's second line still read as "Fx (lbf)"
+    expect(text).toMatch(/Fx \(lbf\)/);
+    expect(pages.length).toBeGreaterThan(2);
+    pages.forEach((items, i) => {
+      const words = items.map((it) => it.str).join(" ").replace(/\s+/g, " ");
+      // the short caution in the footer of every page
+      expect(words, `page ${i + 1}`).toContain("for design checking; review by a qualified engineer required; local codes govern");
+      // nothing past the 44 pt margins (1 pt for rounding)
+      for (const it of items) {
+        expect(it.x, `"${it.str}" on page ${i + 1}`).toBeGreaterThanOrEqual(44 - 1);
+        expect(it.x + it.width, `"${it.str}" on page ${i + 1}`).toBeLessThanOrEqual(pageWidth - 44 + 1);
+      }
+    });
+  }, 60000);
+
+  it("prints the trailer's case, envelope and stability tables with no word broken", async () => {
+    const file = loadFixture("fire-monitor-trailer.json");
+    file.cases = [
+      { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
+      { id: "high", name: "High throw at full flow", parameters: { theta: "60 deg" } },
+    ];
+    file.combinations = [{ id: "k1", name: "Factored low throw", terms: [{ case: "low", factor: 1.4 }] }];
+    const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file });
+    const { text } = await pdfText(buf);
+    const parsed = parseSketch(file);
+    if (!parsed.ok) throw new Error("the sketch did not parse");
+    const study = solveCases(parsed.file);
+    expect(brokenWords(text, [caseReactionTable(study, "SI"), envelopeTable(study, "SI"), designLoadTable(study, "SI"), stabilityTable(study, "SI")])).toEqual([]);
+    expect(text).toMatch(/ Support Fx \(kN\)| Case Support /);
+    expect(text).toContain(" bearing ");
+    expect(text).toContain("Restoring M / friction available");
   }, 60000);
 });
