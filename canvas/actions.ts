@@ -8,8 +8,11 @@ import { deleteElements, duplicateElements } from "./commands/elements";
 import { moveElement } from "./commands/move";
 import { rotateElement } from "./commands/shape";
 import { DIRECTED, findElement, type ElementKind } from "./model/elements";
+import { defaultBodySize, polygonAround, rectangleAround } from "./model/factory";
 import { fitScene } from "./geometry/fit";
-import { gridStep, zoomAt } from "./geometry/view";
+import { snapTo } from "./geometry/snap";
+import { gridStep, toWorld, zoomAt } from "./geometry/view";
+import { bodyCommand, NEEDS_BODY, placeWithoutPointer } from "./placement";
 
 /** What the page around the editor provides to actions (dialogs, downloads, saving). */
 export interface EditorUi {
@@ -43,12 +46,22 @@ export interface Action {
   kind?: ElementKind;
   friction?: boolean;
   enabled?: (ctx: ActionContext) => boolean;
+  /** what the status line says when the action is asked for but not enabled */
+  disabledNotice?: string;
   run: (ctx: ActionContext) => void;
+  /** for the tray: add the element at once, with no pointer (Enter or Space on a tray item) */
+  placeNow?: (ctx: ActionContext) => void;
 }
 
 const ed = (ctx: ActionContext) => ctx.stores.editor.getState();
 const hasSelection = (ctx: ActionContext) => ed(ctx).selection.length > 0;
 const hasBody = (ctx: ActionContext) => ed(ctx).sketch.bodies.length > 0;
+
+/** The world point in the middle of the canvas. */
+function viewCentre(ctx: ActionContext): Vec2 {
+  const s = ed(ctx);
+  return toWorld(s.view, [s.viewport.width / 2, s.viewport.height / 2]);
+}
 
 function placeAction(id: string, label: string, kind: Exclude<ElementKind, "body">, shortcut: string, hint: string, friction = false): Action {
   return {
@@ -60,12 +73,40 @@ function placeAction(id: string, label: string, kind: Exclude<ElementKind, "body
     shortcuts: [shortcut],
     hint,
     enabled: hasBody,
+    disabledNotice: NEEDS_BODY,
     run: (ctx) => {
       const s = ed(ctx);
       s.setTool({ kind: "place", element: kind, friction });
       s.notify(`${label}: click on a body to place it (Shift+click to place several). Esc to stop.`);
     },
+    placeNow: (ctx) => {
+      const s = ed(ctx);
+      const scene = ctx.stores.scene.getState();
+      const out = placeWithoutPointer(s.sketch, scene, kind, { selection: s.selection, viewCentre: viewCentre(ctx), tol: 9 / s.view.scale, friction });
+      if (!out.ok) return s.notify(out.message);
+      if (!s.apply(out.command)) return;
+      s.setTool({ kind: "select" });
+      const body = scene.bodies.find((b) => b.id === out.body);
+      s.notify(`${label} added to ${body?.label ?? out.body}. Arrow keys move it; its properties are on the right.`);
+    },
   };
+}
+
+/** A body of the default size in the middle of the view (on the grid), selected: the tray's keyboard route. */
+function addBodyNow(ctx: ActionContext, shape: "rectangle" | "polygon") {
+  const s = ed(ctx);
+  const g = gridStep(s.view.scale);
+  const c = viewCentre(ctx);
+  const centre: Vec2 = [snapTo(c[0], g), snapTo(c[1], g)];
+  const size = defaultBodySize(s.view.scale);
+  const outline = shape === "rectangle" ? rectangleAround(centre, size) : polygonAround(centre, size);
+  if (!s.apply(bodyCommand(s.sketch, outline))) return;
+  s.setTool({ kind: "select" });
+  s.notify(
+    shape === "rectangle"
+      ? `Body added in the middle of the view, ${size[0]} m × ${size[1]} m. Arrow keys move it; its corners are in the properties on the right.`
+      : "Polygon body added in the middle of the view. Set, add or remove its corners in the properties on the right.",
+  );
 }
 
 function nudge(id: string, label: string, key: string, d: Vec2, far: boolean): Action {
@@ -117,6 +158,7 @@ export const ACTIONS: readonly Action[] = [
       ed(ctx).setTool({ kind: "body", shape: "rectangle", points: [] });
       ed(ctx).notify("Body: drag a rectangle on the canvas (a click makes 2 m × 1 m). Esc to stop.");
     },
+    placeNow: (ctx) => addBodyNow(ctx, "rectangle"),
   },
   {
     id: "add.polygon",
@@ -129,6 +171,7 @@ export const ACTIONS: readonly Action[] = [
       ed(ctx).setTool({ kind: "body", shape: "polygon", points: [] });
       ed(ctx).notify("Polygon body: click each corner, then click the first corner or press Enter. Backspace removes the last corner.");
     },
+    placeNow: (ctx) => addBodyNow(ctx, "polygon"),
   },
   placeAction("add.pin", "Pin", "pin", "P", "Holds x and y; free to turn."),
   placeAction("add.roller", "Roller", "roller", "R", "Holds along its direction, either way."),

@@ -67,3 +67,27 @@ export function snapTo(x: number, step: number): number {
 }
 
 const clamp = (x: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, x));
+
+/**
+ * Moving whole bodies: the corner of the moving outlines (already moved by the raw delta) that
+ * lands nearest another body's corner, or else its edge, within the tolerance; `from` is that
+ * corner, so the snapped delta is the raw one plus `point - from`. Null when nothing is near:
+ * the caller falls back to the grid.
+ */
+export function snapCorners(corners: readonly Vec2[], o: SnapOptions): (SnapResult & { from: Vec2 }) | null {
+  if (o.enabled === false) return null;
+  let best: (SnapResult & { from: Vec2 }) | null = null;
+  let bestD = Infinity;
+  for (const c of corners) {
+    const r = snapPoint(c, o);
+    if (r.kind !== "corner" && r.kind !== "edge") continue;
+    const d = Math.hypot(r.point[0] - c[0], r.point[1] - c[1]);
+    // a corner on a corner beats any corner on an edge, as for a single point
+    const better = !best || (r.kind === "corner" && best.kind === "edge") || (r.kind === best.kind && d < bestD);
+    if (better) {
+      best = { ...r, from: c };
+      bestD = d;
+    }
+  }
+  return best;
+}

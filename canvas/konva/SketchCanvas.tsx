@@ -10,16 +10,12 @@ import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "../context";
 import { gridStep } from "../geometry/view";
 import { fitScene } from "../geometry/fit";
-import type { ElementKind } from "../model/elements";
-import { placeCommand } from "../placement";
-import { snapPoint } from "../geometry/snap";
-import { toWorld } from "../geometry/view";
 import { GRID_MAJOR, GRID_MINOR } from "../render/palette";
 import { markFrame } from "../perf";
 import { BodyNode, CgNode, ItemNode, statesOf } from "./nodes";
 import { PointerOverlay, ResultsShape, SelectionHandles } from "./overlays";
 import { createPointerController, type HitInfo, type PointerController } from "./pointer";
-import { TRAY_MIME, type InteractionStore } from "./interaction";
+import { TRAY_MIME, type InteractionStore, type TrayDrop } from "./interaction";
 import { resolveCanvasFont } from "./font";
 import { CanvasLegend } from "./CanvasLegend";
 import { UnderlayLayer } from "./UnderlayLayer";
@@ -113,6 +109,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
   const stores = useStores();
   const containerRef = useRef<HTMLDivElement>(null);
   const stageRef = useRef<Konva.Stage | null>(null);
+  const controllerRef = useRef<PointerController | null>(null);
   const stageCallbackRef = useCallback((stage: Konva.Stage | null) => {
     stageRef.current = stage;
     if (stage) ignoreStagePointerInput(stage);
@@ -171,6 +168,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
         return null;
       },
     });
+    controllerRef.current = controller;
     onController?.(controller);
     const down = (e: PointerEvent) => {
       el.focus({ preventScroll: true });
@@ -192,6 +190,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
       el.removeEventListener("wheel", wheel);
       el.removeEventListener("dblclick", dbl);
       onController?.(null);
+      controllerRef.current = null;
       controller.dispose();
     };
   }, [stores, interaction, onController]);
@@ -218,21 +217,14 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
     const raw = e.dataTransfer.getData(TRAY_MIME);
     if (!raw) return;
     e.preventDefault();
-    const { kind, friction } = JSON.parse(raw) as { kind: ElementKind; friction?: boolean };
-    const r = containerRef.current!.getBoundingClientRect();
-    const s = stores.editor.getState();
-    const world = toWorld(s.view, [e.clientX - r.left, e.clientY - r.top]);
-    const scene = stores.scene.getState();
-    const tol = 9 / s.view.scale;
-    const p = snapPoint(world, { bodies: scene.bodies, grid: gridStep(s.view.scale), tolerance: tol, enabled: s.snap && !e.altKey }).point;
-    if (kind === "body") {
-      s.setTool({ kind: "body", shape: "rectangle", points: [] });
-      s.notify("Drag on the canvas to draw the body's rectangle.");
+    let what: TrayDrop;
+    try {
+      what = JSON.parse(raw) as TrayDrop;
+    } catch {
       return;
     }
-    const out = placeCommand(s.sketch, scene, kind, p, tol, { friction });
-    if (out.ok) s.apply(out.command);
-    else s.notify(out.message);
+    containerRef.current?.focus({ preventScroll: true });
+    controllerRef.current?.drop(what, e);
   };
 
   const cursor = panning ? "grab" : tool === "place" || tool === "body" || tool === "pick-point" || tool === "calibrate" ? "crosshair" : "default";

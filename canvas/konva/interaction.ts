@@ -5,6 +5,7 @@ import { createStore } from "zustand/vanilla";
 import type { Vec2 } from "@/solver/types";
 import type { SnapResult } from "../geometry/snap";
 import type { Box } from "../geometry/polygon";
+import type { ElementKind } from "../model/elements";
 import { NO_SHIFTS, type LabelShifts } from "../render/declutter";
 
 export interface InteractionState {
@@ -32,5 +33,14 @@ export const createInteractionStore = () =>
 
 export type InteractionStore = ReturnType<typeof createInteractionStore>;
 
-/** The drag-and-drop type of a tray item (kind and friction as JSON). */
+/** The drag-and-drop type of a tray item (a `TrayDrop` as JSON). */
 export const TRAY_MIME = "application/x-counterpoise-element";
+
+/** What a tray item carries when dragged onto the canvas. */
+export interface TrayDrop {
+  kind: ElementKind;
+  /** a contact that carries friction */
+  friction?: boolean;
+  /** the polygon body (a body without it is the rectangle) */
+  polygon?: boolean;
+}

@@ -7,16 +7,16 @@ import { rotateElement, reshapeBody } from "../commands/shape";
 import type { Command } from "../commands/define";
 import type { EditorStores } from "../context";
 import { childrenOf, findElement } from "../model/elements";
-import { snapPoint, snapTo, type SnapResult } from "../geometry/snap";
+import { snapCorners, snapPoint, snapTo, type SnapResult } from "../geometry/snap";
 import { gridStep, toWorld, zoomAt } from "../geometry/view";
 import { angleOf } from "../geometry/polygon";
 import { anchorOf, type SceneItem } from "../scene";
 import { bodyCommand, dropAttachments, elementsInBox, placeCommand } from "../placement";
-import { rectangleOutline } from "../model/factory";
+import { defaultBodySize, rectangleAround, rectangleOutline } from "../model/factory";
 import { markInput } from "../perf";
 import { moveUnderlay } from "../commands/underlay";
 import { calibrationClick } from "./underlayPointer";
-import { NOTHING_LIFTED, type InteractionStore } from "./interaction";
+import { NOTHING_LIFTED, type InteractionStore, type TrayDrop } from "./interaction";
 
 export type HitInfo =
   | { type: "element"; id: string }
@@ -35,7 +35,8 @@ export interface PointerDeps {
 type Mode =
   | { kind: "idle" }
   | { kind: "pan"; start: Vec2; view: { scale: number; x: number; y: number } }
-  | { kind: "move"; ids: string[]; start: Vec2; anchor: Vec2; moved: boolean; exclude: Set<string>; snapAnchor: boolean; last?: Command<unknown> }
+  /** `corners`: the moving bodies' corners when the drag began (they snap to other bodies) */
+  | { kind: "move"; ids: string[]; start: Vec2; anchor: Vec2; moved: boolean; exclude: Set<string>; snapAnchor: boolean; corners: Vec2[]; last?: Command<unknown> }
   | { kind: "rotate"; id: string; anchor: Vec2; flip: boolean; magnitude?: number }
   | { kind: "corner"; id: string; index: number }
   | { kind: "cg"; id: string; start: Vec2; origin: Vec2 }
@@ -221,7 +222,8 @@ export function createPointerController(deps: PointerDeps) {
       const primary = scene.byId.get(hit.id);
       if (!primary) return;
       const exclude = new Set(ids.filter((id) => scene.byId.get(id)?.kind === "body"));
-      mode = { kind: "move", ids, start: world, anchor: anchorOf(primary), moved: false, exclude, snapAnchor: primary.kind !== "body" };
+      const corners = scene.bodies.filter((b) => exclude.has(b.id)).flatMap((b) => b.outline);
+      mode = { kind: "move", ids, start: world, anchor: anchorOf(primary), moved: false, exclude, snapAnchor: primary.kind !== "body", corners };
       s.beginGesture("Move");
     } else {
       mode = { kind: "band", start: world, mode: e.shiftKey ? "add" : "replace", before: s.selection };
@@ -260,9 +262,14 @@ export function createPointerController(deps: PointerDeps) {
           delta = [r.point[0] - mode.anchor[0], r.point[1] - mode.anchor[1]];
           interaction.setState({ snap: r.kind === "none" ? null : r });
         } else if (s.snap && !e.altKey) {
+          // a body's corner goes onto another body's corner or edge; failing that the move keeps to the grid
           const g = gridStep(s.view.scale);
-          delta = [snapTo(delta[0], g), snapTo(delta[1], g)];
-        }
+          const d = delta;
+          const moved = mode.corners.map((c): Vec2 => [c[0] + d[0], c[1] + d[1]]);
+          const r = snapCorners(moved, { bodies: stores.scene.getState().bodies, grid: g, tolerance: tolerance(), exclude: mode.exclude });
+          delta = r ? [d[0] + r.point[0] - r.from[0], d[1] + r.point[1] - r.from[1]] : [snapTo(d[0], g), snapTo(d[1], g)];
+          interaction.setState({ snap: r ? { point: r.point, kind: r.kind, body: r.body, edge: r.edge } : null });
+        } else interaction.setState({ snap: null });
         mode.last = moveElement({ ids: mode.ids, delta, lookup: valueOf }) as Command<unknown>;
         s.updateGesture(mode.last);
         return;
@@ -409,6 +416,37 @@ export function createPointerController(deps: PointerDeps) {
     interaction.setState({ hover: r.point, snap: r.kind === "none" || r.kind === "grid" ? null : r });
   }
 
+  /**
+   * A tray item dropped on the canvas at a client point. A support, load or port is placed on
+   * the body there (or the nearest); a rectangle body of the default size is placed centred on
+   * the drop point, selected, as one undo step. A polygon body starts the polygon tool with its
+   * first corner at the drop point: a polygon is whatever shape the user has in mind, so the drop
+   * is taken as the first click, and the next clicks give the other corners.
+   */
+  function drop(what: TrayDrop, e: { clientX: number; clientY: number; altKey: boolean }) {
+    const s = ed();
+    if (s.readOnly) return;
+    const world = worldOf(screenOf(e));
+    const p = snap(world, e).point;
+    if (what.kind === "body" && what.polygon) {
+      s.setTool({ kind: "body", shape: "polygon", points: [p] });
+      s.notify("Polygon body: first corner placed. Click each next corner, then click the first corner or press Enter. Esc to stop.");
+      return;
+    }
+    if (what.kind === "body") {
+      // the centre keeps to the grid only: another body's corner means nothing for a centre
+      const centre = snapPoint(world, { bodies: [], grid: gridStep(s.view.scale), tolerance: 0, enabled: s.snap && !e.altKey }).point;
+      const size = defaultBodySize(s.view.scale);
+      if (!s.apply(bodyCommand(s.sketch, rectangleAround(centre, size)))) return;
+      s.setTool({ kind: "select" });
+      s.notify(`Body added, ${size[0]} m × ${size[1]} m. Drag its corners to reshape it.`);
+      return;
+    }
+    const out = placeCommand(s.sketch, stores.scene.getState(), what.kind, p, tolerance(), { friction: what.friction });
+    if (!out.ok) return s.notify(out.message);
+    if (s.apply(out.command)) s.setTool({ kind: "select" });
+  }
+
   function leave() {
     if (mode.kind === "idle") interaction.setState({ hover: null, snap: null });
   }
@@ -429,7 +467,7 @@ export function createPointerController(deps: PointerDeps) {
     touches.clear();
   }
 
-  return { down, hover, leave, wheel, cancel, finishPolygon, dispose, get mode() { return mode.kind; } };
+  return { down, hover, leave, wheel, drop, cancel, finishPolygon, dispose, get mode() { return mode.kind; } };
 }
 
 export type PointerController = ReturnType<typeof createPointerController>;

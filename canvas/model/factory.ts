@@ -47,6 +47,35 @@ export function rectangleOutline(a: Vec2, b: Vec2): Vec2[] {
   ];
 }
 
+/**
+ * The size (m) of a body placed in one go (dropped from the tray, or added from the keyboard):
+ * 2 m × 1 m, times the power of ten that makes it about 240 px wide at this zoom, so it is
+ * neither a speck nor wider than the view, and its size stays a round number.
+ */
+export function defaultBodySize(scalePxPerM: number): Vec2 {
+  const k = Math.round(Math.log10(240 / (2 * scalePxPerM)));
+  const w = roundTo(2 * 10 ** k, 1e-9);
+  return [w, roundTo(w / 2, 1e-9)];
+}
+
+/** A rectangle of this size centred on a point. */
+export function rectangleAround(centre: Vec2, size: Vec2): Vec2[] {
+  const [w, h] = size;
+  return rectangleOutline([centre[0] - w / 2, centre[1] - h / 2], [centre[0] + w / 2, centre[1] + h / 2]);
+}
+
+/** A trapezoid of this overall size centred on a point: a polygon body whose corners are then edited one by one. */
+export function polygonAround(centre: Vec2, size: Vec2): Vec2[] {
+  const [w, h] = size;
+  const [x, y] = centre;
+  return [
+    [x - w / 2, y - h / 2],
+    [x + w / 2, y - h / 2],
+    [x + w / 4, y + h / 2],
+    [x - w / 4, y + h / 2],
+  ];
+}
+
 /** An element of any attached kind, with the id left for the caller. */
 export function newAttached(kind: Exclude<ElementKind, "body">, id: string, o: PlaceOptions): AnyElement {
   const angle = r(o.angle ?? DEFAULT_ANGLE[kind] ?? 0);

@@ -1,11 +1,15 @@
 "use client";
 // "Add": the element kinds, drawn with their symbols. Click to choose the tool (then click on the
-// canvas), or drag one onto the canvas. Generated from the registered actions.
+// canvas), or drag one onto the canvas. Enter or Space on a focused item adds the element at
+// once (a body in the middle of the view, anything else on the selected or nearest body), so the
+// editor needs no pointer. Generated from the registered actions.
+import type { KeyboardEvent } from "react";
 import { ACTIONS, shortcutLabel, type Action } from "@/canvas/actions";
-import { TRAY_MIME } from "@/canvas/konva/interaction";
+import { TRAY_MIME, type TrayDrop } from "@/canvas/konva/interaction";
 import { useEditor } from "@/canvas/context";
+import { NEEDS_BODY } from "@/canvas/placement";
 import { SymbolIcon } from "./SymbolIcon";
-import { useActionRunner } from "./useActions";
+import { useActionContext, useActionRunner } from "./useActions";
 import { HEADING } from "./ui";
 
 const SECTIONS: Array<{ title: string; ids: string[] }> = [
@@ -30,15 +34,31 @@ function useToolKey() {
   });
 }
 
+const activates = (e: KeyboardEvent) => (e.key === "Enter" || e.key === " ") && !e.altKey && !e.ctrlKey && !e.metaKey;
+
 export function Tray() {
   const run = useActionRunner();
+  const getCtx = useActionContext();
+  const needsBody = () => getCtx().stores.editor.getState().notify(NEEDS_BODY);
+  // Enter and Space place at once instead of the button's click (which only chooses the tool):
+  // cancelling the keydown stops Enter's click, cancelling Space's keyup stops its click
+  const onKeyDown = (a: Action, disabled: boolean) => (e: KeyboardEvent) => {
+    if (!activates(e)) return;
+    e.preventDefault();
+    if (e.repeat) return;
+    if (disabled) needsBody();
+    else a.placeNow?.(getCtx());
+  };
   const tool = useToolKey();
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
   return (
-    <section aria-labelledby="tray-heading" className="border-b border-rule px-3 pb-3 pt-2">
+    <section aria-labelledby="tray-heading" aria-describedby="tray-keys" className="border-b border-rule px-3 pb-3 pt-2">
       <h2 id="tray-heading" className={HEADING}>
         Add
       </h2>
+      <p id="tray-keys" className="sr-only">
+        Enter or Space adds it now: a body in the middle of the view, anything else on the selected body. A click chooses the tool, then click on the canvas.
+      </p>
       {SECTIONS.map((sec) => (
         <div key={sec.title} className="mt-2">
           <p className="mb-1 text-[10.5px] font-medium uppercase tracking-wider text-ink-faint">{sec.title}</p>
@@ -57,10 +77,15 @@ export function Tray() {
                   title={`${a.label}${key ? ` (${shortcutLabel(key)})` : ""} — ${disabled ? "draw a body first" : a.hint}`}
                   draggable={!disabled}
                   onDragStart={(e) => {
-                    e.dataTransfer.setData(TRAY_MIME, JSON.stringify({ kind: a.kind, friction: a.friction }));
+                    const drop: TrayDrop = { kind: a.kind!, friction: a.friction, polygon: id === "add.polygon" || undefined };
+                    e.dataTransfer.setData(TRAY_MIME, JSON.stringify(drop));
                     e.dataTransfer.effectAllowed = "copy";
                   }}
-                  onClick={() => (disabled ? undefined : run(a.id))}
+                  onKeyDown={onKeyDown(a, disabled)}
+                  onKeyUp={(e) => {
+                    if (e.key === " ") e.preventDefault();
+                  }}
+                  onClick={() => (disabled ? needsBody() : run(a.id))}
                   className={`group flex h-[58px] flex-col items-center justify-center gap-0.5 rounded border text-center text-[10.5px] leading-tight transition-colors ${
                     active ? "border-accent bg-accent-soft text-accent-deep" : "border-transparent text-ink-soft hover:border-rule hover:bg-paper"
                   } ${disabled ? "cursor-not-allowed opacity-40" : "cursor-grab"}`}

@@ -58,6 +58,8 @@ export function useShortcuts(getCtx: () => ActionContext, interaction: Interacti
       if (!action) return;
       if (action.enabled && !action.enabled(ctx)) {
         if (action.group === "edit") e.preventDefault();
+        // say why nothing happened (P with no body yet), rather than ignore the key
+        if (action.disabledNotice) s.notify(action.disabledNotice);
         return;
       }
       e.preventDefault();

@@ -1,6 +1,7 @@
 // The canvas's pointer controller (jsdom, no Konva): a drag is one undo step and Escape rolls it
 // back (from the keyboard too); a support dropped on another body attaches to it; handles turn
-// and reshape; tools place; a finger is forgotten when it lifts; a finished drag is autosaved.
+// and reshape; tools place; a finger is forgotten when it lifts; a finished drag is autosaved;
+// a dragged body snaps to other bodies; tray items dropped on the canvas place what they show.
 import { useCallback } from "react";
 import { fireEvent, render } from "@testing-library/react";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
@@ -34,6 +35,7 @@ let stores: EditorStores;
 let stops: Array<() => void> = [];
 let hit: HitInfo | null = null;
 let controller: ReturnType<typeof createPointerController>;
+let interaction: ReturnType<typeof createInteractionStore>;
 
 function pointer(type: "pointermove" | "pointerup", x: number, y: number, extra: Partial<PointerEventInit> = {}) {
   window.dispatchEvent(new MouseEvent(type, { ...screenOf(x, y), bubbles: true, ...extra }));
@@ -49,7 +51,8 @@ beforeEach(() => {
   stops = [linkAnalysis(editor, analysis), linkScene(editor, analysis, scene)];
   stores = { editor, analysis, scene };
   hit = null;
-  controller = createPointerController({ stores, interaction: createInteractionStore(), container: () => null, hitTest: () => hit });
+  interaction = createInteractionStore();
+  controller = createPointerController({ stores, interaction, container: () => null, hitTest: () => hit });
 });
 afterEach(() => {
   controller.dispose();
@@ -112,6 +115,109 @@ describe("dragging", () => {
     pointer("pointerup", 2, 0.5);
     expect(ed().selection).toEqual(["p1"]);
     expect(ed().past).toHaveLength(0);
+  });
+});
+
+describe("dragging a body near another body", () => {
+  // a third body off the grid (grid step 0.2 m at 100 px/m), so a corner snap cannot be mistaken for the grid's
+  const addOffGrid = () =>
+    ed().reset({ ...ed().sketch, bodies: [...ed().sketch.bodies, newBody("b3", [[3.03, 2.07], [4.03, 2.07], [4.03, 3.07], [3.03, 3.07]], "Off grid")] });
+  const outline = (id: string) => ed().sketch.bodies.find((b) => b.id === id)!.outline;
+
+  it("lands its nearest corner exactly on the other body's corner, showing the corner mark, as one undo step", () => {
+    addOffGrid();
+    hit = { type: "element", id: "b1" };
+    down(1, 0.5);
+    // b1's top-right corner (2, 1) is carried to (3.0, 2.1): 0.042 m from b3's corner (3.03, 2.07), within 9 px
+    pointer("pointermove", 2, 1.6);
+    expect(interaction.getState().snap).toMatchObject({ kind: "corner", body: "b3", point: [3.03, 2.07] });
+    pointer("pointerup", 2, 1.6);
+    expect(outline("b1")).toEqual([[1.03, 1.07], [3.03, 1.07], [3.03, 2.07], [1.03, 2.07]]);
+    // the body's elements go with it
+    expect(el("s1").at).toEqual([2.03, 1.07]);
+    expect(interaction.getState().snap).toBeNull();
+    expect(ed().past).toHaveLength(1);
+    ed().undo();
+    expect(outline("b1")).toEqual([[0, 0], [2, 0], [2, 1], [0, 1]]);
+  });
+
+  it("with Alt held moves by the pointer alone: no corner, no grid, no mark", () => {
+    addOffGrid();
+    hit = { type: "element", id: "b1" };
+    down(1, 0.5);
+    pointer("pointermove", 2, 1.6, { altKey: true });
+    expect(interaction.getState().snap).toBeNull();
+    pointer("pointerup", 2, 1.6, { altKey: true });
+    const [x, y] = outline("b1")[2] as number[];
+    expect(x).toBeCloseTo(3, 9);
+    expect(y).toBeCloseTo(2.1, 9);
+  });
+
+  it("puts a corner on another body's edge, keeping to the grid along it", () => {
+    addOffGrid();
+    hit = { type: "element", id: "b1" };
+    down(1, 0.5);
+    // b1's bottom-right corner (2, 0) is carried to (3.0, 2.45): 0.03 m from b3's left edge x = 3.03,
+    // and along that edge y keeps to the grid's 2.4
+    pointer("pointermove", 2, 2.95);
+    expect(interaction.getState().snap).toMatchObject({ kind: "edge", body: "b3", point: [3.03, 2.4] });
+    pointer("pointerup", 2, 2.95);
+    expect(outline("b1")).toEqual([[1.03, 2.4], [3.03, 2.4], [3.03, 3.4], [1.03, 3.4]]);
+  });
+
+  it("away from other bodies keeps the move on the grid, with no mark", () => {
+    hit = { type: "element", id: "b1" };
+    down(1, 0.5);
+    pointer("pointermove", 1.33, 2.47);
+    expect(interaction.getState().snap).toBeNull();
+    pointer("pointerup", 1.33, 2.47);
+    expect(outline("b1")[0]).toEqual([0.4, 2]);
+  });
+});
+
+describe("dropping a tray item on the canvas", () => {
+  const drop = (what: Parameters<typeof controller.drop>[0], x: number, y: number, altKey = false) => controller.drop(what, { ...screenOf(x, y), altKey });
+
+  it("a rectangle body: 2 m × 1 m centred on the snapped drop point, selected, one undo step", () => {
+    drop({ kind: "body" }, 1.03, 3.08);
+    // the centre snaps to the 0.2 m grid: (1.0, 3.0)
+    expect(ed().sketch.bodies[2]).toMatchObject({ id: "b3", outline: [[0, 2.5], [2, 2.5], [2, 3.5], [0, 3.5]] });
+    expect(ed().selection).toEqual(["b3"]);
+    expect(ed().tool.kind).toBe("select");
+    expect(ed().notice).toBe("Body added, 2 m × 1 m. Drag its corners to reshape it.");
+    expect(ed().past).toHaveLength(1);
+    ed().undo();
+    expect(ed().sketch.bodies).toHaveLength(2);
+  });
+
+  it("a rectangle body when zoomed far out is ten times the size, so it is not a speck", () => {
+    ed().setView({ scale: 10, x: 100, y: 500 });
+    controller.drop({ kind: "body" }, { clientX: 100 + 30 * 10, clientY: 500 - 40 * 10, altKey: false });
+    expect(ed().sketch.bodies[2].outline).toEqual([[20, 35], [40, 35], [40, 45], [20, 45]]);
+  });
+
+  it("a polygon body starts the polygon tool with its first corner at the drop point; clicks add the rest", () => {
+    drop({ kind: "body", polygon: true }, 0.02, 3.01);
+    expect(ed().tool).toEqual({ kind: "body", shape: "polygon", points: [[0, 3]] });
+    expect(ed().sketch.bodies).toHaveLength(2);
+    expect(ed().notice).toMatch(/first corner placed/);
+    for (const [x, y] of [[2, 3], [1, 4.4]]) down(x, y);
+    controller.finishPolygon();
+    expect(ed().sketch.bodies[2]).toMatchObject({ id: "b3", outline: [[0, 3], [2, 3], [1, 4.4]] });
+    expect(ed().past).toHaveLength(1);
+  });
+
+  it("a contact with friction lands on the body's edge, pointing into it, selected", () => {
+    drop({ kind: "contact", friction: true }, 5.02, 1.03);
+    expect(ed().sketch.supports[1]).toMatchObject({ id: "s2", body: "b2", kind: "contact", at: [5, 1], angle: -90, mu: 0.3 });
+    expect(ed().selection).toEqual(["s2"]);
+  });
+
+  it("a support with no body in the sketch says why and adds nothing", () => {
+    ed().reset(emptySketch());
+    drop({ kind: "pin" }, 1, 1);
+    expect(ed().sketch.supports).toHaveLength(0);
+    expect(ed().notice).toMatch(/^Draw a body first/);
   });
 });
 
