@@ -8,6 +8,7 @@ import { tableCells } from "@/lib/calcsheet/table-layout";
 import { parseSketch, solveCases } from "@/solver";
 import { caseReactionTable, designLoadTable, envelopeTable, stabilityTable, type Table } from "@/solver/report";
 import { loadFixture } from "../solver/helpers";
+import { longLabelFile } from "./long-labels";
 
 async function pdfText(buf: Buffer): Promise<{ text: string; pages: number }> {
   const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
@@ -43,18 +44,8 @@ async function pdfItems(buf: Buffer): Promise<{ pages: PageItem[][]; pageWidth: 
 }
 
 /** The pump set with long support ids, long case names, a combination and a sweep (demo data). */
-function longLabelFile() {
-  const file = loadFixture("pump-set-hold-down.json");
-  const ids: Record<string, string> = { leftPad: "leftRubberBearingPadUnderEngine", rightPad: "rightRubberBearingPadUnderPump", strap: "holdDownStrapToFloorAnchor" };
-  for (const s of file.supports ?? []) s.id = ids[s.id];
-  file.parameters = { mdot: "40 kg/s" };
-  file.ports![0].massFlow = "mdot";
-  file.massSources![0].massFlow = "mdot";
-  file.cases = [
-    { id: "idle", name: "Idling with the discharge valve shut", parameters: { mdot: "0.001 kg/s" } },
-    { id: "duty", name: "Duty point", parameters: { mdot: "40 kg/s" } },
-    { id: "runout", name: "Run-out at the end of the curve", parameters: { mdot: "55 kg/s" } },
-  ];
+function longLabelFileWithStudies() {
+  const file = longLabelFile();
   file.combinations = [{ id: "c", name: "Duty point with the dead load factored", terms: [{ case: "duty", factor: 1.2 }] }];
   file.sweeps = [{ id: "s", parameter: "mdot", from: 0, to: 60, points: 31, quantities: [{ support: "holdDownStrapToFloorAnchor", component: "margin" }] }];
   return file;
@@ -155,7 +146,7 @@ describe("calc sheet PDF", () => {
   }, 60000);
 
   it("prints every table word whole, inside the margins, with the cautions on every page", async () => {
-    const file = longLabelFile();
+    const file = longLabelFileWithStudies();
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Pump set", version: 2, savedAt: new Date(), signoff: [], file, units: "US" });
     const { text } = await pdfText(buf);
     const { pages, pageWidth } = await pdfItems(buf);

@@ -9,6 +9,7 @@ import { layoutTable, words, type Measure, type TableLayout } from "@/lib/calcsh
 import { parseSketch, solveCases } from "@/solver";
 import { caseReactionTable, envelopeTable, stabilityTable, type Table } from "@/solver/report";
 import { loadFixture } from "../solver/helpers";
+import { longLabelFile } from "./long-labels";
 
 /** A4 less the sheet's margins of 44 pt a side. */
 const PAGE = 595.28 - 2 * 44;
@@ -62,17 +63,7 @@ function trailerStudy() {
 
 /** The pump set with long support ids and long case names (demo data). */
 function longLabelStudy() {
-  const file = loadFixture("pump-set-hold-down.json");
-  const ids: Record<string, string> = { leftPad: "leftRubberBearingPadUnderEngine", rightPad: "rightRubberBearingPadUnderPump", strap: "holdDownStrapToFloorAnchor" };
-  for (const s of file.supports ?? []) s.id = ids[s.id];
-  file.parameters = { mdot: "40 kg/s" };
-  file.ports![0].massFlow = "mdot";
-  file.massSources![0].massFlow = "mdot";
-  file.cases = [
-    { id: "idle", name: "Idling with the discharge valve shut", parameters: { mdot: "0.001 kg/s" } },
-    { id: "duty", name: "Duty point", parameters: { mdot: "40 kg/s" } },
-    { id: "runout", name: "Run-out at the end of the curve", parameters: { mdot: "55 kg/s" } },
-  ];
+  const file = longLabelFile();
   return study(file);
 }
 
