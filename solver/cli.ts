@@ -6,7 +6,7 @@ import { solveFile } from "./index";
 
 function main(argv: string[]): number {
   const file = argv[0];
-  if (!file || argv.length > 1) {
+  if (!file || argv.length > 1 || file === "--help" || file === "-h") {
     process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: "usage: npm run -s solve -- FILE (FILE is a sketch file, or - for standard input; -s keeps npm's banner off standard output)" }] }, null, 2) + "\n");
     return 1;
   }
@@ -14,7 +14,9 @@ function main(argv: string[]): number {
   try {
     text = readFileSync(file === "-" ? 0 : file, "utf8");
   } catch (err) {
-    process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: `cannot read ${file}: ${(err as NodeJS.ErrnoException).code ?? (err as Error).message}` }] }, null, 2) + "\n");
+    const code = (err as NodeJS.ErrnoException).code;
+    const why = code === "ENOENT" ? "no such file" : code === "EISDIR" ? "it is a folder, not a file" : code === "EACCES" ? "permission denied" : (code ?? (err as Error).message);
+    process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: `cannot read ${file}: ${why}` }] }, null, 2) + "\n");
     return 1;
   }
   const result = solveFile(text);

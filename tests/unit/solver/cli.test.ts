@@ -33,6 +33,12 @@ describe("npm run solve", () => {
   it("a missing file is an error on stdout too", () => {
     const r = solveCli("/nonexistent/sketch.json");
     expect(r.status).toBe(1);
-    expect(JSON.parse(r.stdout).errors[0].message).toMatch(/cannot read \/nonexistent\/sketch.json: ENOENT/);
+    expect(JSON.parse(r.stdout).errors[0].message).toBe("cannot read /nonexistent/sketch.json: no such file");
+  }, 30000);
+
+  it("--help prints the usage as the same JSON error shape", () => {
+    const r = solveCli("--help");
+    expect(r.status).toBe(1);
+    expect(JSON.parse(r.stdout).errors[0].message).toMatch(/^usage: npm run -s solve -- FILE/);
   }, 30000);
 });
