@@ -108,7 +108,8 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
     if (!ex) return;
     const s = stores.editor.getState();
     s.apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
-    s.notify(`${ex.title}: ${ex.summary} Undo returns to your sketch.`);
+    // the undo hint first: the notice line is cut to the window's width
+    s.notify(`Opened “${ex.title}”. Undo (Ctrl+Z) returns to your sketch. ${ex.summary}`);
     files.fit();
   };
 
@@ -210,7 +211,7 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
       if (ex && kept && !kept.readOnly && hasContent(kept.sketch)) {
         // an example link never throws away the sketch kept here: opening it is one undo step
         store.getState().apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
-        store.getState().notify(`${ex.title}: ${ex.summary} Undo (Ctrl+Z) returns to the sketch you had here.`);
+        store.getState().notify(`Opened “${ex.title}”. Undo (Ctrl+Z) returns to the sketch you had here. ${ex.summary}`);
       } else if (ex) store.getState().reset(ex.sketch);
       store.getState().setReadOnly(Boolean(out.ok && out.sketch && out.readOnly));
       if (!out.ok) store.getState().notify(out.message);

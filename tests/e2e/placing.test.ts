@@ -1,0 +1,149 @@
+// Placing elements in Chromium without drawing them: a rectangle dragged from the tray onto an
+// empty canvas, a pin added with the keyboard alone, the shortcut that needs a body first, and an
+// example link opened over a scratch sketch that Undo brings back.
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { SketchFile } from "@/solver/schema";
+import { BASE_URL, openBrowser, shot } from "./browser";
+import { clickAt, emptySketchView, form } from "./editor-helpers";
+
+const SCRATCH_KEY = "counterpoise:scratch-sketch:v1";
+const MY_TITLE = "Gearbox on two bearers";
+/** The new body's row in the element list: its id, then the name it is given ("Body 1"). */
+const BODY_ROW = "Body b1, Body 1";
+
+/** The scratch sketch as the browser keeps it (null until the first autosave). */
+async function storedSketch(page: Page): Promise<SketchFile | null> {
+  const text = await page.evaluate((key) => window.localStorage.getItem(key), SCRATCH_KEY);
+  return text ? (JSON.parse(text) as { sketch: SketchFile }).sketch : null;
+}
+
+const elementCount = (page: Page) => page.getByRole("heading", { name: /Elements/ }).textContent();
+const row = (page: Page, name: string) => page.getByRole("list", { name: "Elements of the sketch" }).getByRole("button", { name, exact: true });
+
+async function openScratch(page: Page, query = "") {
+  await page.goto(BASE_URL + "/sketches/new" + query);
+  await page.getByTestId("sketch-canvas").waitFor();
+  await page.locator("[data-testid=sketch-canvas] canvas").first().waitFor();
+}
+
+describe("placing elements from the tray and the keyboard", () => {
+  let ctx: BrowserContext;
+  let page: Page;
+  beforeAll(async () => {
+    ctx = await openBrowser();
+    page = await ctx.newPage();
+  });
+  afterAll(async () => {
+    await ctx?.close();
+  });
+
+  it("says to draw a body first when the pin shortcut is pressed on an empty sketch", async () => {
+    await openScratch(page);
+    expect(await elementCount(page)).toMatch(/\(0\)/);
+    expect(await page.getByTestId("tray-pin").getAttribute("aria-disabled")).toBe("true");
+    await page.getByTestId("sketch-canvas").focus();
+    await page.keyboard.press("p");
+    await expect.poll(() => page.getByTestId("notice").textContent()).toBe("Draw a body first: supports, loads and ports belong to a body.");
+    expect(await elementCount(page)).toMatch(/\(0\)/);
+    await shot(page, "placing-pin-needs-body");
+  });
+
+  it("drops a 2 m × 1 m body, selected, where the rectangle is dragged onto the empty canvas", async () => {
+    const map = await emptySketchView(page);
+    const canvasBox = (await page.getByTestId("sketch-canvas").boundingBox())!;
+    // (1, 1) is on the grid at every step the default zoom may use, so the body is centred there
+    const drop = map.at(1, 1);
+    await page.getByTestId("tray-body").dragTo(page.getByTestId("sketch-canvas"), { targetPosition: { x: drop.x - canvasBox.x, y: drop.y - canvasBox.y } });
+    await expect.poll(() => elementCount(page)).toMatch(/\(1\)/);
+    expect(await row(page, BODY_ROW).getAttribute("aria-pressed")).toBe("true");
+    await expect.poll(() => form(page).textContent()).toMatch(/Body b1/);
+
+    // the corners in the properties panel: 2 m × 1 m around the drop point (the default body at 120 px/m)
+    const corner = async (i: number, k: "x" | "y") => Number(await form(page).getByLabel(`Corner ${i} ${k}`, { exact: true }).inputValue());
+    const corners: number[][] = [];
+    for (let i = 1; i <= 4; i++) corners.push([await corner(i, "x"), await corner(i, "y")]);
+    expect(await form(page).getByLabel("Corner 5 x", { exact: true }).count()).toBe(0);
+    const xs = corners.map((c) => c[0]);
+    const ys = corners.map((c) => c[1]);
+    expect(Math.max(...xs) - Math.min(...xs)).toBeCloseTo(2, 6);
+    expect(Math.max(...ys) - Math.min(...ys)).toBeCloseTo(1, 6);
+    expect((Math.max(...xs) + Math.min(...xs)) / 2).toBeCloseTo(1, 6);
+    expect((Math.max(...ys) + Math.min(...ys)) / 2).toBeCloseTo(1, 6);
+
+    // the same outline is what the browser keeps
+    await expect.poll(async () => (await storedSketch(page))?.bodies.length).toBe(1);
+    const kept = (await storedSketch(page))!.bodies[0];
+    expect(kept).toMatchObject({ id: "b1", label: "Body 1" });
+    const keptCorners = kept.outline.map((p) => p.map(Number)).sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+    [[0, 0.5], [0, 1.5], [2, 0.5], [2, 1.5]].forEach(([x, y], i) => {
+      expect(keptCorners[i][0]).toBeCloseTo(x, 6);
+      expect(keptCorners[i][1]).toBeCloseTo(y, 6);
+    });
+
+    // and on screen it spans 0 … 2 m: a click just inside either end selects it, just outside does not
+    const selected = () => row(page, BODY_ROW).getAttribute("aria-pressed");
+    for (const [inside, outside] of [[[0.2, 1.25], [-0.25, 1.25]], [[1.8, 1.25], [2.25, 1.25]]]) {
+      await clickAt(page, map.at(outside[0], outside[1]));
+      await expect.poll(selected).toBe("false");
+      await clickAt(page, map.at(inside[0], inside[1]));
+      await expect.poll(selected).toBe("true");
+    }
+    expect(await elementCount(page)).toMatch(/\(1\)/);
+    await shot(page, "placing-body-dropped");
+  });
+
+  it("adds a pin to the body with the keyboard alone: Enter on the tray's Pin", async () => {
+    expect(await row(page, BODY_ROW).getAttribute("aria-pressed")).toBe("true");
+    const pin = page.getByTestId("tray-pin");
+    expect(await pin.getAttribute("aria-disabled")).toBe("false");
+    await pin.focus();
+    await page.keyboard.press("Enter");
+    await expect.poll(() => elementCount(page)).toMatch(/\(2\)/);
+    await row(page, "Pin s1").waitFor();
+    await expect.poll(() => form(page).textContent()).toMatch(/Pin s1/);
+    expect(await form(page).getByLabel("Belongs to").inputValue()).toBe("b1");
+    await expect.poll(() => page.getByTestId("notice").textContent()).toMatch(/^Pin added to Body 1\./);
+    // Enter was not also a click on the button: no place tool waiting for a click on the canvas
+    expect(await pin.getAttribute("aria-pressed")).toBe("false");
+
+    // kept attached to the body, in the middle of its bottom edge (where a support goes by itself)
+    await expect.poll(async () => (await storedSketch(page))?.supports.length).toBe(1);
+    const s = (await storedSketch(page))!.supports[0];
+    expect(s).toMatchObject({ id: "s1", kind: "pin", body: "b1" });
+    expect(Number(s.at[0])).toBeCloseTo(1, 6);
+    expect(Number(s.at[1])).toBeCloseTo(0.5, 6);
+    await shot(page, "placing-pin-by-keyboard");
+  });
+
+  it("opens an example over the scratch sketch as one undo step: Undo brings the sketch back", async () => {
+    // nothing selected: the panel shows the sketch's own fields
+    await page.getByTestId("sketch-canvas").focus();
+    await page.keyboard.press("Escape");
+    await page.getByTestId("sketch-form").waitFor();
+    await page.getByLabel("Title").fill(MY_TITLE);
+    await page.getByLabel("Title").press("Enter");
+    await expect.poll(async () => (await storedSketch(page))?.title).toBe(MY_TITLE);
+
+    await openScratch(page, "?example=pump-skid");
+    await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
+    // the skid, its two bearers, the suction and the discharge
+    await expect.poll(() => elementCount(page)).toMatch(/\(5\)/);
+    await expect.poll(() => page.getByTestId("notice").textContent()).toMatch(/Undo \(Ctrl\+Z\) returns to the sketch you had here/);
+    await expect.poll(() => page.getByTestId("undo").isEnabled()).toBe(true);
+    await shot(page, "placing-example-opened");
+
+    await page.getByTestId("undo").click();
+    await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe(MY_TITLE);
+    await expect.poll(() => elementCount(page)).toMatch(/\(2\)/);
+    await row(page, "Pin s1").waitFor();
+    // and the browser keeps that sketch again, not the example
+    await expect.poll(async () => (await storedSketch(page))?.title).toBe(MY_TITLE);
+    expect((await storedSketch(page))!.supports.map((x) => x.id)).toEqual(["s1"]);
+    await shot(page, "placing-example-undone");
+
+    // Redo opens the example again
+    await page.keyboard.press("Control+Shift+z");
+    await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
+  });
+});
