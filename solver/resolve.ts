@@ -14,6 +14,7 @@ import { resolveParameters, type ParameterPlan } from "./parameters";
 import type { SketchFile } from "./schema";
 import type { FieldError, Sketch, SolveWarning } from "./types";
 import { G0 } from "./constants";
+import { NEGATIVE_GRAVITY } from "./validate";
 
 /** Where an evaluated expression is written, and how to evaluate it again. */
 export interface FieldSlot {
@@ -164,9 +165,8 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
   evalField(file.gravity ?? G0, "acceleration", "gravity", top, "gravity");
   if (typeof top.gravity === "number" && top.gravity < 0) {
     // the format fixes gravity's direction; a negative value would silently turn every weight upward
-    const message = "must not be negative: gravity acts in −y (to have it act another way, rotate the sketch; 0 turns weights off)";
-    errors.push({ path: "gravity", message });
-    fields.gravity = { error: message };
+    errors.push({ path: "gravity", message: NEGATIVE_GRAVITY });
+    fields.gravity = { error: NEGATIVE_GRAVITY };
   }
 
   const sketch: Sketch = {

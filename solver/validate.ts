@@ -37,7 +37,7 @@ export function validateReferences(sketch: Sketch): FieldError[] {
 const nonNegative = (v: number | undefined) => v === undefined || v >= 0;
 const positive = (v: number | undefined) => v === undefined || v > 0;
 
-/** The words resolve.ts gives a negative gravity at parse time; a sweep point says the same. */
+/** The words for a negative gravity, at parse time (resolve.ts) and at a sweep point alike. */
 export const NEGATIVE_GRAVITY = "must not be negative: gravity acts in −y (to have it act another way, rotate the sketch; 0 turns weights off)";
 
 /** Value ranges, the information each port needs, and loads that must be fully given. */

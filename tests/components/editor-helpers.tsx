@@ -4,12 +4,27 @@ import { render, screen } from "@testing-library/react";
 import { Editor } from "@/components/editor/Editor";
 import { scratchPersistence } from "@/canvas/persistence";
 import type { SketchFile } from "@/solver/schema";
+import { emptySketch } from "@/canvas/model/elements";
+import { newBody } from "@/canvas/model/factory";
 import { createEditorStore } from "@/canvas/store";
 import { EditorProvider } from "@/canvas/context";
 import { importSketchText } from "@/canvas/files";
 import type { ActionContext } from "@/canvas/actions";
 import { ResultsDock } from "@/components/results/ResultsDock";
 import { ActionContextCtx } from "@/components/editor/useActions";
+
+/** A 4 m beam on a left pin and a right contact with a 10 kN load at mid-span (demo data). */
+export function beam(loadLabel?: string): SketchFile {
+  return {
+    ...emptySketch("Beam on a pin and a contact"),
+    bodies: [newBody("b1", [[0, 0], [4, 0], [4, 0.5], [0, 0.5]], "Beam")],
+    supports: [
+      { id: "s1", body: "b1", kind: "pin", at: [0, 0], label: "left pin" },
+      { id: "s2", body: "b1", kind: "contact", at: [4, 0], angle: 90, label: "right pad" },
+    ],
+    loads: [{ id: "l1", body: "b1", kind: "force", at: [2, 0.5], magnitude: "10 kN", angle: -90, ...(loadLabel ? { label: loadLabel } : {}) }],
+  };
+}
 
 export function memoryStorage(initial?: SketchFile) {
   const mem = new Map<string, string>();

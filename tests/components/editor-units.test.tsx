@@ -9,28 +9,15 @@ import { EditorProvider } from "@/canvas/context";
 import { analyseCore, expressionFields } from "@/canvas/analysis/core";
 import type { Runner } from "@/canvas/analysis/store";
 import { setField, type Command } from "@/canvas/commands";
-import { emptySketch } from "@/canvas/model/elements";
-import { newBody } from "@/canvas/model/factory";
 import type { SketchFile } from "@/solver/schema";
 import { ElementForm } from "@/components/editor/ElementForm";
 import { drawingScale } from "@/components/editor/Toolbar";
 import { errorPlace } from "@/components/results/errorPlace";
 import { parseLength } from "@/components/results/HandCheckView";
-import { mountResultsDock, renderEditor } from "./editor-helpers";
+import { beam, mountResultsDock, renderEditor } from "./editor-helpers";
 
 const c = <A,>(cmd: Command<A>) => cmd as unknown as Command<unknown>;
 
-function beam(): SketchFile {
-  return {
-    ...emptySketch("Beam on a pin and a contact"),
-    bodies: [newBody("b1", [[0, 0], [4, 0], [4, 0.5], [0, 0.5]], "Beam")],
-    supports: [
-      { id: "s1", body: "b1", kind: "pin", at: [0, 0], label: "left pin" },
-      { id: "s2", body: "b1", kind: "contact", at: [4, 0], angle: 90, label: "right pad" },
-    ],
-    loads: [{ id: "l1", body: "b1", kind: "force", at: [2, 0.5], magnitude: "10 kN", angle: -90, label: "F1" }],
-  };
-}
 
 /** What the browser's worker answers: only the fields that are expressions (or errors). */
 const workerLike: Runner = (sketch, done) => {
@@ -41,7 +28,7 @@ const workerLike: Runner = (sketch, done) => {
 describe("numeric fields with the worker's answer", () => {
   it("shows a plain number's value in the field's unit, in SI and in US", async () => {
     const user = userEvent.setup();
-    const editor = createEditorStore({ sketch: beam() });
+    const editor = createEditorStore({ sketch: beam("F1") });
     render(
       <EditorProvider editor={editor} runner={workerLike}>
         <ElementForm id="l1" />
@@ -64,7 +51,7 @@ describe("numeric fields with the worker's answer", () => {
 
 describe("input errors in words", () => {
   it("names the element by its label and the field in words, not the file path", async () => {
-    const editor = mountResultsDock(beam());
+    const editor = mountResultsDock(beam("F1"));
     act(() => void editor.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "3 * span" }))));
     const stale = screen.getByTestId("stale");
     expect(stale).toHaveTextContent('the input has an error — Point force F1 — magnitude: unknown name "span"');
@@ -72,7 +59,7 @@ describe("input errors in words", () => {
   });
 
   it("words each kind of path", () => {
-    const s = beam();
+    const s = beam("F1");
     expect(errorPlace(s, "supports[1].at[0]")).toBe("Contact right pad — position x");
     expect(errorPlace(s, "supports[1].angle")).toBe("Contact right pad — pushes toward");
     expect(errorPlace(s, "bodies[0].outline[2][1]")).toBe("Body Beam — outline corner 3 y");
@@ -83,7 +70,7 @@ describe("input errors in words", () => {
 
   it("fades the hand check while the result shown is an earlier one", async () => {
     const user = userEvent.setup();
-    const editor = mountResultsDock(beam());
+    const editor = mountResultsDock(beam("F1"));
     await user.click(screen.getByRole("tab", { name: "Hand check" }));
     expect(screen.getByTestId("hand-sums")).not.toHaveClass("opacity-60");
     act(() => void editor.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "3 * span" }))));
@@ -96,7 +83,7 @@ describe("input errors in words", () => {
 describe("US units reach every length on screen", () => {
   it("shows and takes the hand check's point P in feet; a typed unit is kept", async () => {
     const user = userEvent.setup();
-    const editor = mountResultsDock(beam());
+    const editor = mountResultsDock(beam("F1"));
     await user.click(screen.getByRole("tab", { name: "Hand check" }));
     act(() => {
       editor.getState().setUnits("US");
@@ -128,7 +115,7 @@ describe("US units reach every length on screen", () => {
 
   it("gives the centroid and the drawing scale in feet", async () => {
     const user = userEvent.setup();
-    await renderEditor(beam());
+    await renderEditor(beam("F1"));
     await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Body b1/ }));
     expect(screen.getByTestId("element-form")).toHaveTextContent("At the outline's centroid (2.000, 0.250) m.");
     await user.click(within(screen.getByTestId("units")).getByRole("radio", { name: "US" }));

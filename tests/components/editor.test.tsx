@@ -6,21 +6,8 @@ import { describe, expect, it } from "vitest";
 import { ACTIONS, actionById, shortcutLabel } from "@/canvas/actions";
 import { exampleById } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
-import { newBody } from "@/canvas/model/factory";
-import type { SketchFile } from "@/solver/schema";
-import { renderEditor, storedSketch } from "./editor-helpers";
+import { beam, renderEditor, storedSketch } from "./editor-helpers";
 
-function beam(): SketchFile {
-  return {
-    ...emptySketch("Beam on a pin and a contact"),
-    bodies: [newBody("b1", [[0, 0], [4, 0], [4, 0.5], [0, 0.5]], "Beam")],
-    supports: [
-      { id: "s1", body: "b1", kind: "pin", at: [0, 0], label: "left pin" },
-      { id: "s2", body: "b1", kind: "contact", at: [4, 0], angle: 90, label: "right pad" },
-    ],
-    loads: [{ id: "l1", body: "b1", kind: "force", at: [2, 0.5], magnitude: "10 kN", angle: -90 }],
-  };
-}
 
 const outlineRow = (name: RegExp) => within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name });
 
