@@ -10,6 +10,7 @@
 import { addOuter, dot3, norm3, solvePsd, zeroMat3, type Vec3 } from "./linalg";
 import type { BodyModel } from "./model";
 import { findRay } from "./ray";
+import { frictionCanHold, solveWithSlip } from "./slip";
 
 export interface SpringSolution {
   /** force in each spring (N, or N·m for a rotational spring) */
@@ -22,6 +23,18 @@ export interface SpringSolution {
   ray?: Vec3;
   /** Q's part that the engaged springs cannot balance (non-zero only with a ray) */
   unbalanced: Vec3;
+  /**
+   * with a ray from the search: the last engagement it tried that balances the body, in which the
+   * supports that would have to pull still do. Its n and gaps continue those of the held body
+   * through the onset of tipping (the margins).
+   */
+  pull?: { r: number[]; q: Vec3 };
+  /** per group: sliding at the friction limit (t = ±μ·n), when only Coulomb's law settles it */
+  sliding?: boolean[];
+  /** with a ray: friction contacts the motion slides along while closed (friction cannot hold it) */
+  slides?: boolean[];
+  /** with `slides`: forces inside the friction cones could balance the loads (a preload could jam it) */
+  couldJam?: boolean;
   /** set when no consistent engagement was found (a degenerate case); the result is the last tried */
   inconsistent?: boolean;
 }
@@ -54,6 +67,7 @@ export function solveOneSided(model: BodyModel): SpringSolution {
   let engaged = groups.map(() => true);
   if (groups.length === 0) return solveEngaged(model, engaged);
   const seen = new Set<string>();
+  let lastBalanced: SpringSolution | null = null;
 
   for (let iter = 0; iter < MAX_ITERATIONS; iter++) {
     const key = engaged.map((e) => (e ? "1" : "0")).join("");
@@ -74,11 +88,12 @@ export function solveOneSided(model: BodyModel): SpringSolution {
         const gt = g.tangent >= 0 ? springs[g.tangent].g : null;
         if (dot3(gn, z) < -1e-9 * norm3(gn) * zn || (gt && Math.abs(dot3(gt, z)) > 1e-9 * norm3(gt) * zn)) closing.push(gi);
       });
-      if (closing.length === 0) return { ...sol, ray: z };
+      if (closing.length === 0) return { ...sol, ray: z, ...(lastBalanced ? { pull: { r: lastBalanced.r, q: lastBalanced.q } } : {}) };
       engaged = engaged.slice();
       for (const gi of closing) engaged[gi] = true;
       continue;
     }
+    lastBalanced = sol;
 
     // Most negative engaged group, and most penetrating released group (as a force: k × overlap).
     let worstPull = -forceTol;
@@ -117,15 +132,31 @@ export function solveOneSided(model: BodyModel): SpringSolution {
   // Normal forces alone may still hold the body: that answer (t = 0) meets equilibrium, n ≥ 0,
   // the gaps and |t| ≤ μ·n, so it stands — a body on a fixed support never "tips".
   const frictionless = withoutFriction(model);
-  if (frictionless) {
-    const held = solveOneSided(frictionless);
-    if (!held.ray && !held.inconsistent) return held;
-  }
+  const held = frictionless ? solveOneSided(frictionless) : null;
+  if (held && !held.ray && !held.inconsistent) return held;
+  // Coulomb's law itself: contacts may slide at the limit (see slip.ts).
+  const slip = frictionless ? solveWithSlip(model) : null;
+  if (slip) return { ...slip, unbalanced: [0, 0, 0] };
   // Friction contacts spoil the proof that nothing holds the body (engaged, one can hold any
   // tangential force under a vanishing normal one). The motion that opens them and slides along
   // them describes how the body goes.
   const motion = found === "none" ? findRay(model, "motion") : null;
-  return motion ? { ...released(), ray: motion } : { ...solveEngaged(model, engaged), inconsistent: true };
+  if (motion) return { ...released(), ray: motion };
+  // Nothing holds it, so it must slide along a closed friction contact: the motion is the one the
+  // loads drive with the friction left out (a proof that normal forces alone cannot hold it).
+  if (held?.ray) return { ...released(), ray: held.ray, slides: slidesAlong(model, held.ray), couldJam: frictionCanHold(model) };
+  return { ...solveEngaged(model, engaged), inconsistent: true };
+}
+
+/** Per group: a friction contact that the motion z slides along while keeping it closed. */
+function slidesAlong(model: BodyModel, z: Vec3): boolean[] {
+  const zn = norm3(z);
+  return model.groups.map((g) => {
+    if (g.tangent < 0) return false;
+    const gn = model.springs[g.normal].g;
+    const gt = model.springs[g.tangent].g;
+    return dot3(gn, z) <= 1e-9 * norm3(gn) * zn && Math.abs(dot3(gt, z)) > 1e-9 * norm3(gt) * zn;
+  });
 }
 
 /** The model with its friction springs left out: contacts carry normal force only (null without any). */

@@ -49,6 +49,8 @@ function solveBody(model: BodyModel, out: SolveResult): void {
   let freeMotion: FreeMotion | undefined;
   /** groups shown as lifted/slack */
   let released: boolean[];
+  /** a body that tips: the engagement its margins come from */
+  let pull: SpringSolution["pull"];
 
   if (norm3(bilateral.unbalanced) > tol) {
     status = "unrestrained";
@@ -62,11 +64,13 @@ function solveBody(model: BodyModel, out: SolveResult): void {
       used = bilateral;
       if (one.ray) freeMotion = describeMotion(model, one.ray);
       released = groups.map((g) => bilateral.r[g.normal] < -tol);
+      pull = one.pull;
     } else {
       used = one;
       released = one.engaged.map((e) => !e);
       status = released.some(Boolean) ? "lifts" : "holds";
     }
+    frictionWarnings(model, one, warnings);
   }
 
   // ---- reactions
@@ -107,8 +111,11 @@ function solveBody(model: BodyModel, out: SolveResult): void {
       const g = groups[gi];
       reaction.state = s.kind === "contact" ? (isReleased ? "lifted" : "bearing") : isReleased ? "slack" : "taut";
       // continuous through lift-off: n while engaged, −k·gap once released (the same formula)
+      // A body that tips takes the margins of the last engagement that balanced it (the support
+      // that would have to pull still does), so they go on from those of the held body.
       const sn = springs[g.normal];
-      reaction.margin = clean(status === "lifts" || status === "holds" ? -sn.k * dot3(sn.g, used.q) : f.n);
+      const marginQ = status === "lifts" || status === "holds" ? used.q : status === "tips" ? pull?.q : undefined;
+      reaction.margin = clean(marginQ ? -sn.k * dot3(sn.g, marginQ) : f.n);
       if (isReleased) {
         warnings.push(
           status === "tips" || status === "unrestrained"
@@ -193,6 +200,40 @@ function solveBody(model: BodyModel, out: SolveResult): void {
     ...(friction ? { friction } : {}),
   };
   out.equations[body.id] = { forces: [...reactionTerms, ...model.forceTerms], momentum: model.momentumTerms };
+}
+
+/**
+ * Bodies that only Coulomb's law settles (see slip.ts): held with contacts sliding at the limit,
+ * whose reactions then depend on the order of loading; or sliding along friction contacts that
+ * cannot hold them, said plainly when a preload could have jammed them.
+ */
+function frictionWarnings(model: BodyModel, one: SpringSolution, warnings: SolveWarning[]): void {
+  const name = model.body.label || model.body.id;
+  const named = (flags: boolean[]) => model.groups.filter((_, gi) => flags[gi]).map((g) => model.supports[g.support]);
+  const sliding = one.sliding ? named(one.sliding) : [];
+  if (sliding.length) {
+    warnings.push({
+      code: "INDETERMINATE",
+      message:
+        `${name} holds only with ${sliding.map(describeSupport).join(" and ")} sliding at the friction limit (|t| = μ·n): ` +
+        `no answer has every contact gripping, so the reactions depend on the order of loading and on the stiffnesses; ` +
+        `these are for all the loads applied together from zero`,
+      ids: sliding.map((s) => s.id),
+    });
+  }
+  const slides = one.slides ? named(one.slides) : [];
+  if (slides.length) {
+    warnings.push({
+      code: "SLIP",
+      message:
+        `${name} slides along ${slides.map(describeSupport).join(" and ")}: ` +
+        (one.couldJam
+          ? `forces within friction could balance the loads, but not the ones its supports take when loaded from zero; ` +
+            `a preload could jam it, so whether it holds depends on the stiffnesses and the order of loading`
+          : `friction (${slides.map((s) => `μ = ${fmtRatio(s.kind === "contact" ? (s.mu ?? 0) : 0)}`).join(", ")}) cannot balance the loads`),
+      ids: slides.map((s) => s.id),
+    });
+  }
 }
 
 /** A generalized motion z (scaled) as a translation or a rotation about a point. */

@@ -183,17 +183,18 @@ describe("findLimit", () => {
       }),
     );
 
-  it("finds where the body starts to tip, though the reported reactions jump there", () => {
+  it("finds where the body starts to tip, and the margin crosses zero there", () => {
     // Once c0 has lifted, the block stands on c1 and c2. Moments about c2 (x = 4), statics:
     //   n1·(2 − 4) + T·(0.5 − 4) − W·(2 − 4) = 0  →  n1 = (2W − 3.5T)/2,
     // so c1 lifts, and with it the block tips about c2, at T = 2W/3.5 = 5603.8 N. Past it the
     // result reports the reactions every support bilateral would need (c1 then carries about
-    // 1.4 kN), so the margin jumps instead of crossing zero.
+    // 1.4 kN), but the margin goes on as n1 = (2W − 3.5T)/2, the pull c1 would need.
     const sk = threeFeet();
     const before = solveSweep(sk, "T", [5.6, 5.61]).points.map((p) => (p.ok ? p.result : null)!);
     expect(before[0].bodies.b.status).toBe("lifts");
     expect(before[1].bodies.b.status).toBe("tips");
-    expect(before[1].reactions.c1.margin!).toBeGreaterThan(1000);
+    expectRel(before[0].reactions.c1.margin!, (2 * W - 3.5 * 5600) / 2, 1e-6);
+    expectRel(before[1].reactions.c1.margin!, (2 * W - 3.5 * 5610) / 2, 1e-6);
     const lim = findLimit(sk, "T", [5, 6], { support: "c1", component: "margin" });
     expect(lim.found).toBe(true);
     if (lim.found) {

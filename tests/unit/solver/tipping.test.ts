@@ -49,7 +49,9 @@ function inadmissible(sk: Sketch, res: SolveResult, bodyId: string): string | nu
     if (s.kind === "roller" && Math.abs(along(s.angle)) > eps) return `roller ${s.id} moves along its line`;
     if (s.kind === "contact" && along(s.angle) < -eps) return `contact ${s.id} is pushed into`;
     if (s.kind === "tie" && along(s.angle) < -eps) return `tie ${s.id} is stretched`;
-    if (s.kind === "contact" && s.mu !== undefined && along(s.angle) <= eps && Math.abs(along(s.angle + 90)) > eps) return `contact ${s.id} slides while closed`;
+    // a closed friction contact may slide only where the result says friction cannot hold it
+    const slips = res.warnings.some((x) => x.code === "SLIP" && x.ids.includes(s.id) && x.message.includes("slides along"));
+    if (s.kind === "contact" && s.mu !== undefined && !slips && along(s.angle) <= eps && Math.abs(along(s.angle + 90)) > eps) return `contact ${s.id} slides while closed`;
   }
   return null;
 }
