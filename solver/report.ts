@@ -193,7 +193,9 @@ export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
       const e = env.components[c]!;
       const q: Quantity = c === "m" ? "moment" : "force";
       const gov = env.governing[c];
-      rows.push([id, COMPONENT_LABEL[c], columnUnit(q, system), inUnit(e.max.value, q, system), name(e.max.case), inUnit(e.min.value, q, system), name(e.min.case), gov ? name(gov) : ""]);
+      // a component that is zero in every case (a frictionless contact's t) has no governing case
+      const zero = Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING;
+      rows.push([id, COMPONENT_LABEL[c], columnUnit(q, system), inUnit(e.max.value, q, system), name(e.max.case), inUnit(e.min.value, q, system), name(e.min.case), zero ? "none (zero in every case)" : gov ? name(gov) : ""]);
     }
   }
   return {

@@ -11,6 +11,7 @@ import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import { useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
+import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms } from "./casesText";
 import { ReportTable } from "./ReportTable";
@@ -247,16 +248,16 @@ export function CasesPanel() {
               </p>
             ))}
             <ReportTable
-              table={caseReactionTable(study.result, units)}
+              table={withoutAbsentMoment(caseReactionTable(study.result, units), study.result)}
               fileName="reactions-per-case"
               testId="case-reactions"
               caption="▲ / ▼ beside a value: this case governs that component (largest magnitude; ▲ its maximum, ▼ its minimum). “design load”: the case of the support's largest resultant."
             />
             <div className="mt-3">
-              <ReportTable table={envelopeTable(study.result, units)} fileName="envelope" testId="envelope" />
+              <ReportTable table={withoutAbsentMoment(envelopeTable(study.result, units), study.result)} fileName="envelope" testId="envelope" />
             </div>
             <div className="mt-3">
-              <ReportTable table={designLoadTable(study.result, units)} fileName="design-loads" testId="design-loads" />
+              <ReportTable table={withoutAbsentMoment(designLoadTable(study.result, units), study.result)} fileName="design-loads" testId="design-loads" />
             </div>
             <div className="mt-3">
               <ReportTable

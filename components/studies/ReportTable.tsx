@@ -1,10 +1,16 @@
 "use client";
 // A result table from the solver's report (the rows the CSV and the calc sheet use), with a CSV button.
+// Long names wrap in their cell, so the table fits its panel instead of scrolling sideways.
 import type { ReactNode } from "react";
 import type { Cell, Table } from "@/solver/report";
 import { formatNumber } from "@/solver/units";
 import { BUTTON } from "@/components/editor/ui";
 import { downloadCsv } from "./csv";
+
+/** A name (a case, a support) wraps within a bounded width rather than widening the table past the
+ *  panel, a long id without spaces breaking where it must; numbers never wrap. The full text is
+ *  also the cell's title. */
+const TEXT_CELL = "max-w-[14rem] min-w-[4.5rem] whitespace-normal [overflow-wrap:anywhere]";
 
 export function ReportTable({
   table,
@@ -34,9 +40,9 @@ export function ReportTable({
           <thead>
             <tr className="border-b border-rule text-[11px] text-ink-faint">
               {table.columns.map((c) => (
-                <th key={c.key} scope="col" className={`whitespace-nowrap px-1.5 py-1 font-medium ${c.align === "left" ? "text-left" : "text-right"}`}>
+                <th key={c.key} scope="col" className={`px-1.5 py-1 align-bottom font-medium ${c.align === "left" ? "text-left" : "text-right"}`}>
                   {c.label}
-                  {c.unit && <span className="ml-0.5 font-normal">({c.unit})</span>}
+                  {c.unit && <span className="ml-0.5 whitespace-nowrap font-normal">({c.unit})</span>}
                 </th>
               ))}
             </tr>
@@ -48,13 +54,14 @@ export function ReportTable({
                   const col = table.columns[i];
                   const extra = mark?.(row, col.key);
                   const cellMark = table.marks?.[ri]?.[col.key];
+                  const text = col.align === "left" && typeof cell === "string" && cell !== "";
                   return (
                     <td
                       key={col.key}
                       data-col={col.key}
                       data-mark={cellMark ? cellMark.symbol : undefined}
-                      title={cellMark?.text}
-                      className={`whitespace-nowrap px-1.5 py-[3px] ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
+                      title={cellMark?.text ?? (text ? cell : undefined)}
+                      className={`px-1.5 py-[3px] align-top ${text ? TEXT_CELL : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
                     >
                       {cellMark && (
                         <span role="img" aria-label={cellMark.text} className="mr-0.5">

@@ -4,6 +4,7 @@ import "server-only";
 import PDFDocument from "pdfkit";
 import SVGtoPDF from "svg-to-pdfkit";
 import { renderSketchSvg } from "@/canvas/render/svg";
+import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import {
   ASSUMPTIONS,
   CAUTIONS,
@@ -20,8 +21,9 @@ import {
   type UnitSystem,
   type SolveResult,
 } from "@/solver";
-import { combinationWarnings } from "@/solver/cases";
-import { designLoadTable, excludedWords } from "@/solver/report";
+import { combinationWarnings, type StudyResult } from "@/solver/cases";
+import { statusSentences } from "@/components/results/statusSentence";
+import { designLoadTable, excludedWords, type Table } from "@/solver/report";
 import { lineChartSvg } from "./chart";
 import { sweepCharts } from "./sweeps";
 import { registerFonts } from "./fonts";
@@ -87,23 +89,40 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   cautionBox(doc, left, width, [CAUTIONS[0], CAUTIONS[1] + " " + CAUTIONS[2]]);
 
   // ---- status
-  heading("Result");
-  for (const [id, b] of Object.entries(result.bodies)) {
-    para(`${id}: ${b.status} — ${b.determinacy.kind}${b.determinacy.degree ? ` (degree ${b.determinacy.degree})` : ""}; largest reaction ${formatNumber(b.largestReaction / (units === "SI" ? 1000 : 4.4482216152605), 4)} ${units === "SI" ? "kN" : "lbf"}`, 9.5, INK);
+  const hasCases = !!(parsed.file.cases?.length || parsed.file.combinations?.length);
+  heading(hasCases ? "Result as drawn" : "Result");
+  // the sentences of the results panel: a body that slips is not reported as holding
+  const said = new Set<string>();
+  for (const s of statusSentences(parsed.sketch, result, units)) {
+    const b = result.bodies[s.body];
+    const determinacy = b.determinacy.kind === "indeterminate" ? "" : ` Statically ${b.determinacy.kind}.`;
+    para(`${s.headline}.${determinacy}`, 9.5, s.tone === "holds" ? INK : ACCENT);
+    for (const d of s.details) {
+      para(d, 8.5, SOFT);
+      said.add(d.replace(/\.$/, ""));
+    }
   }
-  if (result.warnings.length) {
+  // the warnings the sentences above have not said already (they name the supports by id)
+  const more = result.warnings.filter((w) => w.code !== "INDETERMINATE" && !said.has(w.message.replace(/\.$/, "")));
+  if (more.length) {
     doc.moveDown(0.3);
-    for (const w of result.warnings) para(`${w.code}: ${w.message}`, 8.5, w.code === "SLIP" || w.code === "LIFTOFF" || w.code === "SLACK" ? ACCENT : SOFT);
+    for (const w of more) para(`Warning: ${w.message}`, 8.5, w.code === "SLIP" || w.code === "LIFTOFF" || w.code === "SLACK" ? ACCENT : SOFT);
+  }
+  // the sheet's first page says when another case does not hold or a factor of safety falls short
+  const caseLines = caseFindings(study, hasCases);
+  if (caseLines.length) {
+    doc.moveDown(0.3);
+    para(hasCases ? "In the cases and combinations:" : "Factors of safety:", 9, INK);
+    for (const l of caseLines) para(`• ${l}`, 8.5, ACCENT);
   }
 
   // ---- drawing
   heading("Free-body diagram (control volume)");
-  // svg-to-pdfkit ignores paint-order, so the paper-coloured halo behind labels would cover them
-  const svg = renderSketchSvg(parsed.file, result, { units, width: 900, height: 560 }).replace(/ stroke="#[0-9a-f]{6}" stroke-width="3" paint-order="stroke" stroke-linejoin="round"/g, "");
+  const svg = haloBehindLabels(renderSketchSvg(parsed.file, result, { units, width: 900, height: 560 }));
   ensureSpace(doc, 320);
   SVGtoPDF(doc, svg, left, doc.y, { width, height: width * (560 / 900), preserveAspectRatio: "xMidYMid meet", fontCallback: (family: string, bold: boolean) => (bold ? "Inter-SemiBold" : "Inter") });
+  // the drawing carries its own legend (solid, double and dashed arrows) on its bottom line
   doc.y += width * (560 / 900) + 6;
-  para("Solid arrows: applied loads. Dashed: momentum flux ṁV at the ports. Double lines: reactions found (forces on the body).", 8, FAINT);
 
   // ---- inputs
   heading("Inputs");
@@ -132,20 +151,27 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   }
 
   // ---- reactions per case, envelope, stability
-  heading("Reactions per case");
-  drawTable(doc, caseReactionTable(study, units), left, width);
-  heading("Envelope and design loads");
-  for (const w of excludedWords(study)) para(w, 8.5, ACCENT);
-  drawTable(doc, envelopeTable(study, units), left, width);
-  drawTable(doc, designLoadTable(study, units), left, width);
+  if (hasCases) {
+    heading("Reactions per case");
+    drawTable(doc, withoutAbsentMoment(caseReactionTable(study, units), study), left, width, { groupBy: "case" });
+    heading("Envelope and design loads");
+    for (const w of excludedWords(study)) para(w, 8.5, ACCENT);
+    drawTable(doc, withoutAbsentMoment(envelopeTable(study, units), study), left, width, { groupBy: "support" });
+    drawTable(doc, withoutAbsentMoment(designLoadTable(study, units), study), left, width);
+  } else {
+    // one run: an envelope of it, or a governing case among one, would only repeat its numbers
+    heading("Reactions as drawn");
+    para("No operating cases are defined: these are the reactions of the sketch as drawn.", 8.5, SOFT);
+    drawTable(doc, singleRunTable(withoutAbsentMoment(caseReactionTable(study, units), study)), left, width);
+  }
   heading("Stability");
-  drawTable(doc, stabilityTable(study, units), left, width);
+  drawTable(doc, stabilityTable(study, units), left, width, { groupBy: "case" });
 
   // ---- sweeps: each on its saved case, one chart per unit (forces, moments, ratios)
   for (const sw of parsed.file.sweeps ?? []) {
     ensureSpace(doc, 320);
     const caseName = sw.case ? (parsed.file.cases?.find((c) => c.id === sw.case)?.name ?? sw.case) : null;
-    heading(`Sweep of ${sw.parameter}${caseName ? ` — case ${caseName}` : ""}`);
+    heading(`Sweep of ${sw.parameter}${caseName ? ` — case ${caseName}` : " — as drawn"}`);
     try {
       const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions));
       for (const spec of charts) {
@@ -153,7 +179,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
         SVGtoPDF(doc, lineChartSvg(spec), left, doc.y, { width, height: width * (260 / 500), preserveAspectRatio: "xMidYMid meet", fontCallback: () => "Inter" });
         doc.y += width * (260 / 500) + 4;
       }
-      for (const mk of markers) para(`Crossing: ${mk.label}.`, 8.5, INK);
+      for (const mk of markers) para(`Crossing: ${mk.words}.`, 8.5, INK);
+      if (!markers.length && charts.some((c) => c.series.some((se) => se.markZero))) para("No crossing in this range: none of the plotted margins reaches zero.", 8.5, INK);
     } catch (err) {
       para(`This sweep could not be run: ${(err as Error).message}`, 8.5, ACCENT);
     }
@@ -172,6 +199,57 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   footer(doc, input);
   doc.end();
   return done;
+}
+
+/** svg-to-pdfkit ignores paint-order, so a label's paper-coloured halo (its stroke) would be
+ *  painted over its letters. Each haloed label becomes two: the halo alone, then the letters, so
+ *  a label crossing an outline or a hatch stays readable as it is on screen. */
+export function haloBehindLabels(svg: string): string {
+  return svg.replace(
+    /<text([^>]*?) stroke="(#[0-9a-fA-F]{3,8})" stroke-width="([\d.]+)" paint-order="stroke" stroke-linejoin="round">([^<]*)<\/text>/g,
+    (_, attrs: string, halo: string, w: string, content: string) =>
+      `<text${attrs.replace(/ fill="[^"]*"/, ` fill="${halo}"`)} stroke="${halo}" stroke-width="${w}" stroke-linejoin="round">${content}</text><text${attrs}>${content}</text>`,
+  );
+}
+
+/** A line for each run whose body does not hold, or whose factor of safety is below the required
+ *  value (the as-drawn run's status is already said above, so only its factors when it is alone). */
+function caseFindings(study: StudyResult, hasCases: boolean): string[] {
+  const out: string[] = [];
+  for (const run of study.runs) {
+    if (!run.ok) {
+      out.push(`${run.name}: not solved (${run.errors.map((e) => `${e.path} ${e.message}`).join("; ")})`);
+      continue;
+    }
+    for (const [body, b] of Object.entries(run.result.bodies)) {
+      const bits: string[] = [];
+      if (hasCases && (b.status === "tips" || b.status === "unrestrained")) bits.push(`${body} ${b.status === "tips" ? "tips" : "is unrestrained"}`);
+      const st = run.stability[body];
+      for (const [against, check] of [["overturning", st?.overturning], ["sliding", st?.sliding]] as const) {
+        if (!check || "notApplicable" in check || check.pass) continue;
+        const about = "about" in check ? ` about ${check.about}` : "";
+        bits.push(`factor of safety against ${against}${about} ${factorWords(check.factor, check.required)}, below the required ${formatNumber(check.required, 4)}`);
+      }
+      if (bits.length) out.push(`${hasCases ? `${run.name} — ` : ""}${bits.join("; ")}`);
+    }
+  }
+  return out;
+}
+
+/** A factor below its required value, never rounded up to it (1.4996 is not "1.5"). */
+function factorWords(factor: number, required: number): string {
+  for (const digits of [4, 6, 9]) {
+    const shown = Number(factor.toPrecision(digits));
+    if (shown < required) return formatNumber(shown, digits);
+  }
+  return String(factor);
+}
+
+/** The cases table of a sketch with no cases: no case column, no governing marks or words. */
+function singleRunTable(t: Table): Table {
+  const drop = new Set(["case", "governs"]);
+  const keep = t.columns.map((c) => !drop.has(c.key));
+  return { ...t, title: "Reactions as drawn (forces on the body)", columns: t.columns.filter((_, i) => keep[i]), rows: t.rows.map((r) => r.filter((_, i) => keep[i])), marks: undefined, notes: undefined };
 }
 
 function ensureSpace(doc: PDFKit.PDFDocument, needed: number) {

@@ -15,19 +15,38 @@ const MAX_POINTS = 400;
 
 const KIND_WORDS = { force: "forces", moment: "moments", ratio: "ratios" } as const;
 
-export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, supports: string[]): { charts: ChartSpec[]; markers: Array<{ x: number; label: string }> } {
+/** What a margin reaching zero means, in the trade's words; a noun, since the sweep may cross
+ *  either way (a contact lifts off, or comes back into bearing). */
+function crossingEvent(q: QuantitySpec, kind: string | undefined): { noun: string; why: string } {
+  if (q.component === "frictionMargin") return { noun: "slip", why: "μ·n − |t| reaches zero: the friction is used up" };
+  if (kind === "tie") return { noun: "slack", why: "its tension reaches zero" };
+  return { noun: "lift-off", why: "its normal force reaches zero" };
+}
+
+export interface SweepMarker {
+  x: number;
+  /** short, on the chart: "jack: lift-off at 44.44 deg" */
+  label: string;
+  /** the sentence under the chart */
+  words: string;
+}
+
+export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, supports: string[]): { charts: ChartSpec[]; markers: SweepMarker[] } {
   const sketch = sketchForCase(file, sw.case);
   const res = solveSweep(sketch, sw.parameter, linspace(sw.from, sw.to, Math.min(sw.points, MAX_POINTS)));
   const quantities: QuantitySpec[] = sw.quantities?.length ? sw.quantities : supports.map((s) => ({ support: s, component: "resultant" as const }));
   const markers = quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
     const lim = findLimit(sketch, sw.parameter, [sw.from, sw.to], q);
-    return lim.found ? [{ x: lim.value, label: `${q.support} at ${formatNumber(lim.value, 4)} ${lim.unit}` }] : [];
+    if (!lim.found) return [];
+    const at = `${formatNumber(lim.value, 4)}${lim.unit ? ` ${lim.unit}` : ""}`;
+    const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
+    return [{ x: lim.value, label: `${q.support}: ${event.noun} at ${at}`, words: `${q.support}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at}` }];
   });
   const kinds = [...new Set(quantities.map((q) => displayKind(q.component)))];
   const charts = kinds.map((kind): ChartSpec => {
     const mine = quantities.filter((q) => displayKind(q.component) === kind);
     return {
-      title: `${sw.parameter} from ${sw.from} to ${sw.to} ${res.unit}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
+      title: `${sw.parameter} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)} ${res.unit}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
       xLabel: `${sw.parameter}${res.unit ? ` (${res.unit})` : ""}`,
       yLabel: displayUnit(mine[0].component, units) || "ratio",
       series: mine.map((q) => ({

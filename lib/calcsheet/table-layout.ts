@@ -33,6 +33,8 @@ const TEXT_CAP = 0.45;
 const COMFORTABLE_LINES = 3;
 /** …allowing this much for where the lines fall between words. */
 const WORDS_SLACK = 1.2;
+/** …but a text column's room to read is never more than this share of the width. */
+const COMFORT_CAP = 0.22;
 /** A heading over numbers is given about this share of its one-line width (two lines). */
 const NUMBER_HEADING = 0.55;
 /** Rounding slack (pt): pdfkit rounds widths, and a word that fits by 0.01 pt must still fit. */
@@ -139,7 +141,9 @@ export function layoutTable(t: Table, options: TableLayoutOptions): TableLayout 
       }
       const natural = Math.max(min, Math.min(Math.max(head, body + pad), width * TEXT_CAP));
       // room for the longest text in about three lines (a word more than a third, for where lines fall)
-      const comfortable = Math.min(natural, Math.max(min, head, (body * WORDS_SLACK) / COMFORTABLE_LINES + pad));
+      // (but no more than a share of the page: a very long name wraps to more lines rather than
+      // pushing the columns beside it into a second stacked part, away from their row)
+      const comfortable = Math.min(natural, Math.max(min, head, Math.min((body * WORDS_SLACK) / COMFORTABLE_LINES + pad, width * COMFORT_CAP)));
       return { min, comfortable, natural, roomy: natural };
     });
   const sizes: number[] = [];

@@ -1,6 +1,9 @@
 // Drawing a result table on the calc sheet with pdfkit, in the widths table-layout.ts chooses:
 // headings with their unit on a second line, numbers right-aligned, a row never split across
-// pages, and the heading repeated at the top of every page the table runs onto.
+// pages, and the heading repeated at the top of every page the table runs onto. A table may be
+// grouped by its first column (the case, the support): the value is printed once, across the
+// width, over its rows, so a long name wraps in one line of the page rather than in a narrow
+// column that makes every row three lines tall.
 import type { Table } from "@/solver/report";
 import { layoutTable, type Measure, type TablePart, type TableLayout } from "./table-layout";
 
@@ -10,6 +13,7 @@ const INK = "#1d2329";
 const FAINT = "#6b7580";
 const RULE = "#cfc8b8";
 const HEAD_BG = "#ece7dc";
+const GROUP_BG = "#f5f2ea";
 /** padding inside a cell: left and right (the layout's padding is their sum), top */
 const PAD_X = 3;
 const PAD_TOP = 2.5;
@@ -20,11 +24,29 @@ export function pdfMeasure(doc: PDFKit.PDFDocument): Measure {
   return (text, bold, size) => doc.font(bold ? FONT.bold : FONT.regular).fontSize(size).widthOfString(text);
 }
 
-export function drawTable(doc: PDFKit.PDFDocument, t: Table, left: number, width: number): TableLayout | null {
-  if (t.rows.length === 0) {
+export interface DrawTableOptions {
+  /** key of a text column to print as a heading over each run of rows sharing its value */
+  groupBy?: string;
+}
+
+/** The table without its group column, and the group heading of each row ("Case: Duty point"). */
+export function groupRows(t: Table, key: string): { table: Table; groups: string[] } | null {
+  const gi = t.columns.findIndex((c) => c.key === key);
+  if (gi < 0 || t.columns.length < 2) return null;
+  const col = t.columns[gi];
+  return {
+    table: { ...t, columns: t.columns.filter((_, i) => i !== gi), rows: t.rows.map((r) => r.filter((_, i) => i !== gi)) },
+    groups: t.rows.map((r) => `${col.label}: ${r[gi] ?? "—"}`),
+  };
+}
+
+export function drawTable(doc: PDFKit.PDFDocument, t0: Table, left: number, width: number, options: DrawTableOptions = {}): TableLayout | null {
+  if (t0.rows.length === 0) {
     doc.font(FONT.regular).fontSize(8.5).fillColor(FAINT).text("(none)", left, doc.y, { width });
     return null;
   }
+  const grouped = options.groupBy ? groupRows(t0, options.groupBy) : null;
+  const t = grouped?.table ?? t0;
   const layout = layoutTable(t, { width, measure: pdfMeasure(doc) });
   doc.y += 2;
   const n = layout.parts.length;
@@ -39,7 +61,7 @@ export function drawTable(doc: PDFKit.PDFDocument, t: Table, left: number, width
       doc.font(FONT.regular).fontSize(7.5).fillColor(FAINT).text(caption, left, doc.y + (pi === 0 ? 0 : 4), { width });
       doc.y += 2;
     }
-    drawPart(doc, layout, part, left);
+    drawPart(doc, layout, part, left, grouped?.groups);
   });
   for (const note of t.notes ?? []) {
     // a note is not split across pages
@@ -56,7 +78,7 @@ function ensureRoom(doc: PDFKit.PDFDocument, needed: number) {
   if (doc.y + needed > doc.page.height - doc.page.margins.bottom) doc.addPage();
 }
 
-function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart, left: number) {
+function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart, left: number, groups?: string[]) {
   const { size, headers, cells } = layout;
   const total = part.widths.reduce((a, b) => a + b, 0);
   const inner = (i: number) => part.widths[i] - 2 * PAD_X;
@@ -80,15 +102,31 @@ function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart,
     doc.y = y + headerHeight;
   };
 
-  // the heading never stands alone at the foot of a page
-  ensureRoom(doc, headerHeight + rowHeight(cells[0]));
+  const groupHeight = (g: string) => doc.font(FONT.bold).fontSize(size).heightOfString(g, { width: total - 2 * PAD_X }) + PAD_Y;
+  const drawGroup = (g: string) => {
+    const y = doc.y;
+    const h = groupHeight(g);
+    doc.rect(left, y, total, h).fillColor(GROUP_BG).fill();
+    doc.font(FONT.bold).fontSize(size).fillColor(INK).text(g, left + PAD_X, y + PAD_TOP, { width: total - 2 * PAD_X });
+    rule(doc, left, y + h, total);
+    doc.y = y + h;
+  };
+
+  // the heading never stands alone at the foot of a page, nor a group's heading
+  ensureRoom(doc, headerHeight + (groups ? groupHeight(groups[0]) : 0) + rowHeight(cells[0]));
   drawHeader();
-  for (const r of cells) {
+  cells.forEach((r, ri) => {
     const h = rowHeight(r);
-    if (doc.y + h > doc.page.height - doc.page.margins.bottom) {
+    const g = groups?.[ri];
+    const starts = g !== undefined && (ri === 0 || groups![ri - 1] !== g);
+    const needed = h + (starts ? groupHeight(g) : 0);
+    if (doc.y + needed > doc.page.height - doc.page.margins.bottom) {
       doc.addPage();
       drawHeader();
+      // a group carried over to a new page is named again
+      if (g !== undefined && !starts) drawGroup(`${g} (continued)`);
     }
+    if (starts) drawGroup(g);
     const y = doc.y;
     let x = left;
     part.columns.forEach((c, i) => {
@@ -97,7 +135,7 @@ function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart,
     });
     rule(doc, left, y + h, total);
     doc.y = y + h;
-  }
+  });
 }
 
 function rule(doc: PDFKit.PDFDocument, left: number, y: number, width: number) {

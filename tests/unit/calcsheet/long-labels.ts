@@ -17,3 +17,15 @@ export function longLabelFile(): SketchFileInput {
   ];
   return file;
 }
+
+/** A case name longer than any column can hold on one line (demo data). */
+export const VERY_LONG_CASE = "Run-out with the discharge valve fully open, the strainer clean and the sump at its highest level";
+
+/** The pump set with long labels, a case and a combination with long names, and a sweep (demo data). */
+export function longLabelFileWithStudies(): SketchFileInput {
+  const file = longLabelFile();
+  file.cases!.push({ id: "flood", name: VERY_LONG_CASE, parameters: { mdot: "58 kg/s" } });
+  file.combinations = [{ id: "c", name: "Duty point with the dead load factored", terms: [{ case: "duty", factor: 1.2 }] }];
+  file.sweeps = [{ id: "s", parameter: "mdot", from: 0, to: 60, points: 31, quantities: [{ support: "holdDownStrapToFloorAnchor", component: "margin" }] }];
+  return file;
+}

@@ -1,14 +1,14 @@
 // The calc sheet PDF: its text, extracted with pdfjs-dist, carries the title block, the hand-check
 // sums, the reactions with units, ṁ and μ in the embedded font, and the cautions.
 import { describe, expect, it } from "vitest";
-import { buildCalcSheet } from "@/lib/calcsheet/pdf";
+import { buildCalcSheet, haloBehindLabels } from "@/lib/calcsheet/pdf";
 import { runLimit } from "@/canvas/studies/run";
 import { formatNumber } from "@/solver/units";
 import { tableCells } from "@/lib/calcsheet/table-layout";
 import { parseSketch, solveCases } from "@/solver";
 import { caseReactionTable, designLoadTable, envelopeTable, stabilityTable, type Table } from "@/solver/report";
 import { loadFixture } from "../solver/helpers";
-import { longLabelFile } from "./long-labels";
+import { longLabelFileWithStudies } from "./long-labels";
 
 async function pdfText(buf: Buffer): Promise<{ text: string; pages: number }> {
   const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
@@ -41,14 +41,6 @@ async function pdfItems(buf: Buffer): Promise<{ pages: PageItem[][]; pageWidth: 
     pages.push(content.items.flatMap((it) => ("str" in it && it.str.trim() ? [{ str: it.str, x: it.transform[4], width: it.width }] : [])));
   }
   return { pages, pageWidth };
-}
-
-/** The pump set with long support ids, long case names, a combination and a sweep (demo data). */
-function longLabelFileWithStudies() {
-  const file = longLabelFile();
-  file.combinations = [{ id: "c", name: "Duty point with the dead load factored", terms: [{ case: "duty", factor: 1.2 }] }];
-  file.sweeps = [{ id: "s", parameter: "mdot", from: 0, to: 60, points: 31, quantities: [{ support: "holdDownStrapToFloorAnchor", component: "margin" }] }];
-  return file;
 }
 
 /** A word printed as two pieces ("Supp ort", "beari ng"): what a squeezed column does. */
@@ -104,7 +96,7 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("Low throw");
     expect(text).toContain("High throw");
     expect(text).toMatch(/Sweep of theta/);
-    expect(text).toMatch(/Crossing: jack at \d+(\.\d+)? deg/);
+    expect(text).toMatch(/Crossing: jack: lift-off \(its normal force reaches zero\) at theta = \d+(\.\d+)? deg\./);
     // cautions
     expect(text).toContain("must be reviewed by a qualified engineer");
     expect(text).toContain("Local codes, standards and licensed engineering practice govern");
@@ -125,6 +117,10 @@ describe("calc sheet PDF", () => {
     const { text } = await pdfText(buf);
     // the flood case tips (the trailer is not held): named, and left out
     expect(text).toContain("Flood flow — trailer tips: not in the envelope or the design loads; the body is not held in this case");
+    // and the first page says so under the result as drawn, which alone would read "Holds"
+    expect(text).toMatch(/Result as drawn Lifts off at the front jack — .* In the cases and combinations: (• [^•]* )?• Flood flow — trailer tips/);
+    // a factor just under its required value is not rounded up to it (the stability table: 1.496)
+    expect(text).toContain("• Normal — factor of safety against overturning about leg 1.496, below the required 1.5");
     expect(text).toContain('Warning: Load group "dead" (the weights) is in normal (× 1.2) and more (× 1.5): it is counted 2.7 times.');
     // the envelope names the case of each max and min; the cases table marks the governing cells by shape
     expect(text).toContain("Case of max");
@@ -136,8 +132,58 @@ describe("calc sheet PDF", () => {
     const lim = runLimit(file, { parameter: "theta", from: 0, to: 80, caseId: "more", quantity: { support: "jack", component: "margin" }, target: 0 });
     if (!lim.found) throw new Error("expected a crossing");
     expect(text).toContain("Sweep of theta — case More flow");
-    expect(text).toContain(`Crossing: jack at ${formatNumber(lim.value, 4)} deg`);
+    expect(text).toContain(`Crossing: jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
   }, 60000);
+
+  it("prints a support-moment column only when a fixed support can carry a moment, zeros included", async () => {
+    /** the text from one heading up to the next */
+    const section = (text: string, from: string, to: string) => text.slice(text.indexOf(from), text.indexOf(to, text.indexOf(from)));
+    // the trailer stands on contacts only: no support can carry a moment, so no M column of zeros
+    const trailer = loadFixture("fire-monitor-trailer.json");
+    trailer.cases = [
+      { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
+      { id: "high", name: "High throw", parameters: { theta: "60 deg" } },
+    ];
+    const t = (await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file: trailer }))).text;
+    const perCase = section(t, "Reactions per case Support", "Envelope and design loads");
+    expect(perCase).toContain("Resultant (kN) Normal n (kN)");
+    expect(perCase).not.toContain("(kN·m)");
+    const envelope = section(t, "Envelope and design loads", "Stability");
+    expect(envelope).toContain(" Fy kN ");
+    expect(envelope).not.toMatch(/ M kN·m /);
+    expect(envelope).toContain("Design load (kN) at angle (°) Fx (kN) Fy (kN) from case");
+
+    // the bend's anchor is a fixed support at the meeting point of the pipe axes, with no gravity:
+    // every force passes through it, so its moment is zero (statics, common practice), and the
+    // column stays, printing that zero
+    const bend = loadFixture("pipe-bend-anchor.json");
+    bend.cases = [{ id: "surge", name: "Surge pressure 900 kPa", parameters: { p1: "900 kPa" } }];
+    const parsed = parseSketch(bend);
+    if (!parsed.ok) throw new Error("the sketch did not parse");
+    const run = solveCases(parsed.file).runs[0];
+    if (!run.ok) throw new Error("the case did not solve");
+    expect(Math.abs(run.result.reactions.anchor.m)).toBeLessThan(1e-6);
+    const b = (await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Bend", version: 1, savedAt: new Date(), signoff: [], file: bend }))).text;
+    expect(section(b, "Reactions per case Support", "Envelope and design loads")).toMatch(/Resultant \(kN\) M \(kN·m\) Normal n/);
+    const bendEnvelope = section(b, "Envelope and design loads", "Stability");
+    expect(bendEnvelope).toMatch(/ M kN·m 0 Surge pressure 900 kPa 0 Surge pressure 900 kPa none \(zero in every case\) /);
+    expect(bendEnvelope).toContain("Fy (kN) M (kN·m) from case");
+  }, 60000);
+
+  it("says a body that slips as drawn slips, in the words of the results panel, not that it holds", async () => {
+    const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Skid", version: 1, savedAt: new Date(), signoff: [], file: loadFixture("pump-skid-slip.json") });
+    const { text } = await pdfText(buf);
+    const result = text.slice(text.indexOf("Result "), text.indexOf("Free-body diagram"));
+    expect(result).toMatch(/^Result (Slips at|Slides) /);
+    expect(result).not.toMatch(/Holds|INDETERMINATE:|SLIP:/);
+  }, 60000);
+
+  it("draws a label's paper halo as a copy behind its letters (the PDF library ignores paint-order)", () => {
+    const svg = '<text x="1" y="2" font-size="10" fill="#1d2329" stroke="#fbfaf6" stroke-width="3" paint-order="stroke" stroke-linejoin="round">ṁ 2 kg/s</text>';
+    expect(haloBehindLabels(svg)).toBe(
+      '<text x="1" y="2" font-size="10" fill="#fbfaf6" stroke="#fbfaf6" stroke-width="3" stroke-linejoin="round">ṁ 2 kg/s</text><text x="1" y="2" font-size="10" fill="#1d2329">ṁ 2 kg/s</text>',
+    );
+  });
 
   it("US customary units on request", async () => {
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Bend", version: 1, savedAt: new Date(), signoff: [], file: loadFixture("pipe-bend-anchor.json"), units: "US" });
@@ -157,9 +203,17 @@ describe("calc sheet PDF", () => {
     // the old layout printed "Supp ort", "beari ng" and "leftRubberBearingPa dUnderEngine"
     expect(brokenWords(text, tables)).toEqual([]);
     for (const w of ["Support", "bearing", "Tangential t", "leftRubberBearingPadUnderEngine", "rightRubberBearingPadUnderPump", "holdDownStrapToFloorAnchor"]) expect(text).toContain(` ${w} `);
-    // the wide cases table comes in stacked parts that say so
-    expect(text).toMatch(/Part 1 of \d: the table is too wide for the page; each part repeats Case and Support\./);
-    expect(text).toMatch(/Part 2 of \d: the same rows, more columns\./);
+    // grouped by case, the cases table fits the page whole (it used to come in two stacked parts):
+    // each case is named once, across the width, over its rows
+    expect(text).not.toContain("Part 1 of");
+    for (const c of [...file.cases!, ...file.combinations!]) {
+      expect(text.split(`Case: ${c.name} leftRubberBearingPadUnderEngine `), c.name).toHaveLength(2);
+      expect(text, c.name).toMatch(new RegExp(`Case: ${c.name}( \\(continued\\))? set `));
+    }
+    // the strap is a tie: its margin reaching zero is named for what it means
+    expect(text).toMatch(/Crossing: holdDownStrapToFloorAnchor: slack \(its tension reaches zero\) at mdot = \d+(\.\d+)? kg \/ s\./);
+    // the envelope names each support once over its components
+    expect(text).toContain("Support: leftRubberBearingPadUnderEngine Fx lbf ");
     // units on the heading's second line still read as "Fx (lbf)"
     expect(text).toMatch(/Fx \(lbf\)/);
     expect(pages.length).toBeGreaterThan(2);

@@ -1,0 +1,36 @@
+// The studies' result tables as shown (on screen, in the CSV and on the calc sheet): only a fixed
+// support resists a moment, so with none in the sketch the M column would be a row of zeros that
+// reads like a computed result. It is left out then, and kept (zeros included) when a fixed
+// support exists.
+import type { StudyResult } from "@/solver/cases";
+import type { Table } from "@/solver/report";
+
+/** Does any support in the study carry a moment (is any of them a fixed support)? */
+export function hasMomentSupport(study: StudyResult): boolean {
+  if (Object.values(study.envelope).some((e) => e.kind === "fixed")) return true;
+  // a support whose body is left out of the envelope in every case still has its kind in the runs
+  return study.runs.some((run) => run.ok && Object.values(run.result.reactions).some((r) => r.kind === "fixed"));
+}
+
+/** The table without its support-moment column (key "m"), or the envelope without its M rows,
+ *  when no support can carry a moment. */
+export function withoutAbsentMoment(table: Table, study: StudyResult): Table {
+  if (hasMomentSupport(study)) return table;
+  const component = table.columns.findIndex((c) => c.key === "component");
+  if (component >= 0) {
+    const keep = table.rows.map((r) => r[component] !== "M");
+    return { ...table, rows: table.rows.filter((_, i) => keep[i]), marks: table.marks?.filter((_, i) => keep[i]) };
+  }
+  const ci = table.columns.findIndex((c) => c.key === "m");
+  if (ci < 0) return table;
+  return {
+    ...table,
+    columns: table.columns.filter((_, i) => i !== ci),
+    rows: table.rows.map((r) => r.filter((_, i) => i !== ci)),
+    marks: table.marks?.map((m) => {
+      if (!m || !("m" in m)) return m;
+      const { m: _dropped, ...rest } = m;
+      return Object.keys(rest).length ? rest : undefined;
+    }),
+  };
+}

@@ -1,0 +1,63 @@
+// The studies' result tables on screen: a long case or support name wraps in its cell (the table
+// fits its panel rather than scrolling sideways) and keeps its full text as the cell's title;
+// numbers never wrap; the M column is there only when a fixed support can carry a moment.
+import { readFileSync } from "node:fs";
+import { render, screen, within } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { ReportTable } from "@/components/studies/ReportTable";
+import { withoutAbsentMoment } from "@/canvas/studies/tables";
+import { parseSketch, solveCases } from "@/solver/index";
+import { caseReactionTable, envelopeTable } from "@/solver/report";
+
+const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n}.json`, "utf8"));
+const LONG_CASE = "Run-out with the discharge valve fully open, the strainer clean and the sump at its highest level";
+
+function study(file: unknown) {
+  const p = parseSketch(file);
+  if (!p.ok) throw new Error(JSON.stringify(p.errors));
+  return solveCases(p.file);
+}
+
+/** The trailer (contacts only) with a long-named case and a support with a long id (demo data). */
+function trailer() {
+  const file = load("fire-monitor-trailer");
+  for (const s of file.supports) if (s.id === "leg") s.id = "rearStabiliserLegOnTheOutriggerBeam";
+  file.cases = [
+    { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
+    { id: "long", name: LONG_CASE, parameters: { theta: "20 deg" } },
+  ];
+  return file;
+}
+
+describe("ReportTable", () => {
+  it("wraps long names in their cells with the full name as the title; numbers stay on one line", () => {
+    const s = study(trailer());
+    render(<ReportTable table={withoutAbsentMoment(envelopeTable(s, "SI"), s)} fileName="envelope" testId="envelope" />);
+    const table = screen.getByTestId("envelope");
+    const named = within(table).getAllByTitle(LONG_CASE);
+    expect(named.length).toBeGreaterThan(0);
+    for (const cell of named) {
+      expect(cell.textContent).toBe(LONG_CASE);
+      expect(cell.className).toContain("whitespace-normal");
+      expect(cell.className).toContain("max-w-[14rem]");
+      expect(cell.className).not.toContain("whitespace-nowrap");
+    }
+    // an id without spaces may break anywhere rather than widen the table
+    const id = within(table).getAllByTitle("rearStabiliserLegOnTheOutriggerBeam")[0];
+    expect(id.className).toContain("[overflow-wrap:anywhere]");
+    for (const cell of table.querySelectorAll("td[data-col=max], td[data-col=min]")) expect(cell.className).toContain("whitespace-nowrap");
+  });
+
+  it("shows no M column of zeros when no support is fixed, and keeps it for a fixed support", () => {
+    const s = study(trailer());
+    const { unmount } = render(<ReportTable table={withoutAbsentMoment(caseReactionTable(s, "SI"), s)} fileName="cases" testId="cases" />);
+    const heads = within(screen.getByTestId("cases")).getAllByRole("columnheader").map((h) => h.textContent);
+    expect(heads).toContain("Fx(kN)");
+    expect(heads.some((h) => h?.startsWith("M"))).toBe(false);
+    unmount();
+
+    const bend = study(load("pipe-bend-anchor"));
+    render(<ReportTable table={withoutAbsentMoment(caseReactionTable(bend, "SI"), bend)} fileName="cases" testId="cases" />);
+    expect(within(screen.getByTestId("cases")).getAllByRole("columnheader").map((h) => h.textContent)).toContain("M(kN·m)");
+  });
+});
