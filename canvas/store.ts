@@ -18,6 +18,8 @@ export interface HistoryEntry {
   selectionAfter: string[];
   /** consecutive applies with the same key (typing in one field) merge into this entry */
   coalesce?: string;
+  /** the whole sketch was replaced: undo and redo ask for a fit to view too */
+  replacesSketch?: boolean;
 }
 
 /** What a pointer press on the canvas does. */
@@ -52,6 +54,12 @@ export interface EditorState {
   notice: string | null;
   /** bumps on every change of the sketch (autosave watches it) */
   revision: number;
+  /**
+   * bumps when the view should be fitted to the sketch: a whole other sketch came in (an example,
+   * an import, a new sketch) or went out again with undo/redo. The canvas does the fit, as it
+   * needs the drawn scene and the canvas's size.
+   */
+  fitRequest: number;
   /** size of the canvas on screen, px (fit to view needs it) */
   viewport: { width: number; height: number };
   /** the caller's role may not change this sketch: commands and gestures are refused */
@@ -102,6 +110,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
       momentPoint: null,
       notice: null,
       revision: 0,
+      fitRequest: 0,
       viewport: { width: 800, height: 600 },
       readOnly: false,
 
@@ -123,6 +132,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.sketch = after;
           d.selection = selectionAfter;
           d.revision += 1;
+          if (c.def.replacesSketch) d.fitRequest += 1;
           if (!c.def.undoable) return;
           const top = d.past[d.past.length - 1];
           if (opts?.coalesce && top && top.coalesce === opts.coalesce && d.future.length === 0) {
@@ -130,7 +140,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
             top.selectionAfter = selectionAfter;
             return;
           }
-          d.past.push({ label, before, after, selectionBefore, selectionAfter, coalesce: opts?.coalesce });
+          d.past.push({ label, before, after, selectionBefore, selectionAfter, coalesce: opts?.coalesce, ...(c.def.replacesSketch ? { replacesSketch: true } : {}) });
           if (d.past.length > HISTORY_LIMIT) d.past.splice(0, d.past.length - HISTORY_LIMIT);
           d.future = [];
         });
@@ -148,6 +158,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.sketch = entry.before;
           d.selection = entry.selectionBefore.filter((id) => findElement(entry.before, id));
           d.revision += 1;
+          if (entry.replacesSketch) d.fitRequest += 1;
           d.notice = `Undid: ${entry.label}`;
         });
       },
@@ -163,6 +174,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.sketch = entry.after;
           d.selection = entry.selectionAfter.filter((id) => findElement(entry.after, id));
           d.revision += 1;
+          if (entry.replacesSketch) d.fitRequest += 1;
           d.notice = `Redid: ${entry.label}`;
         });
       },
@@ -284,6 +296,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.tool = { kind: "select" };
           d.momentPoint = null;
           d.revision += 1;
+          d.fitRequest += 1;
         }),
     })),
   );

@@ -11,6 +11,9 @@ export interface CommandDef<A> {
   label: (args: A, sketch: SketchFile) => string;
   /** false for changes that are not the user's edits (none yet: every command here is undoable) */
   undoable: boolean;
+  /** true when the command puts a whole other sketch in place: applying, undoing or redoing it asks
+   *  the canvas to fit the view, since the old zoom and pan may show nothing of the new drawing */
+  replacesSketch?: boolean;
   run: (sketch: SketchFile, args: A) => SketchFile;
   /** the selection after the command, when it changes it (new elements, deleted ones) */
   select?: (before: SketchFile, after: SketchFile, args: A, selection: readonly string[]) => string[];

@@ -168,6 +168,7 @@ export const replaceSketch = defineCommand<{ sketch: SketchFile; label: string }
   name: "replaceSketch",
   label: ({ label }) => label,
   undoable: true,
+  replacesSketch: true,
   run: (_sketch, { sketch }) => sketch,
   select: () => [],
 });

@@ -10,6 +10,7 @@ import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "../context";
 import { gridStep } from "../geometry/view";
 import { fitScene } from "../geometry/fit";
+import { followFitRequests } from "../fitRequests";
 import { GRID_MAJOR, GRID_MINOR } from "../render/palette";
 import { markFrame } from "../perf";
 import { BodyNode, CgNode, ItemNode, statesOf } from "./nodes";
@@ -147,6 +148,9 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
     ro.observe(el);
     return () => ro.disconnect();
   }, [stores]);
+
+  // a whole other sketch (an example, an import, or the one they replaced, back with undo) is fitted into view
+  useEffect(() => followFitRequests(stores), [stores]);
 
   // the pointer controller and its native listeners (wheel must not be passive); all outside render
   useEffect(() => {

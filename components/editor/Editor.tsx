@@ -110,7 +110,6 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
     s.apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
     // the undo hint first: the notice line is cut to the window's width
     s.notify(`Opened “${ex.title}”. Undo (Ctrl+Z) returns to your sketch. ${ex.summary}`);
-    files.fit();
   };
 
   return (

@@ -22,8 +22,8 @@ export function SketchForm() {
     <div className="space-y-2.5" data-testid="sketch-form">
       <p className="text-[13px] font-semibold text-ink">Sketch</p>
       <p className="text-[12px] leading-snug text-ink-faint">Nothing selected. Pick an element on the drawing or in the list to edit it.</p>
-      <TextField label="Title" value={title} maxLength={300} onCommit={(v, c) => apply(setSketchField({ field: "title", value: v || undefined }) as Command<unknown>, c)} />
-      <TextField label="Notes" value={description} multiline maxLength={5000} onCommit={(v, c) => apply(setSketchField({ field: "description", value: v || undefined }) as Command<unknown>, c)} />
+      <TextField label="Title" value={title} maxLength={300} onCommit={(v, c) => void apply(setSketchField({ field: "title", value: v || undefined }) as Command<unknown>, c)} />
+      <TextField label="Notes" value={description} multiline maxLength={5000} onCommit={(v, c) => void apply(setSketchField({ field: "description", value: v || undefined }) as Command<unknown>, c)} />
       <NumericField
         valueKey="gravity"
         label="Gravity"

@@ -1,5 +1,7 @@
 "use client";
-// A plain text field (labels, titles) that stores as you type, one undo step per visit.
+// A plain text field (labels, titles, load groups) that stores as you type, one undo step per
+// visit. When the file format refuses the text (a load group must start with a letter), the
+// reason shows under the field and nothing is stored.
 import { useId, useRef, useState } from "react";
 import { INPUT } from "./ui";
 
@@ -16,7 +18,8 @@ export function TextField({
 }: {
   label: string;
   value: string | undefined;
-  onCommit: (v: string, coalesce: string) => void;
+  /** store the text; returns the reason it was refused (nothing stored), or nothing */
+  onCommit: (v: string, coalesce: string) => string | null | void;
   placeholder?: string;
   multiline?: boolean;
   maxLength?: number;
@@ -24,9 +27,13 @@ export function TextField({
 }) {
   const id = useId();
   const [draft, setDraft] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
   const sessionRef = useRef(0);
+  const errorId = `${id}-error`;
   const common = {
     id,
+    "aria-invalid": error ? true : undefined,
+    "aria-describedby": error ? errorId : undefined,
     value: draft ?? value ?? "",
     placeholder,
     maxLength,
@@ -35,10 +42,14 @@ export function TextField({
       sessionRef.current = ++session;
       setDraft(value ?? "");
     },
-    onBlur: () => setDraft(null),
+    onBlur: () => {
+      // the field goes back to what is stored: the refused text is dropped with its reason
+      setDraft(null);
+      setError(null);
+    },
     onChange: (e: { target: { value: string } }) => {
       setDraft(e.target.value);
-      onCommit(e.target.value, `text:${id}#${sessionRef.current}`);
+      setError(onCommit(e.target.value, `text:${id}#${sessionRef.current}`) || null);
     },
   };
   return (
@@ -50,6 +61,11 @@ export function TextField({
         <textarea {...common} rows={3} className={`${INPUT} h-auto py-1 leading-snug`} />
       ) : (
         <input {...common} className={INPUT} onKeyDown={(e) => e.key === "Enter" && (e.target as HTMLInputElement).blur()} />
+      )}
+      {error && (
+        <p id={errorId} className="mt-0.5 text-[11px] leading-snug text-caution" aria-live="polite">
+          ⚠ {error}
+        </p>
       )}
     </div>
   );

@@ -6,7 +6,6 @@ import { download, exportSketchText, fileStem, importSketchText, svgToPng } from
 import { renderSketchSvg } from "@/canvas/render/svg";
 import { replaceSketch } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
-import { fitScene } from "@/canvas/geometry/fit";
 import type { FieldError } from "@/solver/types";
 
 export interface ImportProblem {
@@ -17,14 +16,6 @@ export interface ImportProblem {
 export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputElement | null>) {
   const [problem, setProblem] = useState<ImportProblem | null>(null);
 
-  const fit = useCallback(() => {
-    // after React has drawn the new sketch's scene
-    requestAnimationFrame(() => {
-      const s = stores.editor.getState();
-      s.setView(fitScene(stores.scene.getState(), s.viewport.width, s.viewport.height));
-    });
-  }, [stores]);
-
   const importText = useCallback(
     (text: string, name: string) => {
       const out = importSketchText(text);
@@ -34,11 +25,11 @@ export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputEl
       }
       const s = stores.editor.getState();
       s.apply(replaceSketch({ sketch: out.sketch, label: `Import ${name}` }) as Command<unknown>);
+      // replaceSketch asks the canvas to fit the view to the imported drawing
       s.notify(out.migratedFrom.length ? `Opened ${name} (format version ${out.migratedFrom[0]}, brought up to date).` : `Opened ${name}.`);
-      fit();
       return true;
     },
-    [stores, fit],
+    [stores],
   );
 
   const onFile = useCallback(
@@ -67,7 +58,6 @@ export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputEl
     clearProblem: () => setProblem(null),
     onFile,
     importText,
-    fit,
     openImport: () => inputRef.current?.click(),
     exportJson: () => download(new Blob([exportSketchText(stores.editor.getState().sketch)], { type: "application/json" }), `${stem()}.counterpoise.json`),
     exportSvg: () => download(new Blob([svgNow()], { type: "image/svg+xml" }), `${stem()}.svg`),

@@ -241,6 +241,76 @@ describe("handles", () => {
   });
 });
 
+describe("several elements at once", () => {
+  it("Shift+click adds to the selection and takes away again; a drag moves them all, one undo step", () => {
+    hit = { type: "element", id: "s1" };
+    down(1, 0);
+    pointer("pointerup", 1, 0);
+    hit = { type: "element", id: "b2" };
+    down(5, 0.5, { shiftKey: true });
+    pointer("pointerup", 5, 0.5);
+    expect(ed().selection).toEqual(["s1", "b2"]);
+    hit = { type: "element", id: "p1" };
+    down(2, 0.5, { shiftKey: true });
+    pointer("pointerup", 2, 0.5);
+    expect(ed().selection).toEqual(["s1", "b2", "p1"]);
+    down(2, 0.5, { shiftKey: true });
+    pointer("pointerup", 2, 0.5);
+    expect(ed().selection).toEqual(["s1", "b2"]);
+    // dragging one of them carries the others by the same step
+    hit = { type: "element", id: "s1" };
+    down(1, 0);
+    pointer("pointermove", 1.6, 0);
+    pointer("pointerup", 1.6, 0);
+    expect(el("s1").at).toEqual([1.6, 0]);
+    expect(ed().sketch.bodies[1].outline[0]).toEqual([4.6, 0]);
+    expect(ed().sketch.bodies[0].outline[0]).toEqual([0, 0]);
+    expect(ed().past).toHaveLength(1);
+  });
+});
+
+describe("a held Alt turns snapping off", () => {
+  it("for a dragged support: it follows the pointer, off the grid", () => {
+    hit = { type: "element", id: "s1" };
+    down(1, 0);
+    pointer("pointermove", 1.33, 0.07, { altKey: true });
+    expect(interaction.getState().snap).toBeNull();
+    pointer("pointerup", 1.33, 0.07, { altKey: true });
+    const [x, y] = el("s1").at as number[];
+    expect(x).toBeCloseTo(1.33, 9);
+    expect(y).toBeCloseTo(0.07, 9);
+  });
+
+  it("for a click that places: the pin goes where clicked, not onto the grid", () => {
+    ed().setTool({ kind: "place", element: "pin" });
+    down(5.33, 0.47, { altKey: true });
+    const [x, y] = ed().sketch.supports[1].at as number[];
+    expect(x).toBeCloseTo(5.33, 9);
+    expect(y).toBeCloseTo(0.47, 9);
+    // without Alt the same click lands on the grid (0.2 m at 100 px/m)
+    ed().undo();
+    ed().setTool({ kind: "place", element: "pin" });
+    down(5.33, 0.47);
+    expect(ed().sketch.supports[1].at).toEqual([5.4, 0.4]);
+  });
+
+  it("for a tray item dropped on the canvas: the body is centred on the drop point itself", () => {
+    controller.drop({ kind: "body" }, { ...screenOf(1.03, 3.08), altKey: true });
+    const [x0, y0] = ed().sketch.bodies[2].outline[0] as number[];
+    expect(x0).toBeCloseTo(0.03, 9);
+    expect(y0).toBeCloseTo(2.58, 9);
+  });
+
+  it("and the snap switch turns it off for good", () => {
+    ed().setSnap(false);
+    hit = { type: "element", id: "s1" };
+    down(1, 0);
+    pointer("pointermove", 1.33, 0.07);
+    pointer("pointerup", 1.33, 0.07);
+    expect((el("s1").at as number[])[0]).toBeCloseTo(1.33, 9);
+  });
+});
+
 describe("zoom and pan", () => {
   it("pinches with two fingers: zooms about their midpoint and follows it", () => {
     const touch = (id: number, x: number, y: number) =>

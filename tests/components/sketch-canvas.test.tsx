@@ -8,6 +8,11 @@ import { EditorProvider } from "@/canvas/context";
 import { createInteractionStore } from "@/canvas/konva/interaction";
 import SketchCanvas from "@/canvas/konva/SketchCanvas";
 import { exampleById } from "@/canvas/examples";
+import { replaceSketch, type Command } from "@/canvas/commands";
+import { toScreen } from "@/canvas/geometry/view";
+import { newBody } from "@/canvas/model/factory";
+import { emptySketch } from "@/canvas/model/elements";
+import type { Vec2 } from "@/solver/types";
 import "./editor-helpers";
 
 function mount(id: string) {
@@ -63,6 +68,42 @@ describe("SketchCanvas", () => {
     }
     // Konva's own DOM listeners are bypassed: pointer input lands on the editor's container
     expect(stage().content.style.pointerEvents).toBe("none");
+  });
+});
+
+describe("undo of opening an example over one's own sketch", () => {
+  it("fits the view to the sketch that comes back, and redo fits the example again", async () => {
+    // jsdom lays nothing out: give the canvas's container a size
+    const rect = vi.spyOn(HTMLElement.prototype, "getBoundingClientRect").mockReturnValue({ x: 0, y: 0, left: 0, top: 0, right: 800, bottom: 600, width: 800, height: 600, toJSON: () => ({}) } as DOMRect);
+    try {
+      const own = { ...emptySketch("A crate far out"), bodies: [newBody("b1", [[50, 40], [51, 40], [51, 40.6], [50, 40.6]], "Crate")] };
+      const editor = createEditorStore({ sketch: own });
+      const { container } = render(
+        <EditorProvider editor={editor}>
+          <SketchCanvas interaction={createInteractionStore()} />
+        </EditorProvider>,
+      );
+      await waitFor(() => expect(container.querySelector("canvas")).not.toBeNull());
+      const onCanvas = () =>
+        editor.getState().sketch.bodies.every((b) =>
+          (b.outline as Vec2[]).every((p) => {
+            const [x, y] = toScreen(editor.getState().view, p);
+            return x >= 0 && x <= 800 && y >= 0 && y <= 600;
+          }),
+        );
+      expect(onCanvas()).toBe(true);
+      act(() => {
+        editor.getState().apply(replaceSketch({ sketch: exampleById("washing-cart")!.sketch, label: "Open the example" }) as Command<unknown>);
+      });
+      expect(onCanvas()).toBe(true);
+      act(() => editor.getState().undo());
+      expect(editor.getState().sketch.title).toBe("A crate far out");
+      expect(onCanvas()).toBe(true);
+      act(() => editor.getState().redo());
+      expect(onCanvas()).toBe(true);
+    } finally {
+      rect.mockRestore();
+    }
   });
 });
 

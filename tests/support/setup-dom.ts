@@ -3,4 +3,9 @@ import "vitest-canvas-mock";
 import { cleanup } from "@testing-library/react";
 import { afterEach } from "vitest";
 
-afterEach(() => cleanup());
+// Each test starts from a fresh browser: a unit choice or a scratch sketch kept in local storage
+// by one test must not leak into the next.
+afterEach(() => {
+  cleanup();
+  window.localStorage.clear();
+});

@@ -1,0 +1,167 @@
+// The results in words and numbers, beyond the worked examples' own sentences: the status
+// sentences no fixture reaches (no supports, several bodies, slip while a contact lifts, a pivot
+// off the supports, a sliding body), the body/support switch on the moment and friction columns,
+// and the SI / US switch across the results while typed inputs keep their units.
+import { readFileSync } from "node:fs";
+import { screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { describe, expect, it } from "vitest";
+import { parseSketch, solve, type SolveResult, type Sketch } from "@/solver/index";
+import { formatQuantity } from "@/solver/units";
+import { emptySketch } from "@/canvas/model/elements";
+import { newBody } from "@/canvas/model/factory";
+import { statusSentences } from "@/components/results/statusSentence";
+import { EXAMPLES } from "@/canvas/examples";
+import { beam, mountResultsDock, renderEditor } from "./editor-helpers";
+
+const load = (name: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${name}.json`, "utf8"));
+
+function solved(doc: unknown): { sketch: Sketch; result: SolveResult } {
+  const p = parseSketch(doc);
+  if (!p.ok) throw new Error(JSON.stringify(p.errors));
+  return { sketch: p.sketch, result: solve(p.sketch) };
+}
+
+describe("status sentences the worked examples do not reach", () => {
+  it("a contact lifting off: which contact, and who still holds the body", () => {
+    const { sketch, result } = solved(load("pump-set-hold-down"));
+    const [s] = statusSentences(sketch, result);
+    expect(s.tone).toBe("lifts");
+    expect(s.headline).toBe("Lifts off at the right pad — the left pad and the hold-down strap still hold the body");
+  });
+
+  it("a body with no supports at all says so and what to add", () => {
+    const { sketch, result } = solved({ ...emptySketch("Loose crate"), bodies: [newBody("b1", [[0, 0], [1, 0], [1, 1], [0, 1]], "Crate")] });
+    expect(statusSentences(sketch, result)).toEqual([{ body: "b1", tone: "unrestrained", headline: "Unrestrained — the body has no supports yet; add a support or a tie", details: [] }]);
+  });
+
+  it("with several bodies, each sentence starts with its body's name", () => {
+    const doc = {
+      ...emptySketch("Two bodies"),
+      bodies: [newBody("b1", [[0, 0], [4, 0], [4, 0.5], [0, 0.5]], "Beam"), newBody("b2", [[6, 0], [7, 0], [7, 1], [6, 1]], "Crate")],
+      supports: [
+        { id: "s1", body: "b1", kind: "pin", at: [0, 0], label: "left pin" },
+        { id: "s2", body: "b1", kind: "contact", at: [4, 0], angle: 90, label: "right pad" },
+      ],
+    };
+    const { sketch, result } = solved(doc);
+    const out = statusSentences(sketch, result);
+    expect(out.map((s) => s.headline)).toEqual([
+      // 100 kg beam, weight 980.7 N shared equally by the two supports (statics, common practice)
+      `Beam: Holds — all supports within their limits; the largest reaction is ${formatQuantity(980.665 / 2, "force", "SI")} at the left pin`,
+      "Crate: Unrestrained — the body has no supports yet; add a support or a tie",
+    ]);
+  });
+
+  it("slip leads when a contact also lifts, and the lift-off follows as a detail", () => {
+    const doc = load("fire-monitor-trailer");
+    for (const s of doc.supports) if ("mu" in s) s.mu = 0.01;
+    const { sketch, result } = solved(doc);
+    const [s] = statusSentences(sketch, result);
+    expect(result.bodies.trailer.status).toBe("lifts");
+    expect(s.tone).toBe("slips");
+    expect(s.headline).toMatch(/^Slips at the .+ — needs \d[\d.]*, has μ = 0\.01/);
+    expect(s.details[0]).toBe("Lifts off at the front jack — the rear stabiliser leg and the wheel still hold the body.");
+  });
+
+  it("tipping about a point that is not a support names the point, in metres or in feet", () => {
+    const { sketch, result } = solved(load("thrust-stand-tips"));
+    const moved: SolveResult = { ...result, bodies: { stand: { ...result.bodies.stand, freeMotion: { kind: "rotation", about: [0.5, 1.2] } } } };
+    expect(statusSentences(sketch, moved)[0].headline).toMatch(/^Tips about the point \(0\.5, 1\.2\) m — the rear pad would have to pull /);
+    // 0.5 m / 0.3048 = 1.640 ft, 1.2 m / 0.3048 = 3.937 ft (NIST SP 811)
+    expect(statusSentences(sketch, moved, "US")[0].headline).toMatch(/^Tips about the point \(1\.64, 3\.94\) ft — the rear pad would have to pull [\d,.]+ lbf$/);
+    const sliding: SolveResult = { ...result, bodies: { stand: { ...result.bodies.stand, freeMotion: { kind: "translation", angle: 30 } } } };
+    expect(statusSentences(sketch, sliding)[0].headline).toMatch(/^Would move along 30° — the rear pad would have to pull /);
+  });
+
+  it("a body that slides as a whole (no one contact over its μ) gives the friction needed and available", () => {
+    const { sketch, result } = solved(load("pump-skid-slip"));
+    // the same body, with each contact just within its μ but the body's total over it
+    const reactions = Object.fromEntries(Object.entries(result.reactions).map(([id, r]) => [id, r.friction ? { ...r, friction: { needed: r.friction.mu, mu: r.friction.mu } } : r]));
+    const sumN = Object.values(result.reactions).reduce((a, r) => a + (r.friction && r.state === "bearing" ? (r.n ?? 0) : 0), 0);
+    const body = { ...result.bodies.skid, friction: { needed: 0.03, available: 0.02 } };
+    const [s] = statusSentences(sketch, { ...result, reactions, bodies: { skid: body } });
+    expect(s.tone).toBe("slips");
+    expect(s.headline).toBe(`Slides — its friction contacts must resist ${formatQuantity(0.03 * sumN, "force", "SI")} and can give ${formatQuantity(0.02 * sumN, "force", "SI")}`);
+  });
+});
+
+const cells = (col: string) => [...document.querySelectorAll(`[data-testid=reactions] td[data-col=${col}]`)].map((c) => c.textContent!);
+const num = (t: string) => (t === "—" ? null : Number(t.replace(/,/g, "").replace("−", "-")));
+
+describe("force on the body / load on the support", () => {
+  async function flip(fixture: string, flipped: string[], kept: string[]) {
+    const user = userEvent.setup();
+    mountResultsDock(load(fixture));
+    for (const c of [...flipped, ...kept]) expect(cells(c).length, `${fixture} ${c}`).toBeGreaterThan(0);
+    const before = Object.fromEntries([...flipped, ...kept].map((c) => [c, cells(c)]));
+    await user.click(within(screen.getByTestId("sense")).getByRole("radio", { name: "Load on the support" }));
+    for (const c of flipped)
+      cells(c).forEach((t, i) => {
+        const was = num(before[c][i]);
+        expect(num(t), `${c}[${i}]`).toBe(was === null ? null : -was + 0);
+      });
+    for (const c of kept) expect(cells(c), c).toEqual(before[c]);
+    await user.click(within(screen.getByTestId("sense")).getByRole("radio", { name: "Force on the body" }));
+    for (const c of flipped) expect(cells(c)).toEqual(before[c]);
+  }
+
+  it("reverses the fixed support's moment with its forces; the resultant stays", async () => {
+    await flip("ducted-fan-checks", ["fx", "fy", "m"], ["resultant", "state"]);
+  });
+
+  it("reverses the contacts' normal and friction forces; resultant, state and margin stay", async () => {
+    await flip("pump-skid-slip", ["fx", "fy", "n", "t"], ["resultant", "state", "margin"]);
+  });
+});
+
+describe("the SI / US switch", () => {
+  it("turns the reactions, the status sentence and field values into US units; what was typed stays as typed", async () => {
+    const user = userEvent.setup();
+    await renderEditor(beam());
+    // 10 kN at mid-span plus the 100 kg beam's weight (980.665 N) at mid-span: each support carries
+    // half, (10 000 + 980.665)/2 = 5490.33 N = 5.490 kN (statics, common practice)
+    const table = within(screen.getByTestId("reactions"));
+    expect(table.getByRole("columnheader", { name: /^Fy/ })).toHaveTextContent("(kN)");
+    expect(cells("fy").map(num)).toEqual([5.49, 5.49]);
+    expect(screen.getByTestId("status-sentence")).toHaveTextContent("5.49 kN");
+    await user.click(within(screen.getByTestId("units")).getByRole("radio", { name: "US" }));
+    // 5490.33 N / 4.4482216152605 N/lbf = 1234.3 lbf (NIST SP 811)
+    expect(within(screen.getByTestId("reactions")).getByRole("columnheader", { name: /^Fy/ })).toHaveTextContent("(lbf)");
+    expect(cells("fy").map(num)).toEqual([1234, 1234]);
+    expect(screen.getByTestId("status-sentence")).toHaveTextContent(/1,?234 lbf/);
+    expect(screen.getByTestId("status-sentence")).not.toHaveTextContent(/kN/);
+    // the load was typed "10 kN": the field keeps it, and shows its value in lbf (10 000 / 4.448222 = 2248 lbf)
+    await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Point force l1/ }));
+    const magnitude = within(screen.getByTestId("element-form")).getByLabelText("Magnitude");
+    expect(magnitude).toHaveValue("10 kN");
+    expect(magnitude).toHaveAccessibleDescription(/^= 2,?248 lbf$/);
+  });
+});
+
+describe("the examples menu", () => {
+  it("offers the trailer monitor, the pipe bend and the washing cart; each opens solved and explained", async () => {
+    const user = userEvent.setup();
+    await renderEditor(beam());
+    for (const id of ["fire-monitor-trailer", "pipe-bend-anchor", "washing-cart"]) expect(EXAMPLES.map((e) => e.id)).toContain(id);
+    for (const ex of EXAMPLES) {
+      await user.click(screen.getByTestId("menu-examples"));
+      await user.click(screen.getByRole("menuitem", { name: new RegExp(ex.title) }));
+      expect(screen.getByTestId("sketch-title")).toHaveTextContent(ex.sketch.title!);
+      expect(screen.getByTestId("status-sentence"), ex.id).toHaveTextContent(/^\w+(Holds|Lifts|Tips|Slips) — /);
+      expect(cells("fy").length, ex.id).toBeGreaterThan(0);
+      expect(screen.queryByTestId("stale")).toBeNull();
+    }
+  });
+
+  it("raising the cart's lance toward horizontal tips it, and the sentence says about which wheel", async () => {
+    const user = userEvent.setup();
+    await renderEditor(beam(), "washing-cart");
+    expect(screen.getByTestId("status-sentence")).toHaveAttribute("data-tone", "holds");
+    const theta = within(screen.getByTestId("parameters")).getByLabelText("Expression of parameter theta");
+    await user.clear(theta);
+    await user.type(theta, "-35 deg");
+    expect(screen.getByTestId("status-sentence")).toHaveAttribute("data-tone", "tips");
+    expect(screen.getByTestId("status-sentence")).toHaveTextContent(/Tips about the rear wheels .* — the front caster would have to pull [\d.]+ N/);
+  }, 15_000);
+});
