@@ -47,6 +47,18 @@ export function authRateLimit(): { max: number; window: number } {
   return { max: positiveNumber("AUTH_RATE_LIMIT_MAX", 5), window: positiveNumber("AUTH_RATE_LIMIT_WINDOW", 10) };
 }
 
+/**
+ * Minutes between the server's own sweeps of unsaved underlays (UPLOAD_SWEEP_MINUTES, default 60;
+ * 0 turns them off). Not a number: an error naming the variable, which the caller logs.
+ */
+export function uploadSweepMinutes(): number {
+  const raw = process.env.UPLOAD_SWEEP_MINUTES;
+  if (raw === undefined || raw.trim() === "") return 60;
+  const value = Number(raw);
+  if (!Number.isFinite(value) || value < 0) throw new Error(`UPLOAD_SWEEP_MINUTES must be a number of minutes (0 turns the sweep off), not "${raw}"`);
+  return value;
+}
+
 /** How long an invitation link stays valid. */
 export function invitationTtlHours(): number {
   return positiveNumber("INVITE_TTL_HOURS", 7 * 24);

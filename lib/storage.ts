@@ -49,6 +49,20 @@ export async function objectExists(key: string): Promise<boolean> {
   }
 }
 
+/**
+ * Whether the store answers at all: any HTTP answer to a HEAD of a key that is never written (404,
+ * or 403 for a key without list rights) counts; no connection or a 5xx does not.
+ */
+export async function storageAnswers(): Promise<boolean> {
+  try {
+    await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: "probe/storage-answers" }));
+    return true;
+  } catch (err) {
+    const status = (err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+    return status !== undefined && status < 500;
+  }
+}
+
 export async function deleteObject(key: string): Promise<void> {
   await s3().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
 }

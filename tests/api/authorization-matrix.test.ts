@@ -1,14 +1,13 @@
 // Every route handler under app/api, found on disk with each method it exports, and the status
 // each kind of caller gets: owner, editor, checker, viewer, a signed-in outsider, signed out.
 // A route or method missing from ROWS (or a row without a route) fails the first test.
-import { readdirSync, statSync } from "node:fs";
-import { join, relative, sep } from "node:path";
 import { beforeAll, afterAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { invitation } from "@/db/schema";
 import { hashInvitationToken, newInvitationToken } from "@/lib/invitations";
 import { createSketch } from "@/lib/sketches";
 import { parseSketch } from "@/solver";
+import { routeFiles, routePath } from "./route-files";
 import { call, ensureMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 import { fixture as sketchFile } from "./sketch-fixtures";
 import { REVIEW_ROWS } from "./matrix-review-rows";
@@ -17,18 +16,8 @@ import { UPLOADS_ROWS } from "./matrix-uploads-rows";
 import { all, editors, MATRIX_CALLERS, members, ownersOnly, signedIn, type Caller, type Fixture, type Handler, type Row } from "./matrix-types";
 
 const METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
-const API_DIR = join(process.cwd(), "app", "api");
 
-function routeFiles(dir = API_DIR): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const path = join(dir, name);
-    if (statSync(path).isDirectory()) return routeFiles(path);
-    return name === "route.ts" ? [path] : [];
-  });
-}
 
-/** `app/api/sketches/[id]/route.ts` → `/api/sketches/[id]`. */
-const routePath = (file: string) => "/" + relative(join(process.cwd(), "app"), file).split(sep).slice(0, -1).join("/");
 
 
 const W = (f: Fixture) => ({ id: f.ws });

@@ -79,6 +79,11 @@ const CASES: Case[] = [
     action: "invite by e-mail",
     expect: { owner: 201, editor: 403, checker: 403, viewer: 403, outsider: 404, signedOut: 401 },
     run: (f, cookie) => call(invitationsRoute.POST, { method: "POST", params: p(f), cookie, body: { email: "new.colleague@test.counterpoise.local", role: "checker" } }),
+    effect: {
+      read: async (f) => (await db.select({ id: invitation.id }).from(invitation).where(and(eq(invitation.workspaceId, f.ws), eq(invitation.email, "new.colleague@test.counterpoise.local")))).length,
+      allowed: 1,
+      refused: 0,
+    },
   },
   {
     action: "withdraw an invitation",

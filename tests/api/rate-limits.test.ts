@@ -1,7 +1,7 @@
 // The app's own request budgets (POST /api/solve): counted in PostgreSQL, so two app servers
 // spend one budget per client address; a window that is over starts afresh.
 import { describe, expect, it } from "vitest";
-import { eq } from "drizzle-orm";
+import { eq, like } from "drizzle-orm";
 import { db } from "@/db";
 import { appRateLimit } from "@/db/schema";
 import { createRateLimiter } from "@/lib/rate-limit";
@@ -17,6 +17,8 @@ async function status(p: Promise<void>): Promise<number | string> {
 
 describe("request budgets shared by app servers", () => {
   it("counts requests made through any server against one budget per address, then starts afresh", async () => {
+    // the probe's rows from an earlier run on the same database would be counted too
+    await db.delete(appRateLimit).where(like(appRateLimit.key, "probe:%"));
     const serverA = createRateLimiter("probe");
     const serverB = createRateLimiter("probe");
     const t0 = 1_900_000_000_000;

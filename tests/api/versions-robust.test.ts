@@ -1,6 +1,6 @@
 // Ten saves racing on one base version; malformed, mistyped, invalid and oversized requests
 // (4xx with field paths, never 500, nothing written); the public solve endpoint.
-import { count, eq, like } from "drizzle-orm";
+import { count, eq, like, sql } from "drizzle-orm";
 import { afterEach, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import * as solveRoute from "@/app/api/solve/route";
 import * as compareRoute from "@/app/api/sketches/[id]/compare/route";
@@ -69,6 +69,20 @@ describe("ten saves on the same base version at once", () => {
     expect(next.map((r) => r.status).sort()).toEqual([201, 409, 409]);
     const numbers = (await db.select({ n: sketchVersion.number }).from(sketchVersion).where(eq(sketchVersion.sketchId, id))).map((r) => r.n).sort();
     expect(numbers).toEqual([1, 2, 3]);
+  });
+});
+
+describe("the database holds the numbering rules itself", () => {
+  it("refuses a second version with a number already taken, and a number below 1; the listing indexes exist", async () => {
+    const id = await newSketch("Numbering held by the database");
+    const [v1] = await db.select().from(sketchVersion).where(eq(sketchVersion.sketchId, id));
+    const { id: _id, createdAt: _at, ...copy } = v1;
+    await expect(db.insert(sketchVersion).values({ ...copy, number: 1 })).rejects.toThrow();
+    await expect(db.insert(sketchVersion).values({ ...copy, number: 0 })).rejects.toThrow();
+    expect(await counts(id)).toMatchObject({ versions: 1 });
+    const rows = await db.execute<{ indexname: string }>(sql`select indexname from pg_indexes where tablename in ('sketch', 'sketch_version')`);
+    const names = rows.rows.map((r) => r.indexname);
+    for (const n of ["sketch_workspace_updated_idx", "sketch_workspace_title_idx", "sketch_tags_idx", "sketch_version_number_idx", "sketch_version_review_idx"]) expect(names).toContain(n);
   });
 });
 

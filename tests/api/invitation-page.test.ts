@@ -1,0 +1,66 @@
+// The page an invitation link opens, rendered on the server as the app does: an expired, a used
+// and a withdrawn link each get a page that says which and what to do, never the sign-up form.
+import { eq } from "drizzle-orm";
+import { renderToStaticMarkup } from "react-dom/server";
+import { beforeAll, describe, expect, it, vi } from "vitest";
+import { db } from "@/db";
+import { invitation } from "@/db/schema";
+import { hashInvitationToken, newInvitationToken } from "@/lib/invitations";
+import { makeAccount, makeWorkspace, uniqueEmail, type Person } from "./helpers";
+
+// rendered outside a request: nobody is signed in
+vi.mock("@/lib/session", () => ({ currentSession: async () => null }));
+// the open link's form is a client component that asks for the router
+vi.mock("next/navigation", () => ({ useRouter: () => ({ push: () => undefined, refresh: () => undefined, replace: () => undefined }) }));
+
+let owner: Person;
+let ws: string;
+
+beforeAll(async () => {
+  owner = await makeAccount("invite-page-owner");
+  ws = await makeWorkspace("Invitation page bay", [[owner, "owner"]]);
+});
+
+async function link(state: "pending" | "expired" | "used" | "withdrawn"): Promise<string> {
+  const token = newInvitationToken();
+  const [row] = await db
+    .insert(invitation)
+    .values({ workspaceId: ws, email: uniqueEmail("invitee"), role: "checker", tokenHash: hashInvitationToken(token), invitedBy: owner.id, expiresAt: new Date(Date.now() + 3600_000) })
+    .returning({ id: invitation.id });
+  if (state === "expired") await db.update(invitation).set({ expiresAt: new Date(Date.now() - 60_000) }).where(eq(invitation.id, row.id));
+  if (state === "used") await db.update(invitation).set({ acceptedAt: new Date() }).where(eq(invitation.id, row.id));
+  if (state === "withdrawn") await db.update(invitation).set({ withdrawnAt: new Date() }).where(eq(invitation.id, row.id));
+  return token;
+}
+
+async function page(token: string): Promise<string> {
+  const { default: InvitationPage } = await import("@/app/(auth)/invite/[token]/page");
+  return renderToStaticMarkup(await InvitationPage({ params: Promise.resolve({ token }) }));
+}
+
+const text = (html: string) => html.replace(/<[^>]+>/g, " ").replace(/&#x27;/g, "'").replace(/\s+/g, " ");
+
+describe("the invitation page", () => {
+  const cases = [
+    ["expired", "This invitation has expired", "Ask an owner of the workspace to invite you again"],
+    ["used", "This invitation has already been used", "Each invitation link works once"],
+    ["withdrawn", "This invitation was withdrawn", "Use the newest invitation mail"],
+  ] as const;
+  for (const [state, title, advice] of cases) {
+    it(`${state === "expired" ? "an" : "a"} ${state} link: "${title}", what to do, the workspace's name, and no sign-up form`, async () => {
+      const out = text(await page(await link(state)));
+      expect(out).toContain(title);
+      expect(out).toContain(advice);
+      expect(out).toContain("Invitation page bay");
+      expect(out).not.toMatch(/password/i);
+    });
+  }
+
+  it("an open link offers the sign-up form (so the refusals above are real)", async () => {
+    expect(text(await page(await link("pending")))).toMatch(/password/i);
+  });
+
+  it("a link that never existed: not valid, check the whole address was copied", async () => {
+    expect(text(await page("made-up-token-made-up-token"))).toContain("This invitation link is not valid");
+  });
+});

@@ -1,0 +1,92 @@
+// What a sign-off step tells others: mail to the people it concerns (never the one who took it),
+// an entry in the sketch's activity feed, and the approved version named in the listings.
+import { like } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
+import * as sketchRoute from "@/app/api/sketches/[id]/route";
+import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
+import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
+import { db } from "@/db";
+import { devMail } from "@/db/schema";
+import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Json, type Person } from "./helpers";
+import { fixture } from "./sketch-fixtures";
+
+let owner: Person;
+let author: Person;
+let checker: Person;
+let viewer: Person;
+let ws: string;
+let sketchId: string;
+const title = `Notice skid ${Date.now()}`;
+
+beforeAll(async () => {
+  await ensureMailFake();
+  [owner, author, checker, viewer] = await Promise.all(["owner", "author", "checker", "viewer"].map((t) => makeAccount(`notice-${t}`)));
+  ws = await makeWorkspace("Notice bay", [
+    [owner, "owner"],
+    [author, "editor"],
+    [checker, "checker"],
+    [viewer, "viewer"],
+  ]);
+  const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: author.cookie, body: { title, document: fixture("pipe-bend-anchor") } });
+  expect(made.status).toBe(201);
+  sketchId = made.body.sketch.id;
+});
+
+const take = (who: Person, step: string, note?: string) =>
+  call(signoffRoute.POST, { method: "POST", params: { id: sketchId, number: "1" }, cookie: who.cookie, body: { step, ...(note ? { note } : {}) } });
+
+/** Every mail about this sketch, as [recipient, subject ending], once the expected ones arrived. */
+async function mailsAbout(): Promise<Array<[string, string]>> {
+  const rows = await db.select().from(devMail).where(like(devMail.subject, `%${title}%`));
+  const email = (p: Person) => p.email.toLowerCase();
+  const who = (to: string[]) => [owner, author, checker, viewer].find((p) => to.map((t) => t.toLowerCase()).includes(email(p)))?.name ?? to.join(", ");
+  return rows.map((r) => [who(r.to), r.subject.split(": ").pop()!] as [string, string]).sort();
+}
+
+describe("a sign-off round tells the people involved", () => {
+  it("mails the checkers on submit, the author and owners on check, the author and checker on approval — never the actor", async () => {
+    expect((await take(author, "submit")).status).toBe(200);
+    await waitForMail(checker.email, { subject: /submitted for checking/ });
+    expect((await take(checker, "check")).status).toBe(200);
+    await waitForMail(author.email, { subject: /: checked$/ });
+    await waitForMail(owner.email, { subject: /: checked$/ });
+    expect((await take(owner, "approve")).status).toBe(200);
+    await waitForMail(author.email, { subject: /: approved$/ });
+    await waitForMail(checker.email, { subject: /: approved$/ });
+    // mail is sent after commit, in the background: give a stray one time to show up
+    await new Promise((r) => setTimeout(r, 500));
+    expect(await mailsAbout()).toEqual(
+      [
+        [checker.name, "submitted for checking"],
+        [author.name, "checked"],
+        [owner.name, "checked"],
+        [author.name, "approved"],
+        [checker.name, "approved"],
+      ].sort(),
+    );
+    const one = await waitForMail(author.email, { subject: /: approved$/ });
+    expect(one.text).toContain(`${owner.name} approved version 1`);
+    expect(one.text).toContain(`/workspaces/${ws}/sketches/${sketchId}/versions/1`);
+  });
+
+  it("puts each step in the sketch's activity feed, with who took it", async () => {
+    const feed = await call(activityRoute.GET, { params: { id: sketchId }, cookie: viewer.cookie });
+    expect(feed.status).toBe(200);
+    const steps = feed.body.events.filter((e: Json) => e.action.startsWith("signoff.")).map((e: Json) => [e.action, e.actorName ?? e.actorEmail]);
+    // newest first
+    expect(steps).toEqual([
+      ["signoff.approve", owner.name],
+      ["signoff.check", checker.name],
+      ["signoff.submit", author.name],
+    ]);
+  });
+
+  it("the listing and the sketch name the approved version, and drop it once the approval is withdrawn", async () => {
+    const listed = async () => (await call(sketchesRoute.GET, { params: { id: ws }, cookie: viewer.cookie })).body.items.find((s: Json) => s.id === sketchId);
+    expect((await listed()).approvedVersion).toBe(1);
+    expect((await call(sketchRoute.GET, { params: { id: sketchId }, cookie: viewer.cookie })).body.sketch.approvedVersion).toBe(1);
+    expect((await take(owner, "withdraw", "Wrong flow rate used.")).status).toBe(200);
+    expect((await listed()).approvedVersion).toBeNull();
+  });
+});
