@@ -2,6 +2,14 @@
 // the properties panel, the tray, and reading a download.
 import { readFileSync } from "node:fs";
 import type { Locator, Page } from "playwright-core";
+import { BASE_URL } from "./browser";
+
+/** Open the scratch sketch page (with an optional query such as "?example=…") and wait for its canvas. */
+export async function openScratch(page: Page, query = "") {
+  await page.goto(BASE_URL + "/sketches/new" + query);
+  await page.getByTestId("sketch-canvas").waitFor();
+  await page.locator("[data-testid=sketch-canvas] canvas").first().waitFor();
+}
 
 export interface CanvasMap {
   at: (x: number, y: number) => { x: number; y: number };

@@ -7,7 +7,7 @@ import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { solveFile, type SolveResult } from "@/solver/index";
 import { BASE_URL, openBrowser, shot } from "./browser";
-import { addParameter, clickAt, download, dragFromTo, emptySketchView, fill, form, tray } from "./editor-helpers";
+import { addParameter, clickAt, download, dragFromTo, emptySketchView, fill, form, openScratch, tray } from "./editor-helpers";
 
 const FIXTURE = "tests/fixtures/sketches/pipe-bend-anchor.json";
 
@@ -29,9 +29,7 @@ describe("sketch editor", () => {
 
   it("builds the pipe bend from an empty sketch; the exported file solves to the fixture's answer", async () => {
     const fixture = JSON.parse(readFileSync(FIXTURE, "utf8"));
-    await page.goto(BASE_URL + "/sketches/new");
-    await page.getByTestId("sketch-canvas").waitFor();
-    await page.locator("[data-testid=sketch-canvas] canvas").first().waitFor();
+    await openScratch(page);
     expect(await page.getByRole("heading", { name: /Elements/ }).textContent()).toMatch(/\(0\)/);
 
     // the sketch: title, no gravity (a plan view), the fixture's parameters

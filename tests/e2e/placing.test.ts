@@ -4,8 +4,8 @@
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
-import { BASE_URL, openBrowser, shot } from "./browser";
-import { clickAt, emptySketchView, form } from "./editor-helpers";
+import { openBrowser, shot } from "./browser";
+import { clickAt, emptySketchView, form, openScratch } from "./editor-helpers";
 
 const SCRATCH_KEY = "counterpoise:scratch-sketch:v1";
 const MY_TITLE = "Gearbox on two bearers";
@@ -20,12 +20,6 @@ async function storedSketch(page: Page): Promise<SketchFile | null> {
 
 const elementCount = (page: Page) => page.getByRole("heading", { name: /Elements/ }).textContent();
 const row = (page: Page, name: string) => page.getByRole("list", { name: "Elements of the sketch" }).getByRole("button", { name, exact: true });
-
-async function openScratch(page: Page, query = "") {
-  await page.goto(BASE_URL + "/sketches/new" + query);
-  await page.getByTestId("sketch-canvas").waitFor();
-  await page.locator("[data-testid=sketch-canvas] canvas").first().waitFor();
-}
 
 describe("placing elements from the tray and the keyboard", () => {
   let ctx: BrowserContext;
