@@ -69,6 +69,8 @@ function TrayOrReadOnly() {
 function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPersistence; saved: string | null; toolbarExtra?: ReactNode }) {
   const stores = useStores();
   const [interaction] = useState(createInteractionStore);
+  // the properties panel on screens too narrow to show it beside the drawing (see the aside below)
+  const [panelOpen, setPanelOpen] = useState(false);
   const controllerRef = useRef<PointerController | null>(null);
   const setController = useCallback((c: PointerController | null) => {
     controllerRef.current = c;
@@ -116,8 +118,8 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
     <PersistenceCtx.Provider value={persistence}>
       <ActionContextCtx.Provider value={getCtx}>
         <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
-          <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} />
-          <div className="flex min-h-0 flex-1">
+          <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} panel={{ open: panelOpen, toggle: () => setPanelOpen((o) => !o) }} />
+          <div className="relative flex min-h-0 flex-1">
             <aside className="relative flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper" aria-label="Add and elements">
               <TrayOrReadOnly />
               <Outline />
@@ -129,7 +131,17 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
               <StatusLine />
               <ResultsDock />
             </main>
-            <aside className="relative w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper" aria-label="Properties and parameters">
+            {/* beside the drawing on wide screens; on narrower ones a panel over the drawing's right side, opened from the toolbar */}
+            <aside
+              id="properties-panel"
+              className={`w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper min-[1180px]:relative max-[1179px]:absolute max-[1179px]:inset-y-0 max-[1179px]:right-0 max-[1179px]:z-30 max-[1179px]:max-w-[90vw] max-[1179px]:shadow-[-8px_0_24px_rgba(29,35,41,0.14)] ${panelOpen ? "" : "max-[1179px]:hidden"}`}
+              aria-label="Properties and parameters"
+            >
+              <div className="flex items-center justify-end border-b border-rule px-3 py-1.5 min-[1180px]:hidden">
+                <button type="button" onClick={() => setPanelOpen(false)} className="rounded px-2 py-0.5 text-[12.5px] font-medium text-ink-soft hover:bg-paper-deep hover:text-ink" data-testid="close-properties">
+                  Close ×
+                </button>
+              </div>
               <PropertiesPanel />
             </aside>
           </div>

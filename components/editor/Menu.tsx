@@ -11,7 +11,8 @@ export interface MenuItem {
   onSelect: () => void;
 }
 
-export function Menu({ label, items, testId, wide }: { label: string; items: MenuItem[]; testId?: string; wide?: boolean }) {
+/** `shortLabel` replaces the label on narrow screens (the full label stays the accessible name). */
+export function Menu({ label, shortLabel, items, testId, wide }: { label: string; shortLabel?: string; items: MenuItem[]; testId?: string; wide?: boolean }) {
   const [open, setOpen] = useState(false);
   const id = useId();
   const ref = useRef<HTMLDivElement>(null);
@@ -42,9 +43,19 @@ export function Menu({ label, items, testId, wide }: { label: string; items: Men
         aria-controls={id}
         data-testid={testId}
         onClick={() => setOpen((o) => !o)}
-        className={`h-8 rounded px-2.5 text-[13px] font-medium ${open ? "bg-paper-deep text-ink" : "text-ink-soft hover:bg-paper-deep hover:text-ink"}`}
+        className={`h-8 whitespace-nowrap rounded px-2.5 text-[13px] font-medium ${open ? "bg-paper-deep text-ink" : "text-ink-soft hover:bg-paper-deep hover:text-ink"}`}
       >
-        {label} <span aria-hidden="true" className="text-[10px] text-ink-faint">▾</span>
+        {shortLabel ? (
+          <>
+            <span className="max-lg:hidden">{label}</span>
+            <span className="lg:hidden" aria-hidden="true">
+              {shortLabel}
+            </span>
+          </>
+        ) : (
+          label
+        )}{" "}
+        <span aria-hidden="true" className="text-[10px] text-ink-faint">▾</span>
       </button>
       {open && (
         <ul

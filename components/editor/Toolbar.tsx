@@ -44,7 +44,13 @@ export function UnitSwitch() {
   );
 }
 
-export function Toolbar({ where, saved, onOpenExample, extra }: { where: string; saved: string | null; onOpenExample: (id: string) => void; extra?: ReactNode }) {
+/** The properties panel's toggle, for screens too narrow to show the panel beside the drawing. */
+export interface PanelToggle {
+  open: boolean;
+  toggle: () => void;
+}
+
+export function Toolbar({ where, saved, onOpenExample, extra, panel }: { where: string; saved: string | null; onOpenExample: (id: string) => void; extra?: ReactNode; panel?: PanelToggle }) {
   const run = useActionRunner();
   const canUndo = useEditor((s) => s.past.length > 0);
   const canRedo = useEditor((s) => s.future.length > 0);
@@ -65,7 +71,7 @@ export function Toolbar({ where, saved, onOpenExample, extra }: { where: string;
           <path d="M8 10V4.5M8 4.5l-2 2.3M8 4.5l2 2.3" stroke="#1f5f7a" strokeWidth="1.5" fill="none" strokeLinecap="round" />
         </svg>
       </Link>
-      <div className="mr-3 min-w-0 max-w-[22rem]">
+      <div className="mr-3 min-w-0 max-w-[22rem] max-lg:max-w-[8rem] max-md:hidden">
         <p className="truncate text-[13.5px] font-semibold leading-tight text-ink" data-testid="sketch-title">
           {title || "Untitled sketch"}
         </p>
@@ -77,6 +83,7 @@ export function Toolbar({ where, saved, onOpenExample, extra }: { where: string;
       <Menu label="File" testId="menu-file" items={menuItems(menuActions("file"), run)} />
       <Menu
         label="Open an example"
+        shortLabel="Examples"
         testId="menu-examples"
         wide
         items={EXAMPLES.map((e) => ({ id: `example-${e.id}`, label: e.title, detail: e.summary, onSelect: () => onOpenExample(e.id) }))}
@@ -89,13 +96,13 @@ export function Toolbar({ where, saved, onOpenExample, extra }: { where: string;
         <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true"><path d="M11 4l3 3-3 3M13.5 7H6a3.5 3.5 0 000 7h3" fill="none" stroke="currentColor" strokeWidth="1.5" strokeLinecap="round" strokeLinejoin="round" /></svg>
       </button>
       <div className="flex-1" />
-      <button type="button" className={ICON_BUTTON} onClick={() => run("view.zoomOut")} aria-label="Zoom out" title={actionTitle("view.zoomOut")}>
+      <button type="button" className={`${ICON_BUTTON} max-lg:hidden`} onClick={() => run("view.zoomOut")} aria-label="Zoom out" title={actionTitle("view.zoomOut")}>
         −
       </button>
-      <span className="num w-16 text-center text-[11.5px] text-ink-faint" title="Drawing scale" aria-label="Drawing scale">
+      <span className="num w-16 text-center text-[11.5px] text-ink-faint max-lg:hidden" title="Drawing scale" aria-label="Drawing scale">
         {drawingScale(scale, units)}
       </span>
-      <button type="button" className={ICON_BUTTON} onClick={() => run("view.zoomIn")} aria-label="Zoom in" title={actionTitle("view.zoomIn")}>
+      <button type="button" className={`${ICON_BUTTON} max-lg:hidden`} onClick={() => run("view.zoomIn")} aria-label="Zoom in" title={actionTitle("view.zoomIn")}>
         +
       </button>
       <button type="button" className={`${ICON_BUTTON} text-[12px]`} onClick={() => run("view.fit")} title={actionTitle("view.fit")}>
@@ -103,12 +110,24 @@ export function Toolbar({ where, saved, onOpenExample, extra }: { where: string;
       </button>
       <label className="ml-2 flex items-center gap-1.5 text-[12px] text-ink-soft" title="Snap to the grid and to body corners and edges (hold Alt to place freely)">
         <input type="checkbox" checked={snap} onChange={() => run("view.snap")} className="accent-accent" />
-        Snap
+        <span className="max-lg:sr-only">Snap</span>
       </label>
       <div className="ml-3">
         <UnitSwitch />
       </div>
       {extra}
+      {panel ? (
+        <button
+          type="button"
+          onClick={panel.toggle}
+          aria-expanded={panel.open}
+          aria-controls="properties-panel"
+          className={`ml-2 h-7 whitespace-nowrap rounded border px-2.5 text-[12.5px] font-medium min-[1180px]:hidden ${panel.open ? "border-ink bg-ink text-paper" : "border-ink/20 text-ink hover:border-ink/45"}`}
+          data-testid="toggle-properties"
+        >
+          Properties
+        </button>
+      ) : null}
     </header>
   );
 }

@@ -140,4 +140,31 @@ describe("placing elements from the tray and the keyboard", () => {
     await page.keyboard.press("Control+Shift+z");
     await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
   });
+
+  it("on a window too narrow for three columns, the properties open over the drawing from the toolbar", async () => {
+    await page.setViewportSize({ width: 820, height: 1000 });
+    try {
+      await openScratch(page, "?example=pump-skid");
+      await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
+      const panel = page.getByRole("complementary", { name: "Properties and parameters" });
+      expect(await panel.isVisible()).toBe(false);
+      // the drawing has the room the panel would take, and the whole toolbar fits the window
+      expect((await page.getByTestId("sketch-canvas").boundingBox())!.width).toBeGreaterThan(820 - 232 - 8);
+      const save = (await page.getByTestId("save-to-workspace").boundingBox())!;
+      expect(save.x + save.width).toBeLessThanOrEqual(820);
+      const toggle = (await page.getByTestId("toggle-properties").boundingBox())!;
+      expect(toggle.x + toggle.width).toBeLessThanOrEqual(820);
+
+      await page.getByTestId("toggle-properties").click();
+      await expect.poll(() => panel.isVisible()).toBe(true);
+      expect(await page.getByTestId("toggle-properties").getAttribute("aria-expanded")).toBe("true");
+      await row(page, "Contact rear, rear bearer").click();
+      await expect.poll(() => form(page).isVisible()).toBe(true);
+      await shot(page, "placing-narrow-properties");
+      await page.getByTestId("close-properties").click();
+      await expect.poll(() => panel.isVisible()).toBe(false);
+    } finally {
+      await page.setViewportSize({ width: 1440, height: 900 });
+    }
+  });
 });

@@ -14,7 +14,7 @@ import { discardDraft, keepDraft, readDraft, type Draft } from "./drafts";
 import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
 import type { SaveFlow } from "./savedPersistence";
 
-const CHIP = "h-7 rounded px-2.5 text-[12.5px] font-medium";
+const CHIP = "h-7 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
 
 function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; latest: number; workspaceId: string; onDiscard: () => void }) {
   return (
@@ -102,14 +102,19 @@ function Bar({ flow }: { flow: SaveFlow }) {
 
   return (
     <div className="ml-3 flex items-center gap-2" data-testid="version-bar">
-      <span className="num text-[12px] text-ink-faint" data-testid="version-label">
+      <span className="num whitespace-nowrap text-[12px] text-ink-faint" data-testid="version-label">
         {restored ? `kept changes on v${base}` : `v${base}${base < info.latest ? ` of ${info.latest}` : ""}`}
-        {dirty && canSave ? <span className="ml-1.5 text-caution">● unsaved</span> : null}
+        {dirty && canSave ? (
+          <span className="ml-1.5 text-caution" title="Changes not yet saved as a version">
+            ●<span className="max-lg:sr-only"> unsaved</span>
+          </span>
+        ) : null}
         {lastSaved && !dirty ? <span className="ml-1.5">✓ saved</span> : null}
       </span>
       {canSave ? (
-        <button type="button" onClick={() => run("file.save")} className={`${CHIP} bg-ink text-paper hover:bg-ink-soft`} data-testid="save-version">
-          Save version
+        <button type="button" onClick={() => run("file.save")} className={`${CHIP} bg-ink text-paper hover:bg-ink-soft`} data-testid="save-version" aria-label="Save version">
+          <span className="max-lg:hidden">Save version</span>
+          <span className="lg:hidden">Save…</span>
         </button>
       ) : (
         <span className={`${CHIP} inline-flex items-center border border-rule text-ink-soft`} title="Your role reads sketches but does not save versions" data-testid="read-only">

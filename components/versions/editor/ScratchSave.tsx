@@ -100,8 +100,9 @@ function ScratchSaveButton() {
   const [open, setOpen] = useState(params.get("save") === "1");
   return (
     <div className="ml-3">
-      <button type="button" onClick={() => setOpen(true)} className="h-7 rounded bg-ink px-2.5 text-[12.5px] font-medium text-paper hover:bg-ink-soft" data-testid="save-to-workspace">
-        Save to a workspace
+      <button type="button" onClick={() => setOpen(true)} className="h-7 whitespace-nowrap rounded bg-ink px-2.5 text-[12.5px] font-medium text-paper hover:bg-ink-soft" data-testid="save-to-workspace" aria-label="Save to a workspace">
+        <span className="max-lg:hidden">Save to a workspace</span>
+        <span className="lg:hidden">Save…</span>
       </button>
       {open ? <SaveToWorkspace onClose={() => setOpen(false)} /> : null}
     </div>
