@@ -22,6 +22,7 @@ export interface EditorUi {
   exportPng(): void;
   newSketch(): void;
   save(): void;
+  showKeys(): void;
 }
 
 export interface ActionContext {
@@ -245,6 +246,7 @@ export const ACTIONS: readonly Action[] = [
   { id: "view.zoomOut", label: "Zoom out", group: "view", shortcuts: ["-"], run: (c) => zoomBy(c, 0.8) },
   { id: "view.units", label: "Switch SI / US units", group: "view", shortcuts: ["U"], run: (c) => ed(c).setUnits(ed(c).units === "SI" ? "US" : "SI") },
   { id: "view.snap", label: "Snap to grid and edges", group: "view", run: (c) => ed(c).setSnap(!ed(c).snap) },
+  { id: "view.keys", label: "Keys and gestures", group: "view", shortcuts: ["?"], run: (c) => c.ui.showKeys() },
 
   // ---- file
   { id: "file.new", label: "New sketch", group: "file", menu: true, run: (c) => c.ui.newSketch() },

@@ -22,6 +22,7 @@ import { ResultsDock } from "@/components/results/ResultsDock";
 import { ImportErrorDialog } from "./ImportErrorDialog";
 import { Outline } from "./Outline";
 import { PropertiesPanel } from "./PropertiesPanel";
+import { KeysDialog } from "./KeysDialog";
 import { Toolbar } from "./Toolbar";
 import { Tray } from "./Tray";
 import { ActionContextCtx } from "./useActions";
@@ -71,6 +72,7 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
   const [interaction] = useState(createInteractionStore);
   // the properties panel on screens too narrow to show it beside the drawing (see the aside below)
   const [panelOpen, setPanelOpen] = useState(false);
+  const [keysOpen, setKeysOpen] = useState(false);
   const controllerRef = useRef<PointerController | null>(null);
   const setController = useCallback((c: PointerController | null) => {
     controllerRef.current = c;
@@ -99,6 +101,7 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
           void persistence.save(stores.editor.getState().sketch);
           stores.editor.getState().notify(persistence.kind === "scratch" ? "Kept in this browser. Sign in to save it to a workspace." : "Saving…");
         },
+        showKeys: () => setKeysOpen(true),
       },
     }),
     [stores, persistence],
@@ -147,6 +150,7 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
           </div>
           <input ref={inputRef} type="file" accept=".json,application/json" className="hidden" aria-label="Import a sketch file" data-testid="import-input" onChange={(e) => void files.onFile(e.target.files?.[0])} />
           {files.problem && <ImportErrorDialog problem={files.problem} onClose={files.clearProblem} />}
+          <KeysDialog open={keysOpen} onClose={() => setKeysOpen(false)} />
         </div>
       </ActionContextCtx.Provider>
     </PersistenceCtx.Provider>

@@ -108,6 +108,9 @@ export function Toolbar({ where, saved, onOpenExample, extra, panel }: { where: 
       <button type="button" className={`${ICON_BUTTON} text-[12px]`} onClick={() => run("view.fit")} title={actionTitle("view.fit")}>
         Fit
       </button>
+      <button type="button" className={`${ICON_BUTTON} text-[13px] font-semibold`} onClick={() => run("view.keys")} aria-label="Keys and gestures" title={actionTitle("view.keys")} data-testid="show-keys">
+        ?
+      </button>
       <label className="ml-2 flex items-center gap-1.5 text-[12px] text-ink-soft" title="Snap to the grid and to body corners and edges (hold Alt to place freely)">
         <input type="checkbox" checked={snap} onChange={() => run("view.snap")} className="accent-accent" />
         <span className="max-lg:sr-only">Snap</span>
