@@ -6,7 +6,7 @@ import type { Vec2 } from "@/solver/types";
 import type { SnapResult } from "../geometry/snap";
 import type { Box } from "../geometry/polygon";
 import type { ElementKind } from "../model/elements";
-import { NO_SHIFTS, type LabelShifts } from "../render/declutter";
+import { NO_SHIFTS, type LabelShifts } from "../render/labels";
 
 export interface InteractionState {
   /** pointer in world metres while over the canvas */

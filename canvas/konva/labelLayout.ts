@@ -1,9 +1,11 @@
-// Keeps the interaction store's `labelShifts` (element names moved off crowded texts) in step
-// with the sketch, the zoom, the units and the drawn support states. Placed for the whole sketch,
-// so the drawing's nodes and the results layer agree; held while a drag lasts.
+// Keeps the interaction store's `labelShifts` (elements' labels moved off crowded labels and
+// symbols) in step with the sketch, the zoom, the units and the result shown, whose labels are
+// placed first. Placed for the whole sketch as the SVG renderer places it, so the drawing's nodes,
+// the results layer and an export agree; held while a drag lasts.
 import type { EditorStores } from "../context";
-import { placeElementNames } from "../render/declutter";
-import { elementGroups } from "../render/scenePrims";
+import { placeElementLabels } from "../render/labels";
+import { elementGroups, resultLayer } from "../render/scenePrims";
+import { supportStates } from "../render/results";
 import { statesOf } from "./nodes";
 import type { InteractionStore } from "./interaction";
 
@@ -15,11 +17,13 @@ export function followLabelLayout(stores: EditorStores, interaction: Interaction
     if (it.dragging) return;
     const scene = stores.scene.getState();
     const e = stores.editor.getState();
-    const states = statesOf(stores.analysis.getState().shown);
-    const key: unknown[] = [scene, e.view.scale, e.units, states];
+    const { shown, stale } = stores.analysis.getState();
+    const key: unknown[] = [scene, e.view.scale, e.units, shown, stale];
     if (key.every((k, i) => k === last[i])) return;
     last = key;
-    const shifts = placeElementNames(elementGroups(scene, e.view.scale, e.units, states), it.labelShifts);
+    const groups = elementGroups(scene, e.view.scale, e.units, statesOf(shown));
+    const results = shown ? resultLayer(groups, scene, e.view.scale, e.units, shown, supportStates(shown), stale) : [];
+    const shifts = placeElementLabels(groups, results, it.labelShifts);
     if (shifts !== it.labelShifts) interaction.setState({ labelShifts: shifts });
   };
   const stops = [

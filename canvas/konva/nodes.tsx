@@ -11,7 +11,7 @@ import type { SceneBody, SceneItem } from "../scene";
 import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, type DrawState } from "../render/symbols";
 import { supportStates } from "../render/results";
 import { primsBox, type Prim } from "../render/prims";
-import { shiftTexts } from "../render/declutter";
+import { shiftTexts, type TextMove } from "../render/labels";
 import { ACCENT, BODY_FILL, INK } from "../render/palette";
 import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
@@ -106,15 +106,14 @@ export const CgNode = memo(function CgNode({ id, selected, scale }: NodeProps) {
   );
 });
 
-export const ItemNode = memo(function ItemNode({ id, selected, scale, units, state, shift }: NodeProps & { state?: DrawState; shift?: ReadonlyArray<readonly [number, number]> }) {
+export const ItemNode = memo(function ItemNode({ id, selected, scale, units, state, shift }: NodeProps & { state?: DrawState; shift?: readonly TextMove[] }) {
   const item = useScene((s) => s.byId.get(id)) as SceneItem | undefined;
   const needsBody = item?.kind === "pin" || item?.kind === "fixed";
   const body = useScene((s) => (needsBody && item ? (s.byId.get(item.body) as SceneBody | undefined) : undefined));
-  const prims = useMemo(
-    () => (item ? shiftTexts(itemPrims(item, { units, scale, color: selected ? ACCENT : INK, groundSide: groundSideOf(item, body), state }), shift) : []),
-    [item, body, units, scale, selected, state, shift],
-  );
-  const hit = useMemo(() => boxHit(prims), [prims]);
+  const own = useMemo(() => (item ? itemPrims(item, { units, scale, color: selected ? ACCENT : INK, groundSide: groundSideOf(item, body), state }) : []), [item, body, units, scale, selected, state]);
+  const prims = useMemo(() => shiftTexts(own, shift), [own, shift]);
+  // picked by the symbol, not by a leader line out to a moved label
+  const hit = useMemo(() => boxHit(own), [own]);
   if (!item) return null;
   const a = anchorWorld(item);
   if (!Number.isFinite(a[0]) || !Number.isFinite(a[1])) return null;

@@ -105,6 +105,8 @@ export const SelectionHandles = memo(function SelectionHandles() {
   if (!DIRECTED.has(el.kind) || !("angle" in el)) return null;
   const item = el as SceneItem & { angle: number };
   const a = px(anchorOf(item), scale);
+  // no handle to turn by while the angle (or the anchor) is an expression in error: nothing to draw it from
+  if (![item.angle, a[0], a[1]].every(Number.isFinite)) return null;
   const d = dir(item.kind === "force" && "magnitude" in item && item.magnitude < 0 ? item.angle + 180 : item.angle);
   const sign = handleSign(item);
   const h: [number, number] = [a[0] + d[0] * ROTATE_HANDLE_PX * sign, a[1] + d[1] * ROTATE_HANDLE_PX * sign];

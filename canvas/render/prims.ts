@@ -29,6 +29,8 @@ export type Prim =
       halo?: boolean;
       italic?: boolean;
       opacity?: number;
+      /** part of a symbol (not a label): label placement leaves it where it is */
+      pinned?: boolean;
     };
 
 /** Screen direction of a world angle (degrees counter-clockwise from +x, y up). */

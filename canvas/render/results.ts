@@ -8,15 +8,18 @@ import type { Scene, SceneBody, SceneItem } from "../scene";
 import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp, solidArrow, sub, text, unit, type Prim, type Pt } from "./prims";
 import { groundSideOf, labelAt, type DrawState } from "./symbols";
 import { CAUTION, INK, INK_SOFT, REACTION } from "./palette";
-import { declutter } from "./declutter";
+import { placeResultLabels } from "./labels";
 
 export interface ResultOptions {
   units: UnitSystem;
   scale: number;
   /** the result is an earlier sketch's (input errors now): drawn faded */
   stale?: boolean;
-  /** what the elements draw (their labels): the result's labels are moved off their texts */
-  obstacles?: readonly Prim[];
+  /**
+   * what the elements draw: the result's labels keep off their strokes (their texts make way for
+   * the result's labels, which are placed first)
+   */
+  under?: readonly Prim[];
   /** the supports' states, when the caller has them already (`supportStates(result)`) */
   states?: Map<string, DrawState>;
 }
@@ -30,6 +33,10 @@ export interface ResultDrawing {
 const SUPPORT_KINDS = new Set(["pin", "roller", "contact", "fixed", "tie"]);
 const px = (p: Vec2, s: number): Pt => [p[0] * s, -p[1] * s];
 const fq = (v: number, k: Parameters<typeof formatQuantity>[1], u: UnitSystem) => formatQuantity(v, k, u);
+
+// an earlier result drawn over a sketch whose field is now in error (NaN): nothing is drawn from it
+const finite = (p: Pt) => Number.isFinite(p[0]) && Number.isFinite(p[1]);
+const portReadable = (p: Extract<SceneItem, { kind: "inlet" | "outlet" }>) => Number.isFinite(p.angle) && p.at.every(Number.isFinite);
 
 /** The drawing states of every support: lifted and slack from the result, slips from its warnings. */
 export function supportStates(result: SolveResult): Map<string, DrawState> {
@@ -55,6 +62,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     const body = result.bodies[item.body];
     if (!r || !body) continue;
     const at = px((item as Extract<SceneItem, { at: Vec2 }>).at, s);
+    if (!finite(at)) continue;
     const R = Math.hypot(r.fx, r.fy);
     const impossible = (r.state === "lifted" || r.state === "slack") && (body.status === "tips" || body.status === "unrestrained");
     if (R > 1e-9 * Math.max(maxR, 1)) {
@@ -104,7 +112,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
       }
       if (t.kind === "pressure") {
         const port = scene.byId.get(t.id) as Extract<SceneItem, { kind: "inlet" | "outlet" }> | undefined;
-        if (!port) continue;
+        if (!port || !portReadable(port)) continue;
         // p·A pushes inward across the port face: drawn just inside the control surface
         const P = px(port.at, s);
         const u = unit([t.fx, -t.fy]);
@@ -117,7 +125,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     }
     for (const t of eq.momentum) {
       const port = scene.byId.get(t.id) as Extract<SceneItem, { kind: "inlet" | "outlet" }> | undefined;
-      if (!port) continue;
+      if (!port || !portReadable(port)) continue;
       const P = px(port.at, s);
       const d = dir(port.angle);
       const n = perp(d);
@@ -138,12 +146,14 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     const fm = br.freeMotion;
     if (fm.kind === "rotation") {
       const c = px(fm.about, s);
+      if (!finite(c)) continue;
       prims.push({ t: "circle", c, r: 7, stroke: CAUTION, width: 1.8, fill: "#f6ebcf" });
       prims.push({ t: "circle", c, r: 2.2, fill: CAUTION });
       prims.push(...curvedArrow(c, 20, true, CAUTION, 1.4).map((p) => ({ ...p, dash: p.t === "poly" && !("closed" in p && p.closed) ? [4, 3] : undefined }) as Prim));
       prims.push(...labelAt(add(c, [0, 30]), [0, 1], [br.status === "tips" ? "pivot: tips about here" : "free to turn about here"], CAUTION, 11.5, { weight: 600 }));
     } else {
       const c = px(b.cg, s);
+      if (!finite(c)) continue;
       const d = dir(fm.angle);
       const from = add(c, mul(d, 14));
       const to = add(c, mul(d, 84));
@@ -152,7 +162,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     }
   }
 
-  const out = o.obstacles ? declutter(prims, o.obstacles) : prims;
+  const out = placeResultLabels(prims, o.under);
   if (o.stale) for (const p of out) (p as { opacity?: number }).opacity = 0.38;
   return { prims: out, states };
 }

@@ -4,7 +4,7 @@
 import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
 import type { Scene } from "../scene";
-import { NO_SHIFTS, placeElementNames, shiftTexts, type LabelShifts } from "./declutter";
+import { placeElementLabels, shiftTexts, type LabelShifts } from "./labels";
 import { translate, type Prim } from "./prims";
 import { resultPrims, supportStates } from "./results";
 import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, type DrawState } from "./symbols";
@@ -51,19 +51,28 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
   return groups;
 }
 
+// What the result's labels keep off: the strokes of the bodies, supports and ports, whose drawing
+// the result is tied to. Not the loads: the canvas redraws the result without them while a load is
+// dragged, and both must place the result's labels alike.
+const UNDER_RESULTS = new Set(["body", "pin", "roller", "contact", "fixed", "tie", "inlet", "outlet"]);
+
+/** The result's drawing, its labels placed (they come first: the elements' labels make way). */
+export function resultLayer(groups: readonly Group[], scene: Scene, scale: number, units: UnitSystem, result: SolveResult, states: Map<string, DrawState>, stale = false) {
+  // the bodies' names (and texts that are part of a symbol) stay; the supports' and ports' labels make way
+  const under = groups.filter((g) => UNDER_RESULTS.has(g.kind)).flatMap((g) => (g.kind === "body" ? g.prims : g.prims.filter((p) => p.t !== "text" || p.pinned)));
+  return resultPrims(scene, result, { units, scale, stale, under, states }).prims;
+}
+
 /**
- * Every element's primitives in content pixels, keyed for the SVG's groups, with crowded names
+ * Every element's primitives in content pixels, keyed for the SVG's groups, with crowded labels
  * moved (`shifts` as the canvas placed them for the whole sketch, or placed here), and the
- * result's drawing with its labels kept off the elements' texts.
+ * result's drawing; the shifts used come back too.
  */
 export function scenePrims(scene: Scene, scale: number, units: UnitSystem, result: SolveResult | null, stale = false, shifts?: LabelShifts) {
   const states = result ? supportStates(result) : null;
   const drawn = elementGroups(scene, scale, units, states);
-  const moves = shifts ?? placeElementNames(drawn, NO_SHIFTS);
+  const results = result && states ? resultLayer(drawn, scene, scale, units, result, states, stale) : [];
+  const moves = shifts ?? placeElementLabels(drawn, results);
   const groups = drawn.map((g) => (moves.has(g.id) ? { ...g, prims: shiftTexts(g.prims, moves.get(g.id)) } : g));
-  // the elements' texts, which the result's labels keep off
-  const obstacles: Prim[] = [];
-  for (const g of groups) for (const p of g.prims) if (p.t === "text") obstacles.push(p);
-  const drawing = result && states ? resultPrims(scene, result, { units, scale, stale, obstacles, states }) : null;
-  return { groups, results: drawing?.prims ?? [] };
+  return { groups, results, shifts: moves };
 }

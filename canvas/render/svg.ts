@@ -74,6 +74,20 @@ function ownScale(scene: Scene, width: number, height: number): number {
   return Number.isFinite(w) ? Math.min((width - 2 * pad) / w, (height - 2 * pad) / h) : 100;
 }
 
+/** A scale at which the drawing's box (`box`, drawn at `scale`) fits in width × height, with a margin. */
+function fitOverhang(scene: Scene, scale: number, box: ReturnType<typeof primsBox>, width: number, height: number): number {
+  const world = boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
+  const w = world.maxX - world.minX;
+  const h = world.maxY - world.minY;
+  if (![w, h, box.minX, box.maxX].every(Number.isFinite)) return scale;
+  const margin = 16;
+  let s = scale;
+  // drawn size = geometry × scale + what the symbols add, which stays
+  if (box.maxX - box.minX > width - 2 * margin && w > 1e-9) s = Math.min(s, (width - 2 * margin - (box.maxX - box.minX - w * scale)) / w);
+  if (box.maxY - box.minY > height - 2 * margin && h > 1e-9) s = Math.min(s, (height - 2 * margin - (box.maxY - box.minY - h * scale)) / h);
+  return Math.max(s, scale / 4);
+}
+
 /** One frame (scale and origin) that fits every sketch given, with its result, into width × height. */
 export function sharedFrame(drawings: Array<{ file: SketchFile | SketchFileInput; result: SolveResult | null }>, width: number, height: number, units: UnitSystem = "SI"): View | undefined {
   const drawn = drawings.flatMap((d) => {
@@ -103,8 +117,17 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
 
   // fit: world box → pixels, leaving room for symbols and labels that do not scale; then centre
   // what is actually drawn (labels included) — or use the shared frame as given
-  const scale = opts.frame ? opts.frame.scale : ownScale(scene, width, height - footer);
-  const { groups, results } = scenePrims(scene, scale, units, result, opts.stale);
+  let scale = opts.frame ? opts.frame.scale : ownScale(scene, width, height - footer);
+  let { groups, results } = scenePrims(scene, scale, units, result, opts.stale);
+  if (!opts.frame) {
+    // symbols and labels do not scale: when they reach past the edge, shrink the geometry by what
+    // they overhang (once: the overhang barely changes with the scale)
+    const shrunk = fitOverhang(scene, scale, primsBox([...groups.flatMap((g) => g.prims), ...results]), width, height - footer);
+    if (shrunk < scale) {
+      scale = shrunk;
+      ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale));
+    }
+  }
   let dx: number;
   let dy: number;
   if (opts.frame) ({ x: dx, y: dy } = opts.frame);

@@ -186,8 +186,41 @@ function sourcePrims(item: Extract<SceneItem, { kind: "massSource" }>, o: Symbol
   return [{ t: "poly", closed: true, pts: drop, stroke: c, width: 1.3, fill: "#dfe9ee" }, ...labelAt([9, 0], [1, 0], [`ṁ ${q(item.massFlow, "massFlow", o.units)}`], c, 10.5)];
 }
 
+/** Fields the symbol is drawn from (its direction, size, reach), in the words the panel uses. */
+const SHAPE_FIELDS = ["angle", "magnitude", "value", "w1", "w2"] as const;
+
+/**
+ * The fields of an element whose value could not be worked out (an expression in error reads as
+ * NaN): its symbol cannot be drawn from them, so it is marked instead.
+ */
+export function unreadableFields(item: SceneItem): string[] {
+  const out: string[] = [];
+  const rec = item as unknown as Record<string, unknown>;
+  for (const f of SHAPE_FIELDS) if (typeof rec[f] === "number" && !Number.isFinite(rec[f])) out.push(f);
+  if (item.kind === "distributed" && !item.to.every(Number.isFinite)) out.push("to");
+  return out;
+}
+
+/**
+ * In place of a symbol that cannot be drawn: a dashed ring with a question mark at the anchor and,
+ * beside it, the element's name and which field to check (a shape and words, not colour alone).
+ */
+function unreadablePrims(item: SceneItem, fields: string[], o: SymbolOptions): Prim[] {
+  const c = o.color && o.color !== INK ? o.color : CAUTION;
+  const out: Prim[] = [
+    { t: "circle", c: [0, 0], r: 9, stroke: c, width: 1.4, dash: [3, 2.5], fill: PAPER_CARD },
+    text([0, 0.5], "?", c, 11, { weight: 700, align: "center", baseline: "middle", halo: false, pinned: true }),
+  ];
+  const lines = [`${fields.join(", ")}: cannot be worked out`];
+  if (o.showName !== false) lines.unshift(item.label || item.id);
+  out.push(...labelAt([14, 0], [1, 0], lines, c, 10.5, { weight: 600 }).map((p, i) => (i === 0 && lines.length > 1 && p.t === "text" ? { ...p, italic: true, weight: 400 as const, color: INK_FAINT } : p)));
+  return out;
+}
+
 /** The symbol of an attached element, around its anchor (`from` for a distributed load). */
 export function itemPrims(item: SceneItem, o: SymbolOptions): Prim[] {
+  const unreadable = unreadableFields(item);
+  if (unreadable.length) return unreadablePrims(item, unreadable, o);
   let prims: Prim[];
   switch (item.kind) {
     case "pin":

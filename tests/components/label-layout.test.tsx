@@ -1,4 +1,4 @@
-// The canvas keeps crowded element names off other texts: the layout follows the sketch, the
+// The canvas keeps crowded element labels off other labels: the layout follows the sketch, the
 // zoom and the support states, and holds still while a drag lasts.
 import { describe, expect, it } from "vitest";
 import type { Command } from "@/canvas/commands/define";
@@ -23,13 +23,15 @@ function setUp(theta: string) {
   return { editor, interaction, stop };
 }
 
-describe("element name layout on the canvas", () => {
+describe("element label layout on the canvas", () => {
   it("moves the rear wheels' name off the front contact's 'lifts' when the cart tips, and back when it holds", () => {
     const { editor, interaction, stop } = setUp("-35 deg");
     const moves = interaction.getState().labelShifts.get("rear");
-    // a line (10 px text + 3) up or down, whichever is free
+    // straight up or down by whole lines (10 px text + 3), to the nearest place free of labels and
+    // strokes: here two lines
     expect(moves).toHaveLength(1);
-    expect(Math.abs(moves![0][1])).toBe(13);
+    expect(moves![0][1]).toBe(0);
+    expect(Math.abs(moves![0][2])).toBe(26);
     const tipping = interaction.getState().labelShifts;
 
     // while a drag lasts the names stay where they are, whatever changes

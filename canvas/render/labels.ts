@@ -1,0 +1,317 @@
+// Label placement shared by the SVG renderer and the canvas, so a crowded drawing reads the same in
+// both. Labels are placed one at a time in order of importance (the result's labels, reactions
+// first; then the elements' values and states; then the elements' names). Each label tries its own
+// place, then the 8 places around it, then the same twice and three times as far, and takes the
+// cheapest: a place on a label already placed costs more than any other, a stroke of another
+// symbol under the words a little, and distance from its own place a little. Ties go to the earlier
+// place, so the layout is the same every time. A label moved clear of its own place gets a thin
+// leader line from the nearest point of what it labels. Text widths are estimated (`textExtent`): this runs on the server too.
+import { textExtent, type Prim, type Pt } from "./prims";
+
+export type Box = { x0: number; y0: number; x1: number; y1: number };
+type TextPrim = Extract<Prim, { t: "text" }>;
+type Segment = readonly [Pt, Pt];
+
+const PAD = 1.5;
+/** What one stroke under a label costs, in pixels of moving away from its own place. */
+const STROKE_COST = 20;
+/** Over any label already placed: more than any place that is not. */
+const ON_LABEL_COST = 1e6;
+/** A label moved at least this far clear of its own place gets a leader line. */
+const LEADER_GAP = 4;
+
+export function textBox(p: TextPrim): Box {
+  const b = textExtent(p);
+  return { x0: b.x0 - PAD, y0: b.y0 - PAD, x1: b.x1 + PAD, y1: b.y1 + PAD };
+}
+
+export const boxesOverlap = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
+const overlapArea = (a: Box, b: Box) => Math.max(0, Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0)) * Math.max(0, Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0));
+const union = (a: Box, b: Box): Box => ({ x0: Math.min(a.x0, b.x0), y0: Math.min(a.y0, b.y0), x1: Math.max(a.x1, b.x1), y1: Math.max(a.y1, b.y1) });
+const moveBox = (b: Box, dx: number, dy: number): Box => ({ x0: b.x0 + dx, y0: b.y0 + dy, x1: b.x1 + dx, y1: b.y1 + dy });
+const clampTo = (p: Pt, b: Box): Pt => [Math.min(Math.max(p[0], b.x0), b.x1), Math.min(Math.max(p[1], b.y0), b.y1)];
+
+/**
+ * The labels in `prims`, as lists of text indices: lines that `labelAt` wrote as one block (the
+ * same x and alignment, each a line below the last, next to each other in the list) move together.
+ * Pinned texts are part of a symbol, not labels.
+ */
+export function labelBlocks(prims: readonly Prim[]): number[][] {
+  const blocks: number[][] = [];
+  let cur: number[] | null = null;
+  prims.forEach((p, i) => {
+    if (p.t !== "text" || p.pinned) {
+      cur = null;
+      return;
+    }
+    const last = cur && (prims[cur[cur.length - 1]] as TextPrim);
+    const dy = last ? p.at[1] - last.at[1] : 0;
+    if (cur && last && last.at[0] === p.at[0] && last.align === p.align && dy > 0 && dy <= 2 * Math.max(p.size, last.size)) cur.push(i);
+    else blocks.push((cur = [i]));
+  });
+  return blocks;
+}
+
+function blockBox(prims: readonly Prim[], idx: readonly number[]): Box {
+  return idx.map((i) => textBox(prims[i] as TextPrim)).reduce(union);
+}
+
+/** The places a label tries, as offsets from its own: its own first, then rings around it. */
+function offsets(b: Box): Pt[] {
+  const sy = b.y1 - b.y0;
+  const sx = (b.x1 - b.x0) / 2 + 4;
+  const out: Pt[] = [[0, 0]];
+  for (let k = 1; k <= 3; k++) {
+    const x = k * sx;
+    const y = k * sy;
+    out.push([0, y], [0, -y], [x, 0], [-x, 0], [x, y], [-x, y], [x, -y], [-x, -y]);
+  }
+  return out;
+}
+
+/** The strokes of the shapes in `prims` (lines, outlines, circles as their square), to keep words off. */
+export function strokesOf(prims: readonly Prim[]): Segment[] {
+  const out: Segment[] = [];
+  for (const p of prims) {
+    if (p.t === "poly") {
+      for (let i = 1; i < p.pts.length; i++) out.push([p.pts[i - 1], p.pts[i]]);
+      if (p.closed && p.pts.length > 2) out.push([p.pts[p.pts.length - 1], p.pts[0]]);
+    } else if (p.t === "circle") {
+      const [x, y] = p.c;
+      const r = p.r;
+      out.push([[x - r, y - r], [x + r, y - r]], [[x + r, y - r], [x + r, y + r]], [[x + r, y + r], [x - r, y + r]], [[x - r, y + r], [x - r, y - r]]);
+    }
+  }
+  return out.filter(([a, b]) => Number.isFinite(a[0] + a[1] + b[0] + b[1]));
+}
+
+/** Whether the segment a–b crosses the box (Liang–Barsky clipping). */
+function segmentHits(a: Pt, b: Pt, box: Box): boolean {
+  let t0 = 0;
+  let t1 = 1;
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const edges: Array<[number, number]> = [
+    [-dx, a[0] - box.x0],
+    [dx, box.x1 - a[0]],
+    [-dy, a[1] - box.y0],
+    [dy, box.y1 - a[1]],
+  ];
+  for (const [p, q] of edges) {
+    if (p === 0) {
+      if (q < 0) return false;
+    } else {
+      const r = q / p;
+      if (p < 0) t0 = Math.max(t0, r);
+      else t1 = Math.min(t1, r);
+      if (t0 > t1) return false;
+    }
+  }
+  return true;
+}
+
+const CELL = 48;
+
+/**
+ * Strokes filed by the squares of a grid they pass, each with its owner (an index: the element, or
+ * the result's shape): a label asks only about the squares under it, and skips its own owners.
+ */
+class Strokes {
+  private cells = new Map<number, number[]>();
+  private segs: Segment[] = [];
+  private owners: number[] = [];
+  private seen: number[] = [];
+  private stamp = 0;
+
+  add(segs: readonly Segment[], owner: number) {
+    for (const s of segs) {
+      const k = this.segs.length;
+      this.segs.push(s);
+      this.owners.push(owner);
+      this.seen.push(0);
+      const [a, b] = s;
+      for (let x = Math.floor(Math.min(a[0], b[0]) / CELL); x <= Math.floor(Math.max(a[0], b[0]) / CELL); x++)
+        for (let y = Math.floor(Math.min(a[1], b[1]) / CELL); y <= Math.floor(Math.max(a[1], b[1]) / CELL); y++) {
+          const key = x * 1_000_003 + y;
+          const cell = this.cells.get(key);
+          if (cell) cell.push(k);
+          else this.cells.set(key, [k]);
+        }
+    }
+    return this;
+  }
+
+  /** How many strokes cross the box, leaving out those of owners from `lo` up to `hi`. */
+  count(b: Box, lo: number, hi: number): number {
+    const stamp = ++this.stamp;
+    let n = 0;
+    for (let x = Math.floor(b.x0 / CELL); x <= Math.floor(b.x1 / CELL); x++)
+      for (let y = Math.floor(b.y0 / CELL); y <= Math.floor(b.y1 / CELL); y++) {
+        for (const k of this.cells.get(x * 1_000_003 + y) ?? []) {
+          if (this.seen[k] === stamp) continue;
+          this.seen[k] = stamp;
+          const o = this.owners[k];
+          if (o >= lo && o < hi) continue;
+          if (segmentHits(this.segs[k][0], this.segs[k][1], b)) n++;
+        }
+      }
+    return n;
+  }
+}
+
+type Own = { strokes: Strokes; lo: number; hi: number };
+
+function cost(b: Box, placed: readonly Box[], own: Own): number {
+  let c = 0;
+  for (const q of placed) {
+    const a = overlapArea(b, q);
+    if (a > 0) c += ON_LABEL_COST + a;
+  }
+  return c + STROKE_COST * own.strokes.count(b, own.lo, own.hi);
+}
+
+/** The cheapest offset for a label whose own place is `box`; the earliest wins a tie. */
+function bestOffset(box: Box, placed: readonly Box[], own: Own): Pt {
+  let best: Pt = [0, 0];
+  let bestCost = Infinity;
+  for (const o of offsets(box)) {
+    const c = cost(moveBox(box, o[0], o[1]), placed, own) + Math.hypot(o[0], o[1]);
+    if (c < bestCost) {
+      best = o;
+      bestCost = c;
+      if (c === 0) break;
+    }
+  }
+  return best;
+}
+
+/** The points of the shapes in `prims` (line ends and corners, circles' centres). */
+function shapePoints(prims: readonly Prim[]): Pt[] {
+  const out: Pt[] = [];
+  for (const p of prims) {
+    if (p.t === "poly") out.push(...p.pts);
+    else if (p.t === "circle") out.push(p.c);
+  }
+  return out.filter((q) => Number.isFinite(q[0]) && Number.isFinite(q[1]));
+}
+
+/**
+ * A thin line to a label moved clear of its own place (`from`), from the nearest point of what it
+ * labels (`own`, or its own place when that has no shapes).
+ */
+function leader(from: Box, to: Box, own: readonly Pt[], color: string): Prim | null {
+  const centre: Pt = [(to.x0 + to.x1) / 2, (to.y0 + to.y1) / 2];
+  const back = clampTo(centre, from);
+  const gap = (q: Pt) => {
+    const c = clampTo(q, to);
+    return Math.hypot(c[0] - q[0], c[1] - q[1]);
+  };
+  if (gap(back) < LEADER_GAP) return null;
+  let a = back;
+  for (const q of own) if (gap(q) < gap(a)) a = q;
+  const b = clampTo(a, to);
+  if (Math.hypot(b[0] - a[0], b[1] - a[1]) < LEADER_GAP) return null;
+  return { t: "poly", pts: [a, b], stroke: color, width: 0.75, opacity: 0.8 };
+}
+
+function moveTexts(prims: Prim[], idx: readonly number[], dx: number, dy: number) {
+  for (const i of idx) {
+    const p = prims[i] as TextPrim;
+    prims[i] = { ...p, at: [p.at[0] + dx, p.at[1] + dy] };
+  }
+}
+
+/**
+ * The result's drawing with its labels placed, in the order drawn (reactions first), off each
+ * other and off the strokes of its own other arrows and of `under` (what the elements draw, with
+ * any texts that stay where they are). Each label keeps off every stroke but those drawn just
+ * before it: its own arrow.
+ */
+export function placeResultLabels(prims: readonly Prim[], under: readonly Prim[] = []): Prim[] {
+  const out = prims.slice();
+  const leaders: Prim[] = [];
+  const placed: Box[] = [];
+  for (const p of under) if (p.t === "text") placed.push(textBox(p));
+  for (const p of prims) if (p.t === "text" && p.pinned) placed.push(textBox(p));
+  const strokes = new Strokes().add(strokesOf(under), -1);
+  prims.forEach((p, i) => p.t !== "text" && strokes.add(strokesOf([p]), i));
+  let ownFrom = 0;
+  for (const idx of labelBlocks(prims)) {
+    // its own arrow: the shapes drawn since the label before it
+    const ownFrom0 = ownFrom;
+    ownFrom = idx[idx.length - 1] + 1;
+    const box = blockBox(prims, idx);
+    const [dx, dy] = bestOffset(box, placed, { strokes, lo: ownFrom0, hi: idx[0] });
+    const to = moveBox(box, dx, dy);
+    placed.push(to);
+    if (dx || dy) {
+      moveTexts(out, idx, dx, dy);
+      const l = leader(box, to, shapePoints(prims.slice(ownFrom0, idx[0])), (prims[idx[0]] as TextPrim).color);
+      if (l) leaders.push(l);
+    }
+  }
+  return leaders.length ? [...out, ...leaders] : out;
+}
+
+/** A text's move: [index of the text prim, dx, dy] in px. */
+export type TextMove = readonly [number, number, number];
+/** Per element id: how its texts move. */
+export type LabelShifts = ReadonlyMap<string, readonly TextMove[]>;
+export const NO_SHIFTS: LabelShifts = new Map();
+
+/**
+ * Where the elements' labels go, as moves of their texts per element: after the result's labels
+ * (`taken`, placed already) and the bodies' names (which stay), every element's values and states
+ * in drawing order, then every element's name. Each keeps off the labels placed before it and off the strokes of the other
+ * elements and of the result's arrows. `prev` keeps the identity of unchanged entries (and of the
+ * whole map when nothing changed), so a canvas node is drawn again only when its own labels move.
+ */
+export function placeElementLabels(groups: ReadonlyArray<{ id: string; kind?: string; prims: readonly Prim[] }>, taken: readonly Prim[] = [], prev: LabelShifts = NO_SHIFTS): LabelShifts {
+  const placed: Box[] = [];
+  for (const p of taken) if (p.t === "text") placed.push(textBox(p));
+  // a body's name stays in the corner of the body chosen for it: moved, it would cross the outline
+  for (const g of groups) for (const p of g.prims) if (p.t === "text" && (g.kind === "body" || p.pinned)) placed.push(textBox(p));
+  const strokes = new Strokes().add(strokesOf(taken), -1);
+  groups.forEach((g, k) => strokes.add(strokesOf(g.prims), k));
+  type Job = { g: number; idx: number[] };
+  const values: Job[] = [];
+  const names: Job[] = [];
+  groups.forEach((g, k) => {
+    if (g.kind === "body") return;
+    for (const idx of labelBlocks(g.prims)) (idx.every((i) => (g.prims[i] as TextPrim).italic) ? names : values).push({ g: k, idx });
+  });
+  const moves = groups.map((): Array<[number, number, number]> => []);
+  for (const { g, idx } of [...values, ...names]) {
+    const box = blockBox(groups[g].prims, idx);
+    const [dx, dy] = bestOffset(box, placed, { strokes, lo: g, hi: g + 1 });
+    placed.push(moveBox(box, dx, dy));
+    if (dx || dy) for (const i of idx) moves[g].push([i, dx, dy]);
+  }
+  const out = new Map<string, readonly TextMove[]>();
+  groups.forEach((g, k) => {
+    const m = moves[k].sort((a, b) => a[0] - b[0]);
+    if (!m.length) return;
+    const before = prev.get(g.id);
+    const same = before && before.length === m.length && before.every((x, j) => x[0] === m[j][0] && x[1] === m[j][1] && x[2] === m[j][2]);
+    out.set(g.id, same ? before : m);
+  });
+  if (out.size === prev.size && [...out].every(([id, m]) => prev.get(id) === m)) return prev;
+  return out;
+}
+
+/** `prims` with the given texts moved and a leader from each block moved clear of its own place. */
+export function shiftTexts(prims: Prim[], moves: readonly TextMove[] | undefined): Prim[] {
+  if (!moves?.length) return prims;
+  const out = prims.slice();
+  const by = new Map(moves.map((m) => [m[0], m]));
+  const own = shapePoints(prims);
+  for (const idx of labelBlocks(prims)) {
+    const m = by.get(idx[0]);
+    if (!m || !idx.every((i) => by.has(i))) continue;
+    const box = blockBox(prims, idx);
+    moveTexts(out, idx, m[1], m[2]);
+    const l = leader(box, moveBox(box, m[1], m[2]), own, (prims[idx[0]] as TextPrim).color);
+    if (l) out.push(l);
+  }
+  return out;
+}

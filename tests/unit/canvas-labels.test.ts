@@ -1,0 +1,117 @@
+// Label placement shared by the SVG renderer and the canvas: in a crowded drawing no two labels
+// sit on each other, the layout is the same every time, and a label moved clear of its own place
+// gets a leader line. The sketch is invented to crowd: a hold-down strap beside a contact, a pin
+// and a roller 0.3 m apart, a port at a corner next to a force.
+import { describe, expect, it } from "vitest";
+import { parseSketch, solveFile, type SolveResult } from "@/solver/index";
+import { buildScene, fieldValuesById } from "@/canvas/scene";
+import { elementGroups, scenePrims } from "@/canvas/render/scenePrims";
+import { supportStates } from "@/canvas/render/results";
+import { boxesOverlap, labelBlocks, placeElementLabels, placeResultLabels, shiftTexts, textBox } from "@/canvas/render/labels";
+import { text, type Prim } from "@/canvas/render/prims";
+import { renderSketchSvg } from "@/canvas/render/svg";
+import type { SketchFileInput } from "@/solver/schema";
+
+const crowded = {
+  format: "counterpoise.sketch",
+  version: 3,
+  title: "Crowded frame",
+  parameters: {},
+  bodies: [{ id: "frame", label: "frame", mass: "120 kg", outline: [[0, 0], [2, 0], [2, 0.8], [0, 0.8]] }],
+  supports: [
+    { id: "pinA", label: "left pin", body: "frame", kind: "pin", at: [0.1, 0] },
+    { id: "rollB", label: "left roller", body: "frame", kind: "roller", at: [0.4, 0], angle: 90 },
+    { id: "strap", label: "hold-down strap", body: "frame", kind: "tie", at: [1.85, 0], angle: -90 },
+    { id: "cR", label: "right foot", body: "frame", kind: "contact", at: [2, 0], angle: 90 },
+  ],
+  loads: [
+    { id: "P", label: "push", body: "frame", kind: "force", at: [1.9, 0.8], angle: -60, magnitude: "3 kN" },
+    { id: "Q", label: "side load", body: "frame", kind: "force", at: [0.05, 0.75], angle: 0, magnitude: "800 N" },
+  ],
+  ports: [{ id: "jet", label: "nozzle", body: "frame", kind: "outlet", at: [2, 0.7], angle: 20, massFlow: "4 kg/s", velocity: "30 m/s", pressure: "50 kPa", area: "0.001 m^2" }],
+} as SketchFileInput;
+
+function drawn(scale: number) {
+  const parsed = parseSketch(crowded);
+  if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+  const result = solveFile(crowded) as SolveResult;
+  expect(result.ok).toBe(true);
+  const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+  return { scene, result, ...scenePrims(scene, scale, "SI", result) };
+}
+
+const textsOf = (prims: readonly Prim[]) => prims.flatMap((p) => (p.t === "text" ? [p] : []));
+
+describe("label placement", () => {
+  it("in a crowded sketch, no label sits on another, at a close zoom and a far one", () => {
+    for (const scale of [120, 200, 320]) {
+      const { groups, results } = drawn(scale);
+      const labels = [...groups.flatMap((g) => textsOf(g.prims).map((t) => ({ id: g.id, t }))), ...textsOf(results).map((t) => ({ id: "result", t }))];
+      // lines of one block sit a line apart: compare labels of different owners, and the result's among themselves
+      for (const [i, a] of labels.entries()) {
+        for (const b of labels.slice(i + 1)) {
+          if (a.id === b.id && a.id !== "result") continue;
+          expect(boxesOverlap(textBox(a.t), textBox(b.t)), `${scale} px/m: "${a.t.text}" on "${b.t.text}"`).toBe(false);
+        }
+      }
+    }
+  });
+
+  it("would have put labels on each other without it (so the check above can fail)", () => {
+    const { scene, result, groups: placed } = drawn(120);
+    const unplaced = scenePrims(scene, 120, "SI", result, false, new Map()).groups;
+    const moved = placed.filter((g, i) => g.prims !== unplaced[i].prims).map((g) => g.id);
+    expect(moved.length).toBeGreaterThan(0);
+    const texts = unplaced.flatMap((g) => textsOf(g.prims).map((t) => ({ id: g.id, box: textBox(t) })));
+    const clash = texts.some((a, i) => texts.slice(i + 1).some((b) => a.id !== b.id && boxesOverlap(a.box, b.box)));
+    expect(clash).toBe(true);
+  });
+
+  it("places the same way every time: the same SVG twice, and the same shifts object when nothing changed", () => {
+    const a = renderSketchSvg(crowded, solveFile(crowded) as SolveResult);
+    const b = renderSketchSvg(crowded, solveFile(crowded) as SolveResult);
+    expect(a).toBe(b);
+    const { scene, result, results, shifts } = drawn(200);
+    expect(shifts.size).toBeGreaterThan(0);
+    const groups = elementGroups(scene, 200, "SI", supportStates(result));
+    const again = placeElementLabels(groups, results);
+    expect(again).not.toBe(shifts);
+    expect([...again]).toEqual([...shifts]);
+    // given the last layout back, an unchanged layout is the same object: no canvas node redraws
+    expect(placeElementLabels(groups, results, shifts)).toBe(shifts);
+  });
+
+  it("keeps a block of lines together and moves the later of two clashing labels by one line", () => {
+    const a = text([0, 0], "5.531 kN", "#000", 11, { align: "left", baseline: "middle" });
+    const b = text([4, 2], "pA 314.2 N", "#000", 11, { align: "left", baseline: "middle" });
+    const far = text([300, 0], "ṁV 12 N", "#000", 11, { align: "left", baseline: "middle" });
+    const out = placeResultLabels([a, b, far]);
+    expect(out[0]).toBe(a);
+    expect(out[2]).toBe(far);
+    // the box of an 11 px line is 11 + 2 × 1.5 px high: one line down is 14 px
+    expect(out[1].t === "text" && out[1].at).toEqual([4, 16]);
+    // a port's name over its flow and pressure: one block; a text elsewhere is another
+    const port = [text([50, 0], "nozzle", "#000", 10, { italic: true }), text([50, 14], "ṁ 4 kg/s", "#000", 11), text([50, 28], "p 50 kPa", "#000", 11)];
+    expect(labelBlocks([...port, far])).toEqual([[0, 1, 2], [3]]);
+  });
+
+  it("puts values before names, and draws a leader to a label moved clear of its own place", () => {
+    // an element's value sits where another element's name wants to be: the value stays, the name moves
+    const value: Prim[] = [{ t: "poly", pts: [[0, 0], [0, 40]], stroke: "#000" }, text([0, 0], "800 N", "#000", 11, { align: "left", baseline: "middle" })];
+    const name: Prim[] = [{ t: "poly", pts: [[10, 60], [10, 80]], stroke: "#000" }, text([2, 1], "side load", "#000", 10, { italic: true, align: "left", baseline: "middle" })];
+    const blockers = [text([2, 14], "W 1 kN", "#000", 11, { align: "left", baseline: "middle" }), text([2, -15], "R 2 kN", "#000", 11, { align: "left", baseline: "middle" })];
+    const shifts = placeElementLabels([{ id: "Q", prims: name }, { id: "F", prims: value }], blockers);
+    expect(shifts.has("F")).toBe(false);
+    const moves = shifts.get("Q")!;
+    expect(moves).toHaveLength(1);
+    const moved = shiftTexts(name, moves);
+    const placed = moved[1];
+    expect(placed.t === "text" && [placed.at[0] - 2, placed.at[1] - 1]).toEqual([moves[0][1], moves[0][2]]);
+    const box = placed.t === "text" ? textBox(placed) : null;
+    for (const other of [value[1], ...blockers]) if (other.t === "text") expect(boxesOverlap(box!, textBox(other))).toBe(false);
+    // moved clear of its place: a leader from its own symbol (the line at x = 10) to the label
+    const leader = moved[moved.length - 1];
+    expect(moved).toHaveLength(name.length + 1);
+    expect(leader.t === "poly" && leader.pts[0][0]).toBe(10);
+  });
+});
