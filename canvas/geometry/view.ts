@@ -32,9 +32,20 @@ export function zoomAt(v: View, factor: number, at: Vec2): View {
 export type Margins = number | { top: number; right: number; bottom: number; left: number };
 
 /** The view that shows a box of the world inside a screen of width × height, leaving margins (px). */
+function squeeze(a: number, b: number, size: number): [number, number] {
+  const room = size * 0.7;
+  return a + b > room ? [(a * room) / (a + b), (b * room) / (a + b)] : [a, b];
+}
+
 export function fitView(box: Box, width: number, height: number, margin: Margins = 64): View {
-  const m = typeof margin === "number" ? { top: margin, right: margin, bottom: margin, left: margin } : margin;
+  const given = typeof margin === "number" ? { top: margin, right: margin, bottom: margin, left: margin } : margin;
   if (!Number.isFinite(box.minX) || width <= 0 || height <= 0) return { ...DEFAULT_VIEW, y: Math.max(200, height * 0.7) };
+  // on a small drawing area the labels' room could leave the body a sliver off to one side: the
+  // margins then shrink, in proportion, to leave it at least 30% of each direction (labels may
+  // then reach past the edge, but the body is drawn whole and in the middle)
+  const [left, right] = squeeze(given.left, given.right, width);
+  const [top, bottom] = squeeze(given.top, given.bottom, height);
+  const m = { left, right, top, bottom };
   const w = Math.max(box.maxX - box.minX, 0.5);
   const h = Math.max(box.maxY - box.minY, 0.5);
   const availW = Math.max(40, width - m.left - m.right);

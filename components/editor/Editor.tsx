@@ -72,6 +72,16 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
   const [interaction] = useState(createInteractionStore);
   // the properties panel on screens too narrow to show it beside the drawing (see the aside below)
   const [panelOpen, setPanelOpen] = useState(false);
+  // the tray and the element list on phone-width screens
+  const [trayOpen, setTrayOpen] = useState(false);
+  // choosing something to place closes the tray there, so the tap that places it lands on the drawing
+  useEffect(
+    () =>
+      stores.editor.subscribe((s, prev) => {
+        if (s.tool.kind !== prev.tool.kind && s.tool.kind !== "select") setTrayOpen(false);
+      }),
+    [stores],
+  );
   const [keysOpen, setKeysOpen] = useState(false);
   const controllerRef = useRef<PointerController | null>(null);
   const setController = useCallback((c: PointerController | null) => {
@@ -121,9 +131,15 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
     <PersistenceCtx.Provider value={persistence}>
       <ActionContextCtx.Provider value={getCtx}>
         <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
-          <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} panel={{ open: panelOpen, toggle: () => setPanelOpen((o) => !o) }} />
+          <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} panel={{ open: panelOpen, toggle: () => setPanelOpen((o) => !o) }}
+            tray={{ open: trayOpen, toggle: () => setTrayOpen((o) => !o) }}
+          />
           <div className="relative flex min-h-0 flex-1">
-            <aside className="relative flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper" aria-label="Add and elements">
+            <aside
+              id="tray-panel"
+              className={`flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper sm:relative max-sm:absolute max-sm:inset-y-0 max-sm:left-0 max-sm:z-30 max-sm:shadow-[8px_0_24px_rgba(29,35,41,0.14)] ${trayOpen ? "" : "max-sm:hidden"}`}
+              aria-label="Add and elements"
+            >
               <TrayOrReadOnly />
               <Outline />
             </aside>

@@ -50,7 +50,23 @@ export interface PanelToggle {
   toggle: () => void;
 }
 
-export function Toolbar({ where, saved, onOpenExample, extra, panel }: { where: string; saved: string | null; onOpenExample: (id: string) => void; extra?: ReactNode; panel?: PanelToggle }) {
+export function Toolbar({
+  where,
+  saved,
+  onOpenExample,
+  extra,
+  panel,
+  tray,
+}: {
+  where: string;
+  saved: string | null;
+  onOpenExample: (id: string) => void;
+  extra?: ReactNode;
+  /** the properties panel, a toggle below 1180 px */
+  panel?: PanelToggle;
+  /** the tray and the element list, a toggle on phone-width screens (below 640 px) */
+  tray?: PanelToggle;
+}) {
   const run = useActionRunner();
   const canUndo = useEditor((s) => s.past.length > 0);
   const canRedo = useEditor((s) => s.future.length > 0);
@@ -61,7 +77,7 @@ export function Toolbar({ where, saved, onOpenExample, extra, panel }: { where: 
   const snap = useEditor((s) => s.snap);
   const units = useEditor((s) => s.units);
   return (
-    <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3">
+    <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3 max-sm:h-auto max-sm:flex-wrap max-sm:py-1.5">
       <Link href="/" className="mr-2 flex items-center gap-1.5 text-ink" aria-label="Counterpoise home">
         <svg width="22" height="22" viewBox="0 0 28 28" aria-hidden="true">
           <path d="M3 13h22" stroke="currentColor" strokeWidth="2.2" strokeLinecap="round" />
@@ -108,7 +124,7 @@ export function Toolbar({ where, saved, onOpenExample, extra, panel }: { where: 
       <button type="button" className={`${ICON_BUTTON} text-[12px]`} onClick={() => run("view.fit")} title={actionTitle("view.fit")}>
         Fit
       </button>
-      <button type="button" className={`${ICON_BUTTON} text-[13px] font-semibold`} onClick={() => run("view.keys")} aria-label="Keys and gestures" title={actionTitle("view.keys")} data-testid="show-keys">
+      <button type="button" className={`${ICON_BUTTON} text-[13px] font-semibold max-sm:hidden`} onClick={() => run("view.keys")} aria-label="Keys and gestures" title={actionTitle("view.keys")} data-testid="show-keys">
         ?
       </button>
       <label className="ml-2 flex items-center gap-1.5 text-[12px] text-ink-soft" title="Snap to the grid and to body corners and edges (hold Alt to place freely)">
@@ -119,6 +135,19 @@ export function Toolbar({ where, saved, onOpenExample, extra, panel }: { where: 
         <UnitSwitch />
       </div>
       {extra}
+      {tray ? (
+        <button
+          type="button"
+          onClick={tray.toggle}
+          aria-expanded={tray.open}
+          aria-controls="tray-panel"
+          aria-label="Add and elements"
+          className={`ml-2 h-7 whitespace-nowrap rounded border px-2.5 text-[12.5px] font-medium sm:hidden ${tray.open ? "border-ink bg-ink text-paper" : "border-ink/20 text-ink hover:border-ink/45"}`}
+          data-testid="toggle-tray"
+        >
+          Add
+        </button>
+      ) : null}
       {panel ? (
         <button
           type="button"

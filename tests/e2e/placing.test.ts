@@ -167,4 +167,30 @@ describe("placing elements from the tray and the keyboard", () => {
       await page.setViewportSize({ width: 1440, height: 900 });
     }
   });
+
+  it("on a phone-width window the toolbar wraps inside it and the tray opens over the drawing, closing when a kind is chosen", async () => {
+    await page.setViewportSize({ width: 390, height: 844 });
+    try {
+      await openScratch(page, "?example=pump-skid");
+      await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
+      // every toolbar control is inside the window
+      for (const b of await page.locator("header button").all()) {
+        if (!(await b.isVisible())) continue;
+        const box = (await b.boundingBox())!;
+        expect(box.x + box.width, (await b.getAttribute("aria-label")) ?? (await b.textContent()) ?? "").toBeLessThanOrEqual(390);
+      }
+      const tray = page.getByRole("complementary", { name: "Add and elements" });
+      expect(await tray.isVisible()).toBe(false);
+      expect((await page.getByTestId("sketch-canvas").boundingBox())!.width).toBeGreaterThan(380);
+
+      await page.getByTestId("toggle-tray").click();
+      await expect.poll(() => tray.isVisible()).toBe(true);
+      await shot(page, "placing-phone-tray");
+      await page.getByTestId("tray-body").click();
+      await expect.poll(() => tray.isVisible()).toBe(false);
+      await page.keyboard.press("Escape");
+    } finally {
+      await page.setViewportSize({ width: 1440, height: 900 });
+    }
+  });
 });

@@ -140,4 +140,22 @@ describe("fit to view", () => {
       }
     }
   });
+
+  it("on a phone-sized canvas the body is drawn whole and gets at least 30% of the width", async () => {
+    const { exampleById } = await import("@/canvas/examples");
+    const { fitScene } = await import("@/canvas/geometry/fit");
+    const { solve } = await import("@/solver/index");
+    const parsed = parseSketch(exampleById("pump-skid")!.sketch);
+    if (!parsed.ok) throw new Error("pump-skid");
+    const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+    const [W, H] = [390, 446];
+    const v = fitScene(scene, W, H, { result: solve(parsed.sketch) });
+    const xs = scene.bodies.flatMap((b) => b.outline.map((p) => toScreen(v, p)[0]));
+    const left = Math.min(...xs);
+    const right = Math.max(...xs);
+    // before, the labels' room left it 40 px: 15 px/m, pushed against one side
+    expect(right - left).toBeGreaterThanOrEqual(0.3 * W - 1);
+    expect(left).toBeGreaterThanOrEqual(0);
+    expect(right).toBeLessThanOrEqual(W);
+  });
 });
