@@ -50,6 +50,23 @@ export interface PanelToggle {
   toggle: () => void;
 }
 
+/** Opens or closes a side panel that lies over the drawing on screens too narrow for it (`shownFrom` hides the button where the panel always shows). */
+function PanelButton({ toggle, controls, name, text, shownFrom, testId }: { toggle: PanelToggle; controls: string; name?: string; text: string; shownFrom: string; testId: string }) {
+  return (
+    <button
+      type="button"
+      onClick={toggle.toggle}
+      aria-expanded={toggle.open}
+      aria-controls={controls}
+      aria-label={name}
+      className={`ml-2 h-7 whitespace-nowrap rounded border px-2.5 text-[12.5px] font-medium ${shownFrom} ${toggle.open ? "border-ink bg-ink text-paper" : "border-ink/20 text-ink hover:border-ink/45"}`}
+      data-testid={testId}
+    >
+      {text}
+    </button>
+  );
+}
+
 export function Toolbar({
   where,
   saved,
@@ -135,31 +152,8 @@ export function Toolbar({
         <UnitSwitch />
       </div>
       {extra}
-      {tray ? (
-        <button
-          type="button"
-          onClick={tray.toggle}
-          aria-expanded={tray.open}
-          aria-controls="tray-panel"
-          aria-label="Add and elements"
-          className={`ml-2 h-7 whitespace-nowrap rounded border px-2.5 text-[12.5px] font-medium sm:hidden ${tray.open ? "border-ink bg-ink text-paper" : "border-ink/20 text-ink hover:border-ink/45"}`}
-          data-testid="toggle-tray"
-        >
-          Add
-        </button>
-      ) : null}
-      {panel ? (
-        <button
-          type="button"
-          onClick={panel.toggle}
-          aria-expanded={panel.open}
-          aria-controls="properties-panel"
-          className={`ml-2 h-7 whitespace-nowrap rounded border px-2.5 text-[12.5px] font-medium min-[1180px]:hidden ${panel.open ? "border-ink bg-ink text-paper" : "border-ink/20 text-ink hover:border-ink/45"}`}
-          data-testid="toggle-properties"
-        >
-          Properties
-        </button>
-      ) : null}
+      {tray ? <PanelButton toggle={tray} controls="tray-panel" name="Add and elements" text="Add" shownFrom="sm:hidden" testId="toggle-tray" /> : null}
+      {panel ? <PanelButton toggle={panel} controls="properties-panel" text="Properties" shownFrom="min-[1180px]:hidden" testId="toggle-properties" /> : null}
     </header>
   );
 }
