@@ -259,7 +259,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
     for (const [body, st] of Object.entries(run.stability)) {
       const ot = st.overturning;
       if ("notApplicable" in ot) rows.push([run.name, body, "overturning", null, null, "", null, null, ot.notApplicable, ""]);
-      else rows.push([run.name, body, "overturning", inUnit(ot.restoring, "moment", system), inUnit(ot.overturning, "moment", system), columnUnit("moment", system), ...verdict(ot), `about ${ot.about}`]);
+      else rows.push([run.name, body, "overturning", inUnit(ot.restoring, "moment", system), inUnit(ot.overturning, "moment", system), columnUnit("moment", system), ...verdict(ot), ot.about]);
       const sl = st.sliding;
       if ("notApplicable" in sl) rows.push([run.name, body, "sliding", null, null, "", null, null, sl.notApplicable, ""]);
       else rows.push([run.name, body, "sliding", inUnit(sl.available, "force", system), inUnit(sl.driving, "force", system), columnUnit("force", system), ...verdict(sl), ""]);
@@ -278,7 +278,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
       { key: "factor", label: "Factor" },
       { key: "required", label: "Required" },
       { key: "verdict", label: "Verdict", align: "left" },
-      { key: "note", label: "", align: "left" },
+      { key: "note", label: "Tips about", align: "left" },
     ],
     rows,
     notes: [

@@ -170,7 +170,9 @@ describe("factors of safety with their figures (common practice)", () => {
     expectRel(ot[4] as number, (P * h) / 1000, 1e-9);
     expect(ot[5]).toBe("kN·m");
     expect(ot[6]).toBe(Number(((Wb * b) / 2 / (P * h)).toFixed(3)));
-    expect(ot[9]).toBe("about toe");
+    // the support the body would tip about, under its own heading
+    expect(t.columns[9].label).toBe("Tips about");
+    expect(ot[9]).toBe("toe");
     expect(sl[2]).toBe("sliding");
     expectRel(sl[3] as number, (mu * Wb) / 1000, 1e-9);
     expectRel(sl[4] as number, P / 1000, 1e-9);
