@@ -197,7 +197,7 @@ function shapePoints(prims: readonly Prim[]): Pt[] {
 
 /**
  * A thin line to a label moved clear of its own place (`from`), from the nearest point of what it
- * labels (`own`, or its own place when that has no shapes).
+ * labels (`own`; its own place only when that has no shapes).
  */
 function leader(from: Box, to: Box, own: readonly Pt[], color: string): Prim | null {
   const centre: Pt = [(to.x0 + to.x1) / 2, (to.y0 + to.y1) / 2];
@@ -207,7 +207,8 @@ function leader(from: Box, to: Box, own: readonly Pt[], color: string): Prim | n
     return Math.hypot(c[0] - q[0], c[1] - q[1]);
   };
   if (gap(back) < LEADER_GAP) return null;
-  let a = back;
+  // from what it labels when that has shapes (a point of its old place would be empty paper)
+  let a = own.length ? own[0] : back;
   for (const q of own) if (gap(q) < gap(a)) a = q;
   const b = clampTo(a, to);
   if (Math.hypot(b[0] - a[0], b[1] - a[1]) < LEADER_GAP) return null;

@@ -115,3 +115,34 @@ describe("label placement", () => {
     expect(leader.t === "poly" && leader.pts[0][0]).toBe(10);
   });
 });
+
+describe("leader lines", () => {
+  // a leader that starts on empty paper (the label's old place) points at nothing: it must start on
+  // a line end or corner of what the label belongs to
+  const isLeader = (p: Prim) => p.t === "poly" && p.width === 0.75 && p.opacity === 0.8 && p.pts.length === 2;
+  it("start on a point of the element's own drawing, in every fixture, in SI and US units", async () => {
+    const { readdirSync, readFileSync } = await import("node:fs");
+    let leaders = 0;
+    for (const name of readdirSync("tests/fixtures/sketches")) {
+      const file = JSON.parse(readFileSync(`tests/fixtures/sketches/${name}`, "utf8"));
+      const parsed = parseSketch(file);
+      if (!parsed.ok) continue;
+      const result = solveFile(file) as SolveResult;
+      const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+      for (const units of ["SI", "US"] as const)
+        for (const scale of [60, 120, 240]) {
+          const { groups } = scenePrims(scene, scale, units, result.ok ? result : null);
+          for (const g of groups) {
+            const own = g.prims.filter((p) => !isLeader(p)).flatMap((p) => (p.t === "poly" ? p.pts : p.t === "circle" ? [p.c] : []));
+            for (const l of g.prims.filter(isLeader)) {
+              leaders++;
+              const start = (l as Extract<Prim, { t: "poly" }>).pts[0];
+              const d = Math.min(...own.map((q) => Math.hypot(q[0] - start[0], q[1] - start[1])));
+              expect(d, `${name} ${units} ${scale} px/m, ${g.id}`).toBeLessThan(0.5);
+            }
+          }
+        }
+    }
+    expect(leaders).toBeGreaterThan(0);
+  });
+});
