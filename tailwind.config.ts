@@ -7,7 +7,7 @@ export default {
     extend: {
       colors: {
         paper: { DEFAULT: "#f6f3ec", deep: "#ece7dc", card: "#fbfaf6" },
-        ink: { DEFAULT: "#1d2329", soft: "#3d4650", faint: "#6b7580" },
+        ink: { DEFAULT: "#1d2329", soft: "#3d4650", faint: "#5f6974" },
         rule: { DEFAULT: "#cfc8b8", soft: "#e2dccf" },
         accent: { DEFAULT: "#b4462b", soft: "#f3ddd3", deep: "#8c3520" },
         reaction: { DEFAULT: "#1f5f7a", soft: "#dcebf1" },

@@ -16,7 +16,7 @@ function layout(paragraphs: string[], action: { label: string; url: string }, cl
     ...paragraphs.map(p),
     `<p style="margin:20px 0"><a href="${escapeHtml(action.url)}" style="background:#1d2329;color:#fbfaf6;padding:10px 16px;border-radius:5px;text-decoration:none">${escapeHtml(action.label)}</a></p>`,
     p(`Or paste this address into your browser: ${action.url}`),
-    `<p style="margin:18px 0 0;color:#6b7580;font-size:13px">${escapeHtml(closing)}</p>`,
+    `<p style="margin:18px 0 0;color:#5f6974;font-size:13px">${escapeHtml(closing)}</p>`,
     `</div></div>`,
   ].join("\n");
 }

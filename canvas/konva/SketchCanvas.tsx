@@ -241,7 +241,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
       tabIndex={0}
       role="application"
       aria-label="Drawing of the free-body diagram"
-      aria-describedby="canvas-help"
+      aria-describedby="canvas-alt canvas-help"
       data-testid="sketch-canvas"
       data-view={`${view.scale} ${view.x} ${view.y}`}
       onDragOver={(e) => {
@@ -278,6 +278,10 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
         </Stage>
       )}
       <CanvasLegend />
+      {/* the pixels say nothing to a screen reader: the same drawing in words is the element list and the results */}
+      <p id="canvas-alt" className="sr-only">
+        Every element drawn here is listed under Elements, each a button that selects it for the Properties panel; the reactions found are in the Results panel.
+      </p>
     </div>
   );
 }

@@ -1,7 +1,7 @@
 // The drafting palette (tailwind.config.ts) for drawings made outside CSS: canvas and SVG.
 export const INK = "#1d2329";
 export const INK_SOFT = "#3d4650";
-export const INK_FAINT = "#6b7580";
+export const INK_FAINT = "#5f6974";
 export const PAPER = "#f6f3ec";
 export const PAPER_CARD = "#fbfaf6";
 export const BODY_FILL = "#e6dfd0";

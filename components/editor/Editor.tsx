@@ -246,6 +246,7 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
       } else if (ex) store.getState().reset(ex.sketch);
       store.getState().setReadOnly(Boolean(out.ok && out.sketch && out.readOnly));
       if (!out.ok) store.getState().notify(out.message);
+      else if (example && !ex) store.getState().notify(`No example called “${example}”: pick one from “Open an example”.`);
       setPhase({ kind: "ready" });
     });
     return () => {

@@ -110,8 +110,12 @@ export function Outline() {
                   }`}
                 >
                   <SymbolIcon kind={l.kind} friction={l.kind === "contact" && (l.el as { mu?: unknown }).mu !== undefined} size={16} />
-                  <span className="num shrink-0 text-ink-faint">{l.el.id}</span>
-                  <span className="truncate">{l.el.label || KIND_LABEL[l.kind]}</span>
+                  {/* The visible words, in source order, are part of the name ("Pin s1, left pin"; "Body b1"
+                      when unlabelled, the kind shown after the id): speech input can say what it sees. Trailing
+                      spaces keep the words apart in the name and vanish at the end of a flex item. */}
+                  {l.el.label ? null : <span className="order-last truncate">{`${KIND_LABEL[l.kind]} `}</span>}
+                  <span className="num shrink-0 text-ink-faint">{`${l.el.id} `}</span>
+                  {l.el.label ? <span className="truncate">{l.el.label}</span> : null}
                 </button>
               </li>
             );

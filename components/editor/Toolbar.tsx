@@ -105,9 +105,9 @@ export function Toolbar({
         </svg>
       </Link>
       <div className="mr-3 min-w-0 max-w-[22rem] max-lg:max-w-[8rem] max-md:hidden">
-        <p className="truncate text-[13.5px] font-semibold leading-tight text-ink" data-testid="sketch-title">
+        <h1 className="truncate text-[13.5px] font-semibold leading-tight text-ink" data-testid="sketch-title">
           {title || "Untitled sketch"}
-        </p>
+        </h1>
         <p className="truncate text-[11px] leading-tight text-ink-faint" aria-live="polite">
           {where}
           {saved ? ` · saved ${saved}` : ""}

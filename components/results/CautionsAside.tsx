@@ -28,7 +28,8 @@ function CautionLists({ flows, titleId }: { flows: boolean; titleId?: string }) 
 /** The column beside the results, from 1400 px wide. */
 export function CautionsAside({ flows }: { flows: boolean }) {
   return (
-    <aside aria-labelledby="cautions-title" className="hidden w-[196px] shrink-0 overflow-y-auto border-l border-rule bg-caution-soft/30 px-3 py-2 text-[11.5px] leading-snug text-ink-soft min-[1400px]:block 2xl:w-[228px]" data-testid="cautions">
+    // it scrolls when the cautions outgrow a short window, so the keyboard can reach it too
+    <aside aria-labelledby="cautions-title" tabIndex={0} className="hidden w-[196px] shrink-0 overflow-y-auto border-l border-rule bg-caution-soft/30 px-3 py-2 text-[11.5px] leading-snug text-ink-soft min-[1400px]:block 2xl:w-[228px]" data-testid="cautions">
       <CautionLists flows={flows} titleId="cautions-title" />
     </aside>
   );

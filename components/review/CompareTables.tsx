@@ -69,7 +69,8 @@ function Rows({ group, rows }: { group: string; rows: FieldChange[] }) {
       {rows.map((f, i) => (
         <tr key={`${group}-${f.field}`} className="border-b border-rule-soft align-top last:border-0">
           <th scope="row" className="py-1.5 pr-3 text-left font-medium">
-            {i === 0 ? group : ""}
+            {/* the group is written once on screen, and read as the header of every row in it */}
+            {i === 0 ? group : <span className="sr-only">{group}</span>}
           </th>
           <td className="py-1.5 pr-3 text-ink-soft">{f.field}</td>
           <td className="num py-1.5 pr-3">{f.before ?? <span className="text-ink-faint">—</span>}</td>

@@ -22,13 +22,16 @@ export function AccountMenu({ name, email }: { name: string; email: string }) {
   }
   return (
     <Disclosure
-      label={`Account: ${name}`}
       align="right"
       width="w-64"
       button={
-        <span aria-hidden="true" className="flex h-8 w-8 items-center justify-center rounded-full border border-ink/20 bg-paper-deep text-xs font-semibold text-ink">
-          {initials(name)}
-        </span>
+        // the initials are what shows, the words are what is read: the button's name is its own text
+        <>
+          <span aria-hidden="true" className="flex h-8 w-8 items-center justify-center rounded-full border border-ink/20 bg-paper-deep text-xs font-semibold text-ink">
+            {initials(name)}
+          </span>
+          <span className="sr-only">Account: {name}</span>
+        </>
       }
     >
       {(close) => (

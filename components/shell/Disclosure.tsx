@@ -12,7 +12,8 @@ export function Disclosure({
   align = "left",
   width = "w-72",
 }: {
-  label: string;
+  /** The button's name when its own text does not say it; leave it out when the button holds its name. */
+  label?: string;
   button: ReactNode;
   children: (close: () => void) => ReactNode;
   align?: "left" | "right";

@@ -12,10 +12,11 @@ export function WorkspaceSwitcher({ workspaces, currentId }: { workspaces: Switc
   return (
     <Disclosure
       width="w-80"
-      label={current ? `Workspace: ${current.name}. Switch workspace` : "Choose a workspace"}
+      // the name starts with the words on the button, so speech input can say what it sees
+      label={current ? `Workspace: ${current.name}. Switch workspace` : "Workspace: Choose a workspace"}
       button={
         <span className="flex min-w-0 flex-col leading-tight">
-          <span className="text-[11px] font-medium uppercase tracking-wider text-ink-faint">Workspace</span>
+          <span className="text-[11px] font-medium uppercase tracking-wider text-ink-faint">{"Workspace "}</span>
           <span className="max-w-[18rem] truncate text-sm font-semibold text-ink">{current ? current.name : "Choose a workspace"}</span>
         </span>
       }

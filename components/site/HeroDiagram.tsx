@@ -23,7 +23,7 @@ export function HeroDiagram() {
       {/* ground and hatching */}
       <path d="M40 300H480" stroke="#1d2329" strokeWidth="1.4" />
       {Array.from({ length: 22 }, (_, i) => (
-        <path key={i} d={`M${48 + i * 20} 300l-10 12`} stroke="#6b7580" strokeWidth="1" />
+        <path key={i} d={`M${48 + i * 20} 300l-10 12`} stroke="#5f6974" strokeWidth="1" />
       ))}
       {/* control volume boundary */}
       <path

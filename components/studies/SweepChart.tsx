@@ -60,7 +60,7 @@ export function SweepChart({ data, units, parameterLabel, limit, run }: { data: 
             contentStyle={{ fontSize: 12, borderColor: "#cfc8b8" }}
           />
           <Legend wrapperStyle={{ fontSize: 11 }} />
-          <ReferenceLine yAxisId="left" y={0} stroke="#6b7580" />
+          <ReferenceLine yAxisId="left" y={0} stroke="#5f6974" />
           {data.quantities.map((q, s) => (
             <Line key={s} yAxisId={axisOf(s)} type="linear" dataKey={`q${s}`} name={`${describeQuantity(q)}${axisOf(s) === "right" && unitOf(s) ? ` (${unitOf(s)}, right)` : ""}`} stroke={COLORS[s % COLORS.length]} strokeDasharray={DASHES[s % DASHES.length]} strokeWidth={1.6} dot={false} isAnimationActive={false} connectNulls={false} />
           ))}

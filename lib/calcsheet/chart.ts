@@ -62,11 +62,11 @@ export function lineChartSvg(spec: ChartSpec): string {
   parts.push(`<rect x="0" y="0" width="${W}" height="${H}" fill="#ffffff"/>`);
   parts.push(`<text x="${m.l}" y="16" font-size="11" font-weight="600" fill="#1d2329">${esc(spec.title)}</text>`);
   for (const t of niceTicks(y0, y1)) {
-    parts.push(`<line x1="${m.l}" x2="${W - m.r}" y1="${Y(t)}" y2="${Y(t)}" stroke="${t === 0 ? "#6b7580" : "#e2dccf"}" stroke-width="${t === 0 ? 1 : 0.6}"/>`);
+    parts.push(`<line x1="${m.l}" x2="${W - m.r}" y1="${Y(t)}" y2="${Y(t)}" stroke="${t === 0 ? "#5f6974" : "#e2dccf"}" stroke-width="${t === 0 ? 1 : 0.6}"/>`);
     parts.push(`<text x="${m.l - 5}" y="${Y(t) + 3}" font-size="8" text-anchor="end" fill="#3d4650">${esc(formatNumber(t, 3))}</text>`);
   }
   for (const t of niceTicks(x0, x1)) {
-    parts.push(`<line x1="${X(t)}" x2="${X(t)}" y1="${H - m.b}" y2="${H - m.b + 4}" stroke="#6b7580" stroke-width="0.6"/>`);
+    parts.push(`<line x1="${X(t)}" x2="${X(t)}" y1="${H - m.b}" y2="${H - m.b + 4}" stroke="#5f6974" stroke-width="0.6"/>`);
     parts.push(`<text x="${X(t)}" y="${H - m.b + 13}" font-size="8" text-anchor="middle" fill="#3d4650">${esc(formatNumber(t, 3))}</text>`);
   }
   parts.push(`<rect x="${m.l}" y="${m.t}" width="${W - m.l - m.r}" height="${H - m.t - m.b}" fill="none" stroke="#cfc8b8" stroke-width="0.8"/>`);

@@ -51,7 +51,7 @@ export interface CalcSheetInput {
 
 const INK = "#1d2329";
 const SOFT = "#3d4650";
-const FAINT = "#6b7580";
+const FAINT = "#5f6974";
 const RULE = "#cfc8b8";
 const ACCENT = "#b4462b";
 const CAUTION_BG = "#f6ebcf";

@@ -10,7 +10,7 @@ import { layoutTable, type Measure, type TablePart, type TableLayout } from "./t
 export const FONT = { regular: "Inter", bold: "Inter-SemiBold" } as const;
 
 const INK = "#1d2329";
-const FAINT = "#6b7580";
+const FAINT = "#5f6974";
 const RULE = "#cfc8b8";
 const HEAD_BG = "#ece7dc";
 const GROUP_BG = "#f5f2ea";

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { CompareScreen } from "@/components/review/CompareScreen";
+import { NoSuchVersion, NothingToCompare } from "@/components/review/NoSuchVersion";
 import { loadSketchPage } from "@/lib/sketch-page";
 
 export const metadata: Metadata = { title: "Compare versions" };
@@ -15,6 +15,12 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   const from = num(q.from, Math.max(1, latest - 1));
   const to = q.to === "draft" ? "draft" : num(q.to, latest);
   const valid = (n: number) => Number.isInteger(n) && n >= 1 && n <= latest;
-  if (!valid(from) || (to !== "draft" && !valid(to))) notFound();
-  return <CompareScreen key={`${from}-${to}`} workspaceId={id} sketchId={sketchId} sketchTitle={data.sketch.title} from={from} to={to} />;
+  const bad = [!valid(from) ? q.from : null, to !== "draft" && !valid(to) ? q.to : null].filter((v): v is string => v != null);
+  const title = data.sketch.title;
+  if (bad.length) {
+    return <NoSuchVersion workspaceId={id} sketchId={sketchId} sketchTitle={title} latest={latest} asked={bad} here="Compare" />;
+  }
+  // the default comparison of a sketch with one version would be v1 against itself
+  if (latest === 1 && to !== "draft") return <NothingToCompare workspaceId={id} sketchId={sketchId} sketchTitle={title} />;
+  return <CompareScreen key={`${from}-${to}`} workspaceId={id} sketchId={sketchId} sketchTitle={title} from={from} to={to} />;
 }

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
+import { NoSuchVersion } from "@/components/review/NoSuchVersion";
 import { VersionReview } from "@/components/review/VersionReview";
 import { loadSketchPage } from "@/lib/sketch-page";
 
@@ -9,6 +9,8 @@ export default async function VersionReviewPage({ params }: { params: Promise<{ 
   const { id, sketchId, number } = await params;
   const { session, data } = await loadSketchPage(id, sketchId, `/workspaces/${id}/sketches/${sketchId}/versions/${number}`);
   const n = Number(number);
-  if (!Number.isInteger(n) || n < 1 || n > data.sketch.latestVersion) notFound();
+  if (!Number.isInteger(n) || n < 1 || n > data.sketch.latestVersion) {
+    return <NoSuchVersion workspaceId={id} sketchId={sketchId} sketchTitle={data.sketch.title} latest={data.sketch.latestVersion} asked={[number]} here={`Version ${number}`} />;
+  }
   return <VersionReview workspaceId={id} sketchId={sketchId} sketchTitle={data.sketch.title} number={n} latest={data.sketch.latestVersion} viewerId={session.user.id} />;
 }

@@ -1,0 +1,177 @@
+// Accessibility in Chromium: axe-core, run inside each main screen against the WCAG 2.1 A and AA
+// rules, finds no serious or critical violation. Screens are checked once they have drawn their
+// data (a sketch with two versions, a workspace with it), signed in where the screen needs it.
+import { randomBytes } from "node:crypto";
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createSketch, saveVersion } from "@/lib/sketches";
+import { parseSketch } from "@/solver";
+import { makeWorkspace } from "../api/helpers";
+import { fixture } from "../api/sketch-fixtures";
+import { BASE_URL, openBrowser, shot } from "./browser";
+import { makeCast, signInAs, type Cast } from "./versions-helpers";
+
+const tag = randomBytes(3).toString("hex");
+const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
+const WCAG_TAGS = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"];
+
+type Violation = { id: string; impact: string | null; help: string; nodes: Array<{ target: unknown[]; failureSummary?: string }> };
+
+/** axe's serious and critical findings on the page as it stands, one line per element. */
+async function seriousViolations(page: Page): Promise<string[]> {
+  await page.addScriptTag({ content: axeSource });
+  const violations = await page.evaluate(async (tags) => {
+    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Violation[] }> } }).axe;
+    const res = await axe.run(document, { runOnly: { type: "tag", values: tags }, resultTypes: ["violations"] });
+    return res.violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.map((n) => ({ target: n.target, failureSummary: n.failureSummary })) }));
+  }, WCAG_TAGS);
+  return violations
+    .filter((v) => v.impact === "serious" || v.impact === "critical")
+    .flatMap((v) => v.nodes.map((n) => `${v.impact} ${v.id}: ${JSON.stringify(n.target)} — ${v.help} (${detail(n.failureSummary)})`));
+}
+
+/** The line of axe's summary that says what is wrong with the element (colours and ratio for contrast). */
+function detail(summary = ""): string {
+  return summary.split("\n").map((l) => l.trim()).filter((l) => l && !/^Fix (any|all)/.test(l)).join("; ");
+}
+
+async function expectAccessible(page: Page, name: string): Promise<void> {
+  await page.waitForLoadState("networkidle");
+  // the page settles (fonts, transitions) before colours are measured
+  await page.evaluate(() => document.fonts.ready);
+  const found = await seriousViolations(page);
+  if (found.length) await shot(page, `a11y-${name}`);
+  expect(found, `${name}:\n${found.join("\n")}`).toEqual([]);
+}
+
+function parsed(doc: unknown) {
+  const p = parseSketch(doc);
+  if (!p.ok) throw new Error("fixture does not parse");
+  return p;
+}
+
+describe("main screens meet WCAG 2.1 AA (no serious or critical axe findings)", () => {
+  let cast: Cast;
+  let ws = "";
+  let sketchId = "";
+  let singleId = "";
+  let anon: BrowserContext;
+  let owner: Page;
+  const contexts: BrowserContext[] = [];
+
+  beforeAll(async () => {
+    ({ cast, ws } = await makeCast(tag, { owner: "Ada Lead", editor: "Ed Drafter" }));
+    const v1 = fixture("pump-skid-discharge");
+    const made = await createSketch(ws, cast.editor, { title: `Skid ${tag}`, document: parsed(v1), message: "As drawn" });
+    sketchId = made.sketch.id;
+    await saveVersion(sketchId, cast.editor, { baseVersion: 1, message: "Duty flow 12 → 15 kg/s", document: parsed({ ...v1, parameters: { mdot: "15 kg/s" } }) });
+    singleId = (await createSketch(ws, cast.editor, { title: `Bend ${tag}`, document: parsed(fixture("pipe-bend-anchor")), message: "As drawn" })).sketch.id;
+    anon = await openBrowser();
+    contexts.push(anon);
+    const s = await signInAs(cast.owner);
+    contexts.push(s.ctx);
+    owner = s.page;
+  });
+  afterAll(async () => {
+    for (const c of contexts) await c.close();
+  });
+
+  it("the home page", async () => {
+    const page = await anon.newPage();
+    await page.goto(`${BASE_URL}/`);
+    await page.getByRole("heading", { level: 1 }).waitFor();
+    await expectAccessible(page, "home");
+  });
+
+  it("sign-in and sign-up", async () => {
+    const page = await anon.newPage();
+    await page.goto(`${BASE_URL}/sign-in`);
+    await page.getByLabel("E-mail address").waitFor();
+    await expectAccessible(page, "sign-in");
+    await page.goto(`${BASE_URL}/sign-up`);
+    await page.getByLabel("E-mail address").waitFor();
+    await expectAccessible(page, "sign-up");
+  });
+
+  it("the editor with an example open", async () => {
+    const page = await anon.newPage();
+    await page.goto(`${BASE_URL}/sketches/new?example=pump-skid`);
+    await page.getByTestId("sketch-canvas").locator("canvas").first().waitFor();
+    await page.getByTestId("status-sentence").first().waitFor();
+    await expectAccessible(page, "editor");
+    // the drawing has a name and points to its text alternative: the element list
+    const canvas = page.getByRole("application", { name: "Drawing of the free-body diagram" });
+    expect(await canvas.getAttribute("aria-describedby")).toBe("canvas-alt canvas-help");
+    expect(await page.locator("#canvas-alt").textContent()).toContain("listed under Elements");
+    await page.getByRole("list", { name: "Elements of the sketch" }).getByRole("button", { name: "Body skid, Pump skid" }).waitFor();
+  });
+
+  it("the workspace dashboard, signed in", async () => {
+    await owner.goto(`${BASE_URL}/workspaces/${ws}`);
+    await owner.getByTestId(`sketch-row-Skid ${tag}`).waitFor();
+    await expectAccessible(owner, "dashboard");
+  });
+
+  it("a sketch with its history", async () => {
+    await owner.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    await owner.getByTestId("version-row-2").waitFor();
+    await expectAccessible(owner, "history");
+  });
+
+  it("a version page", async () => {
+    await owner.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}/versions/2`);
+    await owner.getByTestId("review-drawing").waitFor();
+    await expectAccessible(owner, "version");
+  });
+
+  it("the compare page", async () => {
+    await owner.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}/compare?from=1&to=2`);
+    await owner.getByTestId("compare-summary").waitFor();
+    await expectAccessible(owner, "compare");
+  });
+
+  it("the members page", async () => {
+    await owner.goto(`${BASE_URL}/workspaces/${ws}/members`);
+    await owner.getByText(cast.viewer.email).first().waitFor();
+    await expectAccessible(owner, "members");
+  });
+
+  it("the account page", async () => {
+    await owner.goto(`${BASE_URL}/account`);
+    await owner.getByRole("heading", { level: 1 }).waitFor();
+    await expectAccessible(owner, "account");
+    // the header's two menus keep the names people and tests find them by
+    expect(await owner.getByRole("button", { name: "Account: Ada Lead" }).count()).toBe(1);
+    await owner.goto(`${BASE_URL}/workspaces/${ws}`);
+    expect(await owner.getByRole("button", { name: `Workspace: Pier ${tag} pump station. Switch workspace` }).count()).toBe(1);
+  });
+
+  it("empty and error states are designed pages, and accessible too", async () => {
+    const empty = await makeWorkspace(`Empty ${tag}`, [[cast.owner, "owner"]]);
+    await owner.goto(`${BASE_URL}/workspaces/${empty}`);
+    await owner.getByText("No sketches saved here yet").waitFor();
+    await expectAccessible(owner, "dashboard-empty");
+
+    const single = `${BASE_URL}/workspaces/${ws}/sketches/${singleId}`;
+    await owner.goto(`${single}/compare`);
+    await owner.getByTestId("nothing-to-compare").getByText("Only one version so far").waitFor();
+    await expectAccessible(owner, "compare-one-version");
+
+    await owner.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}/compare?from=abc&to=7`);
+    expect(await owner.getByRole("heading", { level: 1 }).textContent()).toBe("No versions “abc” and v7 of this sketch");
+    expect(await owner.getByTestId("no-such-version").textContent()).toContain("it has versions v1 to v2");
+    await expectAccessible(owner, "compare-bad-query");
+
+    await owner.goto(`${single}/versions/9`);
+    expect(await owner.getByRole("heading", { level: 1 }).textContent()).toBe("No version v9 of this sketch");
+    expect(await owner.getByRole("link", { name: "Review v1" }).getAttribute("href")).toBe(`/workspaces/${ws}/sketches/${singleId}/versions/1`);
+
+    const page = await anon.newPage();
+    const res = await page.goto(`${BASE_URL}/no-such-page`);
+    expect(res?.status()).toBe(404);
+    expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("No page at this address");
+    await expectAccessible(page, "not-found");
+  });
+});
