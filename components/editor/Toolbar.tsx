@@ -104,7 +104,7 @@ export function Toolbar({
           <path d="M8 10V4.5M8 4.5l-2 2.3M8 4.5l2 2.3" stroke="#1f5f7a" strokeWidth="1.5" fill="none" strokeLinecap="round" />
         </svg>
       </Link>
-      <div className="mr-3 min-w-0 max-w-[22rem] max-lg:max-w-[8rem] max-md:hidden">
+      <div className="mr-3 min-w-0 max-w-[22rem] max-lg:max-w-[8rem] max-md:sr-only">
         <h1 className="truncate text-[13.5px] font-semibold leading-tight text-ink" data-testid="sketch-title">
           {title || "Untitled sketch"}
         </h1>
