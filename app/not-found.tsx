@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { AuthCard, AuthFrame } from "@/components/auth/AuthFrame";
+import { buttonClass } from "@/components/shell/controls";
 
 /** Any address the app does not have: the same frame as the signed-out pages, and ways on. */
 export default function NotFound() {
@@ -7,10 +8,10 @@ export default function NotFound() {
     <AuthFrame>
       <AuthCard title="No page at this address" lead="The link may be mistyped, or the page has moved. Nothing you saved is affected.">
         <div className="flex flex-wrap gap-2">
-          <Link href="/workspaces" className="rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft">
+          <Link href="/workspaces" className={buttonClass("primary")}>
             Your workspaces
           </Link>
-          <Link href="/" className="rounded-md border border-ink/20 bg-paper-card px-4 py-2 text-sm font-medium hover:border-ink/45">
+          <Link href="/" className={buttonClass("secondary")}>
             Home page
           </Link>
         </div>

@@ -53,6 +53,9 @@ export interface BodyModel {
   momentum: { fx: number; fy: number; m: number };
 }
 
+/** A support's friction coefficient: a contact's μ, 0 for a frictionless contact or any other support. */
+export const frictionCoefficient = (s: Support): number => (s.kind === "contact" ? (s.mu ?? 0) : 0);
+
 function supportStiffnesses(supports: Support[]): number[] {
   const given = supports.map((s) => s.stiffness).filter((k): k is number => k !== undefined);
   const mean = given.length ? given.reduce((a, b) => a + b, 0) / given.length : DEFAULT_STIFFNESS;

@@ -13,7 +13,7 @@
 //    when loaded from zero — wedged or jammed by a preload — and whether it holds is a question
 //    of stiffness and history, not of statics.
 import { dot3, norm3, solvePsd, type Vec3 } from "./linalg";
-import type { BodyModel, Group, Spring } from "./model";
+import { frictionCoefficient, type BodyModel, type Group, type Spring } from "./model";
 import { findRay } from "./ray";
 
 /** A state per group: 0 open, 1 engaged (gripping), 2 sliding with t = +μ·n, 3 with t = −μ·n. */
@@ -30,10 +30,7 @@ export interface SlipSolution {
   sliding: boolean[];
 }
 
-const muOf = (model: BodyModel, g: Group): number => {
-  const s = model.supports[g.support];
-  return s.kind === "contact" ? (s.mu ?? 0) : 0;
-};
+const muOf = (model: BodyModel, g: Group): number => frictionCoefficient(model.supports[g.support]);
 
 /** The first state of every contact and tie that meets equilibrium and Coulomb's law, or null. */
 export function solveWithSlip(model: BodyModel): SlipSolution | null {

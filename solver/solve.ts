@@ -5,7 +5,7 @@ import { solveBilateral, solveOneSided, type SpringSolution } from "./contact";
 import { determinacyOf } from "./determinacy";
 import { direction, momentOf } from "./geometry";
 import { dot3, norm3, type Vec3 } from "./linalg";
-import { buildBodyModel, type BodyModel } from "./model";
+import { buildBodyModel, frictionCoefficient, type BodyModel } from "./model";
 import { massBalanceWarnings, portFlow, type PortFlow } from "./ports";
 import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResult, SolveWarning, Status, Vec2 } from "./types";
 import { isShared, reuseEqual, sameWarning } from "./reuse";
@@ -230,7 +230,7 @@ function frictionWarnings(model: BodyModel, one: SpringSolution, warnings: Solve
         (one.couldJam
           ? `forces within friction could balance the loads, but not the ones its supports take when loaded from zero; ` +
             `a preload could jam it, so whether it holds depends on the stiffnesses and the order of loading`
-          : `friction (${slides.map((s) => `μ = ${fmtRatio(s.kind === "contact" ? (s.mu ?? 0) : 0)}`).join(", ")}) cannot balance the loads`),
+          : `friction (${slides.map((s) => `μ = ${fmtRatio(frictionCoefficient(s))}`).join(", ")}) cannot balance the loads`),
       ids: slides.map((s) => s.id),
     });
   }

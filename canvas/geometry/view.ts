@@ -31,12 +31,13 @@ export function zoomAt(v: View, factor: number, at: Vec2): View {
 
 export type Margins = number | { top: number; right: number; bottom: number; left: number };
 
-/** The view that shows a box of the world inside a screen of width × height, leaving margins (px). */
+/** Two opposite margins, shrunk in proportion when together they take more than 70% of `size`. */
 function squeeze(a: number, b: number, size: number): [number, number] {
   const room = size * 0.7;
   return a + b > room ? [(a * room) / (a + b), (b * room) / (a + b)] : [a, b];
 }
 
+/** The view that shows a box of the world inside a screen of width × height, leaving margins (px). */
 export function fitView(box: Box, width: number, height: number, margin: Margins = 64): View {
   const given = typeof margin === "number" ? { top: margin, right: margin, bottom: margin, left: margin } : margin;
   if (!Number.isFinite(box.minX) || width <= 0 || height <= 0) return { ...DEFAULT_VIEW, y: Math.max(200, height * 0.7) };

@@ -265,7 +265,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
           </Layer>
           <Layer listening={false}>
             <Group x={view.x} y={view.y}>
-              <ResultsShape interaction={interaction} />
+              <ResultsShape />
             </Group>
           </Layer>
           <Layer ref={liftedLayerRef} listening={!dragging} onDraw={() => queueMicrotask(markFrame)}>

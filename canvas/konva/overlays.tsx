@@ -8,7 +8,8 @@ import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
 import { useEditor, useScene, useStores } from "../context";
 import { DIRECTED } from "../model/elements";
-import { scenePrims } from "../render/scenePrims";
+import { elementGroups, resultLayer } from "../render/scenePrims";
+import { supportStates } from "../render/results";
 import { itemPrims } from "../render/symbols";
 import { dir, type Prim } from "../render/prims";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
@@ -29,7 +30,7 @@ const DRAWN_WITH_RESULTS = new Set(["pin", "roller", "contact", "fixed", "tie", 
  * new result (from the worker, between frames) is drawn at once in that task, so the frames that
  * answer the pointer only draw what the pointer moved.
  */
-export function ResultsShape({ interaction }: { interaction: InteractionStore }) {
+export function ResultsShape() {
   const stores = useStores();
   const shapeRef = useRef<Konva.Shape>(null);
   const primsRef = useRef<Prim[]>([]);
@@ -41,8 +42,7 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       const sc = stores.scene.getState();
       // only what the results are drawn at: dragging a load changes none of these until its result arrives
       const parts = [...sc.bodies, ...sc.items.filter((i) => DRAWN_WITH_RESULTS.has(i.kind))];
-      const shifts = interaction.getState().labelShifts;
-      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, shifts, ...parts];
+      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, ...parts];
       if (key.length === last.length && key.every((k, i) => k === last[i])) return;
       last = key;
       const scene: Scene = {
@@ -50,8 +50,12 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
         items: parts.filter((p): p is SceneItem => p.kind !== "body"),
         byId: new Map(parts.map((p) => [p.id, p])),
       };
-      // the supports' and ports' own labels are drawn by their nodes; the result's labels keep off them
-      primsRef.current = a.shown ? scenePrims(scene, e.view.scale, e.units, a.shown, a.stale, shifts).results : [];
+      // the supports' and ports' own labels are drawn (and moved off these) by their nodes; only the
+      // result's layer is drawn here, over their symbols
+      if (a.shown) {
+        const states = supportStates(a.shown);
+        primsRef.current = resultLayer(elementGroups(scene, e.view.scale, e.units, states), scene, e.view.scale, e.units, a.shown, states, a.stale);
+      } else primsRef.current = [];
       const layer = shapeRef.current?.getLayer();
       if (!layer) return;
       if (now) layer.draw();
@@ -63,13 +67,10 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       stores.editor.subscribe((s, p) => {
         if (s.view.scale !== p.view.scale || s.units !== p.units) redraw(false);
       }),
-      interaction.subscribe((s, p) => {
-        if (s.labelShifts !== p.labelShifts) redraw(false);
-      }),
     ];
     redraw(false);
     return () => stops.forEach((stop) => stop());
-  }, [stores, interaction]);
+  }, [stores]);
   return <Shape ref={shapeRef} sceneFunc={(ctx) => drawPrims(ctx._context, primsRef.current, canvasFont())} listening={false} perfectDrawEnabled={false} />;
 }
 

@@ -13,7 +13,7 @@ import type { ActionContext } from "@/canvas/actions";
 import type { SketchPersistence } from "@/canvas/persistence";
 import type { SketchFile } from "@/solver/schema";
 import { startAutosave } from "@/canvas/autosave";
-import { exampleById } from "@/canvas/examples";
+import { exampleById, type Example } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
 import { replaceSketch } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
@@ -120,18 +120,19 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
 
   const openExample = (id: string) => {
     const ex = exampleById(id);
-    if (!ex) return;
-    const s = stores.editor.getState();
-    s.apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
-    // the undo hint first: the notice line is cut to the window's width
-    s.notify(`Opened “${ex.title}”. Undo (Ctrl+Z) returns to your sketch. ${ex.summary}`);
+    if (ex) openExampleOver(stores.editor, ex, "your sketch");
   };
 
   return (
     <PersistenceCtx.Provider value={persistence}>
       <ActionContextCtx.Provider value={getCtx}>
         <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
-          <Toolbar where={persistence.describe()} saved={saved} onOpenExample={openExample} extra={toolbarExtra} panel={{ open: panelOpen, toggle: () => setPanelOpen((o) => !o) }}
+          <Toolbar
+            where={persistence.describe()}
+            saved={saved}
+            onOpenExample={openExample}
+            extra={toolbarExtra}
+            panel={{ open: panelOpen, toggle: () => setPanelOpen((o) => !o) }}
             tray={{ open: trayOpen, toggle: () => setTrayOpen((o) => !o) }}
           />
           <div className="relative flex min-h-0 flex-1">
@@ -213,11 +214,21 @@ export function SketchUnavailable({ message }: { message: string }) {
   );
 }
 
-/** `toolbarExtra`: what the page adds at the toolbar's end (the versions work: save, version, history). */
 /** Anything drawn or typed: an empty scratch sketch may simply be replaced. */
 function hasContent(sketch: SketchFile): boolean {
   return sketch.bodies.length + sketch.supports.length + sketch.loads.length + sketch.ports.length + sketch.massSources.length > 0 || Object.keys(sketch.parameters ?? {}).length > 0;
 }
+
+/**
+ * An example in place of the sketch, as one undo step; the notice leads with the undo hint (the
+ * notice line is cut to the window's width). `yours` names what Undo brings back.
+ */
+function openExampleOver(store: EditorStore, ex: Example, yours: string) {
+  store.getState().apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
+  store.getState().notify(`Opened “${ex.title}”. Undo (Ctrl+Z) returns to ${yours}. ${ex.summary}`);
+}
+
+/** `toolbarExtra`: what the page adds at the toolbar's end (the versions work: save, version, history). */
 
 export function Editor({ persistence, example, toolbarExtra }: { persistence: SketchPersistence; example?: string; toolbarExtra?: ReactNode }) {
   const [store] = useState(() => createEditorStore());
@@ -241,8 +252,7 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
       if (kept) store.getState().reset(kept.sketch);
       if (ex && kept && !kept.readOnly && hasContent(kept.sketch)) {
         // an example link never throws away the sketch kept here: opening it is one undo step
-        store.getState().apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
-        store.getState().notify(`Opened “${ex.title}”. Undo (Ctrl+Z) returns to the sketch you had here. ${ex.summary}`);
+        openExampleOver(store, ex, "the sketch you had here");
       } else if (ex) store.getState().reset(ex.sketch);
       store.getState().setReadOnly(Boolean(out.ok && out.sketch && out.readOnly));
       if (!out.ok) store.getState().notify(out.message);

@@ -1,6 +1,7 @@
 "use client";
 // A small dropdown menu (button + list of items), keyboard-friendly: arrows move, Escape closes.
 import { useEffect, useId, useRef, useState, type ReactNode } from "react";
+import { NarrowLabel } from "./NarrowLabel";
 
 export interface MenuItem {
   id: string;
@@ -42,19 +43,11 @@ export function Menu({ label, shortLabel, items, testId, wide }: { label: string
         aria-expanded={open}
         aria-controls={id}
         data-testid={testId}
+        aria-label={shortLabel ? label : undefined}
         onClick={() => setOpen((o) => !o)}
         className={`h-8 whitespace-nowrap rounded px-2.5 text-[13px] font-medium ${open ? "bg-paper-deep text-ink" : "text-ink-soft hover:bg-paper-deep hover:text-ink"}`}
       >
-        {shortLabel ? (
-          <>
-            <span className="max-lg:hidden">{label}</span>
-            <span className="lg:hidden" aria-hidden="true">
-              {shortLabel}
-            </span>
-          </>
-        ) : (
-          label
-        )}{" "}
+        {shortLabel ? <NarrowLabel full={label} short={shortLabel} /> : label}{" "}
         <span aria-hidden="true" className="text-[10px] text-ink-faint">▾</span>
       </button>
       {open && (

@@ -1,8 +1,8 @@
 import Link from "next/link";
-import { Crumb, EmptyState } from "@/components/shell/controls";
+import { buttonClass, Crumb, EmptyState } from "@/components/shell/controls";
 
-const PRIMARY = "rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft";
-const SECONDARY = "rounded-md border border-ink/20 bg-paper-card px-4 py-2 text-sm font-medium hover:border-ink/45";
+const PRIMARY = buttonClass("primary");
+const SECONDARY = buttonClass("secondary");
 
 /** "version v9", "versions v0 and “abc”": the numbers the address gave, as written. */
 export function askedVersions(values: string[]): string {

@@ -11,6 +11,12 @@ const TONES: Record<Tone, string> = {
   quiet: "text-ink-soft hover:text-ink hover:bg-paper-deep disabled:text-ink-faint",
 };
 
+/** The classes of a button of this tone and size, for a link drawn as a button too. */
+export function buttonClass(tone: Tone = "primary", size: "sm" | "md" = "md"): string {
+  const sizing = size === "sm" ? "px-2.5 py-1 text-[13px]" : "px-4 py-2 text-sm";
+  return `inline-flex items-center justify-center gap-2 whitespace-nowrap rounded-md font-medium transition-colors disabled:cursor-not-allowed ${sizing} ${TONES[tone]}`;
+}
+
 export function Button({
   tone = "primary",
   busy = false,
@@ -19,13 +25,12 @@ export function Button({
   children,
   ...rest
 }: ButtonHTMLAttributes<HTMLButtonElement> & { tone?: Tone; busy?: boolean; size?: "sm" | "md" }) {
-  const sizing = size === "sm" ? "px-2.5 py-1 text-[13px]" : "px-4 py-2 text-sm";
   return (
     <button
       {...rest}
       disabled={rest.disabled || busy}
       aria-busy={busy || undefined}
-      className={`inline-flex items-center justify-center gap-2 whitespace-nowrap rounded-md font-medium transition-colors disabled:cursor-not-allowed ${sizing} ${TONES[tone]} ${className}`}
+      className={`${buttonClass(tone, size)} ${className}`}
     >
       {busy ? <Spinner /> : null}
       {children}

@@ -13,6 +13,7 @@ import { can } from "@/lib/roles";
 import { discardDraft, keepDraft, readDraft, type Draft } from "./drafts";
 import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
 import type { SaveFlow } from "./savedPersistence";
+import { NarrowLabel } from "@/components/editor/NarrowLabel";
 
 const CHIP = "h-7 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
 
@@ -113,8 +114,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
       </span>
       {canSave ? (
         <button type="button" onClick={() => run("file.save")} className={`${CHIP} bg-ink text-paper hover:bg-ink-soft`} data-testid="save-version" aria-label="Save version">
-          <span className="max-lg:hidden">Save version</span>
-          <span className="lg:hidden">Save…</span>
+          <NarrowLabel full="Save version" short="Save…" />
         </button>
       ) : (
         <span className={`${CHIP} inline-flex items-center border border-rule text-ink-soft`} title="Your role reads sketches but does not save versions" data-testid="read-only">

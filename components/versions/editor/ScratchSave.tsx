@@ -13,6 +13,7 @@ import { Providers } from "@/components/shell/Providers";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { Dialog } from "../Dialog";
 import { problemLines } from "./SaveDialogs";
+import { NarrowLabel } from "@/components/editor/NarrowLabel";
 
 type Created = { sketch: { id: string; workspaceId: string; title: string } };
 
@@ -101,8 +102,7 @@ function ScratchSaveButton() {
   return (
     <div className="ml-3">
       <button type="button" onClick={() => setOpen(true)} className="h-7 whitespace-nowrap rounded bg-ink px-2.5 text-[12.5px] font-medium text-paper hover:bg-ink-soft" data-testid="save-to-workspace" aria-label="Save to a workspace">
-        <span className="max-lg:hidden">Save to a workspace</span>
-        <span className="lg:hidden">Save…</span>
+        <NarrowLabel full="Save to a workspace" short="Save…" />
       </button>
       {open ? <SaveToWorkspace onClose={() => setOpen(false)} /> : null}
     </div>
