@@ -77,7 +77,7 @@ async function main() {
       const b = spawnSync(process.execPath, ["node_modules/next/dist/bin/next", "build"], { stdio: "inherit", env: { ...process.env, NEXT_DIST_DIR: DIST } });
       if (b.status !== 0) throw new Error("next build failed");
     }
-    server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { env: { ...process.env, NEXT_DIST_DIR: DIST }, stdio: "ignore" });
+    server = spawn(process.execPath, ["scripts/serve.mjs", "-H", "127.0.0.1", "-p", String(PORT)], { env: { ...process.env, NEXT_DIST_DIR: DIST }, stdio: "ignore" });
     base = `http://127.0.0.1:${PORT}`;
     await waitFor(`${base}/sketches/new`, 60_000);
   }

@@ -29,7 +29,7 @@ async function main() {
   let base = process.env.BENCH_URL;
   if (!base) {
     if (!existsSync(`${DIST}/BUILD_ID`)) throw new Error(`no build in ${DIST}: run npm start (or next build) first, or set BENCH_URL`);
-    server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { env: { ...process.env, NEXT_DIST_DIR: DIST }, stdio: "ignore" });
+    server = spawn(process.execPath, ["scripts/serve.mjs", "-H", "127.0.0.1", "-p", String(PORT)], { env: { ...process.env, NEXT_DIST_DIR: DIST }, stdio: "ignore" });
     base = `http://127.0.0.1:${PORT}`;
     await up(`${base}/sketches/new`);
   }

@@ -26,7 +26,9 @@ async function main() {
     run(process.execPath, [nodeBin("next"), "build"], { env: { ...env, NEXT_DIST_DIR: ".next" } });
   }
 
-  const app = startChild(process.execPath, [nodeBin("next"), dev ? "dev" : "start", "-H", host, "-p", String(port)], { env });
+  // production goes through scripts/serve.mjs (it records the connecting peer in X-Forwarded-For)
+  const serveArgs = dev ? [nodeBin("next"), "dev"] : ["scripts/serve.mjs"];
+  const app = startChild(process.execPath, [...serveArgs, "-H", host, "-p", String(port)], { env });
   children.push(app);
 
   const stop = (code) => {

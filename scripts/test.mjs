@@ -65,7 +65,7 @@ async function main() {
     const appUrl = `http://127.0.0.1:${appPort}`;
     const appEnv = { ...env, NODE_ENV: "production", NEXT_DIST_DIR: distDir, APP_URL: appUrl, AUTH_RATE_LIMIT_MAX: process.env.AUTH_RATE_LIMIT_MAX || "1000" };
     run(process.execPath, [nodeBin("next"), "build"], { env: appEnv });
-    const app = startChild(process.execPath, [nodeBin("next"), "start", "-H", "127.0.0.1", "-p", String(appPort)], {
+    const app = startChild(process.execPath, ["scripts/serve.mjs", "-H", "127.0.0.1", "-p", String(appPort)], {
       env: appEnv,
       stdio: ["ignore", "ignore", "inherit"],
     });
