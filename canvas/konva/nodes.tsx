@@ -8,7 +8,8 @@ import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
 import { useScene } from "../context";
 import type { SceneBody, SceneItem } from "../scene";
-import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, type DrawState } from "../render/symbols";
+import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, standInPoint, unplacedPrims, type DrawState } from "../render/symbols";
+import { isFinitePoint } from "../geometry/polygon";
 import { supportStates } from "../render/results";
 import { primsBox, type Prim } from "../render/prims";
 import { shiftTexts, type TextMove } from "../render/labels";
@@ -108,15 +109,20 @@ export const CgNode = memo(function CgNode({ id, selected, scale }: NodeProps) {
 
 export const ItemNode = memo(function ItemNode({ id, selected, scale, units, state, shift }: NodeProps & { state?: DrawState; shift?: readonly TextMove[] }) {
   const item = useScene((s) => s.byId.get(id)) as SceneItem | undefined;
-  const needsBody = item?.kind === "pin" || item?.kind === "fixed";
+  // an element whose position cannot be worked out is marked at its body's centre instead
+  const unplaced = !!item && !isFinitePoint(anchorWorld(item));
+  const needsBody = item?.kind === "pin" || item?.kind === "fixed" || unplaced;
   const body = useScene((s) => (needsBody && item ? (s.byId.get(item.body) as SceneBody | undefined) : undefined));
-  const own = useMemo(() => (item ? itemPrims(item, { units, scale, color: selected ? ACCENT : INK, groundSide: groundSideOf(item, body), state }) : []), [item, body, units, scale, selected, state]);
+  const own = useMemo(() => {
+    if (!item) return [];
+    const o = { units, scale, color: selected ? ACCENT : INK };
+    return unplaced ? unplacedPrims(item, o) : itemPrims(item, { ...o, groundSide: groundSideOf(item, body), state });
+  }, [item, unplaced, body, units, scale, selected, state]);
   const prims = useMemo(() => shiftTexts(own, shift), [own, shift]);
   // picked by the symbol, not by a leader line out to a moved label
   const hit = useMemo(() => boxHit(own), [own]);
   if (!item) return null;
-  const a = anchorWorld(item);
-  if (!Number.isFinite(a[0]) || !Number.isFinite(a[1])) return null;
+  const a = unplaced ? standInPoint(body) : anchorWorld(item);
   return (
     <Group x={a[0] * scale} y={-a[1] * scale} hit={{ type: "element", id }}>
       <Shape sceneFunc={sceneFunc(prims)} hitFunc={hit} perfectDrawEnabled={false} />

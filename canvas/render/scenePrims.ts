@@ -4,10 +4,11 @@
 import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
 import type { Scene } from "../scene";
+import { isFinitePoint } from "../geometry/polygon";
 import { placeElementLabels, shiftTexts, type LabelShifts } from "./labels";
 import { translate, type Prim } from "./prims";
 import { resultPrims, supportStates } from "./results";
-import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, type DrawState } from "./symbols";
+import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, standInPoint, unplacedPrims, type DrawState } from "./symbols";
 
 // An element's primitives depend only on its scene object (which the editor replaces when it
 // changes), its body's (a pin or fixed support faces away from the body's edge), the zoom, the
@@ -38,10 +39,15 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
     groups.push({ id: b.id, kind: "body", prims });
   }
   for (const item of scene.items) {
-    const a = anchorWorld(item);
-    if (!Number.isFinite(a[0]) || !Number.isFinite(a[1])) continue;
     const found = scene.byId.get(item.body);
     const body = found?.kind === "body" ? found : undefined;
+    const a = anchorWorld(item);
+    if (!isFinitePoint(a)) {
+      const at = standInPoint(body);
+      const { prims } = cachedPrims(item, [scale, units, body], () => translate(unplacedPrims(item, { units, scale }), [at[0] * scale, -at[1] * scale]));
+      groups.push({ id: item.id, kind: item.kind, prims });
+      continue;
+    }
     const state = states?.get(item.id);
     const { prims } = cachedPrims(item, [scale, units, state, body], () =>
       translate(itemPrims(item, { units, scale, groundSide: groundSideOf(item, body), state }), [a[0] * scale, -a[1] * scale]),

@@ -4,7 +4,7 @@
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
 import type { SceneBody, SceneItem, SceneElement } from "../scene";
-import { nearestOnOutline, outwardNormal, angleOf, pointInPolygon } from "../geometry/polygon";
+import { isFinitePoint, nearestOnOutline, outwardNormal, angleOf, pointInPolygon } from "../geometry/polygon";
 import { add, curvedArrow, dir, hatch, hollowArrow, line, mul, perp, solidArrow, sub, text, unit, zigzag, type Prim, type Pt } from "./prims";
 import { BODY_FILL, CAUTION, INK, INK_FAINT, PAPER_CARD } from "./palette";
 
@@ -215,6 +215,22 @@ function unreadablePrims(item: SceneItem, fields: string[], o: SymbolOptions): P
   if (o.showName !== false) lines.unshift(item.label || item.id);
   out.push(...labelAt([14, 0], [1, 0], lines, c, 10.5, { weight: 600 }).map((p, i) => (i === 0 && lines.length > 1 && p.t === "text" ? { ...p, italic: true, weight: 400 as const, color: INK_FAINT } : p)));
   return out;
+}
+
+/**
+ * An element whose own position cannot be worked out has nowhere to be drawn: it is marked where a
+ * reader will look for it (its body's centre of gravity), named, with the field to check.
+ */
+export function unplacedPrims(item: SceneItem, o: SymbolOptions): Prim[] {
+  return unreadablePrims(item, [item.kind === "distributed" ? "from" : "position"], o);
+}
+
+/** Where an element without a usable position is marked: its body's centre of gravity, else the mean of the body's corners, else the origin. */
+export function standInPoint(body: SceneBody | undefined): Vec2 {
+  if (!body) return [0, 0];
+  if (isFinitePoint(body.cg)) return body.cg;
+  const pts = body.outline.filter(isFinitePoint);
+  return pts.length ? [pts.reduce((t, p) => t + p[0], 0) / pts.length, pts.reduce((t, p) => t + p[1], 0) / pts.length] : [0, 0];
 }
 
 /** The symbol of an attached element, around its anchor (`from` for a distributed load). */

@@ -6,7 +6,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ActivityFeed } from "@/components/review/ActivityFeed";
 import { ReviewBadge } from "@/components/review/SignOff";
-import { Button, Crumb, Notice, Panel } from "@/components/shell/controls";
+import { Button, Crumb, Notice, Panel, buttonClass } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
 import { editorHref, VersionHistory } from "@/components/versions/VersionHistory";
 import { formatDateTime } from "@/components/workspaces/format";
@@ -105,7 +105,7 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
             {sketch.forkedFrom ? <ForkedFrom origin={sketch.forkedFrom} /> : null}
           </div>
           <div className="flex flex-wrap gap-2">
-            <Link href={editorHref(sketch.id, sketch.latestVersion, sketch.latestVersion)} className="rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft">
+            <Link href={editorHref(sketch.id, sketch.latestVersion, sketch.latestVersion)} className={buttonClass()}>
               {can(role, "version.save") ? "Open in the editor" : "Open (read only)"}
             </Link>
             {canFork ? (

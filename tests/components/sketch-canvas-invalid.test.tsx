@@ -26,23 +26,39 @@ function drawnTexts(): string[] {
   return out;
 }
 
+/** The washing-cart example on a canvas, drawn once. */
+async function cartOnCanvas() {
+  const editor = createEditorStore({ sketch: exampleById("washing-cart")!.sketch });
+  const { container } = render(
+    <EditorProvider editor={editor}>
+      <div style={{ width: 800, height: 600 }}>
+        <SketchCanvas interaction={createInteractionStore()} />
+      </div>
+    </EditorProvider>,
+  );
+  await waitFor(() => expect(container.querySelector("canvas")).not.toBeNull());
+  return editor;
+}
+
 describe("SketchCanvas with a field in error", () => {
   it("draws no NaN and marks the element: a dashed ring with a question mark and the field named", async () => {
     const warn = vi.spyOn(console, "warn");
-    const editor = createEditorStore({ sketch: exampleById("washing-cart")!.sketch });
-    const { container } = render(
-      <EditorProvider editor={editor}>
-        <div style={{ width: 800, height: 600 }}>
-          <SketchCanvas interaction={createInteractionStore()} />
-        </div>
-      </EditorProvider>,
-    );
-    await waitFor(() => expect(container.querySelector("canvas")).not.toBeNull());
+    const editor = await cartOnCanvas();
     editor.getState().apply(setField({ id: "lance", field: "angle", value: "phi + 5 deg" }) as Command<unknown>);
     editor.getState().select(["lance"]);
     await waitFor(() => expect(drawnTexts().some((t) => /angle: cannot be worked out/.test(t))).toBe(true));
     for (const layer of stage().getLayers()) layer.draw();
     const nan = warn.mock.calls.map((c) => String(c[0])).filter((m) => /NaN|not a valid/i.test(m));
     expect(nan).toEqual([]);
+  });
+
+  it("marks an element whose position cannot be worked out instead of leaving it out", async () => {
+    const warn = vi.spyOn(console, "warn");
+    const editor = await cartOnCanvas();
+    editor.getState().apply(setField({ id: "lance", field: ["at", 1], value: "nozzle_height" }) as Command<unknown>);
+    await waitFor(() => expect(drawnTexts().some((t) => /position: cannot be worked out/.test(t))).toBe(true));
+    expect(drawnTexts()).toContain("lance tip");
+    for (const layer of stage().getLayers()) layer.draw();
+    expect(warn.mock.calls.map((c) => String(c[0])).filter((m) => /NaN|not a valid/i.test(m))).toEqual([]);
   });
 });

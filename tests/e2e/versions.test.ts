@@ -107,7 +107,7 @@ describe("versioned sketches in the browser", () => {
   it("an outsider gets the not-found page and an editor that cannot open the sketch", async () => {
     const page = await as("outsider");
     await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
-    await page.getByText("No such workspace here").waitFor();
+    await page.getByText("No such sketch here").waitFor();
     expect(await page.content()).not.toContain("Bend on anchor");
     await page.goto(`${BASE_URL}/sketches/${sketchId}`);
     await page.getByTestId("unavailable-message").waitFor();

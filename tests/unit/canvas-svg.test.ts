@@ -113,6 +113,31 @@ describe("a field in error", () => {
   });
 });
 
+describe("a position in error", () => {
+  it("marks the element at its body's centre of gravity, named, with the field to check", () => {
+    const { sketch, result } = solved("washing-cart");
+    const broken = structuredClone(sketch);
+    const lance = broken.ports.find((p) => p.id === "lance")!;
+    lance.at = [lance.at[0], "nozzle_height"]; // no such parameter
+    const parsed = parseSketch(broken);
+    expect(parsed.ok).toBe(false); // the field is in error, the rest is read as the editor does
+    const scene = buildScene(broken, fieldValuesById(broken, parsed.fields, parsed.ok ? [] : parsed.errors));
+    const body = scene.byId.get(lance.body);
+    if (body?.kind !== "body") throw new Error("the lance's body");
+    const svg = renderSketchSvg(broken, result, { stale: true });
+    expect(svg).not.toMatch(/NaN|Infinity|undefined/);
+    const g = parse(svg).querySelector('g[data-id="lance"]')!;
+    expect(g).not.toBeNull();
+    const ring = g.querySelector("circle[stroke-dasharray]")!;
+    expect(ring).not.toBeNull();
+    expect([...g.querySelectorAll("text")].map((t) => t.textContent)).toEqual(["?", "lance tip", "position: cannot be worked out"]);
+    // the ring sits on the body's centre of gravity, in the drawing's pixels (y down)
+    const { groups } = scenePrims(scene, 120, "SI", null);
+    const circle = groups.find((x) => x.id === "lance")!.prims.find((p) => p.t === "circle");
+    expect(circle && circle.t === "circle" ? circle.c : null).toEqual([body.cg[0] * 120, -body.cg[1] * 120]);
+  });
+});
+
 describe("the result's labels keep off other texts", () => {
   it("in every example, no result label overlaps an element's label or another result label", async () => {
     for (const ex of EXAMPLES) {
