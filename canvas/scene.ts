@@ -88,6 +88,8 @@ export interface ScenePort extends Base {
   angle: number;
   massFlow: number;
   velocity: number;
+  /** momentum-flux factor β (1: uniform flow) */
+  beta: number;
   pressure: number;
   area?: number;
 }
@@ -195,9 +197,10 @@ export function sceneItem(kind: ElementKind, el: AnyElement, fv: FieldValues, bo
         area: opt("area"),
         density: opt("density"),
         volumeFlow: opt("volumeFlow"),
+        beta: opt("beta"),
       };
       const flow = portFlow(numeric, null);
-      return { ...base, kind, at: numeric.at, angle: numeric.angle, massFlow: flow.massFlow, velocity: flow.velocity, pressure: numeric.pressure ?? 0, area: numeric.area };
+      return { ...base, kind, at: numeric.at, angle: numeric.angle, massFlow: flow.massFlow, velocity: flow.velocity, beta: numeric.beta ?? 1, pressure: numeric.pressure ?? 0, area: numeric.area };
     }
     case "massSource":
       return { ...base, kind, at: e.at ? point(r, e.at, "at") : fallback, massFlow: r(e.massFlow, "massFlow") };

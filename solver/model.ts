@@ -192,7 +192,9 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
       forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: tag(`pressure at ${pname}`, fp), fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) });
     }
     const flow = flows.get(p.id)!;
-    const mv = flow.massFlow * flow.velocity * (p.kind === "outlet" ? 1 : -1) * fp;
+    // β: the momentum-flux correction factor of a velocity profile that is not uniform across the port
+    const beta = p.beta ?? 1;
+    const mv = beta * flow.massFlow * flow.velocity * (p.kind === "outlet" ? 1 : -1) * fp;
     if (mv !== 0) {
       const fx = mv * e[0];
       const fy = mv * e[1];
@@ -200,7 +202,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         id: p.id,
         body: body.id,
         kind: "momentum",
-        label: tag(p.kind === "outlet" ? `momentum out at ${pname}` : `momentum in at ${pname}`, fp),
+        label: tag(`momentum ${p.kind === "outlet" ? "out" : "in"} at ${pname}${beta === 1 ? "" : ` (β = ${Number(beta.toPrecision(4))})`}`, fp),
         fx,
         fy,
         m: 0,

@@ -59,6 +59,7 @@ const FIELD_KINDS: Record<string, Record<string, FieldKind>> = {
     area: "area",
     density: "density",
     volumeFlow: "volumeFlow",
+    beta: "ratio",
   },
   massSource: { massFlow: "massFlow" },
   motion: { ax: "acceleration", ay: "acceleration" },

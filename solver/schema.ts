@@ -8,7 +8,7 @@ export const FORMAT = "counterpoise.sketch";
 /** The newest format version this solver writes. Older files are migrated (solver/migrations).
  *  1: the published contract. 2: load groups, operating cases, combinations, saved sweeps,
  *  stability requirements. 3: the underlay. */
-export const CURRENT_VERSION = 3;
+export const CURRENT_VERSION = 4;
 
 // zod's own messages ("Invalid input: expected array, received object") name a type, not the
 // mistake. Every schema and check below that has no message of its own takes these words.
@@ -145,6 +145,7 @@ export const portSchema = z.strictObject(
     area: numeric.optional(),
     density: numeric.optional(),
     volumeFlow: numeric.optional(),
+    beta: numeric.optional(),
   },
   holding('a port { "id", "body", "kind", "at", "angle", … }'),
 );

@@ -63,6 +63,8 @@ export interface Port extends ElementBase {
   area?: number;
   density?: number;
   volumeFlow?: number;
+  /** momentum-flux correction factor β (1 for uniform flow across the port) */
+  beta?: number;
 }
 
 export interface MassSource extends ElementBase { massFlow: number; at?: Vec2 }

@@ -92,6 +92,8 @@ export function validateValues(sketch: Sketch): FieldError[] {
       (port.volumeFlow !== undefined && port.area !== undefined) ||
       port.massFlow === 0;
     if (hasMassFlow && !hasVelocity) err(p, `port "${port.id}" needs a velocity: give velocity, or density and area, or volumeFlow and area`);
+    if (port.beta !== undefined && !(port.beta >= 1 && port.beta <= 2))
+      err(`${p}.beta`, "must be from 1 to 2: the momentum-flux factor is 1 for flow uniform across the port, about 1.02 for turbulent pipe flow and 4/3 for laminar (it is never below 1)");
     if (port.pressure !== undefined && port.pressure !== 0 && port.area === undefined)
       err(`${p}.area`, `is required: port "${port.id}" has a gauge pressure, and its force is pressure × area`);
   });

@@ -13,6 +13,7 @@ const WORDS: Record<string, string> = {
   cg: "centre of gravity",
   massFlow: "mass flow",
   volumeFlow: "volume flow",
+  beta: "momentum-flux factor",
   mu: "friction",
   rotationalStiffness: "rotational stiffness",
   from: "start",

@@ -135,7 +135,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
       const to = outlet ? add(base, mul(d, 50)) : add(base, mul(d, -6));
       prims.push(...dashedArrow(from, to, INK_SOFT));
       const mid: Pt = [(from[0] + to[0]) / 2 + n[0] * 10, (from[1] + to[1]) / 2 + n[1] * 10];
-      prims.push(...labelAt(mid, n, [`ṁV ${fq(Math.hypot(t.fx, t.fy), "force", o.units)}`], INK_SOFT, 10.5));
+      prims.push(...labelAt(mid, n, [`${port.beta === 1 ? "" : "β"}ṁV ${fq(Math.hypot(t.fx, t.fy), "force", o.units)}`], INK_SOFT, 10.5));
     }
   }
 

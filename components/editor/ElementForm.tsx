@@ -9,7 +9,7 @@ import { insertCorner, removeCorner } from "@/canvas/commands/shape";
 import { moveCentreOfGravity } from "@/canvas/commands/move";
 import { setForceForm } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
-import { convert, formatQuantity } from "@/solver/units";
+import { convert, formatNumber, formatQuantity } from "@/solver/units";
 import { FORCE_COMPONENTS, FORCE_POLAR, FORM, type FieldDef, type NumberFieldDef, type PointFieldDef } from "./fieldDefs";
 import { NumericField } from "./NumericField";
 import { TextField } from "./TextField";
@@ -140,13 +140,13 @@ function ForceFields({ id, el, commit }: { id: string; el: Record<string, unknow
 }
 
 function PortFlow({ id }: { id: string }) {
-  const item = useScene((s) => s.byId.get(id)) as { massFlow: number; velocity: number } | undefined;
+  const item = useScene((s) => s.byId.get(id)) as { massFlow: number; velocity: number; beta: number } | undefined;
   const units = useEditor((s) => s.units);
   if (!item || !Number.isFinite(item.massFlow)) return null;
   return (
     <p className="num rounded bg-paper px-2 py-1 text-[11.5px] text-ink-soft">
-      Resolved: ṁ = {formatQuantity(item.massFlow, "massFlow", units)}, V = {formatQuantity(item.velocity, "velocity", units)}, momentum flux ṁV ={" "}
-      {formatQuantity(item.massFlow * item.velocity, "force", units)}
+      Resolved: ṁ = {formatQuantity(item.massFlow, "massFlow", units)}, V = {formatQuantity(item.velocity, "velocity", units)}, momentum flux{" "}
+      {item.beta === 1 ? "ṁV" : `βṁV (β = ${formatNumber(item.beta)})`} = {formatQuantity(item.beta * item.massFlow * item.velocity, "force", units)}
     </p>
   );
 }

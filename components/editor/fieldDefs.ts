@@ -73,6 +73,14 @@ function portFields(way: string): FieldDef[] {
     { key: "area", label: "Area", display: "area", optional: true, example: "pi/4 * (50 mm)^2" },
     { key: "density", label: "Density ρ", display: "density", optional: true, example: "998 kg/m^3" },
     { key: "volumeFlow", label: "Volume flow", display: "volumeFlow", optional: true, example: "600 lpm" },
+    {
+      key: "beta",
+      label: "Momentum-flux factor β",
+      display: "ratio",
+      optional: true,
+      example: "1.02",
+      hint: "Blank: 1, flow uniform across the port (a free jet). About 1.02 for turbulent pipe flow, 4/3 for laminar.",
+    },
   ];
 }
 

@@ -172,7 +172,7 @@ export function HandCheckView() {
         </button>
       </div>
       <p className="mb-2 text-[11.5px] text-ink-faint">
-        Steady flow through a control volume fixed to the body: ΣF = Σ(ṁV)out − Σ(ṁV)in and ΣM_P = Σ r × ṁV. Forces in x and y, moments counter-clockwise positive.
+        Steady flow through a control volume fixed to the body: ΣF = Σ(ṁV)out − Σ(ṁV)in and ΣM_P = Σ r × ṁV (each port&apos;s ṁV times its momentum-flux factor β when one is given). Forces in x and y, moments counter-clockwise positive.
       </p>
       {/* three sums side by side only where each has room for its terms' names; else one under another */}
       {/* faded like the reactions table while the result shown is an earlier sketch's */}

@@ -69,6 +69,7 @@ const FIELD_QUANTITY: Record<string, Quantity | "rotationalStiffness"> = {
   area: "area",
   density: "density",
   volumeFlow: "volumeFlow",
+  beta: "ratio",
   gravity: "acceleration",
   ax: "acceleration",
   ay: "acceleration",

@@ -5,6 +5,7 @@ import { CURRENT_VERSION, FORMAT } from "../schema";
 import type { FieldError } from "../types";
 import { loadCases } from "./002-load-cases";
 import { underlay } from "./003-underlay";
+import { momentumFactor } from "./004-momentum-factor";
 
 export interface Migration {
   from: number;
@@ -13,7 +14,7 @@ export interface Migration {
   up: (doc: Record<string, unknown>) => Record<string, unknown>;
 }
 
-export const MIGRATIONS: readonly Migration[] = [loadCases, underlay];
+export const MIGRATIONS: readonly Migration[] = [loadCases, underlay, momentumFactor];
 
 export type MigrateResult = { ok: true; doc: Record<string, unknown>; applied: number[] } | { ok: false; errors: FieldError[] };
 

@@ -51,6 +51,27 @@ describe("properties form: the schema's refusals at the field", () => {
     await user.type(x, "2*r");
     expect(x).toHaveAccessibleDescription("= 0.5 m");
   }, 15_000);
+
+  it("a port's momentum-flux factor β: blank is 1, 4/3 multiplies the momentum flux, below 1 is refused at the field", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor({
+      ...beam(),
+      ports: [{ id: "p1", body: "b1", kind: "outlet", at: [4, 0.5], angle: 0, massFlow: 3, velocity: 20, label: "jet" }],
+    });
+    await user.click(outlineRow(/Outlet p1/));
+    const form = within(screen.getByTestId("element-form"));
+    // ṁV = 3 kg/s × 20 m/s = 60 N
+    expect(form.getByText(/Resolved:/).textContent).toMatch(/momentum flux ṁV = 60(\.0+)? N/);
+    const beta = form.getByLabelText("Momentum-flux factor β");
+    await user.type(beta, "4/3");
+    expect(beta).toHaveAccessibleDescription("= 1.333");
+    await waitFor(() => expect((storedSketch(mem)!.ports[0] as { beta?: unknown }).beta).toBe("4/3"), { timeout: 3000 });
+    await waitFor(() => expect(form.getByText(/Resolved:/).textContent).toMatch(/βṁV \(β = 1\.333\) = 80(\.0+)? N/));
+    await user.clear(beta);
+    await user.type(beta, "0.9");
+    expect(beta).toHaveAttribute("aria-invalid", "true");
+    expect(beta).toHaveAccessibleDescription(/must be from 1 to 2/);
+  }, 15_000);
 });
 
 describe("parameters table", () => {

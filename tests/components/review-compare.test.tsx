@@ -6,7 +6,7 @@ import { renderSketchSvg, sharedFrame } from "@/canvas/render/svg";
 import { ChangesTable, ReactionsTable } from "@/components/review/CompareTables";
 import { changeCount, compareSketches } from "@/lib/review/compare";
 import { parseSketch, solve } from "@/solver";
-import type { SketchFile } from "@/solver/schema";
+import { CURRENT_VERSION, type SketchFile } from "@/solver/schema";
 import { fixture } from "../api/sketch-fixtures";
 
 const before = fixture("fire-monitor-trailer") as unknown as SketchFile;
@@ -41,7 +41,7 @@ describe("compareSketches in US customary units", () => {
 describe("changes to the design studies", () => {
   const withStudies = (): SketchFile => ({
     ...structuredClone(before),
-    version: 3,
+    version: CURRENT_VERSION,
     cases: [
       { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
       { id: "dead", name: "Dead", factors: { flow: 0 } },

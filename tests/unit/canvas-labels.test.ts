@@ -29,7 +29,7 @@ const crowded = {
     { id: "Q", label: "side load", body: "frame", kind: "force", at: [0.05, 0.75], angle: 0, magnitude: "800 N" },
   ],
   ports: [{ id: "jet", label: "nozzle", body: "frame", kind: "outlet", at: [2, 0.7], angle: 20, massFlow: "4 kg/s", velocity: "30 m/s", pressure: "50 kPa", area: "0.001 m^2" }],
-} as SketchFileInput;
+} as unknown as SketchFileInput; // an older format version: read through the migrations
 
 function drawn(scale: number) {
   const parsed = parseSketch(crowded);

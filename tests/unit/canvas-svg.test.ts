@@ -113,6 +113,26 @@ describe("a field in error", () => {
   });
 });
 
+describe("a port with a momentum-flux factor", () => {
+  it("labels its flux βṁV with the value that includes β; ports without one keep ṁV", () => {
+    const { sketch } = solved("washing-cart");
+    const withBeta = structuredClone(sketch);
+    const lance = withBeta.ports.find((p) => p.id === "lance")!;
+    lance.beta = 1.25;
+    const before = solveFile(sketch) as SolveResult;
+    const after = solveFile(withBeta) as SolveResult;
+    const flux = (r: SolveResult) => {
+      const t = r.equations[lance.body].momentum.find((m) => m.id === "lance")!;
+      return Math.hypot(t.fx, t.fy);
+    };
+    expect(flux(after) / flux(before)).toBeCloseTo(1.25, 12);
+    const texts = (svg: string) => [...parse(svg).querySelectorAll("g.results text")].map((t) => t.textContent ?? "");
+    const labelled = texts(renderSketchSvg(withBeta, after)).filter((t) => /ṁV/.test(t));
+    expect(labelled.some((t) => t.startsWith("βṁV "))).toBe(true);
+    expect(texts(renderSketchSvg(sketch, before)).filter((t) => /ṁV/.test(t)).every((t) => t.startsWith("ṁV "))).toBe(true);
+  });
+});
+
 describe("a position in error", () => {
   it("marks the element at its body's centre of gravity, named, with the field to check", () => {
     const { sketch, result } = solved("washing-cart");

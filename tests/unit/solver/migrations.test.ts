@@ -4,6 +4,7 @@ import { MIGRATIONS, migrateSketch, type Migration } from "@/solver/migrations";
 import { CURRENT_VERSION } from "@/solver/schema";
 import { loadCases } from "@/solver/migrations/002-load-cases";
 import { underlay } from "@/solver/migrations/003-underlay";
+import { momentumFactor } from "@/solver/migrations/004-momentum-factor";
 import { loadFixture } from "./helpers";
 
 describe("migrateSketch", () => {
@@ -54,6 +55,17 @@ describe("each step of the chain", () => {
     expect(r).toEqual({ ok: true, doc: { ...doc, version: 3 }, applied: [2] });
   });
 
+  it("3 → 4 (momentum-flux factor): a version-3 file with an underlay gets version 4, unchanged otherwise, and its ports keep β = 1", async () => {
+    const doc = { ...loadFixture("pump-skid-discharge.json"), version: 3, underlay: { upload: "00000000-0000-4000-8000-000000000001", width: 10, height: 10, origin: [0, 0], metresPerPixel: 0.01 } };
+    const r = migrateSketch(doc, [loadCases, underlay, momentumFactor], 4);
+    expect(r).toEqual({ ok: true, doc: { ...doc, version: 4 }, applied: [3] });
+    const { parseSketch } = await import("@/solver");
+    const p = parseSketch(doc);
+    if (!p.ok) throw new Error(JSON.stringify(p.errors));
+    expect(p.sketch.ports.length).toBeGreaterThan(0);
+    expect(p.sketch.ports.every((port) => port.beta === undefined)).toBe(true);
+  });
+
   it("every version-1 fixture still solves exactly as before: migrated, parsed, solved", async () => {
     const { readdirSync } = await import("node:fs");
     const { FIXTURES } = await import("./helpers");
@@ -64,7 +76,7 @@ describe("each step of the chain", () => {
       const p = parseSketch(doc);
       expect(p.ok, f).toBe(true);
       if (!p.ok) continue;
-      expect(p.migratedFrom).toEqual([1, 2]);
+      expect(p.migratedFrom).toEqual([1, 2, 3]);
       expect(p.file.version).toBe(CURRENT_VERSION);
       // the same file marked as current (no migration) gives the identical result
       const q = parseSketch({ ...doc, version: CURRENT_VERSION });
