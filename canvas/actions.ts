@@ -4,7 +4,8 @@ import type { Vec2 } from "@/solver/types";
 import type { EditorStores } from "./context";
 import type { PointerController } from "./konva/pointer";
 import type { Command } from "./commands/define";
-import { deleteElements, duplicateElements } from "./commands/elements";
+import { deleteElements, duplicateElements, pasteElements } from "./commands/elements";
+import { copyFragment, fragmentText, pasteNotice, planPaste, readFragment } from "./clipboard";
 import { moveElement } from "./commands/move";
 import { rotateElement } from "./commands/shape";
 import { DIRECTED, findElement, type ElementKind } from "./model/elements";
@@ -46,6 +47,8 @@ export interface Action {
   /** for the tray: the element kind it places */
   kind?: ElementKind;
   friction?: boolean;
+  /** copy, cut and paste: their keys are left to the browser, whose clipboard events run them */
+  clipboard?: boolean;
   enabled?: (ctx: ActionContext) => boolean;
   /** what the status line says when the action is asked for but not enabled */
   disabledNotice?: string;
@@ -211,6 +214,39 @@ export const ACTIONS: readonly Action[] = [
     },
   },
   {
+    id: "edit.copy",
+    label: "Copy",
+    group: "edit",
+    shortcuts: ["Mod+C"],
+    clipboard: true,
+    enabled: hasSelection,
+    run: (c) => writeClipboard(c, copySelection(c, false)),
+  },
+  {
+    id: "edit.cut",
+    label: "Cut",
+    group: "edit",
+    shortcuts: ["Mod+X"],
+    clipboard: true,
+    enabled: hasSelection,
+    run: (c) => writeClipboard(c, copySelection(c, true)),
+  },
+  {
+    id: "edit.paste",
+    label: "Paste",
+    group: "edit",
+    shortcuts: ["Mod+V"],
+    clipboard: true,
+    run: (c) => {
+      const clip = typeof navigator !== "undefined" ? navigator.clipboard : undefined;
+      if (!clip?.readText) return ed(c).notify(PASTE_BY_KEYS);
+      clip.readText().then(
+        (text) => pasteText(c, text) || ed(c).notify("The clipboard holds no Counterpoise elements."),
+        () => ed(c).notify(PASTE_BY_KEYS),
+      );
+    },
+  },
+  {
     id: "edit.selectAll",
     label: "Select all",
     group: "edit",
@@ -292,6 +328,48 @@ export function actionTitle(id: string, label?: string): string {
   const a = actionById(id);
   const key = a.shortcuts?.[0];
   return key ? `${label ?? a.label} (${shortcutLabel(key)})` : (label ?? a.label);
+}
+
+// ---------------------------------------------------------------- clipboard
+
+const PASTE_BY_KEYS = "The browser did not let the page read the clipboard: press Ctrl+V (⌘V) to paste.";
+
+/** The selection as clipboard text (null when nothing is selected); a cut then deletes it. */
+export function copySelection(ctx: ActionContext, cut: boolean): string | null {
+  const s = ed(ctx);
+  const fragment = copyFragment(s.sketch, s.selection);
+  if (!fragment) return null;
+  const n = fragment.bodies.length + fragment.supports.length + fragment.loads.length + fragment.ports.length + fragment.massSources.length;
+  if (cut && !s.apply(deleteElements({ ids: s.selection }) as Command<unknown>)) return null;
+  s.notify(`${cut ? "Cut" : "Copied"} ${n} element${n === 1 ? "" : "s"}: paste them here or in another sketch.`);
+  return fragmentText(fragment);
+}
+
+function writeClipboard(ctx: ActionContext, text: string | null) {
+  if (text === null) return;
+  navigator.clipboard?.writeText(text).catch(() => ed(ctx).notify("The browser did not let the page write to the clipboard: press Ctrl+C (⌘C) instead."));
+}
+
+/**
+ * Clipboard text pasted into the sketch: copied elements or a whole sketch file's text. False when
+ * the text is not ours (the page keeps its own paste); true once it has been handled, or refused
+ * with the reason in the status line.
+ */
+export function pasteText(ctx: ActionContext, text: string): boolean {
+  const read = readFragment(text);
+  if (!read) return false;
+  const s = ed(ctx);
+  if (!read.ok) {
+    s.notify(read.reason);
+    return true;
+  }
+  // loose supports, loads and ports go on the selected body (or the body of a selected element)
+  const picked = s.selection.map((id) => findElement(s.sketch, id)).find(Boolean);
+  const attachTo = picked ? (picked.group === "bodies" ? picked.el.id : (picked.el as { body: string }).body) : undefined;
+  const out = planPaste(s.sketch, read.fragment, { attachTo, step: gridStep(s.view.scale) });
+  if (!out.ok) s.notify(out.reason);
+  else if (s.apply(pasteElements(out.plan) as Command<unknown>)) s.notify(pasteNotice(out.plan));
+  return true;
 }
 
 // ---------------------------------------------------------------- shortcuts

@@ -1,5 +1,5 @@
 // Adding, deleting, duplicating and re-attaching elements.
-import type { SketchFile } from "@/solver/schema";
+import type { Numeric, SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
 import { childrenOf, elementIndex, findElement, GROUP_OF, nextId, type AnyElement, type Attached, type ElementKind, type Group } from "../model/elements";
 import { defineCommand, edit, plural } from "./define";
@@ -114,4 +114,19 @@ export const attachToBody = defineCommand<{ ids: string[]; body: string }>({
       for (const l of todo) ((d[l!.group] as AnyElement[])[l!.index] as Attached).body = body;
     });
   },
+});
+
+/** Copied elements (and the parameters they read that the sketch lacks) put in, as planned by `planPaste`. */
+export const pasteElements = defineCommand<{ copies: Array<{ group: Group; el: AnyElement }>; parameters: Record<string, Numeric> }>({
+  name: "pasteElements",
+  label: ({ copies }) => `Paste ${plural(copies.length, "element")}`,
+  undoable: true,
+  run: (sketch, { copies, parameters }) => {
+    if (!copies.length || copies.some((c) => findElement(sketch, c.el.id))) return sketch;
+    return edit(sketch, (d) => {
+      for (const [name, expr] of Object.entries(parameters)) if (!(name in (d.parameters ?? {}))) d.parameters = { ...(d.parameters ?? {}), [name]: expr };
+      for (const c of copies) (d[c.group] as AnyElement[]).push(structuredClone(c.el));
+    });
+  },
+  select: (_before, after, { copies }) => copies.map((c) => c.el.id).filter((id) => findElement(after, id)),
 });

@@ -2,7 +2,7 @@
 // The keyboard: registered actions by their shortcuts, plus the keys a drag or a drawing
 // needs (Escape cancels, Enter closes a polygon, Space held pans).
 import { useEffect } from "react";
-import { actionForKey, type ActionContext } from "@/canvas/actions";
+import { actionForKey, copySelection, pasteText, type ActionContext } from "@/canvas/actions";
 import type { InteractionStore } from "@/canvas/konva/interaction";
 
 function typingIn(target: EventTarget | null): boolean {
@@ -55,7 +55,8 @@ export function useShortcuts(getCtx: () => ActionContext, interaction: Interacti
       const onControl = (e.target as HTMLElement | null)?.closest?.("button, a, [role=menu]");
       if (onControl && (e.key === "Enter" || e.key === " " || e.key.startsWith("Arrow"))) return;
       const action = actionForKey(e);
-      if (!action) return;
+      // copy, cut and paste reach the sketch through the browser's clipboard events (below)
+      if (!action || action.clipboard) return;
       if (action.enabled && !action.enabled(ctx)) {
         if (action.group === "edit") e.preventDefault();
         // say why nothing happened (P with no body yet), rather than ignore the key
@@ -69,10 +70,29 @@ export function useShortcuts(getCtx: () => ActionContext, interaction: Interacti
       if (e.key === " ") interaction.setState({ spaceHeld: false });
     };
     const blur = () => interaction.setState({ spaceHeld: false });
+    // text selected on the page (a results table, say) copies as text, as anywhere else
+    const textSelected = () => !!window.getSelection?.()?.toString();
+    const copy = (e: ClipboardEvent) => {
+      if (e.defaultPrevented || typingIn(e.target) || textSelected()) return;
+      const text = copySelection(getCtx(), e.type === "cut");
+      if (text === null || !e.clipboardData) return;
+      e.clipboardData.setData("text/plain", text);
+      e.preventDefault();
+    };
+    const paste = (e: ClipboardEvent) => {
+      if (e.defaultPrevented || typingIn(e.target)) return;
+      if (pasteText(getCtx(), e.clipboardData?.getData("text/plain") ?? "")) e.preventDefault();
+    };
+    window.addEventListener("copy", copy);
+    window.addEventListener("cut", copy);
+    window.addEventListener("paste", paste);
     window.addEventListener("keydown", down);
     window.addEventListener("keyup", up);
     window.addEventListener("blur", blur);
     return () => {
+      window.removeEventListener("copy", copy);
+      window.removeEventListener("cut", copy);
+      window.removeEventListener("paste", paste);
       window.removeEventListener("keydown", down);
       window.removeEventListener("keyup", up);
       window.removeEventListener("blur", blur);
