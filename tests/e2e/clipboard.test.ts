@@ -35,6 +35,8 @@ describe("copy and paste", () => {
     await page.keyboard.press("Control+v");
     await expect.poll(count).toBe(2 * before);
     await expect.poll(() => page.getByTestId("notice").textContent()).toMatch(new RegExp(`Pasted ${n} elements`));
+    // the copy is solved as a body of its own: two status sentences, the same reactions twice
+    await expect.poll(() => page.getByTestId("status").textContent()).toMatch(/Pump skid: Holds[\s\S]*Pump skid: Holds/);
     await shot(page, "clipboard-01-pasted-beside");
   });
 
