@@ -31,10 +31,16 @@ export function zoomAt(v: View, factor: number, at: Vec2): View {
 
 export type Margins = number | { top: number; right: number; bottom: number; left: number };
 
-/** Two opposite margins, shrunk in proportion when together they take more than 70% of `size`. */
+/**
+ * Two opposite margins, cut when together they take more than 70% of `size`: the smaller keeps
+ * what it needs (up to half the room), the larger gets the rest — so only one side's labels reach
+ * past the edge, not both.
+ */
 function squeeze(a: number, b: number, size: number): [number, number] {
   const room = size * 0.7;
-  return a + b > room ? [(a * room) / (a + b), (b * room) / (a + b)] : [a, b];
+  if (a + b <= room) return [a, b];
+  const small = Math.min(Math.min(a, b), room / 2);
+  return a <= b ? [small, room - small] : [room - small, small];
 }
 
 /** The view that shows a box of the world inside a screen of width × height, leaving margins (px). */
@@ -42,8 +48,8 @@ export function fitView(box: Box, width: number, height: number, margin: Margins
   const given = typeof margin === "number" ? { top: margin, right: margin, bottom: margin, left: margin } : margin;
   if (!Number.isFinite(box.minX) || width <= 0 || height <= 0) return { ...DEFAULT_VIEW, y: Math.max(200, height * 0.7) };
   // on a small drawing area the labels' room could leave the body a sliver off to one side: the
-  // margins then shrink, in proportion, to leave it at least 30% of each direction (labels may
-  // then reach past the edge, but the body is drawn whole and in the middle)
+  // margins then shrink to leave it at least 30% of each direction (the labels of one side may
+  // then reach past the edge, but the body is drawn whole)
   const [left, right] = squeeze(given.left, given.right, width);
   const [top, bottom] = squeeze(given.top, given.bottom, height);
   const m = { left, right, top, bottom };

@@ -158,4 +158,26 @@ describe("fit to view", () => {
     expect(left).toBeGreaterThanOrEqual(0);
     expect(right).toBeLessThanOrEqual(W);
   });
+
+  it("on a phone-sized canvas the labels of one side may reach past the edge, never both: every example's reactions are drawn whole", async () => {
+    const { EXAMPLES } = await import("@/canvas/examples");
+    const { fitScene } = await import("@/canvas/geometry/fit");
+    const { scenePrims } = await import("@/canvas/render/scenePrims");
+    const { primsBox } = await import("@/canvas/render/prims");
+    const { solve } = await import("@/solver/index");
+    const [W, H] = [390, 446];
+    for (const ex of EXAMPLES) {
+      const parsed = parseSketch(ex.sketch);
+      if (!parsed.ok) throw new Error(ex.id);
+      const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+      const result = solve(parsed.sketch);
+      const v = fitScene(scene, W, H, { result });
+      const { groups, results } = scenePrims(scene, v.scale, "SI", result);
+      const r = primsBox(results);
+      expect(v.x + r.minX, ex.id).toBeGreaterThanOrEqual(0);
+      expect(v.x + r.maxX, ex.id).toBeLessThanOrEqual(W);
+      const all = primsBox([...results, ...groups.flatMap((g) => g.prims)]);
+      expect(v.x + all.minX >= 0 || v.x + all.maxX <= W, `${ex.id}: cut on both sides`).toBe(true);
+    }
+  });
 });
