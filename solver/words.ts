@@ -11,8 +11,11 @@ const KIND_WORD: Record<Support["kind"], string> = {
 };
 
 /** "Contact s2 (rear foot)" or "Contact s2" */
+/** "Contact s1 (rear foot)"; a label that already starts with the id stands alone: "Contact axle (both wheels)". */
 export function describeSupport(s: Pick<Support, "kind" | "id" | "label">): string {
-  return s.label ? `${KIND_WORD[s.kind]} ${s.id} (${s.label})` : `${KIND_WORD[s.kind]} ${s.id}`;
+  if (!s.label) return `${KIND_WORD[s.kind]} ${s.id}`;
+  const startsWithId = s.label.toLowerCase().startsWith(s.id.toLowerCase()) && !/[\p{L}\p{N}_]/u.test(s.label.charAt(s.id.length));
+  return startsWithId ? `${KIND_WORD[s.kind]} ${s.label}` : `${KIND_WORD[s.kind]} ${s.id} (${s.label})`;
 }
 
 export function fmtForce(n: number): string {

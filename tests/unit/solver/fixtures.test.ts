@@ -349,8 +349,16 @@ describe("the hand-check sums", () => {
     expect(describeFreeMotion({ kind: "translation", angle: 90 })).toBe("nothing resists motion in y");
     expect(describeFreeMotion({ kind: "translation", angle: 35 })).toBe("nothing resists motion along 35°");
     expect(describeFreeMotion({ kind: "rotation", about: [1.6, 0] }, [{ kind: "pin", id: "front", label: "front pin", at: [1.6, 0] }])).toBe(
-      "nothing resists rotation about pin front (front pin) (1.6, 0)",
+      "nothing resists rotation about pin front pin (1.6, 0)",
     );
+    expect(describeFreeMotion({ kind: "rotation", about: [1.6, 0] }, [{ kind: "pin", id: "s2", label: "nose pin", at: [1.6, 0] }])).toBe(
+      "nothing resists rotation about pin s2 (nose pin) (1.6, 0)",
+    );
+    // a label that starts with the id is not said twice
+    const { describeSupport } = await import("@/solver/words");
+    expect(describeSupport({ kind: "contact", id: "axle", label: "axle (both wheels)" })).toBe("Contact axle (both wheels)");
+    expect(describeSupport({ kind: "contact", id: "rear", label: "rearward pad" })).toBe("Contact rear (rearward pad)");
+    expect(describeSupport({ kind: "tie", id: "g1", label: "" })).toBe("Tie g1");
     expect(run("skid-vertical-mechanism.json").warnings[0].message).toBe("Skid: nothing resists motion in x, but the loads do not push that way");
   });
 });
