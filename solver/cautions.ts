@@ -12,7 +12,7 @@ export const CAUTIONS: readonly string[] = [
 
 export const ASSUMPTIONS: readonly string[] = [
   "Rigid body; supports are stiff springs (their stiffness only matters when the supports are statically indeterminate).",
-  "Steady flow through a control volume fixed to the body; flow is uniform and normal to each port face.",
+  "Steady flow through a control volume fixed to the body; flow is normal to each port face and uniform across it unless the port gives a momentum-flux factor β.",
   "Port pressures are gauge pressures; the surroundings are at ambient pressure.",
   "No friction unless a coefficient is given on a contact.",
   "Small displacements: geometry is taken as drawn.",
