@@ -128,7 +128,11 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   const tag = (label: string, f: number) => (f === 1 ? label : `${label} × ${Number(f.toPrecision(6))}`);
 
   const fw = factorOf(body.group, DEFAULT_GROUPS.weight);
-  if (m * g * fw !== 0) forceTerms.push({ id: body.id, body: body.id, kind: "weight", label: tag(`weight of ${name}`, fw), fx: 0, fy: -m * g * fw, m: 0, at: cg });
+  if (m * g * fw !== 0) {
+    // down the page unless the sketch turns gravity (a body on a slope, a tilt-table check)
+    const [gx, gy] = direction(sketch.gravityAngle ?? -90);
+    forceTerms.push({ id: body.id, body: body.id, kind: "weight", label: tag(`weight of ${name}`, fw), fx: m * g * fw * gx, fy: m * g * fw * gy, m: 0, at: cg });
+  }
 
   for (const l of sketch.loads) {
     if (l.body !== body.id) continue;

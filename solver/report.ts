@@ -282,7 +282,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
     ],
     rows,
     notes: [
-      "Overturning: factor = restoring over overturning moment of the applied loads about the contact the body would tip about.",
+      "Overturning: factor = restoring over overturning moment of the applied loads about the contact the body would tip about, each load resolved across and along that contact's base (a weight on a slope restores by W·cos θ and overturns by W·sin θ).",
       "Sliding: factor = friction the bearing contacts can give (Σ μ·n) over the tangential force they must resist (|Σ t|).",
     ],
   };
@@ -378,7 +378,10 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
     });
   }
   const gv = parsed.fields.gravity;
-  rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (acts in −y)`]);
+  const ga = parsed.fields.gravityAngle;
+  const angle = ga && "value" in ga ? ga.value : -90;
+  const acts = angle === -90 ? "acts in −y" : `acts at ${Number(angle.toPrecision(6))}° from +x, ${Number(Math.abs(angle + 90).toPrecision(4))}° off −y${typeof parsed.file.gravityAngle === "string" ? ` (${parsed.file.gravityAngle})` : ""}`;
+  rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (${acts})`]);
   return {
     id: "inputs",
     title: "Elements (as typed; expressions with their values in SI units, angles in degrees)",

@@ -67,7 +67,7 @@ const FIELD_KINDS: Record<string, Record<string, FieldKind>> = {
 const POINT_FIELDS = new Set(["at", "from", "to", "cg"]);
 
 /** The kind of a numeric field by its name alone (no name means two things in the format). */
-export const FIELD_KIND_BY_NAME: Readonly<Record<string, FieldKind>> = Object.assign({ gravity: "acceleration" as FieldKind }, ...Object.values(FIELD_KINDS));
+export const FIELD_KIND_BY_NAME: Readonly<Record<string, FieldKind>> = Object.assign({ gravity: "acceleration" as FieldKind, gravityAngle: "angle" as FieldKind }, ...Object.values(FIELD_KINDS));
 
 export function resolveSketch(file: SketchFile): ResolveOutput {
   const params = resolveParameters(file.parameters);
@@ -169,6 +169,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
     errors.push({ path: "gravity", message: NEGATIVE_GRAVITY });
     fields.gravity = { error: NEGATIVE_GRAVITY };
   }
+  if (file.gravityAngle !== undefined) evalField(file.gravityAngle, "angle", "gravityAngle", top, "gravityAngle");
 
   const sketch: Sketch = {
     format: file.format,
@@ -176,6 +177,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
     title: file.title,
     description: file.description,
     gravity: top.gravity as number,
+    ...(file.gravityAngle !== undefined ? { gravityAngle: top.gravityAngle as number } : {}),
     parameters: Object.fromEntries(
       Object.entries(parameterValues).flatMap(([n, v]) => ("si" in v ? [[n, v.si]] : [])),
     ),
@@ -188,7 +190,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
   if (file.motion) sketch.motion = evalElement(file.motion, "motion", "motion") as Sketch["motion"];
   for (const w of parameterWarnings) w.ids.push(...elementsReading(w.name, params.order, readers));
   // gravity is a top-level slot: re-point its target at the sketch itself
-  for (const s of slots) if (s.path === "gravity") s.target = sketch as unknown as Record<string, unknown>;
+  for (const s of slots) if (s.path === "gravity" || s.path === "gravityAngle") s.target = sketch as unknown as Record<string, unknown>;
 
   return {
     sketch,

@@ -8,7 +8,7 @@ export const FORMAT = "counterpoise.sketch";
 /** The newest format version this solver writes. Older files are migrated (solver/migrations).
  *  1: the published contract. 2: load groups, operating cases, combinations, saved sweeps,
  *  stability requirements. 3: the underlay. */
-export const CURRENT_VERSION = 4;
+export const CURRENT_VERSION = 5;
 
 // zod's own messages ("Invalid input: expected array, received object") name a type, not the
 // mistake. Every schema and check below that has no message of its own takes these words.
@@ -260,6 +260,8 @@ export const sketchSchema = z.strictObject(
     title: text(300).optional(),
     description: text(5000).optional(),
     gravity: numeric.optional(),
+    /** the direction gravity acts in, degrees from +x (default −90: down the page) */
+    gravityAngle: numeric.optional(),
     parameters: z.record(parameterName, numeric, holding('an object of parameters { "name": "expression", … }')).optional(),
     bodies: z.array(bodySchema, holding("a list of bodies [{ … }, …]")).default([]),
     supports: z.array(supportSchema, holding("a list of supports [{ … }, …]")).default([]),

@@ -1,6 +1,8 @@
 // Factors of safety per body (common practice):
 //  - against overturning: the restoring over the overturning moment of the applied loads about
-//    the contact the body would tip about (each contact and each sense of turning is tried; a
+//    the contact the body would tip about, each load resolved across and along that contact's
+//    base (so a weight on a slope restores by W·cos θ and overturns by W·sin θ, and an inclined
+//    jet's two components count apart) (each contact and each sense of turning is tried; a
 //    mode counts only if every other support lets it happen: other contacts open, nothing
 //    bilateral or pulling holds it), the smallest ratio governs;
 //  - against sliding: the friction the bearing contacts can give, Σ μ·n, over the tangential
@@ -76,9 +78,26 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
       let restoring = 0;
       let overturning = 0;
       const add = (work: number) => (work > 0 ? (overturning += work) : (restoring -= work));
-      for (const t of model.forceTerms) add(sense * ((t.at ? momentOf(t.at[0] - P[0], t.at[1] - P[1], t.fx, t.fy) : 0) + t.m));
+      // each force counts by its components across and along the base the body stands on (the
+      // contact's normal and tangent), as an inclined thrust or a weight on a slope is resolved
+      // by hand: the part pressing the body down restores, the part pushing it over overturns
+      const n = s.kind === "contact" ? direction(s.angle) : ([0, 1] as Vec2);
+      const tan: Vec2 = [-n[1], n[0]];
+      const resolved = (t: { fx: number; fy: number; at?: Vec2 }, sign: number) => {
+        if (!t.at) return;
+        const rx = t.at[0] - P[0];
+        const ry = t.at[1] - P[1];
+        const fn = t.fx * n[0] + t.fy * n[1];
+        const ft = t.fx * tan[0] + t.fy * tan[1];
+        add(sign * sense * momentOf(rx, ry, fn * n[0], fn * n[1]));
+        add(sign * sense * momentOf(rx, ry, ft * tan[0], ft * tan[1]));
+      };
+      for (const t of model.forceTerms) {
+        resolved(t, 1);
+        add(sense * t.m);
+      }
       // momentum flux terms sit on the other side of the equation: the body feels −ṁV
-      for (const t of model.momentumTerms) add(-sense * (t.at ? momentOf(t.at[0] - P[0], t.at[1] - P[1], t.fx, t.fy) : 0));
+      for (const t of model.momentumTerms) resolved(t, -1);
       if (overturning <= 1e-12 * (restoring + 1)) continue;
       const factor = restoring / overturning;
       if (!best || factor < best.factor) {

@@ -82,6 +82,8 @@ export interface Sketch {
   description?: string;
   /** m/s², acts in -y */
   gravity: number;
+  /** direction gravity acts in, degrees from +x; absent: −90 (−y) */
+  gravityAngle?: number;
   /** parameter values in SI (as plain numbers), for display */
   parameters: Record<string, number>;
   bodies: Body[];

@@ -38,7 +38,7 @@ const nonNegative = (v: number | undefined) => v === undefined || v >= 0;
 const positive = (v: number | undefined) => v === undefined || v > 0;
 
 /** The words for a negative gravity, at parse time (resolve.ts) and at a sweep point alike. */
-export const NEGATIVE_GRAVITY = "must not be negative: gravity acts in −y (to have it act another way, rotate the sketch; 0 turns weights off)";
+export const NEGATIVE_GRAVITY = "must not be negative: to have gravity act another way, give its direction (gravityAngle, −90° by default); 0 turns weights off";
 
 /** Value ranges, the information each port needs, and loads that must be fully given. */
 export function validateValues(sketch: Sketch): FieldError[] {

@@ -92,7 +92,7 @@ export const setForceForm = defineCommand<{ id: string; form: "polar" | "compone
   },
 });
 
-type SketchField = "title" | "description" | "gravity";
+type SketchField = "title" | "description" | "gravity" | "gravityAngle";
 
 export const setSketchField = defineCommand<{ field: SketchField; value: string | Numeric | undefined }>({
   name: "setSketchField",

@@ -106,9 +106,12 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     for (const t of eq.forces) {
       if (t.kind === "weight" && Number.isFinite(b.cg[0])) {
         const cg = px(b.cg, s);
-        const W = Math.abs(t.fy);
-        prims.push(...solidArrow(add(cg, [0, 8]), add(cg, [0, 52]), INK, 1.9, 11));
-        prims.push(text(add(cg, [7, 38]), `W ${fq(W, "force", o.units)}`, INK, 11.5, { weight: 600, align: "left", baseline: "middle" }));
+        const W = Math.hypot(t.fx, t.fy);
+        // along gravity (down the page unless the sketch turns it), in screen axes (y down)
+        const d: Pt = [t.fx / W, -t.fy / W];
+        const side: Pt = [d[1], -d[0]];
+        prims.push(...solidArrow(add(cg, mul(d, 8)), add(cg, mul(d, 52)), INK, 1.9, 11));
+        prims.push(text(add(add(cg, mul(d, 38)), mul(side, 7)), `W ${fq(W, "force", o.units)}`, INK, 11.5, { weight: 600, align: side[0] >= 0 ? "left" : "right", baseline: "middle" }));
       }
       if (t.kind === "pressure") {
         const port = scene.byId.get(t.id) as Extract<SceneItem, { kind: "inlet" | "outlet" }> | undefined;

@@ -7,11 +7,32 @@ import type { Command } from "@/canvas/commands/define";
 import { NumericField } from "./NumericField";
 import { TextField } from "./TextField";
 
+/** The sketch's own numbers: how strong gravity is, and which way it acts. */
+const GRAVITY_FIELDS = [
+  {
+    field: "gravity",
+    label: "Gravity",
+    display: "acceleration",
+    example: "9.80665",
+    hint: "Blank: standard gravity 9.807 m/s², acting in −y. 0 turns weights off (a plan view).",
+    testId: "field-gravity",
+  },
+  {
+    field: "gravityAngle",
+    label: "Gravity direction",
+    display: "angle",
+    example: "-90 deg - slope",
+    hint: "Blank: −90°, down the page. Turn it to check a body on a slope or a tilt table: −90° − 5° leans the weight 5° toward −x; a parameter here lets a sweep or the limit finder find the angle at which it tips or slides.",
+    testId: "field-gravity-angle",
+  },
+] as const;
+
 export function SketchForm() {
   const { editor } = useStores();
   const title = useEditor((s) => s.sketch.title);
   const description = useEditor((s) => s.sketch.description);
   const gravity = useEditor((s) => s.sketch.gravity);
+  const gravityAngle = useEditor((s) => s.sketch.gravityAngle);
   const motion = useEditor((s) => s.sketch.motion);
   const apply = (c: Command<unknown>, coalesce?: string) => editor.getState().apply(c, coalesce ? { coalesce } : undefined);
   const setMotionField = (k: "ax" | "ay" | "freeX", v: Numeric | boolean | undefined, c?: string) => {
@@ -24,20 +45,23 @@ export function SketchForm() {
       <p className="text-[12px] leading-snug text-ink-faint">Nothing selected. Pick an element on the drawing or in the list to edit it.</p>
       <TextField label="Title" value={title} maxLength={300} onCommit={(v, c) => void apply(setSketchField({ field: "title", value: v || undefined }) as Command<unknown>, c)} />
       <TextField label="Notes" value={description} multiline maxLength={5000} onCommit={(v, c) => void apply(setSketchField({ field: "description", value: v || undefined }) as Command<unknown>, c)} />
-      <NumericField
-        valueKey="gravity"
-        label="Gravity"
-        value={gravity}
-        display="acceleration"
-        optional
-        example="9.80665"
-        hint="Blank: standard gravity 9.807 m/s², acting in −y. 0 turns weights off (a plan view)."
-        testId="field-gravity"
-        onCommit={(v, c) => {
-          apply(setSketchField({ field: "gravity", value: v }) as Command<unknown>, c);
-          return null;
-        }}
-      />
+      {GRAVITY_FIELDS.map((f) => (
+        <NumericField
+          key={f.field}
+          valueKey={f.field}
+          label={f.label}
+          value={f.field === "gravity" ? gravity : gravityAngle}
+          display={f.display}
+          optional
+          example={f.example}
+          hint={f.hint}
+          testId={f.testId}
+          onCommit={(v, c) => {
+            apply(setSketchField({ field: f.field, value: v }) as Command<unknown>, c);
+            return null;
+          }}
+        />
+      ))}
       <fieldset className="rounded border border-rule-soft px-2 pb-2 pt-1">
         <legend className="px-1 text-[12px] font-medium text-ink-soft">Motion of the body</legend>
         <p className="mb-1.5 text-[11.5px] leading-snug text-ink-faint">A prescribed acceleration (the inertial force −m·a acts at the centre of gravity), or free to move in x.</p>

@@ -5,6 +5,10 @@
 // width, over its rows, so a long name wraps in one line of the page rather than in a narrow
 // column that makes every row three lines tall.
 import type { Table } from "@/solver/report";
+
+// Numbers in a column: figures of one width, so decimals line up, and no kerning, which tucks a
+// point under a 7 ("7.602" read as "7602"). Off and on by OpenType feature (fontkit's overrides).
+const NUMBER_FEATURES = { kern: false, tnum: true } as unknown as PDFKit.Mixins.OpenTypeFeatures[];
 import { layoutTable, type Measure, type TablePart, type TableLayout } from "./table-layout";
 
 export const FONT = { regular: "Inter", bold: "Inter-SemiBold" } as const;
@@ -130,7 +134,12 @@ function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart,
     const y = doc.y;
     let x = left;
     part.columns.forEach((c, i) => {
-      doc.font(FONT.regular).fontSize(size).fillColor(INK).text(r[c] ?? "", x + PAD_X, y + PAD_TOP, { width: inner(i), align: headers[c].align });
+      const numeric = headers[c].align === "right";
+      doc
+        .font(FONT.regular)
+        .fontSize(size)
+        .fillColor(INK)
+        .text(r[c] ?? "", x + PAD_X, y + PAD_TOP, { width: inner(i), align: headers[c].align, ...(numeric ? { features: NUMBER_FEATURES } : {}) });
       x += part.widths[i];
     });
     rule(doc, left, y + h, total);

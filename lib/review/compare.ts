@@ -71,6 +71,7 @@ const FIELD_QUANTITY: Record<string, Quantity | "rotationalStiffness"> = {
   volumeFlow: "volumeFlow",
   beta: "ratio",
   gravity: "acceleration",
+  gravityAngle: "angle",
   ax: "acceleration",
   ay: "acceleration",
 };
@@ -275,7 +276,7 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: Uni
   const fb = B.parsed.fields;
 
   const sketch: FieldChange[] = [];
-  for (const k of ["title", "description", "gravity", "motion"] as const) {
+  for (const k of ["title", "description", "gravity", "gravityAngle", "motion"] as const) {
     if (same(A.file[k], B.file[k])) continue;
     if (k === "motion") sketch.push({ field: "motion", before: A.file.motion ? JSON.stringify(A.file.motion) : null, after: B.file.motion ? JSON.stringify(B.file.motion) : null });
     else sketch.push({ field: k, before: show(A.file[k], k, k, fa, units), after: show(B.file[k], k, k, fb, units) });

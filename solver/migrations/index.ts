@@ -6,6 +6,7 @@ import type { FieldError } from "../types";
 import { loadCases } from "./002-load-cases";
 import { underlay } from "./003-underlay";
 import { momentumFactor } from "./004-momentum-factor";
+import { gravityDirection } from "./005-gravity-direction";
 
 export interface Migration {
   from: number;
@@ -14,7 +15,7 @@ export interface Migration {
   up: (doc: Record<string, unknown>) => Record<string, unknown>;
 }
 
-export const MIGRATIONS: readonly Migration[] = [loadCases, underlay, momentumFactor];
+export const MIGRATIONS: readonly Migration[] = [loadCases, underlay, momentumFactor, gravityDirection];
 
 export type MigrateResult = { ok: true; doc: Record<string, unknown>; applied: number[] } | { ok: false; errors: FieldError[] };
 

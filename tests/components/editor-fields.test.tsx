@@ -52,6 +52,18 @@ describe("properties form: the schema's refusals at the field", () => {
     expect(x).toHaveAccessibleDescription("= 0.5 m");
   }, 15_000);
 
+  it("the sketch's gravity direction takes an angle and is stored; a length is refused at the field", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor({ ...beam(), parameters: { slope: "5 deg" } });
+    const field = within(screen.getByTestId("sketch-form")).getByLabelText("Gravity direction");
+    await user.type(field, "-90 deg - slope");
+    expect(field).toHaveAccessibleDescription("= −95°");
+    await waitFor(() => expect(storedSketch(mem)?.gravityAngle).toBe("-90 deg - slope"), { timeout: 3000 });
+    await user.clear(field);
+    await user.type(field, "2 m");
+    expect(field).toHaveAttribute("aria-invalid", "true");
+  }, 15_000);
+
   it("a port's momentum-flux factor β: blank is 1, 4/3 multiplies the momentum flux, below 1 is refused at the field", async () => {
     const user = userEvent.setup();
     const { mem } = await renderEditor({

@@ -133,6 +133,30 @@ describe("a port with a momentum-flux factor", () => {
   });
 });
 
+describe("gravity turned off −y", () => {
+  it("draws the weight along gravity's direction, from the centre of gravity", () => {
+    const { sketch } = solved("washing-cart");
+    const tilted = { ...structuredClone(sketch), gravityAngle: "-90 deg + 25 deg" };
+    const parsed = parseSketch(tilted);
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+    const result = solveFile(tilted) as SolveResult;
+    const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+    const { results } = scenePrims(scene, 100, "SI", result);
+    const cg = scene.bodies[0].cg;
+    const at: [number, number] = [cg[0] * 100, -cg[1] * 100];
+    // the shaft starts 8 px from the centre of gravity along gravity: (sin 25°, cos 25°) in screen axes
+    const d = [Math.sin((25 * Math.PI) / 180), Math.cos((25 * Math.PI) / 180)];
+    const shaft = results.find((p) => p.t === "poly" && p.pts.length === 2 && Math.hypot(p.pts[0][0] - at[0] - 8 * d[0], p.pts[0][1] - at[1] - 8 * d[1]) < 1e-6);
+    expect(shaft).toBeDefined();
+    if (shaft?.t !== "poly") return;
+    const u = [shaft.pts[1][0] - shaft.pts[0][0], shaft.pts[1][1] - shaft.pts[0][1]];
+    const len = Math.hypot(u[0], u[1]);
+    expect(u[0] / len).toBeCloseTo(d[0], 9);
+    expect(u[1] / len).toBeCloseTo(d[1], 9);
+    expect(results.some((p) => p.t === "text" && /^W \d/.test(p.text))).toBe(true);
+  });
+});
+
 describe("a position in error", () => {
   it("marks the element at its body's centre of gravity, named, with the field to check", () => {
     const { sketch, result } = solved("washing-cart");

@@ -168,6 +168,27 @@ describe("stability factors (common practice)", () => {
     expect(sl.pass).toBe((mu * W) / P >= 1.5);
   });
 
+  it("an inclined push counts by its components: the part pressing down restores, the part pushing over overturns (as an inclined thrust on a retaining wall is resolved — common practice)", () => {
+    const F = 3000;
+    const alpha = (30 * Math.PI) / 180; // 30° below horizontal, toward the toe
+    const inclined = sketch({
+      bodies: [{ id: "blk", outline: box(b, 2), mass: 800, cg: [b / 2, 1] }],
+      supports: [
+        { id: "heel", body: "blk", kind: "contact", at: [0, 0], angle: 90, mu },
+        { id: "toe", body: "blk", kind: "contact", at: [b, 0], angle: 90, mu },
+      ],
+      loads: [{ id: "F", body: "blk", kind: "force", at: [0, h], magnitude: F, angle: -30 }],
+    });
+    const run = solveCases(fileOf(inclined)).runs[0];
+    if (!run.ok) throw new Error();
+    const ot = run.stability.blk.overturning;
+    if ("notApplicable" in ot) throw new Error(ot.notApplicable);
+    expect(ot.about).toBe("toe");
+    // restoring: W·b/2 + F·sin α·b (the downward part acts at the heel, b from the toe); overturning: F·cos α·h
+    expectRel(ot.restoring, (W * b) / 2 + F * Math.sin(alpha) * b, 1e-9);
+    expectRel(ot.overturning, F * Math.cos(alpha) * h, 1e-9);
+  });
+
   it("a pinned body cannot tip or slide on its contacts: the checks say why", () => {
     const run = solveCases(fileOf(loadFixture("thrust-stand-tips.json"))).runs[0];
     if (!run.ok) throw new Error();

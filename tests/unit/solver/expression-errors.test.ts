@@ -200,7 +200,7 @@ describe("gravity acts in −y", () => {
   it.each([-9.81, "-9.81 m/s^2", "-1 * g0"])("a negative gravity (%s) is refused", (gravity) => {
     const doc = { ...withFields(gravity === "-1 * g0" ? { g0: "9.80665 m/s^2" } : {}), gravity };
     expect(errorsOf(doc)).toEqual([
-      { path: "gravity", message: "must not be negative: gravity acts in −y (to have it act another way, rotate the sketch; 0 turns weights off)" },
+      { path: "gravity", message: "must not be negative: to have gravity act another way, give its direction (gravityAngle, −90° by default); 0 turns weights off" },
     ]);
   });
 

@@ -5,6 +5,7 @@ import { CURRENT_VERSION } from "@/solver/schema";
 import { loadCases } from "@/solver/migrations/002-load-cases";
 import { underlay } from "@/solver/migrations/003-underlay";
 import { momentumFactor } from "@/solver/migrations/004-momentum-factor";
+import { gravityDirection } from "@/solver/migrations/005-gravity-direction";
 import { loadFixture } from "./helpers";
 
 describe("migrateSketch", () => {
@@ -66,6 +67,18 @@ describe("each step of the chain", () => {
     expect(p.sketch.ports.every((port) => port.beta === undefined)).toBe(true);
   });
 
+  it("4 → 5 (gravity direction): a version-4 file with a port's β gets version 5, unchanged otherwise, and gravity stays −y", async () => {
+    const base = loadFixture("pump-skid-discharge.json") as unknown as { ports: Record<string, unknown>[] };
+    const doc = { ...base, version: 4, ports: base.ports.map((p, i) => (i === 0 ? { ...p, beta: 1.02 } : p)) };
+    const r = migrateSketch(doc, [loadCases, underlay, momentumFactor, gravityDirection], 5);
+    expect(r).toEqual({ ok: true, doc: { ...doc, version: 5 }, applied: [4] });
+    const { parseSketch } = await import("@/solver");
+    const p = parseSketch(doc);
+    if (!p.ok) throw new Error(JSON.stringify(p.errors));
+    expect(p.sketch.gravityAngle).toBeUndefined();
+    expect(p.sketch.ports[0].beta).toBe(1.02);
+  });
+
   it("every version-1 fixture still solves exactly as before: migrated, parsed, solved", async () => {
     const { readdirSync } = await import("node:fs");
     const { FIXTURES } = await import("./helpers");
@@ -76,7 +89,7 @@ describe("each step of the chain", () => {
       const p = parseSketch(doc);
       expect(p.ok, f).toBe(true);
       if (!p.ok) continue;
-      expect(p.migratedFrom).toEqual([1, 2, 3]);
+      expect(p.migratedFrom).toEqual([1, 2, 3, 4]);
       expect(p.file.version).toBe(CURRENT_VERSION);
       // the same file marked as current (no migration) gives the identical result
       const q = parseSketch({ ...doc, version: CURRENT_VERSION });
