@@ -8,6 +8,7 @@ import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { SolveResult, Vec2 } from "./types";
 import { convert, formatNumber, unitsFor, type Quantity, type UnitSystem } from "./units";
+import { degreesOffDown, gravityNote } from "./words";
 
 export type Cell = string | number | null;
 
@@ -380,7 +381,8 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
   const gv = parsed.fields.gravity;
   const ga = parsed.fields.gravityAngle;
   const angle = ga && "value" in ga ? ga.value : -90;
-  const acts = angle === -90 ? "acts in −y" : `acts at ${Number(angle.toPrecision(6))}° from +x, ${Number(Math.abs(angle + 90).toPrecision(4))}° off −y${typeof parsed.file.gravityAngle === "string" ? ` (${parsed.file.gravityAngle})` : ""}`;
+  const turned = gravityNote(angle);
+  const acts = turned ? `acts at ${formatNumber(angle)}° from +x, ${formatNumber(degreesOffDown(angle))}° off −y${typeof parsed.file.gravityAngle === "string" ? ` (${parsed.file.gravityAngle})` : ""}` : "acts in −y";
   rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (${acts})`]);
   return {
     id: "inputs",

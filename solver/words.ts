@@ -1,5 +1,5 @@
 // Short phrases shared by warnings and status sentences.
-import { formatQuantity } from "./units";
+import { formatNumber, formatQuantity } from "./units";
 import type { FreeMotion, Support } from "./types";
 
 const KIND_WORD: Record<Support["kind"], string> = {
@@ -33,4 +33,16 @@ export function describeFreeMotion(fm: FreeMotion, supports: Pick<Support, "kind
   const at = supports.find((s) => Math.hypot(s.at[0] - x, s.at[1] - y) < 1e-6);
   const point = `(${Number(x.toFixed(3))}, ${Number(y.toFixed(3))})`;
   return `nothing resists rotation about ${at ? `${describeSupport(at).replace(/^\w/, (c) => c.toLowerCase())} ${point}` : point}`;
+}
+
+/** How far gravity at `angle` (degrees from +x) is turned off −y, 0 to 180; 0 when it acts down the page. */
+export function degreesOffDown(angle: number): number {
+  return Math.abs(((((angle + 90) % 360) + 540) % 360) - 180);
+}
+
+/** "gravity at −65°, 25° off −y", or null when gravity acts down the page (or is not given). */
+export function gravityNote(angle: number | undefined): string | null {
+  if (angle === undefined || !Number.isFinite(angle)) return null;
+  const off = degreesOffDown(angle);
+  return off < 1e-9 ? null : `gravity at ${formatNumber(angle)}°, ${formatNumber(off)}° off −y`;
 }

@@ -10,6 +10,7 @@ import { scenePrims } from "./scenePrims";
 import { fitScenes } from "../geometry/fit";
 import type { View } from "../geometry/view";
 import { primsBox, type Prim } from "./prims";
+import { gravityNote } from "@/solver/words";
 import { FONT_STACK, INK_FAINT, PAPER, PAPER_CARD } from "./palette";
 
 export interface SvgOptions {
@@ -146,7 +147,9 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
     y += 22;
   }
   if (opts.legend ?? !!result) {
-    foot += `<text x="16" y="${y}" font-size="11" fill="${INK_FAINT}">Solid arrows: given loads and weight · double lines: reactions found (on the body) · dashed: momentum flux ṁV · ${units === "SI" ? "SI units" : "US customary units"}</text>`;
+    const ga = parsed.fields?.gravityAngle;
+    const turned = gravityNote(ga && "value" in ga ? ga.value : undefined);
+    foot += `<text x="16" y="${y}" font-size="11" fill="${INK_FAINT}">Solid arrows: given loads and weight · double lines: reactions found (on the body) · dashed: momentum flux ṁV · ${units === "SI" ? "SI units" : "US customary units"}${turned ? ` · ${esc(turned)}` : ""}</text>`;
   }
   return `${head}${title}${bg}<g transform="translate(${n(dx)} ${n(dy)})">${body}${res}</g>${foot}</svg>`;
 }

@@ -59,6 +59,8 @@ describe("properties form: the schema's refusals at the field", () => {
     await user.type(field, "-90 deg - slope");
     expect(field).toHaveAccessibleDescription("= −95°");
     await waitFor(() => expect(storedSketch(mem)?.gravityAngle).toBe("-90 deg - slope"), { timeout: 3000 });
+    // the drawing says so, in words beside an arrow, so a turned gravity is never forgotten
+    await waitFor(() => expect(screen.getByTestId("gravity-turned").textContent).toBe("gravity at −95°, 5° off −y"));
     await user.clear(field);
     await user.type(field, "2 m");
     expect(field).toHaveAttribute("aria-invalid", "true");

@@ -8,6 +8,9 @@ import { describe, expect, it } from "vitest";
 import { findLimit, parseSketch, solve, solveCases } from "@/solver";
 import { G0 } from "@/solver/constants";
 import { box, expectRel, parsed, sketch, solved } from "./helpers";
+import { renderSketchSvg } from "@/canvas/render/svg";
+import { inputsTable } from "@/solver/report";
+import { gravityNote } from "@/solver/words";
 
 const b = 1.2; // base, m
 const hcg = 1.0; // height of the centre of gravity, m
@@ -95,6 +98,28 @@ describe("sliding on a slope: μ / tan θ (common practice)", () => {
       expectRel(sl.factor, mu / Math.tan((theta * Math.PI) / 180), 1e-9);
       expect(sl.factor > 1).toBe(theta < (Math.atan(mu) * 180) / Math.PI);
     }
+  });
+});
+
+describe("a turned gravity is said wherever the drawing or the inputs are printed", () => {
+  it("in words: the angle from +x and how far it is off −y", () => {
+    expect(gravityNote(undefined)).toBeNull();
+    expect(gravityNote(-90)).toBeNull();
+    expect(gravityNote(270)).toBeNull();
+    expect(gravityNote(-65)).toBe("gravity at −65°, 25° off −y");
+    expect(gravityNote(-100)).toBe("gravity at −100°, 10° off −y");
+    expect(gravityNote(90)).toBe("gravity at 90°, 180° off −y");
+  });
+
+  it("under the drawing and in the inputs table", () => {
+    const doc = block("25 deg");
+    const svg = renderSketchSvg(doc, solve(parsed(doc)));
+    expect(svg).toContain("gravity at −65°, 25° off −y");
+    const p = parseSketch(doc);
+    if (!p.ok) throw new Error();
+    const row = inputsTable(p).rows.find((r) => r[0] === "gravity")!;
+    expect(String(row[4])).toBe("9.80665 m/s² (acts at −65° from +x, 25° off −y (-90 deg + tilt))");
+    expect(renderSketchSvg({ ...doc, gravityAngle: undefined }, solve(parsed({ ...doc, gravityAngle: undefined })))).not.toContain("off −y");
   });
 });
 
