@@ -12,11 +12,11 @@ export function CanvasLegend() {
   if (!shown) return null;
   const turned = gravityNote(gravityAngle);
   return (
-    <div className="pointer-events-none absolute right-2 top-2 flex flex-col gap-1 rounded border border-rule/70 bg-paper-card/90 px-2 py-1.5 text-[11px] text-ink-soft" aria-hidden="true">
+    <div className="pointer-events-none absolute right-2 top-2 flex flex-col gap-1 rounded border border-rule/70 bg-paper-card/90 px-2 py-1.5 text-[11px] text-ink-soft">
       {stale && <p className="font-semibold text-caution">Results faded: last good result, the input has errors</p>}
       {turned && (
         <p className="flex items-center gap-1 font-semibold text-ink" data-testid="gravity-turned">
-          <svg width="14" height="14" viewBox="-7 -7 14 14">
+          <svg width="14" height="14" viewBox="-7 -7 14 14" aria-hidden="true">
             {/* gravity's direction in screen axes (y down) */}
             <g transform={`rotate(${-(gravityAngle as number)})`}>
               <path d="M-6 0H3" stroke={INK} strokeWidth="1.6" />
@@ -26,7 +26,8 @@ export function CanvasLegend() {
           {turned}
         </p>
       )}
-      <div className="flex items-center gap-3">
+      {/* the arrows' key repeats what the drawing's words say: kept from screen readers */}
+      <div className="flex items-center gap-3" aria-hidden="true">
         <span className="flex items-center gap-1">
           <svg width="26" height="10">
             <path d="M1 5H19" stroke={INK} strokeWidth="1.8" />
