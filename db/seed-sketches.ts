@@ -90,6 +90,15 @@ export const DEMO_SKETCHES: DemoSketch[] = [
     steps: [
       { by: "eddie", daysAgo: 8, message: "Stand with the 2.2 kN test jet at 1.5 m: it tips about the front pin" },
       { by: "eddie", daysAgo: 3, message: "Lowered the jet from 1.5 m to 0.6 m: the rear pad bears again", edit: (d) => (d.ports[0].at = [0, 0.6]) },
+      {
+        by: "eddie",
+        daysAgo: 1,
+        message: "The test pad falls 3° toward the front pin (gravity turned 3°): the rear pad still bears; it would unload at 9.5°",
+        edit: (d) => {
+          d.parameters!.slope = "3 deg";
+          d.gravityAngle = "-90 deg + slope";
+        },
+      },
     ],
   },
   {

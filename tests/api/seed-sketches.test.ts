@@ -24,7 +24,7 @@ describe("demo sketches", () => {
     const story = (id: string) => rows.filter((r) => r.sketchId === id).map((r) => `v${r.number} ${r.status}`);
     expect(story(DEMO_SKETCHES[0].id)).toEqual(["v1 holds", "v2 holds", "v3 holds"]);
     expect(story(DEMO_SKETCHES[1].id)).toEqual(["v1 holds", "v2 lifts", "v3 holds"]);
-    expect(story(DEMO_SKETCHES[2].id)).toEqual(["v1 tips", "v2 holds"]);
+    expect(story(DEMO_SKETCHES[2].id)).toEqual(["v1 tips", "v2 holds", "v3 holds"]);
     expect(story(DEMO_SKETCHES[3].id)).toEqual(["v1 holds", "v2 holds"]);
     expect(story(DEMO_SKETCHES[4].id)).toEqual(["v1 holds", "v2 tips", "v3 holds"]);
     for (const s of sketches) expect(s.latestVersion).toBe(rows.filter((r) => r.sketchId === s.id).length);
