@@ -11,14 +11,19 @@ import { UnderlayPanel } from "./UnderlayPanel";
 import { useActionRunner } from "./useActions";
 import { BUTTON, HEADING } from "./ui";
 
-/** Duplicate and Delete for the selection, by their registered actions (the same as Ctrl+D and Delete). */
-function SelectionActions() {
+/**
+ * Copy, Paste, Duplicate and Delete for the selection, by their registered actions (the same as
+ * Ctrl+C, Ctrl+V, Ctrl+D and Delete); a read-only sketch can still be copied from.
+ */
+function SelectionActions({ readOnlyCopy = false }: { readOnlyCopy?: boolean }) {
   const run = useActionRunner();
   const readOnly = useEditor((s) => s.readOnly);
-  if (readOnly) return null;
+  // inside the forms' fieldset (disabled when read only), or below it with Copy alone
+  if (readOnly !== readOnlyCopy) return null;
+  const ids = readOnly ? ["edit.copy"] : ["edit.copy", "edit.paste", "edit.duplicate", "edit.delete"];
   return (
-    <div className="flex gap-1.5" data-testid="selection-actions">
-      {["edit.duplicate", "edit.delete"].map((id) => (
+    <div className="flex flex-wrap gap-1.5" data-testid="selection-actions">
+      {ids.map((id) => (
         <button key={id} type="button" className={BUTTON} title={actionTitle(id)} onClick={() => run(id)}>
           {actionById(id).label}
         </button>
@@ -72,6 +77,7 @@ export function PropertiesPanel() {
             <Several />
           )}
         </fieldset>
+        {selection.length > 0 && <SelectionActions readOnlyCopy />}
       </section>
       <UnderlayPanel />
       <fieldset disabled={readOnly} className="min-w-0 px-3 pb-4 pt-2">

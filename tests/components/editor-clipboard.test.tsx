@@ -3,7 +3,7 @@
 // text selected on the page to the browser.
 import { screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { beam, renderEditor, storedSketch } from "./editor-helpers";
 
 /** A clipboard event with its own data, as the browser hands one to the page. */
@@ -35,6 +35,25 @@ describe("copy and paste in the editor", () => {
     await waitFor(() => expect(storedSketch(mem)?.bodies.length).toBe(2), { timeout: 3000 });
     await user.keyboard("{Control>}z{/Control}");
     await waitFor(() => expect(outline().getAllByRole("button", { name: /^Body/ }).length).toBe(1));
+  }, 15_000);
+
+  it("the properties panel's Copy and Paste buttons use the system clipboard the same way", async () => {
+    const user = userEvent.setup();
+    let held = "";
+    const clipboard = { writeText: vi.fn(async (t: string) => void (held = t)), readText: vi.fn(async () => held) };
+    Object.defineProperty(navigator, "clipboard", { value: clipboard, configurable: true });
+    try {
+      await renderEditor(beam());
+      await user.click(outline().getByRole("button", { name: /Body b1/ }));
+      const actions = within(screen.getByTestId("selection-actions"));
+      await user.click(actions.getByRole("button", { name: "Copy" }));
+      expect(clipboard.writeText).toHaveBeenCalledTimes(1);
+      expect(JSON.parse(held).bodies.map((b: { id: string }) => b.id)).toEqual(["b1"]);
+      await user.click(actions.getByRole("button", { name: "Paste" }));
+      await waitFor(() => expect(outline().getAllByRole("button", { name: /^Body/ }).length).toBe(2));
+    } finally {
+      Reflect.deleteProperty(navigator, "clipboard");
+    }
   }, 15_000);
 
   it("a cut removes the selection; text that is not ours, and pastes into a field, are left to the browser", async () => {

@@ -2,7 +2,7 @@
 // says underlays need a saved sketch; a saved one uploads, places the image, sets the scale from
 // two marks and a typed distance, fades, hides and locks it (each an undo step); a role that may
 // not edit sees a note, no tray, and disabled fields.
-import { act, fireEvent, render, screen, waitFor } from "@testing-library/react";
+import { act, fireEvent, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it, vi } from "vitest";
 import { Editor } from "@/components/editor/Editor";
@@ -144,5 +144,10 @@ describe("a read-only editor (a viewer or a checker on a saved sketch)", () => {
     for (const id of ["underlay-calibrate", "underlay-shown", "underlay-locked", "underlay-opacity", "underlay-remove", "underlay-x"]) expect(screen.getByTestId(id)).toBeDisabled();
     expect(screen.queryByTestId("underlay-upload")).toBeNull();
     await waitFor(() => expect(screen.getByTestId("sketch-title")).toHaveTextContent("Skid"));
+    // a selected element can still be copied (into a sketch the reader may edit), nothing else
+    await userEvent.setup().click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Pin s1/ }));
+    const actions = within(screen.getByTestId("selection-actions"));
+    expect(actions.getAllByRole("button").map((b) => b.textContent)).toEqual(["Copy"]);
+    expect(actions.getByRole("button", { name: "Copy" })).toBeEnabled();
   });
 });
