@@ -8,7 +8,7 @@ import { deleteElements, duplicateElements, pasteElements } from "./commands/ele
 import { copyFragment, fragmentText, pasteNotice, planPaste, readFragment } from "./clipboard";
 import { moveElement } from "./commands/move";
 import { rotateElement } from "./commands/shape";
-import { DIRECTED, findElement, type ElementKind } from "./model/elements";
+import { DIRECTED, findElement, GROUPS, type ElementKind } from "./model/elements";
 import { defaultBodySize, polygonAround, rectangleAround } from "./model/factory";
 import { fitScene } from "./geometry/fit";
 import { snapTo } from "./geometry/snap";
@@ -339,7 +339,7 @@ export function copySelection(ctx: ActionContext, cut: boolean): string | null {
   const s = ed(ctx);
   const fragment = copyFragment(s.sketch, s.selection);
   if (!fragment) return null;
-  const n = fragment.bodies.length + fragment.supports.length + fragment.loads.length + fragment.ports.length + fragment.massSources.length;
+  const n = GROUPS.reduce((t, g) => t + fragment[g].length, 0);
   if (cut && !s.apply(deleteElements({ ids: s.selection }) as Command<unknown>)) return null;
   s.notify(`${cut ? "Cut" : "Copied"} ${n} element${n === 1 ? "" : "s"}: paste them here or in another sketch.`);
   return fragmentText(fragment);

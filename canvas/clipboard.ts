@@ -3,12 +3,11 @@
 // supports, loads and ports), the parameters their expressions read, and the format version, so a
 // later Counterpoise migrates it like a file. A whole sketch file's text pastes too.
 import { compileExpression } from "@/solver/expressions";
-import { migrateSketch } from "@/solver/migrations";
-import { zodErrors } from "@/solver/parse";
-import { CURRENT_VERSION, FORMAT, sketchSchema, type Numeric, type SketchFile } from "@/solver/schema";
+import { CURRENT_VERSION, FORMAT, type Numeric, type SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
 import { shiftElement } from "./commands/move";
-import { childrenOf, findElement, GROUPS, kindOf, nextId, type AnyElement, type Attached, type Group } from "./model/elements";
+import { checkSketchJson } from "./files";
+import { findElement, GROUPS, kindOf, nextId, type AnyElement, type Attached, type Group, withAttached } from "./model/elements";
 
 /** The clipboard's format marker (a sketch file's is FORMAT). */
 export const ELEMENTS_FORMAT = "counterpoise.elements";
@@ -61,13 +60,7 @@ export function parametersUsed(params: Record<string, Numeric>, elements: readon
 
 /** The chosen elements as a fragment: a body brings its elements along. Null when nothing is chosen. */
 export function copyFragment(sketch: SketchFile, ids: readonly string[]): Fragment | null {
-  const chosen = new Set<string>();
-  for (const id of ids) {
-    const l = findElement(sketch, id);
-    if (!l) continue;
-    chosen.add(id);
-    if (l.group === "bodies") for (const c of childrenOf(sketch, id)) chosen.add(c.el.id);
-  }
+  const chosen = withAttached(sketch, ids);
   if (!chosen.size) return null;
   const pick = <G extends Group>(g: G) => (sketch[g] as AnyElement[]).filter((e) => chosen.has(e.id)).map((e) => structuredClone(e)) as unknown as SketchFile[G];
   const fragment: Fragment = {
@@ -103,14 +96,12 @@ export function readFragment(text: string): ReadFragment | null {
   }
   if (!json || typeof json !== "object" || (json.format !== ELEMENTS_FORMAT && json.format !== FORMAT)) return null;
   // checked as a sketch file (migrated from an older version first): the same schema, the same words
-  const migrated = migrateSketch({ ...json, format: FORMAT });
-  if (!migrated.ok) return { ok: false, reason: `The copied elements cannot be read: ${migrated.errors[0].path} ${migrated.errors[0].message}` };
-  const parsed = sketchSchema.safeParse(migrated.doc);
-  if (!parsed.success) {
-    const e = zodErrors(parsed.error)[0];
+  const checked = checkSketchJson({ ...json, format: FORMAT });
+  if (!checked.ok) {
+    const e = checked.errors[0];
     return { ok: false, reason: `The copied elements cannot be read: ${e.path ? e.path + " " : ""}${e.message}` };
   }
-  const s = parsed.data;
+  const s = checked.sketch;
   return {
     ok: true,
     fragment: { format: ELEMENTS_FORMAT, version: CURRENT_VERSION, parameters: s.parameters ?? {}, bodies: s.bodies, supports: s.supports, loads: s.loads, ports: s.ports, massSources: s.massSources },
@@ -125,7 +116,7 @@ export interface PastePlan {
   conflicts: Array<{ name: string; kept: Numeric; copied: Numeric }>;
 }
 
-export type PasteOutcome = { ok: true; plan: PastePlan; count: number } | { ok: false; reason: string };
+export type PasteOutcome = { ok: true; plan: PastePlan } | { ok: false; reason: string };
 
 /** A point to tell whether a paste lands on the elements it was copied from. */
 function spot(group: Group, el: AnyElement): string {
@@ -190,7 +181,7 @@ export function planPaste(target: SketchFile, fragment: Fragment, opts: { attach
     if (!(name in own)) parameters[name] = expr;
     else if (String(own[name]) !== String(expr)) conflicts.push({ name, kept: own[name], copied: expr });
   }
-  return { ok: true, plan: { copies, parameters, conflicts }, count: copies.length };
+  return { ok: true, plan: { copies, parameters, conflicts } };
 }
 
 /** What the status line says after a paste. */

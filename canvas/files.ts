@@ -17,12 +17,19 @@ export function importSketchText(text: string): ImportResult {
   } catch (err) {
     return { ok: false, errors: [{ path: "", message: `This is not a JSON file (${(err as Error).message}).` }] };
   }
+  const checked = checkSketchJson(json);
+  if (!checked.ok) return checked;
+  const refs = validateReferences(checked.sketch as unknown as Sketch);
+  if (refs.length) return { ok: false, errors: refs.slice(0, 12) };
+  return checked;
+}
+
+/** A JSON value read as a sketch file's structure: migrated from its version, then the schema (references are not checked). */
+export function checkSketchJson(json: unknown): ImportResult {
   const migrated = migrateSketch(json);
   if (!migrated.ok) return { ok: false, errors: migrated.errors };
   const parsed = sketchSchema.safeParse(migrated.doc);
   if (!parsed.success) return { ok: false, errors: zodErrors(parsed.error).slice(0, 12) };
-  const refs = validateReferences(parsed.data as unknown as Sketch);
-  if (refs.length) return { ok: false, errors: refs.slice(0, 12) };
   return { ok: true, sketch: parsed.data, migratedFrom: migrated.applied };
 }
 

@@ -8,7 +8,7 @@ import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { SolveResult, Vec2 } from "./types";
 import { convert, formatNumber, unitsFor, type Quantity, type UnitSystem } from "./units";
-import { degreesOffDown, gravityNote } from "./words";
+import { gravityActs } from "./words";
 
 export type Cell = string | number | null;
 
@@ -381,9 +381,9 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
   const gv = parsed.fields.gravity;
   const ga = parsed.fields.gravityAngle;
   const angle = ga && "value" in ga ? ga.value : -90;
-  const turned = gravityNote(angle);
-  const acts = turned ? `acts at ${formatNumber(angle)}° from +x, ${formatNumber(degreesOffDown(angle))}° off −y${typeof parsed.file.gravityAngle === "string" ? ` (${parsed.file.gravityAngle})` : ""}` : "acts in −y";
-  rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (${acts})`]);
+  const acts = gravityActs(angle);
+  const typed = typeof parsed.file.gravityAngle === "string" && acts !== "acts in −y" ? ` (${parsed.file.gravityAngle})` : "";
+  rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (${acts}${typed})`]);
   return {
     id: "inputs",
     title: "Elements (as typed; expressions with their values in SI units, angles in degrees)",

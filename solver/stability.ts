@@ -10,7 +10,7 @@
 import { dot3 } from "./linalg";
 import type { BodyModel } from "./model";
 import { direction, momentOf } from "./geometry";
-import type { BodyResult, Reaction, Vec2 } from "./types";
+import type { BodyResult, ContactSupport, Reaction, Vec2 } from "./types";
 
 export interface OverturningCheck {
   factor: number;
@@ -81,7 +81,7 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
       // each force counts by its components across and along the base the body stands on (the
       // contact's normal and tangent), as an inclined thrust or a weight on a slope is resolved
       // by hand: the part pressing the body down restores, the part pushing it over overturns
-      const n = s.kind === "contact" ? direction(s.angle) : ([0, 1] as Vec2);
+      const n = direction((s as ContactSupport).angle); // the pivots are contacts
       const tan: Vec2 = [-n[1], n[0]];
       const resolved = (t: { fx: number; fy: number; at?: Vec2 }, sign: number) => {
         if (!t.at) return;

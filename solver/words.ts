@@ -40,9 +40,21 @@ export function degreesOffDown(angle: number): number {
   return Math.abs(((((angle + 90) % 360) + 540) % 360) - 180);
 }
 
-/** "gravity at −65°, 25° off −y", or null when gravity acts down the page (or is not given). */
-export function gravityNote(angle: number | undefined): string | null {
+/** "at −65° from +x, 25° off −y"-style words for a turned gravity, or null when it acts down the page (or is not given). */
+function turnWords(angle: number | undefined, fromX: string): string | null {
   if (angle === undefined || !Number.isFinite(angle)) return null;
   const off = degreesOffDown(angle);
-  return off < 1e-9 ? null : `gravity at ${formatNumber(angle)}°, ${formatNumber(off)}° off −y`;
+  return off < 1e-9 ? null : `at ${formatNumber(angle)}°${fromX}, ${formatNumber(off)}° off −y`;
+}
+
+/** "gravity at −65°, 25° off −y", or null when gravity acts down the page (or is not given). */
+export function gravityNote(angle: number | undefined): string | null {
+  const words = turnWords(angle, "");
+  return words && `gravity ${words}`;
+}
+
+/** "acts at −65° from +x, 25° off −y", or "acts in −y". */
+export function gravityActs(angle: number): string {
+  const words = turnWords(angle, " from +x");
+  return words ? `acts ${words}` : "acts in −y";
 }

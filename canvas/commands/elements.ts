@@ -1,7 +1,7 @@
 // Adding, deleting, duplicating and re-attaching elements.
 import type { Numeric, SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
-import { childrenOf, elementIndex, findElement, GROUP_OF, nextId, type AnyElement, type Attached, type ElementKind, type Group } from "../model/elements";
+import { childrenOf, elementIndex, findElement, GROUP_OF, nextId, withAttached, type AnyElement, type Attached, type ElementKind, type Group } from "../model/elements";
 import { defineCommand, edit, plural } from "./define";
 import { shiftElement } from "./move";
 
@@ -25,22 +25,12 @@ export const addElement = defineCommand<{ kind: ElementKind; element: AnyElement
   select: (before, after) => newIds(before, after),
 });
 
-/** Every id to delete: the given ones and the elements of deleted bodies. */
-function withChildren(sketch: SketchFile, ids: readonly string[]): Set<string> {
-  const out = new Set(ids.filter((id) => findElement(sketch, id)));
-  for (const id of ids) {
-    const l = findElement(sketch, id);
-    if (l?.group === "bodies") for (const c of childrenOf(sketch, id)) out.add(c.el.id);
-  }
-  return out;
-}
-
 export const deleteElements = defineCommand<{ ids: string[] }>({
   name: "deleteElements",
-  label: ({ ids }, sketch) => `Delete ${plural(withChildren(sketch, ids).size, "element")}`,
+  label: ({ ids }, sketch) => `Delete ${plural(withAttached(sketch, ids).size, "element")}`,
   undoable: true,
   run: (sketch, { ids }) => {
-    const gone = withChildren(sketch, ids);
+    const gone = withAttached(sketch, ids);
     if (!gone.size) return sketch;
     return edit(sketch, (d) => {
       for (const g of Object.keys(GROUP_NAMES) as Group[]) {
@@ -124,7 +114,8 @@ export const pasteElements = defineCommand<{ copies: Array<{ group: Group; el: A
   run: (sketch, { copies, parameters }) => {
     if (!copies.length || copies.some((c) => findElement(sketch, c.el.id))) return sketch;
     return edit(sketch, (d) => {
-      for (const [name, expr] of Object.entries(parameters)) if (!(name in (d.parameters ?? {}))) d.parameters = { ...(d.parameters ?? {}), [name]: expr };
+      const own = (d.parameters ??= {});
+      for (const [name, expr] of Object.entries(parameters)) if (!(name in own)) own[name] = expr;
       for (const c of copies) (d[c.group] as AnyElement[]).push(structuredClone(c.el));
     });
   },

@@ -2,7 +2,7 @@
 // plus the total delta, so rounding never accumulates.
 import type { Numeric, SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
-import { childrenOf, findElement, type AnyElement, type Attached, type ElementKind } from "../model/elements";
+import { findElement, withAttached, type AnyElement, type Attached, type ElementKind } from "../model/elements";
 import { plainNumber, roundTo } from "../model/numeric";
 import { defineCommand, edit, plural } from "./define";
 
@@ -52,14 +52,8 @@ export const moveElement = defineCommand<MoveArgs>({
   undoable: true,
   run: (sketch, { ids, delta, lookup }) => {
     if (delta[0] === 0 && delta[1] === 0) return sketch;
-    const moving = new Set<string>();
-    for (const id of ids) {
-      const l = findElement(sketch, id);
-      if (!l) continue;
-      moving.add(id);
-      // a body carries its supports, loads and ports with it
-      if (l.group === "bodies") for (const c of childrenOf(sketch, id)) moving.add(c.el.id);
-    }
+    // a body carries its supports, loads and ports with it
+    const moving = withAttached(sketch, ids);
     if (!moving.size) return sketch;
     return edit(sketch, (d) => {
       for (const id of moving) {

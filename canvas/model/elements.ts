@@ -143,6 +143,18 @@ export function childrenOf(sketch: SketchFile, bodyId: string): Located[] {
   return allElements(sketch).filter((l) => l.group !== "bodies" && (l.el as Attached).body === bodyId);
 }
 
+/** The ids that exist, and the supports, loads and ports of the bodies among them (a body brings its elements). */
+export function withAttached(sketch: SketchFile, ids: readonly string[]): Set<string> {
+  const out = new Set<string>();
+  for (const id of ids) {
+    const l = findElement(sketch, id);
+    if (!l) continue;
+    out.add(id);
+    if (l.group === "bodies") for (const c of childrenOf(sketch, id)) out.add(c.el.id);
+  }
+  return out;
+}
+
 const PREFIX: Record<Group, string> = { bodies: "b", supports: "s", loads: "l", ports: "p", massSources: "ms" };
 
 /** The next free id for a group: b1, b2… (never reusing an id in the sketch or in `taken`). */
