@@ -92,3 +92,27 @@ export const FORCE_COMPONENTS: NumberFieldDef[] = [
   { key: "fx", label: "Fx", display: "force", example: "0 N" },
   { key: "fy", label: "Fy", display: "force", example: "-2 kN" },
 ];
+
+/** Fields of the sketch itself and of every element that the properties form writes outside FORM. */
+const OTHER_FIELDS: Record<string, string> = {
+  title: "Title",
+  description: "Notes",
+  gravity: "Gravity",
+  gravityAngle: "Gravity direction",
+  motion: "Motion of the body",
+  label: "Label",
+  body: "Belongs to",
+  group: "Load group",
+  outline: "Outline",
+  kind: "Kind",
+};
+
+/** The words the properties form uses for a field of an element of this kind ("Gravity direction"
+ *  for `gravityAngle`, "Flow direction" for a port's `angle`), for tables that list changed fields. */
+export function fieldLabel(kind: string, key: string): string {
+  const defs: FieldDef[] = kind in FORM ? FORM[kind as ElementKind] : [];
+  const own = [...defs, ...(kind === "force" ? [...FORCE_POLAR, ...FORCE_COMPONENTS] : [])].find((d) => d.key === key);
+  if (own) return own.label;
+  if (key === "group" && kind === "body") return "Load group of its weight";
+  return OTHER_FIELDS[key] ?? key;
+}

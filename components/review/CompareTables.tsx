@@ -1,5 +1,6 @@
 // The tables of a comparison: reactions before and after with the change, and every changed input.
 import { Fragment } from "react";
+import { fieldLabel } from "@/components/editor/fieldDefs";
 import { formatForce } from "@/components/sketches/format";
 import type { Comparison, FieldChange, ReactionChange, ReactionSnapshot } from "@/lib/review/compare";
 import { formatNumber, formatQuantity, type UnitSystem } from "@/solver/units";
@@ -63,7 +64,8 @@ export function ReactionsTable({ comparison, units = "SI" }: { comparison: Compa
   );
 }
 
-function Rows({ group, rows }: { group: string; rows: FieldChange[] }) {
+/** Rows of one group; `kind` (an element kind, or "sketch") turns file field names into the properties form's words. */
+function Rows({ group, rows, kind }: { group: string; rows: FieldChange[]; kind?: string }) {
   return (
     <>
       {rows.map((f, i) => (
@@ -72,7 +74,7 @@ function Rows({ group, rows }: { group: string; rows: FieldChange[] }) {
             {/* the group is written once on screen, and read as the header of every row in it */}
             {i === 0 ? group : <span className="sr-only">{group}</span>}
           </th>
-          <td className="py-1.5 pr-3 text-ink-soft">{f.field}</td>
+          <td className="py-1.5 pr-3 text-ink-soft">{kind ? fieldLabel(kind, f.field) : f.field}</td>
           <td className="num py-1.5 pr-3">{f.before ?? <span className="text-ink-faint">—</span>}</td>
           <td className="py-1.5 pr-1 text-ink-faint" aria-hidden="true">
             →
@@ -121,12 +123,12 @@ export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
             </tr>
           </thead>
           <tbody>
-            <Rows group="Sketch" rows={c.sketch} />
+            <Rows group="Sketch" rows={c.sketch} kind="sketch" />
             <Rows group="Parameters" rows={params} />
             <Rows group="Cases and studies" rows={studies} />
             {c.elements.changed.map((e) => (
               <Fragment key={e.id}>
-                <Rows group={`${e.label} (${e.kind})`} rows={e.fields} />
+                <Rows group={`${e.label} (${e.kind})`} rows={e.fields} kind={e.kind} />
               </Fragment>
             ))}
           </tbody>

@@ -147,6 +147,14 @@ function show(raw: unknown, path: string, field: string, fields: ParseResult["fi
   return JSON.stringify(raw);
 }
 
+/** "ax 0.5 m/s², free to move in x": the prescribed motion in words. */
+function motionText(m: SketchFile["motion"], fields: ParseResult["fields"], units: UnitSystem): string | null {
+  if (!m) return null;
+  const bits = (["ax", "ay"] as const).filter((k) => m[k] !== undefined).map((k) => `${k} ${show(m[k], `motion.${k}`, k, fields, units)}`);
+  if (m.freeX) bits.push("free to move in x");
+  return bits.length ? bits.join(", ") : "none";
+}
+
 function outlineChange(before: unknown[], after: unknown[], units: UnitSystem): FieldChange {
   if (before.length !== after.length) return { field: "outline", before: `${before.length} corners`, after: `${after.length} corners` };
   const moved = before.map((p, i) => (same(p, after[i]) ? null : i)).filter((i): i is number => i !== null);
@@ -278,7 +286,7 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: Uni
   const sketch: FieldChange[] = [];
   for (const k of ["title", "description", "gravity", "gravityAngle", "motion"] as const) {
     if (same(A.file[k], B.file[k])) continue;
-    if (k === "motion") sketch.push({ field: "motion", before: A.file.motion ? JSON.stringify(A.file.motion) : null, after: B.file.motion ? JSON.stringify(B.file.motion) : null });
+    if (k === "motion") sketch.push({ field: "motion", before: motionText(A.file.motion, fa, units), after: motionText(B.file.motion, fb, units) });
     else sketch.push({ field: k, before: show(A.file[k], k, k, fa, units), after: show(B.file[k], k, k, fb, units) });
   }
 

@@ -153,3 +153,27 @@ describe("a shared frame for the overlaid drawings", () => {
     expect(sharedFrame([{ file: { format: "nope" } as never, result: null }], 800, 600)).toBeUndefined();
   });
 });
+
+describe("the changed fields in the properties form's words", () => {
+  it("names gravity's direction, a port's flow direction and β, the motion and the load group as the form does, not by file key", () => {
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any
+    const b: any = structuredClone(before);
+    b.version = CURRENT_VERSION;
+    b.gravityAngle = "-95 deg";
+    b.motion = { ax: "0.5 m/s^2", freeX: false };
+    const nozzle = b.ports.find((p: { id: string }) => p.id === "nozzle");
+    nozzle.angle = "theta + 5 deg";
+    nozzle.beta = 1.02;
+    nozzle.group = "jet";
+    const c = compareSketches(before, b);
+    render(<ChangesTable comparison={c} />);
+    const rows = [...screen.getByTestId("field-changes").querySelectorAll("tbody tr")].map((r) => [...r.querySelectorAll("td")].map((td) => td.textContent));
+    expect(rows).toContainEqual(["Gravity direction", "—", "→", "-95 deg (= −95°)"]);
+    expect(rows).toContainEqual(["Motion of the body", "—", "→", "ax 0.5 m/s^2 (= 0.5 m/s²)"]);
+    expect(rows).toContainEqual(["Flow direction", "theta (= 15°)", "→", "theta + 5 deg (= 20°)"]);
+    expect(rows).toContainEqual(["Momentum-flux factor β", "—", "→", "1.02"]);
+    expect(rows).toContainEqual(["Load group", "—", "→", "jet"]);
+    // no file key is shown
+    for (const key of ["gravityAngle", "beta", "motion", "group", "angle"]) expect(rows.map((r) => r[0])).not.toContain(key);
+  });
+});
