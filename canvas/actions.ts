@@ -10,6 +10,7 @@ import { moveElement } from "./commands/move";
 import { rotateElement } from "./commands/shape";
 import { DIRECTED, findElement, GROUPS, type ElementKind } from "./model/elements";
 import { defaultBodySize, polygonAround, rectangleAround } from "./model/factory";
+import { valueLookup } from "./analysis/store";
 import { fitScene } from "./geometry/fit";
 import { snapTo } from "./geometry/snap";
 import { gridStep, toWorld, zoomAt } from "./geometry/view";
@@ -123,7 +124,7 @@ function nudge(id: string, label: string, key: string, d: Vec2, far: boolean): A
     run: (ctx) => {
       const s = ed(ctx);
       const step = gridStep(s.view.scale) * (far ? 10 : 1);
-      s.apply(moveElement({ ids: s.selection, delta: [d[0] * step, d[1] * step] }) as Command<unknown>);
+      s.apply(moveElement({ ids: s.selection, delta: [d[0] * step, d[1] * step], lookup: valueLookup(ctx.stores.analysis) }) as Command<unknown>);
     },
   };
 }
@@ -210,7 +211,7 @@ export const ACTIONS: readonly Action[] = [
     run: (c) => {
       const s = ed(c);
       const g = gridStep(s.view.scale);
-      s.apply(duplicateElements({ ids: s.selection, offset: [2 * g, -2 * g] }) as Command<unknown>);
+      s.apply(duplicateElements({ ids: s.selection, offset: [2 * g, -2 * g], lookup: valueLookup(c.stores.analysis) }) as Command<unknown>);
     },
   },
   {

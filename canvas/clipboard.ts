@@ -5,8 +5,10 @@
 import { compileExpression } from "@/solver/expressions";
 import { CURRENT_VERSION, FORMAT, type Numeric, type SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
-import { shiftElement } from "./commands/move";
+import { resolveSketch } from "@/solver/resolve";
+import { shiftElement, type ValueOf } from "./commands/move";
 import { checkSketchJson } from "./files";
+import { fieldValuesById } from "./scene";
 import { findElement, GROUPS, kindOf, nextId, type AnyElement, type Attached, type Group, withAttached } from "./model/elements";
 
 /** The clipboard's format marker (a sketch file's is FORMAT). */
@@ -108,6 +110,13 @@ export function readFragment(text: string): ReadFragment | null {
   };
 }
 
+/** The values of the fragment's expression fields, evaluated with the parameters copied with it. */
+function fragmentValues(fragment: Fragment): ValueOf {
+  const file: SketchFile = { format: FORMAT, version: CURRENT_VERSION, parameters: fragment.parameters, bodies: fragment.bodies, supports: fragment.supports, loads: fragment.loads, ports: fragment.ports, massSources: fragment.massSources };
+  const { values } = fieldValuesById(file, resolveSketch(file).fields);
+  return (id, field) => values.get(`${id}.${field}`);
+}
+
 export interface PastePlan {
   copies: Array<{ group: Group; el: AnyElement }>;
   /** parameters the target lacks, added with the elements */
@@ -151,9 +160,12 @@ export function planPaste(target: SketchFile, fragment: Fragment, opts: { attach
 
   // move the copies on until they no longer lie exactly on elements already there
   const taken = new Set(GROUPS.flatMap((g) => (target[g] as AnyElement[]).map((e) => `${g}:${spot(g, e)}`)));
+  // a coordinate written as an expression cannot move by itself: moved copies take its value (as
+  // copied, with the copied parameters) plus the offset; copies that need no move keep it as written
+  const valueOf = fragmentValues(fragment);
   const first = all[0];
   let offset: Vec2 = [0, 0];
-  for (let k = 1; k < 50 && taken.has(`${first.group}:${spot(first.group, shiftElement(first.el, kindOf(first.group, first.el), offset))}`); k++) {
+  for (let k = 1; k < 50 && taken.has(`${first.group}:${spot(first.group, shiftElement(first.el, kindOf(first.group, first.el), offset, valueOf))}`); k++) {
     offset = [2 * k * opts.step, -2 * k * opts.step];
   }
 
@@ -165,7 +177,7 @@ export function planPaste(target: SketchFile, fragment: Fragment, opts: { attach
     newId.set(el.id, id);
   }
   const copies = all.map(({ group, el }) => {
-    const moved = structuredClone(shiftElement(el, kindOf(group, el), offset)) as AnyElement;
+    const moved = structuredClone(shiftElement(el, kindOf(group, el), offset, valueOf)) as AnyElement;
     moved.id = newId.get(el.id)!;
     if (group !== "bodies") {
       const a = moved as Attached;

@@ -165,3 +165,9 @@ export function connectAnalysis(editor: EditorStore, runner: Runner = syncRunner
   const store = createAnalysisStore();
   return { store, stop: linkAnalysis(editor, store, runner) };
 }
+
+/** The last analysis's value of an element's expression field ("s2", "at[0]"), for commands that
+ *  move or copy an element placed by an expression (it becomes a number there). */
+export function valueLookup(store: AnalysisStore) {
+  return (id: string, field: string): number | undefined => store.getState().fieldValues.values.get(`${id}.${field}`);
+}

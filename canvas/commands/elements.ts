@@ -3,7 +3,7 @@ import type { Numeric, SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
 import { childrenOf, elementIndex, findElement, GROUP_OF, nextId, withAttached, type AnyElement, type Attached, type ElementKind, type Group } from "../model/elements";
 import { defineCommand, edit, plural } from "./define";
-import { shiftElement } from "./move";
+import { shiftElement, type ValueOf } from "./move";
 
 /** Ids in `after` that were not in `before`, in file order. */
 export function newIds(before: SketchFile, after: SketchFile): string[] {
@@ -45,7 +45,7 @@ export const deleteElements = defineCommand<{ ids: string[] }>({
 const GROUP_NAMES: Record<Group, true> = { bodies: true, supports: true, loads: true, ports: true, massSources: true };
 
 /** The copies a duplicate makes: bodies bring their elements along. Deterministic, so `select` can replay it. */
-export function planDuplicate(sketch: SketchFile, ids: readonly string[], offset: Vec2) {
+export function planDuplicate(sketch: SketchFile, ids: readonly string[], offset: Vec2, lookup?: ValueOf) {
   const chosen = ids.filter((id) => findElement(sketch, id));
   const taken = new Set<string>();
   const copies: Array<{ group: Group; el: AnyElement }> = [];
@@ -59,10 +59,11 @@ export function planDuplicate(sketch: SketchFile, ids: readonly string[], offset
     const l = findElement(sketch, id)!;
     const nid = fresh(l.group);
     copyOf.set(id, nid);
-    const el = structuredClone(l.el) as AnyElement;
+    // shifted under the original's id, so an expression coordinate is read from the original's value
+    const el = structuredClone(shiftElement(l.el, l.kind, offset, lookup)) as AnyElement;
     el.id = nid;
     if (l.group !== "bodies") (el as Attached).body = body ?? copyOf.get((el as Attached).body) ?? (el as Attached).body;
-    copies.push({ group: l.group, el: shiftElement(el, l.kind, offset) });
+    copies.push({ group: l.group, el });
     return nid;
   };
   for (const id of chosen) {
@@ -74,12 +75,14 @@ export function planDuplicate(sketch: SketchFile, ids: readonly string[], offset
   return { copies, copyOf, chosen };
 }
 
-export const duplicateElements = defineCommand<{ ids: string[]; offset: Vec2 }>({
+/** `lookup` gives the values of expression coordinates: a copy of an element placed by an
+ *  expression lands at its value plus the offset (as a number), not on the original. */
+export const duplicateElements = defineCommand<{ ids: string[]; offset: Vec2; lookup?: ValueOf }>({
   name: "duplicateElements",
   label: ({ ids }) => `Duplicate ${plural(ids.length, "element")}`,
   undoable: true,
-  run: (sketch, { ids, offset }) => {
-    const { copies } = planDuplicate(sketch, ids, offset);
+  run: (sketch, { ids, offset, lookup }) => {
+    const { copies } = planDuplicate(sketch, ids, offset, lookup);
     if (!copies.length) return sketch;
     return edit(sketch, (d) => {
       for (const c of copies) (d[c.group] as AnyElement[]).push(c.el);

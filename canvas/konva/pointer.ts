@@ -2,6 +2,7 @@
 // step), turn, reshape, rubber-band select, draw bodies, pan and zoom. Drags listen on the
 // window so they continue when the pointer leaves the canvas.
 import type { Vec2 } from "@/solver/types";
+import { valueLookup } from "../analysis/store";
 import { moveElement, moveCentreOfGravity } from "../commands/move";
 import { rotateElement, reshapeBody } from "../commands/shape";
 import type { Command } from "../commands/define";
@@ -87,7 +88,7 @@ export function createPointerController(deps: PointerDeps) {
     interaction.setState({ lifted: out });
   }
 
-  const valueOf = (id: string, field: string) => stores.analysis.getState().fieldValues.values.get(`${id}.${field}`);
+  const valueOf = valueLookup(stores.analysis);
 
   function startWindowDrag() {
     window.addEventListener("pointermove", onDragMove);

@@ -107,6 +107,59 @@ describe("where the copies land", () => {
   });
 });
 
+describe("elements placed by expressions", () => {
+  /** The skid with its length a parameter: the front foot and the nozzle sit at x = L. */
+  function parametric(): SketchFile {
+    const s = skid();
+    s.parameters = { ...s.parameters, L: "2 m" };
+    s.supports[1].at = ["L", 0];
+    s.ports[0].at = ["L", "L/2"];
+    return s;
+  }
+
+  it("pasted into the same sketch, the moved copies take the expression's value plus the offset (they do not land on the originals)", () => {
+    const s = parametric();
+    const out = planPaste(s, copyFragment(s, ["s2", "p1"])!, { step: 0.1 });
+    if (!out.ok) throw new Error(out.reason);
+    // the first copy at the original's place is taken, so both move two grid steps: L = 2 m, L/2 = 1 m
+    expect((out.plan.copies[0].el as { at: unknown[] }).at).toEqual([2.2, -0.2]);
+    expect((out.plan.copies[1].el as { at: unknown[] }).at).toEqual([2.2, 0.8]);
+  });
+
+  it("pasted into another sketch where the place is free, expressions stay as written and L comes along", () => {
+    const s = parametric();
+    const target: SketchFile = { ...emptySketch(), bodies: [newBody("frame", [[0, 0], [3, 0], [3, 1], [0, 1]])] };
+    const out = planPaste(target, copyFragment(s, ["s2", "p1"])!, { step: 0.1 });
+    if (!out.ok) throw new Error(out.reason);
+    expect((out.plan.copies[0].el as { at: unknown[] }).at).toEqual(["L", 0]);
+    expect((out.plan.copies[1].el as { at: unknown[] }).at).toEqual(["L", "L/2"]);
+    expect(out.plan.parameters).toMatchObject({ L: "2 m" });
+  });
+
+  it("duplicate and the arrow keys move them too, by the analysed value", async () => {
+    const { ACTIONS } = await import("@/canvas/actions");
+    const { createAnalysisStore, linkAnalysis } = await import("@/canvas/analysis/store");
+    const editor = createEditorStore({ sketch: parametric() });
+    const analysis = createAnalysisStore();
+    const stop = linkAnalysis(editor, analysis);
+    const ctx = { stores: { editor, analysis } as never, controller: null, ui: {} as ActionContext["ui"] } as ActionContext;
+    const run = (id: string) => ACTIONS.find((a) => a.id === id)!.run(ctx);
+    const step = gridStep(editor.getState().view.scale);
+    editor.getState().select(["s2"]);
+    run("edit.duplicate");
+    const copy = editor.getState().sketch.supports.at(-1)!;
+    expect(copy.id).not.toBe("s2");
+    expect(copy.at[0]).toBeCloseTo(2 + 2 * step, 9);
+    expect(copy.at[1]).toBeCloseTo(-2 * step, 9);
+    editor.getState().select(["p1"]);
+    run("edit.nudgeRight");
+    expect(editor.getState().sketch.ports[0].at[0]).toBeCloseTo(2 + step, 9);
+    // y did not move: it keeps its expression
+    expect(editor.getState().sketch.ports[0].at[1]).toBe("L/2");
+    stop();
+  });
+});
+
 describe("copy, cut and paste in the editor", () => {
   it("copy then paste twice: each paste lands further on, is one undo step, and is selected; the result solves", () => {
     const { editor, ctx } = ctxOf(skid());
