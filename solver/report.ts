@@ -28,22 +28,56 @@ export interface CellMark {
   text: string;
 }
 
-/** The fixed display unit of a column: kN / kN·m in SI, lbf / lbf·ft in US. */
-export function columnUnit(q: Quantity, system: UnitSystem): string {
+/** Below this (N, or N·m) a whole SI table is written in N (N·m) rather than kN (kN·m): a fan cart's 52 N, not 0.052 kN. */
+const SMALL_SI = 999.95;
+
+/**
+ * The display unit of a table's force or moment columns: kN / kN·m in SI, lbf / lbf·ft in US. Given
+ * `largest` (the largest magnitude in the table, SI), an SI table whose every value is below 1 kN
+ * (1 kN·m) is written in N (N·m). One unit per table, so its numbers compare at a glance.
+ */
+export function columnUnit(q: Quantity, system: UnitSystem, largest?: number): string {
   const preferred: Partial<Record<Quantity, Record<UnitSystem, string>>> = {
     force: { SI: "kN", US: "lbf" },
     moment: { SI: "kN·m", US: "lbf·ft" },
   };
+  if (system === "SI" && largest !== undefined && largest > 0 && largest < SMALL_SI) {
+    if (q === "force") return "N";
+    if (q === "moment") return "N·m";
+  }
   return preferred[q]?.[system] ?? unitsFor(q, system)[0];
 }
 
-const inUnit = (v: number | undefined, q: Quantity, system: UnitSystem): number | null =>
-  v === undefined || !Number.isFinite(v) ? null : convert(v, q, system, columnUnit(q, system)).value;
+/** The largest finite magnitude of some values (0 when there are none). */
+function largestOf(values: Iterable<number | null | undefined>): number {
+  let m = 0;
+  for (const v of values) if (v !== null && v !== undefined && Number.isFinite(v)) m = Math.max(m, Math.abs(v));
+  return m;
+}
+
+/** A table's force and moment units, from the largest of each it shows. */
+type Units = { system: UnitSystem; force: string; moment: string };
+function tableUnits(system: UnitSystem, forces: Iterable<number | null | undefined>, moments: Iterable<number | null | undefined>): Units {
+  const f = largestOf(forces);
+  const m = largestOf(moments);
+  // moments all zero (no fixed support): they follow the forces, N with N·m
+  return { system, force: columnUnit("force", system, f), moment: columnUnit("moment", system, m || f) };
+}
+
+/** The unit of a quantity in a table: its force or moment unit, or the usual one (length, angle…). */
+const unitOf = (q: Quantity, u: Units) => (q === "force" ? u.force : q === "moment" ? u.moment : columnUnit(q, u.system));
+
+/** A value in its column's unit, or null when there is none. */
+function inUnit(v: number | undefined, q: Quantity, u: Units): number | null {
+  return v === undefined || !Number.isFinite(v) ? null : convert(v, q, u.system, unitOf(q, u)).value;
+}
 
 /** Reactions of one run, one row per support (force on the body, or load on the support). */
 export function reactionTable(result: SolveResult, system: UnitSystem, opts: { onSupport?: boolean; id?: string; title?: string } = {}): Table {
-  const f = columnUnit("force", system);
-  const m = columnUnit("moment", system);
+  const all = Object.values(result.reactions);
+  const u = tableUnits(system, all.flatMap((r) => [Math.hypot(r.fx, r.fy), r.n, r.t, r.margin]), all.map((r) => r.m));
+  const f = u.force;
+  const m = u.moment;
   const sign = opts.onSupport ? -1 : 1;
   return {
     id: opts.id ?? "reactions",
@@ -68,15 +102,15 @@ export function reactionTable(result: SolveResult, system: UnitSystem, opts: { o
       return [
         id,
         r.kind,
-        inUnit(fx, "force", system),
-        inUnit(fy, "force", system),
-        inUnit(res, "force", system),
+        inUnit(fx, "force", u),
+        inUnit(fy, "force", u),
+        inUnit(res, "force", u),
         res > 0 ? Number(((Math.atan2(fy, fx) * 180) / Math.PI).toFixed(2)) : null,
-        inUnit(sign * r.m, "moment", system),
-        inUnit(r.n === undefined ? undefined : sign * r.n, "force", system),
-        inUnit(r.t === undefined ? undefined : sign * r.t, "force", system),
+        inUnit(sign * r.m, "moment", u),
+        inUnit(r.n === undefined ? undefined : sign * r.n, "force", u),
+        inUnit(r.t === undefined ? undefined : sign * r.t, "force", u),
         r.state,
-        inUnit(r.margin, "force", system),
+        inUnit(r.margin, "force", u),
       ];
     }),
     notes: opts.onSupport ? ["Loads on the supports are the reactions with the sign reversed (what an anchor must carry)."] : undefined,
@@ -107,8 +141,10 @@ function governs(env: SupportEnvelope, c: Component, run: string): "max" | "min"
 /** Every support in every case: the table of the studies. The governing case of each component is
  *  marked in its cell (▲ by its maximum, ▼ by its minimum) and named in the "Governs" column. */
 export function caseReactionTable(study: StudyResult, system: UnitSystem): Table {
-  const f = columnUnit("force", system);
-  const m = columnUnit("moment", system);
+  const all = study.runs.flatMap((run) => (run.ok ? Object.values(run.result.reactions) : []));
+  const u = tableUnits(system, all.flatMap((r) => [Math.hypot(r.fx, r.fy), r.n, r.t]), all.map((r) => r.m));
+  const f = u.force;
+  const m = u.moment;
   const rows: Cell[][] = [];
   const marks: Table["marks"] = [];
   const excluded = new Set((study.excluded ?? []).map((e) => `${e.case}/${e.body}`));
@@ -142,12 +178,12 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem): Table
       rows.push([
         run.name,
         id,
-        inUnit(r.fx, "force", system),
-        inUnit(r.fy, "force", system),
-        inUnit(Math.hypot(r.fx, r.fy), "force", system),
-        inUnit(r.m, "moment", system),
-        inUnit(r.n, "force", system),
-        inUnit(r.t, "force", system),
+        inUnit(r.fx, "force", u),
+        inUnit(r.fy, "force", u),
+        inUnit(Math.hypot(r.fx, r.fy), "force", u),
+        inUnit(r.m, "moment", u),
+        inUnit(r.n, "force", u),
+        inUnit(r.t, "force", u),
         r.state,
         words.join("; "),
       ]);
@@ -189,6 +225,8 @@ function envelopeComponents(env: SupportEnvelope): Component[] {
 export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
   const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
   const rows: Cell[][] = [];
+  const extremes = (c: Component) => Object.values(study.envelope).flatMap((env) => (env.components[c] ? [env.components[c]!.max.value, env.components[c]!.min.value] : []));
+  const u = tableUnits(system, (["fx", "fy", "n", "t", "margin"] as const).flatMap(extremes), extremes("m"));
   for (const [id, env] of Object.entries(study.envelope)) {
     for (const c of envelopeComponents(env)) {
       const e = env.components[c]!;
@@ -196,7 +234,7 @@ export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
       const gov = env.governing[c];
       // a component that is zero in every case (a frictionless contact's t) has no governing case
       const zero = Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING;
-      rows.push([id, COMPONENT_LABEL[c], columnUnit(q, system), inUnit(e.max.value, q, system), name(e.max.case), inUnit(e.min.value, q, system), name(e.min.case), zero ? "none (zero in every case)" : gov ? name(gov) : ""]);
+      rows.push([id, COMPONENT_LABEL[c], unitOf(q, u), inUnit(e.max.value, q, u), name(e.max.case), inUnit(e.min.value, q, u), name(e.min.case), zero ? "none (zero in every case)" : gov ? name(gov) : ""]);
     }
   }
   return {
@@ -222,8 +260,10 @@ export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
 
 /** Each support's design load: its largest resultant over the cases, with its direction. */
 export function designLoadTable(study: StudyResult, system: UnitSystem): Table {
-  const f = columnUnit("force", system);
-  const m = columnUnit("moment", system);
+  const designs = Object.values(study.envelope).map((env) => env.design);
+  const u = tableUnits(system, designs.map((d) => d.resultant), designs.map((d) => d.m));
+  const f = u.force;
+  const m = u.moment;
   const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
   return {
     id: "design-loads",
@@ -239,11 +279,11 @@ export function designLoadTable(study: StudyResult, system: UnitSystem): Table {
     ],
     rows: Object.entries(study.envelope).map(([id, env]) => [
       id,
-      inUnit(env.design.resultant, "force", system),
+      inUnit(env.design.resultant, "force", u),
       Number(env.design.angle.toFixed(2)),
-      inUnit(env.design.fx, "force", system),
-      inUnit(env.design.fy, "force", system),
-      inUnit(env.design.m, "moment", system),
+      inUnit(env.design.fx, "force", u),
+      inUnit(env.design.fy, "force", u),
+      inUnit(env.design.m, "moment", u),
       name(env.design.case),
     ]),
     notes: ["The design load of a support is its largest resultant over all cases and combinations in which its body is held, with its direction (force on the body)."],
@@ -254,16 +294,20 @@ export function designLoadTable(study: StudyResult, system: UnitSystem): Table {
  *  friction available and the force that drives sliding. */
 export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): Table {
   const rows: Cell[][] = [];
+  const checks = (study.runs as CaseRun[]).flatMap((run) => (run.ok ? Object.values(run.stability) : []));
+  const figures = (s: { restoring?: number; overturning?: number; available?: number; driving?: number } | { notApplicable: string }) =>
+    "notApplicable" in s ? [] : [s.restoring, s.overturning, s.available, s.driving];
+  const u = tableUnits(system, checks.flatMap((c) => figures(c.sliding)), checks.flatMap((c) => figures(c.overturning)));
   const verdict = (s: { factor: number; required: number; pass: boolean }) => [Number.isFinite(s.factor) ? Number(s.factor.toFixed(3)) : "∞", s.required, s.pass ? "pass" : "FAIL"];
   for (const run of study.runs as CaseRun[]) {
     if (!run.ok) continue;
     for (const [body, st] of Object.entries(run.stability)) {
       const ot = st.overturning;
       if ("notApplicable" in ot) rows.push([run.name, body, "overturning", null, null, "", null, null, ot.notApplicable, ""]);
-      else rows.push([run.name, body, "overturning", inUnit(ot.restoring, "moment", system), inUnit(ot.overturning, "moment", system), columnUnit("moment", system), ...verdict(ot), ot.about]);
+      else rows.push([run.name, body, "overturning", inUnit(ot.restoring, "moment", u), inUnit(ot.overturning, "moment", u), u.moment, ...verdict(ot), ot.about]);
       const sl = st.sliding;
       if ("notApplicable" in sl) rows.push([run.name, body, "sliding", null, null, "", null, null, sl.notApplicable, ""]);
-      else rows.push([run.name, body, "sliding", inUnit(sl.available, "force", system), inUnit(sl.driving, "force", system), columnUnit("force", system), ...verdict(sl), ""]);
+      else rows.push([run.name, body, "sliding", inUnit(sl.available, "force", u), inUnit(sl.driving, "force", u), u.force, ...verdict(sl), ""]);
     }
   }
   return {
@@ -292,18 +336,24 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
 /** The hand check: every term with its components, point of action and moment about `about`. */
 export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem): Table {
   const eq = result.equations[bodyId];
-  const f = columnUnit("force", system);
-  const m = columnUnit("moment", system);
+  const sums = handCheckSums(eq, about);
+  const terms = [...eq.forces, ...eq.momentum];
+  const u = tableUnits(
+    system,
+    [...terms.flatMap((t) => [t.fx, t.fy]), sums.forces.fx, sums.forces.fy, sums.momentum.fx, sums.momentum.fy],
+    [...terms.map((t) => termMomentAbout(t, about)), sums.forces.m, sums.momentum.m],
+  );
+  const f = u.force;
+  const m = u.moment;
   const L = columnUnit("length", system);
   const row = (side: string, t: (typeof eq.forces)[number], sign: number): Cell[] => [
     side,
     t.label,
-    inUnit(sign * t.fx, "force", system),
-    inUnit(sign * t.fy, "force", system),
-    t.at ? `(${inUnit(t.at[0], "length", system)!.toPrecision(4)}, ${inUnit(t.at[1], "length", system)!.toPrecision(4)})` : "—",
-    inUnit(sign * termMomentAbout(t, about), "moment", system),
+    inUnit(sign * t.fx, "force", u),
+    inUnit(sign * t.fy, "force", u),
+    t.at ? `(${inUnit(t.at[0], "length", u)!.toPrecision(4)}, ${inUnit(t.at[1], "length", u)!.toPrecision(4)})` : "—",
+    inUnit(sign * termMomentAbout(t, about), "moment", u),
   ];
-  const sums = handCheckSums(eq, about);
   return {
     id: `hand-check-${bodyId}`,
     title: `Hand check of ${bodyId}: ΣF = Σ(ṁV)out − Σ(ṁV)in, ΣM about (${about[0]}, ${about[1]})`,
@@ -318,16 +368,16 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
     rows: [
       ...eq.forces.map((t) => row("forces on the control volume", t, 1)),
       ...eq.momentum.map((t) => row("momentum flux", t, 1)),
-      ["total", "Σ forces", inUnit(sums.forces.fx, "force", system), inUnit(sums.forces.fy, "force", system), "", inUnit(sums.forces.m, "moment", system)],
-      ["total", "Σ(ṁV)out − Σ(ṁV)in", inUnit(sums.momentum.fx, "force", system), inUnit(sums.momentum.fy, "force", system), "", inUnit(sums.momentum.m, "moment", system)],
-      ["total", "imbalance (0 when the body holds)", inUnit(sums.imbalance.fx, "force", system), inUnit(sums.imbalance.fy, "force", system), "", inUnit(sums.imbalance.m, "moment", system)],
+      ["total", "Σ forces", inUnit(sums.forces.fx, "force", u), inUnit(sums.forces.fy, "force", u), "", inUnit(sums.forces.m, "moment", u)],
+      ["total", "Σ(ṁV)out − Σ(ṁV)in", inUnit(sums.momentum.fx, "force", u), inUnit(sums.momentum.fy, "force", u), "", inUnit(sums.momentum.m, "moment", u)],
+      ["total", "imbalance (0 when the body holds)", inUnit(sums.imbalance.fx, "force", u), inUnit(sums.imbalance.fy, "force", u), "", inUnit(sums.imbalance.m, "moment", u)],
     ],
     notes: [
       `ΣFx = ${fmt(sums.forces.fx, "force")} and Σ(ṁV)x = ${fmt(sums.momentum.fx, "force")}; ΣFy = ${fmt(sums.forces.fy, "force")} and Σ(ṁV)y = ${fmt(sums.momentum.fy, "force")}; ΣM about (${about[0]}, ${about[1]}) = ${fmt(sums.forces.m, "moment")} and Σ r × ṁV = ${fmt(sums.momentum.m, "moment")}.`,
     ],
   };
   function fmt(v: number, q: Quantity) {
-    return `${formatNumber(inUnit(v, q, system) ?? 0, 4)} ${columnUnit(q, system)}`;
+    return `${formatNumber(inUnit(v, q, u) ?? 0, 4)} ${unitOf(q, u)}`;
   }
 }
 

@@ -26,13 +26,20 @@ export function parseLength(text: string, units: UnitSystem): number {
   return toFieldNumber(v, "length");
 }
 
-function fmt(v: number, key: "fx" | "fy" | "m", units: UnitSystem): string {
-  const q = key === "m" ? "moment" : "force";
-  const u = columnUnit(q, units);
-  return `${formatNumber(convert(v, q, units, u).value, 4)} ${u}`;
+/** The force and moment units of the three sums: N and N·m when everything is below 1 kN (1 kN·m),
+ *  as in the tables; the two force sums share theirs. */
+function sumUnits(blocks: HandCheckBlock[], units: UnitSystem): Record<"fx" | "fy" | "m", string> {
+  const largest = (keys: string[]) =>
+    Math.max(0, ...blocks.filter((b) => keys.includes(b.key)).flatMap((b) => [...b.forces, ...b.momentum].map((t) => Math.abs(t.value)).concat(Math.abs(b.forcesSum), Math.abs(b.momentumSum))));
+  const force = columnUnit("force", units, largest(["fx", "fy"]));
+  return { fx: force, fy: force, m: columnUnit("moment", units, largest(["m"])) };
 }
 
-function Block({ b, units }: { b: HandCheckBlock; units: UnitSystem }) {
+function fmt(v: number, key: "fx" | "fy" | "m", units: UnitSystem, unit: string): string {
+  return `${formatNumber(convert(v, key === "m" ? "moment" : "force", units, unit).value, 4)} ${unit}`;
+}
+
+function Block({ b, units, unit }: { b: HandCheckBlock; units: UnitSystem; unit: string }) {
   const len = (v: number) => formatNumber(convert(v, "length", units).value, 3);
   return (
     <section aria-label={b.title} className="min-w-0" data-testid={`hand-${b.key}`}>
@@ -46,14 +53,14 @@ function Block({ b, units }: { b: HandCheckBlock; units: UnitSystem }) {
               {b.key === "m" && t.at && !t.couple && <span className="text-ink-faint"> at ({len(t.at[0])}, {len(t.at[1])})</span>}
             </span>
             <span className="num shrink-0 text-ink" data-testid="term-value">
-              {fmt(t.value, b.key, units)}
+              {fmt(t.value, b.key, units, unit)}
             </span>
           </li>
         ))}
         <li className="flex justify-between gap-2 pt-0.5 font-semibold">
           <span>= Σ forces on the control volume</span>
           <span className="num" data-testid="forces-sum">
-            {fmt(b.forcesSum, b.key, units)}
+            {fmt(b.forcesSum, b.key, units, unit)}
           </span>
         </li>
         {b.momentum.map((t, i) => (
@@ -61,19 +68,19 @@ function Block({ b, units }: { b: HandCheckBlock; units: UnitSystem }) {
             <span className="truncate text-ink-soft" title={t.label}>
               {t.label}
             </span>
-            <span className="num shrink-0 text-ink">{fmt(t.value, b.key, units)}</span>
+            <span className="num shrink-0 text-ink">{fmt(t.value, b.key, units, unit)}</span>
           </li>
         ))}
         <li className="flex justify-between gap-2 pt-0.5 font-semibold">
           <span>= Σ(ṁV)out − Σ(ṁV)in</span>
           <span className="num" data-testid="momentum-sum">
-            {fmt(b.momentumSum, b.key, units)}
+            {fmt(b.momentumSum, b.key, units, unit)}
           </span>
         </li>
         <li className="flex justify-between gap-2 text-ink-faint">
           <span>difference (0 when it holds)</span>
           <span className="num" data-testid="imbalance">
-            {fmt(Math.abs(b.imbalance) < 1e-9 * Math.max(1, Math.abs(b.forcesSum)) ? 0 : b.imbalance, b.key, units)}
+            {fmt(Math.abs(b.imbalance) < 1e-9 * Math.max(1, Math.abs(b.forcesSum)) ? 0 : b.imbalance, b.key, units, unit)}
           </span>
         </li>
       </ol>
@@ -96,6 +103,7 @@ export function HandCheckView() {
   const eq = body && shown ? shown.equations[body.id] : undefined;
   const about: Vec2 = picked ?? defaultMomentPoint(eq, body?.cg);
   const blocks = useMemo(() => (eq ? handCheckBlocks(eq, about) : []), [eq, about]);
+  const unitsOfSums = useMemo(() => sumUnits(blocks, units), [blocks, units]);
   const [draft, setDraft] = useState<{ x: string; y: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
   if (!eq || !body) return <p className="p-2 text-[12.5px] text-ink-faint">No result to check yet.</p>;
@@ -179,7 +187,7 @@ export function HandCheckView() {
       <div className={`@container ${stale ? "opacity-60" : ""}`} data-testid="hand-sums" data-stale={stale || undefined}>
         <div className="grid grid-cols-1 gap-x-4 gap-y-3 @4xl:grid-cols-3">
           {blocks.map((b) => (
-            <Block key={b.key} b={b} units={units} />
+            <Block key={b.key} b={b} units={units} unit={unitsOfSums[b.key]} />
           ))}
         </div>
       </div>

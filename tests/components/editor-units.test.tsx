@@ -80,6 +80,33 @@ describe("input errors in words", () => {
   });
 });
 
+describe("the unit of the results follows their size", () => {
+  it("a 60 N load on the beam: the table and the hand check in N and N·m, a 10 kN one in kN", async () => {
+    const user = userEvent.setup();
+    const editor = mountResultsDock(beam("F1"));
+    act(() => {
+      editor.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "60 N" })));
+      editor.getState().apply(c(setField({ id: "b1", field: "mass", value: "10 kg" })));
+    });
+    // the table's headings carry the unit
+    const table = screen.getByRole("table");
+    expect(within(table).getAllByText("(N)").length).toBeGreaterThan(0);
+    expect(within(table).queryByText("(kN)")).toBeNull();
+    await user.click(screen.getByRole("tab", { name: "Hand check" }));
+    // ΣFy: the load −60 N and the weight −10 kg × 9.80665 = −98.07 N, the pin and the pad half of it each
+    // (loads at mid-span: statics, common practice); ΣM about the pin: the pad (60 + 98.07)/2 = 79.03 N × 4 m = 316.1 N·m
+    const fy = screen.getByTestId("hand-fy");
+    expect(fy).toHaveTextContent("−60 N");
+    expect(fy).toHaveTextContent("−98.07 N");
+    expect(screen.getByTestId("hand-m")).toHaveTextContent("316.1 N·m");
+    expect(fy).not.toHaveTextContent("kN");
+    expect(screen.getByTestId("hand-m")).toHaveTextContent(/N·m/);
+    expect(screen.getByTestId("hand-m")).not.toHaveTextContent("kN·m");
+    act(() => void editor.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "10 kN" }))));
+    expect(screen.getByTestId("hand-fy")).toHaveTextContent("−10 kN");
+  });
+});
+
 describe("US units reach every length on screen", () => {
   it("shows and takes the hand check's point P in feet; a typed unit is kept", async () => {
     const user = userEvent.setup();

@@ -77,3 +77,44 @@ describe("result tables", () => {
     expect(params.rows.find((r) => r[0] === "p1")).toEqual(["p1", "600 kPa", "600 kPa"]);
   });
 });
+
+describe("one unit per table, chosen by its largest value", () => {
+  /** A 4 kg bench cart on two wheels, a 30 N jet pushing it back at 0.2 m (small test rig, invented). */
+  const cart = (mass: number, jet: number) => {
+    const p = parseSketch({
+      format: "counterpoise.sketch",
+      version: 1,
+      bodies: [{ id: "cart", outline: [[0, 0], [0.6, 0], [0.6, 0.3], [0, 0.3]], mass }],
+      supports: [
+        { id: "rear", body: "cart", kind: "pin", at: [0, 0] },
+        { id: "front", body: "cart", kind: "contact", at: [0.6, 0], angle: 90 },
+      ],
+      loads: [{ id: "jet", body: "cart", kind: "force", at: [0.6, 0.2], magnitude: jet, angle: 180 }],
+    });
+    if (!p.ok) throw new Error(JSON.stringify(p.errors));
+    return solve(p.sketch);
+  };
+
+  it("a small rig's table is in N and N·m (not 0.03 kN); a skid's stays in kN; US stays in lbf", () => {
+    const r = cart(4, 30);
+    const t = reactionTable(r, "SI");
+    const col = (key: string) => t.columns.findIndex((c) => c.key === key);
+    expect(t.columns[col("fx")].unit).toBe("N");
+    expect(t.columns[col("m")].unit).toBe("N·m");
+    const rear = t.rows.find((row) => row[0] === "rear")!;
+    // ΣFx = 0: the pin takes the whole 30 N jet, in N (statics, common practice)
+    expect(rear[col("fx")]).toBeCloseTo(30, 9);
+    // ΣM about the rear pin: W·0.3 − 30·0.2 = n·0.6 → n = (4·9.80665·0.3 − 6)/0.6 = 9.6133 N
+    const front = t.rows.find((row) => row[0] === "front")!;
+    expect(front[col("n")]).toBeCloseTo((4 * 9.80665 * 0.3 - 6) / 0.6, 6);
+    // the hand check of the same rig: N, and its notes in N too
+    const h = handCheckTable(r, "cart", [0, 0], "SI");
+    expect(h.columns.find((c) => c.key === "fx")!.unit).toBe("N");
+    expect(h.notes![0]).toMatch(/ΣFx = 0 N/);
+    // a kilonewton somewhere: the whole table goes to kN
+    const big = reactionTable(cart(4, 2000), "SI");
+    expect(big.columns[col("fx")].unit).toBe("kN");
+    expect(big.rows.find((row) => row[0] === "rear")![col("fx")]).toBeCloseTo(2, 9);
+    expect(reactionTable(r, "US").columns[col("fx")].unit).toBe("lbf");
+  });
+});
