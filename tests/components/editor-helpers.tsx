@@ -1,6 +1,6 @@
 // Rendering the editor under jsdom: in-memory persistence, a ResizeObserver stand-in, and the
 // store of the mounted editor for assertions.
-import { render, screen } from "@testing-library/react";
+import { act, render, screen } from "@testing-library/react";
 import { Editor } from "@/components/editor/Editor";
 import { scratchPersistence } from "@/canvas/persistence";
 import type { SketchFile } from "@/solver/schema";
@@ -45,6 +45,9 @@ export async function renderEditor(sketch?: SketchFile, example?: string) {
   const persistence = scratchPersistence(storage);
   const utils = render(<Editor persistence={persistence} example={example} />);
   await screen.findByRole("heading", { name: "Add" });
+  // the heading is on screen once React has committed, but the editor's effects (its key and
+  // clipboard listeners) may still wait for the scheduler on a busy machine: let them run
+  await act(async () => {});
   return { ...utils, mem };
 }
 

@@ -42,6 +42,8 @@ function skid(): SketchFile {
 async function open(persistence: SketchPersistence) {
   const utils = render(<Editor persistence={persistence} />);
   await screen.findByTestId("underlay-panel");
+  // let the editor's effects run (see renderEditor)
+  await act(async () => {});
   return utils;
 }
 
