@@ -1,5 +1,5 @@
 // The display unit of each swept quantity: forces in kN / lbf, a fixed support's moment in
-// kN·m / lbf·ft, the friction needed as a plain ratio. The chart, the limit finder's target and
+// kN·m / lbf·ft (N, N·m for a plot that stays below a kilonewton), the friction needed as a plain ratio. The chart, the limit finder's target and
 // the calc sheet all convert through here, so a moment is never shown or converted as a force.
 import type { QuantityComponent } from "@/solver/quantity";
 import { columnUnit } from "@/solver/report";
@@ -13,17 +13,28 @@ export function displayKind(component: QuantityComponent): DisplayKind {
   return "force";
 }
 
-/** "kN", "kN·m", "lbf", "lbf·ft", or "" for a ratio. */
-export function displayUnit(component: QuantityComponent, system: UnitSystem): string {
+/** "kN", "kN·m", "lbf", "lbf·ft", or "" for a ratio. Given `largest` (SI), a plot whose forces
+ *  (moments) all stay below 1 kN (1 kN·m) is drawn in N (N·m), as the tables are. */
+export function displayUnit(component: QuantityComponent, system: UnitSystem, largest?: number): string {
   const kind = displayKind(component);
-  return kind === "ratio" ? "" : columnUnit(kind, system);
+  return kind === "ratio" ? "" : columnUnit(kind, system, largest);
 }
 
-/** A value in SI (N, N·m) in the display unit. */
-export function toDisplay(valueSI: number, component: QuantityComponent, system: UnitSystem): number {
+/** A value in SI (N, N·m) in the display unit (of a plot whose largest value is `largest`). */
+export function toDisplay(valueSI: number, component: QuantityComponent, system: UnitSystem, largest?: number): number {
   const kind = displayKind(component);
   if (kind === "ratio") return valueSI;
-  return valueSI * convert(1, kind, system, columnUnit(kind, system)).value;
+  return valueSI * convert(1, kind, system, columnUnit(kind, system, largest)).value;
+}
+
+/** The largest magnitude of each kind of quantity over a sweep's series, for its plot's units. */
+export function largestByKind(components: readonly QuantityComponent[], series: ReadonlyArray<ReadonlyArray<number | null>>): Record<DisplayKind, number> {
+  const out: Record<DisplayKind, number> = { force: 0, moment: 0, ratio: 0 };
+  series.forEach((ys, s) => {
+    const kind = displayKind(components[s]);
+    for (const y of ys) if (y !== null && Number.isFinite(y)) out[kind] = Math.max(out[kind], Math.abs(y));
+  });
+  return out;
 }
 
 /** A value typed in the display unit, back in SI. */

@@ -5,19 +5,24 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { describeQuantity } from "@/solver/quantity";
 import { formatNumber, type UnitSystem } from "@/solver/units";
-import { displayKind, displayUnit, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestByKind, toDisplay } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 
 const COLORS = ["#1f5f7a", "#b4462b", "#1d2329", "#8a6212", "#4d7a3a", "#6b4c9a"];
 const DASHES = ["", "6 3", "2 3", "8 3 2 3", "1 2", "10 4"];
 
-/** The chart's rows: each series in its own display unit (kN or kN·m, lbf or lbf·ft). */
+/** The largest force and moment plotted: N (N·m) for a sweep that stays below 1 kN (1 kN·m). */
+const scaleOf = (data: SweepData) => largestByKind(data.quantities.map((q) => q.component), data.series);
+
+/** The chart's rows: each series in its own display unit (kN or kN·m, N or N·m, lbf or lbf·ft). */
 export function chartRows(data: SweepData, units: UnitSystem): Array<Record<string, number | null>> {
+  const largest = scaleOf(data);
   return data.xs.map((x, i) => {
     const row: Record<string, number | null> = { x };
     data.series.forEach((ys, s) => {
       const v = ys[i];
-      row[`q${s}`] = Number.isFinite(v) ? toDisplay(v, data.quantities[s].component, units) : null;
+      const c = data.quantities[s].component;
+      row[`q${s}`] = Number.isFinite(v) ? toDisplay(v, c, units, largest[displayKind(c)]) : null;
     });
     return row;
   });
@@ -28,8 +33,9 @@ export function SweepChart({ data, units, parameterLabel, limit, run }: { data: 
   // forces on the left axis; a moment (or a ratio) on its own axis on the right, in its own unit
   const kinds = [...new Set(data.quantities.map((q) => displayKind(q.component)))];
   const axisOf = (s: number) => (displayKind(data.quantities[s].component) === kinds[0] ? "left" : "right");
-  const unitOf = (s: number) => displayUnit(data.quantities[s].component, units);
-  const leftUnit = displayUnit(data.quantities.find((q) => displayKind(q.component) === kinds[0])?.component ?? "fx", units);
+  const largest = scaleOf(data);
+  const unitOf = (s: number) => displayUnit(data.quantities[s].component, units, largest[displayKind(data.quantities[s].component)]);
+  const leftUnit = displayUnit(data.quantities.find((q) => displayKind(q.component) === kinds[0])?.component ?? "fx", units, largest[kinds[0] ?? "force"]);
   const rightUnits = [...new Set(data.quantities.map((q, s) => (axisOf(s) === "right" ? unitOf(s) : null)).filter((u): u is string => u !== null))];
   const crossingsX = data.crossings.map((c) => {
     const ys = data.series[c.quantity];

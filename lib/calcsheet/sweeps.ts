@@ -2,7 +2,7 @@
 // factors), one chart per unit (forces, moments, ratios) so a moment is never drawn on a force
 // axis, and the crossings of its margins found by the limit finder.
 import { sketchForCase } from "@/canvas/studies/run";
-import { displayKind, displayUnit, marksZero, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import { findLimit } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
@@ -45,14 +45,19 @@ export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, 
   const kinds = [...new Set(quantities.map((q) => displayKind(q.component)))];
   const charts = kinds.map((kind): ChartSpec => {
     const mine = quantities.filter((q) => displayKind(q.component) === kind);
+    // one unit per chart: N (N·m) when everything plotted stays below 1 kN (1 kN·m)
+    const largest = largestByKind(
+      mine.map((q) => q.component),
+      mine.map((q) => res.points.map((p) => (p.ok ? readQuantity(p.result, q) : null))),
+    )[kind];
     return {
       title: `${sw.parameter} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)} ${res.unit}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
       xLabel: `${sw.parameter}${res.unit ? ` (${res.unit})` : ""}`,
-      yLabel: displayUnit(mine[0].component, units) || "ratio",
+      yLabel: displayUnit(mine[0].component, units, largest) || "ratio",
       series: mine.map((q) => ({
         label: describeQuantity(q),
         markZero: marksZero(q.component),
-        points: res.points.map((p) => [p.value, p.ok ? toDisplay(readQuantity(p.result, q), q.component, units) : null] as [number, number | null]),
+        points: res.points.map((p) => [p.value, p.ok ? toDisplay(readQuantity(p.result, q), q.component, units, largest) : null] as [number, number | null]),
       })),
       markers,
     };

@@ -47,6 +47,22 @@ describe("sweep of a moment", () => {
     expect(data.crossings).toEqual([]);
   });
 
+  it("a plot that stays below a kilonewton is in N and N·m, as the tables are; one at 1 kN in kN", () => {
+    const light = sketch({ ...post, loads: [{ id: "w", body: "p", kind: "force", at: ["a", 1], fx: 0, fy: -100 }] });
+    const small = runSweep(light, { parameter: "a", from: 0, to: 2, points: 5, quantities: [{ support: "base", component: "m" }, { support: "base", component: "fy" }] });
+    // M = 100·(a − 1) N·m: −100 at a = 0; Fy = 100 N throughout
+    const rows = chartRows(small, "SI");
+    expectRel(rows[0].q0!, -100, 1e-9);
+    expectRel(rows[0].q1!, 100, 1e-9);
+    expect(displayUnit("m", "SI", 100)).toBe("N·m");
+    expect(displayUnit("fy", "SI", 100)).toBe("N");
+    // the 1 kN post reaches 1 kN·m: kN and kN·m
+    expectRel(chartRows(data, "SI")[0].q0!, -1, 1e-9);
+    expect(displayUnit("m", "SI", 1000)).toBe("kN·m");
+    // US units stay lbf whatever the size
+    expect(displayUnit("fy", "US", 100)).toBe("lbf");
+  });
+
   it("the chart shows the moment in lbf·ft and the force in lbf", () => {
     const rows = chartRows(data, "US");
     expectRel(rows[0].q0!, -1000 / LBF_FT, 1e-9);
