@@ -114,7 +114,14 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
     const msg = parsed.ok ? "" : parsed.errors.map((e) => `${e.path || "file"}: ${e.message}`).join("; ");
     return `${head}${title}${bg}<text x="24" y="40" font-size="14" fill="${INK_FAINT}">This sketch cannot be drawn: ${esc(msg)}</text></svg>`;
   }
-  const footer = (opts.caption ? 22 : 0) + ((opts.legend ?? !!result) ? 22 : 0);
+  // the legend line, and gravity's direction when it is turned: on a line of its own when both would
+  // not fit across (about 6 px a character at 11 px)
+  const legend = opts.legend ?? !!result;
+  const key = `Solid arrows: given loads and weight · double lines: reactions found (on the body) · dashed: momentum flux ṁV · ${units === "SI" ? "SI units" : "US customary units"}`;
+  const ga = parsed.fields?.gravityAngle;
+  const turned = legend ? gravityNote(ga && "value" in ga ? ga.value : undefined) : null;
+  const legendLines = !legend ? [] : !turned ? [key] : (key.length + turned.length + 3) * 6 <= width - 32 ? [`${key} · ${turned}`] : [key, turned];
+  const footer = (opts.caption ? 22 : 0) + (legendLines.length ? 22 + 15 * (legendLines.length - 1) : 0);
 
   // fit: world box → pixels, leaving room for symbols and labels that do not scale; then centre
   // what is actually drawn (labels included) — or use the shared frame as given
@@ -146,10 +153,9 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
     foot += `<text x="16" y="${y}" font-size="13" font-weight="600" fill="#1d2329">${esc(opts.caption)}</text>`;
     y += 22;
   }
-  if (opts.legend ?? !!result) {
-    const ga = parsed.fields?.gravityAngle;
-    const turned = gravityNote(ga && "value" in ga ? ga.value : undefined);
-    foot += `<text x="16" y="${y}" font-size="11" fill="${INK_FAINT}">Solid arrows: given loads and weight · double lines: reactions found (on the body) · dashed: momentum flux ṁV · ${units === "SI" ? "SI units" : "US customary units"}${turned ? ` · ${esc(turned)}` : ""}</text>`;
+  for (const line of legendLines) {
+    foot += `<text x="16" y="${y}" font-size="11" fill="${INK_FAINT}">${esc(line)}</text>`;
+    y += 15;
   }
   return `${head}${title}${bg}<g transform="translate(${n(dx)} ${n(dy)})">${body}${res}</g>${foot}</svg>`;
 }
