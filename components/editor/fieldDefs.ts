@@ -116,3 +116,23 @@ export function fieldLabel(kind: string, key: string): string {
   if (key === "group" && kind === "body") return "Load group of its weight";
   return OTHER_FIELDS[key] ?? key;
 }
+
+/** What a blank optional field means, for tables that show a value being given or cleared. */
+const BLANK_MEANS: Record<string, string> = {
+  "sketch.gravity": "standard, 9.807 m/s²",
+  "sketch.gravityAngle": "−90°, down the page",
+  "inlet.beta": "1",
+  "outlet.beta": "1",
+  "contact.mu": "no friction",
+  "distributed.angle": "−90°, straight down",
+  "body.cg": "the outline's centroid",
+  "body.group": "dead",
+  "inlet.group": "flow",
+  "outlet.group": "flow",
+};
+
+/** "blank (−90°, down the page)": the words for a field left blank, or null when blank means nothing. */
+export function blankWords(kind: string, key: string): string | null {
+  const v = BLANK_MEANS[`${kind}.${key}`] ?? (key === "group" && ["force", "couple", "distributed"].includes(kind) ? "loads" : undefined);
+  return v ? `blank (${v})` : null;
+}

@@ -1,6 +1,6 @@
 // The tables of a comparison: reactions before and after with the change, and every changed input.
 import { Fragment } from "react";
-import { fieldLabel } from "@/components/editor/fieldDefs";
+import { blankWords, fieldLabel } from "@/components/editor/fieldDefs";
 import { formatForce } from "@/components/sketches/format";
 import type { Comparison, FieldChange, ReactionChange, ReactionSnapshot } from "@/lib/review/compare";
 import { formatNumber, formatQuantity, type UnitSystem } from "@/solver/units";
@@ -64,6 +64,12 @@ export function ReactionsTable({ comparison, units = "SI" }: { comparison: Compa
   );
 }
 
+/** A value not given: what that means where it means something ("blank (−90°, down the page)"), else a dash. */
+function Blank({ kind, field }: { kind?: string; field: string }) {
+  const words = kind ? blankWords(kind, field) : null;
+  return <span className="font-normal text-ink-faint">{words ?? "—"}</span>;
+}
+
 /** Rows of one group; `kind` (an element kind, or "sketch") turns file field names into the properties form's words. */
 function Rows({ group, rows, kind }: { group: string; rows: FieldChange[]; kind?: string }) {
   return (
@@ -75,11 +81,11 @@ function Rows({ group, rows, kind }: { group: string; rows: FieldChange[]; kind?
             {i === 0 ? group : <span className="sr-only">{group}</span>}
           </th>
           <td className="py-1.5 pr-3 text-ink-soft">{kind ? fieldLabel(kind, f.field) : f.field}</td>
-          <td className="num py-1.5 pr-3">{f.before ?? <span className="text-ink-faint">—</span>}</td>
+          <td className="num py-1.5 pr-3">{f.before ?? <Blank kind={kind} field={f.field} />}</td>
           <td className="py-1.5 pr-1 text-ink-faint" aria-hidden="true">
             →
           </td>
-          <td className="num py-1.5 font-medium">{f.after ?? <span className="text-ink-faint">—</span>}</td>
+          <td className="num py-1.5 font-medium">{f.after ?? <Blank kind={kind} field={f.field} />}</td>
         </tr>
       ))}
     </>

@@ -168,11 +168,12 @@ describe("the changed fields in the properties form's words", () => {
     const c = compareSketches(before, b);
     render(<ChangesTable comparison={c} />);
     const rows = [...screen.getByTestId("field-changes").querySelectorAll("tbody tr")].map((r) => [...r.querySelectorAll("td")].map((td) => td.textContent));
-    expect(rows).toContainEqual(["Gravity direction", "—", "→", "-95 deg (= −95°)"]);
+    // a field given where it was blank says what blank meant; the motion had no default: a dash
+    expect(rows).toContainEqual(["Gravity direction", "blank (−90°, down the page)", "→", "-95 deg (= −95°)"]);
     expect(rows).toContainEqual(["Motion of the body", "—", "→", "ax 0.5 m/s^2 (= 0.5 m/s²)"]);
     expect(rows).toContainEqual(["Flow direction", "theta (= 15°)", "→", "theta + 5 deg (= 20°)"]);
-    expect(rows).toContainEqual(["Momentum-flux factor β", "—", "→", "1.02"]);
-    expect(rows).toContainEqual(["Load group", "—", "→", "jet"]);
+    expect(rows).toContainEqual(["Momentum-flux factor β", "blank (1)", "→", "1.02"]);
+    expect(rows).toContainEqual(["Load group", "blank (flow)", "→", "jet"]);
     // no file key is shown
     for (const key of ["gravityAngle", "beta", "motion", "group", "angle"]) expect(rows.map((r) => r[0])).not.toContain(key);
   });
