@@ -3,6 +3,7 @@
 // the calc sheet all convert through here, so a moment is never shown or converted as a force.
 import type { QuantityComponent } from "@/solver/quantity";
 import { columnUnit } from "@/solver/report";
+import type { SolveResult } from "@/solver/types";
 import { convert, type Quantity, type UnitSystem } from "@/solver/units";
 
 export type DisplayKind = Extract<Quantity, "force" | "moment" | "ratio">;
@@ -38,8 +39,21 @@ export function largestByKind(components: readonly QuantityComponent[], series: 
 }
 
 /** A value typed in the display unit, back in SI. */
-export function fromDisplay(value: number, component: QuantityComponent, system: UnitSystem): number {
-  return value / toDisplay(1, component, system);
+export function fromDisplay(value: number, component: QuantityComponent, system: UnitSystem, largest?: number): number {
+  return value / toDisplay(1, component, system, largest);
+}
+
+/** The largest force and moment of a result's reactions: what its reactions table is written in,
+ *  so a limit's target is typed in the unit the table beside it shows. */
+export function largestOfResult(result: SolveResult | null): Record<DisplayKind, number> {
+  const out: Record<DisplayKind, number> = { force: 0, moment: 0, ratio: 0 };
+  for (const r of Object.values(result?.reactions ?? {})) {
+    for (const v of [Math.hypot(r.fx, r.fy), r.n, r.t, r.margin]) if (v !== undefined && Number.isFinite(v)) out.force = Math.max(out.force, Math.abs(v));
+    if (Number.isFinite(r.m)) out.moment = Math.max(out.moment, Math.abs(r.m));
+  }
+  // no moment anywhere: moments follow the forces (N with N·m), as in the tables
+  if (!out.moment) out.moment = out.force;
+  return out;
 }
 
 /** Only a margin crossing zero means something happened: a contact lifts, a tie goes slack, or

@@ -7,7 +7,7 @@ import type { LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber } from "@/solver/units";
-import { displayUnit, fromDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, fromDisplay, largestOfResult } from "@/canvas/studies/display";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile } from "@/solver/schema";
@@ -61,6 +61,9 @@ export function SweepPanel() {
 
   const saved = sketch.sweeps?.[0];
   const values = useAnalysis((s) => s.core?.parameterValues) ?? NO_VALUES;
+  // the limit's target is typed in the unit of the reactions table (N for a bench rig, kN for a skid)
+  const shown = useAnalysis((s) => s.shown);
+  const scale = useMemo(() => largestOfResult(shown), [shown]);
   const [parameter, setParameter] = useState(() => saved?.parameter ?? defaultSweepParameter(parameters, values));
   const [from, setFrom] = useState(() => String(saved?.from ?? defaultSweepRange(parameter, values[parameter]).from));
   const [to, setTo] = useState(() => String(saved?.to ?? defaultSweepRange(parameter, values[parameter]).to));
@@ -130,14 +133,14 @@ export function SweepPanel() {
     const q = quantities[limitQ] ?? quantities[0];
     const typed = Number(target);
     if (!target.trim() || !Number.isFinite(typed)) return setError("The target must be a number.");
-    // the target is typed in the quantity's own unit (kN, or kN·m for a moment)
-    const tgt = fromDisplay(typed, q.component, units);
+    // the target is typed in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or N·m)
+    const tgt = fromDisplay(typed, q.component, units, scale[displayKind(q.component)]);
     setError(null);
     const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt } });
     setSearching(() => job.cancel);
     setLimitStopped(false);
     job.promise
-      .then((result) => setLimit({ result, label: describeQuantity(q), target: typed, unit: displayUnit(q.component, units) }))
+      .then((result) => setLimit({ result, label: describeQuantity(q), target: typed, unit: displayUnit(q.component, units, scale[displayKind(q.component)]) }))
       // Stop ends every study of this panel at once (they share one worker)
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -151,7 +154,7 @@ export function SweepPanel() {
   };
 
   const limitQuantity = quantities[limitQ] ?? quantities[0];
-  const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units) : "";
+  const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scale[displayKind(limitQuantity.component)]) : "";
   const withUnit = (v: number, unit: string) => `${v}${unit ? ` ${unit}` : ""}`;
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
   const invalid = data ? invalidStretches(data) : [];

@@ -157,6 +157,38 @@ describe("Sweep tab", () => {
     expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 1 lbf·ft at a = 1.0014 m.");
   });
 
+  it("on a light rig the target is typed in N·m, the unit of the reactions table beside it", async () => {
+    const user = userEvent.setup();
+    // the post again with 100 N at x = a (a = 0.5 m: M_base = −50 N·m): M_base = 100 N·(a − 1 m),
+    // so M = 20 N·m at a = 1.2 m (statics, common practice)
+    mount({
+      format: "counterpoise.sketch",
+      version: 3,
+      parameters: { a: "0.5 m" },
+      bodies: [{ id: "p", outline: [[0, 0], [2, 0], [2, 1], [0, 1]], mass: 0 }],
+      supports: [{ id: "base", body: "p", kind: "fixed", at: [1, 0] }],
+      loads: [{ id: "w", body: "p", kind: "force", at: ["a", 1], fx: 0, fy: -100 }],
+      ports: [],
+      massSources: [],
+    });
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "a");
+    for (const [name, v] of [["From", "0"], ["To", "2"], ["Points", "21"]]) {
+      await user.clear(screen.getByRole("textbox", { name }));
+      await user.type(screen.getByRole("textbox", { name }), v);
+    }
+    await user.click(screen.getByRole("checkbox", { name: "base: moment" }));
+    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    await screen.findByTestId("crossings");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
+    expect(screen.getByRole("group", { name: "Limit finder" }).textContent).toContain("N·m?");
+    expect(screen.getByRole("group", { name: "Limit finder" }).textContent).not.toContain("kN·m?");
+    await user.clear(screen.getByRole("textbox", { name: "Target value" }));
+    await user.type(screen.getByRole("textbox", { name: "Target value" }), "20");
+    await user.click(screen.getByRole("button", { name: "Find" }));
+    expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 20 N·m at a = 1.2 m.");
+  });
+
   it("plots a sweep, lists the crossing, and the limit finder answers in words", async () => {
     const user = userEvent.setup();
     mount(load("fire-monitor-trailer"));
