@@ -72,3 +72,13 @@ export function mountResultsDock(doc: unknown) {
   );
   return editor;
 }
+
+/** The Sweep tab opened, a parameter picked and its range typed (From, To, Points). */
+export async function setUpSweep(user: { click: (e: Element) => Promise<void>; selectOptions: (e: Element, v: string) => Promise<void>; clear: (e: Element) => Promise<void>; type: (e: Element, t: string) => Promise<void> }, parameter: string, range: [string, string, string]) {
+  await user.click(screen.getByRole("tab", { name: "Sweep" }));
+  await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), parameter);
+  for (const [name, v] of [["From", range[0]], ["To", range[1]], ["Points", range[2]]]) {
+    await user.clear(screen.getByRole("textbox", { name }));
+    await user.type(screen.getByRole("textbox", { name }), v);
+  }
+}

@@ -5,7 +5,7 @@ import { readFileSync } from "node:fs";
 import { act, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it, vi } from "vitest";
-import { mountResultsDock } from "./editor-helpers";
+import { mountResultsDock, setUpSweep } from "./editor-helpers";
 import type { FakeWorker } from "../unit/studies/fake-worker";
 
 const workers = vi.hoisted(() => [] as FakeWorker[]);
@@ -77,12 +77,7 @@ describe("Sweep tab: Stop while a limit search runs", () => {
     workers.length = 0;
     const user = userEvent.setup();
     mountResultsDock(load("fire-monitor-trailer"));
-    await user.click(screen.getByRole("tab", { name: "Sweep" }));
-    await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "theta");
-    for (const [name, v] of [["From", "0"], ["To", "80"], ["Points", "81"]]) {
-      await user.clear(screen.getByRole("textbox", { name }));
-      await user.type(screen.getByRole("textbox", { name }), v);
-    }
+    await setUpSweep(user, "theta", ["0", "80", "81"]);
     // a first sweep, answered, so the limit finder shows
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     let w = busy("sweep");

@@ -4,7 +4,7 @@ import { readFileSync } from "node:fs";
 import { screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
-import { mountResultsDock } from "./editor-helpers";
+import { mountResultsDock, setUpSweep } from "./editor-helpers";
 import { parseSketch, solve, solveCases } from "@/solver/index";
 
 const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n}.json`, "utf8"));
@@ -123,30 +123,33 @@ describe("cases in which the body is not held", () => {
   });
 });
 
+/** A post on a fixed base at x = 1 m with a load fy at x = a on its top. */
+const post = (fy: number) => ({
+  format: "counterpoise.sketch",
+  version: 3,
+  parameters: { a: "0.5 m" },
+  bodies: [{ id: "p", outline: [[0, 0], [2, 0], [2, 1], [0, 1]], mass: 0 }],
+  supports: [{ id: "base", body: "p", kind: "fixed", at: [1, 0] }],
+  loads: [{ id: "w", body: "p", kind: "force", at: ["a", 1], fx: 0, fy }],
+  ports: [],
+  massSources: [],
+});
+
+/** Sweep a from 0 to 2 m in 21 points, plotting the base moment. */
+async function sweepPostMoment(user: ReturnType<typeof userEvent.setup>) {
+  await setUpSweep(user, "a", ["0", "2", "21"]);
+  await user.click(screen.getByRole("checkbox", { name: "base: moment" }));
+  await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+}
+
 describe("Sweep tab", () => {
   it("the limit finder takes a fixed support's moment in lbf·ft (1 lbf·ft = 1.3558179483 N·m, NIST SP 811)", async () => {
     const user = userEvent.setup();
     // a post on a fixed base at x = 1 m, 1 kN down at x = a: M_base = 1000 N·(a − 1 m) (statics),
     // so M = 1 lbf·ft at a = 1 m + 1.3558179483 N·m / 1000 N = 1.0013558 m
-    const editor = mount({
-      format: "counterpoise.sketch",
-      version: 3,
-      parameters: { a: "0.5 m" },
-      bodies: [{ id: "p", outline: [[0, 0], [2, 0], [2, 1], [0, 1]], mass: 0 }],
-      supports: [{ id: "base", body: "p", kind: "fixed", at: [1, 0] }],
-      loads: [{ id: "w", body: "p", kind: "force", at: ["a", 1], fx: 0, fy: -1000 }],
-      ports: [],
-      massSources: [],
-    });
+    const editor = mount(post(-1000));
     editor.getState().setUnits("US");
-    await user.click(screen.getByRole("tab", { name: "Sweep" }));
-    await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "a");
-    for (const [name, v] of [["From", "0"], ["To", "2"], ["Points", "21"]]) {
-      await user.clear(screen.getByRole("textbox", { name }));
-      await user.type(screen.getByRole("textbox", { name }), v);
-    }
-    await user.click(screen.getByRole("checkbox", { name: "base: moment" }));
-    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    await sweepPostMoment(user);
     // the moment changes sign at a = 1 m, which is no event: nothing is marked
     expect((await screen.findByTestId("crossings")).textContent).toContain("No margin crosses zero in this range.");
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
@@ -161,24 +164,8 @@ describe("Sweep tab", () => {
     const user = userEvent.setup();
     // the post again with 100 N at x = a (a = 0.5 m: M_base = −50 N·m): M_base = 100 N·(a − 1 m),
     // so M = 20 N·m at a = 1.2 m (statics, common practice)
-    mount({
-      format: "counterpoise.sketch",
-      version: 3,
-      parameters: { a: "0.5 m" },
-      bodies: [{ id: "p", outline: [[0, 0], [2, 0], [2, 1], [0, 1]], mass: 0 }],
-      supports: [{ id: "base", body: "p", kind: "fixed", at: [1, 0] }],
-      loads: [{ id: "w", body: "p", kind: "force", at: ["a", 1], fx: 0, fy: -100 }],
-      ports: [],
-      massSources: [],
-    });
-    await user.click(screen.getByRole("tab", { name: "Sweep" }));
-    await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "a");
-    for (const [name, v] of [["From", "0"], ["To", "2"], ["Points", "21"]]) {
-      await user.clear(screen.getByRole("textbox", { name }));
-      await user.type(screen.getByRole("textbox", { name }), v);
-    }
-    await user.click(screen.getByRole("checkbox", { name: "base: moment" }));
-    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    mount(post(-100));
+    await sweepPostMoment(user);
     await screen.findByTestId("crossings");
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
     expect(screen.getByRole("group", { name: "Limit finder" }).textContent).toContain("N·m?");
@@ -197,12 +184,7 @@ describe("Sweep tab", () => {
     // picking an angle offers ±90° about its value (theta = 15 deg here)
     expect(screen.getByRole("textbox", { name: "From" })).toHaveValue("-75");
     expect(screen.getByRole("textbox", { name: "To" })).toHaveValue("105");
-    await user.clear(screen.getByRole("textbox", { name: "From" }));
-    await user.type(screen.getByRole("textbox", { name: "From" }), "0");
-    await user.clear(screen.getByRole("textbox", { name: "To" }));
-    await user.type(screen.getByRole("textbox", { name: "To" }), "80");
-    await user.clear(screen.getByRole("textbox", { name: "Points" }));
-    await user.type(screen.getByRole("textbox", { name: "Points" }), "81");
+    await setUpSweep(user, "theta", ["0", "80", "81"]);
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     const crossings = await screen.findByTestId("crossings");
     expect(crossings.textContent).toMatch(/margin at jack crosses zero between theta = 18 and 19 deg/);
