@@ -31,8 +31,10 @@ export function parseLength(text: string, units: UnitSystem): number {
 function sumUnits(blocks: HandCheckBlock[], units: UnitSystem): Record<"fx" | "fy" | "m", string> {
   const largest = (keys: string[]) =>
     Math.max(0, ...blocks.filter((b) => keys.includes(b.key)).flatMap((b) => [...b.forces, ...b.momentum].map((t) => Math.abs(t.value)).concat(Math.abs(b.forcesSum), Math.abs(b.momentumSum))));
-  const force = columnUnit("force", units, largest(["fx", "fy"]));
-  return { fx: force, fy: force, m: columnUnit("moment", units, largest(["m"])) };
+  const f = largest(["fx", "fy"]);
+  const force = columnUnit("force", units, f);
+  // moments all zero: they follow the forces (N with N·m), as in the tables
+  return { fx: force, fy: force, m: columnUnit("moment", units, largest(["m"]) || f) };
 }
 
 function fmt(v: number, key: "fx" | "fy" | "m", units: UnitSystem, unit: string): string {
