@@ -1,0 +1,52 @@
+// The exhaust-stack example against hand calculations: wind on a stack as q·Cd·D per metre with
+// q = ½ρv² (the dynamic pressure of the wind: common practice), and the upwind edge of an unbolted
+// skid lifting when the wind's moment about the downwind edge reaches the weight's (statics,
+// common practice). The duct's pressure is the gauge pressure times its area (common practice).
+import { describe, expect, it } from "vitest";
+import { exampleById } from "@/canvas/examples";
+import { runLimit } from "@/canvas/studies/run";
+import { parseSketch, solve, solveCases } from "@/solver";
+
+const g = 9.80665; // standard gravity, m/s² (CGPM 1901)
+const stack = exampleById("exhaust-stack")!.sketch;
+// the example's own numbers: 900 kg on a skid whose edges are at x = 0.1 and 2.9 m, the weight at
+// x = 1.5 m; the stack 0.6 m wide from y = 0.3 to 8.3 m (its wind acts at mid-height, 4.3 m)
+const W = 900 * g;
+const wPerV2 = 0.5 * 1.25 * 0.6 * 0.7; // N/m per (m/s)²
+const L = 8;
+const h = 0.3 + L / 2;
+
+describe("the exhaust-stack example", () => {
+  it("with the engine stopped, the upwind edge lifts where w(v)·L·h = W·(2.9 − 1.5) m", () => {
+    const vLift = Math.sqrt((W * (2.9 - 1.5)) / (wPerV2 * L * h));
+    expect(vLift).toBeCloseTo(36.99, 2);
+    const lim = runLimit(stack, { parameter: "v", from: 20, to: 45, caseId: "stopped", quantity: { support: "upwind", component: "margin" }, target: 0 });
+    if (!lim.found) throw new Error(lim.reason);
+    expect(lim.value).toBeCloseTo(vLift, 4);
+  });
+
+  it("the cases: as drawn it holds, the stopped case barely passes 1.5 against overturning, the storm tips", () => {
+    const p = parseSketch(stack);
+    if (!p.ok) throw new Error(JSON.stringify(p.errors));
+    const study = solveCases(p.file);
+    const run = (id: string) => {
+      const r = study.runs.find((x) => x.id === id);
+      if (!r?.ok) throw new Error(`case ${id} did not solve`);
+      return r;
+    };
+    // stopped at 30 m/s: restoring W·1.4 over the wind's w·L·h
+    const stopped = run("stopped").stability.stack.overturning;
+    const factor = (W * 1.4) / (wPerV2 * 30 ** 2 * L * h);
+    expect("factor" in stopped && stopped.factor).toBeCloseTo(factor, 9);
+    expect(factor).toBeGreaterThan(1.5);
+    expect(run("running").result.bodies.stack.status).toBe("holds");
+    expect(run("storm").result.bodies.stack.status).toBe("tips");
+    // running: the duct pushes against the wind with its pressure p·A and the gas's momentum ṁ·V
+    // entering, so the skid's friction carries less than the wind's w·L
+    const r = solve(p.sketch);
+    const shear = r.reactions.upwind.fx + r.reactions.downwind.fx;
+    const A = (Math.PI / 4) * 0.5 ** 2;
+    const Vin = 4.2 / (0.6 * A);
+    expect(-shear).toBeCloseTo(wPerV2 * 30 ** 2 * L - 2000 * A - 4.2 * Vin, 6);
+  });
+});
