@@ -58,6 +58,8 @@ const CAUTION_BG = "#f6ebcf";
 
 const fmtDate = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
 
+const PROSE_FEATURES = { kern: false } as unknown as PDFKit.Mixins.OpenTypeFeatures[];
+
 export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const units = input.units ?? "SI";
   const parsed = parseSketch(input.file);
@@ -80,7 +82,9 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     doc.moveTo(left, doc.y + 2).lineTo(left + width, doc.y + 2).lineWidth(0.6).strokeColor(RULE).stroke();
     doc.moveDown(0.5);
   };
-  const para = (text: string, size = 9, color = SOFT) => doc.font("Inter").fontSize(size).fillColor(color).text(text, left, doc.y, { width });
+  // prose without kerning: a kerned "7," reads back (copied, or by a text reader) as "7 ,", and an
+  // engineer copies figures out of the sheet
+  const para = (text: string, size = 9, color = SOFT) => doc.font("Inter").fontSize(size).fillColor(color).text(text, left, doc.y, { width, features: PROSE_FEATURES });
 
   // ---- title block
   titleBlock(doc, input, left, width);
