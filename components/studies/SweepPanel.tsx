@@ -7,7 +7,7 @@ import type { LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber } from "@/solver/units";
-import { displayKind, displayUnit, fromDisplay, largestOfResult } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestOfResult, parseTarget } from "@/canvas/studies/display";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile } from "@/solver/schema";
@@ -86,7 +86,7 @@ export function SweepPanel() {
   const [error, setError] = useState<string | null>(null);
   const [limitQ, setLimitQ] = useState(0);
   const [target, setTarget] = useState("0");
-  const [limit, setLimit] = useState<{ result: LimitResult; label: string; target: number; unit: string } | null>(null);
+  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** as typed, with its unit */ target: string } | null>(null);
   const [searching, setSearching] = useState<(() => void) | null>(null);
   const [limitStopped, setLimitStopped] = useState(false);
   const runner = useRef<StudyRunner | null>(null);
@@ -131,16 +131,22 @@ export function SweepPanel() {
     const s = spec();
     if (typeof s === "string") return setError(s);
     const q = quantities[limitQ] ?? quantities[0];
-    const typed = Number(target);
-    if (!target.trim() || !Number.isFinite(typed)) return setError("The target must be a number.");
-    // the target is typed in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or N·m)
-    const tgt = fromDisplay(typed, q.component, units, scale[displayKind(q.component)]);
+    // a plain number is in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or
+    // N·m); a value with a unit ("450 lbf") is taken as written
+    const unit = displayUnit(q.component, units, scale[displayKind(q.component)]);
+    let tgt: number;
+    try {
+      tgt = parseTarget(target, q.component, units, scale[displayKind(q.component)]);
+    } catch (err) {
+      return setError(`Target: ${(err as Error).message}.`);
+    }
+    const typed = /^\s*[-+]?[\d.]+(e[-+]?\d+)?\s*$/i.test(target) ? `${Number(target)}${unit ? ` ${unit}` : ""}` : target.trim();
     setError(null);
     const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt } });
     setSearching(() => job.cancel);
     setLimitStopped(false);
     job.promise
-      .then((result) => setLimit({ result, label: describeQuantity(q), target: typed, unit: displayUnit(q.component, units, scale[displayKind(q.component)]) }))
+      .then((result) => setLimit({ result, label: describeQuantity(q), target: typed }))
       // Stop ends every study of this panel at once (they share one worker)
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -155,7 +161,6 @@ export function SweepPanel() {
 
   const limitQuantity = quantities[limitQ] ?? quantities[0];
   const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scale[displayKind(limitQuantity.component)]) : "";
-  const withUnit = (v: number, unit: string) => `${v}${unit ? ` ${unit}` : ""}`;
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
   const invalid = data ? invalidStretches(data) : [];
 
@@ -218,7 +223,7 @@ export function SweepPanel() {
           <p className="text-[12.5px] text-ink-faint">Run a sweep to plot each reaction and margin against {pLabel}. Where a margin crosses zero a contact lifts, a tie goes slack or friction is used up: those points are marked.</p>
         ) : (
           <>
-            <SweepChart data={data} run={runs} units={units} parameterLabel={pLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${withUnit(limit.target, limit.unit)}` } : null} />
+            <SweepChart data={data} run={runs} units={units} parameterLabel={pLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target}` } : null} />
             <ul className="mt-1 space-y-0.5 text-[12px]" data-testid="crossings">
               {data.crossings.length === 0 && <li className="text-ink-faint">No margin crosses zero in this range.</li>}
               {data.crossings.map((c, i) => (
@@ -258,7 +263,7 @@ export function SweepPanel() {
             {limit && !limitStopped && (
               <p className="mt-1 text-[12.5px]" data-testid="limit-answer" role="status">
                 {limit.result.found
-                  ? `The ${limit.label} reaches ${withUnit(limit.target, limit.unit)} at ${pLabel} = ${formatNumber(limit.result.value, 5)}${limit.result.unit ? ` ${limit.result.unit}` : ""}${limit.result.crossings.length > 1 ? ` (and again at ${limit.result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
+                  ? `The ${limit.label} reaches ${limit.target} at ${pLabel} = ${formatNumber(limit.result.value, 5)}${limit.result.unit ? ` ${limit.result.unit}` : ""}${limit.result.crossings.length > 1 ? ` (and again at ${limit.result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
                   : `No crossing in this range: ${limit.result.reason.replace(/^no crossing in this range: /, "")}.`}
               </p>
             )}

@@ -174,6 +174,16 @@ describe("Sweep tab", () => {
     await user.type(screen.getByRole("textbox", { name: "Target value" }), "20");
     await user.click(screen.getByRole("button", { name: "Find" }));
     expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 20 N·m at a = 1.2 m.");
+    // a target with its own unit is taken as written: 0.03 kN·m = 30 N·m at a = 1.3 m
+    await user.clear(screen.getByRole("textbox", { name: "Target value" }));
+    await user.type(screen.getByRole("textbox", { name: "Target value" }), "0.03 kN m");
+    await user.click(screen.getByRole("button", { name: "Find" }));
+    await waitFor(() => expect(screen.getByTestId("limit-answer").textContent).toBe("The moment at base reaches 0.03 kN m at a = 1.3 m."));
+    // the wrong kind of quantity is refused in words, naming the target
+    await user.clear(screen.getByRole("textbox", { name: "Target value" }));
+    await user.type(screen.getByRole("textbox", { name: "Target value" }), "3 kg");
+    await user.click(screen.getByRole("button", { name: "Find" }));
+    expect((await screen.findByRole("alert")).textContent).toBe("Target: 3 kg is a mass (kg), but this field needs a moment (N·m).");
   });
 
   it("plots a sweep, lists the crossing, and the limit finder answers in words", async () => {
