@@ -254,6 +254,21 @@ export function compileExpression(text: string, parameterNames: ReadonlySet<stri
   }
 }
 
+/**
+ * A value typed in a box outside the sketch (a limit's target, a sweep's end, a moment point): a
+ * plain number, or a quantity with its unit; no parameters. Errors are in words.
+ */
+export function evaluateTyped(text: string): number | Unit {
+  if (!text.trim()) throw new ExpressionError("needs a value");
+  const v = compileExpression(text.trim(), new Set()).evaluate(new Map());
+  if (typeof v === "number") {
+    if (!Number.isFinite(v)) throw new ExpressionError("does not give a finite number");
+    return v;
+  }
+  if (!isUnit(v)) throw new ExpressionError("does not give a single number");
+  return v;
+}
+
 function remember(key: string, value: CompiledExpression | ExpressionError) {
   if (compiled.size >= CACHE_LIMIT) compiled.delete(compiled.keys().next().value!);
   compiled.set(key, value);

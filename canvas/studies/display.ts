@@ -3,7 +3,7 @@
 // the calc sheet all convert through here, so a moment is never shown or converted as a force.
 import type { QuantityComponent } from "@/solver/quantity";
 import { columnUnit } from "@/solver/report";
-import { compileExpression, toFieldNumber } from "@/solver/expressions";
+import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
 import type { SolveResult } from "@/solver/types";
 import { convert, type Quantity, type UnitSystem } from "@/solver/units";
 
@@ -50,18 +50,8 @@ export function fromDisplay(value: number, component: QuantityComponent, system:
  * throws an error in words when the text is not a value of that kind.
  */
 export function parseTarget(text: string, component: QuantityComponent, system: UnitSystem, largest?: number): number {
-  if (!text.trim()) throw new Error("needs a value");
-  let v;
-  try {
-    v = compileExpression(text.trim(), new Set()).evaluate(new Map());
-  } catch (err) {
-    throw new Error((err as Error).message);
-  }
-  if (typeof v === "number") {
-    if (!Number.isFinite(v)) throw new Error("does not give a finite number");
-    return fromDisplay(v, component, system, largest);
-  }
-  return toFieldNumber(v, displayKind(component));
+  const v = evaluateTyped(text);
+  return typeof v === "number" ? fromDisplay(v, component, system, largest) : toFieldNumber(v, displayKind(component));
 }
 
 /** The largest force and moment of a result's reactions: what its reactions table is written in,

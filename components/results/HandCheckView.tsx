@@ -3,7 +3,7 @@
 // minus in — so a checker can follow the calculation line by line and compare with their own.
 // P is picked on the canvas (the "Pick on the drawing" button) or typed.
 import { useDeferredValue, useMemo, useState } from "react";
-import { compileExpression, toFieldNumber } from "@/solver/expressions";
+import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
 import { columnUnit, handCheckTable } from "@/solver/report";
 import { downloadCsv } from "@/components/studies/csv";
 import { convert, formatNumber, type UnitSystem } from "@/solver/units";
@@ -18,12 +18,8 @@ import { defaultMomentPoint, handCheckBlocks, type HandCheckBlock } from "./hand
  * the length unit on screen (feet in US units, metres in SI). Returns metres.
  */
 export function parseLength(text: string, units: UnitSystem): number {
-  const v = compileExpression(text.trim() || "0", new Set()).evaluate(new Map());
-  if (typeof v === "number") {
-    if (!Number.isFinite(v)) throw new Error("does not give a finite number");
-    return v / convert(1, "length", units).value;
-  }
-  return toFieldNumber(v, "length");
+  const v = evaluateTyped(text.trim() || "0");
+  return typeof v === "number" ? v / convert(1, "length", units).value : toFieldNumber(v, "length");
 }
 
 /** The force and moment units of the three sums: N and N·m when everything is below 1 kN (1 kN·m),

@@ -18,7 +18,7 @@ import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
 import { SweepChart } from "./SweepChart";
 import { invalidStretches } from "./sweepErrors";
-import { defaultSweepParameter, defaultSweepRange, type ParameterValue } from "./sweepRange";
+import { defaultSweepParameter, defaultSweepRange, parseRangeValue, type ParameterValue } from "./sweepRange";
 
 const NO_VALUES: Record<string, ParameterValue> = {};
 /** stretches of invalid sweep points listed one by one; more are counted */
@@ -97,10 +97,23 @@ export function SweepPanel() {
 
   const quantities = choices.filter((c) => picked.includes(`${c.spec.support}:${c.spec.component}`)).map((c) => c.spec);
   const spec = (): SweepSpec | string => {
-    const f = Number(from);
-    const t = Number(to);
+    // the ends in the unit the parameter is written in, or with their own unit ("90 km/hr")
+    const current = parameter === FLOW_FACTOR ? undefined : values[parameter];
+    const unit = current && !("error" in current) ? current.unit : "";
+    let f: number;
+    let t: number;
+    try {
+      f = parseRangeValue(from, unit);
+    } catch (err) {
+      return `From: ${(err as Error).message}.`;
+    }
+    try {
+      t = parseRangeValue(to, unit);
+    } catch (err) {
+      return `To: ${(err as Error).message}.`;
+    }
     const n = Math.round(Number(points));
-    if (!Number.isFinite(f) || !Number.isFinite(t) || f === t) return "Give a range: two different numbers.";
+    if (f === t) return "Give a range: two different values.";
     if (!(n >= 2 && n <= 20000)) return "Points: 2 to 20,000.";
     if (!quantities.length) return "Pick at least one quantity to plot.";
     return { parameter, from: f, to: t, points: n, caseId: caseId || undefined, quantities };

@@ -1,6 +1,7 @@
 // The range a sweep starts with when the user picks a parameter: around the value it has now, in
 // the unit it is written in — an angle ±90° about it, any other quantity from zero to twice it,
 // the flow factor from 0 to 2 — so the first run already says something about the design.
+import { evaluateTyped } from "@/solver/expressions";
 import { FLOW_FACTOR } from "@/solver/sweep";
 
 export type ParameterValue = { value: number; unit: string } | { error: string } | undefined;
@@ -25,4 +26,20 @@ export function defaultSweepParameter(names: string[], values: Record<string, Pa
     return v !== undefined && !("error" in v) && v.unit in ANGLE_SPAN;
   });
   return angle ?? names[0] ?? FLOW_FACTOR;
+}
+
+/**
+ * An end of the range as typed: a plain number is in the unit the parameter is written in (`unit`,
+ * e.g. "m / s"); a value with its own unit ("90 km/hr", "0.3 rad") is converted to it. Throws an
+ * error in words when the text is not a value of the parameter's kind.
+ */
+export function parseRangeValue(text: string, unit: string): number {
+  const v = evaluateTyped(text);
+  if (typeof v === "number") return v;
+  if (!unit) throw new Error(`${text.trim()} has a unit, but this parameter is a plain number`);
+  try {
+    return v.toNumber(unit);
+  } catch {
+    throw new Error(`${text.trim()} cannot be written in ${unit}`);
+  }
 }

@@ -135,9 +135,9 @@ const post = (fy: number) => ({
   massSources: [],
 });
 
-/** Sweep a from 0 to 2 m in 21 points, plotting the base moment. */
-async function sweepPostMoment(user: ReturnType<typeof userEvent.setup>) {
-  await setUpSweep(user, "a", ["0", "2", "21"]);
+/** Sweep a from 0 to 2 m in 21 points (or the range given), plotting the base moment. */
+async function sweepPostMoment(user: ReturnType<typeof userEvent.setup>, range: [string, string, string] = ["0", "2", "21"]) {
+  await setUpSweep(user, "a", range);
   await user.click(screen.getByRole("checkbox", { name: "base: moment" }));
   await user.click(screen.getByRole("button", { name: "Run the sweep" }));
 }
@@ -165,7 +165,8 @@ describe("Sweep tab", () => {
     // the post again with 100 N at x = a (a = 0.5 m: M_base = −50 N·m): M_base = 100 N·(a − 1 m),
     // so M = 20 N·m at a = 1.2 m (statics, common practice)
     mount(post(-100));
-    await sweepPostMoment(user);
+    // the ends may carry their own unit: 0 mm to 200 cm is a from 0 to 2 (a is written in m)
+    await sweepPostMoment(user, ["0 mm", "200 cm", "21"]);
     await screen.findByTestId("crossings");
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
     expect(screen.getByRole("group", { name: "Limit finder" }).textContent).toContain("N·m?");

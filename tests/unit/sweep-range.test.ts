@@ -1,6 +1,6 @@
 // The range and parameter a new sweep starts with (our own rule: around the current value).
 import { describe, expect, it } from "vitest";
-import { defaultSweepParameter, defaultSweepRange } from "@/components/studies/sweepRange";
+import { defaultSweepParameter, defaultSweepRange, parseRangeValue } from "@/components/studies/sweepRange";
 
 describe("a new sweep's starting range", () => {
   it("turns an angle ±90° about its value, in its own unit", () => {
@@ -24,5 +24,23 @@ describe("a new sweep's starting range", () => {
     expect(defaultSweepParameter(["rho", "Q", "theta"], values)).toBe("theta");
     expect(defaultSweepParameter(["rho", "Q"], values)).toBe("rho");
     expect(defaultSweepParameter([], {})).toBe("flowFactor");
+  });
+});
+
+describe("the ends of a range as typed", () => {
+  it("a plain number is in the parameter's own unit; a value with a unit is converted to it", () => {
+    expect(parseRangeValue("45", "m / s")).toBe(45);
+    // 90 km/h = 25 m/s exactly; 1 US gallon = 3.785411784 L (NIST SP 811): 2000 L/min = 528.34 gpm
+    expect(parseRangeValue("90 km/hr", "m / s")).toBeCloseTo(25, 12);
+    expect(parseRangeValue("2000 lpm", "gpm")).toBeCloseTo(2000 / 3.785411784, 9);
+    // π rad = 180°
+    expect(parseRangeValue("(pi/6) rad", "deg")).toBeCloseTo(30, 12);
+  });
+
+  it("refuses the wrong kind, a unit on a plain-number parameter, and an empty box, in words", () => {
+    expect(() => parseRangeValue("3 kg", "m / s")).toThrow("3 kg cannot be written in m / s");
+    expect(() => parseRangeValue("1.2 m", "")).toThrow("1.2 m has a unit, but this parameter is a plain number");
+    expect(() => parseRangeValue(" ", "deg")).toThrow("needs a value");
+    expect(() => parseRangeValue("2 *", "deg")).toThrow();
   });
 });
