@@ -195,7 +195,7 @@ export function SweepPanel() {
           <label><span className={LABEL}>To</span><input className={INPUT} value={to} onChange={(e) => setTo(e.target.value)} aria-label="To" /></label>
           <label><span className={LABEL}>Points</span><input className={INPUT} value={points} onChange={(e) => setPoints(e.target.value)} aria-label="Points" /></label>
         </div>
-        <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1">Values in the unit the parameter is written in{data?.unit ? ` (${data.unit})` : ""}; the flow factor is a plain number.</p>
+        <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1">Numbers in the unit the parameter is written in{data?.unit ? ` (${data.unit})` : ""}, or give a unit (“90 km/hr”); the flow factor is a plain number.</p>
         {(sketch.cases?.length ?? 0) > 0 && (
           <label className="block">
             <span className={LABEL}>Case</span>
