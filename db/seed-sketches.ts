@@ -132,6 +132,18 @@ export const DEMO_SKETCHES: DemoSketch[] = [
       { by: "olivia", daysAgo: 1, message: "Clamped 45 kg of ballast to the base: the caster bears again", edit: (d) => (d.bodies[0].mass = "130 kg") },
     ],
   },
+  {
+    id: "6d656d6f-0000-4000-8000-0000000000a6",
+    file: "canvas/examples/exhaust-stack.json",
+    title: "Standby generator exhaust stack, temporary skid",
+    description: "8 m stack on an unbolted 3 m skid for the outage. How much ballast keeps the upwind edge down in the site's design wind, with the engine stopped?",
+    tags: ["exhaust", "outage"],
+    steps: [
+      { by: "eddie", daysAgo: 4, message: "Stack on its skid, engine running, 30 m/s wind" },
+      { by: "eddie", daysAgo: 2.5, message: "Site design wind is 40 m/s: the upwind edge lifts even with the engine running", edit: (d) => (d.parameters!.v = "40 m/s") },
+      { by: "eddie", daysAgo: 1.5, message: "700 kg of concrete blocks on the skid: the upwind edge bears again at 40 m/s", edit: (d) => (d.parameters!.ballast = "700 kg") },
+    ],
+  },
 ];
 
 /** The documents of a demo sketch's versions, in order (each step edits the one before). */
