@@ -172,6 +172,7 @@ export function SweepPanel() {
     editor.getState().apply(setStudy({ key: "sweeps", value: [sweep, ...(sketch.sweeps ?? []).filter((x) => x.id !== "sweep-1")] }) as Command<unknown>);
   };
 
+  const caseOverride = caseId ? sketch.cases?.find((c) => c.id === caseId)?.parameters?.[parameter] : undefined;
   const limitQuantity = quantities[limitQ] ?? quantities[0];
   const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scale[displayKind(limitQuantity.component)]) : "";
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
@@ -203,6 +204,11 @@ export function SweepPanel() {
               <option value="">As drawn</option>
               {sketch.cases!.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
             </select>
+            {caseOverride !== undefined && (
+              <span className="mt-0.5 block text-[11px] text-ink-faint" data-testid="case-sets-parameter">
+                This case sets {parameter} = {String(caseOverride)}; the sweep&apos;s values stand in for it.
+              </span>
+            )}
           </label>
         )}
         <fieldset className="col-span-2 flex flex-wrap gap-x-3 gap-y-0.5 rounded border border-rule-soft p-1.5 @xl:col-span-4 @4xl:col-span-1">

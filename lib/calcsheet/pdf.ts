@@ -176,6 +176,9 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     ensureSpace(doc, 320);
     const caseName = sw.case ? (parsed.file.cases?.find((c) => c.id === sw.case)?.name ?? sw.case) : null;
     heading(`Sweep of ${sw.parameter}${caseName ? ` — case ${caseName}` : " — as drawn"}`);
+    // a case that sets the swept parameter itself: the sweep's values stand in for the case's
+    const overridden = sw.case ? parsed.file.cases?.find((c) => c.id === sw.case)?.parameters?.[sw.parameter] : undefined;
+    if (overridden !== undefined) para(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`, 8.5, INK);
     try {
       const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions));
       for (const spec of charts) {

@@ -187,6 +187,17 @@ describe("Sweep tab", () => {
     expect((await screen.findByRole("alert")).textContent).toBe("Target: 3 kg is a mass (kg), but this field needs a moment (N·m).");
   });
 
+  it("says when the chosen case sets the swept parameter itself", async () => {
+    const user = userEvent.setup();
+    const { exampleById } = await import("@/canvas/examples");
+    // the exhaust stack's saved sweep: v on the case "Engine stopped, 30 m/s wind", which sets v
+    mount(exampleById("exhaust-stack")!.sketch);
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    expect(screen.getByTestId("case-sets-parameter").textContent).toBe("This case sets v = 30 m/s; the sweep's values stand in for it.");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Case to sweep" }), "");
+    expect(screen.queryByTestId("case-sets-parameter")).toBeNull();
+  });
+
   it("plots a sweep, lists the crossing, and the limit finder answers in words", async () => {
     const user = userEvent.setup();
     mount(load("fire-monitor-trailer"));

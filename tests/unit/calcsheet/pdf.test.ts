@@ -139,7 +139,19 @@ describe("calc sheet PDF", () => {
     const lim = runLimit(file, { parameter: "theta", from: 0, to: 80, caseId: "more", quantity: { support: "jack", component: "margin" }, target: 0 });
     if (!lim.found) throw new Error("expected a crossing");
     expect(text).toContain("Sweep of theta — case More flow");
+    // "More flow" leaves theta alone: nothing to say about it
+    expect(text).not.toContain("stand in for the case's own");
     expect(text).toContain(`Crossing: jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
+  }, 60000);
+
+  it("says when a sweep's case sets the swept parameter itself: the sweep's values stand in for it", async () => {
+    // the exhaust-stack example sweeps the wind speed v on a case that sets v = 30 m/s
+    const { exampleById } = await import("@/canvas/examples");
+    const file = exampleById("exhaust-stack")!.sketch;
+    const { text } = await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Stack", version: 1, savedAt: new Date(), signoff: [], file }));
+    expect(text).toContain("Sweep of v — case Engine stopped, 30 m/s wind");
+    expect(text).toContain("The sweep's values of v stand in for the case's own (v = 30 m/s); everything else is as in the case.");
+    expect(text).toMatch(/Crossing: upwind: lift-off \(its normal force reaches zero\) at v = 36\.99 m \/ s/);
   }, 60000);
 
   it("prints a support-moment column only when a fixed support can carry a moment, zeros included", async () => {
