@@ -55,14 +55,34 @@ function largestOf(values: Iterable<number | null | undefined>): number {
   return m;
 }
 
-/** A table's force and moment units, from the largest of each it shows. */
-type Units = { system: UnitSystem; force: string; moment: string };
-function tableUnits(system: UnitSystem, forces: Iterable<number | null | undefined>, moments: Iterable<number | null | undefined>): Units {
-  const f = largestOf(forces);
-  const m = largestOf(moments);
+/** The largest force and moment (SI) a table or panel shows, which choose its units. */
+export type Scale = { force: number; moment: number };
+function scaleOf(forces: Iterable<number | null | undefined>, moments: Iterable<number | null | undefined>): Scale {
+  const force = largestOf(forces);
   // moments all zero (no fixed support): they follow the forces, N with N·m
-  return { system, force: columnUnit("force", system, f), moment: columnUnit("moment", system, m || f) };
+  return { force, moment: largestOf(moments) || force };
 }
+
+/** The scale of a result's reactions table; the limit finder's target is typed in its units. */
+export function reactionScale(result: SolveResult): Scale {
+  const all = Object.values(result.reactions);
+  return scaleOf(all.flatMap((r) => [Math.hypot(r.fx, r.fy), r.n, r.t, r.margin]), all.map((r) => r.m));
+}
+
+/** The scale of a body's hand check about a point: its terms and their sums. */
+export function handCheckScale(eq: SolveResult["equations"][string], about: Vec2): Scale {
+  const sums = handCheckSums(eq, about);
+  const terms = [...eq.forces, ...eq.momentum];
+  return scaleOf(
+    [...terms.flatMap((t) => [t.fx, t.fy]), sums.forces.fx, sums.forces.fy, sums.momentum.fx, sums.momentum.fy],
+    [...terms.map((t) => termMomentAbout(t, about)), sums.forces.m, sums.momentum.m],
+  );
+}
+
+/** A table's force and moment units. */
+type Units = { system: UnitSystem; force: string; moment: string };
+const unitsOf = (system: UnitSystem, scale: Scale): Units => ({ system, force: columnUnit("force", system, scale.force), moment: columnUnit("moment", system, scale.moment) });
+const tableUnits = (system: UnitSystem, forces: Iterable<number | null | undefined>, moments: Iterable<number | null | undefined>): Units => unitsOf(system, scaleOf(forces, moments));
 
 /** The unit of a quantity in a table: its force or moment unit, or the usual one (length, angle…). */
 const unitOf = (q: Quantity, u: Units) => (q === "force" ? u.force : q === "moment" ? u.moment : columnUnit(q, u.system));
@@ -74,8 +94,7 @@ function inUnit(v: number | undefined, q: Quantity, u: Units): number | null {
 
 /** Reactions of one run, one row per support (force on the body, or load on the support). */
 export function reactionTable(result: SolveResult, system: UnitSystem, opts: { onSupport?: boolean; id?: string; title?: string } = {}): Table {
-  const all = Object.values(result.reactions);
-  const u = tableUnits(system, all.flatMap((r) => [Math.hypot(r.fx, r.fy), r.n, r.t, r.margin]), all.map((r) => r.m));
+  const u = unitsOf(system, reactionScale(result));
   const f = u.force;
   const m = u.moment;
   const sign = opts.onSupport ? -1 : 1;
@@ -337,12 +356,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
 export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem): Table {
   const eq = result.equations[bodyId];
   const sums = handCheckSums(eq, about);
-  const terms = [...eq.forces, ...eq.momentum];
-  const u = tableUnits(
-    system,
-    [...terms.flatMap((t) => [t.fx, t.fy]), sums.forces.fx, sums.forces.fy, sums.momentum.fx, sums.momentum.fy],
-    [...terms.map((t) => termMomentAbout(t, about)), sums.forces.m, sums.momentum.m],
-  );
+  const u = unitsOf(system, handCheckScale(eq, about));
   const f = u.force;
   const m = u.moment;
   const L = columnUnit("length", system);

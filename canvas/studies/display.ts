@@ -4,7 +4,6 @@
 import type { QuantityComponent } from "@/solver/quantity";
 import { columnUnit } from "@/solver/report";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
-import type { SolveResult } from "@/solver/types";
 import { convert, type Quantity, type UnitSystem } from "@/solver/units";
 
 export type DisplayKind = Extract<Quantity, "force" | "moment" | "ratio">;
@@ -46,25 +45,15 @@ export function fromDisplay(value: number, component: QuantityComponent, system:
 
 /**
  * A limit's target as typed: a plain number is in the display unit (as the label beside it says),
- * or a value with its own unit ("2 kN", "450 lbf", "1.2 kN m"). Returns SI (N, N·m, or the ratio);
- * throws an error in words when the text is not a value of that kind.
+ * or a value with its own unit ("2 kN", "450 lbf", "1.2 kN m"). Returns it in SI (N, N·m, or the
+ * ratio) and as it reads in the answer ("20 N·m", "450 lbf"); throws an error in words when the
+ * text is not a value of that kind.
  */
-export function parseTarget(text: string, component: QuantityComponent, system: UnitSystem, largest?: number): number {
+export function parseTarget(text: string, component: QuantityComponent, system: UnitSystem, largest?: number): { si: number; shown: string } {
   const v = evaluateTyped(text);
-  return typeof v === "number" ? fromDisplay(v, component, system, largest) : toFieldNumber(v, displayKind(component));
-}
-
-/** The largest force and moment of a result's reactions: what its reactions table is written in,
- *  so a limit's target is typed in the unit the table beside it shows. */
-export function largestOfResult(result: SolveResult | null): Record<DisplayKind, number> {
-  const out: Record<DisplayKind, number> = { force: 0, moment: 0, ratio: 0 };
-  for (const r of Object.values(result?.reactions ?? {})) {
-    for (const v of [Math.hypot(r.fx, r.fy), r.n, r.t, r.margin]) if (v !== undefined && Number.isFinite(v)) out.force = Math.max(out.force, Math.abs(v));
-    if (Number.isFinite(r.m)) out.moment = Math.max(out.moment, Math.abs(r.m));
-  }
-  // no moment anywhere: moments follow the forces (N with N·m), as in the tables
-  if (!out.moment) out.moment = out.force;
-  return out;
+  if (typeof v !== "number") return { si: toFieldNumber(v, displayKind(component)), shown: text.trim() };
+  const unit = displayUnit(component, system, largest);
+  return { si: fromDisplay(v, component, system, largest), shown: `${v}${unit ? ` ${unit}` : ""}` };
 }
 
 /** Only a margin crossing zero means something happened: a contact lifts, a tie goes slack, or

@@ -4,7 +4,7 @@
 // P is picked on the canvas (the "Pick on the drawing" button) or typed.
 import { useDeferredValue, useMemo, useState } from "react";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
-import { columnUnit, handCheckTable } from "@/solver/report";
+import { columnUnit, handCheckScale, handCheckTable } from "@/solver/report";
 import { downloadCsv } from "@/components/studies/csv";
 import { convert, formatNumber, type UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
@@ -20,17 +20,6 @@ import { defaultMomentPoint, handCheckBlocks, type HandCheckBlock } from "./hand
 export function parseLength(text: string, units: UnitSystem): number {
   const v = evaluateTyped(text.trim() || "0");
   return typeof v === "number" ? v / convert(1, "length", units).value : toFieldNumber(v, "length");
-}
-
-/** The force and moment units of the three sums: N and N·m when everything is below 1 kN (1 kN·m),
- *  as in the tables; the two force sums share theirs. */
-function sumUnits(blocks: HandCheckBlock[], units: UnitSystem): Record<"fx" | "fy" | "m", string> {
-  const largest = (keys: string[]) =>
-    Math.max(0, ...blocks.filter((b) => keys.includes(b.key)).flatMap((b) => [...b.forces, ...b.momentum].map((t) => Math.abs(t.value)).concat(Math.abs(b.forcesSum), Math.abs(b.momentumSum))));
-  const f = largest(["fx", "fy"]);
-  const force = columnUnit("force", units, f);
-  // moments all zero: they follow the forces (N with N·m), as in the tables
-  return { fx: force, fy: force, m: columnUnit("moment", units, largest(["m"]) || f) };
 }
 
 function fmt(v: number, key: "fx" | "fy" | "m", units: UnitSystem, unit: string): string {
@@ -101,7 +90,12 @@ export function HandCheckView() {
   const eq = body && shown ? shown.equations[body.id] : undefined;
   const about: Vec2 = picked ?? defaultMomentPoint(eq, body?.cg);
   const blocks = useMemo(() => (eq ? handCheckBlocks(eq, about) : []), [eq, about]);
-  const unitsOfSums = useMemo(() => sumUnits(blocks, units), [blocks, units]);
+  // the units of the three sums, as in the hand check's table: N and N·m when all of it is below 1 kN
+  const unitsOfSums = useMemo(() => {
+    const scale = eq ? handCheckScale(eq, about) : undefined;
+    const force = columnUnit("force", units, scale?.force);
+    return { fx: force, fy: force, m: columnUnit("moment", units, scale?.moment) };
+  }, [eq, about, units]);
   const [draft, setDraft] = useState<{ x: string; y: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
   if (!eq || !body) return <p className="p-2 text-[12.5px] text-ink-faint">No result to check yet.</p>;

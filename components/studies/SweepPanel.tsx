@@ -7,7 +7,8 @@ import type { LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber } from "@/solver/units";
-import { displayKind, displayUnit, largestOfResult, parseTarget } from "@/canvas/studies/display";
+import { displayKind, displayUnit, parseTarget } from "@/canvas/studies/display";
+import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile } from "@/solver/schema";
@@ -63,7 +64,11 @@ export function SweepPanel() {
   const values = useAnalysis((s) => s.core?.parameterValues) ?? NO_VALUES;
   // the limit's target is typed in the unit of the reactions table (N for a bench rig, kN for a skid)
   const shown = useAnalysis((s) => s.shown);
-  const scale = useMemo(() => largestOfResult(shown), [shown]);
+  const scale = useMemo(() => (shown ? reactionScale(shown) : undefined), [shown]);
+  const scaleFor = (c: QuantityComponent) => {
+    const kind = displayKind(c);
+    return kind === "ratio" ? undefined : scale?.[kind];
+  };
   const [parameter, setParameter] = useState(() => saved?.parameter ?? defaultSweepParameter(parameters, values));
   const [from, setFrom] = useState(() => String(saved?.from ?? defaultSweepRange(parameter, values[parameter]).from));
   const [to, setTo] = useState(() => String(saved?.to ?? defaultSweepRange(parameter, values[parameter]).to));
@@ -100,18 +105,15 @@ export function SweepPanel() {
     // the ends in the unit the parameter is written in, or with their own unit ("90 km/hr")
     const current = parameter === FLOW_FACTOR ? undefined : values[parameter];
     const unit = current && !("error" in current) ? current.unit : "";
-    let f: number;
-    let t: number;
-    try {
-      f = parseRangeValue(from, unit);
-    } catch (err) {
-      return `From: ${(err as Error).message}.`;
+    const ends: number[] = [];
+    for (const [name, text] of [["From", from], ["To", to]]) {
+      try {
+        ends.push(parseRangeValue(text, unit));
+      } catch (err) {
+        return `${name}: ${(err as Error).message}.`;
+      }
     }
-    try {
-      t = parseRangeValue(to, unit);
-    } catch (err) {
-      return `To: ${(err as Error).message}.`;
-    }
+    const [f, t] = ends;
     const n = Math.round(Number(points));
     if (f === t) return "Give a range: two different values.";
     if (!(n >= 2 && n <= 20000)) return "Points: 2 to 20,000.";
@@ -146,20 +148,18 @@ export function SweepPanel() {
     const q = quantities[limitQ] ?? quantities[0];
     // a plain number is in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or
     // N·m); a value with a unit ("450 lbf") is taken as written
-    const unit = displayUnit(q.component, units, scale[displayKind(q.component)]);
-    let tgt: number;
+    let tgt: { si: number; shown: string };
     try {
-      tgt = parseTarget(target, q.component, units, scale[displayKind(q.component)]);
+      tgt = parseTarget(target, q.component, units, scaleFor(q.component));
     } catch (err) {
       return setError(`Target: ${(err as Error).message}.`);
     }
-    const typed = /^\s*[-+]?[\d.]+(e[-+]?\d+)?\s*$/i.test(target) ? `${Number(target)}${unit ? ` ${unit}` : ""}` : target.trim();
     setError(null);
-    const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt } });
+    const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt.si } });
     setSearching(() => job.cancel);
     setLimitStopped(false);
     job.promise
-      .then((result) => setLimit({ result, label: describeQuantity(q), target: typed }))
+      .then((result) => setLimit({ result, label: describeQuantity(q), target: tgt.shown }))
       // Stop ends every study of this panel at once (they share one worker)
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -174,7 +174,7 @@ export function SweepPanel() {
 
   const caseOverride = caseId ? sketch.cases?.find((c) => c.id === caseId)?.parameters?.[parameter] : undefined;
   const limitQuantity = quantities[limitQ] ?? quantities[0];
-  const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scale[displayKind(limitQuantity.component)]) : "";
+  const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scaleFor(limitQuantity.component)) : "";
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
   const invalid = data ? invalidStretches(data) : [];
 

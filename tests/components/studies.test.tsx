@@ -142,6 +142,13 @@ async function sweepPostMoment(user: ReturnType<typeof userEvent.setup>, range: 
   await user.click(screen.getByRole("button", { name: "Run the sweep" }));
 }
 
+/** The limit finder run for a target typed in its box. */
+async function findLimit(user: ReturnType<typeof userEvent.setup>, target: string) {
+  await user.clear(screen.getByRole("textbox", { name: "Target value" }));
+  await user.type(screen.getByRole("textbox", { name: "Target value" }), target);
+  await user.click(screen.getByRole("button", { name: "Find" }));
+}
+
 describe("Sweep tab", () => {
   it("the limit finder takes a fixed support's moment in lbf·ft (1 lbf·ft = 1.3558179483 N·m, NIST SP 811)", async () => {
     const user = userEvent.setup();
@@ -154,9 +161,7 @@ describe("Sweep tab", () => {
     expect((await screen.findByTestId("crossings")).textContent).toContain("No margin crosses zero in this range.");
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
     expect(screen.getByRole("group", { name: "Limit finder" }).textContent).toContain("lbf·ft?");
-    await user.clear(screen.getByRole("textbox", { name: "Target value" }));
-    await user.type(screen.getByRole("textbox", { name: "Target value" }), "1");
-    await user.click(screen.getByRole("button", { name: "Find" }));
+    await findLimit(user, "1");
     expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 1 lbf·ft at a = 1.0014 m.");
   });
 
@@ -171,19 +176,13 @@ describe("Sweep tab", () => {
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
     expect(screen.getByRole("group", { name: "Limit finder" }).textContent).toContain("N·m?");
     expect(screen.getByRole("group", { name: "Limit finder" }).textContent).not.toContain("kN·m?");
-    await user.clear(screen.getByRole("textbox", { name: "Target value" }));
-    await user.type(screen.getByRole("textbox", { name: "Target value" }), "20");
-    await user.click(screen.getByRole("button", { name: "Find" }));
+    await findLimit(user, "20");
     expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 20 N·m at a = 1.2 m.");
     // a target with its own unit is taken as written: 0.03 kN·m = 30 N·m at a = 1.3 m
-    await user.clear(screen.getByRole("textbox", { name: "Target value" }));
-    await user.type(screen.getByRole("textbox", { name: "Target value" }), "0.03 kN m");
-    await user.click(screen.getByRole("button", { name: "Find" }));
+    await findLimit(user, "0.03 kN m");
     await waitFor(() => expect(screen.getByTestId("limit-answer").textContent).toBe("The moment at base reaches 0.03 kN m at a = 1.3 m."));
     // the wrong kind of quantity is refused in words, naming the target
-    await user.clear(screen.getByRole("textbox", { name: "Target value" }));
-    await user.type(screen.getByRole("textbox", { name: "Target value" }), "3 kg");
-    await user.click(screen.getByRole("button", { name: "Find" }));
+    await findLimit(user, "3 kg");
     expect((await screen.findByRole("alert")).textContent).toBe("Target: 3 kg is a mass (kg), but this field needs a moment (N·m).");
   });
 
