@@ -3,6 +3,7 @@
 // (or text); formatting is left to whoever shows them.
 import type { CaseRun, Component, StudyResult, SupportEnvelope } from "./cases";
 import { handCheckSums, termMomentAbout } from "./equations";
+import { FOOT_M, LBF_N } from "./constants";
 import { FIELD_UNIT_LABELS } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
@@ -30,20 +31,24 @@ export interface CellMark {
 
 /** Below this (N, or N·m) a whole SI table is written in N (N·m) rather than kN (kN·m): a fan cart's 52 N, not 0.052 kN. */
 const SMALL_SI = 999.95;
+/** From this (lbf, or lbf·ft) a whole US table is written in kip (kip·ft), as the canvas's labels are from 10 kip: an anchor's 12.5 kip, not 12,500 lbf. */
+const LARGE_US = 9999.5;
 
 /**
  * The display unit of a table's force or moment columns: kN / kN·m in SI, lbf / lbf·ft in US. Given
  * `largest` (the largest magnitude in the table, SI), an SI table whose every value is below 1 kN
- * (1 kN·m) is written in N (N·m). One unit per table, so its numbers compare at a glance.
+ * (1 kN·m) is written in N (N·m), and a US table with a value of 10 kip (10 kip·ft) or more in kip
+ * (kip·ft). One unit per table, so its numbers compare at a glance.
  */
 export function columnUnit(q: Quantity, system: UnitSystem, largest?: number): string {
   const preferred: Partial<Record<Quantity, Record<UnitSystem, string>>> = {
     force: { SI: "kN", US: "lbf" },
     moment: { SI: "kN·m", US: "lbf·ft" },
   };
-  if (system === "SI" && largest !== undefined && largest > 0 && largest < SMALL_SI) {
-    if (q === "force") return "N";
-    if (q === "moment") return "N·m";
+  if (largest !== undefined && largest > 0 && (q === "force" || q === "moment")) {
+    if (system === "SI" && largest < SMALL_SI) return q === "force" ? "N" : "N·m";
+    const usual = q === "force" ? LBF_N : LBF_N * FOOT_M;
+    if (system === "US" && largest / usual >= LARGE_US) return q === "force" ? "kip" : "kip·ft";
   }
   return preferred[q]?.[system] ?? unitsFor(q, system)[0];
 }
@@ -93,8 +98,9 @@ function inUnit(v: number | undefined, q: Quantity, u: Units): number | null {
 }
 
 /** Reactions of one run, one row per support (force on the body, or load on the support). */
-export function reactionTable(result: SolveResult, system: UnitSystem, opts: { onSupport?: boolean; id?: string; title?: string } = {}): Table {
-  const u = unitsOf(system, reactionScale(result));
+export function reactionTable(result: SolveResult, system: UnitSystem, opts: { onSupport?: boolean; id?: string; title?: string; scale?: Scale } = {}): Table {
+  // `scale`: the screen holds a table's units while a drag runs, so 990 N → 1.01 kN does not flicker
+  const u = unitsOf(system, opts.scale ?? reactionScale(result));
   const f = u.force;
   const m = u.moment;
   const sign = opts.onSupport ? -1 : 1;

@@ -11,6 +11,7 @@ import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { BUTTON, INPUT } from "@/components/editor/ui";
 import { useActionRunner } from "@/components/editor/useActions";
+import { useHeldScale } from "./useHeldScale";
 import { defaultMomentPoint, handCheckBlocks, type HandCheckBlock } from "./handCheck";
 
 /**
@@ -91,11 +92,11 @@ export function HandCheckView() {
   const about: Vec2 = picked ?? defaultMomentPoint(eq, body?.cg);
   const blocks = useMemo(() => (eq ? handCheckBlocks(eq, about) : []), [eq, about]);
   // the units of the three sums, as in the hand check's table: N and N·m when all of it is below 1 kN
+  const scale = useHeldScale(useMemo(() => (eq ? handCheckScale(eq, about) : undefined), [eq, about]));
   const unitsOfSums = useMemo(() => {
-    const scale = eq ? handCheckScale(eq, about) : undefined;
     const force = columnUnit("force", units, scale?.force);
     return { fx: force, fy: force, m: columnUnit("moment", units, scale?.moment) };
-  }, [eq, about, units]);
+  }, [scale, units]);
   const [draft, setDraft] = useState<{ x: string; y: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
   if (!eq || !body) return <p className="p-2 text-[12.5px] text-ink-faint">No result to check yet.</p>;

@@ -3,13 +3,14 @@
 // off the supports, a sliding body), the body/support switch on the moment and friction columns,
 // and the SI / US switch across the results while typed inputs keep their units.
 import { readFileSync } from "node:fs";
-import { screen, within } from "@testing-library/react";
+import { act, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { parseSketch, solve, type SolveResult, type Sketch } from "@/solver/index";
 import { formatQuantity } from "@/solver/units";
 import { emptySketch } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
+import { moveElement } from "@/canvas/commands/move";
 import { statusSentences } from "@/components/results/statusSentence";
 import { EXAMPLES } from "@/canvas/examples";
 import { beam, mountResultsDock, renderEditor } from "./editor-helpers";
@@ -136,6 +137,29 @@ describe("the SI / US switch", () => {
     const magnitude = within(screen.getByTestId("element-form")).getByLabelText("Magnitude");
     expect(magnitude).toHaveValue("10 kN");
     expect(magnitude).toHaveAccessibleDescription(/^= 2,?248 lbf$/);
+  });
+});
+
+describe("a table's units during a drag", () => {
+  it("stay as they were when the drag began, and are chosen afresh when it ends", async () => {
+    // the demo beam (100 kg) with 1 kN at mid-span: each support carries 490.3 + 500 = 990.3 N, so N
+    const doc = beam();
+    doc.loads[0] = { ...doc.loads[0], magnitude: "1 kN" } as (typeof doc.loads)[number];
+    const editor = mountResultsDock(doc);
+    const heading = () => within(screen.getByTestId("reactions")).getByRole("columnheader", { name: /^Fy/ });
+    const pad = () => num(document.querySelector("[data-testid=reactions] tr[data-support=s2] td[data-col=fy]")!.textContent!);
+    expect(heading()).toHaveTextContent("(N)");
+    expect(pad()).toBeCloseTo(990.3, 1);
+    // the load dragged 1 m to the right: the pad takes 490.3 + 1000·3/4 = 1240.3 N (statics, common practice)
+    act(() => {
+      editor.getState().beginGesture("Move l1");
+      editor.getState().updateGesture(moveElement({ ids: ["l1"], delta: [1, 0] }) as never);
+    });
+    await waitFor(() => expect(pad()).toBe(1240)); // 4 significant figures
+    expect(heading()).toHaveTextContent("(N)");
+    act(() => editor.getState().endGesture());
+    await waitFor(() => expect(heading()).toHaveTextContent("(kN)"));
+    expect(pad()).toBeCloseTo(1.240, 3);
   });
 });
 

@@ -117,4 +117,18 @@ describe("one unit per table, chosen by its largest value", () => {
     expect(big.rows.find((row) => row[0] === "rear")![col("fx")]).toBeCloseTo(2, 9);
     expect(reactionTable(r, "US").columns[col("fx")].unit).toBe("lbf");
   });
+
+  it("a US table with 10 kip or more is in kip and kip·ft, as the canvas labels are; below, lbf", () => {
+    // 1 kip = 1000 lbf and 1 lbf = 4.448 221 615 260 5 N exactly (NIST SP 811, appendix B)
+    const pushed = cart(4, 60_000); // a 60 kN jet on the small rig: 13.49 kip at the pin
+    const t = reactionTable(pushed, "US");
+    const col = (key: string) => t.columns.findIndex((c) => c.key === key);
+    expect(t.columns[col("fx")].unit).toBe("kip");
+    expect(t.columns[col("m")].unit).toBe("kip·ft");
+    expect(t.rows.find((row) => row[0] === "rear")![col("fx")]).toBeCloseTo(60_000 / LBF_N / 1000, 9);
+    // 9,000 lbf (40.03 kN) stays in lbf: kip only from 10 kip
+    const under = reactionTable(cart(4, 9000 * LBF_N), "US");
+    expect(under.columns[col("fx")].unit).toBe("lbf");
+    expect(under.rows.find((row) => row[0] === "rear")![col("fx")]).toBeCloseTo(9000, 6);
+  });
 });
