@@ -63,6 +63,19 @@ function slipSentence(c: Context): string | null {
   return "Slides — the friction contacts cannot hold it";
 }
 
+/**
+ * A contact over its μ while the body as a whole has friction to spare: the friction is shared as
+ * the supports' stiffnesses share it (the file format's rule), and a small slip at that contact
+ * would pass load to the others, which the analysis does not follow. Said, so a checker is not
+ * left to think the body slides away.
+ */
+function sharedFrictionNote(c: Context): string | null {
+  const f = c.body.friction;
+  const over = c.reactions.some(([, r]) => r.friction && r.state === "bearing" && r.friction.needed > r.friction.mu * (1 + 1e-9) + 1e-12);
+  if (!f || !over || f.needed > f.available * (1 + 1e-9)) return null;
+  return `As a whole the body needs a friction coefficient of ${ratio(f.needed)} and its friction contacts give ${ratio(f.available)}: the friction is shared as the supports' stiffnesses share it, and a small slip at the overloaded contact may pass the rest to the others (this analysis does not follow that).`;
+}
+
 function pivotName(c: Context, about: Vec2): string {
   const near = c.supports.find((s) => Math.hypot(s.at[0] - about[0], s.at[1] - about[1]) < 1e-6 * Math.max(1, Math.hypot(about[0], about[1])) + 1e-9);
   if (near) return supportName(near);
@@ -129,6 +142,8 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
 
     const details: string[] = [];
     if (slip && body.status === "lifts") details.push(`${liftSentence(c)}.`);
+    const shared = slip ? sharedFrictionNote(c) : null;
+    if (shared) details.push(shared);
     if (body.determinacy.kind === "indeterminate")
       details.push(`Statically indeterminate (degree ${body.determinacy.degree}): the reactions depend on the support stiffnesses.`);
     const ids = new Set([b.id, ...supports.map((s) => s.id), ...sketch.ports.filter((p) => p.body === b.id).map((p) => p.id), ...sketch.massSources.filter((m) => m.body === b.id).map((m) => m.id)]);

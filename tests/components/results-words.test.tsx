@@ -75,6 +75,37 @@ describe("status sentences the worked examples do not reach", () => {
     expect(statusSentences(sketch, sliding)[0].headline).toMatch(/^Would move along 30° — the rear pad would have to pull /);
   });
 
+  it("one contact over its μ while the body as a whole has friction to spare: the sentence says both", () => {
+    // a 1000 kg block, 2 m × 1 m, on two pads at its bottom corners (μ = 0.5), pushed +x at its top
+    // left corner by P. Statics (common practice): ΣM about the left pad gives n_right = (W + P)/2,
+    // n_left = (W − P)/2; equal pad stiffnesses share the friction equally, t = P/2 at each, so the
+    // left pad needs P/(W − P) while the block as a whole needs P/W.
+    const block = (P: number) =>
+      solved({
+        ...emptySketch("Block pushed at its top"),
+        bodies: [{ ...newBody("b1", [[0, 0], [2, 0], [2, 1], [0, 1]], "Block"), mass: "1000 kg" }],
+        supports: [
+          { id: "s1", body: "b1", kind: "contact", at: [0, 0], angle: 90, mu: 0.5, label: "left pad" },
+          { id: "s2", body: "b1", kind: "contact", at: [2, 0], angle: 90, mu: 0.5, label: "right pad" },
+        ],
+        loads: [{ id: "l1", body: "b1", kind: "force", at: [0, 1], magnitude: P, angle: 0 }],
+      });
+    const W = 1000 * 9.80665;
+    const held = block(4000);
+    const [s] = statusSentences(held.sketch, held.result);
+    expect((4000 / (W - 4000)).toPrecision(2)).toBe("0.69");
+    expect(s.headline).toBe("Slips at the left pad — needs 0.69, has μ = 0.5");
+    expect((4000 / W).toPrecision(2)).toBe("0.41");
+    expect(s.details).toContain(
+      "As a whole the body needs a friction coefficient of 0.41 and its friction contacts give 0.5: the friction is shared as the supports' stiffnesses share it, and a small slip at the overloaded contact may pass the rest to the others (this analysis does not follow that).",
+    );
+    // 6 kN needs 0.61 of the whole block's 0.5: no such comfort
+    const pushed = block(6000);
+    const [t] = statusSentences(pushed.sketch, pushed.result);
+    expect(t.tone).toBe("slips");
+    expect(t.details.join(" ")).not.toMatch(/As a whole/);
+  });
+
   it("a body that slides as a whole (no one contact over its μ) gives the friction needed and available", () => {
     const { sketch, result } = solved(load("pump-skid-slip"));
     // the same body, with each contact just within its μ but the body's total over it
