@@ -44,23 +44,39 @@ interface Context {
 
 const force = (c: Context, v: number) => formatQuantity(Math.abs(v), "force", c.units);
 
-function slipSentence(c: Context): string | null {
+/** The contacts over their μ, the most overloaded first. */
+function overloaded(c: Context): Array<[Support, Reaction]> {
+  const out = c.reactions.filter(([, r]) => r.friction && r.state === "bearing" && r.friction.needed > r.friction.mu * (1 + 1e-9) + 1e-12);
+  return out.sort((a, b) => b[1].friction!.needed / Math.max(b[1].friction!.mu, 1e-12) - a[1].friction!.needed / Math.max(a[1].friction!.mu, 1e-12));
+}
+
+/** "Slips at the skid foot — needs 0.31, has μ = 0.25 (and at …)" */
+function contactSlip(slipping: Array<[Support, Reaction]>): string {
+  const [s, r] = slipping[0];
+  const more = slipping.length > 1 ? ` (and at ${list(slipping.slice(1).map(([x]) => supportName(x)))})` : "";
+  return `Slips at ${supportName(s)} — needs ${ratio(r.friction!.needed)}, has μ = ${ratio(r.friction!.mu)}${more}`;
+}
+
+/**
+ * Slip leads: the body as a whole first (more friction needed than all its friction contacts give:
+ * it slides, whatever the share between them), then a contact over its own μ.
+ */
+function slipSentence(c: Context): { headline: string; details: string[] } | null {
   const ids = new Set(c.supports.map((s) => s.id));
   const slips = c.result.warnings.filter((w) => w.code === "SLIP" && w.ids.some((i) => ids.has(i)));
   if (!slips.length) return null;
-  const slipping = c.reactions.filter(([, r]) => r.friction && r.state === "bearing" && r.friction.needed > r.friction.mu * (1 + 1e-9) + 1e-12);
-  if (slipping.length) {
-    slipping.sort((a, b) => b[1].friction!.needed / Math.max(b[1].friction!.mu, 1e-12) - a[1].friction!.needed / Math.max(a[1].friction!.mu, 1e-12));
-    const [s, r] = slipping[0];
-    const more = slipping.length > 1 ? ` (and at ${list(slipping.slice(1).map(([x]) => supportName(x)))})` : "";
-    return `Slips at ${supportName(s)} — needs ${ratio(r.friction!.needed)}, has μ = ${ratio(r.friction!.mu)}${more}`;
-  }
-  // the body as a whole: Σ|t| demand against Σ μ·n
+  const slipping = overloaded(c);
+  const f = c.body.friction;
   const bearing = c.reactions.filter(([, r]) => r.friction && r.state === "bearing");
   const sumN = bearing.reduce((a, [, r]) => a + (r.n ?? 0), 0);
-  const f = c.body.friction;
-  if (f && sumN > 0) return `Slides — its friction contacts must resist ${force(c, f.needed * sumN)} and can give ${force(c, f.available * sumN)}`;
-  return "Slides — the friction contacts cannot hold it";
+  if (f && sumN > 0 && f.needed > f.available * (1 + 1e-9)) {
+    return {
+      headline: `Slides — its friction contacts must resist ${force(c, f.needed * sumN)} and can give ${force(c, f.available * sumN)} (needs μ = ${ratio(f.needed)} as a whole, has ${ratio(f.available)})`,
+      details: slipping.length ? [`${contactSlip(slipping)}.`] : [],
+    };
+  }
+  if (slipping.length) return { headline: contactSlip(slipping), details: [] };
+  return { headline: "Slides — the friction contacts cannot hold it", details: [] };
 }
 
 /**
@@ -71,8 +87,7 @@ function slipSentence(c: Context): string | null {
  */
 function sharedFrictionNote(c: Context): string | null {
   const f = c.body.friction;
-  const over = c.reactions.some(([, r]) => r.friction && r.state === "bearing" && r.friction.needed > r.friction.mu * (1 + 1e-9) + 1e-12);
-  if (!f || !over || f.needed > f.available * (1 + 1e-9)) return null;
+  if (!f || !overloaded(c).length || f.needed > f.available * (1 + 1e-9)) return null;
   return `As a whole the body needs a friction coefficient of ${ratio(f.needed)} and its friction contacts give ${ratio(f.available)}: the friction is shared as the supports' stiffnesses share it, and a small slip at the overloaded contact may pass the rest to the others (this analysis does not follow that).`;
 }
 
@@ -136,11 +151,12 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
     } else if (body.status === "tips") headline = tipSentence(c);
     else if (slip) {
       tone = "slips";
-      headline = slip;
+      headline = slip.headline;
     } else if (body.status === "lifts") headline = liftSentence(c);
     else headline = holdSentence(c);
 
     const details: string[] = [];
+    if (slip) details.push(...slip.details);
     if (slip && body.status === "lifts") details.push(`${liftSentence(c)}.`);
     const shared = slip ? sharedFrictionNote(c) : null;
     if (shared) details.push(shared);

@@ -61,8 +61,10 @@ describe("status sentences the worked examples do not reach", () => {
     const [s] = statusSentences(sketch, result);
     expect(result.bodies.trailer.status).toBe("lifts");
     expect(s.tone).toBe("slips");
-    expect(s.headline).toMatch(/^Slips at the .+ — needs \d[\d.]*, has μ = 0\.01/);
-    expect(s.details[0]).toBe("Lifts off at the front jack — the rear stabiliser leg and the wheel still hold the body.");
+    // μ = 0.01 everywhere: the whole trailer slides, and the contact most over its μ follows
+    expect(s.headline).toMatch(/^Slides — its friction contacts must resist [\d.,]+ k?N and can give [\d.,]+ k?N \(needs μ = [\d.]+ as a whole, has 0\.01\)$/);
+    expect(s.details[0]).toMatch(/^Slips at the .+ — needs \d[\d.]*, has μ = 0\.01/);
+    expect(s.details[1]).toBe("Lifts off at the front jack — the rear stabiliser leg and the wheel still hold the body.");
   });
 
   it("tipping about a point that is not a support names the point, in metres or in feet", () => {
@@ -114,7 +116,35 @@ describe("status sentences the worked examples do not reach", () => {
     const body = { ...result.bodies.skid, friction: { needed: 0.03, available: 0.02 } };
     const [s] = statusSentences(sketch, { ...result, reactions, bodies: { skid: body } });
     expect(s.tone).toBe("slips");
-    expect(s.headline).toBe(`Slides — its friction contacts must resist ${formatQuantity(0.03 * sumN, "force", "SI")} and can give ${formatQuantity(0.02 * sumN, "force", "SI")}`);
+    expect(s.headline).toBe(`Slides — its friction contacts must resist ${formatQuantity(0.03 * sumN, "force", "SI")} and can give ${formatQuantity(0.02 * sumN, "force", "SI")} (needs μ = 0.03 as a whole, has 0.02)`);
+  });
+
+  it("a block on a slope steeper than its friction angle slides as a whole, whichever contact is over first", () => {
+    // a 100 kg block on two pads (μ = 0.5) on a 30° slope, drawn level with gravity leaning 30°
+    // toward −x. A block slides when tan θ > μ: it needs tan 30° = 0.577 (common practice)
+    const slope = (mu: number) =>
+      solved({
+        ...emptySketch("Block on a slope"),
+        gravityAngle: "-120 deg",
+        bodies: [{ ...newBody("b1", [[0, 0], [1, 0], [1, 0.5], [0, 0.5]], "Block"), mass: "100 kg" }],
+        supports: [
+          { id: "s1", body: "b1", kind: "contact", at: [0, 0], angle: 90, mu, label: "lower pad" },
+          { id: "s2", body: "b1", kind: "contact", at: [1, 0], angle: 90, mu, label: "upper pad" },
+        ],
+      });
+    const W = 100 * 9.80665;
+    const sliding = slope(0.5);
+    const [s] = statusSentences(sliding.sketch, sliding.result);
+    expect(s.tone).toBe("slips");
+    // must resist W sin 30° = 490.3 N, can give μ W cos 30° = 424.6 N
+    expect(s.headline).toBe(
+      `Slides — its friction contacts must resist ${formatQuantity(W * Math.sin(Math.PI / 6), "force", "SI")} and can give ${formatQuantity(0.5 * W * Math.cos(Math.PI / 6), "force", "SI")} (needs μ = 0.58 as a whole, has 0.5)`,
+    );
+    expect(s.details[0]).toMatch(/^Slips at the (upper|lower) pad — needs [\d.]+, has μ = 0\.5/);
+    // μ = 0.7 > 0.577 holds as a whole: no "Slides"
+    const held = slope(0.7);
+    const [t] = statusSentences(held.sketch, held.result);
+    expect(t.headline).not.toMatch(/^Slides/);
   });
 });
 

@@ -58,13 +58,17 @@ describe("status sentence", () => {
     expect(statusSentences(sketch, result)[0].headline).toBe("Holds — nothing resists motion in x, but the loads do not push that way");
   });
 
-  it("slip leads, with the friction needed and the μ available", () => {
+  it("slip leads, with the friction needed and the μ available, for the body as a whole and the worst contact", () => {
     const { sketch, result } = solved(load("pump-skid-slip"));
     const [s] = statusSentences(sketch, result);
     expect(s.tone).toBe("slips");
     const slipping = Object.entries(result.reactions).filter(([, r]) => r.friction && r.friction.needed > r.friction.mu);
     const worst = slipping.sort((a, b) => b[1].friction!.needed / b[1].friction!.mu - a[1].friction!.needed / a[1].friction!.mu)[0][1];
-    expect(s.headline).toMatch(new RegExp(`^Slips at the \\w+ foot — needs ${Number(worst.friction!.needed.toPrecision(2))}, has μ = ${worst.friction!.mu}`));
+    // both feet over μ = 0.02 and the skid as a whole too (|Σt|/Σn = 0.025): it slides, the worse foot follows
+    const f = result.bodies.skid.friction!;
+    expect(f.needed).toBeGreaterThan(f.available);
+    expect(s.headline).toMatch(new RegExp(`^Slides — .* \\(needs μ = ${Number(f.needed.toPrecision(2))} as a whole, has ${Number(f.available.toPrecision(2))}\\)$`));
+    expect(s.details[0]).toMatch(new RegExp(`^Slips at the \\w+ foot — needs ${Number(worst.friction!.needed.toPrecision(2))}, has μ = ${worst.friction!.mu} \\(and at the \\w+ foot\\)`));
   });
 
   it("lifts, and a slack tie: who still holds the body", () => {
