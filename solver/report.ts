@@ -9,7 +9,7 @@ import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { SolveResult, Vec2 } from "./types";
 import { convert, formatNumber, unitsFor, type Quantity, type UnitSystem } from "./units";
-import { gravityActs } from "./words";
+import { gravityActs, overMu } from "./words";
 
 export type Cell = string | number | null;
 
@@ -97,6 +97,15 @@ function inUnit(v: number | undefined, q: Quantity, u: Units): number | null {
   return v === undefined || !Number.isFinite(v) ? null : convert(v, q, u.system, unitOf(q, u)).value;
 }
 
+/** The states of the file format in a table's words, as the status sentences say them. */
+const STATE_WORDS: Record<string, string> = { bearing: "bearing", lifted: "lifts", taut: "taut", slack: "slack", active: "holds" };
+
+/** A support's state in a table ("slips" for a bearing contact over its μ): the panel, the CSV and the calc sheet say the same. */
+export function stateWord(r: SolveResult["reactions"][string]): string {
+  if (r.state === "bearing" && r.friction && overMu(r.friction.needed, r.friction.mu)) return "slips";
+  return STATE_WORDS[r.state] ?? r.state;
+}
+
 /** Reactions of one run, one row per support (force on the body, or load on the support). */
 export function reactionTable(result: SolveResult, system: UnitSystem, opts: { onSupport?: boolean; id?: string; title?: string; scale?: Scale } = {}): Table {
   // `scale`: the screen holds a table's units while a drag runs, so 990 N → 1.01 kN does not flicker
@@ -134,7 +143,7 @@ export function reactionTable(result: SolveResult, system: UnitSystem, opts: { o
         inUnit(sign * r.m, "moment", u),
         inUnit(r.n === undefined ? undefined : sign * r.n, "force", u),
         inUnit(r.t === undefined ? undefined : sign * r.t, "force", u),
-        r.state,
+        stateWord(r),
         inUnit(r.margin, "force", u),
       ];
     }),
@@ -209,7 +218,7 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem): Table
         inUnit(r.m, "moment", u),
         inUnit(r.n, "force", u),
         inUnit(r.t, "force", u),
-        r.state,
+        stateWord(r),
         words.join("; "),
       ]);
       marks.push(Object.keys(rowMarks).length ? rowMarks : undefined);

@@ -9,7 +9,7 @@ import { buildBodyModel, frictionCoefficient, type BodyModel } from "./model";
 import { massBalanceWarnings, portFlow, type PortFlow } from "./ports";
 import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResult, SolveWarning, Status, Vec2 } from "./types";
 import { isShared, reuseEqual, sameWarning } from "./reuse";
-import { describeFreeMotion, describeSupport, fmtForce } from "./words";
+import { describeFreeMotion, describeSupport, fmtForce, overMu } from "./words";
 
 export function solve(sketch: Sketch): SolveResult {
   const { models, warnings } = prepare(sketch);
@@ -140,7 +140,7 @@ function solveBody(model: BodyModel, out: SolveResult): void {
         const et = direction(s.angle + 90);
         tx += f.t * et[0];
         ty += f.t * et[1];
-        if (needed > s.mu * (1 + 1e-9) + 1e-12) {
+        if (overMu(needed, s.mu)) {
           warnings.push({
             code: "SLIP",
             message: `${describeSupport(s)} slips: it needs a friction coefficient of ${fmtRatio(needed)}, and has μ = ${fmtRatio(s.mu)}`,

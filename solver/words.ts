@@ -10,6 +10,11 @@ const KIND_WORD: Record<Support["kind"], string> = {
   tie: "Tie",
 };
 
+/** A friction contact needs more than its μ (the tolerance keeps a contact at exactly μ from warning). */
+export function overMu(needed: number, mu: number): boolean {
+  return needed > mu * (1 + 1e-9) + 1e-12;
+}
+
 /** "Contact s2 (rear foot)" or "Contact s2" */
 /** "Contact s1 (rear foot)"; a label that already starts with the id stands alone: "Contact axle (both wheels)". */
 export function describeSupport(s: Pick<Support, "kind" | "id" | "label">): string {

@@ -10,14 +10,6 @@ import { useHeldScale } from "./useHeldScale";
 
 export type Sense = "body" | "support";
 
-const STATE_WORDS: Record<string, string> = {
-  bearing: "bearing",
-  lifted: "lifts",
-  taut: "taut",
-  slack: "slack",
-  active: "holds",
-};
-
 /** Short headings: the table is read beside the drawing, often in a narrow window. */
 const SHORT: Record<string, string> = { support: "Support", fx: "Fx", fy: "Fy", resultant: "Resultant", angle: "Direction", m: "M", n: "n", t: "t", state: "State", margin: "Margin" };
 const TITLES: Record<string, string> = { n: "Normal force along the support's direction", t: "Tangential (friction) force", margin: "Contacts and ties: n while bearing; below zero once lifted or slack", angle: "Direction of the force, degrees counter-clockwise from +x" };
@@ -43,7 +35,6 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
   if (!table || !shown) return <p className="p-2 text-[12.5px] text-ink-faint">No reactions yet.</p>;
   if (!table.rows.length) return <p className="p-2 text-[12.5px] text-ink-faint">No supports: add a pin, roller, contact, fixed support or tie to the body.</p>;
   const labelOf = (id: string) => numeric?.supports.find((s) => s.id === id)?.label;
-  const slipping = new Set(shown.warnings.filter((w) => w.code === "SLIP").flatMap((w) => w.ids));
   return (
     <div className={stale ? "opacity-60" : ""}>
       <table className="num w-full border-collapse text-[12px]" data-testid="reactions" aria-describedby="reactions-caption">
@@ -65,7 +56,6 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
           {table.rows.map((row, ri) => {
             const id = String(row[0]);
             const label = labelOf(id);
-            const state = String(row[table.columns.findIndex((c) => c.key === "state")]);
             const selected = selection.includes(id);
             return (
               <tr
@@ -78,8 +68,7 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
                   const col = table.columns[i];
                   let text: string;
                   if (i === 0) text = label || id;
-                  else if (col.key === "state") text = slipping.has(id) && state === "bearing" ? "slips" : (STATE_WORDS[state] ?? state);
-                  else if (typeof cell === "number") text = col.key === "angle" ? `${formatNumber(cell, 4)}` : formatNumber(cell, 4);
+                                    else if (typeof cell === "number") text = col.key === "angle" ? `${formatNumber(cell, 4)}` : formatNumber(cell, 4);
                   else text = cell === null ? "—" : String(cell);
                   const warn = col.key === "state" && text !== "bearing" && text !== "holds" && text !== "taut";
                   return (

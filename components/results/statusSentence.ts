@@ -1,7 +1,7 @@
 // The result in words, one sentence per body, leading with what matters: slip first (the status
 // stays "holds" but a contact cannot hold what it must), then tipping, lift-off and the rest.
 // Pure: the results panel, the calc sheet and the tests all use it.
-import { describeFreeMotion } from "@/solver/words";
+import { describeFreeMotion, overMu } from "@/solver/words";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
 
@@ -46,7 +46,7 @@ const force = (c: Context, v: number) => formatQuantity(Math.abs(v), "force", c.
 
 /** The contacts over their μ, the most overloaded first. */
 function overloaded(c: Context): Array<[Support, Reaction]> {
-  const out = c.reactions.filter(([, r]) => r.friction && r.state === "bearing" && r.friction.needed > r.friction.mu * (1 + 1e-9) + 1e-12);
+  const out = c.reactions.filter(([, r]) => r.friction && r.state === "bearing" && overMu(r.friction.needed, r.friction.mu));
   return out.sort((a, b) => b[1].friction!.needed / Math.max(b[1].friction!.mu, 1e-12) - a[1].friction!.needed / Math.max(a[1].friction!.mu, 1e-12));
 }
 

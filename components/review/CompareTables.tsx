@@ -49,7 +49,7 @@ export function ReactionsTable({ comparison, units = "SI" }: { comparison: Compa
                 <td className="pt-1.5 pr-3 text-right">{r.after ? formatForce(r.after.resultant, units) : "— (removed)"}</td>
                 <td className="pt-1.5 pr-3 text-right font-medium">{r.change ? signed(r.change.abs, units) : "—"}</td>
                 <td className="pt-1.5 pr-3 text-right">{r.change?.pct === null || !r.change ? "—" : `${r.change.pct > 0 ? "+" : r.change.pct < 0 ? "−" : ""}${formatNumber(Math.abs(r.change.pct), 3)} %`}</td>
-                <td className="pt-1.5">{r.stateChange ? <strong className="text-caution">{r.stateChange}</strong> : (r.after?.state ?? r.before?.state ?? "—")}</td>
+                <td className="pt-1.5">{r.stateChange ? <strong className="text-caution">{r.stateChange}</strong> : (r.after?.word ?? r.before?.word ?? "—")}</td>
               </tr>
               <tr className="num border-b border-rule-soft last:border-0" data-testid={`reaction-${r.id}-components`}>
                 <td colSpan={6} className="pb-1.5 pl-3 pt-0.5 text-xs text-ink-soft">

@@ -13,6 +13,7 @@ import type { SketchStatus } from "@/lib/sketch-schemas";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
+import { stateWord } from "@/solver/report";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { CommentsPanel, type CommentsData } from "./Comments";
 import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
@@ -43,7 +44,7 @@ function Reactions({ document, units }: { document: SketchFile; units: UnitSyste
         {Object.entries(result.reactions).map(([id, r]) => (
           <tr key={id} className="num border-b border-rule-soft last:border-0">
             <td className="py-1.5 pr-3 font-medium">{labels.get(id) ?? id}</td>
-            <td className="py-1.5 pr-3">{r.state}</td>
+            <td className="py-1.5 pr-3">{stateWord(r)}</td>
             <td className="py-1.5 pr-3 text-right">{formatForce(r.fx, units)}</td>
             <td className="py-1.5 pr-3 text-right">{formatForce(r.fy, units)}</td>
             <td className="py-1.5 pr-3 text-right">{r.kind === "fixed" ? formatQuantity(r.m, "moment", units) : "—"}</td>

@@ -6,6 +6,7 @@
 import { parseSketch, solve, type ParseResult, type SolveResult } from "@/solver";
 import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } from "@/solver/schema";
 import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
+import { stateWord } from "@/solver/report";
 import type { FieldError } from "@/solver/types";
 import { FOOT_M, LBF_N } from "@/solver/constants";
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
@@ -16,7 +17,8 @@ export type Collection = (typeof COLLECTIONS)[number];
 export type ElementRef = { id: string; collection: Collection; kind: string; label: string };
 export type FieldChange = { field: string; before: string | null; after: string | null };
 export type ElementChange = ElementRef & { fields: FieldChange[] };
-export type ReactionSnapshot = { fx: number; fy: number; m: number; resultant: number; n: number | null; state: string };
+/** `state` as the file format has it; `word` as the tables say it ("lifts", "slips") */
+export type ReactionSnapshot = { fx: number; fy: number; m: number; resultant: number; n: number | null; state: string; word: string };
 export type ReactionChange = {
   id: string;
   label: string;
@@ -25,7 +27,7 @@ export type ReactionChange = {
   after: ReactionSnapshot | null;
   /** of the resultant (N), and relative to before (%; null when before was zero or missing) */
   change: { abs: number; pct: number | null } | null;
-  /** "bearing → lifted", when the state changed */
+  /** "bearing → lifts" (or "→ slips"), when the state changed */
   stateChange: string | null;
 };
 /** A change to the design studies: a case, combination, sweep, required factor or the underlay. */
@@ -210,7 +212,7 @@ function parameterText(name: string, raw: unknown, values: ParseResult["paramete
 
 function snapshot(r: SolveResult["reactions"][string] | undefined): ReactionSnapshot | null {
   if (!r) return null;
-  return { fx: r.fx, fy: r.fy, m: r.m, resultant: Math.hypot(r.fx, r.fy), n: r.n ?? null, state: r.state };
+  return { fx: r.fx, fy: r.fy, m: r.m, resultant: Math.hypot(r.fx, r.fy), n: r.n ?? null, state: r.state, word: stateWord(r) };
 }
 
 const num = (x: number) => formatNumber(x, 6);
@@ -340,7 +342,7 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: Uni
     const before = snapshot(A.result?.reactions[id]);
     const after = snapshot(B.result?.reactions[id]);
     const change = before && after ? { abs: after.resultant - before.resultant, pct: before.resultant > 1e-9 ? ((after.resultant - before.resultant) / before.resultant) * 100 : null } : null;
-    const stateChange = before && after && before.state !== after.state ? `${before.state} → ${after.state}` : null;
+    const stateChange = before && after && before.word !== after.word ? `${before.word} → ${after.word}` : null;
     return { id, label: label(id), body: String((eb.get(id) ?? ea.get(id))?.el.body ?? ""), before, after, change, stateChange };
   });
 

@@ -96,7 +96,7 @@ describe("GET /api/sketches/:id/compare", () => {
     expect(b.bodies.trailer.status).toBe("holds");
     expect(c.bodies).toEqual([{ id: "trailer", label: "Trailer", before: "lifts", after: "holds", words: "lifts → holds" }]);
     const jack = c.reactions.find((r: { id: string }) => r.id === "jack");
-    expect(jack.stateChange).toBe("lifted → bearing");
+    expect(jack.stateChange).toBe("lifts → bearing"); // the tables' words
     expect(jack.before.resultant).toBe(0);
     expect(jack.change.abs).toBeGreaterThan(1000);
   });

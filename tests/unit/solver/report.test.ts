@@ -25,6 +25,22 @@ describe("result tables", () => {
     expect(onSupport.notes![0]).toMatch(/sign reversed/);
   });
 
+  it("the state column says what the panel says: a contact over its μ slips, a lifted one lifts, in the CSV too", () => {
+    // pump-skid-slip: both feet need more than μ = 0.02 (|t|/n = 0.023 and 0.027)
+    const slip = solve(parsedFixture("pump-skid-slip.json").sketch);
+    const t = reactionTable(slip, "SI");
+    const state = t.columns.findIndex((c) => c.key === "state");
+    for (const row of t.rows) expect(row[state], String(row[0])).toBe("slips");
+    const csv = Papa.parse<string[]>(tableToCsv(t, Papa.unparse)).data;
+    expect(csv[1][state]).toBe("slips");
+    // thrust-stand-tips: the rear pad would have to pull, so it is drawn lifted
+    const tips = solve(parsedFixture("thrust-stand-tips.json").sketch);
+    const words = reactionTable(tips, "SI").rows.map((row) => row[state]);
+    expect(Object.values(tips.reactions).map((r) => r.state)).toContain("lifted");
+    expect(words).toContain("lifts");
+    expect(words).not.toContain("lifted");
+  });
+
   it("US customary columns in lbf", () => {
     const r = solve(parsedFixture("thrust-stand-tips.json").sketch);
     const t = reactionTable(r, "US");
