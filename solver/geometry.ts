@@ -78,3 +78,14 @@ export function polygonDiameter(pts: Vec2[]): number {
   }
   return Math.sqrt(d2);
 }
+
+/** Whether p lies inside the polygon (even–odd rule; a point on an edge may go either way). */
+export function pointInPolygon(p: Vec2, poly: Vec2[]): boolean {
+  let inside = false;
+  for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
+    const [xi, yi] = poly[i];
+    const [xj, yj] = poly[j];
+    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
+  }
+  return inside;
+}

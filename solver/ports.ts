@@ -1,6 +1,7 @@
 // Mass flow and speed at each port, in the contract's order of preference, and the checks
 // that over-specified values agree (PORT_INCONSISTENT) and that mass balances per body.
 import type { Port, Sketch, SolveWarning } from "./types";
+import { direction, pointInPolygon, polygonDiameter } from "./geometry";
 
 /** Relative disagreement above which over-specified values warn. */
 const AGREEMENT = 0.005;
@@ -77,4 +78,30 @@ export function massBalanceWarnings(sketch: Sketch, flows: Map<string, PortFlow>
     }
   }
   return warnings;
+}
+
+/**
+ * Ports drawn against their kind: an inlet whose flow leaves the body through its face, or an
+ * outlet whose flow enters it (the format has the velocity into the body at an inlet and out of it
+ * at an outlet). Almost always a sign slip, and it changes the reactions without an error, so the
+ * words under the status say it. A port off the outline, or with the flow along it, is not judged.
+ */
+export function portDirectionNotes(sketch: Sketch): Array<{ id: string; body: string; message: string }> {
+  const out: Array<{ id: string; body: string; message: string }> = [];
+  for (const p of sketch.ports) {
+    const body = sketch.bodies.find((b) => b.id === p.body);
+    if (!body || body.outline.length < 3 || !Number.isFinite(p.at[0]) || !Number.isFinite(p.at[1]) || !Number.isFinite(p.angle)) continue;
+    const eps = 1e-3 * Math.max(polygonDiameter(body.outline), 1e-6);
+    const d = direction(p.angle);
+    const ahead = pointInPolygon([p.at[0] + eps * d[0], p.at[1] + eps * d[1]], body.outline);
+    const behind = pointInPolygon([p.at[0] - eps * d[0], p.at[1] - eps * d[1]], body.outline);
+    if (ahead === behind) continue;
+    const name = p.label ? `${p.kind === "inlet" ? "Inlet" : "Outlet"} ${p.label}` : `${p.kind === "inlet" ? "Inlet" : "Outlet"} ${p.id}`;
+    const turned = `${Number((((p.angle + 180) % 360 + 540) % 360 - 180).toFixed(1))}°`;
+    if (p.kind === "inlet" && !ahead)
+      out.push({ id: p.id, body: p.body, message: `${name} points out of the body: an inlet's flow enters the control volume. If the fluid comes in here, turn it to ${turned}; if it leaves, make it an outlet.` });
+    if (p.kind === "outlet" && ahead)
+      out.push({ id: p.id, body: p.body, message: `${name} points into the body: an outlet's flow leaves the control volume. If the fluid leaves here, turn it to ${turned}; if it comes in, make it an inlet.` });
+  }
+  return out;
 }

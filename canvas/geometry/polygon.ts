@@ -1,18 +1,8 @@
 // Plane geometry for the editor: hit tests, nearest points, edges and their normals.
-import { polygonArea, polygonCentroid } from "@/solver/geometry";
+import { pointInPolygon, polygonArea, polygonCentroid } from "@/solver/geometry";
 import type { Vec2 } from "@/solver/types";
 
-export { polygonArea, polygonCentroid };
-
-export function pointInPolygon(p: Vec2, poly: Vec2[]): boolean {
-  let inside = false;
-  for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
-    const [xi, yi] = poly[i];
-    const [xj, yj] = poly[j];
-    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
-}
+export { pointInPolygon, polygonArea, polygonCentroid };
 
 /** The nearest point on segment ab to p, with its parameter t in [0, 1]. */
 export function nearestOnSegment(p: Vec2, a: Vec2, b: Vec2): { point: Vec2; t: number; distance: number } {

@@ -2,6 +2,7 @@
 // stays "holds" but a contact cannot hold what it must), then tipping, lift-off and the rest.
 // Pure: the results panel, the calc sheet and the tests all use it.
 import { describeFreeMotion, overMu } from "@/solver/words";
+import { portDirectionNotes } from "@/solver/ports";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
 
@@ -136,6 +137,7 @@ function holdSentence(c: Context): string {
 /** One sentence per body of a solved sketch. */
 export function statusSentences(sketch: Sketch, result: SolveResult, units: UnitSystem = "SI"): StatusSentence[] {
   const out: StatusSentence[] = [];
+  const portNotes = portDirectionNotes(sketch);
   for (const b of sketch.bodies) {
     const body = result.bodies[b.id];
     if (!body) continue;
@@ -155,7 +157,8 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
     } else if (body.status === "lifts") headline = liftSentence(c);
     else headline = holdSentence(c);
 
-    const details: string[] = [];
+    // a port drawn against its kind is likely a slip of the input: said before anything else
+    const details: string[] = portNotes.filter((n) => n.body === b.id).map((n) => n.message);
     if (slip) details.push(...slip.details);
     if (slip && body.status === "lifts") details.push(`${liftSentence(c)}.`);
     const shared = slip ? sharedFrictionNote(c) : null;

@@ -201,6 +201,35 @@ describe("the SI / US switch", () => {
   });
 });
 
+describe("ports drawn against their kind", () => {
+  // The file format: a port's angle is the velocity's direction, into the body at an inlet and
+  // out of it at an outlet. The demo bend's inlet sits on its left end (x = −0.45) flowing +x.
+  const bend = () => JSON.parse(readFileSync("canvas/examples/pipe-bend-anchor.json", "utf8"));
+  const notes = (doc: unknown) => statusSentences(solved(doc).sketch, solved(doc).result)[0].details.filter((d) => /points (out of|into) the body/.test(d));
+
+  it("as drawn, no note", () => {
+    expect(notes(bend())).toEqual([]);
+  });
+
+  it("an inlet turned to flow out through its face, and an outlet turned inward, are named first, with the angle that fixes them", () => {
+    const doc = bend();
+    doc.ports[0].angle = 180;
+    doc.ports[1].angle = -90;
+    const [s] = statusSentences(solved(doc).sketch, solved(doc).result);
+    expect(s.details.slice(0, 2)).toEqual([
+      "Inlet from pump points out of the body: an inlet's flow enters the control volume. If the fluid comes in here, turn it to 0°; if it leaves, make it an outlet.",
+      "Outlet up the riser points into the body: an outlet's flow leaves the control volume. If the fluid leaves here, turn it to 90°; if it comes in, make it an inlet.",
+    ]);
+  });
+
+  it("a port off the outline, or flowing along it, is not judged", () => {
+    const doc = bend();
+    doc.ports[0].at = [-1, 0]; // a metre clear of the bend
+    doc.ports[1].angle = 0; // along the riser's top edge
+    expect(notes(doc)).toEqual([]);
+  });
+});
+
 describe("a table's units during a drag", () => {
   it("stay as they were when the drag began, and are chosen afresh when it ends", async () => {
     // the demo beam (100 kg) with 1 kN at mid-span: each support carries 490.3 + 500 = 990.3 N, so N
