@@ -25,7 +25,12 @@ const PAD_Y = 5;
 
 /** pdfkit's own measure of a string: the widths it wraps text by. */
 export function pdfMeasure(doc: PDFKit.PDFDocument): Measure {
-  return (text, bold, size) => doc.font(bold ? FONT.bold : FONT.regular).fontSize(size).widthOfString(text);
+  // numbers are drawn with tabular figures, wider than the proportional ones: a column measured
+  // without them wraps "−6.168" into "−6.16" over "8". Measured both ways, the wider wins.
+  return (text, bold, size) => {
+    doc.font(bold ? FONT.bold : FONT.regular).fontSize(size);
+    return Math.max(doc.widthOfString(text), doc.widthOfString(text, { features: NUMBER_FEATURES }));
+  };
 }
 
 export interface DrawTableOptions {
@@ -86,11 +91,12 @@ function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart,
   const { size, headers, cells } = layout;
   const total = part.widths.reduce((a, b) => a + b, 0);
   const inner = (i: number) => part.widths[i] - 2 * PAD_X;
-  const textHeight = (text: string, font: string, i: number) => (text ? doc.font(font).fontSize(size).heightOfString(text, { width: inner(i) }) : 0);
+  const textHeight = (text: string, font: string, i: number, numeric = false) =>
+    text ? doc.font(font).fontSize(size).heightOfString(text, { width: inner(i), ...(numeric ? { features: NUMBER_FEATURES } : {}) }) : 0;
 
   const headerHeight =
     Math.max(...part.columns.map((c, i) => textHeight(headers[c].label, FONT.bold, i) + (headers[c].unit ? textHeight(headers[c].unit!, FONT.regular, i) : 0))) + PAD_Y;
-  const rowHeight = (r: string[]) => Math.max(...part.columns.map((c, i) => textHeight(r[c] ?? "", FONT.regular, i))) + PAD_Y;
+  const rowHeight = (r: string[]) => Math.max(...part.columns.map((c, i) => textHeight(r[c] ?? "", FONT.regular, i, headers[c].align === "right"))) + PAD_Y;
 
   const drawHeader = () => {
     const y = doc.y;

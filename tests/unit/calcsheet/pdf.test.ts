@@ -1,5 +1,6 @@
 // The calc sheet PDF: its text, extracted with pdfjs-dist, carries the title block, the hand-check
 // sums, the reactions with units, ṁ and μ in the embedded font, and the cautions.
+import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { buildCalcSheet, haloBehindLabels } from "@/lib/calcsheet/pdf";
 import { runLimit } from "@/canvas/studies/run";
@@ -254,15 +255,47 @@ describe("calc sheet PDF", () => {
       { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
       { id: "high", name: "High throw at full flow", parameters: { theta: "60 deg" } },
     ];
-    file.combinations = [{ id: "k1", name: "Factored low throw", terms: [{ case: "low", factor: 1.4 }] }];
+    file.cases.push({ id: "dead", name: "Dead", factors: { flow: 0, loads: 0 } }, { id: "flow", name: "Flow", factors: { dead: 0, loads: 0 } });
+    file.combinations = [
+      { id: "k1", name: "Factored low throw", terms: [{ case: "low", factor: 1.4 }] },
+      { id: "k2", name: "Combination 1", terms: [{ case: "dead", factor: 1.2 }, { case: "flow", factor: 1.5 }] },
+    ];
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file });
     const { text } = await pdfText(buf);
     const parsed = parseSketch(file);
     if (!parsed.ok) throw new Error("the sketch did not parse");
     const study = solveCases(parsed.file);
-    expect(brokenWords(text, [caseReactionTable(study, "SI"), envelopeTable(study, "SI"), designLoadTable(study, "SI"), stabilityTable(study, "SI")])).toEqual([]);
+    const tables = [caseReactionTable(study, "SI"), envelopeTable(study, "SI"), designLoadTable(study, "SI"), stabilityTable(study, "SI")];
+    expect(brokenWords(text, tables)).toEqual([]);
     expect(text).toMatch(/ Support Fx \(kN\)| Case Support /);
     expect(text).toContain(" bearing ");
     expect(text).toContain("Restoring M / friction available");
+  }, 60000);
+
+  it("prints every number of the case tables whole, on one line", async () => {
+    // tabular figures are wider than proportional ones; columns once measured without them printed
+    // "−6.168" as "−6.16" with its "8" over the next row. The demo trailer, heavier, with six cases
+    // and a factored combination (invented data)
+    const file = JSON.parse(readFileSync("canvas/examples/fire-monitor-trailer.json", "utf8"));
+    file.bodies[0].mass = "1250 kg";
+    file.bodies[0].cg = [2.1, 0.85];
+    file.parameters = { Q: "1800 gpm", rho: "1000 kg/m^3", tip: "1.8 in", theta: "32 deg" };
+    file.cases = [
+      { id: "normal-operation", name: "Normal operation" },
+      { id: "case-2", name: "Rated flow", parameters: { Q: "2000 gpm" } },
+      { id: "case-3", name: "Surge", flowFactor: 1.3 },
+      { id: "case-4", name: "Steep throw", parameters: { Q: "2000 gpm", theta: "60 deg" } },
+      { id: "case-5", name: "Dead", factors: { flow: 0, loads: 0 } },
+      { id: "case-6", name: "Flow", factors: { dead: 0, loads: 0 }, parameters: { Q: "2000 gpm" } },
+    ];
+    file.combinations = [{ id: "combination-1", name: "Combination 1", terms: [{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 1.5 }] }];
+    const { text } = await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file }));
+    const parsed = parseSketch(file);
+    if (!parsed.ok) throw new Error("the sketch did not parse");
+    const study = solveCases(parsed.file);
+    const tables = [caseReactionTable(study, "SI"), envelopeTable(study, "SI"), designLoadTable(study, "SI"), stabilityTable(study, "SI")];
+    const numbers = tables.flatMap((t) => tableCells(t).flat().map((c) => c.replace(/\s+/g, " "))).filter((c) => /^[▲▼]? ?−?\d[\d,.]*$/.test(c));
+    expect(numbers.length).toBeGreaterThan(50);
+    for (const n of numbers) expect(text, n).toContain(` ${n} `);
   }, 60000);
 });
