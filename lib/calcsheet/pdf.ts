@@ -138,8 +138,11 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     heading("Operating cases and combinations");
     for (const c of parsed.file.cases ?? []) {
       const over = Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${v}`);
-      const fac = Object.entries(c.factors ?? {}).map(([k, v]) => `${k} × ${v}`);
-      const bits = [...over, ...fac, ...(c.flowFactor !== undefined && c.flowFactor !== 1 ? [`flow × ${c.flowFactor}`] : [])];
+      // a load group's factor scales its loads; the flow factor scales ṁ and V, so momentum flux by f²
+      const fac = Object.entries(c.factors ?? {}).map(([k, v]) => `loads of group “${k}” × ${v}`);
+      const f = c.flowFactor;
+      const flow = f !== undefined && f !== 1 ? [`flow factor ${f} (every port's ṁ and V × ${f}, momentum flux × ${Number((f * f).toPrecision(4))})`] : [];
+      const bits = [...over, ...fac, ...flow];
       para(`${c.name} (${c.id}): ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
     }
     for (const k of parsed.file.combinations ?? []) {

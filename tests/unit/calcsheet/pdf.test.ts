@@ -297,5 +297,8 @@ describe("calc sheet PDF", () => {
     const numbers = tables.flatMap((t) => tableCells(t).flat().map((c) => c.replace(/\s+/g, " "))).filter((c) => /^[▲▼]? ?−?\d[\d,.]*$/.test(c));
     expect(numbers.length).toBeGreaterThan(50);
     for (const n of numbers) expect(text, n).toContain(` ${n} `);
+    // a load group's factor and the flow factor read differently: the one scales loads, the other ṁ and V (flux × f²)
+    expect(text).toContain("Surge (case-3): flow factor 1.3 (every port's ṁ and V × 1.3, momentum flux × 1.69)");
+    expect(text).toContain("Dead (case-5): loads of group “flow” × 0, loads of group “loads” × 0");
   }, 60000);
 });
