@@ -7,7 +7,7 @@ import type { LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber } from "@/solver/units";
-import { displayKind, displayUnit, parseTarget } from "@/canvas/studies/display";
+import { displayKind, displayUnit, parseTarget, toDisplay } from "@/canvas/studies/display";
 import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
@@ -91,7 +91,9 @@ export function SweepPanel() {
   const [error, setError] = useState<string | null>(null);
   const [limitQ, setLimitQ] = useState(0);
   const [target, setTarget] = useState("0");
-  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** as typed, with its unit */ target: string } | null>(null);
+  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** as typed, with its unit */ target: string; /** the answer, in words with units */ words: string } | null>(null);
+  /** a target that does not read: said beside the limit finder, not up by the sweep's Run */
+  const [limitError, setLimitError] = useState<string | null>(null);
   const [searching, setSearching] = useState<(() => void) | null>(null);
   const [limitStopped, setLimitStopped] = useState(false);
   const runner = useRef<StudyRunner | null>(null);
@@ -152,14 +154,29 @@ export function SweepPanel() {
     try {
       tgt = parseTarget(target, q.component, units, scaleFor(q.component));
     } catch (err) {
-      return setError(`Target: ${(err as Error).message}.`);
+      setLimit(null);
+      return setLimitError(`Target: ${(err as Error).message}.`);
     }
     setError(null);
+    setLimitError(null);
+    setLimit(null);
     const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt.si } });
     setSearching(() => job.cancel);
     setLimitStopped(false);
     job.promise
-      .then((result) => setLimit({ result, label: describeQuantity(q), target: tgt.shown }))
+      .then((result) => {
+        const label = describeQuantity(q);
+        const shownUnit = displayUnit(q.component, units, scaleFor(q.component));
+        const inShown = (si: number) => `${formatNumber(toDisplay(si, q.component, units, scaleFor(q.component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
+        const pUnit = result.unit ? ` ${result.unit}` : "";
+        const pName = s.parameter === FLOW_FACTOR ? "the flow factor" : s.parameter;
+        const words = result.found
+          ? `The ${label} reaches ${tgt.shown} at ${pName} = ${formatNumber(result.value, 5)}${pUnit}${result.crossings.length > 1 ? ` (and again at ${result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
+          : Number.isFinite(result.min)
+            ? `No crossing in this range: the ${label} stays ${result.min >= tgt.si ? "above" : "below"} ${tgt.shown} (it runs from ${inShown(result.min)} to ${inShown(result.max)}) for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`
+            : `No crossing in this range: the ${label} is undefined for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`;
+        setLimit({ result, label, target: tgt.shown, words });
+      })
       // Stop ends every study of this panel at once (they share one worker)
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -274,6 +291,11 @@ export function SweepPanel() {
                 </>
               )}
             </div>
+            {limitError && (
+              <p className="mt-1 text-[12.5px] text-caution" data-testid="limit-error" role="alert">
+                {limitError}
+              </p>
+            )}
             {limitStopped && (
               <p className="mt-1 text-[12.5px] text-caution" data-testid="limit-stopped">
                 Stopped: the limit search did not finish. Press Find to search again.
@@ -281,9 +303,7 @@ export function SweepPanel() {
             )}
             {limit && !limitStopped && (
               <p className="mt-1 text-[12.5px]" data-testid="limit-answer" role="status">
-                {limit.result.found
-                  ? `The ${limit.label} reaches ${limit.target} at ${pLabel} = ${formatNumber(limit.result.value, 5)}${limit.result.unit ? ` ${limit.result.unit}` : ""}${limit.result.crossings.length > 1 ? ` (and again at ${limit.result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
-                  : `No crossing in this range: ${limit.result.reason.replace(/^no crossing in this range: /, "")}.`}
+                {limit.words}
               </p>
             )}
           </>

@@ -184,6 +184,13 @@ describe("Sweep tab", () => {
     // the wrong kind of quantity is refused in words, naming the target
     await findLimit(user, "3 kg");
     expect((await screen.findByRole("alert")).textContent).toBe("Target: 3 kg is a mass (kg), but this field needs a moment (N·m).");
+    // said beside the limit finder, and the answer to the earlier target is gone
+    expect(within(screen.getByRole("group", { name: "Limit finder" }).parentElement!).getByTestId("limit-error")).toBeTruthy();
+    expect(screen.queryByTestId("limit-answer")).toBeNull();
+    // out of reach: M_base runs from −100 N·m (a = 0) to 100 N·m (a = 2 m), in words with units
+    await findLimit(user, "200");
+    expect((await screen.findByTestId("limit-answer")).textContent).toBe("No crossing in this range: the moment at base stays below 200 N·m (it runs from −100 N·m to 100 N·m) for a from 0 to 2 m.");
+    expect(screen.queryByTestId("limit-error")).toBeNull();
   });
 
   it("says when the chosen case sets the swept parameter itself", async () => {
