@@ -8,6 +8,7 @@ import { sharedFrame } from "@/canvas/render/svg";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { Crumb, Notice, Panel, Segmented, Select, Skeleton } from "@/components/shell/controls";
 import { discardDraft, readDraft } from "@/components/versions/editor/drafts";
+import { draftOnNewest } from "@/components/versions/editor/restoreDraft";
 import { useVersions } from "@/components/versions/VersionHistory";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { changeCount, compareSketches } from "@/lib/review/compare";
@@ -23,12 +24,25 @@ function useDocument(sketchId: string, which: number | "draft") {
   const path = `/api/sketches/${sketchId}/versions/${which}`;
   const remote = useQuery({ queryKey: apiKey(path), queryFn: () => apiFetch<VersionDoc>(path), enabled: which !== "draft", staleTime: Infinity });
   const [draft] = useState(() => (which === "draft" ? readDraft(sketchId) : null));
-  if (which === "draft") return { doc: draft?.sketch ?? null, label: draft ? `your kept changes (made on v${draft.baseVersion})` : null, error: draft ? null : "There are no kept changes for this sketch in this browser.", pending: false };
+  // the kept work as "Bring them back" would open it: merged onto the newest version
+  const merged = useQuery({ queryKey: ["kept-work", sketchId, draft?.keptAt], queryFn: () => draftOnNewest(draft!), enabled: !!draft, staleTime: Infinity });
+  if (which === "draft") {
+    if (!draft) return { doc: null, label: null, error: "There are no kept changes for this sketch in this browser.", pending: false };
+    const m = merged.data;
+    return {
+      doc: m?.sketch ?? null,
+      label: m ? `your kept changes (made on v${draft.baseVersion}${m.newest > draft.baseVersion ? `, brought onto v${m.newest}` : ""})` : null,
+      error: merged.error ? "The versions your kept changes are merged with could not be loaded." : null,
+      pending: merged.isPending,
+      conflicts: m?.conflicts ?? [],
+    };
+  }
   return {
     doc: remote.data?.version.document ?? null,
     label: remote.data ? `v${remote.data.version.number}${remote.data.version.message ? ` — ${remote.data.version.message}` : ""}` : null,
     error: remote.error instanceof ApiError ? remote.error.message : remote.error ? "The version could not be loaded." : null,
     pending: remote.isPending,
+    conflicts: [] as string[],
   };
 }
 
@@ -89,7 +103,12 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
             options={UNIT_OPTIONS}
           />
           {to === "draft" && b.doc ? (
-            <div className="flex gap-2 text-sm">
+            <div className="flex flex-wrap items-center gap-2 text-sm">
+              {b.conflicts.length ? (
+                <p className="basis-full text-[12.5px] text-caution" data-testid="kept-work-conflicts">
+                  You and a later version both changed {b.conflicts.join(", ")}: bringing your changes back uses yours there.
+                </p>
+              ) : null}
               <a href={`/sketches/${sketchId}?restore=1`} className="rounded-md bg-ink px-3 py-2 font-medium text-paper hover:bg-ink-soft">
                 Bring my changes back on top of the newest version
               </a>

@@ -155,4 +155,35 @@ describe("versioned sketches in the browser", () => {
     expect(await lead.getByTestId("version-row-3").textContent()).toContain("Anchor block enlarged");
     expect(await lead.getByTestId("version-row-4").count()).toBe(0);
   });
+
+  it("reload and compare, then bring the kept work back: the colleague's newer save stays, and so do yours", async () => {
+    const lead = await as("owner");
+    const drafter = await as("editor");
+    await openEditor(lead, sketchId);
+    await openEditor(drafter, sketchId);
+
+    // the lead renames and saves v4; the drafter, still on v3, writes the notes
+    await retitle(lead, "Bend, lead's second revision");
+    await saveVersion(lead, "Renamed for the tender");
+    await lead.getByText("✓ saved").waitFor();
+    await drafter.keyboard.press("Escape");
+    const notes = drafter.getByTestId("sketch-form").getByLabel("Notes");
+    await notes.fill("Wall thickness checked at the outlet weld.");
+    await notes.press("Tab");
+    await saveVersion(drafter, "Notes on the outlet weld");
+    const conflict = drafter.getByTestId("conflict-dialog");
+    await conflict.waitFor();
+    await conflict.getByRole("button", { name: "Reload and compare" }).click();
+
+    await drafter.getByTestId("kept-work").waitFor();
+    await drafter.getByRole("link", { name: /Compare v4 with them/ }).click();
+    await drafter.getByText(/your kept changes \(made on v3, brought onto v4\)/).first().waitFor();
+    await drafter.getByRole("link", { name: "Bring my changes back on top of the newest version" }).click();
+    await drafter.getByTestId("restored-work").waitFor();
+    expect(await drafter.getByTestId("restored-work").textContent()).toContain("back on top of v4; what was saved since v3 is kept too");
+    const form = drafter.getByTestId("sketch-form");
+    expect(await form.getByLabel("Title").inputValue()).toBe("Bend, lead's second revision");
+    expect(await form.getByLabel("Notes").inputValue()).toBe("Wall thickness checked at the outlet weld.");
+    await shot(drafter, "versions-11-kept-work-merged");
+  });
 });

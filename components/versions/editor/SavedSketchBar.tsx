@@ -40,7 +40,7 @@ function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; lat
 }
 
 function Bar({ flow }: { flow: SaveFlow }) {
-  const { info, base, pending, lastSaved, restored } = useStore(flow);
+  const { info, base, pending, lastSaved, restored, restoredNotice } = useStore(flow);
   const stores = useStores();
   const run = useActionRunner();
   const revision = useEditor((s) => s.revision);
@@ -182,6 +182,14 @@ function Bar({ flow }: { flow: SaveFlow }) {
             setDraft(null);
           }}
         />
+      ) : null}
+      {restored && restoredNotice ? (
+        <div role="status" data-testid="restored-work" className="fixed bottom-10 right-4 z-40 max-w-sm rounded-lg border border-caution/40 bg-caution-soft p-3 text-[13px] text-ink shadow-[0_6px_24px_rgba(29,35,41,0.14)]">
+          <p>{restoredNotice}</p>
+          <button type="button" onClick={() => flow.setState({ restoredNotice: undefined })} className="mt-2 rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+            Got it
+          </button>
+        </div>
       ) : null}
     </div>
   );

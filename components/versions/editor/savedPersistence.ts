@@ -8,6 +8,7 @@ import { apiFetch, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
 import type { SketchFile } from "@/solver/schema";
 import { readDraft } from "./drafts";
+import { draftOnNewest, restoredNotice } from "./restoreDraft";
 
 export type SketchInfo = { sketchId: string; workspaceId: string; workspaceName: string; title: string; role: Role; latest: number };
 
@@ -21,6 +22,8 @@ export type SaveFlowState = {
   lastSaved: { number: number; at: string } | null;
   /** the editor shows kept work (restored draft) instead of a saved version */
   restored: boolean;
+  /** what to say once the kept work is shown (merged onto the newest version, any clashes named) */
+  restoredNotice?: string;
   /** the editor's status line (set by the toolbar slot once it is mounted) */
   notice?: (text: string) => void;
 };
@@ -63,8 +66,10 @@ export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { versi
         const info: SketchInfo = { sketchId, workspaceId: s.workspaceId, workspaceName: s.workspaceName, title: s.title, role: s.role, latest: s.latestVersion };
         const draft = opts.restore ? readDraft(sketchId) : null;
         if (draft) {
-          flow.setState({ info, base: s.latestVersion, restored: true });
-          return { ok: true, sketch: draft.sketch, version: s.latestVersion, readOnly: !can(s.role, "version.save") };
+          // merged into the newest version: a colleague's save since the draft's base stays
+          const merged = await draftOnNewest(draft, s.latestVersion);
+          flow.setState({ info, base: s.latestVersion, restored: true, restoredNotice: restoredNotice(merged, draft.baseVersion) });
+          return { ok: true, sketch: merged.sketch, version: s.latestVersion, readOnly: !can(s.role, "version.save") };
         }
         const number = opts.version && opts.version <= s.latestVersion ? opts.version : s.latestVersion;
         const { version } = await apiFetch<VersionResponse>(`/api/sketches/${sketchId}/versions/${number}`);

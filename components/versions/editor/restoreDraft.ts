@@ -1,0 +1,42 @@
+// Kept work (after a save conflict) brought back on top of the newest version: what the user
+// changed since the version they started from is merged into the newest one, so a colleague's
+// save in between is kept, not silently undone. Fields both changed are named.
+import { mergeSketch } from "@/canvas/model/merge";
+import { apiFetch } from "@/lib/api-client";
+import { migrateSketch } from "@/solver/migrations";
+import type { SketchFile } from "@/solver/schema";
+import type { Draft } from "./drafts";
+
+type VersionResponse = { version: { number: number; document: SketchFile } };
+type SketchResponse = { sketch: { latestVersion: number } };
+
+/** A document in the current format (the merge compares like with like). */
+function current(doc: SketchFile): SketchFile {
+  const m = migrateSketch(doc);
+  return m.ok ? (m.doc as SketchFile) : doc;
+}
+
+export interface DraftOnNewest {
+  sketch: SketchFile;
+  /** the version the kept work now sits on */
+  newest: number;
+  /** fields both the kept work and the newer versions changed: the kept work's value is used */
+  conflicts: string[];
+}
+
+export async function draftOnNewest(draft: Draft, newest?: number): Promise<DraftOnNewest> {
+  const latest = newest ?? (await apiFetch<SketchResponse>(`/api/sketches/${draft.sketchId}`)).sketch.latestVersion;
+  if (draft.baseVersion >= latest) return { sketch: draft.sketch, newest: latest, conflicts: [] };
+  const version = (n: number) => apiFetch<VersionResponse>(`/api/sketches/${draft.sketchId}/versions/${n}`).then((r) => current(r.version.document));
+  const [base, theirs] = await Promise.all([version(draft.baseVersion), version(latest)]);
+  const { sketch, conflicts } = mergeSketch(base, current(draft.sketch), theirs);
+  return { sketch, newest: latest, conflicts };
+}
+
+/** What the editor says once the kept work is back. */
+export function restoredNotice(r: DraftOnNewest, baseVersion: number): string {
+  if (baseVersion >= r.newest) return `Your kept changes are back (made on v${baseVersion}). Save them as the next version.`;
+  if (!r.conflicts.length) return `Your kept changes are back on top of v${r.newest}; what was saved since v${baseVersion} is kept too. Check, then save.`;
+  const named = r.conflicts.slice(0, 4).join(", ") + (r.conflicts.length > 4 ? ` and ${r.conflicts.length - 4} more` : "");
+  return `Your kept changes are back on top of v${r.newest}. You and a later version both changed ${named}: yours are used there — check them before saving.`;
+}
