@@ -161,6 +161,10 @@ describe("versioned sketches in the browser", () => {
     const drafter = await as("editor");
     await openEditor(lead, sketchId);
     await openEditor(drafter, sketchId);
+    // nothing changed yet: no empty version, and the status line says why
+    await lead.getByTestId("save-version").click();
+    await lead.getByTestId("notice").filter({ hasText: "Nothing to save: the sketch is as v3 has it." }).waitFor();
+    expect(await lead.getByTestId("save-dialog").count()).toBe(0);
 
     // the lead renames and saves v4; the drafter, still on v3, writes the notes
     await retitle(lead, "Bend, lead's second revision");

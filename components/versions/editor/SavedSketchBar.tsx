@@ -83,7 +83,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
     setError(null);
     try {
       const { version } = await saveVersionRequest(info.sketchId, base, message, pending.sketch);
-      flow.setState({ base: version.number, lastSaved: { number: version.number, at: version.createdAt }, info: { ...info, latest: version.number }, restored: false });
+      flow.setState({ base: version.number, baseDoc: pending.sketch, lastSaved: { number: version.number, at: version.createdAt }, info: { ...info, latest: version.number }, restored: false });
       if (restored) discardDraft(info.sketchId);
       setClean(stores.editor.getState().revision);
       stores.editor.getState().notify(`Saved as v${version.number}.`);

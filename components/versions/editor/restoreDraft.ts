@@ -10,8 +10,8 @@ import type { Draft } from "./drafts";
 type VersionResponse = { version: { number: number; document: SketchFile } };
 type SketchResponse = { sketch: { latestVersion: number } };
 
-/** A document in the current format (the merge compares like with like). */
-function current(doc: SketchFile): SketchFile {
+/** A document in the current format (the merge and the no-change check compare like with like). */
+export function current(doc: SketchFile): SketchFile {
   const m = migrateSketch(doc);
   return m.ok ? (m.doc as SketchFile) : doc;
 }

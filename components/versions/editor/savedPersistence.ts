@@ -8,7 +8,8 @@ import { apiFetch, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
 import type { SketchFile } from "@/solver/schema";
 import { readDraft } from "./drafts";
-import { draftOnNewest, restoredNotice } from "./restoreDraft";
+import equal from "fast-deep-equal";
+import { current, draftOnNewest, restoredNotice } from "./restoreDraft";
 
 export type SketchInfo = { sketchId: string; workspaceId: string; workspaceName: string; title: string; role: Role; latest: number };
 
@@ -18,6 +19,8 @@ export type SaveFlowState = {
   base: number | null;
   /** a save the user started: the message dialog is open until it resolves */
   pending: { sketch: SketchFile; resolve: (o: SaveOutcome) => void } | null;
+  /** the document of `base` as saved: a save of the very same document is refused in words */
+  baseDoc?: SketchFile;
   /** the last version saved from this page */
   lastSaved: { number: number; at: string } | null;
   /** the editor shows kept work (restored draft) instead of a saved version */
@@ -35,6 +38,11 @@ type VersionResponse = { version: { number: number; document: SketchFile } };
 
 export function createSaveFlow(): SaveFlow {
   return createStore<SaveFlowState>(() => ({ info: null, base: null, pending: null, lastSaved: null, restored: false }));
+}
+
+/** The same document, whatever order its keys come in (the database keeps its own) and whatever format version it was saved in. */
+function sameDocument(a: SketchFile, b: SketchFile): boolean {
+  return equal(current(a), current(b));
 }
 
 function loadFailure(err: unknown): LoadOutcome {
@@ -73,7 +81,7 @@ export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { versi
         }
         const number = opts.version && opts.version <= s.latestVersion ? opts.version : s.latestVersion;
         const { version } = await apiFetch<VersionResponse>(`/api/sketches/${sketchId}/versions/${number}`);
-        flow.setState({ info, base: version.number, restored: false });
+        flow.setState({ info, base: version.number, baseDoc: version.document, restored: false });
         return { ok: true, sketch: version.document, version: version.number, readOnly: !can(s.role, "version.save") };
       } catch (err) {
         return loadFailure(err);
@@ -89,6 +97,12 @@ export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { versi
         return Promise.resolve({ ok: false, reason: "forbidden", message });
       }
       if (pending) return Promise.resolve({ ok: false, reason: "error", message: "A save is already waiting for its message." });
+      const { baseDoc, base, restored } = flow.getState();
+      if (!restored && baseDoc && sameDocument(sketch, baseDoc)) {
+        const message = `Nothing to save: the sketch is as v${base} has it. Change something first.`;
+        setTimeout(() => flow.getState().notice?.(message), 0);
+        return Promise.resolve({ ok: false, reason: "invalid", message });
+      }
       return new Promise<SaveOutcome>((resolve) => flow.setState({ pending: { sketch, resolve } }));
     },
     async uploadUnderlay(file) {
