@@ -3,7 +3,7 @@ import { and, asc, desc, eq, lt, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { auditEvent, comment, membership, signOff, sketch, sketchVersion, user, workspace } from "@/db/schema";
-import type { ReviewState, SignOffStep } from "@/lib/review/rules";
+import { STATE_WORDS, type ReviewState, type SignOffStep } from "@/lib/review/rules";
 import type { SketchFile } from "@/solver/schema";
 import type { DbOrTx } from "./tx";
 import { withoutHiddenDetail } from "./audit";
@@ -100,6 +100,15 @@ export function titleBlockOf(prepared: TitleBlockEntry, entries: SignOffEntry[])
   return { prepared, checked, approved };
 }
 
+/** Where the version's review stands, for the title block: "approval withdrawn by …, date: reason" names who and why. */
+export function reviewWords(state: ReviewState, entries: SignOffEntry[]): string {
+  const last = [...entries].reverse().find((e) => e.toState === state);
+  const words = STATE_WORDS[state]?.label ?? state;
+  if (!last || state === "draft") return words === "prepared" ? "prepared, not yet submitted for checking" : words;
+  const when = last.at.toISOString().slice(0, 10);
+  return `${words} by ${last.actorName}, ${when}${(state === "withdrawn" || state === "returned") && last.note ? `: ${last.note}` : ""}`;
+}
+
 /**
  * For the calc sheet: a version as its title block needs it — workspace, sketch, number,
  * message, saved date, the document, and the sign-off of the current round (prepared, checked,
@@ -142,6 +151,7 @@ export async function getVersionForCalcSheet(versionId: string, userId: string) 
     savedAt: row.savedAt,
     authorName: row.authorName,
     reviewState: row.reviewState,
+    review: reviewWords(row.reviewState as ReviewState, entries),
     document: row.document as SketchFile,
     signOff: signOffRows,
   };

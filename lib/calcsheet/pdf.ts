@@ -44,6 +44,8 @@ export interface CalcSheetInput {
   generatedAt?: Date;
   /** prepared / checked / approved, when signed */
   signoff: SignoffEntry[];
+  /** where the review stands ("approval withdrawn by …: reason"), printed under the signatures */
+  review?: string;
   /** the saved sketch file */
   file: unknown;
   units?: UnitSystem;
@@ -290,6 +292,13 @@ function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number
     doc.font("Inter-SemiBold").fontSize(7.8).fillColor(INK).text(v, split + 72, y - 0.5, { width: left + width - split - 78, height: 12, lineBreak: false });
   });
   doc.y = top + h + 8;
+  // where the review stands, under the box across its width: a withdrawn approval is not left to be
+  // read as current, and its reason is printed whole
+  if (input.review) {
+    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text("Review: ", left, doc.y, { continued: true });
+    doc.font("Inter").fillColor(SOFT).text(input.review, { width, features: PROSE_FEATURES });
+    doc.y += 4;
+  }
 }
 
 function cautionBox(doc: PDFKit.PDFDocument, left: number, width: number, lines: string[]) {

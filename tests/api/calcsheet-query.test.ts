@@ -50,6 +50,14 @@ describe("getVersionForCalcSheet", () => {
       { role: "approved", name: "Lee Lead", date: approved.entry.at },
     ]);
     expect(sheet!.savedAt).toEqual(made.version.createdAt);
+    expect(draft!.review).toBe("prepared, not yet submitted for checking");
+    expect(sheet!.review).toBe(`approved by Lee Lead, ${approved.entry.at.toISOString().slice(0, 10)}`);
+
+    // an approval withdrawn: the title block no longer shows an approver, and says who withdrew it and why
+    const withdrawn = await takeSignOffStep(sketchId, 1, lead, { step: "withdraw", note: "Anchor bolts changed to M20" });
+    const after = await getVersionForCalcSheet(made.version.id, chk.id);
+    expect(after!.signOff.map((s) => s.role)).toEqual(["prepared", "checked"]);
+    expect(after!.review).toBe(`approval withdrawn by Lee Lead, ${withdrawn.entry.at.toISOString().slice(0, 10)}: Anchor bolts changed to M20`);
 
     expect(await getVersionForCalcSheet(made.version.id, outsider.id)).toBeNull();
   });

@@ -24,11 +24,11 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
   }, 60000);
   afterAll(async () => stopMail?.());
 
-  it("answers a PDF attachment named after the sketch and version", async () => {
+  it("answers a PDF attachment named after the sketch, version and units", async () => {
     const { status, res } = await call(GET as never, { params: { id: sketchId, number: "1" }, cookie: owner.cookie, path: `/api/sketches/${sketchId}/versions/1/calc-sheet?units=US` });
     expect(status).toBe(200);
     expect(res.headers.get("content-type")).toBe("application/pdf");
-    expect(res.headers.get("content-disposition")).toBe('attachment; filename="Bend-on-an-anchor-v1-calc-sheet.pdf"');
+    expect(res.headers.get("content-disposition")).toBe('attachment; filename="Bend-on-an-anchor-v1-calc-sheet-US.pdf"');
   }, 60000);
 
   it("is not found for someone outside the workspace, and for a missing version", async () => {

@@ -100,7 +100,7 @@ describe("design studies", () => {
     await page.getByText("✓ saved").waitFor();
     await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}/versions/2`);
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Calc sheet (PDF)" }).click()]);
-    expect(download.suggestedFilename()).toBe(`Monitor-trailer-${tag}-v2-calc-sheet.pdf`);
+    expect(download.suggestedFilename()).toBe(`Monitor-trailer-${tag}-v2-calc-sheet-SI.pdf`);
     const path = await download.path();
     const bytes = readFileSync(path!);
     expect(bytes.subarray(0, 5).toString()).toBe("%PDF-");

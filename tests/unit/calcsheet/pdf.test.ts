@@ -205,6 +205,23 @@ describe("calc sheet PDF", () => {
     );
   });
 
+  it("says under the signatures where the review stands: a withdrawn approval is not read as current", async () => {
+    const buf = await buildCalcSheet({
+      workspace: "W",
+      sketchTitle: "Bend",
+      version: 4,
+      savedAt: new Date("2026-11-30T10:00:00Z"),
+      signoff: [
+        { role: "prepared", name: "Eddie Editor", at: new Date("2026-11-30T10:00:00Z") },
+        { role: "checked", name: "Chen Checker", at: new Date("2026-11-30T15:30:00Z") },
+      ],
+      review: "approval withdrawn by Olivia Owner, 2026-12-01: Anchor bolts changed to M20",
+      file: loadFixture("pipe-bend-anchor.json"),
+    });
+    const { text } = await pdfText(buf);
+    expect(text).toContain("Approved by — Review: approval withdrawn by Olivia Owner, 2026-12-01: Anchor bolts changed to M20");
+  }, 60000);
+
   it("US customary units on request", async () => {
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Bend", version: 1, savedAt: new Date(), signoff: [], file: loadFixture("pipe-bend-anchor.json"), units: "US" });
     const { text } = await pdfText(buf);

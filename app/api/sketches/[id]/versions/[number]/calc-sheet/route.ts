@@ -26,10 +26,11 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
     versionMessage: sheet.message ?? undefined,
     savedAt: sheet.savedAt,
     signoff: sheet.signOff.map((s) => ({ role: s.role, name: s.name, at: s.date })),
+    review: sheet.review,
     file: sheet.document,
     units: query.units,
   });
-  const name = `${sheet.sketchTitle.replace(/[^\w.-]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "sketch"}-v${sheet.versionNumber}-calc-sheet.pdf`;
+  const name = `${sheet.sketchTitle.replace(/[^\w.-]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "sketch"}-v${sheet.versionNumber}-calc-sheet-${query.units}.pdf`;
   return new Response(new Uint8Array(pdf), {
     headers: {
       "content-type": "application/pdf",
