@@ -3,13 +3,16 @@
 // stores it as typed, and shows under it the value the solver's parser found — or its error.
 import { useId, useRef, useState } from "react";
 import type { Numeric } from "@/solver/schema";
-import { formatNumber, formatQuantity } from "@/solver/units";
+import { convert, formatNumber, formatQuantity } from "@/solver/units";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { numericText, toNumeric } from "@/canvas/model/numeric";
 import type { Display } from "./fieldDefs";
 import { INPUT } from "./ui";
 
 let session = 0;
+
+/** A unit as the expression parser reads it: "in²" → "in^2", "lbf·ft" → "lbf ft". */
+const typedUnit = (unit: string) => unit.replace(/²/g, "^2").replace(/³/g, "^3").replace(/·/g, " ");
 
 export interface NumericFieldProps {
   /** key of the value in the analysis: `${elementId}.${path}` or a top-level path like "gravity" */
@@ -57,8 +60,14 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
     setLocalError(onCommit(v, `${valueKey}#${sessionRef.current}`));
   };
 
+  // US units on screen, a plain number typed: it is SI (the file format's rule), which a US user may
+  // not mean. Said plainly, with what to type instead; not an error, as SI is what some want.
+  const usUnit = units === "US" && typeof typed === "number" && typed !== 0 && display !== "angle" && display !== "ratio" && display !== "rotationalStiffness" ? convert(typed, display, "US").unit : null;
+  const plainSI = usUnit && !error ? `A plain number is SI: ${formatDisplay(typed as number, display, "SI")} (= ${formatDisplay(typed as number, display, "US")}). Meant ${usUnit}? Type “${text.trim()} ${typedUnit(usUnit)}”.` : null;
+
   let line: string;
   if (error) line = error;
+  else if (plainSI) line = plainSI;
   else if (!text.trim()) line = hint ?? (optional ? "not given" : "");
   else if (evaluated !== undefined) line = `= ${formatDisplay(evaluated, display, units)}`;
   else if (typeof typed === "number") line = `= ${formatDisplay(typed, display, units)}`;
@@ -95,8 +104,8 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
           }}
         />
       </div>
-      <p id={describedBy} className={`mt-0.5 min-h-[15px] text-[11px] leading-snug ${error ? "text-caution" : "num text-ink-faint"}`} aria-live="polite">
-        {error ? `⚠ ${line}` : line}
+      <p id={describedBy} className={`mt-0.5 min-h-[15px] text-[11px] leading-snug ${error || plainSI ? "text-caution" : "num text-ink-faint"}`} aria-live="polite" data-caution={plainSI ? "plain-si" : undefined}>
+        {error || plainSI ? `⚠ ${line}` : line}
       </p>
     </div>
   );

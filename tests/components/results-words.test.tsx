@@ -198,6 +198,17 @@ describe("the SI / US switch", () => {
     const magnitude = within(screen.getByTestId("element-form")).getByLabelText("Magnitude");
     expect(magnitude).toHaveValue("10 kN");
     expect(magnitude).toHaveAccessibleDescription(/^= 2,?248 lbf$/);
+    // a plain number typed while US units are on screen is SI (the file format's rule): said, with
+    // what to type for lbf. 500 N / 4.4482216 N/lbf = 112.4 lbf (NIST SP 811)
+    await user.clear(magnitude);
+    await user.type(magnitude, "500");
+    expect(magnitude).toHaveAccessibleDescription("⚠ A plain number is SI: 500 N (= 112.4 lbf). Meant lbf? Type “500 lbf”.");
+    await user.clear(magnitude);
+    await user.type(magnitude, "500 lbf");
+    expect(magnitude).toHaveAccessibleDescription("= 500 lbf");
+    // an angle is degrees in both systems: no such note
+    const angle = within(screen.getByTestId("element-form")).getByLabelText("Direction");
+    expect(angle).not.toHaveAccessibleDescription(/plain number/);
   });
 });
 
