@@ -88,8 +88,11 @@ function supportPrims(item: Extract<SceneItem, { kind: "pin" | "roller" | "conta
         out.push(...labelAt(add(mul(g, 12), mul(n, -18)), mul(n, -1), ["lifts"], CAUTION, 11, { weight: 600 }));
       }
       if (o.state === "slips") {
+        // along the surface both ways: the mark says the contact slides, not which way (the friction
+        // force drawn with the reaction gives that, opposite to the slide)
         const t = mul(n, 1);
-        out.push(...solidArrow(add(mul(g, 22), mul(t, -8)), add(mul(g, 22), mul(t, 10)), CAUTION, 1.3, 7));
+        out.push(...solidArrow(add(mul(g, 22), mul(t, 1)), add(mul(g, 22), mul(t, 10)), CAUTION, 1.3, 6));
+        out.push(...solidArrow(add(mul(g, 22), mul(t, -1)), add(mul(g, 22), mul(t, -10)), CAUTION, 1.3, 6));
         out.push(...labelAt(add(mul(g, 22), mul(t, 13)), t, ["slips"], CAUTION, 11, { weight: 600 }));
       }
       break;
