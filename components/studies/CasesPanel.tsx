@@ -86,7 +86,7 @@ export function CasesPanel() {
   const addCombination = () => {
     if (!cases.length) return;
     const name = `Combination ${combinations.length + 1}`;
-    putCombos([...combinations, { id: idFromName(name, takenIds), name, terms: cases.slice(0, 2).map((c) => ({ case: c.id, factor: 1 })) }]);
+    putCombos([...combinations, { id: idFromName(name, takenIds), name, terms: cases.slice(0, 1).map((c) => ({ case: c.id, factor: 1 })) }]); // one case to start from: two would count the loads they share twice
   };
 
   const run = () => {
@@ -183,7 +183,7 @@ export function CasesPanel() {
               {combinations.map((k, i) => (
                 <li key={k.id} className="grid grid-cols-[10rem_1fr_auto] items-start gap-1" data-combination={k.id}>
                   <TextCell label={`Name of combination ${k.id}`} value={k.name} parse={(t) => (t.trim() ? { ok: true } : { ok: false, error: "needs a name" })} onCommit={(t) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name: t.trim() } : x)))} />
-                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases.map((c) => c.id))} onCommit={(t) => { const r = parseTerms(t, cases.map((c) => c.id)); if (r.ok) putCombos(combinations.map((x, j) => (j === i ? { ...x, terms: r.value } : x))); }} />
+                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(t) => { const r = parseTerms(t, cases); if (r.ok) putCombos(combinations.map((x, j) => (j === i ? { ...x, terms: r.value } : x))); }} />
                   <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => putCombos(combinations.filter((_, j) => j !== i))}>
                     ×
                   </button>

@@ -41,18 +41,30 @@ export function formatFactors(f: Record<string, number> | undefined): string {
     .join(", ");
 }
 
-export function parseTerms(text: string, caseIds: readonly string[]): Parsed<Array<{ case: string; factor: number }>> {
+/**
+ * "1.2 dead + 1.5 flow": each term a factor (1 when left out) and a case, by its id or its name
+ * (any capitals, spaces allowed: "1.5 Rated flow").
+ */
+export function parseTerms(text: string, cases: ReadonlyArray<string | { id: string; name?: string }>): Parsed<Array<{ case: string; factor: number }>> {
+  const list = cases.map((c) => (typeof c === "string" ? { id: c, name: undefined } : c));
   const parts = text
     .split("+")
     .map((s) => s.trim())
     .filter(Boolean);
   if (!parts.length) return { ok: false, error: "add at least one case, e.g. 1.2 normal + 1.5 test" };
   const out: Array<{ case: string; factor: number }> = [];
+  const fold = (x: string) => x.trim().replace(/\s+/g, " ").toLowerCase();
   for (const part of parts) {
-    const m = /^(?:(-?\d+(?:\.\d+)?)\s*[×x*]?\s*)?([A-Za-z0-9_-]+)$/i.exec(part);
+    const m = /^(?:(-?\d+(?:\.\d+)?)\s*[×x*]?\s+|(-?\d+(?:\.\d+)?)\s*[×*]\s*)?([A-Za-z0-9_].*)$/i.exec(part);
     if (!m) return { ok: false, error: `"${part}" should read factor case (e.g. 1.2 normal)` };
-    if (!caseIds.includes(m[2])) return { ok: false, error: `there is no case "${m[2]}"${caseIds.length ? ` (cases: ${caseIds.join(", ")})` : ""}` };
-    out.push({ case: m[2], factor: m[1] === undefined ? 1 : Number(m[1]) });
+    const word = m[3].trim();
+    const found = list.find((c) => c.id === word) ?? list.find((c) => c.name !== undefined && fold(c.name) === fold(word)) ?? list.find((c) => fold(c.id) === fold(word));
+    if (!found) {
+      const known = list.map((c) => (c.name && c.name !== c.id ? `${c.name} (${c.id})` : c.id)).join(", ");
+      return { ok: false, error: `there is no case "${word}"${list.length ? ` (cases: ${known})` : ""}` };
+    }
+    const f = m[1] ?? m[2];
+    out.push({ case: found.id, factor: f === undefined ? 1 : Number(f) });
   }
   return { ok: true, value: out };
 }

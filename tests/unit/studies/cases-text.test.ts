@@ -21,6 +21,15 @@ describe("case text forms", () => {
     expect(parseTerms("1.2 nope", ["normal"])).toEqual({ ok: false, error: 'there is no case "nope" (cases: normal)' });
     expect(formatTerms([{ case: "normal", factor: 1.2 }])).toBe("1.2 normal");
   });
+  it("combination terms name a case by its id or its name, in any capitals, spaces and all", () => {
+    const cases = [
+      { id: "case-5", name: "Dead" },
+      { id: "case-6", name: "Rated flow" },
+    ];
+    expect(parseTerms("1.2 dead + 1.5 Rated  flow", cases)).toEqual({ ok: true, value: [{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 1.5 }] });
+    expect(parseTerms("1.2*case-5 + 0.9 x rated flow", cases)).toEqual({ ok: true, value: [{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 0.9 }] });
+    expect(parseTerms("1.5 wind", cases)).toEqual({ ok: false, error: 'there is no case "wind" (cases: Dead (case-5), Rated flow (case-6))' });
+  });
   it("ids from names", () => {
     expect(idFromName("Test pressure", [])).toBe("test-pressure");
     expect(idFromName("Test pressure", ["test-pressure"])).toBe("test-pressure-2");
