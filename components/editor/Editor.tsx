@@ -224,7 +224,8 @@ function hasContent(sketch: SketchFile): boolean {
  * notice line is cut to the window's width). `yours` names what Undo brings back.
  */
 function openExampleOver(store: EditorStore, ex: Example, yours: string) {
-  store.getState().apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>);
+  // refused on a read-only sketch: the read-only notice stays, and nothing claims to have opened
+  if (!store.getState().apply(replaceSketch({ sketch: ex.sketch, label: `Open the example “${ex.title}”` }) as Command<unknown>)) return;
   store.getState().notify(`Opened “${ex.title}”. Undo (Ctrl+Z) returns to ${yours}. ${ex.summary}`);
 }
 

@@ -24,7 +24,7 @@ export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputEl
         return false;
       }
       const s = stores.editor.getState();
-      s.apply(replaceSketch({ sketch: out.sketch, label: `Import ${name}` }) as Command<unknown>);
+      if (!s.apply(replaceSketch({ sketch: out.sketch, label: `Import ${name}` }) as Command<unknown>)) return false;
       // replaceSketch asks the canvas to fit the view to the imported drawing
       s.notify(out.migratedFrom.length ? `Opened ${name} (format version ${out.migratedFrom[0]}, brought up to date).` : `Opened ${name}.`);
       return true;

@@ -151,5 +151,11 @@ describe("a read-only editor (a viewer or a checker on a saved sketch)", () => {
     const actions = within(screen.getByTestId("selection-actions"));
     expect(actions.getAllByRole("button").map((b) => b.textContent)).toEqual(["Copy"]);
     expect(actions.getByRole("button", { name: "Copy" })).toBeEnabled();
+    // an example cannot replace the sketch, and nothing claims it did
+    const user = userEvent.setup();
+    await user.click(screen.getByTestId("menu-examples"));
+    await user.click(screen.getByRole("menuitem", { name: /Pressure-pipe bend/ }));
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent("Skid");
+    expect(screen.getByTestId("notice")).toHaveTextContent(/^Read only — your role may not edit this sketch/);
   });
 });
