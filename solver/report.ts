@@ -483,3 +483,39 @@ export function tableToCsv(t: Table, unparse: (rows: unknown[][]) => string): st
   const rows = t.rows.map((r) => r.map((c) => (typeof c === "number" ? Number(c.toPrecision(6)) : (c ?? ""))));
   return unparse([header, ...rows]);
 }
+
+/**
+ * What a reader must not miss in the cases: a case in which a body is not held, a factor of
+ * safety below its required value (never rounded up to it). The calc sheet's first page and the
+ * sign-off dialogs say these. `hasCases`: named cases (else the one run is the sketch as drawn).
+ */
+export function caseFindings(study: StudyResult, hasCases: boolean): string[] {
+  const out: string[] = [];
+  for (const run of study.runs) {
+    if (!run.ok) {
+      out.push(`${run.name}: not solved (${run.errors.map((e) => `${e.path} ${e.message}`).join("; ")})`);
+      continue;
+    }
+    for (const [body, b] of Object.entries(run.result.bodies)) {
+      const bits: string[] = [];
+      if (hasCases && (b.status === "tips" || b.status === "unrestrained")) bits.push(`${body} ${b.status === "tips" ? "tips" : "is unrestrained"}`);
+      const st = run.stability[body];
+      for (const [against, check] of [["overturning", st?.overturning], ["sliding", st?.sliding]] as const) {
+        if (!check || "notApplicable" in check || check.pass) continue;
+        const about = "about" in check ? ` about ${check.about}` : "";
+        bits.push(`factor of safety against ${against}${about} ${factorWords(check.factor, check.required)}, below the required ${formatNumber(check.required, 4)}`);
+      }
+      if (bits.length) out.push(`${hasCases ? `${run.name} — ` : ""}${bits.join("; ")}`);
+    }
+  }
+  return out;
+}
+
+/** A factor below its required value, never rounded up to it (1.4996 is not "1.5"). */
+function factorWords(factor: number, required: number): string {
+  for (const digits of [4, 6, 9]) {
+    const shown = Number(factor.toPrecision(digits));
+    if (shown < required) return formatNumber(shown, digits);
+  }
+  return String(factor);
+}

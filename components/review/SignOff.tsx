@@ -63,7 +63,7 @@ export function TitleBlock({ block, state }: { block: SignOffData["titleBlock"];
   );
 }
 
-function StepDialog({ step, path, onClose, onDone }: { step: SignOffStep; path: string; onClose: () => void; onDone: () => void }) {
+function StepDialog({ step, path, concerns, onClose, onDone }: { step: SignOffStep; path: string; concerns: readonly string[]; onClose: () => void; onDone: () => void }) {
   const rule = SIGN_OFF_RULES[step];
   const [note, setNote] = useState("");
   const take = useMutation({ mutationFn: () => apiFetch(path, { method: "POST", body: { step, ...(note.trim() ? { note: note.trim() } : {}) } }), onSuccess: onDone });
@@ -84,6 +84,16 @@ function StepDialog({ step, path, onClose, onDone }: { step: SignOffStep; path: 
           take.mutate();
         }}
       >
+        {(step === "check" || step === "approve") && concerns.length ? (
+          <div className="rounded-md border border-caution/40 bg-caution-soft p-3 text-[13px] text-ink" data-testid="signoff-concerns" role="note">
+            <p className="font-semibold">Before you {step === "approve" ? "approve" : "mark it checked"}, this version shows:</p>
+            <ul className="mt-1 list-disc space-y-0.5 pl-5">
+              {concerns.map((c) => (
+                <li key={c}>{c}</li>
+              ))}
+            </ul>
+          </div>
+        ) : null}
         <label htmlFor="signoff-note" className="block text-sm font-medium text-ink">
           {prompt[step]}
         </label>
@@ -109,7 +119,8 @@ function StepDialog({ step, path, onClose, onDone }: { step: SignOffStep; path: 
   );
 }
 
-export function SignOffPanel({ data, path, onChanged }: { data: SignOffData; path: string; onChanged: () => void }) {
+/** `concerns`: what the version's own results say a checker or approver must not miss (a case not held, a factor of safety short). */
+export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: SignOffData; path: string; concerns?: readonly string[]; onChanged: () => void }) {
   const [step, setStep] = useState<SignOffStep | null>(null);
   const qc = useQueryClient();
   return (
@@ -143,6 +154,7 @@ export function SignOffPanel({ data, path, onChanged }: { data: SignOffData; pat
         <StepDialog
           step={step}
           path={path}
+          concerns={concerns}
           onClose={() => setStep(null)}
           onDone={() => {
             setStep(null);

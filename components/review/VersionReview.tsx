@@ -14,6 +14,7 @@ import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import { stateWord } from "@/solver/report";
+import { versionConcerns } from "./concerns";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { CommentsPanel, type CommentsData } from "./Comments";
 import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
@@ -80,6 +81,8 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
     [comments.data, selected],
   );
   const refresh = () => void qc.invalidateQueries({ queryKey: apiKey(`/api/sketches/${sketchId}`) });
+  // what the version's own results say: a body not held, a slip, a factor of safety short
+  const concerns = useMemo(() => (doc ? versionConcerns(doc) : []), [doc]);
 
   if (version.isError) return <Notice tone="error">{version.error instanceof ApiError ? version.error.message : "The version could not be loaded."}</Notice>;
   const v = version.data?.version;
@@ -133,7 +136,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
       </div>
 
       <Panel title="Sign-off" description="Prepared by one engineer, checked by another, approved by an owner.">
-        {signoff.data ? <SignOffPanel data={signoff.data} path={`${base}/signoff`} onChanged={refresh} /> : <Skeleton className="h-24 w-full" />}
+        {signoff.data ? <SignOffPanel data={signoff.data} path={`${base}/signoff`} concerns={concerns} onChanged={refresh} /> : <Skeleton className="h-24 w-full" />}
       </Panel>
 
       <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">

@@ -10,7 +10,6 @@ import {
   CAUTIONS,
   caseReactionTable,
   envelopeTable,
-  formatNumber,
   handCheckTable,
   inputsTable,
   parametersTable,
@@ -21,9 +20,9 @@ import {
   type UnitSystem,
   type SolveResult,
 } from "@/solver";
-import { combinationWarnings, type StudyResult } from "@/solver/cases";
+import { combinationWarnings } from "@/solver/cases";
 import { statusSentences } from "@/components/results/statusSentence";
-import { designLoadTable, excludedWords, type Table } from "@/solver/report";
+import { caseFindings, designLoadTable, excludedWords, type Table } from "@/solver/report";
 import { lineChartSvg } from "./chart";
 import { sweepCharts } from "./sweeps";
 import { registerFonts } from "./fonts";
@@ -226,36 +225,6 @@ export function haloBehindLabels(svg: string): string {
 
 /** A line for each run whose body does not hold, or whose factor of safety is below the required
  *  value (the as-drawn run's status is already said above, so only its factors when it is alone). */
-function caseFindings(study: StudyResult, hasCases: boolean): string[] {
-  const out: string[] = [];
-  for (const run of study.runs) {
-    if (!run.ok) {
-      out.push(`${run.name}: not solved (${run.errors.map((e) => `${e.path} ${e.message}`).join("; ")})`);
-      continue;
-    }
-    for (const [body, b] of Object.entries(run.result.bodies)) {
-      const bits: string[] = [];
-      if (hasCases && (b.status === "tips" || b.status === "unrestrained")) bits.push(`${body} ${b.status === "tips" ? "tips" : "is unrestrained"}`);
-      const st = run.stability[body];
-      for (const [against, check] of [["overturning", st?.overturning], ["sliding", st?.sliding]] as const) {
-        if (!check || "notApplicable" in check || check.pass) continue;
-        const about = "about" in check ? ` about ${check.about}` : "";
-        bits.push(`factor of safety against ${against}${about} ${factorWords(check.factor, check.required)}, below the required ${formatNumber(check.required, 4)}`);
-      }
-      if (bits.length) out.push(`${hasCases ? `${run.name} — ` : ""}${bits.join("; ")}`);
-    }
-  }
-  return out;
-}
-
-/** A factor below its required value, never rounded up to it (1.4996 is not "1.5"). */
-function factorWords(factor: number, required: number): string {
-  for (const digits of [4, 6, 9]) {
-    const shown = Number(factor.toPrecision(digits));
-    if (shown < required) return formatNumber(shown, digits);
-  }
-  return String(factor);
-}
 
 /** The cases table of a sketch with no cases: no case column, no governing marks or words. */
 function singleRunTable(t: Table): Table {

@@ -1,0 +1,23 @@
+// What the sign-off dialogs put before a checker or approver: the version's own findings, the
+// same the calc sheet's first page says.
+import { describe, expect, it } from "vitest";
+import { versionConcerns } from "@/components/review/concerns";
+import { loadFixture } from "./solver/helpers";
+
+describe("a version's concerns for sign-off", () => {
+  it("the trailer with a low throw case: the lift as drawn, and the overturning factor short of 1.5 (common practice, from memory)", () => {
+    const file = loadFixture("fire-monitor-trailer.json");
+    file.cases = [
+      { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
+      { id: "high", name: "High throw at full flow", parameters: { theta: "60 deg" } },
+    ];
+    const concerns = versionConcerns(file);
+    expect(concerns[0]).toBe("As drawn: Lifts off at the front jack — the rear stabiliser leg and the wheel still hold the body");
+    expect(concerns).toContain("Low throw — factor of safety against overturning about leg 1.442, below the required 1.5");
+    expect(concerns.some((c) => c.startsWith("High throw"))).toBe(false);
+  });
+
+  it("a bend on its anchor that holds, with no cases: nothing to say", () => {
+    expect(versionConcerns(loadFixture("pipe-bend-anchor.json"))).toEqual([]);
+  });
+});
