@@ -14,13 +14,76 @@ import { StatusBanner } from "./StatusBanner";
 
 type Tab = "reactions" | "hand" | "cases" | "sweep";
 
+/** The dock's height the user dragged to (px), kept for the next visit; none: the tab's own height. */
+const HEIGHT_KEY = "counterpoise:results-height";
+const MIN_HEIGHT = 150;
+
+function readHeight(): number | null {
+  if (typeof window === "undefined") return null;
+  const v = Number(window.localStorage?.getItem(HEIGHT_KEY));
+  return Number.isFinite(v) && v >= MIN_HEIGHT ? v : null;
+}
+
+/**
+ * The line between the drawing and the results: drag it (or focus it and press ↑/↓) to give one
+ * or the other more room; a double click goes back to the tab's own height.
+ */
+function Resizer({ height, onChange }: { height: number; onChange: (h: number | null) => void }) {
+  const clamp = (h: number) => Math.round(Math.max(MIN_HEIGHT, Math.min(h, window.innerHeight - 200)));
+  return (
+    <div
+      role="separator"
+      aria-orientation="horizontal"
+      aria-label="Resize the results (drag, or ↑ and ↓)"
+      aria-valuenow={Math.round(height)}
+      tabIndex={0}
+      data-testid="results-resizer"
+      className="absolute inset-x-0 -top-[4px] z-10 h-[8px] cursor-row-resize focus-visible:bg-accent/30 hover:bg-accent/15"
+      onPointerDown={(e) => {
+        e.preventDefault();
+        const el = e.currentTarget;
+        el.setPointerCapture(e.pointerId);
+        const y0 = e.clientY;
+        const h0 = height;
+        const move = (ev: PointerEvent) => onChange(clamp(h0 + (y0 - ev.clientY)));
+        const up = () => {
+          el.removeEventListener("pointermove", move);
+          el.removeEventListener("pointerup", up);
+        };
+        el.addEventListener("pointermove", move);
+        el.addEventListener("pointerup", up);
+      }}
+      onDoubleClick={() => onChange(null)}
+      onKeyDown={(e) => {
+        if (e.key === "ArrowUp" || e.key === "ArrowDown") {
+          e.preventDefault();
+          onChange(clamp(height + (e.key === "ArrowUp" ? 24 : -24)));
+        }
+      }}
+    />
+  );
+}
+
 export function ResultsDock() {
   const [tab, setTab] = useState<Tab>("reactions");
   const [sense, setSense] = useState<Sense>("body");
   const flows = useEditor((s) => s.sketch.ports.length > 0);
+  const [chosen, setChosen] = useState<number | null>(readHeight);
+  const study = tab === "cases" || tab === "sweep";
+  // the studies need room: the dock grows while one of them is open, leaving the drawing half the window
+  const height = chosen ?? (study ? Math.min(560, Math.round((typeof window === "undefined" ? 900 : window.innerHeight) * 0.5)) : 292);
+  const choose = (h: number | null) => {
+    setChosen(h);
+    try {
+      if (h === null) window.localStorage?.removeItem(HEIGHT_KEY);
+      else window.localStorage?.setItem(HEIGHT_KEY, String(h));
+    } catch {
+      // a browser that keeps nothing: the height lasts this visit
+    }
+  };
   return (
-    // the studies need room: the dock grows while one of them is open
-    <section aria-label="Results" className={`flex shrink-0 border-t border-rule bg-paper ${tab === "cases" || tab === "sweep" ? "h-[min(600px,64vh)]" : "h-[292px]"}`}>
+    <section aria-label="Results" className="relative flex shrink-0 border-t border-rule bg-paper" style={{ height }} data-testid="results-dock">
+      <Resizer height={height} onChange={choose} />
       <div className="flex min-w-0 flex-1 flex-col px-3 pt-2">
         <StatusBanner />
         <CautionsLine flows={flows} />

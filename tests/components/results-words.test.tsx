@@ -212,6 +212,26 @@ describe("the SI / US switch", () => {
   });
 });
 
+describe("the line between the drawing and the results", () => {
+  it("moves with ↑ and ↓, is kept for the next visit, and a double click gives the tab its own height back", async () => {
+    const user = userEvent.setup();
+    window.localStorage.removeItem("counterpoise:results-height");
+    mountResultsDock(beam());
+    const dock = screen.getByTestId("results-dock");
+    const line = screen.getByRole("separator", { name: /Resize the results/ });
+    expect(dock.style.height).toBe("292px");
+    line.focus();
+    await user.keyboard("{ArrowUp}{ArrowUp}");
+    expect(dock.style.height).toBe("340px");
+    expect(window.localStorage.getItem("counterpoise:results-height")).toBe("340");
+    await user.keyboard("{ArrowDown}");
+    expect(dock.style.height).toBe("316px");
+    await user.dblClick(line);
+    expect(dock.style.height).toBe("292px");
+    expect(window.localStorage.getItem("counterpoise:results-height")).toBeNull();
+  });
+});
+
 describe("ports drawn against their kind", () => {
   // The file format: a port's angle is the velocity's direction, into the body at an inlet and
   // out of it at an outlet. The demo bend's inlet sits on its left end (x = −0.45) flowing +x.
