@@ -10,7 +10,8 @@ import { downloadCsv } from "./csv";
 /** A name (a case, a support) wraps within a bounded width rather than widening the table past the
  *  panel, a long id without spaces breaking where it must; numbers never wrap. The full text is
  *  also the cell's title. */
-const TEXT_CELL = "max-w-[14rem] min-w-[4.5rem] whitespace-normal [overflow-wrap:anywhere]";
+// words wrap between words; a word longer than the column widens it (the table scrolls sideways) rather than breaking as "overturnin g"
+const TEXT_CELL = "max-w-[14rem] min-w-[4.5rem] whitespace-normal [overflow-wrap:break-word]";
 
 export function ReportTable({
   table,
