@@ -283,7 +283,8 @@ export function bodyPrims(b: SceneBody, o: SymbolOptions & { gravityOn?: boolean
   const pts: Pt[] = b.outline.map((p) => [p[0] * o.scale, -p[1] * o.scale]);
   const out: Prim[] = [{ t: "poly", closed: true, pts, fill: BODY_FILL, stroke: c, width: o.color && o.color !== INK ? 2 : 1.4 }];
   if (o.showName !== false && pts.length) {
-    const words = `${b.label || b.id} · ${q(b.mass, "mass", o.units)}`;
+    // a mass the solver refuses (below zero, or no number) is not drawn as if it counted
+    const words = `${b.label || b.id} · ${Number.isFinite(b.mass) && b.mass >= 0 ? q(b.mass, "mass", o.units) : "mass not valid"}`;
     const at = bodyLabelPoint(pts, words.length * 6.4 + 8);
     out.push(text(at, words, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
   }

@@ -58,6 +58,14 @@ describe("renderSketchSvg", () => {
     expect(text.some((t) => /double lines: reactions found/.test(t ?? ""))).toBe(true);
   });
 
+  it("a body whose mass the solver refuses (below zero) is not labelled with it", () => {
+    const { sketch } = solved("washing-cart");
+    const bad = { ...sketch, bodies: sketch.bodies.map((b) => ({ ...b, mass: "-5 kg" })) };
+    const text = [...parse(renderSketchSvg(bad, null)).querySelectorAll("text")].map((t) => t.textContent);
+    expect(text).toContain("Washing cart · mass not valid");
+    expect(text.some((t) => /−5 kg|-5 kg/.test(t ?? ""))).toBe(false);
+  });
+
   it("writes US customary units when asked", () => {
     const { sketch, result } = solved("pipe-bend-anchor");
     const svg = renderSketchSvg(sketch, result, { units: "US" });
