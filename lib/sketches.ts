@@ -244,6 +244,9 @@ function forkInTransaction(
       workspaceId: input.workspaceId,
       actorId: actor.id,
       title,
+      // the fork carries what the sketch says about itself; its history starts afresh
+      description: source.description ?? "",
+      tags: source.tags ?? [],
       forkedFromVersionId: version.id,
       forkedFromTitle: source.title,
     });

@@ -17,7 +17,7 @@ const originSketch = alias(sketch, "origin_sketch");
 /** A sketch and the caller's role in its workspace (null role: not a member). Null when no such sketch. */
 export async function getSketchAccess(sketchId: string, userId: string, tx: DbOrTx = db) {
   const [row] = await tx
-    .select({ id: sketch.id, workspaceId: sketch.workspaceId, title: sketch.title, latestVersion: sketch.latestVersion, role: membership.role })
+    .select({ id: sketch.id, workspaceId: sketch.workspaceId, title: sketch.title, description: sketch.description, tags: sketch.tags, latestVersion: sketch.latestVersion, role: membership.role })
     .from(sketch)
     .leftJoin(membership, and(eq(membership.workspaceId, sketch.workspaceId), eq(membership.userId, userId)))
     .where(eq(sketch.id, sketchId));

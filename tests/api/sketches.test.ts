@@ -203,7 +203,7 @@ describe("forks", () => {
       [eddie, "editor"],
       [outsider, "viewer"],
     ]);
-    const id = (await create({ title: "Original bend", document: fixture("pipe-bend-anchor") })).body.sketch.id;
+    const id = (await create({ title: "Original bend", description: "Riser bend at pier 7", tags: ["pipework", "anchors"], document: fixture("pipe-bend-anchor") })).body.sketch.id;
     await save(id, 1, edited("pipe-bend-anchor", (d) => (d.title = "bend v2")), eddie, "thicker wall");
 
     const fork = await call(forkRoute.POST, { method: "POST", params: { id }, cookie: eddie.cookie, body: { workspaceId: sharedWs, version: 1 } });
@@ -216,6 +216,8 @@ describe("forks", () => {
     expect(v1.body.version.message).toBe("Forked from “Original bend” v1");
 
     const seenByEddie = await call(sketchRoute.GET, { params: { id: forkId }, cookie: eddie.cookie });
+    // the fork keeps what the sketch says about itself: its description and tags
+    expect(seenByEddie.body.sketch).toMatchObject({ description: "Riser bend at pier 7", tags: ["pipework", "anchors"] });
     expect(seenByEddie.body.sketch.forkedFrom).toEqual({ visible: true, sketchId: id, title: "Original bend", workspaceId: ws, versionNumber: 1 });
     const seenByOutsider = await call(sketchRoute.GET, { params: { id: forkId }, cookie: outsider.cookie });
     expect(seenByOutsider.body.sketch.forkedFrom).toEqual({ visible: false, title: "Original bend", versionNumber: 1 });
