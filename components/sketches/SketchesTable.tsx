@@ -6,7 +6,7 @@ import { useEffect, useState } from "react";
 import { Button, EmptyState, Notice, Select, Skeleton } from "@/components/shell/controls";
 import { formatDate, formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
-import { STATUS_ORDER, type SketchSort, type SketchStatus } from "@/lib/sketch-schemas";
+import { STATUS_FILTERS, type SketchSort, type SketchStatus } from "@/lib/sketch-schemas";
 import { ForkGlyph } from "./ForkGlyph";
 import { formatForce, timeAgo } from "./format";
 import { useUnitsPreference } from "./useUnitsPreference";
@@ -106,7 +106,7 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
         <div className="w-40">
           <Select id="sketch-status" label="Status" value={filters.status} onChange={(e) => set({ status: e.target.value })}>
             <option value="">Any status</option>
-            {STATUS_ORDER.map((s) => (
+            {STATUS_FILTERS.map((s) => (
               <option key={s} value={s}>
                 {s}
               </option>

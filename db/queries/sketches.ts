@@ -76,7 +76,7 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       ? or(ilike(sketch.title, containing(q.q)), ilike(sketch.description, containing(q.q)), sql`exists (select 1 from unnest(${sketch.tags}) t where t ilike ${containing(q.q)})`)
       : undefined,
     q.tag ? sql`${sketch.tags} @> array[${q.tag}]::text[]` : undefined,
-    q.status ? eq(latest.status, q.status) : undefined,
+    q.status === "slips" ? sql`jsonb_exists(${latest.summary} -> 'warnings', 'SLIP')` : q.status ? eq(latest.status, q.status) : undefined,
   );
   const dir = q.dir ?? (q.sort === "title" ? "asc" : q.sort === "status" ? "desc" : "desc");
   const by = (c: SQL | typeof sketch.title) => (dir === "asc" ? sql`${c} asc nulls last` : sql`${c} desc nulls last`);

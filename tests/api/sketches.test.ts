@@ -190,6 +190,13 @@ describe("listing", () => {
     expect(page2.body).toMatchObject({ total: 4, page: 2, pageSize: 3 });
   });
 
+  it("filters the sketches whose latest version slips (a warning beside its status)", async () => {
+    const slipWs = await makeWorkspace("Slip bay", [[eddie, "editor"]]);
+    for (const [title, name] of [["Skid that slips", "pump-skid-slip"], ["Anchor that holds", "pipe-bend-anchor"]]) expect((await create({ title, document: fixture(name) }, eddie, slipWs)).status).toBe(201);
+    const res = await call(sketchesRoute.GET, { params: { id: slipWs }, cookie: eddie.cookie, path: `/api/workspaces/${slipWs}/sketches?status=slips` });
+    expect(titles(res.body)).toEqual(["Skid that slips"]);
+  });
+
   it("refuses bad query parameters with their paths", async () => {
     const res = await list("sort=colour&pageSize=500");
     expect(res.status).toBe(400);
