@@ -12,6 +12,19 @@ import { drawingScale, drawMarks, drawPins, worldPoint, type MarkKind, type PinM
 
 export type PickedPin = { kind: "element"; elementId: string; label: string } | { kind: "point"; at: [number, number] };
 
+/** Where a pin on an element stands (world, m): its point, or a body's top right corner. */
+function elementAnchors(sketch: NonNullable<ReturnType<typeof useSolved>["sketch"]>): Map<string, [number, number]> {
+  const out = new Map<string, [number, number]>();
+  for (const b of sketch.bodies) {
+    if (!b.outline.length) continue;
+    out.set(b.id, [Math.max(...b.outline.map((p) => p[0])), Math.max(...b.outline.map((p) => p[1]))]);
+  }
+  for (const e of [...sketch.supports, ...sketch.loads, ...sketch.ports, ...sketch.massSources] as Array<{ id: string; at?: [number, number] }>) {
+    if (e.at && Number.isFinite(e.at[0]) && Number.isFinite(e.at[1])) out.set(e.id, [e.at[0], e.at[1]]);
+  }
+  return out;
+}
+
 export function useSolved(document: SketchFile) {
   return useMemo(() => {
     const { parsed, result } = solveDocument(document);
@@ -65,7 +78,7 @@ export function ReviewDrawing({
     const el = box.current?.querySelector("svg");
     if (!el) return;
     if (marks) drawMarks(el, marks);
-    if (pins) drawPins(el, pins, drawingScale(el, sketch));
+    if (pins) drawPins(el, pins, drawingScale(el, sketch), sketch ? elementAnchors(sketch) : undefined);
   }, [svg, marks, pins, sketch]);
 
   return (

@@ -84,15 +84,23 @@ export function drawMarks(svg: SVGSVGElement, marks: Record<string, MarkKind>): 
 }
 
 /** Numbered pins: at an element's top-right corner, or at a point of the drawing. */
-export function drawPins(svg: SVGSVGElement, pins: PinMarker[], scale: number | null): void {
+/**
+ * `anchors`: where each element is (world, m): a support's, load's or port's point, a body's top
+ * right corner. A pin stands on it; without one (or the scale) it stands on the element's drawn box.
+ */
+export function drawPins(svg: SVGSVGElement, pins: PinMarker[], scale: number | null, anchors: ReadonlyMap<string, [number, number]> = new Map()): void {
   const group = contentGroup(svg);
   if (!group) return;
   const g = overlay(group, "pins");
   for (const p of pins) {
     let at: [number, number] | null = null;
     if ("elementId" in p.at) {
-      const b = boxOf(group, p.at.elementId);
-      if (b) at = [b.x + b.width, b.y];
+      const a = anchors.get(p.at.elementId);
+      if (a && scale) at = [a[0] * scale, -a[1] * scale];
+      else {
+        const b = boxOf(group, p.at.elementId);
+        if (b) at = [b.x + b.width, b.y];
+      }
     } else if (scale) at = [p.at.point[0] * scale, -p.at.point[1] * scale];
     if (!at) continue;
     const pin = el("g", { "data-thread": p.threadId, transform: `translate(${at[0].toFixed(1)} ${at[1].toFixed(1)})`, style: "cursor:pointer", role: "button", "aria-label": `Comment ${p.n}` });
