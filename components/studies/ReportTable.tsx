@@ -10,8 +10,10 @@ import { downloadCsv } from "./csv";
 /** A name (a case, a support) wraps within a bounded width rather than widening the table past the
  *  panel, a long id without spaces breaking where it must; numbers never wrap. The full text is
  *  also the cell's title. */
-// words wrap between words; a word longer than the column widens it (the table scrolls sideways) rather than breaking as "overturnin g"
-const TEXT_CELL = "max-w-[14rem] min-w-[4.5rem] whitespace-normal [overflow-wrap:break-word]";
+// words wrap between words, never inside one ("overturnin g"); only a long id without spaces
+// ("rearStabiliserLegOnTheOutriggerBeam") may break anywhere rather than widen the table
+const TEXT_CELL = "max-w-[14rem] min-w-[4.5rem] whitespace-normal";
+const wrapOf = (text: string) => (text.length > 18 && !/\s/.test(text) ? "[overflow-wrap:anywhere]" : "[overflow-wrap:break-word]");
 
 export function ReportTable({
   table,
@@ -62,7 +64,7 @@ export function ReportTable({
                       data-col={col.key}
                       data-mark={cellMark ? cellMark.symbol : undefined}
                       title={cellMark?.text ?? (text ? cell : undefined)}
-                      className={`px-1.5 py-[3px] align-top ${text ? TEXT_CELL : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
+                      className={`px-1.5 py-[3px] align-top ${text ? `${TEXT_CELL} ${wrapOf(cell)}` : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
                     >
                       {cellMark && (
                         <span role="img" aria-label={cellMark.text} className="mr-0.5">

@@ -44,8 +44,8 @@ describe("numeric fields with the worker's answer", () => {
     await user.clear(magnitude);
     await user.type(magnitude, "4448.22");
     act(() => editor.getState().setUnits("US"));
-    // 1 lbf = 4.448 222 N (NIST SP 811)
-    expect(within(form).getByText("= 1000 lbf")).toBeInTheDocument();
+    // 1 lbf = 4.448 222 N (NIST SP 811); a plain number is SI, and with US units on screen the field says so
+    expect(within(form).getByText("⚠ A plain number is SI: 4.448 kN (= 1000 lbf). Meant lbf? Type “4448.22 lbf”.")).toBeInTheDocument();
   });
 });
 

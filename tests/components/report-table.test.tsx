@@ -45,6 +45,10 @@ describe("ReportTable", () => {
     // an id without spaces may break anywhere rather than widen the table
     const id = within(table).getAllByTitle("rearStabiliserLegOnTheOutriggerBeam")[0];
     expect(id.className).toContain("[overflow-wrap:anywhere]");
+    // a word of the trade is never broken inside: the component names wrap only between words
+    const component = within(table).getAllByText("Fx")[0];
+    expect(component.tagName).toBe("TD");
+    expect(component.className).toContain("[overflow-wrap:break-word]");
     for (const cell of table.querySelectorAll("td[data-col=max], td[data-col=min]")) expect(cell.className).toContain("whitespace-nowrap");
   });
 
