@@ -8,7 +8,7 @@ import { FIELD_UNIT_LABELS } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { SolveResult, Vec2 } from "./types";
-import { convert, formatNumber, unitsFor, type Quantity, type UnitSystem } from "./units";
+import { convert, formatNumber, formatQuantity, unitsFor, type Quantity, type UnitSystem } from "./units";
 import { gravityActs, overMu } from "./words";
 
 export type Cell = string | number | null;
@@ -429,20 +429,28 @@ export function parametersTable(parsed: Extract<ParseResult, { ok: true }>): Tab
 }
 
 /** Every element with its fields: as typed, and (for expressions) the value in SI units. */
-export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
+export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: UnitSystem = "SI"): Table {
   const rows: Cell[][] = [];
   const groups = ["bodies", "supports", "loads", "ports", "massSources"] as const;
+  // a US sheet gives each dimensional value in US customary units too, so it reads beside the hand check
+  const inUs = (si: number, kind: string | undefined) =>
+    system === "US" && kind && kind in US_QUANTITY && Number.isFinite(si) && si !== 0 ? ` (${formatQuantity(si, kind as Quantity, "US")})` : "";
   const show = (raw: unknown, path: string, name: string): string => {
     const v = parsed.fields[path];
     const kind = FIELD_KIND_BY_NAME[name];
     const unit = kind ? FIELD_UNIT_LABELS[kind] : "";
-    if (typeof raw === "number") return `${Number(raw.toPrecision(6))}${unit ? " " + unit : ""}`;
-    if (typeof raw === "string" && v && "value" in v) return `${raw} = ${Number(v.value.toPrecision(5))}${unit ? " " + unit : ""}`;
+    if (typeof raw === "number") return `${Number(raw.toPrecision(6))}${unit ? " " + unit : ""}${inUs(raw, kind)}`;
+    if (typeof raw === "string" && v && "value" in v) return `${raw} = ${Number(v.value.toPrecision(5))}${unit ? " " + unit : ""}${inUs(v.value, kind)}`;
     return String(raw);
+  };
+  const coord = (raw: unknown, path: string): number => {
+    const v = parsed.fields[path];
+    return typeof raw === "number" ? raw : v && "value" in v ? v.value : Number.NaN;
   };
   const point = (raw: unknown, path: string): string => {
     const pt = raw as unknown[];
-    return `(${show(pt[0], `${path}[0]`, "")}, ${show(pt[1], `${path}[1]`, "")}) m`;
+    const us = system === "US" ? ` = (${[0, 1].map((i) => formatNumber(convert(coord(pt[i], `${path}[${i}]`), "length", "US", "ft").value, 4)).join(", ")}) ft` : "";
+    return `(${show(pt[0], `${path}[0]`, "")}, ${show(pt[1], `${path}[1]`, "")}) m${us}`;
   };
   for (const g of groups) {
     (parsed.file[g] as Array<Record<string, unknown>>).forEach((el, i) => {
@@ -450,7 +458,7 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
       for (const [k, raw] of Object.entries(el)) {
         if (["id", "label", "body", "kind"].includes(k)) continue;
         const path = `${g}[${i}].${k}`;
-        if (k === "outline") parts.push(`outline ${(raw as unknown[]).map((p, j) => point(p, `${path}[${j}]`).replace(/ m$/, "")).join(" ")} m`);
+        if (k === "outline") parts.push(`outline ${(raw as unknown[]).map((p, j) => point(p, `${path}[${j}]`).replace(/ m( = .*)?$/, "")).join(" ")} m`);
         else if (Array.isArray(raw)) parts.push(`${k} ${point(raw, path)}`);
         else parts.push(`${k} ${show(raw, path, k)}`);
       }
@@ -465,7 +473,7 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
   rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (${acts}${typed})`]);
   return {
     id: "inputs",
-    title: "Elements (as typed; expressions with their values in SI units, angles in degrees)",
+    title: system === "US" ? "Elements (as typed; expressions with their values in SI units, US customary in brackets, angles in degrees)" : "Elements (as typed; expressions with their values in SI units, angles in degrees)",
     columns: [
       { key: "id", label: "Id", align: "left" },
       { key: "kind", label: "Kind", align: "left" },
@@ -476,6 +484,9 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>): Table {
     rows,
   };
 }
+
+/** The field kinds that have US customary units to show beside the SI value. */
+const US_QUANTITY: Readonly<Record<string, true>> = { length: true, mass: true, force: true, moment: true, lineLoad: true, massFlow: true, velocity: true, pressure: true, area: true, density: true, volumeFlow: true, stiffness: true, acceleration: true };
 
 /** CSV of a table: a header with units, numbers unformatted (6 significant figures). */
 export function tableToCsv(t: Table, unparse: (rows: unknown[][]) => string): string {

@@ -132,7 +132,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // ---- inputs
   heading("Inputs");
   if (Object.keys(parsed.parameterValues).length) drawTable(doc, parametersTable(parsed), left, width);
-  drawTable(doc, inputsTable(parsed), left, width);
+  drawTable(doc, inputsTable(parsed, units), left, width);
 
   // ---- cases
   if (parsed.file.cases?.length || parsed.file.combinations?.length) {

@@ -92,6 +92,18 @@ describe("result tables", () => {
     const params = parametersTable(p);
     expect(params.rows.find((r) => r[0] === "p1")).toEqual(["p1", "600 kPa", "600 kPa"]);
   });
+
+  it("a US sheet's inputs give the US customary value beside the SI one", () => {
+    // 600 kPa / 6894.757 Pa/psi = 87.02 psi; 0.3 m / 0.3048 m/ft = 0.9843 ft (NIST SP 811)
+    const t = inputsTable(parsedFixture("pipe-bend-anchor.json"), "US");
+    const inlet = t.rows.find((r) => r[0] === "in")!;
+    expect(inlet[4]).toContain("pressure p1 = 600000 Pa (87.02 psi)");
+    const out = t.rows.find((r) => r[0] === "out")!;
+    expect(out[4]).toContain("at (0.6 * cos(theta) = 0.3, 0.6 * sin(theta) = 0.51962) m = (0.9843, 1.705) ft");
+    expect(t.title).toMatch(/US customary in brackets/);
+    // angles stay in degrees, with no second value
+    expect(out[4]).toContain("angle theta = 60 °;");
+  });
 });
 
 describe("one unit per table, chosen by its largest value", () => {
