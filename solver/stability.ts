@@ -52,6 +52,7 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
   if (contacts.length === 0) return { notApplicable: "no contacts to tip about" };
   let best: OverturningCheck | null = null;
   let blockedBy = "";
+  let free = false;
   for (const g of contacts) {
     const s = supports[g.support];
     const P = s.at;
@@ -75,6 +76,7 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
         }
       }
       if (!valid) continue;
+      free = true;
       let restoring = 0;
       let overturning = 0;
       const add = (work: number) => (work > 0 ? (overturning += work) : (restoring -= work));
@@ -106,7 +108,9 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
     }
   }
   if (best) return best;
-  return { notApplicable: blockedBy ? `tipping is prevented by support ${blockedBy}` : "no load tends to tip it" };
+  // a body free to tip about some contact, with no load tending to: say that, not which support
+  // blocks the other ways it could turn
+  return { notApplicable: blockedBy && !free ? `tipping is prevented by support ${blockedBy}` : "no load tends to tip it" };
 }
 
 export function slidingCheck(model: BodyModel, reactions: Record<string, Reaction>, required: number): BodyStability["sliding"] {

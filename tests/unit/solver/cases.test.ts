@@ -195,6 +195,14 @@ describe("stability factors (common practice)", () => {
     expect(run.stability.stand.sliding).toEqual({ notApplicable: "sliding is resisted by pin front" });
     expect(run.stability.stand.overturning).toEqual({ notApplicable: "tipping is prevented by support front" });
   });
+
+  it("a body on contacts under its weight alone: nothing tends to tip it (a contact that only pushes prevents nothing)", () => {
+    const file = loadFixture("fire-monitor-trailer.json");
+    file.cases = [{ id: "dead", name: "Dead", factors: { flow: 0, loads: 0 } }];
+    const run = solveCases(fileOf(file)).runs[0];
+    if (!run.ok) throw new Error();
+    expect(run.stability.trailer.overturning).toEqual({ notApplicable: "no load tends to tip it" });
+  });
 });
 
 describe("the flow factor in the limit finder", () => {
