@@ -206,7 +206,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         id: p.id,
         body: body.id,
         kind: "momentum",
-        label: tag(`momentum ${p.kind === "outlet" ? "out" : "in"} at ${pname}${beta === 1 ? "" : ` (β = ${Number(beta.toPrecision(4))})`}`, fp),
+        label: tag(`${p.kind === "outlet" ? "momentum out" : "− momentum in"} at ${pname}${beta === 1 ? "" : ` (β = ${Number(beta.toPrecision(4))})`}`, fp),
         fx,
         fy,
         m: 0,

@@ -58,6 +58,15 @@ describe("result tables", () => {
     expect(t.rows.some((row) => row[1] === "momentum out at discharge")).toBe(true);
   });
 
+  it("an inlet's term reads as what it is on the right-hand side: minus the momentum in", () => {
+    // ΣF = Σ(ṁV)out − Σ(ṁV)in (the momentum equation of a control volume, common practice): the
+    // inlet's row is −ṁV along its flow, here the bend's inlet flowing +x
+    const r = solve(parsedFixture("pipe-bend-anchor.json").sketch);
+    const row = handCheckTable(r, "bend", [0, 0], "SI").rows.find((x) => String(x[1]).startsWith("− momentum in at"))!;
+    expect(row).toBeDefined();
+    expect(row[2] as number).toBeLessThan(0);
+  });
+
   it("case, envelope and stability tables, and CSV with units in the header", () => {
     const doc = loadFixture("fire-monitor-trailer.json");
     doc.cases = [
