@@ -63,10 +63,14 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     if (!r || !body) continue;
     const at = px((item as Extract<SceneItem, { at: Vec2 }>).at, s);
     if (!finite(at)) continue;
-    const R = Math.hypot(r.fx, r.fy);
     const impossible = (r.state === "lifted" || r.state === "slack") && (body.status === "tips" || body.status === "unrestrained");
+    // the pull (or push) a contact or tie would need is drawn as its normal force alone: the
+    // friction a lifted contact would also need is not what "would have to pull" measures
+    const angle = (item as { angle?: number }).angle;
+    const [fx, fy] = impossible && r.n !== undefined && angle !== undefined && Number.isFinite(angle) ? [r.n * Math.cos((angle * Math.PI) / 180), r.n * Math.sin((angle * Math.PI) / 180)] : [r.fx, r.fy];
+    const R = Math.hypot(fx, fy);
     if (R > 1e-9 * Math.max(maxR, 1)) {
-      const u = unit([r.fx, -r.fy]);
+      const u = unit([fx, -fy]);
       const g = dir(groundSideOf(item, bodyOf(item.body)));
       const L = 26 + 50 * (R / (maxR || R));
       const off = item.kind === "tie" ? 10 : 25;

@@ -10,6 +10,7 @@ import { textBox } from "@/canvas/render/labels";
 import { scenePrims } from "@/canvas/render/scenePrims";
 import { buildScene, fieldValuesById } from "@/canvas/scene";
 import { parseSketch } from "@/solver/index";
+import { CAUTION } from "@/canvas/render/palette";
 
 const overlap = (a: ReturnType<typeof textBox>, b: ReturnType<typeof textBox>) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
 
@@ -238,3 +239,37 @@ describe("element labels keep off other texts", () => {
   });
 });
 
+
+describe("a contact that would have to pull", () => {
+  it("is drawn as the normal force it would need, along its line, not with the friction it would also need", () => {
+    // an 80 kg cart on two friction pads, a 20 kg/s jet out at 40 m/s level at its top: it tips
+    // about the left pad, and the right pad would have to pull (demo data)
+    const doc = {
+      format: "counterpoise.sketch",
+      version: 1,
+      bodies: [{ id: "cart", outline: [[0, 0], [2, 0], [2, 1.2], [0, 1.2]], mass: 80 }],
+      supports: [
+        { id: "s1", body: "cart", kind: "contact", at: [0.2, 0], angle: 90, mu: 0.6 },
+        { id: "s2", body: "cart", kind: "contact", at: [1.8, 0], angle: 90, mu: 0.6 },
+      ],
+      loads: [],
+      ports: [
+        { id: "jet", body: "cart", kind: "outlet", at: [2, 1], angle: 0, massFlow: 20, velocity: 40 },
+        { id: "hose", body: "cart", kind: "inlet", at: [1, 1.2], angle: -90, massFlow: 20, velocity: 5 },
+      ],
+      massSources: [],
+    };
+    const parsed = parseSketch(doc);
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+    const result = solveFile(doc) as SolveResult;
+    expect(result.bodies.cart.status).toBe("tips");
+    expect(Math.abs(result.reactions.s2.t ?? 0)).toBeGreaterThan(Math.abs(result.reactions.s2.n ?? 0)); // mostly friction, as a whole
+    const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+    const { results } = scenePrims(scene, 100, "SI", result);
+    // the dashed double arrow: both its lines run straight up or down the page (the pad's normal)
+    const dashed = results.filter((p) => p.t === "poly" && p.pts.length === 2 && p.dash && p.stroke === CAUTION);
+    expect(dashed.length).toBeGreaterThanOrEqual(2);
+    for (const p of dashed) if (p.t === "poly") expect(Math.abs(p.pts[1][0] - p.pts[0][0])).toBeLessThan(1e-6);
+    expect(results.some((p) => p.t === "text" && /^would have to pull \d/.test(p.text))).toBe(true);
+  });
+});
