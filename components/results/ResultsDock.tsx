@@ -42,7 +42,7 @@ function Resizer({ height, onChange }: { height: number; onChange: (h: number | 
       onPointerDown={(e) => {
         e.preventDefault();
         const el = e.currentTarget;
-        el.setPointerCapture(e.pointerId);
+        el.setPointerCapture?.(e.pointerId);
         const y0 = e.clientY;
         const h0 = height;
         const move = (ev: PointerEvent) => onChange(clamp(h0 + (y0 - ev.clientY)));
