@@ -72,7 +72,7 @@ export function shapeProblem(n: MathNode): string | null {
     const value = (n as unknown as { value: unknown }).value;
     if (typeof value === "string") return `the text ${n.toString()} is not a number`;
     if (typeof value !== "number") return `"${n.toString()}" is not a number`;
-    if (!Number.isFinite(value)) return `"${n.toString()}" is not a finite number`;
+    if (!Number.isFinite(value)) return `"${n.toString()}" is not a finite number${n.toString().endsWith("Infinity") ? " (a number beyond ±1.8e308, such as 1e400, reads as Infinity)" : ""}`;
   }
   return null;
 }
