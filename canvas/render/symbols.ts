@@ -152,7 +152,7 @@ function loadPrims(item: Extract<SceneItem, { kind: "force" | "couple" | "distri
     return [...solidArrow(tail, [0, 0], c, 1.9, 11), ...labelAt(add(tail, mul(d, -4)), mul(d, -1), [q(Math.abs(item.magnitude), "force", o.units)], c, 11, { weight: 600 })];
   }
   if (item.kind === "couple") {
-    return [...curvedArrow([0, 0], 15, item.value >= 0, c), { t: "circle", c: [0, 0], r: 2, fill: c }, ...labelAt([14, -20], [1, -1], [q(Math.abs(item.value), "moment", o.units)], c, 11, { weight: 600 })];
+    return [...curvedArrow([0, 0], 15, item.value >= 0, c), { t: "circle", c: [0, 0], r: 2, fill: c }, ...labelAt([14, -20], [1, -1], [`${q(Math.abs(item.value), "moment", o.units)} ${item.value >= 0 ? "↺" : "↻"}`], c, 11, { weight: 600 })];
   }
   // distributed, local to `from`
   const T: Pt = [(item.to[0] - item.from[0]) * o.scale, -(item.to[1] - item.from[1]) * o.scale];

@@ -273,3 +273,20 @@ describe("a contact that would have to pull", () => {
     expect(results.some((p) => p.t === "text" && /^would have to pull \d/.test(p.text))).toBe(true);
   });
 });
+
+describe("a couple's label", () => {
+  it("gives its sense with the magnitude, as a fixed support's moment does (↺ counter-clockwise, ↻ clockwise)", () => {
+    const doc = (value: string) => ({
+      format: "counterpoise.sketch",
+      version: 1,
+      bodies: [{ id: "b", outline: [[0, 0], [2, 0], [2, 0.4], [0, 0.4]], mass: 0 }],
+      supports: [{ id: "f", body: "b", kind: "fixed", at: [0, 0.2] }],
+      loads: [{ id: "c", body: "b", kind: "couple", at: [1, 0.2], value }],
+      ports: [],
+      massSources: [],
+    });
+    const labels = (value: string) => [...parse(renderSketchSvg(doc(value), null)).querySelectorAll(`[data-id="c"] text`)].map((t) => t.textContent);
+    expect(labels("-500 N*m")).toContain("500 N·m ↻");
+    expect(labels("500 N*m")).toContain("500 N·m ↺");
+  });
+});
