@@ -26,7 +26,20 @@ const KINDS: Array<[FieldKind, Quantity]> = [
 export function readableValue(value: number, unit: string, units: UnitSystem): string {
   if (!unit) return formatNumber(value);
   const plain = /^[A-Za-z]+(\^[23])?(\s*\/\s*[A-Za-z]+(\^[23])?)?$/.test(unit);
-  if (plain) return `${formatNumber(value)} ${prettyUnit(unit)}`;
+  if (plain) {
+    // as typed ("6 in"), and in the units on screen when they differ ("6 in (0.1524 m)"); angles read the same in both
+    const typed = `${formatNumber(value)} ${prettyUnit(unit)}`;
+    for (const [kind, q] of KINDS) {
+      if (kind === "angle") continue;
+      try {
+        const shown = formatQuantity(evaluateToNumber(`${value} * (${unit})`, kind), q, units);
+        return shown.replace(/\s+/g, " ") === typed.replace(/\s+/g, " ") ? typed : `${typed} (${shown})`;
+      } catch {
+        // not this dimension
+      }
+    }
+    return typed;
+  }
   for (const [kind, q] of KINDS) {
     try {
       const si = evaluateToNumber(`${value} * (${unit})`, kind);

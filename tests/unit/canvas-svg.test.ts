@@ -285,7 +285,7 @@ describe("a couple's label", () => {
       ports: [],
       massSources: [],
     });
-    const labels = (value: string) => [...parse(renderSketchSvg(doc(value), null)).querySelectorAll(`[data-id="c"] text`)].map((t) => t.textContent);
+    const labels = (value: string) => [...parse(renderSketchSvg(doc(value) as unknown as Parameters<typeof renderSketchSvg>[0], null)).querySelectorAll(`[data-id="c"] text`)].map((t) => t.textContent);
     expect(labels("-500 N*m")).toContain("500 N·m ↻");
     expect(labels("500 N*m")).toContain("500 N·m ↺");
   });
