@@ -95,13 +95,16 @@ describe("parameters table", () => {
     expect(table.getByLabelText("Expression of parameter F")).toHaveValue("p * pi/4 * d^2");
     const rows = table.getAllByRole("row").slice(1);
     const valueOf = (name: string) => rows.find((r) => within(r).queryByLabelText(`Name of parameter ${name}`))!.querySelectorAll("td")[2].textContent;
-    expect(valueOf("p")).toBe("350 psi");
+    // as typed, and in SI beside it: 350 × 6894.757 Pa = 2.413 MPa (NIST SP 811)
+    expect(valueOf("p")).toBe("350 psi (2.413 MPa)");
     // 350 psi × π/4 × (0.05 m)² = 2413.165 kPa × 1.9635e-3 m² = 4.738 kN (1 psi = 6894.757 Pa, NIST SP 811)
     expect(valueOf("F")).toBe("4.738 kN");
     const user = userEvent.setup();
     await user.click(within(screen.getByTestId("units")).getByRole("radio", { name: "US" }));
     // 4738.3 N / 4.4482216 N/lbf = 1065 lbf (NIST SP 811)
     expect(valueOf("F")).toMatch(/^1,?065 lbf$/);
+    expect(valueOf("p")).toBe("350 psi");
+    expect(valueOf("d")).toBe("50 mm (0.164 ft)");
   });
 
   it("shows an expression's error in the value column, and refuses a bad or taken name with its reason", async () => {
