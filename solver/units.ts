@@ -82,19 +82,23 @@ export function convert(valueSI: number, q: Quantity, system: UnitSystem, unit?:
   return { value: valueSI / scale.factor, unit: scale.unit };
 }
 
-/** A number with 3–4 significant figures: 4 below 10 000 units, grouped thousands above. */
-export function formatNumber(x: number, sig = 4): string {
+/** A number with 3–4 significant figures: 4 below 10 000 units, grouped thousands above.
+ *  Prose drops trailing zeros ("2.4 kN"); a table column keeps them (`keepZeros`: "2.400", "11.50"),
+ *  so every figure shown is significant (small values below 10^−sig keep their short form). */
+export function formatNumber(x: number, sig = 4, opts: { keepZeros?: boolean } = {}): string {
   if (!Number.isFinite(x)) return x > 0 ? "∞" : x < 0 ? "−∞" : "—";
   if (x === 0 || Math.abs(x) < 1e-12) return "0";
   const abs = Math.abs(x);
   let s: string;
   if (abs >= 1000) {
     const digits = Math.max(0, sig - 1 - Math.floor(Math.log10(abs)));
-    s = x.toLocaleString("en-US", { maximumFractionDigits: digits, minimumFractionDigits: 0 });
+    s = x.toLocaleString("en-US", { maximumFractionDigits: digits, minimumFractionDigits: opts.keepZeros ? digits : 0 });
   } else {
     const digits = Math.max(0, sig - 1 - Math.floor(Math.log10(abs)));
     s = x.toFixed(Math.min(digits, 12));
-    if (s.includes(".")) s = s.replace(/0+$/, "").replace(/\.$/, "");
+    // a table keeps its trailing zeros, except on a small value whose figures start past the
+    // `sig`-th decimal: padding "−0.00004" to "−0.00004000" would only widen the column
+    if (s.includes(".") && !(opts.keepZeros && digits <= sig)) s = s.replace(/0+$/, "").replace(/\.$/, "");
   }
   return s.replace(/^-/, "−");
 }

@@ -24,7 +24,7 @@ export function parseLength(text: string, units: UnitSystem): number {
 }
 
 function fmt(v: number, key: "fx" | "fy" | "m", units: UnitSystem, unit: string): string {
-  return `${formatNumber(convert(v, key === "m" ? "moment" : "force", units, unit).value, 4)} ${unit}`;
+  return `${formatNumber(convert(v, key === "m" ? "moment" : "force", units, unit).value, 4, { keepZeros: true })} ${unit}`;
 }
 
 function Block({ b, units, unit }: { b: HandCheckBlock; units: UnitSystem; unit: string }) {

@@ -68,7 +68,7 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
                   const col = table.columns[i];
                   let text: string;
                   if (i === 0) text = label || id;
-                                    else if (typeof cell === "number") text = col.key === "angle" ? `${formatNumber(cell, 4)}` : formatNumber(cell, 4);
+                                    else if (typeof cell === "number") text = formatNumber(cell, 4, { keepZeros: true });
                   else text = cell === null ? "—" : String(cell);
                   const warn = col.key === "state" && text !== "bearing" && text !== "holds" && text !== "taut";
                   return (

@@ -71,7 +71,7 @@ export function ReportTable({
                           {cellMark.symbol}
                         </span>
                       )}
-                      {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4) : cell}
+                      {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4, { keepZeros: true }) : cell}
                       {extra}
                     </td>
                   );

@@ -79,7 +79,7 @@ export function words(text: string): string[] {
 
 function cellText(c: Table["rows"][number][number]): string {
   if (c === null || c === undefined) return "—";
-  if (typeof c === "number") return formatNumber(c, 4);
+  if (typeof c === "number") return formatNumber(c, 4, { keepZeros: true });
   return c;
 }
 

@@ -96,14 +96,14 @@ describe("the unit of the results follows their size", () => {
     // ΣFy: the load −60 N and the weight −10 kg × 9.80665 = −98.07 N, the pin and the pad half of it each
     // (loads at mid-span: statics, common practice); ΣM about the pin: the pad (60 + 98.07)/2 = 79.03 N × 4 m = 316.1 N·m
     const fy = screen.getByTestId("hand-fy");
-    expect(fy).toHaveTextContent("−60 N");
+    expect(fy).toHaveTextContent("−60.00 N");
     expect(fy).toHaveTextContent("−98.07 N");
     expect(screen.getByTestId("hand-m")).toHaveTextContent("316.1 N·m");
     expect(fy).not.toHaveTextContent("kN");
     expect(screen.getByTestId("hand-m")).toHaveTextContent(/N·m/);
     expect(screen.getByTestId("hand-m")).not.toHaveTextContent("kN·m");
     act(() => void editor.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "10 kN" }))));
-    expect(screen.getByTestId("hand-fy")).toHaveTextContent("−10 kN");
+    expect(screen.getByTestId("hand-fy")).toHaveTextContent("−10.00 kN");
   });
 });
 

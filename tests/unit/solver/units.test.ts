@@ -36,4 +36,17 @@ describe("formatQuantity", () => {
     expect(formatNumber(-1.5)).toBe("−1.5");
     expect(formatNumber(Infinity)).toBe("∞");
   });
+
+  it("keeps trailing zeros for table columns, so every figure shown is significant", () => {
+    // Significant figures: a trailing zero after the point is significant (common practice).
+    expect(formatNumber(11.5, 4, { keepZeros: true })).toBe("11.50");
+    expect(formatNumber(2.4, 4, { keepZeros: true })).toBe("2.400");
+    expect(formatNumber(-0.31, 4, { keepZeros: true })).toBe("−0.3100");
+    expect(formatNumber(1039.2, 4, { keepZeros: true })).toBe("1,039");
+    expect(formatNumber(1500, 5, { keepZeros: true })).toBe("1,500.0");
+    expect(formatNumber(0, 4, { keepZeros: true })).toBe("0");
+    expect(formatNumber(0.0310, 4, { keepZeros: true })).toBe("0.031");
+    expect(formatNumber(-0.00004, 4, { keepZeros: true })).toBe("−0.00004");
+    expect(formatNumber(11.5)).toBe("11.5");
+  });
 });
