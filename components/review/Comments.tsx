@@ -145,11 +145,11 @@ function ThreadView({ t, n, labels, data, viewerId, selected, onSelect, m }: { t
   const [replying, setReplying] = useState(false);
   const ref = useRef<HTMLElement>(null);
   useEffect(() => {
-    if (selected) ref.current?.scrollIntoView({ block: "nearest", behavior: "smooth" });
+    if (selected) ref.current?.scrollIntoView({ block: "center", behavior: "smooth" });
   }, [selected]);
   const writable = !data.locked && data.canComment;
   return (
-    <article ref={ref} onClick={onSelect} data-testid={`thread-${n}`} data-selected={selected || undefined} className={`space-y-2 rounded-md border p-3 ${selected ? "border-accent bg-accent-soft/20" : "border-rule bg-paper-card"} ${t.resolvedAt ? "opacity-75" : ""}`}>
+    <article ref={ref} id={`thread-${t.id}`} onClick={onSelect} data-testid={`thread-${n}`} data-selected={selected || undefined} className={`space-y-2 rounded-md border p-3 ${selected ? "border-accent bg-accent-soft/20" : "border-rule bg-paper-card"} ${t.resolvedAt ? "opacity-75" : ""}`}>
       <header className="flex items-center justify-between gap-2 text-xs">
         <span className="flex items-center gap-1.5 font-semibold text-ink">
           <span className={`inline-flex h-5 min-w-5 items-center justify-center rounded-full px-1 text-[11px] ${t.resolvedAt ? "bg-rule-soft text-ink-soft" : "bg-ink text-paper"}`}>{t.resolvedAt ? `✓${n}` : n}</span>

@@ -1,6 +1,7 @@
 "use client";
-// One version under review: its drawing with comment pins, its reactions, the sign-off with
-// the title block, and the comment threads.
+// One version under review: its drawing with comment pins, its reactions (and, when it has
+// operating cases, their tables and envelope), the sign-off with the title block, and the comment
+// threads. A link to "#thread-<id>" (the mention mail's) opens that thread.
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useMemo, useState } from "react";
@@ -14,6 +15,8 @@ import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import { stateWord } from "@/solver/report";
+import { parseSketch, solveCases } from "@/solver";
+import { CaseTables } from "@/components/studies/CaseTables";
 import { versionConcerns } from "./concerns";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { CommentsPanel, type CommentsData } from "./Comments";
@@ -57,6 +60,28 @@ function Reactions({ document, units }: { document: SketchFile; units: UnitSyste
   );
 }
 
+/** The version's operating cases and combinations, all solved, as the editor's Cases tab shows them. */
+export function VersionCases({ document, units }: { document: SketchFile; units: UnitSystem }) {
+  const study = useMemo(() => {
+    const parsed = parseSketch(document);
+    if (!parsed.ok || !(parsed.file.cases?.length || parsed.file.combinations?.length)) return null;
+    return solveCases(parsed.file);
+  }, [document]);
+  if (!study) return null;
+  const n = study.runs.length;
+  return (
+    <section aria-label="Operating cases" className="space-y-2 pt-2" data-testid="version-cases">
+      <h2 className="text-base font-semibold">Operating cases</h2>
+      <p className="text-xs text-ink-soft">
+        {n} {n === 1 ? "run" : "runs"} (cases and combinations, each solved as its own load set), as saved in this version.
+      </p>
+      <CaseTables result={study} units={units} />
+    </section>
+  );
+}
+
+const THREAD_HASH = /^#thread-([\w-]+)$/;
+
 export function VersionReview({ workspaceId, sketchId, sketchTitle, number, latest, viewerId }: { workspaceId: string; sketchId: string; sketchTitle: string; number: number; latest: number; viewerId: string }) {
   const base = `/api/sketches/${sketchId}/versions/${number}`;
   const qc = useQueryClient();
@@ -66,7 +91,13 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   const [units, setUnits] = useUnitsPreference();
   const [pin, setPin] = useState<PickedPin | null>(null);
   const [picking, setPicking] = useState(false);
-  const [selected, setSelected] = useState<string | null>(null);
+  // the selected thread is in the address, so a link opens it (the mention mail's does); the
+  // threads come from the client's query, so the first render on the server shows none
+  const [selected, setSelectedState] = useState<string | null>(() => (typeof window === "undefined" ? null : (THREAD_HASH.exec(window.location.hash)?.[1] ?? null)));
+  const setSelected = (id: string | null) => {
+    setSelectedState(id);
+    window.history.replaceState(window.history.state, "", id ? `#thread-${id}` : window.location.pathname + window.location.search);
+  };
   const doc = version.data?.version.document;
   const labels = useMemo(() => {
     const out: Record<string, string> = {};
@@ -161,6 +192,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             <span className="font-semibold text-caution">Caution:</span> {CAUTION_SHORT}
           </p>
           {doc ? <Reactions document={doc} units={units} /> : null}
+          {doc ? <VersionCases document={doc} units={units} /> : null}
         </div>
         <aside aria-label="Comments">
           <h2 className="mb-2 text-base font-semibold">Comments</h2>

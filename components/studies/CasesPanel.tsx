@@ -5,16 +5,14 @@
 // support's design load, and the factors of safety against overturning and sliding.
 import { useEffect, useMemo, useRef, useState } from "react";
 import { combinationWarnings, type StudyResult } from "@/solver/cases";
-import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, stabilityTable } from "@/solver/report";
 import type { CaseFile, CombinationFile } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import { useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
-import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms } from "./casesText";
-import { ReportTable } from "./ReportTable";
+import { CaseTables } from "./CaseTables";
 
 /** A text field that commits a parsed value on blur or Enter and shows its error at the field. */
 function TextCell({ label, value, parse, onCommit, placeholder, width }: {
@@ -109,7 +107,6 @@ export function CasesPanel() {
   };
 
   const staleResult = study && study.of !== sketch;
-  const nameOf = (id: string) => study?.result.runs.find((r) => r.id === id)?.name ?? id;
 
   return (
     <div className="@container" data-testid="cases-panel">
@@ -236,40 +233,7 @@ export function CasesPanel() {
         ) : (
           <div className={staleResult ? "opacity-60" : ""} data-testid="case-results">
             {staleResult && <p className="mb-1 text-[12px] font-medium text-caution">The sketch changed since this run: run the cases again.</p>}
-            {study.result.runs.filter((r) => !r.ok).map((r) => (
-              <p key={r.id} className="text-[12px] text-caution" role="alert">
-                {r.name} could not be solved: {!r.ok && r.errors.map((e) => `${e.path} ${e.message}`).join("; ")}
-              </p>
-            ))}
-            {excludedWords(study.result).map((w) => (
-              <p key={w} className="mb-1 text-[12px] font-medium text-caution" data-testid="not-in-envelope">
-                <span aria-hidden="true">⚠ </span>
-                {w}
-              </p>
-            ))}
-            <ReportTable
-              table={withoutAbsentMoment(caseReactionTable(study.result, units), study.result)}
-              fileName="reactions-per-case"
-              testId="case-reactions"
-              caption="▲ / ▼ beside a value: this case governs that component (largest magnitude; ▲ its maximum, ▼ its minimum). “design load”: the case of the support's largest resultant."
-            />
-            <div className="mt-3">
-              <ReportTable table={withoutAbsentMoment(envelopeTable(study.result, units), study.result)} fileName="envelope" testId="envelope" />
-            </div>
-            <div className="mt-3">
-              <ReportTable table={withoutAbsentMoment(designLoadTable(study.result, units), study.result)} fileName="design-loads" testId="design-loads" />
-            </div>
-            <div className="mt-3">
-              <ReportTable
-                table={stabilityTable(study.result, units)}
-                fileName="factors-of-safety"
-                testId="stability"
-                mark={(row, key) => (key === "verdict" && row[8] === "FAIL" ? <span className="ml-1 font-semibold text-caution">(below {row[7]})</span> : null)}
-              />
-            </div>
-            <p className="mt-2 text-[11.5px] text-ink-faint">
-              Design load from — {Object.entries(study.result.envelope).map(([id, e]) => `${id}: ${nameOf(e.design.case)}`).join(" · ")}
-            </p>
+            <CaseTables result={study.result} units={units} />
           </div>
         )}
       </div>

@@ -59,9 +59,10 @@ export async function readComments(sketchId: string, number: number, viewerId: s
   };
 }
 
-async function mailMentions(ids: string[], actor: Actor, where: { workspaceId: string; sketchId: string; sketchTitle: string; number: number }, text: string) {
+/** Mail each member mentioned (notifications on), with a link that opens the comment's thread. */
+async function mailMentions(ids: string[], actor: Actor, where: { workspaceId: string; sketchId: string; sketchTitle: string; number: number; threadId: string }, text: string) {
   const targets = (await workspaceContacts(where.workspaceId, db, ids)).filter((c) => c.id !== actor.id && c.emailNotifications);
-  const url = versionUrl(where.workspaceId, where.sketchId, where.number);
+  const url = `${versionUrl(where.workspaceId, where.sketchId, where.number)}#thread-${where.threadId}`;
   for (const c of targets) sendMailInBackground(mentionMail({ to: c.email, name: c.name, actorName: actor.name, sketchTitle: where.sketchTitle, number: where.number, text, url }));
 }
 
@@ -104,9 +105,9 @@ export async function addComment(sketchId: string, number: number, actor: Actor,
       },
       tx,
     );
-    return { access, row, mentions };
+    return { access, row, mentions, threadId: parentId ?? row.id };
   });
-  await mailMentions(made.mentions, actor, { workspaceId: made.access.workspaceId, sketchId, sketchTitle: made.access.sketchTitle, number }, input.body);
+  await mailMentions(made.mentions, actor, { workspaceId: made.access.workspaceId, sketchId, sketchTitle: made.access.sketchTitle, number, threadId: made.threadId }, input.body);
   return { id: made.row.id, createdAt: made.row.createdAt, mentions: made.mentions };
 }
 
@@ -150,7 +151,7 @@ export async function editComment(commentId: string, actor: Actor, body: string)
     await recordChange(tx, "comment.edit", c, actor, body);
     return { c, added: mentions.filter((id) => !c.mentions.includes(id)) };
   });
-  await mailMentions(out.added, actor, { workspaceId: out.c.workspaceId, sketchId: out.c.sketchId, sketchTitle: out.c.sketchTitle, number: out.c.number }, body);
+  await mailMentions(out.added, actor, { workspaceId: out.c.workspaceId, sketchId: out.c.sketchId, sketchTitle: out.c.sketchTitle, number: out.c.number, threadId: out.c.parentId ?? out.c.id }, body);
   return { id: commentId, edited: true };
 }
 

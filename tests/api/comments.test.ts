@@ -185,7 +185,8 @@ describe("mentions", () => {
     const toEddie = await waitForMail(eddie.email, { subject: /mentioned you on v1 of "Skid for comments"/, after: before });
     expect(toEddie.subject).toBe('Chen Checkwell mentioned you on v1 of "Skid for comments"');
     expect(toEddie.text).toContain("please check the suction pressure");
-    expect(toEddie.text).toContain(`/workspaces/${ws}/sketches/${id}/versions/1`);
+    // the link opens the comment's own thread on the version page
+    expect(toEddie.text).toContain(`/workspaces/${ws}/sketches/${id}/versions/1#thread-${made.body.comment.id}`);
     await waitForMail(olivia.email, { subject: /mentioned you/, after: before });
     await new Promise((r) => setTimeout(r, 500));
     const rest = await db.select({ to: devMail.to }).from(devMail);

@@ -182,7 +182,15 @@ describe("review of a calculation in the browser", () => {
       if (Date.now() > deadline) throw new Error("no mention mail for the owner");
       await page.waitForTimeout(400);
     }
-    expect(await page.locator("pre").textContent()).toContain("Rear foot friction: is μ = 0.4 right on a wet slab?");
+    const mail = (await page.locator("pre").textContent()) ?? "";
+    expect(mail).toContain("Rear foot friction: is μ = 0.4 right on a wet slab?");
     await shot(page, "review-07-mention-mail");
+    // the mail's link opens the version with that thread selected
+    const url = /https?:\/\/\S+\/versions\/2#thread-[\w-]+/.exec(mail)?.[0];
+    if (!url) throw new Error(`no thread link in the mail: ${mail}`);
+    await page.goto(url.replace(/^https?:\/\/[^/]+/, BASE_URL));
+    const selected = page.locator("article[data-selected]");
+    await selected.waitFor();
+    expect(await selected.textContent()).toContain("Rear foot friction");
   });
 });

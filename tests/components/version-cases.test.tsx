@@ -1,0 +1,34 @@
+// A version's review page shows its operating cases as the editor's Cases tab does: every case's
+// reactions with the governing case marked, the envelope and the design loads.
+import { render, screen, within } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { VersionCases } from "@/components/review/VersionReview";
+import washingCart from "@/canvas/examples/washing-cart.json";
+import type { SketchFile } from "@/solver/schema";
+
+const doc = washingCart as unknown as SketchFile;
+
+describe("the operating cases on a version's page", () => {
+  it("lists each case's reactions; parked, the wheels carry the cart's weight alone", () => {
+    render(<VersionCases document={doc} units="SI" />);
+    const section = screen.getByRole("region", { name: "Operating cases" });
+    const table = within(section).getByTestId("case-reactions");
+    for (const c of doc.cases!) expect(table).toHaveTextContent(c.name);
+    // pump off (flow factor 0): no jet, so the two wheels' Fy add up to the weight,
+    // 85 kg × 9.80665 m/s² = 833.6 N (statics, common practice; standard gravity: ISO 80000-3)
+    const parked = within(table).getAllByRole("row").filter((r) => r.textContent?.startsWith("Pump off (parked)"));
+    expect(parked).toHaveLength(2);
+    const fy = parked.map((r) => Number(r.querySelectorAll("td")[3].textContent!.replace("−", "-").replace(/[^\d.-]/g, "")));
+    const header = within(table).getAllByRole("columnheader").map((h) => h.textContent);
+    expect(header[3]).toMatch(/Fy.*\((k?N)\)/);
+    const inN = header[3]!.includes("(kN)") ? 1000 : 1;
+    expect((fy[0] + fy[1]) * inN).toBeCloseTo(85 * 9.80665, 0);
+    expect(within(section).getByTestId("envelope")).toHaveTextContent("rear");
+    expect(within(section).getByTestId("design-loads")).toHaveTextContent("front");
+  });
+
+  it("says nothing for a version without cases", () => {
+    const { container } = render(<VersionCases document={{ ...doc, cases: undefined, combinations: undefined } as SketchFile} units="SI" />);
+    expect(container).toBeEmptyDOMElement();
+  });
+});
