@@ -24,6 +24,10 @@ export interface SvgOptions {
   background?: "paper" | "none";
   /** a line of text under the drawing (e.g. the status sentence) */
   caption?: string;
+  /** a title and lines under it above the drawing (an exported drawing's title and status) */
+  heading?: { title: string; lines?: string[] };
+  /** a small line at the very bottom (an exported drawing's caution) */
+  note?: string;
   /** the legend of line styles under the drawing (default true when a result is drawn) */
   legend?: boolean;
   /**
@@ -121,16 +125,18 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
   const ga = parsed.fields?.gravityAngle;
   const turned = legend ? gravityNote(ga && "value" in ga ? ga.value : undefined) : null;
   const legendLines = !legend ? [] : !turned ? [key] : (key.length + turned.length + 3) * 6 <= width - 32 ? [`${key} · ${turned}`] : [key, turned];
-  const footer = (opts.caption ? 22 : 0) + (legendLines.length ? 22 + 15 * (legendLines.length - 1) : 0);
+  const footer = (opts.caption ? 22 : 0) + (legendLines.length ? 22 + 15 * (legendLines.length - 1) : 0) + (opts.note ? 18 : 0);
+  const headLines = opts.heading?.lines ?? [];
+  const top = opts.heading ? 40 + 18 * headLines.length : 0;
 
   // fit: world box → pixels, leaving room for symbols and labels that do not scale; then centre
   // what is actually drawn (labels included) — or use the shared frame as given
-  let scale = opts.frame ? opts.frame.scale : ownScale(scene, width, height - footer);
+  let scale = opts.frame ? opts.frame.scale : ownScale(scene, width, height - footer - top);
   let { groups, results } = scenePrims(scene, scale, units, result, opts.stale);
   if (!opts.frame) {
     // symbols and labels do not scale: when they reach past the edge, shrink the geometry by what
     // they overhang (once: the overhang barely changes with the scale)
-    const shrunk = fitOverhang(scene, scale, primsBox([...groups.flatMap((g) => g.prims), ...results]), width, height - footer);
+    const shrunk = fitOverhang(scene, scale, primsBox([...groups.flatMap((g) => g.prims), ...results]), width, height - footer - top);
     if (shrunk < scale) {
       scale = shrunk;
       ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale));
@@ -142,7 +148,7 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
   else {
     const box = primsBox([...groups.flatMap((g) => g.prims), ...results]);
     dx = Number.isFinite(box.minX) ? (width - (box.maxX - box.minX)) / 2 - box.minX : width / 2;
-    dy = Number.isFinite(box.minY) ? (height - footer - (box.maxY - box.minY)) / 2 - box.minY : height / 2;
+    dy = top + (Number.isFinite(box.minY) ? (height - footer - top - (box.maxY - box.minY)) / 2 - box.minY : (height - top) / 2);
   }
 
   const body = groups.map((g) => `<g data-id="${esc(g.id)}" data-kind="${g.kind}">${primsToSvg(g.prims)}</g>`).join("");
@@ -157,5 +163,11 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
     foot += `<text x="16" y="${y}" font-size="11" fill="${INK_FAINT}">${esc(line)}</text>`;
     y += 15;
   }
-  return `${head}${title}${bg}<g transform="translate(${n(dx)} ${n(dy)})">${body}${res}</g>${foot}</svg>`;
+  if (opts.note) foot += `<text x="16" y="${height - 8}" font-size="11" font-style="italic" fill="${INK_FAINT}" data-part="note">${esc(opts.note)}</text>`;
+  let heading = "";
+  if (opts.heading) {
+    heading = `<text x="16" y="28" font-size="18" font-weight="600" fill="#1d2329" data-part="heading">${esc(opts.heading.title)}</text>`;
+    headLines.forEach((line, i) => (heading += `<text x="16" y="${50 + 18 * i}" font-size="13" fill="#3d4650" data-part="heading-line">${esc(line)}</text>`));
+  }
+  return `${head}${title}${bg}${heading}<g transform="translate(${n(dx)} ${n(dy)})">${body}${res}</g>${foot}</svg>`;
 }

@@ -4,6 +4,8 @@ import { useCallback, useState, type RefObject } from "react";
 import type { EditorStores } from "@/canvas/context";
 import { download, exportSketchText, fileStem, importSketchText, svgToPng } from "@/canvas/files";
 import { renderSketchSvg } from "@/canvas/render/svg";
+import { statusSentences } from "@/components/results/statusSentence";
+import { CAUTION_SHORT } from "@/solver/cautions";
 import { replaceSketch } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
 import type { FieldError } from "@/solver/types";
@@ -45,10 +47,25 @@ export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputEl
     [importText, inputRef],
   );
 
+  // an exported drawing stands on its own in a report: its title, what the result says, the
+  // units and the date above it, the caution under it
   const svgNow = useCallback(() => {
     const s = stores.editor.getState();
     const a = stores.analysis.getState();
-    return renderSketchSvg(s.sketch, a.shown, { units: s.units, width: 1400, height: 900, stale: a.stale });
+    const said = a.shown && a.shownSketch ? statusSentences(a.shownSketch, a.shown, s.units).map((x) => x.headline) : [];
+    const lines = [
+      ...(a.stale ? ["Results are from before the last change: the sketch has an input error."] : []),
+      ...(said.length ? said : ["Not solved."]),
+      `${s.units === "SI" ? "SI units" : "US customary units"} · drawn ${new Date().toISOString().slice(0, 10)} with Counterpoise`,
+    ];
+    return renderSketchSvg(s.sketch, a.shown, {
+      units: s.units,
+      width: 1400,
+      height: 900,
+      stale: a.stale,
+      heading: { title: s.sketch.title || "Untitled sketch", lines },
+      note: `Caution: ${CAUTION_SHORT}`,
+    });
   }, [stores]);
 
   const stem = () => fileStem(stores.editor.getState().sketch.title);

@@ -94,6 +94,25 @@ describe("renderSketchSvg", () => {
     expect(stale).toMatch(/class="results"><[^>]+opacity="0.38"/);
   });
 
+  it("an exported drawing carries its title and lines above the drawing, and a caution at the bottom", () => {
+    const { sketch, result } = solved("pump-skid");
+    const lines = ["Holds — all supports within their limits", "SI units · drawn 2026-12-03"];
+    const svg = renderSketchSvg(sketch, result, { width: 1400, height: 900, heading: { title: "Skid P-101", lines }, note: "Caution: for design checking only." });
+    const doc = parse(svg);
+    expect(doc.querySelector('[data-part="heading"]')?.textContent).toBe("Skid P-101");
+    expect([...doc.querySelectorAll('[data-part="heading-line"]')].map((t) => t.textContent)).toEqual(lines);
+    const note = doc.querySelector('[data-part="note"]')!;
+    expect(note.textContent).toBe("Caution: for design checking only.");
+    // nothing of the drawing reaches up into the heading (its last line's baseline is at 68 px, so
+    // text drawn below 72 px is clear of it) or down onto the note
+    const group = doc.querySelector("svg > g[transform]")!;
+    const dy = Number(/translate\([-\d.]+ ([-\d.]+)\)/.exec(group.getAttribute("transform")!)![1]);
+    const ys = [...group.querySelectorAll("text")].map((t) => Number(t.getAttribute("y")) + dy);
+    expect(ys.length).toBeGreaterThan(5);
+    expect(Math.min(...ys)).toBeGreaterThan(72 + 8);
+    expect(Math.max(...ys)).toBeLessThan(Number(note.getAttribute("y")) - 12);
+  });
+
   it("reads any supported file (expressions, the lead's fixtures) and says when it cannot draw", () => {
     const fixture = JSON.parse(readFileSync("tests/fixtures/sketches/pipe-bend-anchor.json", "utf8"));
     const svg = renderSketchSvg(fixture, solveFile(fixture) as SolveResult);
