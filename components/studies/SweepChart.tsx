@@ -5,6 +5,7 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { describeQuantity } from "@/solver/quantity";
 import { formatNumber, type UnitSystem } from "@/solver/units";
+import { niceTicks } from "@/lib/ticks";
 import { displayKind, displayUnit, largestByKind, toDisplay } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 
@@ -44,12 +45,14 @@ export function SweepChart({ data, units, parameterLabel, limit, run }: { data: 
     const b = ys[i];
     return { ...c, x: c.between[0] + ((c.between[1] - c.between[0]) * a) / (a - b) };
   });
+  // round ticks across the swept range (recharts divides a data-bound domain evenly otherwise)
+  const xTicks = data.xs.length ? niceTicks(Math.min(...data.xs), Math.max(...data.xs), 6) : undefined;
   return (
     <figure className="h-56 w-full" data-testid="sweep-chart" data-run={run} aria-label={`Reactions and margins against ${parameterLabel}`}>
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={rows} margin={{ top: 6, right: 16, bottom: 4, left: 4 }}>
           <CartesianGrid stroke="#e2dccf" strokeDasharray="0" />
-          <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)}
+          <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} ticks={xTicks} tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)}
             label={{ value: `${parameterLabel}${data.unit ? ` (${data.unit})` : ""}`, position: "insideBottom", offset: -2, fontSize: 11, fill: "#1d2329" }} height={34} />
           <YAxis yAxisId="left" tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
             label={{ value: leftUnit, angle: -90, position: "insideLeft", fontSize: 11, fill: "#1d2329" }} />

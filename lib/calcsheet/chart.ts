@@ -1,6 +1,7 @@
 // A line chart as an SVG string, for the calc sheet (the browser draws its plots with recharts).
 // Marks where a series crosses zero (a contact lifting, a tie going slack, friction used up).
 import { formatNumber } from "@/solver/units";
+import { niceTicks } from "../ticks";
 
 export interface ChartSeries {
   label: string;
@@ -27,16 +28,6 @@ const DASHES = ["", "6 3", "2 3", "8 3 2 3", "1 2", "10 4"];
 const LABEL_CHAR = 4.6;
 
 const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
-
-function niceTicks(lo: number, hi: number, count = 5): number[] {
-  if (!(hi > lo)) return [lo];
-  const step0 = (hi - lo) / count;
-  const mag = 10 ** Math.floor(Math.log10(step0));
-  const step = [1, 2, 2.5, 5, 10].map((m) => m * mag).find((s) => s >= step0) ?? step0;
-  const out: number[] = [];
-  for (let v = Math.ceil(lo / step) * step; v <= hi + step * 1e-9; v += step) out.push(Math.abs(v) < step * 1e-9 ? 0 : v);
-  return out;
-}
 
 export function lineChartSvg(spec: ChartSpec): string {
   const W = spec.width ?? 500;
