@@ -1,11 +1,12 @@
 // A sketch's activity, one sentence per event (after the name of whoever did it). Browser-safe.
+import { plainText } from "@/lib/review/comment-text";
 export type ActivityEvent = { id: number; at: string; action: string; actorName: string | null; detail: Record<string, unknown> };
 
 const s = (v: unknown) => (typeof v === "string" ? v : "");
 const n = (v: unknown) => (typeof v === "number" ? `v${v}` : "a version");
 const quote = (v: unknown, max = 90) => {
-  // formatting marks read as noise in a one-line quote
-  const t = s(v).replace(/\*\*|`/g, "").replace(/\s+/g, " ").trim();
+  // formatting marks (**bold**, *italic*, _italic_, `code`) read as noise in a one-line quote
+  const t = plainText(s(v));
   return t ? `: “${t.length > max ? `${t.slice(0, max - 1)}…` : t}”` : "";
 };
 

@@ -70,7 +70,7 @@ export function mentionedIds(text: string, members: Member[]): string[] {
 /** **bold**, *italic*, _italic_ and `code` within a run of text that has no links or mentions. */
 function emphasis(text: string): Inline[] {
   const out: Inline[] = [];
-  const re = /`([^`\n]+)`|\*\*([^*\n]+?)\*\*|\*([^*\s][^*\n]*?)\*|(?<![\p{L}\p{N}])_([^_\s][^_\n]*?)_(?![\p{L}\p{N}])/gu;
+  const re = /`([^`\n]+)`|\*\*((?:[^*\n]|\*(?!\*))+?)\*\*|\*([^*\s][^*\n]*?)\*|(?<![\p{L}\p{N}])_([^_\s][^_\n]*?)_(?![\p{L}\p{N}])/gu;
   let last = 0;
   for (const m of text.matchAll(re)) {
     if (m.index! > last) out.push({ t: "text", text: text.slice(last, m.index) });
@@ -109,4 +109,10 @@ export function parseLine(line: string, members: Member[] = []): Inline[] {
 /** A whole comment: one array of tokens per line. */
 export function parseComment(text: string, members: Member[] = []): Inline[][] {
   return text.replace(/\r\n?/g, "\n").split("\n").map((line) => parseLine(line, members));
+}
+
+/** The words of a comment without its formatting marks (for one-line quotes: the activity, mails). */
+export function plainText(text: string): string {
+  const flat = (xs: Inline[]): string => xs.map((x) => ("children" in x ? flat(x.children) : x.text)).join("");
+  return parseComment(text).map(flat).join(" ").replace(/\s+/g, " ").trim();
 }

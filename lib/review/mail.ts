@@ -2,8 +2,13 @@
 import { compose } from "../mail-templates";
 import type { Mail } from "../mail";
 import { SIGN_OFF_RULES, type SignOffStep } from "./rules";
+import { plainText } from "./comment-text";
 
-const excerpt = (text: string, max = 300) => (text.length > max ? `${text.slice(0, max - 1)}…` : text);
+// a mail is plain text: the comment's words without its formatting marks
+const excerpt = (raw: string, max = 300) => {
+  const text = plainText(raw);
+  return text.length > max ? `${text.slice(0, max - 1)}…` : text;
+};
 
 export function mentionMail(input: { to: string; name: string; actorName: string; sketchTitle: string; number: number; text: string; url: string }): Mail {
   return compose(

@@ -43,6 +43,13 @@ describe("comment text", () => {
     expect(container.querySelector("a")?.getAttribute("href")).toBe("https://example.com/check");
   });
 
+  it("takes italics inside bold, with either mark", () => {
+    const { container } = render(<CommentText text={"**Check *both* feet** and **the _front_ one**"} />);
+    expect([...container.querySelectorAll("strong")].map((e) => e.textContent)).toEqual(["Check both feet", "the front one"]);
+    expect([...container.querySelectorAll("strong em")].map((e) => e.textContent)).toEqual(["both", "front"]);
+    expect(container.textContent).toBe("Check both feet and the front one");
+  });
+
   it("keeps snake_case and arithmetic as they are", () => {
     const lines = parseComment("p_in * 2 and rho_water * g * h");
     expect(lines[0]).toEqual([{ t: "text", text: "p_in * 2 and rho_water * g * h" }]);

@@ -7,6 +7,11 @@ const event = (action: string, detail: Record<string, unknown>) => ({ id: 1, at:
 describe("comment changes in the activity feed", () => {
   it("an edit quotes the new text; a deletion quotes nothing", () => {
     expect(activitySentence(event("comment.edit", { number: 3, reply: false, note: "Friction taken as **0.4**" }))).toBe("edited a comment on v3: “Friction taken as 0.4”");
+    // every mark the comment text knows goes: *italic*, _italic_, `code`, nested bold and italic;
+    // line breaks become spaces; a bare address stays as written
+    expect(activitySentence(event("comment.create", { number: 2, reply: true, note: "Use *wet* μ, see _table 4_ and `mu_wet`;\n**Check *both* feet** https://example.com/a" }))).toBe(
+      "replied on v2: “Use wet μ, see table 4 and mu_wet; Check both feet https://example.com/a”",
+    );
     expect(activitySentence(event("comment.edit", { number: 3, reply: true, note: "" }))).toBe("edited a reply on v3");
     expect(activitySentence(event("comment.delete", { number: 2, reply: true }))).toBe("deleted a reply on v2");
     expect(activitySentence(event("comment.delete", { number: 2, reply: false }))).toBe("deleted a comment on v2");
