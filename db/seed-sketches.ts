@@ -141,7 +141,7 @@ export const DEMO_SKETCHES: DemoSketch[] = [
     steps: [
       { by: "eddie", daysAgo: 4, message: "Stack on its skid, engine running, 30 m/s wind" },
       { by: "eddie", daysAgo: 2.5, message: "Site design wind is 40 m/s: the upwind edge lifts even with the engine running", edit: (d) => (d.parameters!.v = "40 m/s") },
-      { by: "eddie", daysAgo: 1.5, message: "700 kg of concrete blocks on the skid: the upwind edge bears again at 40 m/s", edit: (d) => (d.parameters!.ballast = "700 kg") },
+      { by: "eddie", daysAgo: 1.5, message: "900 kg of concrete blocks on the skid: the upwind edge bears again at 40 m/s, and neither edge slips", edit: (d) => (d.parameters!.ballast = "900 kg") },
     ],
   },
 ];

@@ -117,7 +117,8 @@ function Bar({ flow }: { flow: SaveFlow }) {
           <NarrowLabel full="Save version" short="Save…" />
         </button>
       ) : (
-        <span className={`${CHIP} inline-flex items-center border border-rule text-ink-soft`} title="Your role reads sketches but does not save versions" data-testid="read-only">
+        // a statement, not a control: plain text, no border or fill that would read as a button
+        <span className="inline-flex items-center px-1 text-[12px] italic text-ink-soft" title="Your role reads sketches but does not save versions" data-testid="read-only">
           Read only · {info.role}
         </span>
       )}
