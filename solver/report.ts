@@ -8,7 +8,7 @@ import { FIELD_UNIT_LABELS } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { SolveResult, Vec2 } from "./types";
-import { convert, formatNumber, formatQuantity, unitsFor, type Quantity, type UnitSystem } from "./units";
+import { convert, formatNumber, formatQuantity, prettyUnit, unitsFor, type Quantity, type UnitSystem } from "./units";
 import { gravityActs, overMu } from "./words";
 
 export type Cell = string | number | null;
@@ -423,7 +423,7 @@ export function parametersTable(parsed: Extract<ParseResult, { ok: true }>): Tab
     rows: Object.entries(parsed.parameterValues).map(([name, v]) => [
       name,
       String(parsed.file.parameters?.[name]),
-      "value" in v ? `${Number(v.value.toPrecision(6))}${v.unit ? " " + v.unit : ""}` : v.error,
+      "value" in v ? `${Number(v.value.toPrecision(6))}${v.unit ? " " + prettyUnit(v.unit) : ""}` : v.error,
     ]),
   };
 }

@@ -114,3 +114,8 @@ export function formatQuantity(valueSI: number, q: Quantity, system: UnitSystem 
 export function unitsFor(q: Quantity, system: UnitSystem): string[] {
   return UNITS[q][system].map((s) => s.unit);
 }
+
+/** mathjs writes "kg / m^3"; people write "kg/m³". */
+export function prettyUnit(u: string): string {
+  return u.replace(/\s*\/\s*/g, "/").replace(/\^2\b/g, "²").replace(/\^3\b/g, "³").replace(/\s\*\s/g, "·");
+}

@@ -6,15 +6,11 @@ import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { deleteParameter, renameParameter, setParameter } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
 import { numericText, toNumeric } from "@/canvas/model/numeric";
-import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
+import { formatNumber, formatQuantity, prettyUnit, type Quantity, type UnitSystem } from "@/solver/units";
 import { BUTTON, HEADING, ICON_BUTTON, INPUT } from "./ui";
 
 const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
 
-/** mathjs writes "kg / m^3"; people write "kg/m³". */
-export function prettyUnit(u: string): string {
-  return u.replace(/\s*\/\s*/g, "/").replace(/\^2\b/g, "²").replace(/\^3\b/g, "³").replace(/\s\*\s/g, "·");
-}
 
 const KINDS: Array<[FieldKind, Quantity]> = [
   ["length", "length"], ["angle", "angle"], ["mass", "mass"], ["force", "force"], ["moment", "moment"], ["pressure", "pressure"],

@@ -4,7 +4,7 @@
 // and the limit found, if any. Hover shows values.
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { describeQuantity } from "@/solver/quantity";
-import { formatNumber, type UnitSystem } from "@/solver/units";
+import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { niceTicks } from "@/lib/ticks";
 import { displayKind, displayUnit, largestByKind, toDisplay } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
@@ -53,7 +53,7 @@ export function SweepChart({ data, units, parameterLabel, limit, run }: { data: 
         <LineChart data={rows} margin={{ top: 6, right: 16, bottom: 4, left: 4 }}>
           <CartesianGrid stroke="#e2dccf" strokeDasharray="0" />
           <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} ticks={xTicks} tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)}
-            label={{ value: `${parameterLabel}${data.unit ? ` (${data.unit})` : ""}`, position: "insideBottom", offset: -2, fontSize: 11, fill: "#1d2329" }} height={34} />
+            label={{ value: `${parameterLabel}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`, position: "insideBottom", offset: -2, fontSize: 11, fill: "#1d2329" }} height={34} />
           <YAxis yAxisId="left" tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
             label={{ value: leftUnit, angle: -90, position: "insideLeft", fontSize: 11, fill: "#1d2329" }} />
           {rightUnits.length > 0 && (
@@ -65,7 +65,7 @@ export function SweepChart({ data, units, parameterLabel, limit, run }: { data: 
               const s = Number(String(item?.dataKey ?? "q0").slice(1));
               return [typeof v === "number" ? `${formatNumber(v, 4)}${unitOf(s) ? ` ${unitOf(s)}` : ""}` : "—", String(name)];
             }}
-            labelFormatter={(x) => `${parameterLabel} = ${formatNumber(Number(x), 5)}${data.unit ? ` ${data.unit}` : ""}`}
+            labelFormatter={(x) => `${parameterLabel} = ${formatNumber(Number(x), 5)}${data.unit ? ` ${prettyUnit(data.unit)}` : ""}`}
             contentStyle={{ fontSize: 12, borderColor: "#cfc8b8" }}
           />
           <Legend wrapperStyle={{ fontSize: 11 }} />

@@ -6,7 +6,7 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import type { LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
 import { FLOW_FACTOR } from "@/solver/sweep";
-import { formatNumber } from "@/solver/units";
+import { formatNumber, prettyUnit } from "@/solver/units";
 import { displayKind, displayUnit, parseTarget, toDisplay } from "@/canvas/studies/display";
 import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
@@ -168,7 +168,7 @@ export function SweepPanel() {
         const label = describeQuantity(q);
         const shownUnit = displayUnit(q.component, units, scaleFor(q.component));
         const inShown = (si: number) => `${formatNumber(toDisplay(si, q.component, units, scaleFor(q.component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
-        const pUnit = result.unit ? ` ${result.unit}` : "";
+        const pUnit = result.unit ? ` ${prettyUnit(result.unit)}` : "";
         const pName = s.parameter === FLOW_FACTOR ? "the flow factor" : s.parameter;
         const words = result.found
           ? `The ${label} reaches ${tgt.shown} at ${pName} = ${formatNumber(result.value, 5)}${pUnit}${result.crossings.length > 1 ? ` (and again at ${result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
@@ -213,7 +213,7 @@ export function SweepPanel() {
           <label><span className={LABEL}>To</span><input className={INPUT} value={to} onChange={(e) => setTo(e.target.value)} aria-label="To" /></label>
           <label><span className={LABEL}>Points</span><input className={INPUT} value={points} onChange={(e) => setPoints(e.target.value)} aria-label="Points" /></label>
         </div>
-        <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1">Numbers in the unit the parameter is written in{data?.unit ? ` (${data.unit})` : ""}, or give a unit (“90 km/hr”); the flow factor is a plain number.</p>
+        <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1">Numbers in the unit the parameter is written in{data?.unit ? ` (${prettyUnit(data.unit)})` : ""}, or give a unit (“90 km/hr”); the flow factor is a plain number.</p>
         {(sketch.cases?.length ?? 0) > 0 && (
           <label className="block">
             <span className={LABEL}>Case</span>
@@ -264,12 +264,12 @@ export function SweepPanel() {
               {data.crossings.length === 0 && <li className="text-ink-faint">No margin crosses zero in this range.</li>}
               {data.crossings.map((c, i) => (
                 <li key={i} className="text-ink-soft">
-                  <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity])} crosses zero between {pLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${data.unit}` : ""}
+                  <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity])} crosses zero between {pLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${prettyUnit(data.unit)}` : ""}
                 </li>
               ))}
               {invalid.slice(0, MAX_STRETCHES).map((r, i) => (
                 <li key={`invalid-${i}`} className="text-caution" data-testid="invalid-points">
-                  Not solved at {pLabel} = {formatNumber(r.from, 4)}{r.count > 1 ? ` to ${formatNumber(r.to, 4)}` : ""}{data.unit ? ` ${data.unit}` : ""} ({r.count} {r.count === 1 ? "point" : "points"}), where the sketch is invalid:{" "}
+                  Not solved at {pLabel} = {formatNumber(r.from, 4)}{r.count > 1 ? ` to ${formatNumber(r.to, 4)}` : ""}{data.unit ? ` ${prettyUnit(data.unit)}` : ""} ({r.count} {r.count === 1 ? "point" : "points"}), where the sketch is invalid:{" "}
                   {r.errors.map((e) => errorInWords(sketch, e)).join("; ")}.
                 </li>
               ))}

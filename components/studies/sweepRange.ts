@@ -3,6 +3,7 @@
 // the flow factor from 0 to 2 — so the first run already says something about the design.
 import { evaluateTyped } from "@/solver/expressions";
 import { FLOW_FACTOR } from "@/solver/sweep";
+import { prettyUnit } from "@/solver/units";
 
 export type ParameterValue = { value: number; unit: string } | { error: string } | undefined;
 
@@ -40,6 +41,6 @@ export function parseRangeValue(text: string, unit: string): number {
   try {
     return v.toNumber(unit);
   } catch {
-    throw new Error(`${text.trim()} cannot be written in ${unit}`);
+    throw new Error(`${text.trim()} cannot be written in ${prettyUnit(unit)}`);
   }
 }

@@ -7,7 +7,7 @@ import { findLimit } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { linspace, solveSweep } from "@/solver/sweep";
-import { formatNumber, type UnitSystem } from "@/solver/units";
+import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import type { ChartSpec } from "./chart";
 
 /** At most this many points are solved for a printed chart. */
@@ -38,7 +38,7 @@ export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, 
   const markers = quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
     const lim = findLimit(sketch, sw.parameter, [sw.from, sw.to], q);
     if (!lim.found) return [];
-    const at = `${formatNumber(lim.value, 4)}${lim.unit ? ` ${lim.unit}` : ""}`;
+    const at = `${formatNumber(lim.value, 4)}${lim.unit ? ` ${prettyUnit(lim.unit)}` : ""}`;
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
     return [{ x: lim.value, label: `${q.support}: ${event.noun} at ${at}`, words: `${q.support}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at}` }];
   });
@@ -51,8 +51,8 @@ export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, 
       mine.map((q) => res.points.map((p) => (p.ok ? readQuantity(p.result, q) : null))),
     )[kind];
     return {
-      title: `${sw.parameter} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)} ${res.unit}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
-      xLabel: `${sw.parameter}${res.unit ? ` (${res.unit})` : ""}`,
+      title: `${sw.parameter} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)} ${prettyUnit(res.unit)}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
+      xLabel: `${sw.parameter}${res.unit ? ` (${prettyUnit(res.unit)})` : ""}`,
       yLabel: displayUnit(mine[0].component, units, largest) || "ratio",
       series: mine.map((q) => ({
         label: describeQuantity(q),

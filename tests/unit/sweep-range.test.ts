@@ -38,7 +38,7 @@ describe("the ends of a range as typed", () => {
   });
 
   it("refuses the wrong kind, a unit on a plain-number parameter, and an empty box, in words", () => {
-    expect(() => parseRangeValue("3 kg", "m / s")).toThrow("3 kg cannot be written in m / s");
+    expect(() => parseRangeValue("3 kg", "m / s")).toThrow("3 kg cannot be written in m/s");
     expect(() => parseRangeValue("1.2 m", "")).toThrow("1.2 m has a unit, but this parameter is a plain number");
     expect(() => parseRangeValue(" ", "deg")).toThrow("needs a value");
     expect(() => parseRangeValue("2 *", "deg")).toThrow();

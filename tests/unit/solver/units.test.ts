@@ -1,6 +1,6 @@
 // Display in SI or US customary units (factors from NIST SP 811).
 import { describe, expect, it } from "vitest";
-import { convert, formatNumber, formatQuantity } from "@/solver/units";
+import { convert, formatNumber, formatQuantity, prettyUnit } from "@/solver/units";
 
 describe("formatQuantity", () => {
   it.each([
@@ -48,5 +48,15 @@ describe("formatQuantity", () => {
     expect(formatNumber(0.0310, 4, { keepZeros: true })).toBe("0.031");
     expect(formatNumber(-0.00004, 4, { keepZeros: true })).toBe("−0.00004");
     expect(formatNumber(11.5)).toBe("11.5");
+  });
+});
+
+describe("prettyUnit", () => {
+  it("writes mathjs's unit text as people write units (SI Brochure, 9th ed., §5.4.6: the solidus, and a half-high dot for a product)", () => {
+    expect(prettyUnit("m / s")).toBe("m/s");
+    expect(prettyUnit("m / s^2")).toBe("m/s²");
+    expect(prettyUnit("kg / m^3")).toBe("kg/m³");
+    expect(prettyUnit("N * m")).toBe("N·m");
+    expect(prettyUnit("deg")).toBe("deg");
   });
 });
