@@ -35,6 +35,9 @@ export interface SvgOptions {
    * two drawings given the same frame can be laid over each other
    */
   frame?: View;
+  /** write the labels of these elements only, and no result labels (the earlier drawing under an
+   *  overlay, whose labels would land on the later one's) */
+  onlyLabelsOf?: string[];
 }
 
 const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
@@ -151,6 +154,11 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
     dy = top + (Number.isFinite(box.minY) ? (height - footer - top - (box.maxY - box.minY)) / 2 - box.minY : (height - top) / 2);
   }
 
+  if (opts.onlyLabelsOf) {
+    const keep = new Set(opts.onlyLabelsOf);
+    groups = groups.map((g) => (keep.has(g.id) ? g : { ...g, prims: g.prims.filter((p) => p.t !== "text") }));
+    results = results.filter((p) => p.t !== "text");
+  }
   const body = groups.map((g) => `<g data-id="${esc(g.id)}" data-kind="${g.kind}">${primsToSvg(g.prims)}</g>`).join("");
   const res = results.length ? `<g class="results">${primsToSvg(results)}</g>` : "";
   let foot = "";

@@ -187,14 +187,17 @@ function Overlay({
   const b = useSolved(after).result;
   const frame = useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], 1280, 640, units), [before, after, a, b, units]);
   const removed = useMemo(() => Object.fromEntries(Object.entries(marks.before).filter(([, k]) => k === "removed")), [marks.before]);
+  // the earlier drawing keeps the words of what was removed only: the rest of its labels would land
+  // on the later drawing's (the tables give every value before and after)
+  const removedIds = useMemo(() => Object.keys(removed), [removed]);
   return (
     <figure className="space-y-1" data-testid="compare-overlay">
       <figcaption className="text-sm">
         <span className="font-semibold">After: {afterLabel}</span> <span className="text-ink-soft">in full, over</span>{" "}
-        <span className="font-semibold text-ink-soft">before: {beforeLabel}</span> <span className="text-ink-soft">drawn faint and grey, at the same scale.</span>
+        <span className="font-semibold text-ink-soft">before: {beforeLabel}</span> <span className="text-ink-soft">drawn faint and grey, at the same scale (its labels left off but for what was removed; the tables give every value).</span>
       </figcaption>
       <div className="relative overflow-hidden rounded-md border border-rule bg-paper">
-        <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} frame={frame} layer className="opacity-40 grayscale" />
+        <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} frame={frame} layer onlyLabelsOf={removedIds} className="opacity-40 grayscale" />
         <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} frame={frame} layer className="compare-over absolute inset-0" />
       </div>
     </figure>

@@ -46,6 +46,7 @@ export function ReviewDrawing({
   units = "SI",
   frame,
   layer = false,
+  onlyLabelsOf,
   className = "",
 }: {
   document: SketchFile;
@@ -64,14 +65,16 @@ export function ReviewDrawing({
   frame?: View;
   /** drawn as a see-through layer over another drawing: no paper, no legend, no border */
   layer?: boolean;
+  /** write only these elements' labels, and no result labels (see renderSketchSvg) */
+  onlyLabelsOf?: string[];
   className?: string;
 }) {
   const box = useRef<HTMLDivElement>(null);
   const { result, sketch } = useSolved(document);
   // The renderer escapes every text it draws (titles, labels, values), so its output is markup we made.
   const svg = useMemo(
-    () => renderSketchSvg(document, result, { width, height, caption, units, frame, legend: !layer, background: layer ? "none" : "paper" }),
-    [document, result, width, height, caption, units, frame, layer],
+    () => renderSketchSvg(document, result, { width, height, caption, units, frame, legend: !layer, background: layer ? "none" : "paper", onlyLabelsOf }),
+    [document, result, width, height, caption, units, frame, layer, onlyLabelsOf],
   );
 
   useLayoutEffect(() => {

@@ -113,6 +113,22 @@ describe("renderSketchSvg", () => {
     expect(Math.max(...ys)).toBeLessThan(Number(note.getAttribute("y")) - 12);
   });
 
+  it("under an overlay, writes only the labels of the elements named, and no result labels", () => {
+    const { sketch, result } = solved("pump-skid");
+    const full = parse(renderSketchSvg(sketch, result));
+    const quiet = parse(renderSketchSvg(sketch, result, { onlyLabelsOf: ["discharge"] }));
+    expect(full.querySelectorAll(".results text").length).toBeGreaterThan(0);
+    expect(quiet.querySelectorAll(".results text")).toHaveLength(0);
+    // the drawing itself is the same: every element's group, every result arrow
+    expect(quiet.querySelectorAll("g[data-id]").length).toBe(full.querySelectorAll("g[data-id]").length);
+    expect(quiet.querySelectorAll(".results path, .results polyline, .results polygon").length).toBe(full.querySelectorAll(".results path, .results polyline, .results polygon").length);
+    const textsOf = (d: Document, id: string) => [...d.querySelectorAll(`g[data-id="${id}"] text`)].map((t) => t.textContent);
+    expect(textsOf(quiet, "discharge")).toEqual(textsOf(full, "discharge"));
+    expect(textsOf(full, "discharge").length).toBeGreaterThan(0);
+    const others = [...quiet.querySelectorAll("g[data-id]")].filter((g) => g.getAttribute("data-id") !== "discharge");
+    expect(others.flatMap((g) => [...g.querySelectorAll("text")])).toHaveLength(0);
+  });
+
   it("reads any supported file (expressions, the lead's fixtures) and says when it cannot draw", () => {
     const fixture = JSON.parse(readFileSync("tests/fixtures/sketches/pipe-bend-anchor.json", "utf8"));
     const svg = renderSketchSvg(fixture, solveFile(fixture) as SolveResult);
