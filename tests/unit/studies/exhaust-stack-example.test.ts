@@ -23,6 +23,10 @@ describe("the exhaust-stack example", () => {
     const lim = runLimit(stack, { parameter: "v", from: 20, to: 45, caseId: "stopped", quantity: { support: "upwind", component: "margin" }, target: 0 });
     if (!lim.found) throw new Error(lim.reason);
     expect(lim.value).toBeCloseTo(vLift, 4);
+    // the menu's summary and the sketch's notes give the same speed
+    const shown = `${vLift.toFixed(1)} m/s`;
+    expect(exampleById("exhaust-stack")!.summary).toContain(`lifts at ${shown}`);
+    expect(stack.description).toContain(`lifts at ${shown}`);
   });
 
   it("the cases: as drawn it holds, the stopped case holds but falls short of 1.5 against overturning, the storm tips", () => {
