@@ -213,6 +213,15 @@ export function combinationOverlaps(file: SketchFile, combination: CombinationFi
   return out;
 }
 
+/** Words for a case's factors of groups that no load is in: they change nothing (a typo, or the
+ *  group's loads were removed), so the case is not what its factors say. */
+export function caseWarnings(file: SketchFile, c: CaseFile): string[] {
+  const groups = loadGroupsOf(file);
+  return Object.keys(c.factors ?? {})
+    .filter((g) => !groups.includes(g))
+    .map((g) => `Case ${c.name} scales load group "${g}", which no load is in, so that factor changes nothing (the sketch's groups: ${groups.join(", ") || "none"}).`);
+}
+
 /** Words for a combination's overlaps, one sentence a group (empty when there are none). */
 export function combinationWarnings(file: SketchFile, combination: CombinationFile): string[] {
   const words = (g: string) => (g === DEFAULT_GROUPS.weight ? `"${g}" (the weights)` : `"${g}"`);

@@ -3,8 +3,8 @@
 // with factors, solved as one factored load set), the required factors of safety, and the results
 // of all of them at once: reactions per case with the governing case, the envelope with each
 // support's design load, and the factors of safety against overturning and sliding.
-import { useEffect, useMemo, useRef, useState } from "react";
-import { combinationWarnings, type StudyResult } from "@/solver/cases";
+import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState } from "react";
+import { caseWarnings, combinationWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
 import type { CaseFile, CombinationFile } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
@@ -13,6 +13,9 @@ import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms } from "./casesText";
 import { CaseTables } from "./CaseTables";
+
+/** Each field's refusal, by its label: reported up so the run waits until they are put right. */
+const FieldErrors = createContext<(label: string, error: string | null) => void>(() => {});
 
 /** A text field that commits a parsed value on blur or Enter and shows its error at the field. */
 function TextCell({ label, value, parse, onCommit, placeholder, width }: {
@@ -30,7 +33,14 @@ function TextCell({ label, value, parse, onCommit, placeholder, width }: {
   if (shown !== value) {
     setShown(value);
     setText(value);
+    setError(null);
   }
+  // the panel does not run while a field holds text it refused
+  const report = useContext(FieldErrors);
+  useEffect(() => {
+    report(label, error);
+    return () => report(label, null);
+  }, [report, label, error]);
   const commit = () => {
     const r = parse(text);
     if (!r.ok) return setError(r.error);
@@ -67,6 +77,18 @@ export function CasesPanel() {
   const [running, setRunning] = useState<(() => void) | null>(null);
   const [progress, setProgress] = useState<{ done: number; total: number; noun: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const groups = useMemo(() => loadGroupsOf(sketch), [sketch]);
+  const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
+  const reportError = useCallback((label: string, message: string | null) => {
+    setFieldErrors((prev) => {
+      if ((prev[label] ?? null) === message) return prev;
+      const next = { ...prev };
+      if (message) next[label] = message;
+      else delete next[label];
+      return next;
+    });
+  }, []);
+  const refused = Object.keys(fieldErrors);
   useEffect(() => {
     runner.current = new StudyRunner();
     return () => runner.current?.dispose();
@@ -109,6 +131,7 @@ export function CasesPanel() {
   const staleResult = study && study.of !== sketch;
 
   return (
+    <FieldErrors.Provider value={reportError}>
     <div className="@container" data-testid="cases-panel">
     <div className="grid min-h-0 gap-4 @5xl:grid-cols-[minmax(22rem,1fr)_minmax(24rem,1.4fr)]">
       <div className="min-w-0 space-y-3">
@@ -146,7 +169,7 @@ export function CasesPanel() {
                       <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder="theta = 30 deg" parse={(t) => parseOverrides(t, parameters)} onCommit={(t) => { const r = parseOverrides(t, parameters); if (r.ok) updateCase(i, { parameters: r.value }); }} />
                     </td>
                     <td className="pr-1 pb-1">
-                      <TextCell label={`Group factors of ${c.name}`} value={formatFactors(c.factors)} placeholder="dead 1.2, flow 1.5" parse={parseFactors} onCommit={(t) => { const r = parseFactors(t); if (r.ok) updateCase(i, { factors: r.value }); }} />
+                      <TextCell label={`Group factors of ${c.name}`} value={formatFactors(c.factors)} placeholder="dead 1.2, flow 1.5" parse={(t) => parseFactors(t, groups)} onCommit={(t) => { const r = parseFactors(t, groups); if (r.ok) updateCase(i, { factors: r.value }); }} />
                     </td>
                     <td className="pr-1 pb-1">
                       <TextCell label={`Flow factor of ${c.name}`} value={c.flowFactor === undefined ? "" : String(c.flowFactor)} placeholder="1" parse={(t) => (!t.trim() || Number(t) >= 0 ? { ok: true } : { ok: false, error: "a number, 0 or more" })} onCommit={(t) => updateCase(i, { flowFactor: t.trim() ? Number(t) : undefined })} />
@@ -161,6 +184,12 @@ export function CasesPanel() {
               </tbody>
             </table>
           )}
+          {cases.flatMap((c) => caseWarnings(sketch, c)).map((w) => (
+            <p key={w} className="mt-1 text-[11.5px] text-caution" data-testid="case-warning">
+              <span aria-hidden="true">⚠ </span>
+              {w}
+            </p>
+          ))}
         </section>
 
         <section aria-labelledby="combos-h">
@@ -209,9 +238,14 @@ export function CasesPanel() {
         </section>
 
         <div className="flex items-center gap-2">
-          <button type="button" className={PRIMARY_BUTTON} onClick={run} disabled={!!running}>
+          <button type="button" className={PRIMARY_BUTTON} onClick={run} disabled={!!running || refused.length > 0} aria-describedby={refused.length ? "cases-refused" : undefined}>
             {cases.length || combinations.length ? "Run all cases" : "Run as drawn"}
           </button>
+          {refused.length > 0 && (
+            <span id="cases-refused" className="text-[12px] text-caution" data-testid="cases-refused">
+              Put right {refused.length === 1 ? "the field" : `the ${refused.length} fields`} marked in error first ({refused.join("; ")}): the run would leave {refused.length === 1 ? "it" : "them"} out.
+            </span>
+          )}
           {running && progress && (
             <>
               <progress className="h-2 w-20" max={progress.total} value={progress.done} aria-label="Cases progress" />
@@ -239,5 +273,6 @@ export function CasesPanel() {
       </div>
     </div>
     </div>
+    </FieldErrors.Provider>
   );
 }

@@ -23,14 +23,26 @@ export function formatOverrides(o: Record<string, string | number> | undefined):
     .join("; ");
 }
 
-export function parseFactors(text: string): Parsed<Record<string, number> | undefined> {
+/** "dead 1.2, flow 1.5": a factor for each load group named; with `groups` (the groups the sketch's
+ *  loads are in), a name that is none of them is refused, so a typo never leaves a load unscaled. */
+export function parseFactors(text: string, groups?: readonly string[]): Parsed<Record<string, number> | undefined> {
   const t = text.trim();
   if (!t) return { ok: true, value: undefined };
   const out: Record<string, number> = {};
   for (const part of t.split(",").map((s) => s.trim()).filter(Boolean)) {
     const m = /^([A-Za-z][A-Za-z0-9 _-]*?)\s*[×x*]?\s*(-?\d+(?:\.\d+)?(?:e-?\d+)?)$/i.exec(part);
     if (!m) return { ok: false, error: `"${part}" should read group factor (e.g. dead 1.2)` };
-    out[m[1].trim()] = Number(m[2]);
+    const name = m[1].trim();
+    if (groups && !groups.includes(name)) {
+      const near = groups.find((g) => g.toLowerCase() === name.toLowerCase());
+      return {
+        ok: false,
+        error: near
+          ? `no load is in group "${name}": did you mean "${near}"?`
+          : `no load is in group "${name}"; ${groups.length ? `the sketch's groups are ${groups.join(", ")}` : "the sketch has no loads yet"}`,
+      };
+    }
+    out[name] = Number(m[2]);
   }
   return { ok: true, value: out };
 }

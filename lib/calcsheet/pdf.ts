@@ -20,7 +20,7 @@ import {
   type UnitSystem,
   type SolveResult,
 } from "@/solver";
-import { combinationWarnings } from "@/solver/cases";
+import { caseWarnings, combinationWarnings } from "@/solver/cases";
 import { statusSentences } from "@/components/results/statusSentence";
 import { caseFindings, designLoadTable, excludedWords, type Table } from "@/solver/report";
 import { lineChartSvg } from "./chart";
@@ -145,6 +145,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       const flow = f !== undefined && f !== 1 ? [`flow factor ${f} (every port's ṁ and V × ${f}, momentum flux × ${Number((f * f).toPrecision(4))})`] : [];
       const bits = [...over, ...fac, ...flow];
       para(`${c.name} (${c.id}): ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
+      for (const w of caseWarnings(parsed.file, c)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
     for (const k of parsed.file.combinations ?? []) {
       para(`${k.name} (${k.id}): ${k.terms.map((t) => `${t.factor} × ${t.case}`).join(" + ")}, solved as one factored load set`, 8.5, INK);

@@ -14,6 +14,38 @@ const mount = mountResultsDock;
 const num = (t: string) => Number(t.replace(/[,▲▼]/g, "").replace("−", "-"));
 
 describe("Cases tab", () => {
+  it("refuses a group no load is in, and does not run while a field holds text it refused", async () => {
+    const user = userEvent.setup();
+    const editor = mount(load("fire-monitor-trailer"));
+    await user.click(screen.getByRole("tab", { name: "Cases" }));
+    await user.click(screen.getByRole("button", { name: "Add a case" }));
+    const factors = screen.getByRole("textbox", { name: /Group factors of/ });
+    // the trailer's weights are in "dead", its jet's port in "flow": "flwo" is a typo
+    await user.type(factors, "flwo 2{Enter}");
+    expect(screen.getByRole("alert")).toHaveTextContent('no load is in group "flwo"; the sketch\'s groups are dead, flow');
+    expect(editor.getState().sketch.cases![0].factors).toBeUndefined();
+    const run = screen.getByRole("button", { name: "Run all cases" });
+    expect(run).toBeDisabled();
+    expect(screen.getByTestId("cases-refused")).toHaveTextContent("Put right the field marked in error first (Group factors of Normal operation)");
+    await user.clear(factors);
+    await user.type(factors, "Flow 2{Enter}");
+    expect(screen.getByRole("alert")).toHaveTextContent('did you mean "flow"?');
+    await user.clear(factors);
+    await user.type(factors, "flow 2{Enter}");
+    expect(editor.getState().sketch.cases![0].factors).toEqual({ flow: 2 });
+    expect(screen.queryByTestId("cases-refused")).toBeNull();
+    expect(screen.getByRole("button", { name: "Run all cases" })).toBeEnabled();
+  });
+
+  it("warns of a saved factor whose group no load is in any more", async () => {
+    const user = userEvent.setup();
+    const file = load("fire-monitor-trailer");
+    file.cases = [{ id: "gust", name: "Gust", factors: { wind: 1.5 } }];
+    mount(file);
+    await user.click(screen.getByRole("tab", { name: "Cases" }));
+    expect(screen.getByTestId("case-warning")).toHaveTextContent('Case Gust scales load group "wind", which no load is in, so that factor changes nothing (the sketch\'s groups: dead, flow).');
+  });
+
   it("adds cases in the table, runs them, and the table equals the cases solved one by one", async () => {
     const user = userEvent.setup();
     const editor = mount(load("fire-monitor-trailer"));

@@ -13,6 +13,9 @@ describe("case text forms", () => {
   it("group factors", () => {
     expect(parseFactors("dead 1.2, flow × 1.5, test pressure 1.1")).toEqual({ ok: true, value: { dead: 1.2, flow: 1.5, "test pressure": 1.1 } });
     expect(parseFactors("dead").ok).toBe(false);
+    // with the sketch's groups, a name that is none of them is refused
+    expect(parseFactors("dead 1.2, wnd 2", ["dead", "wind"])).toEqual({ ok: false, error: 'no load is in group "wnd"; the sketch\'s groups are dead, wind' });
+    expect(parseFactors("dead 1.2, wind 2", ["dead", "wind"])).toEqual({ ok: true, value: { dead: 1.2, wind: 2 } });
     expect(formatFactors({ dead: 1.2, flow: 1.5 })).toBe("dead 1.2, flow 1.5");
   });
   it("combination terms", () => {
