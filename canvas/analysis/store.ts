@@ -44,13 +44,16 @@ function sameMap<V>(a: ReadonlyMap<string, V>, b: ReadonlyMap<string, V>): boole
   return true;
 }
 
-export function nextAnalysis(prev: Analysis, sketch: SketchFile, core: AnalysisCore): Analysis {
+/** `keepShown: false` when the sketch was replaced as a whole (opened, imported, an example): an
+ *  earlier sketch's result is then not this one's, stale or not, and is not shown. */
+export function nextAnalysis(prev: Analysis, sketch: SketchFile, core: AnalysisCore, keepShown = true): Analysis {
   const fresh = fieldValuesById(sketch, core.fields, core.errors);
   // unchanged values keep their identity: the scene (and the drawing) need not be rebuilt
   const fieldValues = sameMap(fresh.values, prev.fieldValues.values) && sameMap(fresh.errors, prev.fieldValues.errors) ? prev.fieldValues : fresh;
   if (core.ok && core.result) {
     return { sketch, core, fieldValues, shown: core.result, shownSketch: core.numeric, stale: false, pending: false };
   }
+  if (!keepShown) return { sketch, core, fieldValues, shown: null, shownSketch: null, stale: false, pending: false };
   return { sketch, core, fieldValues, shown: prev.shown, shownSketch: prev.shownSketch, stale: prev.shown !== null, pending: false };
 }
 
@@ -141,12 +144,17 @@ export function createAnalysisStore(): AnalysisStore {
 export function linkAnalysis(editor: EditorStore, store: AnalysisStore, runner: Runner = syncRunner): () => void {
   let latest: SketchFile | null = null;
   let live = true;
+  // the editor's `fitRequest` moves on when the sketch is replaced as a whole: a result solved
+  // before that belongs to another sketch
+  let shownOf = -1;
   const start = (sketch: SketchFile) => {
     latest = sketch;
+    const generation = editor.getState().fitRequest;
     if (!store.getState().pending) store.setState({ pending: true });
     runner(sketch, (core) => {
       if (!live) return;
-      const next = nextAnalysis(store.getState(), sketch, core);
+      const next = nextAnalysis(store.getState(), sketch, core, shownOf === generation);
+      if (next.shown && !next.stale) shownOf = generation;
       store.setState({ ...next, pending: latest !== sketch }, true);
     });
   };

@@ -3,7 +3,7 @@
 import { describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
 import { createEditorStore, HISTORY_LIMIT } from "@/canvas/store";
-import { addElement, attachToBody, moveElement, setField, type Command } from "@/canvas/commands";
+import { addElement, attachToBody, moveElement, replaceSketch, setField, type Command } from "@/canvas/commands";
 import { emptySketch, findElement } from "@/canvas/model/elements";
 import { newAttached, newBody } from "@/canvas/model/factory";
 import { connectAnalysis, workerRunner } from "@/canvas/analysis/store";
@@ -161,6 +161,26 @@ describe("live analysis", () => {
     store.getState().undo();
     expect(analysis.getState().stale).toBe(false);
     expect(analysis.getState().shown!.reactions.s2.n).toBeCloseTo((w + 4000) / 2, 6);
+    stop();
+  });
+
+  it("does not show another sketch's result: a file opened over this one with an input error shows none", () => {
+    const store = createEditorStore({ sketch: sketch() });
+    const { store: analysis, stop } = connectAnalysis(store);
+    expect(analysis.getState().shown).not.toBeNull();
+    const other: SketchFile = { ...sketch(), title: "Imported", bodies: [{ ...sketch().bodies[0], mass: "12 parsecs" }] };
+    store.getState().apply(c(replaceSketch({ sketch: other, label: "Import" })));
+    const after = analysis.getState();
+    expect(after.core!.ok).toBe(false);
+    expect(after.shown).toBeNull();
+    expect(after.stale).toBe(false);
+    // its own edits with errors keep its own last good result, as before
+    store.getState().undo();
+    const good = analysis.getState().shown;
+    expect(good).not.toBeNull();
+    store.getState().apply(c(setField({ id: "b1", field: "mass", value: "100 kg + nonsense" })));
+    expect(analysis.getState().shown).toBe(good);
+    expect(analysis.getState().stale).toBe(true);
     stop();
   });
 
