@@ -341,7 +341,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
       else rows.push([run.name, body, "overturning", inUnit(ot.restoring, "moment", u), inUnit(ot.overturning, "moment", u), u.moment, ...verdict(ot), ot.about]);
       const sl = st.sliding;
       if ("notApplicable" in sl) rows.push([run.name, body, "sliding", null, null, "", null, null, sl.notApplicable, ""]);
-      else rows.push([run.name, body, "sliding", inUnit(sl.available, "force", u), inUnit(sl.driving, "force", u), u.force, ...verdict(sl), ""]);
+      else rows.push([run.name, body, sl.wholeBody ? "sliding (as a whole: it tips)" : "sliding", inUnit(sl.available, "force", u), inUnit(sl.driving, "force", u), u.force, ...verdict(sl), ""]);
     }
   }
   return {
@@ -362,7 +362,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
     rows,
     notes: [
       "Overturning: factor = restoring over overturning moment of the applied loads about the contact the body would tip about, each load resolved across and along that contact's base (a weight on a slope restores by W·cos θ and overturns by W·sin θ).",
-      "Sliding: factor = friction the bearing contacts can give (Σ μ·n) over the tangential force they must resist (|Σ t|).",
+      "Sliding: factor = friction the bearing contacts can give (Σ μ·n) over the tangential force they must resist (|Σ t|). A body that tips is taken as a whole: μ·Σn over |Σt| of all its contacts (μ·W over the sliding force on level ground), when they share one base and one μ.",
     ],
   };
 }

@@ -6,7 +6,10 @@
 //    mode counts only if every other support lets it happen: other contacts open, nothing
 //    bilateral or pulling holds it), the smallest ratio governs;
 //  - against sliding: the friction the bearing contacts can give, Σ μ·n, over the tangential
-//    force they must resist, |Σ t|. Only for bodies held by contacts and ties alone.
+//    force they must resist, |Σ t|. Only for bodies held by contacts and ties alone. A body that
+//    tips has no reactions of its own (the ones shown would need a contact to pull), so it is
+//    taken as a whole, as by hand: μ·Σn over |Σt| of all its contacts (μ·W over P on level
+//    ground), when its contacts share one base and one μ; otherwise sliding is not assessed.
 import { dot3 } from "./linalg";
 import type { BodyModel } from "./model";
 import { direction, momentOf } from "./geometry";
@@ -31,6 +34,8 @@ export interface SlidingCheck {
   driving: number;
   required: number;
   pass: boolean;
+  /** the body tips: taken as a whole (μ·Σn over |Σt| of all its contacts), not contact by contact */
+  wholeBody?: boolean;
 }
 
 export interface BodyStability {
@@ -113,9 +118,10 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
   return { notApplicable: blockedBy && !free ? `tipping is prevented by support ${blockedBy}` : "no load tends to tip it" };
 }
 
-export function slidingCheck(model: BodyModel, reactions: Record<string, Reaction>, required: number): BodyStability["sliding"] {
+export function slidingCheck(model: BodyModel, reactions: Record<string, Reaction>, required: number, status?: BodyResult["status"]): BodyStability["sliding"] {
   const holder = model.supports.find((s) => s.kind === "pin" || s.kind === "fixed" || s.kind === "roller");
   if (holder) return { notApplicable: `sliding is resisted by ${holder.kind === "fixed" ? "fixed support" : holder.kind} ${holder.id}` };
+  if (status === "tips" || status === "unrestrained") return wholeBodySliding(model, reactions, required, status);
   let available = 0;
   let tx = 0;
   let ty = 0;
@@ -136,6 +142,36 @@ export function slidingCheck(model: BodyModel, reactions: Record<string, Reactio
   return { factor, available, driving, required, pass: factor >= required };
 }
 
+/**
+ * Sliding of a body that tips (or is unrestrained), taken as a whole: its contacts' normal and
+ * tangential reactions summed, as equilibrium would need them with every contact able to pull.
+ * The sums do not depend on how the contacts share the load when they share one base direction
+ * and one μ, so μ·Σn over |Σt| is the hand calculation's μ·N over the sliding force.
+ */
+function wholeBodySliding(model: BodyModel, reactions: Record<string, Reaction>, required: number, status: "tips" | "unrestrained"): BodyStability["sliding"] {
+  const contacts = model.supports.filter((s): s is ContactSupport => s.kind === "contact");
+  const why = status === "tips" ? "the body tips" : "the body is unrestrained";
+  if (!contacts.length || model.supports.some((s) => s.kind !== "contact")) return { notApplicable: `${why}, and not on contacts alone: sliding is not assessed apart from it` };
+  const mu = contacts[0].mu;
+  const angle = contacts[0].angle;
+  const turn = (a: number) => ((((a - angle) % 360) + 540) % 360) - 180;
+  if (mu === undefined || contacts.some((c) => c.mu !== mu || Math.abs(turn(c.angle)) > 1e-9)) {
+    return { notApplicable: `${why}; its contacts differ in μ or direction, so sliding is not assessed apart from it` };
+  }
+  let n = 0;
+  let t = 0;
+  for (const c of contacts) {
+    const r = reactions[c.id];
+    if (!r) return { notApplicable: `${why}: sliding is not assessed` };
+    n += r.n ?? 0;
+    t += r.t ?? 0;
+  }
+  const available = mu * Math.max(n, 0);
+  const driving = Math.abs(t);
+  const factor = driving > 1e-12 ? available / driving : Infinity;
+  return { factor, available, driving, required, pass: factor >= required, wholeBody: true };
+}
+
 export function bodyStability(model: BodyModel, result: { reactions: Record<string, Reaction>; bodies: Record<string, BodyResult> }, req: Requirements): BodyStability {
-  return { overturning: overturningCheck(model, req.overturning), sliding: slidingCheck(model, result.reactions, req.sliding) };
+  return { overturning: overturningCheck(model, req.overturning), sliding: slidingCheck(model, result.reactions, req.sliding, result.bodies[model.body.id]?.status) };
 }

@@ -179,6 +179,30 @@ describe("factors of safety with their figures (common practice)", () => {
     expect(sl[5]).toBe("kN");
   });
 
+  it("a block that tips is taken as a whole against sliding: μ·W over P, not the one contact left bearing", () => {
+    // P·h > W·b/2: it tips about the toe; the heel would have to pull
+    const Pbig = 4000;
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any
+    const tipping: any = structuredClone(doc);
+    tipping.loads[0].fx = Pbig;
+    const study = solveCases(fileOf(tipping));
+    const run = study.runs[0];
+    if (!run.ok) throw new Error("did not solve");
+    expect(run.result.bodies.blk.status).toBe("tips");
+    const sl = run.stability.blk.sliding;
+    if ("notApplicable" in sl) throw new Error(sl.notApplicable);
+    expectRel(sl.available, mu * Wb, 1e-9);
+    expectRel(sl.driving, Pbig, 1e-9);
+    expectRel(sl.factor, (mu * Wb) / Pbig, 1e-9);
+    expect(sl.wholeBody).toBe(true);
+    expect(stabilityTable(study, "SI").rows[1][2]).toBe("sliding (as a whole: it tips)");
+    // with a different μ at the heel the sums depend on how the contacts share the load: not assessed
+    tipping.supports[0].mu = 0.3;
+    const mixed = solveCases(fileOf(tipping)).runs[0];
+    if (!mixed.ok) throw new Error("did not solve");
+    expect(mixed.stability.blk.sliding).toEqual({ notApplicable: "the body tips; its contacts differ in μ or direction, so sliding is not assessed apart from it" });
+  });
+
   it("in US units the moments are in lbf·ft (1 lbf·ft = 1.3558179483 N·m, NIST SP 811)", () => {
     const t = stabilityTable(solveCases(fileOf(doc)), "US");
     const [ot, sl] = t.rows;
