@@ -74,6 +74,25 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
   const [panelOpen, setPanelOpen] = useState(false);
   // the tray and the element list on phone-width screens
   const [trayOpen, setTrayOpen] = useState(false);
+  // one panel over the drawing at a time; Escape closes it (a field's own Escape blurs it first)
+  const openOverlay = (which: "panel" | "tray" | null) => {
+    setPanelOpen(which === "panel");
+    setTrayOpen(which === "tray");
+  };
+  useEffect(() => {
+    if (!panelOpen && !trayOpen) return;
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key !== "Escape" || e.defaultPrevented) return;
+      const overPanel = panelOpen && window.matchMedia("(max-width: 1179px)").matches;
+      const overTray = trayOpen && window.matchMedia("(max-width: 639px)").matches;
+      if (!overPanel && !overTray) return;
+      setPanelOpen(false);
+      setTrayOpen(false);
+      document.querySelector<HTMLElement>(`[data-testid=${overPanel ? "toggle-properties" : "toggle-tray"}]`)?.focus();
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [panelOpen, trayOpen]);
   // choosing something to place closes the tray there, so the tap that places it lands on the drawing
   useEffect(
     () =>
@@ -132,8 +151,8 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
             saved={saved}
             onOpenExample={openExample}
             extra={toolbarExtra}
-            panel={{ open: panelOpen, toggle: () => setPanelOpen((o) => !o) }}
-            tray={{ open: trayOpen, toggle: () => setTrayOpen((o) => !o) }}
+            panel={{ open: panelOpen, toggle: () => openOverlay(panelOpen ? null : "panel") }}
+            tray={{ open: trayOpen, toggle: () => openOverlay(trayOpen ? null : "tray") }}
           />
           <div className="relative flex min-h-0 flex-1">
             <aside

@@ -163,6 +163,14 @@ describe("placing elements from the tray and the keyboard", () => {
       await shot(page, "placing-narrow-properties");
       await page.getByTestId("close-properties").click();
       await expect.poll(() => panel.isVisible()).toBe(false);
+      // Escape closes it too, from a field inside it, and gives the focus back to its button
+      await page.getByTestId("toggle-properties").click();
+      await expect.poll(() => panel.isVisible()).toBe(true);
+      await panel.locator("input").first().focus();
+      await page.keyboard.press("Escape");
+      await page.keyboard.press("Escape");
+      await expect.poll(() => panel.isVisible()).toBe(false);
+      expect(await page.evaluate(() => document.activeElement?.getAttribute("data-testid"))).toBe("toggle-properties");
     } finally {
       await page.setViewportSize({ width: 1440, height: 900 });
     }
