@@ -435,12 +435,18 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: 
   // a US sheet gives each dimensional value in US customary units too, so it reads beside the hand check
   const inUs = (si: number, kind: string | undefined) =>
     system === "US" && kind && kind in US_QUANTITY && Number.isFinite(si) && si !== 0 ? ` (${formatQuantity(si, kind as Quantity, "US")})` : "";
+  // a number with its unit ("90°", "−0.4", "1,500 N"); an expression's value in the SI unit of its
+  // kind, with a prefix where the trade uses one ("600 kPa", not "600000 Pa")
+  const withUnit = (x: string, unit: string) => (!unit ? x : unit === "°" ? `${x}°` : `${x} ${unit}`);
   const show = (raw: unknown, path: string, name: string): string => {
     const v = parsed.fields[path];
     const kind = FIELD_KIND_BY_NAME[name];
     const unit = kind ? FIELD_UNIT_LABELS[kind] : "";
-    if (typeof raw === "number") return `${Number(raw.toPrecision(6))}${unit ? " " + unit : ""}${inUs(raw, kind)}`;
-    if (typeof raw === "string" && v && "value" in v) return `${raw} = ${Number(v.value.toPrecision(5))}${unit ? " " + unit : ""}${inUs(v.value, kind)}`;
+    if (typeof raw === "number") return `${withUnit(formatNumber(raw, 6), unit)}${inUs(raw, kind)}`;
+    if (typeof raw === "string" && v && "value" in v) {
+      const value = kind && kind in PREFIXED ? formatQuantity(v.value, kind as Quantity, "SI", { sig: 5 }) : withUnit(formatNumber(v.value, 5), unit);
+      return `${raw} = ${value}${inUs(v.value, kind)}`;
+    }
     return String(raw);
   };
   const coord = (raw: unknown, path: string): number => {
@@ -473,7 +479,7 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: 
   rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (${acts}${typed})`]);
   return {
     id: "inputs",
-    title: system === "US" ? "Elements (as typed; expressions with their values in SI units, US customary in brackets, angles in degrees)" : "Elements (as typed; expressions with their values in SI units, angles in degrees)",
+    title: system === "US" ? "Elements (fields by their names in the sketch file, as typed; expressions with their values in SI units, US customary in brackets, angles in degrees)" : "Elements (fields by their names in the sketch file, as typed; expressions with their values in SI units, angles in degrees)",
     columns: [
       { key: "id", label: "Id", align: "left" },
       { key: "kind", label: "Kind", align: "left" },
@@ -486,6 +492,9 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: 
 }
 
 /** The field kinds that have US customary units to show beside the SI value. */
+/** Kinds whose SI values read with a prefix (kN, kPa, kN/m…). */
+const PREFIXED: Readonly<Record<string, true>> = { force: true, moment: true, pressure: true, lineLoad: true, stiffness: true };
+
 const US_QUANTITY: Readonly<Record<string, true>> = { length: true, mass: true, force: true, moment: true, lineLoad: true, massFlow: true, velocity: true, pressure: true, area: true, density: true, volumeFlow: true, stiffness: true, acceleration: true };
 
 /** CSV of a table: a header with units, numbers unformatted (6 significant figures). */

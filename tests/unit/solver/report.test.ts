@@ -95,23 +95,34 @@ describe("result tables", () => {
     const t = inputsTable(p);
     const out = t.rows.find((r) => r[0] === "out")!;
     expect(out[1]).toBe("outlet");
-    expect(out[4]).toContain("angle theta = 60 °");
+    expect(out[4]).toContain("angle theta = 60°");
     expect(out[4]).toContain("at (0.6 * cos(theta) = 0.3, 0.6 * sin(theta) = 0.51962) m");
     expect(t.rows[0]).toEqual(["gravity", "", "", "", "0 m/s² (acts in −y)"]);
     const params = parametersTable(p);
     expect(params.rows.find((r) => r[0] === "p1")).toEqual(["p1", "600 kPa", "600 kPa"]);
   });
 
+  it("writes values as the rest of the sheet does: a true minus, thousands grouped, kPa for pascals, 90° for angles", async () => {
+    const { exampleById } = await import("@/canvas/examples");
+    const p = parseSketch(exampleById("pump-skid")!.sketch);
+    if (!p.ok) throw new Error();
+    const t = inputsTable(p);
+    // 1 bar = 100 kPa (SI Brochure, 9th ed., Table 8)
+    expect(t.rows.find((r) => r[0] === "suction")![4]).toContain("pressure -0.4 bar = −40 kPa");
+    expect(t.rows.find((r) => r[0] === "discharge")![4]).toContain("pressure 2.5 bar = 250 kPa");
+    expect(t.rows.find((r) => r[0] === "rear")![4]).toContain("angle 90°; mu 0.4");
+  });
+
   it("a US sheet's inputs give the US customary value beside the SI one", () => {
     // 600 kPa / 6894.757 Pa/psi = 87.02 psi; 0.3 m / 0.3048 m/ft = 0.9843 ft (NIST SP 811)
     const t = inputsTable(parsedFixture("pipe-bend-anchor.json"), "US");
     const inlet = t.rows.find((r) => r[0] === "in")!;
-    expect(inlet[4]).toContain("pressure p1 = 600000 Pa (87.02 psi)");
+    expect(inlet[4]).toContain("pressure p1 = 600 kPa (87.02 psi)");
     const out = t.rows.find((r) => r[0] === "out")!;
     expect(out[4]).toContain("at (0.6 * cos(theta) = 0.3, 0.6 * sin(theta) = 0.51962) m = (0.9843, 1.705) ft");
     expect(t.title).toMatch(/US customary in brackets/);
     // angles stay in degrees, with no second value
-    expect(out[4]).toContain("angle theta = 60 °;");
+    expect(out[4]).toContain("angle theta = 60°;");
   });
 });
 
