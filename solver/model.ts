@@ -206,7 +206,9 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         id: p.id,
         body: body.id,
         kind: "momentum",
-        label: tag(`${p.kind === "outlet" ? "momentum out" : "− momentum in"} at ${pname}${beta === 1 ? "" : ` (β = ${Number(beta.toPrecision(4))})`}`, fp),
+        // an inlet's term is its momentum flux with a minus sign (Σ out − Σ in): said in the label,
+        // so a negative value beside it does not read as a double negative
+        label: tag(`${p.kind === "outlet" ? "momentum out" : "momentum in"} at ${pname}${beta === 1 ? "" : ` (β = ${Number(beta.toPrecision(4))})`}${p.kind === "outlet" ? "" : `, as −${beta === 1 ? "" : "β"}ṁV`}`, fp),
         fx,
         fy,
         m: 0,

@@ -174,7 +174,7 @@ export interface EquationTerm {
   id: string;
   body: string;
   kind: "reaction" | "weight" | "force" | "couple" | "distributed" | "pressure" | "inertia" | "momentum";
-  /** e.g. "weight of Skid", "momentum out at p2", "− momentum in at p1", "pressure at p1" */
+  /** e.g. "weight of Skid", "momentum out at p2", "momentum in at p1, as −ṁV", "pressure at p1" */
   label: string;
   fx: number;
   fy: number;
