@@ -3,6 +3,7 @@
 // and redo, the view, snapping and the SI / US switch. Every button runs a registered action.
 import Link from "next/link";
 import type { ReactNode } from "react";
+import { radioKeys } from "@/components/shell/controls";
 import { actionTitle, menuActions, shortcutLabel, type Action } from "@/canvas/actions";
 import { useEditor } from "@/canvas/context";
 import { EXAMPLES } from "@/canvas/examples";
@@ -27,12 +28,13 @@ export function UnitSwitch() {
   const run = useActionRunner();
   return (
     <div role="radiogroup" aria-label="Units shown" className="flex h-7 items-center rounded border border-rule bg-paper-card p-0.5 text-[12px]" data-testid="units">
-      {(["SI", "US"] as const).map((u) => (
+      {(["SI", "US"] as const).map((u, i) => (
         <button
           key={u}
           type="button"
           role="radio"
           aria-checked={units === u}
+          {...radioKeys(i, 2, units === u, (k) => (k === 0 ? "SI" : "US") !== units && run("view.units"))}
           title={u === "SI" ? "SI units (kN, m, kPa)" : "US customary units (lbf, ft, psi)"}
           onClick={() => units !== u && run("view.units")}
           className={`h-6 rounded-[3px] px-2 font-medium ${units === u ? "bg-ink text-paper" : "text-ink-soft hover:text-ink"}`}

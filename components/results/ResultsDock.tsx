@@ -2,6 +2,7 @@
 // "Results", under the drawing: the status in words, the reactions (force on the body or load on
 // the support), the hand check, and the cautions and assumptions beside them.
 import { useState } from "react";
+import { radioKeys } from "@/components/shell/controls";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { CasesPanel } from "@/components/studies/CasesPanel";
 import { downloadCsv } from "@/components/studies/csv";
@@ -120,12 +121,13 @@ export function ResultsDock() {
                   ["body", "Force on the body"],
                   ["support", "Load on the support"],
                 ] as const
-              ).map(([id, label]) => (
+              ).map(([id, label], i) => (
                 <button
                   key={id}
                   type="button"
                   role="radio"
                   aria-checked={sense === id}
+                  {...radioKeys(i, 2, sense === id, (k) => setSense(k === 0 ? "body" : "support"))}
                   onClick={() => setSense(id)}
                   className={`rounded px-2 py-0.5 ${sense === id ? "bg-reaction-soft font-semibold text-reaction" : "text-ink-soft hover:text-ink"}`}
                 >

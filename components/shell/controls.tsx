@@ -1,6 +1,6 @@
 // Form controls and small status pieces shared by the account, workspace and (later) sketch screens.
 import Link from "next/link";
-import type { ButtonHTMLAttributes, InputHTMLAttributes, ReactNode, SelectHTMLAttributes } from "react";
+import type { ButtonHTMLAttributes, InputHTMLAttributes, KeyboardEvent, ReactNode, SelectHTMLAttributes } from "react";
 
 type Tone = "primary" | "secondary" | "danger" | "quiet";
 
@@ -179,12 +179,13 @@ export function Segmented<T extends string>({
     <div className={compact ? "" : "space-y-1"}>
       <span className={compact ? "sr-only" : "block text-sm font-medium text-ink"}>{label}</span>
       <div role="radiogroup" aria-label={label} data-testid={testId} className={`inline-flex items-center rounded-md border border-rule bg-paper-card p-1 text-sm ${compact ? "h-[34px]" : "h-[42px]"}`}>
-        {options.map((o) => (
+        {options.map((o, i) => (
           <button
             key={o.value}
             type="button"
             role="radio"
             aria-checked={value === o.value}
+            {...radioKeys(i, options.length, value === o.value, (k) => value !== options[k].value && onChange(options[k].value))}
             title={o.title}
             onClick={() => value !== o.value && onChange(o.value)}
             className={`h-full rounded px-3 font-medium focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-accent/50 ${value === o.value ? "bg-ink text-paper" : "text-ink-soft hover:text-ink"}`}
@@ -195,6 +196,25 @@ export function Segmented<T extends string>({
       </div>
     </div>
   );
+}
+
+/**
+ * Keyboard for a group of radio buttons (role="radio" buttons in a role="radiogroup"): one Tab
+ * stop, the checked option; the arrow keys move the choice and the focus (WAI-ARIA Authoring
+ * Practices, radio group pattern).
+ */
+export function radioKeys(index: number, count: number, checked: boolean, choose: (index: number) => void) {
+  return {
+    tabIndex: checked ? 0 : -1,
+    onKeyDown: (e: KeyboardEvent<HTMLElement>) => {
+      const step = e.key === "ArrowRight" || e.key === "ArrowDown" ? 1 : e.key === "ArrowLeft" || e.key === "ArrowUp" ? -1 : 0;
+      if (!step) return;
+      e.preventDefault();
+      const next = (index + step + count) % count;
+      choose(next);
+      (e.currentTarget.parentElement?.querySelectorAll<HTMLElement>('[role="radio"]')[next])?.focus();
+    },
+  };
 }
 
 /** "Parent › here" above a page title: the parent is a link back. */

@@ -215,7 +215,7 @@ export function SweepPanel() {
         </div>
         <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1">Numbers in the unit the parameter is written in{data?.unit ? ` (${prettyUnit(data.unit)})` : ""}, or give a unit (“90 km/hr”); the flow factor is a plain number.</p>
         {(sketch.cases?.length ?? 0) > 0 && (
-          <label className="block">
+          <label className="col-span-2 block @4xl:col-span-1">
             <span className={LABEL}>Case</span>
             <select className={INPUT} value={caseId} onChange={(e) => setCaseId(e.target.value)} aria-label="Case to sweep">
               <option value="">As drawn</option>
