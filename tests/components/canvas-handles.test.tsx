@@ -153,12 +153,18 @@ describe("the turn handle", () => {
     { id: "out", sign: 1, angle: 0, anchor: [4, 0.5] },
   ];
 
-  it("is drawn 66 px from the anchor along the element's direction, on the side the user grips", async () => {
+  it("is drawn along the element's direction, on the side the user grips: 66 px out, or a little further past the element's words", async () => {
     for (const c of CASES) {
       const h = await turnHandle(c.id);
-      const expected = pointerFor(screenOf(c.anchor), c.angle, c.sign);
-      expect(h[0], c.id).toBeCloseTo(expected[0], 6);
-      expect(h[1], c.id).toBeCloseTo(expected[1], 6);
+      const anchor = screenOf(c.anchor);
+      const unit = pointerFor([0, 0], c.angle, c.sign).map((x) => x / ROTATE_HANDLE_PX);
+      const t = Math.hypot(h[0] - anchor[0], h[1] - anchor[1]);
+      // on the ray from the anchor, on the gripped side
+      expect((h[0] - anchor[0]) * unit[0] + (h[1] - anchor[1]) * unit[1], c.id).toBeCloseTo(t, 6);
+      // the force's words sit at its tail, where its handle is: the handle moves out past them
+      if (c.id === "push") expect(t, c.id).toBeGreaterThan(ROTATE_HANDLE_PX);
+      else if (c.id !== "in") expect(t, c.id).toBeCloseTo(ROTATE_HANDLE_PX, 6);
+      expect(t, c.id).toBeLessThanOrEqual(120 + 1e-6);
     }
     // a pin has no direction to turn; a body has corners instead
     act(() => ed().select(["pin"]));
