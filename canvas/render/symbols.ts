@@ -285,22 +285,35 @@ export function bodyPrims(b: SceneBody, o: SymbolOptions & { gravityOn?: boolean
   if (o.showName !== false && pts.length) {
     // a mass the solver refuses (below zero, or no number) is not drawn as if it counted
     const words = `${b.label || b.id} · ${Number.isFinite(b.mass) && b.mass >= 0 ? q(b.mass, "mass", o.units) : "mass not valid"}`;
-    const at = bodyLabelPoint(pts, words.length * 6.4 + 8);
-    out.push(text(at, words, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
+    // clear of the centre-of-gravity mark and of the weight's arrow and label below and beside it
+    const cg: Pt | null = Number.isFinite(b.cg[0]) && Number.isFinite(b.cg[1]) ? [b.cg[0] * o.scale, -b.cg[1] * o.scale] : null;
+    const avoid = cg ? { x0: cg[0] - 12, y0: cg[1] - 12, x1: cg[0] + 80, y1: cg[1] + 60 } : null;
+    const at = bodyLabelPoint(pts, words.length * 6.4 + 8, avoid);
+    // where one line would cover the centre of gravity, the name and the mass on two lines may not
+    const name = b.label || b.id;
+    const mass = words.slice(name.length + 3);
+    const two = at.clear ? null : bodyLabelPoint(pts, Math.max(name.length, mass.length) * 6.4 + 8, avoid, 13);
+    if (two?.clear) {
+      out.push(text(two.at, name, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
+      out.push(text([two.at[0], two.at[1] + 13], mass, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
+    } else out.push(text(at.at, words, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
   }
   return out;
 }
 
-/** A corner inside the outline where the body's name fits (top corners first). */
-function bodyLabelPoint(pts: Pt[], width: number): Pt {
+/** A corner inside the outline where the body's name fits (top corners first), off `avoid` when
+ *  one can be (the centre of gravity and the weight), else the first that fits. */
+function bodyLabelPoint(pts: Pt[], width: number, avoid: { x0: number; y0: number; x1: number; y1: number } | null = null, extra = 0): { at: Pt; clear: boolean } {
   const poly = pts.map((p) => [p[0], -p[1]] as Vec2);
   const inside = (p: Pt) => pointInPolygon([p[0], -p[1]], poly);
   const order = [...pts].sort((a, b) => a[0] + a[1] - (b[0] + b[1]) || a[1] - b[1]);
-  for (const v of order) {
-    const at: Pt = [v[0] + 7, v[1] + 13];
-    if (inside(at) && inside([at[0] + width, at[1]]) && inside([at[0], at[1] - 6]) && inside([at[0] + width, at[1] + 6])) return at;
-  }
-  return [order[0][0] + 7, order[0][1] + 13];
+  // `extra`: the height of a second line under the first
+  const fits = order
+    .map((v): Pt => [v[0] + 7, v[1] + 13])
+    .filter((at) => inside(at) && inside([at[0] + width, at[1]]) && inside([at[0], at[1] - 6]) && inside([at[0] + width, at[1] + 6 + extra]) && inside([at[0], at[1] + 6 + extra]));
+  const clear = (at: Pt) => !avoid || at[0] + width < avoid.x0 || at[0] > avoid.x1 || at[1] + 7 + extra < avoid.y0 || at[1] - 7 > avoid.y1;
+  const best = fits.find(clear);
+  return best ? { at: best, clear: true } : { at: fits[0] ?? [order[0][0] + 7, order[0][1] + 13], clear: !avoid };
 }
 
 /** The centre of gravity: a small quartered circle, around (0, 0). */

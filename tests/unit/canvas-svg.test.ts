@@ -177,6 +177,29 @@ describe("a port with a momentum-flux factor", () => {
   });
 });
 
+describe("a body's name", () => {
+  it("stays off the centre of gravity: on two lines where one would cover it (the trailer drawn small)", () => {
+    const { sketch } = solved("fire-monitor-trailer");
+    const parsed = parseSketch(sketch);
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+    const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+    const scale = 90;
+    const { groups } = scenePrims(scene, scale, "SI", null);
+    const body = groups.find((g) => g.id === scene.bodies[0].id)!;
+    const words = body.prims.filter((p): p is Extract<typeof p, { t: "text" }> => p.t === "text");
+    expect(words.map((w) => w.text)).toEqual(["Monitor trailer", "950 kg"]);
+    const cg = scene.bodies[0].cg;
+    const c = [cg[0] * scale, -cg[1] * scale];
+    for (const w of words) {
+      const b = textBox(w);
+      expect(b.x1 < c[0] - 6.5 || b.x0 > c[0] + 6.5 || b.y1 < c[1] - 6.5 || b.y0 > c[1] + 6.5).toBe(true);
+    }
+    // drawn large, one line fits clear of it
+    const big = scenePrims(scene, 160, "SI", null).groups.find((g) => g.id === scene.bodies[0].id)!;
+    expect(big.prims.filter((p) => p.t === "text").map((p) => (p as { text: string }).text)).toEqual(["Monitor trailer · 950 kg"]);
+  });
+});
+
 describe("gravity turned off −y", () => {
   it("draws the weight along gravity's direction, from the centre of gravity", () => {
     const { sketch } = solved("washing-cart");
