@@ -21,6 +21,9 @@ export interface Analysis {
   shownSketch: Sketch | null;
   /** true when `shown` is an earlier sketch's result */
   stale: boolean;
+  /** the editor's `fitRequest` when `shown` was solved: it moves on when the sketch is replaced as
+   *  a whole, and a result from before that belongs to another sketch */
+  shownGeneration: number;
   /** true while a newer sketch is being solved */
   pending: boolean;
 }
@@ -34,6 +37,7 @@ export const EMPTY_ANALYSIS: Analysis = {
   shown: null,
   shownSketch: null,
   stale: false,
+  shownGeneration: -1,
   pending: false,
 };
 
@@ -44,17 +48,18 @@ function sameMap<V>(a: ReadonlyMap<string, V>, b: ReadonlyMap<string, V>): boole
   return true;
 }
 
-/** `keepShown: false` when the sketch was replaced as a whole (opened, imported, an example): an
- *  earlier sketch's result is then not this one's, stale or not, and is not shown. */
-export function nextAnalysis(prev: Analysis, sketch: SketchFile, core: AnalysisCore, keepShown = true): Analysis {
+/** `generation`: the editor's `fitRequest` the sketch was taken at. An input error keeps the last
+ *  good result (stale) only if it is of the same generation: a sketch opened, imported or replaced
+ *  by an example is another sketch, and an earlier one's result is not shown as its own. */
+export function nextAnalysis(prev: Analysis, sketch: SketchFile, core: AnalysisCore, generation = prev.shownGeneration): Analysis {
   const fresh = fieldValuesById(sketch, core.fields, core.errors);
   // unchanged values keep their identity: the scene (and the drawing) need not be rebuilt
   const fieldValues = sameMap(fresh.values, prev.fieldValues.values) && sameMap(fresh.errors, prev.fieldValues.errors) ? prev.fieldValues : fresh;
   if (core.ok && core.result) {
-    return { sketch, core, fieldValues, shown: core.result, shownSketch: core.numeric, stale: false, pending: false };
+    return { sketch, core, fieldValues, shown: core.result, shownSketch: core.numeric, stale: false, shownGeneration: generation, pending: false };
   }
-  if (!keepShown) return { sketch, core, fieldValues, shown: null, shownSketch: null, stale: false, pending: false };
-  return { sketch, core, fieldValues, shown: prev.shown, shownSketch: prev.shownSketch, stale: prev.shown !== null, pending: false };
+  if (prev.shownGeneration !== generation) return { sketch, core, fieldValues, shown: null, shownSketch: null, stale: false, shownGeneration: generation, pending: false };
+  return { sketch, core, fieldValues, shown: prev.shown, shownSketch: prev.shownSketch, stale: prev.shown !== null, shownGeneration: prev.shownGeneration, pending: false };
 }
 
 export type Runner = (sketch: SketchFile, done: (core: AnalysisCore) => void) => void;
@@ -144,17 +149,13 @@ export function createAnalysisStore(): AnalysisStore {
 export function linkAnalysis(editor: EditorStore, store: AnalysisStore, runner: Runner = syncRunner): () => void {
   let latest: SketchFile | null = null;
   let live = true;
-  // the editor's `fitRequest` moves on when the sketch is replaced as a whole: a result solved
-  // before that belongs to another sketch
-  let shownOf = -1;
   const start = (sketch: SketchFile) => {
     latest = sketch;
     const generation = editor.getState().fitRequest;
     if (!store.getState().pending) store.setState({ pending: true });
     runner(sketch, (core) => {
       if (!live) return;
-      const next = nextAnalysis(store.getState(), sketch, core, shownOf === generation);
-      if (next.shown && !next.stale) shownOf = generation;
+      const next = nextAnalysis(store.getState(), sketch, core, generation);
       store.setState({ ...next, pending: latest !== sketch }, true);
     });
   };
