@@ -6,13 +6,13 @@ import type Konva from "konva";
 import { Circle, Group, Line, Rect, Shape, Text } from "react-konva";
 import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
-import type { UnitSystem } from "@/solver/units";
 import { useEditor, useScene, useStores } from "../context";
 import { DIRECTED } from "../model/elements";
 import { elementGroups, resultLayer } from "../render/scenePrims";
 import { supportStates } from "../render/results";
 import { itemPrims } from "../render/symbols";
-import { dir, textExtent, type Prim } from "../render/prims";
+import { dir, type Prim } from "../render/prims";
+import { handlePlace } from "../render/handles";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
 import { angleOnEdge, bodyAt } from "../placement";
 import { anchorOf, type Scene, type SceneBody, type SceneItem } from "../scene";
@@ -22,36 +22,7 @@ import type { InteractionStore } from "./interaction";
 import { handleSign } from "./pointer";
 
 const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
-export const ROTATE_HANDLE_PX = 66;
-
-/** The farthest a turn handle moves out to clear the element's words (further, it would look detached). */
-const HANDLE_REACH_PX = 120;
-
-/**
- * Where an element's turn handle sits along its direction, and where its angle readout goes: the
- * handle ROTATE_HANDLE_PX out, or further (up to HANDLE_REACH_PX) until it is clear of the element's
- * own words (a port's "ṁ … · V …" sits where its arrow points); the readout at the first corner of
- * the handle where it covers none of them. Offsets are from the element's anchor, in pixels.
- */
-export function handlePlace(item: SceneItem, along: Vec2, scale: number, units: UnitSystem): { distance: number; readout: Vec2 } {
-  // an item's primitives are drawn about its anchor
-  const boxes = itemPrims(item, { units, scale, color: ACCENT, showName: true })
-    .filter((p): p is Extract<Prim, { t: "text" }> => p.t === "text")
-    .map(textExtent);
-  const clear = (x0: number, y0: number, x1: number, y1: number) => boxes.every((b) => !(b.x0 < x1 + 2 && x0 - 2 < b.x1 && b.y0 < y1 + 2 && y0 - 2 < b.y1));
-  let distance = ROTATE_HANDLE_PX;
-  for (let t = ROTATE_HANDLE_PX; t <= HANDLE_REACH_PX; t += 6) {
-    if (clear(along[0] * t - 8, along[1] * t - 8, along[0] * t + 8, along[1] * t + 8)) {
-      distance = t;
-      break;
-    }
-  }
-  const h = [along[0] * distance, along[1] * distance];
-  // "90°" is about 30 × 12 px: upper right, lower right, upper left, lower left of the handle
-  const corners: Vec2[] = [[9, -15], [9, 5], [-41, -15], [-41, 5]];
-  const readout = corners.find(([dx, dy]) => clear(h[0] + dx, h[1] + dy, h[0] + dx + 32, h[1] + dy + 12)) ?? corners[0];
-  return { distance, readout };
-}
+export { ROTATE_HANDLE_PX, handlePlace } from "../render/handles";
 
 const DRAWN_WITH_RESULTS = new Set(["pin", "roller", "contact", "fixed", "tie", "inlet", "outlet"]);
 

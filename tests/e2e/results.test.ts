@@ -7,6 +7,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { BASE_URL, openBrowser, shot } from "./browser";
 import { readFileSync } from "node:fs";
 import { download, dragFromTo } from "./editor-helpers";
+import { handlePlace } from "@/canvas/render/handles";
+import { buildScene, fieldValuesById } from "@/canvas/scene";
+import { parseSketch } from "@/solver";
 
 const BEAM = {
   format: "counterpoise.sketch",
@@ -77,14 +80,19 @@ describe("live results", () => {
     await page.getByRole("list", { name: "Elements of the sketch" }).getByRole("button", { name: /Outlet jet/ }).click();
     const v = await viewOf(page);
     const port = v.at(1.5, 1);
-    // the handle sits 66 px along the jet (straight up); swing it round to point down and to the right
-    const start = { x: port.x, y: port.y - 66 };
-    const end = { x: port.x + 66 * Math.cos(Math.PI / 6), y: port.y + 66 * Math.sin(Math.PI / 6) };
+    // the handle sits along the jet (straight up), 66 px out or past the jet's words: placed as the
+    // canvas places it; swing it round to point down and to the right
+    const parsed = parseSketch(BEAM);
+    if (!parsed.ok) throw new Error("the test sketch does not parse");
+    const jet = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, [])).items.find((i) => i.id === "jet")!;
+    const r = handlePlace(jet, [0, -1], v.scale, "SI").distance;
+    const start = { x: port.x, y: port.y - r };
+    const end = { x: port.x + r * Math.cos(Math.PI / 6), y: port.y + r * Math.sin(Math.PI / 6) };
     await page.mouse.move(start.x, start.y);
     await page.mouse.down();
     for (let i = 1; i <= 20; i++) {
       const a = -Math.PI / 2 + (i / 20) * ((2 * Math.PI) / 3);
-      await page.mouse.move(port.x + 66 * Math.cos(a), port.y + 66 * Math.sin(a));
+      await page.mouse.move(port.x + r * Math.cos(a), port.y + r * Math.sin(a));
     }
     await page.mouse.move(end.x, end.y);
     await page.mouse.up();
