@@ -215,8 +215,7 @@ export function combinationOverlaps(file: SketchFile, combination: CombinationFi
 
 /** Words for a case's factors of groups that no load is in: they change nothing (a typo, or the
  *  group's loads were removed), so the case is not what its factors say. */
-export function caseWarnings(file: SketchFile, c: CaseFile): string[] {
-  const groups = loadGroupsOf(file);
+export function caseWarnings(file: SketchFile, c: CaseFile, groups: readonly string[] = loadGroupsOf(file)): string[] {
   return Object.keys(c.factors ?? {})
     .filter((g) => !groups.includes(g))
     .map((g) => `Case ${c.name} scales load group "${g}", which no load is in, so that factor changes nothing (the sketch's groups: ${groups.join(", ") || "none"}).`);

@@ -81,6 +81,14 @@ export const SelectionHandles = memo(function SelectionHandles() {
   const scale = useEditor((s) => s.view.scale);
   const units = useEditor((s) => s.units);
   const tool = useEditor((s) => s.tool.kind);
+  // the handle's place measures the element's words: once per change of the element, not per render
+  const place = useMemo(() => {
+    if (!el || el.kind === "body" || !DIRECTED.has(el.kind) || !("angle" in el)) return null;
+    const item = el as SceneItem & { angle: number };
+    const d = dir(item.kind === "force" && "magnitude" in item && item.magnitude < 0 ? item.angle + 180 : item.angle);
+    const sign = handleSign(item);
+    return { d, sign, ...handlePlace(item, [d[0] * sign, d[1] * sign], scale, units) };
+  }, [el, scale, units]);
   if (!el || tool !== "select") return null;
   if (el.kind === "body") {
     return (
@@ -105,14 +113,12 @@ export const SelectionHandles = memo(function SelectionHandles() {
       </Group>
     );
   }
-  if (!DIRECTED.has(el.kind) || !("angle" in el)) return null;
+  if (!place) return null;
   const item = el as SceneItem & { angle: number };
   const a = px(anchorOf(item), scale);
   // no handle to turn by while the angle (or the anchor) is an expression in error: nothing to draw it from
   if (![item.angle, a[0], a[1]].every(Number.isFinite)) return null;
-  const d = dir(item.kind === "force" && "magnitude" in item && item.magnitude < 0 ? item.angle + 180 : item.angle);
-  const sign = handleSign(item);
-  const place = handlePlace(item, [d[0] * sign, d[1] * sign], scale, units);
+  const { d, sign } = place;
   const t = place.distance;
   const h: [number, number] = [a[0] + d[0] * t * sign, a[1] + d[1] * t * sign];
   return (

@@ -184,7 +184,7 @@ export function CasesPanel() {
               </tbody>
             </table>
           )}
-          {cases.flatMap((c) => caseWarnings(sketch, c)).map((w) => (
+          {cases.flatMap((c) => caseWarnings(sketch, c, groups)).map((w) => (
             <p key={w} className="mt-1 text-[11.5px] text-caution" data-testid="case-warning">
               <span aria-hidden="true">⚠ </span>
               {w}
