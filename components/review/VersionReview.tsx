@@ -15,7 +15,7 @@ import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import { stateWord } from "@/solver/report";
-import { parseSketch, solveCases } from "@/solver";
+import { studyOfDocument } from "@/lib/review/compare";
 import { CaseTables } from "@/components/studies/CaseTables";
 import { versionConcerns } from "./concerns";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
@@ -62,11 +62,8 @@ function Reactions({ document, units }: { document: SketchFile; units: UnitSyste
 
 /** The version's operating cases and combinations, all solved, as the editor's Cases tab shows them. */
 export function VersionCases({ document, units }: { document: SketchFile; units: UnitSystem }) {
-  const study = useMemo(() => {
-    const parsed = parseSketch(document);
-    if (!parsed.ok || !(parsed.file.cases?.length || parsed.file.combinations?.length)) return null;
-    return solveCases(parsed.file);
-  }, [document]);
+  // solved once per document: the sign-off findings read the same study
+  const study = useMemo(() => (document.cases?.length || document.combinations?.length ? studyOfDocument(document) : null), [document]);
   if (!study) return null;
   const n = study.runs.length;
   return (

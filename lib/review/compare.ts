@@ -3,7 +3,7 @@
 // of safety, sweeps, underlay), and the result: every support's reaction before and
 // after with the change (absolute and %), and each body's status ("holds → lifts").
 // Pure and browser-safe: the API, the comparison page and "compare with my kept changes" share it.
-import { parseSketch, solve, type ParseResult, type SolveResult } from "@/solver";
+import { parseSketch, solve, solveCases, type ParseResult, type SolveResult, type StudyResult } from "@/solver";
 import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } from "@/solver/schema";
 import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
 import { stateWord } from "@/solver/report";
@@ -101,6 +101,18 @@ export function solveDocument(file: SketchFile): Solved {
   const solved = { parsed, result };
   solvedCache.set(file, solved);
   return solved;
+}
+
+const studyCache = new WeakMap<SketchFile, StudyResult | null>();
+
+/** A saved document's operating cases and combinations, solved once per document object (the
+ *  review page's tables and the sign-off findings share it); null when it does not parse. */
+export function studyOfDocument(file: SketchFile): StudyResult | null {
+  if (studyCache.has(file)) return studyCache.get(file) ?? null;
+  const { parsed } = solveDocument(file);
+  const study = parsed.ok ? solveCases(parsed.file) : null;
+  studyCache.set(file, study);
+  return study;
 }
 
 function side(file: SketchFile): Side {

@@ -2,6 +2,7 @@
 // same the calc sheet's first page says.
 import { describe, expect, it } from "vitest";
 import { versionConcerns } from "@/components/review/concerns";
+import { studyOfDocument } from "@/lib/review/compare";
 import { loadFixture } from "./solver/helpers";
 
 describe("a version's concerns for sign-off", () => {
@@ -15,6 +16,14 @@ describe("a version's concerns for sign-off", () => {
     expect(concerns[0]).toBe("As drawn: Lifts off at the front jack — the rear stabiliser leg and the wheel still hold the body");
     expect(concerns).toContain("Low throw — factor of safety against overturning about leg 1.442, below the required 1.5");
     expect(concerns.some((c) => c.startsWith("High throw"))).toBe(false);
+    // the review page's case tables read the very study the findings came from: solved once
+    const study = studyOfDocument(file);
+    expect(study?.runs.map((r) => r.id)).toEqual(["low", "high"]);
+    expect(studyOfDocument(file)).toBe(study);
+  });
+
+  it("a file that is not an object is said not to solve, not thrown on", () => {
+    expect(versionConcerns("not a sketch")[0]).toMatch(/^The sketch does not solve: /);
   });
 
   it("a bend on its anchor that holds, with no cases: nothing to say", () => {
