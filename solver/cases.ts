@@ -61,6 +61,16 @@ function caseSketch(file: SketchFile, c: CaseFile) {
   return { ok: true as const, sketch: r.sketch, warnings: r.warnings };
 }
 
+/** What a case's changes break in the sketch: the input errors of its variant that the sketch as
+ *  drawn does not have (a parameter given in the wrong unit, say). Empty when the case reads. */
+export function caseInputErrors(file: SketchFile, c: CaseFile): FieldError[] {
+  const own = caseSketch(file, c);
+  if (own.ok) return [];
+  const base = caseSketch(file, AS_DRAWN);
+  const known = new Set(base.ok ? [] : base.errors.map((e) => `${e.path} ${e.message}`));
+  return own.errors.filter((e) => !known.has(`${e.path} ${e.message}`));
+}
+
 /** Add the load sets of several cases (each × its factor) on the geometry of the first. */
 export function combineModels(parts: Array<{ models: BodyModel[]; factor: number; name: string }>): BodyModel[] {
   const base = parts[0].models;

@@ -160,6 +160,15 @@ export function excludedWords(study: StudyResult): string[] {
   );
 }
 
+/** Why no envelope is given: a case or combination that did not solve could be the governing one,
+ *  so an envelope of the others would understate the design loads. Null when every run solved. */
+export function unsolvedWords(study: StudyResult): string | null {
+  const names = study.runs.filter((r) => !r.ok).map((r) => r.name);
+  if (!names.length) return null;
+  const list = names.length === 1 ? names[0] : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`;
+  return `No envelope or design loads while ${list} ${names.length === 1 ? "does" : "do"} not solve: without ${names.length === 1 ? "it" : "them"}, they could miss the governing case. Put the input right and run again.`;
+}
+
 const COMPONENT_LABEL: Record<Component, string> = { fx: "Fx", fy: "Fy", resultant: "Resultant", m: "M", n: "Normal n", t: "Tangential t", margin: "Margin" };
 /** Below this (N, N·m) a component is zero in every case, and no case governs it. */
 const NOTHING = 1e-9;

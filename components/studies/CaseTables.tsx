@@ -3,13 +3,14 @@
 // the envelope, each support's design load, and the factors of safety. The editor's Cases tab and
 // a version's review page show the same tables.
 import type { StudyResult } from "@/solver/cases";
-import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, stabilityTable } from "@/solver/report";
+import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, stabilityTable, unsolvedWords } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
 
 export function CaseTables({ result, units }: { result: StudyResult; units: UnitSystem }) {
   const nameOf = (id: string) => result.runs.find((r) => r.id === id)?.name ?? id;
+  const unsolved = unsolvedWords(result);
   return (
     <>
       {result.runs.filter((r) => !r.ok).map((r) => (
@@ -29,12 +30,20 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
         testId="case-reactions"
         caption="▲ / ▼ beside a value: this case governs that component (largest magnitude; ▲ its maximum, ▼ its minimum). “design load”: the case of the support's largest resultant."
       />
-      <div className="mt-3">
-        <ReportTable table={withoutAbsentMoment(envelopeTable(result, units), result)} fileName="envelope" testId="envelope" />
-      </div>
-      <div className="mt-3">
-        <ReportTable table={withoutAbsentMoment(designLoadTable(result, units), result)} fileName="design-loads" testId="design-loads" />
-      </div>
+      {unsolved ? (
+        <p className="mt-3 rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-[12.5px] font-medium text-ink" data-testid="no-envelope">
+          {unsolved}
+        </p>
+      ) : (
+        <>
+          <div className="mt-3">
+            <ReportTable table={withoutAbsentMoment(envelopeTable(result, units), result)} fileName="envelope" testId="envelope" />
+          </div>
+          <div className="mt-3">
+            <ReportTable table={withoutAbsentMoment(designLoadTable(result, units), result)} fileName="design-loads" testId="design-loads" />
+          </div>
+        </>
+      )}
       <div className="mt-3">
         <ReportTable
           table={stabilityTable(result, units)}
@@ -43,7 +52,7 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
           mark={(row, key) => (key === "verdict" && row[8] === "FAIL" ? <span className="ml-1 font-semibold text-caution">(below {row[7]})</span> : null)}
         />
       </div>
-      <p className="mt-2 text-[11.5px] text-ink-faint">
+      <p className={`mt-2 text-[11.5px] text-ink-faint ${unsolved ? "hidden" : ""}`}>
         Design load from — {Object.entries(result.envelope).map(([id, e]) => `${id}: ${nameOf(e.design.case)}`).join(" · ")}
       </p>
     </>

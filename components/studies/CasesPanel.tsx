@@ -4,14 +4,15 @@
 // of all of them at once: reactions per case with the governing case, the envelope with each
 // support's design load, and the factors of safety against overturning and sliding.
 import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState } from "react";
-import { caseWarnings, combinationWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
+import { caseInputErrors, caseWarnings, combinationWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
+import { errorPlace } from "@/components/results/errorPlace";
 import type { CaseFile, CombinationFile } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import { useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
-import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms } from "./casesText";
+import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms, type Parsed } from "./casesText";
 import { CaseTables } from "./CaseTables";
 
 /** Each field's refusal, by its label: reported up so the run waits until they are put right. */
@@ -98,6 +99,17 @@ export function CasesPanel() {
   const putCombos = (next: CombinationFile[]) => editor.getState().apply(setStudy({ key: "combinations", value: next }) as Command<unknown>);
   const updateCase = (i: number, patch: Partial<CaseFile>) => putCases(cases.map((c, k) => (k === i ? { ...c, ...patch } : c)));
   const takenIds = [...cases.map((c) => c.id), ...combinations.map((c) => c.id)];
+  // a value the sketch cannot read with (38 psi for a speed) is refused here, naming what it breaks,
+  // rather than leaving the case unsolved and the envelope without it
+  const parseCaseParameters = (t: string, c: CaseFile): Parsed<Record<string, string> | undefined> => {
+    const r = parseOverrides(t, parameters);
+    if (!r.ok || !r.value) return r;
+    const broken = caseInputErrors(sketch, { ...c, parameters: r.value })[0];
+    if (!broken) return r;
+    const param = /parameters\.([A-Za-z_]\w*)$/.exec(broken.path)?.[1];
+    const where = param ? `${param} = ${r.value[param] ?? ""}` : `${formatOverrides(r.value)} breaks ${errorPlace(sketch, broken.path)}`;
+    return { ok: false, error: `${where}: ${broken.message}` };
+  };
 
   const addCase = () => {
     const name = cases.length ? `Case ${cases.length + 1}` : "Normal operation";
@@ -166,7 +178,7 @@ export function CasesPanel() {
                       <span className="text-[10.5px] text-ink-faint">id {c.id}</span>
                     </td>
                     <td className="pr-1 pb-1">
-                      <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder="theta = 30 deg" parse={(t) => parseOverrides(t, parameters)} onCommit={(t) => { const r = parseOverrides(t, parameters); if (r.ok) updateCase(i, { parameters: r.value }); }} />
+                      <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder="theta = 30 deg" parse={(t) => parseCaseParameters(t, c)} onCommit={(t) => { const r = parseCaseParameters(t, c); if (r.ok) updateCase(i, { parameters: r.value }); }} />
                     </td>
                     <td className="pr-1 pb-1">
                       <TextCell label={`Group factors of ${c.name}`} value={formatFactors(c.factors)} placeholder="dead 1.2, flow 1.5" parse={(t) => parseFactors(t, groups)} onCommit={(t) => { const r = parseFactors(t, groups); if (r.ok) updateCase(i, { factors: r.value }); }} />

@@ -37,7 +37,7 @@ export function ReportTable({
           CSV
         </button>
       </div>
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="num w-full border-collapse text-[12px]" data-testid={testId}>
           {caption && <caption className="caption-top pb-1 text-left text-[11.5px] text-ink-faint">{caption}</caption>}
           <thead>

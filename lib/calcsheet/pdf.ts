@@ -22,7 +22,7 @@ import {
 } from "@/solver";
 import { caseWarnings, combinationWarnings } from "@/solver/cases";
 import { statusSentences } from "@/components/results/statusSentence";
-import { caseFindings, designLoadTable, excludedWords, type Table } from "@/solver/report";
+import { caseFindings, designLoadTable, excludedWords, unsolvedWords, type Table } from "@/solver/report";
 import { lineChartSvg } from "./chart";
 import { sweepCharts } from "./sweeps";
 import { registerFonts } from "./fonts";
@@ -165,8 +165,12 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     drawTable(doc, withoutAbsentMoment(caseReactionTable(study, units), study), left, width, { groupBy: "case" });
     heading("Envelope and design loads");
     for (const w of excludedWords(study)) para(w, 8.5, ACCENT);
-    drawTable(doc, withoutAbsentMoment(envelopeTable(study, units), study), left, width, { groupBy: "support" });
-    drawTable(doc, withoutAbsentMoment(designLoadTable(study, units), study), left, width);
+    const unsolved = unsolvedWords(study);
+    if (unsolved) para(unsolved, 8.5, ACCENT);
+    else {
+      drawTable(doc, withoutAbsentMoment(envelopeTable(study, units), study), left, width, { groupBy: "support" });
+      drawTable(doc, withoutAbsentMoment(designLoadTable(study, units), study), left, width);
+    }
   } else {
     // one run: an envelope of it, or a governing case among one, would only repeat its numbers
     heading("Reactions as drawn");

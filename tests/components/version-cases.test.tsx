@@ -27,6 +27,20 @@ describe("the operating cases on a version's page", () => {
     expect(within(section).getByTestId("design-loads")).toHaveTextContent("front");
   });
 
+  it("gives no envelope while a case does not solve: it could be the governing one", () => {
+    const broken = { ...doc, cases: [...doc.cases!, { id: "typo", name: "Flow typed as a pressure", parameters: { Q: "40 psi" } }] } as SketchFile;
+    render(<VersionCases document={broken} units="SI" />);
+    const section = screen.getByRole("region", { name: "Operating cases" });
+    expect(within(section).getByRole("alert")).toHaveTextContent(/^Flow typed as a pressure could not be solved: /);
+    expect(within(section).getByTestId("no-envelope")).toHaveTextContent(
+      "No envelope or design loads while Flow typed as a pressure does not solve: without it, they could miss the governing case.",
+    );
+    expect(within(section).queryByTestId("envelope")).toBeNull();
+    expect(within(section).queryByTestId("design-loads")).toBeNull();
+    // the cases that did solve still show their reactions
+    expect(within(section).getByTestId("case-reactions")).toHaveTextContent(doc.cases![0].name);
+  });
+
   it("says nothing for a version without cases", () => {
     const { container } = render(<VersionCases document={{ ...doc, cases: undefined, combinations: undefined } as SketchFile} units="SI" />);
     expect(container).toBeEmptyDOMElement();
