@@ -63,7 +63,8 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   // US units on screen, a plain number typed: it is SI (the file format's rule), which a US user may
   // not mean. Said plainly, with what to type instead; not an error, as SI is what some want.
   const usUnit = units === "US" && typeof typed === "number" && typed !== 0 && display !== "angle" && display !== "ratio" && display !== "rotationalStiffness" ? convert(typed, display, "US").unit : null;
-  const plainSI = usUnit && !error ? `A plain number is SI: ${formatDisplay(typed as number, display, "SI")} (= ${formatDisplay(typed as number, display, "US")}). Meant ${usUnit}? Type “${text.trim()} ${typedUnit(usUnit)}”.` : null;
+  // only for what the user typed here: a number the mouse placed (or a file brought) is SI by rule
+  const plainSI = usUnit && !error && draft !== null ? `A plain number is SI: ${formatDisplay(typed as number, display, "SI")} (= ${formatDisplay(typed as number, display, "US")}). Meant ${usUnit}? Type “${text.trim()} ${typedUnit(usUnit)}”.` : null;
 
   let line: string;
   if (error) line = error;

@@ -148,6 +148,11 @@ export function Toolbar({
       </button>
       <label className="ml-2 flex items-center gap-1.5 text-[12px] text-ink-soft" title="Snap to the grid and to body corners and edges (hold Alt to place freely)">
         <input type="checkbox" checked={snap} onChange={() => run("view.snap")} className="accent-accent" />
+        {/* narrow toolbars have no room for the word: a dot grid with a point caught on it says it */}
+        <svg width="14" height="14" viewBox="0 0 14 14" aria-hidden="true" className="lg:hidden" data-testid="snap-icon">
+          {[2, 7, 12].flatMap((x) => [2, 7, 12].map((y) => <circle key={`${x}-${y}`} cx={x} cy={y} r={0.9} fill="currentColor" />))}
+          <circle cx={7} cy={7} r={2.6} fill="none" stroke="currentColor" strokeWidth={1.3} />
+        </svg>
         <span className="max-lg:sr-only">Snap</span>
       </label>
       <div className="ml-3">

@@ -46,6 +46,9 @@ describe("numeric fields with the worker's answer", () => {
     act(() => editor.getState().setUnits("US"));
     // 1 lbf = 4.448 222 N (NIST SP 811); a plain number is SI, and with US units on screen the field says so
     expect(within(form).getByText("⚠ A plain number is SI: 4.448 kN (= 1000 lbf). Meant lbf? Type “4448.22 lbf”.")).toBeInTheDocument();
+    // a number nobody typed here (placed with the mouse, or from a file) is SI by rule: its value in
+    // feet, no note. 2 m / 0.3048 m/ft = 6.562 ft (NIST SP 811)
+    expect(within(form).getByTestId("field-at-x")).toHaveAccessibleDescription("= 6.562 ft");
   });
 });
 
