@@ -23,14 +23,18 @@ export function pinWords(pin: CommentPin | PickedPin | null, labels: Record<stri
   return `at (${formatNumber(pin.at[0], 3)}, ${formatNumber(pin.at[1], 3)}) m`;
 }
 
-/** A text box that offers the workspace's members after “@”. */
+/** A text box that offers the workspace's members after “@”: ↑/↓ pick one, Enter or Tab puts it in, Escape closes the list. */
 function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label }: { id: string; value: string; onChange: (v: string) => void; members: Member[]; placeholder?: string; rows?: number; label: string }) {
   const ref = useRef<HTMLTextAreaElement>(null);
   const [query, setQuery] = useState<string | null>(null);
+  const [active, setActive] = useState(0);
   const matches = query === null ? [] : members.filter((m) => m.name.toLowerCase().startsWith(query.toLowerCase()) || m.name.toLowerCase().includes(` ${query.toLowerCase()}`)).slice(0, 5);
+  const current = matches.length ? Math.min(active, matches.length - 1) : -1;
+  const listId = `${id}-mentions`;
   const track = (text: string, caret: number) => {
     const m = /(^|\s)@([\p{L}\p{N} ]{0,30})$/u.exec(text.slice(0, caret));
     setQuery(m && !/\s{2}|\s$/.test(m[2]) ? m[2] : m && m[2] === "" ? "" : null);
+    setActive(0);
   };
   const insert = (name: string) => {
     const el = ref.current;
@@ -38,7 +42,10 @@ function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label
     const before = value.slice(0, caret).replace(/@([\p{L}\p{N} ]{0,30})$/u, `@${name} `);
     onChange(before + value.slice(caret));
     setQuery(null);
-    requestAnimationFrame(() => el?.focus());
+    requestAnimationFrame(() => {
+      el?.focus();
+      el?.setSelectionRange(before.length, before.length);
+    });
   };
   return (
     <div className="relative">
@@ -52,24 +59,51 @@ function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label
         value={value}
         placeholder={placeholder}
         maxLength={4000}
+        role="combobox"
+        aria-autocomplete="list"
+        aria-expanded={matches.length > 0}
+        aria-controls={matches.length ? listId : undefined}
+        aria-activedescendant={current >= 0 ? `${listId}-${current}` : undefined}
         onChange={(e) => {
           onChange(e.target.value);
           track(e.target.value, e.target.selectionStart);
         }}
         onKeyDown={(e) => {
-          if (e.key === "Escape") setQuery(null);
+          if (!matches.length) return;
+          if (e.key === "ArrowDown" || e.key === "ArrowUp") {
+            e.preventDefault();
+            const step = e.key === "ArrowDown" ? 1 : -1;
+            setActive((current + step + matches.length) % matches.length);
+          } else if ((e.key === "Enter" && !e.shiftKey && !e.ctrlKey && !e.metaKey) || (e.key === "Tab" && !e.shiftKey)) {
+            e.preventDefault();
+            insert(matches[current].name);
+          } else if (e.key === "Escape") {
+            e.preventDefault();
+            e.stopPropagation();
+            setQuery(null);
+          }
         }}
         className="block w-full rounded-md border border-rule bg-paper-card px-3 py-2 text-[13.5px] text-ink outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25"
       />
       {matches.length ? (
-        <ul className="absolute left-2 top-full z-20 mt-1 w-56 rounded-md border border-rule bg-paper-card py-1 shadow-[0_6px_24px_rgba(29,35,41,0.14)]" role="listbox" aria-label="Mention a member">
-          {matches.map((m) => (
-            <li key={m.id}>
-              <button type="button" role="option" aria-selected="false" onMouseDown={(e) => e.preventDefault()} onClick={() => insert(m.name)} className="block w-full px-3 py-1 text-left text-[13px] hover:bg-paper-deep">
-                @{m.name}
-              </button>
+        <ul id={listId} className="absolute left-2 top-full z-20 mt-1 w-56 rounded-md border border-rule bg-paper-card py-1 shadow-[0_6px_24px_rgba(29,35,41,0.14)]" role="listbox" aria-label="Mention a member">
+          {matches.map((m, i) => (
+            <li
+              key={m.id}
+              id={`${listId}-${i}`}
+              role="option"
+              aria-selected={i === current}
+              onMouseDown={(e) => e.preventDefault()}
+              onMouseEnter={() => setActive(i)}
+              onClick={() => insert(m.name)}
+              className="block w-full cursor-pointer px-3 py-1 text-left text-[13px] aria-selected:bg-paper-deep"
+            >
+              @{m.name}
             </li>
           ))}
+          <li role="presentation" className="border-t border-rule-soft px-3 pt-1 text-[11px] text-ink-faint">
+            ↑ ↓ to choose · Enter to mention · Esc to close
+          </li>
         </ul>
       ) : null}
     </div>

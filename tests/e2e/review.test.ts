@@ -71,7 +71,9 @@ describe("review of a calculation in the browser", () => {
     expect(await page.getByTestId("new-comment-pin").textContent()).toBe("Pinned on rear foot");
     const box = page.getByLabel("New comment");
     await box.fill("Rear foot friction: is μ = 0.4 right on a wet slab? @Orla");
-    await page.getByRole("option", { name: "@Orla Approver" }).click();
+    // the list offers the match as the active option; Enter puts it in (the keyboard's way: no mouse)
+    expect(await page.getByRole("option", { name: "@Orla Approver" }).getAttribute("aria-selected")).toBe("true");
+    await box.press("Enter");
     expect(await box.inputValue()).toBe("Rear foot friction: is μ = 0.4 right on a wet slab? @Orla Approver ");
     await page.getByRole("button", { name: "Comment", exact: true }).click();
     const thread = page.getByTestId("thread-1");
