@@ -27,7 +27,7 @@ function componentsText(r: ReactionChange, units: UnitSystem): string {
 export function ReactionsTable({ comparison, units = "SI" }: { comparison: Comparison; units?: UnitSystem }) {
   if (!comparison.reactions.length) return <p className="text-sm text-ink-soft">Neither version has a support.</p>;
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full text-sm" data-testid="reaction-changes">
         <caption className="sr-only">Reactions before and after</caption>
         <thead>
@@ -114,7 +114,7 @@ export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
           ))}
         </ul>
       ) : null}
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full text-sm" data-testid="field-changes">
           <caption className="sr-only">Inputs that changed, before and after</caption>
           <thead>

@@ -44,7 +44,7 @@ export function Disclosure({
   }, [open]);
 
   return (
-    <div ref={root} className="relative">
+    <div ref={root} className="relative min-w-0">
       <button
         ref={trigger}
         type="button"
@@ -52,7 +52,7 @@ export function Disclosure({
         aria-expanded={open}
         aria-controls={panelId}
         onClick={() => setOpen((o) => !o)}
-        className="flex items-center gap-2 rounded-md px-2 py-1.5 text-left hover:bg-paper-deep aria-expanded:bg-paper-deep"
+        className="flex max-w-full items-center gap-2 rounded-md px-2 py-1.5 text-left hover:bg-paper-deep aria-expanded:bg-paper-deep"
       >
         {button}
         <svg aria-hidden="true" width="10" height="10" viewBox="0 0 10 10" className={`shrink-0 text-ink-faint transition-transform ${open ? "rotate-180" : ""}`}>
@@ -62,7 +62,7 @@ export function Disclosure({
       {open ? (
         <div
           id={panelId}
-          className={`absolute top-full z-30 mt-1.5 ${width} ${align === "right" ? "right-0" : "left-0"} rounded-lg border border-rule bg-paper-card p-1.5 shadow-[0_14px_36px_-14px_rgba(29,35,41,0.35)]`}
+          className={`absolute top-full z-30 mt-1.5 ${width} max-w-[calc(100vw-2rem)] ${align === "right" ? "right-0" : "left-0"} rounded-lg border border-rule bg-paper-card p-1.5 shadow-[0_14px_36px_-14px_rgba(29,35,41,0.35)]`}
         >
           {children(() => setOpen(false))}
         </div>

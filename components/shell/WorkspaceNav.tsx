@@ -14,10 +14,11 @@ export function WorkspaceNav({ workspaceId, role }: { workspaceId: string; role:
   const pathname = usePathname();
   const base = `/workspaces/${workspaceId}`;
   return (
-    <nav aria-label="Workspace" className="mx-auto flex max-w-6xl gap-1 px-6">
+    <nav aria-label="Workspace" className="mx-auto flex max-w-6xl gap-1 overflow-x-auto px-4 sm:px-6">
       {WORKSPACE_TABS.filter((t) => can(role, t.permission)).map((t) => {
         const href = base + t.path;
-        const active = t.path === "" ? pathname === base : pathname.startsWith(href);
+        // the overview holds the sketches: their pages (history, versions, comparisons) are under it
+        const active = t.path === "" ? pathname === base || pathname.startsWith(`${base}/sketches`) : pathname.startsWith(href);
         return (
           <Link
             key={t.label}

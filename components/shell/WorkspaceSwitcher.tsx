@@ -17,7 +17,7 @@ export function WorkspaceSwitcher({ workspaces, currentId }: { workspaces: Switc
       button={
         <span className="flex min-w-0 flex-col leading-tight">
           <span className="text-[11px] font-medium uppercase tracking-wider text-ink-faint">{"Workspace "}</span>
-          <span className="max-w-[18rem] truncate text-sm font-semibold text-ink">{current ? current.name : "Choose a workspace"}</span>
+          <span className="max-w-[18rem] truncate text-sm font-semibold text-ink max-sm:max-w-[10rem]">{current ? current.name : "Choose a workspace"}</span>
         </span>
       }
     >

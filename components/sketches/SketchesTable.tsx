@@ -142,7 +142,7 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
         )
       ) : data ? (
         <>
-          <div className="overflow-x-auto">
+          <div className="relative overflow-x-auto">
             <table className="w-full text-sm" aria-busy={query.isFetching || undefined}>
               <caption className="sr-only">Sketches in this workspace</caption>
               <thead>

@@ -78,7 +78,7 @@ export function VersionHistory({
           ) : null}
         </div>
       ) : null}
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full text-sm">
           <caption className="sr-only">Version history, newest first</caption>
           <thead>

@@ -37,7 +37,7 @@ export function InvitationsTable({ workspaceId }: { workspaceId: string }) {
     <div className="space-y-3">
       {failure ? <Notice tone="error">{failure instanceof ApiError ? failure.message : "That did not work. Try again."}</Notice> : null}
       {resend.isSuccess ? <Notice tone="success">A new link was sent; the old one no longer works.</Notice> : null}
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full text-sm">
           <caption className="sr-only">Open invitations</caption>
           <thead>

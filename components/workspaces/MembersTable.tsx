@@ -86,7 +86,7 @@ export function MembersTable({
   return (
     <div className="space-y-3">
       {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full text-sm">
           <caption className="sr-only">{loading ? "Loading the members" : "Members of this workspace"}</caption>
           <thead>
