@@ -3,6 +3,7 @@
 import { describe, expect, it } from "vitest";
 import { versionConcerns } from "@/components/review/concerns";
 import { studyOfDocument } from "@/lib/review/compare";
+import type { SketchFile } from "@/solver/schema";
 import { loadFixture } from "./solver/helpers";
 
 describe("a version's concerns for sign-off", () => {
@@ -17,9 +18,9 @@ describe("a version's concerns for sign-off", () => {
     expect(concerns).toContain("Low throw — factor of safety against overturning about leg 1.442, below the required 1.5");
     expect(concerns.some((c) => c.startsWith("High throw"))).toBe(false);
     // the review page's case tables read the very study the findings came from: solved once
-    const study = studyOfDocument(file);
+    const study = studyOfDocument(file as SketchFile);
     expect(study?.runs.map((r) => r.id)).toEqual(["low", "high"]);
-    expect(studyOfDocument(file)).toBe(study);
+    expect(studyOfDocument(file as SketchFile)).toBe(study);
   });
 
   it("a file that is not an object is said not to solve, not thrown on", () => {
