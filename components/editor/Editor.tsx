@@ -39,8 +39,10 @@ const SketchCanvas = dynamic(() => import("@/canvas/konva/SketchCanvas"), {
 function StatusLine() {
   const notice = useEditor((s) => s.notice);
   const tool = useEditor((s) => s.tool.kind);
-  const hint =
-    tool === "select"
+  const readOnly = useEditor((s) => s.readOnly);
+  const hint = readOnly
+    ? "Read only: click an element to see its values · Space+drag or middle button: pan · wheel: zoom"
+    : tool === "select"
       ? "Drag to move · handles turn and reshape · Shift+click adds to the selection · Alt: no snapping · Space+drag or middle button: pan · wheel: zoom"
       : "Esc: back to selecting · Alt: no snapping";
   return (
@@ -128,7 +130,8 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
         },
         save: () => {
           void persistence.save(stores.editor.getState().sketch);
-          stores.editor.getState().notify(persistence.kind === "scratch" ? "Kept in this browser. Sign in to save it to a workspace." : "Saving…");
+          // a saved sketch asks for the version's message first: its dialog and the save say the rest
+          if (persistence.kind === "scratch") stores.editor.getState().notify("Kept in this browser. Sign in to save it to a workspace.");
         },
         showKeys: () => setKeysOpen(true),
       },

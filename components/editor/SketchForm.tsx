@@ -34,6 +34,7 @@ export function SketchForm() {
   const gravity = useEditor((s) => s.sketch.gravity);
   const gravityAngle = useEditor((s) => s.sketch.gravityAngle);
   const motion = useEditor((s) => s.sketch.motion);
+  const readOnly = useEditor((s) => s.readOnly);
   const apply = (c: Command<unknown>, coalesce?: string) => editor.getState().apply(c, coalesce ? { coalesce } : undefined);
   const setMotionField = (k: "ax" | "ay" | "freeX", v: Numeric | boolean | undefined, c?: string) => {
     apply(setMotion({ motion: { ...(motion ?? {}), [k]: v } }) as Command<unknown>, c);
@@ -42,7 +43,7 @@ export function SketchForm() {
   return (
     <div className="space-y-2.5" data-testid="sketch-form">
       <p className="text-[13px] font-semibold text-ink">Sketch</p>
-      <p className="text-[12px] leading-snug text-ink-faint">Nothing selected. Pick an element on the drawing or in the list to edit it.</p>
+      <p className="text-[12px] leading-snug text-ink-faint">Nothing selected. Pick an element on the drawing or in the list to {readOnly ? "see its values" : "edit it"}.</p>
       <TextField label="Title" value={title} maxLength={300} onCommit={(v, c) => void apply(setSketchField({ field: "title", value: v || undefined }) as Command<unknown>, c)} />
       <TextField label="Notes" value={description} multiline maxLength={5000} onCommit={(v, c) => void apply(setSketchField({ field: "description", value: v || undefined }) as Command<unknown>, c)} />
       {GRAVITY_FIELDS.map((f) => (

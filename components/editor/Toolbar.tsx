@@ -95,6 +95,9 @@ export function Toolbar({
   const scale = useEditor((s) => s.view.scale);
   const snap = useEditor((s) => s.snap);
   const units = useEditor((s) => s.units);
+  // a sketch this reader may not change: nothing is offered that would replace or change it
+  const readOnly = useEditor((s) => s.readOnly);
+  const fileActions = menuActions("file").filter((a) => !readOnly || a.id.startsWith("file.export"));
   return (
     <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3 max-sm:h-auto max-sm:flex-wrap max-sm:py-1.5">
       <Link href="/" className="mr-2 flex items-center gap-1.5 text-ink" aria-label="Counterpoise home">
@@ -115,14 +118,16 @@ export function Toolbar({
           {saved ? ` · saved ${saved}` : ""}
         </p>
       </div>
-      <Menu label="File" testId="menu-file" items={menuItems(menuActions("file"), run)} />
+      <Menu label="File" testId="menu-file" items={menuItems(fileActions, run)} />
+      {readOnly ? null : (
       <Menu
-        label="Open an example"
-        shortLabel="Examples"
-        testId="menu-examples"
-        wide
-        items={EXAMPLES.map((e) => ({ id: `example-${e.id}`, label: e.title, detail: e.summary, onSelect: () => onOpenExample(e.id) }))}
-      />
+          label="Open an example"
+          shortLabel="Examples"
+          testId="menu-examples"
+          wide
+          items={EXAMPLES.map((e) => ({ id: `example-${e.id}`, label: e.title, detail: e.summary, onSelect: () => onOpenExample(e.id) }))}
+        />
+      )}
       <div className="mx-2 h-5 w-px bg-rule" aria-hidden="true" />
       <button type="button" className={ICON_BUTTON} disabled={!canUndo} onClick={() => run("edit.undo")} title={canUndo ? actionTitle("edit.undo", `Undo: ${undoLabel}`) : "Nothing to undo"} aria-label="Undo" data-testid="undo">
         <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true"><path d="M5 4L2 7l3 3M2.5 7H10a3.5 3.5 0 010 7H7" fill="none" stroke="currentColor" strokeWidth="1.5" strokeLinecap="round" strokeLinejoin="round" /></svg>

@@ -236,6 +236,7 @@ export function CommentsPanel({
   picking,
   onPicking,
   onClearPin,
+  onPin,
   selected,
   onSelect,
   onChanged,
@@ -248,6 +249,8 @@ export function CommentsPanel({
   picking: boolean;
   onPicking: (on: boolean) => void;
   onClearPin: () => void;
+  /** pin chosen without the drawing (the element list beside the form: the keyboard's way) */
+  onPin: (pin: PickedPin) => void;
   selected: string | null;
   onSelect: (id: string) => void;
   onChanged: () => void;
@@ -258,6 +261,15 @@ export function CommentsPanel({
   const err = [m.post.error, m.patch.error, m.remove.error, m.unattach.error].find((e) => e instanceof ApiError) as ApiError | undefined;
   const attachProblems = m.post.data?.problems ?? [];
   const open = data.threads.filter((t) => !t.resolvedAt).length;
+  // Escape gives up pinning, wherever the focus is
+  useEffect(() => {
+    if (!picking) return;
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape") onPicking(false);
+    };
+    document.addEventListener("keydown", onKey);
+    return () => document.removeEventListener("keydown", onKey);
+  }, [picking, onPicking]);
   return (
     <div className="space-y-3">
       {data.locked ? <Notice tone="info" title="Approved: locked">This version takes no new comments. Comment on a newer version, or ask an owner to withdraw the approval.</Notice> : null}
@@ -275,8 +287,28 @@ export function CommentsPanel({
           <FilePicker id="new-comment" files={files} onChange={setFiles} />
           <div className="flex flex-wrap items-center gap-2 text-xs">
             <span className="text-ink-soft" data-testid="new-comment-pin">
-              {picking ? "Click an element or a point on the drawing…" : `Pinned ${pinWords(pin, labels)}`}
+              {picking ? "Click an element or a point on the drawing (Esc stops), or choose one:" : `Pinned ${pinWords(pin, labels)}`}
             </span>
+            {picking ? (
+              <select
+                aria-label="Pin to an element"
+                className="rounded-md border border-rule bg-paper-card px-1.5 py-1 text-xs"
+                value=""
+                onChange={(e) => {
+                  const id = e.target.value;
+                  if (!id) return;
+                  onPin({ kind: "element", elementId: id, label: labels[id] ?? id });
+                  onPicking(false);
+                }}
+              >
+                <option value="">an element…</option>
+                {Object.entries(labels).map(([id, label]) => (
+                  <option key={id} value={id}>
+                    {label}
+                  </option>
+                ))}
+              </select>
+            ) : null}
             {pin ? (
               <button type="button" className="text-ink-faint hover:text-ink" onClick={onClearPin} aria-label="Unpin">
                 ✕
@@ -305,7 +337,13 @@ export function CommentsPanel({
       <p className="text-xs text-ink-faint">
         {data.threads.length} thread{data.threads.length === 1 ? "" : "s"}, {open} open
       </p>
-      {data.threads.length === 0 ? <EmptyState title="No comments yet">Pin a comment to a support, a port or a point, or comment on the whole version.</EmptyState> : null}
+      {data.threads.length === 0 ? (
+        data.canComment && !data.locked ? (
+          <EmptyState title="No comments yet">Pin a comment to a support, a port or a point, or comment on the whole version.</EmptyState>
+        ) : (
+          <p className="text-sm text-ink-soft">No comments on this version.</p>
+        )
+      ) : null}
       <div className="space-y-2">
         {data.threads.map((t, i) => (
           <ThreadView key={t.id} t={t} n={i + 1} labels={labels} data={data} viewerId={viewerId} selected={selected === t.id} onSelect={() => onSelect(t.id)} m={m} />

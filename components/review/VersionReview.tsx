@@ -79,7 +79,8 @@ export function VersionCases({ document, units }: { document: SketchFile; units:
 
 const THREAD_HASH = /^#thread-([\w-]+)$/;
 
-export function VersionReview({ workspaceId, sketchId, sketchTitle, number, latest, viewerId }: { workspaceId: string; sketchId: string; sketchTitle: string; number: number; latest: number; viewerId: string }) {
+/** `canEdit`: the reader may save versions (the editor opens for editing; otherwise read only). */
+export function VersionReview({ workspaceId, sketchId, sketchTitle, number, latest, viewerId, canEdit = true }: { workspaceId: string; sketchId: string; sketchTitle: string; number: number; latest: number; viewerId: string; canEdit?: boolean }) {
   const base = `/api/sketches/${sketchId}/versions/${number}`;
   const qc = useQueryClient();
   const version = useQuery({ queryKey: apiKey(base), queryFn: () => apiFetch<VersionData>(base), staleTime: Infinity });
@@ -147,7 +148,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
               Calc sheet (PDF)
             </a>
             <Link href={number === latest ? `/sketches/${sketchId}` : `/sketches/${sketchId}?version=${number}`} className="rounded-md bg-ink px-3 py-1.5 font-medium text-paper hover:bg-ink-soft">
-              Open in the editor
+              {canEdit ? "Open in the editor" : "Open (read only)"}
             </Link>
           </div>
         </div>
@@ -203,6 +204,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
               picking={picking}
               onPicking={setPicking}
               onClearPin={() => setPin(null)}
+              onPin={setPin}
               selected={selected}
               onSelect={setSelected}
               onChanged={refresh}

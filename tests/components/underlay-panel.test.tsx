@@ -151,11 +151,15 @@ describe("a read-only editor (a viewer or a checker on a saved sketch)", () => {
     const actions = within(screen.getByTestId("selection-actions"));
     expect(actions.getAllByRole("button").map((b) => b.textContent)).toEqual(["Copy"]);
     expect(actions.getByRole("button", { name: "Copy" })).toBeEnabled();
-    // an example cannot replace the sketch, and nothing claims it did
+    // nothing that would replace the sketch is offered: no examples, no import or new sketch; exports stay
     const user = userEvent.setup();
-    await user.click(screen.getByTestId("menu-examples"));
-    await user.click(screen.getByRole("menuitem", { name: /Pressure-pipe bend/ }));
+    expect(screen.queryByTestId("menu-examples")).toBeNull();
+    await user.click(screen.getByTestId("menu-file"));
+    expect(screen.getAllByRole("menuitem").map((m) => m.textContent?.replace(/Ctrl.*$/, ""))).toEqual(["Export JSON", "Export drawing as SVG", "Export drawing as PNG"]);
+    await user.keyboard("{Escape}");
+    expect(screen.getByText(/^Read only: click an element to see its values/)).toBeInTheDocument();
+    // the keys still refuse, and say why (Ctrl+O would import)
+    await user.keyboard("{Control>}o{/Control}");
     expect(screen.getByTestId("sketch-title")).toHaveTextContent("Skid");
-    expect(screen.getByTestId("notice")).toHaveTextContent(/^Read only — your role may not edit this sketch/);
   });
 });

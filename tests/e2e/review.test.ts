@@ -99,6 +99,14 @@ describe("review of a calculation in the browser", () => {
     await page.getByRole("button", { name: "Comment", exact: true }).click();
     await page.getByTestId("thread-2").waitFor();
     expect(await page.locator('[data-testid="review-drawing"] [data-thread]').count()).toBe(2);
+    // without a mouse: Escape stops pinning; the element list pins on an element
+    await page.getByRole("button", { name: "Pin to the drawing" }).click();
+    await page.keyboard.press("Escape");
+    expect(await page.getByTestId("new-comment-pin").textContent()).toBe("Pinned on the whole version");
+    await page.getByRole("button", { name: "Pin to the drawing" }).click();
+    await page.getByLabel("Pin to an element").selectOption({ label: "front foot" });
+    expect(await page.getByTestId("new-comment-pin").textContent()).toBe("Pinned on front foot");
+    await page.getByRole("button", { name: "Unpin" }).click();
     // a pin on the drawing opens its thread
     await page.locator('[data-testid="review-drawing"] [data-thread]').first().click();
     await page.locator('[data-testid="thread-1"][data-selected]').waitFor();
