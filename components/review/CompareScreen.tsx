@@ -136,7 +136,7 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
         <>
           <p className="text-sm text-ink-soft" data-testid="compare-summary">
             {changeCount(comparison) === 0 ? "The inputs are the same." : `${changeCount(comparison)} change${changeCount(comparison) === 1 ? "" : "s"} in the inputs.`}{" "}
-            {comparison.bodies.map((x) => (x.words ? `${x.label}: ${x.words}. ` : `${x.label} ${x.after ?? "—"}, as before. `))}
+            {comparison.bodies.map((x) => (x.words ? `${x.label}: ${x.words}. ` : `${x.label}: ${x.after ?? "—"} (as before). `))}
           </p>
           {layout === "side" ? (
             <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side">

@@ -343,9 +343,17 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: Uni
 
   const label = (id: string) => (eb.get(id) ?? ea.get(id))?.el.label || id;
   const bodyIds = [...new Set([...ea.values(), ...eb.values()].filter((e) => e.collection === "bodies").map((e) => e.el.id))];
+  // a body's status with its slip, as the listings mark it ("holds, but slips"): sliding is a change too
+  const bodyWord = (side: Side, id: string): string | null => {
+    const status = side.result?.bodies[id]?.status;
+    if (!status) return null;
+    const own = new Set([id, ...side.file.supports.filter((s) => s.body === id).map((s) => s.id)]);
+    const slips = side.result!.warnings.some((w) => w.code === "SLIP" && w.ids.some((x) => own.has(x)));
+    return slips ? `${status}, but slips` : status;
+  };
   const bodies: BodyChange[] = bodyIds.map((id) => {
-    const before = A.result?.bodies[id]?.status ?? null;
-    const after = B.result?.bodies[id]?.status ?? null;
+    const before = bodyWord(A, id);
+    const after = bodyWord(B, id);
     return { id, label: label(id), before, after, words: before !== after ? `${before ?? "—"} → ${after ?? "—"}` : null };
   });
 
