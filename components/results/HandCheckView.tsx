@@ -46,7 +46,7 @@ function Block({ b, units, unit }: { b: HandCheckBlock; units: UnitSystem; unit:
           </li>
         ))}
         <li className="flex justify-between gap-2 pt-0.5 font-semibold">
-          <span>= Σ forces on the control volume</span>
+          <span>= Σ {b.key === "m" ? "moments" : "forces"} on the control volume</span>
           <span className="num" data-testid="forces-sum">
             {fmt(b.forcesSum, b.key, units, unit)}
           </span>

@@ -27,6 +27,16 @@ export function supportName(s: Pick<Support, "kind" | "id" | "label">): string {
 
 const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 const ratio = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(2)).toString() : "∞");
+/** A friction coefficient needed beside the one there is, with the digits it takes to tell them
+ *  apart (0.554 against 0.55 is never written "needs 0.55, has 0.55"). */
+function ratios(needed: number, has: number): [string, string] {
+  if (!Number.isFinite(needed) || needed <= has) return [ratio(needed), ratio(has)];
+  for (let d = 2; d <= 6; d++) {
+    const [n, h] = [Number(needed.toPrecision(d)), Number(has.toPrecision(d))];
+    if (n > h) return [String(n), String(h)];
+  }
+  return [String(needed), String(has)];
+}
 
 function list(names: string[]): string {
   if (names.length <= 1) return names.join("");
@@ -55,7 +65,8 @@ function overloaded(c: Context): Array<[Support, Reaction]> {
 function contactSlip(slipping: Array<[Support, Reaction]>): string {
   const [s, r] = slipping[0];
   const more = slipping.length > 1 ? ` (and at ${list(slipping.slice(1).map(([x]) => supportName(x)))})` : "";
-  return `Slips at ${supportName(s)} — needs ${ratio(r.friction!.needed)}, has μ = ${ratio(r.friction!.mu)}${more}`;
+  const [needs, has] = ratios(r.friction!.needed, r.friction!.mu);
+  return `Slips at ${supportName(s)} — needs ${needs}, has μ = ${has}${more}`;
 }
 
 /**
@@ -71,13 +82,14 @@ function slipSentence(c: Context): { headline: string; details: string[] } | nul
   const bearing = c.reactions.filter(([, r]) => r.friction && r.state === "bearing");
   const sumN = bearing.reduce((a, [, r]) => a + (r.n ?? 0), 0);
   if (f && sumN > 0 && f.needed > f.available * (1 + 1e-9)) {
+    const [needs, has] = ratios(f.needed, f.available);
     return {
-      headline: `Slides — its friction contacts must resist ${force(c, f.needed * sumN)} and can give ${force(c, f.available * sumN)} (needs μ = ${ratio(f.needed)} as a whole, has ${ratio(f.available)})`,
+      headline: `Slips as a whole — its friction contacts must resist ${force(c, f.needed * sumN)} and can give ${force(c, f.available * sumN)} (needs μ = ${needs} as a whole, has ${has})`,
       details: slipping.length ? [`${contactSlip(slipping)}.`] : [],
     };
   }
   if (slipping.length) return { headline: contactSlip(slipping), details: [] };
-  return { headline: "Slides — the friction contacts cannot hold it", details: [] };
+  return { headline: "Slips as a whole — the friction contacts cannot hold it", details: [] };
 }
 
 /**

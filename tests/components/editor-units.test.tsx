@@ -102,6 +102,8 @@ describe("the unit of the results follows their size", () => {
     expect(fy).toHaveTextContent("−60.00 N");
     expect(fy).toHaveTextContent("−98.07 N");
     expect(screen.getByTestId("hand-m")).toHaveTextContent("316.1 N·m");
+    expect(screen.getByTestId("hand-m")).toHaveTextContent("= Σ moments on the control volume");
+    expect(screen.getByTestId("hand-fx")).toHaveTextContent("= Σ forces on the control volume");
     expect(fy).not.toHaveTextContent("kN");
     expect(screen.getByTestId("hand-m")).toHaveTextContent(/N·m/);
     expect(screen.getByTestId("hand-m")).not.toHaveTextContent("kN·m");

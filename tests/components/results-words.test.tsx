@@ -62,9 +62,24 @@ describe("status sentences the worked examples do not reach", () => {
     expect(result.bodies.trailer.status).toBe("lifts");
     expect(s.tone).toBe("slips");
     // μ = 0.01 everywhere: the whole trailer slides, and the contact most over its μ follows
-    expect(s.headline).toMatch(/^Slides — its friction contacts must resist [\d.,]+ k?N and can give [\d.,]+ k?N \(needs μ = [\d.]+ as a whole, has 0\.01\)$/);
+    expect(s.headline).toMatch(/^Slips as a whole — its friction contacts must resist [\d.,]+ k?N and can give [\d.,]+ k?N \(needs μ = [\d.]+ as a whole, has 0\.01\)$/);
     expect(s.details[0]).toMatch(/^Slips at the .+ — needs \d[\d.]*, has μ = 0\.01/);
     expect(s.details[1]).toBe("Lifts off at the front jack — the rear stabiliser leg and the wheel still hold the body.");
+  });
+
+  it("a friction coefficient needed just over the one there is gets the digits to tell them apart", () => {
+    // the monitor thrown back at 150°: 3.464 kN to resist against 3.439 kN of friction, a needed
+    // μ of 0.5540 against 0.55 (Coulomb friction, common practice) — never "needs 0.55, has 0.55"
+    const doc = structuredClone(EXAMPLES.find((e) => e.id === "fire-monitor-trailer")!.sketch) as { parameters: Record<string, string> };
+    doc.parameters.theta = "150 deg";
+    const { sketch, result } = solved(doc);
+    const [s] = statusSentences(sketch, result);
+    expect(s.headline).toMatch(/\(needs μ = 0\.554 as a whole, has 0\.55\)$/);
+    // one contact just over its own μ: 0.7004 against 0.7
+    const fixture = load("fire-monitor-trailer");
+    fixture.parameters.theta = "150 deg";
+    const one = solved(fixture);
+    expect(statusSentences(one.sketch, one.result)[0].headline).toBe("Slips at the rear stabiliser leg — needs 0.7004, has μ = 0.7");
   });
 
   it("tipping about a point that is not a support names the point, in metres or in feet", () => {
@@ -116,7 +131,7 @@ describe("status sentences the worked examples do not reach", () => {
     const body = { ...result.bodies.skid, friction: { needed: 0.03, available: 0.02 } };
     const [s] = statusSentences(sketch, { ...result, reactions, bodies: { skid: body } });
     expect(s.tone).toBe("slips");
-    expect(s.headline).toBe(`Slides — its friction contacts must resist ${formatQuantity(0.03 * sumN, "force", "SI")} and can give ${formatQuantity(0.02 * sumN, "force", "SI")} (needs μ = 0.03 as a whole, has 0.02)`);
+    expect(s.headline).toBe(`Slips as a whole — its friction contacts must resist ${formatQuantity(0.03 * sumN, "force", "SI")} and can give ${formatQuantity(0.02 * sumN, "force", "SI")} (needs μ = 0.03 as a whole, has 0.02)`);
   });
 
   it("a block on a slope steeper than its friction angle slides as a whole, whichever contact is over first", () => {
@@ -138,13 +153,13 @@ describe("status sentences the worked examples do not reach", () => {
     expect(s.tone).toBe("slips");
     // must resist W sin 30° = 490.3 N, can give μ W cos 30° = 424.6 N
     expect(s.headline).toBe(
-      `Slides — its friction contacts must resist ${formatQuantity(W * Math.sin(Math.PI / 6), "force", "SI")} and can give ${formatQuantity(0.5 * W * Math.cos(Math.PI / 6), "force", "SI")} (needs μ = 0.58 as a whole, has 0.5)`,
+      `Slips as a whole — its friction contacts must resist ${formatQuantity(W * Math.sin(Math.PI / 6), "force", "SI")} and can give ${formatQuantity(0.5 * W * Math.cos(Math.PI / 6), "force", "SI")} (needs μ = 0.58 as a whole, has 0.5)`,
     );
     expect(s.details[0]).toMatch(/^Slips at the (upper|lower) pad — needs [\d.]+, has μ = 0\.5/);
-    // μ = 0.7 > 0.577 holds as a whole: no "Slides"
+    // μ = 0.7 > 0.577 holds as a whole: no "Slips as a whole"
     const held = slope(0.7);
     const [t] = statusSentences(held.sketch, held.result);
-    expect(t.headline).not.toMatch(/^Slides/);
+    expect(t.headline).not.toMatch(/^Slips as a whole/);
   });
 });
 
