@@ -14,3 +14,5 @@ export const LBM_KG = 0.45359237;
 export const GALLON_US_M3 = 3.785411784e-3;
 /** pound-force per square inch, Pa */
 export const PSI_PA = LBF_N / (INCH_M * INCH_M);
+/** standard atmosphere at sea level, Pa (ISO 2533; the standard atmosphere of the 10th CGPM, 1954) */
+export const STANDARD_ATMOSPHERE_PA = 101325;

@@ -1,5 +1,6 @@
 // Checks beyond the schema: ids and references (once, at parse), and value ranges (again at
 // every sweep point, since a swept parameter can push a value out of range).
+import { STANDARD_ATMOSPHERE_PA } from "./constants";
 import { polygonArea } from "./geometry";
 import type { FieldError, Sketch } from "./types";
 
@@ -94,6 +95,10 @@ export function validateValues(sketch: Sketch): FieldError[] {
     if (hasMassFlow && !hasVelocity) err(p, `port "${port.id}" needs a velocity: give velocity, or density and area, or volumeFlow and area`);
     if (port.beta !== undefined && !(port.beta >= 1 && port.beta <= 2))
       err(`${p}.beta`, "must be from 1 to 2: the momentum-flux factor is 1 for flow uniform across the port, about 1.02 for turbulent pipe flow and 4/3 for laminar (it is never below 1)");
+    // gauge pressure is above the atmosphere around the port: a full vacuum is −1 atm at the most
+    // (at sea level; less at altitude), so anything below it is a slip of sign or of absolute for gauge
+    if (port.pressure !== undefined && port.pressure < -STANDARD_ATMOSPHERE_PA)
+      err(`${p}.pressure`, "is below a full vacuum: a gauge pressure cannot be less than −101.325 kPa (one standard atmosphere below the air around it); check the sign, or whether the value is absolute");
     if (port.pressure !== undefined && port.pressure !== 0 && port.area === undefined)
       err(`${p}.area`, `is required: port "${port.id}" has a gauge pressure, and its force is pressure × area`);
   });

@@ -68,6 +68,21 @@ describe("invalid sketch files", () => {
     expect(errors).toEqual([{ path: "ports[0].area", message: 'is required: port "jet" has a gauge pressure, and its force is pressure × area' }]);
   });
 
+  it("a gauge pressure below a full vacuum (one standard atmosphere, 101.325 kPa: ISO 2533)", () => {
+    const port = (pressure: string) =>
+      sketch({
+        bodies: [{ id: "b", outline: box(1, 1), mass: 0 }],
+        ports: [{ id: "suction", body: "b", kind: "inlet", at: [0, 0.5], angle: 0, massFlow: 0, pressure, area: 0.01 }],
+      });
+    expect(errorsOf(port("-500 kPa"))).toEqual([
+      { path: "ports[0].pressure", message: "is below a full vacuum: a gauge pressure cannot be less than −101.325 kPa (one standard atmosphere below the air around it); check the sign, or whether the value is absolute" },
+    ]);
+    // a pump's suction a little under the atmosphere is an ordinary input (−14.7 psi is −101.35 kPa: just past it)
+    expect(parseSketch(port("-60 kPa")).ok).toBe(true);
+    expect(parseSketch(port("-101.3 kPa")).ok).toBe(true);
+    expect(parseSketch(port("-14.7 psi")).ok).toBe(false);
+  });
+
   it("a support that restrains x on a body free in x", () => {
     const d = loadFixture("thrust-cart-free.json");
     d.supports!.push({ id: "brake", body: "cart", kind: "pin", at: [1, 0] });
