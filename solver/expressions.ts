@@ -373,6 +373,20 @@ export function toFieldNumber(value: MathValue, kind: FieldKind): number {
   return out;
 }
 
+/** The field kind whose unit a value's unit shares its dimension with ("bar" → pressure), or null
+ *  (a plain number, an angle-free ratio, or units no field takes). N/m reads as a line load. */
+export function kindOfUnit(unit: string): FieldKind | null {
+  if (!unit) return null;
+  let u: Unit;
+  try {
+    u = math.unit(1, unit) as Unit;
+  } catch {
+    return null;
+  }
+  for (const [k, t] of targetUnits) if (k !== "stiffness" && u.equalBase(t)) return k;
+  return null;
+}
+
 function describeDimension(u: Unit): string {
   for (const [k, t] of targetUnits) if (u.equalBase(t)) return KIND_WORDS[k];
   return "in other units";

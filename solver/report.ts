@@ -4,7 +4,7 @@
 import type { CaseRun, Component, StudyResult, SupportEnvelope } from "./cases";
 import { handCheckSums, termMomentAbout } from "./equations";
 import { FOOT_M, LBF_N } from "./constants";
-import { FIELD_UNIT_LABELS } from "./expressions";
+import { FIELD_UNIT_LABELS, kindOfUnit } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { SolveResult, Vec2 } from "./types";
@@ -86,7 +86,12 @@ export function handCheckScale(eq: SolveResult["equations"][string], about: Vec2
 
 /** A table's force and moment units. */
 type Units = { system: UnitSystem; force: string; moment: string };
-const unitsOf = (system: UnitSystem, scale: Scale): Units => ({ system, force: columnUnit("force", system, scale.force), moment: columnUnit("moment", system, scale.moment) });
+// one family per table: kN with kN·m, or N with N·m only when all of it stays below a kilonewton
+// (lbf with lbf·ft, or kip with kip·ft once any of it reaches 10 kip), so no row mixes the two
+const unitsOf = (system: UnitSystem, scale: Scale): Units => {
+  const largest = Math.max(scale.force, scale.moment);
+  return { system, force: columnUnit("force", system, largest), moment: columnUnit("moment", system, largest) };
+};
 const tableUnits = (system: UnitSystem, forces: Iterable<number | null | undefined>, moments: Iterable<number | null | undefined>): Units => unitsOf(system, scaleOf(forces, moments));
 
 /** The unit of a quantity in a table: its force or moment unit, or the usual one (length, angle…). */
@@ -380,47 +385,58 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
 export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem): Table {
   const eq = result.equations[bodyId];
   const sums = handCheckSums(eq, about);
-  const u = unitsOf(system, handCheckScale(eq, about));
+  const scale = handCheckScale(eq, about);
+  const u = unitsOf(system, scale);
   const f = u.force;
   const m = u.moment;
   const L = columnUnit("length", system);
+  // a sum that balances to rounding (1e-12 N·m) is zero: its noise is not a figure of the check
+  const noise = 1e-10 * Math.max(scale.force, scale.moment, 1e-30);
+  const clean = (v: number) => (Math.abs(v) < noise ? 0 : v);
+  const val = (v: number, q: Quantity) => inUnit(clean(v), q, u);
+  const coord = (x: number) => formatNumber(convert(x, "length", system, L).value, 4);
+  const point = `(${coord(about[0])}, ${coord(about[1])}) ${L}`;
   const row = (side: string, t: (typeof eq.forces)[number], sign: number): Cell[] => [
     side,
     t.label,
-    inUnit(sign * t.fx, "force", u),
-    inUnit(sign * t.fy, "force", u),
-    t.at ? `(${inUnit(t.at[0], "length", u)!.toPrecision(4)}, ${inUnit(t.at[1], "length", u)!.toPrecision(4)})` : "—",
-    inUnit(sign * termMomentAbout(t, about), "moment", u),
+    val(sign * t.fx, "force"),
+    val(sign * t.fy, "force"),
+    t.at ? `(${coord(t.at[0])}, ${coord(t.at[1])})` : "—",
+    val(sign * termMomentAbout(t, about), "moment"),
   ];
   return {
     id: `hand-check-${bodyId}`,
-    title: `Hand check of ${bodyId}: ΣF = Σ(ṁV)out − Σ(ṁV)in, ΣM about (${about[0]}, ${about[1]})`,
+    title: `Hand check of ${bodyId}: ΣF = Σ(ṁV)out − Σ(ṁV)in, ΣM about ${point}`,
     columns: [
       { key: "side", label: "Side", align: "left" },
       { key: "term", label: "Term", align: "left" },
       { key: "fx", label: "Fx", unit: f },
       { key: "fy", label: "Fy", unit: f },
       { key: "at", label: "Acts at", unit: L, align: "left" },
-      { key: "m", label: "M about point", unit: m },
+      { key: "m", label: `M about ${point}`, unit: m },
     ],
     rows: [
       ...eq.forces.map((t) => row("forces on the control volume", t, 1)),
       ...eq.momentum.map((t) => row("momentum flux", t, 1)),
-      ["total", "Σ forces", inUnit(sums.forces.fx, "force", u), inUnit(sums.forces.fy, "force", u), "", inUnit(sums.forces.m, "moment", u)],
-      ["total", "Σ(ṁV)out − Σ(ṁV)in", inUnit(sums.momentum.fx, "force", u), inUnit(sums.momentum.fy, "force", u), "", inUnit(sums.momentum.m, "moment", u)],
-      ["total", "imbalance (0 when the body holds)", inUnit(sums.imbalance.fx, "force", u), inUnit(sums.imbalance.fy, "force", u), "", inUnit(sums.imbalance.m, "moment", u)],
+      ["total", "Σ forces (Σ moments)", val(sums.forces.fx, "force"), val(sums.forces.fy, "force"), "", val(sums.forces.m, "moment")],
+      ["total", "Σ(ṁV)out − Σ(ṁV)in", val(sums.momentum.fx, "force"), val(sums.momentum.fy, "force"), "", val(sums.momentum.m, "moment")],
+      ["total", "imbalance (0 when the body holds)", val(sums.imbalance.fx, "force"), val(sums.imbalance.fy, "force"), "", val(sums.imbalance.m, "moment")],
     ],
     notes: [
-      `ΣFx = ${fmt(sums.forces.fx, "force")} and Σ(ṁV)x = ${fmt(sums.momentum.fx, "force")}; ΣFy = ${fmt(sums.forces.fy, "force")} and Σ(ṁV)y = ${fmt(sums.momentum.fy, "force")}; ΣM about (${about[0]}, ${about[1]}) = ${fmt(sums.forces.m, "moment")} and Σ r × ṁV = ${fmt(sums.momentum.m, "moment")}.`,
+      `ΣFx = ${fmt(sums.forces.fx, "force")} and Σ(ṁV)x = ${fmt(sums.momentum.fx, "force")}; ΣFy = ${fmt(sums.forces.fy, "force")} and Σ(ṁV)y = ${fmt(sums.momentum.fy, "force")}; ΣM about ${point} = ${fmt(sums.forces.m, "moment")} and Σ r × ṁV = ${fmt(sums.momentum.m, "moment")}.`,
     ],
   };
   function fmt(v: number, q: Quantity) {
-    return `${formatNumber(inUnit(v, q, u) ?? 0, 4)} ${unitOf(q, u)}`;
+    return `${formatNumber(val(v, q) ?? 0, 4)} ${unitOf(q, u)}`;
   }
 }
 
-/** Parameters as typed and as evaluated. */
-export function parametersTable(parsed: Extract<ParseResult, { ok: true }>): Table {
+/** Parameters as typed and as evaluated (a US sheet adds the value in US customary units). */
+export function parametersTable(parsed: Extract<ParseResult, { ok: true }>, system: UnitSystem = "SI"): Table {
+  const inUs = (si: number, unit: string) => {
+    const kind = system === "US" ? kindOfUnit(unit) : null;
+    return kind && kind in US_QUANTITY && Number.isFinite(si) && si !== 0 ? ` (${formatQuantity(si, kind as Quantity, "US")})` : "";
+  };
   return {
     id: "parameters",
     title: "Parameters",
@@ -432,7 +448,7 @@ export function parametersTable(parsed: Extract<ParseResult, { ok: true }>): Tab
     rows: Object.entries(parsed.parameterValues).map(([name, v]) => [
       name,
       String(parsed.file.parameters?.[name]),
-      "value" in v ? `${Number(v.value.toPrecision(6))}${v.unit ? " " + prettyUnit(v.unit) : ""}` : v.error,
+      "value" in v ? `${formatNumber(v.value, 6)}${v.unit ? " " + prettyUnit(v.unit) : ""}${inUs(v.si, v.unit)}` : v.error,
     ]),
   };
 }

@@ -77,8 +77,9 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const left = doc.page.margins.left;
   const width = doc.page.width - left - doc.page.margins.right;
 
-  const heading = (text: string) => {
-    ensureSpace(doc, 60);
+  /** `keep`: the room (pt) the heading's first block needs on its page, so the two stay together */
+  const heading = (text: string, keep = 60) => {
+    ensureSpace(doc, keep);
     doc.moveDown(0.6).font("Inter-SemiBold").fontSize(11.5).fillColor(INK).text(text, left, doc.y, { width });
     doc.moveTo(left, doc.y + 2).lineTo(left + width, doc.y + 2).lineWidth(0.6).strokeColor(RULE).stroke();
     doc.moveDown(0.5);
@@ -129,9 +130,14 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // the drawing carries its own legend (solid, double and dashed arrows) on its bottom line
   doc.y += width * (560 / 900) + 6;
 
-  // ---- inputs
+  // ---- inputs: the sketch's notes first (the design basis its author wrote), then the values
   heading("Inputs");
-  if (Object.keys(parsed.parameterValues).length) drawTable(doc, parametersTable(parsed), left, width);
+  if (parsed.file.description?.trim()) {
+    para("Notes", 9, INK);
+    para(parsed.file.description.trim(), 8.5, SOFT);
+    doc.moveDown(0.4);
+  }
+  if (Object.keys(parsed.parameterValues).length) drawTable(doc, parametersTable(parsed, units), left, width);
   drawTable(doc, inputsTable(parsed, units), left, width);
 
   // ---- cases
@@ -209,7 +215,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   );
   heading("Assumptions");
   for (const a of ASSUMPTIONS) para(`• ${a}`);
-  heading("Cautions");
+  heading("Cautions", cautionBoxHeight(doc, width, [...CAUTIONS]) + 40);
   cautionBox(doc, left, width, [...CAUTIONS]);
 
   footer(doc, input);
@@ -275,10 +281,14 @@ function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number
   }
 }
 
+function cautionBoxHeight(doc: PDFKit.PDFDocument, width: number, lines: string[]): number {
+  doc.font("Inter").fontSize(8.5);
+  return doc.heightOfString(lines.join(" "), { width: width - 20 }) + 22;
+}
+
 function cautionBox(doc: PDFKit.PDFDocument, left: number, width: number, lines: string[]) {
   const text = lines.join(" ");
-  doc.font("Inter").fontSize(8.5);
-  const h = doc.heightOfString(text, { width: width - 20 }) + 22;
+  const h = cautionBoxHeight(doc, width, lines);
   ensureSpace(doc, h + 4);
   const top = doc.y;
   doc.rect(left, top, width, h).fillColor(CAUTION_BG).fill();

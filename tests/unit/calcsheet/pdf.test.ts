@@ -319,3 +319,31 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("Dead (case-5): loads of group “flow” × 0, loads of group “loads” × 0");
   }, 60000);
 });
+
+describe("the closing cautions", () => {
+  it("their heading stays on the page of their box, in every example's sheet", async () => {
+    const { EXAMPLES } = await import("@/canvas/examples");
+    for (const ex of EXAMPLES) {
+      const { pages } = await pdfItems(await buildCalcSheet({ workspace: "W", sketchTitle: ex.title, version: 1, savedAt: new Date(), signoff: [], file: ex.sketch }));
+      const at = pages.findIndex((items) => items.some((i) => i.str === "Cautions"));
+      expect(at, ex.id).toBeGreaterThanOrEqual(0);
+      const items = pages[at].map((i) => i.str);
+      // the box's own caption and its first caution follow the heading on the same page
+      expect(items.slice(items.indexOf("Cautions")).join(" "), ex.id).toMatch(/ENGINEERING CAUTIONS/);
+    }
+  });
+
+  it("…wherever the page ends: a longer description moves them down, three lines at a time", { timeout: 60_000 }, async () => {
+    const file = loadFixture("thrust-stand-tips.json");
+    const line = "The test pad drains toward the front pin. ";
+    // about two of these sentences to a line of the sheet
+    for (let k = 0; k < 19; k++) {
+      const { pages } = await pdfItems(await buildCalcSheet({ workspace: "W", sketchTitle: "Stand", version: 1, savedAt: new Date(), signoff: [], file: { ...file, description: line.repeat(k * 6) } }));
+      const at = pages.findIndex((items) => items.some((i) => i.str === "Cautions"));
+      const items = pages[at].map((i) => i.str);
+      expect(items.slice(items.indexOf("Cautions")).join(" "), `description of ${k * 6} sentences`).toMatch(/ENGINEERING CAUTIONS/);
+      // the sketch's notes are printed with the inputs: the design basis its author wrote
+      if (k === 1) expect(pages.flat().map((i) => i.str).join(" ")).toMatch(/Notes .*The test pad drains toward the front pin\./);
+    }
+  });
+});

@@ -54,8 +54,22 @@ describe("result tables", () => {
     const t = handCheckTable(r, "skid", [2, 1], "SI");
     const last = t.rows[t.rows.length - 1];
     expect(last[1]).toMatch(/imbalance/);
-    for (const k of [2, 3, 5]) expect(Math.abs(last[k] as number)).toBeLessThan(1e-9);
+    // rounding noise of the sums is not a figure: the imbalance is exactly zero, and so is its note
+    for (const k of [2, 3, 5]) expect(last[k]).toBe(0);
     expect(t.rows.some((row) => row[1] === "momentum out at discharge")).toBe(true);
+    // the point is named with its unit, in the title and the moment column; points use a true minus
+    expect(t.title).toMatch(/ΣM about \(2, 1\) m$/);
+    expect(t.columns[5].label).toBe("M about (2, 1) m");
+    expect(t.rows.map((row) => String(row[4])).filter((a) => a.startsWith("("))).toContain("(0.2, 0)");
+    expect(t.rows.map((row) => String(row[4])).join(" ")).not.toMatch(/-/);
+    // one unit family: kN with kN·m, never kN beside N·m
+    expect([t.columns[2].unit, t.columns[5].unit]).toEqual(["kN", "kN·m"]);
+  });
+
+  it("a hand check about a point in US units names it in feet: (3.281, 0) ft for (1, 0) m (NIST SP 811)", () => {
+    const r = solve(parsedFixture("pump-skid-discharge.json").sketch);
+    const t = handCheckTable(r, "skid", [1, 0], "US");
+    expect(t.columns[5].label).toBe("M about (3.281, 0) ft");
   });
 
   it("an inlet's term reads as what it is on the right-hand side: minus the momentum in", () => {
@@ -101,6 +115,20 @@ describe("result tables", () => {
     expect(t.rows[0]).toEqual(["gravity", "", "", "", "0 m/s² (acts in −y)"]);
     const params = parametersTable(p);
     expect(params.rows.find((r) => r[0] === "p1")).toEqual(["p1", "600 kPa", "600 kPa"]);
+    // a US sheet gives the value in US customary units too: 600 kPa / 6894.757 Pa/psi = 87.02 psi (NIST SP 811)
+    expect(parametersTable(p, "US").rows.find((r) => r[0] === "p1")).toEqual(["p1", "600 kPa", "600 kPa (87.02 psi)"]);
+  });
+
+  it("a parameter's value: a true minus and grouped thousands; angles and ratios have no US twin", async () => {
+    const { exampleById } = await import("@/canvas/examples");
+    const p = parseSketch(exampleById("pipe-bend-anchor")!.sketch);
+    if (!p.ok) throw new Error();
+    const rows = new Map(parametersTable(p, "US").rows.map((r) => [r[0], r[2]]));
+    // π/4 × (150 mm)² = 17,671.5 mm² = 27.39 in² (1 in = 25.4 mm exactly, NIST SP 811)
+    expect(rows.get("A_pipe")).toBe("17,671.5 mm² (27.39 in²)");
+    const cart = parseSketch(exampleById("washing-cart")!.sketch);
+    if (!cart.ok) throw new Error();
+    expect(new Map(parametersTable(cart, "US").rows.map((r) => [r[0], r[2]])).get("theta")).toBe("−75 deg");
   });
 
   it("writes values as the rest of the sheet does: a true minus, thousands grouped, kPa for pascals, 90° for angles", async () => {
