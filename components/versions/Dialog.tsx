@@ -19,12 +19,22 @@ export function Dialog({
   testId?: string;
 }) {
   const ref = useRef<HTMLDialogElement>(null);
+  const opener = useRef<HTMLElement | null>(null);
   const titleId = useId();
   useEffect(() => {
     const d = ref.current;
     if (!d) return;
-    if (open && !d.open) d.showModal();
-    if (!open && d.open) d.close();
+    if (open && !d.open) {
+      // the control that opened it gets the focus back on closing, so the keyboard carries on there
+      opener.current = document.activeElement instanceof HTMLElement && document.activeElement !== document.body ? document.activeElement : null;
+      d.showModal();
+    }
+    if (!open && d.open) {
+      d.close();
+      const back = opener.current;
+      opener.current = null;
+      if (back?.isConnected) back.focus();
+    }
   }, [open]);
   return (
     <dialog

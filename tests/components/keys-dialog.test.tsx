@@ -50,5 +50,8 @@ describe("keys and gestures", () => {
     await user.click(screen.getByRole("button", { name: "Keys and gestures" }));
     const dialog = await screen.findByTestId("keys-dialog");
     expect(within(dialog).getByTestId("key-view.units")).toHaveTextContent(/Switch SI \/ US units\s*U/);
+    // closed, the focus goes back to the button that opened it: the keyboard carries on from there
+    await user.click(within(dialog).getByRole("button", { name: "Close" }));
+    expect(screen.getByRole("button", { name: "Keys and gestures" })).toHaveFocus();
   });
 });
