@@ -109,7 +109,7 @@ export function NotificationsForm({ enabled: initial }: { enabled: boolean }) {
         <input type="checkbox" checked={enabled} disabled={busy} onChange={(e) => toggle(e.target.checked)} className="mt-0.5 h-4 w-4 accent-[#1d2329]" />
         <span>
           <span className="font-medium text-ink">E-mail me about my calcs</span>
-          <span className="block text-ink-soft">When someone mentions me in a comment, or a version I prepared is checked, returned or approved.</span>
+          <span className="block text-ink-soft">When someone mentions me in a comment, a version waits for my check or my approval, or a version I prepared or checked is returned, approved or withdrawn.</span>
         </span>
       </label>
       {status ? <Notice tone={status.tone}>{status.text}</Notice> : null}

@@ -1,5 +1,6 @@
 import { fieldList } from "@/components/review/activitySentence";
 import { auditActionLabel } from "@/lib/audit-actions";
+import { plainText } from "@/lib/review/comment-text";
 
 export type AuditEntry = {
   id: number;
@@ -53,7 +54,9 @@ export function auditSentence(e: AuditEntry): string {
       return `${auditActionLabel(e.action)} "${str(d.title)}": ${str(d.name) || "a file"} (${d.purpose === "attachment" ? "a comment's attachment" : "an underlay"})`;
     default:
       if (e.action.startsWith("signoff.") || e.action.startsWith("comment.")) {
-        return `${auditActionLabel(e.action)} v${num(d.number)} of "${str(d.title)}"${d.note ? `: ${str(d.note)}` : ""}`;
+        // a comment's words without their formatting marks (**bold** reads as bold, not as stars)
+        const note = e.action.startsWith("comment.") ? plainText(str(d.note)) : str(d.note);
+        return `${auditActionLabel(e.action)} v${num(d.number)} of "${str(d.title)}"${note ? `: ${note}` : ""}`;
       }
       return auditActionLabel(e.action);
   }

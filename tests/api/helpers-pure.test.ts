@@ -30,6 +30,8 @@ describe("audit sentences", () => {
     [entry("member.remove", { name: "Vera Viewer", role: "viewer" }), "removed Vera Viewer (viewer)"],
     [entry("member.leave"), "left the workspace"],
     [entry("workspace.rename", { name: "Pump House 2" }), 'renamed the workspace to "Pump House 2"'],
+    [entry("comment.create", { number: 4, title: "Jet thrust stand", note: "Is the **front pin** grouted? *Check* `mu`" }), 'commented on v4 of "Jet thrust stand": Is the front pin grouted? Check mu'],
+    [entry("signoff.return", { number: 4, title: "Jet thrust stand", note: "Fix the pin" }), 'returned v4 of "Jet thrust stand": Fix the pin'],
     [entry("sketch.future_action"), "sketch.future_action"],
   ])("%#: %s", (e, sentence) => {
     expect(auditSentence(e)).toBe(sentence);
