@@ -120,7 +120,7 @@ export function Toolbar({
       </div>
       <Menu label="File" testId="menu-file" items={menuItems(fileActions, run)} />
       {readOnly ? null : (
-      <Menu
+        <Menu
           label="Open an example"
           shortLabel="Examples"
           testId="menu-examples"

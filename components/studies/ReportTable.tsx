@@ -1,7 +1,7 @@
 "use client";
 // A result table from the solver's report (the rows the CSV and the calc sheet use), with a CSV button.
 // Long names wrap in their cell, so the table fits its panel instead of scrolling sideways.
-import type { ReactNode } from "react";
+import { useEffect, useRef, useState, type ReactNode } from "react";
 import type { Cell, Table } from "@/solver/report";
 import { formatNumber } from "@/solver/units";
 import { BUTTON } from "@/components/editor/ui";
@@ -12,7 +12,31 @@ import { downloadCsv } from "./csv";
  *  also the cell's title. */
 // words wrap between words, never inside one ("overturnin g"); only a long id without spaces
 // ("rearStabiliserLegOnTheOutriggerBeam") may break anywhere rather than widen the table
-const TEXT_CELL = "max-w-[14rem] min-w-[4.5rem] whitespace-normal";
+const TEXT_CELL = "max-w-[14rem] whitespace-normal";
+// a table cell ignores min-width (CSS leaves it undefined): a block inside it holds the width, so a
+// narrow panel scrolls the table rather than squeezing a note to a letter a line
+const minWidthOf = (text: string) => (text.length > 28 ? "min-w-[9rem]" : "min-w-[4.5rem]");
+
+/** Whether a box scrolls sideways with more to see on its right (for the fade that says so). */
+function useMoreToTheRight() {
+  const ref = useRef<HTMLDivElement>(null);
+  const [more, setMore] = useState(false);
+  useEffect(() => {
+    const el = ref.current;
+    if (!el) return;
+    const check = () => setMore(el.scrollWidth - el.clientWidth - el.scrollLeft > 2);
+    check();
+    el.addEventListener("scroll", check, { passive: true });
+    const ro = typeof ResizeObserver === "undefined" ? null : new ResizeObserver(check);
+    ro?.observe(el);
+    if (el.firstElementChild) ro?.observe(el.firstElementChild);
+    return () => {
+      el.removeEventListener("scroll", check);
+      ro?.disconnect();
+    };
+  }, []);
+  return { ref, more };
+}
 const wrapOf = (text: string) => (text.length > 18 && !/\s/.test(text) ? "[overflow-wrap:anywhere]" : "[overflow-wrap:break-word]");
 
 export function ReportTable({
@@ -29,6 +53,7 @@ export function ReportTable({
   caption?: string;
   testId?: string;
 }) {
+  const { ref: scrollRef, more: moreToTheRight } = useMoreToTheRight();
   return (
     <div className="min-w-0">
       <div className="mb-1 flex items-center gap-2">
@@ -37,49 +62,56 @@ export function ReportTable({
           CSV
         </button>
       </div>
-      <div className="relative overflow-x-auto">
-        <table className="num w-full border-collapse text-[12px]" data-testid={testId}>
-          {caption && <caption className="caption-top pb-1 text-left text-[11.5px] text-ink-faint">{caption}</caption>}
-          <thead>
-            <tr className="border-b border-rule text-[11px] text-ink-faint">
-              {table.columns.map((c) => (
-                <th key={c.key} scope="col" className={`px-1.5 py-1 align-bottom font-medium ${c.align === "left" ? "text-left" : "text-right"}`}>
-                  {c.label}
-                  {c.unit && <span className="ml-0.5 whitespace-nowrap font-normal">({c.unit})</span>}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {table.rows.map((row, ri) => (
-              <tr key={ri} className="border-b border-rule-soft">
-                {row.map((cell, i) => {
-                  const col = table.columns[i];
-                  const extra = mark?.(row, col.key);
-                  const cellMark = table.marks?.[ri]?.[col.key];
-                  const text = col.align === "left" && typeof cell === "string" && cell !== "";
-                  return (
-                    <td
-                      key={col.key}
-                      data-col={col.key}
-                      data-mark={cellMark ? cellMark.symbol : undefined}
-                      title={cellMark?.text ?? (text ? cell : undefined)}
-                      className={`px-1.5 py-[3px] align-top ${text ? `${TEXT_CELL} ${wrapOf(cell)}` : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
-                    >
-                      {cellMark && (
-                        <span role="img" aria-label={cellMark.text} className="mr-0.5">
-                          {cellMark.symbol}
-                        </span>
-                      )}
-                      {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4, { keepZeros: true }) : cell}
-                      {extra}
-                    </td>
-                  );
-                })}
+      <div className="relative">
+        <div ref={scrollRef} className="relative overflow-x-auto">
+          <table className="num w-full border-collapse text-[12px]" data-testid={testId}>
+            {caption && <caption className="caption-top pb-1 text-left text-[11.5px] text-ink-faint">{caption}</caption>}
+            <thead>
+              <tr className="border-b border-rule text-[11px] text-ink-faint">
+                {table.columns.map((c) => (
+                  <th key={c.key} scope="col" className={`px-1.5 py-1 align-bottom font-medium ${c.align === "left" ? "text-left" : "text-right"}`}>
+                    {c.label}
+                    {c.unit && <span className="ml-0.5 whitespace-nowrap font-normal">({c.unit})</span>}
+                  </th>
+                ))}
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {table.rows.map((row, ri) => (
+                <tr key={ri} className="border-b border-rule-soft">
+                  {row.map((cell, i) => {
+                    const col = table.columns[i];
+                    const extra = mark?.(row, col.key);
+                    const cellMark = table.marks?.[ri]?.[col.key];
+                    const text = col.align === "left" && typeof cell === "string" && cell !== "";
+                    return (
+                      <td
+                        key={col.key}
+                        data-col={col.key}
+                        data-mark={cellMark ? cellMark.symbol : undefined}
+                        title={cellMark?.text ?? (text ? cell : undefined)}
+                        className={`px-1.5 py-[3px] align-top ${text ? `${TEXT_CELL} ${wrapOf(cell)}` : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
+                      >
+                        {cellMark && (
+                          <span role="img" aria-label={cellMark.text} className="mr-0.5">
+                            {cellMark.symbol}
+                          </span>
+                        )}
+                        {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4, { keepZeros: true }) : text ? <span className={`inline-block ${minWidthOf(cell)}`}>{cell}</span> : cell}
+                        {extra}
+                      </td>
+                    );
+                  })}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+        {moreToTheRight ? (
+          <div className="pointer-events-none absolute inset-y-0 right-0 flex w-10 items-center justify-end bg-gradient-to-l from-paper to-transparent pr-0.5 text-[13px] text-ink-faint" data-testid="more-to-the-right">
+            <span aria-hidden="true">›</span>
+          </div>
+        ) : null}
       </div>
       {table.notes?.map((n) => (
         <p key={n} className="mt-1 text-[11.5px] text-ink-faint">
