@@ -104,9 +104,9 @@ export function formatNumber(x: number, sig = 4, opts: { keepZeros?: boolean } =
 }
 
 /** "2.40 kN", "1,151 lbf", "35.0°" */
-export function formatQuantity(valueSI: number, q: Quantity, system: UnitSystem = "SI", opts: { sig?: number; unit?: string } = {}): string {
+export function formatQuantity(valueSI: number, q: Quantity, system: UnitSystem = "SI", opts: { sig?: number; unit?: string; keepZeros?: boolean } = {}): string {
   const { value, unit } = convert(valueSI, q, system, opts.unit);
-  const num = formatNumber(value, opts.sig ?? 4);
+  const num = formatNumber(value, opts.sig ?? 4, { keepZeros: opts.keepZeros });
   if (!unit) return num;
   return unit === "°" ? `${num}°` : `${num} ${unit}`;
 }

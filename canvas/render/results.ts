@@ -32,7 +32,8 @@ export interface ResultDrawing {
 
 const SUPPORT_KINDS = new Set(["pin", "roller", "contact", "fixed", "tie"]);
 const px = (p: Vec2, s: number): Pt => [p[0] * s, -p[1] * s];
-const fq = (v: number, k: Parameters<typeof formatQuantity>[1], u: UnitSystem) => formatQuantity(v, k, u);
+// the drawing's figures are figures, as in the tables: "4.000 kN" beside "9.316 kN", never "4 kN"
+const fq = (v: number, k: Parameters<typeof formatQuantity>[1], u: UnitSystem) => formatQuantity(v, k, u, { keepZeros: true });
 
 // an earlier result drawn over a sketch whose field is now in error (NaN): nothing is drawn from it
 const finite = (p: Pt) => Number.isFinite(p[0]) && Number.isFinite(p[1]);

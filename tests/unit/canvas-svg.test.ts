@@ -50,9 +50,9 @@ describe("renderSketchSvg", () => {
     const doc = parse(svg);
     const text = [...doc.querySelectorAll("text")].map((t) => t.textContent);
     const rear = result.reactions.rear;
-    // 3–4 significant figures, with the unit
+    // 4 significant figures, trailing zeros kept as in the tables (557.0 N, not 557 N), with the unit
     const R = Math.hypot(rear.fx, rear.fy);
-    expect(text).toContain(`${R.toPrecision(4).replace(/\.?0+$/, "")} N`);
+    expect(text).toContain(`${R.toPrecision(4)} N`);
     expect(text.some((t) => /^ṁ 0\.6653 kg\/s · V \d+(\.\d+)? m\/s$/.test(t ?? ""))).toBe(true);
     expect(text).toContain("W 833.6 N");
     expect(doc.querySelector("g.results")).not.toBeNull();
