@@ -148,10 +148,10 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
               <thead>
                 <tr className="border-b border-rule text-left text-xs text-ink-faint">
                   <SortHeader label="Title" sort="title" filters={filters} onSort={onSort} />
-                  <SortHeader label="Status" sort="status" filters={filters} onSort={onSort} className="w-40" />
-                  <th scope="col" className="w-28 py-2 pr-3 text-right font-semibold uppercase tracking-wider">Largest reaction</th>
-                  <SortHeader label="Updated" sort="updated" filters={filters} onSort={onSort} className="w-44" />
-                  <th scope="col" className="py-2 font-semibold uppercase tracking-wider">Tags</th>
+                  <SortHeader label="Status" sort="status" filters={filters} onSort={onSort} className="w-40 max-sm:hidden" />
+                  <th scope="col" className="w-28 py-2 pr-3 text-right font-semibold uppercase tracking-wider max-sm:hidden">Largest reaction</th>
+                  <SortHeader label="Updated" sort="updated" filters={filters} onSort={onSort} className="w-44 max-sm:hidden" />
+                  <th scope="col" className="py-2 font-semibold uppercase tracking-wider max-sm:hidden">Tags</th>
                 </tr>
               </thead>
               <tbody>
@@ -172,17 +172,23 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                           <ForkGlyph /> fork
                         </span>
                       ) : null}
-                      {s.latestMessage ? <span className="block truncate text-xs text-ink-faint">{s.latestMessage}</span> : null}
+                      {s.latestMessage ? <span className="block truncate text-xs text-ink-faint max-sm:whitespace-normal">{s.latestMessage}</span> : null}
+                      {/* a phone has no room for the columns: their words go under the title */}
+                      <span className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-0.5 text-xs text-ink-soft sm:hidden" data-testid="sketch-row-summary">
+                        <StatusMark status={s.status} warnings={s.warnings} />
+                        <span className="num">largest {formatForce(s.largestReaction, units)}</span>
+                        <span>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
+                      </span>
                     </td>
-                    <td className="py-2.5 pr-3">
+                    <td className="py-2.5 pr-3 max-sm:hidden">
                       <StatusMark status={s.status} warnings={s.warnings} />
                     </td>
-                    <td className="num py-2.5 pr-3 text-right text-ink">{formatForce(s.largestReaction, units)}</td>
-                    <td className="py-2.5 pr-3 text-ink-soft">
+                    <td className="num py-2.5 pr-3 text-right text-ink max-sm:hidden">{formatForce(s.largestReaction, units)}</td>
+                    <td className="py-2.5 pr-3 text-ink-soft max-sm:hidden">
                       <span title={formatDateTime(s.updatedAt)}>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
                       {s.updatedBy ? <span className="block text-xs text-ink-faint">by {s.updatedBy.name}</span> : null}
                     </td>
-                    <td className="py-2">
+                    <td className="py-2 max-sm:hidden">
                       <ul className="flex max-w-[14rem] flex-wrap gap-1">
                         {s.tags.map((t) => (
                           <li key={t}>

@@ -90,9 +90,9 @@ export function VersionHistory({
               ) : null}
               <th scope="col" className="w-16 py-2 pr-3 font-semibold">Version</th>
               <th scope="col" className="py-2 pr-3 font-semibold">Message</th>
-              <th scope="col" className="w-36 py-2 pr-3 font-semibold">Saved</th>
-              <th scope="col" className="w-32 py-2 pr-3 font-semibold">Status</th>
-              <th scope="col" className="w-28 py-2 pr-3 text-right font-semibold">Largest reaction</th>
+              <th scope="col" className="w-36 py-2 pr-3 font-semibold max-sm:hidden">Saved</th>
+              <th scope="col" className="w-32 py-2 pr-3 font-semibold max-sm:hidden">Status</th>
+              <th scope="col" className="w-28 py-2 pr-3 text-right font-semibold max-sm:hidden">Largest reaction</th>
               {reviewCell ? <th scope="col" className="w-32 py-2 pr-3 font-semibold">Sign-off</th> : null}
               <th scope="col" className="py-2 text-right font-semibold">
                 <span className="sr-only">Actions</span>
@@ -111,18 +111,28 @@ export function VersionHistory({
                   v{v.number}
                   {v.number === latest ? <span className="block text-[11px] font-normal text-ink-faint">latest</span> : null}
                 </td>
-                <td className="py-2.5 pr-3 text-ink">{v.message || <span className="text-ink-faint">(no message)</span>}</td>
-                <td className="py-2.5 pr-3 text-ink-soft">
+                <td className="py-2.5 pr-3 text-ink">
+                  {v.message || <span className="text-ink-faint">(no message)</span>}
+                  {/* a phone has no room for the columns: their words go under the message */}
+                  <span className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-xs text-ink-soft sm:hidden" data-testid="version-row-summary">
+                    <span>
+                      {timeAgo(v.createdAt) ?? formatDate(v.createdAt)} by {v.authorName ?? "a deleted account"}
+                    </span>
+                    <StatusMark status={v.status} warnings={v.warnings} />
+                    <span className="num">largest {formatForce(v.largestReaction, units)}</span>
+                  </span>
+                </td>
+                <td className="py-2.5 pr-3 text-ink-soft max-sm:hidden">
                   <span title={formatDateTime(v.createdAt)}>{timeAgo(v.createdAt) ?? formatDate(v.createdAt)}</span>
                   <span className="block text-xs text-ink-faint">by {v.authorName ?? "a deleted account"}</span>
                 </td>
-                <td className="py-2.5 pr-3">
+                <td className="py-2.5 pr-3 max-sm:hidden">
                   <StatusMark status={v.status} warnings={v.warnings} />
                 </td>
-                <td className="num py-2.5 pr-3 text-right">{formatForce(v.largestReaction, units)}</td>
+                <td className="num py-2.5 pr-3 text-right max-sm:hidden">{formatForce(v.largestReaction, units)}</td>
                 {reviewCell ? <td className="py-2.5 pr-3">{reviewCell(v)}</td> : null}
                 <td className="py-2 text-right">
-                  <span className="inline-flex justify-end gap-1.5 whitespace-nowrap">
+                  <span className="inline-flex justify-end gap-1.5 whitespace-nowrap max-sm:flex-col max-sm:items-end">
                     {reviewHref ? (
                       <Link href={reviewHref(v.number)} className="rounded-md border border-ink/20 px-2.5 py-1 text-[13px] font-medium hover:border-ink/45" aria-label={`Review version ${v.number}`}>
                         Review

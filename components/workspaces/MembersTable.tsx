@@ -92,9 +92,9 @@ export function MembersTable({
           <thead>
             <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
               <th scope="col" className="py-2 pr-3 font-semibold">Name</th>
-              <th scope="col" className="py-2 pr-3 font-semibold">E-mail</th>
-              <th scope="col" className="w-44 py-2 pr-3 font-semibold">Role</th>
-              <th scope="col" className="py-2 pr-3 font-semibold">Joined</th>
+              <th scope="col" className="py-2 pr-3 font-semibold max-sm:hidden">E-mail</th>
+              <th scope="col" className="w-44 py-2 pr-3 font-semibold max-sm:w-32">Role</th>
+              <th scope="col" className="py-2 pr-3 font-semibold max-sm:hidden">Joined</th>
               <th scope="col" className="py-2 text-right font-semibold">
                 <span className="sr-only">Actions</span>
               </th>
@@ -119,8 +119,10 @@ export function MembersTable({
                       <td className="py-2.5 pr-3 font-medium text-ink">
                         {m.name}
                         {isSelf ? <span className="ml-1.5 rounded bg-paper-deep px-1.5 py-0.5 text-[11px] font-medium text-ink-soft">you</span> : null}
+                        {/* a phone has no room for the e-mail's own column */}
+                        <span className="block break-all text-xs font-normal text-ink-faint sm:hidden">{m.email}</span>
                       </td>
-                      <td className="py-2.5 pr-3 text-ink-soft">{m.email}</td>
+                      <td className="py-2.5 pr-3 text-ink-soft max-sm:hidden">{m.email}</td>
                       <td className="py-2 pr-3">
                         {manage ? (
                           <Select
@@ -142,7 +144,7 @@ export function MembersTable({
                           <RoleBadge role={m.role} />
                         )}
                       </td>
-                      <td className="num py-2.5 pr-3 text-ink-soft">{formatDate(m.joinedAt)}</td>
+                      <td className="num py-2.5 pr-3 text-ink-soft max-sm:hidden">{formatDate(m.joinedAt)}</td>
                       <td className="py-2 text-right">
                         <RowActions
                           member={m}

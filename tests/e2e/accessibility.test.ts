@@ -138,6 +138,28 @@ describe("main screens meet WCAG 2.1 AA (no serious or critical axe findings)", 
     await expectAccessible(owner, "members");
   });
 
+  it("every signed-in page fits a phone's width (390 px): tables scroll inside their boxes, the page never sideways", async () => {
+    await owner.setViewportSize({ width: 390, height: 844 });
+    try {
+      const pages = ["", "/members", "/audit", `/sketches/${sketchId}`, `/sketches/${sketchId}/versions/2`, `/sketches/${sketchId}/compare?from=1&to=2`].map((p) => `${BASE_URL}/workspaces/${ws}${p}`);
+      for (const url of [...pages, `${BASE_URL}/account`, `${BASE_URL}/workspaces`]) {
+        await owner.goto(url);
+        await owner.waitForLoadState("networkidle");
+        const wide = await owner.evaluate(() => document.documentElement.scrollWidth);
+        if (wide > 390) await shot(owner, "phone-too-wide");
+        expect(wide, url).toBeLessThanOrEqual(390);
+      }
+      // on a phone the history keeps each version's status under its message
+      await owner.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+      expect(await owner.getByTestId("version-row-2").getByTestId("version-row-summary").isVisible()).toBe(true);
+      // the first Tab stop skips the header to the page's content
+      await owner.keyboard.press("Tab");
+      expect(await owner.evaluate(() => document.activeElement?.textContent)).toBe("Skip to the content");
+    } finally {
+      await owner.setViewportSize({ width: 1440, height: 900 });
+    }
+  });
+
   it("the account page", async () => {
     await owner.goto(`${BASE_URL}/account`);
     await owner.getByRole("heading", { level: 1 }).waitFor();
