@@ -200,3 +200,26 @@ export async function listSketchActivity(
   });
   return { events, nextBefore: more ? events[events.length - 1].id : null };
 }
+
+/** A version in the workspace part-way through its sign-off (submitted, checked or returned), with
+ *  its sketch, author, checker and when its state last moved; newest move first. */
+export async function listVersionsInReview(workspaceId: string, tx: DbOrTx = db) {
+  const rows = await tx
+    .select({
+      sketchId: sketch.id,
+      sketchTitle: sketch.title,
+      latestVersion: sketch.latestVersion,
+      number: sketchVersion.number,
+      state: sketchVersion.reviewState,
+      authorId: sketchVersion.authorId,
+      authorName: author.name,
+      checkedBy: sketchVersion.checkedBy,
+      since: sql<Date>`coalesce((select max(so.at) from sign_off so where so.version_id = ${sketchVersion.id}), ${sketchVersion.createdAt})`,
+    })
+    .from(sketchVersion)
+    .innerJoin(sketch, eq(sketch.id, sketchVersion.sketchId))
+    .leftJoin(author, eq(author.id, sketchVersion.authorId))
+    .where(and(eq(sketch.workspaceId, workspaceId), sql`${sketchVersion.reviewState} in ('submitted', 'checked', 'returned')`))
+    .limit(500);
+  return rows.map((r) => ({ ...r, since: new Date(r.since) })).sort((a, b) => b.since.getTime() - a.since.getTime());
+}

@@ -57,6 +57,7 @@ const ROWS: Record<string, Row> = {
     run: (h, f, p) => call(h, { method: "DELETE", params: { id: f.ws, invitationId: f.invitationId }, cookie: p.cookie }),
   },
   "GET /api/workspaces/[id]/members": { expect: members(200), run: (h, f, p) => call(h, { params: W(f), cookie: p.cookie }) },
+  "GET /api/workspaces/[id]/review-queue": { expect: members(200), run: (h, f, p) => call(h, { params: W(f), cookie: p.cookie }) },
   "PATCH /api/workspaces/[id]/members/[userId]": {
     expect: ownersOnly(200),
     run: (h, f, p) => call(h, { method: "PATCH", params: { id: f.ws, userId: f.targetId }, cookie: p.cookie, body: { role: "checker" } }),

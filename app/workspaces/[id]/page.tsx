@@ -7,13 +7,15 @@ import { RenameWorkspaceForm } from "@/components/workspaces/WorkspaceForms";
 import { getWorkspaceForMember, listMembers } from "@/db/queries/workspaces";
 import { can, ROLE_INFO } from "@/lib/roles";
 import { requirePageRole } from "@/lib/session";
+import { reviewQueueFor } from "@/lib/review/queue";
+import { ReviewQueue } from "@/components/review/ReviewQueue";
 
 export const metadata: Metadata = { title: "Workspace" };
 
 export default async function WorkspacePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const { session, role } = await requirePageRole(id, `/workspaces/${id}`);
-  const [ws, members] = await Promise.all([getWorkspaceForMember(id, session.user.id), listMembers(id, session.user.id)]);
+  const [ws, members, queue] = await Promise.all([getWorkspaceForMember(id, session.user.id), listMembers(id, session.user.id), reviewQueueFor(id, session.user.id, role)]);
   if (!ws) return null;
   const shown = members.slice(0, 6);
   return (
@@ -33,6 +35,7 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
         ) : null}
       </div>
 
+      <ReviewQueue workspaceId={id} items={queue} />
       <Panel title="Sketches" description="Free-body diagrams with their control volumes, saved in versions.">
         <SketchesTable workspaceId={id} canCreate={can(role, "sketch.create")} />
       </Panel>
