@@ -134,7 +134,7 @@ describe("main screens meet WCAG 2.1 AA (no serious or critical axe findings)", 
 
   it("the members page", async () => {
     await owner.goto(`${BASE_URL}/workspaces/${ws}/members`);
-    await owner.getByText(cast.viewer.email).first().waitFor();
+    await owner.getByRole("cell", { name: cast.viewer.email, exact: true }).waitFor();
     await expectAccessible(owner, "members");
   });
 
@@ -151,7 +151,7 @@ describe("main screens meet WCAG 2.1 AA (no serious or critical axe findings)", 
       }
       // on a phone the history keeps each version's status under its message
       await owner.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
-      expect(await owner.getByTestId("version-row-2").getByTestId("version-row-summary").isVisible()).toBe(true);
+      await owner.getByTestId("version-row-2").getByTestId("version-row-summary").waitFor();
       // the first Tab stop skips the header to the page's content
       await owner.keyboard.press("Tab");
       expect(await owner.evaluate(() => document.activeElement?.textContent)).toBe("Skip to the content");
