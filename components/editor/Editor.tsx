@@ -23,6 +23,7 @@ import { ImportErrorDialog } from "./ImportErrorDialog";
 import { Outline } from "./Outline";
 import { PropertiesPanel } from "./PropertiesPanel";
 import { KeysDialog } from "./KeysDialog";
+import { CsvSubject } from "@/components/studies/csv";
 import { Toolbar } from "./Toolbar";
 import { Tray } from "./Tray";
 import { ActionContextCtx } from "./useActions";
@@ -35,6 +36,12 @@ const SketchCanvas = dynamic(() => import("@/canvas/konva/SketchCanvas"), {
   loading: () => <div className="flex h-full items-center justify-center text-sm text-ink-faint">Preparing the drawing…</div>,
 });
 
+
+/** The result downloads are named after the sketch ("DN150-bend-reactions.csv"). */
+function EditorCsvSubject({ children }: { children: ReactNode }) {
+  const title = useEditor((s) => s.sketch.title) ?? "";
+  return <CsvSubject.Provider value={title}>{children}</CsvSubject.Provider>;
+}
 
 function StatusLine() {
   const notice = useEditor((s) => s.notice);
@@ -171,7 +178,9 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
                 <SketchCanvas interaction={interaction} onController={setController} />
               </div>
               <StatusLine />
-              <ResultsDock />
+              <EditorCsvSubject>
+                <ResultsDock />
+              </EditorCsvSubject>
             </main>
             {/* beside the drawing on wide screens; on narrower ones a panel over the drawing's right side, opened from the toolbar */}
             <aside

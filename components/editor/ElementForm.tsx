@@ -140,13 +140,15 @@ function ForceFields({ id, el, commit }: { id: string; el: Record<string, unknow
 }
 
 function PortFlow({ id }: { id: string }) {
-  const item = useScene((s) => s.byId.get(id)) as { massFlow: number; velocity: number; beta: number } | undefined;
+  const item = useScene((s) => s.byId.get(id)) as { massFlow: number; velocity: number; beta: number; pressure: number; area?: number } | undefined;
   const units = useEditor((s) => s.units);
   if (!item || !Number.isFinite(item.massFlow)) return null;
   return (
     <p className="num rounded bg-paper px-2 py-1 text-[11.5px] text-ink-soft">
       Resolved: ṁ = {formatQuantity(item.massFlow, "massFlow", units)}, V = {formatQuantity(item.velocity, "velocity", units)}, momentum flux{" "}
       {item.beta === 1 ? "ṁV" : `βṁV (β = ${formatNumber(item.beta)})`} = {formatQuantity(item.beta * item.massFlow * item.velocity, "force", units)}
+      {/* the gauge pressure's force, pushing inward at every port (the file format's rule) */}
+      {item.pressure !== 0 && item.area !== undefined && Number.isFinite(item.pressure * item.area) ? <>, pressure force pA = {formatQuantity(Math.abs(item.pressure) * item.area, "force", units)} {item.pressure > 0 ? "inward" : "outward (suction)"}</> : null}
     </p>
   );
 }

@@ -5,7 +5,7 @@
 import { useDeferredValue, useMemo, useState } from "react";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
 import { columnUnit, handCheckScale, handCheckTable } from "@/solver/report";
-import { downloadCsv } from "@/components/studies/csv";
+import { downloadCsv, useCsvName } from "@/components/studies/csv";
 import { convert, formatNumber, type UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
@@ -77,6 +77,7 @@ function Block({ b, units, unit }: { b: HandCheckBlock; units: UnitSystem; unit:
 }
 
 export function HandCheckView() {
+  const csvName = useCsvName();
   // deferred: a drag's frames come first, the panel catches up when the main thread is free
   const shown = useDeferredValue(useAnalysis((s) => s.shown));
   const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
@@ -167,7 +168,7 @@ export function HandCheckView() {
           type="button"
           className={`${BUTTON} ml-auto`}
           aria-label="Download the hand check as CSV"
-          onClick={() => shown && downloadCsv(handCheckTable(shown, body.id, about, units), `hand-check-${body.id}`)}
+          onClick={() => shown && downloadCsv(handCheckTable(shown, body.id, about, units), csvName(`hand-check-${body.id}`))}
         >
           CSV
         </button>

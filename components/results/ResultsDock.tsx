@@ -5,7 +5,7 @@ import { useState } from "react";
 import { radioKeys } from "@/components/shell/controls";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { CasesPanel } from "@/components/studies/CasesPanel";
-import { downloadCsv } from "@/components/studies/csv";
+import { downloadCsv, useCsvName } from "@/components/studies/csv";
 import { reactionTable } from "@/solver/report";
 import { SweepPanel } from "@/components/studies/SweepPanel";
 import { CautionsAside, CautionsLine } from "./CautionsAside";
@@ -148,6 +148,7 @@ export function ResultsDock() {
 
 /** The reactions as CSV, in the sense and units on screen. */
 function ReactionsCsv({ sense }: { sense: Sense }) {
+  const csvName = useCsvName();
   const shown = useAnalysis((s) => s.shown);
   const units = useEditor((s) => s.units);
   return (
@@ -156,7 +157,7 @@ function ReactionsCsv({ sense }: { sense: Sense }) {
       className="order-last ml-2 pb-1 text-[12px] text-ink-soft hover:text-ink disabled:opacity-40"
       disabled={!shown}
       aria-label="Download the reactions as CSV"
-      onClick={() => shown && downloadCsv(reactionTable(shown, units, { onSupport: sense === "support" }), sense === "support" ? "loads-on-supports" : "reactions")}
+      onClick={() => shown && downloadCsv(reactionTable(shown, units, { onSupport: sense === "support" }), csvName(sense === "support" ? "loads-on-supports" : "reactions"))}
     >
       CSV
     </button>

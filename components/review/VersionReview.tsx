@@ -17,6 +17,7 @@ import { formatQuantity, type UnitSystem } from "@/solver/units";
 import { stateWord } from "@/solver/report";
 import { studyOfDocument } from "@/lib/review/compare";
 import { CaseTables } from "@/components/studies/CaseTables";
+import { CsvSubject } from "@/components/studies/csv";
 import { versionConcerns } from "./concerns";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { CommentsPanel, type CommentsData } from "./Comments";
@@ -190,7 +191,11 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             <span className="font-semibold text-caution">Caution:</span> {CAUTION_SHORT}
           </p>
           {doc ? <Reactions document={doc} units={units} /> : null}
-          {doc ? <VersionCases document={doc} units={units} /> : null}
+          {doc ? (
+            <CsvSubject.Provider value={`${sketchTitle} v${number}`}>
+              <VersionCases document={doc} units={units} />
+            </CsvSubject.Provider>
+          ) : null}
         </div>
         <aside aria-label="Comments">
           <h2 className="mb-2 text-base font-semibold">Comments</h2>

@@ -73,6 +73,8 @@ export function CasesPanel() {
   const cases = useMemo(() => sketch.cases ?? [], [sketch.cases]);
   const combinations = sketch.combinations ?? [];
   const parameters = Object.keys(sketch.parameters ?? {});
+  // an example from this sketch's own parameters ("v = 30 m/s"), not a name it may not have
+  const changePlaceholder = parameters.length ? `${parameters[0]} = ${String(sketch.parameters![parameters[0]])}` : "no parameters in this sketch";
   const runner = useRef<StudyRunner | null>(null);
   const [study, setStudyResult] = useState<{ result: StudyResult; of: typeof sketch } | null>(null);
   const [running, setRunning] = useState<(() => void) | null>(null);
@@ -178,7 +180,7 @@ export function CasesPanel() {
                       <span className="text-[10.5px] text-ink-faint">id {c.id}</span>
                     </td>
                     <td className="pr-1 pb-1">
-                      <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder="theta = 30 deg" parse={(t) => parseCaseParameters(t, c)} onCommit={(t) => { const r = parseCaseParameters(t, c); if (r.ok) updateCase(i, { parameters: r.value }); }} />
+                      <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder={changePlaceholder} parse={(t) => parseCaseParameters(t, c)} onCommit={(t) => { const r = parseCaseParameters(t, c); if (r.ok) updateCase(i, { parameters: r.value }); }} />
                     </td>
                     <td className="pr-1 pb-1">
                       <TextCell label={`Group factors of ${c.name}`} value={formatFactors(c.factors)} placeholder="dead 1.2, flow 1.5" parse={(t) => parseFactors(t, groups)} onCommit={(t) => { const r = parseFactors(t, groups); if (r.ok) updateCase(i, { factors: r.value }); }} />

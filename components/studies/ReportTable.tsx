@@ -5,7 +5,7 @@ import { useEffect, useRef, useState, type ReactNode } from "react";
 import type { Cell, Table } from "@/solver/report";
 import { formatNumber } from "@/solver/units";
 import { BUTTON } from "@/components/editor/ui";
-import { downloadCsv } from "./csv";
+import { downloadCsv, useCsvName } from "./csv";
 
 /** A name (a case, a support) wraps within a bounded width rather than widening the table past the
  *  panel, a long id without spaces breaking where it must; numbers never wrap. The full text is
@@ -54,11 +54,12 @@ export function ReportTable({
   testId?: string;
 }) {
   const { ref: scrollRef, more: moreToTheRight } = useMoreToTheRight();
+  const csvName = useCsvName();
   return (
     <div className="min-w-0">
       <div className="mb-1 flex items-center gap-2">
         <h3 className="text-[12.5px] font-semibold text-ink">{table.title}</h3>
-        <button type="button" className={`${BUTTON} ml-auto h-6 px-2 text-[11.5px]`} onClick={() => downloadCsv(table, fileName)} aria-label={`Download “${table.title}” as CSV`}>
+        <button type="button" className={`${BUTTON} ml-auto h-6 px-2 text-[11.5px]`} onClick={() => downloadCsv(table, csvName(fileName))} aria-label={`Download “${table.title}” as CSV`}>
           CSV
         </button>
       </div>

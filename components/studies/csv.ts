@@ -1,9 +1,19 @@
 // Download a result table as CSV (units in the header, numbers unformatted).
 import Papa from "papaparse";
+import { createContext, useContext } from "react";
 import { tableToCsv, type Table } from "@/solver/report";
 
 export function csvOf(table: Table): string {
   return tableToCsv(table, (rows) => Papa.unparse(rows));
+}
+
+/** What the downloads are of ("DN150 bend v2"): the page says, and each file name starts with it. */
+export const CsvSubject = createContext("");
+
+/** A download's file name: the subject, then what the table is ("DN150-bend-v2-reactions.csv"). */
+export function useCsvName(): (what: string) => string {
+  const subject = useContext(CsvSubject).trim();
+  return (what) => (subject ? `${subject} ${what}` : what);
 }
 
 export function downloadCsv(table: Table, name: string): void {
@@ -11,7 +21,7 @@ export function downloadCsv(table: Table, name: string): void {
   const url = URL.createObjectURL(blob);
   const a = document.createElement("a");
   a.href = url;
-  a.download = `${name.replace(/[^\w.-]+/g, "-")}.csv`;
+  a.download = `${name.replace(/[^\w.-]+/g, "-").replace(/^-+|-+$/g, "")}.csv`;
   document.body.appendChild(a);
   a.click();
   a.remove();

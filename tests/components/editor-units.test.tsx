@@ -159,3 +159,15 @@ describe("US units reach every length on screen", () => {
     expect(drawingScale(120, "SI")).toBe("120 px/m");
   });
 });
+
+describe("a port's resolved line", () => {
+  it("gives the gauge pressure's force with the momentum flux: 600 kPa × π/4 × (300 mm)² = 42.41 kN, inward", async () => {
+    // pressure force on a control surface = p·A, acting inward (common practice)
+    const user = userEvent.setup();
+    const { readFileSync } = await import("node:fs");
+    await renderEditor(JSON.parse(readFileSync("tests/fixtures/sketches/pipe-bend-anchor.json", "utf8")) as SketchFile);
+    await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /DN300 inlet/ }));
+    const form = screen.getByTestId("element-form");
+    expect(form).toHaveTextContent(/Resolved: ṁ = 119\.8 kg\/s, V = 1\.698 m\/s, momentum flux ṁV = 203\.4 N, pressure force pA = 42\.41 kN inward/);
+  });
+});

@@ -4,7 +4,7 @@ import { readFileSync } from "node:fs";
 import { screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
-import { mountResultsDock, setUpSweep } from "./editor-helpers";
+import { mountResultsDock, renderEditor, setUpSweep } from "./editor-helpers";
 import { parseSketch, solve, solveCases } from "@/solver/index";
 
 const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n}.json`, "utf8"));
@@ -108,6 +108,8 @@ describe("Cases tab", () => {
     const editor = mount(load("fire-monitor-trailer"));
     await user.click(screen.getByRole("tab", { name: "Cases" }));
     await user.click(screen.getByRole("button", { name: "Add a case" }));
+    // the field's example is one of the sketch's own parameters
+    expect(screen.getByRole("textbox", { name: /Parameter changes of/ }).getAttribute("placeholder")).toMatch(/^rho = \d/);
     await user.type(screen.getByRole("textbox", { name: /Parameter changes of/ }), "phi = 3 deg{Enter}");
     expect(screen.getByRole("alert").textContent).toBe('the sketch has no parameter "phi" (it has rho, Q, d, theta)');
     expect(editor.getState().sketch.cases![0].parameters).toBeUndefined();
@@ -319,5 +321,24 @@ describe("CSV of the result tables", () => {
     const fxSupport = Number(onSupport.split("\r\n")[1].split(",")[2]);
     expect(fxBody).toBeCloseTo(-2.2, 6);
     expect(fxSupport).toBeCloseTo(2.2, 6);
+  });
+
+  it("a download is named after the sketch: “Jet thrust stand, overturning check” → Jet-thrust-stand-overturning-check-reactions.csv", async () => {
+    const user = userEvent.setup();
+    const names: string[] = [];
+    const click = HTMLAnchorElement.prototype.click;
+    const orig = URL.createObjectURL;
+    URL.createObjectURL = (() => "blob:x") as typeof URL.createObjectURL;
+    HTMLAnchorElement.prototype.click = function (this: HTMLAnchorElement) {
+      names.push(this.download);
+    };
+    try {
+      await renderEditor(load("thrust-stand-tips"));
+      await user.click(await screen.findByRole("button", { name: "Download the reactions as CSV" }));
+    } finally {
+      HTMLAnchorElement.prototype.click = click;
+      URL.createObjectURL = orig;
+    }
+    expect(names).toEqual(["Jet-thrust-stand-overturning-check-reactions.csv"]);
   });
 });
