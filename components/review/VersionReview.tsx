@@ -18,7 +18,7 @@ import { stateWord } from "@/solver/report";
 import { studyOfDocument } from "@/lib/review/compare";
 import { CaseTables } from "@/components/studies/CaseTables";
 import { CsvSubject } from "@/components/studies/csv";
-import { versionConcerns } from "./concerns";
+import { versionConcerns, withOpenThreads } from "./concerns";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { CommentsPanel, type CommentsData } from "./Comments";
 import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
@@ -112,7 +112,8 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   );
   const refresh = () => void qc.invalidateQueries({ queryKey: apiKey(`/api/sketches/${sketchId}`) });
   // what the version's own results say: a body not held, a slip, a factor of safety short
-  const concerns = useMemo(() => (doc ? versionConcerns(doc) : []), [doc]);
+  const results = useMemo(() => (doc ? versionConcerns(doc) : []), [doc]);
+  const concerns = withOpenThreads(results, comments.data?.threads ?? []);
 
   if (version.isError) return <Notice tone="error">{version.error instanceof ApiError ? version.error.message : "The version could not be loaded."}</Notice>;
   const v = version.data?.version;

@@ -25,3 +25,11 @@ export function versionConcerns(doc: unknown): string[] {
 function notSolved(parsed: ParseResult): string[] {
   return parsed.ok ? [] : [`The sketch does not solve: ${parsed.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`];
 }
+
+/** The results' concerns and, when threads are still open on the version, how many: a question not
+ *  yet answered is said before a check or an approval too. */
+export function withOpenThreads(concerns: string[], threads: ReadonlyArray<{ resolvedAt: string | null }>): string[] {
+  const open = threads.filter((t) => !t.resolvedAt).length;
+  if (!open) return concerns;
+  return [...concerns, `${open} open comment thread${open === 1 ? "" : "s"} on this version: answer or resolve ${open === 1 ? "it" : "them"} first, or say why not`];
+}

@@ -1,7 +1,7 @@
 // What the sign-off dialogs put before a checker or approver: the version's own findings, the
 // same the calc sheet's first page says.
 import { describe, expect, it } from "vitest";
-import { versionConcerns } from "@/components/review/concerns";
+import { versionConcerns, withOpenThreads } from "@/components/review/concerns";
 import { studyOfDocument } from "@/lib/review/compare";
 import type { SketchFile } from "@/solver/schema";
 import { loadFixture } from "./solver/helpers";
@@ -29,5 +29,15 @@ describe("a version's concerns for sign-off", () => {
 
   it("a bend on its anchor that holds, with no cases: nothing to say", () => {
     expect(versionConcerns(loadFixture("pipe-bend-anchor.json"))).toEqual([]);
+  });
+
+  it("open comment threads are named before a check or an approval; resolved ones are not", () => {
+    const threads = [{ resolvedAt: null }, { resolvedAt: "2026-12-01T10:00:00Z" }, { resolvedAt: null }];
+    expect(withOpenThreads(["As drawn: Lifts off at the front jack"], threads)).toEqual([
+      "As drawn: Lifts off at the front jack",
+      "2 open comment threads on this version: answer or resolve them first, or say why not",
+    ]);
+    expect(withOpenThreads([], [{ resolvedAt: null }])).toEqual(["1 open comment thread on this version: answer or resolve it first, or say why not"]);
+    expect(withOpenThreads([], [{ resolvedAt: "2026-12-01T10:00:00Z" }])).toEqual([]);
   });
 });
