@@ -88,6 +88,12 @@ function slipSentence(c: Context): { headline: string; details: string[] } | nul
       details: slipping.length ? [`${contactSlip(slipping)}.`] : [],
     };
   }
+  // one contact over its own μ while the body as a whole has friction to spare: the headline says
+  // both, so nobody reads "slips" as the body sliding away
+  if (slipping.length && f && sumN > 0) {
+    const [needs, has] = [ratio(f.needed), ratio(f.available)];
+    return { headline: `${contactSlip(slipping)}; as a whole it has friction to spare (needs ${needs}, has ${has})`, details: [] };
+  }
   if (slipping.length) return { headline: contactSlip(slipping), details: [] };
   return { headline: "Slips as a whole — the friction contacts cannot hold it", details: [] };
 }
