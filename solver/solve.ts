@@ -163,10 +163,18 @@ function solveBody(model: BodyModel, out: SolveResult): void {
     });
   });
 
-  // ---- body-level friction, for the result's summary. It needs no warning of its own: when
-  // every contact has |t| ≤ μ·n, then |Σ t| ≤ Σ |t| ≤ Σ μ·n, so a body can only need more friction
-  // than its contacts give when one of them already warns SLIP.
+  // ---- body-level friction. When every contact has |t| ≤ μ·n, then |Σ t| ≤ Σ |t| ≤ Σ μ·n, so a
+  // body can only need more friction than its contacts give when one of them already warns SLIP;
+  // the body's own warning says what no single contact does: the whole body slides (a reader of
+  // the result file alone must not take it for one contact's local slip).
   const friction: BodyResult["friction"] = sumN > 0 ? { needed: Math.hypot(tx, ty) / sumN, available: sumMuN / sumN } : undefined;
+  if (friction && status !== "tips" && status !== "unrestrained" && overMu(friction.needed, friction.available)) {
+    warnings.push({
+      code: "SLIP",
+      message: `${body.label || body.id} slides as a whole: its friction contacts must give a friction coefficient of ${fmtRatio(friction.needed)} together, and give ${fmtRatio(friction.available)}`,
+      ids: [body.id],
+    });
+  }
 
   if (determinacy.kind === "indeterminate") {
     warnings.push({

@@ -109,7 +109,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     }
   }
   // the warnings the sentences above have not said already (they name the supports by id)
-  const more = result.warnings.filter((w) => w.code !== "INDETERMINATE" && !said.has(w.message.replace(/\.$/, "")));
+  // (a body's own "slides as a whole" is its status sentence's headline already)
+  const more = result.warnings.filter((w) => w.code !== "INDETERMINATE" && !said.has(w.message.replace(/\.$/, "")) && !(w.code === "SLIP" && w.ids.every((id) => id in result.bodies)));
   if (more.length) {
     doc.moveDown(0.3);
     for (const w of more) para(`Warning: ${w.message}`, 8.5, w.code === "SLIP" || w.code === "LIFTOFF" || w.code === "SLACK" ? ACCENT : SOFT);

@@ -83,8 +83,11 @@ describe("pump-skid-slip: SLIP at each foot", () => {
     expect(rear.friction!.needed).toBeCloseTo(0.0233, 4);
     expect(front.friction!.needed).toBeCloseTo(0.0271, 4);
     const slips = r.warnings.filter((w) => w.code === "SLIP");
-    expect(slips.map((w) => w.ids[0]).sort()).toEqual(["front", "rear"]);
+    // each foot, and the skid as a whole: |Σt|/Σn = 215.2 / (N1 + N2) = 0.0251 > 0.02
+    expect(slips.map((w) => w.ids[0]).sort()).toEqual(["front", "rear", "skid"]);
     expect(slips[0].message).toMatch(/needs a friction coefficient of 0\.0\d+, and has μ = 0\.02/);
+    expect(215.2 / (N1 + N2)).toBeCloseTo(0.0251, 4);
+    expect(slips.find((w) => w.ids[0] === "skid")!.message).toBe("Skid slides as a whole: its friction contacts must give a friction coefficient of 0.0251 together, and give 0.02");
     expect(r.bodies.skid.status).toBe("holds");
   });
 });
