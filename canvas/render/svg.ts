@@ -121,13 +121,13 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
     const msg = parsed.ok ? "" : parsed.errors.map((e) => `${e.path || "file"}: ${e.message}`).join("; ");
     return `${head}${title}${bg}<text x="24" y="40" font-size="14" fill="${INK_FAINT}">This sketch cannot be drawn: ${esc(msg)}</text></svg>`;
   }
-  // the legend line, and gravity's direction when it is turned: on a line of its own when both would
-  // not fit across (about 6 px a character at 11 px)
+  // the legend line, and gravity's direction when it is turned: its parts packed into as few lines
+  // as fit across (about 6 px a character at 11 px), so a narrow drawing wraps it rather than cut it
   const legend = opts.legend ?? !!result;
   const key = `Solid arrows: given loads and weight · double lines: reactions found (on the body) · dashed: momentum flux ṁV · ${units === "SI" ? "SI units" : "US customary units"}`;
   const ga = parsed.fields?.gravityAngle;
   const turned = legend ? gravityNote(ga && "value" in ga ? ga.value : undefined) : null;
-  const legendLines = !legend ? [] : !turned ? [key] : (key.length + turned.length + 3) * 6 <= width - 32 ? [`${key} · ${turned}`] : [key, turned];
+  const legendLines = legend ? packLine([...key.split(" · "), ...(turned ? [turned] : [])], Math.floor((width - 32) / 6)) : [];
   const footer = (opts.caption ? 22 : 0) + (legendLines.length ? 22 + 15 * (legendLines.length - 1) : 0) + (opts.note ? 18 : 0);
   const headLines = opts.heading?.lines ?? [];
   const top = opts.heading ? 40 + 18 * headLines.length : 0;
@@ -178,4 +178,15 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
     headLines.forEach((line, i) => (heading += `<text x="16" y="${50 + 18 * i}" font-size="13" fill="#3d4650" data-part="heading-line">${esc(line)}</text>`));
   }
   return `${head}${title}${bg}${heading}<g transform="translate(${n(dx)} ${n(dy)})">${body}${res}</g>${foot}</svg>`;
+}
+
+/** Parts joined with " · " into lines of at most `perLine` characters (a part longer than that has a line of its own). */
+function packLine(parts: string[], perLine: number): string[] {
+  const lines: string[] = [];
+  for (const part of parts) {
+    const last = lines[lines.length - 1];
+    if (last !== undefined && last.length + 3 + part.length <= perLine) lines[lines.length - 1] = `${last} · ${part}`;
+    else lines.push(part);
+  }
+  return lines;
 }

@@ -2,7 +2,7 @@
 // A version's drawing with its solved reactions, from the shared SVG renderer, with review
 // marks on top: comment pins, outlines around what a comparison found changed, and (while
 // pinning a new comment) a click picks an element or a point.
-import { useLayoutEffect, useMemo, useRef } from "react";
+import { useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { View } from "@/canvas/geometry/view";
 import { renderSketchSvg } from "@/canvas/render/svg";
 import { solveDocument } from "@/lib/review/compare";
@@ -71,10 +71,28 @@ export function ReviewDrawing({
 }) {
   const box = useRef<HTMLDivElement>(null);
   const { result, sketch } = useSolved(document);
+  // Drawn at the width of its column (not scaled down from `width`), so its words keep their size
+  // on screen: a half-width column or a phone would otherwise shrink them past reading. A shared
+  // frame (two drawings laid over each other) keeps its own size.
+  const [column, setColumn] = useState<number | null>(null);
+  useLayoutEffect(() => {
+    const el = box.current;
+    if (frame || !el || typeof ResizeObserver === "undefined") return;
+    const ro = new ResizeObserver(([entry]) => {
+      const w = Math.round(entry.contentRect.width);
+      if (w > 0) setColumn((old) => (old !== null && Math.abs(old - w) < 8 ? old : w));
+    });
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, [frame]);
+  // (not below 640 px: a phone's column shows a drawing made for 640, scaled, whole, rather than
+  // one whose labels crowd the body off its edges)
+  const drawnWidth = !frame && column ? Math.max(640, column) : width;
+  const drawnHeight = !frame && column ? Math.max(300, Math.round((drawnWidth * height) / width)) : height;
   // The renderer escapes every text it draws (titles, labels, values), so its output is markup we made.
   const svg = useMemo(
-    () => renderSketchSvg(document, result, { width, height, caption, units, frame, legend: !layer, background: layer ? "none" : "paper", onlyLabelsOf }),
-    [document, result, width, height, caption, units, frame, layer, onlyLabelsOf],
+    () => renderSketchSvg(document, result, { width: drawnWidth, height: drawnHeight, caption, units, frame, legend: !layer, background: layer ? "none" : "paper", onlyLabelsOf }),
+    [document, result, drawnWidth, drawnHeight, caption, units, frame, layer, onlyLabelsOf],
   );
 
   useLayoutEffect(() => {

@@ -24,6 +24,19 @@ function solved(id: string) {
 }
 
 describe("renderSketchSvg", () => {
+  it("wraps the line-style key on a narrow drawing rather than cut it", () => {
+    const { sketch, result } = solved("pipe-bend-anchor");
+    const keyOf = (width: number) =>
+      [...parse(renderSketchSvg(sketch, result, { width, height: 400 })).querySelectorAll("text")].map((t) => t.textContent ?? "").filter((t) => /arrows|double lines|dashed|units$/.test(t));
+    const wide = keyOf(900);
+    expect(wide).toEqual(["Solid arrows: given loads and weight · double lines: reactions found (on the body) · dashed: momentum flux ṁV · SI units"]);
+    const narrow = keyOf(500);
+    expect(narrow.length).toBeGreaterThan(1);
+    // every part is there, and each line fits across (about 6 px a character at 11 px)
+    expect(narrow.join(" · ")).toBe(wide[0]);
+    for (const line of narrow) expect(line.length * 6).toBeLessThanOrEqual(500 - 32);
+  });
+
   it("draws the pipe-bend example the same as last time", async () => {
     const { sketch, result } = solved("pipe-bend-anchor");
     const svg = renderSketchSvg(sketch, result, { width: 900, height: 600 });
