@@ -86,12 +86,13 @@ describe("review of a calculation in the browser", () => {
     await page.getByRole("button", { name: "Pin to the drawing" }).click();
     const rear = (await page.locator('[data-testid="review-drawing"] g[data-id="rear"]').boundingBox())!;
     const front = (await page.locator('[data-testid="review-drawing"] g[data-id="front"]').boundingBox())!;
-    await page.mouse.click((rear.x + rear.width / 2 + front.x + front.width / 2) / 2, Math.max(rear.y + rear.height, front.y + front.height) + 12);
+    // (each foot's box holds its symbol and, to its right, its label: their left edges are alike)
+    await page.mouse.click((rear.x + front.x) / 2 + 6, Math.max(rear.y + rear.height, front.y + front.height) + 12);
     const where = (await page.getByTestId("new-comment-pin").textContent()) ?? "";
     const m = /^Pinned at \(([−-]?[\d.]+), ([−-]?[\d.]+)\) m$/.exec(where.replace(/−/g, "-"));
     expect(m, where).not.toBeNull();
-    // the feet stand at x = 0.2 m and 2.8 m on the ground (y = 0): half way is 1.5 m (their labels,
-    // drawn to the right of each foot, shift the boxes a little), below is y < 0
+    // the feet stand at x = 0.2 m and 2.8 m on the ground (y = 0): half way is 1.5 m (clicked a little
+    // left of it, by the symbols' half width), below is y < 0
     expect(Number(m![1])).toBeGreaterThan(1.2);
     expect(Number(m![1])).toBeLessThan(1.8);
     expect(Number(m![2])).toBeLessThan(0);
