@@ -383,13 +383,19 @@ export function kindOfUnit(unit: string): FieldKind | null {
   } catch {
     return null;
   }
-  for (const [k, t] of targetUnits) if (k !== "stiffness" && u.equalBase(t)) return k;
+  return kindOf(u);
+}
+
+/** The first field kind (in FIELD_UNITS' order: N/m reads as a line load) whose unit shares a
+ *  quantity's dimension, or null. */
+function kindOf(u: Unit): FieldKind | null {
+  for (const [k, t] of targetUnits) if (u.equalBase(t)) return k;
   return null;
 }
 
 function describeDimension(u: Unit): string {
-  for (const [k, t] of targetUnits) if (u.equalBase(t)) return KIND_WORDS[k];
-  return "in other units";
+  const k = kindOf(u);
+  return k ? KIND_WORDS[k] : "in other units";
 }
 
 /** The value of a parameter as written by the user: its number in its own units. A result in
@@ -399,12 +405,8 @@ export function describeValue(value: MathValue): { value: number; unit: string; 
   let unit = value.formatUnits();
   const si = value.toSI();
   if (/\^[0-9.]*\.|\^0\./.test(unit) || unit.split(/[ */]/).filter(Boolean).length > 3) {
-    for (const [kind, target] of targetUnits) {
-      if (value.equalBase(target)) {
-        unit = FIELD_UNITS[kind];
-        break;
-      }
-    }
+    const kind = kindOf(value);
+    if (kind) unit = FIELD_UNITS[kind];
   }
   return { value: value.toNumeric(unit) as number, unit, si: si.toNumeric() as number };
 }

@@ -52,9 +52,11 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
           mark={(row, key) => (key === "verdict" && row[8] === "FAIL" ? <span className="ml-1 font-semibold text-caution">(below {row[7]})</span> : null)}
         />
       </div>
-      <p className={`mt-2 text-[11.5px] text-ink-faint ${unsolved ? "hidden" : ""}`}>
-        Design load from — {Object.entries(result.envelope).map(([id, e]) => `${id}: ${nameOf(e.design.case)}`).join(" · ")}
-      </p>
+      {unsolved ? null : (
+        <p className="mt-2 text-[11.5px] text-ink-faint">
+          Design load from — {Object.entries(result.envelope).map(([id, e]) => `${id}: ${nameOf(e.design.case)}`).join(" · ")}
+        </p>
+      )}
     </>
   );
 }

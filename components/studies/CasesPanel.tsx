@@ -18,12 +18,13 @@ import { CaseTables } from "./CaseTables";
 /** Each field's refusal, by its label: reported up so the run waits until they are put right. */
 const FieldErrors = createContext<(label: string, error: string | null) => void>(() => {});
 
-/** A text field that commits a parsed value on blur or Enter and shows its error at the field. */
-function TextCell({ label, value, parse, onCommit, placeholder, width }: {
+/** A text field that commits a parsed value on blur or Enter and shows its error at the field.
+ *  The text is parsed once a commit: `onCommit` gets what `parse` made of it. */
+function TextCell<T>({ label, value, parse, onCommit, placeholder, width }: {
   label: string;
   value: string;
-  parse: (t: string) => { ok: true } | { ok: false; error: string };
-  onCommit: (t: string) => void;
+  parse: (t: string) => Parsed<T>;
+  onCommit: (value: T) => void;
   placeholder?: string;
   width?: string;
 }) {
@@ -46,7 +47,7 @@ function TextCell({ label, value, parse, onCommit, placeholder, width }: {
     const r = parse(text);
     if (!r.ok) return setError(r.error);
     setError(null);
-    if (text !== value) onCommit(text);
+    if (text !== value) onCommit(r.value);
   };
   return (
     <label className={`flex flex-col ${width ?? ""}`}>
@@ -65,6 +66,8 @@ function TextCell({ label, value, parse, onCommit, placeholder, width }: {
     </label>
   );
 }
+
+const parseName = (t: string): Parsed<string> => (t.trim() ? { ok: true, value: t.trim() } : { ok: false, error: "needs a name" });
 
 export function CasesPanel() {
   const { editor } = useStores();
@@ -176,17 +179,17 @@ export function CasesPanel() {
                 {cases.map((c, i) => (
                   <tr key={c.id} className="align-top" data-case={c.id}>
                     <td className="pr-1 pb-1">
-                      <TextCell label={`Name of case ${c.id}`} value={c.name} parse={(t) => (t.trim() ? { ok: true } : { ok: false, error: "needs a name" })} onCommit={(t) => updateCase(i, { name: t.trim() })} />
+                      <TextCell label={`Name of case ${c.id}`} value={c.name} parse={parseName} onCommit={(name) => updateCase(i, { name })} />
                       <span className="text-[10.5px] text-ink-faint">id {c.id}</span>
                     </td>
                     <td className="pr-1 pb-1">
-                      <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder={changePlaceholder} parse={(t) => parseCaseParameters(t, c)} onCommit={(t) => { const r = parseCaseParameters(t, c); if (r.ok) updateCase(i, { parameters: r.value }); }} />
+                      <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder={changePlaceholder} parse={(t) => parseCaseParameters(t, c)} onCommit={(parameters) => updateCase(i, { parameters })} />
                     </td>
                     <td className="pr-1 pb-1">
-                      <TextCell label={`Group factors of ${c.name}`} value={formatFactors(c.factors)} placeholder="dead 1.2, flow 1.5" parse={(t) => parseFactors(t, groups)} onCommit={(t) => { const r = parseFactors(t, groups); if (r.ok) updateCase(i, { factors: r.value }); }} />
+                      <TextCell label={`Group factors of ${c.name}`} value={formatFactors(c.factors)} placeholder="dead 1.2, flow 1.5" parse={(t) => parseFactors(t, groups)} onCommit={(factors) => updateCase(i, { factors })} />
                     </td>
                     <td className="pr-1 pb-1">
-                      <TextCell label={`Flow factor of ${c.name}`} value={c.flowFactor === undefined ? "" : String(c.flowFactor)} placeholder="1" parse={(t) => (!t.trim() || Number(t) >= 0 ? { ok: true } : { ok: false, error: "a number, 0 or more" })} onCommit={(t) => updateCase(i, { flowFactor: t.trim() ? Number(t) : undefined })} />
+                      <TextCell label={`Flow factor of ${c.name}`} value={c.flowFactor === undefined ? "" : String(c.flowFactor)} placeholder="1" parse={(t) => (!t.trim() ? { ok: true, value: undefined } : Number(t) >= 0 ? { ok: true, value: Number(t) } : { ok: false, error: "a number, 0 or more" })} onCommit={(flowFactor) => updateCase(i, { flowFactor })} />
                     </td>
                     <td className="pb-1">
                       <button type="button" className="px-1 text-ink-faint hover:text-accent" aria-label={`Remove case ${c.name}`} onClick={() => putCases(cases.filter((_, k) => k !== i))}>
@@ -222,8 +225,8 @@ export function CasesPanel() {
             <ul className="mt-1 space-y-1">
               {combinations.map((k, i) => (
                 <li key={k.id} className="grid grid-cols-[10rem_1fr_auto] items-start gap-1" data-combination={k.id}>
-                  <TextCell label={`Name of combination ${k.id}`} value={k.name} parse={(t) => (t.trim() ? { ok: true } : { ok: false, error: "needs a name" })} onCommit={(t) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name: t.trim() } : x)))} />
-                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(t) => { const r = parseTerms(t, cases); if (r.ok) putCombos(combinations.map((x, j) => (j === i ? { ...x, terms: r.value } : x))); }} />
+                  <TextCell label={`Name of combination ${k.id}`} value={k.name} parse={parseName} onCommit={(name) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name } : x)))} />
+                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(terms) => putCombos(combinations.map((x, j) => (j === i ? { ...x, terms } : x)))} />
                   <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => putCombos(combinations.filter((_, j) => j !== i))}>
                     ×
                   </button>
@@ -244,7 +247,7 @@ export function CasesPanel() {
             <label key={k} className="flex items-center gap-1.5 text-[12px] text-ink-soft">
               against {k}
               <span className="w-16">
-                <TextCell label={`Required factor against ${k}`} value={String(sketch.stability?.[k] ?? 1.5)} parse={(t) => (Number(t) > 0 ? { ok: true } : { ok: false, error: "more than 0" })} onCommit={(t) => editor.getState().apply(setStudy({ key: "stability", value: { ...sketch.stability, [k]: Number(t) } }) as Command<unknown>)} />
+                <TextCell label={`Required factor against ${k}`} value={String(sketch.stability?.[k] ?? 1.5)} parse={(t) => (Number(t) > 0 ? { ok: true, value: Number(t) } : { ok: false, error: "more than 0" })} onCommit={(v) => editor.getState().apply(setStudy({ key: "stability", value: { ...sketch.stability, [k]: v } }) as Command<unknown>)} />
               </span>
             </label>
           ))}

@@ -204,6 +204,7 @@ export async function listSketchActivity(
 /** A version in the workspace part-way through its sign-off (submitted, checked or returned), with
  *  its sketch, author, checker and when its state last moved; newest move first. */
 export async function listVersionsInReview(workspaceId: string, tx: DbOrTx = db) {
+  const since = sql<Date>`coalesce((select max(so.at) from sign_off so where so.version_id = ${sketchVersion.id}), ${sketchVersion.createdAt})`;
   const rows = await tx
     .select({
       sketchId: sketch.id,
@@ -214,12 +215,13 @@ export async function listVersionsInReview(workspaceId: string, tx: DbOrTx = db)
       authorId: sketchVersion.authorId,
       authorName: author.name,
       checkedBy: sketchVersion.checkedBy,
-      since: sql<Date>`coalesce((select max(so.at) from sign_off so where so.version_id = ${sketchVersion.id}), ${sketchVersion.createdAt})`,
+      since,
     })
     .from(sketchVersion)
     .innerJoin(sketch, eq(sketch.id, sketchVersion.sketchId))
     .leftJoin(author, eq(author.id, sketchVersion.authorId))
     .where(and(eq(sketch.workspaceId, workspaceId), sql`${sketchVersion.reviewState} in ('submitted', 'checked', 'returned')`))
+    .orderBy(desc(since))
     .limit(500);
-  return rows.map((r) => ({ ...r, since: new Date(r.since) })).sort((a, b) => b.since.getTime() - a.since.getTime());
+  return rows.map((r) => ({ ...r, since: new Date(r.since) }));
 }
