@@ -51,7 +51,7 @@ export interface StudyResult {
 const AS_DRAWN: CaseFile = { id: "as-drawn", name: "As drawn" };
 
 /** A case's numeric sketch: the file with its parameter overrides, and its scaling. */
-function caseSketch(file: SketchFile, c: CaseFile) {
+export function caseSketch(file: SketchFile, c: CaseFile) {
   const variant: SketchFile = c.parameters ? { ...file, parameters: { ...(file.parameters ?? {}), ...c.parameters } } : file;
   const r = resolveFile(variant);
   if (!r.ok) {

@@ -10,7 +10,7 @@
 // jumps across the target there, or when it reaches the target on the side where the body
 // holds (the contact whose lift-off starts the tipping: its n falls to zero just before).
 import { readQuantity, type QuantitySpec } from "./quantity";
-import { createSweeper } from "./sweep";
+import { createSweeper, type Sweeper } from "./sweep";
 import type { Sketch } from "./types";
 
 export interface LimitOptions {
@@ -60,10 +60,20 @@ export function findLimit(
   target = 0,
   options: LimitOptions = {},
 ): LimitResult {
+  return findLimitWith(createSweeper(sketch, parameter), range, quantity, target, options);
+}
+
+/** The limit search with a sweeper made for it (of a sketch, or of a combination: solver/studySweep.ts); restores it after. */
+export function findLimitWith(
+  sweeper: Sweeper,
+  range: readonly [number, number],
+  quantity: QuantitySpec,
+  target = 0,
+  options: LimitOptions = {},
+): LimitResult {
   const [lo, hi] = range[0] <= range[1] ? range : [range[1], range[0]];
   const samples = Math.max(2, options.samples ?? 64);
   const tol = options.tolerance ?? Math.max(1e-12, 1e-9 * (hi - lo || 1));
-  const sweeper = createSweeper(sketch, parameter);
   let iterations = 0;
   const at = (x: number): Sample => {
     iterations++;

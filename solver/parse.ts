@@ -111,5 +111,9 @@ function validateCases(file: SketchFile): FieldError[] {
       if (!caseIds.has(t.case)) errors.push({ path: `combinations[${i}].terms[${j}].case`, message: `names case "${t.case}", which does not exist` });
     });
   });
+  (file.sweeps ?? []).forEach((sw, i) => {
+    if (sw.case !== undefined && sw.combination !== undefined)
+      errors.push({ path: `sweeps[${i}].combination`, message: "a sweep runs on a case or on a combination, not both (remove one)" });
+  });
   return errors;
 }

@@ -7,8 +7,9 @@ import { z } from "zod";
 export const FORMAT = "counterpoise.sketch";
 /** The newest format version this solver writes. Older files are migrated (solver/migrations).
  *  1: the published contract. 2: load groups, operating cases, combinations, saved sweeps,
- *  stability requirements. 3: the underlay. */
-export const CURRENT_VERSION = 5;
+ *  stability requirements. 3: the underlay. 4: a port's momentum-flux factor β. 5: the direction
+ *  of gravity. 6: a saved sweep on a combination. */
+export const CURRENT_VERSION = 6;
 
 // zod's own messages ("Invalid input: expected array, received object") name a type, not the
 // mistake. Every schema and check below that has no message of its own takes these words.
@@ -202,6 +203,8 @@ export const sweepSchema = z.strictObject(
     points: z.number(say).int(say).min(2, { error: "needs at least 2 points" }).max(20000, { error: "is more than 20,000 points" }),
     /** the case whose overrides apply (default: the sketch as drawn) */
     case: id.optional(),
+    /** or the combination whose factored load set is solved at each point (version 6) */
+    combination: id.optional(),
     quantities: z
       .array(
         z.strictObject(

@@ -28,7 +28,18 @@ export interface Sweeper {
 /** The built-in parameter that scales every port's flow (ṁ and V × f, momentum flux × f²). */
 export const FLOW_FACTOR = "flowFactor";
 
-export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
+/** What a sweep changes in one sketch: the swept value goes in, the sketch is left ready to solve. */
+export interface ParameterSetter {
+  sketch: Sketch;
+  /** the unit the parameter is written in, in this sketch */
+  unit: string;
+  /** put `value` (in `unit`, this sketch's own unit when absent) in its place; the errors it leaves */
+  set(value: number, unit?: string): FieldError[];
+  /** put every swept value back as parsed */
+  restore(): void;
+}
+
+export function createSetter(sketch: Sketch, parameter: string): ParameterSetter {
   const plan = planOf(sketch);
   if (!plan) throw new Error("a sweep needs a sketch returned by parseSketch");
   if (parameter === FLOW_FACTOR && !plan.scope.has(FLOW_FACTOR)) {
@@ -36,12 +47,11 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
     // the points share the terms and warnings the swept value leaves alone (reuse.ts)
     shareAcrossSolves(sketch, true);
     return {
-      parameter,
+      sketch,
       unit: "",
-      at(value: number): SweepPoint {
+      set(value: number): FieldError[] {
         sketch.scaling = { ...saved, flowFactor: value };
-        if (!(value >= 0)) return { value, ok: false, errors: [{ path: FLOW_FACTOR, message: "must be zero or more" }] };
-        return { value, ok: true, result: solve(sketch) };
+        return value >= 0 ? [] : [{ path: FLOW_FACTOR, message: "must be zero or more" }];
       },
       restore() {
         sketch.scaling = saved;
@@ -53,7 +63,7 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
     const names = [...plan.scope.keys()];
     throw new Error(`the sketch has no parameter "${parameter}" (it has ${[...names, FLOW_FACTOR].join(", ")})`);
   }
-  const unit = plan.parameterUnits[parameter] ?? "";
+  const own = plan.parameterUnits[parameter] ?? "";
   const affected = new Set([parameter]);
   const params = plan.parameters.filter((p) => {
     if (p.expr && p.expr.deps.some((d) => affected.has(d))) {
@@ -68,9 +78,9 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
 
   shareAcrossSolves(sketch, true);
   return {
-    parameter,
-    unit,
-    at(value: number): SweepPoint {
+    sketch,
+    unit: own,
+    set(value: number, unit = own): FieldError[] {
       const errors: FieldError[] = [];
       plan.scope.set(parameter, makeValue(value, unit));
       for (const p of params) {
@@ -88,8 +98,7 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
         }
       }
       if (errors.length === 0) errors.push(...validateValues(sketch));
-      if (errors.length) return { value, ok: false, errors };
-      return { value, ok: true, result: solve(sketch) };
+      return errors;
     },
     restore() {
       shareAcrossSolves(sketch, false);
@@ -99,11 +108,28 @@ export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
   };
 }
 
+export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
+  const setter = createSetter(sketch, parameter);
+  return {
+    parameter,
+    unit: setter.unit,
+    at(value: number): SweepPoint {
+      const errors = setter.set(value);
+      return errors.length ? { value, ok: false, errors } : { value, ok: true, result: solve(sketch) };
+    },
+    restore: setter.restore,
+  };
+}
+
 /** Solve the sketch at each value of `parameter` (values in the unit the parameter was written in). */
 export function solveSweep(sketch: Sketch, parameter: string, values: readonly number[]): SweepResult {
-  const sweeper = createSweeper(sketch, parameter);
+  return sweepWith(createSweeper(sketch, parameter), values);
+}
+
+/** Solve at each value with a sweeper made for it (of a sketch, or of a combination: solver/studySweep.ts); restores it after. */
+export function sweepWith(sweeper: Sweeper, values: readonly number[]): SweepResult {
   try {
-    return { parameter, unit: sweeper.unit, points: values.map((v) => sweeper.at(v)) };
+    return { parameter: sweeper.parameter, unit: sweeper.unit, points: values.map((v) => sweeper.at(v)) };
   } finally {
     sweeper.restore();
   }

@@ -1,12 +1,12 @@
 // The studies' work, as plain functions that run in a worker (or directly in tests): all cases
 // and combinations at once, a sweep in chunks with progress and a way to stop, and the limit finder.
-import { findLimit, type LimitResult } from "@/solver/limit";
+import { findLimitWith, type LimitResult } from "@/solver/limit";
 import { parseSketch } from "@/solver/parse";
 import { readQuantity, type QuantitySpec } from "@/solver/quantity";
-import { createSweeper, linspace } from "@/solver/sweep";
+import { linspace } from "@/solver/sweep";
+import { sweeperOn } from "@/solver/studySweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
-import type { SketchFile } from "@/solver/schema";
-import type { FieldError, Sketch } from "@/solver/types";
+import type { FieldError } from "@/solver/types";
 import { marksZero } from "./display";
 
 /** How far a job is: sweep points or runs (cases and combinations) done, of how many. */
@@ -24,6 +24,8 @@ export interface SweepSpec {
   points: number;
   /** apply this case's overrides and factors first */
   caseId?: string;
+  /** or solve this combination's factored load set at each point */
+  combinationId?: string;
   quantities: QuantitySpec[];
 }
 
@@ -45,20 +47,6 @@ export interface SweepData {
 
 const STATUS_RANK: Record<string, number> = { holds: 0, lifts: 1, tips: 2, unrestrained: 3 };
 
-/** The sketch a case makes: its parameter overrides in the file, its factors as scaling. */
-export function sketchForCase(file: SketchFile, caseId?: string): Sketch {
-  const c = caseId ? file.cases?.find((x) => x.id === caseId) : undefined;
-  if (caseId && !c) {
-    const ids = (file.cases ?? []).map((x) => x.id);
-    throw new Error(`case: there is no case "${caseId}"${ids.length ? ` (cases: ${ids.join(", ")})` : ""}`);
-  }
-  const variant = c?.parameters ? { ...file, parameters: { ...(file.parameters ?? {}), ...c.parameters } } : file;
-  const p = parseSketch(variant);
-  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
-  if (c) p.sketch.scaling = { factors: c.factors, flowFactor: c.flowFactor ?? 1 };
-  return p.sketch;
-}
-
 /** Every case and combination; `onProgress` hears the runs done of the total after each one. */
 export function runCases(file: unknown, onProgress: OnProgress = () => {}): StudyResult {
   const p = parseSketch(file);
@@ -73,9 +61,8 @@ export function runCases(file: unknown, onProgress: OnProgress = () => {}): Stud
 export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number) => boolean = () => true, chunk = 100): SweepData {
   const p = parseSketch(file);
   if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
-  const sketch = spec.caseId ? sketchForCase(p.file, spec.caseId) : p.sketch;
   const xs = linspace(spec.from, spec.to, spec.points);
-  const sweeper = createSweeper(sketch, spec.parameter);
+  const sweeper = sweeperOn(p.file, { case: spec.caseId, combination: spec.combinationId }, spec.parameter, p.sketch);
   const data: SweepData = { parameter: spec.parameter, unit: sweeper.unit, quantities: spec.quantities, xs: [], series: spec.quantities.map(() => []), statuses: [], crossings: [], errors: [] };
   try {
     for (let i = 0; i < xs.length; i++) {
@@ -114,6 +101,7 @@ export interface LimitSpec {
   from: number;
   to: number;
   caseId?: string;
+  combinationId?: string;
   quantity: QuantitySpec;
   target: number;
 }
@@ -121,8 +109,7 @@ export interface LimitSpec {
 export function runLimit(file: unknown, spec: LimitSpec): LimitResult {
   const p = parseSketch(file);
   if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
-  const sketch = spec.caseId ? sketchForCase(p.file, spec.caseId) : p.sketch;
-  return findLimit(sketch, spec.parameter, [spec.from, spec.to], spec.quantity, spec.target);
+  return findLimitWith(sweeperOn(p.file, { case: spec.caseId, combination: spec.combinationId }, spec.parameter, p.sketch), [spec.from, spec.to], spec.quantity, spec.target);
 }
 
 /** One job, as the worker runs it (or the page, where no worker can run). */

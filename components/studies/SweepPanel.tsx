@@ -79,7 +79,10 @@ export function SweepPanel() {
     setTo(String(range.to));
   };
   const [points, setPoints] = useState(String(saved?.points ?? 201));
-  const [caseId, setCaseId] = useState<string>(saved?.case ?? "");
+  // what the sweep runs on: "" (as drawn), "case:<id>" or "combination:<id>"
+  const [on, setOn] = useState<string>(saved?.combination ? `combination:${saved.combination}` : saved?.case ? `case:${saved.case}` : "");
+  const caseId = on.startsWith("case:") ? on.slice(5) : undefined;
+  const combinationId = on.startsWith("combination:") ? on.slice(12) : undefined;
   // by default the margins and resultants (friction margins on request)
   const [picked, setPicked] = useState<string[]>(() =>
     (saved?.quantities ?? choices.map((c) => c.spec).filter((q) => q.component !== "frictionMargin" && q.component !== "m")).map((q) => `${q.support}:${q.component}`),
@@ -120,7 +123,7 @@ export function SweepPanel() {
     if (f === t) return "Give a range: two different values.";
     if (!(n >= 2 && n <= 20000)) return "Points: 2 to 20,000.";
     if (!quantities.length) return "Pick at least one quantity to plot.";
-    return { parameter, from: f, to: t, points: n, caseId: caseId || undefined, quantities };
+    return { parameter, from: f, to: t, points: n, caseId, combinationId, quantities };
   };
 
   const run = () => {
@@ -160,7 +163,7 @@ export function SweepPanel() {
     setError(null);
     setLimitError(null);
     setLimit(null);
-    const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, quantity: q, target: tgt.si } });
+    const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, combinationId: s.combinationId, quantity: q, target: tgt.si } });
     setSearching(() => job.cancel);
     setLimitStopped(false);
     job.promise
@@ -185,11 +188,20 @@ export function SweepPanel() {
   const keep = () => {
     const s = spec();
     if (typeof s === "string") return setError(s);
-    const sweep = { id: "sweep-1", parameter: s.parameter, from: s.from, to: s.to, points: s.points, ...(s.caseId ? { case: s.caseId } : {}), quantities: s.quantities };
+    const sweep = { id: "sweep-1", parameter: s.parameter, from: s.from, to: s.to, points: s.points, ...(s.caseId ? { case: s.caseId } : {}), ...(s.combinationId ? { combination: s.combinationId } : {}), quantities: s.quantities };
     editor.getState().apply(setStudy({ key: "sweeps", value: [sweep, ...(sketch.sweeps ?? []).filter((x) => x.id !== "sweep-1")] }) as Command<unknown>);
   };
 
   const caseOverride = caseId ? sketch.cases?.find((c) => c.id === caseId)?.parameters?.[parameter] : undefined;
+  const combination = combinationId ? sketch.combinations?.find((k) => k.id === combinationId) : undefined;
+  // the cases of the combination that set the swept parameter themselves
+  const combinationOverrides = combination
+    ? combination.terms.flatMap((t) => {
+        const c = sketch.cases?.find((x) => x.id === t.case);
+        const v = c?.parameters?.[parameter];
+        return c && v !== undefined ? [`${c.name} (${parameter} = ${String(v)})`] : [];
+      })
+    : [];
   const limitQuantity = quantities[limitQ] ?? quantities[0];
   const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scaleFor(limitQuantity.component)) : "";
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
@@ -216,11 +228,24 @@ export function SweepPanel() {
         <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1">Numbers in the unit the parameter is written in{data?.unit ? ` (${prettyUnit(data.unit)})` : ""}, or give a unit (“90 km/hr”); the flow factor is a plain number.</p>
         {(sketch.cases?.length ?? 0) > 0 && (
           <label className="col-span-2 block @4xl:col-span-1">
-            <span className={LABEL}>Case</span>
-            <select className={INPUT} value={caseId} onChange={(e) => setCaseId(e.target.value)} aria-label="Case to sweep">
+            <span className={LABEL}>{sketch.combinations?.length ? "Case or combination" : "Case"}</span>
+            <select className={INPUT} value={on} onChange={(e) => setOn(e.target.value)} aria-label={sketch.combinations?.length ? "Case or combination to sweep" : "Case to sweep"}>
               <option value="">As drawn</option>
-              {sketch.cases!.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+              <optgroup label="Cases">
+                {sketch.cases!.map((c) => <option key={c.id} value={`case:${c.id}`}>{c.name}</option>)}
+              </optgroup>
+              {(sketch.combinations?.length ?? 0) > 0 && (
+                <optgroup label="Combinations (factored load sets)">
+                  {sketch.combinations!.map((k) => <option key={k.id} value={`combination:${k.id}`}>{k.name}</option>)}
+                </optgroup>
+              )}
             </select>
+            {combination && (
+              <span className="mt-0.5 block text-[11px] text-ink-faint" data-testid="combination-sweep-note">
+                Each point is solved as one factored load set ({combination.terms.map((t) => `${t.factor} × ${sketch.cases?.find((c) => c.id === t.case)?.name ?? t.case}`).join(" + ")}), with the sweep&apos;s {pLabel} in every case
+                {combinationOverrides.length ? `, standing in for ${combinationOverrides.join(", ")}` : ""}.
+              </span>
+            )}
             {caseOverride !== undefined && (
               <span className="mt-0.5 block text-[11px] text-ink-faint" data-testid="case-sets-parameter">
                 This case sets {parameter} = {String(caseOverride)}; the sweep&apos;s values stand in for it.

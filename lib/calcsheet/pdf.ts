@@ -21,12 +21,15 @@ import {
   type SolveResult,
 } from "@/solver";
 import { caseWarnings, combinationWarnings } from "@/solver/cases";
+import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
 import { caseFindings, designLoadTable, excludedWords, unsolvedWords, type Table } from "@/solver/report";
 import { lineChartSvg } from "./chart";
 import { sweepCharts } from "./sweeps";
 import { registerFonts } from "./fonts";
 import { drawTable } from "./table";
+
+const combinationTerms = (k: CombinationFile) => k.terms.map((t) => `${t.factor} × ${t.case}`).join(" + ");
 
 export interface SignoffEntry {
   role: "prepared" | "checked" | "approved";
@@ -155,7 +158,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       for (const w of caseWarnings(parsed.file, c)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
     for (const k of parsed.file.combinations ?? []) {
-      para(`${k.name} (${k.id}): ${k.terms.map((t) => `${t.factor} × ${t.case}`).join(" + ")}, solved as one factored load set`, 8.5, INK);
+      para(`${k.name} (${k.id}): ${combinationTerms(k)}, solved as one factored load set`, 8.5, INK);
       for (const w of combinationWarnings(parsed.file, k)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
   }
@@ -191,10 +194,13 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   for (const sw of parsed.file.sweeps ?? []) {
     ensureSpace(doc, 320);
     const caseName = sw.case ? (parsed.file.cases?.find((c) => c.id === sw.case)?.name ?? sw.case) : null;
-    heading(`Sweep of ${sw.parameter}${caseName ? ` — case ${caseName}` : " — as drawn"}`);
+    const combination = sw.combination ? parsed.file.combinations?.find((k) => k.id === sw.combination) : undefined;
+    const on = sw.combination ? ` — combination ${combination?.name ?? sw.combination}` : caseName ? ` — case ${caseName}` : " — as drawn";
+    heading(`Sweep of ${sw.parameter}${on}`);
     // a case that sets the swept parameter itself: the sweep's values stand in for the case's
     const overridden = sw.case ? parsed.file.cases?.find((c) => c.id === sw.case)?.parameters?.[sw.parameter] : undefined;
     if (overridden !== undefined) para(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`, 8.5, INK);
+    if (combination) para(`Each point is solved as the combination's factored load set (${combinationTerms(combination)}), with the sweep's value of ${sw.parameter} in every one of its cases.`, 8.5, INK);
     try {
       const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions));
       for (const spec of charts) {

@@ -1,12 +1,12 @@
 // A saved sweep as the calc sheet's charts: solved on the sweep's own case (its overrides and
-// factors), one chart per unit (forces, moments, ratios) so a moment is never drawn on a force
+// factors) or combination (its factored load set), one chart per unit (forces, moments, ratios) so a moment is never drawn on a force
 // axis, and the crossings of its margins found by the limit finder.
-import { sketchForCase } from "@/canvas/studies/run";
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
-import { findLimit } from "@/solver/limit";
+import { findLimitWith } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
-import { linspace, solveSweep } from "@/solver/sweep";
+import { linspace, sweepWith } from "@/solver/sweep";
+import { sweeperOn } from "@/solver/studySweep";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import type { ChartSpec } from "./chart";
 
@@ -32,11 +32,11 @@ export interface SweepMarker {
 }
 
 export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, supports: string[]): { charts: ChartSpec[]; markers: SweepMarker[] } {
-  const sketch = sketchForCase(file, sw.case);
-  const res = solveSweep(sketch, sw.parameter, linspace(sw.from, sw.to, Math.min(sw.points, MAX_POINTS)));
+  const on = () => sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter);
+  const res = sweepWith(on(), linspace(sw.from, sw.to, Math.min(sw.points, MAX_POINTS)));
   const quantities: QuantitySpec[] = sw.quantities?.length ? sw.quantities : supports.map((s) => ({ support: s, component: "resultant" as const }));
   const markers = quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
-    const lim = findLimit(sketch, sw.parameter, [sw.from, sw.to], q);
+    const lim = findLimitWith(on(), [sw.from, sw.to], q);
     if (!lim.found) return [];
     const at = `${formatNumber(lim.value, 4)}${lim.unit ? ` ${prettyUnit(lim.unit)}` : ""}`;
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);

@@ -242,7 +242,7 @@ const combinationText = (k: CombinationFile) => `${k.name}: ${k.terms.map((t) =>
 
 function sweepText(s: SweepFile): string {
   const plots = s.quantities?.length ? `; plots ${s.quantities.map((q) => `${q.component} at ${q.support}`).join(", ")}` : "";
-  return `${s.parameter} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case ${s.case}` : ""}${plots}`;
+  return `${s.parameter} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case ${s.case}` : ""}${s.combination ? `, combination ${s.combination}` : ""}${plots}`;
 }
 
 function underlayText(u: UnderlayFile): string {

@@ -269,6 +269,44 @@ describe("Sweep tab", () => {
   });
 });
 
+describe("a sweep on a combination", () => {
+  it("runs on the combination's factored load set, says so, finds the limit there and keeps it on the calc sheet", async () => {
+    const { runLimit } = await import("@/canvas/studies/run");
+    const user = userEvent.setup();
+    const doc = load("fire-monitor-trailer");
+    doc.cases = [
+      { id: "dead", name: "Dead", factors: { flow: 0 } },
+      { id: "jet", name: "Jet", factors: { dead: 0 }, parameters: { theta: "30 deg" } },
+    ];
+    doc.combinations = [{ id: "k", name: "Light trailer, strong jet", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] }];
+    const editor = mount(doc);
+    await setUpSweep(user, "theta", ["0", "80", "81"]);
+    const on = screen.getByRole("combobox", { name: "Case or combination to sweep" });
+    expect(within(on).getByRole("group", { name: "Combinations (factored load sets)" })).toBeTruthy();
+    await user.selectOptions(on, "Light trailer, strong jet");
+    expect(screen.getByTestId("combination-sweep-note").textContent).toBe(
+      "Each point is solved as one factored load set (0.9 × Dead + 1.4 × Jet), with the sweep's theta in every case, standing in for Jet (theta = 30 deg).",
+    );
+    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    const crossings = await screen.findByTestId("crossings");
+    // the limit on the combination, from the worker's own function (checked against a closed form in
+    // tests/unit/solver/combination-sweep.test.ts), and the sweep's marked crossing brackets it
+    const jack = { support: "jack", component: "margin" as const };
+    const expected = runLimit(doc, { parameter: "theta", from: 0, to: 80, combinationId: "k", quantity: jack, target: 0 });
+    const drawn = runLimit(doc, { parameter: "theta", from: 0, to: 80, quantity: jack, target: 0 });
+    if (!expected.found || !drawn.found) throw new Error("expected crossings");
+    expect(Math.abs(expected.value - drawn.value)).toBeGreaterThan(1);
+    const lo = Math.floor(expected.value);
+    expect(crossings.textContent).toContain(`margin at jack crosses zero between theta = ${lo} and ${lo + 1} deg`);
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at jack");
+    await user.click(screen.getByRole("button", { name: "Find" }));
+    expect((await screen.findByTestId("limit-answer")).textContent).toContain(`at theta = ${expected.value.toPrecision(5).replace(/0+$/, "")} deg.`);
+    await user.click(screen.getByRole("button", { name: "Keep on the calc sheet" }));
+    expect(editor.getState().sketch.sweeps![0]).toMatchObject({ parameter: "theta", from: 0, to: 80, points: 81, combination: "k" });
+    expect(editor.getState().sketch.sweeps![0].case).toBeUndefined();
+  });
+});
+
 describe("load groups in the properties", () => {
   it("puts a load into a group that a case's factor then scales", async () => {
     const { renderEditor, storedSketch } = await import("./editor-helpers");

@@ -145,6 +145,24 @@ describe("calc sheet PDF", () => {
     expect(text).toContain(`Crossing: jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
   }, 60000);
 
+  it("a sweep saved on a combination is solved as its factored load set, and says so", async () => {
+    const file = loadFixture("fire-monitor-trailer.json");
+    file.cases = [
+      { id: "dead", name: "Dead", factors: { flow: 0 } },
+      { id: "jet", name: "Jet", factors: { dead: 0 } },
+    ];
+    file.combinations = [{ id: "k", name: "Light trailer", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] }];
+    file.sweeps = [{ id: "sw", parameter: "theta", from: 0, to: 80, points: 41, combination: "k", quantities: [{ support: "jack", component: "margin" }] }];
+    const { text } = await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file }));
+    expect(text).toContain("Sweep of theta — combination Light trailer");
+    expect(text).toContain("Each point is solved as the combination's factored load set (0.9 × dead + 1.4 × jet), with the sweep's value of theta in every one of its cases.");
+    const lim = runLimit(file, { parameter: "theta", from: 0, to: 80, combinationId: "k", quantity: { support: "jack", component: "margin" }, target: 0 });
+    const drawn = runLimit(file, { parameter: "theta", from: 0, to: 80, quantity: { support: "jack", component: "margin" }, target: 0 });
+    if (!lim.found || !drawn.found) throw new Error("expected crossings");
+    expect(formatNumber(lim.value, 4)).not.toBe(formatNumber(drawn.value, 4));
+    expect(text).toContain(`Crossing: jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
+  }, 60000);
+
   it("says when a sweep's case sets the swept parameter itself: the sweep's values stand in for it", async () => {
     // the exhaust-stack example sweeps the wind speed v on a case that sets v = 30 m/s
     const { exampleById } = await import("@/canvas/examples");

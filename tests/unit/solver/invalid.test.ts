@@ -19,7 +19,7 @@ describe("invalid sketch files", () => {
   it("a newer version than this solver reads", () => {
     expect(errorsOf({ format: "counterpoise.sketch", version: 99 })[0]).toEqual({
       path: "version",
-      message: "is 99, newer than this version of Counterpoise reads (5); update Counterpoise to open it",
+      message: "is 99, newer than this version of Counterpoise reads (6); update Counterpoise to open it",
     });
   });
 

@@ -6,6 +6,7 @@ import { loadCases } from "@/solver/migrations/002-load-cases";
 import { underlay } from "@/solver/migrations/003-underlay";
 import { momentumFactor } from "@/solver/migrations/004-momentum-factor";
 import { gravityDirection } from "@/solver/migrations/005-gravity-direction";
+import { combinationSweep } from "@/solver/migrations/006-combination-sweep";
 import { loadFixture } from "./helpers";
 
 describe("migrateSketch", () => {
@@ -79,6 +80,26 @@ describe("each step of the chain", () => {
     expect(p.sketch.ports[0].beta).toBe(1.02);
   });
 
+  it("5 → 6 (a sweep on a combination): a version-5 file with cases and a saved sweep gets version 6, unchanged otherwise", async () => {
+    const base = loadFixture("fire-monitor-trailer.json");
+    const doc = {
+      ...base,
+      version: 5,
+      gravityAngle: -90,
+      cases: [{ id: "low", name: "Low throw", parameters: { theta: "10 deg" } }],
+      sweeps: [{ id: "s", parameter: "theta", from: 0, to: 60, points: 31, case: "low" }],
+    };
+    const r = migrateSketch(doc, [loadCases, underlay, momentumFactor, gravityDirection, combinationSweep], 6);
+    expect(r).toEqual({ ok: true, doc: { ...doc, version: 6 }, applied: [5] });
+    const { parseSketch } = await import("@/solver");
+    const p = parseSketch(doc);
+    if (!p.ok) throw new Error(JSON.stringify(p.errors));
+    expect(p.file.sweeps).toEqual([{ id: "s", parameter: "theta", from: 0, to: 60, points: 31, case: "low" }]);
+    // the new field reads (what it names is checked when the sweep runs)
+    const q = parseSketch({ ...doc, version: 6, sweeps: [{ id: "s", parameter: "theta", from: 0, to: 60, points: 31, combination: "nope" }] });
+    expect(q.ok).toBe(true);
+  });
+
   it("every version-1 fixture still solves exactly as before: migrated, parsed, solved", async () => {
     const { readdirSync } = await import("node:fs");
     const { FIXTURES } = await import("./helpers");
@@ -89,7 +110,7 @@ describe("each step of the chain", () => {
       const p = parseSketch(doc);
       expect(p.ok, f).toBe(true);
       if (!p.ok) continue;
-      expect(p.migratedFrom).toEqual([1, 2, 3, 4]);
+      expect(p.migratedFrom).toEqual([1, 2, 3, 4, 5]);
       expect(p.file.version).toBe(CURRENT_VERSION);
       // the same file marked as current (no migration) gives the identical result
       const q = parseSketch({ ...doc, version: CURRENT_VERSION });

@@ -1,0 +1,85 @@
+// A sweep or limit search on what a study names: the sketch as drawn, one operating case (its
+// overrides and factors), or a combination. A combination is solved at each point as its own
+// factored load set, as the case table solves it (solver/cases.ts): each of its cases takes the
+// swept value, its load set is built, and the sets are added with their factors before the one
+// solve — never the results of the cases.
+import { caseSketch, combineModels } from "./cases";
+import { resolveFile } from "./parse";
+import type { SketchFile } from "./schema";
+import { prepare, solveModels } from "./solve";
+import { createSetter, createSweeper, FLOW_FACTOR, type ParameterSetter, type Sweeper } from "./sweep";
+import type { FieldError, Sketch, SolveWarning } from "./types";
+
+/** What a sweep runs on: a case, or a combination, or (neither) the sketch as drawn. */
+export interface SweepOn {
+  case?: string;
+  combination?: string;
+}
+
+const listed = (what: string, ids: string[]) => (ids.length ? ` (${what}: ${ids.join(", ")})` : "");
+
+function failed(errors: FieldError[]): Error {
+  return new Error(errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+}
+
+/** The numeric sketch of one case (its parameter overrides, its factors and flow factor). */
+export function sketchOfCase(file: SketchFile, caseId: string): Sketch {
+  const c = file.cases?.find((x) => x.id === caseId);
+  if (!c) throw new Error(`case: there is no case "${caseId}"${listed("cases", (file.cases ?? []).map((x) => x.id))}`);
+  const cs = caseSketch(file, c);
+  if (!cs.ok) throw failed(cs.errors);
+  return cs.sketch;
+}
+
+/**
+ * A sweeper over `parameter` for what `on` names in the parsed file (`asDrawn`: its sketch as
+ * drawn, when the caller has it). On a combination the swept values are in the unit its first
+ * case writes the parameter in.
+ */
+export function sweeperOn(file: SketchFile, on: SweepOn, parameter: string, asDrawn?: Sketch): Sweeper {
+  if (on.case && on.combination) throw new Error("a sweep runs on a case or on a combination, not both");
+  if (on.case) return createSweeper(sketchOfCase(file, on.case), parameter);
+  if (!on.combination) {
+    if (asDrawn) return createSweeper(asDrawn, parameter);
+    const r = resolveFile(file);
+    if (!r.ok) throw failed(r.errors);
+    return createSweeper(r.sketch, parameter);
+  }
+
+  const k = file.combinations?.find((x) => x.id === on.combination);
+  if (!k) throw new Error(`combination: there is no combination "${on.combination}"${listed("combinations", (file.combinations ?? []).map((x) => x.id))}`);
+  const cases = k.terms.map((t) => file.cases?.find((c) => c.id === t.case));
+  const missing = k.terms.filter((_, i) => !cases[i]).map((t) => t.case);
+  if (missing.length) throw new Error(`combination ${k.id}: names case ${missing.join(", ")}, which does not exist`);
+  const parts = cases.map((c) => {
+    const cs = caseSketch(file, c!);
+    if (!cs.ok) throw failed(cs.errors);
+    return { name: c!.name, setter: createSetter(cs.sketch, parameter), warnings: cs.warnings };
+  });
+  const setters: ParameterSetter[] = parts.map((p) => p.setter);
+  const unit = parameter === FLOW_FACTOR ? "" : parts[0].setter.unit;
+  return {
+    parameter,
+    unit,
+    at(value: number) {
+      const errors: FieldError[] = [];
+      const seen = new Set<string>();
+      for (const s of setters) {
+        for (const e of s.set(value, unit)) {
+          const key = `${e.path} ${e.message}`;
+          if (!seen.has(key)) errors.push(e);
+          seen.add(key);
+        }
+      }
+      if (errors.length) return { value, ok: false, errors };
+      const prepared = parts.map((p) => prepare(p.setter.sketch));
+      const warnings: SolveWarning[] = [];
+      prepared.forEach((p, i) => {
+        for (const w of [...parts[i].warnings, ...p.warnings]) if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
+      });
+      const models = combineModels(prepared.map((p, i) => ({ models: p.models, factor: k.terms[i].factor, name: parts[i].name })));
+      return { value, ok: true, result: solveModels(models, warnings) };
+    },
+    restore: () => setters.forEach((s) => s.restore()),
+  };
+}
