@@ -246,7 +246,7 @@ describe("Sweep tab", () => {
     mount(exampleById("exhaust-stack")!.sketch);
     await user.click(screen.getByRole("tab", { name: "Sweep" }));
     expect(screen.getByTestId("case-sets-parameter").textContent).toBe("This case sets v = 30 m/s; the sweep's values stand in for it.");
-    await user.selectOptions(screen.getByRole("combobox", { name: "Case to sweep" }), "");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Case or combination to sweep" }), "");
     expect(screen.queryByTestId("case-sets-parameter")).toBeNull();
   });
 

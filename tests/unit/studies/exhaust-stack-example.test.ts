@@ -55,4 +55,21 @@ describe("the exhaust-stack example", () => {
     const Vin = 4.2 / (0.6 * A);
     expect(-shear).toBeCloseTo(wPerV2 * 30 ** 2 * L - 2000 * A - 4.2 * Vin, 6);
   });
+
+  it("the uplift check, swept on its combination: the upwind edge lifts where 1.5·w(v)·L·h = 0.9·W·1.4 m", () => {
+    // the same moment balance about the downwind edge with the wind × 1.5 and the weight × 0.9:
+    // v = v_lift·√(0.9 / 1.5) (statics, common practice)
+    const vLift = Math.sqrt((W * (2.9 - 1.5)) / (wPerV2 * L * h));
+    const vFactored = vLift * Math.sqrt(0.9 / 1.5);
+    const lim = runLimit(stack, { parameter: "v", from: 20, to: 45, combinationId: "uplift", quantity: { support: "upwind", component: "margin" }, target: 0 });
+    if (!lim.found) throw new Error(lim.reason);
+    expect(lim.value).toBeCloseTo(vFactored, 4);
+    expect(stack.description).toContain(`lifts at ${vFactored.toFixed(1)} m/s`);
+    // at 30 m/s, past that speed, the factored load set tips the skid
+    const p = parseSketch(stack);
+    if (!p.ok) throw new Error(JSON.stringify(p.errors));
+    const run = solveCases(p.file).runs.find((r) => r.id === "uplift");
+    if (!run?.ok) throw new Error("the combination did not solve");
+    expect(run.result.bodies.stack.status).toBe("tips");
+  });
 });
