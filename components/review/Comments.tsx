@@ -2,6 +2,7 @@
 // A version's comment threads: pinned to an element, a point or the whole version; replies;
 // resolve and reopen; edit and delete your own; @mentions offered as you type.
 import { useMutation, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
 import { useEffect, useRef, useState } from "react";
 import { Button, EmptyState, Notice } from "@/components/shell/controls";
 import { formatDateTime } from "@/components/workspaces/format";
@@ -15,7 +16,14 @@ import type { PickedPin } from "./ReviewDrawing";
 export type CommentPin = { kind: "element"; elementId: string } | { kind: "point"; at: [number, number] };
 export type CommentItem = { id: string; authorId: string | null; authorName: string | null; body: string; deleted: boolean; editedAt: string | null; createdAt: string; attachments?: Attachment[] };
 export type ThreadItem = { id: string; pin: CommentPin | null; resolvedAt: string | null; resolvedByName: string | null; comments: CommentItem[] };
-export type CommentsData = { threads: ThreadItem[]; members: Member[]; locked: boolean; canComment: boolean };
+export type CommentsData = {
+  threads: ThreadItem[];
+  /** open threads on earlier versions that are not approved, per version, oldest first */
+  earlierOpen: Array<{ number: number; open: number }>;
+  members: Member[];
+  locked: boolean;
+  canComment: boolean;
+};
 
 export function pinWords(pin: CommentPin | PickedPin | null, labels: Record<string, string>): string {
   if (!pin) return "on the whole version";
@@ -240,6 +248,7 @@ export function CommentsPanel({
   selected,
   onSelect,
   onChanged,
+  versionHref,
 }: {
   data: CommentsData;
   commentsPath: string;
@@ -254,6 +263,8 @@ export function CommentsPanel({
   selected: string | null;
   onSelect: (id: string) => void;
   onChanged: () => void;
+  /** the review page of another version of this sketch */
+  versionHref: (n: number) => string;
 }) {
   const m = useCommentMutations(commentsPath, onChanged);
   const [text, setText] = useState("");
@@ -337,6 +348,21 @@ export function CommentsPanel({
       <p className="text-xs text-ink-faint">
         {data.threads.length} thread{data.threads.length === 1 ? "" : "s"}, {open} open
       </p>
+      {data.earlierOpen.length ? (
+        <p className="rounded-md border border-caution/40 bg-caution/5 px-2.5 py-1.5 text-xs text-ink-soft" data-testid="earlier-open">
+          Still open on earlier versions:{" "}
+          {data.earlierOpen.map((e, i) => (
+            <span key={e.number}>
+              {i ? ", " : ""}
+              <Link href={`${versionHref(e.number)}#comments`} className="font-medium text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink">
+                v{e.number}
+              </Link>{" "}
+              ({e.open} thread{e.open === 1 ? "" : "s"})
+            </span>
+          ))}
+          . Answer or resolve them there if this version settles them.
+        </p>
+      ) : null}
       {data.threads.length === 0 ? (
         data.canComment && !data.locked ? (
           <EmptyState title="No comments yet">Pin a comment to a support, a port or a point, or comment on the whole version.</EmptyState>

@@ -113,7 +113,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   const refresh = () => void qc.invalidateQueries({ queryKey: apiKey(`/api/sketches/${sketchId}`) });
   // what the version's own results say: a body not held, a slip, a factor of safety short
   const results = useMemo(() => (doc ? versionConcerns(doc) : []), [doc]);
-  const concerns = withOpenThreads(results, comments.data?.threads ?? []);
+  const concerns = withOpenThreads(results, comments.data?.threads ?? [], comments.data?.earlierOpen ?? []);
 
   if (version.isError) return <Notice tone="error">{version.error instanceof ApiError ? version.error.message : "The version could not be loaded."}</Notice>;
   const v = version.data?.version;
@@ -198,7 +198,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             </CsvSubject.Provider>
           ) : null}
         </div>
-        <aside aria-label="Comments">
+        <aside aria-label="Comments" id="comments" className="scroll-mt-4">
           <h2 className="mb-2 text-base font-semibold">Comments</h2>
           {comments.data ? (
             <CommentsPanel
@@ -214,6 +214,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
               selected={selected}
               onSelect={setSelected}
               onChanged={refresh}
+              versionHref={(n) => `${sketchHref}/versions/${n}`}
             />
           ) : (
             <Skeleton className="h-40 w-full" />

@@ -26,10 +26,21 @@ function notSolved(parsed: ParseResult): string[] {
   return parsed.ok ? [] : [`The sketch does not solve: ${parsed.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`];
 }
 
-/** The results' concerns and, when threads are still open on the version, how many: a question not
- *  yet answered is said before a check or an approval too. */
-export function withOpenThreads(concerns: string[], threads: ReadonlyArray<{ resolvedAt: string | null }>): string[] {
+/** The results' concerns and, when threads are still open on the version (or on earlier versions
+ *  that were not approved), how many: a question not yet answered is said before a check or an
+ *  approval too. */
+export function withOpenThreads(
+  concerns: string[],
+  threads: ReadonlyArray<{ resolvedAt: string | null }>,
+  earlier: ReadonlyArray<{ number: number; open: number }> = [],
+): string[] {
+  const out = [...concerns];
   const open = threads.filter((t) => !t.resolvedAt).length;
-  if (!open) return concerns;
-  return [...concerns, `${open} open comment thread${open === 1 ? "" : "s"} on this version: answer or resolve ${open === 1 ? "it" : "them"} first, or say why not`];
+  if (open) out.push(`${open} open comment thread${open === 1 ? "" : "s"} on this version: answer or resolve ${open === 1 ? "it" : "them"} first, or say why not`);
+  const before = earlier.reduce((n, e) => n + e.open, 0);
+  if (before)
+    out.push(
+      `${before} comment thread${before === 1 ? "" : "s"} still open on ${earlier.length === 1 ? "an earlier version" : "earlier versions"} (${earlier.map((e) => `v${e.number}`).join(", ")}): resolve ${before === 1 ? "it" : "them"} there if this version settles ${before === 1 ? "it" : "them"}, or say why not`,
+    );
+  return out.length === concerns.length ? concerns : out;
 }

@@ -9,6 +9,7 @@ import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/commen
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
+import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import { db } from "@/db";
 import { devMail, membership, user } from "@/db/schema";
 import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Person, type Json } from "./helpers";
@@ -221,5 +222,39 @@ describe("an approved version", () => {
 
     expect((await step(olivia, "withdraw", "Flow rate was wrong")).status).toBe(200);
     expect((await post(id, chen, { body: "After withdrawal" })).status).toBe(201);
+  });
+});
+
+describe("threads left open on earlier versions", () => {
+  const saveNext = (sketchId: string, base: number) =>
+    call(versionsRoute.POST, { method: "POST", params: { id: sketchId }, cookie: eddie.cookie, body: { baseVersion: base, message: `after v${base}`, document: fixture("pump-skid-discharge") } });
+  const listOf = (sketchId: string, number: number) => call(commentsRoute.GET, { params: { id: sketchId, number: String(number) }, cookie: chen.cookie });
+
+  it("are counted on a later version, per version, until resolved; a deleted first comment with no replies is no thread", async () => {
+    const id = await newSketch();
+    const open = (await post(id, chen, { body: "Is the anchor bolt grade stated?" })).body.comment.id;
+    const settled = (await post(id, chen, { body: "Check the nozzle load at the flange." })).body.comment.id;
+    const slip = (await post(id, chen, { body: "typo" })).body.comment.id;
+    expect((await patch(settled, eddie, { resolved: true })).status).toBe(200);
+    expect((await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: slip }, cookie: chen.cookie })).status).toBe(200);
+    expect((await saveNext(id, 1)).status).toBe(201);
+    expect((await listOf(id, 1)).body.earlierOpen).toEqual([]);
+    expect((await listOf(id, 2)).body.earlierOpen).toEqual([{ number: 1, open: 1 }]);
+    // a thread on v2 is no earlier thread of v2, but is one of v3
+    await call(commentsRoute.POST, { method: "POST", params: { id, number: "2" }, cookie: chen.cookie, body: { body: "And the pad thickness?" } });
+    expect((await saveNext(id, 2)).status).toBe(201);
+    expect((await listOf(id, 2)).body.earlierOpen).toEqual([{ number: 1, open: 1 }]);
+    expect((await listOf(id, 3)).body.earlierOpen).toEqual([{ number: 1, open: 1 }, { number: 2, open: 1 }]);
+    expect((await patch(open, eddie, { resolved: true })).status).toBe(200);
+    expect((await listOf(id, 3)).body.earlierOpen).toEqual([{ number: 2, open: 1 }]);
+  });
+
+  it("leave out an approved version's threads: they are locked and its approval stands", async () => {
+    const id = await newSketch();
+    await post(id, chen, { body: "Noted for the next revision." });
+    const step = (who: Person, s: string) => call(signoffRoute.POST, { method: "POST", params: p(id), cookie: who.cookie, body: { step: s } });
+    for (const [who, s] of [[eddie, "submit"], [chen, "check"], [olivia, "approve"]] as const) expect((await step(who, s)).status).toBe(200);
+    expect((await saveNext(id, 1)).status).toBe(201);
+    expect((await listOf(id, 2)).body.earlierOpen).toEqual([]);
   });
 });

@@ -136,7 +136,15 @@ describe("review of a calculation in the browser", () => {
     await checker.goto(review(3));
     await stepButton(checker, "check").waitFor();
     expect(await stepButton(checker, "approve").count()).toBe(0);
-    await takeStep(checker, "check", "Friction demand now well inside μ = 0.3.");
+    // v2's two threads were never resolved: v3 says so beside its comments and in the check dialog
+    const earlier = checker.getByTestId("earlier-open");
+    await earlier.waitFor();
+    expect(await earlier.textContent()).toBe("Still open on earlier versions: v2 (2 threads). Answer or resolve them there if this version settles them.");
+    expect(await earlier.getByRole("link", { name: "v2" }).getAttribute("href")).toBe(`/workspaces/${ws}/sketches/${sketchId}/versions/2#comments`);
+    await stepButton(checker, "check").click();
+    expect(await checker.getByTestId("signoff-dialog").textContent()).toContain("2 comment threads still open on an earlier version (v2): resolve them there if this version settles them, or say why not");
+    await checker.getByTestId("signoff-dialog").getByRole("button", { name: "Cancel" }).click();
+    await takeStep(checker, "check", "Friction demand now well inside μ = 0.3; the drain question stays open for site.");
     await checker.locator('[data-review-state="checked"]').first().waitFor();
 
     const owner = pages.owner;

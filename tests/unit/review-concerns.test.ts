@@ -40,4 +40,15 @@ describe("a version's concerns for sign-off", () => {
     expect(withOpenThreads([], [{ resolvedAt: null }])).toEqual(["1 open comment thread on this version: answer or resolve it first, or say why not"]);
     expect(withOpenThreads([], [{ resolvedAt: "2026-12-01T10:00:00Z" }])).toEqual([]);
   });
+
+  it("threads still open on earlier versions are named too, with the versions", () => {
+    expect(withOpenThreads([], [], [{ number: 1, open: 2 }, { number: 3, open: 1 }])).toEqual([
+      "3 comment threads still open on earlier versions (v1, v3): resolve them there if this version settles them, or say why not",
+    ]);
+    expect(withOpenThreads([], [{ resolvedAt: null }], [{ number: 2, open: 1 }])).toEqual([
+      "1 open comment thread on this version: answer or resolve it first, or say why not",
+      "1 comment thread still open on an earlier version (v2): resolve it there if this version settles it, or say why not",
+    ]);
+    expect(withOpenThreads(["x"], [], [])).toEqual(["x"]);
+  });
 });
