@@ -211,14 +211,39 @@ export function loadGroupsOf(file: SketchFile): string[] {
  */
 export function combinationOverlaps(file: SketchFile, combination: CombinationFile): GroupOverlap[] {
   const out: GroupOverlap[] = [];
+  const carried = new Map<string, Set<string> | null>();
+  const carries = (c: CaseFile, group: string) => {
+    if (!carried.has(c.id)) carried.set(c.id, groupsCarried(file, c));
+    // a case that does not evaluate is taken at its factors
+    return carried.get(c.id)?.has(group) ?? true;
+  };
   for (const group of loadGroupsOf(file)) {
     const terms = combination.terms
       .map((t) => {
         const c = file.cases?.find((x) => x.id === t.case);
-        return { case: t.case, factor: t.factor * (c?.factors?.[group] ?? 1) };
+        // a group whose loads come to nothing in the case (its ports' flow and pressure set to 0, say) is not in it
+        return { case: t.case, factor: c && !carries(c, group) ? 0 : t.factor * (c?.factors?.[group] ?? 1) };
       })
       .filter((t) => t.factor !== 0);
     if (terms.length > 1) out.push({ group, terms, total: terms.reduce((a, t) => a + t.factor, 0) });
+  }
+  return out;
+}
+
+/** The load groups whose loads do not all come to zero in the case's load set (null: the case does not evaluate). */
+function groupsCarried(file: SketchFile, c: CaseFile): Set<string> | null {
+  const cs = caseSketch(file, c);
+  if (!cs.ok) return null;
+  const groupOf = new Map<string, string>();
+  for (const b of file.bodies) groupOf.set(b.id, b.group ?? DEFAULT_GROUPS.weight);
+  for (const l of file.loads) groupOf.set(l.id, l.group ?? DEFAULT_GROUPS.load);
+  for (const p of file.ports) groupOf.set(p.id, p.group ?? DEFAULT_GROUPS.flow);
+  const out = new Set<string>();
+  for (const m of prepare(cs.sketch).models) {
+    for (const t of [...m.forceTerms, ...m.momentumTerms]) {
+      const g = t.kind === "reaction" ? undefined : groupOf.get(t.id);
+      if (g !== undefined && (t.fx !== 0 || t.fy !== 0 || t.m !== 0)) out.add(g);
+    }
   }
   return out;
 }

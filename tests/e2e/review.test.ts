@@ -143,6 +143,7 @@ describe("review of a calculation in the browser", () => {
     expect(await earlier.getByRole("link", { name: "v2" }).getAttribute("href")).toBe(`/workspaces/${ws}/sketches/${sketchId}/versions/2#comments`);
     await stepButton(checker, "check").click();
     expect(await checker.getByTestId("signoff-dialog").textContent()).toContain("2 comment threads still open on an earlier version (v2): resolve them there if this version settles them, or say why not");
+    await shot(checker, "review-035-earlier-threads");
     await checker.getByTestId("signoff-dialog").getByRole("button", { name: "Cancel" }).click();
     await takeStep(checker, "check", "Friction demand now well inside μ = 0.3; the drain question stays open for site.");
     await checker.locator('[data-review-state="checked"]').first().waitFor();

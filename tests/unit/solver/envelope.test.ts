@@ -144,6 +144,18 @@ describe("load groups counted more than once in a combination", () => {
   });
 });
 
+describe("a group whose loads come to nothing in a case is not in it", () => {
+  it("the exhaust stack's uplift check: both cases stop the flow and the duct's pressure, so the flow group is counted nowhere", async () => {
+    const { exampleById } = await import("@/canvas/examples");
+    const file = fileOf(exampleById("exhaust-stack")!.sketch);
+    const k = file.combinations!.find((c) => c.id === "uplift")!;
+    expect(combinationOverlaps(file, k)).toEqual([]);
+    // with the duct's 2 kPa left in both cases, its p·A is in each (the flow factor scales ṁ and V, not pressure)
+    const kept = fileOf({ ...exampleById("exhaust-stack")!.sketch, cases: file.cases!.map((c) => ({ ...c, parameters: { ...c.parameters, p_duct: "2 kPa" } })) });
+    expect(combinationOverlaps(kept, k)).toEqual([{ group: "flow", terms: [{ case: "weight", factor: 0.9 }, { case: "wind-30", factor: 1.5 }], total: 2.4 }]);
+  });
+});
+
 describe("factors of safety with their figures (common practice)", () => {
   // A block of weight W, base b, on two friction contacts, pushed by P at height h:
   // overturning W·b/2 over P·h about the toe; sliding μ·W over P.
