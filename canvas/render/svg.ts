@@ -18,6 +18,9 @@ export interface SvgOptions {
   /** size of the drawing in pixels (the view is fitted inside) */
   width?: number;
   height?: number;
+  /** a sketch taller than the drawing's shape may make it taller, up to this height, rather than
+   *  shrink to fit `height` (a stack or a mast on a wide page); the svg's height says what it took */
+  maxHeight?: number;
   /** draw the result faded, as an earlier sketch's */
   stale?: boolean;
   /** paper background (default) or transparent */
@@ -82,6 +85,15 @@ function ownScale(scene: Scene, width: number, height: number): number {
   return Number.isFinite(w) ? Math.min((width - 2 * pad) / w, (height - 2 * pad) / h) : 100;
 }
 
+/** The height a drawing `width` wide needs for the sketch at the scale its width allows (`ownScale`'s margins). */
+function heightFor(scene: Scene, width: number): number {
+  const world = boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
+  const pad = 96;
+  const w = Math.max(world.maxX - world.minX, 0.2);
+  const h = Math.max(world.maxY - world.minY, 0.2);
+  return Number.isFinite(w) ? (h * (width - 2 * pad)) / w + 2 * pad : 0;
+}
+
 /** A scale at which the drawing's box (`box`, drawn at `scale`) fits in width × height, with a margin. */
 function fitOverhang(scene: Scene, scale: number, box: ReturnType<typeof primsBox>, width: number, height: number): number {
   const world = boxOf(scene.bodies.flatMap((b) => b.outline).concat(scene.items.flatMap(pointsOf)));
@@ -112,12 +124,13 @@ export function sharedFrame(drawings: Array<{ file: SketchFile | SketchFileInput
 export function renderSketchSvg(file: SketchFile | SketchFileInput, result: SolveResult | null = null, opts: SvgOptions = {}): string {
   const units = opts.units ?? "SI";
   const width = opts.width ?? 960;
-  const height = opts.height ?? 640;
+  let height = opts.height ?? 640;
   const { parsed, doc, scene } = sceneOf(file);
   const bg = opts.background === "none" ? "" : `<rect width="100%" height="100%" fill="${PAPER}"/>`;
-  const head = `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" font-family="${FONT_STACK}">`;
+  const headOf = (h: number) => `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${h}" viewBox="0 0 ${width} ${h}" font-family="${FONT_STACK}">`;
   const title = `<title>${esc(doc.title || "Counterpoise sketch")}</title>`;
   if (!scene) {
+    const head = headOf(height);
     const msg = parsed.ok ? "" : parsed.errors.map((e) => `${e.path || "file"}: ${e.message}`).join("; ");
     return `${head}${title}${bg}<text x="24" y="40" font-size="14" fill="${INK_FAINT}">This sketch cannot be drawn: ${esc(msg)}</text></svg>`;
   }
@@ -131,6 +144,8 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
   const footer = (opts.caption ? 22 : 0) + (legendLines.length ? 22 + 15 * (legendLines.length - 1) : 0) + (opts.note ? 18 : 0);
   const headLines = opts.heading?.lines ?? [];
   const top = opts.heading ? 40 + 18 * headLines.length : 0;
+  if (!opts.frame && opts.maxHeight && opts.maxHeight > height) height = Math.round(Math.min(opts.maxHeight, Math.max(height, heightFor(scene, width) + footer + top)));
+  const head = headOf(height);
 
   // fit: world box → pixels, leaving room for symbols and labels that do not scale; then centre
   // what is actually drawn (labels included) — or use the shared frame as given

@@ -91,7 +91,8 @@ export function ReviewDrawing({
   const drawnHeight = !frame && column ? Math.max(300, Math.round((drawnWidth * height) / width)) : height;
   // The renderer escapes every text it draws (titles, labels, values), so its output is markup we made.
   const svg = useMemo(
-    () => renderSketchSvg(document, result, { width: drawnWidth, height: drawnHeight, caption, units, frame, legend: !layer, background: layer ? "none" : "paper", onlyLabelsOf }),
+    // a tall sketch (a stack, a mast) may take a taller drawing, up to 1.2 times its width, rather than shrink
+    () => renderSketchSvg(document, result, { width: drawnWidth, height: drawnHeight, maxHeight: frame ? undefined : Math.round(drawnWidth * 1.2), caption, units, frame, legend: !layer, background: layer ? "none" : "paper", onlyLabelsOf }),
     [document, result, drawnWidth, drawnHeight, caption, units, frame, layer, onlyLabelsOf],
   );
 

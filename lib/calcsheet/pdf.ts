@@ -29,6 +29,9 @@ import { sweepCharts } from "./sweeps";
 import { registerFonts } from "./fonts";
 import { drawTable } from "./table";
 
+/** The height an svg says it has (its own attribute), or `fallback`. */
+const svgHeight = (svg: string, fallback: number) => Number(/^<svg[^>]*\sheight="([\d.]+)"/.exec(svg)?.[1] ?? fallback);
+
 const combinationTerms = (k: CombinationFile) => k.terms.map((t) => `${t.factor} × ${t.case}`).join(" + ");
 
 export interface SignoffEntry {
@@ -127,12 +130,16 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   }
 
   // ---- drawing
+  // a tall sketch (a stack, a mast) takes a taller drawing, up to as tall as it is wide, in the room
+  // left on the page; its heading goes to the next page with it when even the usual one does not fit
+  const room = Math.floor(((doc.page.height - doc.page.margins.bottom - doc.y - 41) * 900) / width);
+  const svg = haloBehindLabels(renderSketchSvg(parsed.file, result, { units, width: 900, height: 560, maxHeight: Math.min(900, Math.max(560, room)) }));
+  const drawnHeight = width * (svgHeight(svg, 560) / 900);
+  ensureSpace(doc, drawnHeight + 40);
   heading("Free-body diagram (control volume)");
-  const svg = haloBehindLabels(renderSketchSvg(parsed.file, result, { units, width: 900, height: 560 }));
-  ensureSpace(doc, 320);
-  SVGtoPDF(doc, svg, left, doc.y, { width, height: width * (560 / 900), preserveAspectRatio: "xMidYMid meet", fontCallback: (family: string, bold: boolean) => (bold ? "Inter-SemiBold" : "Inter") });
+  SVGtoPDF(doc, svg, left, doc.y, { width, height: drawnHeight, preserveAspectRatio: "xMidYMid meet", fontCallback: (family: string, bold: boolean) => (bold ? "Inter-SemiBold" : "Inter") });
   // the drawing carries its own legend (solid, double and dashed arrows) on its bottom line
-  doc.y += width * (560 / 900) + 6;
+  doc.y += drawnHeight + 6;
 
   // ---- inputs: the sketch's notes first (the design basis its author wrote), then the values
   heading("Inputs");

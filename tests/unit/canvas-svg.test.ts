@@ -24,6 +24,35 @@ function solved(id: string) {
 }
 
 describe("renderSketchSvg", () => {
+  it("makes a tall sketch's drawing taller, up to maxHeight, and leaves a wide one's height alone", () => {
+    const block = (w: number, h: number) => ({
+      format: "counterpoise.sketch",
+      version: 1,
+      bodies: [{ id: "b", outline: [[0, 0], [w, 0], [w, h], [0, h]], mass: 10 }],
+      supports: [{ id: "s", body: "b", kind: "fixed", at: [w / 2, 0] }],
+      loads: [],
+      ports: [],
+      massSources: [],
+    });
+    const heightOf = (svg: string) => Number(parse(svg).documentElement.getAttribute("height"));
+    const bodyHeight = (svg: string) => {
+      const ys = [...(parse(svg).querySelector('g[data-kind="body"] path')!.getAttribute("d") ?? "").matchAll(/[ML]\s*(-?[\d.]+)\s+(-?[\d.]+)/g)].map((m) => Number(m[2]));
+      return Math.max(...ys) - Math.min(...ys);
+    };
+    const mast = block(1, 8) as unknown as Parameters<typeof renderSketchSvg>[0];
+    const plain = renderSketchSvg(mast, null, { width: 700, height: 420 });
+    const grown = renderSketchSvg(mast, null, { width: 700, height: 420, maxHeight: 840 });
+    expect(heightOf(plain)).toBe(420);
+    expect(heightOf(grown)).toBe(840);
+    expect(parse(grown).documentElement.getAttribute("viewBox")).toBe("0 0 700 840");
+    // the mast is drawn about twice as tall (the symbols' margins stay)
+    expect(bodyHeight(grown) / bodyHeight(plain)).toBeGreaterThan(1.8);
+    const slab = block(8, 1) as unknown as Parameters<typeof renderSketchSvg>[0];
+    expect(heightOf(renderSketchSvg(slab, null, { width: 700, height: 420, maxHeight: 840 }))).toBe(420);
+    // a shared frame keeps the size it was given
+    expect(heightOf(renderSketchSvg(mast, null, { width: 700, height: 420, maxHeight: 840, frame: { scale: 40, x: 350, y: 400 } }))).toBe(420);
+  });
+
   it("wraps the line-style key on a narrow drawing rather than cut it", () => {
     const { sketch, result } = solved("pipe-bend-anchor");
     const keyOf = (width: number) =>
