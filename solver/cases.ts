@@ -102,11 +102,13 @@ export function combineModels(parts: Array<{ models: BodyModel[]; factor: number
 export function solveCases(file: SketchFile, onProgress: (done: number, total: number) => void = () => {}): StudyResult {
   const requirements: Requirements = { ...DEFAULT_REQUIREMENTS, ...(file.stability ?? {}) };
   const cases = file.cases?.length ? file.cases : [AS_DRAWN];
-  const total = cases.length + (file.combinations?.length ?? 0);
+  // a load case marked for combinations only is solved as part of them, not on its own
+  let total = cases.filter((c) => !c.onlyInCombinations).length + (file.combinations?.length ?? 0);
   const runs: CaseRun[] = [];
   // each run, solved or not, counts towards the progress a long study shows
   const record = (run: CaseRun) => {
     runs.push(run);
+    total = Math.max(total, runs.length);
     onProgress(runs.length, total);
   };
   const prepared = new Map<string, { models: BodyModel[]; warnings: SolveWarning[] }>();
@@ -126,7 +128,7 @@ export function solveCases(file: SketchFile, onProgress: (done: number, total: n
     const p = prepare(cs.sketch);
     p.warnings.unshift(...cs.warnings);
     prepared.set(c.id, p);
-    finish(c.id, c.name, "case", p.models, [...p.warnings]);
+    if (!c.onlyInCombinations) finish(c.id, c.name, "case", p.models, [...p.warnings]);
   }
 
   for (const k of file.combinations ?? []) {
@@ -251,9 +253,12 @@ function groupsCarried(file: SketchFile, c: CaseFile): Set<string> | null {
 /** Words for a case's factors of groups that no load is in: they change nothing (a typo, or the
  *  group's loads were removed), so the case is not what its factors say. */
 export function caseWarnings(file: SketchFile, c: CaseFile, groups: readonly string[] = loadGroupsOf(file)): string[] {
-  return Object.keys(c.factors ?? {})
+  const out = Object.keys(c.factors ?? {})
     .filter((g) => !groups.includes(g))
     .map((g) => `Case ${c.name} scales load group "${g}", which no load is in, so that factor changes nothing (the sketch's groups: ${groups.join(", ") || "none"}).`);
+  if (c.onlyInCombinations && !(file.combinations ?? []).some((k) => k.terms.some((t) => t.case === c.id)))
+    out.push(`Case ${c.name} is solved only in combinations, and no combination names it: it is solved nowhere.`);
+  return out;
 }
 
 /** Words for a combination's overlaps, one sentence a group (empty when there are none). */

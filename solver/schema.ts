@@ -8,7 +8,7 @@ export const FORMAT = "counterpoise.sketch";
 /** The newest format version this solver writes. Older files are migrated (solver/migrations).
  *  1: the published contract. 2: load groups, operating cases, combinations, saved sweeps,
  *  stability requirements. 3: the underlay. 4: a port's momentum-flux factor β. 5: the direction
- *  of gravity. 6: a saved sweep on a combination. */
+ *  of gravity. 6: a saved sweep on a combination; a case solved only in combinations. */
 export const CURRENT_VERSION = 6;
 
 // zod's own messages ("Invalid input: expected array, received object") name a type, not the
@@ -177,6 +177,8 @@ export const caseSchema = z.strictObject(
     parameters: z.record(z.string(), numeric, holding('an object of parameter overrides { "name": value }')).optional(),
     factors: z.record(z.string(), finite(), holding('an object of group factors { "group": factor }')).optional(),
     flowFactor: z.number({ error: "must be a number" }).nonnegative({ error: "must be zero or more" }).optional(),
+    /** a load case: solved only as part of the combinations that name it (version 6) */
+    onlyInCombinations: z.boolean({ error: "must be true or false" }).optional(),
   },
   holding('a case { "id", "name", … }'),
 );

@@ -180,7 +180,13 @@ export function CasesPanel() {
                   <tr key={c.id} className="align-top" data-case={c.id}>
                     <td className="pr-1 pb-1">
                       <TextCell label={`Name of case ${c.id}`} value={c.name} parse={parseName} onCommit={(name) => updateCase(i, { name })} />
-                      <span className="text-[10.5px] text-ink-faint">id {c.id}</span>
+                      <span className="flex flex-wrap items-center gap-x-2 text-[10.5px] text-ink-faint">
+                        <span>id {c.id}</span>
+                        <label className="flex items-center gap-1" title="A load case: solved only as part of the combinations that name it, not on its own (left out of the case table, the envelope and the findings)">
+                          <input type="checkbox" className="h-3 w-3" checked={!!c.onlyInCombinations} onChange={(e) => updateCase(i, { onlyInCombinations: e.target.checked || undefined })} aria-label={`${c.name}: only in combinations`} />
+                          only in combinations
+                        </label>
+                      </span>
                     </td>
                     <td className="pr-1 pb-1">
                       <TextCell label={`Parameter changes of ${c.name}`} value={formatOverrides(c.parameters)} placeholder={changePlaceholder} parse={(t) => parseCaseParameters(t, c)} onCommit={(parameters) => updateCase(i, { parameters })} />

@@ -160,7 +160,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       const fac = Object.entries(c.factors ?? {}).map(([k, v]) => `loads of group “${k}” × ${v}`);
       const f = c.flowFactor;
       const flow = f !== undefined && f !== 1 ? [`flow factor ${f} (every port's ṁ and V × ${f}, momentum flux × ${Number((f * f).toPrecision(4))})`] : [];
-      const bits = [...over, ...fac, ...flow];
+      const bits = [...over, ...fac, ...flow, ...(c.onlyInCombinations ? ["a load case, solved only in the combinations that name it"] : [])];
       para(`${c.name} (${c.id}): ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
       for (const w of caseWarnings(parsed.file, c)) para(`Warning: ${w}`, 8.5, ACCENT);
     }

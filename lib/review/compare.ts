@@ -234,6 +234,7 @@ function caseText(c: CaseFile): string {
     ...Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${v}`),
     ...Object.entries(c.factors ?? {}).map(([k, v]) => `${k} × ${num(v)}`),
     ...(c.flowFactor !== undefined && c.flowFactor !== 1 ? [`flow × ${num(c.flowFactor)}`] : []),
+    ...(c.onlyInCombinations ? ["only in combinations"] : []),
   ];
   return `${c.name}: ${bits.length ? bits.join(", ") : "as drawn"}`;
 }

@@ -37,6 +37,28 @@ describe("Cases tab", () => {
     expect(screen.getByRole("button", { name: "Run all cases" })).toBeEnabled();
   });
 
+  it("marks a case as a load case solved only in combinations: it leaves the case table", async () => {
+    const user = userEvent.setup();
+    const file = load("fire-monitor-trailer");
+    file.cases = [
+      { id: "dead", name: "Dead", factors: { flow: 0 } },
+      { id: "jet", name: "Jet", factors: { dead: 0 } },
+    ];
+    file.combinations = [{ id: "k", name: "Factored", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] }];
+    const editor = mount(file);
+    await user.click(screen.getByRole("tab", { name: "Cases" }));
+    await user.click(screen.getByRole("checkbox", { name: "Dead: only in combinations" }));
+    await user.click(screen.getByRole("checkbox", { name: "Jet: only in combinations" }));
+    expect(editor.getState().sketch.cases!.map((c) => c.onlyInCombinations)).toEqual([true, true]);
+    await user.click(screen.getByRole("button", { name: "Run all cases" }));
+    const table = await screen.findByTestId("case-reactions");
+    expect(within(table).queryByText("Jet")).toBeNull();
+    expect(within(table).getAllByText("Factored").length).toBeGreaterThan(0);
+    // unticked, the case is solved on its own again
+    await user.click(screen.getByRole("checkbox", { name: "Jet: only in combinations" }));
+    expect(editor.getState().sketch.cases![1]).not.toHaveProperty("onlyInCombinations", true);
+  });
+
   it("warns of a saved factor whose group no load is in any more", async () => {
     const user = userEvent.setup();
     const file = load("fire-monitor-trailer");

@@ -1,6 +1,7 @@
 // Operating cases, combinations, the envelope, stability factors and the flow factor.
 import { describe, expect, it } from "vitest";
 import { findLimit, parseSketch, solve, solveCases, type SketchFileInput } from "@/solver";
+import { caseWarnings } from "@/solver/cases";
 import { G0 } from "@/solver/constants";
 import { box, expectRel, loadFixture, parsed, sketch } from "./helpers";
 
@@ -202,6 +203,56 @@ describe("stability factors (common practice)", () => {
     const run = solveCases(fileOf(file)).runs[0];
     if (!run.ok) throw new Error();
     expect(run.stability.trailer.overturning).toEqual({ notApplicable: "no load tends to tip it" });
+  });
+});
+
+describe("a load case solved only in combinations", () => {
+  const doc = (): SketchFileInput => {
+    const d = trailer();
+    d.cases = [
+      { id: "dead", name: "Dead", factors: { flow: 0 }, onlyInCombinations: true },
+      { id: "jet", name: "Jet", factors: { dead: 0 }, onlyInCombinations: true },
+      { id: "low", name: "Low throw 15°", parameters: { theta: "15 deg" } },
+    ];
+    d.combinations = [{ id: "k", name: "0.9 dead + 1.4 jet", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] }];
+    return d;
+  };
+
+  it("is left out of the runs, the envelope and the findings, and its combination solves exactly as with the case on its own", () => {
+    const seen: Array<[number, number]> = [];
+    const study = solveCases(fileOf(doc()), (done, total) => seen.push([done, total]));
+    expect(study.runs.map((r) => r.id)).toEqual(["low", "k"]);
+    expect(seen).toEqual([[1, 2], [2, 2]]);
+    // the same file with the flags off: the combination's reactions are the same numbers
+    const plain = doc();
+    plain.cases = plain.cases!.map(({ onlyInCombinations: _, ...c }) => c);
+    const all = solveCases(fileOf(plain));
+    expect(all.runs.map((r) => r.id)).toEqual(["dead", "jet", "low", "k"]);
+    const a = study.runs.find((r) => r.id === "k")!;
+    const b = all.runs.find((r) => r.id === "k")!;
+    if (!a.ok || !b.ok) throw new Error();
+    expect(a.result.reactions).toEqual(b.result.reactions);
+    // the jet case alone tips the trailer (no weight): with the flag it is no finding
+    expect(all.excluded.map((e) => e.case)).toContain("jet");
+    expect(study.excluded.map((e) => e.case)).not.toContain("jet");
+    for (const env of Object.values(study.envelope)) for (const e of Object.values(env.components)) expect(["low", "k"]).toContain(e!.max.case);
+  });
+
+  it("is warned of when no combination names it, and a case that does not read still shows its error", () => {
+    const d = doc();
+    d.combinations = [];
+    const file = fileOf(d);
+    expect(caseWarnings(file, file.cases![0])).toEqual(["Case Dead is solved only in combinations, and no combination names it: it is solved nowhere."]);
+    const broken = doc();
+    broken.cases![0] = { ...broken.cases![0], parameters: { theta: "15 kg" } };
+    const study = solveCases(fileOf(broken));
+    expect(study.runs.map((r) => [r.id, r.ok])).toEqual([["dead", false], ["low", true], ["k", false]]);
+  });
+
+  it("must be true or false, named in the error", () => {
+    const d = doc();
+    (d.cases![0] as Record<string, unknown>).onlyInCombinations = "yes";
+    expect(parseSketch(d)).toMatchObject({ ok: false, errors: [{ path: "cases[0].onlyInCombinations", message: "must be true or false" }] });
   });
 });
 
