@@ -11,7 +11,7 @@ import { displayKind, displayUnit, parseTarget, toDisplay } from "@/canvas/studi
 import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
-import type { SketchFile } from "@/solver/schema";
+import type { SketchFile, SweepFile } from "@/solver/schema";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import type { SweepData, SweepSpec } from "@/canvas/studies/run";
@@ -185,12 +185,41 @@ export function SweepPanel() {
       .finally(() => setSearching(null));
   };
 
+  const kept = sketch.sweeps ?? [];
+  const putKept = (value: SweepFile[]) => editor.getState().apply(setStudy({ key: "sweeps", value }) as Command<unknown>);
+  const [keptNote, setKeptNote] = useState<string | null>(null);
   const keep = () => {
     const s = spec();
     if (typeof s === "string") return setError(s);
-    const sweep = { id: "sweep-1", parameter: s.parameter, from: s.from, to: s.to, points: s.points, ...(s.caseId ? { case: s.caseId } : {}), ...(s.combinationId ? { combination: s.combinationId } : {}), quantities: s.quantities };
-    editor.getState().apply(setStudy({ key: "sweeps", value: [sweep, ...(sketch.sweeps ?? []).filter((x) => x.id !== "sweep-1")] }) as Command<unknown>);
+    const settings = { parameter: s.parameter, from: s.from, to: s.to, points: s.points, ...(s.caseId ? { case: s.caseId } : {}), ...(s.combinationId ? { combination: s.combinationId } : {}), quantities: s.quantities };
+    const key = (k: Omit<SweepFile, "id">) => JSON.stringify([k.parameter, k.from, k.to, k.points, k.case ?? null, k.combination ?? null, (k.quantities ?? []).map((q) => `${q.support}:${q.component}`)]);
+    const same = kept.find((k) => key(k) === key(settings));
+    if (same) return setKeptNote("This sweep is on the calc sheet already.");
+    let n = kept.length + 1;
+    while (kept.some((k) => k.id === `sweep-${n}`)) n++;
+    putKept([...kept, { id: `sweep-${n}`, ...settings }]);
+    setKeptNote(null);
   };
+  /** a kept sweep's settings back in the form */
+  const open = (k: SweepFile) => {
+    setParameter(k.parameter);
+    setFrom(String(k.from));
+    setTo(String(k.to));
+    setPoints(String(k.points));
+    setOn(k.combination ? `combination:${k.combination}` : k.case ? `case:${k.case}` : "");
+    if (k.quantities?.length) setPicked(k.quantities.map((q) => `${q.support}:${q.component}`));
+    setKeptNote(null);
+  };
+  const unitWords = (name: string) => {
+    const v = name === FLOW_FACTOR ? undefined : values[name];
+    return v && !("error" in v) && v.unit ? ` ${prettyUnit(v.unit)}` : "";
+  };
+  const onWords = (k: SweepFile) =>
+    k.combination
+      ? `combination ${sketch.combinations?.find((c) => c.id === k.combination)?.name ?? k.combination}`
+      : k.case
+        ? `case ${sketch.cases?.find((c) => c.id === k.case)?.name ?? k.case}`
+        : "as drawn";
 
   const caseOverride = caseId ? sketch.cases?.find((c) => c.id === caseId)?.parameters?.[parameter] : undefined;
   const combination = combinationId ? sketch.combinations?.find((k) => k.id === combinationId) : undefined;
@@ -277,6 +306,27 @@ export function SweepPanel() {
           )}
         </div>
         {error && <p className="col-span-2 text-[12px] text-caution @xl:col-span-4 @4xl:col-span-1" role="alert">{error}</p>}
+        {keptNote && <p className="col-span-2 text-[12px] text-ink-soft @xl:col-span-4 @4xl:col-span-1" role="status">{keptNote}</p>}
+        {kept.length > 0 && (
+          <section className="col-span-2 @xl:col-span-4 @4xl:col-span-1" aria-label="Sweeps on the calc sheet">
+            <span className={LABEL}>On the calc sheet</span>
+            <ul className="space-y-0.5 text-[12px]" data-testid="kept-sweeps">
+              {kept.map((k) => (
+                <li key={k.id} className="flex items-start gap-1.5">
+                  <span className="min-w-0 flex-1 text-ink-soft">
+                    {k.parameter === FLOW_FACTOR ? "flow factor" : k.parameter} from {formatNumber(k.from, 6)} to {formatNumber(k.to, 6)}{unitWords(k.parameter)}, {k.points} points — {onWords(k)}
+                  </span>
+                  <button type="button" className="text-[11.5px] text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink" onClick={() => open(k)} aria-label={`Open the kept sweep ${k.id}`}>
+                    Open
+                  </button>
+                  <button type="button" className="px-0.5 text-ink-faint hover:text-accent" onClick={() => putKept(kept.filter((x) => x.id !== k.id))} aria-label={`Remove the kept sweep ${k.id}`}>
+                    ×
+                  </button>
+                </li>
+              ))}
+            </ul>
+          </section>
+        )}
       </form>
 
       <div className="min-w-0" aria-live="polite">

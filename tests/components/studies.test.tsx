@@ -329,6 +329,38 @@ describe("a sweep on a combination", () => {
   });
 });
 
+describe("sweeps kept on the calc sheet", () => {
+  it("keeps several, refuses a second copy, opens one back into the form and removes one", async () => {
+    const user = userEvent.setup();
+    const { exampleById } = await import("@/canvas/examples");
+    // the exhaust stack keeps one sweep already: v from 20 to 45 m/s on "Engine stopped, 30 m/s wind"
+    const editor = mount(exampleById("exhaust-stack")!.sketch);
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    const list = () => within(screen.getByTestId("kept-sweeps")).getAllByRole("listitem").map((li) => li.textContent);
+    expect(list()).toEqual(["v from 20 to 45 m/s, 101 points — case Engine stopped, 30 m/s windOpen×"]);
+    // the form opens on it: keeping it again adds nothing
+    await user.click(screen.getByRole("button", { name: "Keep on the calc sheet" }));
+    expect(screen.getByRole("status").textContent).toBe("This sweep is on the calc sheet already.");
+    expect(editor.getState().sketch.sweeps).toHaveLength(1);
+    // the same speeds on the uplift combination: a second sweep
+    await user.selectOptions(screen.getByRole("combobox", { name: "Case or combination to sweep" }), "Uplift check: 0.9 × weight + 1.5 × wind");
+    await user.click(screen.getByRole("button", { name: "Keep on the calc sheet" }));
+    expect(editor.getState().sketch.sweeps!.map((k) => [k.id, k.case, k.combination])).toEqual([
+      ["wind-speed", "stopped", undefined],
+      ["sweep-2", undefined, "uplift"],
+    ]);
+    expect(list()[1]).toBe("v from 20 to 45 m/s, 101 points — combination Uplift check: 0.9 × weight + 1.5 × windOpen×");
+    // open the first: the form is back on its case; remove it: the combination's stays
+    await user.click(screen.getByRole("button", { name: "Open the kept sweep wind-speed" }));
+    expect(screen.getByRole("combobox", { name: "Case or combination to sweep" })).toHaveValue("case:stopped");
+    await user.click(screen.getByRole("button", { name: "Remove the kept sweep wind-speed" }));
+    expect(editor.getState().sketch.sweeps!.map((k) => k.id)).toEqual(["sweep-2"]);
+    // undo brings it back
+    editor.getState().undo();
+    expect(editor.getState().sketch.sweeps!.map((k) => k.id)).toEqual(["wind-speed", "sweep-2"]);
+  });
+});
+
 describe("load groups in the properties", () => {
   it("puts a load into a group that a case's factor then scales", async () => {
     const { renderEditor, storedSketch } = await import("./editor-helpers");
