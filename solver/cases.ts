@@ -113,9 +113,10 @@ export function solveCases(file: SketchFile, onProgress: (done: number, total: n
   };
   const prepared = new Map<string, { models: BodyModel[]; warnings: SolveWarning[] }>();
 
-  const finish = (id: string, name: string, kind: "case" | "combination", models: BodyModel[], warnings: SolveWarning[]) => {
+  const finish = (id: string, name: string, kind: "case" | "combination", models: BodyModel[], warnings: SolveWarning[], own?: Partial<Requirements>) => {
     const result = solveModels(models, warnings);
-    const stability = Object.fromEntries(models.map((m) => [m.body.id, bodyStability(m, result, requirements)]));
+    const required = own ? { ...requirements, ...own } : requirements;
+    const stability = Object.fromEntries(models.map((m) => [m.body.id, bodyStability(m, result, required)]));
     record({ id, name, kind, ok: true, result, stability });
   };
 
@@ -139,7 +140,7 @@ export function solveCases(file: SketchFile, onProgress: (done: number, total: n
     }
     const parts = k.terms.map((t) => ({ models: prepared.get(t.case)!.models, factor: t.factor, name: cases.find((c) => c.id === t.case)!.name }));
     const warnings = k.terms.flatMap((t) => prepared.get(t.case)!.warnings).filter((w, i, all) => all.findIndex((x) => x.message === w.message) === i);
-    finish(k.id, k.name, "combination", combineModels(parts), warnings);
+    finish(k.id, k.name, "combination", combineModels(parts), warnings, k.stability);
   }
 
   return { runs, envelope: envelopeOf(runs), excluded: excludedRuns(runs), requirements };

@@ -8,7 +8,8 @@ export const FORMAT = "counterpoise.sketch";
 /** The newest format version this solver writes. Older files are migrated (solver/migrations).
  *  1: the published contract. 2: load groups, operating cases, combinations, saved sweeps,
  *  stability requirements. 3: the underlay. 4: a port's momentum-flux factor β. 5: the direction
- *  of gravity. 6: a saved sweep on a combination; a case solved only in combinations. */
+ *  of gravity. 6: a saved sweep on a combination; a case solved only in combinations; required
+ *  factors of safety per combination. */
 export const CURRENT_VERSION = 6;
 
 // zod's own messages ("Invalid input: expected array, received object") name a type, not the
@@ -183,6 +184,14 @@ export const caseSchema = z.strictObject(
   holding('a case { "id", "name", … }'),
 );
 
+export const stabilitySchema = z.strictObject(
+  {
+    overturning: z.number(say).positive({ error: "must be more than zero" }).optional(),
+    sliding: z.number(say).positive({ error: "must be more than zero" }).optional(),
+  },
+  holding('an object { "overturning", "sliding" } of required factors of safety'),
+);
+
 /** A combination: cases added as one factored load set (solved once, never by adding results). */
 export const combinationSchema = z.strictObject(
   {
@@ -191,6 +200,9 @@ export const combinationSchema = z.strictObject(
     terms: z
       .array(z.strictObject({ case: id, factor: finite() }, holding('a term { "case", "factor" }')), holding('a list of terms [{ "case", "factor" }, …]'))
       .min(1, { error: "needs at least one case" }),
+    /** required factors of safety for this combination, over the sketch's (a factored set is
+     *  usually checked against 1.0: its factors carry the margin) (version 6) */
+    stability: stabilitySchema.optional(),
   },
   holding('a combination { "id", "name", "terms" }'),
 );
@@ -248,14 +260,6 @@ export const underlaySchema = z.strictObject(
     calibration: z.strictObject({ a: pixel, b: pixel, distance: numeric }, holding('an object { "a", "b", "distance" }')).optional(),
   },
   holding('an underlay { "upload", "width", "height", "origin", "metresPerPixel" }'),
-);
-
-export const stabilitySchema = z.strictObject(
-  {
-    overturning: z.number(say).positive({ error: "must be more than zero" }).optional(),
-    sliding: z.number(say).positive({ error: "must be more than zero" }).optional(),
-  },
-  holding('an object { "overturning", "sliding" } of required factors of safety'),
 );
 
 export const sketchSchema = z.strictObject(

@@ -236,6 +236,34 @@ export function CasesPanel() {
                   <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => putCombos(combinations.filter((_, j) => j !== i))}>
                     ×
                   </button>
+                  <div className="col-span-3 flex flex-wrap items-center gap-x-2 gap-y-0.5 text-[11px] text-ink-faint">
+                    <span>Required factors of safety:</span>
+                    {(["overturning", "sliding"] as const).map((key) => (
+                      <span key={key} className="flex items-center gap-1">
+                        {key}
+                        <span className="w-14">
+                          <TextCell
+                            label={`Required factor against ${key} in ${k.name}`}
+                            value={k.stability?.[key] === undefined ? "" : String(k.stability[key])}
+                            placeholder={String(sketch.stability?.[key] ?? 1.5)}
+                            parse={(t) => (!t.trim() ? { ok: true, value: undefined } : Number(t) > 0 ? { ok: true, value: Number(t) } : { ok: false, error: "more than 0, or blank" })}
+                            onCommit={(v) =>
+                              putCombos(
+                                combinations.map((x, j) => {
+                                  if (j !== i) return x;
+                                  const stability = { ...x.stability, [key]: v };
+                                  if (v === undefined) delete stability[key];
+                                  const { stability: _, ...rest } = x;
+                                  return Object.keys(stability).length ? { ...rest, stability } : rest;
+                                }),
+                              )
+                            }
+                          />
+                        </span>
+                      </span>
+                    ))}
+                    <span>(blank: the sketch&apos;s; a factored set is usually checked against 1.0)</span>
+                  </div>
                   {combinationWarnings(sketch, k).map((w) => (
                     <p key={w} className="col-span-3 text-[11.5px] font-medium text-caution" role="note">
                       ⚠ {w}

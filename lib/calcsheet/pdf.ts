@@ -165,7 +165,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       for (const w of caseWarnings(parsed.file, c)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
     for (const k of parsed.file.combinations ?? []) {
-      para(`${k.name} (${k.id}): ${combinationTerms(k)}, solved as one factored load set`, 8.5, INK);
+      const own = k.stability ? Object.entries(k.stability).map(([what, v]) => `${v} against ${what}`) : [];
+      para(`${k.name} (${k.id}): ${combinationTerms(k)}, solved as one factored load set${own.length ? `; required factors of safety ${own.join(", ")}` : ""}`, 8.5, INK);
       for (const w of combinationWarnings(parsed.file, k)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
   }

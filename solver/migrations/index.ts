@@ -7,7 +7,7 @@ import { loadCases } from "./002-load-cases";
 import { underlay } from "./003-underlay";
 import { momentumFactor } from "./004-momentum-factor";
 import { gravityDirection } from "./005-gravity-direction";
-import { combinationSweep } from "./006-combination-sweep";
+import { combinationStudies } from "./006-combination-studies";
 
 export interface Migration {
   from: number;
@@ -16,7 +16,7 @@ export interface Migration {
   up: (doc: Record<string, unknown>) => Record<string, unknown>;
 }
 
-export const MIGRATIONS: readonly Migration[] = [loadCases, underlay, momentumFactor, gravityDirection, combinationSweep];
+export const MIGRATIONS: readonly Migration[] = [loadCases, underlay, momentumFactor, gravityDirection, combinationStudies];
 
 export type MigrateResult = { ok: true; doc: Record<string, unknown>; applied: number[] } | { ok: false; errors: FieldError[] };
 

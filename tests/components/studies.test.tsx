@@ -57,6 +57,14 @@ describe("Cases tab", () => {
     // unticked, the case is solved on its own again
     await user.click(screen.getByRole("checkbox", { name: "Jet: only in combinations" }));
     expect(editor.getState().sketch.cases![1]).not.toHaveProperty("onlyInCombinations", true);
+    // the combination's own required factor of safety; blank gives the sketch's back
+    const own = screen.getByRole("textbox", { name: "Required factor against overturning in Factored" });
+    expect(own).toHaveAttribute("placeholder", "1.5");
+    await user.type(own, "1{Enter}");
+    expect(editor.getState().sketch.combinations![0].stability).toEqual({ overturning: 1 });
+    await user.clear(own);
+    await user.type(own, "{Enter}");
+    expect(editor.getState().sketch.combinations![0]).not.toHaveProperty("stability");
   });
 
   it("warns of a saved factor whose group no load is in any more", async () => {

@@ -249,6 +249,25 @@ describe("a load case solved only in combinations", () => {
     expect(study.runs.map((r) => [r.id, r.ok])).toEqual([["dead", false], ["low", true], ["k", false]]);
   });
 
+  it("a combination's own required factors of safety stand for it alone", () => {
+    const d = doc();
+    d.combinations![0].stability = { overturning: 1 };
+    const study = solveCases(fileOf(d));
+    const k = study.runs.find((r) => r.id === "k")!;
+    const low = study.runs.find((r) => r.id === "low")!;
+    if (!k.ok || !low.ok) throw new Error();
+    const ot = k.stability.trailer.overturning;
+    const sl = k.stability.trailer.sliding;
+    const lowOt = low.stability.trailer.overturning;
+    expect("required" in ot && ot.required).toBe(1);
+    expect("required" in sl && sl.required).toBe(1.5);
+    expect("required" in lowOt && lowOt.required).toBe(1.5);
+    if ("factor" in ot) expect(ot.pass).toBe(ot.factor >= 1);
+    const bad = doc();
+    bad.combinations![0].stability = { overturning: 0 };
+    expect(parseSketch(bad)).toMatchObject({ ok: false, errors: [{ path: "combinations[0].stability.overturning", message: "must be more than zero" }] });
+  });
+
   it("must be true or false, named in the error", () => {
     const d = doc();
     (d.cases![0] as Record<string, unknown>).onlyInCombinations = "yes";

@@ -6,7 +6,7 @@ import { loadCases } from "@/solver/migrations/002-load-cases";
 import { underlay } from "@/solver/migrations/003-underlay";
 import { momentumFactor } from "@/solver/migrations/004-momentum-factor";
 import { gravityDirection } from "@/solver/migrations/005-gravity-direction";
-import { combinationSweep } from "@/solver/migrations/006-combination-sweep";
+import { combinationStudies } from "@/solver/migrations/006-combination-studies";
 import { loadFixture } from "./helpers";
 
 describe("migrateSketch", () => {
@@ -89,7 +89,7 @@ describe("each step of the chain", () => {
       cases: [{ id: "low", name: "Low throw", parameters: { theta: "10 deg" } }],
       sweeps: [{ id: "s", parameter: "theta", from: 0, to: 60, points: 31, case: "low" }],
     };
-    const r = migrateSketch(doc, [loadCases, underlay, momentumFactor, gravityDirection, combinationSweep], 6);
+    const r = migrateSketch(doc, [loadCases, underlay, momentumFactor, gravityDirection, combinationStudies], 6);
     expect(r).toEqual({ ok: true, doc: { ...doc, version: 6 }, applied: [5] });
     const { parseSketch } = await import("@/solver");
     const p = parseSketch(doc);
