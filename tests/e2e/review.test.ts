@@ -84,6 +84,8 @@ describe("review of a calculation in the browser", () => {
 
     // a point of the drawing: on the ground line between the two feet, a little below the body
     await page.getByRole("button", { name: "Pin to the drawing" }).click();
+    // (the mouse clicks in the window: the feet, and the ground under them, are brought into it first)
+    await page.locator('[data-testid="review-drawing"] g[data-id="rear"]').evaluate((el) => el.scrollIntoView({ block: "center" }));
     const rear = (await page.locator('[data-testid="review-drawing"] g[data-id="rear"]').boundingBox())!;
     const front = (await page.locator('[data-testid="review-drawing"] g[data-id="front"]').boundingBox())!;
     // (each foot's box holds its symbol and, to its right, its label: their left edges are alike)
