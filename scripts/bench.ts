@@ -1,5 +1,5 @@
 // npm run bench: solver speed (median µs per solve for 10, 100 and 1000 elements; a 1000-point
-// sweep of a 20-element sketch) and the gzip size mathjs adds to the client bundle.
+// sweep of a 20-element sketch, and one on a combination) and the gzip size mathjs adds to the client bundle.
 // Then the browser benchmarks: the editor's drag (scripts/bench-canvas.ts) and the studies' sweep
 // plot (scripts/bench-studies.ts). `--solver-only` skips them.
 import { buildSync } from "esbuild";
@@ -7,6 +7,9 @@ import { spawnSync } from "node:child_process";
 import { loadavg } from "node:os";
 import { gzipSync } from "node:zlib";
 import { linspace, parseSketch, solve, solveSweep, type SketchFileInput } from "../solver";
+import { sweeperOn } from "../solver/studySweep";
+import { sweepWith } from "../solver/sweep";
+import { exampleById } from "../canvas/examples";
 
 /** A skid-like body with `n` elements: supports, forces, couples and port pairs. */
 export function benchSketch(n: number): SketchFileInput {
@@ -75,6 +78,23 @@ function benchSweep(): string {
   return both(samples, 1);
 }
 
+/** A 1000-point sweep of the exhaust-stack demo's wind speed on its factored uplift combination:
+ *  each point builds its two cases' load sets and solves their sum once. */
+function benchCombinationSweep(): string {
+  const p = parseSketch(exampleById("exhaust-stack")!.sketch);
+  if (!p.ok) throw new Error(JSON.stringify(p.errors));
+  const values = linspace(20, 45, 1000);
+  const run = () => sweepWith(sweeperOn(p.file, { combination: "uplift" }, "v"), values);
+  run();
+  const samples: number[] = [];
+  for (let r = 0; r < 15; r++) {
+    const t0 = performance.now();
+    run();
+    samples.push(performance.now() - t0);
+  }
+  return both(samples, 1);
+}
+
 function gzipBytes(entry: string): number {
   const out = buildSync({ entryPoints: [entry], bundle: true, minify: true, format: "esm", write: false, platform: "browser", logLevel: "silent" });
   return gzipSync(out.outputFiles[0].contents).length;
@@ -84,6 +104,7 @@ function main() {
   const results: Record<string, string> = {};
   for (const n of [10, 100, 1000]) results[`solve, ${n} elements (µs, median and best)`] = benchSolve(n);
   results["solveSweep, 1000 points of a 20-element sketch (ms)"] = benchSweep();
+  results["sweep of a combination, 1000 points of the exhaust stack (ms)"] = benchCombinationSweep();
   results["mathjs parts used, minified + gzip (kB)"] = (gzipBytes("solver/expressions.ts") / 1024).toFixed(1);
   results["whole solver incl. mathjs and zod, minified + gzip (kB)"] = (gzipBytes("solver/index.ts") / 1024).toFixed(1);
   const load = loadavg()[0];
