@@ -23,3 +23,52 @@ export const setStudy = defineCommand<{ key: StudyKey; value: SketchFile[StudyKe
       else (d as Record<string, unknown>)[key] = value;
     }),
 });
+
+/** What removing a case takes with it: its terms in combinations (a combination left with none
+ *  goes too) and the kept sweeps run on it or on a combination that goes. */
+export function caseRemovalEffects(sketch: SketchFile, caseId: string): { combinationsChanged: string[]; combinationsRemoved: string[]; sweepsRemoved: string[] } {
+  const combos = sketch.combinations ?? [];
+  const hit = combos.filter((k) => k.terms.some((t) => t.case === caseId));
+  const removed = hit.filter((k) => k.terms.every((t) => t.case === caseId)).map((k) => k.id);
+  const changed = hit.map((k) => k.id).filter((id) => !removed.includes(id));
+  const sweeps = (sketch.sweeps ?? []).filter((s) => s.case === caseId || (s.combination !== undefined && removed.includes(s.combination))).map((s) => s.id);
+  return { combinationsChanged: changed, combinationsRemoved: removed, sweepsRemoved: sweeps };
+}
+
+export const removeCase = defineCommand<{ id: string }>({
+  name: "removeCase",
+  label: ({ id }, sketch) => `Remove case ${sketch.cases?.find((c) => c.id === id)?.name ?? id}`,
+  undoable: true,
+  run: (sketch, { id }) => {
+    const { combinationsChanged, combinationsRemoved, sweepsRemoved } = caseRemovalEffects(sketch, id);
+    return edit(sketch, (d) => {
+      const put = <K extends StudyKey>(key: K, value: SketchFile[K]) => {
+        if (Array.isArray(value) && value.length === 0) delete (d as Record<string, unknown>)[key];
+        else (d as Record<string, unknown>)[key] = value;
+      };
+      put("cases", (sketch.cases ?? []).filter((c) => c.id !== id));
+      if (combinationsChanged.length || combinationsRemoved.length)
+        put(
+          "combinations",
+          (sketch.combinations ?? []).filter((k) => !combinationsRemoved.includes(k.id)).map((k) => (k.terms.some((t) => t.case === id) ? { ...k, terms: k.terms.filter((t) => t.case !== id) } : k)),
+        );
+      if (sweepsRemoved.length) put("sweeps", (sketch.sweeps ?? []).filter((s) => !sweepsRemoved.includes(s.id)));
+    });
+  },
+});
+
+/** Removing a combination takes the kept sweeps run on it. */
+export const removeCombination = defineCommand<{ id: string }>({
+  name: "removeCombination",
+  label: ({ id }, sketch) => `Remove combination ${sketch.combinations?.find((k) => k.id === id)?.name ?? id}`,
+  undoable: true,
+  run: (sketch, { id }) =>
+    edit(sketch, (d) => {
+      const combos = (sketch.combinations ?? []).filter((k) => k.id !== id);
+      if (combos.length) d.combinations = combos;
+      else delete d.combinations;
+      const sweeps = (sketch.sweeps ?? []).filter((s) => s.combination !== id);
+      if (sweeps.length) d.sweeps = sweeps;
+      else delete d.sweeps;
+    }),
+});

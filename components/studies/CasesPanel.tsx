@@ -6,9 +6,9 @@
 import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState } from "react";
 import { caseInputErrors, caseWarnings, combinationWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
 import { errorPlace } from "@/components/results/errorPlace";
-import type { CaseFile, CombinationFile } from "@/solver/schema";
+import type { CaseFile, CombinationFile, SketchFile } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
-import { setStudy } from "@/canvas/commands/studies";
+import { caseRemovalEffects, removeCase, removeCombination, setStudy } from "@/canvas/commands/studies";
 import { useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
@@ -100,6 +100,27 @@ export function CasesPanel() {
     return () => runner.current?.dispose();
   }, []);
 
+  // removing a case takes its terms in combinations and the kept sweeps on it along, said here
+  // (shown while the studies are as the removal left them: an undo or another edit ends it)
+  const [removed, setRemoved] = useState<{ note: string; after: SketchFile } | null>(null);
+  const setRemovedNote = (note: string | null) => setRemoved(note ? { note, after: editor.getState().sketch } : null);
+  const removedNote = removed && removed.after.cases === sketch.cases && removed.after.combinations === sketch.combinations && removed.after.sweeps === sketch.sweeps ? removed.note : null;
+  const comboName = (id: string) => combinations.find((k) => k.id === id)?.name ?? id;
+  const dropCase = (c: CaseFile) => {
+    const fx = caseRemovalEffects(sketch, c.id);
+    const also = [
+      ...fx.combinationsChanged.map((id) => `its term in ${comboName(id)}`),
+      ...fx.combinationsRemoved.map((id) => `the combination ${comboName(id)} (it had no other case)`),
+      ...(fx.sweepsRemoved.length ? [`${fx.sweepsRemoved.length === 1 ? "a kept sweep" : `${fx.sweepsRemoved.length} kept sweeps`} run on it`] : []),
+    ];
+    editor.getState().apply(removeCase({ id: c.id }) as Command<unknown>);
+    setRemovedNote(also.length ? `Removed case ${c.name}, and with it ${also.join(", ")}. Undo brings them back.` : null);
+  };
+  const dropCombination = (k: CombinationFile) => {
+    const sweeps = (sketch.sweeps ?? []).filter((s) => s.combination === k.id).length;
+    editor.getState().apply(removeCombination({ id: k.id }) as Command<unknown>);
+    setRemovedNote(sweeps ? `Removed combination ${k.name}, and with it ${sweeps === 1 ? "the kept sweep" : `${sweeps} kept sweeps`} run on it. Undo brings ${sweeps === 1 ? "it" : "them"} back.` : null);
+  };
   const putCases = (next: CaseFile[]) => editor.getState().apply(setStudy({ key: "cases", value: next }) as Command<unknown>);
   const putCombos = (next: CombinationFile[]) => editor.getState().apply(setStudy({ key: "combinations", value: next }) as Command<unknown>);
   const updateCase = (i: number, patch: Partial<CaseFile>) => putCases(cases.map((c, k) => (k === i ? { ...c, ...patch } : c)));
@@ -198,7 +219,7 @@ export function CasesPanel() {
                       <TextCell label={`Flow factor of ${c.name}`} value={c.flowFactor === undefined ? "" : String(c.flowFactor)} placeholder="1" parse={(t) => (!t.trim() ? { ok: true, value: undefined } : Number(t) >= 0 ? { ok: true, value: Number(t) } : { ok: false, error: "a number, 0 or more" })} onCommit={(flowFactor) => updateCase(i, { flowFactor })} />
                     </td>
                     <td className="pb-1">
-                      <button type="button" className="px-1 text-ink-faint hover:text-accent" aria-label={`Remove case ${c.name}`} onClick={() => putCases(cases.filter((_, k) => k !== i))}>
+                      <button type="button" className="px-1 text-ink-faint hover:text-accent" aria-label={`Remove case ${c.name}`} onClick={() => dropCase(c)}>
                         ×
                       </button>
                     </td>
@@ -206,6 +227,11 @@ export function CasesPanel() {
                 ))}
               </tbody>
             </table>
+          )}
+          {removedNote && (
+            <p className="mt-1 text-[11.5px] text-ink-soft" role="status" data-testid="removed-note">
+              {removedNote}
+            </p>
           )}
           {cases.flatMap((c) => caseWarnings(sketch, c, groups)).map((w) => (
             <p key={w} className="mt-1 text-[11.5px] text-caution" data-testid="case-warning">
@@ -233,7 +259,7 @@ export function CasesPanel() {
                 <li key={k.id} className="grid grid-cols-[10rem_1fr_auto] items-start gap-1" data-combination={k.id}>
                   <TextCell label={`Name of combination ${k.id}`} value={k.name} parse={parseName} onCommit={(name) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name } : x)))} />
                   <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(terms) => putCombos(combinations.map((x, j) => (j === i ? { ...x, terms } : x)))} />
-                  <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => putCombos(combinations.filter((_, j) => j !== i))}>
+                  <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => dropCombination(k)}>
                     ×
                   </button>
                   <div className="col-span-3 flex flex-wrap items-center gap-x-2 gap-y-0.5 text-[11px] text-ink-faint">

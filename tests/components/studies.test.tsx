@@ -1,7 +1,7 @@
 // The Cases and Sweep tabs: the case table equals the cases solved one by one, with the governing
 // case marked; a sweep plots and marks the crossing; the limit finder answers in words.
 import { readFileSync } from "node:fs";
-import { screen, waitFor, within } from "@testing-library/react";
+import { act, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { mountResultsDock, renderEditor, setUpSweep } from "./editor-helpers";
@@ -65,6 +65,31 @@ describe("Cases tab", () => {
     await user.clear(own);
     await user.type(own, "{Enter}");
     expect(editor.getState().sketch.combinations![0]).not.toHaveProperty("stability");
+  });
+
+  it("removing a case used by a combination takes its term along, says so, and Undo brings it back", async () => {
+    const user = userEvent.setup();
+    const file = load("fire-monitor-trailer");
+    file.cases = [
+      { id: "dead", name: "Dead", factors: { flow: 0 } },
+      { id: "jet", name: "Jet", factors: { dead: 0 } },
+    ];
+    file.combinations = [{ id: "k", name: "Factored", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] }];
+    file.sweeps = [{ id: "s", parameter: "theta", from: 0, to: 60, points: 11, case: "jet" }];
+    const editor = mount(file);
+    await user.click(screen.getByRole("tab", { name: "Cases" }));
+    await user.click(screen.getByRole("button", { name: "Remove case Jet" }));
+    expect(screen.getByTestId("removed-note").textContent).toBe("Removed case Jet, and with it its term in Factored, a kept sweep run on it. Undo brings them back.");
+    expect(editor.getState().sketch.combinations).toEqual([{ id: "k", name: "Factored", terms: [{ case: "dead", factor: 0.9 }] }]);
+    expect(editor.getState().sketch).not.toHaveProperty("sweeps");
+    // the sketch still reads, and runs
+    await user.click(screen.getByRole("button", { name: "Run all cases" }));
+    expect(within(await screen.findByTestId("case-reactions")).getAllByText("Factored").length).toBeGreaterThan(0);
+    act(() => editor.getState().undo());
+    expect(editor.getState().sketch.cases!.map((c) => c.id)).toEqual(["dead", "jet"]);
+    expect(editor.getState().sketch.sweeps).toHaveLength(1);
+    // the note said what Undo would bring back: once it has, the note is gone
+    expect(screen.queryByTestId("removed-note")).toBeNull();
   });
 
   it("warns of a saved factor whose group no load is in any more", async () => {

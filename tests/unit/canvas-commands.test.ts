@@ -25,6 +25,7 @@ import {
   setSketchField,
 } from "@/canvas/commands";
 import { emptySketch, findElement } from "@/canvas/model/elements";
+import { runCommand } from "@/canvas/commands/define";
 import { newAttached, newBody } from "@/canvas/model/factory";
 
 function base(): SketchFile {
@@ -235,5 +236,50 @@ describe("replaceSketch", () => {
     const other = emptySketch("Other");
     expect(replaceSketch.run(base(), { sketch: other, label: "New" })).toBe(other);
     expect(replaceSketch.def.select!(base(), other, { sketch: other, label: "New" }, ["s1"])).toEqual([]);
+  });
+});
+
+describe("removing a case or a combination", () => {
+  const studies = (): SketchFile => ({
+    ...emptySketch("Studies"),
+    cases: [
+      { id: "dead", name: "Dead", factors: { flow: 0 } },
+      { id: "jet", name: "Jet", factors: { dead: 0 } },
+      { id: "low", name: "Low" },
+    ],
+    combinations: [
+      { id: "k", name: "K", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] },
+      { id: "j", name: "Jet alone", terms: [{ case: "jet", factor: 1.6 }] },
+    ],
+    sweeps: [
+      { id: "s1", parameter: "theta", from: 0, to: 60, points: 11, case: "jet" },
+      { id: "s2", parameter: "theta", from: 0, to: 60, points: 11, combination: "j" },
+      { id: "s3", parameter: "theta", from: 0, to: 60, points: 11, combination: "k" },
+    ],
+  });
+
+  it("a case takes its terms, a combination left with none, and the kept sweeps on either; the file still reads", async () => {
+    const { caseRemovalEffects, removeCase } = await import("@/canvas/commands/studies");
+    const before = studies();
+    expect(caseRemovalEffects(before, "jet")).toEqual({ combinationsChanged: ["k"], combinationsRemoved: ["j"], sweepsRemoved: ["s1", "s2"] });
+    const after = runCommand(before, removeCase({ id: "jet" }));
+    expect(after.cases!.map((c) => c.id)).toEqual(["dead", "low"]);
+    expect(after.combinations).toEqual([{ id: "k", name: "K", terms: [{ case: "dead", factor: 0.9 }] }]);
+    expect(after.sweeps!.map((s) => s.id)).toEqual(["s3"]);
+    expect(parseSketch(after).ok).toBe(true);
+    // a case no combination uses takes nothing else
+    const low = runCommand(before, removeCase({ id: "low" }));
+    expect(low.combinations).toBe(before.combinations);
+    expect(low.sweeps).toEqual(before.sweeps);
+  });
+
+  it("a combination takes the kept sweeps on it; the last one leaves no empty lists", async () => {
+    const { removeCombination } = await import("@/canvas/commands/studies");
+    const after = runCommand(studies(), removeCombination({ id: "k" }));
+    expect(after.combinations!.map((k) => k.id)).toEqual(["j"]);
+    expect(after.sweeps!.map((s) => s.id)).toEqual(["s1", "s2"]);
+    const none = runCommand(runCommand({ ...studies(), sweeps: undefined }, removeCombination({ id: "k" })), removeCombination({ id: "j" }));
+    expect(none).not.toHaveProperty("combinations");
+    expect(none).not.toHaveProperty("sweeps");
   });
 });
