@@ -13,6 +13,17 @@ const mount = mountResultsDock;
 
 const num = (t: string) => Number(t.replace(/[,▲▼]/g, "").replace("−", "-"));
 
+/** The trailer with a weight-only case, a jet-only case and their factored combination "Factored". */
+function trailerWithLoadCases() {
+  const file = load("fire-monitor-trailer");
+  file.cases = [
+    { id: "dead", name: "Dead", factors: { flow: 0 } },
+    { id: "jet", name: "Jet", factors: { dead: 0 } },
+  ];
+  file.combinations = [{ id: "k", name: "Factored", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] }];
+  return file;
+}
+
 describe("Cases tab", () => {
   it("refuses a group no load is in, and does not run while a field holds text it refused", async () => {
     const user = userEvent.setup();
@@ -39,12 +50,7 @@ describe("Cases tab", () => {
 
   it("marks a case as a load case solved only in combinations: it leaves the case table", async () => {
     const user = userEvent.setup();
-    const file = load("fire-monitor-trailer");
-    file.cases = [
-      { id: "dead", name: "Dead", factors: { flow: 0 } },
-      { id: "jet", name: "Jet", factors: { dead: 0 } },
-    ];
-    file.combinations = [{ id: "k", name: "Factored", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] }];
+    const file = trailerWithLoadCases();
     const editor = mount(file);
     await user.click(screen.getByRole("tab", { name: "Cases" }));
     await user.click(screen.getByRole("checkbox", { name: "Dead: only in combinations" }));
@@ -69,12 +75,7 @@ describe("Cases tab", () => {
 
   it("removing a case used by a combination takes its term along, says so, and Undo brings it back", async () => {
     const user = userEvent.setup();
-    const file = load("fire-monitor-trailer");
-    file.cases = [
-      { id: "dead", name: "Dead", factors: { flow: 0 } },
-      { id: "jet", name: "Jet", factors: { dead: 0 } },
-    ];
-    file.combinations = [{ id: "k", name: "Factored", terms: [{ case: "dead", factor: 0.9 }, { case: "jet", factor: 1.4 }] }];
+    const file = trailerWithLoadCases();
     file.sweeps = [{ id: "s", parameter: "theta", from: 0, to: 60, points: 11, case: "jet" }];
     const editor = mount(file);
     await user.click(screen.getByRole("tab", { name: "Cases" }));
