@@ -21,6 +21,7 @@ import { CsvSubject } from "@/components/studies/csv";
 import { versionConcerns, withOpenThreads } from "./concerns";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { CommentsPanel, type CommentsData } from "./Comments";
+import { VersionSweeps } from "./VersionSweeps";
 import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
 import { SignOffPanel, type SignOffData } from "./SignOff";
 
@@ -196,6 +197,9 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             <CsvSubject.Provider value={`${sketchTitle} v${number}`}>
               <VersionCases document={doc} units={units} />
             </CsvSubject.Provider>
+          ) : null}
+          {doc ? (
+            <VersionSweeps document={doc} units={units} />
           ) : null}
         </div>
         <aside aria-label="Comments" id="comments" className="scroll-mt-4">

@@ -1,6 +1,7 @@
 // A saved sweep as the calc sheet's charts: solved on the sweep's own case (its overrides and
-// factors) or combination (its factored load set), one chart per unit (forces, moments, ratios) so a moment is never drawn on a force
-// axis, and the crossings of its margins found by the limit finder.
+// factors) or combination (its factored load set), one chart per unit (forces, moments, ratios) so
+// a moment is never drawn on a force axis, and the crossings of its margins found by the limit
+// finder (which a version's page lists under its own plot too).
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import { findLimitWith } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
@@ -10,8 +11,8 @@ import { sweeperOn } from "@/solver/studySweep";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import type { ChartSpec } from "./chart";
 
-/** At most this many points are solved for a printed chart. */
-const MAX_POINTS = 400;
+/** At most this many points are solved for a printed chart (or one on a version's page). */
+export const MAX_POINTS = 400;
 
 const KIND_WORDS = { force: "forces", moment: "moments", ratio: "ratios" } as const;
 
@@ -31,17 +32,25 @@ export interface SweepMarker {
   words: string;
 }
 
-export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, supports: string[]): { charts: ChartSpec[]; markers: SweepMarker[] } {
-  const on = () => sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter);
-  const res = sweepWith(on(), linspace(sw.from, sw.to, Math.min(sw.points, MAX_POINTS)));
-  const quantities: QuantitySpec[] = sw.quantities?.length ? sw.quantities : supports.map((s) => ({ support: s, component: "resultant" as const }));
-  const markers = quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
-    const lim = findLimitWith(on(), [sw.from, sw.to], q);
+/** What a kept sweep plots: its own quantities, or each support's resultant. */
+export const sweepQuantities = (sw: SweepFile, supports: string[]): QuantitySpec[] =>
+  sw.quantities?.length ? sw.quantities : supports.map((s) => ({ support: s, component: "resultant" as const }));
+
+/** Where each plotted margin of a kept sweep reaches zero, found by the limit finder, in words. */
+export function sweepMarkers(file: SketchFile, sw: SweepFile, quantities: QuantitySpec[]): SweepMarker[] {
+  return quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
+    const lim = findLimitWith(sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter), [sw.from, sw.to], q);
     if (!lim.found) return [];
     const at = `${formatNumber(lim.value, 4)}${lim.unit ? ` ${prettyUnit(lim.unit)}` : ""}`;
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
     return [{ x: lim.value, label: `${q.support}: ${event.noun} at ${at}`, words: `${q.support}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at}` }];
   });
+}
+
+export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, supports: string[]): { charts: ChartSpec[]; markers: SweepMarker[] } {
+  const res = sweepWith(sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter), linspace(sw.from, sw.to, Math.min(sw.points, MAX_POINTS)));
+  const quantities = sweepQuantities(sw, supports);
+  const markers = sweepMarkers(file, sw, quantities);
   const kinds = [...new Set(quantities.map((q) => displayKind(q.component)))];
   const charts = kinds.map((kind): ChartSpec => {
     const mine = quantities.filter((q) => displayKind(q.component) === kind);

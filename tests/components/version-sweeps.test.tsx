@@ -1,0 +1,40 @@
+// A version's page plots the sweeps it keeps for the calc sheet, on their case or combination,
+// with where each margin reaches zero — the limit finder's value, checked here against the hand
+// calculation of the exhaust-stack example (tests/unit/studies/exhaust-stack-example.test.ts).
+import { render, screen, within } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { exampleById } from "@/canvas/examples";
+import { VersionSweeps } from "@/components/review/VersionSweeps";
+import type { SketchFile } from "@/solver/schema";
+
+const g = 9.80665; // standard gravity, m/s² (CGPM 1901)
+// the example's numbers: 900 kg, restoring arm 1.4 m, wind q·Cd·D = ½·1.25·v²·0.7·0.6 N/m over 8 m at 4.7 m
+const vLift = Math.sqrt((900 * g * 1.4) / (0.5 * 1.25 * 0.7 * 0.6 * 8 * 4.7));
+
+describe("a version's kept sweeps", () => {
+  it("plots each on its case or combination, with the crossing the limit finder gives", () => {
+    const doc = structuredClone(exampleById("exhaust-stack")!.sketch) as unknown as SketchFile;
+    doc.sweeps = [...doc.sweeps!, { id: "factored", parameter: "v", from: 20, to: 45, points: 26, combination: "uplift", quantities: [{ support: "upwind", component: "margin" }] }];
+    render(<VersionSweeps document={doc} units="SI" />);
+    const figures = within(screen.getByTestId("version-sweeps")).getAllByRole("figure").filter((f) => f.hasAttribute("data-sweep"));
+    expect(figures.map((f) => f.querySelector("figcaption")!.textContent)).toEqual([
+      "v from 20 to 45 m/s — case Engine stopped, 30 m/s wind",
+      "v from 20 to 45 m/s — combination Uplift check: 0.9 × weight + 1.5 × wind",
+    ]);
+    expect(figures[0].textContent).toContain(`Crossing: upwind: lift-off (its normal force reaches zero) at v = ${vLift.toFixed(2)} m/s.`);
+    // factored: 1.5 × the wind against 0.9 × the weight, v = v_lift·√(0.9 / 1.5) (statics, common practice)
+    expect(figures[1].textContent).toContain(`Crossing: upwind: lift-off (its normal force reaches zero) at v = ${(vLift * Math.sqrt(0.6)).toFixed(2)} m/s.`);
+    expect(within(figures[0]).getByTestId("sweep-chart")).toBeTruthy();
+  });
+
+  it("says when a kept sweep cannot run, and shows nothing for a version without sweeps", () => {
+    const doc = structuredClone(exampleById("exhaust-stack")!.sketch) as unknown as SketchFile;
+    doc.sweeps = [{ id: "s", parameter: "v", from: 20, to: 45, points: 11, case: "gone" }];
+    const { unmount } = render(<VersionSweeps document={doc} units="SI" />);
+    expect(screen.getByRole("alert").textContent).toBe('This sweep could not be run: case: there is no case "gone" (cases: running, stopped, storm, weight, wind-30)');
+    unmount();
+    const none = { ...doc, sweeps: undefined };
+    render(<VersionSweeps document={none} units="SI" />);
+    expect(screen.queryByTestId("version-sweeps")).toBeNull();
+  });
+});
