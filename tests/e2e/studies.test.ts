@@ -99,6 +99,10 @@ describe("design studies", () => {
     await saveVersion(page, "low and high throw cases, angle sweep");
     await page.getByText("✓ saved").waitFor();
     await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}/versions/2`);
+    // the kept sweep is plotted on the version's page too, with the limit finder's crossing
+    const kept = page.getByTestId("version-sweeps");
+    await kept.getByTestId("sweep-chart").waitFor();
+    expect(await kept.textContent()).toMatch(/theta from 0 to 80 deg — as drawn.*Crossing: jack: lift-off \(its normal force reaches zero\) at theta = 18\.1\d deg\./);
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Calc sheet (PDF)" }).click()]);
     expect(download.suggestedFilename()).toBe(`Monitor-trailer-${tag}-v2-calc-sheet-SI.pdf`);
     const path = await download.path();
