@@ -88,6 +88,8 @@ export function SweepPanel() {
     (saved?.quantities ?? choices.map((c) => c.spec).filter((q) => q.component !== "frictionMargin" && q.component !== "m")).map((q) => `${q.support}:${q.component}`),
   );
   const [data, setData] = useState<SweepData | null>(null);
+  /** what the plot shows was run on, and with which settings: the limit finder searches the same */
+  const [ran, setRan] = useState<{ spec: SweepSpec; on: string } | null>(null);
   const [runs, setRuns] = useState(0);
   const [progress, setProgress] = useState<number | null>(null);
   const [cancel, setCancel] = useState<(() => void) | null>(null);
@@ -105,6 +107,12 @@ export function SweepPanel() {
     return () => runner.current?.dispose();
   }, []);
 
+  const onLabel = (caseId?: string, combinationId?: string) =>
+    combinationId
+      ? `combination ${sketch.combinations?.find((c) => c.id === combinationId)?.name ?? combinationId}`
+      : caseId
+        ? `case ${sketch.cases?.find((c) => c.id === caseId)?.name ?? caseId}`
+        : "as drawn";
   const quantities = choices.filter((c) => picked.includes(`${c.spec.support}:${c.spec.component}`)).map((c) => c.spec);
   const spec = (): SweepSpec | string => {
     // the ends in the unit the parameter is written in, or with their own unit ("90 km/hr")
@@ -136,6 +144,7 @@ export function SweepPanel() {
     job.promise
       .then((d) => {
         setData(d);
+        setRan({ spec: s, on: onLabel(s.caseId, s.combinationId) });
         setRuns((n) => n + 1);
         setLimit(null);
         setLimitStopped(false);
@@ -148,9 +157,10 @@ export function SweepPanel() {
   };
 
   const findLimit = () => {
-    const s = spec();
-    if (typeof s === "string") return setError(s);
-    const q = quantities[limitQ] ?? quantities[0];
+    // on what the plot shows (the form may have changed since)
+    const s = ran?.spec;
+    if (!s) return;
+    const q = s.quantities[limitQ] ?? s.quantities[0];
     // a plain number is in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or
     // N·m); a value with a unit ("450 lbf") is taken as written
     let tgt: { si: number; shown: string };
@@ -214,12 +224,7 @@ export function SweepPanel() {
     const v = name === FLOW_FACTOR ? undefined : values[name];
     return v && !("error" in v) && v.unit ? ` ${prettyUnit(v.unit)}` : "";
   };
-  const onWords = (k: SweepFile) =>
-    k.combination
-      ? `combination ${sketch.combinations?.find((c) => c.id === k.combination)?.name ?? k.combination}`
-      : k.case
-        ? `case ${sketch.cases?.find((c) => c.id === k.case)?.name ?? k.case}`
-        : "as drawn";
+  const onWords = (k: SweepFile) => onLabel(k.case, k.combination);
 
   const caseOverride = caseId ? sketch.cases?.find((c) => c.id === caseId)?.parameters?.[parameter] : undefined;
   const combination = combinationId ? sketch.combinations?.find((k) => k.id === combinationId) : undefined;
@@ -231,9 +236,12 @@ export function SweepPanel() {
         return c && v !== undefined ? [`${c.name} (${parameter} = ${String(v)})`] : [];
       })
     : [];
-  const limitQuantity = quantities[limitQ] ?? quantities[0];
+  const plotted = ran?.spec.quantities ?? [];
+  const limitQuantity = plotted[limitQ] ?? plotted[0];
   const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scaleFor(limitQuantity.component)) : "";
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
+  // the plot's parameter, which the form may have left since
+  const dLabel = data ? (data.parameter === FLOW_FACTOR ? "flow factor" : data.parameter) : pLabel;
   const invalid = data ? invalidStretches(data) : [];
 
   return (
@@ -334,26 +342,30 @@ export function SweepPanel() {
           <p className="text-[12.5px] text-ink-faint">Run a sweep to plot each reaction and margin against {pLabel}. Where a margin crosses zero a contact lifts, a tie goes slack or friction is used up: those points are marked.</p>
         ) : (
           <>
-            <SweepChart data={data} run={runs} units={units} parameterLabel={pLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target}` } : null} />
+            <p className="mb-1 text-[11.5px] text-ink-faint" data-testid="sweep-ran-on">
+              {dLabel} from {formatNumber(ran?.spec.from ?? 0, 6)} to {formatNumber(ran?.spec.to ?? 0, 6)}
+              {data.unit ? ` ${prettyUnit(data.unit)}` : ""}, {data.xs.length} points — {ran?.on}
+            </p>
+            <SweepChart data={data} run={runs} units={units} parameterLabel={dLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target}` } : null} />
             <ul className="mt-1 space-y-0.5 text-[12px]" data-testid="crossings">
               {data.crossings.length === 0 && <li className="text-ink-faint">No margin crosses zero in this range.</li>}
               {data.crossings.map((c, i) => (
                 <li key={i} className="text-ink-soft">
-                  <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity])} crosses zero between {pLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${prettyUnit(data.unit)}` : ""}
+                  <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity])} crosses zero between {dLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${prettyUnit(data.unit)}` : ""}
                 </li>
               ))}
               {invalid.slice(0, MAX_STRETCHES).map((r, i) => (
                 <li key={`invalid-${i}`} className="text-caution" data-testid="invalid-points">
-                  Not solved at {pLabel} = {formatNumber(r.from, 4)}{r.count > 1 ? ` to ${formatNumber(r.to, 4)}` : ""}{data.unit ? ` ${prettyUnit(data.unit)}` : ""} ({r.count} {r.count === 1 ? "point" : "points"}), where the sketch is invalid:{" "}
+                  Not solved at {dLabel} = {formatNumber(r.from, 4)}{r.count > 1 ? ` to ${formatNumber(r.to, 4)}` : ""}{data.unit ? ` ${prettyUnit(data.unit)}` : ""} ({r.count} {r.count === 1 ? "point" : "points"}), where the sketch is invalid:{" "}
                   {r.errors.map((e) => errorInWords(sketch, e)).join("; ")}.
                 </li>
               ))}
               {invalid.length > MAX_STRETCHES && <li className="text-caution">… and {invalid.length - MAX_STRETCHES} more stretches of invalid points.</li>}
             </ul>
             <div className="mt-2 flex flex-wrap items-center gap-1.5 border-t border-rule-soft pt-2" role="group" aria-label="Limit finder">
-              <span className={`${LABEL} whitespace-nowrap`}>At what {pLabel} does</span>
+              <span className={`${LABEL} whitespace-nowrap`}>At what {dLabel} does</span>
               <select className={`${INPUT} !w-auto min-w-0`} value={limitQ} onChange={(e) => setLimitQ(Number(e.target.value))} aria-label="Quantity for the limit">
-                {quantities.map((q, i) => <option key={i} value={i}>{describeQuantity(q)}</option>)}
+                {plotted.map((q, i) => <option key={i} value={i}>{describeQuantity(q)}</option>)}
               </select>
               <span className={LABEL}>reach</span>
               <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />

@@ -354,9 +354,13 @@ describe("a sweep on a combination", () => {
     expect(Math.abs(expected.value - drawn.value)).toBeGreaterThan(1);
     const lo = Math.floor(expected.value);
     expect(crossings.textContent).toContain(`margin at jack crosses zero between theta = ${lo} and ${lo + 1} deg`);
+    expect(screen.getByTestId("sweep-ran-on").textContent).toBe("theta from 0 to 80 deg, 81 points — combination Light trailer, strong jet");
+    // the form moved back to the sketch as drawn, not run again: the limit finder searches what the plot shows
+    await user.selectOptions(on, "As drawn");
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at jack");
     await user.click(screen.getByRole("button", { name: "Find" }));
     expect((await screen.findByTestId("limit-answer")).textContent).toContain(`at theta = ${expected.value.toPrecision(5).replace(/0+$/, "")} deg.`);
+    await user.selectOptions(on, "Light trailer, strong jet");
     await user.click(screen.getByRole("button", { name: "Keep on the calc sheet" }));
     expect(editor.getState().sketch.sweeps![0]).toMatchObject({ parameter: "theta", from: 0, to: 80, points: 81, combination: "k" });
     expect(editor.getState().sketch.sweeps![0].case).toBeUndefined();
