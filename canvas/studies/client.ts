@@ -2,14 +2,14 @@
 // no worker exists (tests).
 import type { LimitResult } from "@/solver/limit";
 import type { StudyResult } from "@/solver/cases";
-import { runJob, type OnProgress, type StudyJob, type StudyMessage, type SweepData } from "./run";
+import { runJob, type LimitEverywhere, type OnProgress, type StudyJob, type StudyMessage, type SweepData } from "./run";
 
 export interface Running<T> {
   promise: Promise<T>;
   cancel: () => void;
 }
 
-type Result<J extends StudyJob> = J extends { kind: "cases" } ? StudyResult : J extends { kind: "sweep" } ? SweepData : LimitResult;
+type Result<J extends StudyJob> = J extends { kind: "cases" } ? StudyResult : J extends { kind: "sweep" } ? SweepData : J extends { kind: "limits" } ? LimitEverywhere[] : LimitResult;
 
 export class CancelledError extends Error {
   constructor(message = "stopped") {

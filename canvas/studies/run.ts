@@ -12,7 +12,11 @@ import { marksZero } from "./display";
 /** How far a job is: sweep points or runs (cases and combinations) done, of how many. */
 export type OnProgress = (done: number, total: number) => void;
 
-export type StudyJob = { kind: "cases"; text: string } | { kind: "sweep"; text: string; spec: SweepSpec } | { kind: "limit"; text: string; spec: LimitSpec };
+export type StudyJob =
+  | { kind: "cases"; text: string }
+  | { kind: "sweep"; text: string; spec: SweepSpec }
+  | { kind: "limit"; text: string; spec: LimitSpec }
+  | { kind: "limits"; text: string; spec: EverywhereSpec };
 
 /** What the worker sends back for job `id`: progress, then its data or its error. */
 export type StudyMessage = { id: number; done: number; total: number } | { id: number; data: unknown } | { id: number; error: string };
@@ -112,10 +116,46 @@ export function runLimit(file: unknown, spec: LimitSpec): LimitResult {
   return findLimitWith(sweeperOn(p.file, { case: spec.caseId, combination: spec.combinationId }, spec.parameter, p.sketch), [spec.from, spec.to], spec.quantity, spec.target);
 }
 
+/** The limit search in every run of the study: each case solved on its own and each combination. */
+export type EverywhereSpec = Omit<LimitSpec, "caseId" | "combinationId">;
+
+export interface LimitEverywhere {
+  /** the case's or combination's id ("" for the sketch as drawn, when it has neither) */
+  id: string;
+  name: string;
+  kind: "case" | "combination" | "as drawn";
+  result: LimitResult | { error: string };
+}
+
+/**
+ * The same limit searched in each case (but those solved only in combinations) and each
+ * combination: under which of them, and at what value, does the quantity reach the target?
+ */
+export function runLimitEverywhere(file: unknown, spec: EverywhereSpec, onProgress: OnProgress = () => {}): LimitEverywhere[] {
+  const p = parseSketch(file);
+  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  const runs: Array<Omit<LimitEverywhere, "result"> & { on: { case?: string; combination?: string } }> = [
+    ...(p.file.cases ?? []).filter((c) => !c.onlyInCombinations).map((c) => ({ id: c.id, name: c.name, kind: "case" as const, on: { case: c.id } })),
+    ...(p.file.combinations ?? []).map((k) => ({ id: k.id, name: k.name, kind: "combination" as const, on: { combination: k.id } })),
+  ];
+  if (!runs.length) runs.push({ id: "", name: "As drawn", kind: "as drawn", on: {} });
+  return runs.map(({ on, ...run }, i) => {
+    let result: LimitEverywhere["result"];
+    try {
+      result = findLimitWith(sweeperOn(p.file, on, spec.parameter, on.case || on.combination ? undefined : p.sketch), [spec.from, spec.to], spec.quantity, spec.target);
+    } catch (err) {
+      result = { error: (err as Error).message };
+    }
+    onProgress(i + 1, runs.length);
+    return { ...run, result };
+  });
+}
+
 /** One job, as the worker runs it (or the page, where no worker can run). */
-export function runJob(job: StudyJob, onProgress: OnProgress): StudyResult | SweepData | LimitResult {
+export function runJob(job: StudyJob, onProgress: OnProgress): StudyResult | SweepData | LimitResult | LimitEverywhere[] {
   const file = JSON.parse(job.text);
   if (job.kind === "cases") return runCases(file, onProgress);
+  if (job.kind === "limits") return runLimitEverywhere(file, job.spec, onProgress);
   // runSweep reports the fraction done; the page hears points done of the total
   if (job.kind === "sweep") return runSweep(file, job.spec, (fraction) => (onProgress(Math.round(fraction * job.spec.points), job.spec.points), true));
   return runLimit(file, job.spec);

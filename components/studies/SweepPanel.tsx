@@ -14,7 +14,7 @@ import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
-import type { SweepData, SweepSpec } from "@/canvas/studies/run";
+import type { LimitEverywhere, SweepData, SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
 import { SweepChart } from "./SweepChart";
@@ -97,6 +97,8 @@ export function SweepPanel() {
   const [limitQ, setLimitQ] = useState(0);
   const [target, setTarget] = useState("0");
   const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** as typed, with its unit */ target: string; /** the answer, in words with units */ words: string } | null>(null);
+  /** the same limit in every case and combination */
+  const [everywhere, setEverywhere] = useState<{ rows: LimitEverywhere[]; label: string; target: string; first: string | null; unit: string } | null>(null);
   /** a target that does not read: said beside the limit finder, not up by the sweep's Run */
   const [limitError, setLimitError] = useState<string | null>(null);
   const [searching, setSearching] = useState<(() => void) | null>(null);
@@ -147,6 +149,7 @@ export function SweepPanel() {
         setRan({ spec: s, on: onLabel(s.caseId, s.combinationId) });
         setRuns((n) => n + 1);
         setLimit(null);
+        setEverywhere(null);
         setLimitStopped(false);
       })
       .catch((err) => setError(err instanceof CancelledError ? "Stopped: nothing plotted." : err.message))
@@ -156,10 +159,11 @@ export function SweepPanel() {
       });
   };
 
-  const findLimit = () => {
+  /** The plotted run's settings, the quantity and the target read for a limit search (null: said why). */
+  const limitInputs = () => {
     // on what the plot shows (the form may have changed since)
     const s = ran?.spec;
-    if (!s) return;
+    if (!s) return null;
     const q = s.quantities[limitQ] ?? s.quantities[0];
     // a plain number is in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or
     // N·m); a value with a unit ("450 lbf") is taken as written
@@ -168,14 +172,43 @@ export function SweepPanel() {
       tgt = parseTarget(target, q.component, units, scaleFor(q.component));
     } catch (err) {
       setLimit(null);
-      return setLimitError(`Target: ${(err as Error).message}.`);
+      setEverywhere(null);
+      setLimitError(`Target: ${(err as Error).message}.`);
+      return null;
     }
     setError(null);
     setLimitError(null);
     setLimit(null);
+    setEverywhere(null);
+    setLimitStopped(false);
+    return { s, q, tgt };
+  };
+
+  const findEverywhere = () => {
+    const inputs = limitInputs();
+    if (!inputs) return;
+    const { s, q, tgt } = inputs;
+    const job = runner.current!.run({ kind: "limits", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, quantity: q, target: tgt.si } });
+    setSearching(() => job.cancel);
+    job.promise
+      .then((rows) => {
+        // the run in which the quantity gets there first, going from the range's start
+        const found = rows.flatMap((r) => ("found" in r.result && r.result.found ? [{ id: r.id, x: r.result.value }] : []));
+        const ahead = (a: number, b: number) => (s.from <= s.to ? a < b : a > b);
+        const first = found.reduce<{ id: string; x: number } | null>((best, r) => (!best || ahead(r.x, best.x) ? r : best), null);
+        const unit = rows.find((r) => "unit" in r.result)?.result;
+        setEverywhere({ rows, label: describeQuantity(q), target: tgt.shown, first: first?.id ?? null, unit: unit && "unit" in unit && unit.unit ? ` ${prettyUnit(unit.unit)}` : "" });
+      })
+      .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
+      .finally(() => setSearching(null));
+  };
+
+  const findLimit = () => {
+    const inputs = limitInputs();
+    if (!inputs) return;
+    const { s, q, tgt } = inputs;
     const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, combinationId: s.combinationId, quantity: q, target: tgt.si } });
     setSearching(() => job.cancel);
-    setLimitStopped(false);
     job.promise
       .then((result) => {
         const label = describeQuantity(q);
@@ -371,6 +404,11 @@ export function SweepPanel() {
               <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
               <span className={`${LABEL} whitespace-nowrap`}>{targetUnit}?</span>
               <button type="button" className={BUTTON} onClick={findLimit} disabled={!!searching}>Find</button>
+              {(sketch.cases?.length ?? 0) + (sketch.combinations?.length ?? 0) > 0 && (
+                <button type="button" className={BUTTON} onClick={findEverywhere} disabled={!!searching} title="The same search in each case (but those only in combinations) and each combination: under which does it happen first?">
+                  In every case
+                </button>
+              )}
               {searching && (
                 <>
                   <span className="text-[12px] text-ink-faint" role="status">Searching…</span>
@@ -392,6 +430,31 @@ export function SweepPanel() {
               <p className="mt-1 text-[12.5px]" data-testid="limit-answer" role="status">
                 {limit.words}
               </p>
+            )}
+            {everywhere && !limitStopped && (
+              <div className="mt-1 text-[12.5px]" data-testid="limit-everywhere">
+                <p role="status">
+                  {everywhere.first
+                    ? `The ${everywhere.label} reaches ${everywhere.target} first in ${everywhere.rows.find((r) => r.id === everywhere.first)!.name}.`
+                    : `The ${everywhere.label} reaches ${everywhere.target} in none of them in this range.`}
+                </p>
+                <table className="mt-0.5 text-[12px]">
+                  <tbody>
+                    {everywhere.rows.map((r) => (
+                      <tr key={`${r.kind}:${r.id}`} className={r.id === everywhere.first ? "font-semibold" : ""}>
+                        <td className="pr-3 text-ink-soft">{r.kind === "combination" ? "Combination" : r.kind === "case" ? "Case" : ""} {r.name}</td>
+                        <td className="tabular-nums">
+                          {"error" in r.result
+                            ? `not solved: ${r.result.error}`
+                            : r.result.found
+                              ? `${dLabel} = ${formatNumber(r.result.value, 5)}${everywhere.unit}${r.id === everywhere.first ? " — first" : ""}`
+                              : "no crossing in this range"}
+                        </td>
+                      </tr>
+                    ))}
+                  </tbody>
+                </table>
+              </div>
             )}
           </>
         )}

@@ -6,6 +6,7 @@ import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { mountResultsDock, renderEditor, setUpSweep } from "./editor-helpers";
 import { parseSketch, solve, solveCases } from "@/solver/index";
+import { formatNumber } from "@/solver/units";
 
 const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n}.json`, "utf8"));
 
@@ -364,6 +365,38 @@ describe("a sweep on a combination", () => {
     await user.click(screen.getByRole("button", { name: "Keep on the calc sheet" }));
     expect(editor.getState().sketch.sweeps![0]).toMatchObject({ parameter: "theta", from: 0, to: 80, points: 81, combination: "k" });
     expect(editor.getState().sketch.sweeps![0].case).toBeUndefined();
+  });
+});
+
+describe("the limit in every case", () => {
+  it("lists the value in each case and combination and names where it comes first", async () => {
+    const { runLimit } = await import("@/canvas/studies/run");
+    const user = userEvent.setup();
+    const { exampleById } = await import("@/canvas/examples");
+    const doc = exampleById("exhaust-stack")!.sketch;
+    mount(doc);
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    await screen.findByTestId("crossings");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at upwind");
+    await user.click(screen.getByRole("button", { name: "In every case" }));
+    const box = await screen.findByTestId("limit-everywhere");
+    // each row against the single search on that run (its closed forms: tests/unit/studies/exhaust-stack-example.test.ts)
+    const upwind = { support: "upwind", component: "margin" as const };
+    const one = (on: { caseId?: string; combinationId?: string }) => {
+      const r = runLimit(doc, { parameter: "v", from: 20, to: 45, quantity: upwind, target: 0, ...on });
+      return r.found ? `v = ${formatNumber(r.value, 5)} m/s` : "no crossing in this range";
+    };
+    const rows = within(box).getAllByRole("row").map((tr) => [...tr.querySelectorAll("td")].map((td) => td.textContent));
+    expect(rows).toEqual([
+      ["Case Engine running, 30 m/s wind", one({ caseId: "running" })],
+      ["Case Engine stopped, 30 m/s wind", one({ caseId: "stopped" })],
+      ["Case Engine stopped, 38 m/s storm", one({ caseId: "storm" })],
+      ["Combination Uplift check: 0.9 × weight + 1.5 × wind", `${one({ combinationId: "uplift" })} — first`],
+    ]);
+    // the storm case sets v itself, but the sweep's value stands in: it lifts where "stopped" does
+    expect(rows[2][1]).toBe(rows[1][1]);
+    expect(within(box).getByRole("status").textContent).toBe("The margin at upwind reaches 0 kN first in Uplift check: 0.9 × weight + 1.5 × wind.");
   });
 });
 

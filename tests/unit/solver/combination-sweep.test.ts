@@ -1,7 +1,7 @@
 // Sweeps and the limit finder on a combination: each point is the combination's factored load
 // set solved once (never the cases' results added), with the swept value in every case.
 import { describe, expect, it } from "vitest";
-import { runLimit, runSweep } from "@/canvas/studies/run";
+import { runLimit, runLimitEverywhere, runSweep } from "@/canvas/studies/run";
 import { sweepCharts } from "@/lib/calcsheet/sweeps";
 import { FLOW_FACTOR, parseSketch, solveCases, type SketchFileInput } from "@/solver";
 import { findLimitWith } from "@/solver/limit";
@@ -144,5 +144,51 @@ describe("a sweep on a combination", () => {
     expect(markers).toHaveLength(1);
     expectRel(markers[0].x, (0.9 * W * d) / (1.3 * h * V), 1e-8);
     expect(markers[0].words).toMatch(/^rear: lift-off \(its normal force reaches zero\) at mj = 27\.77 kg\/s$/);
+  });
+});
+
+describe("the limit in every case and combination", () => {
+  it("answers under which runs, and at what flow, the rear contact lifts: ṁ = f_W·W·d / (f_J·h·V) each (statics)", () => {
+    const doc = cart();
+    doc.cases = [
+      { id: "dead", name: "Dead", factors: { flow: 0 }, onlyInCombinations: true },
+      { id: "jet", name: "Jet", factors: { dead: 0 }, onlyInCombinations: true },
+      { id: "full", name: "Full tank" },
+      { id: "light", name: "Light tank", factors: { dead: 0.8 } },
+    ];
+    const seen: number[] = [];
+    const all = runLimitEverywhere(doc, { parameter: "mj", from: 0, to: 50, quantity: rear, target: 0 }, (done) => seen.push(done));
+    expect(all.map((r) => [r.id, r.kind])).toEqual([
+      ["full", "case"],
+      ["light", "case"],
+      ["uplift", "combination"],
+    ]);
+    expect(seen).toEqual([1, 2, 3]);
+    const at = (id: string) => {
+      const r = all.find((x) => x.id === id)!.result;
+      if (!("found" in r) || !r.found) throw new Error(`no crossing in ${id}`);
+      return r.value;
+    };
+    expectRel(at("full"), (W * d) / (h * V), 1e-8);
+    expectRel(at("light"), (0.8 * W * d) / (h * V), 1e-8);
+    expectRel(at("uplift"), (0.9 * W * d) / (1.3 * h * V), 1e-8);
+  });
+
+  it("says where there is no crossing, and searches the sketch as drawn when it has no cases", () => {
+    const none = runLimitEverywhere(cart(), { parameter: "mj", from: 0, to: 10, quantity: rear, target: 0 });
+    expect(none.map((r) => [r.id, r.kind])).toEqual([
+      ["dead", "case"],
+      ["jet", "case"],
+      ["uplift", "combination"],
+    ]);
+    // the weight alone holds the rear contact down at every flow: no crossing
+    const dead = none[0].result;
+    expect("found" in dead && !dead.found && dead.reason).toBe("no crossing in this range: the quantity stays above 0 from 0 to 10");
+    const bare = { ...cart(), cases: undefined, combinations: undefined };
+    const drawn = runLimitEverywhere(bare, { parameter: "mj", from: 0, to: 50, quantity: rear, target: 0 });
+    expect(drawn.map((r) => [r.id, r.name, r.kind])).toEqual([["", "As drawn", "as drawn"]]);
+    const r = drawn[0].result;
+    if (!("found" in r) || !r.found) throw new Error("expected a crossing");
+    expectRel(r.value, (W * d) / (h * V), 1e-8);
   });
 });
