@@ -54,7 +54,15 @@ export function fitScenes(drawn: Drawn[], width: number, height: number, opts: {
   return view;
 }
 
-/** The canvas's fit to view: one scene, clear of the legend. */
+const fitted = new WeakSet<View>();
+
+/** The canvas's fit to view: one scene, clear of the legend. The view it gives is known as a fit
+ *  (`isFitted`) until a zoom or a pan replaces it. */
 export function fitScene(scene: Scene, width: number, height: number, drawn: { result?: SolveResult | null; units?: UnitSystem } = {}): View {
-  return fitScenes([{ scene, result: drawn.result }], width, height, { units: drawn.units, top: LEGEND_ROOM });
+  const view = fitScenes([{ scene, result: drawn.result }], width, height, { units: drawn.units, top: LEGEND_ROOM });
+  fitted.add(view);
+  return view;
 }
+
+/** The view is the one a fit to view made (no zoom or pan since): a resized canvas is fitted again. */
+export const isFitted = (view: View): boolean => fitted.has(view);

@@ -9,7 +9,7 @@ import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "../context";
 import { gridStep } from "../geometry/view";
-import { fitScene } from "../geometry/fit";
+import { fitScene, isFitted } from "../geometry/fit";
 import { followFitRequests } from "../fitRequests";
 import { GRID_MAJOR, GRID_MINOR } from "../render/palette";
 import { markFrame } from "../perf";
@@ -135,7 +135,14 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
       const next = { width: Math.max(1, Math.floor(r.width)), height: Math.max(1, Math.floor(r.height)) };
       setSize(next);
       const s = stores.editor.getState();
+      const resized = s.viewport.width !== next.width || s.viewport.height !== next.height;
       s.setViewport(next);
+      // a drawing still as its last fit left it (no zoom or pan since) stays fitted when the canvas
+      // changes size (the results below grow, the window is resized); one the user moved stays put
+      if (!first && resized && isFitted(s.view) && !interaction.getState().dragging) {
+        const scene = stores.scene.getState();
+        if (scene.bodies.length) s.setView(fitScene(scene, next.width, next.height, { result: stores.analysis.getState().shown, units: s.units }));
+      }
       if (first) {
         first = false;
         const scene = stores.scene.getState();
@@ -147,7 +154,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
     const ro = new ResizeObserver(measure);
     ro.observe(el);
     return () => ro.disconnect();
-  }, [stores]);
+  }, [stores, interaction]);
 
   // a whole other sketch (an example, an import, or the one they replaced, back with undo) is fitted into view
   useEffect(() => followFitRequests(stores), [stores]);

@@ -141,6 +141,31 @@ describe("placing elements from the tray and the keyboard", () => {
     await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
   });
 
+  it("a drawing left as fitted is fitted again when the canvas changes size; one the user zoomed stays put", async () => {
+    const scale = async () => Number(((await page.getByLabel("Drawing scale").textContent()) ?? "").replace(/[^\d.]/g, ""));
+    try {
+      await openScratch(page, "?example=exhaust-stack");
+      await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Temporary exhaust stack on a skid");
+      const tall = await scale();
+      expect(tall).toBeGreaterThan(0);
+      // a shorter window: the tall stack is fitted into the shorter canvas, so at a smaller scale
+      await page.setViewportSize({ width: 1440, height: 760 });
+      await expect.poll(scale).toBeLessThan(tall * 0.9);
+      // the user zooms in: from then on the view is theirs
+      await page.getByRole("button", { name: "Zoom in" }).click();
+      const zoomed = await scale();
+      await page.setViewportSize({ width: 1440, height: 900 });
+      await page.waitForTimeout(300);
+      expect(await scale()).toBe(zoomed);
+      // Fit hands it back to the fit
+      await page.getByRole("button", { name: "Fit", exact: true }).click();
+      await expect.poll(scale).not.toBe(zoomed);
+      expect(Math.abs((await scale()) - tall) / tall).toBeLessThan(0.1);
+    } finally {
+      await page.setViewportSize({ width: 1440, height: 900 });
+    }
+  });
+
   it("on a window too narrow for three columns, the properties open over the drawing from the toolbar", async () => {
     await page.setViewportSize({ width: 820, height: 1000 });
     try {
