@@ -1,15 +1,16 @@
 "use client";
 // The sweeps a version keeps for its calc sheet, plotted on its page as the editor plots them, with
-// where each margin reaches zero (the limit finder's value): a checker reads them without the PDF.
+// where each margin reaches zero (the limit finder's value), in its own run and in every case and
+// combination: a checker reads them without the PDF.
 import { useMemo } from "react";
 import { runSweep, type SweepData } from "@/canvas/studies/run";
-import { MAX_POINTS, sweepMarkers, sweepQuantities, type SweepMarker } from "@/lib/calcsheet/sweeps";
+import { MAX_POINTS, sweepEverywhere, sweepMarkers, sweepQuantities, type SweepMarker } from "@/lib/calcsheet/sweeps";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { SweepChart } from "@/components/studies/SweepChart";
 
-type Plotted = { sw: SweepFile; data: SweepData; markers: SweepMarker[] } | { sw: SweepFile; error: string };
+type Plotted = { sw: SweepFile; data: SweepData; markers: SweepMarker[]; everywhere: string[] } | { sw: SweepFile; error: string };
 
 function onWords(doc: SketchFile, sw: SweepFile): string {
   if (sw.combination) return `combination ${doc.combinations?.find((k) => k.id === sw.combination)?.name ?? sw.combination}`;
@@ -24,7 +25,7 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
         try {
           const quantities = sweepQuantities(sw, document.supports.map((s) => s.id));
           const data = runSweep(document, { parameter: sw.parameter, from: sw.from, to: sw.to, points: Math.min(sw.points, MAX_POINTS), caseId: sw.case, combinationId: sw.combination, quantities });
-          return { sw, data, markers: sweepMarkers(document, sw, quantities) };
+          return { sw, data, markers: sweepMarkers(document, sw, quantities), everywhere: sweepEverywhere(document, sw, quantities) };
         } catch (err) {
           return { sw, error: (err as Error).message };
         }
@@ -57,6 +58,9 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
                   ) : (
                     <li>No plotted margin reaches zero in this range.</li>
                   )}
+                  {p.everywhere.map((line) => (
+                    <li key={line}>{line}.</li>
+                  ))}
                 </ul>
               </>
             )}

@@ -25,7 +25,7 @@ import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
 import { caseFindings, designLoadTable, excludedWords, unsolvedWords, type Table } from "@/solver/report";
 import { lineChartSvg } from "./chart";
-import { sweepCharts } from "./sweeps";
+import { sweepCharts, sweepEverywhere, sweepQuantities } from "./sweeps";
 import { registerFonts } from "./fonts";
 import { drawTable } from "./table";
 
@@ -217,6 +217,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
         doc.y += width * (260 / 500) + 4;
       }
       for (const mk of markers) para(`Crossing: ${mk.words}.`, 8.5, INK);
+      for (const line of sweepEverywhere(parsed.file, sw, sweepQuantities(sw, Object.keys(result.reactions)))) para(`${line}.`, 8.5, INK);
       if (!markers.length && charts.some((c) => c.series.some((se) => se.markZero))) para("No crossing in this range: none of the plotted margins reaches zero.", 8.5, INK);
     } catch (err) {
       para(`This sweep could not be run: ${(err as Error).message}`, 8.5, ACCENT);

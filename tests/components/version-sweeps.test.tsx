@@ -6,6 +6,8 @@ import { describe, expect, it } from "vitest";
 import { exampleById } from "@/canvas/examples";
 import { VersionSweeps } from "@/components/review/VersionSweeps";
 import type { SketchFile } from "@/solver/schema";
+import { formatNumber } from "@/solver/units";
+import { runLimit } from "@/canvas/studies/run";
 
 const g = 9.80665; // standard gravity, m/s² (CGPM 1901)
 // the example's numbers: 900 kg, restoring arm 1.4 m, wind q·Cd·D = ½·1.25·v²·0.7·0.6 N/m over 8 m at 4.7 m
@@ -25,6 +27,15 @@ describe("a version's kept sweeps", () => {
     // factored: 1.5 × the wind against 0.9 × the weight, v = v_lift·√(0.9 / 1.5) (statics, common practice)
     expect(figures[1].textContent).toContain(`Crossing: upwind: lift-off (its normal force reaches zero) at v = ${(vLift * Math.sqrt(0.6)).toFixed(2)} m/s.`);
     expect(within(figures[0]).getByTestId("sweep-chart")).toBeTruthy();
+    // and in every case and combination: the factored uplift check gets there first (no line for
+    // the downwind friction margin, which reaches zero in none of them)
+    const v = (x: number) => `${formatNumber(x, 4)} m/s`;
+    const running = runLimit(doc, { parameter: "v", from: 20, to: 45, caseId: "running", quantity: { support: "upwind", component: "margin" }, target: 0 });
+    if (!running.found) throw new Error("expected a crossing");
+    expect(figures[0].textContent).toContain(
+      `upwind lift-off in each case and combination: Engine running, 30 m/s wind ${v(running.value)}; Engine stopped, 30 m/s wind ${v(vLift)}; Engine stopped, 38 m/s storm ${v(vLift)}; Uplift check: 0.9 × weight + 1.5 × wind ${v(vLift * Math.sqrt(0.6))} (first).`,
+    );
+    expect(figures[0].textContent).not.toContain("downwind slip");
   });
 
   it("says when a kept sweep cannot run, and shows nothing for a version without sweeps", () => {
