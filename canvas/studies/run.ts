@@ -151,6 +151,17 @@ export function runLimitEverywhere(file: unknown, spec: EverywhereSpec, onProgre
   });
 }
 
+/** The run in which the quantity gets to the target first, going from the range's start `from`. */
+export function firstReached(rows: readonly LimitEverywhere[], from: number, to: number): { row: LimitEverywhere; value: number } | null {
+  let best: { row: LimitEverywhere; value: number } | null = null;
+  for (const row of rows) {
+    const r = row.result;
+    if (!("found" in r) || !r.found) continue;
+    if (!best || (from <= to ? r.value < best.value : r.value > best.value)) best = { row, value: r.value };
+  }
+  return best;
+}
+
 /** One job, as the worker runs it (or the page, where no worker can run). */
 export function runJob(job: StudyJob, onProgress: OnProgress): StudyResult | SweepData | LimitResult | LimitEverywhere[] {
   const file = JSON.parse(job.text);

@@ -14,7 +14,7 @@ import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
-import type { LimitEverywhere, SweepData, SweepSpec } from "@/canvas/studies/run";
+import { firstReached, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
 import { SweepChart } from "./SweepChart";
@@ -192,12 +192,9 @@ export function SweepPanel() {
     setSearching(() => job.cancel);
     job.promise
       .then((rows) => {
-        // the run in which the quantity gets there first, going from the range's start
-        const found = rows.flatMap((r) => ("found" in r.result && r.result.found ? [{ id: r.id, x: r.result.value }] : []));
-        const ahead = (a: number, b: number) => (s.from <= s.to ? a < b : a > b);
-        const first = found.reduce<{ id: string; x: number } | null>((best, r) => (!best || ahead(r.x, best.x) ? r : best), null);
+        const first = firstReached(rows, s.from, s.to);
         const unit = rows.find((r) => "unit" in r.result)?.result;
-        setEverywhere({ rows, label: describeQuantity(q), target: tgt.shown, first: first?.id ?? null, unit: unit && "unit" in unit && unit.unit ? ` ${prettyUnit(unit.unit)}` : "" });
+        setEverywhere({ rows, label: describeQuantity(q), target: tgt.shown, first: first?.row.id ?? null, unit: unit && "unit" in unit && unit.unit ? ` ${prettyUnit(unit.unit)}` : "" });
       })
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -434,7 +431,7 @@ export function SweepPanel() {
             {everywhere && !limitStopped && (
               <div className="mt-1 text-[12.5px]" data-testid="limit-everywhere">
                 <p role="status">
-                  {everywhere.first
+                  {everywhere.first !== null
                     ? `The ${everywhere.label} reaches ${everywhere.target} first in ${everywhere.rows.find((r) => r.id === everywhere.first)!.name}.`
                     : `The ${everywhere.label} reaches ${everywhere.target} in none of them in this range.`}
                 </p>

@@ -2,7 +2,7 @@
 // factors) or combination (its factored load set), one chart per unit (forces, moments, ratios) so
 // a moment is never drawn on a force axis, and the crossings of its margins found by the limit
 // finder (which a version's page lists under its own plot too).
-import { runLimitEverywhere } from "@/canvas/studies/run";
+import { firstReached, runLimitEverywhere } from "@/canvas/studies/run";
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import { findLimitWith } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
@@ -58,14 +58,14 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
   return quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
     const all = runLimitEverywhere(file, { parameter: sw.parameter, from: sw.from, to: sw.to, quantity: q, target: 0 });
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
-    const found = all.flatMap((r) => ("found" in r.result && r.result.found ? [{ name: r.name, x: r.result.value, unit: r.result.unit }] : []));
-    const ahead = (a: number, b: number) => (sw.from <= sw.to ? a < b : a > b);
-    const first = found.reduce<(typeof found)[number] | null>((best, r) => (!best || ahead(r.x, best.x) ? r : best), null);
+    const first = firstReached(all, sw.from, sw.to);
     // a margin that reaches zero in no run says nothing here
     if (!first) return [];
     const each = all.map((r) => {
-      const f = found.find((x) => x.name === r.name);
-      return `${r.name} ${f ? `${formatNumber(f.x, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${f === first ? " (first)" : ""}` : "error" in r.result ? "not solved" : "none in the range"}`;
+      const f = r.result;
+      if ("error" in f) return `${r.name} not solved`;
+      if (!f.found) return `${r.name} none in the range`;
+      return `${r.name} ${formatNumber(f.value, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row ? " (first)" : ""}`;
     });
     return [`${q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
   });
