@@ -239,7 +239,8 @@ function caseText(c: CaseFile): string {
   return `${c.name}: ${bits.length ? bits.join(", ") : "as drawn"}`;
 }
 
-const combinationText = (k: CombinationFile) => `${k.name}: ${k.terms.map((t) => `${num(t.factor)} × ${t.case}`).join(" + ")}`;
+const combinationText = (k: CombinationFile) =>
+  `${k.name}: ${k.terms.map((t) => `${num(t.factor)} × ${t.case}`).join(" + ")}${k.stability ? `; required ${Object.entries(k.stability).map(([what, v]) => `${num(v)} against ${what}`).join(", ")}` : ""}`;
 
 function sweepText(s: SweepFile): string {
   const plots = s.quantities?.length ? `; plots ${s.quantities.map((q) => `${q.component} at ${q.support}`).join(", ")}` : "";

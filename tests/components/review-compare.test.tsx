@@ -71,6 +71,19 @@ describe("changes to the design studies", () => {
     expect(changeCount(c)).toBe(7);
   });
 
+  it("names a case turned into a load case, a combination's own required factors and a sweep moved onto a combination", () => {
+    const a = withStudies();
+    const b = withStudies();
+    b.cases = a.cases!.map((c) => (c.id === "dead" ? { ...c, onlyInCombinations: true } : c));
+    b.combinations = [{ ...a.combinations![0], stability: { overturning: 1 } }];
+    b.sweeps = a.sweeps!.map((sw) => ({ ...sw, combination: "k" }));
+    expect(compareSketches(a, b).studies).toEqual([
+      { field: "case dead", before: "Dead: flow × 0", after: "Dead: flow × 0, only in combinations", change: "changed" },
+      { field: "combination k", before: "Factored: 1.2 × dead", after: "Factored: 1.2 × dead; required 1 against overturning", change: "changed" },
+      { field: "sweep sw", before: "theta from 0 to 80, 41 points", after: "theta from 0 to 80, 41 points, combination k", change: "changed" },
+    ]);
+  });
+
   it("a changed required factor of safety alone is a change, shown in the table", () => {
     const a = withStudies();
     const b = withStudies();
