@@ -262,6 +262,7 @@ export function SweepPanel() {
   const combinationOverrides = combination
     ? combination.terms.flatMap((t) => {
         const c = sketch.cases?.find((x) => x.id === t.case);
+        if (parameter === FLOW_FACTOR) return c && c.flowFactor !== undefined && c.flowFactor !== 1 ? [`${c.name} (flow × ${c.flowFactor})`] : [];
         const v = c?.parameters?.[parameter];
         return c && v !== undefined ? [`${c.name} (${parameter} = ${String(v)})`] : [];
       })

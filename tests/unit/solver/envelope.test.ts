@@ -145,14 +145,25 @@ describe("load groups counted more than once in a combination", () => {
 });
 
 describe("a group whose loads come to nothing in a case is not in it", () => {
-  it("the exhaust stack's uplift check: both cases stop the flow and the duct's pressure, so the flow group is counted nowhere", async () => {
+  it("the exhaust stack's uplift check, its cases stopping the flow and the duct's pressure by their values: the flow group is counted nowhere", async () => {
     const { exampleById } = await import("@/canvas/examples");
-    const file = fileOf(exampleById("exhaust-stack")!.sketch);
-    const k = file.combinations!.find((c) => c.id === "uplift")!;
-    expect(combinationOverlaps(file, k)).toEqual([]);
+    const stack = exampleById("exhaust-stack")!.sketch;
+    // the demo zeroes the groups by factors; here each case turns its flow off (× 0) and its duct's pressure to 0 instead
+    const byValues = (pDuct: string) =>
+      fileOf({
+        ...stack,
+        cases: [
+          { id: "weight", name: "Weight only", parameters: { p_duct: pDuct }, factors: { wind: 0 }, flowFactor: 0, onlyInCombinations: true },
+          { id: "wind-30", name: "Wind only", parameters: { v: "30 m/s", p_duct: pDuct }, factors: { dead: 0 }, flowFactor: 0, onlyInCombinations: true },
+        ],
+      });
+    const k = stack.combinations!.find((c) => c.id === "uplift")! as Parameters<typeof combinationOverlaps>[1];
+    expect(combinationOverlaps(byValues("0 kPa"), k)).toEqual([]);
     // with the duct's 2 kPa left in both cases, its p·A is in each (the flow factor scales ṁ and V, not pressure)
-    const kept = fileOf({ ...exampleById("exhaust-stack")!.sketch, cases: file.cases!.map((c) => ({ ...c, parameters: { ...c.parameters, p_duct: "2 kPa" } })) });
-    expect(combinationOverlaps(kept, k)).toEqual([{ group: "flow", terms: [{ case: "weight", factor: 0.9 }, { case: "wind-30", factor: 1.5 }], total: 2.4 }]);
+    expect(combinationOverlaps(byValues("2 kPa"), k)).toEqual([{ group: "flow", terms: [{ case: "weight", factor: 0.9 }, { case: "wind-30", factor: 1.5 }], total: 2.4 }]);
+    // and the demo as shipped, by group factors, is clean too
+    const demo = fileOf(stack);
+    expect(combinationOverlaps(demo, demo.combinations![0])).toEqual([]);
   });
 });
 
