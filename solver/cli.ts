@@ -1,27 +1,124 @@
 // npm run -s solve -- FILE   prints the solve result JSON on stdout; invalid input exits 1 with
 // { ok: false, errors } on stdout. Nothing else is written to stdout by this program; without -s,
 // npm itself prints a banner ("> counterpoise@… solve") there first, which breaks a pipe into jq.
+//
+// Two more questions, for scripts and batch checks (the default output stays the contract's):
+//   --cases FILE      every operating case and combination: the runs, the envelope, the runs left
+//                     out of it, the required factors of safety
+//   --limit NAME=FROM..TO --quantity SUPPORT.COMPONENT [--target VALUE] [--case ID |
+//           --combination ID | --every-case] FILE
+//                     where the quantity reaches the target (0 unless given; a plain number is SI,
+//                     N or N·m, or give a unit: "450 lbf") as NAME (a parameter or flowFactor) runs
+//                     from FROM to TO (in NAME's own unit)
 import { readFileSync } from "node:fs";
-import { solveFile } from "./index";
+import { solveCases } from "./cases";
+import { evaluateToNumber } from "./expressions";
+import { findLimitWith } from "./limit";
+import { parseSketch, solveFile } from "./index";
+import type { QuantityComponent, QuantitySpec } from "./quantity";
+import { firstReached, limitEverywhere, sweeperOn } from "./studySweep";
+import type { FieldError } from "./types";
 
-function main(argv: string[]): number {
-  const file = argv[0];
-  if (!file || argv.length > 1 || file === "--help" || file === "-h") {
-    process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: "usage: npm run -s solve -- FILE (FILE is a sketch file, or - for standard input; -s keeps npm's banner off standard output)" }] }, null, 2) + "\n");
-    return 1;
-  }
-  let text: string;
+const USAGE =
+  "usage: npm run -s solve -- FILE | --cases FILE | --limit NAME=FROM..TO --quantity SUPPORT.COMPONENT [--target VALUE] [--case ID | --combination ID | --every-case] FILE (FILE is a sketch file, or - for standard input; -s keeps npm's banner off standard output)";
+const COMPONENTS: readonly QuantityComponent[] = ["fx", "fy", "m", "n", "t", "resultant", "margin", "frictionRatio", "frictionMargin"];
+
+type Out = { code: number; body: unknown };
+const fail = (errors: FieldError[]): Out => ({ code: 1, body: { ok: false, errors } });
+const usage = (why?: string): Out => fail([{ path: "", message: why ? `${why}; ${USAGE}` : USAGE }]);
+
+function read(file: string): string | Out {
   try {
-    text = readFileSync(file === "-" ? 0 : file, "utf8");
+    return readFileSync(file === "-" ? 0 : file, "utf8");
   } catch (err) {
     const code = (err as NodeJS.ErrnoException).code;
     const why = code === "ENOENT" ? "no such file" : code === "EISDIR" ? "it is a folder, not a file" : code === "EACCES" ? "permission denied" : (code ?? (err as Error).message);
-    process.stdout.write(JSON.stringify({ ok: false, errors: [{ path: "", message: `cannot read ${file}: ${why}` }] }, null, 2) + "\n");
-    return 1;
+    return fail([{ path: "", message: `cannot read ${file}: ${why}` }]);
   }
-  const result = solveFile(text);
-  process.stdout.write(JSON.stringify(result, null, 2) + "\n");
-  return result.ok ? 0 : 1;
 }
 
-process.exitCode = main(process.argv.slice(2));
+/** The options before FILE, as flag → value ("" for a flag that takes none). */
+function options(args: string[]): Map<string, string> | Out {
+  const takes = new Set(["--limit", "--quantity", "--target", "--case", "--combination"]);
+  const out = new Map<string, string>();
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i];
+    if (a === "--cases" || a === "--every-case") out.set(a, "");
+    else if (takes.has(a)) {
+      if (i + 1 >= args.length) return usage(`${a} needs a value`);
+      out.set(a, args[++i]);
+    } else return usage(`unknown option ${a}`);
+  }
+  return out;
+}
+
+function parsed(text: string) {
+  let input: unknown;
+  try {
+    input = JSON.parse(text);
+  } catch (err) {
+    return fail([{ path: "", message: `not JSON: ${(err as Error).message}` }]);
+  }
+  const p = parseSketch(input);
+  return p.ok ? p : fail(p.errors);
+}
+
+function limit(opts: Map<string, string>, text: string): Out {
+  const range = /^([A-Za-z_]\w*)=(.+?)\.\.(.+)$/.exec(opts.get("--limit") ?? "");
+  if (!range) return usage("--limit takes NAME=FROM..TO, as theta=0..80");
+  const [from, to] = [Number(range[2]), Number(range[3])];
+  if (!Number.isFinite(from) || !Number.isFinite(to) || from === to) return fail([{ path: "--limit", message: `${range[2]}..${range[3]} is not a range of two different numbers` }]);
+  const qm = /^(.+)\.(\w+)$/.exec(opts.get("--quantity") ?? "");
+  if (!qm) return usage("--quantity takes SUPPORT.COMPONENT, as rear.margin");
+  const component = qm[2] as QuantityComponent;
+  if (!COMPONENTS.includes(component)) return fail([{ path: "--quantity", message: `${qm[2]} is not one of ${COMPONENTS.join(", ")}` }]);
+  const quantity: QuantitySpec = { support: qm[1], component };
+  let target = 0;
+  const t = opts.get("--target");
+  if (t !== undefined) {
+    try {
+      target = Number.isFinite(Number(t)) ? Number(t) : component === "frictionRatio" ? Number.NaN : evaluateToNumber(t, component === "m" ? "moment" : "force");
+    } catch (err) {
+      return fail([{ path: "--target", message: (err as Error).message }]);
+    }
+    if (!Number.isFinite(target)) return fail([{ path: "--target", message: `${t} is not a number${component === "frictionRatio" ? " (a ratio has no unit)" : ""}` }]);
+  }
+  const p = parsed(text);
+  if ("code" in p) return p;
+  if (!p.file.supports.some((s) => s.id === quantity.support)) return fail([{ path: "--quantity", message: `the sketch has no support "${quantity.support}"` }]);
+  const head = { ok: true, parameter: range[1], from, to, quantity, target };
+  try {
+    if (opts.has("--every-case")) {
+      if (opts.has("--case") || opts.has("--combination")) return usage("--every-case searches every case and combination: give it no --case or --combination");
+      const runs = limitEverywhere(p.file, range[1], [from, to], quantity, target, p.sketch);
+      return { code: 0, body: { ...head, runs, first: firstReached(runs, from, to)?.row.id ?? null } };
+    }
+    const sweeper = sweeperOn(p.file, { case: opts.get("--case"), combination: opts.get("--combination") }, range[1], p.sketch);
+    return { code: 0, body: { ...head, result: findLimitWith(sweeper, [from, to], quantity, target) } };
+  } catch (err) {
+    return fail([{ path: "", message: (err as Error).message }]);
+  }
+}
+
+function run(argv: string[]): Out {
+  const file = argv[argv.length - 1];
+  if (!file || file === "--help" || file === "-h" || (file.startsWith("--") && file !== "-")) return usage();
+  const opts = options(argv.slice(0, -1));
+  if ("code" in opts) return opts;
+  const text = read(file);
+  if (typeof text !== "string") return text;
+  if (opts.has("--cases")) {
+    if (opts.size > 1) return usage("--cases takes no other option");
+    const p = parsed(text);
+    if ("code" in p) return p;
+    return { code: 0, body: { ok: true, ...solveCases(p.file) } };
+  }
+  if (opts.has("--limit")) return limit(opts, text);
+  if (opts.size) return usage(`${[...opts.keys()][0]} needs --limit`);
+  const result = solveFile(text);
+  return { code: result.ok ? 0 : 1, body: result };
+}
+
+const out = run(process.argv.slice(2));
+process.stdout.write(JSON.stringify(out.body, null, 2) + "\n");
+process.exitCode = out.code;

@@ -7,6 +7,8 @@ import { caseSketch, combineModels } from "./cases";
 import { resolveFile } from "./parse";
 import type { SketchFile } from "./schema";
 import { prepare, solveModels } from "./solve";
+import { findLimitWith, type LimitResult } from "./limit";
+import type { QuantitySpec } from "./quantity";
 import { createSetter, createSweeper, FLOW_FACTOR, type ParameterSetter, type Sweeper } from "./sweep";
 import type { FieldError, Sketch, SolveWarning } from "./types";
 
@@ -82,4 +84,54 @@ export function sweeperOn(file: SketchFile, on: SweepOn, parameter: string, asDr
     },
     restore: () => setters.forEach((s) => s.restore()),
   };
+}
+
+export interface LimitEverywhere {
+  /** the case's or combination's id ("" for the sketch as drawn, when it has neither) */
+  id: string;
+  name: string;
+  kind: "case" | "combination" | "as drawn";
+  result: LimitResult | { error: string };
+}
+
+/**
+ * The same limit searched in each case (but those solved only in combinations) and each
+ * combination: under which of them, and at what value, does the quantity reach the target?
+ * A sketch with neither is searched as drawn.
+ */
+export function limitEverywhere(
+  file: SketchFile,
+  parameter: string,
+  range: readonly [number, number],
+  quantity: QuantitySpec,
+  target = 0,
+  asDrawn?: Sketch,
+  onProgress: (done: number, total: number) => void = () => {},
+): LimitEverywhere[] {
+  const runs: Array<Omit<LimitEverywhere, "result"> & { on: SweepOn }> = [
+    ...(file.cases ?? []).filter((c) => !c.onlyInCombinations).map((c) => ({ id: c.id, name: c.name, kind: "case" as const, on: { case: c.id } })),
+    ...(file.combinations ?? []).map((k) => ({ id: k.id, name: k.name, kind: "combination" as const, on: { combination: k.id } })),
+  ];
+  if (!runs.length) runs.push({ id: "", name: "As drawn", kind: "as drawn", on: {} });
+  return runs.map(({ on, ...run }, i) => {
+    let result: LimitEverywhere["result"];
+    try {
+      result = findLimitWith(sweeperOn(file, on, parameter, asDrawn), range, quantity, target);
+    } catch (err) {
+      result = { error: (err as Error).message };
+    }
+    onProgress(i + 1, runs.length);
+    return { ...run, result };
+  });
+}
+
+/** The run in which the quantity gets to the target first, going from the range's start `from`. */
+export function firstReached(rows: readonly LimitEverywhere[], from: number, to: number): { row: LimitEverywhere; value: number } | null {
+  let best: { row: LimitEverywhere; value: number } | null = null;
+  for (const row of rows) {
+    const r = row.result;
+    if (!("found" in r) || !r.found) continue;
+    if (!best || (from <= to ? r.value < best.value : r.value > best.value)) best = { row, value: r.value };
+  }
+  return best;
 }

@@ -4,7 +4,8 @@ import { findLimitWith, type LimitResult } from "@/solver/limit";
 import { parseSketch } from "@/solver/parse";
 import { readQuantity, type QuantitySpec } from "@/solver/quantity";
 import { linspace } from "@/solver/sweep";
-import { sweeperOn } from "@/solver/studySweep";
+import { limitEverywhere, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
+export { firstReached, type LimitEverywhere } from "@/solver/studySweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
 import type { FieldError } from "@/solver/types";
 import { marksZero } from "./display";
@@ -119,47 +120,11 @@ export function runLimit(file: unknown, spec: LimitSpec): LimitResult {
 /** The limit search in every run of the study: each case solved on its own and each combination. */
 export type EverywhereSpec = Omit<LimitSpec, "caseId" | "combinationId">;
 
-export interface LimitEverywhere {
-  /** the case's or combination's id ("" for the sketch as drawn, when it has neither) */
-  id: string;
-  name: string;
-  kind: "case" | "combination" | "as drawn";
-  result: LimitResult | { error: string };
-}
-
-/**
- * The same limit searched in each case (but those solved only in combinations) and each
- * combination: under which of them, and at what value, does the quantity reach the target?
- */
+/** `limitEverywhere` (solver/studySweep.ts) on a sketch file as JSON or text. */
 export function runLimitEverywhere(file: unknown, spec: EverywhereSpec, onProgress: OnProgress = () => {}): LimitEverywhere[] {
   const p = parseSketch(file);
   if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
-  const runs: Array<Omit<LimitEverywhere, "result"> & { on: { case?: string; combination?: string } }> = [
-    ...(p.file.cases ?? []).filter((c) => !c.onlyInCombinations).map((c) => ({ id: c.id, name: c.name, kind: "case" as const, on: { case: c.id } })),
-    ...(p.file.combinations ?? []).map((k) => ({ id: k.id, name: k.name, kind: "combination" as const, on: { combination: k.id } })),
-  ];
-  if (!runs.length) runs.push({ id: "", name: "As drawn", kind: "as drawn", on: {} });
-  return runs.map(({ on, ...run }, i) => {
-    let result: LimitEverywhere["result"];
-    try {
-      result = findLimitWith(sweeperOn(p.file, on, spec.parameter, on.case || on.combination ? undefined : p.sketch), [spec.from, spec.to], spec.quantity, spec.target);
-    } catch (err) {
-      result = { error: (err as Error).message };
-    }
-    onProgress(i + 1, runs.length);
-    return { ...run, result };
-  });
-}
-
-/** The run in which the quantity gets to the target first, going from the range's start `from`. */
-export function firstReached(rows: readonly LimitEverywhere[], from: number, to: number): { row: LimitEverywhere; value: number } | null {
-  let best: { row: LimitEverywhere; value: number } | null = null;
-  for (const row of rows) {
-    const r = row.result;
-    if (!("found" in r) || !r.found) continue;
-    if (!best || (from <= to ? r.value < best.value : r.value > best.value)) best = { row, value: r.value };
-  }
-  return best;
+  return limitEverywhere(p.file, spec.parameter, [spec.from, spec.to], spec.quantity, spec.target, p.sketch, onProgress);
 }
 
 /** One job, as the worker runs it (or the page, where no worker can run). */

@@ -7,8 +7,15 @@ import { describe, expect, it } from "vitest";
 import { solveFile } from "@/solver";
 import { FIXTURES, loadFixture } from "./helpers";
 
-const solveCli = (file: string) =>
-  spawnSync("npm", ["run", "-s", "solve", "--", file], { encoding: "utf8", cwd: process.cwd(), env: { ...process.env, NODE_OPTIONS: "" } });
+const solveCli = (...args: string[]) =>
+  spawnSync("npm", ["run", "-s", "solve", "--", ...args], { encoding: "utf8", cwd: process.cwd(), env: { ...process.env, NODE_OPTIONS: "" } });
+
+/** A sketch written to a file of its own, for the command line. */
+function written(doc: unknown): string {
+  const file = join(mkdtempSync(join(tmpdir(), "cp-cli-")), "sketch.json");
+  writeFileSync(file, JSON.stringify(doc));
+  return file;
+}
 
 describe("npm run solve", () => {
   it("prints the result of a fixture as JSON, equal to solveFile", () => {
@@ -41,4 +48,61 @@ describe("npm run solve", () => {
     expect(r.status).toBe(1);
     expect(JSON.parse(r.stdout).errors[0].message).toMatch(/^usage: npm run -s solve -- FILE/);
   }, 30000);
+});
+
+describe("npm run solve -- --cases and --limit", () => {
+  // the thrust stand: the rear pad lifts at T = W·d/h = 200·g0·0.8/1.5 N (common practice; the
+  // same check as tests/unit/solver/sweep-limit.test.ts)
+  const liftAt = (200 * 9.80665 * 0.8) / 1.5;
+
+  it("--limit prints where the quantity reaches the target, in the parameter's unit", () => {
+    const r = solveCli("--limit", "T=0..3", "--quantity", "rear.margin", join(FIXTURES, "thrust-stand-tips.json"));
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out).toMatchObject({ ok: true, parameter: "T", from: 0, to: 3, quantity: { support: "rear", component: "margin" }, target: 0, result: { found: true, unit: "kN" } });
+    expect(Math.abs(out.result.value * 1000 - liftAt) / liftAt).toBeLessThan(1e-8);
+  }, 30000);
+
+  it("--every-case searches each case and combination and names the first; --cases prints the study", () => {
+    const doc = loadFixture("thrust-stand-tips.json");
+    doc.cases = [
+      { id: "full", name: "Full" },
+      { id: "half", name: "Half weight", factors: { dead: 0.5 } },
+    ];
+    const file = written(doc);
+    const r = solveCli("--limit", "T=0..3", "--quantity", "rear.margin", "--every-case", file);
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.runs.map((x: { id: string; result: { value: number } }) => [x.id, Math.round(x.result.value * 1e6) / 1e3])).toEqual([
+      ["full", Math.round(liftAt * 1e3) / 1e3],
+      ["half", Math.round((liftAt / 2) * 1e3) / 1e3],
+    ]);
+    expect(out.first).toBe("half");
+    const cases = solveCli("--cases", file);
+    expect(cases.status).toBe(0);
+    const study = JSON.parse(cases.stdout);
+    expect(study.ok).toBe(true);
+    expect(study.runs.map((x: { id: string }) => x.id)).toEqual(["full", "half"]);
+    // as drawn (T = 2.2 kN, past both lift-offs) the stand tips in both: out of the envelope, and said so
+    expect(study.excluded).toEqual([
+      { case: "full", body: "stand", status: "tips" },
+      { case: "half", body: "stand", status: "tips" },
+    ]);
+  }, 60000);
+
+  it("a target with a unit, and mistakes named by their option", () => {
+    const fixture = join(FIXTURES, "thrust-stand-tips.json");
+    const withUnit = JSON.parse(solveCli("--limit", "T=0..3", "--quantity", "rear.margin", "--target", "44.96178 lbf", fixture).stdout);
+    const inNewtons = JSON.parse(solveCli("--limit", "T=0..3", "--quantity", "rear.margin", "--target", "200", fixture).stdout);
+    // 44.96178 lbf = 200.000 N (1 lbf = 4.4482216152605 N, NIST SP 811)
+    expect(Math.abs(withUnit.target - 200)).toBeLessThan(0.001);
+    expect(inNewtons.result.found).toBe(true);
+    expect(Math.abs(withUnit.result.value - inNewtons.result.value)).toBeLessThan(1e-4);
+    const bad = (...args: string[]) => JSON.parse(solveCli(...args, fixture).stdout).errors[0];
+    expect(bad("--limit", "T=3..3", "--quantity", "rear.margin")).toEqual({ path: "--limit", message: "3..3 is not a range of two different numbers" });
+    expect(bad("--limit", "T=0..3", "--quantity", "back.margin")).toEqual({ path: "--quantity", message: 'the sketch has no support "back"' });
+    expect(bad("--limit", "T=0..3", "--quantity", "rear.margin", "--target", "3 kg")).toMatchObject({ path: "--target" });
+    expect(bad("--limit", "T=0..3", "--quantity", "rear.margin", "--combination", "none")).toEqual({ path: "", message: 'combination: there is no combination "none"' });
+    expect(bad("--frobnicate").message).toMatch(/^unknown option --frobnicate; usage:/);
+  }, 60000);
 });
