@@ -83,6 +83,15 @@ describe("design studies", () => {
     const answer = page.getByTestId("limit-answer");
     await answer.waitFor();
     expect(await answer.textContent()).toMatch(/^The margin at jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
+    // the same search in every case, in the page's worker: both cases set theta, which the sweep's
+    // values stand in for, so both lift where the sketch does; the first of a tie is named
+    await page.getByRole("button", { name: "In every case" }).click();
+    const every = page.getByTestId("limit-everywhere");
+    await every.waitFor();
+    const rows = await every.locator("tr").allTextContents();
+    expect(rows).toHaveLength(2);
+    for (const r of rows) expect(r).toMatch(/theta = 18\.1\d+ deg/);
+    expect(await every.getByRole("status").textContent()).toBe("The margin at jack reaches 0 kN first in Low forward throw.");
     // hover shows the values
     const chart = page.getByTestId("sweep-chart");
     await chart.scrollIntoViewIfNeeded();
