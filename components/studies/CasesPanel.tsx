@@ -263,7 +263,7 @@ export function CasesPanel() {
                     ×
                   </button>
                   <div className="col-span-3 flex flex-wrap items-center gap-x-2 gap-y-0.5 text-[11px] text-ink-faint">
-                    <span>Required factors of safety:</span>
+                    <span>Its own required factors of safety:</span>
                     {(["overturning", "sliding"] as const).map((key) => (
                       <span key={key} className="flex items-center gap-1">
                         {key}
@@ -311,7 +311,7 @@ export function CasesPanel() {
               </span>
             </label>
           ))}
-          <span className="text-[11px] text-ink-faint">1.5 each is common practice; your code or client may ask for other values.</span>
+          <span className="text-[11px] text-ink-faint">For every case, and each combination that sets none of its own. 1.5 each is common practice; your code or client may ask for other values.</span>
         </section>
 
         <div className="flex items-center gap-2">
