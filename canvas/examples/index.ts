@@ -28,7 +28,7 @@ export const EXAMPLES: readonly Example[] = [
   { id: "pipe-bend-anchor", title: "Pressure-pipe bend on an anchor", summary: "10 bar in a DN150 bend: pressure thrust, momentum and weight on one anchor.", sketch: load(pipeBend) },
   { id: "washing-cart", title: "Pressure-washing cart with a fixed lance", summary: "Raise the lance and the cart tips back off its front caster; four operating cases and a lance-angle sweep.", sketch: load(washingCart) },
   { id: "pump-skid", title: "Dewatering pump skid", summary: "Suction and discharge on a skid held by friction at two bearers.", sketch: load(pumpSkid) },
-  { id: "exhaust-stack", title: "Temporary exhaust stack on a skid", summary: "Wind against the duct's push on an unbolted 8 m stack: the upwind edge lifts at 35.4 m/s with the engine stopped.", sketch: load(exhaustStack) },
+  { id: "exhaust-stack", title: "Temporary exhaust stack on a skid", summary: "Wind against the duct's push on an unbolted 8 m stack: the upwind edge lifts at 35.4 m/s with the engine stopped, and at 27.4 m/s in the factored uplift check.", sketch: load(exhaustStack) },
 ];
 
 export function exampleById(id: string): Example | undefined {

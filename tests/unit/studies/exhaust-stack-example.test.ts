@@ -65,6 +65,7 @@ describe("the exhaust-stack example", () => {
     if (!lim.found) throw new Error(lim.reason);
     expect(lim.value).toBeCloseTo(vFactored, 4);
     expect(stack.description).toContain(`lifts at ${vFactored.toFixed(1)} m/s`);
+    expect(exampleById("exhaust-stack")!.summary).toContain(`at ${vFactored.toFixed(1)} m/s in the factored uplift check`);
     // at 30 m/s, past that speed, the factored load set tips the skid
     const p = parseSketch(stack);
     if (!p.ok) throw new Error(JSON.stringify(p.errors));
