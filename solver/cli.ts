@@ -91,7 +91,11 @@ function limit(opts: Map<string, string>, text: string): Out {
     if (opts.has("--every-case")) {
       if (opts.has("--case") || opts.has("--combination")) return usage("--every-case searches every case and combination: give it no --case or --combination");
       const runs = limitEverywhere(p.file, range[1], [from, to], quantity, target, p.sketch);
-      return { code: 0, body: { ...head, runs, first: firstReached(runs, from, to)?.row.id ?? null } };
+      // a parameter no run has (a misspelt name) is an error, as it is for one run
+      const failed = runs.flatMap((r) => ("error" in r.result ? [r.result.error] : []));
+      if (failed.length === runs.length) return fail([{ path: "", message: failed[0] }]);
+      const first = firstReached(runs, from, to);
+      return { code: 0, body: { ...head, runs, first: first?.row.id ?? null, firstValue: first?.value ?? null } };
     }
     const sweeper = sweeperOn(p.file, { case: opts.get("--case"), combination: opts.get("--combination") }, range[1], p.sketch);
     return { code: 0, body: { ...head, result: findLimitWith(sweeper, [from, to], quantity, target) } };

@@ -4,7 +4,7 @@
 // swept value, its load set is built, and the sets are added with their factors before the one
 // solve — never the results of the cases.
 import { caseSketch, combineModels } from "./cases";
-import { resolveFile } from "./parse";
+import { planOf, resolveFile } from "./parse";
 import type { SketchFile } from "./schema";
 import { prepare, solveModels } from "./solve";
 import { findLimitWith, type LimitResult } from "./limit";
@@ -33,14 +33,28 @@ export function sketchOfCase(file: SketchFile, caseId: string): Sketch {
   return cs.sketch;
 }
 
+/** The unit the sketch as drawn writes `parameter` in (undefined when it does not read). */
+function drawnUnit(file: SketchFile, parameter: string, asDrawn?: Sketch): string | undefined {
+  let sketch = asDrawn;
+  if (!sketch) {
+    const r = resolveFile(file);
+    if (!r.ok) return undefined;
+    sketch = r.sketch;
+  }
+  const plan = planOf(sketch);
+  if (parameter === FLOW_FACTOR && !plan?.scope.has(FLOW_FACTOR)) return "";
+  return plan?.parameterUnits[parameter];
+}
+
 /**
  * A sweeper over `parameter` for what `on` names in the parsed file (`asDrawn`: its sketch as
- * drawn, when the caller has it). On a combination the swept values are in the unit its first
- * case writes the parameter in.
+ * drawn, when the caller has it). The swept values are in the unit the sketch as drawn writes the
+ * parameter in, whatever unit a case writes its own value in ("140 km/h" for a "30 m/s"), so one
+ * range means the same in every case and combination.
  */
 export function sweeperOn(file: SketchFile, on: SweepOn, parameter: string, asDrawn?: Sketch): Sweeper {
   if (on.case && on.combination) throw new Error("a sweep runs on a case or on a combination, not both");
-  if (on.case) return createSweeper(sketchOfCase(file, on.case), parameter);
+  if (on.case) return createSweeper(sketchOfCase(file, on.case), parameter, drawnUnit(file, parameter, asDrawn));
   if (!on.combination) {
     if (asDrawn) return createSweeper(asDrawn, parameter);
     const r = resolveFile(file);
@@ -59,7 +73,7 @@ export function sweeperOn(file: SketchFile, on: SweepOn, parameter: string, asDr
     return { name: c!.name, setter: createSetter(cs.sketch, parameter), warnings: cs.warnings };
   });
   const setters: ParameterSetter[] = parts.map((p) => p.setter);
-  const unit = parameter === FLOW_FACTOR ? "" : parts[0].setter.unit;
+  const unit = drawnUnit(file, parameter, asDrawn) ?? parts[0].setter.unit;
   return {
     parameter,
     unit,
@@ -125,13 +139,20 @@ export function limitEverywhere(
   });
 }
 
+/** Where a search first reaches the target going from `from` towards `to` (a range searched
+ *  downwards meets its highest crossing first); undefined when it never does. */
+export function reachedAt(result: LimitEverywhere["result"], from: number, to: number): number | undefined {
+  if (!("found" in result) || !result.found) return undefined;
+  return from <= to ? result.crossings[0] : result.crossings[result.crossings.length - 1];
+}
+
 /** The run in which the quantity gets to the target first, going from the range's start `from`. */
 export function firstReached(rows: readonly LimitEverywhere[], from: number, to: number): { row: LimitEverywhere; value: number } | null {
   let best: { row: LimitEverywhere; value: number } | null = null;
   for (const row of rows) {
-    const r = row.result;
-    if (!("found" in r) || !r.found) continue;
-    if (!best || (from <= to ? r.value < best.value : r.value > best.value)) best = { row, value: r.value };
+    const x = reachedAt(row.result, from, to);
+    if (x === undefined) continue;
+    if (!best || (from <= to ? x < best.value : x > best.value)) best = { row, value: x };
   }
   return best;
 }

@@ -108,13 +108,15 @@ export function createSetter(sketch: Sketch, parameter: string): ParameterSetter
   };
 }
 
-export function createSweeper(sketch: Sketch, parameter: string): Sweeper {
+/** A sweeper of one sketch; its values are in `unit` (default: the unit the sketch writes the parameter in). */
+export function createSweeper(sketch: Sketch, parameter: string, unit?: string): Sweeper {
   const setter = createSetter(sketch, parameter);
+  const u = unit ?? setter.unit;
   return {
     parameter,
-    unit: setter.unit,
+    unit: u,
     at(value: number): SweepPoint {
-      const errors = setter.set(value);
+      const errors = setter.set(value, u);
       return errors.length ? { value, ok: false, errors } : { value, ok: true, result: solve(sketch) };
     },
     restore: setter.restore,

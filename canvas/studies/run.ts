@@ -5,7 +5,7 @@ import { parseSketch } from "@/solver/parse";
 import { readQuantity, type QuantitySpec } from "@/solver/quantity";
 import { linspace } from "@/solver/sweep";
 import { limitEverywhere, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
-export { firstReached, type LimitEverywhere } from "@/solver/studySweep";
+export { firstReached, reachedAt, type LimitEverywhere } from "@/solver/studySweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
 import type { FieldError } from "@/solver/types";
 import { marksZero } from "./display";

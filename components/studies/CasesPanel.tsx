@@ -113,12 +113,12 @@ export function CasesPanel() {
       ...fx.combinationsRemoved.map((id) => `the combination ${comboName(id)} (it had no other case)`),
       ...(fx.sweepsRemoved.length ? [`${fx.sweepsRemoved.length === 1 ? "a kept sweep" : `${fx.sweepsRemoved.length} kept sweeps`} run on it`] : []),
     ];
-    editor.getState().apply(removeCase({ id: c.id }) as Command<unknown>);
+    if (!editor.getState().apply(removeCase({ id: c.id }) as Command<unknown>)) return;
     setRemovedNote(also.length ? `Removed case ${c.name}, and with it ${also.join(", ")}. Undo brings them back.` : null);
   };
   const dropCombination = (k: CombinationFile) => {
     const sweeps = (sketch.sweeps ?? []).filter((s) => s.combination === k.id).length;
-    editor.getState().apply(removeCombination({ id: k.id }) as Command<unknown>);
+    if (!editor.getState().apply(removeCombination({ id: k.id }) as Command<unknown>)) return;
     setRemovedNote(sweeps ? `Removed combination ${k.name}, and with it ${sweeps === 1 ? "the kept sweep" : `${sweeps} kept sweeps`} run on it. Undo brings ${sweeps === 1 ? "it" : "them"} back.` : null);
   };
   const putCases = (next: CaseFile[]) => editor.getState().apply(setStudy({ key: "cases", value: next }) as Command<unknown>);

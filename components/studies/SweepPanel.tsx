@@ -14,7 +14,7 @@ import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
-import { firstReached, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
+import { firstReached, reachedAt, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
 import { SweepChart } from "./SweepChart";
@@ -89,7 +89,9 @@ export function SweepPanel() {
   );
   const [data, setData] = useState<SweepData | null>(null);
   /** what the plot shows was run on, and with which settings: the limit finder searches the same */
-  const [ran, setRan] = useState<{ spec: SweepSpec; on: string } | null>(null);
+  const [ran, setRan] = useState<{ spec: SweepSpec; on: string; text: string; id: number } | null>(null);
+  // which plot a limit search answers: a result that comes back after another plot replaced it is dropped
+  const ranId = useRef(0);
   const [runs, setRuns] = useState(0);
   const [progress, setProgress] = useState<number | null>(null);
   const [cancel, setCancel] = useState<(() => void) | null>(null);
@@ -98,7 +100,7 @@ export function SweepPanel() {
   const [target, setTarget] = useState("0");
   const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** as typed, with its unit */ target: string; /** the answer, in words with units */ words: string } | null>(null);
   /** the same limit in every case and combination */
-  const [everywhere, setEverywhere] = useState<{ rows: LimitEverywhere[]; label: string; target: string; first: string | null; unit: string } | null>(null);
+  const [everywhere, setEverywhere] = useState<{ rows: LimitEverywhere[]; label: string; target: string; first: string | null; unit: string; from: number; to: number } | null>(null);
   /** a target that does not read: said beside the limit finder, not up by the sweep's Run */
   const [limitError, setLimitError] = useState<string | null>(null);
   const [searching, setSearching] = useState<(() => void) | null>(null);
@@ -141,12 +143,14 @@ export function SweepPanel() {
     if (typeof s === "string") return setError(s);
     setError(null);
     setProgress(0);
-    const job = runner.current!.run({ kind: "sweep", text: JSON.stringify(sketch), spec: s }, (done, total) => setProgress(done / total));
+    const text = JSON.stringify(sketch);
+    const job = runner.current!.run({ kind: "sweep", text, spec: s }, (done, total) => setProgress(done / total));
     setCancel(() => job.cancel);
     job.promise
       .then((d) => {
         setData(d);
-        setRan({ spec: s, on: onLabel(s.caseId, s.combinationId) });
+        ranId.current += 1;
+        setRan({ spec: s, on: onLabel(s.caseId, s.combinationId), text, id: ranId.current });
         setRuns((n) => n + 1);
         setLimit(null);
         setEverywhere(null);
@@ -181,20 +185,21 @@ export function SweepPanel() {
     setLimit(null);
     setEverywhere(null);
     setLimitStopped(false);
-    return { s, q, tgt };
+    return { s, q, tgt, text: ran.text, id: ran.id };
   };
 
   const findEverywhere = () => {
     const inputs = limitInputs();
     if (!inputs) return;
-    const { s, q, tgt } = inputs;
-    const job = runner.current!.run({ kind: "limits", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, quantity: q, target: tgt.si } });
+    const { s, q, tgt, text, id } = inputs;
+    const job = runner.current!.run({ kind: "limits", text, spec: { parameter: s.parameter, from: s.from, to: s.to, quantity: q, target: tgt.si } });
     setSearching(() => job.cancel);
     job.promise
       .then((rows) => {
+        if (ranId.current !== id) return;
         const first = firstReached(rows, s.from, s.to);
         const unit = rows.find((r) => "unit" in r.result)?.result;
-        setEverywhere({ rows, label: describeQuantity(q), target: tgt.shown, first: first?.row.id ?? null, unit: unit && "unit" in unit && unit.unit ? ` ${prettyUnit(unit.unit)}` : "" });
+        setEverywhere({ rows, label: describeQuantity(q), target: tgt.shown, first: first?.row.id ?? null, unit: unit && "unit" in unit && unit.unit ? ` ${prettyUnit(unit.unit)}` : "", from: s.from, to: s.to });
       })
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -203,11 +208,12 @@ export function SweepPanel() {
   const findLimit = () => {
     const inputs = limitInputs();
     if (!inputs) return;
-    const { s, q, tgt } = inputs;
-    const job = runner.current!.run({ kind: "limit", text: JSON.stringify(sketch), spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, combinationId: s.combinationId, quantity: q, target: tgt.si } });
+    const { s, q, tgt, text, id } = inputs;
+    const job = runner.current!.run({ kind: "limit", text, spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, combinationId: s.combinationId, quantity: q, target: tgt.si } });
     setSearching(() => job.cancel);
     job.promise
       .then((result) => {
+        if (ranId.current !== id) return;
         const label = describeQuantity(q);
         const shownUnit = displayUnit(q.component, units, scaleFor(q.component));
         const inShown = (si: number) => `${formatNumber(toDisplay(si, q.component, units, scaleFor(q.component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
@@ -401,9 +407,9 @@ export function SweepPanel() {
               <span className={LABEL}>reach</span>
               <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
               <span className={`${LABEL} whitespace-nowrap`}>{targetUnit}?</span>
-              <button type="button" className={BUTTON} onClick={findLimit} disabled={!!searching}>Find</button>
+              <button type="button" className={BUTTON} onClick={findLimit} disabled={!!searching || progress !== null}>Find</button>
               {(sketch.cases?.length ?? 0) + (sketch.combinations?.length ?? 0) > 0 && (
-                <button type="button" className={BUTTON} onClick={findEverywhere} disabled={!!searching} title="The same search in each case (but those only in combinations) and each combination: under which does it happen first?">
+                <button type="button" className={BUTTON} onClick={findEverywhere} disabled={!!searching || progress !== null} title="The same search in each case (but those only in combinations) and each combination: under which does it happen first?">
                   In every case
                 </button>
               )}
@@ -445,7 +451,7 @@ export function SweepPanel() {
                           {"error" in r.result
                             ? `not solved: ${r.result.error}`
                             : r.result.found
-                              ? `${dLabel} = ${formatNumber(r.result.value, 5)}${everywhere.unit}${r.id === everywhere.first ? " — first" : ""}`
+                              ? `${dLabel} = ${formatNumber(reachedAt(r.result, everywhere.from, everywhere.to)!, 5)}${everywhere.unit}${r.id === everywhere.first ? " — first" : ""}`
                               : "no crossing in this range"}
                         </td>
                       </tr>

@@ -2,7 +2,8 @@
 // factors) or combination (its factored load set), one chart per unit (forces, moments, ratios) so
 // a moment is never drawn on a force axis, and the crossings of its margins found by the limit
 // finder (which a version's page lists under its own plot too).
-import { firstReached, runLimitEverywhere } from "@/canvas/studies/run";
+import { runLimitEverywhere } from "@/canvas/studies/run";
+import { firstReached, reachedAt } from "@/solver/studySweep";
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import { findLimitWith } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
@@ -65,7 +66,7 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
       const f = r.result;
       if ("error" in f) return `${r.name} not solved`;
       if (!f.found) return `${r.name} none in the range`;
-      return `${r.name} ${formatNumber(f.value, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row ? " (first)" : ""}`;
+      return `${r.name} ${formatNumber(reachedAt(f, sw.from, sw.to)!, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row ? " (first)" : ""}`;
     });
     return [`${q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
   });

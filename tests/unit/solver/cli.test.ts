@@ -104,5 +104,9 @@ describe("npm run solve -- --cases and --limit", () => {
     expect(bad("--limit", "T=0..3", "--quantity", "rear.margin", "--target", "3 kg")).toMatchObject({ path: "--target" });
     expect(bad("--limit", "T=0..3", "--quantity", "rear.margin", "--combination", "none")).toEqual({ path: "", message: 'combination: there is no combination "none"' });
     expect(bad("--frobnicate").message).toMatch(/^unknown option --frobnicate; usage:/);
+    // a parameter no case has is an error in every case at once, not a success with nothing found
+    const every = solveCli("--limit", "Q=0..3", "--quantity", "rear.margin", "--every-case", fixture);
+    expect(every.status).toBe(1);
+    expect(JSON.parse(every.stdout).errors[0].message).toMatch(/^the sketch has no parameter "Q"/);
   }, 60000);
 });

@@ -2,6 +2,7 @@
 // set solved once (never the cases' results added), with the swept value in every case.
 import { describe, expect, it } from "vitest";
 import { runLimit, runLimitEverywhere, runSweep } from "@/canvas/studies/run";
+import { firstReached, reachedAt, type LimitEverywhere } from "@/solver/studySweep";
 import { sweepCharts } from "@/lib/calcsheet/sweeps";
 import { FLOW_FACTOR, parseSketch, solveCases, type SketchFileInput } from "@/solver";
 import { findLimitWith } from "@/solver/limit";
@@ -109,15 +110,22 @@ describe("a sweep on a combination", () => {
     expectRel(point.result.reactions.rear.n!, (0.9 * W * d - 1.3 * h * 3 * V) / 2, 1e-9);
   });
 
-  it("takes the swept values in the unit the combination's first case writes the parameter in", () => {
+  it("takes the swept values in the unit the sketch as drawn writes the parameter in, whatever unit a case writes its own in", () => {
     const doc = cart();
     doc.cases![0] = { id: "dead", name: "Dead", factors: { flow: 0 }, parameters: { mj: "14400 kg/hr" } };
+    doc.cases!.push({ id: "hourly", name: "Hourly", parameters: { mj: "7200 kg/hr" } });
     const file = fileOf(doc);
     const sweeper = sweeperOn(file, { combination: "uplift" }, "mj");
-    expect(sweeper.unit).toBe("kg / hr");
-    const [point] = sweepWith(sweeper, [10800]).points; // 10800 kg/hr = 3 kg/s
+    expect(sweeper.unit).toBe("kg / s");
+    const [point] = sweepWith(sweeper, [3]).points; // 3 kg/s, as the sketch writes mj
     if (!point.ok) throw new Error();
     expectRel(point.result.reactions.rear.n!, (0.9 * W * d - 1.3 * h * 3 * V) / 2, 1e-9);
+    // a case sweep too: 3 is 3 kg/s, not 3 kg/hr
+    const onCase = sweeperOn(file, { case: "hourly" }, "mj");
+    expect(onCase.unit).toBe("kg / s");
+    const [p2] = sweepWith(onCase, [3]).points;
+    if (!p2.ok) throw new Error();
+    expectRel(p2.result.reactions.rear.n!, (W * d - h * 3 * V) / 2, 1e-9);
   });
 
   it("leaves the sketch as it found it: a second search gives the same answer", () => {
@@ -190,5 +198,22 @@ describe("the limit in every case and combination", () => {
     const r = drawn[0].result;
     if (!("found" in r) || !r.found) throw new Error("expected a crossing");
     expectRel(r.value, (W * d) / (h * V), 1e-8);
+  });
+
+  it("a range searched downwards meets each run's highest crossing first", () => {
+    // run a crosses at 22 and 40, run b at 30: going down from 45, a gets there first (at 40)
+    const found = (crossings: number[]): LimitEverywhere["result"] => ({ found: true, value: crossings[0], unit: "", crossings, iterations: 1 });
+    const rows: LimitEverywhere[] = [
+      { id: "a", name: "A", kind: "case", result: found([22, 40]) },
+      { id: "b", name: "B", kind: "case", result: found([30]) },
+      { id: "c", name: "C", kind: "case", result: { error: "does not read" } },
+    ];
+    expect(firstReached(rows, 45, 20)).toEqual({ row: rows[0], value: 40 });
+    expect(firstReached(rows, 20, 45)).toEqual({ row: rows[0], value: 22 });
+    expect(reachedAt(rows[0].result, 45, 20)).toBe(40);
+    expect(reachedAt(rows[2].result, 45, 20)).toBeUndefined();
+    const later: LimitEverywhere[] = [rows[1], { id: "d", name: "D", kind: "case", result: found([26]) }];
+    expect(firstReached(later, 20, 45)!.row.id).toBe("d");
+    expect(firstReached(later, 45, 20)!.row.id).toBe("b");
   });
 });
