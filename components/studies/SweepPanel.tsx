@@ -306,7 +306,7 @@ export function SweepPanel() {
             <select className={INPUT} value={on} onChange={(e) => setOn(e.target.value)} aria-label={sketch.combinations?.length ? "Case or combination to sweep" : "Case to sweep"}>
               <option value="">As drawn</option>
               <optgroup label="Cases">
-                {sketch.cases!.map((c) => <option key={c.id} value={`case:${c.id}`}>{c.name}</option>)}
+                {sketch.cases!.map((c) => <option key={c.id} value={`case:${c.id}`}>{c.name}{c.onlyInCombinations ? " (a load case)" : ""}</option>)}
               </optgroup>
               {(sketch.combinations?.length ?? 0) > 0 && (
                 <optgroup label="Combinations (factored load sets)">
