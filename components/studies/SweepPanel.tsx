@@ -261,6 +261,13 @@ export function SweepPanel() {
     return v && !("error" in v) && v.unit ? ` ${prettyUnit(v.unit)}` : "";
   };
   const onWords = (k: SweepFile) => onLabel(k.case, k.combination);
+  /** what a kept sweep names that the sketch no longer has */
+  const keptProblem = (k: SweepFile): string | null => {
+    if (k.case && !sketch.cases?.some((c) => c.id === k.case)) return `its case "${k.case}" is gone`;
+    if (k.combination && !sketch.combinations?.some((c) => c.id === k.combination)) return `its combination "${k.combination}" is gone`;
+    if (k.parameter !== FLOW_FACTOR && !(k.parameter in (sketch.parameters ?? {}))) return `the sketch has no parameter "${k.parameter}" any more`;
+    return null;
+  };
 
   const caseOverride = caseId ? sketch.cases?.find((c) => c.id === caseId)?.parameters?.[parameter] : undefined;
   const combination = combinationId ? sketch.combinations?.find((k) => k.id === combinationId) : undefined;
@@ -360,6 +367,7 @@ export function SweepPanel() {
                 <li key={k.id} className="flex items-start gap-1.5">
                   <span className="min-w-0 flex-1 text-ink-soft">
                     {k.parameter === FLOW_FACTOR ? "flow factor" : k.parameter} from {formatNumber(k.from, 6)} to {formatNumber(k.to, 6)}{unitWords(k.parameter)}, {k.points} points — {onWords(k)}
+                    {keptProblem(k) && <span className="block text-caution" data-testid="kept-sweep-problem">{keptProblem(k)}: the calc sheet cannot plot it. Open it, pick another, and keep it again.</span>}
                   </span>
                   <button type="button" className="text-[11.5px] text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink" onClick={() => open(k)} aria-label={`Open the kept sweep ${k.id}`}>
                     Open

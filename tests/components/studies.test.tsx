@@ -432,6 +432,26 @@ describe("sweeps kept on the calc sheet", () => {
   });
 });
 
+describe("a kept sweep that names what is gone", () => {
+  it("says so in the list, where it can be put right", async () => {
+    const user = userEvent.setup();
+    const file = trailerWithLoadCases();
+    file.sweeps = [
+      { id: "s1", parameter: "theta", from: 0, to: 60, points: 11, case: "gone" },
+      { id: "s2", parameter: "zz", from: 0, to: 1, points: 11 },
+      { id: "s3", parameter: "theta", from: 0, to: 60, points: 11, combination: "k" },
+    ];
+    mount(file);
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    const items = within(screen.getByTestId("kept-sweeps")).getAllByRole("listitem");
+    expect(items.map((li) => within(li).queryByTestId("kept-sweep-problem")?.textContent ?? null)).toEqual([
+      'its case "gone" is gone: the calc sheet cannot plot it. Open it, pick another, and keep it again.',
+      'the sketch has no parameter "zz" any more: the calc sheet cannot plot it. Open it, pick another, and keep it again.',
+      null,
+    ]);
+  });
+});
+
 describe("load groups in the properties", () => {
   it("puts a load into a group that a case's factor then scales", async () => {
     const { renderEditor, storedSketch } = await import("./editor-helpers");
