@@ -451,10 +451,19 @@ export function SweepPanel() {
                     : `The ${everywhere.label} reaches ${everywhere.target} in none of them in this range.`}
                 </p>
                 <table className="mt-0.5 text-[12px]">
+                  <caption className="sr-only">
+                    Where the {everywhere.label} reaches {everywhere.target}, in each case and combination
+                  </caption>
+                  <thead className="sr-only">
+                    <tr>
+                      <th scope="col">Case or combination</th>
+                      <th scope="col">Reached at</th>
+                    </tr>
+                  </thead>
                   <tbody>
                     {everywhere.rows.map((r) => (
                       <tr key={`${r.kind}:${r.id}`} className={r.id === everywhere.first ? "font-semibold" : ""}>
-                        <td className="pr-3 text-ink-soft">{r.kind === "combination" ? "Combination" : r.kind === "case" ? "Case" : ""} {r.name}</td>
+                        <th scope="row" className={`pr-3 text-left text-ink-soft ${r.id === everywhere.first ? "font-semibold" : "font-normal"}`}>{r.kind === "combination" ? "Combination" : r.kind === "case" ? "Case" : ""} {r.name}</th>
                         <td className="tabular-nums">
                           {"error" in r.result
                             ? `not solved: ${r.result.error}`

@@ -88,7 +88,7 @@ describe("design studies", () => {
     await page.getByRole("button", { name: "In every case" }).click();
     const every = page.getByTestId("limit-everywhere");
     await every.waitFor();
-    const rows = await every.locator("tr").allTextContents();
+    const rows = await every.locator("tbody tr").allTextContents();
     expect(rows).toHaveLength(2);
     for (const r of rows) expect(r).toMatch(/theta = 18\.1\d+ deg/);
     expect(await every.getByRole("status").textContent()).toBe("The margin at jack reaches 0 kN first in Low forward throw.");
