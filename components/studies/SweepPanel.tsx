@@ -22,6 +22,9 @@ import { invalidStretches } from "./sweepErrors";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, type ParameterValue } from "./sweepRange";
 
 const NO_VALUES: Record<string, ParameterValue> = {};
+
+/** What a sweep is solved from: the sketch but its names, notes and kept sweeps. */
+const physicsOf = (sketch: SketchFile) => JSON.stringify({ ...sketch, title: undefined, description: undefined, sweeps: undefined });
 /** stretches of invalid sweep points listed one by one; more are counted */
 const MAX_STRETCHES = 4;
 
@@ -89,7 +92,10 @@ export function SweepPanel() {
   );
   const [data, setData] = useState<SweepData | null>(null);
   /** what the plot shows was run on, and with which settings: the limit finder searches the same */
-  const [ran, setRan] = useState<{ spec: SweepSpec; on: string; text: string; id: number } | null>(null);
+  const [ran, setRan] = useState<{ spec: SweepSpec; on: string; text: string; id: number; solvedAs: string } | null>(null);
+  // the plot no longer shows the sketch once anything it is solved from has changed
+  const current = useMemo(() => physicsOf(sketch), [sketch]);
+  const stalePlot = ran !== null && ran.solvedAs !== current;
   // which plot a limit search answers: a result that comes back after another plot replaced it is dropped
   const ranId = useRef(0);
   const [runs, setRuns] = useState(0);
@@ -144,13 +150,14 @@ export function SweepPanel() {
     setError(null);
     setProgress(0);
     const text = JSON.stringify(sketch);
+    const solvedAs = physicsOf(sketch);
     const job = runner.current!.run({ kind: "sweep", text, spec: s }, (done, total) => setProgress(done / total));
     setCancel(() => job.cancel);
     job.promise
       .then((d) => {
         setData(d);
         ranId.current += 1;
-        setRan({ spec: s, on: onLabel(s.caseId, s.combinationId), text, id: ranId.current });
+        setRan({ spec: s, on: onLabel(s.caseId, s.combinationId), text, id: ranId.current, solvedAs });
         setRuns((n) => n + 1);
         setLimit(null);
         setEverywhere(null);
@@ -387,6 +394,11 @@ export function SweepPanel() {
           <p className="text-[12.5px] text-ink-faint">Run a sweep to plot each reaction and margin against {pLabel}. Where a margin crosses zero a contact lifts, a tie goes slack or friction is used up: those points are marked.</p>
         ) : (
           <>
+            {stalePlot && (
+              <p className="mb-1 text-[12px] font-medium text-caution" data-testid="sweep-stale">
+                The sketch has changed since this plot was run: run the sweep again to see it as it is now.
+              </p>
+            )}
             <p className="mb-1 text-[11.5px] text-ink-faint" data-testid="sweep-ran-on">
               {dLabel} from {formatNumber(ran?.spec.from ?? 0, 6)} to {formatNumber(ran?.spec.to ?? 0, 6)}
               {data.unit ? ` ${prettyUnit(data.unit)}` : ""}, {data.xs.length} points — {ran?.on}

@@ -433,6 +433,25 @@ describe("sweeps kept on the calc sheet", () => {
   });
 });
 
+describe("a plot the sketch has moved on from", () => {
+  it("says so once a value it is solved from changes, not for a kept sweep or a new title", async () => {
+    const { setParameter, setSketchField } = await import("@/canvas/commands");
+    const user = userEvent.setup();
+    const editor = mount(load("fire-monitor-trailer"));
+    await setUpSweep(user, "theta", ["0", "80", "41"]);
+    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    await screen.findByTestId("crossings");
+    expect(screen.queryByTestId("sweep-stale")).toBeNull();
+    await user.click(screen.getByRole("button", { name: "Keep on the calc sheet" }));
+    act(() => void editor.getState().apply(setSketchField({ field: "title", value: "Trailer, renamed" })));
+    expect(screen.queryByTestId("sweep-stale")).toBeNull();
+    act(() => void editor.getState().apply(setParameter({ name: "Q", expression: "1500 gpm" })));
+    expect(screen.getByTestId("sweep-stale").textContent).toBe("The sketch has changed since this plot was run: run the sweep again to see it as it is now.");
+    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+    await waitFor(() => expect(screen.queryByTestId("sweep-stale")).toBeNull());
+  });
+});
+
 describe("a kept sweep that names what is gone", () => {
   it("says so in the list, where it can be put right", async () => {
     const user = userEvent.setup();
