@@ -221,13 +221,16 @@ export function combinationOverlaps(file: SketchFile, combination: CombinationFi
     return carried.get(c.id)?.has(group) ?? true;
   };
   for (const group of loadGroupsOf(file)) {
-    const terms = combination.terms
-      .map((t) => {
-        const c = file.cases?.find((x) => x.id === t.case);
-        // a group whose loads come to nothing in the case (its ports' flow and pressure set to 0, say) is not in it
-        return { case: t.case, factor: c && !carries(c, group) ? 0 : t.factor * (c?.factors?.[group] ?? 1) };
-      })
+    const byFactors = combination.terms
+      .map((t) => ({ case: t.case, factor: t.factor * (file.cases?.find((x) => x.id === t.case)?.factors?.[group] ?? 1) }))
       .filter((t) => t.factor !== 0);
+    // only a group the factors count twice is looked at closer (which takes building the cases' loads):
+    // a group whose loads come to nothing in a case (its ports' flow and pressure set to 0, say) is not in it
+    if (byFactors.length < 2) continue;
+    const terms = byFactors.filter((t) => {
+      const c = file.cases?.find((x) => x.id === t.case);
+      return !c || carries(c, group);
+    });
     if (terms.length > 1) out.push({ group, terms, total: terms.reduce((a, t) => a + t.factor, 0) });
   }
   return out;

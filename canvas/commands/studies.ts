@@ -1,6 +1,7 @@
 // Editing the studies kept in the sketch file (format version 2): operating cases, combinations,
 // saved sweeps and the required factors of safety.
 import type { SketchFile } from "@/solver/schema";
+import type { Draft } from "immer";
 import { defineCommand, edit } from "./define";
 
 type StudyKey = "cases" | "combinations" | "sweeps" | "stability";
@@ -12,16 +13,18 @@ const WORDS: Record<StudyKey, string> = {
   stability: "the required factors of safety",
 };
 
+/** Put a study list or setting in the draft; an empty list or none leaves the field out. */
+function putStudy(d: Draft<SketchFile>, key: StudyKey, value: SketchFile[StudyKey] | undefined) {
+  const empty = value === undefined || (Array.isArray(value) && value.length === 0);
+  if (empty) delete (d as Record<string, unknown>)[key];
+  else (d as Record<string, unknown>)[key] = value;
+}
+
 export const setStudy = defineCommand<{ key: StudyKey; value: SketchFile[StudyKey] | undefined }>({
   name: "setStudy",
   label: ({ key }) => `Change ${WORDS[key]}`,
   undoable: true,
-  run: (sketch, { key, value }) =>
-    edit(sketch, (d) => {
-      const empty = value === undefined || (Array.isArray(value) && value.length === 0);
-      if (empty) delete (d as Record<string, unknown>)[key];
-      else (d as Record<string, unknown>)[key] = value;
-    }),
+  run: (sketch, { key, value }) => edit(sketch, (d) => putStudy(d, key, value)),
 });
 
 /** What removing a case takes with it: its terms in combinations (a combination left with none
@@ -42,17 +45,14 @@ export const removeCase = defineCommand<{ id: string }>({
   run: (sketch, { id }) => {
     const { combinationsChanged, combinationsRemoved, sweepsRemoved } = caseRemovalEffects(sketch, id);
     return edit(sketch, (d) => {
-      const put = <K extends StudyKey>(key: K, value: SketchFile[K]) => {
-        if (Array.isArray(value) && value.length === 0) delete (d as Record<string, unknown>)[key];
-        else (d as Record<string, unknown>)[key] = value;
-      };
-      put("cases", (sketch.cases ?? []).filter((c) => c.id !== id));
+      putStudy(d, "cases", (sketch.cases ?? []).filter((c) => c.id !== id));
       if (combinationsChanged.length || combinationsRemoved.length)
-        put(
+        putStudy(
+          d,
           "combinations",
           (sketch.combinations ?? []).filter((k) => !combinationsRemoved.includes(k.id)).map((k) => (k.terms.some((t) => t.case === id) ? { ...k, terms: k.terms.filter((t) => t.case !== id) } : k)),
         );
-      if (sweepsRemoved.length) put("sweeps", (sketch.sweeps ?? []).filter((s) => !sweepsRemoved.includes(s.id)));
+      if (sweepsRemoved.length) putStudy(d, "sweeps", (sketch.sweeps ?? []).filter((s) => !sweepsRemoved.includes(s.id)));
     });
   },
 });
@@ -64,11 +64,7 @@ export const removeCombination = defineCommand<{ id: string }>({
   undoable: true,
   run: (sketch, { id }) =>
     edit(sketch, (d) => {
-      const combos = (sketch.combinations ?? []).filter((k) => k.id !== id);
-      if (combos.length) d.combinations = combos;
-      else delete d.combinations;
-      const sweeps = (sketch.sweeps ?? []).filter((s) => s.combination !== id);
-      if (sweeps.length) d.sweeps = sweeps;
-      else delete d.sweeps;
+      putStudy(d, "combinations", (sketch.combinations ?? []).filter((k) => k.id !== id));
+      putStudy(d, "sweeps", (sketch.sweeps ?? []).filter((s) => s.combination !== id));
     }),
 });

@@ -23,8 +23,11 @@ import { defaultSweepParameter, defaultSweepRange, parseRangeValue, type Paramet
 
 const NO_VALUES: Record<string, ParameterValue> = {};
 
-/** What a sweep is solved from: the sketch but its names, notes and kept sweeps. */
-const physicsOf = (sketch: SketchFile) => JSON.stringify({ ...sketch, title: undefined, description: undefined, sweeps: undefined });
+/** Fields of the sketch a sweep is not solved from: its names, notes and kept sweeps. */
+const NOT_SOLVED_FROM = new Set(["title", "description", "sweeps"]);
+/** The sketch has changed in something a sweep is solved from (edits share what they leave alone, so identity tells). */
+const solvedFromChanged = (a: SketchFile, b: SketchFile) =>
+  a !== b && [...new Set([...Object.keys(a), ...Object.keys(b)])].some((k) => !NOT_SOLVED_FROM.has(k) && a[k as keyof SketchFile] !== b[k as keyof SketchFile]);
 /** stretches of invalid sweep points listed one by one; more are counted */
 const MAX_STRETCHES = 4;
 
@@ -92,10 +95,9 @@ export function SweepPanel() {
   );
   const [data, setData] = useState<SweepData | null>(null);
   /** what the plot shows was run on, and with which settings: the limit finder searches the same */
-  const [ran, setRan] = useState<{ spec: SweepSpec; on: string; text: string; id: number; solvedAs: string } | null>(null);
+  const [ran, setRan] = useState<{ spec: SweepSpec; on: string; sketch: SketchFile; text: string; id: number } | null>(null);
   // the plot no longer shows the sketch once anything it is solved from has changed
-  const current = useMemo(() => physicsOf(sketch), [sketch]);
-  const stalePlot = ran !== null && ran.solvedAs !== current;
+  const stalePlot = ran !== null && solvedFromChanged(ran.sketch, sketch);
   // which plot a limit search answers: a result that comes back after another plot replaced it is dropped
   const ranId = useRef(0);
   const [runs, setRuns] = useState(0);
@@ -150,14 +152,14 @@ export function SweepPanel() {
     setError(null);
     setProgress(0);
     const text = JSON.stringify(sketch);
-    const solvedAs = physicsOf(sketch);
+    const asRun = sketch;
     const job = runner.current!.run({ kind: "sweep", text, spec: s }, (done, total) => setProgress(done / total));
     setCancel(() => job.cancel);
     job.promise
       .then((d) => {
         setData(d);
         ranId.current += 1;
-        setRan({ spec: s, on: onLabel(s.caseId, s.combinationId), text, id: ranId.current, solvedAs });
+        setRan({ spec: s, on: onLabel(s.caseId, s.combinationId), sketch: asRun, text, id: ranId.current });
         setRuns((n) => n + 1);
         setLimit(null);
         setEverywhere(null);
@@ -267,7 +269,6 @@ export function SweepPanel() {
     const v = name === FLOW_FACTOR ? undefined : values[name];
     return v && !("error" in v) && v.unit ? ` ${prettyUnit(v.unit)}` : "";
   };
-  const onWords = (k: SweepFile) => onLabel(k.case, k.combination);
   /** what a kept sweep names that the sketch no longer has */
   const keptProblem = (k: SweepFile): string | null => {
     if (k.case && !sketch.cases?.some((c) => c.id === k.case)) return `its case "${k.case}" is gone`;
@@ -373,7 +374,7 @@ export function SweepPanel() {
               {kept.map((k) => (
                 <li key={k.id} className="flex items-start gap-1.5">
                   <span className="min-w-0 flex-1 text-ink-soft">
-                    {k.parameter === FLOW_FACTOR ? "flow factor" : k.parameter} from {formatNumber(k.from, 6)} to {formatNumber(k.to, 6)}{unitWords(k.parameter)}, {k.points} points — {onWords(k)}
+                    {k.parameter === FLOW_FACTOR ? "flow factor" : k.parameter} from {formatNumber(k.from, 6)} to {formatNumber(k.to, 6)}{unitWords(k.parameter)}, {k.points} points — {onLabel(k.case, k.combination)}
                     {keptProblem(k) && <span className="block text-caution" data-testid="kept-sweep-problem">{keptProblem(k)}: the calc sheet cannot plot it. Open it, pick another, and keep it again.</span>}
                   </span>
                   <button type="button" className="text-[11.5px] text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink" onClick={() => open(k)} aria-label={`Open the kept sweep ${k.id}`}>

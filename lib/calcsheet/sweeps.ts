@@ -2,8 +2,7 @@
 // factors) or combination (its factored load set), one chart per unit (forces, moments, ratios) so
 // a moment is never drawn on a force axis, and the crossings of its margins found by the limit
 // finder (which a version's page lists under its own plot too).
-import { runLimitEverywhere } from "@/canvas/studies/run";
-import { firstReached, reachedAt } from "@/solver/studySweep";
+import { firstReached, limitEverywhere, reachedAt } from "@/solver/studySweep";
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import { findLimitWith } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
@@ -57,7 +56,7 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
   const runs = (file.cases ?? []).filter((c) => !c.onlyInCombinations).length + (file.combinations ?? []).length;
   if (runs < 2) return [];
   return quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
-    const all = runLimitEverywhere(file, { parameter: sw.parameter, from: sw.from, to: sw.to, quantity: q, target: 0 });
+    const all = limitEverywhere(file, sw.parameter, [sw.from, sw.to], q);
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
     const first = firstReached(all, sw.from, sw.to);
     // a margin that reaches zero in no run says nothing here
