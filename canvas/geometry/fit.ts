@@ -32,9 +32,12 @@ export function fitScenes(drawn: Drawn[], width: number, height: number, opts: {
   const guess = { top: 100 * k, right: 160 * k, bottom: 165 * k, left: 160 * k };
   let view = fitView(box, width, height, guess);
   if (!Number.isFinite(box.minX)) return view;
-  // then measure what is drawn at that scale beyond the geometry, and fit again (twice: the
-  // margins hardly change with the scale, as arrows and labels keep their size on screen)
-  for (let i = 0; i < 2; i++) {
+  // then measure what is drawn at that scale beyond the geometry, and fit again; the margins hardly
+  // change with the scale (arrows and labels keep their size on screen), but a crowded label may
+  // take another place at the new one: measure again, keeping the larger margins, until what is
+  // drawn fits in them (a few rounds at most)
+  let used: { left: number; right: number; top: number; bottom: number } | null = null;
+  for (let i = 0; i < 5; i++) {
     const s = view.scale;
     const m = { left: 0, right: 0, top: 0, bottom: 0 };
     for (const d of drawn) {
@@ -49,6 +52,10 @@ export function fitScenes(drawn: Drawn[], width: number, height: number, opts: {
     const margins = { left: m.left + GAP, right: m.right + GAP, top: m.top + GAP + (opts.top ?? 0), bottom: m.bottom + GAP };
     // without a result yet, the reactions' arrows are not measured: keep the first guess's room for them
     if (drawn.some((d) => !d.result)) for (const side of ["left", "right", "top", "bottom"] as const) margins[side] = Math.max(margins[side], guess[side]);
+    const sides = ["left", "right", "top", "bottom"] as const;
+    if (used && i >= 2 && sides.every((k) => margins[k] <= used![k] + 0.5)) break;
+    if (used && i >= 1) for (const k of sides) margins[k] = Math.max(margins[k], used[k]);
+    used = margins;
     view = fitView(box, width, height, margins);
   }
   return view;

@@ -19,6 +19,8 @@ const STROKE_COST = 20;
 const ON_LABEL_COST = 1e6;
 /** A label moved at least this far clear of its own place gets a leader line. */
 const LEADER_GAP = 4;
+/** …or moved even a little, and now this far from the nearest point of what it labels. */
+const LEADER_FAR = 16;
 
 export function textBox(p: TextPrim): Box {
   const b = textExtent(p);
@@ -141,8 +143,9 @@ class Strokes {
     return this;
   }
 
-  /** How many strokes cross the box, leaving out those of owners from `lo` up to `hi`. */
-  count(b: Box, lo: number, hi: number): number {
+  /** How many strokes cross the box, leaving out those of owners from `lo` up to `hi` (or, with
+   *  `only`, counting only theirs). */
+  count(b: Box, lo: number, hi: number, only = false): number {
     const stamp = ++this.stamp;
     let n = 0;
     for (let x = Math.floor(b.x0 / CELL); x <= Math.floor(b.x1 / CELL); x++)
@@ -151,7 +154,7 @@ class Strokes {
           if (this.seen[k] === stamp) continue;
           this.seen[k] = stamp;
           const o = this.owners[k];
-          if (o >= lo && o < hi) continue;
+          if ((o >= lo && o < hi) !== only) continue;
           if (segmentHits(this.segs[k][0], this.segs[k][1], b)) n++;
         }
       }
@@ -161,13 +164,16 @@ class Strokes {
 
 type Own = { strokes: Strokes; lo: number; hi: number };
 
-function cost(b: Box, placed: readonly Box[], own: Own): number {
+/** What a place costs; `moved`: away from the label's own place, where its own symbol's strokes
+ *  count too (at its own place it may touch them; moved, it must not cover them). */
+function cost(b: Box, placed: readonly Box[], own: Own, moved: boolean): number {
   let c = 0;
   for (const q of placed) {
     const a = overlapArea(b, q);
     if (a > 0) c += ON_LABEL_COST + a;
   }
-  return c + STROKE_COST * own.strokes.count(b, own.lo, own.hi);
+  const others = own.strokes.count(b, own.lo, own.hi);
+  return c + STROKE_COST * (moved ? others + own.strokes.count(b, own.lo, own.hi, true) : others);
 }
 
 /** The cheapest offset for a label whose own place is `box`; the earliest wins a tie. */
@@ -175,7 +181,7 @@ function bestOffset(box: Box, placed: readonly Box[], own: Own): Pt {
   let best: Pt = [0, 0];
   let bestCost = Infinity;
   for (const o of offsets(box)) {
-    const c = cost(moveBox(box, o[0], o[1]), placed, own) + Math.hypot(o[0], o[1]);
+    const c = cost(moveBox(box, o[0], o[1]), placed, own, o[0] !== 0 || o[1] !== 0) + Math.hypot(o[0], o[1]);
     if (c < bestCost) {
       best = o;
       bestCost = c;
@@ -206,10 +212,12 @@ function leader(from: Box, to: Box, own: readonly Pt[], color: string): Prim | n
     const c = clampTo(q, to);
     return Math.hypot(c[0] - q[0], c[1] - q[1]);
   };
-  if (gap(back) < LEADER_GAP) return null;
   // from what it labels when that has shapes (a point of its old place would be empty paper)
   let a = own.length ? own[0] : back;
   for (const q of own) if (gap(q) < gap(a)) a = q;
+  // next to its old place, a label is still read with its symbol, unless it has moved off it (a
+  // moment's label taken round past the arrow of the force beside it)
+  if (gap(back) < LEADER_GAP && (!own.length || gap(a) < LEADER_FAR)) return null;
   const b = clampTo(a, to);
   if (Math.hypot(b[0] - a[0], b[1] - a[1]) < LEADER_GAP) return null;
   return { t: "poly", pts: [a, b], stroke: color, width: 0.75, opacity: 0.8 };

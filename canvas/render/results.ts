@@ -70,6 +70,8 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     const angle = (item as { angle?: number }).angle;
     const [fx, fy] = impossible && r.n !== undefined && angle !== undefined && Number.isFinite(angle) ? [r.n * Math.cos((angle * Math.PI) / 180), r.n * Math.sin((angle * Math.PI) / 180)] : [r.fx, r.fy];
     const R = Math.hypot(fx, fy);
+    // the moment's label goes to the corner of its arrow away from the force's arrow
+    let corner: Pt = [1, 1];
     if (R > 1e-9 * Math.max(maxR, 1)) {
       const u = unit([fx, -fy]);
       const g = dir(groundSideOf(item, bodyOf(item.body)));
@@ -93,6 +95,10 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
         to = add(from, mul(u, L));
       }
       prims.push(...doubleArrow(from, to, color, 1.5, 11, dash));
+      const mid = unit(sub(mul(add(from, to), 0.5), at));
+      const corners: Pt[] = [[1, 1], [-1, 1], [1, -1], [-1, -1]];
+      // the first corner (below right) unless the force's arrow leaves that way
+      if (mid[0] + mid[1] > 0.5) corner = corners.reduce((a, b) => (b[0] * mid[0] + b[1] * mid[1] < a[0] * mid[0] + a[1] * mid[1] - 1e-9 ? b : a));
       const words = impossible ? `would have to ${item.kind === "tie" ? "push" : "pull"} ${fq(Math.abs(r.n ?? R), "force", o.units)}` : fq(R, "force", o.units);
       const tail = push || item.kind === "tie" ? from : to;
       const away = push ? mul(u, -1) : u;
@@ -100,7 +106,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     }
     if (Math.abs(r.m) > 1e-9 * Math.max(maxR, 1)) {
       prims.push(...curvedArrow(at, 24, r.m > 0, REACTION, 1.5, true));
-      prims.push(...labelAt(add(at, [20, 24]), [1, 1], [fq(Math.abs(r.m), "moment", o.units) + (r.m > 0 ? " ↺" : " ↻")], REACTION, 11.5, { weight: 600 }));
+      prims.push(...labelAt(add(at, [20 * corner[0], 24 * corner[1]]), corner, [fq(Math.abs(r.m), "moment", o.units) + (r.m > 0 ? " ↺" : " ↻")], REACTION, 11.5, { weight: 600 }));
     }
   }
 

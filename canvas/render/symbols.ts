@@ -296,14 +296,15 @@ export function bodyPrims(b: SceneBody, o: SymbolOptions & { gravityOn?: boolean
     if (two?.clear) {
       out.push(text(two.at, name, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
       out.push(text([two.at[0], two.at[1] + 13], mass, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
-    } else out.push(text(at.at, words, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
+    } else out.push(text(at.at, words, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: at.outside === true }));
   }
   return out;
 }
 
 /** A corner inside the outline where the body's name fits (top corners first), off `avoid` when
- *  one can be (the centre of gravity and the weight), else the first that fits. */
-function bodyLabelPoint(pts: Pt[], width: number, avoid: { x0: number; y0: number; x1: number; y1: number } | null = null, extra = 0): { at: Pt; clear: boolean } {
+ *  one can be (the centre of gravity and the weight), else the first that fits; beside the body
+ *  when it fits nowhere inside. */
+function bodyLabelPoint(pts: Pt[], width: number, avoid: { x0: number; y0: number; x1: number; y1: number } | null = null, extra = 0): { at: Pt; clear: boolean; outside?: boolean } {
   const poly = pts.map((p) => [p[0], -p[1]] as Vec2);
   const inside = (p: Pt) => pointInPolygon([p[0], -p[1]], poly);
   const order = [...pts].sort((a, b) => a[0] + a[1] - (b[0] + b[1]) || a[1] - b[1]);
@@ -313,7 +314,12 @@ function bodyLabelPoint(pts: Pt[], width: number, avoid: { x0: number; y0: numbe
     .filter((at) => inside(at) && inside([at[0] + width, at[1]]) && inside([at[0], at[1] - 6]) && inside([at[0] + width, at[1] + 6 + extra]) && inside([at[0], at[1] + 6 + extra]));
   const clear = (at: Pt) => !avoid || at[0] + width < avoid.x0 || at[0] > avoid.x1 || at[1] + 7 + extra < avoid.y0 || at[1] - 7 > avoid.y1;
   const best = fits.find(clear);
-  return best ? { at: best, clear: true } : { at: fits[0] ?? [order[0][0] + 7, order[0][1] + 13], clear: !avoid };
+  if (best) return { at: best, clear: true };
+  if (fits.length) return { at: fits[0], clear: !avoid };
+  // too narrow for its name anywhere inside (a stack, a strut): beside its top right corner, outside
+  const right = Math.max(...pts.map((p) => p[0]));
+  const top = Math.min(...pts.filter((p) => p[0] >= right - 1).map((p) => p[1]));
+  return { at: [right + 6, top + 8], clear: true, outside: true };
 }
 
 /** The centre of gravity: a small quartered circle, around (0, 0). */

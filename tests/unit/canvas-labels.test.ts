@@ -114,6 +114,23 @@ describe("label placement", () => {
     expect(moved).toHaveLength(name.length + 1);
     expect(leader.t === "poly" && leader.pts[0][0]).toBe(10);
   });
+
+  it("puts a body's name beside it when the body is too narrow for it anywhere inside", async () => {
+    const { bodyPrims } = await import("@/canvas/render/symbols");
+    const body = (outline: [number, number][]) => ({ id: "stack", label: "Stack on skid", mass: 900, outline, cg: [0.3, 4] as [number, number] }) as unknown as Parameters<typeof bodyPrims>[0];
+    const nameOf = (prims: Prim[]) => textsOf(prims).find((t) => t.text.startsWith("Stack on skid"))!;
+    // 0.6 m wide at 30 px/m: 18 px, far less than the name
+    const narrow = nameOf(bodyPrims(body([[0, 0], [0.6, 0], [0.6, 8], [0, 8]]), { units: "SI", scale: 30 }));
+    const box = textBox(narrow);
+    expect(box.x0).toBeGreaterThanOrEqual(0.6 * 30);
+    expect(narrow.halo).not.toBe(false); // on the paper, not the body's fill: kept readable over lines
+    // a wide body keeps it inside, at its top left corner
+    const wide = nameOf(bodyPrims(body([[0, 0], [8, 0], [8, 2], [0, 2]]), { units: "SI", scale: 30 }));
+    expect(wide.at[0]).toBeGreaterThan(0);
+    expect(wide.at[0]).toBeLessThan(8 * 30);
+    expect(wide.at[1]).toBeGreaterThan(-2 * 30);
+    expect(wide.halo).toBe(false);
+  });
 });
 
 describe("leader lines", () => {
