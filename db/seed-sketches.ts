@@ -1,10 +1,13 @@
 // The demo workspace's sketches: each demo scenario with two or three versions whose messages
-// tell how the design moved. Fixed ids, and a sketch that exists is left alone (idempotent).
+// tell how the design moved. Fixed ids, and a sketch that exists is left alone (idempotent) —
+// unless nobody has touched it and this release seeds it differently (`untouchedAndStale`): then it
+// is seeded afresh, so `npm start` after an update shows the demos the README describes.
 // Invented scenarios for the demo only (the editor's examples and a worked example). Runs under
 // tsx from db/seed.ts (relative imports).
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import { and, eq } from "drizzle-orm";
+import { isDeepStrictEqual } from "node:util";
+import { and, count, eq, inArray } from "drizzle-orm";
 import type { drizzle } from "drizzle-orm/node-postgres";
 import { parseSketch } from "../solver";
 import { summarizeSolve } from "../lib/sketch-document";
@@ -163,12 +166,18 @@ export function demoVersions(s: DemoSketch): Array<{ step: Step; doc: Doc }> {
 
 type PendingEvent = typeof schema.auditEvent.$inferInsert & { at: Date };
 
-export async function seedDemoSketches(db: SeedDb, workspaceId: string): Promise<void> {
+/** Seeds `sketches` (the demo's, unless a test passes others) into the workspace. */
+export async function seedDemoSketches(db: SeedDb, workspaceId: string, sketches: readonly DemoSketch[] = DEMO_SKETCHES): Promise<void> {
   const { sketch, sketchVersion, auditEvent } = schema;
   // audit rows go in last, oldest first, so their ids run in time order as they would in use
   const events: PendingEvent[] = [];
-  for (const s of DEMO_SKETCHES) {
+  for (const s of sketches) {
     const versions = demoVersions(s);
+    if (await untouchedAndStale(db, s, versions)) {
+      // its versions, sign-off and comments go with it; so does its history in the audit log
+      await db.delete(sketch).where(eq(sketch.id, s.id));
+      await db.delete(auditEvent).where(and(eq(auditEvent.targetType, "sketch"), eq(auditEvent.targetId, s.id)));
+    }
     const first = versions[0].step;
     const last = versions[versions.length - 1].step;
     const at = (daysAgo: number) => new Date(Date.now() - daysAgo * 86_400_000);
@@ -219,6 +228,46 @@ export async function seedDemoSketches(db: SeedDb, workspaceId: string): Promise
   }
   events.sort((a, b) => a.at.getTime() - b.at.getTime());
   for (const e of events) await db.insert(auditEvent).values(e);
+}
+
+/**
+ * Whether the demo sketch in the database is as a seed left it and differs from what this one
+ * writes. As a seed left it, judged by what this seed writes: the same versions (number, author
+ * and message each), its details not edited since its last version, no sign-off step or comment
+ * but the seed's own (author, step or words), no forks and no uploads. Differs: the title,
+ * description, tags or any version's document (a changed scenario, or one brought to a newer
+ * format) are not what this seed writes. When in doubt it is touched: someone's work is never
+ * seeded over.
+ */
+export async function untouchedAndStale(db: SeedDb, s: DemoSketch, versions: Array<{ step: Step; doc: Doc }>): Promise<boolean> {
+  const { sketch, sketchVersion, signOff, comment, upload } = schema;
+  const [row] = await db.select().from(sketch).where(eq(sketch.id, s.id));
+  if (!row) return false;
+  const stored = await db.select().from(sketchVersion).where(eq(sketchVersion.sketchId, s.id)).orderBy(sketchVersion.number);
+  const sameVersions =
+    stored.length === versions.length &&
+    row.latestVersion === versions.length &&
+    stored.every((v, i) => v.number === i + 1 && v.authorId === DEMO_AUTHORS[versions[i].step.by] && v.message === versions[i].step.message);
+  if (!sameVersions) return false;
+  // a rename, a new tag or a new description moves updatedAt past the last save
+  if (Math.abs(row.updatedAt.getTime() - stored[stored.length - 1].createdAt.getTime()) > 60_000) return false;
+  const ids = stored.map((v) => v.id);
+  const numberOf = new Map(stored.map((v) => [v.id, v.number]));
+  const steps = await db.select().from(signOff).where(inArray(signOff.versionId, ids));
+  const seededStep = (x: (typeof steps)[number]) =>
+    (s.review ?? []).some((r) => numberOf.get(x.versionId) === r.version && r.step === x.step && DEMO_AUTHORS[r.by] === x.actorId && (r.note ?? "") === x.note);
+  if (!steps.every(seededStep)) return false;
+  const words = (s.comments ?? []).flatMap((c) => [{ by: c.by, body: c.body }, ...(c.replies ?? [])]);
+  const comments = await db.select().from(comment).where(inArray(comment.versionId, ids));
+  if (!comments.every((c) => words.some((w) => DEMO_AUTHORS[w.by] === c.authorId && w.body === c.body))) return false;
+  const [forks] = await db.select({ n: count() }).from(sketch).where(inArray(sketch.forkedFromVersionId, ids));
+  const [uploads] = await db.select({ n: count() }).from(upload).where(eq(upload.sketchId, s.id));
+  if (forks.n > 0 || uploads.n > 0) return false;
+  if (row.title !== s.title || row.description !== s.description || !isDeepStrictEqual(row.tags, s.tags)) return true;
+  return versions.some(({ doc }, i) => {
+    const parsed = parseSketch(doc);
+    return parsed.ok && !isDeepStrictEqual(stored[i].document, JSON.parse(JSON.stringify(parsed.file)));
+  });
 }
 
 /** The demo's sign-off steps and comment threads (written straight to the tables, as the API would). */
