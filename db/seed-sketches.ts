@@ -151,7 +151,8 @@ export const DEMO_SKETCHES: DemoSketch[] = [
 
 /** The documents of a demo sketch's versions, in order (each step edits the one before). */
 export function demoVersions(s: DemoSketch): Array<{ step: Step; doc: Doc }> {
-  const doc = readSketchFile(s.file);
+  // the drawing carries the sketch's name, as one saved from the editor does
+  const doc = { ...readSketchFile(s.file), title: s.title };
   // Steps are cumulative: apply the first step's edit, then each later one on top. A step
   // without an edit is the committed file as it stands, so edits made before it are undone.
   const out: Array<{ step: Step; doc: Doc }> = [];

@@ -136,7 +136,20 @@ export async function saveVersion(sketchId: string, actor: Actor, input: { baseV
         },
         tx,
       );
-      return { ...out.version, message: content.message, status: content.summary.status, largestReaction: content.summary.largestReaction };
+      if (out.renamedFrom !== undefined)
+        await recordAudit(
+          {
+            action: "sketch.rename",
+            actorId: actor.id,
+            actorEmail: actor.email,
+            workspaceId: out.workspaceId,
+            targetType: "sketch",
+            targetId: sketchId,
+            detail: { sketchId, title: out.title, from: out.renamedFrom, changed: ["title"], number: out.version.number },
+          },
+          tx,
+        );
+      return { ...out.version, message: content.message, status: content.summary.status, largestReaction: content.summary.largestReaction, sketchTitle: out.title };
     });
   } catch (err) {
     if (!isUniqueViolation(err)) throw err;
@@ -237,7 +250,8 @@ function forkInTransaction(
     if (refused) throw refused;
     const title = input.title ?? `${source.title} (fork)`.slice(0, 120);
     const made = await insertSketchWithFirstVersion(tx, {
-      document: copy.document,
+      // the drawing carries the fork's name (the editor, the calc sheet and the listings agree)
+      document: { ...copy.document, title },
       formatVersion: version.formatVersion,
       summary: version.summary,
       message: `Forked from “${source.title}” v${number}`,

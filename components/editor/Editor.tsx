@@ -260,6 +260,13 @@ function openExampleOver(store: EditorStore, ex: Example, yours: string) {
   store.getState().notify(`Opened “${ex.title}”. Undo (Ctrl+Z) returns to ${yours}. ${ex.summary}`);
 }
 
+function dropExampleFromAddress() {
+  const url = new URL(window.location.href);
+  if (!url.searchParams.has("example")) return;
+  url.searchParams.delete("example");
+  window.history.replaceState(window.history.state, "", url);
+}
+
 /** `toolbarExtra`: what the page adds at the toolbar's end (the versions work: save, version, history). */
 
 export function Editor({ persistence, example, toolbarExtra }: { persistence: SketchPersistence; example?: string; toolbarExtra?: ReactNode }) {
@@ -289,6 +296,8 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
       store.getState().setReadOnly(Boolean(out.ok && out.sketch && out.readOnly));
       if (!out.ok) store.getState().notify(out.message);
       else if (example && !ex) store.getState().notify(`No example called “${example}”: pick one from “Open an example”.`);
+      // the link has done its work: a reload must open the sketch as it now is, not the example again
+      if (example) dropExampleFromAddress();
       setPhase({ kind: "ready" });
     });
     return () => {

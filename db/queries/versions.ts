@@ -101,7 +101,7 @@ export async function insertVersion(tx: DbOrTx, input: NewVersion & { sketchId: 
 }
 
 export type SaveOutcome =
-  | { ok: true; version: { id: string; number: number; createdAt: Date }; workspaceId: string; title: string }
+  | { ok: true; version: { id: string; number: number; createdAt: Date }; workspaceId: string; title: string; renamedFrom?: string }
   | { ok: false; reason: "conflict"; latest: VersionListItem }
   | { ok: false; reason: "forbidden" };
 
@@ -125,9 +125,21 @@ export async function saveNextVersion(tx: DbOrTx, input: NewVersion & { sketchId
       .where(and(eq(sketchVersion.sketchId, s.id), eq(sketchVersion.number, s.latestVersion)));
     return { ok: false, reason: "conflict", latest: toItem(latest) };
   }
+  // the drawing's title changed in this version (the editor's Title field): the sketch takes it as
+  // its name, so the listings, the version page and the calc sheet call it what the drawing does.
+  // Compared with the base version's, so a rename in the details since is not undone by a save.
+  const [base] = await tx
+    .select({ doc: sketchVersion.document })
+    .from(sketchVersion)
+    .where(and(eq(sketchVersion.sketchId, s.id), eq(sketchVersion.number, input.baseVersion)));
+  const drawn = (input.document.title ?? "").trim().slice(0, 120);
+  const rename = drawn !== "" && drawn !== s.title && drawn !== (base?.doc.title ?? "").trim().slice(0, 120);
   const version = await insertVersion(tx, { ...input, number: s.latestVersion + 1, authorId: input.actorId });
-  await tx.update(sketch).set({ latestVersion: version.number, updatedAt: version.createdAt, updatedBy: input.actorId }).where(eq(sketch.id, s.id));
-  return { ok: true, version, workspaceId: s.workspaceId, title: s.title };
+  await tx
+    .update(sketch)
+    .set({ latestVersion: version.number, updatedAt: version.createdAt, updatedBy: input.actorId, ...(rename ? { title: drawn } : {}) })
+    .where(eq(sketch.id, s.id));
+  return rename ? { ok: true, version, workspaceId: s.workspaceId, title: drawn, renamedFrom: s.title } : { ok: true, version, workspaceId: s.workspaceId, title: s.title };
 }
 
 /** A new sketch with its version 1 (the caller checked and locked the role). */

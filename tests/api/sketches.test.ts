@@ -92,11 +92,14 @@ describe("creating and reading a sketch", () => {
     expect(rows.map((r) => [r.action, r.actorId])).toEqual([
       ["sketch.create", eddie.id],
       ["sketch.save", eddie.id],
+      // the drawing's title changed in v2: the sketch took it
+      ["sketch.rename", eddie.id],
       ["sketch.rename", eddie.id],
       ["sketch.delete", olivia.id],
     ]);
     expect(rows[1].detail).toMatchObject({ number: 2, message: "raised the stack" });
-    expect(rows[2].detail).toMatchObject({ title: "Guyed stack", from: "Audited stack" });
+    expect(rows[2].detail).toMatchObject({ title: "Stack, taller", from: "Audited stack", number: 2 });
+    expect(rows[3].detail).toMatchObject({ title: "Guyed stack", from: "Stack, taller" });
     // the versions went with the sketch
     expect(await db.select().from(sketchVersion).where(eq(sketchVersion.sketchId, id))).toEqual([]);
   });
@@ -125,6 +128,24 @@ describe("saving versions", () => {
     ]);
     const ahead = await save(id, 7, fixture("fire-monitor-trailer"));
     expect(ahead.status).toBe(409);
+  });
+
+  it("names the sketch after its drawing when a version changes the drawing's title, and keeps a rename from the details otherwise", async () => {
+    const id = (await create({ title: "Bearer check", document: edited("fire-monitor-trailer", (d) => (d.title = "Bearer check")) })).body.sketch.id;
+    const title = async () => (await call(sketchRoute.GET, { params: { id }, cookie: eddie.cookie })).body.sketch.title;
+    // the Title field changed in the editor: listings, the version page and the calc sheet follow
+    const v2 = await save(id, 1, edited("fire-monitor-trailer", (d) => (d.title = "Trailer on the quay")), eddie, "retitled");
+    expect(v2.body.version.sketchTitle).toBe("Trailer on the quay");
+    expect(await title()).toBe("Trailer on the quay");
+    // renamed in the details since; a save that leaves the drawing's title as v2 had it keeps that name
+    expect((await call(sketchRoute.PATCH, { method: "PATCH", params: { id }, cookie: eddie.cookie, body: { title: "Quay trailer, jack check" } })).status).toBe(200);
+    const v3 = await save(id, 2, edited("fire-monitor-trailer", (d) => ((d.title = "Trailer on the quay"), ((d.parameters as Record<string, unknown>).Q = "1500 gpm"))), eddie, "less flow");
+    expect(v3.status).toBe(201);
+    expect(v3.body.version.sketchTitle).toBe("Quay trailer, jack check");
+    expect(await title()).toBe("Quay trailer, jack check");
+    // a blank drawing title names nothing
+    await save(id, 3, edited("fire-monitor-trailer", (d) => (d.title = "  ")), eddie, "blank");
+    expect(await title()).toBe("Quay trailer, jack check");
   });
 
   it("refuses to change a saved version, even from SQL", async () => {
@@ -211,7 +232,7 @@ describe("forks", () => {
       [outsider, "viewer"],
     ]);
     const id = (await create({ title: "Original bend", description: "Riser bend at pier 7", tags: ["pipework", "anchors"], document: fixture("pipe-bend-anchor") })).body.sketch.id;
-    await save(id, 1, edited("pipe-bend-anchor", (d) => (d.title = "bend v2")), eddie, "thicker wall");
+    await save(id, 1, edited("pipe-bend-anchor", (d) => (d.description = "bend v2")), eddie, "thicker wall");
 
     const fork = await call(forkRoute.POST, { method: "POST", params: { id }, cookie: eddie.cookie, body: { workspaceId: sharedWs, version: 1 } });
     expect(fork.status).toBe(201);
@@ -219,7 +240,9 @@ describe("forks", () => {
     expect(fork.body.sketch).toMatchObject({ workspaceId: sharedWs, title: "Original bend (fork)", latestVersion: 1 });
 
     const v1 = await call(versionRoute.GET, { params: { id: forkId, number: "1" }, cookie: eddie.cookie });
-    expect(v1.body.version.document.title).toBe(fixture("pipe-bend-anchor").title);
+    // the drawing carries the fork's name; everything else is the source's v1
+    expect(v1.body.version.document.title).toBe("Original bend (fork)");
+    expect(v1.body.version.document.bodies).toEqual(fixture("pipe-bend-anchor").bodies);
     expect(v1.body.version.message).toBe("Forked from “Original bend” v1");
 
     const seenByEddie = await call(sketchRoute.GET, { params: { id: forkId }, cookie: eddie.cookie });

@@ -60,7 +60,9 @@ describe("ten saves on the same base version at once", () => {
     expect(rows[1].message).toBe(`attempt ${winner}`);
     const [s] = await db.select().from(sketch).where(eq(sketch.id, id));
     expect(s.latestVersion).toBe(2);
-    expect(await counts(id)).toEqual({ versions: 2, audit: 2 });
+    // the winner's drawing title names the sketch: its save and that rename are logged, no more
+    expect(s.title).toBe(`attempt ${winner}`);
+    expect(await counts(id)).toEqual({ versions: 2, audit: 3 });
 
     // the next round goes on from 2 with no gap
     const next = await Promise.all(

@@ -139,6 +139,14 @@ describe("placing elements from the tray and the keyboard", () => {
     // Redo opens the example again
     await page.keyboard.press("Control+Shift+z");
     await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
+
+    // the link has done its work: the address drops it, and a reload opens the sketch kept here
+    // (undone back to mine), not the example over it again
+    expect(new URL(page.url()).searchParams.has("example")).toBe(false);
+    await page.getByTestId("undo").click();
+    await expect.poll(async () => (await storedSketch(page))?.title).toBe(MY_TITLE);
+    await page.reload();
+    await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe(MY_TITLE);
   });
 
   it("a drawing left as fitted is fitted again when the canvas changes size; one the user zoomed stays put", async () => {

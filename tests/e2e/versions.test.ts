@@ -47,7 +47,7 @@ describe("versioned sketches in the browser", () => {
     await page.getByTestId("version-bar").waitFor();
     expect(await page.getByTestId("version-label").textContent()).toBe("v1");
 
-    await retitle(page, "Bend at the hydrotest pressure");
+    await retitle(page, `Bend at hydrotest ${tag}`);
     expect(await page.getByTestId("version-label").textContent()).toContain("unsaved");
     await page.getByTestId("save-version").click();
     await page.getByTestId("save-dialog").getByLabel("What changed").fill("Hydrotest case: 9 bar at the inlet");
@@ -66,11 +66,42 @@ describe("versioned sketches in the browser", () => {
     await shot(page, "versions-04-history");
 
     await page.goto(`${BASE_URL}/workspaces/${ws}`);
-    const row = page.getByTestId(`sketch-row-Bend on anchor ${tag}`);
+    // the drawing's title changed in v2, and the sketch took it as its name
+    const row = page.getByTestId(`sketch-row-Bend at hydrotest ${tag}`);
     await row.waitFor();
     expect(await row.textContent()).toContain("v2");
     expect(await row.textContent()).toContain("holds");
     await shot(page, "versions-05-dashboard");
+  });
+
+  it("unsaved changes survive a reload: kept in the browser, offered back, restored", async () => {
+    const page = await as("editor");
+    await openEditor(page, sketchId);
+    await retitle(page, "Bend, before the reload");
+    expect(await page.getByTestId("version-label").textContent()).toContain("unsaved");
+    // the tab is reloaded (or closed and opened again) before anything is saved
+    page.on("dialog", (d) => void d.accept());
+    await page.waitForTimeout(800);
+    await page.reload();
+    await page.getByTestId("kept-work").waitFor();
+    expect(await page.getByTestId("kept-work").textContent()).toContain("Made on v2");
+    expect(await page.getByTestId("sketch-form").getByLabel("Title").inputValue()).toBe(`Bend at hydrotest ${tag}`);
+    await shot(page, "versions-05b-kept-after-reload");
+    await page.getByRole("link", { name: "Bring them back" }).click();
+    await page.getByTestId("restored-work").waitFor();
+    expect(await page.getByTestId("sketch-form").getByLabel("Title").inputValue()).toBe("Bend, before the reload");
+    // discarded, then a change taken back to the version as saved: nothing is kept, and the
+    // next visit offers nothing
+    await page.goto(`${BASE_URL}/sketches/${sketchId}`);
+    await page.getByTestId("kept-work").getByRole("button", { name: "Discard" }).click();
+    await retitle(page, "Bend, a passing thought");
+    await page.waitForTimeout(800);
+    await retitle(page, `Bend at hydrotest ${tag}`);
+    await page.waitForTimeout(800);
+    await page.reload();
+    await page.getByTestId("version-bar").waitFor();
+    await page.waitForTimeout(600);
+    expect(await page.getByTestId("kept-work").count()).toBe(0);
   });
 
   it("a checker reads the sketch but cannot save a version", async () => {
@@ -108,7 +139,7 @@ describe("versioned sketches in the browser", () => {
     const page = await as("outsider");
     await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
     await page.getByText("No such sketch here").waitFor();
-    expect(await page.content()).not.toContain("Bend on anchor");
+    expect(await page.content()).not.toContain(`hydrotest ${tag}`);
     await page.goto(`${BASE_URL}/sketches/${sketchId}`);
     await page.getByTestId("unavailable-message").waitFor();
     expect(await page.getByTestId("unavailable-message").textContent()).toContain("you are not a member of its workspace");
@@ -141,11 +172,12 @@ describe("versioned sketches in the browser", () => {
     await drafter.waitForURL((u) => /\/sketches\/[0-9a-f-]{36}$/.test(u.pathname) && !u.pathname.endsWith(sketchId));
     await drafter.getByTestId("version-bar").waitFor();
     expect(await drafter.getByTestId("version-label").textContent()).toBe("v2");
-    expect(await drafter.getByTestId("sketch-form").getByLabel("Title").inputValue()).toBe("Bend, drafter's revision");
+    // the drawing takes the name just given to the fork
+    expect(await drafter.getByTestId("sketch-form").getByLabel("Title").inputValue()).toBe(`Drafter's bend ${tag}`);
 
     await drafter.getByRole("link", { name: "History" }).click();
     await drafter.getByTestId("forked-from").waitFor();
-    expect(await drafter.getByTestId("forked-from").textContent()).toContain(`Bend on anchor ${tag} v2`);
+    expect(await drafter.getByTestId("forked-from").textContent()).toContain(`Bend, lead's revision v2`);
     expect(await drafter.getByTestId("version-row-2").textContent()).toContain("Thicker wall at the outlet");
     await shot(drafter, "versions-10-fork-history");
 

@@ -10,7 +10,8 @@ import type { SketchFile } from "@/solver/schema";
 import { Dialog } from "../Dialog";
 
 export type LatestVersion = { number: number; message: string; authorName: string | null; createdAt: string };
-export type SavedVersion = { number: number; createdAt: string };
+/** `sketchTitle`: the sketch's name after the save (it follows the drawing's title when that changed). */
+export type SavedVersion = { number: number; createdAt: string; sketchTitle?: string };
 
 export function saveVersionRequest(sketchId: string, baseVersion: number, message: string, document: SketchFile) {
   return apiFetch<{ version: SavedVersion }>(`/api/sketches/${sketchId}/versions`, { method: "POST", body: { baseVersion, message, document } });
@@ -180,7 +181,8 @@ export function ForkAndSave({
         intro={`The fork starts from v${base}, the version your changes were made on, and your changes become its v2. This sketch stays as it is.`}
         onForked={async (made) => {
           try {
-            const saved = await saveVersionRequest(made.sketch.id, 1, message || "My changes, saved as a fork after a conflict", sketch);
+            // under the name just given to the fork (the drawing's title names the sketch)
+            const saved = await saveVersionRequest(made.sketch.id, 1, message || "My changes, saved as a fork after a conflict", { ...sketch, title: made.sketch.title });
             onDone(made, saved.version);
           } catch (err) {
             setError(`The fork was made, but your changes could not be saved into it: ${err instanceof ApiError ? err.message : "try again"}. They are still in the editor.`);

@@ -12,7 +12,7 @@ import { ApiError } from "@/lib/api-client";
 import { can } from "@/lib/roles";
 import { discardDraft, keepDraft, readDraft, type Draft } from "./drafts";
 import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
-import type { SaveFlow } from "./savedPersistence";
+import { sameDocument, type SaveFlow } from "./savedPersistence";
 import { NarrowLabel } from "@/components/editor/NarrowLabel";
 
 const CHIP = "h-7 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
@@ -39,6 +39,43 @@ function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; lat
   );
 }
 
+/**
+ * Keeps the editor's unsaved changes in this browser as they are made (a moment after the last
+ * one, and as the page is hidden or left), so a reload, a closed tab or a crash loses nothing: the
+ * next visit offers them back (<KeptWork>). Back to the version as saved, there is nothing to
+ * keep. Paused while an earlier visit's kept changes wait for the user's choice (`waiting`), so
+ * they are never written over; only people who may save keep anything.
+ */
+function useKeepUnsaved(flow: SaveFlow, waiting: boolean) {
+  const stores = useStores();
+  const revision = useEditor((s) => s.revision);
+  useEffect(() => {
+    const { info, base } = flow.getState();
+    if (waiting || !info || base === null || !can(info.role, "version.save")) return;
+    const keep = () => {
+      const { info: now, base: on, baseDoc, restored } = flow.getState();
+      if (!now || on === null) return;
+      const e = stores.editor.getState();
+      // mid-drag, what the drag started from
+      const sketch = e.gesture ? e.gesture.origin : e.sketch;
+      if (!restored && baseDoc && sameDocument(sketch, baseDoc)) {
+        if (readDraft(now.sketchId)?.baseVersion === on) discardDraft(now.sketchId);
+        return;
+      }
+      // a draft the save dialogs kept (a conflict, an ended session) keeps its message and what it knew
+      const prior = readDraft(now.sketchId);
+      const same = prior?.baseVersion === on;
+      keepDraft({ sketchId: now.sketchId, baseVersion: on, latestVersion: Math.max(now.latest, same ? prior.latestVersion : 0), message: same ? prior.message : "", sketch });
+    };
+    const timer = setTimeout(keep, 500);
+    window.addEventListener("pagehide", keep);
+    return () => {
+      clearTimeout(timer);
+      window.removeEventListener("pagehide", keep);
+    };
+  }, [flow, stores, revision, waiting]);
+}
+
 function Bar({ flow }: { flow: SaveFlow }) {
   const { info, base, pending, lastSaved, restored, restoredNotice } = useStore(flow);
   const stores = useStores();
@@ -61,6 +98,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
   useEffect(() => {
     flow.setState({ notice: (text) => stores.editor.getState().notify(text) });
   }, [flow, stores]);
+  useKeepUnsaved(flow, !!draft);
   useEffect(() => {
     if (!dirty) return;
     const warn = (e: BeforeUnloadEvent) => {
@@ -83,8 +121,10 @@ function Bar({ flow }: { flow: SaveFlow }) {
     setError(null);
     try {
       const { version } = await saveVersionRequest(info.sketchId, base, message, pending.sketch);
-      flow.setState({ base: version.number, baseDoc: pending.sketch, lastSaved: { number: version.number, at: version.createdAt }, info: { ...info, latest: version.number }, restored: false });
-      if (restored) discardDraft(info.sketchId);
+      flow.setState({ base: version.number, baseDoc: pending.sketch, lastSaved: { number: version.number, at: version.createdAt }, info: { ...info, latest: version.number, title: version.sketchTitle ?? info.title }, restored: false });
+      // saved: the work kept in this browser is in the version now (an older draft the user has
+      // not chosen about yet stays until they do)
+      if (restored || !draft) discardDraft(info.sketchId);
       setClean(stores.editor.getState().revision);
       stores.editor.getState().notify(`Saved as v${version.number}.`);
       settle({ ok: true, version: version.number, savedAt: version.createdAt });

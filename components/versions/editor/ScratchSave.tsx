@@ -31,7 +31,8 @@ function SaveToWorkspace({ onClose }: { onClose: () => void }) {
     mutationFn: () =>
       apiFetch<Created>(`/api/workspaces/${chosen}/sketches`, {
         method: "POST",
-        body: { title: title.trim(), message: message.trim(), document: stores.editor.getState().sketch },
+        // the drawing carries the name given here (the editor, the calc sheet and the listings agree)
+        body: { title: title.trim(), message: message.trim(), document: { ...stores.editor.getState().sketch, title: title.trim() } },
       }),
     onSuccess: (made) => router.push(`/sketches/${made.sketch.id}`),
   });

@@ -41,7 +41,7 @@ export function createSaveFlow(): SaveFlow {
 }
 
 /** The same document, whatever order its keys come in (the database keeps its own) and whatever format version it was saved in. */
-function sameDocument(a: SketchFile, b: SketchFile): boolean {
+export function sameDocument(a: SketchFile, b: SketchFile): boolean {
   return equal(current(a), current(b));
 }
 
