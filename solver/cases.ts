@@ -42,6 +42,9 @@ export interface ExcludedRun {
 
 export interface StudyResult {
   runs: CaseRun[];
+  /** what people call the bodies and supports (their labels, or their ids when they have none):
+   *  the tables and plots name them so, as the drawing and the results panel do */
+  names?: Record<string, string>;
   envelope: Record<string, SupportEnvelope>;
   /** runs (per body) left out of the envelope and the design loads */
   excluded: ExcludedRun[];
@@ -49,6 +52,13 @@ export interface StudyResult {
 }
 
 const AS_DRAWN: CaseFile = { id: "as-drawn", name: "As drawn" };
+
+/** Bodies' and supports' labels by id (the id where the label is blank). */
+export function elementNames(file: SketchFile): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const e of [...file.bodies, ...file.supports]) out[e.id] = e.label?.trim() || e.id;
+  return out;
+}
 
 /** A case's numeric sketch: the file with its parameter overrides, and its scaling. */
 export function caseSketch(file: SketchFile, c: CaseFile) {
@@ -143,7 +153,7 @@ export function solveCases(file: SketchFile, onProgress: (done: number, total: n
     finish(k.id, k.name, "combination", combineModels(parts), warnings, k.stability);
   }
 
-  return { runs, envelope: envelopeOf(runs), excluded: excludedRuns(runs), requirements };
+  return { runs, names: elementNames(file), envelope: envelopeOf(runs), excluded: excludedRuns(runs), requirements };
 }
 
 const componentOf = (r: Reaction, c: Component): number | undefined => (c === "resultant" ? Math.hypot(r.fx, r.fy) : r[c]);

@@ -47,7 +47,8 @@ export function readQuantity(result: SolveResult, q: QuantitySpec): number {
   }
 }
 
-export function describeQuantity(q: QuantitySpec): string {
+/** "margin at front jack": `names` gives the supports' labels (by id); without, the id. */
+export function describeQuantity(q: QuantitySpec, names: Readonly<Record<string, string>> = {}): string {
   const words: Record<QuantityComponent, string> = {
     fx: "x-reaction",
     fy: "y-reaction",
@@ -59,5 +60,5 @@ export function describeQuantity(q: QuantitySpec): string {
     frictionRatio: "friction needed",
     frictionMargin: "friction margin (μ·n − |t|)",
   };
-  return `${words[q.component]} at ${q.support}`;
+  return `${words[q.component]} at ${names[q.support] ?? q.support}`;
 }

@@ -29,6 +29,9 @@ export interface CellMark {
   text: string;
 }
 
+/** What a study's tables call a body or support: its label (the id when it has none). */
+export const nameIn = (study: Pick<StudyResult, "names">, id: string): string => study.names?.[id] ?? id;
+
 /** Below this (N, or N·m) a whole SI table is written in N (N·m) rather than kN (kN·m): a fan cart's 52 N, not 0.052 kN. */
 const SMALL_SI = 999.95;
 /** From this (lbf, or lbf·ft) a whole US table is written in kip (kip·ft), as the canvas's labels are from 10 kip: an anchor's 12.5 kip, not 12,500 lbf. */
@@ -161,7 +164,7 @@ export function excludedWords(study: StudyResult): string[] {
   const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
   return (study.excluded ?? []).map(
     (e) =>
-      `${name(e.case)} — ${e.body} ${e.status === "tips" ? "tips" : "is unrestrained"}: not in the envelope or the design loads; the body is not held in this case (its reactions would need every support to pull).`,
+      `${name(e.case)} — ${nameIn(study, e.body)} ${e.status === "tips" ? "tips" : "is unrestrained"}: not in the envelope or the design loads; the body is not held in this case (its reactions would need every support to pull).`,
   );
 }
 
@@ -208,7 +211,7 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem): Table
       const rowMarks: Record<string, CellMark> = {};
       const words: string[] = [];
       if (excluded.has(`${run.id}/${r.body}`)) {
-        words.push(`not in the envelope: ${r.body} ${status === "tips" ? "tips" : "is unrestrained"}`);
+        words.push(`not in the envelope: ${nameIn(study, r.body)} ${status === "tips" ? "tips" : "is unrestrained"}`);
       } else if (env) {
         if (env.design.case === run.id) words.push("design load");
         const gov: string[] = [];
@@ -225,7 +228,7 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem): Table
       }
       rows.push([
         run.name,
-        id,
+        nameIn(study, id),
         inUnit(r.fx, "force", u),
         inUnit(r.fy, "force", u),
         inUnit(Math.hypot(r.fx, r.fy), "force", u),
@@ -282,7 +285,7 @@ export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
       const gov = env.governing[c];
       // a component that is zero in every case (a frictionless contact's t) has no governing case
       const zero = Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING;
-      rows.push([id, COMPONENT_LABEL[c], unitOf(q, u), inUnit(e.max.value, q, u), name(e.max.case), inUnit(e.min.value, q, u), name(e.min.case), zero ? "none (zero in every case)" : gov ? name(gov) : ""]);
+      rows.push([nameIn(study, id), COMPONENT_LABEL[c], unitOf(q, u), inUnit(e.max.value, q, u), name(e.max.case), inUnit(e.min.value, q, u), name(e.min.case), zero ? "none (zero in every case)" : gov ? name(gov) : ""]);
     }
   }
   return {
@@ -326,7 +329,7 @@ export function designLoadTable(study: StudyResult, system: UnitSystem): Table {
       { key: "case", label: "from case", align: "left" },
     ],
     rows: Object.entries(study.envelope).map(([id, env]) => [
-      id,
+      nameIn(study, id),
       inUnit(env.design.resultant, "force", u),
       Number(env.design.angle.toFixed(2)),
       inUnit(env.design.fx, "force", u),
@@ -351,11 +354,11 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
     if (!run.ok) continue;
     for (const [body, st] of Object.entries(run.stability)) {
       const ot = st.overturning;
-      if ("notApplicable" in ot) rows.push([run.name, body, "overturning", null, null, "", null, null, ot.notApplicable, ""]);
-      else rows.push([run.name, body, "overturning", inUnit(ot.restoring, "moment", u), inUnit(ot.overturning, "moment", u), u.moment, ...verdict(ot), ot.about]);
+      if ("notApplicable" in ot) rows.push([run.name, nameIn(study, body), "overturning", null, null, "", null, null, ot.notApplicable, ""]);
+      else rows.push([run.name, nameIn(study, body), "overturning", inUnit(ot.restoring, "moment", u), inUnit(ot.overturning, "moment", u), u.moment, ...verdict(ot), nameIn(study, ot.about)]);
       const sl = st.sliding;
-      if ("notApplicable" in sl) rows.push([run.name, body, "sliding", null, null, "", null, null, sl.notApplicable, ""]);
-      else rows.push([run.name, body, sl.wholeBody ? "sliding (as a whole: it tips)" : "sliding", inUnit(sl.available, "force", u), inUnit(sl.driving, "force", u), u.force, ...verdict(sl), ""]);
+      if ("notApplicable" in sl) rows.push([run.name, nameIn(study, body), "sliding", null, null, "", null, null, sl.notApplicable, ""]);
+      else rows.push([run.name, nameIn(study, body), sl.wholeBody ? "sliding (as a whole: it tips)" : "sliding", inUnit(sl.available, "force", u), inUnit(sl.driving, "force", u), u.force, ...verdict(sl), ""]);
     }
   }
   return {
@@ -543,11 +546,11 @@ export function caseFindings(study: StudyResult, hasCases: boolean): string[] {
     }
     for (const [body, b] of Object.entries(run.result.bodies)) {
       const bits: string[] = [];
-      if (hasCases && (b.status === "tips" || b.status === "unrestrained")) bits.push(`${body} ${b.status === "tips" ? "tips" : "is unrestrained"}`);
+      if (hasCases && (b.status === "tips" || b.status === "unrestrained")) bits.push(`${nameIn(study, body)} ${b.status === "tips" ? "tips" : "is unrestrained"}`);
       const st = run.stability[body];
       for (const [against, check] of [["overturning", st?.overturning], ["sliding", st?.sliding]] as const) {
         if (!check || "notApplicable" in check || check.pass) continue;
-        const about = "about" in check ? ` about ${check.about}` : "";
+        const about = "about" in check ? ` about ${nameIn(study, check.about)}` : "";
         bits.push(`factor of safety against ${against}${about} ${factorWords(check.factor, check.required)}, below the required ${formatNumber(check.required, 4)}`);
       }
       if (bits.length) out.push(`${hasCases ? `${run.name} — ` : ""}${bits.join("; ")}`);

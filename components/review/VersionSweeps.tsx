@@ -6,6 +6,7 @@ import { useMemo } from "react";
 import { runSweep, type SweepData } from "@/canvas/studies/run";
 import { MAX_POINTS, sweepEverywhere, sweepMarkers, sweepQuantities, type SweepMarker } from "@/lib/calcsheet/sweeps";
 import type { SketchFile, SweepFile } from "@/solver/schema";
+import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { SweepChart } from "@/components/studies/SweepChart";
@@ -51,7 +52,7 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
               </p>
             ) : (
               <>
-                <SweepChart data={p.data} units={units} parameterLabel={name} limit={null} run={0} />
+                <SweepChart data={p.data} units={units} parameterLabel={name} limit={null} run={0} names={elementNames(document)} />
                 <ul className="text-xs text-ink-soft">
                   {p.markers.length ? (
                     p.markers.map((m) => <li key={m.words}>Crossing: {m.words}.</li>)

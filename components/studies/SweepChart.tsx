@@ -29,7 +29,22 @@ export function chartRows(data: SweepData, units: UnitSystem): Array<Record<stri
   });
 }
 
-export function SweepChart({ data, units, parameterLabel, limit, run }: { data: SweepData; units: UnitSystem; parameterLabel: string; limit: { x: number; label: string } | null; run: number }) {
+/** `names`: the supports' labels by id, to name the lines as the drawing names the supports. */
+export function SweepChart({
+  data,
+  units,
+  parameterLabel,
+  limit,
+  run,
+  names,
+}: {
+  data: SweepData;
+  units: UnitSystem;
+  parameterLabel: string;
+  limit: { x: number; label: string } | null;
+  run: number;
+  names?: Readonly<Record<string, string>>;
+}) {
   const rows = chartRows(data, units);
   // forces on the left axis; a moment (or a ratio) on its own axis on the right, in its own unit
   const kinds = [...new Set(data.quantities.map((q) => displayKind(q.component)))];
@@ -71,7 +86,7 @@ export function SweepChart({ data, units, parameterLabel, limit, run }: { data: 
           <Legend wrapperStyle={{ fontSize: 11 }} />
           <ReferenceLine yAxisId="left" y={0} stroke="#5f6974" />
           {data.quantities.map((q, s) => (
-            <Line key={s} yAxisId={axisOf(s)} type="linear" dataKey={`q${s}`} name={`${describeQuantity(q)}${axisOf(s) === "right" && unitOf(s) ? ` (${unitOf(s)}, right)` : ""}`} stroke={COLORS[s % COLORS.length]} strokeDasharray={DASHES[s % DASHES.length]} strokeWidth={1.6} dot={false} isAnimationActive={false} connectNulls={false} />
+            <Line key={s} yAxisId={axisOf(s)} type="linear" dataKey={`q${s}`} name={`${describeQuantity(q, names)}${axisOf(s) === "right" && unitOf(s) ? ` (${unitOf(s)}, right)` : ""}`} stroke={COLORS[s % COLORS.length]} strokeDasharray={DASHES[s % DASHES.length]} strokeWidth={1.6} dot={false} isAnimationActive={false} connectNulls={false} />
           ))}
           {crossingsX.map((c, i) => (
             <ReferenceDot key={i} yAxisId={axisOf(c.quantity)} x={c.x} y={0} r={5} fill="#fbfaf6" stroke={COLORS[c.quantity % COLORS.length]} strokeWidth={2} label={{ value: "✕", position: "top", fontSize: 12, fill: COLORS[c.quantity % COLORS.length] }} />

@@ -5,6 +5,7 @@
 import { useEffect, useMemo, useRef, useState } from "react";
 import type { LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
+import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit } from "@/solver/units";
 import { displayKind, displayUnit, parseTarget, toDisplay } from "@/canvas/studies/display";
@@ -53,7 +54,7 @@ export function SweepPanel() {
   const choices = useMemo(() => {
     const out: Array<{ spec: QuantitySpec; label: string; title: string }> = [];
     const add = (s: SketchFile["supports"][number], component: QuantityComponent) =>
-      out.push({ spec: { support: s.id, component }, label: `${s.id}: ${COMPONENT_WORDS[component]}`, title: `${s.label ? `${s.label} — ` : ""}${COMPONENT_TITLES[component] ?? COMPONENT_WORDS[component]}` });
+      out.push({ spec: { support: s.id, component }, label: `${s.label?.trim() || s.id}: ${COMPONENT_WORDS[component]}`, title: `${s.label ? `${s.label} — ` : ""}${COMPONENT_TITLES[component] ?? COMPONENT_WORDS[component]}` });
     for (const s of sketch.supports) {
       if (s.kind === "contact" || s.kind === "tie") {
         add(s, "margin");
@@ -66,6 +67,8 @@ export function SweepPanel() {
     return out;
   }, [sketch.supports]);
 
+  // the supports as the drawing names them (their labels), for the lines and the sentences
+  const names = useMemo(() => elementNames(sketch), [sketch]);
   const saved = sketch.sweeps?.[0];
   const values = useAnalysis((s) => s.core?.parameterValues) ?? NO_VALUES;
   // the limit's target is typed in the unit of the reactions table (N for a bench rig, kN for a skid)
@@ -208,7 +211,7 @@ export function SweepPanel() {
         if (ranId.current !== id) return;
         const first = firstReached(rows, s.from, s.to);
         const unit = rows.find((r) => "unit" in r.result)?.result;
-        setEverywhere({ rows, label: describeQuantity(q), target: tgt.shown, first: first?.row.id ?? null, unit: unit && "unit" in unit && unit.unit ? ` ${prettyUnit(unit.unit)}` : "", from: s.from, to: s.to });
+        setEverywhere({ rows, label: describeQuantity(q, names), target: tgt.shown, first: first?.row.id ?? null, unit: unit && "unit" in unit && unit.unit ? ` ${prettyUnit(unit.unit)}` : "", from: s.from, to: s.to });
       })
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -223,7 +226,7 @@ export function SweepPanel() {
     job.promise
       .then((result) => {
         if (ranId.current !== id) return;
-        const label = describeQuantity(q);
+        const label = describeQuantity(q, names);
         const shownUnit = displayUnit(q.component, units, scaleFor(q.component));
         const inShown = (si: number) => `${formatNumber(toDisplay(si, q.component, units, scaleFor(q.component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
         const pUnit = result.unit ? ` ${prettyUnit(result.unit)}` : "";
@@ -404,12 +407,12 @@ export function SweepPanel() {
               {dLabel} from {formatNumber(ran?.spec.from ?? 0, 6)} to {formatNumber(ran?.spec.to ?? 0, 6)}
               {data.unit ? ` ${prettyUnit(data.unit)}` : ""}, {data.xs.length} points — {ran?.on}
             </p>
-            <SweepChart data={data} run={runs} units={units} parameterLabel={dLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target}` } : null} />
+            <SweepChart data={data} run={runs} units={units} names={names} parameterLabel={dLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target}` } : null} />
             <ul className="mt-1 space-y-0.5 text-[12px]" data-testid="crossings">
               {data.crossings.length === 0 && <li className="text-ink-faint">No margin crosses zero in this range.</li>}
               {data.crossings.map((c, i) => (
                 <li key={i} className="text-ink-soft">
-                  <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity])} crosses zero between {dLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${prettyUnit(data.unit)}` : ""}
+                  <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity], names)} crosses zero between {dLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${prettyUnit(data.unit)}` : ""}
                 </li>
               ))}
               {invalid.slice(0, MAX_STRETCHES).map((r, i) => (
@@ -423,7 +426,7 @@ export function SweepPanel() {
             <div className="mt-2 flex flex-wrap items-center gap-1.5 border-t border-rule-soft pt-2" role="group" aria-label="Limit finder">
               <span className={`${LABEL} whitespace-nowrap`}>At what {dLabel} does</span>
               <select className={`${INPUT} !w-auto min-w-0`} value={limitQ} onChange={(e) => setLimitQ(Number(e.target.value))} aria-label="Quantity for the limit">
-                {plotted.map((q, i) => <option key={i} value={i}>{describeQuantity(q)}</option>)}
+                {plotted.map((q, i) => <option key={i} value={i}>{describeQuantity(q, names)}</option>)}
               </select>
               <span className={LABEL}>reach</span>
               <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />

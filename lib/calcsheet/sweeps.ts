@@ -7,6 +7,7 @@ import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@
 import { findLimitWith } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
+import { elementNames } from "@/solver/cases";
 import { linspace, sweepWith } from "@/solver/sweep";
 import { sweeperOn } from "@/solver/studySweep";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
@@ -27,7 +28,7 @@ function crossingEvent(q: QuantitySpec, kind: string | undefined): { noun: strin
 
 export interface SweepMarker {
   x: number;
-  /** short, on the chart: "jack: lift-off at 44.44 deg" */
+  /** short, on the chart: "front jack: lift-off at 44.44 deg" (the support by its label) */
   label: string;
   /** the sentence under the chart */
   words: string;
@@ -44,7 +45,8 @@ export function sweepMarkers(file: SketchFile, sw: SweepFile, quantities: Quanti
     if (!lim.found) return [];
     const at = `${formatNumber(lim.value, 4)}${lim.unit ? ` ${prettyUnit(lim.unit)}` : ""}`;
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
-    return [{ x: lim.value, label: `${q.support}: ${event.noun} at ${at}`, words: `${q.support}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at}` }];
+    const name = elementNames(file)[q.support] ?? q.support;
+    return [{ x: lim.value, label: `${name}: ${event.noun} at ${at}`, words: `${name}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at}` }];
   });
 }
 
@@ -67,7 +69,7 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
       if (!f.found) return `${r.name} none in the range`;
       return `${r.name} ${formatNumber(reachedAt(f, sw.from, sw.to)!, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row ? " (first)" : ""}`;
     });
-    return [`${q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
+    return [`${elementNames(file)[q.support] ?? q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
   });
 }
 
@@ -88,7 +90,7 @@ export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, 
       xLabel: `${sw.parameter}${res.unit ? ` (${prettyUnit(res.unit)})` : ""}`,
       yLabel: displayUnit(mine[0].component, units, largest) || "ratio",
       series: mine.map((q) => ({
-        label: describeQuantity(q),
+        label: describeQuantity(q, elementNames(file)),
         markZero: marksZero(q.component),
         points: res.points.map((p) => [p.value, p.ok ? toDisplay(readQuantity(p.result, q), q.component, units, largest) : null] as [number, number | null]),
       })),

@@ -21,7 +21,7 @@ function study(file: unknown) {
 /** The trailer (contacts only) with a long-named case and a support with a long id (demo data). */
 function trailer() {
   const file = load("fire-monitor-trailer");
-  for (const s of file.supports) if (s.id === "leg") s.id = "rearStabiliserLegOnTheOutriggerBeam";
+  for (const s of file.supports) if (s.id === "leg") s.label = s.id = "rearStabiliserLegOnTheOutriggerBeam";
   file.cases = [
     { id: "low", name: "Low throw", parameters: { theta: "15 deg" } },
     { id: "long", name: LONG_CASE, parameters: { theta: "20 deg" } },

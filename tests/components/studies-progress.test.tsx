@@ -95,7 +95,7 @@ describe("Sweep tab: the limit finder beside a running sweep, and Stop while it 
     await waitFor(() => expect(within(finder).getByRole("button", { name: "Find" })).toBeEnabled());
 
     // a limit search running, stopped from beside it
-    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at jack");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at front jack");
     await user.click(screen.getByRole("button", { name: "Find" }));
     expect(within(finder).getByRole("status").textContent).toBe("Searching…");
     expect(within(finder).getByRole("button", { name: "Find" })).toBeDisabled();
@@ -113,7 +113,7 @@ describe("Sweep tab: the limit finder beside a running sweep, and Stop while it 
     fresh.compute();
     await act(async () => fresh.deliver());
     // the jack lifts between theta = 18 and 19 deg (the sweep's marked crossing)
-    expect((await screen.findByTestId("limit-answer")).textContent).toMatch(/^The margin at jack reaches 0 kN at theta = 18\.\d+ deg\.$/);
+    expect((await screen.findByTestId("limit-answer")).textContent).toMatch(/^The margin at front jack reaches 0 kN at theta = 18\.\d+ deg\.$/);
     expect(screen.queryByTestId("limit-stopped")).toBeNull();
   });
 });

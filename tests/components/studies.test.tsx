@@ -131,9 +131,11 @@ describe("Cases tab", () => {
     const expected = [one("15 deg"), one("60 deg")];
     const rows = within(table).getAllByRole("row").slice(1);
     expect(rows).toHaveLength(6);
+    // rows name the supports by their labels
+    const idOf = (label: string) => load("fire-monitor-trailer").supports!.find((s: { id: string; label?: string }) => (s.label || s.id) === label)!.id as string;
     rows.forEach((row, i) => {
       const c = expected[Math.floor(i / 3)];
-      const support = row.querySelector("[data-col=support]")!.textContent!;
+      const support = idOf(row.querySelector("[data-col=support]")!.textContent!);
       const fy = num(row.querySelector("[data-col=fy]")!.textContent!);
       expect(fy).toBeCloseTo(c.reactions[support].fy / 1000, 2);
     });
@@ -143,18 +145,18 @@ describe("Cases tab", () => {
     const study = solveCases(parsedDoc.file);
     const nameOf = (id: string) => study.runs.find((r) => r.id === id)!.name;
     for (const [support, env] of Object.entries(study.envelope)) {
-      const design = rows.filter((r) => r.querySelector("[data-col=support]")!.textContent === support && r.querySelector("[data-col=governs]")!.textContent!.startsWith("design load"));
+      const design = rows.filter((r) => idOf(r.querySelector("[data-col=support]")!.textContent!) === support && r.querySelector("[data-col=governs]")!.textContent!.startsWith("design load"));
       expect(design).toHaveLength(1);
       expect(design[0].querySelector("[data-col=case]")!.textContent).toBe(nameOf(env.design.case));
       // the governing case of Fy is marked in its cell by shape, with words for a screen reader
-      const govFy = rows.find((r) => r.querySelector("[data-col=support]")!.textContent === support && r.querySelector("[data-col=case]")!.textContent === nameOf(env.governing.fy!))!;
+      const govFy = rows.find((r) => idOf(r.querySelector("[data-col=support]")!.textContent!) === support && r.querySelector("[data-col=case]")!.textContent === nameOf(env.governing.fy!))!;
       const mark = within(govFy.querySelector<HTMLElement>("[data-col=fy]")!).getByRole("img");
       expect(mark.textContent).toMatch(/^[▲▼]$/);
       expect(mark.getAttribute("aria-label")).toMatch(/^governing case of Fy: the largest magnitude over the cases \((its maximum|its minimum)\)$/);
     }
     // the envelope names the case of the jack's smallest margin: where it comes closest to lifting
     const envelope = screen.getByTestId("envelope");
-    const jackMargin = within(envelope).getAllByRole("row").find((r) => r.querySelector("[data-col=support]")?.textContent === "jack" && r.querySelector("[data-col=component]")?.textContent === "Margin")!;
+    const jackMargin = within(envelope).getAllByRole("row").find((r) => r.querySelector("[data-col=support]")?.textContent === "front jack" && r.querySelector("[data-col=component]")?.textContent === "Margin")!;
     expect(jackMargin.querySelector("[data-col=minCase]")!.textContent).toBe(nameOf(study.envelope.jack.components.margin!.min.case));
     expect(screen.getByTestId("stability").textContent).toMatch(/overturning/);
     expect(screen.getByTestId("stability").textContent).toMatch(/kN·m/);
@@ -221,7 +223,7 @@ describe("cases in which the body is not held", () => {
     await user.click(screen.getByRole("tab", { name: "Cases" }));
     await user.click(screen.getByRole("button", { name: "Run all cases" }));
     const note = await screen.findByTestId("not-in-envelope");
-    expect(note.textContent).toMatch(/^⚠ Flood flow — trailer tips: not in the envelope or the design loads; the body is not held in this case/);
+    expect(note.textContent).toMatch(/^⚠ Flood flow — Trailer tips: not in the envelope or the design loads; the body is not held in this case/);
     expect(within(screen.getByTestId("envelope")).queryByText("Flood flow")).toBeNull();
   });
 });
@@ -318,11 +320,11 @@ describe("Sweep tab", () => {
     await setUpSweep(user, "theta", ["0", "80", "81"]);
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     const crossings = await screen.findByTestId("crossings");
-    expect(crossings.textContent).toMatch(/margin at jack crosses zero between theta = 18 and 19 deg/);
-    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at jack");
+    expect(crossings.textContent).toMatch(/margin at front jack crosses zero between theta = 18 and 19 deg/);
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at front jack");
     await user.click(screen.getByRole("button", { name: "Find" }));
     const answer = await screen.findByTestId("limit-answer");
-    expect(answer.textContent).toMatch(/^The margin at jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
+    expect(answer.textContent).toMatch(/^The margin at front jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
   });
 });
 
@@ -354,11 +356,11 @@ describe("a sweep on a combination", () => {
     if (!expected.found || !drawn.found) throw new Error("expected crossings");
     expect(Math.abs(expected.value - drawn.value)).toBeGreaterThan(1);
     const lo = Math.floor(expected.value);
-    expect(crossings.textContent).toContain(`margin at jack crosses zero between theta = ${lo} and ${lo + 1} deg`);
+    expect(crossings.textContent).toContain(`margin at front jack crosses zero between theta = ${lo} and ${lo + 1} deg`);
     expect(screen.getByTestId("sweep-ran-on").textContent).toBe("theta from 0 to 80 deg, 81 points — combination Light trailer, strong jet");
     // the form moved back to the sketch as drawn, not run again: the limit finder searches what the plot shows
     await user.selectOptions(on, "As drawn");
-    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at jack");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at front jack");
     await user.click(screen.getByRole("button", { name: "Find" }));
     expect((await screen.findByTestId("limit-answer")).textContent).toContain(`at theta = ${expected.value.toPrecision(5).replace(/0+$/, "")} deg.`);
     await user.selectOptions(on, "Light trailer, strong jet");
@@ -378,7 +380,7 @@ describe("the limit in every case", () => {
     await user.click(screen.getByRole("tab", { name: "Sweep" }));
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     await screen.findByTestId("crossings");
-    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at upwind");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at upwind edge");
     await user.click(screen.getByRole("button", { name: "In every case" }));
     const box = await screen.findByTestId("limit-everywhere");
     // each row against the single search on that run (its closed forms: tests/unit/studies/exhaust-stack-example.test.ts)
@@ -388,7 +390,7 @@ describe("the limit in every case", () => {
       return r.found ? `v = ${formatNumber(r.value, 5)} m/s` : "no crossing in this range";
     };
     const rows = [...box.querySelectorAll("tbody tr")].map((tr) => [...tr.querySelectorAll("th, td")].map((td) => td.textContent));
-    expect(within(box).getByRole("table", { name: "Where the margin at upwind reaches 0 kN, in each case and combination" })).toBeTruthy();
+    expect(within(box).getByRole("table", { name: "Where the margin at upwind edge reaches 0 kN, in each case and combination" })).toBeTruthy();
     expect(rows).toEqual([
       ["Case Engine running, 30 m/s wind", one({ caseId: "running" })],
       ["Case Engine stopped, 30 m/s wind", one({ caseId: "stopped" })],
@@ -397,7 +399,7 @@ describe("the limit in every case", () => {
     ]);
     // the storm case sets v itself, but the sweep's value stands in: it lifts where "stopped" does
     expect(rows[2][1]).toBe(rows[1][1]);
-    expect(within(box).getByRole("status").textContent).toBe("The margin at upwind reaches 0 kN first in Uplift check: 0.9 × weight + 1.5 × wind.");
+    expect(within(box).getByRole("status").textContent).toBe("The margin at upwind edge reaches 0 kN first in Uplift check: 0.9 × weight + 1.5 × wind.");
   });
 });
 

@@ -23,9 +23,9 @@ describe("a version's kept sweeps", () => {
       "v from 20 to 45 m/s — case Engine stopped, 30 m/s wind",
       "v from 20 to 45 m/s — combination Uplift check: 0.9 × weight + 1.5 × wind",
     ]);
-    expect(figures[0].textContent).toContain(`Crossing: upwind: lift-off (its normal force reaches zero) at v = ${vLift.toFixed(2)} m/s.`);
+    expect(figures[0].textContent).toContain(`Crossing: upwind edge: lift-off (its normal force reaches zero) at v = ${vLift.toFixed(2)} m/s.`);
     // factored: 1.5 × the wind against 0.9 × the weight, v = v_lift·√(0.9 / 1.5) (statics, common practice)
-    expect(figures[1].textContent).toContain(`Crossing: upwind: lift-off (its normal force reaches zero) at v = ${(vLift * Math.sqrt(0.6)).toFixed(2)} m/s.`);
+    expect(figures[1].textContent).toContain(`Crossing: upwind edge: lift-off (its normal force reaches zero) at v = ${(vLift * Math.sqrt(0.6)).toFixed(2)} m/s.`);
     expect(within(figures[0]).getByTestId("sweep-chart")).toBeTruthy();
     // and in every case and combination: the factored uplift check gets there first (no line for
     // the downwind friction margin, which reaches zero in none of them)
@@ -33,7 +33,7 @@ describe("a version's kept sweeps", () => {
     const running = runLimit(doc, { parameter: "v", from: 20, to: 45, caseId: "running", quantity: { support: "upwind", component: "margin" }, target: 0 });
     if (!running.found) throw new Error("expected a crossing");
     expect(figures[0].textContent).toContain(
-      `upwind lift-off in each case and combination: Engine running, 30 m/s wind ${v(running.value)}; Engine stopped, 30 m/s wind ${v(vLift)}; Engine stopped, 38 m/s storm ${v(vLift)}; Uplift check: 0.9 × weight + 1.5 × wind ${v(vLift * Math.sqrt(0.6))} (first).`,
+      `upwind edge lift-off in each case and combination: Engine running, 30 m/s wind ${v(running.value)}; Engine stopped, 30 m/s wind ${v(vLift)}; Engine stopped, 38 m/s storm ${v(vLift)}; Uplift check: 0.9 × weight + 1.5 × wind ${v(vLift * Math.sqrt(0.6))} (first).`,
     );
     expect(figures[0].textContent).not.toContain("downwind slip");
   });

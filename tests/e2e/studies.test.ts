@@ -76,13 +76,13 @@ describe("design studies", () => {
     await page.getByRole("button", { name: "Run the sweep" }).click();
     const crossings = page.getByTestId("crossings");
     await crossings.waitFor();
-    expect(await crossings.textContent()).toMatch(/margin at jack crosses zero between theta = 18 and 18\.5 deg/);
+    expect(await crossings.textContent()).toMatch(/margin at front jack crosses zero between theta = 18 and 18\.5 deg/);
     expect(await page.getByTestId("sweep-chart").locator("path.recharts-curve").count()).toBeGreaterThan(0);
-    await page.getByRole("combobox", { name: "Quantity for the limit" }).selectOption({ label: "margin at jack" });
+    await page.getByRole("combobox", { name: "Quantity for the limit" }).selectOption({ label: "margin at front jack" });
     await page.getByRole("button", { name: "Find" }).click();
     const answer = page.getByTestId("limit-answer");
     await answer.waitFor();
-    expect(await answer.textContent()).toMatch(/^The margin at jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
+    expect(await answer.textContent()).toMatch(/^The margin at front jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
     // the same search in every case, in the page's worker: both cases set theta, which the sweep's
     // values stand in for, so both lift where the sketch does; the first of a tie is named
     await page.getByRole("button", { name: "In every case" }).click();
@@ -91,7 +91,7 @@ describe("design studies", () => {
     const rows = await every.locator("tbody tr").allTextContents();
     expect(rows).toHaveLength(2);
     for (const r of rows) expect(r).toMatch(/theta = 18\.1\d+ deg/);
-    expect(await every.getByRole("status").textContent()).toBe("The margin at jack reaches 0 kN first in Low forward throw.");
+    expect(await every.getByRole("status").textContent()).toBe("The margin at front jack reaches 0 kN first in Low forward throw.");
     // hover shows the values
     const chart = page.getByTestId("sweep-chart");
     await chart.scrollIntoViewIfNeeded();
@@ -99,7 +99,7 @@ describe("design studies", () => {
     await page.mouse.move(box!.x + box!.width * 0.45, box!.y + box!.height * 0.4);
     await page.mouse.move(box!.x + box!.width * 0.5, box!.y + box!.height * 0.4, { steps: 5 });
     await page.locator(".recharts-tooltip-wrapper").filter({ hasText: "theta =" }).waitFor();
-    expect(await page.locator(".recharts-tooltip-wrapper").textContent()).toMatch(/margin at jack : [−\d.,]+ kN/);
+    expect(await page.locator(".recharts-tooltip-wrapper").textContent()).toMatch(/margin at front jack : [−\d.,]+ kN/);
     await shot(page, "studies-02-sweep");
     await page.getByRole("button", { name: "Keep on the calc sheet" }).click();
   });
@@ -111,7 +111,7 @@ describe("design studies", () => {
     // the kept sweep is plotted on the version's page too, with the limit finder's crossing
     const kept = page.getByTestId("version-sweeps");
     await kept.getByTestId("sweep-chart").waitFor();
-    expect(await kept.textContent()).toMatch(/theta from 0 to 80 deg — as drawn.*Crossing: jack: lift-off \(its normal force reaches zero\) at theta = 18\.1\d deg\./);
+    expect(await kept.textContent()).toMatch(/theta from 0 to 80 deg — as drawn.*Crossing: front jack: lift-off \(its normal force reaches zero\) at theta = 18\.1\d deg\./);
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Calc sheet (PDF)" }).click()]);
     expect(download.suggestedFilename()).toBe(`Monitor-trailer-${tag}-v2-calc-sheet-SI.pdf`);
     const path = await download.path();

@@ -15,7 +15,7 @@ describe("a version's concerns for sign-off", () => {
     ];
     const concerns = versionConcerns(file);
     expect(concerns[0]).toBe("As drawn: Lifts off at the front jack — the rear stabiliser leg and the wheel still hold the body");
-    expect(concerns).toContain("Low throw — factor of safety against overturning about leg 1.442, below the required 1.5");
+    expect(concerns).toContain("Low throw — factor of safety against overturning about rear stabiliser leg 1.442, below the required 1.5");
     expect(concerns.some((c) => c.startsWith("High throw"))).toBe(false);
     // the review page's case tables read the very study the findings came from: solved once
     const study = studyOfDocument(file as SketchFile);

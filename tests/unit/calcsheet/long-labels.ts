@@ -6,7 +6,8 @@ import { loadFixture } from "../solver/helpers";
 export function longLabelFile(): SketchFileInput {
   const file = loadFixture("pump-set-hold-down.json");
   const ids: Record<string, string> = { leftPad: "leftRubberBearingPadUnderEngine", rightPad: "rightRubberBearingPadUnderPump", strap: "holdDownStrapToFloorAnchor" };
-  for (const s of file.supports ?? []) s.id = ids[s.id];
+  // long as ids and as labels: the tables name a support by its label
+  for (const s of file.supports ?? []) s.label = s.id = ids[s.id];
   file.parameters = { mdot: "40 kg/s" };
   file.ports![0].massFlow = "mdot";
   file.massSources![0].massFlow = "mdot";

@@ -97,7 +97,7 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("Low throw");
     expect(text).toContain("High throw");
     expect(text).toMatch(/Sweep of theta/);
-    expect(text).toMatch(/Crossing: jack: lift-off \(its normal force reaches zero\) at theta = \d+(\.\d+)? deg\./);
+    expect(text).toMatch(/Crossing: front jack: lift-off \(its normal force reaches zero\) at theta = \d+(\.\d+)? deg\./);
     // cautions
     expect(text).toContain("must be reviewed by a qualified engineer");
     expect(text).toContain("Local codes, standards and licensed engineering practice govern");
@@ -116,10 +116,10 @@ describe("calc sheet PDF", () => {
     file.sweeps = [{ id: "sw", parameter: "theta", from: 0, to: 80, points: 41, case: "more", quantities: [{ support: "jack", component: "margin" }] }];
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file });
     const { text } = await pdfText(buf);
-    // the flood case tips (the trailer is not held): named, and left out
-    expect(text).toContain("Flood flow — trailer tips: not in the envelope or the design loads; the body is not held in this case");
+    // the flood case tips (the trailer is not held): named (by its label), and left out
+    expect(text).toContain("Flood flow — Trailer tips: not in the envelope or the design loads; the body is not held in this case");
     // and the first page says so under the result as drawn, which alone would read "Holds"
-    expect(text).toMatch(/Result as drawn Lifts off at the front jack — .* In the cases and combinations: (• [^•]* )?• Flood flow — trailer tips/);
+    expect(text).toMatch(/Result as drawn Lifts off at the front jack — .* In the cases and combinations: (• [^•]* )?• Flood flow — Trailer tips/);
     // a factor just under its required value is not rounded up to it (the stability table: 1.497)
     const parsedFile = parseSketch(file);
     if (!parsedFile.ok) throw new Error("the sketch did not parse");
@@ -128,7 +128,7 @@ describe("calc sheet PDF", () => {
     expect(ot && "factor" in ot ? ot.factor : 0).toBeGreaterThan(1.4965);
     expect(ot && "factor" in ot ? ot.factor : 2).toBeLessThan(1.5);
     // (prose is set without kerning, so "1.497," reads back as written)
-    expect(text).toContain("• Normal — factor of safety against overturning about leg 1.497, below the required 1.5");
+    expect(text).toContain("• Normal — factor of safety against overturning about rear stabiliser leg 1.497, below the required 1.5");
     expect(text).toContain('Warning: Load group "dead" (the weights) is in normal (× 1.2) and more (× 1.5): it is counted 2.7 times.');
     // the envelope names the case of each max and min; the cases table marks the governing cells by shape
     expect(text).toContain("Case of max");
@@ -142,7 +142,7 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("Sweep of theta — case More flow");
     // "More flow" leaves theta alone: nothing to say about it
     expect(text).not.toContain("stand in for the case's own");
-    expect(text).toContain(`Crossing: jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
+    expect(text).toContain(`Crossing: front jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
   }, 60000);
 
   it("a sweep saved on a combination is solved as its factored load set, and says so", async () => {
@@ -160,7 +160,7 @@ describe("calc sheet PDF", () => {
     const drawn = runLimit(file, { parameter: "theta", from: 0, to: 80, quantity: { support: "jack", component: "margin" }, target: 0 });
     if (!lim.found || !drawn.found) throw new Error("expected crossings");
     expect(formatNumber(lim.value, 4)).not.toBe(formatNumber(drawn.value, 4));
-    expect(text).toContain(`Crossing: jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
+    expect(text).toContain(`Crossing: front jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
   }, 60000);
 
   it("says when a sweep's case sets the swept parameter itself: the sweep's values stand in for it", async () => {
@@ -170,10 +170,10 @@ describe("calc sheet PDF", () => {
     const { text } = await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Stack", version: 1, savedAt: new Date(), signoff: [], file }));
     expect(text).toContain("Sweep of v — case Engine stopped, 30 m/s wind");
     expect(text).toContain("The sweep's values of v stand in for the case's own (v = 30 m/s); everything else is as in the case.");
-    expect(text).toMatch(/Crossing: upwind: lift-off \(its normal force reaches zero\) at v = 35\.38 m\/s/);
+    expect(text).toMatch(/Crossing: upwind edge: lift-off \(its normal force reaches zero\) at v = 35\.38 m\/s/);
     // and in every case and combination, the factored uplift check first (v_lift·√(0.9 / 1.5) = 27.41 m/s:
     // tests/unit/studies/exhaust-stack-example.test.ts)
-    expect(text).toMatch(/upwind lift-off in each case and combination: Engine running, 30 m\/s wind 36\.8\d? m\/s; Engine stopped, 30 m\/s wind 35\.38 m\/s; .*Uplift check: 0\.9 × weight \+ 1\.5 × wind 27\.41 m\/s \(first\)\./);
+    expect(text).toMatch(/upwind edge lift-off in each case and combination: Engine running, 30 m\/s wind 36\.8\d? m\/s; Engine stopped, 30 m\/s wind 35\.38 m\/s; .*Uplift check: 0\.9 × weight \+ 1\.5 × wind 27\.41 m\/s \(first\)\./);
   }, 60000);
 
   it("prints a support-moment column only when a fixed support can carry a moment, zeros included", async () => {
@@ -266,7 +266,7 @@ describe("calc sheet PDF", () => {
     expect(text).not.toContain("Part 1 of");
     for (const c of [...file.cases!, ...file.combinations!]) {
       expect(text.split(`Case: ${c.name} leftRubberBearingPadUnderEngine `), c.name).toHaveLength(2);
-      expect(text, c.name).toMatch(new RegExp(`Case: ${c.name}( \\(continued\\))? set `));
+      expect(text, c.name).toMatch(new RegExp(`Case: ${c.name}( \\(continued\\))? Pump set `));
     }
     // the strap is a tie: its margin reaching zero is named for what it means
     expect(text).toMatch(/Crossing: holdDownStrapToFloorAnchor: slack \(its tension reaches zero\) at mdot = \d+(\.\d+)? kg\/s\./);

@@ -95,7 +95,9 @@ describe("result tables", () => {
     expect(cases.rows).toHaveLength(6);
     const env = envelopeTable(study, "SI");
     // three friction contacts: Fx, Fy, n, t and the margin of each, no moment
-    expect(env.rows.map((r) => `${r[0]} ${r[1]}`)).toEqual(["leg", "wheel", "jack"].flatMap((s) => ["Fx", "Fy", "Normal n", "Tangential t", "Margin"].map((c) => `${s} ${c}`)));
+    // named by their labels, as the drawing and the results panel name them
+    expect(env.rows.map((r) => `${r[0]} ${r[1]}`)).toEqual(["rear stabiliser leg", "wheel", "front jack"].flatMap((s) => ["Fx", "Fy", "Normal n", "Tangential t", "Margin"].map((c) => `${s} ${c}`)));
+    expect(new Set(cases.rows.map((r) => r[1]))).toEqual(new Set(["rear stabiliser leg", "wheel", "front jack"]));
     const st = stabilityTable(study);
     expect(st.rows.filter((r) => r[2] === "overturning")).toHaveLength(2);
     const design = designLoadTable(study, "SI");
