@@ -473,7 +473,8 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: 
     if (typeof raw === "number") return `${withUnit(formatNumber(raw, 6), unit)}${inUs(raw, kind)}`;
     if (typeof raw === "string" && v && "value" in v) {
       const value = kind && kind in PREFIXED ? formatQuantity(v.value, kind as Quantity, "SI", { sig: 5 }) : withUnit(formatNumber(v.value, 5), unit);
-      return `${raw} = ${value}${inUs(v.value, kind)}`;
+      // "92 kg" typed is its own value: once, not "92 kg = 92 kg"
+      return `${sameValueText(raw, value) ? raw : `${raw} = ${value}`}${inUs(v.value, kind)}`;
     }
     return String(raw);
   };
@@ -517,6 +518,20 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: 
     ],
     rows,
   };
+}
+
+/** Whether a typed text and a shown value are one number in one unit: "92 kg" and "92 kg", "1500.0 kg"
+ *  and "1,500 kg", "-2" and "−2", "90 deg" and "90°", "998 kg/m^3" and "998 kg/m³". An expression
+ *  ("2 * r", "900 kg + ballast") never is. */
+function sameValueText(typed: string, shown: string): boolean {
+  const split = (s: string) => {
+    const t = prettyUnit(s.trim()).replace(/−/g, "-").replace(/(\d),(?=\d{3})/g, "$1").replace(/\s+/g, "");
+    const m = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)(.*)$/i.exec(t);
+    return m ? { n: Number(m[1]), unit: m[2] === "deg" ? "°" : m[2] } : null;
+  };
+  const a = split(typed);
+  const b = split(shown);
+  return !!a && !!b && a.n === b.n && a.unit === b.unit;
 }
 
 /** The field kinds that have US customary units to show beside the SI value. */

@@ -7,7 +7,7 @@ export function MailboxFrame({ children }: { children: ReactNode }) {
   return (
     <div className="min-h-screen">
       <header className="border-b border-dashed border-caution/50 bg-caution-soft/50">
-        <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-6 py-3">
+        <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-4 py-3 sm:px-6">
           <div className="flex items-center gap-3">
             <Wordmark />
             <span className="rounded border border-caution/40 px-1.5 py-0.5 text-xs font-semibold uppercase tracking-wider text-caution">Local mailbox</span>
@@ -17,7 +17,7 @@ export function MailboxFrame({ children }: { children: ReactNode }) {
           </Link>
         </div>
       </header>
-      <main className="mx-auto max-w-5xl px-6 py-8">{children}</main>
+      <main className="mx-auto max-w-5xl px-4 py-6 sm:px-6 sm:py-8">{children}</main>
     </div>
   );
 }

@@ -129,7 +129,7 @@ export function ParametersTable() {
       <h2 id="params-heading" className={HEADING}>
         Parameters
       </h2>
-      <p className="mt-1 text-[11.5px] leading-snug text-ink-faint">Names any field can use: “2*r”, “theta + 5 deg”. A parameter may use the ones above it.</p>
+      <p className="mt-1 text-[11.5px] leading-snug text-ink-faint">Names any field can use: “2*r”, “theta + 5 deg”. A parameter may use any other, in any order (not itself, nor in a loop).</p>
       <table className="mt-1.5 w-full table-fixed text-left">
         <colgroup>
           <col className="w-[28%]" />

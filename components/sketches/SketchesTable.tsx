@@ -8,7 +8,7 @@ import { formatDate, formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { STATUS_FILTERS, type SketchSort, type SketchStatus } from "@/lib/sketch-schemas";
 import { ForkGlyph } from "./ForkGlyph";
-import { formatForce, timeAgo } from "./format";
+import { formatForceCell, timeAgo } from "./format";
 import { useUnitsPreference } from "./useUnitsPreference";
 import { StatusMark } from "./StatusMark";
 
@@ -176,14 +176,14 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                       {/* a phone has no room for the columns: their words go under the title */}
                       <span className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-0.5 text-xs text-ink-soft sm:hidden" data-testid="sketch-row-summary">
                         <StatusMark status={s.status} warnings={s.warnings} />
-                        <span className="num">largest {formatForce(s.largestReaction, units)}</span>
+                        <span className="num">largest {formatForceCell(s.largestReaction, units)}</span>
                         <span>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
                       </span>
                     </td>
                     <td className="py-2.5 pr-3 max-sm:hidden">
                       <StatusMark status={s.status} warnings={s.warnings} />
                     </td>
-                    <td className="num py-2.5 pr-3 text-right text-ink max-sm:hidden">{formatForce(s.largestReaction, units)}</td>
+                    <td className="num py-2.5 pr-3 text-right text-ink max-sm:hidden">{formatForceCell(s.largestReaction, units)}</td>
                     <td className="py-2.5 pr-3 text-ink-soft max-sm:hidden">
                       <span title={formatDateTime(s.updatedAt)}>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
                       {s.updatedBy ? <span className="block text-xs text-ink-faint">by {s.updatedBy.name}</span> : null}

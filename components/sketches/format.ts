@@ -18,6 +18,11 @@ export function formatForce(newtons: number | null | undefined, units: UnitSyste
   return newtons === null || newtons === undefined || !Number.isFinite(newtons) ? "—" : formatQuantity(newtons, "force", units);
 }
 
+/** A force in a table column: 4 significant figures with their trailing zeros ("11.50 kN"), or a dash. */
+export function formatForceCell(newtons: number | null | undefined, units: UnitSystem = "SI"): string {
+  return newtons === null || newtons === undefined || !Number.isFinite(newtons) ? "—" : formatQuantity(newtons, "force", units, { keepZeros: true });
+}
+
 /** "just now", "5 min ago", "3 h ago", "2 days ago" (then the date). */
 export function timeAgo(value: string | Date, now = Date.now()): string | null {
   const s = Math.round((now - new Date(value).getTime()) / 1000);

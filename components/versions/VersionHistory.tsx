@@ -4,7 +4,7 @@
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState, type ReactNode } from "react";
-import { formatForce, timeAgo } from "@/components/sketches/format";
+import { formatForceCell, timeAgo } from "@/components/sketches/format";
 import { useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { StatusMark } from "@/components/sketches/StatusMark";
 import { Button, Notice, Skeleton } from "@/components/shell/controls";
@@ -119,7 +119,7 @@ export function VersionHistory({
                       {timeAgo(v.createdAt) ?? formatDate(v.createdAt)} by {v.authorName ?? "a deleted account"}
                     </span>
                     <StatusMark status={v.status} warnings={v.warnings} />
-                    <span className="num">largest {formatForce(v.largestReaction, units)}</span>
+                    <span className="num">largest {formatForceCell(v.largestReaction, units)}</span>
                   </span>
                 </td>
                 <td className="py-2.5 pr-3 text-ink-soft max-sm:hidden">
@@ -129,7 +129,7 @@ export function VersionHistory({
                 <td className="py-2.5 pr-3 max-sm:hidden">
                   <StatusMark status={v.status} warnings={v.warnings} />
                 </td>
-                <td className="num py-2.5 pr-3 text-right max-sm:hidden">{formatForce(v.largestReaction, units)}</td>
+                <td className="num py-2.5 pr-3 text-right max-sm:hidden">{formatForceCell(v.largestReaction, units)}</td>
                 {reviewCell ? <td className="py-2.5 pr-3">{reviewCell(v)}</td> : null}
                 <td className="py-2 text-right">
                   <span className="inline-flex justify-end gap-1.5 whitespace-nowrap max-sm:flex-col max-sm:items-end">

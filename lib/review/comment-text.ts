@@ -1,7 +1,8 @@
 // Comment text: plain text with light formatting — **bold**, *italic* or _italic_, `code`,
 // line breaks, web addresses — and @mentions of workspace members. Parsed into tokens that the
 // screen renders as React elements (never as HTML), so nothing in a comment can run. Markdown
-// links are not a thing here: `[text](url)` stays text, and only http(s) addresses become links.
+// links are not a thing here: `[text](url)` stays text, and only http(s) addresses (and bare
+// `www.` ones, as https) become links.
 // Browser-safe.
 
 export type Inline =
@@ -15,7 +16,9 @@ export type Member = { id: string; name: string };
 
 export const MAX_COMMENT_LENGTH = 4000;
 
-const URL_RE = /\bhttps?:\/\/[^\s<>"'`]+/gi;
+// A bare `www.` address must start a word (not the tail of a longer host, a path or an e-mail
+// address) and have a dot after `www.`.
+const URL_RE = /\bhttps?:\/\/[^\s<>"'`]+|(?<![\p{L}\p{N}._@/:-])www\.[\p{L}\p{N}-]+\.[^\s<>"'`]+/giu;
 
 /** An address without the punctuation that usually ends the sentence around it. */
 function trimUrl(url: string): string {
@@ -33,6 +36,14 @@ export function safeHref(url: string): string | null {
   } catch {
     return null;
   }
+}
+
+/** `www.example.org` as an https link; refused when it hides another host (`www.a.org@b.org`). */
+function bareHref(url: string): string | null {
+  const href = safeHref(`https://${url}`);
+  if (!href) return null;
+  const u = new URL(href);
+  return u.username || u.password || !u.hostname.startsWith("www.") ? null : href;
 }
 
 type Found = { start: number; end: number; userId: string };
@@ -88,7 +99,7 @@ export function parseLine(line: string, members: Member[] = []): Inline[] {
   const marks: Array<{ start: number; end: number; token: Inline }> = [];
   for (const m of line.matchAll(URL_RE)) {
     const url = trimUrl(m[0]);
-    const href = safeHref(url);
+    const href = /^https?:/i.test(url) ? safeHref(url) : bareHref(url);
     if (href) marks.push({ start: m.index!, end: m.index! + url.length, token: { t: "link", href, text: url } });
   }
   for (const f of findMentions(line, members)) {

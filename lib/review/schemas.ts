@@ -4,7 +4,14 @@ import { MAX_COMMENT_LENGTH } from "./comment-text";
 import { SIGN_OFF_STEPS } from "./rules";
 import { MAX_VERSION_NUMBER } from "../sketch-schemas";
 
-const coordinate = z.number({ error: "A coordinate is a number (m)." }).finite().min(-1e6).max(1e6);
+const MAX_COORDINATE_M = 1e6;
+const OUT_OF_RANGE = "The point is outside the allowed range: each coordinate is from −1,000,000 m to 1,000,000 m.";
+// The type's message is for a value that is not a number; the range has its own (a schema-wide
+// `error` would answer "not a number" for 1e9 too).
+const coordinate = z
+  .number({ error: "A coordinate is a number (m)." })
+  .min(-MAX_COORDINATE_M, OUT_OF_RANGE)
+  .max(MAX_COORDINATE_M, OUT_OF_RANGE);
 
 export const commentPinSchema = z.discriminatedUnion("kind", [
   z.strictObject({ kind: z.literal("element"), elementId: z.string().min(1).max(100) }),

@@ -171,6 +171,14 @@ describe("threads", () => {
       expect(res.status).toBe(status);
       if (path) expect(res.body.error.fields.map((f: { path: string }) => f.path)).toContain(path);
     }
+    // a number out of range is told so, with the range, not that it is not a number
+    const far = await post(id, chen, { body: "x", pin: { kind: "point", at: [1e9, -1e9] } });
+    expect(far.status).toBe(400);
+    expect(far.body.error.fields).toEqual([
+      { path: "pin.at.0", message: "The point is outside the allowed range: each coordinate is from −1,000,000 m to 1,000,000 m." },
+      { path: "pin.at.1", message: "The point is outside the allowed range: each coordinate is from −1,000,000 m to 1,000,000 m." },
+    ]);
+    expect((await post(id, chen, { body: "x", pin: { kind: "point", at: [1, "a"] } })).body.error.fields[0].message).toBe("A coordinate is a number (m).");
     expect((await list(id, chen)).body.threads).toHaveLength(1);
     expect((await call(commentRoute.DELETE, { method: "DELETE", params: { commentId: root }, cookie: outsider.cookie })).status).toBe(404);
   });

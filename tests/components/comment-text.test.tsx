@@ -62,6 +62,25 @@ describe("comment text", () => {
     expect(container.querySelector("[data-mention]")?.textContent).toBe("@Chen");
   });
 
+  it("links bare www. addresses as https, with the same trimming", () => {
+    const { container } = render(<CommentText text={"See www.example.org/check?a=1. Or (www.example.com), or WWW.Example.net!"} />);
+    const links = [...container.querySelectorAll("a")];
+    expect(links.map((a) => a.getAttribute("href"))).toEqual(["https://www.example.org/check?a=1", "https://www.example.com/", "https://www.example.net/"]);
+    expect(links.map((a) => a.textContent)).toEqual(["www.example.org/check?a=1", "www.example.com", "WWW.Example.net"]);
+    expect(links[0].getAttribute("rel")).toBe("noopener noreferrer nofollow");
+    expect(container.textContent).toBe("See www.example.org/check?a=1. Or (www.example.com), or WWW.Example.net!");
+  });
+
+  it("leaves www. as text inside other words, hosts, e-mail addresses and other schemes", () => {
+    const text = "mail ops@www.example.org, cdn.www.example.org, notwww.example.org, ftp://www.example.org, www. alone, www.example, www.example.org@evil.example";
+    const { container } = render(<CommentText text={text} />);
+    expect(container.querySelectorAll("a")).toHaveLength(0);
+    expect(container.textContent).toBe(text);
+    // an https address keeps one link, not a second one for its www. part
+    const lines = parseComment("https://www.example.org/a");
+    expect(lines[0]).toEqual([{ t: "link", href: "https://www.example.org/a", text: "https://www.example.org/a" }]);
+  });
+
   it("accepts only http and https addresses as links", () => {
     expect(safeHref("https://ok.example/x")).toBe("https://ok.example/x");
     expect(safeHref("javascript:alert(1)")).toBeNull();

@@ -19,9 +19,9 @@ export default async function MailPage({ params }: { params: Promise<{ id: strin
   return (
     <MailboxFrame>
       <article className="rounded-lg border border-rule bg-paper-card">
-        <header className="space-y-1 border-b border-rule-soft px-6 py-4 text-sm">
+        <header className="space-y-1 border-b border-rule-soft px-4 py-4 text-sm sm:px-6">
           <h1 className="text-xl font-semibold tracking-tight text-ink">{mail.subject}</h1>
-          <dl className="grid grid-cols-[5rem_1fr] gap-y-0.5 text-ink-soft">
+          <dl className="grid grid-cols-[5rem_minmax(0,1fr)] gap-y-0.5 text-ink-soft [&>dd]:[overflow-wrap:anywhere]">
             <dt>From</dt>
             <dd>{mail.from}</dd>
             <dt>To</dt>
@@ -31,7 +31,7 @@ export default async function MailPage({ params }: { params: Promise<{ id: strin
           </dl>
         </header>
         {links.length ? (
-          <div className="flex flex-wrap gap-2 border-b border-rule-soft bg-paper-deep/40 px-6 py-3">
+          <div className="flex flex-wrap gap-2 border-b border-rule-soft bg-paper-deep/40 px-4 py-3 sm:px-6">
             <span className="self-center text-xs font-semibold uppercase tracking-wider text-ink-faint">Open</span>
             {links.map((href, i) => (
               <a key={href} href={href} className="rounded-md bg-ink px-3 py-1.5 text-sm font-medium text-paper hover:bg-ink-soft">
@@ -40,7 +40,7 @@ export default async function MailPage({ params }: { params: Promise<{ id: strin
             ))}
           </div>
         ) : null}
-        <pre className="whitespace-pre-wrap break-words px-6 py-5 font-sans text-[15px] leading-relaxed text-ink">
+        <pre className="whitespace-pre-wrap break-words px-4 py-5 font-sans text-[15px] leading-relaxed text-ink sm:px-6">
           <LinkedText text={mail.text} />
         </pre>
       </article>

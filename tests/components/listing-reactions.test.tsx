@@ -1,0 +1,86 @@
+// The "Largest reaction" column of the workspace's sketches and of a sketch's history is a table
+// column: 4 significant figures with their trailing zeros, so 11.50 kN sits beside 14.28 kN.
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { render, screen, within } from "@testing-library/react";
+import type { ReactNode } from "react";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { formatForce, formatForceCell } from "@/components/sketches/format";
+import { SketchesTable, type SketchRow } from "@/components/sketches/SketchesTable";
+import { VersionHistory, type VersionItem } from "@/components/versions/VersionHistory";
+
+function answer(body: unknown) {
+  vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify(body), { status: 200, headers: { "content-type": "application/json" } })));
+}
+
+function withQuery(ui: ReactNode) {
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  return render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>);
+}
+
+/** The cell under the "Largest reaction" header of a row. */
+function largestCell(row: HTMLElement): string {
+  const headers = [...document.querySelectorAll("thead th")];
+  const column = headers.findIndex((th) => th.textContent?.includes("Largest reaction"));
+  return row.querySelectorAll("td")[column].textContent ?? "";
+}
+
+const at = "2024-05-01T10:00:00.000Z";
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+  window.localStorage.clear();
+});
+
+describe("largest reaction in the listings", () => {
+  it("keeps trailing zeros in a cell, not in prose (11 500 N, 2 400 N, 14 280 N)", () => {
+    expect(formatForceCell(11_500)).toBe("11.50 kN");
+    expect(formatForceCell(2_400)).toBe("2.400 kN");
+    expect(formatForceCell(950)).toBe("950.0 N");
+    expect(formatForceCell(null)).toBe("—");
+    expect(formatForce(11_500)).toBe("11.5 kN");
+  });
+
+  it("the workspace's sketches", async () => {
+    const row = (title: string, largestReaction: number | null): SketchRow => ({
+      id: title,
+      title,
+      tags: [],
+      latestVersion: 1,
+      status: "holds",
+      largestReaction,
+      warnings: [],
+      latestMessage: "",
+      updatedAt: at,
+      updatedBy: null,
+      forked: false,
+    });
+    answer({ items: [row("Skid A", 11_500), row("Skid B", 14_280), row("Skid C", null)], total: 3, page: 1, pageSize: 20, tags: [] });
+    withQuery(<SketchesTable workspaceId="w1" canCreate />);
+    const a = await screen.findByTestId("sketch-row-Skid A");
+    expect(largestCell(a)).toBe("11.50 kN");
+    expect(within(a).getByTestId("sketch-row-summary").textContent).toContain("largest 11.50 kN");
+    expect(largestCell(screen.getByTestId("sketch-row-Skid B"))).toBe("14.28 kN");
+    expect(largestCell(screen.getByTestId("sketch-row-Skid C"))).toBe("—");
+  });
+
+  it("a sketch's version history", async () => {
+    const version = (number: number, largestReaction: number): VersionItem => ({
+      id: `v${number}`,
+      number,
+      message: `v${number}`,
+      authorId: null,
+      authorName: "Eddie",
+      createdAt: at,
+      status: "holds",
+      largestReaction,
+      warnings: [],
+      reviewState: "draft",
+    });
+    answer({ versions: [version(2, 11_500), version(1, 14_280)] });
+    withQuery(<VersionHistory sketchId="s1" latest={2} canFork={false} onFork={() => {}} />);
+    const v2 = await screen.findByTestId("version-row-2");
+    expect(largestCell(v2)).toBe("11.50 kN");
+    expect(within(v2).getByTestId("version-row-summary").textContent).toContain("largest 11.50 kN");
+    expect(largestCell(screen.getByTestId("version-row-1"))).toBe("14.28 kN");
+  });
+});
