@@ -53,11 +53,13 @@ function StatusLine() {
       ? "Drag to move · handles turn and reshape · Shift+click adds to the selection · Alt: no snapping · Space+drag or middle button: pan · wheel: zoom"
       : "Esc: back to selecting · Alt: no snapping";
   return (
-    <div className="flex h-7 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px]" id="canvas-help">
-      <p className="min-w-0 flex-1 truncate text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? undefined}>
+    // two lines tall, always (a notice coming and going must not resize the drawing): a notice may
+    // take both, and on a narrow window it takes the whole width from the hint
+    <div className="flex h-9 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px] leading-[15px]" id="canvas-help">
+      <p className="line-clamp-2 min-w-0 flex-1 text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? undefined}>
         {notice}
       </p>
-      <p className="min-w-0 max-w-[55%] truncate text-right text-ink-faint" title={hint}>
+      <p className={`line-clamp-2 min-w-0 max-w-[45%] text-right text-ink-faint ${notice ? "max-md:hidden" : ""}`} title={hint}>
         {hint}
       </p>
     </div>

@@ -1,12 +1,12 @@
 /**
- * A control's words: in full on wide screens, `short` below 1024 px, where the toolbar has less
- * room. The control itself carries the full words as its aria-label, so its name never changes.
+ * A control's words: in full on wide screens, `short` below 1280 px, where the toolbar has less
+ * room (the sketch's title keeps its place). The control itself carries the full words as its aria-label, so its name never changes.
  */
 export function NarrowLabel({ full, short }: { full: string; short: string }) {
   return (
     <>
-      <span className="max-lg:hidden">{full}</span>
-      <span className="lg:hidden" aria-hidden="true">
+      <span className="max-xl:hidden">{full}</span>
+      <span className="xl:hidden" aria-hidden="true">
         {short}
       </span>
     </>

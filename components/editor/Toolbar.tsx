@@ -109,7 +109,9 @@ export function Toolbar({
           <path d="M8 10V4.5M8 4.5l-2 2.3M8 4.5l2 2.3" stroke="#1f5f7a" strokeWidth="1.5" fill="none" strokeLinecap="round" />
         </svg>
       </Link>
-      <div className="mr-3 min-w-0 max-w-[22rem] max-lg:max-w-[8rem] max-md:sr-only">
+      {/* which sketch this is stays readable: up to 22rem on wide screens, at least 7rem on narrow
+          ones (the menus and buttons take short words there), a row of its own on a phone */}
+      <div className="mr-3 min-w-[7rem] max-w-[22rem] shrink max-xl:max-w-[13rem] max-sm:order-last max-sm:mr-0 max-sm:max-w-none max-sm:basis-full max-sm:pt-1">
         <h1 className="truncate text-[13.5px] font-semibold leading-tight text-ink" data-testid="sketch-title">
           {title || "Untitled sketch"}
         </h1>
