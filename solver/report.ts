@@ -115,7 +115,11 @@ export function stateWord(r: SolveResult["reactions"][string]): string {
 }
 
 /** Reactions of one run, one row per support (force on the body, or load on the support). */
-export function reactionTable(result: SolveResult, system: UnitSystem, opts: { onSupport?: boolean; id?: string; title?: string; scale?: Scale } = {}): Table {
+export function reactionTable(
+  result: SolveResult,
+  system: UnitSystem,
+  opts: { onSupport?: boolean; id?: string; title?: string; scale?: Scale; names?: Readonly<Record<string, string>> } = {},
+): Table {
   // `scale`: the screen holds a table's units while a drag runs, so 990 N → 1.01 kN does not flicker
   const u = unitsOf(system, opts.scale ?? reactionScale(result));
   const f = u.force;
@@ -142,7 +146,7 @@ export function reactionTable(result: SolveResult, system: UnitSystem, opts: { o
       const fy = sign * r.fy;
       const res = Math.hypot(fx, fy);
       return [
-        id,
+        opts.names?.[id] ?? id,
         r.kind,
         inUnit(fx, "force", u),
         inUnit(fy, "force", u),

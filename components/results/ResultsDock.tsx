@@ -4,6 +4,7 @@
 import { useState } from "react";
 import { radioKeys } from "@/components/shell/controls";
 import { useAnalysis, useEditor } from "@/canvas/context";
+import { elementNames } from "@/solver/cases";
 import { CasesPanel } from "@/components/studies/CasesPanel";
 import { downloadCsv, useCsvName } from "@/components/studies/csv";
 import { reactionTable } from "@/solver/report";
@@ -151,13 +152,15 @@ function ReactionsCsv({ sense }: { sense: Sense }) {
   const csvName = useCsvName();
   const shown = useAnalysis((s) => s.shown);
   const units = useEditor((s) => s.units);
+  const sketch = useEditor((s) => s.sketch);
   return (
     <button
       type="button"
       className="order-last ml-2 pb-1 text-[12px] text-ink-soft hover:text-ink disabled:opacity-40"
       disabled={!shown}
       aria-label="Download the reactions as CSV"
-      onClick={() => shown && downloadCsv(reactionTable(shown, units, { onSupport: sense === "support" }), csvName(sense === "support" ? "loads-on-supports" : "reactions"))}
+      // the supports by their labels, as the table on screen names them
+      onClick={() => shown && downloadCsv(reactionTable(shown, units, { onSupport: sense === "support", names: elementNames(sketch) }), csvName(sense === "support" ? "loads-on-supports" : "reactions"))}
     >
       CSV
     </button>

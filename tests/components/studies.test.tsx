@@ -526,6 +526,9 @@ describe("CSV of the result tables", () => {
     const fxSupport = Number(onSupport.split("\r\n")[1].split(",")[2]);
     expect(fxBody).toBeCloseTo(-2.2, 6);
     expect(fxSupport).toBeCloseTo(2.2, 6);
+    // each support by its label, as the table on screen names it
+    const labels = load("thrust-stand-tips").supports.map((s: { id: string; label?: string }) => s.label || s.id);
+    expect(onBody.split("\r\n").slice(1, 1 + labels.length).map((row) => row.split(",")[0])).toEqual(labels);
   });
 
   it("a download is named after the sketch: “Jet thrust stand, overturning check” → Jet-thrust-stand-overturning-check-reactions.csv", async () => {
