@@ -89,3 +89,39 @@ export function pointInPolygon(p: Vec2, poly: Vec2[]): boolean {
   }
   return inside;
 }
+
+/**
+ * The first two edges of an outline that cross (edge i runs from corner i to corner i + 1, the
+ * last back to the first), with the point where they do; undefined when none do. Only edges
+ * that are not neighbours are compared, and only a true crossing counts: edges that merely
+ * touch (a repeated corner, a corner on another edge) are let through.
+ */
+export function selfCrossing(pts: Vec2[]): { edges: [number, number]; at: Vec2 } | undefined {
+  const n = pts.length;
+  if (n < 4) return undefined;
+  const { minX, minY, maxX, maxY } = boundingBox(pts);
+  // turns smaller than this are taken as none (a touch, not a crossing)
+  const tol = 1e-12 * ((maxX - minX) ** 2 + (maxY - minY) ** 2);
+  const side = (o: Vec2, a: Vec2, b: Vec2) => {
+    const c = turn(o, a, b);
+    return c > tol ? 1 : c < -tol ? -1 : 0;
+  };
+  for (let i = 0; i < n; i++) {
+    const a = pts[i];
+    const b = pts[(i + 1) % n];
+    // j = i + 1 shares a corner with i; so does j = n − 1 with i = 0, through the closing edge
+    for (let j = i + 2; j < (i === 0 ? n - 1 : n); j++) {
+      const c = pts[j];
+      const d = pts[(j + 1) % n];
+      if (side(a, b, c) * side(a, b, d) < 0 && side(c, d, a) * side(c, d, b) < 0) {
+        const s = turn(a, b, c);
+        const t = s / (s - turn(a, b, d));
+        return { edges: [i, j], at: [c[0] + t * (d[0] - c[0]), c[1] + t * (d[1] - c[1])] };
+      }
+    }
+  }
+  return undefined;
+}
+
+/** (a − o) × (b − o): positive when o → a → b turns counter-clockwise. */
+const turn = (o: Vec2, a: Vec2, b: Vec2) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);

@@ -70,11 +70,15 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   // does not change when the sketch is turned, so least-squares answers turn with it.
   const L = polygonDiameter(body.outline) || 1;
   const cg: Vec2 = body.cg ? copy(body.cg) : polygonCentroid(body.outline);
-  // Moments are taken about the centre of gravity: an unbalanced force (unrestrained body) is
-  // then reported through the cg, where the inertial force of the motion it starts would act.
-  const origin: Vec2 = [cg[0], cg[1]];
-  const [ox, oy] = origin;
   const supports = sketch.supports.filter((s) => s.body === body.id);
+  // Moments are taken about the centroid of the support points (the outline's centroid without
+  // supports): geometry alone, so the rank test sees the supports as drawn whatever the mass and
+  // the cg (a cg far outside the outline made a pin and roller look parallel, and the stiffness
+  // solve ill-conditioned), and the least-squares reactions of an unrestrained body do not move
+  // with its cg. An unbalanced load is reported through this point: supports that all meet at one
+  // point (a pin) carry the whole force, and only the moment about it is left over.
+  const origin: Vec2 = supports.length ? supportCentroid(supports) : polygonCentroid(body.outline);
+  const [ox, oy] = origin;
   const springs: Spring[] = [];
   const groups: Group[] = [];
   const ks = supportStiffnesses(supports);
@@ -278,6 +282,17 @@ export function generalizedLoad(forceTerms: EquationTerm[], momentumTerms: Equat
   forceTerms.forEach((t) => add(t, 1));
   momentumTerms.forEach((t) => add(t, -1));
   return { Q, scale: scale || 1 };
+}
+
+/** Mean of the support points, each support counted once. */
+function supportCentroid(supports: Support[]): Vec2 {
+  let x = 0;
+  let y = 0;
+  for (const s of supports) {
+    x += s.at[0];
+    y += s.at[1];
+  }
+  return [x / supports.length, y / supports.length];
 }
 
 /** Results never share arrays with the sketch (a sweep changes the sketch in place). */

@@ -7,7 +7,7 @@ import { resolveSketch, type EvaluationPlan, type FieldValue, type ResolveOutput
 import { formatPath, sketchSchema, type SketchFile } from "./schema";
 
 import type { FieldError, Sketch, SolveWarning } from "./types";
-import { validateReferences, validateValues } from "./validate";
+import { MAX_MAGNITUDE, TOO_LARGE, validateReferences, validateSizes, validateValues } from "./validate";
 
 export type ParseResult =
   | {
@@ -83,7 +83,7 @@ export function resolveFile(file: SketchFile): Exclude<ParseResult, { ok: true }
   const resolved = resolveSketch(file);
   const errors = [...resolved.errors];
   errors.push(...validateReferences(resolved.sketch));
-  if (resolved.errors.length === 0) errors.push(...validateValues(resolved.sketch));
+  if (resolved.errors.length === 0) errors.push(...validateSizes(resolved.sketch), ...validateValues(resolved.sketch));
   errors.push(...validateCases(file));
   const { warnings, fields, parameterValues } = resolved;
   if (errors.length) return { ok: false, errors: dedupe(errors), warnings, fields, parameterValues };
@@ -99,6 +99,8 @@ function validateCases(file: SketchFile): FieldError[] {
   (file.cases ?? []).forEach((c, i) => {
     if (ids.has(c.id)) errors.push({ path: `cases[${i}].id`, message: `id "${c.id}" is already used by ${ids.get(c.id)}` });
     ids.set(c.id, `cases[${i}]`);
+    for (const [g, f] of Object.entries(c.factors ?? {})) if (Math.abs(f) > MAX_MAGNITUDE) errors.push({ path: `cases[${i}].factors.${g}`, message: TOO_LARGE });
+    if (c.flowFactor !== undefined && c.flowFactor > MAX_MAGNITUDE) errors.push({ path: `cases[${i}].flowFactor`, message: TOO_LARGE });
     for (const p of Object.keys(c.parameters ?? {})) {
       if (!names.has(p)) errors.push({ path: `cases[${i}].parameters.${p}`, message: `the sketch has no parameter "${p}" to override` });
     }
@@ -108,6 +110,7 @@ function validateCases(file: SketchFile): FieldError[] {
     if (ids.has(k.id)) errors.push({ path: `combinations[${i}].id`, message: `id "${k.id}" is already used by ${ids.get(k.id)}` });
     ids.set(k.id, `combinations[${i}]`);
     k.terms.forEach((t, j) => {
+      if (Math.abs(t.factor) > MAX_MAGNITUDE) errors.push({ path: `combinations[${i}].terms[${j}].factor`, message: TOO_LARGE });
       if (!caseIds.has(t.case)) errors.push({ path: `combinations[${i}].terms[${j}].case`, message: `names case "${t.case}", which does not exist` });
     });
   });

@@ -4,7 +4,7 @@ import { makeValue, toFieldNumber, type MathValue } from "./expressions";
 import { planOf } from "./parse";
 import { solve } from "./solve";
 import type { FieldError, Sketch, SolveResult } from "./types";
-import { validateValues } from "./validate";
+import { MAX_MAGNITUDE, TOO_LARGE, validateValues } from "./validate";
 import { shareAcrossSolves } from "./reuse";
 
 export type SweepPoint = { value: number; ok: true; result: SolveResult } | { value: number; ok: false; errors: FieldError[] };
@@ -92,7 +92,10 @@ export function createSetter(sketch: Sketch, parameter: string): ParameterSetter
       }
       for (const s of slots) {
         try {
-          s.target[s.key] = toFieldNumber(s.expr.evaluate(plan.scope), s.kind);
+          const v = toFieldNumber(s.expr.evaluate(plan.scope), s.kind);
+          s.target[s.key] = v;
+          // parsing checked every other value's size (validateSizes)
+          if (Math.abs(v) > MAX_MAGNITUDE) errors.push({ path: s.path, message: TOO_LARGE });
         } catch (err) {
           errors.push({ path: s.path, message: (err as Error).message });
         }

@@ -1,8 +1,9 @@
 // Checks beyond the schema: ids and references (once, at parse), and value ranges (again at
 // every sweep point, since a swept parameter can push a value out of range).
 import { STANDARD_ATMOSPHERE_PA } from "./constants";
-import { polygonArea } from "./geometry";
-import type { FieldError, Sketch } from "./types";
+import { polygonArea, selfCrossing } from "./geometry";
+import { portFlow } from "./ports";
+import type { FieldError, Sketch, Vec2 } from "./types";
 
 type Group = "bodies" | "supports" | "loads" | "ports" | "massSources";
 const GROUPS: Group[] = ["bodies", "supports", "loads", "ports", "massSources"];
@@ -41,6 +42,67 @@ const positive = (v: number | undefined) => v === undefined || v > 0;
 /** The words for a negative gravity, at parse time (resolve.ts) and at a sweep point alike. */
 export const NEGATIVE_GRAVITY = "must not be negative: to have gravity act another way, give its direction (gravityAngle, −90° by default); 0 turns weights off";
 
+/**
+ * The largest size of any number in a sketch (SI units): a million times the largest load that
+ * makes sense (about 1e12 N), and so far inside the floating-point range (1.8e308) that the
+ * products and squares of a solve stay finite. Past it, a result would hold Infinity or NaN.
+ */
+export const MAX_MAGNITUDE = 1e18;
+export const TOO_LARGE = "is too large to solve: the solver takes numbers up to ±1e18 in SI units (check the unit and the exponent)";
+
+const PORT_SIZES = ["massFlow", "velocity", "volumeFlow", "area", "density", "pressure"] as const;
+
+/**
+ * Numbers past MAX_MAGNITUDE, each named by its path. Once, at parse: a sweep checks the values
+ * it puts in (sweep.ts), and a port speed found by division is checked in validateValues.
+ */
+export function validateSizes(sketch: Sketch): FieldError[] {
+  const errors: FieldError[] = [];
+  const big = (path: string, v: number | undefined) => {
+    if (v !== undefined && Math.abs(v) > MAX_MAGNITUDE) errors.push({ path, message: TOO_LARGE });
+  };
+  const bigPoint = (path: string, p: Vec2 | undefined) => {
+    if (p === undefined) return;
+    big(`${path}[0]`, p[0]);
+    big(`${path}[1]`, p[1]);
+  };
+  big("gravity", sketch.gravity);
+  big("motion.ax", sketch.motion?.ax);
+  big("motion.ay", sketch.motion?.ay);
+  sketch.bodies.forEach((b, i) => {
+    big(`bodies[${i}].mass`, b.mass);
+    bigPoint(`bodies[${i}].cg`, b.cg);
+    b.outline.forEach((p, j) => bigPoint(`bodies[${i}].outline[${j}]`, p));
+  });
+  sketch.supports.forEach((s, i) => {
+    bigPoint(`supports[${i}].at`, s.at);
+    big(`supports[${i}].stiffness`, s.stiffness);
+    if (s.kind === "fixed") big(`supports[${i}].rotationalStiffness`, s.rotationalStiffness);
+    if (s.kind === "contact") big(`supports[${i}].mu`, s.mu);
+  });
+  sketch.loads.forEach((l, i) => {
+    const p = `loads[${i}]`;
+    if (l.kind === "force") {
+      bigPoint(`${p}.at`, l.at);
+      for (const k of ["magnitude", "fx", "fy"] as const) big(`${p}.${k}`, l[k]);
+    } else if (l.kind === "couple") {
+      bigPoint(`${p}.at`, l.at);
+      big(`${p}.value`, l.value);
+    } else {
+      bigPoint(`${p}.from`, l.from);
+      bigPoint(`${p}.to`, l.to);
+      big(`${p}.w1`, l.w1);
+      big(`${p}.w2`, l.w2);
+    }
+  });
+  sketch.ports.forEach((port, i) => {
+    bigPoint(`ports[${i}].at`, port.at);
+    for (const k of PORT_SIZES) big(`ports[${i}].${k}`, port[k]);
+  });
+  sketch.massSources.forEach((m, i) => big(`massSources[${i}].massFlow`, m.massFlow));
+  return errors;
+}
+
 /** Value ranges, the information each port needs, and loads that must be fully given. */
 export function validateValues(sketch: Sketch): FieldError[] {
   const errors: FieldError[] = [];
@@ -51,8 +113,15 @@ export function validateValues(sketch: Sketch): FieldError[] {
 
   sketch.bodies.forEach((b, i) => {
     if (!(b.mass >= 0)) err(`bodies[${i}].mass`, "must be zero or more (kg)");
-    if (b.outline.every((p) => Number.isFinite(p[0]) && Number.isFinite(p[1])) && Math.abs(polygonArea(b.outline)) < 1e-12)
-      err(`bodies[${i}].outline`, "encloses no area: its corners lie on one line");
+    // (products of corners past MAX_MAGNITUDE overflow: validateSizes names those)
+    if (!b.outline.every((p) => Math.abs(p[0]) <= MAX_MAGNITUDE && Math.abs(p[1]) <= MAX_MAGNITUDE)) return;
+    // a self-crossing outline has no inside: its "area" and centroid mean nothing
+    const crossing = selfCrossing(b.outline);
+    if (crossing) {
+      const [e1, e2] = crossing.edges.map((e) => `corner ${e + 1} to ${((e + 1) % b.outline.length) + 1}`);
+      const at = crossing.at.map((x) => Number(x.toPrecision(4))).join(", ");
+      err(`bodies[${i}].outline`, `crosses itself: its edge from ${e1} crosses its edge from ${e2} at (${at}); list the corners in order around the body`);
+    } else if (Math.abs(polygonArea(b.outline)) < 1e-12) err(`bodies[${i}].outline`, "encloses no area: its corners lie on one line");
   });
 
   sketch.supports.forEach((s, i) => {
@@ -93,6 +162,9 @@ export function validateValues(sketch: Sketch): FieldError[] {
       (port.volumeFlow !== undefined && port.area !== undefined) ||
       port.massFlow === 0;
     if (hasMassFlow && !hasVelocity) err(p, `port "${port.id}" needs a velocity: give velocity, or density and area, or volumeFlow and area`);
+    // a speed found by dividing by the area can still come out too large with every value in range
+    else if (hasMassFlow && port.velocity === undefined && PORT_SIZES.every((k) => !(Math.abs(port[k] ?? 0) > MAX_MAGNITUDE)) && !(Math.abs(portFlow(port, null).velocity) <= MAX_MAGNITUDE))
+      err(`${p}.area`, `is too small for the flow through it: the speed it gives, ${port.density !== undefined ? "massFlow / (density × area)" : "volumeFlow / area"}, is beyond 1e18 m/s`);
     if (port.beta !== undefined && !(port.beta >= 1 && port.beta <= 2))
       err(`${p}.beta`, "must be from 1 to 2: the momentum-flux factor is 1 for flow uniform across the port, about 1.02 for turbulent pipe flow and 4/3 for laminar (it is never below 1)");
     // gauge pressure is above the atmosphere around the port: a full vacuum is −1 atm at the most

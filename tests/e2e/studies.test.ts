@@ -58,7 +58,9 @@ describe("design studies", () => {
     const study = solveCases(p.file);
     for (const [support, env] of Object.entries(study.envelope)) {
       const caseName = study.runs.find((r) => r.id === env.design.case)!.name;
-      const row = table.locator("tr", { has: page.locator("td[data-col=support]", { hasText: new RegExp(`^${support}$`) }) }).filter({ hasText: "design load" });
+      // rows name the supports by their labels
+      const label = p.file.supports.find((s) => s.id === support)!.label || support;
+      const row = table.locator("tr", { has: page.locator("td[data-col=support]", { hasText: new RegExp(`^${label.replace(/[()]/g, "\\$&")}$`) }) }).filter({ hasText: "design load" });
       expect(await row.locator("td[data-col=case]").textContent()).toBe(caseName);
     }
     // the jack lifts in the low throw, and bears in the high one

@@ -37,6 +37,14 @@ describe("npm run solve", () => {
     expect(JSON.parse(r.stdout)).toEqual({ ok: false, errors: [{ path: "ports[1].area", message: "must be more than zero" }] });
   }, 30000);
 
+  it("a number too large to solve exits 1 naming the field, not a result with nulls in it", () => {
+    const doc = loadFixture("pump-skid-discharge.json");
+    (doc.bodies![0] as Record<string, unknown>).mass = 1e308;
+    const r = solveCli(written(doc));
+    expect(r.status).toBe(1);
+    expect(JSON.parse(r.stdout).errors.map((e: { path: string }) => e.path)).toEqual(["bodies[0].mass"]);
+  }, 30000);
+
   it("a missing file is an error on stdout too", () => {
     const r = solveCli("/nonexistent/sketch.json");
     expect(r.status).toBe(1);

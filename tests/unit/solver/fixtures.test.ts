@@ -189,11 +189,11 @@ describe("skid-on-rollers-unrestrained: unrestrained in x", () => {
     expectRel(r.bodies.skid.residual.fx, 100, 1e-9);
     expect(r.bodies.skid.residual.fy).toBe(0);
     expect(r.bodies.skid.determinacy).toEqual({ kind: "mechanism", degree: 1 });
-    // The unbalanced 100 N is reported through the centre of gravity (1, 0.5), where the
-    // inertial force of the motion it starts would act; the feet balance the rest.
-    // About the cg: 0.8·(N_right − N_left) − 0.1·100 = 0 (jet reaction at 0.6 m), N_left + N_right = W
+    // The unbalanced 100 N is reported through the centroid of the feet (1, 0), a point of the
+    // supports as drawn (not the cg); the feet balance the rest. Hand calculation, moments about
+    // (1, 0): 0.8·(N_right − N_left) − 0.6·100 = 0 (jet reaction at 0.6 m), N_left + N_right = W
     const W = 300 * G0;
-    const Nright = (W + 10 / 0.8) / 2;
+    const Nright = (W + 60 / 0.8) / 2;
     expectRel(r.reactions.right.n!, Nright, 1e-9);
   });
 });

@@ -1,7 +1,7 @@
 // Bad input: every error names the field and says what is wrong; nothing is solved.
 import { describe, expect, it } from "vitest";
-import { parseSketch, solveFile } from "@/solver";
-import { box, loadFixture, sketch } from "./helpers";
+import { parseSketch, solveFile, solveSweep, type SketchFileInput } from "@/solver";
+import { box, expectRel, loadFixture, parsed, sketch } from "./helpers";
 
 const errorsOf = (doc: unknown) => {
   const p = parseSketch(doc);
@@ -96,6 +96,95 @@ describe("invalid sketch files", () => {
       sketch({ bodies: [{ id: "b", outline: box(1, 1), mass: 0 }], loads: [{ id: "F", body: "b", kind: "force", at: [0, 0], magnitude: 5 }] }),
     );
     expect(errors).toEqual([{ path: "loads[0].angle", message: "is required with magnitude" }]);
+  });
+
+  it("an outline that crosses itself names the two edges and the point", () => {
+    const body = (outline: [number, number][]) => sketch({ bodies: [{ id: "b", outline, mass: 1 }] });
+    // hand calculation: the edge (0, 0)–(2, 2) is y = x, the edge (2, 0)–(0, 1) is y = 1 − x/2; they meet at x = 2/3
+    expect(errorsOf(body([[0, 0], [2, 2], [2, 0], [0, 1]]))).toEqual([
+      { path: "bodies[0].outline", message: "crosses itself: its edge from corner 1 to 2 crosses its edge from corner 3 to 4 at (0.6667, 0.6667); list the corners in order around the body" },
+    ]);
+    // equal lobes: the signed areas cancel, but the corners are not on one line; the crossing is the reason
+    expect(errorsOf(body([[0, 0], [1, 1], [1, 0], [0, 1]]))[0].message).toMatch(/^crosses itself: .* at \(0\.5, 0\.5\)/);
+    // the closing edge counts too: (2, 1)–(0, 0) is y = x/2, which meets x = 1 at y = 0.5
+    expect(errorsOf(body([[0, 0], [1, 0], [1, 2], [2, 1]]))[0].message).toMatch(/^crosses itself: its edge from corner 2 to 3 crosses its edge from corner 4 to 1 at \(1, 0\.5\)/);
+    // a concave outline, a repeated corner and a corner touching another edge cross nothing
+    expect(parseSketch(body([[0, 0], [2, 0], [2, 1], [1, 1], [1, 2], [0, 2]])).ok).toBe(true);
+    expect(parseSketch(body([[0, 0], [1, 0], [1, 0], [1, 1], [0, 1]])).ok).toBe(true);
+    expect(parseSketch(body([[0, 0], [2, 0], [2, 2], [1, 0], [0, 2]])).ok).toBe(true);
+    // corners on one line keep their own reason
+    expect(errorsOf(body([[0, 0], [1, 0], [2, 0]]))).toEqual([{ path: "bodies[0].outline", message: "encloses no area: its corners lie on one line" }]);
+  });
+
+  it("a swept value that makes the outline cross itself is an error at that point", () => {
+    const p = parsed(
+      sketch({
+        parameters: { x: "1 m" },
+        bodies: [{ id: "b", outline: [[0, 0], [2, 0], ["x", 1], [0, 1]], mass: 1 }],
+        supports: [{ id: "pin", body: "b", kind: "pin", at: [0, 0] }],
+      }),
+    );
+    const r = solveSweep(p, "x", [1, -1]);
+    expect(r.points[0].ok).toBe(true);
+    // hand calculation: at x = −1 the edge (2, 0)–(−1, 1) meets the closing edge x = 0 at y = 2/3
+    expect(r.points[1]).toMatchObject({ ok: false, errors: [{ path: "bodies[0].outline", message: expect.stringMatching(/^crosses itself: .* at \(0, 0\.6667\)/) }] });
+  });
+
+  it("a swept value too large to solve is an error at that point, naming the field", () => {
+    const p = parsed(
+      sketch({
+        parameters: { P: "1 kN" },
+        bodies: [{ id: "b", outline: box(1, 1), mass: 0 }],
+        supports: [{ id: "pin", body: "b", kind: "pin", at: [0, 0] }],
+        loads: [{ id: "F", body: "b", kind: "force", at: [0, 0], fx: 0, fy: "-P" }],
+      }),
+    );
+    const r = solveSweep(p, "P", [1, 1e300]);
+    expect(r.points[0].ok).toBe(true);
+    expect(r.points[1]).toMatchObject({ ok: false, errors: [{ path: "loads[0].fy", message: expect.stringMatching(/^is too large to solve/) }] });
+  });
+
+  it("numbers too large to solve are refused with the field named (the solve would overflow)", () => {
+    const pinned = (parts: Partial<SketchFileInput>) =>
+      sketch({
+        gravity: 9.81,
+        bodies: [{ id: "b", outline: box(1, 1), mass: 1 }],
+        supports: [
+          { id: "pin", body: "b", kind: "pin", at: [0, 0] },
+          { id: "r", body: "b", kind: "roller", at: [1, 0], angle: 90 },
+        ],
+        ...parts,
+      });
+    const tooLarge = "is too large to solve: the solver takes numbers up to ±1e18 in SI units (check the unit and the exponent)";
+    expect(errorsOf(pinned({ bodies: [{ id: "b", outline: box(1, 1), mass: 1e308 }] }))).toEqual([{ path: "bodies[0].mass", message: tooLarge }]);
+    expect(errorsOf(pinned({ loads: [{ id: "F", body: "b", kind: "force", at: [0.5, 1], fx: 0, fy: "-1e300 N" }] }))).toEqual([{ path: "loads[0].fy", message: tooLarge }]);
+    expect(errorsOf(pinned({ loads: [{ id: "C", body: "b", kind: "couple", value: "1e300 kN*m" }] }))).toEqual([{ path: "loads[0].value", message: tooLarge }]);
+    expect(errorsOf(pinned({ supports: [{ id: "pin", body: "b", kind: "pin", at: [1e300, 0] }] }))).toEqual([{ path: "supports[0].at[0]", message: tooLarge }]);
+    expect(errorsOf(pinned({ cases: [{ id: "c", name: "c", factors: { dead: 1e300 } }] }))).toEqual([{ path: "cases[0].factors.dead", message: tooLarge }]);
+    // every value in range, but a speed found by dividing by a tiny area is not
+    expect(errorsOf(pinned({ ports: [{ id: "o", body: "b", kind: "outlet", at: [1, 0.5], angle: 0, massFlow: 1e10, density: 1e-300, area: 1e-300 }] }))).toEqual([
+      { path: "ports[0].area", message: "is too small for the flow through it: the speed it gives, massFlow / (density × area), is beyond 1e18 m/s" },
+    ]);
+  });
+
+  it("large but sane values still solve, with finite reactions", () => {
+    // 1e12 N down at the middle of a 1 m span (a pin and a roller), on a body of 1e9 kg (g = 10)
+    const r = solveFile(
+      sketch({
+        gravity: 10,
+        bodies: [{ id: "b", outline: box(1, 1), mass: 1e9 }],
+        supports: [
+          { id: "pin", body: "b", kind: "pin", at: [0, 0] },
+          { id: "r", body: "b", kind: "roller", at: [1, 0], angle: 90 },
+        ],
+        loads: [{ id: "F", body: "b", kind: "force", at: [0.5, 1], fx: 0, fy: "-1e12 N" }],
+      }),
+    );
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    expect(r.bodies.b.status).toBe("holds");
+    // hand calculation: symmetric about x = 0.5, so each support takes half of 1e12 + 1e10 N
+    expectRel(r.reactions.r.n!, 5.05e11, 1e-12);
+    expectRel(r.reactions.pin.fy, 5.05e11, 1e-12);
   });
 
   it("solveFile returns { ok: false, errors } and nothing partial", () => {
