@@ -29,8 +29,9 @@ export interface SketchPersistence {
   readonly kind: "scratch" | "saved";
   /** true: every change is kept as it happens (debounced); false: the user saves */
   readonly autosave: boolean;
-  /** a short phrase for the header, e.g. "Scratch sketch · kept in this browser" */
-  describe(): string;
+  /** a short phrase for the header, e.g. "Scratch sketch · kept in this browser"; `title`: the
+   *  drawing's title shown above it (a saved sketch of the same name is not named twice) */
+  describe(title?: string): string;
   load(): Promise<LoadOutcome>;
   save(sketch: SketchFile, opts?: SaveOptions): Promise<SaveOutcome>;
   /**

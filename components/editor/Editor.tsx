@@ -159,7 +159,7 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
       <ActionContextCtx.Provider value={getCtx}>
         <div className="flex h-screen min-h-[560px] flex-col bg-paper text-ink">
           <Toolbar
-            where={persistence.describe()}
+            where={(title) => persistence.describe(title)}
             saved={saved}
             onOpenExample={openExample}
             extra={toolbarExtra}

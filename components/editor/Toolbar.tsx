@@ -77,7 +77,8 @@ export function Toolbar({
   panel,
   tray,
 }: {
-  where: string;
+  /** where the sketch is kept, given the title shown */
+  where: (title: string) => string;
   saved: string | null;
   onOpenExample: (id: string) => void;
   extra?: ReactNode;
@@ -116,7 +117,7 @@ export function Toolbar({
           {title || "Untitled sketch"}
         </h1>
         <p className="truncate text-[11px] leading-tight text-ink-faint" aria-live="polite">
-          {where}
+          {where(title || "")}
           {saved ? ` · saved ${saved}` : ""}
         </p>
       </div>

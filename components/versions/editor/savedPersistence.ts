@@ -64,9 +64,11 @@ export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { versi
   return {
     kind: "saved",
     autosave: false,
-    describe() {
+    describe(title) {
       const info = flow.getState().info;
-      return info ? `${info.title} · ${info.workspaceName}` : "Saved sketch";
+      if (!info) return "Saved sketch";
+      // the sketch's name only where the drawing's title differs from it (renamed in its details)
+      return title?.trim() === info.title ? info.workspaceName : `${info.title} · ${info.workspaceName}`;
     },
     async load() {
       try {
