@@ -38,6 +38,8 @@ export function validateReferences(sketch: Sketch): FieldError[] {
 
 const nonNegative = (v: number | undefined) => v === undefined || v >= 0;
 const positive = (v: number | undefined) => v === undefined || v > 0;
+/** The softest support spring the solve takes (N/m, or N·m/rad): softer, its stiffness matrix underflows. */
+const MIN_STIFFNESS = 1e-6;
 
 /** The words for a negative gravity, at parse time (resolve.ts) and at a sweep point alike. */
 export const NEGATIVE_GRAVITY = "must not be negative: to have gravity act another way, give its direction (gravityAngle, −90° by default); 0 turns weights off";
@@ -127,7 +129,11 @@ export function validateValues(sketch: Sketch): FieldError[] {
   sketch.supports.forEach((s, i) => {
     const p = `supports[${i}]`;
     if (!positive(s.stiffness)) err(`${p}.stiffness`, "must be more than zero (N/m)");
+    // so small a spring gives a body no grip the solve can measure (it would read as unrestrained)
+    else if (s.stiffness !== undefined && s.stiffness < MIN_STIFFNESS) err(`${p}.stiffness`, `is too small to solve with: at least ${MIN_STIFFNESS} N/m (a support that carries nothing is better removed)`);
     if (s.kind === "fixed" && !positive(s.rotationalStiffness)) err(`${p}.rotationalStiffness`, "must be more than zero (N·m/rad)");
+    else if (s.kind === "fixed" && s.rotationalStiffness !== undefined && s.rotationalStiffness < MIN_STIFFNESS)
+      err(`${p}.rotationalStiffness`, `is too small to solve with: at least ${MIN_STIFFNESS} N·m/rad`);
     if (s.kind === "contact" && !nonNegative(s.mu)) err(`${p}.mu`, "must be zero or more");
     if (sketch.motion?.freeX && restrainsX(s)) {
       err(p, `restrains x, but the body is free to move in x (motion.freeX): remove the support or turn it to act along y only`);

@@ -144,6 +144,29 @@ describe("invalid sketch files", () => {
     expect(r.points[1]).toMatchObject({ ok: false, errors: [{ path: "loads[0].fy", message: expect.stringMatching(/^is too large to solve/) }] });
   });
 
+  it("a support spring too soft to solve with is refused with the field named; a soft one that is not, solves", () => {
+    const on = (stiffness: number) =>
+      sketch({
+        gravity: 10,
+        bodies: [{ id: "b", outline: box(1, 1), mass: 1 }],
+        supports: [
+          { id: "pin", body: "b", kind: "pin", at: [0, 0], stiffness },
+          { id: "r", body: "b", kind: "roller", at: [1, 0], angle: 90, stiffness },
+        ],
+      });
+    // every spring at 1e-300 N/m used to read as "unrestrained" with no reactions (the stiffness matrix underflows)
+    expect(errorsOf(on(1e-300))).toEqual([
+      { path: "supports[0].stiffness", message: "is too small to solve with: at least 0.000001 N/m (a support that carries nothing is better removed)" },
+      { path: "supports[1].stiffness", message: "is too small to solve with: at least 0.000001 N/m (a support that carries nothing is better removed)" },
+    ]);
+    // a determinate pin and roller share 10 N by statics whatever their stiffness (hand calculation: 5 N each)
+    const r = solveFile(on(1e-3));
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    expect(r.bodies.b.status).toBe("holds");
+    expect(r.reactions.r.fy).toBeCloseTo(5, 9);
+    expect(r.reactions.pin.fy).toBeCloseTo(5, 9);
+  });
+
   it("numbers too large to solve are refused with the field named (the solve would overflow)", () => {
     const pinned = (parts: Partial<SketchFileInput>) =>
       sketch({
