@@ -3,7 +3,7 @@
 // the envelope, each support's design load, and the factors of safety. The editor's Cases tab and
 // a version's review page show the same tables.
 import type { StudyResult } from "@/solver/cases";
-import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, stabilityTable, unsolvedWords } from "@/solver/report";
+import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, stabilityTable, unsolvedWords } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
@@ -54,7 +54,7 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
       </div>
       {unsolved ? null : (
         <p className="mt-2 text-[11.5px] text-ink-faint">
-          Design load from — {Object.entries(result.envelope).map(([id, e]) => `${id}: ${nameOf(e.design.case)}`).join(" · ")}
+          Design load from — {Object.entries(result.envelope).map(([id, e]) => `${nameIn(result, id)}: ${nameOf(e.design.case)}`).join(" · ")}
         </p>
       )}
     </>

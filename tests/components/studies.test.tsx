@@ -158,6 +158,8 @@ describe("Cases tab", () => {
     const envelope = screen.getByTestId("envelope");
     const jackMargin = within(envelope).getAllByRole("row").find((r) => r.querySelector("[data-col=support]")?.textContent === "front jack" && r.querySelector("[data-col=component]")?.textContent === "Margin")!;
     expect(jackMargin.querySelector("[data-col=minCase]")!.textContent).toBe(nameOf(study.envelope.jack.components.margin!.min.case));
+    // the line under the factors of safety names the supports by their labels too
+    expect(screen.getByText(/^Design load from — /).textContent).toContain(`front jack: ${nameOf(study.envelope.jack.design.case)}`);
     expect(screen.getByTestId("stability").textContent).toMatch(/overturning/);
     expect(screen.getByTestId("stability").textContent).toMatch(/kN·m/);
   });
