@@ -4,6 +4,7 @@ import { notFound, redirect } from "next/navigation";
 import { cache } from "react";
 import { getRole } from "@/db/queries/workspaces";
 import { getAuth, type AuthSession } from "./auth";
+import { PATH_HEADER } from "./request-path";
 import { can, type Permission, type Role } from "./roles";
 import { isUuid } from "./schemas";
 
@@ -21,10 +22,11 @@ export function safeNext(next: string | null | undefined, fallback = "/workspace
   return next;
 }
 
-/** Pages for signed-in people call this first: signed out → /sign-in, then back to `next`. */
+/** Pages for signed-in people call this first: signed out → /sign-in, then back to the page
+ *  asked for (the address `proxy.ts` passes on), or to `next` when that is not known. */
 export async function requirePageSession(next: string): Promise<AuthSession> {
   const s = await currentSession();
-  if (!s) redirect(`/sign-in?next=${encodeURIComponent(safeNext(next))}`);
+  if (!s) redirect(`/sign-in?next=${encodeURIComponent(safeNext((await headers()).get(PATH_HEADER) ?? next, safeNext(next)))}`);
   return s;
 }
 

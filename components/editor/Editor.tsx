@@ -227,6 +227,7 @@ function useAutosave(store: EditorStore, persistence: SketchPersistence, ready: 
 }
 
 export function SketchUnavailable({ message }: { message: string }) {
+  const [here] = useState(() => (typeof window === "undefined" ? "/sketches/new" : window.location.pathname + window.location.search));
   return (
     <div className="drafting-grid flex min-h-screen items-center justify-center px-6">
       <div className="max-w-md rounded-lg border border-rule bg-paper-card p-6 shadow-[0_1px_0_#cfc8b8]">
@@ -235,7 +236,8 @@ export function SketchUnavailable({ message }: { message: string }) {
           {message}
         </p>
         <div className="mt-5 flex gap-3 text-sm">
-          <Link href="/sign-in" className="rounded-md bg-ink px-3.5 py-1.5 font-medium text-paper hover:bg-ink-soft">
+          {/* back to this sketch once signed in */}
+          <Link href={`/sign-in?next=${encodeURIComponent(here)}`} className="rounded-md bg-ink px-3.5 py-1.5 font-medium text-paper hover:bg-ink-soft">
             Sign in
           </Link>
           <Link href="/sketches/new" className="rounded-md border border-ink/20 px-3.5 py-1.5 font-medium hover:border-ink/40">

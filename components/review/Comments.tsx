@@ -118,6 +118,26 @@ function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label
   );
 }
 
+/**
+ * A mutation that runs once at a time: a second `mutate` while one is on its way (a double-click,
+ * before the button shows itself busy) is dropped, so a comment is never posted twice.
+ */
+export function useOneAtATime<R extends { mutate: (vars: never, opts?: never) => void }>(mutation: R): R {
+  const running = useRef(false);
+  const mutate = ((vars: never, opts?: { onSettled?: (...a: unknown[]) => void }) => {
+    if (running.current) return;
+    running.current = true;
+    mutation.mutate(vars, {
+      ...opts,
+      onSettled: (...a: unknown[]) => {
+        running.current = false;
+        opts?.onSettled?.(...a);
+      },
+    } as never);
+  }) as R["mutate"];
+  return { ...mutation, mutate };
+}
+
 function useCommentMutations(commentsPath: string, onChanged: () => void) {
   const qc = useQueryClient();
   const done = () => {
@@ -126,16 +146,18 @@ function useCommentMutations(commentsPath: string, onChanged: () => void) {
   };
   return {
     // the comment first, then its files (each attached to the comment that now exists)
-    post: useMutation({
-      mutationFn: async ({ files, ...body }: { body: string; pin?: CommentPin | null; parentId?: string; files?: File[] }) => {
-        const made = await apiFetch<{ comment: { id: string } }>(commentsPath, { method: "POST", body });
-        return { problems: files?.length ? await attachFiles(made.comment.id, files) : [] };
-      },
-      onSuccess: done,
-    }),
-    unattach: useMutation({ mutationFn: removeAttachment, onSuccess: done }),
-    patch: useMutation({ mutationFn: (v: { id: string; body: { body?: string; resolved?: boolean } }) => apiFetch(`/api/comments/${v.id}`, { method: "PATCH", body: v.body }), onSuccess: done }),
-    remove: useMutation({ mutationFn: (id: string) => apiFetch(`/api/comments/${id}`, { method: "DELETE" }), onSuccess: done }),
+    post: useOneAtATime(
+      useMutation({
+        mutationFn: async ({ files, ...body }: { body: string; pin?: CommentPin | null; parentId?: string; files?: File[] }) => {
+          const made = await apiFetch<{ comment: { id: string } }>(commentsPath, { method: "POST", body });
+          return { problems: files?.length ? await attachFiles(made.comment.id, files) : [] };
+        },
+        onSuccess: done,
+      }),
+    ),
+    unattach: useOneAtATime(useMutation({ mutationFn: removeAttachment, onSuccess: done })),
+    patch: useOneAtATime(useMutation({ mutationFn: (v: { id: string; body: { body?: string; resolved?: boolean } }) => apiFetch(`/api/comments/${v.id}`, { method: "PATCH", body: v.body }), onSuccess: done })),
+    remove: useOneAtATime(useMutation({ mutationFn: (id: string) => apiFetch(`/api/comments/${id}`, { method: "DELETE" }), onSuccess: done })),
   };
 }
 

@@ -5,7 +5,8 @@
 import { randomBytes } from "node:crypto";
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BASE_URL, shot } from "./browser";
+import { PASSWORD } from "../api/helpers";
+import { BASE_URL, openBrowser, shot } from "./browser";
 import { makeCast, openEditor, retitle, saveVersion, signInAs, type Cast } from "./versions-helpers";
 
 const tag = randomBytes(3).toString("hex");
@@ -102,6 +103,27 @@ describe("versioned sketches in the browser", () => {
     await page.getByTestId("version-bar").waitFor();
     await page.waitForTimeout(600);
     expect(await page.getByTestId("kept-work").count()).toBe(0);
+  });
+
+  it("a signed-out reader of a link (a review mail's) signs in and lands on that very page", async () => {
+    const ctx = await openBrowser();
+    open.push(ctx);
+    const page = await ctx.newPage();
+    const history = `/workspaces/${ws}/sketches/${sketchId}`;
+    await page.goto(`${BASE_URL}${history}?tab=versions`);
+    await page.waitForURL(/\/sign-in\?next=/);
+    expect(new URL(page.url()).searchParams.get("next")).toBe(`${history}?tab=versions`);
+    await page.getByLabel("E-mail address").fill(cast.checker.email);
+    await page.getByLabel("Password", { exact: true }).fill(PASSWORD);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL((u) => u.pathname === history);
+    await page.getByTestId("version-row-2").waitFor();
+    // the editor's own sign-in link comes back to the sketch too
+    await ctx.clearCookies();
+    await page.goto(`${BASE_URL}/sketches/${sketchId}`);
+    const link = page.getByRole("link", { name: "Sign in" });
+    await link.waitFor();
+    expect(await link.getAttribute("href")).toBe(`/sign-in?next=${encodeURIComponent(`/sketches/${sketchId}`)}`);
   });
 
   it("a checker reads the sketch but cannot save a version", async () => {
