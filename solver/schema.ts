@@ -249,8 +249,9 @@ export const underlaySchema = z.strictObject(
     width: z.number(say).int(say).positive(say),
     height: z.number(say).int(say).positive(say),
     /** world position (m) of the image's top-left corner */
-    origin: z.tuple([finite(), finite()], { error: "must be a position [x, y]" }),
-    metresPerPixel: z.number(say).positive({ error: "must be more than zero" }),
+    origin: z.tuple([finite().min(-1e6, { error: "must be within 1,000 km of (0, 0)" }).max(1e6, { error: "must be within 1,000 km of (0, 0)" }), finite().min(-1e6, { error: "must be within 1,000 km of (0, 0)" }).max(1e6, { error: "must be within 1,000 km of (0, 0)" })], { error: "must be a position [x, y]" }),
+    // a drawing, a photo or a site plan: 0.001 mm to 100 m a pixel (the editor's scale refuses others)
+    metresPerPixel: z.number(say).positive({ error: "must be more than zero" }).min(1e-6, { error: "must be at least 0.000001 (0.001 mm a pixel)" }).max(100, { error: "must be at most 100 (m a pixel)" }),
     /** degrees, counter-clockwise */
     rotation: finite().default(0),
     opacity: z.number(say).min(0, say).max(1, say).default(0.6),

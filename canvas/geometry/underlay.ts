@@ -14,6 +14,10 @@ export function fitNewUnderlay(size: { width: number; height: number }, view: Vi
   return { origin: toWorld(view, topLeft), metresPerPixel };
 }
 
+/** The scales an underlay may take (m a pixel); the file format refuses others. */
+export const MIN_METRES_PER_PIXEL = 1e-6;
+export const MAX_METRES_PER_PIXEL = 100;
+
 export type ScaleReading = { ok: true; distanceM: number; metresPerPixel: number; pixels: number } | { ok: false; message: string };
 
 /** The scale from two marks (image pixels) and the distance typed between them ("2.4 m", "96 in"). */
@@ -27,7 +31,12 @@ export function readScale(a: Vec2, b: Vec2, text: string): ScaleReading {
     return { ok: false, message: (err as Error).message };
   }
   try {
-    return { ok: true, distanceM, metresPerPixel: calibrate(a, b, distanceM), pixels };
+    const metresPerPixel = calibrate(a, b, distanceM);
+    // a drawing, a photo or a site plan: from a thousandth of a millimetre to 100 m a pixel (a
+    // typo in the exponent or the unit lands far outside, and would put the drawing off the page)
+    if (metresPerPixel < MIN_METRES_PER_PIXEL || metresPerPixel > MAX_METRES_PER_PIXEL)
+      return { ok: false, message: `That makes ${metresPerPixel.toExponential(2)} m a pixel; a drawing to trace is between 0.001 mm and 100 m a pixel. Check the number and its unit.` };
+    return { ok: true, distanceM, metresPerPixel, pixels };
   } catch (err) {
     const m = (err as Error).message;
     return { ok: false, message: m.charAt(0).toUpperCase() + m.slice(1) + "." };

@@ -100,6 +100,22 @@ describe("the scale from two marks", () => {
     expect(readScale(a, a, "1 m")).toEqual({ ok: false, message: "The two marks are on the same pixel: pick two points apart." });
   });
 
+  it("refuses a scale no drawing has (a typo in the exponent or the unit), and the file format refuses it too", () => {
+    const a: Vec2 = [0, 0];
+    const b: Vec2 = [800, 0];
+    expect(readScale(a, b, "1e30 m")).toMatchObject({ ok: false, message: /^That makes 1\.25e\+27 m a pixel; a drawing to trace is between 0\.001 mm and 100 m a pixel/ });
+    expect(readScale(a, b, "0.0001 mm")).toMatchObject({ ok: false });
+    // a site plan at 50 m a pixel and a detail at 0.01 mm a pixel still read
+    expect(readScale(a, b, "40 km")).toMatchObject({ ok: true, metresPerPixel: 50 });
+    expect(readScale(a, b, "8 mm")).toMatchObject({ ok: true });
+    const withUnderlay = (u: Record<string, unknown>) =>
+      parseSketch({ ...emptySketch(), underlay: { upload: "u1", width: 800, height: 600, origin: [0, 0], metresPerPixel: 0.005, ...u } });
+    expect(withUnderlay({}).ok).toBe(true);
+    const far = withUnderlay({ origin: [-2.5e29, 5e29], metresPerPixel: 1.25e27 });
+    expect(far.ok).toBe(false);
+    if (!far.ok) expect(far.errors.map((e) => e.path).sort()).toEqual(["underlay.metresPerPixel", "underlay.origin[0]", "underlay.origin[1]"]);
+  });
+
   it("calibrating on the test drawing gives 5 mm a pixel, keeps the first mark in place, and a traced body has the drawing's size within a pixel", async () => {
     const image = await markedDrawing();
     const marks = await findMarks(image);
