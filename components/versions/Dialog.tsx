@@ -36,6 +36,15 @@ export function Dialog({
       if (back?.isConnected) back.focus();
     }
   }, [open]);
+  // a dialog its page takes away while open (rendered only while needed) gives the focus back too
+  useEffect(
+    () => () => {
+      const back = opener.current;
+      opener.current = null;
+      if (back?.isConnected) back.focus();
+    },
+    [],
+  );
   return (
     <dialog
       ref={ref}
