@@ -4,6 +4,7 @@ import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
 import { authClient } from "@/lib/auth-client";
 import { emailSchema, passwordSchema, personNameSchema } from "@/lib/schemas";
+import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { authErrorMessage } from "./messages";
 
 type Errors = Partial<Record<"name" | "email" | "password", string>>;
@@ -16,6 +17,7 @@ export function SignUpForm({ defaultEmail = "" }: { defaultEmail?: string }) {
   const [fieldErrors, setFieldErrors] = useState<Errors>({});
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  useFocusFirstError(fieldErrors);
 
   async function onSubmit(e: FormEvent) {
     e.preventDefault();

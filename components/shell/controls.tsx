@@ -54,7 +54,8 @@ export function Field({
   id,
   ...input
 }: InputHTMLAttributes<HTMLInputElement> & { label: string; hint?: ReactNode; error?: string; id: string }) {
-  const described = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ") || undefined;
+  // the hint gives way to the error on screen, and so in what the field is described by
+  const described = (error ? `${id}-error` : hint ? `${id}-hint` : "") || undefined;
   return (
     <div className="space-y-1">
       <label htmlFor={id} className="block text-sm font-medium text-ink">

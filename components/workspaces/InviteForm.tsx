@@ -1,6 +1,7 @@
 "use client";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState, type FormEvent } from "react";
+import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { Button, Field, Notice, Select } from "@/components/shell/controls";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { ROLE_INFO, ROLES, type Role } from "@/lib/roles";
@@ -14,6 +15,7 @@ export function InviteForm({ workspaceId }: { workspaceId: string }) {
   const [email, setEmail] = useState("");
   const [role, setRole] = useState<Role>("editor");
   const [fieldErrors, setFieldErrors] = useState<{ email?: string; role?: string }>({});
+  useFocusFirstError(fieldErrors, (k) => `invite-${k}`);
   const [copied, setCopied] = useState(false);
 
   const invite = useMutation({
