@@ -25,12 +25,22 @@ export function Button({
   children,
   ...rest
 }: ButtonHTMLAttributes<HTMLButtonElement> & { tone?: Tone; busy?: boolean; size?: "sm" | "md" }) {
+  // busy, it refuses presses but stays focusable: a disabled button drops the keyboard's focus to
+  // the page's start, and it would not come back when the request fails
   return (
     <button
       {...rest}
-      disabled={rest.disabled || busy}
+      disabled={rest.disabled}
+      aria-disabled={busy || undefined}
       aria-busy={busy || undefined}
-      className={`${buttonClass(tone, size)} ${className}`}
+      onClick={(e) => {
+        if (busy) {
+          e.preventDefault();
+          return;
+        }
+        rest.onClick?.(e);
+      }}
+      className={`${buttonClass(tone, size)} aria-disabled:cursor-wait aria-disabled:opacity-80 ${className}`}
     >
       {busy ? <Spinner /> : null}
       {children}
