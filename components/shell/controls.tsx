@@ -1,6 +1,6 @@
 // Form controls and small status pieces shared by the account, workspace and (later) sketch screens.
 import Link from "next/link";
-import type { ButtonHTMLAttributes, InputHTMLAttributes, KeyboardEvent, ReactNode, SelectHTMLAttributes } from "react";
+import type { ComponentPropsWithRef, InputHTMLAttributes, KeyboardEvent, ReactNode, SelectHTMLAttributes } from "react";
 
 type Tone = "primary" | "secondary" | "danger" | "quiet";
 
@@ -24,7 +24,7 @@ export function Button({
   className = "",
   children,
   ...rest
-}: ButtonHTMLAttributes<HTMLButtonElement> & { tone?: Tone; busy?: boolean; size?: "sm" | "md" }) {
+}: ComponentPropsWithRef<"button"> & { tone?: Tone; busy?: boolean; size?: "sm" | "md" }) {
   // busy, it refuses presses but stays focusable: a disabled button drops the keyboard's focus to
   // the page's start, and it would not come back when the request fails
   return (

@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Button, Notice, Select, Skeleton } from "@/components/shell/controls";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { can, ROLE_INFO, ROLES, type Role } from "@/lib/roles";
@@ -19,22 +19,42 @@ function RowActions({ member, canRemove, isSelf, lastOwner, onRemove, busy }: {
   busy: boolean;
 }) {
   const [confirming, setConfirming] = useState(false);
+  // the keyboard follows the question: to "Yes" when it is asked, back to the button when it is not
+  const yes = useRef<HTMLButtonElement>(null);
+  const ask = useRef<HTMLButtonElement>(null);
+  const moved = useRef(false);
+  useEffect(() => {
+    if (!moved.current) return;
+    (confirming ? yes : ask).current?.focus();
+  }, [confirming]);
+  const settle = (to: boolean) => {
+    moved.current = true;
+    setConfirming(to);
+  };
   if (lastOwner) return <span className="text-xs text-ink-faint">Last owner</span>;
   if (!isSelf && !canRemove) return null;
   const verb = isSelf ? "Leave" : "Remove";
   if (!confirming) {
     return (
-      <Button size="sm" tone="danger" onClick={() => setConfirming(true)} aria-label={`${verb} ${isSelf ? "this workspace" : member.name}`}>
+      <Button ref={ask} size="sm" tone="danger" onClick={() => settle(true)} aria-label={`${verb} ${isSelf ? "this workspace" : member.name}`}>
         {verb}
       </Button>
     );
   }
   return (
-    <span className="inline-flex items-center gap-1.5">
-      <Button size="sm" tone="danger" busy={busy} onClick={onRemove}>
+    // Escape takes the question back, as Cancel does
+    <span
+      className="inline-flex items-center gap-1.5"
+      onKeyDown={(e) => {
+        if (e.key !== "Escape") return;
+        e.preventDefault();
+        settle(false);
+      }}
+    >
+      <Button ref={yes} size="sm" tone="danger" busy={busy} onClick={onRemove}>
         {isSelf ? "Yes, leave" : `Yes, remove ${member.name.split(" ")[0]}`}
       </Button>
-      <Button size="sm" tone="quiet" onClick={() => setConfirming(false)}>
+      <Button size="sm" tone="quiet" onClick={() => settle(false)}>
         Cancel
       </Button>
     </span>
@@ -130,7 +150,9 @@ export function MembersTable({
                             label={`Role of ${m.name}`}
                             hideLabel
                             value={m.role}
-                            disabled={lastOwner || changeRole.isPending}
+                            // not disabled while a change is on its way: that would drop the keyboard's focus
+                            disabled={lastOwner}
+                            aria-busy={(changeRole.isPending && changeRole.variables?.member.userId === m.userId) || undefined}
                             title={lastOwner ? "The last owner keeps the owner role: make someone else an owner first." : undefined}
                             onChange={(e) => changeRole.mutate({ member: m, role: e.target.value as Role })}
                           >
