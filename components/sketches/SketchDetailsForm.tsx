@@ -1,7 +1,7 @@
 "use client";
 // Rename a sketch, describe it and tag it (editors and owners).
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { sketchTitleSchema, tagsSchema } from "@/lib/sketch-schemas";
@@ -21,6 +21,10 @@ export function SketchDetailsForm({
 }) {
   const qc = useQueryClient();
   const [form, setForm] = useState({ title, description, tags: tags.join(", ") });
+  // opened from "Edit details": the keyboard goes to the first field
+  useEffect(() => {
+    document.getElementById("sketch-title")?.focus();
+  }, []);
   const [local, setLocal] = useState<Record<string, string>>({});
   const save = useMutation({
     mutationFn: (body: { title: string; description: string; tags: string[] }) => apiFetch(`/api/sketches/${sketchId}`, { method: "PATCH", body }),

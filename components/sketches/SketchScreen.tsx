@@ -3,7 +3,7 @@
 import { useMutation, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { ActivityFeed } from "@/components/review/ActivityFeed";
 import { ReviewBadge } from "@/components/review/SignOff";
 import { Button, Crumb, Notice, Panel, buttonClass } from "@/components/shell/controls";
@@ -71,6 +71,13 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
   const targets = useForkTargets();
   const canFork = (targets.data?.length ?? 0) > 0;
   const [editing, setEditing] = useState(false);
+  // closed again (saved or cancelled), the keyboard goes back to "Edit details"
+  const editButton = useRef<HTMLButtonElement>(null);
+  const wasEditing = useRef(false);
+  useEffect(() => {
+    if (wasEditing.current && !editing) editButton.current?.focus();
+    wasEditing.current = editing;
+  }, [editing]);
   const [forking, setForking] = useState<number | null>(null);
   const [deleting, setDeleting] = useState(false);
   const base = `/workspaces/${sketch.workspaceId}/sketches/${sketch.id}`;
@@ -114,7 +121,7 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
               </Button>
             ) : null}
             {can(role, "sketch.edit") && !editing ? (
-              <Button tone="secondary" onClick={() => setEditing(true)}>
+              <Button ref={editButton} tone="secondary" onClick={() => setEditing(true)}>
                 Edit details
               </Button>
             ) : null}
