@@ -47,7 +47,7 @@ const DEFAULT_MESSAGE: Record<ErrorCode, string> = {
   gone: "This is no longer available.",
   invitation_expired: "This invitation has expired. Ask an owner of the workspace to send a new one.",
   invitation_used: "This invitation has already been used.",
-  invitation_withdrawn: "This invitation was withdrawn by an owner of the workspace.",
+  invitation_withdrawn: "This invitation was withdrawn by an owner of the workspace, or replaced by a newer one to the same address: use the newest invitation mail.",
   payload_too_large: "The request body is too large.",
   unsupported_media_type: "Send the request body as application/json.",
   rate_limited: "Too many requests; wait a moment and try again.",
