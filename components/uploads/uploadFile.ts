@@ -34,7 +34,10 @@ export async function uploadFile(path: string, file: File): Promise<UploadAnswer
   }
   const data = (await res.json().catch(() => null)) as { upload?: UploadAnswer; error?: { code?: ErrorCode; message?: string; fields?: FieldError[] } } | null;
   if (!res.ok || !data?.upload) {
-    throw new ApiError(res.status, data?.error?.code ?? "internal", data?.error?.message ?? `The server answered ${res.status}.`, data?.error?.fields ?? []);
+    const message = data?.error?.message ?? `The server answered ${res.status}.`;
+    // the refusal names the file, as the size check above does (several may be sent at once)
+    const named = message.includes(file.name) ? message : `“${file.name}”: ${message}`;
+    throw new ApiError(res.status, data?.error?.code ?? "internal", named, data?.error?.fields ?? []);
   }
   return data.upload;
 }
