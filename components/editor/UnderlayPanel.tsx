@@ -2,7 +2,7 @@
 // "Underlay": a drawing, vendor sheet or photo under the sketch to trace over. Upload it (saved
 // sketches: the file lives in the sketch's workspace), set its scale from two marks, move, turn,
 // fade, hide and lock it. Every change is a command, so undo works and the version saves it.
-import { useRef, useState } from "react";
+import { useId, useRef, useState } from "react";
 import { useEditor, useStores } from "@/canvas/context";
 import type { Command } from "@/canvas/commands/define";
 import { lockUnderlay, moveUnderlay, placeUnderlay, removeUnderlay, rotateUnderlay, setUnderlayOpacity, showUnderlay } from "@/canvas/commands/underlay";
@@ -18,6 +18,7 @@ import { BUTTON, HEADING, INPUT } from "./ui";
 function ValueField({ label, value, unit, kind, onCommit, disabled, testId }: { label: string; value: number; unit: string; kind: "length" | "angle"; onCommit: (v: number) => void; disabled: boolean; testId: string }) {
   const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const errorId = useId();
   const commit = () => {
     if (draft === null) return;
     try {
@@ -38,6 +39,7 @@ function ValueField({ label, value, unit, kind, onCommit, disabled, testId }: { 
           value={draft ?? formatNumber(value, 5)}
           disabled={disabled}
           aria-invalid={error ? true : undefined}
+          aria-describedby={error ? errorId : undefined}
           title={error ?? undefined}
           data-testid={testId}
           onFocus={() => setDraft(formatNumber(value, 5))}
@@ -53,7 +55,11 @@ function ValueField({ label, value, unit, kind, onCommit, disabled, testId }: { 
         />
         <span className="text-[11.5px] text-ink-faint">{unit === "deg" ? "°" : unit}</span>
       </span>
-      {error ? <span className="mt-0.5 block text-[11px] font-normal text-caution">{error}</span> : null}
+      {error ? (
+        <span id={errorId} className="mt-0.5 block text-[11px] font-normal text-caution">
+          {error}
+        </span>
+      ) : null}
     </label>
   );
 }

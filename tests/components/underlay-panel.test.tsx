@@ -105,7 +105,13 @@ describe("the Underlay section", () => {
     await user.click(screen.getByTestId("underlay-locked"));
     const x = screen.getByTestId("underlay-x");
     await user.clear(x);
+    // a value it cannot read is said beside the field, and the field is described by it
+    await user.type(x, "2 kg{Enter}");
+    expect(x).toHaveAttribute("aria-invalid", "true");
+    expect(document.getElementById(x.getAttribute("aria-describedby")!)?.textContent).toMatch(/is a mass/);
+    await user.clear(x);
     await user.type(x, "1500 mm{Enter}");
+    expect(x).not.toHaveAttribute("aria-describedby");
     expect(store.getState().sketch.underlay!.origin[0]).toBeCloseTo(1.5, 9);
     expect(store.getState().past.map((e) => e.label)).toEqual([
       "Put a drawing under the sketch",
