@@ -58,13 +58,16 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
           Set the scale from two marks
         </button>
       ) : marks.length < 2 ? (
-        <div className="flex items-center gap-2">
-          <p className="flex-1 text-[12px] text-accent-deep" aria-live="polite">
-            {marks.length === 0 ? "Click the first mark on the drawing…" : "Click the second mark…"}
-          </p>
-          <button type="button" className={BUTTON} onClick={stop}>
-            Stop
-          </button>
+        <div className="space-y-1.5">
+          <div className="flex items-center gap-2">
+            <p className="flex-1 text-[12px] text-accent-deep" aria-live="polite">
+              {marks.length === 0 ? "Click the first mark on the drawing…" : "Click the second mark…"}
+            </p>
+            <button type="button" className={BUTTON} onClick={stop}>
+              Stop
+            </button>
+          </div>
+          <TypedMarks u={u} onMarks={(points) => editor.getState().setTool({ kind: "calibrate", points })} />
         </div>
       ) : (
         <form
@@ -105,5 +108,69 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
         </form>
       )}
     </div>
+  );
+}
+
+/**
+ * The two marks typed as image pixels (read off an image viewer), for the keyboard and for a
+ * precise scale bar: the same as clicking them. Pixels count from the image's top-left corner.
+ */
+function TypedMarks({ u, onMarks }: { u: UnderlayFile; onMarks: (points: [number, number][]) => void }) {
+  const [values, setValues] = useState(["", "", "", ""]);
+  const [problem, setProblem] = useState<string | null>(null);
+  const names = ["first mark x", "first mark y", "second mark x", "second mark y"];
+  const use = () => {
+    const n = values.map((v) => Number(v.trim()));
+    const bad = n.findIndex((v, i) => values[i].trim() === "" || !Number.isFinite(v) || v < 0 || v > (i % 2 ? u.height : u.width));
+    if (bad >= 0) {
+      setProblem(`The ${names[bad]} must be a pixel of the image: 0 to ${bad % 2 ? u.height : u.width}.`);
+      document.getElementById(`underlay-mark-${bad}`)?.focus();
+      return;
+    }
+    setProblem(null);
+    onMarks([
+      [n[0], n[1]],
+      [n[2], n[3]],
+    ]);
+  };
+  return (
+    <form
+      className="space-y-1"
+      aria-label="Type the two marks"
+      onSubmit={(e) => {
+        e.preventDefault();
+        use();
+      }}
+    >
+      <p className="text-[11.5px] leading-snug text-ink-faint" id="underlay-marks-note">
+        Or type them, in pixels of the image ({u.width} × {u.height}) from its top-left corner:
+      </p>
+      <div className="grid grid-cols-4 gap-1">
+        {names.map((name, i) => (
+          <input
+            key={name}
+            id={`underlay-mark-${i}`}
+            // the keyboard's way in: the button it came from is gone
+            autoFocus={i === 0}
+            className={INPUT}
+            inputMode="decimal"
+            aria-label={name}
+            aria-describedby={problem ? "underlay-marks-problem" : "underlay-marks-note"}
+            placeholder={name.endsWith("x") ? "x" : "y"}
+            value={values[i]}
+            onChange={(e) => setValues(values.map((v, j) => (j === i ? e.target.value : v)))}
+            data-testid={`underlay-mark-${i}`}
+          />
+        ))}
+      </div>
+      {problem ? (
+        <p id="underlay-marks-problem" className="text-[11.5px] text-caution" role="alert">
+          {problem}
+        </p>
+      ) : null}
+      <button type="submit" className={BUTTON} data-testid="underlay-use-marks">
+        Use these marks
+      </button>
+    </form>
   );
 }

@@ -81,7 +81,16 @@ describe("the Underlay section", () => {
     await user.click(screen.getByTestId("underlay-calibrate"));
     expect(store.getState().tool).toEqual({ kind: "calibrate", points: [] });
     expect(screen.getByTestId("underlay-scale")).toHaveTextContent("Click the first mark on the drawing");
-    act(() => store.getState().setTool({ kind: "calibrate", points: [[300, 520], [700, 520]] }));
+    // from the keyboard: the marks typed in image pixels (the button it came from is gone: the
+    // focus is on the first of them); one off the image is refused, naming it
+    expect(document.activeElement).toBe(screen.getByTestId("underlay-mark-0"));
+    for (const [i, v] of ["300", "520", "1700", "520"].entries()) await user.type(screen.getByTestId(`underlay-mark-${i}`), v);
+    await user.click(screen.getByTestId("underlay-use-marks"));
+    expect(screen.getByRole("alert")).toHaveTextContent("The second mark x must be a pixel of the image: 0 to 1000.");
+    expect(document.activeElement).toBe(screen.getByTestId("underlay-mark-2"));
+    await user.clear(screen.getByTestId("underlay-mark-2"));
+    await user.type(screen.getByTestId("underlay-mark-2"), "700{Enter}");
+    expect(store.getState().tool).toEqual({ kind: "calibrate", points: [[300, 520], [700, 520]] });
     const distance = screen.getByTestId("underlay-distance");
     await user.type(distance, "2 kg");
     expect(screen.getByTestId("underlay-scale")).toHaveTextContent("2 kg is a mass (kg), but this field needs a length (m)");
