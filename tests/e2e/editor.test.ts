@@ -145,6 +145,7 @@ describe("sketch editor", () => {
     const msg = page.getByTestId("unavailable-message");
     await msg.waitFor();
     expect(await msg.textContent()).toMatch(/Sign in to open this sketch|does not exist|There is no sketch/);
-    expect(await page.getByRole("link", { name: "Sign in" }).getAttribute("href")).toBe("/sign-in");
+    // signing in comes back to the sketch asked for
+    expect(await page.getByRole("link", { name: "Sign in" }).getAttribute("href")).toBe(`/sign-in?next=${encodeURIComponent("/sketches/does-not-exist")}`);
   });
 });
