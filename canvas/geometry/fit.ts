@@ -21,6 +21,8 @@ function geometryBox(scene: Scene) {
   return boxOf([...scene.bodies.flatMap((b) => [...b.outline, b.cg]), ...scene.items.flatMap(pointsOf)].filter((p) => Number.isFinite(p[0]) && Number.isFinite(p[1])));
 }
 
+const SIDES = ["left", "right", "top", "bottom"] as const;
+
 /** One frame for every scene: the union of their geometry, with room for what each draws around it. */
 export function fitScenes(drawn: Drawn[], width: number, height: number, opts: { units?: UnitSystem; top?: number } = {}): View {
   const boxes = drawn.map((d) => geometryBox(d.scene)).filter((b) => Number.isFinite(b.minX));
@@ -51,10 +53,11 @@ export function fitScenes(drawn: Drawn[], width: number, height: number, opts: {
     }
     const margins = { left: m.left + GAP, right: m.right + GAP, top: m.top + GAP + (opts.top ?? 0), bottom: m.bottom + GAP };
     // without a result yet, the reactions' arrows are not measured: keep the first guess's room for them
-    if (drawn.some((d) => !d.result)) for (const side of ["left", "right", "top", "bottom"] as const) margins[side] = Math.max(margins[side], guess[side]);
-    const sides = ["left", "right", "top", "bottom"] as const;
-    if (used && i >= 2 && sides.every((k) => margins[k] <= used![k] + 0.5)) break;
-    if (used && i >= 1) for (const k of sides) margins[k] = Math.max(margins[k], used[k]);
+    if (drawn.some((d) => !d.result)) for (const side of SIDES) margins[side] = Math.max(margins[side], guess[side]);
+    if (used) {
+      if (i >= 2 && SIDES.every((k) => margins[k] <= used![k] + 0.5)) break;
+      for (const k of SIDES) margins[k] = Math.max(margins[k], used[k]);
+    }
     used = margins;
     view = fitView(box, width, height, margins);
   }

@@ -143,9 +143,8 @@ class Strokes {
     return this;
   }
 
-  /** How many strokes cross the box, leaving out those of owners from `lo` up to `hi` (or, with
-   *  `only`, counting only theirs). */
-  count(b: Box, lo: number, hi: number, only = false): number {
+  /** How many strokes cross the box, leaving out those of owners from `lo` up to `hi` (none by default). */
+  count(b: Box, lo = 0, hi = 0): number {
     const stamp = ++this.stamp;
     let n = 0;
     for (let x = Math.floor(b.x0 / CELL); x <= Math.floor(b.x1 / CELL); x++)
@@ -154,7 +153,7 @@ class Strokes {
           if (this.seen[k] === stamp) continue;
           this.seen[k] = stamp;
           const o = this.owners[k];
-          if ((o >= lo && o < hi) !== only) continue;
+          if (o >= lo && o < hi) continue;
           if (segmentHits(this.segs[k][0], this.segs[k][1], b)) n++;
         }
       }
@@ -172,8 +171,7 @@ function cost(b: Box, placed: readonly Box[], own: Own, moved: boolean): number 
     const a = overlapArea(b, q);
     if (a > 0) c += ON_LABEL_COST + a;
   }
-  const others = own.strokes.count(b, own.lo, own.hi);
-  return c + STROKE_COST * (moved ? others + own.strokes.count(b, own.lo, own.hi, true) : others);
+  return c + STROKE_COST * (moved ? own.strokes.count(b) : own.strokes.count(b, own.lo, own.hi));
 }
 
 /** The cheapest offset for a label whose own place is `box`; the earliest wins a tie. */

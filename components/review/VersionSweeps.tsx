@@ -20,6 +20,7 @@ function onWords(doc: SketchFile, sw: SweepFile): string {
 }
 
 export function VersionSweeps({ document, units }: { document: SketchFile; units: UnitSystem }) {
+  const names = useMemo(() => elementNames(document), [document]);
   const plotted = useMemo(
     () =>
       (document.sweeps ?? []).map((sw): Plotted => {
@@ -52,7 +53,7 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
               </p>
             ) : (
               <>
-                <SweepChart data={p.data} units={units} parameterLabel={name} limit={null} run={0} names={elementNames(document)} />
+                <SweepChart data={p.data} units={units} parameterLabel={name} limit={null} run={0} names={names} />
                 <ul className="text-xs text-ink-soft">
                   {p.markers.length ? (
                     p.markers.map((m) => <li key={m.words}>Crossing: {m.words}.</li>)

@@ -2,14 +2,13 @@
 // factors) or combination (its factored load set), one chart per unit (forces, moments, ratios) so
 // a moment is never drawn on a force axis, and the crossings of its margins found by the limit
 // finder (which a version's page lists under its own plot too).
-import { firstReached, limitEverywhere, reachedAt } from "@/solver/studySweep";
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import { findLimitWith } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
 import { linspace, sweepWith } from "@/solver/sweep";
-import { sweeperOn } from "@/solver/studySweep";
+import { firstReached, limitEverywhere, reachedAt, sweeperOn } from "@/solver/studySweep";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import type { ChartSpec } from "./chart";
 
@@ -40,12 +39,13 @@ export const sweepQuantities = (sw: SweepFile, supports: string[]): QuantitySpec
 
 /** Where each plotted margin of a kept sweep reaches zero, found by the limit finder, in words. */
 export function sweepMarkers(file: SketchFile, sw: SweepFile, quantities: QuantitySpec[]): SweepMarker[] {
+  const names = elementNames(file);
   return quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
     const lim = findLimitWith(sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter), [sw.from, sw.to], q);
     if (!lim.found) return [];
     const at = `${formatNumber(lim.value, 4)}${lim.unit ? ` ${prettyUnit(lim.unit)}` : ""}`;
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
-    const name = elementNames(file)[q.support] ?? q.support;
+    const name = names[q.support] ?? q.support;
     return [{ x: lim.value, label: `${name}: ${event.noun} at ${at}`, words: `${name}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at}` }];
   });
 }
@@ -57,6 +57,7 @@ export function sweepMarkers(file: SketchFile, sw: SweepFile, quantities: Quanti
 export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: QuantitySpec[]): string[] {
   const runs = (file.cases ?? []).filter((c) => !c.onlyInCombinations).length + (file.combinations ?? []).length;
   if (runs < 2) return [];
+  const names = elementNames(file);
   return quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
     const all = limitEverywhere(file, sw.parameter, [sw.from, sw.to], q);
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
@@ -69,7 +70,7 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
       if (!f.found) return `${r.name} none in the range`;
       return `${r.name} ${formatNumber(reachedAt(f, sw.from, sw.to)!, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row ? " (first)" : ""}`;
     });
-    return [`${elementNames(file)[q.support] ?? q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
+    return [`${names[q.support] ?? q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
   });
 }
 
@@ -77,6 +78,7 @@ export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, 
   const res = sweepWith(sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter), linspace(sw.from, sw.to, Math.min(sw.points, MAX_POINTS)));
   const quantities = sweepQuantities(sw, supports);
   const markers = sweepMarkers(file, sw, quantities);
+  const names = elementNames(file);
   const kinds = [...new Set(quantities.map((q) => displayKind(q.component)))];
   const charts = kinds.map((kind): ChartSpec => {
     const mine = quantities.filter((q) => displayKind(q.component) === kind);
@@ -90,7 +92,7 @@ export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, 
       xLabel: `${sw.parameter}${res.unit ? ` (${prettyUnit(res.unit)})` : ""}`,
       yLabel: displayUnit(mine[0].component, units, largest) || "ratio",
       series: mine.map((q) => ({
-        label: describeQuantity(q, elementNames(file)),
+        label: describeQuantity(q, names),
         markZero: marksZero(q.component),
         points: res.points.map((p) => [p.value, p.ok ? toDisplay(readQuantity(p.result, q), q.component, units, largest) : null] as [number, number | null]),
       })),

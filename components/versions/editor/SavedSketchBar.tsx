@@ -58,13 +58,13 @@ function useKeepUnsaved(flow: SaveFlow, waiting: boolean) {
       const e = stores.editor.getState();
       // mid-drag, what the drag started from
       const sketch = e.gesture ? e.gesture.origin : e.sketch;
+      const prior = readDraft(now.sketchId);
+      const same = prior?.baseVersion === on;
       if (!restored && baseDoc && sameDocument(sketch, baseDoc)) {
-        if (readDraft(now.sketchId)?.baseVersion === on) discardDraft(now.sketchId);
+        if (same) discardDraft(now.sketchId);
         return;
       }
       // a draft the save dialogs kept (a conflict, an ended session) keeps its message and what it knew
-      const prior = readDraft(now.sketchId);
-      const same = prior?.baseVersion === on;
       keepDraft({ sketchId: now.sketchId, baseVersion: on, latestVersion: Math.max(now.latest, same ? prior.latestVersion : 0), message: same ? prior.message : "", sketch });
     };
     const timer = setTimeout(keep, 500);

@@ -3,6 +3,18 @@ import { describe, expect, it } from "vitest";
 import { parseSketch, solveFile, solveSweep, type SketchFileInput } from "@/solver";
 import { box, expectRel, loadFixture, parsed, sketch } from "./helpers";
 
+/** A unit square of 1 kg on a pin at (0, 0) and a vertical roller at (1, 0) (g = 9.81 unless `parts` say), each spring of `stiffness` when given. */
+const onPinAndRoller = (parts: Partial<SketchFileInput> = {}, stiffness?: number) =>
+  sketch({
+    gravity: 9.81,
+    bodies: [{ id: "b", outline: box(1, 1), mass: 1 }],
+    supports: [
+      { id: "pin", body: "b", kind: "pin", at: [0, 0], ...(stiffness === undefined ? {} : { stiffness }) },
+      { id: "r", body: "b", kind: "roller", at: [1, 0], angle: 90, ...(stiffness === undefined ? {} : { stiffness }) },
+    ],
+    ...parts,
+  });
+
 const errorsOf = (doc: unknown) => {
   const p = parseSketch(doc);
   if (p.ok) throw new Error("expected errors");
@@ -145,15 +157,7 @@ describe("invalid sketch files", () => {
   });
 
   it("a support spring too soft to solve with is refused with the field named; a soft one that is not, solves", () => {
-    const on = (stiffness: number) =>
-      sketch({
-        gravity: 10,
-        bodies: [{ id: "b", outline: box(1, 1), mass: 1 }],
-        supports: [
-          { id: "pin", body: "b", kind: "pin", at: [0, 0], stiffness },
-          { id: "r", body: "b", kind: "roller", at: [1, 0], angle: 90, stiffness },
-        ],
-      });
+    const on = (stiffness: number) => onPinAndRoller({ gravity: 10 }, stiffness);
     // every spring at 1e-300 N/m used to read as "unrestrained" with no reactions (the stiffness matrix underflows)
     expect(errorsOf(on(1e-300))).toEqual([
       { path: "supports[0].stiffness", message: "is too small to solve with: at least 0.000001 N/m (a support that carries nothing is better removed)" },
@@ -168,16 +172,7 @@ describe("invalid sketch files", () => {
   });
 
   it("numbers too large to solve are refused with the field named (the solve would overflow)", () => {
-    const pinned = (parts: Partial<SketchFileInput>) =>
-      sketch({
-        gravity: 9.81,
-        bodies: [{ id: "b", outline: box(1, 1), mass: 1 }],
-        supports: [
-          { id: "pin", body: "b", kind: "pin", at: [0, 0] },
-          { id: "r", body: "b", kind: "roller", at: [1, 0], angle: 90 },
-        ],
-        ...parts,
-      });
+    const pinned = (parts: Partial<SketchFileInput>) => onPinAndRoller(parts);
     const tooLarge = "is too large to solve: the solver takes numbers up to ±1e18 in SI units (check the unit and the exponent)";
     expect(errorsOf(pinned({ bodies: [{ id: "b", outline: box(1, 1), mass: 1e308 }] }))).toEqual([{ path: "bodies[0].mass", message: tooLarge }]);
     expect(errorsOf(pinned({ loads: [{ id: "F", body: "b", kind: "force", at: [0.5, 1], fx: 0, fy: "-1e300 N" }] }))).toEqual([{ path: "loads[0].fy", message: tooLarge }]);
@@ -193,13 +188,9 @@ describe("invalid sketch files", () => {
   it("large but sane values still solve, with finite reactions", () => {
     // 1e12 N down at the middle of a 1 m span (a pin and a roller), on a body of 1e9 kg (g = 10)
     const r = solveFile(
-      sketch({
+      onPinAndRoller({
         gravity: 10,
         bodies: [{ id: "b", outline: box(1, 1), mass: 1e9 }],
-        supports: [
-          { id: "pin", body: "b", kind: "pin", at: [0, 0] },
-          { id: "r", body: "b", kind: "roller", at: [1, 0], angle: 90 },
-        ],
         loads: [{ id: "F", body: "b", kind: "force", at: [0.5, 1], fx: 0, fy: "-1e12 N" }],
       }),
     );
