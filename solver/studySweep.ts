@@ -111,7 +111,8 @@ export interface LimitEverywhere {
 /**
  * The same limit searched in each case (but those solved only in combinations) and each
  * combination: under which of them, and at what value, does the quantity reach the target?
- * A sketch with neither is searched as drawn.
+ * A sketch with neither is searched as drawn; one whose cases are all for combinations only,
+ * with no combination, is refused (the case study solves nothing either).
  */
 export function limitEverywhere(
   file: SketchFile,
@@ -126,7 +127,13 @@ export function limitEverywhere(
     ...(file.cases ?? []).filter((c) => !c.onlyInCombinations).map((c) => ({ id: c.id, name: c.name, kind: "case" as const, on: { case: c.id } })),
     ...(file.combinations ?? []).map((k) => ({ id: k.id, name: k.name, kind: "combination" as const, on: { combination: k.id } })),
   ];
-  if (!runs.length) runs.push({ id: "", name: "As drawn", kind: "as drawn", on: {} });
+  if (!runs.length) {
+    // cases all kept for combinations that are not there: the study solves nothing, and
+    // searching the drawing instead would answer a question nobody asked
+    if (file.cases?.length)
+      throw new Error("Every case is solved only in combinations and the sketch has no combination: there is nothing to search. Clear \"only in combinations\" on a case, or add a combination.");
+    runs.push({ id: "", name: "As drawn", kind: "as drawn", on: {} });
+  }
   return runs.map(({ on, ...run }, i) => {
     let result: LimitEverywhere["result"];
     try {

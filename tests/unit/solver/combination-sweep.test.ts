@@ -200,6 +200,17 @@ describe("the limit in every case and combination", () => {
     expectRel(r.value, (W * d) / (h * V), 1e-8);
   });
 
+  it("refuses, naming the fix, when every case is only for combinations and there is no combination (the case study solves nothing either)", () => {
+    const kept = { ...cart(), combinations: undefined, cases: cart().cases!.map((c) => ({ ...c, onlyInCombinations: true })) };
+    expect(solveCases(fileOf(kept)).runs).toEqual([]);
+    expect(() => runLimitEverywhere(kept, { parameter: "mj", from: 0, to: 50, quantity: rear, target: 0 })).toThrow(
+      'Every case is solved only in combinations and the sketch has no combination: there is nothing to search. Clear "only in combinations" on a case, or add a combination.',
+    );
+    // one case solved on its own is searched, and only that one
+    const one = { ...kept, cases: kept.cases.map((c, i) => (i === 1 ? { ...c, onlyInCombinations: undefined } : c)) };
+    expect(runLimitEverywhere(one, { parameter: "mj", from: 0, to: 50, quantity: rear, target: 0 }).map((r) => r.id)).toEqual(["jet"]);
+  });
+
   it("a range searched downwards meets each run's highest crossing first", () => {
     // run a crosses at 22 and 40, run b at 30: going down from 45, a gets there first (at 40)
     const found = (crossings: number[]): LimitEverywhere["result"] => ({ found: true, value: crossings[0], unit: "", crossings, iterations: 1 });
