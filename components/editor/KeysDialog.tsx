@@ -22,8 +22,8 @@ export const GESTURES: { what: string; how: string }[] = [
   { what: "Place or move without snapping", how: "Hold Alt" },
   { what: "Cancel a drag, a turn or a drawing", how: "Escape" },
   { what: "Close a polygon body", how: "Enter, or click its first corner" },
-  { what: "Zoom", how: "Wheel, or pinch" },
-  { what: "Pan", how: "Hold Space and drag, or drag with the middle button" },
+  { what: "Zoom", how: "Wheel, or pinch with two fingers" },
+  { what: "Pan", how: "Hold Space and drag, drag with the middle button, or drag two fingers" },
 ];
 
 function Key({ spec }: { spec: string }) {
@@ -55,7 +55,8 @@ export function KeysDialog({ open, onClose }: { open: boolean; onClose: () => vo
             </section>
           );
         })}
-        <section aria-label="Pointer" className="sm:col-span-2">
+        {/* a phone has no keyboard to speak of: its gestures come first there */}
+        <section aria-label="Pointer" className="max-sm:order-first sm:col-span-2">
           <h3 className="mb-1 text-[11px] font-semibold uppercase tracking-[0.08em] text-ink-faint">Pointer</h3>
           <dl className="grid gap-x-8 gap-y-1 sm:grid-cols-2">
             {GESTURES.map((g) => (

@@ -169,6 +169,10 @@ export function Toolbar({
       {extra}
       {tray ? <PanelButton toggle={tray} controls="tray-panel" name="Add and elements" text="Add" shownFrom="sm:hidden" testId="toggle-tray" /> : null}
       {panel ? <PanelButton toggle={panel} controls="properties-panel" text="Properties" shownFrom="min-[1180px]:hidden" testId="toggle-properties" /> : null}
+      {/* a phone's toolbar wraps: the keys-and-gestures list goes last there, after the panels */}
+      <button type="button" className={`${ICON_BUTTON} text-[13px] font-semibold sm:hidden`} onClick={() => run("view.keys")} aria-label="Keys and gestures" title={actionTitle("view.keys")} data-testid="show-keys-narrow">
+        ?
+      </button>
     </header>
   );
 }

@@ -230,6 +230,18 @@ describe("placing elements from the tray and the keyboard", () => {
       await page.getByTestId("tray-body").click();
       await expect.poll(() => tray.isVisible()).toBe(false);
       await page.keyboard.press("Escape");
+
+      // the keys-and-gestures list has its button here too, the two-finger gestures first
+      expect(await page.getByTestId("show-keys").isVisible()).toBe(false);
+      await page.getByTestId("show-keys-narrow").click();
+      const keys = page.getByTestId("keys-dialog");
+      await keys.waitFor();
+      const pointerTop = (await keys.getByRole("region", { name: "Pointer" }).boundingBox())!.y;
+      const addTop = (await keys.getByRole("region", { name: "Add" }).boundingBox())!.y;
+      expect(pointerTop).toBeLessThan(addTop);
+      expect(await keys.textContent()).toContain("drag two fingers");
+      await page.keyboard.press("Escape");
+      await expect.poll(() => keys.isVisible()).toBe(false);
     } finally {
       await page.setViewportSize({ width: 1440, height: 900 });
     }
