@@ -44,14 +44,18 @@ describe("keys and gestures", () => {
     expect(screen.getByTestId("keys-dialog")).not.toHaveAttribute("open");
   });
 
-  it("the toolbar's ? button opens the same list", async () => {
+  it("the toolbar's ? buttons (the wide toolbar's, and the phone's last one) open the same list", async () => {
     const user = userEvent.setup();
     await renderEditor(beam());
-    await user.click(screen.getByRole("button", { name: "Keys and gestures" }));
-    const dialog = await screen.findByTestId("keys-dialog");
-    expect(within(dialog).getByTestId("key-view.units")).toHaveTextContent(/Switch SI \/ US units\s*U/);
-    // closed, the focus goes back to the button that opened it: the keyboard carries on from there
-    await user.click(within(dialog).getByRole("button", { name: "Close" }));
-    expect(screen.getByRole("button", { name: "Keys and gestures" })).toHaveFocus();
+    for (const id of ["show-keys", "show-keys-narrow"]) {
+      const button = screen.getByTestId(id);
+      expect(button).toHaveAccessibleName("Keys and gestures");
+      await user.click(button);
+      const dialog = await screen.findByTestId("keys-dialog");
+      expect(within(dialog).getByTestId("key-view.units")).toHaveTextContent(/Switch SI \/ US units\s*U/);
+      // closed, the focus goes back to the button that opened it: the keyboard carries on from there
+      await user.click(within(dialog).getByRole("button", { name: "Close" }));
+      expect(button).toHaveFocus();
+    }
   });
 });
