@@ -88,7 +88,7 @@ function Elements({ interaction, lifted }: { interaction: InteractionStore; lift
   return (
     <>
       {bodies.map((id) => (
-        <BodyNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} seeThrough={seeThrough} />
+        <BodyNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} seeThrough={seeThrough} shift={shifts.get(id)} />
       ))}
       {items.map((id) => (
         <ItemNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} state={states.get(id)} shift={shifts.get(id)} />

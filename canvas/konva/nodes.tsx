@@ -64,12 +64,13 @@ export interface NodeProps {
 /** A body's fill over an underlay: the drawing shows through, so the trace can be checked. */
 const SEE_THROUGH_FILL = "rgba(230,223,208,0.42)";
 
-export const BodyNode = memo(function BodyNode({ id, selected, scale, units, seeThrough }: NodeProps & { seeThrough?: boolean }) {
+export const BodyNode = memo(function BodyNode({ id, selected, scale, units, seeThrough, shift }: NodeProps & { seeThrough?: boolean; shift?: readonly TextMove[] }) {
   const body = useScene((s) => s.byId.get(id)) as SceneBody | undefined;
   const prims = useMemo(() => {
     const out = body ? bodyPrims(body, { units, scale, color: selected ? ACCENT : INK }) : [];
-    return seeThrough ? out.map((p) => ("fill" in p && p.fill === BODY_FILL ? { ...p, fill: SEE_THROUGH_FILL } : p)) : out;
-  }, [body, units, scale, selected, seeThrough]);
+    // a name beside a narrow body may have made way for other labels
+    return shiftTexts(seeThrough ? out.map((p) => ("fill" in p && p.fill === BODY_FILL ? { ...p, fill: SEE_THROUGH_FILL } : p)) : out, shift);
+  }, [body, units, scale, selected, seeThrough, shift]);
   if (!body || body.outline.length < 3) return null;
   const pts = body.outline.map((p) => [p[0] * scale, -p[1] * scale]);
   return (

@@ -13,8 +13,8 @@ type TextPrim = Extract<Prim, { t: "text" }>;
 type Segment = readonly [Pt, Pt];
 
 const PAD = 1.5;
-/** What one stroke under a label costs, in pixels of moving away from its own place. */
-const STROKE_COST = 20;
+/** What one stroke under a label costs, in pixels of moving away from its own place: words with a line through them read worse than words a couple of lines further off. */
+const STROKE_COST = 40;
 /** Over any label already placed: more than any place that is not. */
 const ON_LABEL_COST = 1e6;
 /** A label moved at least this far clear of its own place gets a leader line. */
@@ -268,27 +268,34 @@ export const NO_SHIFTS: LabelShifts = new Map();
 
 /**
  * Where the elements' labels go, as moves of their texts per element: after the result's labels
- * (`taken`, placed already) and the bodies' names (which stay), every element's values and states
- * in drawing order, then every element's name. Each keeps off the labels placed before it and off the strokes of the other
+ * (`taken`, placed already) and the bodies' names inside them (which stay), the names beside
+ * bodies too narrow to hold them, every element's values and states in drawing order, then every
+ * element's name. Each keeps off the labels placed before it and off the strokes of the other
  * elements and of the result's arrows. `prev` keeps the identity of unchanged entries (and of the
  * whole map when nothing changed), so a canvas node is drawn again only when its own labels move.
  */
 export function placeElementLabels(groups: ReadonlyArray<{ id: string; kind?: string; prims: readonly Prim[] }>, taken: readonly Prim[] = [], prev: LabelShifts = NO_SHIFTS): LabelShifts {
   const placed: Box[] = [];
   for (const p of taken) if (p.t === "text") placed.push(textBox(p));
-  // a body's name stays in the corner of the body chosen for it: moved, it would cross the outline
-  for (const g of groups) for (const p of g.prims) if (p.t === "text" && (g.kind === "body" || p.pinned)) placed.push(textBox(p));
+  // a body's name inside it stays in the corner chosen for it (moved, it would cross the outline);
+  // one beside a body too narrow to hold it (drawn with a halo) makes way like the other labels, first
+  const outsideName = (g: { kind?: string }, p: Prim) => g.kind === "body" && p.t === "text" && p.halo === true;
+  for (const g of groups) for (const p of g.prims) if (p.t === "text" && ((g.kind === "body" && !outsideName(g, p)) || p.pinned)) placed.push(textBox(p));
   const strokes = new Strokes().add(strokesOf(taken), -1);
   groups.forEach((g, k) => strokes.add(strokesOf(g.prims), k));
   type Job = { g: number; idx: number[] };
+  const bodies: Job[] = [];
   const values: Job[] = [];
   const names: Job[] = [];
   groups.forEach((g, k) => {
-    if (g.kind === "body") return;
-    for (const idx of labelBlocks(g.prims)) (idx.every((i) => (g.prims[i] as TextPrim).italic) ? names : values).push({ g: k, idx });
+    for (const idx of labelBlocks(g.prims)) {
+      if (g.kind === "body") {
+        if (idx.every((i) => outsideName(g, g.prims[i]))) bodies.push({ g: k, idx });
+      } else (idx.every((i) => (g.prims[i] as TextPrim).italic) ? names : values).push({ g: k, idx });
+    }
   });
   const moves = groups.map((): Array<[number, number, number]> => []);
-  for (const { g, idx } of [...values, ...names]) {
+  for (const { g, idx } of [...bodies, ...values, ...names]) {
     const box = blockBox(groups[g].prims, idx);
     const [dx, dy] = bestOffset(box, placed, { strokes, lo: g, hi: g + 1 });
     placed.push(moveBox(box, dx, dy));

@@ -131,6 +131,29 @@ describe("label placement", () => {
     expect(wide.at[1]).toBeGreaterThan(-2 * 30);
     expect(wide.halo).toBe(false);
   });
+
+  it("moves a name beside a narrow body off another element's arrow; a name inside a body stays", async () => {
+    const { bodyPrims } = await import("@/canvas/render/symbols");
+    const body = (outline: [number, number][]) => ({ id: "stack", label: "Stack on skid", mass: 900, outline, cg: [0.3, 4] as [number, number] }) as unknown as Parameters<typeof bodyPrims>[0];
+    const stackPrims = bodyPrims(body([[0, 0], [0.6, 0], [0.6, 8], [0, 8]]), { units: "SI", scale: 30 });
+    const name = textBox(textsOf(stackPrims)[0]);
+    // a duct's arrow drawn straight through the name, from its right end into the body
+    const midY = (name.y0 + name.y1) / 2;
+    const duct: Prim[] = [{ t: "poly", pts: [[name.x1 + 30, midY], [18, midY]], stroke: "#000" }];
+    const shifts = placeElementLabels([{ id: "stack", kind: "body", prims: stackPrims }, { id: "duct", kind: "inlet", prims: duct }]);
+    const moves = shifts.get("stack")!;
+    expect(moves).toHaveLength(1);
+    const moved = shiftTexts(stackPrims, moves);
+    const at = textBox(textsOf(moved)[0]);
+    // clear of the arrow and of the body's outline (x = 0 … 18 px)
+    expect(at.y0 > midY || at.y1 < midY).toBe(true);
+    expect(at.x0).toBeGreaterThanOrEqual(18);
+    // a wide body's name inside it stays where it is, arrow or not
+    const widePrims = bodyPrims(body([[0, 0], [8, 0], [8, 2], [0, 2]]), { units: "SI", scale: 30 });
+    const inner = textBox(textsOf(widePrims)[0]);
+    const across: Prim[] = [{ t: "poly", pts: [[inner.x0 - 5, (inner.y0 + inner.y1) / 2], [inner.x1 + 5, (inner.y0 + inner.y1) / 2]], stroke: "#000" }];
+    expect(placeElementLabels([{ id: "stack", kind: "body", prims: widePrims }, { id: "duct", kind: "inlet", prims: across }]).has("stack")).toBe(false);
+  });
 });
 
 describe("leader lines", () => {

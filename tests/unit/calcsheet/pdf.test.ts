@@ -342,7 +342,7 @@ describe("calc sheet PDF", () => {
 });
 
 describe("the closing cautions", () => {
-  it("their heading stays on the page of their box, in every example's sheet", async () => {
+  it("their heading stays on the page of their box, in every example's sheet", { timeout: 60_000 }, async () => {
     const { EXAMPLES } = await import("@/canvas/examples");
     for (const ex of EXAMPLES) {
       const { pages } = await pdfItems(await buildCalcSheet({ workspace: "W", sketchTitle: ex.title, version: 1, savedAt: new Date(), signoff: [], file: ex.sketch }));
