@@ -272,7 +272,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
           </Layer>
           <Layer listening={false}>
             <Group x={view.x} y={view.y}>
-              <ResultsShape />
+              <ResultsShape interaction={interaction} />
             </Group>
           </Layer>
           <Layer ref={liftedLayerRef} listening={!dragging} onDraw={() => queueMicrotask(markFrame)}>

@@ -25,31 +25,39 @@ const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
 export { ROTATE_HANDLE_PX, handlePlace } from "../render/handles";
 
 const DRAWN_WITH_RESULTS = new Set(["pin", "roller", "contact", "fixed", "tie", "inlet", "outlet"]);
+/** What the result's labels keep off but is not drawn with it: a drag of one waits for its result. */
+const KEPT_OFF = new Set(["force", "couple", "distributed", "massSource"]);
 
 /**
  * The results layer's one shape. It follows the stores itself rather than through React props: a
  * new result (from the worker, between frames) is drawn at once in that task, so the frames that
  * answer the pointer only draw what the pointer moved.
  */
-export function ResultsShape() {
+export function ResultsShape({ interaction }: { interaction: InteractionStore }) {
   const stores = useStores();
   const shapeRef = useRef<Konva.Shape>(null);
   const primsRef = useRef<Prim[]>([]);
   useEffect(() => {
     let last: unknown[] = [];
+    let lastKept: unknown[] = [];
+    const same = (a: unknown[], b: unknown[]) => a.length === b.length && a.every((k, i) => k === b[i]);
     const redraw = (now: boolean) => {
       const a = stores.analysis.getState();
       const e = stores.editor.getState();
       const sc = stores.scene.getState();
-      // only what the results are drawn at: dragging a load changes none of these until its result arrives
+      // what the results are drawn at: dragging a load changes none of these until its result arrives
       const parts = [...sc.bodies, ...sc.items.filter((i) => DRAWN_WITH_RESULTS.has(i.kind))];
+      // the loads the labels keep off: followed at rest, caught up with by the next result in a drag
+      const kept = sc.items.filter((i) => KEPT_OFF.has(i.kind));
       const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, ...parts];
-      if (key.length === last.length && key.every((k, i) => k === last[i])) return;
+      if (same(key, last) && (same(kept, lastKept) || interaction.getState().dragging)) return;
       last = key;
+      lastKept = kept;
+      const all = [...parts, ...kept];
       const scene: Scene = {
         bodies: parts.filter((p): p is SceneBody => p.kind === "body"),
-        items: parts.filter((p): p is SceneItem => p.kind !== "body"),
-        byId: new Map(parts.map((p) => [p.id, p])),
+        items: all.filter((p): p is SceneItem => p.kind !== "body"),
+        byId: new Map(all.map((p) => [p.id, p])),
       };
       // the supports' and ports' own labels are drawn (and moved off these) by their nodes; only the
       // result's layer is drawn here, over their symbols
@@ -68,10 +76,13 @@ export function ResultsShape() {
       stores.editor.subscribe((s, p) => {
         if (s.view.scale !== p.view.scale || s.units !== p.units) redraw(false);
       }),
+      interaction.subscribe((s, p) => {
+        if (!s.dragging && p.dragging) redraw(false);
+      }),
     ];
     redraw(false);
     return () => stops.forEach((stop) => stop());
-  }, [stores]);
+  }, [stores, interaction]);
   return <Shape ref={shapeRef} sceneFunc={(ctx) => drawPrims(ctx._context, primsRef.current, canvasFont())} listening={false} perfectDrawEnabled={false} />;
 }
 

@@ -57,10 +57,10 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
   return groups;
 }
 
-// What the result's labels keep off: the strokes of the bodies, supports and ports, whose drawing
-// the result is tied to. Not the loads: the canvas redraws the result without them while a load is
-// dragged, and both must place the result's labels alike.
-const UNDER_RESULTS = new Set(["body", "pin", "roller", "contact", "fixed", "tie", "inlet", "outlet"]);
+// What the result's labels keep off: the strokes of the bodies, supports, ports and given loads
+// (a reaction's value written across a wind load's arrows reads as neither). The canvas places them
+// again with the loads where they are when a result arrives, and once a drag has ended.
+const UNDER_RESULTS = new Set(["body", "pin", "roller", "contact", "fixed", "tie", "inlet", "outlet", "force", "couple", "distributed", "massSource"]);
 
 /** The result's drawing, its labels placed (they come first: the elements' labels make way). */
 export function resultLayer(groups: readonly Group[], scene: Scene, scale: number, units: UnitSystem, result: SolveResult, states: Map<string, DrawState>, stale = false) {

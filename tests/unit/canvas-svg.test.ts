@@ -311,6 +311,36 @@ describe("the result's labels keep off other texts", () => {
   });
 });
 
+describe("result labels keep off the given loads", () => {
+  it("no result label has a load's arrow through it in the exhaust stack, whose wind load runs past the duct's pressure force", async () => {
+    const { strokesOf } = await import("@/canvas/render/labels");
+    const doc = exampleById("exhaust-stack")!.sketch;
+    const parsed = parseSketch(doc);
+    if (!parsed.ok) throw new Error("exhaust-stack");
+    const result = solveFile(doc) as SolveResult;
+    const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+    const crosses = (b: { x0: number; y0: number; x1: number; y1: number }, [a, c]: readonly [number[], number[]]) => {
+      // a segment through the box: sample it (the strokes here are short arrows and lines)
+      for (let t = 0; t <= 1; t += 0.02) {
+        const x = a[0] + t * (c[0] - a[0]);
+        const y = a[1] + t * (c[1] - a[1]);
+        if (x > b.x0 && x < b.x1 && y > b.y0 && y < b.y1) return true;
+      }
+      return false;
+    };
+    for (const scale of [40, 60, 90]) {
+      const { groups, results } = scenePrims(scene, scale, "SI", result);
+      const loadStrokes = groups.filter((g) => ["force", "couple", "distributed"].includes(g.kind)).flatMap((g) => strokesOf(g.prims));
+      expect(loadStrokes.length).toBeGreaterThan(10);
+      for (const p of results) {
+        if (p.t !== "text") continue;
+        const box = textBox(p);
+        expect(loadStrokes.some((s) => crosses(box, s)), `${scale} px/m: "${p.text}" has a load's stroke through it`).toBe(false);
+      }
+    }
+  });
+});
+
 describe("element labels keep off other texts", () => {
   it("in every example and at a tipping angle of the cart, no element's label sits on another text", async () => {
     const cart = exampleById("washing-cart")!.sketch;
