@@ -261,10 +261,26 @@ export function itemPrims(item: SceneItem, o: SymbolOptions): Prim[] {
   }
   if (o.showName !== false && item.kind !== "inlet" && item.kind !== "outlet") {
     const name = item.label || item.id;
-    const side = item.kind === "distributed" ? [0, 0] : nameOffset(item, o);
-    prims.push(text(side as Pt, name, INK_FAINT, 10, { align: "left", baseline: "middle", italic: true }));
+    if (item.kind === "distributed") {
+      // beside the middle of the line through the arrows' tails, on the side away from the body
+      const { at, away } = distributedNamePlace(item, o);
+      prims.push(...labelAt(at, away, [name], INK_FAINT, 10, { italic: true }));
+    } else prims.push(text(nameOffset(item, o), name, INK_FAINT, 10, { align: "left", baseline: "middle", italic: true }));
   }
   return prims;
+}
+
+/** Where a distributed load's name goes, local to `from`: off the middle of its tails' line. */
+function distributedNamePlace(item: Extract<SceneItem, { kind: "distributed" }>, o: SymbolOptions): { at: Pt; away: Pt } {
+  const T: Pt = [(item.to[0] - item.from[0]) * o.scale, -(item.to[1] - item.from[1]) * o.scale];
+  const d = dir(item.angle);
+  const wmax = Math.max(Math.abs(item.w1), Math.abs(item.w2)) || 1;
+  const w = (item.w1 + item.w2) / 2;
+  // as loadPrims draws the arrows' tails
+  const mid = mul(T, 0.5);
+  const tail = sub(mid, mul(d, w >= 0 ? 6 + 26 * (Math.abs(w) / wmax) : -(6 + 26 * (Math.abs(w) / wmax))));
+  const away = unit(sub(tail, mid));
+  return { at: add(tail, mul(away, 6)), away };
 }
 
 function nameOffset(item: SceneItem, o: SymbolOptions): Pt {

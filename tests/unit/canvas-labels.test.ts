@@ -132,6 +132,27 @@ describe("label placement", () => {
     expect(wide.halo).toBe(false);
   });
 
+  it("names a distributed load beside the middle of its arrows' tails, on the side away from the body", async () => {
+    const { itemPrims } = await import("@/canvas/render/symbols");
+    const load = (from: [number, number], to: [number, number], angle: number, w1: number, w2: number) =>
+      ({ kind: "distributed", id: "w", label: "wind", body: "b", from, to, angle, w1, w2 }) as unknown as Parameters<typeof itemPrims>[0];
+    const nameOf = (prims: Prim[]) => textsOf(prims).find((t) => t.text === "wind")!;
+    // a load down on a 2 m deck at 50 px/m: the line is 100 px long; arrows' tails 32 px above it (w1 = w2)
+    const down = nameOf(itemPrims(load([0, 0], [2, 0], -90, 500, 500), { units: "SI", scale: 50 }));
+    expect(down.align).toBe("center");
+    expect(down.at[0]).toBeCloseTo(50, 6);
+    expect(textBox(down).y1).toBeLessThanOrEqual(-32);
+    // wind pushing +x on a 6 m stack: tails to the left of it, the name right-aligned there, half-way up
+    const wind = nameOf(itemPrims(load([0, 0], [0, 6], 0, 400, 400), { units: "SI", scale: 20 }));
+    expect(wind.align).toBe("right");
+    expect(wind.at[0]).toBeCloseTo(-32 - 6, 6);
+    expect(wind.at[1]).toBeCloseTo(-60, 0);
+    // the arrows pointing the other way (a suction): the tails and the name are on the other side
+    const suction = nameOf(itemPrims(load([0, 0], [0, 6], 0, -400, -400), { units: "SI", scale: 20 }));
+    expect(suction.align).toBe("left");
+    expect(suction.at[0]).toBeCloseTo(32 + 6, 6);
+  });
+
   it("moves a name beside a narrow body off another element's arrow; a name inside a body stays", async () => {
     const { bodyPrims } = await import("@/canvas/render/symbols");
     const body = (outline: [number, number][]) => ({ id: "stack", label: "Stack on skid", mass: 900, outline, cg: [0.3, 4] as [number, number] }) as unknown as Parameters<typeof bodyPrims>[0];
