@@ -42,7 +42,9 @@ function containing(text: string): string {
   return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
 
-const STATUS_RANK = sql`array_position(array['holds','lifts','tips','unrestrained']::text[], ${latest.status})`;
+/** Worst last: a body that holds but slips at a friction contact ranks between holds and lifts,
+ *  as the list shows it ("slips · holds") and filters it. */
+const STATUS_RANK = sql`case when ${latest.status} = 'holds' and jsonb_exists(${latest.summary} -> 'warnings', 'SLIP') then 2 else array_position(array['holds','slips','lifts','tips','unrestrained']::text[], ${latest.status}) end`;
 
 export type SketchListItem = {
   id: string;

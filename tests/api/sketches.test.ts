@@ -216,6 +216,12 @@ describe("listing", () => {
     for (const [title, name] of [["Skid that slips", "pump-skid-slip"], ["Anchor that holds", "pipe-bend-anchor"]]) expect((await create({ title, document: fixture(name) }, eddie, slipWs)).status).toBe(201);
     const res = await call(sketchesRoute.GET, { params: { id: slipWs }, cookie: eddie.cookie, path: `/api/workspaces/${slipWs}/sketches?status=slips` });
     expect(titles(res.body)).toEqual(["Skid that slips"]);
+    // sorted by status it ranks between holds and lifts, whichever was saved last
+    expect((await create({ title: "Stand that tips", document: fixture("thrust-stand-tips") }, eddie, slipWs)).status).toBe(201);
+    const sorted = async (dir: string) =>
+      titles((await call(sketchesRoute.GET, { params: { id: slipWs }, cookie: eddie.cookie, path: `/api/workspaces/${slipWs}/sketches?sort=status&dir=${dir}` })).body);
+    expect(await sorted("asc")).toEqual(["Anchor that holds", "Skid that slips", "Stand that tips"]);
+    expect(await sorted("desc")).toEqual(["Stand that tips", "Skid that slips", "Anchor that holds"]);
   });
 
   it("refuses bad query parameters with their paths", async () => {
