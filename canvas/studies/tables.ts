@@ -34,3 +34,19 @@ export function withoutAbsentMoment(table: Table, study: StudyResult): Table {
     }),
   };
 }
+
+/** One run's reaction table as shown beside a drawing: without the kind (the support's name says
+ *  it) and without the columns with nothing to say (no moments without a fixed support, no t
+ *  without friction, no n or margin without a one-sided support). */
+export function withoutEmptyReactionColumns(table: Table): Table {
+  const empty = (i: number) => table.rows.every((r) => r[i] === null || r[i] === 0);
+  const keep = table.columns.map((c, i) => (c.key === "kind" || (["m", "n", "t", "margin"].includes(c.key) && empty(i)) ? -1 : i)).filter((i) => i >= 0);
+  return { ...table, columns: keep.map((i) => table.columns[i]), rows: table.rows.map((r) => keep.map((i) => r[i])) };
+}
+
+/** The table without one column (a sketch's only run needs no "Case" column). */
+export function withoutColumn(table: Table, key: string): Table {
+  const ci = table.columns.findIndex((c) => c.key === key);
+  if (ci < 0) return table;
+  return { ...table, columns: table.columns.filter((_, i) => i !== ci), rows: table.rows.map((r) => r.filter((_, i) => i !== ci)) };
+}

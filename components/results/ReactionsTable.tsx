@@ -7,6 +7,7 @@ import { reactionScale, reactionTable } from "@/solver/report";
 import { formatNumber } from "@/solver/units";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { useHeldScale } from "./useHeldScale";
+import { withoutEmptyReactionColumns } from "@/canvas/studies/tables";
 
 export type Sense = "body" | "support";
 
@@ -27,10 +28,7 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
     if (!shown) return null;
     const t = reactionTable(shown, units, { onSupport: sense === "support", scale });
     // the kind shows in the support's tooltip; the columns keep their keys for tests and CSV
-    // columns with nothing to say (no moments without a fixed support, no t without friction) step aside
-    const empty = (i: number) => t.rows.every((r) => r[i] === null || r[i] === 0);
-    const keep = t.columns.map((c, i) => (c.key === "kind" || (["m", "n", "t", "margin"].includes(c.key) && empty(i)) ? -1 : i)).filter((i) => i >= 0);
-    return { ...t, columns: keep.map((i) => t.columns[i]), rows: t.rows.map((r) => keep.map((i) => r[i])), kinds: t.rows.map((r) => String(r[1])) };
+    return { ...withoutEmptyReactionColumns(t), kinds: t.rows.map((r) => String(r[1])) };
   }, [shown, units, sense, scale]);
   if (!table || !shown) return <p className="p-2 text-[12.5px] text-ink-faint">No reactions yet.</p>;
   if (!table.rows.length) return <p className="p-2 text-[12.5px] text-ink-faint">No supports: add a pin, roller, contact, fixed support or tie to the body.</p>;

@@ -5,7 +5,7 @@
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useMemo, useState } from "react";
-import { formatForce } from "@/components/sketches/format";
+import { formatForceCell } from "@/components/sketches/format";
 import { StatusMark } from "@/components/sketches/StatusMark";
 import { Crumb, Notice, Panel, Segmented, Skeleton } from "@/components/shell/controls";
 import { formatDateTime } from "@/components/workspaces/format";
@@ -13,10 +13,12 @@ import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import type { SketchStatus } from "@/lib/sketch-schemas";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
-import { formatQuantity, type UnitSystem } from "@/solver/units";
-import { stateWord } from "@/solver/report";
+import type { UnitSystem } from "@/solver/units";
+import { reactionTable, stabilityTable } from "@/solver/report";
+import { withoutColumn, withoutEmptyReactionColumns } from "@/canvas/studies/tables";
+import { ReportTable } from "@/components/studies/ReportTable";
 import { studyOfDocument } from "@/lib/review/compare";
-import { CaseTables } from "@/components/studies/CaseTables";
+import { belowRequired, CaseTables } from "@/components/studies/CaseTables";
 import { CsvSubject } from "@/components/studies/csv";
 import { versionConcerns, withOpenThreads } from "./concerns";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
@@ -29,36 +31,29 @@ type VersionData = {
   version: { id: string; number: number; message: string; authorName: string | null; createdAt: string; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; document: SketchFile };
 };
 
-function Reactions({ document, units }: { document: SketchFile; units: UnitSystem }) {
+/** The version's reactions as drawn, in one unit a table (the rows the editor, the CSV and the calc
+ *  sheet use); and, when it has no operating cases, its factors of safety (with cases, the cases'
+ *  tables below carry them for every run). */
+export function VersionReactions({ document, units }: { document: SketchFile; units: UnitSystem }) {
   const { result, parsed } = useSolved(document);
+  const study = useMemo(() => (document.cases?.length || document.combinations?.length ? null : studyOfDocument(document)), [document]);
   if (!result) return <Notice tone="error">This version does not solve{!parsed.ok ? `: ${parsed.errors[0]?.path} ${parsed.errors[0]?.message}` : "."}</Notice>;
-  const labels = new Map(document.supports.map((s) => [s.id, s.label || s.id]));
+  const names = Object.fromEntries(document.supports.map((s) => [s.id, s.label || s.id]));
+  const stability = study ? withoutColumn(stabilityTable(study, units), "case") : null;
   return (
-    <table className="w-full text-sm" data-testid="version-reactions">
-      <caption className="sr-only">Reactions on the body</caption>
-      <thead>
-        <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
-          <th scope="col" className="py-1.5 pr-3 font-semibold">Support</th>
-          <th scope="col" className="py-1.5 pr-3 font-semibold">State</th>
-          <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Fx</th>
-          <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Fy</th>
-          <th scope="col" className="py-1.5 pr-3 text-right font-semibold">M</th>
-          <th scope="col" className="py-1.5 text-right font-semibold">Resultant</th>
-        </tr>
-      </thead>
-      <tbody>
-        {Object.entries(result.reactions).map(([id, r]) => (
-          <tr key={id} className="num border-b border-rule-soft last:border-0">
-            <td className="py-1.5 pr-3 font-medium">{labels.get(id) ?? id}</td>
-            <td className="py-1.5 pr-3">{stateWord(r)}</td>
-            <td className="py-1.5 pr-3 text-right">{formatForce(r.fx, units)}</td>
-            <td className="py-1.5 pr-3 text-right">{formatForce(r.fy, units)}</td>
-            <td className="py-1.5 pr-3 text-right">{r.kind === "fixed" ? formatQuantity(r.m, "moment", units) : "—"}</td>
-            <td className="py-1.5 text-right font-medium">{formatForce(Math.hypot(r.fx, r.fy), units)}</td>
-          </tr>
-        ))}
-      </tbody>
-    </table>
+    <>
+      <ReportTable
+        table={withoutEmptyReactionColumns(reactionTable(result, units, { names }))}
+        fileName="reactions"
+        testId="version-reactions"
+        caption="Forces on the body from each support, as drawn."
+      />
+      {stability ? (
+        <section aria-label="Factors of safety" className="pt-2" data-testid="version-stability">
+          <ReportTable table={stability} fileName="factors-of-safety" testId="stability" mark={belowRequired(stability)} />
+        </section>
+      ) : null}
+    </>
   );
 }
 
@@ -158,7 +153,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
         {v ? (
           <p className="flex flex-wrap items-center gap-x-3 text-sm text-ink-soft">
             <StatusMark status={v.status} warnings={v.warnings} />
-            <span>largest reaction {formatForce(v.largestReaction, units)}</span>
+            <span>largest reaction {formatForceCell(v.largestReaction, units)}</span>
             <span>
               saved by {v.authorName ?? "a deleted account"}, {formatDateTime(v.createdAt)}
             </span>
@@ -192,9 +187,9 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
           <p className="text-xs text-ink-faint">
             <span className="font-semibold text-caution">Caution:</span> {CAUTION_SHORT}
           </p>
-          {doc ? <Reactions document={doc} units={units} /> : null}
           {doc ? (
             <CsvSubject.Provider value={`${sketchTitle} v${number}`}>
+              <VersionReactions document={doc} units={units} />
               <VersionCases document={doc} units={units} />
             </CsvSubject.Provider>
           ) : null}

@@ -3,14 +3,24 @@
 // the envelope, each support's design load, and the factors of safety. The editor's Cases tab and
 // a version's review page show the same tables.
 import type { StudyResult } from "@/solver/cases";
-import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, stabilityTable, unsolvedWords } from "@/solver/report";
+import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, stabilityTable, unsolvedWords } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
 
+/** The stability table's mark on a failed factor: the required one it falls below. */
+export function belowRequired(table: Table) {
+  const verdict = table.columns.findIndex((c) => c.key === "verdict");
+  const required = table.columns.findIndex((c) => c.key === "required");
+  return function markFailed(row: readonly Cell[], key: string) {
+    return key === "verdict" && row[verdict] === "FAIL" ? <span className="ml-1 font-semibold text-caution">(below {row[required]})</span> : null;
+  };
+}
+
 export function CaseTables({ result, units }: { result: StudyResult; units: UnitSystem }) {
   const nameOf = (id: string) => result.runs.find((r) => r.id === id)?.name ?? id;
   const unsolved = unsolvedWords(result);
+  const stability = stabilityTable(result, units);
   return (
     <>
       {result.runs.filter((r) => !r.ok).map((r) => (
@@ -45,11 +55,7 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
         </>
       )}
       <div className="mt-3">
-        <ReportTable
-          table={stabilityTable(result, units)}
-          fileName="factors-of-safety"
-          testId="stability"
-          mark={(row, key) => (key === "verdict" && row[8] === "FAIL" ? <span className="ml-1 font-semibold text-caution">(below {row[7]})</span> : null)}
+        <ReportTable table={stability} fileName="factors-of-safety" testId="stability" mark={belowRequired(stability)}
         />
       </div>
       {unsolved ? null : (
