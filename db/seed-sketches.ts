@@ -16,7 +16,8 @@ import * as schema from "./schema";
 type SeedDb = ReturnType<typeof drizzle<typeof schema>>;
 type Doc = Record<string, unknown> & { parameters?: Record<string, unknown>; bodies: Array<Record<string, unknown>>; supports: Array<Record<string, unknown>>; ports: Array<Record<string, unknown>> };
 type Who = "eddie" | "olivia" | "chen";
-type Step = { by: Who; daysAgo: number; message: string; edit?: (d: Doc) => void };
+/** `notes`: the drawing's notes from this version on, so they tell what this version's inputs are. */
+type Step = { by: Who; daysAgo: number; message: string; edit?: (d: Doc) => void; notes?: string };
 type ReviewStep = { version: number; step: "submit" | "check" | "return" | "approve"; by: Who; daysAgo: number; note?: string };
 type DemoComment = { version: number; by: Who; daysAgo: number; body: string; pin?: schema.CommentPin; replies?: Array<{ by: Who; daysAgo: number; body: string }>; resolved?: Who };
 export type DemoSketch = { id: string; file: string; title: string; description: string; tags: string[]; steps: Step[]; review?: ReviewStep[]; comments?: DemoComment[] };
@@ -29,6 +30,10 @@ const NEXT_STATE = { submit: "submitted", check: "checked", return: "returned", 
 function readSketchFile(path: string): Doc {
   return JSON.parse(readFileSync(fileURLToPath(new URL(`../${path}`, import.meta.url)), "utf8"));
 }
+
+/** The exhaust stack as built, for its later versions' notes. */
+const STACK =
+  "An 8 m stack (600 mm) stands on a 3 m skid, 0.7 m deep, laid unbolted on a concrete pad, to carry a standby generator's exhaust during an outage. The gas comes in through a 500 mm flexible duct on the side of the stack, 1.6 m up, with 2 kPa of back-pressure, and leaves at the top. Wind on the stack: q = ½ρv², drag coefficient 0.7 on the projected width.";
 
 export const DEMO_SKETCHES: DemoSketch[] = [
   {
@@ -67,7 +72,14 @@ export const DEMO_SKETCHES: DemoSketch[] = [
     tags: ["fire water", "mobile"],
     steps: [
       { by: "eddie", daysAgo: 6, message: "Trailer set up on foot, axle and jack; monitor at 1250 gpm" },
-      { by: "eddie", daysAgo: 4, message: "Raised the flow to the 2000 gpm rating: the front jack lifts off and the foot slips", edit: (d) => (d.parameters!.Q = "2000 gpm") },
+      {
+        by: "eddie",
+        daysAgo: 4,
+        message: "Raised the flow to the 2000 gpm rating: the front jack lifts off and the foot slips",
+        edit: (d) => (d.parameters!.Q = "2000 gpm"),
+        notes:
+          "A 950 kg monitor trailer set up on its axle, a rear stabiliser foot and a front jack on a skid plate, on wet asphalt (μ = 0.55 at the foot and the tyres). The monitor throws its rated 2000 gpm through a 1¾ in tip, forward and up, from 2.4 m. The jet's reaction pulls the top of the riser back and down: at this flow the front jack lifts off and the foot slips.",
+      },
       {
         by: "olivia",
         daysAgo: 2,
@@ -76,6 +88,8 @@ export const DEMO_SKETCHES: DemoSketch[] = [
           d.bodies[0].mass = "1250 kg";
           d.bodies[0].cg = [2.1, 0.85];
         },
+        notes:
+          "The monitor trailer with 300 kg of water ballast toward the front: 1250 kg in all, its centre of gravity 2.1 m from the rear foot and 0.85 m up. At the rated 2000 gpm (1¾ in tip, forward and up from 2.4 m) the front jack bears again; the foot still slips on wet asphalt (μ = 0.55 at the foot and the tyres).",
       },
     ],
     review: [{ version: 3, step: "submit", by: "olivia", daysAgo: 1.9 }],
@@ -92,7 +106,14 @@ export const DEMO_SKETCHES: DemoSketch[] = [
     tags: ["test rig"],
     steps: [
       { by: "eddie", daysAgo: 8, message: "Stand with the 2.2 kN test jet at 1.5 m: it tips about the front pin" },
-      { by: "eddie", daysAgo: 3, message: "Lowered the jet from 1.5 m to 0.6 m: the rear pad bears again", edit: (d) => (d.ports[0].at = [0, 0.6]) },
+      {
+        by: "eddie",
+        daysAgo: 3,
+        message: "Lowered the jet from 1.5 m to 0.6 m: the rear pad bears again",
+        edit: (d) => (d.ports[0].at = [0, 0.6]),
+        notes:
+          "A 200 kg stand pinned to the floor at its front edge and resting on a rear pad. The test jet, lowered from 1.5 m to 0.6 m, pushes it forward; its thrust is now below W·d/h, so the rear pad bears instead of having to pull.",
+      },
       {
         by: "eddie",
         daysAgo: 1,
@@ -101,6 +122,8 @@ export const DEMO_SKETCHES: DemoSketch[] = [
           d.parameters!.slope = "3 deg";
           d.gravityAngle = "-90 deg + slope";
         },
+        notes:
+          "A 200 kg stand pinned to the floor at its front edge and resting on a rear pad, the test jet at 0.6 m. The test pad's floor falls 3° toward the front pin, drawn as gravity turned by the slope: the rear pad still bears; it would unload at 9.5°.",
       },
     ],
   },
@@ -120,6 +143,8 @@ export const DEMO_SKETCHES: DemoSketch[] = [
           d.parameters!.p_in = "15 bar";
           d.parameters!.p_out = "14.6 bar";
         },
+        notes:
+          "A DN150 long-radius 90° bend where a pump discharge turns up a riser, in elevation, at its hydrotest pressure: water at 15 bar flows in from the left and leaves upward at 14.6 bar. One anchor at the bend takes everything: the pressure thrust on both faces, the change of momentum and the weight of the bend full of water. An anchor designer wants the load on the support: switch the table to it.",
       },
     ],
   },
@@ -131,8 +156,22 @@ export const DEMO_SKETCHES: DemoSketch[] = [
     tags: ["cleaning", "mobile"],
     steps: [
       { by: "eddie", daysAgo: 3, message: "Lance aimed steeply down at −75° for the tank foot" },
-      { by: "eddie", daysAgo: 2, message: "Raised the lance to −50°: the cart tips back off its front caster", edit: (d) => (d.parameters!.theta = "-50 deg") },
-      { by: "olivia", daysAgo: 1, message: "Clamped 45 kg of ballast to the base: the caster bears again", edit: (d) => (d.bodies[0].mass = "130 kg") },
+      {
+        by: "eddie",
+        daysAgo: 2,
+        message: "Raised the lance to −50°: the cart tips back off its front caster",
+        edit: (d) => (d.parameters!.theta = "-50 deg"),
+        notes:
+          "An 85 kg wheeled cart carries a lance clamped at 1.15 m: 40 L/min at 500 bar through a small tip, raised to −50° to reach higher up the tank wall. The jet's reaction pushes the top of the cart back and up, and at this angle the cart tips back off its front caster. Braked rear wheels (μ = 0.6) stop it sliding; the front caster is free.",
+      },
+      {
+        by: "olivia",
+        daysAgo: 1,
+        message: "Clamped 45 kg of ballast to the base: the caster bears again",
+        edit: (d) => (d.bodies[0].mass = "130 kg"),
+        notes:
+          "The cart with 45 kg of ballast clamped to its base (130 kg in all) and the lance at −50°: 40 L/min at 500 bar through a small tip, clamped at 1.15 m. The front caster bears again. Braked rear wheels (μ = 0.6) stop it sliding; the front caster is free.",
+      },
     ],
   },
   {
@@ -143,8 +182,20 @@ export const DEMO_SKETCHES: DemoSketch[] = [
     tags: ["exhaust", "outage"],
     steps: [
       { by: "eddie", daysAgo: 4, message: "Stack on its skid, engine running, 30 m/s wind" },
-      { by: "eddie", daysAgo: 2.5, message: "Site design wind is 40 m/s: the upwind edge lifts even with the engine running", edit: (d) => (d.parameters!.v = "40 m/s") },
-      { by: "eddie", daysAgo: 1.5, message: "900 kg of concrete blocks on the skid: the upwind edge bears again at 40 m/s, and neither edge slips", edit: (d) => (d.parameters!.ballast = "900 kg") },
+      {
+        by: "eddie",
+        daysAgo: 2.5,
+        message: "Site design wind is 40 m/s: the upwind edge lifts even with the engine running",
+        edit: (d) => (d.parameters!.v = "40 m/s"),
+        notes: `${STACK} At the site's design wind of 40 m/s the upwind edge lifts, even with the engine running (the duct's pressure and the gas entering push against the wind). Ballast is next.`,
+      },
+      {
+        by: "eddie",
+        daysAgo: 1.5,
+        message: "900 kg of concrete blocks on the skid: the upwind edge bears again at 40 m/s, and neither edge slips",
+        edit: (d) => (d.parameters!.ballast = "900 kg"),
+        notes: `${STACK} With 900 kg of concrete blocks on the skid the upwind edge bears again at the site's design wind of 40 m/s, and neither edge slips; the Cases tab gives each case's factors of safety.`,
+      },
     ],
   },
 ];
@@ -160,6 +211,7 @@ export function demoVersions(s: DemoSketch): Array<{ step: Step; doc: Doc }> {
   for (const step of s.steps) {
     if (step.edit) step.edit(current);
     else current = structuredClone(doc);
+    if (step.notes) (current as Doc).description = step.notes;
     out.push({ step, doc: structuredClone(current) });
   }
   return out;
