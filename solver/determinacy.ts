@@ -8,6 +8,9 @@ export interface DeterminacyOutput {
   determinacy: Determinacy;
   /** with a mechanism: the motions nothing resists (scaled generalized directions) */
   freeMotions: Vec3[];
+  /** reactions beyond those the resisted directions need: three contacts in a row under a beam
+   *  leave it free to slide and still share its weight by their stiffnesses (unknowns − rank) */
+  redundant: number;
 }
 
 export function determinacyOf(model: BodyModel): DeterminacyOutput {
@@ -37,7 +40,8 @@ export function determinacyOf(model: BodyModel): DeterminacyOutput {
       if (!(v > tol)) freeMotions.push(vectors[i]);
     });
   }
-  if (rank < 3) return { determinacy: { kind: "mechanism", degree: 3 - rank }, freeMotions };
-  if (unknowns > 3) return { determinacy: { kind: "indeterminate", degree: unknowns - 3 }, freeMotions };
-  return { determinacy: { kind: "determinate", degree: 0 }, freeMotions };
+  const redundant = Math.max(0, unknowns - rank);
+  if (rank < 3) return { determinacy: { kind: "mechanism", degree: 3 - rank }, freeMotions, redundant };
+  if (unknowns > 3) return { determinacy: { kind: "indeterminate", degree: unknowns - 3 }, freeMotions, redundant };
+  return { determinacy: { kind: "determinate", degree: 0 }, freeMotions, redundant };
 }

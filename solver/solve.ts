@@ -41,7 +41,7 @@ function solveBody(model: BodyModel, out: SolveResult): void {
   const { body, groups, springs, scale, supports } = model;
   const warnings = out.warnings;
   const tol = 1e-9 * scale;
-  const { determinacy, freeMotions } = determinacyOf(model);
+  const { determinacy, freeMotions, redundant } = determinacyOf(model);
 
   const bilateral = solveBilateral(model);
   let status: Status;
@@ -188,6 +188,13 @@ function solveBody(model: BodyModel, out: SolveResult): void {
       message: `${body.label || body.id}: ${freeMotions.map((z) => describeFreeMotion(describeMotion(model, z), supports)).join("; ")}, but the loads do not push that way`,
       ids: [body.id],
     });
+    // free one way and over-supported the others: the shares still depend on the stiffnesses
+    if (redundant > 0)
+      warnings.push({
+        code: "INDETERMINATE",
+        message: `${body.label || body.id} is statically indeterminate (degree ${redundant}) in the directions its supports resist: the reactions depend on the support stiffnesses`,
+        ids: supports.map((s) => s.id),
+      });
   }
 
   // residual about the world origin

@@ -183,6 +183,11 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
     if (shared) details.push(shared);
     if (body.determinacy.kind === "indeterminate")
       details.push(`Statically indeterminate (degree ${body.determinacy.degree}): the reactions depend on the support stiffnesses.`);
+    else {
+      // free to move one way, yet more supports than the other directions need
+      const over = result.warnings.find((w) => w.code === "INDETERMINATE" && w.ids.some((i) => supports.some((s) => s.id === i)));
+      if (over) details.push(`${over.message}.`);
+    }
     const ids = new Set([b.id, ...supports.map((s) => s.id), ...sketch.ports.filter((p) => p.body === b.id).map((p) => p.id), ...sketch.massSources.filter((m) => m.body === b.id).map((m) => m.id)]);
     for (const w of result.warnings) {
       if (w.code === "MASS_IMBALANCE" || w.code === "PORT_INCONSISTENT") {

@@ -31,6 +31,18 @@ describe("status sentences the worked examples do not reach", () => {
     expect(s.headline).toBe("Lifts off at the right pad — the left pad and the hold-down strap still hold the body");
   });
 
+  it("a beam on three frictionless feet: free to slide, and still indeterminate in the directions they resist", () => {
+    const doc = {
+      ...emptySketch("Three feet"),
+      bodies: [{ ...newBody("b1", [[0, 0], [4, 0], [4, 0.4], [0, 0.4]], "Beam"), mass: 1000 }],
+      supports: [0, 2, 4].map((x, i) => ({ id: `f${i}`, body: "b1", kind: "contact", at: [x, 0], angle: 90 })),
+    };
+    const { sketch, result } = solved(doc);
+    const [s] = statusSentences(sketch, result);
+    expect(s.tone).toBe("holds");
+    expect(s.details).toContain("Beam is statically indeterminate (degree 1) in the directions its supports resist: the reactions depend on the support stiffnesses.");
+  });
+
   it("a body with no supports at all says so and what to add", () => {
     const { sketch, result } = solved({ ...emptySketch("Loose crate"), bodies: [newBody("b1", [[0, 0], [1, 0], [1, 1], [0, 1]], "Crate")] });
     expect(statusSentences(sketch, result)).toEqual([{ body: "b1", tone: "unrestrained", headline: "Unrestrained — the body has no supports yet; add a support or a tie", details: [] }]);
