@@ -143,8 +143,9 @@ function liftSentence(c: Context): string {
 function holdSentence(c: Context): string {
   const mech = c.result.warnings.find((w) => w.code === "MECHANISM" && w.ids.includes(c.id));
   if (mech) {
+    // in equilibrium only while nothing pushes the free way: balanced, not restrained
     const words = mech.message.slice(mech.message.indexOf(": ") + 2);
-    return `Holds — ${words}`;
+    return `Holds only as drawn — ${words}; any load that does will move it`;
   }
   let best: [Support, Reaction] | undefined;
   for (const pair of c.reactions) if (!best || Math.hypot(pair[1].fx, pair[1].fy) > Math.hypot(best[1].fx, best[1].fy)) best = pair;

@@ -53,9 +53,29 @@ describe("status sentence", () => {
     expect(statusSentences(sketch, result)[0]).toMatchObject({ tone: "unrestrained", headline: "Unrestrained — nothing resists motion in x; add a support or a tie" });
   });
 
-  it("a mechanism the loads do not drive: holds, and says which motion is free", () => {
+  it("a mechanism the loads do not drive: holds only as drawn, and says which motion is free", () => {
     const { sketch, result } = solved(load("skid-vertical-mechanism"));
-    expect(statusSentences(sketch, result)[0].headline).toBe("Holds — nothing resists motion in x, but the loads do not push that way");
+    expect(statusSentences(sketch, result)[0].headline).toBe("Holds only as drawn — nothing resists motion in x, but the loads do not push that way; any load that does will move it");
+  });
+
+  it("a body balanced on one contact under its centre of gravity: held only as drawn, free to turn about the contact", () => {
+    // a 4 m beam of 1 t on one frictionless contact right under its centre of gravity (invented)
+    const doc = {
+      format: "counterpoise.sketch",
+      version: 6,
+      title: "Balanced beam",
+      parameters: {},
+      bodies: [{ id: "b", label: "Beam", outline: [[0, 0], [4, 0], [4, 0.2], [0, 0.2]], mass: "1000 kg", cg: [2, 0.1] }],
+      supports: [{ id: "A", label: "A", body: "b", kind: "contact", at: [2, 0], angle: 90 }],
+      loads: [],
+      ports: [],
+      massSources: [],
+    };
+    const { sketch, result } = solved(doc);
+    expect(result.bodies.b.status).toBe("holds");
+    expect(statusSentences(sketch, result)[0].headline).toBe(
+      "Holds only as drawn — nothing resists motion in x; nothing resists rotation about contact A (2, 0), but the loads do not push that way; any load that does will move it",
+    );
   });
 
   it("slip leads, with the friction needed and the μ available, for the body as a whole and the worst contact", () => {
