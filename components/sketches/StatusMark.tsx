@@ -40,7 +40,7 @@ export function StatusMark({ status, warnings = [] }: { status: SketchStatus | n
   const w = WORDS[status];
   const slips = warnings.includes("SLIP");
   return (
-    <span className={`inline-flex items-center gap-1.5 font-medium ${w.tone}`} title={slips ? `Slips: more friction is needed than the contacts give. ${w.title}` : w.title} data-status={status}>
+    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap font-medium ${w.tone}`} title={slips ? `Slips: more friction is needed than the contacts give. ${w.title}` : w.title} data-status={status}>
       <Glyph status={status} />
       {slips ? <span className="text-caution">slips ·</span> : null}
       {w.word}

@@ -93,7 +93,7 @@ export function VersionHistory({
               <th scope="col" className="w-36 py-2 pr-3 font-semibold max-sm:hidden">Saved</th>
               <th scope="col" className="w-32 py-2 pr-3 font-semibold max-sm:hidden">Status</th>
               <th scope="col" className="w-28 py-2 pr-3 text-right font-semibold max-sm:hidden">Largest reaction</th>
-              {reviewCell ? <th scope="col" className="w-32 py-2 pr-3 font-semibold">Sign-off</th> : null}
+              {reviewCell ? <th scope="col" className="w-32 py-2 pr-3 font-semibold max-sm:hidden">Sign-off</th> : null}
               <th scope="col" className="py-2 text-right font-semibold">
                 <span className="sr-only">Actions</span>
               </th>
@@ -119,7 +119,8 @@ export function VersionHistory({
                       {timeAgo(v.createdAt) ?? formatDate(v.createdAt)} by {v.authorName ?? "a deleted account"}
                     </span>
                     <StatusMark status={v.status} warnings={v.warnings} />
-                    <span className="num">largest {formatForceCell(v.largestReaction, units)}</span>
+                    <span className="num whitespace-nowrap">largest {formatForceCell(v.largestReaction, units)}</span>
+                    {reviewCell ? <span data-testid="version-row-signoff">{reviewCell(v)}</span> : null}
                   </span>
                 </td>
                 <td className="py-2.5 pr-3 text-ink-soft max-sm:hidden">
@@ -130,7 +131,7 @@ export function VersionHistory({
                   <StatusMark status={v.status} warnings={v.warnings} />
                 </td>
                 <td className="num py-2.5 pr-3 text-right max-sm:hidden">{formatForceCell(v.largestReaction, units)}</td>
-                {reviewCell ? <td className="py-2.5 pr-3">{reviewCell(v)}</td> : null}
+                {reviewCell ? <td className="py-2.5 pr-3 max-sm:hidden">{reviewCell(v)}</td> : null}
                 <td className="py-2 text-right">
                   <span className="inline-flex justify-end gap-1.5 whitespace-nowrap max-sm:flex-col max-sm:items-end">
                     {reviewHref ? (

@@ -9,6 +9,15 @@ import { RoleBadge } from "./RoleBadge";
 type Invitation = { id: string; email: string; role: Role; invitedBy: string | null; createdAt: string; expiresAt: string; status: "pending" | "expired" };
 
 /** Open invitations (owners): who, which role, by whom, until when; withdraw or send again. */
+/** How long the invitation's link still works, or that it no longer does. */
+function Expiry({ inv }: { inv: Invitation }) {
+  return inv.status === "expired" ? (
+    <span className="font-medium text-accent-deep">✕ Expired {relativeExpiry(inv.expiresAt).replace("expired ", "")}</span>
+  ) : (
+    <span className="text-ink-soft">Expires {relativeExpiry(inv.expiresAt)}</span>
+  );
+}
+
 export function InvitationsTable({ workspaceId }: { workspaceId: string }) {
   const qc = useQueryClient();
   const path = `/api/workspaces/${workspaceId}/invitations`;
@@ -43,30 +52,33 @@ export function InvitationsTable({ workspaceId }: { workspaceId: string }) {
           <thead>
             <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
               <th scope="col" className="py-2 pr-3 font-semibold">E-mail</th>
-              <th scope="col" className="py-2 pr-3 font-semibold">Role</th>
-              <th scope="col" className="py-2 pr-3 font-semibold">Invited</th>
-              <th scope="col" className="py-2 pr-3 font-semibold">Link</th>
+              <th scope="col" className="py-2 pr-3 font-semibold max-sm:hidden">Role</th>
+              <th scope="col" className="py-2 pr-3 font-semibold max-sm:hidden">Invited</th>
+              <th scope="col" className="py-2 pr-3 font-semibold max-sm:hidden">Link</th>
               <th scope="col" className="py-2 text-right font-semibold"><span className="sr-only">Actions</span></th>
             </tr>
           </thead>
           <tbody>
             {rows.map((inv) => (
               <tr key={inv.id} className="border-b border-rule-soft last:border-0" data-testid={`invitation-${inv.email}`}>
-                <td className="py-2.5 pr-3 font-medium text-ink">{inv.email}</td>
-                <td className="py-2.5 pr-3"><RoleBadge role={inv.role} /></td>
-                <td className="num py-2.5 pr-3 text-ink-soft">
+                <td className="py-2.5 pr-3 font-medium text-ink [overflow-wrap:anywhere]">
+                  {inv.email}
+                  {/* a phone has no room for the columns: the role and the link's life go under the address */}
+                  <span className="mt-1 flex flex-wrap items-center gap-x-2 gap-y-1 text-xs font-normal sm:hidden" data-testid="invitation-summary">
+                    <RoleBadge role={inv.role} />
+                    <Expiry inv={inv} />
+                  </span>
+                </td>
+                <td className="py-2.5 pr-3 max-sm:hidden"><RoleBadge role={inv.role} /></td>
+                <td className="num py-2.5 pr-3 text-ink-soft max-sm:hidden">
                   {formatDate(inv.createdAt)}
                   {inv.invitedBy ? <span className="block text-xs text-ink-faint">by {inv.invitedBy}</span> : null}
                 </td>
-                <td className="whitespace-nowrap py-2.5 pr-3">
-                  {inv.status === "expired" ? (
-                    <span className="font-medium text-accent-deep">✕ Expired {relativeExpiry(inv.expiresAt).replace("expired ", "")}</span>
-                  ) : (
-                    <span className="text-ink-soft">Expires {relativeExpiry(inv.expiresAt)}</span>
-                  )}
+                <td className="whitespace-nowrap py-2.5 pr-3 max-sm:hidden">
+                  <Expiry inv={inv} />
                 </td>
                 <td className="py-2 text-right">
-                  <span className="inline-flex gap-1.5">
+                  <span className="inline-flex gap-1.5 max-sm:flex-col max-sm:items-end">
                     <Button size="sm" tone="secondary" busy={resend.isPending && resend.variables?.id === inv.id} onClick={() => resend.mutate(inv)}>
                       Send again
                     </Button>

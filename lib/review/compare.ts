@@ -389,7 +389,9 @@ export function changeCount(c: Comparison): number {
     c.parameters.changed.length +
     c.elements.added.length +
     c.elements.removed.length +
-    c.elements.changed.length +
+    // each field of a changed element is a change, as the table lists it (a body's mass and its
+    // centre of gravity are two)
+    c.elements.changed.reduce((n, e) => n + Math.max(1, e.fields.length), 0) +
     (c.studies?.length ?? 0)
   );
 }

@@ -90,6 +90,12 @@ describe("changes to the design studies", () => {
     b.stability = { sliding: 1.3 };
     const c = compareSketches(a, b);
     expect(changeCount(c)).toBe(1);
+    // a body's mass and centre of gravity changed: two changes, as two rows of the table
+    const moved = withStudies();
+    moved.bodies = moved.bodies.map((bd, i) => (i === 0 ? { ...bd, mass: "1250 kg", cg: [2.1, 0.85] } : bd));
+    const both = compareSketches(a, moved);
+    expect(both.elements.changed.map((e) => e.fields.length)).toEqual([2]);
+    expect(changeCount(both)).toBe(2);
     render(<ChangesTable comparison={c} />);
     expect(screen.queryByText("Nothing in the inputs differs.")).toBeNull();
     const row = screen.getByText("required factor against sliding").closest("tr")!;
