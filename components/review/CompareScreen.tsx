@@ -139,16 +139,7 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
             {comparison.bodies.map((x) => (x.words ? `${x.label}: ${x.words}. ` : `${x.label}: ${x.after ?? "—"} (as before). `))}
           </p>
           {layout === "side" ? (
-            <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side">
-              <figure className="space-y-1">
-                <figcaption className="text-sm font-semibold">Before: {a.label}</figcaption>
-                <ReviewDrawing document={a.doc!} marks={comparison.marks.before} label={`Before: ${a.label}`} width={840} height={520} units={units} />
-              </figure>
-              <figure className="space-y-1">
-                <figcaption className="text-sm font-semibold">After: {b.label}</figcaption>
-                <ReviewDrawing document={b.doc!} marks={comparison.marks.after} label={`After: ${b.label}`} width={840} height={520} units={units} />
-              </figure>
-            </div>
+            <SideBySide before={a.doc!} after={b.doc!} beforeLabel={a.label ?? ""} afterLabel={b.label ?? ""} marks={comparison.marks} units={units} />
           ) : (
             <Overlay before={a.doc!} after={b.doc!} beforeLabel={a.label ?? ""} afterLabel={b.label ?? ""} marks={comparison.marks} units={units} />
           )}
@@ -168,6 +159,41 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
 }
 
 /** Both drawings at one scale and origin: the earlier one faint and grey, the later one over it. */
+
+/** The two drawings side by side, in one frame: the same scale and origin, so a moved or resized
+ *  part shows as moved, not as a drawing fitted differently. */
+function SideBySide({
+  before,
+  after,
+  beforeLabel,
+  afterLabel,
+  marks,
+  units,
+}: {
+  before: SketchFile;
+  after: SketchFile;
+  beforeLabel: string;
+  afterLabel: string;
+  marks: { before: Record<string, "removed" | "changed">; after: Record<string, "added" | "changed"> };
+  units: UnitSystem;
+}) {
+  const a = useSolved(before).result;
+  const b = useSolved(after).result;
+  const frame = useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], 640, 400, units), [before, after, a, b, units]);
+  return (
+    <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side" data-testid="compare-side-by-side">
+      <figure className="space-y-1">
+        <figcaption className="text-sm font-semibold">Before: {beforeLabel}</figcaption>
+        <ReviewDrawing document={before} marks={marks.before} label={`Before: ${beforeLabel}`} width={640} height={400} units={units} frame={frame} />
+      </figure>
+      <figure className="space-y-1">
+        <figcaption className="text-sm font-semibold">After: {afterLabel}</figcaption>
+        <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={640} height={400} units={units} frame={frame} />
+      </figure>
+    </div>
+  );
+}
+
 function Overlay({
   before,
   after,

@@ -1,13 +1,13 @@
 // The tables of a comparison: reactions before and after with the change, and every changed input.
 import { Fragment } from "react";
 import { blankWords, fieldLabel } from "@/components/editor/fieldDefs";
-import { formatForce } from "@/components/sketches/format";
+import { formatForceCell } from "@/components/sketches/format";
 import type { Comparison, FieldChange, ReactionChange, ReactionSnapshot } from "@/lib/review/compare";
 import { formatNumber, formatQuantity, type UnitSystem } from "@/solver/units";
 
 function signed(newtons: number, units: UnitSystem): string {
   if (Math.abs(newtons) < 0.5) return units === "SI" ? "±0 N" : "±0 lbf";
-  return `${newtons > 0 ? "+" : "−"}${formatForce(Math.abs(newtons), units)}`;
+  return `${newtons > 0 ? "+" : "−"}${formatForceCell(Math.abs(newtons), units)}`;
 }
 
 const COMPONENTS: Array<{ key: keyof Pick<ReactionSnapshot, "fx" | "fy" | "m">; label: string }> = [
@@ -45,8 +45,8 @@ export function ReactionsTable({ comparison, units = "SI" }: { comparison: Compa
             <Fragment key={r.id}>
               <tr className="num" data-testid={`reaction-${r.id}`}>
                 <td className="pt-1.5 pr-3 font-medium">{r.label}</td>
-                <td className="pt-1.5 pr-3 text-right">{r.before ? formatForce(r.before.resultant, units) : "— (new)"}</td>
-                <td className="pt-1.5 pr-3 text-right">{r.after ? formatForce(r.after.resultant, units) : "— (removed)"}</td>
+                <td className="pt-1.5 pr-3 text-right">{r.before ? formatForceCell(r.before.resultant, units) : "— (new)"}</td>
+                <td className="pt-1.5 pr-3 text-right">{r.after ? formatForceCell(r.after.resultant, units) : "— (removed)"}</td>
                 <td className="pt-1.5 pr-3 text-right font-medium">{r.change ? signed(r.change.abs, units) : "—"}</td>
                 <td className="pt-1.5 pr-3 text-right">{r.change?.pct === null || !r.change ? "—" : `${r.change.pct > 0 ? "+" : r.change.pct < 0 ? "−" : ""}${formatNumber(Math.abs(r.change.pct), 3)} %`}</td>
                 <td className="pt-1.5">{r.stateChange ? <strong className="text-caution">{r.stateChange}</strong> : (r.after?.word ?? r.before?.word ?? "—")}</td>
