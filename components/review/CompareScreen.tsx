@@ -158,7 +158,21 @@ export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: 
   );
 }
 
-/** Both drawings at one scale and origin: the earlier one faint and grey, the later one over it. */
+type DrawingPair = {
+  before: SketchFile;
+  after: SketchFile;
+  beforeLabel: string;
+  afterLabel: string;
+  marks: { before: Record<string, "removed" | "changed">; after: Record<string, "added" | "changed"> };
+  units: UnitSystem;
+};
+
+/** One scale and origin that holds both drawings, their labels and arrows, in `width` × `height`. */
+function useSharedFrame(before: SketchFile, after: SketchFile, width: number, height: number, units: UnitSystem) {
+  const a = useSolved(before).result;
+  const b = useSolved(after).result;
+  return useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], width, height, units), [before, after, a, b, width, height, units]);
+}
 
 /** The two drawings side by side, in one frame: the same scale and origin, so a moved or resized
  *  part shows as moved, not as a drawing fitted differently. */
@@ -169,17 +183,8 @@ function SideBySide({
   afterLabel,
   marks,
   units,
-}: {
-  before: SketchFile;
-  after: SketchFile;
-  beforeLabel: string;
-  afterLabel: string;
-  marks: { before: Record<string, "removed" | "changed">; after: Record<string, "added" | "changed"> };
-  units: UnitSystem;
-}) {
-  const a = useSolved(before).result;
-  const b = useSolved(after).result;
-  const frame = useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], 640, 400, units), [before, after, a, b, units]);
+}: DrawingPair) {
+  const frame = useSharedFrame(before, after, 640, 400, units);
   return (
     <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side" data-testid="compare-side-by-side">
       <figure className="space-y-1">
@@ -194,6 +199,7 @@ function SideBySide({
   );
 }
 
+/** Both drawings at one scale and origin: the earlier one faint and grey, the later one over it. */
 function Overlay({
   before,
   after,
@@ -201,17 +207,8 @@ function Overlay({
   afterLabel,
   marks,
   units,
-}: {
-  before: SketchFile;
-  after: SketchFile;
-  beforeLabel: string;
-  afterLabel: string;
-  marks: { before: Record<string, "removed" | "changed">; after: Record<string, "added" | "changed"> };
-  units: UnitSystem;
-}) {
-  const a = useSolved(before).result;
-  const b = useSolved(after).result;
-  const frame = useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], 1280, 640, units), [before, after, a, b, units]);
+}: DrawingPair) {
+  const frame = useSharedFrame(before, after, 1280, 640, units);
   const removed = useMemo(() => Object.fromEntries(Object.entries(marks.before).filter(([, k]) => k === "removed")), [marks.before]);
   // the earlier drawing keeps the words of what was removed only: the rest of its labels would land
   // on the later drawing's (the tables give every value before and after)
