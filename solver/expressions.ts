@@ -280,6 +280,9 @@ function compileUncached(text: string, parameterNames: ReadonlySet<string>): Com
   try {
     node = math.parse(source);
   } catch (err) {
+    // a decimal comma (1,5 or 0,55 kg/s): say what to type instead of the parser's words
+    const comma = text.includes("(") ? null : /(^|[^\w.])(\d+),(\d+)/.exec(text);
+    if (comma) throw new ExpressionError(`cannot read "${text}": write decimals with a point (${comma[2]}.${comma[3]}, not ${comma[2]},${comma[3]})`);
     throw new ExpressionError(`cannot read "${text}": ${(err as Error).message}`);
   }
   const deps = new Set<string>();

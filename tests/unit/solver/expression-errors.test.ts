@@ -32,6 +32,14 @@ describe("a failing expression says what is wrong in words, at its field", () =>
     ]);
   });
 
+  it("a decimal comma says to write a point, at its field", () => {
+    expect(errorsOf(withFields({}, { mass: "1,5 kg" }))).toEqual([{ path: "bodies[0].mass", message: 'cannot read "1,5 kg": write decimals with a point (1.5, not 1,5)' }]);
+    expect(errorsOf(withFields({ mu: "0,55" }))).toEqual([{ path: "parameters.mu", message: 'cannot read "0,55": write decimals with a point (0.55, not 0,55)' }]);
+    // a comma between a function's arguments is no decimal comma
+    expect(parseSketch(withFields({ r: "max(2, 3) m" })).ok).toBe(true);
+    expect(errorsOf(withFields({ r: "max(2,3 m" }))[0].message).not.toContain("decimals");
+  });
+
   it("a plain number added to a mass", () => {
     expect(errorsOf(withFields({}, { mass: "2 kg + 3" }))).toEqual([
       { path: "bodies[0].mass", message: '"2 kg + 3" adds a plain number to a quantity with units — give 3 a unit (3 kg) or drop the unit here' },
