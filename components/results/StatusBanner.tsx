@@ -14,6 +14,22 @@ const BADGE: Record<Tone, { word: string; cls: string }> = {
   unrestrained: { word: "Free", cls: "border-caution bg-caution text-white" },
 };
 
+/** The errors after the first, each on its own line (a few; the fields are marked in the panel). */
+const MORE_SHOWN = 4;
+function MoreErrors({ words }: { words: string[] }) {
+  if (!words.length) return null;
+  return (
+    <span className="mt-0.5 block" data-testid="more-errors">
+      {words.slice(0, MORE_SHOWN).map((w, i) => (
+        <span key={i} className="block">
+          — {w}
+        </span>
+      ))}
+      {words.length > MORE_SHOWN ? <span className="block">and {words.length - MORE_SHOWN} more</span> : null}
+    </span>
+  );
+}
+
 export function StatusBanner() {
   // deferred: a drag's frames come first, the panel catches up when the main thread is free
   const shown = useDeferredValue(useAnalysis((s) => s.shown));
@@ -32,11 +48,13 @@ export function StatusBanner() {
         <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution" data-testid="stale">
           Showing the last good result (faded on the drawing): the input has {errors.length === 1 ? "an error" : `${errors.length} errors`}
           {errors[0] ? ` — ${errorInWords(analysed, errors[0])}` : ""}
+          <MoreErrors words={errors.slice(1).map((e) => errorInWords(analysed, e))} />
         </p>
       )}
       {!shown && !stale && errors.length > 0 && (
         <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution">
           No result yet: {errorInWords(analysed, errors[0])}
+          <MoreErrors words={errors.slice(1).map((e) => errorInWords(analysed, e))} />
         </p>
       )}
       {sentences.map((s) => (

@@ -59,6 +59,19 @@ describe("input errors in words", () => {
     const stale = screen.getByTestId("stale");
     expect(stale).toHaveTextContent('the input has an error — Point force F1 — magnitude: unknown name "span"');
     expect(stale).not.toHaveTextContent("loads[0]");
+    expect(screen.queryByTestId("more-errors")).toBeNull();
+  });
+
+  it("lists every error, not only the first, each at its element and field", async () => {
+    const editor = mountResultsDock(beam("F1"));
+    act(() => void editor.getState().apply(c(setField({ id: "l1", field: "magnitude", value: "3 * span" }))));
+    act(() => void editor.getState().apply(c(setField({ id: "l1", field: "angle", value: "1,5" }))));
+    const stale = screen.getByTestId("stale");
+    expect(stale).toHaveTextContent(/^Showing the last good result \(faded on the drawing\): the input has 2 errors — Point force F1 — /);
+    const more = screen.getByTestId("more-errors");
+    expect(stale.textContent).toContain('magnitude: unknown name "span"');
+    expect(stale.textContent).toContain('cannot read "1,5": write decimals with a point (1.5, not 1,5)');
+    expect(more.textContent).toMatch(/^— Point force F1 — /);
   });
 
   it("words each kind of path", () => {
