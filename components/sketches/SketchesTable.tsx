@@ -9,6 +9,7 @@ import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { STATUS_FILTERS, type SketchSort, type SketchStatus } from "@/lib/sketch-schemas";
 import { ForkGlyph } from "./ForkGlyph";
 import { formatForceCell, timeAgo } from "./format";
+import { STATE_WORDS, type ReviewState } from "@/lib/review/rules";
 import { useUnitsPreference } from "./useUnitsPreference";
 import { StatusMark } from "./StatusMark";
 
@@ -25,7 +26,11 @@ export type SketchRow = {
   updatedBy: { id: string; name: string } | null;
   forked: boolean;
   approvedVersion?: number | null;
+  latestReviewState?: ReviewState;
 };
+
+/** The sign-off steps a lead looks for in the list: what is waiting for someone. */
+const IN_REVIEW: Partial<Record<ReviewState, string>> = { submitted: "border-caution/50 text-caution", returned: "border-accent/50 text-accent-deep", checked: "border-reaction/40 text-reaction" };
 
 type Page = { items: SketchRow[]; total: number; page: number; pageSize: number; tags: string[] };
 type Filters = { q: string; tag: string; status: string; sort: SketchSort; dir: "asc" | "desc"; page: number };
@@ -165,6 +170,15 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                       {s.approvedVersion ? (
                         <span className="ml-2 rounded border border-reaction/40 px-1 text-[11px] font-medium text-reaction" title={`Version ${s.approvedVersion} is approved`}>
                           ✓✓ v{s.approvedVersion} approved
+                        </span>
+                      ) : null}
+                      {s.latestReviewState && IN_REVIEW[s.latestReviewState] ? (
+                        <span
+                          className={`ml-2 whitespace-nowrap rounded border px-1 text-[11px] font-medium ${IN_REVIEW[s.latestReviewState]}`}
+                          title={`Version ${s.latestVersion}: ${STATE_WORDS[s.latestReviewState].sentence}`}
+                          data-testid="review-state"
+                        >
+                          v{s.latestVersion} {STATE_WORDS[s.latestReviewState].label}
                         </span>
                       ) : null}
                       {s.forked ? (

@@ -4,6 +4,7 @@ import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { membership, sketch, sketchVersion, user, workspace, type SolveSummary } from "@/db/schema";
 import type { Role } from "@/lib/roles";
+import type { ReviewState } from "@/lib/review/rules";
 import type { ListSketchesQuery, SketchStatus } from "@/lib/sketch-schemas";
 import type { DbOrTx } from "./tx";
 import { actorMay } from "./workspaces";
@@ -60,6 +61,8 @@ export type SketchListItem = {
   forked: boolean;
   /** the newest approved version, if any */
   approvedVersion: number | null;
+  /** the latest version's place in the sign-off (submitted, returned, checked…) */
+  latestReviewState: ReviewState;
 };
 
 export type SketchListPage = { items: SketchListItem[]; total: number; page: number; pageSize: number };
@@ -101,6 +104,7 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       largestReaction: latest.largestReaction,
       summary: latest.summary,
       latestMessage: latest.message,
+      latestReviewState: latest.reviewState,
       updatedAt: sketch.updatedAt,
       updaterId: updater.id,
       updaterName: updater.name,
@@ -136,6 +140,7 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       updatedBy: r.updaterId ? { id: r.updaterId, name: r.updaterName ?? "" } : null,
       forked: r.forkedFrom !== null,
       approvedVersion: r.approvedVersion === null ? null : Number(r.approvedVersion),
+      latestReviewState: (r.latestReviewState ?? "draft") as ReviewState,
     })),
   };
 }

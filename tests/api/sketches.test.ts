@@ -194,7 +194,7 @@ describe("listing", () => {
     expect(titles(res.body)).toEqual(["Stack with one guy", "Skid on bearers", "Thrust stand", "Anchor for the bend"]);
     expect(res.body.total).toBe(4);
     expect(res.body.tags).toEqual(["pipework", "pumps", "test rig"]);
-    expect(res.body.items[2]).toMatchObject({ title: "Thrust stand", status: "tips", latestVersion: 1, updatedBy: { id: eddie.id, name: eddie.name } });
+    expect(res.body.items[2]).toMatchObject({ title: "Thrust stand", status: "tips", latestVersion: 1, latestReviewState: "draft", updatedBy: { id: eddie.id, name: eddie.name } });
   });
 
   it("filters by tag, status and text, sorts by title and status, and pages", async () => {

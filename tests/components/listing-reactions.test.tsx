@@ -63,6 +63,32 @@ describe("largest reaction in the listings", () => {
     expect(largestCell(screen.getByTestId("sketch-row-Skid C"))).toBe("—");
   });
 
+  it("the workspace's sketches say which latest versions wait in the sign-off (submitted, returned, checked), not the drafts", async () => {
+    const row = (title: string, latestReviewState: SketchRow["latestReviewState"]): SketchRow => ({
+      id: title,
+      title,
+      tags: [],
+      latestVersion: 3,
+      status: "holds",
+      largestReaction: 1000,
+      warnings: [],
+      latestMessage: "",
+      updatedAt: at,
+      updatedBy: null,
+      forked: false,
+      latestReviewState,
+    });
+    answer({ items: [row("Trailer", "submitted"), row("Stand", "returned"), row("Bend", "checked"), row("Skid", "draft"), row("Cart", "approved")], total: 5, page: 1, pageSize: 20, tags: [] });
+    withQuery(<SketchesTable workspaceId="w1" canCreate />);
+    const chip = async (title: string) => within(await screen.findByTestId(`sketch-row-${title}`)).queryByTestId("review-state")?.textContent ?? null;
+    expect(await chip("Trailer")).toBe("v3 submitted");
+    expect(await chip("Stand")).toBe("v3 returned");
+    expect(await chip("Bend")).toBe("v3 checked");
+    // a draft waits for nobody; an approval has its own mark
+    expect(await chip("Skid")).toBeNull();
+    expect(await chip("Cart")).toBeNull();
+  });
+
   it("a sketch's version history", async () => {
     const version = (number: number, largestReaction: number): VersionItem => ({
       id: `v${number}`,
