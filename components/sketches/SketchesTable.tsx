@@ -2,6 +2,7 @@
 // The workspace's sketches: search, filter by tag and status, sort by column, page through.
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
+import { useSearchParams } from "next/navigation";
 import { useEffect, useState } from "react";
 import { Button, EmptyState, Notice, Select, Skeleton } from "@/components/shell/controls";
 import { formatDate, formatDateTime } from "@/components/workspaces/format";
@@ -61,10 +62,44 @@ function SortHeader({ label, sort, filters, onSort, className = "" }: { label: s
   );
 }
 
+const DEFAULT_FILTERS: Filters = { q: "", tag: "", status: "", sort: "updated", dir: "desc", page: 1 };
+const SORTS: readonly SketchSort[] = ["updated", "title", "status", "created"];
+
+/** The list's view as the address keeps it (?q=&tag=&status=&sort=&dir=&page=), defaults left out,
+ *  so a view can be reloaded, bookmarked and sent to a colleague. */
+export function filtersFromSearch(search: string): Filters {
+  const p = new URLSearchParams(search);
+  const sort = SORTS.includes(p.get("sort") as SketchSort) ? (p.get("sort") as SketchSort) : DEFAULT_FILTERS.sort;
+  const dir = p.get("dir") === "asc" || p.get("dir") === "desc" ? (p.get("dir") as "asc" | "desc") : sort === "title" ? "asc" : "desc";
+  const page = Math.max(1, Math.floor(Number(p.get("page")) || 1));
+  return { q: p.get("q") ?? "", tag: p.get("tag") ?? "", status: p.get("status") ?? "", sort, dir, page };
+}
+
+export function searchOfFilters(f: Filters): string {
+  const p = new URLSearchParams();
+  if (f.q.trim()) p.set("q", f.q.trim());
+  if (f.tag) p.set("tag", f.tag);
+  if (f.status) p.set("status", f.status);
+  if (f.sort !== DEFAULT_FILTERS.sort || f.dir !== DEFAULT_FILTERS.dir) {
+    p.set("sort", f.sort);
+    p.set("dir", f.dir);
+  }
+  if (f.page > 1) p.set("page", String(f.page));
+  const qs = p.toString();
+  return qs ? `?${qs}` : "";
+}
+
 export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string; canCreate: boolean }) {
   const [units] = useUnitsPreference();
-  const [filters, setFilters] = useState<Filters>({ q: "", tag: "", status: "", sort: "updated", dir: "desc", page: 1 });
+  // the address holds the view: read when the page opens, written as it changes
+  const search = useSearchParams();
+  // (outside the app's router, as in a test, the window's address)
+  const [filters, setFilters] = useState<Filters>(() => filtersFromSearch(search ? search.toString() : typeof window === "undefined" ? "" : window.location.search));
   const q = useDebounced(filters.q.trim(), 250);
+  useEffect(() => {
+    const next = searchOfFilters({ ...filters, q });
+    if (next !== window.location.search) window.history.replaceState(window.history.state, "", `${window.location.pathname}${next}${window.location.hash}`);
+  }, [filters, q]);
   const path = `/api/workspaces/${workspaceId}/sketches`;
   const params = new URLSearchParams({ sort: filters.sort, dir: filters.dir, page: String(filters.page), pageSize: String(PAGE_SIZE) });
   if (q) params.set("q", q);

@@ -1,11 +1,11 @@
 // The "Largest reaction" column of the workspace's sketches and of a sketch's history is a table
 // column: 4 significant figures with their trailing zeros, so 11.50 kN sits beside 14.28 kN.
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { render, screen, within } from "@testing-library/react";
+import { fireEvent, render, screen, within } from "@testing-library/react";
 import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { formatForce, formatForceCell } from "@/components/sketches/format";
-import { SketchesTable, type SketchRow } from "@/components/sketches/SketchesTable";
+import { filtersFromSearch, searchOfFilters, SketchesTable, type SketchRow } from "@/components/sketches/SketchesTable";
 import { VersionHistory, type VersionItem } from "@/components/versions/VersionHistory";
 
 function answer(body: unknown) {
@@ -87,6 +87,28 @@ describe("largest reaction in the listings", () => {
     // a draft waits for nobody; an approval has its own mark
     expect(await chip("Skid")).toBeNull();
     expect(await chip("Cart")).toBeNull();
+  });
+
+  it("keeps the list's view in the address: read back as written, defaults left out, nonsense ignored", async () => {
+    const view = { q: "bend", tag: "pipework", status: "slips", sort: "status" as const, dir: "asc" as const, page: 2 };
+    expect(searchOfFilters(view)).toBe("?q=bend&tag=pipework&status=slips&sort=status&dir=asc&page=2");
+    expect(filtersFromSearch(searchOfFilters(view))).toEqual(view);
+    expect(searchOfFilters(filtersFromSearch(""))).toBe("");
+    expect(filtersFromSearch("?sort=colour&dir=up&page=-3")).toEqual({ q: "", tag: "", status: "", sort: "updated", dir: "desc", page: 1 });
+    expect(filtersFromSearch("?sort=title")).toMatchObject({ sort: "title", dir: "asc" });
+    // the list asks for what the address says, and writes a new view back into it
+    const fetch = vi.fn(async (_url: string) => new Response(JSON.stringify({ items: [], total: 0, page: 1, pageSize: 20, tags: [] }), { status: 200, headers: { "content-type": "application/json" } }));
+    vi.stubGlobal("fetch", fetch);
+    window.history.replaceState(null, "", "/workspaces/w1?status=slips&sort=title&dir=desc");
+    withQuery(<SketchesTable workspaceId="w1" canCreate />);
+    await vi.waitFor(() => expect(fetch).toHaveBeenCalled());
+    const asked = new URL(String(fetch.mock.calls[0][0]), "http://x").searchParams;
+    expect([asked.get("status"), asked.get("sort"), asked.get("dir")]).toEqual(["slips", "title", "desc"]);
+    expect((screen.getByLabelText("Status") as HTMLSelectElement).value).toBe("slips");
+    fireEvent.change(screen.getByLabelText("Status"), { target: { value: "lifts" } });
+    await vi.waitFor(() => expect(window.location.search).toBe("?status=lifts&sort=title&dir=desc"));
+    expect(window.location.pathname).toBe("/workspaces/w1");
+    window.history.replaceState(null, "", "/");
   });
 
   it("a sketch's version history", async () => {
