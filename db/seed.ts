@@ -46,19 +46,25 @@ async function seedPeople(db: SeedDb): Promise<void> {
   }
 }
 
+/** The demo workspace was set up a fortnight before its sketches' first versions (12 days ago),
+ *  its people joining the next day, so the audit log and the members' "joined" read in order. */
+const DEMO_FOUNDED_DAYS_AGO = 14;
+
 async function seedWorkspace(db: SeedDb): Promise<void> {
   const { workspace, membership, invitation, auditEvent } = schema;
+  const daysAgo = (d: number) => new Date(Date.now() - d * 86_400_000);
   const [created] = await db
     .insert(workspace)
-    .values({ id: DEMO_WORKSPACE_ID, name: DEMO_WORKSPACE_NAME })
+    .values({ id: DEMO_WORKSPACE_ID, name: DEMO_WORKSPACE_NAME, createdAt: daysAgo(DEMO_FOUNDED_DAYS_AGO) })
     .onConflictDoNothing()
     .returning({ id: workspace.id });
   await db
     .insert(membership)
-    .values(DEMO_USERS.map((u) => ({ workspaceId: DEMO_WORKSPACE_ID, userId: u.id, role: u.role })))
+    .values(DEMO_USERS.map((u, i) => ({ workspaceId: DEMO_WORKSPACE_ID, userId: u.id, role: u.role, createdAt: daysAgo(i === 0 ? DEMO_FOUNDED_DAYS_AGO : DEMO_FOUNDED_DAYS_AGO - 1) })))
     .onConflictDoNothing();
   if (created) {
     await db.insert(auditEvent).values({
+      at: daysAgo(DEMO_FOUNDED_DAYS_AGO),
       action: "workspace.create",
       actorId: DEMO_USERS[0].id,
       actorEmail: DEMO_USERS[0].email,

@@ -26,12 +26,13 @@ export function supportName(s: Pick<Support, "kind" | "id" | "label">): string {
 }
 
 const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
-const ratio = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(2)).toString() : "∞");
+/** A friction coefficient to 3 significant figures, as the calc sheet and the solver's words give it. */
+const ratio = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(3)).toString() : "∞");
 /** A friction coefficient needed beside the one there is, with the digits it takes to tell them
  *  apart (0.554 against 0.55 is never written "needs 0.55, has 0.55"). */
 function ratios(needed: number, has: number): [string, string] {
   if (!Number.isFinite(needed) || needed <= has) return [ratio(needed), ratio(has)];
-  for (let d = 2; d <= 6; d++) {
+  for (let d = 3; d <= 6; d++) {
     const [n, h] = [Number(needed.toPrecision(d)), Number(has.toPrecision(d))];
     if (n > h) return [String(n), String(h)];
   }

@@ -4,7 +4,7 @@
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db";
-import { auditEvent, comment, signOff, sketch, sketchVersion } from "@/db/schema";
+import { auditEvent, comment, membership, signOff, sketch, sketchVersion, workspace } from "@/db/schema";
 import { DEMO_WORKSPACE_ID, seedDemo } from "@/db/seed";
 import { DEMO_SKETCHES, seedDemoSketches, type DemoSketch } from "@/db/seed-sketches";
 
@@ -35,6 +35,22 @@ describe("demo sketches", () => {
     // the skid's rear bearer really moved 0.3 m east in v3
     const [v3] = await db.select().from(sketchVersion).where(eq(sketchVersion.sketchId, DEMO_SKETCHES[0].id)).orderBy(asc(sketchVersion.number)).offset(2);
     expect(v3.document.supports[0].at).toEqual([0.6, 0]);
+  });
+
+  it("reads in order: the workspace founded, then its people joined, then their first versions saved", async () => {
+    await seedDemo();
+    const [ws] = await db.select().from(workspace).where(eq(workspace.id, DEMO_WORKSPACE_ID));
+    const members = await db.select().from(membership).where(eq(membership.workspaceId, DEMO_WORKSPACE_ID));
+    const versions = await db.select().from(sketchVersion).where(inArray(sketchVersion.sketchId, DEMO_SKETCHES.map((d) => d.id)));
+    const firstSave = Math.min(...versions.map((v) => v.createdAt.getTime()));
+    expect(ws.createdAt.getTime()).toBeLessThan(firstSave);
+    for (const m of members) {
+      expect(m.createdAt.getTime()).toBeGreaterThanOrEqual(ws.createdAt.getTime());
+      const own = versions.filter((v) => v.authorId === m.userId).map((v) => v.createdAt.getTime());
+      if (own.length) expect(m.createdAt.getTime()).toBeLessThan(Math.min(...own));
+    }
+    const [founded] = await db.select().from(auditEvent).where(and(eq(auditEvent.workspaceId, DEMO_WORKSPACE_ID), eq(auditEvent.action, "workspace.create")));
+    expect(founded.at.getTime()).toBe(ws.createdAt.getTime());
   });
 
   it("shows the review at work: the skid's v2 approved (prepared, checked, approved), the trailer's v3 submitted with open threads", async () => {

@@ -122,12 +122,12 @@ describe("status sentences the worked examples do not reach", () => {
     const W = 1000 * 9.80665;
     const held = block(4000);
     const [s] = statusSentences(held.sketch, held.result);
-    expect((4000 / (W - 4000)).toPrecision(2)).toBe("0.69");
+    expect((4000 / (W - 4000)).toPrecision(3)).toBe("0.689");
     // the headline says both at once: the pad slips, the block as a whole does not slide
-    expect(s.headline).toBe("Slips at the left pad — needs 0.69, has μ = 0.5; as a whole it has friction to spare (needs 0.41, has 0.5)");
-    expect((4000 / W).toPrecision(2)).toBe("0.41");
+    expect(s.headline).toBe("Slips at the left pad — needs 0.689, has μ = 0.5; as a whole it has friction to spare (needs 0.408, has 0.5)");
+    expect((4000 / W).toPrecision(3)).toBe("0.408");
     expect(s.details).toContain(
-      "As a whole the body needs a friction coefficient of 0.41 and its friction contacts give 0.5: the friction is shared as the supports' stiffnesses share it, and a small slip at the overloaded contact may pass the rest to the others (this analysis does not follow that).",
+      "As a whole the body needs a friction coefficient of 0.408 and its friction contacts give 0.5: the friction is shared as the supports' stiffnesses share it, and a small slip at the overloaded contact may pass the rest to the others (this analysis does not follow that).",
     );
     // 6 kN needs 0.61 of the whole block's 0.5: no such comfort
     const pushed = block(6000);
@@ -166,7 +166,7 @@ describe("status sentences the worked examples do not reach", () => {
     expect(s.tone).toBe("slips");
     // must resist W sin 30° = 490.3 N, can give μ W cos 30° = 424.6 N
     expect(s.headline).toBe(
-      `Slips as a whole — its friction contacts must resist ${formatQuantity(W * Math.sin(Math.PI / 6), "force", "SI")} and can give ${formatQuantity(0.5 * W * Math.cos(Math.PI / 6), "force", "SI")} (needs μ = 0.58 as a whole, has 0.5)`,
+      `Slips as a whole — its friction contacts must resist ${formatQuantity(W * Math.sin(Math.PI / 6), "force", "SI")} and can give ${formatQuantity(0.5 * W * Math.cos(Math.PI / 6), "force", "SI")} (needs μ = 0.577 as a whole, has 0.5)`,
     );
     expect(s.details[0]).toMatch(/^Slips at the (upper|lower) pad — needs [\d.]+, has μ = 0\.5/);
     // μ = 0.7 > 0.577 holds as a whole: no "Slips as a whole"

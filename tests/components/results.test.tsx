@@ -87,8 +87,8 @@ describe("status sentence", () => {
     // both feet over μ = 0.02 and the skid as a whole too (|Σt|/Σn = 0.025): it slides, the worse foot follows
     const f = result.bodies.skid.friction!;
     expect(f.needed).toBeGreaterThan(f.available);
-    expect(s.headline).toMatch(new RegExp(`^Slips as a whole — .* \\(needs μ = ${Number(f.needed.toPrecision(2))} as a whole, has ${Number(f.available.toPrecision(2))}\\)$`));
-    expect(s.details[0]).toMatch(new RegExp(`^Slips at the \\w+ foot — needs ${Number(worst.friction!.needed.toPrecision(2))}, has μ = ${worst.friction!.mu} \\(and at the \\w+ foot\\)`));
+    expect(s.headline).toMatch(new RegExp(`^Slips as a whole — .* \\(needs μ = ${Number(f.needed.toPrecision(3))} as a whole, has ${Number(f.available.toPrecision(3))}\\)$`));
+    expect(s.details[0]).toMatch(new RegExp(`^Slips at the \\w+ foot — needs ${Number(worst.friction!.needed.toPrecision(3))}, has μ = ${worst.friction!.mu} \\(and at the \\w+ foot\\)`));
   });
 
   it("lifts, and a slack tie: who still holds the body", () => {
