@@ -452,11 +452,13 @@ export function parametersTable(parsed: Extract<ParseResult, { ok: true }>, syst
       { key: "typed", label: "Expression", align: "left" },
       { key: "value", label: "Value", align: "left" },
     ],
-    rows: Object.entries(parsed.parameterValues).map(([name, v]) => [
-      name,
-      String(parsed.file.parameters?.[name]),
-      "value" in v ? `${formatNumber(v.value, 6)}${v.unit ? " " + prettyUnit(v.unit) : ""}${inUs(v.si, v.unit)}` : v.error,
-    ]),
+    rows: Object.entries(parsed.parameterValues).map(([name, v]) => {
+      if (!("value" in v)) return [name, String(parsed.file.parameters?.[name]), v.error];
+      const own = `${formatNumber(v.value, 6)}${v.unit ? " " + prettyUnit(v.unit) : ""}`;
+      // a value already written in the US unit is not repeated beside itself ("2,000 gpm (2,000 gpm)")
+      const us = inUs(v.si, v.unit);
+      return [name, String(parsed.file.parameters?.[name]), us && us.slice(2, -1).replace(/,/g, "") === own.replace(/,/g, "") ? own : `${own}${us}`];
+    }),
   };
 }
 

@@ -119,6 +119,12 @@ describe("result tables", () => {
     expect(params.rows.find((r) => r[0] === "p1")).toEqual(["p1", "600 kPa", "600 kPa"]);
     // a US sheet gives the value in US customary units too: 600 kPa / 6894.757 Pa/psi = 87.02 psi (NIST SP 811)
     expect(parametersTable(p, "US").rows.find((r) => r[0] === "p1")).toEqual(["p1", "600 kPa", "600 kPa (87.02 psi)"]);
+    // written in a US unit already, a value is not repeated beside itself
+    const gpm = parseSketch({ ...loadFixture("pipe-bend-anchor.json"), parameters: { ...loadFixture("pipe-bend-anchor.json").parameters, flow: "2000 gpm", p2: "40 psi" } });
+    if (!gpm.ok) throw new Error(JSON.stringify(gpm.errors));
+    const us = parametersTable(gpm, "US").rows;
+    expect(us.find((r) => r[0] === "flow")).toEqual(["flow", "2000 gpm", "2,000 gpm"]);
+    expect(us.find((r) => r[0] === "p2")).toEqual(["p2", "40 psi", "40 psi"]);
   });
 
   it("a parameter's value: a true minus and grouped thousands; angles and ratios have no US twin", async () => {
