@@ -15,3 +15,16 @@ export function niceTicks(lo: number, hi: number, count = 5): number[] {
   for (let k = Math.ceil(lo / step - 1e-9); k * step <= hi + step * 1e-9; k++) out.push(k === 0 ? 0 : Number((k * step).toPrecision(12)));
   return out;
 }
+
+/** A range widened to the round ticks just outside it, with those ticks, so the top and bottom of a
+ *  plot are labelled (a curve up to 7.4 on an axis from 0 to 8, not one whose last label is 6). */
+export function niceDomain(lo: number, hi: number, count = 5): { lo: number; hi: number; ticks: number[] } {
+  const inner = niceTicks(lo, hi, count);
+  if (inner.length < 2) return { lo, hi, ticks: inner };
+  const step = inner[1] - inner[0];
+  const a = Math.floor(lo / step + 1e-9);
+  const b = Math.ceil(hi / step - 1e-9);
+  const ticks: number[] = [];
+  for (let k = a; k <= b; k++) ticks.push(k === 0 ? 0 : Number((k * step).toPrecision(12)));
+  return { lo: ticks[0], hi: ticks[ticks.length - 1], ticks };
+}

@@ -1,7 +1,7 @@
 // A line chart as an SVG string, for the calc sheet (the browser draws its plots with recharts).
 // Marks where a series crosses zero (a contact lifting, a tie going slack, friction used up).
 import { formatNumber } from "@/solver/units";
-import { niceTicks } from "../ticks";
+import { niceDomain, niceTicks } from "../ticks";
 
 export interface ChartSeries {
   label: string;
@@ -44,15 +44,16 @@ export function lineChartSvg(spec: ChartSpec): string {
     y1 += 1;
     y0 -= 1;
   }
-  const pad = (y1 - y0) * 0.06;
-  y0 -= pad;
-  y1 += pad;
+  // out to the round ticks beyond the data, so the plot's top and bottom are labelled
+  const yAxis = niceDomain(y0, y1);
+  y0 = yAxis.lo;
+  y1 = yAxis.hi;
   const X = (v: number) => m.l + ((v - x0) / (x1 - x0 || 1)) * (W - m.l - m.r);
   const Y = (v: number) => H - m.b - ((v - y0) / (y1 - y0)) * (H - m.t - m.b);
   const parts: string[] = [];
   parts.push(`<rect x="0" y="0" width="${W}" height="${H}" fill="#ffffff"/>`);
   parts.push(`<text x="${m.l}" y="16" font-size="11" font-weight="600" fill="#1d2329">${esc(spec.title)}</text>`);
-  for (const t of niceTicks(y0, y1)) {
+  for (const t of yAxis.ticks) {
     parts.push(`<line x1="${m.l}" x2="${W - m.r}" y1="${Y(t)}" y2="${Y(t)}" stroke="${t === 0 ? "#5f6974" : "#e2dccf"}" stroke-width="${t === 0 ? 1 : 0.6}"/>`);
     parts.push(`<text x="${m.l - 5}" y="${Y(t) + 3}" font-size="8" text-anchor="end" fill="#3d4650">${esc(formatNumber(t, 3))}</text>`);
   }

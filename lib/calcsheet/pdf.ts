@@ -218,7 +218,9 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       }
       for (const mk of markers) para(`Crossing: ${mk.words}.`, 8.5, INK);
       for (const line of sweepEverywhere(parsed.file, sw, sweepQuantities(sw, Object.keys(result.reactions)))) para(`${line}.`, 8.5, INK);
-      if (!markers.length && charts.some((c) => c.series.some((se) => se.markZero))) para("No crossing in this range: none of the plotted margins reaches zero.", 8.5, INK);
+      // said of the plotted run only: another case may cross (the line above names each)
+      const plotted = combination ? `combination ${combination.name}` : caseName ? `case ${caseName}` : "the sketch as drawn";
+      if (!markers.length && charts.some((c) => c.series.some((se) => se.markZero))) para(`No crossing in this range for ${plotted}: none of the plotted margins reaches zero.`, 8.5, INK);
     } catch (err) {
       para(`This sweep could not be run: ${(err as Error).message}`, 8.5, ACCENT);
     }

@@ -66,9 +66,10 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
     if (!first) return [];
     const each = all.map((r) => {
       const f = r.result;
-      if ("error" in f) return `${r.name} not solved`;
-      if (!f.found) return `${r.name} none in the range`;
-      return `${r.name} ${formatNumber(reachedAt(f, sw.from, sw.to)!, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row ? " (first)" : ""}`;
+      // the run's name, a dash, then what it comes to: names hold commas and colons of their own
+      if ("error" in f) return `${r.name} — not solved`;
+      if (!f.found) return `${r.name} — none in the range`;
+      return `${r.name} — ${formatNumber(reachedAt(f, sw.from, sw.to)!, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row ? " (first)" : ""}`;
     });
     return [`${names[q.support] ?? q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
   });

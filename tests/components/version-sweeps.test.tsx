@@ -33,7 +33,7 @@ describe("a version's kept sweeps", () => {
     const running = runLimit(doc, { parameter: "v", from: 20, to: 45, caseId: "running", quantity: { support: "upwind", component: "margin" }, target: 0 });
     if (!running.found) throw new Error("expected a crossing");
     expect(figures[0].textContent).toContain(
-      `upwind edge lift-off in each case and combination: Engine running, 30 m/s wind ${v(running.value)}; Engine stopped, 30 m/s wind ${v(vLift)}; Engine stopped, 38 m/s storm ${v(vLift)}; Uplift check: 0.9 × weight + 1.5 × wind ${v(vLift * Math.sqrt(0.6))} (first).`,
+      `upwind edge lift-off in each case and combination: Engine running, 30 m/s wind — ${v(running.value)}; Engine stopped, 30 m/s wind — ${v(vLift)}; Engine stopped, 38 m/s storm — ${v(vLift)}; Uplift check: 0.9 × weight + 1.5 × wind — ${v(vLift * Math.sqrt(0.6))} (first).`,
     );
     expect(figures[0].textContent).not.toContain("downwind slip");
   });

@@ -173,7 +173,7 @@ describe("calc sheet PDF", () => {
     expect(text).toMatch(/Crossing: upwind edge: lift-off \(its normal force reaches zero\) at v = 35\.38 m\/s/);
     // and in every case and combination, the factored uplift check first (v_lift·√(0.9 / 1.5) = 27.41 m/s:
     // tests/unit/studies/exhaust-stack-example.test.ts)
-    expect(text).toMatch(/upwind edge lift-off in each case and combination: Engine running, 30 m\/s wind 36\.8\d? m\/s; Engine stopped, 30 m\/s wind 35\.38 m\/s; .*Uplift check: 0\.9 × weight \+ 1\.5 × wind 27\.41 m\/s \(first\)\./);
+    expect(text).toMatch(/upwind edge lift-off in each case and combination: Engine running, 30 m\/s wind — 36\.8\d? m\/s; Engine stopped, 30 m\/s wind — 35\.38 m\/s; .*Uplift check: 0\.9 × weight \+ 1\.5 × wind — 27\.41 m\/s \(first\)\./);
   }, 60000);
 
   it("prints a support-moment column only when a fixed support can carry a moment, zeros included", async () => {
