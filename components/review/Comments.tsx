@@ -313,7 +313,7 @@ export function CommentsPanel({
           onSubmit={(e) => {
             e.preventDefault();
             const body = pin ? { body: text, pin: pin.kind === "element" ? { kind: "element" as const, elementId: pin.elementId } : { kind: "point" as const, at: pin.at } } : { body: text };
-            m.post.mutate({ ...body, files }, { onSuccess: () => (setText(""), setFiles([]), onClearPin()) });
+            m.post.mutate({ ...body, files }, { onSuccess: () => (setText(""), setFiles([]), onClearPin(), onPicking(false)) });
           }}
         >
           <MentionBox id="new-comment" label="New comment" value={text} onChange={setText} members={data.members} placeholder="Comment… (@name mentions a colleague; **bold**, *italic*, `code`)" />
@@ -352,7 +352,8 @@ export function CommentsPanel({
             </Button>
             <span className="flex-1" />
             <Button type="submit" size="sm" busy={m.post.isPending} disabled={!text.trim()}>
-              Comment
+              {/* still choosing where to pin, nothing chosen: the button says where the comment goes */}
+              {picking && !pin ? "Comment on the whole version" : "Comment"}
             </Button>
           </div>
         </form>

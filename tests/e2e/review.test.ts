@@ -102,8 +102,13 @@ describe("review of a calculation in the browser", () => {
     await page.getByRole("button", { name: "Comment", exact: true }).click();
     await page.getByTestId("thread-2").waitFor();
     expect(await page.locator('[data-testid="review-drawing"] [data-thread]').count()).toBe(2);
-    // without a mouse: Escape stops pinning; the element list pins on an element
+    // without a mouse: Escape stops pinning; the element list pins on an element. While pinning
+    // with nothing chosen, the button says the comment would go on the whole version
     await page.getByRole("button", { name: "Pin to the drawing" }).click();
+    await page.getByLabel("New comment").fill("draft");
+    expect(await page.getByRole("button", { name: "Comment on the whole version" }).count()).toBe(1);
+    await page.getByLabel("New comment").fill("");
+    await page.getByRole("button", { name: "Stop pinning" }).focus();
     await page.keyboard.press("Escape");
     expect(await page.getByTestId("new-comment-pin").textContent()).toBe("Pinned on the whole version");
     await page.getByRole("button", { name: "Pin to the drawing" }).click();
