@@ -37,9 +37,16 @@ const SketchCanvas = dynamic(() => import("@/canvas/konva/SketchCanvas"), {
 });
 
 
-/** The result downloads are named after the sketch ("DN150-bend-reactions.csv"). */
+/** The result downloads are named after the sketch ("DN150-bend-reactions.csv"), and so is the
+ *  browser's tab: several sketches open at once are told apart. */
 function EditorCsvSubject({ children }: { children: ReactNode }) {
   const title = useEditor((s) => s.sketch.title) ?? "";
+  useEffect(() => {
+    if (!title.trim()) return;
+    const before = document.title;
+    document.title = `${title.trim()} · Counterpoise`;
+    return () => void (document.title = before);
+  }, [title]);
   return <CsvSubject.Provider value={title}>{children}</CsvSubject.Provider>;
 }
 
