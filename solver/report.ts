@@ -108,9 +108,13 @@ function inUnit(v: number | undefined, q: Quantity, u: Units): number | null {
 /** The states of the file format in a table's words, as the status sentences say them. */
 const STATE_WORDS: Record<string, string> = { bearing: "bearing", lifted: "lifts", taut: "taut", slack: "slack", active: "holds" };
 
-/** A support's state in a table ("slips" for a bearing contact over its μ): the panel, the CSV and the calc sheet say the same. */
-export function stateWord(r: SolveResult["reactions"][string]): string {
+/** A support's state in a table ("slips" for a bearing contact over its μ): the panel, the CSV and
+ *  the calc sheet say the same. On a body that tips (or nothing holds), the numbers are what a
+ *  lifted contact or a slack tie would have to carry: it "would pull" or "would push", as the
+ *  drawing's dashed arrow says, not "lifts" beside a force it cannot give. */
+export function stateWord(r: SolveResult["reactions"][string], bodyStatus?: string): string {
   if (r.state === "bearing" && r.friction && overMu(r.friction.needed, r.friction.mu)) return "slips";
+  if ((bodyStatus === "tips" || bodyStatus === "unrestrained") && (r.state === "lifted" || r.state === "slack")) return r.state === "lifted" ? "would pull" : "would push";
   return STATE_WORDS[r.state] ?? r.state;
 }
 
@@ -155,7 +159,7 @@ export function reactionTable(
         inUnit(sign * r.m, "moment", u),
         inUnit(r.n === undefined ? undefined : sign * r.n, "force", u),
         inUnit(r.t === undefined ? undefined : sign * r.t, "force", u),
-        stateWord(r),
+        stateWord(r, result.bodies[r.body]?.status),
         inUnit(r.margin, "force", u),
       ];
     }),
@@ -239,7 +243,7 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem): Table
         inUnit(r.m, "moment", u),
         inUnit(r.n, "force", u),
         inUnit(r.t, "force", u),
-        stateWord(r),
+        stateWord(r, run.result.bodies[r.body]?.status),
         words.join("; "),
       ]);
       marks.push(Object.keys(rowMarks).length ? rowMarks : undefined);

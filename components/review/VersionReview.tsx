@@ -166,8 +166,8 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
         {signoff.data ? <SignOffPanel data={signoff.data} path={`${base}/signoff`} concerns={concerns} onChanged={refresh} /> : <Skeleton className="h-24 w-full" />}
       </Panel>
 
-      <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">
-        <div className="space-y-3">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">
+        <div className="min-w-0 space-y-3">
           {doc ? (
             <ReviewDrawing
               document={doc}

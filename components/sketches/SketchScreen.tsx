@@ -15,7 +15,7 @@ import { can, type Role } from "@/lib/roles";
 import type { SketchStatus } from "@/lib/sketch-schemas";
 import { ForkDialog, useForkTargets } from "./ForkDialog";
 import { ForkGlyph } from "./ForkGlyph";
-import { formatForce } from "./format";
+import { formatForceCell } from "./format";
 import { useUnitsPreference } from "./useUnitsPreference";
 import { SketchDetailsForm } from "./SketchDetailsForm";
 import { StatusMark } from "./StatusMark";
@@ -101,7 +101,7 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
               <p className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-ink-soft" data-testid="latest-summary">
                 <span>Latest: v{latest.number}</span>
                 <StatusMark status={latest.status} warnings={latest.warnings} />
-                <span>largest reaction {formatForce(latest.largestReaction, units)}</span>
+                <span>largest reaction {formatForceCell(latest.largestReaction, units)}</span>
                 {sketch.approvedVersion ? (
                   <Link href={`${base}/versions/${sketch.approvedVersion}`} className="font-medium text-reaction underline decoration-reaction/40 underline-offset-2" data-testid="approved-version">
                     ✓✓ v{sketch.approvedVersion} approved
