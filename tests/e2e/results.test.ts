@@ -98,7 +98,7 @@ describe("live results", () => {
     await page.mouse.up();
     await expect.poll(() => page.getByTestId("element-form").getByTestId("field-angle").inputValue()).toBe("-30");
     await expect.poll(() => sentence(page)).toMatch(/^TipsTips about the left pin — the right pad would have to pull \d/);
-    expect(await page.locator("[data-testid=reactions] tr[data-support=pad] td[data-col=state]").textContent()).toBe("lifts");
+    expect(await page.locator("[data-testid=reactions] tr[data-support=pad] td[data-col=state]").textContent()).toBe("would pull");
     const drawingAfter = await page.getByTestId("sketch-canvas").screenshot();
     expect(drawingAfter.equals(drawingBefore)).toBe(false);
     await shot(page, "results-jet-turned-tips");

@@ -25,7 +25,7 @@ describe("result tables", () => {
     expect(onSupport.notes![0]).toMatch(/sign reversed/);
   });
 
-  it("the state column says what the panel says: a contact over its μ slips, a lifted one lifts, in the CSV too", () => {
+  it("the state column says what the panel says: a contact over its μ slips, one a tipping body would need to pull 'would pull', in the CSV too", () => {
     // pump-skid-slip: both feet need more than μ = 0.02 (|t|/n = 0.023 and 0.027)
     const slip = solve(parsedFixture("pump-skid-slip.json").sketch);
     const t = reactionTable(slip, "SI");
@@ -33,12 +33,19 @@ describe("result tables", () => {
     for (const row of t.rows) expect(row[state], String(row[0])).toBe("slips");
     const csv = Papa.parse<string[]>(tableToCsv(t, Papa.unparse)).data;
     expect(csv[1][state]).toBe("slips");
-    // thrust-stand-tips: the rear pad would have to pull, so it is drawn lifted
+    // thrust-stand-tips: the rear pad would have to pull, so it is drawn lifted (dashed); its row
+    // gives the pull it would need, and says so rather than "lifts" beside a force it cannot give
     const tips = solve(parsedFixture("thrust-stand-tips.json").sketch);
-    const words = reactionTable(tips, "SI").rows.map((row) => row[state]);
+    expect(tips.bodies[Object.keys(tips.bodies)[0]].status).toBe("tips");
+    const rows = reactionTable(tips, "SI").rows;
+    const words = rows.map((row) => row[state]);
     expect(Object.values(tips.reactions).map((r) => r.state)).toContain("lifted");
-    expect(words).toContain("lifts");
-    expect(words).not.toContain("lifted");
+    expect(words).toContain("would pull");
+    expect(words).not.toContain("lifts");
+    // a contact that lifts while the body still holds on its other supports: "lifts" (statics)
+    const held = solve(parsedFixture("pump-set-hold-down.json").sketch);
+    expect(Object.values(held.bodies)[0].status).toBe("lifts");
+    expect(reactionTable(held, "SI").rows.map((row) => row[state])).toContain("lifts");
   });
 
   it("US customary columns in lbf", () => {
