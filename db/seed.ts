@@ -52,7 +52,9 @@ const DEMO_FOUNDED_DAYS_AGO = 14;
 
 async function seedWorkspace(db: SeedDb): Promise<void> {
   const { workspace, membership, invitation, auditEvent } = schema;
-  const daysAgo = (d: number) => new Date(Date.now() - d * 86_400_000);
+  // one clock reading: the workspace and its founding event carry the same instant
+  const now = Date.now();
+  const daysAgo = (d: number) => new Date(now - d * 86_400_000);
   const [created] = await db
     .insert(workspace)
     .values({ id: DEMO_WORKSPACE_ID, name: DEMO_WORKSPACE_NAME, createdAt: daysAgo(DEMO_FOUNDED_DAYS_AGO) })

@@ -43,4 +43,6 @@ export const tokenParams = z.object({ token: z.string().min(10).max(200) });
 export const auditQuery = z.object({
   before: z.coerce.number().int().positive().optional(),
   limit: z.coerce.number().int().min(1).max(200).optional(),
+  /** "hide": leave the members' sign-ins out, so the changes to the workspace read on their own */
+  signIns: z.enum(["show", "hide"], { error: 'must be "show" or "hide"' }).optional(),
 });

@@ -1,5 +1,6 @@
 "use client";
 import { useInfiniteQuery } from "@tanstack/react-query";
+import { useState } from "react";
 import { Button, EmptyState, Notice, Skeleton } from "@/components/shell/controls";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { auditSentence, type AuditEntry } from "./auditSentence";
@@ -10,12 +11,26 @@ type Page = { events: AuditEntry[]; nextBefore: number | null };
 /** The owners' audit log, newest first, fifty at a time. */
 export function AuditLog({ workspaceId }: { workspaceId: string }) {
   const path = `/api/workspaces/${workspaceId}/audit`;
+  // sign-ins are most of the rows: they can step aside so the changes read on their own
+  const [signIns, setSignIns] = useState(true);
   const q = useInfiniteQuery({
-    queryKey: apiKey(path),
-    queryFn: ({ pageParam }) => apiFetch<Page>(pageParam ? `${path}?before=${pageParam}` : path),
+    queryKey: [...apiKey(path), signIns],
+    queryFn: ({ pageParam }) => {
+      const params = new URLSearchParams(signIns ? {} : { signIns: "hide" });
+      if (pageParam) params.set("before", String(pageParam));
+      const qs = params.toString();
+      return apiFetch<Page>(qs ? `${path}?${qs}` : path);
+    },
     initialPageParam: 0,
     getNextPageParam: (last) => last.nextBefore ?? undefined,
   });
+
+  const toggle = (
+    <label className="flex items-center gap-2 text-sm text-ink-soft">
+      <input type="checkbox" className="accent-accent" checked={signIns} onChange={(e) => setSignIns(e.target.checked)} />
+      Show sign-ins
+    </label>
+  );
 
   if (q.isPending) {
     return (
@@ -34,10 +49,17 @@ export function AuditLog({ workspaceId }: { workspaceId: string }) {
     );
   }
   const events = q.data.pages.flatMap((p) => p.events);
-  if (!events.length) return <EmptyState title="Nothing recorded yet">Sign-ins, invitations, role changes and removals appear here.</EmptyState>;
+  if (!events.length)
+    return (
+      <div className="space-y-4">
+        {signIns ? null : toggle}
+        <EmptyState title="Nothing recorded yet">Sign-ins, invitations, role changes and removals appear here.</EmptyState>
+      </div>
+    );
 
   return (
     <div className="space-y-4">
+      {toggle}
       <div className="relative overflow-x-auto">
         <table className="w-full text-sm">
           <caption className="sr-only">Audit log, newest first</caption>

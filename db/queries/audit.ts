@@ -35,7 +35,7 @@ export function withoutHiddenDetail<T extends { detail: Record<string, unknown> 
 export async function listAuditEvents(
   workspaceId: string,
   viewerId: string,
-  opts: { before?: number; limit?: number } = {},
+  opts: { before?: number; limit?: number; signIns?: "show" | "hide" } = {},
 ): Promise<{ events: AuditRow[]; nextBefore: number | null }> {
   const limit = Math.min(Math.max(opts.limit ?? 50, 1), 200);
   const memberAtTheTime = exists(
@@ -61,10 +61,12 @@ export async function listAuditEvents(
     .leftJoin(targetUser, and(eq(auditEvent.targetType, "user"), eq(targetUser.id, auditEvent.targetId)))
     .where(
       and(
-        or(
-          eq(auditEvent.workspaceId, workspaceId),
-          and(isNull(auditEvent.workspaceId), eq(auditEvent.action, "auth.sign_in"), memberAtTheTime),
-        ),
+        opts.signIns === "hide"
+          ? eq(auditEvent.workspaceId, workspaceId)
+          : or(
+              eq(auditEvent.workspaceId, workspaceId),
+              and(isNull(auditEvent.workspaceId), eq(auditEvent.action, "auth.sign_in"), memberAtTheTime),
+            ),
         opts.before ? lt(auditEvent.id, opts.before) : undefined,
         actorMay(workspaceId, viewerId, "audit.read"),
       ),

@@ -347,4 +347,21 @@ describe("the owners' audit log", () => {
     const lateSignIns = res.body.events.filter((e: { action: string; actorEmail: string }) => e.action === "auth.sign_in" && e.actorEmail === late.email);
     expect(lateSignIns.map((e: { id: number }) => e.id)).toEqual([Math.max(...all.map((r) => r.id))]);
   });
+
+  it("leaves the sign-ins out when asked, so the changes read on their own; a bad value is named", async () => {
+    const owner = await makeAccount("quietowner");
+    const ws = await makeWorkspace("Quiet log", [[owner, "owner"]]);
+    await signIn(owner.email);
+    const path = `/api/workspaces/${ws}/audit`;
+    const shown = await call(auditRoute.GET, { params: { id: ws }, cookie: owner.cookie, path });
+    expect(shown.body.events.some((e: { action: string }) => e.action === "auth.sign_in")).toBe(true);
+    const hidden = await call(auditRoute.GET, { params: { id: ws }, cookie: owner.cookie, path: `${path}?signIns=hide` });
+    expect(hidden.status).toBe(200);
+    const actions = hidden.body.events.map((e: { action: string }) => e.action);
+    expect(actions).not.toContain("auth.sign_in");
+    expect(actions.length).toBe(shown.body.events.filter((e: { action: string }) => e.action !== "auth.sign_in").length);
+    const bad = await call(auditRoute.GET, { params: { id: ws }, cookie: owner.cookie, path: `${path}?signIns=maybe` });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toEqual([{ path: "query.signIns", message: 'must be "show" or "hide"' }]);
+  });
 });
