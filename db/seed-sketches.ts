@@ -203,7 +203,7 @@ export const DEMO_SKETCHES: DemoSketch[] = [
 /** The documents of a demo sketch's versions, in order (each step edits the one before). */
 export function demoVersions(s: DemoSketch): Array<{ step: Step; doc: Doc }> {
   // the drawing carries the sketch's name, as one saved from the editor does
-  const doc = { ...readSketchFile(s.file), title: s.title };
+  const doc: Doc = { ...readSketchFile(s.file), title: s.title };
   // Steps are cumulative: apply the first step's edit, then each later one on top. A step
   // without an edit is the committed file as it stands, so edits made before it are undone.
   const out: Array<{ step: Step; doc: Doc }> = [];
@@ -211,7 +211,7 @@ export function demoVersions(s: DemoSketch): Array<{ step: Step; doc: Doc }> {
   for (const step of s.steps) {
     if (step.edit) step.edit(current);
     else current = structuredClone(doc);
-    if (step.notes) (current as Doc).description = step.notes;
+    if (step.notes) current.description = step.notes;
     out.push({ step, doc: structuredClone(current) });
   }
   return out;

@@ -40,6 +40,8 @@ export function StatusBanner() {
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
   const units = useEditor((s) => s.units);
   const sentences = useMemo(() => (shown && numeric ? statusSentences(numeric, shown, units) : []), [shown, numeric, units]);
+  // the errors after the first, in words: under the faded result or the missing one
+  const more = useMemo(() => errors.slice(1).map((e) => errorInWords(analysed, e)), [errors, analysed]);
 
   if (!hasBody) return <p className="text-[13px] text-ink-faint" data-testid="status">Draw a body, then its supports, to see the reactions.</p>;
   return (
@@ -48,13 +50,13 @@ export function StatusBanner() {
         <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution" data-testid="stale">
           Showing the last good result (faded on the drawing): the input has {errors.length === 1 ? "an error" : `${errors.length} errors`}
           {errors[0] ? ` — ${errorInWords(analysed, errors[0])}` : ""}
-          <MoreErrors words={errors.slice(1).map((e) => errorInWords(analysed, e))} />
+          <MoreErrors words={more} />
         </p>
       )}
       {!shown && !stale && errors.length > 0 && (
         <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution">
           No result yet: {errorInWords(analysed, errors[0])}
-          <MoreErrors words={errors.slice(1).map((e) => errorInWords(analysed, e))} />
+          <MoreErrors words={more} />
         </p>
       )}
       {sentences.map((s) => (

@@ -176,14 +176,7 @@ function useSharedFrame(before: SketchFile, after: SketchFile, width: number, he
 
 /** The two drawings side by side, in one frame: the same scale and origin, so a moved or resized
  *  part shows as moved, not as a drawing fitted differently. */
-function SideBySide({
-  before,
-  after,
-  beforeLabel,
-  afterLabel,
-  marks,
-  units,
-}: DrawingPair) {
+function SideBySide({ before, after, beforeLabel, afterLabel, marks, units }: DrawingPair) {
   const frame = useSharedFrame(before, after, 640, 400, units);
   return (
     <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side" data-testid="compare-side-by-side">
@@ -200,14 +193,7 @@ function SideBySide({
 }
 
 /** Both drawings at one scale and origin: the earlier one faint and grey, the later one over it. */
-function Overlay({
-  before,
-  after,
-  beforeLabel,
-  afterLabel,
-  marks,
-  units,
-}: DrawingPair) {
+function Overlay({ before, after, beforeLabel, afterLabel, marks, units }: DrawingPair) {
   const frame = useSharedFrame(before, after, 1280, 640, units);
   const removed = useMemo(() => Object.fromEntries(Object.entries(marks.before).filter(([, k]) => k === "removed")), [marks.before]);
   // the earlier drawing keeps the words of what was removed only: the rest of its labels would land
