@@ -6,7 +6,8 @@ import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { SolveResult, Vec2 } from "@/solver/types";
 import type { Scene, SceneBody, SceneItem } from "../scene";
 import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp, solidArrow, sub, text, unit, type Prim, type Pt } from "./prims";
-import { groundSideOf, labelAt, type DrawState } from "./symbols";
+import { anchorWorld, groundSideOf, labelAt, type DrawState } from "./symbols";
+import { nearestOnSegment } from "../geometry/polygon";
 import { CAUTION, INK, INK_SOFT, REACTION } from "./palette";
 import { placeResultLabels } from "./labels";
 
@@ -47,11 +48,22 @@ export function supportStates(result: SolveResult): Map<string, DrawState> {
   return states;
 }
 
+/** The least distance between segments ab and cd (0 where they cross). */
+function segmentGap(a: Pt, b: Pt, c: Pt, d: Pt): number {
+  const cross = (o: Pt, p: Pt, q: Pt) => (p[0] - o[0]) * (q[1] - o[1]) - (p[1] - o[1]) * (q[0] - o[0]);
+  if (cross(a, b, c) * cross(a, b, d) < 0 && cross(c, d, a) * cross(c, d, b) < 0) return 0;
+  return Math.min(nearestOnSegment(a, c, d).distance, nearestOnSegment(b, c, d).distance, nearestOnSegment(c, a, b).distance, nearestOnSegment(d, a, b).distance);
+}
+
 export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions): ResultDrawing {
   const s = o.scale;
   const prims: Prim[] = [];
   const states = o.states ?? supportStates(result);
   const bodyOf = (id: string) => scene.byId.get(id) as SceneBody | undefined;
+
+  // what the weight's arrow keeps clear of: the reactions' arrows and every element's anchor
+  const drawnArrows: Array<[Pt, Pt]> = [];
+  const anchors: Pt[] = scene.items.map((item) => px(anchorWorld(item), s)).filter(finite);
 
   let maxR = 0;
   for (const r of Object.values(result.reactions)) maxR = Math.max(maxR, Math.hypot(r.fx, r.fy));
@@ -95,6 +107,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
         to = add(from, mul(u, L));
       }
       prims.push(...doubleArrow(from, to, color, 1.5, 11, dash));
+      drawnArrows.push([from, to]);
       const mid = unit(sub(mul(add(from, to), 0.5), at));
       const corners: Pt[] = [[1, 1], [-1, 1], [1, -1], [-1, -1]];
       // the first corner (below right) unless the force's arrow leaves that way
@@ -121,8 +134,14 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
         // along gravity (down the page unless the sketch turns it), in screen axes (y down)
         const d: Pt = [t.fx / W, -t.fy / W];
         const side: Pt = [d[1], -d[0]];
-        prims.push(...solidArrow(add(cg, mul(d, 8)), add(cg, mul(d, 52)), INK, 1.9, 11));
-        prims.push(text(add(add(cg, mul(d, 38)), mul(side, 7)), `W ${fq(W, "force", o.units)}`, INK, 11.5, { weight: 600, align: side[0] >= 0 ? "left" : "right", baseline: "middle" }));
+        // hung from the centre of gravity; or, when a support sits under it (a body on one post),
+        // arriving at it from the other side: the same line of action, clear of the reaction's arrow
+        const clearance = (a: Pt, b: Pt) => Math.min(...anchors.map((p) => nearestOnSegment(p, a, b).distance), ...drawnArrows.map(([f, t]) => segmentGap(a, b, f, t)));
+        const hung = clearance(add(cg, mul(d, 8)), add(cg, mul(d, 52)));
+        const arrives = hung < 6 && clearance(add(cg, mul(d, -52)), add(cg, mul(d, -8))) > hung;
+        const [from, to, at] = arrives ? [add(cg, mul(d, -52)), add(cg, mul(d, -8)), add(cg, mul(d, -30))] : [add(cg, mul(d, 8)), add(cg, mul(d, 52)), add(cg, mul(d, 38))];
+        prims.push(...solidArrow(from, to, INK, 1.9, 11));
+        prims.push(text(add(at, mul(side, 7)), `W ${fq(W, "force", o.units)}`, INK, 11.5, { weight: 600, align: side[0] >= 0 ? "left" : "right", baseline: "middle" }));
       }
       if (t.kind === "pressure") {
         const port = scene.byId.get(t.id) as Extract<SceneItem, { kind: "inlet" | "outlet" }> | undefined;

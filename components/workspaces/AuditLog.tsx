@@ -9,10 +9,18 @@ import { formatDateTime } from "./format";
 type Page = { events: AuditEntry[]; nextBefore: number | null };
 
 /** The owners' audit log, newest first, fifty at a time. */
-export function AuditLog({ workspaceId }: { workspaceId: string }) {
+export function AuditLog({ workspaceId, showSignIns = true }: { workspaceId: string; showSignIns?: boolean }) {
   const path = `/api/workspaces/${workspaceId}/audit`;
   // sign-ins are most of the rows: they can step aside so the changes read on their own
-  const [signIns, setSignIns] = useState(true);
+  // the page's address keeps the choice (?signIns=hide), so a reload or a shared link shows the same rows
+  const [signIns, setSignIns] = useState(showSignIns);
+  const choose = (show: boolean) => {
+    setSignIns(show);
+    const url = new URL(window.location.href);
+    if (show) url.searchParams.delete("signIns");
+    else url.searchParams.set("signIns", "hide");
+    window.history.replaceState(window.history.state, "", url);
+  };
   const q = useInfiniteQuery({
     queryKey: [...apiKey(path), signIns],
     queryFn: ({ pageParam }) => {
@@ -27,7 +35,7 @@ export function AuditLog({ workspaceId }: { workspaceId: string }) {
 
   const toggle = (
     <label className="flex items-center gap-2 text-sm text-ink-soft">
-      <input type="checkbox" className="accent-accent" checked={signIns} onChange={(e) => setSignIns(e.target.checked)} />
+      <input type="checkbox" className="accent-accent" checked={signIns} onChange={(e) => choose(e.target.checked)} />
       Show sign-ins
     </label>
   );

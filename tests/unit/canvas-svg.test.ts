@@ -266,6 +266,37 @@ describe("gravity turned off −y", () => {
   });
 });
 
+describe("a body on one post under its centre of gravity", () => {
+  it("draws the weight arriving at the centre of gravity from above, clear of the post's reaction", () => {
+    const beam = {
+      format: "counterpoise.sketch",
+      version: 1,
+      title: "Beam on one post",
+      bodies: [{ id: "beam", label: "Beam", mass: 120, cg: [1.5, 0.1], outline: [[0, 0], [3, 0], [3, 0.2], [0, 0.2]] }],
+      supports: [{ id: "post", label: "post", body: "beam", kind: "contact", at: [1.5, 0], angle: 90 }],
+    };
+    const parsed = parseSketch(beam);
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+    const result = solveFile(beam) as SolveResult;
+    // the post carries the whole weight, m·g = 120 × 9.80665 (standard gravity, ISO 80000-3)
+    expect(result.reactions.post.fy).toBeCloseTo(120 * 9.80665, 9);
+    const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+    const { results } = scenePrims(scene, 100, "SI", result);
+    const cg: [number, number] = [150, -10];
+    // the shaft starts 52 px above the centre of gravity, on its vertical, and runs down toward it
+    const shaft = results.find((p) => p.t === "poly" && p.pts.length === 2 && Math.abs(p.pts[0][0] - cg[0]) < 1e-9 && Math.abs(p.pts[0][1] - (cg[1] - 52)) < 1e-9);
+    expect(shaft).toBeDefined();
+    if (shaft?.t !== "poly") return;
+    expect(shaft.pts[1][0]).toBeCloseTo(cg[0], 9);
+    expect(shaft.pts[1][1]).toBeGreaterThan(cg[1] - 52);
+    expect(shaft.pts[1][1]).toBeLessThan(cg[1] - 8);
+    // nothing of the weight's arrow reaches below the centre of gravity, where the post's reaction is
+    const black = results.filter((p) => p.t === "poly" && p.stroke === shaft.stroke && p.pts.every((q) => Math.abs(q[0] - cg[0]) < 8));
+    expect(black.flatMap((p) => (p.t === "poly" ? p.pts : [])).every((q) => q[1] <= cg[1])).toBe(true);
+    expect(results.some((p) => p.t === "text" && p.text === "W 1.177 kN")).toBe(true);
+  });
+});
+
 describe("a position in error", () => {
   it("marks the element at its body's centre of gravity, named, with the field to check", () => {
     const { sketch, result } = solved("washing-cart");

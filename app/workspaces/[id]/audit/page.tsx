@@ -5,8 +5,15 @@ import { requirePageRole } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Audit log" };
 
-export default async function AuditPage({ params }: { params: Promise<{ id: string }> }) {
+export default async function AuditPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<{ signIns?: string | string[] }>;
+}) {
   const { id } = await params;
+  const { signIns } = await searchParams;
   const { allowed } = await requirePageRole(id, `/workspaces/${id}/audit`, "audit.read");
   return (
     <div className="space-y-6">
@@ -15,7 +22,7 @@ export default async function AuditPage({ params }: { params: Promise<{ id: stri
         <p className="mt-1 text-ink-soft">Who did what in this workspace: sign-ins of its members, invitations, role changes and removals. Times are UTC.</p>
       </div>
       {allowed ? (
-        <AuditLog workspaceId={id} />
+        <AuditLog workspaceId={id} showSignIns={signIns !== "hide"} />
       ) : (
         <Notice tone="info" title="Only owners can see the audit log">
           Ask an owner of this workspace if you need to know who changed what.

@@ -1,0 +1,65 @@
+// The owners' audit log keeps the "Show sign-ins" choice in the page's address, so a reload or a
+// shared link shows the same rows, and it asks the server for exactly those rows.
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { render, screen } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { AuditLog } from "@/components/workspaces/AuditLog";
+
+const signIn = { id: 2, at: "2026-11-02T08:00:00Z", action: "auth.sign_in", actorName: "Eli Editor", actorEmail: "eli@example.com", targetType: null, targetId: null, targetName: null, detail: {} };
+const invite = { id: 1, at: "2026-11-01T08:00:00Z", action: "invitation.create", actorName: "Orla Owner", actorEmail: "orla@example.com", targetType: null, targetId: null, targetName: null, detail: { email: "cho@example.com", role: "checker" } };
+
+function serve() {
+  const asked: string[] = [];
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (path: string) => {
+      asked.push(path);
+      const events = path.includes("signIns=hide") ? [invite] : [signIn, invite];
+      return new Response(JSON.stringify({ events, nextBefore: null }), { status: 200, headers: { "content-type": "application/json" } });
+    }),
+  );
+  return asked;
+}
+
+const show = (showSignIns?: boolean) =>
+  render(
+    <QueryClientProvider client={new QueryClient()}>
+      <AuditLog workspaceId="w1" showSignIns={showSignIns} />
+    </QueryClientProvider>,
+  );
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+  window.history.replaceState(null, "", "/");
+});
+
+describe("the audit log's sign-ins switch", () => {
+  it("starts from the address and writes the choice back to it", async () => {
+    const asked = serve();
+    window.history.replaceState(null, "", "/workspaces/w1/audit?signIns=hide");
+    show(false);
+    expect(await screen.findByText("invited cho@example.com as checker")).toBeTruthy();
+    expect(screen.queryByText("signed in")).toBeNull();
+    expect(asked).toEqual(["/api/workspaces/w1/audit?signIns=hide"]);
+    const box = screen.getByRole("checkbox", { name: "Show sign-ins" }) as HTMLInputElement;
+    expect(box.checked).toBe(false);
+
+    await userEvent.setup().click(box);
+    expect(await screen.findByText("signed in")).toBeTruthy();
+    expect(asked.at(-1)).toBe("/api/workspaces/w1/audit");
+    expect(window.location.search).toBe("");
+    expect(window.location.pathname).toBe("/workspaces/w1/audit");
+  });
+
+  it("shows sign-ins by default and hiding them puts ?signIns=hide in the address", async () => {
+    const asked = serve();
+    window.history.replaceState(null, "", "/workspaces/w1/audit");
+    show();
+    expect(await screen.findByText("signed in")).toBeTruthy();
+    await userEvent.setup().click(screen.getByRole("checkbox", { name: "Show sign-ins" }));
+    expect(window.location.search).toBe("?signIns=hide");
+    await vi.waitFor(() => expect(screen.queryByText("signed in")).toBeNull());
+    expect(asked).toEqual(["/api/workspaces/w1/audit", "/api/workspaces/w1/audit?signIns=hide"]);
+  });
+});
