@@ -8,7 +8,7 @@ import { Button, EmptyState, Notice } from "@/components/shell/controls";
 import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import type { Member } from "@/lib/review/comment-text";
-import { formatNumber } from "@/solver/units";
+import { pinWords } from "@/lib/review/pin-words";
 import { AttachmentList, attachFiles, FilePicker, removeAttachment, type Attachment } from "./Attachments";
 import { CommentText } from "./CommentText";
 import type { PickedPin } from "./ReviewDrawing";
@@ -24,12 +24,6 @@ export type CommentsData = {
   locked: boolean;
   canComment: boolean;
 };
-
-export function pinWords(pin: CommentPin | PickedPin | null, labels: Record<string, string>): string {
-  if (!pin) return "on the whole version";
-  if (pin.kind === "element") return `on ${labels[pin.elementId] ?? pin.elementId}`;
-  return `at (${formatNumber(pin.at[0], 3)}, ${formatNumber(pin.at[1], 3)}) m`;
-}
 
 /** A text box that offers the workspace's members after “@”: ↑/↓ pick one, Enter or Tab puts it in, Escape closes the list. */
 function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label }: { id: string; value: string; onChange: (v: string) => void; members: Member[]; placeholder?: string; rows?: number; label: string }) {

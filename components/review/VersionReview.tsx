@@ -18,6 +18,7 @@ import { reactionTable, stabilityTable } from "@/solver/report";
 import { withoutColumn, withoutEmptyReactionColumns } from "@/canvas/studies/tables";
 import { ReportTable } from "@/components/studies/ReportTable";
 import { studyOfDocument } from "@/lib/review/compare";
+import { elementLabels } from "@/lib/review/pin-words";
 import { belowRequired, CaseTables } from "@/components/studies/CaseTables";
 import { CsvSubject } from "@/components/studies/csv";
 import { versionConcerns, withOpenThreads } from "./concerns";
@@ -94,11 +95,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
     window.history.replaceState(window.history.state, "", id ? `#thread-${id}` : window.location.pathname + window.location.search);
   };
   const doc = version.data?.version.document;
-  const labels = useMemo(() => {
-    const out: Record<string, string> = {};
-    if (doc) for (const e of [...doc.bodies, ...doc.supports, ...doc.loads, ...doc.ports, ...doc.massSources]) out[e.id] = e.label || e.id;
-    return out;
-  }, [doc]);
+  const labels = useMemo(() => (doc ? elementLabels(doc) : {}), [doc]);
   const pins = useMemo(
     () =>
       (comments.data?.threads ?? []).flatMap((t, i) =>

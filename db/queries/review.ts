@@ -154,6 +154,8 @@ export async function getVersionForCalcSheet(versionId: string, userId: string) 
     review: reviewWords(row.reviewState as ReviewState, entries),
     document: row.document as SketchFile,
     signOff: signOffRows,
+    /** every sign-off step of the version, in order, for the check record */
+    steps: entries,
   };
 }
 export type CalcSheetVersion = NonNullable<Awaited<ReturnType<typeof getVersionForCalcSheet>>>;

@@ -28,6 +28,8 @@ import { lineChartSvg } from "./chart";
 import { sweepCharts, sweepEverywhere, sweepQuantities } from "./sweeps";
 import { registerFonts } from "./fonts";
 import { drawTable } from "./table";
+import { checkRecord, type CheckRecordInput } from "./record";
+import { elementLabels } from "@/lib/review/pin-words";
 
 /** The height an svg says it has (its own attribute), or `fallback`. */
 const svgHeight = (svg: string, fallback: number) => Number(/^<svg[^>]*\sheight="([\d.]+)"/.exec(svg)?.[1] ?? fallback);
@@ -53,6 +55,8 @@ export interface CalcSheetInput {
   review?: string;
   /** the saved sketch file */
   file: unknown;
+  /** the version's sign-off steps and comment threads, printed as its check record */
+  record?: CheckRecordInput;
   units?: UnitSystem;
 }
 
@@ -223,6 +227,31 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       if (!markers.length && charts.some((c) => c.series.some((se) => se.markZero))) para(`No crossing in this range for ${plotted}: none of the plotted margins reaches zero.`, 8.5, INK);
     } catch (err) {
       para(`This sweep could not be run: ${(err as Error).message}`, 8.5, ACCENT);
+    }
+  }
+
+  // ---- the check record: sign-off steps with their notes, and every comment thread
+  if (input.record) {
+    const rec = checkRecord(input.record, elementLabels(parsed.file));
+    heading("Check record");
+    para(rec.summary, 9, INK);
+    doc.moveDown(0.3);
+    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text("Sign-off", left, doc.y, { width });
+    if (rec.steps.length) for (const line of rec.steps) para(line, 8.5, SOFT);
+    else para("Not yet submitted for checking.", 8.5, SOFT);
+    if (rec.threads.length) {
+      doc.moveDown(0.4);
+      doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text("Comments", left, doc.y, { width });
+    }
+    for (const t of rec.threads) {
+      ensureSpace(doc, 36);
+      doc.moveDown(0.25);
+      doc.font("Inter-SemiBold").fontSize(8.5).fillColor(t.open ? ACCENT : INK).text(t.heading, left, doc.y, { width, features: PROSE_FEATURES });
+      for (const line of t.lines) doc.font("Inter").fontSize(8.5).fillColor(SOFT).text(line, left + 12, doc.y, { width: width - 12, features: PROSE_FEATURES });
+    }
+    if (rec.earlier) {
+      doc.moveDown(0.4);
+      para(rec.earlier, 8.5, ACCENT);
     }
   }
 

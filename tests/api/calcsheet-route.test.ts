@@ -4,6 +4,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET } from "@/app/api/sketches/[id]/versions/[number]/calc-sheet/route";
 import { createSketch } from "@/lib/sketches";
 import { parseSketch } from "@/solver";
+import { appOrigin } from "@/lib/env";
+import { addComment, resolveThread } from "@/lib/review/comments";
+import { takeSignOffStep } from "@/lib/review/signoff";
 import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { fixture as sketchFile } from "./sketch-fixtures";
 
@@ -37,6 +40,31 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
     expect(missing.status).toBe(404);
     expect((missing.body as { error: { message: string } }).error.message).toBe("This sketch has no version 9.");
   });
+
+  it("prints the version's check record: its sign-off steps with notes and its comment threads", async () => {
+    const first = await addComment(sketchId, 1, owner, { body: "Is the **anchor** bolted to the plinth?", pin: { kind: "element", elementId: "anchor" } });
+    await addComment(sketchId, 1, owner, { body: "Yes, four M20.", parentId: first.id });
+    await resolveThread(first.id, owner, true);
+    await addComment(sketchId, 1, owner, { body: "Add the hydrotest case." });
+    await takeSignOffStep(sketchId, 1, owner, { step: "submit", note: "Ready for checking" });
+    const res = await (GET as unknown as (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>)(
+      new Request(`${appOrigin()}/api/sketches/${sketchId}/versions/1/calc-sheet`, { headers: { cookie: owner.cookie } }),
+      { params: Promise.resolve({ id: sketchId, number: "1" }) },
+    );
+    expect(res.status).toBe(200);
+    const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
+    const doc = await pdfjs.getDocument({ data: new Uint8Array(await res.arrayBuffer()), useSystemFonts: false, isEvalSupported: false }).promise;
+    let text = "";
+    for (let i = 1; i <= doc.numPages; i++) text += (await (await doc.getPage(i)).getTextContent()).items.map((it) => ("str" in it ? it.str : "")).join(" ") + " ";
+    text = text.replace(/\s+/g, " ");
+    expect(text).toContain("2 comment threads on this version: 1 open, 1 resolved.");
+    expect(text).toMatch(/UTC · Calc-owner Tester submitted it for checking: “Ready for checking”/);
+    // the pin names the element by its label in the saved file
+    expect(text).toMatch(/1\. On anchor block — resolved by Calc-owner Tester, \d{4}-\d\d-\d\d \d\d:\d\d UTC/);
+    expect(text).toContain("Is the anchor bolted to the plinth?");
+    expect(text).toContain("Yes, four M20.");
+    expect(text).toContain("2. On the whole version — open");
+  }, 60000);
 
   it("refuses units other than SI and US, naming the field", async () => {
     const r = await call(GET as never, { params: { id: sketchId, number: "1" }, cookie: owner.cookie, path: `/api/sketches/${sketchId}/versions/1/calc-sheet?units=cgs` });

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { getVersion } from "@/db/queries/versions";
 import { getVersionForCalcSheet } from "@/db/queries/review";
+import { listVersionComments, openThreadsBefore } from "@/db/queries/comments";
 import { route } from "@/lib/api";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
 import { AppError } from "@/lib/errors";
@@ -19,6 +20,7 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
   if (!version) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
   const sheet = await getVersionForCalcSheet(version.id, user.id);
   if (!sheet) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
+  const [comments, earlierOpen] = await Promise.all([listVersionComments(sheet.versionId, user.id), openThreadsBefore(params.id, sheet.versionNumber)]);
   const pdf = await buildCalcSheet({
     workspace: sheet.workspaceName,
     sketchTitle: sheet.sketchTitle,
@@ -28,6 +30,7 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
     signoff: sheet.signOff.map((s) => ({ role: s.role, name: s.name, at: s.date })),
     review: sheet.review,
     file: sheet.document,
+    record: { steps: sheet.steps, comments, earlierOpen },
     units: query.units,
   });
   const name = `${sheet.sketchTitle.replace(/[^\w.-]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "sketch"}-v${sheet.versionNumber}-calc-sheet-${query.units}.pdf`;

@@ -1,0 +1,90 @@
+// The calc sheet's check record: the version's sign-off steps with their notes, and its comment
+// threads — what each is on, who said what and when, open or resolved by whom — so the printed
+// sheet carries its own checking history. Pure: the route reads the rows, this words them.
+import { plainText } from "@/lib/review/comment-text";
+import { pinWords, type PinLike } from "@/lib/review/pin-words";
+import type { SignOffStep } from "@/lib/review/rules";
+
+export interface RecordStep {
+  step: SignOffStep;
+  actorName: string;
+  at: Date;
+  note: string;
+}
+
+export interface RecordComment {
+  id: string;
+  parentId: string | null;
+  authorName: string | null;
+  body: string;
+  pin: PinLike | null;
+  resolvedAt: Date | null;
+  resolvedByName: string | null;
+  editedAt: Date | null;
+  deletedAt: Date | null;
+  createdAt: Date;
+}
+
+export interface CheckRecordInput {
+  steps: RecordStep[];
+  /** the version's comments, oldest first (first comments and replies) */
+  comments: RecordComment[];
+  /** open threads left on earlier versions that are not approved */
+  earlierOpen?: Array<{ number: number; open: number }>;
+}
+
+export interface RecordThread {
+  /** "1. On front bearer — open" */
+  heading: string;
+  open: boolean;
+  /** "Chen Checker, 2026-11-27 02:15 UTC: the text" */
+  lines: string[];
+}
+
+export interface CheckRecord {
+  /** one sentence on where the threads stand */
+  summary: string;
+  steps: string[];
+  threads: RecordThread[];
+  /** a line on open threads of earlier versions, when there are any */
+  earlier: string | null;
+}
+
+// what the person did, as the record reads after their name (the note follows in quotes)
+const DONE: Record<SignOffStep, string> = {
+  submit: "submitted it for checking",
+  check: "checked it",
+  return: "returned it",
+  approve: "approved it",
+  withdraw: "withdrew the approval",
+};
+
+const stamp = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+/** Sign-off steps in order, and threads numbered as on the review screen (oldest first). */
+export function checkRecord(input: CheckRecordInput, labels: Record<string, string>): CheckRecord {
+  const steps = input.steps.map((s) => `${stamp(s.at)} · ${s.actorName} ${DONE[s.step]}${s.note.trim() ? `: “${s.note.trim()}”` : ""}`);
+  const firsts = input.comments.filter((c) => c.parentId === null);
+  const threads: RecordThread[] = [];
+  for (const first of firsts) {
+    const all = [first, ...input.comments.filter((c) => c.parentId === first.id)];
+    // a deleted first comment with no replies left is gone for good, as on the screen
+    if (all.length === 1 && first.deletedAt) continue;
+    const open = first.resolvedAt === null;
+    const state = open ? "open" : `resolved by ${first.resolvedByName ?? "a deleted account"}, ${stamp(first.resolvedAt!)}`;
+    const on = pinWords(first.pin, labels);
+    threads.push({
+      heading: `${threads.length + 1}. ${on[0].toUpperCase()}${on.slice(1)} — ${state}`,
+      open,
+      lines: all.map((c) => `${c.authorName ?? "A deleted account"}, ${stamp(c.createdAt)}: ${c.deletedAt ? "(comment deleted)" : plainText(c.body)}${c.editedAt && !c.deletedAt ? " (edited)" : ""}`),
+    });
+  }
+  const openCount = threads.filter((t) => t.open).length;
+  const summary = threads.length
+    ? `${plural(threads.length, "comment thread", "comment threads")} on this version: ${openCount ? `${openCount} open` : "none open"}, ${threads.length - openCount} resolved.`
+    : "No comments on this version.";
+  const earlierOpen = (input.earlierOpen ?? []).filter((e) => e.open > 0);
+  const earlier = earlierOpen.length ? `Still open on earlier versions: ${earlierOpen.map((e) => `v${e.number} (${plural(e.open, "thread", "threads")})`).join(", ")}.` : null;
+  return { summary, steps, threads, earlier };
+}
