@@ -16,6 +16,7 @@ import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
 import { ChangesTable, ReactionsTable } from "./CompareTables";
+import { Enlargeable } from "./Enlargeable";
 import { ReviewDrawing, useSolved } from "./ReviewDrawing";
 
 type VersionDoc = { version: { number: number; message: string; document: SketchFile } };
@@ -205,10 +206,12 @@ function Overlay({ before, after, beforeLabel, afterLabel, marks, units }: Drawi
         <span className="font-semibold">After: {afterLabel}</span> <span className="text-ink-soft">in full, over</span>{" "}
         <span className="font-semibold text-ink-soft">before: {beforeLabel}</span> <span className="text-ink-soft">drawn faint and grey, at the same scale (its labels left off but for what was removed; the tables give every value).</span>
       </figcaption>
-      <div className="relative overflow-hidden rounded-md border border-rule bg-paper">
-        <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} frame={frame} layer onlyLabelsOf={removedIds} className="opacity-40 grayscale" />
-        <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} frame={frame} layer className="compare-over absolute inset-0" />
-      </div>
+      <Enlargeable naturalWidth={1280} label="The two drawings laid over each other">
+        <div className="relative overflow-hidden rounded-md border border-rule bg-paper">
+          <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} frame={frame} layer onlyLabelsOf={removedIds} className="opacity-40 grayscale" />
+          <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} frame={frame} layer className="compare-over absolute inset-0" />
+        </div>
+      </Enlargeable>
     </figure>
   );
 }

@@ -4,6 +4,7 @@
 // pinning a new comment) a click picks an element or a point.
 import { useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { View } from "@/canvas/geometry/view";
+import { Enlargeable } from "./Enlargeable";
 import { renderSketchSvg } from "@/canvas/render/svg";
 import { solveDocument } from "@/lib/review/compare";
 import type { SketchFile } from "@/solver/schema";
@@ -103,7 +104,7 @@ export function ReviewDrawing({
     if (pins) drawPins(el, pins, drawingScale(el, sketch), sketch ? elementAnchors(sketch) : undefined);
   }, [svg, marks, pins, sketch]);
 
-  return (
+  const drawing = (
     <div
       ref={box}
       role="img"
@@ -132,5 +133,12 @@ export function ReviewDrawing({
       }}
       dangerouslySetInnerHTML={{ __html: svg }}
     />
+  );
+  // a layer is enlarged with the drawing it lies over (the caller wraps the pair)
+  if (layer) return drawing;
+  return (
+    <Enlargeable naturalWidth={drawnWidth} label={label}>
+      {drawing}
+    </Enlargeable>
   );
 }

@@ -1,6 +1,7 @@
 "use client";
 // A modal dialog on the native <dialog> element: focus stays inside, Escape closes, the page
-// behind is inert. Used by the save, conflict, fork and sign-off dialogs.
+// behind is inert. Used by the save, conflict, fork and sign-off dialogs, and to show a drawing
+// at its own size.
 import { useEffect, useId, useRef, type ReactNode } from "react";
 
 export function Dialog({
@@ -9,6 +10,7 @@ export function Dialog({
   onClose,
   children,
   wide = false,
+  full = false,
   testId,
 }: {
   open: boolean;
@@ -16,6 +18,8 @@ export function Dialog({
   onClose: () => void;
   children: ReactNode;
   wide?: boolean;
+  /** as large as the window allows (a drawing shown at its own size) */
+  full?: boolean;
   testId?: string;
 }) {
   const ref = useRef<HTMLDialogElement>(null);
@@ -54,14 +58,14 @@ export function Dialog({
         e.preventDefault();
         onClose();
       }}
-      className={`m-auto w-[calc(100%-2rem)] ${wide ? "max-w-2xl" : "max-w-md"} rounded-lg border border-rule bg-paper-card p-0 text-ink shadow-[0_12px_40px_rgba(29,35,41,0.22)] backdrop:bg-ink/30`}
+      className={`m-auto ${full ? "h-[calc(100dvh-1rem)] max-h-none w-[calc(100%-1rem)] max-w-none" : `w-[calc(100%-2rem)] ${wide ? "max-w-2xl" : "max-w-md"}`} rounded-lg border border-rule bg-paper-card p-0 text-ink shadow-[0_12px_40px_rgba(29,35,41,0.22)] backdrop:bg-ink/30`}
     >
       {open ? (
-        <div className="p-5">
-          <h2 id={titleId} className="text-base font-semibold">
+        <div className={full ? "flex h-full flex-col p-4" : "p-5"}>
+          <h2 id={titleId} className={`text-base font-semibold ${full ? "line-clamp-2" : ""}`}>
             {title}
           </h2>
-          <div className="mt-3">{children}</div>
+          <div className={full ? "mt-3 flex min-h-0 flex-1 flex-col" : "mt-3"}>{children}</div>
         </div>
       ) : null}
     </dialog>
