@@ -1,5 +1,6 @@
 // The dashboard's "Waiting for you": the versions whose next sign-off step is the reader's — to
-// check, to approve, or (their own, returned) to revise — each linked to its review page.
+// check, to approve, or (their own, returned or with its approval withdrawn) to revise — each
+// linked to its review page.
 import Link from "next/link";
 import { Panel } from "@/components/shell/controls";
 import { formatDateTime } from "@/components/workspaces/format";
@@ -25,7 +26,7 @@ export function ReviewQueue({ workspaceId, items }: { workspaceId: string; items
                 {i.sketchTitle} v{i.number}
               </Link>
               <span className="text-xs text-ink-soft">
-                prepared by {i.authorName ?? "a deleted account"} · {a.since} {formatDateTime(i.since)}
+                prepared by {i.authorName ?? "a deleted account"} · {i.state === "withdrawn" ? "approval withdrawn" : a.since} {formatDateTime(i.since)}
               </span>
             </li>
           );

@@ -30,8 +30,14 @@ export type SketchRow = {
   latestReviewState?: ReviewState;
 };
 
-/** The sign-off steps a lead looks for in the list: what is waiting for someone. */
-const IN_REVIEW: Partial<Record<ReviewState, string>> = { submitted: "border-caution/50 text-caution", returned: "border-accent/50 text-accent-deep", checked: "border-reaction/40 text-reaction" };
+/** The sign-off states a lead looks for in the list: what is waiting for someone (a withdrawn
+ *  approval needs attention as a returned version does). */
+const IN_REVIEW: Partial<Record<ReviewState, string>> = {
+  submitted: "border-caution/50 text-caution",
+  returned: "border-accent/50 text-accent-deep",
+  checked: "border-reaction/40 text-reaction",
+  withdrawn: "border-accent/50 text-accent-deep",
+};
 
 type Page = { items: SketchRow[]; total: number; page: number; pageSize: number; tags: string[] };
 type Filters = { q: string; tag: string; status: string; sort: SketchSort; dir: "asc" | "desc"; page: number };
@@ -72,7 +78,9 @@ export function filtersFromSearch(search: string): Filters {
   const sort = SORTS.includes(p.get("sort") as SketchSort) ? (p.get("sort") as SketchSort) : DEFAULT_FILTERS.sort;
   const dir = p.get("dir") === "asc" || p.get("dir") === "desc" ? (p.get("dir") as "asc" | "desc") : sort === "title" ? "asc" : "desc";
   const page = Math.max(1, Math.floor(Number(p.get("page")) || 1));
-  return { q: p.get("q") ?? "", tag: p.get("tag") ?? "", status: p.get("status") ?? "", sort, dir, page };
+  // a status the list does not know (an old or mistyped address) is dropped, not sent on to fail
+  const status = (STATUS_FILTERS as readonly string[]).includes(p.get("status") ?? "") ? p.get("status")! : "";
+  return { q: p.get("q") ?? "", tag: p.get("tag") ?? "", status, sort, dir, page };
 }
 
 export function searchOfFilters(f: Filters): string {

@@ -28,6 +28,7 @@ export async function getVersionAccess(sketchId: string, number: number, userId:
       createdAt: sketchVersion.createdAt,
       sketchId: sketch.id,
       sketchTitle: sketch.title,
+      latestVersion: sketch.latestVersion,
       workspaceId: sketch.workspaceId,
       role: membership.role,
     })
@@ -222,7 +223,7 @@ export async function listVersionsInReview(workspaceId: string, tx: DbOrTx = db)
     .from(sketchVersion)
     .innerJoin(sketch, eq(sketch.id, sketchVersion.sketchId))
     .leftJoin(author, eq(author.id, sketchVersion.authorId))
-    .where(and(eq(sketch.workspaceId, workspaceId), sql`${sketchVersion.reviewState} in ('submitted', 'checked', 'returned')`))
+    .where(and(eq(sketch.workspaceId, workspaceId), sql`${sketchVersion.reviewState} in ('submitted', 'checked', 'returned', 'withdrawn')`))
     .orderBy(desc(since))
     .limit(500);
   return rows.map((r) => ({ ...r, since: new Date(r.since) }));

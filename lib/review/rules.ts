@@ -35,8 +35,10 @@ export type SignOffRule = {
   notChecker: boolean;
   /** a note is required (the reason of a return or a withdrawal) */
   noteRequired: boolean;
+  /** only the sketch's latest version may take it (a superseded version is not put forward) */
+  latestOnly?: boolean;
   /** reasons of refusal, for people */
-  refused: { role: string; author?: string; checker?: string; state: (state: ReviewState) => string };
+  refused: { role: string; author?: string; checker?: string; state: (state: ReviewState) => string; superseded?: (latest: number) => string };
 };
 
 export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
@@ -49,9 +51,11 @@ export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
     author: "also",
     notChecker: false,
     noteRequired: false,
+    latestOnly: true,
     refused: {
       role: "Submitting is for the version's author, editors and owners.",
       state: (s) => `This version is already ${STATE_WORDS[s].label}: it is submitted once per round.`,
+      superseded: (latest) => `v${latest} is newer than this version: submit the latest version for checking (a superseded version is not put forward).`,
     },
   },
   check: {
@@ -116,20 +120,29 @@ export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
   },
 };
 
-export type SignOffInput = { step: SignOffStep; role: Role; isAuthor: boolean; isChecker: boolean; state: ReviewState };
+export type SignOffInput = {
+  step: SignOffStep;
+  role: Role;
+  isAuthor: boolean;
+  isChecker: boolean;
+  state: ReviewState;
+  /** the sketch's latest version number when it is newer than this version */
+  newer?: number | null;
+};
 export type SignOffDecision = { ok: true; to: ReviewState } | { ok: false; status: 403 | 409; code: "forbidden" | "review_state"; reason: string };
 
 /**
  * May this person take this step now? Who they are is asked first (403), then where the version
  * stands (409): a refusal always names the first rule that stops it.
  */
-export function decideSignOff({ step, role, isAuthor, isChecker, state }: SignOffInput): SignOffDecision {
+export function decideSignOff({ step, role, isAuthor, isChecker, state, newer }: SignOffInput): SignOffDecision {
   const rule = SIGN_OFF_RULES[step];
   const byRole = rule.roles.includes(role) || (rule.author === "also" && isAuthor);
   if (!byRole) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.role };
   if (rule.author === "never" && isAuthor) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.author! };
   if (rule.notChecker && isChecker) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.checker! };
   if (!rule.from.includes(state)) return { ok: false, status: 409, code: "review_state", reason: rule.refused.state(state) };
+  if (rule.latestOnly && newer) return { ok: false, status: 409, code: "review_state", reason: rule.refused.superseded!(newer) };
   return { ok: true, to: rule.to };
 }
 

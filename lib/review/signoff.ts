@@ -19,6 +19,9 @@ export function versionUrl(workspaceId: string, sketchId: string, number: number
   return `${appUrl()}/workspaces/${workspaceId}/sketches/${sketchId}/versions/${number}`;
 }
 
+/** The sketch's latest version number when it is newer than this version (null for the latest). */
+const newerThan = (access: { number: number; latestVersion: number }) => (access.latestVersion > access.number ? access.latestVersion : null);
+
 /** The version's sign-off as its reader sees it: state, record, title block, and the steps open to them. */
 export async function readSignOff(sketchId: string, number: number, viewerId: string) {
   const access = await getVersionAccess(sketchId, number, viewerId);
@@ -34,7 +37,9 @@ export async function readSignOff(sketchId: string, number: number, viewerId: st
     entries,
     titleBlock: titleBlockOf({ name: authorName, date: access.createdAt }, entries),
     you: { role: access.role, isAuthor, isChecker },
-    allowed: allowedSteps({ role: access.role, isAuthor, isChecker, state: access.reviewState }),
+    allowed: allowedSteps({ role: access.role, isAuthor, isChecker, state: access.reviewState, newer: newerThan(access) }),
+    /** the sketch's latest version, when it is newer than this one */
+    newer: newerThan(access),
   };
 }
 export type SignOffRead = Awaited<ReturnType<typeof readSignOff>>;
@@ -66,7 +71,7 @@ export async function takeSignOffStep(sketchId: string, number: number, actor: A
     const access = await getVersionAccess(sketchId, number, actor.id, tx, true);
     const role = access ? await lockRole(tx, access.workspaceId, actor.id) : null;
     if (!access || !role) throw new AppError("not_found", NO_VERSION);
-    const decision = decideSignOff({ step: input.step, role, isAuthor: access.authorId === actor.id, isChecker: access.checkedBy === actor.id, state: access.reviewState });
+    const decision = decideSignOff({ step: input.step, role, isAuthor: access.authorId === actor.id, isChecker: access.checkedBy === actor.id, state: access.reviewState, newer: newerThan(access) });
     if (!decision.ok) throw new AppError(decision.code, decision.reason, { extra: { state: access.reviewState } });
     const rule = SIGN_OFF_RULES[input.step];
     if (rule.noteRequired && !note) {

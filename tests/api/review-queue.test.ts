@@ -64,5 +64,9 @@ describe("the sign-off steps waiting for each person", () => {
     // approved, B leaves the owner's list
     await step(b, 1, owner, "approve");
     expect(await queueOf(owner)).toEqual(["check Bend A v1"]);
+    // its approval withdrawn, B is its author's to revise again (and nobody else's)
+    await step(b, 1, owner, "withdraw", "The bend's angle changed on site.");
+    expect(await queueOf(editor)).toEqual(["revise Bend B v1"]);
+    expect(await queueOf(owner)).toEqual(["check Bend A v1"]);
   });
 });

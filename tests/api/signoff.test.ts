@@ -150,6 +150,24 @@ describe("a whole round through the API", () => {
     await expect(db.update(signOff).set({ note: "rewritten" }).where(eq(signOff.versionId, versionId))).rejects.toThrow();
   });
 
+  it("a superseded version is not put forward: once v2 is saved, v1 cannot be submitted (409, naming v2), and its page offers no submit", async () => {
+    const { sketchId, versionId } = await versionIn("draft", prep.id, null);
+    await db.insert(sketchVersion).values({ sketchId, number: 2, message: "v2", document: parsed.ok ? parsed.file : ({} as never), formatVersion: 1, status: summary.status, largestReaction: summary.largestReaction, summary, authorId: prep.id });
+    await db.update(sketch).set({ latestVersion: 2 }).where(eq(sketch.id, sketchId));
+    const refused = await take(sketchId, prep, "submit");
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.message).toBe("v2 is newer than this version: submit the latest version for checking (a superseded version is not put forward).");
+    expect(await stateOf(versionId)).toMatchObject({ state: "draft" });
+    const read = await call(signoffRoute.GET, { params: { id: sketchId, number: "1" }, cookie: prep.cookie });
+    expect(read.body.allowed).toEqual([]);
+    expect(read.body.newer).toBe(2);
+    // the latest version goes forward as usual
+    const latest = await call(signoffRoute.GET, { params: { id: sketchId, number: "2" }, cookie: prep.cookie });
+    expect(latest.body.allowed).toEqual(["submit"]);
+    expect(latest.body.newer).toBeNull();
+    expect((await call(signoffRoute.POST, { method: "POST", params: { id: sketchId, number: "2" }, cookie: prep.cookie, body: { step: "submit" } })).status).toBe(200);
+  });
+
   it("an outsider is told the version does not exist; a version number that does not exist is 404", async () => {
     const outsider = await makeAccount("signoff-outsider");
     const { sketchId } = await versionIn("draft", prep.id, null);

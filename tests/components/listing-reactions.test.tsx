@@ -63,7 +63,7 @@ describe("largest reaction in the listings", () => {
     expect(largestCell(screen.getByTestId("sketch-row-Skid C"))).toBe("—");
   });
 
-  it("the workspace's sketches say which latest versions wait in the sign-off (submitted, returned, checked), not the drafts", async () => {
+  it("the workspace's sketches say which latest versions wait in the sign-off (submitted, returned, checked, approval withdrawn), not the drafts", async () => {
     const row = (title: string, latestReviewState: SketchRow["latestReviewState"]): SketchRow => ({
       id: title,
       title,
@@ -78,12 +78,13 @@ describe("largest reaction in the listings", () => {
       forked: false,
       latestReviewState,
     });
-    answer({ items: [row("Trailer", "submitted"), row("Stand", "returned"), row("Bend", "checked"), row("Skid", "draft"), row("Cart", "approved")], total: 5, page: 1, pageSize: 20, tags: [] });
+    answer({ items: [row("Trailer", "submitted"), row("Stand", "returned"), row("Bend", "checked"), row("Skid", "draft"), row("Cart", "approved"), row("Monitor", "withdrawn")], total: 6, page: 1, pageSize: 20, tags: [] });
     withQuery(<SketchesTable workspaceId="w1" canCreate />);
     const chip = async (title: string) => within(await screen.findByTestId(`sketch-row-${title}`)).queryByTestId("review-state")?.textContent ?? null;
     expect(await chip("Trailer")).toBe("v3 submitted");
     expect(await chip("Stand")).toBe("v3 returned");
     expect(await chip("Bend")).toBe("v3 checked");
+    expect(await chip("Monitor")).toBe("v3 approval withdrawn");
     // a draft waits for nobody; an approval has its own mark
     expect(await chip("Skid")).toBeNull();
     expect(await chip("Cart")).toBeNull();
@@ -94,7 +95,7 @@ describe("largest reaction in the listings", () => {
     expect(searchOfFilters(view)).toBe("?q=bend&tag=pipework&status=slips&sort=status&dir=asc&page=2");
     expect(filtersFromSearch(searchOfFilters(view))).toEqual(view);
     expect(searchOfFilters(filtersFromSearch(""))).toBe("");
-    expect(filtersFromSearch("?sort=colour&dir=up&page=-3")).toEqual({ q: "", tag: "", status: "", sort: "updated", dir: "desc", page: 1 });
+    expect(filtersFromSearch("?sort=colour&dir=up&page=-3&status=bogus")).toEqual({ q: "", tag: "", status: "", sort: "updated", dir: "desc", page: 1 });
     expect(filtersFromSearch("?sort=title")).toMatchObject({ sort: "title", dir: "asc" });
     // the list asks for what the address says, and writes a new view back into it
     const fetch = vi.fn(async (_url: string) => new Response(JSON.stringify({ items: [], total: 0, page: 1, pageSize: 20, tags: [] }), { status: 200, headers: { "content-type": "application/json" } }));
