@@ -7,7 +7,7 @@ import { Button, Notice } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
 import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, ApiError } from "@/lib/api-client";
-import { SIGN_OFF_RULES, STATE_WORDS, type ReviewState, type SignOffStep } from "@/lib/review/rules";
+import { SIGN_OFF_RULES, STATE_WORDS, STEP_RECORD, type ReviewState, type SignOffStep } from "@/lib/review/rules";
 
 export type TitleBlockEntry = { name: string; date: string };
 export type SignOffData = {
@@ -16,14 +16,8 @@ export type SignOffData = {
   entries: Array<{ id: number; step: SignOffStep; actorName: string; note: string; at: string }>;
   titleBlock: { prepared: TitleBlockEntry; checked: TitleBlockEntry | null; approved: TitleBlockEntry | null };
   allowed: SignOffStep[];
-};
-
-const RECORD: Record<SignOffStep, string> = {
-  submit: "submitted it for checking",
-  check: "checked it",
-  return: "returned it",
-  approve: "approved it",
-  withdraw: "withdrew the approval",
+  /** the sketch's latest version, when it is newer than this one */
+  newer?: number | null;
 };
 
 const MARK: Record<ReviewState, { mark: string; box: string }> = {
@@ -130,6 +124,11 @@ export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: S
         <p className="text-sm text-ink-soft">{data.sentence}</p>
       </div>
       <TitleBlock block={data.titleBlock} state={data.state} />
+      {data.newer && (data.state === "draft" || data.state === "returned" || data.state === "withdrawn") ? (
+        <p className="text-sm text-ink-soft" data-testid="signoff-superseded">
+          v{data.newer} is newer: only the latest version is submitted for checking.
+        </p>
+      ) : null}
       {data.allowed.length ? (
         <div className="flex flex-wrap gap-2">
           {data.allowed.map((s) => (
@@ -143,7 +142,7 @@ export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: S
         <ol className="space-y-1.5 border-l-2 border-rule-soft pl-3 text-[13px]" aria-label="Sign-off record">
           {data.entries.map((e) => (
             <li key={e.id}>
-              <span className="font-medium text-ink">{e.actorName}</span> <span className="text-ink-soft">{RECORD[e.step]}</span>{" "}
+              <span className="font-medium text-ink">{e.actorName}</span> <span className="text-ink-soft">{STEP_RECORD[e.step]}</span>{" "}
               <span className="num text-xs text-ink-faint">· {formatDateTime(e.at)}</span>
               {e.note ? <q className="block text-ink-soft">{e.note}</q> : null}
             </li>

@@ -127,6 +127,7 @@ export async function getVersionForCalcSheet(versionId: string, userId: string) 
       authorName: author.name,
       sketchId: sketch.id,
       sketchTitle: sketch.title,
+      latestVersion: sketch.latestVersion,
       workspaceId: workspace.id,
       workspaceName: workspace.name,
     })
@@ -148,6 +149,7 @@ export async function getVersionForCalcSheet(versionId: string, userId: string) 
     sketchId: row.sketchId,
     sketchTitle: row.sketchTitle,
     versionNumber: row.number,
+    latestVersion: row.latestVersion,
     message: row.message,
     savedAt: row.savedAt,
     authorName: row.authorName,

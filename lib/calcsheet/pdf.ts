@@ -46,6 +46,8 @@ export interface CalcSheetInput {
   workspace: string;
   sketchTitle: string;
   version: number;
+  /** the sketch's latest version: a sheet of an earlier one says it is superseded */
+  latestVersion?: number;
   versionMessage?: string;
   savedAt: Date;
   generatedAt?: Date;
@@ -324,6 +326,11 @@ function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number
   if (input.review) {
     doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text("Review: ", left, doc.y, { continued: true });
     doc.font("Inter").fillColor(SOFT).text(input.review, { width, features: PROSE_FEATURES });
+    doc.y += 4;
+  }
+  // a sheet of an earlier version is not mistaken for the current design
+  if (input.latestVersion && input.latestVersion > input.version) {
+    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(ACCENT).text(`Superseded: v${input.latestVersion} is the latest version of this sketch.`, left, doc.y, { width, features: PROSE_FEATURES });
     doc.y += 4;
   }
 }

@@ -3,7 +3,7 @@
 // sheet carries its own checking history. Pure: the route reads the rows, this words them.
 import { plainText } from "@/lib/review/comment-text";
 import { pinWords, type PinLike } from "@/lib/review/pin-words";
-import type { SignOffStep } from "@/lib/review/rules";
+import { STEP_RECORD, type SignOffStep } from "@/lib/review/rules";
 
 export interface RecordStep {
   step: SignOffStep;
@@ -50,21 +50,12 @@ export interface CheckRecord {
   earlier: string | null;
 }
 
-// what the person did, as the record reads after their name (the note follows in quotes)
-const DONE: Record<SignOffStep, string> = {
-  submit: "submitted it for checking",
-  check: "checked it",
-  return: "returned it",
-  approve: "approved it",
-  withdraw: "withdrew the approval",
-};
-
 const stamp = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 /** Sign-off steps in order, and threads numbered as on the review screen (oldest first). */
 export function checkRecord(input: CheckRecordInput, labels: Record<string, string>): CheckRecord {
-  const steps = input.steps.map((s) => `${stamp(s.at)} · ${s.actorName} ${DONE[s.step]}${s.note.trim() ? `: “${s.note.trim()}”` : ""}`);
+  const steps = input.steps.map((s) => `${stamp(s.at)} · ${s.actorName} ${STEP_RECORD[s.step]}${s.note.trim() ? `: “${s.note.trim()}”` : ""}`);
   const firsts = input.comments.filter((c) => c.parentId === null);
   const threads: RecordThread[] = [];
   for (const first of firsts) {

@@ -19,6 +19,15 @@ export const STATE_WORDS: Record<ReviewState, { label: string; sentence: string 
   withdrawn: { label: "approval withdrawn", sentence: "Its approval was withdrawn; it may be submitted again." },
 };
 
+/** What the person did, as the sign-off record reads after their name (the note follows). */
+export const STEP_RECORD: Record<SignOffStep, string> = {
+  submit: "submitted it for checking",
+  check: "checked it",
+  return: "returned it",
+  approve: "approved it",
+  withdraw: "withdrew the approval",
+};
+
 export type SignOffRule = {
   /** the button */
   label: string;

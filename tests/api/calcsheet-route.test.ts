@@ -64,6 +64,8 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
     expect(text).toContain("Is the anchor bolted to the plinth?");
     expect(text).toContain("Yes, four M20.");
     expect(text).toContain("2. On the whole version — open");
+    // the latest version is not called superseded
+    expect(text).not.toContain("Superseded");
   }, 60000);
 
   it("refuses units other than SI and US, naming the field", async () => {

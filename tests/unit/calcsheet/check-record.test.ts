@@ -68,11 +68,12 @@ describe("the check record", () => {
     expect(checkRecord({ steps: [], comments: [] }, {})).toEqual({ summary: "No comments on this version.", steps: [], threads: [], earlier: null });
   });
 
-  it("is printed on the calc sheet", async () => {
+  it("is printed on the calc sheet, which says when a newer version supersedes it", async () => {
     const buf = await buildCalcSheet({
       workspace: "W",
       sketchTitle: "Monitor trailer",
       version: 2,
+      latestVersion: 4,
       savedAt: at("2026-11-30T09:00"),
       signoff: [],
       file: loadFixture("fire-monitor-trailer.json"),
@@ -85,6 +86,8 @@ describe("the check record", () => {
     for (let i = 1; i <= doc.numPages; i++) text += (await (await doc.getPage(i)).getTextContent()).items.map((it) => ("str" in it ? it.str : "")).join(" ") + " ";
     text = text.replace(/\s+/g, " ");
     expect(text).toContain("Check record");
+    // a sheet of an earlier version says so under its title block
+    expect(text).toContain("Superseded: v4 is the latest version of this sketch.");
     expect(text).toContain("3 comment threads on this version: 2 open, 1 resolved.");
     expect(text).toContain("Chen Checker returned it: “The foot slips: add a chock.”");
     // the pin names the element by its label in the saved file

@@ -25,6 +25,7 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
     workspace: sheet.workspaceName,
     sketchTitle: sheet.sketchTitle,
     version: sheet.versionNumber,
+    latestVersion: sheet.latestVersion,
     versionMessage: sheet.message ?? undefined,
     savedAt: sheet.savedAt,
     signoff: sheet.signOff.map((s) => ({ role: s.role, name: s.name, at: s.date })),
