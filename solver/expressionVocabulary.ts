@@ -17,7 +17,7 @@ export const UNIT_NAMES: ReadonlySet<string> = new Set([
   // angle
   "deg", "degree", "degrees", "rad",
   // volume and flow
-  "litre", "liter", "gal", "gpm", "lpm",
+  "litre", "liter", "gal", "gpm", "lpm", "lps",
 ]);
 
 /** Functions and constants an expression may call. */

@@ -86,6 +86,7 @@ math.createUnit("psi", { definition: `${LBF_N / (INCH_M * INCH_M)} Pa` }, { over
 math.createUnit("ksi", { definition: `${(1000 * LBF_N) / (INCH_M * INCH_M)} Pa` });
 math.createUnit("gpm", { definition: `${GALLON_US_M3 / 60} m^3/s` });
 math.createUnit("lpm", { definition: `${0.001 / 60} m^3/s` });
+math.createUnit("lps", { definition: "0.001 m^3/s" });
 
 // Inverse trigonometry returns an angle with its unit, so `atan(0.5)` in an angle field is 26.57°, not 0.4636°.
 const asAngle = (x: number) => math.unit(x, "rad");
@@ -205,9 +206,10 @@ function unitlessValue(u: Unit): number {
   throw new PlainMathError(`has units (${u.formatUnits()}) where a plain number is needed`);
 }
 
-/** Text users type that mathjs does not read: 30°, N·m, m², L/min, the minus sign. "L/min" is
- *  litres per minute only when it cannot be anything else: not `L / min(a, b)`, and not when a
- *  parameter is called L (or l). */
+/** Text users type that mathjs does not read: 30°, N·m, m², L/min, L/s, the minus sign. "L/min"
+ *  is litres per minute only when it cannot be anything else: not `L / min(a, b)`, and not when a
+ *  parameter is called L (or l); "L/s" is litres per second on the same terms (the app writes
+ *  flows in L/s, so what it shows can be typed back). */
 export function normaliseExpressionText(text: string, parameterNames: ReadonlySet<string> = new Set()): string {
   return text
     .replace(/°/g, " deg")
@@ -216,6 +218,7 @@ export function normaliseExpressionText(text: string, parameterNames: ReadonlySe
     .replace(/³/g, "^3")
     .replace(/−/g, "-")
     .replace(/\b([Ll])\s*\/\s*min\b(?!\s*\()/g, (all, letter: string) => (parameterNames.has(letter) ? all : "lpm"))
+    .replace(/\b([Ll])\s*\/\s*s\b(?!\s*[(^])/g, (all, letter: string) => (parameterNames.has(letter) ? all : "lps"))
     .trim();
 }
 

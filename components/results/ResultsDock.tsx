@@ -1,7 +1,7 @@
 "use client";
 // "Results", under the drawing: the status in words, the reactions (force on the body or load on
 // the support), the hand check, and the cautions and assumptions beside them.
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { radioKeys } from "@/components/shell/controls";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { elementNames } from "@/solver/cases";
@@ -20,6 +20,22 @@ type Tab = "reactions" | "hand" | "cases" | "sweep";
 const HEIGHT_KEY = "counterpoise:results-height";
 const MIN_HEIGHT = 150;
 
+/** The most the dock may take of a window this tall: the drawing keeps room to be drawn in. */
+export function dockLimit(windowHeight: number): number {
+  return Math.max(MIN_HEIGHT, windowHeight - 260);
+}
+
+/** The window's height, followed as it changes (a saved height is held to the window it is shown in). */
+function useWindowHeight(): number {
+  const [h, setH] = useState(() => (typeof window === "undefined" ? 900 : window.innerHeight));
+  useEffect(() => {
+    const on = () => setH(window.innerHeight);
+    window.addEventListener("resize", on);
+    return () => window.removeEventListener("resize", on);
+  }, []);
+  return h;
+}
+
 function readHeight(): number | null {
   if (typeof window === "undefined") return null;
   const v = Number(window.localStorage?.getItem(HEIGHT_KEY));
@@ -31,7 +47,7 @@ function readHeight(): number | null {
  * or the other more room; a double click goes back to the tab's own height.
  */
 function Resizer({ height, onChange }: { height: number; onChange: (h: number | null) => void }) {
-  const clamp = (h: number) => Math.round(Math.max(MIN_HEIGHT, Math.min(h, window.innerHeight - 200)));
+  const clamp = (h: number) => Math.round(Math.max(MIN_HEIGHT, Math.min(h, dockLimit(window.innerHeight))));
   return (
     <div
       role="separator"
@@ -73,7 +89,9 @@ export function ResultsDock() {
   const [chosen, setChosen] = useState<number | null>(readHeight);
   const study = tab === "cases" || tab === "sweep";
   // the studies need room: the dock grows while one of them is open, leaving the drawing half the window
-  const height = chosen ?? (study ? Math.min(560, Math.round((typeof window === "undefined" ? 900 : window.innerHeight) * 0.5)) : 292);
+  const windowHeight = useWindowHeight();
+  // a height saved in a taller window (or another device's) is held to this one, never past the drawing's room
+  const height = Math.min(chosen ?? (study ? Math.min(560, Math.round(windowHeight * 0.5)) : 292), dockLimit(windowHeight));
   const choose = (h: number | null) => {
     setChosen(h);
     try {

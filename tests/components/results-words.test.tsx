@@ -258,6 +258,26 @@ describe("the line between the drawing and the results", () => {
     expect(dock.style.height).toBe("292px");
     expect(window.localStorage.getItem("counterpoise:results-height")).toBeNull();
   });
+
+  it("holds a height saved in a taller window to this one, and follows the window as it changes", async () => {
+    const tall = window.innerHeight;
+    try {
+      window.localStorage.setItem("counterpoise:results-height", "700");
+      Object.defineProperty(window, "innerHeight", { configurable: true, value: 720 });
+      mountResultsDock(beam());
+      const dock = screen.getByTestId("results-dock");
+      // 720 − 260: the drawing keeps its room
+      expect(dock.style.height).toBe("460px");
+      Object.defineProperty(window, "innerHeight", { configurable: true, value: 1200 });
+      act(() => void window.dispatchEvent(new Event("resize")));
+      expect(dock.style.height).toBe("700px");
+      // the saved choice itself is kept for a taller window
+      expect(window.localStorage.getItem("counterpoise:results-height")).toBe("700");
+    } finally {
+      Object.defineProperty(window, "innerHeight", { configurable: true, value: tall });
+      window.localStorage.removeItem("counterpoise:results-height");
+    }
+  });
 });
 
 describe("ports drawn against their kind", () => {

@@ -2,7 +2,8 @@
 // names the parser reads as something else cannot be parameters; L/min; gravity's sign.
 import { describe, expect, it } from "vitest";
 import { parseSketch } from "@/solver";
-import { compileExpression, evaluateToNumber, normaliseExpressionText, reservedNameReason } from "@/solver/expressions";
+import { compileExpression, evaluateToNumber, evaluateTyped, normaliseExpressionText, reservedNameReason } from "@/solver/expressions";
+import type { Unit } from "mathjs";
 import { box, sketch } from "./helpers";
 
 /** A sketch whose body mass and roller angle are the given fields. */
@@ -189,6 +190,21 @@ describe("L/min is litres per minute only when it can be nothing else", () => {
     expect(() => compileExpression("600 L/min", new Set(["L"]))).toThrow(
       '"L/min" reads the parameter L divided by min here, not litres per minute: write litres per minute as lpm',
     );
+  });
+});
+
+describe("litres per second, as the app writes flows", () => {
+  // 1 L = 0.001 m³ exactly (SI Brochure, 9th ed., Table 8: the litre)
+  it("40 L/s, 40 l/s and 40 lps are 0.04 m³/s; 600 L/min is 0.01 m³/s", () => {
+    for (const text of ["40 L/s", "40 l/s", "40 lps", "40 L / s"]) expect((evaluateTyped(text) as Unit).toNumber("m^3/s")).toBeCloseTo(0.04, 12);
+    expect((evaluateTyped("600 L/min") as Unit).toNumber("m^3/s")).toBeCloseTo(0.01, 12);
+  });
+
+  it("with a parameter called L, 'L/s' stays L divided by seconds", () => {
+    expect(normaliseExpressionText("40 L/s", new Set(["L"]))).toBe("40 L/s");
+    expect(normaliseExpressionText("40 L/s", new Set(["a"]))).toBe("40 lps");
+    // a power of a second is not a flow
+    expect(normaliseExpressionText("L/s^2", new Set())).toBe("L/s^2");
   });
 });
 
