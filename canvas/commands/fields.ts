@@ -2,6 +2,7 @@
 import type { Numeric, SketchFile } from "@/solver/schema";
 import { findElement, type AnyElement, type Group } from "../model/elements";
 import { roundTo } from "../model/numeric";
+import { PORT_PLACEHOLDER } from "../model/factory";
 import { defineCommand, edit } from "./define";
 
 export type FieldPath = string | ReadonlyArray<string | number>;
@@ -60,6 +61,11 @@ export const setField = defineCommand<{ id: string; field: FieldPath; value: Fie
         return;
       }
       target[last] = value;
+      // a port described another way (ρ·Q, or ρ with A and V): the placed ṁ and V, still as placed,
+      // would come first and hide what was typed (the contract takes massFlow before ρ·Q)
+      if (l.group === "ports" && path.length === 1 && (last === "volumeFlow" || last === "density")) {
+        for (const k of ["massFlow", "velocity"] as const) if (target[k] === PORT_PLACEHOLDER[k] && !(k === "velocity" && last === "density" && target.volumeFlow === undefined)) delete target[k];
+      }
     });
   },
 });

@@ -29,6 +29,10 @@ export const DEFAULT_ANGLE: Partial<Record<ElementKind, number>> = {
 };
 
 /** A body from its corners (a rectangle's four, or a polygon's). */
+/** The flow a new port is placed with, so the drawing solves at once: it stands aside as soon as
+ *  the user describes the flow another way (a volume flow or a density; see setField). */
+export const PORT_PLACEHOLDER = { massFlow: "10 kg/s", velocity: "5 m/s" } as const;
+
 export function newBody(id: string, outline: Vec2[], label?: string): BodyEl {
   return { id, label: label ?? `Body ${id.replace(/^b/, "")}`, outline: outline.map(pt), mass: "100 kg" };
 }
@@ -103,7 +107,7 @@ export function newAttached(kind: Exclude<ElementKind, "body">, id: string, o: P
     }
     case "inlet":
     case "outlet":
-      return { ...base, kind, at, angle, massFlow: "10 kg/s", velocity: "5 m/s" };
+      return { ...base, kind, at, angle, ...PORT_PLACEHOLDER };
     case "massSource":
       return { ...base, at, massFlow: "1 kg/s" };
   }

@@ -2,7 +2,8 @@
 // input is never changed, and that untouched elements keep their identity (narrow redraws).
 import { describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
-import { parseSketch } from "@/solver/index";
+import { parseSketch, type SolveWarning } from "@/solver/index";
+import { portFlow } from "@/solver/ports";
 import {
   addElement,
   attachToBody,
@@ -191,6 +192,35 @@ describe("setField", () => {
     expect(el(setField.run(withMu, { id: "s2", field: "mu", value: undefined }), "s2").mu).toBeUndefined();
     expect(el(setField.run(s, { id: "s2", field: "angle", value: undefined }), "s2").angle).toBe(90);
     expect(setField.run(s, { id: "s2", field: "id", value: "x" })).toBe(s);
+  });
+  it("a new port's placed ṁ and V stand aside when its flow is described by a volume flow or a density", () => {
+    const placed = newAttached("inlet", "p9", { body: "b1", at: [0, 0.3], angle: 0 });
+    expect(placed).toMatchObject({ massFlow: "10 kg/s", velocity: "5 m/s" });
+    let s: SketchFile = { ...base(), ports: [placed as SketchFile["ports"][number]] };
+    s = setField.run(s, { id: "p9", field: "volumeFlow", value: "40 litre/s" });
+    expect(el(s, "p9").massFlow).toBeUndefined();
+    expect(el(s, "p9").velocity).toBeUndefined();
+    s = setField.run(s, { id: "p9", field: "density", value: "998 kg/m^3" });
+    s = setField.run(s, { id: "p9", field: "area", value: "pi/4 * (100 mm)^2" });
+    const parsed = parseSketch(s);
+    expect(parsed.ok).toBe(true);
+    if (!parsed.ok) return;
+    const warnings: SolveWarning[] = [];
+    const flow = portFlow(parsed.sketch.ports.find((p) => p.id === "p9")!, warnings);
+    // ṁ = ρ·Q = 998 × 0.040 = 39.92 kg/s; V = Q/A = 0.040 / (π/4 · 0.1²) = 5.093 m/s (continuity, any fluids text)
+    expect(flow.massFlow).toBeCloseTo(39.92, 9);
+    expect(flow.velocity).toBeCloseTo(0.04 / ((Math.PI / 4) * 0.01), 9);
+    expect([...parsed.warnings, ...warnings].filter((w) => w.code === "PORT_INCONSISTENT")).toEqual([]);
+  });
+  it("a mass flow or velocity the user typed stays when a volume flow is added; a density alone keeps the velocity", () => {
+    let s: SketchFile = { ...base(), ports: [{ ...(newAttached("outlet", "p9", { body: "b1", at: [2, 0.5], angle: 0 }) as SketchFile["ports"][number]), massFlow: "12 kg/s" }] };
+    s = setField.run(s, { id: "p9", field: "volumeFlow", value: "0.01 m^3/s" });
+    expect(el(s, "p9").massFlow).toBe("12 kg/s");
+    expect(el(s, "p9").velocity).toBeUndefined();
+    let d: SketchFile = { ...base(), ports: [newAttached("outlet", "p8", { body: "b1", at: [2, 0.5], angle: 0 }) as SketchFile["ports"][number]] };
+    d = setField.run(d, { id: "p8", field: "density", value: "1.2 kg/m^3" });
+    expect(el(d, "p8").massFlow).toBeUndefined();
+    expect(el(d, "p8").velocity).toBe("5 m/s");
   });
   it("switches a force between magnitude + angle and components", () => {
     const a = setForceForm.run(base(), { id: "l1", form: "components", magnitude: 1000, angle: -90 });
