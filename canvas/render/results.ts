@@ -48,6 +48,24 @@ export function supportStates(result: SolveResult): Map<string, DrawState> {
   return states;
 }
 
+/** How far a ray from `from` along `u` runs before it leaves the outline (Infinity when it never
+ *  meets it: a port off its body). Points a hair along the ray are skipped: the ray starts on the face. */
+function depthInside(from: Pt, u: Pt, outline: Pt[]): number {
+  let best = Infinity;
+  for (let i = 0; i < outline.length; i++) {
+    const a = outline[i];
+    const b = outline[(i + 1) % outline.length];
+    const e: Pt = [b[0] - a[0], b[1] - a[1]];
+    const den = u[0] * e[1] - u[1] * e[0];
+    if (Math.abs(den) < 1e-12) continue;
+    const w: Pt = [a[0] - from[0], a[1] - from[1]];
+    const t = (w[0] * e[1] - w[1] * e[0]) / den;
+    const k = (w[0] * u[1] - w[1] * u[0]) / den;
+    if (t > 1 && k >= 0 && k <= 1) best = Math.min(best, t);
+  }
+  return best;
+}
+
 /** The least distance between segments ab and cd (0 where they cross). */
 function segmentGap(a: Pt, b: Pt, c: Pt, d: Pt): number {
   const cross = (o: Pt, p: Pt, q: Pt) => (p[0] - o[0]) * (q[1] - o[1]) - (p[1] - o[1]) * (q[0] - o[0]);
@@ -146,12 +164,22 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
       if (t.kind === "pressure") {
         const port = scene.byId.get(t.id) as Extract<SceneItem, { kind: "inlet" | "outlet" }> | undefined;
         if (!port || !portReadable(port)) continue;
-        // p·A pushes inward across the port face: drawn just inside the control surface
+        // p·A pushes inward across the port face: drawn inside the control surface on the port's own
+        // axis (its line of action), starting at the face — never a fixed distance to one side,
+        // which at a small scale would land it on another element and mislead the moment arm
+        // (a suction's negative gauge pressure pulls outward: drawn inside too, its head at the face)
         const P = px(port.at, s);
         const u = unit([t.fx, -t.fy]);
-        const n = perp(dir(port.angle));
-        const start = add(P, add(mul(n, -16), mul(u, 4)));
-        const end = add(start, mul(u, 34));
+        const d = dir(port.angle);
+        const inward = port.kind === "inlet" ? d : mul(d, -1);
+        const push = u[0] * inward[0] + u[1] * inward[1] >= 0;
+        // clear of an inlet's own arrowhead, which reaches inside the face; no longer than the body
+        // is deep there (a thin stack), so it never pokes out of the far side
+        const near = port.kind === "inlet" ? 17 : 6;
+        const room = depthInside(P, inward, (bodyOf(port.body)?.outline ?? []).map((q) => px(q, s)));
+        const long = Math.max(12, Math.min(34, room - near - 4));
+        const start = add(P, mul(inward, push ? near : near + long));
+        const end = add(P, mul(inward, push ? near + long : near));
         prims.push(...solidArrow(start, end, INK_SOFT, 1.4, 8));
         prims.push(...labelAt(add(end, mul(u, 4)), u, [`pA ${fq(Math.hypot(t.fx, t.fy), "force", o.units)}`], INK_SOFT, 10.5));
       }

@@ -10,7 +10,7 @@ import { textBox } from "@/canvas/render/labels";
 import { scenePrims } from "@/canvas/render/scenePrims";
 import { buildScene, fieldValuesById } from "@/canvas/scene";
 import { parseSketch } from "@/solver/index";
-import { CAUTION } from "@/canvas/render/palette";
+import { CAUTION, INK_SOFT } from "@/canvas/render/palette";
 
 const overlap = (a: ReturnType<typeof textBox>, b: ReturnType<typeof textBox>) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
 
@@ -263,6 +263,39 @@ describe("gravity turned off −y", () => {
     expect(u[0] / len).toBeCloseTo(d[0], 9);
     expect(u[1] / len).toBeCloseTo(d[1], 9);
     expect(results.some((p) => p.t === "text" && /^W \d/.test(p.text))).toBe(true);
+  });
+});
+
+describe("a port's pressure force p·A", () => {
+  // drawn on the port's own axis (its line of action), inside the control surface, whatever the
+  // scale; a suction (negative gauge pressure) pulls outward, its arrowhead toward the face
+  const arrowsAt = (id: string, scale: number) => {
+    const { sketch, result } = solved(id);
+    const parsed = parseSketch(sketch);
+    if (!parsed.ok) throw new Error("parse");
+    const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+    const { results } = scenePrims(scene, scale, "SI", result);
+    // the p·A shafts: thin soft-ink lines of two points
+    return results.filter((p): p is Extract<typeof p, { t: "poly" }> => p.t === "poly" && p.pts.length === 2 && p.stroke === INK_SOFT && p.width === 1.4 && !p.dash);
+  };
+
+  it("on the pump skid: the suction's along y = 0.3 m inside the left face, the discharge's down the neck from its face", () => {
+    for (const scale of [30, 100, 300]) {
+      const shafts = arrowsAt("pump-skid", scale);
+      const suction = shafts.find((p) => p.pts.every((q) => Math.abs(q[1] + 0.3 * scale) < 1e-9));
+      expect(suction, `scale ${scale}`).toBeDefined();
+      expect(suction!.pts.every((q) => q[0] > 0 && q[0] < 60)).toBe(true);
+      const discharge = shafts.find((p) => p.pts.every((q) => Math.abs(q[0] - 1.95 * scale) < 1e-9));
+      expect(discharge, `scale ${scale}`).toBeDefined();
+      expect(discharge!.pts.every((q) => q[1] > -1.6 * scale && q[1] < -1.6 * scale + 60)).toBe(true);
+    }
+  });
+
+  it("on the exhaust stack's flue (0.6 m across) the duct's stays inside the flue, not out past its far face", () => {
+    const shafts = arrowsAt("exhaust-stack", 60);
+    const duct = shafts.find((p) => p.pts.every((q) => Math.abs(q[1] + 1.6 * 60) < 1e-9));
+    expect(duct).toBeDefined();
+    for (const q of duct!.pts) expect(q[0] > 1.2 * 60 && q[0] < 1.8 * 60).toBe(true);
   });
 });
 
