@@ -18,7 +18,8 @@ const COMPONENTS: Array<{ key: keyof Pick<ReactionSnapshot, "fx" | "fy" | "m">; 
 
 /** "Fx 1.2 kN → 1.4 kN · Fy … · M …": the components that are not zero on either side. */
 function componentsText(r: ReactionChange, units: UnitSystem): string {
-  const show = (s: ReactionSnapshot | null, key: "fx" | "fy" | "m") => (s ? formatQuantity(s[key], key === "m" ? "moment" : "force", units) : "—");
+  // figures keep their zeros, as in the tables (6.240 kN, not 6.24 kN)
+  const show = (s: ReactionSnapshot | null, key: "fx" | "fy" | "m") => (s ? formatQuantity(s[key], key === "m" ? "moment" : "force", units, { keepZeros: true }) : "—");
   return COMPONENTS.filter(({ key }) => Math.abs(r.before?.[key] ?? 0) > 1e-9 || Math.abs(r.after?.[key] ?? 0) > 1e-9 || key !== "m")
     .map(({ key, label }) => `${label} ${show(r.before, key)} → ${show(r.after, key)}`)
     .join(" · ");

@@ -52,6 +52,11 @@ export function auditSentence(e: AuditEntry): string {
     case "upload.create":
     case "upload.delete":
       return `${auditActionLabel(e.action)} "${str(d.title)}": ${str(d.name) || "a file"} (${d.purpose === "attachment" ? "a comment's attachment" : "an underlay"})`;
+    case "signoff.submit":
+      return `submitted v${num(d.number)} of "${str(d.title)}" for checking${str(d.note) ? `: ${str(d.note)}` : ""}`;
+    case "comment.create":
+      // a reply reads as one, as in the sketch's own activity
+      return `${d.reply ? "replied on" : "commented on"} v${num(d.number)} of "${str(d.title)}"${str(d.note) ? `: ${plainText(str(d.note))}` : ""}`;
     default:
       if (e.action.startsWith("signoff.") || e.action.startsWith("comment.")) {
         // a comment's words without their formatting marks (**bold** reads as bold, not as stars)

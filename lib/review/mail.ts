@@ -36,7 +36,7 @@ export function signOffMail(input: { to: string; name: string; actorName: string
     check: "It is waiting for approval by an owner.",
     return: "Answer the comments, save a new version and submit it again.",
     approve: "The version is locked: it takes no new comments, and no sign-off step but a withdrawal.",
-    withdraw: "The version may be submitted again once it is put right.",
+    withdraw: "If the reason calls for a change, save a new version and submit that for checking; if not, this version may be submitted again.",
   };
   return compose(
     input.to,

@@ -31,7 +31,9 @@ describe("audit sentences", () => {
     [entry("member.leave"), "left the workspace"],
     [entry("workspace.rename", { name: "Pump House 2" }), 'renamed the workspace to "Pump House 2"'],
     [entry("comment.create", { number: 4, title: "Jet thrust stand", note: "Is the **front pin** grouted? *Check* `mu`" }), 'commented on v4 of "Jet thrust stand": Is the front pin grouted? Check mu'],
+    [entry("comment.create", { number: 4, title: "Jet thrust stand", note: "Yes, grouted.", reply: true }), 'replied on v4 of "Jet thrust stand": Yes, grouted.'],
     [entry("signoff.return", { number: 4, title: "Jet thrust stand", note: "Fix the pin" }), 'returned v4 of "Jet thrust stand": Fix the pin'],
+    [entry("signoff.submit", { number: 4, title: "Jet thrust stand" }), 'submitted v4 of "Jet thrust stand" for checking'],
     [entry("sketch.future_action"), "sketch.future_action"],
   ])("%#: %s", (e, sentence) => {
     expect(auditSentence(e)).toBe(sentence);

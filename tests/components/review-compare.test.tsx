@@ -114,8 +114,8 @@ describe("the reactions table of a comparison", () => {
     const b = solved(after);
     const { unmount } = render(<ReactionsTable comparison={c} units="SI" />);
     const wheel = screen.getByTestId("reaction-wheel-components").textContent!;
-    // 4 significant figures, in kN from 1 kN up and in N below
-    const f = (n: number) => (Math.abs(n) >= 1000 ? `${(n / 1000).toPrecision(4)} kN` : `${n.toPrecision(4)} N`).replace(/\.?0+ /, " ").replace("-", "−");
+    // 4 significant figures, trailing zeros kept as in the tables, in kN from 1 kN up and in N below
+    const f = (n: number) => (Math.abs(n) >= 1000 ? `${(n / 1000).toPrecision(4)} kN` : `${n.toPrecision(4)} N`).replace("-", "−");
     expect(wheel).toContain(`Fx ${f(a.reactions.wheel.fx)} → ${f(b.reactions.wheel.fx)}`);
     expect(wheel).toContain(`Fy ${f(a.reactions.wheel.fy)} → ${f(b.reactions.wheel.fy)}`);
     // contacts carry no moment: M is left out when it is zero on both sides
