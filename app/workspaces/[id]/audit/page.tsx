@@ -19,7 +19,7 @@ export default async function AuditPage({
     <div className="space-y-6">
       <div>
         <h1 className="text-2xl font-semibold tracking-tight">Audit log</h1>
-        <p className="mt-1 text-ink-soft">Who did what in this workspace: its members' sign-ins, invitations, role changes and removals, and the work on its sketches (saves, forks, comments, sign-off steps). Times are UTC.</p>
+        <p className="mt-1 text-ink-soft">Who did what in this workspace: its members’ sign-ins, invitations, role changes and removals, and the work on its sketches (saves, forks, comments, sign-off steps). Times are UTC.</p>
       </div>
       {allowed ? (
         <AuditLog workspaceId={id} showSignIns={signIns !== "hide"} />
