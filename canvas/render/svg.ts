@@ -108,13 +108,30 @@ function fitOverhang(scene: Scene, scale: number, box: ReturnType<typeof primsBo
   return Math.max(s, scale / 4);
 }
 
-/** One frame (scale and origin) that fits every sketch given, with its result, into width × height. */
-export function sharedFrame(drawings: Array<{ file: SketchFile | SketchFileInput; result: SolveResult | null }>, width: number, height: number, units: UnitSystem = "SI"): View | undefined {
+/** The legend's lines under a drawing `width` wide: the line styles and units, and gravity's
+ *  direction when the sketch turns it, packed into as few lines as fit across (about 6 px a
+ *  character at 11 px), so a narrow drawing wraps it rather than cut it. */
+function legendLinesOf(parsed: ReturnType<typeof parseSketch>, width: number, units: UnitSystem): string[] {
+  const key = `Solid arrows: given loads and weight · double lines: reactions found (on the body) · dashed: momentum flux ṁV · ${units === "SI" ? "SI units" : "US customary units"}`;
+  const ga = parsed.ok || "fields" in parsed ? parsed.fields?.gravityAngle : undefined;
+  const turned = gravityNote(ga && "value" in ga ? ga.value : undefined);
+  return packLine([...key.split(" · "), ...(turned ? [turned] : [])], Math.floor((width - 32) / 6));
+}
+const legendHeight = (lines: readonly string[]) => (lines.length ? 22 + 15 * (lines.length - 1) : 0);
+
+/**
+ * One frame (scale and origin) that fits every sketch given, with its result, into width × height
+ * — above the legend each drawing writes under itself (`legend`, as renderSketchSvg's default: when
+ * it has a result), so nothing is drawn on the legend's words.
+ */
+export function sharedFrame(drawings: Array<{ file: SketchFile | SketchFileInput; result: SolveResult | null }>, width: number, height: number, units: UnitSystem = "SI", opts: { legend?: boolean } = {}): View | undefined {
+  let room = 0;
   const drawn = drawings.flatMap((d) => {
-    const scene = sceneOf(d.file).scene;
+    const { scene, parsed } = sceneOf(d.file);
+    if (opts.legend ?? !!d.result) room = Math.max(room, legendHeight(legendLinesOf(parsed, width, units)));
     return scene ? [{ scene, result: d.result }] : [];
   });
-  return drawn.length ? fitScenes(drawn, width, height, { units }) : undefined;
+  return drawn.length ? fitScenes(drawn, width, height - room, { units }) : undefined;
 }
 
 /**
@@ -137,11 +154,8 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
   // the legend line, and gravity's direction when it is turned: its parts packed into as few lines
   // as fit across (about 6 px a character at 11 px), so a narrow drawing wraps it rather than cut it
   const legend = opts.legend ?? !!result;
-  const key = `Solid arrows: given loads and weight · double lines: reactions found (on the body) · dashed: momentum flux ṁV · ${units === "SI" ? "SI units" : "US customary units"}`;
-  const ga = parsed.fields?.gravityAngle;
-  const turned = legend ? gravityNote(ga && "value" in ga ? ga.value : undefined) : null;
-  const legendLines = legend ? packLine([...key.split(" · "), ...(turned ? [turned] : [])], Math.floor((width - 32) / 6)) : [];
-  const footer = (opts.caption ? 22 : 0) + (legendLines.length ? 22 + 15 * (legendLines.length - 1) : 0) + (opts.note ? 18 : 0);
+  const legendLines = legend ? legendLinesOf(parsed, width, units) : [];
+  const footer = (opts.caption ? 22 : 0) + legendHeight(legendLines) + (opts.note ? 18 : 0);
   const headLines = opts.heading?.lines ?? [];
   const top = opts.heading ? 40 + 18 * headLines.length : 0;
   if (!opts.frame && opts.maxHeight && opts.maxHeight > height) height = Math.round(Math.min(opts.maxHeight, Math.max(height, heightFor(scene, width) + footer + top)));

@@ -169,16 +169,16 @@ type DrawingPair = {
 };
 
 /** One scale and origin that holds both drawings, their labels and arrows, in `width` × `height`. */
-function useSharedFrame(before: SketchFile, after: SketchFile, width: number, height: number, units: UnitSystem) {
+function useSharedFrame(before: SketchFile, after: SketchFile, width: number, height: number, units: UnitSystem, legend: boolean) {
   const a = useSolved(before).result;
   const b = useSolved(after).result;
-  return useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], width, height, units), [before, after, a, b, width, height, units]);
+  return useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], width, height, units, { legend }), [before, after, a, b, width, height, units, legend]);
 }
 
 /** The two drawings side by side, in one frame: the same scale and origin, so a moved or resized
  *  part shows as moved, not as a drawing fitted differently. */
 function SideBySide({ before, after, beforeLabel, afterLabel, marks, units }: DrawingPair) {
-  const frame = useSharedFrame(before, after, 640, 400, units);
+  const frame = useSharedFrame(before, after, 640, 400, units, true);
   return (
     <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side" data-testid="compare-side-by-side">
       <figure className="space-y-1">
@@ -195,7 +195,8 @@ function SideBySide({ before, after, beforeLabel, afterLabel, marks, units }: Dr
 
 /** Both drawings at one scale and origin: the earlier one faint and grey, the later one over it. */
 function Overlay({ before, after, beforeLabel, afterLabel, marks, units }: DrawingPair) {
-  const frame = useSharedFrame(before, after, 1280, 640, units);
+  // the layers write no legend
+  const frame = useSharedFrame(before, after, 1280, 640, units, false);
   const removed = useMemo(() => Object.fromEntries(Object.entries(marks.before).filter(([, k]) => k === "removed")), [marks.before]);
   // the earlier drawing keeps the words of what was removed only: the rest of its labels would land
   // on the later drawing's (the tables give every value before and after)

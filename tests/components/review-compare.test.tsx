@@ -139,7 +139,7 @@ describe("a shared frame for the overlaid drawings", () => {
     return path.match(/M([-\d.]+) ([-\d.]+)/)!.slice(1).map(Number);
   };
 
-  it("puts the unchanged trailer on the same pixels in both drawings, and everything drawn inside the frame", async () => {
+  it("puts the unchanged trailer on the same pixels in both drawings, and everything drawn inside the frame, above the legend", async () => {
     const { scenePrims } = await import("@/canvas/render/scenePrims");
     const { primsBox } = await import("@/canvas/render/prims");
     const { buildScene, fieldValuesById } = await import("@/canvas/scene");
@@ -150,17 +150,23 @@ describe("a shared frame for the overlaid drawings", () => {
     const B = renderSketchSvg(after, rb, { width: 1280, height: 640, frame });
     expect(origin(A)).toEqual(origin(B));
     expect(firstCorner(A, "trailer")).toEqual(firstCorner(B, "trailer"));
-    // every symbol, label and reaction arrow of both drawings lies inside the 1280 × 640 frame
-    for (const [doc, r] of [[before, ra], [after, rb]] as const) {
-      const p = parseSketch(doc);
-      if (!p.ok) throw new Error("does not parse");
-      const scene = buildScene(p.file, fieldValuesById(p.file, p.fields, []));
-      const { groups, results } = scenePrims(scene, frame.scale, "SI", r);
-      const box = primsBox([...groups.flatMap((g) => g.prims), ...results]);
-      expect(frame.x + box.minX).toBeGreaterThanOrEqual(0);
-      expect(frame.x + box.maxX).toBeLessThanOrEqual(1280);
-      expect(frame.y + box.minY).toBeGreaterThanOrEqual(0);
-      expect(frame.y + box.maxY).toBeLessThanOrEqual(640);
+    // every symbol, label and reaction arrow of both drawings lies inside the frame and above the
+    // legend under it (one line across 1280 px, two across 640: 22 and 37 px)
+    for (const [width, height, legendRoom] of [[1280, 640, 22], [640, 400, 37]]) {
+      const f = sharedFrame([{ file: before, result: ra }, { file: after, result: rb }], width, height)!;
+      const legendTop = Math.min(...[...new DOMParser().parseFromString(renderSketchSvg(after, rb, { width, height, frame: f }), "image/svg+xml").querySelectorAll("svg > text")].map((t) => Number(t.getAttribute("y")) - 11));
+      expect(legendTop).toBeCloseTo(height - legendRoom + 3, 6);
+      for (const [doc, r] of [[before, ra], [after, rb]] as const) {
+        const p = parseSketch(doc);
+        if (!p.ok) throw new Error("does not parse");
+        const scene = buildScene(p.file, fieldValuesById(p.file, p.fields, []));
+        const { groups, results } = scenePrims(scene, f.scale, "SI", r);
+        const box = primsBox([...groups.flatMap((g) => g.prims), ...results]);
+        expect(f.x + box.minX).toBeGreaterThanOrEqual(0);
+        expect(f.x + box.maxX).toBeLessThanOrEqual(width);
+        expect(f.y + box.minY).toBeGreaterThanOrEqual(0);
+        expect(f.y + box.maxY).toBeLessThanOrEqual(legendTop);
+      }
     }
     // without the shared frame each drawing centres itself, and the two need not line up
     const ownA = renderSketchSvg(before, ra, { width: 1280, height: 640 });
