@@ -2,6 +2,7 @@
 import { Fragment } from "react";
 import { blankWords, fieldLabel } from "@/components/editor/fieldDefs";
 import { formatForceCell } from "@/components/sketches/format";
+import { SideScroll } from "@/components/studies/ReportTable";
 import type { Comparison, FieldChange, ReactionChange, ReactionSnapshot } from "@/lib/review/compare";
 import { formatNumber, formatQuantity, type UnitSystem } from "@/solver/units";
 
@@ -28,7 +29,7 @@ function componentsText(r: ReactionChange, units: UnitSystem): string {
 export function ReactionsTable({ comparison, units = "SI" }: { comparison: Comparison; units?: UnitSystem }) {
   if (!comparison.reactions.length) return <p className="text-sm text-ink-soft">Neither version has a support.</p>;
   return (
-    <div className="relative overflow-x-auto">
+    <SideScroll>
       <table className="w-full text-sm" data-testid="reaction-changes">
         <caption className="sr-only">Reactions before and after</caption>
         <thead>
@@ -61,7 +62,7 @@ export function ReactionsTable({ comparison, units = "SI" }: { comparison: Compa
           ))}
         </tbody>
       </table>
-    </div>
+    </SideScroll>
   );
 }
 
@@ -115,7 +116,7 @@ export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
           ))}
         </ul>
       ) : null}
-      <div className="relative overflow-x-auto">
+      <SideScroll>
         <table className="w-full text-sm" data-testid="field-changes">
           <caption className="sr-only">Inputs that changed, before and after</caption>
           <thead>
@@ -140,7 +141,7 @@ export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
             ))}
           </tbody>
         </table>
-      </div>
+      </SideScroll>
     </div>
   );
 }

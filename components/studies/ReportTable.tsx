@@ -37,6 +37,24 @@ function useMoreToTheRight() {
   }, []);
   return { ref, more };
 }
+/** A wide table's box: it scrolls sideways, and a fade with › at its right edge says there is more
+ *  to see (on a phone, the columns past the edge are often the verdict). */
+export function SideScroll({ children }: { children: ReactNode }) {
+  const { ref, more } = useMoreToTheRight();
+  return (
+    <div className="relative">
+      <div ref={ref} className="relative overflow-x-auto">
+        {children}
+      </div>
+      {more ? (
+        <div className="pointer-events-none absolute inset-y-0 right-0 flex w-10 items-center justify-end bg-gradient-to-l from-paper to-transparent pr-0.5 text-[13px] text-ink-faint" data-testid="more-to-the-right">
+          <span aria-hidden="true">›</span>
+        </div>
+      ) : null}
+    </div>
+  );
+}
+
 const wrapOf = (text: string) => (text.length > 18 && !/\s/.test(text) ? "[overflow-wrap:anywhere]" : "[overflow-wrap:break-word]");
 
 export function ReportTable({
@@ -53,7 +71,6 @@ export function ReportTable({
   caption?: string;
   testId?: string;
 }) {
-  const { ref: scrollRef, more: moreToTheRight } = useMoreToTheRight();
   const csvName = useCsvName();
   return (
     <div className="min-w-0">
@@ -63,8 +80,7 @@ export function ReportTable({
           CSV
         </button>
       </div>
-      <div className="relative">
-        <div ref={scrollRef} className="relative overflow-x-auto">
+      <SideScroll>
           <table className="num w-full border-collapse text-[12px]" data-testid={testId}>
             {caption && <caption className="caption-top pb-1 text-left text-[11.5px] text-ink-faint">{caption}</caption>}
             <thead>
@@ -107,13 +123,7 @@ export function ReportTable({
               ))}
             </tbody>
           </table>
-        </div>
-        {moreToTheRight ? (
-          <div className="pointer-events-none absolute inset-y-0 right-0 flex w-10 items-center justify-end bg-gradient-to-l from-paper to-transparent pr-0.5 text-[13px] text-ink-faint" data-testid="more-to-the-right">
-            <span aria-hidden="true">›</span>
-          </div>
-        ) : null}
-      </div>
+      </SideScroll>
       {table.notes?.map((n) => (
         <p key={n} className="mt-1 text-[11.5px] text-ink-faint">
           {n}
