@@ -258,7 +258,7 @@ export function CasesPanel() {
               {combinations.map((k, i) => (
                 <li key={k.id} className="grid grid-cols-[10rem_1fr_auto] items-start gap-1" data-combination={k.id}>
                   <TextCell label={`Name of combination ${k.id}`} value={k.name} parse={parseName} onCommit={(name) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name } : x)))} />
-                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(terms) => putCombos(combinations.map((x, j) => (j === i ? { ...x, terms } : x)))} />
+                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms, cases)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(terms) => putCombos(combinations.map((x, j) => (j === i ? { ...x, terms } : x)))} />
                   <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => dropCombination(k)}>
                     ×
                   </button>

@@ -8,7 +8,8 @@ export function parseOverrides(text: string, parameters: readonly string[]): Par
   const t = text.trim();
   if (!t) return { ok: true, value: undefined };
   const out: Record<string, string> = {};
-  for (const part of t.split(";").map((s) => s.trim()).filter(Boolean)) {
+  // changes part at ";" — or at a "," that starts the next "name =" (a comma inside max(a, b) stays)
+  for (const part of t.split(/;|,(?=\s*[A-Za-z_][A-Za-z0-9_]*\s*=(?!=))/).map((s) => s.trim()).filter(Boolean)) {
     const m = /^([A-Za-z_][A-Za-z0-9_]*)\s*=\s*(.+)$/.exec(part);
     if (!m) return { ok: false, error: `"${part}" should read name = value (e.g. theta = 30 deg)` };
     if (!parameters.includes(m[1])) return { ok: false, error: `the sketch has no parameter "${m[1]}"${parameters.length ? ` (it has ${parameters.join(", ")})` : ""}` };
@@ -81,8 +82,17 @@ export function parseTerms(text: string, cases: ReadonlyArray<string | { id: str
   return { ok: true, value: out };
 }
 
-export function formatTerms(terms: Array<{ case: string; factor: number }>): string {
-  return terms.map((t) => `${t.factor} ${t.case}`).join(" + ");
+/** The terms as the user wrote them: each case by its name when the name reads back as that case
+ *  (else by its id), so "1.2 Duty" does not come back as "1.2 normal-operation". */
+export function formatTerms(terms: Array<{ case: string; factor: number }>, cases: ReadonlyArray<string | { id: string; name?: string }> = []): string {
+  const list = cases.map((c) => (typeof c === "string" ? { id: c, name: undefined } : c));
+  const word = (id: string) => {
+    const name = list.find((c) => c.id === id)?.name?.trim();
+    if (!name || name.includes("+")) return id;
+    const back = parseTerms(`1 ${name}`, list);
+    return back.ok && back.value[0].case === id ? name : id;
+  };
+  return terms.map((t) => `${t.factor} ${word(t.case)}`).join(" + ");
 }
 
 /** A new id from a name: "Test pressure" → "test-pressure", unique among `taken`. */

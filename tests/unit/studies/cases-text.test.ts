@@ -9,6 +9,9 @@ describe("case text forms", () => {
     expect(parseOverrides("phi = 3", ["theta"])).toEqual({ ok: false, error: 'the sketch has no parameter "phi" (it has theta)' });
     expect(parseOverrides("theta 30", ["theta"])).toEqual({ ok: false, error: '"theta 30" should read name = value (e.g. theta = 30 deg)' });
     expect(formatOverrides({ theta: "30 deg", Q: 2 })).toBe("theta = 30 deg; Q = 2");
+    // a comma that starts the next "name =" parts changes too; one inside a function call does not
+    expect(parseOverrides("Q = 0 litre/s, pd = 650 kPa", ["Q", "pd"])).toEqual({ ok: true, value: { Q: "0 litre/s", pd: "650 kPa" } });
+    expect(parseOverrides("Q = max(1, 2) * 1 lps; pd = 1 bar", ["Q", "pd"])).toEqual({ ok: true, value: { Q: "max(1, 2) * 1 lps", pd: "1 bar" } });
   });
   it("group factors", () => {
     expect(parseFactors("dead 1.2, flow × 1.5, test pressure 1.1")).toEqual({ ok: true, value: { dead: 1.2, flow: 1.5, "test pressure": 1.1 } });
@@ -32,6 +35,13 @@ describe("case text forms", () => {
     expect(parseTerms("1.2 dead + 1.5 Rated  flow", cases)).toEqual({ ok: true, value: [{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 1.5 }] });
     expect(parseTerms("1.2*case-5 + 0.9 x rated flow", cases)).toEqual({ ok: true, value: [{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 0.9 }] });
     expect(parseTerms("1.5 wind", cases)).toEqual({ ok: false, error: 'there is no case "wind" (cases: Dead (case-5), Rated flow (case-6))' });
+    // written back by name, as typed, and read back to the same cases
+    const text = formatTerms([{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 1.5 }], cases);
+    expect(text).toBe("1.2 Dead + 1.5 Rated flow");
+    expect(parseTerms(text, cases)).toEqual({ ok: true, value: [{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 1.5 }] });
+    // a name another case's id would take (or one with a +) stays an id
+    expect(formatTerms([{ case: "a", factor: 1 }], [{ id: "a", name: "b" }, { id: "b", name: "B case" }])).toBe("1 a");
+    expect(formatTerms([{ case: "a", factor: 1 }], [{ id: "a", name: "wind + snow" }])).toBe("1 a");
   });
   it("ids from names", () => {
     expect(idFromName("Test pressure", [])).toBe("test-pressure");
