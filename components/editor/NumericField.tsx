@@ -40,6 +40,10 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   const id = useId();
   const [draft, setDraft] = useState<string | null>(null);
   const [localError, setLocalError] = useState<string | null>(null);
+  // what stays said after the field is left: a required value left blank (the old one was kept),
+  // and that a plain number was typed here with US units on screen
+  const [kept, setKept] = useState<string | null>(null);
+  const [typedPlain, setTypedPlain] = useState(false);
   const sessionRef = useRef(0);
   const units = useEditor((s) => s.units);
   const evaluated = useAnalysis((s) => s.fieldValues.values.get(valueKey));
@@ -57,17 +61,20 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
       setLocalError("is required: give a number or an expression");
       return;
     }
+    setTypedPlain(typeof v === "number");
     setLocalError(onCommit(v, `${valueKey}#${sessionRef.current}`));
   };
 
   // US units on screen, a plain number typed: it is SI (the file format's rule), which a US user may
   // not mean. Said plainly, with what to type instead; not an error, as SI is what some want.
   const usUnit = units === "US" && typeof typed === "number" && typed !== 0 && display !== "angle" && display !== "ratio" && display !== "rotationalStiffness" ? convert(typed, display, "US").unit : null;
-  // only for what the user typed here: a number the mouse placed (or a file brought) is SI by rule
-  const plainSI = usUnit && !error && draft !== null ? `A plain number is SI: ${formatDisplay(typed as number, display, "SI")} (= ${formatDisplay(typed as number, display, "US")}). Meant ${usUnit}? Type “${text.trim()} ${typedUnit(usUnit)}”.` : null;
+  // only for what the user typed here (and it stays said once the field is left): a number the
+  // mouse placed (or a file brought) is SI by rule
+  const plainSI = usUnit && !error && (draft !== null || typedPlain) ? `A plain number is SI: ${formatDisplay(typed as number, display, "SI")} (= ${formatDisplay(typed as number, display, "US")}). Meant ${usUnit}? Type “${text.trim()} ${typedUnit(usUnit)}”.` : null;
 
   let line: string;
-  if (error) line = error;
+  if (kept && draft === null) line = kept;
+  else if (error) line = error;
   else if (plainSI) line = plainSI;
   else if (!text.trim()) line = hint ?? (optional ? "not given" : "");
   else if (evaluated !== undefined) line = `= ${formatDisplay(evaluated, display, units)}`;
@@ -94,8 +101,11 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
           onFocus={() => {
             sessionRef.current = ++session;
             setDraft(numericText(value));
+            setKept(null);
           }}
           onBlur={() => {
+            // a required field left blank keeps its value, and says so rather than put it back unseen
+            setKept(draft !== null && !draft.trim() && !optional ? `is required: kept ${numericText(value)}` : null);
             setDraft(null);
             setLocalError(null);
           }}
@@ -105,8 +115,8 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
           }}
         />
       </div>
-      <p id={describedBy} className={`mt-0.5 min-h-[15px] text-[11px] leading-snug ${error || plainSI ? "text-caution" : "num text-ink-faint"}`} aria-live="polite" data-caution={plainSI ? "plain-si" : undefined}>
-        {error || plainSI ? `⚠ ${line}` : line}
+      <p id={describedBy} className={`mt-0.5 min-h-[15px] text-[11px] leading-snug ${error || plainSI || (kept && draft === null) ? "text-caution" : "num text-ink-faint"}`} aria-live="polite" data-caution={plainSI ? "plain-si" : undefined}>
+        {error || plainSI || (kept && draft === null) ? `⚠ ${line}` : line}
       </p>
     </div>
   );

@@ -49,6 +49,30 @@ describe("numeric fields with the worker's answer", () => {
     // a number nobody typed here (placed with the mouse, or from a file) is SI by rule: its value in
     // feet, no note. 2 m / 0.3048 m/ft = 6.562 ft (NIST SP 811)
     expect(within(form).getByTestId("field-at-x")).toHaveAccessibleDescription("= 6.562 ft");
+    // the note stays once the field is left (Enter), not only while typing
+    await user.click(magnitude);
+    await user.keyboard("{Enter}");
+    expect(magnitude).not.toHaveFocus();
+    expect(magnitude).toHaveAccessibleDescription("⚠ A plain number is SI: 4.448 kN (= 1000 lbf). Meant lbf? Type “4448.22 lbf”.");
+  });
+
+  it("a required value left blank keeps the old one and says so", async () => {
+    const user = userEvent.setup();
+    const editor = createEditorStore({ sketch: beam("F1") });
+    render(
+      <EditorProvider editor={editor} runner={workerLike}>
+        <ElementForm id="l1" />
+      </EditorProvider>,
+    );
+    const magnitude = within(screen.getByTestId("element-form")).getByLabelText("Magnitude");
+    const before = magnitude.getAttribute("value");
+    await user.clear(magnitude);
+    await user.tab();
+    expect(magnitude.getAttribute("value")).toBe(before);
+    expect(magnitude).toHaveAccessibleDescription(`⚠ is required: kept ${before}`);
+    // typing in it again takes the note away
+    await user.click(magnitude);
+    expect(magnitude).not.toHaveAccessibleDescription(/kept/);
   });
 });
 
