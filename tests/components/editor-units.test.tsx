@@ -25,15 +25,21 @@ const workerLike: Runner = (sketch, done) => {
   done({ ...core, fields: expressionFields(sketch, core.fields) });
 };
 
+/** The point force's form of a beam sketch, with the worker's answer. */
+function mountForm() {
+  const editor = createEditorStore({ sketch: beam("F1") });
+  render(
+    <EditorProvider editor={editor} runner={workerLike}>
+      <ElementForm id="l1" />
+    </EditorProvider>,
+  );
+  return editor;
+}
+
 describe("numeric fields with the worker's answer", () => {
   it("shows a plain number's value in the field's unit, in SI and in US", async () => {
     const user = userEvent.setup();
-    const editor = createEditorStore({ sketch: beam("F1") });
-    render(
-      <EditorProvider editor={editor} runner={workerLike}>
-        <ElementForm id="l1" />
-      </EditorProvider>,
-    );
+    const editor = mountForm();
     const form = screen.getByTestId("element-form");
     const magnitude = within(form).getByLabelText("Magnitude");
     await user.clear(magnitude);
@@ -58,12 +64,7 @@ describe("numeric fields with the worker's answer", () => {
 
   it("a required value left blank keeps the old one and says so", async () => {
     const user = userEvent.setup();
-    const editor = createEditorStore({ sketch: beam("F1") });
-    render(
-      <EditorProvider editor={editor} runner={workerLike}>
-        <ElementForm id="l1" />
-      </EditorProvider>,
-    );
+    mountForm();
     const magnitude = within(screen.getByTestId("element-form")).getByLabelText("Magnitude");
     const before = magnitude.getAttribute("value");
     await user.clear(magnitude);
