@@ -1,6 +1,6 @@
 // Mass flow and speed at each port, in the contract's order of preference, and the checks
 // that over-specified values agree (PORT_INCONSISTENT) and that mass balances per body.
-import type { Port, Sketch, SolveWarning } from "./types";
+import type { Port, Sketch, SolveWarning, Vec2 } from "./types";
 import { direction, pointInPolygon, polygonDiameter } from "./geometry";
 
 /** Relative disagreement above which over-specified values warn. */
@@ -84,8 +84,25 @@ export function massBalanceWarnings(sketch: Sketch, flows: Map<string, PortFlow>
  * Ports drawn against their kind: an inlet whose flow leaves the body through its face, or an
  * outlet whose flow enters it (the format has the velocity into the body at an inlet and out of it
  * at an outlet). Almost always a sign slip, and it changes the reactions without an error, so the
- * words under the status say it. A port off the outline, or with the flow along it, is not judged.
+ * words under the status say it. A port with the flow along the outline is not judged; a port off
+ * the outline (inside the body or outside it) is said to be off it: the control surface is the
+ * outline, so fluid crosses the boundary only there.
  */
+/** The least distance from a point to a closed outline's edges. */
+function distanceToOutline(q: Vec2, outline: Vec2[]): number {
+  let best = Infinity;
+  for (let i = 0; i < outline.length; i++) {
+    const a = outline[i];
+    const b = outline[(i + 1) % outline.length];
+    const ex = b[0] - a[0];
+    const ey = b[1] - a[1];
+    const len2 = ex * ex + ey * ey;
+    const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((q[0] - a[0]) * ex + (q[1] - a[1]) * ey) / len2));
+    best = Math.min(best, Math.hypot(q[0] - a[0] - t * ex, q[1] - a[1] - t * ey));
+  }
+  return best;
+}
+
 export function portDirectionNotes(sketch: Sketch): Array<{ id: string; body: string; message: string }> {
   const out: Array<{ id: string; body: string; message: string }> = [];
   for (const p of sketch.ports) {
@@ -95,8 +112,14 @@ export function portDirectionNotes(sketch: Sketch): Array<{ id: string; body: st
     const d = direction(p.angle);
     const ahead = pointInPolygon([p.at[0] + eps * d[0], p.at[1] + eps * d[1]], body.outline);
     const behind = pointInPolygon([p.at[0] - eps * d[0], p.at[1] - eps * d[1]], body.outline);
-    if (ahead === behind) continue;
     const name = p.label ? `${p.kind === "inlet" ? "Inlet" : "Outlet"} ${p.label}` : `${p.kind === "inlet" ? "Inlet" : "Outlet"} ${p.id}`;
+    if (ahead === behind) {
+      if (distanceToOutline(p.at, body.outline) > eps) {
+        const where = pointInPolygon(p.at, body.outline) ? "inside" : "outside";
+        out.push({ id: p.id, body: p.body, message: `${name} is ${where} its body, not on its outline: the control surface is the outline, and fluid crosses it only there. Move the port onto the edge where the flow crosses.` });
+      }
+      continue;
+    }
     const turned = `${Number((((p.angle + 180) % 360 + 540) % 360 - 180).toFixed(1))}°`;
     if (p.kind === "inlet" && !ahead)
       out.push({ id: p.id, body: p.body, message: `${name} points out of the body: an inlet's flow enters the control volume. If the fluid comes in here, turn it to ${turned}; if it leaves, make it an outlet.` });

@@ -301,11 +301,20 @@ describe("ports drawn against their kind", () => {
     ]);
   });
 
-  it("a port off the outline, or flowing along it, is not judged", () => {
+  it("a port off the outline is not judged for its direction, but is said to be off it; one flowing along the outline gets no note", () => {
     const doc = bend();
     doc.ports[0].at = [-1, 0]; // a metre clear of the bend
     doc.ports[1].angle = 0; // along the riser's top edge
     expect(notes(doc)).toEqual([]);
+    const off = statusSentences(solved(doc).sketch, solved(doc).result)[0].details.filter((d) => /not on its outline/.test(d));
+    expect(off).toEqual([
+      "Inlet from pump is outside its body, not on its outline: the control surface is the outline, and fluid crosses it only there. Move the port onto the edge where the flow crosses.",
+    ]);
+    // inside the body
+    const inside = bend();
+    inside.ports[0].at = [0, 0];
+    const sentences = statusSentences(solved(inside).sketch, solved(inside).result)[0].details;
+    expect(sentences.some((d) => d.startsWith("Inlet from pump is inside its body, not on its outline"))).toBe(true);
   });
 });
 
