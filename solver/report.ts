@@ -163,8 +163,23 @@ export function reactionTable(
         inUnit(r.margin, "force", u),
       ];
     }),
-    notes: opts.onSupport ? ["Loads on the supports are the reactions with the sign reversed (what an anchor must carry)."] : undefined,
+    notes: reactionNotes(result, opts),
   };
+}
+
+/** Under the reactions: the sign of loads on the supports, and a body that is not held, whose rows
+ *  are what equilibrium would need, not what its supports carry (the banner says why it moves). */
+function reactionNotes(result: SolveResult, opts: { onSupport?: boolean; names?: Readonly<Record<string, string>> }): string[] | undefined {
+  const notes: string[] = [];
+  if (opts.onSupport) notes.push("Loads on the supports are the reactions with the sign reversed (what an anchor must carry).");
+  const loose = Object.entries(result.bodies).filter(([, b]) => b.status === "tips" || b.status === "unrestrained");
+  if (loose.length) {
+    const names = loose.map(([id]) => opts.names?.[id] ?? id).join(", ");
+    notes.push(
+      `Not held: ${names}. ${loose.length === 1 ? "Its supports' rows are" : "Their supports' rows are"} the forces equilibrium would need, not loads the supports carry; the margins mean nothing until the body is held.`,
+    );
+  }
+  return notes.length ? notes : undefined;
 }
 
 /** Words for a run left out of the envelope: "Case X — trailer tips: not in the envelope; …". */

@@ -26,10 +26,12 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
   const scale = useHeldScale(useMemo(() => (shown ? reactionScale(shown) : undefined), [shown]));
   const table = useMemo(() => {
     if (!shown) return null;
-    const t = reactionTable(shown, units, { onSupport: sense === "support", scale });
+    // the bodies by their labels, for the note on a body that is not held (the rows keep the supports' ids)
+    const names = Object.fromEntries((numeric?.bodies ?? []).map((b) => [b.id, b.label || b.id]));
+    const t = reactionTable(shown, units, { onSupport: sense === "support", scale, names });
     // the kind shows in the support's tooltip; the columns keep their keys for tests and CSV
     return { ...withoutEmptyReactionColumns(t), kinds: t.rows.map((r) => String(r[1])) };
-  }, [shown, units, sense, scale]);
+  }, [shown, units, sense, scale, numeric]);
   if (!table || !shown) return <p className="p-2 text-[12.5px] text-ink-faint">No reactions yet.</p>;
   if (!table.rows.length) return <p className="p-2 text-[12.5px] text-ink-faint">No supports: add a pin, roller, contact, fixed support or tie to the body.</p>;
   const labelOf = (id: string) => numeric?.supports.find((s) => s.id === id)?.label;

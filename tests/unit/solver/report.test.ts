@@ -25,6 +25,19 @@ describe("result tables", () => {
     expect(onSupport.notes![0]).toMatch(/sign reversed/);
   });
 
+  it("a body that is not held (tips, or free to move) is named under its reactions: the rows are what equilibrium would need", () => {
+    const tips = solve(parsedFixture("thrust-stand-tips.json").sketch);
+    expect(Object.values(tips.bodies)[0].status).toBe("tips");
+    const id = Object.keys(tips.bodies)[0];
+    expect(reactionTable(tips, "SI", { names: { [id]: "Test stand" } }).notes).toEqual([
+      "Not held: Test stand. Its supports' rows are the forces equilibrium would need, not loads the supports carry; the margins mean nothing until the body is held.",
+    ]);
+    const free = solve(parsedFixture("skid-on-rollers-unrestrained.json").sketch);
+    expect(reactionTable(free, "SI").notes?.[0]).toMatch(/^Not held: /);
+    // a body that holds: no such note
+    expect(reactionTable(solve(parsedFixture("pump-skid-discharge.json").sketch), "SI").notes).toBeUndefined();
+  });
+
   it("the state column says what the panel says: a contact over its μ slips, one a tipping body would need to pull 'would pull', in the CSV too", () => {
     // pump-skid-slip: both feet need more than μ = 0.02 (|t|/n = 0.023 and 0.027)
     const slip = solve(parsedFixture("pump-skid-slip.json").sketch);
