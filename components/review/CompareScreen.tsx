@@ -47,16 +47,39 @@ function useDocument(sketchId: string, which: number | "draft") {
   };
 }
 
-export function CompareScreen({ workspaceId, sketchId, sketchTitle, from, to }: { workspaceId: string; sketchId: string; sketchTitle: string; from: number; to: number | "draft" }) {
+export function CompareScreen({
+  workspaceId,
+  sketchId,
+  sketchTitle,
+  from,
+  to,
+  layout: initialLayout = "side",
+}: {
+  workspaceId: string;
+  sketchId: string;
+  sketchTitle: string;
+  from: number;
+  to: number | "draft";
+  /** the drawings side by side or overlaid, as the address says */
+  layout?: "side" | "overlay";
+}) {
   const router = useRouter();
   const versions = useVersions(sketchId);
   const a = useDocument(sketchId, from);
   const b = useDocument(sketchId, to);
   const [units, setUnits] = useUnitsPreference();
-  const [layout, setLayout] = useState<"side" | "overlay">("side");
+  const [layout, setLayoutState] = useState<"side" | "overlay">(initialLayout);
+  // the address keeps the choice, so a reload or a link sent to a colleague shows the same drawings
+  const setLayout = (l: "side" | "overlay") => {
+    setLayoutState(l);
+    const url = new URL(window.location.href);
+    if (l === "overlay") url.searchParams.set("drawings", "overlay");
+    else url.searchParams.delete("drawings");
+    window.history.replaceState(window.history.state, "", url);
+  };
   const comparison = useMemo(() => (a.doc && b.doc ? compareSketches(a.doc, b.doc, units) : null), [a.doc, b.doc, units]);
   const base = `/workspaces/${workspaceId}/sketches/${sketchId}`;
-  const go = (f: number, t: number | "draft") => router.replace(`${base}/compare?from=${f}&to=${t}`);
+  const go = (f: number, t: number | "draft") => router.replace(`${base}/compare?from=${f}&to=${t}${layout === "overlay" ? "&drawings=overlay" : ""}`);
   const toLabel = to === "draft" ? "your changes" : `v${to}`;
 
   return (

@@ -5,8 +5,9 @@ import { loadSketchPage } from "@/lib/sketch-page";
 
 export const metadata: Metadata = { title: "Compare versions" };
 
-/** `?from=2&to=3` compares two versions; `?to=draft` compares with the changes kept in this browser. */
-export default async function ComparePage({ params, searchParams }: { params: Promise<{ id: string; sketchId: string }>; searchParams: Promise<{ from?: string; to?: string }> }) {
+/** `?from=2&to=3` compares two versions; `?to=draft` compares with the changes kept in this browser;
+ *  `&drawings=overlay` lays the drawings over each other (the link a colleague is sent shows the same). */
+export default async function ComparePage({ params, searchParams }: { params: Promise<{ id: string; sketchId: string }>; searchParams: Promise<{ from?: string; to?: string; drawings?: string }> }) {
   const { id, sketchId } = await params;
   const q = await searchParams;
   const { data } = await loadSketchPage(id, sketchId, `/workspaces/${id}/sketches/${sketchId}/compare`);
@@ -22,5 +23,5 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   }
   // the default comparison of a sketch with one version would be v1 against itself
   if (latest === 1 && to !== "draft") return <NothingToCompare workspaceId={id} sketchId={sketchId} sketchTitle={title} />;
-  return <CompareScreen key={`${from}-${to}`} workspaceId={id} sketchId={sketchId} sketchTitle={title} from={from} to={to} />;
+  return <CompareScreen key={`${from}-${to}`} workspaceId={id} sketchId={sketchId} sketchTitle={title} from={from} to={to} layout={q.drawings === "overlay" ? "overlay" : "side"} />;
 }
