@@ -5,15 +5,10 @@ import { act, render, screen } from "@testing-library/react";
 import { useState } from "react";
 import { beforeAll, describe, expect, it } from "vitest";
 import { Dialog } from "@/components/versions/Dialog";
+import { withModalDialogs } from "./dialog-support";
 
 beforeAll(() => {
-  // jsdom has <dialog> but not its modal methods: opening and closing set the attribute
-  HTMLDialogElement.prototype.showModal = function (this: HTMLDialogElement) {
-    this.setAttribute("open", "");
-  };
-  HTMLDialogElement.prototype.close = function (this: HTMLDialogElement) {
-    this.removeAttribute("open");
-  };
+  withModalDialogs();
 });
 
 function Page({ mountedOnlyWhileOpen }: { mountedOnlyWhileOpen: boolean }) {

@@ -4,17 +4,13 @@ import { act, render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Enlargeable } from "@/components/review/Enlargeable";
+import { withModalDialogs } from "./dialog-support";
 
 let columnWidth = 0;
 const observers: Array<() => void> = [];
 const saved = globalThis.ResizeObserver;
 beforeAll(() => {
-  HTMLDialogElement.prototype.showModal = function (this: HTMLDialogElement) {
-    this.setAttribute("open", "");
-  };
-  HTMLDialogElement.prototype.close = function (this: HTMLDialogElement) {
-    this.removeAttribute("open");
-  };
+  withModalDialogs();
   // the column's width as the browser would report it
   globalThis.ResizeObserver = class {
     constructor(private cb: ResizeObserverCallback) {}

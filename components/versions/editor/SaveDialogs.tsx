@@ -25,6 +25,7 @@ export function problemLines(err: ApiError): string[] {
 export function SaveDialog({
   open,
   base,
+  latest = base,
   title,
   busy,
   error,
@@ -33,6 +34,8 @@ export function SaveDialog({
 }: {
   open: boolean;
   base: number;
+  /** the sketch's newest version: newer than `base` when an older version was opened */
+  latest?: number;
   title: string;
   busy: boolean;
   error: ApiError | null;
@@ -41,7 +44,7 @@ export function SaveDialog({
 }) {
   const [message, setMessage] = useState("");
   return (
-    <Dialog open={open} onClose={onCancel} title={`Save version ${base + 1} of “${title}”`} testId="save-dialog">
+    <Dialog open={open} onClose={onCancel} title={latest > base ? `Save your changes to v${base} of “${title}”` : `Save version ${base + 1} of “${title}”`} testId="save-dialog">
       <form
         className="space-y-4"
         onSubmit={(e) => {
@@ -49,6 +52,11 @@ export function SaveDialog({
           onSave(message.trim());
         }}
       >
+        {latest > base ? (
+          <p className="rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-sm text-ink" data-testid="save-older">
+            You opened v{base}, and v{latest} is newer: a version goes on top of the newest only. Saving asks you next whether to fork a new sketch from your changes or to bring them onto v{latest}.
+          </p>
+        ) : null}
         <p className="text-sm text-ink-soft">
           The new version goes on top of v{base}. Saved versions never change, so say what this one changes: the checker reads it in the history.
         </p>

@@ -170,6 +170,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
         <SaveDialog
           open
           base={base}
+          latest={info.latest}
           title={info.title}
           busy={busy}
           error={error}
