@@ -134,6 +134,8 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.revision += 1;
           if (c.def.replacesSketch) d.fitRequest += 1;
           if (!c.def.undoable) return;
+          // "Undid: …" speaks of the step before this one: a new edit makes it old news
+          if (d.notice?.startsWith("Undid: ") || d.notice?.startsWith("Redid: ")) d.notice = null;
           const top = d.past[d.past.length - 1];
           if (opts?.coalesce && top && top.coalesce === opts.coalesce && d.future.length === 0) {
             top.after = after;

@@ -54,6 +54,18 @@ describe("editor store", () => {
     expect(store.getState().future).toHaveLength(0);
   });
 
+  it("says what undo and redo did, until the next edit makes it old news; other notices stay", () => {
+    const store = createEditorStore({ sketch: sketch() });
+    store.getState().apply(c(moveElement({ ids: ["s1"], delta: [1, 0] })));
+    store.getState().undo();
+    expect(store.getState().notice).toMatch(/^Undid: /);
+    store.getState().apply(c(moveElement({ ids: ["s2"], delta: [0.5, 0] })));
+    expect(store.getState().notice).toBeNull();
+    store.getState().notify("Saved as v4.");
+    store.getState().apply(c(moveElement({ ids: ["s2"], delta: [0.5, 0] })));
+    expect(store.getState().notice).toBe("Saved as v4.");
+  });
+
   it("merges typing in one field into one undo step", () => {
     const store = createEditorStore({ sketch: sketch() });
     for (const v of ["1", "12", "12 ", "12 k", "12 kN"]) store.getState().apply(c(setField({ id: "s2", field: "mu", value: v })), { coalesce: "s2.mu#1" });
