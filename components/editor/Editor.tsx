@@ -54,11 +54,13 @@ function StatusLine() {
   const notice = useEditor((s) => s.notice);
   const tool = useEditor((s) => s.tool.kind);
   const readOnly = useEditor((s) => s.readOnly);
+  // short enough to be read whole beside a notice; a phone gets its gestures (? lists every key)
   const hint = readOnly
-    ? "Read only: click an element to see its values · Space+drag or middle button: pan · wheel: zoom"
+    ? "Read only: click an element for its values · Space+drag: pan · wheel: zoom"
     : tool === "select"
-      ? "Drag to move · handles turn and reshape · Shift+click adds to the selection · Alt: no snapping · Space+drag or middle button: pan · wheel: zoom"
+      ? "Drag: move · handles: turn, reshape · Shift+click: add to selection · Alt: no snap · Space+drag: pan · wheel: zoom"
       : "Esc: back to selecting · Alt: no snapping";
+  const touchHint = tool === "select" && !readOnly ? "Drag: move · two fingers: zoom and pan · ? lists the rest" : hint;
   return (
     // two lines tall, always (a notice coming and going must not resize the drawing): a notice may
     // take both, and on a narrow window it takes the whole width from the hint
@@ -66,8 +68,9 @@ function StatusLine() {
       <p className="line-clamp-2 min-w-0 flex-1 text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? undefined}>
         {notice}
       </p>
-      <p className={`line-clamp-2 min-w-0 max-w-[45%] text-right text-ink-faint ${notice ? "max-md:hidden" : ""}`} title={hint}>
-        {hint}
+      <p className={`line-clamp-2 min-w-0 text-right text-ink-faint ${notice ? "max-w-[45%] max-md:hidden" : "max-w-[70%]"}`} title={hint}>
+        <span className="max-md:hidden">{hint}</span>
+        <span className="md:hidden">{touchHint}</span>
       </p>
     </div>
   );
