@@ -73,7 +73,7 @@ export function checkRecord(input: CheckRecordInput, labels: Record<string, stri
   }
   const openCount = threads.filter((t) => t.open).length;
   const summary = threads.length
-    ? `${plural(threads.length, "comment thread", "comment threads")} on this version: ${openCount ? `${openCount} open` : "none open"}, ${threads.length - openCount} resolved.`
+    ? `${plural(threads.length, "comment thread", "comment threads")} on this version: ${openCount ? `${openCount} open` : "none open"}${threads.length > openCount ? `, ${threads.length - openCount} resolved` : ""}.`
     : "No comments on this version.";
   const earlierOpen = (input.earlierOpen ?? []).filter((e) => e.open > 0);
   const earlier = earlierOpen.length ? `Still open on earlier versions: ${earlierOpen.map((e) => `v${e.number} (${plural(e.open, "thread", "threads")})`).join(", ")}.` : null;

@@ -65,6 +65,8 @@ describe("the check record", () => {
     expect(checkRecord({ steps: [{ step: "withdraw", actorName: "Olivia Owner", at: at("2026-12-01T09:00"), note: "Wrong μ" }], comments: [] }, {}).steps).toEqual([
       "2026-12-01 09:00 UTC · Olivia Owner withdrew the approval: “Wrong μ”",
     ]);
+    // all open: no "0 resolved"
+    expect(checkRecord({ steps: [], comments: [record.comments[2]] }, {}).summary).toBe("1 comment thread on this version: 1 open.");
     expect(checkRecord({ steps: [], comments: [] }, {})).toEqual({ summary: "No comments on this version.", steps: [], threads: [], earlier: null });
   });
 
