@@ -1,9 +1,9 @@
 // A sketch document as the API receives it: validated and migrated by the solver's parseSketch,
 // and the summary of its solve that listings show. Browser-safe (the solver is pure).
 import { z } from "zod";
-import { parseSketch, solve, type ParseResult } from "@/solver";
+import { parseSketch, solve, solveCases, type ParseResult } from "@/solver";
 import { CURRENT_VERSION, FORMAT, type SketchFile } from "@/solver/schema";
-import type { SolveSummary } from "@/db/tables/sketches";
+import type { LowFactor, SolveSummary } from "@/db/tables/sketches";
 import { sketchDescriptionSchema, sketchTitleSchema, tagsSchema, versionMessageSchema, versionNumberSchema, STATUS_ORDER } from "./sketch-schemas";
 
 export type ParsedSketch = Extract<ParseResult, { ok: true }>;
@@ -34,6 +34,26 @@ export function emptySketchFile(title: string): SketchFile {
   return { format: FORMAT, version: CURRENT_VERSION, title, bodies: [], supports: [], loads: [], ports: [], massSources: [] } as SketchFile;
 }
 
+/** The factor of safety furthest below its required value (smallest factor ÷ required) over the
+ *  sketch as drawn and every case and combination, for the list's mark; null when all pass. */
+export function lowestFactor(parsed: ParsedSketch): LowFactor | null {
+  let worst: LowFactor | null = null;
+  // the sketch as drawn is a run of its own only without cases: with them, it is solved on its own too
+  const file = parsed.file;
+  const asDrawn = file.cases?.length || file.combinations?.length ? solveCases({ ...file, cases: undefined, combinations: undefined }).runs : [];
+  for (const run of [...asDrawn, ...solveCases(file).runs]) {
+    if (!run.ok) continue;
+    for (const [body, st] of Object.entries(run.stability)) {
+      for (const check of ["overturning", "sliding"] as const) {
+        const c = st[check];
+        if ("notApplicable" in c || c.pass || !Number.isFinite(c.factor)) continue;
+        if (!worst || c.factor / c.required < worst.factor / worst.required) worst = { check, body: file.bodies.find((b) => b.id === body)?.label || body, factor: c.factor, required: c.required, run: run.name };
+      }
+    }
+  }
+  return worst;
+}
+
 /** Solve once and keep what listings need. Never throws: a solver failure is recorded, not raised. */
 export function summarizeSolve(parsed: ParsedSketch): SolveSummary {
   try {
@@ -47,7 +67,7 @@ export function summarizeSolve(parsed: ParsedSketch): SolveSummary {
       if (Number.isFinite(b.largestReaction)) largest = Math.max(largest ?? 0, b.largestReaction);
     }
     const warnings = [...new Set([...parsed.warnings, ...result.warnings].map((w) => w.code))];
-    return { status: worst >= 0 ? STATUS_ORDER[worst] : null, largestReaction: largest, bodies, warnings };
+    return { status: worst >= 0 ? STATUS_ORDER[worst] : null, largestReaction: largest, bodies, warnings, lowestFactor: lowestFactor(parsed) };
   } catch (err) {
     return { status: null, largestReaction: null, bodies: {}, warnings: [], error: err instanceof Error ? err.message.slice(0, 200) : "the solve failed" };
   }

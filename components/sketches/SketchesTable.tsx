@@ -12,7 +12,7 @@ import { ForkGlyph } from "./ForkGlyph";
 import { formatForceCell, timeAgo } from "./format";
 import { STATE_WORDS, type ReviewState } from "@/lib/review/rules";
 import { useUnitsPreference } from "./useUnitsPreference";
-import { StatusMark } from "./StatusMark";
+import { LowFactorChip, StatusMark, type LowFactorMark } from "./StatusMark";
 
 export type SketchRow = {
   id: string;
@@ -28,6 +28,7 @@ export type SketchRow = {
   forked: boolean;
   approvedVersion?: number | null;
   latestReviewState?: ReviewState;
+  lowestFactor?: LowFactorMark | null;
 };
 
 /** The sign-off states a lead looks for in the list: what is waiting for someone (a withdrawn
@@ -232,13 +233,21 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                       {s.latestMessage ? <span className="block truncate text-xs text-ink-faint max-sm:whitespace-normal">{s.latestMessage}</span> : null}
                       {/* a phone has no room for the columns: their words go under the title */}
                       <span className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-0.5 text-xs text-ink-soft sm:hidden" data-testid="sketch-row-summary">
-                        <StatusMark status={s.status} warnings={s.warnings} />
+                        <span>
+                          <StatusMark status={s.status} warnings={s.warnings} />
+                          {s.lowestFactor ? <LowFactorChip low={s.lowestFactor} /> : null}
+                        </span>
                         <span className="num">largest {formatForceCell(s.largestReaction, units)}</span>
                         <span>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
                       </span>
                     </td>
                     <td className="py-2.5 pr-3 max-sm:hidden">
                       <StatusMark status={s.status} warnings={s.warnings} />
+                      {s.lowestFactor ? (
+                        <span className="block">
+                          <LowFactorChip low={s.lowestFactor} />
+                        </span>
+                      ) : null}
                     </td>
                     <td className="num py-2.5 pr-3 text-right text-ink max-sm:hidden">{formatForceCell(s.largestReaction, units)}</td>
                     <td className="py-2.5 pr-3 text-ink-soft max-sm:hidden">

@@ -1,5 +1,9 @@
 // A solve status as a small drawn mark and its word, so it reads without colour.
 import type { SketchStatus } from "@/lib/sketch-schemas";
+import { formatNumber } from "@/solver/units";
+
+/** A factor of safety below its required value, as the list keeps it. */
+export type LowFactorMark = { check: "overturning" | "sliding"; body: string; factor: number; required: number; run: string };
 
 const WORDS: Record<SketchStatus, { word: string; title: string; tone: string }> = {
   holds: { word: "holds", title: "Holds: every support within its limits", tone: "text-reaction" },
@@ -32,6 +36,20 @@ function Glyph({ status }: { status: SketchStatus }) {
       {ground}
       {shapes[status]}
     </svg>
+  );
+}
+
+/** "FoS 1.21 < 1.5": a body that holds may still be short of its required factor of safety (as
+ *  drawn, or in a case); the list says so beside the status, the title names the check and run. */
+export function LowFactorChip({ low }: { low: LowFactorMark }) {
+  return (
+    <span
+      className="num ml-1.5 whitespace-nowrap rounded border border-caution/50 px-1 text-[11px] font-medium text-caution"
+      title={`Factor of safety against ${low.check} of ${low.body} is ${formatNumber(low.factor, 4, { keepZeros: true })}, below the required ${formatNumber(low.required, 3)} (${low.run})`}
+      data-testid="low-factor"
+    >
+      FoS {formatNumber(low.factor, 3, { keepZeros: true })} &lt; {formatNumber(low.required, 3)}
+    </span>
   );
 }
 

@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, count, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
-import { membership, sketch, sketchVersion, user, workspace, type SolveSummary } from "@/db/schema";
+import { membership, sketch, sketchVersion, user, workspace, type LowFactor, type SolveSummary } from "@/db/schema";
 import type { Role } from "@/lib/roles";
 import type { ReviewState } from "@/lib/review/rules";
 import type { ListSketchesQuery, SketchStatus } from "@/lib/sketch-schemas";
@@ -55,6 +55,8 @@ export type SketchListItem = {
   status: SketchStatus | null;
   largestReaction: number | null;
   warnings: string[];
+  /** a factor of safety below its required value, the furthest below (as drawn, or a case) */
+  lowestFactor: LowFactor | null;
   latestMessage: string;
   updatedAt: Date;
   updatedBy: { id: string; name: string } | null;
@@ -135,6 +137,7 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       status: (r.status ?? null) as SketchStatus | null,
       largestReaction: r.largestReaction,
       warnings: (r.summary as SolveSummary | null)?.warnings ?? [],
+      lowestFactor: (r.summary as SolveSummary | null)?.lowestFactor ?? null,
       latestMessage: r.latestMessage ?? "",
       updatedAt: r.updatedAt,
       updatedBy: r.updaterId ? { id: r.updaterId, name: r.updaterName ?? "" } : null,

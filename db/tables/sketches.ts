@@ -14,8 +14,13 @@ export type SolveSummary = {
   bodies: Record<string, { status: string; largestReaction: number }>;
   /** warning codes of the solve (SLIP, LIFTOFF, …) */
   warnings: string[];
+  /** the factor of safety furthest below its required value over the sketch as drawn and its
+   *  cases and combinations (bodies that are held), when one is below; null when none is */
+  lowestFactor?: LowFactor | null;
   error?: string;
 };
+
+export type LowFactor = { check: "overturning" | "sliding"; body: string; factor: number; required: number; run: string };
 
 /**
  * A sketch: one free-body diagram in a workspace, saved as numbered versions. `latestVersion`

@@ -90,6 +90,18 @@ describe("largest reaction in the listings", () => {
     expect(await chip("Cart")).toBeNull();
   });
 
+  it("a sketch that holds yet is short of a required factor of safety says so beside its status", async () => {
+    const low = { check: "sliding" as const, body: "Monitor trailer", factor: 1.2134, required: 1.5, run: "As drawn" };
+    const row = (title: string, lowestFactor: SketchRow["lowestFactor"]): SketchRow => ({ id: title, title, tags: [], latestVersion: 2, status: "holds", largestReaction: 1000, warnings: [], latestMessage: "", updatedAt: at, updatedBy: null, forked: false, lowestFactor });
+    answer({ items: [row("Short", low), row("Fine", null)], total: 2, page: 1, pageSize: 20, tags: [] });
+    withQuery(<SketchesTable workspaceId="w1" canCreate />);
+    const marks = within(await screen.findByTestId("sketch-row-Short")).getAllByTestId("low-factor");
+    // the column and the phone's line under the title
+    expect(marks.map((m) => m.textContent)).toEqual(["FoS 1.21 < 1.5", "FoS 1.21 < 1.5"]);
+    expect(marks[0].getAttribute("title")).toBe("Factor of safety against sliding of Monitor trailer is 1.213, below the required 1.5 (As drawn)");
+    expect(within(screen.getByTestId("sketch-row-Fine")).queryByTestId("low-factor")).toBeNull();
+  });
+
   it("keeps the list's view in the address: read back as written, defaults left out, nonsense ignored", async () => {
     const view = { q: "bend", tag: "pipework", status: "slips", sort: "status" as const, dir: "asc" as const, page: 2 };
     expect(searchOfFilters(view)).toBe("?q=bend&tag=pipework&status=slips&sort=status&dir=asc&page=2");
