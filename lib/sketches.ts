@@ -265,6 +265,7 @@ function forkInTransaction(
       forkedFromTitle: source.title,
     });
     await copy.insert(tx, made.sketch.id, actor.id);
+    const elsewhere = input.workspaceId !== source.workspaceId;
     await recordAudit(
       {
         action: "sketch.fork",
@@ -273,13 +274,13 @@ function forkInTransaction(
         workspaceId: input.workspaceId,
         targetType: "sketch",
         targetId: made.sketch.id,
-        // not the origin's id: members here may not be allowed to see that sketch
-        detail: { sketchId: made.sketch.id, title, fromVersion: number },
+        // not the origin's id, and its title only from the same workspace: members here may not be
+        // allowed to see a sketch elsewhere
+        detail: { sketchId: made.sketch.id, title, fromVersion: number, ...(elsewhere ? {} : { fromTitle: source.title }) },
       },
       tx,
     );
     // The origin's feed learns it was forked: into which sketch only when that is in the same workspace.
-    const elsewhere = input.workspaceId !== source.workspaceId;
     await recordAudit(
       {
         action: "sketch.fork",

@@ -28,7 +28,7 @@ export function activitySentence(e: ActivityEvent): string {
     case "sketch.edit":
       return `edited its ${fieldList(d.changed)}`;
     case "sketch.fork":
-      if (!d.origin) return `started it as a fork of ${n(d.fromVersion)} of another sketch`;
+      if (!d.origin) return `started it as a fork of ${n(d.fromVersion)} of ${s(d.fromTitle) ? `“${s(d.fromTitle)}”` : "another sketch"}`;
       return d.elsewhere ? `forked ${n(d.fromVersion)} into another workspace` : `forked ${n(d.fromVersion)} as “${s(d.forkTitle)}”`;
     case "comment.create":
       return `${d.reply ? "replied on" : "commented on"} ${n(d.number)}${quote(d.note)}`;

@@ -283,12 +283,23 @@ describe("sketches: forks, vanished rows, edits", () => {
     for (const e of forks) {
       expect(e.detail).not.toHaveProperty("fromSketchId");
       expect(e.detail.fromVersion).toBe(1);
+      // the origin is in another workspace: not named either
+      expect(e.detail).not.toHaveProperty("fromTitle");
     }
     expect(JSON.stringify(activity.body)).not.toContain(id);
 
     const audit = await call(auditRoute.GET, { params: { id: away }, cookie: viewerHere.cookie });
     expect(audit.status).toBe(200);
     expect(JSON.stringify(audit.body)).not.toContain(id);
+  });
+
+  it("a fork in the same workspace names its origin in its activity", async () => {
+    const id = await newSketch("Open origin");
+    const fork = await call(forkRoute.POST, { method: "POST", params: { id }, cookie: editor.cookie, body: { workspaceId: home, version: 1 } });
+    expect(fork.status).toBe(201);
+    const activity = await call(activityRoute.GET, { params: { id: fork.body.sketch.id }, cookie: editor.cookie });
+    const own = activity.body.events.find((e: { action: string; detail: Record<string, unknown> }) => e.action === "sketch.fork" && !e.detail.origin);
+    expect(own.detail.fromTitle).toBe("Open origin");
   });
 
   it("a write whose row vanished says 404, a role that lost the right 403", async () => {

@@ -1,4 +1,4 @@
-// How an edited or deleted comment reads in a sketch's activity feed.
+// How comment changes and a fork read in a sketch's activity feed.
 import { describe, expect, it } from "vitest";
 import { activitySentence } from "@/components/review/activitySentence";
 
@@ -15,5 +15,12 @@ describe("comment changes in the activity feed", () => {
     expect(activitySentence(event("comment.edit", { number: 3, reply: true, note: "" }))).toBe("edited a reply on v3");
     expect(activitySentence(event("comment.delete", { number: 2, reply: true }))).toBe("deleted a reply on v2");
     expect(activitySentence(event("comment.delete", { number: 2, reply: false }))).toBe("deleted a comment on v2");
+  });
+});
+
+describe("a fork in its own activity feed", () => {
+  it("names the sketch it came from when that is in the same workspace, and not otherwise", () => {
+    expect(activitySentence(event("sketch.fork", { fromVersion: 3, fromTitle: "Fire-fighting monitor trailer" }))).toBe("started it as a fork of v3 of “Fire-fighting monitor trailer”");
+    expect(activitySentence(event("sketch.fork", { fromVersion: 3 }))).toBe("started it as a fork of v3 of another sketch");
   });
 });
