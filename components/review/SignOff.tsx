@@ -78,9 +78,9 @@ function StepDialog({ step, path, concerns, onClose, onDone }: { step: SignOffSt
           take.mutate();
         }}
       >
-        {(step === "check" || step === "approve") && concerns.length ? (
+        {(step === "submit" || step === "check" || step === "approve") && concerns.length ? (
           <div className="rounded-md border border-caution/40 bg-caution-soft p-3 text-[13px] text-ink" data-testid="signoff-concerns" role="note">
-            <p className="font-semibold">Before you {step === "approve" ? "approve" : "mark it checked"}, this version shows:</p>
+            <p className="font-semibold">Before you {step === "approve" ? "approve" : step === "check" ? "mark it checked" : "submit it (say in the note why it stands)"}, this version shows:</p>
             <ul className="mt-1 list-disc space-y-0.5 pl-5">
               {concerns.map((c) => (
                 <li key={c}>{c}</li>
@@ -113,7 +113,7 @@ function StepDialog({ step, path, concerns, onClose, onDone }: { step: SignOffSt
   );
 }
 
-/** `concerns`: what the version's own results say a checker or approver must not miss (a case not held, a factor of safety short). */
+/** `concerns`: what the version's own results say its author, checker or approver must not miss (a case not held, a factor of safety short). */
 export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: SignOffData; path: string; concerns?: readonly string[]; onChanged: () => void }) {
   const [step, setStep] = useState<SignOffStep | null>(null);
   const qc = useQueryClient();

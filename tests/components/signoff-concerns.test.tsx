@@ -1,0 +1,53 @@
+// The sign-off dialogs put the version's own findings first — a factor of safety short, a case
+// in which a body is not held — when it is submitted, checked or approved, so nobody takes a step
+// past them unseen; the superseded version's page says why it offers no submit.
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { render, screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { beforeAll, describe, expect, it } from "vitest";
+import { SignOffPanel, type SignOffData } from "@/components/review/SignOff";
+import { withModalDialogs } from "./dialog-support";
+
+beforeAll(withModalDialogs);
+
+const data = (over: Partial<SignOffData>): SignOffData => ({
+  state: "draft",
+  sentence: "Prepared; not yet submitted for checking.",
+  entries: [],
+  titleBlock: { prepared: { name: "Eddie Editor", date: "2026-11-30T10:00:00Z" }, checked: null, approved: null },
+  allowed: [],
+  ...over,
+});
+
+const show = (d: SignOffData, concerns: string[] = []) =>
+  render(
+    <QueryClientProvider client={new QueryClient()}>
+      <SignOffPanel data={d} path="/api/sketches/s1/versions/2/signoff" concerns={concerns} onChanged={() => {}} />
+    </QueryClientProvider>,
+  );
+
+describe("the version's findings in the sign-off dialogs", () => {
+  it.each([
+    ["submit", "Submit for checking", "Before you submit it (say in the note why it stands), this version shows:"],
+    ["check", "Mark checked", "Before you mark it checked, this version shows:"],
+    ["approve", "Approve", "Before you approve, this version shows:"],
+  ] as const)("%s lists them first", async (step, button, heading) => {
+    show(data({ allowed: [step] }), ["Sliding factor of safety 1.213, below the required 1.5 (as drawn)"]);
+    await userEvent.setup().click(screen.getByRole("button", { name: button }));
+    const box = within(screen.getByTestId("signoff-dialog")).getByTestId("signoff-concerns");
+    expect(box.querySelector("p")!.textContent).toBe(heading);
+    expect(within(box).getByText("Sliding factor of safety 1.213, below the required 1.5 (as drawn)")).toBeTruthy();
+  });
+
+  it("a return needs no such list; without findings there is none", async () => {
+    show(data({ state: "submitted", allowed: ["return"] }), ["anything"]);
+    await userEvent.setup().click(screen.getByRole("button", { name: "Return with comments" }));
+    expect(within(screen.getByTestId("signoff-dialog")).queryByTestId("signoff-concerns")).toBeNull();
+  });
+
+  it("a superseded version says why it offers no submit", () => {
+    show(data({ state: "returned", allowed: [], newer: 3 }));
+    expect(screen.getByTestId("signoff-superseded").textContent).toBe("v3 is newer: only the latest version is submitted for checking.");
+    expect(screen.queryByRole("button", { name: "Submit for checking" })).toBeNull();
+  });
+});
