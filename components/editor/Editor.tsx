@@ -56,7 +56,7 @@ function StatusLine() {
   const readOnly = useEditor((s) => s.readOnly);
   // short enough to be read whole beside a notice; a phone gets its gestures (? lists every key)
   const hint = readOnly
-    ? "Read only: click an element for its values · Space+drag: pan · wheel: zoom"
+    ? "Read only: click an element to see its values · Space+drag: pan · wheel: zoom"
     : tool === "select"
       ? "Drag: move · handles: turn, reshape · Shift+click: add to selection · Alt: no snap · Space+drag: pan · wheel: zoom"
       : "Esc: back to selecting · Alt: no snapping";
@@ -69,8 +69,14 @@ function StatusLine() {
         {notice}
       </p>
       <p className={`line-clamp-2 min-w-0 text-right text-ink-faint ${notice ? "max-w-[45%] max-md:hidden" : "max-w-[70%]"}`} title={hint}>
-        <span className="max-md:hidden">{hint}</span>
-        <span className="md:hidden">{touchHint}</span>
+        {touchHint === hint ? (
+          hint
+        ) : (
+          <>
+            <span className="max-md:hidden">{hint}</span>
+            <span className="md:hidden">{touchHint}</span>
+          </>
+        )}
       </p>
     </div>
   );
