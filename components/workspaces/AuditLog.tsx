@@ -5,8 +5,29 @@ import { Button, EmptyState, Notice, Skeleton } from "@/components/shell/control
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { auditSentence, type AuditEntry } from "./auditSentence";
 import { formatDateTime } from "./format";
+import Link from "next/link";
 
 type Page = { events: AuditEntry[]; nextBefore: number | null };
+
+/** Where an entry about a sketch leads: its version's page when it names one, else the sketch's
+ *  (nothing for a deletion: the sketch is gone). */
+export function entryHref(workspaceId: string, e: AuditEntry): string | null {
+  if (e.targetType !== "sketch" || !e.targetId || e.action === "sketch.delete") return null;
+  const number = typeof e.detail?.number === "number" ? e.detail.number : null;
+  const base = `/workspaces/${workspaceId}/sketches/${e.targetId}`;
+  return number !== null && (e.action.startsWith("signoff.") || e.action.startsWith("comment.") || e.action === "sketch.save") ? `${base}/versions/${number}` : base;
+}
+
+function EntryLink({ workspaceId, entry }: { workspaceId: string; entry: AuditEntry }) {
+  const href = entryHref(workspaceId, entry);
+  const title = typeof entry.detail?.title === "string" ? entry.detail.title : "the sketch";
+  const version = href?.includes("/versions/") ? ` v${String(entry.detail.number)}` : "";
+  return href ? (
+    <Link href={href} aria-label={`Open “${title}”${version}`} className="ml-2 whitespace-nowrap text-xs text-ink-soft underline decoration-rule underline-offset-2 hover:decoration-ink">
+      Open
+    </Link>
+  ) : null;
+}
 
 /** The owners' audit log, newest first, fifty at a time. */
 export function AuditLog({ workspaceId, showSignIns = true }: { workspaceId: string; showSignIns?: boolean }) {
@@ -86,7 +107,10 @@ export function AuditLog({ workspaceId, showSignIns = true }: { workspaceId: str
                   <span className="font-medium text-ink">{e.actorName ?? "Deleted account"}</span>
                   {e.actorEmail ? <span className="block text-xs text-ink-faint">{e.actorEmail}</span> : null}
                 </td>
-                <td className="py-2.5 text-ink">{auditSentence(e)}</td>
+                <td className="py-2.5 text-ink">
+                  {auditSentence(e)}
+                  <EntryLink workspaceId={workspaceId} entry={e} />
+                </td>
               </tr>
             ))}
           </tbody>

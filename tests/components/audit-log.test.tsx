@@ -7,6 +7,8 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { AuditLog } from "@/components/workspaces/AuditLog";
 
 const signIn = { id: 2, at: "2026-11-02T08:00:00Z", action: "auth.sign_in", actorName: "Eli Editor", actorEmail: "eli@example.com", targetType: null, targetId: null, targetName: null, detail: {} };
+const save = { id: 3, at: "2026-11-03T08:00:00Z", action: "sketch.save", actorName: "Eli Editor", actorEmail: "eli@example.com", targetType: "sketch", targetId: "s9", targetName: null, detail: { title: "Bend", number: 2, message: "Hydrotest" } };
+const gone = { id: 4, at: "2026-11-04T08:00:00Z", action: "sketch.delete", actorName: "Orla Owner", actorEmail: "orla@example.com", targetType: "sketch", targetId: "s8", targetName: null, detail: { title: "Old", versions: 1 } };
 const invite = { id: 1, at: "2026-11-01T08:00:00Z", action: "invitation.create", actorName: "Orla Owner", actorEmail: "orla@example.com", targetType: null, targetId: null, targetName: null, detail: { email: "cho@example.com", role: "checker" } };
 
 function serve() {
@@ -15,7 +17,7 @@ function serve() {
     "fetch",
     vi.fn(async (path: string) => {
       asked.push(path);
-      const events = path.includes("signIns=hide") ? [invite] : [signIn, invite];
+      const events = path.includes("signIns=hide") ? [invite] : [gone, save, signIn, invite];
       return new Response(JSON.stringify({ events, nextBefore: null }), { status: 200, headers: { "content-type": "application/json" } });
     }),
   );
@@ -32,6 +34,17 @@ const show = (showSignIns?: boolean) =>
 afterEach(() => {
   vi.unstubAllGlobals();
   window.history.replaceState(null, "", "/");
+});
+
+describe("the audit log's entries about sketches", () => {
+  it("link to the version they name, or the sketch; a deleted sketch has no link", async () => {
+    serve();
+    show();
+    const open = await screen.findByRole("link", { name: "Open “Bend” v2" });
+    expect(open.getAttribute("href")).toBe("/workspaces/w1/sketches/s9/versions/2");
+    expect(screen.queryByRole("link", { name: /Old/ })).toBeNull();
+    expect(screen.getAllByRole("link")).toHaveLength(1);
+  });
 });
 
 describe("the audit log's sign-ins switch", () => {
