@@ -157,7 +157,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
         const clearance = (a: Pt, b: Pt) => Math.min(...anchors.map((p) => nearestOnSegment(p, a, b).distance), ...drawnArrows.map(([f, t]) => segmentGap(a, b, f, t)));
         const hung = clearance(add(cg, mul(d, 8)), add(cg, mul(d, 52)));
         const arrives = hung < 6 && clearance(add(cg, mul(d, -52)), add(cg, mul(d, -8))) > hung;
-        const [from, to, at] = arrives ? [add(cg, mul(d, -52)), add(cg, mul(d, -8)), add(cg, mul(d, -30))] : [add(cg, mul(d, 8)), add(cg, mul(d, 52)), add(cg, mul(d, 38))];
+        const [from, to, at] = arrives ? [add(cg, mul(d, -52)), add(cg, mul(d, -8)), add(cg, mul(d, -40))] : [add(cg, mul(d, 8)), add(cg, mul(d, 52)), add(cg, mul(d, 38))];
         prims.push(...solidArrow(from, to, INK, 1.9, 11));
         prims.push(text(add(at, mul(side, 7)), `W ${fq(W, "force", o.units)}`, INK, 11.5, { weight: 600, align: side[0] >= 0 ? "left" : "right", baseline: "middle" }));
       }
