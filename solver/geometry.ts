@@ -125,3 +125,29 @@ export function selfCrossing(pts: Vec2[]): { edges: [number, number]; at: Vec2 }
 
 /** (a − o) × (b − o): positive when o → a → b turns counter-clockwise. */
 const turn = (o: Vec2, a: Vec2, b: Vec2) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
+
+/** The nearest point on segment ab to p, with its parameter t in [0, 1]. */
+export function nearestOnSegment(p: Vec2, a: Vec2, b: Vec2): { point: Vec2; t: number; distance: number } {
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const len2 = dx * dx + dy * dy;
+  const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / len2));
+  const point: Vec2 = [a[0] + t * dx, a[1] + t * dy];
+  return { point, t, distance: Math.hypot(p[0] - point[0], p[1] - point[1]) };
+}
+
+export interface EdgeHit {
+  edge: number;
+  point: Vec2;
+  distance: number;
+}
+
+/** The nearest point on a closed polygon's boundary. */
+export function nearestOnOutline(p: Vec2, poly: Vec2[]): EdgeHit {
+  let best: EdgeHit = { edge: -1, point: p, distance: Infinity };
+  for (let i = 0; i < poly.length; i++) {
+    const h = nearestOnSegment(p, poly[i], poly[(i + 1) % poly.length]);
+    if (h.distance < best.distance) best = { edge: i, point: h.point, distance: h.distance };
+  }
+  return best;
+}

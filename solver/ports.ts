@@ -1,7 +1,7 @@
 // Mass flow and speed at each port, in the contract's order of preference, and the checks
 // that over-specified values agree (PORT_INCONSISTENT) and that mass balances per body.
-import type { Port, Sketch, SolveWarning, Vec2 } from "./types";
-import { direction, pointInPolygon, polygonDiameter } from "./geometry";
+import type { Port, Sketch, SolveWarning } from "./types";
+import { direction, nearestOnOutline, pointInPolygon, polygonDiameter } from "./geometry";
 
 /** Relative disagreement above which over-specified values warn. */
 const AGREEMENT = 0.005;
@@ -88,21 +88,6 @@ export function massBalanceWarnings(sketch: Sketch, flows: Map<string, PortFlow>
  * the outline (inside the body or outside it) is said to be off it: the control surface is the
  * outline, so fluid crosses the boundary only there.
  */
-/** The least distance from a point to a closed outline's edges. */
-function distanceToOutline(q: Vec2, outline: Vec2[]): number {
-  let best = Infinity;
-  for (let i = 0; i < outline.length; i++) {
-    const a = outline[i];
-    const b = outline[(i + 1) % outline.length];
-    const ex = b[0] - a[0];
-    const ey = b[1] - a[1];
-    const len2 = ex * ex + ey * ey;
-    const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((q[0] - a[0]) * ex + (q[1] - a[1]) * ey) / len2));
-    best = Math.min(best, Math.hypot(q[0] - a[0] - t * ex, q[1] - a[1] - t * ey));
-  }
-  return best;
-}
-
 export function portDirectionNotes(sketch: Sketch): Array<{ id: string; body: string; message: string }> {
   const out: Array<{ id: string; body: string; message: string }> = [];
   for (const p of sketch.ports) {
@@ -114,7 +99,7 @@ export function portDirectionNotes(sketch: Sketch): Array<{ id: string; body: st
     const behind = pointInPolygon([p.at[0] - eps * d[0], p.at[1] - eps * d[1]], body.outline);
     const name = p.label ? `${p.kind === "inlet" ? "Inlet" : "Outlet"} ${p.label}` : `${p.kind === "inlet" ? "Inlet" : "Outlet"} ${p.id}`;
     if (ahead === behind) {
-      if (distanceToOutline(p.at, body.outline) > eps) {
+      if (nearestOnOutline(p.at, body.outline).distance > eps) {
         const where = pointInPolygon(p.at, body.outline) ? "inside" : "outside";
         out.push({ id: p.id, body: p.body, message: `${name} is ${where} its body, not on its outline: the control surface is the outline, and fluid crosses it only there. Move the port onto the edge where the flow crosses.` });
       }

@@ -1,34 +1,10 @@
 // Plane geometry for the editor: hit tests, nearest points, edges and their normals.
-import { pointInPolygon, polygonArea, polygonCentroid } from "@/solver/geometry";
+import { nearestOnOutline, nearestOnSegment, pointInPolygon, polygonArea, polygonCentroid, type EdgeHit } from "@/solver/geometry";
 import type { Vec2 } from "@/solver/types";
 
-export { pointInPolygon, polygonArea, polygonCentroid };
+export { nearestOnOutline, nearestOnSegment, pointInPolygon, polygonArea, polygonCentroid, type EdgeHit };
 
-/** The nearest point on segment ab to p, with its parameter t in [0, 1]. */
-export function nearestOnSegment(p: Vec2, a: Vec2, b: Vec2): { point: Vec2; t: number; distance: number } {
-  const dx = b[0] - a[0];
-  const dy = b[1] - a[1];
-  const len2 = dx * dx + dy * dy;
-  const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / len2));
-  const point: Vec2 = [a[0] + t * dx, a[1] + t * dy];
-  return { point, t, distance: Math.hypot(p[0] - point[0], p[1] - point[1]) };
-}
 
-export interface EdgeHit {
-  edge: number;
-  point: Vec2;
-  distance: number;
-}
-
-/** The nearest point on a closed polygon's boundary. */
-export function nearestOnOutline(p: Vec2, poly: Vec2[]): EdgeHit {
-  let best: EdgeHit = { edge: -1, point: p, distance: Infinity };
-  for (let i = 0; i < poly.length; i++) {
-    const h = nearestOnSegment(p, poly[i], poly[(i + 1) % poly.length]);
-    if (h.distance < best.distance) best = { edge: i, point: h.point, distance: h.distance };
-  }
-  return best;
-}
 
 /** Outward unit normal of edge i (whichever way the corners run). */
 export function outwardNormal(poly: Vec2[], edge: number): Vec2 {

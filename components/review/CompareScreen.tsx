@@ -10,6 +10,7 @@ import { Crumb, Notice, Panel, Segmented, Select, Skeleton } from "@/components/
 import { discardDraft, readDraft } from "@/components/versions/editor/drafts";
 import { draftOnNewest } from "@/components/versions/editor/restoreDraft";
 import { useVersions } from "@/components/versions/VersionHistory";
+import { setAddressParam } from "@/lib/address";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { changeCount, compareSketches } from "@/lib/review/compare";
 import { CAUTION_SHORT } from "@/solver/cautions";
@@ -72,10 +73,7 @@ export function CompareScreen({
   // the address keeps the choice, so a reload or a link sent to a colleague shows the same drawings
   const setLayout = (l: "side" | "overlay") => {
     setLayoutState(l);
-    const url = new URL(window.location.href);
-    if (l === "overlay") url.searchParams.set("drawings", "overlay");
-    else url.searchParams.delete("drawings");
-    window.history.replaceState(window.history.state, "", url);
+    setAddressParam("drawings", l === "overlay" ? "overlay" : null);
   };
   const comparison = useMemo(() => (a.doc && b.doc ? compareSketches(a.doc, b.doc, units) : null), [a.doc, b.doc, units]);
   const base = `/workspaces/${workspaceId}/sketches/${sketchId}`;

@@ -2,6 +2,7 @@
 import { useInfiniteQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button, EmptyState, Notice, Skeleton } from "@/components/shell/controls";
+import { setAddressParam } from "@/lib/address";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { auditSentence, type AuditEntry } from "./auditSentence";
 import { formatDateTime } from "./format";
@@ -37,10 +38,7 @@ export function AuditLog({ workspaceId, showSignIns = true }: { workspaceId: str
   const [signIns, setSignIns] = useState(showSignIns);
   const choose = (show: boolean) => {
     setSignIns(show);
-    const url = new URL(window.location.href);
-    if (show) url.searchParams.delete("signIns");
-    else url.searchParams.set("signIns", "hide");
-    window.history.replaceState(window.history.state, "", url);
+    setAddressParam("signIns", show ? null : "hide");
   };
   const q = useInfiniteQuery({
     queryKey: [...apiKey(path), signIns],

@@ -4,6 +4,7 @@
 import { plainText } from "@/lib/review/comment-text";
 import { pinWords, type PinLike } from "@/lib/review/pin-words";
 import { STEP_RECORD, type SignOffStep } from "@/lib/review/rules";
+import { threadsOf } from "@/lib/review/threads";
 
 export interface RecordStep {
   step: SignOffStep;
@@ -56,12 +57,9 @@ const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one :
 /** Sign-off steps in order, and threads numbered as on the review screen (oldest first). */
 export function checkRecord(input: CheckRecordInput, labels: Record<string, string>): CheckRecord {
   const steps = input.steps.map((s) => `${stamp(s.at)} · ${s.actorName} ${STEP_RECORD[s.step]}${s.note.trim() ? `: “${s.note.trim()}”` : ""}`);
-  const firsts = input.comments.filter((c) => c.parentId === null);
   const threads: RecordThread[] = [];
-  for (const first of firsts) {
-    const all = [first, ...input.comments.filter((c) => c.parentId === first.id)];
-    // a deleted first comment with no replies left is gone for good, as on the screen
-    if (all.length === 1 && first.deletedAt) continue;
+  // numbered as on the review screen
+  for (const { first, all } of threadsOf(input.comments)) {
     const open = first.resolvedAt === null;
     const state = open ? "open" : `resolved by ${first.resolvedByName ?? "a deleted account"}, ${stamp(first.resolvedAt!)}`;
     const on = pinWords(first.pin, labels);

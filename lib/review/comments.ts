@@ -12,6 +12,7 @@ import { AppError } from "../errors";
 import { sendMailInBackground } from "../mail";
 import { can } from "../roles";
 import { mentionedIds } from "./comment-text";
+import { threadsOf } from "./threads";
 import { mentionMail } from "./mail";
 import { versionUrl } from "./signoff";
 import { deleteObjectsQuietly } from "../uploads/objects";
@@ -46,11 +47,7 @@ export async function readComments(sketchId: string, number: number, viewerId: s
     mentions: r.mentions.filter((id) => names.has(id)).map((id) => ({ id, name: names.get(id)! })),
     attachments: r.deletedAt ? [] : (files.get(r.id) ?? []),
   });
-  const threads: Thread[] = rows
-    .filter((r) => r.parentId === null)
-    .map((r) => ({ id: r.id, pin: r.pin, resolvedAt: r.resolvedAt, resolvedByName: r.resolvedByName, comments: [view(r), ...rows.filter((x) => x.parentId === r.id).map(view)] }))
-    // a deleted first comment with no replies left is gone for good
-    .filter((t) => !(t.comments.length === 1 && t.comments[0].deleted));
+  const threads: Thread[] = threadsOf(rows).map(({ first: r, all }) => ({ id: r.id, pin: r.pin, resolvedAt: r.resolvedAt, resolvedByName: r.resolvedByName, comments: all.map(view) }));
   return {
     threads,
     /** open threads left on earlier versions that are not approved: a question asked of v1 is still open on v2 */

@@ -4,7 +4,7 @@ import "server-only";
 // versions whose approval was withdrawn) that nothing newer has replaced yet. One table decides (the sign-off rules), as for the buttons.
 import { listVersionsInReview } from "@/db/queries/review";
 import type { Role } from "@/lib/roles";
-import { allowedSteps, type ReviewState } from "./rules";
+import { allowedSteps, newerThan, type ReviewState } from "./rules";
 
 export type QueueAction = "check" | "approve" | "revise";
 export type QueueItem = { sketchId: string; sketchTitle: string; number: number; state: ReviewState; authorName: string | null; since: string; action: QueueAction };
@@ -14,7 +14,7 @@ export async function reviewQueueFor(workspaceId: string, userId: string, role: 
   const out: QueueItem[] = [];
   for (const r of rows) {
     const isAuthor = r.authorId === userId;
-    const steps = allowedSteps({ role, isAuthor, isChecker: r.checkedBy === userId, state: r.state, newer: r.latestVersion > r.number ? r.latestVersion : null });
+    const steps = allowedSteps({ role, isAuthor, isChecker: r.checkedBy === userId, state: r.state, newer: newerThan(r) });
     let action: QueueAction | null = null;
     if (r.state === "submitted" && steps.includes("check")) action = "check";
     else if (r.state === "checked" && steps.includes("approve")) action = "approve";

@@ -129,6 +129,10 @@ export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
   },
 };
 
+/** The sketch's latest version number when it is newer than this version (null for the latest):
+ *  what `SignOffInput.newer` takes. */
+export const newerThan = (v: { number: number; latestVersion: number }): number | null => (v.latestVersion > v.number ? v.latestVersion : null);
+
 export type SignOffInput = {
   step: SignOffStep;
   role: Role;

@@ -9,7 +9,7 @@ import { AppError } from "../errors";
 import { sendMailInBackground } from "../mail";
 import { can } from "../roles";
 import { signOffMail } from "./mail";
-import { allowedSteps, decideSignOff, SIGN_OFF_RULES, STATE_WORDS, type SignOffStep } from "./rules";
+import { allowedSteps, decideSignOff, newerThan, SIGN_OFF_RULES, STATE_WORDS, type SignOffStep } from "./rules";
 
 type Actor = { id: string; email: string; name: string };
 
@@ -18,9 +18,6 @@ const NO_VERSION = "No such version, or you are not a member of its workspace.";
 export function versionUrl(workspaceId: string, sketchId: string, number: number): string {
   return `${appUrl()}/workspaces/${workspaceId}/sketches/${sketchId}/versions/${number}`;
 }
-
-/** The sketch's latest version number when it is newer than this version (null for the latest). */
-const newerThan = (access: { number: number; latestVersion: number }) => (access.latestVersion > access.number ? access.latestVersion : null);
 
 /** The version's sign-off as its reader sees it: state, record, title block, and the steps open to them. */
 export async function readSignOff(sketchId: string, number: number, viewerId: string) {
@@ -31,15 +28,16 @@ export async function readSignOff(sketchId: string, number: number, viewerId: st
   const authorName = contacts[0]?.name ?? "a deleted account";
   const isAuthor = access.authorId === viewerId;
   const isChecker = access.checkedBy === viewerId;
+  const newer = newerThan(access);
   return {
     state: access.reviewState,
     sentence: STATE_WORDS[access.reviewState].sentence,
     entries,
     titleBlock: titleBlockOf({ name: authorName, date: access.createdAt }, entries),
     you: { role: access.role, isAuthor, isChecker },
-    allowed: allowedSteps({ role: access.role, isAuthor, isChecker, state: access.reviewState, newer: newerThan(access) }),
+    allowed: allowedSteps({ role: access.role, isAuthor, isChecker, state: access.reviewState, newer }),
     /** the sketch's latest version, when it is newer than this one */
-    newer: newerThan(access),
+    newer,
   };
 }
 export type SignOffRead = Awaited<ReturnType<typeof readSignOff>>;

@@ -9,6 +9,7 @@ import { addComment, resolveThread } from "@/lib/review/comments";
 import { takeSignOffStep } from "@/lib/review/signoff";
 import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { fixture as sketchFile } from "./sketch-fixtures";
+import { pdfText } from "../support/pdf-text";
 
 describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
   let owner: Person;
@@ -52,11 +53,7 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
       { params: Promise.resolve({ id: sketchId, number: "1" }) },
     );
     expect(res.status).toBe(200);
-    const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
-    const doc = await pdfjs.getDocument({ data: new Uint8Array(await res.arrayBuffer()), useSystemFonts: false, isEvalSupported: false }).promise;
-    let text = "";
-    for (let i = 1; i <= doc.numPages; i++) text += (await (await doc.getPage(i)).getTextContent()).items.map((it) => ("str" in it ? it.str : "")).join(" ") + " ";
-    text = text.replace(/\s+/g, " ");
+    const { text } = await pdfText(await res.arrayBuffer());
     expect(text).toContain("2 comment threads on this version: 1 open, 1 resolved.");
     expect(text).toMatch(/UTC · Calc-owner Tester submitted it for checking: “Ready for checking”/);
     // the pin names the element by its label in the saved file

@@ -7,6 +7,7 @@ import { describe, expect, it } from "vitest";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
 import { checkRecord, type CheckRecordInput } from "@/lib/calcsheet/record";
 import { loadFixture } from "../solver/helpers";
+import { pdfText } from "../../support/pdf-text";
 
 const at = (s: string) => new Date(`${s}Z`);
 const comment = (c: Partial<CheckRecordInput["comments"][number]> & { id: string; body: string; createdAt: Date }) => ({
@@ -82,11 +83,7 @@ describe("the check record", () => {
       record,
     });
     if (process.env.KEEP_PDF) writeFileSync(process.env.KEEP_PDF, buf);
-    const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
-    const doc = await pdfjs.getDocument({ data: new Uint8Array(buf), useSystemFonts: false, isEvalSupported: false }).promise;
-    let text = "";
-    for (let i = 1; i <= doc.numPages; i++) text += (await (await doc.getPage(i)).getTextContent()).items.map((it) => ("str" in it ? it.str : "")).join(" ") + " ";
-    text = text.replace(/\s+/g, " ");
+    const { text } = await pdfText(buf);
     expect(text).toContain("Check record");
     // a sheet of an earlier version says so under its title block
     expect(text).toContain("Superseded: v4 is the latest version of this sketch.");

@@ -10,18 +10,7 @@ import { parseSketch, solveCases } from "@/solver";
 import { caseReactionTable, designLoadTable, envelopeTable, stabilityTable, type Table } from "@/solver/report";
 import { loadFixture } from "../solver/helpers";
 import { longLabelFileWithStudies } from "./long-labels";
-
-async function pdfText(buf: Buffer): Promise<{ text: string; pages: number }> {
-  const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
-  const doc = await pdfjs.getDocument({ data: new Uint8Array(buf), useSystemFonts: false, isEvalSupported: false }).promise;
-  let text = "";
-  for (let i = 1; i <= doc.numPages; i++) {
-    const page = await doc.getPage(i);
-    const content = await page.getTextContent();
-    text += content.items.map((it) => ("str" in it ? it.str : "")).join(" ") + "\n";
-  }
-  return { text: text.replace(/\s+/g, " "), pages: doc.numPages };
-}
+import { pdfText } from "../../support/pdf-text";
 
 interface PageItem {
   str: string;
