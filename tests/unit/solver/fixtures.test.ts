@@ -1,9 +1,11 @@
 // Our worked examples (invented scenarios, tests/fixtures/sketches), each against a hand calculation
 // written out here. Together they cover every status and every warning code.
+import { readdirSync, readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { solveFile, type SolveResult } from "@/solver";
+import { portDirectionNotes } from "@/solver/ports";
 import { G0 } from "@/solver/constants";
-import { expectRel, loadFixture } from "./helpers";
+import { expectRel, loadFixture, parsed } from "./helpers";
 
 const DEG = Math.PI / 180;
 const run = (name: string): SolveResult => {
@@ -363,5 +365,17 @@ describe("the hand-check sums", () => {
     expect(describeSupport({ kind: "contact", id: "rear", label: "rearward pad" })).toBe("Contact rear (rearward pad)");
     expect(describeSupport({ kind: "tie", id: "g1", label: "" })).toBe("Tie g1");
     expect(run("skid-vertical-mechanism.json").warnings[0].message).toBe("Skid: nothing resists motion in x, but the loads do not push that way");
+  });
+});
+
+describe("every worked example and demo draws its ports where the fluid crosses", () => {
+  it("no port of a fixture or an editor example is off its body's outline or drawn against its kind", () => {
+    const dirs = ["tests/fixtures/sketches", "canvas/examples"];
+    const notes = dirs.flatMap((dir) =>
+      readdirSync(dir)
+        .filter((f) => f.endsWith(".json") && !f.startsWith("bad-"))
+        .flatMap((f) => portDirectionNotes(parsed(JSON.parse(readFileSync(`${dir}/${f}`, "utf8")))).map((n) => `${dir}/${f}: ${n.message}`)),
+    );
+    expect(notes).toEqual([]);
   });
 });
