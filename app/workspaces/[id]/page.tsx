@@ -24,8 +24,11 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
         <div>
           <p className="text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint">{ws.personal ? "Personal workspace" : "Workspace"}</p>
           <h1 className="mt-1 text-2xl font-semibold tracking-tight">{ws.name}</h1>
-          <p className="mt-1.5 flex items-center gap-2 text-sm text-ink-soft">
-            You are <RoleBadge role={role} /> <span>{ROLE_INFO[role].summary}</span>
+          <p className="mt-1.5 flex flex-wrap items-center gap-x-2 gap-y-1 text-sm text-ink-soft">
+            <span className="inline-flex items-center gap-2 whitespace-nowrap">
+              You are <RoleBadge role={role} />
+            </span>
+            <span>{ROLE_INFO[role].summary}</span>
           </p>
         </div>
         {can(role, "sketch.create") ? (
