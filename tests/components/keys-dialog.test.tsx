@@ -5,17 +5,10 @@ import userEvent from "@testing-library/user-event";
 import { beforeAll, describe, expect, it } from "vitest";
 import { ACTIONS, shortcutLabel } from "@/canvas/actions";
 import { GESTURES } from "@/components/editor/KeysDialog";
+import { withModalDialogs } from "./dialog-support";
 import { beam, renderEditor } from "./editor-helpers";
 
-beforeAll(() => {
-  // jsdom has <dialog> but not its modal methods: opening and closing set the attribute
-  HTMLDialogElement.prototype.showModal = function (this: HTMLDialogElement) {
-    this.setAttribute("open", "");
-  };
-  HTMLDialogElement.prototype.close = function (this: HTMLDialogElement) {
-    this.removeAttribute("open");
-  };
-});
+beforeAll(withModalDialogs);
 
 describe("keys and gestures", () => {
   it("? lists every shortcut of every registered action, with its key, and the pointer gestures", async () => {
