@@ -112,7 +112,7 @@ export const DEMO_SKETCHES: DemoSketch[] = [
         message: "Lowered the jet from 1.5 m to 0.6 m: the rear pad bears again",
         edit: (d) => (d.ports[0].at = [0, 0.6]),
         notes:
-          "A 200 kg stand pinned to the floor at its front edge and resting on a rear pad. The test jet, lowered from 1.5 m to 0.6 m, pushes it forward; its thrust is now below W·d/h, so the rear pad bears instead of having to pull.",
+          "A 200 kg stand pinned to the floor at its front edge and resting on a rear pad. The test jet, lowered from 1.5 m to 0.6 m, pushes it forward; its thrust is now below W·d/h, so the rear pad bears instead of having to pull. Against overturning about the front pin the factor is only 1.19, under the 1.5 asked for.",
       },
       {
         by: "eddie",
@@ -123,7 +123,7 @@ export const DEMO_SKETCHES: DemoSketch[] = [
           d.gravityAngle = "-90 deg + slope";
         },
         notes:
-          "A 200 kg stand pinned to the floor at its front edge and resting on a rear pad, the test jet at 0.6 m. The test pad's floor falls 3° toward the front pin, drawn as gravity turned by the slope: the rear pad still bears; it would unload at 9.5°.",
+          "A 200 kg stand pinned to the floor at its front edge and resting on a rear pad, the test jet at 0.6 m. The test pad's floor falls 3° toward the front pin, drawn as gravity turned by the slope: the rear pad still bears; it would unload at 9.5°. Against overturning about the front pin the factor is 1.13, under the 1.5 asked for: ballast the stand or hold the rear pad down before the test.",
       },
     ],
   },

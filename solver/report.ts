@@ -401,7 +401,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
     ],
     rows,
     notes: [
-      "Overturning: factor = restoring over overturning moment of the applied loads about the contact the body would tip about, each load resolved across and along that contact's base (a weight on a slope restores by W·cos θ and overturns by W·sin θ).",
+      "Overturning: factor = restoring over overturning moment of the applied loads about the support the body would tip about (a contact, or a pin or roller once the contacts lift off), each load resolved across and along the base it stands on (a weight on a slope restores by W·cos θ and overturns by W·sin θ), each component of a load counted apart.",
       "Sliding: factor = friction the bearing contacts can give (Σ μ·n) over the tangential force they must resist (|Σ t|). A body that tips is taken as a whole: μ·Σn over |Σt| of all its contacts (μ·W over the sliding force on level ground), when they share one base and one μ.",
     ],
   };

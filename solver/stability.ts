@@ -1,10 +1,11 @@
 // Factors of safety per body (common practice):
 //  - against overturning: the restoring over the overturning moment of the applied loads about
-//    the contact the body would tip about, each load resolved across and along that contact's
-//    base (so a weight on a slope restores by W·cos θ and overturns by W·sin θ, and an inclined
-//    jet's two components count apart) (each contact and each sense of turning is tried; a
-//    mode counts only if every other support lets it happen: other contacts open, nothing
-//    bilateral or pulling holds it), the smallest ratio governs;
+//    the support the body would tip about (a contact, or a pin or roller once the other
+//    contacts lift), each load resolved across and along the base it stands on (so a weight on
+//    a slope restores by W·cos θ and overturns by W·sin θ, and an inclined jet's two components
+//    count apart) (each such support and each sense of turning is tried; a mode counts only if
+//    every other support lets it happen: other contacts open, nothing bilateral or pulling
+//    holds it), the smallest ratio governs;
 //  - against sliding: the friction the bearing contacts can give, Σ μ·n, over the tangential
 //    force they must resist, |Σ t|. Only for bodies held by contacts and ties alone. A body that
 //    tips has no reactions of its own (the ones shown would need a contact to pull), so it is
@@ -17,7 +18,7 @@ import type { BodyResult, ContactSupport, Reaction, Vec2 } from "./types";
 
 export interface OverturningCheck {
   factor: number;
-  /** the contact it would tip about */
+  /** the support it would tip about: a contact, or a pin or roller once the contacts lift */
   about: string;
   pivot: Vec2;
   /** turning sense: +1 counter-clockwise, −1 clockwise */
@@ -55,20 +56,24 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
   const { supports, springs, groups, origin, L } = model;
   const contacts = groups.filter((g) => g.kind === "contact");
   if (contacts.length === 0) return { notApplicable: "no contacts to tip about" };
+  // the pivots: each contact, and each pin or roller (a stand pinned at one edge tips about the
+  // pin once its other contacts open: the pin holds it in place, not upright)
+  const pivots = supports.map((s, si) => ({ s, si })).filter(({ s, si }) => s.kind === "pin" || s.kind === "roller" || contacts.some((g) => g.support === si));
   let best: OverturningCheck | null = null;
   let blockedBy = "";
   let free = false;
-  for (const g of contacts) {
-    const s = supports[g.support];
+  for (const { s, si } of pivots) {
     const P = s.at;
     for (const sense of [1, -1] as const) {
       // rotation about P: displacement of the reference point and scaled turn
       const d = [sense * (P[1] - origin[1]), sense * (origin[0] - P[0]), sense * L];
       let valid = true;
       const eps = 1e-9 * L;
+      /** the contacts this turn lifts off their bases */
+      const opening: ContactSupport[] = [];
       for (let i = 0; i < springs.length; i++) {
         const sp = springs[i];
-        if (sp.support === g.support) continue;
+        if (sp.support === si) continue;
         const v = dot3(sp.g, d);
         const grp = sp.group >= 0 ? groups[sp.group] : null;
         // another contact or tie must open (or stay); a bilateral support must not move at all;
@@ -79,16 +84,21 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
           blockedBy = supports[sp.support].id;
           break;
         }
+        if (grp?.kind === "contact" && grp.normal === i && v > eps) opening.push(supports[sp.support] as ContactSupport);
       }
-      if (!valid) continue;
+      // about a pin or a roller the body tips only by lifting a contact off (with nothing to
+      // lift, it would turn freely: unrestrained, not a tipping mode)
+      if (!valid || (s.kind !== "contact" && opening.length === 0)) continue;
       free = true;
       let restoring = 0;
       let overturning = 0;
       const add = (work: number) => (work > 0 ? (overturning += work) : (restoring -= work));
       // each force counts by its components across and along the base the body stands on (the
-      // contact's normal and tangent), as an inclined thrust or a weight on a slope is resolved
-      // by hand: the part pressing the body down restores, the part pushing it over overturns
-      const n = direction((s as ContactSupport).angle); // the pivots are contacts
+      // contact's normal and tangent; about a pin or a roller, the base of the contacts it lifts,
+      // or the sketch's axes when those lean different ways), as an inclined thrust or a weight
+      // on a slope is resolved by hand: the part pressing the body down restores, the part
+      // pushing it over overturns
+      const n = baseNormal(s.kind === "contact" ? [s] : opening);
       const tan: Vec2 = [-n[1], n[0]];
       const resolved = (t: { fx: number; fy: number; at?: Vec2 }, sign: number) => {
         if (!t.at) return;
@@ -113,9 +123,19 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
     }
   }
   if (best) return best;
-  // a body free to tip about some contact, with no load tending to: say that, not which support
+  // a body free to tip about some support, with no load tending to: say that, not which support
   // blocks the other ways it could turn
   return { notApplicable: blockedBy && !free ? `tipping is prevented by support ${blockedBy}` : "no load tends to tip it" };
+}
+
+/** The normal of the base the contacts stand on: theirs when they agree, else the sketch's +y. */
+function baseNormal(on: readonly ContactSupport[]): Vec2 {
+  const n = direction(on[0].angle);
+  const agree = on.every((c) => {
+    const m = direction(c.angle);
+    return Math.abs(m[0] - n[0]) < 1e-9 && Math.abs(m[1] - n[1]) < 1e-9;
+  });
+  return agree ? n : [0, 1];
 }
 
 export function slidingCheck(model: BodyModel, reactions: Record<string, Reaction>, required: number, status?: BodyResult["status"]): BodyStability["sliding"] {

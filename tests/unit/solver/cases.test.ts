@@ -190,10 +190,48 @@ describe("stability factors (common practice)", () => {
     expectRel(ot.overturning, F * Math.cos(alpha) * h, 1e-9);
   });
 
-  it("a pinned body cannot tip or slide on its contacts: the checks say why", () => {
+  it("a body pinned at one edge cannot slide, but tips about the pin once its pad lifts: W·d over T·h", () => {
+    // The stand (tests/fixtures/sketches/thrust-stand-tips.json): 200 kg, cg 0.8 m behind the front
+    // pin, jet thrust T = 2.2 kN at h = 1.5 m. Turning clockwise about the pin lifts the rear pad;
+    // the weight restores W·0.8, the thrust overturns T·1.5 (common practice, as for a block on
+    // its toe). The pin holds the stand in place, not upright.
+    const W = 200 * G0;
     const run = solveCases(fileOf(loadFixture("thrust-stand-tips.json"))).runs[0];
     if (!run.ok) throw new Error();
     expect(run.stability.stand.sliding).toEqual({ notApplicable: "sliding is resisted by pin front" });
+    const ot = run.stability.stand.overturning;
+    if ("notApplicable" in ot) throw new Error(ot.notApplicable);
+    expect([ot.about, ot.sense, ot.pivot]).toEqual(["front", -1, [1.6, 0]]);
+    expectRel(ot.restoring, W * 0.8, 1e-9);
+    expectRel(ot.overturning, 2200 * 1.5, 1e-9);
+    expect(ot.pass).toBe(false);
+  });
+
+  it("…and on a slope, about the pin, resolves the weight across and along the pad's base", () => {
+    // The same stand with the jet at 0.6 m and gravity turned 3° toward the pin: W·cos 3°·0.8
+    // restores, T·0.6 + W·sin 3°·0.7 (the cg 0.7 m above the base) overturns.
+    const file = loadFixture("thrust-stand-tips.json");
+    file.ports![0].at = [0, 0.6];
+    file.parameters!.slope = "3 deg";
+    file.gravityAngle = "-90 deg + slope";
+    const run = solveCases(fileOf(file)).runs[0];
+    if (!run.ok) throw new Error();
+    const ot = run.stability.stand.overturning;
+    if ("notApplicable" in ot) throw new Error(ot.notApplicable);
+    const W = 200 * G0;
+    const a = 3 * (Math.PI / 180);
+    expect(ot.about).toBe("front");
+    expectRel(ot.restoring, W * Math.cos(a) * 0.8, 1e-9);
+    expectRel(ot.overturning, 2200 * 0.6 + W * Math.sin(a) * 0.7, 1e-9);
+    expectRel(ot.factor, 1.126, 1e-3);
+  });
+
+  it("a body held by a pin and a roller does not tip: the roller holds it down too", () => {
+    const file = loadFixture("thrust-stand-tips.json");
+    file.supports![1] = { id: "rear", label: "rear roller", body: "stand", kind: "roller", at: [0, 0], angle: 90 };
+    file.supports!.push({ id: "pad", body: "stand", kind: "contact", at: [0.8, 0], angle: 90 });
+    const run = solveCases(fileOf(file)).runs[0];
+    if (!run.ok) throw new Error();
     expect(run.stability.stand.overturning).toEqual({ notApplicable: "tipping is prevented by support front" });
   });
 
