@@ -6,7 +6,7 @@ import { z } from "zod";
 export const STATUS_ORDER = ["holds", "lifts", "tips", "unrestrained"] as const;
 export type SketchStatus = (typeof STATUS_ORDER)[number];
 /** What the listing filters by: a status, or "slips" (a friction contact or the body over its μ, a warning beside any status). */
-export const STATUS_FILTERS = [...STATUS_ORDER, "slips"] as const;
+export const STATUS_FILTERS = ["holds", "slips", "lifts", "tips", "unrestrained"] as const satisfies ReadonlyArray<SketchStatus | "slips">;
 
 export const sketchTitleSchema = z
   .string({ error: "Give the sketch a title." })
@@ -52,7 +52,7 @@ export type SketchSort = (typeof SKETCH_SORTS)[number];
 export const listSketchesQuery = z.object({
   q: z.string().trim().max(100, "Search for at most 100 characters.").optional(),
   tag: tagSchema.optional(),
-  status: z.enum(STATUS_FILTERS, { error: "Status is holds, lifts, tips, unrestrained or slips." }).optional(),
+  status: z.enum(STATUS_FILTERS, { error: "Status is holds, slips, lifts, tips or unrestrained." }).optional(),
   sort: z.enum(SKETCH_SORTS, { error: "Sort by updated, title, status or created." }).optional(),
   dir: z.enum(["asc", "desc"], { error: "Direction is asc or desc." }).optional(),
   page: z.coerce.number().int().min(1, "Pages start at 1.").max(100_000).optional(),

@@ -53,12 +53,37 @@ export function LowFactorChip({ low }: { low: LowFactorMark }) {
   );
 }
 
+/** The mark of a body that bears on its contacts but needs more friction than they give. */
+function SlipGlyph() {
+  return (
+    <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true" className="shrink-0">
+      <path d="M1 13.5h14" stroke="currentColor" strokeWidth="1.2" />
+      <rect x="2" y="6" width="8" height="7.5" fill="none" stroke="currentColor" strokeWidth="1.4" />
+      <path d="M11 9.5h4M13.5 8l1.5 1.5-1.5 1.5" fill="none" stroke="currentColor" strokeWidth="1.2" />
+    </svg>
+  );
+}
+
+const SLIP_TITLE = "Slips: more friction is needed than the contacts give, so the body would slide.";
+
+/**
+ * The latest version's status. A body that holds but needs more friction than its contacts give
+ * reads "slips" alone (as the results panel says it), never "holds"; with another status the slip
+ * is said before it ("slips · lifts").
+ */
 export function StatusMark({ status, warnings = [] }: { status: SketchStatus | null; warnings?: string[] }) {
   if (!status) return <span className="text-ink-faint" title="No body to solve, or the solve did not finish">—</span>;
   const w = WORDS[status];
   const slips = warnings.includes("SLIP");
+  if (slips && status === "holds")
+    return (
+      <span className="inline-flex items-center gap-1.5 whitespace-nowrap font-medium text-caution" title={`${SLIP_TITLE} Every contact bears.`} data-status="slips">
+        <SlipGlyph />
+        slips
+      </span>
+    );
   return (
-    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap font-medium ${w.tone}`} title={slips ? `Slips: more friction is needed than the contacts give. ${w.title}` : w.title} data-status={status}>
+    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap font-medium ${w.tone}`} title={slips ? `${SLIP_TITLE} ${w.title}` : w.title} data-status={status}>
       <Glyph status={status} />
       {slips ? <span className="text-caution">slips ·</span> : null}
       {w.word}

@@ -44,7 +44,7 @@ function containing(text: string): string {
 }
 
 /** Worst last: a body that holds but slips at a friction contact ranks between holds and lifts,
- *  as the list shows it ("slips · holds") and filters it. */
+ *  as the list shows it ("slips") and filters it (under "slips", not under "holds"). */
 const STATUS_RANK = sql`case when ${latest.status} = 'holds' and jsonb_exists(${latest.summary} -> 'warnings', 'SLIP') then 2 else array_position(array['holds','slips','lifts','tips','unrestrained']::text[], ${latest.status}) end`;
 
 export type SketchListItem = {
@@ -83,7 +83,13 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       ? or(ilike(sketch.title, containing(q.q)), ilike(sketch.description, containing(q.q)), sql`exists (select 1 from unnest(${sketch.tags}) t where t ilike ${containing(q.q)})`)
       : undefined,
     q.tag ? sql`${sketch.tags} @> array[${q.tag}]::text[]` : undefined,
-    q.status === "slips" ? sql`jsonb_exists(${latest.summary} -> 'warnings', 'SLIP')` : q.status ? eq(latest.status, q.status) : undefined,
+    q.status === "slips"
+      ? sql`jsonb_exists(${latest.summary} -> 'warnings', 'SLIP')`
+      : q.status === "holds"
+        ? sql`${latest.status} = 'holds' and not jsonb_exists(${latest.summary} -> 'warnings', 'SLIP')`
+        : q.status
+          ? eq(latest.status, q.status)
+          : undefined,
   );
   const dir = q.dir ?? (q.sort === "title" ? "asc" : q.sort === "status" ? "desc" : "desc");
   const by = (c: SQL | typeof sketch.title) => (dir === "asc" ? sql`${c} asc nulls last` : sql`${c} desc nulls last`);

@@ -216,6 +216,9 @@ describe("listing", () => {
     for (const [title, name] of [["Skid that slips", "pump-skid-slip"], ["Anchor that holds", "pipe-bend-anchor"]]) expect((await create({ title, document: fixture(name) }, eddie, slipWs)).status).toBe(201);
     const res = await call(sketchesRoute.GET, { params: { id: slipWs }, cookie: eddie.cookie, path: `/api/workspaces/${slipWs}/sketches?status=slips` });
     expect(titles(res.body)).toEqual(["Skid that slips"]);
+    // …and one that slips is not among those that hold, though every contact bears
+    const holds = await call(sketchesRoute.GET, { params: { id: slipWs }, cookie: eddie.cookie, path: `/api/workspaces/${slipWs}/sketches?status=holds` });
+    expect(titles(holds.body)).toEqual(["Anchor that holds"]);
     // sorted by status it ranks between holds and lifts, whichever was saved last
     expect((await create({ title: "Stand that tips", document: fixture("thrust-stand-tips") }, eddie, slipWs)).status).toBe(201);
     const sorted = async (dir: string) =>

@@ -6,6 +6,7 @@ import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { formatForce, formatForceCell } from "@/components/sketches/format";
 import { filtersFromSearch, searchOfFilters, SketchesTable, type SketchRow } from "@/components/sketches/SketchesTable";
+import { StatusMark } from "@/components/sketches/StatusMark";
 import { VersionHistory, type VersionItem } from "@/components/versions/VersionHistory";
 
 function answer(body: unknown) {
@@ -143,5 +144,18 @@ describe("largest reaction in the listings", () => {
     expect(largestCell(v2)).toBe("11.50 kN");
     expect(within(v2).getByTestId("version-row-summary").textContent).toContain("largest 11.50 kN");
     expect(largestCell(screen.getByTestId("version-row-1"))).toBe("14.28 kN");
+  });
+});
+
+describe("the status mark of a body that needs more friction than its contacts give", () => {
+  it("reads 'slips' alone when every contact bears (never 'holds'), and 'slips · lifts' beside another status", () => {
+    const { container, rerender } = render(<StatusMark status="holds" warnings={["SLIP"]} />);
+    const mark = container.querySelector("[data-status]")!;
+    expect([mark.getAttribute("data-status"), mark.textContent]).toEqual(["slips", "slips"]);
+    expect(mark.getAttribute("title")).toMatch(/^Slips: more friction is needed than the contacts give/);
+    rerender(<StatusMark status="lifts" warnings={["SLIP"]} />);
+    expect(container.querySelector("[data-status]")!.textContent).toBe("slips ·lifts");
+    rerender(<StatusMark status="holds" warnings={[]} />);
+    expect(container.querySelector("[data-status]")!.textContent).toBe("holds");
   });
 });
