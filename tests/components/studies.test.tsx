@@ -320,6 +320,14 @@ describe("Sweep tab", () => {
     expect(screen.getByRole("textbox", { name: "From" })).toHaveValue("-75");
     expect(screen.getByRole("textbox", { name: "To" })).toHaveValue("105");
     await setUpSweep(user, "theta", ["0", "80", "81"]);
+    // the friction margins of the contacts with friction are plotted unless unticked: the
+    // trailer slides long before its jack lifts, and "when does it start to move?" needs both
+    const friction = screen.getAllByRole("checkbox", { name: /: friction margin$/ });
+    expect(friction.map((c) => [c.closest("label")?.textContent, (c as HTMLInputElement).checked])).toEqual([
+      ["rear stabiliser leg: friction margin", true],
+      ["wheel: friction margin", true],
+      ["front jack: friction margin", true],
+    ]);
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     const crossings = await screen.findByTestId("crossings");
     expect(crossings.textContent).toMatch(/margin at front jack crosses zero between theta = 18 and 19 deg/);
