@@ -372,7 +372,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
   const figures = (s: { restoring?: number; overturning?: number; available?: number; driving?: number } | { notApplicable: string }) =>
     "notApplicable" in s ? [] : [s.restoring, s.overturning, s.available, s.driving];
   const u = tableUnits(system, checks.flatMap((c) => figures(c.sliding)), checks.flatMap((c) => figures(c.overturning)));
-  const verdict = (s: { factor: number; required: number; pass: boolean }) => [Number.isFinite(s.factor) ? Number(s.factor.toFixed(3)) : "∞", s.required, s.pass ? "pass" : "FAIL"];
+  const verdict = (s: { factor: number; required: number; pass: boolean }) => [Number.isFinite(s.factor) ? Number(s.factor.toPrecision(4)) : "∞", s.required, s.pass ? "pass" : "FAIL"];
   for (const run of study.runs as CaseRun[]) {
     if (!run.ok) continue;
     for (const [body, st] of Object.entries(run.stability)) {
