@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from "drizzle-orm/pg-core";
+import { check, doublePrecision, index, integer, json, jsonb, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from "drizzle-orm/pg-core";
 import type { SketchFile } from "@/solver/schema";
 import { user } from "./auth";
 import { reviewState } from "./review-enums";
@@ -69,7 +69,10 @@ export const sketchVersion = pgTable(
       .references(() => sketch.id, { onDelete: "cascade" }),
     number: integer("number").notNull(),
     message: text("message").notNull().default(""),
-    document: jsonb("document").$type<SketchFile>().notNull(),
+    /** json, not jsonb: the text is kept as saved, so object keys (the user's order of the
+     *  parameters and of a case's overrides) come back in the order they were saved in. json has
+     *  no equality operator: compare documents as ::text (or ::jsonb when order must not count). */
+    document: json("document").$type<SketchFile>().notNull(),
     formatVersion: integer("format_version").notNull(),
     status: text("status").$type<SolveSummary["status"]>(),
     largestReaction: doublePrecision("largest_reaction"),
