@@ -6,6 +6,7 @@ import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
+import { withResizeObserver } from "./dialog-support";
 
 vi.mock("next/navigation", () => ({ useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }) }));
 const { CompareScreen } = await import("@/components/review/CompareScreen");
@@ -14,12 +15,7 @@ const trailer = JSON.parse(readFileSync("canvas/examples/fire-monitor-trailer.js
 const heavier = { ...trailer, bodies: [{ ...trailer.bodies[0], mass: "1250 kg" }] };
 
 beforeAll(() => {
-  if (typeof globalThis.ResizeObserver === "undefined")
-    globalThis.ResizeObserver = class {
-      observe() {}
-      unobserve() {}
-      disconnect() {}
-    } as unknown as typeof ResizeObserver;
+  withResizeObserver();
 });
 afterEach(() => {
   vi.unstubAllGlobals();

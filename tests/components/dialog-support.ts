@@ -7,3 +7,13 @@ export function withModalDialogs(): void {
     this.removeAttribute("open");
   };
 }
+
+/** jsdom has no ResizeObserver: one that never reports (the layouts keep their first size). */
+export function withResizeObserver(): void {
+  if (typeof globalThis.ResizeObserver !== "undefined") return;
+  globalThis.ResizeObserver = class {
+    observe() {}
+    unobserve() {}
+    disconnect() {}
+  } as unknown as typeof ResizeObserver;
+}

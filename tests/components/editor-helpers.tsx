@@ -12,6 +12,7 @@ import { importSketchText } from "@/canvas/files";
 import type { ActionContext } from "@/canvas/actions";
 import { ResultsDock } from "@/components/results/ResultsDock";
 import { ActionContextCtx } from "@/components/editor/useActions";
+import { withResizeObserver } from "./dialog-support";
 
 /** A 4 m beam on a left pin and a right contact with a 10 kN load at mid-span (demo data). */
 export function beam(loadLabel?: string): SketchFile {
@@ -32,13 +33,7 @@ export function memoryStorage(initial?: SketchFile) {
   return { mem, storage: { getItem: (k: string) => mem.get(k) ?? null, setItem: (k: string, v: string) => void mem.set(k, v), removeItem: (k: string) => void mem.delete(k) } };
 }
 
-if (typeof globalThis.ResizeObserver === "undefined") {
-  globalThis.ResizeObserver = class {
-    observe() {}
-    unobserve() {}
-    disconnect() {}
-  } as unknown as typeof ResizeObserver;
-}
+withResizeObserver();
 
 export async function renderEditor(sketch?: SketchFile, example?: string) {
   const { storage, mem } = memoryStorage(sketch);

@@ -1,10 +1,10 @@
 "use client";
 import { useState } from "react";
 import { Editor } from "@/components/editor/Editor";
-import { scratchPersistence } from "@/canvas/persistence";
-import { ScratchSave } from "@/components/versions/editor/ScratchSave";
+import { ScratchSave, savableScratch } from "@/components/versions/editor/ScratchSave";
 
 export function NewSketchClient({ example }: { example?: string }) {
-  const [persistence] = useState(() => scratchPersistence());
-  return <Editor persistence={persistence} example={example} toolbarExtra={<ScratchSave />} />;
+  // saved to a workspace, the scratch copy in this browser is forgotten (the next "Start a sketch" is empty)
+  const [scratch] = useState(() => savableScratch());
+  return <Editor persistence={scratch.persistence} example={example} toolbarExtra={<ScratchSave onSaved={scratch.forget} />} />;
 }

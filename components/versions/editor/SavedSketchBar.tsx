@@ -2,7 +2,7 @@
 // The saved sketch's corner of the editor's toolbar: which version is open, whether there are
 // unsaved changes, the Save button, and the save, conflict and kept-work dialogs.
 import Link from "next/link";
-import { useEffect, useRef, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { useStore } from "zustand";
 import { useEditor, useStores } from "@/canvas/context";
 import { useActionRunner } from "@/components/editor/useActions";
@@ -76,19 +76,36 @@ function useKeepUnsaved(flow: SaveFlow, waiting: boolean) {
   }, [flow, stores, revision, waiting]);
 }
 
+/**
+ * Whether the editor's sketch differs from the version as saved (`baseDoc`, set on load and on
+ * each save): undoing back to it clears the mark, redoing brings it back. A reference check
+ * first; the structural one runs only when the sketch settles on another document (an edit, an
+ * undo, a redo), never for the frames of a drag, which re-render on every pointer move.
+ */
+function useDirty(flow: SaveFlow, restored: boolean): boolean {
+  const stores = useStores();
+  const baseDoc = useStore(flow, (s) => s.baseDoc);
+  // without a saved document to compare with: the sketch as the bar found it
+  const [opened] = useState(() => stores.editor.getState().sketch);
+  const clean = baseDoc ?? opened;
+  const sketch = useEditor((s) => s.sketch);
+  const dragging = useEditor((s) => s.gesture !== null);
+  const same = useMemo(() => sketch === clean || (!dragging && sameDocument(sketch, clean)), [sketch, clean, dragging]);
+  return restored || !same;
+}
+
 function Bar({ flow }: { flow: SaveFlow }) {
   const { info, base, pending, lastSaved, restored, restoredNotice } = useStore(flow);
   const stores = useStores();
   const run = useActionRunner();
-  const revision = useEditor((s) => s.revision);
-  const [clean, setClean] = useState(revision);
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<ApiError | null>(null);
   const [conflict, setConflict] = useState<{ latest: LatestVersion; message: string } | null>(null);
   const [forking, setForking] = useState(false);
   // the Bar mounts once the sketch has loaded, so `info` is known here
   const [draft, setDraft] = useState<Draft | null>(() => (info && !restored ? readDraft(info.sketchId) : null));
-  const dirty = revision !== clean || restored;
+  // the "● unsaved" mark and the leave-page prompt: the sketch is not the version as saved
+  const dirty = useDirty(flow, restored);
   const leaving = useRef(false);
   const leave = (href: string) => {
     leaving.current = true;
@@ -125,7 +142,6 @@ function Bar({ flow }: { flow: SaveFlow }) {
       // saved: the work kept in this browser is in the version now (an older draft the user has
       // not chosen about yet stays until they do)
       if (restored || !draft) discardDraft(info.sketchId);
-      setClean(stores.editor.getState().revision);
       stores.editor.getState().notify(`Saved as v${version.number}.`);
       settle({ ok: true, version: version.number, savedAt: version.createdAt });
     } catch (err) {

@@ -7,6 +7,7 @@ import Link from "next/link";
 import { useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
 import { useStores } from "@/canvas/context";
+import { SCRATCH_KEY, scratchPersistence, type SketchPersistence } from "@/canvas/persistence";
 import { useForkTargets } from "@/components/sketches/ForkDialog";
 import { Button, Field, Notice, Select } from "@/components/shell/controls";
 import { Providers } from "@/components/shell/Providers";
@@ -17,7 +18,38 @@ import { NarrowLabel } from "@/components/editor/NarrowLabel";
 
 type Created = { sketch: { id: string; workspaceId: string; title: string } };
 
-function SaveToWorkspace({ onClose }: { onClose: () => void }) {
+type StorageLike = { getItem(key: string): string | null; setItem(key: string, value: string): void; removeItem(key: string): void };
+
+/**
+ * The scratch sketch of /sketches/new, and `forget`: once it is saved to a workspace (that save
+ * succeeded; not a failed or cancelled one) its copy in this browser goes, and this page keeps
+ * nothing more (not even a last autosave as the page is left), so the next "Start a sketch"
+ * opens an empty sketch rather than the one now saved. Unsaved work stays for the next visit.
+ */
+export function savableScratch(storage: StorageLike | null = typeof window !== "undefined" ? window.localStorage : null, key = SCRATCH_KEY): { persistence: SketchPersistence; forget: () => void } {
+  const inner = scratchPersistence(storage, key);
+  let saved = false;
+  const persistence: SketchPersistence = {
+    kind: inner.kind,
+    autosave: inner.autosave,
+    describe: (title) => inner.describe(title),
+    load: () => inner.load(),
+    save: (sketch, opts) => (saved ? Promise.resolve({ ok: true, savedAt: new Date().toISOString() }) : inner.save(sketch, opts)),
+  };
+  return {
+    persistence,
+    forget: () => {
+      saved = true;
+      try {
+        storage?.removeItem(key);
+      } catch {
+        // a browser that will not let go of it: the next visit shows it, as before
+      }
+    },
+  };
+}
+
+function SaveToWorkspace({ onClose, onSaved }: { onClose: () => void; onSaved?: () => void }) {
   const stores = useStores();
   const router = useRouter();
   const params = useSearchParams();
@@ -34,7 +66,11 @@ function SaveToWorkspace({ onClose }: { onClose: () => void }) {
         // the drawing carries the name given here (the editor, the calc sheet and the listings agree)
         body: { title: title.trim(), message: message.trim(), document: { ...stores.editor.getState().sketch, title: title.trim() } },
       }),
-    onSuccess: (made) => router.push(`/sketches/${made.sketch.id}`),
+    onSuccess: (made) => {
+      // it is in the workspace now: the copy kept in this browser goes
+      onSaved?.();
+      router.push(`/sketches/${made.sketch.id}`);
+    },
   });
   const signedOut = targets.error instanceof ApiError && targets.error.status === 401;
   const err = create.error instanceof ApiError ? create.error : null;
@@ -97,7 +133,7 @@ function SaveToWorkspace({ onClose }: { onClose: () => void }) {
   );
 }
 
-function ScratchSaveButton() {
+function ScratchSaveButton({ onSaved }: { onSaved?: () => void }) {
   const params = useSearchParams();
   const [open, setOpen] = useState(params.get("save") === "1");
   return (
@@ -105,16 +141,16 @@ function ScratchSaveButton() {
       <button type="button" onClick={() => setOpen(true)} className="h-7 whitespace-nowrap rounded bg-ink px-2.5 text-[12.5px] font-medium text-paper hover:bg-ink-soft" data-testid="save-to-workspace" aria-label="Save to a workspace">
         <NarrowLabel full="Save to a workspace" short="Save…" />
       </button>
-      {open ? <SaveToWorkspace onClose={() => setOpen(false)} /> : null}
+      {open ? <SaveToWorkspace onClose={() => setOpen(false)} onSaved={onSaved} /> : null}
     </div>
   );
 }
 
-/** The scratch sketch's corner of the editor's toolbar. */
-export function ScratchSave() {
+/** The scratch sketch's corner of the editor's toolbar; `onSaved`: once it is saved to a workspace (see `savableScratch`). */
+export function ScratchSave({ onSaved }: { onSaved?: () => void } = {}) {
   return (
     <Providers>
-      <ScratchSaveButton />
+      <ScratchSaveButton onSaved={onSaved} />
     </Providers>
   );
 }
