@@ -31,6 +31,29 @@ function readSketchFile(path: string): Doc {
   return JSON.parse(readFileSync(fileURLToPath(new URL(`../${path}`, import.meta.url)), "utf8"));
 }
 
+/**
+ * The exhaust stack's cases at the site's 40 m/s design wind (the example runs them at 30 m/s),
+ * the blocks' weight lowering the centre of gravity (0.45 m up) as it adds to the stack's 900 kg,
+ * and the sweep plotting the upwind edge's friction too.
+ */
+function stackCasesAt40(d: Doc): void {
+  const body = d.bodies[0];
+  body.cg = [1.5, "(900 kg * 3.6 m + ballast * 0.45 m) / (900 kg + ballast)"];
+  const cases = d.cases as Array<Record<string, unknown>>;
+  d.cases = cases
+    .filter((c) => c.id !== "storm")
+    .map((c) => {
+      if (c.id === "running") return { ...c, name: "Engine running, 40 m/s design wind", parameters: { v: "40 m/s" } };
+      if (c.id === "stopped") return { ...c, name: "Engine stopped, 40 m/s design wind", parameters: { v: "40 m/s", p_duct: "0 kPa" } };
+      if (c.id === "wind-30") return { ...c, id: "wind-40", name: "Wind only, 40 m/s", parameters: { v: "40 m/s" } };
+      return c;
+    });
+  const [uplift] = d.combinations as Array<{ terms: Array<{ case: string }> }>;
+  for (const t of uplift.terms) if (t.case === "wind-30") t.case = "wind-40";
+  const [sweep] = d.sweeps as Array<{ quantities: unknown[] }>;
+  sweep.quantities.push({ support: "upwind", component: "frictionMargin" });
+}
+
 /** The exhaust stack as built, for its later versions' notes. */
 const STACK =
   "An 8 m stack (600 mm) stands on a 3 m skid, 0.7 m deep, laid unbolted on a concrete pad, to carry a standby generator's exhaust during an outage. The gas comes in through a 500 mm flexible duct on the side of the stack, 1.6 m up, with 2 kPa of back-pressure, and leaves at the top. Wind on the stack: q = ½ρv², drag coefficient 0.7 on the projected width.";
@@ -44,7 +67,7 @@ export const DEMO_SKETCHES: DemoSketch[] = [
     tags: ["pumps", "pier 7"],
     steps: [
       { by: "eddie", daysAgo: 9, message: "Skid as drawn from the general arrangement, at half the duty flow" },
-      { by: "eddie", daysAgo: 7, message: "Full duty flow: 1800 → 3600 L/min", edit: (d) => (d.parameters!.Q = "60 lpm * 60") },
+      { by: "eddie", daysAgo: 7, message: "Full duty flow: 1800 → 3600 L/min", edit: (d) => (d.parameters!.Q = "3600 lpm") },
       { by: "eddie", daysAgo: 5, message: "Moved the rear bearer 0.3 m east to clear the drain channel", edit: (d) => (d.supports[0].at = [0.6, 0]) },
     ],
     review: [
@@ -75,26 +98,26 @@ export const DEMO_SKETCHES: DemoSketch[] = [
       {
         by: "eddie",
         daysAgo: 4,
-        message: "Raised the flow to the 2000 gpm rating: the front jack lifts off and the foot slips",
+        message: "Raised the flow to the 2000 gpm rating: the front jack lifts off and the trailer slides on its wheels",
         edit: (d) => (d.parameters!.Q = "2000 gpm"),
         notes:
-          "A 950 kg monitor trailer set up on its axle, a rear stabiliser foot and a front jack on a skid plate, on wet asphalt (μ = 0.55 at the foot and the tyres). The monitor throws its rated 2000 gpm through a 1¾ in tip, forward and up, from 2.4 m. The jet's reaction pulls the top of the riser back and down: at this flow the front jack lifts off and the foot slips.",
+          "A 950 kg monitor trailer set up on its axle, a rear stabiliser foot and a front jack on a skid plate, on wet asphalt (μ = 0.55 at the foot and the tyres). The monitor throws its rated 2000 gpm through a 1¾ in tip, forward and up, from 2.4 m. The jet's reaction pulls the top of the riser back and down: at this flow the front jack lifts off and the trailer slides: the wheels would need μ = 1.76.",
       },
       {
         by: "olivia",
         daysAgo: 2,
-        message: "Added 300 kg of water ballast toward the front: the jack bears again; the foot still slips",
+        message: "Added 300 kg of water ballast toward the front: the jack bears again; the wheels still slip",
         edit: (d) => {
           d.bodies[0].mass = "1250 kg";
           d.bodies[0].cg = [2.1, 0.85];
         },
         notes:
-          "The monitor trailer with 300 kg of water ballast toward the front: 1250 kg in all, its centre of gravity 2.1 m from the rear foot and 0.85 m up. At the rated 2000 gpm (1¾ in tip, forward and up from 2.4 m) the front jack bears again; the foot still slips on wet asphalt (μ = 0.55 at the foot and the tyres).",
+          "The monitor trailer with 300 kg of water ballast toward the front: 1250 kg in all, its centre of gravity 2.1 m from the rear foot and 0.85 m up. At the rated 2000 gpm (1¾ in tip, forward and up from 2.4 m) the front jack bears again, but the wheels still slip on wet asphalt: they need μ = 0.70 and the tyres give 0.55 (the foot needs 0.41 of its 0.55). Taken as drawn: the wheels braked, so the tyres carry friction; the supply hose laid flat and slack, carrying no thrust into the trailer.",
       },
     ],
     review: [{ version: 3, step: "submit", by: "olivia", daysAgo: 1.9 }],
     comments: [
-      { version: 3, by: "chen", daysAgo: 1.5, body: "The foot still slips: is a chock at the stabiliser foot allowed on site?", pin: { kind: "element", elementId: "foot" } },
+      { version: 3, by: "chen", daysAgo: 1.5, body: "The wheels still slip (μ 0.70 needed, 0.55 on wet asphalt): may we chock them on site?", pin: { kind: "element", elementId: "axle" } },
       { version: 3, by: "chen", daysAgo: 1.4, body: "Jet reaction taken at the tip, not the monitor's swivel: fine for this check." },
     ],
   },
@@ -167,10 +190,10 @@ export const DEMO_SKETCHES: DemoSketch[] = [
       {
         by: "olivia",
         daysAgo: 1,
-        message: "Clamped 45 kg of ballast to the base: the caster bears again",
-        edit: (d) => (d.bodies[0].mass = "130 kg"),
+        message: "Clamped 60 kg of ballast to the base: the caster bears again, with 1.55 against tipping back",
+        edit: (d) => (d.bodies[0].mass = "145 kg"),
         notes:
-          "The cart with 45 kg of ballast clamped to its base (130 kg in all) and the lance at −50°: 40 L/min at 500 bar through a small tip, clamped at 1.15 m. The front caster bears again. Braked rear wheels (μ = 0.6) stop it sliding; the front caster is free.",
+          "The cart with 60 kg of ballast clamped to its base (145 kg in all) and the lance at −50°: 40 L/min at 500 bar through a small tip, clamped at 1.15 m. The front caster bears again, with a factor of 1.55 against tipping back (45 kg gave only 1.39). Braked rear wheels (μ = 0.6) stop it sliding; the front caster is free.",
       },
     ],
   },
@@ -185,16 +208,19 @@ export const DEMO_SKETCHES: DemoSketch[] = [
       {
         by: "eddie",
         daysAgo: 2.5,
-        message: "Site design wind is 40 m/s: the upwind edge lifts even with the engine running",
-        edit: (d) => (d.parameters!.v = "40 m/s"),
-        notes: `${STACK} At the site's design wind of 40 m/s the upwind edge lifts, even with the engine running (the duct's pressure and the gas entering push against the wind). Ballast is next.`,
+        message: "Site design wind is 40 m/s, and the cases run at it: the upwind edge lifts even with the engine running",
+        edit: (d) => {
+          d.parameters!.v = "40 m/s";
+          stackCasesAt40(d);
+        },
+        notes: `${STACK} At the site's design wind of 40 m/s the upwind edge lifts, even with the engine running (the duct's pressure and the gas entering push against the wind), and every case tips. Ballast is next: blocks on the skid lower the centre of gravity as they add weight.`,
       },
       {
         by: "eddie",
         daysAgo: 1.5,
-        message: "900 kg of concrete blocks on the skid: the upwind edge bears again at 40 m/s, and neither edge slips",
-        edit: (d) => (d.parameters!.ballast = "900 kg"),
-        notes: `${STACK} With 900 kg of concrete blocks on the skid the upwind edge bears again at the site's design wind of 40 m/s, and neither edge slips; the Cases tab gives each case's factors of safety.`,
+        message: "1200 kg of concrete blocks on the skid: every case holds at the 40 m/s design wind, with its factors met",
+        edit: (d) => (d.parameters!.ballast = "1200 kg"),
+        notes: `${STACK} With 1200 kg of concrete blocks on the skid (their centre 0.45 m up) the upwind edge bears again at the site's design wind of 40 m/s, engine running or stopped, with factors of 1.83 or more against overturning and 3.06 against sliding; the factored uplift check holds with 1.10 against the 1.0 it asks. In that check the lightly loaded upwind edge needs more friction than its share, but the skid as a whole has friction to spare (1.84). 900 kg was not enough: engine stopped, the upwind edge slipped and the uplift check tipped.`,
       },
     ],
   },
