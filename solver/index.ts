@@ -18,7 +18,7 @@ export { formatQuantity, formatNumber, convert, unitsFor, type UnitSystem, type 
 export { sketchSchema, CURRENT_VERSION, FORMAT, formatPath } from "./schema";
 export type { SketchFile, SketchFileInput, SupportKind, LoadKind, CaseFile, CombinationFile, SweepFile, UnderlayFile } from "./schema";
 export { migrateSketch, MIGRATIONS } from "./migrations";
-export { CAUTIONS, CAUTION_SHORT, ASSUMPTIONS } from "./cautions";
+export { CAUTIONS, CAUTION_SHORT, ASSUMPTIONS, CONVENTIONS } from "./cautions";
 export * from "./types";
 
 /**

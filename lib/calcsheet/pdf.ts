@@ -8,6 +8,7 @@ import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import {
   ASSUMPTIONS,
   CAUTIONS,
+  CONVENTIONS,
   caseReactionTable,
   envelopeTable,
   handCheckTable,
@@ -177,6 +178,10 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     }
   }
 
+  // ---- conventions: what a checker needs to redo the tables below by hand
+  heading("Conventions");
+  for (const c of CONVENTIONS) para(`• ${c}`);
+
   // ---- hand check
   for (const bodyId of Object.keys(result.bodies)) {
     heading(`Hand check — ${bodyId}`);
@@ -185,7 +190,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
 
   // ---- reactions per case, envelope, stability
   if (hasCases) {
-    heading("Reactions per case");
+    heading("Reactions per case (forces on the body)");
     drawTable(doc, withoutAbsentMoment(caseReactionTable(study, units), study), left, width, { groupBy: "case" });
     heading("Envelope and design loads");
     for (const w of excludedWords(study)) para(w, 8.5, ACCENT);
@@ -197,7 +202,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     }
   } else {
     // one run: an envelope of it, or a governing case among one, would only repeat its numbers
-    heading("Reactions as drawn");
+    heading("Reactions as drawn (forces on the body)");
     para("No operating cases are defined: these are the reactions of the sketch as drawn.", 8.5, SOFT);
     drawTable(doc, singleRunTable(withoutAbsentMoment(caseReactionTable(study, units), study)), left, width);
   }

@@ -87,6 +87,15 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("High throw");
     expect(text).toMatch(/Sweep of theta/);
     expect(text).toMatch(/Crossing: front jack: lift-off \(its normal force reaches zero\) at theta = \d+(\.\d+)? deg\./);
+    // the conventions a checker redoes the tables by (common practice: a reaction table states
+    // its signs and whose force it gives)
+    expect(text).toContain("Moments are positive counter-clockwise");
+    expect(text).toContain("Reaction tables give the force of each support on the body");
+    expect(text).toMatch(/n is the component along its normal \(positive: pressing on the body\)/);
+    expect(text).toContain("shares its load by support stiffness");
+    expect(text).toContain("the fluid in it included");
+    expect(text).toContain("gauge pressures stay as given unless the case sets them");
+    expect(text).toContain("Reactions per case (forces on the body)");
     // cautions
     expect(text).toContain("must be reviewed by a qualified engineer");
     expect(text).toContain("Local codes, standards and licensed engineering practice govern");
@@ -175,7 +184,7 @@ describe("calc sheet PDF", () => {
       { id: "high", name: "High throw", parameters: { theta: "60 deg" } },
     ];
     const t = (await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file: trailer }))).text;
-    const perCase = section(t, "Reactions per case Support", "Envelope and design loads");
+    const perCase = section(t, "Reactions per case (forces on the body) Support", "Envelope and design loads");
     expect(perCase).toContain("Resultant (kN) Normal n (kN)");
     expect(perCase).not.toContain("(kN·m)");
     const envelope = section(t, "Envelope and design loads", "Stability");
@@ -194,7 +203,7 @@ describe("calc sheet PDF", () => {
     if (!run.ok) throw new Error("the case did not solve");
     expect(Math.abs(run.result.reactions.anchor.m)).toBeLessThan(1e-6);
     const b = (await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Bend", version: 1, savedAt: new Date(), signoff: [], file: bend }))).text;
-    expect(section(b, "Reactions per case Support", "Envelope and design loads")).toMatch(/Resultant \(kN\) M \(kN·m\) Normal n/);
+    expect(section(b, "Reactions per case (forces on the body) Support", "Envelope and design loads")).toMatch(/Resultant \(kN\) M \(kN·m\) Normal n/);
     const bendEnvelope = section(b, "Envelope and design loads", "Stability");
     expect(bendEnvelope).toMatch(/ M kN·m 0 Surge pressure 900 kPa 0 Surge pressure 900 kPa none \(zero in every case\) /);
     expect(bendEnvelope).toContain("Fy (kN) M (kN·m) from case");
