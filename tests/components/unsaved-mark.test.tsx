@@ -74,6 +74,10 @@ describe("the unsaved mark of a saved sketch", () => {
     key("y", { ctrlKey: true });
     await waitFor(() => expect(label()).toHaveTextContent("unsaved"));
     expect(leavingAsks()).toBe(true);
+    // the calc sheet beside it is the version's as saved, and says the unsaved changes are not in it
+    const sheet = screen.getByRole("link", { name: "Calc sheet (PDF)" });
+    expect(sheet.getAttribute("href")).toBe("/api/sketches/sk1/versions/1/calc-sheet?units=SI");
+    expect(sheet.getAttribute("title")).toBe("The calc sheet (PDF) of v1 as saved: your unsaved changes are not in it");
   });
 
   it("an edit put back by hand is no change either", async () => {

@@ -98,6 +98,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
   const { info, base, pending, lastSaved, restored, restoredNotice } = useStore(flow);
   const stores = useStores();
   const run = useActionRunner();
+  const units = useEditor((s) => s.units);
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<ApiError | null>(null);
   const [conflict, setConflict] = useState<{ latest: LatestVersion; message: string } | null>(null);
@@ -178,6 +179,16 @@ function Bar({ flow }: { flow: SaveFlow }) {
           Read only · {info.role}
         </span>
       )}
+      {/* the calc sheet of the version open here, as saved (a PDF made on the server) */}
+      <a
+        href={`/api/sketches/${info.sketchId}/versions/${base}/calc-sheet?units=${units}`}
+        className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45`}
+        title={dirty ? `The calc sheet (PDF) of v${base} as saved: your unsaved changes are not in it` : `The calc sheet (PDF) of v${base}`}
+        aria-label="Calc sheet (PDF)"
+        data-testid="calc-sheet-link"
+      >
+        <NarrowLabel full="Calc sheet" short="PDF" />
+      </a>
       <Link href={`/workspaces/${info.workspaceId}/sketches/${info.sketchId}`} className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45`}>
         History
       </Link>
