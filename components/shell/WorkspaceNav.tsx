@@ -14,7 +14,8 @@ export function WorkspaceNav({ workspaceId, role }: { workspaceId: string; role:
   const pathname = usePathname();
   const base = `/workspaces/${workspaceId}`;
   return (
-    <nav aria-label="Workspace" className="mx-auto flex max-w-6xl gap-1 overflow-x-auto px-4 sm:px-6">
+    // scrolls sideways on a phone; never up and down (the tabs' underline reaches 1 px past it)
+    <nav aria-label="Workspace" className="mx-auto flex max-w-6xl gap-1 overflow-x-auto overflow-y-hidden px-4 sm:px-6">
       {WORKSPACE_TABS.filter((t) => can(role, t.permission)).map((t) => {
         const href = base + t.path;
         // the overview holds the sketches: their pages (history, versions, comparisons) are under it
