@@ -66,9 +66,8 @@ function largestOf(values: Iterable<number | null | undefined>): number {
 /** The largest force and moment (SI) a table or panel shows, which choose its units. */
 export type Scale = { force: number; moment: number };
 function scaleOf(forces: Iterable<number | null | undefined>, moments: Iterable<number | null | undefined>): Scale {
-  const force = largestOf(forces);
-  // moments all zero (no fixed support): they follow the forces, N with N·m
-  return { force, moment: largestOf(moments) || force };
+  // moments all zero (no fixed support): the forces alone choose the family (N with N·m)
+  return { force: largestOf(forces), moment: largestOf(moments) };
 }
 
 /** The scale of a result's reactions table; the limit finder's target is typed in its units. */
@@ -89,12 +88,20 @@ export function handCheckScale(eq: SolveResult["equations"][string], about: Vec2
 
 /** A table's force and moment units. */
 type Units = { system: UnitSystem; force: string; moment: string };
-// one family per table: kN with kN·m, or N with N·m only when all of it stays below a kilonewton
-// (lbf with lbf·ft, or kip with kip·ft once any of it reaches 10 kip), so no row mixes the two
-const unitsOf = (system: UnitSystem, scale: Scale): Units => {
+/**
+ * One family per table: kN with kN·m, or N with N·m only when all of it stays below a kilonewton
+ * (lbf with lbf·ft, or kip with kip·ft once a force reaches 10 kip or a moment 10 kip·ft, each
+ * in its own unit), so no row mixes the two.
+ */
+export function unitFamily(system: UnitSystem, scale: Scale): { force: string; moment: string } {
+  if (system === "US") {
+    const kip = scale.force / LBF_N >= LARGE_US || scale.moment / (LBF_N * FOOT_M) >= LARGE_US;
+    return kip ? { force: "kip", moment: "kip·ft" } : { force: "lbf", moment: "lbf·ft" };
+  }
   const largest = Math.max(scale.force, scale.moment);
-  return { system, force: columnUnit("force", system, largest), moment: columnUnit("moment", system, largest) };
-};
+  return { force: columnUnit("force", system, largest), moment: columnUnit("moment", system, largest) };
+}
+const unitsOf = (system: UnitSystem, scale: Scale): Units => ({ system, ...unitFamily(system, scale) });
 const tableUnits = (system: UnitSystem, forces: Iterable<number | null | undefined>, moments: Iterable<number | null | undefined>): Units => unitsOf(system, scaleOf(forces, moments));
 
 /** The unit of a quantity in a table: its force or moment unit, or the usual one (length, angle…). */

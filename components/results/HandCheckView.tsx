@@ -4,7 +4,7 @@
 // P is picked on the canvas (the "Pick on the drawing" button) or typed.
 import { useDeferredValue, useMemo, useState } from "react";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
-import { columnUnit, handCheckScale, handCheckTable } from "@/solver/report";
+import { columnUnit, handCheckScale, handCheckTable, unitFamily } from "@/solver/report";
 import { downloadCsv, useCsvName } from "@/components/studies/csv";
 import { convert, formatNumber, type UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
@@ -95,8 +95,8 @@ export function HandCheckView() {
   // the units of the three sums, as in the hand check's table: N and N·m when all of it is below 1 kN
   const scale = useHeldScale(useMemo(() => (eq ? handCheckScale(eq, about) : undefined), [eq, about]));
   const unitsOfSums = useMemo(() => {
-    const force = columnUnit("force", units, scale?.force);
-    return { fx: force, fy: force, m: columnUnit("moment", units, scale?.moment) };
+    const { force, moment } = scale ? unitFamily(units, scale) : { force: columnUnit("force", units), moment: columnUnit("moment", units) };
+    return { fx: force, fy: force, m: moment };
   }, [scale, units]);
   const [draft, setDraft] = useState<{ x: string; y: string } | null>(null);
   const [error, setError] = useState<string | null>(null);

@@ -236,4 +236,24 @@ describe("one unit per table, chosen by its largest value", () => {
     expect(under.columns[col("fx")].unit).toBe("lbf");
     expect(under.rows.find((row) => row[0] === "rear")![col("fx")]).toBeCloseTo(9000, 6);
   });
+
+  it("one US family per table: a force under 10 kip and a moment under 10 kip·ft stay lbf and lbf·ft", async () => {
+    // The DN150 bend example on its anchor at 10 bar: some 4 kip of force and 1.3 kip·ft of moment,
+    // each under 10 of its kip unit, so lbf with lbf·ft (not lbf beside kip·ft). 1 lbf·ft =
+    // 1.355 817 948 331 4 N·m (NIST SP 811, appendix B).
+    const { exampleById } = await import("@/canvas/examples");
+    const p = parseSketch(exampleById("pipe-bend-anchor")!.sketch);
+    if (!p.ok) throw new Error();
+    const t = reactionTable(solve(p.sketch), "US");
+    const col = (key: string) => t.columns.findIndex((c) => c.key === key);
+    expect([t.columns[col("fx")].unit, t.columns[col("m")].unit]).toEqual(["lbf", "lbf·ft"]);
+    const si = reactionTable(solve(p.sketch), "SI");
+    expect(si.columns[col("m")].unit).toBe("kN·m");
+    expect(t.rows[0][col("m")] as number).toBeCloseTo(((si.rows[0][col("m")] as number) * 1000) / (LBF_N * 0.3048), 6);
+    // a moment of 10 kip·ft or more takes the table to kip and kip·ft, forces included
+    const big = { ...solve(p.sketch) };
+    big.reactions = Object.fromEntries(Object.entries(big.reactions).map(([id, r]) => [id, { ...r, m: 20_000 }]));
+    const k = reactionTable(big, "US");
+    expect([k.columns[col("fx")].unit, k.columns[col("m")].unit]).toEqual(["kip", "kip·ft"]);
+  });
 });
