@@ -198,6 +198,31 @@ export function excludedWords(study: StudyResult): string[] {
   );
 }
 
+/**
+ * A line for each case whose body slips but is held otherwise (it stays in the envelope): its
+ * contacts' friction is what they would need to hold it, more than μ·n gives, so the body would
+ * slide in that case and its tangential loads are not reached as computed.
+ */
+export function slipWords(study: StudyResult): string[] {
+  const out: string[] = [];
+  for (const run of study.runs) {
+    if (!run.ok) continue;
+    const bodies = new Set<string>();
+    for (const w of run.result.warnings) {
+      if (w.code !== "SLIP") continue;
+      for (const id of w.ids) {
+        const body = run.result.bodies[id] ? id : run.result.reactions[id]?.body;
+        if (body && !(study.excluded ?? []).some((e) => e.case === run.id && e.body === body)) bodies.add(body);
+      }
+    }
+    for (const body of bodies)
+      out.push(
+        `${run.name} — ${nameIn(study, body)} slips: in the envelope and the design loads with the friction its contacts would need to hold it, more than μ·n gives. It would slide in this case, so those friction forces are not reached as computed: hold it by other means or give it more friction.`,
+      );
+  }
+  return out;
+}
+
 /** Why no envelope is given: a case or combination that did not solve could be the governing one,
  *  so an envelope of the others would understate the design loads. Null when every run solved. */
 export function unsolvedWords(study: StudyResult): string | null {

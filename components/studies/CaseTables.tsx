@@ -3,7 +3,7 @@
 // the envelope, each support's design load, and the factors of safety. The editor's Cases tab and
 // a version's review page show the same tables.
 import type { StudyResult } from "@/solver/cases";
-import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, stabilityTable, unsolvedWords } from "@/solver/report";
+import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, unsolvedWords } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
@@ -30,6 +30,12 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
       ))}
       {excludedWords(result).map((w) => (
         <p key={w} className="mb-1 text-[12px] font-medium text-caution" data-testid="not-in-envelope">
+          <span aria-hidden="true">⚠ </span>
+          {w}
+        </p>
+      ))}
+      {slipWords(result).map((w) => (
+        <p key={w} className="mb-1 text-[12px] font-medium text-caution" data-testid="slips-in-envelope">
           <span aria-hidden="true">⚠ </span>
           {w}
         </p>

@@ -24,7 +24,7 @@ import {
 import { caseWarnings, combinationWarnings } from "@/solver/cases";
 import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
-import { caseFindings, designLoadTable, excludedWords, unsolvedWords, type Table } from "@/solver/report";
+import { caseFindings, designLoadTable, excludedWords, slipWords, unsolvedWords, type Table } from "@/solver/report";
 import { lineChartSvg } from "./chart";
 import { sweepCharts, sweepEverywhere, sweepQuantities } from "./sweeps";
 import { registerFonts } from "./fonts";
@@ -193,7 +193,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     heading("Reactions per case (forces on the body)");
     drawTable(doc, withoutAbsentMoment(caseReactionTable(study, units), study), left, width, { groupBy: "case" });
     heading("Envelope and design loads");
-    for (const w of excludedWords(study)) para(w, 8.5, ACCENT);
+    for (const w of [...excludedWords(study), ...slipWords(study)]) para(w, 8.5, ACCENT);
     const unsolved = unsolvedWords(study);
     if (unsolved) para(unsolved, 8.5, ACCENT);
     else {

@@ -5,7 +5,7 @@ import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { parseSketch, solveCases, tableToCsv, type SketchFileInput } from "@/solver";
 import { combinationOverlaps, combinationWarnings } from "@/solver/cases";
-import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, stabilityTable } from "@/solver/report";
+import { caseReactionTable, designLoadTable, envelopeTable, excludedWords, slipWords, stabilityTable } from "@/solver/report";
 import { G0 } from "@/solver/constants";
 import { box, expectRel, sketch } from "./helpers";
 
@@ -233,5 +233,27 @@ describe("factors of safety with their figures (common practice)", () => {
     expectRel(ot[3] as number, (Wb * b) / 2 / 1.3558179483, 1e-9);
     expect(sl[5]).toBe("lbf");
     expectRel(sl[4] as number, P / 4.4482216152605, 1e-9);
+  });
+});
+
+describe("a case that slips stays in the envelope, and says so", () => {
+  it("names the case and the body, and only that one", async () => {
+    // The monitor trailer example ballasted to 1250 kg: at its rated 2000 gpm the wheels need more
+    // friction than μ = 0.55 gives (it slides), at 1250 gpm they do not.
+    const { exampleById } = await import("@/canvas/examples");
+    const file = structuredClone(exampleById("fire-monitor-trailer")!.sketch) as SketchFileInput;
+    file.bodies[0] = { ...file.bodies[0], mass: "1250 kg", cg: [2.1, 0.85] };
+    file.cases = [
+      { id: "low", name: "Low flow 1250 gpm", parameters: { Q: "1250 gpm" } },
+      { id: "rated", name: "Rated 2000 gpm", parameters: { Q: "2000 gpm" } },
+    ];
+    const study = solveCases(fileOf(file));
+    const rated = study.runs.find((r) => r.id === "rated")!;
+    if (!rated.ok) throw new Error();
+    expect(rated.result.warnings.some((w) => w.code === "SLIP")).toBe(true);
+    expect(study.excluded).toEqual([]);
+    const words = slipWords(study);
+    expect(words).toHaveLength(1);
+    expect(words[0]).toMatch(/^Rated 2000 gpm — Monitor trailer slips: in the envelope and the design loads with the friction its contacts would need to hold it, more than μ·n gives\./);
   });
 });
