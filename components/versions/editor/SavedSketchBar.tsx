@@ -179,15 +179,16 @@ function Bar({ flow }: { flow: SaveFlow }) {
           Read only · {info.role}
         </span>
       )}
-      {/* the calc sheet of the version open here, as saved (a PDF made on the server) */}
+      {/* the calc sheet of the version open here, as saved (a PDF made on the server); below
+          1280 px the toolbar has no room for it, and the version page beside History has it */}
       <a
         href={`/api/sketches/${info.sketchId}/versions/${base}/calc-sheet?units=${units}`}
-        className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45`}
+        className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45 max-xl:hidden`}
         title={dirty ? `The calc sheet (PDF) of v${base} as saved: your unsaved changes are not in it` : `The calc sheet (PDF) of v${base}`}
         aria-label="Calc sheet (PDF)"
         data-testid="calc-sheet-link"
       >
-        <NarrowLabel full="Calc sheet" short="PDF" />
+        Calc sheet
       </a>
       <Link href={`/workspaces/${info.workspaceId}/sketches/${info.sketchId}`} className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45`}>
         History
