@@ -39,7 +39,8 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
     <div className={stale ? "opacity-60" : ""}>
       <table className="num w-full border-collapse text-[12px]" data-testid="reactions" aria-describedby="reactions-caption">
         <caption id="reactions-caption" className="caption-top pb-1 text-left text-[11.5px] text-ink-faint">
-          {sense === "body" ? "Forces on the body from each support, as drawn (double arrows)." : "Loads on the supports: every reaction reversed — what each anchor, foot or foundation must carry."}
+          {sense === "body" ? "Forces on the body from each support, as drawn (double arrows)." : "Loads on the supports: every reaction reversed, n and t too (a bearing contact's n is negative here) — what each anchor, foot or foundation must carry."}
+          {table.columns.some((c) => c.key === "margin") ? " Margin: how far a contact's normal force (a tie's tension) is from zero, where it lifts off (goes slack); friction is judged in the words above, not here." : ""}
         </caption>
         <thead>
           <tr className="border-b border-rule text-[11px] text-ink-faint">

@@ -153,12 +153,14 @@ describe("results panel", () => {
     const before = Object.fromEntries(cols.map((c) => [c, cells(c).map(num)]));
     const dir = cells("angle").map(num);
     expect(screen.getByRole("caption")).toHaveTextContent("Forces on the body from each support");
+    // the margin is said to be lift-off, not friction (a slipping contact still has a margin)
+    expect(screen.getByRole("caption")).toHaveTextContent("Margin: how far a contact's normal force (a tie's tension) is from zero, where it lifts off");
     await user.click(within(screen.getByTestId("sense")).getByRole("radio", { name: "Load on the support" }));
     for (const c of cols) cells(c).map(num).forEach((v, i) => expect(v === null ? null : v + 0).toBe(before[c][i] === null ? null : -before[c][i]! + 0));
     cells("angle").map(num).forEach((a, i) => {
       if (a !== null) expect(Math.abs(((a - dir[i]! + 720) % 360) - 180)).toBeLessThan(0.1);
     });
-    expect(screen.getByRole("caption")).toHaveTextContent("Loads on the supports: every reaction reversed");
+    expect(screen.getByRole("caption")).toHaveTextContent("Loads on the supports: every reaction reversed, n and t too (a bearing contact's n is negative here)");
     expect(screen.getByTestId("reactions-note")).toHaveTextContent("Loads on the supports are the reactions with the sign reversed");
   });
 
