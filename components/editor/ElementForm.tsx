@@ -35,10 +35,14 @@ function NumberRow({ id, def, value, commit }: { id: string; def: NumberFieldDef
 }
 
 function PointRow({ id, def, value, commit }: { id: string; def: PointFieldDef; value: Numeric[] | undefined; commit: Commit }) {
+  // a plain number is metres whatever the units shown; in US units the echo under each field is in ft
+  const units = useEditor((s) => s.units);
   if (!value) return null;
   return (
     <fieldset>
-      <legend className="mb-0.5 text-[12px] font-medium text-ink-soft">{def.label} (m)</legend>
+      <legend className="mb-0.5 text-[12px] font-medium text-ink-soft">
+        {def.label} {units === "US" ? "(plain numbers in m; or type ft)" : "(m)"}
+      </legend>
       <div className="flex gap-2">
         {[0, 1].map((i) => (
           <NumericField

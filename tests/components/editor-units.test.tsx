@@ -195,6 +195,11 @@ describe("US units reach every length on screen", () => {
     expect(drawingScale(100, "US")).toBe("30.5 px/ft");
     expect(drawingScale(1000, "US")).toBe("305 px/ft");
     expect(drawingScale(120, "SI")).toBe("120 px/m");
+    // a position's legend says what a plain number is once the echo under it is in feet
+    await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Pin s1/ }));
+    expect(screen.getByTestId("element-form")).toHaveTextContent("Position (plain numbers in m; or type ft)");
+    await user.click(within(screen.getByTestId("units")).getByRole("radio", { name: "SI" }));
+    expect(screen.getByTestId("element-form")).toHaveTextContent("Position (m)");
   });
 });
 

@@ -242,7 +242,7 @@ describe("a case that slips stays in the envelope, and says so", () => {
     // friction than μ = 0.55 gives (it slides), at 1250 gpm they do not.
     const { exampleById } = await import("@/canvas/examples");
     const file = structuredClone(exampleById("fire-monitor-trailer")!.sketch) as SketchFileInput;
-    file.bodies[0] = { ...file.bodies[0], mass: "1250 kg", cg: [2.1, 0.85] };
+    file.bodies![0] = { ...file.bodies![0], mass: "1250 kg", cg: [2.1, 0.85] };
     file.cases = [
       { id: "low", name: "Low flow 1250 gpm", parameters: { Q: "1250 gpm" } },
       { id: "rated", name: "Rated 2000 gpm", parameters: { Q: "2000 gpm" } },
