@@ -55,7 +55,8 @@ const UNITS: Record<Quantity, Record<UnitSystem, Scale[]>> = {
     SI: [{ unit: "m³/s", factor: 1 }, { unit: "L/s", factor: 1e-3 }],
     US: [{ unit: "gpm", factor: GALLON_US_M3 / 60 }],
   },
-  area: { SI: [{ unit: "m²", factor: 1 }, { unit: "mm²", factor: 1e-6 }], US: [{ unit: "ft²", factor: FOOT_M ** 2 }, { unit: "in²", factor: INCH_M ** 2 }] },
+  // a duct of half a square metre reads 0.5 m², not 500,000 mm²; a pipe bore stays in mm²
+  area: { SI: [{ unit: "m²", factor: 1, min: 0.1 }, { unit: "mm²", factor: 1e-6 }], US: [{ unit: "ft²", factor: FOOT_M ** 2 }, { unit: "in²", factor: INCH_M ** 2 }] },
   density: { SI: [{ unit: "kg/m³", factor: 1 }], US: [{ unit: "lb/ft³", factor: LBM_KG / FOOT_M ** 3 }] },
   lineLoad: {
     SI: [{ unit: "kN/m", factor: 1e3 }, { unit: "N/m", factor: 1 }],

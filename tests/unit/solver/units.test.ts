@@ -51,6 +51,15 @@ describe("formatQuantity", () => {
   });
 });
 
+describe("areas", () => {
+  it("a duct's area in m² from 0.1 m² up, a pipe bore's in mm² (1 m² = 10⁶ mm², SI Brochure 9th ed.)", () => {
+    expect(formatQuantity(0.5, "area")).toBe("0.5 m²");
+    expect(formatQuantity(0.8, "area")).toBe("0.8 m²");
+    expect(formatQuantity(Math.PI / 4 * 0.2 ** 2, "area")).toBe("31,416 mm²");
+    expect(formatQuantity(0.002, "area")).toBe("2,000 mm²");
+  });
+});
+
 describe("prettyUnit", () => {
   it("writes mathjs's unit text as people write units (SI Brochure, 9th ed., §5.4.6: the solidus, and a half-high dot for a product)", () => {
     expect(prettyUnit("m / s")).toBe("m/s");
