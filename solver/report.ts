@@ -199,9 +199,10 @@ export function excludedWords(study: StudyResult): string[] {
 }
 
 /**
- * A line for each case whose body slips but is held otherwise (it stays in the envelope): its
- * contacts' friction is what they would need to hold it, more than μ·n gives, so the body would
- * slide in that case and its tangential loads are not reached as computed.
+ * A line for each case whose body slides as a whole but is held otherwise (it stays in the
+ * envelope): its contacts' friction is what they would need to hold it, more than μ·n gives in
+ * all, so the body would slide in that case and those loads are not reached as computed. (One
+ * contact over its own μ while the body has friction to spare is said with the results.)
  */
 export function slipWords(study: StudyResult): string[] {
   const out: string[] = [];
@@ -210,14 +211,11 @@ export function slipWords(study: StudyResult): string[] {
     const bodies = new Set<string>();
     for (const w of run.result.warnings) {
       if (w.code !== "SLIP") continue;
-      for (const id of w.ids) {
-        const body = run.result.bodies[id] ? id : run.result.reactions[id]?.body;
-        if (body && !(study.excluded ?? []).some((e) => e.case === run.id && e.body === body)) bodies.add(body);
-      }
+      for (const id of w.ids) if (run.result.bodies[id] && !(study.excluded ?? []).some((e) => e.case === run.id && e.body === id)) bodies.add(id);
     }
     for (const body of bodies)
       out.push(
-        `${run.name} — ${nameIn(study, body)} slips: in the envelope and the design loads with the friction its contacts would need to hold it, more than μ·n gives. It would slide in this case, so those friction forces are not reached as computed: hold it by other means or give it more friction.`,
+        `${run.name} — ${nameIn(study, body)} slides: in the envelope and the design loads with the friction its contacts would need to hold it, more than μ·n gives in all. It would slide in this case, so those friction forces are not reached as computed: hold it by other means or give it more friction.`,
       );
   }
   return out;

@@ -35,7 +35,9 @@ import { elementLabels } from "@/lib/review/pin-words";
 /** The height an svg says it has (its own attribute), or `fallback`. */
 const svgHeight = (svg: string, fallback: number) => Number(/^<svg[^>]*\sheight="([\d.]+)"/.exec(svg)?.[1] ?? fallback);
 
-const combinationTerms = (k: CombinationFile) => k.terms.map((t) => `${t.factor} × ${t.case}`).join(" + ");
+/** "0.9 × “Weight only” + 1.5 × “Wind only, 40 m/s”": the cases by the names the tables use. */
+const combinationTerms = (k: CombinationFile, cases: ReadonlyArray<{ id: string; name: string }> = []) =>
+  k.terms.map((t) => `${t.factor} × “${cases.find((c) => c.id === t.case)?.name ?? t.case}”`).join(" + ");
 
 export interface SignoffEntry {
   role: "prepared" | "checked" | "approved";
@@ -168,12 +170,12 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       const f = c.flowFactor;
       const flow = f !== undefined && f !== 1 ? [`flow factor ${f} (every port's ṁ and V × ${f}, momentum flux × ${Number((f * f).toPrecision(4))})`] : [];
       const bits = [...over, ...fac, ...flow, ...(c.onlyInCombinations ? ["a load case, solved only in the combinations that name it"] : [])];
-      para(`${c.name} (${c.id}): ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
+      para(`${c.name}: ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
       for (const w of caseWarnings(parsed.file, c)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
     for (const k of parsed.file.combinations ?? []) {
       const own = k.stability ? Object.entries(k.stability).map(([what, v]) => `${v} against ${what}`) : [];
-      para(`${k.name} (${k.id}): ${combinationTerms(k)}, solved as one factored load set${own.length ? `; required factors of safety ${own.join(", ")}` : ""}`, 8.5, INK);
+      para(`${k.name}: ${combinationTerms(k, parsed.file.cases)}, solved as one factored load set${own.length ? `; required factors of safety ${own.join(", ")}` : ""}`, 8.5, INK);
       for (const w of combinationWarnings(parsed.file, k)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
   }
@@ -219,7 +221,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     // a case that sets the swept parameter itself: the sweep's values stand in for the case's
     const overridden = sw.case ? parsed.file.cases?.find((c) => c.id === sw.case)?.parameters?.[sw.parameter] : undefined;
     if (overridden !== undefined) para(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`, 8.5, INK);
-    if (combination) para(`Each point is solved as the combination's factored load set (${combinationTerms(combination)}), with the sweep's value of ${sw.parameter} in every one of its cases.`, 8.5, INK);
+    if (combination) para(`Each point is solved as the combination's factored load set (${combinationTerms(combination, parsed.file.cases)}), with the sweep's value of ${sw.parameter} in every one of its cases.`, 8.5, INK);
     try {
       const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions));
       for (const spec of charts) {

@@ -153,7 +153,7 @@ describe("calc sheet PDF", () => {
     file.sweeps = [{ id: "sw", parameter: "theta", from: 0, to: 80, points: 41, combination: "k", quantities: [{ support: "jack", component: "margin" }] }];
     const { text } = await pdfText(await buildCalcSheet({ workspace: "W", sketchTitle: "Trailer", version: 1, savedAt: new Date(), signoff: [], file }));
     expect(text).toContain("Sweep of theta — combination Light trailer");
-    expect(text).toContain("Each point is solved as the combination's factored load set (0.9 × dead + 1.4 × jet), with the sweep's value of theta in every one of its cases.");
+    expect(text).toContain("Each point is solved as the combination's factored load set (0.9 × “Dead” + 1.4 × “Jet”), with the sweep's value of theta in every one of its cases.");
     const lim = runLimit(file, { parameter: "theta", from: 0, to: 80, combinationId: "k", quantity: { support: "jack", component: "margin" }, target: 0 });
     const drawn = runLimit(file, { parameter: "theta", from: 0, to: 80, quantity: { support: "jack", component: "margin" }, target: 0 });
     if (!lim.found || !drawn.found) throw new Error("expected crossings");
@@ -334,8 +334,11 @@ describe("calc sheet PDF", () => {
     expect(numbers.length).toBeGreaterThan(50);
     for (const n of numbers) expect(text, n).toContain(` ${n} `);
     // a load group's factor and the flow factor read differently: the one scales loads, the other ṁ and V (flux × f²)
-    expect(text).toContain("Surge (case-3): flow factor 1.3 (every port's ṁ and V × 1.3, momentum flux × 1.69)");
-    expect(text).toContain("Dead (case-5): loads of group “flow” × 0, loads of group “loads” × 0");
+    expect(text).toContain("Surge: flow factor 1.3 (every port's ṁ and V × 1.3, momentum flux × 1.69)");
+    expect(text).toContain("Dead: loads of group “flow” × 0, loads of group “loads” × 0");
+    // cases by their names, not their ids (a renamed case keeps an id the reader never typed)
+    expect(text).toContain("Combination 1: 1.2 × “Dead” + 1.5 × “Flow”, solved as one factored load set");
+    expect(text).not.toContain("case-5");
   }, 60000);
 });
 

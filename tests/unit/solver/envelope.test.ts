@@ -236,13 +236,12 @@ describe("factors of safety with their figures (common practice)", () => {
   });
 });
 
-describe("a case that slips stays in the envelope, and says so", () => {
+describe("a case that slides stays in the envelope, and says so", () => {
   it("names the case and the body, and only that one", async () => {
-    // The monitor trailer example ballasted to 1250 kg: at its rated 2000 gpm the wheels need more
-    // friction than μ = 0.55 gives (it slides), at 1250 gpm they do not.
+    // The monitor trailer example (950 kg): at its rated 2000 gpm its contacts together need more
+    // friction than μ = 0.55 gives (it slides as a whole), at 1250 gpm they do not.
     const { exampleById } = await import("@/canvas/examples");
     const file = structuredClone(exampleById("fire-monitor-trailer")!.sketch) as SketchFileInput;
-    file.bodies![0] = { ...file.bodies![0], mass: "1250 kg", cg: [2.1, 0.85] };
     file.cases = [
       { id: "low", name: "Low flow 1250 gpm", parameters: { Q: "1250 gpm" } },
       { id: "rated", name: "Rated 2000 gpm", parameters: { Q: "2000 gpm" } },
@@ -254,6 +253,14 @@ describe("a case that slips stays in the envelope, and says so", () => {
     expect(study.excluded).toEqual([]);
     const words = slipWords(study);
     expect(words).toHaveLength(1);
-    expect(words[0]).toMatch(/^Rated 2000 gpm — Monitor trailer slips: in the envelope and the design loads with the friction its contacts would need to hold it, more than μ·n gives\./);
+    expect(words[0]).toMatch(/^Rated 2000 gpm — Monitor trailer slides: in the envelope and the design loads with the friction its contacts would need to hold it, more than μ·n gives in all\./);
+    // one contact over its own μ while the body has friction to spare is not a slide: the
+    // ballasted trailer (1250 kg) at 2000 gpm, whose wheels slip while the foot has friction left
+    file.bodies![0] = { ...file.bodies![0], mass: "1250 kg", cg: [2.1, 0.85] };
+    const ballasted = solveCases(fileOf(file));
+    const r = ballasted.runs.find((x) => x.id === "rated")!;
+    if (!r.ok) throw new Error();
+    expect(r.result.warnings.some((w) => w.code === "SLIP")).toBe(true);
+    expect(slipWords(ballasted)).toEqual([]);
   });
 });
