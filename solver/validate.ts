@@ -136,7 +136,7 @@ export function validateValues(sketch: Sketch): FieldError[] {
       err(`${p}.rotationalStiffness`, `is too small to solve with: at least ${MIN_STIFFNESS} N·m/rad`);
     if (s.kind === "contact" && !nonNegative(s.mu)) err(`${p}.mu`, "must be zero or more");
     if (sketch.motion?.freeX && restrainsX(s)) {
-      err(p, `restrains x, but the body is free to move in x (motion.freeX): remove the support or turn it to act along y only`);
+      err(p, `restrains x, but the body is set free to move in x (“Free to move in x”, motion.freeX in the file): untick that, remove the support, or turn it to act along y only`);
     }
   });
 

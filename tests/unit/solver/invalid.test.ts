@@ -99,7 +99,7 @@ describe("invalid sketch files", () => {
     const d = loadFixture("thrust-cart-free.json");
     d.supports!.push({ id: "brake", body: "cart", kind: "pin", at: [1, 0] });
     expect(errorsOf(d)).toEqual([
-      { path: "supports[2]", message: "restrains x, but the body is free to move in x (motion.freeX): remove the support or turn it to act along y only" },
+      { path: "supports[2]", message: "restrains x, but the body is set free to move in x (“Free to move in x”, motion.freeX in the file): untick that, remove the support, or turn it to act along y only" },
     ]);
   });
 
