@@ -67,7 +67,7 @@ describe("demo sketches", () => {
       { step: "approve", by: "Olivia Owner" },
     ]);
     const threads = await db.select().from(comment).where(eq(comment.versionId, trailerV3.id));
-    expect(threads.map((c) => c.pin)).toEqual([{ kind: "element", elementId: "foot" }, null]);
+    expect(threads.map((c) => c.pin)).toEqual([{ kind: "element", elementId: "axle" }, null]);
   });
 
   describe("after an update that changed a demo", () => {
