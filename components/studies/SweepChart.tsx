@@ -68,7 +68,7 @@ export function SweepChart({
         <LineChart data={rows} margin={{ top: 6, right: 16, bottom: 4, left: 4 }}>
           <CartesianGrid stroke="#e2dccf" strokeDasharray="0" />
           <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} ticks={xTicks} tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)}
-            label={{ value: `${parameterLabel}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`, position: "insideBottom", offset: -2, fontSize: 11, fill: "#1d2329" }} height={34} />
+            label={{ value: `${parameterLabel}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`, position: "insideBottom", offset: 0, fontSize: 11, fill: "#1d2329" }} height={38} />
           <YAxis yAxisId="left" tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
             label={{ value: leftUnit, angle: -90, position: "insideLeft", fontSize: 11, fill: "#1d2329" }} />
           {rightUnits.length > 0 && (
@@ -83,7 +83,8 @@ export function SweepChart({
             labelFormatter={(x) => `${parameterLabel} = ${formatNumber(Number(x), 5)}${data.unit ? ` ${prettyUnit(data.unit)}` : ""}`}
             contentStyle={{ fontSize: 12, borderColor: "#cfc8b8" }}
           />
-          <Legend wrapperStyle={{ fontSize: 11 }} />
+          {/* below the axis title, clear of it */}
+          <Legend wrapperStyle={{ fontSize: 11, paddingTop: 6 }} />
           <ReferenceLine yAxisId="left" y={0} stroke="#5f6974" />
           {data.quantities.map((q, s) => (
             <Line key={s} yAxisId={axisOf(s)} type="linear" dataKey={`q${s}`} name={`${describeQuantity(q, names)}${axisOf(s) === "right" && unitOf(s) ? ` (${unitOf(s)}, right)` : ""}`} stroke={COLORS[s % COLORS.length]} strokeDasharray={DASHES[s % DASHES.length]} strokeWidth={1.6} dot={false} isAnimationActive={false} connectNulls={false} />
