@@ -96,7 +96,8 @@ export function lineChartSvg(spec: ChartSpec): string {
     // one label a line, so markers close together do not print over each other; a label that
     // would run past the plot's right edge goes on the left of its line
     const right = X(mk.x) + 3 + mk.label.length * LABEL_CHAR <= W - m.r;
-    parts.push(`<text x="${X(mk.x) + (right ? 3 : -3)}" y="${m.t + 9 + k * 10}" font-size="8" text-anchor="${right ? "start" : "end"}" fill="#b4462b">${esc(mk.label)}</text>`);
+    // on a paper-coloured halo: a label that crosses another marker's line stays readable
+    parts.push(`<text x="${X(mk.x) + (right ? 3 : -3)}" y="${m.t + 9 + k * 10}" font-size="8" text-anchor="${right ? "start" : "end"}" fill="#b4462b" stroke="#fbfaf6" stroke-width="3" paint-order="stroke" stroke-linejoin="round">${esc(mk.label)}</text>`);
   });
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" font-family="Inter">${parts.join("")}</svg>`;
 }

@@ -226,7 +226,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions));
       for (const spec of charts) {
         ensureSpace(doc, 280);
-        SVGtoPDF(doc, lineChartSvg(spec), left, doc.y, { width, height: width * (260 / 500), preserveAspectRatio: "xMidYMid meet", fontCallback: () => "Inter" });
+        SVGtoPDF(doc, haloBehindLabels(lineChartSvg(spec)), left, doc.y, { width, height: width * (260 / 500), preserveAspectRatio: "xMidYMid meet", fontCallback: () => "Inter" });
         doc.y += width * (260 / 500) + 4;
       }
       for (const mk of markers) para(`Crossing: ${mk.words}.`, 8.5, INK);
