@@ -68,12 +68,12 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
     const at = all.map((r) => ("error" in r.result || !r.result.found ? null : (reachedAt(r.result, sw.from, sw.to) ?? null)));
     const firstAt = at[all.indexOf(first.row)] ?? null;
     const tie = firstAt !== null && at.every((v) => v !== null && Math.abs(v - firstAt) <= 1e-9 * Math.max(1, Math.abs(firstAt)));
-    const each = all.map((r) => {
+    const each = all.map((r, i) => {
       const f = r.result;
       // the run's name, a dash, then what it comes to: names hold commas and colons of their own
       if ("error" in f) return `${r.name} — not solved`;
-      if (!f.found) return `${r.name} — none in the range`;
-      return `${r.name} — ${formatNumber(reachedAt(f, sw.from, sw.to)!, 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row && !tie ? " (first)" : ""}`;
+      if (!f.found || at[i] === null) return `${r.name} — none in the range`;
+      return `${r.name} — ${formatNumber(at[i], 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row && !tie ? " (first)" : ""}`;
     });
     return [`${names[q.support] ?? q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
   });

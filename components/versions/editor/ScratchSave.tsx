@@ -30,10 +30,7 @@ export function savableScratch(storage: StorageLike | null = typeof window !== "
   const inner = scratchPersistence(storage, key);
   let saved = false;
   const persistence: SketchPersistence = {
-    kind: inner.kind,
-    autosave: inner.autosave,
-    describe: (title) => inner.describe(title),
-    load: () => inner.load(),
+    ...inner,
     save: (sketch, opts) => (saved ? Promise.resolve({ ok: true, savedAt: new Date().toISOString() }) : inner.save(sketch, opts)),
   };
   return {
