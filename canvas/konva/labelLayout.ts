@@ -1,9 +1,12 @@
 // Keeps the interaction store's `labelShifts` (elements' labels moved off crowded labels and
 // symbols) in step with the sketch, the zoom, the units and the result shown, whose labels are
 // placed first. Placed for the whole sketch as the SVG renderer places it, so the drawing's nodes,
-// the results layer and an export agree; held while a drag lasts.
+// the results layer and an export agree; held while a drag or a pan lasts. On the canvas the
+// labels also keep inside the drawing area (below the legend): one its edge would cut (a port's
+// values on a phone, past the squeezed margin of a fit) moves in beside what it labels.
 import type { EditorStores } from "../context";
-import { placeElementLabels } from "../render/labels";
+import { LEGEND_ROOM } from "../geometry/fit";
+import { placeElementLabels, type Box } from "../render/labels";
 import { elementGroups, resultLayer } from "../render/scenePrims";
 import { supportStates } from "../render/results";
 import { statesOf } from "./nodes";
@@ -14,26 +17,28 @@ export function followLabelLayout(stores: EditorStores, interaction: Interaction
   let last: unknown[] = [];
   const update = () => {
     const it = interaction.getState();
-    if (it.dragging) return;
+    if (it.dragging || it.panning) return;
     const scene = stores.scene.getState();
     const e = stores.editor.getState();
     const { shown, stale } = stores.analysis.getState();
-    const key: unknown[] = [scene, e.view.scale, e.units, shown, stale];
+    const { view, viewport } = e;
+    const key: unknown[] = [scene, view.scale, e.units, shown, stale, view.x, view.y, viewport.width, viewport.height];
     if (key.every((k, i) => k === last[i])) return;
     last = key;
-    const groups = elementGroups(scene, e.view.scale, e.units, statesOf(shown));
-    const results = shown ? resultLayer(groups, scene, e.view.scale, e.units, shown, supportStates(shown), stale) : [];
-    const shifts = placeElementLabels(groups, results, it.labelShifts);
+    const groups = elementGroups(scene, view.scale, e.units, statesOf(shown));
+    const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown), stale) : [];
+    const frame: Box | undefined = viewport.width > 1 ? { x0: 2 - view.x, y0: LEGEND_ROOM - view.y, x1: viewport.width - 2 - view.x, y1: viewport.height - 2 - view.y } : undefined;
+    const shifts = placeElementLabels(groups, results, it.labelShifts, frame);
     if (shifts !== it.labelShifts) interaction.setState({ labelShifts: shifts });
   };
   const stops = [
     stores.scene.subscribe(update),
     stores.analysis.subscribe(update),
     stores.editor.subscribe((s, p) => {
-      if (s.view.scale !== p.view.scale || s.units !== p.units) update();
+      if (s.view !== p.view || s.units !== p.units || s.viewport !== p.viewport) update();
     }),
     interaction.subscribe((s, p) => {
-      if (!s.dragging && p.dragging) update();
+      if ((!s.dragging && p.dragging) || (!s.panning && p.panning)) update();
     }),
   ];
   update();

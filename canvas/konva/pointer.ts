@@ -129,7 +129,8 @@ export function createPointerController(deps: PointerDeps) {
         if (mode.kind === "move" || mode.kind === "rotate" || mode.kind === "corner" || mode.kind === "cg") s.cancelGesture();
         const [a, b] = [...touches.values()];
         mode = { kind: "pinch", dist: Math.hypot(a[0] - b[0], a[1] - b[1]) || 1, mid: [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2], view: { ...s.view } };
-        interaction.setState({ band: null, snap: null });
+        // a pinch pans and zooms: the labels wait for its end, as for a pan
+        interaction.setState({ band: null, snap: null, panning: true });
         startWindowDrag();
         return;
       }

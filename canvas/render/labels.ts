@@ -163,10 +163,18 @@ class Strokes {
 
 type Own = { strokes: Strokes; lo: number; hi: number };
 
+/** The part of a box outside the frame, in px² (0 inside it). */
+const outside = (b: Box, frame: Box) => (b.x1 - b.x0) * (b.y1 - b.y0) - overlapArea(b, frame);
+
 /** What a place costs; `moved`: away from the label's own place, where its own symbol's strokes
- *  count too (at its own place it may touch them; moved, it must not cover them). */
-function cost(b: Box, placed: readonly Box[], own: Own, moved: boolean): number {
+ *  count too (at its own place it may touch them; moved, it must not cover them). Words cut off
+ *  by the edge of the drawing area (`frame`) read no better than words over other words. */
+function cost(b: Box, placed: readonly Box[], own: Own, moved: boolean, frame?: Box): number {
   let c = 0;
+  if (frame) {
+    const off = outside(b, frame);
+    if (off > 0.5) c += ON_LABEL_COST + off;
+  }
   for (const q of placed) {
     const a = overlapArea(b, q);
     if (a > 0) c += ON_LABEL_COST + a;
@@ -174,12 +182,24 @@ function cost(b: Box, placed: readonly Box[], own: Own, moved: boolean): number 
   return c + STROKE_COST * (moved ? own.strokes.count(b) : own.strokes.count(b, own.lo, own.hi));
 }
 
-/** The cheapest offset for a label whose own place is `box`; the earliest wins a tie. */
-function bestOffset(box: Box, placed: readonly Box[], own: Own): Pt {
+/**
+ * The cheapest offset for a label whose own place is `box`; the earliest wins a tie. A label that
+ * reaches past the edge of the drawing area (`frame`) but is partly inside it also tries the
+ * places just inside the edge (one wholly off the area stays with what it labels).
+ */
+function bestOffset(box: Box, placed: readonly Box[], own: Own, frame?: Box): Pt {
   let best: Pt = [0, 0];
   let bestCost = Infinity;
-  for (const o of offsets(box)) {
-    const c = cost(moveBox(box, o[0], o[1]), placed, own, o[0] !== 0 || o[1] !== 0) + Math.hypot(o[0], o[1]);
+  const edge = frame && boxesOverlap(box, frame) && outside(box, frame) > 0.5 ? frame : undefined;
+  const tries = offsets(box);
+  if (edge) {
+    const dx = box.x0 < edge.x0 ? edge.x0 - box.x0 : box.x1 > edge.x1 ? Math.max(edge.x1 - box.x1, edge.x0 - box.x0) : 0;
+    const dy = box.y0 < edge.y0 ? edge.y0 - box.y0 : box.y1 > edge.y1 ? Math.max(edge.y1 - box.y1, edge.y0 - box.y0) : 0;
+    const sy = box.y1 - box.y0;
+    for (let k = 0; k <= 3; k++) tries.push([dx, dy + k * sy], [dx, dy - k * sy]);
+  }
+  for (const o of tries) {
+    const c = cost(moveBox(box, o[0], o[1]), placed, own, o[0] !== 0 || o[1] !== 0, edge) + Math.hypot(o[0], o[1]);
     if (c < bestCost) {
       best = o;
       bestCost = c;
@@ -271,10 +291,11 @@ export const NO_SHIFTS: LabelShifts = new Map();
  * (`taken`, placed already) and the bodies' names inside them (which stay), the names beside
  * bodies too narrow to hold them, every element's values and states in drawing order, then every
  * element's name. Each keeps off the labels placed before it and off the strokes of the other
- * elements and of the result's arrows. `prev` keeps the identity of unchanged entries (and of the
+ * elements and of the result's arrows, and, given the drawing area (`frame`, in the same content
+ * pixels), inside it: a label cut by its edge moves in, with a leader. `prev` keeps the identity of unchanged entries (and of the
  * whole map when nothing changed), so a canvas node is drawn again only when its own labels move.
  */
-export function placeElementLabels(groups: ReadonlyArray<{ id: string; kind?: string; prims: readonly Prim[] }>, taken: readonly Prim[] = [], prev: LabelShifts = NO_SHIFTS): LabelShifts {
+export function placeElementLabels(groups: ReadonlyArray<{ id: string; kind?: string; prims: readonly Prim[] }>, taken: readonly Prim[] = [], prev: LabelShifts = NO_SHIFTS, frame?: Box): LabelShifts {
   const placed: Box[] = [];
   for (const p of taken) if (p.t === "text") placed.push(textBox(p));
   // a body's name inside it stays in the corner chosen for it (moved, it would cross the outline);
@@ -297,7 +318,7 @@ export function placeElementLabels(groups: ReadonlyArray<{ id: string; kind?: st
   const moves = groups.map((): Array<[number, number, number]> => []);
   for (const { g, idx } of [...bodies, ...values, ...names]) {
     const box = blockBox(groups[g].prims, idx);
-    const [dx, dy] = bestOffset(box, placed, { strokes, lo: g, hi: g + 1 });
+    const [dx, dy] = bestOffset(box, placed, { strokes, lo: g, hi: g + 1 }, frame);
     placed.push(moveBox(box, dx, dy));
     if (dx || dy) for (const i of idx) moves[g].push([i, dx, dy]);
   }

@@ -115,6 +115,30 @@ describe("label placement", () => {
     expect(leader.t === "poly" && leader.pts[0][0]).toBe(10);
   });
 
+  it("moves a label the edge of the drawing area would cut back inside it, and leaves one wholly off it", () => {
+    // a port at x = 0 pointing left: its values end at the port, right-aligned, so most of the
+    // line lies left of a drawing area that starts at x = −30
+    const port: Prim[] = [{ t: "poly", pts: [[0, 0], [-40, 0]], stroke: "#000" }, text([-6, -10], "ṁ 59.88 kg/s · V 7.639 m/s", "#000", 11, { align: "right", baseline: "middle" })];
+    const far: Prim[] = [{ t: "poly", pts: [[-900, 0], [-940, 0]], stroke: "#000" }, text([-906, -10], "ṁ 1 kg/s", "#000", 11, { align: "right", baseline: "middle" })];
+    const frame = { x0: -30, y0: -200, x1: 300, y1: 200 };
+    const before = textBox(port[1] as Extract<Prim, { t: "text" }>);
+    expect(before.x0).toBeLessThan(frame.x0);
+    const shifts = placeElementLabels([{ id: "suction", prims: port }, { id: "far", prims: far }], [], undefined, frame);
+    const moved = shiftTexts(port, shifts.get("suction"));
+    const after = textBox(moved[1] as Extract<Prim, { t: "text" }>);
+    expect(after.x0).toBeGreaterThanOrEqual(frame.x0);
+    expect(after.x1).toBeLessThanOrEqual(frame.x1);
+    // moved in just as far as it reached past the edge, on its own line, still over its own
+    // place (so no leader)
+    expect(after.x0 - before.x0).toBeCloseTo(frame.x0 - before.x0, 6);
+    expect(after.y0).toBe(before.y0);
+    expect(moved).toHaveLength(port.length);
+    // an element panned out of sight keeps its label with it
+    expect(shifts.has("far")).toBe(false);
+    // without a frame (an export, the calc sheet) nothing moves
+    expect(placeElementLabels([{ id: "suction", prims: port }], []).size).toBe(0);
+  });
+
   it("puts a body's name beside it when the body is too narrow for it anywhere inside", async () => {
     const { bodyPrims } = await import("@/canvas/render/symbols");
     const body = (outline: [number, number][]) => ({ id: "stack", label: "Stack on skid", mass: 900, outline, cg: [0.3, 4] as [number, number] }) as unknown as Parameters<typeof bodyPrims>[0];
