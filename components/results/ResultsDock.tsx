@@ -20,6 +20,11 @@ type Tab = "reactions" | "hand" | "cases" | "sweep";
 const HEIGHT_KEY = "counterpoise:results-height";
 const MIN_HEIGHT = 150;
 
+/** The reactions' own height in a window this tall: 292 px on a laptop, more of a taller screen (up to 420 px) so the table's rows show under the words, never more than 38% of it. */
+export function ownHeight(windowHeight: number): number {
+  return Math.max(292, Math.min(420, Math.round(windowHeight * 0.38)));
+}
+
 /** The most the dock may take of a window this tall: the drawing keeps room to be drawn in. */
 export function dockLimit(windowHeight: number): number {
   return Math.max(MIN_HEIGHT, windowHeight - 260);
@@ -91,7 +96,7 @@ export function ResultsDock() {
   // the studies need room: the dock grows while one of them is open, leaving the drawing half the window
   const windowHeight = useWindowHeight();
   // a height saved in a taller window (or another device's) is held to this one, never past the drawing's room
-  const height = Math.min(chosen ?? (study ? Math.min(560, Math.round(windowHeight * 0.5)) : 292), dockLimit(windowHeight));
+  const height = Math.min(chosen ?? (study ? Math.min(560, Math.round(windowHeight * 0.5)) : ownHeight(windowHeight)), dockLimit(windowHeight));
   const choose = (h: number | null) => {
     setChosen(h);
     try {

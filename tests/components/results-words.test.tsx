@@ -3,7 +3,7 @@
 // off the supports, a sliding body), the body/support switch on the moment and friction columns,
 // and the SI / US switch across the results while typed inputs keep their units.
 import { readFileSync } from "node:fs";
-import { act, screen, waitFor, within } from "@testing-library/react";
+import { act, cleanup, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { parseSketch, solve, type SolveResult, type Sketch } from "@/solver/index";
@@ -273,6 +273,15 @@ describe("the line between the drawing and the results", () => {
       expect(dock.style.height).toBe("700px");
       // the saved choice itself is kept for a taller window
       expect(window.localStorage.getItem("counterpoise:results-height")).toBe("700");
+      // with no choice saved, a taller screen gives the reactions more room (38%, at most 420 px)
+      window.localStorage.removeItem("counterpoise:results-height");
+      cleanup();
+      Object.defineProperty(window, "innerHeight", { configurable: true, value: 1000 });
+      mountResultsDock(beam());
+      expect(screen.getByTestId("results-dock").style.height).toBe("380px");
+      Object.defineProperty(window, "innerHeight", { configurable: true, value: 1440 });
+      act(() => void window.dispatchEvent(new Event("resize")));
+      expect(screen.getByTestId("results-dock").style.height).toBe("420px");
     } finally {
       Object.defineProperty(window, "innerHeight", { configurable: true, value: tall });
       window.localStorage.removeItem("counterpoise:results-height");
