@@ -94,10 +94,10 @@ export function SweepPanel() {
   const combinationId = on.startsWith("combination:") ? on.slice(12) : undefined;
   // by default the margins, the friction margins of contacts with friction (a body slides long
   // before it tips as often as not: "when does it start to move?" needs both) and the resultants
-  const withFriction = new Set(sketch.supports.filter((s) => s.kind === "contact" && s.mu !== undefined && Number(s.mu) !== 0).map((s) => s.id));
-  const [picked, setPicked] = useState<string[]>(() =>
-    (saved?.quantities ?? choices.map((c) => c.spec).filter((q) => q.component !== "m" && (q.component !== "frictionMargin" || withFriction.has(q.support)))).map((q) => `${q.support}:${q.component}`),
-  );
+  const [picked, setPicked] = useState<string[]>(() => {
+    const withFriction = new Set(sketch.supports.filter((s) => s.kind === "contact" && s.mu !== undefined && Number(s.mu) !== 0).map((s) => s.id));
+    return (saved?.quantities ?? choices.map((c) => c.spec).filter((q) => q.component !== "m" && (q.component !== "frictionMargin" || withFriction.has(q.support)))).map((q) => `${q.support}:${q.component}`);
+  });
   const [data, setData] = useState<SweepData | null>(null);
   /** what the plot shows was run on, and with which settings: the limit finder searches the same */
   const [ran, setRan] = useState<{ spec: SweepSpec; on: string; sketch: SketchFile; text: string; id: number } | null>(null);
