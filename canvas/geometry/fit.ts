@@ -4,6 +4,7 @@
 // (scale and origin), which lets two versions be laid over each other.
 import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
+import type { Box } from "../render/labels";
 import { primsBox } from "../render/prims";
 import { scenePrims } from "../render/scenePrims";
 import type { Scene } from "../scene";
@@ -62,6 +63,15 @@ export function fitScenes(drawn: Drawn[], width: number, height: number, opts: {
     view = fitView(box, width, height, margins);
   }
   return view;
+}
+
+/**
+ * The canvas's drawing area in content pixels (the drawing's own coordinates at the view's scale),
+ * below the legend and a hair inside the edges: the labels keep inside it.
+ */
+export function drawingFrame(view: View, viewport: { width: number; height: number }): Box | undefined {
+  if (viewport.width <= 1 || viewport.height <= LEGEND_ROOM) return undefined;
+  return { x0: 2 - view.x, y0: LEGEND_ROOM - view.y, x1: viewport.width - 2 - view.x, y1: viewport.height - 2 - view.y };
 }
 
 const fitted = new WeakSet<View>();

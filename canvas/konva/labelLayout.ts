@@ -5,8 +5,8 @@
 // labels also keep inside the drawing area (below the legend): one its edge would cut (a port's
 // values on a phone, past the squeezed margin of a fit) moves in beside what it labels.
 import type { EditorStores } from "../context";
-import { LEGEND_ROOM } from "../geometry/fit";
-import { placeElementLabels, type Box } from "../render/labels";
+import { drawingFrame } from "../geometry/fit";
+import { placeElementLabels } from "../render/labels";
 import { elementGroups, resultLayer } from "../render/scenePrims";
 import { supportStates } from "../render/results";
 import { statesOf } from "./nodes";
@@ -26,8 +26,8 @@ export function followLabelLayout(stores: EditorStores, interaction: Interaction
     if (key.every((k, i) => k === last[i])) return;
     last = key;
     const groups = elementGroups(scene, view.scale, e.units, statesOf(shown));
-    const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown), stale) : [];
-    const frame: Box | undefined = viewport.width > 1 ? { x0: 2 - view.x, y0: LEGEND_ROOM - view.y, x1: viewport.width - 2 - view.x, y1: viewport.height - 2 - view.y } : undefined;
+    const frame = drawingFrame(view, viewport);
+    const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown), stale, frame) : [];
     const shifts = placeElementLabels(groups, results, it.labelShifts, frame);
     if (shifts !== it.labelShifts) interaction.setState({ labelShifts: shifts });
   };

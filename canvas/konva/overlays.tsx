@@ -16,6 +16,7 @@ import { handlePlace } from "../render/handles";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
 import { angleOnEdge, bodyAt } from "../placement";
 import { anchorOf, type Scene, type SceneBody, type SceneItem } from "../scene";
+import { drawingFrame } from "../geometry/fit";
 import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
@@ -49,7 +50,9 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       const parts = [...sc.bodies, ...sc.items.filter((i) => DRAWN_WITH_RESULTS.has(i.kind))];
       // the loads the labels keep off: followed at rest, caught up with by the next result in a drag
       const kept = sc.items.filter((i) => KEPT_OFF.has(i.kind));
-      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, ...parts];
+      // held while a pan lasts: the labels keep inside the drawing area where it ends
+      if (interaction.getState().panning) return;
+      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, e.view.x, e.view.y, e.viewport, ...parts];
       if (same(key, last) && (same(kept, lastKept) || interaction.getState().dragging)) return;
       last = key;
       lastKept = kept;
@@ -63,7 +66,7 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       // result's layer is drawn here, over their symbols
       if (a.shown) {
         const states = supportStates(a.shown);
-        primsRef.current = resultLayer(elementGroups(scene, e.view.scale, e.units, states), scene, e.view.scale, e.units, a.shown, states, a.stale);
+        primsRef.current = resultLayer(elementGroups(scene, e.view.scale, e.units, states), scene, e.view.scale, e.units, a.shown, states, a.stale, drawingFrame(e.view, e.viewport));
       } else primsRef.current = [];
       const layer = shapeRef.current?.getLayer();
       if (!layer) return;
@@ -74,10 +77,10 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       stores.analysis.subscribe(() => redraw(true)),
       stores.scene.subscribe(() => redraw(false)),
       stores.editor.subscribe((s, p) => {
-        if (s.view.scale !== p.view.scale || s.units !== p.units) redraw(false);
+        if (s.view !== p.view || s.units !== p.units || s.viewport !== p.viewport) redraw(false);
       }),
       interaction.subscribe((s, p) => {
-        if (!s.dragging && p.dragging) redraw(false);
+        if ((!s.dragging && p.dragging) || (!s.panning && p.panning)) redraw(false);
       }),
     ];
     redraw(false);

@@ -252,9 +252,9 @@ function moveTexts(prims: Prim[], idx: readonly number[], dx: number, dy: number
  * The result's drawing with its labels placed, in the order drawn (reactions first), off each
  * other and off the strokes of its own other arrows and of `under` (what the elements draw, with
  * any texts that stay where they are). Each label keeps off every stroke but those drawn just
- * before it: its own arrow.
+ * before it: its own arrow; and inside the drawing area when given one (`frame`).
  */
-export function placeResultLabels(prims: readonly Prim[], under: readonly Prim[] = []): Prim[] {
+export function placeResultLabels(prims: readonly Prim[], under: readonly Prim[] = [], frame?: Box): Prim[] {
   const out = prims.slice();
   const leaders: Prim[] = [];
   const placed: Box[] = [];
@@ -268,7 +268,7 @@ export function placeResultLabels(prims: readonly Prim[], under: readonly Prim[]
     const ownFrom0 = ownFrom;
     ownFrom = idx[idx.length - 1] + 1;
     const box = blockBox(prims, idx);
-    const [dx, dy] = bestOffset(box, placed, { strokes, lo: ownFrom0, hi: idx[0] });
+    const [dx, dy] = bestOffset(box, placed, { strokes, lo: ownFrom0, hi: idx[0] }, frame);
     const to = moveBox(box, dx, dy);
     placed.push(to);
     if (dx || dy) {

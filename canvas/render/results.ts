@@ -9,7 +9,7 @@ import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp
 import { anchorWorld, groundSideOf, labelAt, type DrawState } from "./symbols";
 import { nearestOnSegment } from "../geometry/polygon";
 import { CAUTION, INK, INK_SOFT, REACTION } from "./palette";
-import { placeResultLabels } from "./labels";
+import { placeResultLabels, type Box } from "./labels";
 
 export interface ResultOptions {
   units: UnitSystem;
@@ -23,6 +23,8 @@ export interface ResultOptions {
   under?: readonly Prim[];
   /** the supports' states, when the caller has them already (`supportStates(result)`) */
   states?: Map<string, DrawState>;
+  /** the drawing area, in content pixels: a label its edge would cut moves inside (the canvas) */
+  frame?: Box;
 }
 
 export interface ResultDrawing {
@@ -223,7 +225,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     }
   }
 
-  const out = placeResultLabels(prims, o.under);
+  const out = placeResultLabels(prims, o.under, o.frame);
   if (o.stale) for (const p of out) (p as { opacity?: number }).opacity = 0.38;
   return { prims: out, states };
 }

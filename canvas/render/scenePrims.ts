@@ -5,7 +5,7 @@ import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
 import type { Scene } from "../scene";
 import { isFinitePoint } from "../geometry/polygon";
-import { placeElementLabels, shiftTexts, type LabelShifts } from "./labels";
+import { placeElementLabels, shiftTexts, type Box, type LabelShifts } from "./labels";
 import { translate, type Prim } from "./prims";
 import { resultPrims, supportStates } from "./results";
 import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, standInPoint, unplacedPrims, type DrawState } from "./symbols";
@@ -63,10 +63,10 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
 const UNDER_RESULTS = new Set(["body", "pin", "roller", "contact", "fixed", "tie", "inlet", "outlet", "force", "couple", "distributed", "massSource"]);
 
 /** The result's drawing, its labels placed (they come first: the elements' labels make way). */
-export function resultLayer(groups: readonly Group[], scene: Scene, scale: number, units: UnitSystem, result: SolveResult, states: Map<string, DrawState>, stale = false) {
+export function resultLayer(groups: readonly Group[], scene: Scene, scale: number, units: UnitSystem, result: SolveResult, states: Map<string, DrawState>, stale = false, frame?: Box) {
   // the bodies' names (and texts that are part of a symbol) stay; the supports' and ports' labels make way
   const under = groups.filter((g) => UNDER_RESULTS.has(g.kind)).flatMap((g) => (g.kind === "body" ? g.prims : g.prims.filter((p) => p.t !== "text" || p.pinned)));
-  return resultPrims(scene, result, { units, scale, stale, under, states }).prims;
+  return resultPrims(scene, result, { units, scale, stale, under, states, frame }).prims;
 }
 
 /**

@@ -137,6 +137,11 @@ describe("label placement", () => {
     expect(shifts.has("far")).toBe(false);
     // without a frame (an export, the calc sheet) nothing moves
     expect(placeElementLabels([{ id: "suction", prims: port }], []).size).toBe(0);
+    // a reaction's value past the right edge comes in too
+    const reaction = text([296, 40], "2.953 kN", "#000", 11, { align: "left", baseline: "middle" });
+    const [inside] = placeResultLabels([reaction], [], frame);
+    expect(textBox(inside as Extract<Prim, { t: "text" }>).x1).toBeLessThanOrEqual(frame.x1);
+    expect(placeResultLabels([reaction])[0]).toBe(reaction);
   });
 
   it("puts a body's name beside it when the body is too narrow for it anywhere inside", async () => {
