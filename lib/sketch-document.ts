@@ -1,7 +1,7 @@
 // A sketch document as the API receives it: validated and migrated by the solver's parseSketch,
 // and the summary of its solve that listings show. Browser-safe (the solver is pure).
 import { z } from "zod";
-import { parseSketch, solve, solveCases, type ParseResult } from "@/solver";
+import { asDrawnStudy, parseSketch, solve, solveCases, type ParseResult } from "@/solver";
 import { CURRENT_VERSION, FORMAT, type SketchFile } from "@/solver/schema";
 import type { LowFactor, SolveSummary } from "@/db/tables/sketches";
 import { sketchDescriptionSchema, sketchTitleSchema, tagsSchema, versionMessageSchema, versionNumberSchema, STATUS_ORDER } from "./sketch-schemas";
@@ -40,8 +40,8 @@ export function lowestFactor(parsed: ParsedSketch): LowFactor | null {
   let worst: LowFactor | null = null;
   // the sketch as drawn is a run of its own only without cases: with them, it is solved on its own too
   const file = parsed.file;
-  const asDrawn = file.cases?.length || file.combinations?.length ? solveCases({ ...file, cases: undefined, combinations: undefined }).runs : [];
-  for (const run of [...asDrawn, ...solveCases(file).runs]) {
+  const hasCases = !!(file.cases?.length || file.combinations?.length);
+  for (const run of [...(hasCases ? asDrawnStudy(file).runs : []), ...solveCases(file).runs]) {
     if (!run.ok) continue;
     for (const [body, st] of Object.entries(run.stability)) {
       for (const check of ["overturning", "sliding"] as const) {

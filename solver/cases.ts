@@ -156,6 +156,21 @@ export function solveCases(file: SketchFile, onProgress: (done: number, total: n
   return { runs, names: elementNames(file), envelope: envelopeOf(runs), excluded: excludedRuns(runs), requirements };
 }
 
+/**
+ * The sketch as drawn, as a study of its own (one run, "As drawn"): with operating cases, the
+ * study above covers the cases only, but the values on the drawing (a design wind, a full flow
+ * typed in as the working point) are a state of their own whose factors of safety must not go
+ * unsaid. Without cases it is the same study as `solveCases`.
+ */
+export function asDrawnStudy(file: SketchFile): StudyResult {
+  return file.cases?.length || file.combinations?.length ? solveCases({ ...file, cases: undefined, combinations: undefined }) : solveCases(file);
+}
+
+/** The study with the sketch as drawn first, when it has cases (for the factors-of-safety table). */
+export function withAsDrawnRun(study: StudyResult, asDrawn: StudyResult): StudyResult {
+  return study === asDrawn || study.runs.some((r) => r.id === AS_DRAWN.id) ? study : { ...study, runs: [...asDrawn.runs, ...study.runs] };
+}
+
 const componentOf = (r: Reaction, c: Component): number | undefined => (c === "resultant" ? Math.hypot(r.fx, r.fy) : r[c]);
 
 const notHeld = (status: string): status is ExcludedRun["status"] => status === "tips" || status === "unrestrained";

@@ -5,9 +5,9 @@ import { solve } from "./solve";
 import type { SolveFailure, SolveResult } from "./types";
 
 export { parseSketch, planOf, zodErrors, type ParseResult } from "./parse";
-export { solve } from "./solve";
+export { solve, solveWithStability } from "./solve";
 export { solveSweep, createSweeper, linspace, FLOW_FACTOR, type SweepResult, type SweepPoint } from "./sweep";
-export { solveCases, envelopeOf, combineModels, COMPONENTS, type StudyResult, type CaseRun, type SupportEnvelope, type EnvelopeEntry, type Component } from "./cases";
+export { solveCases, asDrawnStudy, withAsDrawnRun, envelopeOf, combineModels, COMPONENTS, type StudyResult, type CaseRun, type SupportEnvelope, type EnvelopeEntry, type Component } from "./cases";
 export { bodyStability, DEFAULT_REQUIREMENTS, type BodyStability, type OverturningCheck, type SlidingCheck, type Requirements } from "./stability";
 export { findLimit, brent, type LimitResult, type LimitOptions } from "./limit";
 export { readQuantity, describeQuantity, type QuantitySpec, type QuantityComponent } from "./quantity";

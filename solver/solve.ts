@@ -7,15 +7,26 @@ import { direction, momentOf } from "./geometry";
 import { dot3, norm3, type Vec3 } from "./linalg";
 import { buildBodyModel, frictionCoefficient, type BodyModel } from "./model";
 import { massBalanceWarnings, portFlow, type PortFlow } from "./ports";
+import { bodyStability, type BodyStability, type Requirements } from "./stability";
 import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResult, SolveWarning, Status, Vec2 } from "./types";
 import { isShared, reuseEqual, sameWarning } from "./reuse";
 import { describeFreeMotion, describeSupport, fmtForce, overMu } from "./words";
 
 export function solve(sketch: Sketch): SolveResult {
+  return solveWithStability(sketch, null).result;
+}
+
+/**
+ * The solve and, given the required factors, each body's factors of safety against overturning
+ * and sliding as drawn (the editor says them under its status; `solveCases` gives each case's).
+ */
+export function solveWithStability(sketch: Sketch, required: Requirements): { result: SolveResult; stability: Record<string, BodyStability> };
+export function solveWithStability(sketch: Sketch, required: null): { result: SolveResult; stability: null };
+export function solveWithStability(sketch: Sketch, required: Requirements | null): { result: SolveResult; stability: Record<string, BodyStability> | null } {
   const { models, warnings } = prepare(sketch);
   const result = solveModels(models, warnings);
   if (isShared(sketch)) reuseEqual(sketch, 0, result.warnings, sameWarning);
-  return result;
+  return { result, stability: required ? Object.fromEntries(models.map((m) => [m.body.id, bodyStability(m, result, required)])) : null };
 }
 
 /** Port flows (with the flow factor), flow warnings and one model per body. */

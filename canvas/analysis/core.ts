@@ -1,6 +1,6 @@
 // One analysis of a sketch: parse (expressions evaluated once) and solve. Pure and
 // serialisable, so it runs the same on the main thread, in the worker and on the server.
-import { parseSketch, solve, type FieldError, type SolveResult, type SolveWarning, type Sketch } from "@/solver/index";
+import { DEFAULT_REQUIREMENTS, parseSketch, solveWithStability, type BodyStability, type FieldError, type SolveResult, type SolveWarning, type Sketch } from "@/solver/index";
 import type { FieldValue } from "@/solver/resolve";
 import type { SketchFile } from "@/solver/schema";
 
@@ -13,6 +13,8 @@ export interface AnalysisCore {
   /** the numeric sketch (SI numbers) when the input is valid */
   numeric: Sketch | null;
   result: SolveResult | null;
+  /** each body's factors of safety as drawn, against the sketch's required values */
+  stability: Record<string, BodyStability> | null;
   /** milliseconds spent parsing and solving */
   timeMs: number;
 }
@@ -43,15 +45,15 @@ export function analyseCore(file: SketchFile): AnalysisCore {
   try {
     const parsed = parseSketch(file);
     if (!parsed.ok) {
-      core = { ok: false, errors: parsed.errors, warnings: parsed.warnings, fields: parsed.fields, parameterValues: parsed.parameterValues, numeric: null, result: null };
+      core = { ok: false, errors: parsed.errors, warnings: parsed.warnings, fields: parsed.fields, parameterValues: parsed.parameterValues, numeric: null, result: null, stability: null };
     } else {
-      const result = solve(parsed.sketch);
+      const { result, stability } = solveWithStability(parsed.sketch, { ...DEFAULT_REQUIREMENTS, ...(parsed.file.stability ?? {}) });
       result.warnings.unshift(...parsed.warnings);
-      core = { ok: true, errors: [], warnings: result.warnings, fields: parsed.fields, parameterValues: parsed.parameterValues, numeric: parsed.sketch, result };
+      core = { ok: true, errors: [], warnings: result.warnings, fields: parsed.fields, parameterValues: parsed.parameterValues, numeric: parsed.sketch, result, stability };
     }
   } catch (err) {
     // the solver should never throw; if it does, the editor keeps working and says so
-    core = { ok: false, errors: [{ path: "", message: `the solve failed: ${(err as Error).message}` }], warnings: [], fields: {}, parameterValues: {}, numeric: null, result: null };
+    core = { ok: false, errors: [{ path: "", message: `the solve failed: ${(err as Error).message}` }], warnings: [], fields: {}, parameterValues: {}, numeric: null, result: null, stability: null };
   }
   const t1 = typeof performance !== "undefined" ? performance.now() : Date.now();
   return { ...core, timeMs: t1 - t0 };

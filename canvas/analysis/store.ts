@@ -5,6 +5,7 @@
 import { createStore, type StoreApi } from "zustand/vanilla";
 import type { SketchFile } from "@/solver/schema";
 import type { SolveResult, Sketch } from "@/solver/types";
+import type { BodyStability } from "@/solver/stability";
 import { fieldValuesById, NO_VALUES, type FieldValues } from "../scene";
 import type { EditorStore } from "../store";
 import { analyseCore, type AnalysisCore } from "./core";
@@ -19,6 +20,8 @@ export interface Analysis {
   shown: SolveResult | null;
   /** the numeric sketch `shown` belongs to */
   shownSketch: Sketch | null;
+  /** the factors of safety as drawn that go with `shown` */
+  shownStability: Record<string, BodyStability> | null;
   /** true when `shown` is an earlier sketch's result */
   stale: boolean;
   /** the editor's `fitRequest` when `shown` was solved: it moves on when the sketch is replaced as
@@ -36,6 +39,7 @@ export const EMPTY_ANALYSIS: Analysis = {
   fieldValues: NO_VALUES,
   shown: null,
   shownSketch: null,
+  shownStability: null,
   stale: false,
   shownGeneration: -1,
   pending: false,
@@ -56,10 +60,10 @@ export function nextAnalysis(prev: Analysis, sketch: SketchFile, core: AnalysisC
   // unchanged values keep their identity: the scene (and the drawing) need not be rebuilt
   const fieldValues = sameMap(fresh.values, prev.fieldValues.values) && sameMap(fresh.errors, prev.fieldValues.errors) ? prev.fieldValues : fresh;
   if (core.ok && core.result) {
-    return { sketch, core, fieldValues, shown: core.result, shownSketch: core.numeric, stale: false, shownGeneration: generation, pending: false };
+    return { sketch, core, fieldValues, shown: core.result, shownSketch: core.numeric, shownStability: core.stability, stale: false, shownGeneration: generation, pending: false };
   }
-  if (prev.shownGeneration !== generation) return { sketch, core, fieldValues, shown: null, shownSketch: null, stale: false, shownGeneration: generation, pending: false };
-  return { sketch, core, fieldValues, shown: prev.shown, shownSketch: prev.shownSketch, stale: prev.shown !== null, shownGeneration: prev.shownGeneration, pending: false };
+  if (prev.shownGeneration !== generation) return { sketch, core, fieldValues, shown: null, shownSketch: null, shownStability: null, stale: false, shownGeneration: generation, pending: false };
+  return { sketch, core, fieldValues, shown: prev.shown, shownSketch: prev.shownSketch, shownStability: prev.shownStability, stale: prev.shown !== null, shownGeneration: prev.shownGeneration, pending: false };
 }
 
 export type Runner = (sketch: SketchFile, done: (core: AnalysisCore) => void) => void;

@@ -4,7 +4,7 @@
 import { useDeferredValue, useMemo } from "react";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { errorInWords } from "./errorPlace";
-import { statusSentences, type Tone } from "./statusSentence";
+import { stabilitySentence, statusSentences, type Tone } from "./statusSentence";
 
 const BADGE: Record<Tone, { word: string; cls: string }> = {
   holds: { word: "Holds", cls: "border-ink/40 text-ink" },
@@ -30,10 +30,21 @@ function MoreErrors({ words }: { words: string[] }) {
   );
 }
 
+/** The body's factors of safety as drawn, under its status: in the caution colour when one falls short. */
+function StabilityLine({ sentence }: { sentence: { text: string; pass: boolean } | null }) {
+  if (!sentence) return null;
+  return (
+    <p className={`ml-[3.6rem] text-[12px] leading-snug ${sentence.pass ? "text-ink-soft" : "font-semibold text-caution"}`} data-testid="stability-as-drawn" data-pass={sentence.pass}>
+      {sentence.text}.
+    </p>
+  );
+}
+
 export function StatusBanner() {
   // deferred: a drag's frames come first, the panel catches up when the main thread is free
   const shown = useDeferredValue(useAnalysis((s) => s.shown));
   const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
+  const stability = useDeferredValue(useAnalysis((s) => s.shownStability));
   const stale = useAnalysis((s) => s.stale);
   const errors = useAnalysis((s) => s.core?.errors ?? []);
   const analysed = useAnalysis((s) => s.sketch);
@@ -70,6 +81,7 @@ export function StatusBanner() {
               {d}
             </p>
           ))}
+          <StabilityLine sentence={numeric ? stabilitySentence(numeric, s.body, stability?.[s.body]) : null} />
         </div>
       ))}
     </div>

@@ -5,6 +5,7 @@ import { describeFreeMotion, overMu } from "@/solver/words";
 import { portDirectionNotes } from "@/solver/ports";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
+import type { BodyStability } from "@/solver/stability";
 
 export type Tone = "holds" | "lifts" | "slips" | "tips" | "unrestrained";
 
@@ -203,4 +204,40 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
   if (general.length && out.length) out[0].details.push(...general);
   if (sketch.bodies.length > 1) for (const s of out) s.headline = `${sketch.bodies.find((b) => b.id === s.body)?.label || s.body}: ${s.headline}`;
   return out;
+}
+
+/** A factor of safety in words: to 3 significant figures, never rounded up to what is required (1.4996 is not "1.50"). */
+function factorText(factor: number, required: number): string {
+  if (!Number.isFinite(factor)) return "∞";
+  for (const d of [3, 4, 6]) {
+    const shown = Number(factor.toPrecision(d));
+    if (factor >= required || shown < required) return String(shown);
+  }
+  return String(factor);
+}
+
+/**
+ * One body's factors of safety as drawn, in a sentence under its status: "Factors of safety as
+ * drawn: against overturning about the upwind edge 1.37, below the required 1.5; against sliding
+ * 2.4 (1.5 required)". `pass` is false when one falls short. Null when neither applies.
+ */
+export function stabilitySentence(sketch: Sketch, body: string, st: BodyStability | undefined): { text: string; pass: boolean } | null {
+  if (!st) return null;
+  const names = new Map(sketch.supports.map((s) => [s.id, supportName(s)]));
+  const bits: string[] = [];
+  let pass = true;
+  for (const [against, c] of [["overturning", st.overturning], ["sliding", st.sliding]] as const) {
+    if ("notApplicable" in c) continue;
+    const about = "about" in c ? ` about ${names.get(c.about) ?? c.about}` : "";
+    const whole = "wholeBody" in c && c.wholeBody ? " (as a whole)" : "";
+    const f = factorText(c.factor, c.required);
+    if (c.pass) bits.push(`against ${against}${about}${whole} ${f} (${c.required} required)`);
+    else {
+      pass = false;
+      bits.push(`against ${against}${about}${whole} ${f}, below the required ${c.required}`);
+    }
+  }
+  if (!bits.length) return null;
+  const several = sketch.bodies.length > 1 ? ` of ${sketch.bodies.find((b) => b.id === body)?.label || body}` : "";
+  return { text: `Factors of safety${several} as drawn: ${bits.join("; ")}`, pass };
 }

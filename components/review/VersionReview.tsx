@@ -17,7 +17,7 @@ import type { UnitSystem } from "@/solver/units";
 import { reactionTable, stabilityTable } from "@/solver/report";
 import { withoutColumn, withoutEmptyReactionColumns } from "@/canvas/studies/tables";
 import { ReportTable } from "@/components/studies/ReportTable";
-import { studyOfDocument } from "@/lib/review/compare";
+import { asDrawnOfDocument, studyOfDocument } from "@/lib/review/compare";
 import { elementLabels } from "@/lib/review/pin-words";
 import { belowRequired, CaseTables } from "@/components/studies/CaseTables";
 import { CsvSubject } from "@/components/studies/csv";
@@ -33,14 +33,15 @@ type VersionData = {
 };
 
 /** The version's reactions as drawn, in one unit a table (the rows the editor, the CSV and the calc
- *  sheet use); and, when it has no operating cases, its factors of safety (with cases, the cases'
- *  tables below carry them for every run). */
+ *  sheet use), and its factors of safety as drawn (with cases, the cases' tables below carry each
+ *  case's; the values on the drawing are a state of their own). */
 export function VersionReactions({ document, units }: { document: SketchFile; units: UnitSystem }) {
   const { result, parsed } = useSolved(document);
-  const study = useMemo(() => (document.cases?.length || document.combinations?.length ? null : studyOfDocument(document)), [document]);
+  const study = useMemo(() => asDrawnOfDocument(document), [document]);
+  const hasCases = !!(document.cases?.length || document.combinations?.length);
   if (!result) return <Notice tone="error">This version does not solve{!parsed.ok ? `: ${parsed.errors[0]?.path} ${parsed.errors[0]?.message}` : "."}</Notice>;
   const names = Object.fromEntries(document.supports.map((s) => [s.id, s.label || s.id]));
-  const stability = study ? withoutColumn(stabilityTable(study, units), "case") : null;
+  const stability = study ? { ...withoutColumn(stabilityTable(study, units), "case"), ...(hasCases ? { title: "Factors of safety as drawn" } : {}) } : null;
   return (
     <>
       <ReportTable

@@ -3,7 +3,7 @@
 // required value. The sign-off dialogs list them; the calc sheet's first page says the same.
 import { parseSketch, solve, type ParseResult } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
-import { solveDocument, studyOfDocument } from "@/lib/review/compare";
+import { asDrawnOfDocument, solveDocument, studyOfDocument } from "@/lib/review/compare";
 import { caseFindings } from "@/solver/report";
 import { statusSentences } from "@/components/results/statusSentence";
 
@@ -18,6 +18,9 @@ export function versionConcerns(doc: unknown): string[] {
   const hasCases = !!(parsed.file.cases?.length || parsed.file.combinations?.length);
   const out: string[] = [];
   for (const s of statusSentences(parsed.sketch, result ?? solve(parsed.sketch))) if (s.tone !== "holds") out.push(`As drawn: ${s.headline}`);
+  // with cases, the values on the drawing are a state of their own: its factors of safety too
+  const asDrawn = hasCases ? asDrawnOfDocument(file) : null;
+  if (asDrawn) out.push(...caseFindings(asDrawn, false).map((f) => `As drawn: ${f}`));
   if (study) out.push(...caseFindings(study, hasCases));
   return out;
 }

@@ -18,6 +18,8 @@ import {
   solve,
   solveCases,
   stabilityTable,
+  asDrawnStudy,
+  withAsDrawnRun,
   type UnitSystem,
   type SolveResult,
 } from "@/solver";
@@ -83,6 +85,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const result: SolveResult = solve(parsed.sketch);
   result.warnings.unshift(...parsed.warnings);
   const study = solveCases(parsed.file);
+  // the values on the drawing are a state of their own: with cases, solved apart for its factors of safety
+  const asDrawn = parsed.file.cases?.length || parsed.file.combinations?.length ? asDrawnStudy(parsed.file) : study;
 
   const doc = new PDFDocument({ size: "A4", margins: { top: 44, bottom: 54, left: 44, right: 44 }, bufferPages: true, info: { Title: `${input.sketchTitle} v${input.version}`, Author: "Counterpoise", Subject: "Calculation sheet" } });
   registerFonts(doc);
@@ -131,6 +135,12 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     for (const w of more) para(`Warning: ${w.message}`, 8.5, w.code === "SLIP" || w.code === "LIFTOFF" || w.code === "SLACK" ? ACCENT : SOFT);
   }
   // the sheet's first page says when another case does not hold or a factor of safety falls short
+  const drawnLines = hasCases ? caseFindings(asDrawn, false) : [];
+  if (drawnLines.length) {
+    doc.moveDown(0.3);
+    para("Factors of safety as drawn:", 9, INK);
+    for (const l of drawnLines) para(`• ${l}`, 8.5, ACCENT);
+  }
   const caseLines = caseFindings(study, hasCases);
   if (caseLines.length) {
     doc.moveDown(0.3);
@@ -209,7 +219,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     drawTable(doc, singleRunTable(withoutAbsentMoment(caseReactionTable(study, units), study)), left, width);
   }
   heading("Stability");
-  drawTable(doc, stabilityTable(study, units), left, width, { groupBy: "case" });
+  // with cases, the sketch as drawn first: its own state, then each case's
+  drawTable(doc, stabilityTable(withAsDrawnRun(study, asDrawn), units), left, width, { groupBy: "case" });
 
   // ---- sweeps: each on its saved case, one chart per unit (forces, moments, ratios)
   for (const sw of parsed.file.sweeps ?? []) {

@@ -3,7 +3,7 @@
 // of safety, sweeps, underlay), and the result: every support's reaction before and
 // after with the change (absolute and %), and each body's status ("holds → lifts").
 // Pure and browser-safe: the API, the comparison page and "compare with my kept changes" share it.
-import { parseSketch, solve, solveCases, type ParseResult, type SolveResult, type StudyResult } from "@/solver";
+import { asDrawnStudy, parseSketch, solve, solveCases, type ParseResult, type SolveResult, type StudyResult } from "@/solver";
 import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } from "@/solver/schema";
 import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
 import { stateWord } from "@/solver/report";
@@ -112,6 +112,16 @@ export function studyOfDocument(file: SketchFile): StudyResult | null {
   const { parsed } = solveDocument(file);
   const study = parsed.ok ? solveCases(parsed.file) : null;
   studyCache.set(file, study);
+  return study;
+}
+
+const asDrawnCache = new WeakMap<SketchFile, StudyResult | null>();
+/** The document as drawn as a study of its own (`asDrawnStudy`: its study itself without cases), once per document; null when it does not parse. */
+export function asDrawnOfDocument(file: SketchFile): StudyResult | null {
+  if (asDrawnCache.has(file)) return asDrawnCache.get(file) ?? null;
+  const { parsed } = solveDocument(file);
+  const study = !parsed.ok ? null : parsed.file.cases?.length || parsed.file.combinations?.length ? asDrawnStudy(parsed.file) : studyOfDocument(file);
+  asDrawnCache.set(file, study);
   return study;
 }
 

@@ -5,6 +5,7 @@
 import { readFileSync } from "node:fs";
 import { act, cleanup, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
+import { pushedBlock } from "../support/pushed-block";
 import { describe, expect, it } from "vitest";
 import { parseSketch, solve, type SolveResult, type Sketch } from "@/solver/index";
 import { formatQuantity } from "@/solver/units";
@@ -375,4 +376,22 @@ describe("the examples menu", () => {
     expect(screen.getByTestId("status-sentence")).toHaveAttribute("data-tone", "tips");
     expect(screen.getByTestId("status-sentence")).toHaveTextContent(/Tips about the rear wheels .* — the front caster would have to pull [\d.]+ N/);
   }, 15_000);
+});
+
+describe("the factors of safety as drawn, under the status", () => {
+  // the pushed block (tests/support/pushed-block.ts): overturning 1.226 and sliding 2.003 at
+  // P = 4 kN, 2.452 and 3.106 at 2 kN
+  const block = pushedBlock;
+
+  it("says each factor with the support it tips about, in the caution colour when one falls short", async () => {
+    mountResultsDock(block("4 kN"));
+    const line = await screen.findByTestId("stability-as-drawn");
+    expect(line).toHaveTextContent("Factors of safety as drawn: against overturning about the far foot 1.23, below the required 1.5; against sliding 2 (1.5 required).");
+    expect(line).toHaveAttribute("data-pass", "false");
+    cleanup();
+    mountResultsDock(block("2 kN"));
+    const ok = await screen.findByTestId("stability-as-drawn");
+    expect(ok).toHaveTextContent("against overturning about the far foot 2.45 (1.5 required); against sliding 3.11 (1.5 required)");
+    expect(ok).toHaveAttribute("data-pass", "true");
+  });
 });

@@ -1,11 +1,12 @@
-// A version's page states its reactions in one unit a table, and, for a sketch without operating
-// cases, its factors of safety: a checker reads there what the calc sheet and the sign-off findings say.
+// A version's page states its reactions in one unit a table, and its factors of safety as drawn: a
+// checker reads there what the calc sheet and the sign-off findings say.
 import { render, screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { VersionReactions } from "@/components/review/VersionReview";
 import trailer from "@/canvas/examples/fire-monitor-trailer.json";
 import washingCart from "@/canvas/examples/washing-cart.json";
 import type { SketchFile } from "@/solver/schema";
+import { parseSketch, solveCases } from "@/solver";
 
 const doc = trailer as unknown as SketchFile;
 const num = (s: string | null | undefined) => Number((s ?? "").replace("−", "-").replace(/[^\d.eE-]/g, ""));
@@ -57,9 +58,21 @@ describe("the reactions and factors of safety on a version's page", () => {
     expect(s.rows.some((row) => row[s.col(/^Against/)] === "overturning")).toBe(true);
   });
 
-  it("leaves the factors to the cases' tables when the version has operating cases", () => {
-    render(<VersionReactions document={washingCart as unknown as SketchFile} units="SI" />);
+  it("with operating cases, still shows the factors of the sketch as drawn (the cases' tables carry theirs)", () => {
+    const cart = washingCart as unknown as SketchFile;
+    render(<VersionReactions document={cart} units="SI" />);
     expect(screen.getByTestId("version-reactions")).toBeInTheDocument();
-    expect(screen.queryByRole("region", { name: "Factors of safety" })).toBeNull();
+    const section = screen.getByRole("region", { name: "Factors of safety" });
+    expect(within(section).getByRole("heading", { name: "Factors of safety as drawn" })).toBeInTheDocument();
+    // the values on the drawing, not a case's: the file solved with its cases taken away
+    const parsed = parseSketch(cart);
+    if (!parsed.ok) throw new Error("the cart parses");
+    const drawn = solveCases({ ...parsed.file, cases: undefined, combinations: undefined }).runs[0];
+    const ot = drawn.ok ? drawn.stability[cart.bodies[0].id].overturning : null;
+    if (!ot || "notApplicable" in ot) throw new Error("the cart as drawn has an overturning check");
+    const s = cells(within(section).getByTestId("stability"));
+    const row = s.rows.find((r) => r[s.col(/^Against/)] === "overturning")!;
+    expect(num(row[s.col(/^Factor/)])).toBeCloseTo(ot.factor, 3);
+    expect(s.col(/^Case/)).toBe(-1);
   });
 });

@@ -5,6 +5,7 @@ import { versionConcerns, withOpenThreads } from "@/components/review/concerns";
 import { studyOfDocument } from "@/lib/review/compare";
 import type { SketchFile } from "@/solver/schema";
 import { loadFixture } from "./solver/helpers";
+import { pushedBlock } from "../support/pushed-block";
 
 describe("a version's concerns for sign-off", () => {
   it("the trailer with a low throw case: the lift as drawn, and the overturning factor short of 1.5 (common practice, from memory)", () => {
@@ -50,5 +51,20 @@ describe("a version's concerns for sign-off", () => {
       "1 comment thread still open on an earlier version (v2): resolve it there if this version settles it, or say why not",
     ]);
     expect(withOpenThreads(["x"], [], [])).toEqual(["x"]);
+  });
+});
+
+describe("the sketch as drawn, beside its cases", () => {
+  // the pushed block (tests/support/pushed-block.ts): 1.226 against overturning as drawn (P = 4 kN),
+  // 2.452 in its one case (P = 2 kN)
+  const block = pushedBlock("4 kN", { cases: [{ id: "light", name: "Light push", parameters: { P: "2 kN" } }] });
+
+  it("a factor of safety short as drawn is said even when every case passes", () => {
+    const concerns = versionConcerns(block);
+    expect(concerns).toEqual(["As drawn: factor of safety against overturning about far foot 1.226, below the required 1.5"]);
+    // the values on the drawing are the only short one: the case itself passes (2.452)
+    const study = studyOfDocument(block);
+    const light = study!.runs[0];
+    expect(light.ok && "factor" in light.stability.b.overturning && light.stability.b.overturning.factor).toBeCloseTo((1000 * 9.80665 * 0.5) / 2000, 6);
   });
 });

@@ -11,6 +11,7 @@ import { caseReactionTable, designLoadTable, envelopeTable, stabilityTable, type
 import { loadFixture } from "../solver/helpers";
 import { longLabelFileWithStudies } from "./long-labels";
 import { pdfText } from "../../support/pdf-text";
+import { pushedBlock } from "../../support/pushed-block";
 
 interface PageItem {
   str: string;
@@ -142,6 +143,21 @@ describe("calc sheet PDF", () => {
     expect(text).not.toContain("stand in for the case's own");
     expect(text).toContain(`Crossing: front jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
   }, 60000);
+
+  it("with cases, says the factors of safety of the sketch as drawn too: a short one on the first page, and its own rows first in the stability table", async () => {
+    // the pushed block (tests/support/pushed-block.ts): overturning factor 1.226 as drawn, 2.452 in
+    // the one case (P = 2 kN)
+    const file = pushedBlock("4 kN", { cases: [{ id: "light", name: "Light push", parameters: { P: "2 kN" } }] });
+    const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Block", version: 1, savedAt: new Date(), signoff: [], file });
+    const { text } = await pdfText(buf);
+    expect(text).toMatch(/Result as drawn Holds .* Factors of safety as drawn: • factor of safety against overturning about far foot 1\.226, below the required 1\.5/);
+    // the stability table: the sketch as drawn (FAIL), then the case (pass)
+    const table = text.slice(text.indexOf("Stability"));
+    expect(table.indexOf("As drawn")).toBeGreaterThan(0);
+    expect(table.indexOf("As drawn")).toBeLessThan(table.indexOf("Light push"));
+    expect(table).toContain("Case: As drawn block overturning 4.903 4.000 kN·m 1.226 1.500 FAIL far foot");
+    expect(table).toContain("Case: Light push block overturning 4.903 2.000 kN·m 2.452 1.500 pass far foot");
+  });
 
   it("a sweep saved on a combination is solved as its factored load set, and says so", async () => {
     const file = loadFixture("fire-monitor-trailer.json");
