@@ -113,6 +113,8 @@ function segmentHits(a: Pt, b: Pt, box: Box): boolean {
 }
 
 const CELL = 48;
+/** A stroke across more squares than this is not filed by square. */
+const WIDE_CELLS = 4096;
 
 /**
  * Strokes filed by the squares of a grid they pass, each with its owner (an index: the element, or
@@ -124,6 +126,8 @@ class Strokes {
   private owners: number[] = [];
   private seen: number[] = [];
   private stamp = 0;
+  /** strokes across more squares than `WIDE_CELLS`, asked about by every label */
+  private wide: number[] = [];
 
   add(segs: readonly Segment[], owner: number) {
     for (const s of segs) {
@@ -132,6 +136,13 @@ class Strokes {
       this.owners.push(owner);
       this.seen.push(0);
       const [a, b] = s;
+      // a stroke across many squares (an outline kilometres long, typed in at a close zoom) is
+      // asked about by every label instead: filed square by square it would fill millions
+      const span = (Math.floor(Math.max(a[0], b[0]) / CELL) - Math.floor(Math.min(a[0], b[0]) / CELL) + 1) * (Math.floor(Math.max(a[1], b[1]) / CELL) - Math.floor(Math.min(a[1], b[1]) / CELL) + 1);
+      if (span > WIDE_CELLS) {
+        this.wide.push(k);
+        continue;
+      }
       for (let x = Math.floor(Math.min(a[0], b[0]) / CELL); x <= Math.floor(Math.max(a[0], b[0]) / CELL); x++)
         for (let y = Math.floor(Math.min(a[1], b[1]) / CELL); y <= Math.floor(Math.max(a[1], b[1]) / CELL); y++) {
           const key = x * 1_000_003 + y;
@@ -147,6 +158,11 @@ class Strokes {
   count(b: Box, lo = 0, hi = 0): number {
     const stamp = ++this.stamp;
     let n = 0;
+    for (const k of this.wide) {
+      const o = this.owners[k];
+      if (o >= lo && o < hi) continue;
+      if (segmentHits(this.segs[k][0], this.segs[k][1], b)) n++;
+    }
     for (let x = Math.floor(b.x0 / CELL); x <= Math.floor(b.x1 / CELL); x++)
       for (let y = Math.floor(b.y0 / CELL); y <= Math.floor(b.y1 / CELL); y++) {
         for (const k of this.cells.get(x * 1_000_003 + y) ?? []) {

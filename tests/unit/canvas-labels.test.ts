@@ -3,7 +3,7 @@
 // gets a leader line. The sketch is invented to crowd: a hold-down strap beside a contact, a pin
 // and a roller 0.3 m apart, a port at a corner next to a force.
 import { describe, expect, it } from "vitest";
-import { parseSketch, solveFile, type SolveResult } from "@/solver/index";
+import { parseSketch, solve, solveFile, type SolveResult } from "@/solver/index";
 import { buildScene, fieldValuesById } from "@/canvas/scene";
 import { elementGroups, scenePrims } from "@/canvas/render/scenePrims";
 import { supportStates } from "@/canvas/render/results";
@@ -234,5 +234,31 @@ describe("leader lines", () => {
         }
     }
     expect(leaders).toBeGreaterThan(0);
+  });
+});
+
+describe("label placement on a very long body", () => {
+  it("places the labels of an outline a thousand kilometres long at a close zoom without filling a square per 48 px of it", () => {
+    // 1e6 m at 120 px/m: an outline stroke 1.2e8 px long (2.5 million squares of the stroke index)
+    const file = {
+      format: "counterpoise.sketch",
+      version: 6,
+      title: "Long body",
+      parameters: {},
+      bodies: [{ id: "b1", label: "Body 1", outline: [[0, 0], [1e6, 0], [1e6, 1], [0, 1]], mass: "100 kg" }],
+      supports: [{ id: "s1", body: "b1", kind: "fixed", at: [0.5, 0] }],
+      loads: [],
+      ports: [{ id: "p1", body: "b1", kind: "inlet", at: [0, 0.5], angle: 0, massFlow: 39.27, velocity: 5, pressure: "200 kPa", area: 0.007854 }],
+      massSources: [],
+    } as unknown as SketchFileInput;
+    const parsed = parseSketch(file);
+    if (!parsed.ok) throw new Error("the sketch parses");
+    const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
+    const result = solve(parsed.sketch);
+    const { groups, results } = scenePrims(scene, 120, "SI", result);
+    expect(groups.length).toBeGreaterThan(0);
+    // the port's label still keeps off the body's outline (the long strokes are asked about too)
+    const again = placeElementLabels(groups, results, undefined, { x0: -200, y0: -300, x1: 800, y1: 300 });
+    expect(again).toBeInstanceOf(Map);
   });
 });
