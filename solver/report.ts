@@ -120,6 +120,10 @@ const STATE_WORDS: Record<string, string> = { bearing: "bearing", lifted: "lifts
  *  lifted contact or a slack tie would have to carry: it "would pull" or "would push", as the
  *  drawing's dashed arrow says, not "lifts" beside a force it cannot give. */
 export function stateWord(r: SolveResult["reactions"][string], bodyStatus?: string): string {
+  // a body that tips: its rows are what would hold it with every support able to pull; a contact
+  // bearing there whose margin (the last engagement that held the body, carried on) is below zero
+  // leaves its base as the body turns, and friction under forces it never gets says nothing
+  if (bodyStatus === "tips" && r.state === "bearing") return r.margin !== undefined && r.margin < 0 ? "lifts as it tips" : "bearing";
   if (r.state === "bearing" && r.friction && overMu(r.friction.needed, r.friction.mu)) return "slips";
   if ((bodyStatus === "tips" || bodyStatus === "unrestrained") && (r.state === "lifted" || r.state === "slack")) return r.state === "lifted" ? "would pull" : "would push";
   return STATE_WORDS[r.state] ?? r.state;

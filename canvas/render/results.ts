@@ -42,11 +42,14 @@ const fq = (v: number, k: Parameters<typeof formatQuantity>[1], u: UnitSystem) =
 const finite = (p: Pt) => Number.isFinite(p[0]) && Number.isFinite(p[1]);
 const portReadable = (p: Extract<SceneItem, { kind: "inlet" | "outlet" }>) => Number.isFinite(p.angle) && p.at.every(Number.isFinite);
 
-/** The drawing states of every support: lifted and slack from the result, slips from its warnings. */
+/** The drawing states of every support: lifted and slack from the result (and, on a body that tips, from the margins), slips from its warnings. */
 export function supportStates(result: SolveResult): Map<string, DrawState> {
   const states = new Map<string, DrawState>();
-  for (const [id, r] of Object.entries(result.reactions)) states.set(id, r.state);
-  for (const w of result.warnings) if (w.code === "SLIP") for (const id of w.ids) if (states.get(id) === "bearing") states.set(id, "slips");
+  const tips = (r: { body: string }) => result.bodies[r.body]?.status === "tips";
+  // a body that tips: a contact still bearing in the forces that would hold it, but below zero in
+  // its margin, leaves its base as the body turns (drawn lifted); friction says nothing there
+  for (const [id, r] of Object.entries(result.reactions)) states.set(id, tips(r) && r.state === "bearing" && r.margin !== undefined && r.margin < 0 ? "lifted" : r.state);
+  for (const w of result.warnings) if (w.code === "SLIP") for (const id of w.ids) if (states.get(id) === "bearing" && !tips(result.reactions[id])) states.set(id, "slips");
   return states;
 }
 

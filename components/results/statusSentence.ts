@@ -180,6 +180,13 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
 
     // a port drawn against its kind is likely a slip of the input: said before anything else
     const details: string[] = portNotes.filter((n) => n.body === b.id).map((n) => n.message);
+    if (body.status === "tips") {
+      // the contacts the turn lifts besides the one named: still bearing in the forces shown (every
+      // support able to pull), below zero in the margins, which carry on from the body last held
+      const also = reactions.filter(([s, r]) => s.kind === "contact" && r.state === "bearing" && r.margin !== undefined && r.margin < 0).map(([s]) => supportName(s));
+      if (also.length)
+        details.push(`${cap(list(also))} ${also.length === 1 ? "lifts" : "lift"} off as well as it turns (below zero in the Margin column); the forces shown are those that would hold it with every support able to pull.`);
+    }
     if (slip) details.push(...slip.details);
     if (slip && body.status === "lifts") details.push(`${liftSentence(c)}.`);
     const shared = slip ? sharedFrictionNote(c) : null;

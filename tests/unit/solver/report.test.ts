@@ -257,3 +257,44 @@ describe("one unit per table, chosen by its largest value", () => {
     expect([k.columns[col("fx")].unit, k.columns[col("m")].unit]).toEqual(["kip", "kip·ft"]);
   });
 });
+
+describe("a body that tips about one contact of three", () => {
+  // The monitor trailer (an invented scenario) on its rear foot, axle and front jack: as the flow
+  // grows the jack lifts first, then the axle unloads until the trailer turns about the rear foot
+  // alone. Past that the forces shown are those every support able to pull would need (the file
+  // format's rule: there the jack pulls and the axle still pushes), but the axle too leaves its base.
+  async function trailerAt(Q: string) {
+    const { exampleById } = await import("@/canvas/examples");
+    const { statusSentences } = await import("@/components/results/statusSentence");
+    const { supportStates } = await import("@/canvas/render/results");
+    const file = exampleById("fire-monitor-trailer")!.sketch;
+    const p = parseSketch({ ...file, parameters: { ...file.parameters, Q } });
+    if (!p.ok) throw new Error("the trailer parses");
+    const result = solve(p.sketch);
+    const rows = reactionTable(result, "SI").rows;
+    const state = (id: string) => rows.find((r) => r[0] === id)![9];
+    return { result, state, sentence: statusSentences(p.sketch, result)[0], drawn: supportStates(result) };
+  }
+
+  it("says the axle lifts as it tips, in the words, the table and the drawing, as its margin has said since it crossed zero", async () => {
+    const held = await trailerAt("2200 gpm");
+    expect(held.result.bodies.trailer.status).toBe("lifts");
+    expect(held.result.reactions.axle.margin!).toBeGreaterThan(0);
+    const tipped = await trailerAt("2930 gpm");
+    expect(tipped.result.bodies.trailer.status).toBe("tips");
+    // the contract's forces: the axle still pushes, the jack would pull
+    expect(tipped.result.reactions.axle.n!).toBeGreaterThan(0);
+    expect(tipped.result.reactions.jack.n!).toBeLessThan(0);
+    // …but the axle's margin (the last engagement that held the trailer, carried on) is below zero
+    expect(tipped.result.reactions.axle.margin!).toBeLessThan(0);
+    expect(tipped.sentence.headline).toMatch(/^Tips about the rear stabiliser foot — the front jack .* would have to pull/);
+    expect(tipped.sentence.details[0]).toBe(
+      "The axle (both wheels) lifts off as well as it turns (below zero in the Margin column); the forces shown are those that would hold it with every support able to pull.",
+    );
+    expect(tipped.state("axle")).toBe("lifts as it tips");
+    expect(tipped.state("foot")).toBe("bearing");
+    expect(tipped.state("jack")).toBe("would pull");
+    expect(tipped.drawn.get("axle")).toBe("lifted");
+    expect(tipped.drawn.get("foot")).toBe("bearing");
+  });
+});
