@@ -26,6 +26,7 @@ import {
 import { caseWarnings, combinationWarnings } from "@/solver/cases";
 import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
+import { defaultMomentPoint } from "@/components/results/handCheck";
 import { caseFindings, designLoadTable, excludedWords, slipWords, unsolvedWords, type Table } from "@/solver/report";
 import { lineChartSvg } from "./chart";
 import { sweepCharts, sweepEverywhere, sweepQuantities } from "./sweeps";
@@ -197,7 +198,10 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // ---- hand check
   for (const bodyId of Object.keys(result.bodies)) {
     heading(`Hand check — ${bodyId}`);
-    drawTable(doc, handCheckTable(result, bodyId, [0, 0], units), left, width);
+    // about the point the results panel's hand check takes by default (the body's first support,
+    // else its centre of gravity), so the sheet and the screen show the same terms
+    const about = defaultMomentPoint(result.equations[bodyId], parsed.sketch.bodies.find((b) => b.id === bodyId)?.cg);
+    drawTable(doc, handCheckTable(result, bodyId, about, units), left, width);
   }
 
   // ---- reactions per case, envelope, stability

@@ -72,6 +72,9 @@ describe("calc sheet PDF", () => {
     expect(pages).toBeGreaterThan(1);
     expect(text).toContain("COUNTERPOISE · CALCULATION SHEET");
     expect(text).toContain("Monitor trailer");
+    // the hand check takes moments about the point the results panel takes by default: the first
+    // support (the rear leg at (0, 0.3) m), so a checker sees the same terms on screen and paper
+    expect(text).toContain("ΣM about (0, 0.3) m");
     expect(text).toContain("Workspace: Demo: Riverside Pump Station");
     expect(text).toContain("Version 3 — raised the riser to 2.8 m");
     expect(text).toMatch(/Prepared by Eddie Editor, 2026-11-30 10:00 UTC/);
