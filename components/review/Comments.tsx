@@ -25,17 +25,27 @@ export type CommentsData = {
   canComment: boolean;
 };
 
+/** The @mention being typed at the end of `text` (the words after “@”, "" right after it), or null when it does not end in one. */
+export function mentionQuery(text: string): string | null {
+  const m = /(^|\s)@([\p{L}\p{N} ]{0,30})$/u.exec(text);
+  if (!m) return null;
+  return m[2] === "" || !/\s{2}|\s$/.test(m[2]) ? m[2] : null;
+}
+
 /** A text box that offers the workspace's members after “@”: ↑/↓ pick one, Enter or Tab puts it in, Escape closes the list. */
 function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label }: { id: string; value: string; onChange: (v: string) => void; members: Member[]; placeholder?: string; rows?: number; label: string }) {
   const ref = useRef<HTMLTextAreaElement>(null);
-  const [query, setQuery] = useState<string | null>(null);
+  // where the caret was when the person last typed (null: the list is closed); the query is read
+  // from the text as it is now, so a text changed from outside (emptied once the comment is
+  // posted) closes the list unless it still ends in an @mention there
+  const [typedAt, setTypedAt] = useState<number | null>(null);
   const [active, setActive] = useState(0);
+  const query = typedAt === null || typedAt > value.length ? null : mentionQuery(value.slice(0, typedAt));
   const matches = query === null ? [] : members.filter((m) => m.name.toLowerCase().startsWith(query.toLowerCase()) || m.name.toLowerCase().includes(` ${query.toLowerCase()}`)).slice(0, 5);
   const current = matches.length ? Math.min(active, matches.length - 1) : -1;
   const listId = `${id}-mentions`;
-  const track = (text: string, caret: number) => {
-    const m = /(^|\s)@([\p{L}\p{N} ]{0,30})$/u.exec(text.slice(0, caret));
-    setQuery(m && !/\s{2}|\s$/.test(m[2]) ? m[2] : m && m[2] === "" ? "" : null);
+  const track = (text: string, at: number) => {
+    setTypedAt(mentionQuery(text.slice(0, at)) === null ? null : at);
     setActive(0);
   };
   const insert = (name: string) => {
@@ -43,7 +53,7 @@ function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label
     const caret = el?.selectionStart ?? value.length;
     const before = value.slice(0, caret).replace(/@([\p{L}\p{N} ]{0,30})$/u, `@${name} `);
     onChange(before + value.slice(caret));
-    setQuery(null);
+    setTypedAt(null);
     requestAnimationFrame(() => {
       el?.focus();
       el?.setSelectionRange(before.length, before.length);
@@ -82,7 +92,7 @@ function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label
           } else if (e.key === "Escape") {
             e.preventDefault();
             e.stopPropagation();
-            setQuery(null);
+            setTypedAt(null);
           }
         }}
         className="block w-full rounded-md border border-rule bg-paper-card px-3 py-2 text-[13.5px] text-ink outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25"

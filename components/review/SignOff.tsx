@@ -2,6 +2,7 @@
 // The sign-off of a version: where it stands, the title block (prepared / checked / approved,
 // with names and dates), the steps open to the reader, and the record of every step.
 import { useMutation, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
 import { useState } from "react";
 import { Button, Notice } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
@@ -18,7 +19,35 @@ export type SignOffData = {
   allowed: SignOffStep[];
   /** the sketch's latest version, when it is newer than this one */
   newer?: number | null;
+  /** for an owner who may not approve this checked version: why, and (when no other owner may) what to do */
+  approval?: { reason: string; remedy: string | null; membersPath: string } | null;
 };
+
+/** Why the reader, an owner, may not approve the checked version; "the Members page" in the remedy links there. */
+function ApprovalNote({ approval }: { approval: NonNullable<SignOffData["approval"]> }) {
+  const PAGE = "the Members page";
+  const at = approval.remedy?.indexOf(PAGE) ?? -1;
+  return (
+    <div className="rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-[13px] text-ink" data-testid="signoff-approval" role="note">
+      <p>{approval.reason}</p>
+      {approval.remedy ? (
+        <p className="mt-1">
+          {at < 0 ? (
+            approval.remedy
+          ) : (
+            <>
+              {approval.remedy.slice(0, at)}
+              <Link href={approval.membersPath} className="font-medium underline decoration-ink/30 underline-offset-2 hover:decoration-ink">
+                {PAGE}
+              </Link>
+              {approval.remedy.slice(at + PAGE.length)}
+            </>
+          )}
+        </p>
+      ) : null}
+    </div>
+  );
+}
 
 const MARK: Record<ReviewState, { mark: string; box: string }> = {
   draft: { mark: "○", box: "border-rule bg-paper-deep text-ink-soft" },
@@ -123,6 +152,7 @@ export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: S
         <ReviewBadge state={data.state} />
         <p className="text-sm text-ink-soft">{data.sentence}</p>
       </div>
+      {data.approval && data.state === "checked" ? <ApprovalNote approval={data.approval} /> : null}
       <TitleBlock block={data.titleBlock} state={data.state} />
       {data.newer && (data.state === "draft" || data.state === "returned" || data.state === "withdrawn") ? (
         <p className="text-sm text-ink-soft" data-testid="signoff-superseded">

@@ -1,7 +1,7 @@
 import "server-only";
 import { db } from "@/db";
 import { workspaceContacts, type MemberContact } from "@/db/queries/comments";
-import { applySignOff, getVersionAccess, listSignOffs, titleBlockOf } from "@/db/queries/review";
+import { applySignOff, getVersionAccess, listSignOffs, titleBlockOf, type VersionAccess } from "@/db/queries/review";
 import { lockRole } from "@/db/queries/sketches";
 import { recordAudit } from "../audit";
 import { appUrl } from "../env";
@@ -9,7 +9,7 @@ import { AppError } from "../errors";
 import { sendMailInBackground } from "../mail";
 import { can } from "../roles";
 import { signOffMail } from "./mail";
-import { allowedSteps, decideSignOff, newerThan, SIGN_OFF_RULES, STATE_WORDS, type SignOffStep } from "./rules";
+import { allowedSteps, decideSignOff, newerThan, SIGN_OFF_RULES, SIGN_OFF_STEPS, STATE_WORDS, type SignOffStep } from "./rules";
 
 type Actor = { id: string; email: string; name: string };
 
@@ -29,18 +29,58 @@ export async function readSignOff(sketchId: string, number: number, viewerId: st
   const isAuthor = access.authorId === viewerId;
   const isChecker = access.checkedBy === viewerId;
   const newer = newerThan(access);
+  const allowed = allowedSteps({ role: access.role, isAuthor, isChecker, state: access.reviewState, newer });
   return {
     state: access.reviewState,
     sentence: STATE_WORDS[access.reviewState].sentence,
     entries,
     titleBlock: titleBlockOf({ name: authorName, date: access.createdAt }, entries),
     you: { role: access.role, isAuthor, isChecker },
-    allowed: allowedSteps({ role: access.role, isAuthor, isChecker, state: access.reviewState, newer }),
+    allowed,
     /** the sketch's latest version, when it is newer than this one */
     newer,
+    /** why an owner may not approve this checked version, and what would let someone approve it (null otherwise) */
+    approval: access.reviewState === "checked" && access.role === "owner" && !allowed.includes("approve") ? await approvalRefusal(access, viewerId, isAuthor, isChecker) : null,
   };
 }
 export type SignOffRead = Awaited<ReturnType<typeof readSignOff>>;
+
+/** What an owner who may not approve a checked version is told: the rule's reason, and whether anyone else could approve it. */
+export type ApprovalRefusal = {
+  reason: string;
+  /** set when no other owner of the workspace may approve it: what to do about that */
+  remedy: string | null;
+  /** the workspace's Members page, where an owner makes a colleague an owner */
+  membersPath: string;
+};
+
+async function approvalRefusal(access: VersionAccess, viewerId: string, isAuthor: boolean, isChecker: boolean): Promise<ApprovalRefusal | null> {
+  const decision = decideSignOff({ step: "approve", role: "owner", isAuthor, isChecker, state: access.reviewState });
+  if (decision.ok) return null;
+  const owners = (await workspaceContacts(access.workspaceId)).filter((c) => c.role === "owner" && c.id !== viewerId);
+  const approvers = owners.filter((c) => c.id !== access.authorId && c.id !== access.checkedBy);
+  const remedy =
+    owners.length === 0
+      ? "This workspace has no other owner: make a colleague an owner on the Members page to approve it."
+      : approvers.length === 0
+        ? `This workspace's only other owner ${owners.some((c) => c.id === access.checkedBy) ? "checked" : "prepared"} this version: make another colleague an owner on the Members page to approve it.`
+        : null;
+  return { reason: decision.reason, remedy, membersPath: `/workspaces/${access.workspaceId}/members` };
+}
+
+/**
+ * The caller's standing on a version before any complaint about a sign-off request's body: 404 when
+ * the version does not exist or the caller is not a member, 403 when the rules offer the caller no
+ * step on it from any state (a viewer who did not prepare it). Who may take the step a readable
+ * body names is decided with that step (`takeSignOffStep`), with the rule's own reason.
+ */
+export async function requireSignOffParty(sketchId: string, number: number, userId: string): Promise<void> {
+  const access = await getVersionAccess(sketchId, number, userId);
+  if (!access || !access.role) throw new AppError("not_found", NO_VERSION);
+  const who = { role: access.role, isAuthor: access.authorId === userId, isChecker: access.checkedBy === userId };
+  const some = SIGN_OFF_STEPS.some((step) => SIGN_OFF_RULES[step].from.some((state) => decideSignOff({ ...who, step, state }).ok));
+  if (!some) throw new AppError("forbidden", "Your role reads the sign-off of this version but takes no step in it.");
+}
 
 /** Who hears about a step: the people it concerns, minus the one who took it and anyone who turned mail off. */
 function recipients(step: SignOffStep, contacts: MemberContact[], people: { authorId: string | null; checkerId: string | null; approverIds: string[]; actorId: string }) {

@@ -1,11 +1,17 @@
-import { json, route } from "@/lib/api";
+import { json, parseJsonBody, route } from "@/lib/api";
 import { forkInput, sketchParams } from "@/lib/sketch-schemas";
-import { forkSketch } from "@/lib/sketches";
+import { forkSketch, requireSketchRole } from "@/lib/sketches";
 
 export const dynamic = "force-dynamic";
 
-/** Copy a version you can read (the latest unless `version` is given) into a workspace where you may fork. */
-export const POST = route({ params: sketchParams, body: forkInput }, async ({ params, body, user }) => {
+/**
+ * Copy a version you can read (the latest unless `version` is given) into a workspace where you may fork.
+ * Whether you may read the sketch is checked before the body is read (404 for non-members); the
+ * workspace named in the body is checked once it is read.
+ */
+export const POST = route({ params: sketchParams }, async ({ req, params, user }) => {
+  await requireSketchRole(params.id, user.id, "sketch.read");
+  const body = await parseJsonBody(req, forkInput);
   const made = await forkSketch(params.id, user, body);
   return json(
     {
