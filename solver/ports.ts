@@ -1,7 +1,9 @@
 // Mass flow and speed at each port, in the contract's order of preference, and the checks
-// that over-specified values agree (PORT_INCONSISTENT) and that mass balances per body.
+// that over-specified values agree (PORT_INCONSISTENT, also a mass flow at zero speed) and that
+// mass balances per body.
 import type { Port, Sketch, SolveWarning } from "./types";
 import { direction, nearestOnOutline, pointInPolygon, polygonDiameter } from "./geometry";
+import { kindAndName } from "./words";
 
 /** Relative disagreement above which over-specified values warn. */
 const AGREEMENT = 0.005;
@@ -18,7 +20,15 @@ function differs(a: number, b: number): boolean {
   return scale > 0 && Math.abs(a - b) > AGREEMENT * scale;
 }
 
-/** ṁ and V of one port; pushes a warning when given values disagree by more than 0.5 %. */
+/** "Inlet p1", "Outlet nozzle" (a label that starts with the kind is not given it twice). */
+function portName(p: Pick<Port, "kind" | "id" | "label">): string {
+  return kindAndName(p.kind === "inlet" ? "Inlet" : "Outlet", p.label || p.id);
+}
+
+/**
+ * ṁ and V of one port; pushes a warning when given values disagree by more than 0.5 %, or when a
+ * mass flow goes through the port at zero speed (ṁ = ρ·A·V would need an infinite area).
+ */
 export function portFlow(p: Port, warnings: SolveWarning[] | null): PortFlow {
   const { massFlow, density: rho, volumeFlow: q, area: a, velocity: v } = p;
   const mdotWays: number[] = [];
@@ -39,6 +49,14 @@ export function portFlow(p: Port, warnings: SolveWarning[] | null): PortFlow {
       warnings.push({
         code: "PORT_INCONSISTENT",
         message: `Port ${p.label || p.id}: the values given disagree by more than 0.5 % (mass flow ${fmt(mdotWays)} kg/s, velocity ${fmt(vWays)} m/s); using ṁ = ${round(mdot)} kg/s and V = ${round(vel)} m/s`,
+        ids: [p.id],
+      });
+    } else if (vel === 0 && mdot > 0) {
+      // nothing else to compare them with (ṁ and V given, no area or density), yet they cannot
+      // agree: a flow needs a speed. Warning codes are a fixed set, so it is this one
+      warnings.push({
+        code: "PORT_INCONSISTENT",
+        message: `${portName(p)}: a mass flow of ${round(mdot)} kg/s at zero velocity would need an infinite area (ṁ = ρ·A·V); check V or the area`,
         ids: [p.id],
       });
     }
@@ -97,7 +115,7 @@ export function portDirectionNotes(sketch: Sketch): Array<{ id: string; body: st
     const d = direction(p.angle);
     const ahead = pointInPolygon([p.at[0] + eps * d[0], p.at[1] + eps * d[1]], body.outline);
     const behind = pointInPolygon([p.at[0] - eps * d[0], p.at[1] - eps * d[1]], body.outline);
-    const name = p.label ? `${p.kind === "inlet" ? "Inlet" : "Outlet"} ${p.label}` : `${p.kind === "inlet" ? "Inlet" : "Outlet"} ${p.id}`;
+    const name = portName(p);
     if (ahead === behind) {
       if (nearestOnOutline(p.at, body.outline).distance > eps) {
         const where = pointInPolygon(p.at, body.outline) ? "inside" : "outside";

@@ -15,6 +15,16 @@ export function overMu(needed: number, mu: number): boolean {
   return needed > mu * (1 + 1e-9) + 1e-12;
 }
 
+/**
+ * An element named with its kind in front ("Inlet p1", "Body Beam"), unless the name already
+ * starts with that word: a body labelled "Body 1" is "Body 1", not "Body Body 1" (any case, and
+ * only as a whole word: "Bodywork" still gets its kind).
+ */
+export function kindAndName(kind: string, name: string): string {
+  const starts = name.toLowerCase().startsWith(kind.toLowerCase()) && !/[\p{L}\p{N}_]/u.test(name.charAt(kind.length));
+  return starts ? name : `${kind} ${name}`;
+}
+
 /** "Contact s2 (rear foot)" or "Contact s2" */
 /** "Contact s1 (rear foot)"; a label that already starts with the id stands alone: "Contact axle (both wheels)". */
 export function describeSupport(s: Pick<Support, "kind" | "id" | "label">): string {

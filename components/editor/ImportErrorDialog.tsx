@@ -28,7 +28,12 @@ export function ImportErrorDialog({ problem, onClose }: { problem: ImportProblem
           <ul className="mt-3 max-h-60 space-y-1 overflow-auto rounded border border-caution/30 bg-caution-soft/50 p-3 text-[12.5px] text-ink">
             {problem.errors.map((e, i) => (
               <li key={i}>
-                {e.path && <code className="num mr-1 rounded bg-paper px-1 text-[11.5px] text-caution">{e.path}</code>}
+                {/* a real space after the path: the words read (and copy) as "supports[1].angle is required" */}
+                {e.path ? (
+                  <>
+                    <code className="num rounded bg-paper px-1 text-[11.5px] text-caution">{e.path}</code>{" "}
+                  </>
+                ) : null}
                 {e.message}
               </li>
             ))}

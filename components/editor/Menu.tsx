@@ -1,5 +1,6 @@
 "use client";
 // A small dropdown menu (button + list of items), keyboard-friendly: arrows move, Escape closes.
+// An item with an `href` is a link (the calc sheet's PDF), so it can open in a new tab too.
 import { useEffect, useId, useRef, useState, type ReactNode } from "react";
 import { NarrowLabel } from "./NarrowLabel";
 
@@ -9,7 +10,25 @@ export interface MenuItem {
   detail?: ReactNode;
   shortcut?: string;
   disabled?: boolean;
-  onSelect: () => void;
+  /** a link to follow instead of something to run */
+  href?: string;
+  onSelect?: () => void;
+}
+
+const ITEMS = '[role="menuitem"]:not([disabled])';
+const ITEM_CLASS =
+  "flex w-full items-start justify-between gap-3 px-3 py-1.5 text-left text-[13px] text-ink hover:bg-paper-deep focus:bg-paper-deep focus:outline-none disabled:text-ink-faint/60";
+
+function ItemWords({ it }: { it: MenuItem }) {
+  return (
+    <>
+      <span>
+        <span className="block">{it.label}</span>
+        {it.detail && <span className="mt-0.5 block text-[11.5px] leading-snug text-ink-faint">{it.detail}</span>}
+      </span>
+      {it.shortcut && <span className="num shrink-0 pt-0.5 text-[11px] text-ink-faint">{it.shortcut}</span>}
+    </>
+  );
 }
 
 /** `shortLabel` replaces the label on narrow screens (the full label stays the accessible name). */
@@ -25,13 +44,13 @@ export function Menu({ label, shortLabel, items, testId, wide }: { label: string
       if (!ref.current?.contains(e.target as Node)) setOpen(false);
     };
     window.addEventListener("mousedown", close);
-    listRef.current?.querySelector<HTMLButtonElement>("button:not([disabled])")?.focus();
+    listRef.current?.querySelector<HTMLElement>(ITEMS)?.focus();
     return () => window.removeEventListener("mousedown", close);
   }, [open]);
 
   const move = (dir: number) => {
-    const buttons = [...(listRef.current?.querySelectorAll<HTMLButtonElement>("button:not([disabled])") ?? [])];
-    const i = buttons.indexOf(document.activeElement as HTMLButtonElement);
+    const buttons = [...(listRef.current?.querySelectorAll<HTMLElement>(ITEMS) ?? [])];
+    const i = buttons.indexOf(document.activeElement as HTMLElement);
     buttons[(i + dir + buttons.length) % buttons.length]?.focus();
   };
 
@@ -74,23 +93,25 @@ export function Menu({ label, shortLabel, items, testId, wide }: { label: string
         >
           {items.map((it) => (
             <li key={it.id} role="none">
-              <button
-                type="button"
-                role="menuitem"
-                disabled={it.disabled}
-                data-testid={`menu-${it.id}`}
-                onClick={() => {
-                  setOpen(false);
-                  it.onSelect();
-                }}
-                className="flex w-full items-start justify-between gap-3 px-3 py-1.5 text-left text-[13px] text-ink hover:bg-paper-deep focus:bg-paper-deep focus:outline-none disabled:text-ink-faint/60"
-              >
-                <span>
-                  <span className="block">{it.label}</span>
-                  {it.detail && <span className="mt-0.5 block text-[11.5px] leading-snug text-ink-faint">{it.detail}</span>}
-                </span>
-                {it.shortcut && <span className="num shrink-0 pt-0.5 text-[11px] text-ink-faint">{it.shortcut}</span>}
-              </button>
+              {it.href ? (
+                <a role="menuitem" href={it.href} data-testid={`menu-${it.id}`} onClick={() => setOpen(false)} className={ITEM_CLASS}>
+                  <ItemWords it={it} />
+                </a>
+              ) : (
+                <button
+                  type="button"
+                  role="menuitem"
+                  disabled={it.disabled}
+                  data-testid={`menu-${it.id}`}
+                  onClick={() => {
+                    setOpen(false);
+                    it.onSelect?.();
+                  }}
+                  className={ITEM_CLASS}
+                >
+                  <ItemWords it={it} />
+                </button>
+              )}
             </li>
           ))}
         </ul>

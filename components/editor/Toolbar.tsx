@@ -8,6 +8,7 @@ import { actionTitle, menuActions, shortcutLabel, type Action } from "@/canvas/a
 import { useEditor } from "@/canvas/context";
 import { EXAMPLES } from "@/canvas/examples";
 import { convert, type UnitSystem } from "@/solver/units";
+import { FileMenuLinksProvider, useFileMenuLinkList } from "./fileMenuLinks";
 import { Menu, type MenuItem } from "./Menu";
 import { useActionRunner } from "./useActions";
 import { ICON_BUTTON } from "./ui";
@@ -99,6 +100,9 @@ export function Toolbar({
   // a sketch this reader may not change: nothing is offered that would replace or change it
   const readOnly = useEditor((s) => s.readOnly);
   const fileActions = menuActions("file").filter((a) => !readOnly || a.id.startsWith("file.export"));
+  // what the page adds (a saved sketch's calc sheet): links, offered to readers as well
+  // (the page's slot, `extra`, is inside this toolbar and registers them with useFileMenuLink)
+  const fileLinks = useFileMenuLinkList();
   return (
     <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3 max-sm:h-auto max-sm:flex-wrap max-sm:py-1.5">
       <Link href="/" className="mr-2 flex items-center gap-1.5 text-ink" aria-label="Counterpoise home">
@@ -121,7 +125,7 @@ export function Toolbar({
           {saved ? ` · saved ${saved}` : ""}
         </p>
       </div>
-      <Menu label="File" testId="menu-file" items={menuItems(fileActions, run)} />
+      <Menu label="File" testId="menu-file" items={[...menuItems(fileActions, run), ...fileLinks.links.map((l) => ({ id: l.id, label: l.label, detail: l.detail, href: l.href }))]} />
       {readOnly ? null : (
         <Menu
           label="Open an example"
@@ -166,7 +170,7 @@ export function Toolbar({
       <div className="ml-3">
         <UnitSwitch />
       </div>
-      {extra}
+      <FileMenuLinksProvider value={fileLinks}>{extra}</FileMenuLinksProvider>
       {tray ? <PanelButton toggle={tray} controls="tray-panel" name="Add and elements" text="Add" shownFrom="sm:hidden" testId="toggle-tray" /> : null}
       {panel ? <PanelButton toggle={panel} controls="properties-panel" text="Properties" shownFrom="min-[1180px]:hidden" testId="toggle-properties" /> : null}
       {/* a phone's toolbar wraps: the keys-and-gestures list goes last there, after the panels */}

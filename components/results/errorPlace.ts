@@ -3,6 +3,7 @@
 import type { SketchFile } from "@/solver/schema";
 import { kindOf, KIND_LABEL, type AnyElement, type Group } from "@/canvas/model/elements";
 import { FORCE_COMPONENTS, FORCE_POLAR, FORM } from "@/components/editor/fieldDefs";
+import { kindAndName } from "@/solver/words";
 
 const ELEMENT_PATH = /^(bodies|supports|loads|ports|massSources)\[(\d+)\](?:\.([A-Za-z]+))?((?:\[\d+\])*)(?:\.(.+))?$/;
 
@@ -14,7 +15,8 @@ function asWord(label: string): string {
 function fieldWords(kind: ReturnType<typeof kindOf>, key: string, indices: number[]): string {
   const defs = [...FORM[kind], ...(kind === "force" ? [...FORCE_POLAR, ...FORCE_COMPONENTS] : [])];
   const def = defs.find((d) => d.key === key);
-  let words = def ? asWord(def.label) : key === "outline" ? "outline corner" : key;
+  // the outline as a whole (it crosses itself) or one of its corners
+  let words = def ? asWord(def.label) : key === "outline" ? (indices.length ? "outline corner" : "outline") : key;
   if (key === "outline" && indices.length) {
     words += ` ${indices[0] + 1}`;
     indices = indices.slice(1);
@@ -32,7 +34,8 @@ export function errorPlace(sketch: SketchFile | null, path: string): string {
   const el = m && sketch ? ((sketch[m[1] as Group] as AnyElement[] | undefined)?.[Number(m[2])] as AnyElement | undefined) : undefined;
   if (!m || !el) return path;
   const kind = kindOf(m[1] as Group, el);
-  const name = `${KIND_LABEL[kind]} ${el.label || el.id}`;
+  // a body labelled "Body 1" is "Body 1", not "Body Body 1"
+  const name = kindAndName(KIND_LABEL[kind], el.label || el.id);
   if (!m[3]) return name;
   const indices = [...(m[4] ?? "").matchAll(/\[(\d+)\]/g)].map((x) => Number(x[1]));
   return `${name} — ${fieldWords(kind, m[3], indices)}`;
@@ -42,4 +45,30 @@ export function errorPlace(sketch: SketchFile | null, path: string): string {
 export function errorInWords(sketch: SketchFile | null, e: { path: string; message: string }): string {
   const place = errorPlace(sketch, e.path);
   return place ? `${place}: ${e.message}` : e.message;
+}
+
+/**
+ * The field issues of a sketch the server refused (a 400 whose paths are the request's:
+ * "document.ports[0].area"), in the editor's words: "Inlet p1 — area: must be more than zero".
+ * `sketch`: the document that was sent. Issues of other fields keep their path ("message: …").
+ */
+export function refusedInWords(sketch: SketchFile | null, fields: ReadonlyArray<{ path: string; message: string }>, documentField = "document"): string[] {
+  return fields.map((f) => {
+    const inDocument = f.path === documentField || f.path.startsWith(`${documentField}.`);
+    const path = inDocument ? f.path.slice(documentField.length + 1) : f.path;
+    return errorInWords(inDocument ? sketch : null, { path, message: f.message });
+  });
+}
+
+/**
+ * The input errors of the sketch as the editor has them (the live analysis's), said before the
+ * sketch is sent anywhere: "an input error: Inlet p1 — area: must be more than zero", or
+ * "3 input errors, the first: …"; null when there are none. A solve that failed is not an input
+ * error (the sketch itself may be fine), so it is left out.
+ */
+export function inputErrorsInWords(sketch: SketchFile | null, errors: ReadonlyArray<{ path: string; message: string }>): { count: number; words: string } | null {
+  const input = errors.filter((e) => e.path || !/^the solve failed/.test(e.message));
+  if (!input.length) return null;
+  const first = errorInWords(sketch, input[0]);
+  return { count: input.length, words: input.length === 1 ? `an input error: ${first}` : `${input.length} input errors, the first: ${first}` };
 }

@@ -4,6 +4,7 @@
 import { useState } from "react";
 import { ForkDialog, type ForkResult } from "@/components/sketches/ForkDialog";
 import { formatDateTime } from "@/components/workspaces/format";
+import { inputErrorsInWords, refusedInWords } from "@/components/results/errorPlace";
 import { Button, Notice } from "@/components/shell/controls";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import type { SketchFile } from "@/solver/schema";
@@ -17,9 +18,10 @@ export function saveVersionRequest(sketchId: string, baseVersion: number, messag
   return apiFetch<{ version: SavedVersion }>(`/api/sketches/${sketchId}/versions`, { method: "POST", body: { baseVersion, message, document } });
 }
 
-/** Field errors of a refused sketch, as lines people can read. */
-export function problemLines(err: ApiError): string[] {
-  return err.fields.slice(0, 6).map((f) => `${f.path.replace(/^document\.?/, "") || "sketch"}: ${f.message}`);
+/** Field errors of a refused sketch, as lines people can read: "Inlet p1 — area: must be more than
+ *  zero", the element and field in the editor's words (`sketch`: the document that was sent). */
+export function problemLines(err: ApiError, sketch: SketchFile | null = null): string[] {
+  return refusedInWords(sketch, err.fields.slice(0, 6));
 }
 
 export function SaveDialog({
@@ -29,6 +31,8 @@ export function SaveDialog({
   title,
   busy,
   error,
+  sketch = null,
+  inputErrors = null,
   onSave,
   onCancel,
 }: {
@@ -39,6 +43,10 @@ export function SaveDialog({
   title: string;
   busy: boolean;
   error: ApiError | null;
+  /** the document being saved: a refusal names its elements in words */
+  sketch?: SketchFile | null;
+  /** the sketch's input errors as the editor has them (`inputErrorsInWords`), said before saving */
+  inputErrors?: ReturnType<typeof inputErrorsInWords>;
   onSave: (message: string) => void;
   onCancel: () => void;
 }) {
@@ -55,6 +63,12 @@ export function SaveDialog({
         {latest > base ? (
           <p className="rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-sm text-ink" data-testid="save-older">
             You opened v{base}, and v{latest} is newer: a version goes on top of the newest only. Saving asks you next whether to fork a new sketch from your changes or to bring them onto v{latest}.
+          </p>
+        ) : null}
+        {inputErrors && !error ? (
+          // the server refuses a sketch with input errors: said before the message is written, not after
+          <p className="rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-sm text-ink" data-testid="save-input-errors">
+            This sketch has {inputErrors.words}. A version is saved only without input errors: fix {inputErrors.count === 1 ? "it" : "them"} first, or the save is refused.
           </p>
         ) : null}
         <p className="text-sm text-ink-soft">
@@ -82,7 +96,7 @@ export function SaveDialog({
           <Notice tone="error" title={error.fields.length ? "The sketch was not saved: some fields are not valid" : "The sketch was not saved"}>
             {error.fields.length ? (
               <ul className="list-disc pl-4">
-                {problemLines(error).map((l) => (
+                {problemLines(error, sketch).map((l) => (
                   <li key={l}>{l}</li>
                 ))}
               </ul>

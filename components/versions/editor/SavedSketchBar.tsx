@@ -4,8 +4,10 @@
 import Link from "next/link";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { useStore } from "zustand";
-import { useEditor, useStores } from "@/canvas/context";
+import { useAnalysis, useEditor, useStores } from "@/canvas/context";
+import { useFileMenuLink } from "@/components/editor/fileMenuLinks";
 import { useActionRunner } from "@/components/editor/useActions";
+import { inputErrorsInWords } from "@/components/results/errorPlace";
 import { Providers } from "@/components/shell/Providers";
 import { formatDateTime } from "@/components/workspaces/format";
 import { ApiError } from "@/lib/api-client";
@@ -107,6 +109,15 @@ function Bar({ flow }: { flow: SaveFlow }) {
   const [draft, setDraft] = useState<Draft | null>(() => (info && !restored ? readDraft(info.sketchId) : null));
   // the "● unsaved" mark and the leave-page prompt: the sketch is not the version as saved
   const dirty = useDirty(flow, restored);
+  // the sketch's input errors, said in the save dialog before anything is sent
+  const analysed = useAnalysis((s) => s.sketch);
+  const analysisErrors = useAnalysis((s) => s.core?.errors);
+  const inputErrors = useMemo(() => inputErrorsInWords(analysed, analysisErrors ?? []), [analysed, analysisErrors]);
+  // the calc sheet of the version open here, as saved (a PDF made on the server): a toolbar link
+  // from 1280 px, and in the File menu at every width
+  const calcSheet = info && base !== null ? `/api/sketches/${info.sketchId}/versions/${base}/calc-sheet?units=${units}` : null;
+  const calcSheetWords = dirty ? `The calc sheet (PDF) of v${base} as saved: your unsaved changes are not in it` : `The calc sheet (PDF) of v${base}`;
+  useFileMenuLink("file.calcSheet", calcSheet ? { label: "Calc sheet (PDF)", href: calcSheet, detail: dirty ? `v${base} as saved: your unsaved changes are not in it` : `v${base} as saved` } : null);
   const leaving = useRef(false);
   const leave = (href: string) => {
     leaving.current = true;
@@ -179,12 +190,11 @@ function Bar({ flow }: { flow: SaveFlow }) {
           Read only · {info.role}
         </span>
       )}
-      {/* the calc sheet of the version open here, as saved (a PDF made on the server); below
-          1280 px the toolbar has no room for it, and the version page beside History has it */}
+      {/* below 1280 px the toolbar has no room for it: the File menu has it (useFileMenuLink above) */}
       <a
-        href={`/api/sketches/${info.sketchId}/versions/${base}/calc-sheet?units=${units}`}
+        href={calcSheet ?? undefined}
         className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45 max-xl:hidden`}
-        title={dirty ? `The calc sheet (PDF) of v${base} as saved: your unsaved changes are not in it` : `The calc sheet (PDF) of v${base}`}
+        title={calcSheetWords}
         aria-label="Calc sheet (PDF)"
         data-testid="calc-sheet-link"
       >
@@ -202,6 +212,8 @@ function Bar({ flow }: { flow: SaveFlow }) {
           title={info.title}
           busy={busy}
           error={error}
+          sketch={pending.sketch}
+          inputErrors={inputErrors}
           onSave={save}
           onCancel={() => {
             setError(null);

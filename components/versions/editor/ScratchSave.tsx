@@ -114,7 +114,7 @@ function SaveToWorkspace({ onClose, onSaved }: { onClose: () => void; onSaved?: 
         <Field id="save-message" label="Message of version 1" value={message} maxLength={500} onChange={(e) => setMessage(e.target.value)} error={err?.field("message")} />
         {err && !err.field("title") && !err.field("message") ? (
           <Notice tone="error" title="The sketch was not saved">
-            {err.fields.length ? problemLines(err).join("; ") : err.message}
+            {err.fields.length ? problemLines(err, sketch).join("; ") : err.message}
           </Notice>
         ) : null}
         <div className="flex justify-end gap-2">
