@@ -33,6 +33,7 @@ export function SaveDialog({
   error,
   sketch = null,
   inputErrors = null,
+  reviewNote = null,
   onSave,
   onCancel,
 }: {
@@ -47,6 +48,8 @@ export function SaveDialog({
   sketch?: SketchFile | null;
   /** the sketch's input errors as the editor has them (`inputErrorsInWords`), said before saving */
   inputErrors?: ReturnType<typeof inputErrorsInWords>;
+  /** what the sign-off of v{base} means for the new version (`reviewNote`), when it is under review or approved */
+  reviewNote?: string | null;
   onSave: (message: string) => void;
   onCancel: () => void;
 }) {
@@ -63,6 +66,11 @@ export function SaveDialog({
         {latest > base ? (
           <p className="rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-sm text-ink" data-testid="save-older">
             You opened v{base}, and v{latest} is newer: a version goes on top of the newest only. Saving asks you next whether to fork a new sketch from your changes or to bring them onto v{latest}.
+          </p>
+        ) : null}
+        {reviewNote ? (
+          <p className="rounded-md border border-ink/20 bg-paper-card px-3 py-2 text-sm text-ink" data-testid="save-review-note">
+            {reviewNote}
           </p>
         ) : null}
         {inputErrors && !error ? (

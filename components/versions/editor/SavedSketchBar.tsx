@@ -1,6 +1,7 @@
 "use client";
 // The saved sketch's corner of the editor's toolbar: which version is open, whether there are
 // unsaved changes, the Save button, and the save, conflict and kept-work dialogs.
+import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { useStore } from "zustand";
@@ -10,10 +11,12 @@ import { useActionRunner } from "@/components/editor/useActions";
 import { inputErrorsInWords } from "@/components/results/errorPlace";
 import { Providers } from "@/components/shell/Providers";
 import { formatDateTime } from "@/components/workspaces/format";
-import { ApiError } from "@/lib/api-client";
+import { ApiError, apiFetch, apiKey } from "@/lib/api-client";
+import { STATE_WORDS, type ReviewState } from "@/lib/review/rules";
 import { can } from "@/lib/roles";
 import { discardDraft, keepDraft, readDraft, type Draft } from "./drafts";
 import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
+import { reviewNote } from "./reviewNote";
 import { sameDocument, type SaveFlow } from "./savedPersistence";
 import { NarrowLabel } from "@/components/editor/NarrowLabel";
 
@@ -96,6 +99,21 @@ function useDirty(flow: SaveFlow, restored: boolean): boolean {
   return restored || !same;
 }
 
+/**
+ * The sign-off state of the version open here (`null` until known, or when it cannot be read):
+ * an approved or checked version is said beside its number, and the save dialog says that a new
+ * version starts its own review.
+ */
+function useReviewState(sketchId: string | undefined, base: number | null): ReviewState | null {
+  const path = sketchId && base !== null ? `/api/sketches/${sketchId}/versions/${base}/signoff` : null;
+  const q = useQuery({
+    queryKey: apiKey(path ?? "/none"),
+    queryFn: () => apiFetch<{ state: ReviewState }>(path as string),
+    enabled: path !== null,
+  });
+  return q.data?.state ?? null;
+}
+
 function Bar({ flow }: { flow: SaveFlow }) {
   const { info, base, pending, lastSaved, restored, restoredNotice } = useStore(flow);
   const stores = useStores();
@@ -109,6 +127,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
   const [draft, setDraft] = useState<Draft | null>(() => (info && !restored ? readDraft(info.sketchId) : null));
   // the "● unsaved" mark and the leave-page prompt: the sketch is not the version as saved
   const dirty = useDirty(flow, restored);
+  const review = useReviewState(info?.sketchId, base);
   // the sketch's input errors, said in the save dialog before anything is sent
   const analysed = useAnalysis((s) => s.sketch);
   const analysisErrors = useAnalysis((s) => s.core?.errors);
@@ -173,6 +192,11 @@ function Bar({ flow }: { flow: SaveFlow }) {
     <div className="ml-3 flex items-center gap-2" data-testid="version-bar">
       <span className="num whitespace-nowrap text-[12px] text-ink-faint" data-testid="version-label">
         {restored ? `kept changes on v${base}` : `v${base}${base < info.latest ? ` of ${info.latest}` : ""}`}
+        {review && review !== "draft" && !restored ? (
+          <span title={STATE_WORDS[review].sentence} data-testid="version-review-state" data-review-state={review}>
+            {` · ${STATE_WORDS[review].label}`}
+          </span>
+        ) : null}
         {dirty && canSave ? (
           <span className="ml-1.5 text-caution" title="Changes not yet saved as a version">
             ●<span className="max-lg:sr-only"> unsaved</span>
@@ -214,6 +238,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
           error={error}
           sketch={pending.sketch}
           inputErrors={inputErrors}
+          reviewNote={reviewNote(review, base)}
           onSave={save}
           onCancel={() => {
             setError(null);

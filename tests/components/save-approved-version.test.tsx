@@ -1,0 +1,98 @@
+// Editing a version that is under review or approved: the toolbar says its sign-off state beside
+// its number, and the save dialog says that the check and approval stay with that version while
+// the new one starts its own review (a saved version never changes; common practice for a
+// checked-and-approved calculation: a revision is checked and approved again).
+import { act, fireEvent, render, screen, waitFor, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
+import type { ReviewState } from "@/lib/review/rules";
+import type { SketchFile } from "@/solver/schema";
+import { reviewNote } from "@/components/versions/editor/reviewNote";
+import { withModalDialogs, withResizeObserver } from "./dialog-support";
+import { beam } from "./editor-helpers";
+
+vi.mock("next/navigation", () => ({
+  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
+  useSearchParams: () => new URLSearchParams(),
+}));
+const { SavedSketchEditor } = await import("@/components/versions/editor/SavedSketchEditor");
+
+beforeAll(() => {
+  withModalDialogs();
+  withResizeObserver();
+});
+afterEach(() => vi.unstubAllGlobals());
+
+/** The beam with an inlet p1 on its left end (demo data). */
+const withInlet = (): SketchFile => ({ ...beam("F1"), ports: [{ id: "p1", body: "b1", kind: "inlet", at: [0, 0.25], angle: 0, massFlow: 10, velocity: 5, area: 0.01 }] }) as SketchFile;
+
+const json = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
+
+/** Sketch sk1 at v3, whose sign-off is in `state` (`null`: the sign-off cannot be read). */
+function serve(state: ReviewState | null) {
+  const asked: string[] = [];
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (path: string) => {
+      asked.push(path);
+      if (path === "/api/sketches/sk1") return json({ sketch: { id: "sk1", workspaceId: "w1", workspaceName: "Bay 4", title: "Beam on a pin and a contact", role: "editor", latestVersion: 3 } });
+      if (path === "/api/sketches/sk1/versions/3") return json({ version: { number: 3, document: withInlet() } });
+      if (path === "/api/sketches/sk1/versions/3/signoff" && state) return json({ state });
+      return json({ error: { code: "not_found", message: "no" } }, 404);
+    }),
+  );
+  return asked;
+}
+
+async function openAndSave(state: ReviewState | null) {
+  const asked = serve(state);
+  render(<SavedSketchEditor id="sk1" />);
+  await screen.findByTestId("version-bar");
+  await act(async () => {});
+  await waitFor(() => expect(asked).toContain("/api/sketches/sk1/versions/3/signoff"));
+  // a change to save: the inlet's area
+  const user = userEvent.setup();
+  await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Inlet p1/ }));
+  const area = await screen.findByTestId("field-area");
+  await user.clear(area);
+  await user.type(area, "0.02{Enter}");
+  await waitFor(() => expect(screen.getByTestId("version-label")).toHaveTextContent("unsaved"));
+  fireEvent.keyDown(document.body, { key: "s", ctrlKey: true });
+  return screen.findByTestId("save-dialog");
+}
+
+describe("saving on top of a version under review", () => {
+  it("an approved v3: the toolbar says so, and the dialog says the new version needs its own check and approval", async () => {
+    const dialog = await openAndSave("approved");
+    await waitFor(() => expect(screen.getByTestId("version-label")).toHaveTextContent("v3 · approved"));
+    expect(within(dialog).getByTestId("save-review-note")).toHaveTextContent(
+      "v3 is approved. Its approval stays with v3: the new version is a draft that needs checking and approval of its own before it replaces v3 on a job.",
+    );
+  });
+
+  it("a checked v3 asks to tell the checker and the approver", async () => {
+    const dialog = await openAndSave("checked");
+    await waitFor(() => expect(screen.getByTestId("version-review-state")).toHaveTextContent("· checked"));
+    expect(within(dialog).getByTestId("save-review-note")).toHaveTextContent("the new version needs its own check, so tell the checker and the approver");
+  });
+
+  it("a prepared v3, or one whose sign-off cannot be read, says nothing about review", async () => {
+    const dialog = await openAndSave("draft");
+    expect(within(dialog).queryByTestId("save-review-note")).toBeNull();
+    expect(screen.queryByTestId("version-review-state")).toBeNull();
+    expect(screen.getByTestId("version-label")).toHaveTextContent(/^v3/);
+  });
+
+  it("the unreadable case", async () => {
+    const dialog = await openAndSave(null);
+    expect(within(dialog).queryByTestId("save-review-note")).toBeNull();
+  });
+});
+
+describe("reviewNote", () => {
+  it("has words for submitted, checked and approved only", () => {
+    expect(reviewNote("submitted", 2)).toBe("v2 is submitted for checking. The checker reads v2, not the new version: tell them, and submit the new version when it is ready.");
+    for (const s of ["draft", "returned", "withdrawn"] as const) expect(reviewNote(s, 2)).toBeNull();
+    expect(reviewNote(null, 2)).toBeNull();
+  });
+});
