@@ -161,6 +161,17 @@ export async function getVersionForCalcSheet(versionId: string, userId: string) 
     steps: entries,
   };
 }
+/** The newest version before `number` that stands approved (null when none): a later sheet says it revises it. */
+export async function approvedBefore(sketchId: string, number: number): Promise<number | null> {
+  const [row] = await db
+    .select({ number: sketchVersion.number })
+    .from(sketchVersion)
+    .where(and(eq(sketchVersion.sketchId, sketchId), lt(sketchVersion.number, number), eq(sketchVersion.reviewState, "approved")))
+    .orderBy(desc(sketchVersion.number))
+    .limit(1);
+  return row?.number ?? null;
+}
+
 export type CalcSheetVersion = NonNullable<Awaited<ReturnType<typeof getVersionForCalcSheet>>>;
 
 export type ActivityRow = { id: number; at: Date; action: string; actorName: string | null; detail: Record<string, unknown> };

@@ -61,6 +61,8 @@ export interface CalcSheetInput {
   signoff: SignoffEntry[];
   /** where the review stands ("approval withdrawn by …: reason"), printed under the signatures */
   review?: string;
+  /** the newest earlier version that stands approved, when this one is not approved itself */
+  approvedEarlier?: number;
   /** the saved sketch file */
   file: unknown;
   /** the version's sign-off steps and comment threads, printed as its check record */
@@ -348,6 +350,13 @@ function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number
   if (input.review) {
     doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text("Review: ", left, doc.y, { continued: true });
     doc.font("Inter").fillColor(SOFT).text(input.review, { width, features: PROSE_FEATURES });
+    doc.y += 4;
+  }
+  // a revision of an approved design is not mistaken for the approved one
+  if (input.approvedEarlier) {
+    const v = input.approvedEarlier;
+    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text("Revision: ", left, doc.y, { continued: true });
+    doc.font("Inter").fillColor(SOFT).text(`v${v} is the approved version of this sketch. This sheet is of v${input.version}, which is not approved: v${v}'s approval does not carry over to it.`, { width, features: PROSE_FEATURES });
     doc.y += 4;
   }
   // a sheet of an earlier version is not mistaken for the current design

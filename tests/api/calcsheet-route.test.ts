@@ -2,7 +2,7 @@
 // workspaces; a clear 400 for a bad units value.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET } from "@/app/api/sketches/[id]/versions/[number]/calc-sheet/route";
-import { createSketch } from "@/lib/sketches";
+import { createSketch, saveVersion } from "@/lib/sketches";
 import { parseSketch } from "@/solver";
 import { appOrigin } from "@/lib/env";
 import { addComment, resolveThread } from "@/lib/review/comments";
@@ -63,6 +63,37 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
     expect(text).toContain("2. On the whole version — open");
     // the latest version is not called superseded
     expect(text).not.toContain("Superseded");
+  }, 60000);
+
+  it("a revision of an approved version says the approval does not carry over; the approved one does not say it", async () => {
+    const prep = await makeAccount("calc-rev-prep", { name: "Ria Preparer" });
+    const chk = await makeAccount("calc-rev-chk", { name: "Rob Checker" });
+    const ws = await makeWorkspace("Revision bay", [
+      [prep, "editor"],
+      [chk, "checker"],
+      [owner, "owner"],
+    ]);
+    const parsed = parseSketch(sketchFile("pipe-bend-anchor"));
+    if (!parsed.ok) throw new Error("fixture does not parse");
+    const made = await createSketch(ws, prep, { title: "Bend revised", document: parsed, message: "as built" });
+    const id = made.sketch.id;
+    await takeSignOffStep(id, 1, prep, { step: "submit" });
+    await takeSignOffStep(id, 1, chk, { step: "check" });
+    await takeSignOffStep(id, 1, owner, { step: "approve" });
+    await saveVersion(id, prep, { baseVersion: 1, message: "thicker plinth", document: parsed });
+    const sheetText = async (n: number) => {
+      const res = await (GET as unknown as (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>)(
+        new Request(`${appOrigin()}/api/sketches/${id}/versions/${n}/calc-sheet`, { headers: { cookie: owner.cookie } }),
+        { params: Promise.resolve({ id, number: String(n) }) },
+      );
+      expect(res.status).toBe(200);
+      return (await pdfText(await res.arrayBuffer())).text.replace(/\s+/g, " ");
+    };
+    const v2 = await sheetText(2);
+    expect(v2).toContain("Revision: v1 is the approved version of this sketch. This sheet is of v2, which is not approved: v1's approval does not carry over to it.");
+    const v1 = await sheetText(1);
+    expect(v1).not.toContain("Revision:");
+    expect(v1).toContain("Superseded: v2 is the latest version of this sketch.");
   }, 60000);
 
   it("refuses units other than SI and US, naming the field", async () => {

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { getVersion } from "@/db/queries/versions";
-import { getVersionForCalcSheet } from "@/db/queries/review";
+import { approvedBefore, getVersionForCalcSheet } from "@/db/queries/review";
 import { listVersionComments, openThreadsBefore } from "@/db/queries/comments";
 import { route } from "@/lib/api";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
@@ -20,7 +20,11 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
   if (!version) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
   const sheet = await getVersionForCalcSheet(version.id, user.id);
   if (!sheet) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
-  const [comments, earlierOpen] = await Promise.all([listVersionComments(sheet.versionId, user.id), openThreadsBefore(params.id, sheet.versionNumber)]);
+  const [comments, earlierOpen, approvedEarlier] = await Promise.all([
+    listVersionComments(sheet.versionId, user.id),
+    openThreadsBefore(params.id, sheet.versionNumber),
+    sheet.reviewState === "approved" ? null : approvedBefore(params.id, sheet.versionNumber),
+  ]);
   const pdf = await buildCalcSheet({
     workspace: sheet.workspaceName,
     sketchTitle: sheet.sketchTitle,
@@ -30,6 +34,7 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
     savedAt: sheet.savedAt,
     signoff: sheet.signOff.map((s) => ({ role: s.role, name: s.name, at: s.date })),
     review: sheet.review,
+    approvedEarlier: approvedEarlier ?? undefined,
     file: sheet.document,
     record: { steps: sheet.steps, comments, earlierOpen },
     units: query.units,
