@@ -17,7 +17,7 @@ export const CAUTIONS: readonly string[] = [
 export const CONVENTIONS: readonly string[] = [
   "Axes as drawn: x to the right, y up, lengths in m from the sketch's origin; angles in degrees, counter-clockwise from +x. Moments are positive counter-clockwise.",
   "Reaction tables give the force of each support on the body; the load on the support is equal and opposite. At a contact or roller, n is the component along its normal (positive: pressing on the body) and t the component along the normal turned 90° counter-clockwise.",
-  "The hand check takes moments about the origin (0, 0); a fixed support's couple is in its row's moment, with the moment of its force.",
+  "The hand check takes moments about the point its ΣM line names: a body's first support (its centre of gravity when it has none), as the results panel does; a fixed support's couple is in its row's moment, with the moment of its force.",
   "A statically indeterminate body shares its load by support stiffness: each support is a spring of the stiffness given, or the mean of those given, or 1 GN/m (10^9 N/m); a friction contact's tangential spring is as stiff as its normal one; a fixed support's rotational stiffness is k·d², d the diagonal of the body's bounding box.",
   "A body's mass is everything inside its control volume, the fluid in it included; its weight acts at its centre of gravity.",
   "A mass source adds mass inside the control volume with no momentum and no pressure force of its own: it counts in the mass balance only.",

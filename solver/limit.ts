@@ -9,9 +9,10 @@
 // jumps. Such a change of status is found by bisection too; it is a crossing when the quantity
 // jumps across the target there, or when it reaches the target on the side where the body
 // holds (the contact whose lift-off starts the tipping: its n falls to zero just before).
-import { readQuantity, type QuantitySpec } from "./quantity";
+import { formatFigures, formatTiny, readQuantity, type QuantitySpec } from "./quantity";
 import { createSweeper, type Sweeper } from "./sweep";
 import type { Sketch } from "./types";
+import { prettyUnit } from "./units";
 
 export interface LimitOptions {
   /** samples across the range when looking for brackets (default 64) */
@@ -29,6 +30,8 @@ export type LimitResult =
       /** every crossing found in the range, ascending */
       crossings: number[];
       iterations: number;
+      /** the search's tolerance on the parameter: each crossing is found to within ± this (absent on results made by hand) */
+      tolerance?: number;
     }
   | {
       found: false;
@@ -73,7 +76,7 @@ export function findLimitWith(
 ): LimitResult {
   const [lo, hi] = range[0] <= range[1] ? range : [range[1], range[0]];
   const samples = Math.max(2, options.samples ?? 64);
-  const tol = options.tolerance ?? Math.max(1e-12, 1e-9 * (hi - lo || 1));
+  const tol = options.tolerance ?? limitTolerance([lo, hi]);
   let iterations = 0;
   const at = (x: number): Sample => {
     iterations++;
@@ -150,7 +153,7 @@ export function findLimitWith(
         add(f(root) === 0 ? firstZero(a.x, a.f, root) : root);
       }
     }
-    if (crossings.length) return { found: true, value: crossings[0], unit: sweeper.unit, crossings, iterations };
+    if (crossings.length) return { found: true, value: crossings[0], unit: sweeper.unit, crossings, iterations, tolerance: tol };
     return {
       found: false,
       unit: sweeper.unit,
@@ -163,6 +166,39 @@ export function findLimitWith(
   } finally {
     sweeper.restore();
   }
+}
+
+/** The search's tolerance on the parameter over a range, unless one is given: a billionth of the range. */
+export function limitTolerance(range: readonly [number, number]): number {
+  return Math.max(1e-12, 1e-9 * (Math.abs(range[1] - range[0]) || 1));
+}
+
+/** Significant figures a found limit is given to, wherever it is shown (the Sweep tab, its plot, the calc sheet, a version's page). */
+export const LIMIT_FIGURES = 4;
+
+/** A found limit as every view writes it: 4 significant figures, trailing zeros kept ("18.14", "1.200"). */
+export function formatLimit(x: number): string {
+  return formatFigures(x, LIMIT_FIGURES);
+}
+
+/** A found limit with the parameter's unit: "18.14 deg", "27.77 kg/s", "1.200" (a plain number). */
+export function limitWithUnit(x: number, unit: string): string {
+  return `${formatLimit(x)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
+}
+
+/**
+ * How far a found limit is given, in words: "to 4 significant figures, found to within ±8e-8 deg".
+ * The tolerance is rounded up to one figure, so it never claims more than the search did.
+ */
+export function limitPrecisionWords(tolerance: number, unit: string): string {
+  const e = Math.floor(Math.log10(tolerance));
+  let m = Math.ceil(tolerance / 10 ** e - 1e-9);
+  let exp = e;
+  if (m >= 10) {
+    m = 1;
+    exp += 1;
+  }
+  return `to ${LIMIT_FIGURES} significant figures, found to within ±${formatTiny(m * 10 ** exp, 0)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
 }
 
 /** Brent's method on a bracket [a, b] with f(a)·f(b) < 0 (Brent 1973, "Algorithms for Minimization without Derivatives", ch. 4). */

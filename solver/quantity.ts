@@ -62,3 +62,25 @@ export function describeQuantity(q: QuantitySpec, names: Readonly<Record<string,
   };
   return `${words[q.component]} at ${names[q.support] ?? q.support}`;
 }
+
+/**
+ * A figure of a check or a limit: `sig` significant figures with trailing zeros kept ("12.50",
+ * "3.100", "0.09818", "18.14"), so every number says how far it is given; whole numbers from 1,000
+ * with separators ("1,235"); below 1e-6, in e-notation ("1.200e-7"). The value is rounded to 10
+ * figures first, so a value and the same value with floating-point noise on it (0.098175 and
+ * 0.0981749999999) are written alike.
+ */
+export function formatFigures(x: number, sig = 4): string {
+  if (!Number.isFinite(x)) return x > 0 ? "∞" : x < 0 ? "−∞" : "—";
+  const v = Number(x.toPrecision(10));
+  const r = Number(v.toPrecision(sig));
+  if (r === 0) return "0";
+  const s = Math.abs(r) >= 1000 ? Math.round(v).toLocaleString("en-US") : r.toPrecision(sig);
+  return s.replace(/^-/, "−");
+}
+
+/** A small figure that is not a result but its noise or tolerance, to one or two figures in e-notation: "1.2e-12", "−3e-9". */
+export function formatTiny(x: number, digits = 1): string {
+  if (x === 0) return "0";
+  return x.toExponential(digits).replace(/\.?0+e/, "e").replace(/e\+/, "e").replace(/^-/, "−");
+}

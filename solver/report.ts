@@ -8,6 +8,7 @@ import { FIELD_UNIT_LABELS, kindOfUnit } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { SolveResult, Vec2 } from "./types";
+import { formatFigures, formatTiny } from "./quantity";
 import { convert, formatNumber, formatQuantity, prettyUnit, unitsFor, type Quantity, type UnitSystem } from "./units";
 import { gravityActs, overMu } from "./words";
 
@@ -22,6 +23,14 @@ export interface Table {
   notes?: string[];
   /** per row, by column key: a mark shown beside the cell (a shape, and words for screen readers) */
   marks?: Array<Record<string, CellMark> | undefined>;
+  /** every number of the table to this many significant figures, trailing zeros kept (`formatFigures`);
+   *  absent: the tables' usual `formatNumber(x, 4, { keepZeros: true })` */
+  figures?: number;
+}
+
+/** A number cell as the table prints it. */
+export function cellNumberText(t: Pick<Table, "figures">, x: number): string {
+  return t.figures ? formatFigures(x, t.figures) : formatNumber(x, 4, { keepZeros: true });
 }
 
 export interface CellMark {
@@ -441,6 +450,56 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
   };
 }
 
+/** Significant figures of every number of the hand check (terms, sums, points, differences), on screen and on the calc sheet. */
+export const HAND_CHECK_FIGURES = 4;
+
+/** A number of the hand check: 4 significant figures with trailing zeros kept ("12.50", "3.100", "0.09818"). */
+export const handCheckNumber = (x: number): string => formatFigures(x, HAND_CHECK_FIGURES);
+
+/** Below this share of the check's largest value a term or a sum is floating-point noise, written 0. */
+const HAND_NOISE = 1e-10;
+/** Below this share the difference of the two sides is floating-point rounding, not a figure of the check. */
+const HAND_ROUNDING = 1e-9;
+
+/** A term or a sum of the hand check (SI) with its floating-point noise taken off: a weight's 6e-14 N along x is 0. */
+export function handCheckClean(v: number, scale: Scale): number {
+  return Math.abs(v) < HAND_NOISE * Math.max(scale.force, scale.moment, 1e-30) ? 0 : v;
+}
+
+/** The two sides of one equation of the hand check, as it prints them (SI). */
+export interface HandCheckSides {
+  /** Σ forces on the control volume, of the unrounded terms */
+  forces: number;
+  /** Σ(ṁV)out − Σ(ṁV)in, of the unrounded terms */
+  momentum: number;
+  /** forces − momentum as computed */
+  difference: number;
+  /** the difference is floating-point rounding (below a billionth of the check's largest value), not a figure */
+  rounding: boolean;
+}
+
+/**
+ * The two sides of ΣFx, ΣFy or ΣM as printed. Each sum is taken of the unrounded terms; when the
+ * two differ by floating-point rounding only, both are printed from one value (their mean), so two
+ * sums that are equal to a billionth never show as 0.09817 beside 0.09818.
+ */
+export function handCheckSides(forces: number, momentum: number, difference: number, scale: Scale): HandCheckSides {
+  const size = Math.max(scale.force, scale.moment, Math.abs(forces), Math.abs(momentum), 1e-30);
+  const rounding = difference !== 0 && Math.abs(difference) <= HAND_ROUNDING * size;
+  if (difference === 0 || rounding) {
+    const both = handCheckClean((forces + momentum) / 2, scale);
+    return { forces: both, momentum: both, difference, rounding };
+  }
+  return { forces: handCheckClean(forces, scale), momentum: handCheckClean(momentum, scale), difference, rounding };
+}
+
+/** The difference of the two sides in a shown unit: "0", "1.2e-12 (rounding)", or the figure itself ("12.50"). */
+export function handCheckDifferenceText(shown: number, rounding: boolean, unit = ""): string {
+  const u = unit ? ` ${unit}` : "";
+  if (shown === 0) return `0${u}`;
+  return rounding ? `${formatTiny(shown)}${u} (rounding)` : `${handCheckNumber(shown)}${u}`;
+}
+
 /** The hand check: every term with its components, point of action and moment about `about`. */
 export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem): Table {
   const eq = result.equations[bodyId];
@@ -450,11 +509,10 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
   const f = u.force;
   const m = u.moment;
   const L = columnUnit("length", system);
-  // a sum that balances to rounding (1e-12 N·m) is zero: its noise is not a figure of the check
-  const noise = 1e-10 * Math.max(scale.force, scale.moment, 1e-30);
-  const clean = (v: number) => (Math.abs(v) < noise ? 0 : v);
-  const val = (v: number, q: Quantity) => inUnit(clean(v), q, u);
-  const coord = (x: number) => formatNumber(convert(x, "length", system, L).value, 4);
+  // a term's floating-point noise (a weight's 6e-14 N along x) is no figure of the check: 0
+  const val = (v: number, q: Quantity) => inUnit(handCheckClean(v, scale), q, u);
+  // every number of the check by one rule: 4 significant figures, trailing zeros kept, the points too
+  const coord = (x: number) => handCheckNumber(convert(x, "length", system, L).value);
   const point = `(${coord(about[0])}, ${coord(about[1])}) ${L}`;
   const row = (side: string, t: (typeof eq.forces)[number], sign: number): Cell[] => [
     side,
@@ -464,6 +522,20 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
     t.at ? `(${coord(t.at[0])}, ${coord(t.at[1])})` : "—",
     val(sign * termMomentAbout(t, about), "moment"),
   ];
+  const keys = ["fx", "fy", "m"] as const;
+  const qOf = (k: (typeof keys)[number]): Quantity => (k === "m" ? "moment" : "force");
+  const sides = Object.fromEntries(keys.map((k) => [k, handCheckSides(sums.forces[k], sums.momentum[k], sums.imbalance[k], scale)])) as Record<(typeof keys)[number], HandCheckSides>;
+  const shown = (v: number, q: Quantity) => inUnit(v, q, u) ?? 0;
+  // the difference as computed: 0, a number, or its rounding noise in words (never a bare 0 beside two different sums)
+  const diffCell = (k: (typeof keys)[number]): Cell => {
+    const d = shown(sides[k].difference, qOf(k));
+    return d !== 0 && sides[k].rounding ? handCheckDifferenceText(d, true) : d;
+  };
+  const agree = keys.filter((k) => handCheckNumber(shown(sides[k].forces, qOf(k))) === handCheckNumber(shown(sides[k].momentum, qOf(k))));
+  const differ = keys.filter((k) => !agree.includes(k));
+  const name = { fx: "ΣFx", fy: "ΣFy", m: "ΣM" } as const;
+  const list = (ks: readonly string[]) => (ks.length < 2 ? ks.join("") : `${ks.slice(0, -1).join(", ")} and ${ks[ks.length - 1]}`);
+  const rounded = keys.filter((k) => sides[k].rounding);
   return {
     id: `hand-check-${bodyId}`,
     title: `Hand check of ${bodyId}: ΣF = Σ(ṁV)out − Σ(ṁV)in, ΣM about ${point}`,
@@ -478,16 +550,24 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
     rows: [
       ...eq.forces.map((t) => row("forces on the control volume", t, 1)),
       ...eq.momentum.map((t) => row("momentum flux", t, 1)),
-      ["total", "Σ forces (Σ moments)", val(sums.forces.fx, "force"), val(sums.forces.fy, "force"), "", val(sums.forces.m, "moment")],
-      ["total", "Σ(ṁV)out − Σ(ṁV)in", val(sums.momentum.fx, "force"), val(sums.momentum.fy, "force"), "", val(sums.momentum.m, "moment")],
-      ["total", "imbalance (0 when the body holds)", val(sums.imbalance.fx, "force"), val(sums.imbalance.fy, "force"), "", val(sums.imbalance.m, "moment")],
+      ["total", "Σ forces (Σ moments)", shown(sides.fx.forces, "force"), shown(sides.fy.forces, "force"), "", shown(sides.m.forces, "moment")],
+      ["total", "Σ(ṁV)out − Σ(ṁV)in", shown(sides.fx.momentum, "force"), shown(sides.fy.momentum, "force"), "", shown(sides.m.momentum, "moment")],
+      ["total", "imbalance (0 when the body holds)", diffCell("fx"), diffCell("fy"), "", diffCell("m")],
     ],
+    figures: HAND_CHECK_FIGURES,
     notes: [
-      `ΣFx = ${fmt(sums.forces.fx, "force")} and Σ(ṁV)x = ${fmt(sums.momentum.fx, "force")}; ΣFy = ${fmt(sums.forces.fy, "force")} and Σ(ṁV)y = ${fmt(sums.momentum.fy, "force")}; ΣM about ${point} = ${fmt(sums.forces.m, "moment")} and Σ r × ṁV = ${fmt(sums.momentum.m, "moment")}.`,
+      `ΣFx = ${fmt(sides.fx.forces, "force")} and Σ(ṁV)x = ${fmt(sides.fx.momentum, "force")}; ΣFy = ${fmt(sides.fy.forces, "force")} and Σ(ṁV)y = ${fmt(sides.fy.momentum, "force")}; ΣM about ${point} = ${fmt(sides.m.forces, "moment")} and Σ r × ṁV = ${fmt(sides.m.momentum, "moment")}.`,
+      `Every number to ${HAND_CHECK_FIGURES} significant figures. Each Σ adds the unrounded terms, so it may differ in its last figure from the printed terms added up.`,
+      ...(agree.length
+        ? [
+            `The two sides agree to ${HAND_CHECK_FIGURES} significant figures in ${list(agree.map((k) => name[k]))}${rounded.length ? `; a difference marked “rounding” is floating-point noise of the sums (below a billionth of the largest value), not a figure of the check` : ""}.`,
+          ]
+        : []),
+      ...differ.map((k) => `${name[k]}: the two sides differ by ${fmt(sides[k].difference, qOf(k))}; the body is not in equilibrium on its supports as drawn.`),
     ],
   };
   function fmt(v: number, q: Quantity) {
-    return `${formatNumber(val(v, q) ?? 0, 4)} ${unitOf(q, u)}`;
+    return `${handCheckNumber(shown(v, q))} ${unitOf(q, u)}`;
   }
 }
 

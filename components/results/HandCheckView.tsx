@@ -4,15 +4,15 @@
 // P is picked on the canvas (the "Pick on the drawing" button) or typed.
 import { useDeferredValue, useMemo, useState } from "react";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
-import { columnUnit, handCheckScale, handCheckTable, unitFamily } from "@/solver/report";
+import { columnUnit, HAND_CHECK_FIGURES, handCheckNumber, handCheckScale, handCheckTable, unitFamily, type Scale } from "@/solver/report";
 import { downloadCsv, useCsvName } from "@/components/studies/csv";
-import { convert, formatNumber, type UnitSystem } from "@/solver/units";
+import { convert, type UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { BUTTON, INPUT } from "@/components/editor/ui";
 import { useActionRunner } from "@/components/editor/useActions";
 import { useHeldScale } from "./useHeldScale";
-import { defaultMomentPoint, handCheckBlocks, type HandCheckBlock } from "./handCheck";
+import { defaultMomentPoint, handCheckBlocks, handCheckText, type HandCheckBlock } from "./handCheck";
 
 /**
  * A coordinate of P as typed: a length with its unit ("3 ft", "900 mm"), or a plain number in
@@ -23,12 +23,10 @@ export function parseLength(text: string, units: UnitSystem): number {
   return typeof v === "number" ? v / convert(1, "length", units).value : toFieldNumber(v, "length");
 }
 
-function fmt(v: number, key: "fx" | "fy" | "m", units: UnitSystem, unit: string): string {
-  return `${formatNumber(convert(v, key === "m" ? "moment" : "force", units, unit).value, 4, { keepZeros: true })} ${unit}`;
-}
-
-function Block({ b, units, unit }: { b: HandCheckBlock; units: UnitSystem; unit: string }) {
-  const len = (v: number) => formatNumber(convert(v, "length", units).value, 3);
+function Block({ b, units, unit, scale }: { b: HandCheckBlock; units: UnitSystem; unit: string; scale: Scale }) {
+  // every number of the check by one rule (4 significant figures, trailing zeros kept): the points too
+  const len = (v: number) => handCheckNumber(convert(v, "length", units).value);
+  const text = handCheckText(b, scale, (v) => convert(v, b.key === "m" ? "moment" : "force", units, unit).value, unit);
   return (
     <section aria-label={b.title} className="min-w-0" data-testid={`hand-${b.key}`}>
       <h3 className="mb-1 text-[12.5px] font-semibold text-ink">{b.title}</h3>
@@ -41,14 +39,14 @@ function Block({ b, units, unit }: { b: HandCheckBlock; units: UnitSystem; unit:
               {b.key === "m" && t.at && !t.couple && <span className="text-ink-faint"> at ({len(t.at[0])}, {len(t.at[1])})</span>}
             </span>
             <span className="num shrink-0 text-ink" data-testid="term-value">
-              {fmt(t.value, b.key, units, unit)}
+              {text.forces[i]}
             </span>
           </li>
         ))}
         <li className="flex justify-between gap-2 pt-0.5 font-semibold">
           <span>= Σ {b.key === "m" ? "moments" : "forces"} on the control volume</span>
           <span className="num" data-testid="forces-sum">
-            {fmt(b.forcesSum, b.key, units, unit)}
+            {text.forcesSum}
           </span>
         </li>
         {b.momentum.map((t, i) => (
@@ -56,20 +54,23 @@ function Block({ b, units, unit }: { b: HandCheckBlock; units: UnitSystem; unit:
             <span className="truncate text-ink-soft" title={t.label}>
               {t.label}
             </span>
-            <span className="num shrink-0 text-ink">{fmt(t.value, b.key, units, unit)}</span>
+            <span className="num shrink-0 text-ink">{text.momentum[i]}</span>
           </li>
         ))}
         <li className="flex justify-between gap-2 pt-0.5 font-semibold">
           <span>= Σ(ṁV)out − Σ(ṁV)in</span>
           <span className="num" data-testid="momentum-sum">
-            {fmt(b.momentumSum, b.key, units, unit)}
+            {text.momentumSum}
           </span>
         </li>
         <li className="flex justify-between gap-2 text-ink-faint">
           <span>difference (0 when it holds)</span>
           <span className="num" data-testid="imbalance">
-            {fmt(Math.abs(b.imbalance) < 1e-9 * Math.max(1, Math.abs(b.forcesSum)) ? 0 : b.imbalance, b.key, units, unit)}
+            {text.difference}
           </span>
+        </li>
+        <li className="text-[11.5px] text-ink-faint" data-testid="hand-verdict">
+          {text.verdict}
         </li>
       </ol>
     </section>
@@ -92,8 +93,10 @@ export function HandCheckView() {
   const eq = body && shown ? shown.equations[body.id] : undefined;
   const about: Vec2 = picked ?? defaultMomentPoint(eq, body?.cg);
   const blocks = useMemo(() => (eq ? handCheckBlocks(eq, about) : []), [eq, about]);
+  // the check's largest force and moment: what floating-point noise is measured against
+  const size = useMemo(() => (eq ? handCheckScale(eq, about) : undefined), [eq, about]);
   // the units of the three sums, as in the hand check's table: N and N·m when all of it is below 1 kN
-  const scale = useHeldScale(useMemo(() => (eq ? handCheckScale(eq, about) : undefined), [eq, about]));
+  const scale = useHeldScale(size);
   const unitsOfSums = useMemo(() => {
     const { force, moment } = scale ? unitFamily(units, scale) : { force: columnUnit("force", units), moment: columnUnit("moment", units) };
     return { fx: force, fy: force, m: moment };
@@ -174,14 +177,14 @@ export function HandCheckView() {
         </button>
       </div>
       <p className="mb-2 text-[11.5px] text-ink-faint">
-        Steady flow through a control volume fixed to the body: ΣF = Σ(ṁV)out − Σ(ṁV)in and ΣM_P = Σ r × ṁV (each port&apos;s ṁV times its momentum-flux factor β when one is given). Forces in x and y, moments counter-clockwise positive.
+        Steady flow through a control volume fixed to the body: ΣF = Σ(ṁV)out − Σ(ṁV)in and ΣM_P = Σ r × ṁV (each port&apos;s ṁV times its momentum-flux factor β when one is given). Forces in x and y, moments counter-clockwise positive. Every number to {HAND_CHECK_FIGURES} significant figures; each Σ adds the unrounded terms, so it may differ in its last figure from the printed terms added up.
       </p>
       {/* three sums side by side only where each has room for its terms' names; else one under another */}
       {/* faded like the reactions table while the result shown is an earlier sketch's */}
       <div className={`@container ${stale ? "opacity-60" : ""}`} data-testid="hand-sums" data-stale={stale || undefined}>
         <div className="grid grid-cols-1 gap-x-4 gap-y-3 @4xl:grid-cols-3">
           {blocks.map((b) => (
-            <Block key={b.key} b={b} units={units} unit={unitsOfSums[b.key]} />
+            <Block key={b.key} b={b} units={units} unit={unitsOfSums[b.key]} scale={size ?? { force: 0, moment: 0 }} />
           ))}
         </div>
       </div>

@@ -3,10 +3,11 @@
 // (forces on the left axis, a moment on the right), with the margins' zero crossings marked (✕)
 // and the limit found, if any. Hover shows values.
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { formatLimit } from "@/solver/limit";
 import { describeQuantity } from "@/solver/quantity";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { niceTicks } from "@/lib/ticks";
-import { displayKind, displayUnit, largestByKind, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 
 const COLORS = ["#1f5f7a", "#b4462b", "#1d2329", "#8a6212", "#4d7a3a", "#6b4c9a"];
@@ -27,6 +28,23 @@ export function chartRows(data: SweepData, units: UnitSystem): Array<Record<stri
     });
     return row;
   });
+}
+
+/**
+ * The quantity the limit finder offers first for this plot (its index in `data.quantities`): the
+ * one whose zero crossing the plot marks first along the sweep (where a contact lifts, a tie goes
+ * slack or friction is used up: what the user sees happen); else the first plotted margin, which
+ * the plot would mark at zero; else the first quantity plotted.
+ */
+export function defaultLimitQuantity(data: SweepData): number {
+  let best: { at: number; quantity: number } | null = null;
+  for (const c of data.crossings) {
+    const at = data.xs.indexOf(c.between[1]);
+    if (!best || at < best.at || (at === best.at && c.quantity < best.quantity)) best = { at, quantity: c.quantity };
+  }
+  if (best) return best.quantity;
+  const margin = data.quantities.findIndex((q) => marksZero(q.component));
+  return margin >= 0 ? margin : 0;
 }
 
 /** `names`: the supports' labels by id, to name the lines as the drawing names the supports. */
@@ -92,7 +110,7 @@ export function SweepChart({
           {crossingsX.map((c, i) => (
             <ReferenceDot key={i} yAxisId={axisOf(c.quantity)} x={c.x} y={0} r={5} fill="#fbfaf6" stroke={COLORS[c.quantity % COLORS.length]} strokeWidth={2} label={{ value: "✕", position: "top", fontSize: 12, fill: COLORS[c.quantity % COLORS.length] }} />
           ))}
-          {limit && <ReferenceLine yAxisId="left" x={limit.x} stroke="#b4462b" strokeDasharray="4 3" label={{ value: `limit: ${formatNumber(limit.x, 4)}`, position: "insideTopRight", fontSize: 11, fill: "#b4462b" }} />}
+          {limit && <ReferenceLine yAxisId="left" x={limit.x} stroke="#b4462b" strokeDasharray="4 3" label={{ value: `limit: ${formatLimit(limit.x)}`, position: "insideTopRight", fontSize: 11, fill: "#b4462b" }} />}
         </LineChart>
       </ResponsiveContainer>
     </figure>

@@ -3,7 +3,7 @@
 // against it with the points where a contact lifts, a tie goes slack or friction is used up;
 // and the limit finder: where does a quantity reach a value?
 import { useEffect, useMemo, useRef, useState } from "react";
-import type { LimitResult } from "@/solver/limit";
+import { limitPrecisionWords, limitTolerance, limitWithUnit, type LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
 import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
@@ -18,7 +18,7 @@ import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { firstReached, reachedAt, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
-import { SweepChart } from "./SweepChart";
+import { defaultLimitQuantity, SweepChart } from "./SweepChart";
 import { invalidStretches } from "./sweepErrors";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, type ParameterValue } from "./sweepRange";
 
@@ -109,11 +109,12 @@ export function SweepPanel() {
   const [progress, setProgress] = useState<number | null>(null);
   const [cancel, setCancel] = useState<(() => void) | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const [limitQ, setLimitQ] = useState(0);
+  /** the quantity the limit finder searches, as "support:component" (null: the plot's default, see defaultLimitQuantity) */
+  const [limitKey, setLimitKey] = useState<string | null>(null);
   const [target, setTarget] = useState("0");
   const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** as typed, with its unit */ target: string; /** the answer, in words with units */ words: string } | null>(null);
   /** the same limit in every case and combination */
-  const [everywhere, setEverywhere] = useState<{ rows: LimitEverywhere[]; label: string; target: string; first: string | null; unit: string; from: number; to: number } | null>(null);
+  const [everywhere, setEverywhere] = useState<{ rows: LimitEverywhere[]; label: string; target: string; first: string | null; unit: string; from: number; to: number; precision: string } | null>(null);
   /** a target that does not read: said beside the limit finder, not up by the sweep's Run */
   const [limitError, setLimitError] = useState<string | null>(null);
   const [searching, setSearching] = useState<(() => void) | null>(null);
@@ -181,8 +182,8 @@ export function SweepPanel() {
   const limitInputs = () => {
     // on what the plot shows (the form may have changed since)
     const s = ran?.spec;
-    if (!s) return null;
-    const q = s.quantities[limitQ] ?? s.quantities[0];
+    if (!s || !limitQuantity) return null;
+    const q = limitQuantity;
     // a plain number is in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or
     // N·m); a value with a unit ("450 lbf") is taken as written
     let tgt: { si: number; shown: string };
@@ -213,7 +214,11 @@ export function SweepPanel() {
         if (ranId.current !== id) return;
         const first = firstReached(rows, s.from, s.to);
         const unit = rows.find((r) => "unit" in r.result)?.result;
-        setEverywhere({ rows, label: describeQuantity(q, names), target: tgt.shown, first: first?.row.id ?? null, unit: unit && "unit" in unit && unit.unit ? ` ${prettyUnit(unit.unit)}` : "", from: s.from, to: s.to });
+        const unitText = unit && "unit" in unit ? unit.unit : "";
+        // every run is searched over the same range, to the same tolerance
+        const found = rows.find((r) => "found" in r.result && r.result.found)?.result;
+        const tolerance = (found && "found" in found && found.found && found.tolerance) || limitTolerance([s.from, s.to]);
+        setEverywhere({ rows, label: describeQuantity(q, names), target: tgt.shown, first: first?.row.id ?? null, unit: unitText, from: s.from, to: s.to, precision: limitPrecisionWords(tolerance, unitText) });
       })
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -233,8 +238,10 @@ export function SweepPanel() {
         const inShown = (si: number) => `${formatNumber(toDisplay(si, q.component, units, scaleFor(q.component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
         const pUnit = result.unit ? ` ${prettyUnit(result.unit)}` : "";
         const pName = s.parameter === FLOW_FACTOR ? "the flow factor" : s.parameter;
+        // one rule for a found limit wherever it is shown: 4 significant figures, with the search's tolerance
+        const again = result.found && result.crossings.length > 1 ? ` and again at ${result.crossings.slice(1).map((x) => limitWithUnit(x, result.unit)).join(", ")}` : "";
         const words = result.found
-          ? `The ${label} reaches ${tgt.shown} at ${pName} = ${formatNumber(result.value, 5)}${pUnit}${result.crossings.length > 1 ? ` (and again at ${result.crossings.slice(1).map((x) => formatNumber(x, 5)).join(", ")})` : ""}.`
+          ? `The ${label} reaches ${tgt.shown} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again} (${limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit)}).`
           : Number.isFinite(result.min)
             ? `No crossing in this range: the ${label} stays ${result.min >= tgt.si ? "above" : "below"} ${tgt.shown} (it runs from ${inShown(result.min)} to ${inShown(result.max)}) for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`
             : `No crossing in this range: the ${label} is undefined for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`;
@@ -294,7 +301,11 @@ export function SweepPanel() {
       })
     : [];
   const plotted = ran?.spec.quantities ?? [];
-  const limitQuantity = plotted[limitQ] ?? plotted[0];
+  const keyOf = (q: QuantitySpec) => `${q.support}:${q.component}`;
+  // the quantity picked while it is still plotted; else the one the plot marks where it reaches zero
+  // (what the user sees happen), so the finder searches by default what the plot shows
+  const shownByDefault = data ? data.quantities[defaultLimitQuantity(data)] : undefined;
+  const limitQuantity = plotted.find((q) => keyOf(q) === limitKey) ?? plotted.find((q) => shownByDefault && keyOf(q) === keyOf(shownByDefault)) ?? plotted[0];
   const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scaleFor(limitQuantity.component)) : "";
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
   // the plot's parameter, which the form may have left since
@@ -427,7 +438,7 @@ export function SweepPanel() {
             </ul>
             <div className="mt-2 flex flex-wrap items-center gap-1.5 border-t border-rule-soft pt-2" role="group" aria-label="Limit finder">
               <span className={`${LABEL} whitespace-nowrap`}>At what {dLabel} does</span>
-              <select className={`${INPUT} !w-auto min-w-0`} value={limitQ} onChange={(e) => setLimitQ(Number(e.target.value))} aria-label="Quantity for the limit">
+              <select className={`${INPUT} !w-auto min-w-0`} value={limitQuantity ? plotted.indexOf(limitQuantity) : 0} onChange={(e) => setLimitKey(keyOf(plotted[Number(e.target.value)]))} aria-label="Quantity for the limit">
                 {plotted.map((q, i) => <option key={i} value={i}>{describeQuantity(q, names)}</option>)}
               </select>
               <span className={LABEL}>reach</span>
@@ -486,13 +497,16 @@ export function SweepPanel() {
                           {"error" in r.result
                             ? `not solved: ${r.result.error}`
                             : r.result.found
-                              ? `${dLabel} = ${formatNumber(reachedAt(r.result, everywhere.from, everywhere.to)!, 5)}${everywhere.unit}${r.id === everywhere.first ? " — first" : ""}`
+                              ? `${dLabel} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${r.id === everywhere.first ? " — first" : ""}`
                               : "no crossing in this range"}
                         </td>
                       </tr>
                     ))}
                   </tbody>
                 </table>
+                <p className="mt-0.5 text-[11.5px] text-ink-faint" data-testid="limit-everywhere-precision">
+                  Values {everywhere.precision}.
+                </p>
               </div>
             )}
           </>

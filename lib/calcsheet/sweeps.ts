@@ -3,7 +3,7 @@
 // a moment is never drawn on a force axis, and the crossings of its margins found by the limit
 // finder (which a version's page lists under its own plot too).
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
-import { findLimitWith } from "@/solver/limit";
+import { findLimitWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
 import { describeQuantity, readQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
@@ -29,7 +29,7 @@ export interface SweepMarker {
   x: number;
   /** short, on the chart: "front jack: lift-off at 44.44 deg" (the support by its label) */
   label: string;
-  /** the sentence under the chart */
+  /** the sentence under the chart, with how far the value is given: "… at theta = 44.44 deg (to 4 significant figures, found to within ±8e-8 deg)" */
   words: string;
 }
 
@@ -43,10 +43,12 @@ export function sweepMarkers(file: SketchFile, sw: SweepFile, quantities: Quanti
   return quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
     const lim = findLimitWith(sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter), [sw.from, sw.to], q);
     if (!lim.found) return [];
-    const at = `${formatNumber(lim.value, 4)}${lim.unit ? ` ${prettyUnit(lim.unit)}` : ""}`;
+    // a found limit is written by one rule wherever it is shown (solver/limit.ts)
+    const at = limitWithUnit(lim.value, lim.unit);
     const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
     const name = names[q.support] ?? q.support;
-    return [{ x: lim.value, label: `${name}: ${event.noun} at ${at}`, words: `${name}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at}` }];
+    const precision = limitPrecisionWords(lim.tolerance ?? limitTolerance([sw.from, sw.to]), lim.unit);
+    return [{ x: lim.value, label: `${name}: ${event.noun} at ${at}`, words: `${name}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at} (${precision})` }];
   });
 }
 
@@ -73,9 +75,13 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
       // the run's name, a dash, then what it comes to: names hold commas and colons of their own
       if ("error" in f) return `${r.name} — not solved`;
       if (!f.found || at[i] === null) return `${r.name} — none in the range`;
-      return `${r.name} — ${formatNumber(at[i], 4)}${f.unit ? ` ${prettyUnit(f.unit)}` : ""}${r === first.row && !tie ? " (first)" : ""}`;
+      return `${r.name} — ${limitWithUnit(at[i], f.unit)}${r === first.row && !tie ? " (first)" : ""}`;
     });
-    return [`${names[q.support] ?? q.support} ${event.noun} in each case and combination: ${each.join("; ")}`];
+    // every run is searched over the sweep's range, so to one tolerance
+    const found = first.row.result;
+    const unit = "unit" in found ? found.unit : "";
+    const tolerance = ("found" in found && found.found && found.tolerance) || limitTolerance([sw.from, sw.to]);
+    return [`${names[q.support] ?? q.support} ${event.noun} in each case and combination: ${each.join("; ")}; each ${limitPrecisionWords(tolerance, unit)}`];
   });
 }
 

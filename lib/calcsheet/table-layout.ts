@@ -5,8 +5,7 @@
 // columns (the case, the support); then, if no split helps, the whole table at the largest size at
 // which every word fits. Pure: the caller passes a measure function (pdfkit's widthOfString in the
 // sheet, so the widths are the ones pdfkit wraps by).
-import { formatNumber } from "@/solver/units";
-import type { Table } from "@/solver/report";
+import { cellNumberText, type Table } from "@/solver/report";
 
 /** Width in points of `text` in the regular or the semibold face at `size` points. */
 export type Measure = (text: string, bold: boolean, size: number) => number;
@@ -77,9 +76,10 @@ export function words(text: string): string[] {
   return text.split(/[ \n\t]+/).filter(Boolean);
 }
 
-function cellText(c: Table["rows"][number][number]): string {
+function cellText(t: Table, c: Table["rows"][number][number]): string {
   if (c === null || c === undefined) return "—";
-  if (typeof c === "number") return formatNumber(c, 4, { keepZeros: true });
+  // the table's own rule for its numbers (the hand check's 4 significant figures), else the usual one
+  if (typeof c === "number") return cellNumberText(t, c);
   return c;
 }
 
@@ -89,7 +89,7 @@ export function tableCells(t: Table): string[][] {
   return t.rows.map((r, ri) =>
     r.map((c, ci) => {
       const mark = t.marks?.[ri]?.[t.columns[ci].key];
-      return mark ? `${mark.symbol}\u00a0${cellText(c)}` : cellText(c);
+      return mark ? `${mark.symbol}\u00a0${cellText(t, c)}` : cellText(t, c);
     }),
   );
 }

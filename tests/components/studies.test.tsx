@@ -6,7 +6,7 @@ import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { mountResultsDock, renderEditor, setUpSweep } from "./editor-helpers";
 import { parseSketch, solve, solveCases } from "@/solver/index";
-import { formatNumber } from "@/solver/units";
+import { formatLimit } from "@/solver/limit";
 
 const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n}.json`, "utf8"));
 
@@ -269,7 +269,8 @@ describe("Sweep tab", () => {
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
     expect(screen.getByRole("group", { name: "Limit finder" }).textContent).toContain("lbf·ft?");
     await findLimit(user, "1");
-    expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 1 lbf·ft at a = 1.0014 m.");
+    // a found limit is given to 4 significant figures, with the search's tolerance (1e-9 of the 2 m range)
+    expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 1 lbf·ft at a = 1.001 m (to 4 significant figures, found to within ±2e-9 m).");
   });
 
   it("on a light rig the target is typed in N·m, the unit of the reactions table beside it", async () => {
@@ -284,10 +285,10 @@ describe("Sweep tab", () => {
     expect(screen.getByRole("group", { name: "Limit finder" }).textContent).toContain("N·m?");
     expect(screen.getByRole("group", { name: "Limit finder" }).textContent).not.toContain("kN·m?");
     await findLimit(user, "20");
-    expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 20 N·m at a = 1.2 m.");
+    expect((await screen.findByTestId("limit-answer")).textContent).toBe("The moment at base reaches 20 N·m at a = 1.200 m (to 4 significant figures, found to within ±2e-9 m).");
     // a target with its own unit is taken as written: 0.03 kN·m = 30 N·m at a = 1.3 m
     await findLimit(user, "0.03 kN m");
-    await waitFor(() => expect(screen.getByTestId("limit-answer").textContent).toBe("The moment at base reaches 0.03 kN m at a = 1.3 m."));
+    await waitFor(() => expect(screen.getByTestId("limit-answer").textContent).toBe("The moment at base reaches 0.03 kN m at a = 1.300 m (to 4 significant figures, found to within ±2e-9 m)."));
     // the wrong kind of quantity is refused in words, naming the target
     await findLimit(user, "3 kg");
     expect((await screen.findByRole("alert")).textContent).toBe("Target: 3 kg is a mass (kg), but this field needs a moment (N·m).");
@@ -334,7 +335,7 @@ describe("Sweep tab", () => {
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at front jack");
     await user.click(screen.getByRole("button", { name: "Find" }));
     const answer = await screen.findByTestId("limit-answer");
-    expect(answer.textContent).toMatch(/^The margin at front jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
+    expect(answer.textContent).toMatch(/^The margin at front jack reaches 0 kN at theta = 18\.1\d deg \(to 4 significant figures, found to within ±8e-8 deg\)\.$/);
   });
 });
 
@@ -372,7 +373,7 @@ describe("a sweep on a combination", () => {
     await user.selectOptions(on, "As drawn");
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at front jack");
     await user.click(screen.getByRole("button", { name: "Find" }));
-    expect((await screen.findByTestId("limit-answer")).textContent).toContain(`at theta = ${expected.value.toPrecision(5).replace(/0+$/, "")} deg.`);
+    expect((await screen.findByTestId("limit-answer")).textContent).toContain(`at theta = ${formatLimit(expected.value)} deg (to 4 significant figures`);
     await user.selectOptions(on, "Light trailer, strong jet");
     await user.click(screen.getByRole("button", { name: "Keep on the calc sheet" }));
     expect(editor.getState().sketch.sweeps![0]).toMatchObject({ parameter: "theta", from: 0, to: 80, points: 81, combination: "k" });
@@ -397,7 +398,7 @@ describe("the limit in every case", () => {
     const upwind = { support: "upwind", component: "margin" as const };
     const one = (on: { caseId?: string; combinationId?: string }) => {
       const r = runLimit(doc, { parameter: "v", from: 20, to: 45, quantity: upwind, target: 0, ...on });
-      return r.found ? `v = ${formatNumber(r.value, 5)} m/s` : "no crossing in this range";
+      return r.found ? `v = ${formatLimit(r.value)} m/s` : "no crossing in this range";
     };
     const rows = [...box.querySelectorAll("tbody tr")].map((tr) => [...tr.querySelectorAll("th, td")].map((td) => td.textContent));
     expect(within(box).getByRole("table", { name: "Where the margin at upwind edge reaches 0 kN, in each case and combination" })).toBeTruthy();
@@ -410,6 +411,8 @@ describe("the limit in every case", () => {
     // the storm case sets v itself, but the sweep's value stands in: it lifts where "stopped" does
     expect(rows[2][1]).toBe(rows[1][1]);
     expect(within(box).getByRole("status").textContent).toBe("The margin at upwind edge reaches 0 kN first in Uplift check: 0.9 × weight + 1.5 × wind.");
+    // every value to 4 significant figures, each search to 1e-9 of the 25 m/s range
+    expect(screen.getByTestId("limit-everywhere-precision").textContent).toBe("Values to 4 significant figures, found to within ±3e-8 m/s.");
   });
 });
 

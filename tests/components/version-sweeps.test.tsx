@@ -6,7 +6,7 @@ import { describe, expect, it } from "vitest";
 import { exampleById } from "@/canvas/examples";
 import { VersionSweeps } from "@/components/review/VersionSweeps";
 import type { SketchFile } from "@/solver/schema";
-import { formatNumber } from "@/solver/units";
+import { formatLimit } from "@/solver/limit";
 import { runLimit } from "@/canvas/studies/run";
 
 const g = 9.80665; // standard gravity, m/s² (CGPM 1901)
@@ -23,17 +23,18 @@ describe("a version's kept sweeps", () => {
       "v from 20 to 45 m/s — case Engine stopped, 30 m/s wind",
       "v from 20 to 45 m/s — combination Uplift check: 0.9 × weight + 1.5 × wind",
     ]);
-    expect(figures[0].textContent).toContain(`Crossing: upwind edge: lift-off (its normal force reaches zero) at v = ${vLift.toFixed(2)} m/s.`);
+    // a found limit to 4 significant figures, with the search's tolerance (1e-9 of the 25 m/s range)
+    expect(figures[0].textContent).toContain(`Crossing: upwind edge: lift-off (its normal force reaches zero) at v = ${formatLimit(vLift)} m/s (to 4 significant figures, found to within ±3e-8 m/s).`);
     // factored: 1.5 × the wind against 0.9 × the weight, v = v_lift·√(0.9 / 1.5) (statics, common practice)
-    expect(figures[1].textContent).toContain(`Crossing: upwind edge: lift-off (its normal force reaches zero) at v = ${(vLift * Math.sqrt(0.6)).toFixed(2)} m/s.`);
+    expect(figures[1].textContent).toContain(`Crossing: upwind edge: lift-off (its normal force reaches zero) at v = ${formatLimit(vLift * Math.sqrt(0.6))} m/s (to 4 significant figures, found to within ±3e-8 m/s).`);
     expect(within(figures[0]).getByTestId("sweep-chart")).toBeTruthy();
     // and in every case and combination: the factored uplift check gets there first (no line for
     // the downwind friction margin, which reaches zero in none of them)
-    const v = (x: number) => `${formatNumber(x, 4)} m/s`;
+    const v = (x: number) => `${formatLimit(x)} m/s`;
     const running = runLimit(doc, { parameter: "v", from: 20, to: 45, caseId: "running", quantity: { support: "upwind", component: "margin" }, target: 0 });
     if (!running.found) throw new Error("expected a crossing");
     expect(figures[0].textContent).toContain(
-      `upwind edge lift-off in each case and combination: Engine running, 30 m/s wind — ${v(running.value)}; Engine stopped, 30 m/s wind — ${v(vLift)}; Engine stopped, 38 m/s storm — ${v(vLift)}; Uplift check: 0.9 × weight + 1.5 × wind — ${v(vLift * Math.sqrt(0.6))} (first).`,
+      `upwind edge lift-off in each case and combination: Engine running, 30 m/s wind — ${v(running.value)}; Engine stopped, 30 m/s wind — ${v(vLift)}; Engine stopped, 38 m/s storm — ${v(vLift)}; Uplift check: 0.9 × weight + 1.5 × wind — ${v(vLift * Math.sqrt(0.6))} (first); each to 4 significant figures, found to within ±3e-8 m/s.`,
     );
     expect(figures[0].textContent).not.toContain("downwind slip");
   });

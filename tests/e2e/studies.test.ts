@@ -84,7 +84,7 @@ describe("design studies", () => {
     await page.getByRole("button", { name: "Find" }).click();
     const answer = page.getByTestId("limit-answer");
     await answer.waitFor();
-    expect(await answer.textContent()).toMatch(/^The margin at front jack reaches 0 kN at theta = 18\.1\d+ deg\.$/);
+    expect(await answer.textContent()).toMatch(/^The margin at front jack reaches 0 kN at theta = 18\.1\d deg \(to 4 significant figures, found to within ±8e-8 deg\)\.$/);
     // the same search in every case, in the page's worker: both cases set theta, which the sweep's
     // values stand in for, so both lift where the sketch does; the first of a tie is named
     await page.getByRole("button", { name: "In every case" }).click();
@@ -113,7 +113,7 @@ describe("design studies", () => {
     // the kept sweep is plotted on the version's page too, with the limit finder's crossing
     const kept = page.getByTestId("version-sweeps");
     await kept.getByTestId("sweep-chart").waitFor();
-    expect(await kept.textContent()).toMatch(/theta from 0 to 80 deg — as drawn.*Crossing: front jack: lift-off \(its normal force reaches zero\) at theta = 18\.1\d deg\./);
+    expect(await kept.textContent()).toMatch(/theta from 0 to 80 deg — as drawn.*Crossing: front jack: lift-off \(its normal force reaches zero\) at theta = 18\.1\d deg \(to 4 significant figures, found to within ±8e-8 deg\)\./);
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Calc sheet (PDF)" }).click()]);
     expect(download.suggestedFilename()).toBe(`Monitor-trailer-${tag}-v2-calc-sheet-SI.pdf`);
     const path = await download.path();

@@ -4,7 +4,7 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { buildCalcSheet, haloBehindLabels } from "@/lib/calcsheet/pdf";
 import { runLimit } from "@/canvas/studies/run";
-import { formatNumber } from "@/solver/units";
+import { formatLimit } from "@/solver/limit";
 import { tableCells } from "@/lib/calcsheet/table-layout";
 import { parseSketch, solveCases } from "@/solver";
 import { caseReactionTable, designLoadTable, envelopeTable, stabilityTable, type Table } from "@/solver/report";
@@ -73,8 +73,9 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("COUNTERPOISE · CALCULATION SHEET");
     expect(text).toContain("Monitor trailer");
     // the hand check takes moments about the point the results panel takes by default: the first
-    // support (the rear leg at (0, 0.3) m), so a checker sees the same terms on screen and paper
-    expect(text).toContain("ΣM about (0, 0.3) m");
+    // support (the rear leg at (0, 0.3) m), so a checker sees the same terms on screen and paper;
+    // the point's coordinates follow the check's one rule for numbers (4 significant figures, zeros kept)
+    expect(text).toContain("ΣM about (0, 0.3000) m");
     expect(text).toContain("Workspace: Demo: Riverside Pump Station");
     expect(text).toContain("Version 3 — raised the riser to 2.8 m");
     expect(text).toMatch(/Prepared by Eddie Editor, 2026-11-30 10:00 UTC/);
@@ -90,7 +91,8 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("Low throw");
     expect(text).toContain("High throw");
     expect(text).toMatch(/Sweep of theta/);
-    expect(text).toMatch(/Crossing: front jack: lift-off \(its normal force reaches zero\) at theta = \d+(\.\d+)? deg\./);
+    // a found limit to 4 significant figures, with the search's tolerance: 1e-9 of the 80° range
+    expect(text).toMatch(/Crossing: front jack: lift-off \(its normal force reaches zero\) at theta = \d+\.\d+ deg \(to 4 significant figures, found to within ±8e-8 deg\)\./);
     // the conventions a checker redoes the tables by (common practice: a reaction table states
     // its signs and whose force it gives)
     expect(text).toContain("Moments are positive counter-clockwise");
@@ -144,7 +146,7 @@ describe("calc sheet PDF", () => {
     expect(text).toContain("Sweep of theta — case More flow");
     // "More flow" leaves theta alone: nothing to say about it
     expect(text).not.toContain("stand in for the case's own");
-    expect(text).toContain(`Crossing: front jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
+    expect(text).toContain(`Crossing: front jack: lift-off (its normal force reaches zero) at theta = ${formatLimit(lim.value)} deg`);
   }, 60000);
 
   it("with cases, says the factors of safety of the sketch as drawn too: a short one on the first page, and its own rows first in the stability table", async () => {
@@ -176,8 +178,8 @@ describe("calc sheet PDF", () => {
     const lim = runLimit(file, { parameter: "theta", from: 0, to: 80, combinationId: "k", quantity: { support: "jack", component: "margin" }, target: 0 });
     const drawn = runLimit(file, { parameter: "theta", from: 0, to: 80, quantity: { support: "jack", component: "margin" }, target: 0 });
     if (!lim.found || !drawn.found) throw new Error("expected crossings");
-    expect(formatNumber(lim.value, 4)).not.toBe(formatNumber(drawn.value, 4));
-    expect(text).toContain(`Crossing: front jack: lift-off (its normal force reaches zero) at theta = ${formatNumber(lim.value, 4)} deg`);
+    expect(formatLimit(lim.value)).not.toBe(formatLimit(drawn.value));
+    expect(text).toContain(`Crossing: front jack: lift-off (its normal force reaches zero) at theta = ${formatLimit(lim.value)} deg`);
   }, 60000);
 
   it("says when a sweep's case sets the swept parameter itself: the sweep's values stand in for it", async () => {
@@ -190,7 +192,7 @@ describe("calc sheet PDF", () => {
     expect(text).toMatch(/Crossing: upwind edge: lift-off \(its normal force reaches zero\) at v = 35\.38 m\/s/);
     // and in every case and combination, the factored uplift check first (v_lift·√(0.9 / 1.5) = 27.41 m/s:
     // tests/unit/studies/exhaust-stack-example.test.ts)
-    expect(text).toMatch(/upwind edge lift-off in each case and combination: Engine running, 30 m\/s wind — 36\.8\d? m\/s; Engine stopped, 30 m\/s wind — 35\.38 m\/s; .*Uplift check: 0\.9 × weight \+ 1\.5 × wind — 27\.41 m\/s \(first\)\./);
+    expect(text).toMatch(/upwind edge lift-off in each case and combination: Engine running, 30 m\/s wind — 36\.8\d? m\/s; Engine stopped, 30 m\/s wind — 35\.38 m\/s; .*Uplift check: 0\.9 × weight \+ 1\.5 × wind — 27\.41 m\/s \(first\); each to 4 significant figures, found to within ±3e-8 m\/s\./);
   }, 60000);
 
   it("prints a support-moment column only when a fixed support can carry a moment, zeros included", async () => {
@@ -286,7 +288,7 @@ describe("calc sheet PDF", () => {
       expect(text, c.name).toMatch(new RegExp(`Case: ${c.name}( \\(continued\\))? Pump set `));
     }
     // the strap is a tie: its margin reaching zero is named for what it means
-    expect(text).toMatch(/Crossing: holdDownStrapToFloorAnchor: slack \(its tension reaches zero\) at mdot = \d+(\.\d+)? kg\/s\./);
+    expect(text).toMatch(/Crossing: holdDownStrapToFloorAnchor: slack \(its tension reaches zero\) at mdot = \d+\.?\d* kg\/s \(to 4 significant figures, found to within ±\de-\d+ kg\/s\)\./);
     // the envelope names each support once over its components
     expect(text).toContain("Support: leftRubberBearingPadUnderEngine Fx lbf ");
     // units on the heading's second line still read as "Fx (lbf)"
