@@ -1,6 +1,6 @@
 "use client";
 // The properties of one element: its name, the body it belongs to, and each field of its kind.
-import { useDeferredValue } from "react";
+import { useCallback, useDeferredValue, useState } from "react";
 import type { Numeric } from "@/solver/schema";
 import { useAnalysis, useEditor, useScene, useStores } from "@/canvas/context";
 import { findElement, KIND_LABEL, type Attached, type BodyEl } from "@/canvas/model/elements";
@@ -10,15 +10,41 @@ import { moveCentreOfGravity } from "@/canvas/commands/move";
 import { setForceForm } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
 import { convert, formatNumber, formatQuantity } from "@/solver/units";
-import { FORCE_COMPONENTS, FORCE_POLAR, FORM, type FieldDef, type NumberFieldDef, type PointFieldDef } from "./fieldDefs";
+import {
+  FORCE_COMPONENTS,
+  FORCE_POLAR,
+  FORM,
+  PORT_FLOW_KEYS,
+  PORT_OTHER_WAYS,
+  fieldLabel,
+  fieldWords,
+  portBlankRefusal,
+  portLacks,
+  type FieldDef,
+  type NumberFieldDef,
+  type PointFieldDef,
+  type PortLack,
+} from "./fieldDefs";
 import { NumericField } from "./NumericField";
 import { TextField } from "./TextField";
 import { useCommit } from "./useCommit";
 import { BUTTON, ICON_BUTTON, INPUT } from "./ui";
 
 type Commit = ReturnType<typeof useCommit>;
+/** A field's own refusal (or null), by its key, for the rest of the form. */
+type Report = (key: string, problem: string | null) => void;
 
-function NumberRow({ id, def, value, commit }: { id: string; def: NumberFieldDef; value: Numeric | undefined; commit: Commit }) {
+interface RowExtras {
+  /** said at the field while it is blank: what the element lacks without it */
+  needed?: string;
+  /** why the field may not be left blank now, or null */
+  refuseBlank?: (key: string) => string | null;
+  report?: Report;
+}
+
+function NumberRow({ id, def, value, commit, needed, refuseBlank, report }: { id: string; def: NumberFieldDef; value: Numeric | undefined; commit: Commit } & RowExtras) {
+  const key = def.key;
+  const onProblem = useCallback((problem: string | null) => report?.(key, problem), [report, key]);
   return (
     <NumericField
       valueKey={`${id}.${def.key}`}
@@ -28,8 +54,10 @@ function NumberRow({ id, def, value, commit }: { id: string; def: NumberFieldDef
       optional={def.optional}
       example={def.example}
       hint={def.hint}
+      needed={needed}
       testId={`field-${def.key}`}
-      onCommit={(v, c) => commit([def.key], v, c)}
+      onProblem={report ? onProblem : undefined}
+      onCommit={(v, c) => (v === undefined && refuseBlank?.(def.key)) || commit([def.key], v, c)}
     />
   );
 }
@@ -143,12 +171,42 @@ function ForceFields({ id, el, commit }: { id: string; el: Record<string, unknow
   );
 }
 
-function PortFlow({ id }: { id: string }) {
+/** "area", "area and density ρ", "mass flow ṁ, area and density ρ" */
+const listed = (words: string[]) => (words.length < 2 ? words.join("") : `${words.slice(0, -1).join(", ")} and ${words[words.length - 1]}`);
+
+/** What a port's field says while it is blank and the port cannot do without it. */
+function portNeeded(kind: "inlet" | "outlet", lack: PortLack): string {
+  const label = fieldLabel(kind, lack);
+  if (lack === "area") return `${label} is needed: the gauge pressure acts on it.`;
+  return `${label} is needed (or ${PORT_OTHER_WAYS[lack]}).`;
+}
+
+/**
+ * The port's ṁ, V, momentum flux and pressure force as the solver takes them, or, while one of its
+ * flow fields is in error (at the field or in the analysis) or it lacks what it needs, what they
+ * wait for, with no numbers: numbers from a refused value would be wrong.
+ */
+function PortFlow({ id, kind, port, problems }: { id: string; kind: "inlet" | "outlet"; port: Record<string, unknown>; problems: Readonly<Record<string, string>> }) {
   const item = useScene((s) => s.byId.get(id)) as { massFlow: number; velocity: number; beta: number; pressure: number; area?: number } | undefined;
   const units = useEditor((s) => s.units);
-  if (!item || !Number.isFinite(item.massFlow)) return null;
+  const fieldErrors = useAnalysis((s) => s.fieldValues.errors);
+  // a blank field the solver asks for is missing, not invalid: the port's lack says it below
+  const inError = PORT_FLOW_KEYS.filter((k) => problems[k] !== undefined || (port[k] !== undefined && fieldErrors.has(`${id}.${k}`)));
+  const lack = portLacks(port);
+  let waits: string | null = null;
+  if (inError.length) waits = `Resolved values wait for a valid ${listed(inError.map((k) => fieldWords(kind, k)))}.`;
+  else if (lack === "area") waits = "Resolved values wait for the area the gauge pressure acts on.";
+  else if (lack) waits = `Resolved values wait for a ${lack === "massFlow" ? "mass flow: give ṁ" : "velocity: give V"}, or ${PORT_OTHER_WAYS[lack]}.`;
+  else if (!item || ![item.massFlow, item.velocity, item.beta].every(Number.isFinite)) waits = "Resolved values wait for the port's flow fields to be worked out.";
+  if (waits || !item) {
+    return (
+      <p className="rounded bg-paper px-2 py-1 text-[11.5px] text-ink-soft" data-testid="port-resolved">
+        {waits}
+      </p>
+    );
+  }
   return (
-    <p className="num rounded bg-paper px-2 py-1 text-[11.5px] text-ink-soft">
+    <p className="num rounded bg-paper px-2 py-1 text-[11.5px] text-ink-soft" data-testid="port-resolved">
       Resolved: ṁ = {formatQuantity(item.massFlow, "massFlow", units)}, V = {formatQuantity(item.velocity, "velocity", units)}, momentum flux{" "}
       {item.beta === 1 ? "ṁV" : `βṁV (β = ${formatNumber(item.beta)})`} = {formatQuantity(item.beta * item.massFlow * item.velocity, "force", units)}
       {/* the gauge pressure's force, pushing inward at every port (the file format's rule) */}
@@ -164,9 +222,34 @@ export function ElementForm({ id }: { id: string }) {
   const elementError = useAnalysis((s) => s.fieldValues.errors.get(id));
   const { editor } = useStores();
   const commit = useCommit(id);
+  // the fields' own refusals (a blank or a value they would not store), for the port's resolved line
+  const [problems, setProblems] = useState<Readonly<Record<string, string>>>({});
+  const report = useCallback<Report>(
+    (key, problem) =>
+      setProblems((prev) => {
+        if ((prev[key] ?? null) === problem) return prev;
+        const next = { ...prev };
+        if (problem) next[key] = problem;
+        else delete next[key];
+        return next;
+      }),
+    [],
+  );
+  // a port's field may not be left blank when the port would then lack what it has (read from the
+  // sketch as it is now, not the form's deferred copy)
+  const refuseBlank = useCallback(
+    (key: string) => {
+      const now = findElement(editor.getState().sketch, id);
+      return now && (now.kind === "inlet" || now.kind === "outlet") ? portBlankRefusal(now.kind, now.el as unknown as Record<string, unknown>, key) : null;
+    },
+    [editor, id],
+  );
   if (!located) return null;
   const { kind, el, group } = located;
   const record = el as unknown as Record<string, unknown>;
+  const port = kind === "inlet" || kind === "outlet" ? kind : null;
+  const lack = port ? portLacks(record) : null;
+  const portExtras = (key: string): RowExtras => (port ? { report, refuseBlank, needed: lack === key ? portNeeded(port, lack) : undefined } : {});
   const defs: FieldDef[] = FORM[kind];
   const basic = defs.filter((d) => !("advanced" in d && d.advanced));
   const advanced = defs.filter((d) => "advanced" in d && d.advanced);
@@ -174,7 +257,7 @@ export function ElementForm({ id }: { id: string }) {
     "point" in d ? (
       d.key === "cg" ? <CentreOfGravity key={d.key} id={id} body={el as BodyEl} /> : <PointRow key={d.key} id={id} def={d} value={record[d.key] as Numeric[] | undefined} commit={commit} />
     ) : (
-      <NumberRow key={d.key} id={id} def={d} value={record[d.key] as Numeric | undefined} commit={commit} />
+      <NumberRow key={d.key} id={id} def={d} value={record[d.key] as Numeric | undefined} commit={commit} {...portExtras(d.key)} />
     );
 
   return (
@@ -204,7 +287,7 @@ export function ElementForm({ id }: { id: string }) {
       )}
       {basic.map(row)}
       {kind === "force" && <ForceFields id={id} el={record} commit={commit} />}
-      {(kind === "inlet" || kind === "outlet") && <PortFlow id={id} />}
+      {port && <PortFlow id={id} kind={port} port={record} problems={problems} />}
       {kind === "body" && <Corners id={id} body={el as BodyEl} />}
       {group !== "supports" && (
         <TextField

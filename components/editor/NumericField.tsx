@@ -1,7 +1,7 @@
 "use client";
 // One numeric field: takes a number or an expression with units ("350 psi", "2*r", "theta + 5 deg"),
 // stores it as typed, and shows under it the value the solver's parser found — or its error.
-import { useId, useRef, useState } from "react";
+import { useEffect, useId, useRef, useState } from "react";
 import type { Numeric } from "@/solver/schema";
 import { convert, formatNumber, formatQuantity } from "@/solver/units";
 import { useAnalysis, useEditor } from "@/canvas/context";
@@ -23,8 +23,12 @@ export interface NumericFieldProps {
   optional?: boolean;
   example?: string;
   hint?: string;
+  /** said at the field, marked as an error, while it is blank: what the element lacks without it */
+  needed?: string;
   /** store the typed value; returns an error to show (and nothing is stored) or null */
   onCommit: (value: Numeric | undefined, coalesce: string) => string | null;
+  /** the field's own refusal (a value or a blank it would not store), or null: for the form around it */
+  onProblem?: (problem: string | null) => void;
   /** visually compact (the x / y pair of a point) */
   compact?: boolean;
   testId?: string;
@@ -36,33 +40,76 @@ export function formatDisplay(v: number, display: Display, units: "SI" | "US"): 
   return formatQuantity(v, display, units);
 }
 
-export function NumericField({ valueKey, label, value, display, optional, example, hint, onCommit, compact, testId }: NumericFieldProps) {
+/**
+ * The text of a stored value nobody typed here: a plain number as JavaScript writes it but with no
+ * "+" in its exponent (1e30, 1e-7), free of rounding noise (0.1 + 0.2 is 0.3), and a small one
+ * with its figures (2e-10, not 0); an expression as it is.
+ */
+export function storedText(v: Numeric | undefined): string {
+  if (typeof v !== "number") return numericText(v);
+  if (!Number.isFinite(v)) return "";
+  const n = Math.abs(v) < 1e-3 ? Number(v.toPrecision(12)) || 0 : Number(numericText(v));
+  return String(n).replace("e+", "e");
+}
+
+export function NumericField({ valueKey, label, value, display, optional, example, hint, needed, onCommit, onProblem, compact, testId }: NumericFieldProps) {
   const id = useId();
   const [draft, setDraft] = useState<string | null>(null);
   const [localError, setLocalError] = useState<string | null>(null);
-  // what stays said after the field is left: a required value left blank (the old one was kept),
-  // and that a plain number was typed here with US units on screen
-  const [kept, setKept] = useState<string | null>(null);
+  // a blank the field would not store, once the field is left: it stays blank and marked while
+  // the sketch keeps the value it had (`over`); a change of that value from elsewhere ends it
+  const [left, setLeft] = useState<{ over: Numeric | undefined; message: string } | null>(null);
+  if (left && left.over !== value) setLeft(null);
+  // what was typed for the stored number ("1e30", "2.50"): shown as typed while it is that number
+  const [typedText, setTypedText] = useState<{ text: string; value: number } | null>(null);
+  // that a plain number was typed here with US units on screen (said on after the field is left)
   const [typedPlain, setTypedPlain] = useState(false);
   const sessionRef = useRef(0);
+  // the value when the field was entered: a refused blank puts it back, so nothing typed on the way is kept
+  const startRef = useRef<{ value: Numeric | undefined } | null>(null);
+  const escapedRef = useRef(false);
   const units = useEditor((s) => s.units);
   const evaluated = useAnalysis((s) => s.fieldValues.values.get(valueKey));
   const evalError = useAnalysis((s) => s.fieldValues.errors.get(valueKey));
-  const text = draft ?? numericText(value);
-  const error = localError ?? (text.trim() ? evalError : undefined);
+  const refusedBlank = draft === null && left !== null && left.over === value ? left : null;
+  const shown = typedText && typedText.value === value ? typedText.text : storedText(value);
+  const text = draft ?? (refusedBlank ? "" : shown);
+  const problem = localError ?? refusedBlank?.message ?? null;
+  const error = problem ?? (text.trim() ? evalError : needed);
   const describedBy = `${id}-value`;
   // a plain number is SI (degrees for angles) and is its own value: the worker's answer leaves it out
   const typed = toNumeric(text);
 
+  useEffect(() => {
+    if (!onProblem) return;
+    onProblem(problem);
+    return () => onProblem(null);
+  }, [onProblem, problem]);
+
+  /** "Magnitude is needed. The sketch keeps 10 kN until you give one." */
+  const keeps = (why: string, kept: Numeric | undefined) =>
+    kept === undefined ? why : `${why} The sketch keeps ${typeof kept === "number" ? formatDisplay(kept, display, units) : kept} until you give one.`;
+
   const change = (t: string) => {
     setDraft(t);
     const v = toNumeric(t);
-    if (v === undefined && !optional) {
-      setLocalError("is required: give a number or an expression");
+    const coalesce = `${valueKey}#${sessionRef.current}`;
+    if (v === undefined) {
+      const refused = optional ? onCommit(undefined, coalesce) : `${label} is needed.`;
+      if (refused) {
+        // the value from before this edit stays in the sketch, not what was on the way to blank
+        const before = startRef.current ? startRef.current.value : value;
+        if (before !== undefined && before !== value) onCommit(before, coalesce);
+        setLocalError(keeps(refused, before));
+        return;
+      }
+      setLocalError(null);
       return;
     }
     setTypedPlain(typeof v === "number");
-    setLocalError(onCommit(v, `${valueKey}#${sessionRef.current}`));
+    const refused = onCommit(v, coalesce);
+    setLocalError(refused);
+    if (!refused && typeof v === "number") setTypedText({ text: t.trim(), value: v });
   };
 
   // US units on screen, a plain number typed: it is SI (the file format's rule), which a US user may
@@ -73,8 +120,7 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   const plainSI = usUnit && !error && (draft !== null || typedPlain) ? `A plain number is SI: ${formatDisplay(typed as number, display, "SI")} (= ${formatDisplay(typed as number, display, "US")}). Meant ${usUnit}? Type “${text.trim()} ${typedUnit(usUnit)}”.` : null;
 
   let line: string;
-  if (kept && draft === null) line = kept;
-  else if (error) line = error;
+  if (error) line = error;
   else if (plainSI) line = plainSI;
   else if (!text.trim()) line = hint ?? (optional ? "not given" : "");
   else if (evaluated !== undefined) line = `= ${formatDisplay(evaluated, display, units)}`;
@@ -100,23 +146,30 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
           data-testid={testId}
           onFocus={() => {
             sessionRef.current = ++session;
-            setDraft(numericText(value));
-            setKept(null);
+            startRef.current = { value };
+            setDraft(text);
+            // a blank still refused stays marked while it is being typed in
+            setLocalError(refusedBlank?.message ?? null);
+            setLeft(null);
           }}
           onBlur={() => {
-            // a required field left blank keeps its value, and says so rather than put it back unseen
-            setKept(draft !== null && !draft.trim() && !optional ? `is required: kept ${numericText(value)}` : null);
+            // a refused blank stays blank and marked at the field; Escape puts the kept value back
+            const blank = draft !== null && !draft.trim();
+            setLeft(blank && localError && !escapedRef.current ? { over: value, message: localError } : null);
+            escapedRef.current = false;
+            startRef.current = null;
             setDraft(null);
             setLocalError(null);
           }}
           onChange={(e) => change(e.target.value)}
           onKeyDown={(e) => {
+            if (e.key === "Escape") escapedRef.current = true;
             if (e.key === "Enter" || e.key === "Escape") (e.target as HTMLInputElement).blur();
           }}
         />
       </div>
-      <p id={describedBy} className={`mt-0.5 min-h-[15px] text-[11px] leading-snug ${error || plainSI || (kept && draft === null) ? "text-caution" : "num text-ink-faint"}`} aria-live="polite" data-caution={plainSI ? "plain-si" : undefined}>
-        {error || plainSI || (kept && draft === null) ? `⚠ ${line}` : line}
+      <p id={describedBy} className={`mt-0.5 min-h-[15px] text-[11px] leading-snug ${error || plainSI ? "text-caution" : "num text-ink-faint"}`} aria-live="polite" data-caution={plainSI ? "plain-si" : undefined}>
+        {error || plainSI ? `⚠ ${line}` : line}
       </p>
     </div>
   );

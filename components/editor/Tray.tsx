@@ -36,6 +36,26 @@ function useToolKey() {
 
 const activates = (e: KeyboardEvent) => (e.key === "Enter" || e.key === " ") && !e.altKey && !e.ctrlKey && !e.metaKey;
 
+/** Below this width the tray is a drawer over the drawing, opened from the toolbar's Add button. */
+const OVER_DRAWING = "(max-width: 639px)";
+
+/**
+ * After a pick on a phone-width screen the drawer gets out of the way of the drawing, where the
+ * next tap places the element (or shows the one just added). It is closed by its own toolbar
+ * button, which holds whether it is open; that is read once the pick's updates are on screen, so
+ * a drawer a change of tool already closed is not opened again. Wider screens keep the tray
+ * beside the drawing, untouched. After a key the focus goes to that button, as Escape leaves it.
+ */
+function closeOverDrawing(byKey: boolean) {
+  if (typeof window.matchMedia !== "function" || !window.matchMedia(OVER_DRAWING).matches) return;
+  window.setTimeout(() => {
+    const toggle = document.querySelector<HTMLElement>('[data-testid="toggle-tray"]');
+    if (!toggle) return;
+    if (toggle.getAttribute("aria-expanded") === "true") toggle.click();
+    if (byKey) toggle.focus();
+  }, 0);
+}
+
 export function Tray() {
   const run = useActionRunner();
   const getCtx = useActionContext();
@@ -47,7 +67,10 @@ export function Tray() {
     e.preventDefault();
     if (e.repeat) return;
     if (disabled) needsBody();
-    else a.placeNow?.(getCtx());
+    else {
+      a.placeNow?.(getCtx());
+      closeOverDrawing(true);
+    }
   };
   const tool = useToolKey();
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
@@ -85,7 +108,11 @@ export function Tray() {
                   onKeyUp={(e) => {
                     if (e.key === " ") e.preventDefault();
                   }}
-                  onClick={() => (disabled ? needsBody() : run(a.id))}
+                  onClick={() => {
+                    if (disabled) return needsBody();
+                    run(a.id);
+                    closeOverDrawing(false);
+                  }}
                   className={`group flex h-[58px] flex-col items-center justify-center gap-0.5 rounded border text-center text-[10.5px] leading-tight transition-colors ${
                     active ? "border-accent bg-accent-soft text-accent-deep" : "border-transparent text-ink-soft hover:border-rule hover:bg-paper"
                   } ${disabled ? "cursor-not-allowed opacity-40" : "cursor-grab"}`}

@@ -136,3 +136,55 @@ export function blankWords(kind: string, key: string): string | null {
   const v = BLANK_MEANS[`${kind}.${key}`] ?? (key === "group" && ["force", "couple", "distributed"].includes(kind) ? "loads" : undefined);
   return v ? `blank (${v})` : null;
 }
+
+/** A port's fields its mass flow, velocity and forces are resolved from, in the form's order. */
+export const PORT_FLOW_KEYS = ["massFlow", "velocity", "pressure", "area", "density", "volumeFlow", "beta"] as const;
+
+/** A field's words inside a sentence: "area", "mass flow ṁ", "density ρ". */
+export function fieldWords(kind: string, key: string): string {
+  const label = fieldLabel(kind, key);
+  return label.charAt(0).toLowerCase() + label.slice(1);
+}
+
+/** What a port needs and has not been given, as the solver checks it (`solver/validate.ts`). */
+export type PortLack = "massFlow" | "velocity" | "area";
+
+const given = (v: unknown) => v !== undefined && v !== null && v !== "";
+
+/**
+ * What a port (as the file holds it) lacks before it can be solved: a way to its mass flow (ṁ,
+ * ρ·Q or ρ·A·V), then a way to its velocity (V, ṁ/(ρ·A) or Q/A; a zero mass flow needs none),
+ * then the area its gauge pressure acts on. Null when it has all three.
+ */
+export function portLacks(port: Readonly<Record<string, unknown>>): PortLack | null {
+  const has = (k: string) => given(port[k]);
+  const massFlow = has("massFlow") || (has("density") && has("volumeFlow")) || (has("density") && has("area") && has("velocity"));
+  if (!massFlow) return "massFlow";
+  const velocity = has("velocity") || (has("density") && has("area")) || (has("volumeFlow") && has("area")) || port.massFlow === 0;
+  if (!velocity) return "velocity";
+  const pressure = port.pressure;
+  if (has("pressure") && pressure !== 0 && String(pressure).trim() !== "0" && !has("area")) return "area";
+  return null;
+}
+
+/** The other ways to what a port lacks, besides its own field (ṁ, V), for the words that say so. */
+export const PORT_OTHER_WAYS: Record<Exclude<PortLack, "area">, string> = {
+  massFlow: "ρ with the volume flow, or ρ with the area and V",
+  velocity: "the area with ρ or with the volume flow",
+};
+
+/**
+ * Why a port's field may not be left blank, or null when it may: a blank that leaves the port
+ * without a mass flow, a velocity or the area its pressure needs (which it had) is refused, so
+ * the value in the sketch is not lost to a port that cannot be solved.
+ */
+export function portBlankRefusal(kind: string, port: Readonly<Record<string, unknown>>, key: string): string | null {
+  if (portLacks(port) !== null) return null;
+  const without = { ...port };
+  delete without[key];
+  const lack = portLacks(without);
+  if (!lack) return null;
+  const label = fieldLabel(kind, key);
+  if (lack === "area") return `${label} is needed: the gauge pressure acts on it.`;
+  return `${label} is needed: nothing else gives the port its ${lack === "massFlow" ? "mass flow" : "velocity"}.`;
+}

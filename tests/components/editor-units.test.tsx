@@ -62,18 +62,19 @@ describe("numeric fields with the worker's answer", () => {
     expect(magnitude).toHaveAccessibleDescription("⚠ A plain number is SI: 4.448 kN (= 1000 lbf). Meant lbf? Type “4448.22 lbf”.");
   });
 
-  it("a required value left blank keeps the old one and says so", async () => {
+  it("a required value left blank is marked at the field, and the sketch keeps the old one", async () => {
     const user = userEvent.setup();
     mountForm();
     const magnitude = within(screen.getByTestId("element-form")).getByLabelText("Magnitude");
     const before = magnitude.getAttribute("value");
     await user.clear(magnitude);
     await user.tab();
-    expect(magnitude.getAttribute("value")).toBe(before);
-    expect(magnitude).toHaveAccessibleDescription(`⚠ is required: kept ${before}`);
-    // typing in it again takes the note away
-    await user.click(magnitude);
-    expect(magnitude).not.toHaveAccessibleDescription(/kept/);
+    expect(magnitude).toHaveValue("");
+    expect(magnitude).toHaveAttribute("aria-invalid", "true");
+    expect(magnitude).toHaveAccessibleDescription(`⚠ Magnitude is needed. The sketch keeps ${before} until you give one.`);
+    // a value typed in takes the note away
+    await user.type(magnitude, "12{Enter}");
+    expect(magnitude).not.toHaveAccessibleDescription(/keeps/);
   });
 });
 

@@ -55,8 +55,12 @@ describe("editor", () => {
     await user.click(outlineRow(/Contact s2/));
     const angle = screen.getByLabelText("Pushes toward");
     await user.clear(angle);
-    expect(screen.getByText(/is required/)).toBeInTheDocument();
     await user.tab();
+    // the field stays blank and says so; the sketch keeps its direction
+    expect(screen.getByLabelText("Pushes toward")).toHaveValue("");
+    expect(screen.getByText(/Pushes toward is needed\. The sketch keeps 90° until you give one\./)).toBeInTheDocument();
+    await user.click(outlineRow(/Point force l1/));
+    await user.click(outlineRow(/Contact s2/));
     expect(screen.getByLabelText("Pushes toward")).toHaveValue("90");
   });
 
