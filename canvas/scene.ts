@@ -92,6 +92,8 @@ export interface ScenePort extends Base {
   beta: number;
   pressure: number;
   area?: number;
+  /** false when nothing gives the mass flow (no ṁ, nor ρ with Q, nor ρ with A and V): `massFlow` is then 0 by default, not a value */
+  massFlowGiven?: boolean;
 }
 export interface SceneSource extends Base {
   kind: "massSource";
@@ -200,7 +202,9 @@ export function sceneItem(kind: ElementKind, el: AnyElement, fv: FieldValues, bo
         beta: opt("beta"),
       };
       const flow = portFlow(numeric, null);
-      return { ...base, kind, at: numeric.at, angle: numeric.angle, massFlow: flow.massFlow, velocity: flow.velocity, beta: numeric.beta ?? 1, pressure: numeric.pressure ?? 0, area: numeric.area };
+      const { massFlow, density, volumeFlow, area, velocity } = numeric;
+      const massFlowGiven = massFlow !== undefined || (density !== undefined && (volumeFlow !== undefined || (area !== undefined && velocity !== undefined)));
+      return { ...base, kind, at: numeric.at, angle: numeric.angle, massFlow: flow.massFlow, velocity: flow.velocity, beta: numeric.beta ?? 1, pressure: numeric.pressure ?? 0, area: numeric.area, massFlowGiven };
     }
     case "massSource":
       return { ...base, kind, at: e.at ? point(r, e.at, "at") : fallback, massFlow: r(e.massFlow, "massFlow") };

@@ -134,13 +134,28 @@ function portPrims(item: Extract<SceneItem, { kind: "inlet" | "outlet" }>, o: Sy
   const from = outlet ? mul(d, -10) : mul(d, -48);
   const to = outlet ? mul(d, 48) : mul(d, 10);
   const out: Prim[] = [line(mul(n, -11), mul(n, 11), { stroke: c, width: 3 }), ...hollowArrow(from, to, c, 1.5)];
-  const lines = [`ṁ ${q(item.massFlow, "massFlow", o.units)} · V ${q(item.velocity, "velocity", o.units)}`];
-  if (item.pressure) lines.push(`p ${q(item.pressure, "pressure", o.units)}`);
+  const lines = portFlowLines(item, o.units);
   const tipOut = outlet ? mul(d, 56) : mul(d, -56);
   const away = outlet ? d : mul(d, -1);
   if (o.showName !== false) out.push(...labelAt(tipOut, away, [item.label || item.id, ...lines], c, 11).map((p, i) => (i === 0 && p.t === "text" ? { ...p, italic: true, color: INK_FAINT, size: 10 } : p)));
   else out.push(...labelAt(tipOut, away, lines, c, 11));
   return out;
+}
+
+/**
+ * A port's values as its label gives them: "ṁ 10 kg/s · V 5 m/s", then "p 350 psi". A mass flow
+ * nothing gives (no ṁ, nor ρ with Q, nor ρ with A and V: `massFlowGiven` false) is left out, not
+ * drawn as "ṁ 0"; a speed is shown when given, or always beside a given flow. A closed end under
+ * pressure (ṁ 0 and V 0 given, p given) keeps its zero flow, which is the point of it.
+ */
+export function portFlowLines(item: Pick<Extract<SceneItem, { kind: "inlet" | "outlet" }>, "massFlow" | "velocity" | "pressure" | "massFlowGiven">, units: UnitSystem): string[] {
+  // scenes made without the flag: a zero ṁ beside a speed, or with neither speed nor pressure, is one not given
+  const noFlow = item.massFlowGiven === undefined ? item.massFlow === 0 && (item.velocity !== 0 || !item.pressure) : !item.massFlowGiven;
+  const parts = noFlow ? [] : [`ṁ ${q(item.massFlow, "massFlow", units)}`];
+  if (!(noFlow && item.velocity === 0)) parts.push(`V ${q(item.velocity, "velocity", units)}`);
+  const lines = parts.length ? [parts.join(" · ")] : [];
+  if (item.pressure) lines.push(`p ${q(item.pressure, "pressure", units)}`);
+  return lines;
 }
 
 function loadPrims(item: Extract<SceneItem, { kind: "force" | "couple" | "distributed" }>, o: SymbolOptions): Prim[] {
