@@ -5,6 +5,7 @@ import type { UnitSystem } from "@/solver/units";
 import type { SceneItem } from "../scene";
 import { ACCENT } from "./palette";
 import { textExtent, type Prim } from "./prims";
+import type { Box } from "./labels";
 import { itemPrims } from "./symbols";
 
 export const ROTATE_HANDLE_PX = 66;
@@ -36,4 +37,25 @@ export function handlePlace(item: SceneItem, along: Vec2, scale: number, units: 
   const corners: Vec2[] = [[9, -15], [9, 5], [-41, -15], [-41, 5]];
   const readout = corners.find(([dx, dy]) => clear(h[0] + dx, h[1] + dy, h[0] + dx + 32, h[1] + dy + 12)) ?? corners[0];
   return { distance, readout };
+}
+
+/**
+ * What a turn handle covers on screen, in content pixels, for the labels to keep off: its ring,
+ * its angle readout, and its dashed line from the element's anchor (`anchor`, content px) out
+ * along `along` (a unit direction on screen), as small squares along it (a box round a slanted
+ * line would shut out far more than the line). `place` is `handlePlace`'s answer.
+ */
+export function handleBoxes(anchor: Vec2, along: Vec2, place: { distance: number; readout: Vec2 }): Box[] {
+  const t = place.distance;
+  const h: Vec2 = [anchor[0] + along[0] * t, anchor[1] + along[1] * t];
+  const boxes: Box[] = [
+    { x0: h[0] - 9, y0: h[1] - 9, x1: h[0] + 9, y1: h[1] + 9 },
+    { x0: h[0] + place.readout[0], y0: h[1] + place.readout[1], x1: h[0] + place.readout[0] + 32, y1: h[1] + place.readout[1] + 12 },
+  ];
+  // the line starts under the element's own symbol (its arrow, its face): squares from 12 px out
+  for (let s = 12; s < t - 6; s += 5) {
+    const p: Vec2 = [anchor[0] + along[0] * s, anchor[1] + along[1] * s];
+    boxes.push({ x0: p[0] - 2.5, y0: p[1] - 2.5, x1: p[0] + 2.5, y1: p[1] + 2.5 });
+  }
+  return boxes;
 }

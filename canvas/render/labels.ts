@@ -5,7 +5,12 @@
 // cheapest: a place on a label already placed costs more than any other, a stroke of another
 // symbol under the words a little, and distance from its own place a little. Ties go to the earlier
 // place, so the layout is the same every time. A label moved clear of its own place gets a thin
-// leader line from the nearest point of what it labels. Text widths are estimated (`textExtent`): this runs on the server too.
+// leader line from the nearest point of what it labels. A label that belongs to a point (a
+// support's reaction and name, a port's values) also tries the places beside that point, and a
+// place nearer another point of the same family (another support) than its own costs more than
+// any stroke under it: "3.8 kN" read beside the wrong support is worse than a line through it.
+// When every place tried lands on another label, rings further out are tried before giving in.
+// Text widths are estimated (`textExtent`): this runs on the server too.
 import { textExtent, type Prim, type Pt } from "./prims";
 
 export type Box = { x0: number; y0: number; x1: number; y1: number };
@@ -14,13 +19,49 @@ type Segment = readonly [Pt, Pt];
 
 const PAD = 1.5;
 /** What one stroke under a label costs, in pixels of moving away from its own place: words with a line through them read worse than words a couple of lines further off. */
-const STROKE_COST = 40;
+const STROKE_COST = 50;
 /** Over any label already placed: more than any place that is not. */
 const ON_LABEL_COST = 1e6;
 /** A label moved at least this far clear of its own place gets a leader line. */
 const LEADER_GAP = 4;
 /** …or moved even a little, and now this far from the nearest point of what it labels. */
 const LEADER_FAR = 16;
+/** A place nearer another point of the label's family than its own: more than several strokes, less than a label. */
+const ASTRAY_COST = 400;
+/** The gaps (px) between a label and the point it belongs to, for the places tried beside that point. */
+const ANCHOR_GAPS = [12, 24, 40];
+
+/**
+ * What a label belongs to: its element's point (content px) and the family of elements it could be
+ * taken for (supports among supports, ports among ports). A label is kept nearer its own point than
+ * any other point of its family.
+ */
+export interface LabelAnchor {
+  at: Pt;
+  family: string;
+}
+
+/** The family an element kind's labels are told apart within; none for bodies and distributed loads (no one point). */
+export function anchorFamily(kind: string | undefined): string | null {
+  switch (kind) {
+    case "pin":
+    case "roller":
+    case "contact":
+    case "fixed":
+    case "tie":
+      return "support";
+    case "inlet":
+    case "outlet":
+      return "port";
+    case "force":
+    case "couple":
+      return "load";
+    case "massSource":
+      return "source";
+    default:
+      return null;
+  }
+}
 
 export function textBox(p: TextPrim): Box {
   const b = textExtent(p);
@@ -58,15 +99,37 @@ function blockBox(prims: readonly Prim[], idx: readonly number[]): Box {
   return idx.map((i) => textBox(prims[i] as TextPrim)).reduce(union);
 }
 
-/** The places a label tries, as offsets from its own: its own first, then rings around it. */
-function offsets(b: Box): Pt[] {
+/** The places a label tries, as offsets from its own: its own first, then rings around it (rings
+ *  `from` to `to`), then, for a label of a point, the places beside that point. */
+function offsets(b: Box, anchor?: Pt, from = 1, to = 3): Pt[] {
   const sy = b.y1 - b.y0;
   const sx = (b.x1 - b.x0) / 2 + 4;
-  const out: Pt[] = [[0, 0]];
-  for (let k = 1; k <= 3; k++) {
+  const out: Pt[] = from === 1 ? [[0, 0]] : [];
+  for (let k = from; k <= to; k++) {
     const x = k * sx;
     const y = k * sy;
     out.push([0, y], [0, -y], [x, 0], [-x, 0], [x, y], [-x, y], [x, -y], [-x, -y]);
+  }
+  if (anchor && from === 1) {
+    const hw = (b.x1 - b.x0) / 2;
+    const hh = sy / 2;
+    const cx = (b.x0 + b.x1) / 2;
+    const cy = (b.y0 + b.y1) / 2;
+    for (const g of ANCHOR_GAPS) {
+      const d = g * Math.SQRT1_2;
+      // right, left, above, below, then the corners
+      const centres: Pt[] = [
+        [anchor[0] + g + hw, anchor[1]],
+        [anchor[0] - g - hw, anchor[1]],
+        [anchor[0], anchor[1] - g - hh],
+        [anchor[0], anchor[1] + g + hh],
+        [anchor[0] + d + hw, anchor[1] - d - hh],
+        [anchor[0] - d - hw, anchor[1] - d - hh],
+        [anchor[0] + d + hw, anchor[1] + d + hh],
+        [anchor[0] - d - hw, anchor[1] + d + hh],
+      ];
+      for (const c of centres) out.push([c[0] - cx, c[1] - cy]);
+    }
   }
   return out;
 }
@@ -177,7 +240,29 @@ class Strokes {
   }
 }
 
-type Own = { strokes: Strokes; lo: number; hi: number };
+/**
+ * What a label keeps to: the strokes index and its own owners' range (`lo` to `hi`); for a label of
+ * a point, that point and the other points of its family it must not sit nearer to.
+ */
+type Own = { strokes: Strokes; lo: number; hi: number; anchor?: Pt; rivals?: readonly Pt[] };
+
+/** How much nearer the box's centre is to another point of the family than to its own (0: nearest its own). */
+export function astray(b: Box, anchor: Pt, rivals: readonly Pt[]): number {
+  const cx = (b.x0 + b.x1) / 2;
+  const cy = (b.y0 + b.y1) / 2;
+  const mine = Math.hypot(cx - anchor[0], cy - anchor[1]);
+  let worst = 0;
+  for (const r of rivals) worst = Math.max(worst, mine - Math.hypot(cx - r[0], cy - r[1]));
+  return worst;
+}
+
+/** The other points of a family, leaving out any on `own` itself (two supports drawn at one point cannot be told apart by place). */
+function rivalsOf(own: LabelAnchor | undefined, all: readonly LabelAnchor[]): Pt[] | undefined {
+  if (!own) return undefined;
+  const out: Pt[] = [];
+  for (const a of all) if (a.family === own.family && Math.hypot(a.at[0] - own.at[0], a.at[1] - own.at[1]) > 1 && !out.some((p) => p[0] === a.at[0] && p[1] === a.at[1])) out.push(a.at);
+  return out;
+}
 
 /** The part of a box outside the frame, in px² (0 inside it). */
 const outside = (b: Box, frame: Box) => (b.x1 - b.x0) * (b.y1 - b.y0) - overlapArea(b, frame);
@@ -195,33 +280,44 @@ function cost(b: Box, placed: readonly Box[], own: Own, moved: boolean, frame?: 
     const a = overlapArea(b, q);
     if (a > 0) c += ON_LABEL_COST + a;
   }
+  if (own.anchor && own.rivals?.length) {
+    const off = astray(b, own.anchor, own.rivals);
+    if (off > 0.5) c += ASTRAY_COST + off;
+  }
   return c + STROKE_COST * (moved ? own.strokes.count(b) : own.strokes.count(b, own.lo, own.hi));
 }
 
 /**
  * The cheapest offset for a label whose own place is `box`; the earliest wins a tie. A label that
  * reaches past the edge of the drawing area (`frame`) but is partly inside it also tries the
- * places just inside the edge (one wholly off the area stays with what it labels).
+ * places just inside the edge; one inside it does not move out past the edge (under the legend)
+ * to make way; one wholly off the area stays with what it labels.
  */
 function bestOffset(box: Box, placed: readonly Box[], own: Own, frame?: Box): Pt {
   let best: Pt = [0, 0];
   let bestCost = Infinity;
-  const edge = frame && boxesOverlap(box, frame) && outside(box, frame) > 0.5 ? frame : undefined;
-  const tries = offsets(box);
+  const within = frame && boxesOverlap(box, frame) ? frame : undefined;
+  const edge = within && outside(box, within) > 0.5 ? within : undefined;
+  const tries = offsets(box, own.anchor);
   if (edge) {
     const dx = box.x0 < edge.x0 ? edge.x0 - box.x0 : box.x1 > edge.x1 ? Math.max(edge.x1 - box.x1, edge.x0 - box.x0) : 0;
     const dy = box.y0 < edge.y0 ? edge.y0 - box.y0 : box.y1 > edge.y1 ? Math.max(edge.y1 - box.y1, edge.y0 - box.y0) : 0;
     const sy = box.y1 - box.y0;
     for (let k = 0; k <= 3; k++) tries.push([dx, dy + k * sy], [dx, dy - k * sy]);
   }
-  for (const o of tries) {
-    const c = cost(moveBox(box, o[0], o[1]), placed, own, o[0] !== 0 || o[1] !== 0, edge) + Math.hypot(o[0], o[1]);
-    if (c < bestCost) {
-      best = o;
-      bestCost = c;
-      if (c === 0) break;
+  const look = (list: readonly Pt[]) => {
+    for (const o of list) {
+      const c = cost(moveBox(box, o[0], o[1]), placed, own, o[0] !== 0 || o[1] !== 0, within) + Math.hypot(o[0], o[1]);
+      if (c < bestCost) {
+        best = o;
+        bestCost = c;
+        if (c === 0) break;
+      }
     }
-  }
+  };
+  look(tries);
+  // every place tried is on another label (or cut by the edge): further out, rather than on it
+  if (bestCost >= ON_LABEL_COST) look(offsets(box, undefined, 4, 8));
   return best;
 }
 
@@ -268,9 +364,18 @@ function moveTexts(prims: Prim[], idx: readonly number[], dx: number, dy: number
  * The result's drawing with its labels placed, in the order drawn (reactions first), off each
  * other and off the strokes of its own other arrows and of `under` (what the elements draw, with
  * any texts that stay where they are). Each label keeps off every stroke but those drawn just
- * before it: its own arrow; and inside the drawing area when given one (`frame`).
+ * before it: its own arrow; and inside the drawing area when given one (`frame`). `anchors`: the
+ * point a label belongs to, by the index of its first text (a reaction's values: its support),
+ * kept nearer it than any of `rivals` (every support, with a label or not; the anchors by default).
  */
-export function placeResultLabels(prims: readonly Prim[], under: readonly Prim[] = [], frame?: Box): Prim[] {
+export function placeResultLabels(
+  prims: readonly Prim[],
+  under: readonly Prim[] = [],
+  frame?: Box,
+  points: { anchors?: ReadonlyMap<number, LabelAnchor>; rivals?: readonly LabelAnchor[] } = {},
+): Prim[] {
+  const anchors = points.anchors ?? new Map<number, LabelAnchor>();
+  const all = points.rivals ?? [...anchors.values()];
   const out = prims.slice();
   const leaders: Prim[] = [];
   const placed: Box[] = [];
@@ -284,7 +389,8 @@ export function placeResultLabels(prims: readonly Prim[], under: readonly Prim[]
     const ownFrom0 = ownFrom;
     ownFrom = idx[idx.length - 1] + 1;
     const box = blockBox(prims, idx);
-    const [dx, dy] = bestOffset(box, placed, { strokes, lo: ownFrom0, hi: idx[0] }, frame);
+    const anchor = anchors.get(idx[0]);
+    const [dx, dy] = bestOffset(box, placed, { strokes, lo: ownFrom0, hi: idx[0], anchor: anchor?.at, rivals: rivalsOf(anchor, all) }, frame);
     const to = moveBox(box, dx, dy);
     placed.push(to);
     if (dx || dy) {
@@ -308,11 +414,28 @@ export const NO_SHIFTS: LabelShifts = new Map();
  * bodies too narrow to hold them, every element's values and states in drawing order, then every
  * element's name. Each keeps off the labels placed before it and off the strokes of the other
  * elements and of the result's arrows, and, given the drawing area (`frame`, in the same content
- * pixels), inside it: a label cut by its edge moves in, with a leader. `prev` keeps the identity of unchanged entries (and of the
- * whole map when nothing changed), so a canvas node is drawn again only when its own labels move.
+ * pixels), inside it: a label cut by its edge moves in, with a leader. An element with an
+ * `anchor` (its point, content px) keeps its labels nearer it than the point of any other element
+ * of its family (a support's name beside that support, not the next one). `keepOut`: boxes no
+ * label may cover (the turn handle of the element selected on the canvas). `prev` keeps the
+ * identity of unchanged entries (and of the whole map when nothing changed), so a canvas node is
+ * drawn again only when its own labels move.
  */
-export function placeElementLabels(groups: ReadonlyArray<{ id: string; kind?: string; prims: readonly Prim[] }>, taken: readonly Prim[] = [], prev: LabelShifts = NO_SHIFTS, frame?: Box): LabelShifts {
-  const placed: Box[] = [];
+export function placeElementLabels(
+  groups: ReadonlyArray<{ id: string; kind?: string; prims: readonly Prim[]; anchor?: Pt }>,
+  taken: readonly Prim[] = [],
+  prev: LabelShifts = NO_SHIFTS,
+  frame?: Box,
+  keepOut: readonly Box[] = [],
+): LabelShifts {
+  const placed: Box[] = [...keepOut];
+  const anchorOf = (g: { kind?: string; anchor?: Pt }): LabelAnchor | undefined => {
+    const family = anchorFamily(g.kind);
+    return family && g.anchor && Number.isFinite(g.anchor[0]) && Number.isFinite(g.anchor[1]) ? { at: g.anchor, family } : undefined;
+  };
+  const anchors = groups.map(anchorOf);
+  const all = anchors.filter((a): a is LabelAnchor => a !== undefined);
+  const rivals = anchors.map((a) => rivalsOf(a, all));
   for (const p of taken) if (p.t === "text") placed.push(textBox(p));
   // a body's name inside it stays in the corner chosen for it (moved, it would cross the outline);
   // one beside a body too narrow to hold it (drawn with a halo) makes way like the other labels, first
@@ -334,7 +457,7 @@ export function placeElementLabels(groups: ReadonlyArray<{ id: string; kind?: st
   const moves = groups.map((): Array<[number, number, number]> => []);
   for (const { g, idx } of [...bodies, ...values, ...names]) {
     const box = blockBox(groups[g].prims, idx);
-    const [dx, dy] = bestOffset(box, placed, { strokes, lo: g, hi: g + 1 }, frame);
+    const [dx, dy] = bestOffset(box, placed, { strokes, lo: g, hi: g + 1, anchor: anchors[g]?.at, rivals: rivals[g] }, frame);
     placed.push(moveBox(box, dx, dy));
     if (dx || dy) for (const i of idx) moves[g].push([i, dx, dy]);
   }

@@ -9,7 +9,7 @@ import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp
 import { anchorWorld, groundSideOf, labelAt, type DrawState } from "./symbols";
 import { nearestOnSegment } from "../geometry/polygon";
 import { CAUTION, INK, INK_SOFT, REACTION } from "./palette";
-import { placeResultLabels, type Box } from "./labels";
+import { placeResultLabels, type Box, type LabelAnchor } from "./labels";
 
 export interface ResultOptions {
   units: UnitSystem;
@@ -82,6 +82,10 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
   const s = o.scale;
   const prims: Prim[] = [];
   const states = o.states ?? supportStates(result);
+  // the point each reaction's label belongs to (by the index of its first text), and every
+  // support's point: a label is kept nearer its own support than any other
+  const labelAnchors = new Map<number, LabelAnchor>();
+  const supports: LabelAnchor[] = [];
   const bodyOf = (id: string) => scene.byId.get(id) as SceneBody | undefined;
 
   // what the weight's arrow keeps clear of: the reactions' arrows and every element's anchor
@@ -99,17 +103,22 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     if (!r || !body) continue;
     const at = px((item as Extract<SceneItem, { at: Vec2 }>).at, s);
     if (!finite(at)) continue;
+    const own: LabelAnchor = { at, family: "support" };
+    supports.push(own);
     const impossible = (r.state === "lifted" || r.state === "slack") && (body.status === "tips" || body.status === "unrestrained");
     // the pull (or push) a contact or tie would need is drawn as its normal force alone: the
     // friction a lifted contact would also need is not what "would have to pull" measures
     const angle = (item as { angle?: number }).angle;
     const [fx, fy] = impossible && r.n !== undefined && angle !== undefined && Number.isFinite(angle) ? [r.n * Math.cos((angle * Math.PI) / 180), r.n * Math.sin((angle * Math.PI) / 180)] : [r.fx, r.fy];
     const R = Math.hypot(fx, fy);
-    // the moment's label goes to the corner of its arrow away from the force's arrow
-    let corner: Pt = [1, 1];
+    // the moment's label goes to a corner of its arrow away from the force's arrow, on the ground's
+    // side when it can (inside the body it would sit on the outline, the weight and other labels)
+    const g = dir(groundSideOf(item, bodyOf(item.body)));
+    const corners: Pt[] = [[1, 1], [-1, 1], [1, -1], [-1, -1]];
+    const outward = corners.filter((c) => c[0] * g[0] + c[1] * g[1] > 0.1);
+    let corner: Pt = outward.length === 2 ? outward[0] : [1, 1];
     if (R > 1e-9 * Math.max(maxR, 1)) {
       const u = unit([fx, -fy]);
-      const g = dir(groundSideOf(item, bodyOf(item.body)));
       const L = 26 + 50 * (R / (maxR || R));
       const off = item.kind === "tie" ? 10 : 25;
       const color = impossible ? CAUTION : REACTION;
@@ -132,16 +141,19 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
       prims.push(...doubleArrow(from, to, color, 1.5, 11, dash));
       drawnArrows.push([from, to]);
       const mid = unit(sub(mul(add(from, to), 0.5), at));
-      const corners: Pt[] = [[1, 1], [-1, 1], [1, -1], [-1, -1]];
-      // the first corner (below right) unless the force's arrow leaves that way
-      if (mid[0] + mid[1] > 0.5) corner = corners.reduce((a, b) => (b[0] * mid[0] + b[1] * mid[1] < a[0] * mid[0] + a[1] * mid[1] - 1e-9 ? b : a));
+      // the first corner unless the force's arrow leaves that way: then the one furthest from it
+      // (of the two on the ground's side, when the ground has a side)
+      const choice = outward.length === 2 ? outward : corners;
+      if (corner[0] * mid[0] + corner[1] * mid[1] > 0.5) corner = choice.reduce((a, b) => (b[0] * mid[0] + b[1] * mid[1] < a[0] * mid[0] + a[1] * mid[1] - 1e-9 ? b : a));
       const words = impossible ? `would have to ${item.kind === "tie" ? "push" : "pull"} ${fq(Math.abs(r.n ?? R), "force", o.units)}` : fq(R, "force", o.units);
       const tail = push || item.kind === "tie" ? from : to;
       const away = push ? mul(u, -1) : u;
+      labelAnchors.set(prims.length, own);
       prims.push(...labelAt(add(tail, mul(away, 4)), away, [words], color, 11.5, { weight: 600 }));
     }
     if (Math.abs(r.m) > 1e-9 * Math.max(maxR, 1)) {
       prims.push(...curvedArrow(at, 24, r.m > 0, REACTION, 1.5, true));
+      labelAnchors.set(prims.length, own);
       prims.push(...labelAt(add(at, [20 * corner[0], 24 * corner[1]]), corner, [fq(Math.abs(r.m), "moment", o.units) + (r.m > 0 ? " ↺" : " ↻")], REACTION, 11.5, { weight: 600 }));
     }
   }
@@ -228,7 +240,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     }
   }
 
-  const out = placeResultLabels(prims, o.under, o.frame);
+  const out = placeResultLabels(prims, o.under, o.frame, { anchors: labelAnchors, rivals: supports });
   if (o.stale) for (const p of out) (p as { opacity?: number }).opacity = 0.38;
   return { prims: out, states };
 }

@@ -6,7 +6,7 @@ import type { UnitSystem } from "@/solver/units";
 import type { Scene } from "../scene";
 import { isFinitePoint } from "../geometry/polygon";
 import { placeElementLabels, shiftTexts, type Box, type LabelShifts } from "./labels";
-import { translate, type Prim } from "./prims";
+import { translate, type Prim, type Pt } from "./prims";
 import { resultPrims, supportStates } from "./results";
 import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, standInPoint, unplacedPrims, type DrawState } from "./symbols";
 
@@ -25,7 +25,8 @@ function cachedPrims(owner: object, deps: readonly unknown[], make: () => Prim[]
   return entry;
 }
 
-type Group = { id: string; kind: string; prims: Prim[] };
+/** An element's primitives; `anchor`: its point in content pixels, which its labels stay beside. */
+type Group = { id: string; kind: string; prims: Prim[]; anchor?: Pt };
 
 /** Every element's primitives in content pixels as its symbol draws them (names not yet moved). */
 export function elementGroups(scene: Scene, scale: number, units: UnitSystem, states: ReadonlyMap<string, DrawState> | null): Group[] {
@@ -52,7 +53,7 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
     const { prims } = cachedPrims(item, [scale, units, state, body], () =>
       translate(itemPrims(item, { units, scale, groundSide: groundSideOf(item, body), state }), [a[0] * scale, -a[1] * scale]),
     );
-    groups.push({ id: item.id, kind: item.kind, prims });
+    groups.push({ id: item.id, kind: item.kind, prims, anchor: [a[0] * scale, -a[1] * scale] });
   }
   return groups;
 }

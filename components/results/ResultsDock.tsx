@@ -1,7 +1,7 @@
 "use client";
 // "Results", under the drawing: the status in words, the reactions (force on the body or load on
 // the support), the hand check, and the cautions and assumptions beside them.
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState, type RefObject } from "react";
 import { radioKeys } from "@/components/shell/controls";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { elementNames } from "@/solver/cases";
@@ -25,20 +25,69 @@ export function ownHeight(windowHeight: number): number {
   return Math.max(292, Math.min(420, Math.round(windowHeight * 0.38)));
 }
 
-/** The most the dock may take of a window this tall: the drawing keeps room to be drawn in. */
-export function dockLimit(windowHeight: number): number {
-  return Math.max(MIN_HEIGHT, windowHeight - 260);
+/** Below this window width (Tailwind's `sm`) the drawing and the dock share one narrow column: a phone. */
+export const NARROW_WIDTH = 640;
+/** On a narrow screen, the least part of the window's height the drawing keeps, whatever tab is open. */
+export const DRAWING_SHARE = 0.45;
+/** On a phone, what the toolbar, the sketch's name and the hint line under the drawing take, while unmeasured. */
+const NARROW_CHROME = 190;
+/** The least a narrow screen's dock keeps: its tabs and a line or two, scrolled. */
+const NARROW_MIN = 120;
+
+/**
+ * The most the dock may take of a window this tall (and this wide): the drawing keeps room to be
+ * drawn in. On a narrow screen it keeps at least DRAWING_SHARE of the window: `room` is the height
+ * the drawing and the dock share (the window less the toolbar and the hint line), measured on the
+ * page; without it, the toolbar's usual height on a phone is taken.
+ */
+export function dockLimit(windowHeight: number, windowWidth = Infinity, room: number | null = null): number {
+  if (windowWidth >= NARROW_WIDTH) return Math.max(MIN_HEIGHT, windowHeight - 260);
+  const shared = room ?? windowHeight - NARROW_CHROME;
+  return Math.max(NARROW_MIN, Math.floor(shared - DRAWING_SHARE * windowHeight));
 }
 
-/** The window's height, followed as it changes (a saved height is held to the window it is shown in). */
-function useWindowHeight(): number {
-  const [h, setH] = useState(() => (typeof window === "undefined" ? 900 : window.innerHeight));
+/** The window's size, followed as it changes (a saved height is held to the window it is shown in). */
+function useWindowSize(): { width: number; height: number } {
+  const read = () => (typeof window === "undefined" ? { width: 1280, height: 900 } : { width: window.innerWidth, height: window.innerHeight });
+  const [size, setSize] = useState(read);
   useEffect(() => {
-    const on = () => setH(window.innerHeight);
+    const on = () => setSize((prev) => {
+      const next = read();
+      return next.width === prev.width && next.height === prev.height ? prev : next;
+    });
     window.addEventListener("resize", on);
     return () => window.removeEventListener("resize", on);
   }, []);
-  return h;
+  return size;
+}
+
+/**
+ * The height the drawing and the dock share: the drawing's box (the first box of the dock's
+ * column) and the dock's own, together; what else the column holds (the hint line) is left out.
+ * It stays the same as the dock grows or shrinks (the drawing gives or takes the difference), and
+ * changes with the window. Null until measured, or when the dock has no drawing above it.
+ */
+function useSharedRoom(dock: RefObject<HTMLElement | null>): number | null {
+  const [room, setRoom] = useState<number | null>(null);
+  useEffect(() => {
+    const el = dock.current;
+    const drawing = el?.parentElement?.firstElementChild;
+    if (!el || !drawing || drawing === el) return;
+    const measure = () => {
+      const h = Math.round(drawing.getBoundingClientRect().height + el.getBoundingClientRect().height);
+      setRoom(h > 0 ? h : null);
+    };
+    measure();
+    const ro = typeof ResizeObserver === "undefined" ? null : new ResizeObserver(measure);
+    ro?.observe(drawing);
+    ro?.observe(el);
+    window.addEventListener("resize", measure);
+    return () => {
+      ro?.disconnect();
+      window.removeEventListener("resize", measure);
+    };
+  }, [dock]);
+  return room;
 }
 
 function readHeight(): number | null {
@@ -51,8 +100,8 @@ function readHeight(): number | null {
  * The line between the drawing and the results: drag it (or focus it and press ↑/↓) to give one
  * or the other more room; a double click goes back to the tab's own height.
  */
-function Resizer({ height, onChange }: { height: number; onChange: (h: number | null) => void }) {
-  const clamp = (h: number) => Math.round(Math.max(MIN_HEIGHT, Math.min(h, dockLimit(window.innerHeight))));
+function Resizer({ height, limit, onChange }: { height: number; limit: number; onChange: (h: number | null) => void }) {
+  const clamp = (h: number) => Math.round(Math.max(Math.min(MIN_HEIGHT, limit), Math.min(h, limit)));
   return (
     <div
       role="separator"
@@ -94,9 +143,13 @@ export function ResultsDock() {
   const [chosen, setChosen] = useState<number | null>(readHeight);
   const study = tab === "cases" || tab === "sweep";
   // the studies need room: the dock grows while one of them is open, leaving the drawing half the window
-  const windowHeight = useWindowHeight();
-  // a height saved in a taller window (or another device's) is held to this one, never past the drawing's room
-  const height = Math.min(chosen ?? (study ? Math.min(560, Math.round(windowHeight * 0.5)) : ownHeight(windowHeight)), dockLimit(windowHeight));
+  const { width: windowWidth, height: windowHeight } = useWindowSize();
+  const ref = useRef<HTMLElement>(null);
+  const room = useSharedRoom(ref);
+  // a height saved in a taller window (or another device's) is held to this one, never past the
+  // drawing's room; on a phone the drawing keeps DRAWING_SHARE of the screen and the dock scrolls
+  const limit = dockLimit(windowHeight, windowWidth, room);
+  const height = Math.min(chosen ?? (study ? Math.min(560, Math.round(windowHeight * 0.5)) : ownHeight(windowHeight)), limit);
   const choose = (h: number | null) => {
     setChosen(h);
     try {
@@ -107,13 +160,17 @@ export function ResultsDock() {
     }
   };
   return (
-    <section aria-label="Results" className="relative flex shrink-0 border-t border-rule bg-paper" style={{ height }} data-testid="results-dock">
-      <Resizer height={height} onChange={choose} />
-      <div className="flex min-w-0 flex-1 flex-col px-3 pt-2">
+    <section ref={ref} aria-label="Results" className="relative flex shrink-0 border-t border-rule bg-paper" style={{ height }} data-testid="results-dock">
+      <Resizer height={height} limit={limit} onChange={choose} />
+      {/* on a narrow screen the whole column scrolls (the status and the cautions take much of a
+          phone's dock), the tabs held at its top; wider, only the open tab's panel scrolls */}
+      <div className="flex min-w-0 flex-1 flex-col px-3 pt-2 max-sm:overflow-y-auto max-sm:overscroll-contain max-sm:pt-0" data-testid="results-column">
+        {/* the column's top padding, inside the scrolling box: the tabs held at its top leave no gap above them */}
+        <div className="h-2 shrink-0 sm:hidden" aria-hidden="true" />
         <StatusBanner />
         <CautionsLine flows={flows} />
         {/* on a narrow screen the switch goes under the tabs, never breaking a label over lines */}
-        <div className="mt-2 flex flex-wrap items-center gap-x-1 border-b border-rule">
+        <div className="mt-2 flex flex-wrap items-center gap-x-1 border-b border-rule max-sm:sticky max-sm:top-0 max-sm:z-[1] max-sm:bg-paper">
           <div role="tablist" aria-label="Results views" className="flex">
             {(
               [
@@ -161,7 +218,7 @@ export function ResultsDock() {
             </div>
           )}
         </div>
-        <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} className="relative min-h-0 flex-1 overflow-auto py-2">
+        <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} className="relative min-h-0 flex-1 overflow-auto py-2 max-sm:flex-none max-sm:overflow-visible">
           {tab === "reactions" ? <ReactionsTable sense={sense} /> : tab === "hand" ? <HandCheckView /> : tab === "cases" ? <CasesPanel /> : <SweepPanel />}
         </div>
       </div>

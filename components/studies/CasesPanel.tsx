@@ -14,6 +14,7 @@ import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms, type Parsed } from "./casesText";
 import { CaseTables } from "./CaseTables";
+import { SideScroll } from "./ReportTable";
 
 /** Each field's refusal, by its label: reported up so the run waits until they are put right. */
 const FieldErrors = createContext<(label: string, error: string | null) => void>(() => {});
@@ -56,6 +57,8 @@ function TextCell<T>({ label, value, parse, onCommit, placeholder, width }: {
         className={INPUT}
         value={text}
         placeholder={placeholder}
+        // the whole text on hover, where a long one runs past the field's edge
+        title={text.length > 12 ? text : undefined}
         aria-label={label}
         aria-invalid={error ? true : undefined}
         onChange={(e) => setText(e.target.value)}
@@ -186,13 +189,23 @@ export function CasesPanel() {
               “dead”, loads in “loads”, ports in “flow” unless given a group) or the flow (× f: momentum flux × f²).
             </p>
           ) : (
-            <table className="mt-1 w-full text-[12px]" data-testid="cases-table">
+            // the columns share the panel's width down to a width each field still reads at; on a
+            // narrower panel (a phone) the table scrolls sideways inside it, every field reachable
+            <SideScroll>
+            <table className="mt-1 w-full min-w-[40rem] table-fixed text-[12px]" data-testid="cases-table">
+              <colgroup>
+                <col className="w-[32%]" />
+                <col className="w-[32%]" />
+                <col className="w-[25%]" />
+                <col className="w-16" />
+                <col className="w-6" />
+              </colgroup>
               <thead>
                 <tr className="text-left text-[11px] text-ink-faint">
                   <th className="font-medium">Name</th>
                   <th className="font-medium">Parameter changes</th>
                   <th className="font-medium">Group factors</th>
-                  <th className="w-16 font-medium">Flow ×</th>
+                  <th className="font-medium">Flow ×</th>
                   <th />
                 </tr>
               </thead>
@@ -227,6 +240,7 @@ export function CasesPanel() {
                 ))}
               </tbody>
             </table>
+            </SideScroll>
           )}
           {removedNote && (
             <p className="mt-1 text-[11.5px] text-ink-soft" role="status" data-testid="removed-note">
@@ -256,13 +270,15 @@ export function CasesPanel() {
           ) : (
             <ul className="mt-1 space-y-1">
               {combinations.map((k, i) => (
-                <li key={k.id} className="grid grid-cols-[10rem_1fr_auto] items-start gap-1" data-combination={k.id}>
-                  <TextCell label={`Name of combination ${k.id}`} value={k.name} parse={parseName} onCommit={(name) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name } : x)))} />
-                  <TextCell label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms, cases)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(terms) => putCombos(combinations.map((x, j) => (j === i ? { ...x, terms } : x)))} />
-                  <button type="button" className="px-1 pt-1 text-ink-faint hover:text-accent" aria-label={`Remove combination ${k.name}`} onClick={() => dropCombination(k)}>
+                // the name and the terms side by side, the name given a share of the width (a
+                // combination's name is often a sentence); on a narrow panel the terms go under it
+                <li key={k.id} className="grid grid-cols-[minmax(0,1fr)_auto] items-start gap-1 @lg:grid-cols-[minmax(10rem,2fr)_minmax(12rem,3fr)_auto]" data-combination={k.id}>
+                  <TextCell width="col-start-1 row-start-1" label={`Name of combination ${k.id}`} value={k.name} parse={parseName} onCommit={(name) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name } : x)))} />
+                  <TextCell width="col-span-2 row-start-2 @lg:col-span-1 @lg:col-start-2 @lg:row-start-1" label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms, cases)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(terms) => putCombos(combinations.map((x, j) => (j === i ? { ...x, terms } : x)))} />
+                  <button type="button" className="col-start-2 row-start-1 px-1 pt-1 text-ink-faint hover:text-accent @lg:col-start-3" aria-label={`Remove combination ${k.name}`} onClick={() => dropCombination(k)}>
                     ×
                   </button>
-                  <div className="col-span-3 flex flex-wrap items-center gap-x-2 gap-y-0.5 text-[11px] text-ink-faint">
+                  <div className="col-span-full flex flex-wrap items-center gap-x-2 gap-y-0.5 text-[11px] text-ink-faint">
                     <span>Its own required factors of safety:</span>
                     {(["overturning", "sliding"] as const).map((key) => (
                       <span key={key} className="flex items-center gap-1">
@@ -291,7 +307,7 @@ export function CasesPanel() {
                     <span>(blank: the sketch&apos;s; a factored set is usually checked against 1.0)</span>
                   </div>
                   {combinationWarnings(sketch, k).map((w) => (
-                    <p key={w} className="col-span-3 text-[11.5px] font-medium text-caution" role="note">
+                    <p key={w} className="col-span-full text-[11.5px] font-medium text-caution" role="note">
                       ⚠ {w}
                     </p>
                   ))}
