@@ -8,7 +8,7 @@ import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
 import { useScene } from "../context";
 import type { SceneBody, SceneItem } from "../scene";
-import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, standInPoint, unplacedPrims, type DrawState } from "../render/symbols";
+import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, portKeepOut, standInPoint, unplacedPrims, type Box, type DrawState } from "../render/symbols";
 import { isFinitePoint } from "../geometry/polygon";
 import { supportStates } from "../render/results";
 import { primsBox, type Prim } from "../render/prims";
@@ -66,11 +66,14 @@ const SEE_THROUGH_FILL = "rgba(230,223,208,0.42)";
 
 export const BodyNode = memo(function BodyNode({ id, selected, scale, units, seeThrough, shift }: NodeProps & { seeThrough?: boolean; shift?: readonly TextMove[] }) {
   const body = useScene((s) => s.byId.get(id)) as SceneBody | undefined;
+  // where this body's ports draw, which its name keeps clear of (a string: equal while they stay put)
+  const keepOutKey = useScene((s) => JSON.stringify(portKeepOut(s.items, id, scale)));
   const prims = useMemo(() => {
-    const out = body ? bodyPrims(body, { units, scale, color: selected ? ACCENT : INK }) : [];
+    const keepOut = JSON.parse(keepOutKey) as Box[];
+    const out = body ? bodyPrims(body, { units, scale, color: selected ? ACCENT : INK, keepOut }) : [];
     // a name beside a narrow body may have made way for other labels
     return shiftTexts(seeThrough ? out.map((p) => ("fill" in p && p.fill === BODY_FILL ? { ...p, fill: SEE_THROUGH_FILL } : p)) : out, shift);
-  }, [body, units, scale, selected, seeThrough, shift]);
+  }, [body, units, scale, selected, seeThrough, shift, keepOutKey]);
   if (!body || body.outline.length < 3) return null;
   const pts = body.outline.map((p) => [p[0] * scale, -p[1] * scale]);
   return (

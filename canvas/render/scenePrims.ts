@@ -8,7 +8,7 @@ import { isFinitePoint } from "../geometry/polygon";
 import { placeElementLabels, shiftTexts, type Box, type LabelShifts } from "./labels";
 import { translate, type Prim, type Pt } from "./prims";
 import { resultPrims, supportStates } from "./results";
-import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, standInPoint, unplacedPrims, type DrawState } from "./symbols";
+import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, portKeepOut, standInPoint, unplacedPrims, type DrawState } from "./symbols";
 
 // An element's primitives depend only on its scene object (which the editor replaces when it
 // changes), its body's (a pin or fixed support faces away from the body's edge), the zoom, the
@@ -32,8 +32,10 @@ type Group = { id: string; kind: string; prims: Prim[]; anchor?: Pt };
 export function elementGroups(scene: Scene, scale: number, units: UnitSystem, states: ReadonlyMap<string, DrawState> | null): Group[] {
   const groups: Group[] = [];
   for (const b of scene.bodies) {
-    const { prims } = cachedPrims(b, [scale, units], () => {
-      const out = bodyPrims(b, { units, scale });
+    // the name keeps clear of the body's ports; the key changes only when a port of this body moves
+    const keepOut = portKeepOut(scene.items, b.id, scale);
+    const { prims } = cachedPrims(b, [scale, units, JSON.stringify(keepOut)], () => {
+      const out = bodyPrims(b, { units, scale, keepOut });
       if (Number.isFinite(b.cg[0])) out.push(...translate(cgPrims(), [b.cg[0] * scale, -b.cg[1] * scale]));
       return out;
     });

@@ -20,6 +20,32 @@ export interface SymbolOptions {
   state?: DrawState;
   /** show the element's label (or id) beside it */
   showName?: boolean;
+  /** boxes in content pixels a body's name keeps clear of when it can (its ports' bars and arrows: `portKeepOut`) */
+  keepOut?: readonly Box[];
+}
+
+/** An axis-aligned box in content pixels. */
+export type Box = { x0: number; y0: number; x1: number; y1: number };
+
+/**
+ * Where the ports of body `bodyId` draw inside its outline, in content pixels: the bar across the
+ * face and the pressure force's arrow along the axis into the body (up to 60 px). A body's name
+ * is placed clear of these when a corner allows.
+ */
+export function portKeepOut(items: readonly SceneItem[], bodyId: string, scale: number): Box[] {
+  const out: Box[] = [];
+  for (const it of items) {
+    if ((it.kind !== "inlet" && it.kind !== "outlet") || it.body !== bodyId || !Number.isFinite(it.at[0]) || !Number.isFinite(it.at[1]) || !Number.isFinite(it.angle)) continue;
+    const a = (it.angle * Math.PI) / 180;
+    // screen direction of the flow (y down); the body's inside is ahead of an inlet, behind an outlet
+    const d: Pt = [Math.cos(a), -Math.sin(a)];
+    const inward: Pt = it.kind === "inlet" ? d : [-d[0], -d[1]];
+    const p: Pt = [it.at[0] * scale, -it.at[1] * scale];
+    const q2: Pt = [p[0] + inward[0] * 60, p[1] + inward[1] * 60];
+    const pad = 14;
+    out.push({ x0: Math.min(p[0], q2[0]) - pad, y0: Math.min(p[1], q2[1]) - pad, x1: Math.max(p[0], q2[0]) + pad, y1: Math.max(p[1], q2[1]) + pad });
+  }
+  return out;
 }
 
 const q = (v: number, kind: Parameters<typeof formatQuantity>[1], units: UnitSystem) => (Number.isFinite(v) ? formatQuantity(v, kind, units) : "?");
@@ -318,24 +344,33 @@ export function bodyPrims(b: SceneBody, o: SymbolOptions & { gravityOn?: boolean
     const words = `${b.label || b.id} · ${Number.isFinite(b.mass) && b.mass >= 0 ? q(b.mass, "mass", o.units) : "mass not valid"}`;
     // clear of the centre-of-gravity mark and of the weight's arrow and label below and beside it
     const cg: Pt | null = Number.isFinite(b.cg[0]) && Number.isFinite(b.cg[1]) ? [b.cg[0] * o.scale, -b.cg[1] * o.scale] : null;
-    const avoid = cg ? { x0: cg[0] - 12, y0: cg[1] - 12, x1: cg[0] + 80, y1: cg[1] + 60 } : null;
-    const at = bodyLabelPoint(pts, words.length * 6.4 + 8, avoid);
-    // where one line would cover the centre of gravity, the name and the mass on two lines may not
+    const around: Box[] = cg ? [{ x0: cg[0] - 12, y0: cg[1] - 12, x1: cg[0] + 80, y1: cg[1] + 60 }] : [];
+    const ports = o.keepOut ?? [];
     const name = b.label || b.id;
     const mass = words.slice(name.length + 3);
-    const two = at.clear ? null : bodyLabelPoint(pts, Math.max(name.length, mass.length) * 6.4 + 8, avoid, 13);
-    if (two?.clear) {
-      out.push(text(two.at, name, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
-      out.push(text([two.at[0], two.at[1] + 13], mass, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
+    const oneWide = words.length * 6.4 + 8;
+    const twoWide = Math.max(name.length, mass.length) * 6.4 + 8;
+    // clear of everything on one line, then on two; then clear of the ports at least (a port's bar
+    // and arrows over the name make both unreadable; the centre of gravity's mark is small)
+    const tries: Array<{ place: ReturnType<typeof bodyLabelPoint>; two: boolean }> = [];
+    for (const avoid of ports.length ? [[...around, ...ports], ports] : [around])
+      for (const two of [false, true]) tries.push({ place: bodyLabelPoint(pts, two ? twoWide : oneWide, avoid, two ? 13 : 0), two });
+    // without ports: one line unless two lines are clear where one is not (one line, maybe outside, else)
+    const found = ports.length ? tries.find((t) => t.place.clear && !t.place.outside) : tries[0].place.clear ? tries[0] : tries[1].place.clear ? tries[1] : undefined;
+    // nowhere inside clear of a port: beside the body, as for a body too narrow for its name
+    const at = found?.place ?? (ports.length ? bodyLabelPoint(pts, Infinity) : tries[0].place);
+    if (found?.two) {
+      out.push(text(found.place.at, name, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
+      out.push(text([found.place.at[0], found.place.at[1] + 13], mass, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
     } else out.push(text(at.at, words, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: at.outside === true }));
   }
   return out;
 }
 
-/** A corner inside the outline where the body's name fits (top corners first), off `avoid` when
- *  one can be (the centre of gravity and the weight), else the first that fits; beside the body
- *  when it fits nowhere inside. */
-function bodyLabelPoint(pts: Pt[], width: number, avoid: { x0: number; y0: number; x1: number; y1: number } | null = null, extra = 0): { at: Pt; clear: boolean; outside?: boolean } {
+/** A corner inside the outline where the body's name fits (top corners first), off every box of
+ *  `avoid` when one can be (the centre of gravity and the weight, the ports), else the first that
+ *  fits; beside the body when it fits nowhere inside. */
+function bodyLabelPoint(pts: Pt[], width: number, avoid: readonly Box[] = [], extra = 0): { at: Pt; clear: boolean; outside?: boolean } {
   const poly = pts.map((p) => [p[0], -p[1]] as Vec2);
   const inside = (p: Pt) => pointInPolygon([p[0], -p[1]], poly);
   const order = [...pts].sort((a, b) => a[0] + a[1] - (b[0] + b[1]) || a[1] - b[1]);
@@ -343,10 +378,10 @@ function bodyLabelPoint(pts: Pt[], width: number, avoid: { x0: number; y0: numbe
   const fits = order
     .map((v): Pt => [v[0] + 7, v[1] + 13])
     .filter((at) => inside(at) && inside([at[0] + width, at[1]]) && inside([at[0], at[1] - 6]) && inside([at[0] + width, at[1] + 6 + extra]) && inside([at[0], at[1] + 6 + extra]));
-  const clear = (at: Pt) => !avoid || at[0] + width < avoid.x0 || at[0] > avoid.x1 || at[1] + 7 + extra < avoid.y0 || at[1] - 7 > avoid.y1;
+  const clear = (at: Pt) => avoid.every((box) => at[0] + width < box.x0 || at[0] > box.x1 || at[1] + 7 + extra < box.y0 || at[1] - 7 > box.y1);
   const best = fits.find(clear);
   if (best) return { at: best, clear: true };
-  if (fits.length) return { at: fits[0], clear: !avoid };
+  if (fits.length) return { at: fits[0], clear: avoid.length === 0 };
   // too narrow for its name anywhere inside (a stack, a strut): beside its top right corner, outside
   const right = Math.max(...pts.map((p) => p[0]));
   const top = Math.min(...pts.filter((p) => p[0] >= right - 1).map((p) => p[1]));
