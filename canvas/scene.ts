@@ -202,9 +202,7 @@ export function sceneItem(kind: ElementKind, el: AnyElement, fv: FieldValues, bo
         beta: opt("beta"),
       };
       const flow = portFlow(numeric, null);
-      const { massFlow, density, volumeFlow, area, velocity } = numeric;
-      const massFlowGiven = massFlow !== undefined || (density !== undefined && (volumeFlow !== undefined || (area !== undefined && velocity !== undefined)));
-      return { ...base, kind, at: numeric.at, angle: numeric.angle, massFlow: flow.massFlow, velocity: flow.velocity, beta: numeric.beta ?? 1, pressure: numeric.pressure ?? 0, area: numeric.area, massFlowGiven };
+      return { ...base, kind, at: numeric.at, angle: numeric.angle, massFlow: flow.massFlow, velocity: flow.velocity, beta: numeric.beta ?? 1, pressure: numeric.pressure ?? 0, area: numeric.area, massFlowGiven: flow.massFlowGiven };
     }
     case "massSource":
       return { ...base, kind, at: e.at ? point(r, e.at, "at") : fallback, massFlow: r(e.massFlow, "massFlow") };

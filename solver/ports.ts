@@ -13,6 +13,8 @@ export interface PortFlow {
   massFlow: number;
   /** m/s */
   velocity: number;
+  /** false when nothing gives the mass flow (no ṁ, nor ρ with Q, nor ρ with A and V): `massFlow` is then 0 by default */
+  massFlowGiven: boolean;
 }
 
 function differs(a: number, b: number): boolean {
@@ -61,7 +63,7 @@ export function portFlow(p: Port, warnings: SolveWarning[] | null): PortFlow {
       });
     }
   }
-  return { massFlow: mdot, velocity: vel };
+  return { massFlow: mdot, velocity: vel, massFlowGiven: mdotWays.length > 0 };
 }
 
 const round = (x: number) => Number(x.toPrecision(4));

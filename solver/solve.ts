@@ -36,7 +36,7 @@ export function prepare(sketch: Sketch): { models: BodyModel[]; warnings: SolveW
   const flows = new Map<string, PortFlow>();
   for (const p of sketch.ports) {
     const flow = portFlow(p, warnings);
-    flows.set(p.id, f === 1 ? flow : { massFlow: flow.massFlow * f, velocity: flow.velocity * f });
+    flows.set(p.id, f === 1 ? flow : { ...flow, massFlow: flow.massFlow * f, velocity: flow.velocity * f });
   }
   warnings.push(...massBalanceWarnings(sketch, flows, f));
   return { models: sketch.bodies.map((body) => buildBodyModel(sketch, body, flows)), warnings };

@@ -8,7 +8,7 @@ import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
 import { useScene } from "../context";
 import type { SceneBody, SceneItem } from "../scene";
-import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, portKeepOut, standInPoint, unplacedPrims, type Box, type DrawState } from "../render/symbols";
+import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, portKeepOutKey, standInPoint, unplacedPrims, type Box, type DrawState } from "../render/symbols";
 import { isFinitePoint } from "../geometry/polygon";
 import { supportStates } from "../render/results";
 import { primsBox, type Prim } from "../render/prims";
@@ -67,7 +67,7 @@ const SEE_THROUGH_FILL = "rgba(230,223,208,0.42)";
 export const BodyNode = memo(function BodyNode({ id, selected, scale, units, seeThrough, shift }: NodeProps & { seeThrough?: boolean; shift?: readonly TextMove[] }) {
   const body = useScene((s) => s.byId.get(id)) as SceneBody | undefined;
   // where this body's ports draw, which its name keeps clear of (a string: equal while they stay put)
-  const keepOutKey = useScene((s) => JSON.stringify(portKeepOut(s.items, id, scale)));
+  const keepOutKey = useScene((s) => portKeepOutKey(s.items, id, scale));
   const prims = useMemo(() => {
     const keepOut = JSON.parse(keepOutKey) as Box[];
     const out = body ? bodyPrims(body, { units, scale, color: selected ? ACCENT : INK, keepOut }) : [];

@@ -8,7 +8,7 @@ import { isFinitePoint } from "../geometry/polygon";
 import { placeElementLabels, shiftTexts, type Box, type LabelShifts } from "./labels";
 import { translate, type Prim, type Pt } from "./prims";
 import { resultPrims, supportStates } from "./results";
-import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, portKeepOut, standInPoint, unplacedPrims, type DrawState } from "./symbols";
+import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, portKeepOutKey, standInPoint, unplacedPrims, type DrawState } from "./symbols";
 
 // An element's primitives depend only on its scene object (which the editor replaces when it
 // changes), its body's (a pin or fixed support faces away from the body's edge), the zoom, the
@@ -33,9 +33,9 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
   const groups: Group[] = [];
   for (const b of scene.bodies) {
     // the name keeps clear of the body's ports; the key changes only when a port of this body moves
-    const keepOut = portKeepOut(scene.items, b.id, scale);
-    const { prims } = cachedPrims(b, [scale, units, JSON.stringify(keepOut)], () => {
-      const out = bodyPrims(b, { units, scale, keepOut });
+    const keepOutKey = portKeepOutKey(scene.items, b.id, scale);
+    const { prims } = cachedPrims(b, [scale, units, keepOutKey], () => {
+      const out = bodyPrims(b, { units, scale, keepOut: JSON.parse(keepOutKey) as Box[] });
       if (Number.isFinite(b.cg[0])) out.push(...translate(cgPrims(), [b.cg[0] * scale, -b.cg[1] * scale]));
       return out;
     });

@@ -6,6 +6,7 @@ import type { Vec2 } from "@/solver/types";
 import type { SceneBody, SceneItem, SceneElement } from "../scene";
 import { isFinitePoint, nearestOnOutline, outwardNormal, angleOf, pointInPolygon } from "../geometry/polygon";
 import { add, curvedArrow, dir, hatch, hollowArrow, line, mul, perp, solidArrow, sub, text, unit, zigzag, type Prim, type Pt } from "./prims";
+import type { Box } from "./labels";
 import { BODY_FILL, CAUTION, INK, INK_FAINT, PAPER_CARD } from "./palette";
 
 export type DrawState = "bearing" | "lifted" | "taut" | "slack" | "active" | "slips";
@@ -24,8 +25,7 @@ export interface SymbolOptions {
   keepOut?: readonly Box[];
 }
 
-/** An axis-aligned box in content pixels. */
-export type Box = { x0: number; y0: number; x1: number; y1: number };
+export type { Box };
 
 /**
  * Where the ports of body `bodyId` draw inside its outline, in content pixels: the bar across the
@@ -33,19 +33,37 @@ export type Box = { x0: number; y0: number; x1: number; y1: number };
  * is placed clear of these when a corner allows.
  */
 export function portKeepOut(items: readonly SceneItem[], bodyId: string, scale: number): Box[] {
-  const out: Box[] = [];
-  for (const it of items) {
-    if ((it.kind !== "inlet" && it.kind !== "outlet") || it.body !== bodyId || !Number.isFinite(it.at[0]) || !Number.isFinite(it.at[1]) || !Number.isFinite(it.angle)) continue;
-    const a = (it.angle * Math.PI) / 180;
-    // screen direction of the flow (y down); the body's inside is ahead of an inlet, behind an outlet
-    const d: Pt = [Math.cos(a), -Math.sin(a)];
-    const inward: Pt = it.kind === "inlet" ? d : [-d[0], -d[1]];
-    const p: Pt = [it.at[0] * scale, -it.at[1] * scale];
-    const q2: Pt = [p[0] + inward[0] * 60, p[1] + inward[1] * 60];
-    const pad = 14;
-    out.push({ x0: Math.min(p[0], q2[0]) - pad, y0: Math.min(p[1], q2[1]) - pad, x1: Math.max(p[0], q2[0]) + pad, y1: Math.max(p[1], q2[1]) + pad });
+  return JSON.parse(portKeepOutKey(items, bodyId, scale)) as Box[];
+}
+
+/** Each body's keep-out boxes as a string (equal while its ports stay put), worked out in one pass per scene and scale. */
+const keepOutKeys = new WeakMap<readonly SceneItem[], { scale: number; byBody: Map<string, string> }>();
+
+/** `portKeepOut` as a string: a selector's value that stays equal while the body's ports stay put (one pass over the scene's items, not one per body). */
+export function portKeepOutKey(items: readonly SceneItem[], bodyId: string, scale: number): string {
+  let hit = keepOutKeys.get(items);
+  if (!hit || hit.scale !== scale) {
+    const boxes = new Map<string, Box[]>();
+    for (const it of items) {
+      const box = portBox(it, scale);
+      if (box) boxes.set(it.body, [...(boxes.get(it.body) ?? []), box]);
+    }
+    hit = { scale, byBody: new Map([...boxes].map(([id, b]) => [id, JSON.stringify(b)])) };
+    keepOutKeys.set(items, hit);
   }
-  return out;
+  return hit.byBody.get(bodyId) ?? "[]";
+}
+
+function portBox(it: SceneItem, scale: number): Box | null {
+  if ((it.kind !== "inlet" && it.kind !== "outlet") || !Number.isFinite(it.at[0]) || !Number.isFinite(it.at[1]) || !Number.isFinite(it.angle)) return null;
+  const a = (it.angle * Math.PI) / 180;
+  // screen direction of the flow (y down); the body's inside is ahead of an inlet, behind an outlet
+  const d: Pt = [Math.cos(a), -Math.sin(a)];
+  const inward: Pt = it.kind === "inlet" ? d : [-d[0], -d[1]];
+  const p: Pt = [it.at[0] * scale, -it.at[1] * scale];
+  const q2: Pt = [p[0] + inward[0] * 60, p[1] + inward[1] * 60];
+  const pad = 14;
+  return { x0: Math.min(p[0], q2[0]) - pad, y0: Math.min(p[1], q2[1]) - pad, x1: Math.max(p[0], q2[0]) + pad, y1: Math.max(p[1], q2[1]) + pad };
 }
 
 const q = (v: number, kind: Parameters<typeof formatQuantity>[1], units: UnitSystem) => (Number.isFinite(v) ? formatQuantity(v, kind, units) : "?");

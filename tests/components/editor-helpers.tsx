@@ -27,6 +27,14 @@ export function beam(loadLabel?: string): SketchFile {
   };
 }
 
+/** The beam with an inlet p1 on its left end (demo data). */
+export function beamWithInlet(): SketchFile {
+  return { ...beam("F1"), ports: [{ id: "p1", body: "b1", kind: "inlet", at: [0, 0.25], angle: 0, massFlow: 10, velocity: 5, area: 0.01 }] } as SketchFile;
+}
+
+/** A JSON response, as a stubbed `fetch` answers. */
+export const jsonResponse = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
+
 export function memoryStorage(initial?: SketchFile) {
   const mem = new Map<string, string>();
   if (initial) mem.set("counterpoise:scratch-sketch:v1", JSON.stringify({ savedAt: "", sketch: initial }));

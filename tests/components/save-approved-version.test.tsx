@@ -6,10 +6,9 @@ import { act, fireEvent, render, screen, waitFor, within } from "@testing-librar
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import type { ReviewState } from "@/lib/review/rules";
-import type { SketchFile } from "@/solver/schema";
 import { reviewNote } from "@/components/versions/editor/reviewNote";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
-import { beam } from "./editor-helpers";
+import { beamWithInlet, jsonResponse } from "./editor-helpers";
 
 vi.mock("next/navigation", () => ({
   useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
@@ -23,10 +22,7 @@ beforeAll(() => {
 });
 afterEach(() => vi.unstubAllGlobals());
 
-/** The beam with an inlet p1 on its left end (demo data). */
-const withInlet = (): SketchFile => ({ ...beam("F1"), ports: [{ id: "p1", body: "b1", kind: "inlet", at: [0, 0.25], angle: 0, massFlow: 10, velocity: 5, area: 0.01 }] }) as SketchFile;
 
-const json = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
 
 /** Sketch sk1 at v3, whose sign-off is in `state` (`null`: the sign-off cannot be read). */
 function serve(state: ReviewState | null) {
@@ -35,10 +31,10 @@ function serve(state: ReviewState | null) {
     "fetch",
     vi.fn(async (path: string) => {
       asked.push(path);
-      if (path === "/api/sketches/sk1") return json({ sketch: { id: "sk1", workspaceId: "w1", workspaceName: "Bay 4", title: "Beam on a pin and a contact", role: "editor", latestVersion: 3 } });
-      if (path === "/api/sketches/sk1/versions/3") return json({ version: { number: 3, document: withInlet() } });
-      if (path === "/api/sketches/sk1/versions/3/signoff" && state) return json({ state });
-      return json({ error: { code: "not_found", message: "no" } }, 404);
+      if (path === "/api/sketches/sk1") return jsonResponse({ sketch: { id: "sk1", workspaceId: "w1", workspaceName: "Bay 4", title: "Beam on a pin and a contact", role: "editor", latestVersion: 3 } });
+      if (path === "/api/sketches/sk1/versions/3") return jsonResponse({ version: { number: 3, document: beamWithInlet() } });
+      if (path === "/api/sketches/sk1/versions/3/signoff" && state) return jsonResponse({ state });
+      return jsonResponse({ error: { code: "not_found", message: "no" } }, 404);
     }),
   );
   return asked;

@@ -6,9 +6,8 @@
 import { act, fireEvent, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
-import type { SketchFile } from "@/solver/schema";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
-import { beam } from "./editor-helpers";
+import { beamWithInlet, jsonResponse } from "./editor-helpers";
 
 vi.mock("next/navigation", () => ({
   useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
@@ -22,10 +21,7 @@ beforeAll(() => {
 });
 afterEach(() => vi.unstubAllGlobals());
 
-const json = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
 
-/** The beam with an inlet p1 on its left end (demo data). */
-const withInlet = (): SketchFile => ({ ...beam("F1"), ports: [{ id: "p1", body: "b1", kind: "inlet", at: [0, 0.25], angle: 0, massFlow: 10, velocity: 5, area: 0.01 }] }) as SketchFile;
 
 /** Sketch sk1 with its v1; a save is refused as the server refuses an inlet of area −1. */
 function serve() {
@@ -33,13 +29,13 @@ function serve() {
   vi.stubGlobal(
     "fetch",
     vi.fn(async (path: string, init?: RequestInit) => {
-      if (path === "/api/sketches/sk1") return json({ sketch: { id: "sk1", workspaceId: "w1", workspaceName: "Bay 4", title: "Beam on a pin and a contact", role: "editor", latestVersion: 1 } });
-      if (path === "/api/sketches/sk1/versions/1") return json({ version: { number: 1, document: withInlet() } });
+      if (path === "/api/sketches/sk1") return jsonResponse({ sketch: { id: "sk1", workspaceId: "w1", workspaceName: "Bay 4", title: "Beam on a pin and a contact", role: "editor", latestVersion: 1 } });
+      if (path === "/api/sketches/sk1/versions/1") return jsonResponse({ version: { number: 1, document: beamWithInlet() } });
       if (path === "/api/sketches/sk1/versions" && init?.method === "POST") {
         posted.push(JSON.parse(String(init.body)));
-        return json({ error: { code: "validation_failed", message: "Some fields are not valid.", fields: [{ path: "document.ports[0].area", message: "must be more than zero" }] } }, 400);
+        return jsonResponse({ error: { code: "validation_failed", message: "Some fields are not valid.", fields: [{ path: "document.ports[0].area", message: "must be more than zero" }] } }, 400);
       }
-      return json({ error: { code: "not_found", message: "no" } }, 404);
+      return jsonResponse({ error: { code: "not_found", message: "no" } }, 404);
     }),
   );
   return posted;

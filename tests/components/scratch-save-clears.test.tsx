@@ -6,7 +6,7 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { SCRATCH_KEY } from "@/canvas/persistence";
 import { withModalDialogs } from "./dialog-support";
-import { beam } from "./editor-helpers";
+import { beam, jsonResponse } from "./editor-helpers";
 
 const push = vi.fn();
 vi.mock("next/navigation", () => ({
@@ -23,7 +23,6 @@ afterEach(() => {
   push.mockReset();
 });
 
-const json = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
 
 /** The API: one workspace to save into; creating the sketch answers `created` (or fails). */
 function serve(created: "ok" | "fails") {
@@ -31,14 +30,14 @@ function serve(created: "ok" | "fails") {
   vi.stubGlobal(
     "fetch",
     vi.fn(async (path: string, init?: RequestInit) => {
-      if (path === "/api/workspaces") return json({ workspaces: [{ id: "w1", name: "Bay 4", role: "editor", personal: false }] });
+      if (path === "/api/workspaces") return jsonResponse({ workspaces: [{ id: "w1", name: "Bay 4", role: "editor", personal: false }] });
       if (path === "/api/workspaces/w1/sketches" && init?.method === "POST") {
         posted.push(JSON.parse(String(init.body)));
         return created === "ok"
-          ? json({ sketch: { id: "sk1", workspaceId: "w1", title: "Beam on a pin and a contact" } }, 201)
-          : json({ error: { code: "internal", message: "The database is not answering." } }, 500);
+          ? jsonResponse({ sketch: { id: "sk1", workspaceId: "w1", title: "Beam on a pin and a contact" } }, 201)
+          : jsonResponse({ error: { code: "internal", message: "The database is not answering." } }, 500);
       }
-      return json({ error: { code: "not_found", message: "no" } }, 404);
+      return jsonResponse({ error: { code: "not_found", message: "no" } }, 404);
     }),
   );
   return posted;

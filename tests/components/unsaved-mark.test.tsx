@@ -6,7 +6,7 @@ import { act, fireEvent, render, screen, waitFor, within } from "@testing-librar
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
-import { beam } from "./editor-helpers";
+import { beam, jsonResponse } from "./editor-helpers";
 
 vi.mock("next/navigation", () => ({
   useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
@@ -20,17 +20,16 @@ beforeAll(() => {
 });
 afterEach(() => vi.unstubAllGlobals());
 
-const json = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
 
 /** Sketch sk1 with its v1 (the beam); saving makes v2. */
 function serve() {
   vi.stubGlobal(
     "fetch",
     vi.fn(async (path: string, init?: RequestInit) => {
-      if (path === "/api/sketches/sk1") return json({ sketch: { id: "sk1", workspaceId: "w1", workspaceName: "Bay 4", title: "Beam on a pin and a contact", role: "editor", latestVersion: 1 } });
-      if (path === "/api/sketches/sk1/versions/1") return json({ version: { number: 1, document: beam() } });
-      if (path === "/api/sketches/sk1/versions" && init?.method === "POST") return json({ version: { number: 2, createdAt: "2026-11-30T10:00:00Z" } }, 201);
-      return json({ error: { code: "not_found", message: "no" } }, 404);
+      if (path === "/api/sketches/sk1") return jsonResponse({ sketch: { id: "sk1", workspaceId: "w1", workspaceName: "Bay 4", title: "Beam on a pin and a contact", role: "editor", latestVersion: 1 } });
+      if (path === "/api/sketches/sk1/versions/1") return jsonResponse({ version: { number: 1, document: beam() } });
+      if (path === "/api/sketches/sk1/versions" && init?.method === "POST") return jsonResponse({ version: { number: 2, createdAt: "2026-11-30T10:00:00Z" } }, 201);
+      return jsonResponse({ error: { code: "not_found", message: "no" } }, 404);
     }),
   );
 }
