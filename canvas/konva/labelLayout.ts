@@ -23,12 +23,15 @@ import type { InteractionStore } from "./interaction";
 
 const NONE: readonly Box[] = [];
 
+/** A box (content px) as offsets from a point: `handlePlace` measures from the element's anchor. */
+export const shiftBox = (b: Box, from: readonly [number, number]): Box => ({ x0: b.x0 - from[0], y0: b.y0 - from[1], x1: b.x1 - from[0], y1: b.y1 - from[1] });
+
 /**
  * What the turn handle of the one selected element covers (content px), placed as the interaction
  * layer draws it; nothing when no handle is drawn (no single selection, another tool, a body, an
  * element without a direction, or an angle or position in error).
  */
-export function turnHandleBoxes(scene: Scene, selection: readonly string[], tool: string, scale: number, units: UnitSystem): readonly Box[] {
+export function turnHandleBoxes(scene: Scene, selection: readonly string[], tool: string, scale: number, units: UnitSystem, frame?: Box): readonly Box[] {
   if (tool !== "select" || selection.length !== 1) return NONE;
   const el = scene.byId.get(selection[0]);
   if (!el || el.kind === "body" || !DIRECTED.has(el.kind) || !("angle" in el)) return NONE;
@@ -37,7 +40,8 @@ export function turnHandleBoxes(scene: Scene, selection: readonly string[], tool
   const d = dir(el.kind === "force" && el.magnitude < 0 ? el.angle + 180 : el.angle);
   const sign = handleSign(el);
   const along: [number, number] = [d[0] * sign, d[1] * sign];
-  return handleBoxes([a[0] * scale, -a[1] * scale], along, handlePlace(el, along, scale, units));
+  const at: [number, number] = [a[0] * scale, -a[1] * scale];
+  return handleBoxes(at, along, handlePlace(el, along, scale, units, frame && shiftBox(frame, at)));
 }
 
 /** Start following; returns the function that stops. */
@@ -56,7 +60,7 @@ export function followLabelLayout(stores: EditorStores, interaction: Interaction
     const groups = elementGroups(scene, view.scale, e.units, statesOf(shown));
     const frame = drawingFrame(view, viewport);
     const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown), stale, frame) : [];
-    const handle = turnHandleBoxes(scene, e.selection, e.tool.kind, view.scale, e.units);
+    const handle = turnHandleBoxes(scene, e.selection, e.tool.kind, view.scale, e.units, frame);
     const shifts = placeElementLabels(groups, results, it.labelShifts, frame, handle);
     if (shifts !== it.labelShifts) interaction.setState({ labelShifts: shifts });
   };

@@ -21,6 +21,7 @@ import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
 import { handleSign } from "./pointer";
+import { shiftBox } from "./labelLayout";
 
 const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
 export { ROTATE_HANDLE_PX, handlePlace } from "../render/handles";
@@ -95,14 +96,17 @@ export const SelectionHandles = memo(function SelectionHandles() {
   const scale = useEditor((s) => s.view.scale);
   const units = useEditor((s) => s.units);
   const tool = useEditor((s) => s.tool.kind);
-  // the handle's place measures the element's words: once per change of the element, not per render
+  const view = useEditor((s) => s.view);
+  const viewport = useEditor((s) => s.viewport);
+  // the handle's place measures the element's words: once per change of the element or the view, not per render
   const place = useMemo(() => {
     if (!el || el.kind === "body" || !DIRECTED.has(el.kind) || !("angle" in el)) return null;
     const item = el as SceneItem & { angle: number };
     const d = dir(item.kind === "force" && "magnitude" in item && item.magnitude < 0 ? item.angle + 180 : item.angle);
     const sign = handleSign(item);
-    return { d, sign, ...handlePlace(item, [d[0] * sign, d[1] * sign], scale, units) };
-  }, [el, scale, units]);
+    const frame = drawingFrame(view, viewport);
+    return { d, sign, ...handlePlace(item, [d[0] * sign, d[1] * sign], view.scale, units, frame && shiftBox(frame, px(anchorOf(item), view.scale))) };
+  }, [el, view, viewport, units]);
   if (!el || tool !== "select") return null;
   if (el.kind === "body") {
     return (

@@ -17,9 +17,11 @@ const HANDLE_REACH_PX = 120;
  * Where an element's turn handle sits along its direction, and where its angle readout goes: the
  * handle ROTATE_HANDLE_PX out, or further (up to HANDLE_REACH_PX) until it is clear of the element's
  * own words (a port's "ṁ … · V …" sits where its arrow points); the readout at the first corner of
- * the handle where it covers none of them. Offsets are from the element's anchor, in pixels.
+ * the handle where it covers none of them and stays inside `keepIn` (the drawing area below the
+ * legend, when given: a handle near the top edge keeps its angle out from under the legend).
+ * Offsets, and `keepIn`, are from the element's anchor, in pixels.
  */
-export function handlePlace(item: SceneItem, along: Vec2, scale: number, units: UnitSystem): { distance: number; readout: Vec2 } {
+export function handlePlace(item: SceneItem, along: Vec2, scale: number, units: UnitSystem, keepIn?: Box): { distance: number; readout: Vec2 } {
   // an item's primitives are drawn about its anchor
   const boxes = itemPrims(item, { units, scale, color: ACCENT, showName: true })
     .filter((p): p is Extract<Prim, { t: "text" }> => p.t === "text")
@@ -35,7 +37,9 @@ export function handlePlace(item: SceneItem, along: Vec2, scale: number, units: 
   const h = [along[0] * distance, along[1] * distance];
   // "90°" is about 30 × 12 px: upper right, lower right, upper left, lower left of the handle
   const corners: Vec2[] = [[9, -15], [9, 5], [-41, -15], [-41, 5]];
-  const readout = corners.find(([dx, dy]) => clear(h[0] + dx, h[1] + dy, h[0] + dx + 32, h[1] + dy + 12)) ?? corners[0];
+  const inside = ([dx, dy]: Vec2) => !keepIn || (h[0] + dx >= keepIn.x0 && h[1] + dy >= keepIn.y0 && h[0] + dx + 32 <= keepIn.x1 && h[1] + dy + 12 <= keepIn.y1);
+  const free = ([dx, dy]: Vec2) => clear(h[0] + dx, h[1] + dy, h[0] + dx + 32, h[1] + dy + 12);
+  const readout = corners.find((c) => free(c) && inside(c)) ?? corners.find(inside) ?? corners.find(free) ?? corners[0];
   return { distance, readout };
 }
 

@@ -44,4 +44,19 @@ describe("the turn handle's place", () => {
     const along = dir(item.angle);
     expect(handlePlace(item, [-along[0], -along[1]], SCALE, "SI")).toEqual({ distance: ROTATE_HANDLE_PX, readout: [9, -15] });
   });
+
+  it("keeps its angle inside the drawing area: a handle just under the legend writes it below, not under the legend", () => {
+    const item = itemOf("pump-skid", "rear") as SceneItem & { angle: number };
+    const along = dir(item.angle);
+    const free = handlePlace(item, [-along[0], -along[1]], SCALE, "SI");
+    const h = [-along[0] * free.distance, -along[1] * free.distance];
+    // the drawing area's top edge 5 px above the handle's centre: the upper corners (15 px up) reach past it
+    const keepIn = { x0: -1000, y0: h[1] - 5, x1: 1000, y1: 1000 };
+    const { readout } = handlePlace(item, [-along[0], -along[1]], SCALE, "SI", keepIn);
+    expect(readout).toEqual([9, 5]);
+    expect(h[1] + readout[1]).toBeGreaterThanOrEqual(keepIn.y0);
+    // and at the right edge too: the lower left corner
+    const corner = handlePlace(item, [-along[0], -along[1]], SCALE, "SI", { ...keepIn, x1: h[0] + 20 });
+    expect(corner.readout).toEqual([-41, 5]);
+  });
 });
