@@ -164,10 +164,9 @@ export const DEMO_SKETCHES: DemoSketch[] = [
         message: "Hydrotest case: 15 bar at the inlet",
         edit: (d) => {
           d.parameters!.p_in = "15 bar";
-          d.parameters!.p_out = "14.6 bar";
         },
         notes:
-          "A DN150 long-radius 90° bend where a pump discharge turns up a riser, in elevation, at its hydrotest pressure: water at 15 bar flows in from the left and leaves upward at 14.6 bar. One anchor at the bend takes everything: the pressure thrust on both faces, the change of momentum and the weight of the bend full of water (its 92 kg is the bend and its flanged stubs with the water inside them: a body's mass is everything inside the control volume). An anchor designer wants the load on the support: the reactions reversed, the “Load on the support” view of the table.",
+          "A DN150 long-radius 90° bend where a pump discharge turns up a riser, in elevation, at its hydrotest pressure: water at 15 bar flows in from the left and leaves upward a little lower: the 0.45 m rise and the bend's loss (K ≈ 0.25) take about 5 kPa. One anchor at the bend takes everything: the pressure thrust on both faces, the change of momentum and the weight of the bend full of water (its 92 kg is the bend and its flanged stubs with the water inside them: a body's mass is everything inside the control volume). An anchor designer wants the load on the support: the reactions reversed, the “Load on the support” view of the table.",
       },
     ],
   },

@@ -129,7 +129,7 @@ export function Toolbar({
       {readOnly ? null : (
         <Menu
           label="Open an example"
-          shortLabel="Examples"
+          shortLabel="Example"
           testId="menu-examples"
           wide
           items={EXAMPLES.map((e) => ({ id: `example-${e.id}`, label: e.title, detail: e.summary, onSelect: () => onOpenExample(e.id) }))}

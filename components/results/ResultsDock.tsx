@@ -160,7 +160,11 @@ export function ResultsDock() {
     }
   };
   return (
-    <section ref={ref} aria-label="Results" className="relative flex shrink-0 border-t border-rule bg-paper" style={{ height }} data-testid="results-dock">
+    <section ref={ref} aria-labelledby="results-heading" className="relative flex shrink-0 border-t border-rule bg-paper" style={{ height }} data-testid="results-dock">
+      {/* the views' own headings (h3) sit under this one, whatever panels a phone folds away */}
+      <h2 id="results-heading" className="sr-only">
+        Results
+      </h2>
       <Resizer height={height} limit={limit} onChange={choose} />
       {/* on a narrow screen the whole column scrolls (the status and the cautions take much of a
           phone's dock), the tabs held at its top; wider, only the open tab's panel scrolls */}
@@ -218,7 +222,7 @@ export function ResultsDock() {
             </div>
           )}
         </div>
-        <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} className="relative min-h-0 flex-1 overflow-auto py-2 max-sm:flex-none max-sm:overflow-visible">
+        <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} tabIndex={0} className="relative min-h-0 flex-1 overflow-auto py-2 outline-none focus-visible:ring-2 focus-visible:ring-inset focus-visible:ring-accent/60 max-sm:flex-none max-sm:overflow-visible">
           {tab === "reactions" ? <ReactionsTable sense={sense} /> : tab === "hand" ? <HandCheckView /> : tab === "cases" ? <CasesPanel /> : <SweepPanel />}
         </div>
       </div>

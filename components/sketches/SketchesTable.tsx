@@ -174,7 +174,7 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
           {query.error instanceof ApiError ? query.error.message : "Try again in a moment."}
         </Notice>
       ) : query.isPending ? (
-        <div className="space-y-2" aria-label="Loading the sketches">
+        <div className="space-y-2" role="status" aria-label="Loading the sketches">
           {[0, 1, 2].map((i) => (
             <Skeleton key={i} className="h-9 w-full" />
           ))}

@@ -61,7 +61,7 @@ export function AuditLog({ workspaceId, showSignIns = true }: { workspaceId: str
 
   if (q.isPending) {
     return (
-      <div className="space-y-3" aria-label="Loading the audit log">
+      <div className="space-y-3" role="status" aria-label="Loading the audit log">
         {[0, 1, 2, 3].map((i) => (
           <Skeleton key={i} className="h-5 w-full" />
         ))}

@@ -28,7 +28,7 @@ export function InvitationsTable({ workspaceId }: { workspaceId: string }) {
 
   if (query.isPending) {
     return (
-      <div className="space-y-2" aria-label="Loading the invitations">
+      <div className="space-y-2" role="status" aria-label="Loading the invitations">
         <Skeleton className="h-4 w-2/3" />
         <Skeleton className="h-4 w-1/2" />
       </div>
