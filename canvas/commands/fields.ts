@@ -66,6 +66,13 @@ export const setField = defineCommand<{ id: string; field: FieldPath; value: Fie
       if (l.group === "ports" && path.length === 1 && (last === "volumeFlow" || last === "density")) {
         for (const k of ["massFlow", "velocity"] as const) if (target[k] === PORT_PLACEHOLDER[k] && !(k === "velocity" && last === "density" && target.volumeFlow === undefined)) delete target[k];
       }
+      // ρ and A with a typed ṁ fix V (V = ṁ/(ρA)), and with a typed V fix ṁ: the other placed value,
+      // still as placed, would disagree with them and be the one solved
+      if (l.group === "ports" && path.length === 1 && target.density !== undefined && target.area !== undefined) {
+        const typed = (k: "massFlow" | "velocity") => target[k] !== undefined && target[k] !== PORT_PLACEHOLDER[k];
+        if (target.velocity === PORT_PLACEHOLDER.velocity && typed("massFlow") && last !== "velocity") delete target.velocity;
+        if (target.massFlow === PORT_PLACEHOLDER.massFlow && typed("velocity") && last !== "massFlow") delete target.massFlow;
+      }
     });
   },
 });

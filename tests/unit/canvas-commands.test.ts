@@ -222,6 +222,24 @@ describe("setField", () => {
     expect(el(d, "p8").massFlow).toBeUndefined();
     expect(el(d, "p8").velocity).toBe("5 m/s");
   });
+  it("a typed ṁ with ρ and A sends the placed V aside (V = ṁ/(ρA)), in any order; a typed V does the same for the placed ṁ", () => {
+    for (const order of [["massFlow", "area", "density"], ["density", "area", "massFlow"], ["area", "massFlow", "density"]] as const) {
+      const typed = { massFlow: "12 kg/s", area: "0.25 m^2", density: "1.2 kg/m^3" };
+      let s: SketchFile = { ...base(), ports: [newAttached("outlet", "p7", { body: "b1", at: [2, 0.5], angle: 0 }) as SketchFile["ports"][number]] };
+      for (const f of order) s = setField.run(s, { id: "p7", field: f, value: typed[f] });
+      expect(el(s, "p7").velocity, order.join(",")).toBeUndefined();
+      const parsed = parseSketch(s);
+      if (!parsed.ok) throw new Error("does not parse");
+      const warnings: SolveWarning[] = [];
+      // V = ṁ/(ρA) = 12 / (1.2 × 0.25) = 40 m/s (continuity, common practice)
+      expect(portFlow(parsed.sketch.ports[0], warnings).velocity).toBeCloseTo(40, 9);
+      expect(warnings.filter((w) => w.code === "PORT_INCONSISTENT")).toEqual([]);
+    }
+    let v: SketchFile = { ...base(), ports: [newAttached("inlet", "p6", { body: "b1", at: [0, 0.3], angle: 0 }) as SketchFile["ports"][number]] };
+    for (const [f, value] of [["velocity", "20 m/s"], ["area", "0.5 m^2"], ["density", "1.2 kg/m^3"]] as const) v = setField.run(v, { id: "p6", field: f, value });
+    expect(el(v, "p6").massFlow).toBeUndefined();
+    expect(el(v, "p6").velocity).toBe("20 m/s");
+  });
   it("switches a force between magnitude + angle and components", () => {
     const a = setForceForm.run(base(), { id: "l1", form: "components", magnitude: 1000, angle: -90 });
     expect(el(a, "l1")).toMatchObject({ fx: 0, fy: -1000 });
