@@ -25,8 +25,18 @@ export interface OverturningCheck {
   sense: 1 | -1;
   restoring: number;
   overturning: number;
+  /** each load's share about the pivot (N·m, both ≥ 0): a hand check adds them up to the two sums */
+  terms: TurningTerm[];
   required: number;
   pass: boolean;
+}
+
+export interface TurningTerm {
+  id: string;
+  /** as in the equations: "weight of Cart", "momentum out at the lance tip, as −ṁV" */
+  label: string;
+  restoring: number;
+  overturning: number;
 }
 
 export interface SlidingCheck {
@@ -90,35 +100,18 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
       // lift, it would turn freely: unrestrained, not a tipping mode)
       if (!valid || (s.kind !== "contact" && opening.length === 0)) continue;
       free = true;
+      const n = baseNormal(s.kind === "contact" ? [s] : opening);
+      const terms = turningTerms(model, P, sense, n);
       let restoring = 0;
       let overturning = 0;
-      const add = (work: number) => (work > 0 ? (overturning += work) : (restoring -= work));
-      // each force counts by its components across and along the base the body stands on (the
-      // contact's normal and tangent; about a pin or a roller, the base of the contacts it lifts,
-      // or the sketch's axes when those lean different ways), as an inclined thrust or a weight
-      // on a slope is resolved by hand: the part pressing the body down restores, the part
-      // pushing it over overturns
-      const n = baseNormal(s.kind === "contact" ? [s] : opening);
-      const tan: Vec2 = [-n[1], n[0]];
-      const resolved = (t: { fx: number; fy: number; at?: Vec2 }, sign: number) => {
-        if (!t.at) return;
-        const rx = t.at[0] - P[0];
-        const ry = t.at[1] - P[1];
-        const fn = t.fx * n[0] + t.fy * n[1];
-        const ft = t.fx * tan[0] + t.fy * tan[1];
-        add(sign * sense * momentOf(rx, ry, fn * n[0], fn * n[1]));
-        add(sign * sense * momentOf(rx, ry, ft * tan[0], ft * tan[1]));
-      };
-      for (const t of model.forceTerms) {
-        resolved(t, 1);
-        add(sense * t.m);
+      for (const t of terms) {
+        restoring += t.restoring;
+        overturning += t.overturning;
       }
-      // momentum flux terms sit on the other side of the equation: the body feels −ṁV
-      for (const t of model.momentumTerms) resolved(t, -1);
       if (overturning <= 1e-12 * (restoring + 1)) continue;
       const factor = restoring / overturning;
       if (!best || factor < best.factor) {
-        best = { factor, about: s.id, pivot: [P[0], P[1]], sense, restoring, overturning, required, pass: factor >= required };
+        best = { factor, about: s.id, pivot: [P[0], P[1]], sense, restoring, overturning, terms, required, pass: factor >= required };
       }
     }
   }
@@ -126,6 +119,45 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
   // a body free to tip about some support, with no load tending to: say that, not which support
   // blocks the other ways it could turn
   return { notApplicable: blockedBy && !free ? `tipping is prevented by support ${blockedBy}` : "no load tends to tip it" };
+}
+
+/**
+ * Each load's moment about the pivot P for a turn of the given sense, split into the part that
+ * restores and the part that overturns. Each force counts by its components across and along the
+ * base the body stands on (normal n: the contact's, or about a pin or a roller the base of the
+ * contacts it lifts), as an inclined thrust or a weight on a slope is resolved by hand: the part
+ * pressing the body down restores, the part pushing it over overturns. Momentum flux terms sit on
+ * the other side of the equation: the body feels −ṁV.
+ */
+function turningTerms(model: BodyModel, P: Vec2, sense: 1 | -1, n: Vec2): TurningTerm[] {
+  const tan: Vec2 = [-n[1], n[0]];
+  const out: TurningTerm[] = [];
+  const term = (t: { id: string; label: string; fx: number; fy: number; m: number; at?: Vec2 }, sign: number) => {
+    let restoring = 0;
+    let overturning = 0;
+    const add = (work: number) => (work > 0 ? (overturning += work) : (restoring -= work));
+    if (t.at) {
+      const rx = t.at[0] - P[0];
+      const ry = t.at[1] - P[1];
+      const fn = t.fx * n[0] + t.fy * n[1];
+      const ft = t.fx * tan[0] + t.fy * tan[1];
+      add(sign * sense * momentOf(rx, ry, fn * n[0], fn * n[1]));
+      add(sign * sense * momentOf(rx, ry, ft * tan[0], ft * tan[1]));
+    }
+    if (sign > 0) add(sense * t.m);
+    if (restoring || overturning) out.push({ id: t.id, label: t.label, restoring, overturning });
+  };
+  for (const t of model.forceTerms) term(t, 1);
+  // the flux terms named as the body feels them: an outlet's jet pushes it back (−ṁV), an inflow on (+ṁV)
+  for (const t of model.momentumTerms) {
+    const outflow = t.label.startsWith("momentum out at ");
+    const label = t.label
+      .replace(/^momentum (out|in) at /, outflow ? "outflow at " : "inflow at ")
+      .replace(/, as −β?ṁV/, "")
+      .replace(/( × [\d.e+-]+)?$/, (tag) => `, on the body ${outflow ? "−" : "+"}${t.label.includes("β =") ? "β" : ""}ṁV${tag}`);
+    term({ ...t, label }, -1);
+  }
+  return out;
 }
 
 /** The normal of the base the contacts stand on: theirs when they agree, else the sketch's +y. */
@@ -193,5 +225,10 @@ function wholeBodySliding(model: BodyModel, reactions: Record<string, Reaction>,
 }
 
 export function bodyStability(model: BodyModel, result: { reactions: Record<string, Reaction>; bodies: Record<string, BodyResult> }, req: Requirements): BodyStability {
+  // a body nothing holds has no factor against anything: the free motion is the finding
+  if (result.bodies[model.body.id]?.status === "unrestrained") {
+    const why = "the body is unrestrained: nothing holds it, so no factor of safety applies";
+    return { overturning: { notApplicable: why }, sliding: { notApplicable: why } };
+  }
   return { overturning: overturningCheck(model, req.overturning), sliding: slidingCheck(model, result.reactions, req.sliding, result.bodies[model.body.id]?.status) };
 }

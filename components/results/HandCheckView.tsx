@@ -13,6 +13,8 @@ import { BUTTON, INPUT } from "@/components/editor/ui";
 import { useActionRunner } from "@/components/editor/useActions";
 import { useHeldScale } from "./useHeldScale";
 import { defaultMomentPoint, handCheckBlocks, handCheckText, type HandCheckBlock } from "./handCheck";
+import { StabilityCheck } from "./StabilityCheck";
+import { stabilityLines } from "./stabilityCheck";
 
 /**
  * A coordinate of P as typed: a length with its unit ("3 ft", "900 mm"), or a plain number in
@@ -84,6 +86,7 @@ export function HandCheckView() {
   const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
   const units = useEditor((s) => s.units);
   const picked = useEditor((s) => s.momentPoint);
+  const stability = useDeferredValue(useAnalysis((s) => s.shownStability));
   const stale = useAnalysis((s) => s.stale);
   const { editor } = useStores();
   const run = useActionRunner();
@@ -101,6 +104,7 @@ export function HandCheckView() {
     const { force, moment } = scale ? unitFamily(units, scale) : { force: columnUnit("force", units), moment: columnUnit("moment", units) };
     return { fx: force, fy: force, m: moment };
   }, [scale, units]);
+  const factors = useMemo(() => (numeric && shown && body ? stabilityLines(numeric, body.id, shown.reactions, stability?.[body.id]) : null), [numeric, shown, body, stability]);
   const [draft, setDraft] = useState<{ x: string; y: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
   if (!eq || !body) return <p className="p-2 text-[12.5px] text-ink-faint">No result to check yet.</p>;
@@ -187,6 +191,7 @@ export function HandCheckView() {
             <Block key={b.key} b={b} units={units} unit={unitsOfSums[b.key]} scale={size ?? { force: 0, moment: 0 }} />
           ))}
         </div>
+        {factors && <StabilityCheck lines={factors} units={units} force={unitsOfSums.fx} moment={unitsOfSums.m} />}
       </div>
     </div>
   );

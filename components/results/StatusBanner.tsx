@@ -8,6 +8,8 @@ import { stabilitySentence, statusSentences, type Tone } from "./statusSentence"
 
 const BADGE: Record<Tone, { word: string; cls: string }> = {
   holds: { word: "Holds", cls: "border-ink/40 text-ink" },
+  // holds as a whole, one contact over its own μ: not the body sliding away
+  strained: { word: "Over μ", cls: "border-dashed border-caution text-caution" },
   lifts: { word: "Lifts", cls: "border-dashed border-caution text-caution" },
   slips: { word: "Slips", cls: "border-dashed border-caution text-caution" },
   tips: { word: "Tips", cls: "border-caution bg-caution text-white" },
@@ -30,11 +32,14 @@ function MoreErrors({ words }: { words: string[] }) {
   );
 }
 
+/** A body that holds but falls short of a required factor of safety: the badge says so, not "Holds". */
+const SHORT = { word: "FoS short", cls: "border-caution bg-caution text-white" };
+
 /** The body's factors of safety as drawn, under its status: in the caution colour when one falls short. */
 function StabilityLine({ sentence }: { sentence: { text: string; pass: boolean } | null }) {
   if (!sentence) return null;
   return (
-    <p className={`ml-[3.6rem] text-[12px] leading-snug ${sentence.pass ? "text-ink-soft" : "font-semibold text-caution"}`} data-testid="stability-as-drawn" data-pass={sentence.pass}>
+    <p className={`text-[12px] leading-snug ${sentence.pass ? "text-ink-soft" : "font-semibold text-caution"}`} data-testid="stability-as-drawn" data-pass={sentence.pass}>
       {sentence.text}.
     </p>
   );
@@ -70,20 +75,30 @@ export function StatusBanner() {
           <MoreErrors words={more} />
         </p>
       )}
-      {sentences.map((s) => (
-        <div key={s.body} className={stale ? "opacity-60" : ""}>
-          <p className="flex items-start gap-2 text-[14px] font-semibold leading-snug text-ink" data-testid="status-sentence" data-tone={s.tone}>
-            <span className={`mt-[1px] shrink-0 rounded border px-1.5 py-[1px] text-[10.5px] font-semibold uppercase tracking-wider ${BADGE[s.tone].cls}`}>{BADGE[s.tone].word}</span>
-            <span>{s.headline}</span>
-          </p>
-          {s.details.map((d) => (
-            <p key={d} className="ml-[3.6rem] text-[12px] leading-snug text-ink-soft">
-              {d}
+      {sentences.map((s) => {
+        const factors = numeric ? stabilitySentence(numeric, s.body, stability?.[s.body]) : null;
+        const short = factors?.pass === false && (s.tone === "holds" || s.tone === "strained");
+        const badge = short ? SHORT : BADGE[s.tone];
+        return (
+          <div key={s.body} className={`grid grid-cols-[auto_minmax(0,1fr)] gap-x-2 ${stale ? "opacity-60" : ""}`}>
+            {/* the badge and the headline read as one sentence; the details line up under the headline */}
+            <p className="contents text-[14px] font-semibold leading-snug text-ink" data-testid="status-sentence" data-tone={s.tone} data-short={short || undefined}>
+              <span className={`mt-[2px] h-fit self-start whitespace-nowrap rounded border px-1.5 py-[1px] text-[10.5px] font-semibold uppercase tracking-wider ${badge.cls}`} data-testid="status-badge">
+                {badge.word}
+              </span>
+              <span className="text-[14px] font-semibold leading-snug text-ink">{s.headline}</span>
             </p>
-          ))}
-          <StabilityLine sentence={numeric ? stabilitySentence(numeric, s.body, stability?.[s.body]) : null} />
-        </div>
-      ))}
+            <div className="col-start-2">
+              {s.details.map((d) => (
+                <p key={d} className="text-[12px] leading-snug text-ink-soft">
+                  {d}
+                </p>
+              ))}
+              <StabilityLine sentence={factors} />
+            </div>
+          </div>
+        );
+      })}
     </div>
   );
 }

@@ -7,7 +7,8 @@ import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
 import type { BodyStability } from "@/solver/stability";
 
-export type Tone = "holds" | "lifts" | "slips" | "tips" | "unrestrained";
+/** "strained": the body holds as a whole, but one contact needs more friction than its own μ gives */
+export type Tone = "holds" | "strained" | "lifts" | "slips" | "tips" | "unrestrained";
 
 export interface StatusSentence {
   body: string;
@@ -75,7 +76,7 @@ function contactSlip(slipping: Array<[Support, Reaction]>): string {
  * Slip leads: the body as a whole first (more friction needed than all its friction contacts give:
  * it slides, whatever the share between them), then a contact over its own μ.
  */
-function slipSentence(c: Context): { headline: string; details: string[] } | null {
+function slipSentence(c: Context): { headline: string; details: string[]; strained?: boolean } | null {
   const ids = new Set(c.supports.map((s) => s.id));
   const slips = c.result.warnings.filter((w) => w.code === "SLIP" && w.ids.some((i) => ids.has(i)));
   if (!slips.length) return null;
@@ -90,11 +91,17 @@ function slipSentence(c: Context): { headline: string; details: string[] } | nul
       details: slipping.length ? [`${contactSlip(slipping)}.`] : [],
     };
   }
-  // one contact over its own μ while the body as a whole has friction to spare: the headline says
-  // both, so nobody reads "slips" as the body sliding away
+  // one contact over its own μ while the body as a whole has friction to spare: the body holds,
+  // and the headline leads with that, so nobody reads the contact's slip as the body sliding away
   if (slipping.length && f && sumN > 0) {
-    const [needs, has] = [ratio(f.needed), ratio(f.available)];
-    return { headline: `${contactSlip(slipping)}; as a whole it has friction to spare (needs ${needs}, has ${has})`, details: [] };
+    const [s, r] = slipping[0];
+    const [needs, has] = ratios(r.friction!.needed, r.friction!.mu);
+    const more = slipping.length > 1 ? ` (and ${list(slipping.slice(1).map(([x]) => supportName(x)))})` : "";
+    return {
+      strained: true,
+      headline: `Holds as a whole, with friction to spare (needs μ = ${ratio(f.needed)}, has ${ratio(f.available)}) — but ${supportName(s)} alone needs ${needs}, more than its μ = ${has}${more}`,
+      details: [],
+    };
   }
   if (slipping.length) return { headline: contactSlip(slipping), details: [] };
   return { headline: "Slips as a whole — the friction contacts cannot hold it", details: [] };
@@ -172,8 +179,8 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
       headline = body.freeMotion ? `Unrestrained — ${describeFreeMotion(body.freeMotion, supports)}; add a support or a tie` : "Unrestrained — add a support or a tie";
       if (!supports.length) headline = "Unrestrained — the body has no supports yet; add a support or a tie";
     } else if (body.status === "tips") headline = tipSentence(c);
-    else if (slip) {
-      tone = "slips";
+    else if (slip && !(slip.strained && body.status === "lifts")) {
+      tone = slip.strained ? "strained" : "slips";
       headline = slip.headline;
     } else if (body.status === "lifts") headline = liftSentence(c);
     else headline = holdSentence(c);
@@ -188,7 +195,9 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
         details.push(`${cap(list(also))} ${also.length === 1 ? "lifts" : "lift"} off as well as it turns (below zero in the Margin column); the forces shown are those that would hold it with every support able to pull.`);
     }
     if (slip) details.push(...slip.details);
-    if (slip && body.status === "lifts") details.push(`${liftSentence(c)}.`);
+    // a lift-off leads over one contact being over its μ: the contact's words follow it
+    if (slip?.strained && body.status === "lifts") details.push(`${slip.headline.replace(/^Holds as a whole/, "As a whole it holds")}.`);
+    else if (slip && body.status === "lifts") details.push(`${liftSentence(c)}.`);
     const shared = slip ? sharedFrictionNote(c) : null;
     if (shared) details.push(shared);
     if (body.determinacy.kind === "indeterminate")
@@ -238,7 +247,9 @@ export function stabilitySentence(sketch: Sketch, body: string, st: BodyStabilit
     const about = "about" in c ? ` about ${names.get(c.about) ?? c.about}` : "";
     const whole = "wholeBody" in c && c.wholeBody ? " (as a whole)" : "";
     const f = factorText(c.factor, c.required);
-    if (c.pass) bits.push(`against ${against}${about}${whole} ${f} (${c.required} required)`);
+    // no load tends to turn or slide it: no ratio to write, "∞" tells nobody that
+    if (!Number.isFinite(c.factor)) bits.push(`against ${against}${about}${whole}: no load tends to ${against === "sliding" ? "slide" : "tip"} it`);
+    else if (c.pass) bits.push(`against ${against}${about}${whole} ${f} (${c.required} required)`);
     else {
       pass = false;
       bits.push(`against ${against}${about}${whole} ${f}, below the required ${c.required}`);

@@ -154,6 +154,7 @@ describe("results panel", () => {
     const dir = cells("angle").map(num);
     expect(screen.getByRole("caption")).toHaveTextContent("Forces on the body from each support");
     // the margin is said to be lift-off, not friction (a slipping contact still has a margin)
+    expect(screen.getByRole("caption")).toHaveTextContent("t: the friction force along the contact's surface, positive 90° counter-clockwise from its normal n (a contact facing up: positive toward −x).");
     expect(screen.getByRole("caption")).toHaveTextContent("Margin: how far a contact's normal force (a tie's tension) is from zero, where it lifts off");
     await user.click(within(screen.getByTestId("sense")).getByRole("radio", { name: "Load on the support" }));
     for (const c of cols) cells(c).map(num).forEach((v, i) => expect(v === null ? null : v + 0).toBe(before[c][i] === null ? null : -before[c][i]! + 0));
