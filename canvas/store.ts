@@ -1,6 +1,7 @@
 // The editor's store (zustand + immer): the sketch exactly in the file format, the selection,
 // the undo history and the view. Components read it through narrow selectors and change the
 // sketch only through `apply` (one command) or a gesture (a drag: many frames, one undo step).
+import equal from "fast-deep-equal";
 import { createStore, type StoreApi } from "zustand/vanilla";
 import { immer } from "zustand/middleware/immer";
 import type { SketchFile } from "@/solver/schema";
@@ -16,7 +17,8 @@ export interface HistoryEntry {
   after: SketchFile;
   selectionBefore: string[];
   selectionAfter: string[];
-  /** consecutive applies with the same key (typing in one field) merge into this entry */
+  /** consecutive applies with the same key (typing in one field) merge into this entry; an entry
+   *  they bring back to where it began is dropped (a visit that changed nothing is no undo step) */
   coalesce?: string;
   /** the whole sketch was replaced: undo and redo ask for a fit to view too */
   replacesSketch?: boolean;
@@ -128,6 +130,9 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
         const selectionBefore = get().selection;
         const selectionAfter = c.def.select?.(before, after, c.args, selectionBefore) ?? selectionBefore.filter((id) => findElement(after, id));
         const label = c.def.label(c.args, before);
+        // the edit under way ends where it began (typed, then taken back): it leaves no undo step
+        const last = get().past[get().past.length - 1];
+        const backToStart = !!opts?.coalesce && last?.coalesce === opts.coalesce && get().future.length === 0 && equal(last.before, after);
         set((d) => {
           d.sketch = after;
           d.selection = selectionAfter;
@@ -138,6 +143,10 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           if (d.notice?.startsWith("Undid: ") || d.notice?.startsWith("Redid: ")) d.notice = null;
           const top = d.past[d.past.length - 1];
           if (opts?.coalesce && top && top.coalesce === opts.coalesce && d.future.length === 0) {
+            if (backToStart) {
+              d.past.pop();
+              return;
+            }
             top.after = after;
             top.selectionAfter = selectionAfter;
             return;

@@ -168,3 +168,42 @@ export function explainEvaluation(root: MathNode, scope: Scope): string {
   if (!f) return `"${text(root)}" does not give a real, finite number`;
   return explainFailure(f);
 }
+
+/**
+ * The units a field of each kind is typed in, SI first, then US customary: the units an unknown
+ * name's error suggests for that field. Each is written as an expression reads it ("tonne", not
+ * "t", which stays free for parameters).
+ */
+export const UNITS_TO_SUGGEST: Readonly<Record<string, readonly string[]>> = {
+  length: ["m", "mm", "ft", "in"],
+  smallLength: ["mm", "in"],
+  angle: ["deg", "rad"],
+  mass: ["kg", "tonne", "lb"],
+  force: ["N", "kN", "lbf", "kip"],
+  moment: ["N m", "kN m", "lbf ft"],
+  lineLoad: ["kN/m", "lbf/ft"],
+  massFlow: ["kg/s", "lb/s"],
+  velocity: ["m/s", "ft/s"],
+  pressure: ["kPa", "bar", "psi"],
+  area: ["m^2", "mm^2", "in^2"],
+  density: ["kg/m^3", "lb/ft^3"],
+  volumeFlow: ["lpm", "m^3/s", "gpm"],
+  stiffness: ["kN/m", "lbf/in"],
+  rotationalStiffness: ["kN m/rad", "lbf ft/rad"],
+  acceleration: ["m/s^2", "ft/s^2"],
+};
+
+/** The suggestion an unknown name's error carries when nothing says what the field holds. */
+export const ANY_UNIT_SUGGESTION = "use a unit such as m, kN, psi, deg";
+
+/**
+ * An error's words for a field of this kind: the units suggested for an unknown name are the
+ * field's own ("kg, tonne, lb" in a mass field, "kPa, bar, psi" in a pressure field), and a field
+ * that takes a plain number says so. Other messages, and a kind not known, are left as they are.
+ */
+export function suggestUnitsFor(message: string, kind: string | null | undefined): string {
+  if (!kind || !message.includes(ANY_UNIT_SUGGESTION)) return message;
+  if (kind === "ratio") return message.replaceAll(ANY_UNIT_SUGGESTION, "type a plain number (this field takes no unit)");
+  const units = UNITS_TO_SUGGEST[kind];
+  return units ? message.replaceAll(ANY_UNIT_SUGGESTION, `use a unit such as ${units.join(", ")}`) : message;
+}

@@ -1,5 +1,6 @@
 // Editing values: one field of an element, the sketch's own fields, motion and parameters.
-import type { Numeric, SketchFile } from "@/solver/schema";
+import { formatPath, type Numeric, type SketchFile } from "@/solver/schema";
+import { parseSketch } from "@/solver/parse";
 import { findElement, type AnyElement, type Group } from "../model/elements";
 import { roundTo } from "../model/numeric";
 import { PORT_PLACEHOLDER } from "../model/factory";
@@ -177,6 +178,102 @@ export const renameParameter = defineCommand<{ from: string; to: string }>({
     return { ...sketch, ...(rewrite(rest) as object), parameters: Object.fromEntries(entries) as SketchFile["parameters"] };
   },
 });
+
+/** One numeric field, found again in any sketch of the history (an element's by its id). */
+export interface FieldAccess {
+  /** the field's value in a sketch, or null when its element is not in that sketch */
+  read: (sketch: SketchFile) => { value: Numeric | undefined } | null;
+  /** the sketch with the field set to a value (deleted when undefined) */
+  write: (sketch: SketchFile, value: Numeric | undefined) => SketchFile;
+  /** the field's path as the solver names it in a sketch ("bodies[0].mass"), or null */
+  path: (sketch: SketchFile) => string | null;
+}
+
+const numericAt = (x: unknown): { value: Numeric | undefined } | null =>
+  x === undefined || typeof x === "number" || typeof x === "string" ? { value: x as Numeric | undefined } : null;
+
+/** An element's field: `path` inside the element ("mass", ["at", 0], ["outline", 2, 1]). */
+export function elementField(id: string, field: FieldPath): FieldAccess {
+  const path = pathOf(field);
+  return {
+    read: (sketch) => {
+      const l = findElement(sketch, id);
+      if (!l) return null;
+      let t: unknown = l.el;
+      for (const k of path) t = t === undefined || t === null ? undefined : (t as Record<string | number, unknown>)[k];
+      return numericAt(t);
+    },
+    write: (sketch, value) => {
+      const l = findElement(sketch, id);
+      if (!l) return sketch;
+      return edit(sketch, (d) => {
+        let t = (d[l.group] as AnyElement[])[l.index] as unknown as Record<string | number, unknown>;
+        for (const k of path.slice(0, -1)) {
+          if (t[k] === undefined || t[k] === null) return;
+          t = t[k] as Record<string | number, unknown>;
+        }
+        const last = path[path.length - 1];
+        if (value === undefined) delete t[last];
+        else t[last] = value;
+      });
+    },
+    path: (sketch) => {
+      const l = findElement(sketch, id);
+      return l ? formatPath([l.group, l.index, ...path]) : null;
+    },
+  };
+}
+
+/** A field of the sketch itself (gravity, its direction) or of its motion ("motion.ax"). */
+export function sketchField(field: "gravity" | "gravityAngle" | "motion.ax" | "motion.ay"): FieldAccess {
+  const motion = field.startsWith("motion.") ? (field.slice(7) as "ax" | "ay") : null;
+  return {
+    read: (sketch) => numericAt(motion ? sketch.motion?.[motion] : sketch[field as "gravity" | "gravityAngle"]),
+    write: (sketch, value) =>
+      motion
+        ? setMotion.run(sketch, { motion: { ...(sketch.motion ?? {}), [motion]: value } })
+        : setSketchField.run(sketch, { field: field as "gravity" | "gravityAngle", value }),
+    path: () => field,
+  };
+}
+
+/** At most this many different values of a field are tried, newest first. */
+const LAST_GOOD_TRIES = 50;
+
+/**
+ * The field's last good value: the newest value it held that evaluates with no error at the field
+ * when put in the sketch as it is now (so the parameters it reads still exist), walking back
+ * through the undo history. `visit` (the coalesce key of the edit under way) leaves out what that
+ * edit stored: Escape and a refused blank go back to before it. Null when no value was good.
+ */
+export function lastGoodValue(
+  history: { sketch: SketchFile; past: ReadonlyArray<{ before: SketchFile; coalesce?: string }> },
+  field: FieldAccess,
+  visit?: string,
+): { value: Numeric | undefined } | null {
+  const { sketch, past } = history;
+  const path = field.path(sketch);
+  if (!path) return null;
+  let i = past.length - 1;
+  const earlier: SketchFile[] = [];
+  if (visit !== undefined && i >= 0 && past[i].coalesce === visit) earlier.push(past[i--].before);
+  else earlier.push(sketch);
+  for (; i >= 0; i--) earlier.push(past[i].before);
+  const tried = new Set<string>();
+  for (const s of earlier) {
+    const got = field.read(s);
+    if (!got) continue;
+    const key = got.value === undefined ? "" : `${typeof got.value}:${got.value}`;
+    if (tried.has(key)) continue;
+    if (tried.size >= LAST_GOOD_TRIES) break;
+    tried.add(key);
+    const withIt = field.write(sketch, got.value);
+    if (field.read(withIt)?.value !== got.value) continue;
+    const parsed = parseSketch(withIt);
+    if (parsed.ok || !parsed.errors.some((e) => e.path === path)) return got;
+  }
+  return null;
+}
 
 export const replaceSketch = defineCommand<{ sketch: SketchFile; label: string }>({
   name: "replaceSketch",

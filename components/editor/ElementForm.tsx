@@ -27,7 +27,7 @@ import {
 } from "./fieldDefs";
 import { NumericField } from "./NumericField";
 import { TextField } from "./TextField";
-import { useCommit } from "./useCommit";
+import { useCommit, useElementLastGood } from "./useCommit";
 import { BUTTON, ICON_BUTTON, INPUT } from "./ui";
 
 type Commit = ReturnType<typeof useCommit>;
@@ -44,6 +44,7 @@ interface RowExtras {
 
 function NumberRow({ id, def, value, commit, needed, refuseBlank, report }: { id: string; def: NumberFieldDef; value: Numeric | undefined; commit: Commit } & RowExtras) {
   const key = def.key;
+  const lastGood = useElementLastGood(id);
   const onProblem = useCallback((problem: string | null) => report?.(key, problem), [report, key]);
   return (
     <NumericField
@@ -58,6 +59,7 @@ function NumberRow({ id, def, value, commit, needed, refuseBlank, report }: { id
       testId={`field-${def.key}`}
       onProblem={report ? onProblem : undefined}
       onCommit={(v, c) => (v === undefined && refuseBlank?.(def.key)) || commit([def.key], v, c)}
+      lastGood={lastGood([def.key])}
     />
   );
 }
@@ -65,6 +67,7 @@ function NumberRow({ id, def, value, commit, needed, refuseBlank, report }: { id
 function PointRow({ id, def, value, commit }: { id: string; def: PointFieldDef; value: Numeric[] | undefined; commit: Commit }) {
   // a plain number is metres whatever the units shown; in US units the echo under each field is in ft
   const units = useEditor((s) => s.units);
+  const lastGood = useElementLastGood(id);
   if (!value) return null;
   return (
     <fieldset>
@@ -82,6 +85,7 @@ function PointRow({ id, def, value, commit }: { id: string; def: PointFieldDef; 
             display="length"
             testId={`field-${def.key}-${i ? "y" : "x"}`}
             onCommit={(v, c) => commit([def.key, i], v, c)}
+            lastGood={lastGood([def.key, i])}
           />
         ))}
       </div>
@@ -125,6 +129,7 @@ function CentreOfGravity({ id, body }: { id: string; body: BodyEl }) {
 function Corners({ id, body }: { id: string; body: BodyEl }) {
   const { editor } = useStores();
   const commit = useCommit(id);
+  const lastGood = useElementLastGood(id);
   const apply = (c: Command<unknown>) => editor.getState().apply(c);
   return (
     <fieldset>
@@ -134,7 +139,7 @@ function Corners({ id, body }: { id: string; body: BodyEl }) {
           <li key={i} className="flex items-start gap-1.5">
             <span className="num mt-1.5 w-4 text-right text-[11px] text-ink-faint">{i + 1}</span>
             {[0, 1].map((k) => (
-              <NumericField key={k} compact valueKey={`${id}.outline[${i}][${k}]`} label={`Corner ${i + 1} ${k ? "y" : "x"}`} value={p[k]} display="length" onCommit={(v, c) => commit(["outline", i, k], v, c)} />
+              <NumericField key={k} compact valueKey={`${id}.outline[${i}][${k}]`} label={`Corner ${i + 1} ${k ? "y" : "x"}`} value={p[k]} display="length" onCommit={(v, c) => commit(["outline", i, k], v, c)} lastGood={lastGood(["outline", i, k])} />
             ))}
             <button type="button" className={`${ICON_BUTTON} mt-0`} aria-label={`Remove corner ${i + 1}`} disabled={body.outline.length <= 3} onClick={() => apply(removeCorner({ id, corner: i }) as Command<unknown>)}>
               ×

@@ -1,12 +1,17 @@
 "use client";
 // One numeric field: takes a number or an expression with units ("350 psi", "2*r", "theta + 5 deg"),
 // stores it as typed, and shows under it the value the solver's parser found — or its error.
+// Nothing is lost: text that does not evaluate is stored as typed and marked; what the file cannot
+// hold (a blank where a value is required) is not stored, and the sketch goes back to the field's
+// last good value; Escape goes back to that value too (see "Editing a field" in DEVELOPERS.md).
 import { useEffect, useId, useRef, useState } from "react";
 import type { Numeric } from "@/solver/schema";
 import { convert, formatNumber, formatQuantity } from "@/solver/units";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { numericText, toNumeric } from "@/canvas/model/numeric";
-import type { Display } from "./fieldDefs";
+import { suggestUnitsFor } from "@/solver/expressionErrors";
+import { exampleIn, type Display, type Example } from "./fieldDefs";
+import type { LastGood } from "./useCommit";
 import { INPUT } from "./ui";
 
 let session = 0;
@@ -21,12 +26,17 @@ export interface NumericFieldProps {
   value: Numeric | undefined;
   display: Display;
   optional?: boolean;
-  example?: string;
+  /** the placeholder's example, in the units on screen */
+  example?: Example;
   hint?: string;
   /** said at the field, marked as an error, while it is blank: what the element lacks without it */
   needed?: string;
   /** store the typed value; returns an error to show (and nothing is stored) or null */
   onCommit: (value: Numeric | undefined, coalesce: string) => string | null;
+  /** the field's last good value from before the edit `visit` (a coalesce key), or null: what
+   *  Escape and a refused blank go back to. Without it they go back to the value the field had
+   *  when it was entered. */
+  lastGood?: LastGood;
   /** the field's own refusal (a value or a blank it would not store), or null: for the form around it */
   onProblem?: (problem: string | null) => void;
   /** visually compact (the x / y pair of a point) */
@@ -52,7 +62,10 @@ export function storedText(v: Numeric | undefined): string {
   return String(n).replace("e+", "e");
 }
 
-export function NumericField({ valueKey, label, value, display, optional, example, hint, needed, onCommit, onProblem, compact, testId }: NumericFieldProps) {
+/** What a field that may not be blank says while it is: "Mass: required." */
+export const requiredWords = (label: string) => `${label}: required.`;
+
+export function NumericField({ valueKey, label, value, display, optional, example, hint, needed, onCommit, lastGood, onProblem, compact, testId }: NumericFieldProps) {
   const id = useId();
   const [draft, setDraft] = useState<string | null>(null);
   const [localError, setLocalError] = useState<string | null>(null);
@@ -65,12 +78,15 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   // that a plain number was typed here with US units on screen (said on after the field is left)
   const [typedPlain, setTypedPlain] = useState(false);
   const sessionRef = useRef(0);
-  // the value when the field was entered: a refused blank puts it back, so nothing typed on the way is kept
+  // the value when the field was entered: what Escape and a refused blank go back to when no
+  // history says what the last good value was
   const startRef = useRef<{ value: Numeric | undefined } | null>(null);
   const escapedRef = useRef(false);
   const units = useEditor((s) => s.units);
   const evaluated = useAnalysis((s) => s.fieldValues.values.get(valueKey));
-  const evalError = useAnalysis((s) => s.fieldValues.errors.get(valueKey));
+  const evalErrorRaw = useAnalysis((s) => s.fieldValues.errors.get(valueKey));
+  // an unknown name's error suggests this field's units (kg, tonne, lb for a mass)
+  const evalError = evalErrorRaw === undefined ? undefined : suggestUnitsFor(evalErrorRaw, display);
   const refusedBlank = draft === null && left !== null && left.over === value ? left : null;
   const shown = typedText && typedText.value === value ? typedText.text : storedText(value);
   const text = draft ?? (refusedBlank ? "" : shown);
@@ -90,17 +106,27 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   const keeps = (why: string, kept: Numeric | undefined) =>
     kept === undefined ? why : `${why} The sketch keeps ${typeof kept === "number" ? formatDisplay(kept, display, units) : kept} until you give one.`;
 
+  const visit = () => `${valueKey}#${sessionRef.current}`;
+  /** The value to go back to: the last good one from before this edit, else the one it started from. */
+  const goBackTo = (): Numeric | undefined => {
+    const good = lastGood?.(visit());
+    if (good) return good.value;
+    return startRef.current ? startRef.current.value : value;
+  };
+
   const change = (t: string) => {
     setDraft(t);
     const v = toNumeric(t);
-    const coalesce = `${valueKey}#${sessionRef.current}`;
+    const coalesce = visit();
     if (v === undefined) {
-      const refused = optional ? onCommit(undefined, coalesce) : `${label} is needed.`;
+      const refused = optional ? onCommit(undefined, coalesce) : requiredWords(label);
       if (refused) {
-        // the value from before this edit stays in the sketch, not what was on the way to blank
-        const before = startRef.current ? startRef.current.value : value;
-        if (before !== undefined && before !== value) onCommit(before, coalesce);
-        setLocalError(keeps(refused, before));
+        // the sketch cannot hold the blank: it goes back to the field's last good value (not what
+        // was typed on the way to blank, nor an earlier bad entry, which undo still reaches)
+        const back = goBackTo();
+        const kept = back === undefined ? value : back;
+        if (kept !== undefined && kept !== value) onCommit(kept, coalesce);
+        setLocalError(keeps(refused, kept));
         return;
       }
       setLocalError(null);
@@ -138,7 +164,7 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
           id={id}
           className={`${INPUT} ${compact ? "pl-5" : ""}`}
           value={text}
-          placeholder={example ? `e.g. ${example}` : undefined}
+          placeholder={example ? `e.g. ${exampleIn(example, units)}` : undefined}
           spellCheck={false}
           autoComplete="off"
           aria-invalid={!!error}
@@ -163,7 +189,13 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
           }}
           onChange={(e) => change(e.target.value)}
           onKeyDown={(e) => {
-            if (e.key === "Escape") escapedRef.current = true;
+            if (e.key === "Escape") {
+              // back to the last good value from before this edit (a bad entry stays in the history)
+              escapedRef.current = true;
+              const back = goBackTo();
+              if (back !== value) onCommit(back, visit());
+              setTypedPlain(false);
+            }
             if (e.key === "Enter" || e.key === "Escape") (e.target as HTMLInputElement).blur();
           }}
         />

@@ -116,6 +116,7 @@ export function ParametersTable() {
   const names = entries.map(([n]) => n);
   const [newName, setNewName] = useState("");
   const [newExpr, setNewExpr] = useState("");
+  const units = useEditor((s) => s.units);
   const problem = newName ? nameProblem(newName, names) : null;
   const add = () => {
     const v = toNumeric(newExpr);
@@ -164,7 +165,7 @@ export function ParametersTable() {
           <input aria-label="New parameter name" placeholder="name" className={INPUT} value={newName} onChange={(e) => setNewName(e.target.value)} aria-invalid={!!problem} />
           {problem && <p className="mt-0.5 text-[11px] text-caution">⚠ {problem}</p>}
         </div>
-        <input aria-label="New parameter expression" placeholder="e.g. 350 psi" className={`${INPUT} w-[40%]`} value={newExpr} onChange={(e) => setNewExpr(e.target.value)} spellCheck={false} />
+        <input aria-label="New parameter expression" placeholder={units === "US" ? "e.g. 50 psi" : "e.g. 350 kPa"} className={`${INPUT} w-[40%]`} value={newExpr} onChange={(e) => setNewExpr(e.target.value)} spellCheck={false} />
         <button type="submit" className={BUTTON} disabled={!newName || !!problem || !newExpr.trim()}>
           Add
         </button>

@@ -2,7 +2,7 @@
 // Properties of the sketch itself (nothing selected): title, notes, gravity and motion.
 import type { Numeric } from "@/solver/schema";
 import { useEditor, useStores } from "@/canvas/context";
-import { setMotion, setSketchField } from "@/canvas/commands/fields";
+import { lastGoodValue, setMotion, setSketchField, sketchField } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
 import { NumericField } from "./NumericField";
 import { TextField } from "./TextField";
@@ -13,7 +13,7 @@ const GRAVITY_FIELDS = [
     field: "gravity",
     label: "Gravity",
     display: "acceleration",
-    example: "9.80665",
+    example: { SI: "9.80665 m/s^2", US: "32.174 ft/s^2" },
     hint: "Blank: standard gravity 9.807 m/s², acting in −y. 0 turns weights off (a plan view).",
     testId: "field-gravity",
   },
@@ -36,6 +36,8 @@ export function SketchForm() {
   const motion = useEditor((s) => s.sketch.motion);
   const readOnly = useEditor((s) => s.readOnly);
   const apply = (c: Command<unknown>, coalesce?: string) => editor.getState().apply(c, coalesce ? { coalesce } : undefined);
+  /** Escape's value for a field of the sketch: its last good one from before the edit */
+  const lastGood = (field: Parameters<typeof sketchField>[0]) => (visit: string) => lastGoodValue(editor.getState(), sketchField(field), visit);
   const setMotionField = (k: "ax" | "ay" | "freeX", v: Numeric | boolean | undefined, c?: string) => {
     apply(setMotion({ motion: { ...(motion ?? {}), [k]: v } }) as Command<unknown>, c);
     return null;
@@ -57,6 +59,7 @@ export function SketchForm() {
           example={f.example}
           hint={f.hint}
           testId={f.testId}
+          lastGood={lastGood(f.field)}
           onCommit={(v, c) => {
             apply(setSketchField({ field: f.field, value: v }) as Command<unknown>, c);
             return null;
@@ -68,10 +71,10 @@ export function SketchForm() {
         <p className="mb-1.5 text-[11.5px] leading-snug text-ink-faint">A prescribed acceleration (the inertial force −m·a acts at the centre of gravity), or free to move in x.</p>
         <div className="flex gap-2">
           <div className="flex-1">
-            <NumericField valueKey="motion.ax" label="ax" value={motion?.ax} display="acceleration" optional example="0.5 m/s^2" onCommit={(v, c) => setMotionField("ax", v, c)} />
+            <NumericField valueKey="motion.ax" label="ax" value={motion?.ax} display="acceleration" optional example={{ SI: "0.5 m/s^2", US: "1.6 ft/s^2" }} lastGood={lastGood("motion.ax")} onCommit={(v, c) => setMotionField("ax", v, c)} />
           </div>
           <div className="flex-1">
-            <NumericField valueKey="motion.ay" label="ay" value={motion?.ay} display="acceleration" optional example="0" onCommit={(v, c) => setMotionField("ay", v, c)} />
+            <NumericField valueKey="motion.ay" label="ay" value={motion?.ay} display="acceleration" optional example="0" lastGood={lastGood("motion.ay")} onCommit={(v, c) => setMotionField("ay", v, c)} />
           </div>
         </div>
         <label className="mt-1 flex items-center gap-2 text-[12px] text-ink-soft">

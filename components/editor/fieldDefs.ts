@@ -1,9 +1,16 @@
 // The properties form of each element kind: which fields, in what words, and in what quantity
 // their value is displayed. Field names are the file format's.
 import type { ElementKind } from "@/canvas/model/elements";
-import type { Quantity } from "@/solver/units";
+import type { Quantity, UnitSystem } from "@/solver/units";
 
 export type Display = Quantity | "rotationalStiffness";
+
+/** A placeholder's example: the same text in both unit systems (an angle, a plain number), or
+ *  one per system, so the field suggests the units on screen ("31 m/s" in SI, "100 ft/s" in US). */
+export type Example = string | Readonly<Record<UnitSystem, string>>;
+
+/** The example to show with these units on screen. */
+export const exampleIn = (example: Example, units: UnitSystem): string => (typeof example === "string" ? example : example[units]);
 
 export interface NumberFieldDef {
   key: string;
@@ -11,8 +18,8 @@ export interface NumberFieldDef {
   /** what the value is, for showing it with a unit */
   display: Display;
   optional?: boolean;
-  /** placeholder text: an example of what to type */
-  example?: string;
+  /** placeholder text: an example of what to type, in the units on screen */
+  example?: Example;
   hint?: string;
   advanced?: boolean;
 }
@@ -28,12 +35,12 @@ export interface PointFieldDef {
 export type FieldDef = NumberFieldDef | PointFieldDef;
 
 const at: PointFieldDef = { key: "at", label: "Position", point: true };
-const stiffness: NumberFieldDef = { key: "stiffness", label: "Stiffness", display: "stiffness", optional: true, example: "200 kN/m", hint: "Only matters when the supports are statically indeterminate.", advanced: true };
+const stiffness: NumberFieldDef = { key: "stiffness", label: "Stiffness", display: "stiffness", optional: true, example: { SI: "200 kN/m", US: "1100 lbf/in" }, hint: "Only matters when the supports are statically indeterminate.", advanced: true };
 const angle = (label: string, hint: string): NumberFieldDef => ({ key: "angle", label, display: "angle", example: "90 deg", hint });
 
 export const FORM: Record<ElementKind, FieldDef[]> = {
   body: [
-    { key: "mass", label: "Mass", display: "mass", example: "850 kg", hint: "Everything inside the control volume, the fluid in it included." },
+    { key: "mass", label: "Mass", display: "mass", example: { SI: "850 kg", US: "1900 lb" }, hint: "Everything inside the control volume, the fluid in it included." },
     { key: "cg", label: "Centre of gravity", point: true, optional: true, hint: "Blank: the outline's centroid." },
   ],
   pin: [at, stiffness],
@@ -44,21 +51,21 @@ export const FORM: Record<ElementKind, FieldDef[]> = {
     { key: "mu", label: "Friction μ", display: "ratio", optional: true, example: "0.3", hint: "Blank: no friction." },
     stiffness,
   ],
-  fixed: [at, stiffness, { key: "rotationalStiffness", label: "Rotational stiffness", display: "rotationalStiffness", optional: true, example: "50 kN m", advanced: true }],
+  fixed: [at, stiffness, { key: "rotationalStiffness", label: "Rotational stiffness", display: "rotationalStiffness", optional: true, example: { SI: "50 kN m", US: "37 kip ft" }, advanced: true }],
   tie: [at, angle("Toward anchor", "The direction from the body to the anchor; a tie only pulls."), stiffness],
   force: [at],
-  couple: [{ key: "value", label: "Moment", display: "moment", example: "1.2 kN m", hint: "Counter-clockwise positive." }, { key: "at", label: "Drawn at", point: true, optional: true }],
+  couple: [{ key: "value", label: "Moment", display: "moment", example: { SI: "1.2 kN m", US: "900 lbf ft" }, hint: "Counter-clockwise positive." }, { key: "at", label: "Drawn at", point: true, optional: true }],
   distributed: [
     { key: "from", label: "From", point: true },
     { key: "to", label: "To", point: true },
-    { key: "w1", label: "w₁ at from", display: "lineLoad", example: "2 kN/m" },
-    { key: "w2", label: "w₂ at to", display: "lineLoad", example: "2 kN/m" },
+    { key: "w1", label: "w₁ at from", display: "lineLoad", example: { SI: "2 kN/m", US: "140 lbf/ft" } },
+    { key: "w2", label: "w₂ at to", display: "lineLoad", example: { SI: "2 kN/m", US: "140 lbf/ft" } },
     { key: "angle", label: "Direction", display: "angle", optional: true, example: "-90 deg", hint: "Blank: straight down (−90°)." },
   ],
   inlet: portFields("into the body"),
   outlet: portFields("out of the body"),
   massSource: [
-    { key: "massFlow", label: "Mass flow ṁ", display: "massFlow", example: "2 kg/s" },
+    { key: "massFlow", label: "Mass flow ṁ", display: "massFlow", example: { SI: "2 kg/s", US: "4.4 lb/s" } },
     { key: "at", label: "Drawn at", point: true, optional: true },
   ],
 };
@@ -67,12 +74,12 @@ function portFields(way: string): FieldDef[] {
   return [
     at,
     { key: "angle", label: "Flow direction", display: "angle", example: "0 deg", hint: `Direction of the fluid velocity ${way}, degrees from +x.` },
-    { key: "massFlow", label: "Mass flow ṁ", display: "massFlow", optional: true, example: "14 kg/s" },
-    { key: "velocity", label: "Velocity V", display: "velocity", optional: true, example: "31 m/s" },
-    { key: "pressure", label: "Gauge pressure", display: "pressure", optional: true, example: "350 psi", hint: "Needs the area; pushes inward at inlets and outlets alike." },
-    { key: "area", label: "Area", display: "area", optional: true, example: "pi/4 * (50 mm)^2" },
-    { key: "density", label: "Density ρ", display: "density", optional: true, example: "998 kg/m^3" },
-    { key: "volumeFlow", label: "Volume flow", display: "volumeFlow", optional: true, example: "600 lpm" },
+    { key: "massFlow", label: "Mass flow ṁ", display: "massFlow", optional: true, example: { SI: "14 kg/s", US: "30 lb/s" } },
+    { key: "velocity", label: "Velocity V", display: "velocity", optional: true, example: { SI: "31 m/s", US: "100 ft/s" } },
+    { key: "pressure", label: "Gauge pressure", display: "pressure", optional: true, example: { SI: "350 kPa", US: "50 psi" }, hint: "Needs the area; pushes inward at inlets and outlets alike." },
+    { key: "area", label: "Area", display: "area", optional: true, example: { SI: "pi/4 * (50 mm)^2", US: "pi/4 * (2 in)^2" } },
+    { key: "density", label: "Density ρ", display: "density", optional: true, example: { SI: "998 kg/m^3", US: "62.3 lb/ft^3" } },
+    { key: "volumeFlow", label: "Volume flow", display: "volumeFlow", optional: true, example: { SI: "600 lpm", US: "160 gpm" } },
     {
       key: "beta",
       label: "Momentum-flux factor β",
@@ -85,12 +92,12 @@ function portFields(way: string): FieldDef[] {
 }
 
 export const FORCE_POLAR: NumberFieldDef[] = [
-  { key: "magnitude", label: "Magnitude", display: "force", example: "12 kN" },
+  { key: "magnitude", label: "Magnitude", display: "force", example: { SI: "12 kN", US: "2700 lbf" } },
   { key: "angle", label: "Direction", display: "angle", example: "-90 deg", hint: "Degrees counter-clockwise from +x; −90 is straight down." },
 ];
 export const FORCE_COMPONENTS: NumberFieldDef[] = [
-  { key: "fx", label: "Fx", display: "force", example: "0 N" },
-  { key: "fy", label: "Fy", display: "force", example: "-2 kN" },
+  { key: "fx", label: "Fx", display: "force", example: { SI: "0 N", US: "0 lbf" } },
+  { key: "fy", label: "Fy", display: "force", example: { SI: "-2 kN", US: "-450 lbf" } },
 ];
 
 /** Fields of the sketch itself and of every element that the properties form writes outside FORM. */

@@ -1,12 +1,15 @@
 "use client";
 // Storing a field from a form: the element with the new value must pass the file format's zod
 // schema for its kind; if not, the form shows the schema's words at the field and nothing changes.
+// `useLastGood` finds a field's last good value in the undo history (Escape and a refused blank
+// go back to it).
 import { useCallback } from "react";
 import type { z } from "zod";
 import { bodySchema, formatPath, loadSchema, massSourceSchema, portSchema, supportSchema } from "@/solver/schema";
 import { useStores } from "@/canvas/context";
 import { findElement, type Group } from "@/canvas/model/elements";
-import { setField, type FieldValue } from "@/canvas/commands/fields";
+import { elementField, lastGoodValue, setField, type FieldValue } from "@/canvas/commands/fields";
+import type { Numeric } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
 
 const SCHEMAS: Record<Group, z.ZodType> = {
@@ -46,6 +49,20 @@ export function useCommit(id: string) {
       s.apply(setField({ id, field: path, value }) as Command<unknown>, coalesce ? { coalesce } : undefined);
       return null;
     },
+    [editor, id],
+  );
+}
+
+/** lastGood(visit) → the field's last good value from before the edit `visit` (a coalesce key), or null. */
+export type LastGood = (visit: string) => { value: Numeric | undefined } | null;
+
+/** The last good value of an element's field, by its path in the element. */
+export function useElementLastGood(id: string) {
+  const { editor } = useStores();
+  return useCallback(
+    (path: Path): LastGood =>
+      (visit) =>
+        lastGoodValue(editor.getState(), elementField(id, path), visit),
     [editor, id],
   );
 }

@@ -4,6 +4,8 @@ import type { SketchFile } from "@/solver/schema";
 import { kindOf, KIND_LABEL, type AnyElement, type Group } from "@/canvas/model/elements";
 import { FORCE_COMPONENTS, FORCE_POLAR, FORM } from "@/components/editor/fieldDefs";
 import { kindAndName } from "@/solver/words";
+import { FIELD_KIND_BY_NAME } from "@/solver/resolve";
+import { suggestUnitsFor } from "@/solver/expressionErrors";
 
 const ELEMENT_PATH = /^(bodies|supports|loads|ports|massSources)\[(\d+)\](?:\.([A-Za-z]+))?((?:\[\d+\])*)(?:\.(.+))?$/;
 
@@ -41,10 +43,26 @@ export function errorPlace(sketch: SketchFile | null, path: string): string {
   return `${name} — ${fieldWords(kind, m[3], indices)}`;
 }
 
-/** "Point force F1 — magnitude: unknown name "span"" */
+const POINT_KEYS = new Set(["at", "from", "to", "cg", "outline"]);
+
+/** What the field at a path holds ("bodies[0].mass" → mass, "supports[1].at[0]" → length), or
+ *  null when the path is not a numeric field's (a parameter holds whatever it is given). */
+export function fieldKindAt(path: string): string | null {
+  if (path === "gravity" || path === "gravityAngle") return FIELD_KIND_BY_NAME[path];
+  const motion = /^motion\.(\w+)$/.exec(path);
+  if (motion) return FIELD_KIND_BY_NAME[motion[1]] ?? null;
+  const m = ELEMENT_PATH.exec(path);
+  if (!m || !m[3] || m[5]) return null;
+  if (POINT_KEYS.has(m[3])) return "length";
+  return FIELD_KIND_BY_NAME[m[3]] ?? null;
+}
+
+/** "Point force F1 — magnitude: unknown name "span"": the place, and the message with the units
+ *  it suggests fitted to the field ("kg, tonne, lb" for a mass, not any unit at all). */
 export function errorInWords(sketch: SketchFile | null, e: { path: string; message: string }): string {
   const place = errorPlace(sketch, e.path);
-  return place ? `${place}: ${e.message}` : e.message;
+  const message = suggestUnitsFor(e.message, fieldKindAt(e.path));
+  return place ? `${place}: ${message}` : message;
 }
 
 /**

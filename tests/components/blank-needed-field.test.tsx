@@ -35,7 +35,7 @@ describe("a required field left blank", () => {
     expect(magnitude).not.toHaveFocus();
     expect(magnitude).toHaveValue("");
     expect(magnitude).toHaveAttribute("aria-invalid", "true");
-    expect(magnitude).toHaveAccessibleDescription("⚠ Magnitude is needed. The sketch keeps 10 kN until you give one.");
+    expect(magnitude).toHaveAccessibleDescription("⚠ Magnitude: required. The sketch keeps 10 kN until you give one.");
     expect(magnitudeOf(editor)).toBe("10 kN");
     // entered again, it stays marked until a value is typed; the value is then stored
     await user.click(magnitude);
@@ -56,10 +56,11 @@ describe("a required field left blank", () => {
     await user.keyboard("{End}{Backspace}{Backspace}{Backspace}{Backspace}{Backspace}");
     expect(magnitude).toHaveValue("");
     expect(magnitudeOf(editor)).toBe("10 kN");
-    // one undo step for the whole edit, which changed nothing
+    // the edit changed nothing, so it leaves no undo step
     await user.tab();
     expect(magnitudeOf(editor)).toBe("10 kN");
-    expect(magnitude).toHaveAccessibleDescription("⚠ Magnitude is needed. The sketch keeps 10 kN until you give one.");
+    expect(editor.getState().past).toHaveLength(0);
+    expect(magnitude).toHaveAccessibleDescription("⚠ Magnitude: required. The sketch keeps 10 kN until you give one.");
   });
 
   it("Escape puts the kept value back in the field", async () => {
@@ -84,7 +85,7 @@ describe("a required field left blank", () => {
     await user.tab();
     expect(mass).toHaveValue("");
     expect(mass).toHaveAttribute("aria-invalid", "true");
-    expect(mass).toHaveAccessibleDescription("⚠ Mass is needed. The sketch keeps 850 kg until you give one.");
+    expect(mass).toHaveAccessibleDescription("⚠ Mass: required. The sketch keeps 850 kg until you give one.");
     expect(editor.getState().sketch.bodies[0].mass).toBe(850);
   });
 });

@@ -71,7 +71,7 @@ describe("numeric fields with the worker's answer", () => {
     await user.tab();
     expect(magnitude).toHaveValue("");
     expect(magnitude).toHaveAttribute("aria-invalid", "true");
-    expect(magnitude).toHaveAccessibleDescription(`⚠ Magnitude is needed. The sketch keeps ${before} until you give one.`);
+    expect(magnitude).toHaveAccessibleDescription(`⚠ Magnitude: required. The sketch keeps ${before} until you give one.`);
     // a value typed in takes the note away
     await user.type(magnitude, "12{Enter}");
     expect(magnitude).not.toHaveAccessibleDescription(/keeps/);

@@ -58,7 +58,7 @@ describe("editor", () => {
     await user.tab();
     // the field stays blank and says so; the sketch keeps its direction
     expect(screen.getByLabelText("Pushes toward")).toHaveValue("");
-    expect(screen.getByText(/Pushes toward is needed\. The sketch keeps 90° until you give one\./)).toBeInTheDocument();
+    expect(screen.getByText(/Pushes toward: required\. The sketch keeps 90° until you give one\./)).toBeInTheDocument();
     await user.click(outlineRow(/Point force l1/));
     await user.click(outlineRow(/Contact s2/));
     expect(screen.getByLabelText("Pushes toward")).toHaveValue("90");
