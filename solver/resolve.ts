@@ -14,6 +14,7 @@ import { resolveParameters, type ParameterPlan } from "./parameters";
 import type { SketchFile } from "./schema";
 import type { FieldError, Sketch, SolveWarning } from "./types";
 import { G0 } from "./constants";
+import { suggestUnitsFor } from "./expressionErrors";
 import { NEGATIVE_GRAVITY } from "./validate";
 
 /** Where an evaluated expression is written, and how to evaluate it again. */
@@ -133,7 +134,8 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
         warnings.push({ code: "TRIG_UNITLESS", message: `${path}: ${w}`, ids });
       }
     } catch (err) {
-      const message = (err as Error).message;
+      // an unknown name's error suggests units of the field's own kind ("kg, tonne, lb" for a mass)
+      const message = suggestUnitsFor((err as Error).message, kind);
       errors.push({ path, message });
       fields[path] = { error: message };
       target[key] = Number.NaN;
