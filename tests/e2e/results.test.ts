@@ -149,9 +149,10 @@ describe("live results", () => {
   });
 
   for (const [id, words] of [
-    ["fire-monitor-trailer", /^Holds/],
+    ["fire-monitor-trailer", /^HoldsHolds — /],
     ["pipe-bend-anchor", /^HoldsHolds — all supports within their limits; the largest reaction is 25\.\d+ kN at the anchor/],
-    ["washing-cart", /^Holds/],
+    // it holds, but tips back with a factor of 1.31 against the 1.5 the sketch asks for: the badge says so
+    ["washing-cart", /^FoS shortHolds — /],
   ] as const) {
     it(`opens the example ${id}, solved and explained`, async () => {
       await page.getByTestId("menu-examples").click();
