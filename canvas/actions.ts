@@ -2,19 +2,20 @@
 // the menus, the keyboard and the element outline read this list, so a new tool is one entry.
 import type { Vec2 } from "@/solver/types";
 import type { EditorStores } from "./context";
+import type { EditorStore, Tool } from "./store";
 import type { PointerController } from "./konva/pointer";
 import type { Command } from "./commands/define";
 import { deleteElements, duplicateElements, pasteElements } from "./commands/elements";
 import { copyFragment, fragmentText, pasteNotice, planPaste, readFragment } from "./clipboard";
 import { moveElement } from "./commands/move";
 import { rotateElement } from "./commands/shape";
-import { DIRECTED, findElement, GROUPS, type ElementKind } from "./model/elements";
-import { defaultBodySize, polygonAround, rectangleAround } from "./model/factory";
+import { DIRECTED, findElement, GROUPS, KIND_LABEL, type ElementKind } from "./model/elements";
+import { polygonAround, rectangleAround } from "./model/factory";
 import { valueLookup } from "./analysis/store";
 import { fitScene } from "./geometry/fit";
 import { snapTo } from "./geometry/snap";
 import { gridStep, toWorld, zoomAt } from "./geometry/view";
-import { bodyCommand, NEEDS_BODY, placeWithoutPointer } from "./placement";
+import { bodyCommand, bodyPlaceInView, NEEDS_BODY, placedAtOutline, placeWithoutPointer } from "./placement";
 
 /** What the page around the editor provides to actions (dialogs, downloads, saving). */
 export interface EditorUi {
@@ -79,11 +80,8 @@ function placeAction(id: string, label: string, kind: Exclude<ElementKind, "body
     hint,
     enabled: hasBody,
     disabledNotice: NEEDS_BODY,
-    run: (ctx) => {
-      const s = ed(ctx);
-      s.setTool({ kind: "place", element: kind, friction });
-      s.notify(`${label}: click on a body to place it (Shift+click to place several). Esc to stop.`);
-    },
+    // what to do next is the status line's hint, read from the tool (`toolHint`)
+    run: (ctx) => ed(ctx).setTool({ kind: "place", element: kind, friction }),
     placeNow: (ctx) => {
       const s = ed(ctx);
       const scene = ctx.stores.scene.getState();
@@ -97,13 +95,12 @@ function placeAction(id: string, label: string, kind: Exclude<ElementKind, "body
   };
 }
 
-/** A body of the default size in the middle of the view (on the grid), selected: the tray's keyboard route. */
+/** A body of the default size in the middle of the view (on the grid, and no larger than the view takes), selected: the tray's keyboard route. */
 function addBodyNow(ctx: ActionContext, shape: "rectangle" | "polygon") {
   const s = ed(ctx);
   const g = gridStep(s.view.scale);
   const c = viewCentre(ctx);
-  const centre: Vec2 = [snapTo(c[0], g), snapTo(c[1], g)];
-  const size = defaultBodySize(s.view.scale);
+  const { centre, size } = bodyPlaceInView([snapTo(c[0], g), snapTo(c[1], g)], s.view, s.viewport, g);
   const outline = shape === "rectangle" ? rectangleAround(centre, size) : polygonAround(centre, size);
   if (!s.apply(bodyCommand(s.sketch, outline))) return;
   s.setTool({ kind: "select" });
@@ -158,11 +155,8 @@ export const ACTIONS: readonly Action[] = [
     group: "add",
     kind: "body",
     shortcuts: ["B"],
-    hint: "Drag on the canvas to draw a rectangle; a click makes a 2 m × 1 m body.",
-    run: (ctx) => {
-      ed(ctx).setTool({ kind: "body", shape: "rectangle", points: [] });
-      ed(ctx).notify("Body: drag a rectangle on the canvas (a click makes 2 m × 1 m). Esc to stop.");
-    },
+    hint: "Drag on the canvas to draw a rectangle; a click makes one of the default size (2 m × 1 m at ordinary zoom), centred there.",
+    run: (ctx) => ed(ctx).setTool({ kind: "body", shape: "rectangle", points: [] }),
     placeNow: (ctx) => addBodyNow(ctx, "rectangle"),
   },
   {
@@ -172,10 +166,7 @@ export const ACTIONS: readonly Action[] = [
     kind: "body",
     shortcuts: ["Shift+B"],
     hint: "Click each corner; click the first corner, double-click or press Enter to close.",
-    run: (ctx) => {
-      ed(ctx).setTool({ kind: "body", shape: "polygon", points: [] });
-      ed(ctx).notify("Polygon body: click each corner, then click the first corner or press Enter. Backspace removes the last corner.");
-    },
+    run: (ctx) => ed(ctx).setTool({ kind: "body", shape: "polygon", points: [] }),
     placeNow: (ctx) => addBodyNow(ctx, "polygon"),
   },
   placeAction("add.pin", "Pin", "pin", "P", "Holds x and y; free to turn."),
@@ -301,10 +292,7 @@ export const ACTIONS: readonly Action[] = [
     group: "results",
     shortcuts: ["K"],
     hint: "Click on the canvas to take the hand check's moments about that point.",
-    run: (c) => {
-      ed(c).setTool({ kind: "pick-point" });
-      ed(c).notify("Click on the canvas: the hand check takes moments about that point.");
-    },
+    run: (c) => ed(c).setTool({ kind: "pick-point" }),
   },
 ];
 
@@ -406,4 +394,61 @@ export function shortcutLabel(spec: string, mac = typeof navigator !== "undefine
     .split(/\+(?!$)/)
     .map((p) => (p === "Mod" ? (mac ? "⌘" : "Ctrl") : p === "Shift" ? (mac ? "⇧" : "Shift") : p.replace("Arrow", "")))
     .join(mac ? "" : "+");
+}
+
+// ------------------------------------------------------------ the tool's words
+
+/** One key for a tool: its kind and what it places (a polygon's corners so far do not change it). */
+export function toolKey(tool: Tool): string {
+  if (tool.kind === "place") return `place:${tool.element}${tool.friction ? ":f" : ""}`;
+  if (tool.kind === "body") return `body:${tool.shape}`;
+  return tool.kind;
+}
+
+const corners = (n: number) => `${n} corner${n === 1 ? "" : "s"} placed`;
+
+/**
+ * What the status line says while a tool is on: read from the tool itself, so it is there exactly
+ * as long as the tool is (gone once a single placement hands back to selecting). `touch`: the words
+ * for a phone or a tablet, taps and the status line's Done button instead of keys. Null while
+ * selecting.
+ */
+export function toolHint(tool: Tool, touch = false): string | null {
+  const act = touch ? "tap" : "click";
+  const stop = touch ? " Done stops." : " Esc to stop.";
+  switch (tool.kind) {
+    case "select":
+      return null;
+    case "place": {
+      const label = ACTIONS.find((a) => a.kind === tool.element && !!a.friction === !!tool.friction)?.label ?? KIND_LABEL[tool.element];
+      const where = placedAtOutline(tool.element) ? "on or near a body's outline" : "on a body";
+      return `${label}: ${act} ${where} to place it${touch ? "." : " (Shift+click to place several)."}${stop}`;
+    }
+    case "body": {
+      if (tool.shape === "rectangle") return `Body: drag a rectangle on the drawing, or ${act} for one of the default size centred there.${stop}`;
+      const n = tool.points.length;
+      const close = touch ? (n >= 3 ? "tap the first corner or Done to close it." : "tap the first corner to close it.") : "click the first corner or press Enter to close it; Backspace removes the last corner.";
+      return `Polygon body: ${n ? `${corners(n)}. ${touch ? "Tap" : "Click"} each next corner` : `${act} each corner`}, then ${close}${n >= 3 && touch ? "" : stop}`;
+    }
+    case "pick-point":
+      return `${touch ? "Tap" : "Click"} on the drawing: the hand check takes moments about that point.${stop}`;
+    case "calibrate":
+      return tool.points.length === 0
+        ? `Setting the scale: ${act} the first of two marks a known distance apart on the drawing.${stop}`
+        : tool.points.length === 1
+          ? `Setting the scale: now ${act} the second mark.${stop}`
+          : "Type the real distance between the two marks in the Underlay section, then Set the scale.";
+  }
+}
+
+/**
+ * Keeps the status line's notice with the tool it was said under: a change of tool (choosing one,
+ * or going back to selecting after a placement, Esc or Done) clears the notice, so neither the
+ * last tool's words nor a refusal it gave linger. Words said after the change (what was added)
+ * stay. Returns the function that stops.
+ */
+export function noticesFollowTool(editor: EditorStore): () => void {
+  return editor.subscribe((s, prev) => {
+    if (s.notice !== null && toolKey(s.tool) !== toolKey(prev.tool)) s.notify(null);
+  });
 }

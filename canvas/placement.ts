@@ -6,7 +6,9 @@ import { addElement, attachToBody } from "./commands/elements";
 import type { Command } from "./commands/define";
 import { nearestOnOutline, outwardNormal, angleOf, pointInPolygon, polygonCentroid, boxContains, type Box } from "./geometry/polygon";
 import { findElement, nextId, type Attached, type ElementKind, GROUP_OF } from "./model/elements";
-import { newAttached, newBody, DEFAULT_ANGLE } from "./model/factory";
+import { defaultBodySize, newAttached, newBody, DEFAULT_ANGLE } from "./model/factory";
+import { LEGEND_ROOM } from "./geometry/fit";
+import { toScreen, type View } from "./geometry/view";
 import { anchorOf, pointsOf, type Scene, type SceneBody } from "./scene";
 
 /** The body a point is on: inside it or within `tol` of its outline (the last drawn wins). */
@@ -50,15 +52,78 @@ export type PlaceOutcome = { ok: true; command: Command<unknown> } | { ok: false
 /** What the editor says when a support, load or port is asked for before any body exists. */
 export const NEEDS_BODY = "Draw a body first: supports, loads and ports belong to a body.";
 
-/** The command that places an attached element at p (already snapped). */
+/**
+ * How far outside a body's outline (screen px) a click still places a support or a port: it goes
+ * onto the nearest point of the outline. Farther out it is not placed at all.
+ */
+export const OUTLINE_REACH_PX = 12;
+
+/** Kinds that act on the body where it meets the world: a support on its outline (or through it,
+ *  a pin in a hole), a port where fluid crosses the control surface. */
+const AT_OUTLINE: ReadonlySet<ElementKind> = new Set(["pin", "roller", "contact", "fixed", "tie", "inlet", "outlet"]);
+
+/** Whether a kind is placed only on or inside a body (never out in empty space). */
+export const placedAtOutline = (kind: ElementKind): boolean => AT_OUTLINE.has(kind);
+
+/** What a click (or a tap) too far from every body's outline says for a support or a port. */
+export function offOutlineMessage(kind: ElementKind, touch = false): string {
+  const act = touch ? "Tap" : "Click";
+  return GROUP_OF[kind] === "ports"
+    ? `${act} on or near a body's outline to place a port: fluid crosses the control surface only there.`
+    : `${act} on or near a body's outline to place a support.`;
+}
+
+/**
+ * Where a support or a port clicked at `p` goes, and on which body: inside a body (the last drawn
+ * wins) it stays at `p`; outside every body, onto the nearest point of the nearest outline within
+ * `reach`; farther than that, nowhere. `from` is the pointer's own point before snapping (the reach
+ * is measured from it, so a snap to the grid neither lets a far click in nor keeps a near one out);
+ * a snapped point that has left the body is taken back onto its outline.
+ */
+export function outlineSpot(bodies: readonly SceneBody[], p: Vec2, reach: number, tol: number, from: Vec2 = p): { body: SceneBody; at: Vec2 } | undefined {
+  const onOrIn = (b: SceneBody, q: Vec2) => pointInPolygon(q, b.outline) || nearestOnOutline(q, b.outline).distance <= tol;
+  const onto = (b: SceneBody): Vec2 => {
+    if (onOrIn(b, p)) return p;
+    const hit = nearestOnOutline(p, b.outline).point;
+    return [hit[0], hit[1]];
+  };
+  for (let i = bodies.length - 1; i >= 0; i--) {
+    const b = bodies[i];
+    if (b.outline.length >= 3 && pointInPolygon(from, b.outline)) return { body: b, at: onto(b) };
+  }
+  let best: { body: SceneBody; d: number } | undefined;
+  for (const b of bodies) {
+    if (b.outline.length < 3) continue;
+    const d = nearestOnOutline(from, b.outline).distance;
+    if (d <= reach && (!best || d < best.d)) best = { body: b, d };
+  }
+  if (!best) return undefined;
+  const b = best.body;
+  // outside the body: on its outline, not a hair off it
+  const at = nearestOnOutline(p, b.outline).distance <= 1e-12 ? p : nearestOnOutline(p, b.outline).point;
+  return { body: b, at: [at[0], at[1]] };
+}
+
+/**
+ * The command that places an attached element at p (already snapped). A support or a port goes
+ * on or inside a body (`outlineSpot`, within `reach` of an outline, measured from the pointer's
+ * own point `from`), or is refused with a hint; a load or a mass source goes on the body under
+ * the point, else on the nearest.
+ */
 export function placeCommand(
   sketch: SketchFile,
   scene: Scene,
   kind: Exclude<ElementKind, "body">,
   p: Vec2,
   tol: number,
-  opts: { friction?: boolean } = {},
+  opts: { friction?: boolean; reach?: number; from?: Vec2; touch?: boolean } = {},
 ): PlaceOutcome {
+  if (!scene.bodies.some((b) => b.outline.length >= 3)) return { ok: false, message: NEEDS_BODY };
+  if (placedAtOutline(kind)) {
+    const spot = outlineSpot(scene.bodies, p, opts.reach ?? tol, tol, opts.from ?? p);
+    if (!spot) return { ok: false, message: offOutlineMessage(kind, opts.touch) };
+    return { ok: true, command: placeOnBody(sketch, spot.body, kind, spot.at, tol, opts) };
+  }
   const body = bodyAt(scene.bodies, p, tol) ?? nearestBody(scene.bodies, p);
   if (!body) return { ok: false, message: NEEDS_BODY };
   return { ok: true, command: placeOnBody(sketch, body, kind, p, tol, opts) };
@@ -149,6 +214,53 @@ export function placeWithoutPointer(
   const taken = scene.items.filter((it) => it.body === body.id).map(anchorOf);
   const at = spotOnBody(body, kind, taken, where.tol);
   return { ok: true, command: placeOnBody(sketch, body, kind, at, where.tol, { friction: where.friction }), body: body.id, at };
+}
+
+/** A body placed in one go takes at most this share of the visible drawing's width or height. */
+const BODY_SHARE = 2 / 3;
+/** …and keeps this far (px) inside the drawing's edges. */
+const BODY_MARGIN = 8;
+
+/** The next smaller of 1, 2, 5 × a power of ten (2 → 1, 1 → 0.5, 0.5 → 0.2). */
+function smallerRound(x: number): number {
+  const k = Math.floor(Math.log10(x) + 1e-9);
+  const m = Math.round(x / 10 ** k);
+  return Number((m >= 5 ? 2 * 10 ** k : m >= 2 ? 10 ** k : 0.5 * 10 ** k).toPrecision(12));
+}
+
+/**
+ * Where a rectangle body placed in one go goes (a click with the body tool, a tray item dropped on
+ * the drawing, the tray's keyboard route), asked for at `centre`: of the default size for the zoom
+ * (`defaultBodySize`), or a round size smaller when that would take more than two thirds of the
+ * drawing's width or height (a phone); centred on the point, and moved in (by whole grid steps,
+ * so a centre on the grid stays on it) until it lies wholly in view, below the legend. A viewport
+ * not measured yet leaves the point and size alone.
+ */
+export function bodyPlaceInView(centre: Vec2, view: View, viewport: { width: number; height: number }, grid = 0): { centre: Vec2; size: Vec2 } {
+  let size = defaultBodySize(view.scale);
+  const x0 = BODY_MARGIN;
+  const x1 = viewport.width - BODY_MARGIN;
+  const y0 = LEGEND_ROOM + BODY_MARGIN;
+  const y1 = viewport.height - BODY_MARGIN;
+  if (x1 - x0 < 40 || y1 - y0 < 40) return { centre, size };
+  for (let i = 0; i < 12 && (size[0] * view.scale > BODY_SHARE * (x1 - x0) || size[1] * view.scale > BODY_SHARE * (y1 - y0)); i++) {
+    const w = smallerRound(size[0]);
+    size = [w, Number((w / 2).toPrecision(12))];
+  }
+  // how far (px) the body's screen box reaches past an edge of the drawing, in from that edge
+  const inward = (lo: number, hi: number, min: number, max: number) => (lo < min ? min - lo : hi > max ? max - hi : 0);
+  const [sx, sy] = toScreen(view, centre);
+  const hw = (size[0] * view.scale) / 2;
+  const hh = (size[1] * view.scale) / 2;
+  const steps = (px: number) => {
+    const d = px / view.scale;
+    return grid > 0 ? Math.sign(d) * Math.ceil(Math.abs(d) / grid - 1e-9) * grid : d;
+  };
+  const dx = steps(inward(sx - hw, sx + hw, x0, x1));
+  // screen y runs down the page, world y up it
+  const dy = -steps(inward(sy - hh, sy + hh, y0, y1));
+  const tidy = (v: number) => (grid > 0 ? Number(v.toFixed(Math.max(0, Math.ceil(-Math.log10(grid)) + 2))) : v);
+  return { centre: dx || dy ? [tidy(centre[0] + dx), tidy(centre[1] + dy)] : centre, size };
 }
 
 export function bodyCommand(sketch: SketchFile, outline: Vec2[]): Command<unknown> {

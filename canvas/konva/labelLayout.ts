@@ -12,7 +12,7 @@ import { drawingFrame } from "../geometry/fit";
 import { DIRECTED } from "../model/elements";
 import { anchorOf, type Scene } from "../scene";
 import { handleBoxes, handlePlace } from "../render/handles";
-import { placeElementLabels, type Box } from "../render/labels";
+import { placeElementLabels, shiftBox, type Box } from "../render/labels";
 import { dir } from "../render/prims";
 import { elementGroups, resultLayer } from "../render/scenePrims";
 import { supportStates } from "../render/results";
@@ -22,9 +22,6 @@ import { handleSign } from "./pointer";
 import type { InteractionStore } from "./interaction";
 
 const NONE: readonly Box[] = [];
-
-/** A box (content px) as offsets from a point: `handlePlace` measures from the element's anchor. */
-export const shiftBox = (b: Box, from: readonly [number, number]): Box => ({ x0: b.x0 - from[0], y0: b.y0 - from[1], x1: b.x1 - from[0], y1: b.y1 - from[1] });
 
 /**
  * What the turn handle of the one selected element covers (content px), placed as the interaction

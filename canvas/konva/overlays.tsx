@@ -14,14 +14,14 @@ import { itemPrims } from "../render/symbols";
 import { dir, type Prim } from "../render/prims";
 import { handlePlace } from "../render/handles";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
-import { angleOnEdge, bodyAt } from "../placement";
+import { angleOnEdge, bodyAt, OUTLINE_REACH_PX, outlineSpot, placedAtOutline } from "../placement";
 import { anchorOf, type Scene, type SceneBody, type SceneItem } from "../scene";
 import { drawingFrame } from "../geometry/fit";
 import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
 import { handleSign } from "./pointer";
-import { shiftBox } from "./labelLayout";
+import { shiftBox } from "../render/labels";
 
 const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
 export { ROTATE_HANDLE_PX, handlePlace } from "../render/handles";
@@ -158,14 +158,23 @@ export const PointerOverlay = memo(function PointerOverlay({ interaction }: { in
   const units = useEditor((s) => s.units);
   const momentPoint = useEditor((s) => s.momentPoint);
   const { scene } = useStores();
+  // what a click would place, where it would go: a support or a port onto the outline it is near,
+  // or nowhere (`at` null) when it is near none
   const ghost = useMemo(() => {
     if (tool.kind !== "place" || !hover) return null;
     const bodies = scene.getState().bodies;
     const tol = 9 / scale;
-    const body = bodyAt(bodies, hover, tol);
-    const angle = angleOnEdge(tool.element, body, hover, tol) ?? 0;
-    const fake = { id: "", body: body?.id ?? "", kind: tool.element, at: hover, angle, magnitude: 1000, value: 500, from: [hover[0] - 0.5, hover[1]], to: [hover[0] + 0.5, hover[1]], w1: 2000, w2: 2000, massFlow: 10, velocity: 5, pressure: 0, ...(tool.friction ? { mu: 0.3 } : {}) } as unknown as SceneItem;
-    return itemPrims(fake, { units, scale, color: ACCENT, showName: false }).map((p) => ({ ...p, opacity: 0.55 }));
+    let body = bodyAt(bodies, hover, tol);
+    let at: Vec2 = hover;
+    if (placedAtOutline(tool.element)) {
+      const spot = outlineSpot(bodies, hover, OUTLINE_REACH_PX / scale, tol);
+      if (!spot) return { at: null, prims: [] };
+      body = spot.body;
+      at = spot.at;
+    }
+    const angle = angleOnEdge(tool.element, body, at, tol) ?? 0;
+    const fake = { id: "", body: body?.id ?? "", kind: tool.element, at, angle, magnitude: 1000, value: 500, from: [at[0] - 0.5, at[1]], to: [at[0] + 0.5, at[1]], w1: 2000, w2: 2000, massFlow: 10, velocity: 5, pressure: 0, ...(tool.friction ? { mu: 0.3 } : {}) } as unknown as SceneItem;
+    return { at, prims: itemPrims(fake, { units, scale, color: ACCENT, showName: false }).map((p) => ({ ...p, opacity: 0.55 })) };
   }, [tool, hover, scale, units, scene]);
 
   return (
@@ -208,9 +217,14 @@ export const PointerOverlay = memo(function PointerOverlay({ interaction }: { in
           ))}
         </Group>
       )}
-      {ghost && hover && (
+      {ghost?.at && (
+        <Group x={ghost.at[0] * scale} y={-ghost.at[1] * scale}>
+          <Shape sceneFunc={(ctx) => drawPrims(ctx._context, ghost.prims, canvasFont())} />
+        </Group>
+      )}
+      {ghost && !ghost.at && hover && (
         <Group x={hover[0] * scale} y={-hover[1] * scale}>
-          <Shape sceneFunc={(ctx) => drawPrims(ctx._context, ghost, canvasFont())} />
+          <Text x={10} y={8} text="not on a body: move onto or near its outline" fontSize={10.5} fill={CAUTION} fontFamily={canvasFont()} />
         </Group>
       )}
       {momentPoint && (

@@ -7,13 +7,13 @@ import { moveElement, moveCentreOfGravity } from "../commands/move";
 import { rotateElement, reshapeBody } from "../commands/shape";
 import type { Command } from "../commands/define";
 import type { EditorStores } from "../context";
-import { childrenOf, findElement } from "../model/elements";
+import { childrenOf, findElement, type ElementKind } from "../model/elements";
 import { snapCorners, snapPoint, snapTo, type SnapResult } from "../geometry/snap";
 import { gridStep, toWorld, zoomAt } from "../geometry/view";
 import { angleOf } from "../geometry/polygon";
 import { anchorOf, type SceneItem } from "../scene";
-import { bodyCommand, dropAttachments, elementsInBox, placeCommand } from "../placement";
-import { defaultBodySize, rectangleAround, rectangleOutline } from "../model/factory";
+import { bodyCommand, bodyPlaceInView, dropAttachments, elementsInBox, OUTLINE_REACH_PX, placeCommand, placedAtOutline } from "../placement";
+import { rectangleAround, rectangleOutline } from "../model/factory";
 import { markInput } from "../perf";
 import { moveUnderlay } from "../commands/underlay";
 import { calibrationClick } from "./underlayPointer";
@@ -71,10 +71,32 @@ export function createPointerController(deps: PointerDeps) {
   const worldOf = (s: Vec2) => toWorld(ed().view, s);
   const tolerance = () => 9 / ed().view.scale;
 
-  function snap(p: Vec2, e: { altKey: boolean }, exclude?: Set<string>): SnapResult {
+  function snap(p: Vec2, e: { altKey: boolean }, exclude?: Set<string>, tol = tolerance()): SnapResult {
     const s = ed();
     const scene = stores.scene.getState();
-    return snapPoint(p, { bodies: scene.bodies, grid: gridStep(s.view.scale), tolerance: tolerance(), exclude, enabled: s.snap && !e.altKey });
+    return snapPoint(p, { bodies: scene.bodies, grid: gridStep(s.view.scale), tolerance: tol, exclude, enabled: s.snap && !e.altKey });
+  }
+
+  /**
+   * The command that places a support, load or port at a world point (a click, a tap, a tray item
+   * dropped): a support or a port within `OUTLINE_REACH_PX` of a body's outline goes onto it
+   * (snapped there as far out as that); one farther out is refused, with the hint in a tap's
+   * words for a touch.
+   */
+  function place(kind: Exclude<ElementKind, "body">, world: Vec2, e: { altKey: boolean }, opts: { friction?: boolean; touch?: boolean }) {
+    const s = ed();
+    const reach = OUTLINE_REACH_PX / s.view.scale;
+    const p = snap(world, e, undefined, placedAtOutline(kind) ? reach : tolerance()).point;
+    return placeCommand(s.sketch, stores.scene.getState(), kind, p, tolerance(), { friction: opts.friction, reach, from: world, touch: opts.touch });
+  }
+
+  /** A body of the default size centred on a world point (on the grid unless snapping is off), kept in view. */
+  function bodyAround(world: Vec2, e: { altKey: boolean }) {
+    const s = ed();
+    // the centre keeps to the grid only: another body's corner means nothing for a centre
+    const grid = s.snap && !e.altKey ? gridStep(s.view.scale) : 0;
+    const centre = snapPoint(world, { bodies: [], grid, tolerance: 0, enabled: grid > 0 }).point;
+    return bodyPlaceInView(centre, s.view, s.viewport, grid);
   }
 
   /** Draw these elements (and a moved body's elements) on the interaction layer while the drag lasts. */
@@ -158,8 +180,7 @@ export function createPointerController(deps: PointerDeps) {
       return;
     }
     if (tool.kind === "place") {
-      const p = snap(world, e).point;
-      const out = placeCommand(s.sketch, stores.scene.getState(), tool.element, p, tolerance(), { friction: tool.friction });
+      const out = place(tool.element, world, e, { friction: tool.friction, touch: e.pointerType === "touch" });
       if (!out.ok) s.notify(out.message);
       else {
         s.apply(out.command);
@@ -352,15 +373,17 @@ export function createPointerController(deps: PointerDeps) {
       case "rect": {
         const end = snap(worldOf(screenOf(e)), e).point;
         interaction.setState({ rect: null });
-        let a = m.start;
-        let b = end;
-        if (Math.abs(b[0] - a[0]) * s.view.scale < 6 || Math.abs(b[1] - a[1]) * s.view.scale < 6) {
-          // a click: a 2 m × 1 m body with its bottom-left corner here
-          a = m.start;
-          b = [m.start[0] + 2, m.start[1] + 1];
+        if (Math.abs(end[0] - m.start[0]) * s.view.scale >= 6 && Math.abs(end[1] - m.start[1]) * s.view.scale >= 6) {
+          s.apply(bodyCommand(s.sketch, rectangleOutline(m.start, end)));
+          s.setTool({ kind: "select" });
+          return;
         }
-        s.apply(bodyCommand(s.sketch, rectangleOutline(a, b)));
+        // a click (a tap): a body of the default size centred there, wholly in view (a phone's
+        // drawing is narrow: one with its corner at the tap would run off it)
+        const { centre, size } = bodyAround(worldOf(downScreen), e);
+        const added = s.apply(bodyCommand(s.sketch, rectangleAround(centre, size)));
         s.setTool({ kind: "select" });
+        if (added) s.notify(`Body added, ${size[0]} m × ${size[1]} m. Drag its corners to reshape it.`);
         return;
       }
     }
@@ -398,9 +421,10 @@ export function createPointerController(deps: PointerDeps) {
     const s = ed();
     const tool = s.tool;
     if (tool.kind !== "body" || tool.shape !== "polygon") return;
+    // the tool first: what is said after it is about what was done, and stays
+    s.setTool({ kind: "select" });
     if (tool.points.length >= 3) s.apply(bodyCommand(s.sketch, tool.points));
     else s.notify("A body needs at least three corners.");
-    s.setTool({ kind: "select" });
   }
 
   /** Pointer moving over the canvas with no button: hover and snap preview for tools. */
@@ -414,14 +438,16 @@ export function createPointerController(deps: PointerDeps) {
     }
     // the underlay's marks are features of the image: never snapped
     if (tool.kind === "calibrate") return interaction.setState({ hover: world, snap: null });
-    const r = snap(world, e);
+    // a support or a port catches on an outline as far out as a click would place it there
+    const r = snap(world, e, undefined, tool.kind === "place" && placedAtOutline(tool.element) ? OUTLINE_REACH_PX / ed().view.scale : tolerance());
     interaction.setState({ hover: r.point, snap: r.kind === "none" || r.kind === "grid" ? null : r });
   }
 
   /**
-   * A tray item dropped on the canvas at a client point. A support, load or port is placed on
-   * the body there (or the nearest); a rectangle body of the default size is placed centred on
-   * the drop point, selected, as one undo step. A polygon body starts the polygon tool with its
+   * A tray item dropped on the canvas at a client point. A load is placed on the body there (or
+   * the nearest), a support or a port as a click places it (on or near an outline, else refused);
+   * a rectangle body of the default size is placed centred on the drop point (moved in to lie
+   * wholly in view), selected, as one undo step. A polygon body starts the polygon tool with its
    * first corner at the drop point: a polygon is whatever shape the user has in mind, so the drop
    * is taken as the first click, and the next clicks give the other corners.
    */
@@ -429,22 +455,19 @@ export function createPointerController(deps: PointerDeps) {
     const s = ed();
     if (s.readOnly) return;
     const world = worldOf(screenOf(e));
-    const p = snap(world, e).point;
     if (what.kind === "body" && what.polygon) {
-      s.setTool({ kind: "body", shape: "polygon", points: [p] });
-      s.notify("Polygon body: first corner placed. Click each next corner, then click the first corner or press Enter. Esc to stop.");
+      // the status line's hint follows the tool: it says the first corner is down
+      s.setTool({ kind: "body", shape: "polygon", points: [snap(world, e).point] });
       return;
     }
     if (what.kind === "body") {
-      // the centre keeps to the grid only: another body's corner means nothing for a centre
-      const centre = snapPoint(world, { bodies: [], grid: gridStep(s.view.scale), tolerance: 0, enabled: s.snap && !e.altKey }).point;
-      const size = defaultBodySize(s.view.scale);
+      const { centre, size } = bodyAround(world, e);
       if (!s.apply(bodyCommand(s.sketch, rectangleAround(centre, size)))) return;
       s.setTool({ kind: "select" });
       s.notify(`Body added, ${size[0]} m × ${size[1]} m. Drag its corners to reshape it.`);
       return;
     }
-    const out = placeCommand(s.sketch, stores.scene.getState(), what.kind, p, tolerance(), { friction: what.friction });
+    const out = place(what.kind, world, e, { friction: what.friction });
     if (!out.ok) return s.notify(out.message);
     if (s.apply(out.command)) s.setTool({ kind: "select" });
   }

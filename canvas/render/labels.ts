@@ -14,6 +14,9 @@
 import { textExtent, type Prim, type Pt } from "./prims";
 
 export type Box = { x0: number; y0: number; x1: number; y1: number };
+
+/** A box as offsets from a point (both in content px): `handlePlace` measures from the element's anchor. */
+export const shiftBox = (b: Box, from: readonly [number, number]): Box => ({ x0: b.x0 - from[0], y0: b.y0 - from[1], x1: b.x1 - from[0], y1: b.y1 - from[1] });
 type TextPrim = Extract<Prim, { t: "text" }>;
 type Segment = readonly [Pt, Pt];
 
@@ -367,18 +370,20 @@ function moveTexts(prims: Prim[], idx: readonly number[], dx: number, dy: number
  * before it: its own arrow; and inside the drawing area when given one (`frame`). `anchors`: the
  * point a label belongs to, by the index of its first text (a reaction's values: its support),
  * kept nearer it than any of `rivals` (every support, with a label or not; the anchors by default).
+ * `keepOut`: boxes no label may cover (the bodies' centres of gravity).
  */
 export function placeResultLabels(
   prims: readonly Prim[],
   under: readonly Prim[] = [],
   frame?: Box,
-  points: { anchors?: ReadonlyMap<number, LabelAnchor>; rivals?: readonly LabelAnchor[] } = {},
+  points: { anchors?: ReadonlyMap<number, LabelAnchor>; rivals?: readonly LabelAnchor[]; keepOut?: readonly Box[] } = {},
 ): Prim[] {
   const anchors = points.anchors ?? new Map<number, LabelAnchor>();
   const all = points.rivals ?? [...anchors.values()];
   const out = prims.slice();
   const leaders: Prim[] = [];
-  const placed: Box[] = [];
+  // marks no label may cover (the bodies' centres of gravity), as if labels were there
+  const placed: Box[] = [...(points.keepOut ?? [])];
   for (const p of under) if (p.t === "text") placed.push(textBox(p));
   for (const p of prims) if (p.t === "text" && p.pinned) placed.push(textBox(p));
   const strokes = new Strokes().add(strokesOf(under), -1);
@@ -417,18 +422,20 @@ export const NO_SHIFTS: LabelShifts = new Map();
  * pixels), inside it: a label cut by its edge moves in, with a leader. An element with an
  * `anchor` (its point, content px) keeps its labels nearer it than the point of any other element
  * of its family (a support's name beside that support, not the next one). `keepOut`: boxes no
- * label may cover (the turn handle of the element selected on the canvas). `prev` keeps the
+ * label may cover (the turn handle of the element selected on the canvas), as are a group's own
+ * `marks` (a body's centre of gravity, whose quartered circle would hide the words). `prev` keeps the
  * identity of unchanged entries (and of the whole map when nothing changed), so a canvas node is
  * drawn again only when its own labels move.
  */
 export function placeElementLabels(
-  groups: ReadonlyArray<{ id: string; kind?: string; prims: readonly Prim[]; anchor?: Pt }>,
+  groups: ReadonlyArray<{ id: string; kind?: string; prims: readonly Prim[]; anchor?: Pt; marks?: readonly Box[] }>,
   taken: readonly Prim[] = [],
   prev: LabelShifts = NO_SHIFTS,
   frame?: Box,
   keepOut: readonly Box[] = [],
 ): LabelShifts {
   const placed: Box[] = [...keepOut];
+  for (const g of groups) if (g.marks) placed.push(...g.marks);
   const anchorOf = (g: { kind?: string; anchor?: Pt }): LabelAnchor | undefined => {
     const family = anchorFamily(g.kind);
     return family && g.anchor && Number.isFinite(g.anchor[0]) && Number.isFinite(g.anchor[1]) ? { at: g.anchor, family } : undefined;

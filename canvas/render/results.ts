@@ -6,7 +6,7 @@ import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { SolveResult, Vec2 } from "@/solver/types";
 import type { Scene, SceneBody, SceneItem } from "../scene";
 import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp, solidArrow, sub, text, unit, type Prim, type Pt } from "./prims";
-import { anchorWorld, groundSideOf, labelAt, type DrawState } from "./symbols";
+import { anchorWorld, cgMarkBox, groundSideOf, labelAt, type DrawState } from "./symbols";
 import { nearestOnSegment } from "../geometry/polygon";
 import { CAUTION, INK, INK_SOFT, REACTION } from "./palette";
 import { placeResultLabels, type Box, type LabelAnchor } from "./labels";
@@ -240,7 +240,9 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     }
   }
 
-  const out = placeResultLabels(prims, o.under, o.frame, { anchors: labelAnchors, rivals: supports });
+  // no label on a centre of gravity's mark
+  const marks = scene.bodies.map((b) => px(b.cg, s)).filter(finite).map(cgMarkBox);
+  const out = placeResultLabels(prims, o.under, o.frame, { anchors: labelAnchors, rivals: supports, keepOut: marks });
   if (o.stale) for (const p of out) (p as { opacity?: number }).opacity = 0.38;
   return { prims: out, states };
 }

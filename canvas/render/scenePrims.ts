@@ -8,7 +8,7 @@ import { isFinitePoint } from "../geometry/polygon";
 import { placeElementLabels, shiftTexts, type Box, type LabelShifts } from "./labels";
 import { translate, type Prim, type Pt } from "./prims";
 import { resultPrims, supportStates } from "./results";
-import { anchorWorld, bodyPrims, cgPrims, groundSideOf, itemPrims, portKeepOutKey, standInPoint, unplacedPrims, type DrawState } from "./symbols";
+import { anchorWorld, bodyPrims, cgMarkBox, cgPrims, groundSideOf, itemPrims, portKeepOutKey, standInPoint, unplacedPrims, type DrawState } from "./symbols";
 
 // An element's primitives depend only on its scene object (which the editor replaces when it
 // changes), its body's (a pin or fixed support faces away from the body's edge), the zoom, the
@@ -25,8 +25,9 @@ function cachedPrims(owner: object, deps: readonly unknown[], make: () => Prim[]
   return entry;
 }
 
-/** An element's primitives; `anchor`: its point in content pixels, which its labels stay beside. */
-type Group = { id: string; kind: string; prims: Prim[]; anchor?: Pt };
+/** An element's primitives; `anchor`: its point in content pixels, which its labels stay beside;
+ *  `marks`: what no label may cover (a body's centre of gravity). */
+type Group = { id: string; kind: string; prims: Prim[]; anchor?: Pt; marks?: readonly Box[] };
 
 /** Every element's primitives in content pixels as its symbol draws them (names not yet moved). */
 export function elementGroups(scene: Scene, scale: number, units: UnitSystem, states: ReadonlyMap<string, DrawState> | null): Group[] {
@@ -39,7 +40,8 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
       if (Number.isFinite(b.cg[0])) out.push(...translate(cgPrims(), [b.cg[0] * scale, -b.cg[1] * scale]));
       return out;
     });
-    groups.push({ id: b.id, kind: "body", prims });
+    const cg: Pt = [b.cg[0] * scale, -b.cg[1] * scale];
+    groups.push({ id: b.id, kind: "body", prims, marks: Number.isFinite(cg[0]) && Number.isFinite(cg[1]) ? [cgMarkBox(cg)] : undefined });
   }
   for (const item of scene.items) {
     const found = scene.byId.get(item.body);

@@ -21,7 +21,7 @@ export interface SymbolOptions {
   state?: DrawState;
   /** show the element's label (or id) beside it */
   showName?: boolean;
-  /** boxes in content pixels a body's name keeps clear of when it can (its ports' bars and arrows: `portKeepOut`) */
+  /** boxes in content pixels a body's name keeps clear of when it can (its ports' bars and arrows, its mass sources: `portKeepOut`) */
   keepOut?: readonly Box[];
 }
 
@@ -29,8 +29,8 @@ export type { Box };
 
 /**
  * Where the ports of body `bodyId` draw inside its outline, in content pixels: the bar across the
- * face and the pressure force's arrow along the axis into the body (up to 60 px). A body's name
- * is placed clear of these when a corner allows.
+ * face and the pressure force's arrow along the axis into the body (up to 60 px); and its mass
+ * sources' droplets. A body's name is placed clear of these when a corner allows.
  */
 export function portKeepOut(items: readonly SceneItem[], bodyId: string, scale: number): Box[] {
   return JSON.parse(portKeepOutKey(items, bodyId, scale)) as Box[];
@@ -55,6 +55,12 @@ export function portKeepOutKey(items: readonly SceneItem[], bodyId: string, scal
 }
 
 function portBox(it: SceneItem, scale: number): Box | null {
+  // a mass source's droplet, inside the body: the name written through it reads as neither
+  if (it.kind === "massSource") {
+    if (!Number.isFinite(it.at[0]) || !Number.isFinite(it.at[1])) return null;
+    const [x, y] = [it.at[0] * scale, -it.at[1] * scale];
+    return { x0: x - 8, y0: y - 12, x1: x + 8, y1: y + 9 };
+  }
   if ((it.kind !== "inlet" && it.kind !== "outlet") || !Number.isFinite(it.at[0]) || !Number.isFinite(it.at[1]) || !Number.isFinite(it.angle)) return null;
   const a = (it.angle * Math.PI) / 180;
   // screen direction of the flow (y down); the body's inside is ahead of an inlet, behind an outlet
@@ -363,20 +369,22 @@ export function bodyPrims(b: SceneBody, o: SymbolOptions & { gravityOn?: boolean
     // clear of the centre-of-gravity mark and of the weight's arrow and label below and beside it
     const cg: Pt | null = Number.isFinite(b.cg[0]) && Number.isFinite(b.cg[1]) ? [b.cg[0] * o.scale, -b.cg[1] * o.scale] : null;
     const around: Box[] = cg ? [{ x0: cg[0] - 12, y0: cg[1] - 12, x1: cg[0] + 80, y1: cg[1] + 60 }] : [];
+    // at the least clear of the mark itself and of the weight's arrow hung under it: words with the
+    // mark drawn over them ("9⊕ kg") read as neither
+    const mark: Box[] = cg ? [cgMarkBox(cg), { x0: cg[0] - 4, y0: cg[1], x1: cg[0] + 4, y1: cg[1] + 52 }] : [];
     const ports = o.keepOut ?? [];
     const name = b.label || b.id;
     const mass = words.slice(name.length + 3);
     const oneWide = words.length * 6.4 + 8;
     const twoWide = Math.max(name.length, mass.length) * 6.4 + 8;
-    // clear of everything on one line, then on two; then clear of the ports at least (a port's bar
-    // and arrows over the name make both unreadable; the centre of gravity's mark is small)
+    // clear of everything on one line, then on two; then clear of the mark and the ports (sliding
+    // along past the mark where no corner is clear of it); nowhere inside clear of those: beside
+    // the body, as for a body too narrow for its name
     const tries: Array<{ place: ReturnType<typeof bodyLabelPoint>; two: boolean }> = [];
-    for (const avoid of ports.length ? [[...around, ...ports], ports] : [around])
-      for (const two of [false, true]) tries.push({ place: bodyLabelPoint(pts, two ? twoWide : oneWide, avoid, two ? 13 : 0), two });
-    // without ports: one line unless two lines are clear where one is not (one line, maybe outside, else)
-    const found = ports.length ? tries.find((t) => t.place.clear && !t.place.outside) : tries[0].place.clear ? tries[0] : tries[1].place.clear ? tries[1] : undefined;
-    // nowhere inside clear of a port: beside the body, as for a body too narrow for its name
-    const at = found?.place ?? (ports.length ? bodyLabelPoint(pts, Infinity) : tries[0].place);
+    for (const [avoid, slide] of [[[...around, ...ports], false], [[...mark, ...ports], true]] as const)
+      for (const two of [false, true]) tries.push({ place: bodyLabelPoint(pts, two ? twoWide : oneWide, avoid, two ? 13 : 0, slide), two });
+    const found = tries.find((t) => t.place.clear && !t.place.outside);
+    const at = found?.place ?? bodyLabelPoint(pts, Infinity);
     if (found?.two) {
       out.push(text(found.place.at, name, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
       out.push(text([found.place.at[0], found.place.at[1] + 13], mass, INK, 11, { weight: 600, align: "left", baseline: "middle", halo: false }));
@@ -387,15 +395,16 @@ export function bodyPrims(b: SceneBody, o: SymbolOptions & { gravityOn?: boolean
 
 /** A corner inside the outline where the body's name fits (top corners first), off every box of
  *  `avoid` when one can be (the centre of gravity and the weight, the ports), else the first that
- *  fits; beside the body when it fits nowhere inside. */
-function bodyLabelPoint(pts: Pt[], width: number, avoid: readonly Box[] = [], extra = 0): { at: Pt; clear: boolean; outside?: boolean } {
+ *  fits; beside the body when it fits nowhere inside. `slide`: each corner's line may also start
+ *  just past an avoided box, or end just before it (the name along the top edge, past the mark). */
+function bodyLabelPoint(pts: Pt[], width: number, avoid: readonly Box[] = [], extra = 0, slide = false): { at: Pt; clear: boolean; outside?: boolean } {
   const poly = pts.map((p) => [p[0], -p[1]] as Vec2);
   const inside = (p: Pt) => pointInPolygon([p[0], -p[1]], poly);
   const order = [...pts].sort((a, b) => a[0] + a[1] - (b[0] + b[1]) || a[1] - b[1]);
   // `extra`: the height of a second line under the first
-  const fits = order
-    .map((v): Pt => [v[0] + 7, v[1] + 13])
-    .filter((at) => inside(at) && inside([at[0] + width, at[1]]) && inside([at[0], at[1] - 6]) && inside([at[0] + width, at[1] + 6 + extra]) && inside([at[0], at[1] + 6 + extra]));
+  const starts = order.map((v): Pt => [v[0] + 7, v[1] + 13]);
+  const places = slide ? starts.flatMap((at): Pt[] => [at, ...avoid.flatMap((box): Pt[] => [[box.x1 + 3, at[1]], [box.x0 - 3 - width, at[1]]])]) : starts;
+  const fits = places.filter((at) => inside(at) && inside([at[0] + width, at[1]]) && inside([at[0], at[1] - 6]) && inside([at[0] + width, at[1] + 6 + extra]) && inside([at[0], at[1] + 6 + extra]));
   const clear = (at: Pt) => avoid.every((box) => at[0] + width < box.x0 || at[0] > box.x1 || at[1] + 7 + extra < box.y0 || at[1] - 7 > box.y1);
   const best = fits.find(clear);
   if (best) return { at: best, clear: true };
@@ -406,9 +415,17 @@ function bodyLabelPoint(pts: Pt[], width: number, avoid: readonly Box[] = [], ex
   return { at: [right + 6, top + 8], clear: true, outside: true };
 }
 
+/** The box (content px) the centre of gravity's mark at `c` covers, with a hair around it: no label goes on it. */
+export function cgMarkBox(c: Pt): Box {
+  const r = CG_RADIUS + 2;
+  return { x0: c[0] - r, y0: c[1] - r, x1: c[0] + r, y1: c[1] + r };
+}
+
+const CG_RADIUS = 6.5;
+
 /** The centre of gravity: a small quartered circle, around (0, 0). */
 export function cgPrims(color = INK): Prim[] {
-  const r = 6.5;
+  const r = CG_RADIUS;
   const wedge = (a0: number): Prim => {
     const pts: Pt[] = [[0, 0]];
     for (let i = 0; i <= 8; i++) {

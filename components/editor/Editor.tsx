@@ -9,7 +9,7 @@ import { EditorProvider, useEditor, useStores } from "@/canvas/context";
 import { createEditorStore, type EditorStore } from "@/canvas/store";
 import { createInteractionStore } from "@/canvas/konva/interaction";
 import type { PointerController } from "@/canvas/konva/pointer";
-import type { ActionContext } from "@/canvas/actions";
+import { noticesFollowTool, toolHint, type ActionContext } from "@/canvas/actions";
 import type { SketchPersistence } from "@/canvas/persistence";
 import type { SketchFile } from "@/solver/schema";
 import { startAutosave } from "@/canvas/autosave";
@@ -26,7 +26,7 @@ import { KeysDialog } from "./KeysDialog";
 import { CsvSubject } from "@/components/studies/csv";
 import { Toolbar } from "./Toolbar";
 import { Tray } from "./Tray";
-import { ActionContextCtx } from "./useActions";
+import { ActionContextCtx, useActionContext } from "./useActions";
 import { PersistenceCtx } from "./usePersistence";
 import { useFileOps } from "./useFileOps";
 import { useShortcuts } from "./useShortcuts";
@@ -50,34 +50,72 @@ function EditorCsvSubject({ children }: { children: ReactNode }) {
   return <CsvSubject.Provider value={title}>{children}</CsvSubject.Provider>;
 }
 
+/** A phone or a tablet: a touch screen's words (taps, Done) show instead of the keys' (Shift, Esc). */
+const KEYS_ONLY = "max-md:hidden pointer-coarse:hidden";
+const TOUCH_ONLY = "hidden max-md:inline pointer-coarse:inline";
+
+/** Words for a keyboard and a mouse, or for a touch screen, whichever the layout shows. */
+function KeysOrTouch({ keys, touch }: { keys: string; touch: string }) {
+  if (keys === touch) return <>{keys}</>;
+  return (
+    <>
+      <span className={KEYS_ONLY}>{keys}</span>
+      <span className={TOUCH_ONLY}>{touch}</span>
+    </>
+  );
+}
+
+/**
+ * Ends the tool in use: a polygon with three corners or more is closed, any other tool put down
+ * (a touch screen has no Esc).
+ */
+function useStopTool() {
+  const getCtx = useActionContext();
+  return () => {
+    const ctx = getCtx();
+    const t = ctx.stores.editor.getState().tool;
+    if (t.kind === "body" && t.shape === "polygon" && t.points.length >= 3 && ctx.controller) ctx.controller.finishPolygon();
+    else if (!ctx.controller?.cancel()) ctx.stores.editor.getState().setTool({ kind: "select" });
+  };
+}
+
 function StatusLine() {
   const notice = useEditor((s) => s.notice);
-  const tool = useEditor((s) => s.tool.kind);
+  const tool = useEditor((s) => s.tool);
   const readOnly = useEditor((s) => s.readOnly);
+  const stopTool = useStopTool();
+  // while a tool is on, its own words lead the line (unless something newer was said), and go with it
+  const keysTool = toolHint(tool);
+  const touchTool = toolHint(tool, true);
   // short enough to be read whole beside a notice; a phone gets its gestures (? lists every key)
   const hint = readOnly
     ? "Read only: click an element to see its values · Space+drag: pan · wheel: zoom"
-    : tool === "select"
+    : tool.kind === "select"
       ? "Drag: move · handles: turn, reshape · Shift+click: add to selection · Alt: no snap · Space+drag: pan · wheel: zoom"
       : "Esc: back to selecting · Alt: no snapping";
-  const touchHint = tool === "select" && !readOnly ? "Drag: move · two fingers: zoom and pan · ? lists the rest" : hint;
+  const touchHint = tool.kind === "select" && !readOnly ? "Drag: move · two fingers: zoom and pan · ? lists the rest" : tool.kind === "select" ? hint : "two fingers: zoom and pan";
+  const said = notice !== null || keysTool !== null;
   return (
     // two lines tall, always (a notice coming and going must not resize the drawing): a notice may
     // take both, and on a narrow window it takes the whole width from the hint
     <div className="flex h-9 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px] leading-[15px]" id="canvas-help">
-      <p className="line-clamp-2 min-w-0 flex-1 text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? undefined}>
-        {notice}
+      <p className="line-clamp-2 min-w-0 flex-1 text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? keysTool ?? undefined}>
+        {notice ?? (keysTool !== null && touchTool !== null ? <KeysOrTouch keys={keysTool} touch={touchTool} /> : null)}
       </p>
-      <p className={`line-clamp-2 min-w-0 text-right text-ink-faint ${notice ? "max-w-[45%] max-md:hidden" : "max-w-[70%]"}`} title={hint}>
-        {touchHint === hint ? (
-          hint
-        ) : (
-          <>
-            <span className="max-md:hidden">{hint}</span>
-            <span className="md:hidden">{touchHint}</span>
-          </>
-        )}
+      <p className={`line-clamp-2 min-w-0 text-right text-ink-faint ${said ? "max-w-[45%] max-md:hidden" : "max-w-[70%]"}`} title={hint}>
+        <KeysOrTouch keys={hint} touch={touchHint} />
       </p>
+      {tool.kind !== "select" ? (
+        <button
+          type="button"
+          onClick={stopTool}
+          className="h-7 shrink-0 rounded border border-ink/20 px-2.5 text-[12.5px] font-medium text-ink hover:border-ink/45"
+          title={tool.kind === "body" && tool.shape === "polygon" && tool.points.length >= 3 ? "Close the polygon" : "Back to selecting (Esc)"}
+          data-testid="stop-tool"
+        >
+          Done
+        </button>
+      ) : null}
     </div>
   );
 }
@@ -128,6 +166,8 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
       }),
     [stores],
   );
+  // the notice line speaks for the tool in use: a change of tool takes its words away
+  useEffect(() => noticesFollowTool(stores.editor), [stores]);
   const [keysOpen, setKeysOpen] = useState(false);
   const controllerRef = useRef<PointerController | null>(null);
   const setController = useCallback((c: PointerController | null) => {

@@ -397,10 +397,33 @@ describe("dragging from the tray onto the canvas", () => {
   it("a rectangle body dropped with Alt held is centred on the drop point itself", () => {
     const dt = transfer();
     fireEvent.dragStart(tray("body"), { dataTransfer: dt });
-    dropOn(dt, screenOf([10.03, 3.07]), true);
+    dropOn(dt, screenOf([5.03, 2.07]), true);
     const outline = ed().sketch.bodies.at(-1)!.outline as Vec2[];
-    // 2 m × 1 m about (10.03, 3.07)
-    expect(outline[0][0]).toBeCloseTo(9.03, 9);
-    expect(outline[0][1]).toBeCloseTo(2.57, 9);
+    // 2 m × 1 m about (5.03, 2.07)
+    expect(outline[0][0]).toBeCloseTo(4.03, 9);
+    expect(outline[0][1]).toBeCloseTo(1.57, 9);
+  });
+});
+
+describe("the preview of what a click places", () => {
+  const hoverAt = (at: Vec2) =>
+    act(() => {
+      container.dispatchEvent(new MouseEvent("pointermove", { clientX: at[0], clientY: at[1], bubbles: true }));
+    });
+  const warning = () => stage().find((n: Konva.Node) => n.getClassName() === "Text" && (n as Konva.Text).text().startsWith("not on a body"));
+
+  it("a pin's preview catches on the frame's edge 10 px below it (and goes there), and says where to go when far from every outline", async () => {
+    act(() => ed().setTool({ kind: "place", element: "pin" }));
+    // 10 px under the frame's bottom edge at 100 px/m: within the 12 px reach, the preview snaps onto the edge
+    hoverAt(screenOf([2.5, -0.1]));
+    await waitFor(() => expect(interaction.getState().hover).toEqual([2.6, 0]));
+    expect(warning()).toHaveLength(0);
+    // 1.5 m above the frame: no body there, nothing would be placed
+    hoverAt(screenOf([2, 2.5]));
+    await waitFor(() => expect(warning()).toHaveLength(1));
+    // a load would go on the nearest body: no warning for it
+    act(() => ed().setTool({ kind: "place", element: "force" }));
+    hoverAt(screenOf([2, 2.6]));
+    await waitFor(() => expect(warning()).toHaveLength(0));
   });
 });

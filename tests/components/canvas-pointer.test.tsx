@@ -13,7 +13,7 @@ import { createInteractionStore } from "@/canvas/konva/interaction";
 import { createPointerController, type HitInfo } from "@/canvas/konva/pointer";
 import { emptySketch, findElement } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
-import type { ActionContext } from "@/canvas/actions";
+import { toolHint, type ActionContext } from "@/canvas/actions";
 import { startAutosave } from "@/canvas/autosave";
 import type { SketchPersistence } from "@/canvas/persistence";
 import { useShortcuts } from "@/components/editor/useShortcuts";
@@ -192,15 +192,16 @@ describe("dropping a tray item on the canvas", () => {
 
   it("a rectangle body when zoomed far out is ten times the size, so it is not a speck", () => {
     ed().setView({ scale: 10, x: 100, y: 500 });
-    controller.drop({ kind: "body" }, { clientX: 100 + 30 * 10, clientY: 500 - 40 * 10, altKey: false });
-    expect(ed().sketch.bodies[2].outline).toEqual([[20, 35], [40, 35], [40, 45], [20, 45]]);
+    controller.drop({ kind: "body" }, { clientX: 100 + 30 * 10, clientY: 500 - 36 * 10, altKey: false });
+    expect(ed().sketch.bodies[2].outline).toEqual([[20, 31], [40, 31], [40, 41], [20, 41]]);
   });
 
   it("a polygon body starts the polygon tool with its first corner at the drop point; clicks add the rest", () => {
     drop({ kind: "body", polygon: true }, 0.02, 3.01);
     expect(ed().tool).toEqual({ kind: "body", shape: "polygon", points: [[0, 3]] });
     expect(ed().sketch.bodies).toHaveLength(2);
-    expect(ed().notice).toMatch(/first corner placed/);
+    // the status line's hint, read from the tool, says so
+    expect(toolHint(ed().tool)).toMatch(/^Polygon body: 1 corner placed\. Click each next corner/);
     for (const [x, y] of [[2, 3], [1, 4.4]]) down(x, y);
     controller.finishPolygon();
     expect(ed().sketch.bodies[2]).toMatchObject({ id: "b3", outline: [[0, 3], [2, 3], [1, 4.4]] });
@@ -369,6 +370,49 @@ describe("tools", () => {
     ed().setTool({ kind: "pick-point" });
     down(1.97, 0.02);
     expect(ed().momentPoint).toEqual([2, 0]);
+  });
+});
+
+describe("placing on an outline, and in view", () => {
+  const tap = (x: number, y: number) =>
+    controller.down({ ...screenOf(x, y), button: 0, pointerType: "touch", pointerId: 7, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, timeStamp: 0, preventDefault() {} } as unknown as PointerEvent);
+
+  it("a pin clicked in empty space, 0.9 m from the nearest body, is not placed: the hint says where, and the tool stays on", () => {
+    ed().setTool({ kind: "place", element: "pin" });
+    down(3.1, 0.5);
+    expect(ed().sketch.supports.map((x) => x.id)).toEqual(["s1"]);
+    expect(ed().notice).toBe("Click on or near a body's outline to place a support.");
+    expect(ed().tool).toEqual({ kind: "place", element: "pin" });
+    expect(ed().past).toHaveLength(0);
+  });
+
+  it("a tap 10 px under a body's edge puts the contact on the edge (past the 9 px snap, within the 12 px reach)", () => {
+    ed().setTool({ kind: "place", element: "contact" });
+    tap(5.13, -0.1);
+    expect(ed().sketch.supports[1]).toMatchObject({ id: "s2", body: "b2", kind: "contact", at: [5.2, 0], angle: 90 });
+    expect(ed().tool.kind).toBe("select");
+  });
+
+  it("a tap too far out says so in a tap's words; an outlet dropped from the tray far from any body is refused too", () => {
+    ed().setTool({ kind: "place", element: "tie" });
+    tap(3, 2);
+    expect(ed().notice).toBe("Tap on or near a body's outline to place a support.");
+    controller.drop({ kind: "outlet" }, { ...screenOf(3, 0.5), altKey: false });
+    expect(ed().sketch.ports).toHaveLength(1);
+    expect(ed().notice).toMatch(/^Click on or near a body's outline to place a port/);
+  });
+
+  it("a tap with the body tool on a phone's drawing near its right edge: a body centred on the tap, moved in to lie wholly in view", () => {
+    // 390 px wide, the world origin at (100, 500) as above: the right edge is x = 2.9 m
+    ed().setViewport({ width: 390, height: 600 });
+    ed().setTool({ kind: "body", shape: "rectangle", points: [] });
+    tap(2.6, 1);
+    window.dispatchEvent(Object.assign(new MouseEvent("pointerup", screenOf(2.6, 1)), { pointerType: "touch", pointerId: 7 }));
+    // centred on (2.6, 1) at 360 px it would reach 460 px, 78 px past 382: 0.8 m in (whole 0.2 m
+    // steps), so its right side is at 380 px (a body with its corner at the tap reached 560 px)
+    expect(ed().sketch.bodies[2].outline).toEqual([[0.8, 0.5], [2.8, 0.5], [2.8, 1.5], [0.8, 1.5]]);
+    expect(ed().notice).toBe("Body added, 2 m × 1 m. Drag its corners to reshape it.");
+    expect(ed().tool.kind).toBe("select");
   });
 });
 

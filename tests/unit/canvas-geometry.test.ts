@@ -65,11 +65,13 @@ describe("polygons", () => {
 describe("placing", () => {
   const file: SketchFile = { ...emptySketch(), bodies: [newBody("b1", square), newBody("b2", [[5, 0], [6, 0], [6, 1], [5, 1]])] };
   const scene = buildScene(file);
-  it("attaches to the body under the point, else the nearest", () => {
+  it("attaches a load to the body under the point, else the nearest; a support only on or near an outline", () => {
     expect(bodyAt(scene.bodies, [1, 0.5], 0.05)?.id).toBe("b1");
     expect(bodyAt(scene.bodies, [6.03, 0.5], 0.05)?.id).toBe("b2");
-    const out = placeCommand(file, scene, "pin", [4.2, 0], 0.05);
-    expect(out.ok && (out.command.args as { element: { body: string } }).element.body).toBe("b2");
+    const force = placeCommand(file, scene, "force", [4.2, 0], 0.05);
+    expect(force.ok && (force.command.args as { element: { body: string } }).element.body).toBe("b2");
+    // 0.8 m from the nearest outline: a pin there would belong to no body
+    expect(placeCommand(file, scene, "pin", [4.2, 0], 0.05)).toEqual({ ok: false, message: "Click on or near a body's outline to place a support." });
   });
   it("points a contact into the body and an outlet out of it when placed on an edge", () => {
     const b = scene.bodies[0];
