@@ -3,7 +3,7 @@
 // (or text); formatting is left to whoever shows them.
 import type { CaseRun, Component, StudyResult, SupportEnvelope } from "./cases";
 import { handCheckSums, termMomentAbout } from "./equations";
-import { FOOT_M, LBF_N } from "./constants";
+import { FOOT_M, G0, LBF_N } from "./constants";
 import { FIELD_UNIT_LABELS, kindOfUnit } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
@@ -34,8 +34,13 @@ export function cellNumberText(t: Pick<Table, "figures">, x: number): string {
 }
 
 export interface CellMark {
+  /** a shape before the number ("▲"), or "" for none */
   symbol: string;
+  /** the mark in words (for screen readers, and as the cell's title) */
   text: string;
+  /** the cell as printed in place of its number ("1.4e-16 (rounding)"); the cell itself, and so
+   *  the CSV, keeps the number */
+  shown?: string;
 }
 
 /** What a study's tables call a body or support: its label (the id when it has none). */
@@ -93,6 +98,34 @@ export function handCheckScale(eq: SolveResult["equations"][string], about: Vec2
     [...terms.flatMap((t) => [t.fx, t.fy]), sums.forces.fx, sums.forces.fy, sums.momentum.fx, sums.momentum.fy],
     [...terms.map((t) => termMomentAbout(t, about)), sums.forces.m, sums.momentum.m],
   );
+}
+
+/** The larger force and the larger moment of several scales: one unit family for all of them. */
+export function largestScale(...scales: Scale[]): Scale {
+  return { force: Math.max(0, ...scales.map((s) => s.force)), moment: Math.max(0, ...scales.map((s) => s.moment)) };
+}
+
+/**
+ * The scale of every table of a study: the reactions of each case (components, resultants, n, t,
+ * margins) and the figures behind its factors of safety (restoring and overturning moments,
+ * friction available and the driving force). The calc sheet takes one family for all its tables
+ * from this and the hand checks (`largestScale`), so a force reads in one unit across the sheet.
+ */
+export function studyScale(study: StudyResult): Scale {
+  const forces: Array<number | undefined> = [];
+  const moments: Array<number | undefined> = [];
+  for (const run of study.runs as CaseRun[]) {
+    if (!run.ok) continue;
+    for (const r of Object.values(run.result.reactions)) {
+      forces.push(r.fx, r.fy, Math.hypot(r.fx, r.fy), r.n, r.t, r.margin);
+      moments.push(r.m);
+    }
+    for (const st of Object.values(run.stability)) {
+      if (!("notApplicable" in st.overturning)) moments.push(st.overturning.restoring, st.overturning.overturning);
+      if (!("notApplicable" in st.sliding)) forces.push(st.sliding.available, st.sliding.driving);
+    }
+  }
+  return scaleOf(forces, moments);
 }
 
 /** A table's force and moment units. */
@@ -175,7 +208,7 @@ export function reactionTable(
         inUnit(fx, "force", u),
         inUnit(fy, "force", u),
         inUnit(res, "force", u),
-        res > 0 ? Number(((Math.atan2(fy, fx) * 180) / Math.PI).toFixed(2)) : null,
+        res > 0 ? (Math.atan2(fy, fx) * 180) / Math.PI : null,
         inUnit(sign * r.m, "moment", u),
         inUnit(r.n === undefined ? undefined : sign * r.n, "force", u),
         inUnit(r.t === undefined ? undefined : sign * r.t, "force", u),
@@ -200,6 +233,26 @@ function reactionNotes(result: SolveResult, opts: { onSupport?: boolean; names?:
     );
   }
   return notes.length ? notes : undefined;
+}
+
+/**
+ * The case whose run is the sketch as drawn over again (same reactions, states and factors of
+ * safety: its overrides restate the drawing's values), or null. A sheet that printed both would
+ * say every finding of that state twice, under two names; it says it once, under the case's name
+ * with "as drawn" beside it.
+ */
+export function asDrawnTwin(study: StudyResult, asDrawn: StudyResult): string | null {
+  if (study === asDrawn || asDrawn.runs.length !== 1) return null;
+  const drawn = asDrawn.runs[0];
+  if (!drawn.ok) return null;
+  const key = (run: CaseRun & { ok: true }) => JSON.stringify([run.result.reactions, run.result.bodies, run.stability]);
+  const k = key(drawn);
+  return study.runs.find((r) => r.ok && r.kind === "case" && key(r) === k)?.id ?? null;
+}
+
+/** The study with one run renamed (the case that is the sketch as drawn: "Lance raised to −50°, as drawn"). */
+export function withRunName(study: StudyResult, id: string, name: string): StudyResult {
+  return { ...study, runs: study.runs.map((r) => (r.id === id ? { ...r, name } : r)) };
 }
 
 /** Words for a run left out of the envelope: "Case X — trailer tips: not in the envelope; …". */
@@ -256,10 +309,11 @@ function governs(env: SupportEnvelope, c: Component, run: string): "max" | "min"
 }
 
 /** Every support in every case: the table of the studies. The governing case of each component is
- *  marked in its cell (▲ by its maximum, ▼ by its minimum) and named in the "Governs" column. */
-export function caseReactionTable(study: StudyResult, system: UnitSystem): Table {
+ *  marked in its cell (▲ by its maximum, ▼ by its minimum) and named in the "Governs" column.
+ *  `scale`: the units of a larger whole (the calc sheet's), else the table's own values choose them. */
+export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?: Scale): Table {
   const all = study.runs.flatMap((run) => (run.ok ? Object.values(run.result.reactions) : []));
-  const u = tableUnits(system, all.flatMap((r) => [Math.hypot(r.fx, r.fy), r.n, r.t]), all.map((r) => r.m));
+  const u = scale ? unitsOf(system, scale) : tableUnits(system, all.flatMap((r) => [Math.hypot(r.fx, r.fy), r.n, r.t]), all.map((r) => r.m));
   const f = u.force;
   const m = u.moment;
   const rows: Cell[][] = [];
@@ -339,11 +393,11 @@ function envelopeComponents(env: SupportEnvelope): Component[] {
 
 /** Max and min of each reaction component over the cases, each with the case that gives it, and
  *  the governing case (the largest magnitude; for a margin the smallest value). */
-export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
+export function envelopeTable(study: StudyResult, system: UnitSystem, scale?: Scale): Table {
   const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
   const rows: Cell[][] = [];
   const extremes = (c: Component) => Object.values(study.envelope).flatMap((env) => (env.components[c] ? [env.components[c]!.max.value, env.components[c]!.min.value] : []));
-  const u = tableUnits(system, (["fx", "fy", "n", "t", "margin"] as const).flatMap(extremes), extremes("m"));
+  const u = scale ? unitsOf(system, scale) : tableUnits(system, (["fx", "fy", "n", "t", "margin"] as const).flatMap(extremes), extremes("m"));
   for (const [id, env] of Object.entries(study.envelope)) {
     for (const c of envelopeComponents(env)) {
       const e = env.components[c]!;
@@ -354,7 +408,7 @@ export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
       rows.push([nameIn(study, id), COMPONENT_LABEL[c], unitOf(q, u), inUnit(e.max.value, q, u), name(e.max.case), inUnit(e.min.value, q, u), name(e.min.case), zero ? "none (zero in every case)" : gov ? name(gov) : ""]);
     }
   }
-  return {
+  return withRowUnitsInHeader({
     id: "envelope",
     title: "Envelope of the reactions (forces on the body)",
     columns: [
@@ -372,13 +426,26 @@ export function envelopeTable(study: StudyResult, system: UnitSystem): Table {
       "Governing case: the one with the largest magnitude; for the margin of a contact or tie, the smallest (the case where it comes closest to lifting or going slack; below zero it has lifted or gone slack).",
       "A case in which the body tips or is unrestrained is not in the envelope or the design loads (see the note above the tables).",
     ],
-  };
+  });
+}
+
+/**
+ * A table whose rows give their own unit (the envelope's "Unit" column: forces and moments in
+ * one table) with the units of its rows in the headings of its number columns too ("kN", or
+ * "kN / kN·m" when it has moment rows), so a heading always says what its numbers are in.
+ */
+export function withRowUnitsInHeader(t: Table): Table {
+  const ui = t.columns.findIndex((c) => c.key === "unit");
+  if (ui < 0) return t;
+  const units = [...new Set(t.rows.map((r) => r[ui]).filter((u): u is string => typeof u === "string" && u !== ""))];
+  const unit = units.length ? units.join(" / ") : undefined;
+  return { ...t, columns: t.columns.map((c) => ((c.align ?? "right") === "right" && c.key !== "unit" ? { ...c, unit } : c)) };
 }
 
 /** Each support's design load: its largest resultant over the cases, with its direction. */
-export function designLoadTable(study: StudyResult, system: UnitSystem): Table {
+export function designLoadTable(study: StudyResult, system: UnitSystem, scale?: Scale): Table {
   const designs = Object.values(study.envelope).map((env) => env.design);
-  const u = tableUnits(system, designs.map((d) => d.resultant), designs.map((d) => d.m));
+  const u = scale ? unitsOf(system, scale) : tableUnits(system, designs.map((d) => d.resultant), designs.map((d) => d.m));
   const f = u.force;
   const m = u.moment;
   const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
@@ -397,7 +464,7 @@ export function designLoadTable(study: StudyResult, system: UnitSystem): Table {
     rows: Object.entries(study.envelope).map(([id, env]) => [
       nameIn(study, id),
       inUnit(env.design.resultant, "force", u),
-      Number(env.design.angle.toFixed(2)),
+      env.design.angle,
       inUnit(env.design.fx, "force", u),
       inUnit(env.design.fy, "force", u),
       inUnit(env.design.m, "moment", u),
@@ -408,14 +475,16 @@ export function designLoadTable(study: StudyResult, system: UnitSystem): Table {
 }
 
 /** Factors of safety with the figures behind them: restoring and overturning moment, or the
- *  friction available and the force that drives sliding. */
-export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): Table {
+ *  friction available and the force that drives sliding. Every number column holds numbers only
+ *  (unrounded; a factor without bound is left empty and said in words in the note column), so a
+ *  spreadsheet reads them as numbers. `scale`: the units of a larger whole (the calc sheet's). */
+export function stabilityTable(study: StudyResult, system: UnitSystem = "SI", scale?: Scale): Table {
   const rows: Cell[][] = [];
   const checks = (study.runs as CaseRun[]).flatMap((run) => (run.ok ? Object.values(run.stability) : []));
   const figures = (s: { restoring?: number; overturning?: number; available?: number; driving?: number } | { notApplicable: string }) =>
     "notApplicable" in s ? [] : [s.restoring, s.overturning, s.available, s.driving];
-  const u = tableUnits(system, checks.flatMap((c) => figures(c.sliding)), checks.flatMap((c) => figures(c.overturning)));
-  const verdict = (s: { factor: number; required: number; pass: boolean }) => [Number.isFinite(s.factor) ? Number(s.factor.toPrecision(4)) : "∞", s.required, s.pass ? "pass" : "FAIL"];
+  const u = scale ? unitsOf(system, scale) : tableUnits(system, checks.flatMap((c) => figures(c.sliding)), checks.flatMap((c) => figures(c.overturning)));
+  const verdict = (s: { factor: number; required: number; pass: boolean }) => [Number.isFinite(s.factor) ? s.factor : null, s.required, s.pass ? "pass" : "FAIL"];
   for (const run of study.runs as CaseRun[]) {
     if (!run.ok) continue;
     for (const [body, st] of Object.entries(run.stability)) {
@@ -424,7 +493,17 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
       else rows.push([run.name, nameIn(study, body), "overturning", inUnit(ot.restoring, "moment", u), inUnit(ot.overturning, "moment", u), u.moment, ...verdict(ot), nameIn(study, ot.about)]);
       const sl = st.sliding;
       if ("notApplicable" in sl) rows.push([run.name, nameIn(study, body), "sliding", null, null, "", null, null, sl.notApplicable, ""]);
-      else rows.push([run.name, nameIn(study, body), sl.wholeBody ? "sliding (as a whole: it tips)" : "sliding", inUnit(sl.available, "force", u), inUnit(sl.driving, "force", u), u.force, ...verdict(sl), ""]);
+      else
+        rows.push([
+          run.name,
+          nameIn(study, body),
+          sl.wholeBody ? "sliding (as a whole: it tips)" : "sliding",
+          inUnit(sl.available, "force", u),
+          inUnit(sl.driving, "force", u),
+          u.force,
+          ...verdict(sl),
+          Number.isFinite(sl.factor) ? "" : "no force drives it to slide: the factor has no bound",
+        ]);
     }
   }
   return {
@@ -434,13 +513,13 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI"): T
       { key: "case", label: "Case", align: "left" },
       { key: "body", label: "Body", align: "left" },
       { key: "check", label: "Against", align: "left" },
-      { key: "resisting", label: "Restoring M / friction available" },
-      { key: "acting", label: "Overturning M / driving force" },
+      { key: "resisting", label: "Restoring M / friction available", unit: `${u.moment} / ${u.force}` },
+      { key: "acting", label: "Overturning M / driving force", unit: `${u.moment} / ${u.force}` },
       { key: "unit", label: "Unit", align: "left" },
       { key: "factor", label: "Factor" },
       { key: "required", label: "Required" },
       { key: "verdict", label: "Verdict", align: "left" },
-      { key: "note", label: "Tips about", align: "left" },
+      { key: "note", label: "Tips about, or note", align: "left" },
     ],
     rows,
     notes: [
@@ -500,12 +579,14 @@ export function handCheckDifferenceText(shown: number, rounding: boolean, unit =
   return rounding ? `${formatTiny(shown)}${u} (rounding)` : `${handCheckNumber(shown)}${u}`;
 }
 
-/** The hand check: every term with its components, point of action and moment about `about`. */
-export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem): Table {
+/** The hand check: every term with its components, point of action and moment about `about`.
+ *  `opts.scale`: the units of a larger whole (the calc sheet's), else the check's own values choose them. */
+export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem, opts: { scale?: Scale } = {}): Table {
   const eq = result.equations[bodyId];
   const sums = handCheckSums(eq, about);
+  // its own scale says what is floating-point noise; the units may be the sheet's
   const scale = handCheckScale(eq, about);
-  const u = unitsOf(system, scale);
+  const u = unitsOf(system, opts.scale ?? scale);
   const f = u.force;
   const m = u.moment;
   const L = columnUnit("length", system);
@@ -526,11 +607,14 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
   const qOf = (k: (typeof keys)[number]): Quantity => (k === "m" ? "moment" : "force");
   const sides = Object.fromEntries(keys.map((k) => [k, handCheckSides(sums.forces[k], sums.momentum[k], sums.imbalance[k], scale)])) as Record<(typeof keys)[number], HandCheckSides>;
   const shown = (v: number, q: Quantity) => inUnit(v, q, u) ?? 0;
-  // the difference as computed: 0, a number, or its rounding noise in words (never a bare 0 beside two different sums)
-  const diffCell = (k: (typeof keys)[number]): Cell => {
+  // the difference as computed: 0 or a number, its rounding noise printed in words (never a bare 0
+  // beside two different sums) while the cell, and so the CSV, keeps the number
+  const diffCell = (k: (typeof keys)[number]): Cell => shown(sides[k].difference, qOf(k));
+  const diffMarks: Record<string, CellMark> = {};
+  for (const k of keys) {
     const d = shown(sides[k].difference, qOf(k));
-    return d !== 0 && sides[k].rounding ? handCheckDifferenceText(d, true) : d;
-  };
+    if (d !== 0 && sides[k].rounding) diffMarks[k] = { symbol: "", text: "floating-point rounding of the sums, not a figure of the check", shown: handCheckDifferenceText(d, true) };
+  }
   const agree = keys.filter((k) => handCheckNumber(shown(sides[k].forces, qOf(k))) === handCheckNumber(shown(sides[k].momentum, qOf(k))));
   const differ = keys.filter((k) => !agree.includes(k));
   const name = { fx: "ΣFx", fy: "ΣFy", m: "ΣM" } as const;
@@ -554,6 +638,7 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
       ["total", "Σ(ṁV)out − Σ(ṁV)in", shown(sides.fx.momentum, "force"), shown(sides.fy.momentum, "force"), "", shown(sides.m.momentum, "moment")],
       ["total", "imbalance (0 when the body holds)", diffCell("fx"), diffCell("fy"), "", diffCell("m")],
     ],
+    marks: Object.keys(diffMarks).length ? [...eq.forces.map(() => undefined), ...eq.momentum.map(() => undefined), undefined, undefined, diffMarks] : undefined,
     figures: HAND_CHECK_FIGURES,
     notes: [
       `ΣFx = ${fmt(sides.fx.forces, "force")} and Σ(ṁV)x = ${fmt(sides.fx.momentum, "force")}; ΣFy = ${fmt(sides.fy.forces, "force")} and Σ(ṁV)y = ${fmt(sides.fy.momentum, "force")}; ΣM about ${point} = ${fmt(sides.m.forces, "moment")} and Σ r × ṁV = ${fmt(sides.m.momentum, "moment")}.`,
@@ -595,8 +680,18 @@ export function parametersTable(parsed: Extract<ParseResult, { ok: true }>, syst
   };
 }
 
-/** Every element with its fields: as typed, and (for expressions) the value in SI units. */
-export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: UnitSystem = "SI"): Table {
+/** The words a table of inputs calls a field and a kind by: the properties form's ("volume flow",
+ *  "friction μ", "mass source"), which live with the form; absent, the file format's names. */
+export interface InputWords {
+  /** a field of an element of a kind (`kind`: "body", "contact", "outlet", "massSource"…), in a sentence's words */
+  field: (kind: string, key: string) => string;
+  /** an element kind in words */
+  kind: (kind: string) => string;
+}
+
+/** Every element with its fields: as typed, and (for expressions) the value in SI units.
+ *  `words`: the fields and kinds in the words of the properties form (the calc sheet's). */
+export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: UnitSystem = "SI", words?: InputWords): Table {
   const rows: Cell[][] = [];
   const groups = ["bodies", "supports", "loads", "ports", "massSources"] as const;
   // a US sheet gives each dimensional value in US customary units too, so it reads beside the hand check
@@ -629,14 +724,18 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: 
   for (const g of groups) {
     (parsed.file[g] as Array<Record<string, unknown>>).forEach((el, i) => {
       const parts: string[] = [];
+      // "bodies" → "body", "massSources" → "massSource": the element kinds of the file format
+      const kind = (el.kind as string | undefined) ?? g.replace(/ies$/, "y").replace(/s$/, "");
+      // "mass flow ṁ: 2 kg/s" in the form's words (the colon keeps a symbol apart from a value), "massFlow 2 kg/s" in the file's
+      const name = (k: string) => (words ? `${words.field(kind, k)}:` : k);
       for (const [k, raw] of Object.entries(el)) {
         if (["id", "label", "body", "kind"].includes(k)) continue;
         const path = `${g}[${i}].${k}`;
-        if (k === "outline") parts.push(`outline ${(raw as unknown[]).map((p, j) => point(p, `${path}[${j}]`).replace(/ m( = .*)?$/, "")).join(" ")} m`);
-        else if (Array.isArray(raw)) parts.push(`${k} ${point(raw, path)}`);
-        else parts.push(`${k} ${show(raw, path, k)}`);
+        if (k === "outline") parts.push(`${name(k)} ${(raw as unknown[]).map((p, j) => point(p, `${path}[${j}]`).replace(/ m( = .*)?$/, "")).join(" ")} m`);
+        else if (Array.isArray(raw)) parts.push(`${name(k)} ${point(raw, path)}`);
+        else parts.push(`${name(k)} ${show(raw, path, k)}`);
       }
-      rows.push([el.id as string, (el.kind as string | undefined) ?? g.replace(/ies$/, "y").replace(/s$/, ""), (el.label as string | undefined) ?? "", (el.body as string | undefined) ?? "", parts.join("; ")]);
+      rows.push([el.id as string, words ? words.kind(kind) : kind, (el.label as string | undefined) ?? "", (el.body as string | undefined) ?? "", parts.join("; ")]);
     });
   }
   const gv = parsed.fields.gravity;
@@ -644,10 +743,14 @@ export function inputsTable(parsed: Extract<ParseResult, { ok: true }>, system: 
   const angle = ga && "value" in ga ? ga.value : -90;
   const acts = gravityActs(angle);
   const typed = typeof parsed.file.gravityAngle === "string" && acts !== "acts in −y" ? ` (${parsed.file.gravityAngle})` : "";
-  rows.unshift(["gravity", "", "", "", `${gv && "value" in gv ? Number(gv.value.toPrecision(6)) : 9.80665} m/s² (${acts}${typed})`]);
+  // gravity in the sheet's units: 9.80665 m/s² is 32.174 ft/s² (9.80665 / 0.3048, NIST SP 811)
+  const g = gv && "value" in gv ? gv.value : G0;
+  const gravity = system === "US" ? formatQuantity(g, "acceleration", "US", { sig: 6 }) : `${formatNumber(g, 6)} m/s²`;
+  rows.unshift([words ? words.field("sketch", "gravity").toLowerCase() : "gravity", "", "", "", `${gravity} (${acts}${typed})`]);
+  const named = words ? "fields in the words of the properties form" : "fields by their names in the sketch file";
   return {
     id: "inputs",
-    title: system === "US" ? "Elements (fields by their names in the sketch file, as typed; expressions with their values in SI units, US customary in brackets, angles in degrees)" : "Elements (fields by their names in the sketch file, as typed; expressions with their values in SI units, angles in degrees)",
+    title: system === "US" ? `Elements (${named}, as typed; expressions with their values in SI units, US customary in brackets, angles in degrees)` : `Elements (${named}, as typed; expressions with their values in SI units, angles in degrees)`,
     columns: [
       { key: "id", label: "Id", align: "left" },
       { key: "kind", label: "Kind", align: "left" },
@@ -679,10 +782,15 @@ const PREFIXED: Readonly<Record<string, true>> = { force: true, moment: true, pr
 
 const US_QUANTITY: Readonly<Record<string, true>> = { length: true, mass: true, force: true, moment: true, lineLoad: true, massFlow: true, velocity: true, pressure: true, area: true, density: true, volumeFlow: true, stiffness: true, acceleration: true };
 
-/** CSV of a table: a header with units, numbers unformatted (6 significant figures). */
+/**
+ * CSV of a table: a header with units, every number unformatted at full precision (the shortest
+ * text that reads back as the same double; a spreadsheet rounds it as it is told to), an empty
+ * cell where there is none. The table's number columns hold numbers only, so none of them has a
+ * word or a symbol in it (a factor without bound is empty, with the words in a text column).
+ */
 export function tableToCsv(t: Table, unparse: (rows: unknown[][]) => string): string {
   const header = t.columns.map((c) => (c.unit ? `${c.label} (${c.unit})` : c.label || c.key));
-  const rows = t.rows.map((r) => r.map((c) => (typeof c === "number" ? Number(c.toPrecision(6)) : (c ?? ""))));
+  const rows = t.rows.map((r) => r.map((c) => (typeof c === "number" ? (Number.isFinite(c) ? (Object.is(c, -0) ? 0 : c) : "") : (c ?? ""))));
   return unparse([header, ...rows]);
 }
 

@@ -3,7 +3,7 @@
 // reads like a computed result. It is left out then, and kept (zeros included) when a fixed
 // support exists.
 import type { StudyResult } from "@/solver/cases";
-import type { Table } from "@/solver/report";
+import { withRowUnitsInHeader, type Table } from "@/solver/report";
 
 /** Does any support in the study carry a moment (is any of them a fixed support)? */
 export function hasMomentSupport(study: StudyResult): boolean {
@@ -19,7 +19,8 @@ export function withoutAbsentMoment(table: Table, study: StudyResult): Table {
   const component = table.columns.findIndex((c) => c.key === "component");
   if (component >= 0) {
     const keep = table.rows.map((r) => r[component] !== "M");
-    return { ...table, rows: table.rows.filter((_, i) => keep[i]), marks: table.marks?.filter((_, i) => keep[i]) };
+    // without its moment rows, the headings say the force unit alone
+    return withRowUnitsInHeader({ ...table, rows: table.rows.filter((_, i) => keep[i]), marks: table.marks?.filter((_, i) => keep[i]) });
   }
   const ci = table.columns.findIndex((c) => c.key === "m");
   if (ci < 0) return table;

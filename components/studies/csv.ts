@@ -3,8 +3,13 @@ import Papa from "papaparse";
 import { createContext, useContext } from "react";
 import { tableToCsv, type Table } from "@/solver/report";
 
+/** The UTF-8 byte order mark: without it Excel opens a CSV in the system's code page, and −, °, ·,
+ *  μ and ▲ come out as mojibake (common practice for CSV meant for Excel). */
+export const UTF8_BOM = "\ufeff";
+
+/** The file's text: the byte order mark, then the table (units in its header, full-precision numbers). */
 export function csvOf(table: Table): string {
-  return tableToCsv(table, (rows) => Papa.unparse(rows));
+  return UTF8_BOM + tableToCsv(table, (rows) => Papa.unparse(rows));
 }
 
 /** What the downloads are of ("DN150 bend v2"): the page says, and each file name starts with it. */

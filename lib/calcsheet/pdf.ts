@@ -27,7 +27,22 @@ import { caseWarnings, combinationWarnings } from "@/solver/cases";
 import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
 import { defaultMomentPoint } from "@/components/results/handCheck";
-import { caseFindings, designLoadTable, excludedWords, slipWords, unsolvedWords, type Table } from "@/solver/report";
+import {
+  asDrawnTwin,
+  caseFindings,
+  designLoadTable,
+  excludedWords,
+  handCheckScale,
+  largestScale,
+  slipWords,
+  studyScale,
+  unitFamily,
+  unsolvedWords,
+  withRunName,
+  type Table,
+} from "@/solver/report";
+import { fieldWords } from "@/components/editor/fieldDefs";
+import { KIND_LABEL, type ElementKind } from "@/canvas/model/elements";
 import { lineChartSvg } from "./chart";
 import { sweepCharts, sweepEverywhere, sweepQuantities } from "./sweeps";
 import { registerFonts } from "./fonts";
@@ -90,6 +105,19 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const study = solveCases(parsed.file);
   // the values on the drawing are a state of their own: with cases, solved apart for its factors of safety
   const asDrawn = parsed.file.cases?.length || parsed.file.combinations?.length ? asDrawnStudy(parsed.file) : study;
+  // unless a case is that state over again: then its findings and factors of safety are said once,
+  // under the case's name with "as drawn" beside it (the reaction tables keep the case's own name)
+  const twin = asDrawnTwin(study, asDrawn);
+  const twinName = (name: string) => `${name}, as drawn`;
+  const named = twin ? withRunName(study, twin, twinName(study.runs.find((r) => r.id === twin)!.name)) : study;
+  // each body's hand check, about the point the results panel's takes by default (the body's first
+  // support, else its centre of gravity), so the sheet and the screen show the same terms
+  const handChecks = Object.keys(result.bodies).map((id) => ({ id, about: defaultMomentPoint(result.equations[id], parsed.sketch.bodies.find((b) => b.id === id)?.cg) }));
+  // one unit family for the whole sheet, from its largest force or moment (the hand checks, every
+  // case's reactions and the figures of its factors of safety): N with N·m only when all of it is
+  // below 1 kN (1 kN·m), else kN with kN·m; lbf with lbf·ft, or kip with kip·ft from 10 kip (10 kip·ft)
+  const sheetScale = largestScale(studyScale(study), studyScale(asDrawn), ...handChecks.map((h) => handCheckScale(result.equations[h.id], h.about)));
+  const family = unitFamily(units, sheetScale);
 
   const doc = new PDFDocument({ size: "A4", margins: { top: 44, bottom: 54, left: 44, right: 44 }, bufferPages: true, info: { Title: `${input.sketchTitle} v${input.version}`, Author: "Counterpoise", Subject: "Calculation sheet" } });
   registerFonts(doc);
@@ -138,13 +166,14 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     for (const w of more) para(`Warning: ${w.message}`, 8.5, w.code === "SLIP" || w.code === "LIFTOFF" || w.code === "SLACK" ? ACCENT : SOFT);
   }
   // the sheet's first page says when another case does not hold or a factor of safety falls short
-  const drawnLines = hasCases ? caseFindings(asDrawn, false) : [];
+  // (a case that is the sketch as drawn says its findings once, under its own name)
+  const drawnLines = hasCases && !twin ? caseFindings(asDrawn, false) : [];
   if (drawnLines.length) {
     doc.moveDown(0.3);
     para("Factors of safety as drawn:", 9, INK);
     for (const l of drawnLines) para(`• ${l}`, 8.5, ACCENT);
   }
-  const caseLines = caseFindings(study, hasCases);
+  const caseLines = caseFindings(named, hasCases);
   if (caseLines.length) {
     doc.moveDown(0.3);
     para(hasCases ? "In the cases and combinations:" : "Factors of safety:", 9, INK);
@@ -171,7 +200,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     doc.moveDown(0.4);
   }
   if (Object.keys(parsed.parameterValues).length) drawTable(doc, parametersTable(parsed, units), left, width);
-  drawTable(doc, inputsTable(parsed, units), left, width);
+  // the fields and kinds in the words of the properties form, not the file format's names
+  drawTable(doc, inputsTable(parsed, units, { field: fieldWords, kind: (k) => KIND_LABEL[k as ElementKind]?.toLowerCase() ?? k }), left, width);
 
   // ---- cases
   if (parsed.file.cases?.length || parsed.file.combinations?.length) {
@@ -183,7 +213,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       const f = c.flowFactor;
       const flow = f !== undefined && f !== 1 ? [`flow factor ${f} (every port's ṁ and V × ${f}, momentum flux × ${Number((f * f).toPrecision(4))})`] : [];
       const bits = [...over, ...fac, ...flow, ...(c.onlyInCombinations ? ["a load case, solved only in the combinations that name it"] : [])];
-      para(`${c.name}: ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
+      para(`${c.id === twin ? twinName(c.name) : c.name}: ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
       for (const w of caseWarnings(parsed.file, c)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
     for (const k of parsed.file.combinations ?? []) {
@@ -195,38 +225,35 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
 
   // ---- conventions: what a checker needs to redo the tables below by hand
   heading("Conventions");
-  for (const c of CONVENTIONS) para(`• ${c}`);
+  for (const c of [...CONVENTIONS, unitsConvention(family, units)]) para(`• ${c}`);
 
   // ---- hand check
-  for (const bodyId of Object.keys(result.bodies)) {
+  for (const { id: bodyId, about } of handChecks) {
     heading(`Hand check — ${bodyId}`);
-    // about the point the results panel's hand check takes by default (the body's first support,
-    // else its centre of gravity), so the sheet and the screen show the same terms
-    const about = defaultMomentPoint(result.equations[bodyId], parsed.sketch.bodies.find((b) => b.id === bodyId)?.cg);
-    drawTable(doc, handCheckTable(result, bodyId, about, units), left, width);
+    drawTable(doc, handCheckTable(result, bodyId, about, units, { scale: sheetScale }), left, width);
   }
 
   // ---- reactions per case, envelope, stability
   if (hasCases) {
     heading("Reactions per case (forces on the body)");
-    drawTable(doc, withoutAbsentMoment(caseReactionTable(study, units), study), left, width, { groupBy: "case" });
+    drawTable(doc, withoutAbsentMoment(caseReactionTable(study, units, sheetScale), study), left, width, { groupBy: "case" });
     heading("Envelope and design loads");
     for (const w of [...excludedWords(study), ...slipWords(study)]) para(w, 8.5, ACCENT);
     const unsolved = unsolvedWords(study);
     if (unsolved) para(unsolved, 8.5, ACCENT);
     else {
-      drawTable(doc, withoutAbsentMoment(envelopeTable(study, units), study), left, width, { groupBy: "support" });
-      drawTable(doc, withoutAbsentMoment(designLoadTable(study, units), study), left, width);
+      drawTable(doc, withoutAbsentMoment(envelopeTable(study, units, sheetScale), study), left, width, { groupBy: "support" });
+      drawTable(doc, withoutAbsentMoment(designLoadTable(study, units, sheetScale), study), left, width);
     }
   } else {
     // one run: an envelope of it, or a governing case among one, would only repeat its numbers
     heading("Reactions as drawn (forces on the body)");
     para("No operating cases are defined: these are the reactions of the sketch as drawn.", 8.5, SOFT);
-    drawTable(doc, singleRunTable(withoutAbsentMoment(caseReactionTable(study, units), study)), left, width);
+    drawTable(doc, singleRunTable(withoutAbsentMoment(caseReactionTable(study, units, sheetScale), study)), left, width);
   }
   heading("Stability");
-  // with cases, the sketch as drawn first: its own state, then each case's
-  drawTable(doc, stabilityTable(withAsDrawnRun(study, asDrawn), units), left, width, { groupBy: "case" });
+  // with cases, the sketch as drawn first: its own state, then each case's (once, when a case is it)
+  drawTable(doc, stabilityTable(twin ? named : withAsDrawnRun(study, asDrawn), units, sheetScale), left, width, { groupBy: "case" });
 
   // ---- sweeps: each on its saved case, one chart per unit (forces, moments, ratios)
   for (const sw of parsed.file.sweeps ?? []) {
@@ -240,7 +267,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     if (overridden !== undefined) para(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`, 8.5, INK);
     if (combination) para(`Each point is solved as the combination's factored load set (${combinationTerms(combination, parsed.file.cases)}), with the sweep's value of ${sw.parameter} in every one of its cases.`, 8.5, INK);
     try {
-      const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions));
+      const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions), family);
       for (const spec of charts) {
         ensureSpace(doc, 280);
         SVGtoPDF(doc, haloBehindLabels(lineChartSvg(spec)), left, doc.y, { width, height: width * (260 / 500), preserveAspectRatio: "xMidYMid meet", fontCallback: () => "Inter" });
@@ -294,6 +321,15 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   footer(doc, input);
   doc.end();
   return done;
+}
+
+/** The conventions' line on units: the sheet's one family for forces and moments, and the rule that chose it. */
+export function unitsConvention(family: { force: string; moment: string }, units: UnitSystem): string {
+  const rule =
+    units === "US"
+      ? "lbf and lbf·ft, or kip and kip·ft once a force reaches 10 kip or a moment 10 kip·ft"
+      : "kN and kN·m, or N and N·m when every force is below 1 kN and every moment below 1 kN·m";
+  return `Forces in ${family.force} and moments in ${family.moment} in every table and chart of this sheet: one unit family for the whole sheet, chosen from its largest force or moment (${rule}). The drawing's labels and the sentences of the result give each value in the unit that reads best for it.`;
 }
 
 /** svg-to-pdfkit ignores paint-order, so a label's paper-coloured halo (its stroke) would be
@@ -382,16 +418,46 @@ function cautionBox(doc: PDFKit.PDFDocument, left: number, width: number, lines:
   doc.y = top + h + 6;
 }
 
+/** The footer's type size (pt) and the gap (pt) between its sketch line and the page number. */
+export const FOOTER_SIZE = 7;
+const FOOTER_GAP = 12;
+/** The footer's caution, on a line of its own: short enough for the page at any title. */
+export const FOOTER_CAUTION = "For design checking; review by a qualified engineer required; local codes govern.";
+
+/**
+ * The footer of a page in two lines, each measured to fit (`measure`: the width of a text in the
+ * footer's font, pt): the sketch and version beside the page number, the title cut with an
+ * ellipsis when it would not fit, and the caution across the width. A line that ran past its
+ * width would wrap and leave a word alone on a line of its own.
+ */
+export function footerLines(measure: (text: string) => number, title: string, version: number, page: string, width: number): { sketch: string; page: string; caution: string; sketchWidth: number } {
+  const sketchWidth = width - measure(page) - FOOTER_GAP;
+  const tail = ` · v${version}`;
+  let shown = title;
+  if (measure(shown + tail) > sketchWidth) {
+    const chars = [...title];
+    let n = chars.length;
+    while (n > 0 && measure(`${chars.slice(0, n).join("").trimEnd()}…${tail}`) > sketchWidth) n--;
+    shown = `${chars.slice(0, n).join("").trimEnd()}…`;
+  }
+  return { sketch: shown + tail, page, caution: FOOTER_CAUTION, sketchWidth };
+}
+
 function footer(doc: PDFKit.PDFDocument, input: CalcSheetInput) {
   const range = doc.bufferedPageRange();
+  const left = doc.page.margins.left;
+  const width = doc.page.width - left - doc.page.margins.right;
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
-    const y = doc.page.height - 34;
+    const y = doc.page.height - 40;
     const bottom = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
-    doc.font("Inter").fontSize(7).fillColor(FAINT);
-    doc.text(`${input.sketchTitle} · v${input.version} · for design checking; review by a qualified engineer required; local codes govern`, doc.page.margins.left, y, { width: 420, lineBreak: false });
-    doc.text(`page ${i + 1} of ${range.count}`, doc.page.width - doc.page.margins.right - 80, y, { width: 80, align: "right", lineBreak: false });
+    doc.font("Inter").fontSize(FOOTER_SIZE).fillColor(FAINT);
+    const lines = footerLines((t) => doc.widthOfString(t), input.sketchTitle, input.version, `page ${i + 1} of ${range.count}`, width);
+    // each line fits its width (measured above), so none wraps
+    doc.text(lines.sketch, left, y, { width: lines.sketchWidth, lineBreak: false });
+    doc.text(lines.page, left + width - doc.widthOfString(lines.page), y, { lineBreak: false });
+    doc.text(lines.caution, left, y + FOOTER_SIZE * 1.3, { width, lineBreak: false });
     doc.page.margins.bottom = bottom;
   }
 }

@@ -9,7 +9,7 @@ import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
 import { linspace, sweepWith } from "@/solver/sweep";
 import { firstReached, limitEverywhere, reachedAt, sweeperOn } from "@/solver/studySweep";
-import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
+import { convert, formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import type { ChartSpec } from "./chart";
 
 /** At most this many points are solved for a printed chart (or one on a version's page). */
@@ -85,7 +85,18 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
   });
 }
 
-export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, supports: string[]): { charts: ChartSpec[]; markers: SweepMarker[] } {
+/**
+ * The charts of a kept sweep. `family`: the force and moment units of the sheet the charts are
+ * printed on, so a chart reads in the units of its tables; absent, each chart takes N (N·m) when
+ * everything plotted stays below 1 kN (1 kN·m), as a table does.
+ */
+export function sweepCharts(
+  file: SketchFile,
+  sw: SweepFile,
+  units: UnitSystem,
+  supports: string[],
+  family?: { force: string; moment: string },
+): { charts: ChartSpec[]; markers: SweepMarker[] } {
   const res = sweepWith(sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter), linspace(sw.from, sw.to, Math.min(sw.points, MAX_POINTS)));
   const quantities = sweepQuantities(sw, supports);
   const markers = sweepMarkers(file, sw, quantities);
@@ -98,14 +109,17 @@ export function sweepCharts(file: SketchFile, sw: SweepFile, units: UnitSystem, 
       mine.map((q) => q.component),
       mine.map((q) => res.points.map((p) => (p.ok ? readQuantity(p.result, q) : null))),
     )[kind];
+    // the sheet's unit for a force or a moment; a ratio has none
+    const unit = family && kind !== "ratio" ? family[kind] : displayUnit(mine[0].component, units, largest);
+    const shown = (si: number, q: QuantitySpec) => (family && kind !== "ratio" ? convert(si, kind, units, unit).value : toDisplay(si, q.component, units, largest));
     return {
       title: `${sw.parameter} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)} ${prettyUnit(res.unit)}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
       xLabel: `${sw.parameter}${res.unit ? ` (${prettyUnit(res.unit)})` : ""}`,
-      yLabel: displayUnit(mine[0].component, units, largest) || "ratio",
+      yLabel: unit || "ratio",
       series: mine.map((q) => ({
         label: describeQuantity(q, names),
         markZero: marksZero(q.component),
-        points: res.points.map((p) => [p.value, p.ok ? toDisplay(readQuantity(p.result, q), q.component, units, largest) : null] as [number, number | null]),
+        points: res.points.map((p) => [p.value, p.ok ? shown(readQuantity(p.result, q), q) : null] as [number, number | null]),
       })),
       markers,
     };

@@ -84,12 +84,14 @@ function cellText(t: Table, c: Table["rows"][number][number]): string {
 }
 
 /** The printed text of each cell: a marked cell (the governing case) carries its shape before the
- *  number, joined by a no-break space, so the mark is not colour alone and never wraps away. */
+ *  number, joined by a no-break space, so the mark is not colour alone and never wraps away; a mark
+ *  that gives the cell's words (a hand check's rounding noise) is printed in place of the number. */
 export function tableCells(t: Table): string[][] {
   return t.rows.map((r, ri) =>
     r.map((c, ci) => {
       const mark = t.marks?.[ri]?.[t.columns[ci].key];
-      return mark ? `${mark.symbol}\u00a0${cellText(t, c)}` : cellText(t, c);
+      if (mark?.shown !== undefined) return mark.shown;
+      return mark?.symbol ? `${mark.symbol}\u00a0${cellText(t, c)}` : cellText(t, c);
     }),
   );
 }

@@ -9,6 +9,10 @@ import type { Table } from "@/solver/report";
 // Numbers in a column: figures of one width, so decimals line up, and no kerning, which tucks a
 // point under a 7 ("7.602" read as "7602"). Off and on by OpenType feature (fontkit's overrides).
 const NUMBER_FEATURES = { kern: false, tnum: true } as unknown as PDFKit.Mixins.OpenTypeFeatures[];
+// Words (a group's heading, a text cell) without kerning too, as the sheet's prose: kerned, "−50°,
+// as drawn" reads back (copied, or by a text reader) as "−50° , as drawn", and "(5.249, 7.218)" as
+// "7 .218". (The measure takes the wider of the kerned and unkerned widths, so they still fit.)
+const TEXT_FEATURES = { kern: false } as unknown as PDFKit.Mixins.OpenTypeFeatures[];
 import { layoutTable, type Measure, type TablePart, type TableLayout } from "./table-layout";
 
 export const FONT = { regular: "Inter", bold: "Inter-SemiBold" } as const;
@@ -92,7 +96,7 @@ function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart,
   const total = part.widths.reduce((a, b) => a + b, 0);
   const inner = (i: number) => part.widths[i] - 2 * PAD_X;
   const textHeight = (text: string, font: string, i: number, numeric = false) =>
-    text ? doc.font(font).fontSize(size).heightOfString(text, { width: inner(i), ...(numeric ? { features: NUMBER_FEATURES } : {}) }) : 0;
+    text ? doc.font(font).fontSize(size).heightOfString(text, { width: inner(i), features: numeric ? NUMBER_FEATURES : TEXT_FEATURES }) : 0;
 
   const headerHeight =
     Math.max(...part.columns.map((c, i) => textHeight(headers[c].label, FONT.bold, i) + (headers[c].unit ? textHeight(headers[c].unit!, FONT.regular, i) : 0))) + PAD_Y;
@@ -104,20 +108,20 @@ function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart,
     let x = left;
     part.columns.forEach((c, i) => {
       const h = headers[c];
-      doc.font(FONT.bold).fontSize(size).fillColor(INK).text(h.label, x + PAD_X, y + PAD_TOP, { width: inner(i), align: h.align });
-      if (h.unit) doc.font(FONT.regular).fontSize(size).fillColor(INK).text(h.unit, x + PAD_X, doc.y, { width: inner(i), align: h.align });
+      doc.font(FONT.bold).fontSize(size).fillColor(INK).text(h.label, x + PAD_X, y + PAD_TOP, { width: inner(i), align: h.align, features: TEXT_FEATURES });
+      if (h.unit) doc.font(FONT.regular).fontSize(size).fillColor(INK).text(h.unit, x + PAD_X, doc.y, { width: inner(i), align: h.align, features: TEXT_FEATURES });
       x += part.widths[i];
     });
     rule(doc, left, y + headerHeight, total);
     doc.y = y + headerHeight;
   };
 
-  const groupHeight = (g: string) => doc.font(FONT.bold).fontSize(size).heightOfString(g, { width: total - 2 * PAD_X }) + PAD_Y;
+  const groupHeight = (g: string) => doc.font(FONT.bold).fontSize(size).heightOfString(g, { width: total - 2 * PAD_X, features: TEXT_FEATURES }) + PAD_Y;
   const drawGroup = (g: string) => {
     const y = doc.y;
     const h = groupHeight(g);
     doc.rect(left, y, total, h).fillColor(GROUP_BG).fill();
-    doc.font(FONT.bold).fontSize(size).fillColor(INK).text(g, left + PAD_X, y + PAD_TOP, { width: total - 2 * PAD_X });
+    doc.font(FONT.bold).fontSize(size).fillColor(INK).text(g, left + PAD_X, y + PAD_TOP, { width: total - 2 * PAD_X, features: TEXT_FEATURES });
     rule(doc, left, y + h, total);
     doc.y = y + h;
   };
@@ -145,7 +149,7 @@ function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart,
         .font(FONT.regular)
         .fontSize(size)
         .fillColor(INK)
-        .text(r[c] ?? "", x + PAD_X, y + PAD_TOP, { width: inner(i), align: headers[c].align, ...(numeric ? { features: NUMBER_FEATURES } : {}) });
+        .text(r[c] ?? "", x + PAD_X, y + PAD_TOP, { width: inner(i), align: headers[c].align, features: numeric ? NUMBER_FEATURES : TEXT_FEATURES });
       x += part.widths[i];
     });
     rule(doc, left, y + h, total);

@@ -4,7 +4,9 @@
 import { describe, expect, it } from "vitest";
 import { DEMO_SKETCHES, demoVersions } from "@/db/seed-sketches";
 import { summarizeSolve } from "@/lib/sketch-document";
-import { parseSketch, solve } from "@/solver";
+import { parseSketch, solve, solveCases } from "@/solver";
+import { caseSketch } from "@/solver/cases";
+import { sweepMarkers } from "@/lib/calcsheet/sweeps";
 
 const notesOf = (id: string) => demoVersions(DEMO_SKETCHES.find((s) => s.id.endsWith(id))!).map((v) => String(v.doc.description ?? ""));
 
@@ -79,5 +81,61 @@ describe("the demo sketches' stories agree with the solver", () => {
       });
       expect(got, id).toEqual(versions.map((v) => ({ ...v, low: v.low ? [v.low[0], Number(v.low[1].toPrecision(3))] : null })));
     }
+  });
+});
+
+describe("the washing cart's cases say what they set", () => {
+  // (Invented demo scenario.) A case's name is read as its definition on the calc sheet: the angle
+  // and the pressure it names must be the ones it solves at, in every version, whatever the
+  // drawing's own angle (v2 and v3 draw the lance at −50°). A case left to follow the drawing
+  // would change under its name from version to version.
+  const versions = demoVersions(DEMO_SKETCHES.find((s) => s.id.endsWith("a5"))!);
+  const fileOf = (doc: unknown) => {
+    const p = parseSketch(doc);
+    if (!p.ok) throw new Error(JSON.stringify(p.errors));
+    return p.file;
+  };
+  const degrees = (text: string) => [...text.matchAll(/([−-]?\d+(?:\.\d+)?)°/g)].map((m) => Number(m[1].replace("−", "-")));
+
+  it("the lance angle in each case's name is the angle the case solves at, and the named pressure is the pump's", () => {
+    versions.forEach(({ doc }, v) => {
+      const file = fileOf(doc);
+      for (const c of file.cases ?? []) {
+        const at = `v${v + 1} ${c.name}`;
+        // never "as drawn": what the drawing holds changes between versions, the case does not
+        expect(c.name, at).not.toMatch(/as drawn/i);
+        const own = caseSketch(file, c);
+        if (!own.ok) throw new Error(at);
+        const lance = own.sketch.ports.find((p) => p.id === "lance")!;
+        if (/lance/i.test(c.name)) expect(degrees(c.name), at).toEqual([Math.round(lance.angle)]);
+        // the case sets the angle it names itself (not left to the drawing)
+        if (/lance/i.test(c.name)) expect(c.parameters?.theta, at).toBe(`${Math.round(lance.angle)} deg`);
+        const bar = /(\d+) bar/.exec(c.name);
+        if (bar) expect(c.parameters?.p_pump, at).toBe(`${bar[1]} bar`);
+      }
+    });
+  });
+
+  it("the notes' figures are the solver's: the caster lifts at about −59° at 85 kg, 1.31 aimed down, 1.55 with 145 kg and 1.39 with 130 kg", () => {
+    // overturning about the rear wheels (common practice): restoring W·(0.28 − 0.06) m over the
+    // jet's turning moment; the solver's factor as drawn, to the figures the notes give
+    const factorAsDrawn = (doc: unknown) => {
+      const run = solveCases({ ...fileOf(doc), cases: undefined }).runs[0];
+      const ot = run.ok ? run.stability.cart.overturning : null;
+      if (!ot || "notApplicable" in ot) throw new Error("the cart has an overturning check");
+      return ot.factor;
+    };
+    const [v1, , v3] = versions.map((v) => v.doc);
+    expect(String(v1.description)).toContain("only 1.31");
+    expect(factorAsDrawn(v1).toFixed(2)).toBe("1.31");
+    expect(String(v3.description)).toContain("factor of 1.55");
+    expect(factorAsDrawn(v3).toFixed(2)).toBe("1.55");
+    expect(String(v3.description)).toContain("45 kg gave only 1.39");
+    expect(factorAsDrawn({ ...v3, bodies: [{ ...v3.bodies[0], mass: "130 kg" }] }).toFixed(2)).toBe("1.39");
+    // the front caster's margin reaches zero as the lance is raised: the sweep's crossing
+    expect(String(v1.description)).toContain("the caster lifts at about −59°");
+    const file = fileOf(v1);
+    const [marker] = sweepMarkers({ ...file, cases: undefined }, file.sweeps![0], [{ support: "front", component: "margin" }]);
+    expect(Math.round(marker.x)).toBe(-59);
   });
 });

@@ -285,7 +285,8 @@ describe("calc sheet PDF", () => {
     expect(text).not.toContain("Part 1 of");
     for (const c of [...file.cases!, ...file.combinations!]) {
       expect(text.split(`Case: ${c.name} leftRubberBearingPadUnderEngine `), c.name).toHaveLength(2);
-      expect(text, c.name).toMatch(new RegExp(`Case: ${c.name}( \\(continued\\))? Pump set `));
+      // (the duty point is the sketch as drawn: its factors of safety are said once, under its name)
+      expect(text, c.name).toMatch(new RegExp(`Case: ${c.name}(, as drawn)?( \\(continued\\))? Pump set `));
     }
     // the strap is a tie: its margin reaching zero is named for what it means
     expect(text).toMatch(/Crossing: holdDownStrapToFloorAnchor: slack \(its tension reaches zero\) at mdot = \d+\.?\d* kg\/s \(to 4 significant figures, found to within ±\de-\d+ kg\/s\)\./);
@@ -297,7 +298,7 @@ describe("calc sheet PDF", () => {
     pages.forEach((items, i) => {
       const words = items.map((it) => it.str).join(" ").replace(/\s+/g, " ");
       // the short caution in the footer of every page
-      expect(words, `page ${i + 1}`).toContain("for design checking; review by a qualified engineer required; local codes govern");
+      expect(words, `page ${i + 1}`).toContain("For design checking; review by a qualified engineer required; local codes govern.");
       // nothing past the 44 pt margins (1 pt for rounding)
       for (const it of items) {
         expect(it.x, `"${it.str}" on page ${i + 1}`).toBeGreaterThanOrEqual(44 - 1);
