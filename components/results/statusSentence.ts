@@ -53,10 +53,12 @@ interface Context {
   reactions: Array<[Support, Reaction]>;
   result: SolveResult;
   units: UnitSystem;
+  /** a force unit every figure is given in (a calc sheet's one family), else each its own */
+  forceUnit?: string;
   name: string;
 }
 
-const force = (c: Context, v: number) => formatQuantity(Math.abs(v), "force", c.units);
+const force = (c: Context, v: number) => formatQuantity(Math.abs(v), "force", c.units, { unit: c.forceUnit });
 
 /** The contacts over their μ, the most overloaded first. */
 function overloaded(c: Context): Array<[Support, Reaction]> {
@@ -162,8 +164,8 @@ function holdSentence(c: Context): string {
   return `Holds — all supports within their limits; the largest reaction is ${force(c, Math.hypot(best[1].fx, best[1].fy))} at ${supportName(best[0])}`;
 }
 
-/** One sentence per body of a solved sketch. */
-export function statusSentences(sketch: Sketch, result: SolveResult, units: UnitSystem = "SI"): StatusSentence[] {
+/** One sentence per body of a solved sketch; `forceUnit` puts every force in one unit (a calc sheet's). */
+export function statusSentences(sketch: Sketch, result: SolveResult, units: UnitSystem = "SI", forceUnit?: string): StatusSentence[] {
   const out: StatusSentence[] = [];
   const portNotes = portDirectionNotes(sketch);
   for (const b of sketch.bodies) {
@@ -171,7 +173,7 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
     if (!body) continue;
     const supports = sketch.supports.filter((s) => s.body === b.id);
     const reactions = supports.filter((s) => result.reactions[s.id]).map((s) => [s, result.reactions[s.id]] as [Support, Reaction]);
-    const c: Context = { id: b.id, body, supports, reactions, result, units, name: b.label || b.id };
+    const c: Context = { id: b.id, body, supports, reactions, result, units, forceUnit, name: b.label || b.id };
     let tone: Tone = body.status;
     let headline: string;
     const slip = body.status === "holds" || body.status === "lifts" ? slipSentence(c) : null;

@@ -149,7 +149,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   heading(hasCases ? "Result as drawn" : "Result");
   // the sentences of the results panel: a body that slips is not reported as holding
   const said = new Set<string>();
-  for (const s of statusSentences(parsed.sketch, result, units)) {
+  for (const s of statusSentences(parsed.sketch, result, units, family.force)) {
     const b = result.bodies[s.body];
     const determinacy = b.determinacy.kind === "indeterminate" ? "" : ` Statically ${b.determinacy.kind}.`;
     para(`${s.headline}.${determinacy}`, 9.5, s.tone === "holds" ? INK : ACCENT);
@@ -329,7 +329,7 @@ export function unitsConvention(family: { force: string; moment: string }, units
     units === "US"
       ? "lbf and lbf·ft, or kip and kip·ft once a force reaches 10 kip or a moment 10 kip·ft"
       : "kN and kN·m, or N and N·m when every force is below 1 kN and every moment below 1 kN·m";
-  return `Forces in ${family.force} and moments in ${family.moment} in every table and chart of this sheet: one unit family for the whole sheet, chosen from its largest force or moment (${rule}). The drawing's labels and the sentences of the result give each value in the unit that reads best for it.`;
+  return `Forces in ${family.force} and moments in ${family.moment} in every table and chart of this sheet: one unit family for the whole sheet, chosen from its largest force or moment (${rule}). The drawing's labels give each value in the unit that reads best for it.`;
 }
 
 /** svg-to-pdfkit ignores paint-order, so a label's paper-coloured halo (its stroke) would be

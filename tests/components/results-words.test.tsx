@@ -65,6 +65,8 @@ describe("status sentences the worked examples do not reach", () => {
       `Beam: Holds — all supports within their limits; the largest reaction is ${formatQuantity(980.665 / 2, "force", "SI")} at the left pin`,
       "Crate: Unrestrained — the body has no supports yet; add a support or a tie",
     ]);
+    // a calc sheet in kN gives the 490.3 N in kN too, as its tables do
+    expect(statusSentences(sketch, result, "SI", "kN")[0].headline).toBe("Beam: Holds — all supports within their limits; the largest reaction is 0.4903 kN at the left pin");
   });
 
   it("slip leads when a contact also lifts, and the lift-off follows as a detail", () => {
