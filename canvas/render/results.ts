@@ -25,6 +25,8 @@ export interface ResultOptions {
   states?: Map<string, DrawState>;
   /** the drawing area, in content pixels: a label its edge would cut moves inside (the canvas) */
   frame?: Box;
+  /** one force and moment unit for every figure (a calc sheet's family), else each its own */
+  family?: { force: string; moment: string };
 }
 
 export interface ResultDrawing {
@@ -36,7 +38,8 @@ export interface ResultDrawing {
 const SUPPORT_KINDS = new Set(["pin", "roller", "contact", "fixed", "tie"]);
 const px = (p: Vec2, s: number): Pt => [p[0] * s, -p[1] * s];
 // the drawing's figures are figures, as in the tables: "4.000 kN" beside "9.316 kN", never "4 kN"
-const fq = (v: number, k: Parameters<typeof formatQuantity>[1], u: UnitSystem) => formatQuantity(v, k, u, { keepZeros: true });
+const fq = (v: number, k: Parameters<typeof formatQuantity>[1], o: Pick<ResultOptions, "units" | "family">) =>
+  formatQuantity(v, k, o.units, { keepZeros: true, unit: k === "force" ? o.family?.force : k === "moment" ? o.family?.moment : undefined });
 
 // an earlier result drawn over a sketch whose field is now in error (NaN): nothing is drawn from it
 const finite = (p: Pt) => Number.isFinite(p[0]) && Number.isFinite(p[1]);
@@ -145,7 +148,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
       // (of the two on the ground's side, when the ground has a side)
       const choice = outward.length === 2 ? outward : corners;
       if (corner[0] * mid[0] + corner[1] * mid[1] > 0.5) corner = choice.reduce((a, b) => (b[0] * mid[0] + b[1] * mid[1] < a[0] * mid[0] + a[1] * mid[1] - 1e-9 ? b : a));
-      const words = impossible ? `would have to ${item.kind === "tie" ? "push" : "pull"} ${fq(Math.abs(r.n ?? R), "force", o.units)}` : fq(R, "force", o.units);
+      const words = impossible ? `would have to ${item.kind === "tie" ? "push" : "pull"} ${fq(Math.abs(r.n ?? R), "force", o)}` : fq(R, "force", o);
       const tail = push || item.kind === "tie" ? from : to;
       const away = push ? mul(u, -1) : u;
       labelAnchors.set(prims.length, own);
@@ -154,7 +157,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
     if (Math.abs(r.m) > 1e-9 * Math.max(maxR, 1)) {
       prims.push(...curvedArrow(at, 24, r.m > 0, REACTION, 1.5, true));
       labelAnchors.set(prims.length, own);
-      prims.push(...labelAt(add(at, [20 * corner[0], 24 * corner[1]]), corner, [fq(Math.abs(r.m), "moment", o.units) + (r.m > 0 ? " ↺" : " ↻")], REACTION, 11.5, { weight: 600 }));
+      prims.push(...labelAt(add(at, [20 * corner[0], 24 * corner[1]]), corner, [fq(Math.abs(r.m), "moment", o) + (r.m > 0 ? " ↺" : " ↻")], REACTION, 11.5, { weight: 600 }));
     }
   }
 
@@ -176,7 +179,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
         const arrives = hung < 6 && clearance(add(cg, mul(d, -52)), add(cg, mul(d, -8))) > hung;
         const [from, to, at] = arrives ? [add(cg, mul(d, -52)), add(cg, mul(d, -8)), add(cg, mul(d, -40))] : [add(cg, mul(d, 8)), add(cg, mul(d, 52)), add(cg, mul(d, 38))];
         prims.push(...solidArrow(from, to, INK, 1.9, 11));
-        prims.push(text(add(at, mul(side, 7)), `W ${fq(W, "force", o.units)}`, INK, 11.5, { weight: 600, align: side[0] >= 0 ? "left" : "right", baseline: "middle" }));
+        prims.push(text(add(at, mul(side, 7)), `W ${fq(W, "force", o)}`, INK, 11.5, { weight: 600, align: side[0] >= 0 ? "left" : "right", baseline: "middle" }));
       }
       if (t.kind === "pressure") {
         const port = scene.byId.get(t.id) as Extract<SceneItem, { kind: "inlet" | "outlet" }> | undefined;
@@ -198,7 +201,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
         const start = add(P, mul(inward, push ? near : near + long));
         const end = add(P, mul(inward, push ? near + long : near));
         prims.push(...solidArrow(start, end, INK_SOFT, 1.4, 8));
-        prims.push(...labelAt(add(end, mul(u, 4)), u, [`pA ${fq(Math.hypot(t.fx, t.fy), "force", o.units)}`], INK_SOFT, 10.5));
+        prims.push(...labelAt(add(end, mul(u, 4)), u, [`pA ${fq(Math.hypot(t.fx, t.fy), "force", o)}`], INK_SOFT, 10.5));
       }
     }
     for (const t of eq.momentum) {
@@ -213,7 +216,7 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
       const to = outlet ? add(base, mul(d, 50)) : add(base, mul(d, -6));
       prims.push(...dashedArrow(from, to, INK_SOFT));
       const mid: Pt = [(from[0] + to[0]) / 2 + n[0] * 10, (from[1] + to[1]) / 2 + n[1] * 10];
-      prims.push(...labelAt(mid, n, [`${port.beta === 1 ? "" : "β"}ṁV ${fq(Math.hypot(t.fx, t.fy), "force", o.units)}`], INK_SOFT, 10.5));
+      prims.push(...labelAt(mid, n, [`${port.beta === 1 ? "" : "β"}ṁV ${fq(Math.hypot(t.fx, t.fy), "force", o)}`], INK_SOFT, 10.5));
     }
   }
 

@@ -7,7 +7,7 @@ import type { Scene } from "../scene";
 import { isFinitePoint } from "../geometry/polygon";
 import { placeElementLabels, shiftTexts, type Box, type LabelShifts } from "./labels";
 import { translate, type Prim, type Pt } from "./prims";
-import { resultPrims, supportStates } from "./results";
+import { resultPrims, supportStates, type ResultOptions } from "./results";
 import { anchorWorld, bodyPrims, cgMarkBox, cgPrims, groundSideOf, itemPrims, portKeepOutKey, standInPoint, unplacedPrims, type DrawState } from "./symbols";
 
 // An element's primitives depend only on its scene object (which the editor replaces when it
@@ -68,10 +68,10 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
 const UNDER_RESULTS = new Set(["body", "pin", "roller", "contact", "fixed", "tie", "inlet", "outlet", "force", "couple", "distributed", "massSource"]);
 
 /** The result's drawing, its labels placed (they come first: the elements' labels make way). */
-export function resultLayer(groups: readonly Group[], scene: Scene, scale: number, units: UnitSystem, result: SolveResult, states: Map<string, DrawState>, stale = false, frame?: Box) {
+export function resultLayer(groups: readonly Group[], scene: Scene, scale: number, units: UnitSystem, result: SolveResult, states: Map<string, DrawState>, stale = false, frame?: Box, family?: ResultOptions["family"]) {
   // the bodies' names (and texts that are part of a symbol) stay; the supports' and ports' labels make way
   const under = groups.filter((g) => UNDER_RESULTS.has(g.kind)).flatMap((g) => (g.kind === "body" ? g.prims : g.prims.filter((p) => p.t !== "text" || p.pinned)));
-  return resultPrims(scene, result, { units, scale, stale, under, states, frame }).prims;
+  return resultPrims(scene, result, { units, scale, stale, under, states, frame, family }).prims;
 }
 
 /**
@@ -79,10 +79,10 @@ export function resultLayer(groups: readonly Group[], scene: Scene, scale: numbe
  * moved (`shifts` as the canvas placed them for the whole sketch, or placed here), and the
  * result's drawing; the shifts used come back too.
  */
-export function scenePrims(scene: Scene, scale: number, units: UnitSystem, result: SolveResult | null, stale = false, shifts?: LabelShifts) {
+export function scenePrims(scene: Scene, scale: number, units: UnitSystem, result: SolveResult | null, stale = false, shifts?: LabelShifts, family?: ResultOptions["family"]) {
   const states = result ? supportStates(result) : null;
   const drawn = elementGroups(scene, scale, units, states);
-  const results = result && states ? resultLayer(drawn, scene, scale, units, result, states, stale) : [];
+  const results = result && states ? resultLayer(drawn, scene, scale, units, result, states, stale, undefined, family) : [];
   const moves = shifts ?? placeElementLabels(drawn, results);
   const groups = drawn.map((g) => (moves.has(g.id) ? { ...g, prims: shiftTexts(g.prims, moves.get(g.id)) } : g));
   return { groups, results, shifts: moves };

@@ -23,6 +23,8 @@ export interface SvgOptions {
   maxHeight?: number;
   /** draw the result faded, as an earlier sketch's */
   stale?: boolean;
+  /** every force and moment of the result in these units (a calc sheet's one family) */
+  family?: { force: string; moment: string };
   /** paper background (default) or transparent */
   background?: "paper" | "none";
   /** a line of text under the drawing (e.g. the status sentence) */
@@ -164,14 +166,14 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
   // fit: world box → pixels, leaving room for symbols and labels that do not scale; then centre
   // what is actually drawn (labels included) — or use the shared frame as given
   let scale = opts.frame ? opts.frame.scale : ownScale(scene, width, height - footer - top);
-  let { groups, results } = scenePrims(scene, scale, units, result, opts.stale);
+  let { groups, results } = scenePrims(scene, scale, units, result, opts.stale, undefined, opts.family);
   if (!opts.frame) {
     // symbols and labels do not scale: when they reach past the edge, shrink the geometry by what
     // they overhang (once: the overhang barely changes with the scale)
     const shrunk = fitOverhang(scene, scale, primsBox([...groups.flatMap((g) => g.prims), ...results]), width, height - footer - top);
     if (shrunk < scale) {
       scale = shrunk;
-      ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale));
+      ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale, undefined, opts.family));
     }
   }
   let dx: number;

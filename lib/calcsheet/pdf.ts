@@ -184,7 +184,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // a tall sketch (a stack, a mast) takes a taller drawing, up to as tall as it is wide, in the room
   // left on the page; its heading goes to the next page with it when even the usual one does not fit
   const room = Math.floor(((doc.page.height - doc.page.margins.bottom - doc.y - 41) * 900) / width);
-  const svg = haloBehindLabels(renderSketchSvg(parsed.file, result, { units, width: 900, height: 560, maxHeight: Math.min(900, Math.max(560, room)) }));
+  const svg = haloBehindLabels(renderSketchSvg(parsed.file, result, { units, family, width: 900, height: 560, maxHeight: Math.min(900, Math.max(560, room)) }));
   const drawnHeight = width * (svgHeight(svg, 560) / 900);
   ensureSpace(doc, drawnHeight + 40);
   heading("Free-body diagram (control volume)");
@@ -329,7 +329,7 @@ export function unitsConvention(family: { force: string; moment: string }, units
     units === "US"
       ? "lbf and lbf·ft, or kip and kip·ft once a force reaches 10 kip or a moment 10 kip·ft"
       : "kN and kN·m, or N and N·m when every force is below 1 kN and every moment below 1 kN·m";
-  return `Forces in ${family.force} and moments in ${family.moment} in every table and chart of this sheet: one unit family for the whole sheet, chosen from its largest force or moment (${rule}). The drawing's labels give each value in the unit that reads best for it.`;
+  return `Forces in ${family.force} and moments in ${family.moment} in every table, chart and drawing of this sheet: one unit family for the whole sheet, chosen from its largest force or moment (${rule}).`;
 }
 
 /** svg-to-pdfkit ignores paint-order, so a label's paper-coloured halo (its stroke) would be

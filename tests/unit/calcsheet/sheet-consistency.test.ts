@@ -64,7 +64,7 @@ beforeAll(async () => {
 describe("one unit family for the whole sheet", () => {
   it("the ballasted cart (weight 1.422 kN, reactions up to 1.062 kN, factor figures below 1 kN): kN and kN·m everywhere, its factors of safety too", () => {
     // before, the factors of safety were printed in N and N·m beside reactions and a hand check in kN
-    expect(cartV3).toContain("Forces in kN and moments in kN·m in every table and chart of this sheet");
+    expect(cartV3).toContain("Forces in kN and moments in kN·m in every table, chart and drawing of this sheet");
     expect(cartV3).not.toMatch(/\((N|N·m|N·m \/ N)\)/);
     expect(cartV3).toMatch(/Fx \(kN\)/);
     expect(cartV3).toMatch(/\(kN·m \/ kN\)/);
@@ -75,7 +75,7 @@ describe("one unit family for the whole sheet", () => {
   });
 
   it("the light cart (weight 833.6 N, everything below 1 kN): N and N·m everywhere", () => {
-    expect(cartV1.text).toContain("Forces in N and moments in N·m in every table and chart of this sheet");
+    expect(cartV1.text).toContain("Forces in N and moments in N·m in every table, chart and drawing of this sheet");
     expect(cartV1.text).not.toMatch(/\((kN|kN·m|kN·m \/ kN)\)/);
     // 85 kg × g0 × 0.22 m = 183.4 N·m restoring (statics, common practice)
     expect(cartV1.text).toMatch(/overturning 183\.4 139\.8 N·m 1\.311 1\.500 FAIL/);
@@ -83,10 +83,13 @@ describe("one unit family for the whole sheet", () => {
 
   it("the monitor trailer in US units (a restoring moment past 10 kip·ft): kip and kip·ft in the hand check, the cases and the factors of safety alike", () => {
     // before, the hand check and the factors of safety were in kip while the reactions were in lbf
-    expect(trailerUS).toContain("Forces in kip and moments in kip·ft in every table and chart of this sheet");
+    expect(trailerUS).toContain("Forces in kip and moments in kip·ft in every table, chart and drawing of this sheet");
     expect(trailerUS).not.toMatch(/\((lbf|lbf·ft|lbf·ft \/ lbf)\)/);
     expect(count(trailerUS, "(kip)")).toBeGreaterThanOrEqual(4);
     expect(trailerUS).toMatch(/\(kip·ft \/ kip\)/);
+    // the drawing's reaction labels and the result's sentences too: no figure in lbf anywhere
+    expect(trailerUS).not.toMatch(/\d lbf\b/);
+    expect(trailerUS).toMatch(/\d kip\b/);
   });
 
   it("the tables take the sheet's scale when given one, and the scale is the largest of its parts", () => {
