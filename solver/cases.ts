@@ -30,6 +30,10 @@ export interface SupportEnvelope {
   /** governing case per component: the one with the largest magnitude (for the margin of a
    *  contact or tie: the smallest, where it comes closest to lifting or going slack) */
   governing: Partial<Record<Component, string>>;
+  /** where several runs give a component's governing value alike (to a part in a billion of the
+   *  support's largest value of it): all of them, in the order of the runs, the governing one
+   *  first among equals. Absent for a component one run governs alone, or zero in every run. */
+  ties?: Partial<Record<Component, string[]>>;
 }
 
 /** A body that tips or is unrestrained in a run: its reactions assume every support can pull,
@@ -208,6 +212,37 @@ export function envelopeOf(runs: CaseRun[]): Record<string, SupportEnvelope> {
         env.design = { resultant: res, angle: (Math.atan2(r.fy, r.fx) * 180) / Math.PI, fx: r.fx, fy: r.fy, m: r.m, case: run.id };
       }
     }
+  }
+  for (const [id, env] of Object.entries(out)) {
+    const ties = tiesOf(runs, id, env);
+    if (Object.keys(ties).length) env.ties = ties;
+  }
+  return out;
+}
+
+/** Below this (N, N·m) a component is zero in every run, and no run governs it. */
+const NOTHING = 1e-9;
+
+/** The components of a support whose governing value more than one run gives (see `SupportEnvelope.ties`). */
+function tiesOf(runs: CaseRun[], id: string, env: SupportEnvelope): Partial<Record<Component, string[]>> {
+  const out: Partial<Record<Component, string[]>> = {};
+  for (const c of COMPONENTS) {
+    const e = env.components[c];
+    const gov = env.governing[c];
+    if (!e || !gov) continue;
+    const size = Math.max(Math.abs(e.max.value), Math.abs(e.min.value));
+    if (size < NOTHING) continue;
+    // a margin governs by its least value; any other component by its largest magnitude
+    const target = c === "margin" ? e.min.value : Math.abs(e.max.value) >= Math.abs(e.min.value) ? e.max.value : e.min.value;
+    const same = (v: number) => (c === "margin" ? Math.abs(v - target) : Math.abs(Math.abs(v) - Math.abs(target))) <= 1e-9 * size;
+    const tied = runs.filter((run) => {
+      if (!run.ok) return false;
+      const r = run.result.reactions[id];
+      if (!r || notHeld(run.result.bodies[r.body]?.status ?? "holds")) return false;
+      const v = componentOf(r, c);
+      return v !== undefined && same(v);
+    });
+    if (tied.length > 1) out[c] = tied.map((run) => run.id);
   }
   return out;
 }

@@ -9,8 +9,11 @@
 // jumps. Such a change of status is found by bisection too; it is a crossing when the quantity
 // jumps across the target there, or when it reaches the target on the side where the body
 // holds (the contact whose lift-off starts the tipping: its n falls to zero just before).
-import { formatFigures, formatTiny, readQuantity, type QuantitySpec } from "./quantity";
-import { createSweeper, type Sweeper } from "./sweep";
+//
+// A contact's friction is read only where it has any (`sweptQuantity`): off the ground, or on a
+// body that tips, its friction margin is undefined, so lifting off is never taken for slipping.
+import { formatFigures, formatTiny, type QuantitySpec } from "./quantity";
+import { createSweeper, sweptQuantity, type Sweeper } from "./sweep";
 import type { Sketch } from "./types";
 import { prettyUnit } from "./units";
 
@@ -84,7 +87,7 @@ export function findLimitWith(
     if (!p.ok) return { x, f: Number.NaN, held: false };
     const body = p.result.reactions[quantity.support]?.body;
     const status = body === undefined ? undefined : p.result.bodies[body]?.status;
-    return { x, f: readQuantity(p.result, quantity) - target, held: status === "holds" || status === "lifts" };
+    return { x, f: sweptQuantity(p.result, quantity) - target, held: status === "holds" || status === "lifts" };
   };
   const f = (x: number) => at(x).f;
   try {
@@ -189,8 +192,13 @@ export function limitWithUnit(x: number, unit: string): string {
 /**
  * How far a found limit is given, in words: "to 4 significant figures, found to within ±8e-8 deg".
  * The tolerance is rounded up to one figure, so it never claims more than the search did.
+ *
+ * Given `values` (the limits the words are said of), the tolerance is said only where it shows in
+ * them: finer than half a unit in the last figure they are written to, it is left out ("to 4
+ * significant figures"); coarser, it is written as they are, a plain decimal ("±0.0001 deg"),
+ * not as the search's noise ("±9e-8 deg").
  */
-export function limitPrecisionWords(tolerance: number, unit: string): string {
+export function limitPrecisionWords(tolerance: number, unit: string, values?: readonly number[]): string {
   const e = Math.floor(Math.log10(tolerance));
   let m = Math.ceil(tolerance / 10 ** e - 1e-9);
   let exp = e;
@@ -198,7 +206,23 @@ export function limitPrecisionWords(tolerance: number, unit: string): string {
     m = 1;
     exp += 1;
   }
-  return `to ${LIMIT_FIGURES} significant figures, found to within ±${formatTiny(m * 10 ** exp, 0)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
+  const u = unit ? ` ${prettyUnit(unit)}` : "";
+  if (values) {
+    // no limit found: nothing the tolerance could be said of
+    if (!values.length) return `to ${LIMIT_FIGURES} significant figures`;
+    const steps = values.filter((v) => Number.isFinite(v) && v !== 0).map(figureStep);
+    if (steps.length && tolerance <= Math.min(...steps) / 2) return `to ${LIMIT_FIGURES} significant figures`;
+    const within = exp >= -6 ? (m * 10 ** exp).toFixed(Math.max(0, -exp)) : formatTiny(m * 10 ** exp, 0);
+    return `to ${LIMIT_FIGURES} significant figures, found to within ±${within}${u}`;
+  }
+  return `to ${LIMIT_FIGURES} significant figures, found to within ±${formatTiny(m * 10 ** exp, 0)}${u}`;
+}
+
+/** A unit in the last figure `formatLimit` writes of x: its 4th significant figure, or 1 from 1,000 on (whole numbers). */
+function figureStep(x: number): number {
+  const a = Math.abs(Number(x.toPrecision(LIMIT_FIGURES)));
+  if (a >= 1000) return 1;
+  return 10 ** (Math.floor(Math.log10(a)) - (LIMIT_FIGURES - 1));
 }
 
 /** Brent's method on a bracket [a, b] with f(a)·f(b) < 0 (Brent 1973, "Algorithms for Minimization without Derivatives", ch. 4). */

@@ -7,7 +7,7 @@ import { caseSketch, combineModels } from "./cases";
 import { planOf, resolveFile } from "./parse";
 import type { SketchFile } from "./schema";
 import { prepare, solveModels } from "./solve";
-import { findLimitWith, type LimitResult } from "./limit";
+import { findLimitWith, formatLimit, limitTolerance, type LimitResult } from "./limit";
 import type { QuantitySpec } from "./quantity";
 import { createSetter, createSweeper, FLOW_FACTOR, type ParameterSetter, type Sweeper } from "./sweep";
 import type { FieldError, Sketch, SolveWarning } from "./types";
@@ -153,13 +153,26 @@ export function reachedAt(result: LimitEverywhere["result"], from: number, to: n
   return from <= to ? result.crossings[0] : result.crossings[result.crossings.length - 1];
 }
 
-/** The run in which the quantity gets to the target first, going from the range's start `from`. */
-export function firstReached(rows: readonly LimitEverywhere[], from: number, to: number): { row: LimitEverywhere; value: number } | null {
+/**
+ * The run in which the quantity gets to the target first, going from the range's start `from`;
+ * `tied` lists every run that gets there at the same value (the first among them too, in the
+ * order of the rows): within the searches' tolerance, or alike when written to the figures a
+ * limit is given to. Cases that leave the swept parameter's effects alone tie exactly.
+ */
+export function firstReached(rows: readonly LimitEverywhere[], from: number, to: number): { row: LimitEverywhere; value: number; tied: LimitEverywhere[] } | null {
   let best: { row: LimitEverywhere; value: number } | null = null;
   for (const row of rows) {
     const x = reachedAt(row.result, from, to);
     if (x === undefined) continue;
     if (!best || (from <= to ? x < best.value : x > best.value)) best = { row, value: x };
   }
-  return best;
+  if (!best) return null;
+  const first = best;
+  const toleranceOf = (r: LimitEverywhere["result"]) => ("found" in r && r.found && r.tolerance) || limitTolerance([from, to]);
+  const tied = rows.filter((row) => {
+    const x = reachedAt(row.result, from, to);
+    if (x === undefined) return false;
+    return Math.abs(x - first.value) <= 2 * Math.max(toleranceOf(row.result), toleranceOf(first.row.result)) || formatLimit(x) === formatLimit(first.value);
+  });
+  return { ...first, tied };
 }

@@ -6,6 +6,7 @@ import { solve } from "./solve";
 import type { FieldError, Sketch, SolveResult } from "./types";
 import { MAX_MAGNITUDE, TOO_LARGE, validateValues } from "./validate";
 import { shareAcrossSolves } from "./reuse";
+import { readQuantity, type QuantitySpec } from "./quantity";
 
 export type SweepPoint = { value: number; ok: true; result: SolveResult } | { value: number; ok: false; errors: FieldError[] };
 
@@ -138,6 +139,38 @@ export function sweepWith(sweeper: Sweeper, values: readonly number[]): SweepRes
   } finally {
     sweeper.restore();
   }
+}
+
+/** Whether a support is off its seat in a result: a contact lifted (or a tie slack), also one
+ *  that bears on a body that tips while its margin is below zero (it leaves its base as the body
+ *  turns). Undefined for a support that is neither a contact nor a tie. */
+export function supportOff(result: SolveResult, support: string): boolean | undefined {
+  const r = result.reactions[support];
+  if (!r || (r.kind !== "contact" && r.kind !== "tie")) return undefined;
+  if (r.state === "lifted" || r.state === "slack") return true;
+  const status = result.bodies[r.body]?.status;
+  return (status === "tips" || status === "unrestrained") && r.margin !== undefined && r.margin < 0;
+}
+
+/** Whether the body a support holds is held in a result (it holds, or holds with a contact lifted). */
+export function supportBodyHeld(result: SolveResult, support: string): boolean {
+  const r = result.reactions[support];
+  const status = r ? result.bodies[r.body]?.status : undefined;
+  return status === "holds" || status === "lifts";
+}
+
+/**
+ * A quantity as a sweep and the limit finder read it: `readQuantity`, but a contact's friction
+ * (its friction margin μ·n − |t|, or the friction it needs) only where it has any. A contact off
+ * the ground has no friction to use up, and on a body that tips (or is unrestrained) the reactions
+ * are only what every support would need to hold it, which says nothing of friction: NaN there, a
+ * gap in the plot. Every other quantity is read as it is (a lifted contact's margin below zero is
+ * what it would have to pull).
+ */
+export function sweptQuantity(result: SolveResult, q: QuantitySpec): number {
+  const v = readQuantity(result, q);
+  if (q.component !== "frictionMargin" && q.component !== "frictionRatio") return v;
+  return supportOff(result, q.support) || !supportBodyHeld(result, q.support) ? Number.NaN : v;
 }
 
 /** `count` evenly spaced values from `lo` to `hi` inclusive. */

@@ -4,7 +4,7 @@
 import type { QuantityComponent } from "@/solver/quantity";
 import { columnUnit } from "@/solver/report";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
-import { convert, type Quantity, type UnitSystem } from "@/solver/units";
+import { convert, formatNumber, type Quantity, type UnitSystem } from "@/solver/units";
 
 export type DisplayKind = Extract<Quantity, "force" | "moment" | "ratio">;
 
@@ -46,13 +46,17 @@ export function fromDisplay(value: number, component: QuantityComponent, system:
 /**
  * A limit's target as typed: a plain number is in the display unit (as the label beside it says),
  * or a value with its own unit ("2 kN", "450 lbf", "1.2 kN m"). Returns it in SI (N, N·m, or the
- * ratio) and as it reads in the answer ("20 N·m", "450 lbf"); throws an error in words when the
- * text is not a value of that kind.
+ * ratio) and as it reads in the answer, in the display unit like every other figure beside it
+ * ("20 N·m"; "100 lbf" typed on a screen in SI reads "444.8 N"); throws an error in words when
+ * the text is not a value of that kind.
  */
 export function parseTarget(text: string, component: QuantityComponent, system: UnitSystem, largest?: number): { si: number; shown: string } {
   const v = evaluateTyped(text);
-  if (typeof v !== "number") return { si: toFieldNumber(v, displayKind(component)), shown: text.trim() };
   const unit = displayUnit(component, system, largest);
+  if (typeof v !== "number") {
+    const si = toFieldNumber(v, displayKind(component));
+    return { si, shown: `${formatNumber(toDisplay(si, component, system, largest), 4)}${unit ? ` ${unit}` : ""}` };
+  }
   return { si: fromDisplay(v, component, system, largest), shown: `${v}${unit ? ` ${unit}` : ""}` };
 }
 

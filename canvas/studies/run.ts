@@ -2,8 +2,8 @@
 // and combinations at once, a sweep in chunks with progress and a way to stop, and the limit finder.
 import { findLimitWith, type LimitResult } from "@/solver/limit";
 import { parseSketch } from "@/solver/parse";
-import { readQuantity, type QuantitySpec } from "@/solver/quantity";
-import { linspace } from "@/solver/sweep";
+import type { QuantitySpec } from "@/solver/quantity";
+import { linspace, supportBodyHeld, supportOff, sweptQuantity } from "@/solver/sweep";
 import { limitEverywhere, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
 export { firstReached, reachedAt, type LimitEverywhere } from "@/solver/studySweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
@@ -48,6 +48,36 @@ export interface SweepData {
    *  used up): from a sign change between two points. Other quantities changing sign are not marked. */
   crossings: Array<{ quantity: number; between: [number, number] }>;
   errors: Array<{ value: number; errors: FieldError[] }>;
+  /** where a plotted contact is off the ground (a plotted tie slack): stretches of neighbouring
+   *  points, in sweep order (absent on data made before they were kept) */
+  off?: Array<PointStretch & { support: string; kind: "contact" | "tie" }>;
+  /** where a plotted friction margin is left out (NaN) while its contact bears, because its body
+   *  tips or is unrestrained: its reactions are then only what would hold it */
+  notHeld?: Array<PointStretch & { support: string; body: string; status: string }>;
+}
+
+/** Neighbouring points of a sweep that share something: the first and last swept value, how many. */
+export interface PointStretch {
+  from: number;
+  to: number;
+  points: number;
+  /** the stretch is every point of the sweep */
+  whole: boolean;
+}
+
+/** Stretches of neighbouring points with the same key (null: none there), in sweep order. */
+export function stretchesOf(xs: readonly number[], keys: ReadonlyArray<string | null>): Array<PointStretch & { key: string }> {
+  const out: Array<PointStretch & { key: string }> = [];
+  keys.forEach((key, i) => {
+    const last = out[out.length - 1];
+    if (key === null) return;
+    if (last && i > 0 && keys[i - 1] === key) {
+      last.to = xs[i];
+      last.points++;
+    } else out.push({ key, from: xs[i], to: xs[i], points: 1, whole: false });
+  });
+  for (const s of out) s.whole = s.points === xs.length;
+  return out;
 }
 
 const STATUS_RANK: Record<string, number> = { holds: 0, lifts: 1, tips: 2, unrestrained: 3 };
@@ -69,16 +99,29 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
   const xs = linspace(spec.from, spec.to, spec.points);
   const sweeper = sweeperOn(p.file, { case: spec.caseId, combination: spec.combinationId }, spec.parameter, p.sketch);
   const data: SweepData = { parameter: spec.parameter, unit: sweeper.unit, quantities: spec.quantities, xs: [], series: spec.quantities.map(() => []), statuses: [], crossings: [], errors: [] };
+  // the plotted supports, and those whose friction is plotted, once each
+  const supports = [...new Set(spec.quantities.map((q) => q.support))];
+  const withFriction = [...new Set(spec.quantities.filter((q) => q.component === "frictionMargin" || q.component === "frictionRatio").map((q) => q.support))];
+  /** per point: "contact" / "tie" where the support is off its seat, else null */
+  const off = new Map<string, Array<string | null>>(supports.map((id) => [id, []]));
+  /** per point: "<body> <status>" where the support's body is not held and the support is on its seat */
+  const loose = new Map<string, Array<string | null>>(withFriction.map((id) => [id, []]));
   try {
     for (let i = 0; i < xs.length; i++) {
       const pt = sweeper.at(xs[i]);
       data.xs.push(xs[i]);
       if (pt.ok) {
-        spec.quantities.forEach((q, k) => data.series[k].push(readQuantity(pt.result, q)));
+        spec.quantities.forEach((q, k) => data.series[k].push(sweptQuantity(pt.result, q)));
+        for (const id of supports) off.get(id)!.push(supportOff(pt.result, id) ? pt.result.reactions[id].kind : null);
+        for (const id of withFriction) {
+          const r = pt.result.reactions[id];
+          loose.get(id)!.push(r && !supportOff(pt.result, id) && !supportBodyHeld(pt.result, id) ? `${r.body} ${pt.result.bodies[r.body]?.status}` : null);
+        }
         const worst = Object.values(pt.result.bodies).reduce((w, b) => (STATUS_RANK[b.status] > STATUS_RANK[w] ? b.status : w), "holds");
         data.statuses.push(worst);
       } else {
         spec.quantities.forEach((_, k) => data.series[k].push(Number.NaN));
+        for (const list of [...off.values(), ...loose.values()]) list.push(null);
         data.statuses.push("error");
         data.errors.push({ value: xs[i], errors: pt.errors });
       }
@@ -87,6 +130,13 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
   } finally {
     sweeper.restore();
   }
+  data.off = supports.flatMap((support) => stretchesOf(data.xs, off.get(support)!).map(({ key, ...s }) => ({ ...s, support, kind: key as "contact" | "tie" })));
+  data.notHeld = withFriction.flatMap((support) =>
+    stretchesOf(data.xs, loose.get(support)!).map(({ key, ...s }) => {
+      const cut = key.lastIndexOf(" ");
+      return { ...s, support, body: key.slice(0, cut), status: key.slice(cut + 1) };
+    }),
+  );
   data.series.forEach((ys, k) => {
     if (!marksZero(spec.quantities[k].component)) return;
     for (let i = 1; i < ys.length; i++) {

@@ -2,8 +2,8 @@
 // The results of all operating cases at once: reactions per case with the governing case marked,
 // the envelope, each support's design load, and the factors of safety. The editor's Cases tab and
 // a version's review page show the same tables.
-import type { StudyResult } from "@/solver/cases";
-import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, unsolvedWords } from "@/solver/report";
+import { COMPONENTS, type Component, type StudyResult } from "@/solver/cases";
+import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, stateWord, unsolvedWords } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
@@ -17,10 +17,69 @@ export function belowRequired(table: Table) {
   };
 }
 
+/** The footnote mark on a per-case "slips" whose body passes its sliding check. */
+export const SLIP_NOTE_MARK = "*";
+
+/**
+ * The rows (case name, support name) whose state says "slips" — that one contact needs more than
+ * its own μ gives — while its body passes the sliding check: the check takes all its contacts
+ * together (Σ μ·n over |Σ t|), and the body has friction to spare. Said in a note, so the two do
+ * not read as a contradiction.
+ */
+export function slipsWithFrictionToSpare(result: StudyResult): Set<string> {
+  const out = new Set<string>();
+  for (const run of result.runs) {
+    if (!run.ok) continue;
+    for (const [id, r] of Object.entries(run.result.reactions)) {
+      if (stateWord(r, run.result.bodies[r.body]?.status) !== "slips") continue;
+      const sliding = run.stability[r.body]?.sliding;
+      if (sliding && !("notApplicable" in sliding) && sliding.pass) out.add(rowKey(run.name, nameIn(result, id)));
+    }
+  }
+  return out;
+}
+const rowKey = (caseName: Cell, support: Cell) => `${caseName}\u0000${support}`;
+
+const TIE_WORDS: Record<Component, string> = { fx: "Fx", fy: "Fy", m: "M", n: "Normal n", t: "Tangential t", resultant: "the design load (largest resultant)", margin: "the least margin" };
+
+/**
+ * Where several cases give a support's governing value alike: one sentence a support and set of
+ * cases ("rear wheels — Fx and Fy: Lance aimed down and Lance raised alike"). The tables mark and
+ * name the first of them; these say the others govern as much.
+ */
+export function governingTieWords(result: StudyResult): string[] {
+  const nameOf = (id: string) => result.runs.find((r) => r.id === id)?.name ?? id;
+  const out: string[] = [];
+  for (const [id, env] of Object.entries(result.envelope)) {
+    const bySet = new Map<string, Component[]>();
+    for (const c of COMPONENTS) {
+      const tied = env.ties?.[c];
+      if (!tied) continue;
+      const key = tied.join("\u0000");
+      bySet.set(key, [...(bySet.get(key) ?? []), c]);
+    }
+    for (const [key, components] of bySet)
+      out.push(`${nameIn(result, id)} — ${andList(components.map((c) => TIE_WORDS[c]))}: ${andList(key.split("\u0000").map(nameOf))} alike`);
+  }
+  return out;
+}
+
+const andList = (xs: readonly string[]) => (xs.length < 2 ? xs.join("") : `${xs.slice(0, -1).join(", ")} and ${xs[xs.length - 1]}`);
+
 export function CaseTables({ result, units }: { result: StudyResult; units: UnitSystem }) {
   const nameOf = (id: string) => result.runs.find((r) => r.id === id)?.name ?? id;
   const unsolved = unsolvedWords(result);
   const stability = stabilityTable(result, units);
+  const reactions = withoutAbsentMoment(caseReactionTable(result, units), result);
+  const spare = slipsWithFrictionToSpare(result);
+  const col = (key: string) => reactions.columns.findIndex((c) => c.key === key);
+  const markSlip = (row: readonly Cell[], key: string) =>
+    key === "state" && spare.has(rowKey(row[col("case")], row[col("support")])) ? (
+      <sup className="ml-0.5 font-semibold text-ink" title="One contact over its own μ while the body has friction to spare: see the note under the table">
+        {SLIP_NOTE_MARK}
+      </sup>
+    ) : null;
+  const ties = unsolved ? [] : governingTieWords(result);
   return (
     <>
       {result.runs.filter((r) => !r.ok).map((r) => (
@@ -40,12 +99,15 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
           {w}
         </p>
       ))}
-      <ReportTable
-        table={withoutAbsentMoment(caseReactionTable(result, units), result)}
-        fileName="reactions-per-case"
-        testId="case-reactions"
-        caption="▲ / ▼ beside a value: this case governs that component (largest magnitude; ▲ its maximum, ▼ its minimum). “design load”: the case of the support's largest resultant."
-      />
+      {/* one group of rows a case, the key to ▲ / ▼ above the table: it fits the panel, and its key is never cut */}
+      <ReportTable table={reactions} fileName="reactions-per-case" testId="case-reactions" groupBy={["case"]} notesAbove mark={markSlip} />
+      {spare.size > 0 && (
+        <p className="mt-1 text-[11.5px] text-ink-faint" data-testid="slips-note">
+          {SLIP_NOTE_MARK} slips: that contact needs more friction than its own μ gives (|t| more than μ·n), but its body passes the sliding check, which takes all
+          its contacts together (Σ μ·n over |Σ t|): the body as a whole has friction to spare. Statics does not say how friction is shared between contacts; the others
+          can take up what this one cannot, so the body need not slide, though this contact may slip a little until they do (common practice).
+        </p>
+      )}
       {unsolved ? (
         <p className="mt-3 rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-[12.5px] font-medium text-ink" data-testid="no-envelope">
           {unsolved}
@@ -53,7 +115,17 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
       ) : (
         <>
           <div className="mt-3">
-            <ReportTable table={withoutAbsentMoment(envelopeTable(result, units), result)} fileName="envelope" testId="envelope" />
+            <ReportTable table={withoutAbsentMoment(envelopeTable(result, units), result)} fileName="envelope" testId="envelope" groupBy={["support"]} />
+            {ties.length > 0 && (
+              <div className="mt-1 text-[11.5px] text-ink-soft" data-testid="governing-ties">
+                <p>Cases that tie for the governing value (the tables mark and name the first of them; the others govern as much):</p>
+                <ul className="ml-3 list-disc">
+                  {ties.map((w) => (
+                    <li key={w}>{w}.</li>
+                  ))}
+                </ul>
+              </div>
+            )}
           </div>
           <div className="mt-3">
             <ReportTable table={withoutAbsentMoment(designLoadTable(result, units), result)} fileName="design-loads" testId="design-loads" />
@@ -61,12 +133,17 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
         </>
       )}
       <div className="mt-3">
-        <ReportTable table={stability} fileName="factors-of-safety" testId="stability" mark={belowRequired(stability)}
-        />
+        <ReportTable table={stability} fileName="factors-of-safety" testId="stability" mark={belowRequired(stability)} groupBy={["case", "body"]} />
       </div>
       {unsolved ? null : (
         <p className="mt-2 text-[11.5px] text-ink-faint">
-          Design load from — {Object.entries(result.envelope).map(([id, e]) => `${nameIn(result, id)}: ${nameOf(e.design.case)}`).join(" · ")}
+          Design load from —{" "}
+          {Object.keys(result.envelope)
+            .map((id) => {
+              const from = (result.envelope[id].ties?.resultant ?? [result.envelope[id].design.case]).map(nameOf);
+              return `${nameIn(result, id)}: ${from.length > 1 ? `${andList(from)} alike (a tie)` : from[0]}`;
+            })
+            .join(" · ")}
         </p>
       )}
     </>

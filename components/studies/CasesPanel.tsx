@@ -21,13 +21,15 @@ const FieldErrors = createContext<(label: string, error: string | null) => void>
 
 /** A text field that commits a parsed value on blur or Enter and shows its error at the field.
  *  The text is parsed once a commit: `onCommit` gets what `parse` made of it. */
-function TextCell<T>({ label, value, parse, onCommit, placeholder, width }: {
+function TextCell<T>({ label, value, parse, onCommit, placeholder, width, multiline }: {
   label: string;
   value: string;
   parse: (t: string) => Parsed<T>;
   onCommit: (value: T) => void;
   placeholder?: string;
   width?: string;
+  /** a name: the field wraps onto as many lines as the text needs, so the whole of it shows (Enter still commits) */
+  multiline?: boolean;
 }) {
   const [text, setText] = useState(value);
   const [error, setError] = useState<string | null>(null);
@@ -50,9 +52,36 @@ function TextCell<T>({ label, value, parse, onCommit, placeholder, width }: {
     setError(null);
     if (text !== value) onCommit(r.value);
   };
+  // a wrapping field grows to its text (field-sizing where the browser has it, its scroll height otherwise)
+  const area = useRef<HTMLTextAreaElement>(null);
+  useEffect(() => {
+    const el = area.current;
+    if (!el || (typeof CSS !== "undefined" && CSS.supports?.("field-sizing", "content"))) return;
+    el.style.height = "auto";
+    if (el.scrollHeight > 0) el.style.height = `${el.scrollHeight + 2}px`;
+  }, [text]);
   return (
     <label className={`flex flex-col ${width ?? ""}`}>
       <span className="sr-only">{label}</span>
+      {multiline ? (
+        <textarea
+          ref={area}
+          rows={1}
+          className={`${INPUT} !h-auto min-h-7 resize-none overflow-hidden py-[3px] leading-snug [field-sizing:content]`}
+          value={text}
+          placeholder={placeholder}
+          aria-label={label}
+          aria-invalid={error ? true : undefined}
+          // one line of words: a line break typed or pasted is a space
+          onChange={(e) => setText(e.target.value.replace(/\s*\n\s*/g, " "))}
+          onBlur={commit}
+          onKeyDown={(e) => {
+            if (e.key !== "Enter") return;
+            e.preventDefault();
+            commit();
+          }}
+        />
+      ) : (
       <input
         className={INPUT}
         value={text}
@@ -65,12 +94,13 @@ function TextCell<T>({ label, value, parse, onCommit, placeholder, width }: {
         onBlur={commit}
         onKeyDown={(e) => e.key === "Enter" && commit()}
       />
+      )}
       {error && <span className="mt-0.5 text-[11px] text-caution" role="alert">{error}</span>}
     </label>
   );
 }
 
-const parseName = (t: string): Parsed<string> => (t.trim() ? { ok: true, value: t.trim() } : { ok: false, error: "needs a name" });
+const parseName = (t: string): Parsed<string> => (t.trim() ? { ok: true, value: t.trim().replace(/\s+/g, " ") } : { ok: false, error: "needs a name" });
 
 export function CasesPanel() {
   const { editor } = useStores();
@@ -194,10 +224,10 @@ export function CasesPanel() {
             <SideScroll>
             <table className="mt-1 w-full min-w-[40rem] table-fixed text-[12px]" data-testid="cases-table">
               <colgroup>
-                <col className="w-[32%]" />
-                <col className="w-[32%]" />
-                <col className="w-[25%]" />
-                <col className="w-16" />
+                <col className="w-[36%]" />
+                <col className="w-[31%]" />
+                <col className="w-[22%]" />
+                <col className="w-14" />
                 <col className="w-6" />
               </colgroup>
               <thead>
@@ -213,10 +243,11 @@ export function CasesPanel() {
                 {cases.map((c, i) => (
                   <tr key={c.id} className="align-top" data-case={c.id}>
                     <td className="pr-1 pb-1">
-                      <TextCell label={`Name of case ${c.id}`} value={c.name} parse={parseName} onCommit={(name) => updateCase(i, { name })} />
-                      <span className="flex flex-wrap items-center gap-x-2 text-[10.5px] text-ink-faint">
-                        <span>id {c.id}</span>
-                        <label className="flex items-center gap-1" title="A load case: solved only as part of the combinations that name it, not on its own (left out of the case table, the envelope and the findings)">
+                      <TextCell label={`Name of case ${c.id}`} value={c.name} parse={parseName} onCommit={(name) => updateCase(i, { name })} multiline />
+                      {/* one line in every row: the id gives way (cut short, whole in its title), never the box */}
+                      <span className="flex items-center gap-x-2 whitespace-nowrap text-[10.5px] text-ink-faint" data-testid="case-id-line">
+                        <span className="min-w-0 truncate" title={`id ${c.id}`}>id {c.id}</span>
+                        <label className="ml-auto flex shrink-0 items-center gap-1" title="A load case: solved only as part of the combinations that name it, not on its own (left out of the case table, the envelope and the findings)">
                           <input type="checkbox" className="h-3 w-3" checked={!!c.onlyInCombinations} onChange={(e) => updateCase(i, { onlyInCombinations: e.target.checked || undefined })} aria-label={`${c.name}: only in combinations`} />
                           only in combinations
                         </label>
@@ -273,7 +304,7 @@ export function CasesPanel() {
                 // the name and the terms side by side, the name given a share of the width (a
                 // combination's name is often a sentence); on a narrow panel the terms go under it
                 <li key={k.id} className="grid grid-cols-[minmax(0,1fr)_auto] items-start gap-1 @lg:grid-cols-[minmax(10rem,2fr)_minmax(12rem,3fr)_auto]" data-combination={k.id}>
-                  <TextCell width="col-start-1 row-start-1" label={`Name of combination ${k.id}`} value={k.name} parse={parseName} onCommit={(name) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name } : x)))} />
+                  <TextCell width="col-start-1 row-start-1" multiline label={`Name of combination ${k.id}`} value={k.name} parse={parseName} onCommit={(name) => putCombos(combinations.map((x, j) => (j === i ? { ...x, name } : x)))} />
                   <TextCell width="col-span-2 row-start-2 @lg:col-span-1 @lg:col-start-2 @lg:row-start-1" label={`Cases and factors of ${k.name}`} value={formatTerms(k.terms, cases)} placeholder="1.2 dead + 1.5 flow" parse={(t) => parseTerms(t, cases)} onCommit={(terms) => putCombos(combinations.map((x, j) => (j === i ? { ...x, terms } : x)))} />
                   <button type="button" className="col-start-2 row-start-1 px-1 pt-1 text-ink-faint hover:text-accent @lg:col-start-3" aria-label={`Remove combination ${k.name}`} onClick={() => dropCombination(k)}>
                     ×

@@ -1,7 +1,7 @@
 "use client";
 // A result table from the solver's report (the rows the CSV and the calc sheet use), with a CSV button.
 // Long names wrap in their cell, so the table fits its panel instead of scrolling sideways.
-import { useEffect, useRef, useState, type ReactNode } from "react";
+import { useEffect, useId, useRef, useState, type ReactNode } from "react";
 import type { Cell, Table } from "@/solver/report";
 import { formatNumber } from "@/solver/units";
 import { BUTTON } from "@/components/editor/ui";
@@ -14,8 +14,9 @@ import { downloadCsv, useCsvName } from "./csv";
 // ("rearStabiliserLegOnTheOutriggerBeam") may break anywhere rather than widen the table
 const TEXT_CELL = "max-w-[14rem] whitespace-normal";
 // a table cell ignores min-width (CSS leaves it undefined): a block inside it holds the width, so a
-// narrow panel scrolls the table rather than squeezing a note to a letter a line
-const minWidthOf = (text: string) => (text.length > 28 ? "min-w-[9rem]" : "min-w-[4.5rem]");
+// narrow panel scrolls the table rather than squeezing a note to a letter a line. A single word
+// ("bearing", "N·m") never wraps and needs none; a long id that may break anywhere does.
+const minWidthOf = (text: string) => (!/\s/.test(text) ? (text.length > 18 ? "min-w-[4.5rem]" : "") : text.length > 28 ? "min-w-[6.5rem]" : "min-w-[4.5rem]");
 
 /** Whether a box scrolls sideways with more to see on its right (for the fade that says so). */
 function useMoreToTheRight() {
@@ -57,35 +58,102 @@ export function SideScroll({ children }: { children: ReactNode }) {
 
 const wrapOf = (text: string) => (text.length > 18 && !/\s/.test(text) ? "[overflow-wrap:anywhere]" : "[overflow-wrap:break-word]");
 
+/** Rows in runs that share the values of the `groupBy` columns (a case, a support): each run one group. */
+function groupRows(table: Table, groupBy: readonly string[]): Array<{ label: string; rows: number[] }> {
+  const at = groupBy.map((k) => table.columns.findIndex((c) => c.key === k)).filter((i) => i >= 0);
+  const out: Array<{ label: string; rows: number[] }> = [];
+  table.rows.forEach((row, ri) => {
+    const label = at.map((i) => (row[i] === null ? "—" : String(row[i]))).filter((t) => t !== "").join(" — ");
+    const last = out[out.length - 1];
+    if (last && last.label === label) last.rows.push(ri);
+    else out.push({ label, rows: [ri] });
+  });
+  return out;
+}
+
 export function ReportTable({
   table,
   fileName,
   mark,
   caption,
+  notesAbove,
+  groupBy,
   testId,
 }: {
   table: Table;
   fileName: string;
   /** words to show after a cell, by row and column key (the table's own marks show before it) */
   mark?: (row: Cell[], key: string) => ReactNode;
+  /** words about the table, said above it (outside its sideways scroll, so never cut) and as its caption */
   caption?: string;
+  /** the table's notes above it rather than under it (a key to marks in its cells, read first) */
+  notesAbove?: boolean;
+  /** columns whose values head a group of rows (a case, a support) instead of repeating in each
+   *  row: the table is narrower by those columns, so it fits its panel. The CSV keeps them. */
+  groupBy?: readonly string[];
   testId?: string;
 }) {
   const csvName = useCsvName();
+  const headingId = useId();
+  const captionId = useId();
+  const shown = table.columns.map((c, i) => ({ c, i })).filter(({ c }) => !groupBy?.includes(c.key));
+  const groups = groupBy?.length ? groupRows(table, groupBy) : [{ label: "", rows: table.rows.map((_, i) => i) }];
+  const notes = table.notes?.map((n) => (
+    <p key={n} className={`${notesAbove ? "mb-1" : "mt-1"} text-[11.5px] text-ink-faint`}>
+      {n}
+    </p>
+  ));
+  const renderRow = (ri: number, group: string) => {
+    const row = table.rows[ri];
+    return (
+      <tr key={ri} className="border-b border-rule-soft" data-group={group || undefined}>
+        {shown.map(({ c: col, i }, k) => {
+          const cell = row[i];
+          const extra = mark?.(row, col.key);
+          const cellMark = table.marks?.[ri]?.[col.key];
+          const text = col.align === "left" && typeof cell === "string" && cell !== "";
+          return (
+            <td
+              key={col.key}
+              data-col={col.key}
+              data-mark={cellMark ? cellMark.symbol : undefined}
+              title={cellMark?.text ?? (text ? cell : undefined)}
+              className={`px-1.5 py-[3px] align-top ${text ? `${TEXT_CELL} ${wrapOf(cell)}` : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${k === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
+            >
+              {cellMark && (
+                <span role="img" aria-label={cellMark.text} className="mr-0.5">
+                  {cellMark.symbol}
+                </span>
+              )}
+              {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4, { keepZeros: true }) : text ? <span className={`inline-block ${minWidthOf(cell)}`.trim()}>{cell}</span> : cell}
+              {extra}
+            </td>
+          );
+        })}
+      </tr>
+    );
+  };
   return (
     <div className="min-w-0">
       <div className="mb-1 flex items-center gap-2">
-        <h3 className="text-[12.5px] font-semibold text-ink">{table.title}</h3>
+        <h3 id={headingId} className="text-[12.5px] font-semibold text-ink">{table.title}</h3>
         <button type="button" className={`${BUTTON} ml-auto h-6 px-2 text-[11.5px]`} onClick={() => downloadCsv(table, csvName(fileName))} aria-label={`Download “${table.title}” as CSV`}>
           CSV
         </button>
       </div>
+      {/* outside the sideways scroll: a key to the table is read whole, however narrow the panel */}
+      {caption && (
+        <p id={captionId} className="mb-1 text-[11.5px] text-ink-faint" data-testid={testId ? `${testId}-caption` : undefined}>
+          {caption}
+        </p>
+      )}
+      {notesAbove && notes}
       <SideScroll>
-          <table className="num w-full border-collapse text-[12px]" data-testid={testId}>
-            {caption && <caption className="caption-top pb-1 text-left text-[11.5px] text-ink-faint">{caption}</caption>}
+          <table className="num w-full border-collapse text-[12px]" data-testid={testId} aria-labelledby={caption ? undefined : headingId} aria-describedby={caption ? captionId : undefined}>
+            {caption && <caption className="sr-only">{caption}</caption>}
             <thead>
               <tr className="border-b border-rule text-[11px] text-ink-faint">
-                {table.columns.map((c) => (
+                {shown.map(({ c }) => (
                   <th key={c.key} scope="col" className={`px-1.5 py-1 align-bottom font-medium ${c.align === "left" ? "text-left" : "text-right"}`}>
                     {c.label}
                     {c.unit && <span className="ml-0.5 whitespace-nowrap font-normal">({c.unit})</span>}
@@ -93,42 +161,23 @@ export function ReportTable({
                 ))}
               </tr>
             </thead>
-            <tbody>
-              {table.rows.map((row, ri) => (
-                <tr key={ri} className="border-b border-rule-soft">
-                  {row.map((cell, i) => {
-                    const col = table.columns[i];
-                    const extra = mark?.(row, col.key);
-                    const cellMark = table.marks?.[ri]?.[col.key];
-                    const text = col.align === "left" && typeof cell === "string" && cell !== "";
-                    return (
-                      <td
-                        key={col.key}
-                        data-col={col.key}
-                        data-mark={cellMark ? cellMark.symbol : undefined}
-                        title={cellMark?.text ?? (text ? cell : undefined)}
-                        className={`px-1.5 py-[3px] align-top ${text ? `${TEXT_CELL} ${wrapOf(cell)}` : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${i === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
-                      >
-                        {cellMark && (
-                          <span role="img" aria-label={cellMark.text} className="mr-0.5">
-                            {cellMark.symbol}
-                          </span>
-                        )}
-                        {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4, { keepZeros: true }) : text ? <span className={`inline-block ${minWidthOf(cell)}`}>{cell}</span> : cell}
-                        {extra}
-                      </td>
-                    );
-                  })}
-                </tr>
-              ))}
-            </tbody>
+            {groups.map((g, gi) =>
+              g.label ? (
+                <tbody key={gi}>
+                  <tr className="border-b border-rule-soft">
+                    <th colSpan={shown.length} scope="rowgroup" data-group-label={g.label} className={`px-1.5 pb-0.5 ${gi === 0 ? "pt-1" : "pt-2.5"} text-left text-[11.5px] font-semibold text-ink [overflow-wrap:break-word]`}>
+                      {g.label}
+                    </th>
+                  </tr>
+                  {g.rows.map((ri) => renderRow(ri, g.label))}
+                </tbody>
+              ) : (
+                <tbody key={gi}>{g.rows.map((ri) => renderRow(ri, ""))}</tbody>
+              ),
+            )}
           </table>
       </SideScroll>
-      {table.notes?.map((n) => (
-        <p key={n} className="mt-1 text-[11.5px] text-ink-faint">
-          {n}
-        </p>
-      ))}
+      {!notesAbove && notes}
     </div>
   );
 }

@@ -15,7 +15,7 @@ import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
-import { firstReached, reachedAt, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
+import { firstReached, reachedAt, type LimitEverywhere, type PointStretch, type SweepData, type SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
 import { defaultLimitQuantity, SweepChart } from "./SweepChart";
@@ -31,6 +31,11 @@ const solvedFromChanged = (a: SketchFile, b: SketchFile) =>
   a !== b && [...new Set([...Object.keys(a), ...Object.keys(b)])].some((k) => !NOT_SOLVED_FROM.has(k) && a[k as keyof SketchFile] !== b[k as keyof SketchFile]);
 /** stretches of invalid sweep points listed one by one; more are counted */
 const MAX_STRETCHES = 4;
+/** the most points a sweep takes */
+const MAX_POINTS = 20000;
+
+/** "a", "a and b", "a, b and c" */
+const andList = (xs: readonly string[]) => (xs.length < 2 ? xs.join("") : `${xs.slice(0, -1).join(", ")} and ${xs[xs.length - 1]}`);
 
 const COMPONENT_WORDS: Partial<Record<QuantityComponent, string>> = {
   margin: "margin",
@@ -45,6 +50,31 @@ const COMPONENT_TITLES: Partial<Record<QuantityComponent, string>> = {
   margin: "The normal force while bearing (taut); below zero once the contact lifts (the tie goes slack)",
   frictionMargin: "μ·n − |t|: below zero where the contact needs more friction than it has",
 };
+
+/** An example of a value typed with its own unit, of the parameter's kind. */
+function unitExample(unit: string): string {
+  const examples: Record<string, string> = { deg: "0.3 rad", rad: "15 deg", m: "250 mm", mm: "0.25 m", "m / s": "90 km/hr", "m/s": "90 km/hr", kg: "2 t", bar: "150 psi", Pa: "2 kPa", kPa: "0.5 bar" };
+  return examples[unit.replace(/\s+/g, " ")] ?? examples[unit.replace(/\s+/g, "")] ?? `2 ${prettyUnit(unit)}`;
+}
+
+/**
+ * The cases searched (on their own or within a searched combination) that set the swept parameter
+ * themselves, "name: value" (as the case writes it): the searched value stands in for theirs. For the flow factor, the
+ * cases whose flow factor is not 1.
+ */
+export function overridesIn(sketch: SketchFile, rows: readonly LimitEverywhere[], parameter: string): string[] {
+  const ids = new Set<string>();
+  for (const r of rows) {
+    if (r.kind === "case") ids.add(r.id);
+    if (r.kind === "combination") for (const t of sketch.combinations?.find((k) => k.id === r.id)?.terms ?? []) ids.add(t.case);
+  }
+  return (sketch.cases ?? []).flatMap((c) => {
+    if (!ids.has(c.id)) return [];
+    if (parameter === FLOW_FACTOR) return c.flowFactor !== undefined && c.flowFactor !== 1 ? [`${c.name}: flow × ${c.flowFactor}`] : [];
+    const v = c.parameters?.[parameter];
+    return v === undefined ? [] : [`${c.name}: ${String(v)}`];
+  });
+}
 
 export function SweepPanel() {
   const { editor } = useStores();
@@ -88,6 +118,10 @@ export function SweepPanel() {
     setTo(String(range.to));
   };
   const [points, setPoints] = useState(String(saved?.points ?? 201));
+  // the unit the chosen parameter is written in (what a plain number in From and To means), from
+  // the parameter as chosen now, not from the last plot
+  const chosenValue = parameter === FLOW_FACTOR ? undefined : values[parameter];
+  const parameterUnit = chosenValue && !("error" in chosenValue) ? chosenValue.unit : "";
   // what the sweep runs on: "" (as drawn), "case:<id>" or "combination:<id>"
   const [on, setOn] = useState<string>(saved?.combination ? `combination:${saved.combination}` : saved?.case ? `case:${saved.case}` : "");
   const caseId = on.startsWith("case:") ? on.slice(5) : undefined;
@@ -112,9 +146,23 @@ export function SweepPanel() {
   /** the quantity the limit finder searches, as "support:component" (null: the plot's default, see defaultLimitQuantity) */
   const [limitKey, setLimitKey] = useState<string | null>(null);
   const [target, setTarget] = useState("0");
-  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** as typed, with its unit */ target: string; /** the answer, in words with units */ words: string } | null>(null);
+  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** in the unit on screen */ target: string; /** the answer, in words with units */ words: string } | null>(null);
   /** the same limit in every case and combination */
-  const [everywhere, setEverywhere] = useState<{ rows: LimitEverywhere[]; label: string; target: string; first: string | null; unit: string; from: number; to: number; precision: string } | null>(null);
+  const [everywhere, setEverywhere] = useState<{
+    rows: LimitEverywhere[];
+    label: string;
+    target: string;
+    /** the runs where it comes first: more than one when they tie */
+    first: string[];
+    firstValue: number | null;
+    unit: string;
+    from: number;
+    to: number;
+    precision: string;
+    /** the searched runs' cases that set the parameter themselves: "name: value" */
+    overrides: string[];
+    pName: string;
+  } | null>(null);
   /** a target that does not read: said beside the limit finder, not up by the sweep's Run */
   const [limitError, setLimitError] = useState<string | null>(null);
   const [searching, setSearching] = useState<(() => void) | null>(null);
@@ -132,24 +180,29 @@ export function SweepPanel() {
         ? `case ${sketch.cases?.find((c) => c.id === caseId)?.name ?? caseId}`
         : "as drawn";
   const quantities = choices.filter((c) => picked.includes(`${c.spec.support}:${c.spec.component}`)).map((c) => c.spec);
-  const spec = (): SweepSpec | string => {
+  /** The range as typed now, in the unit the parameter is written in (or an error in words, naming the field). */
+  const typedRange = (): { from: number; to: number } | string => {
     // the ends in the unit the parameter is written in, or with their own unit ("90 km/hr")
-    const current = parameter === FLOW_FACTOR ? undefined : values[parameter];
-    const unit = current && !("error" in current) ? current.unit : "";
     const ends: number[] = [];
     for (const [name, text] of [["From", from], ["To", to]]) {
       try {
-        ends.push(parseRangeValue(text, unit));
+        ends.push(parseRangeValue(text, parameterUnit));
       } catch (err) {
         return `${name}: ${(err as Error).message}.`;
       }
     }
     const [f, t] = ends;
-    const n = Math.round(Number(points));
     if (f === t) return "Give a range: two different values.";
-    if (!(n >= 2 && n <= 20000)) return "Points: 2 to 20,000.";
+    return { from: f, to: t };
+  };
+  const spec = (): SweepSpec | string => {
+    const range = typedRange();
+    if (typeof range === "string") return range;
+    // a whole number as typed: 2.6 is refused, not quietly run as 3
+    const n = Number(points.trim());
+    if (!points.trim() || !Number.isInteger(n) || n < 2 || n > MAX_POINTS) return `Points: a whole number from 2 to ${MAX_POINTS.toLocaleString("en-US")}.`;
     if (!quantities.length) return "Pick at least one quantity to plot.";
-    return { parameter, from: f, to: t, points: n, caseId, combinationId, quantities };
+    return { parameter, from: range.from, to: range.to, points: n, caseId, combinationId, quantities };
   };
 
   const run = () => {
@@ -180,12 +233,24 @@ export function SweepPanel() {
 
   /** The plotted run's settings, the quantity and the target read for a limit search (null: said why). */
   const limitInputs = () => {
-    // on what the plot shows (the form may have changed since)
+    // on what the plot shows (the form may have changed since): its case or combination and its
+    // parameter, over the range as typed now while the form still sweeps that parameter
     const s = ran?.spec;
     if (!s || !limitQuantity) return null;
     const q = limitQuantity;
+    let range = { from: s.from, to: s.to };
+    if (parameter === s.parameter) {
+      const typed = typedRange();
+      if (typeof typed === "string") {
+        setLimit(null);
+        setEverywhere(null);
+        setLimitError(`${typed} The limit finder searches the range as typed.`);
+        return null;
+      }
+      range = typed;
+    }
     // a plain number is in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or
-    // N·m); a value with a unit ("450 lbf") is taken as written
+    // N·m); a value with a unit ("450 lbf") is taken as written, and quoted in the unit on screen
     let tgt: { si: number; shown: string };
     try {
       tgt = parseTarget(target, q.component, units, scaleFor(q.component));
@@ -200,7 +265,7 @@ export function SweepPanel() {
     setLimit(null);
     setEverywhere(null);
     setLimitStopped(false);
-    return { s, q, tgt, text: ran.text, id: ran.id };
+    return { s: { ...s, ...range }, q, tgt, text: ran.text, id: ran.id };
   };
 
   const findEverywhere = () => {
@@ -218,7 +283,20 @@ export function SweepPanel() {
         // every run is searched over the same range, to the same tolerance
         const found = rows.find((r) => "found" in r.result && r.result.found)?.result;
         const tolerance = (found && "found" in found && found.found && found.tolerance) || limitTolerance([s.from, s.to]);
-        setEverywhere({ rows, label: describeQuantity(q, names), target: tgt.shown, first: first?.row.id ?? null, unit: unitText, from: s.from, to: s.to, precision: limitPrecisionWords(tolerance, unitText) });
+        const reached = rows.map((r) => reachedAt(r.result, s.from, s.to)).filter((x): x is number => x !== undefined);
+        setEverywhere({
+          rows,
+          label: describeQuantity(q, names),
+          target: tgt.shown,
+          first: first ? first.tied.map((r) => r.id) : [],
+          firstValue: first?.value ?? null,
+          unit: unitText,
+          from: s.from,
+          to: s.to,
+          precision: limitPrecisionWords(tolerance, unitText, reached),
+          overrides: overridesIn(ran!.sketch, rows, s.parameter),
+          pName: s.parameter === FLOW_FACTOR ? "flow factor" : s.parameter,
+        });
       })
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
       .finally(() => setSearching(null));
@@ -238,10 +316,14 @@ export function SweepPanel() {
         const inShown = (si: number) => `${formatNumber(toDisplay(si, q.component, units, scaleFor(q.component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
         const pUnit = result.unit ? ` ${prettyUnit(result.unit)}` : "";
         const pName = s.parameter === FLOW_FACTOR ? "the flow factor" : s.parameter;
-        // one rule for a found limit wherever it is shown: 4 significant figures, with the search's tolerance
+        // one rule for a found limit wherever it is shown: 4 significant figures, with the search's
+        // tolerance where it shows in them
         const again = result.found && result.crossings.length > 1 ? ` and again at ${result.crossings.slice(1).map((x) => limitWithUnit(x, result.unit)).join(", ")}` : "";
+        // a range typed since the plot is the one searched: said, since the plot shows another
+        const plotted = ran!.spec;
+        const otherRange = s.from !== plotted.from || s.to !== plotted.to ? ` Searched from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit} as typed now; the plot shows ${formatNumber(plotted.from, 5)} to ${formatNumber(plotted.to, 5)}${pUnit}.` : "";
         const words = result.found
-          ? `The ${label} reaches ${tgt.shown} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again} (${limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit)}).`
+          ? `The ${label} reaches ${tgt.shown} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again} (${limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit, result.crossings)}).${otherRange}`
           : Number.isFinite(result.min)
             ? `No crossing in this range: the ${label} stays ${result.min >= tgt.si ? "above" : "below"} ${tgt.shown} (it runs from ${inShown(result.min)} to ${inShown(result.max)}) for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`
             : `No crossing in this range: the ${label} is undefined for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`;
@@ -311,6 +393,41 @@ export function SweepPanel() {
   // the plot's parameter, which the form may have left since
   const dLabel = data ? (data.parameter === FLOW_FACTOR ? "flow factor" : data.parameter) : pLabel;
   const invalid = data ? invalidStretches(data) : [];
+  const plotUnit = data?.unit ? ` ${prettyUnit(data.unit)}` : "";
+  const hiddenStretches = Math.max(0, (data?.off?.length ?? 0) - MAX_STRETCHES * 2) + Math.max(0, (data?.notHeld?.length ?? 0) - MAX_STRETCHES);
+  const stretchWords = (o: PointStretch) =>
+    o.whole
+      ? `over the whole range (${dLabel} from ${formatNumber(o.from, 4)} to ${formatNumber(o.to, 4)}${plotUnit})`
+      : o.points === 1
+        ? `at ${dLabel} = ${formatNumber(o.from, 4)}${plotUnit}`
+        : `from ${dLabel} = ${formatNumber(o.from, 4)} to ${formatNumber(o.to, 4)}${plotUnit}`;
+  const frictionPlotted = (support: string) => !!data?.quantities.some((q) => q.support === support && (q.component === "frictionMargin" || q.component === "frictionRatio"));
+  const marginPlotted = (support: string) => !!data?.quantities.some((q) => q.support === support && q.component === "margin");
+  /** A plotted contact off the ground (a tie slack) over the range or a part of it, in words. */
+  const offWords = (o: NonNullable<SweepData["off"]>[number]) => {
+    const name = names[o.support] ?? o.support;
+    const state = o.kind === "tie" ? "slack" : "off the ground";
+    const why = [
+      o.whole && marginPlotted(o.support) ? "its margin stays below zero, so no crossing is marked" : "",
+      frictionPlotted(o.support) ? "it has no friction margin there, and none is plotted" : "",
+    ].filter(Boolean);
+    return `${name} is ${state} ${stretchWords(o)}${why.length ? `: ${why.join("; ")}` : ""}.`;
+  };
+  /** A friction margin left out where its body is not held, in words. */
+  const notHeldWords = (o: NonNullable<SweepData["notHeld"]>[number]) =>
+    `The friction margin at ${names[o.support] ?? o.support} is not plotted ${stretchWords(o)}, where ${names[o.body] ?? o.body} ${o.status === "tips" ? "tips" : "is unrestrained"}: a body that is not held has no friction margin (its reactions are only what would hold it).`;
+  // the limit finder searches the plotted parameter over the range as typed now: said when that is not the plotted range
+  const rangeNote = (() => {
+    if (!ran || !data) return null;
+    const s = ran.spec;
+    const sName = s.parameter === FLOW_FACTOR ? "flow factor" : s.parameter;
+    const sUnit = data.unit ? ` ${prettyUnit(data.unit)}` : "";
+    if (parameter !== s.parameter) return `Find searches the plotted ${sName}, from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${sUnit}: run the sweep to search ${pLabel}.`;
+    const typed = typedRange();
+    if (typeof typed === "string") return `Find searches the range as typed: ${typed}`;
+    if (typed.from === s.from && typed.to === s.to) return null;
+    return `Find searches ${sName} from ${formatNumber(typed.from, 5)} to ${formatNumber(typed.to, 5)}${sUnit}, as typed now; the plot shows ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${sUnit} (run the sweep to plot the new range).`;
+  })();
 
   return (
     <div className="@container" data-testid="sweep-panel">
@@ -326,11 +443,17 @@ export function SweepPanel() {
           </select>
         </label>
         <div className="col-span-2 grid grid-cols-3 gap-1.5 @4xl:col-span-1">
-          <label><span className={LABEL}>From</span><input className={INPUT} value={from} onChange={(e) => setFrom(e.target.value)} aria-label="From" /></label>
-          <label><span className={LABEL}>To</span><input className={INPUT} value={to} onChange={(e) => setTo(e.target.value)} aria-label="To" /></label>
-          <label><span className={LABEL}>Points</span><input className={INPUT} value={points} onChange={(e) => setPoints(e.target.value)} aria-label="Points" /></label>
+          <label><span className={LABEL}>From</span><input className={INPUT} value={from} onChange={(e) => setFrom(e.target.value)} aria-label="From" aria-invalid={error?.startsWith("From:") || undefined} /></label>
+          <label><span className={LABEL}>To</span><input className={INPUT} value={to} onChange={(e) => setTo(e.target.value)} aria-label="To" aria-invalid={error?.startsWith("To:") || undefined} /></label>
+          <label><span className={LABEL}>Points</span><input className={INPUT} value={points} onChange={(e) => setPoints(e.target.value)} aria-label="Points" inputMode="numeric" aria-invalid={error?.startsWith("Points:") || undefined} /></label>
         </div>
-        <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1">Numbers in the unit the parameter is written in{data?.unit ? ` (${prettyUnit(data.unit)})` : ""}, or give a unit (“90 km/hr”); the flow factor is a plain number.</p>
+        <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1" data-testid="sweep-unit-hint">
+          {parameter === FLOW_FACTOR
+            ? "The flow factor is a plain number (1: the flow as drawn)."
+            : parameterUnit
+              ? `Numbers in ${prettyUnit(parameterUnit)}, the unit ${parameter} is written in, or give a unit of the same kind (“${unitExample(parameterUnit)}”).`
+              : `${parameter} is a plain number.`}
+        </p>
         {(sketch.cases?.length ?? 0) > 0 && (
           <label className="col-span-2 block @4xl:col-span-1">
             <span className={LABEL}>{sketch.combinations?.length ? "Case or combination" : "Case"}</span>
@@ -428,6 +551,17 @@ export function SweepPanel() {
                   <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity], names)} crosses zero between {dLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${prettyUnit(data.unit)}` : ""}
                 </li>
               ))}
+              {(data.off ?? []).slice(0, MAX_STRETCHES * 2).map((o, i) => (
+                <li key={`off-${i}`} className="text-ink-soft" data-testid="off-stretch">
+                  {offWords(o)}
+                </li>
+              ))}
+              {(data.notHeld ?? []).slice(0, MAX_STRETCHES).map((o, i) => (
+                <li key={`loose-${i}`} className="text-ink-soft" data-testid="not-held-stretch">
+                  {notHeldWords(o)}
+                </li>
+              ))}
+              {hiddenStretches > 0 && <li className="text-ink-soft">… and {hiddenStretches} more stretches where a support is off its seat or its body is not held.</li>}
               {invalid.slice(0, MAX_STRETCHES).map((r, i) => (
                 <li key={`invalid-${i}`} className="text-caution" data-testid="invalid-points">
                   Not solved at {dLabel} = {formatNumber(r.from, 4)}{r.count > 1 ? ` to ${formatNumber(r.to, 4)}` : ""}{data.unit ? ` ${prettyUnit(data.unit)}` : ""} ({r.count} {r.count === 1 ? "point" : "points"}), where the sketch is invalid:{" "}
@@ -457,6 +591,11 @@ export function SweepPanel() {
                 </>
               )}
             </div>
+            {rangeNote && (
+              <p className="mt-1 text-[11.5px] text-ink-faint" data-testid="limit-range-note">
+                {rangeNote}
+              </p>
+            )}
             {limitError && (
               <p className="mt-1 text-[12.5px] text-caution" data-testid="limit-error" role="alert">
                 {limitError}
@@ -475,9 +614,11 @@ export function SweepPanel() {
             {everywhere && !limitStopped && (
               <div className="mt-1 text-[12.5px]" data-testid="limit-everywhere">
                 <p role="status">
-                  {everywhere.first !== null
-                    ? `The ${everywhere.label} reaches ${everywhere.target} first in ${everywhere.rows.find((r) => r.id === everywhere.first)!.name}.`
-                    : `The ${everywhere.label} reaches ${everywhere.target} in none of them in this range.`}
+                  {everywhere.first.length > 1
+                    ? `The ${everywhere.label} reaches ${everywhere.target} first in ${andList(everywhere.rows.filter((r) => everywhere.first.includes(r.id)).map((r) => r.name))}: a tie, each at ${everywhere.pName} = ${limitWithUnit(everywhere.firstValue!, everywhere.unit)}.`
+                    : everywhere.first.length === 1
+                      ? `The ${everywhere.label} reaches ${everywhere.target} first in ${everywhere.rows.find((r) => r.id === everywhere.first[0])!.name}.`
+                      : `The ${everywhere.label} reaches ${everywhere.target} in none of them in this range.`}
                 </p>
                 <table className="mt-0.5 text-[12px]">
                   <caption className="sr-only">
@@ -491,22 +632,29 @@ export function SweepPanel() {
                   </thead>
                   <tbody>
                     {everywhere.rows.map((r) => (
-                      <tr key={`${r.kind}:${r.id}`} className={r.id === everywhere.first ? "font-semibold" : ""}>
-                        <th scope="row" className={`pr-3 text-left text-ink-soft ${r.id === everywhere.first ? "font-semibold" : "font-normal"}`}>{r.kind === "combination" ? "Combination" : r.kind === "case" ? "Case" : ""} {r.name}</th>
+                      <tr key={`${r.kind}:${r.id}`} className={everywhere.first.includes(r.id) ? "font-semibold" : ""}>
+                        <th scope="row" className={`pr-3 text-left text-ink-soft ${everywhere.first.includes(r.id) ? "font-semibold" : "font-normal"}`}>{r.kind === "combination" ? "Combination" : r.kind === "case" ? "Case" : ""} {r.name}</th>
                         <td className="tabular-nums">
                           {"error" in r.result
                             ? `not solved: ${r.result.error}`
                             : r.result.found
-                              ? `${dLabel} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${r.id === everywhere.first ? " — first" : ""}`
+                              ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — first (a tie)" : " — first") : ""}`
                               : "no crossing in this range"}
                         </td>
                       </tr>
                     ))}
                   </tbody>
                 </table>
-                <p className="mt-0.5 text-[11.5px] text-ink-faint" data-testid="limit-everywhere-precision">
-                  Values {everywhere.precision}.
+                <p className="mt-0.5 text-[11.5px] text-ink-faint" data-testid="limit-everywhere-overrides">
+                  {everywhere.overrides.length
+                    ? `Each is searched over ${everywhere.pName} from ${formatNumber(everywhere.from, 5)} to ${formatNumber(everywhere.to, 5)}${everywhere.unit ? ` ${prettyUnit(everywhere.unit)}` : ""}: the searched value stands in for the ${everywhere.pName} a case sets itself (${everywhere.overrides.join("; ")}).`
+                    : `Each is searched over ${everywhere.pName} from ${formatNumber(everywhere.from, 5)} to ${formatNumber(everywhere.to, 5)}${everywhere.unit ? ` ${prettyUnit(everywhere.unit)}` : ""}; no case sets ${everywhere.pName} itself.`}
                 </p>
+                {everywhere.first.length > 0 && (
+                  <p className="mt-0.5 text-[11.5px] text-ink-faint" data-testid="limit-everywhere-precision">
+                    Values {everywhere.precision}.
+                  </p>
+                )}
               </div>
             )}
           </>

@@ -220,12 +220,31 @@ describe("the limit in every case and combination", () => {
       { id: "b", name: "B", kind: "case", result: found([30]) },
       { id: "c", name: "C", kind: "case", result: { error: "does not read" } },
     ];
-    expect(firstReached(rows, 45, 20)).toEqual({ row: rows[0], value: 40 });
-    expect(firstReached(rows, 20, 45)).toEqual({ row: rows[0], value: 22 });
+    expect(firstReached(rows, 45, 20)).toEqual({ row: rows[0], value: 40, tied: [rows[0]] });
+    expect(firstReached(rows, 20, 45)).toEqual({ row: rows[0], value: 22, tied: [rows[0]] });
     expect(reachedAt(rows[0].result, 45, 20)).toBe(40);
     expect(reachedAt(rows[2].result, 45, 20)).toBeUndefined();
     const later: LimitEverywhere[] = [rows[1], { id: "d", name: "D", kind: "case", result: found([26]) }];
     expect(firstReached(later, 20, 45)!.row.id).toBe("d");
     expect(firstReached(later, 45, 20)!.row.id).toBe("b");
+  });
+
+  it("names every run that reaches the target first when they tie, not one of them", () => {
+    // b and d reach 26 alike (cases that leave what the swept parameter drives alone give the same
+    // search); e is within the search's tolerance of them; a reaches it later
+    const found = (crossings: number[], tolerance = 2.5e-8): LimitEverywhere["result"] => ({ found: true, value: crossings[0], unit: "deg", crossings, iterations: 1, tolerance });
+    const rows: LimitEverywhere[] = [
+      { id: "a", name: "A", kind: "case", result: found([30]) },
+      { id: "b", name: "B", kind: "case", result: found([26]) },
+      { id: "d", name: "D", kind: "case", result: found([26]) },
+      { id: "e", name: "E", kind: "combination", result: found([26 + 3e-8]) },
+    ];
+    const first = firstReached(rows, 20, 45)!;
+    expect(first.row.id).toBe("b");
+    expect(first.value).toBe(26);
+    expect(first.tied.map((r) => r.id)).toEqual(["b", "d", "e"]);
+    // apart by more than the tolerance and by what 4 significant figures show: no tie
+    const apart = firstReached([rows[1], { id: "f", name: "F", kind: "case", result: found([26.01]) }], 20, 45)!;
+    expect(apart.tied.map((r) => r.id)).toEqual(["b"]);
   });
 });
