@@ -54,6 +54,9 @@ export function lowestFactor(parsed: ParsedSketch): LowFactor | null {
   return worst;
 }
 
+/** The summary's mark of a contact over its own μ on a body that does not slide as a whole. */
+export const OVER_MU = "OVER_MU";
+
 /** Solve once and keep what listings need. Never throws: a solver failure is recorded, not raised. */
 export function summarizeSolve(parsed: ParsedSketch): SolveSummary {
   try {
@@ -66,7 +69,11 @@ export function summarizeSolve(parsed: ParsedSketch): SolveSummary {
       worst = Math.max(worst, STATUS_ORDER.indexOf(b.status));
       if (Number.isFinite(b.largestReaction)) largest = Math.max(largest ?? 0, b.largestReaction);
     }
-    const warnings = [...new Set([...parsed.warnings, ...result.warnings].map((w) => w.code))];
+    let warnings: string[] = [...new Set([...parsed.warnings, ...result.warnings].map((w) => w.code))];
+    // a contact over its own μ while every body has friction to spare as a whole: the listing says
+    // "over μ" beside the status (as the results panel's badge does), not that the body slips
+    const slidesAsWhole = Object.values(result.bodies).some((b) => b.friction && b.friction.needed > b.friction.available * (1 + 1e-9));
+    if (warnings.includes("SLIP") && !slidesAsWhole) warnings = warnings.map((w) => (w === "SLIP" ? OVER_MU : w));
     return { status: worst >= 0 ? STATUS_ORDER[worst] : null, largestReaction: largest, bodies, warnings, lowestFactor: lowestFactor(parsed) };
   } catch (err) {
     return { status: null, largestReaction: null, bodies: {}, warnings: [], error: err instanceof Error ? err.message.slice(0, 200) : "the solve failed" };

@@ -5,7 +5,7 @@ import { z } from "zod";
 /** Best first: a listing's status is the worst of its bodies. */
 export const STATUS_ORDER = ["holds", "lifts", "tips", "unrestrained"] as const;
 export type SketchStatus = (typeof STATUS_ORDER)[number];
-/** What the listing filters by: a status, or "slips" (a friction contact or the body over its μ, a warning beside any status). */
+/** What the listing filters by: a status, or "slips" (the body needs more friction as a whole than its contacts give, a warning beside any status; one contact alone over its μ is "over μ", not a slip). */
 export const STATUS_FILTERS = ["holds", "slips", "lifts", "tips", "unrestrained"] as const satisfies ReadonlyArray<SketchStatus | "slips">;
 
 export const sketchTitleSchema = z

@@ -64,6 +64,7 @@ function SlipGlyph() {
   );
 }
 
+const OVER_MU_TITLE = "One contact needs more friction than its own μ gives; the body as a whole has friction to spare.";
 const SLIP_TITLE = "Slips: more friction is needed than the contacts give, so the body would slide.";
 
 /**
@@ -82,11 +83,13 @@ export function StatusMark({ status, warnings = [] }: { status: SketchStatus | n
         slips
       </span>
     );
+  const overMu = !slips && warnings.includes("OVER_MU");
   return (
-    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap font-medium ${w.tone}`} title={slips ? `${SLIP_TITLE} ${w.title}` : w.title} data-status={status}>
+    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap font-medium ${w.tone}`} title={slips ? `${SLIP_TITLE} ${w.title}` : overMu ? `${w.title}. ${OVER_MU_TITLE}` : w.title} data-status={status}>
       <Glyph status={status} />
       {slips ? <span className="text-caution">slips ·</span> : null}
       {w.word}
+      {overMu ? <span className="text-caution">· over μ</span> : null}
     </span>
   );
 }

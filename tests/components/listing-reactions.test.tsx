@@ -157,5 +157,10 @@ describe("the status mark of a body that needs more friction than its contacts g
     expect(container.querySelector("[data-status]")!.textContent).toBe("slips ·lifts");
     rerender(<StatusMark status="holds" warnings={[]} />);
     expect(container.querySelector("[data-status]")!.textContent).toBe("holds");
+    // one contact over its own μ, the body with friction to spare: it holds, over μ beside it
+    rerender(<StatusMark status="holds" warnings={["OVER_MU"]} />);
+    const over = container.querySelector("[data-status]")!;
+    expect([over.getAttribute("data-status"), over.textContent]).toEqual(["holds", "holds· over μ"]);
+    expect(over.getAttribute("title")).toMatch(/the body as a whole has friction to spare/);
   });
 });

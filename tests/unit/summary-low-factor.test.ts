@@ -4,7 +4,7 @@
 // friction available over friction needed); 1.5 required for each is common practice.
 import { describe, expect, it } from "vitest";
 import { parseSketch, solveCases } from "@/solver";
-import { lowestFactor, summarizeSolve } from "@/lib/sketch-document";
+import { lowestFactor, OVER_MU, summarizeSolve } from "@/lib/sketch-document";
 import { loadFixture } from "./solver/helpers";
 
 const parsed = (doc: unknown) => {
@@ -46,5 +46,21 @@ describe("the lowest factor of safety in a version's summary", () => {
 
   it("none below: null", () => {
     expect(lowestFactor(parsed(loadFixture("pump-skid-discharge.json")))).toBeNull();
+  });
+});
+
+describe("a slip in a version's summary", () => {
+  it("is a slip when the body needs more friction as a whole than its contacts give, 'over μ' when one contact alone does", () => {
+    // the skid that slides as a whole keeps SLIP (the listing's "slips" filter finds it)
+    const slides = summarizeSolve(parsed(loadFixture("pump-skid-slip.json")));
+    expect(slides.warnings).toContain("SLIP");
+    expect(slides.warnings).not.toContain(OVER_MU);
+    // the monitor thrown back at 150°: the rear leg needs 0.7004 of its μ = 0.7, the trailer as a
+    // whole less than the 0.7 its contacts give (Coulomb friction, common practice)
+    const doc = loadFixture("fire-monitor-trailer.json") as { parameters: Record<string, string> };
+    doc.parameters.theta = "150 deg";
+    const one = summarizeSolve(parsed(doc));
+    expect(one.warnings).toContain(OVER_MU);
+    expect(one.warnings).not.toContain("SLIP");
   });
 });
