@@ -11,14 +11,12 @@ import type { EditorStores } from "../context";
 import { drawingFrame } from "../geometry/fit";
 import { DIRECTED } from "../model/elements";
 import { anchorOf, type Scene } from "../scene";
-import { handleBoxes, handlePlace } from "../render/handles";
+import { handleAlong, handleBoxes, handlePlace } from "../render/handles";
 import { placeElementLabels, shiftBox, type Box } from "../render/labels";
-import { dir } from "../render/prims";
 import { elementGroups, resultLayer } from "../render/scenePrims";
 import { supportStates } from "../render/results";
 import type { UnitSystem } from "@/solver/units";
 import { statesOf } from "./nodes";
-import { handleSign } from "./pointer";
 import type { InteractionStore } from "./interaction";
 
 const NONE: readonly Box[] = [];
@@ -34,9 +32,7 @@ export function turnHandleBoxes(scene: Scene, selection: readonly string[], tool
   if (!el || el.kind === "body" || !DIRECTED.has(el.kind) || !("angle" in el)) return NONE;
   const a = anchorOf(el);
   if (![el.angle, a[0], a[1]].every(Number.isFinite)) return NONE;
-  const d = dir(el.kind === "force" && el.magnitude < 0 ? el.angle + 180 : el.angle);
-  const sign = handleSign(el);
-  const along: [number, number] = [d[0] * sign, d[1] * sign];
+  const along = handleAlong(el);
   const at: [number, number] = [a[0] * scale, -a[1] * scale];
   return handleBoxes(at, along, handlePlace(el, along, scale, units, frame && shiftBox(frame, at)));
 }

@@ -11,8 +11,8 @@ import { DIRECTED } from "../model/elements";
 import { elementGroups, resultLayer } from "../render/scenePrims";
 import { supportStates } from "../render/results";
 import { itemPrims } from "../render/symbols";
-import { dir, type Prim } from "../render/prims";
-import { handlePlace } from "../render/handles";
+import type { Prim } from "../render/prims";
+import { handleAlong, handleWords, placeHandle } from "../render/handles";
 import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
 import { angleOnEdge, bodyAt, OUTLINE_REACH_PX, outlineSpot, placedAtOutline } from "../placement";
 import { anchorOf, type Scene, type SceneBody, type SceneItem } from "../scene";
@@ -20,7 +20,6 @@ import { drawingFrame } from "../geometry/fit";
 import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
-import { handleSign } from "./pointer";
 import { shiftBox } from "../render/labels";
 
 const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
@@ -98,15 +97,16 @@ export const SelectionHandles = memo(function SelectionHandles() {
   const tool = useEditor((s) => s.tool.kind);
   const view = useEditor((s) => s.view);
   const viewport = useEditor((s) => s.viewport);
-  // the handle's place measures the element's words: once per change of the element or the view, not per render
+  const directed = el && el.kind !== "body" && DIRECTED.has(el.kind) && "angle" in el ? (el as SceneItem & { angle: number }) : null;
+  // the element's words are measured once per change of the element, the scale or the units (not
+  // per pan frame); the handle's place among them follows the view
+  const words = useMemo(() => (directed ? handleWords(directed, scale, units) : null), [directed, scale, units]);
   const place = useMemo(() => {
-    if (!el || el.kind === "body" || !DIRECTED.has(el.kind) || !("angle" in el)) return null;
-    const item = el as SceneItem & { angle: number };
-    const d = dir(item.kind === "force" && "magnitude" in item && item.magnitude < 0 ? item.angle + 180 : item.angle);
-    const sign = handleSign(item);
+    if (!directed || !words) return null;
+    const along = handleAlong(directed);
     const frame = drawingFrame(view, viewport);
-    return { d, sign, ...handlePlace(item, [d[0] * sign, d[1] * sign], view.scale, units, frame && shiftBox(frame, px(anchorOf(item), view.scale))) };
-  }, [el, view, viewport, units]);
+    return { along, ...placeHandle(words, along, frame && shiftBox(frame, px(anchorOf(directed), view.scale))) };
+  }, [directed, words, view, viewport]);
   if (!el || tool !== "select") return null;
   if (el.kind === "body") {
     return (
@@ -136,9 +136,9 @@ export const SelectionHandles = memo(function SelectionHandles() {
   const a = px(anchorOf(item), scale);
   // no handle to turn by while the angle (or the anchor) is an expression in error: nothing to draw it from
   if (![item.angle, a[0], a[1]].every(Number.isFinite)) return null;
-  const { d, sign } = place;
+  const { along } = place;
   const t = place.distance;
-  const h: [number, number] = [a[0] + d[0] * t * sign, a[1] + d[1] * t * sign];
+  const h: [number, number] = [a[0] + along[0] * t, a[1] + along[1] * t];
   return (
     <Group>
       <Line points={[a[0], a[1], h[0], h[1]]} stroke={ACCENT} strokeWidth={1} dash={[3, 3]} listening={false} />

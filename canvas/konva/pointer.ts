@@ -2,6 +2,7 @@
 // step), turn, reshape, rubber-band select, draw bodies, pan and zoom. Drags listen on the
 // window so they continue when the pointer leaves the canvas.
 import type { Vec2 } from "@/solver/types";
+import { handleSign } from "../render/handles";
 import { valueLookup } from "../analysis/store";
 import { moveElement, moveCentreOfGravity } from "../commands/move";
 import { rotateElement, reshapeBody } from "../commands/shape";
@@ -49,11 +50,6 @@ type Mode =
 
 const DRAG_THRESHOLD_PX = 3;
 const ANGLE_STEP = 5;
-
-/** Which way a rotate handle points from the anchor: the arrow's tail side for forces and inlets. */
-export function handleSign(item: SceneItem): 1 | -1 {
-  return item.kind === "outlet" || item.kind === "tie" ? 1 : -1;
-}
 
 export function createPointerController(deps: PointerDeps) {
   const { stores, interaction } = deps;

@@ -4,7 +4,7 @@ import type { Vec2 } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
 import type { SceneItem } from "../scene";
 import { ACCENT } from "./palette";
-import { textExtent, type Prim } from "./prims";
+import { dir, textExtent, type Prim } from "./prims";
 import type { Box } from "./labels";
 import { itemPrims } from "./symbols";
 
@@ -22,10 +22,20 @@ const HANDLE_REACH_PX = 120;
  * Offsets, and `keepIn`, are from the element's anchor, in pixels.
  */
 export function handlePlace(item: SceneItem, along: Vec2, scale: number, units: UnitSystem, keepIn?: Box): { distance: number; readout: Vec2 } {
+  return placeHandle(handleWords(item, scale, units), along, keepIn);
+}
+
+/** The boxes of an item's own words about its anchor (px): what its turn handle keeps off. They
+ *  change with the item, the scale and the units, not with a pan: measure once, place per view. */
+export function handleWords(item: SceneItem, scale: number, units: UnitSystem): Box[] {
   // an item's primitives are drawn about its anchor
-  const boxes = itemPrims(item, { units, scale, color: ACCENT, showName: true })
+  return itemPrims(item, { units, scale, color: ACCENT, showName: true })
     .filter((p): p is Extract<Prim, { t: "text" }> => p.t === "text")
     .map(textExtent);
+}
+
+/** `handlePlace` from words already measured (`handleWords`). */
+export function placeHandle(boxes: readonly Box[], along: Vec2, keepIn?: Box): { distance: number; readout: Vec2 } {
   const clear = (x0: number, y0: number, x1: number, y1: number) => boxes.every((b) => !(b.x0 < x1 + 2 && x0 - 2 < b.x1 && b.y0 < y1 + 2 && y0 - 2 < b.y1));
   let distance = ROTATE_HANDLE_PX;
   for (let t = ROTATE_HANDLE_PX; t <= HANDLE_REACH_PX; t += 6) {
@@ -62,4 +72,17 @@ export function handleBoxes(anchor: Vec2, along: Vec2, place: { distance: number
     boxes.push({ x0: p[0] - 2.5, y0: p[1] - 2.5, x1: p[0] + 2.5, y1: p[1] + 2.5 });
   }
   return boxes;
+}
+
+/** Which way a rotate handle points from the anchor: the arrow's tail side for forces and inlets. */
+export function handleSign(item: SceneItem): 1 | -1 {
+  return item.kind === "outlet" || item.kind === "tie" ? 1 : -1;
+}
+
+/** The way an item's turn handle stands out from its anchor, a unit vector in screen pixels' axes
+ *  (y down as drawn): along its direction (a negative force's reversed) times `handleSign`. */
+export function handleAlong(item: SceneItem & { angle: number }): Vec2 {
+  const d = dir(item.kind === "force" && "magnitude" in item && item.magnitude < 0 ? item.angle + 180 : item.angle);
+  const sign = handleSign(item);
+  return [d[0] * sign, d[1] * sign];
 }
