@@ -300,12 +300,24 @@ const COMPONENT_LABEL: Record<Component, string> = { fx: "Fx", fy: "Fy", resulta
 /** Below this (N, N·m) a component is zero in every case, and no case governs it. */
 const NOTHING = 1e-9;
 
-/** Does `run` govern component `c` of a support, and by its maximum (▲) or its minimum (▼)? */
-function governs(env: SupportEnvelope, c: Component, run: string): "max" | "min" | null {
+/** The runs that govern component `c` of a support: its governing run, or every run of a tie. */
+const governingRuns = (env: SupportEnvelope, c: Component): string[] => env.ties?.[c] ?? (env.governing[c] ? [env.governing[c]!] : []);
+
+/** Does `run` govern component `c` of a support (alone or in a tie, where its value is `value`),
+ *  and by its maximum (▲) or its minimum (▼)? */
+function governs(env: SupportEnvelope, c: Component, run: string, value?: number): "max" | "min" | null {
   const e = env.components[c];
-  if (!e || env.governing[c] !== run || Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING) return null;
+  if (!e || !governingRuns(env, c).includes(run) || Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING) return null;
   if (c === "margin") return "min";
+  // a tie by magnitude may be +F in one run and −F in another: each by the end its own value is at
+  if (value !== undefined && run !== env.governing[c]) return Math.abs(value - e.max.value) <= Math.abs(value - e.min.value) ? "max" : "min";
   return Math.abs(e.max.value) >= Math.abs(e.min.value) ? "max" : "min";
+}
+
+/** The names of the runs that give a governing value: one name, or every run of a tie ("A and B (a tie)"). */
+export function tiedNames(study: StudyResult, ids: readonly string[]): string {
+  const names = ids.map((id) => study.runs.find((r) => r.id === id)?.name ?? id);
+  return names.length < 2 ? names.join("") : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]} (a tie)`;
 }
 
 /** Every support in every case: the table of the studies. The governing case of each component is
@@ -333,11 +345,12 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?
       if (excluded.has(`${run.id}/${r.body}`)) {
         words.push(`not in the envelope: ${nameIn(study, r.body)} ${status === "tips" ? "tips" : "is unrestrained"}`);
       } else if (env) {
-        if (env.design.case === run.id) words.push("design load");
+        // every run of a tie is marked and named: each governs as much
+        if ((env.ties?.resultant ?? [env.design.case]).includes(run.id)) words.push("design load");
         const gov: string[] = [];
         // the resultant's governing case is the design load, said above
         for (const c of ["fx", "fy", "m", "n", "t"] as const) {
-          const by = governs(env, c, run.id);
+          const by = governs(env, c, run.id, r[c]);
           if (!by) continue;
           const symbol = by === "max" ? "▲" : "▼";
           rowMarks[c] = { symbol, text: `governing case of ${COMPONENT_LABEL[c]}: the largest magnitude over the cases (its ${by === "max" ? "maximum" : "minimum"})` };
@@ -361,7 +374,7 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?
       marks.push(Object.keys(rowMarks).length ? rowMarks : undefined);
     }
   }
-  const notes = ["▲ / ▼: the governing case of that component (its largest magnitude over the cases), by its maximum (▲) or its minimum (▼). “design load”: the case of the support's largest resultant."];
+  const notes = ["▲ / ▼: the governing case of that component (its largest magnitude over the cases), by its maximum (▲) or its minimum (▼); cases that give it alike (a tie) are each marked. “design load”: the case of the support's largest resultant."];
   return {
     id: "cases",
     title: "Reactions per case (forces on the body)",
@@ -402,10 +415,11 @@ export function envelopeTable(study: StudyResult, system: UnitSystem, scale?: Sc
     for (const c of envelopeComponents(env)) {
       const e = env.components[c]!;
       const q: Quantity = c === "m" ? "moment" : "force";
-      const gov = env.governing[c];
+      // every case of a tie is named: "A and B (a tie)"
+      const gov = governingRuns(env, c);
       // a component that is zero in every case (a frictionless contact's t) has no governing case
       const zero = Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING;
-      rows.push([nameIn(study, id), COMPONENT_LABEL[c], unitOf(q, u), inUnit(e.max.value, q, u), name(e.max.case), inUnit(e.min.value, q, u), name(e.min.case), zero ? "none (zero in every case)" : gov ? name(gov) : ""]);
+      rows.push([nameIn(study, id), COMPONENT_LABEL[c], unitOf(q, u), inUnit(e.max.value, q, u), name(e.max.case), inUnit(e.min.value, q, u), name(e.min.case), zero ? "none (zero in every case)" : tiedNames(study, gov)]);
     }
   }
   return withRowUnitsInHeader({
@@ -423,7 +437,7 @@ export function envelopeTable(study: StudyResult, system: UnitSystem, scale?: Sc
     ],
     rows,
     notes: [
-      "Governing case: the one with the largest magnitude; for the margin of a contact or tie, the smallest (the case where it comes closest to lifting or going slack; below zero it has lifted or gone slack).",
+      "Governing case: the one with the largest magnitude; for the margin of a contact or tie, the smallest (the case where it comes closest to lifting or going slack; below zero it has lifted or gone slack). Cases that give it alike are all named (a tie).",
       "A case in which the body tips or is unrestrained is not in the envelope or the design loads (see the note above the tables).",
     ],
   });
@@ -448,7 +462,6 @@ export function designLoadTable(study: StudyResult, system: UnitSystem, scale?: 
   const u = scale ? unitsOf(system, scale) : tableUnits(system, designs.map((d) => d.resultant), designs.map((d) => d.m));
   const f = u.force;
   const m = u.moment;
-  const name = (id: string) => study.runs.find((r) => r.id === id)?.name ?? id;
   return {
     id: "design-loads",
     title: "Design loads (forces on the body)",
@@ -468,9 +481,12 @@ export function designLoadTable(study: StudyResult, system: UnitSystem, scale?: 
       inUnit(env.design.fx, "force", u),
       inUnit(env.design.fy, "force", u),
       inUnit(env.design.m, "moment", u),
-      name(env.design.case),
+      // every case of a tie for the largest resultant: "A and B (a tie)"
+      tiedNames(study, env.ties?.resultant ?? [env.design.case]),
     ]),
-    notes: ["The design load of a support is its largest resultant over all cases and combinations in which its body is held, with its direction (force on the body)."],
+    notes: [
+      "The design load of a support is its largest resultant over all cases and combinations in which its body is held, with its direction (force on the body). Cases that give it alike are all named (a tie); the direction and components are those of the first named.",
+    ],
   };
 }
 

@@ -14,12 +14,12 @@ import type { SketchStatus } from "@/lib/sketch-schemas";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
-import { reactionTable, stabilityTable } from "@/solver/report";
+import { asDrawnTwin, reactionTable, stabilityTable } from "@/solver/report";
 import { withoutColumn, withoutEmptyReactionColumns } from "@/canvas/studies/tables";
 import { ReportTable } from "@/components/studies/ReportTable";
 import { asDrawnOfDocument, studyOfDocument } from "@/lib/review/compare";
 import { elementLabels } from "@/lib/review/pin-words";
-import { belowRequired, CaseTables } from "@/components/studies/CaseTables";
+import { asDrawnName, belowRequired, CaseTables } from "@/components/studies/CaseTables";
 import { CsvSubject } from "@/components/studies/csv";
 import { versionConcerns, withOpenThreads } from "./concerns";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
@@ -32,16 +32,28 @@ type VersionData = {
   version: { id: string; number: number; message: string; authorName: string | null; createdAt: string; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; document: SketchFile };
 };
 
+/** The case of a document whose run is the document as drawn over again (`asDrawnTwin`), or null:
+ *  its factors of safety are said once, under "<case name>, as drawn", as the calc sheet says them. */
+export function asDrawnCase(document: SketchFile): { id: string; name: string } | null {
+  const cases = studyOfDocument(document);
+  const drawn = asDrawnOfDocument(document);
+  const id = cases && drawn ? asDrawnTwin(cases, drawn) : null;
+  const run = id ? cases!.runs.find((r) => r.id === id) : undefined;
+  return run ? { id: run.id, name: run.name } : null;
+}
+
 /** The version's reactions as drawn, in one unit a table (the rows the editor, the CSV and the calc
  *  sheet use), and its factors of safety as drawn (with cases, the cases' tables below carry each
- *  case's; the values on the drawing are a state of their own). */
+ *  case's; the values on the drawing are a state of their own, unless a case is that state over
+ *  again: then they are said once, with that case, "<case name>, as drawn"). */
 export function VersionReactions({ document, units }: { document: SketchFile; units: UnitSystem }) {
   const { result, parsed } = useSolved(document);
   const study = useMemo(() => asDrawnOfDocument(document), [document]);
+  const twin = useMemo(() => asDrawnCase(document), [document]);
   const hasCases = !!(document.cases?.length || document.combinations?.length);
   if (!result) return <Notice tone="error">This version does not solve{!parsed.ok ? `: ${parsed.errors[0]?.path} ${parsed.errors[0]?.message}` : "."}</Notice>;
   const names = Object.fromEntries(document.supports.map((s) => [s.id, s.label || s.id]));
-  const stability = study ? { ...withoutColumn(stabilityTable(study, units), "case"), ...(hasCases ? { title: "Factors of safety as drawn" } : {}) } : null;
+  const stability = study && !twin ? { ...withoutColumn(stabilityTable(study, units), "case"), ...(hasCases ? { title: "Factors of safety as drawn" } : {}) } : null;
   return (
     <>
       <ReportTable
@@ -54,6 +66,10 @@ export function VersionReactions({ document, units }: { document: SketchFile; un
         <section aria-label="Factors of safety" className="pt-2" data-testid="version-stability">
           <ReportTable table={stability} fileName="factors-of-safety" testId="stability" mark={belowRequired(stability)} />
         </section>
+      ) : twin ? (
+        <p className="pt-2 text-xs text-ink-soft" data-testid="version-stability-twin">
+          Factors of safety as drawn: the case {twin.name} is the sketch as drawn, so they are given once, under “{asDrawnName(twin.name)}” in the operating cases below.
+        </p>
       ) : null}
     </>
   );
@@ -63,6 +79,8 @@ export function VersionReactions({ document, units }: { document: SketchFile; un
 export function VersionCases({ document, units }: { document: SketchFile; units: UnitSystem }) {
   // solved once per document: the sign-off findings read the same study
   const study = useMemo(() => (document.cases?.length || document.combinations?.length ? studyOfDocument(document) : null), [document]);
+  // the case that is the sketch as drawn: its factors of safety are the drawing's, said once
+  const twin = useMemo(() => (study ? asDrawnCase(document) : null), [study, document]);
   if (!study) return null;
   const n = study.runs.length;
   return (
@@ -71,7 +89,7 @@ export function VersionCases({ document, units }: { document: SketchFile; units:
       <p className="text-xs text-ink-soft">
         {n} {n === 1 ? "run" : "runs"} (cases and combinations, each solved as its own load set), as saved in this version.
       </p>
-      <CaseTables result={study} units={units} />
+      <CaseTables result={study} units={units} asDrawn={twin?.id} />
     </section>
   );
 }

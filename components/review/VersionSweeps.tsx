@@ -1,9 +1,11 @@
 "use client";
 // The sweeps a version keeps for its calc sheet, plotted on its page as the editor plots them, with
 // where each margin reaches zero (the limit finder's value), in its own run and in every case and
-// combination: a checker reads them without the PDF.
+// combination, and where a plotted contact is off the ground (in the Sweep tab's and the calc
+// sheet's words): a checker reads them without the PDF.
 import { useMemo } from "react";
 import { runSweep, type SweepData } from "@/canvas/studies/run";
+import { sweepStateLines } from "@/canvas/studies/display";
 import { MAX_POINTS, sweepEverywhere, sweepMarkers, sweepQuantities, type SweepMarker } from "@/lib/calcsheet/sweeps";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
@@ -60,6 +62,11 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
                   ) : (
                     <li>No plotted margin reaches zero in this range.</li>
                   )}
+                  {sweepStateLines(p.data, names).map((l) => (
+                    <li key={l.words} data-testid="sweep-state">
+                      {l.words}
+                    </li>
+                  ))}
                   {p.everywhere.map((line) => (
                     <li key={line}>{line}.</li>
                   ))}

@@ -2,8 +2,8 @@
 // The results of all operating cases at once: reactions per case with the governing case marked,
 // the envelope, each support's design load, and the factors of safety. The editor's Cases tab and
 // a version's review page show the same tables.
-import { COMPONENTS, type Component, type StudyResult } from "@/solver/cases";
-import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, stateWord, unsolvedWords } from "@/solver/report";
+import type { StudyResult } from "@/solver/cases";
+import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, stateWord, tiedNames, unsolvedWords, withRunName } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
@@ -40,36 +40,18 @@ export function slipsWithFrictionToSpare(result: StudyResult): Set<string> {
 }
 const rowKey = (caseName: Cell, support: Cell) => `${caseName}\u0000${support}`;
 
-const TIE_WORDS: Record<Component, string> = { fx: "Fx", fy: "Fy", m: "M", n: "Normal n", t: "Tangential t", resultant: "the design load (largest resultant)", margin: "the least margin" };
+/** "<case name>, as drawn": the case whose run is the sketch as drawn over again, said once (as the calc sheet says it). */
+export const asDrawnName = (name: string) => `${name}, as drawn`;
 
 /**
- * Where several cases give a support's governing value alike: one sentence a support and set of
- * cases ("rear wheels — Fx and Fy: Lance aimed down and Lance raised alike"). The tables mark and
- * name the first of them; these say the others govern as much.
+ * `asDrawn`: the id of the case whose run is the sketch as drawn over again (`asDrawnTwin`): its
+ * factors of safety are the drawing's, so its group says so ("<case name>, as drawn") and the page
+ * gives no separate group for the drawing. The reaction tables keep the case's own name.
  */
-export function governingTieWords(result: StudyResult): string[] {
-  const nameOf = (id: string) => result.runs.find((r) => r.id === id)?.name ?? id;
-  const out: string[] = [];
-  for (const [id, env] of Object.entries(result.envelope)) {
-    const bySet = new Map<string, Component[]>();
-    for (const c of COMPONENTS) {
-      const tied = env.ties?.[c];
-      if (!tied) continue;
-      const key = tied.join("\u0000");
-      bySet.set(key, [...(bySet.get(key) ?? []), c]);
-    }
-    for (const [key, components] of bySet)
-      out.push(`${nameIn(result, id)} — ${andList(components.map((c) => TIE_WORDS[c]))}: ${andList(key.split("\u0000").map(nameOf))} alike`);
-  }
-  return out;
-}
-
-const andList = (xs: readonly string[]) => (xs.length < 2 ? xs.join("") : `${xs.slice(0, -1).join(", ")} and ${xs[xs.length - 1]}`);
-
-export function CaseTables({ result, units }: { result: StudyResult; units: UnitSystem }) {
-  const nameOf = (id: string) => result.runs.find((r) => r.id === id)?.name ?? id;
+export function CaseTables({ result, units, asDrawn }: { result: StudyResult; units: UnitSystem; asDrawn?: string | null }) {
   const unsolved = unsolvedWords(result);
-  const stability = stabilityTable(result, units);
+  const twin = asDrawn ? result.runs.find((r) => r.id === asDrawn) : undefined;
+  const stability = stabilityTable(twin ? withRunName(result, twin.id, asDrawnName(twin.name)) : result, units);
   const reactions = withoutAbsentMoment(caseReactionTable(result, units), result);
   const spare = slipsWithFrictionToSpare(result);
   const col = (key: string) => reactions.columns.findIndex((c) => c.key === key);
@@ -79,7 +61,6 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
         {SLIP_NOTE_MARK}
       </sup>
     ) : null;
-  const ties = unsolved ? [] : governingTieWords(result);
   return (
     <>
       {result.runs.filter((r) => !r.ok).map((r) => (
@@ -115,17 +96,8 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
       ) : (
         <>
           <div className="mt-3">
+            {/* cases that tie for a governing value are named in its row ("A and B (a tie)") and each marked in the table above */}
             <ReportTable table={withoutAbsentMoment(envelopeTable(result, units), result)} fileName="envelope" testId="envelope" groupBy={["support"]} />
-            {ties.length > 0 && (
-              <div className="mt-1 text-[11.5px] text-ink-soft" data-testid="governing-ties">
-                <p>Cases that tie for the governing value (the tables mark and name the first of them; the others govern as much):</p>
-                <ul className="ml-3 list-disc">
-                  {ties.map((w) => (
-                    <li key={w}>{w}.</li>
-                  ))}
-                </ul>
-              </div>
-            )}
           </div>
           <div className="mt-3">
             <ReportTable table={withoutAbsentMoment(designLoadTable(result, units), result)} fileName="design-loads" testId="design-loads" />
@@ -139,10 +111,7 @@ export function CaseTables({ result, units }: { result: StudyResult; units: Unit
         <p className="mt-2 text-[11.5px] text-ink-faint">
           Design load from —{" "}
           {Object.keys(result.envelope)
-            .map((id) => {
-              const from = (result.envelope[id].ties?.resultant ?? [result.envelope[id].design.case]).map(nameOf);
-              return `${nameIn(result, id)}: ${from.length > 1 ? `${andList(from)} alike (a tie)` : from[0]}`;
-            })
+            .map((id) => `${nameIn(result, id)}: ${tiedNames(result, result.envelope[id].ties?.resultant ?? [result.envelope[id].design.case])}`)
             .join(" · ")}
         </p>
       )}

@@ -8,14 +8,14 @@ import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/s
 import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit } from "@/solver/units";
-import { displayKind, displayUnit, parseTarget, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, MAX_STRETCHES, parseTarget, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
-import { firstReached, reachedAt, type LimitEverywhere, type PointStretch, type SweepData, type SweepSpec } from "@/canvas/studies/run";
+import { firstReached, reachedAt, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
 import { defaultLimitQuantity, SweepChart } from "./SweepChart";
@@ -29,8 +29,6 @@ const NOT_SOLVED_FROM = new Set(["title", "description", "sweeps"]);
 /** The sketch has changed in something a sweep is solved from (edits share what they leave alone, so identity tells). */
 const solvedFromChanged = (a: SketchFile, b: SketchFile) =>
   a !== b && [...new Set([...Object.keys(a), ...Object.keys(b)])].some((k) => !NOT_SOLVED_FROM.has(k) && a[k as keyof SketchFile] !== b[k as keyof SketchFile]);
-/** stretches of invalid sweep points listed one by one; more are counted */
-const MAX_STRETCHES = 4;
 /** the most points a sweep takes */
 const MAX_POINTS = 20000;
 
@@ -393,29 +391,8 @@ export function SweepPanel() {
   // the plot's parameter, which the form may have left since
   const dLabel = data ? (data.parameter === FLOW_FACTOR ? "flow factor" : data.parameter) : pLabel;
   const invalid = data ? invalidStretches(data) : [];
-  const plotUnit = data?.unit ? ` ${prettyUnit(data.unit)}` : "";
-  const hiddenStretches = Math.max(0, (data?.off?.length ?? 0) - MAX_STRETCHES * 2) + Math.max(0, (data?.notHeld?.length ?? 0) - MAX_STRETCHES);
-  const stretchWords = (o: PointStretch) =>
-    o.whole
-      ? `over the whole range (${dLabel} from ${formatNumber(o.from, 4)} to ${formatNumber(o.to, 4)}${plotUnit})`
-      : o.points === 1
-        ? `at ${dLabel} = ${formatNumber(o.from, 4)}${plotUnit}`
-        : `from ${dLabel} = ${formatNumber(o.from, 4)} to ${formatNumber(o.to, 4)}${plotUnit}`;
-  const frictionPlotted = (support: string) => !!data?.quantities.some((q) => q.support === support && (q.component === "frictionMargin" || q.component === "frictionRatio"));
-  const marginPlotted = (support: string) => !!data?.quantities.some((q) => q.support === support && q.component === "margin");
-  /** A plotted contact off the ground (a tie slack) over the range or a part of it, in words. */
-  const offWords = (o: NonNullable<SweepData["off"]>[number]) => {
-    const name = names[o.support] ?? o.support;
-    const state = o.kind === "tie" ? "slack" : "off the ground";
-    const why = [
-      o.whole && marginPlotted(o.support) ? "its margin stays below zero, so no crossing is marked" : "",
-      frictionPlotted(o.support) ? "it has no friction margin there, and none is plotted" : "",
-    ].filter(Boolean);
-    return `${name} is ${state} ${stretchWords(o)}${why.length ? `: ${why.join("; ")}` : ""}.`;
-  };
-  /** A friction margin left out where its body is not held, in words. */
-  const notHeldWords = (o: NonNullable<SweepData["notHeld"]>[number]) =>
-    `The friction margin at ${names[o.support] ?? o.support} is not plotted ${stretchWords(o)}, where ${names[o.body] ?? o.body} ${o.status === "tips" ? "tips" : "is unrestrained"}: a body that is not held has no friction margin (its reactions are only what would hold it).`;
+  // where a plotted support is off its seat or its body not held: in the words a version's page and the calc sheet use
+  const stateLines = data ? sweepStateLines(data, names) : [];
   // the limit finder searches the plotted parameter over the range as typed now: said when that is not the plotted range
   const rangeNote = (() => {
     if (!ran || !data) return null;
@@ -551,17 +528,11 @@ export function SweepPanel() {
                   <span className="font-semibold text-ink">✕</span> {describeQuantity(data.quantities[c.quantity], names)} crosses zero between {dLabel} = {formatNumber(c.between[0], 4)} and {formatNumber(c.between[1], 4)}{data.unit ? ` ${prettyUnit(data.unit)}` : ""}
                 </li>
               ))}
-              {(data.off ?? []).slice(0, MAX_STRETCHES * 2).map((o, i) => (
-                <li key={`off-${i}`} className="text-ink-soft" data-testid="off-stretch">
-                  {offWords(o)}
+              {stateLines.map((l, i) => (
+                <li key={`${l.kind}-${i}`} className="text-ink-soft" data-testid={l.kind === "off" ? "off-stretch" : l.kind === "notHeld" ? "not-held-stretch" : undefined}>
+                  {l.words}
                 </li>
               ))}
-              {(data.notHeld ?? []).slice(0, MAX_STRETCHES).map((o, i) => (
-                <li key={`loose-${i}`} className="text-ink-soft" data-testid="not-held-stretch">
-                  {notHeldWords(o)}
-                </li>
-              ))}
-              {hiddenStretches > 0 && <li className="text-ink-soft">… and {hiddenStretches} more stretches where a support is off its seat or its body is not held.</li>}
               {invalid.slice(0, MAX_STRETCHES).map((r, i) => (
                 <li key={`invalid-${i}`} className="text-caution" data-testid="invalid-points">
                   Not solved at {dLabel} = {formatNumber(r.from, 4)}{r.count > 1 ? ` to ${formatNumber(r.to, 4)}` : ""}{data.unit ? ` ${prettyUnit(data.unit)}` : ""} ({r.count} {r.count === 1 ? "point" : "points"}), where the sketch is invalid:{" "}

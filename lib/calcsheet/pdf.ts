@@ -267,13 +267,16 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     if (overridden !== undefined) para(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`, 8.5, INK);
     if (combination) para(`Each point is solved as the combination's factored load set (${combinationTerms(combination, parsed.file.cases)}), with the sweep's value of ${sw.parameter} in every one of its cases.`, 8.5, INK);
     try {
-      const { charts, markers } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions), family);
+      const { charts, markers, states } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions), family);
       for (const spec of charts) {
         ensureSpace(doc, 280);
         SVGtoPDF(doc, haloBehindLabels(lineChartSvg(spec)), left, doc.y, { width, height: width * (260 / 500), preserveAspectRatio: "xMidYMid meet", fontCallback: () => "Inter" });
         doc.y += width * (260 / 500) + 4;
       }
       for (const mk of markers) para(`Crossing: ${mk.words}.`, 8.5, INK);
+      // where a plotted contact is off the ground (a tie slack), or a friction margin is left out
+      // because its body is not held: the gaps in the lines, in the Sweep tab's words
+      for (const line of states) para(line, 8.5, INK);
       for (const line of sweepEverywhere(parsed.file, sw, sweepQuantities(sw, Object.keys(result.reactions)))) para(`${line}.`, 8.5, INK);
       // said of the plotted run only: another case may cross (the line above names each)
       const plotted = combination ? `combination ${combination.name}` : caseName ? `case ${caseName}` : "the sketch as drawn";

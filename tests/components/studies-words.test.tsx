@@ -74,7 +74,7 @@ describe("the case tables", () => {
     expect(screen.getByRole("table", { name: "Forces on the body from each support, as drawn." })).toBe(table);
   });
 
-  it("names every case of a tie for the governing value, not only the first", () => {
+  it("names every case of a tie for the governing value in the tables themselves, and once", () => {
     // two crews aim the lance alike: their cases give the same reactions
     const doc = cart();
     doc.cases = [
@@ -83,14 +83,26 @@ describe("the case tables", () => {
       { id: "off", name: "Pump off", flowFactor: 0 },
     ];
     render(<CaseTables result={studyOf(doc)} units="SI" />);
-    const ties = [...screen.getByTestId("governing-ties").querySelectorAll("li")].map((li) => li.textContent);
-    expect(ties).toEqual([
-      "rear wheels (braked) — Fx, Fy, Normal n, Tangential t and the design load (largest resultant): Aimed down, day crew and Aimed down, night crew alike.",
-      "front caster — the least margin: Aimed down, day crew and Aimed down, night crew alike.",
-    ]);
-    expect(screen.getByText(/^Design load from — /).textContent).toBe(
-      "Design load from — rear wheels (braked): Aimed down, day crew and Aimed down, night crew alike (a tie) · front caster: Pump off",
-    );
+    const both = "Aimed down, day crew and Aimed down, night crew (a tie)";
+    // the envelope's governing case: both crews wherever one of them governs
+    const envelope = screen.getByTestId("envelope");
+    const governing = (support: string, component: string) =>
+      [...envelope.querySelectorAll<HTMLElement>("tr[data-group]")].find((r) => r.dataset.group === support && r.querySelector("[data-col=component]")!.textContent === component)!.querySelector("[data-col=governs]")!.textContent;
+    for (const c of ["Fx", "Fy", "Normal n", "Tangential t"]) expect(governing("rear wheels (braked)", c), c).toBe(both);
+    expect(governing("front caster", "Margin")).toBe(both);
+    // parked, the caster carries the most: the pump-off case alone governs its Fy
+    expect(governing("front caster", "Fy")).toBe("Pump off");
+    // the cases table marks both crews' rows, not only the first
+    const rows = [...screen.getByTestId("case-reactions").querySelectorAll<HTMLElement>("tr[data-group]")];
+    const rear = (group: string) => rows.find((r) => r.dataset.group === group && r.querySelector("[data-col=support]")!.textContent === "rear wheels (braked)")!;
+    for (const g of ["Aimed down, day crew", "Aimed down, night crew"]) {
+      expect(rear(g).querySelector("[data-col=fy]")!.textContent, g).toMatch(/^▲/);
+      expect(rear(g).querySelector("[data-col=governs]")!.textContent, g).toMatch(/^design load; governs /);
+    }
+    expect(screen.getByTestId("design-loads").textContent).toContain(both);
+    // said in the tables, so no separate list says it again
+    expect(screen.queryByTestId("governing-ties")).toBeNull();
+    expect(screen.getByText(/^Design load from — /).textContent).toBe(`Design load from — rear wheels (braked): ${both} · front caster: Pump off`);
   });
 
   it("footnotes a contact that slips while its body passes the sliding check (statics, common practice)", () => {

@@ -272,3 +272,64 @@ describe("a case that slides stays in the envelope, and says so", () => {
     expect(slipWords(ballasted)).toEqual([]);
   });
 });
+
+// Cases that give a governing value alike are all named and all marked: a 100 kg block (weight at
+// x = 1.5 m) on a pin at x = 1 m and a contact at x = 2 m, pushed sideways at the pin's height by P
+// (no moment about the pin). Statics by hand (common practice): the pin takes Fx = −P and
+// Fy = W/2, the contact n = W·0.5 m / 1 m = W/2, whatever P is.
+describe("governing cases that tie, named and marked in every table", () => {
+  const Wb = 100 * G0;
+  const pushed = () =>
+    solveCases(
+      fileOf(
+        sketch({
+          parameters: { P: "100 N" },
+          bodies: [{ id: "b", outline: box(2, 1), mass: 100, cg: [1.5, 0.5] }],
+          supports: [
+            { id: "pin", label: "pin", body: "b", kind: "pin", at: [1, 0] },
+            { id: "foot", label: "foot", body: "b", kind: "contact", at: [2, 0], angle: 90 },
+          ],
+          loads: [{ id: "p", body: "b", kind: "force", at: [0, 0], fx: "P", fy: 0 }],
+          cases: [
+            { id: "east", name: "Push east", parameters: { P: "100 N" } },
+            { id: "west", name: "Push west", parameters: { P: "-100 N" } },
+            { id: "light", name: "Light push", parameters: { P: "50 N" } },
+          ],
+        }),
+      ),
+    );
+
+  it("the envelope's governing case names every case of a tie", () => {
+    const s = pushed();
+    const t = envelopeTable(s, "SI");
+    const row = (support: string, component: string) => t.rows.find((r) => r[0] === support && r[1] === component)!;
+    const gov = t.columns.findIndex((c) => c.key === "governs");
+    // |Fx| = 100 N pushed either way: east gives −100 N, west +100 N
+    expect(row("pin", "Fx")[3]).toBeCloseTo(100, 9);
+    expect(row("pin", "Fx")[5]).toBeCloseTo(-100, 9);
+    expect(row("pin", "Fx")[gov]).toBe("Push east and Push west (a tie)");
+    // Fy = W/2 = 490.3 N in all three: a tie of three
+    expectRel(row("pin", "Fy")[3] as number, Wb / 2, 1e-9);
+    expect(row("pin", "Fy")[gov]).toBe("Push east, Push west and Light push (a tie)");
+    expect(row("foot", "Margin")[gov]).toBe("Push east, Push west and Light push (a tie)");
+    // the pin's largest resultant, √(100² + (W/2)²) = 500.4 N, east and west alike
+    const d = designLoadTable(s, "SI").rows.find((r) => r[0] === "pin")!;
+    expectRel(d[1] as number, Math.hypot(100, Wb / 2), 1e-9);
+    expect(d[6]).toBe("Push east and Push west (a tie)");
+  });
+
+  it("the cases table marks each case of a tie, by the end its own value is at", () => {
+    const s = pushed();
+    const t = caseReactionTable(s, "SI");
+    const at = (caseName: string) => t.rows.findIndex((r) => r[0] === caseName && r[1] === "pin");
+    const gov = t.columns.findIndex((c) => c.key === "governs");
+    // east's Fx is the minimum (−100 N, ▼), west's the maximum (+100 N, ▲): both govern
+    expect(t.marks![at("Push east")]!.fx.symbol).toBe("▼");
+    expect(t.marks![at("Push west")]!.fx.symbol).toBe("▲");
+    expect(t.marks![at("Light push")]?.fx).toBeUndefined();
+    expect(t.rows[at("Push east")][gov]).toBe("design load; governs Fx ▼, Fy ▲");
+    expect(t.rows[at("Push west")][gov]).toBe("design load; governs Fx ▲, Fy ▲");
+    // the light push governs Fy alike (W/2 in every case), not Fx
+    expect(t.rows[at("Light push")][gov]).toBe("governs Fy ▲");
+  });
+});
