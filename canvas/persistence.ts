@@ -29,6 +29,8 @@ export interface SketchPersistence {
   readonly kind: "scratch" | "saved";
   /** true: every change is kept as it happens (debounced); false: the user saves */
   readonly autosave: boolean;
+  /** where the undo history is kept across a reload of the page (`canvas/keptHistory.ts`); none: not kept */
+  readonly historyKey?: string;
   /** a short phrase for the header, e.g. "Scratch sketch · kept in this browser"; `title`: the
    *  drawing's title shown above it (a saved sketch of the same name is not named twice) */
   describe(title?: string): string;
@@ -54,6 +56,7 @@ export function scratchPersistence(storage: StorageLike | null = typeof window !
   return {
     kind: "scratch",
     autosave: true,
+    historyKey: `scratch:${key}`,
     describe: () => "Scratch sketch · kept in this browser",
     async load() {
       const text = storage?.getItem(key);

@@ -7,6 +7,7 @@ import Link from "next/link";
 import { useCallback, useEffect, useRef, useState, type ReactNode } from "react";
 import { EditorProvider, useEditor, useStores } from "@/canvas/context";
 import { createEditorStore, type EditorStore } from "@/canvas/store";
+import { keepHistory, restoreHistory, type HistoryStorage } from "@/canvas/keptHistory";
 import { createInteractionStore } from "@/canvas/konva/interaction";
 import type { PointerController } from "@/canvas/konva/pointer";
 import { noticesFollowTool, toolHint, type ActionContext } from "@/canvas/actions";
@@ -327,12 +328,24 @@ function dropExampleFromAddress() {
   window.history.replaceState(window.history.state, "", url);
 }
 
+/** The tab's session storage, or none where the browser refuses it. */
+function sessionStore(): HistoryStorage | null {
+  try {
+    return typeof window !== "undefined" ? window.sessionStorage : null;
+  } catch {
+    return null;
+  }
+}
+
 /** `toolbarExtra`: what the page adds at the toolbar's end (the versions work: save, version, history). */
 
 export function Editor({ persistence, example, toolbarExtra }: { persistence: SketchPersistence; example?: string; toolbarExtra?: ReactNode }) {
   const [store] = useState(() => createEditorStore());
   const [phase, setPhase] = useState<{ kind: "loading" } | { kind: "ready" } | { kind: "failed"; message: string }>({ kind: "loading" });
   const saved = useAutosave(store, persistence, phase.kind === "ready");
+  const ready = phase.kind === "ready";
+  // the undo history, kept for a reload of this tab once the sketch is open
+  useEffect(() => (ready && persistence.historyKey && !store.getState().readOnly ? keepHistory(store, persistence.historyKey, sessionStore()) : undefined), [ready, persistence, store]);
 
   useEffect(() => {
     let live = true;
@@ -354,6 +367,8 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
         openExampleOver(store, ex, "the sketch you had here");
       } else if (ex) store.getState().reset(ex.sketch);
       store.getState().setReadOnly(Boolean(out.ok && out.sketch && out.readOnly));
+      // the undo history of this tab from before a reload, when it leads to the sketch opened
+      if (kept && !ex && !kept.readOnly && persistence.historyKey) restoreHistory(store, persistence.historyKey, sessionStore());
       if (!out.ok) store.getState().notify(out.message);
       else if (example && !ex) store.getState().notify(`No example called “${example}”: pick one from “Open an example”.`);
       // the link has done its work: a reload must open the sketch as it now is, not the example again

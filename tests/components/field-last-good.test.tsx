@@ -2,7 +2,7 @@
 // and marked; a blank the sketch cannot hold sends the sketch back to the field's last good value;
 // Escape goes back to it too; undo steps back through every entry. The results banner follows
 // what the sketch holds, and an unknown name's error suggests the field's own units.
-import { act, render, screen, waitFor, within } from "@testing-library/react";
+import { act, cleanup, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { createEditorStore } from "@/canvas/store";
@@ -199,6 +199,29 @@ describe("the editor around it", () => {
     await renderEditor(kept);
     await user.click(outlineRow(/Body b1/));
     expect(within(screen.getByTestId("element-form")).getByLabelText("Mass")).toHaveValue("60 kg");
+  }, 20_000);
+
+  it("a reload keeps the way back: 60 kg, then abc, then a reload — Undo still reaches 60 kg", async () => {
+    const user = userEvent.setup();
+    const { mem, unmount } = await renderEditor(beamOf("60 kg"));
+    await user.click(outlineRow(/Body b1/));
+    const mass = within(screen.getByTestId("element-form")).getByLabelText("Mass");
+    await user.clear(mass);
+    await user.type(mass, "abc");
+    await user.tab();
+    await waitFor(() => expect(storedSketch(mem)!.bodies[0].mass).toBe("abc"), { timeout: 3000 });
+    // the page goes (its history is written as it leaves) and opens again on what was stored
+    const kept = storedSketch(mem)!;
+    unmount();
+    await renderEditor(kept);
+    await user.click(outlineRow(/Body b1/));
+    expect(within(screen.getByTestId("element-form")).getByLabelText("Mass")).toHaveValue("abc");
+    await user.click(screen.getByTestId("undo"));
+    expect(within(screen.getByTestId("element-form")).getByLabelText("Mass")).toHaveValue("60 kg");
+    // a sketch other than the one the history leads to gets none of it
+    cleanup();
+    await renderEditor(beamOf("75 kg"));
+    expect(screen.getByTestId("undo")).toBeDisabled();
   }, 20_000);
 });
 

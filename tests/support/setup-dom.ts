@@ -4,8 +4,9 @@ import { cleanup } from "@testing-library/react";
 import { afterEach } from "vitest";
 
 // Each test starts from a fresh browser: a unit choice or a scratch sketch kept in local storage
-// by one test must not leak into the next.
+// (or an undo history kept in the tab's session storage) by one test must not leak into the next.
 afterEach(() => {
   cleanup();
   window.localStorage.clear();
+  window.sessionStorage.clear();
 });

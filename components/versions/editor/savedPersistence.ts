@@ -64,6 +64,7 @@ export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { versi
   return {
     kind: "saved",
     autosave: false,
+    historyKey: `sketch:${sketchId}`,
     describe(title) {
       const info = flow.getState().info;
       if (!info) return "Saved sketch";
