@@ -174,15 +174,21 @@ describe("the sketch's own fields", () => {
 
 const outlineRow = (name: RegExp) => within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name });
 
+/** The editor on a 60 kg beam, its mass field retyped "abc" and left. */
+async function abcOver60() {
+  const user = userEvent.setup();
+  const { mem, unmount } = await renderEditor(beamOf("60 kg"));
+  await user.click(outlineRow(/Body b1/));
+  const mass = within(screen.getByTestId("element-form")).getByLabelText("Mass");
+  await user.clear(mass);
+  await user.type(mass, "abc");
+  await user.tab();
+  return { user, mem, unmount, mass };
+}
+
 describe("the editor around it", () => {
   it("the banner quotes abc's error while the sketch holds it, and not once the blank has put 60 kg back; a reload shows 60 kg", async () => {
-    const user = userEvent.setup();
-    const { mem, unmount } = await renderEditor(beamOf("60 kg"));
-    await user.click(outlineRow(/Body b1/));
-    const mass = within(screen.getByTestId("element-form")).getByLabelText("Mass");
-    await user.clear(mass);
-    await user.type(mass, "abc");
-    await user.tab();
+    const { user, mem, unmount, mass } = await abcOver60();
     expect(screen.getByTestId("stale").textContent).toContain('Body Beam — mass: unknown name "abc": define it as a parameter or use a unit such as kg, tonne, lb');
     await waitFor(() => expect(storedSketch(mem)!.bodies[0].mass).toBe("abc"), { timeout: 3000 });
 
@@ -202,13 +208,7 @@ describe("the editor around it", () => {
   }, 20_000);
 
   it("a reload keeps the way back: 60 kg, then abc, then a reload — Undo still reaches 60 kg", async () => {
-    const user = userEvent.setup();
-    const { mem, unmount } = await renderEditor(beamOf("60 kg"));
-    await user.click(outlineRow(/Body b1/));
-    const mass = within(screen.getByTestId("element-form")).getByLabelText("Mass");
-    await user.clear(mass);
-    await user.type(mass, "abc");
-    await user.tab();
+    const { user, mem, unmount } = await abcOver60();
     await waitFor(() => expect(storedSketch(mem)!.bodies[0].mass).toBe("abc"), { timeout: 3000 });
     // the page goes (its history is written as it leaves) and opens again on what was stored
     const kept = storedSketch(mem)!;
