@@ -109,6 +109,7 @@ export function ReportTable({
       <tr key={ri} className="border-b border-rule-soft" data-group={group || undefined}>
         {shown.map(({ c: col, i }, k) => {
           const cell = row[i];
+          // a cell with a mark after it ("FAIL (below 1.5)") is kept on one line: the two read as one
           const extra = mark?.(row, col.key);
           const cellMark = table.marks?.[ri]?.[col.key];
           const text = col.align === "left" && typeof cell === "string" && cell !== "";
@@ -118,7 +119,7 @@ export function ReportTable({
               data-col={col.key}
               data-mark={cellMark ? cellMark.symbol : undefined}
               title={cellMark?.text ?? (text ? cell : undefined)}
-              className={`px-1.5 py-[3px] align-top ${text ? `${TEXT_CELL} ${wrapOf(cell)}` : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${k === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
+              className={`px-1.5 py-[3px] align-top ${text && !extra ? `${TEXT_CELL} ${wrapOf(cell)}` : "whitespace-nowrap"} ${col.align === "left" ? "text-left" : "text-right"} ${k === 0 ? "text-ink" : "text-ink-soft"} ${cellMark ? "font-semibold text-ink" : ""}`}
             >
               {cellMark && (
                 <span role="img" aria-label={cellMark.text} className="mr-0.5">

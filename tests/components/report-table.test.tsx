@@ -7,7 +7,8 @@ import { describe, expect, it } from "vitest";
 import { ReportTable } from "@/components/studies/ReportTable";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { parseSketch, solveCases } from "@/solver/index";
-import { caseReactionTable, envelopeTable } from "@/solver/report";
+import { caseReactionTable, envelopeTable, stabilityTable } from "@/solver/report";
+import { belowRequired } from "@/components/studies/CaseTables";
 
 const load = (n: string) => JSON.parse(readFileSync(`tests/fixtures/sketches/${n}.json`, "utf8"));
 const LONG_CASE = "Run-out with the discharge valve fully open, the strainer clean and the sump at its highest level";
@@ -30,6 +31,21 @@ function trailer() {
 }
 
 describe("ReportTable", () => {
+  it("keeps a verdict and its mark on one line: FAIL (below 1.5)", () => {
+    // the trailer as drawn: 0.55 × Σn over |Σt| on wet asphalt falls short of 1.5 (common practice)
+    const s = study(trailer());
+    const table = stabilityTable(s, "SI");
+    render(<ReportTable table={table} fileName="factors-of-safety" testId="stability" mark={belowRequired(table)} />);
+    const failed = within(screen.getByTestId("stability"))
+      .getAllByRole("cell")
+      .filter((td) => td.getAttribute("data-col") === "verdict" && td.textContent?.startsWith("FAIL"));
+    expect(failed.length).toBeGreaterThan(0);
+    for (const td of failed) {
+      expect(td.textContent).toBe("FAIL(below 1.5)");
+      expect(td.className).toContain("whitespace-nowrap");
+    }
+  });
+
   it("wraps long names in their cells with the full name as the title; numbers stay on one line", () => {
     const s = study(trailer());
     render(<ReportTable table={withoutAbsentMoment(envelopeTable(s, "SI"), s)} fileName="envelope" testId="envelope" />);
