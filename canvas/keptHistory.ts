@@ -68,7 +68,7 @@ export function keepHistory(store: EditorStore, key: string, storage: HistorySto
   const write = () => {
     timer = null;
     const s = store.getState();
-    // mid-drag the sketch on screen is not yet a step: its end writes
+    // a write due from before a drag waits for its end, which writes again
     if (s.gesture) return;
     try {
       const text = serialise(s.sketch, s.past, s.future);
@@ -79,7 +79,9 @@ export function keepHistory(store: EditorStore, key: string, storage: HistorySto
     }
   };
   const unsubscribe = store.subscribe((s, p) => {
-    if (s.past === p.past && s.future === p.future && s.sketch === p.sketch) return;
+    // a drag's frames are not steps: its end (or cancel) writes, as autosave does
+    if (s.gesture) return;
+    if (s.past === p.past && s.future === p.future && s.sketch === p.sketch && !p.gesture) return;
     if (timer) clearTimeout(timer);
     timer = setTimeout(write, delayMs);
   });

@@ -40,6 +40,16 @@ const REQUIRED: Record<Group, ReadonlySet<string>> = {
   massSources: new Set(["id", "body", "massFlow"]),
 };
 
+/** What holds the last key of `path` inside the element `l` of the draft, or null where the path breaks off. */
+function parentOf(d: SketchFile, l: { group: Group; index: number }, path: Array<string | number>): Record<string | number, unknown> | null {
+  let target = (d[l.group] as unknown as AnyElement[])[l.index] as unknown as Record<string | number, unknown>;
+  for (const k of path.slice(0, -1)) {
+    if (target[k] === undefined || target[k] === null) return null;
+    target = target[k] as Record<string | number, unknown>;
+  }
+  return target;
+}
+
 export const setField = defineCommand<{ id: string; field: FieldPath; value: FieldValue }>({
   name: "setField",
   label: ({ id, field }) => `Change ${pathText(field)} of ${id}`,
@@ -50,11 +60,8 @@ export const setField = defineCommand<{ id: string; field: FieldPath; value: Fie
     const path = pathOf(field);
     if (path[0] === "id" || path[0] === "kind") return sketch;
     return edit(sketch, (d) => {
-      let target = (d[l.group] as AnyElement[])[l.index] as unknown as Record<string | number, unknown>;
-      for (const k of path.slice(0, -1)) {
-        if (target[k] === undefined || target[k] === null) return;
-        target = target[k] as Record<string | number, unknown>;
-      }
+      const target = parentOf(d, l, path);
+      if (!target) return;
       const last = path[path.length - 1];
       if (value === undefined || value === null || value === "") {
         if (path.length === 1 && REQUIRED[l.group].has(String(last))) return;
@@ -207,11 +214,8 @@ export function elementField(id: string, field: FieldPath): FieldAccess {
       const l = findElement(sketch, id);
       if (!l) return sketch;
       return edit(sketch, (d) => {
-        let t = (d[l.group] as AnyElement[])[l.index] as unknown as Record<string | number, unknown>;
-        for (const k of path.slice(0, -1)) {
-          if (t[k] === undefined || t[k] === null) return;
-          t = t[k] as Record<string | number, unknown>;
-        }
+        const t = parentOf(d, l, path);
+        if (!t) return;
         const last = path[path.length - 1];
         if (value === undefined) delete t[last];
         else t[last] = value;

@@ -90,7 +90,8 @@ export function stabilityLines(sketch: Sketch, body: string, reactions: Record<s
   let sliding: StabilityLines["sliding"];
   if ("notApplicable" in sl) sliding = sl;
   else {
-    const lines = frictionLines(sketch, body, reactions, !!sl.wholeBody);
+    // a body taken as a whole counts all its contacts; else the bearing ones, as found above
+    const lines = sl.wholeBody ? frictionLines(sketch, body, reactions, true) : bearing;
     sliding = { lines, available: sl.available, driving: sl.driving, factor: sl.factor, required: sl.required, pass: sl.pass, wholeBody: !!sl.wholeBody };
   }
   return { overturning, sliding, overMu };

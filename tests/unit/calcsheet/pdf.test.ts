@@ -10,29 +10,8 @@ import { parseSketch, solveCases } from "@/solver";
 import { caseReactionTable, designLoadTable, envelopeTable, stabilityTable, type Table } from "@/solver/report";
 import { loadFixture } from "../solver/helpers";
 import { longLabelFileWithStudies } from "./long-labels";
-import { pdfText } from "../../support/pdf-text";
+import { pdfItems, pdfText } from "../../support/pdf-text";
 import { pushedBlock } from "../../support/pushed-block";
-
-interface PageItem {
-  str: string;
-  /** left edge and width (pt) */
-  x: number;
-  width: number;
-}
-
-async function pdfItems(buf: Buffer): Promise<{ pages: PageItem[][]; pageWidth: number }> {
-  const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
-  const doc = await pdfjs.getDocument({ data: new Uint8Array(buf), useSystemFonts: false, isEvalSupported: false }).promise;
-  const pages: PageItem[][] = [];
-  let pageWidth = 0;
-  for (let i = 1; i <= doc.numPages; i++) {
-    const page = await doc.getPage(i);
-    pageWidth = page.view[2];
-    const content = await page.getTextContent();
-    pages.push(content.items.flatMap((it) => ("str" in it && it.str.trim() ? [{ str: it.str, x: it.transform[4], width: it.width }] : [])));
-  }
-  return { pages, pageWidth };
-}
 
 /** A word printed as two pieces ("Supp ort", "beari ng"): what a squeezed column does. */
 function brokenWords(text: string, tables: Table[]): string[] {

@@ -11,35 +11,13 @@ import { asDrawnStudy, parseSketch, solve, solveCases } from "@/solver";
 import { G0 } from "@/solver/constants";
 import { asDrawnTwin, handCheckScale, handCheckTable, inputsTable, largestScale, stabilityTable, studyScale, unitFamily } from "@/solver/report";
 import { loadFixture } from "../solver/helpers";
-import { pdfText } from "../../support/pdf-text";
+import { pdfItems, pdfText } from "../../support/pdf-text";
 
 /** A demo sketch's version (invented demo scenarios): "a5" is the washing cart, "a2" the monitor trailer. */
 const demo = (id: string, version: number) => demoVersions(DEMO_SKETCHES.find((s) => s.id.endsWith(id))!)[version - 1].doc;
 
 const sheet = (id: string, version: number, units: "SI" | "US") =>
   buildCalcSheet({ workspace: "W", sketchTitle: DEMO_SKETCHES.find((s) => s.id.endsWith(id))!.title, version, savedAt: new Date(0), generatedAt: new Date(0), signoff: [], file: demo(id, version), units });
-
-interface Item {
-  str: string;
-  x: number;
-  y: number;
-  width: number;
-}
-
-/** Every piece of text with its place (pt, from the page's bottom left), per page. */
-async function pdfItems(buf: Buffer): Promise<{ pages: Item[][]; pageWidth: number }> {
-  const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
-  const doc = await pdfjs.getDocument({ data: new Uint8Array(buf), useSystemFonts: false, isEvalSupported: false }).promise;
-  const pages: Item[][] = [];
-  let pageWidth = 0;
-  for (let i = 1; i <= doc.numPages; i++) {
-    const page = await doc.getPage(i);
-    pageWidth = page.view[2];
-    const content = await page.getTextContent();
-    pages.push(content.items.flatMap((it) => ("str" in it && it.str.trim() ? [{ str: it.str, x: it.transform[4], y: it.transform[5], width: it.width }] : [])));
-  }
-  return { pages, pageWidth };
-}
 
 const count = (text: string, what: string) => text.split(what).length - 1;
 
