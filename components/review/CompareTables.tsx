@@ -1,14 +1,38 @@
 // The tables of a comparison: reactions before and after with the change, and every changed input.
 import { Fragment } from "react";
 import { blankWords, fieldLabel } from "@/components/editor/fieldDefs";
-import { formatForceCell } from "@/components/sketches/format";
 import { SideScroll } from "@/components/studies/ReportTable";
 import type { Comparison, FieldChange, ReactionChange, ReactionSnapshot } from "@/lib/review/compare";
+import { unitFamily } from "@/solver/report";
 import { formatNumber, formatQuantity, type UnitSystem } from "@/solver/units";
 
-function signed(newtons: number, units: UnitSystem): string {
-  if (Math.abs(newtons) < 0.5) return units === "SI" ? "±0 N" : "±0 lbf";
-  return `${newtons > 0 ? "+" : "−"}${formatForceCell(Math.abs(newtons), units)}`;
+/** One unit family for the whole table (kN with kN·m, or N with N·m only when all of it stays below
+ *  a kilonewton), as every other table: a 0.66 kN change is not written 664.7 N beside 13.02 kN. */
+type Family = { system: UnitSystem; force: string; moment: string };
+
+function familyOf(rows: readonly ReactionChange[], system: UnitSystem): Family {
+  const forces: number[] = [];
+  const moments: number[] = [];
+  for (const r of rows) {
+    for (const s of [r.before, r.after]) {
+      if (!s) continue;
+      forces.push(Math.abs(s.fx), Math.abs(s.fy), s.resultant);
+      moments.push(Math.abs(s.m));
+    }
+    if (r.change) forces.push(Math.abs(r.change.abs));
+  }
+  const finite = (xs: number[]) => Math.max(0, ...xs.filter(Number.isFinite));
+  return { system, ...unitFamily(system, { force: finite(forces), moment: finite(moments) }) };
+}
+
+/** A figure of the table, in its column's unit without the unit (the header names it), zeros kept. */
+function cell(valueSI: number, q: "force" | "moment", u: Family): string {
+  return formatQuantity(valueSI, q, u.system, { unit: q === "force" ? u.force : u.moment, keepZeros: true }).replace(/ \S+$/, "");
+}
+
+function signed(newtons: number, u: Family): string {
+  if (Math.abs(newtons) < 0.5) return "±0";
+  return `${newtons > 0 ? "+" : "−"}${cell(Math.abs(newtons), "force", u)}`;
 }
 
 const COMPONENTS: Array<{ key: keyof Pick<ReactionSnapshot, "fx" | "fy" | "m">; label: string }> = [
@@ -17,17 +41,18 @@ const COMPONENTS: Array<{ key: keyof Pick<ReactionSnapshot, "fx" | "fy" | "m">; 
   { key: "m", label: "M" },
 ];
 
-/** "Fx 1.2 kN → 1.4 kN · Fy … · M …": the components that are not zero on either side. */
-function componentsText(r: ReactionChange, units: UnitSystem): string {
+/** "Fx 1.200 → 1.400 kN · Fy … · M … kN·m": the components that are not zero on either side, in the table's units. */
+function componentsText(r: ReactionChange, u: Family): string {
   // figures keep their zeros, as in the tables (6.240 kN, not 6.24 kN)
-  const show = (s: ReactionSnapshot | null, key: "fx" | "fy" | "m") => (s ? formatQuantity(s[key], key === "m" ? "moment" : "force", units, { keepZeros: true }) : "—");
+  const show = (s: ReactionSnapshot | null, key: "fx" | "fy" | "m") => (s ? cell(s[key], key === "m" ? "moment" : "force", u) : "—");
   return COMPONENTS.filter(({ key }) => Math.abs(r.before?.[key] ?? 0) > 1e-9 || Math.abs(r.after?.[key] ?? 0) > 1e-9 || key !== "m")
-    .map(({ key, label }) => `${label} ${show(r.before, key)} → ${show(r.after, key)}`)
+    .map(({ key, label }) => `${label} ${show(r.before, key)} → ${show(r.after, key)} ${key === "m" ? u.moment : u.force}`)
     .join(" · ");
 }
 
 export function ReactionsTable({ comparison, units = "SI" }: { comparison: Comparison; units?: UnitSystem }) {
   if (!comparison.reactions.length) return <p className="text-sm text-ink-soft">Neither version has a support.</p>;
+  const u = familyOf(comparison.reactions, units);
   return (
     <SideScroll>
       <table className="w-full text-sm" data-testid="reaction-changes">
@@ -35,9 +60,9 @@ export function ReactionsTable({ comparison, units = "SI" }: { comparison: Compa
         <thead>
           <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
             <th scope="col" className="py-1.5 pr-3 font-semibold">Support</th>
-            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Resultant before</th>
-            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">After</th>
-            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Change</th>
+            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Resultant before <span className="normal-case">({u.force})</span></th>
+            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">After <span className="normal-case">({u.force})</span></th>
+            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Change <span className="normal-case">({u.force})</span></th>
             <th scope="col" className="py-1.5 pr-3 text-right font-semibold">%</th>
             <th scope="col" className="py-1.5 font-semibold">State</th>
           </tr>
@@ -47,15 +72,15 @@ export function ReactionsTable({ comparison, units = "SI" }: { comparison: Compa
             <Fragment key={r.id}>
               <tr className="num" data-testid={`reaction-${r.id}`}>
                 <td className="pt-1.5 pr-3 font-medium">{r.label}</td>
-                <td className="pt-1.5 pr-3 text-right">{r.before ? formatForceCell(r.before.resultant, units) : "— (new)"}</td>
-                <td className="pt-1.5 pr-3 text-right">{r.after ? formatForceCell(r.after.resultant, units) : "— (removed)"}</td>
-                <td className="pt-1.5 pr-3 text-right font-medium">{r.change ? signed(r.change.abs, units) : "—"}</td>
+                <td className="pt-1.5 pr-3 text-right">{r.before ? cell(r.before.resultant, "force", u) : "— (new)"}</td>
+                <td className="pt-1.5 pr-3 text-right">{r.after ? cell(r.after.resultant, "force", u) : "— (removed)"}</td>
+                <td className="pt-1.5 pr-3 text-right font-medium">{r.change ? signed(r.change.abs, u) : "—"}</td>
                 <td className="pt-1.5 pr-3 text-right">{r.change?.pct === null || !r.change ? "—" : `${r.change.pct > 0 ? "+" : r.change.pct < 0 ? "−" : ""}${formatNumber(Math.abs(r.change.pct), 3)} %`}</td>
                 <td className="pt-1.5">{r.stateChange ? <strong className="text-caution">{r.stateChange}</strong> : (r.after?.word ?? r.before?.word ?? "—")}</td>
               </tr>
               <tr className="num border-b border-rule-soft last:border-0" data-testid={`reaction-${r.id}-components`}>
                 <td colSpan={6} className="pb-1.5 pl-3 pt-0.5 text-xs text-ink-soft">
-                  {componentsText(r, units)}
+                  {componentsText(r, u)}
                 </td>
               </tr>
             </Fragment>

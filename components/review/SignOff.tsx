@@ -8,7 +8,8 @@ import { Button, Notice } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
 import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, ApiError } from "@/lib/api-client";
-import { SIGN_OFF_RULES, STATE_WORDS, STEP_RECORD, type ReviewState, type SignOffStep } from "@/lib/review/rules";
+import { decideSignOff, SIGN_OFF_RULES, SIGN_OFF_STEPS, STATE_WORDS, STEP_RECORD, type ReviewState, type SignOffStep } from "@/lib/review/rules";
+import type { Role } from "@/lib/roles";
 
 export type TitleBlockEntry = { name: string; date: string };
 export type SignOffData = {
@@ -21,7 +22,25 @@ export type SignOffData = {
   newer?: number | null;
   /** for an owner who may not approve this checked version: why, and (when no other owner may) what to do */
   approval?: { reason: string; remedy: string | null; membersPath: string } | null;
+  /** the reader's part in this version */
+  you?: { role: Role; isAuthor: boolean; isChecker: boolean };
 };
+
+/**
+ * Why a reader whose role takes the version's next step is offered no button: they prepared it
+ * (no self-check) or checked it (no self-approval), in the rule's own words. Null when a step is
+ * open, when the role takes no part, or when another note already says why.
+ */
+export function whyNoStep(data: Pick<SignOffData, "state" | "allowed" | "you" | "newer" | "approval">): string | null {
+  if (data.allowed.length || !data.you || data.approval) return null;
+  for (const step of SIGN_OFF_STEPS) {
+    const rule = SIGN_OFF_RULES[step];
+    if (!rule.from.includes(data.state) || !rule.roles.includes(data.you.role)) continue;
+    const decision = decideSignOff({ step, ...data.you, state: data.state, newer: data.newer });
+    if (!decision.ok && decision.status === 403) return decision.reason;
+  }
+  return null;
+}
 
 /** Why the reader, an owner, may not approve the checked version; "the Members page" in the remedy links there. */
 function ApprovalNote({ approval }: { approval: NonNullable<SignOffData["approval"]> }) {
@@ -146,6 +165,7 @@ function StepDialog({ step, path, concerns, onClose, onDone }: { step: SignOffSt
 export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: SignOffData; path: string; concerns?: readonly string[]; onChanged: () => void }) {
   const [step, setStep] = useState<SignOffStep | null>(null);
   const qc = useQueryClient();
+  const why = whyNoStep(data);
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-2">
@@ -157,6 +177,11 @@ export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: S
       {data.newer && (data.state === "draft" || data.state === "returned" || data.state === "withdrawn") ? (
         <p className="text-sm text-ink-soft" data-testid="signoff-superseded">
           v{data.newer} is newer: only the latest version is submitted for checking.
+        </p>
+      ) : null}
+      {why ? (
+        <p className="text-sm text-ink-soft" data-testid="signoff-why-not" role="note">
+          {why}
         </p>
       ) : null}
       {data.allowed.length ? (

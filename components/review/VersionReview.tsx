@@ -153,6 +153,12 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
                 Compare with v{number - 1}
               </Link>
             ) : null}
+            {/* an earlier version: what has changed since, up to the latest */}
+            {number < latest ? (
+              <Link href={`${sketchHref}/compare?from=${number}&to=${latest}`} className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45">
+                Compare with v{latest} (latest)
+              </Link>
+            ) : null}
             <a
               href={`/api/sketches/${sketchId}/versions/${number}/calc-sheet?units=${units}`}
               download
@@ -173,7 +179,11 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             <span>
               saved by {v.authorName ?? "a deleted account"}, {formatDateTime(v.createdAt)}
             </span>
-            {number < latest ? <span className="text-caution">v{latest} is newer</span> : null}
+            {number < latest ? (
+              <Link href={`${sketchHref}/versions/${latest}`} className="text-caution underline decoration-caution/40 underline-offset-2 hover:decoration-caution">
+                v{latest} is newer
+              </Link>
+            ) : null}
           </p>
         ) : null}
       </div>

@@ -59,10 +59,19 @@ export function ForkDialog({
         <p className="text-sm text-ink-soft">
           {intro ?? "A fork is a new sketch that starts from this version. The original stays as it is; the fork shows where it came from."}
         </p>
-        {targets.data && targets.data.length === 0 ? (
+        {targets.isError ? (
+          // nothing typed is lost: the dialog stays, and the list can be asked for again
+          <Notice tone="error" title="Your workspaces could not be loaded">
+            {targets.error instanceof ApiError ? targets.error.message : "The server did not answer."}{" "}
+            <button type="button" className="font-medium underline underline-offset-2" onClick={() => void targets.refetch()}>
+              Try again
+            </button>
+          </Notice>
+        ) : targets.data && targets.data.length === 0 ? (
           <Notice tone="info">You are not an editor or owner of any workspace, so there is nowhere to fork into.</Notice>
         ) : (
           <Select id="fork-workspace" label="Into the workspace" value={chosen} onChange={(e) => setWorkspaceId(e.target.value)} disabled={!targets.data}>
+            {targets.data ? null : <option value="">Loading your workspaces…</option>}
             {(targets.data ?? []).map((w) => (
               <option key={w.id} value={w.id}>
                 {w.name}

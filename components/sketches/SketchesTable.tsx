@@ -45,6 +45,18 @@ type Filters = { q: string; tag: string; status: string; sort: SketchSort; dir: 
 
 const PAGE_SIZE = 20;
 
+/** The orders a phone offers in one menu, where the table has no room for its sortable headers. */
+export const SORT_CHOICES: ReadonlyArray<{ sort: SketchSort; dir: "asc" | "desc"; label: string }> = [
+  { sort: "updated", dir: "desc", label: "Updated, newest first" },
+  { sort: "updated", dir: "asc", label: "Updated, oldest first" },
+  { sort: "title", dir: "asc", label: "Title, A to Z" },
+  { sort: "title", dir: "desc", label: "Title, Z to A" },
+  { sort: "status", dir: "desc", label: "Status, worst first" },
+  { sort: "status", dir: "asc", label: "Status, holds first" },
+  { sort: "created", dir: "desc", label: "Created, newest first" },
+  { sort: "created", dir: "asc", label: "Created, oldest first" },
+];
+
 function useDebounced<T>(value: T, ms: number): T {
   const [v, setV] = useState(value);
   useEffect(() => {
@@ -142,7 +154,7 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
             className="block w-full rounded-md border border-rule bg-paper-card px-3 py-2 text-sm text-ink outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25"
           />
         </div>
-        <div className="w-40">
+        <div className="w-40 max-sm:w-full">
           <Select id="sketch-tag" label="Tag" value={filters.tag} onChange={(e) => set({ tag: e.target.value })}>
             <option value="">Any tag</option>
             {(data?.tags ?? []).map((t) => (
@@ -152,12 +164,30 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
             ))}
           </Select>
         </div>
-        <div className="w-40">
+        <div className="w-40 max-sm:w-full">
           <Select id="sketch-status" label="Status" value={filters.status} onChange={(e) => set({ status: e.target.value })}>
             <option value="">Any status</option>
             {STATUS_FILTERS.map((s) => (
               <option key={s} value={s}>
                 {s}
+              </option>
+            ))}
+          </Select>
+        </div>
+        {/* a phone hides the sortable column headers: the same orders from one menu */}
+        <div className="w-full sm:hidden">
+          <Select
+            id="sketch-sort"
+            label="Sort"
+            value={`${filters.sort}:${filters.dir}`}
+            onChange={(e) => {
+              const [sort, dir] = e.target.value.split(":") as [SketchSort, "asc" | "desc"];
+              set({ sort, dir });
+            }}
+          >
+            {SORT_CHOICES.map((c) => (
+              <option key={`${c.sort}:${c.dir}`} value={`${c.sort}:${c.dir}`}>
+                {c.label}
               </option>
             ))}
           </Select>
@@ -237,8 +267,12 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                           <StatusMark status={s.status} warnings={s.warnings} />
                           {s.lowestFactor ? <LowFactorChip low={s.lowestFactor} /> : null}
                         </span>
-                        <span className="num">largest {formatForceCell(s.largestReaction, units)}</span>
-                        <span>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
+                        {s.largestReaction !== null ? <span className="num">largest {formatForceCell(s.largestReaction, units)}</span> : null}
+                        <span>
+                          {timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}
+                          {s.updatedBy ? ` by ${s.updatedBy.name}` : ""}
+                        </span>
+                        {s.tags.length ? <span className="text-ink-faint">{s.tags.join(" · ")}</span> : null}
                       </span>
                     </td>
                     <td className="py-2.5 pr-3 max-sm:hidden">

@@ -114,10 +114,10 @@ describe("the reactions table of a comparison", () => {
     const b = solved(after);
     const { unmount } = render(<ReactionsTable comparison={c} units="SI" />);
     const wheel = screen.getByTestId("reaction-wheel-components").textContent!;
-    // 4 significant figures, trailing zeros kept as in the tables, in kN from 1 kN up and in N below
-    const f = (n: number) => (Math.abs(n) >= 1000 ? `${(n / 1000).toPrecision(4)} kN` : `${n.toPrecision(4)} N`).replace("-", "−");
-    expect(wheel).toContain(`Fx ${f(a.reactions.wheel.fx)} → ${f(b.reactions.wheel.fx)}`);
-    expect(wheel).toContain(`Fy ${f(a.reactions.wheel.fy)} → ${f(b.reactions.wheel.fy)}`);
+    // the trailer's reactions pass 1 kN, so the whole table is in kN: 4 significant figures, trailing zeros kept
+    const f = (n: number) => (n / 1000).toPrecision(Math.abs(n) >= 10000 ? 5 : 4).replace("-", "−");
+    expect(wheel).toContain(`Fx ${f(a.reactions.wheel.fx)} → ${f(b.reactions.wheel.fx)} kN`);
+    expect(wheel).toContain(`Fy ${f(a.reactions.wheel.fy)} → ${f(b.reactions.wheel.fy)} kN`);
     // contacts carry no moment: M is left out when it is zero on both sides
     expect(wheel).not.toContain("M ");
     unmount();
@@ -127,8 +127,46 @@ describe("the reactions table of a comparison", () => {
     // lbf = 4.4482216152605 N (NIST SP 811)
     const lbf = Math.hypot(b.reactions.wheel.fx, b.reactions.wheel.fy) / 4.4482216152605;
     expect(lbf).toBeGreaterThan(1000); // 4 figures: a whole number of lbf (kip only from 10 kip)
-    expect(row).toContain(`${Math.round(lbf).toLocaleString("en-US")} lbf`);
+    expect(row).toContain(Math.round(lbf).toLocaleString("en-US"));
+    expect(screen.getByRole("columnheader", { name: "After (lbf)" })).toBeTruthy();
     expect(row).not.toContain("kN");
+  });
+
+  it("writes every figure in one unit family, named in the headers: a change below 1 kN is not written in N beside kN", () => {
+    // the demo trailer at the 2000 gpm rating, lifting its front jack (v1 → v2 of the demo): the
+    // axle's resultant grows by about 0.66 kN while the foot carries 13 kN
+    const low = structuredClone(before) as unknown as typeof after;
+    low.parameters.Q = "1250 gpm";
+    const c = compareSketches(low, before);
+    const small = c.reactions.find((r) => r.change && Math.abs(r.change.abs) < 1000 && Math.abs(r.change.abs) >= 0.5);
+    expect(small).toBeTruthy();
+    render(<ReactionsTable comparison={c} units="SI" />);
+    const headers = screen.getAllByRole("columnheader").map((h) => h.textContent);
+    expect(headers).toEqual(["Support", "Resultant before (kN)", "After (kN)", "Change (kN)", "%", "State"]);
+    // the headers are set in capitals; a unit is not ("KN" is no unit)
+    for (const h of screen.getAllByRole("columnheader").slice(1, 4)) expect(h.querySelector(".normal-case")?.textContent).toBe("(kN)");
+    const table = screen.getByTestId("reaction-changes").textContent!;
+    // no figure carries its own unit, and none is written in N
+    expect(table).not.toMatch(/\d N\b/);
+    const cells = screen.getByTestId(`reaction-${small!.id}`).querySelectorAll("td");
+    const sign = small!.change!.abs > 0 ? "+" : "−";
+    // 4 significant figures in kN, e.g. "+0.6647"
+    expect(cells[3].textContent).toBe(`${sign}${(Math.abs(small!.change!.abs) / 1000).toPrecision(4)}`);
+  });
+
+  it("a bench rig below a kilonewton stays in N (N·m) throughout", () => {
+    const rig = { ...structuredClone(before), bodies: before.bodies.map((bd) => ({ ...bd, mass: 20 })) } as unknown as SketchFile;
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any
+    (rig as any).parameters.Q = "10 gpm";
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any
+    const rig2: any = structuredClone(rig);
+    rig2.bodies[0].mass = 25;
+    const c = compareSketches(rig, rig2);
+    const largest = Math.max(...c.reactions.flatMap((r) => [r.before?.resultant ?? 0, r.after?.resultant ?? 0]));
+    expect(largest).toBeLessThan(999.95);
+    render(<ReactionsTable comparison={c} units="SI" />);
+    expect(screen.getByRole("columnheader", { name: "Change (N)" })).toBeTruthy();
+    expect(screen.getByTestId("reaction-changes").textContent).not.toContain("kN");
   });
 });
 
