@@ -9,6 +9,10 @@ import { fileURLToPath } from "node:url";
 export const root = join(dirname(fileURLToPath(import.meta.url)), "..");
 export const log = (tag, ...a) => console.error(`[${tag}]`, ...a);
 
+// Next.js would try to send anonymous usage data at build and start; these machines work offline
+// and an engineer's tool should not call out. Setting the variable yourself overrides this.
+process.env.NEXT_TELEMETRY_DISABLED ??= "1";
+
 export function run(cmd, args, opts = {}) {
   const r = spawnSync(cmd, args, { stdio: "inherit", cwd: root, ...opts });
   if (r.status !== 0) {
