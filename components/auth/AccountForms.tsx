@@ -2,6 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
+import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { authClient } from "@/lib/auth-client";
 import { passwordSchema, personNameSchema } from "@/lib/schemas";
 import { authErrorMessage } from "./messages";
@@ -11,13 +12,14 @@ type Status = { tone: "success" | "error"; text: string } | null;
 export function ProfileForm({ name: initial, email }: { name: string; email: string }) {
   const router = useRouter();
   const [name, setName] = useState(initial);
-  const [error, setError] = useState<string | undefined>();
+  const [error, setError] = useState<{ name?: string }>({});
   const [status, setStatus] = useState<Status>(null);
   const [busy, setBusy] = useState(false);
+  useFocusFirstError(error, () => "profile-name");
   async function onSubmit(e: FormEvent) {
     e.preventDefault();
     const parsed = personNameSchema.safeParse(name);
-    setError(parsed.error?.issues[0]?.message);
+    setError({ name: parsed.error?.issues[0]?.message });
     if (!parsed.success) return;
     setBusy(true);
     const { error: err } = await authClient.updateUser({ name: parsed.data });
@@ -28,7 +30,7 @@ export function ProfileForm({ name: initial, email }: { name: string; email: str
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
       {status ? <Notice tone={status.tone}>{status.text}</Notice> : null}
-      <Field id="profile-name" label="Name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={error} hint="Shown on versions you prepare, check or approve." />
+      <Field id="profile-name" label="Name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={error.name} hint="Shown on versions you prepare, check or approve." />
       <Field id="profile-email" label="E-mail address" value={email} readOnly disabled hint="You sign in with this address; it is confirmed." />
       <Button type="submit" tone="secondary" busy={busy} disabled={name.trim() === initial}>
         Save name
@@ -45,6 +47,7 @@ export function ChangePasswordForm() {
   const [errors, setErrors] = useState<{ current?: string; next?: string; repeat?: string }>({});
   const [status, setStatus] = useState<Status>(null);
   const [busy, setBusy] = useState(false);
+  useFocusFirstError(errors, (k) => ({ current: "current-password", next: "new-password", repeat: "repeat-password" })[k] ?? k);
 
   async function onSubmit(e: FormEvent) {
     e.preventDefault();

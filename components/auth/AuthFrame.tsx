@@ -10,8 +10,9 @@ export function AuthFrame({ children }: { children: ReactNode }) {
       <header className="border-b border-rule/70">
         <nav className="mx-auto flex max-w-6xl items-center justify-between px-6 py-4" aria-label="Main">
           <Wordmark />
-          <Link href="/sketches/new" className="text-sm font-medium text-ink-soft hover:text-ink">
-            Try a sketch without an account
+          {/* a phone has room beside the mark for the short words only; two lines would crowd it */}
+          <Link href="/sketches/new" className="whitespace-nowrap text-sm font-medium text-ink-soft hover:text-ink">
+            Try a sketch<span className="max-sm:hidden"> without an account</span>
           </Link>
         </nav>
       </header>

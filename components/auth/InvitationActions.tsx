@@ -2,6 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
+import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { authClient } from "@/lib/auth-client";
 import { passwordSchema, personNameSchema } from "@/lib/schemas";
@@ -43,6 +44,7 @@ export function InvitationSignUpForm({ token, email }: { token: string; email: s
   const [errors, setErrors] = useState<{ name?: string; password?: string }>({});
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  useFocusFirstError(errors);
 
   async function onSubmit(e: FormEvent) {
     e.preventDefault();

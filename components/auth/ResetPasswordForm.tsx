@@ -2,6 +2,7 @@
 import Link from "next/link";
 import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
+import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { authClient } from "@/lib/auth-client";
 import { passwordSchema } from "@/lib/schemas";
 import { authErrorMessage } from "./messages";
@@ -13,6 +14,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState(false);
   const [busy, setBusy] = useState(false);
+  useFocusFirstError(errors);
 
   async function onSubmit(e: FormEvent) {
     e.preventDefault();

@@ -14,9 +14,17 @@ function initials(name: string): string {
 export function AccountMenu({ name, email }: { name: string; email: string }) {
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
+  const [failed, setFailed] = useState(false);
   async function signOut() {
     setLeaving(true);
-    await authClient.signOut();
+    setFailed(false);
+    // only a sign-out the server took leaves the page: on a shared machine, "signed out" must be true
+    const { error } = await authClient.signOut().catch(() => ({ error: true }));
+    if (error) {
+      setLeaving(false);
+      setFailed(true);
+      return;
+    }
     router.push("/sign-in");
     router.refresh();
   }
@@ -49,6 +57,11 @@ export function AccountMenu({ name, email }: { name: string; email: string }) {
           <button type="button" onClick={signOut} disabled={leaving} className="block w-full rounded-md px-2.5 py-2 text-left text-sm text-accent-deep hover:bg-accent-soft/50">
             {leaving ? "Signing out…" : "Sign out"}
           </button>
+          {failed ? (
+            <p role="alert" className="px-2.5 pb-1.5 text-xs font-medium text-accent-deep">
+              You are still signed in: the sign-out did not reach the server. Try again.
+            </p>
+          ) : null}
         </div>
       )}
     </Disclosure>

@@ -68,7 +68,9 @@ export function AuditLog({ workspaceId, showSignIns = true }: { workspaceId: str
       </div>
     );
   }
-  if (q.isError) {
+  // a failed "Show older entries" keeps the rows already read (they are in q.data): only a first
+  // page that never came replaces the table
+  if (q.isError && !q.data) {
     return (
       <Notice tone="error" title="The audit log could not be loaded">
         {q.error instanceof ApiError ? q.error.message : "Try again in a moment."}
@@ -92,20 +94,24 @@ export function AuditLog({ workspaceId, showSignIns = true }: { workspaceId: str
           <caption className="sr-only">Audit log, newest first</caption>
           <thead>
             <tr className="border-b border-rule text-left text-xs uppercase tracking-wider text-ink-faint">
-              <th scope="col" className="w-52 py-2 pr-4 font-semibold">When</th>
-              <th scope="col" className="w-56 py-2 pr-4 font-semibold">Who</th>
+              <th scope="col" className="w-52 py-2 pr-4 font-semibold max-sm:hidden">When</th>
+              <th scope="col" className="w-56 py-2 pr-4 font-semibold max-sm:hidden">Who</th>
               <th scope="col" className="py-2 font-semibold">What</th>
             </tr>
           </thead>
           <tbody>
             {events.map((e) => (
               <tr key={e.id} className="border-b border-rule-soft align-top last:border-0">
-                <td className="num whitespace-nowrap py-2.5 pr-4 text-ink-soft">{formatDateTime(e.at)}</td>
-                <td className="py-2.5 pr-4">
+                <td className="num whitespace-nowrap py-2.5 pr-4 text-ink-soft max-sm:hidden">{formatDateTime(e.at)}</td>
+                <td className="py-2.5 pr-4 max-sm:hidden">
                   <span className="font-medium text-ink">{e.actorName ?? "Deleted account"}</span>
                   {e.actorEmail ? <span className="block text-xs text-ink-faint">{e.actorEmail}</span> : null}
                 </td>
                 <td className="py-2.5 text-ink">
+                  {/* a phone has no room for the time's and the person's columns: they go above the sentence */}
+                  <span className="block text-xs text-ink-soft sm:hidden" data-testid="audit-when-who">
+                    <span className="num">{formatDateTime(e.at)}</span> · <span className="font-medium text-ink">{e.actorName ?? "Deleted account"}</span>
+                  </span>
                   {auditSentence(e)}
                   <EntryLink workspaceId={workspaceId} entry={e} />
                 </td>
@@ -114,6 +120,11 @@ export function AuditLog({ workspaceId, showSignIns = true }: { workspaceId: str
           </tbody>
         </table>
       </div>
+      {q.isFetchNextPageError ? (
+        <Notice tone="error" title="The older entries could not be loaded">
+          {q.error instanceof ApiError ? q.error.message : "Try again in a moment."}
+        </Notice>
+      ) : null}
       {q.hasNextPage ? (
         <Button tone="secondary" busy={q.isFetchingNextPage} onClick={() => q.fetchNextPage()}>
           Show older entries

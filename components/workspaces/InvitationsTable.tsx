@@ -34,16 +34,32 @@ export function InvitationsTable({ workspaceId }: { workspaceId: string }) {
       </div>
     );
   }
-  if (query.isError) {
-    return <Notice tone="error">{query.error instanceof ApiError ? query.error.message : "The invitations could not be loaded."}</Notice>;
+  if (query.isError && !query.data) {
+    return (
+      <Notice tone="error" title="The invitations could not be loaded">
+        {query.error instanceof ApiError ? query.error.message : "Try again in a moment."}
+      </Notice>
+    );
   }
+  // a failed refresh keeps the list as last loaded on screen
+  const stale = query.isError ? (
+    <Notice tone="error" title="The invitations could not be refreshed">
+      {query.error instanceof ApiError ? query.error.message : "Try again in a moment."} The list shows them as last loaded.
+    </Notice>
+  ) : null;
   const rows = query.data.invitations;
   if (!rows.length) {
-    return <EmptyState title="No open invitations">Invitations you send appear here until they are accepted, withdrawn or replaced.</EmptyState>;
+    return (
+      <div className="space-y-3">
+        {stale}
+        <EmptyState title="No open invitations">Invitations you send appear here until they are accepted, withdrawn or replaced.</EmptyState>
+      </div>
+    );
   }
   const failure = withdraw.error ?? resend.error;
   return (
     <div className="space-y-3">
+      {stale}
       {failure ? <Notice tone="error">{failure instanceof ApiError ? failure.message : "That did not work. Try again."}</Notice> : null}
       {resend.isSuccess ? <Notice tone="success">A new link was sent; the old one no longer works.</Notice> : null}
       <div className="relative overflow-x-auto">

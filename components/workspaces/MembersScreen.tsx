@@ -24,12 +24,20 @@ export function MembersScreen({ workspaceId, workspaceName, viewerId, viewerRole
           </Panel>
         ) : null}
         <Panel title="Members" description={owner ? "Change a role and it applies to their next request." : "Only owners change roles and invite people."}>
-          {members.isError ? (
+          {members.isError && !members.data ? (
             <Notice tone="error" title="The members could not be loaded">
               {members.error instanceof ApiError ? members.error.message : "Try again in a moment."}
             </Notice>
           ) : (
-            <MembersTable workspaceId={workspaceId} members={members.data?.members} viewerRole={role} viewerId={viewerId} loading={members.isPending} />
+            <div className="space-y-3">
+              {/* a failed refresh keeps the list as last loaded on screen */}
+              {members.isError ? (
+                <Notice tone="error" title="The members could not be refreshed">
+                  {members.error instanceof ApiError ? members.error.message : "Try again in a moment."} The list shows them as last loaded.
+                </Notice>
+              ) : null}
+              <MembersTable workspaceId={workspaceId} members={members.data?.members} viewerRole={role} viewerId={viewerId} loading={members.isPending} />
+            </div>
           )}
         </Panel>
         {owner ? (

@@ -84,7 +84,13 @@ export function MembersTable({
 
   const changeRole = useMutation({
     mutationFn: (v: { member: Member; role: Role }) => apiFetch(`${membersPath}/${encodeURIComponent(v.member.userId)}`, { method: "PATCH", body: { role: v.role } }),
-    onSuccess: (_d, v) => setMessage({ tone: "success", text: `${v.member.name} is now ${ROLE_INFO[v.role].label.toLowerCase()}.` }),
+    onSuccess: (_d, v) => {
+      // the table says what the notice says at once, whether or not the reload that follows gets through
+      qc.setQueryData<{ role: Role; members: Member[] }>(apiKey(membersPath), (old) =>
+        old ? { ...old, members: old.members.map((m) => (m.userId === v.member.userId ? { ...m, role: v.role } : m)) } : old,
+      );
+      setMessage({ tone: "success", text: `${v.member.name} is now ${ROLE_INFO[v.role].label.toLowerCase()}.` });
+    },
     onError: (err) => setMessage({ tone: "error", text: err instanceof ApiError ? err.message : "The role was not changed." }),
     onSettled: () => qc.invalidateQueries({ queryKey: apiKey(`/api/workspaces/${workspaceId}`) }),
   });
@@ -97,6 +103,9 @@ export function MembersTable({
         router.refresh();
         return;
       }
+      qc.setQueryData<{ role: Role; members: Member[] }>(apiKey(membersPath), (old) =>
+        old ? { ...old, members: old.members.filter((m) => m.userId !== member.userId) } : old,
+      );
       setMessage({ tone: "success", text: `${member.name} was removed from the workspace.` });
     },
     onError: (err) => setMessage({ tone: "error", text: err instanceof ApiError ? err.message : "Nobody was removed." }),
@@ -125,8 +134,9 @@ export function MembersTable({
               ? ["w-32", "w-48", "w-24"].map((w, i) => (
                   <tr key={i} className="border-b border-rule-soft" aria-hidden="true">
                     {[w, "w-44", "w-20", "w-16", "w-12"].map((cw, j) => (
-                      <td key={j} className="py-3 pr-3">
-                        <Skeleton className={`h-4 ${cw}`} />
+                      // the e-mail's and the date's cells go on a phone, as their headings do
+                      <td key={j} className={`py-3 pr-3 ${j === 1 || j === 3 ? "max-sm:hidden" : ""}`}>
+                        <Skeleton className={`h-4 max-w-full ${cw}`} />
                       </td>
                     ))}
                   </tr>
@@ -149,7 +159,8 @@ export function MembersTable({
                             id={`role-${m.userId}`}
                             label={`Role of ${m.name}`}
                             hideLabel
-                            value={m.role}
+                            // the role asked for shows while the change is on its way
+                            value={changeRole.isPending && changeRole.variables?.member.userId === m.userId ? changeRole.variables.role : m.role}
                             // not disabled while a change is on its way: that would drop the keyboard's focus
                             disabled={lastOwner}
                             aria-busy={(changeRole.isPending && changeRole.variables?.member.userId === m.userId) || undefined}

@@ -3,24 +3,28 @@ import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
+import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { workspaceNameSchema } from "@/lib/schemas";
 
-function useNameField(initial = "") {
+/** A workspace name field whose refusal takes the keyboard to it (`id` is the input's). */
+function useNameField(id: string, initial = "") {
   const [name, setName] = useState(initial);
-  const [error, setError] = useState<string | undefined>();
+  const [refusal, setRefusal] = useState<{ name?: string }>({});
+  useFocusFirstError(refusal, () => id);
+  const setError = (message: string | undefined) => setRefusal({ name: message });
   const check = () => {
     const parsed = workspaceNameSchema.safeParse(name);
     setError(parsed.error?.issues[0]?.message);
     return parsed.success ? parsed.data : null;
   };
-  return { name, setName, error, setError, check };
+  return { name, setName, error: refusal.name, setError, check };
 }
 
 /** A new shared workspace; the creator is its owner. */
 export function CreateWorkspaceForm() {
   const router = useRouter();
-  const f = useNameField();
+  const f = useNameField("workspace-name");
   const create = useMutation({
     mutationFn: (name: string) => apiFetch<{ workspace: { id: string } }>("/api/workspaces", { method: "POST", body: { name } }),
     onSuccess: (r) => router.push(`/workspaces/${r.workspace.id}/members`),
@@ -48,7 +52,7 @@ export function CreateWorkspaceForm() {
 /** Owners rename the workspace. */
 export function RenameWorkspaceForm({ workspaceId, name }: { workspaceId: string; name: string }) {
   const router = useRouter();
-  const f = useNameField(name);
+  const f = useNameField("rename", name);
   const rename = useMutation({
     mutationFn: (next: string) => apiFetch(`/api/workspaces/${workspaceId}`, { method: "PATCH", body: { name: next } }),
     onSuccess: () => router.refresh(),

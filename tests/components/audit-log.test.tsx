@@ -76,3 +76,35 @@ describe("the audit log's sign-ins switch", () => {
     expect(asked).toEqual(["/api/workspaces/w1/audit", "/api/workspaces/w1/audit?signIns=hide"]);
   });
 });
+
+describe("the audit log's older entries", () => {
+  it("a failed 'Show older entries' keeps the rows on screen, says why and can be tried again", async () => {
+    let olderFails = true;
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async (path: string) => {
+        if (!path.includes("before=")) return Response.json({ events: [gone, save], nextBefore: 3 });
+        if (olderFails) return Response.json({ error: { code: "unavailable", message: "The database is busy. Try again in a moment." } }, { status: 503 });
+        return Response.json({ events: [signIn, invite], nextBefore: null });
+      }),
+    );
+    render(
+      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+        <AuditLog workspaceId="w1" />
+      </QueryClientProvider>,
+    );
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole("button", { name: "Show older entries" }));
+    expect(await screen.findByText("The older entries could not be loaded")).toBeTruthy();
+    // the rows already read stay where they were
+    expect(screen.getByRole("link", { name: "Open “Bend” v2" })).toBeTruthy();
+    expect(screen.getAllByRole("row")).toHaveLength(3);
+
+    olderFails = false;
+    await user.click(screen.getByRole("button", { name: "Show older entries" }));
+    expect(await screen.findByText("invited cho@example.com as checker")).toBeTruthy();
+    expect(screen.queryByText("The older entries could not be loaded")).toBeNull();
+    expect(screen.getAllByRole("row")).toHaveLength(5);
+    expect(screen.getByText("That is everything recorded for this workspace.")).toBeTruthy();
+  });
+});

@@ -47,6 +47,24 @@ describe("first page", () => {
     await shot(page, "home");
   });
 
+  it("at phone width the signed-out pages keep the header's link on one line, clear of the mark", async () => {
+    const page = await ctx.newPage();
+    await page.setViewportSize({ width: 390, height: 844 });
+    for (const path of ["/sign-in", "/sign-up", "/forgot-password"]) {
+      await page.goto(BASE_URL + path);
+      const nav = page.getByRole("navigation", { name: "Main" });
+      const mark = await nav.getByRole("link", { name: "Counterpoise home" }).boundingBox();
+      const link = nav.getByRole("link", { name: /^Try a sketch/ });
+      expect(await link.textContent()).toBe("Try a sketch without an account");
+      const box = await link.boundingBox();
+      const lineHeight = await link.evaluate((el) => parseFloat(getComputedStyle(el).lineHeight));
+      // one line (14 px text on a 20 px line), beside the mark with room between them
+      expect(box!.height).toBeLessThanOrEqual(lineHeight + 1);
+      expect(box!.x - (mark!.x + mark!.width)).toBeGreaterThanOrEqual(16);
+    }
+    await shot(page, "home-phone-sign-in");
+  });
+
   it("reports the database as up", async () => {
     const page = await ctx.newPage();
     const res = await page.goto(BASE_URL + "/api/health");
