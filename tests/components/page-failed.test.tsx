@@ -1,6 +1,7 @@
 // A signed-out or account page that fails on the server (the database busy for a moment) shows
 // the product's own card: what happened, that nothing changed, a retry that fetches the page
-// again, and a way home. The account page's also keeps the frame with the engineering cautions.
+// again, and a way home. The root error page (account settings and every page without its own) also
+// keeps the frame with the engineering cautions.
 import { render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it, vi } from "vitest";
@@ -8,7 +9,7 @@ import { describe, expect, it, vi } from "vitest";
 const router = vi.hoisted(() => ({ push: vi.fn(), refresh: vi.fn() }));
 vi.mock("next/navigation", () => ({ useRouter: () => router }));
 const { default: AuthPageError } = await import("@/app/(auth)/error");
-const { default: AccountError } = await import("@/app/account/error");
+const { default: PageError } = await import("@/app/error");
 
 describe("the error page of the signed-out pages", () => {
   it("says what happened, and Try again asks the server for the page again", async () => {
@@ -27,9 +28,9 @@ describe("the error page of the signed-out pages", () => {
   });
 });
 
-describe("the error page of account settings", () => {
+describe("the error page of every other page (account settings, the workspace list, the mailbox)", () => {
   it("keeps the product's frame and its cautions", () => {
-    render(<AccountError error={new Error("boom")} reset={vi.fn()} />);
+    render(<PageError error={new Error("boom")} reset={vi.fn()} />);
     expect(screen.getByRole("heading", { level: 1 }).textContent).toBe("This page could not be shown");
     expect(screen.getByRole("link", { name: "Counterpoise home" })).toBeTruthy();
     expect(screen.getByRole("contentinfo").textContent).toMatch(/reviewed by a qualified engineer/);
