@@ -1,22 +1,29 @@
 import "server-only";
 // Object storage through the S3 API (@aws-sdk/client-s3): a real bucket when S3_ENDPOINT is set,
 // the local fake on loopback otherwise. Keys are made here, never by users.
-import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client, type S3ClientConfig } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
 import { randomUUID } from "node:crypto";
-import { storageSettings } from "./env";
+import { storageSettings, type StorageSettings } from "./env";
 
 const globalForS3 = globalThis as unknown as { counterpoiseS3?: S3Client };
 
-export function s3(): S3Client {
-  if (globalForS3.counterpoiseS3) return globalForS3.counterpoiseS3;
-  const st = storageSettings();
-  const client = new S3Client({
+/**
+ * The client's settings. A real bucket without S3_ACCESS_KEY_ID takes the SDK's default
+ * credentials (AWS_* variables, a profile, the instance's or task's role), not an empty key.
+ */
+export function s3ClientConfig(st: StorageSettings): S3ClientConfig {
+  return {
     endpoint: st.endpoint,
     region: st.region,
     forcePathStyle: st.forcePathStyle,
-    credentials: { accessKeyId: st.accessKeyId, secretAccessKey: st.secretAccessKey },
-  });
+    ...(st.accessKeyId ? { credentials: { accessKeyId: st.accessKeyId, secretAccessKey: st.secretAccessKey } } : {}),
+  };
+}
+
+export function s3(): S3Client {
+  if (globalForS3.counterpoiseS3) return globalForS3.counterpoiseS3;
+  const client = new S3Client(s3ClientConfig(storageSettings()));
   globalForS3.counterpoiseS3 = client;
   return client;
 }

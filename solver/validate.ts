@@ -169,7 +169,8 @@ export function validateValues(sketch: Sketch): FieldError[] {
       port.massFlow === 0;
     if (hasMassFlow && !hasVelocity) err(p, `port "${port.id}" needs a velocity: give velocity, or density and area, or volumeFlow and area`);
     // a speed found by dividing by the area can still come out too large with every value in range
-    else if (hasMassFlow && port.velocity === undefined && PORT_SIZES.every((k) => !(Math.abs(port[k] ?? 0) > MAX_MAGNITUDE)) && !(Math.abs(portFlow(port, null).velocity) <= MAX_MAGNITUDE))
+    // (a zero area or density is already refused above: one error for it, not two)
+    else if (hasMassFlow && port.velocity === undefined && positive(port.area) && positive(port.density) && PORT_SIZES.every((k) => !(Math.abs(port[k] ?? 0) > MAX_MAGNITUDE)) && !(Math.abs(portFlow(port, null).velocity) <= MAX_MAGNITUDE))
       err(`${p}.area`, `is too small for the flow through it: the speed it gives, ${port.density !== undefined ? "massFlow / (density × area)" : "volumeFlow / area"}, is beyond 1e18 m/s`);
     if (port.beta !== undefined && !(port.beta >= 1 && port.beta <= 2))
       err(`${p}.beta`, "must be from 1 to 2: the momentum-flux factor is 1 for flow uniform across the port, about 1.02 for turbulent pipe flow and 4/3 for laminar (it is never below 1)");

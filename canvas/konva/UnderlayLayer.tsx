@@ -14,6 +14,7 @@ import { underlayOnScreen } from "../geometry/underlay";
 import { ACCENT, INK_FAINT, PAPER_CARD } from "../render/palette";
 import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
+import { underlayFrameNote } from "./underlayStatus";
 
 /** Where an underlay's file is fetched from (the route checks the reader's role). */
 export const underlayUrl = (uploadId: string) => `/api/uploads/${encodeURIComponent(uploadId)}`;
@@ -59,6 +60,8 @@ export function UnderlayLayer({ interaction }: { interaction: InteractionStore }
   const loaded = useImage(u ? underlayUrl(u.upload) : null);
   if (!u) return null;
   const place = underlayOnScreen(u, view);
+  // while the file loads (or when it cannot), its frame and a word stand where it will lie
+  const note = underlayFrameNote(loaded, Boolean(u.hidden));
   const movable = !u.hidden && !u.locked && !readOnly && tool.kind === "select" && !dragging;
   const marks = tool.kind === "calibrate" ? tool.points : [];
   const hoverScreen = hover ? toScreen(view, hover) : null;
@@ -68,10 +71,10 @@ export function UnderlayLayer({ interaction }: { interaction: InteractionStore }
       {!u.hidden && loaded?.img ? (
         <KonvaImage image={loaded.img} {...place} opacity={u.opacity ?? 0.6} hit={{ type: "underlay" }} perfectDrawEnabled={false} />
       ) : null}
-      {!u.hidden && loaded?.failed ? (
+      {note ? (
         <Group x={place.x} y={place.y} rotation={place.rotation} listening={false}>
           <Rect width={place.width} height={place.height} stroke={INK_FAINT} dash={[6, 4]} strokeWidth={1} />
-          <Text x={8} y={8} width={Math.max(120, place.width - 16)} text="The underlay's file cannot be shown here: it belongs to a workspace you cannot read, or it was deleted." fontSize={11.5} fill={INK_FAINT} fontFamily={canvasFont()} />
+          <Text x={8} y={8} width={Math.max(120, place.width - 16)} text={note} fontSize={11.5} fill={INK_FAINT} fontFamily={canvasFont()} />
         </Group>
       ) : null}
       {marks.length ? (

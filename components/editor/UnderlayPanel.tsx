@@ -11,7 +11,7 @@ import { evaluateToNumber } from "@/solver/expressions";
 import { formatNumber } from "@/solver/units";
 import { ACCEPT_UPLOADS } from "@/components/uploads/uploadFile";
 import { useUnderlayUpload } from "./usePersistence";
-import { UnderlayScale } from "./UnderlayScale";
+import { UnderlayScale, underlayFieldError } from "./UnderlayScale";
 import { BUTTON, HEADING, INPUT } from "./ui";
 
 /** A number field that commits on Enter or leaving it; takes expressions with units. */
@@ -27,7 +27,7 @@ function ValueField({ label, value, unit, kind, onCommit, disabled, testId }: { 
       setError(null);
       setDraft(null);
     } catch (err) {
-      setError((err as Error).message);
+      setError(underlayFieldError((err as Error).message, kind));
     }
   };
   return (

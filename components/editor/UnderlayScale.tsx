@@ -1,11 +1,12 @@
 "use client";
 // Setting the underlay's scale: click two marks on the image, type the real distance between
 // them with a unit ("2.4 m", "96 in"); the solver's expression reader turns it into metres.
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useEditor, useStores } from "@/canvas/context";
 import { calibrateUnderlay } from "@/canvas/commands/underlay";
 import type { Command } from "@/canvas/commands/define";
 import { readScale } from "@/canvas/geometry/underlay";
+import { suggestUnitsFor } from "@/solver/expressionErrors";
 import { formatNumber } from "@/solver/units";
 import type { UnderlayFile } from "@/solver/schema";
 import { BUTTON, INPUT, PRIMARY_BUTTON } from "./ui";
@@ -16,6 +17,38 @@ export function scaleWords(metresPerPixel: number, units: "SI" | "US"): string {
   return metresPerPixel < 0.01 ? `${formatNumber(metresPerPixel * 1000, 4)} mm a pixel` : metresPerPixel < 1 ? `${formatNumber(metresPerPixel * 100, 4)} cm a pixel` : `${formatNumber(metresPerPixel, 4)} m a pixel`;
 }
 
+/**
+ * An underlay field's error in its own words: these fields read a value with its unit, never the
+ * sketch's parameters, so an unknown name is not told to become one, and the units suggested are
+ * the field's own.
+ */
+export function underlayFieldError(message: string, kind: "length" | "angle"): string {
+  return suggestUnitsFor(message, kind).replace(/^unknown name "([^"]+)": define it as a parameter or (use a unit such as [^;]+)$/, 'unknown name "$1": $2 (the underlay takes values with their units, not the sketch\'s parameters)');
+}
+
+/**
+ * Below 1180 px the properties panel lies over the drawing (Editor.tsx), so the marks could not be
+ * clicked on it: while they are picked the panel steps aside (through its toolbar toggle), and
+ * comes back once both are down, for the distance (or when the picking stops).
+ */
+function usePanelAsideWhilePicking(picking: boolean) {
+  const putAside = useRef(false);
+  useEffect(() => {
+    const toggle = document.querySelector<HTMLButtonElement>('[data-testid="toggle-properties"]');
+    if (!toggle || typeof window.matchMedia !== "function" || !window.matchMedia("(max-width: 1179px)").matches) return;
+    const open = toggle.getAttribute("aria-expanded") === "true";
+    if (picking && open) {
+      putAside.current = true;
+      toggle.click();
+    } else if (!picking && putAside.current) {
+      putAside.current = false;
+      if (!open) toggle.click();
+      // the distance field (or the scale's button) mounted while the panel was hidden: take the focus there now
+      requestAnimationFrame(() => document.querySelector<HTMLElement>("#underlay-distance, [data-testid=underlay-calibrate]")?.focus());
+    }
+  }, [picking]);
+}
+
 export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: boolean }) {
   const { editor } = useStores();
   const tool = useEditor((s) => s.tool);
@@ -24,6 +57,7 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
   const calibrating = tool.kind === "calibrate";
   const marks = calibrating ? tool.points : [];
   const reading = marks.length === 2 ? readScale(marks[0], marks[1], text) : null;
+  usePanelAsideWhilePicking(calibrating && marks.length < 2);
 
   const start = () => {
     setText(typeof u.calibration?.distance === "string" ? u.calibration.distance : u.calibration ? `${u.calibration.distance} m` : "");
@@ -92,7 +126,7 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
             data-testid="underlay-distance"
           />
           <p id="underlay-distance-note" className={`text-[11.5px] leading-snug ${reading && !reading.ok && text.trim() ? "text-caution" : "text-ink-faint"}`}>
-            {reading?.ok ? `= ${formatNumber(reading.distanceM, 4)} m, so ${scaleWords(reading.metresPerPixel, units)}` : text.trim() ? reading?.message : "A length with its unit: m, mm, ft, in…"}
+            {reading?.ok ? `= ${formatNumber(reading.distanceM, 4)} m, so ${scaleWords(reading.metresPerPixel, units)}` : text.trim() && reading ? underlayFieldError(reading.message, "length") : "A length with its unit: m, mm, ft, in…"}
           </p>
           <div className="flex gap-1.5">
             <button type="submit" className={PRIMARY_BUTTON} disabled={!reading?.ok} data-testid="underlay-set-scale">

@@ -2,7 +2,7 @@
 // Files on comments: thumbnails that open the whole file (served only to readers of the
 // workspace), a picker for the files of a comment being written, and sending them once the
 // comment exists. A PDF is downloaded whole; its thumbnail is its first page.
-import { useRef } from "react";
+import { useRef, useState } from "react";
 import { ACCEPT_UPLOADS, MAX_UPLOAD_BYTES, uploadFile } from "@/components/uploads/uploadFile";
 import { apiFetch } from "@/lib/api-client";
 
@@ -49,9 +49,13 @@ export function AttachmentList({ files, onRemove }: { files: Attachment[]; onRem
   );
 }
 
+/** The files a comment may carry (the server's cap: lib/uploads/service.ts; a test keeps them equal). */
+export const MAX_COMMENT_FILES = 8;
+
 /** Files chosen for a comment not sent yet: a button to add, their names to take back. */
 export function FilePicker({ files, onChange, id }: { files: File[]; onChange: (files: File[]) => void; id: string }) {
   const input = useRef<HTMLInputElement>(null);
+  const [left, setLeft] = useState<string[]>([]);
   const over = files.filter((f) => f.size > MAX_UPLOAD_BYTES);
   return (
     <div className="flex min-w-0 flex-wrap items-center gap-1.5 text-xs">
@@ -67,7 +71,10 @@ export function FilePicker({ files, onChange, id }: { files: File[]; onChange: (
         aria-label="Attach images or PDFs"
         data-testid={`${id}-files`}
         onChange={(e) => {
-          onChange([...files, ...Array.from(e.target.files ?? [])].slice(0, 8));
+          const all = [...files, ...Array.from(e.target.files ?? [])];
+          // a comment takes MAX_COMMENT_FILES: the rest are named, never dropped unsaid
+          setLeft(all.slice(MAX_COMMENT_FILES).map((f) => f.name));
+          onChange(all.slice(0, MAX_COMMENT_FILES));
           e.target.value = "";
         }}
       />
@@ -80,6 +87,11 @@ export function FilePicker({ files, onChange, id }: { files: File[]; onChange: (
         </span>
       ))}
       {over.length ? <span className="text-caution">over {MAX_UPLOAD_BYTES / 1048576} MB: it will not be attached</span> : null}
+      {left.length ? (
+        <span className="text-caution" role="status" data-testid={`${id}-left-out`}>
+          {MAX_COMMENT_FILES} files at most on a comment: {left.map((n) => `“${n}”`).join(", ")} not added
+        </span>
+      ) : null}
     </div>
   );
 }
@@ -91,7 +103,8 @@ export async function attachFiles(commentId: string, files: File[]): Promise<str
     try {
       await uploadFile(`/api/comments/${commentId}/attachments`, f);
     } catch (err) {
-      problems.push(`${f.name}: ${(err as Error).message}`);
+      // uploadFile's words already name the file (“a.png”: …)
+      problems.push((err as Error).message);
     }
   }
   return problems;

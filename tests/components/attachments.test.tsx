@@ -2,7 +2,8 @@
 // picker that marks what is over the cap, and a remove button only where one may remove.
 import { fireEvent, render, screen, within } from "@testing-library/react";
 import { describe, expect, it, vi } from "vitest";
-import { AttachmentList, FilePicker, sizeWords, type Attachment } from "@/components/review/Attachments";
+import { useState } from "react";
+import { AttachmentList, attachFiles, FilePicker, MAX_COMMENT_FILES, sizeWords, type Attachment } from "@/components/review/Attachments";
 import { MAX_UPLOAD_BYTES } from "@/components/uploads/uploadFile";
 import { UPLOAD_LIMITS } from "@/lib/uploads/process";
 
@@ -50,5 +51,30 @@ describe("attachments on comments", () => {
   it("the browser's cap is the server's", () => {
     expect(MAX_UPLOAD_BYTES).toBe(UPLOAD_LIMITS.maxBytes);
     expect(sizeWords(2048)).toBe("2 KB");
+  });
+
+  it("more files than a comment takes: the ones left out are named at the picker", () => {
+    function Picker() {
+      const [files, setFiles] = useState<File[]>([new File(["x"], "already.png")]);
+      return <FilePicker id="t" files={files} onChange={setFiles} />;
+    }
+    render(<Picker />);
+    const chosen = Array.from({ length: 9 }, (_, i) => new File(["x"], `photo ${i + 1}.jpg`));
+    fireEvent.change(screen.getByTestId("t-files"), { target: { files: chosen } });
+    expect(screen.getAllByRole("button", { name: /^Do not attach/ })).toHaveLength(MAX_COMMENT_FILES);
+    expect(screen.getByTestId("t-left-out")).toHaveTextContent("8 files at most on a comment: “photo 8.jpg”, “photo 9.jpg” not added");
+  });
+
+  it("a refused file is named once in the words the comment shows", async () => {
+    const fetchMock = vi.spyOn(globalThis, "fetch").mockResolvedValue(
+      new Response(JSON.stringify({ error: { code: "unsupported_media_type", message: "This file is not a PNG, JPEG or WebP image or a PDF (whatever its name says)." } }), { status: 415, headers: { "content-type": "application/json" } }),
+    );
+    try {
+      const problems = await attachFiles("c1", [new File(["just text"], "notes.png", { type: "image/png" })]);
+      expect(problems).toEqual(["“notes.png”: This file is not a PNG, JPEG or WebP image or a PDF (whatever its name says)."]);
+      expect(fetchMock).toHaveBeenCalledWith("/api/comments/c1/attachments", expect.objectContaining({ method: "POST" }));
+    } finally {
+      fetchMock.mockRestore();
+    }
   });
 });

@@ -178,3 +178,87 @@ describe("a read-only editor (a viewer or a checker on a saved sketch)", () => {
     expect(screen.getByTestId("sketch-title")).toHaveTextContent("Skid");
   });
 });
+
+describe("setting the scale on a narrow window (the properties panel lies over the drawing)", () => {
+  /** A window `width` px wide, as far as CSS media queries of the form (max-width: N px) go. */
+  function windowWidth(width: number) {
+    window.matchMedia = ((query: string) => {
+      const max = /\(max-width:\s*(\d+)px\)/.exec(query);
+      return { matches: max ? width <= Number(max[1]) : false, media: query, onchange: null, addListener() {}, removeListener() {}, addEventListener() {}, removeEventListener() {}, dispatchEvent: () => false } as MediaQueryList;
+    }) as typeof window.matchMedia;
+  }
+  const panelShown = () => !document.getElementById("properties-panel")!.className.split(/\s+/).includes("max-[1179px]:hidden");
+
+  it("at 390 px the panel steps aside while the marks are picked on the drawing, and comes back for the distance", async () => {
+    windowWidth(390);
+    try {
+      const user = userEvent.setup();
+      const sketch = { ...skid(), underlay: { upload: UPLOAD, width: 1000, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.005, rotation: 0, opacity: 0.6 } };
+      const { persistence } = savedPersistence(sketch);
+      await open(persistence);
+      await user.click(screen.getByTestId("toggle-properties"));
+      expect(panelShown()).toBe(true);
+      await user.click(screen.getByTestId("underlay-calibrate"));
+      // the drawing is free for the two taps
+      expect(panelShown()).toBe(false);
+      expect(screen.getByTestId("toggle-properties")).toHaveAttribute("aria-expanded", "false");
+      // the two marks land (here typed: jsdom has no drawing to tap, and applies no CSS)
+      for (const [i, v] of ["300", "520", "700", "520"].entries()) await user.type(screen.getByTestId(`underlay-mark-${i}`), v);
+      expect(panelShown()).toBe(false);
+      await user.click(screen.getByTestId("underlay-use-marks"));
+      // back for the distance, with the focus in its field
+      expect(panelShown()).toBe(true);
+      await waitFor(() => expect(document.activeElement).toBe(screen.getByTestId("underlay-distance")));
+      await user.type(screen.getByTestId("underlay-distance"), "2 m{Enter}");
+      expect(screen.getByTestId("underlay-mpp")).toHaveAttribute("data-mpp", "0.005");
+      expect(panelShown()).toBe(true);
+    } finally {
+      delete (window as { matchMedia?: unknown }).matchMedia;
+    }
+  });
+
+  it("on a wide window the panel stays where it is", async () => {
+    windowWidth(1440);
+    try {
+      const user = userEvent.setup();
+      const sketch = { ...skid(), underlay: { upload: UPLOAD, width: 1000, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.005, rotation: 0, opacity: 0.6 } };
+      await open(savedPersistence(sketch).persistence);
+      await user.click(screen.getByTestId("underlay-calibrate"));
+      expect(screen.getByTestId("underlay-scale")).toHaveTextContent("Click the first mark on the drawing");
+      expect(screen.getByTestId("toggle-properties")).toHaveAttribute("aria-expanded", "false");
+      expect(document.activeElement).toBe(screen.getByTestId("underlay-mark-0"));
+    } finally {
+      delete (window as { matchMedia?: unknown }).matchMedia;
+    }
+  });
+});
+
+describe("the underlay's fields read values, not the sketch's parameters", () => {
+  it("an unknown name is not told to become a parameter, and the units offered are the field's own", async () => {
+    const user = userEvent.setup();
+    const sketch = { ...skid(), parameters: { theta: "30 deg" }, underlay: { upload: UPLOAD, width: 1000, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.005, rotation: 0, opacity: 0.6 } };
+    const store = createEditorStore({ sketch });
+    render(
+      <EditorProvider editor={store}>
+        <PersistenceCtx.Provider value={savedPersistence(sketch).persistence}>
+          <UnderlayPanel />
+        </PersistenceCtx.Provider>
+      </EditorProvider>,
+    );
+    const turn = screen.getByTestId("underlay-rotation");
+    await user.clear(turn);
+    await user.type(turn, "theta{Enter}");
+    expect(turn).toHaveAttribute("aria-invalid", "true");
+    expect(document.getElementById(turn.getAttribute("aria-describedby")!)).toHaveTextContent(
+      'unknown name "theta": use a unit such as deg, rad (the underlay takes values with their units, not the sketch\'s parameters)',
+    );
+    expect(store.getState().sketch.underlay!.rotation).toBe(0);
+
+    await user.click(screen.getByTestId("underlay-calibrate"));
+    for (const [i, v] of ["300", "520", "700", "520"].entries()) await user.type(screen.getByTestId(`underlay-mark-${i}`), v);
+    await user.click(screen.getByTestId("underlay-use-marks"));
+    await user.type(screen.getByTestId("underlay-distance"), "2 yds");
+    expect(screen.getByTestId("underlay-scale")).toHaveTextContent('unknown name "yds": use a unit such as m, mm, ft, in (the underlay takes values with their units');
+    expect(screen.getByTestId("underlay-set-scale")).toBeDisabled();
+  });
+});

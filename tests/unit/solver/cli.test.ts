@@ -98,7 +98,8 @@ describe("npm run solve -- --cases and --limit", () => {
     ]);
   }, 60000);
 
-  it("a target with a unit, and mistakes named by their option", () => {
+  // each run of the command line starts tsx (several seconds on a busy two-core machine): a few runs a test
+  it("a target with a unit", () => {
     const fixture = join(FIXTURES, "thrust-stand-tips.json");
     const withUnit = JSON.parse(solveCli("--limit", "T=0..3", "--quantity", "rear.margin", "--target", "44.96178 lbf", fixture).stdout);
     const inNewtons = JSON.parse(solveCli("--limit", "T=0..3", "--quantity", "rear.margin", "--target", "200", fixture).stdout);
@@ -106,12 +107,20 @@ describe("npm run solve -- --cases and --limit", () => {
     expect(Math.abs(withUnit.target - 200)).toBeLessThan(0.001);
     expect(inNewtons.result.found).toBe(true);
     expect(Math.abs(withUnit.result.value - inNewtons.result.value)).toBeLessThan(1e-4);
+  }, 120000);
+
+  it("mistakes named by their option", () => {
+    const fixture = join(FIXTURES, "thrust-stand-tips.json");
     const bad = (...args: string[]) => JSON.parse(solveCli(...args, fixture).stdout).errors[0];
     expect(bad("--limit", "T=3..3", "--quantity", "rear.margin")).toEqual({ path: "--limit", message: "3..3 is not a range of two different numbers" });
     expect(bad("--limit", "T=0..3", "--quantity", "back.margin")).toEqual({ path: "--quantity", message: 'the sketch has no support "back"' });
     expect(bad("--limit", "T=0..3", "--quantity", "rear.margin", "--target", "3 kg")).toMatchObject({ path: "--target" });
     expect(bad("--limit", "T=0..3", "--quantity", "rear.margin", "--combination", "none")).toEqual({ path: "", message: 'combination: there is no combination "none"' });
     expect(bad("--frobnicate").message).toMatch(/^unknown option --frobnicate; usage:/);
+  }, 180000);
+
+  it("a parameter no case has, with --every-case, exits 1", () => {
+    const fixture = join(FIXTURES, "thrust-stand-tips.json");
     // a parameter no case has is an error in every case at once, not a success with nothing found
     const every = solveCli("--limit", "Q=0..3", "--quantity", "rear.margin", "--every-case", fixture);
     expect(every.status).toBe(1);

@@ -185,6 +185,15 @@ describe("invalid sketch files", () => {
     ]);
   });
 
+  it("a zero area is refused once, as zero, not also as too small for the flow", () => {
+    const out = (area: number | string) => ({ ports: [{ id: "o", body: "b", kind: "outlet" as const, at: [1, 0.5] as [number, number], angle: 0, massFlow: 10, density: 1000, area }] });
+    expect(errorsOf(onPinAndRoller(out(0)))).toEqual([{ path: "ports[0].area", message: "must be more than zero" }]);
+    expect(errorsOf(onPinAndRoller(out("0 m^2")))).toEqual([{ path: "ports[0].area", message: "must be more than zero" }]);
+    expect(errorsOf(onPinAndRoller({ ports: [{ id: "o", body: "b", kind: "outlet", at: [1, 0.5], angle: 0, volumeFlow: 0.01, density: 0, area: 0.01 }] }))).toEqual([
+      { path: "ports[0].density", message: "must be more than zero" },
+    ]);
+  });
+
   it("large but sane values still solve, with finite reactions", () => {
     // 1e12 N down at the middle of a 1 m span (a pin and a roller), on a body of 1e9 kg (g = 10)
     const r = solveFile(
