@@ -12,7 +12,9 @@ export const pool =
   new Pool({
     connectionString: process.env.DATABASE_URL || localDatabaseUrl(),
     max: Number(process.env.DB_POOL_MAX || 10),
-    connectionTimeoutMillis: 3000,
+    // how long a request waits for a connection (a new one, or its turn in a busy pool) before it
+    // fails: long enough for a loaded machine; a server that is down refuses at once anyway
+    connectionTimeoutMillis: Number(process.env.DB_CONNECT_TIMEOUT_MS || 10000),
   });
 if (process.env.NODE_ENV !== "production") globalForDb.counterpoisePool = pool;
 
