@@ -221,6 +221,8 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
         set((d) => {
           d.gesture = null;
           if (s.sketch === g.origin) return;
+          // a finished drag is a new edit, as `apply`'s are: "Undid: …" is old news
+          if (d.notice?.startsWith("Undid: ") || d.notice?.startsWith("Redid: ")) d.notice = null;
           d.past.push({ label: g.label, before: g.origin, after: s.sketch, selectionBefore: g.selection, selectionAfter: s.selection });
           if (d.past.length > HISTORY_LIMIT) d.past.splice(0, d.past.length - HISTORY_LIMIT);
           d.future = [];

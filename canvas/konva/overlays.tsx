@@ -13,7 +13,7 @@ import { supportStates } from "../render/results";
 import { itemPrims } from "../render/symbols";
 import type { Prim } from "../render/prims";
 import { handleAlong, handleWords, placeHandle } from "../render/handles";
-import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD, REACTION } from "../render/palette";
+import { ACCENT, CAUTION, INK_FAINT, PAPER_CARD } from "../render/palette";
 import { angleOnEdge, bodyAt, OUTLINE_REACH_PX, outlineSpot, placedAtOutline } from "../placement";
 import { anchorOf, type Scene, type SceneBody, type SceneItem } from "../scene";
 import { drawingFrame } from "../geometry/fit";
@@ -21,6 +21,7 @@ import { drawPrims } from "./drawPrims";
 import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
 import { shiftBox } from "../render/labels";
+import { momentPointPrims } from "../render/momentPoint";
 
 const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
 export { ROTATE_HANDLE_PX, handlePlace } from "../render/handles";
@@ -52,7 +53,7 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       const kept = sc.items.filter((i) => KEPT_OFF.has(i.kind));
       // held while a pan lasts: the labels keep inside the drawing area where it ends
       if (interaction.getState().panning) return;
-      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, e.view.x, e.view.y, e.viewport, ...parts];
+      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, e.view.x, e.view.y, e.viewport, e.momentPoint, ...parts];
       if (same(key, last) && (same(kept, lastKept) || interaction.getState().dragging)) return;
       last = key;
       lastKept = kept;
@@ -64,10 +65,11 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       };
       // the supports' and ports' own labels are drawn (and moved off these) by their nodes; only the
       // result's layer is drawn here, over their symbols
-      if (a.shown) {
-        const states = supportStates(a.shown);
-        primsRef.current = resultLayer(elementGroups(scene, e.view.scale, e.units, states), scene, e.view.scale, e.units, a.shown, states, a.stale, drawingFrame(e.view, e.viewport));
-      } else primsRef.current = [];
+      const states = a.shown ? supportStates(a.shown) : null;
+      const groups = a.shown || e.momentPoint ? elementGroups(scene, e.view.scale, e.units, states) : [];
+      const found = a.shown && states ? resultLayer(groups, scene, e.view.scale, e.units, a.shown, states, a.stale, drawingFrame(e.view, e.viewport)) : [];
+      // the hand check's P, its words clear of the result's and the elements' own
+      primsRef.current = e.momentPoint ? [...found, ...momentPointPrims(px(e.momentPoint, e.view.scale), [...found, ...groups.flatMap((g) => g.prims)])] : found;
       const layer = shapeRef.current?.getLayer();
       if (!layer) return;
       if (now) layer.draw();
@@ -77,7 +79,7 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       stores.analysis.subscribe(() => redraw(true)),
       stores.scene.subscribe(() => redraw(false)),
       stores.editor.subscribe((s, p) => {
-        if (s.view !== p.view || s.units !== p.units || s.viewport !== p.viewport) redraw(false);
+        if (s.view !== p.view || s.units !== p.units || s.viewport !== p.viewport || s.momentPoint !== p.momentPoint) redraw(false);
       }),
       interaction.subscribe((s, p) => {
         if ((!s.dragging && p.dragging) || (!s.panning && p.panning)) redraw(false);
@@ -156,7 +158,6 @@ export const PointerOverlay = memo(function PointerOverlay({ interaction }: { in
   const scale = useEditor((s) => s.view.scale);
   const tool = useEditor((s) => s.tool);
   const units = useEditor((s) => s.units);
-  const momentPoint = useEditor((s) => s.momentPoint);
   const { scene } = useStores();
   // what a click would place, where it would go: a support or a port onto the outline it is near,
   // or nowhere (`at` null) when it is near none
@@ -225,14 +226,6 @@ export const PointerOverlay = memo(function PointerOverlay({ interaction }: { in
       {ghost && !ghost.at && hover && (
         <Group x={hover[0] * scale} y={-hover[1] * scale}>
           <Text x={10} y={8} text="not on a body: move onto or near its outline" fontSize={10.5} fill={CAUTION} fontFamily={canvasFont()} />
-        </Group>
-      )}
-      {momentPoint && (
-        <Group x={momentPoint[0] * scale} y={-momentPoint[1] * scale}>
-          <Circle radius={7} stroke={REACTION} strokeWidth={1.5} dash={[2, 2]} />
-          <Line points={[-11, 0, 11, 0]} stroke={REACTION} strokeWidth={1} />
-          <Line points={[0, -11, 0, 11]} stroke={REACTION} strokeWidth={1} />
-          <Text x={10} y={-20} text="moments about P" fontSize={10.5} fill={REACTION} fontFamily={canvasFont()} />
         </Group>
       )}
       {tool.kind === "pick-point" && hover && (

@@ -169,6 +169,8 @@ export function createPointerController(deps: PointerDeps) {
       const p = snap(world, e).point;
       s.setMomentPoint([snapTo(p[0], 1e-4), snapTo(p[1], 1e-4)]);
       s.setTool({ kind: "select" });
+      // the tool's hover mark and snap ("on edge") go with it, not at the next pointer move
+      interaction.setState({ hover: null, snap: null });
       return;
     }
     if (tool.kind === "calibrate") {

@@ -106,22 +106,31 @@ export function HandCheckView() {
   }, [scale, units]);
   const factors = useMemo(() => (numeric && shown && body ? stabilityLines(numeric, body.id, shown.reactions, stability?.[body.id]) : null), [numeric, shown, body, stability]);
   const [draft, setDraft] = useState<{ x: string; y: string } | null>(null);
-  const [error, setError] = useState<string | null>(null);
+  const [error, setError] = useState<{ field: "x" | "y"; message: string } | null>(null);
+  // P set elsewhere (picked on the drawing, "Back to the first support"): a refused entry is moot
+  const [pickedBefore, setPickedBefore] = useState(picked);
+  if (pickedBefore !== picked) {
+    setPickedBefore(picked);
+    setDraft(null);
+    setError(null);
+  }
   if (!eq || !body) return <p className="p-2 text-[12.5px] text-ink-faint">No result to check yet.</p>;
 
   const lengthUnit = convert(1, "length", units).unit;
-  const commitPoint = (x: string, y: string) => {
+  /** Whether the typed point was taken; a refused one stays in its field, marked, to be put right. */
+  const commitPoint = (x: string, y: string): boolean => {
     const p: number[] = [];
     for (const [k, text] of [["x", x], ["y", y]] as const) {
       try {
         p.push(parseLength(text, units));
       } catch (e) {
-        setError(`P${k}: ${(e as Error).message}`);
-        return;
+        setError({ field: k, message: `P${k}: ${(e as Error).message}` });
+        return false;
       }
     }
     editor.getState().setMomentPoint(p as Vec2);
     setError(null);
+    return true;
   };
   // in the length unit on screen, like the terms' positions
   const shownText = (m: number) => String(Number(convert(m, "length", units).value.toFixed(4)));
@@ -152,11 +161,13 @@ export function HandCheckView() {
               aria-label={`Moment point ${k}`}
               data-testid={`moment-${k}`}
               value={draft ? draft[k] : shownText(about[i])}
-              onFocus={() => setDraft({ x: shownText(about[0]), y: shownText(about[1]) })}
+              aria-invalid={error?.field === k || undefined}
+              aria-describedby={error?.field === k ? "moment-point-error" : undefined}
+              onFocus={() => setDraft((d) => d ?? { x: shownText(about[0]), y: shownText(about[1]) })}
               onChange={(e) => setDraft((d) => ({ ...(d ?? { x: "", y: "" }), [k]: e.target.value }))}
               onBlur={() => {
-                if (draft) commitPoint(draft.x, draft.y);
-                setDraft(null);
+                // what was typed stays when it is refused, beside the reason, never swapped for the old value
+                if (!draft || commitPoint(draft.x, draft.y)) setDraft(null);
               }}
               onKeyDown={(e) => e.key === "Enter" && (e.target as HTMLInputElement).blur()}
             />
@@ -170,7 +181,11 @@ export function HandCheckView() {
             Back to the first support
           </button>
         )}
-        {error && <span className="pb-1.5 text-caution">⚠ {error}</span>}
+        {error && (
+          <span id="moment-point-error" className="pb-1.5 text-caution">
+            ⚠ {error.message}
+          </span>
+        )}
         <button
           type="button"
           className={`${BUTTON} ml-auto`}

@@ -3,6 +3,7 @@
 // Pure: the results panel, the calc sheet and the tests all use it.
 import { describeFreeMotion, overMu } from "@/solver/words";
 import { portDirectionNotes } from "@/solver/ports";
+import { nearestOnOutline, pointInPolygon, polygonDiameter } from "@/solver/geometry";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
 import type { BodyStability } from "@/solver/stability";
@@ -121,6 +122,21 @@ function sharedFrictionNote(c: Context): string | null {
   return `As a whole the body needs a friction coefficient of ${ratio(f.needed)} and its friction contacts give ${ratio(f.available)}: the friction is shared as the supports' stiffnesses share it, and a small slip at the overloaded contact may pass the rest to the others (this analysis does not follow that).`;
 }
 
+/**
+ * A support left outside its body's outline (dragged, nudged or duplicated off it: it stays the
+ * body's): the solver takes it where it is, as if on a rigid arm, which a drawing of a foot in the
+ * air does not make plain. Said, with how far, so nobody trusts a reaction at a point the body
+ * does not reach. The tolerance is the port check's (a thousandth of the body's size).
+ */
+function supportOffOutline(s: Support, outline: Vec2[], units: UnitSystem): string | null {
+  if (outline.length < 3 || !Number.isFinite(s.at[0]) || !Number.isFinite(s.at[1])) return null;
+  const eps = 1e-3 * Math.max(polygonDiameter(outline), 1e-6);
+  const d = nearestOnOutline(s.at, outline).distance;
+  if (d <= eps || pointInPolygon(s.at, outline)) return null;
+  const away = formatQuantity(d, "length", units);
+  return `${cap(supportName(s))} is ${away} outside its body's outline: it acts there, as if joined to the body by a rigid arm. If it bears on the body, move it onto the outline.`;
+}
+
 function pivotName(c: Context, about: Vec2): string {
   const near = c.supports.find((s) => Math.hypot(s.at[0] - about[0], s.at[1] - about[1]) < 1e-6 * Math.max(1, Math.hypot(about[0], about[1])) + 1e-9);
   if (near) return supportName(near);
@@ -189,6 +205,10 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
 
     // a port drawn against its kind is likely a slip of the input: said before anything else
     const details: string[] = portNotes.filter((n) => n.body === b.id).map((n) => n.message);
+    for (const s of supports) {
+      const off = supportOffOutline(s, b.outline, units);
+      if (off) details.push(off);
+    }
     if (body.status === "tips") {
       // the contacts the turn lifts besides the one named: still bearing in the forces shown (every
       // support able to pull), below zero in the margins, which carry on from the body last held

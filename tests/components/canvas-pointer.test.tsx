@@ -371,6 +371,17 @@ describe("tools", () => {
     down(1.97, 0.02);
     expect(ed().momentPoint).toEqual([2, 0]);
   });
+
+  it("leaves no snap mark (\"corner\") or hover ring behind once the moment point is picked", () => {
+    ed().setTool({ kind: "pick-point" });
+    const at = { ...screenOf(1.97, 0.02), altKey: false } as unknown as PointerEvent;
+    controller.hover(at);
+    expect(interaction.getState().snap).toMatchObject({ kind: "corner", point: [2, 0] });
+    down(1.97, 0.02);
+    expect(ed().tool.kind).toBe("select");
+    expect(interaction.getState().snap).toBeNull();
+    expect(interaction.getState().hover).toBeNull();
+  });
 });
 
 describe("placing on an outline, and in view", () => {

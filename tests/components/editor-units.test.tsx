@@ -177,6 +177,38 @@ describe("US units reach every length on screen", () => {
     expect(editor.getState().momentPoint![0]).toBeCloseTo(2, 12);
   });
 
+  it("keeps a refused entry for P in its field, marked, until it is put right or P is picked elsewhere", async () => {
+    const user = userEvent.setup();
+    const editor = mountResultsDock(beam("F1"));
+    await user.click(screen.getByRole("tab", { name: "Hand check" }));
+    act(() => editor.getState().setMomentPoint([2, 0.5]));
+    const y = screen.getByTestId("moment-y");
+    await user.clear(y);
+    await user.type(y, "abc{Enter}");
+    // the typo stays to be mended, beside the reason; P keeps its last good value
+    expect(screen.getByTestId("moment-y")).toHaveValue("abc");
+    expect(screen.getByTestId("moment-y")).toHaveAttribute("aria-invalid", "true");
+    expect(screen.getByTestId("moment-x")).not.toHaveAttribute("aria-invalid");
+    expect(screen.getByText(/Py: .*"abc"/)).toBeInTheDocument();
+    expect(editor.getState().momentPoint).toEqual([2, 0.5]);
+    // back into the field: still the typo, not the old value
+    await user.click(screen.getByTestId("moment-y"));
+    expect(screen.getByTestId("moment-y")).toHaveValue("abc");
+    await user.clear(screen.getByTestId("moment-y"));
+    await user.type(screen.getByTestId("moment-y"), "0.25{Enter}");
+    expect(editor.getState().momentPoint).toEqual([2, 0.25]);
+    expect(screen.getByTestId("moment-y")).toHaveValue("0.25");
+    expect(screen.queryByText(/Py: /)).toBeNull();
+    // a refused entry, then P picked on the drawing: the pick shows, the refusal goes
+    await user.clear(screen.getByTestId("moment-x"));
+    await user.type(screen.getByTestId("moment-x"), "2 kg{Enter}");
+    expect(screen.getByTestId("moment-x")).toHaveValue("2 kg");
+    act(() => editor.getState().setMomentPoint([1, 0]));
+    expect(screen.getByTestId("moment-x")).toHaveValue("1");
+    expect(screen.getByTestId("moment-y")).toHaveValue("0");
+    expect(screen.queryByText(/Px: /)).toBeNull();
+  });
+
   it("parses a plain number in the length unit on screen", () => {
     expect(parseLength("10", "US")).toBeCloseTo(3.048, 12);
     expect(parseLength("10", "SI")).toBe(10);

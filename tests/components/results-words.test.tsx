@@ -12,6 +12,7 @@ import { formatQuantity } from "@/solver/units";
 import { emptySketch } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
 import { moveElement } from "@/canvas/commands/move";
+import { duplicateElements } from "@/canvas/commands/elements";
 import { stabilitySentence, statusSentences } from "@/components/results/statusSentence";
 import { EXAMPLES } from "@/canvas/examples";
 import { beam, mountResultsDock, renderEditor } from "./editor-helpers";
@@ -330,6 +331,34 @@ describe("ports drawn against their kind", () => {
     inside.ports[0].at = [0, 0];
     const sentences = statusSentences(solved(inside).sketch, solved(inside).result)[0].details;
     expect(sentences.some((d) => d.startsWith("Inlet from pump is inside its body, not on its outline"))).toBe(true);
+  });
+});
+
+describe("a support left outside its body's outline", () => {
+  // a 2 m × 1 m, 120 kg cart on two friction feet at its bottom corners
+  const cart = () => ({
+    ...emptySketch("Test cart"),
+    bodies: [{ ...newBody("b1", [[0, 0.5], [2, 0.5], [2, 1.5], [0, 1.5]], "Cart"), mass: 120 }],
+    supports: [0.2, 1.8].map((x, i) => ({ id: `s${i + 1}`, body: "b1", kind: "contact" as const, at: [x, 0.5] as [number, number], angle: 90, mu: 0.3 })),
+  });
+  const offNotes = (doc: unknown, units: "SI" | "US" = "SI") => statusSentences(solved(doc).sketch, solved(doc).result, units)[0].details.filter((d) => /outside its body's outline/.test(d));
+
+  it("as drawn (feet on the outline, a pin inside it), no note", () => {
+    const doc = cart();
+    expect(offNotes(doc)).toEqual([]);
+    const pinned = { ...doc, supports: [...doc.supports, { id: "s3", body: "b1", kind: "pin" as const, at: [1, 1] as [number, number] }] };
+    expect(offNotes(pinned)).toEqual([]);
+  });
+
+  it("the copies a Duplicate leaves 0.4 m under the cart are said to be off it, how far, in the units on screen", () => {
+    const doc = duplicateElements.run(cart() as never, { ids: ["s1", "s2"], offset: [0.2, -0.4] });
+    expect(doc.supports.map((x) => x.at)).toEqual([[0.2, 0.5], [1.8, 0.5], [0.4, 0.1], [2, 0.1]]);
+    expect(offNotes(doc)).toEqual([
+      "Contact s3 is 0.4 m outside its body's outline: it acts there, as if joined to the body by a rigid arm. If it bears on the body, move it onto the outline.",
+      "Contact s4 is 0.4 m outside its body's outline: it acts there, as if joined to the body by a rigid arm. If it bears on the body, move it onto the outline.",
+    ]);
+    // 0.4 m / 0.3048 m/ft = 1.312 ft
+    expect(offNotes(doc, "US")[0]).toMatch(/^Contact s3 is 1\.312 ft outside/);
   });
 });
 

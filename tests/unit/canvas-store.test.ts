@@ -66,6 +66,21 @@ describe("editor store", () => {
     expect(store.getState().notice).toBe("Saved as v4.");
   });
 
+  it("a finished drag makes \"Undid: …\" old news too; a press that moved nothing leaves it", () => {
+    const store = createEditorStore({ sketch: sketch() });
+    store.getState().apply(c(moveElement({ ids: ["s1"], delta: [1, 0] })));
+    store.getState().undo();
+    expect(store.getState().notice).toBe("Undid: Move s1");
+    store.getState().beginGesture("Turn");
+    store.getState().endGesture();
+    expect(store.getState().notice).toBe("Undid: Move s1");
+    store.getState().beginGesture("Move s2");
+    store.getState().updateGesture([c(moveElement({ ids: ["s2"], delta: [-0.5, 0] }))]);
+    store.getState().endGesture();
+    expect(store.getState().past.map((e) => e.label)).toEqual(["Move s2"]);
+    expect(store.getState().notice).toBeNull();
+  });
+
   it("merges typing in one field into one undo step", () => {
     const store = createEditorStore({ sketch: sketch() });
     for (const v of ["1", "12", "12 ", "12 k", "12 kN"]) store.getState().apply(c(setField({ id: "s2", field: "mu", value: v })), { coalesce: "s2.mu#1" });
