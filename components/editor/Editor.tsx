@@ -167,6 +167,27 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
       }),
     [stores],
   );
+  // setting the underlay's scale on a narrow screen: the panel steps aside while the two marks are
+  // tapped on the drawing, and comes back, with the focus at the distance, once both are down
+  const panelOpenNow = useRef(panelOpen);
+  useEffect(() => {
+    panelOpenNow.current = panelOpen;
+  }, [panelOpen]);
+  useEffect(() => {
+    let aside = false;
+    return stores.editor.subscribe((s) => {
+      const picking = s.tool.kind === "calibrate" && s.tool.points.length < 2;
+      if (picking && panelOpenNow.current && window.matchMedia?.("(max-width: 1179px)").matches) {
+        aside = true;
+        setPanelOpen(false);
+      } else if (!picking && aside) {
+        aside = false;
+        setPanelOpen(true);
+        // the distance field (or the scale's button) mounted while the panel was hidden
+        requestAnimationFrame(() => document.querySelector<HTMLElement>("#underlay-distance, [data-testid=underlay-calibrate]")?.focus());
+      }
+    });
+  }, [stores]);
   // the notice line speaks for the tool in use: a change of tool takes its words away
   useEffect(() => noticesFollowTool(stores.editor), [stores]);
   const [keysOpen, setKeysOpen] = useState(false);

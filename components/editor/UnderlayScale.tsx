@@ -1,7 +1,7 @@
 "use client";
 // Setting the underlay's scale: click two marks on the image, type the real distance between
 // them with a unit ("2.4 m", "96 in"); the solver's expression reader turns it into metres.
-import { useEffect, useRef, useState } from "react";
+import { useState } from "react";
 import { useEditor, useStores } from "@/canvas/context";
 import { calibrateUnderlay } from "@/canvas/commands/underlay";
 import type { Command } from "@/canvas/commands/define";
@@ -26,29 +26,6 @@ export function underlayFieldError(message: string, kind: "length" | "angle"): s
   return suggestUnitsFor(message, kind).replace(/^unknown name "([^"]+)": define it as a parameter or (use a unit such as [^;]+)$/, 'unknown name "$1": $2 (the underlay takes values with their units, not the sketch\'s parameters)');
 }
 
-/**
- * Below 1180 px the properties panel lies over the drawing (Editor.tsx), so the marks could not be
- * clicked on it: while they are picked the panel steps aside (through its toolbar toggle), and
- * comes back once both are down, for the distance (or when the picking stops).
- */
-function usePanelAsideWhilePicking(picking: boolean) {
-  const putAside = useRef(false);
-  useEffect(() => {
-    const toggle = document.querySelector<HTMLButtonElement>('[data-testid="toggle-properties"]');
-    if (!toggle || typeof window.matchMedia !== "function" || !window.matchMedia("(max-width: 1179px)").matches) return;
-    const open = toggle.getAttribute("aria-expanded") === "true";
-    if (picking && open) {
-      putAside.current = true;
-      toggle.click();
-    } else if (!picking && putAside.current) {
-      putAside.current = false;
-      if (!open) toggle.click();
-      // the distance field (or the scale's button) mounted while the panel was hidden: take the focus there now
-      requestAnimationFrame(() => document.querySelector<HTMLElement>("#underlay-distance, [data-testid=underlay-calibrate]")?.focus());
-    }
-  }, [picking]);
-}
-
 export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: boolean }) {
   const { editor } = useStores();
   const tool = useEditor((s) => s.tool);
@@ -57,7 +34,6 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
   const calibrating = tool.kind === "calibrate";
   const marks = calibrating ? tool.points : [];
   const reading = marks.length === 2 ? readScale(marks[0], marks[1], text) : null;
-  usePanelAsideWhilePicking(calibrating && marks.length < 2);
 
   const start = () => {
     setText(typeof u.calibration?.distance === "string" ? u.calibration.distance : u.calibration ? `${u.calibration.distance} m` : "");
