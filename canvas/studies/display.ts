@@ -61,7 +61,8 @@ export function parseTarget(text: string, component: QuantityComponent, system: 
     const si = toFieldNumber(v, displayKind(component));
     return { si, shown: `${formatNumber(toDisplay(si, component, system, largest), 4)}${unit ? ` ${unit}` : ""}` };
   }
-  return { si: fromDisplay(v, component, system, largest), shown: `${v}${unit ? ` ${unit}` : ""}` };
+  // a plain number is said as typed, its sign the true minus the tables and plots write
+  return { si: fromDisplay(v, component, system, largest), shown: `${String(v).replace(/^-/, "−")}${unit ? ` ${unit}` : ""}` };
 }
 
 /** Only a margin crossing zero means something happened: a contact lifts, a tie goes slack, or

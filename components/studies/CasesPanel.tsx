@@ -4,7 +4,7 @@
 // of all of them at once: reactions per case with the governing case, the envelope with each
 // support's design load, and the factors of safety against overturning and sliding.
 import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState } from "react";
-import { caseInputErrors, caseWarnings, combinationWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
+import { caseInputErrors, caseWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
 import { errorPlace } from "@/components/results/errorPlace";
 import type { CaseFile, CombinationFile, SketchFile } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
@@ -12,7 +12,7 @@ import { caseRemovalEffects, removeCase, removeCombination, setStudy } from "@/c
 import { useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
-import { formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms, type Parsed } from "./casesText";
+import { combinationWarningWords, formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms, type Parsed } from "./casesText";
 import { CaseTables } from "./CaseTables";
 import { SideScroll } from "./ReportTable";
 
@@ -337,7 +337,7 @@ export function CasesPanel() {
                     ))}
                     <span>(blank: the sketch&apos;s; a factored set is usually checked against 1.0)</span>
                   </div>
-                  {combinationWarnings(sketch, k).map((w) => (
+                  {combinationWarningWords(sketch, k).map((w) => (
                     <p key={w} className="col-span-full text-[11.5px] font-medium text-caution" role="note">
                       ⚠ {w}
                     </p>

@@ -43,6 +43,7 @@ const COMPONENT_WORDS: Partial<Record<QuantityComponent, string>> = {
   fy: "Fy",
   m: "moment",
   frictionMargin: "friction margin",
+  t: "tangential force t",
 };
 const COMPONENT_TITLES: Partial<Record<QuantityComponent, string>> = {
   margin: "The normal force while bearing (taut); below zero once the contact lifts (the tie goes slack)",
@@ -74,6 +75,33 @@ export function overridesIn(sketch: SketchFile, rows: readonly LimitEverywhere[]
   });
 }
 
+/** Ticked on a new sweep: each contact's and tie's margin, the friction margin of a contact with
+ *  friction, and the resultant of every other support; its components, a contact's own tangential
+ *  force and resultant, and a moment are there to tick. */
+export function tickedByDefault(q: QuantitySpec, supports: SketchFile["supports"], withFriction: ReadonlySet<string>): boolean {
+  const kind = supports.find((s) => s.id === q.support)?.kind;
+  if (q.component === "margin") return true;
+  if (q.component === "frictionMargin") return withFriction.has(q.support);
+  return q.component === "resultant" && kind !== "contact" && kind !== "tie";
+}
+
+/** A run of "In every case" that never reaches the target: which side of it the quantity stays on,
+ *  so a margin already below zero over the whole range (lifted, or slipping, all along) is not read
+ *  as one that never gets there. */
+export function noCrossingWords(result: { min: number; max: number }, targetSI: number, target: string): string {
+  if (result.max < targetSI) return `no crossing in this range: below ${target} throughout`;
+  if (result.min > targetSI) return `no crossing in this range: above ${target} throughout`;
+  return "no crossing in this range";
+}
+
+/** " Surge stays below 0 kN over the whole range." for the runs that never reach the target from
+ *  below (a margin already past zero all along), said after which run reaches it first. */
+export function sidesWords(rows: readonly LimitEverywhere[], targetSI: number, target: string): string {
+  const below = rows.filter((r) => !("error" in r.result) && !r.result.found && r.result.max < targetSI).map((r) => r.name);
+  if (!below.length) return "";
+  return ` ${andList(below)} ${below.length > 1 ? "stay" : "stays"} below ${target} over the whole range.`;
+}
+
 export function SweepPanel() {
   const { editor } = useStores();
   const sketch = useEditor((s) => s.sketch);
@@ -83,12 +111,20 @@ export function SweepPanel() {
     const out: Array<{ spec: QuantitySpec; label: string; title: string }> = [];
     const add = (s: SketchFile["supports"][number], component: QuantityComponent) =>
       out.push({ spec: { support: s.id, component }, label: `${s.label?.trim() || s.id}: ${COMPONENT_WORDS[component]}`, title: `${s.label ? `${s.label} — ` : ""}${COMPONENT_TITLES[component] ?? COMPONENT_WORDS[component]}` });
+    // each reaction can be plotted (issue: "plot each reaction"); the margins and the resultants
+    // of pins, rollers and fixed supports are ticked by default (see `picked`), the rest on request
     for (const s of sketch.supports) {
       if (s.kind === "contact" || s.kind === "tie") {
         add(s, "margin");
         if (s.kind === "contact" && s.mu !== undefined) add(s, "frictionMargin");
+        if (s.kind === "contact") {
+          add(s, "t");
+          add(s, "resultant");
+        }
       } else {
         add(s, "resultant");
+        add(s, "fx");
+        add(s, "fy");
         if (s.kind === "fixed") add(s, "m");
       }
     }
@@ -128,7 +164,7 @@ export function SweepPanel() {
   // before it tips as often as not: "when does it start to move?" needs both) and the resultants
   const [picked, setPicked] = useState<string[]>(() => {
     const withFriction = new Set(sketch.supports.filter((s) => s.kind === "contact" && s.mu !== undefined && Number(s.mu) !== 0).map((s) => s.id));
-    return (saved?.quantities ?? choices.map((c) => c.spec).filter((q) => q.component !== "m" && (q.component !== "frictionMargin" || withFriction.has(q.support)))).map((q) => `${q.support}:${q.component}`);
+    return (saved?.quantities ?? choices.map((c) => c.spec).filter((q) => tickedByDefault(q, sketch.supports, withFriction))).map((q) => `${q.support}:${q.component}`);
   });
   const [data, setData] = useState<SweepData | null>(null);
   /** what the plot shows was run on, and with which settings: the limit finder searches the same */
@@ -150,6 +186,8 @@ export function SweepPanel() {
     rows: LimitEverywhere[];
     label: string;
     target: string;
+    /** the target in SI, to say which side of it a run that never reaches it stays on */
+    targetSI: number;
     /** the runs where it comes first: more than one when they tie */
     first: string[];
     firstValue: number | null;
@@ -286,6 +324,7 @@ export function SweepPanel() {
           rows,
           label: describeQuantity(q, names),
           target: tgt.shown,
+          targetSI: tgt.si,
           first: first ? first.tied.map((r) => r.id) : [],
           firstValue: first?.value ?? null,
           unit: unitText,
@@ -590,6 +629,8 @@ export function SweepPanel() {
                     : everywhere.first.length === 1
                       ? `The ${everywhere.label} reaches ${everywhere.target} first in ${everywhere.rows.find((r) => r.id === everywhere.first[0])!.name}.`
                       : `The ${everywhere.label} reaches ${everywhere.target} in none of them in this range.`}
+                  {/* a run already past the target over the whole range reaches it nowhere, so is not "first": said apart */}
+                  {sidesWords(everywhere.rows, everywhere.targetSI, everywhere.target)}
                 </p>
                 <table className="mt-0.5 text-[12px]">
                   <caption className="sr-only">
@@ -610,7 +651,7 @@ export function SweepPanel() {
                             ? `not solved: ${r.result.error}`
                             : r.result.found
                               ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — first (a tie)" : " — first") : ""}`
-                              : "no crossing in this range"}
+                              : noCrossingWords(r.result, everywhere.targetSI, everywhere.target)}
                         </td>
                       </tr>
                     ))}

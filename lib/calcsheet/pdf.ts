@@ -5,6 +5,7 @@ import PDFDocument from "pdfkit";
 import SVGtoPDF from "svg-to-pdfkit";
 import { renderSketchSvg } from "@/canvas/render/svg";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
+import { parameterWords } from "@/canvas/studies/display";
 import {
   ASSUMPTIONS,
   CAUTIONS,
@@ -23,7 +24,8 @@ import {
   type UnitSystem,
   type SolveResult,
 } from "@/solver";
-import { caseWarnings, combinationWarnings } from "@/solver/cases";
+import { caseWarnings } from "@/solver/cases";
+import { combinationWarningWords } from "@/components/studies/casesText";
 import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
 import { defaultMomentPoint } from "@/components/results/handCheck";
@@ -213,13 +215,14 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       const f = c.flowFactor;
       const flow = f !== undefined && f !== 1 ? [`flow factor ${f} (every port's ṁ and V × ${f}, momentum flux × ${Number((f * f).toPrecision(4))})`] : [];
       const bits = [...over, ...fac, ...flow, ...(c.onlyInCombinations ? ["a load case, solved only in the combinations that name it"] : [])];
-      para(`${c.id === twin ? twinName(c.name) : c.name}: ${bits.length ? bits.join(", ") : "as drawn"}`, 8.5, INK);
+      // the case that is the sketch as drawn is named so ("Duty, as drawn"), so its changes are none, not "as drawn" twice
+      para(`${c.id === twin ? twinName(c.name) : c.name}: ${bits.length ? bits.join(", ") : c.id === twin ? "no changes to the sketch" : "as drawn"}`, 8.5, INK);
       for (const w of caseWarnings(parsed.file, c)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
     for (const k of parsed.file.combinations ?? []) {
       const own = k.stability ? Object.entries(k.stability).map(([what, v]) => `${v} against ${what}`) : [];
       para(`${k.name}: ${combinationTerms(k, parsed.file.cases)}, solved as one factored load set${own.length ? `; required factors of safety ${own.join(", ")}` : ""}`, 8.5, INK);
-      for (const w of combinationWarnings(parsed.file, k)) para(`Warning: ${w}`, 8.5, ACCENT);
+      for (const w of combinationWarningWords(parsed.file, k)) para(`Warning: ${w}`, 8.5, ACCENT);
     }
   }
 
@@ -261,11 +264,11 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     const caseName = sw.case ? (parsed.file.cases?.find((c) => c.id === sw.case)?.name ?? sw.case) : null;
     const combination = sw.combination ? parsed.file.combinations?.find((k) => k.id === sw.combination) : undefined;
     const on = sw.combination ? ` — combination ${combination?.name ?? sw.combination}` : caseName ? ` — case ${caseName}` : " — as drawn";
-    heading(`Sweep of ${sw.parameter}${on}`);
+    heading(`Sweep of ${parameterWords(sw.parameter)}${on}`);
     // a case that sets the swept parameter itself: the sweep's values stand in for the case's
     const overridden = sw.case ? parsed.file.cases?.find((c) => c.id === sw.case)?.parameters?.[sw.parameter] : undefined;
     if (overridden !== undefined) para(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`, 8.5, INK);
-    if (combination) para(`Each point is solved as the combination's factored load set (${combinationTerms(combination, parsed.file.cases)}), with the sweep's value of ${sw.parameter} in every one of its cases.`, 8.5, INK);
+    if (combination) para(`Each point is solved as the combination's factored load set (${combinationTerms(combination, parsed.file.cases)}), with the sweep's value of ${parameterWords(sw.parameter)} in every one of its cases.`, 8.5, INK);
     try {
       const { charts, markers, states } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions), family);
       for (const spec of charts) {

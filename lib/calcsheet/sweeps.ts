@@ -4,7 +4,7 @@
 // finder (which a version's page lists under its own plot too). Each quantity is read as the
 // Sweep tab reads it (`sweptQuantity`): a contact's friction margin is a gap where it is off the
 // ground or its body is not held, and the sheet says where, in the tab's words.
-import { displayKind, displayUnit, largestByKind, marksZero, sweepStateLines, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestByKind, marksZero, parameterWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { runSweep } from "@/canvas/studies/run";
 import { findLimitWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
 import { describeQuantity, type QuantitySpec } from "@/solver/quantity";
@@ -21,10 +21,10 @@ const KIND_WORDS = { force: "forces", moment: "moments", ratio: "ratios" } as co
 
 /** What a margin reaching zero means, in the trade's words; a noun, since the sweep may cross
  *  either way (a contact lifts off, or comes back into bearing). */
-function crossingEvent(q: QuantitySpec, kind: string | undefined): { noun: string; why: string } {
-  if (q.component === "frictionMargin") return { noun: "slip", why: "μ·n − |t| reaches zero: the friction is used up" };
-  if (kind === "tie") return { noun: "slack", why: "its tension reaches zero" };
-  return { noun: "lift-off", why: "its normal force reaches zero" };
+function crossingEvent(q: QuantitySpec, kind: string | undefined): { noun: string; why: string; past: string } {
+  if (q.component === "frictionMargin") return { noun: "slip", why: "μ·n − |t| reaches zero: the friction is used up", past: "slipping" };
+  if (kind === "tie") return { noun: "slack", why: "its tension reaches zero", past: "slack" };
+  return { noun: "lift-off", why: "its normal force reaches zero", past: "lifted" };
 }
 
 export interface SweepMarker {
@@ -52,7 +52,7 @@ export function sweepMarkers(file: SketchFile, sw: SweepFile, quantities: Quanti
     const name = names[q.support] ?? q.support;
     // the tolerance said only where it shows in the figure given, never as the search's noise ("±8e-8 deg")
     const precision = limitPrecisionWords(lim.tolerance ?? limitTolerance([sw.from, sw.to]), lim.unit, [lim.value]);
-    return [{ x: lim.value, label: `${name}: ${event.noun} at ${at}`, words: `${name}: ${event.noun} (${event.why}) at ${sw.parameter} = ${at} (${precision})` }];
+    return [{ x: lim.value, label: `${name}: ${event.noun} at ${at}`, words: `${name}: ${event.noun} (${event.why}) at ${parameterWords(sw.parameter)} = ${at} (${precision})` }];
   });
 }
 
@@ -80,6 +80,9 @@ export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: Qua
       const f = r.result;
       // the run's name, a dash, then what it comes to: names hold commas and colons of their own
       if ("error" in f) return `${r.name} — not solved`;
+      // a margin below zero over the whole range has no crossing, but is past it all along: never
+      // said as "none", which reads as safe
+      if (!f.found && f.max < 0) return `${r.name} — none in the range: ${event.past} throughout (its margin stays below zero)`;
       if (!f.found || at[i] === null) return `${r.name} — none in the range`;
       const mark = everyOne || !first.tied.includes(r) ? "" : tie ? " (first, a tie)" : " (first)";
       return `${r.name} — ${limitWithUnit(at[i], f.unit)}${mark}`;
@@ -127,8 +130,8 @@ export function sweepCharts(
     const unit = family && kind !== "ratio" ? family[kind] : displayUnit(mine[0].component, units, largest);
     const shown = (si: number, q: QuantitySpec) => (family && kind !== "ratio" ? convert(si, kind, units, unit).value : toDisplay(si, q.component, units, largest));
     return {
-      title: `${sw.parameter} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)} ${prettyUnit(data.unit)}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
-      xLabel: `${sw.parameter}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`,
+      title: `${parameterWords(sw.parameter)} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)} ${prettyUnit(data.unit)}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
+      xLabel: `${parameterWords(sw.parameter)}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`,
       yLabel: unit || "ratio",
       series: mine.map((q, k) => ({
         label: describeQuantity(q, names),

@@ -54,10 +54,15 @@ describe("the limit finder on the thrust stand", () => {
     const user = userEvent.setup();
     mountResultsDock(thrustStandOnSlope());
     await user.click(screen.getByRole("tab", { name: "Sweep" }));
-    // the plot: the front pin's resultant first, then the rear pad's margin
+    // the plot: the front pin's resultant first, then the rear pad's margin; each reaction's
+    // components can be ticked too
     expect(screen.getAllByRole("checkbox").map((c) => [c.closest("label")?.textContent, (c as HTMLInputElement).checked])).toEqual([
       ["front pin: resultant", true],
+      ["front pin: Fx", false],
+      ["front pin: Fy", false],
       ["rear pad: margin", true],
+      ["rear pad: tangential force t", false],
+      ["rear pad: resultant", false],
     ]);
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     expect((await screen.findByTestId("crossings")).textContent).toContain("margin at rear pad crosses zero between slope");

@@ -198,7 +198,7 @@ describe("combinations that count a load group twice", () => {
       ...load("fire-monitor-trailer"),
       version: 3,
       cases: [
-        { id: "normal", name: "Normal" },
+        { id: "normal", name: "Normal duty" },
         { id: "test", name: "Test", parameters: { Q: "2500 gpm" } },
         { id: "dead", name: "Dead", factors: { flow: 0 } },
         { id: "flow", name: "Flow", factors: { dead: 0 } },
@@ -213,9 +213,10 @@ describe("combinations that count a load group twice", () => {
     await user.click(screen.getByRole("tab", { name: "Cases" }));
     const bad = container.querySelector("[data-combination=bad]")!;
     const notes = within(bad as HTMLElement).getAllByRole("note").map((n) => n.textContent);
-    // the weights 1.2 + 1.5 = 2.7 times, the flow too
-    expect(notes[0]).toMatch(/^⚠ Load group "dead" \(the weights\) is in normal \(× 1\.2\) and test \(× 1\.5\): it is counted 2\.7 times\./);
-    expect(notes[1]).toMatch(/^⚠ Load group "flow" is in normal \(× 1\.2\) and test \(× 1\.5\)/);
+    // the weights 1.2 + 1.5 = 2.7 times, the flow too; the cases named as the table names them
+    // (a case's id stays what it was made as, "normal", when it is renamed "Normal duty")
+    expect(notes[0]).toMatch(/^⚠ Load group "dead" \(the weights\) is in Normal duty \(× 1\.2\) and Test \(× 1\.5\): it is counted 2\.7 times\./);
+    expect(notes[1]).toMatch(/^⚠ Load group "flow" is in Normal duty \(× 1\.2\) and Test \(× 1\.5\)/);
     expect(within(container.querySelector("[data-combination=good]") as HTMLElement).queryAllByRole("note")).toHaveLength(0);
   });
 });

@@ -114,7 +114,8 @@ describe("calc sheet PDF", () => {
     expect(ot && "factor" in ot ? ot.factor : 2).toBeLessThan(1.5);
     // (prose is set without kerning, so "1.497," reads back as written)
     expect(text).toContain("• Normal — factor of safety against overturning about rear stabiliser leg 1.497, below the required 1.5");
-    expect(text).toContain('Warning: Load group "dead" (the weights) is in normal (× 1.2) and more (× 1.5): it is counted 2.7 times.');
+    // the cases by their names, as the cases table and the Cases tab name them (not their ids)
+    expect(text).toContain('Warning: Load group "dead" (the weights) is in Normal (× 1.2) and More flow (× 1.5): it is counted 2.7 times.');
     // the envelope names the case of each max and min; the cases table marks the governing cells by shape
     expect(text).toContain("Case of max");
     expect(text).toContain("Governing case");

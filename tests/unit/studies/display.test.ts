@@ -1,7 +1,7 @@
 // Units of the swept quantities (a moment is a moment, not a force) and which lines get their
 // zero crossings marked (margins only).
 import { describe, expect, it } from "vitest";
-import { displayUnit, fromDisplay, toDisplay } from "@/canvas/studies/display";
+import { displayUnit, fromDisplay, parseTarget, toDisplay } from "@/canvas/studies/display";
 import { runSweep } from "@/canvas/studies/run";
 import { chartRows } from "@/components/studies/SweepChart";
 import { box, expectRel, sketch } from "../solver/helpers";
@@ -90,5 +90,12 @@ describe("sweep of a moment", () => {
     expect(d.crossings[0].quantity).toBe(0);
     expect(d.crossings[0].between[0]).toBeLessThanOrEqual(2);
     expect(d.crossings[0].between[1]).toBeGreaterThanOrEqual(2);
+  });
+});
+
+describe("the limit finder's target, said back", () => {
+  it("writes a negative plain number with the true minus, as the tables do, and keeps its digits", () => {
+    expect(parseTarget("-4", "fx", "SI", 5000)).toEqual({ si: -4000, shown: "−4 kN" });
+    expect(parseTarget("0.5", "margin", "SI", 5000)).toEqual({ si: 500, shown: "0.5 kN" });
   });
 });
