@@ -95,7 +95,6 @@ export function ReportTable({
 }) {
   const csvName = useCsvName();
   const headingId = useId();
-  const captionId = useId();
   const shown = table.columns.map((c, i) => ({ c, i })).filter(({ c }) => !groupBy?.includes(c.key));
   const groups = groupBy?.length ? groupRows(table, groupBy) : [{ label: "", rows: table.rows.map((_, i) => i) }];
   const notes = table.notes?.map((n) => (
@@ -144,13 +143,14 @@ export function ReportTable({
       </div>
       {/* outside the sideways scroll: a key to the table is read whole, however narrow the panel */}
       {caption && (
-        <p id={captionId} className="mb-1 text-[11.5px] text-ink-faint" data-testid={testId ? `${testId}-caption` : undefined}>
+        <p aria-hidden="true" className="mb-1 text-[11.5px] text-ink-faint" data-testid={testId ? `${testId}-caption` : undefined}>
           {caption}
         </p>
       )}
       {notesAbove && notes}
       <SideScroll>
-          <table className="num w-full border-collapse text-[12px]" data-testid={testId} aria-labelledby={caption ? undefined : headingId} aria-describedby={caption ? captionId : undefined}>
+          <table className="num w-full border-collapse text-[12px]" data-testid={testId} aria-labelledby={caption ? undefined : headingId}>
+            {/* the caption names the table for a screen reader; the same words above are for the eye only, so they are not said twice */}
             {caption && <caption className="sr-only">{caption}</caption>}
             <thead>
               <tr className="border-b border-rule text-[11px] text-ink-faint">
