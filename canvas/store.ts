@@ -96,6 +96,8 @@ export const READ_ONLY_NOTICE = "Read only — your role may not edit this sketc
 export type EditorStore = StoreApi<EditorState>;
 
 const run = (sketch: SketchFile, cmd: Command<unknown>) => cmd.def.run(sketch, cmd.args);
+/** "Undid: …" speaks of the step before the newest: a new edit (a command or a finished drag) makes it old news. */
+const isHistoryNotice = (notice: string | null | undefined) => !!notice && (notice.startsWith("Undid: ") || notice.startsWith("Redid: "));
 
 export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | "view" | "units" | "snap">> = {}): EditorStore {
   return createStore<EditorState>()(
@@ -139,8 +141,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.revision += 1;
           if (c.def.replacesSketch) d.fitRequest += 1;
           if (!c.def.undoable) return;
-          // "Undid: …" speaks of the step before this one: a new edit makes it old news
-          if (d.notice?.startsWith("Undid: ") || d.notice?.startsWith("Redid: ")) d.notice = null;
+          if (isHistoryNotice(d.notice)) d.notice = null;
           const top = d.past[d.past.length - 1];
           if (opts?.coalesce && top && top.coalesce === opts.coalesce && d.future.length === 0) {
             if (backToStart) {
@@ -221,8 +222,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
         set((d) => {
           d.gesture = null;
           if (s.sketch === g.origin) return;
-          // a finished drag is a new edit, as `apply`'s are: "Undid: …" is old news
-          if (d.notice?.startsWith("Undid: ") || d.notice?.startsWith("Redid: ")) d.notice = null;
+          if (isHistoryNotice(d.notice)) d.notice = null;
           d.past.push({ label: g.label, before: g.origin, after: s.sketch, selectionBefore: g.selection, selectionAfter: s.selection });
           if (d.past.length > HISTORY_LIMIT) d.past.splice(0, d.past.length - HISTORY_LIMIT);
           d.future = [];

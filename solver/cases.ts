@@ -326,11 +326,11 @@ export function caseWarnings(file: SketchFile, c: CaseFile, groups: readonly str
 }
 
 /** Words for a combination's overlaps, one sentence a group (empty when there are none). */
-export function combinationWarnings(file: SketchFile, combination: CombinationFile): string[] {
+export function combinationWarnings(file: SketchFile, combination: CombinationFile, caseName: (id: string) => string = (id) => id): string[] {
   const words = (g: string) => (g === DEFAULT_GROUPS.weight ? `"${g}" (the weights)` : `"${g}"`);
   const n = (x: number) => Number(x.toPrecision(6));
   return combinationOverlaps(file, combination).map(
     (o) =>
-      `Load group ${words(o.group)} is in ${o.terms.map((t) => `${t.case} (× ${n(t.factor)})`).join(" and ")}: it is counted ${n(o.total)} times. Give each case of a combination its own load groups (set the others to 0 in the case) so each load is counted once.`,
+      `Load group ${words(o.group)} is in ${o.terms.map((t) => `${caseName(t.case)} (× ${n(t.factor)})`).join(" and ")}: it is counted ${n(o.total)} times. Give each case of a combination its own load groups (set the others to 0 in the case) so each load is counted once.`,
   );
 }

@@ -154,7 +154,7 @@ export function strokesOf(prims: readonly Prim[]): Segment[] {
 }
 
 /** Whether the segment a–b crosses the box (Liang–Barsky clipping). */
-function segmentHits(a: Pt, b: Pt, box: Box): boolean {
+export function segmentHits(a: Pt, b: Pt, box: Box): boolean {
   let t0 = 0;
   let t1 = 1;
   const dx = b[0] - a[0];

@@ -2,12 +2,11 @@
 // the result's labels and arrows (the weight's arrow starts at the centre of gravity, a common P).
 // Pure: screen pixels in, primitives out.
 import { REACTION } from "./palette";
+import { boxesOverlap, segmentHits, type Box } from "./labels";
 import { textExtent, type Prim, type Pt } from "./prims";
 
 export const MOMENT_POINT_WORDS = "moments about P";
 const SIZE = 10.5;
-
-type Box = { x0: number; y0: number; x1: number; y1: number };
 
 /** Where the words may go about P (px): right of it above, below, then left of it, then farther out. */
 const PLACES: Array<{ dx: number; dy: number; align: "left" | "right" }> = [
@@ -21,41 +20,16 @@ const PLACES: Array<{ dx: number; dy: number; align: "left" | "right" }> = [
   { dx: 0, dy: 26, align: "right" },
 ];
 
-const overlaps = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
-
-/** Whether segment pq passes through the box (Liang–Barsky clipping). */
-function crosses(p: Pt, q: Pt, b: Box): boolean {
-  const d = [q[0] - p[0], q[1] - p[1]];
-  let t0 = 0;
-  let t1 = 1;
-  for (const [den, num] of [
-    [-d[0], p[0] - b.x0],
-    [d[0], b.x1 - p[0]],
-    [-d[1], p[1] - b.y0],
-    [d[1], b.y1 - p[1]],
-  ]) {
-    if (den === 0) {
-      if (num < 0) return false;
-    } else {
-      const t = num / den;
-      if (den < 0) t0 = Math.max(t0, t);
-      else t1 = Math.min(t1, t);
-      if (t0 > t1) return false;
-    }
-  }
-  return true;
-}
-
 /** How much of `avoid` a box at this place covers: a label counts more than a stroke. */
 function cost(box: Box, avoid: readonly Prim[]): number {
   let c = 0;
   for (const p of avoid) {
-    if (p.t === "text") c += overlaps(box, textExtent(p)) ? 3 : 0;
-    else if (p.t === "circle") c += overlaps(box, { x0: p.c[0] - p.r, y0: p.c[1] - p.r, x1: p.c[0] + p.r, y1: p.c[1] + p.r }) ? 1 : 0;
+    if (p.t === "text") c += boxesOverlap(box, textExtent(p)) ? 3 : 0;
+    else if (p.t === "circle") c += boxesOverlap(box, { x0: p.c[0] - p.r, y0: p.c[1] - p.r, x1: p.c[0] + p.r, y1: p.c[1] + p.r }) ? 1 : 0;
     else {
       const n = p.closed ? p.pts.length : p.pts.length - 1;
       for (let i = 0; i < n; i++) {
-        if (crosses(p.pts[i], p.pts[(i + 1) % p.pts.length], box)) {
+        if (segmentHits(p.pts[i], p.pts[(i + 1) % p.pts.length], box)) {
           c += 1;
           break;
         }

@@ -2,9 +2,8 @@
 //   parameter changes:  "theta = 30 deg; Q = 1500 gpm"
 //   group factors:      "dead 1.2, flow 1.5"   (a group, then its factor)
 //   combination terms:  "1.2 normal + 1.5 test"  (a factor, then a case id)
-import { combinationOverlaps } from "@/solver/cases";
+import { combinationWarnings } from "@/solver/cases";
 import type { CombinationFile, SketchFile } from "@/solver/schema";
-import { DEFAULT_GROUPS } from "@/solver/types";
 
 export type Parsed<T> = { ok: true; value: T } | { ok: false; error: string };
 
@@ -113,13 +112,7 @@ export function idFromName(name: string, taken: readonly string[]): string {
 }
 
 /** A combination's load groups counted more than once, one sentence a group, naming each case as
- *  the table does (by its name; the solver's own words give ids, which a renamed case no longer shows). */
+ *  the table does (by its name; ids, the solver's default, are not shown once a case is renamed). */
 export function combinationWarningWords(file: SketchFile, combination: CombinationFile): string[] {
-  const words = (g: string) => (g === DEFAULT_GROUPS.weight ? `"${g}" (the weights)` : `"${g}"`);
-  const n = (x: number) => Number(x.toPrecision(6));
-  const name = (id: string) => file.cases?.find((c) => c.id === id)?.name.trim() || id;
-  return combinationOverlaps(file, combination).map(
-    (o) =>
-      `Load group ${words(o.group)} is in ${o.terms.map((t) => `${name(t.case)} (× ${n(t.factor)})`).join(" and ")}: it is counted ${n(o.total)} times. Give each case of a combination its own load groups (set the others to 0 in the case) so each load is counted once.`,
-  );
+  return combinationWarnings(file, combination, (id) => file.cases?.find((c) => c.id === id)?.name.trim() || id);
 }
