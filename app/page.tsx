@@ -49,7 +49,7 @@ export default function HomePage() {
                 body tips or a contact slides.
               </p>
               <div className="mt-8 flex flex-wrap gap-3">
-                <Link href="/sketches/new" className="rounded-md bg-accent px-5 py-2.5 font-medium text-white hover:bg-accent-deep">
+                <Link href="/sketches/new" className="rounded-md bg-accent px-5 py-2.5 font-medium text-on-accent hover:bg-accent-deep">
                   Try a sketch — no account needed
                 </Link>
                 <Link href="/sign-in" className="rounded-md border border-ink/20 bg-paper-card px-5 py-2.5 font-medium hover:border-ink/40">
@@ -57,7 +57,7 @@ export default function HomePage() {
                 </Link>
               </div>
             </div>
-            <div className="rounded-lg border border-rule bg-paper-card p-4 shadow-[0_1px_0_#cfc8b8]">
+            <div className="paper-sheet rounded-lg border border-rule bg-paper-card p-4 shadow-[0_1px_0_rgb(var(--rule))]">
               <HeroDiagram />
               <p className="mt-2 border-t border-rule-soft pt-2 text-xs text-ink-faint">
                 Solid arrows are given loads, dashed the momentum flux, double lines the reactions found.

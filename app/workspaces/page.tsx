@@ -23,7 +23,7 @@ export default async function WorkspacesPage() {
           <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
             {workspaces.map((w) => (
               <li key={w.id}>
-                <Link href={`/workspaces/${w.id}`} className="block h-full rounded-lg border border-rule bg-paper-card px-4 py-3.5 shadow-[0_1px_0_#e2dccf] hover:border-ink/40">
+                <Link href={`/workspaces/${w.id}`} className="block h-full rounded-lg border border-rule bg-paper-card px-4 py-3.5 shadow-[0_1px_0_rgb(var(--rule-soft))] hover:border-ink/40">
                   <span className="flex items-start justify-between gap-3">
                     <span className="font-semibold text-ink">{w.name}</span>
                     <RoleBadge role={w.role} />

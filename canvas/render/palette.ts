@@ -1,4 +1,8 @@
-// The drafting palette (tailwind.config.ts) for drawings made outside CSS: canvas and SVG.
+// The drafting palette (tailwind.config.ts, app/globals.css) for drawings made outside CSS: canvas and SVG.
+// A drawing is a light sheet in every theme (the canvas's wrapper, the review drawings and the home page's
+// diagram carry `.paper-sheet`, which keeps the light tokens around them), so these stay the light values.
+// The tray's icons are drawn on the page itself: `.drawn-in-ink` (globals.css) maps these colours onto
+// the theme's tokens there, and tests/unit/theme.test.ts checks it covers every colour a symbol uses.
 export const INK = "#1d2329";
 export const INK_SOFT = "#3d4650";
 export const INK_FAINT = "#5f6974";

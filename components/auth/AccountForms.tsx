@@ -82,7 +82,7 @@ export function ChangePasswordForm() {
         <Field id="repeat-password" type="password" label="New password, again" autoComplete="new-password" value={repeat} onChange={(e) => setRepeat(e.target.value)} error={errors.repeat} />
       </div>
       <label className="flex items-center gap-2 text-sm text-ink-soft">
-        <input type="checkbox" checked={signOutOthers} onChange={(e) => setSignOutOthers(e.target.checked)} className="h-4 w-4 accent-[#1d2329]" />
+        <input type="checkbox" checked={signOutOthers} onChange={(e) => setSignOutOthers(e.target.checked)} className="h-4 w-4 accent-ink" />
         Sign out every other device
       </label>
       <Button type="submit" busy={busy}>
@@ -109,7 +109,7 @@ export function NotificationsForm({ enabled: initial }: { enabled: boolean }) {
   return (
     <div className="space-y-3">
       <label className="flex items-start gap-3 text-sm">
-        <input type="checkbox" checked={enabled} disabled={busy} onChange={(e) => toggle(e.target.checked)} className="mt-0.5 h-4 w-4 accent-[#1d2329]" />
+        <input type="checkbox" checked={enabled} disabled={busy} onChange={(e) => toggle(e.target.checked)} className="mt-0.5 h-4 w-4 accent-ink" />
         <span>
           <span className="font-medium text-ink">E-mail me about my calcs</span>
           <span className="block text-ink-soft">When someone mentions me in a comment, a version waits for my check or my approval, or a version I prepared or checked is returned, approved or withdrawn.</span>

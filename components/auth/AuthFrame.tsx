@@ -26,7 +26,7 @@ export function AuthFrame({ children }: { children: ReactNode }) {
 export function AuthCard({ title, lead, children, foot }: { title: string; lead?: ReactNode; children: ReactNode; foot?: ReactNode }) {
   return (
     <div className="w-full max-w-[420px]">
-      <div className="rounded-lg border border-rule bg-paper-card px-7 py-7 shadow-[0_1px_0_#cfc8b8,0_12px_32px_-18px_rgba(29,35,41,0.35)]">
+      <div className="rounded-lg border border-rule bg-paper-card px-7 py-7 shadow-[0_1px_0_rgb(var(--rule)),0_12px_32px_-18px_rgb(var(--shade)/0.35)]">
         <h1 className="text-2xl font-semibold tracking-tight text-ink">{title}</h1>
         {lead ? <div className="mt-1.5 text-sm leading-relaxed text-ink-soft">{lead}</div> : null}
         <div className="mt-6">{children}</div>

@@ -18,7 +18,7 @@ export function ImportErrorDialog({ problem, onClose }: { problem: ImportProblem
     return () => window.removeEventListener("keydown", key, true);
   }, [onClose]);
   return (
-    <div className="fixed inset-0 z-50 flex items-center justify-center bg-ink/25 px-4">
+    <div className="fixed inset-0 z-50 flex items-center justify-center bg-shade/25 px-4">
       <div role="alertdialog" aria-modal="true" aria-labelledby="import-error-title" aria-describedby="import-error-body" className="w-full max-w-lg rounded-lg border border-rule bg-paper-card p-5 shadow-xl" data-testid="import-error">
         <h2 id="import-error-title" className="text-[15px] font-semibold text-ink">
           “{problem.file}” could not be opened

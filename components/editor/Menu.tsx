@@ -75,7 +75,7 @@ export function Menu({ label, shortLabel, items, testId, wide }: { label: string
           ref={listRef}
           role="menu"
           aria-label={label}
-          className={`absolute left-0 top-9 z-50 ${wide ? "w-80" : "w-60"} rounded-md border border-rule bg-paper-card py-1 shadow-[0_6px_24px_rgba(29,35,41,0.14)]`}
+          className={`absolute left-0 top-9 z-50 ${wide ? "w-80" : "w-60"} rounded-md border border-rule bg-paper-card py-1 shadow-[0_6px_24px_rgb(var(--shade)/0.14)]`}
           onKeyDown={(e) => {
             if (e.key === "ArrowDown") {
               e.preventDefault();

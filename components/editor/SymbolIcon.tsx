@@ -42,5 +42,5 @@ export const SymbolIcon = memo(function SymbolIcon({ kind, friction = false, pol
   const h = box.maxY - box.minY + 6;
   const side = Math.max(w, h);
   const vb = `${box.minX - 3 - (side - w) / 2} ${box.minY - 3 - (side - h) / 2} ${side} ${side}`;
-  return <svg width={size} height={size} viewBox={vb} aria-hidden="true" focusable="false" dangerouslySetInnerHTML={{ __html: svg }} />;
+  return <svg width={size} height={size} viewBox={vb} className="drawn-in-ink" aria-hidden="true" focusable="false" dangerouslySetInnerHTML={{ __html: svg }} />;
 });

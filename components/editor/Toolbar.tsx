@@ -110,8 +110,8 @@ export function Toolbar({
           <path d="M3 13h22" stroke="currentColor" strokeWidth="2.2" strokeLinecap="round" />
           <path d="M14 14l-4 7h8z" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinejoin="round" />
           <path d="M7 21h14" stroke="currentColor" strokeWidth="1.2" />
-          <rect x="19" y="6.5" width="5" height="5" fill="#b4462b" rx="0.5" />
-          <path d="M8 10V4.5M8 4.5l-2 2.3M8 4.5l2 2.3" stroke="#1f5f7a" strokeWidth="1.5" fill="none" strokeLinecap="round" />
+          <rect x="19" y="6.5" width="5" height="5" className="fill-accent" rx="0.5" />
+          <path d="M8 10V4.5M8 4.5l-2 2.3M8 4.5l2 2.3" className="stroke-reaction" strokeWidth="1.5" fill="none" strokeLinecap="round" />
         </svg>
       </Link>
       {/* which sketch this is stays readable: up to 22rem on wide screens, at least 7rem on narrow

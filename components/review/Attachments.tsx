@@ -27,7 +27,7 @@ export function AttachmentList({ files, onRemove }: { files: Attachment[]; onRem
             title={a.storedType === "application/pdf" ? `Download ${a.name || "the file"} (PDF, ${sizeWords(a.size)})` : `Open ${a.name || "the file"} (${a.width} × ${a.height} px, ${sizeWords(a.size)})`}
           >
             {/* eslint-disable-next-line @next/next/no-img-element -- a private file behind a role check, not a static asset */}
-            <img src={a.thumbnailUrl} alt={a.name ? `Thumbnail of ${a.name}` : "Thumbnail of an attached file"} className="h-[72px] w-full object-contain bg-white" loading="lazy" />
+            <img src={a.thumbnailUrl} alt={a.name ? `Thumbnail of ${a.name}` : "Thumbnail of an attached file"} className="h-[72px] w-full object-contain paper-sheet bg-paper-card" loading="lazy" />
             <span className="block truncate border-t border-rule-soft px-1.5 py-0.5 text-[11px] text-ink-soft">
               {a.storedType === "application/pdf" ? "PDF · " : ""}
               {a.name || "file"}

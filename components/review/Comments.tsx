@@ -98,7 +98,7 @@ function MentionBox({ id, value, onChange, members, placeholder, rows = 3, label
         className="block w-full rounded-md border border-rule bg-paper-card px-3 py-2 text-[13.5px] text-ink outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25"
       />
       {matches.length ? (
-        <ul id={listId} className="absolute left-2 top-full z-20 mt-1 w-56 rounded-md border border-rule bg-paper-card py-1 shadow-[0_6px_24px_rgba(29,35,41,0.14)]" role="listbox" aria-label="Mention a member">
+        <ul id={listId} className="absolute left-2 top-full z-20 mt-1 w-56 rounded-md border border-rule bg-paper-card py-1 shadow-[0_6px_24px_rgb(var(--shade)/0.14)]" role="listbox" aria-label="Mention a member">
           {matches.map((m, i) => (
             <li
               key={m.id}

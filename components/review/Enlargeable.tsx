@@ -49,7 +49,7 @@ export function Enlargeable({ naturalWidth, label, children }: { naturalWidth: n
       ) : null}
       <Dialog open={copy !== null} title={label} onClose={() => setCopy(null)} full testId="enlarged-drawing">
         <p className="text-xs text-ink-soft">At its own size: scroll or drag to move around it.</p>
-        <div ref={pane} className="mt-2 min-h-0 flex-1 overflow-auto rounded-md border border-rule" role="img" aria-label={label}>
+        <div ref={pane} className="paper-sheet mt-2 min-h-0 flex-1 overflow-auto rounded-md border border-rule bg-paper" role="img" aria-label={label}>
           <div className="pointer-events-none" style={{ width: naturalWidth }} dangerouslySetInnerHTML={{ __html: copy ?? "" }} />
         </div>
         <div className="mt-3 flex justify-end">

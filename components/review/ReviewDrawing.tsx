@@ -111,7 +111,7 @@ export function ReviewDrawing({
       aria-label={label}
       data-testid="review-drawing"
       data-picking={picking || undefined}
-      className={`overflow-hidden [&>svg]:block [&>svg]:h-auto [&>svg]:w-full ${layer ? "" : "rounded-md border border-rule bg-paper"} ${picking ? "cursor-crosshair ring-2 ring-accent/40" : ""} ${className}`}
+      className={`overflow-hidden [&>svg]:block [&>svg]:h-auto [&>svg]:w-full ${layer ? "" : "paper-sheet rounded-md border border-rule bg-paper"} ${picking ? "cursor-crosshair ring-2 ring-accent/40" : ""} ${className}`}
       onClick={(e) => {
         const target = e.target as Element;
         const thread = target.closest("[data-thread]");

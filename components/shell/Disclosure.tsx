@@ -62,7 +62,7 @@ export function Disclosure({
       {open ? (
         <div
           id={panelId}
-          className={`absolute top-full z-30 mt-1.5 ${width} max-w-[calc(100vw-2rem)] ${align === "right" ? "right-0" : "left-0"} rounded-lg border border-rule bg-paper-card p-1.5 shadow-[0_14px_36px_-14px_rgba(29,35,41,0.35)]`}
+          className={`absolute top-full z-30 mt-1.5 ${width} max-w-[calc(100vw-2rem)] ${align === "right" ? "right-0" : "left-0"} rounded-lg border border-rule bg-paper-card p-1.5 shadow-[0_14px_36px_-14px_rgb(var(--shade)/0.35)]`}
         >
           {children(() => setOpen(false))}
         </div>

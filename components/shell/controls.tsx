@@ -76,7 +76,7 @@ export function Field({
         {...input}
         aria-invalid={error ? true : undefined}
         aria-describedby={described}
-        className={`block w-full rounded-md border bg-paper-card px-3 py-2 text-[15px] text-ink shadow-[inset_0_1px_0_rgba(29,35,41,0.04)] outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25 disabled:bg-paper-deep ${
+        className={`block w-full rounded-md border bg-paper-card px-3 py-2 text-[15px] text-ink shadow-[inset_0_1px_0_rgb(var(--shade)/0.04)] outline-none placeholder:text-ink-faint focus:border-ink focus:ring-2 focus:ring-accent/25 disabled:bg-paper-deep ${
           error ? "border-accent" : "border-rule"
         }`}
       />
@@ -156,7 +156,7 @@ export function EmptyState({ title, children, action }: { title: string; childre
 
 export function Panel({ title, description, children, aside }: { title: string; description?: ReactNode; children: ReactNode; aside?: ReactNode }) {
   return (
-    <section className="rounded-lg border border-rule bg-paper-card shadow-[0_1px_0_#e2dccf]" aria-label={title}>
+    <section className="rounded-lg border border-rule bg-paper-card shadow-[0_1px_0_rgb(var(--rule-soft))]" aria-label={title}>
       <header className="flex flex-wrap items-start justify-between gap-3 border-b border-rule-soft px-5 py-4">
         <div>
           <h2 className="text-base font-semibold text-ink">{title}</h2>

@@ -10,7 +10,7 @@ import { niceTicks } from "@/lib/ticks";
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 
-const COLORS = ["#1f5f7a", "#b4462b", "#1d2329", "#8a6212", "#4d7a3a", "#6b4c9a"];
+const COLORS = ["rgb(var(--reaction))", "rgb(var(--accent))", "rgb(var(--ink))", "rgb(var(--caution))", "rgb(var(--plot-5))", "rgb(var(--plot-6))"];
 const DASHES = ["", "6 3", "2 3", "8 3 2 3", "1 2", "10 4"];
 
 /** The largest force and moment plotted: N (N·m) for a sweep that stays below 1 kN (1 kN·m). */
@@ -84,14 +84,14 @@ export function SweepChart({
     <figure className="h-56 w-full" data-testid="sweep-chart" data-run={run} aria-label={`Reactions and margins against ${parameterLabel}`}>
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={rows} margin={{ top: 6, right: 16, bottom: 4, left: 4 }}>
-          <CartesianGrid stroke="#e2dccf" strokeDasharray="0" />
-          <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} ticks={xTicks} tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)}
-            label={{ value: `${parameterLabel}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`, position: "insideBottom", offset: 0, fontSize: 11, fill: "#1d2329" }} height={38} />
-          <YAxis yAxisId="left" tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
-            label={{ value: leftUnit, angle: -90, position: "insideLeft", fontSize: 11, fill: "#1d2329" }} />
+          <CartesianGrid stroke="rgb(var(--rule-soft))" strokeDasharray="0" />
+          <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} ticks={xTicks} tick={{ fontSize: 11, fill: "rgb(var(--ink-soft))" }} tickFormatter={(v: number) => formatNumber(v, 3)}
+            label={{ value: `${parameterLabel}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`, position: "insideBottom", offset: 0, fontSize: 11, fill: "rgb(var(--ink))" }} height={38} />
+          <YAxis yAxisId="left" tick={{ fontSize: 11, fill: "rgb(var(--ink-soft))" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
+            label={{ value: leftUnit, angle: -90, position: "insideLeft", fontSize: 11, fill: "rgb(var(--ink))" }} />
           {rightUnits.length > 0 && (
-            <YAxis yAxisId="right" orientation="right" tick={{ fontSize: 11, fill: "#3d4650" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
-              label={{ value: rightUnits.join(", "), angle: 90, position: "insideRight", fontSize: 11, fill: "#1d2329" }} />
+            <YAxis yAxisId="right" orientation="right" tick={{ fontSize: 11, fill: "rgb(var(--ink-soft))" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
+              label={{ value: rightUnits.join(", "), angle: 90, position: "insideRight", fontSize: 11, fill: "rgb(var(--ink))" }} />
           )}
           <Tooltip
             formatter={(v, name, item) => {
@@ -99,18 +99,18 @@ export function SweepChart({
               return [typeof v === "number" ? `${formatNumber(v, 4)}${unitOf(s) ? ` ${unitOf(s)}` : ""}` : "—", String(name)];
             }}
             labelFormatter={(x) => `${parameterLabel} = ${formatNumber(Number(x), 5)}${data.unit ? ` ${prettyUnit(data.unit)}` : ""}`}
-            contentStyle={{ fontSize: 12, borderColor: "#cfc8b8" }}
+            contentStyle={{ fontSize: 12, borderColor: "rgb(var(--rule))", backgroundColor: "rgb(var(--paper-card))" }}
           />
           {/* below the axis title, clear of it */}
           <Legend wrapperStyle={{ fontSize: 11, paddingTop: 6 }} />
-          <ReferenceLine yAxisId="left" y={0} stroke="#5f6974" />
+          <ReferenceLine yAxisId="left" y={0} stroke="rgb(var(--ink-faint))" />
           {data.quantities.map((q, s) => (
             <Line key={s} yAxisId={axisOf(s)} type="linear" dataKey={`q${s}`} name={`${describeQuantity(q, names)}${axisOf(s) === "right" && unitOf(s) ? ` (${unitOf(s)}, right)` : ""}`} stroke={COLORS[s % COLORS.length]} strokeDasharray={DASHES[s % DASHES.length]} strokeWidth={1.6} dot={false} isAnimationActive={false} connectNulls={false} />
           ))}
           {crossingsX.map((c, i) => (
-            <ReferenceDot key={i} yAxisId={axisOf(c.quantity)} x={c.x} y={0} r={5} fill="#fbfaf6" stroke={COLORS[c.quantity % COLORS.length]} strokeWidth={2} label={{ value: "✕", position: "top", fontSize: 12, fill: COLORS[c.quantity % COLORS.length] }} />
+            <ReferenceDot key={i} yAxisId={axisOf(c.quantity)} x={c.x} y={0} r={5} fill="rgb(var(--paper-card))" stroke={COLORS[c.quantity % COLORS.length]} strokeWidth={2} label={{ value: "✕", position: "top", fontSize: 12, fill: COLORS[c.quantity % COLORS.length] }} />
           ))}
-          {limit && <ReferenceLine yAxisId="left" x={limit.x} stroke="#b4462b" strokeDasharray="4 3" label={{ value: `limit: ${formatLimit(limit.x)}`, position: "insideTopRight", fontSize: 11, fill: "#b4462b" }} />}
+          {limit && <ReferenceLine yAxisId="left" x={limit.x} stroke="rgb(var(--accent))" strokeDasharray="4 3" label={{ value: `limit: ${formatLimit(limit.x)}`, position: "insideTopRight", fontSize: 11, fill: "rgb(var(--accent))" }} />}
         </LineChart>
       </ResponsiveContainer>
     </figure>

@@ -58,7 +58,7 @@ export function Dialog({
         e.preventDefault();
         onClose();
       }}
-      className={`m-auto ${full ? "h-[calc(100dvh-1rem)] max-h-none w-[calc(100%-1rem)] max-w-none" : `w-[calc(100%-2rem)] ${wide ? "max-w-2xl" : "max-w-md"}`} rounded-lg border border-rule bg-paper-card p-0 text-ink shadow-[0_12px_40px_rgba(29,35,41,0.22)] backdrop:bg-ink/30`}
+      className={`m-auto ${full ? "h-[calc(100dvh-1rem)] max-h-none w-[calc(100%-1rem)] max-w-none" : `w-[calc(100%-2rem)] ${wide ? "max-w-2xl" : "max-w-md"}`} rounded-lg border border-rule bg-paper-card p-0 text-ink shadow-[0_12px_40px_rgb(var(--shade)/0.22)] backdrop:bg-shade/30`}
     >
       {open ? (
         <div className={full ? "flex h-full flex-col p-4" : "p-5"}>

@@ -32,7 +32,7 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
           </p>
         </div>
         {can(role, "sketch.create") ? (
-          <Link href={`/sketches/new?workspace=${id}`} className="rounded-md bg-accent px-4 py-2 text-sm font-medium text-white hover:bg-accent-deep">
+          <Link href={`/sketches/new?workspace=${id}`} className="rounded-md bg-accent px-4 py-2 text-sm font-medium text-on-accent hover:bg-accent-deep">
             Start a sketch
           </Link>
         ) : null}
