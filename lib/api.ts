@@ -1,5 +1,5 @@
 import "server-only";
-import type { z } from "zod";
+import { ZodObject, type z } from "zod";
 import { getRole } from "@/db/queries/workspaces";
 import type { AuthSession } from "./auth";
 import { appOrigin } from "./env";
@@ -107,19 +107,32 @@ export async function parseJsonBody<T extends z.ZodType>(req: Request, schema: T
   let data: unknown;
   try {
     data = text.trim() === "" ? undefined : JSON.parse(text);
-  } catch {
-    throw new AppError("invalid_json");
+  } catch (err) {
+    // the parser's own words say where it broke ("… at position 12 (line 1 column 13)")
+    throw new AppError("invalid_json", err instanceof SyntaxError ? `The request body is not valid JSON: ${err.message}` : undefined);
   }
   if (data === undefined) throw new AppError("invalid_json", "The request needs a JSON body.");
   const parsed = schema.safeParse(data);
-  if (!parsed.success) throw new AppError("validation_failed", undefined, { fields: fieldErrors(parsed.error) });
+  if (!parsed.success) throw new AppError("validation_failed", undefined, { fields: fieldErrors(parsed.error, [], data) });
   return parsed.data;
 }
 
+/**
+ * Parse the query against a schema: 400 with `query.<name>` paths for a bad value, a missing one,
+ * or a name the endpoint does not read (a mistyped `limit` for `pageSize` would otherwise be
+ * ignored without a word, and the answer look like the default).
+ */
 export function parseQuery<T extends z.ZodType>(req: Request, schema: T): z.output<T> {
   const url = new URL(req.url);
-  const parsed = schema.safeParse(Object.fromEntries(url.searchParams));
-  if (!parsed.success) throw new AppError("validation_failed", "Some query parameters are not valid.", { fields: fieldErrors(parsed.error, ["query"]) });
+  const given = Object.fromEntries(url.searchParams);
+  const known = schema instanceof ZodObject ? Object.keys(schema.shape) : null;
+  const unknown = known ? Object.keys(given).filter((key) => !known.includes(key)) : [];
+  const parsed = schema.safeParse(given);
+  const fields = [
+    ...unknown.map((key) => ({ path: `query.${key}`, message: `Is not a query parameter here (check the spelling): this address reads ${known!.join(", ")}.` })),
+    ...(parsed.success ? [] : fieldErrors(parsed.error, ["query"], given)),
+  ];
+  if (fields.length || !parsed.success) throw new AppError("validation_failed", "Some query parameters are not valid.", { fields });
   return parsed.data;
 }
 
@@ -129,6 +142,43 @@ export async function requireWorkspaceRole(workspaceId: string, userId: string, 
   if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.");
   if (!can(role, permission)) throw new AppError("forbidden");
   return role;
+}
+
+/** The methods an API address may be asked with (OPTIONS is answered for every route). */
+export const HTTP_METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE"] as const;
+type HttpMethod = (typeof HTTP_METHODS)[number];
+/** A route that serves GET serves HEAD too (Next answers it from GET). */
+type Served<A extends HttpMethod> = A | (A extends "GET" ? "HEAD" : never);
+/** A handler of `otherMethods`: the tests that walk every route's methods skip these. */
+export type NotAllowedHandler = ((req: Request) => Response) & { readonly notAllowed: true };
+
+/**
+ * The answers of a route for the methods it does not serve: 405 with the JSON error, naming the
+ * methods it does serve in the message, in `error.allow` and in the `Allow` header; and OPTIONS,
+ * answered with the same `Allow`. (Left to Next, a method a route leaves out gets a bare 405 with no
+ * body and no `Allow`.) Put in every route file, after its handlers:
+ *
+ *     export const { PUT, PATCH, DELETE, HEAD, OPTIONS } = otherMethods("GET", "POST");
+ */
+export function otherMethods<const A extends Exclude<HttpMethod, "HEAD">>(...served: A[]): Record<Exclude<HttpMethod, Served<A>> | "OPTIONS", NotAllowedHandler> {
+  const allow = [...HTTP_METHODS.filter((m) => (served as string[]).includes(m) || (m === "HEAD" && (served as string[]).includes("GET"))), "OPTIONS"];
+  const header = { Allow: allow.join(", ") };
+  const mark = (fn: (req: Request) => Response): NotAllowedHandler => Object.assign(fn, { notAllowed: true as const });
+  const out: Record<string, NotAllowedHandler> = {
+    OPTIONS: mark(() => new Response(null, { status: 204, headers: header })),
+  };
+  for (const m of HTTP_METHODS) {
+    if (allow.includes(m)) continue;
+    out[m] = mark((req) =>
+      errorResponse(
+        new AppError("method_not_allowed", `${req.method.toUpperCase()} is not a method of this address: it takes ${allow.filter((a) => a !== "OPTIONS").join(", ")}.`, {
+          headers: header,
+          extra: { allow },
+        }),
+      ),
+    );
+  }
+  return out as Record<Exclude<HttpMethod, Served<A>> | "OPTIONS", NotAllowedHandler>;
 }
 
 /** Wrap a route handler in the shared steps above. */

@@ -17,6 +17,7 @@ export const ERROR_STATUS = {
   review_state: 409,
   already_member: 409,
   last_owner: 409,
+  method_not_allowed: 405,
   gone: 410,
   invitation_expired: 410,
   invitation_used: 410,
@@ -44,6 +45,7 @@ const DEFAULT_MESSAGE: Record<ErrorCode, string> = {
   review_state: "This sign-off step does not apply to the version as it stands.",
   already_member: "That person is already a member of this workspace.",
   last_owner: "A workspace needs at least one owner: make someone else an owner first.",
+  method_not_allowed: "This address does not take that method.",
   gone: "This is no longer available.",
   invitation_expired: "This invitation has expired. Ask an owner of the workspace to send a new one.",
   invitation_used: "This invitation has already been used.",
@@ -90,11 +92,34 @@ export function defaultMessage(code: ErrorCode): string {
   return DEFAULT_MESSAGE[code];
 }
 
-export function fieldErrors(err: ZodError, prefix: string[] = []): FieldError[] {
+/** Whether `path` names a key its parent object does not have (a field left out of the request). */
+function leftOut(input: unknown, path: PropertyKey[]): boolean {
+  if (!path.length) return input === undefined;
+  let parent: unknown = input;
+  for (const key of path.slice(0, -1)) {
+    if (parent === null || typeof parent !== "object") return false;
+    parent = (parent as Record<PropertyKey, unknown>)[key];
+  }
+  return parent !== null && typeof parent === "object" && !Array.isArray(parent) && (parent as Record<PropertyKey, unknown>)[path[path.length - 1]] === undefined;
+}
+
+/**
+ * Each zod issue as a field path and its message. Given the `input` that was parsed, a field left
+ * out says so first ("Required: give the sketch a title."): its type message alone ("A version
+ * number is a whole number.") would send the reader looking for a value that is not there.
+ */
+export function fieldErrors(err: ZodError, prefix: string[] = [], input?: unknown): FieldError[] {
   return err.issues.flatMap((issue) => {
     const at = (extra: string[] = []) => [...prefix, ...issue.path.map(String), ...extra].join(".") || "(root)";
     // A strict object names each unknown key as its own field.
     if (issue.code === "unrecognized_keys") return issue.keys.map((key) => ({ path: at([key]), message: "Is not a field here (check the spelling)." }));
+    if (input !== undefined && issue.code === "invalid_type" && !issue.path.length && issue.expected === "object") {
+      return [{ path: at(), message: `Send a JSON object ({ "name": value, … }), not ${Array.isArray(input) ? "an array" : input === null ? "null" : `a ${typeof input}`}.` }];
+    }
+    if (input !== undefined && issue.code === "invalid_type" && issue.path.length && leftOut(input, issue.path)) {
+      const own = /^Invalid input\b/.test(issue.message) ? "" : `: ${issue.message.charAt(0).toLowerCase()}${issue.message.slice(1)}`;
+      return [{ path: at(), message: `Required${own || "."}` }];
+    }
     return [{ path: at(), message: issue.message }];
   });
 }

@@ -41,8 +41,8 @@ export const memberParams = z.object({ id: z.uuid(), userId: z.string().min(1).m
 export const invitationParams = z.object({ id: z.uuid(), invitationId: z.uuid() });
 export const tokenParams = z.object({ token: z.string().min(10).max(200) });
 export const auditQuery = z.object({
-  before: z.coerce.number().int().positive().optional(),
-  limit: z.coerce.number().int().min(1).max(200).optional(),
+  before: z.coerce.number({ error: "before is the id of the last entry you have, a whole number." }).int("before is the id of the last entry you have, a whole number.").positive("before is the id of the last entry you have, a whole number.").optional(),
+  limit: z.coerce.number({ error: "limit is a whole number from 1 to 200." }).int("limit is a whole number from 1 to 200.").min(1, "limit is a whole number from 1 to 200.").max(200, "limit is a whole number from 1 to 200.").optional(),
   /** "hide": leave the members' sign-ins out, so the changes to the workspace read on their own */
   signIns: z.enum(["show", "hide"], { error: 'must be "show" or "hide"' }).optional(),
 });

@@ -55,8 +55,13 @@ export const listSketchesQuery = z.object({
   status: z.enum(STATUS_FILTERS, { error: "Status is holds, slips, lifts, tips or unrestrained." }).optional(),
   sort: z.enum(SKETCH_SORTS, { error: "Sort by updated, title, status or created." }).optional(),
   dir: z.enum(["asc", "desc"], { error: "Direction is asc or desc." }).optional(),
-  page: z.coerce.number().int().min(1, "Pages start at 1.").max(100_000).optional(),
-  pageSize: z.coerce.number().int().min(1).max(100, "At most 100 a page.").optional(),
+  page: z.coerce.number({ error: "A page is a whole number from 1." }).int("A page is a whole number from 1.").min(1, "Pages start at 1.").max(100_000, "At most page 100000.").optional(),
+  pageSize: z.coerce
+    .number({ error: "pageSize is a whole number from 1 to 100." })
+    .int("pageSize is a whole number from 1 to 100.")
+    .min(1, "pageSize is a whole number from 1 to 100.")
+    .max(100, "At most 100 a page.")
+    .optional(),
 });
 export type ListSketchesQuery = z.infer<typeof listSketchesQuery>;
 

@@ -3,8 +3,8 @@ import { Fragment } from "react";
 import { blankWords, fieldLabel } from "@/components/editor/fieldDefs";
 import { SideScroll } from "@/components/studies/ReportTable";
 import type { Comparison, FieldChange, ReactionChange, ReactionSnapshot } from "@/lib/review/compare";
-import { unitFamily } from "@/solver/report";
-import { formatNumber, formatQuantity, type UnitSystem } from "@/solver/units";
+import { cellNumberText, unitFamily } from "@/solver/report";
+import { convert, formatNumber, type UnitSystem } from "@/solver/units";
 
 /** One unit family for the whole table (kN with kN·m, or N with N·m only when all of it stays below
  *  a kilonewton), as every other table: a 0.66 kN change is not written 664.7 N beside 13.02 kN. */
@@ -25,9 +25,10 @@ function familyOf(rows: readonly ReactionChange[], system: UnitSystem): Family {
   return { system, ...unitFamily(system, { force: finite(forces), moment: finite(moments) }) };
 }
 
-/** A figure of the table, in its column's unit without the unit (the header names it), zeros kept. */
+/** A figure of the table in its column's unit (the header names it), printed as every result table
+ *  and the calc sheet print theirs (`cellNumberText`), so a reaction reads the same digits in both. */
 function cell(valueSI: number, q: "force" | "moment", u: Family): string {
-  return formatQuantity(valueSI, q, u.system, { unit: q === "force" ? u.force : u.moment, keepZeros: true }).replace(/ \S+$/, "");
+  return cellNumberText({}, convert(valueSI, q, u.system, q === "force" ? u.force : u.moment).value);
 }
 
 function signed(newtons: number, u: Family): string {

@@ -54,6 +54,6 @@ export const compareQuery = z.object({
 });
 
 export const activityQuery = z.object({
-  before: z.coerce.number().int().positive().optional(),
-  limit: z.coerce.number().int().min(1).max(100).optional(),
+  before: z.coerce.number({ error: "before is the id of the last entry you have, a whole number." }).int("before is the id of the last entry you have, a whole number.").positive("before is the id of the last entry you have, a whole number.").optional(),
+  limit: z.coerce.number({ error: "limit is a whole number from 1 to 100." }).int("limit is a whole number from 1 to 100.").min(1, "limit is a whole number from 1 to 100.").max(100, "limit is a whole number from 1 to 100.").optional(),
 });

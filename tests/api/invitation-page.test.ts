@@ -11,7 +11,13 @@ import { makeAccount, makeWorkspace, uniqueEmail, type Person } from "./helpers"
 // rendered outside a request: nobody is signed in
 vi.mock("@/lib/session", () => ({ currentSession: async () => null }));
 // the open link's form is a client component that asks for the router
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: () => undefined, refresh: () => undefined, replace: () => undefined }) }));
+vi.mock("next/navigation", () => ({
+  useRouter: () => ({ push: () => undefined, refresh: () => undefined, replace: () => undefined }),
+  // as Next's: thrown, so the page answers 404 with the segment's not-found page
+  notFound: () => {
+    throw new Error("NEXT_NOT_FOUND");
+  },
+}));
 
 let owner: Person;
 let ws: string;
@@ -60,7 +66,12 @@ describe("the invitation page", () => {
     expect(text(await page(await link("pending")))).toMatch(/password/i);
   });
 
-  it("a link that never existed: not valid, check the whole address was copied", async () => {
-    expect(text(await page("made-up-token-made-up-token"))).toContain("This invitation link is not valid");
+  it("a link that never existed answers 404, with its own page: not valid, check the whole address was copied", async () => {
+    await expect(page("made-up-token-made-up-token")).rejects.toThrow("NEXT_NOT_FOUND");
+    const { default: InvitationNotFound } = await import("@/app/(auth)/invite/[token]/not-found");
+    const out = text(renderToStaticMarkup(await InvitationNotFound()));
+    expect(out).toContain("This invitation link is not valid");
+    expect(out).toContain("Check that the whole address from the mail was copied");
+    expect(out).toContain("Sign in");
   });
 });

@@ -15,3 +15,6 @@ export function routeFiles(dir = API_DIR): string[] {
 
 /** `app/api/sketches/[id]/route.ts` → `/api/sketches/[id]`. */
 export const routePath = (file: string) => "/" + relative(join(process.cwd(), "app"), file).split(sep).slice(0, -1).join("/");
+
+/** A method the route does not serve (`otherMethods` in `lib/api.ts`: 405, or OPTIONS): not a route of its own. */
+export const isNotAllowed = (handler: unknown): boolean => typeof handler === "function" && (handler as { notAllowed?: unknown }).notAllowed === true;

@@ -159,13 +159,48 @@ describe("versioned sketches in the browser", () => {
 
   it("an outsider gets the not-found page and an editor that cannot open the sketch", async () => {
     const page = await as("outsider");
-    await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    const res = await page.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    expect(res?.status()).toBe(404);
     await page.getByText("No such sketch here").waitFor();
     expect(await page.content()).not.toContain(`hydrotest ${tag}`);
-    await page.goto(`${BASE_URL}/sketches/${sketchId}`);
+    // the editor's own address answers 404 too, with the same words (the check is on the server)
+    expect((await page.goto(`${BASE_URL}/sketches/${sketchId}`))?.status()).toBe(404);
     await page.getByTestId("unavailable-message").waitFor();
     expect(await page.getByTestId("unavailable-message").textContent()).toContain("you are not a member of its workspace");
+    expect((await page.goto(`${BASE_URL}/sketches/not-a-sketch`))?.status()).toBe(404);
+    await page.getByTestId("unavailable-message").waitFor();
     await shot(page, "versions-07-outsider");
+  });
+
+  it("an address that names nothing answers 404 with words for what is missing; one that names something answers 200", async () => {
+    const page = await as("owner");
+    const base = `${BASE_URL}/workspaces/${ws}`;
+    const nobody = "00000000-0000-4000-8000-000000000000";
+    const status = async (path: string) => (await page.goto(`${base}${path}`))?.status();
+    for (const path of ["", "/members", `/sketches/${sketchId}`, `/sketches/${sketchId}/versions/2`, `/sketches/${sketchId}/compare?from=1&to=2`]) {
+      expect([path, await status(path)]).toEqual([path, 200]);
+    }
+    expect(await status(`/sketches/${nobody}`)).toBe(404);
+    await page.getByText("No such sketch here").waitFor();
+    // the workspace's tabs stay: it is only the sketch that is missing
+    await page.getByRole("link", { name: "Members" }).waitFor();
+    expect(await status(`/sketches/${sketchId}/versions/9`)).toBe(404);
+    expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("No version v9 of this sketch");
+    expect(await status(`/sketches/${sketchId}/compare?from=abc&to=7`)).toBe(404);
+    expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("No versions “abc” and v7 of this sketch");
+    expect((await page.goto(`${BASE_URL}/workspaces/${nobody}`))?.status()).toBe(404);
+    await page.getByText("No such workspace here").waitFor();
+    expect((await page.goto(`${BASE_URL}/workspaces/not-a-workspace/sketches/${sketchId}`))?.status()).toBe(404);
+    await page.getByText("No such sketch here").waitFor();
+
+    // signed out: still sent to sign in and back, never told what exists
+    const anon = await openBrowser();
+    open.push(anon);
+    const stranger = await anon.newPage();
+    const res = await stranger.goto(`${base}/sketches/${sketchId}/versions/9`);
+    expect(res?.status()).toBe(200);
+    expect(new URL(stranger.url()).pathname).toBe("/sign-in");
+    expect(new URL(stranger.url()).searchParams.get("next")).toBe(`/workspaces/${ws}/sketches/${sketchId}/versions/9`);
   });
 
   it("two people saving on v2: the second meets the conflict dialog and keeps the work as a fork", async () => {

@@ -1,4 +1,5 @@
 import { pool } from "@/db";
+import { otherMethods } from "@/lib/api";
 
 export const dynamic = "force-dynamic";
 
@@ -15,3 +16,5 @@ export async function GET() {
     );
   }
 }
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET");

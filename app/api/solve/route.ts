@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { json, parseJsonBody, route } from "@/lib/api";
+import { json, otherMethods, parseJsonBody, route } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 import { clientAddress, createRateLimiter } from "@/lib/rate-limit";
 import { MAX_SKETCH_BYTES } from "@/lib/sketch-document";
@@ -31,3 +31,5 @@ export const POST = route({ auth: "none" }, async ({ req }) => {
   }
   return json(result);
 });
+
+export const { GET, HEAD, PUT, PATCH, DELETE, OPTIONS } = otherMethods("POST");

@@ -1,6 +1,6 @@
 import { db } from "@/db";
 import { createWorkspace, listWorkspacesForUser } from "@/db/queries/workspaces";
-import { json, route } from "@/lib/api";
+import { json, otherMethods, route } from "@/lib/api";
 import { recordAudit } from "@/lib/audit";
 import { createWorkspaceInput } from "@/lib/schemas";
 
@@ -21,3 +21,5 @@ export const POST = route({ body: createWorkspaceInput }, async ({ user, body })
   });
   return json({ workspace: { ...ws, role: "owner" } }, 201);
 });
+
+export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");

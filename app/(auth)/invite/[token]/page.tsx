@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { notFound } from "next/navigation";
 import { AuthCard } from "@/components/auth/AuthFrame";
 import { AcceptInvitationButton, InvitationSignUpForm, SwitchAccountButton } from "@/components/auth/InvitationActions";
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
@@ -25,18 +26,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
   const session = await currentSession();
   const here = `/invite/${token}`;
 
-  if (!view) {
-    return (
-      <AuthCard title="This invitation link is not valid">
-        <div className="space-y-4">
-          <Notice tone="error">We do not know this link. Check that the whole address from the mail was copied, or ask for a new invitation.</Notice>
-          <Link href={session ? "/workspaces" : "/sign-in"} className={primary}>
-            {session ? "Go to your workspaces" : "Sign in"}
-          </Link>
-        </div>
-      </AuthCard>
-    );
-  }
+  // an unknown link answers 404 (its page: not-found.tsx); nothing streams before this check
+  if (!view) notFound();
 
   if (view.status !== "pending") {
     const r = REFUSALS[view.status];

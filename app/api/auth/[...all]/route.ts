@@ -1,4 +1,4 @@
-import { assertSameOrigin, readBytesCapped } from "@/lib/api";
+import { assertSameOrigin, otherMethods, readBytesCapped } from "@/lib/api";
 import { getAuth, MAX_AUTH_BODY_BYTES } from "@/lib/auth";
 import { withClientAddress } from "@/lib/client-address";
 import { AppError, errorResponse } from "@/lib/errors";
@@ -31,3 +31,5 @@ export async function POST(req: Request): Promise<Response> {
   headers.delete("content-length"); // the body is now what was read, whatever the header claimed
   return getAuth().handler(new Request(req.url, { method: "POST", headers, body: new Uint8Array(body), signal: req.signal }));
 }
+
+export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");

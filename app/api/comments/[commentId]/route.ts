@@ -1,4 +1,4 @@
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { deleteComment, editComment, resolveThread } from "@/lib/review/comments";
 import { commentParams, updateCommentInput } from "@/lib/review/schemas";
 
@@ -11,3 +11,5 @@ export const PATCH = route({ params: commentParams, body: updateCommentInput }, 
 
 /** Delete your own comment (its text goes; the thread keeps its shape). */
 export const DELETE = route({ params: commentParams }, async ({ params, user }) => ({ comment: await deleteComment(params.commentId, user) }));
+
+export const { GET, HEAD, POST, PUT, OPTIONS } = otherMethods("PATCH", "DELETE");

@@ -1,4 +1,4 @@
-import { parseJsonBody, route } from "@/lib/api";
+import { otherMethods, parseJsonBody, route } from "@/lib/api";
 import { sketchParams, updateSketchInput } from "@/lib/sketch-schemas";
 import { editSketch, readSketch, removeSketch, requireSketchRole } from "@/lib/sketches";
 
@@ -16,3 +16,5 @@ export const PATCH = route({ params: sketchParams }, async ({ req, params, user 
 
 /** Delete the sketch and its versions (owners). */
 export const DELETE = route({ params: sketchParams }, async ({ params, user }) => removeSketch(params.id, user));
+
+export const { POST, PUT, OPTIONS } = otherMethods("GET", "PATCH", "DELETE");

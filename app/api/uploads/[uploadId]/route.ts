@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { serveUpload } from "@/lib/uploads/serve";
 import { removeUpload } from "@/lib/uploads/service";
 
@@ -12,3 +12,5 @@ export const GET = route({ params }, async ({ req, params, user }) => serveUploa
 
 /** An attachment: its comment's author. An underlay: editors and owners, while no saved version draws it. */
 export const DELETE = route({ params }, async ({ params, user }) => ({ upload: await removeUpload(params.uploadId, user) }));
+
+export const { POST, PUT, PATCH, OPTIONS } = otherMethods("GET", "DELETE");

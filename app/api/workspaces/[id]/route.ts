@@ -1,5 +1,5 @@
 import { getWorkspaceForMember } from "@/db/queries/workspaces";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 import { rename } from "@/lib/members";
 import { renameWorkspaceInput, workspaceParams } from "@/lib/schemas";
@@ -21,3 +21,5 @@ export const PATCH = route(
   { params: workspaceParams, body: renameWorkspaceInput, workspace: { param: "id", permission: "workspace.rename" } },
   async ({ params, user, body }) => ({ workspace: await rename(params.id, user, body.name) }),
 );
+
+export const { POST, PUT, DELETE, OPTIONS } = otherMethods("GET", "PATCH");

@@ -1,4 +1,4 @@
-import { json, route } from "@/lib/api";
+import { json, otherMethods, route } from "@/lib/api";
 import { commentParams } from "@/lib/review/schemas";
 import { readUploadBody } from "@/lib/uploads/request";
 import { attachToComment } from "@/lib/uploads/service";
@@ -7,3 +7,5 @@ export const dynamic = "force-dynamic";
 
 /** Attach an image or a PDF to your own comment: multipart/form-data with a `file` field, or the raw bytes. */
 export const POST = route({ params: commentParams }, async ({ req, params, user }) => json({ upload: await attachToComment(params.commentId, user, () => readUploadBody(req)) }, 201));
+
+export const { GET, HEAD, PUT, PATCH, DELETE, OPTIONS } = otherMethods("POST");

@@ -1,4 +1,4 @@
-import { json, route } from "@/lib/api";
+import { json, otherMethods, route } from "@/lib/api";
 import { signUpFromInvitation } from "@/lib/invitation-sign-up";
 import { invitationSignUpInput, tokenParams } from "@/lib/schemas";
 
@@ -11,3 +11,5 @@ export const POST = route({ auth: "none", params: tokenParams, body: invitationS
   for (const cookie of result.setCookies) res.headers.append("Set-Cookie", cookie);
   return res;
 });
+
+export const { GET, HEAD, PUT, PATCH, DELETE, OPTIONS } = otherMethods("POST");

@@ -1,5 +1,5 @@
 import { listSketchActivity } from "@/db/queries/review";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { activityQuery } from "@/lib/review/schemas";
 import { sketchParams } from "@/lib/sketch-schemas";
 import { requireSketchRole } from "@/lib/sketches";
@@ -11,3 +11,5 @@ export const GET = route({ params: sketchParams, query: activityQuery }, async (
   const access = await requireSketchRole(params.id, user.id, "sketch.read");
   return listSketchActivity(params.id, access.workspaceId, user.id, query);
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET");

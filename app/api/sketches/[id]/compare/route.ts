@@ -1,5 +1,5 @@
 import { getVersion } from "@/db/queries/versions";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 import { compareSketches } from "@/lib/review/compare";
 import { compareQuery } from "@/lib/review/schemas";
@@ -16,3 +16,5 @@ export const GET = route({ params: sketchParams, query: compareQuery }, async ({
   const meta = (v: typeof a) => ({ number: v.number, message: v.message, authorName: v.authorName, createdAt: v.createdAt, status: v.status, reviewState: v.reviewState });
   return { from: meta(a), to: meta(b), comparison: compareSketches(a.document, b.document, query.units) };
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET");

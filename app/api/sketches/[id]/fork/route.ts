@@ -1,4 +1,4 @@
-import { json, parseJsonBody, route } from "@/lib/api";
+import { json, otherMethods, parseJsonBody, route } from "@/lib/api";
 import { forkInput, sketchParams } from "@/lib/sketch-schemas";
 import { forkSketch, requireSketchRole } from "@/lib/sketches";
 
@@ -21,3 +21,5 @@ export const POST = route({ params: sketchParams }, async ({ req, params, user }
     201,
   );
 });
+
+export const { GET, HEAD, PUT, PATCH, DELETE, OPTIONS } = otherMethods("POST");

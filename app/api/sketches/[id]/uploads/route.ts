@@ -1,4 +1,4 @@
-import { json, route } from "@/lib/api";
+import { json, otherMethods, route } from "@/lib/api";
 import { sketchParams } from "@/lib/sketch-schemas";
 import { readUploadBody } from "@/lib/uploads/request";
 import { createUnderlay } from "@/lib/uploads/service";
@@ -10,3 +10,5 @@ export const dynamic = "force-dynamic";
  * with a `file` field, or the raw bytes (`?name=` for the display name). 10 MB at most.
  */
 export const POST = route({ params: sketchParams }, async ({ req, params, user }) => json({ upload: await createUnderlay(params.id, user, () => readUploadBody(req)) }, 201));
+
+export const { GET, HEAD, PUT, PATCH, DELETE, OPTIONS } = otherMethods("POST");

@@ -1,5 +1,5 @@
 import { listVersions } from "@/db/queries/versions";
-import { json, parseJsonBody, route } from "@/lib/api";
+import { json, otherMethods, parseJsonBody, route } from "@/lib/api";
 import { MAX_SKETCH_BYTES, saveVersionInput } from "@/lib/sketch-document";
 import { sketchParams } from "@/lib/sketch-schemas";
 import { requireSketchRole, saveVersion } from "@/lib/sketches";
@@ -21,3 +21,5 @@ export const POST = route({ params: sketchParams }, async ({ req, params, user }
   const body = await parseJsonBody(req, saveVersionInput, MAX_SKETCH_BYTES);
   return json({ version: await saveVersion(params.id, user, body) }, 201);
 });
+
+export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");

@@ -1,5 +1,5 @@
 import { listAuditEvents } from "@/db/queries/audit";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { auditQuery, workspaceParams } from "@/lib/schemas";
 
 export const dynamic = "force-dynamic";
@@ -10,3 +10,5 @@ export const GET = route(
   { params: workspaceParams, query: auditQuery, workspace: { param: "id", permission: "audit.read" } },
   async ({ params, user, query }) => listAuditEvents(params.id, user.id, { before: query.before, limit: query.limit, signIns: query.signIns }),
 );
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET");

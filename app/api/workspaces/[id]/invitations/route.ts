@@ -1,5 +1,5 @@
 import { listInvitations } from "@/db/queries/invitations";
-import { json, route } from "@/lib/api";
+import { json, otherMethods, route } from "@/lib/api";
 import { inviteMember } from "@/lib/invitations";
 import { inviteInput, workspaceParams } from "@/lib/schemas";
 
@@ -19,3 +19,5 @@ export const POST = route(
     return json({ invitation }, 201);
   },
 );
+
+export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");

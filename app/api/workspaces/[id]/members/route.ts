@@ -1,5 +1,5 @@
 import { listMembers } from "@/db/queries/workspaces";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { workspaceParams } from "@/lib/schemas";
 
 export const dynamic = "force-dynamic";
@@ -9,3 +9,5 @@ export const GET = route(
   { params: workspaceParams, workspace: { param: "id", permission: "members.list" } },
   async ({ params, user, role }) => ({ role, members: await listMembers(params.id, user.id) }),
 );
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET");

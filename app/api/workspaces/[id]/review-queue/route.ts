@@ -1,4 +1,4 @@
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { reviewQueueFor } from "@/lib/review/queue";
 import { workspaceParams } from "@/lib/schemas";
 
@@ -9,3 +9,5 @@ export const GET = route(
   { params: workspaceParams, workspace: { param: "id", permission: "workspace.read" } },
   async ({ params, user, role }) => ({ items: await reviewQueueFor(params.id, user.id, role) }),
 );
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET");

@@ -1,5 +1,5 @@
 import { listSketches, listWorkspaceTags } from "@/db/queries/sketches";
-import { json, route } from "@/lib/api";
+import { json, otherMethods, route } from "@/lib/api";
 import { createSketchInput, MAX_SKETCH_BYTES } from "@/lib/sketch-document";
 import { listSketchesQuery } from "@/lib/sketch-schemas";
 import { workspaceParams } from "@/lib/schemas";
@@ -30,3 +30,5 @@ export const POST = route(
     );
   },
 );
+
+export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");

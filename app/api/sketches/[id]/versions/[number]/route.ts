@@ -1,5 +1,5 @@
 import { getVersion } from "@/db/queries/versions";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 import { versionParams } from "@/lib/sketch-schemas";
 import { requireSketchRole } from "@/lib/sketches";
@@ -13,3 +13,5 @@ export const GET = route({ params: versionParams }, async ({ params, user }) => 
   if (!version) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
   return { version };
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET");

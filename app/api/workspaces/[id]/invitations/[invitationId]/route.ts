@@ -1,6 +1,6 @@
 import { db } from "@/db";
 import { withdrawInvitation } from "@/db/queries/invitations";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { recordAudit } from "@/lib/audit";
 import { AppError } from "@/lib/errors";
 import { invitationParams } from "@/lib/schemas";
@@ -21,3 +21,5 @@ export const DELETE = route(
       return { withdrawn: row.id };
     }),
 );
+
+export const { GET, HEAD, POST, PUT, PATCH, OPTIONS } = otherMethods("DELETE");

@@ -1,4 +1,4 @@
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 import { changeRole, removeFromWorkspace } from "@/lib/members";
 import { can } from "@/lib/roles";
@@ -20,3 +20,5 @@ export const DELETE = route(
     return removeFromWorkspace(params.id, user, params.userId);
   },
 );
+
+export const { GET, HEAD, POST, PUT, OPTIONS } = otherMethods("PATCH", "DELETE");

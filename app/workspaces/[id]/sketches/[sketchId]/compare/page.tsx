@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { CompareScreen } from "@/components/review/CompareScreen";
 import { NoSuchVersion, NothingToCompare } from "@/components/review/NoSuchVersion";
 import { loadSketchPage } from "@/lib/sketch-page";
+import { compareAsked } from "@/lib/workspace-path";
 
 export const metadata: Metadata = { title: "Compare versions" };
 
@@ -12,11 +13,10 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   const q = await searchParams;
   const { data } = await loadSketchPage(id, sketchId, `/workspaces/${id}/sketches/${sketchId}/compare`);
   const latest = data.sketch.latestVersion;
-  const num = (v: string | undefined, fallback: number) => (v === undefined ? fallback : Number(v));
-  const from = num(q.from, Math.max(1, latest - 1));
-  const to = q.to === "draft" ? "draft" : num(q.to, latest);
-  const valid = (n: number) => Number.isInteger(n) && n >= 1 && n <= latest;
-  const bad = [!valid(from) ? q.from : null, to !== "draft" && !valid(to) ? q.to : null].filter((v): v is string => v != null);
+  const asked = compareAsked(q);
+  const from = asked.from(latest);
+  const to = asked.to(latest);
+  const bad = asked.missing(latest);
   const title = data.sketch.title;
   if (bad.length) {
     return <NoSuchVersion workspaceId={id} sketchId={sketchId} sketchTitle={title} latest={latest} asked={bad} here="Compare" />;

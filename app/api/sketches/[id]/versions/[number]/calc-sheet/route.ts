@@ -2,7 +2,7 @@ import { z } from "zod";
 import { getVersion } from "@/db/queries/versions";
 import { approvedBefore, getVersionForCalcSheet } from "@/db/queries/review";
 import { listVersionComments, openThreadsBefore } from "@/db/queries/comments";
-import { route } from "@/lib/api";
+import { otherMethods, route } from "@/lib/api";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
 import { AppError } from "@/lib/errors";
 import { versionParams } from "@/lib/sketch-schemas";
@@ -48,3 +48,5 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
     },
   });
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET");

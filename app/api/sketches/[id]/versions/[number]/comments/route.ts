@@ -1,4 +1,4 @@
-import { json, parseJsonBody, route } from "@/lib/api";
+import { json, otherMethods, parseJsonBody, route } from "@/lib/api";
 import { addComment, readComments } from "@/lib/review/comments";
 import { createCommentInput } from "@/lib/review/schemas";
 import { versionParams } from "@/lib/sketch-schemas";
@@ -18,3 +18,5 @@ export const POST = route({ params: versionParams }, async ({ req, params, user 
   const body = await parseJsonBody(req, createCommentInput);
   return json({ comment: await addComment(params.id, params.number, user, body) }, 201);
 });
+
+export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");

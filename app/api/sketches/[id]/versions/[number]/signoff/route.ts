@@ -1,4 +1,4 @@
-import { parseJsonBody, route } from "@/lib/api";
+import { otherMethods, parseJsonBody, route } from "@/lib/api";
 import { signOffInput } from "@/lib/review/schemas";
 import { readSignOff, requireSignOffParty, takeSignOffStep } from "@/lib/review/signoff";
 import { versionParams } from "@/lib/sketch-schemas";
@@ -23,3 +23,5 @@ export const POST = route({ params: versionParams }, async ({ req, params, user 
   });
   return takeSignOffStep(params.id, params.number, user, body);
 });
+
+export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");

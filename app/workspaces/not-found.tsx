@@ -1,0 +1,25 @@
+import { NoSuchVersion } from "@/components/review/NoSuchVersion";
+import { AppShell } from "@/components/shell/AppShell";
+import { NoSuchSketch, NoSuchWorkspace } from "@/components/shell/NotHere";
+import { pageTarget } from "@/lib/page-target";
+
+/**
+ * What the workspace layout found missing (it answers 404 before the page streams): a workspace,
+ * a sketch, or a version of a sketch, in the app's frame. Nothing is drawn when nothing is missing.
+ */
+export default async function WorkspacesNotFound() {
+  const target = await pageTarget();
+  if (target.kind === "found" || target.kind === "unknown") return <NoSuchWorkspace />;
+  const workspaceId = target.kind === "no-workspace" ? undefined : (target.workspaceId ?? undefined);
+  return (
+    <AppShell workspaceId={workspaceId} next={workspaceId ? `/workspaces/${workspaceId}` : "/workspaces"}>
+      {target.kind === "no-workspace" ? (
+        <NoSuchWorkspace />
+      ) : target.kind === "no-sketch" ? (
+        <NoSuchSketch />
+      ) : (
+        <NoSuchVersion workspaceId={target.workspaceId} sketchId={target.sketchId} sketchTitle={target.sketchTitle} latest={target.latest} asked={target.asked} here={target.here} />
+      )}
+    </AppShell>
+  );
+}
