@@ -16,9 +16,12 @@ export function startAutosave(store: EditorStore, persistence: SketchPersistence
   /** the sketch last handed to the persistence (at the start: the one loaded) */
   let kept: SketchFile | null = store.getState().sketch;
   let timer: ReturnType<typeof setTimeout> | null = null;
+  /** held while the user chooses between this tab's sketch and another tab's: nothing is written */
+  let held = false;
 
   const save = () => {
     timer = null;
+    if (held) return;
     const s = store.getState();
     // mid-drag the sketch on screen is not yet an edit: keep what the drag started from
     const sketch = s.gesture ? s.gesture.origin : s.sketch;
@@ -47,6 +50,26 @@ export function startAutosave(store: EditorStore, persistence: SketchPersistence
     flush: () => {
       if (!timer) return;
       clearTimeout(timer);
+      save();
+    },
+    /** Write nothing until `release` (another tab keeps a different sketch under the same key). */
+    hold: () => {
+      held = true;
+      if (timer) clearTimeout(timer);
+      timer = null;
+    },
+    /**
+     * Write again. "mine": keep this tab's sketch now, over what the other tab kept; "as-is": what
+     * is kept stays until the next change here (the user took the other tab's sketch, or let the
+     * kept one go).
+     */
+    release: (how: "mine" | "as-is") => {
+      held = false;
+      if (how === "as-is") {
+        kept = store.getState().gesture?.origin ?? store.getState().sketch;
+        return;
+      }
+      kept = null;
       save();
     },
     stop: () => {

@@ -22,6 +22,9 @@ export interface SaveOptions {
   message?: string;
 }
 
+/** What another tab or window of this browser did to the kept sketch: the sketch it keeps now (null: it let it go). */
+export type OutsideChange = { sketch: SketchFile | null };
+
 /** An uploaded drawing to trace over, as the editor needs it. */
 export type UnderlayUpload = { id: string; width: number; height: number; name: string };
 
@@ -41,6 +44,12 @@ export interface SketchPersistence {
    * message is for people). Absent: underlays need a saved sketch, and the editor says so.
    */
   uploadUnderlay?(file: File): Promise<UnderlayUpload>;
+  /**
+   * Tell the page when another tab or window changes what is kept (the same sketch open twice),
+   * so the two never overwrite each other unseen; returns the unsubscribe. Absent: nothing else
+   * writes where this page keeps its sketch.
+   */
+  watch?(onChange: (change: OutsideChange) => void): () => void;
 }
 
 export const SCRATCH_KEY = "counterpoise:scratch-sketch:v1";
@@ -51,8 +60,29 @@ interface StorageLike {
   removeItem(key: string): void;
 }
 
-/** The scratch sketch: works before sign-in, kept in local storage until saved to an account. */
-export function scratchPersistence(storage: StorageLike | null = typeof window !== "undefined" ? window.localStorage : null, key = SCRATCH_KEY): SketchPersistence {
+type EventsLike = Pick<Window, "addEventListener" | "removeEventListener">;
+
+/** The sketch a scratch record holds, or null (none, or one this version cannot read). */
+function scratchSketch(text: string | null): SketchFile | null {
+  if (!text) return null;
+  try {
+    const out = importSketchText(JSON.stringify((JSON.parse(text) as { sketch?: unknown }).sketch));
+    return out.ok ? out.sketch : null;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The scratch sketch: works before sign-in, kept in local storage until saved to an account.
+ * Every tab of the browser keeps it under the one key: `watch` hears another tab's writes (the
+ * storage event, which the writing tab itself never gets).
+ */
+export function scratchPersistence(
+  storage: StorageLike | null = typeof window !== "undefined" ? window.localStorage : null,
+  key = SCRATCH_KEY,
+  events: EventsLike | null = typeof window !== "undefined" ? window : null,
+): SketchPersistence {
   return {
     kind: "scratch",
     autosave: true,
@@ -80,6 +110,16 @@ export function scratchPersistence(storage: StorageLike | null = typeof window !
         return { ok: false, reason: "error", message: `This browser would not keep the sketch (${(err as Error).message}).` };
       }
       return { ok: true, savedAt };
+    },
+    watch(onChange) {
+      if (!events) return () => {};
+      // key null: the other tab cleared the whole of local storage
+      const heard = (e: Event) => {
+        const { key: changed, newValue } = e as StorageEvent;
+        if (changed === key || changed === null) onChange({ sketch: scratchSketch(changed === null ? null : newValue) });
+      };
+      events.addEventListener("storage", heard);
+      return () => events.removeEventListener("storage", heard);
     },
   };
 }

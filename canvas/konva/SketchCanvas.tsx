@@ -79,7 +79,7 @@ function Elements({ interaction, lifted }: { interaction: InteractionStore; lift
   const selection = useEditor((s) => s.selection);
   const scale = useEditor((s) => s.view.scale);
   const units = useEditor((s) => s.units);
-  const states = useAnalysis((s) => statesOf(s.shown));
+  const states = useAnalysis((s) => statesOf(s.shown, s.shownSketch?.supports));
   const seeThrough = useEditor((s) => Boolean(s.sketch.underlay && !s.sketch.underlay.hidden));
   const shifts = useStore(interaction, (s) => s.labelShifts);
   const selected = useMemo(() => new Set(selection), [selection]);

@@ -50,9 +50,10 @@ export function followLabelLayout(stores: EditorStores, interaction: Interaction
     const key: unknown[] = [scene, view.scale, e.units, shown, stale, view.x, view.y, viewport.width, viewport.height, e.selection, e.tool.kind];
     if (key.every((k, i) => k === last[i])) return;
     last = key;
-    const groups = elementGroups(scene, view.scale, e.units, statesOf(shown));
+    const supports = stores.analysis.getState().shownSketch?.supports;
+    const groups = elementGroups(scene, view.scale, e.units, statesOf(shown, supports));
     const frame = drawingFrame(view, viewport);
-    const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown), stale, frame) : [];
+    const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown, supports), stale, frame) : [];
     const handle = turnHandleBoxes(scene, e.selection, e.tool.kind, view.scale, e.units, frame);
     const shifts = placeElementLabels(groups, results, it.labelShifts, frame, handle);
     if (shifts !== it.labelShifts) interaction.setState({ labelShifts: shifts });

@@ -11,6 +11,7 @@ import type { SceneBody, SceneItem } from "../scene";
 import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, portKeepOutKey, standInPoint, unplacedPrims, type Box, type DrawState } from "../render/symbols";
 import { isFinitePoint } from "../geometry/polygon";
 import { supportStates } from "../render/results";
+import type { SlideSupport } from "../render/tipSlide";
 import { primsBox, type Prim } from "../render/prims";
 import { shiftTexts, type TextMove } from "../render/labels";
 import { ACCENT, BODY_FILL, INK } from "../render/palette";
@@ -25,11 +26,12 @@ const sameStates = (a: ReadonlyMap<string, DrawState>, b: ReadonlyMap<string, Dr
  * The drawing states of a result's supports (cached per result). A new result whose states are
  * all as before gives back the same map, so a drag that changes no state re-renders no node.
  */
-export function statesOf(result: SolveResult | null): ReadonlyMap<string, DrawState> {
+export function statesOf(result: SolveResult | null, supports?: readonly SlideSupport[]): ReadonlyMap<string, DrawState> {
   if (!result) return NO_STATES;
   let m = statesCache.get(result);
   if (!m) {
-    m = supportStates(result);
+    // the supports come with the result (the sketch it was solved from), so one map a result holds
+    m = supportStates(result, supports);
     if (sameStates(m, lastStates)) m = lastStates;
     statesCache.set(result, m);
   }

@@ -3,6 +3,7 @@
 // arrows, port pressure forces, and the pivot or free direction of a body that tips or is
 // unrestrained. Primitives are in content pixels (world × scale, y down).
 import { formatQuantity, type UnitSystem } from "@/solver/units";
+import { tipSlide, type SlideSupport } from "./tipSlide";
 import type { SolveResult, Vec2 } from "@/solver/types";
 import type { Scene, SceneBody, SceneItem } from "../scene";
 import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp, solidArrow, sub, text, unit, type Prim, type Pt } from "./prims";
@@ -21,7 +22,7 @@ export interface ResultOptions {
    * the result's labels, which are placed first)
    */
   under?: readonly Prim[];
-  /** the supports' states, when the caller has them already (`supportStates(result)`) */
+  /** the supports' states, when the caller has them already (`supportStates(result, supports)`) */
   states?: Map<string, DrawState>;
   /** the drawing area, in content pixels: a label its edge would cut moves inside (the canvas) */
   frame?: Box;
@@ -45,14 +46,24 @@ const fq = (v: number, k: Parameters<typeof formatQuantity>[1], o: Pick<ResultOp
 const finite = (p: Pt) => Number.isFinite(p[0]) && Number.isFinite(p[1]);
 const portReadable = (p: Extract<SceneItem, { kind: "inlet" | "outlet" }>) => Number.isFinite(p.angle) && p.at.every(Number.isFinite);
 
-/** The drawing states of every support: lifted and slack from the result (and, on a body that tips, from the margins), slips from its warnings. */
-export function supportStates(result: SolveResult): Map<string, DrawState> {
+/**
+ * The drawing states of every support: lifted and slack from the result (and, on a body that tips,
+ * from the margins), slips from its warnings. With the supports (the sketch the result is of, or
+ * its scene), a body that tips and slides as a whole (`tipSlide`) gets the slide mark on the
+ * contacts it still bears on, as its sentence says "tips … and slides".
+ */
+export function supportStates(result: SolveResult, supports?: readonly SlideSupport[]): Map<string, DrawState> {
   const states = new Map<string, DrawState>();
   const tips = (r: { body: string }) => result.bodies[r.body]?.status === "tips";
   // a body that tips: a contact still bearing in the forces that would hold it, but below zero in
   // its margin, leaves its base as the body turns (drawn lifted); friction says nothing there
   for (const [id, r] of Object.entries(result.reactions)) states.set(id, tips(r) && r.state === "bearing" && r.margin !== undefined && r.margin < 0 ? "lifted" : r.state);
   for (const w of result.warnings) if (w.code === "SLIP") for (const id of w.ids) if (states.get(id) === "bearing" && !tips(result.reactions[id])) states.set(id, "slips");
+  if (supports) {
+    const sliding = new Set(Object.values(result.reactions).map((r) => r.body).filter((b) => tips({ body: b })));
+    for (const b of sliding) if (!tipSlide(supports, result, b)) sliding.delete(b);
+    for (const [id, r] of Object.entries(result.reactions)) if (sliding.has(r.body) && states.get(id) === "bearing") states.set(id, "slips");
+  }
   return states;
 }
 
@@ -84,7 +95,7 @@ function segmentGap(a: Pt, b: Pt, c: Pt, d: Pt): number {
 export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions): ResultDrawing {
   const s = o.scale;
   const prims: Prim[] = [];
-  const states = o.states ?? supportStates(result);
+  const states = o.states ?? supportStates(result, scene.items);
   // the point each reaction's label belongs to (by the index of its first text), and every
   // support's point: a label is kept nearer its own support than any other
   const labelAnchors = new Map<number, LabelAnchor>();

@@ -80,7 +80,7 @@ export function resultLayer(groups: readonly Group[], scene: Scene, scale: numbe
  * result's drawing; the shifts used come back too.
  */
 export function scenePrims(scene: Scene, scale: number, units: UnitSystem, result: SolveResult | null, stale = false, shifts?: LabelShifts, family?: ResultOptions["family"]) {
-  const states = result ? supportStates(result) : null;
+  const states = result ? supportStates(result, scene.items) : null;
   const drawn = elementGroups(scene, scale, units, states);
   const results = result && states ? resultLayer(drawn, scene, scale, units, result, states, stale, undefined, family) : [];
   const moves = shifts ?? placeElementLabels(drawn, results);

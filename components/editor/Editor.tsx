@@ -31,6 +31,7 @@ import { ActionContextCtx, useActionContext } from "./useActions";
 import { PersistenceCtx } from "./usePersistence";
 import { useFileOps } from "./useFileOps";
 import { useShortcuts } from "./useShortcuts";
+import { OtherTabNotice, useOtherTab, type AutosaveHold } from "./OtherTab";
 
 const SketchCanvas = dynamic(() => import("@/canvas/konva/SketchCanvas"), {
   ssr: false,
@@ -133,7 +134,7 @@ function TrayOrReadOnly() {
   );
 }
 
-function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPersistence; saved: string | null; toolbarExtra?: ReactNode }) {
+function Workspace({ persistence, saved, toolbarExtra, notice }: { persistence: SketchPersistence; saved: string | null; toolbarExtra?: ReactNode; notice?: ReactNode }) {
   const stores = useStores();
   const [interaction] = useState(createInteractionStore);
   // the properties panel on screens too narrow to show it beside the drawing (see the aside below)
@@ -244,17 +245,18 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
             panel={{ open: panelOpen, toggle: () => openOverlay(panelOpen ? null : "panel") }}
             tray={{ open: trayOpen, toggle: () => openOverlay(trayOpen ? null : "tray") }}
           />
+          {notice}
           <div className="relative flex min-h-0 flex-1">
             <aside
               id="tray-panel"
-              className={`flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper sm:relative max-sm:absolute max-sm:inset-y-0 max-sm:left-0 max-sm:z-30 max-sm:shadow-[8px_0_24px_rgba(29,35,41,0.14)] ${trayOpen ? "" : "max-sm:hidden"}`}
+              className={`flex w-[232px] shrink-0 flex-col border-r border-rule bg-paper sm:relative max-sm:absolute max-sm:inset-y-0 max-sm:left-0 max-sm:z-30 max-sm:shadow-[8px_0_24px_rgb(var(--shade)/0.14)] ${trayOpen ? "" : "max-sm:hidden"}`}
               aria-label="Add and elements"
             >
               <TrayOrReadOnly />
               <Outline />
             </aside>
             <main className="flex min-w-0 flex-1 flex-col" aria-label="Drawing and results">
-              <div className="relative min-h-0 flex-1">
+              <div className="paper-sheet relative min-h-0 flex-1">
                 <SketchCanvas interaction={interaction} onController={setController} />
               </div>
               <StatusLine />
@@ -265,7 +267,7 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
             {/* beside the drawing on wide screens; on narrower ones a panel over the drawing's right side, opened from the toolbar */}
             <aside
               id="properties-panel"
-              className={`w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper min-[1180px]:relative max-[1179px]:absolute max-[1179px]:inset-y-0 max-[1179px]:right-0 max-[1179px]:z-30 max-[1179px]:max-w-[90vw] max-[1179px]:shadow-[-8px_0_24px_rgba(29,35,41,0.14)] ${panelOpen ? "" : "max-[1179px]:hidden"}`}
+              className={`w-[336px] shrink-0 overflow-y-auto border-l border-rule bg-paper min-[1180px]:relative max-[1179px]:absolute max-[1179px]:inset-y-0 max-[1179px]:right-0 max-[1179px]:z-30 max-[1179px]:max-w-[90vw] max-[1179px]:shadow-[-8px_0_24px_rgb(var(--shade)/0.14)] ${panelOpen ? "" : "max-[1179px]:hidden"}`}
               aria-label="Properties and parameters"
             >
               <div className="flex items-center justify-end border-b border-rule px-3 py-1.5 min-[1180px]:hidden">
@@ -287,6 +289,8 @@ function Workspace({ persistence, saved, toolbarExtra }: { persistence: SketchPe
 
 function useAutosave(store: EditorStore, persistence: SketchPersistence, ready: boolean) {
   const [saved, setSaved] = useState<string | null>(null);
+  // held while another tab's sketch waits for the user's choice (OtherTab.tsx)
+  const control = useRef<AutosaveHold | null>(null);
   useEffect(() => {
     if (!ready || !persistence.autosave) return;
     const autosave = startAutosave(store, persistence, {
@@ -294,21 +298,23 @@ function useAutosave(store: EditorStore, persistence: SketchPersistence, ready: 
         if (out.ok) setSaved(new Date(out.savedAt).toLocaleTimeString([], { hour: "2-digit", minute: "2-digit", second: "2-digit" }));
       },
     });
+    control.current = autosave;
     window.addEventListener("pagehide", autosave.flush);
     return () => {
       window.removeEventListener("pagehide", autosave.flush);
       autosave.flush();
       autosave.stop();
+      control.current = null;
     };
   }, [store, persistence, ready]);
-  return saved;
+  return { saved, control };
 }
 
 export function SketchUnavailable({ message }: { message: string }) {
   const [here] = useState(() => (typeof window === "undefined" ? "/sketches/new" : window.location.pathname + window.location.search));
   return (
     <div className="drafting-grid flex min-h-screen items-center justify-center px-6">
-      <div className="max-w-md rounded-lg border border-rule bg-paper-card p-6 shadow-[0_1px_0_#cfc8b8]">
+      <div className="max-w-md rounded-lg border border-rule bg-paper-card p-6 shadow-[0_1px_0_rgb(var(--rule))]">
         <h1 className="text-lg font-semibold">This sketch cannot be opened</h1>
         <p className="mt-2 text-[14px] leading-relaxed text-ink-soft" data-testid="unavailable-message">
           {message}
@@ -363,8 +369,9 @@ function sessionStore(): HistoryStorage | null {
 export function Editor({ persistence, example, toolbarExtra }: { persistence: SketchPersistence; example?: string; toolbarExtra?: ReactNode }) {
   const [store] = useState(() => createEditorStore());
   const [phase, setPhase] = useState<{ kind: "loading" } | { kind: "ready" } | { kind: "failed"; message: string }>({ kind: "loading" });
-  const saved = useAutosave(store, persistence, phase.kind === "ready");
+  const { saved, control } = useAutosave(store, persistence, phase.kind === "ready");
   const ready = phase.kind === "ready";
+  const otherTab = useOtherTab(store, persistence, control, ready);
   // the undo history, kept for a reload of this tab once the sketch is open
   useEffect(() => (ready && persistence.historyKey && !store.getState().readOnly ? keepHistory(store, persistence.historyKey, sessionStore()) : undefined), [ready, persistence, store]);
 
@@ -388,6 +395,9 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
         openExampleOver(store, ex, "the sketch you had here");
       } else if (ex) store.getState().reset(ex.sketch);
       store.getState().setReadOnly(Boolean(out.ok && out.sketch && out.readOnly));
+      // the example is kept at once, as any change is: the address loses ?example= below, so a
+      // reload opens what is kept (over a kept sketch, Undo still goes back to it after the reload)
+      if (ex && persistence.autosave && !store.getState().readOnly) void persistence.save(store.getState().sketch);
       // the undo history of this tab from before a reload, when it leads to the sketch opened
       if (kept && !ex && !kept.readOnly && persistence.historyKey) restoreHistory(store, persistence.historyKey, sessionStore());
       if (!out.ok) store.getState().notify(out.message);
@@ -406,7 +416,7 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
   if (phase.kind === "loading") return <div className="flex min-h-screen items-center justify-center text-sm text-ink-faint">Opening the sketch…</div>;
   return (
     <EditorProvider editor={store}>
-      <Workspace persistence={persistence} saved={saved} toolbarExtra={toolbarExtra} />
+      <Workspace persistence={persistence} saved={saved} toolbarExtra={toolbarExtra} notice={<OtherTabNotice {...otherTab} />} />
     </EditorProvider>
   );
 }

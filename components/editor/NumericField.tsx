@@ -12,7 +12,7 @@ import { numericText, toNumeric } from "@/canvas/model/numeric";
 import { suggestUnitsFor } from "@/solver/expressionErrors";
 import { exampleIn, type Display, type Example } from "./fieldDefs";
 import type { LastGood } from "./useCommit";
-import { INPUT } from "./ui";
+import { endVisitHere, INPUT } from "./ui";
 
 let session = 0;
 
@@ -196,7 +196,11 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
               if (back !== value) onCommit(back, visit());
               setTypedPlain(false);
             }
-            if (e.key === "Enter" || e.key === "Escape") (e.target as HTMLInputElement).blur();
+            // Enter ends the visit (its undo step) and stays in the field, so a keyboard user is not
+            // sent back to the top of the page; Escape leaves the field (a panel over the drawing
+            // closes on the next Escape)
+            if (e.key === "Enter") endVisitHere(e.currentTarget);
+            if (e.key === "Escape") e.currentTarget.blur();
           }}
         />
       </div>

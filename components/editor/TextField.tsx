@@ -3,7 +3,7 @@
 // visit. When the file format refuses the text (a load group must start with a letter), the
 // reason shows under the field and nothing is stored.
 import { useId, useRef, useState } from "react";
-import { INPUT } from "./ui";
+import { endVisitHere, INPUT } from "./ui";
 
 let session = 0;
 
@@ -60,7 +60,7 @@ export function TextField({
       {multiline ? (
         <textarea {...common} rows={3} className={`${INPUT} h-auto py-1 leading-snug`} />
       ) : (
-        <input {...common} className={INPUT} onKeyDown={(e) => e.key === "Enter" && (e.target as HTMLInputElement).blur()} />
+        <input {...common} className={INPUT} onKeyDown={(e) => e.key === "Enter" && !error && endVisitHere(e.currentTarget)} />
       )}
       {error && (
         <p id={errorId} className="mt-0.5 text-[11px] leading-snug text-caution" aria-live="polite">

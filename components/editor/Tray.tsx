@@ -80,7 +80,7 @@ export function Tray() {
         Add
       </h2>
       <p id="tray-keys" className="sr-only">
-        Enter or Space adds it now: a body in the middle of the view, anything else on the selected body. A click chooses the tool, then click on the canvas.
+        Enter or Space adds it now: a body in the middle of the view, anything else on the selected body; the arrow keys then move what was added. A click chooses the tool, then click on the canvas.
       </p>
       {SECTIONS.map((sec) => (
         <div key={sec.title} className="mt-2">
@@ -97,6 +97,7 @@ export function Tray() {
                   type="button"
                   aria-pressed={active}
                   aria-disabled={disabled}
+                  data-arrows="nudge"
                   title={`${a.label}${key ? ` (${shortcutLabel(key)})` : ""} — ${disabled ? "draw a body first" : a.hint}`}
                   draggable={!disabled}
                   onDragStart={(e) => {

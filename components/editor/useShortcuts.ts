@@ -15,7 +15,11 @@ function typingIn(target: EventTarget | null): boolean {
 export function useShortcuts(getCtx: () => ActionContext, interaction: InteractionStore) {
   useEffect(() => {
     const down = (e: KeyboardEvent) => {
-      if (e.defaultPrevented || typingIn(e.target)) return;
+      if (e.defaultPrevented) return;
+      // in a field the keys are the field's, but for the file's own (Ctrl/⌘+S, +E, +O), which mean
+      // nothing there and would open the browser's "Save page" or "Open file" instead; a field
+      // stores what is typed as it is typed, so the sketch they act on is the one on screen
+      if (typingIn(e.target) && actionForKey(e)?.group !== "file") return;
       const ctx = getCtx();
       const s = ctx.stores.editor.getState();
       if (e.key === "Escape") {
@@ -51,9 +55,13 @@ export function useShortcuts(getCtx: () => ActionContext, interaction: Interacti
           return;
         }
       }
-      // a focused button or link keeps Enter and Space; arrows belong to lists that handle them
-      const onControl = (e.target as HTMLElement | null)?.closest?.("button, a, [role=menu]");
-      if (onControl && (e.key === "Enter" || e.key === " " || e.key.startsWith("Arrow"))) return;
+      // a focused button or link keeps Enter and Space; arrows belong to lists that handle them,
+      // except on the tray's buttons, whose Enter has just added the selected element and said
+      // "Arrow keys move it": there they nudge it (the tray is no list the arrows walk)
+      const target = e.target as HTMLElement | null;
+      const onControl = target?.closest?.("button, a, [role=menu]");
+      const arrowsNudge = e.key.startsWith("Arrow") && !!target?.closest?.("[data-arrows=nudge]");
+      if (onControl && !arrowsNudge && (e.key === "Enter" || e.key === " " || e.key.startsWith("Arrow"))) return;
       const action = actionForKey(e);
       // copy, cut and paste reach the sketch through the browser's clipboard events (below)
       if (!action || action.clipboard) return;

@@ -214,7 +214,7 @@ export function ResultsDock() {
                   aria-checked={sense === id}
                   {...radioKeys(i, 2, sense === id, (k) => setSense(k === 0 ? "body" : "support"))}
                   onClick={() => setSense(id)}
-                  className={`rounded px-2 py-0.5 ${sense === id ? "bg-reaction-soft font-semibold text-reaction" : "text-ink-soft hover:text-ink"}`}
+                  className={`rounded px-2 py-0.5 pointer-coarse:min-h-7 ${sense === id ? "bg-reaction-soft font-semibold text-reaction" : "text-ink-soft hover:text-ink"}`}
                 >
                   {label}
                 </button>
@@ -240,7 +240,7 @@ function ReactionsCsv({ sense }: { sense: Sense }) {
   return (
     <button
       type="button"
-      className="order-last ml-2 pb-1 text-[12px] text-ink-soft hover:text-ink disabled:opacity-40"
+      className="order-last ml-2 pb-1 text-[12px] text-ink-soft hover:text-ink disabled:opacity-40 pointer-coarse:min-h-7 pointer-coarse:min-w-7"
       disabled={!shown}
       aria-label="Download the reactions as CSV"
       // the supports by their labels, as the table on screen names them

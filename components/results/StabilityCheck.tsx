@@ -6,6 +6,7 @@
 import { convert, type UnitSystem } from "@/solver/units";
 import { handCheckNumber } from "@/solver/report";
 import type { OverturningLines, SlidingLines, StabilityLines } from "./stabilityCheck";
+import { BELOW_ONE } from "./statusSentence";
 
 interface Units {
   units: UnitSystem;
@@ -15,7 +16,8 @@ interface Units {
 
 const show = (u: Units, q: "force" | "moment", si: number) => `${handCheckNumber(convert(si, q, u.units, q === "force" ? u.force : u.moment).value)} ${q === "force" ? u.force : u.moment}`;
 const ratio = (x: number) => (Number.isFinite(x) ? handCheckNumber(x) : "∞");
-const verdict = (l: { factor: number; required: number; pass: boolean }) => (l.pass ? `at least the required ${l.required}` : `below the required ${l.required}`);
+const verdict = (l: { factor: number; required: number; pass: boolean }, against: keyof typeof BELOW_ONE) =>
+  l.pass ? `at least the required ${l.required}` : `below the required ${l.required}${l.factor < 1 ? ` (${BELOW_ONE[against]})` : ""}`;
 
 /** The Σ row under a two-column check: each cell with its test id. */
 function SumRow({ cells }: { cells: Array<[string, string]> }) {
@@ -57,7 +59,7 @@ function Overturning({ o, u }: { o: OverturningLines; u: Units }) {
         </tbody>
       </table>
       <p className={`mt-0.5 text-[12px] ${o.pass ? "text-ink-soft" : "font-semibold text-caution"}`} data-testid="overturning-factor">
-        factor = {show(u, "moment", o.restoring)} / {show(u, "moment", o.overturning)} = {ratio(o.factor)}, {verdict(o)}
+        factor = {show(u, "moment", o.restoring)} / {show(u, "moment", o.overturning)} = {ratio(o.factor)}, {verdict(o, "overturning")}
       </p>
     </section>
   );
@@ -94,7 +96,7 @@ function Sliding({ s, u }: { s: SlidingLines; u: Units }) {
         </tbody>
       </table>
       <p className={`mt-0.5 text-[12px] ${s.pass ? "text-ink-soft" : "font-semibold text-caution"}`} data-testid="sliding-factor">
-        {Number.isFinite(s.factor) ? `factor = Σμn / |Σt| = ${show(u, "force", s.available)} / ${show(u, "force", s.driving)} = ${ratio(s.factor)}, ${verdict(s)}` : "no load tends to slide it"}
+        {Number.isFinite(s.factor) ? `factor = Σμn / |Σt| = ${show(u, "force", s.available)} / ${show(u, "force", s.driving)} = ${ratio(s.factor)}, ${verdict(s, "sliding")}` : "no load tends to slide it"}
       </p>
     </section>
   );

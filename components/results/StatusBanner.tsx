@@ -12,9 +12,11 @@ const BADGE: Record<Tone, { word: string; cls: string }> = {
   strained: { word: "Over μ", cls: "border-dashed border-caution text-caution" },
   lifts: { word: "Lifts", cls: "border-dashed border-caution text-caution" },
   slips: { word: "Slips", cls: "border-dashed border-caution text-caution" },
-  tips: { word: "Tips", cls: "border-caution bg-caution text-white" },
-  unrestrained: { word: "Free", cls: "border-caution bg-caution text-white" },
+  tips: { word: "Tips", cls: "border-caution bg-caution text-on-accent" },
+  unrestrained: { word: "Free", cls: "border-caution bg-caution text-on-accent" },
 };
+
+const TIPS_AND_SLIDES = { ...BADGE.tips, word: "Tips, slides" };
 
 /** The errors after the first, each on its own line (a few; the fields are marked in the panel). */
 const MORE_SHOWN = 4;
@@ -33,7 +35,7 @@ function MoreErrors({ words }: { words: string[] }) {
 }
 
 /** A body that holds but falls short of a required factor of safety: the badge says so, not "Holds". */
-const SHORT = { word: "FoS short", cls: "border-caution bg-caution text-white" };
+const SHORT = { word: "FoS short", cls: "border-caution bg-caution text-on-accent" };
 
 /** The body's factors of safety as drawn, under its status: in the caution colour when one falls short. */
 function StabilityLine({ sentence }: { sentence: { text: string; pass: boolean } | null }) {
@@ -78,7 +80,8 @@ export function StatusBanner() {
       {sentences.map((s) => {
         const factors = numeric ? stabilitySentence(numeric, s.body, stability?.[s.body]) : null;
         const short = factors?.pass === false && (s.tone === "holds" || s.tone === "strained");
-        const badge = short ? SHORT : BADGE[s.tone];
+        // a body that tips and slides: both in the badge, as in the sentence
+        const badge = short ? SHORT : s.alsoSlips && s.tone === "tips" ? TIPS_AND_SLIDES : BADGE[s.tone];
         return (
           <div key={s.body} className={`grid grid-cols-[auto_minmax(0,1fr)] gap-x-2 ${stale ? "opacity-60" : ""}`}>
             {/* the badge and the headline read as one sentence; the details line up under the headline */}

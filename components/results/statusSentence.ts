@@ -7,6 +7,7 @@ import { nearestOnOutline, pointInPolygon, polygonDiameter } from "@/solver/geom
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
 import type { BodyStability } from "@/solver/stability";
+import { tipSlide } from "@/canvas/render/tipSlide";
 
 /** "strained": the body holds as a whole, but one contact needs more friction than its own μ gives */
 export type Tone = "holds" | "strained" | "lifts" | "slips" | "tips" | "unrestrained";
@@ -18,6 +19,8 @@ export interface StatusSentence {
   headline: string;
   /** further facts, each a sentence */
   details: string[];
+  /** a body that tips and slides as a whole as well: the badge says both */
+  alsoSlips?: boolean;
 }
 
 const KIND_WORD: Record<Support["kind"], string> = { pin: "pin", roller: "roller", contact: "contact", fixed: "fixed support", tie: "tie" };
@@ -145,14 +148,37 @@ function pivotName(c: Context, about: Vec2): string {
   return `the point (${Number((about[0] * k).toPrecision(3))}, ${Number((about[1] * k).toPrecision(3))}) ${L}`;
 }
 
-function tipSentence(c: Context): string {
+/**
+ * A body that tips and slides too (`tipSlide`, canvas/render/tipSlide.ts: the body taken as a
+ * whole, as its factor of safety against sliding takes it). Where it cannot be taken as a whole, a
+ * bearing contact over its own μ in the forces shown is said instead. Null when it only tips. The
+ * solver does not say which of the two would start first, so neither is put first.
+ */
+function tipSlipWords(c: Context): { words: string; wholeBody: boolean } | null {
+  const whole = tipSlide(c.supports, c.result, c.id);
+  if (whole) {
+    const [needs, has] = ratios(whole.needed, whole.mu);
+    return { words: `sliding, it must resist ${force(c, Math.abs(whole.t))} and can give ${force(c, whole.mu * Math.max(whole.n, 0))} (needs μ = ${needs} as a whole, has ${has})`, wholeBody: true };
+  }
+  const slipping = overloaded(c);
+  if (!slipping.length) return null;
+  const [s, r] = slipping[0];
+  const [needs, has] = ratios(r.friction!.needed, r.friction!.mu);
+  const more = slipping.length > 1 ? ` (and ${list(slipping.slice(1).map(([x]) => supportName(x)))})` : "";
+  return { words: `${supportName(s)} would slip too, needing ${needs} with μ = ${has}${more}`, wholeBody: false };
+}
+
+function tipSentence(c: Context, slip: { words: string; wholeBody: boolean } | null): string {
   const pulling = c.reactions.filter(([, r]) => r.state === "lifted" || r.state === "slack").sort((a, b) => Math.abs(b[1].n ?? 0) - Math.abs(a[1].n ?? 0));
   const fm = c.body.freeMotion;
-  const head = fm?.kind === "rotation" ? `Tips about ${pivotName(c, fm.about)}` : fm ? `Would move along ${Number(fm.angle.toFixed(1))}°` : "Tips";
-  if (!pulling.length) return head;
+  const turns = fm?.kind === "rotation" ? `Tips about ${pivotName(c, fm.about)}` : fm ? `Would move along ${Number(fm.angle.toFixed(1))}°` : "Tips";
+  // both named in the headline: a body that tips and slides is not to be read as one that only tips
+  const head = slip?.wholeBody ? `${turns} and slides` : turns;
+  const also = slip ? `; ${slip.words}` : "";
+  if (!pulling.length) return `${head}${slip ? ` — ${slip.words}` : ""}`;
   const [s, r] = pulling[0];
   const verb = s.kind === "tie" ? "push" : "pull";
-  return `${head} — ${supportName(s)} would have to ${verb} ${force(c, r.n ?? Math.hypot(r.fx, r.fy))}`;
+  return `${head} — ${supportName(s)} would have to ${verb} ${force(c, r.n ?? Math.hypot(r.fx, r.fy))}${also}`;
 }
 
 function liftSentence(c: Context): string {
@@ -192,11 +218,16 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
     const c: Context = { id: b.id, body, supports, reactions, result, units, forceUnit, name: b.label || b.id };
     let tone: Tone = body.status;
     let headline: string;
+    let alsoSlips = false;
     const slip = body.status === "holds" || body.status === "lifts" ? slipSentence(c) : null;
     if (body.status === "unrestrained") {
       headline = body.freeMotion ? `Unrestrained — ${describeFreeMotion(body.freeMotion, supports)}; add a support or a tie` : "Unrestrained — add a support or a tie";
       if (!supports.length) headline = "Unrestrained — the body has no supports yet; add a support or a tie";
-    } else if (body.status === "tips") headline = tipSentence(c);
+    } else if (body.status === "tips") {
+      const slides = tipSlipWords(c);
+      headline = tipSentence(c, slides);
+      alsoSlips = !!slides?.wholeBody;
+    }
     else if (slip && !(slip.strained && body.status === "lifts")) {
       tone = slip.strained ? "strained" : "slips";
       headline = slip.headline;
@@ -235,7 +266,7 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
         if (w.ids.some((i) => ids.has(i))) details.push(w.message.endsWith(".") ? w.message : `${w.message}.`);
       }
     }
-    out.push({ body: b.id, tone, headline, details });
+    out.push(alsoSlips ? { body: b.id, tone, headline, details, alsoSlips } : { body: b.id, tone, headline, details });
   }
   // warnings that belong to no body (unitless trigonometry in a parameter)
   const general = result.warnings.filter((w) => w.code === "TRIG_UNITLESS").map((w) => (/[.?!]$/.test(w.message) ? w.message : `${w.message}.`));
@@ -253,6 +284,9 @@ function factorText(factor: number, required: number): string {
   }
   return String(factor);
 }
+
+/** A factor below 1 is no margin short but the thing itself: said, for each check (both, when both are). */
+export const BELOW_ONE = { overturning: "under 1: it tips", sliding: "under 1: it slides" } as const;
 
 /**
  * One body's factors of safety as drawn, in a sentence under its status: "Factors of safety as
@@ -274,7 +308,7 @@ export function stabilitySentence(sketch: Sketch, body: string, st: BodyStabilit
     else if (c.pass) bits.push(`against ${against}${about}${whole} ${f} (${c.required} required)`);
     else {
       pass = false;
-      bits.push(`against ${against}${about}${whole} ${f}, below the required ${c.required}`);
+      bits.push(`against ${against}${about}${whole} ${f}, below the required ${c.required}${c.factor < 1 ? ` (${BELOW_ONE[against]})` : ""}`);
     }
   }
   if (!bits.length) return null;

@@ -4,7 +4,8 @@
 // of all of them at once: reactions per case with the governing case, the envelope with each
 // support's design load, and the factors of safety against overturning and sliding.
 import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState } from "react";
-import { caseInputErrors, caseWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
+import { asDrawnStudy, caseInputErrors, caseWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
+import { asDrawnTwin } from "@/solver/report";
 import { errorPlace } from "@/components/results/errorPlace";
 import type { CaseFile, CombinationFile, SketchFile } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
@@ -13,7 +14,7 @@ import { useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { combinationWarningWords, formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms, type Parsed } from "./casesText";
-import { CaseTables } from "./CaseTables";
+import { asDrawnName, CaseTables } from "./CaseTables";
 import { SideScroll } from "./ReportTable";
 
 /** Each field's refusal, by its label: reported up so the run waits until they are put right. */
@@ -200,6 +201,10 @@ export function CasesPanel() {
   };
 
   const staleResult = study && study.of !== sketch;
+  // the case whose run is the sketch as drawn over again (no changes, or changes that restate the
+  // drawing's values): its results are the ones the status above already gives, so it is named
+  // "<case>, as drawn" and said once, as on a version's page and the calc sheet
+  const twin = useMemo(() => (study?.of.cases?.length ? asDrawnTwin(study.result, asDrawnStudy(study.of)) : null), [study]);
 
   return (
     <FieldErrors.Provider value={reportError}>
@@ -391,7 +396,12 @@ export function CasesPanel() {
         ) : (
           <div className={staleResult ? "opacity-60" : ""} data-testid="case-results">
             {staleResult && <p className="mb-1 text-[12px] font-medium text-caution">The sketch changed since this run: run the cases again.</p>}
-            <CaseTables result={study.result} units={units} />
+            {twin && (
+              <p className="mb-1 text-[12px] text-ink-soft" data-testid="as-drawn-twin">
+                {asDrawnName(study.result.runs.find((r) => r.id === twin)?.name ?? twin)}: this case is the sketch as drawn, so its reactions and factors are the ones the status above gives.
+              </p>
+            )}
+            <CaseTables result={study.result} units={units} asDrawn={twin} />
           </div>
         )}
       </div>

@@ -32,6 +32,62 @@ describe("properties form: the schema's refusals at the field", () => {
     expect(form.queryByText(/must start with a letter/)).toBeNull();
   }, 15_000);
 
+  it("Enter ends the entry but keeps the focus in the field (a number, a text), and the next entry there is its own undo step", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(beam());
+    await user.click(outlineRow(/Point force l1/));
+    const form = within(screen.getByTestId("element-form"));
+    const magnitude = form.getByLabelText("Magnitude");
+    await user.clear(magnitude);
+    await user.type(magnitude, "12 kN{Enter}");
+    // not thrown back to the top of the page: the next Tab goes on from here
+    expect(magnitude).toHaveFocus();
+    await user.clear(magnitude);
+    await user.type(magnitude, "14 kN{Enter}");
+    expect(magnitude).toHaveFocus();
+    await waitFor(() => expect((storedSketch(mem)!.loads[0] as { magnitude?: unknown }).magnitude).toBe("14 kN"), { timeout: 3000 });
+    // two entries, two steps: one Undo goes back to the first
+    screen.getByTestId("tray-body").focus();
+    await user.keyboard("{Control>}z{/Control}");
+    await waitFor(() => expect((storedSketch(mem)!.loads[0] as { magnitude?: unknown }).magnitude).toBe("12 kN"), { timeout: 3000 });
+    const label = form.getByLabelText("Label");
+    await user.clear(label);
+    await user.type(label, "Drum{Enter}");
+    expect(label).toHaveFocus();
+    expect(label).toHaveValue("Drum");
+  }, 15_000);
+
+  it("Ctrl+S in a field saves (not the browser's Save page), with what is typed there", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(beam());
+    const title = screen.getByLabelText("Title");
+    await user.clear(title);
+    await user.type(title, "Beam, checked{Enter}");
+    expect(title).toHaveFocus();
+    await user.keyboard("{Control>}s{/Control}");
+    expect(screen.getByTestId("notice")).toHaveTextContent("Kept in this browser. Sign in to save it to a workspace.");
+    await waitFor(() => expect(storedSketch(mem)?.title).toBe("Beam, checked"));
+    // the field's own keys stay the field's: Ctrl+A selects its text, nothing in the sketch
+    await user.keyboard("{Control>}a{/Control}");
+    expect(screen.getAllByRole("button", { name: /^Body b/ })[0]).toHaveAttribute("aria-pressed", "false");
+  }, 15_000);
+
+  it("on a touch screen Enter (the on-screen keyboard's Done) leaves the field, so that keyboard goes", async () => {
+    window.matchMedia = ((query: string) => ({ matches: query === "(pointer: coarse)", media: query, addEventListener() {}, removeEventListener() {} })) as unknown as typeof window.matchMedia;
+    try {
+      const user = userEvent.setup();
+      const { mem } = await renderEditor(beam());
+      await user.click(outlineRow(/Point force l1/));
+      const magnitude = within(screen.getByTestId("element-form")).getByLabelText("Magnitude");
+      await user.clear(magnitude);
+      await user.type(magnitude, "12 kN{Enter}");
+      expect(magnitude).not.toHaveFocus();
+      await waitFor(() => expect((storedSketch(mem)!.loads[0] as { magnitude?: unknown }).magnitude).toBe("12 kN"), { timeout: 3000 });
+    } finally {
+      delete (window as { matchMedia?: unknown }).matchMedia;
+    }
+  }, 15_000);
+
   it("a number field shows the expression's value with its unit, or the parser's error, under the field", async () => {
     const user = userEvent.setup();
     await renderEditor({ ...beam(), parameters: { r: "0.25 m" } });

@@ -203,9 +203,16 @@ describe("an example link over a kept scratch sketch", () => {
   });
 
   it("an empty scratch sketch is simply replaced (nothing to undo to)", async () => {
-    await renderEditor(undefined, "pump-skid");
+    const { mem } = await renderEditor(undefined, "pump-skid");
     expect(screen.getByTestId("sketch-title")).toHaveTextContent(exampleById("pump-skid")!.sketch.title!);
     expect(screen.getByTestId("undo")).toBeDisabled();
+    // and kept at once: the link's ?example= is dropped, so a reload opens what is kept, not an empty sketch
+    await waitFor(() => expect(storedSketch(mem)?.title).toBe(exampleById("pump-skid")!.sketch.title));
+  });
+
+  it("over a kept sketch, the example is what is kept (the kept sketch stays one Undo away)", async () => {
+    const { mem } = await renderEditor(beam(), "pump-skid");
+    await waitFor(() => expect(storedSketch(mem)?.title).toBe(exampleById("pump-skid")!.sketch.title));
   });
 });
 

@@ -55,6 +55,28 @@ describe("the tray from the keyboard", () => {
     expect(screen.getAllByRole("button", { name: /^Body b/ })).toHaveLength(1);
   });
 
+  it("the arrow keys then move what was added, as the notice says, with the focus still on the tray", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(emptySketch());
+    screen.getByTestId("tray-body").focus();
+    await user.keyboard("{Enter}");
+    const outlet = screen.getByTestId("tray-outlet");
+    outlet.focus();
+    await user.keyboard("{Enter}");
+    expect(screen.getByTestId("notice")).toHaveTextContent("Outlet added to Body 1. Arrow keys move it");
+    await waitFor(() => expect(storedSketch(mem)?.ports).toHaveLength(1));
+    const [x, y] = storedSketch(mem)!.ports[0].at as number[];
+    // a grid step a press (ten with Shift), the step following the zoom: right, then up
+    await user.keyboard("{ArrowRight}");
+    await waitFor(() => expect((storedSketch(mem)!.ports[0].at as number[])[0]).toBeGreaterThan(x));
+    expect((storedSketch(mem)!.ports[0].at as number[])[1]).toBeCloseTo(y, 9);
+    await user.keyboard("{Shift>}{ArrowUp}{/Shift}");
+    await waitFor(() => expect((storedSketch(mem)!.ports[0].at as number[])[1]).toBeGreaterThan(y));
+    expect(outlet).toHaveFocus();
+    // and the tray's own buttons did not take the keys for anything else (no tool chosen)
+    expect(outlet).toHaveAttribute("aria-pressed", "false");
+  });
+
   it("a click still only chooses the tool", async () => {
     const user = userEvent.setup();
     await renderEditor(emptySketch());
