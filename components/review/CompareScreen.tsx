@@ -37,6 +37,8 @@ function useDocument(sketchId: string, which: number | "draft") {
       error: merged.error ? "The versions your kept changes are merged with could not be loaded." : null,
       pending: merged.isPending,
       conflicts: m?.conflicts ?? [],
+      // the tab that kept it: bringing back or discarding acts on this draft, not a newer one another tab keeps meanwhile
+      tab: draft.tab ?? "",
     };
   }
   return {
@@ -131,14 +133,14 @@ export function CompareScreen({
                   You and a later version both changed {b.conflicts.join(", ")}: bringing your changes back uses yours there.
                 </p>
               ) : null}
-              <a href={`/sketches/${sketchId}?restore=1`} className="rounded-md bg-ink px-3 py-2 font-medium text-paper hover:bg-ink-soft">
+              <a href={`/sketches/${sketchId}?restore=1&draft=${encodeURIComponent(b.tab ?? "")}`} className="rounded-md bg-ink px-3 py-2 font-medium text-paper hover:bg-ink-soft">
                 Bring my changes back on top of the newest version
               </a>
               <button
                 type="button"
                 className="rounded-md px-3 py-2 text-ink-soft hover:text-ink"
                 onClick={() => {
-                  discardDraft(sketchId);
+                  discardDraft(sketchId, b.tab);
                   router.push(base);
                 }}
               >
@@ -229,7 +231,7 @@ function Overlay({ before, after, beforeLabel, afterLabel, marks, units }: Drawi
         <span className="font-semibold text-ink-soft">before: {beforeLabel}</span> <span className="text-ink-soft">drawn faint and grey, at the same scale (its labels left off but for what was removed; the tables give every value).</span>
       </figcaption>
       <Enlargeable naturalWidth={1280} label="The two drawings laid over each other">
-        <div className="relative overflow-hidden rounded-md border border-rule bg-paper">
+        <div className="paper-sheet relative overflow-hidden rounded-md border border-rule bg-paper">
           <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} frame={frame} layer onlyLabelsOf={removedIds} className="opacity-40 grayscale" />
           <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} frame={frame} layer className="compare-over absolute inset-0" />
         </div>

@@ -17,14 +17,16 @@ import { can } from "@/lib/roles";
 import { discardDraft, keepDraft, readDraft, type Draft } from "./drafts";
 import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
 import { reviewNote } from "./reviewNote";
+import { announceSaved, watchSaved, type SavedElsewhere } from "./savedElsewhere";
 import { sameDocument, type SaveFlow } from "./savedPersistence";
 import { NarrowLabel } from "@/components/editor/NarrowLabel";
 
 const CHIP = "h-7 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
+const CARD = "rounded-lg border p-3 text-[13px] text-ink shadow-[0_6px_24px_rgb(var(--shade)/0.14)]";
 
 function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; latest: number; workspaceId: string; onDiscard: () => void }) {
   return (
-    <div role="status" data-testid="kept-work" className="fixed bottom-10 right-4 z-40 max-w-sm rounded-lg border border-caution/40 bg-caution-soft p-3 text-[13px] text-ink shadow-[0_6px_24px_rgba(29,35,41,0.14)]">
+    <div role="status" data-testid="kept-work" className={`${CARD} border-caution/40 bg-caution-soft`}>
       <p className="font-semibold">Your unsaved changes are kept in this browser</p>
       <p className="mt-1 text-ink-soft">
         Made on v{draft.baseVersion}, kept {formatDateTime(draft.keptAt)}. The editor shows v{latest}.
@@ -33,11 +35,39 @@ function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; lat
         <Link href={`/workspaces/${workspaceId}/sketches/${draft.sketchId}/compare?from=${latest}&to=draft`} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
           Compare v{latest} with them
         </Link>
-        <a href={`/sketches/${draft.sketchId}?restore=1`} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+        <a href={`/sketches/${draft.sketchId}?restore=1&draft=${encodeURIComponent(draft.tab ?? "")}`} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
           Bring them back
         </a>
         <button type="button" onClick={onDiscard} className="rounded-md px-2 py-1 text-ink-soft hover:text-ink">
           Discard
+        </button>
+      </div>
+    </div>
+  );
+}
+
+/**
+ * Another tab of this browser saved a newer version of the sketch open here: said calmly, with
+ * what Save will do; with no unsaved changes here, the newest version is one click away.
+ */
+function SavedInAnotherTab({ saved, base, dirty, onOpen, onDismiss }: { saved: SavedElsewhere; base: number; dirty: boolean; onOpen: () => void; onDismiss: () => void }) {
+  return (
+    <div role="status" data-testid="saved-elsewhere" className={`${CARD} border-ink/15 bg-paper-card`}>
+      <p>
+        <span className="font-semibold">v{saved.version} was saved in another tab</span>
+        {saved.at ? ` (${formatDateTime(saved.at)})` : ""}
+        {dirty
+          ? `; this tab’s work is based on v${base}. Save will offer to fork it or to reload and compare.`
+          : `; this tab shows v${base} and has no unsaved changes.`}
+      </p>
+      <div className="mt-2 flex flex-wrap gap-2">
+        {dirty ? null : (
+          <button type="button" onClick={onOpen} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
+            Open v{saved.version}
+          </button>
+        )}
+        <button type="button" onClick={onDismiss} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+          Got it
         </button>
       </div>
     </div>
@@ -58,19 +88,20 @@ function useKeepUnsaved(flow: SaveFlow, waiting: boolean) {
     const { info, base } = flow.getState();
     if (waiting || !info || base === null || !can(info.role, "version.save")) return;
     const keep = () => {
-      const { info: now, base: on, baseDoc, restored } = flow.getState();
+      const { info: now, base: on, baseDoc, restored, tab } = flow.getState();
       if (!now || on === null) return;
       const e = stores.editor.getState();
       // mid-drag, what the drag started from
       const sketch = e.gesture ? e.gesture.origin : e.sketch;
-      const prior = readDraft(now.sketchId);
+      // this tab's own draft: another tab's of the same sketch is never written over
+      const prior = readDraft(now.sketchId, tab);
       const same = prior?.baseVersion === on;
       if (!restored && baseDoc && sameDocument(sketch, baseDoc)) {
-        if (same) discardDraft(now.sketchId);
+        if (same) discardDraft(now.sketchId, tab);
         return;
       }
       // a draft the save dialogs kept (a conflict, an ended session) keeps its message and what it knew
-      keepDraft({ sketchId: now.sketchId, baseVersion: on, latestVersion: Math.max(now.latest, same ? prior.latestVersion : 0), message: same ? prior.message : "", sketch });
+      keepDraft({ sketchId: now.sketchId, tab, baseVersion: on, latestVersion: Math.max(now.latest, same ? prior.latestVersion : 0), message: same ? prior.message : "", sketch });
     };
     const timer = setTimeout(keep, 500);
     window.addEventListener("pagehide", keep);
@@ -115,7 +146,7 @@ function useReviewState(sketchId: string | undefined, base: number | null): Revi
 }
 
 function Bar({ flow }: { flow: SaveFlow }) {
-  const { info, base, pending, lastSaved, restored, restoredNotice } = useStore(flow);
+  const { info, base, pending, lastSaved, restored, restoredNotice, tab, savedElsewhere } = useStore(flow);
   const stores = useStores();
   const run = useActionRunner();
   const units = useEditor((s) => s.units);
@@ -147,6 +178,16 @@ function Bar({ flow }: { flow: SaveFlow }) {
     flow.setState({ notice: (text) => stores.editor.getState().notify(text) });
   }, [flow, stores]);
   useKeepUnsaved(flow, !!draft);
+  // a newer version saved in another tab of this browser: said here, and Save knows it is newer
+  const sketchId = info?.sketchId;
+  useEffect(() => {
+    if (!sketchId) return;
+    return watchSaved(sketchId, (saved) => {
+      const { base: on, info: now } = flow.getState();
+      if (on === null || !now || saved.version <= on) return;
+      flow.setState({ savedElsewhere: saved, info: { ...now, latest: Math.max(now.latest, saved.version) } });
+    });
+  }, [flow, sketchId]);
   useEffect(() => {
     if (!dirty) return;
     const warn = (e: BeforeUnloadEvent) => {
@@ -170,9 +211,10 @@ function Bar({ flow }: { flow: SaveFlow }) {
     try {
       const { version } = await saveVersionRequest(info.sketchId, base, message, pending.sketch);
       flow.setState({ base: version.number, baseDoc: pending.sketch, lastSaved: { number: version.number, at: version.createdAt }, info: { ...info, latest: version.number, title: version.sketchTitle ?? info.title }, restored: false });
-      // saved: the work kept in this browser is in the version now (an older draft the user has
-      // not chosen about yet stays until they do)
-      if (restored || !draft) discardDraft(info.sketchId);
+      // saved: this tab's kept work is in the version now (an older draft the user has not
+      // chosen about yet, and other tabs' drafts, stay until they are dealt with)
+      discardDraft(info.sketchId, tab);
+      announceSaved(info.sketchId, { version: version.number, at: version.createdAt });
       stores.editor.getState().notify(`Saved as v${version.number}.`);
       settle({ ok: true, version: version.number, savedAt: version.createdAt });
     } catch (err) {
@@ -180,7 +222,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
       if (e.code === "version_conflict") {
         setConflict({ latest: e.detail.latest as LatestVersion, message });
       } else if (e.status === 401) {
-        keepDraft({ sketchId: info.sketchId, baseVersion: base, latestVersion: base, message, sketch: pending.sketch });
+        keepDraft({ sketchId: info.sketchId, tab, baseVersion: base, latestVersion: base, message, sketch: pending.sketch });
         setError(new ApiError(401, "unauthenticated", "Your session has ended. Your changes are kept in this browser: sign in again and bring them back."));
       } else setError(e);
     } finally {
@@ -254,7 +296,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
           latest={conflict.latest}
           onFork={() => setForking(true)}
           onReload={() => {
-            keepDraft({ sketchId: info.sketchId, baseVersion: base, latestVersion: conflict.latest.number, message: conflict.message, sketch: pending.sketch });
+            keepDraft({ sketchId: info.sketchId, tab, baseVersion: base, latestVersion: conflict.latest.number, message: conflict.message, sketch: pending.sketch });
             leave(`/sketches/${info.sketchId}`);
           }}
           onKeepEditing={() => {
@@ -279,25 +321,30 @@ function Bar({ flow }: { flow: SaveFlow }) {
           }}
         />
       ) : null}
+      <div className="fixed bottom-10 right-4 z-40 flex max-w-sm flex-col gap-2">
+      {savedElsewhere && savedElsewhere.version > base ? (
+        <SavedInAnotherTab saved={savedElsewhere} base={base} dirty={dirty} onOpen={() => leave(`/sketches/${info.sketchId}`)} onDismiss={() => flow.setState({ savedElsewhere: undefined })} />
+      ) : null}
       {draft && !restored ? (
         <KeptWork
           draft={draft}
           latest={info.latest}
           workspaceId={info.workspaceId}
           onDiscard={() => {
-            discardDraft(info.sketchId);
+            discardDraft(info.sketchId, draft.tab ?? "");
             setDraft(null);
           }}
         />
       ) : null}
       {restored && restoredNotice ? (
-        <div role="status" data-testid="restored-work" className="fixed bottom-10 right-4 z-40 max-w-sm rounded-lg border border-caution/40 bg-caution-soft p-3 text-[13px] text-ink shadow-[0_6px_24px_rgba(29,35,41,0.14)]">
+        <div role="status" data-testid="restored-work" className={`${CARD} border-caution/40 bg-caution-soft`}>
           <p>{restoredNotice}</p>
           <button type="button" onClick={() => flow.setState({ restoredNotice: undefined })} className="mt-2 rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
             Got it
           </button>
         </div>
       ) : null}
+      </div>
     </div>
   );
 }

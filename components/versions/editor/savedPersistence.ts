@@ -7,7 +7,9 @@ import { uploadFile } from "@/components/uploads/uploadFile";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
 import type { SketchFile } from "@/solver/schema";
-import { readDraft } from "./drafts";
+import { discardDraft, keepDraft, newTabId, readDraft } from "./drafts";
+import type { SavedElsewhere } from "./savedElsewhere";
+import { SKETCH_NOT_FOUND_MESSAGE } from "./notFound";
 import equal from "fast-deep-equal";
 import { current, draftOnNewest, restoredNotice } from "./restoreDraft";
 
@@ -15,6 +17,10 @@ export type SketchInfo = { sketchId: string; workspaceId: string; workspaceName:
 
 export type SaveFlowState = {
   info: SketchInfo | null;
+  /** this tab's name for its drafts (`drafts.ts`): another tab's unsaved work is never written over */
+  tab: string;
+  /** a newer version another tab of this browser saved while this one has the sketch open */
+  savedElsewhere?: SavedElsewhere;
   /** the version the editor's sketch is based on (the next save names it) */
   base: number | null;
   /** a save the user started: the message dialog is open until it resolves */
@@ -37,7 +43,7 @@ type SketchResponse = { sketch: { id: string; workspaceId: string; workspaceName
 type VersionResponse = { version: { number: number; document: SketchFile } };
 
 export function createSaveFlow(): SaveFlow {
-  return createStore<SaveFlowState>(() => ({ info: null, base: null, pending: null, lastSaved: null, restored: false }));
+  return createStore<SaveFlowState>(() => ({ info: null, tab: newTabId(), base: null, pending: null, lastSaved: null, restored: false }));
 }
 
 /** The same document, whatever order its keys come in (the database keeps its own) and whatever format version it was saved in. */
@@ -51,16 +57,17 @@ function loadFailure(err: unknown): LoadOutcome {
     return {
       ok: false,
       reason: "not-found",
-      message: "This sketch does not exist, or you are not a member of its workspace. Saved sketches belong to a workspace: sign in with an account that is a member of it.",
+      message: SKETCH_NOT_FOUND_MESSAGE,
     };
   return { ok: false, reason: "unavailable", message: err instanceof ApiError ? err.message : "The sketch could not be loaded. Try again in a moment." };
 }
 
 /**
  * `version`: open that version instead of the latest. `restore`: open the work kept in this
- * browser (after a conflict) on top of the latest version.
+ * browser (after a conflict) on top of the latest version: that tab's draft (`draft`), or the
+ * newest of any tab's.
  */
-export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { version?: number; restore?: boolean } = {}): SketchPersistence {
+export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { version?: number; restore?: boolean; draft?: string } = {}): SketchPersistence {
   return {
     kind: "saved",
     autosave: false,
@@ -75,10 +82,14 @@ export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { versi
       try {
         const { sketch: s } = await apiFetch<SketchResponse>(`/api/sketches/${sketchId}`);
         const info: SketchInfo = { sketchId, workspaceId: s.workspaceId, workspaceName: s.workspaceName, title: s.title, role: s.role, latest: s.latestVersion };
-        const draft = opts.restore ? readDraft(sketchId) : null;
+        const draft = opts.restore ? (readDraft(sketchId, opts.draft) ?? readDraft(sketchId)) : null;
         if (draft) {
           // merged into the newest version: a colleague's save since the draft's base stays
           const merged = await draftOnNewest(draft, s.latestVersion);
+          // this tab keeps the draft from now on (under its own name: the tab that kept it, if
+          // still open, goes on writing its own)
+          const { tab } = flow.getState();
+          if (draft.tab !== tab && keepDraft({ ...draft, tab })) discardDraft(sketchId, draft.tab ?? "");
           flow.setState({ info, base: s.latestVersion, restored: true, restoredNotice: restoredNotice(merged, draft.baseVersion) });
           return { ok: true, sketch: merged.sketch, version: s.latestVersion, readOnly: !can(s.role, "version.save") };
         }
