@@ -15,7 +15,7 @@ export const CAUTIONS: readonly string[] = [
  * tables give, how an indeterminate body shares its load, and what the factors count.
  */
 export const CONVENTIONS: readonly string[] = [
-  "Axes as drawn: x to the right, y up, lengths in m from the sketch's origin; angles in degrees, counter-clockwise from +x. Moments are positive counter-clockwise.",
+  "Axes as drawn: x to the right, y up, lengths from the sketch's origin (the sketch is drawn in m; a sheet in US customary units gives them in ft too, and its hand check in ft); angles in degrees, counter-clockwise from +x. Moments are positive counter-clockwise.",
   "Reaction tables give the force of each support on the body; the load on the support is equal and opposite. At a contact or roller, n is the component along its normal (positive: pressing on the body) and t the component along the normal turned 90° counter-clockwise.",
   "The hand check takes moments about the point its ΣM line names: a body's first support (its centre of gravity when it has none), as the results panel does; a fixed support's couple is in its row's moment, with the moment of its force.",
   "A statically indeterminate body shares its load by support stiffness: each support is a spring of the stiffness given, or the mean of those given, or 1 GN/m (10^9 N/m); a friction contact's tangential spring is as stiff as its normal one; a fixed support's rotational stiffness is k·d², d the diagonal of the body's bounding box.",

@@ -1,6 +1,6 @@
-// npm run -s solve -- FILE   prints the solve result JSON on stdout; invalid input exits 1 with
-// { ok: false, errors } on stdout. Nothing else is written to stdout by this program; without -s,
-// npm itself prints a banner ("> counterpoise@… solve") there first, which breaks a pipe into jq.
+// npm run solve -- FILE   prints the solve result JSON on stdout; invalid input exits 1 with
+// { ok: false, errors } on stdout. Nothing else is written to stdout by this program, and the
+// project's .npmrc (loglevel=silent) keeps npm's own "> counterpoise@… solve" banner off it too.
 //
 // Two more questions, for scripts and batch checks (the default output stays the contract's):
 //   --cases FILE      every operating case and combination: the runs, the envelope, the runs left
@@ -20,7 +20,7 @@ import { firstReached, limitEverywhere, sweeperOn } from "./studySweep";
 import type { FieldError } from "./types";
 
 const USAGE =
-  "usage: npm run -s solve -- FILE | --cases FILE | --limit NAME=FROM..TO --quantity SUPPORT.COMPONENT [--target VALUE] [--case ID | --combination ID | --every-case] FILE (FILE is a sketch file, or - for standard input; -s keeps npm's banner off standard output)";
+  "usage: npm run solve -- FILE | --cases FILE | --limit NAME=FROM..TO --quantity SUPPORT.COMPONENT [--target VALUE] [--case ID | --combination ID | --every-case] FILE (FILE is a sketch file, or - for standard input)";
 const COMPONENTS: readonly QuantityComponent[] = ["fx", "fy", "m", "n", "t", "resultant", "margin", "frictionRatio", "frictionMargin"];
 
 type Out = { code: number; body: unknown };

@@ -14,7 +14,7 @@
 import { dot3 } from "./linalg";
 import type { BodyModel } from "./model";
 import { direction, momentOf } from "./geometry";
-import type { BodyResult, ContactSupport, Reaction, Vec2 } from "./types";
+import type { BodyResult, ContactSupport, Reaction, Support, Vec2 } from "./types";
 
 export interface OverturningCheck {
   factor: number;
@@ -59,6 +59,16 @@ export interface Requirements {
   sliding: number;
 }
 
+/**
+ * A support as a note names it, by its label as the tables do: "front pin" (a label that names its
+ * kind stands alone), "fixed support anchor"; without a label, "pin front".
+ */
+function supportWords(s: Support): string {
+  const kind = s.kind === "fixed" ? "fixed support" : s.kind;
+  const name = s.label?.trim() || s.id;
+  return new RegExp(`(^|[^\\p{L}\\p{N}_])${kind}($|[^\\p{L}\\p{N}_])`, "iu").test(name) ? name : `${kind} ${name}`;
+}
+
 /** 1.5 for each is common practice (from memory). */
 export const DEFAULT_REQUIREMENTS: Requirements = { overturning: 1.5, sliding: 1.5 };
 
@@ -70,7 +80,7 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
   // pin once its other contacts open: the pin holds it in place, not upright)
   const pivots = supports.map((s, si) => ({ s, si })).filter(({ s, si }) => s.kind === "pin" || s.kind === "roller" || contacts.some((g) => g.support === si));
   let best: OverturningCheck | null = null;
-  let blockedBy = "";
+  let blockedBy: Support | null = null;
   let free = false;
   for (const { s, si } of pivots) {
     const P = s.at;
@@ -91,7 +101,7 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
         const blocks = grp === null ? Math.abs(v) > eps : grp.normal === i ? v < -eps : false;
         if (blocks) {
           valid = false;
-          blockedBy = supports[sp.support].id;
+          blockedBy = supports[sp.support];
           break;
         }
         if (grp?.kind === "contact" && grp.normal === i && v > eps) opening.push(supports[sp.support] as ContactSupport);
@@ -118,7 +128,7 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
   if (best) return best;
   // a body free to tip about some support, with no load tending to: say that, not which support
   // blocks the other ways it could turn
-  return { notApplicable: blockedBy && !free ? `tipping is prevented by support ${blockedBy}` : "no load tends to tip it" };
+  return { notApplicable: blockedBy && !free ? `tipping is prevented by ${supportWords(blockedBy)}` : "no load tends to tip it" };
 }
 
 /**
@@ -172,7 +182,7 @@ function baseNormal(on: readonly ContactSupport[]): Vec2 {
 
 export function slidingCheck(model: BodyModel, reactions: Record<string, Reaction>, required: number, status?: BodyResult["status"]): BodyStability["sliding"] {
   const holder = model.supports.find((s) => s.kind === "pin" || s.kind === "fixed" || s.kind === "roller");
-  if (holder) return { notApplicable: `sliding is resisted by ${holder.kind === "fixed" ? "fixed support" : holder.kind} ${holder.id}` };
+  if (holder) return { notApplicable: `sliding is resisted by ${supportWords(holder)}` };
   if (status === "tips" || status === "unrestrained") return wholeBodySliding(model, reactions, required, status);
   let available = 0;
   let tx = 0;

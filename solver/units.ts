@@ -89,6 +89,10 @@ export function convert(valueSI: number, q: Quantity, system: UnitSystem, unit?:
 export function formatNumber(x: number, sig = 4, opts: { keepZeros?: boolean } = {}): string {
   if (!Number.isFinite(x)) return x > 0 ? "∞" : x < 0 ? "−∞" : "—";
   if (x === 0 || Math.abs(x) < 1e-12) return "0";
+  // a figure is rounded to `sig` figures first, so a value that rounds up past a power of ten is
+  // written in the next one's digits: 999.96 is "1,000", 9.99996 "10.00" in a table (not "1000.0",
+  // "10.000": a fifth figure), and a sentence says "1,000" as a table does
+  if (Math.abs(x) < 10 ** sig) x = Number(x.toPrecision(sig));
   const abs = Math.abs(x);
   let s: string;
   if (abs >= 1000) {
@@ -97,8 +101,9 @@ export function formatNumber(x: number, sig = 4, opts: { keepZeros?: boolean } =
   } else {
     const digits = Math.max(0, sig - 1 - Math.floor(Math.log10(abs)));
     s = x.toFixed(Math.min(digits, 12));
-    // a table keeps its trailing zeros, except on a small value whose figures start past the
-    // `sig`-th decimal: padding "−0.00004" to "−0.00004000" would only widen the column
+    // a table keeps its trailing zeros on values from 0.1 up; below 0.1 it drops them ("0.031",
+    // "−0.00004", not "0.03100", "−0.00004000": padding would only widen the column). A table that
+    // must show every figure (the hand check's) asks for `figures` instead (formatFigures)
     if (s.includes(".") && !(opts.keepZeros && digits <= sig)) s = s.replace(/0+$/, "").replace(/\.$/, "");
   }
   return s.replace(/^-/, "−");

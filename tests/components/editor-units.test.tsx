@@ -51,15 +51,19 @@ describe("numeric fields with the worker's answer", () => {
     await user.type(magnitude, "4448.22");
     act(() => editor.getState().setUnits("US"));
     // 1 lbf = 4.448 222 N (NIST SP 811); a plain number is SI, and with US units on screen the field says so
-    expect(within(form).getByText("⚠ A plain number is SI: 4.448 kN (= 1000 lbf). Meant lbf? Type “4448.22 lbf”.")).toBeInTheDocument();
+    expect(within(form).getByText("⚠ A plain number is SI: 4.448 kN (= 1,000 lbf). Meant lbf? Type “4448.22 lbf”.")).toBeInTheDocument();
     // a number nobody typed here (placed with the mouse, or from a file) is SI by rule: its value in
     // feet, no note. 2 m / 0.3048 m/ft = 6.562 ft (NIST SP 811)
     expect(within(form).getByTestId("field-at-x")).toHaveAccessibleDescription("= 6.562 ft");
-    // the note stays once the field is left (Enter), not only while typing
+    // the note stays once the entry is done (Enter, which keeps the focus in the field) and once
+    // the field is left (Tab), not only while typing
     await user.click(magnitude);
     await user.keyboard("{Enter}");
+    expect(magnitude).toHaveFocus();
+    expect(magnitude).toHaveAccessibleDescription("⚠ A plain number is SI: 4.448 kN (= 1,000 lbf). Meant lbf? Type “4448.22 lbf”.");
+    await user.tab();
     expect(magnitude).not.toHaveFocus();
-    expect(magnitude).toHaveAccessibleDescription("⚠ A plain number is SI: 4.448 kN (= 1000 lbf). Meant lbf? Type “4448.22 lbf”.");
+    expect(magnitude).toHaveAccessibleDescription("⚠ A plain number is SI: 4.448 kN (= 1,000 lbf). Meant lbf? Type “4448.22 lbf”.");
   });
 
   it("a required value left blank is marked at the field, and the sketch keeps the old one", async () => {

@@ -49,6 +49,19 @@ describe("formatQuantity", () => {
     expect(formatNumber(-0.00004, 4, { keepZeros: true })).toBe("−0.00004");
     expect(formatNumber(11.5)).toBe("11.5");
   });
+
+  it("a table's value that rounds up past a power of ten gains no fifth figure, and from 1,000 keeps its separator", () => {
+    // 4 significant figures of 999.96 are 1,000 (common practice), as the hand check writes it
+    expect(formatNumber(999.96, 4, { keepZeros: true })).toBe("1,000");
+    expect(formatNumber(-999.96, 4, { keepZeros: true })).toBe("−1,000");
+    expect(formatNumber(9.99996, 4, { keepZeros: true })).toBe("10.00");
+    expect(formatNumber(99.996, 4, { keepZeros: true })).toBe("100.0");
+    expect(formatNumber(0.99996, 4, { keepZeros: true })).toBe("1.000");
+    expect(formatNumber(0.099996, 4, { keepZeros: true })).toBe("0.1000");
+    expect(formatNumber(9999.6, 4, { keepZeros: true })).toBe("10,000");
+    // past the figures asked for, whole numbers keep every digit
+    expect(formatNumber(12345.6)).toBe("12,346");
+  });
 });
 
 describe("areas", () => {
