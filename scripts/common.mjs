@@ -38,7 +38,7 @@ export function ensureInstalled() {
   const lock = join(root, "package-lock.json");
   if (existsSync(marker) && statSync(marker).mtimeMs >= statSync(lock).mtimeMs) return;
   log("setup", "installing npm packages (npm ci)");
-  run("npm", ["ci", "--no-audit", "--no-fund"]);
+  run("npm", ["ci", "--no-audit", "--no-fund", "--loglevel=warn"]);
 }
 
 /** Debian's Chromium for the browser tests. */
