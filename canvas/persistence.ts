@@ -4,6 +4,7 @@
 // based on a known version, and report a conflict instead of overwriting.
 import type { SketchFile } from "@/solver/schema";
 import { importSketchText } from "./files";
+import { browserEvents, watchKey, type EventsLike } from "@/lib/other-tabs";
 
 export type LoadOutcome =
   | { ok: true; sketch: SketchFile; /** the saved version this is (saved sketches) */ version?: number; readOnly?: boolean; migratedFrom?: number[] }
@@ -60,8 +61,6 @@ interface StorageLike {
   removeItem(key: string): void;
 }
 
-type EventsLike = Pick<Window, "addEventListener" | "removeEventListener">;
-
 /** The sketch a scratch record holds, or null (none, or one this version cannot read). */
 function scratchSketch(text: string | null): SketchFile | null {
   if (!text) return null;
@@ -81,7 +80,7 @@ function scratchSketch(text: string | null): SketchFile | null {
 export function scratchPersistence(
   storage: StorageLike | null = typeof window !== "undefined" ? window.localStorage : null,
   key = SCRATCH_KEY,
-  events: EventsLike | null = typeof window !== "undefined" ? window : null,
+  events: EventsLike | null = browserEvents(),
 ): SketchPersistence {
   return {
     kind: "scratch",
@@ -112,14 +111,7 @@ export function scratchPersistence(
       return { ok: true, savedAt };
     },
     watch(onChange) {
-      if (!events) return () => {};
-      // key null: the other tab cleared the whole of local storage
-      const heard = (e: Event) => {
-        const { key: changed, newValue } = e as StorageEvent;
-        if (changed === key || changed === null) onChange({ sketch: scratchSketch(changed === null ? null : newValue) });
-      };
-      events.addEventListener("storage", heard);
-      return () => events.removeEventListener("storage", heard);
+      return watchKey(key, (text) => onChange({ sketch: scratchSketch(text) }), events);
     },
   };
 }

@@ -210,26 +210,46 @@ export function slidingCheck(model: BodyModel, reactions: Record<string, Reactio
  * The sums do not depend on how the contacts share the load when they share one base direction
  * and one μ, so μ·Σn over |Σt| is the hand calculation's μ·N over the sliding force.
  */
-function wholeBodySliding(model: BodyModel, reactions: Record<string, Reaction>, required: number, status: "tips" | "unrestrained"): BodyStability["sliding"] {
-  const contacts = model.supports.filter((s): s is ContactSupport => s.kind === "contact");
-  const why = status === "tips" ? "the body tips" : "the body is unrestrained";
-  if (!contacts.length || model.supports.some((s) => s.kind !== "contact")) return { notApplicable: `${why}, and not on contacts alone: sliding is not assessed apart from it` };
-  const mu = contacts[0].mu;
-  const angle = contacts[0].angle;
-  const turn = (a: number) => ((((a - angle) % 360) + 540) % 360) - 180;
-  if (mu === undefined || contacts.some((c) => c.mu !== mu || Math.abs(turn(c.angle)) > 1e-9)) {
-    return { notApplicable: `${why}; its contacts differ in μ or direction, so sliding is not assessed apart from it` };
-  }
+/** What the whole-body sliding check needs of a support (a sketch's, or a drawing's with numbers). */
+export interface SlideSupport {
+  id: string;
+  kind: string;
+  angle?: number;
+  mu?: number;
+}
+
+/**
+ * A body on contacts alone, all of one μ and one base direction, taken as a whole: Σn and Σt of
+ * their reactions and the μ they share. Otherwise why it cannot be taken so: "not-contacts" (some
+ * other support holds it), "differ" (μ or direction differ), "unsolved" (a reaction is missing).
+ */
+export function contactSums(supports: readonly SlideSupport[], reactions: Record<string, Reaction>): { n: number; t: number; mu: number } | { why: "not-contacts" | "differ" | "unsolved" } {
+  const first = supports[0];
+  if (!first || supports.some((s) => s.kind !== "contact")) return { why: "not-contacts" };
+  const { mu, angle } = first;
+  const turn = (a: number) => ((((a - angle!) % 360) + 540) % 360) - 180;
+  if (mu === undefined || angle === undefined || supports.some((c) => c.mu !== mu || c.angle === undefined || Math.abs(turn(c.angle)) > 1e-9)) return { why: "differ" };
   let n = 0;
   let t = 0;
-  for (const c of contacts) {
+  for (const c of supports) {
     const r = reactions[c.id];
-    if (!r) return { notApplicable: `${why}: sliding is not assessed` };
+    if (!r) return { why: "unsolved" };
     n += r.n ?? 0;
     t += r.t ?? 0;
   }
-  const available = mu * Math.max(n, 0);
-  const driving = Math.abs(t);
+  return { n, t, mu };
+}
+
+function wholeBodySliding(model: BodyModel, reactions: Record<string, Reaction>, required: number, status: "tips" | "unrestrained"): BodyStability["sliding"] {
+  const why = status === "tips" ? "the body tips" : "the body is unrestrained";
+  const sums = contactSums(model.supports, reactions);
+  if ("why" in sums) {
+    if (sums.why === "not-contacts") return { notApplicable: `${why}, and not on contacts alone: sliding is not assessed apart from it` };
+    if (sums.why === "differ") return { notApplicable: `${why}; its contacts differ in μ or direction, so sliding is not assessed apart from it` };
+    return { notApplicable: `${why}: sliding is not assessed` };
+  }
+  const available = sums.mu * Math.max(sums.n, 0);
+  const driving = Math.abs(sums.t);
   const factor = driving > 1e-12 ? available / driving : Infinity;
   return { factor, available, driving, required, pass: factor >= required, wholeBody: true };
 }

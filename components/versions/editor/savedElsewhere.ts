@@ -1,17 +1,16 @@
 // The same saved sketch open in two tabs of one browser: a tab that saves a version says so in
 // local storage (`counterpoise:saved:<sketchId>` = { version, at }), and every other tab with
 // the sketch open hears it as a storage event (which the writing tab itself never gets), the way
-// the scratch sketch's `watch` does (`canvas/persistence.ts`).
+// the scratch sketch's `watch` does (`canvas/persistence.ts`), through `watchKey` (lib/other-tabs.ts).
+import { browserEvents, watchKey, type EventsLike } from "@/lib/other-tabs";
 
 export type SavedElsewhere = { version: number; at: string };
 
 type StorageLike = Pick<Storage, "setItem">;
-type EventsLike = Pick<Window, "addEventListener" | "removeEventListener">;
 
 const key = (sketchId: string) => `counterpoise:saved:${sketchId}`;
 
 const browserStorage = (): StorageLike | null => (typeof window !== "undefined" ? window.localStorage : null);
-const browserEvents = (): EventsLike | null => (typeof window !== "undefined" ? window : null);
 
 /** Tells the other tabs that this one saved `version` of the sketch. */
 export function announceSaved(sketchId: string, saved: SavedElsewhere, storage: StorageLike | null = browserStorage()): void {
@@ -34,13 +33,12 @@ function parse(text: string | null): SavedElsewhere | null {
 
 /** Hears another tab's save of the sketch; returns the unsubscribe. */
 export function watchSaved(sketchId: string, onSaved: (saved: SavedElsewhere) => void, events: EventsLike | null = browserEvents()): () => void {
-  if (!events) return () => {};
-  const heard = (e: Event) => {
-    const { key: changed, newValue } = e as StorageEvent;
-    if (changed !== key(sketchId)) return;
-    const saved = parse(newValue);
-    if (saved) onSaved(saved);
-  };
-  events.addEventListener("storage", heard);
-  return () => events.removeEventListener("storage", heard);
+  return watchKey(
+    key(sketchId),
+    (text) => {
+      const saved = parse(text);
+      if (saved) onSaved(saved);
+    },
+    events,
+  );
 }
