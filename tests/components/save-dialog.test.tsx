@@ -16,6 +16,7 @@ describe("the save dialog", () => {
     render(<SaveDialog open base={3} latest={3} title="Trailer" busy={false} error={null} onSave={noop} onCancel={noop} />);
     expect(screen.getByRole("heading").textContent).toBe("Save version 4 of “Trailer”");
     expect(screen.queryByTestId("save-older")).toBeNull();
+    expect(screen.getByRole("button", { name: "Save v4" })).toBeInTheDocument();
   });
 
   it("on an older version: says v3 is newer and what saving will ask", () => {
@@ -24,5 +25,8 @@ describe("the save dialog", () => {
     expect(screen.getByTestId("save-older").textContent).toBe(
       "You opened v1, and v3 is newer: a version goes on top of the newest only. Saving asks you next whether to fork a new sketch from your changes or to bring them onto v3.",
     );
+    // no "Save v2": v2 exists, and the save makes no version until the next question is answered
+    expect(screen.queryByRole("button", { name: /^Save v\d+$/ })).toBeNull();
+    expect(screen.getByRole("button", { name: "Choose how to save…" })).toBeInTheDocument();
   });
 });

@@ -50,5 +50,6 @@ export async function saveVersion(page: Page, message: string): Promise<void> {
   await page.getByTestId("save-version").click();
   const dialog = page.getByTestId("save-dialog");
   await dialog.getByLabel("What changed").fill(message);
-  await dialog.getByRole("button", { name: /^Save v\d+$/ }).click();
+  // "Choose how to save…" when this tab knows a newer version than it opened (the conflict dialog follows)
+  await dialog.getByRole("button", { name: /^(Save v\d+|Choose how to save…)$/ }).click();
 }

@@ -117,8 +117,9 @@ export function SaveDialog({
           <Button type="button" tone="quiet" onClick={onCancel}>
             Cancel
           </Button>
+          {/* on an older version the save makes no v{base + 1} (it exists): the next question decides */}
           <Button type="submit" busy={busy}>
-            Save v{base + 1}
+            {latest > base ? "Choose how to save…" : `Save v${base + 1}`}
           </Button>
         </div>
       </form>
