@@ -310,7 +310,11 @@ function useAutosave(store: EditorStore, persistence: SketchPersistence, ready: 
   return { saved, control };
 }
 
-export function SketchUnavailable({ message }: { message: string }) {
+/**
+ * `signedOut`: the reader is not signed in, so signing in is the way on (and back to this sketch);
+ * a signed-in reader would only be sent back here by the sign-in page, so is offered their workspaces.
+ */
+export function SketchUnavailable({ message, signedOut }: { message: string; signedOut: boolean }) {
   const [here] = useState(() => (typeof window === "undefined" ? "/sketches/new" : window.location.pathname + window.location.search));
   return (
     <div className="drafting-grid flex min-h-screen items-center justify-center px-6">
@@ -320,10 +324,16 @@ export function SketchUnavailable({ message }: { message: string }) {
           {message}
         </p>
         <div className="mt-5 flex gap-3 text-sm">
-          {/* back to this sketch once signed in */}
-          <Link href={`/sign-in?next=${encodeURIComponent(here)}`} className="rounded-md bg-ink px-3.5 py-1.5 font-medium text-paper hover:bg-ink-soft">
-            Sign in
-          </Link>
+          {signedOut ? (
+            // back to this sketch once signed in
+            <Link href={`/sign-in?next=${encodeURIComponent(here)}`} className="rounded-md bg-ink px-3.5 py-1.5 font-medium text-paper hover:bg-ink-soft">
+              Sign in
+            </Link>
+          ) : (
+            <Link href="/workspaces" className="rounded-md bg-ink px-3.5 py-1.5 font-medium text-paper hover:bg-ink-soft">
+              Your workspaces
+            </Link>
+          )}
           <Link href="/sketches/new" className="rounded-md border border-ink/20 px-3.5 py-1.5 font-medium hover:border-ink/40">
             Open a scratch sketch
           </Link>
@@ -368,7 +378,7 @@ function sessionStore(): HistoryStorage | null {
 
 export function Editor({ persistence, example, toolbarExtra }: { persistence: SketchPersistence; example?: string; toolbarExtra?: ReactNode }) {
   const [store] = useState(() => createEditorStore());
-  const [phase, setPhase] = useState<{ kind: "loading" } | { kind: "ready" } | { kind: "failed"; message: string }>({ kind: "loading" });
+  const [phase, setPhase] = useState<{ kind: "loading" } | { kind: "ready" } | { kind: "failed"; message: string; signedOut: boolean }>({ kind: "loading" });
   const { saved, control } = useAutosave(store, persistence, phase.kind === "ready");
   const ready = phase.kind === "ready";
   const otherTab = useOtherTab(store, persistence, control, ready);
@@ -384,7 +394,7 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
     void persistence.load().then((out) => {
       if (!live) return;
       if (!out.ok && out.reason !== "invalid") {
-        setPhase({ kind: "failed", message: out.message });
+        setPhase({ kind: "failed", message: out.message, signedOut: out.reason === "signed-out" });
         return;
       }
       const ex = example ? exampleById(example) : undefined;
@@ -412,7 +422,7 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
     };
   }, [persistence, store, example]);
 
-  if (phase.kind === "failed") return <SketchUnavailable message={phase.message} />;
+  if (phase.kind === "failed") return <SketchUnavailable message={phase.message} signedOut={phase.signedOut} />;
   if (phase.kind === "loading") return <div className="flex min-h-screen items-center justify-center text-sm text-ink-faint">Opening the sketch…</div>;
   return (
     <EditorProvider editor={store}>

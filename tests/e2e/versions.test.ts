@@ -167,6 +167,9 @@ describe("versioned sketches in the browser", () => {
     expect((await page.goto(`${BASE_URL}/sketches/${sketchId}`))?.status()).toBe(404);
     await page.getByTestId("unavailable-message").waitFor();
     expect(await page.getByTestId("unavailable-message").textContent()).toContain("you are not a member of its workspace");
+    // signed in already: the way on is their workspaces (the sign-in page would send them back here)
+    expect(await page.getByRole("link", { name: "Your workspaces" }).getAttribute("href")).toBe("/workspaces");
+    expect(await page.getByRole("link", { name: "Sign in" }).count()).toBe(0);
     expect((await page.goto(`${BASE_URL}/sketches/not-a-sketch`))?.status()).toBe(404);
     await page.getByTestId("unavailable-message").waitFor();
     await shot(page, "versions-07-outsider");
