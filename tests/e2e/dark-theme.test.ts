@@ -1,13 +1,10 @@
 // The dark theme follows the operating system: with prefers-color-scheme dark the page is the dark
 // paper and the text the dark ink, the drawings stay light sheets, print stays light, and axe finds no
 // colour-contrast failure. On a phone the home page's diagram takes its narrow layout, labels readable.
-import { readFileSync } from "node:fs";
-import { createRequire } from "node:module";
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { seriousViolations } from "./axe";
 import { BASE_URL, openBrowser, shot } from "./browser";
-
-const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
 
 // the palettes of app/globals.css as the browser computes them
 const DARK_PAPER = "rgb(27, 32, 37)";
@@ -16,19 +13,10 @@ const LIGHT_PAPER = "rgb(246, 243, 236)";
 const LIGHT_INK = "rgb(29, 35, 41)";
 const LIGHT_CARD = "rgb(251, 250, 246)";
 
-type Finding = { id: string; nodes: Array<{ target: unknown[]; failureSummary?: string }> };
-
-/** axe's colour-contrast findings (WCAG 2.x AA, 4.5:1 for body text), one line per element. */
+/** axe's colour-contrast findings (WCAG 2.x AA, 4.5:1 for body text), one line per element, once the fonts have settled. */
 async function contrastFindings(page: Page): Promise<string[]> {
-  // the page settles (fonts) before colours are measured
   await page.evaluate(() => document.fonts.ready);
-  if (!(await page.evaluate(() => "axe" in window))) await page.addScriptTag({ content: axeSource });
-  const found = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Finding[] }> } }).axe;
-    const res = await axe.run(document, { runOnly: { type: "rule", values: ["color-contrast"] }, resultTypes: ["violations"] });
-    return res.violations.map((v) => ({ id: v.id, nodes: v.nodes.map((n) => ({ target: n.target, failureSummary: n.failureSummary })) }));
-  });
-  return found.flatMap((v) => v.nodes.map((n) => `${JSON.stringify(n.target)}: ${(n.failureSummary ?? "").replace(/\s+/g, " ")}`));
+  return seriousViolations(page, ["color-contrast"]);
 }
 
 const colours = (page: Page, selector: string) =>
