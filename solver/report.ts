@@ -611,9 +611,13 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
   // every number of the check by one rule: 4 significant figures, trailing zeros kept, the points too
   const coord = (x: number) => handCheckNumber(convert(x, "length", system, L).value);
   const point = `(${coord(about[0])}, ${coord(about[1])}) ${L}`;
+  // a force that brings a couple of its own (a fixed support's m): its M is r × F plus that couple,
+  // said in the label, so a checker redoing x·Fy − y·Fx from the row knows what is added
+  const label = (t: (typeof eq.forces)[number], sign: number) =>
+    t.kind !== "couple" && t.at && t.m ? `${t.label}, with its couple ${handCheckNumber(inUnit(handCheckClean(sign * t.m, scale), "moment", u) ?? 0)} ${m}` : t.label;
   const row = (side: string, t: (typeof eq.forces)[number], sign: number): Cell[] => [
     side,
-    t.label,
+    label(t, sign),
     val(sign * t.fx, "force"),
     val(sign * t.fy, "force"),
     t.at ? `(${coord(t.at[0])}, ${coord(t.at[1])})` : "—",

@@ -1,8 +1,9 @@
 // A body that tips and slides as well. Taken as a whole, as its factor of safety against sliding
 // takes it (`contactSums` in solver/stability.ts: on contacts alone, one μ and one base direction,
 // μ·Σn against |Σt| of the forces that would hold it), it needs more friction than its contacts
-// give. Shared by the status sentence and the drawing, so the words and the slide mark agree. The
-// solver does not say which of the two would start first.
+// give. Shared by the status sentence and the drawing, so the words and the slide mark agree.
+// Which of the two starts first is the factors of safety's to say (`tipSlideOrder`,
+// components/results/statusSentence.ts).
 import { contactSums, type SlideSupport as Held } from "@/solver/stability";
 import { overMu } from "@/solver/words";
 import type { SolveResult } from "@/solver/types";

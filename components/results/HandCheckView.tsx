@@ -12,7 +12,7 @@ import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { BUTTON, INPUT } from "@/components/editor/ui";
 import { useActionRunner } from "@/components/editor/useActions";
 import { useHeldScale } from "./useHeldScale";
-import { defaultMomentPoint, handCheckBlocks, handCheckText, type HandCheckBlock } from "./handCheck";
+import { defaultMomentPoint, handCheckBlocks, handCheckText, type HandCheckBlock, type HandCheckLine } from "./handCheck";
 import { StabilityCheck } from "./StabilityCheck";
 import { stabilityLines } from "./stabilityCheck";
 
@@ -29,6 +29,15 @@ function Block({ b, units, unit, scale }: { b: HandCheckBlock; units: UnitSystem
   // every number of the check by one rule (4 significant figures, trailing zeros kept): the points too
   const len = (v: number) => handCheckNumber(convert(v, "length", units).value);
   const text = handCheckText(b, scale, (v) => convert(v, b.key === "m" ? "moment" : "force", units, unit).value, unit);
+  // where a term acts, in the moment block: r × F (or r × ṁV) is then a line a checker can redo
+  const where = (t: HandCheckLine) =>
+    b.key === "m" && t.at && !t.couple ? (
+      <span className="text-ink-faint">
+        {" "}
+        at ({len(t.at[0])}, {len(t.at[1])})
+        {t.ownCouple ? `, with its couple ${handCheckNumber(convert(t.ownCouple, "moment", units, unit).value)} ${unit}` : ""}
+      </span>
+    ) : null;
   return (
     <section aria-label={b.title} className="min-w-0" data-testid={`hand-${b.key}`}>
       <h3 className="mb-1 text-[12.5px] font-semibold text-ink">{b.title}</h3>
@@ -38,7 +47,7 @@ function Block({ b, units, unit, scale }: { b: HandCheckBlock; units: UnitSystem
             <span className="truncate text-ink-soft" title={t.label}>
               {i > 0 ? "+ " : "  "}
               {t.label}
-              {b.key === "m" && t.at && !t.couple && <span className="text-ink-faint"> at ({len(t.at[0])}, {len(t.at[1])})</span>}
+              {where(t)}
             </span>
             <span className="num shrink-0 text-ink" data-testid="term-value">
               {text.forces[i]}
@@ -55,6 +64,7 @@ function Block({ b, units, unit, scale }: { b: HandCheckBlock; units: UnitSystem
           <li key={`m-${t.id}-${i}`} className="flex justify-between gap-2 border-b border-dotted border-rule-soft">
             <span className="truncate text-ink-soft" title={t.label}>
               {t.label}
+              {where(t)}
             </span>
             <span className="num shrink-0 text-ink">{text.momentum[i]}</span>
           </li>

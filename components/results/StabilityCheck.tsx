@@ -6,7 +6,7 @@
 import { convert, type UnitSystem } from "@/solver/units";
 import { handCheckNumber } from "@/solver/report";
 import type { OverturningLines, SlidingLines, StabilityLines } from "./stabilityCheck";
-import { BELOW_ONE } from "./statusSentence";
+import { BELOW_ONE, tipSlideOrder } from "./statusSentence";
 
 interface Units {
   units: UnitSystem;
@@ -106,6 +106,7 @@ export function StabilityCheck({ lines, units, force, moment }: { lines: Stabili
   const u = { units, force, moment };
   const o = lines.overturning;
   const s = lines.sliding;
+  const order = tipSlideOrder(o, s);
   return (
     <div className="mt-3 border-t border-rule-soft pt-2" data-testid="hand-stability">
       <h3 className="mb-1 text-[12.5px] font-semibold text-ink">Factors of safety as drawn</h3>
@@ -135,6 +136,11 @@ export function StabilityCheck({ lines, units, force, moment }: { lines: Stabili
           )}
         </div>
       </div>
+      {order && (
+        <p className="mt-2 text-[12px] font-semibold text-caution" data-testid="hand-which-first">
+          {order.text}.
+        </p>
+      )}
     </div>
   );
 }

@@ -17,6 +17,8 @@ const BADGE: Record<Tone, { word: string; cls: string }> = {
 };
 
 const TIPS_AND_SLIDES = { ...BADGE.tips, word: "Tips, slides" };
+/** slides first, then tips (by the factors of safety): the badge puts the first first, as the sentence does */
+const SLIDES_THEN_TIPS = { ...BADGE.tips, word: "Slides, tips" };
 
 /** The errors after the first, each on its own line (a few; the fields are marked in the panel). */
 const MORE_SHOWN = 4;
@@ -57,7 +59,7 @@ export function StatusBanner() {
   const analysed = useAnalysis((s) => s.sketch);
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
   const units = useEditor((s) => s.units);
-  const sentences = useMemo(() => (shown && numeric ? statusSentences(numeric, shown, units) : []), [shown, numeric, units]);
+  const sentences = useMemo(() => (shown && numeric ? statusSentences(numeric, shown, units, undefined, stability ?? undefined) : []), [shown, numeric, units, stability]);
   // the errors after the first, in words: under the faded result or the missing one
   const more = useMemo(() => errors.slice(1).map((e) => errorInWords(analysed, e)), [errors, analysed]);
 
@@ -81,7 +83,7 @@ export function StatusBanner() {
         const factors = numeric ? stabilitySentence(numeric, s.body, stability?.[s.body]) : null;
         const short = factors?.pass === false && (s.tone === "holds" || s.tone === "strained");
         // a body that tips and slides: both in the badge, as in the sentence
-        const badge = short ? SHORT : s.alsoSlips && s.tone === "tips" ? TIPS_AND_SLIDES : BADGE[s.tone];
+        const badge = short ? SHORT : s.alsoSlips && s.tone === "tips" ? (s.first === "slides" ? SLIDES_THEN_TIPS : TIPS_AND_SLIDES) : BADGE[s.tone];
         return (
           <div key={s.body} className={`grid grid-cols-[auto_minmax(0,1fr)] gap-x-2 ${stale ? "opacity-60" : ""}`}>
             {/* the badge and the headline read as one sentence; the details line up under the headline */}
@@ -93,7 +95,7 @@ export function StatusBanner() {
             </p>
             <div className="col-start-2">
               {s.details.map((d) => (
-                <p key={d} className="text-[12px] leading-snug text-ink-soft">
+                <p key={d} className="text-[12px] leading-snug text-ink-soft" data-testid={s.first && d.startsWith(`It ${s.first} before it`) ? "which-first" : undefined}>
                   {d}
                 </p>
               ))}

@@ -11,6 +11,8 @@ export interface HandCheckLine {
   /** where the force acts (m), for the moment lines */
   at?: Vec2;
   couple?: boolean;
+  /** a force that brings a couple of its own (a fixed support's m): in its moment line beside r × F */
+  ownCouple?: number;
 }
 
 export interface HandCheckBlock {
@@ -25,7 +27,14 @@ export interface HandCheckBlock {
   imbalance: number;
 }
 
-const line = (t: EquationTerm, value: number): HandCheckLine => ({ id: t.id, label: t.label, value, at: t.at, couple: t.kind === "couple" });
+const line = (t: EquationTerm, value: number): HandCheckLine => ({
+  id: t.id,
+  label: t.label,
+  value,
+  at: t.at,
+  couple: t.kind === "couple",
+  ...(t.kind !== "couple" && t.at && t.m ? { ownCouple: t.m } : {}),
+});
 
 export function handCheckBlocks(eq: BodyEquations, about: Vec2): HandCheckBlock[] {
   const sums = handCheckSums(eq, about);

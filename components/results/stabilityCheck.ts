@@ -28,7 +28,7 @@ export interface FrictionLine {
   name: string;
   mu: number;
   n: number;
-  /** μ·n: what the contact can give */
+  /** μ·n: what the contact can give (signed when the body is taken as a whole: its share of μ·Σn) */
   available: number;
   /** the tangential force it must give (signed, along the contact's tangent) */
   t: number;
@@ -62,7 +62,10 @@ function frictionLines(sketch: Sketch, body: string, reactions: Record<string, R
     if (!r || (!all && r.state !== "bearing")) continue;
     const n = r.n ?? 0;
     const t = r.t ?? 0;
-    const available = s.mu * Math.max(n, 0);
+    // a body taken as a whole counts μ·n of every contact with its sign, as μ·Σn does by hand
+    // (μ·W on level ground): a contact that would have to pull takes off its share, and the column
+    // adds up to the Σ under it; contact by contact a pull gives no friction
+    const available = all ? s.mu * n : s.mu * Math.max(n, 0);
     out.push({ id: s.id, name: supportName(s), mu: s.mu, n, available, t, over: r.state === "bearing" && Math.abs(t) > available * (1 + 1e-9) + 1e-9 });
   }
   return out;

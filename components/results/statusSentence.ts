@@ -21,6 +21,8 @@ export interface StatusSentence {
   details: string[];
   /** a body that tips and slides as a whole as well: the badge says both */
   alsoSlips?: boolean;
+  /** of a body that tips and slides, which comes first by the factors of safety (when they say) */
+  first?: "tips" | "slides";
 }
 
 const KIND_WORD: Record<Support["kind"], string> = { pin: "pin", roller: "roller", contact: "contact", fixed: "fixed support", tie: "tie" };
@@ -148,11 +150,49 @@ function pivotName(c: Context, about: Vec2): string {
   return `the point (${Number((about[0] * k).toPrecision(3))}, ${Number((about[1] * k).toPrecision(3))}) ${L}`;
 }
 
+/** A factor of safety as the order sentence compares it: never with a "<" between two equal-looking numbers. */
+function twoFactors(a: number, b: number): [string, string] {
+  for (let d = 3; d <= 6; d++) {
+    const [x, y] = [Number(a.toPrecision(d)), Number(b.toPrecision(d))];
+    if (x !== y) return [String(x), String(y)];
+  }
+  return [String(a), String(b)];
+}
+
+type Factor = { factor: number; wholeBody?: boolean } | { notApplicable: string };
+
+export interface TipSlideOrder {
+  first: "tips" | "slides";
+  /** "It tips before it slides: overturning factor 0.613 < sliding factor 0.735 (…)" */
+  text: string;
+}
+
+/**
+ * Of a body that tips and slides, which starts first. Each factor of safety is the multiple of the
+ * loads that drive it at which that failure starts, when those loads grow in proportion while the
+ * weight that holds the body stays as it is (common practice: the smaller factor governs); so the
+ * smaller factor comes first, and the words say that assumption. Only for a body whose factors are
+ * both under 1 and whose sliding is taken as a whole (the headline's "slides"); null otherwise, or
+ * when the two are equal to six figures.
+ */
+export function tipSlideOrder(overturning: Factor | undefined, sliding: Factor | undefined): TipSlideOrder | null {
+  if (!overturning || !sliding || "notApplicable" in overturning || "notApplicable" in sliding || !sliding.wholeBody) return null;
+  const [o, s] = [overturning.factor, sliding.factor];
+  if (!(o < 1) || !(s < 1) || Math.abs(o - s) <= 1e-6 * Math.max(o, s)) return null;
+  const assumption = "the smaller factor is reached first if the loads that drive it grow in proportion while its weight stays as it is";
+  if (o < s) {
+    const [a, b] = twoFactors(o, s);
+    return { first: "tips", text: `It tips before it slides: overturning factor ${a} < sliding factor ${b} (${assumption})` };
+  }
+  const [a, b] = twoFactors(s, o);
+  return { first: "slides", text: `It slides before it tips: sliding factor ${a} < overturning factor ${b} (${assumption})` };
+}
+
 /**
  * A body that tips and slides too (`tipSlide`, canvas/render/tipSlide.ts: the body taken as a
  * whole, as its factor of safety against sliding takes it). Where it cannot be taken as a whole, a
- * bearing contact over its own μ in the forces shown is said instead. Null when it only tips. The
- * solver does not say which of the two would start first, so neither is put first.
+ * bearing contact over its own μ in the forces shown is said instead. Null when it only tips.
+ * Which of the two starts first is the factors of safety's to say (`tipSlideOrder`).
  */
 function tipSlipWords(c: Context): { words: string; wholeBody: boolean } | null {
   const whole = tipSlide(c.supports, c.result, c.id);
@@ -168,17 +208,18 @@ function tipSlipWords(c: Context): { words: string; wholeBody: boolean } | null 
   return { words: `${supportName(s)} would slip too, needing ${needs} with μ = ${has}${more}`, wholeBody: false };
 }
 
-function tipSentence(c: Context, slip: { words: string; wholeBody: boolean } | null): string {
+function tipSentence(c: Context, slip: { words: string; wholeBody: boolean } | null, first?: TipSlideOrder["first"]): string {
   const pulling = c.reactions.filter(([, r]) => r.state === "lifted" || r.state === "slack").sort((a, b) => Math.abs(b[1].n ?? 0) - Math.abs(a[1].n ?? 0));
   const fm = c.body.freeMotion;
   const turns = fm?.kind === "rotation" ? `Tips about ${pivotName(c, fm.about)}` : fm ? `Would move along ${Number(fm.angle.toFixed(1))}°` : "Tips";
-  // both named in the headline: a body that tips and slides is not to be read as one that only tips
-  const head = slip?.wholeBody ? `${turns} and slides` : turns;
+  const pull = pulling.length ? `${supportName(pulling[0][0])} would have to ${pulling[0][0].kind === "tie" ? "push" : "pull"} ${force(c, pulling[0][1].n ?? Math.hypot(pulling[0][1].fx, pulling[0][1].fy))}` : "";
+  // both named in the headline, the one that starts first leading (when the factors say which):
+  // a body that tips and slides is not to be read as one that only tips
+  if (slip?.wholeBody && first === "slides" && turns.startsWith("Tips")) return `Slides before it ${turns.charAt(0).toLowerCase()}${turns.slice(1)} — ${slip.words}${pull ? `; ${pull}` : ""}`;
+  const head = slip?.wholeBody ? `${turns} ${first === "tips" && turns.startsWith("Tips") ? "before it slides" : "and slides"}` : turns;
   const also = slip ? `; ${slip.words}` : "";
-  if (!pulling.length) return `${head}${slip ? ` — ${slip.words}` : ""}`;
-  const [s, r] = pulling[0];
-  const verb = s.kind === "tie" ? "push" : "pull";
-  return `${head} — ${supportName(s)} would have to ${verb} ${force(c, r.n ?? Math.hypot(r.fx, r.fy))}${also}`;
+  if (!pull) return `${head}${slip ? ` — ${slip.words}` : ""}`;
+  return `${head} — ${pull}${also}`;
 }
 
 function liftSentence(c: Context): string {
@@ -206,8 +247,11 @@ function holdSentence(c: Context): string {
   return `Holds — all supports within their limits; the largest reaction is ${force(c, Math.hypot(best[1].fx, best[1].fy))} at ${supportName(best[0])}`;
 }
 
-/** One sentence per body of a solved sketch; `forceUnit` puts every force in one unit (a calc sheet's). */
-export function statusSentences(sketch: Sketch, result: SolveResult, units: UnitSystem = "SI", forceUnit?: string): StatusSentence[] {
+/**
+ * One sentence per body of a solved sketch; `forceUnit` puts every force in one unit (a calc
+ * sheet's). With the bodies' factors of safety, a body that tips and slides says which comes first.
+ */
+export function statusSentences(sketch: Sketch, result: SolveResult, units: UnitSystem = "SI", forceUnit?: string, stability?: Record<string, BodyStability>): StatusSentence[] {
   const out: StatusSentence[] = [];
   const portNotes = portDirectionNotes(sketch);
   for (const b of sketch.bodies) {
@@ -219,23 +263,31 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
     let tone: Tone = body.status;
     let headline: string;
     let alsoSlips = false;
+    let order: TipSlideOrder | null = null;
     const slip = body.status === "holds" || body.status === "lifts" ? slipSentence(c) : null;
     if (body.status === "unrestrained") {
       headline = body.freeMotion ? `Unrestrained — ${describeFreeMotion(body.freeMotion, supports)}; add a support or a tie` : "Unrestrained — add a support or a tie";
       if (!supports.length) headline = "Unrestrained — the body has no supports yet; add a support or a tie";
     } else if (body.status === "tips") {
       const slides = tipSlipWords(c);
-      headline = tipSentence(c, slides);
       alsoSlips = !!slides?.wholeBody;
+      const st = stability?.[b.id];
+      order = alsoSlips ? tipSlideOrder(st?.overturning, st?.sliding) : null;
+      headline = tipSentence(c, slides, order?.first);
     }
     else if (slip && !(slip.strained && body.status === "lifts")) {
       tone = slip.strained ? "strained" : "slips";
       headline = slip.headline;
     } else if (body.status === "lifts") headline = liftSentence(c);
     else headline = holdSentence(c);
+    // a motion nothing resists, the loads not driving it: the "holds" headline says it; any other
+    // (a lift-off, a tip, a slip) leaves it to a line of its own, never unsaid
+    const mech = result.warnings.find((w) => w.code === "MECHANISM" && w.ids.includes(b.id));
+    const mechSaid = !!mech && !headline.startsWith("Holds only as drawn");
 
     // a port drawn against its kind is likely a slip of the input: said before anything else
     const details: string[] = portNotes.filter((n) => n.body === b.id).map((n) => n.message);
+    if (order) details.push(`${order.text}.`);
     for (const s of supports) {
       const off = supportOffOutline(s, b.outline, units);
       if (off) details.push(off);
@@ -253,6 +305,11 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
     else if (slip && body.status === "lifts") details.push(`${liftSentence(c)}.`);
     const shared = slip ? sharedFrictionNote(c) : null;
     if (shared) details.push(shared);
+    // free to move in x: the ax found is a result of its own (the sketch's inputs only ask for it)
+    const ax = body.acceleration?.ax;
+    if (sketch.motion?.freeX && body.status !== "unrestrained" && Number.isFinite(ax))
+      details.push(`Free to move in x: the loads accelerate it at ax = ${formatQuantity(ax, "acceleration", units)} (its inertial force −m·ax acts at its centre of gravity).`);
+    if (mech && mechSaid) details.push(`${cap(mech.message.slice(mech.message.indexOf(": ") + 2))}; any load that does will move it.`);
     if (body.determinacy.kind === "indeterminate")
       details.push(`Statically indeterminate (degree ${body.determinacy.degree}): the reactions depend on the support stiffnesses.`);
     else {
@@ -266,7 +323,7 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
         if (w.ids.some((i) => ids.has(i))) details.push(w.message.endsWith(".") ? w.message : `${w.message}.`);
       }
     }
-    out.push(alsoSlips ? { body: b.id, tone, headline, details, alsoSlips } : { body: b.id, tone, headline, details });
+    out.push(alsoSlips ? { body: b.id, tone, headline, details, alsoSlips, ...(order ? { first: order.first } : {}) } : { body: b.id, tone, headline, details });
   }
   // warnings that belong to no body (unitless trigonometry in a parameter)
   const general = result.warnings.filter((w) => w.code === "TRIG_UNITLESS").map((w) => (/[.?!]$/.test(w.message) ? w.message : `${w.message}.`));

@@ -3,9 +3,7 @@
 import { screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
-import { DEFAULT_REQUIREMENTS, parseSketch, solveWithStability } from "@/solver/index";
-import { emptySketch } from "@/canvas/model/elements";
-import { newBody } from "@/canvas/model/factory";
+import { solved, tallBlock } from "./tall-block";
 import { stabilitySentence, statusSentences } from "@/components/results/statusSentence";
 import { supportStates } from "@/canvas/render/results";
 import { renderSketchSvg } from "@/canvas/render/svg";
@@ -13,30 +11,6 @@ import { mountResultsDock } from "./editor-helpers";
 
 const g = 9.80665;
 
-/**
- * A 1 m wide, 2 m tall, 100 kg block on two pads (μ as given) pushed sideways at its top left
- * corner by P. Rigid-block statics (common practice): it tips about the right pad when
- * P·2 m > W·0.5 m, P > W/4 = 245.2 N; it slides when P > μ·W (294.2 N at μ = 0.3).
- */
-function tallBlock(push: string, mu: number | [number, number] = 0.3) {
-  const [m1, m2] = Array.isArray(mu) ? mu : [mu, mu];
-  return {
-    ...emptySketch("Tall block"),
-    bodies: [{ ...newBody("b1", [[0, 0], [1, 0], [1, 2], [0, 2]], "Block"), mass: "100 kg" }],
-    supports: [
-      { id: "s1", body: "b1", kind: "contact" as const, at: [0, 0] as [number, number], angle: 90, mu: m1, label: "left pad" },
-      { id: "s2", body: "b1", kind: "contact" as const, at: [1, 0] as [number, number], angle: 90, mu: m2, label: "right pad" },
-    ],
-    loads: [{ id: "f1", body: "b1", kind: "force" as const, at: [0, 2] as [number, number], fx: push, fy: 0, label: "push" }],
-  };
-}
-
-function solved(doc: unknown) {
-  const p = parseSketch(doc);
-  if (!p.ok) throw new Error(JSON.stringify(p.errors));
-  const { result, stability } = solveWithStability(p.sketch, DEFAULT_REQUIREMENTS);
-  return { sketch: p.sketch, result, stability };
-}
 
 describe("a body that tips and slides", () => {
   it("names both in the headline, with the friction it needs as a whole and what it has", () => {
