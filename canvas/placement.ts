@@ -4,7 +4,7 @@ import type { SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
 import { addElement, attachToBody } from "./commands/elements";
 import type { Command } from "./commands/define";
-import { nearestOnOutline, outwardNormal, angleOf, pointInPolygon, polygonCentroid, boxContains, type Box } from "./geometry/polygon";
+import { nearestOnOutline, nearestOnSegment, outwardNormal, angleOf, pointInPolygon, polygonCentroid, boxContains, type Box } from "./geometry/polygon";
 import { findElement, nextId, type Attached, type ElementKind, GROUP_OF } from "./model/elements";
 import { defaultBodySize, newAttached, newBody, DEFAULT_ANGLE } from "./model/factory";
 import { LEGEND_ROOM } from "./geometry/fit";
@@ -75,14 +75,23 @@ export function offOutlineMessage(kind: ElementKind, touch = false): string {
 
 /**
  * Where a support or a port clicked at `p` goes, and on which body: inside a body (the last drawn
- * wins) it stays at `p`; outside every body, onto the nearest point of the nearest outline within
- * `reach`; farther than that, nowhere. `from` is the pointer's own point before snapping (the reach
- * is measured from it, so a snap to the grid neither lets a far click in nor keeps a near one out);
- * a snapped point that has left the body is taken back onto its outline.
+ * wins) a support stays at `p` (a pin through a hole) and a port (`onOutline`) goes onto the
+ * nearest point of the outline, since fluid crosses the control surface only there; outside every
+ * body, onto the nearest point of the nearest outline within `reach`; farther than that, nowhere.
+ * `from` is the pointer's own point before snapping (the reach is measured from it, so a snap to
+ * the grid neither lets a far click in nor keeps a near one out); a snapped point that has left
+ * the body is taken back onto its outline.
  */
-export function outlineSpot(bodies: readonly SceneBody[], p: Vec2, reach: number, tol: number, from: Vec2 = p): { body: SceneBody; at: Vec2 } | undefined {
+export function outlineSpot(bodies: readonly SceneBody[], p: Vec2, reach: number, tol: number, from: Vec2 = p, onOutline = false): { body: SceneBody; at: Vec2 } | undefined {
   const onOrIn = (b: SceneBody, q: Vec2) => pointInPolygon(q, b.outline) || nearestOnOutline(q, b.outline).distance <= tol;
   const onto = (b: SceneBody): Vec2 => {
+    if (onOutline && nearestOnOutline(p, b.outline).distance > 1e-12) {
+      // a port: onto the edge nearest the pointer itself (a grid point may lie nearer another),
+      // at the snapped point's place along it
+      const edge = nearestOnOutline(from, b.outline).edge;
+      const hit = nearestOnSegment(p, b.outline[edge], b.outline[(edge + 1) % b.outline.length]).point;
+      return [hit[0], hit[1]];
+    }
     if (onOrIn(b, p)) return p;
     const hit = nearestOnOutline(p, b.outline).point;
     return [hit[0], hit[1]];
@@ -105,10 +114,10 @@ export function outlineSpot(bodies: readonly SceneBody[], p: Vec2, reach: number
 }
 
 /**
- * The command that places an attached element at p (already snapped). A support or a port goes
- * on or inside a body (`outlineSpot`, within `reach` of an outline, measured from the pointer's
- * own point `from`), or is refused with a hint; a load or a mass source goes on the body under
- * the point, else on the nearest.
+ * The command that places an attached element at p (already snapped). A support goes on or
+ * inside a body, a port on its outline (`outlineSpot`, within `reach` of an outline, measured
+ * from the pointer's own point `from`), or is refused with a hint; a load or a mass source goes
+ * on the body under the point, else on the nearest.
  */
 export function placeCommand(
   sketch: SketchFile,
@@ -120,7 +129,7 @@ export function placeCommand(
 ): PlaceOutcome {
   if (!scene.bodies.some((b) => b.outline.length >= 3)) return { ok: false, message: NEEDS_BODY };
   if (placedAtOutline(kind)) {
-    const spot = outlineSpot(scene.bodies, p, opts.reach ?? tol, tol, opts.from ?? p);
+    const spot = outlineSpot(scene.bodies, p, opts.reach ?? tol, tol, opts.from ?? p, GROUP_OF[kind] === "ports");
     if (!spot) return { ok: false, message: offOutlineMessage(kind, opts.touch) };
     return { ok: true, command: placeOnBody(sketch, spot.body, kind, spot.at, tol, opts) };
   }

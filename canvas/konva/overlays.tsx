@@ -7,7 +7,7 @@ import { Circle, Group, Line, Rect, Shape, Text } from "react-konva";
 import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
 import { useEditor, useScene, useStores } from "../context";
-import { DIRECTED } from "../model/elements";
+import { DIRECTED, GROUP_OF } from "../model/elements";
 import { elementGroups, resultLayer } from "../render/scenePrims";
 import { supportStates } from "../render/results";
 import { itemPrims } from "../render/symbols";
@@ -168,7 +168,7 @@ export const PointerOverlay = memo(function PointerOverlay({ interaction }: { in
     let body = bodyAt(bodies, hover, tol);
     let at: Vec2 = hover;
     if (placedAtOutline(tool.element)) {
-      const spot = outlineSpot(bodies, hover, OUTLINE_REACH_PX / scale, tol);
+      const spot = outlineSpot(bodies, hover, OUTLINE_REACH_PX / scale, tol, hover, GROUP_OF[tool.element] === "ports");
       if (!spot) return { at: null, prims: [] };
       body = spot.body;
       at = spot.at;

@@ -5,9 +5,10 @@ import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { authClient } from "@/lib/auth-client";
 import { emailSchema } from "@/lib/schemas";
 import { authErrorMessage } from "./messages";
+import { withNext } from "./nextPath";
 
 /** Ask for a new confirmation link (the old one expired or was used). */
-export function ResendVerificationForm({ defaultEmail = "", label = "Send a new link" }: { defaultEmail?: string; label?: string }) {
+export function ResendVerificationForm({ defaultEmail = "", label = "Send a new link", next }: { defaultEmail?: string; label?: string; next?: string }) {
   const [email, setEmail] = useState(defaultEmail);
   const [state, setState] = useState<{ kind: "idle" | "sent" | "error"; text?: string }>({ kind: "idle" });
   const [fieldError, setFieldError] = useState<{ "resend-email"?: string }>({});
@@ -24,7 +25,7 @@ export function ResendVerificationForm({ defaultEmail = "", label = "Send a new 
       return;
     }
     setBusy(true);
-    const { error } = await authClient.sendVerificationEmail({ email: parsed.data, callbackURL: "/verify?confirmed=1" });
+    const { error } = await authClient.sendVerificationEmail({ email: parsed.data, callbackURL: withNext("/verify?confirmed=1", next) });
     setBusy(false);
     setState(error ? { kind: "error", text: authErrorMessage(error) } : { kind: "sent", text: parsed.data });
   }

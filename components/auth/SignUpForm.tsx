@@ -6,10 +6,12 @@ import { authClient } from "@/lib/auth-client";
 import { emailSchema, passwordSchema, personNameSchema } from "@/lib/schemas";
 import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { authErrorMessage } from "./messages";
+import { withNext } from "./nextPath";
 
 type Errors = Partial<Record<"name" | "email" | "password", string>>;
 
-export function SignUpForm({ defaultEmail = "" }: { defaultEmail?: string }) {
+/** `next`: the page to come back to once the address is confirmed and the user signs in. */
+export function SignUpForm({ defaultEmail = "", next }: { defaultEmail?: string; next?: string }) {
   const router = useRouter();
   const [name, setName] = useState("");
   const [email, setEmail] = useState(defaultEmail);
@@ -31,13 +33,13 @@ export function SignUpForm({ defaultEmail = "" }: { defaultEmail?: string }) {
     setBusy(true);
     setError(null);
     const address = email.trim().toLowerCase();
-    const { error: err } = await authClient.signUp.email({ name: name.trim(), email: address, password, callbackURL: "/verify?confirmed=1" });
+    const { error: err } = await authClient.signUp.email({ name: name.trim(), email: address, password, callbackURL: withNext("/verify?confirmed=1", next) });
     if (err) {
       setBusy(false);
       setError(authErrorMessage(err, { email: address }));
       return;
     }
-    router.push(`/verify?sent=${encodeURIComponent(address)}`);
+    router.push(withNext(`/verify?sent=${encodeURIComponent(address)}`, next));
     router.refresh();
   }
 

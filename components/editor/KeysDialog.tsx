@@ -14,7 +14,7 @@ const GROUPS: { group: ActionGroup; title: string }[] = [
 
 /** What the pointer does on the canvas (canvas/konva/pointer handles these). */
 export const GESTURES: { what: string; how: string }[] = [
-  { what: "Place a support or a port", how: "Click on the body's outline, or within 12 px of it (it goes onto the outline)" },
+  { what: "Place a support or a port", how: "Click on the body's outline, or within 12 px of it (it goes onto the outline); a port clicked inside the body goes onto the nearest edge" },
   { what: "Stop placing", how: "Escape, or Done under the drawing" },
   { what: "Move an element", how: "Drag it" },
   { what: "Add to the selection", how: "Shift+click" },

@@ -7,12 +7,21 @@
 function DoubleArrow({ x, y1, y2 }: { x: number; y1: number; y2: number }) {
   const dir = Math.sign(y2 - y1);
   return (
-    <g className="stroke-reaction" fill="none" strokeWidth="1.6">
+    <g className="stroke-reaction" fill="none" strokeWidth="1.6" data-testid="hero-reaction" data-x={x}>
       <path d={`M${x - 3} ${y1} V${y2 - dir * 10} M${x + 3} ${y1} V${y2 - dir * 10}`} />
       <path d={`M${x - 8} ${y2 - dir * 12} L${x} ${y2} L${x + 8} ${y2 - dir * 12}`} strokeLinejoin="round" />
     </g>
   );
 }
+
+/** The feet's centres, in the wide layout's coordinates. */
+const FOOT_X = [138, 354] as const;
+/**
+ * The centre of gravity: where W = 8.34 kN must act for R₁ = 4.51 kN and R₂ = 4.27 kN with the
+ * jet's ṁV = 440 N pushing down at the outlet (x = 231). Moments about the left foot:
+ * 4.27 × 216 = 8.34 × (x − 138) + 0.44 × 93, so x = 243.7.
+ */
+const CG_X = 244;
 
 /** Everything but the words, in the wide layout's coordinates. */
 function Shapes() {
@@ -32,26 +41,26 @@ function Shapes() {
       {/* feet */}
       <path d="M124 274h28l4 26h-36z" className="fill-rule stroke-ink" strokeWidth="1.2" />
       <path d="M340 274h28l4 26h-36z" className="fill-rule stroke-ink" strokeWidth="1.2" />
-      {/* centre of gravity: quartered circle */}
-      <g transform="translate(236 226)">
+      {/* centre of gravity: quartered circle, where the labelled reactions put it (see CG_X) */}
+      <g transform={`translate(${CG_X} 226)`} data-testid="hero-cg">
         <circle r="7" className="fill-paper-card stroke-ink" strokeWidth="1.2" />
         <path d="M0 -7A7 7 0 0 1 7 0H0Z M0 7A7 7 0 0 1 -7 0H0Z" className="fill-ink" />
       </g>
       {/* weight */}
       <g className="fill-ink stroke-ink" strokeWidth="2">
-        <path d="M236 234V286" />
-        <path d="M230 278L236 292L242 278Z" />
+        <path d={`M${CG_X} 234V286`} />
+        <path d={`M${CG_X - 6} 278L${CG_X} 292L${CG_X + 6} 278Z`} />
       </g>
       {/* outlet: hollow arrow across the boundary */}
-      <path d="M231 96V44" className="stroke-ink" strokeWidth="1.4" />
+      <path d="M231 96V44" className="stroke-ink" strokeWidth="1.4" data-testid="hero-outlet" />
       <path d="M224 58L231 40L238 58Z" className="fill-paper-card stroke-ink" strokeWidth="1.4" />
       <path d="M214 96h34" className="stroke-ink" strokeWidth="3" />
       {/* momentum flux: dashed */}
       <path d="M190 92V52" className="stroke-ink-soft" strokeDasharray="4 3" strokeWidth="1.4" />
       <path d="M185 62L190 48L195 62" fill="none" className="stroke-ink-soft" strokeWidth="1.4" />
       {/* reactions */}
-      <DoubleArrow x={138} y1={360} y2={306} />
-      <DoubleArrow x={354} y1={360} y2={306} />
+      <DoubleArrow x={FOOT_X[0]} y1={360} y2={306} />
+      <DoubleArrow x={FOOT_X[1]} y1={360} y2={306} />
     </>
   );
 }
@@ -70,7 +79,7 @@ function Wide() {
       <text x="314" y="231" fontSize="11" className="fill-ink-soft">
         pump
       </text>
-      <text x="244" y="268" fontSize="13" fontWeight="600" className="fill-ink">
+      <text x={CG_X + 8} y="268" fontSize="13" fontWeight="600" className="fill-ink">
         W = 8.34 kN
       </text>
       <text x="244" y="48" fontSize="12" className="fill-ink">

@@ -1,6 +1,7 @@
 // Placing elements in Chromium without drawing them: a rectangle dragged from the tray onto an
-// empty canvas, a pin added with the keyboard alone, the shortcut that needs a body first, and an
-// example link opened over a scratch sketch that Undo brings back.
+// empty canvas, a pin added with the keyboard alone, an outlet clicked just inside an edge, the
+// shortcut that needs a body first, and an example link opened over a scratch sketch that Undo
+// brings back.
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
@@ -108,6 +109,26 @@ describe("placing elements from the tray and the keyboard", () => {
     expect(Number(s.at[0])).toBeCloseTo(1, 6);
     expect(Number(s.at[1])).toBeCloseTo(0.5, 6);
     await shot(page, "placing-pin-by-keyboard");
+  });
+
+  it("puts an outlet clicked just inside the body's top edge on that edge, flowing out of it", async () => {
+    const map = await emptySketchView(page);
+    await page.getByTestId("tray-outlet").click();
+    // 20 px under the top edge (y = 1.5 m at 120 px/m): too far in to snap to it, so the grid takes
+    // the click inside the body; a port cannot be there, and goes up onto the edge
+    await clickAt(page, map.at(1.6, 1.5 - 20 / 120));
+    await expect.poll(() => elementCount(page)).toMatch(/\(3\)/);
+    await expect.poll(() => form(page).textContent()).toMatch(/Outlet p1/);
+    expect(Number(await form(page).getByTestId("field-at-x").inputValue())).toBeCloseTo(1.6, 6);
+    expect(Number(await form(page).getByTestId("field-at-y").inputValue())).toBeCloseTo(1.5, 6);
+    expect(await form(page).getByTestId("field-angle").inputValue()).toBe("90");
+    // on the control surface: solved (its 10 kg/s has no inlet yet), with no warning that it sits inside its body
+    await expect.poll(() => page.getByTestId("results-dock").textContent()).toMatch(/differs from mass out \(10 kg\/s\)/);
+    expect(await page.getByTestId("results-dock").textContent()).not.toMatch(/inside its body/);
+    await shot(page, "placing-outlet-onto-edge");
+    // the sketch as it was, for what follows
+    await page.getByTestId("undo").click();
+    await expect.poll(() => elementCount(page)).toMatch(/\(2\)/);
   });
 
   it("opens an example over the scratch sketch as one undo step: Undo brings the sketch back", async () => {

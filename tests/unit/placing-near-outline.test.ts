@@ -1,7 +1,8 @@
-// Where a click puts a support or a port: inside a body it stays; just outside an outline it goes
-// onto the nearest point of it; farther out it is refused with a hint (never attached to whichever
-// body happens to be nearest). And a body placed in one go (a click, a tap, the keyboard) lands
-// centred on the point, wholly in view, no larger than a phone's drawing takes.
+// Where a click puts a support or a port: inside a body a support stays and a port goes onto the
+// outline; just outside an outline either goes onto the nearest point of it; farther out it is
+// refused with a hint (never attached to whichever body happens to be nearest). And a body placed
+// in one go (a click, a tap, the keyboard) lands centred on the point, wholly in view, no larger
+// than a phone's drawing takes.
 // Geometry checked by hand on axis-aligned rectangles.
 import { describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
@@ -33,6 +34,32 @@ describe("a support or a port placed with the pointer", () => {
   it("inside a body stays where it was clicked (a pin through a hole in a plate)", () => {
     const pin = placed(placeCommand(file, scene, "pin", [1.3, 0.4], TOL, { reach: REACH }));
     expect(pin).toMatchObject({ body: "b1", at: [1.3, 0.4] });
+  });
+
+  it("a port clicked inside a body goes onto the nearest point of its outline, flowing across it (fluid crosses the control surface only there)", () => {
+    // 12 px under the top edge of the left crate, where a click meant for that edge lands
+    const outlet = placed(placeCommand(file, scene, "outlet", [1.4, 0.88], TOL, { reach: REACH }));
+    expect(outlet.body).toBe("b1");
+    expect(outlet.at[0]).toBeCloseTo(1.4, 12);
+    expect(outlet.at[1]).toBeCloseTo(1, 12);
+    expect(outlet.angle).toBe(90);
+    // deep inside, nearer the left face: onto it, an inlet flowing in (+x)
+    const inlet = placed(placeCommand(file, scene, "inlet", [0.3, 0.45], TOL, { reach: REACH }));
+    expect(inlet.at[0]).toBeCloseTo(0, 12);
+    expect(inlet.at[1]).toBeCloseTo(0.45, 12);
+    expect(inlet.angle).toBe(0);
+    // the ghost before the click shows the same spot
+    expect(outlineSpot(scene.bodies, [1.4, 0.88], REACH, TOL, [1.4, 0.88], true)?.at).toEqual([1.4, 1]);
+  });
+
+  it("a port goes onto the edge nearest the pointer, not the one nearest the grid point it snapped to", () => {
+    // an L-shaped bend body: the pointer 5 cm under the top of its upright leg, the 0.2 m grid point
+    // under it (0.8, 1.4) as near the leg's two sides as the top
+    const bend: SketchFile = { ...emptySketch("Bend"), bodies: [newBody("b1", [[0, 0], [1, 0], [1, 1.6], [0.6, 1.6], [0.6, 0.4], [0, 0.4]])] };
+    const outlet = placed(placeCommand(bend, buildScene(bend), "outlet", [0.8, 1.4], TOL, { reach: REACH, from: [0.8, 1.55] }));
+    expect(outlet.at[0]).toBeCloseTo(0.8, 12);
+    expect(outlet.at[1]).toBeCloseTo(1.6, 12);
+    expect(outlet.angle).toBe(90);
   });
 
   it("10 px below a body's bottom edge goes onto the edge, pointing into the body", () => {

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { AuthCard } from "@/components/auth/AuthFrame";
 import { SignInForm } from "@/components/auth/SignInForm";
+import { withNext } from "@/components/auth/nextPath";
 import { currentSession, safeNext } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Sign in" };
@@ -20,7 +21,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
       foot={
         <>
           New to Counterpoise?{" "}
-          <Link href="/sign-up" className="font-semibold text-ink underline decoration-rule underline-offset-2">
+          <Link href={withNext("/sign-up", target)} className="font-semibold text-ink underline decoration-rule underline-offset-2">
             Create an account
           </Link>
         </>

@@ -3,13 +3,15 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { AuthCard } from "@/components/auth/AuthFrame";
 import { SignUpForm } from "@/components/auth/SignUpForm";
-import { currentSession } from "@/lib/session";
+import { withNext } from "@/components/auth/nextPath";
+import { currentSession, safeNext } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Create an account" };
 
-export default async function SignUpPage({ searchParams }: { searchParams: Promise<{ email?: string }> }) {
-  const { email } = await searchParams;
-  if (await currentSession()) redirect("/workspaces");
+export default async function SignUpPage({ searchParams }: { searchParams: Promise<{ email?: string; next?: string }> }) {
+  const { email, next } = await searchParams;
+  const target = safeNext(next);
+  if (await currentSession()) redirect(target);
   return (
     <AuthCard
       title="Create an account"
@@ -17,13 +19,13 @@ export default async function SignUpPage({ searchParams }: { searchParams: Promi
       foot={
         <>
           Have an account?{" "}
-          <Link href="/sign-in" className="font-semibold text-ink underline decoration-rule underline-offset-2">
+          <Link href={withNext("/sign-in", target)} className="font-semibold text-ink underline decoration-rule underline-offset-2">
             Sign in
           </Link>
         </>
       }
     >
-      <SignUpForm defaultEmail={email ?? ""} />
+      <SignUpForm defaultEmail={email ?? ""} next={target} />
     </AuthCard>
   );
 }

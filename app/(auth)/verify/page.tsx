@@ -4,15 +4,20 @@ import { AuthCard } from "@/components/auth/AuthFrame";
 import { MailboxHint } from "@/components/auth/MailboxHint";
 import { ResendVerificationForm } from "@/components/auth/ResendVerificationForm";
 import { Notice } from "@/components/shell/controls";
+import { DEFAULT_NEXT, withNext } from "@/components/auth/nextPath";
+import { safeNext } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Confirm your e-mail" };
 
-type Search = Promise<{ sent?: string; confirmed?: string; error?: string }>;
+type Search = Promise<{ sent?: string; confirmed?: string; error?: string; next?: string }>;
 
 const primary = "inline-flex w-full justify-center rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft";
 
 export default async function VerifyPage({ searchParams }: { searchParams: Search }) {
-  const { sent, confirmed, error } = await searchParams;
+  const search = await searchParams;
+  const { sent, confirmed, error } = search;
+  // the page the user was on before "Create an account" (a scratch sketch to save), kept for the sign-in
+  const next = safeNext(search.next);
 
   if (error) {
     const expired = error === "TOKEN_EXPIRED";
@@ -24,7 +29,7 @@ export default async function VerifyPage({ searchParams }: { searchParams: Searc
               ? "Confirmation links work for one hour. Send yourself a new one below."
               : "The confirmation link is not valid: it may have been used already, or copied only in part."}
           </Notice>
-          <ResendVerificationForm />
+          <ResendVerificationForm next={next} />
           <MailboxHint />
         </div>
       </AuthCard>
@@ -35,8 +40,8 @@ export default async function VerifyPage({ searchParams }: { searchParams: Searc
     return (
       <AuthCard title="E-mail address confirmed">
         <div className="space-y-4">
-          <Notice tone="success">Your account is ready. Sign in to open your personal workspace.</Notice>
-          <Link href="/sign-in" className={primary}>
+          <Notice tone="success">{next === DEFAULT_NEXT ? "Your account is ready. Sign in to open your personal workspace." : "Your account is ready. Sign in to carry on where you left off."}</Notice>
+          <Link href={withNext("/sign-in", next)} className={primary}>
             Sign in
           </Link>
         </div>
@@ -59,7 +64,7 @@ export default async function VerifyPage({ searchParams }: { searchParams: Searc
     >
       <div className="space-y-4">
         <p className="text-sm text-ink-soft">Nothing arrived after a few minutes? Check the spam folder, or send the link again.</p>
-        <ResendVerificationForm defaultEmail={sent ?? ""} label="Send the link again" />
+        <ResendVerificationForm defaultEmail={sent ?? ""} label="Send the link again" next={next} />
         <MailboxHint />
       </div>
     </AuthCard>
