@@ -4,7 +4,7 @@ import { getRole } from "@/db/queries/workspaces";
 import type { AuthSession } from "./auth";
 import { appOrigin } from "./env";
 import { AppError, errorResponse, fieldErrors } from "./errors";
-import { can, type Permission, type Role } from "./roles";
+import { can, refusedWords, type Permission, type Role } from "./roles";
 import { sessionFrom } from "./session";
 
 /**
@@ -140,7 +140,7 @@ export function parseQuery<T extends z.ZodType>(req: Request, schema: T): z.outp
 export async function requireWorkspaceRole(workspaceId: string, userId: string, permission: Permission): Promise<Role> {
   const role = await getRole(workspaceId, userId);
   if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.");
-  if (!can(role, permission)) throw new AppError("forbidden");
+  if (!can(role, permission)) throw new AppError("forbidden", refusedWords(role, permission));
   return role;
 }
 

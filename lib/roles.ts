@@ -55,3 +55,43 @@ export function can(role: Role | null | undefined, permission: Permission): bool
 export function isRole(value: unknown): value is Role {
   return typeof value === "string" && (ROLES as readonly string[]).includes(value);
 }
+
+/** Each action in words, after "you may not" (the server's 403 says which one was refused). */
+const ACTION_WORDS: Record<Permission, string> = {
+  "workspace.read": "read this workspace",
+  "workspace.rename": "rename the workspace",
+  "members.list": "see the members",
+  "members.changeRole": "change members' roles",
+  "members.remove": "remove members",
+  "invitations.list": "see the invitations",
+  "invitations.create": "invite people",
+  "invitations.withdraw": "withdraw invitations",
+  "audit.read": "read the audit log",
+  "sketch.read": "read sketches",
+  "sketch.create": "create sketches",
+  "sketch.edit": "rename sketches or change their details",
+  "sketch.delete": "delete sketches",
+  "version.save": "save versions",
+  "sketch.fork": "fork sketches into it",
+  "comment.create": "write comments",
+  "comment.resolve": "resolve or reopen comments",
+  "version.submit": "submit versions for checking",
+  "version.check": "check or return versions",
+  "version.approve": "approve versions",
+  "version.withdraw": "withdraw approvals",
+  "upload.underlay": "upload drawings to trace over",
+  "upload.attach": "attach files to comments",
+  "upload.read": "open uploaded files",
+};
+
+const plural = (r: Role) => `${r}s`;
+const listed = (words: string[]) => (words.length < 2 ? words.join("") : `${words.slice(0, -1).join(", ")} and ${words[words.length - 1]}`);
+
+/**
+ * Why a role is refused an action, in one sentence naming both and who may: "As a viewer in this
+ * workspace you may not save versions: that is for owners and editors."
+ */
+export function refusedWords(role: Role, permission: Permission): string {
+  const who = listed((PERMISSIONS[permission] as readonly Role[]).map(plural));
+  return `As ${role === "owner" || role === "editor" ? "an" : "a"} ${role} in this workspace you may not ${ACTION_WORDS[permission]}: that is for ${who}.`;
+}

@@ -6,7 +6,7 @@ import { getRole } from "@/db/queries/workspaces";
 import { getVersion, insertSketchWithFirstVersion, saveNextVersion, type NewVersion, type VersionListItem } from "@/db/queries/versions";
 import { recordAudit } from "./audit";
 import { AppError } from "./errors";
-import { can, type Permission, type Role } from "./roles";
+import { can, refusedWords, type Permission, type Role } from "./roles";
 import { emptySketchFile, summarizeSolve, type ParsedSketch } from "./sketch-document";
 import { parseSketch } from "@/solver";
 import { deleteObjectsQuietly } from "./uploads/objects";
@@ -24,7 +24,7 @@ const NO_SKETCH = "No such sketch, or you are not a member of its workspace.";
 export async function requireSketchRole(sketchId: string, userId: string, permission: Permission) {
   const access = await getSketchAccess(sketchId, userId);
   if (!access || !access.role) throw new AppError("not_found", NO_SKETCH);
-  if (!can(access.role, permission)) throw new AppError("forbidden");
+  if (!can(access.role, permission)) throw new AppError("forbidden", refusedWords(access.role, permission));
   return access as typeof access & { role: Role };
 }
 
@@ -36,7 +36,7 @@ export async function requireSketchRole(sketchId: string, userId: string, permis
 export async function accessLostError(sketchId: string, userId: string, permission: Permission, tx: DbOrTx = db): Promise<AppError> {
   const access = await getSketchAccess(sketchId, userId, tx);
   if (!access || !access.role) return new AppError("not_found", NO_SKETCH);
-  return can(access.role, permission) ? new AppError("conflict") : new AppError("forbidden");
+  return can(access.role, permission) ? new AppError("conflict") : new AppError("forbidden", refusedWords(access.role, permission));
 }
 
 /** The sketch as GET /api/sketches/:id answers it (also read by the sketch page): the sketch and its latest version's summary. */
@@ -73,7 +73,7 @@ export async function createSketch(
   return db.transaction(async (tx) => {
     const role = await lockRole(tx, workspaceId, actor.id);
     if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.");
-    if (!can(role, "sketch.create")) throw new AppError("forbidden");
+    if (!can(role, "sketch.create")) throw new AppError("forbidden", refusedWords(role, "sketch.create"));
     await assertUnderlayIn(workspaceId, parsed.file, tx);
     const made = await insertSketchWithFirstVersion(tx, {
       ...versionContent(parsed, input.message ?? "First version"),

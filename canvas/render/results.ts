@@ -5,6 +5,7 @@
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import { tipSlide, type SlideSupport } from "./tipSlide";
 import type { SolveResult, Vec2 } from "@/solver/types";
+import { largestScale, reactionScale, unitFamily } from "@/solver/report";
 import type { Scene, SceneBody, SceneItem } from "../scene";
 import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp, solidArrow, sub, text, unit, type Prim, type Pt } from "./prims";
 import { anchorWorld, cgMarkBox, groundSideOf, labelAt, type DrawState } from "./symbols";
@@ -259,4 +260,25 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
   const out = placeResultLabels(prims, o.under, o.frame, { anchors: labelAnchors, rivals: supports, keepOut: marks });
   if (o.stale) for (const p of out) (p as { opacity?: number }).opacity = 0.38;
   return { prims: out, states };
+}
+
+/**
+ * One force and moment unit for every figure a result draws, as its tables do (`unitFamily`: N with
+ * N·m only when all of it stays below 1 kN, else kN with kN·m; lbf, or kip from 10 kip): chosen from
+ * the largest of the reactions and of the forces drawn beside them (weights, pA, ṁV, given loads).
+ * Several results (two versions drawn side by side) share one family.
+ */
+export function drawingFamily(result: SolveResult | ReadonlyArray<SolveResult | null>, units: UnitSystem = "SI"): { force: string; moment: string } {
+  const results = (Array.isArray(result) ? result : [result]).filter((r): r is SolveResult => !!r);
+  let force = 0;
+  let moment = 0;
+  for (const r of results)
+    for (const eq of Object.values(r.equations ?? {}))
+      for (const t of [...eq.forces, ...eq.momentum]) {
+        if (t.kind === "reaction") continue;
+        const f = Math.hypot(t.fx, t.fy);
+        if (Number.isFinite(f)) force = Math.max(force, f);
+        if (Number.isFinite(t.m)) moment = Math.max(moment, Math.abs(t.m));
+      }
+  return unitFamily(units, largestScale({ force, moment }, ...results.map(reactionScale)));
 }

@@ -7,7 +7,7 @@ import type { Scene } from "../scene";
 import { isFinitePoint } from "../geometry/polygon";
 import { placeElementLabels, shiftTexts, type Box, type LabelShifts } from "./labels";
 import { translate, type Prim, type Pt } from "./prims";
-import { resultPrims, supportStates, type ResultOptions } from "./results";
+import { drawingFamily, resultPrims, supportStates, type ResultOptions } from "./results";
 import { anchorWorld, bodyPrims, cgMarkBox, cgPrims, groundSideOf, itemPrims, portKeepOutKey, standInPoint, unplacedPrims, type DrawState } from "./symbols";
 
 // An element's primitives depend only on its scene object (which the editor replaces when it
@@ -67,11 +67,14 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
 // again with the loads where they are when a result arrives, and once a drag has ended.
 const UNDER_RESULTS = new Set(["body", "pin", "roller", "contact", "fixed", "tie", "inlet", "outlet", "force", "couple", "distributed", "massSource"]);
 
-/** The result's drawing, its labels placed (they come first: the elements' labels make way). */
+/**
+ * The result's drawing, its labels placed (they come first: the elements' labels make way); its
+ * figures in one unit (`family`, by default the drawing's own: `drawingFamily`).
+ */
 export function resultLayer(groups: readonly Group[], scene: Scene, scale: number, units: UnitSystem, result: SolveResult, states: Map<string, DrawState>, stale = false, frame?: Box, family?: ResultOptions["family"]) {
   // the bodies' names (and texts that are part of a symbol) stay; the supports' and ports' labels make way
   const under = groups.filter((g) => UNDER_RESULTS.has(g.kind)).flatMap((g) => (g.kind === "body" ? g.prims : g.prims.filter((p) => p.t !== "text" || p.pinned)));
-  return resultPrims(scene, result, { units, scale, stale, under, states, frame, family }).prims;
+  return resultPrims(scene, result, { units, scale, stale, under, states, frame, family: family ?? drawingFamily(result, units) }).prims;
 }
 
 /**

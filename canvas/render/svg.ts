@@ -23,7 +23,8 @@ export interface SvgOptions {
   maxHeight?: number;
   /** draw the result faded, as an earlier sketch's */
   stale?: boolean;
-  /** every force and moment of the result in these units (a calc sheet's one family) */
+  /** every force and moment of the result in these units (a calc sheet's one family); by default
+   *  the drawing's own family (`drawingFamily`), so no drawing writes "714.8 N" beside "5.039 kN" */
   family?: { force: string; moment: string };
   /** paper background (default) or transparent */
   background?: "paper" | "none";
@@ -136,12 +137,14 @@ export function sharedFrame(drawings: Array<{ file: SketchFile | SketchFileInput
   return drawn.length ? fitScenes(drawn, width, height - room, { units }) : undefined;
 }
 
+
 /**
  * Render a sketch file (numbers or expressions, any supported format version) and optionally
  * its solve result as a standalone SVG document.
  */
 export function renderSketchSvg(file: SketchFile | SketchFileInput, result: SolveResult | null = null, opts: SvgOptions = {}): string {
   const units = opts.units ?? "SI";
+  const family = opts.family;
   const width = opts.width ?? 960;
   let height = opts.height ?? 640;
   const { parsed, doc, scene } = sceneOf(file);
@@ -166,14 +169,14 @@ export function renderSketchSvg(file: SketchFile | SketchFileInput, result: Solv
   // fit: world box → pixels, leaving room for symbols and labels that do not scale; then centre
   // what is actually drawn (labels included) — or use the shared frame as given
   let scale = opts.frame ? opts.frame.scale : ownScale(scene, width, height - footer - top);
-  let { groups, results } = scenePrims(scene, scale, units, result, opts.stale, undefined, opts.family);
+  let { groups, results } = scenePrims(scene, scale, units, result, opts.stale, undefined, family);
   if (!opts.frame) {
     // symbols and labels do not scale: when they reach past the edge, shrink the geometry by what
     // they overhang (once: the overhang barely changes with the scale)
     const shrunk = fitOverhang(scene, scale, primsBox([...groups.flatMap((g) => g.prims), ...results]), width, height - footer - top);
     if (shrunk < scale) {
       scale = shrunk;
-      ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale, undefined, opts.family));
+      ({ groups, results } = scenePrims(scene, scale, units, result, opts.stale, undefined, family));
     }
   }
   let dx: number;

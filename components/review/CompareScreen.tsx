@@ -5,6 +5,7 @@ import { useQuery } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { sharedFrame } from "@/canvas/render/svg";
+import { drawingFamily } from "@/canvas/render/results";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { Crumb, Notice, Panel, Segmented, Select, Skeleton } from "@/components/shell/controls";
 import { discardDraft, readDraft } from "@/components/versions/editor/drafts";
@@ -22,10 +23,11 @@ import { ReviewDrawing, useSolved } from "./ReviewDrawing";
 
 type VersionDoc = { version: { number: number; message: string; document: SketchFile } };
 
-function useDocument(sketchId: string, which: number | "draft") {
+function useDocument(sketchId: string, which: number | "draft", draftTab?: string) {
   const path = `/api/sketches/${sketchId}/versions/${which}`;
   const remote = useQuery({ queryKey: apiKey(path), queryFn: () => apiFetch<VersionDoc>(path), enabled: which !== "draft", staleTime: Infinity });
-  const [draft] = useState(() => (which === "draft" ? readDraft(sketchId) : null));
+  // the draft "Kept work" offered (that tab's), else the newest of a closed tab
+  const [draft] = useState(() => (which === "draft" ? ((draftTab !== undefined ? readDraft(sketchId, draftTab) : null) ?? readDraft(sketchId)) : null));
   // the kept work as "Bring them back" would open it: merged onto the newest version
   const merged = useQuery({ queryKey: ["kept-work", sketchId, draft?.keptAt], queryFn: () => draftOnNewest(draft!), enabled: !!draft, staleTime: Infinity });
   if (which === "draft") {
@@ -56,6 +58,7 @@ export function CompareScreen({
   sketchTitle,
   from,
   to,
+  draftTab,
   layout: initialLayout = "side",
 }: {
   workspaceId: string;
@@ -63,13 +66,15 @@ export function CompareScreen({
   sketchTitle: string;
   from: number;
   to: number | "draft";
+  /** with `to` "draft": the tab whose kept changes to compare (as "Kept work" offered them) */
+  draftTab?: string;
   /** the drawings side by side or overlaid, as the address says */
   layout?: "side" | "overlay";
 }) {
   const router = useRouter();
   const versions = useVersions(sketchId);
   const a = useDocument(sketchId, from);
-  const b = useDocument(sketchId, to);
+  const b = useDocument(sketchId, to, draftTab);
   const [units, setUnits] = useUnitsPreference();
   const [layout, setLayoutState] = useState<"side" | "overlay">(initialLayout);
   // the address keeps the choice, so a reload or a link sent to a colleague shows the same drawings
@@ -191,26 +196,29 @@ type DrawingPair = {
   units: UnitSystem;
 };
 
-/** One scale and origin that holds both drawings, their labels and arrows, in `width` × `height`. */
+/** One scale and origin, and one unit family, that hold both drawings, their labels and arrows, in `width` × `height`. */
 function useSharedFrame(before: SketchFile, after: SketchFile, width: number, height: number, units: UnitSystem, legend: boolean) {
   const a = useSolved(before).result;
   const b = useSolved(after).result;
-  return useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], width, height, units, { legend }), [before, after, a, b, width, height, units, legend]);
+  const frame = useMemo(() => sharedFrame([{ file: before, result: a }, { file: after, result: b }], width, height, units, { legend }), [before, after, a, b, width, height, units, legend]);
+  // one force unit for both drawings, so "0.9 kN" before does not read against "902 N" after
+  const family = useMemo(() => drawingFamily([a, b], units), [a, b, units]);
+  return { frame, family };
 }
 
 /** The two drawings side by side, in one frame: the same scale and origin, so a moved or resized
  *  part shows as moved, not as a drawing fitted differently. */
 function SideBySide({ before, after, beforeLabel, afterLabel, marks, units }: DrawingPair) {
-  const frame = useSharedFrame(before, after, 640, 400, units, true);
+  const { frame, family } = useSharedFrame(before, after, 640, 400, units, true);
   return (
     <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side" data-testid="compare-side-by-side">
       <figure className="space-y-1">
         <figcaption className="text-sm font-semibold">Before: {beforeLabel}</figcaption>
-        <ReviewDrawing document={before} marks={marks.before} label={`Before: ${beforeLabel}`} width={640} height={400} units={units} frame={frame} />
+        <ReviewDrawing document={before} marks={marks.before} label={`Before: ${beforeLabel}`} width={640} height={400} units={units} frame={frame} family={family} />
       </figure>
       <figure className="space-y-1">
         <figcaption className="text-sm font-semibold">After: {afterLabel}</figcaption>
-        <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={640} height={400} units={units} frame={frame} />
+        <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={640} height={400} units={units} frame={frame} family={family} />
       </figure>
     </div>
   );
@@ -219,7 +227,7 @@ function SideBySide({ before, after, beforeLabel, afterLabel, marks, units }: Dr
 /** Both drawings at one scale and origin: the earlier one faint and grey, the later one over it. */
 function Overlay({ before, after, beforeLabel, afterLabel, marks, units }: DrawingPair) {
   // the layers write no legend
-  const frame = useSharedFrame(before, after, 1280, 640, units, false);
+  const { frame, family } = useSharedFrame(before, after, 1280, 640, units, false);
   const removed = useMemo(() => Object.fromEntries(Object.entries(marks.before).filter(([, k]) => k === "removed")), [marks.before]);
   // the earlier drawing keeps the words of what was removed only: the rest of its labels would land
   // on the later drawing's (the tables give every value before and after)
@@ -232,8 +240,8 @@ function Overlay({ before, after, beforeLabel, afterLabel, marks, units }: Drawi
       </figcaption>
       <Enlargeable naturalWidth={1280} label="The two drawings laid over each other">
         <div className="paper-sheet relative overflow-hidden rounded-md border border-rule bg-paper">
-          <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} frame={frame} layer onlyLabelsOf={removedIds} className="opacity-40 grayscale" />
-          <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} frame={frame} layer className="compare-over absolute inset-0" />
+          <ReviewDrawing document={before} marks={removed} label={`Before: ${beforeLabel}`} width={1280} height={640} units={units} frame={frame} family={family} layer onlyLabelsOf={removedIds} className="opacity-40 grayscale" />
+          <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={1280} height={640} units={units} frame={frame} family={family} layer className="compare-over absolute inset-0" />
         </div>
       </Enlargeable>
     </figure>

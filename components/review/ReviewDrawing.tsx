@@ -48,6 +48,7 @@ export function ReviewDrawing({
   frame,
   layer = false,
   onlyLabelsOf,
+  family,
   className = "",
 }: {
   document: SketchFile;
@@ -68,6 +69,8 @@ export function ReviewDrawing({
   layer?: boolean;
   /** write only these elements' labels, and no result labels (see renderSketchSvg) */
   onlyLabelsOf?: string[];
+  /** every force and moment in these units (two drawings compared share one); by default the drawing's own */
+  family?: { force: string; moment: string };
   className?: string;
 }) {
   const box = useRef<HTMLDivElement>(null);
@@ -93,8 +96,8 @@ export function ReviewDrawing({
   // The renderer escapes every text it draws (titles, labels, values), so its output is markup we made.
   const svg = useMemo(
     // a tall sketch (a stack, a mast) may take a taller drawing, up to 1.2 times its width, rather than shrink
-    () => renderSketchSvg(document, result, { width: drawnWidth, height: drawnHeight, maxHeight: frame ? undefined : Math.round(drawnWidth * 1.2), caption, units, frame, legend: !layer, background: layer ? "none" : "paper", onlyLabelsOf }),
-    [document, result, drawnWidth, drawnHeight, caption, units, frame, layer, onlyLabelsOf],
+    () => renderSketchSvg(document, result, { width: drawnWidth, height: drawnHeight, maxHeight: frame ? undefined : Math.round(drawnWidth * 1.2), caption, units, frame, legend: !layer, background: layer ? "none" : "paper", onlyLabelsOf, family }),
+    [document, result, drawnWidth, drawnHeight, caption, units, frame, layer, onlyLabelsOf, family],
   );
 
   useLayoutEffect(() => {

@@ -9,7 +9,7 @@ import { formatDate, formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { STATUS_FILTERS, type SketchSort, type SketchStatus } from "@/lib/sketch-schemas";
 import { ForkGlyph } from "./ForkGlyph";
-import { formatForceCell, timeAgo } from "./format";
+import { forceColumnUnit, formatForceCell, timeAgo } from "./format";
 import { STATE_WORDS, type ReviewState } from "@/lib/review/rules";
 import { useUnitsPreference } from "./useUnitsPreference";
 import { LowFactorChip, StatusMark, type LowFactorMark } from "./StatusMark";
@@ -81,6 +81,14 @@ function SortHeader({ label, sort, filters, onSort, className = "" }: { label: s
   );
 }
 
+/** What an address past the last page is told: how many sketches there are, on how many pages. */
+function pastTheEnd(total: number, pageSize: number, filtered: boolean): string {
+  const pages = Math.ceil(total / pageSize);
+  const count = `${total} sketch${total === 1 ? "" : "es"}`;
+  const on = pages === 1 ? "on one page" : `on ${pages} pages`;
+  return filtered ? `${count} match${total === 1 ? "es" : ""}, ${on}.` : `This workspace has ${count}, ${on}.`;
+}
+
 const DEFAULT_FILTERS: Filters = { q: "", tag: "", status: "", sort: "updated", dir: "desc", page: 1 };
 const SORTS: readonly SketchSort[] = ["updated", "title", "status", "created"];
 
@@ -137,6 +145,8 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
     setFilters((f) => ({ ...f, page: 1, sort, dir: f.sort === sort ? (f.dir === "asc" ? "desc" : "asc") : sort === "title" ? "asc" : "desc" }));
   const filtered = Boolean(q || filters.tag || filters.status);
   const data = query.data;
+  // one unit down the "Largest reaction" column, as the result tables write theirs
+  const forceUnit = data ? forceColumnUnit(data.items.map((s) => s.largestReaction), units) : undefined;
 
   return (
     <div className="space-y-3">
@@ -209,6 +219,18 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
             <Skeleton key={i} className="h-9 w-full" />
           ))}
         </div>
+      ) : data && data.items.length === 0 && data.total > 0 ? (
+        // an address past the last page (a link kept from before some sketches were deleted, or typed)
+        <EmptyState
+          title={`There is no page ${data.page}`}
+          action={
+            <Button tone="secondary" onClick={() => setFilters((f) => ({ ...f, page: Math.max(1, Math.ceil(data.total / data.pageSize)) }))}>
+              Go to the last page
+            </Button>
+          }
+        >
+          {pastTheEnd(data.total, data.pageSize, filtered)}
+        </EmptyState>
       ) : data && data.items.length === 0 ? (
         filtered ? (
           <EmptyState title="No sketch matches">Nothing here has that text, tag and status. Clear the filters to see every sketch.</EmptyState>
@@ -267,7 +289,7 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                           <StatusMark status={s.status} warnings={s.warnings} />
                           {s.lowestFactor ? <LowFactorChip low={s.lowestFactor} /> : null}
                         </span>
-                        {s.largestReaction !== null ? <span className="num">largest {formatForceCell(s.largestReaction, units)}</span> : null}
+                        {s.largestReaction !== null ? <span className="num">largest {formatForceCell(s.largestReaction, units, forceUnit)}</span> : null}
                         <span>
                           {timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}
                           {s.updatedBy ? ` by ${s.updatedBy.name}` : ""}
@@ -283,7 +305,7 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
                         </span>
                       ) : null}
                     </td>
-                    <td className="num py-2.5 pr-3 text-right text-ink max-sm:hidden">{formatForceCell(s.largestReaction, units)}</td>
+                    <td className="num py-2.5 pr-3 text-right text-ink max-sm:hidden">{formatForceCell(s.largestReaction, units, forceUnit)}</td>
                     <td className="py-2.5 pr-3 text-ink-soft max-sm:hidden">
                       <span title={formatDateTime(s.updatedAt)}>{timeAgo(s.updatedAt) ?? formatDate(s.updatedAt)}</span>
                       {s.updatedBy ? <span className="block text-xs text-ink-faint">by {s.updatedBy.name}</span> : null}

@@ -1,4 +1,5 @@
 // Numbers and words the sketch screens share. Browser-safe.
+import { LBF_N } from "@/solver/constants";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 
 /** Where the browser keeps the reader's choice of SI or US customary units (editor and review screens). */
@@ -18,9 +19,22 @@ export function formatForce(newtons: number | null | undefined, units: UnitSyste
   return newtons === null || newtons === undefined || !Number.isFinite(newtons) ? "—" : formatQuantity(newtons, "force", units);
 }
 
-/** A force in a table column: 4 significant figures with their trailing zeros ("11.50 kN"), or a dash. */
-export function formatForceCell(newtons: number | null | undefined, units: UnitSystem = "SI"): string {
-  return newtons === null || newtons === undefined || !Number.isFinite(newtons) ? "—" : formatQuantity(newtons, "force", units, { keepZeros: true });
+/** A force in a table column: 4 significant figures with their trailing zeros ("11.50 kN"), or a
+ *  dash; in `unit` when given (the column's one unit, `forceColumnUnit`). */
+export function formatForceCell(newtons: number | null | undefined, units: UnitSystem = "SI", unit?: string): string {
+  return newtons === null || newtons === undefined || !Number.isFinite(newtons) ? "—" : formatQuantity(newtons, "force", units, { keepZeros: true, unit });
+}
+
+/**
+ * One unit for a column of forces, as the result tables choose it (solver/report's `columnUnit`):
+ * kN, or N when every value stays below 1 kN; lbf, or kip once one reaches 10 kip. So a listing
+ * reads "0.9500 kN" under "38.23 kN", not "950.0 N".
+ */
+export function forceColumnUnit(newtons: Iterable<number | null | undefined>, units: UnitSystem = "SI"): string {
+  let largest = 0;
+  for (const v of newtons) if (v !== null && v !== undefined && Number.isFinite(v)) largest = Math.max(largest, Math.abs(v));
+  if (units === "US") return largest / LBF_N >= 9999.5 ? "kip" : "lbf";
+  return largest > 0 && largest < 999.95 ? "N" : "kN";
 }
 
 /** "just now", "5 min ago", "3 h ago", "2 days ago" (then the date). */

@@ -4,7 +4,7 @@
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState, type ReactNode } from "react";
-import { formatForceCell, timeAgo } from "@/components/sketches/format";
+import { forceColumnUnit, formatForceCell, timeAgo } from "@/components/sketches/format";
 import { useUnitsPreference } from "@/components/sketches/useUnitsPreference";
 import { StatusMark } from "@/components/sketches/StatusMark";
 import { Button, Notice, Skeleton } from "@/components/shell/controls";
@@ -66,6 +66,8 @@ export function VersionHistory({
     );
   const toggle = (n: number) => setPicked((p) => (p.includes(n) ? p.filter((x) => x !== n) : [...p.slice(-1), n]));
   const [from, to] = [...picked].sort((a, b) => a - b);
+  // one unit down the "Largest reaction" column, as the result tables write theirs
+  const forceUnit = forceColumnUnit(q.data.versions.map((v) => v.largestReaction), units);
   return (
     <div className="space-y-3">
       {compareHref ? (
@@ -119,7 +121,7 @@ export function VersionHistory({
                       {timeAgo(v.createdAt) ?? formatDate(v.createdAt)} by {v.authorName ?? "a deleted account"}
                     </span>
                     <StatusMark status={v.status} warnings={v.warnings} />
-                    <span className="num whitespace-nowrap">largest {formatForceCell(v.largestReaction, units)}</span>
+                    <span className="num whitespace-nowrap">largest {formatForceCell(v.largestReaction, units, forceUnit)}</span>
                     {reviewCell ? <span data-testid="version-row-signoff">{reviewCell(v)}</span> : null}
                   </span>
                 </td>
@@ -130,7 +132,7 @@ export function VersionHistory({
                 <td className="py-2.5 pr-3 max-sm:hidden">
                   <StatusMark status={v.status} warnings={v.warnings} />
                 </td>
-                <td className="num py-2.5 pr-3 text-right max-sm:hidden">{formatForceCell(v.largestReaction, units)}</td>
+                <td className="num py-2.5 pr-3 text-right max-sm:hidden">{formatForceCell(v.largestReaction, units, forceUnit)}</td>
                 {reviewCell ? <td className="py-2.5 pr-3 max-sm:hidden">{reviewCell(v)}</td> : null}
                 <td className="py-2 text-right">
                   <span className="inline-flex justify-end gap-1.5 whitespace-nowrap max-sm:flex-col max-sm:items-end">

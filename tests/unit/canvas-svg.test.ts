@@ -5,6 +5,7 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { solveFile, type SolveResult } from "@/solver/index";
 import { renderSketchSvg } from "@/canvas/render/svg";
+import { drawingFamily } from "@/canvas/render/results";
 import { EXAMPLES, exampleById } from "@/canvas/examples";
 import { textBox } from "@/canvas/render/labels";
 import { scenePrims } from "@/canvas/render/scenePrims";
@@ -99,6 +100,27 @@ describe("renderSketchSvg", () => {
     expect(text).toContain("W 833.6 N");
     expect(doc.querySelector("g.results")).not.toBeNull();
     expect(text.some((t) => /double lines: reactions found/.test(t ?? ""))).toBe(true);
+  });
+
+  it("writes every force of a drawing in one unit, as its tables do, not 902.2 N beside 25.73 kN", () => {
+    // one unit per quantity across a drawing, chosen from its largest figure: common practice on calc sheets
+    const forceUnits = (svg: string) => new Set([...parse(svg).querySelectorAll("g.results text")].map((t) => t.textContent ?? "").flatMap((t) => [...t.matchAll(/\d (k?N)(?![·\w])/g)].map((m) => m[1])));
+    const bend = solved("pipe-bend-anchor");
+    const svg = renderSketchSvg(bend.sketch, bend.result);
+    expect(forceUnits(svg)).toEqual(new Set(["kN"]));
+    // the bend's weight, 92 kg × g0 = 902.2 N, and ṁV = 44.91 kg/s × 2.546 m/s = 114.4 N, in kN
+    expect(svg).toContain(">W 0.9022 kN<");
+    expect(svg).toContain(">ṁV 0.1144 kN<");
+    expect(svg).toContain(">1.771 kN·m ↻<");
+    expect(drawingFamily(bend.result)).toEqual({ force: "kN", moment: "kN·m" });
+    // a drawing whose every force is under 1 kN stays in N
+    const cart = solved("washing-cart");
+    expect(forceUnits(renderSketchSvg(cart.sketch, cart.result))).toEqual(new Set(["N"]));
+    // two versions compared side by side share one: the cart's N drawing joins the bend's kN
+    expect(drawingFamily([cart.result, null, bend.result])).toEqual({ force: "kN", moment: "kN·m" });
+    expect(drawingFamily([cart.result])).toEqual({ force: "N", moment: "N·m" });
+    // a family given (a calc sheet's) still wins
+    expect(renderSketchSvg(bend.sketch, bend.result, { family: { force: "N", moment: "N·m" } })).toContain(">W 902.2 N<");
   });
 
   it("a body whose mass the solver refuses (below zero) is not labelled with it", () => {

@@ -14,7 +14,7 @@ import { formatDateTime } from "@/components/workspaces/format";
 import { ApiError, apiFetch, apiKey } from "@/lib/api-client";
 import { STATE_WORDS, type ReviewState } from "@/lib/review/rules";
 import { can } from "@/lib/roles";
-import { discardDraft, keepDraft, readDraft, type Draft } from "./drafts";
+import { BEAT_MS, discardDraft, draftsOpenElsewhere, isTabOpenKey, keepDraft, keepTabOpen, readDraft, type Draft } from "./drafts";
 import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
 import { reviewNote } from "./reviewNote";
 import { announceSaved, watchSaved, type SavedElsewhere } from "./savedElsewhere";
@@ -32,7 +32,7 @@ function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; lat
         Made on v{draft.baseVersion}, kept {formatDateTime(draft.keptAt)}. The editor shows v{latest}.
       </p>
       <div className="mt-2 flex flex-wrap gap-2">
-        <Link href={`/workspaces/${workspaceId}/sketches/${draft.sketchId}/compare?from=${latest}&to=draft`} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
+        <Link href={`/workspaces/${workspaceId}/sketches/${draft.sketchId}/compare?from=${latest}&to=draft&draft=${encodeURIComponent(draft.tab ?? "")}`} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
           Compare v{latest} with them
         </Link>
         <a href={`/sketches/${draft.sketchId}?restore=1&draft=${encodeURIComponent(draft.tab ?? "")}`} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
@@ -40,6 +40,29 @@ function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; lat
         </a>
         <button type="button" onClick={onDiscard} className="rounded-md px-2 py-1 text-ink-soft hover:text-ink">
           Discard
+        </button>
+      </div>
+    </div>
+  );
+}
+
+/**
+ * Another tab of this browser, still open, has unsaved changes to this sketch: they are that tab's
+ * work in progress, not work to bring back here, so they are named, not offered (once that tab
+ * closes they are offered here as kept work).
+ */
+function OpenInAnotherTab({ drafts, onDismiss }: { drafts: Draft[]; onDismiss: () => void }) {
+  const d = drafts[0];
+  const more = drafts.length > 1 ? ` (and ${drafts.length - 1} more tab${drafts.length > 2 ? "s" : ""})` : "";
+  return (
+    <div role="status" data-testid="open-in-another-tab" className={`${CARD} border-ink/15 bg-paper-card`}>
+      <p className="font-semibold">Another tab of this browser has unsaved changes to this sketch{more}</p>
+      <p className="mt-1 text-ink-soft">
+        Made on v{d.baseVersion}, kept {formatDateTime(d.keptAt)}. They stay with that tab: save or discard them there. Once that tab is closed, they are offered here.
+      </p>
+      <div className="mt-2 flex flex-wrap gap-2">
+        <button type="button" onClick={onDismiss} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+          Got it
         </button>
       </div>
     </div>
@@ -155,7 +178,13 @@ function Bar({ flow }: { flow: SaveFlow }) {
   const [conflict, setConflict] = useState<{ latest: LatestVersion; message: string } | null>(null);
   const [forking, setForking] = useState(false);
   // the Bar mounts once the sketch has loaded, so `info` is known here
+  // (only a closed tab's: a tab still open keeps its own, named by <OpenInAnotherTab>)
   const [draft, setDraft] = useState<Draft | null>(() => (info && !restored ? readDraft(info.sketchId) : null));
+  const [elsewhere, setElsewhere] = useState<Draft[]>(() => (info && !restored ? draftsOpenElsewhere(info.sketchId, tab) : []));
+  const [elsewhereSeen, setElsewhereSeen] = useState(false);
+  // a draft offered once another tab closed, while this one may have work of its own in progress:
+  // this tab's own keeping goes on (it writes under its own name, never over the one offered)
+  const [offeredLate, setOfferedLate] = useState(false);
   // the "● unsaved" mark and the leave-page prompt: the sketch is not the version as saved
   const dirty = useDirty(flow, restored);
   const review = useReviewState(info?.sketchId, base);
@@ -177,9 +206,34 @@ function Bar({ flow }: { flow: SaveFlow }) {
   useEffect(() => {
     flow.setState({ notice: (text) => stores.editor.getState().notify(text) });
   }, [flow, stores]);
-  useKeepUnsaved(flow, !!draft);
+  useKeepUnsaved(flow, !!draft && !offeredLate);
   // a newer version saved in another tab of this browser: said here, and Save knows it is newer
   const sketchId = info?.sketchId;
+  // this tab is open: its drafts are not offered to other tabs as kept work meanwhile
+  useEffect(() => keepTabOpen(tab), [tab]);
+  // while another open tab's draft is named here: once that tab closes (or, crashed, stops saying
+  // it is open), its draft is offered
+  const watchElsewhere = !!sketchId && elsewhere.length > 0 && !draft && !restored;
+  useEffect(() => {
+    if (!watchElsewhere || !sketchId) return;
+    const look = () => {
+      setElsewhere(draftsOpenElsewhere(sketchId, tab));
+      const d = readDraft(sketchId);
+      if (d && d.tab !== tab) {
+        setOfferedLate(true);
+        setDraft(d);
+      }
+    };
+    const heard = (e: StorageEvent) => {
+      if (isTabOpenKey(e.key)) look();
+    };
+    window.addEventListener("storage", heard);
+    const timer = setInterval(look, BEAT_MS);
+    return () => {
+      window.removeEventListener("storage", heard);
+      clearInterval(timer);
+    };
+  }, [watchElsewhere, sketchId, tab]);
   useEffect(() => {
     if (!sketchId) return;
     return watchSaved(sketchId, (saved) => {
@@ -325,6 +379,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
       {savedElsewhere && savedElsewhere.version > base ? (
         <SavedInAnotherTab saved={savedElsewhere} base={base} dirty={dirty} onOpen={() => leave(`/sketches/${info.sketchId}`)} onDismiss={() => flow.setState({ savedElsewhere: undefined })} />
       ) : null}
+      {!draft && !restored && !elsewhereSeen && elsewhere.length ? <OpenInAnotherTab drafts={elsewhere} onDismiss={() => setElsewhereSeen(true)} /> : null}
       {draft && !restored ? (
         <KeptWork
           draft={draft}
