@@ -104,7 +104,8 @@ export function massBalanceWarnings(sketch: Sketch, flows: Map<string, PortFlow>
  * Ports drawn against their kind: an inlet whose flow leaves the body through its face, or an
  * outlet whose flow enters it (the format has the velocity into the body at an inlet and out of it
  * at an outlet). Almost always a sign slip, and it changes the reactions without an error, so the
- * words under the status say it. A port with the flow along the outline is not judged; a port off
+ * words under the status say it. A port on the outline whose flow runs along it (a port turned a
+ * quarter turn too far) crosses nothing and is said to; a port off
  * the outline (inside the body or outside it) is said to be off it: the control surface is the
  * outline, so fluid crosses the boundary only there.
  */
@@ -122,6 +123,9 @@ export function portDirectionNotes(sketch: Sketch): Array<{ id: string; body: st
       if (nearestOnOutline(p.at, body.outline).distance > eps) {
         const where = pointInPolygon(p.at, body.outline) ? "inside" : "outside";
         out.push({ id: p.id, body: p.body, message: `${name} is ${where} its body, not on its outline: the control surface is the outline, and fluid crosses it only there. Move the port onto the edge where the flow crosses.` });
+      } else {
+        const across = p.kind === "inlet" ? "into" : "out of";
+        out.push({ id: p.id, body: p.body, message: `${name} flows along the outline, not across it: fluid that crosses the control surface must go through it, and the port's area is taken square to its flow. Turn it to point ${across} the body.` });
       }
       continue;
     }

@@ -72,3 +72,22 @@ describe("the kind in front of a name", () => {
     expect(portDirectionNotes(s)[0].message).toMatch(/^Inlet 1 points out of the body/);
   });
 });
+
+describe("a port whose flow runs along its face", () => {
+  // The momentum flux through a port is ṁ·V with the port's area square to V (common practice: a
+  // control surface is crossed, not grazed); on the left face (x = 0) a flow at ±90° crosses nothing.
+  it("is said to run along the outline, with the way to turn it for its kind", () => {
+    const inlet = parsed(block({ label: "feed", massFlow: 39, velocity: 5, angle: 90 }));
+    expect(portDirectionNotes(inlet).map((n) => n.message)).toEqual([
+      "Inlet feed flows along the outline, not across it: fluid that crosses the control surface must go through it, and the port's area is taken square to its flow. Turn it to point into the body.",
+    ]);
+    const outlet = parsed(block({ kind: "outlet", label: "spill", massFlow: 39, velocity: 5, angle: -90 }));
+    expect(portDirectionNotes(outlet).map((n) => n.message)).toEqual([
+      "Outlet spill flows along the outline, not across it: fluid that crosses the control surface must go through it, and the port's area is taken square to its flow. Turn it to point out of the body.",
+    ]);
+  });
+
+  it("a port at an angle across its face (a nozzle aimed 60° off square) is not judged", () => {
+    expect(portDirectionNotes(parsed(block({ massFlow: 39, velocity: 5, angle: 60 })))).toEqual([]);
+  });
+});
