@@ -145,9 +145,13 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   // mouse placed (or a file brought) is SI by rule
   const plainSI = usUnit && !error && (draft !== null || typedPlain) ? `A plain number is SI: ${formatDisplay(typed as number, display, "SI")} (= ${formatDisplay(typed as number, display, "US")}). Meant ${usUnit}? Type “${text.trim()} ${typedUnit(usUnit)}”.` : null;
 
+  // SI on screen, a small plain number typed as a pressure: pascals, which "10" meaning bar is not.
+  // Said beside the value (not a caution: 250 Pa in a duct is real)
+  const pascals = units === "SI" && display === "pressure" && typeof typed === "number" && typed !== 0 && Math.abs(typed) < 1e4 && (draft !== null || typedPlain);
   let line: string;
   if (error) line = error;
   else if (plainSI) line = plainSI;
+  else if (pascals) line = `= ${formatDisplay(typed as number, display, "SI")} (a plain number is pascals: ${text.trim()} bar is “${text.trim()} bar”)`;
   else if (!text.trim()) line = hint ?? (optional ? "not given" : "");
   else if (evaluated !== undefined) line = `= ${formatDisplay(evaluated, display, units)}`;
   else if (typeof typed === "number") line = `= ${formatDisplay(typed, display, units)}`;
