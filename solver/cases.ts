@@ -6,7 +6,7 @@
 import { resolveFile } from "./parse";
 import type { CaseFile, CombinationFile, SketchFile } from "./schema";
 import { prepare, solveModels } from "./solve";
-import { bodyStability, DEFAULT_REQUIREMENTS, type BodyStability, type Requirements } from "./stability";
+import { bodyStability, requirementsOf, type BodyStability, type Requirements } from "./stability";
 import { DEFAULT_GROUPS, type EquationTerm, type FieldError, type Reaction, type SolveResult, type SolveWarning } from "./types";
 import { generalizedLoad, type BodyModel } from "./model";
 
@@ -114,7 +114,7 @@ export function combineModels(parts: Array<{ models: BodyModel[]; factor: number
 }
 
 export function solveCases(file: SketchFile, onProgress: (done: number, total: number) => void = () => {}): StudyResult {
-  const requirements: Requirements = { ...DEFAULT_REQUIREMENTS, ...(file.stability ?? {}) };
+  const requirements: Requirements = requirementsOf(file);
   const cases = file.cases?.length ? file.cases : [AS_DRAWN];
   // a load case marked for combinations only is solved as part of them, not on its own
   let total = cases.filter((c) => !c.onlyInCombinations).length + (file.combinations?.length ?? 0);

@@ -8,7 +8,7 @@ export { parseSketch, planOf, zodErrors, type ParseResult } from "./parse";
 export { solve, solveWithStability } from "./solve";
 export { solveSweep, createSweeper, linspace, FLOW_FACTOR, type SweepResult, type SweepPoint } from "./sweep";
 export { solveCases, asDrawnStudy, withAsDrawnRun, envelopeOf, combineModels, COMPONENTS, type StudyResult, type CaseRun, type SupportEnvelope, type EnvelopeEntry, type Component } from "./cases";
-export { bodyStability, DEFAULT_REQUIREMENTS, type BodyStability, type OverturningCheck, type SlidingCheck, type Requirements } from "./stability";
+export { bodyStability, DEFAULT_REQUIREMENTS, requirementsOf, type BodyStability, type OverturningCheck, type SlidingCheck, type Requirements } from "./stability";
 export { findLimit, brent, type LimitResult, type LimitOptions } from "./limit";
 export { readQuantity, describeQuantity, type QuantitySpec, type QuantityComponent } from "./quantity";
 export { handCheckSums, termMomentAbout, type HandCheckSums } from "./equations";

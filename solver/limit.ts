@@ -2,7 +2,7 @@
 // reach a target as one parameter varies? The range is sampled; each sign change of
 // quantity − target is refined with Brent's method (bracketing root finder), and each run of
 // samples exactly at the target (a contact's n once it has lifted) counts once, at the first
-// point where it starts, found by bisection.
+// point where it starts, found by bisection — or, for a run the range starts in, where it ends.
 //
 // Where the body starts or stops tipping the reported reactions switch from the one-sided
 // solution to the ones equilibrium would require with every support bilateral, so the quantity
@@ -133,7 +133,21 @@ export function findLimitWith(
       }
       return b;
     };
-    if (points[0].f === 0) add(points[0].x);
+    /** the last point of [a, b) still at the target, given f(a) = 0 ≠ f(b) */
+    const lastZero = (a: number, b: number): number => {
+      while (b - a > tol) {
+        const m = (a + b) / 2;
+        if (f(m) === 0) a = m;
+        else b = m;
+      }
+      return a;
+    };
+    if (points[0].f === 0) {
+      // the range starts inside a run at the target (a contact already off the ground): the run
+      // began before the range, so where it is reached is where the run ends, not the range's start
+      const j = points.findIndex((p) => Number.isFinite(p.f) && p.f !== 0);
+      add(j < 0 || !points.slice(0, j).every((p) => p.f === 0) ? points[0].x : lastZero(points[j - 1].x, points[j].x));
+    }
     for (let i = 0; i + 1 < points.length; i++) {
       const a = points[i];
       const b = points[i + 1];

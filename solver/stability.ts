@@ -72,6 +72,9 @@ function supportWords(s: Support): string {
 /** 1.5 for each is common practice (from memory). */
 export const DEFAULT_REQUIREMENTS: Requirements = { overturning: 1.5, sliding: 1.5 };
 
+/** A sketch's required factors of safety: its own where it sets them, else the defaults. */
+export const requirementsOf = (file: { stability?: Partial<Requirements> }): Requirements => ({ ...DEFAULT_REQUIREMENTS, ...(file.stability ?? {}) });
+
 export function overturningCheck(model: BodyModel, required: number): BodyStability["overturning"] {
   const { supports, springs, groups, origin, L } = model;
   const contacts = groups.filter((g) => g.kind === "contact");

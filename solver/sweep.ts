@@ -26,7 +26,8 @@ export interface Sweeper {
   restore(): void;
 }
 
-/** The built-in parameter that scales every port's flow (ṁ and V × f, momentum flux × f²). */
+/** The built-in parameter that scales every port's flow (ṁ and V × f, momentum flux × f²); in a
+ *  case it multiplies the case's own flow factor. */
 export const FLOW_FACTOR = "flowFactor";
 
 /** What a sweep changes in one sketch: the swept value goes in, the sketch is left ready to solve. */
@@ -45,13 +46,17 @@ export function createSetter(sketch: Sketch, parameter: string): ParameterSetter
   if (!plan) throw new Error("a sweep needs a sketch returned by parseSketch");
   if (parameter === FLOW_FACTOR && !plan.scope.has(FLOW_FACTOR)) {
     const saved = sketch.scaling;
+    // a case's own flow factor is a scale too, and the swept one scales it: a "pump off" case
+    // (× 0) stays without flow and a test case (× 1.22) runs at 1.22·f, so a combination of a
+    // weight-only case and a flow case never counts the flow in both
+    const own = saved?.flowFactor ?? 1;
     // the points share the terms and warnings the swept value leaves alone (reuse.ts)
     shareAcrossSolves(sketch, true);
     return {
       sketch,
       unit: "",
       set(value: number): FieldError[] {
-        sketch.scaling = { ...saved, flowFactor: value };
+        sketch.scaling = { ...saved, flowFactor: value * own };
         return value >= 0 ? [] : [{ path: FLOW_FACTOR, message: "must be zero or more" }];
       },
       restore() {

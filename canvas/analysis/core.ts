@@ -1,6 +1,6 @@
 // One analysis of a sketch: parse (expressions evaluated once) and solve. Pure and
 // serialisable, so it runs the same on the main thread, in the worker and on the server.
-import { DEFAULT_REQUIREMENTS, parseSketch, solveWithStability, type BodyStability, type FieldError, type SolveResult, type SolveWarning, type Sketch } from "@/solver/index";
+import { parseSketch, requirementsOf, solveWithStability, type BodyStability, type FieldError, type SolveResult, type SolveWarning, type Sketch } from "@/solver/index";
 import type { FieldValue } from "@/solver/resolve";
 import type { SketchFile } from "@/solver/schema";
 
@@ -47,7 +47,7 @@ export function analyseCore(file: SketchFile): AnalysisCore {
     if (!parsed.ok) {
       core = { ok: false, errors: parsed.errors, warnings: parsed.warnings, fields: parsed.fields, parameterValues: parsed.parameterValues, numeric: null, result: null, stability: null };
     } else {
-      const { result, stability } = solveWithStability(parsed.sketch, { ...DEFAULT_REQUIREMENTS, ...(parsed.file.stability ?? {}) });
+      const { result, stability } = solveWithStability(parsed.sketch, requirementsOf(parsed.file));
       result.warnings.unshift(...parsed.warnings);
       core = { ok: true, errors: [], warnings: result.warnings, fields: parsed.fields, parameterValues: parsed.parameterValues, numeric: parsed.sketch, result, stability };
     }

@@ -86,20 +86,22 @@ export function stretchWords(o: PointStretch, parameter: string, unit: string): 
 }
 
 /** What a sweep's words read of it: its plotted quantities and where their supports are off their seat or their bodies not held. */
-export type SweepStates = Pick<SweepData, "parameter" | "unit" | "quantities" | "off" | "notHeld">;
+export type SweepStates = Pick<SweepData, "parameter" | "unit" | "quantities" | "off" | "notHeld" | "slips">;
 
-/** A line of a sweep's words about its supports' states: a support off its seat ("off"), a friction
- *  margin left out where its body is not held ("notHeld"), or how many more stretches there are ("more"). */
+/** A line of a sweep's words about its supports' states: a support off its seat ("off"), a contact
+ *  short of friction ("slips"), a friction margin left out where its body is not held ("notHeld"),
+ *  or how many more stretches there are ("more"). */
 export interface SweepStateLine {
-  kind: "off" | "notHeld" | "more";
+  kind: "off" | "notHeld" | "slips" | "more";
   words: string;
 }
 
 /**
- * Where a plotted contact is off the ground (a tie slack) over the range or a part of it, and where
- * a plotted friction margin is left out because its body tips or is unrestrained, in words: the
- * Sweep tab, a version's page and the calc sheet say the same. At most `max` stretches where a
- * body is not held and twice as many off their seat; the rest are counted.
+ * Where a plotted contact is off the ground (a tie slack) over the range or a part of it, where a
+ * plotted friction margin is below zero (the contact slips), and where a plotted friction margin is
+ * left out because its body tips or is unrestrained, in words: the Sweep tab, a version's page
+ * and the calc sheet say the same. At most `max` stretches where a body is not held and twice as
+ * many off their seat (or slipping); the rest are counted.
  */
 export function sweepStateLines(data: SweepStates, names: Readonly<Record<string, string>>, max = MAX_STRETCHES): SweepStateLine[] {
   const friction = (support: string) => data.quantities.some((q) => q.support === support && (q.component === "frictionMargin" || q.component === "frictionRatio"));
@@ -114,12 +116,15 @@ export function sweepStateLines(data: SweepStates, names: Readonly<Record<string
     ].filter(Boolean);
     return { kind: "off", words: `${names[o.support] ?? o.support} is ${o.kind === "tie" ? "slack" : "off the ground"} ${where(o)}${why.length ? `: ${why.join("; ")}` : ""}.` };
   });
+  const slips = data.slips ?? [];
+  for (const o of slips.slice(0, max * 2))
+    lines.push({ kind: "slips", words: `${names[o.support] ?? o.support} slips ${where(o)}: it needs more friction than μ·n gives there (its friction margin is below zero).` });
   for (const o of notHeld.slice(0, max))
     lines.push({
       kind: "notHeld",
       words: `The friction margin at ${names[o.support] ?? o.support} is not plotted ${where(o)}, where ${names[o.body] ?? o.body} ${o.status === "tips" ? "tips" : "is unrestrained"}: a body that is not held has no friction margin (its reactions are only what would hold it).`,
     });
-  const hidden = Math.max(0, off.length - max * 2) + Math.max(0, notHeld.length - max);
-  if (hidden > 0) lines.push({ kind: "more", words: `… and ${hidden} more stretches where a support is off its seat or its body is not held.` });
+  const hidden = Math.max(0, off.length - max * 2) + Math.max(0, slips.length - max * 2) + Math.max(0, notHeld.length - max);
+  if (hidden > 0) lines.push({ kind: "more", words: `… and ${hidden} more stretches where a support is off its seat or slips, or its body is not held.` });
   return lines;
 }

@@ -54,6 +54,9 @@ export interface SweepData {
   /** where a plotted friction margin is left out (NaN) while its contact bears, because its body
    *  tips or is unrestrained: its reactions are then only what would hold it */
   notHeld?: Array<PointStretch & { support: string; body: string; status: string }>;
+  /** where a plotted friction margin is below zero (the contact needs more friction than μ·n): the
+   *  crossing alone does not say on which side of it the contact slips */
+  slips?: Array<PointStretch & { support: string }>;
 }
 
 /** Neighbouring points of a sweep that share something: the first and last swept value, how many. */
@@ -137,6 +140,11 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
       return { ...s, support, body: key.slice(0, cut), status: key.slice(cut + 1) };
     }),
   );
+  const slipping = withFriction.filter((id) => spec.quantities.some((q) => q.support === id && q.component === "frictionMargin"));
+  data.slips = slipping.flatMap((support) => {
+    const k = spec.quantities.findIndex((q) => q.support === support && q.component === "frictionMargin");
+    return stretchesOf(data.xs, data.series[k].map((y) => (y < 0 ? "slip" : null))).map(({ key: _key, ...s }) => ({ ...s, support }));
+  });
   data.series.forEach((ys, k) => {
     if (!marksZero(spec.quantities[k].component)) return;
     for (let i = 1; i < ys.length; i++) {

@@ -5,7 +5,7 @@ import { useState } from "react";
 import { useEditor, useStores } from "@/canvas/context";
 import { calibrateUnderlay } from "@/canvas/commands/underlay";
 import type { Command } from "@/canvas/commands/define";
-import { readScale } from "@/canvas/geometry/underlay";
+import { readScale, type ScaleReading } from "@/canvas/geometry/underlay";
 import { suggestUnitsFor } from "@/solver/expressionErrors";
 import { formatNumber } from "@/solver/units";
 import type { UnderlayFile } from "@/solver/schema";
@@ -26,6 +26,27 @@ export function underlayFieldError(message: string, kind: "length" | "angle"): s
   return suggestUnitsFor(message, kind).replace(/^unknown name "([^"]+)": define it as a parameter or (use a unit such as [^;]+)$/, 'unknown name "$1": $2 (the underlay takes values with their units, not the sketch\'s parameters)');
 }
 
+const BARE_NUMBER = /^\s*[-+]?(\d+(\.\d*)?|\.\d+)(e[-+]?\d+)?\s*$/i;
+
+/**
+ * The scale from the two marks and the distance as typed, which must carry its unit: a bare "96"
+ * would be read as metres, and one typing inches or feet (a US drawing) would trace at 39 or 3.3
+ * times the size with nothing said (a sketch's own fields are SI by contract; this one is typed
+ * off a drawing, in whatever unit the drawing is dimensioned in).
+ */
+export function readTypedScale(a: [number, number], b: [number, number], text: string): ScaleReading {
+  if (BARE_NUMBER.test(text)) {
+    const n = text.trim();
+    return { ok: false, message: `${n} what? Give the unit with the distance, as the drawing is dimensioned: ${n} m, ${n} mm, ${n} ft or ${n} in.` };
+  }
+  return readScale(a, b, text);
+}
+
+/** The distance read, in the units on screen: "= 2 m", "= 6.5 ft". */
+function distanceWords(distanceM: number, units: "SI" | "US"): string {
+  return units === "US" ? `= ${formatNumber(distanceM / 0.3048, 4)} ft` : `= ${formatNumber(distanceM, 4)} m`;
+}
+
 export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: boolean }) {
   const { editor } = useStores();
   const tool = useEditor((s) => s.tool);
@@ -33,10 +54,12 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
   const [text, setText] = useState("");
   const calibrating = tool.kind === "calibrate";
   const marks = calibrating ? tool.points : [];
-  const reading = marks.length === 2 ? readScale(marks[0], marks[1], text) : null;
+  const reading = marks.length === 2 ? readTypedScale(marks[0], marks[1], text) : null;
 
   const start = () => {
-    setText(typeof u.calibration?.distance === "string" ? u.calibration.distance : u.calibration ? `${u.calibration.distance} m` : "");
+    const d = u.calibration?.distance;
+    // a distance kept without its unit was read as metres: offered back with it
+    setText(d === undefined ? "" : typeof d === "number" || BARE_NUMBER.test(d) ? `${String(d).trim()} m` : d);
     editor.getState().setTool({ kind: "calibrate", points: [] });
     editor.getState().notify("Setting the scale: click the first of two marks a known distance apart on the drawing. Esc to stop.");
   };
@@ -102,7 +125,7 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
             data-testid="underlay-distance"
           />
           <p id="underlay-distance-note" className={`text-[11.5px] leading-snug ${reading && !reading.ok && text.trim() ? "text-caution" : "text-ink-faint"}`}>
-            {reading?.ok ? `= ${formatNumber(reading.distanceM, 4)} m, so ${scaleWords(reading.metresPerPixel, units)}` : text.trim() && reading ? underlayFieldError(reading.message, "length") : "A length with its unit: m, mm, ft, in…"}
+            {reading?.ok ? `${distanceWords(reading.distanceM, units)}, so ${scaleWords(reading.metresPerPixel, units)}` : text.trim() && reading ? underlayFieldError(reading.message, "length") : "A length with its unit: m, mm, ft, in…"}
           </p>
           <div className="flex gap-1.5">
             <button type="submit" className={PRIMARY_BUTTON} disabled={!reading?.ok} data-testid="underlay-set-scale">

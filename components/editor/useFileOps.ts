@@ -52,7 +52,7 @@ export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputEl
   const svgNow = useCallback(() => {
     const s = stores.editor.getState();
     const a = stores.analysis.getState();
-    const said = a.shown && a.shownSketch ? statusSentences(a.shownSketch, a.shown, s.units).map((x) => x.headline) : [];
+    const said = a.shown && a.shownSketch ? statusSentences(a.shownSketch, a.shown, s.units, undefined, a.shownStability ?? undefined).map((x) => x.headline) : [];
     const lines = [
       ...(a.stale ? ["Results are from before the last change: the sketch has an input error."] : []),
       ...(said.length ? said : ["Not solved."]),

@@ -1,7 +1,7 @@
 // What a version's own results say that a checker or approver must not miss: the sketch as drawn
 // not holding or slipping, a case in which a body is not held, a factor of safety below its
 // required value. The sign-off dialogs list them; the calc sheet's first page says the same.
-import { parseSketch, solve, type ParseResult } from "@/solver";
+import { parseSketch, requirementsOf, solveWithStability, type ParseResult } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
 import { asDrawnOfDocument, solveDocument, studyOfDocument } from "@/lib/review/compare";
 import { caseFindings } from "@/solver/report";
@@ -12,12 +12,14 @@ export function versionConcerns(doc: unknown): string[] {
   // a document object is parsed and solved once for the whole page (its drawing and tables too)
   if (typeof doc !== "object" || doc === null) return notSolved(parseSketch(doc));
   const file = doc as SketchFile;
-  const { parsed, result } = solveDocument(file);
+  const { parsed } = solveDocument(file);
   if (!parsed.ok) return notSolved(parsed);
   const study = studyOfDocument(file);
   const hasCases = !!(parsed.file.cases?.length || parsed.file.combinations?.length);
   const out: string[] = [];
-  for (const s of statusSentences(parsed.sketch, result ?? solve(parsed.sketch))) if (s.tone !== "holds") out.push(`As drawn: ${s.headline}`);
+  // with the factors of safety, so a body that tips and slides says which comes first, as on screen
+  const solved = solveWithStability(parsed.sketch, requirementsOf(parsed.file));
+  for (const s of statusSentences(parsed.sketch, solved.result, "SI", undefined, solved.stability)) if (s.tone !== "holds") out.push(`As drawn: ${s.headline}`);
   // with cases, the values on the drawing are a state of their own: its factors of safety too
   const asDrawn = hasCases ? asDrawnOfDocument(file) : null;
   if (asDrawn) out.push(...caseFindings(asDrawn, false).map((f) => `As drawn: ${f}`));

@@ -59,7 +59,7 @@ function unitExample(unit: string): string {
 /**
  * The cases searched (on their own or within a searched combination) that set the swept parameter
  * themselves, "name: value" (as the case writes it): the searched value stands in for theirs. For the flow factor, the
- * cases whose flow factor is not 1.
+ * cases whose flow factor is not 1: the searched one multiplies theirs (solver/sweep.ts).
  */
 export function overridesIn(sketch: SketchFile, rows: readonly LimitEverywhere[], parameter: string): string[] {
   const ids = new Set<string>();
@@ -409,6 +409,8 @@ export function SweepPanel() {
   };
 
   const caseOverride = caseId ? sketch.cases?.find((c) => c.id === caseId)?.parameters?.[parameter] : undefined;
+  // a case's own flow factor is not replaced but scaled by the swept one
+  const caseFlow = caseId && parameter === FLOW_FACTOR ? sketch.cases?.find((c) => c.id === caseId)?.flowFactor : undefined;
   const combination = combinationId ? sketch.combinations?.find((k) => k.id === combinationId) : undefined;
   // the cases of the combination that set the swept parameter themselves
   const combinationOverrides = combination
@@ -487,12 +489,19 @@ export function SweepPanel() {
             {combination && (
               <span className="mt-0.5 block text-[11px] text-ink-faint" data-testid="combination-sweep-note">
                 Each point is solved as one factored load set ({combination.terms.map((t) => `${t.factor} × ${sketch.cases?.find((c) => c.id === t.case)?.name ?? t.case}`).join(" + ")}), with the sweep&apos;s {pLabel} in every case
-                {combinationOverrides.length ? `, standing in for ${combinationOverrides.join(", ")}` : ""}.
+                {combinationOverrides.length ? (parameter === FLOW_FACTOR ? `, times each case's own flow factor: ${combinationOverrides.join(", ")}` : `, standing in for ${combinationOverrides.join(", ")}`) : ""}.
               </span>
             )}
             {caseOverride !== undefined && (
               <span className="mt-0.5 block text-[11px] text-ink-faint" data-testid="case-sets-parameter">
                 This case sets {parameter} = {String(caseOverride)}; the sweep&apos;s values stand in for it.
+              </span>
+            )}
+            {caseFlow !== undefined && caseFlow !== 1 && (
+              <span className="mt-0.5 block text-[11px] text-ink-faint" data-testid="case-sets-parameter">
+                {caseFlow === 0
+                  ? "This case runs without flow (flow × 0); the sweep's flow factor multiplies it, so every point is without flow too."
+                  : `This case runs the flow × ${caseFlow}; the sweep's flow factor multiplies it (each point runs the flow × ${caseFlow}·f).`}
               </span>
             )}
           </label>
@@ -659,7 +668,7 @@ export function SweepPanel() {
                 </table>
                 <p className="mt-0.5 text-[11.5px] text-ink-faint" data-testid="limit-everywhere-overrides">
                   {everywhere.overrides.length
-                    ? `Each is searched over ${everywhere.pName} from ${formatNumber(everywhere.from, 5)} to ${formatNumber(everywhere.to, 5)}${everywhere.unit ? ` ${prettyUnit(everywhere.unit)}` : ""}: the searched value stands in for the ${everywhere.pName} a case sets itself (${everywhere.overrides.join("; ")}).`
+                    ? `Each is searched over ${everywhere.pName} from ${formatNumber(everywhere.from, 5)} to ${formatNumber(everywhere.to, 5)}${everywhere.unit ? ` ${prettyUnit(everywhere.unit)}` : ""}: ${everywhere.pName === "flow factor" ? "the searched flow factor multiplies a case's own" : `the searched value stands in for the ${everywhere.pName} a case sets itself`} (${everywhere.overrides.join("; ")}).`
                     : `Each is searched over ${everywhere.pName} from ${formatNumber(everywhere.from, 5)} to ${formatNumber(everywhere.to, 5)}${everywhere.unit ? ` ${prettyUnit(everywhere.unit)}` : ""}; no case sets ${everywhere.pName} itself.`}
                 </p>
                 {everywhere.first.length > 0 && (

@@ -16,15 +16,16 @@ import {
   inputsTable,
   parametersTable,
   parseSketch,
-  solve,
+  requirementsOf,
+  solveWithStability,
   solveCases,
   stabilityTable,
   asDrawnStudy,
   withAsDrawnRun,
   type UnitSystem,
-  type SolveResult,
 } from "@/solver";
 import { caseWarnings } from "@/solver/cases";
+import { FLOW_FACTOR } from "@/solver/sweep";
 import { combinationWarningWords } from "@/components/studies/casesText";
 import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
@@ -102,7 +103,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const units = input.units ?? "SI";
   const parsed = parseSketch(input.file);
   if (!parsed.ok) throw new Error(`the saved sketch does not parse: ${parsed.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`);
-  const result: SolveResult = solve(parsed.sketch);
+  // with the factors of safety, so a body that tips and slides says which comes first, as on screen
+  const { result, stability } = solveWithStability(parsed.sketch, requirementsOf(parsed.file));
   result.warnings.unshift(...parsed.warnings);
   const study = solveCases(parsed.file);
   // the values on the drawing are a state of their own: with cases, solved apart for its factors of safety
@@ -151,7 +153,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   heading(hasCases ? "Result as drawn" : "Result");
   // the sentences of the results panel: a body that slips is not reported as holding
   const said = new Set<string>();
-  for (const s of statusSentences(parsed.sketch, result, units, family.force)) {
+  for (const s of statusSentences(parsed.sketch, result, units, family.force, stability)) {
     const b = result.bodies[s.body];
     const determinacy = b.determinacy.kind === "indeterminate" ? "" : ` Statically ${b.determinacy.kind}.`;
     para(`${s.headline}.${determinacy}`, 9.5, s.tone === "holds" ? INK : ACCENT);
@@ -268,7 +270,15 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     // a case that sets the swept parameter itself: the sweep's values stand in for the case's
     const overridden = sw.case ? parsed.file.cases?.find((c) => c.id === sw.case)?.parameters?.[sw.parameter] : undefined;
     if (overridden !== undefined) para(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`, 8.5, INK);
-    if (combination) para(`Each point is solved as the combination's factored load set (${combinationTerms(combination, parsed.file.cases)}), with the sweep's value of ${parameterWords(sw.parameter)} in every one of its cases.`, 8.5, INK);
+    // a case's own flow factor is scaled by the swept one, not replaced (solver/sweep.ts)
+    const ownFlow = sw.case && sw.parameter === FLOW_FACTOR ? parsed.file.cases?.find((c) => c.id === sw.case)?.flowFactor : undefined;
+    if (ownFlow !== undefined && ownFlow !== 1) para(`The sweep's flow factor multiplies the case's own (flow × ${ownFlow}): each point runs the flow × ${ownFlow}·f; everything else is as in the case.`, 8.5, INK);
+    if (combination)
+      para(
+        `Each point is solved as the combination's factored load set (${combinationTerms(combination, parsed.file.cases)}), with the sweep's value of ${parameterWords(sw.parameter)} ${sw.parameter === FLOW_FACTOR ? "multiplying each of its cases' own (1 unless the case gives one)" : "in every one of its cases"}.`,
+        8.5,
+        INK,
+      );
     try {
       const { charts, markers, states } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions), family);
       for (const spec of charts) {

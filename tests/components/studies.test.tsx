@@ -320,6 +320,19 @@ describe("Sweep tab", () => {
     expect(screen.queryByTestId("case-sets-parameter")).toBeNull();
   });
 
+  it("says that the swept flow factor multiplies a case's own, and a pump-off case stays without flow", async () => {
+    const user = userEvent.setup();
+    const { exampleById } = await import("@/canvas/examples");
+    // the washing cart's cases: "Pump off (parked)" runs the flow × 0
+    mount(exampleById("washing-cart")!.sketch);
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "flowFactor");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Case to sweep" }), "case:pump-off");
+    expect(screen.getByTestId("case-sets-parameter").textContent).toBe("This case runs without flow (flow × 0); the sweep's flow factor multiplies it, so every point is without flow too.");
+    await user.selectOptions(screen.getByRole("combobox", { name: "Case to sweep" }), "case:raised");
+    expect(screen.queryByTestId("case-sets-parameter")).toBeNull();
+  });
+
   it("plots a sweep, lists the crossing, and the limit finder answers in words", async () => {
     const user = userEvent.setup();
     mount(load("fire-monitor-trailer"));

@@ -233,6 +233,26 @@ describe("setting the scale on a narrow window (the properties panel lies over t
   });
 });
 
+
+/** The underlay panel on a US customary screen, its two marks 400 px apart set, waiting for the distance. */
+async function markedOnUsScreen() {
+  const user = userEvent.setup();
+  const sketch = { ...skid(), underlay: { upload: UPLOAD, width: 1000, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.01, rotation: 0, opacity: 0.6 } };
+  const store = createEditorStore({ sketch });
+  store.getState().setUnits("US");
+  render(
+    <EditorProvider editor={store}>
+      <PersistenceCtx.Provider value={savedPersistence(sketch).persistence}>
+        <UnderlayPanel />
+      </PersistenceCtx.Provider>
+    </EditorProvider>,
+  );
+  await user.click(screen.getByTestId("underlay-calibrate"));
+  for (const [i, v] of ["300", "520", "700", "520"].entries()) await user.type(screen.getByTestId(`underlay-mark-${i}`), v);
+  await user.click(screen.getByTestId("underlay-use-marks"));
+  return { user, store };
+}
+
 describe("the underlay's fields read values, not the sketch's parameters", () => {
   it("an unknown name is not told to become a parameter, and the units offered are the field's own", async () => {
     const user = userEvent.setup();
@@ -260,5 +280,30 @@ describe("the underlay's fields read values, not the sketch's parameters", () =>
     await user.type(screen.getByTestId("underlay-distance"), "2 yds");
     expect(screen.getByTestId("underlay-scale")).toHaveTextContent('unknown name "yds": use a unit such as m, mm, ft, in (the underlay takes values with their units');
     expect(screen.getByTestId("underlay-set-scale")).toBeDisabled();
+  });
+
+  it("a distance typed without its unit is refused, not read as metres", async () => {
+    const { user, store } = await markedOnUsScreen();
+    const distance = screen.getByTestId("underlay-distance");
+    // a drawing dimensioned in inches: "96" would have been 96 m, 39 times too large
+    await user.type(distance, "96");
+    expect(distance).toHaveAttribute("aria-invalid", "true");
+    expect(screen.getByTestId("underlay-scale")).toHaveTextContent("96 what? Give the unit with the distance, as the drawing is dimensioned: 96 m, 96 mm, 96 ft or 96 in.");
+    expect(screen.getByTestId("underlay-set-scale")).toBeDisabled();
+    await user.type(distance, " in{Enter}");
+    // 96 in = 8 ft over 400 px: 0.24 in a pixel
+    expect(store.getState().sketch.underlay!.metresPerPixel).toBeCloseTo((96 * 0.0254) / 400, 12);
+    expect(store.getState().sketch.underlay!.calibration).toEqual({ a: [300, 520], b: [700, 520], distance: "96 in" });
+    // set again: the distance kept comes back as typed, with its unit
+    await user.click(screen.getByTestId("underlay-calibrate"));
+    for (const [i, v] of ["300", "520", "700", "520"].entries()) await user.type(screen.getByTestId(`underlay-mark-${i}`), v);
+    await user.click(screen.getByTestId("underlay-use-marks"));
+    expect(screen.getByTestId("underlay-distance")).toHaveValue("96 in");
+  });
+
+  it("the distance read is said in feet on a US customary screen", async () => {
+    const { user } = await markedOnUsScreen();
+    await user.type(screen.getByTestId("underlay-distance"), "2.4384 m");
+    expect(screen.getByTestId("underlay-scale")).toHaveTextContent("= 8 ft, so 0.24 in a pixel");
   });
 });

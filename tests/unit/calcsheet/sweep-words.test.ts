@@ -83,6 +83,22 @@ describe("the calc sheet of the skid", () => {
   });
 });
 
+describe("a flow-factor sweep on a case with its own flow factor", () => {
+  it("says on the sheet that the swept factor multiplies the case's own, and in a combination each case's", async () => {
+    const { file } = skid();
+    file.combinations = [{ id: "k", name: "Factored surge", terms: [{ case: "duty", factor: 0.9 }, { case: "surge", factor: 1.5 }] }];
+    file.sweeps = [
+      { ...file.sweeps![0], id: "on-surge", case: "surge", points: 11 },
+      { ...file.sweeps![0], id: "on-k", combination: "k", points: 11 },
+    ];
+    const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Booster skid", version: 1, savedAt: new Date(0), generatedAt: new Date(0), signoff: [], file });
+    const { text } = await pdfText(buf);
+    const flat = text.replace(/\s+/g, " ");
+    expect(flat).toContain("The sweep's flow factor multiplies the case's own (flow × 1.3): each point runs the flow × 1.3·f; everything else is as in the case.");
+    expect(flat).toContain("with the sweep's value of flow factor multiplying each of its cases' own (1 unless the case gives one).");
+  }, 60000);
+});
+
 describe("In every case, a run past the target all along", () => {
   it("is said apart from the one that reaches it first", () => {
     const { file } = skid();

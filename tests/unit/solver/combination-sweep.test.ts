@@ -101,6 +101,30 @@ describe("a sweep on a combination", () => {
     });
   });
 
+  it("the swept flow factor multiplies a case's own: a pump-off case (× 0) stays without flow, a half-flow case runs at f/2", () => {
+    // The weight-only case written as "flow × 0" (as a parked or pump-off case is) and the jet
+    // case with no weight: the combination is 0.9·W and 1.3·ṁV·f², so the rear contact lifts
+    // at f = √(0.9·W·d / (1.3·h·ṁV)) (moments about the front pin, as above). Were the swept
+    // value to replace the pump-off case's 0, the jet would be counted 0.9 + 1.3 = 2.2 times.
+    const doc = cart();
+    doc.cases = [
+      { id: "dead", name: "Pump off", flowFactor: 0 },
+      { id: "jet", name: "Jet", factors: { dead: 0 } },
+      { id: "half", name: "Half flow", flowFactor: 0.5 },
+    ];
+    const lim = runLimit(doc, { parameter: FLOW_FACTOR, from: 0, to: 5, combinationId: "uplift", quantity: rear, target: 0 });
+    if (!lim.found) throw new Error("expected a crossing");
+    expectRel(lim.value, Math.sqrt((0.9 * W * d) / (1.3 * h * mdot * V)), 1e-8);
+    const all = runLimitEverywhere(doc, { parameter: FLOW_FACTOR, from: 0, to: 10, quantity: rear, target: 0 });
+    const of = (id: string) => all.find((r) => r.id === id)!.result;
+    // parked: the weight alone at every swept flow, so the rear contact never lifts
+    expect(of("dead")).toMatchObject({ found: false, reason: "no crossing in this range: the quantity stays above 0 from 0 to 10" });
+    // half flow: thrust ṁV·(f/2)², so it lifts at twice the sketch's f = √(W·d / (h·ṁV))
+    const half = of("half");
+    if (!("found" in half) || !half.found) throw new Error("expected a crossing");
+    expectRel(half.value, 2 * Math.sqrt((W * d) / (h * mdot * V)), 1e-8);
+  });
+
   it("the swept value stands in for a case's own value of the parameter", () => {
     const doc = cart();
     doc.cases![1] = { id: "jet", name: "Jet", factors: { dead: 0 }, parameters: { mj: "1 kg/s" } };
