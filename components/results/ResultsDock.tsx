@@ -3,6 +3,7 @@
 // the support), the hand check, and the cautions and assumptions beside them.
 import { useEffect, useRef, useState, type RefObject } from "react";
 import { radioKeys } from "@/components/shell/controls";
+import { useTabList } from "@/components/shell/Tabs";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { elementNames } from "@/solver/cases";
 import { CasesPanel } from "@/components/studies/CasesPanel";
@@ -15,6 +16,13 @@ import { ReactionsTable, type Sense } from "./ReactionsTable";
 import { StatusBanner } from "./StatusBanner";
 
 type Tab = "reactions" | "hand" | "cases" | "sweep";
+const TABS = [
+  ["reactions", "Reactions"],
+  ["hand", "Hand check"],
+  ["cases", "Cases"],
+  ["sweep", "Sweep"],
+] as const;
+const TAB_IDS = TABS.map(([id]) => id);
 
 /** The dock's height the user dragged to (px), kept for the next visit; none: the tab's own height. */
 const HEIGHT_KEY = "counterpoise:results-height";
@@ -138,6 +146,10 @@ function Resizer({ height, limit, onChange }: { height: number; limit: number; o
 
 export function ResultsDock() {
   const [tab, setTab] = useState<Tab>("reactions");
+  // manual activation: the arrows move the focus and Enter or Space opens the tab. Leaving the
+  // Cases or Sweep tab throws away its results (and stops a run in progress), and opening either
+  // grows the dock, so the keyboard passing over a tab must not open it
+  const tabList = useTabList({ tabs: TAB_IDS, selected: tab, onSelect: setTab, activation: "manual" });
   const [sense, setSense] = useState<Sense>("body");
   const flows = useEditor((s) => s.sketch.ports.length > 0);
   const [chosen, setChosen] = useState<number | null>(readHeight);
@@ -175,23 +187,11 @@ export function ResultsDock() {
         <CautionsLine flows={flows} />
         {/* on a narrow screen the switch goes under the tabs, never breaking a label over lines */}
         <div className="mt-2 flex flex-wrap items-center gap-x-1 border-b border-rule max-sm:sticky max-sm:top-0 max-sm:z-[1] max-sm:bg-paper">
-          <div role="tablist" aria-label="Results views" className="flex">
-            {(
-              [
-                ["reactions", "Reactions"],
-                ["hand", "Hand check"],
-                ["cases", "Cases"],
-                ["sweep", "Sweep"],
-              ] as const
-            ).map(([id, label]) => (
+          <div {...tabList.listProps("Results views")} className="flex">
+            {TABS.map(([id, label]) => (
               <button
                 key={id}
-                type="button"
-                role="tab"
-                id={`tab-${id}`}
-                aria-selected={tab === id}
-                aria-controls={`panel-${id}`}
-                onClick={() => setTab(id)}
+                {...tabList.tabProps(id)}
                 className={`-mb-px whitespace-nowrap border-b-2 px-3 py-1 text-[12.5px] font-medium ${tab === id ? "border-accent text-ink" : "border-transparent text-ink-faint hover:text-ink"}`}
               >
                 {label}
@@ -222,7 +222,7 @@ export function ResultsDock() {
             </div>
           )}
         </div>
-        <div id={`panel-${tab}`} role="tabpanel" aria-labelledby={`tab-${tab}`} tabIndex={0} className="relative min-h-0 flex-1 overflow-auto py-2 outline-none focus-visible:ring-2 focus-visible:ring-inset focus-visible:ring-accent/60 max-sm:flex-none max-sm:overflow-visible">
+        <div {...tabList.panelProps()} className="relative min-h-0 flex-1 overflow-auto py-2 outline-none focus-visible:ring-2 focus-visible:ring-inset focus-visible:ring-accent/60 max-sm:flex-none max-sm:overflow-visible">
           {tab === "reactions" ? <ReactionsTable sense={sense} /> : tab === "hand" ? <HandCheckView /> : tab === "cases" ? <CasesPanel /> : <SweepPanel />}
         </div>
       </div>

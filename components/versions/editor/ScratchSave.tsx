@@ -12,6 +12,7 @@ import { useForkTargets } from "@/components/sketches/ForkDialog";
 import { Button, Field, Notice, Select } from "@/components/shell/controls";
 import { Providers } from "@/components/shell/Providers";
 import { apiFetch, ApiError } from "@/lib/api-client";
+import { withNext } from "@/components/auth/nextPath";
 import { Dialog } from "../Dialog";
 import { problemLines } from "./SaveDialogs";
 import { NarrowLabel } from "@/components/editor/NarrowLabel";
@@ -72,18 +73,63 @@ function SaveToWorkspace({ onClose, onSaved }: { onClose: () => void; onSaved?: 
   const signedOut = targets.error instanceof ApiError && targets.error.status === 401;
   const err = create.error instanceof ApiError ? create.error : null;
 
+  // back here with the dialog open (and the workspace asked for, if one was) after signing in,
+  // or after creating an account, confirming it and signing in
+  const workspace = params.get("workspace");
+  const back = `/sketches/new?save=1${workspace ? `&workspace=${encodeURIComponent(workspace)}` : ""}`;
+
+  if (targets.isPending) {
+    // nothing to choose yet, nor known whether there is anyone to choose for: no form until then
+    return (
+      <Dialog open onClose={onClose} title="Save to a workspace" testId="scratch-save-dialog">
+        <div className="space-y-4 text-sm">
+          <p role="status" className="text-ink-soft" data-testid="scratch-save-finding">
+            Finding your workspaces…
+          </p>
+          <div className="flex justify-end">
+            <Button tone="quiet" onClick={onClose}>
+              Cancel
+            </Button>
+          </div>
+        </div>
+      </Dialog>
+    );
+  }
   if (signedOut) {
     return (
       <Dialog open onClose={onClose} title="Sign in to save this sketch" testId="scratch-save-dialog">
         <div className="space-y-4 text-sm">
-          <p className="text-ink-soft">Saved sketches live in a workspace, with versions your colleagues can check. Your sketch stays in this browser while you sign in.</p>
-          <div className="flex justify-end gap-2">
+          <p className="text-ink-soft">Saved sketches live in a workspace, with versions your colleagues can check. Your sketch stays in this browser while you sign in or create an account.</p>
+          <div className="flex flex-wrap items-center justify-end gap-2">
             <Button tone="quiet" onClick={onClose}>
               Not now
             </Button>
-            <Link href={`/sign-in?next=${encodeURIComponent("/sketches/new?save=1")}`} className="rounded-md bg-ink px-4 py-2 font-medium text-paper hover:bg-ink-soft">
+            <Link href={withNext("/sign-up", back)} className="rounded-md px-4 py-2 font-medium text-ink underline decoration-rule underline-offset-2 hover:text-ink-soft">
+              Create an account
+            </Link>
+            <Link href={withNext("/sign-in", back)} className="rounded-md bg-ink px-4 py-2 font-medium text-paper hover:bg-ink-soft">
               Sign in
             </Link>
+          </div>
+        </div>
+      </Dialog>
+    );
+  }
+  if (targets.isError) {
+    // the workspaces could not be read (the server or the connection): say so, and offer it again
+    return (
+      <Dialog open onClose={onClose} title="Save to a workspace" testId="scratch-save-dialog">
+        <div className="space-y-4 text-sm">
+          <Notice tone="error" title="Your workspaces could not be loaded">
+            {targets.error instanceof ApiError ? targets.error.message : "The server did not answer."} Your sketch stays in this browser.
+          </Notice>
+          <div className="flex justify-end gap-2">
+            <Button tone="quiet" onClick={onClose}>
+              Cancel
+            </Button>
+            <Button onClick={() => void targets.refetch()} busy={targets.isFetching}>
+              Try again
+            </Button>
           </div>
         </div>
       </Dialog>
@@ -99,7 +145,13 @@ function SaveToWorkspace({ onClose, onSaved }: { onClose: () => void; onSaved?: 
         }}
       >
         {targets.data && targets.data.length === 0 ? (
-          <Notice tone="info">You are not an editor or owner of any workspace yet. Create one from your workspaces page.</Notice>
+          <Notice tone="info">
+            You are not an editor or owner of any workspace yet. Create one from{" "}
+            <Link href="/workspaces" className="font-semibold underline underline-offset-2">
+              your workspaces page
+            </Link>
+            .
+          </Notice>
         ) : (
           <Select id="save-workspace" label="Workspace" value={chosen} onChange={(e) => setWorkspaceId(e.target.value)} disabled={!targets.data}>
             {(targets.data ?? []).map((w) => (
