@@ -1,7 +1,7 @@
 "use client";
 // "Results", under the drawing: the status in words, the reactions (force on the body or load on
 // the support), the hand check, and the cautions and assumptions beside them.
-import { useEffect, useRef, useState, type RefObject } from "react";
+import { Activity, useEffect, useRef, useState, type RefObject } from "react";
 import { radioKeys } from "@/components/shell/controls";
 import { useTabList } from "@/components/shell/Tabs";
 import { useAnalysis, useEditor } from "@/canvas/context";
@@ -146,10 +146,18 @@ function Resizer({ height, limit, onChange }: { height: number; limit: number; o
 
 export function ResultsDock() {
   const [tab, setTab] = useState<Tab>("reactions");
-  // manual activation: the arrows move the focus and Enter or Space opens the tab. Leaving the
-  // Cases or Sweep tab throws away its results (and stops a run in progress), and opening either
-  // grows the dock, so the keyboard passing over a tab must not open it
-  const tabList = useTabList({ tabs: TAB_IDS, selected: tab, onSelect: setTab, activation: "manual" });
+  // the studies, once opened, are kept hidden (React's Activity) while another tab is shown: a
+  // sweep's plot, its limit and the case table are there again on coming back. Hidden, their
+  // updates wait for idle time (a drag is not slowed) and their effects stop: a run in progress is
+  // stopped, as its Stop button would
+  const [kept, setKept] = useState<ReadonlySet<Tab>>(() => new Set());
+  const open = (id: Tab) => {
+    setTab(id);
+    if (id === "cases" || id === "sweep") setKept((k) => (k.has(id) ? k : new Set(k).add(id)));
+  };
+  // manual activation: the arrows move the focus and Enter or Space opens the tab. Opening Cases
+  // or Sweep grows the dock and starts its panel, so the keyboard passing over a tab must not open it
+  const tabList = useTabList({ tabs: TAB_IDS, selected: tab, onSelect: open, activation: "manual" });
   const [sense, setSense] = useState<Sense>("body");
   const flows = useEditor((s) => s.sketch.ports.length > 0);
   const [chosen, setChosen] = useState<number | null>(readHeight);
@@ -223,7 +231,17 @@ export function ResultsDock() {
           )}
         </div>
         <div {...tabList.panelProps()} className="relative min-h-0 flex-1 overflow-auto py-2 outline-none focus-visible:ring-2 focus-visible:ring-inset focus-visible:ring-accent/60 max-sm:flex-none max-sm:overflow-visible">
-          {tab === "reactions" ? <ReactionsTable sense={sense} /> : tab === "hand" ? <HandCheckView /> : tab === "cases" ? <CasesPanel /> : <SweepPanel />}
+          {tab === "reactions" ? <ReactionsTable sense={sense} /> : tab === "hand" ? <HandCheckView /> : null}
+          {kept.has("cases") && (
+            <Activity mode={tab === "cases" ? "visible" : "hidden"}>
+              <CasesPanel />
+            </Activity>
+          )}
+          {kept.has("sweep") && (
+            <Activity mode={tab === "sweep" ? "visible" : "hidden"}>
+              <SweepPanel />
+            </Activity>
+          )}
         </div>
       </div>
       <CautionsAside flows={flows} />

@@ -1,7 +1,7 @@
 // The results dock's views are one row of tabs for the keyboard (WAI-ARIA Authoring Practices,
 // "Tabs"): one Tab stop, the arrows, Home and End move between them, and each panel is labelled by
-// its tab. The dock opens a tab on Enter or Space, not as the focus passes (leaving the Cases or
-// Sweep tab throws away what was run there); the shared hook also opens on the arrow keys.
+// its tab. The dock opens a tab on Enter or Space, not as the focus passes (opening Cases or Sweep
+// grows the dock and starts its panel); the shared hook also opens on the arrow keys.
 import { cleanup, render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { useState } from "react";

@@ -260,6 +260,23 @@ async function findLimit(user: ReturnType<typeof userEvent.setup>, target: strin
 }
 
 describe("Sweep tab", () => {
+  it("keeps the sweep run, its plot and its limit while another tab is looked at", async () => {
+    const user = userEvent.setup();
+    mount(post(-1000));
+    await sweepPostMoment(user);
+    await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "moment at base");
+    await findLimit(user, "100");
+    // M_base = 1000 N·(a − 1 m) = 100 N·m at a = 1.1 m (statics, as above)
+    const answer = "The moment at base reaches 100 N·m at a = 1.100 m (to 4 significant figures).";
+    expect((await screen.findByTestId("limit-answer")).textContent).toBe(answer);
+    await user.click(screen.getByRole("tab", { name: "Reactions" }));
+    expect(screen.getByRole("tabpanel", { name: "Reactions" })).toBeInTheDocument();
+    expect(screen.queryByRole("button", { name: "Run the sweep" })).toBeNull();
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    expect(screen.getByTestId("limit-answer").textContent).toBe(answer);
+    expect(screen.getByTestId("crossings")).toBeVisible();
+  });
+
   it("the limit finder takes a fixed support's moment in lbf·ft (1 lbf·ft = 1.3558179483 N·m, NIST SP 811)", async () => {
     const user = userEvent.setup();
     // a post on a fixed base at x = 1 m, 1 kN down at x = a: M_base = 1000 N·(a − 1 m) (statics),
