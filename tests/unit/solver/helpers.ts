@@ -26,11 +26,11 @@ export function expectRel(actual: number, expected: number, rel: number) {
   expect(Math.abs(actual - expected), `${actual} vs ${expected} (±${rel * 100} %)`).toBeLessThanOrEqual(tol);
 }
 
-/** A sketch file written at format version 1 (the published contract): it is migrated on parsing,
- *  so every test built with it also checks that version-1 files keep working. */
-export const sketch = (parts: Partial<SketchFileInput>): SketchFileInput => ({
+/** A sketch file written at format version 1 (the published contract) unless another is given: it is
+ *  migrated on parsing, so every test built with it also checks that version-1 files keep working. */
+export const sketch = (parts: Partial<SketchFileInput>, version = 1): SketchFileInput => ({
   format: "counterpoise.sketch",
-  version: 1 as unknown as SketchFileInput["version"],
+  version: version as unknown as SketchFileInput["version"],
   bodies: [],
   supports: [],
   loads: [],

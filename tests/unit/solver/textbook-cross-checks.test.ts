@@ -5,19 +5,10 @@
 // are marked "from memory", and each is also derived in the test so it does not rest on memory alone.
 import { describe, expect, it } from "vitest";
 import type { SketchFileInput } from "@/solver";
-import { expectRel, solved } from "./helpers";
+import { expectRel, sketch, solved } from "./helpers";
 
-const v6 = (parts: Partial<SketchFileInput>): SketchFileInput => ({
-  format: "counterpoise.sketch",
-  version: 6 as SketchFileInput["version"],
-  gravity: 0,
-  bodies: [],
-  supports: [],
-  loads: [],
-  ports: [],
-  massSources: [],
-  ...parts,
-});
+/** A file at format version 6 (a port's β needs version 4 or later), gravity off. */
+const v6 = (parts: Partial<SketchFileInput>): SketchFileInput => sketch({ gravity: 0, ...parts }, 6);
 
 describe("Çengel & Cimbala, Fluid Mechanics: Fundamentals and Applications, Examples 6-1 and 6-2 (values from memory)", () => {
   // Water at 14 kg/s (ρ = 1000 kg/m³) through a reducing elbow, 113 cm² in, 7 cm² out, the outlet
