@@ -99,7 +99,10 @@ export function SweepChart({
               return [typeof v === "number" ? `${formatNumber(v, 4)}${unitOf(s) ? ` ${unitOf(s)}` : ""}` : "—", String(name)];
             }}
             labelFormatter={(x) => `${parameterLabel} = ${formatNumber(Number(x), 5)}${data.unit ? ` ${prettyUnit(data.unit)}` : ""}`}
-            contentStyle={{ fontSize: 12, borderColor: "rgb(var(--rule))", backgroundColor: "rgb(var(--paper-card))" }}
+            // compact: on a short chart the values must not hide the curves they read
+            contentStyle={{ fontSize: 11, lineHeight: 1.3, padding: "3px 7px", borderColor: "rgb(var(--rule))", backgroundColor: "rgb(var(--paper-card) / 0.92)" }}
+            itemStyle={{ padding: 0 }}
+            labelStyle={{ marginBottom: 1, fontWeight: 600 }}
           />
           {/* below the axis title, clear of it */}
           <Legend wrapperStyle={{ fontSize: 11, paddingTop: 6 }} />
