@@ -234,12 +234,10 @@ describe("setting the scale on a narrow window (the properties panel lies over t
 });
 
 
-/** The underlay panel on a US customary screen, its two marks 400 px apart set, waiting for the distance. */
-async function markedOnUsScreen() {
-  const user = userEvent.setup();
-  const sketch = { ...skid(), underlay: { upload: UPLOAD, width: 1000, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.01, rotation: 0, opacity: 0.6 } };
+/** The underlay panel of a saved sketch, on its own. */
+function mountPanel(sketch: ReturnType<typeof skid>, units: "SI" | "US" = "SI") {
   const store = createEditorStore({ sketch });
-  store.getState().setUnits("US");
+  store.getState().setUnits(units);
   render(
     <EditorProvider editor={store}>
       <PersistenceCtx.Provider value={savedPersistence(sketch).persistence}>
@@ -247,6 +245,13 @@ async function markedOnUsScreen() {
       </PersistenceCtx.Provider>
     </EditorProvider>,
   );
+  return store;
+}
+
+/** The underlay panel on a US customary screen, its two marks 400 px apart set, waiting for the distance. */
+async function markedOnUsScreen() {
+  const user = userEvent.setup();
+  const store = mountPanel({ ...skid(), underlay: { upload: UPLOAD, width: 1000, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.01, rotation: 0, opacity: 0.6 } }, "US");
   await user.click(screen.getByTestId("underlay-calibrate"));
   for (const [i, v] of ["300", "520", "700", "520"].entries()) await user.type(screen.getByTestId(`underlay-mark-${i}`), v);
   await user.click(screen.getByTestId("underlay-use-marks"));
@@ -257,14 +262,7 @@ describe("the underlay's fields read values, not the sketch's parameters", () =>
   it("an unknown name is not told to become a parameter, and the units offered are the field's own", async () => {
     const user = userEvent.setup();
     const sketch = { ...skid(), parameters: { theta: "30 deg" }, underlay: { upload: UPLOAD, width: 1000, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.005, rotation: 0, opacity: 0.6 } };
-    const store = createEditorStore({ sketch });
-    render(
-      <EditorProvider editor={store}>
-        <PersistenceCtx.Provider value={savedPersistence(sketch).persistence}>
-          <UnderlayPanel />
-        </PersistenceCtx.Provider>
-      </EditorProvider>,
-    );
+    const store = mountPanel(sketch);
     const turn = screen.getByTestId("underlay-rotation");
     await user.clear(turn);
     await user.type(turn, "theta{Enter}");
