@@ -7,6 +7,20 @@ import type { PortFlow } from "./ports";
 import { isShared, reuseEqual, sameTerm } from "./reuse";
 import { DEFAULT_GROUPS, type Body, type EquationTerm, type Sketch, type Support, type Vec2 } from "./types";
 
+/**
+ * An element as the equations' labels name it: its label in quotes, or its id bare. A label is
+ * free text (a noun, "nozzle", or a phrase, "from pump"), so it is set off as a name and every
+ * kind of term reads as a sentence around it: pressure at “from pump”, momentum out at p2. Runs
+ * of white space (a pasted line break) become one space; quotes the user put around the whole
+ * label are not doubled.
+ */
+export function elementName(e: { id: string; label?: string }): string {
+  const text = (e.label ?? "").replace(/\s+/gu, " ").trim();
+  const wrapped = /^(?:"([^"]+)"|“([^“”]+)”|‘([^‘’]+)’|'([^']+)')$/u.exec(text);
+  const inner = (wrapped ? wrapped.slice(1).find((g) => g !== undefined)!.trim() : "") || text;
+  return inner ? `“${inner}”` : e.id;
+}
+
 /** Stiffness shared by supports when none is given (N/m). Only ratios matter. */
 export const DEFAULT_STIFFNESS = 1e9;
 
@@ -120,7 +134,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   // ---- known loads, as equation terms with their points of action
   const forceTerms: EquationTerm[] = [];
   const momentumTerms: EquationTerm[] = [];
-  const name = body.label || body.id;
+  const name = elementName(body);
   const g = sketch.gravity;
   const m = body.mass;
   const motion = sketch.motion ?? {};
@@ -130,17 +144,19 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   const factors = sketch.scaling?.factors;
   const factorOf = (group: string | undefined, fallback: string) => factors?.[group ?? fallback] ?? 1;
   const tag = (label: string, f: number) => (f === 1 ? label : `${label} × ${Number(f.toPrecision(6))}`);
+  // the factor as data too, so nothing has to read it back out of the label
+  const factored = (f: number) => (f === 1 ? {} : { factor: f });
 
   const fw = factorOf(body.group, DEFAULT_GROUPS.weight);
   if (m * g * fw !== 0) {
     // down the page unless the sketch turns gravity (a body on a slope, a tilt-table check)
     const [gx, gy] = direction(sketch.gravityAngle ?? -90);
-    forceTerms.push({ id: body.id, body: body.id, kind: "weight", label: tag(`weight of ${name}`, fw), fx: m * g * fw * gx, fy: m * g * fw * gy, m: 0, at: cg });
+    forceTerms.push({ id: body.id, body: body.id, kind: "weight", label: tag(`weight of ${name}`, fw), name, ...factored(fw), fx: m * g * fw * gx, fy: m * g * fw * gy, m: 0, at: cg });
   }
 
   for (const l of sketch.loads) {
     if (l.body !== body.id) continue;
-    const lname = l.label || l.id;
+    const lname = elementName(l);
     const fl = factorOf(l.group, DEFAULT_GROUPS.load);
     if (fl === 0) continue;
     const first = forceTerms.length;
@@ -155,9 +171,9 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         fx = l.fx ?? 0;
         fy = l.fy ?? 0;
       }
-      forceTerms.push({ id: l.id, body: body.id, kind: "force", label: `force ${lname}`, fx, fy, m: 0, at: copy(l.at) });
+      forceTerms.push({ id: l.id, body: body.id, kind: "force", label: `force ${lname}`, name: lname, fx, fy, m: 0, at: copy(l.at) });
     } else if (l.kind === "couple") {
-      forceTerms.push({ id: l.id, body: body.id, kind: "couple", label: `couple ${lname}`, fx: 0, fy: 0, m: l.value, ...(l.at ? { at: copy(l.at) } : {}) });
+      forceTerms.push({ id: l.id, body: body.id, kind: "couple", label: `couple ${lname}`, name: lname, fx: 0, fy: 0, m: l.value, ...(l.at ? { at: copy(l.at) } : {}) });
     } else {
       // A linear load = two triangles: w1·ℓ/2 at ℓ/3 from `from`, w2·ℓ/2 at ℓ/3 from `to`.
       const len = Math.hypot(l.to[0] - l.from[0], l.to[1] - l.from[1]);
@@ -169,18 +185,18 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         // one resultant at the trapezoid's centroid
         const s = (l.w1 + 2 * l.w2) / (3 * (l.w1 + l.w2));
         const at: Vec2 = [l.from[0] + s * (l.to[0] - l.from[0]), l.from[1] + s * (l.to[1] - l.from[1])];
-        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (resultant)`, fx: total * e[0], fy: total * e[1], m: 0, at });
+        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (resultant)`, name: lname, fx: total * e[0], fy: total * e[1], m: 0, at });
       } else {
         const a = (l.w1 * len) / 2;
         const b = (l.w2 * len) / 2;
-        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (part at ⅓)`, fx: a * e[0], fy: a * e[1], m: 0, at: p1 });
-        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (part at ⅔)`, fx: b * e[0], fy: b * e[1], m: 0, at: p2 });
+        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (part at ⅓)`, name: lname, fx: a * e[0], fy: a * e[1], m: 0, at: p1 });
+        forceTerms.push({ id: l.id, body: body.id, kind: "distributed", label: `distributed load ${lname} (part at ⅔)`, name: lname, fx: b * e[0], fy: b * e[1], m: 0, at: p2 });
       }
     }
     if (fl !== 1) {
       for (let i = first; i < forceTerms.length; i++) {
         const t = forceTerms[i];
-        forceTerms[i] = { ...t, label: tag(t.label, fl), fx: t.fx * fl, fy: t.fy * fl, m: t.m * fl };
+        forceTerms[i] = { ...t, label: tag(t.label, fl), ...factored(fl), fx: t.fx * fl, fy: t.fy * fl, m: t.m * fl };
       }
     }
   }
@@ -190,14 +206,14 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   let mm = 0;
   for (const p of sketch.ports) {
     if (p.body !== body.id) continue;
-    const pname = p.label || p.id;
+    const pname = elementName(p);
     const e = direction(p.angle);
     const pressure = p.pressure ?? 0;
     const fp = factorOf(p.group, DEFAULT_GROUPS.flow);
     if (pressure * fp !== 0) {
       // pushes inward at both: along the flow at an inlet, against it at an outlet
       const f = pressure * (p.area ?? 0) * (p.kind === "inlet" ? 1 : -1) * fp;
-      forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: tag(`pressure at ${pname}`, fp), fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) });
+      forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: tag(`pressure at ${pname}`, fp), name: pname, ...factored(fp), fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) });
     }
     const flow = flows.get(p.id)!;
     // β: the momentum-flux correction factor of a velocity profile that is not uniform across the port
@@ -213,6 +229,10 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
         // an inlet's term is its momentum flux with a minus sign (Σ out − Σ in): said in the label,
         // so a negative value beside it does not read as a double negative
         label: tag(`${p.kind === "outlet" ? "momentum out" : "momentum in"} at ${pname}${beta === 1 ? "" : ` (β = ${Number(beta.toPrecision(4))})`}${p.kind === "outlet" ? "" : `, as −${beta === 1 ? "" : "β"}ṁV`}`, fp),
+        name: pname,
+        flow: p.kind === "outlet" ? "out" : "in",
+        ...(beta === 1 ? {} : { beta }),
+        ...factored(fp),
         fx,
         fy,
         m: 0,
@@ -238,7 +258,7 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   const ay = motion.ay ?? 0;
   if (freeX) ax = m > 0 ? Q[0] / m : 0;
   if (m !== 0 && (ax !== 0 || ay !== 0)) {
-    const t: EquationTerm = { id: body.id, body: body.id, kind: "inertia", label: `inertia of ${name} (−m·a)`, fx: -m * ax, fy: -m * ay, m: 0, at: cg };
+    const t: EquationTerm = { id: body.id, body: body.id, kind: "inertia", label: `inertia of ${name} (−m·a)`, name, fx: -m * ax, fy: -m * ay, m: 0, at: cg };
     forceTerms.push(t);
     Q[0] += t.fx;
     Q[1] += t.fy;

@@ -100,6 +100,20 @@ export function handCheckScale(eq: SolveResult["equations"][string], about: Vec2
   );
 }
 
+/**
+ * The scale that chooses a hand check's units: its forces and the couples the terms bring (a
+ * fixed support's, a given couple), not the moments about the picked point. Those grow with the
+ * arm to wherever the checker picks; letting them choose would put the check in kip while the
+ * drawing and the reactions of the same result read lbf.
+ */
+export function handCheckUnitScale(eq: SolveResult["equations"][string]): Scale {
+  const terms = [...eq.forces, ...eq.momentum];
+  return scaleOf(
+    terms.flatMap((t) => [t.fx, t.fy]),
+    terms.map((t) => t.m),
+  );
+}
+
 /** The larger force and the larger moment of several scales: one unit family for all of them. */
 export function largestScale(...scales: Scale[]): Scale {
   return { force: Math.max(0, ...scales.map((s) => s.force)), moment: Math.max(0, ...scales.map((s) => s.moment)) };
@@ -602,7 +616,7 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
   const sums = handCheckSums(eq, about);
   // its own scale says what is floating-point noise; the units may be the sheet's
   const scale = handCheckScale(eq, about);
-  const u = unitsOf(system, opts.scale ?? scale);
+  const u = unitsOf(system, opts.scale ?? handCheckUnitScale(eq));
   const f = u.force;
   const m = u.moment;
   const L = columnUnit("length", system);

@@ -5,7 +5,7 @@ import { solveBilateral, solveOneSided, type SpringSolution } from "./contact";
 import { determinacyOf } from "./determinacy";
 import { direction, momentOf } from "./geometry";
 import { dot3, norm3, type Vec3 } from "./linalg";
-import { buildBodyModel, frictionCoefficient, type BodyModel } from "./model";
+import { buildBodyModel, elementName, frictionCoefficient, type BodyModel } from "./model";
 import { massBalanceWarnings, portFlow, type PortFlow } from "./ports";
 import { bodyStability, type BodyStability, type Requirements } from "./stability";
 import type { BodyResult, EquationTerm, FreeMotion, Reaction, Sketch, SolveResult, SolveWarning, Status, Vec2 } from "./types";
@@ -166,7 +166,8 @@ function solveBody(model: BodyModel, out: SolveResult): void {
       id: s.id,
       body: body.id,
       kind: "reaction" as const,
-      label: `reaction at ${s.label || s.id}`,
+      label: `reaction at ${elementName(s)}`,
+      name: elementName(s),
       fx: reaction.fx,
       fy: reaction.fy,
       m: reaction.m,

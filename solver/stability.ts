@@ -12,9 +12,9 @@
 //    taken as a whole, as by hand: μ·Σn over |Σt| of all its contacts (μ·W over P on level
 //    ground), when its contacts share one base and one μ; otherwise sliding is not assessed.
 import { dot3 } from "./linalg";
-import type { BodyModel } from "./model";
+import { elementName, type BodyModel } from "./model";
 import { direction, momentOf } from "./geometry";
-import type { BodyResult, ContactSupport, Reaction, Support, Vec2 } from "./types";
+import type { BodyResult, ContactSupport, EquationTerm, Reaction, Support, Vec2 } from "./types";
 
 export interface OverturningCheck {
   factor: number;
@@ -33,7 +33,7 @@ export interface OverturningCheck {
 
 export interface TurningTerm {
   id: string;
-  /** as in the equations: "weight of Cart", "momentum out at the lance tip, as −ṁV" */
+  /** as in the equations: "weight of “Cart”", "pressure at p1"; a flux as the body feels it: "outflow at “lance tip”, on the body −ṁV" */
   label: string;
   restoring: number;
   overturning: number;
@@ -60,13 +60,14 @@ export interface Requirements {
 }
 
 /**
- * A support as a note names it, by its label as the tables do: "front pin" (a label that names its
- * kind stands alone), "fixed support anchor"; without a label, "pin front".
+ * A support as a note names it, its label in quotes as the equations' terms write it: "the “front
+ * pin”" (a label that names its kind stands alone), "the fixed support “anchor”"; without a
+ * label, "the pin front".
  */
 function supportWords(s: Support): string {
   const kind = s.kind === "fixed" ? "fixed support" : s.kind;
-  const name = s.label?.trim() || s.id;
-  return new RegExp(`(^|[^\\p{L}\\p{N}_])${kind}($|[^\\p{L}\\p{N}_])`, "iu").test(name) ? name : `${kind} ${name}`;
+  const named = !!s.label && new RegExp(`(^|[^\\p{L}\\p{N}_])${kind}($|[^\\p{L}\\p{N}_])`, "iu").test(s.label);
+  return named ? `the ${elementName(s)}` : `the ${kind} ${elementName(s)}`;
 }
 
 /** 1.5 for each is common practice (from memory). */
@@ -162,15 +163,18 @@ function turningTerms(model: BodyModel, P: Vec2, sense: 1 | -1, n: Vec2): Turnin
   };
   for (const t of model.forceTerms) term(t, 1);
   // the flux terms named as the body feels them: an outlet's jet pushes it back (−ṁV), an inflow on (+ṁV)
-  for (const t of model.momentumTerms) {
-    const outflow = t.label.startsWith("momentum out at ");
-    const label = t.label
-      .replace(/^momentum (out|in) at /, outflow ? "outflow at " : "inflow at ")
-      .replace(/, as −β?ṁV/, "")
-      .replace(/( × [\d.e+-]+)?$/, (tag) => `, on the body ${outflow ? "−" : "+"}${t.label.includes("β =") ? "β" : ""}ṁV${tag}`);
-    term({ ...t, label }, -1);
-  }
+  for (const t of model.momentumTerms) term({ ...t, label: asTheBodyFeelsIt(t) }, -1);
   return out;
+}
+
+/**
+ * A momentum term as the body feels it, from the term's data (never its label's words): "outflow at
+ * “lance tip”, on the body −ṁV", "inflow at p1, on the body +βṁV × 1.35".
+ */
+export function asTheBodyFeelsIt(t: Pick<EquationTerm, "id" | "name" | "flow" | "beta" | "factor">): string {
+  const out = t.flow === "out";
+  const factor = t.factor === undefined || t.factor === 1 ? "" : ` × ${Number(t.factor.toPrecision(6))}`;
+  return `${out ? "outflow" : "inflow"} at ${t.name ?? t.id}, on the body ${out ? "−" : "+"}${t.beta === undefined || t.beta === 1 ? "" : "β"}ṁV${factor}`;
 }
 
 /** The normal of the base the contacts stand on: theirs when they agree, else the sketch's +y. */

@@ -174,8 +174,23 @@ export interface EquationTerm {
   id: string;
   body: string;
   kind: "reaction" | "weight" | "force" | "couple" | "distributed" | "pressure" | "inertia" | "momentum";
-  /** e.g. "weight of Skid", "momentum out at p2", "momentum in at p1, as −ṁV", "pressure at p1" */
+  /**
+   * The term in words, its element named by `elementName` (a label in quotes, an id bare): e.g.
+   * "weight of “Skid”", "momentum out at p2", "momentum in at “from pump”, as −ṁV",
+   * "pressure at p1", "reaction at “anchor”"; a case's factor on its group ends it: " × 1.35".
+   */
   label: string;
+  /**
+   * The element as the label names it ("“from pump”", "p1"), for words built around it elsewhere
+   * (this and the three below are additive: optional, absent from results saved before them).
+   */
+  name?: string;
+  /** Momentum terms only: "out" at an outlet (+β·ṁV), "in" at an inlet (−β·ṁV): the port's kind. */
+  flow?: "in" | "out";
+  /** Momentum terms only: the port's momentum-flux factor β, when it is not 1. */
+  beta?: number;
+  /** The case's factor on the term's load group, when it is not 1 (the values include it already). */
+  factor?: number;
   fx: number;
   fy: number;
   /** a couple (N·m); forces carry their moment through `at` */

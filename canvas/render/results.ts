@@ -266,12 +266,18 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
  * One force and moment unit for every figure a result draws, as its tables do (`unitFamily`: N with
  * N·m only when all of it stays below 1 kN, else kN with kN·m; lbf, or kip from 10 kip): chosen from
  * the largest of the reactions and of the forces drawn beside them (weights, pA, ṁV, given loads).
- * Several results (two versions drawn side by side) share one family.
+ * Several results (two versions drawn side by side) share one family. With the scene's `items`, its
+ * given point forces and couples count too, so their labels (`SymbolOptions.family`) share the
+ * unit with no result at all (an input error before the first solve) or on a body that did not solve.
  */
-export function drawingFamily(result: SolveResult | ReadonlyArray<SolveResult | null>, units: UnitSystem = "SI"): { force: string; moment: string } {
+export function drawingFamily(result: SolveResult | ReadonlyArray<SolveResult | null> | null, units: UnitSystem = "SI", items: readonly SceneItem[] = []): { force: string; moment: string } {
   const results = (Array.isArray(result) ? result : [result]).filter((r): r is SolveResult => !!r);
   let force = 0;
   let moment = 0;
+  for (const it of items) {
+    if (it.kind === "force" && Number.isFinite(it.magnitude)) force = Math.max(force, Math.abs(it.magnitude));
+    if (it.kind === "couple" && Number.isFinite(it.value)) moment = Math.max(moment, Math.abs(it.value));
+  }
   for (const r of results)
     for (const eq of Object.values(r.equations ?? {}))
       for (const t of [...eq.forces, ...eq.momentum]) {

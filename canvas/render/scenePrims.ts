@@ -30,7 +30,7 @@ function cachedPrims(owner: object, deps: readonly unknown[], make: () => Prim[]
 type Group = { id: string; kind: string; prims: Prim[]; anchor?: Pt; marks?: readonly Box[] };
 
 /** Every element's primitives in content pixels as its symbol draws them (names not yet moved). */
-export function elementGroups(scene: Scene, scale: number, units: UnitSystem, states: ReadonlyMap<string, DrawState> | null): Group[] {
+export function elementGroups(scene: Scene, scale: number, units: UnitSystem, states: ReadonlyMap<string, DrawState> | null, family?: ResultOptions["family"]): Group[] {
   const groups: Group[] = [];
   for (const b of scene.bodies) {
     // the name keeps clear of the body's ports; the key changes only when a port of this body moves
@@ -54,8 +54,10 @@ export function elementGroups(scene: Scene, scale: number, units: UnitSystem, st
       continue;
     }
     const state = states?.get(item.id);
-    const { prims } = cachedPrims(item, [scale, units, state, body], () =>
-      translate(itemPrims(item, { units, scale, groundSide: groundSideOf(item, body), state }), [a[0] * scale, -a[1] * scale]),
+    // a given force or couple is written in the drawing's unit, as the reactions beside it are
+    const fam = item.kind === "force" || item.kind === "couple" ? family : undefined;
+    const { prims } = cachedPrims(item, [scale, units, state, body, fam?.force, fam?.moment], () =>
+      translate(itemPrims(item, { units, scale, groundSide: groundSideOf(item, body), state, family: fam }), [a[0] * scale, -a[1] * scale]),
     );
     groups.push({ id: item.id, kind: item.kind, prims, anchor: [a[0] * scale, -a[1] * scale] });
   }
@@ -74,7 +76,7 @@ const UNDER_RESULTS = new Set(["body", "pin", "roller", "contact", "fixed", "tie
 export function resultLayer(groups: readonly Group[], scene: Scene, scale: number, units: UnitSystem, result: SolveResult, states: Map<string, DrawState>, stale = false, frame?: Box, family?: ResultOptions["family"]) {
   // the bodies' names (and texts that are part of a symbol) stay; the supports' and ports' labels make way
   const under = groups.filter((g) => UNDER_RESULTS.has(g.kind)).flatMap((g) => (g.kind === "body" ? g.prims : g.prims.filter((p) => p.t !== "text" || p.pinned)));
-  return resultPrims(scene, result, { units, scale, stale, under, states, frame, family: family ?? drawingFamily(result, units) }).prims;
+  return resultPrims(scene, result, { units, scale, stale, under, states, frame, family: family ?? drawingFamily(result, units, scene.items) }).prims;
 }
 
 /**
@@ -84,8 +86,9 @@ export function resultLayer(groups: readonly Group[], scene: Scene, scale: numbe
  */
 export function scenePrims(scene: Scene, scale: number, units: UnitSystem, result: SolveResult | null, stale = false, shifts?: LabelShifts, family?: ResultOptions["family"]) {
   const states = result ? supportStates(result, scene.items) : null;
-  const drawn = elementGroups(scene, scale, units, states);
-  const results = result && states ? resultLayer(drawn, scene, scale, units, result, states, stale, undefined, family) : [];
+  const fam = family ?? drawingFamily(result, units, scene.items);
+  const drawn = elementGroups(scene, scale, units, states, fam);
+  const results = result && states ? resultLayer(drawn, scene, scale, units, result, states, stale, undefined, fam) : [];
   const moves = shifts ?? placeElementLabels(drawn, results);
   const groups = drawn.map((g) => (moves.has(g.id) ? { ...g, prims: shiftTexts(g.prims, moves.get(g.id)) } : g));
   return { groups, results, shifts: moves };

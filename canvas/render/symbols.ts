@@ -23,6 +23,12 @@ export interface SymbolOptions {
   showName?: boolean;
   /** boxes in content pixels a body's name keeps clear of when it can (its ports' bars and arrows, its mass sources: `portKeepOut`) */
   keepOut?: readonly Box[];
+  /**
+   * The drawing's one force and moment unit (`drawingFamily`): a given point force or couple is
+   * written in the unit the reactions beside it are ("0.8000 kN" beside "5.039 kN", never "800 N");
+   * without it, each in its own.
+   */
+  family?: { force: string; moment: string };
 }
 
 export type { Box };
@@ -72,7 +78,7 @@ function portBox(it: SceneItem, scale: number): Box | null {
   return { x0: Math.min(p[0], q2[0]) - pad, y0: Math.min(p[1], q2[1]) - pad, x1: Math.max(p[0], q2[0]) + pad, y1: Math.max(p[1], q2[1]) + pad };
 }
 
-const q = (v: number, kind: Parameters<typeof formatQuantity>[1], units: UnitSystem) => (Number.isFinite(v) ? formatQuantity(v, kind, units) : "?");
+const q = (v: number, kind: Parameters<typeof formatQuantity>[1], units: UnitSystem, unit?: string) => (Number.isFinite(v) ? formatQuantity(v, kind, units, { unit }) : "?");
 
 /** Where a label goes beyond point p along screen direction d. */
 export function labelAt(p: Pt, d: Pt, lines: string[], color: string, size = 11, extra: Partial<Extract<Prim, { t: "text" }>> = {}): Prim[] {
@@ -214,10 +220,10 @@ function loadPrims(item: Extract<SceneItem, { kind: "force" | "couple" | "distri
     const ang = item.magnitude < 0 ? item.angle + 180 : item.angle;
     const d = dir(ang);
     const tail = mul(d, -54);
-    return [...solidArrow(tail, [0, 0], c, 1.9, 11), ...labelAt(add(tail, mul(d, -4)), mul(d, -1), [q(Math.abs(item.magnitude), "force", o.units)], c, 11, { weight: 600 })];
+    return [...solidArrow(tail, [0, 0], c, 1.9, 11), ...labelAt(add(tail, mul(d, -4)), mul(d, -1), [q(Math.abs(item.magnitude), "force", o.units, o.family?.force)], c, 11, { weight: 600 })];
   }
   if (item.kind === "couple") {
-    return [...curvedArrow([0, 0], 15, item.value >= 0, c), { t: "circle", c: [0, 0], r: 2, fill: c }, ...labelAt([14, -20], [1, -1], [`${q(Math.abs(item.value), "moment", o.units)} ${item.value >= 0 ? "↺" : "↻"}`], c, 11, { weight: 600 })];
+    return [...curvedArrow([0, 0], 15, item.value >= 0, c), { t: "circle", c: [0, 0], r: 2, fill: c }, ...labelAt([14, -20], [1, -1], [`${q(Math.abs(item.value), "moment", o.units, o.family?.moment)} ${item.value >= 0 ? "↺" : "↻"}`], c, 11, { weight: 600 })];
   }
   // distributed, local to `from`
   const T: Pt = [(item.to[0] - item.from[0]) * o.scale, -(item.to[1] - item.from[1]) * o.scale];

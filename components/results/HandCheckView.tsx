@@ -4,7 +4,7 @@
 // P is picked on the canvas (the "Pick on the drawing" button) or typed.
 import { useDeferredValue, useMemo, useState } from "react";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
-import { columnUnit, HAND_CHECK_FIGURES, handCheckNumber, handCheckScale, handCheckTable, unitFamily, type Scale } from "@/solver/report";
+import { columnUnit, HAND_CHECK_FIGURES, handCheckNumber, handCheckScale, handCheckTable, handCheckUnitScale, unitFamily, type Scale } from "@/solver/report";
 import { downloadCsv, useCsvName } from "@/components/studies/csv";
 import { convert, type UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
@@ -28,13 +28,14 @@ export function parseLength(text: string, units: UnitSystem): number {
 function Block({ b, units, unit, scale }: { b: HandCheckBlock; units: UnitSystem; unit: string; scale: Scale }) {
   // every number of the check by one rule (4 significant figures, trailing zeros kept): the points too
   const len = (v: number) => handCheckNumber(convert(v, "length", units).value);
+  const lenUnit = convert(1, "length", units).unit;
   const text = handCheckText(b, scale, (v) => convert(v, b.key === "m" ? "moment" : "force", units, unit).value, unit);
-  // where a term acts, in the moment block: r × F (or r × ṁV) is then a line a checker can redo
+  // where a term acts, in the moment block: r × F (or r × ṁV) is then a line a checker can redo;
+  // "acting at", as a label may end in a place of its own ("pressure at “from pump”")
   const where = (t: HandCheckLine) =>
     b.key === "m" && t.at && !t.couple ? (
       <span className="text-ink-faint">
-        {" "}
-        at ({len(t.at[0])}, {len(t.at[1])})
+        , acting at ({len(t.at[0])}, {len(t.at[1])}) {lenUnit}
         {t.ownCouple ? `, with its couple ${handCheckNumber(convert(t.ownCouple, "moment", units, unit).value)} ${unit}` : ""}
       </span>
     ) : null;
@@ -109,7 +110,8 @@ export function HandCheckView() {
   // the check's largest force and moment: what floating-point noise is measured against
   const size = useMemo(() => (eq ? handCheckScale(eq, about) : undefined), [eq, about]);
   // the units of the three sums, as in the hand check's table: N and N·m when all of it is below 1 kN
-  const scale = useHeldScale(size);
+  // the units: the check's forces and own couples choose them (as the drawing's), not the arms to P
+  const scale = useHeldScale(useMemo(() => (eq ? handCheckUnitScale(eq) : undefined), [eq]));
   const unitsOfSums = useMemo(() => {
     const { force, moment } = scale ? unitFamily(units, scale) : { force: columnUnit("force", units), moment: columnUnit("moment", units) };
     return { fx: force, fy: force, m: moment };

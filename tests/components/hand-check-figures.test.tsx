@@ -18,9 +18,9 @@ describe("hand check figures", () => {
     expect(pad.toFixed(3)).toBe("5.490");
     const m = screen.getByTestId("hand-m");
     const lines = within(m).getAllByRole("listitem").map((li) => li.textContent);
-    expect(lines).toContainEqual(expect.stringMatching(/^\+ force F1 at \(2\.000, 0\.5000\)−20\.00 kN·m$/));
-    expect(lines).toContainEqual(expect.stringMatching(/right pad at \(4\.000, 0\)21\.96 kN·m$/));
-    expect(lines).toContainEqual(expect.stringMatching(/weight of Beam at \(2\.000, 0\.2500\)−1\.961 kN·m$/));
+    expect(lines).toContainEqual(expect.stringMatching(/^\+ force “F1”, acting at \(2\.000, 0\.5000\) m−20\.00 kN·m$/));
+    expect(lines).toContainEqual(expect.stringMatching(/right pad”, acting at \(4\.000, 0\) m21\.96 kN·m$/));
+    expect(lines).toContainEqual(expect.stringMatching(/weight of “Beam”, acting at \(2\.000, 0\.2500\) m−1\.961 kN·m$/));
     const fy = within(screen.getByTestId("hand-fy")).getAllByTestId("term-value").map((v) => v.textContent);
     expect(fy).toEqual(expect.arrayContaining(["5.490 kN", "−10.00 kN", "−0.9807 kN"]));
     for (const k of ["fx", "fy", "m"]) {

@@ -443,7 +443,7 @@ describe("the factors of safety as drawn, under the status", () => {
     expect(within(o).getByRole("heading")).toHaveTextContent("Against overturning about the far foot, turning clockwise");
     const rows = within(o).getAllByTestId("turning-line").map((r) => Array.from(r.querySelectorAll("td")).map((td) => td.textContent));
     expect(rows).toEqual([
-      ["weight of block", "4.903 kN·m", "—"],
+      ["weight of “block”", "4.903 kN·m", "—"],
       ["force push", "—", "4.000 kN·m"],
     ]);
     expect(screen.getByTestId("restoring-sum")).toHaveTextContent("4.903 kN·m");

@@ -132,7 +132,7 @@ describe("live results", () => {
     await page.getByRole("tab", { name: "Hand check" }).click();
     // zero, or floating-point noise said to be rounding (never a bare 0 beside two different sums)
     for (const k of ["fx", "fy", "m"]) expect(await page.getByTestId(`hand-${k}`).getByTestId("imbalance").textContent()).toMatch(/^(0 |−?\d(\.\d)?e-\d+ .+ \(rounding\)$)/);
-    expect(await page.getByTestId("hand-fy").textContent()).toMatch(/weight of Beam/);
+    expect(await page.getByTestId("hand-fy").textContent()).toMatch(/weight of “Beam”/);
     await shot(page, "results-hand-check");
     await page.getByRole("tab", { name: "Reactions" }).click();
   });

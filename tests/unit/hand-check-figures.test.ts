@@ -107,9 +107,9 @@ describe("the calc sheet's hand-check table", () => {
     const cells = tableCells(t);
     const row = (start: string) => cells[t.rows.findIndex((r) => String(r[1]).startsWith(start))];
     const pad = (10_000 + 100 * G0) / 2;
-    expect(row("reaction at right pad").slice(2)).toEqual([handCheckNumber(0), handCheckNumber(pad / 1000), "(4.000, 0)", handCheckNumber((4 * pad) / 1000)]);
-    expect(row("reaction at right pad")[3]).toBe("5.490");
-    expect(row("reaction at right pad")[5]).toBe("21.96");
+    expect(row("reaction at “right pad”").slice(2)).toEqual([handCheckNumber(0), handCheckNumber(pad / 1000), "(4.000, 0)", handCheckNumber((4 * pad) / 1000)]);
+    expect(row("reaction at “right pad”")[3]).toBe("5.490");
+    expect(row("reaction at “right pad”")[5]).toBe("21.96");
     // the load: −10.00 kN at (2.000, 0.5000), −20.00 kN·m about the pin; the weight −0.9807 kN
     expect(cells.some((r) => r[3] === "−10.00" && r[4] === "(2.000, 0.5000)" && r[5] === "−20.00")).toBe(true);
     expect(cells.some((r) => r[3] === "−0.9807")).toBe(true);

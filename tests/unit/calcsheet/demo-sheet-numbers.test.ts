@@ -88,6 +88,6 @@ describe("the calc sheet of the thrust stand that tips (demo a3, v1)", () => {
     const { text } = await sheetOf("a3", 1);
     // n = (W·0.8 − 2200·1.5)/1.6 = −1.082 kN (demo-hand-checks.test.ts)
     expect(text).toContain("rear pad 0 −1.082 1.082 −1.082 0 would pull");
-    expect(text).toContain("sliding is resisted by front pin");
+    expect(text).toContain("sliding is resisted by the “front pin”");
   });
 });

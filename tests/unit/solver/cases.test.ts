@@ -199,7 +199,7 @@ describe("stability factors (common practice)", () => {
     const run = solveCases(fileOf(loadFixture("thrust-stand-tips.json"))).runs[0];
     if (!run.ok) throw new Error();
     // the pin goes by its label, "front pin", as in the tables (not by its id, "pin front")
-    expect(run.stability.stand.sliding).toEqual({ notApplicable: "sliding is resisted by front pin" });
+    expect(run.stability.stand.sliding).toEqual({ notApplicable: "sliding is resisted by the “front pin”" });
     const ot = run.stability.stand.overturning;
     if ("notApplicable" in ot) throw new Error(ot.notApplicable);
     expect([ot.about, ot.sense, ot.pivot]).toEqual(["front", -1, [1.6, 0]]);
@@ -233,7 +233,7 @@ describe("stability factors (common practice)", () => {
     file.supports!.push({ id: "pad", body: "stand", kind: "contact", at: [0.8, 0], angle: 90 });
     const run = solveCases(fileOf(file)).runs[0];
     if (!run.ok) throw new Error();
-    expect(run.stability.stand.overturning).toEqual({ notApplicable: "tipping is prevented by front pin" });
+    expect(run.stability.stand.overturning).toEqual({ notApplicable: "tipping is prevented by the “front pin”" });
   });
 
   it("a support in these notes goes by its label, with its kind when the label does not say it; by its kind and id without one", () => {
@@ -244,11 +244,11 @@ describe("stability factors (common practice)", () => {
       if (!run.ok) throw new Error();
       return run.stability.stand.sliding;
     };
-    expect(stand({ label: undefined })).toEqual({ notApplicable: "sliding is resisted by pin front" });
-    expect(stand({ label: "hinge A" })).toEqual({ notApplicable: "sliding is resisted by pin hinge A" });
-    expect(stand({ label: "Pin at the nose" })).toEqual({ notApplicable: "sliding is resisted by Pin at the nose" });
-    expect(stand({ kind: "fixed", label: "anchor" })).toEqual({ notApplicable: "sliding is resisted by fixed support anchor" });
-    expect(stand({ label: "spinner" })).toEqual({ notApplicable: "sliding is resisted by pin spinner" });
+    expect(stand({ label: undefined })).toEqual({ notApplicable: "sliding is resisted by the pin front" });
+    expect(stand({ label: "hinge A" })).toEqual({ notApplicable: "sliding is resisted by the pin “hinge A”" });
+    expect(stand({ label: "Pin at the nose" })).toEqual({ notApplicable: "sliding is resisted by the “Pin at the nose”" });
+    expect(stand({ kind: "fixed", label: "anchor" })).toEqual({ notApplicable: "sliding is resisted by the fixed support “anchor”" });
+    expect(stand({ label: "spinner" })).toEqual({ notApplicable: "sliding is resisted by the pin “spinner”" });
   });
 
   it("a body on contacts under its weight alone: nothing tends to tip it (a contact that only pushes prevents nothing)", () => {

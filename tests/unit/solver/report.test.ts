@@ -87,7 +87,7 @@ describe("result tables", () => {
     }
     expect(t.notes!.join(" ")).toContain("The two sides agree to 4 significant figures in ΣFx, ΣFy and ΣM");
     expect(t.figures).toBe(4);
-    expect(t.rows.some((row) => row[1] === "momentum out at discharge")).toBe(true);
+    expect(t.rows.some((row) => row[1] === "momentum out at “discharge”")).toBe(true);
     // the point is named with its unit, in the title and the moment column; points use a true minus;
     // its coordinates follow the check's one rule (4 significant figures, zeros kept)
     expect(t.title).toMatch(/ΣM about \(2\.000, 1\.000\) m$/);
