@@ -136,6 +136,20 @@ export function parseQuery<T extends z.ZodType>(req: Request, schema: T): z.outp
   return parsed.data;
 }
 
+/**
+ * A route that reads no query parameters refuses any it is sent, by name, as `parseQuery` does for
+ * one it does not know (`POST /api/solve?units=US` would otherwise answer in SI without a word).
+ */
+function refuseAnyQuery(req: Request): undefined {
+  const keys = [...new Set(new URL(req.url).searchParams.keys())];
+  if (keys.length) {
+    throw new AppError("validation_failed", "Some query parameters are not valid.", {
+      fields: keys.map((key) => ({ path: `query.${key}`, message: "Is not a query parameter here: this address reads none." })),
+    });
+  }
+  return undefined;
+}
+
 /** The caller's role where a permission is needed: 404 for non-members (nothing leaks), 403 for a role without it. */
 export async function requireWorkspaceRole(workspaceId: string, userId: string, permission: Permission): Promise<Role> {
   const role = await getRole(workspaceId, userId);
@@ -205,7 +219,7 @@ export function route<const S extends RouteSpec>(spec: S, handler: (ctx: RouteCo
         role = await requireWorkspaceRole(workspaceId, session.user.id, spec.workspace.permission);
       }
 
-      const query = spec.query ? parseQuery(req, spec.query) : undefined;
+      const query = spec.query ? parseQuery(req, spec.query) : refuseAnyQuery(req);
       const body = spec.body ? await parseJsonBody(req, spec.body, spec.maxBodyBytes ?? DEFAULT_MAX_BODY) : undefined;
 
       const result = await handler({ req, params, query, body, session, user: session?.user ?? null, role } as RouteContext<S>);

@@ -116,7 +116,8 @@ export function fieldErrors(err: ZodError, prefix: string[] = [], input?: unknow
     if (input !== undefined && issue.code === "invalid_type" && !issue.path.length && issue.expected === "object") {
       return [{ path: at(), message: `Send a JSON object ({ "name": value, … }), not ${Array.isArray(input) ? "an array" : input === null ? "null" : `a ${typeof input}`}.` }];
     }
-    if (input !== undefined && issue.code === "invalid_type" && issue.path.length && leftOut(input, issue.path)) {
+    // a left-out choice (an enum: "Choose owner, editor…") is as missing as a left-out number
+    if (input !== undefined && (issue.code === "invalid_type" || issue.code === "invalid_value") && issue.path.length && leftOut(input, issue.path)) {
       const own = /^Invalid input\b/.test(issue.message) ? "" : `: ${issue.message.charAt(0).toLowerCase()}${issue.message.slice(1)}`;
       return [{ path: at(), message: `Required${own || "."}` }];
     }

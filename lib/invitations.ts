@@ -1,10 +1,10 @@
 import "server-only";
 import { createHash, randomBytes } from "node:crypto";
-import { eq, sql } from "drizzle-orm";
+import { and, eq, gt, isNull, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { claimInvitation, createInvitation, findInvitation, type InvitationView } from "@/db/queries/invitations";
 import { addMember, isMemberByEmail } from "@/db/queries/workspaces";
-import { user } from "@/db/schema";
+import { invitation, user } from "@/db/schema";
 import { recordAudit } from "./audit";
 import { appUrl, invitationTtlHours } from "./env";
 import { AppError } from "./errors";
@@ -42,7 +42,23 @@ export async function inviteMember(input: {
   }
   const token = newInvitationToken();
   const expiresAt = new Date(Date.now() + invitationTtlHours() * 3600 * 1000);
+  let replaces = false;
   const created = await db.transaction(async (tx) => {
+    // an open link to this address that the new one replaces (createInvitation withdraws it): the mail says so
+    const [open] = await tx
+      .select({ id: invitation.id })
+      .from(invitation)
+      .where(
+        and(
+          eq(invitation.workspaceId, input.workspaceId),
+          eq(invitation.email, email),
+          isNull(invitation.acceptedAt),
+          isNull(invitation.withdrawnAt),
+          gt(invitation.expiresAt, new Date()),
+        ),
+      )
+      .limit(1);
+    replaces = Boolean(open);
     const made = await createInvitation(
       { workspaceId: input.workspaceId, actorId: input.actor.id, email, role: input.role, tokenHash: hashInvitationToken(token), expiresAt },
       tx,
@@ -66,7 +82,7 @@ export async function inviteMember(input: {
   let mailSent = true;
   try {
     await sendMail(
-      invitationMail({ to: email, inviterName: input.actor.name, workspaceName: created.workspaceName, role: input.role, url, expiresAt }),
+      invitationMail({ to: email, inviterName: input.actor.name, workspaceName: created.workspaceName, role: input.role, url, expiresAt, replaces }),
     );
   } catch (err) {
     mailSent = false;
@@ -81,13 +97,47 @@ export async function lookUpInvitation(token: string): Promise<InvitationView | 
   return findInvitation(hashInvitationToken(token));
 }
 
-/** The error an invitation in this state answers with (null while it can still be used). */
+/**
+ * What a refused link says, on its page and in the API's 410: which state, and whom to ask. The
+ * inviter is named when known, so the reader knows who can send a fresh link.
+ */
+export function invitationRefusal(view: Pick<InvitationView, "status" | "workspaceName" | "inviterName">): { title: string; body: string } | null {
+  const ask = view.inviterName ? `${view.inviterName}, who invited you, or another owner of "${view.workspaceName}"` : `an owner of "${view.workspaceName}"`;
+  if (view.status === "expired") {
+    return { title: "This invitation has expired", body: `Invitation links work for a limited time. Ask ${ask} to send the invitation again; the new mail has a fresh link.` };
+  }
+  if (view.status === "used") {
+    return { title: "This invitation has already been used", body: `Each invitation link works once. If you joined with it, sign in to find the workspace; otherwise ask ${ask} for a new invitation.` };
+  }
+  if (view.status === "withdrawn") {
+    return { title: "This invitation was withdrawn", body: `An owner of the workspace withdrew it, or sent a newer one that replaces it. Use the newest invitation mail, or ask ${ask}.` };
+  }
+  return null;
+}
+
+const REFUSAL_CODE = { expired: "invitation_expired", used: "invitation_used", withdrawn: "invitation_withdrawn" } as const;
+
+/**
+ * The error an invitation in this state answers with (null while it can still be used): 404 for a
+ * link nobody sent, 410 for one expired, used or withdrawn, with the workspace and inviter beside
+ * the code (`error.workspaceName`, `error.inviterName`) so a script can say whom to ask.
+ */
 export function invitationStateError(view: InvitationView | null): AppError | null {
   if (!view) return new AppError("not_found", "This invitation link is not valid. Check that the whole link was copied.");
-  if (view.status === "expired") return new AppError("invitation_expired");
-  if (view.status === "used") return new AppError("invitation_used");
-  if (view.status === "withdrawn") return new AppError("invitation_withdrawn");
-  return null;
+  const refusal = invitationRefusal(view);
+  if (!refusal || view.status === "pending") return null;
+  return new AppError(REFUSAL_CODE[view.status], `${refusal.title}. ${refusal.body}`, {
+    extra: { invitationStatus: view.status, workspaceName: view.workspaceName, inviterName: view.inviterName },
+  });
+}
+
+/** An invitation link as `GET /api/invitations/:token` answers it while it can still be used. */
+export async function readInvitation(token: string) {
+  const view = await lookUpInvitation(token);
+  const refused = invitationStateError(view);
+  if (refused) throw refused;
+  const v = view!;
+  return { invitation: { workspaceName: v.workspaceName, email: v.email, role: v.role, inviterName: v.inviterName, expiresAt: v.expiresAt, status: v.status } };
 }
 
 /**

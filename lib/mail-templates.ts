@@ -53,15 +53,18 @@ export function invitationMail(input: {
   role: Role;
   url: string;
   expiresAt: Date;
+  /** an earlier open invitation to this address was replaced by this one (its link no longer works) */
+  replaces?: boolean;
 }): Mail {
   const role = ROLE_INFO[input.role];
   const until = input.expiresAt.toUTCString().replace(/:\d\d GMT$/, " UTC");
   return compose(
     input.to,
-    `${input.inviterName} invited you to "${input.workspaceName}" on Counterpoise`,
+    `${input.replaces ? "New link: " : ""}${input.inviterName} invited you to "${input.workspaceName}" on Counterpoise`,
     [
       `${input.inviterName} invited you to join the workspace "${input.workspaceName}" as ${role.label.toLowerCase()}: ${role.summary}`,
       `The link works once, until ${until}.`,
+      ...(input.replaces ? ["This invitation replaces the one sent to you earlier: the link in that mail no longer works, use this one."] : []),
     ],
     { label: "Open the invitation", url: input.url },
     "If you did not expect this, ignore this mail.",

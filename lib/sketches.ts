@@ -91,8 +91,17 @@ export async function createSketch(
   });
 }
 
-/** 409 body facts about the version that won. */
+/**
+ * 409 body facts about the version that won; or, for a base version the sketch has never had (a
+ * script that counted wrong), a 400 naming `baseVersion`: no one saved "since" it.
+ */
 function conflictError(latest: VersionListItem, base: number): AppError {
+  if (base > latest.number) {
+    return new AppError("validation_failed", `This sketch has no version ${base}: its newest is version ${latest.number}. Save on the version you started from.`, {
+      fields: [{ path: "baseVersion", message: `There is no version ${base}; the newest is ${latest.number}.` }],
+      extra: { latest: { number: latest.number, message: latest.message, authorName: latest.authorName, createdAt: latest.createdAt, status: latest.status } },
+    });
+  }
   const who = latest.authorName ? `${latest.authorName} saved` : "Someone saved";
   return new AppError("version_conflict", `${who} version ${latest.number} since you opened version ${base}. Nothing was overwritten.`, {
     extra: {

@@ -3,12 +3,16 @@ import "server-only";
 // it) or the raw bytes (any other content type, as `curl --data-binary` sends them). The cap is
 // enforced while the body streams in: a declared length over it is refused before reading, and
 // reading stops at the first byte over it, so nothing larger is ever held in memory.
+import { z } from "zod";
 import { readBytesCapped } from "../api";
 import { AppError } from "../errors";
 import { UPLOAD_LIMITS } from "./process";
 
 /** Room for a multipart body's boundaries and part headers around a file at the cap. */
 const MULTIPART_OVERHEAD = 64 * 1024;
+
+/** The query an upload address reads: `?name=` for raw bytes' display name (nothing else). */
+export const uploadQuery = z.object({ name: z.string().optional() });
 
 export type UploadBody = { bytes: Buffer; name: string };
 

@@ -32,9 +32,18 @@ const ROWS: Record<string, Row> = {
     foreignErrors: true,
     run: (h, _f, p) => call(h, { method: "POST", path: "/api/auth/update-user", cookie: p.cookie, body: { name: p.name || "Nobody" } }),
   },
+  // An address no route serves, with any method: the API's JSON 404 for everyone.
+  ...Object.fromEntries(
+    (["GET", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const).map((m) => [
+      `${m} /api/[...path]`,
+      { expect: all(404), run: (h: Handler, _f: Fixture, p: Person) => call(h, { method: m, path: "/api/sketchs", cookie: p.cookie, body: m === "GET" || m === "OPTIONS" ? undefined : {} }) } satisfies Row,
+    ]),
+  ),
   "GET /api/health": { expect: all(200), run: (h) => call(h, {}) },
   // Token routes: the link is the key, not a role. Accepting needs a session whose address the
   // invitation names (a member keeps their role); signing up from a link needs no session at all.
+  // Reading a link needs no session either: the token is the key, and the answer is what its page shows.
+  "GET /api/invitations/[token]": { expect: all(200), run: async (h, f, p) => call(h, { params: { token: await f.tokenFor(uniqueEmail("reader")) }, cookie: p.cookie }) },
   "POST /api/invitations/[token]/accept": { expect: signedIn(200), run: async (h, f, p) => call(h, { method: "POST", params: { token: await f.tokenFor(p.email || uniqueEmail("signed-out")) }, cookie: p.cookie }) },
   "POST /api/invitations/[token]/sign-up": {
     expect: all(201),

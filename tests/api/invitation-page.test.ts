@@ -23,7 +23,7 @@ let owner: Person;
 let ws: string;
 
 beforeAll(async () => {
-  owner = await makeAccount("invite-page-owner");
+  owner = await makeAccount("invite-page-owner", { name: "Page Owner" });
   ws = await makeWorkspace("Invitation page bay", [[owner, "owner"]]);
 });
 
@@ -44,11 +44,11 @@ async function page(token: string): Promise<string> {
   return renderToStaticMarkup(await InvitationPage({ params: Promise.resolve({ token }) }));
 }
 
-const text = (html: string) => html.replace(/<[^>]+>/g, " ").replace(/&#x27;/g, "'").replace(/\s+/g, " ");
+const text = (html: string) => html.replace(/<[^>]+>/g, " ").replace(/&#x27;/g, "'").replace(/&quot;/g, '"').replace(/\s+/g, " ");
 
 describe("the invitation page", () => {
   const cases = [
-    ["expired", "This invitation has expired", "Ask an owner of the workspace to invite you again"],
+    ["expired", "This invitation has expired", 'Ask Page Owner, who invited you, or another owner of "Invitation page bay" to send the invitation again'],
     ["used", "This invitation has already been used", "Each invitation link works once"],
     ["withdrawn", "This invitation was withdrawn", "Use the newest invitation mail"],
   ] as const;

@@ -67,7 +67,8 @@ describe("invitations", () => {
 
     const reuse = await call(signUpRoute.POST, { method: "POST", params: { token }, body: { name: "Someone Else", password: "another-password" } });
     expect(reuse.status).toBe(410);
-    expect(reuse.body.error).toMatchObject({ code: "invitation_used", message: "This invitation has already been used." });
+    expect(reuse.body.error).toMatchObject({ code: "invitation_used", invitationStatus: "used", workspaceName: "Harbour Intake Screens", inviterName: owner.name });
+    expect(reuse.body.error.message).toMatch(/^This invitation has already been used\. Each invitation link works once\./);
     const reaccept = await call(acceptRoute.POST, { method: "POST", params: { token }, cookie });
     expect(reaccept.status).toBe(410);
     expect((await lookUpInvitation(token))!.status).toBe("used");
@@ -81,7 +82,10 @@ describe("invitations", () => {
     expect(res.status).toBe(410);
     expect(res.body.error).toEqual({
       code: "invitation_expired",
-      message: "This invitation has expired. Ask an owner of the workspace to send a new one.",
+      message: `This invitation has expired. Invitation links work for a limited time. Ask ${owner.name}, who invited you, or another owner of "Harbour Intake Screens" to send the invitation again; the new mail has a fresh link.`,
+      invitationStatus: "expired",
+      workspaceName: "Harbour Intake Screens",
+      inviterName: owner.name,
     });
     expect(await roleOf(ws, existing.id)).toBeNull();
   });

@@ -11,9 +11,12 @@ const METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE"] as const;
 
 type RouteMethods = { path: string; served: string[]; refused: Map<string, Handler>; options: Handler | undefined };
 
+/** The catch-all of addresses no route serves: every method answers its JSON 404 (tested below). */
+const UNKNOWN_ADDRESS = "/api/[...path]";
+
 async function routes(): Promise<RouteMethods[]> {
   return Promise.all(
-    routeFiles().map(async (file) => {
+    routeFiles().filter((file) => routePath(file) !== UNKNOWN_ADDRESS).map(async (file) => {
       const mod = (await import(file)) as Record<string, unknown>;
       const served = METHODS.filter((m) => typeof mod[m] === "function" && !isNotAllowed(mod[m]));
       const refused = new Map(METHODS.filter((m) => isNotAllowed(mod[m])).map((m) => [m, mod[m] as Handler]));
@@ -48,6 +51,20 @@ describe("methods a route does not serve", () => {
       }
       const { status, res } = await call(r.options!, { method: "OPTIONS", path: r.path });
       expect([r.path, status, res.headers.get("allow")]).toEqual([r.path, 204, allow.join(", ")]);
+    }
+  });
+
+  it("an address no route serves answers every method with the API's JSON 404 naming the path, not Next's HTML page", async () => {
+    const mod = (await import("@/app/api/[...path]/route")) as unknown as Record<string, Handler>;
+    for (const method of ["GET", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"]) {
+      const { status, body, res } = await call(mod[method], { method, path: "/api/sketches/6d656d6f-0000-4000-8000-0000000000a1/version", body: method === "GET" || method === "OPTIONS" ? undefined : {} });
+      expect([method, status, res.headers.get("content-type")]).toEqual([method, 404, "application/json"]);
+      expect(body).toEqual({
+        error: {
+          code: "not_found",
+          message: "There is no API address /api/sketches/6d656d6f-0000-4000-8000-0000000000a1/version. Check the spelling; the README lists the addresses of the API.",
+        },
+      });
     }
   });
 

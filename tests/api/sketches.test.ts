@@ -126,8 +126,10 @@ describe("saving versions", () => {
       [2, "moved the jack 0.3 m forward"],
       [1, "First version"],
     ]);
+    // a base the sketch never had is a wrong number, not a conflict: 400 naming the field
     const ahead = await save(id, 7, fixture("fire-monitor-trailer"));
-    expect(ahead.status).toBe(409);
+    expect(ahead.status).toBe(400);
+    expect(ahead.body.error.fields).toEqual([{ path: "baseVersion", message: "There is no version 7; the newest is 3." }]);
   });
 
   it("names the sketch after its drawing when a version changes the drawing's title, and keeps a rename from the details otherwise", async () => {

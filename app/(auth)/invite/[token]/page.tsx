@@ -5,7 +5,7 @@ import { AuthCard } from "@/components/auth/AuthFrame";
 import { AcceptInvitationButton, InvitationSignUpForm, SwitchAccountButton } from "@/components/auth/InvitationActions";
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
 import { Notice } from "@/components/shell/controls";
-import { accountExists, lookUpInvitation } from "@/lib/invitations";
+import { accountExists, invitationRefusal, lookUpInvitation } from "@/lib/invitations";
 import { ROLE_INFO } from "@/lib/roles";
 import { currentSession } from "@/lib/session";
 
@@ -13,12 +13,6 @@ export const metadata: Metadata = { title: "Invitation" };
 export const dynamic = "force-dynamic";
 
 const primary = "inline-flex w-full justify-center rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft";
-
-const REFUSALS = {
-  expired: { title: "This invitation has expired", body: "Invitation links work for a limited time. Ask an owner of the workspace to invite you again; the new mail has a fresh link." },
-  used: { title: "This invitation has already been used", body: "Each invitation link works once. If you joined with it, sign in to find the workspace; otherwise ask an owner for a new invitation." },
-  withdrawn: { title: "This invitation was withdrawn", body: "An owner of the workspace withdrew it, or sent a newer one that replaces it. Use the newest invitation mail, or ask an owner." },
-} as const;
 
 export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
@@ -29,8 +23,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
   // an unknown link answers 404 (its page: not-found.tsx); nothing streams before this check
   if (!view) notFound();
 
-  if (view.status !== "pending") {
-    const r = REFUSALS[view.status];
+  const r = invitationRefusal(view);
+  if (r) {
     return (
       <AuthCard title={r.title} lead={<>Workspace: <strong className="text-ink">{view.workspaceName}</strong></>}>
         <div className="space-y-4">

@@ -2,6 +2,7 @@ import { assertSameOrigin, otherMethods, readBytesCapped } from "@/lib/api";
 import { getAuth, MAX_AUTH_BODY_BYTES } from "@/lib/auth";
 import { withClientAddress } from "@/lib/client-address";
 import { AppError, errorResponse } from "@/lib/errors";
+import { withAppErrorShape } from "@/lib/auth-error-shape";
 
 export const dynamic = "force-dynamic";
 
@@ -10,9 +11,10 @@ export const dynamic = "force-dynamic";
 // hand it: the client address as TRUSTED_PROXIES says to read it, so a forged entry on the left
 // gets no budget of its own. The same cross-origin rule as every other mutation runs first
 // (better-auth checks Origin only when cookies are sent, which would let another site sign a
-// visitor into an account of its choosing), and the body is capped before it is parsed.
+// visitor into an account of its choosing), and the body is capped before it is parsed. Its
+// refusals also carry the app's `{ error: { code, message, fields? } }` (withAppErrorShape).
 export async function GET(req: Request): Promise<Response> {
-  return getAuth().handler(new Request(req, { headers: withClientAddress(req.headers) }));
+  return withAppErrorShape(await getAuth().handler(new Request(req, { headers: withClientAddress(req.headers) })));
 }
 
 export async function POST(req: Request): Promise<Response> {
@@ -29,7 +31,7 @@ export async function POST(req: Request): Promise<Response> {
   }
   const headers = withClientAddress(req.headers);
   headers.delete("content-length"); // the body is now what was read, whatever the header claimed
-  return getAuth().handler(new Request(req.url, { method: "POST", headers, body: new Uint8Array(body), signal: req.signal }));
+  return withAppErrorShape(await getAuth().handler(new Request(req.url, { method: "POST", headers, body: new Uint8Array(body), signal: req.signal })));
 }
 
 export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");
