@@ -103,6 +103,10 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   const version = useQuery({ queryKey: apiKey(base), queryFn: () => apiFetch<VersionData>(base), staleTime: Infinity });
   const signoff = useQuery({ queryKey: apiKey(`${base}/signoff`), queryFn: () => apiFetch<SignOffData>(`${base}/signoff`) });
   const comments = useQuery({ queryKey: apiKey(`${base}/comments`), queryFn: () => apiFetch<CommentsData>(`${base}/comments`) });
+  // which version of the sketch stands approved: a later revision is not read as carrying its approval
+  const sketchPath = `/api/sketches/${sketchId}`;
+  const sketch = useQuery({ queryKey: apiKey(sketchPath), queryFn: () => apiFetch<{ sketch?: { approvedVersion?: number | null } }>(sketchPath) });
+  const approvedVersion = sketch.data?.sketch?.approvedVersion ?? null;
   const [units, setUnits] = useUnitsPreference();
   const [pin, setPin] = useState<PickedPin | null>(null);
   const [picking, setPicking] = useState(false);
@@ -184,6 +188,15 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
                 v{latest} is newer
               </Link>
             ) : null}
+          </p>
+        ) : null}
+        {/* another version stands approved and this one is not: said as the calc sheet's "Revision" line says it */}
+        {approvedVersion !== null && approvedVersion !== number && signoff.data && signoff.data.state !== "approved" ? (
+          <p className="text-sm text-ink-soft" data-testid="approved-elsewhere">
+            <Link href={`${sketchHref}/versions/${approvedVersion}`} className="font-medium text-reaction underline decoration-reaction/40 underline-offset-2">
+              v{approvedVersion} is the approved version
+            </Link>{" "}
+            of this sketch. This version is not approved: v{approvedVersion}&apos;s approval does not carry over to it.
           </p>
         ) : null}
       </div>

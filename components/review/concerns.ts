@@ -1,10 +1,13 @@
 // What a version's own results say that a checker or approver must not miss: the sketch as drawn
 // not holding or slipping, a case in which a body is not held, a factor of safety below its
-// required value. The sign-off dialogs list them; the calc sheet's first page says the same.
+// required value, and a case in which a contact lifts, a tie goes slack or one contact needs more
+// friction than its μ while the body holds (as the sketch as drawn says of itself). The sign-off
+// dialogs list them; the calc sheet's first page says the same.
 import { parseSketch, requirementsOf, solveWithStability, type ParseResult } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
 import { asDrawnOfDocument, solveDocument, studyOfDocument } from "@/lib/review/compare";
-import { caseFindings } from "@/solver/report";
+import type { StudyResult } from "@/solver/cases";
+import { caseFindings, nameIn, stateWord } from "@/solver/report";
 import { statusSentences } from "@/components/results/statusSentence";
 
 /** `doc`: a sketch file as saved (any format version; it is read as the CLI reads it). */
@@ -24,6 +27,36 @@ export function versionConcerns(doc: unknown): string[] {
   const asDrawn = hasCases ? asDrawnOfDocument(file) : null;
   if (asDrawn) out.push(...caseFindings(asDrawn, false).map((f) => `As drawn: ${f}`));
   if (study) out.push(...caseFindings(study, hasCases));
+  if (study && hasCases) out.push(...caseStateFindings(study));
+  return out;
+}
+
+/**
+ * A line for each case or combination in which a body is held but one of its supports is not as
+ * drawn: a contact lifts off, a tie goes slack, or a contact needs more friction than its own μ
+ * gives while the body as a whole has friction to spare. The sketch as drawn says the same of
+ * itself in its status sentence ("Lifts", "Over μ"); a case's own would otherwise be said only in
+ * its row of the reactions per case. A body that tips, is unrestrained or fails its sliding check
+ * is said by `caseFindings` and the envelope's notes instead.
+ */
+export function caseStateFindings(study: StudyResult): string[] {
+  const out: string[] = [];
+  for (const run of study.runs) {
+    if (!run.ok) continue;
+    const bits: string[] = [];
+    for (const [id, r] of Object.entries(run.result.reactions)) {
+      const status = run.result.bodies[r.body]?.status;
+      if (status === "tips" || status === "unrestrained") continue;
+      const name = nameIn(study, id);
+      if (r.state === "lifted") bits.push(`${name} lifts off (its body is held by the other supports)`);
+      else if (r.state === "slack") bits.push(`${name} goes slack (its body is held by the other supports)`);
+      else if (stateWord(r, status) === "slips") {
+        const sliding = run.stability[r.body]?.sliding;
+        if (sliding && !("notApplicable" in sliding) && sliding.pass) bits.push(`${name} needs more friction than its own μ gives (the body as a whole has friction to spare)`);
+      }
+    }
+    if (bits.length) out.push(`${run.name} — ${bits.join("; ")}`);
+  }
   return out;
 }
 

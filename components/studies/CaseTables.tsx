@@ -3,10 +3,11 @@
 // the envelope, each support's design load, and the factors of safety. The editor's Cases tab and
 // a version's review page show the same tables.
 import type { StudyResult } from "@/solver/cases";
-import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, stateWord, tiedNames, unsolvedWords, withRunName } from "@/solver/report";
+import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, tiedNames, unsolvedWords, withRunName } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
+import { SLIP_NOTE, SLIP_NOTE_MARK, slipRowKey, slipsWithFrictionToSpare } from "./slipNote";
 
 /** The stability table's mark on a failed factor: the required one it falls below. */
 export function belowRequired(table: Table) {
@@ -17,28 +18,7 @@ export function belowRequired(table: Table) {
   };
 }
 
-/** The footnote mark on a per-case "slips" whose body passes its sliding check. */
-export const SLIP_NOTE_MARK = "*";
-
-/**
- * The rows (case name, support name) whose state says "slips" — that one contact needs more than
- * its own μ gives — while its body passes the sliding check: the check takes all its contacts
- * together (Σ μ·n over |Σ t|), and the body has friction to spare. Said in a note, so the two do
- * not read as a contradiction.
- */
-export function slipsWithFrictionToSpare(result: StudyResult): Set<string> {
-  const out = new Set<string>();
-  for (const run of result.runs) {
-    if (!run.ok) continue;
-    for (const [id, r] of Object.entries(run.result.reactions)) {
-      if (stateWord(r, run.result.bodies[r.body]?.status) !== "slips") continue;
-      const sliding = run.stability[r.body]?.sliding;
-      if (sliding && !("notApplicable" in sliding) && sliding.pass) out.add(rowKey(run.name, nameIn(result, id)));
-    }
-  }
-  return out;
-}
-const rowKey = (caseName: Cell, support: Cell) => `${caseName}\u0000${support}`;
+export { SLIP_NOTE_MARK, slipsWithFrictionToSpare } from "./slipNote";
 
 /** "<case name>, as drawn": the case whose run is the sketch as drawn over again, said once (as the calc sheet says it). */
 export const asDrawnName = (name: string) => `${name}, as drawn`;
@@ -56,7 +36,7 @@ export function CaseTables({ result, units, asDrawn }: { result: StudyResult; un
   const spare = slipsWithFrictionToSpare(result);
   const col = (key: string) => reactions.columns.findIndex((c) => c.key === key);
   const markSlip = (row: readonly Cell[], key: string) =>
-    key === "state" && spare.has(rowKey(row[col("case")], row[col("support")])) ? (
+    key === "state" && spare.has(slipRowKey(row[col("case")], row[col("support")])) ? (
       <sup className="ml-0.5 font-semibold text-ink" title="One contact over its own μ while the body has friction to spare: see the note under the table">
         {SLIP_NOTE_MARK}
       </sup>
@@ -84,9 +64,7 @@ export function CaseTables({ result, units, asDrawn }: { result: StudyResult; un
       <ReportTable table={reactions} fileName="reactions-per-case" testId="case-reactions" groupBy={["case"]} notesAbove mark={markSlip} />
       {spare.size > 0 && (
         <p className="mt-1 text-[11.5px] text-ink-faint" data-testid="slips-note">
-          {SLIP_NOTE_MARK} slips: that contact needs more friction than its own μ gives (|t| more than μ·n), but its body passes the sliding check, which takes all
-          its contacts together (Σ μ·n over |Σ t|): the body as a whole has friction to spare. Statics does not say how friction is shared between contacts; the others
-          can take up what this one cannot, so the body need not slide, though this contact may slip a little until they do (common practice).
+          {SLIP_NOTE_MARK} {SLIP_NOTE}
         </p>
       )}
       {unsolved ? (

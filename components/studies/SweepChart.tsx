@@ -6,7 +6,7 @@ import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, Re
 import { formatLimit } from "@/solver/limit";
 import { describeQuantity } from "@/solver/quantity";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
-import { niceTicks } from "@/lib/ticks";
+import { sweepAxisTicks } from "@/lib/calcsheet/chart";
 import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 
@@ -78,14 +78,15 @@ export function SweepChart({
     const b = ys[i];
     return { ...c, x: c.between[0] + ((c.between[1] - c.between[0]) * a) / (a - b) };
   });
-  // round ticks across the swept range (recharts divides a data-bound domain evenly otherwise)
-  const xTicks = data.xs.length ? niceTicks(Math.min(...data.xs), Math.max(...data.xs), 6) : undefined;
+  // round ticks across the swept range (recharts divides a data-bound domain evenly otherwise), and
+  // its ends where no round tick labels them, as the calc sheet's chart has them
+  const xTicks = data.xs.length ? sweepAxisTicks(Math.min(...data.xs), Math.max(...data.xs), 6) : undefined;
   return (
     <figure className="h-56 w-full" data-testid="sweep-chart" data-run={run} aria-label={`Reactions and margins against ${parameterLabel}`}>
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={rows} margin={{ top: 6, right: 16, bottom: 4, left: 4 }}>
           <CartesianGrid stroke="rgb(var(--rule-soft))" strokeDasharray="0" />
-          <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} ticks={xTicks} tick={{ fontSize: 11, fill: "rgb(var(--ink-soft))" }} tickFormatter={(v: number) => formatNumber(v, 3)}
+          <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} ticks={xTicks} tick={{ fontSize: 11, fill: "rgb(var(--ink-soft))" }} tickFormatter={(v: number) => formatNumber(v, 6)}
             label={{ value: `${parameterLabel}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`, position: "insideBottom", offset: 0, fontSize: 11, fill: "rgb(var(--ink))" }} height={38} />
           <YAxis yAxisId="left" tick={{ fontSize: 11, fill: "rgb(var(--ink-soft))" }} tickFormatter={(v: number) => formatNumber(v, 3)} width={52}
             label={{ value: leftUnit, angle: -90, position: "insideLeft", fontSize: 11, fill: "rgb(var(--ink))" }} />

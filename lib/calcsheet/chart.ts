@@ -29,6 +29,20 @@ const LABEL_CHAR = 4.6;
 
 const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
 
+/**
+ * The x axis's ticks: round ones (`niceTicks`), and the sweep's own ends where no round tick falls
+ * on or near them, so the reader sees where the run starts and stops (0 to 1.5 ends at "1.5", not
+ * at an unlabelled edge past "1.4"); the Sweep tab's plot takes the same. An end closer than a third of a step to a round tick is left
+ * out: the two labels would run into each other.
+ */
+export function sweepAxisTicks(lo: number, hi: number, count = 5): number[] {
+  const ticks = niceTicks(lo, hi, count);
+  if (ticks.length < 2) return ticks;
+  const step = ticks[1] - ticks[0];
+  const clear = (x: number) => ticks.every((t) => Math.abs(t - x) >= step / 3);
+  return [...(clear(lo) ? [lo] : []), ...ticks, ...(clear(hi) ? [hi] : [])];
+}
+
 export function lineChartSvg(spec: ChartSpec): string {
   const W = spec.width ?? 500;
   const H = spec.height ?? 260;
@@ -57,9 +71,10 @@ export function lineChartSvg(spec: ChartSpec): string {
     parts.push(`<line x1="${m.l}" x2="${W - m.r}" y1="${Y(t)}" y2="${Y(t)}" stroke="${t === 0 ? "#5f6974" : "#e2dccf"}" stroke-width="${t === 0 ? 1 : 0.6}"/>`);
     parts.push(`<text x="${m.l - 5}" y="${Y(t) + 3}" font-size="8" text-anchor="end" fill="#3d4650">${esc(formatNumber(t, 3))}</text>`);
   }
-  for (const t of niceTicks(x0, x1)) {
+  for (const t of sweepAxisTicks(x0, x1)) {
     parts.push(`<line x1="${X(t)}" x2="${X(t)}" y1="${H - m.b}" y2="${H - m.b + 4}" stroke="#5f6974" stroke-width="0.6"/>`);
-    parts.push(`<text x="${X(t)}" y="${H - m.b + 13}" font-size="8" text-anchor="middle" fill="#3d4650">${esc(formatNumber(t, 3))}</text>`);
+    // to 6 figures: a round tick prints as it is, and a sweep's end as the sweep says it (its title)
+    parts.push(`<text x="${X(t)}" y="${H - m.b + 13}" font-size="8" text-anchor="middle" fill="#3d4650">${esc(formatNumber(t, 6))}</text>`);
   }
   parts.push(`<rect x="${m.l}" y="${m.t}" width="${W - m.l - m.r}" height="${H - m.t - m.b}" fill="none" stroke="#cfc8b8" stroke-width="0.8"/>`);
   parts.push(`<text x="${(m.l + W - m.r) / 2}" y="${H - 8}" font-size="9" text-anchor="middle" fill="#1d2329">${esc(spec.xLabel)}</text>`);

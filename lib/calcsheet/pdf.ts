@@ -27,6 +27,7 @@ import {
 import { caseWarnings } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { combinationWarningWords } from "@/components/studies/casesText";
+import { withSlipNote } from "@/components/studies/slipNote";
 import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
 import { defaultMomentPoint } from "@/components/results/handCheck";
@@ -35,7 +36,7 @@ import {
   caseFindings,
   designLoadTable,
   excludedWords,
-  handCheckScale,
+  handCheckUnitScale,
   largestScale,
   slipWords,
   studyScale,
@@ -49,9 +50,10 @@ import { KIND_LABEL, type ElementKind } from "@/canvas/model/elements";
 import { lineChartSvg } from "./chart";
 import { sweepCharts, sweepEverywhere, sweepQuantities } from "./sweeps";
 import { registerFonts } from "./fonts";
-import { drawTable } from "./table";
+import { drawTable, tableLeadHeight, type DrawTableOptions } from "./table";
 import { checkRecord, type CheckRecordInput } from "./record";
 import { elementLabels } from "@/lib/review/pin-words";
+import { caseStateFindings } from "@/components/review/concerns";
 
 /** The height an svg says it has (its own attribute), or `fallback`. */
 const svgHeight = (svg: string, fallback: number) => Number(/^<svg[^>]*\sheight="([\d.]+)"/.exec(svg)?.[1] ?? fallback);
@@ -95,6 +97,9 @@ const RULE = "#cfc8b8";
 const ACCENT = "#b4462b";
 const CAUTION_BG = "#f6ebcf";
 
+/** The room (pt) a section heading takes: the space above it, its line and its rule. */
+const HEADING_ROOM = 32;
+
 const fmtDate = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
 
 const PROSE_FEATURES = { kern: false } as unknown as PDFKit.Mixins.OpenTypeFeatures[];
@@ -120,7 +125,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // one unit family for the whole sheet, from its largest force or moment (the hand checks, every
   // case's reactions and the figures of its factors of safety): N with N·m only when all of it is
   // below 1 kN (1 kN·m), else kN with kN·m; lbf with lbf·ft, or kip with kip·ft from 10 kip (10 kip·ft)
-  const sheetScale = largestScale(studyScale(study), studyScale(asDrawn), ...handChecks.map((h) => handCheckScale(result.equations[h.id], h.about)));
+  const sheetScale = largestScale(studyScale(study), studyScale(asDrawn), ...handChecks.map((h) => handCheckUnitScale(result.equations[h.id])));
   const family = unitFamily(units, sheetScale);
 
   const doc = new PDFDocument({ size: "A4", margins: { top: 44, bottom: 54, left: 44, right: 44 }, bufferPages: true, info: { Title: `${input.sketchTitle} v${input.version}`, Author: "Counterpoise", Subject: "Calculation sheet" } });
@@ -138,6 +143,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     doc.moveTo(left, doc.y + 2).lineTo(left + width, doc.y + 2).lineWidth(0.6).strokeColor(RULE).stroke();
     doc.moveDown(0.5);
   };
+  /** A heading over a table: kept on the page where the table's header and first row fit. */
+  const tableHeading = (text: string, table: Table, options: DrawTableOptions = {}) => heading(text, HEADING_ROOM + tableLeadHeight(doc, table, width, options));
   // prose without kerning: a kerned "7," reads back (copied, or by a text reader) as "7 ,", and an
   // engineer copies figures out of the sheet
   const para = (text: string, size = 9, color = SOFT) => doc.font("Inter").fontSize(size).fillColor(color).text(text, left, doc.y, { width, features: PROSE_FEATURES });
@@ -177,7 +184,9 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     para("Factors of safety as drawn:", 9, INK);
     for (const l of drawnLines) para(`• ${l}`, 8.5, ACCENT);
   }
-  const caseLines = caseFindings(named, hasCases);
+  // and a case in which a contact lifts, a tie goes slack or a contact is over its own μ while the
+  // body holds, as the sign-off dialogs list it (said of the sketch as drawn by its sentence above)
+  const caseLines = [...caseFindings(named, hasCases), ...(hasCases ? caseStateFindings(named) : [])];
   if (caseLines.length) {
     doc.moveDown(0.3);
     para(hasCases ? "In the cases and combinations:" : "Factors of safety:", 9, INK);
@@ -234,20 +243,28 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
 
   // ---- hand check
   for (const { id: bodyId, about } of handChecks) {
-    heading(`Hand check — ${bodyId}`);
-    drawTable(doc, handCheckTable(result, bodyId, about, units, { scale: sheetScale }), left, width);
+    const table = handCheckTable(result, bodyId, about, units, { scale: sheetScale });
+    tableHeading(`Hand check — ${bodyId}`, table);
+    drawTable(doc, table, left, width);
   }
 
   // ---- reactions per case, envelope, stability
   if (hasCases) {
-    heading("Reactions per case (forces on the body)");
-    drawTable(doc, withoutAbsentMoment(caseReactionTable(study, units, sheetScale), study), left, width, { groupBy: "case" });
-    heading("Envelope and design loads");
-    for (const w of [...excludedWords(study), ...slipWords(study)]) para(w, 8.5, ACCENT);
+    // a contact over its own μ in a body that passes its sliding check: marked and said, as on screen
+    const perCase = withSlipNote(withoutAbsentMoment(caseReactionTable(study, units, sheetScale), study), study);
+    tableHeading("Reactions per case (forces on the body)", perCase, { groupBy: "case" });
+    drawTable(doc, perCase, left, width, { groupBy: "case" });
+    const words = [...excludedWords(study), ...slipWords(study)];
     const unsolved = unsolvedWords(study);
-    if (unsolved) para(unsolved, 8.5, ACCENT);
+    // (no envelope while a run does not solve)
+    const envelope = unsolved ? null : withoutAbsentMoment(envelopeTable(study, units, sheetScale), study);
+    // straight over its table, the heading keeps to the table's page
+    if (!words.length && envelope) tableHeading("Envelope and design loads", envelope, { groupBy: "support" });
+    else heading("Envelope and design loads");
+    for (const w of words) para(w, 8.5, ACCENT);
+    if (!envelope) para(unsolved!, 8.5, ACCENT);
     else {
-      drawTable(doc, withoutAbsentMoment(envelopeTable(study, units, sheetScale), study), left, width, { groupBy: "support" });
+      drawTable(doc, envelope, left, width, { groupBy: "support" });
       drawTable(doc, withoutAbsentMoment(designLoadTable(study, units, sheetScale), study), left, width);
     }
   } else {
@@ -256,9 +273,10 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     para("No operating cases are defined: these are the reactions of the sketch as drawn.", 8.5, SOFT);
     drawTable(doc, singleRunTable(withoutAbsentMoment(caseReactionTable(study, units, sheetScale), study)), left, width);
   }
-  heading("Stability");
   // with cases, the sketch as drawn first: its own state, then each case's (once, when a case is it)
-  drawTable(doc, stabilityTable(twin ? named : withAsDrawnRun(study, asDrawn), units, sheetScale), left, width, { groupBy: "case" });
+  const stabilityRows = stabilityTable(twin ? named : withAsDrawnRun(study, asDrawn), units, sheetScale);
+  tableHeading("Stability", stabilityRows, { groupBy: "case" });
+  drawTable(doc, stabilityRows, left, width, { groupBy: "case" });
 
   // ---- sweeps: each on its saved case, one chart per unit (forces, moments, ratios)
   for (const sw of parsed.file.sweeps ?? []) {

@@ -91,16 +91,37 @@ function ensureRoom(doc: PDFKit.PDFDocument, needed: number) {
   if (doc.y + needed > doc.page.height - doc.page.margins.bottom) doc.addPage();
 }
 
-function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart, left: number, groups?: string[]) {
-  const { size, headers, cells } = layout;
+/** The heights (pt) a part of a table is drawn with: its header, a row, a group's heading. */
+function partMeasures(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart) {
+  const { size, headers } = layout;
   const total = part.widths.reduce((a, b) => a + b, 0);
   const inner = (i: number) => part.widths[i] - 2 * PAD_X;
   const textHeight = (text: string, font: string, i: number, numeric = false) =>
     text ? doc.font(font).fontSize(size).heightOfString(text, { width: inner(i), features: numeric ? NUMBER_FEATURES : TEXT_FEATURES }) : 0;
-
   const headerHeight =
     Math.max(...part.columns.map((c, i) => textHeight(headers[c].label, FONT.bold, i) + (headers[c].unit ? textHeight(headers[c].unit!, FONT.regular, i) : 0))) + PAD_Y;
   const rowHeight = (r: string[]) => Math.max(...part.columns.map((c, i) => textHeight(r[c] ?? "", FONT.regular, i, headers[c].align === "right"))) + PAD_Y;
+  const groupHeight = (g: string) => doc.font(FONT.bold).fontSize(size).heightOfString(g, { width: total - 2 * PAD_X, features: TEXT_FEATURES }) + PAD_Y;
+  return { total, inner, headerHeight, rowHeight, groupHeight };
+}
+
+/**
+ * The room (pt) a table needs on the page it starts on: its header, its first group's heading and
+ * its first row (what `drawTable` keeps together), or a wide table's caption. A heading over the
+ * table asks for this much beside its own, so it is never left alone at the foot of a page.
+ */
+export function tableLeadHeight(doc: PDFKit.PDFDocument, t0: Table, width: number, options: DrawTableOptions = {}): number {
+  if (t0.rows.length === 0) return 14;
+  const grouped = options.groupBy ? groupRows(t0, options.groupBy) : null;
+  const layout = layoutTable(grouped?.table ?? t0, { width, measure: pdfMeasure(doc) });
+  if (layout.parts.length > 1) return 62;
+  const { headerHeight, rowHeight, groupHeight } = partMeasures(doc, layout, layout.parts[0]);
+  return 2 + headerHeight + (grouped ? groupHeight(grouped.groups[0]) : 0) + rowHeight(layout.cells[0]);
+}
+
+function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart, left: number, groups?: string[]) {
+  const { size, headers, cells } = layout;
+  const { total, inner, headerHeight, rowHeight, groupHeight } = partMeasures(doc, layout, part);
 
   const drawHeader = () => {
     const y = doc.y;
@@ -116,7 +137,6 @@ function drawPart(doc: PDFKit.PDFDocument, layout: TableLayout, part: TablePart,
     doc.y = y + headerHeight;
   };
 
-  const groupHeight = (g: string) => doc.font(FONT.bold).fontSize(size).heightOfString(g, { width: total - 2 * PAD_X, features: TEXT_FEATURES }) + PAD_Y;
   const drawGroup = (g: string) => {
     const y = doc.y;
     const h = groupHeight(g);
