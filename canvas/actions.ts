@@ -9,13 +9,14 @@ import { deleteElements, duplicateElements, pasteElements } from "./commands/ele
 import { copyFragment, fragmentText, pasteNotice, planPaste, readFragment } from "./clipboard";
 import { moveElement } from "./commands/move";
 import { rotateElement } from "./commands/shape";
-import { DIRECTED, findElement, GROUPS, KIND_LABEL, type ElementKind } from "./model/elements";
+import { describeElement, DIRECTED, findElement, GROUPS, KIND_LABEL, type ElementKind } from "./model/elements";
+import { anchorOf } from "./scene";
 import { polygonAround, rectangleAround } from "./model/factory";
 import { valueLookup } from "./analysis/store";
 import { fitScene } from "./geometry/fit";
 import { snapTo } from "./geometry/snap";
 import { gridStep, toWorld, zoomAt } from "./geometry/view";
-import { bodyCommand, bodyPlaceInView, NEEDS_BODY, placedAtOutline, placeWithoutPointer } from "./placement";
+import { bodyCommand, bodyPlaceInView, NEEDS_BODY, placedAtOutline, placeWithoutPointer, spotWords, type SpotPlace } from "./placement";
 
 /** What the page around the editor provides to actions (dialogs, downloads, saving). */
 export interface EditorUi {
@@ -90,9 +91,22 @@ function placeAction(id: string, label: string, kind: Exclude<ElementKind, "body
       if (!s.apply(out.command)) return;
       s.setTool({ kind: "select" });
       const body = scene.bodies.find((b) => b.id === out.body);
-      s.notify(`${label} added to ${body?.label ?? out.body}. Arrow keys move it; its properties are on the right.`);
+      s.notify(`${label} added to ${body?.label ?? out.body} ${placedWords(out, s.view.scale)}`);
     },
   };
+}
+
+const metres = (x: number) => `${Number(x.toPrecision(6)) || 0} m`;
+
+/**
+ * Where a keyboard placement went and how to move it, for the status line (two lines at most):
+ * "near the left end of its bottom edge (x = 0.25 m, y = 0 m). Arrow keys move it 0.2 m a press,
+ * Shift+arrow 2 m."
+ */
+export function placedWords(out: { at?: Vec2; place?: SpotPlace }, scale: number): string {
+  const g = gridStep(scale);
+  const where = [out.place ? spotWords(out.place) : "", out.at ? `(x = ${metres(out.at[0])}, y = ${metres(out.at[1])})` : ""].filter(Boolean).join(" ");
+  return `${where}. Arrow keys move it ${metres(g)} a press, Shift+arrow ${metres(10 * g)}.`;
 }
 
 /** A body of the default size in the middle of the view (on the grid, and no larger than the view takes), selected: the tray's keyboard route. */
@@ -291,10 +305,32 @@ export const ACTIONS: readonly Action[] = [
     label: "Pick the point for moments",
     group: "results",
     shortcuts: ["K"],
-    hint: "Click on the canvas to take the hand check's moments about that point.",
+    hint: "Click on the canvas to take the hand check's moments about that point; Enter takes the selected element's point.",
     run: (c) => ed(c).setTool({ kind: "pick-point" }),
   },
 ];
+
+/**
+ * The point for moments without a pointer: while "Pick the point for moments" is on, Enter takes
+ * the selected element's own point (a support's, a load's or a port's; a body's centre of
+ * gravity), the usual choice of a hand check. False when the tool is not on; with nothing
+ * selected it says what to do instead.
+ */
+export function pickSelectedPoint(ctx: ActionContext): boolean {
+  const s = ed(ctx);
+  if (s.tool.kind !== "pick-point") return false;
+  const l = s.selection.length === 1 ? findElement(s.sketch, s.selection[0]) : undefined;
+  const item = l ? ctx.stores.scene.getState().byId.get(l.el.id) : undefined;
+  if (!l || !item) {
+    s.notify("Select one element first (in the Elements list), then K and Enter; or type Px and Py in the Hand check tab.");
+    return true;
+  }
+  const p = anchorOf(item);
+  s.setMomentPoint([snapTo(p[0], 1e-4), snapTo(p[1], 1e-4)]);
+  s.setTool({ kind: "select" });
+  s.notify(`The hand check takes moments about ${describeElement(l)}${l.kind === "body" ? "'s centre of gravity" : ""} (x = ${metres(p[0])}, y = ${metres(p[1])}).`);
+  return true;
+}
 
 function zoomBy(c: ActionContext, f: number) {
   const s = ed(c);
@@ -431,7 +467,7 @@ export function toolHint(tool: Tool, touch = false): string | null {
       return `Polygon body: ${n ? `${corners(n)}. ${touch ? "Tap" : "Click"} each next corner` : `${act} each corner`}, then ${close}${n >= 3 && touch ? "" : stop}`;
     }
     case "pick-point":
-      return `${touch ? "Tap" : "Click"} on the drawing: the hand check takes moments about that point.${stop}`;
+      return `${touch ? "Tap" : "Click"} on the drawing: the hand check takes moments about that point.${touch ? "" : " Enter takes the selected element's point."}${stop}`;
     case "calibrate":
       return tool.points.length === 0
         ? `Setting the scale: ${act} the first of two marks a known distance apart on the drawing.${stop}`
@@ -445,10 +481,14 @@ export function toolHint(tool: Tool, touch = false): string | null {
  * Keeps the status line's notice with the tool it was said under: a change of tool (choosing one,
  * or going back to selecting after a placement, Esc or Done) clears the notice, so neither the
  * last tool's words nor a refusal it gave linger. Words said after the change (what was added)
- * stay. Returns the function that stops.
+ * stay. So does it with the selection: "Pin added… Arrow keys move it" goes once another element
+ * is selected, which the arrows would move instead (words said with the change, "Undid: …", stay).
+ * Returns the function that stops.
  */
 export function noticesFollowTool(editor: EditorStore): () => void {
   return editor.subscribe((s, prev) => {
-    if (s.notice !== null && toolKey(s.tool) !== toolKey(prev.tool)) s.notify(null);
+    if (s.notice === null) return;
+    const otherSelection = s.selection !== prev.selection && s.notice === prev.notice && s.selection.join("\u0000") !== prev.selection.join("\u0000");
+    if (toolKey(s.tool) !== toolKey(prev.tool) || otherSelection) s.notify(null);
   });
 }

@@ -168,14 +168,31 @@ const SIDE: Partial<Record<ElementKind, Vec2>> = {
 const ALONG = [0.5, 0.25, 0.75, 0.125, 0.375, 0.625, 0.875];
 
 /**
+ * The supports a body usually stands on in twos or more (wheels, feet, a pin and a roller): near
+ * each end of its base first, an eighth of the edge in from each corner (the left end first), so
+ * the first two give it a wide base, as drawn by hand; then the middle and the quarters. A fixed
+ * support or a tie, usually one, takes the middle.
+ */
+const ALONG_PAIRED = [0.125, 0.875, 0.5, 0.25, 0.75, 0.375, 0.625];
+const PAIRED: ReadonlySet<ElementKind> = new Set(["pin", "roller", "contact"]);
+
+/** Where on its edge a keyboard placement went, for the words that say so. */
+export type SpotPlace = { edge: "bottom" | "top" | "left" | "right" | "centroid"; along: number };
+
+/**
  * Where a kind goes on a body when there is no pointer to say: on the edge that faces the kind's
- * side (the longest such edge), at its middle, or along it where nothing is placed yet; for a
- * couple or a mass source, the centroid.
+ * side (the longest such edge), for a pin, roller or contact near its left end, then near its
+ * right end, for the rest at its middle, and along it where nothing is placed yet; for a couple or
+ * a mass source, the centroid.
  */
 export function spotOnBody(body: SceneBody, kind: Exclude<ElementKind, "body">, taken: readonly Vec2[], tol: number): Vec2 {
+  return spotAndPlace(body, kind, taken, tol).at;
+}
+
+function spotAndPlace(body: SceneBody, kind: Exclude<ElementKind, "body">, taken: readonly Vec2[], tol: number): { at: Vec2; place: SpotPlace } {
   const poly = body.outline;
   const side = SIDE[kind];
-  if (!side || poly.length < 3) return polygonCentroid(poly);
+  if (!side || poly.length < 3) return { at: polygonCentroid(poly), place: { edge: "centroid", along: 0.5 } };
   let edge = 0;
   let best = -Infinity;
   let bestLen = 0;
@@ -190,11 +207,29 @@ export function spotOnBody(body: SceneBody, kind: Exclude<ElementKind, "body">, 
       bestLen = len;
     }
   }
-  const a = poly[edge];
-  const b = poly[(edge + 1) % poly.length];
+  let a = poly[edge];
+  let b = poly[(edge + 1) % poly.length];
+  // run the edge left to right (bottom to top on a side), whichever way the outline was drawn
+  if (side[1] !== 0 ? b[0] < a[0] : b[1] < a[1]) [a, b] = [b, a];
   const at = (t: number): Vec2 => [a[0] + t * (b[0] - a[0]), a[1] + t * (b[1] - a[1])];
-  const free = ALONG.map(at).find((p) => taken.every((q) => Math.hypot(p[0] - q[0], p[1] - q[1]) > tol));
-  return free ?? at(0.5);
+  const order = PAIRED.has(kind) ? ALONG_PAIRED : ALONG;
+  const t = order.find((u) => taken.every((q) => Math.hypot(at(u)[0] - q[0], at(u)[1] - q[1]) > tol)) ?? order[0];
+  const words = { "0,-1": "bottom", "0,1": "top", "-1,0": "left", "1,0": "right" } as const;
+  return { at: at(t), place: { edge: words[`${side[0]},${side[1]}` as keyof typeof words], along: t } };
+}
+
+/** The place in words: "near the left end of its bottom edge", "at the middle of its right side". */
+export function spotWords(place: SpotPlace): string {
+  if (place.edge === "centroid") return "at its centroid";
+  const sideways = place.edge === "left" || place.edge === "right";
+  const what = sideways ? `its ${place.edge} side` : `its ${place.edge} edge`;
+  const [lo, hi] = sideways ? ["lower", "upper"] : ["left", "right"];
+  const [before, after] = sideways ? ["below", "above"] : ["left of", "right of"];
+  const t = place.along;
+  if (Math.abs(t - 0.5) < 1e-9) return `at the middle of ${what}`;
+  if (t < 0.2) return `near the ${lo} end of ${what}`;
+  if (t > 0.8) return `near the ${hi} end of ${what}`;
+  return `${t < 0.5 ? before : after} the middle of ${what}`;
 }
 
 /**
@@ -217,12 +252,12 @@ export function placeWithoutPointer(
   scene: Scene,
   kind: Exclude<ElementKind, "body">,
   where: { selection: readonly string[]; viewCentre: Vec2; tol: number; friction?: boolean },
-): PlaceOutcome & { body?: string; at?: Vec2 } {
+): PlaceOutcome & { body?: string; at?: Vec2; place?: SpotPlace } {
   const body = targetBody(sketch, scene, where.selection, where.viewCentre);
   if (!body) return { ok: false, message: NEEDS_BODY };
   const taken = scene.items.filter((it) => it.body === body.id).map(anchorOf);
-  const at = spotOnBody(body, kind, taken, where.tol);
-  return { ok: true, command: placeOnBody(sketch, body, kind, at, where.tol, { friction: where.friction }), body: body.id, at };
+  const { at, place } = spotAndPlace(body, kind, taken, where.tol);
+  return { ok: true, command: placeOnBody(sketch, body, kind, at, where.tol, { friction: where.friction }), body: body.id, at, place };
 }
 
 /** A body placed in one go takes at most this share of the visible drawing's width or height. */

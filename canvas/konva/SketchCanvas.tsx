@@ -13,7 +13,7 @@ import { fitScene, isFitted } from "../geometry/fit";
 import { followFitRequests } from "../fitRequests";
 import { GRID_MAJOR, GRID_MINOR } from "../render/palette";
 import { markFrame } from "../perf";
-import { BodyNode, CgNode, ItemNode, statesOf } from "./nodes";
+import { BodyNode, CgNode, ItemNode, statesOf, useDrawingFamily } from "./nodes";
 import { PointerOverlay, ResultsShape, SelectionHandles } from "./overlays";
 import { createPointerController, type HitInfo, type PointerController } from "./pointer";
 import { TRAY_MIME, type InteractionStore, type TrayDrop } from "./interaction";
@@ -80,6 +80,7 @@ function Elements({ interaction, lifted }: { interaction: InteractionStore; lift
   const scale = useEditor((s) => s.view.scale);
   const units = useEditor((s) => s.units);
   const states = useAnalysis((s) => statesOf(s.shown, s.shownSketch?.supports));
+  const family = useDrawingFamily(units);
   const seeThrough = useEditor((s) => Boolean(s.sketch.underlay && !s.sketch.underlay.hidden));
   const shifts = useStore(interaction, (s) => s.labelShifts);
   const selected = useMemo(() => new Set(selection), [selection]);
@@ -91,7 +92,7 @@ function Elements({ interaction, lifted }: { interaction: InteractionStore; lift
         <BodyNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} seeThrough={seeThrough} shift={shifts.get(id)} />
       ))}
       {items.map((id) => (
-        <ItemNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} state={states.get(id)} shift={shifts.get(id)} />
+        <ItemNode key={id} id={id} selected={selected.has(id)} scale={scale} units={units} state={states.get(id)} shift={shifts.get(id)} family={family} />
       ))}
       {bodies.map((id) => (
         <CgNode key={`cg-${id}`} id={id} selected={selected.has(id)} scale={scale} units={units} />
@@ -248,7 +249,7 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
       tabIndex={0}
       role="application"
       aria-label="Drawing of the free-body diagram"
-      aria-describedby="canvas-alt canvas-help"
+      aria-describedby="canvas-summary canvas-alt canvas-help"
       data-testid="sketch-canvas"
       data-view={`${view.scale} ${view.x} ${view.y}`}
       onDragOver={(e) => {
@@ -285,7 +286,8 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
         </Stage>
       )}
       <CanvasLegend />
-      {/* the pixels say nothing to a screen reader: the same drawing in words is the element list and the results */}
+      {/* the pixels say nothing to a screen reader: the drawing in words is the editor's summary
+          (`canvas-summary`: what is drawn and the result), the element list and the results */}
       <p id="canvas-alt" className="sr-only">
         Every element drawn here is listed under Elements, each a button that selects it for the Properties panel; the reactions found are in the Results panel.
       </p>

@@ -14,7 +14,7 @@ import { anchorOf, type Scene } from "../scene";
 import { handleAlong, handleBoxes, handlePlace } from "../render/handles";
 import { placeElementLabels, shiftBox, type Box } from "../render/labels";
 import { elementGroups, resultLayer } from "../render/scenePrims";
-import { supportStates } from "../render/results";
+import { drawingFamily, supportStates } from "../render/results";
 import type { UnitSystem } from "@/solver/units";
 import { statesOf } from "./nodes";
 import type { InteractionStore } from "./interaction";
@@ -51,9 +51,11 @@ export function followLabelLayout(stores: EditorStores, interaction: Interaction
     if (key.every((k, i) => k === last[i])) return;
     last = key;
     const supports = stores.analysis.getState().shownSketch?.supports;
-    const groups = elementGroups(scene, view.scale, e.units, statesOf(shown, supports));
+    // one force unit for the given loads and the reactions, as the drawing writes them
+    const family = drawingFamily(shown, e.units, scene.items);
+    const groups = elementGroups(scene, view.scale, e.units, statesOf(shown, supports), family);
     const frame = drawingFrame(view, viewport);
-    const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown, supports), stale, frame) : [];
+    const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown, supports), stale, frame, family) : [];
     const handle = turnHandleBoxes(scene, e.selection, e.tool.kind, view.scale, e.units, frame);
     const shifts = placeElementLabels(groups, results, it.labelShifts, frame, handle);
     if (shifts !== it.labelShifts) interaction.setState({ labelShifts: shifts });

@@ -6,11 +6,11 @@ import { Group, Shape } from "react-konva";
 import type Konva from "konva";
 import type { SolveResult } from "@/solver/types";
 import type { UnitSystem } from "@/solver/units";
-import { useScene } from "../context";
+import { useAnalysis, useScene, useStores } from "../context";
 import type { SceneBody, SceneItem } from "../scene";
 import { bodyPrims, cgPrims, groundSideOf, itemPrims, anchorWorld, portKeepOutKey, standInPoint, unplacedPrims, type Box, type DrawState } from "../render/symbols";
 import { isFinitePoint } from "../geometry/polygon";
-import { supportStates } from "../render/results";
+import { drawingFamily, supportStates } from "../render/results";
 import type { SlideSupport } from "../render/tipSlide";
 import { primsBox, type Prim } from "../render/prims";
 import { shiftTexts, type TextMove } from "../render/labels";
@@ -26,6 +26,24 @@ const sameStates = (a: ReadonlyMap<string, DrawState>, b: ReadonlyMap<string, Dr
  * The drawing states of a result's supports (cached per result). A new result whose states are
  * all as before gives back the same map, so a drag that changes no state re-renders no node.
  */
+type Family = { force: string; moment: string };
+/**
+ * The drawing's force and moment units (`drawingFamily`), one object while they stay the same, so
+ * the nodes of given loads redraw only when the unit changes. Read when the result changes: every
+ * edit of the scene is solved again, so the result follows the loads.
+ */
+export function useDrawingFamily(units: UnitSystem): Family {
+  const scene = useStores().scene;
+  const key = useAnalysis((s) => {
+    const f = drawingFamily(s.shown, units, scene.getState().items);
+    return `${f.force}|${f.moment}`;
+  });
+  return useMemo(() => {
+    const [force, moment] = key.split("|");
+    return { force, moment };
+  }, [key]);
+}
+
 export function statesOf(result: SolveResult | null, supports?: readonly SlideSupport[]): ReadonlyMap<string, DrawState> {
   if (!result) return NO_STATES;
   let m = statesCache.get(result);
@@ -113,7 +131,7 @@ export const CgNode = memo(function CgNode({ id, selected, scale }: NodeProps) {
   );
 });
 
-export const ItemNode = memo(function ItemNode({ id, selected, scale, units, state, shift }: NodeProps & { state?: DrawState; shift?: readonly TextMove[] }) {
+export const ItemNode = memo(function ItemNode({ id, selected, scale, units, state, shift, family }: NodeProps & { state?: DrawState; shift?: readonly TextMove[]; family?: Family }) {
   const item = useScene((s) => s.byId.get(id)) as SceneItem | undefined;
   // an element whose position cannot be worked out is marked at its body's centre instead
   const unplaced = !!item && !isFinitePoint(anchorWorld(item));
@@ -122,8 +140,10 @@ export const ItemNode = memo(function ItemNode({ id, selected, scale, units, sta
   const own = useMemo(() => {
     if (!item) return [];
     const o = { units, scale, color: selected ? ACCENT : INK };
-    return unplaced ? unplacedPrims(item, o) : itemPrims(item, { ...o, groundSide: groundSideOf(item, body), state });
-  }, [item, unplaced, body, units, scale, selected, state]);
+    // a given force or couple in the drawing's unit, as the reactions beside it
+    const fam = item.kind === "force" || item.kind === "couple" ? family : undefined;
+    return unplaced ? unplacedPrims(item, o) : itemPrims(item, { ...o, groundSide: groundSideOf(item, body), state, family: fam });
+  }, [item, unplaced, body, units, scale, selected, state, family]);
   const prims = useMemo(() => shiftTexts(own, shift), [own, shift]);
   // picked by the symbol, not by a leader line out to a moved label
   const hit = useMemo(() => boxHit(own), [own]);

@@ -9,7 +9,7 @@ import type { Vec2 } from "@/solver/types";
 import { useEditor, useScene, useStores } from "../context";
 import { DIRECTED, GROUP_OF } from "../model/elements";
 import { elementGroups, resultLayer } from "../render/scenePrims";
-import { supportStates } from "../render/results";
+import { drawingFamily, supportStates } from "../render/results";
 import { itemPrims } from "../render/symbols";
 import type { Prim } from "../render/prims";
 import { handleAlong, handleWords, placeHandle } from "../render/handles";
@@ -66,8 +66,9 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       // the supports' and ports' own labels are drawn (and moved off these) by their nodes; only the
       // result's layer is drawn here, over their symbols
       const states = a.shown ? supportStates(a.shown, a.shownSketch?.supports) : null;
-      const groups = a.shown || e.momentPoint ? elementGroups(scene, e.view.scale, e.units, states) : [];
-      const found = a.shown && states ? resultLayer(groups, scene, e.view.scale, e.units, a.shown, states, a.stale, drawingFrame(e.view, e.viewport)) : [];
+      const family = drawingFamily(a.shown, e.units, scene.items);
+      const groups = a.shown || e.momentPoint ? elementGroups(scene, e.view.scale, e.units, states, family) : [];
+      const found = a.shown && states ? resultLayer(groups, scene, e.view.scale, e.units, a.shown, states, a.stale, drawingFrame(e.view, e.viewport), family) : [];
       // the hand check's P, its words clear of the result's and the elements' own
       primsRef.current = e.momentPoint ? [...found, ...momentPointPrims(px(e.momentPoint, e.view.scale), [...found, ...groups.flatMap((g) => g.prims)])] : found;
       const layer = shapeRef.current?.getLayer();

@@ -22,6 +22,8 @@ import { readUnitsPreference, writeUnitsPreference } from "@/components/sketches
 import { ResultsDock } from "@/components/results/ResultsDock";
 import { ImportErrorDialog } from "./ImportErrorDialog";
 import { Outline } from "./Outline";
+import { CanvasSummary } from "./CanvasSummary";
+import { ResultAnnouncer } from "./ResultAnnouncer";
 import { PropertiesPanel } from "./PropertiesPanel";
 import { KeysDialog } from "./KeysDialog";
 import { CsvSubject } from "@/components/studies/csv";
@@ -258,6 +260,8 @@ function Workspace({ persistence, saved, toolbarExtra, notice }: { persistence: 
             <main className="flex min-w-0 flex-1 flex-col" aria-label="Drawing and results">
               <div className="paper-sheet relative min-h-0 flex-1">
                 <SketchCanvas interaction={interaction} onController={setController} />
+                <CanvasSummary />
+                <ResultAnnouncer />
               </div>
               <StatusLine />
               <EditorCsvSubject>

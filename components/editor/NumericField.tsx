@@ -12,7 +12,7 @@ import { numericText, toNumeric } from "@/canvas/model/numeric";
 import { suggestUnitsFor } from "@/solver/expressionErrors";
 import { exampleIn, type Display, type Example } from "./fieldDefs";
 import type { LastGood } from "./useCommit";
-import { endVisitHere, INPUT } from "./ui";
+import { endVisitHere, INPUT, leaveField } from "./ui";
 
 let session = 0;
 
@@ -201,10 +201,10 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
               setTypedPlain(false);
             }
             // Enter ends the visit (its undo step) and stays in the field, so a keyboard user is not
-            // sent back to the top of the page; Escape leaves the field (a panel over the drawing
-            // closes on the next Escape)
+            // sent back to the top of the page; Escape leaves the field for the drawing (a panel
+            // over the drawing closes on the next Escape)
             if (e.key === "Enter") endVisitHere(e.currentTarget);
-            if (e.key === "Escape") e.currentTarget.blur();
+            if (e.key === "Escape") leaveField(e.currentTarget);
           }}
         />
       </div>

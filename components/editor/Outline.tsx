@@ -1,7 +1,8 @@
 "use client";
 // "Elements": every element, grouped under its body, for selecting and editing without a mouse.
-// Up/Down move between rows, Enter or Space selects (Shift or Ctrl adds), Delete deletes.
-import { useMemo, useRef, type KeyboardEvent } from "react";
+// Up/Down move between rows, Enter or Space selects (Shift or Ctrl adds), Delete deletes. A row
+// that goes while it has the focus (deleted, or undone) hands the focus to the row now in its place.
+import { useLayoutEffect, useMemo, useRef, type KeyboardEvent } from "react";
 import { useShallow } from "zustand/react/shallow";
 import { useEditor, useStores } from "@/canvas/context";
 import { GROUPS, KIND_LABEL, kindOf, type AnyElement, type Attached, type Located } from "@/canvas/model/elements";
@@ -53,6 +54,23 @@ function rowsOf(list: Located[]): Row[] {
   return rows;
 }
 
+const ROWS = '[data-outline] button[data-row]';
+
+/** The place in the list of the (first) selected row, or -1: where a deletion leaves the focus. */
+export function selectedRowIndex(): number {
+  return [...document.querySelectorAll<HTMLElement>(ROWS)].findIndex((b) => b.getAttribute("aria-pressed") === "true");
+}
+
+/**
+ * Focus on the row at `index` (the last one when the list got shorter), or, with no rows left, on
+ * the drawing: after a deletion the keyboard carries on from where the deleted element was listed.
+ */
+export function focusRowNear(index: number) {
+  const rows = document.querySelectorAll<HTMLElement>(ROWS);
+  const target = rows.length ? rows[Math.max(0, Math.min(index, rows.length - 1))] : document.querySelector<HTMLElement>('[data-testid="sketch-canvas"]');
+  target?.focus();
+}
+
 export function Outline() {
   const { editor } = useStores();
   // a narrow selector: a drag changes positions, not the rows of this list
@@ -63,6 +81,15 @@ export function Outline() {
   const listRef = useRef<HTMLUListElement>(null);
   const rows = rowsOf(list);
   const focusIndex = Math.max(0, rows.findIndex((r) => selection.includes(r.l.el.id)));
+  // the row with the focus, while the list has it: when that row goes (Delete, Ctrl+Z) the
+  // document would be left holding the focus, and the next Tab would start from the top
+  const focusedRow = useRef<number | null>(null);
+  useLayoutEffect(() => {
+    if (focusedRow.current === null) return;
+    const active = document.activeElement;
+    if (active && active !== document.body) return;
+    focusRowNear(focusedRow.current);
+  }, [keys]);
 
   const onKey = (e: KeyboardEvent<HTMLButtonElement>, i: number) => {
     const buttons = listRef.current?.querySelectorAll<HTMLButtonElement>("button[data-row]");
@@ -91,7 +118,18 @@ export function Outline() {
       {rows.length === 0 ? (
         <p className="mt-2 text-[12px] leading-snug text-ink-faint">Nothing drawn yet. Start with a body from “Add”, or open an example.</p>
       ) : (
-        <ul ref={listRef} className="relative mt-1 min-h-0 flex-1 overflow-auto pr-1" aria-label="Elements of the sketch">
+        <ul
+          ref={listRef}
+          className="relative mt-1 min-h-0 flex-1 overflow-auto pr-1"
+          aria-label="Elements of the sketch"
+          data-outline
+          onBlur={(e) => {
+            // gone elsewhere, or to nothing from a row still there (a click on the page); not a row
+            // removed under the focus
+            const to = e.relatedTarget as Node | null;
+            if (to ? !e.currentTarget.contains(to) : e.target.isConnected) focusedRow.current = null;
+          }}
+        >
           {rows.map((r, i) => {
             const { l } = r;
             const selected = selection.includes(l.el.id);
@@ -104,6 +142,7 @@ export function Outline() {
                   aria-pressed={selected}
                   aria-label={`${KIND_LABEL[l.kind]} ${l.el.id}${l.el.label ? `, ${l.el.label}` : ""}`}
                   onKeyDown={(e) => onKey(e, i)}
+                  onFocus={() => (focusedRow.current = i)}
                   onClick={(e) => editor.getState().select([l.el.id], e.shiftKey || e.ctrlKey || e.metaKey ? "toggle" : "replace")}
                   className={`flex w-full items-center gap-1.5 rounded px-1.5 py-[3px] text-left text-[12.5px] ${r.depth ? "pl-5" : ""} ${
                     selected ? "bg-accent-soft text-accent-deep" : "text-ink-soft hover:bg-paper-deep"

@@ -5,6 +5,7 @@ import { actionById, actionTitle } from "@/canvas/actions";
 import { useEditor } from "@/canvas/context";
 import { findElement, KIND_LABEL } from "@/canvas/model/elements";
 import { ElementForm } from "./ElementForm";
+import { focusRowNear, selectedRowIndex } from "./Outline";
 import { ParametersTable } from "./ParametersTable";
 import { SketchForm } from "./SketchForm";
 import { UnderlayPanel } from "./UnderlayPanel";
@@ -24,7 +25,20 @@ function SelectionActions({ readOnlyCopy = false }: { readOnlyCopy?: boolean }) 
   return (
     <div className="flex flex-wrap gap-1.5" data-testid="selection-actions">
       {ids.map((id) => (
-        <button key={id} type="button" className={BUTTON} title={actionTitle(id)} onClick={() => run(id)}>
+        <button
+          key={id}
+          type="button"
+          className={BUTTON}
+          title={actionTitle(id)}
+          onClick={() => {
+            if (id !== "edit.delete") return run(id);
+            // the form and this button go with what they showed: the focus goes to the element
+            // listed where the deleted one was (the drawing when none is left), not to the page
+            const at = selectedRowIndex();
+            run(id);
+            window.setTimeout(() => focusRowNear(Math.max(0, at)), 0);
+          }}
+        >
           {actionById(id).label}
         </button>
       ))}

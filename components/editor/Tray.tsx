@@ -3,7 +3,7 @@
 // canvas), or drag one onto the canvas. Enter or Space on a focused item adds the element at
 // once (a body in the middle of the view, anything else on the selected or nearest body), so the
 // editor needs no pointer. Generated from the registered actions.
-import type { KeyboardEvent } from "react";
+import { useState, type KeyboardEvent } from "react";
 import { ACTIONS, shortcutLabel, type Action } from "@/canvas/actions";
 import { TRAY_MIME, type TrayDrop } from "@/canvas/konva/interaction";
 import { useEditor } from "@/canvas/context";
@@ -74,6 +74,9 @@ export function Tray() {
   };
   const tool = useToolKey();
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
+  // the focused item's words under the tray: a tooltip (the title) never shows for the keyboard
+  const [focused, setFocused] = useState<string | null>(null);
+  const focusedAction = focused ? ACTIONS.find((x) => x.id === focused) : undefined;
   return (
     <section aria-labelledby="tray-heading" aria-describedby="tray-keys" className="border-b border-rule px-3 pb-3 pt-2">
       <h2 id="tray-heading" className={HEADING}>
@@ -106,6 +109,8 @@ export function Tray() {
                     e.dataTransfer.effectAllowed = "copy";
                   }}
                   onKeyDown={onKeyDown(a, disabled)}
+                  onFocus={() => setFocused(id)}
+                  onBlur={() => setFocused((f) => (f === id ? null : f))}
                   onKeyUp={(e) => {
                     if (e.key === " ") e.preventDefault();
                   }}
@@ -127,6 +132,13 @@ export function Tray() {
           </div>
         </div>
       ))}
+      {/* the tooltip's words for the item the keyboard is on; the title already gives them to a screen reader */}
+      {focusedAction ? (
+        <p className="mt-2 text-[11px] leading-snug text-ink-soft" aria-hidden="true" data-testid="tray-focus-hint">
+          <span className="font-medium text-ink">{focusedAction.label}</span>
+          {focusedAction.shortcuts?.[0] ? ` (${shortcutLabel(focusedAction.shortcuts[0])})` : ""}: {focusedAction.kind !== "body" && !hasBody ? "draw a body first." : `${focusedAction.hint} Enter adds it now.`}
+        </p>
+      ) : null}
     </section>
   );
 }

@@ -20,3 +20,19 @@ export function endVisitHere(field: HTMLElement) {
   const touch = typeof window !== "undefined" && typeof window.matchMedia === "function" && window.matchMedia("(pointer: coarse)").matches;
   if (!touch && field.isConnected) field.focus();
 }
+
+/** Below this width the properties panel lies over the drawing (see the editor's aside). */
+export const PANEL_OVER_DRAWING = "(max-width: 1179px)";
+
+/**
+ * Escape leaves a field of the properties panel for the drawing, so the focus stays visible and
+ * the keys go on to the selection (the arrows move it, the next Escape clears it), instead of the
+ * focus falling to the page. Where the panel lies over the drawing (a narrow window) the field is
+ * only left: the next Escape closes the panel and puts the focus on its button.
+ */
+export function leaveField(field: HTMLElement) {
+  field.blur();
+  const over = typeof window.matchMedia === "function" && window.matchMedia(PANEL_OVER_DRAWING).matches;
+  if (over) return;
+  document.querySelector<HTMLElement>('[data-testid="sketch-canvas"]')?.focus({ preventScroll: true });
+}

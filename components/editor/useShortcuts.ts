@@ -2,7 +2,7 @@
 // The keyboard: registered actions by their shortcuts, plus the keys a drag or a drawing
 // needs (Escape cancels, Enter closes a polygon, Space held pans).
 import { useEffect } from "react";
-import { actionForKey, copySelection, pasteText, type ActionContext } from "@/canvas/actions";
+import { actionForKey, copySelection, pasteText, pickSelectedPoint, type ActionContext } from "@/canvas/actions";
 import type { InteractionStore } from "@/canvas/konva/interaction";
 
 function typingIn(target: EventTarget | null): boolean {
@@ -32,6 +32,12 @@ export function useShortcuts(getCtx: () => ActionContext, interaction: Interacti
           e.preventDefault();
         }
         s.notify(null);
+        return;
+      }
+      // the point for moments from the keyboard: the selected element's (on a button too, whose
+      // own Enter would only select the row again)
+      if (e.key === "Enter" && !e.repeat && pickSelectedPoint(ctx)) {
+        e.preventDefault();
         return;
       }
       if (s.tool.kind === "body" && s.tool.shape === "polygon") {

@@ -65,7 +65,7 @@ export function StatusBanner() {
 
   if (!hasBody) return <p className="text-[13px] text-ink-faint" data-testid="status">Draw a body, then its supports, to see the reactions.</p>;
   return (
-    <div className="space-y-1" data-testid="status" aria-live="polite">
+    <div className="space-y-1" data-testid="status">
       {stale && (
         <p className="rounded border border-caution/50 bg-caution-soft px-2 py-1 text-[12px] text-caution" data-testid="stale">
           Showing the last good result (faded on the drawing): the input has {errors.length === 1 ? "an error" : `${errors.length} errors`}

@@ -1,44 +1,16 @@
 // A field whose expression cannot be worked out (an angle naming a parameter that does not exist)
 // must not reach the canvas as NaN: the element is marked as having an error, by shape and words.
-import { render, waitFor } from "@testing-library/react";
-import Konva from "konva";
+import { waitFor } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { createEditorStore } from "@/canvas/store";
-import { EditorProvider } from "@/canvas/context";
-import { createInteractionStore } from "@/canvas/konva/interaction";
-import SketchCanvas from "@/canvas/konva/SketchCanvas";
 import { exampleById } from "@/canvas/examples";
 import { setField } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands";
-import "./editor-helpers";
+import { drawnTexts, onCanvas, stage } from "./canvas-support";
 
 afterEach(() => vi.restoreAllMocks());
 
-const stage = () => Konva.stages[Konva.stages.length - 1];
-
-/** Every text the canvas's layers filled, from the canvas mock's record of calls. */
-function drawnTexts(): string[] {
-  const out: string[] = [];
-  for (const layer of stage().getLayers()) {
-    const ctx = layer.getCanvas().getContext()._context as unknown as { __getEvents?: () => Array<{ type: string; props: { text?: string } }> };
-    for (const e of ctx.__getEvents?.() ?? []) if (e.type === "fillText" && e.props.text) out.push(e.props.text);
-  }
-  return out;
-}
-
 /** The washing-cart example on a canvas, drawn once. */
-async function cartOnCanvas() {
-  const editor = createEditorStore({ sketch: exampleById("washing-cart")!.sketch });
-  const { container } = render(
-    <EditorProvider editor={editor}>
-      <div style={{ width: 800, height: 600 }}>
-        <SketchCanvas interaction={createInteractionStore()} />
-      </div>
-    </EditorProvider>,
-  );
-  await waitFor(() => expect(container.querySelector("canvas")).not.toBeNull());
-  return editor;
-}
+const cartOnCanvas = () => onCanvas(exampleById("washing-cart")!.sketch);
 
 describe("SketchCanvas with a field in error", () => {
   it("draws no NaN and marks the element: a dashed ring with a question mark and the field named", async () => {

@@ -1,7 +1,7 @@
 // The editor without a pointer: Enter or Space on a tray item adds the element at once (a body in
 // the middle of the view, a support, load or port on the selected body), and a tray item or a
 // shortcut asked for before any body exists says why nothing happened.
-import { fireEvent, screen, waitFor, within } from "@testing-library/react";
+import { act, fireEvent, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { emptySketch } from "@/canvas/model/elements";
@@ -16,7 +16,7 @@ describe("the tray from the keyboard", () => {
     const user = userEvent.setup();
     const { mem } = await renderEditor(emptySketch());
     const body = screen.getByTestId("tray-body");
-    body.focus();
+    act(() => body.focus());
     await user.keyboard("{Enter}");
     expect(outlineRow(/Body b1/)).toHaveAttribute("aria-pressed", "true");
     // the key placed the body; it did not also click the button (which would choose the drawing tool)
@@ -29,23 +29,48 @@ describe("the tray from the keyboard", () => {
 
     const pin = screen.getByTestId("tray-pin");
     expect(pin).toHaveAttribute("aria-disabled", "false");
-    pin.focus();
+    act(() => pin.focus());
     await user.keyboard("{Enter}");
     expect(outlineRow(/Pin s1/)).toHaveAttribute("aria-pressed", "true");
     expect(pin).toHaveAttribute("aria-pressed", "false");
-    expect(screen.getByTestId("notice")).toHaveTextContent("Pin added to Body 1.");
-    // the middle of the body's bottom edge
+    expect(screen.getByTestId("notice")).toHaveTextContent(/^Pin added to Body 1 near the left end of its bottom edge \(x = .+ m, y = .+ m\)\. Arrow keys move it .+ m a press, Shift\+arrow .+ m\.$/);
+    // an eighth of the body's bottom edge in from its left corner
     await waitFor(() => expect(storedSketch(mem)?.supports).toHaveLength(1));
     const at = storedSketch(mem)!.supports[0].at as number[];
-    expect(at[0]).toBeCloseTo((x0 + x1) / 2, 9);
+    expect(at[0]).toBeCloseTo(x0 + (x1 - x0) / 8, 9);
     expect(at[1]).toBeCloseTo(y0, 9);
     expect(storedSketch(mem)!.supports[0]).toMatchObject({ kind: "pin", body: "b1" });
+  }, 15_000);
+
+  it("two contacts with friction added by Enter stand near the two ends of the base, and the status says where each went", async () => {
+    const user = userEvent.setup();
+    const { mem } = await renderEditor(emptySketch());
+    act(() => screen.getByTestId("tray-body").focus());
+    await user.keyboard("{Enter}");
+    await waitFor(() => expect(storedSketch(mem)?.bodies).toHaveLength(1));
+    const [[x0, y0], [x1]] = corners(storedSketch(mem)!, 0);
+    const contact = screen.getByTestId("tray-contact-friction");
+    act(() => contact.focus());
+    await user.keyboard("{Enter}");
+    expect(screen.getByTestId("notice")).toHaveTextContent(/^Contact with friction added to Body 1 near the left end of its bottom edge/);
+    // the second goes on the same body (the first is selected), at the other end
+    act(() => contact.focus());
+    await user.keyboard("{Enter}");
+    expect(screen.getByTestId("notice")).toHaveTextContent(/^Contact with friction added to Body 1 near the right end of its bottom edge/);
+    await waitFor(() => expect(storedSketch(mem)?.supports).toHaveLength(2));
+    const [a, b] = storedSketch(mem)!.supports.map((s) => s.at as number[]);
+    expect(a[0]).toBeCloseTo(x0 + (x1 - x0) / 8, 9);
+    expect(b[0]).toBeCloseTo(x1 - (x1 - x0) / 8, 9);
+    expect(a[1]).toBeCloseTo(y0, 9);
+    expect(b[1]).toBeCloseTo(y0, 9);
+    // three quarters of the base between them
+    expect(b[0] - a[0]).toBeCloseTo(0.75 * (x1 - x0), 9);
   }, 15_000);
 
   it("Space on the polygon adds a polygon body whose corners are then edited in the properties", async () => {
     const user = userEvent.setup();
     const { mem } = await renderEditor(emptySketch());
-    screen.getByTestId("tray-polygon").focus();
+    act(() => screen.getByTestId("tray-polygon").focus());
     await user.keyboard(" ");
     expect(outlineRow(/Body b1/)).toHaveAttribute("aria-pressed", "true");
     expect(screen.getByTestId("tray-polygon")).toHaveAttribute("aria-pressed", "false");
@@ -58,12 +83,12 @@ describe("the tray from the keyboard", () => {
   it("the arrow keys then move what was added, as the notice says, with the focus still on the tray", async () => {
     const user = userEvent.setup();
     const { mem } = await renderEditor(emptySketch());
-    screen.getByTestId("tray-body").focus();
+    act(() => screen.getByTestId("tray-body").focus());
     await user.keyboard("{Enter}");
     const outlet = screen.getByTestId("tray-outlet");
-    outlet.focus();
+    act(() => outlet.focus());
     await user.keyboard("{Enter}");
-    expect(screen.getByTestId("notice")).toHaveTextContent("Outlet added to Body 1. Arrow keys move it");
+    expect(screen.getByTestId("notice")).toHaveTextContent(/^Outlet added to Body 1 at the middle of its right side \(x = .+\)\. Arrow keys move it/);
     await waitFor(() => expect(storedSketch(mem)?.ports).toHaveLength(1));
     const [x, y] = storedSketch(mem)!.ports[0].at as number[];
     // a grid step a press (ten with Shift), the step following the zoom: right, then up
@@ -99,7 +124,7 @@ describe("asking for a support before any body exists", () => {
     const user = userEvent.setup();
     await renderEditor(emptySketch());
     const force = screen.getByTestId("tray-force");
-    force.focus();
+    act(() => force.focus());
     await user.keyboard("{Enter}");
     expect(screen.getByTestId("notice")).toHaveTextContent(/^Draw a body first/);
     fireEvent.keyDown(document.body, { key: "Escape" });
@@ -107,5 +132,24 @@ describe("asking for a support before any body exists", () => {
     await user.click(force);
     expect(screen.getByTestId("notice")).toHaveTextContent(/^Draw a body first/);
     expect(screen.getByRole("heading", { name: /Elements/ })).toHaveTextContent("(0)");
+  });
+});
+
+describe("the tray's tooltips for the keyboard", () => {
+  it("the focused item's words show under the tray (a title never shows for the keyboard), and go with the focus", async () => {
+    const user = userEvent.setup();
+    await renderEditor(emptySketch());
+    expect(screen.queryByTestId("tray-focus-hint")).toBeNull();
+    act(() => screen.getByTestId("tray-pin").focus());
+    expect(screen.getByTestId("tray-focus-hint")).toHaveTextContent("Pin (P): draw a body first.");
+    act(() => screen.getByTestId("tray-body").focus());
+    expect(screen.getByTestId("tray-focus-hint")).toHaveTextContent(/^Body \(rectangle\) \(B\): Drag on the canvas to draw a rectangle.* Enter adds it now\.$/);
+    await user.keyboard("{Enter}");
+    act(() => screen.getByTestId("tray-contact-friction").focus());
+    expect(screen.getByTestId("tray-focus-hint")).toHaveTextContent("Contact with friction (Shift+C): Pushes only, and holds sideways up to μ times the normal force. Enter adds it now.");
+    await user.tab();
+    expect(screen.getByTestId("tray-focus-hint")).toHaveTextContent(/^Fixed support \(X\)/);
+    act(() => screen.getByTestId("tray-fixed").blur());
+    expect(screen.queryByTestId("tray-focus-hint")).toBeNull();
   });
 });

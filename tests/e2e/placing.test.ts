@@ -98,15 +98,16 @@ describe("placing elements from the tray and the keyboard", () => {
     await row(page, "Pin s1").waitFor();
     await expect.poll(() => form(page).textContent()).toMatch(/Pin s1/);
     expect(await form(page).getByLabel("Belongs to").inputValue()).toBe("b1");
-    await expect.poll(() => page.getByTestId("notice").textContent()).toMatch(/^Pin added to Body 1\./);
+    await expect.poll(() => page.getByTestId("notice").textContent()).toMatch(/^Pin added to Body 1 near the left end of its bottom edge \(x = 0\.25 m, y = 0\.5 m\)\./);
     // Enter was not also a click on the button: no place tool waiting for a click on the canvas
     expect(await pin.getAttribute("aria-pressed")).toBe("false");
 
-    // kept attached to the body, in the middle of its bottom edge (where a support goes by itself)
+    // kept attached to the body, an eighth of its bottom edge in from its left corner (a second
+    // support goes as far in from the right one, so a pair stands on three quarters of the base)
     await expect.poll(async () => (await storedSketch(page))?.supports.length).toBe(1);
     const s = (await storedSketch(page))!.supports[0];
     expect(s).toMatchObject({ id: "s1", kind: "pin", body: "b1" });
-    expect(Number(s.at[0])).toBeCloseTo(1, 6);
+    expect(Number(s.at[0])).toBeCloseTo(0.25, 6);
     expect(Number(s.at[1])).toBeCloseTo(0.5, 6);
     await shot(page, "placing-pin-by-keyboard");
   });

@@ -6,7 +6,8 @@ import type { SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
 import { emptySketch } from "@/canvas/model/elements";
 import { defaultBodySize, newBody, polygonAround, rectangleAround } from "@/canvas/model/factory";
-import { placeWithoutPointer, spotOnBody, targetBody } from "@/canvas/placement";
+import { placeWithoutPointer, spotOnBody, spotWords, targetBody } from "@/canvas/placement";
+import { placedWords } from "@/canvas/actions";
 import { buildScene } from "@/canvas/scene";
 import { runCommand } from "@/canvas/commands/define";
 import { snapCorners } from "@/canvas/geometry/snap";
@@ -40,9 +41,12 @@ describe("spotOnBody", () => {
   const body = buildScene(twoBodies()).bodies[0];
   const tol = 0.05;
 
-  it("puts supports at the middle of the bottom edge, ties and forces on top, ports at the sides, couples at the centroid", () => {
-    expect(spotOnBody(body, "pin", [], tol)).toEqual([1, 0]);
-    expect(spotOnBody(body, "contact", [], tol)).toEqual([1, 0]);
+  it("puts a pin, roller or contact near the left end of the bottom edge, a fixed support and a tie at the middle, forces on top, ports at the sides, couples at the centroid", () => {
+    // an eighth of the 2 m edge in from its left corner
+    expect(spotOnBody(body, "pin", [], tol)).toEqual([0.25, 0]);
+    expect(spotOnBody(body, "contact", [], tol)).toEqual([0.25, 0]);
+    expect(spotOnBody(body, "roller", [], tol)).toEqual([0.25, 0]);
+    expect(spotOnBody(body, "fixed", [], tol)).toEqual([1, 0]);
     expect(spotOnBody(body, "tie", [], tol)).toEqual([1, 1]);
     expect(spotOnBody(body, "force", [], tol)).toEqual([1, 1]);
     expect(spotOnBody(body, "inlet", [], tol)).toEqual([0, 0.5]);
@@ -52,10 +56,26 @@ describe("spotOnBody", () => {
     expect(c[1]).toBeCloseTo(0.5, 12);
   });
 
-  it("moves along the edge past spots already taken: the quarter points next", () => {
+  it("moves along the edge past spots already taken: a fixed support's quarter points next", () => {
     const taken: Vec2[] = [[1, 0]];
-    expect(spotOnBody(body, "pin", taken, tol)).toEqual([0.5, 0]);
-    expect(spotOnBody(body, "pin", [...taken, [0.5, 0]], tol)).toEqual([1.5, 0]);
+    expect(spotOnBody(body, "fixed", taken, tol)).toEqual([0.5, 0]);
+    expect(spotOnBody(body, "fixed", [...taken, [0.5, 0]], tol)).toEqual([1.5, 0]);
+  });
+
+  it("a second contact goes near the right end, so the pair stands on 1.5 m of a 2 m base; a third at the middle", () => {
+    const first = spotOnBody(body, "contact", [], tol);
+    const second = spotOnBody(body, "contact", [first], tol);
+    expect(second).toEqual([1.75, 0]);
+    expect(second[0] - first[0]).toBe(1.5);
+    expect(spotOnBody(body, "contact", [first, second], tol)).toEqual([1, 0]);
+    // a pin then a roller: the two ends as well (a simply supported body)
+    expect(spotOnBody(body, "roller", [spotOnBody(body, "pin", [], tol)], tol)).toEqual([1.75, 0]);
+  });
+
+  it("takes the left end first whichever way the outline was drawn (clockwise here)", () => {
+    const cw = buildScene({ ...emptySketch(), bodies: [newBody("c", [[0, 0], [0, 1], [4, 1], [4, 0]])] }).bodies[0];
+    expect(spotOnBody(cw, "contact", [], tol)).toEqual([0.5, 0]);
+    expect(spotOnBody(cw, "contact", [[0.5, 0]], tol)).toEqual([3.5, 0]);
   });
 
   it("on a triangle with a sloping side takes the edge that faces down", () => {
@@ -63,6 +83,20 @@ describe("spotOnBody", () => {
     expect(spotOnBody(tri, "fixed", [], tol)).toEqual([2, 0]);
     // the top: the sloping edge faces up and right (its normal (3, 4)/5), the left edge faces left
     expect(spotOnBody(tri, "force", [], tol)).toEqual([2, 1.5]);
+  });
+});
+
+describe("the words for where a keyboard placement went", () => {
+  it("name the edge and the end, and how far an arrow key moves it at the zoom", () => {
+    expect(spotWords({ edge: "bottom", along: 0.125 })).toBe("near the left end of its bottom edge");
+    expect(spotWords({ edge: "bottom", along: 0.875 })).toBe("near the right end of its bottom edge");
+    expect(spotWords({ edge: "top", along: 0.5 })).toBe("at the middle of its top edge");
+    expect(spotWords({ edge: "right", along: 0.25 })).toBe("below the middle of its right side");
+    expect(spotWords({ edge: "centroid", along: 0.5 })).toBe("at its centroid");
+    // 120 px a metre: the grid (the nudge's step) is the first round step at least 18 px long, 0.2 m
+    expect(placedWords({ at: [0.25, -0.5], place: { edge: "bottom", along: 0.125 } }, 120)).toBe(
+      "near the left end of its bottom edge (x = 0.25 m, y = -0.5 m). Arrow keys move it 0.2 m a press, Shift+arrow 2 m.",
+    );
   });
 });
 
@@ -79,13 +113,26 @@ describe("targetBody", () => {
 });
 
 describe("placeWithoutPointer", () => {
-  it("places a roller under the selected body, pointing up into it", () => {
+  it("places a roller under the selected body, near its left end, pointing up into it, and says where", () => {
     const sketch = twoBodies();
     const out = placeWithoutPointer(sketch, buildScene(sketch), "roller", { selection: ["b1"], viewCentre: [5, 0], tol: 0.05 });
     if (!out.ok) throw new Error(out.message);
     expect(out.body).toBe("b1");
+    expect(out.place).toEqual({ edge: "bottom", along: 0.125 });
     const after = runCommand(sketch, out.command);
-    expect(after.supports[1]).toEqual({ id: "s2", body: "b1", kind: "roller", at: [1, 0], angle: 90 });
+    expect(after.supports[1]).toEqual({ id: "s2", body: "b1", kind: "roller", at: [0.25, 0], angle: 90 });
+  });
+
+  it("two contacts with friction one after the other stand near the two ends of the base", () => {
+    let sketch = twoBodies();
+    for (let i = 0; i < 2; i++) {
+      const out = placeWithoutPointer(sketch, buildScene(sketch), "contact", { selection: ["b1"], viewCentre: [0, 0], tol: 0.05, friction: true });
+      if (!out.ok) throw new Error(out.message);
+      sketch = runCommand(sketch, out.command);
+    }
+    const mine = sketch.supports.filter((x) => x.body === "b1");
+    expect(mine.map((x) => x.at)).toEqual([[0.25, 0], [1.75, 0]]);
+    expect(mine.every((x) => x.kind === "contact" && x.angle === 90)).toBe(true);
   });
 
   it("an outlet goes on the right-hand side, flowing out (0°); the pin already there pushes a new pin along", () => {
@@ -93,9 +140,13 @@ describe("placeWithoutPointer", () => {
     const outlet = placeWithoutPointer(sketch, buildScene(sketch), "outlet", { selection: [], viewCentre: [5, 0], tol: 0.05 });
     if (!outlet.ok) throw new Error(outlet.message);
     expect(runCommand(sketch, outlet.command).ports[0]).toMatchObject({ body: "b2", at: [6, 0.5], angle: 0 });
+    // the pin s1 stands at the middle (5, 0): a new pin still takes the left end first
     const pin = placeWithoutPointer(sketch, buildScene(sketch), "pin", { selection: ["s1"], viewCentre: [0, 0], tol: 0.05 });
     if (!pin.ok) throw new Error(pin.message);
-    expect(runCommand(sketch, pin.command).supports[1]).toMatchObject({ body: "b2", at: [4.5, 0] });
+    expect(runCommand(sketch, pin.command).supports[1]).toMatchObject({ body: "b2", at: [4.25, 0] });
+    const fixed = placeWithoutPointer(sketch, buildScene(sketch), "fixed", { selection: ["s1"], viewCentre: [0, 0], tol: 0.05 });
+    if (!fixed.ok) throw new Error(fixed.message);
+    expect(runCommand(sketch, fixed.command).supports[1]).toMatchObject({ body: "b2", at: [4.5, 0] });
   });
 
   it("without a body says to draw one first", () => {
