@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, desc, eq, lt, sql } from "drizzle-orm";
+import { and, asc, desc, eq, gt, lt, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { auditEvent, comment, membership, signOff, sketch, sketchVersion, user, workspace } from "@/db/schema";
@@ -167,6 +167,17 @@ export async function approvedBefore(sketchId: string, number: number): Promise<
     .select({ number: sketchVersion.number })
     .from(sketchVersion)
     .where(and(eq(sketchVersion.sketchId, sketchId), lt(sketchVersion.number, number), eq(sketchVersion.reviewState, "approved")))
+    .orderBy(desc(sketchVersion.number))
+    .limit(1);
+  return row?.number ?? null;
+}
+
+/** The newest version after `number` that stands approved (null when none): an approved sheet says whether it still governs. */
+export async function approvedAfter(sketchId: string, number: number): Promise<number | null> {
+  const [row] = await db
+    .select({ number: sketchVersion.number })
+    .from(sketchVersion)
+    .where(and(eq(sketchVersion.sketchId, sketchId), gt(sketchVersion.number, number), eq(sketchVersion.reviewState, "approved")))
     .orderBy(desc(sketchVersion.number))
     .limit(1);
   return row?.number ?? null;

@@ -83,6 +83,9 @@ export interface CalcSheetInput {
   review?: string;
   /** the newest earlier version that stands approved, when this one is not approved itself */
   approvedEarlier?: number;
+  /** when this version is approved and later ones exist: the newest later one that stands approved
+   *  (null when none is, so this one remains the approved design) */
+  approvedLater?: number | null;
   /** the saved sketch file */
   file: unknown;
   /** the version's sign-off steps and comment threads, printed as its check record */
@@ -429,11 +432,21 @@ function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number
     doc.font("Inter").fillColor(SOFT).text(`v${v} is the approved version of this sketch. This sheet is of v${input.version}, which is not approved: v${v}'s approval does not carry over to it.`, { width, features: PROSE_FEATURES });
     doc.y += 4;
   }
-  // a sheet of an earlier version is not mistaken for the current design
+  // a sheet of an earlier version is not mistaken for the current design, nor an approved one whose
+  // later versions are unapproved drafts for one whose approval lapsed
   if (input.latestVersion && input.latestVersion > input.version) {
-    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(ACCENT).text(`Superseded: v${input.latestVersion} is the latest version of this sketch.`, left, doc.y, { width, features: PROSE_FEATURES });
+    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(input.approvedLater === null ? INK : ACCENT).text(laterVersionsWords(input.version, input.latestVersion, input.approvedLater), left, doc.y, { width, features: PROSE_FEATURES });
     doc.y += 4;
   }
+}
+
+/** What the sheet of an earlier version says of the later ones. */
+export function laterVersionsWords(version: number, latest: number, approvedLater?: number | null): string {
+  if (approvedLater === null) return `Later versions: v${latest} is the latest version of this sketch. No later version is approved, so this one, v${version}, remains the approved design.`;
+  if (approvedLater === undefined) return `Superseded: v${latest} is the latest version of this sketch.`;
+  return approvedLater === latest
+    ? `Superseded: v${latest}, the latest version of this sketch, is approved.`
+    : `Superseded: v${approvedLater}, a later version, is approved; v${latest} is the latest version of this sketch.`;
 }
 
 function cautionBoxHeight(doc: PDFKit.PDFDocument, width: number, lines: string[]): number {

@@ -93,7 +93,14 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
     expect(v2).toContain("Revision: v1 is the approved version of this sketch. This sheet is of v2, which is not approved: v1's approval does not carry over to it.");
     const v1 = await sheetText(1);
     expect(v1).not.toContain("Revision:");
-    expect(v1).toContain("Superseded: v2 is the latest version of this sketch.");
+    // v2 is an unapproved draft: v1's sheet says it still governs, not that it is superseded
+    expect(v1).toContain("Later versions: v2 is the latest version of this sketch. No later version is approved, so this one, v1, remains the approved design.");
+    expect(v1).not.toContain("Superseded");
+    // once v2 is approved too, v1's sheet is superseded by it
+    await takeSignOffStep(id, 2, prep, { step: "submit" });
+    await takeSignOffStep(id, 2, chk, { step: "check" });
+    await takeSignOffStep(id, 2, owner, { step: "approve" });
+    expect(await sheetText(1)).toContain("Superseded: v2, the latest version of this sketch, is approved.");
   }, 60000);
 
   it("refuses units other than SI and US, naming the field", async () => {

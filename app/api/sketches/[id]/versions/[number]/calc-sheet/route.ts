@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { getVersion } from "@/db/queries/versions";
-import { approvedBefore, getVersionForCalcSheet } from "@/db/queries/review";
+import { approvedAfter, approvedBefore, getVersionForCalcSheet } from "@/db/queries/review";
 import { listVersionComments, openThreadsBefore } from "@/db/queries/comments";
 import { otherMethods, route } from "@/lib/api";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
@@ -20,10 +20,12 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
   if (!version) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
   const sheet = await getVersionForCalcSheet(version.id, user.id);
   if (!sheet) throw new AppError("not_found", `This sketch has no version ${params.number}.`);
-  const [comments, earlierOpen, approvedEarlier] = await Promise.all([
+  const approved = sheet.reviewState === "approved";
+  const [comments, earlierOpen, approvedEarlier, approvedLater] = await Promise.all([
     listVersionComments(sheet.versionId, user.id),
     openThreadsBefore(params.id, sheet.versionNumber),
-    sheet.reviewState === "approved" ? null : approvedBefore(params.id, sheet.versionNumber),
+    approved ? null : approvedBefore(params.id, sheet.versionNumber),
+    approved && sheet.latestVersion > sheet.versionNumber ? approvedAfter(params.id, sheet.versionNumber) : undefined,
   ]);
   const pdf = await buildCalcSheet({
     workspace: sheet.workspaceName,
@@ -35,6 +37,7 @@ export const GET = route({ params: versionParams, query }, async ({ params, quer
     signoff: sheet.signOff.map((s) => ({ role: s.role, name: s.name, at: s.date })),
     review: sheet.review,
     approvedEarlier: approvedEarlier ?? undefined,
+    approvedLater,
     file: sheet.document,
     record: { steps: sheet.steps, comments, earlierOpen },
     units: query.units,
