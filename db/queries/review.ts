@@ -161,27 +161,20 @@ export async function getVersionForCalcSheet(versionId: string, userId: string) 
     steps: entries,
   };
 }
-/** The newest version before `number` that stands approved (null when none): a later sheet says it revises it. */
-export async function approvedBefore(sketchId: string, number: number): Promise<number | null> {
+/** The newest version before (or after) `number` that stands approved, null when none. */
+async function newestApproved(sketchId: string, number: number, side: "before" | "after"): Promise<number | null> {
   const [row] = await db
     .select({ number: sketchVersion.number })
     .from(sketchVersion)
-    .where(and(eq(sketchVersion.sketchId, sketchId), lt(sketchVersion.number, number), eq(sketchVersion.reviewState, "approved")))
+    .where(and(eq(sketchVersion.sketchId, sketchId), (side === "before" ? lt : gt)(sketchVersion.number, number), eq(sketchVersion.reviewState, "approved")))
     .orderBy(desc(sketchVersion.number))
     .limit(1);
   return row?.number ?? null;
 }
-
-/** The newest version after `number` that stands approved (null when none): an approved sheet says whether it still governs. */
-export async function approvedAfter(sketchId: string, number: number): Promise<number | null> {
-  const [row] = await db
-    .select({ number: sketchVersion.number })
-    .from(sketchVersion)
-    .where(and(eq(sketchVersion.sketchId, sketchId), gt(sketchVersion.number, number), eq(sketchVersion.reviewState, "approved")))
-    .orderBy(desc(sketchVersion.number))
-    .limit(1);
-  return row?.number ?? null;
-}
+/** The newest earlier version that stands approved: a later sheet says it revises it. */
+export const approvedBefore = (sketchId: string, number: number) => newestApproved(sketchId, number, "before");
+/** The newest later version that stands approved: an approved sheet says whether it still governs. */
+export const approvedAfter = (sketchId: string, number: number) => newestApproved(sketchId, number, "after");
 
 export type CalcSheetVersion = NonNullable<Awaited<ReturnType<typeof getVersionForCalcSheet>>>;
 
