@@ -9,6 +9,8 @@ import { prepare, solveModels } from "./solve";
 import { bodyStability, requirementsOf, type BodyStability, type Requirements } from "./stability";
 import { DEFAULT_GROUPS, type EquationTerm, type FieldError, type Reaction, type SolveResult, type SolveWarning } from "./types";
 import { generalizedLoad, type BodyModel } from "./model";
+import { prettyUnit } from "./units";
+import { kindOfUnit, type FieldKind } from "./expressions";
 
 export type CaseRun =
   | { id: string; name: string; kind: "case" | "combination"; ok: true; result: SolveResult; stability: Record<string, BodyStability> }
@@ -75,15 +77,67 @@ export function caseSketch(file: SketchFile, c: CaseFile) {
   return { ok: true as const, sketch: r.sketch, warnings: r.warnings };
 }
 
-/** What a case's changes break in the sketch: the input errors of its variant that the sketch as
- *  drawn does not have (a parameter given in the wrong unit, say). Empty when the case reads. */
+/** How the message of a case's change typed without a unit begins (see `caseInputErrors`). */
+export const NO_UNIT = "has no unit";
+
+/** A plain number as typed: "30", "-2.5", "1e3" (no unit, no name, no operation). */
+const PLAIN_NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?$/i;
+
+/**
+ * What a case's changes break in the sketch: the input errors of its variant that the sketch as
+ * drawn does not have (a parameter given in the wrong unit, say). Empty when the case reads.
+ * A change typed as a plain number ("v = 30", not 0) for a parameter the sketch writes with a unit
+ * comes first, at the change, with the unit to write ("has no unit; the sketch gives v in m/s:
+ * write 30 m/s"): it is what breaks the fields that read v ("236.25 kg / m^2 is in other units"),
+ * and where it breaks nothing it would be read silently in SI units (30 rad for an angle in deg),
+ * which the case table, unlike a field, does not show back.
+ */
 export function caseInputErrors(file: SketchFile, c: CaseFile): FieldError[] {
+  const drawn = resolveFile(file);
+  const unitless: FieldError[] = [];
+  for (const [name, value] of Object.entries(c.parameters ?? {})) {
+    const text = String(value).trim();
+    const asDrawn = drawn.parameterValues[name];
+    if (!PLAIN_NUMBER.test(text) || Number(text) === 0 || !asDrawn || !("unit" in asDrawn) || !asDrawn.unit) continue;
+    const unit = asDrawn.unit.replace(/\s*\/\s*/g, "/");
+    unitless.push({ path: `cases[${c.id}].parameters.${name}`, message: `${NO_UNIT}; the sketch gives ${name} in ${prettyUnit(unit)}: write ${text} ${unit}` });
+  }
   const own = caseSketch(file, c);
-  if (own.ok) return [];
-  const base = caseSketch(file, AS_DRAWN);
-  const known = new Set(base.ok ? [] : base.errors.map((e) => `${e.path} ${e.message}`));
-  return own.errors.filter((e) => !known.has(`${e.path} ${e.message}`));
+  if (own.ok) return unitless;
+  // a change in a unit of another kind ("v = 30 psi" for a speed) is said at the change too
+  const variant = resolveFile({ ...file, parameters: { ...(file.parameters ?? {}), ...c.parameters } }).parameterValues;
+  const otherKind: FieldError[] = [];
+  for (const name of Object.keys(c.parameters ?? {})) {
+    const was = drawn.parameterValues[name];
+    const now = variant[name];
+    if (!was || !now || !("unit" in was) || !("unit" in now)) continue;
+    const [kindWas, kindNow] = [kindOfUnit(was.unit), kindOfUnit(now.unit)];
+    if (!kindWas || !kindNow || kindWas === kindNow) continue;
+    otherKind.push({ path: `cases[${c.id}].parameters.${name}`, message: `is ${KIND_NAMES[kindNow]}, but the sketch gives ${name} in ${prettyUnit(was.unit.replace(/\s*\/\s*/g, "/"))}, ${KIND_NAMES[kindWas]}` });
+  }
+  const known = new Set(drawn.ok ? [] : drawn.errors.map((e) => `${e.path} ${e.message}`));
+  return [...unitless, ...otherKind, ...own.errors.filter((e) => !known.has(`${e.path} ${e.message}`))];
 }
+
+/** What a quantity of each kind is, in a sentence ("a pressure"). */
+const KIND_NAMES: Record<FieldKind, string> = {
+  length: "a length",
+  angle: "an angle",
+  mass: "a mass",
+  force: "a force",
+  moment: "a moment",
+  lineLoad: "a load per length",
+  massFlow: "a mass flow",
+  velocity: "a speed",
+  pressure: "a pressure",
+  area: "an area",
+  density: "a density",
+  volumeFlow: "a volume flow",
+  stiffness: "a stiffness",
+  rotationalStiffness: "a rotational stiffness",
+  acceleration: "an acceleration",
+  ratio: "a plain number",
+};
 
 /** Add the load sets of several cases (each × its factor) on the geometry of the first. */
 export function combineModels(parts: Array<{ models: BodyModel[]; factor: number; name: string }>): BodyModel[] {
@@ -149,7 +203,7 @@ export function solveCases(file: SketchFile, onProgress: (done: number, total: n
   for (const k of file.combinations ?? []) {
     const missing = k.terms.filter((t) => !prepared.has(t.case));
     if (missing.length) {
-      record({ id: k.id, name: k.name, kind: "combination", ok: false, errors: [{ path: `combinations[${k.id}]`, message: `case ${missing.map((t) => t.case).join(", ")} could not be evaluated` }] });
+      record({ id: k.id, name: k.name, kind: "combination", ok: false, errors: [{ path: `combinations[${k.id}]`, message: `${missing.length === 1 ? "its case" : "its cases"} ${missing.map((t) => cases.find((c) => c.id === t.case)?.name ?? t.case).join(", ")} could not be evaluated` }] });
       continue;
     }
     const parts = k.terms.map((t) => ({ models: prepared.get(t.case)!.models, factor: t.factor, name: cases.find((c) => c.id === t.case)!.name }));

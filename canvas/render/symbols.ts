@@ -262,6 +262,8 @@ function sourcePrims(item: Extract<SceneItem, { kind: "massSource" }>, o: Symbol
 
 /** Fields the symbol is drawn from (its direction, size, reach), in the words the panel uses. */
 const SHAPE_FIELDS = ["angle", "magnitude", "value", "w1", "w2"] as const;
+/** A field as the properties form writes it, where that differs from its key in the file. */
+const FIELD_WORDS: Record<string, string> = { w1: "w₁", w2: "w₂" };
 
 /**
  * The fields of an element whose value could not be worked out (an expression in error reads as
@@ -285,7 +287,7 @@ function unreadablePrims(item: SceneItem, fields: string[], o: SymbolOptions): P
     { t: "circle", c: [0, 0], r: 9, stroke: c, width: 1.4, dash: [3, 2.5], fill: PAPER_CARD },
     text([0, 0.5], "?", c, 11, { weight: 700, align: "center", baseline: "middle", halo: false, pinned: true }),
   ];
-  const lines = [`${fields.join(", ")}: cannot be worked out`];
+  const lines = [`${fields.map((f) => FIELD_WORDS[f] ?? f).join(", ")}: cannot be worked out`];
   if (o.showName !== false) lines.unshift(item.label || item.id);
   out.push(...labelAt([14, 0], [1, 0], lines, c, 10.5, { weight: 600 }).map((p, i) => (i === 0 && lines.length > 1 && p.t === "text" ? { ...p, italic: true, weight: 400 as const, color: INK_FAINT } : p)));
   return out;

@@ -2,7 +2,7 @@
 // no worker exists (tests).
 import type { LimitResult } from "@/solver/limit";
 import type { StudyResult } from "@/solver/cases";
-import { runJob, type LimitEverywhere, type OnProgress, type StudyJob, type StudyMessage, type SweepData } from "./run";
+import { runJob, SketchInputError, type LimitEverywhere, type OnProgress, type StudyJob, type StudyMessage, type SweepData } from "./run";
 
 export interface Running<T> {
   promise: Promise<T>;
@@ -77,7 +77,7 @@ export class StudyRunner {
       if (!p) return;
       if ("done" in m) return p.onProgress(m.done, m.total);
       this.pending.delete(m.id);
-      if ("error" in m) p.reject(new Error(m.error));
+      if ("error" in m) p.reject(m.fields ? new SketchInputError(m.fields) : new Error(m.error));
       else p.resolve(m.data);
     });
     // the worker failed to load or died: its jobs will never answer

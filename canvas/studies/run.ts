@@ -20,7 +20,18 @@ export type StudyJob =
   | { kind: "limits"; text: string; spec: EverywhereSpec };
 
 /** What the worker sends back for job `id`: progress, then its data or its error. */
-export type StudyMessage = { id: number; done: number; total: number } | { id: number; data: unknown } | { id: number; error: string };
+export type StudyMessage = { id: number; done: number; total: number } | { id: number; data: unknown } | { id: number; error: string; fields?: FieldError[] };
+
+/**
+ * The sketch a study was asked to run does not parse: its errors by field path, so the page says
+ * them in the form's words ("Inlet p1: needs a mass flow: give mass flow ṁ, …"); the message keeps
+ * the file's paths (where nothing translates it).
+ */
+export class SketchInputError extends Error {
+  constructor(readonly fields: FieldError[]) {
+    super(fields.map((e) => `${e.path}: ${e.message}`).join("; "));
+  }
+}
 
 export interface SweepSpec {
   parameter: string;
@@ -88,7 +99,7 @@ const STATUS_RANK: Record<string, number> = { holds: 0, lifts: 1, tips: 2, unres
 /** Every case and combination; `onProgress` hears the runs done of the total after each one. */
 export function runCases(file: unknown, onProgress: OnProgress = () => {}): StudyResult {
   const p = parseSketch(file);
-  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  if (!p.ok) throw new SketchInputError(p.errors);
   return solveCases(p.file, onProgress);
 }
 
@@ -98,7 +109,7 @@ export function runCases(file: unknown, onProgress: OnProgress = () => {}): Stud
  */
 export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number) => boolean = () => true, chunk = 100): SweepData {
   const p = parseSketch(file);
-  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  if (!p.ok) throw new SketchInputError(p.errors);
   const xs = linspace(spec.from, spec.to, spec.points);
   const sweeper = sweeperOn(p.file, { case: spec.caseId, combination: spec.combinationId }, spec.parameter, p.sketch);
   const data: SweepData = { parameter: spec.parameter, unit: sweeper.unit, quantities: spec.quantities, xs: [], series: spec.quantities.map(() => []), statuses: [], crossings: [], errors: [] };
@@ -171,7 +182,7 @@ export interface LimitSpec {
 
 export function runLimit(file: unknown, spec: LimitSpec): LimitResult {
   const p = parseSketch(file);
-  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  if (!p.ok) throw new SketchInputError(p.errors);
   return findLimitWith(sweeperOn(p.file, { case: spec.caseId, combination: spec.combinationId }, spec.parameter, p.sketch), [spec.from, spec.to], spec.quantity, spec.target);
 }
 
@@ -181,7 +192,7 @@ export type EverywhereSpec = Omit<LimitSpec, "caseId" | "combinationId">;
 /** `limitEverywhere` (solver/studySweep.ts) on a sketch file as JSON or text. */
 export function runLimitEverywhere(file: unknown, spec: EverywhereSpec, onProgress: OnProgress = () => {}): LimitEverywhere[] {
   const p = parseSketch(file);
-  if (!p.ok) throw new Error(p.errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+  if (!p.ok) throw new SketchInputError(p.errors);
   return limitEverywhere(p.file, spec.parameter, [spec.from, spec.to], spec.quantity, spec.target, p.sketch, onProgress);
 }
 

@@ -1,6 +1,6 @@
 // Long studies off the main thread: all cases, a sweep (with progress), the limit finder.
 // The page stops a run by terminating this worker and starting a fresh one.
-import { runJob, type StudyJob, type StudyMessage } from "./run";
+import { runJob, SketchInputError, type StudyJob, type StudyMessage } from "./run";
 
 export type { StudyJob };
 
@@ -12,6 +12,7 @@ scope.onmessage = (e) => {
     const data = runJob(job, (done, total) => scope.postMessage({ id, done, total }));
     scope.postMessage({ id, data });
   } catch (err) {
-    scope.postMessage({ id, error: err instanceof Error ? err.message : String(err) });
+    // a sketch that does not parse: its field errors go too, for the page to say in its own words
+    scope.postMessage({ id, error: err instanceof Error ? err.message : String(err), ...(err instanceof SketchInputError ? { fields: err.fields } : {}) });
   }
 };

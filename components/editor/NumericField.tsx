@@ -10,6 +10,7 @@ import { convert, formatNumber, formatQuantity } from "@/solver/units";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { numericText, toNumeric } from "@/canvas/model/numeric";
 import { suggestUnitsFor } from "@/solver/expressionErrors";
+import { messageInWords } from "@/components/results/errorPlace";
 import { exampleIn, type Display, type Example } from "./fieldDefs";
 import type { LastGood } from "./useCommit";
 import { endVisitHere, INPUT, leaveField } from "./ui";
@@ -86,7 +87,8 @@ export function NumericField({ valueKey, label, value, display, optional, exampl
   const evaluated = useAnalysis((s) => s.fieldValues.values.get(valueKey));
   const evalErrorRaw = useAnalysis((s) => s.fieldValues.errors.get(valueKey));
   // an unknown name's error suggests this field's units (kg, tonne, lb for a mass)
-  const evalError = evalErrorRaw === undefined ? undefined : suggestUnitsFor(evalErrorRaw, display);
+  // in the form's words, units as engineers write them ("kg/m²", not "kg / m^2")
+  const evalError = evalErrorRaw === undefined ? undefined : messageInWords(null, "", suggestUnitsFor(evalErrorRaw, display));
   const refusedBlank = draft === null && left !== null && left.over === value ? left : null;
   const shown = typedText && typedText.value === value ? typedText.text : storedText(value);
   const text = draft ?? (refusedBlank ? "" : shown);

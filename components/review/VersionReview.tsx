@@ -89,7 +89,7 @@ export function VersionCases({ document, units }: { document: SketchFile; units:
       <p className="text-xs text-ink-soft">
         {n} {n === 1 ? "run" : "runs"} (cases and combinations, each solved as its own load set), as saved in this version.
       </p>
-      <CaseTables result={study} units={units} asDrawn={twin?.id} />
+      <CaseTables result={study} units={units} asDrawn={twin?.id} sketch={document} />
     </section>
   );
 }

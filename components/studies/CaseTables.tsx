@@ -3,6 +3,8 @@
 // the envelope, each support's design load, and the factors of safety. The editor's Cases tab and
 // a version's review page show the same tables.
 import type { StudyResult } from "@/solver/cases";
+import type { SketchFile } from "@/solver/schema";
+import { errorInWords } from "@/components/results/errorPlace";
 import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, tiedNames, unsolvedWords, withRunName } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
@@ -27,8 +29,10 @@ export const asDrawnName = (name: string) => `${name}, as drawn`;
  * `asDrawn`: the id of the case whose run is the sketch as drawn over again (`asDrawnTwin`): its
  * factors of safety are the drawing's, so its group says so ("<case name>, as drawn") and the page
  * gives no separate group for the drawing. The reaction tables keep the case's own name.
+ * `sketch`: the sketch the study ran on, so a run that could not be solved names its errors'
+ * places as the editor does.
  */
-export function CaseTables({ result, units, asDrawn }: { result: StudyResult; units: UnitSystem; asDrawn?: string | null }) {
+export function CaseTables({ result, units, asDrawn, sketch = null }: { result: StudyResult; units: UnitSystem; asDrawn?: string | null; sketch?: SketchFile | null }) {
   const unsolved = unsolvedWords(result);
   const twin = asDrawn ? result.runs.find((r) => r.id === asDrawn) : undefined;
   const stability = stabilityTable(twin ? withRunName(result, twin.id, asDrawnName(twin.name)) : result, units);
@@ -45,7 +49,8 @@ export function CaseTables({ result, units, asDrawn }: { result: StudyResult; un
     <>
       {result.runs.filter((r) => !r.ok).map((r) => (
         <p key={r.id} className="text-[12px] text-caution" role="alert">
-          {r.name} could not be solved: {!r.ok && r.errors.map((e) => `${e.path} ${e.message}`).join("; ")}
+          {/* each error at its place in the form's words ("Distributed load wind — w₁ at from: …"), the file's path without the sketch */}
+          {r.name} could not be solved: {!r.ok && r.errors.map((e) => errorInWords(sketch, e)).join("; ")}
         </p>
       ))}
       {excludedWords(result).map((w) => (

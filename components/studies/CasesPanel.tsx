@@ -4,9 +4,9 @@
 // of all of them at once: reactions per case with the governing case, the envelope with each
 // support's design load, and the factors of safety against overturning and sliding.
 import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState } from "react";
-import { asDrawnStudy, caseInputErrors, caseWarnings, loadGroupsOf, type StudyResult } from "@/solver/cases";
+import { asDrawnStudy, caseInputErrors, caseWarnings, loadGroupsOf, NO_UNIT, type StudyResult } from "@/solver/cases";
 import { asDrawnTwin } from "@/solver/report";
-import { errorPlace } from "@/components/results/errorPlace";
+import { errorPlace, messageInWords } from "@/components/results/errorPlace";
 import type { CaseFile, CombinationFile, SketchFile } from "@/solver/schema";
 import type { Command } from "@/canvas/commands/define";
 import { caseRemovalEffects, removeCase, removeCombination, setStudy } from "@/canvas/commands/studies";
@@ -16,6 +16,7 @@ import { BUTTON, HEADING, INPUT, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { combinationWarningWords, formatFactors, formatOverrides, formatTerms, idFromName, parseFactors, parseOverrides, parseTerms, type Parsed } from "./casesText";
 import { asDrawnName, CaseTables } from "./CaseTables";
 import { SideScroll } from "./ReportTable";
+import { studyErrorWords } from "./studyError";
 
 /** Each field's refusal, by its label: reported up so the run waits until they are put right. */
 const FieldErrors = createContext<(label: string, error: string | null) => void>(() => {});
@@ -168,7 +169,11 @@ export function CasesPanel() {
     if (!broken) return r;
     const param = /parameters\.([A-Za-z_]\w*)$/.exec(broken.path)?.[1];
     const where = param ? `${param} = ${r.value[param] ?? ""}` : `${formatOverrides(r.value)} breaks ${errorPlace(sketch, broken.path)}`;
-    return { ok: false, error: `${where}: ${broken.message}` };
+    // "v = 30 has no unit; …" and "v = 30 psi is a pressure, …" read on from the change; any other
+    // message after a colon, in the form's words
+    const message = messageInWords(sketch, broken.path, broken.message);
+    const readsOn = param && (broken.message.startsWith(NO_UNIT) || /^is an? /.test(broken.message));
+    return { ok: false, error: readsOn ? `${where} ${message}` : `${where}: ${message}` };
   };
 
   const addCase = () => {
@@ -193,7 +198,7 @@ export function CasesPanel() {
     const of = sketch;
     job.promise
       .then((result) => setStudyResult({ result, of }))
-      .catch((err) => setError(err instanceof CancelledError ? "Stopped." : err.message))
+      .catch((err) => setError(err instanceof CancelledError ? "Stopped." : studyErrorWords(of, err)))
       .finally(() => {
         setRunning(null);
         setProgress(null);
@@ -401,7 +406,7 @@ export function CasesPanel() {
                 {asDrawnName(study.result.runs.find((r) => r.id === twin)?.name ?? twin)}: this case is the sketch as drawn, so its reactions and factors are the ones the status above gives.
               </p>
             )}
-            <CaseTables result={study.result} units={units} asDrawn={twin} />
+            <CaseTables result={study.result} units={units} asDrawn={twin} sketch={study.of} />
           </div>
         )}
       </div>

@@ -18,6 +18,7 @@ import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { firstReached, reachedAt, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
+import { studyErrorWords } from "./studyError";
 import { defaultLimitQuantity, SweepChart } from "./SweepChart";
 import { invalidStretches } from "./sweepErrors";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, type ParameterValue } from "./sweepRange";
@@ -260,7 +261,7 @@ export function SweepPanel() {
         setEverywhere(null);
         setLimitStopped(false);
       })
-      .catch((err) => setError(err instanceof CancelledError ? "Stopped: nothing plotted." : err.message))
+      .catch((err) => setError(err instanceof CancelledError ? "Stopped: nothing plotted." : studyErrorWords(asRun, err)))
       .finally(() => {
         setProgress(null);
         setCancel(null);
@@ -335,7 +336,7 @@ export function SweepPanel() {
           pName: s.parameter === FLOW_FACTOR ? "flow factor" : s.parameter,
         });
       })
-      .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
+      .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(studyErrorWords(ran?.sketch ?? sketch, err))))
       .finally(() => setSearching(null));
   };
 
@@ -367,7 +368,7 @@ export function SweepPanel() {
         setLimit({ result, label, target: tgt.shown, words });
       })
       // Stop ends every study of this panel at once (they share one worker)
-      .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(err.message)))
+      .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(studyErrorWords(ran?.sketch ?? sketch, err))))
       .finally(() => setSearching(null));
   };
 

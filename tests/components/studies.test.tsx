@@ -178,14 +178,14 @@ describe("Cases tab", () => {
     expect(editor.getState().sketch.cases![0].parameters).toBeUndefined();
   });
 
-  it("a value in the wrong unit is refused at the field, naming what it breaks, and nothing changes", async () => {
+  it("a value in the wrong unit is refused at the field, naming the unit the sketch gives, and nothing changes", async () => {
     const user = userEvent.setup();
     const editor = mount(load("fire-monitor-trailer"));
     await user.click(screen.getByRole("tab", { name: "Cases" }));
     await user.click(screen.getByRole("button", { name: "Add a case" }));
     // Q is the nozzle's volume flow: a pressure cannot stand in for it
     await user.type(screen.getByRole("textbox", { name: /Parameter changes of/ }), "Q = 38 psi{Enter}");
-    expect(screen.getByRole("alert").textContent).toBe("Q = 38 psi breaks Outlet monitor nozzle — volume flow: 38 psi is a pressure (Pa), but this field needs a volume flow (m³/s)");
+    expect(screen.getByRole("alert").textContent).toBe("Q = 38 psi is a pressure, but the sketch gives Q in gpm, a volume flow");
     expect(editor.getState().sketch.cases![0].parameters).toBeUndefined();
     expect(screen.getByRole("button", { name: "Run all cases" })).toBeDisabled();
   });
