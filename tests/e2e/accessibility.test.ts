@@ -84,9 +84,11 @@ describe("main screens meet WCAG 2.1 AA (no serious or critical axe findings)", 
     await page.getByTestId("sketch-canvas").locator("canvas").first().waitFor();
     await page.getByTestId("status-sentence").first().waitFor();
     await expectAccessible(page, "editor");
-    // the drawing has a name and points to its text alternative: the element list
+    // the drawing has a name and points to its text alternatives: what is drawn and the result in
+    // words, then the element list
     const canvas = page.getByRole("application", { name: "Drawing of the free-body diagram" });
-    expect(await canvas.getAttribute("aria-describedby")).toBe("canvas-alt canvas-help");
+    expect(await canvas.getAttribute("aria-describedby")).toBe("canvas-summary canvas-alt canvas-help");
+    await expect.poll(() => page.locator("#canvas-summary").textContent()).toMatch(/^Body skid \(Pump skid\), with Contact rear \(rear bearer\), .*Result: /);
     expect(await page.locator("#canvas-alt").textContent()).toContain("listed under Elements");
     await page.getByRole("list", { name: "Elements of the sketch" }).getByRole("button", { name: "Body skid, Pump skid" }).waitFor();
   });
