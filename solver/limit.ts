@@ -185,6 +185,51 @@ export function findLimitWith(
   }
 }
 
+/**
+ * Where a body starts to tip as the parameter goes from `range[0]` to `range[1]` (either way): no
+ * set of its one-sided reactions holds it (`status` "tips"). The range is sampled and each change
+ * into tipping bisected to the tolerance; a range that starts with the body tipping counts its
+ * start. The crossings are ascending, as `findLimitWith`'s. Not found, `min`/`max` say what it
+ * did throughout: 1 held (or lifted clear), −1 tipping, NaN nowhere solved (a margin's sign).
+ */
+export function findTippingWith(sweeper: Sweeper, range: readonly [number, number], body: string, options: LimitOptions = {}): LimitResult {
+  const [from, to] = range;
+  const samples = Math.max(2, options.samples ?? 64);
+  const tol = options.tolerance ?? limitTolerance([from, to]);
+  let iterations = 0;
+  /** true: tips; false: held; null: not solved there */
+  const tips = (x: number): boolean | null => {
+    iterations++;
+    const p = sweeper.at(x);
+    if (!p.ok || !p.result.bodies[body]) return null;
+    return p.result.bodies[body].status === "tips";
+  };
+  try {
+    const xs = Array.from({ length: samples + 1 }, (_, i) => from + ((to - from) * i) / samples);
+    const st = xs.map(tips);
+    const entries: number[] = [];
+    if (st[0] === true) entries.push(from);
+    for (let i = 0; i < samples; i++) {
+      if (st[i] !== false || st[i + 1] !== true) continue;
+      // held at a, tipping at b: the first point going from a towards b where it tips
+      let a = xs[i];
+      let b = xs[i + 1];
+      while (Math.abs(b - a) > tol) {
+        const m = (a + b) / 2;
+        if (tips(m) === true) b = m;
+        else a = m;
+      }
+      entries.push(b);
+    }
+    if (entries.length) return { found: true, value: Math.min(...entries), unit: sweeper.unit, crossings: [...entries].sort((u, v) => u - v), iterations, tolerance: tol };
+    const solved = st.filter((v) => v !== null);
+    const sign = !solved.length ? Number.NaN : solved.every((v) => v) ? -1 : 1;
+    return { found: false, unit: sweeper.unit, reason: solved.length ? "no crossing in this range: the body does not start to tip" : "no crossing in this range: the quantity is undefined there", min: sign, max: sign };
+  } finally {
+    sweeper.restore();
+  }
+}
+
 /** The search's tolerance on the parameter over a range, unless one is given: a billionth of the range. */
 export function limitTolerance(range: readonly [number, number]): number {
   return Math.max(1e-12, 1e-9 * (Math.abs(range[1] - range[0]) || 1));

@@ -48,7 +48,7 @@ import {
 import { fieldWords } from "@/components/editor/fieldDefs";
 import { KIND_LABEL, type ElementKind } from "@/canvas/model/elements";
 import { lineChartSvg } from "./chart";
-import { sweepCharts, sweepEverywhere, sweepQuantities } from "./sweeps";
+import { sweepCharts, sweepLimitTable } from "./sweeps";
 import { registerFonts } from "./fonts";
 import { drawTable, tableLeadHeight, type DrawTableOptions } from "./table";
 import { checkRecord, type CheckRecordInput } from "./record";
@@ -311,10 +311,19 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       // where a plotted contact is off the ground (a tie slack), or a friction margin is left out
       // because its body is not held: the gaps in the lines, in the Sweep tab's words
       for (const line of states) para(line, 8.5, INK);
-      for (const line of sweepEverywhere(parsed.file, sw, sweepQuantities(sw, Object.keys(result.reactions)))) para(`${line}.`, 8.5, INK);
-      // said of the plotted run only: another case may cross (the line above names each)
+      // said of the plotted run only: another case may cross (the table below names each)
       const plotted = combination ? `combination ${combination.name}` : caseName ? `case ${caseName}` : "the sketch as drawn";
       if (!markers.length && charts.some((c) => c.series.some((se) => se.markZero))) para(`No crossing in this range for ${plotted}: none of the plotted margins reaches zero.`, 8.5, INK);
+      // every limit (lift-off, slack, slip) searched in every run the sweep covers, reached or not:
+      // the numbers of the editor's "In every case"
+      const limits = sweepLimitTable(parsed.file, sw);
+      if (limits.table.rows.length) {
+        // the heading kept with the sentence under it and the table's first rows
+        const said = doc.font("Inter").fontSize(8.5).heightOfString(limits.summary, { width, features: PROSE_FEATURES });
+        heading(`Limits in every case — sweep of ${parameterWords(sw.parameter)}`, HEADING_ROOM + said + tableLeadHeight(doc, limits.table, width, { groupBy: "limit" }));
+        para(limits.summary, 8.5, INK);
+        drawTable(doc, limits.table, left, width, { groupBy: "limit" });
+      } else para(limits.summary, 8.5, INK);
     } catch (err) {
       para(`This sweep could not be run: ${(err as Error).message}`, 8.5, ACCENT);
     }

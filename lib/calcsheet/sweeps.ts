@@ -6,11 +6,12 @@
 // ground or its body is not held, and the sheet says where, in the tab's words.
 import { displayKind, displayUnit, largestByKind, marksZero, parameterWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { runSweep } from "@/canvas/studies/run";
-import { findLimitWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
+import { findLimitWith, findTippingWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
 import { describeQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
-import { firstReached, limitEverywhere, reachedAt, sweeperOn } from "@/solver/studySweep";
+import { firstReached, limitEverywhere, reachedAt, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
+import type { Cell, Table } from "@/solver/report";
 import { convert, formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import type { ChartSpec } from "./chart";
 
@@ -143,4 +144,190 @@ export function sweepCharts(
     };
   });
   return { charts, markers, states };
+}
+
+/** "A", "A and B", "A, B and C" */
+const andWords = (xs: string[]): string => (xs.length < 2 ? (xs[0] ?? "") : `${xs.slice(0, -1).join(", ")} and ${xs[xs.length - 1]}`);
+
+/** One limit of a kept sweep searched in one run: where it is first reached, or why it is not. */
+export interface SweepLimitRow {
+  /** the run searched: a case, a combination, or the sketch as drawn */
+  run: LimitEverywhere;
+  /** the support whose margin it is, and what reaching zero means there */
+  quantity: QuantitySpec;
+  limit: string;
+  /** what being past the limit is called ("lifted", "slack", "slipping") */
+  past: string;
+  /** where it is first reached going from the sweep's start, in the parameter's unit */
+  value?: number;
+  /** more crossings after the first, in the range */
+  more: number;
+  /** the margin stays below zero over the whole range: past the limit all along */
+  pastThroughout: boolean;
+  /** first of its limit among the runs (a tie: each) */
+  first: boolean;
+  /** first of every limit in every run: it governs the sweep's range (a tie: each) */
+  governs: boolean;
+}
+
+/**
+ * Every limit a kept sweep can meet, searched in every run it covers: each one-sided support's
+ * margin (a contact lifting off, a tie going slack, where the body may start to tip) and each
+ * contact with a μ (friction used up), in the sweep's own run and in every case and combination
+ * the editor's "In every case" searches — the same `limitEverywhere`, so the same numbers. A limit
+ * never reached is a row too: a checker reads that it was searched and found nowhere in the range.
+ */
+export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLimitRow[]; unit: string; tolerance: number } {
+  const names = elementNames(file);
+  const limits: Array<{ q: QuantitySpec; limit: string; past: string }> = [];
+  for (const s of file.supports) {
+    if (s.kind !== "contact" && s.kind !== "tie") continue;
+    const event = crossingEvent({ support: s.id, component: "margin" }, s.kind);
+    limits.push({ q: { support: s.id, component: "margin" }, limit: `${names[s.id] ?? s.id}: ${event.noun} (${s.kind === "tie" ? "tension" : "n"} = 0)`, past: event.past });
+  }
+  for (const s of file.supports) {
+    if (s.kind !== "contact" || s.mu === undefined) continue;
+    limits.push({ q: { support: s.id, component: "frictionMargin" }, limit: `${names[s.id] ?? s.id}: slip (μ·n − |t| = 0)`, past: "slipping" });
+  }
+  // a body on contacts or ties may tip: where no set of its one-sided reactions holds it
+  const tipping = [...new Set(file.supports.filter((s) => s.kind === "contact" || s.kind === "tie").map((s) => s.body))].map((b) => ({ body: b, limit: `${names[b] ?? b}: tips (not held)` }));
+  const range: [number, number] = [sw.from, sw.to];
+  // the sweep's own run, when "In every case" does not search it (the sketch as drawn beside its
+  // cases, or a case solved only in combinations)
+  const ownId = sw.combination ?? sw.case ?? "";
+  const everywhereIds = new Set([...(file.cases ?? []).filter((c) => !c.onlyInCombinations).map((c) => c.id), ...(file.combinations ?? []).map((k) => k.id)]);
+  const hasRuns = everywhereIds.size > 0;
+  const ownMissing = hasRuns ? !everywhereIds.has(ownId) : ownId !== "";
+  const own = (): Omit<LimitEverywhere, "result"> =>
+    sw.combination
+      ? { id: sw.combination, name: file.combinations?.find((k) => k.id === sw.combination)?.name ?? sw.combination, kind: "combination" }
+      : sw.case
+        ? { id: sw.case, name: file.cases?.find((c) => c.id === sw.case)?.name ?? sw.case, kind: "case" }
+        : { id: "", name: "As drawn", kind: "as drawn" };
+  let unit = "";
+  let tolerance = limitTolerance(range);
+  const rows: SweepLimitRow[] = [];
+  const all: LimitEverywhere[] = [];
+  for (const { q, limit, past } of limits) {
+    const runs: LimitEverywhere[] = [];
+    if (ownMissing) {
+      let result: LimitEverywhere["result"];
+      try {
+        result = findLimitWith(sweeperOn(file, { case: sw.case, combination: sw.combination }, sw.parameter), range, q);
+      } catch (err) {
+        result = { error: (err as Error).message };
+      }
+      runs.push({ ...own(), result });
+    }
+    // a sketch whose cases are all for combinations, with none: only the sweep's own run
+    if (hasRuns || !ownMissing) runs.push(...limitEverywhere(file, sw.parameter, range, q));
+    const first = firstReached(runs, sw.from, sw.to);
+    for (const run of runs) {
+      const r = run.result;
+      if ("unit" in r) unit = r.unit;
+      if ("found" in r && r.found && r.tolerance) tolerance = r.tolerance;
+      const value = reachedAt(r, sw.from, sw.to);
+      const crossings = "found" in r && r.found ? r.crossings.length : 0;
+      rows.push({ run, quantity: q, limit, past, value, more: Math.max(0, crossings - 1), pastThroughout: "found" in r && !r.found && r.max < 0, first: !!first?.tied.includes(run), governs: false });
+      all.push(run);
+    }
+  }
+  // tipping, in the same runs as the margins (the order "In every case" searches them)
+  const searched: Array<Omit<LimitEverywhere, "result"> & { on: { case?: string; combination?: string } }> = [
+    ...(ownMissing ? [{ ...own(), on: { case: sw.case, combination: sw.combination } }] : []),
+    ...(hasRuns
+      ? [
+          ...(file.cases ?? []).filter((c) => !c.onlyInCombinations).map((c) => ({ id: c.id, name: c.name, kind: "case" as const, on: { case: c.id } })),
+          ...(file.combinations ?? []).map((k) => ({ id: k.id, name: k.name, kind: "combination" as const, on: { combination: k.id } })),
+        ]
+      : ownMissing
+        ? []
+        : [{ id: "", name: "As drawn", kind: "as drawn" as const, on: {} }]),
+  ];
+  for (const { body, limit } of tipping) {
+    const runs = searched.map(({ on, ...run }): LimitEverywhere => {
+      try {
+        return { ...run, result: findTippingWith(sweeperOn(file, on, sw.parameter), range, body) };
+      } catch (err) {
+        return { ...run, result: { error: (err as Error).message } };
+      }
+    });
+    const first = firstReached(runs, sw.from, sw.to);
+    for (const run of runs) {
+      const r = run.result;
+      const value = reachedAt(r, sw.from, sw.to);
+      const crossings = "found" in r && r.found ? r.crossings.length : 0;
+      rows.push({ run, quantity: { support: body, component: "margin" }, limit, past: "tipping", value, more: Math.max(0, crossings - 1), pastThroughout: false, first: !!first?.tied.includes(run), governs: false });
+      all.push(run);
+    }
+  }
+  // the first of every limit: what governs over the sweep's range (every row at that value, a tie)
+  const governing = firstReached(all, sw.from, sw.to);
+  for (const row of rows) row.governs = !!governing?.tied.includes(row.run);
+  return { rows, unit, tolerance };
+}
+
+/**
+ * The calc sheet's table of a kept sweep's limits (`sweepLimitRows`): grouped by limit, a row for
+ * each run, with where the limit is first reached, or "none in 0 … 80 deg". The one that governs is
+ * marked ◆ and said in words, the first of each other limit ◇, so the mark is never colour alone.
+ */
+export function sweepLimitTable(file: SketchFile, sw: SweepFile): { table: Table; summary: string } {
+  const { rows, unit, tolerance } = sweepLimitRows(file, sw);
+  const ownId = sw.combination ?? sw.case ?? "";
+  const u = unit ? ` ${prettyUnit(unit)}` : "";
+  const span = `${formatNumber(sw.from, 6)} … ${formatNumber(sw.to, 6)}${u}`;
+  const p = parameterWords(sw.parameter);
+  const governing = rows.filter((r) => r.governs);
+  const marks: Table["marks"] = [];
+  const cells = rows.map((r): Cell[] => {
+    const res = r.run.result;
+    let value: Cell;
+    let note: string;
+    if ("error" in res) {
+      value = "not solved";
+      note = res.error;
+    } else if (r.value === undefined) {
+      value = `none in ${span}`;
+      note = r.pastThroughout ? `past it throughout: ${r.past} over the whole range (the margin stays below zero)` : "";
+    } else {
+      value = r.value;
+      const bits = [
+        r.governs ? (governing.length > 1 ? "governs (first, a tie)" : "governs: reached first of all") : r.first ? "first of this limit" : "",
+        r.value === sw.from ? "already at the range's start" : "",
+        r.more ? `reached ${r.more} more time${r.more > 1 ? "s" : ""} in the range` : "",
+      ];
+      note = bits.filter(Boolean).join("; ");
+    }
+    marks.push(r.governs ? { value: { symbol: "◆", text: "governs: the first limit reached over the sweep's range" } } : r.first && r.value !== undefined ? { value: { symbol: "◇", text: "the first run to reach this limit" } } : undefined);
+    // the run plotted above, so the chart and its row are read together
+    const plotted = r.run.id === ownId && (r.run.kind === "combination") === !!sw.combination ? " (plotted)" : "";
+    return [r.limit, `${r.run.kind === "as drawn" ? "As drawn" : r.run.name}${plotted}`, value, note];
+  });
+  const reached = rows.map((r) => r.value).filter((x): x is number => x !== undefined);
+  const table: Table = {
+    id: `sweep-limits-${sw.id}`,
+    title: `Limits searched — ${p}`,
+    columns: [
+      { key: "limit", label: "Limit", align: "left" },
+      { key: "run", label: "Case or combination", align: "left" },
+      { key: "value", label: `${p} where first reached`, unit: unit ? prettyUnit(unit) : undefined, align: "right" },
+      { key: "note", label: "Note", align: "left" },
+    ],
+    rows: cells,
+    marks,
+    figures: 4,
+    notes: [
+      `Each limit searched by the limit finder over ${span} in every run listed (${limitPrecisionWords(tolerance, unit, reached)}); from ${formatNumber(sw.from, 6)}${u}, the first crossing is given. ◆\u00a0governs: the limit reached first of all; ◇\u00a0the first run to reach each other limit.`,
+    ],
+  };
+  // a tie said once, at its value: each limit with the runs that reach it there
+  const runWords = (r: SweepLimitRow) => (r.run.kind === "as drawn" ? "the sketch as drawn" : r.run.name);
+  const tiedLimits = [...new Set(governing.map((r) => r.limit))].map((l) => `${l} in ${andWords(governing.filter((r) => r.limit === l).map(runWords))}`);
+  const summary = governing.length
+    ? `Governs over ${span}: ${governing.length > 1 ? `a tie at ${p} = ${limitWithUnit(governing[0].value!, unit)}: ${tiedLimits.join("; ")}` : `${tiedLimits[0]} at ${p} = ${limitWithUnit(governing[0].value!, unit)}`}.`
+    : rows.length
+      ? `No limit is reached in ${span} in any run searched: ${rows.some((r) => r.pastThroughout) ? "each is either past throughout or not reached (see the notes)" : "every contact stays in bearing, every tie taut and every friction margin above zero"}.`
+      : "The sketch has no contact or tie: no limit to search.";
+  return { table, summary };
 }

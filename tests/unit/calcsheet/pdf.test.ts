@@ -174,7 +174,16 @@ describe("calc sheet PDF", () => {
     expect(text).toMatch(/Crossing: upwind edge: lift-off \(its normal force reaches zero\) at v = 35\.38 m\/s/);
     // and in every case and combination, the factored uplift check first (v_lift·√(0.9 / 1.5) = 27.41 m/s:
     // tests/unit/studies/exhaust-stack-example.test.ts)
-    expect(text).toMatch(/upwind edge lift-off in each case and combination: Engine running, 30 m\/s wind — 36\.8\d? m\/s; Engine stopped, 30 m\/s wind — 35\.38 m\/s; .*Uplift check: 0\.9 × weight \+ 1\.5 × wind — 27\.41 m\/s \(first\); each to 4 significant figures\./);
+    // as a table of every limit in every run, reached or not: the rows as printed
+    const limits = text.slice(text.indexOf("Limits in every case — sweep of v"));
+    expect(limits).toMatch(
+      /Limit: upwind edge: lift-off \(n = 0\) Engine running, 30 m\/s wind 36\.8\d? Engine stopped, 30 m\/s wind \(plotted\) 35\.38 Engine stopped, 38 m\/s storm 35\.38 Uplift check: 0\.9 × weight \+ 1\.5 × wind ◇\s?27\.41 first of this limit/,
+    );
+    expect(limits).toMatch(/Limit: downwind edge: lift-off \(n = 0\) Engine running, 30 m\/s wind none in 20 … 45 m\/s Engine stopped, 30 m\/s wind \(plotted\) none in 20 … 45 m\/s/);
+    // the friction at the upwind edge is used up first, in the factored uplift check: it governs
+    expect(limits).toContain("Governs over 20 … 45 m/s: upwind edge: slip (μ·n − |t| = 0) in Uplift check: 0.9 × weight + 1.5 × wind at v = 21.70 m/s.");
+    expect(limits).toMatch(/Uplift check: 0\.9 × weight \+ 1\.5 × wind ◆\s?21\.70 governs: reached first of all/);
+    expect(limits).toMatch(/Limit: Stack on skid: tips \(not held\)/);
   }, 60000);
 
   it("prints a support-moment column only when a fixed support can carry a moment, zeros included", async () => {
