@@ -1,19 +1,21 @@
 "use client";
 // The sweeps a version keeps for its calc sheet, plotted on its page as the editor plots them, with
-// where each margin reaches zero (the limit finder's value), in its own run and in every case and
-// combination, and where a plotted contact is off the ground (in the Sweep tab's and the calc
-// sheet's words): a checker reads them without the PDF.
+// where each margin reaches zero (the limit finder's value), where a plotted contact is off the
+// ground (in the Sweep tab's words), and the calc sheet's table of every limit searched in every
+// case and combination: a checker reads them without the PDF.
 import { useMemo } from "react";
 import { runSweep, type SweepData } from "@/canvas/studies/run";
 import { sweepStateLines } from "@/canvas/studies/display";
-import { MAX_POINTS, sweepEverywhere, sweepMarkers, sweepQuantities, type SweepMarker } from "@/lib/calcsheet/sweeps";
+import { MAX_POINTS, sweepLimitTable, sweepMarkers, sweepQuantities, type SweepMarker } from "@/lib/calcsheet/sweeps";
 import type { SketchFile, SweepFile } from "@/solver/schema";
+import type { Table } from "@/solver/report";
 import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { SweepChart } from "@/components/studies/SweepChart";
+import { ReportTable } from "@/components/studies/ReportTable";
 
-type Plotted = { sw: SweepFile; data: SweepData; markers: SweepMarker[]; everywhere: string[] } | { sw: SweepFile; error: string };
+type Plotted = { sw: SweepFile; data: SweepData; markers: SweepMarker[]; everywhere: { table: Table; summary: string } } | { sw: SweepFile; error: string };
 
 function onWords(doc: SketchFile, sw: SweepFile): string {
   if (sw.combination) return `combination ${doc.combinations?.find((k) => k.id === sw.combination)?.name ?? sw.combination}`;
@@ -29,7 +31,7 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
         try {
           const quantities = sweepQuantities(sw, document.supports.map((s) => s.id));
           const data = runSweep(document, { parameter: sw.parameter, from: sw.from, to: sw.to, points: Math.min(sw.points, MAX_POINTS), caseId: sw.case, combinationId: sw.combination, quantities });
-          return { sw, data, markers: sweepMarkers(document, sw, quantities), everywhere: sweepEverywhere(document, sw, quantities) };
+          return { sw, data, markers: sweepMarkers(document, sw, quantities), everywhere: sweepLimitTable(document, sw) };
         } catch (err) {
           return { sw, error: (err as Error).message };
         }
@@ -67,10 +69,11 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
                       {l.words}
                     </li>
                   ))}
-                  {p.everywhere.map((line) => (
-                    <li key={line}>{line}.</li>
-                  ))}
                 </ul>
+                <p className="text-xs text-ink-soft" data-testid="sweep-limits-summary">
+                  {p.everywhere.summary}
+                </p>
+                <ReportTable table={p.everywhere.table} fileName={`sweep-${p.sw.id}-limits`} testId="sweep-limits" />
               </>
             )}
           </figure>

@@ -30,15 +30,19 @@ describe("a version's kept sweeps", () => {
     // factored: 1.5 × the wind against 0.9 × the weight, v = v_lift·√(0.9 / 1.5) (statics, common practice)
     expect(figures[1].textContent).toContain(`Crossing: upwind edge: lift-off (its normal force reaches zero) at v = ${formatLimit(vLift * Math.sqrt(0.6))} m/s (to 4 significant figures).`);
     expect(within(figures[0]).getByTestId("sweep-chart")).toBeTruthy();
-    // and in every case and combination: the factored uplift check gets there first (no line for
-    // the downwind friction margin, which reaches zero in none of them)
-    const v = (x: number) => `${formatLimit(x)} m/s`;
+    // and in every case and combination, as the calc sheet's table: each run's first lift-off of the
+    // upwind edge, the factored uplift check's first of them, v_lift·√(0.6) (statics, common practice)
     const running = runLimit(doc, { parameter: "v", from: 20, to: 45, caseId: "running", quantity: { support: "upwind", component: "margin" }, target: 0 });
     if (!running.found) throw new Error("expected a crossing");
-    expect(figures[0].textContent).toContain(
-      `upwind edge lift-off in each case and combination: Engine running, 30 m/s wind — ${v(running.value)}; Engine stopped, 30 m/s wind — ${v(vLift)}; Engine stopped, 38 m/s storm — ${v(vLift)}; Uplift check: 0.9 × weight + 1.5 × wind — ${v(vLift * Math.sqrt(0.6))} (first); each to 4 significant figures.`,
-    );
-    expect(figures[0].textContent).not.toContain("downwind slip");
+    const limits = within(figures[0]).getByTestId("sweep-limits");
+    const rows = within(limits).getAllByRole("row").map((r) => r.textContent ?? "");
+    const row = (limit: string, run: string) => rows.find((r) => r.startsWith(limit) && r.includes(run)) ?? "";
+    expect(row("upwind edge: lift-off", "Engine running")).toContain(formatLimit(running.value));
+    expect(row("upwind edge: lift-off", "Engine stopped, 30 m/s wind (plotted)")).toContain(formatLimit(vLift));
+    expect(row("upwind edge: lift-off", "Uplift check")).toMatch(new RegExp(`${formatLimit(vLift * Math.sqrt(0.6)).replace(".", "\\.")}.*first of this limit`));
+    // the downwind edge stays down in every run: said, not left out
+    expect(row("downwind edge: lift-off", "Engine running")).toContain("none in 20 … 45 m/s");
+    expect(within(figures[0]).getByTestId("sweep-limits-summary").textContent).toMatch(/^Governs over 20 … 45 m\/s: upwind edge: slip \(μ·n − \|t\| = 0\) in Uplift check: 0\.9 × weight \+ 1\.5 × wind at v = \d+\.\d+ m\/s\.$/);
   });
 
   it("says where a plotted contact is off the ground and its friction margin is left out, as the Sweep tab and the calc sheet do", () => {
