@@ -3,7 +3,7 @@
 // factored load set, as the case table solves it (solver/cases.ts): each of its cases takes the
 // swept value, its load set is built, and the sets are added with their factors before the one
 // solve — never the results of the cases.
-import { caseSketch, combineModels } from "./cases";
+import { caseInputErrors, caseSketch, combineModels } from "./cases";
 import { planOf, resolveFile } from "./parse";
 import type { SketchFile } from "./schema";
 import { prepare, solveModels } from "./solve";
@@ -20,16 +20,50 @@ export interface SweepOn {
 
 const listed = (what: string, ids: string[]) => (ids.length ? ` (${what}: ${ids.join(", ")})` : "");
 
-function failed(errors: FieldError[]): Error {
-  return new Error(errors.map((e) => `${e.path}: ${e.message}`).join("; "));
+/**
+ * A sketch (or a case's or combination's variant of it) that does not read: its errors by field
+ * path, so a page can say them in the form's words ("Case Storm — change of v: has no unit; …").
+ * The message keeps the file's paths, for the CLI and wherever nothing translates it. `on`: what
+ * was being run when it is not the sketch as drawn ("case Storm", "combination Gusts").
+ */
+export class SketchInputError extends Error {
+  constructor(
+    readonly fields: FieldError[],
+    readonly on?: string,
+  ) {
+    super(fields.map((e) => `${e.path}: ${e.message}`).join("; "));
+  }
 }
 
-/** The numeric sketch of one case (its parameter overrides, its factors and flow factor). */
-export function sketchOfCase(file: SketchFile, caseId: string): Sketch {
-  const c = file.cases?.find((x) => x.id === caseId);
-  if (!c) throw new Error(`case: there is no case "${caseId}"${listed("cases", (file.cases ?? []).map((x) => x.id))}`);
+function failed(errors: FieldError[], on?: string): SketchInputError {
+  return new SketchInputError(errors, on);
+}
+
+/** A case's variant that does not read: what its changes break, the change itself first (a value
+ *  typed without its unit, in a unit of another kind), as the Cases tab says it. */
+function caseFailed(file: SketchFile, c: CaseFile, errors: FieldError[]): SketchInputError {
+  const said = caseInputErrors(file, c);
+  return failed(said.length ? said : errors, `case ${c.name}`);
+}
+
+type CaseFile = NonNullable<SketchFile["cases"]>[number];
+
+/** A case without its own value of the swept parameter: every point sets it, so the case's value
+ *  stands for nothing (and one typed without its unit must not stop the sweep). */
+function withoutSwept(c: CaseFile, parameter?: string): CaseFile {
+  if (!parameter || !c.parameters || !(parameter in c.parameters)) return c;
+  const { [parameter]: _swept, ...rest } = c.parameters;
+  return { ...c, parameters: rest };
+}
+
+/** The numeric sketch of one case (its parameter overrides, its factors and flow factor);
+ *  `swept`: a parameter the sweep sets at each point, whose value in the case is left out. */
+export function sketchOfCase(file: SketchFile, caseId: string, swept?: string): Sketch {
+  const found = file.cases?.find((x) => x.id === caseId);
+  if (!found) throw new Error(`case: there is no case "${caseId}"${listed("cases", (file.cases ?? []).map((x) => x.id))}`);
+  const c = withoutSwept(found, swept);
   const cs = caseSketch(file, c);
-  if (!cs.ok) throw failed(cs.errors);
+  if (!cs.ok) throw caseFailed(file, c, cs.errors);
   return cs.sketch;
 }
 
@@ -54,7 +88,7 @@ function drawnUnit(file: SketchFile, parameter: string, asDrawn?: Sketch): strin
  */
 export function sweeperOn(file: SketchFile, on: SweepOn, parameter: string, asDrawn?: Sketch): Sweeper {
   if (on.case && on.combination) throw new Error("a sweep runs on a case or on a combination, not both");
-  if (on.case) return createSweeper(sketchOfCase(file, on.case), parameter, drawnUnit(file, parameter, asDrawn));
+  if (on.case) return createSweeper(sketchOfCase(file, on.case, parameter), parameter, drawnUnit(file, parameter, asDrawn));
   if (!on.combination) {
     if (asDrawn) return createSweeper(asDrawn, parameter);
     const r = resolveFile(file);
@@ -67,10 +101,11 @@ export function sweeperOn(file: SketchFile, on: SweepOn, parameter: string, asDr
   const cases = k.terms.map((t) => file.cases?.find((c) => c.id === t.case));
   const missing = k.terms.filter((_, i) => !cases[i]).map((t) => t.case);
   if (missing.length) throw new Error(`combination ${k.id}: names case ${missing.join(", ")}, which does not exist`);
-  const parts = cases.map((c) => {
-    const cs = caseSketch(file, c!);
-    if (!cs.ok) throw failed(cs.errors);
-    return { name: c!.name, setter: createSetter(cs.sketch, parameter), warnings: cs.warnings };
+  const parts = cases.map((found) => {
+    const c = withoutSwept(found!, parameter);
+    const cs = caseSketch(file, c);
+    if (!cs.ok) throw caseFailed(file, c, cs.errors);
+    return { name: c.name, setter: createSetter(cs.sketch, parameter), warnings: cs.warnings };
   });
   const setters: ParameterSetter[] = parts.map((p) => p.setter);
   const unit = drawnUnit(file, parameter, asDrawn) ?? parts[0].setter.unit;
@@ -105,7 +140,8 @@ export interface LimitEverywhere {
   id: string;
   name: string;
   kind: "case" | "combination" | "as drawn";
-  result: LimitResult | { error: string };
+  /** `fields`: the input errors by field path when the run's sketch does not read */
+  result: LimitResult | { error: string; fields?: FieldError[] };
 }
 
 /**
@@ -139,7 +175,7 @@ export function limitEverywhere(
     try {
       result = findLimitWith(sweeperOn(file, on, parameter, asDrawn), range, quantity, target);
     } catch (err) {
-      result = { error: (err as Error).message };
+      result = { error: (err as Error).message, ...(err instanceof SketchInputError ? { fields: err.fields } : {}) };
     }
     onProgress(i + 1, runs.length);
     return { ...run, result };

@@ -77,7 +77,7 @@ export class StudyRunner {
       if (!p) return;
       if ("done" in m) return p.onProgress(m.done, m.total);
       this.pending.delete(m.id);
-      if ("error" in m) p.reject(m.fields ? new SketchInputError(m.fields) : new Error(m.error));
+      if ("error" in m) p.reject(m.fields ? new SketchInputError(m.fields, m.on) : new Error(m.error));
       else p.resolve(m.data);
     });
     // the worker failed to load or died: its jobs will never answer

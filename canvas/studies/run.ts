@@ -4,8 +4,8 @@ import { findLimitWith, type LimitResult } from "@/solver/limit";
 import { parseSketch } from "@/solver/parse";
 import type { QuantitySpec } from "@/solver/quantity";
 import { linspace, supportBodyHeld, supportOff, sweptQuantity } from "@/solver/sweep";
-import { limitEverywhere, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
-export { firstReached, reachedAt, type LimitEverywhere } from "@/solver/studySweep";
+import { limitEverywhere, SketchInputError, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
+export { firstReached, reachedAt, SketchInputError, type LimitEverywhere } from "@/solver/studySweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
 import type { FieldError } from "@/solver/types";
 import { marksZero } from "./display";
@@ -20,18 +20,11 @@ export type StudyJob =
   | { kind: "limits"; text: string; spec: EverywhereSpec };
 
 /** What the worker sends back for job `id`: progress, then its data or its error. */
-export type StudyMessage = { id: number; done: number; total: number } | { id: number; data: unknown } | { id: number; error: string; fields?: FieldError[] };
+export type StudyMessage = { id: number; done: number; total: number } | { id: number; data: unknown } | { id: number; error: string; fields?: FieldError[]; on?: string };
 
-/**
- * The sketch a study was asked to run does not parse: its errors by field path, so the page says
- * them in the form's words ("Inlet p1: needs a mass flow: give mass flow ṁ, …"); the message keeps
- * the file's paths (where nothing translates it).
- */
-export class SketchInputError extends Error {
-  constructor(readonly fields: FieldError[]) {
-    super(fields.map((e) => `${e.path}: ${e.message}`).join("; "));
-  }
-}
+// `SketchInputError` (solver/studySweep.ts): the sketch a study was asked to run, or the case or
+// combination it runs on, does not read: its errors by field path, so the page says them in the
+// form's words ("Inlet p1: needs a mass flow: give mass flow ṁ, …").
 
 export interface SweepSpec {
   parameter: string;

@@ -13,6 +13,6 @@ scope.onmessage = (e) => {
     scope.postMessage({ id, data });
   } catch (err) {
     // a sketch that does not parse: its field errors go too, for the page to say in its own words
-    scope.postMessage({ id, error: err instanceof Error ? err.message : String(err), ...(err instanceof SketchInputError ? { fields: err.fields } : {}) });
+    scope.postMessage({ id, error: err instanceof Error ? err.message : String(err), ...(err instanceof SketchInputError ? { fields: err.fields, ...(err.on ? { on: err.on } : {}) } : {}) });
   }
 };

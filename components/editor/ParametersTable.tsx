@@ -1,12 +1,16 @@
 "use client";
 // Parameters: named values every expression may use ("theta", "rho", "Q"). Name, expression, value.
-import { useId, useState } from "react";
+import { useDeferredValue, useId, useMemo, useState } from "react";
 import { evaluateToNumber, reservedNameReason, type FieldKind } from "@/solver/expressions";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { deleteParameter, renameParameter, setParameter } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
 import { numericText, toNumeric } from "@/canvas/model/numeric";
 import { formatNumber, formatQuantity, prettyUnit, type Quantity, type UnitSystem } from "@/solver/units";
+import { parseSketch } from "@/solver/parse";
+import { NO_UNIT } from "@/solver/cases";
+import type { SketchFile } from "@/solver/schema";
+import type { FieldError } from "@/solver/types";
 import { BUTTON, HEADING, ICON_BUTTON, INPUT } from "./ui";
 
 const NAME = /^[A-Za-z_][A-Za-z0-9_]*$/;
@@ -47,6 +51,47 @@ export function readableValue(value: number, unit: string, units: UnitSystem): s
   return `${formatNumber(value)} ${prettyUnit(unit)}`;
 }
 
+/** A plain number as typed: "30", "-2.5", "1e3" (no unit, no name, no operation). */
+const PLAIN_NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?$/i;
+
+/** The kinds a bare parameter may have been meant as, each with its SI unit as one types it. */
+const MEANT_AS: Array<[string, string]> = [
+  ["a speed", "m/s"], ["a length", "m"], ["a mass", "kg"], ["a force", "N"], ["a pressure", "Pa"], ["a mass flow", "kg/s"],
+  ["a volume flow", "m^3/s"], ["an area", "m^2"], ["a density", "kg/m^3"], ["a load per length", "N/m"], ["a moment", "N*m"],
+  ["an acceleration", "m/s^2"], ["an angle", "deg"],
+];
+
+/** An input error of units: a field given a quantity of another kind, or terms that cannot be added. */
+const UNIT_TROUBLE = /\bunits?\b|but this field needs/i;
+
+/**
+ * A parameter typed as a bare number ("v = 30") that the fields reading it fail on: a plain number
+ * is a legal value in SI units, so this is said only when the sketch's input errors are its unit's
+ * doing — the same number with the unit of one kind ("30 m/s") clears some of them and breaks
+ * nothing else. "has no unit; the fields that read v need a speed: write 30 m/s", as the Cases tab
+ * says a change typed without its unit; null otherwise.
+ */
+export function bareParameterNote(file: SketchFile | null, name: string, errors: ReadonlyArray<FieldError>): string | null {
+  const raw = file?.parameters?.[name];
+  const text = raw === undefined ? "" : String(raw).trim();
+  if (!file || !errors.length || !PLAIN_NUMBER.test(text) || Number(text) === 0) return null;
+  // the parameter's own error is another matter (it reads nothing, so it has none)
+  if (errors.some((e) => e.path === `parameters.${name}`)) return null;
+  const failing = new Set(errors.map((e) => `${e.path} ${e.message}`));
+  let best: { kind: string; unit: string; cleared: number } | null = null;
+  for (const [kind, unit] of MEANT_AS) {
+    const r = parseSketch({ ...file, parameters: { ...file.parameters, [name]: `${text} ${unit}` } });
+    const left = r.ok ? [] : r.errors;
+    // a field the unit breaks rules it out; a range check it lets run at last does not (the
+    // checks of values wait until every field reads)
+    if (left.some((e) => !failing.has(`${e.path} ${e.message}`) && UNIT_TROUBLE.test(e.message))) continue;
+    const still = new Set(left.map((e) => `${e.path} ${e.message}`));
+    const cleared = errors.filter((e) => !still.has(`${e.path} ${e.message}`)).length;
+    if (cleared > 0 && (!best || cleared > best.cleared)) best = { kind, unit, cleared };
+  }
+  return best ? `${NO_UNIT}; the fields that read ${name} need ${best.kind}: write ${text} ${best.unit}` : null;
+}
+
 export function nameProblem(name: string, taken: string[], self?: string): string | null {
   if (!name) return "give it a name";
   if (!NAME.test(name)) return "letters, digits and _ only, starting with a letter";
@@ -64,6 +109,13 @@ function ParamRow({ name, expression, taken }: { name: string; expression: strin
   const apply = (c: Command<unknown>, coalesce?: string) => editor.getState().apply(c, coalesce ? { coalesce } : undefined);
   const nameErr = nameDraft !== null ? nameProblem(nameDraft, taken, name) : null;
   const shown = value === undefined ? "" : "error" in value ? value.error : readableValue(value.value, value.unit, units);
+  // a bare number the fields that read it fail on: said here, where the cause is (deferred: it
+  // parses the sketch again with a unit of each kind, only while there are input errors)
+  const analysed = useDeferredValue(useAnalysis((s) => s.sketch));
+  const errors = useDeferredValue(useAnalysis((s) => s.core?.errors));
+  const bare = value !== undefined && !("error" in value) && !value.unit;
+  const noUnit = useMemo(() => (bare && errors?.length ? bareParameterNote(analysed, name, errors) : null), [bare, analysed, name, errors]);
+  const noteId = `${id}-no-unit`;
   return (
     <tr className="align-top">
       <td className="py-1 pr-1">
@@ -95,7 +147,14 @@ function ParamRow({ name, expression, taken }: { name: string; expression: strin
             if (v !== undefined) apply(setParameter({ name, expression: v }) as Command<unknown>, `param:${id}`);
           }}
           onKeyDown={(e) => e.key === "Enter" && (e.target as HTMLInputElement).blur()}
+          aria-invalid={!!noUnit || undefined}
+          aria-describedby={noUnit ? noteId : undefined}
         />
+        {noUnit && (
+          <p id={noteId} className="mt-0.5 text-[11px] text-caution" data-testid="parameter-no-unit">
+            ⚠ {name} = {expression} {noUnit}
+          </p>
+        )}
       </td>
       <td className={`num py-1 pl-1 pt-1.5 text-[12px] ${value && "error" in value ? "text-caution" : "text-ink-soft"}`} aria-live="polite">
         {value && "error" in value ? `⚠ ${shown}` : shown}

@@ -59,7 +59,7 @@ export function StatusBanner() {
   const analysed = useAnalysis((s) => s.sketch);
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
   const units = useEditor((s) => s.units);
-  const sentences = useMemo(() => (shown && numeric ? statusSentences(numeric, shown, units, undefined, stability ?? undefined) : []), [shown, numeric, units, stability]);
+  const sentences = useMemo(() => (shown && numeric ? statusSentences(numeric, shown, units, undefined, stability ?? undefined, analysed) : []), [shown, numeric, units, stability, analysed]);
   // the errors after the first, in words: under the faded result or the missing one
   const more = useMemo(() => errors.slice(1).map((e) => errorInWords(analysed, e)), [errors, analysed]);
 

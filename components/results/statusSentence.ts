@@ -8,6 +8,8 @@ import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
 import type { BodyStability } from "@/solver/stability";
 import { tipSlide } from "@/canvas/render/tipSlide";
+import type { SketchFile } from "@/solver/schema";
+import { warningInWords } from "./errorPlace";
 
 /** "strained": the body holds as a whole, but one contact needs more friction than its own μ gives */
 export type Tone = "holds" | "strained" | "lifts" | "slips" | "tips" | "unrestrained";
@@ -247,11 +249,41 @@ function holdSentence(c: Context): string {
   return `Holds — all supports within their limits; the largest reaction is ${force(c, Math.hypot(best[1].fx, best[1].fy))} at ${supportName(best[0])}`;
 }
 
+const FIELD_OF_ELEMENT = /^(bodies|supports|loads|ports|massSources)\[(\d+)\]/;
+
+/**
+ * A warning that starts with a field's file path ("loads[0].fy: sin(30) reads 30 as radians: …"),
+ * in the form's words ("Point force F — Fy: …") when `file` holds the field it names: the element
+ * at that place is the one warned about, or the parameter is there (a result kept on screen from
+ * before an edit may be of a file whose elements have moved since). Otherwise as the solver said it.
+ */
+function warningText(file: SketchFile | null | undefined, w: SolveResult["warnings"][number]): string {
+  if (!file) return w.message;
+  const at = FIELD_OF_ELEMENT.exec(w.message);
+  if (at) {
+    const el = (file[at[1] as "bodies"] as Array<{ id: string }> | undefined)?.[Number(at[2])];
+    if (!el || !w.ids.includes(el.id)) return w.message;
+  } else {
+    const param = /^parameters\.([A-Za-z_][A-Za-z0-9_]*):/.exec(w.message);
+    if (param && file.parameters?.[param[1]] === undefined) return w.message;
+  }
+  return warningInWords(file, w.message);
+}
+
 /**
  * One sentence per body of a solved sketch; `forceUnit` puts every force in one unit (a calc
  * sheet's). With the bodies' factors of safety, a body that tips and slides says which comes first.
+ * `file`: the sketch file that was solved, so a warning about a field names it as the properties
+ * form does ("Point force F — Fy"); without it the warning keeps the file's path ("loads[0].fy").
  */
-export function statusSentences(sketch: Sketch, result: SolveResult, units: UnitSystem = "SI", forceUnit?: string, stability?: Record<string, BodyStability>): StatusSentence[] {
+export function statusSentences(
+  sketch: Sketch,
+  result: SolveResult,
+  units: UnitSystem = "SI",
+  forceUnit?: string,
+  stability?: Record<string, BodyStability>,
+  file?: SketchFile | null,
+): StatusSentence[] {
   const out: StatusSentence[] = [];
   const portNotes = portDirectionNotes(sketch);
   for (const b of sketch.bodies) {
@@ -326,7 +358,10 @@ export function statusSentences(sketch: Sketch, result: SolveResult, units: Unit
     out.push(alsoSlips ? { body: b.id, tone, headline, details, alsoSlips, ...(order ? { first: order.first } : {}) } : { body: b.id, tone, headline, details });
   }
   // warnings that belong to no body (unitless trigonometry in a parameter)
-  const general = result.warnings.filter((w) => w.code === "TRIG_UNITLESS").map((w) => (/[.?!]$/.test(w.message) ? w.message : `${w.message}.`));
+  const general = result.warnings
+    .filter((w) => w.code === "TRIG_UNITLESS")
+    .map((w) => warningText(file, w))
+    .map((m) => (/[.?!]$/.test(m) ? m : `${m}.`));
   if (general.length && out.length) out[0].details.push(...general);
   if (sketch.bodies.length > 1) for (const s of out) s.headline = `${sketch.bodies.find((b) => b.id === s.body)?.label || s.body}: ${s.headline}`;
   return out;

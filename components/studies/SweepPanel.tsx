@@ -18,7 +18,7 @@ import { CancelledError, StudyRunner } from "@/canvas/studies/client";
 import { firstReached, reachedAt, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
-import { studyErrorWords } from "./studyError";
+import { runErrorWords, studyErrorWords } from "./studyError";
 import { defaultLimitQuantity, SweepChart } from "./SweepChart";
 import { invalidStretches } from "./sweepErrors";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, type ParameterValue } from "./sweepRange";
@@ -585,7 +585,7 @@ export function SweepPanel() {
               {invalid.slice(0, MAX_STRETCHES).map((r, i) => (
                 <li key={`invalid-${i}`} className="text-caution" data-testid="invalid-points">
                   Not solved at {dLabel} = {formatNumber(r.from, 4)}{r.count > 1 ? ` to ${formatNumber(r.to, 4)}` : ""}{data.unit ? ` ${prettyUnit(data.unit)}` : ""} ({r.count} {r.count === 1 ? "point" : "points"}), where the sketch is invalid:{" "}
-                  {r.errors.map((e) => errorInWords(sketch, e)).join("; ")}.
+                  {r.errors.map((e) => errorInWords(ran?.sketch ?? sketch, e)).join("; ")}.
                 </li>
               ))}
               {invalid.length > MAX_STRETCHES && <li className="text-caution">… and {invalid.length - MAX_STRETCHES} more stretches of invalid points.</li>}
@@ -658,7 +658,7 @@ export function SweepPanel() {
                         <th scope="row" className={`pr-3 text-left text-ink-soft ${everywhere.first.includes(r.id) ? "font-semibold" : "font-normal"}`}>{r.kind === "combination" ? "Combination" : r.kind === "case" ? "Case" : ""} {r.name}</th>
                         <td className="tabular-nums">
                           {"error" in r.result
-                            ? `not solved: ${r.result.error}`
+                            ? `not solved: ${runErrorWords(ran?.sketch ?? sketch, r.result)}`
                             : r.result.found
                               ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — first (a tie)" : " — first") : ""}`
                               : noCrossingWords(r.result, everywhere.targetSI, everywhere.target)}

@@ -30,6 +30,7 @@ import { combinationWarningWords } from "@/components/studies/casesText";
 import { withSlipNote } from "@/components/studies/slipNote";
 import type { CombinationFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
+import { warningInWords } from "@/components/results/errorPlace";
 import { defaultMomentPoint } from "@/components/results/handCheck";
 import {
   asDrawnTwin,
@@ -163,7 +164,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   heading(hasCases ? "Result as drawn" : "Result");
   // the sentences of the results panel: a body that slips is not reported as holding
   const said = new Set<string>();
-  for (const s of statusSentences(parsed.sketch, result, units, family.force, stability)) {
+  for (const s of statusSentences(parsed.sketch, result, units, family.force, stability, parsed.file)) {
     const b = result.bodies[s.body];
     const determinacy = b.determinacy.kind === "indeterminate" ? "" : ` Statically ${b.determinacy.kind}.`;
     para(`${s.headline}.${determinacy}`, 9.5, s.tone === "holds" ? INK : ACCENT);
@@ -174,7 +175,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   }
   // the warnings the sentences above have not said already (they name the supports by id)
   // (a body's own "slides as a whole" is its status sentence's headline already)
-  const more = result.warnings.filter((w) => w.code !== "INDETERMINATE" && !said.has(w.message.replace(/\.$/, "")) && !(w.code === "SLIP" && w.ids.every((id) => id in result.bodies)));
+  const more = result.warnings.filter((w) => w.code !== "INDETERMINATE" && !said.has(w.message.replace(/\.$/, "")) && !said.has(warningInWords(parsed.file, w.message).replace(/\.$/, "")) && !(w.code === "SLIP" && w.ids.every((id) => id in result.bodies)));
   if (more.length) {
     doc.moveDown(0.3);
     for (const w of more) para(`Warning: ${w.message}`, 8.5, w.code === "SLIP" || w.code === "LIFTOFF" || w.code === "SLACK" ? ACCENT : SOFT);

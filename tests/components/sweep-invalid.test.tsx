@@ -34,7 +34,7 @@ describe("Sweep tab: points where the sketch is invalid", () => {
     // grav = 2, 1, 0 solve; −1 and −2 do not (gravity must not be negative, as when parsing)
     expect(invalid).toHaveLength(1);
     expect(invalid[0].textContent).toBe(
-      "Not solved at grav = −1 to −2 m/s² (2 points), where the sketch is invalid: Gravity: must not be negative: to have gravity act another way, give its direction (gravityAngle, −90° by default); 0 turns weights off.",
+      "Not solved at grav = −1 to −2 m/s² (2 points), where the sketch is invalid: Gravity: must not be negative: to have gravity act another way, give its direction (Gravity direction, −90° by default); 0 turns weights off.",
     );
   });
 });
