@@ -7,6 +7,9 @@ import type { PortFlow } from "./ports";
 import { isShared, reuseEqual, sameTerm } from "./reuse";
 import { DEFAULT_GROUPS, type Body, type EquationTerm, type Sketch, type Support, type Vec2 } from "./types";
 
+/** The names of labels already worked out (`elementName`). */
+const NAMES = new Map<string, string>();
+
 /**
  * An element as the equations' labels name it: its label in quotes, or its id bare. A label is
  * free text (a noun, "nozzle", or a phrase, "from pump"), so it is set off as a name and every
@@ -15,10 +18,19 @@ import { DEFAULT_GROUPS, type Body, type EquationTerm, type Sketch, type Support
  * label are not doubled.
  */
 export function elementName(e: { id: string; label?: string }): string {
-  const text = (e.label ?? "").replace(/\s+/gu, " ").trim();
-  const wrapped = /^(?:"([^"]+)"|“([^“”]+)”|‘([^‘’]+)’|'([^']+)')$/u.exec(text);
-  const inner = (wrapped ? wrapped.slice(1).find((g) => g !== undefined)!.trim() : "") || text;
-  return inner ? `“${inner}”` : e.id;
+  if (!e.label) return e.id;
+  // every solve names every element (a live drag solves on each pointer move): a label's name is
+  // worked out once
+  let name = NAMES.get(e.label);
+  if (name === undefined) {
+    const text = e.label.replace(/\s+/gu, " ").trim();
+    const wrapped = /^(?:"([^"]+)"|“([^“”]+)”|‘([^‘’]+)’|'([^']+)')$/u.exec(text);
+    const inner = (wrapped ? wrapped.slice(1).find((g) => g !== undefined)!.trim() : "") || text;
+    name = inner ? `“${inner}”` : "";
+    if (NAMES.size >= 4096) NAMES.clear();
+    NAMES.set(e.label, name);
+  }
+  return name || e.id;
 }
 
 /** Stiffness shared by supports when none is given (N/m). Only ratios matter. */
