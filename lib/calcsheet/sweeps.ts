@@ -208,6 +208,21 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
   let tolerance = limitTolerance(range);
   const rows: SweepLimitRow[] = [];
   const all: LimitEverywhere[] = [];
+  /** One limit's rows, a row per run searched, the first of them marked. */
+  const addRows = (runs: LimitEverywhere[], quantity: QuantitySpec, limit: string, past: string) => {
+    const first = firstReached(runs, sw.from, sw.to);
+    for (const run of runs) {
+      const r = run.result;
+      if ("unit" in r) unit = r.unit;
+      if ("found" in r && r.found && r.tolerance) tolerance = r.tolerance;
+      const value = reachedAt(r, sw.from, sw.to);
+      const crossings = "found" in r && r.found ? r.crossings.length : 0;
+      // tipping's "margin" is a sign only (held or not): never "past it throughout" in words of a margin
+      const pastThroughout = past !== "tipping" && "found" in r && !r.found && r.max < 0;
+      rows.push({ run, quantity, limit, past, value, more: Math.max(0, crossings - 1), pastThroughout, first: !!first?.tied.includes(run), governs: false });
+      all.push(run);
+    }
+  };
   for (const { q, limit, past } of limits) {
     const runs: LimitEverywhere[] = [];
     if (ownMissing) {
@@ -221,16 +236,7 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
     }
     // a sketch whose cases are all for combinations, with none: only the sweep's own run
     if (hasRuns || !ownMissing) runs.push(...limitEverywhere(file, sw.parameter, range, q));
-    const first = firstReached(runs, sw.from, sw.to);
-    for (const run of runs) {
-      const r = run.result;
-      if ("unit" in r) unit = r.unit;
-      if ("found" in r && r.found && r.tolerance) tolerance = r.tolerance;
-      const value = reachedAt(r, sw.from, sw.to);
-      const crossings = "found" in r && r.found ? r.crossings.length : 0;
-      rows.push({ run, quantity: q, limit, past, value, more: Math.max(0, crossings - 1), pastThroughout: "found" in r && !r.found && r.max < 0, first: !!first?.tied.includes(run), governs: false });
-      all.push(run);
-    }
+    addRows(runs, q, limit, past);
   }
   // tipping, in the same runs as the margins (the order "In every case" searches them)
   const searched: Array<Omit<LimitEverywhere, "result"> & { on: { case?: string; combination?: string } }> = [
@@ -252,14 +258,7 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
         return { ...run, result: { error: (err as Error).message } };
       }
     });
-    const first = firstReached(runs, sw.from, sw.to);
-    for (const run of runs) {
-      const r = run.result;
-      const value = reachedAt(r, sw.from, sw.to);
-      const crossings = "found" in r && r.found ? r.crossings.length : 0;
-      rows.push({ run, quantity: { support: body, component: "margin" }, limit, past: "tipping", value, more: Math.max(0, crossings - 1), pastThroughout: false, first: !!first?.tied.includes(run), governs: false });
-      all.push(run);
-    }
+    addRows(runs, { support: body, component: "margin" }, limit, "tipping");
   }
   // the first of every limit: what governs over the sweep's range (every row at that value, a tie)
   const governing = firstReached(all, sw.from, sw.to);
