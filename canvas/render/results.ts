@@ -271,6 +271,17 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
  * unit with no result at all (an input error before the first solve) or on a body that did not solve.
  */
 export function drawingFamily(result: SolveResult | ReadonlyArray<SolveResult | null> | null, units: UnitSystem = "SI", items: readonly SceneItem[] = []): { force: string; moment: string } {
+  // the live canvas asks for one result's family from several places per redraw (its nodes, the
+  // result layer, the label layout): worked out once per result, units and items
+  const last = lastFamily;
+  if (last && last.result === result && last.units === units && last.items === items) return last.family;
+  const family = familyOf(result, units, items);
+  lastFamily = { result, units, items, family };
+  return family;
+}
+let lastFamily: { result: unknown; units: UnitSystem; items: readonly SceneItem[]; family: { force: string; moment: string } } | null = null;
+
+function familyOf(result: SolveResult | ReadonlyArray<SolveResult | null> | null, units: UnitSystem, items: readonly SceneItem[]): { force: string; moment: string } {
   const results = (Array.isArray(result) ? result : [result]).filter((r): r is SolveResult => !!r);
   let force = 0;
   let moment = 0;
