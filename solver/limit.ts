@@ -14,7 +14,7 @@
 // body that tips, its friction margin is undefined, so lifting off is never taken for slipping.
 import { formatFigures, formatTiny, type QuantitySpec } from "./quantity";
 import { createSweeper, sweptQuantity, type Sweeper } from "./sweep";
-import type { Sketch } from "./types";
+import type { Sketch, SolveResult } from "./types";
 import { prettyUnit } from "./units";
 
 export interface LimitOptions {
@@ -77,6 +77,79 @@ export function findLimitWith(
   target = 0,
   options: LimitOptions = {},
 ): LimitResult {
+  return searchWith(
+    sweeper,
+    range,
+    (result) => {
+      const body = result.reactions[quantity.support]?.body;
+      return { value: sweptQuantity(result, quantity), held: body !== undefined && isHeld(result, body) };
+    },
+    target,
+    options,
+  );
+}
+
+const isHeld = (result: SolveResult, body: string): boolean => {
+  const status = result.bodies[body]?.status;
+  return status === "holds" || status === "lifts";
+};
+
+/**
+ * Where a body starts to slide as a whole as the parameter goes across the range: its sliding
+ * margin (`bodySlidingMargin`) reaches zero, found as `findLimitWith` finds a friction margin's
+ * (sampled, each sign change refined with Brent's method, to the same tolerance).
+ */
+export function findBodySlidingWith(sweeper: Sweeper, range: readonly [number, number], body: string, options: LimitOptions = {}): LimitResult {
+  return searchWith(sweeper, range, (result) => ({ value: bodySlidingMargin(result, body), held: isHeld(result, body) }), 0, options);
+}
+
+/**
+ * The friction a body has to spare against sliding as a whole (N): Σ μ·n − |Σ t| over its bearing
+ * contacts with a μ, the vector sum of their tangential forces. It reaches zero where the stability
+ * check's factor against sliding (Σ μ·n over |Σ t|, solver/stability.ts) reaches 1 and where the
+ * solve starts to warn `SLIP` for the body itself (ids `[body]`: its friction contacts together
+ * cannot give the friction it needs), both read from the same sums (the body's `friction`). It is
+ * the limit itself, a factor of 1, as a lift-off is n = 0: the required factor (1.5, say) is the
+ * stability table's check.
+ *
+ * A contact over its own μ while the others have friction to spare slips alone: its share goes to
+ * the others and the body holds (|Σ t| ≤ Σ μ·n), so this, not a contact's own margin, says where
+ * the body itself starts to move along its base. Read, as those checks read it, only where:
+ *  - the body holds or lifts: a body that tips (or is unrestrained) has no reactions of its own,
+ *    only those that would hold it, and its tipping is its limit (`findTippingWith`);
+ *  - nothing bilateral holds it (a pin, roller or fixed support resists sliding, as the stability
+ *    check says) and a contact with a μ bears.
+ * Elsewhere NaN (a gap, never a crossing).
+ */
+export function bodySlidingMargin(result: SolveResult, body: string): number {
+  const b = result.bodies[body];
+  if (!b?.friction || !isHeld(result, body)) return Number.NaN;
+  let sumN = 0;
+  let sumMuN = 0;
+  for (const r of Object.values(result.reactions)) {
+    if (r.body !== body) continue;
+    if (r.kind === "pin" || r.kind === "roller" || r.kind === "fixed") return Number.NaN;
+    // `friction` is on a contact with a μ exactly while it bears: the sums of the body's `friction`
+    if (r.kind !== "contact" || !r.friction) continue;
+    sumN += r.n ?? 0;
+    sumMuN += r.friction.mu * (r.n ?? 0);
+  }
+  if (!(sumN > 0)) return Number.NaN;
+  // the body's friction is (needed, available) = (|Σ t|, Σ μ·n) / Σ n
+  return sumMuN - b.friction.needed * sumN;
+}
+
+/**
+ * The search of `findLimitWith` on any reading of a solve: `read` gives the value and whether the
+ * body it belongs to is held (holds or lifts: its reactions are the one-sided solution).
+ */
+function searchWith(
+  sweeper: Sweeper,
+  range: readonly [number, number],
+  read: (result: SolveResult) => { value: number; held: boolean },
+  target: number,
+  options: LimitOptions,
+): LimitResult {
   const [lo, hi] = range[0] <= range[1] ? range : [range[1], range[0]];
   const samples = Math.max(2, options.samples ?? 64);
   const tol = options.tolerance ?? limitTolerance([lo, hi]);
@@ -85,9 +158,8 @@ export function findLimitWith(
     iterations++;
     const p = sweeper.at(x);
     if (!p.ok) return { x, f: Number.NaN, held: false };
-    const body = p.result.reactions[quantity.support]?.body;
-    const status = body === undefined ? undefined : p.result.bodies[body]?.status;
-    return { x, f: sweptQuantity(p.result, quantity) - target, held: status === "holds" || status === "lifts" };
+    const { value, held } = read(p.result);
+    return { x, f: value - target, held };
   };
   const f = (x: number) => at(x).f;
   try {

@@ -6,7 +6,7 @@
 // ground or its body is not held, and the sheet says where, in the tab's words.
 import { displayKind, displayUnit, largestByKind, marksZero, parameterWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { runSweep } from "@/canvas/studies/run";
-import { findLimitWith, findTippingWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
+import { findBodySlidingWith, findLimitWith, findTippingWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
 import { describeQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
@@ -168,6 +168,8 @@ export interface SweepLimitRow {
   first: boolean;
   /** first of every limit in every run: it governs the sweep's range (a tie: each) */
   governs: boolean;
+  /** the body whose own limit it is (it tips, or slides as a whole); absent for a support's */
+  body?: string;
 }
 
 /**
@@ -176,6 +178,14 @@ export interface SweepLimitRow {
  * contact with a μ (friction used up), in the sweep's own run and in every case and combination
  * the editor's "In every case" searches — the same `limitEverywhere`, so the same numbers. A limit
  * never reached is a row too: a checker reads that it was searched and found nowhere in the range.
+ *
+ * Then each body's own limits, in the same runs: where it tips (no set of its one-sided reactions
+ * holds it) and, on contacts and ties with a friction contact, where it slides as a whole (Σ μ·n −
+ * |Σ t| of its bearing friction contacts reaches zero: the stability check's factor against
+ * sliding reaching 1, the solve's `SLIP` on the body; `bodySlidingMargin` in solver/limit.ts). One
+ * contact over its own μ slips alone while the others take its share, so a contact's slip may come
+ * first and still leave the body held: the table marks the first limit of all, and the summary says
+ * each body's own first limit beside it.
  */
 export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLimitRow[]; unit: string; tolerance: number } {
   const names = elementNames(file);
@@ -191,6 +201,14 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
   }
   // a body on contacts or ties may tip: where no set of its one-sided reactions holds it
   const tipping = [...new Set(file.supports.filter((s) => s.kind === "contact" || s.kind === "tie").map((s) => s.body))].map((b) => ({ body: b, limit: `${names[b] ?? b}: tips (not held)` }));
+  // a body on contacts and ties alone, one of them with a μ, may slide as a whole (a pin, a roller
+  // or a fixed support resists sliding, as the stability check says)
+  const sliding = file.bodies
+    .filter((b) => {
+      const own = file.supports.filter((s) => s.body === b.id);
+      return own.some((s) => s.kind === "contact" && s.mu !== undefined) && own.every((s) => s.kind === "contact" || s.kind === "tie");
+    })
+    .map((b) => ({ body: b.id, limit: `${names[b.id] ?? b.id}: slides as a whole (Σμ·n − |Σt| = 0)` }));
   const range: [number, number] = [sw.from, sw.to];
   // the sweep's own run, when "In every case" does not search it (the sketch as drawn beside its
   // cases, or a case solved only in combinations)
@@ -209,7 +227,7 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
   const rows: SweepLimitRow[] = [];
   const all: LimitEverywhere[] = [];
   /** One limit's rows, a row per run searched, the first of them marked. */
-  const addRows = (runs: LimitEverywhere[], quantity: QuantitySpec, limit: string, past: string) => {
+  const addRows = (runs: LimitEverywhere[], quantity: QuantitySpec, limit: string, past: string, body?: string) => {
     const first = firstReached(runs, sw.from, sw.to);
     for (const run of runs) {
       const r = run.result;
@@ -219,7 +237,7 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
       const crossings = "found" in r && r.found ? r.crossings.length : 0;
       // tipping's "margin" is a sign only (held or not): never "past it throughout" in words of a margin
       const pastThroughout = past !== "tipping" && "found" in r && !r.found && r.max < 0;
-      rows.push({ run, quantity, limit, past, value, more: Math.max(0, crossings - 1), pastThroughout, first: !!first?.tied.includes(run), governs: false });
+      rows.push({ run, quantity, limit, past, value, more: Math.max(0, crossings - 1), pastThroughout, first: !!first?.tied.includes(run), governs: false, ...(body ? { body } : {}) });
       all.push(run);
     }
   };
@@ -250,16 +268,17 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
         ? []
         : [{ id: "", name: "As drawn", kind: "as drawn" as const, on: {} }]),
   ];
-  for (const { body, limit } of tipping) {
-    const runs = searched.map(({ on, ...run }): LimitEverywhere => {
+  /** One of a body's own limits searched in every run. */
+  const bodyRuns = (find: (sweeper: ReturnType<typeof sweeperOn>) => LimitEverywhere["result"]) =>
+    searched.map(({ on, ...run }): LimitEverywhere => {
       try {
-        return { ...run, result: findTippingWith(sweeperOn(file, on, sw.parameter), range, body) };
+        return { ...run, result: find(sweeperOn(file, on, sw.parameter)) };
       } catch (err) {
         return { ...run, result: { error: (err as Error).message } };
       }
     });
-    addRows(runs, { support: body, component: "margin" }, limit, "tipping");
-  }
+  for (const { body, limit } of tipping) addRows(bodyRuns((s) => findTippingWith(s, range, body)), { support: body, component: "margin" }, limit, "tipping", body);
+  for (const { body, limit } of sliding) addRows(bodyRuns((s) => findBodySlidingWith(s, range, body)), { support: body, component: "frictionMargin" }, limit, "sliding as a whole", body);
   // the first of every limit: what governs over the sweep's range (every row at that value, a tie)
   const governing = firstReached(all, sw.from, sw.to);
   for (const row of rows) row.governs = !!governing?.tied.includes(row.run);
@@ -267,9 +286,35 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
 }
 
 /**
+ * Each body's own first limit (it tips, or slides as a whole), said after what governs when that is
+ * a support's: a contact slipping alone, or lifting off, leaves the body held, and an anchor's
+ * designer asks where the body itself starts to move. Nothing for a body whose own limit governs.
+ */
+function bodyWords(rows: SweepLimitRow[], sw: SweepFile, p: string, unit: string, runWords: (r: SweepLimitRow) => string): string {
+  const bodies = [...new Set(rows.flatMap((r) => (r.body ? [r.body] : [])))];
+  return bodies
+    .map((body) => {
+      const own = rows.filter((r) => r.body === body);
+      if (own.some((r) => r.governs)) return "";
+      const name = own[0].limit.slice(0, own[0].limit.lastIndexOf(": "));
+      const what = (r: SweepLimitRow) => r.limit.slice(name.length + 2);
+      const first = firstReached(own.map((r) => r.run), sw.from, sw.to);
+      if (!first) {
+        const slides = own.some((r) => r.past === "sliding as a whole");
+        return ` ${name} itself ${slides ? "neither tips nor slides as a whole" : "does not tip"} in any run searched.`;
+      }
+      const tied = own.filter((r) => first.tied.includes(r.run));
+      const limits = [...new Set(tied.map(what))].map((l) => `${l} in ${andWords(tied.filter((r) => what(r) === l).map(runWords))}`);
+      return ` ${name} itself (the body, not one support) first ${limits.length > 1 || tied.length > 1 ? "gives way in a tie" : "gives way"} at ${p} = ${limitWithUnit(first.value, unit)}: ${limits.join("; ")}.`;
+    })
+    .join("");
+}
+
+/**
  * The calc sheet's table of a kept sweep's limits (`sweepLimitRows`): grouped by limit, a row for
  * each run, with where the limit is first reached, or "none in 0 … 80 deg". The one that governs is
  * marked ◆ and said in words, the first of each other limit ◇, so the mark is never colour alone.
+ * When what governs is a support's limit, the summary says each body's own first limit after it.
  */
 export function sweepLimitTable(file: SketchFile, sw: SweepFile): { table: Table; summary: string } {
   const { rows, unit, tolerance } = sweepLimitRows(file, sw);
@@ -288,7 +333,13 @@ export function sweepLimitTable(file: SketchFile, sw: SweepFile): { table: Table
       note = res.error;
     } else if (r.value === undefined) {
       value = `none in ${span}`;
-      note = r.pastThroughout ? `past it throughout: ${r.past} over the whole range (the margin stays below zero)` : "";
+      // sliding is read only while the body is held: where it tips in this run, say so
+      const tips = r.past === "sliding as a whole" ? rows.find((t) => t.body === r.body && t.past === "tipping" && t.run.kind === r.run.kind && t.run.id === r.run.id && t.value !== undefined) : undefined;
+      note = r.pastThroughout
+        ? `past it throughout: ${r.past} over the whole range (the margin stays below zero)`
+        : tips
+          ? `searched while the body is held: it tips from ${limitWithUnit(tips.value!, unit)}`
+          : "";
     } else {
       value = r.value;
       const bits = [
@@ -324,7 +375,7 @@ export function sweepLimitTable(file: SketchFile, sw: SweepFile): { table: Table
   const runWords = (r: SweepLimitRow) => (r.run.kind === "as drawn" ? "the sketch as drawn" : r.run.name);
   const tiedLimits = [...new Set(governing.map((r) => r.limit))].map((l) => `${l} in ${andWords(governing.filter((r) => r.limit === l).map(runWords))}`);
   const summary = governing.length
-    ? `Governs over ${span}: ${governing.length > 1 ? `a tie at ${p} = ${limitWithUnit(governing[0].value!, unit)}: ${tiedLimits.join("; ")}` : `${tiedLimits[0]} at ${p} = ${limitWithUnit(governing[0].value!, unit)}`}.`
+    ? `Governs over ${span}: ${governing.length > 1 ? `a tie at ${p} = ${limitWithUnit(governing[0].value!, unit)}: ${tiedLimits.join("; ")}` : `${tiedLimits[0]} at ${p} = ${limitWithUnit(governing[0].value!, unit)}`}.${bodyWords(rows, sw, p, unit, runWords)}`
     : rows.length
       ? `No limit is reached in ${span} in any run searched: ${rows.some((r) => r.pastThroughout) ? "each is either past throughout or not reached (see the notes)" : "every contact stays in bearing, every tie taut and every friction margin above zero"}.`
       : "The sketch has no contact or tie: no limit to search.";

@@ -80,7 +80,7 @@ describe("the calc sheet of the skid", () => {
     expect(text).not.toContain("as drawn: as drawn");
     // a combination's overlap names its cases as the sheet's tables do (by name, not id)
     expect(text).toContain('Warning: Load group "dead" (the weights) is in Duty (× 0.9) and Surge (× 1.5): it is counted 2.4 times.');
-  });
+  }, 60000);
 });
 
 describe("a flow-factor sweep on a case with its own flow factor", () => {
