@@ -1,6 +1,7 @@
 // Registered actions: one entry per thing a user can do (id, label, shortcut, run). The tray,
 // the menus, the keyboard and the element outline read this list, so a new tool is one entry.
 import type { Vec2 } from "@/solver/types";
+import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { EditorStores } from "./context";
 import type { EditorStore, Tool } from "./store";
 import type { PointerController } from "./konva/pointer";
@@ -14,6 +15,7 @@ import { anchorOf } from "./scene";
 import { polygonAround, rectangleAround } from "./model/factory";
 import { valueLookup } from "./analysis/store";
 import { fitScene } from "./geometry/fit";
+import { fitUnderlayView } from "./geometry/underlay";
 import { snapTo } from "./geometry/snap";
 import { gridStep, toWorld, zoomAt } from "./geometry/view";
 import { bodyCommand, bodyPlaceInView, NEEDS_BODY, placedAtOutline, placeWithoutPointer, spotWords, type SpotPlace } from "./placement";
@@ -91,7 +93,7 @@ function placeAction(id: string, label: string, kind: Exclude<ElementKind, "body
       if (!s.apply(out.command)) return;
       s.setTool({ kind: "select" });
       const body = scene.bodies.find((b) => b.id === out.body);
-      s.notify(`${label} added to ${body?.label ?? out.body} ${placedWords(out, s.view.scale)}`);
+      s.notify(`${label} added to ${body?.label ?? out.body} ${placedWords(out, s.view.scale, s.units)}`);
     },
   };
 }
@@ -101,12 +103,15 @@ const metres = (x: number) => `${Number(x.toPrecision(6)) || 0} m`;
 /**
  * Where a keyboard placement went and how to move it, for the status line (two lines at most):
  * "near the left end of its bottom edge (x = 0.25 m, y = 0 m). Arrow keys move it 0.2 m a press,
- * Shift+arrow 2 m."
+ * Shift+arrow 2 m." In US units the place is in feet, as the panel beside it says it, and the
+ * grid's metric step gets its length in feet or inches beside it.
  */
-export function placedWords(out: { at?: Vec2; place?: SpotPlace }, scale: number): string {
+export function placedWords(out: { at?: Vec2; place?: SpotPlace }, scale: number, units: UnitSystem = "SI"): string {
   const g = gridStep(scale);
-  const where = [out.place ? spotWords(out.place) : "", out.at ? `(x = ${metres(out.at[0])}, y = ${metres(out.at[1])})` : ""].filter(Boolean).join(" ");
-  return `${where}. Arrow keys move it ${metres(g)} a press, Shift+arrow ${metres(10 * g)}.`;
+  const length = units === "US" ? (x: number) => formatQuantity(x, "length", "US") : metres;
+  const step = (x: number) => (units === "US" ? `${metres(x)} (${length(x)})` : metres(x));
+  const where = [out.place ? spotWords(out.place) : "", out.at ? `(x = ${length(out.at[0])}, y = ${length(out.at[1])})` : ""].filter(Boolean).join(" ");
+  return `${where}. Arrow keys move it ${step(g)} a press, Shift+arrow ${step(10 * g)}.`;
 }
 
 /** A body of the default size in the middle of the view (on the grid, and no larger than the view takes), selected: the tray's keyboard route. */
@@ -281,7 +286,11 @@ export const ACTIONS: readonly Action[] = [
     shortcuts: ["F"],
     run: (c) => {
       const s = ed(c);
-      s.setView(fitScene(c.stores.scene.getState(), s.viewport.width, s.viewport.height, { result: c.stores.analysis.getState().shown, units: s.units }));
+      const scene = c.stores.scene.getState();
+      // nothing drawn yet: the drawing to trace over is what there is to see
+      const u = s.sketch.underlay;
+      if (!scene.bodies.length && !scene.items.length && u && !u.hidden) s.setView(fitUnderlayView(u, s.viewport.width, s.viewport.height));
+      else s.setView(fitScene(scene, s.viewport.width, s.viewport.height, { result: c.stores.analysis.getState().shown, units: s.units }));
     },
   },
   { id: "view.zoomIn", label: "Zoom in", group: "view", shortcuts: ["+", "="], run: (c) => zoomBy(c, 1.25) },

@@ -213,7 +213,11 @@ function spotAndPlace(body: SceneBody, kind: Exclude<ElementKind, "body">, taken
   if (side[1] !== 0 ? b[0] < a[0] : b[1] < a[1]) [a, b] = [b, a];
   const at = (t: number): Vec2 => [a[0] + t * (b[0] - a[0]), a[1] + t * (b[1] - a[1])];
   const order = PAIRED.has(kind) ? ALONG_PAIRED : ALONG;
-  const t = order.find((u) => taken.every((q) => Math.hypot(at(u)[0] - q[0], at(u)[1] - q[1]) > tol)) ?? order[0];
+  // a spot is taken by anything nearer it than halfway to the next spot (an eighth of the edge
+  // apart): a foot placed with the mouse a little off the eighth still counts as the left foot, so
+  // the next one goes to the right end, not beside it
+  const near = Math.max(tol, Math.hypot(b[0] - a[0], b[1] - a[1]) / 16);
+  const t = order.find((u) => taken.every((q) => Math.hypot(at(u)[0] - q[0], at(u)[1] - q[1]) >= near)) ?? order[0];
   const words = { "0,-1": "bottom", "0,1": "top", "-1,0": "left", "1,0": "right" } as const;
   return { at: at(t), place: { edge: words[`${side[0]},${side[1]}` as keyof typeof words], along: t } };
 }

@@ -1,10 +1,11 @@
 // The underlay's geometry for the editor: where a new image goes, the scale a typed distance
 // gives, and the image's place on screen. Pure functions over the solver's underlay geometry.
 import { evaluateToNumber } from "@/solver/expressions";
-import { calibrate } from "@/solver/underlay";
+import { calibrate, imageToWorld } from "@/solver/underlay";
 import type { UnderlayFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
-import { toScreen, toWorld, type View } from "./view";
+import { LEGEND_ROOM } from "./fit";
+import { fitView, toScreen, toWorld, type View } from "./view";
 
 /** A new image, fitted into about four fifths of the visible canvas, centred. */
 export function fitNewUnderlay(size: { width: number; height: number }, view: View, viewport: { width: number; height: number }): Pick<UnderlayFile, "origin" | "metresPerPixel"> {
@@ -12,6 +13,25 @@ export function fitNewUnderlay(size: { width: number; height: number }, view: Vi
   const metresPerPixel = screenPerPixel / view.scale;
   const topLeft: Vec2 = [(viewport.width - size.width * screenPerPixel) / 2, (viewport.height - size.height * screenPerPixel) / 2];
   return { origin: toWorld(view, topLeft), metresPerPixel };
+}
+
+/**
+ * The underlay an upload puts under the sketch. A new drawing is fitted into view, its scale still
+ * to be set; one replacing a drawing of the same pixel size (the next revision of the same sheet)
+ * keeps its scale, place, turn, opacity, lock and marks, so what was traced over the old one still
+ * lines up (shown, even when the old one was hidden).
+ */
+export function underlayFromUpload(
+  before: UnderlayFile | undefined,
+  up: { id: string; width: number; height: number },
+  fitted: Pick<UnderlayFile, "origin" | "metresPerPixel">,
+): { underlay: UnderlayFile; kept: boolean } {
+  if (before && before.width === up.width && before.height === up.height) {
+    // shown, whatever the old one was: the new drawing is what was just asked for
+    const { hidden: _hidden, ...look } = before;
+    return { underlay: { ...look, upload: up.id }, kept: true };
+  }
+  return { underlay: { upload: up.id, width: up.width, height: up.height, ...fitted, rotation: 0, opacity: 0.6 }, kept: false };
 }
 
 /** The scales an underlay may take (m a pixel); the file format refuses others. */
@@ -48,4 +68,18 @@ export function underlayOnScreen(u: UnderlayFile, view: View) {
   const [x, y] = toScreen(view, u.origin);
   const k = u.metresPerPixel * view.scale;
   return { x, y, width: u.width * k, height: u.height * k, rotation: -(u.rotation ?? 0) };
+}
+
+/**
+ * The view that shows the whole underlay (turned or not), clear of the legend: "Fit" on a sketch
+ * with nothing drawn yet, and the view after its scale is set then (the drawing grows or shrinks
+ * about the first mark, and could otherwise sit off the screen or as a speck in it).
+ */
+export function fitUnderlayView(u: UnderlayFile, width: number, height: number): View {
+  const placement = { origin: u.origin, metresPerPixel: u.metresPerPixel, rotation: u.rotation ?? 0 };
+  const corners = ([[0, 0], [u.width, 0], [u.width, u.height], [0, u.height]] as Vec2[]).map((p) => imageToWorld(placement, p));
+  const xs = corners.map((p) => p[0]);
+  const ys = corners.map((p) => p[1]);
+  const box = { minX: Math.min(...xs), minY: Math.min(...ys), maxX: Math.max(...xs), maxY: Math.max(...ys) };
+  return fitView(box, width, height, { top: LEGEND_ROOM + 8, right: 12, bottom: 12, left: 12 });
 }

@@ -6,7 +6,7 @@ import { useId, useRef, useState } from "react";
 import { useEditor, useStores } from "@/canvas/context";
 import type { Command } from "@/canvas/commands/define";
 import { lockUnderlay, moveUnderlay, placeUnderlay, removeUnderlay, rotateUnderlay, setUnderlayOpacity, showUnderlay } from "@/canvas/commands/underlay";
-import { fitNewUnderlay } from "@/canvas/geometry/underlay";
+import { fitNewUnderlay, underlayFromUpload } from "@/canvas/geometry/underlay";
 import { evaluateToNumber } from "@/solver/expressions";
 import { formatNumber } from "@/solver/units";
 import { ACCEPT_UPLOADS } from "@/components/uploads/uploadFile";
@@ -77,9 +77,14 @@ function Upload({ label, disabled }: { label: string; disabled: boolean }) {
     try {
       const up = await upload(file);
       const s = editor.getState();
-      const placed = fitNewUnderlay(up, s.view, s.viewport);
-      s.apply(placeUnderlay({ underlay: { upload: up.id, width: up.width, height: up.height, ...placed, rotation: 0, opacity: 0.6 } }) as Command<unknown>);
-      s.notify(`“${up.name || file.name}” is under the sketch. Set its scale from two marks a known distance apart, then lock it and trace.`);
+      const before = s.sketch.underlay;
+      const { underlay, kept } = underlayFromUpload(before, up, fitNewUnderlay(up, s.view, s.viewport));
+      s.apply(placeUnderlay({ underlay }) as Command<unknown>);
+      const name = up.name || file.name;
+      if (kept) s.notify(`“${name}” replaces the drawing at the same scale and place (the same size, ${up.width} × ${up.height} px): check that it lines up with what is traced.`);
+      else if (before?.calibration)
+        s.notify(`“${name}” is under the sketch. It is not the size of the drawing it replaces (${before.width} × ${before.height} px), so its scale is not kept: set it from two marks a known distance apart, then lock it and trace.`);
+      else s.notify(`“${name}” is under the sketch. Set its scale from two marks a known distance apart, then lock it and trace.`);
     } catch (err) {
       setProblem((err as Error).message);
     } finally {

@@ -1,11 +1,11 @@
 "use client";
 // Setting the underlay's scale: click two marks on the image, type the real distance between
 // them with a unit ("2.4 m", "96 in"); the solver's expression reader turns it into metres.
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useEditor, useStores } from "@/canvas/context";
 import { calibrateUnderlay } from "@/canvas/commands/underlay";
 import type { Command } from "@/canvas/commands/define";
-import { readScale, type ScaleReading } from "@/canvas/geometry/underlay";
+import { fitUnderlayView, readScale, type ScaleReading } from "@/canvas/geometry/underlay";
 import { suggestUnitsFor } from "@/solver/expressionErrors";
 import { formatNumber } from "@/solver/units";
 import type { UnderlayFile } from "@/solver/schema";
@@ -55,6 +55,16 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
   const calibrating = tool.kind === "calibrate";
   const marks = calibrating ? tool.points : [];
   const reading = marks.length === 2 ? readTypedScale(marks[0], marks[1], text) : null;
+  // the second mark is a click on the drawing, which takes the focus as the pointer goes down (after
+  // the field has mounted): the distance is typed next, so the field takes it back once the click
+  // is over; typed into the drawing, "1200 mm" would run its shortcuts instead
+  const distanceRef = useRef<HTMLInputElement>(null);
+  const bothMarks = marks.length === 2 ? marks : null;
+  useEffect(() => {
+    if (!bothMarks) return;
+    const frame = requestAnimationFrame(() => distanceRef.current?.focus());
+    return () => cancelAnimationFrame(frame);
+  }, [bothMarks]);
 
   const start = () => {
     const d = u.calibration?.distance;
@@ -69,6 +79,9 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
     const s = editor.getState();
     s.apply(calibrateUnderlay({ a: marks[0], b: marks[1], distance: text.trim(), metresPerPixel: reading.metresPerPixel }) as Command<unknown>);
     s.setTool({ kind: "select" });
+    // nothing traced yet: show the whole drawing at its new size (it grew or shrank about the first mark)
+    const after = editor.getState();
+    if (!after.sketch.bodies.length && after.sketch.underlay) after.setView(fitUnderlayView(after.sketch.underlay, after.viewport.width, after.viewport.height));
     s.notify(`Scale set: ${formatNumber(reading.pixels, 4)} px between the marks is ${text.trim()}, so ${scaleWords(reading.metresPerPixel, units)}. Lock the underlay before tracing over it.`);
   };
 
@@ -115,6 +128,7 @@ export function UnderlayScale({ u, disabled }: { u: UnderlayFile; disabled: bool
           </label>
           <input
             id="underlay-distance"
+            ref={distanceRef}
             autoFocus
             className={INPUT}
             value={text}
