@@ -14,5 +14,9 @@ export const LBM_KG = 0.45359237;
 export const GALLON_US_M3 = 3.785411784e-3;
 /** pound-force per square inch, Pa */
 export const PSI_PA = LBF_N / (INCH_M * INCH_M);
+/** pound-force per square foot, Pa */
+export const PSF_PA = LBF_N / (FOOT_M * FOOT_M);
+/** conventional inch of water (a column of 1000 kg/m³ under standard gravity: NIST SP 811 lists 2.490 889 E+02 Pa), Pa */
+export const INCH_WATER_PA = 1000 * G0 * INCH_M;
 /** standard atmosphere at sea level, Pa (ISO 2533; the standard atmosphere of the 10th CGPM, 1954) */
 export const STANDARD_ATMOSPHERE_PA = 101325;

@@ -13,7 +13,7 @@ export const UNIT_NAMES: ReadonlySet<string> = new Set([
   // force
   "N", "kN", "MN", "lbf", "kip", "kgf",
   // pressure
-  "Pa", "kPa", "MPa", "GPa", "bar", "mbar", "psi", "ksi", "atm",
+  "Pa", "kPa", "MPa", "GPa", "bar", "mbar", "psi", "ksi", "psf", "atm", "inH2O", "mmH2O",
   // angle
   "deg", "degree", "degrees", "rad",
   // volume and flow

@@ -41,7 +41,7 @@ import {
   type MathNode,
   type Unit,
 } from "mathjs";
-import { GALLON_US_M3, LBF_N, INCH_M } from "./constants";
+import { GALLON_US_M3, INCH_M, INCH_WATER_PA, LBF_N, PSF_PA } from "./constants";
 import { explainEvaluation, isRealValue, PlainMathError } from "./expressionErrors";
 import { CONSTANT_NAMES, FUNCTION_NAMES, shapeProblem, UNIT_NAMES } from "./expressionVocabulary";
 
@@ -84,6 +84,9 @@ const math = create({
 // Exact definitions (NIST SP 811): psi as lbf/in², US gallon 3.785411784 L.
 math.createUnit("psi", { definition: `${LBF_N / (INCH_M * INCH_M)} Pa` }, { override: true });
 math.createUnit("ksi", { definition: `${(1000 * LBF_N) / (INCH_M * INCH_M)} Pa` });
+// duct and fan pressures: the conventional inch of water column, and pound-force per square foot
+math.createUnit("inH2O", { definition: `${INCH_WATER_PA} Pa` }, { override: true });
+math.createUnit("psf", { definition: `${PSF_PA} Pa` });
 math.createUnit("gpm", { definition: `${GALLON_US_M3 / 60} m^3/s` });
 math.createUnit("lpm", { definition: `${0.001 / 60} m^3/s` });
 math.createUnit("lps", { definition: "0.001 m^3/s" });

@@ -1,6 +1,6 @@
 // Display of SI values in SI or US customary units, with 3–4 significant figures.
 // Conversion factors are the exact ones of NIST SP 811 (solver/constants.ts).
-import { FOOT_M, GALLON_US_M3, INCH_M, LBF_N, LBM_KG, PSI_PA } from "./constants";
+import { FOOT_M, GALLON_US_M3, INCH_M, INCH_WATER_PA, LBF_N, LBM_KG, PSI_PA } from "./constants";
 
 export type UnitSystem = "SI" | "US";
 export type Quantity =
@@ -27,6 +27,8 @@ interface Scale {
   factor: number;
   /** smallest value (in this unit) shown in it; default 1 */
   min?: number;
+  /** the unit a zero is written in, where the system has none of factor 1 (0 psi, not 0 inH2O) */
+  zero?: true;
 }
 
 /** Units per quantity and system, largest first; the first whose value is ≥ 1 is chosen. */
@@ -48,7 +50,8 @@ const UNITS: Record<Quantity, Record<UnitSystem, Scale[]>> = {
   massFlow: { SI: [{ unit: "kg/s", factor: 1 }], US: [{ unit: "lb/s", factor: LBM_KG }] },
   pressure: {
     SI: [{ unit: "MPa", factor: 1e6 }, { unit: "kPa", factor: 1e3 }, { unit: "Pa", factor: 1 }],
-    US: [{ unit: "ksi", factor: 1000 * PSI_PA, min: 10 }, { unit: "psi", factor: PSI_PA }],
+    // below a psi (a fan's or a duct's pressure), inches of water, as the trade reads them
+    US: [{ unit: "ksi", factor: 1000 * PSI_PA, min: 10 }, { unit: "psi", factor: PSI_PA, zero: true }, { unit: "inH2O", factor: INCH_WATER_PA }],
   },
   velocity: { SI: [{ unit: "m/s", factor: 1 }], US: [{ unit: "ft/s", factor: FOOT_M }] },
   volumeFlow: {
@@ -78,7 +81,7 @@ export function convert(valueSI: number, q: Quantity, system: UnitSystem, unit?:
   if (!scale) {
     const abs = Math.abs(valueSI);
     scale = list.find((s) => abs >= s.factor * (s.min ?? 1) * 0.99995) ?? list[list.length - 1];
-    if (abs === 0) scale = list.find((s) => s.factor === 1) ?? list[list.length - 1];
+    if (abs === 0) scale = list.find((s) => s.factor === 1) ?? list.find((s) => s.zero) ?? list[list.length - 1];
   }
   return { value: valueSI / scale.factor, unit: scale.unit };
 }

@@ -71,6 +71,11 @@ describe("the traps (stack notes: a scope variable shadows a unit; an unknown un
 describe("units this trade types", () => {
   it.each([
     ["350 psi", "pressure", 350 * 6894.757293168361],
+    // a fan's and a duct's pressures, from their definitions (NIST SP 811 Appendix B.8 lists 2.490 889 E+02 Pa for the conventional inch of water,
+    // pound-force per square foot 4.788 026 E+01 Pa; millimetre of water, conventional, 9.806 65 Pa — from memory)
+    ["-1.5 inH2O", "pressure", -1.5 * 1000 * 9.80665 * 0.0254],
+    ["20 psf", "pressure", (20 * 4.4482216152605) / 0.3048 ** 2],
+    ["25 mmH2O", "pressure", 25 * 9.80665],
     ["12 kN", "force", 12000],
     ["3 kN m", "moment", 3000],
     ["3 kN·m", "moment", 3000],

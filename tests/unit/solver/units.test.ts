@@ -20,6 +20,12 @@ describe("formatQuantity", () => {
     [35, "angle", "SI", "35°"],
     [0, "force", "SI", "0 N"],
     [0.00045, "area", "US", "0.6975 in²"],
+    // below a psi, inches of water (conventional: 249.0889 Pa, NIST SP 811 Appendix B.8, from memory)
+    [-250, "pressure", "US", "−1.004 inH2O"],
+    [6000, "pressure", "US", "24.09 inH2O"],
+    [6894.757293168361, "pressure", "US", "1 psi"],
+    [0, "pressure", "US", "0 psi"],
+    [-250, "pressure", "SI", "−250 Pa"],
   ] as const)("%s %s in %s → %s", (v, q, sys, out) => {
     expect(formatQuantity(v, q, sys)).toBe(out);
   });
