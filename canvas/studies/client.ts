@@ -1,15 +1,14 @@
 // Runs study jobs in a worker, with progress and cancel; directly on the calling thread where
 // no worker exists (tests).
-import type { LimitResult } from "@/solver/limit";
-import type { StudyResult } from "@/solver/cases";
-import { runJob, SketchInputError, type LimitEverywhere, type OnProgress, type StudyJob, type StudyMessage, type SweepData } from "./run";
+import { SketchInputError, type OnProgress, type StudyMessage } from "./run";
+import { runStudyJob, type AnyStudyJob, type JobResult } from "./keptSweep";
 
 export interface Running<T> {
   promise: Promise<T>;
   cancel: () => void;
 }
 
-type Result<J extends StudyJob> = J extends { kind: "cases" } ? StudyResult : J extends { kind: "sweep" } ? SweepData : J extends { kind: "limits" } ? LimitEverywhere[] : LimitResult;
+type Result<J extends AnyStudyJob> = JobResult<J>;
 
 export class CancelledError extends Error {
   constructor(message = "stopped") {
@@ -46,7 +45,7 @@ export class StudyRunner {
     this.worker = this.start();
   }
 
-  run<J extends StudyJob>(job: J, onProgress: OnProgress = () => {}): Running<Result<J>> {
+  run<J extends AnyStudyJob>(job: J, onProgress: OnProgress = () => {}): Running<Result<J>> {
     if (this.disposed) return { promise: Promise.reject(new CancelledError()), cancel: () => {} };
     const id = ++this.seq;
     const worker = this.worker;
@@ -100,7 +99,7 @@ export class StudyRunner {
 }
 
 /** The same work on this thread, a turn of the event loop later (as a worker would answer). */
-function runHere<J extends StudyJob>(job: J, onProgress: OnProgress): Running<Result<J>> {
+function runHere<J extends AnyStudyJob>(job: J, onProgress: OnProgress): Running<Result<J>> {
   let rejectIt: ((err: Error) => void) | null = null;
   let timer: ReturnType<typeof setTimeout> | undefined;
   const promise = new Promise<Result<J>>((resolve, reject) => {
@@ -108,7 +107,7 @@ function runHere<J extends StudyJob>(job: J, onProgress: OnProgress): Running<Re
     timer = setTimeout(() => {
       rejectIt = null;
       try {
-        resolve(runJob(job, onProgress) as Result<J>);
+        resolve(runStudyJob(job, onProgress));
       } catch (err) {
         reject(err);
       }

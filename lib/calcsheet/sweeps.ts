@@ -187,7 +187,7 @@ export interface SweepLimitRow {
  * first and still leave the body held: the table marks the first limit of all, and the summary says
  * each body's own first limit beside it.
  */
-export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLimitRow[]; unit: string; tolerance: number } {
+export function sweepLimitRows(file: SketchFile, sw: SweepFile, onProgress?: (done: number, total: number) => void): { rows: SweepLimitRow[]; unit: string; tolerance: number } {
   const names = elementNames(file);
   const limits: Array<{ q: QuantitySpec; limit: string; past: string }> = [];
   for (const s of file.supports) {
@@ -227,6 +227,7 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
   const rows: SweepLimitRow[] = [];
   const all: LimitEverywhere[] = [];
   /** One limit's rows, a row per run searched, the first of them marked. */
+  let searchedLimits = 0;
   const addRows = (runs: LimitEverywhere[], quantity: QuantitySpec, limit: string, past: string, body?: string) => {
     const first = firstReached(runs, sw.from, sw.to);
     for (const run of runs) {
@@ -240,6 +241,7 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile): { rows: SweepLi
       rows.push({ run, quantity, limit, past, value, more: Math.max(0, crossings - 1), pastThroughout, first: !!first?.tied.includes(run), governs: false, ...(body ? { body } : {}) });
       all.push(run);
     }
+    onProgress?.(++searchedLimits, limits.length + tipping.length + sliding.length);
   };
   for (const { q, limit, past } of limits) {
     const runs: LimitEverywhere[] = [];
@@ -316,8 +318,8 @@ function bodyWords(rows: SweepLimitRow[], sw: SweepFile, p: string, unit: string
  * marked ◆ and said in words, the first of each other limit ◇, so the mark is never colour alone.
  * When what governs is a support's limit, the summary says each body's own first limit after it.
  */
-export function sweepLimitTable(file: SketchFile, sw: SweepFile): { table: Table; summary: string } {
-  const { rows, unit, tolerance } = sweepLimitRows(file, sw);
+export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (done: number, total: number) => void): { table: Table; summary: string } {
+  const { rows, unit, tolerance } = sweepLimitRows(file, sw, onProgress);
   const ownId = sw.combination ?? sw.case ?? "";
   const u = unit ? ` ${prettyUnit(unit)}` : "";
   const span = `${formatNumber(sw.from, 6)} … ${formatNumber(sw.to, 6)}${u}`;

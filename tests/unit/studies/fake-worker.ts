@@ -1,11 +1,12 @@
 // A stand-in for the studies' web worker: it records the jobs it is sent and answers only when
 // the test says so, either with messages the test writes or by running the job for real.
-import { runJob, type StudyJob, type StudyMessage } from "@/canvas/studies/run";
+import { SketchInputError, type StudyMessage } from "@/canvas/studies/run";
+import { runStudyJob, type AnyStudyJob } from "@/canvas/studies/keptSweep";
 
 type Listener = (e: { data?: unknown; message?: string; preventDefault?: () => void }) => void;
 
 export class FakeWorker {
-  received: Array<{ id: number; job: StudyJob }> = [];
+  received: Array<{ id: number; job: AnyStudyJob }> = [];
   terminated = false;
   /** messages made by `compute` and not yet delivered */
   queued: StudyMessage[] = [];
@@ -19,7 +20,7 @@ export class FakeWorker {
     this.listeners.set(type, (this.listeners.get(type) ?? []).filter((f) => f !== fn));
   }
 
-  postMessage(m: { id: number; job: StudyJob }) {
+  postMessage(m: { id: number; job: AnyStudyJob }) {
     if (this.terminated) throw new Error("posted to a terminated worker");
     this.received.push(m);
   }
@@ -43,10 +44,11 @@ export class FakeWorker {
   compute(k = this.received.length - 1) {
     const { id, job } = this.received[k];
     try {
-      const data = runJob(job, (done, total) => this.queued.push({ id, done, total }));
+      const data = runStudyJob(job, (done, total) => this.queued.push({ id, done, total }));
       this.queued.push({ id, data: structuredClone(data) });
     } catch (err) {
-      this.queued.push({ id, error: (err as Error).message });
+      // as the worker says it: the message, and a sketch's field errors for the page's own words
+      this.queued.push({ id, error: (err as Error).message, ...(err instanceof SketchInputError ? { fields: err.fields, ...(err.on ? { on: err.on } : {}) } : {}) });
     }
   }
 
