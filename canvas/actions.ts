@@ -479,7 +479,7 @@ export function toolHint(tool: Tool, touch = false): string | null {
       return `${touch ? "Tap" : "Click"} on the drawing: the hand check takes moments about that point.${touch ? "" : " Enter takes the selected element's point."}${stop}`;
     case "calibrate":
       return tool.points.length === 0
-        ? `Setting the scale: ${act} the first of two marks a known distance apart on the drawing.${stop}`
+        ? `Setting the scale: ${act} the first of two marks a known distance apart on the drawing (the farther apart they are, and the closer you zoom in on each, the more exact the scale).${stop}`
         : tool.points.length === 1
           ? `Setting the scale: now ${act} the second mark.${stop}`
           : "Type the real distance between the two marks in the Underlay section, then Set the scale.";

@@ -18,7 +18,7 @@ import { exampleById, type Example } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
 import { replaceSketch } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
-import { readUnitsPreference, writeUnitsPreference } from "@/components/sketches/format";
+import { readSnapPreference, readUnitsPreference, writeSnapPreference, writeUnitsPreference } from "@/components/sketches/format";
 import { ResultsDock } from "@/components/results/ResultsDock";
 import { ImportErrorDialog } from "./ImportErrorDialog";
 import { Outline } from "./Outline";
@@ -392,8 +392,11 @@ export function Editor({ persistence, example, toolbarExtra }: { persistence: Sk
   useEffect(() => {
     let live = true;
     store.getState().setUnits(readUnitsPreference());
+    // snapping turned off while tracing stays off after a reload, as the units do
+    store.getState().setSnap(readSnapPreference());
     const unsub = store.subscribe((s, p) => {
       if (s.units !== p.units) writeUnitsPreference(s.units);
+      if (s.snap !== p.snap) writeSnapPreference(s.snap);
     });
     void persistence.load().then((out) => {
       if (!live) return;

@@ -14,6 +14,17 @@ export function writeUnitsPreference(units: UnitSystem): void {
   if (typeof window !== "undefined") window.localStorage.setItem(UNITS_KEY, units);
 }
 
+/** Where the browser keeps whether the editor snaps to the grid and to outlines (on unless turned off). */
+export const SNAP_KEY = "counterpoise:snap";
+
+export function readSnapPreference(): boolean {
+  return typeof window === "undefined" || window.localStorage.getItem(SNAP_KEY) !== "off";
+}
+
+export function writeSnapPreference(on: boolean): void {
+  if (typeof window !== "undefined") window.localStorage.setItem(SNAP_KEY, on ? "on" : "off");
+}
+
 /** A force with 3–4 significant figures ("4.62 kN", "1,039 lbf"), or a dash. */
 export function formatForce(newtons: number | null | undefined, units: UnitSystem = "SI"): string {
   return newtons === null || newtons === undefined || !Number.isFinite(newtons) ? "—" : formatQuantity(newtons, "force", units);

@@ -19,6 +19,11 @@ describe("toolHint", () => {
     expect(toolHint({ kind: "body", shape: "rectangle", points: [] })).toMatch(/^Body: drag a rectangle on the drawing, or click for one of the default size centred there\./);
     expect(toolHint({ kind: "body", shape: "polygon", points: [[0, 0]] })).toMatch(/^Polygon body: 1 corner placed\. Click each next corner/);
     expect(toolHint({ kind: "pick-point" })).toMatch(/the hand check takes moments about that point/);
+    // a mark clicked at a small zoom is a few image pixels out: the hint says how to make the scale exact
+    expect(toolHint({ kind: "calibrate", points: [] })).toBe(
+      "Setting the scale: click the first of two marks a known distance apart on the drawing (the farther apart they are, and the closer you zoom in on each, the more exact the scale). Esc to stop.",
+    );
+    expect(toolHint({ kind: "calibrate", points: [[10, 10]] })).toBe("Setting the scale: now click the second mark. Esc to stop.");
   });
 
   it("on a touch screen, speaks of taps and Done, never of keys", () => {
