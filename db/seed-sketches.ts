@@ -58,6 +58,33 @@ function stackCasesAt40(d: Doc): void {
 const STACK =
   "An 8 m stack (600 mm) stands on a 3 m skid, 0.7 m deep, laid unbolted on a concrete pad, to carry a standby generator's exhaust during an outage. The gas comes in through a 500 mm flexible duct on the side of the stack, 1.6 m up, with 2 kPa of back-pressure, and leaves at the top. Wind on the stack: q = ½ρv², drag coefficient 0.7 on the projected width.";
 
+/**
+ * The roof fan's wind cases at the roof's 45 m/s design wind (the example runs them at 30 m/s):
+ * each case's name says the speed it sets.
+ */
+function fanCasesAt45(d: Doc): void {
+  d.cases = (d.cases as Array<Record<string, unknown>>).map((c) =>
+    c.id === "running-wind"
+      ? { ...c, name: "Fan running, 45 m/s design wind", parameters: { v: "45 m/s" } }
+      : c.id === "stopped-wind"
+        ? { ...c, name: "Fan stopped, 45 m/s design wind", parameters: { v: "45 m/s", Q: "0 m^3/s" } }
+        : c,
+  );
+}
+
+/** The roof fan bolted down: the inlet-end foot pinned, the discharge-end foot in slotted holes (a roller), and the sweeps plotting the bolts' forces. */
+function fanBolted(d: Doc): void {
+  d.supports = [
+    { id: "inlet_foot", label: "inlet-end foot (bolted)", body: "fan", kind: "pin", at: [0.15, 0] },
+    { id: "outlet_foot", label: "discharge-end foot (slotted holes)", body: "fan", kind: "roller", at: [1.05, 0], angle: 90 },
+  ];
+  for (const sweep of d.sweeps as Array<{ quantities: unknown[] }>) sweep.quantities = [{ support: "outlet_foot", component: "n" }, { support: "inlet_foot", component: "fx" }];
+}
+
+/** The roof fan as set on its frame, for its later versions' notes. */
+const FAN =
+  "A 1 m axial fan in its short duct casing, 340 kg with its motor, bell-mouth and discharge bend, on a steel roof frame. It draws 8 m³/s of air (1.2 kg/m³) in through the bell-mouth (−65 Pa gauge at 10.2 m/s) and turns it straight up, out of a 0.8 m cowl at 15.9 m/s: the air pushes the fan 46 N toward its discharge end and 153 N down. Wind on the discharge end, against that push: q = ½ρv², force coefficient 1.1 on the 1.1 m wide casing.";
+
 export const DEMO_SKETCHES: DemoSketch[] = [
   {
     id: "6d656d6f-0000-4000-8000-0000000000a1",
@@ -220,6 +247,50 @@ export const DEMO_SKETCHES: DemoSketch[] = [
         message: "1200 kg of concrete blocks on the skid: every case holds at the 40 m/s design wind, with its factors met",
         edit: (d) => (d.parameters!.ballast = "1200 kg"),
         notes: `${STACK} With 1200 kg of concrete blocks on the skid (their centre 0.45 m up) the upwind edge bears again at the site's design wind of 40 m/s, engine running or stopped, with factors of 1.83 or more against overturning and 3.06 against sliding; the factored uplift check holds with 1.10 against the 1.0 it asks. In that check the lightly loaded upwind edge needs more friction than its share, but the skid as a whole has friction to spare (1.84). 900 kg was not enough: engine stopped, the upwind edge slipped and the uplift check tipped.`,
+      },
+    ],
+  },
+  {
+    id: "6d656d6f-0000-4000-8000-0000000000a7",
+    file: "canvas/examples/roof-fan.json",
+    title: "Roof extract fan on its frame",
+    description: "1 m axial fan on the plant-room roof, its feet on neoprene pads, not yet bolted. Does it stay put in the roof's design wind, running or stopped?",
+    tags: ["ventilation", "roof"],
+    steps: [
+      { by: "eddie", daysAgo: 11, message: "Fan on its pads on the roof frame: 8 m³/s, discharge straight up, wind cases at 30 m/s" },
+      {
+        by: "eddie",
+        daysAgo: 9,
+        message: "Wind cases at the roof's 45 m/s design wind: the discharge-end foot lifts and the fan tips, running or stopped",
+        edit: (d) => {
+          d.parameters!.v = "45 m/s";
+          fanCasesAt45(d);
+        },
+        notes: `${FAN} Its feet sit on neoprene pads (μ = 0.6), not bolted. At the roof's 45 m/s design wind the fan tips about its inlet-end foot, running or stopped: the discharge-end foot lifts from 42.7 m/s with the fan stopped, from 44.4 m/s with it running. The feet must be bolted to the frame.`,
+      },
+      {
+        by: "eddie",
+        daysAgo: 7,
+        message: "Bolted the feet: the inlet-end foot pinned, the discharge-end foot in slotted holes",
+        edit: fanBolted,
+        notes: `${FAN} The feet are bolted to the frame: the inlet-end foot pinned, the discharge-end foot in slotted holes (a roller, free along the fan's axis). At the roof's 45 m/s design wind the fan holds in every case: the inlet-end bolts take the whole sideways load, 2.1 kN with the fan stopped, and the discharge-end bolts hold that foot down with 206 N.`,
+      },
+    ],
+    review: [
+      { version: 1, step: "submit", by: "eddie", daysAgo: 10.9 },
+      { version: 1, step: "return", by: "chen", daysAgo: 10.2, note: "30 m/s is the open-ground figure: the wind report gives 45 m/s at the roof edge. Please run the wind cases at 45 m/s." },
+      { version: 3, step: "submit", by: "eddie", daysAgo: 6.9 },
+      { version: 3, step: "check", by: "chen", daysAgo: 6.2, note: "Inlet-end bolts: 2.1 kN of shear; discharge-end bolts: 206 N of uplift; both with the fan stopped." },
+    ],
+    comments: [
+      {
+        version: 2,
+        by: "chen",
+        daysAgo: 8.6,
+        body: "Running only holds the discharge-end foot down to 44.4 m/s, and the fan will be stopped in a storm anyway. @Eddie can the feet be bolted to the frame?",
+        pin: { kind: "element", elementId: "outlet_foot" },
+        replies: [{ by: "eddie", daysAgo: 8.5, body: "Yes, the frame is drilled for them. I will slot the discharge end so the casing can grow when warm." }],
+        resolved: "chen",
       },
     ],
   },

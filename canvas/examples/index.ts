@@ -7,6 +7,7 @@ import pipeBend from "./pipe-bend-anchor.json";
 import washingCart from "./washing-cart.json";
 import pumpSkid from "./pump-skid.json";
 import exhaustStack from "./exhaust-stack.json";
+import roofFan from "./roof-fan.json";
 
 export interface Example {
   id: string;
@@ -29,6 +30,7 @@ export const EXAMPLES: readonly Example[] = [
   { id: "washing-cart", title: "Pressure-washing cart with a fixed lance", summary: "Raise the lance and the cart tips back off its front caster; four operating cases and a lance-angle sweep.", sketch: load(washingCart) },
   { id: "pump-skid", title: "Dewatering pump skid", summary: "Suction and discharge on a skid held by friction at two bearers.", sketch: load(pumpSkid) },
   { id: "exhaust-stack", title: "Temporary exhaust stack on a skid", summary: "Wind against the duct's push on an unbolted 8 m stack: the upwind edge lifts at 35.4 m/s with the engine stopped, and at 27.4 m/s in the factored uplift check.", sketch: load(exhaustStack) },
+  { id: "roof-fan", title: "Axial ducted fan on a roof frame", summary: "A 1 m fan on unbolted feet, the push of its air against the wind: with the fan stopped, the discharge-end foot lifts at 42.7 m/s; a wind sweep and a flow sweep.", sketch: load(roofFan) },
 ];
 
 export function exampleById(id: string): Example | undefined {

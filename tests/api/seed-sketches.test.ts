@@ -29,6 +29,7 @@ describe("demo sketches", () => {
     expect(story(DEMO_SKETCHES[3].id)).toEqual(["v1 holds", "v2 holds"]);
     expect(story(DEMO_SKETCHES[4].id)).toEqual(["v1 holds", "v2 tips", "v3 holds"]);
     expect(story(DEMO_SKETCHES[5].id)).toEqual(["v1 holds", "v2 tips", "v3 holds"]);
+    expect(story(DEMO_SKETCHES[6].id)).toEqual(["v1 holds", "v2 tips", "v3 holds"]);
     for (const s of sketches) expect(s.latestVersion).toBe(rows.filter((r) => r.sketchId === s.id).length);
     expect(rows.find((r) => r.sketchId === DEMO_SKETCHES[0].id && r.number === 3)?.message).toBe("Moved the rear bearer 0.3 m east to clear the drain channel");
 

@@ -18,6 +18,7 @@ describe("the demo sketches' notes", () => {
       a4: [["10 bar"], ["15 bar", "5 kPa"]],
       a5: [["85 kg"], ["−50°", "85 kg", "tips back"], ["−50°", "145 kg", "bears again", "1.55"]],
       a6: [["30 m/s"], ["40 m/s", "lifts"], ["40 m/s", "1200 kg", "bears again"]],
+      a7: [["30 m/s", "neoprene pads", "not yet bolted"], ["45 m/s", "tips", "not bolted"], ["45 m/s", "bolted", "slotted holes"]],
     };
     for (const [id, versions] of Object.entries(expected)) {
       const notes = notesOf(id);
@@ -35,6 +36,7 @@ describe("the demo sketches' notes", () => {
       a4: [[2, "10 bar"]],
       a5: [[3, "85 kg"], [2, "steeply down"]],
       a6: [[2, "30 m/s"], [3, "30 m/s"], [3, "1.39"]],
+      a7: [[2, "30 m/s"], [3, "30 m/s"], [3, "neoprene"], [3, "tips"]],
     };
     for (const [id, words] of Object.entries(stale)) {
       const notes = notesOf(id);
@@ -66,6 +68,12 @@ describe("the demo sketches' stories agree with the solver", () => {
       // furthest below its required value: the 38 m/s storm's 0.867 of 1.5, not the uplift check's 0.835 of 1.0
       { status: "holds", slips: [], low: ["overturning", 0.867] },
       { status: "tips", slips: [], low: ["overturning", 0.469] },
+      { status: "holds", slips: [], low: null },
+    ],
+    a7: [
+      { status: "holds", slips: [], low: null },
+      // furthest below its required value: the stopped fan's overturning, 0.900 of 1.5
+      { status: "tips", slips: [], low: ["overturning", 0.9] },
       { status: "holds", slips: [], low: null },
     ],
   };
