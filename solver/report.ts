@@ -611,7 +611,7 @@ export function handCheckDifferenceText(shown: number, rounding: boolean, unit =
 
 /** The hand check: every term with its components, point of action and moment about `about`.
  *  `opts.scale`: the units of a larger whole (the calc sheet's), else the check's own values choose them. */
-export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem, opts: { scale?: Scale } = {}): Table {
+export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem, opts: { scale?: Scale; name?: string } = {}): Table {
   const eq = result.equations[bodyId];
   const sums = handCheckSums(eq, about);
   // its own scale says what is floating-point noise; the units may be the sheet's
@@ -656,7 +656,7 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
   const rounded = keys.filter((k) => sides[k].rounding);
   return {
     id: `hand-check-${bodyId}`,
-    title: `Hand check of ${bodyId}: ΣF = Σ(ṁV)out − Σ(ṁV)in, ΣM about ${point}`,
+    title: `Hand check of ${opts.name ?? bodyId}: ΣF = Σ(ṁV)out − Σ(ṁV)in, ΣM about ${point}`,
     columns: [
       { key: "side", label: "Side", align: "left" },
       { key: "term", label: "Term", align: "left" },

@@ -202,7 +202,7 @@ export function HandCheckView() {
           type="button"
           className={`${BUTTON} ml-auto`}
           aria-label="Download the hand check as CSV"
-          onClick={() => shown && downloadCsv(handCheckTable(shown, body.id, about, units), csvName(`hand-check-${body.id}`))}
+          onClick={() => shown && downloadCsv(handCheckTable(shown, body.id, about, units, { name: body.label?.trim() || body.id }), csvName(`hand-check-${body.id}`))}
         >
           CSV
         </button>

@@ -247,8 +247,10 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
 
   // ---- hand check
   for (const { id: bodyId, about } of handChecks) {
-    const table = handCheckTable(result, bodyId, about, units, { scale: sheetScale });
-    tableHeading(`Hand check — ${bodyId}`, table);
+    // the body as the drawing labels it (its id where it has no label)
+    const name = parsed.file.bodies.find((b) => b.id === bodyId)?.label?.trim() || bodyId;
+    const table = handCheckTable(result, bodyId, about, units, { scale: sheetScale, name });
+    tableHeading(`Hand check — ${name}`, table);
     drawTable(doc, table, left, width);
   }
 

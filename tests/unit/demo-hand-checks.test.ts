@@ -1,4 +1,4 @@
-// The six demo sketches (invented demo scenarios, db/seed-sketches.ts), each reaction re-derived by
+// Six of the demo sketches (invented demo scenarios, db/seed-sketches.ts; the roof fan, a7, has its own hand calculation in roof-fan-example.test.ts), each reaction re-derived by
 // hand from the control-volume equations, as a checker does before signing a calc off:
 //
 //   linear momentum     ΣF(reactions) + ΣF(loads) + W + ΣF(pressure) = Σ_out ṁ·V − Σ_in ṁ·V

@@ -6,7 +6,7 @@ import { buildCalcSheet } from "@/lib/calcsheet/pdf";
 import { pdfItems } from "../../support/pdf-text";
 import { pushedTallBlock } from "./pushed-tall-block";
 
-const HEADINGS = ["Hand check — block", "Reactions per case (forces on the body)", "Envelope and design loads", "Stability"];
+const HEADINGS = ["Hand check — Block", "Reactions per case (forces on the body)", "Envelope and design loads", "Stability"];
 /** Baselines below this (pt from the page's bottom) are the footer's. */
 const FOOTER_TOP = 50;
 

@@ -72,6 +72,9 @@ describe("result tables", () => {
   it("the hand-check table closes: the two sums print alike and the imbalance is zero or said to be rounding", () => {
     const r = solve(parsedFixture("pump-skid-discharge.json").sketch);
     const t = handCheckTable(r, "skid", [2, 1], "SI");
+    // titled by the body's id, or by the name the drawing gives it
+    expect(t.title).toMatch(/^Hand check of skid: ΣF = /);
+    expect(handCheckTable(r, "skid", [2, 1], "SI", { name: "Pump skid" }).title).toMatch(/^Hand check of Pump skid: ΣF = /);
     const last = t.rows[t.rows.length - 1];
     expect(last[1]).toMatch(/imbalance/);
     // rounding noise of the sums is not a figure, nor is it hidden as a bare 0: each difference is
