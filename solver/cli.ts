@@ -10,18 +10,25 @@
 //                     where the quantity reaches the target (0 unless given; a plain number is SI,
 //                     N or N·m, or give a unit: "450 lbf") as NAME (a parameter or flowFactor) runs
 //                     from FROM to TO (in NAME's own unit)
+//   --limit NAME=FROM..TO --quantity BODY.tips | BODY.slides [--case ID | --combination ID |
+//           --every-case] FILE
+//                     where the body itself starts to tip (no set of its contacts and ties holds it)
+//                     or to slide as a whole (Σμ·n − |Σt| of its bearing friction contacts reaches
+//                     zero): the limit itself, so no --target; for sliding, "tipsFrom" says where
+//                     the body tips in the range (sliding is read only while it is held)
 import { readFileSync } from "node:fs";
 import { solveCases } from "./cases";
 import { evaluateToNumber } from "./expressions";
-import { findLimitWith } from "./limit";
 import { parseSketch, solveFile } from "./index";
-import type { QuantityComponent, QuantitySpec } from "./quantity";
-import { firstReached, limitEverywhere, sweeperOn } from "./studySweep";
+import type { QuantityComponent } from "./quantity";
+import { bodyLimits, findAnyLimitWith, firstReached, limitEverywhere, sweeperOn, type LimitQuantity } from "./studySweep";
 import type { FieldError } from "./types";
 
 const USAGE =
-  "usage: npm run solve -- FILE | --cases FILE | --limit NAME=FROM..TO --quantity SUPPORT.COMPONENT [--target VALUE] [--case ID | --combination ID | --every-case] FILE (FILE is a sketch file, or - for standard input)";
+  "usage: npm run solve -- FILE | --cases FILE | --limit NAME=FROM..TO --quantity SUPPORT.COMPONENT [--target VALUE] [--case ID | --combination ID | --every-case] FILE | --limit NAME=FROM..TO --quantity BODY.tips|BODY.slides [--case ID | --combination ID | --every-case] FILE (FILE is a sketch file, or - for standard input)";
 const COMPONENTS: readonly QuantityComponent[] = ["fx", "fy", "m", "n", "t", "resultant", "margin", "frictionRatio", "frictionMargin"];
+/** a body's own limits, after the body's id: BODY.tips, BODY.slides */
+const BODY_LIMITS = ["tips", "slides"] as const;
 
 type Out = { code: number; body: unknown };
 const fail = (errors: FieldError[]): Out => ({ code: 1, body: { ok: false, errors } });
@@ -69,10 +76,13 @@ function limit(opts: Map<string, string>, text: string): Out {
   const [from, to] = [Number(range[2]), Number(range[3])];
   if (!Number.isFinite(from) || !Number.isFinite(to) || from === to) return fail([{ path: "--limit", message: `${range[2]}..${range[3]} is not a range of two different numbers` }]);
   const qm = /^(.+)\.(\w+)$/.exec(opts.get("--quantity") ?? "");
-  if (!qm) return usage("--quantity takes SUPPORT.COMPONENT, as rear.margin");
+  if (!qm) return usage("--quantity takes SUPPORT.COMPONENT, as rear.margin, or BODY.tips or BODY.slides, as cart.tips");
+  const bodyLimit = (BODY_LIMITS as readonly string[]).includes(qm[2]) ? (qm[2] as (typeof BODY_LIMITS)[number]) : undefined;
   const component = qm[2] as QuantityComponent;
-  if (!COMPONENTS.includes(component)) return fail([{ path: "--quantity", message: `${qm[2]} is not one of ${COMPONENTS.join(", ")}` }]);
-  const quantity: QuantitySpec = { support: qm[1], component };
+  if (!bodyLimit && !COMPONENTS.includes(component)) return fail([{ path: "--quantity", message: `${qm[2]} is not one of ${[...COMPONENTS, ...BODY_LIMITS].join(", ")}` }]);
+  // a body's own limit is the limit itself (it tips, it slides): there is nothing to reach
+  if (bodyLimit && opts.has("--target")) return fail([{ path: "--target", message: `${qm[1]}.${bodyLimit} is a body's own limit, reached where it ${bodyLimit === "tips" ? "starts to tip" : "starts to slide as a whole"}: it takes no --target` }]);
+  const quantity: LimitQuantity = bodyLimit ? { body: qm[1], limit: bodyLimit } : { support: qm[1], component };
   let target = 0;
   const t = opts.get("--target");
   if (t !== undefined) {
@@ -85,8 +95,23 @@ function limit(opts: Map<string, string>, text: string): Out {
   }
   const p = parsed(text);
   if ("code" in p) return p;
-  if (!p.file.supports.some((s) => s.id === quantity.support)) return fail([{ path: "--quantity", message: `the sketch has no support "${quantity.support}"` }]);
-  const head = { ok: true, parameter: range[1], from, to, quantity, target };
+  if (bodyLimit) {
+    const ids = p.file.bodies.map((b) => b.id);
+    if (!ids.includes(qm[1])) return fail([{ path: "--quantity", message: `the sketch has no body "${qm[1]}" (bodies: ${ids.join(", ") || "none"})` }]);
+    // searched only where the calc sheet's limits table searches it: a body on contacts or ties (to
+    // tip), on contacts and ties alone with a μ on one (to slide as a whole)
+    if (!bodyLimits(p.file).some((b) => b.body === qm[1] && b.limit === bodyLimit))
+      return fail([
+        {
+          path: "--quantity",
+          message:
+            bodyLimit === "tips"
+              ? `the body "${qm[1]}" has no contact or tie: nothing it bears on can let go, so it cannot tip`
+              : `the body "${qm[1]}" cannot slide as a whole: it needs a contact with a friction coefficient μ, and no pin, roller or fixed support (they resist sliding)`,
+        },
+      ]);
+  } else if (!p.file.supports.some((s) => s.id === qm[1])) return fail([{ path: "--quantity", message: `the sketch has no support "${qm[1]}"` }]);
+  const head = { ok: true, parameter: range[1], from, to, quantity, ...(bodyLimit ? {} : { target }) };
   try {
     if (opts.has("--every-case")) {
       if (opts.has("--case") || opts.has("--combination")) return usage("--every-case searches every case and combination: give it no --case or --combination");
@@ -98,7 +123,7 @@ function limit(opts: Map<string, string>, text: string): Out {
       return { code: 0, body: { ...head, runs, first: first?.row.id ?? null, firstValue: first?.value ?? null } };
     }
     const sweeper = sweeperOn(p.file, { case: opts.get("--case"), combination: opts.get("--combination") }, range[1], p.sketch);
-    return { code: 0, body: { ...head, result: findLimitWith(sweeper, [from, to], quantity, target) } };
+    return { code: 0, body: { ...head, result: findAnyLimitWith(sweeper, [from, to], quantity, target) } };
   } catch (err) {
     return fail([{ path: "", message: (err as Error).message }]);
   }

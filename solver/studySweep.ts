@@ -7,7 +7,7 @@ import { caseInputErrors, caseSketch, combineModels } from "./cases";
 import { planOf, resolveFile } from "./parse";
 import type { SketchFile } from "./schema";
 import { prepare, solveModels } from "./solve";
-import { findLimitWith, formatLimit, limitTolerance, type LimitResult } from "./limit";
+import { findBodySlidingWith, findLimitWith, findTippingWith, formatLimit, limitTolerance, type LimitOptions, type LimitResult } from "./limit";
 import type { QuantitySpec } from "./quantity";
 import { createSetter, createSweeper, FLOW_FACTOR, type ParameterSetter, type Sweeper } from "./sweep";
 import type { FieldError, Sketch, SolveWarning } from "./types";
@@ -135,18 +135,75 @@ export function sweeperOn(file: SketchFile, on: SweepOn, parameter: string, asDr
   };
 }
 
+/**
+ * A body's own limit, searched as the calc sheet's limits table searches it (lib/calcsheet/sweeps.ts):
+ * where it tips (no set of its one-sided reactions holds it: `findTippingWith`) or where it slides as
+ * a whole (Σ μ·n − |Σ t| of its bearing friction contacts reaches zero: `findBodySlidingWith`). The
+ * limit itself, so it has no target.
+ */
+export interface BodyLimitSpec {
+  body: string;
+  limit: "tips" | "slides";
+}
+
+/** What the limit finder searches: a support's quantity reaching a target, or a body's own limit. */
+export type LimitQuantity = QuantitySpec | BodyLimitSpec;
+
+export const isBodyLimit = (q: LimitQuantity): q is BodyLimitSpec => "body" in q && "limit" in q;
+
+/**
+ * A body's limit searched: where it is reached, or why not. For sliding, `tipsFrom` is where the
+ * body starts to tip in the same range, going from its start (absent: it does not): sliding is read
+ * only while the body is held, so a body that tips first never slides in the search.
+ */
+export type BodyLimitResult = LimitResult & { tipsFrom?: number };
+
+/**
+ * The bodies whose own limits can be searched, as the calc sheet's limits table lists them: each
+ * body on a contact or a tie may tip; one on contacts and ties alone, one of them a contact with a μ,
+ * may slide as a whole (a pin, a roller or a fixed support resists sliding, as the stability check
+ * says).
+ */
+export function bodyLimits(file: Pick<SketchFile, "bodies" | "supports">): BodyLimitSpec[] {
+  const out: BodyLimitSpec[] = [];
+  for (const b of file.bodies) {
+    const own = file.supports.filter((s) => s.body === b.id);
+    if (own.some((s) => s.kind === "contact" || s.kind === "tie")) out.push({ body: b.id, limit: "tips" });
+  }
+  for (const b of file.bodies) {
+    const own = file.supports.filter((s) => s.body === b.id);
+    if (own.some((s) => s.kind === "contact" && s.mu !== undefined) && own.every((s) => s.kind === "contact" || s.kind === "tie")) out.push({ body: b.id, limit: "slides" });
+  }
+  return out;
+}
+
+/** A body's own limit with a sweeper made for it (`findTippingWith`, `findBodySlidingWith`); for
+ *  sliding, also where the body tips in the range (`tipsFrom`), the reason it may never slide. */
+export function findBodyLimitWith(sweeper: Sweeper, range: readonly [number, number], q: BodyLimitSpec, options: LimitOptions = {}): BodyLimitResult {
+  if (q.limit === "tips") return findTippingWith(sweeper, range, q.body, options);
+  const sliding = findBodySlidingWith(sweeper, range, q.body, options);
+  const tipsFrom = reachedAt(findTippingWith(sweeper, range, q.body, options), range[0], range[1]);
+  return tipsFrom === undefined ? sliding : { ...sliding, tipsFrom };
+}
+
+/** The limit finder on any quantity: a support's reaching `target`, or a body's own limit (no target). */
+export function findAnyLimitWith(sweeper: Sweeper, range: readonly [number, number], q: LimitQuantity, target = 0, options: LimitOptions = {}): BodyLimitResult {
+  return isBodyLimit(q) ? findBodyLimitWith(sweeper, range, q, options) : findLimitWith(sweeper, range, q, target, options);
+}
+
 export interface LimitEverywhere {
   /** the case's or combination's id ("" for the sketch as drawn, when it has neither) */
   id: string;
   name: string;
   kind: "case" | "combination" | "as drawn";
   /** `fields`: the input errors by field path when the run's sketch does not read */
-  result: LimitResult | { error: string; fields?: FieldError[] };
+  result: BodyLimitResult | { error: string; fields?: FieldError[] };
 }
 
 /**
  * The same limit searched in each case (but those solved only in combinations) and each
- * combination: under which of them, and at what value, does the quantity reach the target?
+ * combination: under which of them, and at what value, does the quantity reach the target (or the
+ * body reach its own limit: it tips, or slides as a whole)?
  * A sketch with neither is searched as drawn; one whose cases are all for combinations only,
  * with no combination, is refused (the case study solves nothing either).
  */
@@ -154,7 +211,7 @@ export function limitEverywhere(
   file: SketchFile,
   parameter: string,
   range: readonly [number, number],
-  quantity: QuantitySpec,
+  quantity: LimitQuantity,
   target = 0,
   asDrawn?: Sketch,
   onProgress: (done: number, total: number) => void = () => {},
@@ -173,7 +230,7 @@ export function limitEverywhere(
   return runs.map(({ on, ...run }, i) => {
     let result: LimitEverywhere["result"];
     try {
-      result = findLimitWith(sweeperOn(file, on, parameter, asDrawn), range, quantity, target);
+      result = findAnyLimitWith(sweeperOn(file, on, parameter, asDrawn), range, quantity, target);
     } catch (err) {
       result = { error: (err as Error).message, ...(err instanceof SketchInputError ? { fields: err.fields } : {}) };
     }

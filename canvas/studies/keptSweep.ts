@@ -8,8 +8,7 @@ import { runJob, runSweep, type OnProgress, type StudyJob, type SweepData } from
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import type { Table } from "@/solver/report";
 import type { StudyResult } from "@/solver/cases";
-import type { LimitResult } from "@/solver/limit";
-import type { LimitEverywhere } from "@/solver/studySweep";
+import type { BodyLimitResult, LimitEverywhere } from "@/solver/studySweep";
 
 /** `text`: the saved version's sketch file as JSON; `sweep`: the kept sweep's id in it. */
 export type KeptSweepJob = { kind: "kept-sweep"; text: string; sweep: string } | { kind: "kept-sweep-limits"; text: string; sweep: string };
@@ -39,7 +38,7 @@ export type JobResult<J extends AnyStudyJob> = J extends { kind: "cases" }
         ? KeptSweepPlot
         : J extends { kind: "kept-sweep-limits" }
           ? KeptSweepLimits
-          : LimitResult;
+          : BodyLimitResult;
 
 /** Points between progress messages: often enough for the bar to move, rare enough to cost nothing. */
 const CHUNK = 20;

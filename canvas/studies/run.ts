@@ -1,11 +1,11 @@
 // The studies' work, as plain functions that run in a worker (or directly in tests): all cases
 // and combinations at once, a sweep in chunks with progress and a way to stop, and the limit finder.
-import { findLimitWith, type LimitResult } from "@/solver/limit";
+import type { LimitResult } from "@/solver/limit";
 import { parseSketch } from "@/solver/parse";
 import type { QuantitySpec } from "@/solver/quantity";
 import { linspace, supportBodyHeld, supportOff, sweptQuantity } from "@/solver/sweep";
-import { limitEverywhere, SketchInputError, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
-export { firstReached, reachedAt, SketchInputError, type LimitEverywhere } from "@/solver/studySweep";
+import { findAnyLimitWith, limitEverywhere, SketchInputError, sweeperOn, type BodyLimitResult, type LimitEverywhere, type LimitQuantity } from "@/solver/studySweep";
+export { bodyLimits, firstReached, isBodyLimit, reachedAt, SketchInputError, type BodyLimitResult, type BodyLimitSpec, type LimitEverywhere, type LimitQuantity } from "@/solver/studySweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
 import type { FieldError } from "@/solver/types";
 import { marksZero } from "./display";
@@ -169,14 +169,16 @@ export interface LimitSpec {
   to: number;
   caseId?: string;
   combinationId?: string;
-  quantity: QuantitySpec;
+  /** a support's quantity, or a body's own limit (it tips, or slides as a whole: `target` is not read) */
+  quantity: LimitQuantity;
   target: number;
 }
 
-export function runLimit(file: unknown, spec: LimitSpec): LimitResult {
+/** The limit finder on one run; a body's sliding also says where the body tips (`tipsFrom`). */
+export function runLimit(file: unknown, spec: LimitSpec): BodyLimitResult {
   const p = parseSketch(file);
   if (!p.ok) throw new SketchInputError(p.errors);
-  return findLimitWith(sweeperOn(p.file, { case: spec.caseId, combination: spec.combinationId }, spec.parameter, p.sketch), [spec.from, spec.to], spec.quantity, spec.target);
+  return findAnyLimitWith(sweeperOn(p.file, { case: spec.caseId, combination: spec.combinationId }, spec.parameter, p.sketch), [spec.from, spec.to], spec.quantity, spec.target);
 }
 
 /** The limit search in every run of the study: each case solved on its own and each combination. */

@@ -1,8 +1,9 @@
 "use client";
 // "Sweep": one parameter (or the flow factor) over a range, the reactions and margins plotted
 // against it with the points where a contact lifts, a tie goes slack or friction is used up;
-// and the limit finder: where does a quantity reach a value?
-import { useEffect, useMemo, useRef, useState } from "react";
+// and the limit finder: where does a quantity reach a value, or a body reach its own limit (it tips,
+// it slides as a whole)?
+import { useEffect, useId, useMemo, useRef, useState } from "react";
 import { limitPrecisionWords, limitTolerance, limitWithUnit, type LimitResult } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/solver/quantity";
 import { elementNames } from "@/solver/cases";
@@ -15,7 +16,7 @@ import { setStudy } from "@/canvas/commands/studies";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { CancelledError, StudyRunner } from "@/canvas/studies/client";
-import { firstReached, reachedAt, type LimitEverywhere, type SweepData, type SweepSpec } from "@/canvas/studies/run";
+import { bodyLimits, firstReached, isBodyLimit, reachedAt, type BodyLimitResult, type BodyLimitSpec, type LimitEverywhere, type LimitQuantity, type SweepData, type SweepSpec } from "@/canvas/studies/run";
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
 import { runErrorWords, studyErrorWords } from "./studyError";
@@ -103,8 +104,63 @@ export function sidesWords(rows: readonly LimitEverywhere[], targetSI: number, t
   return ` ${andList(below)} ${below.length > 1 ? "stay" : "stays"} below ${target} over the whole range.`;
 }
 
+/** A body's own limit as the picker and the answers name it: "Cart tips", "Cart slides as a whole". */
+export function bodyLimitLabel(q: BodyLimitSpec, names: Readonly<Record<string, string>>): string {
+  return `${names[q.body] ?? q.body} ${q.limit === "tips" ? "tips" : "slides as a whole"}`;
+}
+
+/** What a body's own limit is, said after where it is reached. */
+const BODY_LIMIT_WHY: Record<BodyLimitSpec["limit"], string> = {
+  tips: "from there no set of its contacts and ties holds it",
+  slides: "its friction contacts together are used up there (Σμ·n − |Σt| = 0, a factor of 1 against sliding)",
+};
+
+/**
+ * A run of "In every case" in which a body's own limit is not reached, in words: a body that slides
+ * all along, one that tips first (sliding is searched only while the body is held), or one that
+ * holds throughout.
+ */
+export function bodyNoCrossingWords(result: BodyLimitResult & { found: false }, q: BodyLimitSpec, pName: string, unit: string): string {
+  if (!Number.isFinite(result.min)) return "no crossing in this range: not held anywhere in it, or nothing bears";
+  if (q.limit === "tips") return "no crossing in this range: it does not tip";
+  const tips = result.tipsFrom !== undefined ? `, it tips first, from ${pName} = ${limitWithUnit(result.tipsFrom, unit)}` : "";
+  if (result.max < 0) return `no crossing in this range: it slides as a whole throughout (Σμ·n − |Σt| stays below zero)${tips ? `, while it is held; then${tips.slice(1).replace(" first", "")}` : ""}`;
+  if (tips) return `no crossing in this range: searched while the body is held${tips}`;
+  return "no crossing in this range: it does not slide as a whole";
+}
+
+/**
+ * The answer of a search of a body's own limit in one run: where it tips or slides as a whole, and
+ * why that is the limit; else why it is not reached in the range. `over`: "for the flow factor from 0
+ * to 4"; `precision`: how far the value is given.
+ */
+export function bodyLimitWords(result: BodyLimitResult, q: BodyLimitSpec, label: string, pName: string, over: string, precision: string, from: number): string {
+  if (result.found) {
+    const again = result.crossings.length > 1 ? ` and again at ${result.crossings.slice(1).map((x) => limitWithUnit(x, result.unit)).join(", ")}` : "";
+    const start = result.value === from ? ", already at the range's start" : "";
+    return `${label} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again}${start} (${precision}): ${BODY_LIMIT_WHY[q.limit]}.`;
+  }
+  const name = label.slice(0, label.length - (q.limit === "tips" ? " tips" : " slides as a whole").length);
+  if (!Number.isFinite(result.min)) return `No crossing in this range: ${name} is not held anywhere ${over}${q.limit === "slides" ? ", or no contact with friction bears" : ""}.`;
+  if (q.limit === "tips") return `No crossing in this range: ${name} does not tip ${over} (a set of its contacts and ties holds it throughout).`;
+  const tips = result.tipsFrom !== undefined ? `from ${pName} = ${limitWithUnit(result.tipsFrom, result.unit)}` : "";
+  if (result.max < 0)
+    return `No crossing in this range: ${name} slides as a whole throughout, ${over} (Σμ·n − |Σt| stays below zero)${tips ? `, while it is held; it tips ${tips} (sliding is searched only while the body is held)` : ""}.`;
+  if (tips) return `No crossing in this range: ${name} does not slide as a whole while it is held, ${over}; it tips first, ${tips} (sliding is searched only while the body is held).`;
+  return `No crossing in this range: ${name} does not slide as a whole ${over}.`;
+}
+
+/** " Storm slides as a whole throughout the range." for the runs of a body's sliding past it all along. */
+export function bodySidesWords(rows: readonly LimitEverywhere[], q: BodyLimitSpec, names: Readonly<Record<string, string>>): string {
+  if (q.limit !== "slides") return "";
+  const all = rows.filter((r) => !("error" in r.result) && !r.result.found && r.result.max < 0).map((r) => r.name);
+  if (!all.length) return "";
+  return ` ${names[q.body] ?? q.body} slides as a whole throughout the range in ${andList(all)}.`;
+}
+
 export function SweepPanel() {
   const { editor } = useStores();
+  const noTargetId = useId();
   const sketch = useEditor((s) => s.sketch);
   const units = useEditor((s) => s.units);
   const parameters = Object.keys(sketch.parameters ?? {});
@@ -181,7 +237,7 @@ export function SweepPanel() {
   /** the quantity the limit finder searches, as "support:component" (null: the plot's default, see defaultLimitQuantity) */
   const [limitKey, setLimitKey] = useState<string | null>(null);
   const [target, setTarget] = useState("0");
-  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** in the unit on screen */ target: string; /** the answer, in words with units */ words: string } | null>(null);
+  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** in the unit on screen ("" for a body's own limit) */ target: string; /** the answer, in words with units */ words: string } | null>(null);
   /** the same limit in every case and combination */
   const [everywhere, setEverywhere] = useState<{
     rows: LimitEverywhere[];
@@ -199,6 +255,8 @@ export function SweepPanel() {
     /** the searched runs' cases that set the parameter themselves: "name: value" */
     overrides: string[];
     pName: string;
+    /** a body's own limit searched (no target) */
+    body?: BodyLimitSpec;
   } | null>(null);
   /** a target that does not read: said beside the limit finder, not up by the sweep's Run */
   const [limitError, setLimitError] = useState<string | null>(null);
@@ -288,15 +346,17 @@ export function SweepPanel() {
     }
     // a plain number is in the quantity's own unit, as the reactions table shows it (kN or N, kN·m or
     // N·m); a value with a unit ("450 lbf") is taken as written, and quoted in the unit on screen
-    let tgt: { si: number; shown: string };
-    try {
-      tgt = parseTarget(target, q.component, units, scaleFor(q.component));
-    } catch (err) {
-      setLimit(null);
-      setEverywhere(null);
-      setLimitError(`Target: ${(err as Error).message}.`);
-      return null;
-    }
+    let tgt: { si: number; shown: string } = { si: 0, shown: "" };
+    // a body's own limit (it tips, it slides as a whole) is the limit itself: no target is read
+    if (!isBodyLimit(q))
+      try {
+        tgt = parseTarget(target, q.component, units, scaleFor(q.component));
+      } catch (err) {
+        setLimit(null);
+        setEverywhere(null);
+        setLimitError(`Target: ${(err as Error).message}.`);
+        return null;
+      }
     setError(null);
     setLimitError(null);
     setLimit(null);
@@ -323,7 +383,7 @@ export function SweepPanel() {
         const reached = rows.map((r) => reachedAt(r.result, s.from, s.to)).filter((x): x is number => x !== undefined);
         setEverywhere({
           rows,
-          label: describeQuantity(q, names),
+          label: isBodyLimit(q) ? bodyLimitLabel(q, names) : describeQuantity(q, names),
           target: tgt.shown,
           targetSI: tgt.si,
           first: first ? first.tied.map((r) => r.id) : [],
@@ -334,6 +394,7 @@ export function SweepPanel() {
           precision: limitPrecisionWords(tolerance, unitText, reached),
           overrides: overridesIn(ran!.sketch, rows, s.parameter),
           pName: s.parameter === FLOW_FACTOR ? "flow factor" : s.parameter,
+          ...(isBodyLimit(q) ? { body: q } : {}),
         });
       })
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(studyErrorWords(ran?.sketch ?? sketch, err))))
@@ -347,11 +408,13 @@ export function SweepPanel() {
     const job = runner.current!.run({ kind: "limit", text, spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, combinationId: s.combinationId, quantity: q, target: tgt.si } });
     setSearching(() => job.cancel);
     job.promise
-      .then((result) => {
+      .then((result: BodyLimitResult) => {
         if (ranId.current !== id) return;
-        const label = describeQuantity(q, names);
-        const shownUnit = displayUnit(q.component, units, scaleFor(q.component));
-        const inShown = (si: number) => `${formatNumber(toDisplay(si, q.component, units, scaleFor(q.component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
+        const label = isBodyLimit(q) ? bodyLimitLabel(q, names) : describeQuantity(q, names);
+        // a body's sliding margin is a force, as a friction margin is
+        const component = isBodyLimit(q) ? "frictionMargin" : q.component;
+        const shownUnit = displayUnit(component, units, scaleFor(component));
+        const inShown = (si: number) => `${formatNumber(toDisplay(si, component, units, scaleFor(component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
         const pUnit = result.unit ? ` ${prettyUnit(result.unit)}` : "";
         const pName = s.parameter === FLOW_FACTOR ? "the flow factor" : s.parameter;
         // one rule for a found limit wherever it is shown: 4 significant figures, with the search's
@@ -360,7 +423,11 @@ export function SweepPanel() {
         // a range typed since the plot is the one searched: said, since the plot shows another
         const plotted = ran!.spec;
         const otherRange = s.from !== plotted.from || s.to !== plotted.to ? ` Searched from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit} as typed now; the plot shows ${formatNumber(plotted.from, 5)} to ${formatNumber(plotted.to, 5)}${pUnit}.` : "";
-        const words = result.found
+        const precision = result.found ? limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit, result.crossings) : "";
+        const over = `for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}`;
+        const words = isBodyLimit(q)
+          ? bodyLimitWords(result, q, label, pName, over, precision, s.from) + otherRange
+          : result.found
           ? `The ${label} reaches ${tgt.shown} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again} (${limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit, result.crossings)}).${otherRange}`
           : Number.isFinite(result.min)
             ? `No crossing in this range: the ${label} stays ${result.min >= tgt.si ? "above" : "below"} ${tgt.shown} (it runs from ${inShown(result.min)} to ${inShown(result.max)}) for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`
@@ -423,12 +490,17 @@ export function SweepPanel() {
       })
     : [];
   const plotted = ran?.spec.quantities ?? [];
-  const keyOf = (q: QuantitySpec) => `${q.support}:${q.component}`;
-  // the quantity picked while it is still plotted; else the one the plot marks where it reaches zero
+  // each body's own limits (it tips; it slides as a whole), as the calc sheet's limits table
+  // searches them, in the sketch the plot was run on: offered whatever is plotted
+  const bodyChoices = useMemo(() => (ran ? bodyLimits(ran.sketch) : []), [ran]);
+  const keyOf = (q: LimitQuantity) => (isBodyLimit(q) ? `body:${q.body}:${q.limit}` : `${q.support}:${q.component}`);
+  const limitChoices: LimitQuantity[] = [...plotted, ...bodyChoices];
+  // the quantity picked while it is still offered; else the one the plot marks where it reaches zero
   // (what the user sees happen), so the finder searches by default what the plot shows
   const shownByDefault = data ? data.quantities[defaultLimitQuantity(data)] : undefined;
-  const limitQuantity = plotted.find((q) => keyOf(q) === limitKey) ?? plotted.find((q) => shownByDefault && keyOf(q) === keyOf(shownByDefault)) ?? plotted[0];
-  const targetUnit = limitQuantity ? displayUnit(limitQuantity.component, units, scaleFor(limitQuantity.component)) : "";
+  const limitQuantity: LimitQuantity | undefined = limitChoices.find((q) => keyOf(q) === limitKey) ?? plotted.find((q) => shownByDefault && keyOf(q) === keyOf(shownByDefault)) ?? limitChoices[0];
+  const bodyLimit = limitQuantity && isBodyLimit(limitQuantity) ? limitQuantity : undefined;
+  const targetUnit = limitQuantity && !isBodyLimit(limitQuantity) ? displayUnit(limitQuantity.component, units, scaleFor(limitQuantity.component)) : "";
   const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
   // the plot's parameter, which the form may have left since
   const dLabel = data ? (data.parameter === FLOW_FACTOR ? "flow factor" : data.parameter) : pLabel;
@@ -591,13 +663,28 @@ export function SweepPanel() {
               {invalid.length > MAX_STRETCHES && <li className="text-caution">… and {invalid.length - MAX_STRETCHES} more stretches of invalid points.</li>}
             </ul>
             <div className="mt-2 flex flex-wrap items-center gap-1.5 border-t border-rule-soft pt-2" role="group" aria-label="Limit finder">
-              <span className={`${LABEL} whitespace-nowrap`}>At what {dLabel} does</span>
-              <select className={`${INPUT} !w-auto min-w-0`} value={limitQuantity ? plotted.indexOf(limitQuantity) : 0} onChange={(e) => setLimitKey(keyOf(plotted[Number(e.target.value)]))} aria-label="Quantity for the limit">
-                {plotted.map((q, i) => <option key={i} value={i}>{describeQuantity(q, names)}</option>)}
+              <span className={`${LABEL} whitespace-nowrap`}>At what {dLabel}{bodyLimit ? "" : " does"}</span>
+              <select className={`${INPUT} !w-auto min-w-0`} value={limitQuantity ? keyOf(limitQuantity) : ""} onChange={(e) => setLimitKey(e.target.value)} aria-label="Quantity for the limit" aria-describedby={bodyLimit ? noTargetId : undefined}>
+                {plotted.length > 0 && (
+                  <optgroup label="Plotted (reaches a target)">
+                    {plotted.map((q) => <option key={keyOf(q)} value={keyOf(q)}>{describeQuantity(q, names)}</option>)}
+                  </optgroup>
+                )}
+                {bodyChoices.length > 0 && (
+                  <optgroup label="The body itself (its own limit)">
+                    {bodyChoices.map((q) => <option key={keyOf(q)} value={keyOf(q)}>{bodyLimitLabel(q, names)}</option>)}
+                  </optgroup>
+                )}
               </select>
-              <span className={LABEL}>reach</span>
-              <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
-              <span className={`${LABEL} whitespace-nowrap`}>{targetUnit}?</span>
+              {bodyLimit ? (
+                <span className={LABEL}>?</span>
+              ) : (
+                <>
+                  <span className={LABEL}>reach</span>
+                  <input className={`${INPUT} !w-20`} value={target} onChange={(e) => setTarget(e.target.value)} aria-label="Target value" />
+                  <span className={`${LABEL} whitespace-nowrap`}>{targetUnit}?</span>
+                </>
+              )}
               <button type="button" className={BUTTON} onClick={findLimit} disabled={!!searching || progress !== null}>Find</button>
               {(sketch.cases?.length ?? 0) + (sketch.combinations?.length ?? 0) > 0 && (
                 <button type="button" className={BUTTON} onClick={findEverywhere} disabled={!!searching || progress !== null} title="The same search in each case (but those only in combinations) and each combination: under which does it happen first?">
@@ -611,6 +698,11 @@ export function SweepPanel() {
                 </>
               )}
             </div>
+            {bodyLimit && (
+              <p id={noTargetId} className="mt-1 text-[11.5px] text-ink-faint" data-testid="limit-no-target">
+                No target: this is the body&apos;s own limit, {bodyLimit.limit === "tips" ? "where no set of its contacts and ties holds it any more" : "where its friction contacts together are used up (Σμ·n − |Σt| = 0, a factor of 1 against sliding)"}.
+              </p>
+            )}
             {rangeNote && (
               <p className="mt-1 text-[11.5px] text-ink-faint" data-testid="limit-range-note">
                 {rangeNote}
@@ -634,17 +726,23 @@ export function SweepPanel() {
             {everywhere && !limitStopped && (
               <div className="mt-1 text-[12.5px]" data-testid="limit-everywhere">
                 <p role="status">
-                  {everywhere.first.length > 1
+                  {everywhere.body
+                    ? everywhere.first.length > 1
+                      ? `${everywhere.label} first in ${andList(everywhere.rows.filter((r) => everywhere.first.includes(r.id)).map((r) => r.name))}: a tie, each at ${everywhere.pName} = ${limitWithUnit(everywhere.firstValue!, everywhere.unit)}.`
+                      : everywhere.first.length === 1
+                        ? `${everywhere.label} first in ${everywhere.rows.find((r) => r.id === everywhere.first[0])!.name}.`
+                        : `${everywhere.label} in none of them in this range.`
+                    : everywhere.first.length > 1
                     ? `The ${everywhere.label} reaches ${everywhere.target} first in ${andList(everywhere.rows.filter((r) => everywhere.first.includes(r.id)).map((r) => r.name))}: a tie, each at ${everywhere.pName} = ${limitWithUnit(everywhere.firstValue!, everywhere.unit)}.`
                     : everywhere.first.length === 1
                       ? `The ${everywhere.label} reaches ${everywhere.target} first in ${everywhere.rows.find((r) => r.id === everywhere.first[0])!.name}.`
                       : `The ${everywhere.label} reaches ${everywhere.target} in none of them in this range.`}
                   {/* a run already past the target over the whole range reaches it nowhere, so is not "first": said apart */}
-                  {sidesWords(everywhere.rows, everywhere.targetSI, everywhere.target)}
+                  {everywhere.body ? bodySidesWords(everywhere.rows, everywhere.body, names) : sidesWords(everywhere.rows, everywhere.targetSI, everywhere.target)}
                 </p>
                 <table className="mt-0.5 text-[12px]">
                   <caption className="sr-only">
-                    Where the {everywhere.label} reaches {everywhere.target}, in each case and combination
+                    {everywhere.body ? `Where ${everywhere.label}` : `Where the ${everywhere.label} reaches ${everywhere.target}`}, in each case and combination
                   </caption>
                   <thead className="sr-only">
                     <tr>
@@ -661,7 +759,9 @@ export function SweepPanel() {
                             ? `not solved: ${runErrorWords(ran?.sketch ?? sketch, r.result)}`
                             : r.result.found
                               ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — first (a tie)" : " — first") : ""}`
-                              : noCrossingWords(r.result, everywhere.targetSI, everywhere.target)}
+                              : everywhere.body
+                                ? bodyNoCrossingWords(r.result, everywhere.body, everywhere.pName, everywhere.unit)
+                                : noCrossingWords(r.result, everywhere.targetSI, everywhere.target)}
                         </td>
                       </tr>
                     ))}

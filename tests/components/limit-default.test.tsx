@@ -67,7 +67,7 @@ describe("the limit finder on the thrust stand", () => {
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     expect((await screen.findByTestId("crossings")).textContent).toContain("margin at rear pad crosses zero between slope");
     const quantity = screen.getByRole("combobox", { name: "Quantity for the limit" }) as HTMLSelectElement;
-    expect([...quantity.options].map((o) => o.textContent)).toEqual(["resultant at front pin", "margin at rear pad"]);
+    expect([...quantity.options].map((o) => o.textContent)).toEqual(["resultant at front pin", "margin at rear pad", "Stand tips"]);
     expect(quantity.selectedOptions[0].textContent).toBe("margin at rear pad");
     await user.click(screen.getByRole("button", { name: "Find" }));
     // moments about the front pin (statics, common practice): the weight W = 200 kg·g0 at (−0.8, 0.7) m

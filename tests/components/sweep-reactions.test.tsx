@@ -46,7 +46,9 @@ describe("sweeping a reaction's component", () => {
     const crossings = await screen.findByTestId("crossings");
     expect(crossings.textContent).not.toMatch(/x-reaction/);
     const quantity = screen.getByRole("combobox", { name: "Quantity for the limit" }) as HTMLSelectElement;
-    expect([...quantity.options].map((o) => o.textContent)).toEqual(["resultant at pin", "x-reaction at pin", "margin at pad"]);
+    // the plotted quantities, then the body's own limit (on a pad it can tip about the pin; the pin
+    // resists sliding, so no sliding as a whole)
+    expect([...quantity.options].map((o) => o.textContent)).toEqual(["resultant at pin", "x-reaction at pin", "margin at pad", "block tips"]);
     await user.selectOptions(quantity, "x-reaction at pin");
     await user.clear(screen.getByRole("textbox", { name: "Target value" }));
     await user.type(screen.getByRole("textbox", { name: "Target value" }), "-4");

@@ -5,10 +5,11 @@ import { sweepLimitRows, sweepLimitTable } from "@/lib/calcsheet/sweeps";
 import { tableCells } from "@/lib/calcsheet/table-layout";
 import { bodySlidingMargin, findBodySlidingWith, formatLimit } from "@/solver/limit";
 import { sweeperOn } from "@/solver/studySweep";
-import { parseSketch, type SketchFileInput } from "@/solver";
+import type { SketchFileInput } from "@/solver";
 import { solveWithStability } from "@/solver/solve";
 import { G0 } from "@/solver/constants";
 import { parsed } from "../solver/helpers";
+import { fileOf, jetPushedBlock } from "../../support/jet-pushed-block";
 
 /**
  * A 500 kg block, 2 m wide, on two contacts at its bottom corners x = 0 and x = 2 m (μ = mu), its
@@ -16,25 +17,7 @@ import { parsed } from "../solver/helpers";
  * pushes the block +x with P = ṁ·V = ρ·Q·(Q/A) = ρ·Q²/A (ρ = 1000 kg/m³, A = 0.01 m²); the flow Q
  * is fed back in by a mass source (no momentum of its own).
  */
-const block = (mu: number, extra: Partial<SketchFileInput> = {}): SketchFileInput => ({
-  format: "counterpoise.sketch",
-  version: 6,
-  parameters: { Q: "0.02 m^3/s" },
-  bodies: [{ id: "blk", label: "Block", mass: 500, cg: [1, 0.5], outline: [[0, 0], [2, 0], [2, 2], [0, 2]] }],
-  supports: [
-    { id: "rear", label: "rear pad", body: "blk", kind: "contact", at: [0, 0], angle: 90, mu },
-    { id: "front", label: "front pad", body: "blk", kind: "contact", at: [2, 0], angle: 90, mu },
-  ],
-  loads: [],
-  ports: [{ id: "jet", label: "jet", body: "blk", kind: "outlet", at: [0, 1], angle: 180, density: "1000 kg/m^3", volumeFlow: "Q", area: "0.01 m^2" }],
-  massSources: [{ id: "feed", label: "feed", body: "blk", massFlow: "1000 kg/m^3 * Q", at: [1, 1] }],
-  ...extra,
-});
-const fileOf = (doc: SketchFileInput) => {
-  const p = parseSketch(doc);
-  if (!p.ok) throw new Error(JSON.stringify(p.errors));
-  return p.file;
-};
+const block = (mu: number, extra: Partial<SketchFileInput> = {}) => jetPushedBlock(mu, extra, "volume flow");
 
 // Hand calculation (common practice: a rigid block, Coulomb friction; no source). W = 500 × 9.80665
 // = 4903.3 N. Forces: n_r + n_f = W, t_r + t_f = −P. Moments about the rear pad (0, 0):
