@@ -58,48 +58,6 @@ export function sweepMarkers(file: SketchFile, sw: SweepFile, quantities: Quanti
 }
 
 /**
- * The same crossings searched in every case and combination of the study (when it has more than
- * one run): one line a plotted margin, each run's value and the run where it comes first (every
- * run that gets there at the same value, named as a tie).
- */
-export function sweepEverywhere(file: SketchFile, sw: SweepFile, quantities: QuantitySpec[]): string[] {
-  const runs = (file.cases ?? []).filter((c) => !c.onlyInCombinations).length + (file.combinations ?? []).length;
-  if (runs < 2) return [];
-  const names = elementNames(file);
-  return quantities.filter((q) => marksZero(q.component)).flatMap((q) => {
-    const all = limitEverywhere(file, sw.parameter, [sw.from, sw.to], q);
-    const event = crossingEvent(q, file.supports.find((s) => s.id === q.support)?.kind);
-    const first = firstReached(all, sw.from, sw.to);
-    // a margin that reaches zero in no run says nothing here
-    if (!first) return [];
-    // "(first)" where it comes first; every run that gets there at the same value is named, a tie
-    // (as the Sweep tab's "In every case" says it); when every run does, that is said once
-    const at = all.map((r) => ("error" in r.result || !r.result.found ? null : (reachedAt(r.result, sw.from, sw.to) ?? null)));
-    const tie = first.tied.length > 1;
-    const everyOne = tie && first.tied.length === all.length;
-    const each = all.map((r, i) => {
-      const f = r.result;
-      // the run's name, a dash, then what it comes to: names hold commas and colons of their own
-      if ("error" in f) return `${r.name} — not solved`;
-      // a margin below zero over the whole range has no crossing, but is past it all along: never
-      // said as "none", which reads as safe
-      if (!f.found && f.max < 0) return `${r.name} — none in the range: ${event.past} throughout (its margin stays below zero)`;
-      if (!f.found || at[i] === null) return `${r.name} — none in the range`;
-      const mark = everyOne || !first.tied.includes(r) ? "" : tie ? " (first, a tie)" : " (first)";
-      return `${r.name} — ${limitWithUnit(at[i], f.unit)}${mark}`;
-    });
-    if (everyOne) each.push("the same in every one (a tie)");
-    // every run is searched over the sweep's range, so to one tolerance
-    const found = first.row.result;
-    const unit = "unit" in found ? found.unit : "";
-    const tolerance = ("found" in found && found.found && found.tolerance) || limitTolerance([sw.from, sw.to]);
-    // the tolerance said only where it shows in the figures given
-    const reached = at.filter((x): x is number => x !== null);
-    return [`${names[q.support] ?? q.support} ${event.noun} in each case and combination: ${each.join("; ")}; each ${limitPrecisionWords(tolerance, unit, reached)}`];
-  });
-}
-
-/**
  * The charts of a kept sweep. `family`: the force and moment units of the sheet the charts are
  * printed on, so a chart reads in the units of its tables; absent, each chart takes N (N·m) when
  * everything plotted stays below 1 kN (1 kN·m), as a table does.

@@ -53,6 +53,20 @@ describe("the table of a sweep's limits in every case", () => {
     expect(table.notes?.[0]).toContain("◆\u00a0governs: the limit reached first of all");
   });
 
+  it("marks every run of a tie for first, and none of the later ones", () => {
+    // two benches at full flow lift at T0; throttled to f = 0.8 the thrust is 0.64·T: later, at T0 / 0.64
+    const { file } = standWith([{ id: "a", name: "Bench A" }, { id: "b", name: "Bench B" }, { id: "c", name: "Throttled", flowFactor: 0.8 }]);
+    const { rows } = sweepLimitRows(file, sweep);
+    const lift = rows.filter((r) => r.limit === "rear pad: lift-off (n = 0)");
+    expect(lift.map((r) => [r.run.name, formatLimit(r.value!), r.first])).toEqual([
+      ["Bench A", "1.046", true],
+      ["Bench B", "1.046", true],
+      ["Throttled", "1.634", false],
+    ]);
+    expect(lift[0].value! * 1000).toBeCloseTo(T0, 2); // hand calculation above
+    expect(lift[2].value! * 1000).toBeCloseTo(T0 / 0.64, 2); // hand calculation above
+  });
+
   it("has the numbers of the editor's In every case, to the last digit", () => {
     const { doc, file } = standWith([...cases, { id: "c", name: "Light stand", factors: { dead: 0.9 } }]);
     const { rows } = sweepLimitRows(file, sweep);
