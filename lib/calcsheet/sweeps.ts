@@ -10,7 +10,7 @@ import { findBodySlidingWith, findLimitWith, findTippingWith, limitPrecisionWord
 import { describeQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
-import { firstReached, limitEverywhere, reachedAt, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
+import { bodyLimits, firstReached, limitEverywhere, reachedAt, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
 import type { Cell, Table } from "@/solver/report";
 import { convert, formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import type { ChartSpec } from "./chart";
@@ -157,16 +157,12 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile, onProgress?: (do
     if (s.kind !== "contact" || s.mu === undefined) continue;
     limits.push({ q: { support: s.id, component: "frictionMargin" }, limit: `${names[s.id] ?? s.id}: slip (μ·n − |t| = 0)`, past: "slipping" });
   }
-  // a body on contacts or ties may tip: where no set of its one-sided reactions holds it
-  const tipping = [...new Set(file.supports.filter((s) => s.kind === "contact" || s.kind === "tie").map((s) => s.body))].map((b) => ({ body: b, limit: `${names[b] ?? b}: tips (not held)` }));
-  // a body on contacts and ties alone, one of them with a μ, may slide as a whole (a pin, a roller
-  // or a fixed support resists sliding, as the stability check says)
-  const sliding = file.bodies
-    .filter((b) => {
-      const own = file.supports.filter((s) => s.body === b.id);
-      return own.some((s) => s.kind === "contact" && s.mu !== undefined) && own.every((s) => s.kind === "contact" || s.kind === "tie");
-    })
-    .map((b) => ({ body: b.id, limit: `${names[b.id] ?? b.id}: slides as a whole (Σμ·n − |Σt| = 0)` }));
+  // a body's own limits (`bodyLimits`, as the Sweep tab offers them): on contacts or ties it may tip,
+  // where no set of its one-sided reactions holds it; on contacts and ties alone, one of them with a
+  // μ, it may slide as a whole (a pin, a roller or a fixed support resists sliding)
+  const ownLimits = bodyLimits(file);
+  const tipping = ownLimits.filter((l) => l.limit === "tips").map(({ body }) => ({ body, limit: `${names[body] ?? body}: tips (not held)` }));
+  const sliding = ownLimits.filter((l) => l.limit === "slides").map(({ body }) => ({ body, limit: `${names[body] ?? body}: slides as a whole (Σμ·n − |Σt| = 0)` }));
   const range: [number, number] = [sw.from, sw.to];
   // the sweep's own run, when "In every case" does not search it (the sketch as drawn beside its
   // cases, or a case solved only in combinations)
