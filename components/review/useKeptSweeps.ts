@@ -82,23 +82,26 @@ export function useKeptSweeps(document: SketchFile): KeptSweepsRun {
     for (const [id, step] of jobOrder(sweeps)) {
       if (settledStep(before[id], step)) continue;
       const progress = (done: number, total: number) => update((h) => ({ ...h, progress: { ...h.progress, [jobKey(id, step)]: { done, total } } }));
-      if (step === "plot") {
-        runner
-          .run({ kind: "kept-sweep", text, sweep: id }, progress)
-          .promise.then((plot) => put(id, { plot }))
+      // each settles its own half of the sweep's state: the chart, or the limits table
+      const settle = <T,>(promise: Promise<T>, ok: (r: T) => KeptSweepState, bad: (words: string) => KeptSweepState) =>
+        promise
+          .then((r) => put(id, ok(r)))
           .catch((err) => {
             const words = failed(err);
-            if (words) put(id, { plotError: words });
+            if (words) put(id, bad(words));
           });
-      } else {
-        runner
-          .run({ kind: "kept-sweep-limits", text, sweep: id }, progress)
-          .promise.then((limits) => put(id, { limits }))
-          .catch((err) => {
-            const words = failed(err);
-            if (words) put(id, { limitsError: words });
-          });
-      }
+      if (step === "plot")
+        settle(
+          runner.run({ kind: "kept-sweep", text, sweep: id }, progress).promise,
+          (plot) => ({ plot }),
+          (plotError) => ({ plotError }),
+        );
+      else
+        settle(
+          runner.run({ kind: "kept-sweep-limits", text, sweep: id }, progress).promise,
+          (limits) => ({ limits }),
+          (limitsError) => ({ limitsError }),
+        );
     }
     stopRun.current = () => {
       update((h) => ({ ...h, stopped: true }));
