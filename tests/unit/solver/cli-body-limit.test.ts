@@ -1,20 +1,8 @@
 // `npm run solve -- --limit … --quantity BODY.tips | BODY.slides`: a body's own limits on the command line.
-import { spawnSync } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import { describe, expect, it } from "vitest";
+import { solveCli, written } from "./cli-support";
 import type { SketchFileInput } from "@/solver";
 import { G0 } from "@/solver/constants";
-
-const solveCli = (...args: string[]) =>
-  spawnSync("npm", ["run", "solve", "--", ...args], { encoding: "utf8", cwd: process.cwd(), env: { ...process.env, NODE_OPTIONS: "" } });
-
-function written(doc: unknown): string {
-  const file = join(mkdtempSync(join(tmpdir(), "cp-cli-")), "sketch.json");
-  writeFileSync(file, JSON.stringify(doc));
-  return file;
-}
 
 /**
  * A 500 kg block, base b = 2 m, on two contacts at its bottom corners (μ each), pushed +x by a jet

@@ -1,21 +1,11 @@
 // `npm run solve -- FILE`: the contract's JSON on stdout, nothing else; invalid input exits 1.
-import { spawnSync } from "node:child_process";
 import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
+import { solveCli, written } from "./cli-support";
 import { solveFile } from "@/solver";
 import { FIXTURES, loadFixture } from "./helpers";
-
-const solveCli = (...args: string[]) =>
-  spawnSync("npm", ["run", "solve", "--", ...args], { encoding: "utf8", cwd: process.cwd(), env: { ...process.env, NODE_OPTIONS: "" } });
-
-/** A sketch written to a file of its own, for the command line. */
-function written(doc: unknown): string {
-  const file = join(mkdtempSync(join(tmpdir(), "cp-cli-")), "sketch.json");
-  writeFileSync(file, JSON.stringify(doc));
-  return file;
-}
 
 describe("npm run solve", () => {
   it("prints the result of a fixture as JSON, equal to solveFile", () => {
