@@ -102,7 +102,7 @@ function StatusLine() {
   return (
     // two lines tall, always (a notice coming and going must not resize the drawing): a notice may
     // take both, and on a narrow window it takes the whole width from the hint
-    <div className="flex h-9 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px] leading-[15px]" id="canvas-help">
+    <div className="flex h-9 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px] leading-[15px] pointer-coarse:h-12" id="canvas-help">
       <p className="line-clamp-2 min-w-0 flex-1 text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? keysTool ?? undefined}>
         {notice ?? (keysTool !== null && touchTool !== null ? <KeysOrTouch keys={keysTool} touch={touchTool} /> : null)}
       </p>
@@ -113,7 +113,7 @@ function StatusLine() {
         <button
           type="button"
           onClick={stopTool}
-          className="h-7 shrink-0 rounded border border-ink/20 px-2.5 text-[12.5px] font-medium text-ink hover:border-ink/45"
+          className="h-7 shrink-0 rounded border border-ink/20 px-2.5 text-[12.5px] font-medium text-ink hover:border-ink/45 pointer-coarse:h-10"
           title={tool.kind === "body" && tool.shape === "polygon" && tool.points.length >= 3 ? "Close the polygon" : "Back to selecting (Esc)"}
           data-testid="stop-tool"
         >
@@ -275,7 +275,7 @@ function Workspace({ persistence, saved, toolbarExtra, notice }: { persistence: 
               aria-label="Properties and parameters"
             >
               <div className="flex items-center justify-end border-b border-rule px-3 py-1.5 min-[1180px]:hidden">
-                <button type="button" onClick={() => setPanelOpen(false)} className="rounded px-2 py-0.5 text-[12.5px] font-medium text-ink-soft hover:bg-paper-deep hover:text-ink" data-testid="close-properties">
+                <button type="button" onClick={() => setPanelOpen(false)} className="rounded px-2 py-0.5 text-[12.5px] font-medium text-ink-soft hover:bg-paper-deep hover:text-ink pointer-coarse:min-h-10 pointer-coarse:px-3" data-testid="close-properties">
                   Close ×
                 </button>
               </div>

@@ -64,7 +64,7 @@ export function Menu({ label, shortLabel, items, testId, wide }: { label: string
         data-testid={testId}
         aria-label={shortLabel ? label : undefined}
         onClick={() => setOpen((o) => !o)}
-        className={`h-8 whitespace-nowrap rounded px-2.5 text-[13px] font-medium ${open ? "bg-paper-deep text-ink" : "text-ink-soft hover:bg-paper-deep hover:text-ink"}`}
+        className={`h-8 whitespace-nowrap rounded px-2.5 text-[13px] font-medium pointer-coarse:h-10 ${open ? "bg-paper-deep text-ink" : "text-ink-soft hover:bg-paper-deep hover:text-ink"}`}
       >
         {shortLabel ? <NarrowLabel full={label} short={shortLabel} /> : label}{" "}
         <span aria-hidden="true" className="text-[10px] text-ink-faint">▾</span>

@@ -144,7 +144,7 @@ export function Outline() {
                   onKeyDown={(e) => onKey(e, i)}
                   onFocus={() => (focusedRow.current = i)}
                   onClick={(e) => editor.getState().select([l.el.id], e.shiftKey || e.ctrlKey || e.metaKey ? "toggle" : "replace")}
-                  className={`flex w-full items-center gap-1.5 rounded px-1.5 py-[3px] text-left text-[12.5px] ${r.depth ? "pl-5" : ""} ${
+                  className={`flex w-full items-center gap-1.5 rounded px-1.5 py-[3px] text-left text-[12.5px] pointer-coarse:min-h-10 ${r.depth ? "pl-5" : ""} ${
                     selected ? "bg-accent-soft text-accent-deep" : "text-ink-soft hover:bg-paper-deep"
                   }`}
                 >

@@ -28,7 +28,7 @@ export function UnitSwitch() {
   const units = useEditor((s) => s.units);
   const run = useActionRunner();
   return (
-    <div role="radiogroup" aria-label="Units shown" className="flex h-7 items-center rounded border border-rule bg-paper-card p-0.5 text-[12px]" data-testid="units">
+    <div role="radiogroup" aria-label="Units shown" className="flex h-7 items-center rounded border border-rule bg-paper-card p-0.5 text-[12px] pointer-coarse:h-[42px] pointer-coarse:p-0" data-testid="units">
       {(["SI", "US"] as const).map((u, i) => (
         <button
           key={u}
@@ -38,7 +38,7 @@ export function UnitSwitch() {
           {...radioKeys(i, 2, units === u, (k) => (k === 0 ? "SI" : "US") !== units && run("view.units"))}
           title={u === "SI" ? "SI units (kN, m, kPa)" : "US customary units (lbf, ft, psi)"}
           onClick={() => units !== u && run("view.units")}
-          className={`h-6 rounded-[3px] px-2 font-medium ${units === u ? "bg-ink text-paper" : "text-ink-soft hover:text-ink"}`}
+          className={`h-6 rounded-[3px] px-2 font-medium pointer-coarse:h-full pointer-coarse:min-w-10 ${units === u ? "bg-ink text-paper" : "text-ink-soft hover:text-ink"}`}
         >
           {u}
         </button>
@@ -62,7 +62,7 @@ function PanelButton({ toggle, controls, name, text, shownFrom, testId }: { togg
       aria-expanded={toggle.open}
       aria-controls={controls}
       aria-label={name}
-      className={`ml-2 h-7 whitespace-nowrap rounded border px-2.5 text-[12.5px] font-medium ${shownFrom} ${toggle.open ? "border-ink bg-ink text-paper" : "border-ink/20 text-ink hover:border-ink/45"}`}
+      className={`ml-2 h-7 whitespace-nowrap rounded border px-2.5 pointer-coarse:h-10 text-[12.5px] font-medium ${shownFrom} ${toggle.open ? "border-ink bg-ink text-paper" : "border-ink/20 text-ink hover:border-ink/45"}`}
       data-testid={testId}
     >
       {text}
@@ -104,8 +104,10 @@ export function Toolbar({
   // (the page's slot, `extra`, is inside this toolbar and registers them with useFileMenuLink)
   const fileLinks = useFileMenuLinkList();
   return (
-    <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3 max-sm:h-auto max-sm:flex-wrap max-sm:py-1.5">
-      <Link href="/" className="mr-2 flex items-center gap-1.5 text-ink" aria-label="Counterpoise home">
+    // below 1024 px (a tablet, a phone) the toolbar wraps rather than running off the side; on a
+    // touch screen its controls are 40 px, a finger's tap target
+    <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3 max-lg:h-auto max-lg:min-h-12 max-lg:flex-wrap max-lg:py-1.5">
+      <Link href="/" className="mr-2 flex items-center gap-1.5 text-ink pointer-coarse:min-h-10 pointer-coarse:min-w-10" aria-label="Counterpoise home">
         <svg width="22" height="22" viewBox="0 0 28 28" aria-hidden="true">
           <path d="M3 13h22" stroke="currentColor" strokeWidth="2.2" strokeLinecap="round" />
           <path d="M14 14l-4 7h8z" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinejoin="round" />
@@ -158,7 +160,7 @@ export function Toolbar({
       <button type="button" className={`${ICON_BUTTON} text-[13px] font-semibold max-sm:hidden`} onClick={() => run("view.keys")} aria-label="Keys and gestures" title={actionTitle("view.keys")} data-testid="show-keys">
         ?
       </button>
-      <label className="ml-2 flex items-center gap-1.5 text-[12px] text-ink-soft" title="Snap to the grid and to body corners and edges (hold Alt to place freely)">
+      <label className="ml-2 flex items-center gap-1.5 text-[12px] text-ink-soft pointer-coarse:min-h-10 pointer-coarse:min-w-10 pointer-coarse:justify-center" title="Snap to the grid and to body corners and edges (hold Alt to place freely)">
         <input type="checkbox" checked={snap} onChange={() => run("view.snap")} className="accent-accent" />
         {/* narrow toolbars have no room for the word: a dot grid with a point caught on it says it */}
         <svg width="14" height="14" viewBox="0 0 14 14" aria-hidden="true" className="lg:hidden" data-testid="snap-icon">
@@ -170,7 +172,10 @@ export function Toolbar({
       <div className="ml-3">
         <UnitSwitch />
       </div>
-      <FileMenuLinksProvider value={fileLinks}>{extra}</FileMenuLinksProvider>
+      {/* the page's own controls (the version bar), in the toolbar's flow */}
+      <div className="contents" data-toolbar-extra="">
+        <FileMenuLinksProvider value={fileLinks}>{extra}</FileMenuLinksProvider>
+      </div>
       {tray ? <PanelButton toggle={tray} controls="tray-panel" name="Add and elements" text="Add" shownFrom="sm:hidden" testId="toggle-tray" /> : null}
       {panel ? <PanelButton toggle={panel} controls="properties-panel" text="Properties" shownFrom="min-[1180px]:hidden" testId="toggle-properties" /> : null}
       {/* a phone's toolbar wraps: the keys-and-gestures list goes last there, after the panels */}

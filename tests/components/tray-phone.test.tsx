@@ -1,7 +1,7 @@
 // The "Add" drawer on a phone-width screen lies over the drawing: a pick closes it, whether the
 // pick chooses a tool (a click) or adds the element at once (Enter or Space). Wider screens keep
 // the tray beside the drawing as it was.
-import { screen, waitFor } from "@testing-library/react";
+import { act, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it } from "vitest";
 import { beam, renderEditor } from "./editor-helpers";
@@ -58,7 +58,7 @@ describe("the Add drawer on a 390 px screen", () => {
     await renderEditor(beam());
     await user.click(toggle());
     expect(drawerShown()).toBe(true);
-    screen.getByTestId("tray-force").focus();
+    act(() => screen.getByTestId("tray-force").focus());
     await user.keyboard("{Enter}");
     expect(screen.getByTestId("notice")).toHaveTextContent(/^Point force added to Beam/);
     await waitFor(() => expect(drawerShown()).toBe(false));
@@ -87,7 +87,7 @@ describe("the tray on a 1440 px screen", () => {
     await user.click(toggle());
     expect(toggle()).toHaveAttribute("aria-expanded", "true");
     const force = screen.getByTestId("tray-force");
-    force.focus();
+    act(() => force.focus());
     await user.keyboard("{Enter}");
     expect(screen.getByTestId("notice")).toHaveTextContent(/^Point force added to Beam/);
     await settle();

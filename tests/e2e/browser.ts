@@ -2,27 +2,35 @@
 import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 
 export const BASE_URL = process.env.E2E_BASE_URL || "http://127.0.0.1:3100";
 export const SHOTS_DIR = join(process.cwd(), "test-results", "screenshots");
 
+const CHROMIUM_PATH = process.env.CHROMIUM_PATH || "/usr/bin/chromium";
+const CHROMIUM_ARGS = [
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
+
+/** A browser without a profile, for tests that open their own contexts (a phone's, a tablet's). */
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS });
+}
+
 export async function openBrowser(): Promise<BrowserContext> {
   const dir = mkdtempSync(join(tmpdir(), "cp-chromium-"));
   const context = await chromium.launchPersistentContext(dir, {
-    executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
+    executablePath: CHROMIUM_PATH,
     headless: true,
     viewport: { width: 1440, height: 900 },
     acceptDownloads: true,
-    args: [
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-    ],
+    args: CHROMIUM_ARGS,
   });
   // the profile folder (~15 MB) goes once the browser has exited; never fail a test over it
   const close = context.close.bind(context);
