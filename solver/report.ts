@@ -7,6 +7,7 @@ import { FOOT_M, G0, LBF_N } from "./constants";
 import { FIELD_UNIT_LABELS, kindOfUnit } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
+import type { BodyStability } from "./stability";
 import type { SolveResult, Vec2 } from "./types";
 import { formatFigures, formatTiny } from "./quantity";
 import { convert, formatNumber, formatQuantity, prettyUnit, unitsFor, type Quantity, type UnitSystem } from "./units";
@@ -114,6 +115,39 @@ export function handCheckUnitScale(eq: SolveResult["equations"][string]): Scale 
   );
 }
 
+/** The figures behind a body's factors of safety: restoring and overturning moments, friction available and the force driving sliding. */
+function stabilityFigures(stability: Readonly<Record<string, BodyStability>> | null | undefined, forces: Array<number | undefined>, moments: Array<number | undefined>): void {
+  for (const st of Object.values(stability ?? {})) {
+    if (!("notApplicable" in st.overturning)) moments.push(st.overturning.restoring, st.overturning.overturning);
+    if (!("notApplicable" in st.sliding)) forces.push(st.sliding.available, st.sliding.driving);
+  }
+}
+
+/**
+ * The one scale of a result: every view of it writes its forces and moments in the family this
+ * chooses (`unitFamily`) — the reactions table and its CSV, the hand check and its CSV, the factors
+ * of safety under it, the status sentences and the drawing's labels — so a checker reading a figure
+ * across them never meets 56.79 N in one and 0.05679 kN in the next. As a calculation by hand does,
+ * the largest value of the whole result chooses (every force in kN once any is 1 kN or more), not
+ * each view's own: the reactions, every term of every body's equations (weights, given loads, p·A,
+ * ṁV, each by its magnitude, as the drawing labels it, and the couples they bring), and with
+ * `stability` the figures of its factors of safety. Moments about a point a checker picks are left
+ * out: their arms, not the result, make them large. Small values keep their figures: the views
+ * print 4 significant figures (0.05679 kN), never a rounded 0.06. A calc sheet takes the larger of
+ * this and its cases' scales (`studyScale`), one family for the whole sheet.
+ */
+export function resultScale(result: SolveResult, stability?: Readonly<Record<string, BodyStability>> | null): Scale {
+  const forces: Array<number | undefined> = [];
+  const moments: Array<number | undefined> = [];
+  for (const eq of Object.values(result.equations ?? {}))
+    for (const t of [...eq.forces, ...eq.momentum]) {
+      forces.push(Math.hypot(t.fx, t.fy));
+      moments.push(t.m);
+    }
+  stabilityFigures(stability, forces, moments);
+  return largestScale(reactionScale(result), scaleOf(forces, moments));
+}
+
 /** The larger force and the larger moment of several scales: one unit family for all of them. */
 export function largestScale(...scales: Scale[]): Scale {
   return { force: Math.max(0, ...scales.map((s) => s.force)), moment: Math.max(0, ...scales.map((s) => s.moment)) };
@@ -134,10 +168,7 @@ export function studyScale(study: StudyResult): Scale {
       forces.push(r.fx, r.fy, Math.hypot(r.fx, r.fy), r.n, r.t, r.margin);
       moments.push(r.m);
     }
-    for (const st of Object.values(run.stability)) {
-      if (!("notApplicable" in st.overturning)) moments.push(st.overturning.restoring, st.overturning.overturning);
-      if (!("notApplicable" in st.sliding)) forces.push(st.sliding.available, st.sliding.driving);
-    }
+    stabilityFigures(run.stability, forces, moments);
   }
   return scaleOf(forces, moments);
 }
@@ -191,11 +222,16 @@ export function reactionTable(
   system: UnitSystem,
   opts: { onSupport?: boolean; id?: string; title?: string; scale?: Scale; names?: Readonly<Record<string, string>> } = {},
 ): Table {
-  // `scale`: the screen holds a table's units while a drag runs, so 990 N → 1.01 kN does not flicker
-  const u = unitsOf(system, opts.scale ?? reactionScale(result));
+  // `scale`: the screen holds a table's units while a drag runs, so 990 N → 1.01 kN does not flicker;
+  // else the whole result's (`resultScale`), as its hand check and drawing are written
+  const scale = opts.scale ?? resultScale(result);
+  const u = unitsOf(system, scale);
   const f = u.force;
   const m = u.moment;
   const sign = opts.onSupport ? -1 : 1;
+  // a force or moment as the hand check has it: floating-point noise (a contact's 1e-13 N along
+  // its face) is 0, as the hand check's term for the same reaction is
+  const at = (v: number | undefined, q: Quantity) => inUnit(v === undefined ? undefined : handCheckClean(v, scale), q, u);
   return {
     id: opts.id ?? "reactions",
     title: opts.title ?? (opts.onSupport ? "Loads on the supports" : "Reactions (forces on the body)"),
@@ -219,18 +255,22 @@ export function reactionTable(
       return [
         opts.names?.[id] ?? id,
         r.kind,
-        inUnit(fx, "force", u),
-        inUnit(fy, "force", u),
-        inUnit(res, "force", u),
+        at(fx, "force"),
+        at(fy, "force"),
+        at(res, "force"),
         res > 0 ? (Math.atan2(fy, fx) * 180) / Math.PI : null,
-        inUnit(sign * r.m, "moment", u),
-        inUnit(r.n === undefined ? undefined : sign * r.n, "force", u),
-        inUnit(r.t === undefined ? undefined : sign * r.t, "force", u),
+        at(sign * r.m, "moment"),
+        at(r.n === undefined ? undefined : sign * r.n, "force"),
+        at(r.t === undefined ? undefined : sign * r.t, "force"),
         stateWord(r, result.bodies[r.body]?.status),
-        inUnit(r.margin, "force", u),
+        at(r.margin, "force"),
       ];
     }),
     notes: reactionNotes(result, opts),
+    // the hand check's rule (4 significant figures, zeros kept): a reaction reads the same digits
+    // in this table, in the hand check's term for it and on the drawing ("0.05000 kN" in all three,
+    // not "0.05" here beside "0.05000 kN" there)
+    figures: HAND_CHECK_FIGURES,
   };
 }
 
@@ -339,7 +379,10 @@ export function tiedNames(study: StudyResult, ids: readonly string[]): string {
  *  `scale`: the units of a larger whole (the calc sheet's), else the table's own values choose them. */
 export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?: Scale): Table {
   const all = study.runs.flatMap((run) => (run.ok ? Object.values(run.result.reactions) : []));
-  const u = scale ? unitsOf(system, scale) : tableUnits(system, all.flatMap((r) => [Math.hypot(r.fx, r.fy), r.n, r.t]), all.map((r) => r.m));
+  const own = scale ?? scaleOf(all.flatMap((r) => [Math.hypot(r.fx, r.fy), r.n, r.t]), all.map((r) => r.m));
+  const u = unitsOf(system, own);
+  // as the hand check has it: floating-point noise is 0, every figure to 4 significant figures
+  const at = (v: number | undefined, q: Quantity) => inUnit(v === undefined ? undefined : handCheckClean(v, own), q, u);
   const f = u.force;
   const m = u.moment;
   const rows: Cell[][] = [];
@@ -376,12 +419,12 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?
       rows.push([
         run.name,
         nameIn(study, id),
-        inUnit(r.fx, "force", u),
-        inUnit(r.fy, "force", u),
-        inUnit(Math.hypot(r.fx, r.fy), "force", u),
-        inUnit(r.m, "moment", u),
-        inUnit(r.n, "force", u),
-        inUnit(r.t, "force", u),
+        at(r.fx, "force"),
+        at(r.fy, "force"),
+        at(Math.hypot(r.fx, r.fy), "force"),
+        at(r.m, "moment"),
+        at(r.n, "force"),
+        at(r.t, "force"),
         stateWord(r, run.result.bodies[r.body]?.status),
         words.join("; "),
       ]);
@@ -407,6 +450,8 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?
     rows,
     marks,
     notes,
+    // the reactions table's and the hand check's rule: a case's reaction reads as the same result's does
+    figures: HAND_CHECK_FIGURES,
   };
 }
 
@@ -610,13 +655,13 @@ export function handCheckDifferenceText(shown: number, rounding: boolean, unit =
 }
 
 /** The hand check: every term with its components, point of action and moment about `about`.
- *  `opts.scale`: the units of a larger whole (the calc sheet's), else the check's own values choose them. */
+ *  `opts.scale`: the units of a larger whole (the calc sheet's, the panel's held ones), else the whole result's (`resultScale`). */
 export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem, opts: { scale?: Scale; name?: string } = {}): Table {
   const eq = result.equations[bodyId];
   const sums = handCheckSums(eq, about);
   // its own scale says what is floating-point noise; the units may be the sheet's
   const scale = handCheckScale(eq, about);
-  const u = unitsOf(system, opts.scale ?? handCheckUnitScale(eq));
+  const u = unitsOf(system, opts.scale ?? resultScale(result));
   const f = u.force;
   const m = u.moment;
   const L = columnUnit("length", system);

@@ -52,7 +52,7 @@ export function followLabelLayout(stores: EditorStores, interaction: Interaction
     last = key;
     const supports = stores.analysis.getState().shownSketch?.supports;
     // one force unit for the given loads and the reactions, as the drawing writes them
-    const family = drawingFamily(shown, e.units, scene.items);
+    const family = drawingFamily(shown, e.units, scene.items, stores.analysis.getState().shownStability);
     const groups = elementGroups(scene, view.scale, e.units, statesOf(shown, supports), family);
     const frame = drawingFrame(view, viewport);
     const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown, supports), stale, frame, family) : [];

@@ -35,7 +35,7 @@ type Family = { force: string; moment: string };
 export function useDrawingFamily(units: UnitSystem): Family {
   const scene = useStores().scene;
   const key = useAnalysis((s) => {
-    const f = drawingFamily(s.shown, units, scene.getState().items);
+    const f = drawingFamily(s.shown, units, scene.getState().items, s.shownStability);
     return `${f.force}|${f.moment}`;
   });
   return useMemo(() => {

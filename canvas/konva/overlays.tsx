@@ -66,7 +66,7 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       // the supports' and ports' own labels are drawn (and moved off these) by their nodes; only the
       // result's layer is drawn here, over their symbols
       const states = a.shown ? supportStates(a.shown, a.shownSketch?.supports) : null;
-      const family = drawingFamily(a.shown, e.units, scene.items);
+      const family = drawingFamily(a.shown, e.units, scene.items, a.shownStability);
       const groups = a.shown || e.momentPoint ? elementGroups(scene, e.view.scale, e.units, states, family) : [];
       const found = a.shown && states ? resultLayer(groups, scene, e.view.scale, e.units, a.shown, states, a.stale, drawingFrame(e.view, e.viewport), family) : [];
       // the hand check's P, its words clear of the result's and the elements' own

@@ -2,10 +2,11 @@
 // support would have to pull), the weight at the centre of gravity, momentum flux as dashed
 // arrows, port pressure forces, and the pivot or free direction of a body that tips or is
 // unrestrained. Primitives are in content pixels (world × scale, y down).
-import { formatQuantity, type UnitSystem } from "@/solver/units";
+import { convert, type UnitSystem } from "@/solver/units";
 import { tipSlide, type SlideSupport } from "./tipSlide";
 import type { SolveResult, Vec2 } from "@/solver/types";
-import { largestScale, reactionScale, unitFamily } from "@/solver/report";
+import { handCheckNumber, largestScale, resultScale, unitFamily } from "@/solver/report";
+import type { BodyStability } from "@/solver/stability";
 import type { Scene, SceneBody, SceneItem } from "../scene";
 import { add, curvedArrow, dashedArrow, dir, doubleArrow, hollowArrow, mul, perp, solidArrow, sub, text, unit, type Prim, type Pt } from "./prims";
 import { anchorWorld, cgMarkBox, groundSideOf, labelAt, type DrawState } from "./symbols";
@@ -39,9 +40,13 @@ export interface ResultDrawing {
 
 const SUPPORT_KINDS = new Set(["pin", "roller", "contact", "fixed", "tie"]);
 const px = (p: Vec2, s: number): Pt => [p[0] * s, -p[1] * s];
-// the drawing's figures are figures, as in the tables: "4.000 kN" beside "9.316 kN", never "4 kN"
-const fq = (v: number, k: Parameters<typeof formatQuantity>[1], o: Pick<ResultOptions, "units" | "family">) =>
-  formatQuantity(v, k, o.units, { keepZeros: true, unit: k === "force" ? o.family?.force : k === "moment" ? o.family?.moment : undefined });
+// the drawing's figures are figures, as in the tables: "4.000 kN" beside "9.316 kN", never "4 kN";
+// a force or moment by the rule of the reactions table and the hand check (4 significant figures,
+// zeros kept), so a small one beside a large one reads the same digits in all three: "0.05000 kN"
+const fq = (v: number, k: "force" | "moment", o: Pick<ResultOptions, "units" | "family">) => {
+  const { value, unit } = convert(v, k, o.units, k === "force" ? o.family?.force : o.family?.moment);
+  return `${handCheckNumber(value)} ${unit}`;
+};
 
 // an earlier result drawn over a sketch whose field is now in error (NaN): nothing is drawn from it
 const finite = (p: Pt) => Number.isFinite(p[0]) && Number.isFinite(p[1]);
@@ -263,25 +268,32 @@ export function resultPrims(scene: Scene, result: SolveResult, o: ResultOptions)
 }
 
 /**
- * One force and moment unit for every figure a result draws, as its tables do (`unitFamily`: N with
- * N·m only when all of it stays below 1 kN, else kN with kN·m; lbf, or kip from 10 kip): chosen from
- * the largest of the reactions and of the forces drawn beside them (weights, pA, ṁV, given loads).
- * Several results (two versions drawn side by side) share one family. With the scene's `items`, its
- * given point forces and couples count too, so their labels (`SymbolOptions.family`) share the
- * unit with no result at all (an input error before the first solve) or on a body that did not solve.
+ * One force and moment unit for every figure a result draws, the unit its tables and hand check are
+ * written in (`resultScale`, `unitFamily`: N with N·m only when all of it stays below 1 kN, else kN
+ * with kN·m; lbf, or kip from 10 kip): the largest of the reactions, of the forces drawn beside them
+ * (weights, pA, ṁV, given loads) and, with `stability` (the results panel's), of the figures of the
+ * factors of safety. Several results (two versions drawn side by side) share one family. With the
+ * scene's `items`, its given point forces and couples count too, so their labels
+ * (`SymbolOptions.family`) share the unit with no result at all (an input error before the first
+ * solve) or on a body that did not solve.
  */
-export function drawingFamily(result: SolveResult | ReadonlyArray<SolveResult | null> | null, units: UnitSystem = "SI", items: readonly SceneItem[] = []): { force: string; moment: string } {
+export function drawingFamily(
+  result: SolveResult | ReadonlyArray<SolveResult | null> | null,
+  units: UnitSystem = "SI",
+  items: readonly SceneItem[] = [],
+  stability?: Readonly<Record<string, BodyStability>> | null,
+): { force: string; moment: string } {
   // the live canvas asks for one result's family from several places per redraw (its nodes, the
   // result layer, the label layout): worked out once per result, units and items
   const last = lastFamily;
-  if (last && last.result === result && last.units === units && last.items === items) return last.family;
-  const family = familyOf(result, units, items);
-  lastFamily = { result, units, items, family };
+  if (last && last.result === result && last.units === units && last.items === items && last.stability === (stability ?? null)) return last.family;
+  const family = familyOf(result, units, items, stability ?? null);
+  lastFamily = { result, units, items, stability: stability ?? null, family };
   return family;
 }
-let lastFamily: { result: unknown; units: UnitSystem; items: readonly SceneItem[]; family: { force: string; moment: string } } | null = null;
+let lastFamily: { result: unknown; units: UnitSystem; items: readonly SceneItem[]; stability: unknown; family: { force: string; moment: string } } | null = null;
 
-function familyOf(result: SolveResult | ReadonlyArray<SolveResult | null> | null, units: UnitSystem, items: readonly SceneItem[]): { force: string; moment: string } {
+function familyOf(result: SolveResult | ReadonlyArray<SolveResult | null> | null, units: UnitSystem, items: readonly SceneItem[], stability: Readonly<Record<string, BodyStability>> | null): { force: string; moment: string } {
   const results = (Array.isArray(result) ? result : [result]).filter((r): r is SolveResult => !!r);
   let force = 0;
   let moment = 0;
@@ -289,13 +301,6 @@ function familyOf(result: SolveResult | ReadonlyArray<SolveResult | null> | null
     if (it.kind === "force" && Number.isFinite(it.magnitude)) force = Math.max(force, Math.abs(it.magnitude));
     if (it.kind === "couple" && Number.isFinite(it.value)) moment = Math.max(moment, Math.abs(it.value));
   }
-  for (const r of results)
-    for (const eq of Object.values(r.equations ?? {}))
-      for (const t of [...eq.forces, ...eq.momentum]) {
-        if (t.kind === "reaction") continue;
-        const f = Math.hypot(t.fx, t.fy);
-        if (Number.isFinite(f)) force = Math.max(force, f);
-        if (Number.isFinite(t.m)) moment = Math.max(moment, Math.abs(t.m));
-      }
-  return unitFamily(units, largestScale({ force, moment }, ...results.map(reactionScale)));
+  // one result with its factors of safety (the panel's); side by side, each result's own scale
+  return unitFamily(units, largestScale({ force, moment }, ...results.map((r) => resultScale(r, results.length === 1 ? stability : null))));
 }

@@ -4,14 +4,14 @@
 // P is picked on the canvas (the "Pick on the drawing" button) or typed.
 import { useDeferredValue, useMemo, useState } from "react";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
-import { columnUnit, HAND_CHECK_FIGURES, handCheckNumber, handCheckScale, handCheckTable, handCheckUnitScale, unitFamily, type Scale } from "@/solver/report";
+import { columnUnit, HAND_CHECK_FIGURES, handCheckNumber, handCheckScale, handCheckTable, unitFamily, type Scale } from "@/solver/report";
 import { downloadCsv, useCsvName } from "@/components/studies/csv";
 import { convert, type UnitSystem } from "@/solver/units";
 import type { Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { BUTTON, INPUT } from "@/components/editor/ui";
 import { useActionRunner } from "@/components/editor/useActions";
-import { useHeldScale } from "./useHeldScale";
+import { useResultScale } from "./useHeldScale";
 import { defaultMomentPoint, handCheckBlocks, handCheckText, type HandCheckBlock, type HandCheckLine } from "./handCheck";
 import { StabilityCheck } from "./StabilityCheck";
 import { stabilityLines } from "./stabilityCheck";
@@ -109,9 +109,9 @@ export function HandCheckView() {
   const blocks = useMemo(() => (eq ? handCheckBlocks(eq, about) : []), [eq, about]);
   // the check's largest force and moment: what floating-point noise is measured against
   const size = useMemo(() => (eq ? handCheckScale(eq, about) : undefined), [eq, about]);
-  // the units of the three sums, as in the hand check's table: N and N·m when all of it is below 1 kN
-  // the units: the check's forces and own couples choose them (as the drawing's), not the arms to P
-  const scale = useHeldScale(useMemo(() => (eq ? handCheckUnitScale(eq) : undefined), [eq]));
+  // the units: the whole result's (`resultScale`), as the reactions table and the drawing write it,
+  // whichever body is checked; the arms to P do not choose them
+  const scale = useResultScale();
   const unitsOfSums = useMemo(() => {
     const { force, moment } = scale ? unitFamily(units, scale) : { force: columnUnit("force", units), moment: columnUnit("moment", units) };
     return { fx: force, fy: force, m: moment };
@@ -202,7 +202,7 @@ export function HandCheckView() {
           type="button"
           className={`${BUTTON} ml-auto`}
           aria-label="Download the hand check as CSV"
-          onClick={() => shown && downloadCsv(handCheckTable(shown, body.id, about, units, { name: body.label?.trim() || body.id }), csvName(`hand-check-${body.id}`))}
+          onClick={() => shown && downloadCsv(handCheckTable(shown, body.id, about, units, { name: body.label?.trim() || body.id, scale }), csvName(`hand-check-${body.id}`))}
         >
           CSV
         </button>

@@ -3,10 +3,9 @@
 // the load on the support (equal and opposite: what an anchor designer wants). The rows come from
 // the solver's reaction table, the same rows the CSV and the calc sheet use.
 import { useDeferredValue, useMemo } from "react";
-import { reactionScale, reactionTable } from "@/solver/report";
-import { formatNumber } from "@/solver/units";
+import { cellNumberText, reactionTable } from "@/solver/report";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
-import { useHeldScale } from "./useHeldScale";
+import { useResultScale } from "./useHeldScale";
 import { withoutEmptyReactionColumns } from "@/canvas/studies/tables";
 
 export type Sense = "body" | "support";
@@ -23,7 +22,8 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
   const units = useEditor((s) => s.units);
   const selection = useEditor((s) => s.selection);
   const { editor } = useStores();
-  const scale = useHeldScale(useMemo(() => (shown ? reactionScale(shown) : undefined), [shown]));
+  // the whole result's units, as the hand check and the drawing write it
+  const scale = useResultScale();
   const table = useMemo(() => {
     if (!shown) return null;
     // the bodies by their labels, for the note on a body that is not held (the rows keep the supports' ids)
@@ -70,7 +70,8 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
                   const col = table.columns[i];
                   let text: string;
                   if (i === 0) text = label || id;
-                  else if (typeof cell === "number") text = formatNumber(cell, 4, { keepZeros: true });
+                  // the table's own rule for its figures, the hand check's: "0.05000" as its term reads
+                  else if (typeof cell === "number") text = cellNumberText(table, cell);
                   else text = cell === null ? "—" : String(cell);
                   const warn = col.key === "state" && text !== "bearing" && text !== "holds" && text !== "taut";
                   return (

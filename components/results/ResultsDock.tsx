@@ -14,6 +14,7 @@ import { CautionsAside, CautionsLine } from "./CautionsAside";
 import { HandCheckView } from "./HandCheckView";
 import { ReactionsTable, type Sense } from "./ReactionsTable";
 import { StatusBanner } from "./StatusBanner";
+import { useResultScale } from "./useHeldScale";
 
 type Tab = "reactions" | "hand" | "cases" | "sweep";
 const TABS = [
@@ -255,6 +256,7 @@ function ReactionsCsv({ sense }: { sense: Sense }) {
   const shown = useAnalysis((s) => s.shown);
   const units = useEditor((s) => s.units);
   const sketch = useEditor((s) => s.sketch);
+  const scale = useResultScale();
   return (
     <button
       type="button"
@@ -262,7 +264,7 @@ function ReactionsCsv({ sense }: { sense: Sense }) {
       disabled={!shown}
       aria-label="Download the reactions as CSV"
       // the supports by their labels, as the table on screen names them
-      onClick={() => shown && downloadCsv(reactionTable(shown, units, { onSupport: sense === "support", names: elementNames(sketch) }), csvName(sense === "support" ? "loads-on-supports" : "reactions"))}
+      onClick={() => shown && downloadCsv(reactionTable(shown, units, { onSupport: sense === "support", names: elementNames(sketch), scale }), csvName(sense === "support" ? "loads-on-supports" : "reactions"))}
     >
       CSV
     </button>

@@ -272,7 +272,9 @@ function warningText(file: SketchFile | null | undefined, w: SolveResult["warnin
 
 /**
  * One sentence per body of a solved sketch; `forceUnit` puts every force in one unit (a calc
- * sheet's). With the bodies' factors of safety, a body that tips and slides says which comes first.
+ * sheet's; the results panel's, `unitFamily(units, resultScale(result, stability)).force`, the unit
+ * its table, hand check and drawing write), else each force its own. With the bodies' factors of
+ * safety, a body that tips and slides says which comes first.
  * `file`: the sketch file that was solved, so a warning about a field names it as the properties
  * form does ("Point force F — Fy"); without it the warning keeps the file's path ("loads[0].fy").
  */

@@ -37,8 +37,8 @@ import {
   caseFindings,
   designLoadTable,
   excludedWords,
-  handCheckUnitScale,
   largestScale,
+  resultScale,
   slipWords,
   studyScale,
   unitFamily,
@@ -126,10 +126,12 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // each body's hand check, about the point the results panel's takes by default (the body's first
   // support, else its centre of gravity), so the sheet and the screen show the same terms
   const handChecks = Object.keys(result.bodies).map((id) => ({ id, about: defaultMomentPoint(result.equations[id], parsed.sketch.bodies.find((b) => b.id === id)?.cg) }));
-  // one unit family for the whole sheet, from its largest force or moment (the hand checks, every
-  // case's reactions and the figures of its factors of safety): N with N·m only when all of it is
-  // below 1 kN (1 kN·m), else kN with kN·m; lbf with lbf·ft, or kip with kip·ft from 10 kip (10 kip·ft)
-  const sheetScale = largestScale(studyScale(study), studyScale(asDrawn), ...handChecks.map((h) => handCheckUnitScale(result.equations[h.id])));
+  // one unit family for the whole sheet, from its largest force or moment (the result as drawn as the
+  // results panel scales it, `resultScale`: its reactions, the terms of its hand checks and its
+  // factors of safety; every case's reactions and factors of safety): N with N·m only when all of it
+  // is below 1 kN (1 kN·m), else kN with kN·m; lbf with lbf·ft, or kip with kip·ft from 10 kip
+  // (10 kip·ft). A sketch without cases reads on the sheet in the units of its screen
+  const sheetScale = largestScale(studyScale(study), studyScale(asDrawn), resultScale(result, stability));
   const family = unitFamily(units, sheetScale);
 
   const doc = new PDFDocument({ size: "A4", margins: { top: 44, bottom: 54, left: 44, right: 44 }, bufferPages: true, info: { Title: `${input.sketchTitle} v${input.version}`, Author: "Counterpoise", Subject: "Calculation sheet" } });

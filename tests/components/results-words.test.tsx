@@ -364,24 +364,25 @@ describe("a support left outside its body's outline", () => {
 
 describe("a table's units during a drag", () => {
   it("stay as they were when the drag began, and are chosen afresh when it ends", async () => {
-    // the demo beam (100 kg) with 1 kN at mid-span: each support carries 490.3 + 500 = 990.3 N, so N
+    // the demo beam (100 kg, 980.7 N) with 0.8 kN at mid-span: each support carries 490.3 + 400 =
+    // 890.3 N; every force of the result (reactions, weight, load) below 1 kN, so N
     const doc = beam();
-    doc.loads[0] = { ...doc.loads[0], magnitude: "1 kN" } as (typeof doc.loads)[number];
+    doc.loads[0] = { ...doc.loads[0], magnitude: "0.8 kN" } as (typeof doc.loads)[number];
     const editor = mountResultsDock(doc);
     const heading = () => within(screen.getByTestId("reactions")).getByRole("columnheader", { name: /^Fy/ });
     const pad = () => num(document.querySelector("[data-testid=reactions] tr[data-support=s2] td[data-col=fy]")!.textContent!);
     expect(heading()).toHaveTextContent("(N)");
-    expect(pad()).toBeCloseTo(990.3, 1);
-    // the load dragged 1 m to the right: the pad takes 490.3 + 1000·3/4 = 1240.3 N (statics, common practice)
+    expect(pad()).toBeCloseTo(890.3, 1);
+    // the load dragged 1 m to the right: the pad takes 490.3 + 800·3/4 = 1090.3 N (statics, common practice)
     act(() => {
       editor.getState().beginGesture("Move l1");
       editor.getState().updateGesture(moveElement({ ids: ["l1"], delta: [1, 0] }) as never);
     });
-    await waitFor(() => expect(pad()).toBe(1240)); // 4 significant figures
+    await waitFor(() => expect(pad()).toBe(1090)); // 4 significant figures
     expect(heading()).toHaveTextContent("(N)");
     act(() => editor.getState().endGesture());
     await waitFor(() => expect(heading()).toHaveTextContent("(kN)"));
-    expect(pad()).toBeCloseTo(1.240, 3);
+    expect(pad()).toBeCloseTo(1.090, 3);
   });
 });
 
