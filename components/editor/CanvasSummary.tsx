@@ -7,6 +7,7 @@ import { useAnalysis, useEditor } from "@/canvas/context";
 import { describeElement, GROUPS, kindOf, type AnyElement, type Attached } from "@/canvas/model/elements";
 import type { SketchFile } from "@/solver/schema";
 import { statusSentences } from "@/components/results/statusSentence";
+import { useResultForceUnit } from "@/components/results/useHeldScale";
 
 /** What is drawn, body by body: "Body b1 (Beam), with Pin s1 (left pin), Contact s2." */
 export function drawnWords(sketch: SketchFile): string {
@@ -37,12 +38,14 @@ export function CanvasSummary() {
   const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
   const stale = useAnalysis((s) => s.stale);
   const units = useEditor((s) => s.units);
+  // forces in the unit the results panel writes them in
+  const forceUnit = useResultForceUnit(units);
   const result = useMemo(() => {
     if (!shown || !numeric) return "No result yet.";
-    const said = statusSentences(numeric, shown, units).map((s) => s.headline);
+    const said = statusSentences(numeric, shown, units, forceUnit).map((s) => s.headline);
     if (!said.length) return "No result yet.";
     return `${stale ? "Last good result (the input has errors): " : "Result: "}${said.join(" ")}`;
-  }, [shown, numeric, units, stale]);
+  }, [shown, numeric, units, forceUnit, stale]);
   const drawn = useMemo(() => drawnWords(sketch), [sketch]);
   return (
     <p id="canvas-summary" className="sr-only" data-testid="canvas-summary">

@@ -4,6 +4,7 @@
 import { useEffect, useMemo, useState } from "react";
 import { useAnalysis, useEditor } from "@/canvas/context";
 import { statusSentences } from "@/components/results/statusSentence";
+import { useResultForceUnit } from "@/components/results/useHeldScale";
 
 /** How long the result must stay the same before it is said (ms). */
 export const SETTLE_MS = 700;
@@ -13,13 +14,15 @@ export function ResultAnnouncer({ settleMs = SETTLE_MS }: { settleMs?: number })
   const numeric = useAnalysis((s) => s.shownSketch);
   const stale = useAnalysis((s) => s.stale);
   const units = useEditor((s) => s.units);
+  // forces in the unit the results panel writes them in
+  const forceUnit = useResultForceUnit(units);
   const dragging = useEditor((s) => s.gesture !== null);
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
   const words = useMemo(() => {
     if (!hasBody || !shown || !numeric) return "";
-    const said = statusSentences(numeric, shown, units).map((s) => s.headline);
+    const said = statusSentences(numeric, shown, units, forceUnit).map((s) => s.headline);
     return said.length ? `${stale ? "Last good result, the input has errors: " : ""}${said.join(" ")}` : "";
-  }, [hasBody, shown, numeric, units, stale]);
+  }, [hasBody, shown, numeric, units, forceUnit, stale]);
   const [said, setSaid] = useState("");
   useEffect(() => {
     if (dragging) return;

@@ -6,6 +6,7 @@ import { download, exportSketchText, fileStem, importSketchText, svgToPng } from
 import { renderSketchSvg } from "@/canvas/render/svg";
 import { statusSentences } from "@/components/results/statusSentence";
 import { CAUTION_SHORT } from "@/solver/cautions";
+import { resultScale, unitFamily } from "@/solver/report";
 import { replaceSketch } from "@/canvas/commands/fields";
 import type { Command } from "@/canvas/commands/define";
 import type { FieldError } from "@/solver/types";
@@ -52,7 +53,9 @@ export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputEl
   const svgNow = useCallback(() => {
     const s = stores.editor.getState();
     const a = stores.analysis.getState();
-    const said = a.shown && a.shownSketch ? statusSentences(a.shownSketch, a.shown, s.units, undefined, a.shownStability ?? undefined).map((x) => x.headline) : [];
+    // the results panel's one unit family, for the words and the figures drawn
+    const family = a.shown ? unitFamily(s.units, resultScale(a.shown, a.shownStability)) : undefined;
+    const said = a.shown && a.shownSketch ? statusSentences(a.shownSketch, a.shown, s.units, family?.force, a.shownStability ?? undefined).map((x) => x.headline) : [];
     const lines = [
       ...(a.stale ? ["Results are from before the last change: the sketch has an input error."] : []),
       ...(said.length ? said : ["Not solved."]),
@@ -63,6 +66,7 @@ export function useFileOps(stores: EditorStores, inputRef: RefObject<HTMLInputEl
       width: 1400,
       height: 900,
       stale: a.stale,
+      family,
       heading: { title: s.sketch.title || "Untitled sketch", lines },
       note: `Caution: ${CAUTION_SHORT}`,
     });

@@ -3,9 +3,8 @@
 // shown is an earlier one because the input has errors.
 import { useDeferredValue, useMemo } from "react";
 import { useAnalysis, useEditor } from "@/canvas/context";
-import { unitFamily } from "@/solver/report";
 import { errorInWords } from "./errorPlace";
-import { useResultScale } from "./useHeldScale";
+import { useResultForceUnit } from "./useHeldScale";
 import { stabilitySentence, statusSentences, type Tone } from "./statusSentence";
 
 const BADGE: Record<Tone, { word: string; cls: string }> = {
@@ -62,8 +61,7 @@ export function StatusBanner() {
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
   const units = useEditor((s) => s.units);
   // every force in the result's one unit, as the table and the drawing beside the words write it
-  const scale = useResultScale();
-  const forceUnit = scale ? unitFamily(units, scale).force : undefined;
+  const forceUnit = useResultForceUnit(units);
   const sentences = useMemo(() => (shown && numeric ? statusSentences(numeric, shown, units, forceUnit, stability ?? undefined, analysed) : []), [shown, numeric, units, forceUnit, stability, analysed]);
   // the errors after the first, in words: under the faded result or the missing one
   const more = useMemo(() => errors.slice(1).map((e) => errorInWords(analysed, e)), [errors, analysed]);

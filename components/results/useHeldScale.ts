@@ -3,7 +3,8 @@
 // runs, the units stay those the table had when it began, so a value crossing 1 kN does not
 // flip the whole table between N and kN under the pointer; they are chosen afresh on release.
 import { useDeferredValue, useMemo, useState } from "react";
-import { resultScale, type Scale } from "@/solver/report";
+import { resultScale, unitFamily, type Scale } from "@/solver/report";
+import type { UnitSystem } from "@/solver/units";
 import { useAnalysis, useEditor } from "@/canvas/context";
 
 export function useHeldScale(scale: Scale | undefined): Scale | undefined {
@@ -24,4 +25,10 @@ export function useResultScale(): Scale | undefined {
   const shown = useDeferredValue(useAnalysis((s) => s.shown));
   const stability = useDeferredValue(useAnalysis((s) => s.shownStability));
   return useHeldScale(useMemo(() => (shown ? resultScale(shown, stability) : undefined), [shown, stability]));
+}
+
+/** The force unit of the result shown (`useResultScale`), for sentences written beside its tables. */
+export function useResultForceUnit(units: UnitSystem): string | undefined {
+  const scale = useResultScale();
+  return scale ? unitFamily(units, scale).force : undefined;
 }
