@@ -195,6 +195,23 @@ export function otherMethods<const A extends Exclude<HttpMethod, "HEAD">>(...ser
   return out as Record<Exclude<HttpMethod, Served<A>> | "OPTIONS", NotAllowedHandler>;
 }
 
+// better-auth's session cookie (`cookiePrefix: "counterpoise"` in lib/auth.ts; `__Secure-` over https)
+const SESSION_COOKIE = /(?:^|;)\s*(?:__Secure-)?counterpoise\.session_token=[^;\s]/;
+
+/**
+ * The 401 for a request without a session, saying which: no session cookie at all ("Sign in to continue."), or
+ * one that no longer names a session (it expired, the person signed out, or a password reset ended
+ * every session), so a script or a tab left open knows its cookie is stale rather than missing.
+ */
+export function unauthenticated(req: Request): AppError {
+  if (SESSION_COOKIE.test(req.headers.get("cookie") ?? "")) {
+    return new AppError("unauthenticated", "Your session has ended (it expired, you signed out, or your password was changed): sign in again.", {
+      extra: { reason: "session_ended" },
+    });
+  }
+  return new AppError("unauthenticated");
+}
+
 /** Wrap a route handler in the shared steps above. */
 export function route<const S extends RouteSpec>(spec: S, handler: (ctx: RouteContext<S>) => Promise<unknown>) {
   return async (req: Request, next?: NextRouteContext): Promise<Response> => {
@@ -202,7 +219,7 @@ export function route<const S extends RouteSpec>(spec: S, handler: (ctx: RouteCo
       assertSameOrigin(req);
       const auth = spec.auth ?? "required";
       const session = auth === "none" ? null : await sessionFrom(req.headers);
-      if (auth === "required" && !session) throw new AppError("unauthenticated");
+      if (auth === "required" && !session) throw unauthenticated(req);
 
       const rawParams = (await next?.params) ?? {};
       let params: unknown = rawParams;
@@ -214,7 +231,7 @@ export function route<const S extends RouteSpec>(spec: S, handler: (ctx: RouteCo
 
       let role: Role | undefined;
       if (spec.workspace) {
-        if (!session) throw new AppError("unauthenticated");
+        if (!session) throw unauthenticated(req);
         const workspaceId = String((params as Record<string, unknown>)[spec.workspace.param]);
         role = await requireWorkspaceRole(workspaceId, session.user.id, spec.workspace.permission);
       }

@@ -2,6 +2,7 @@
 // Nothing else reaches a response: database and library errors become `internal` with a
 // generic message (the details go to the server log).
 import { ZodError } from "zod";
+import { BUSY_MESSAGE, BUSY_RETRY_SECONDS, isDatabaseUnavailable, unavailableReason } from "./db-unavailable";
 
 export const ERROR_STATUS = {
   bad_request: 400,
@@ -125,10 +126,16 @@ export function fieldErrors(err: ZodError, prefix: string[] = [], input?: unknow
   });
 }
 
+/** The database could not be reached in time: 503 with Retry-After, never a 500 with nothing to do. */
+export function busyError(): AppError {
+  return new AppError("unavailable", BUSY_MESSAGE, { headers: { "Retry-After": String(BUSY_RETRY_SECONDS) } });
+}
+
 /** Any thrown value → the AppError that may be shown for it. */
 export function toAppError(err: unknown): AppError {
   if (err instanceof AppError) return err;
   if (err instanceof ZodError) return new AppError("validation_failed", undefined, { fields: fieldErrors(err) });
+  if (isDatabaseUnavailable(err)) return busyError();
   return new AppError("internal");
 }
 
@@ -141,6 +148,9 @@ export function errorResponse(err: unknown): Response {
   const appError = toAppError(err);
   if (appError.code === "internal" && !(err instanceof AppError)) {
     console.error("[api] unexpected error", err);
+  } else if (appError.code === "unavailable" && !(err instanceof AppError)) {
+    // load, not a bug: one line (the driver's words), not a stack per refused request
+    console.warn(`[api] database busy, answered 503: ${unavailableReason(err)}`);
   }
   return Response.json(errorBody(appError), { status: appError.status, headers: appError.headers });
 }

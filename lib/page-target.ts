@@ -3,6 +3,7 @@ import { headers } from "next/headers";
 import { cache } from "react";
 import { getSketchAccess } from "@/db/queries/sketches";
 import { getRole } from "@/db/queries/workspaces";
+import { orBusy } from "./db-unavailable";
 import { PATH_HEADER } from "./request-path";
 import { isUuid } from "./schemas";
 import { currentSession } from "./session";
@@ -23,7 +24,9 @@ export type PageTarget =
   | { kind: "no-sketch"; workspaceId: string | null }
   | { kind: "no-version"; workspaceId: string; sketchId: string; sketchTitle: string; latest: number; asked: string[]; here: string };
 
-export const pageTarget = cache(async (): Promise<PageTarget> => {
+export const pageTarget = cache(async (): Promise<PageTarget> => orBusy(findPageTarget()));
+
+async function findPageTarget(): Promise<PageTarget> {
   const session = await currentSession();
   const path = (await headers()).get(PATH_HEADER);
   const asked = path ? parseWorkspacePath(path) : null;
@@ -38,4 +41,4 @@ export const pageTarget = cache(async (): Promise<PageTarget> => {
     return { kind: "no-version", workspaceId: asked.workspaceId, sketchId: sketch.id, sketchTitle: sketch.title, latest: sketch.latestVersion, asked: missing, here: asked.versions.here };
   }
   return { kind: "found" };
-});
+}

@@ -5,12 +5,17 @@ import { cache } from "react";
 import { getRole } from "@/db/queries/workspaces";
 import { getAuth, type AuthSession } from "./auth";
 import { PATH_HEADER } from "./request-path";
+import { orBusy } from "./db-unavailable";
 import { can, type Permission, type Role } from "./roles";
 import { isUuid } from "./schemas";
 
-/** The session behind a request's cookies, or null. */
+/**
+ * The session behind a request's cookies, or null. A database that cannot be reached in time
+ * throws `DatabaseBusyError` (a page's error page says "busy", the API answers 503), not
+ * better-auth's "Failed to get session".
+ */
 export async function sessionFrom(reqHeaders: Headers): Promise<AuthSession | null> {
-  return getAuth().api.getSession({ headers: reqHeaders });
+  return orBusy(getAuth().api.getSession({ headers: reqHeaders }));
 }
 
 /** The signed-in session of the page being rendered (once per request), or null. */
@@ -40,7 +45,7 @@ export async function requirePageRole(
   permission?: Permission,
 ): Promise<{ session: AuthSession; role: Role; allowed: boolean }> {
   const session = await requirePageSession(next);
-  const role = isUuid(workspaceId) ? await getRole(workspaceId, session.user.id) : null;
+  const role = isUuid(workspaceId) ? await orBusy(getRole(workspaceId, session.user.id)) : null;
   if (!role) notFound();
   return { session, role, allowed: permission ? can(role, permission) : true };
 }

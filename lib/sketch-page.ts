@@ -1,6 +1,7 @@
 import "server-only";
 import { notFound } from "next/navigation";
 import type { SketchData } from "@/components/sketches/SketchScreen";
+import { asBusy } from "./db-unavailable";
 import { AppError } from "./errors";
 import { isUuid } from "./schemas";
 import { requirePageRole } from "./session";
@@ -16,7 +17,7 @@ export async function loadSketchPage(workspaceId: string, sketchId: string, path
   if (!isUuid(sketchId)) notFound();
   const data = await readSketch(sketchId, session.user.id).catch((err: unknown) => {
     if (err instanceof AppError && err.status < 500) notFound();
-    throw err;
+    throw asBusy(err);
   });
   if (data.sketch.workspaceId !== workspaceId) notFound();
   return { session, role, data: JSON.parse(JSON.stringify(data)) as SketchData };

@@ -241,7 +241,7 @@ export async function forkSketch(sourceSketchId: string, actor: Actor, input: { 
 /** Why the caller may not fork into a workspace where they hold `role` (null: not a member), or null. */
 function forkTargetError(role: Role | null): AppError | null {
   if (!role) return new AppError("not_found", "No such workspace, or you are not a member of it.", { fields: [{ path: "workspaceId", message: "You are not a member of that workspace." }] });
-  if (!can(role, "sketch.fork")) return new AppError("forbidden", "Your role in that workspace does not allow forking into it.");
+  if (!can(role, "sketch.fork")) return new AppError("forbidden", refusedWords(role, "sketch.fork").replace(" in this workspace ", " in that workspace "));
   return null;
 }
 

@@ -1,17 +1,23 @@
 "use client";
 import Link from "next/link";
-import { useRouter } from "next/navigation";
-import { startTransition } from "react";
-import { Button, Notice, buttonClass } from "@/components/shell/controls";
+import { Notice, buttonClass } from "@/components/shell/controls";
+import { BusyNotice, isBusy } from "@/components/shell/BusyNotice";
+import { RetryButton } from "@/components/shell/RetryButton";
 import { AuthCard } from "./AuthFrame";
 
 /**
- * A signed-out or account page whose server work failed (most often the database busy for a
- * moment): in the product's own frame, with the reason in words and a way to try again, never
- * the framework's bare error page.
+ * A signed-out or account page whose server work failed: in the product's own frame, with the
+ * reason in words and a way to try again, never the framework's bare error page. A database busy
+ * for a moment (the page helpers' busy digest) says so; anything else gives its reference.
  */
 export function PageFailed({ reset, digest }: { reset: () => void; digest?: string }) {
-  const router = useRouter();
+  if (isBusy({ digest })) {
+    return (
+      <AuthCard title="Try again in a moment">
+        <BusyNotice reset={reset} />
+      </AuthCard>
+    );
+  }
   return (
     <AuthCard title="This page could not be shown">
       <div className="space-y-4">
@@ -20,17 +26,7 @@ export function PageFailed({ reset, digest }: { reset: () => void; digest?: stri
           {digest ? <span className="mt-1 block text-xs opacity-80">Reference: {digest}</span> : null}
         </Notice>
         <div className="flex flex-wrap gap-2">
-          <Button
-            onClick={() =>
-              // the failure was on the server: fetch the page again, then draw it
-              startTransition(() => {
-                router.refresh();
-                reset();
-              })
-            }
-          >
-            Try again
-          </Button>
+          <RetryButton reset={reset} />
           <Link href="/" className={buttonClass("secondary")}>
             Home page
           </Link>

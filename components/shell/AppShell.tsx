@@ -1,6 +1,7 @@
 import type { ReactNode } from "react";
 import { Wordmark } from "@/components/site/Wordmark";
 import { listWorkspacesForUser } from "@/db/queries/workspaces";
+import { orBusy } from "@/lib/db-unavailable";
 import { requirePageSession } from "@/lib/session";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import { AccountMenu } from "./AccountMenu";
@@ -15,7 +16,8 @@ import { WorkspaceSwitcher } from "./WorkspaceSwitcher";
  */
 export async function AppShell({ children, workspaceId, next }: { children: ReactNode; workspaceId?: string; next: string }) {
   const session = await requirePageSession(next);
-  const workspaces = await listWorkspacesForUser(session.user.id);
+  // a database busy for a moment: the error page says so (lib/db-unavailable.ts), not a bare failure
+  const workspaces = await orBusy(listWorkspacesForUser(session.user.id));
   const current = workspaces.find((w) => w.id === workspaceId) ?? null;
   return (
     <Providers>

@@ -144,6 +144,11 @@ export type SignOffInput = {
 };
 export type SignOffDecision = { ok: true; to: ReviewState } | { ok: false; status: 403 | 409; code: "forbidden" | "review_state"; reason: string };
 
+/** A refusal by role names the caller's role first: "You are a viewer in this workspace: checking is for checkers and owners." */
+function roleRefusal(role: Role, rule: string): string {
+  return `You are ${role === "owner" || role === "editor" ? "an" : "a"} ${role} in this workspace: ${rule.charAt(0).toLowerCase()}${rule.slice(1)}`;
+}
+
 /**
  * May this person take this step now? Who they are is asked first (403), then where the version
  * stands (409): a refusal always names the first rule that stops it.
@@ -151,7 +156,7 @@ export type SignOffDecision = { ok: true; to: ReviewState } | { ok: false; statu
 export function decideSignOff({ step, role, isAuthor, isChecker, state, newer }: SignOffInput): SignOffDecision {
   const rule = SIGN_OFF_RULES[step];
   const byRole = rule.roles.includes(role) || (rule.author === "also" && isAuthor);
-  if (!byRole) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.role };
+  if (!byRole) return { ok: false, status: 403, code: "forbidden", reason: roleRefusal(role, rule.refused.role) };
   if (rule.author === "never" && isAuthor) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.author! };
   if (rule.notChecker && isChecker) return { ok: false, status: 403, code: "forbidden", reason: rule.refused.checker! };
   if (!rule.from.includes(state)) return { ok: false, status: 409, code: "review_state", reason: rule.refused.state(state) };

@@ -62,6 +62,15 @@ describe("the invitation page", () => {
     });
   }
 
+  it("the tab's title says what happened to a refused link, and no refused or open link is indexed", async () => {
+    const { generateMetadata } = await import("@/app/(auth)/invite/[token]/page");
+    const titleOf = async (token: string) => generateMetadata({ params: Promise.resolve({ token }) });
+    expect(await titleOf(await link("expired"))).toEqual({ title: "This invitation has expired", robots: { index: false, follow: false } });
+    expect((await titleOf(await link("used"))).title).toBe("This invitation has already been used");
+    expect((await titleOf(await link("withdrawn"))).title).toBe("This invitation was withdrawn");
+    expect((await titleOf(await link("pending"))).title).toBe("Invitation");
+  });
+
   it("an open link offers the sign-up form (so the refusals above are real)", async () => {
     expect(text(await page(await link("pending")))).toMatch(/password/i);
   });

@@ -172,9 +172,9 @@ describe("a write under /api/sketches checks the caller before the body", () => 
     }
   }
 
-  it("a valid sign-off body from a viewer still gets the rule's own reason", async () => {
+  it("a valid sign-off body from a viewer still gets the rule's own reason, naming the viewer's role", async () => {
     const res = await call(signoffRoute.POST, { method: "POST", params: V(), cookie: viewer.cookie, body: { step: "check" } });
     expect(res.status).toBe(403);
-    expect(res.body.error.message).toBe("Checking is for checkers and owners.");
+    expect(res.body.error.message).toBe("You are a viewer in this workspace: checking is for checkers and owners.");
   });
 });

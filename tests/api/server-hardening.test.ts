@@ -255,7 +255,8 @@ describe("sketches: forks, vanished rows, edits", () => {
     vi.mocked(copyUnderlayForFork).mockClear();
     const res = await call(forkRoute.POST, { method: "POST", params: { id }, cookie: editor.cookie, body: { workspaceId: readOnly } });
     expect(res.status).toBe(403);
-    expect(res.body.error.message).toBe("Your role in that workspace does not allow forking into it.");
+    // names the role the caller holds there, and who may
+    expect(res.body.error.message).toBe("As a viewer in that workspace you may not fork sketches into it: that is for owners and editors.");
     expect(copyUnderlayForFork).not.toHaveBeenCalled();
     expect(await db.select().from(sketch).where(eq(sketch.workspaceId, readOnly))).toEqual([]);
     // a workspace the caller is not in at all: 404 naming the field, no copy either

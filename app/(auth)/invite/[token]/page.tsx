@@ -1,22 +1,37 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { cache } from "react";
 import { AuthCard } from "@/components/auth/AuthFrame";
 import { AcceptInvitationButton, InvitationSignUpForm, SwitchAccountButton } from "@/components/auth/InvitationActions";
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
 import { Notice } from "@/components/shell/controls";
+import { orBusy } from "@/lib/db-unavailable";
 import { accountExists, invitationRefusal, lookUpInvitation } from "@/lib/invitations";
 import { ROLE_INFO } from "@/lib/roles";
 import { currentSession } from "@/lib/session";
 
-export const metadata: Metadata = { title: "Invitation" };
 export const dynamic = "force-dynamic";
+
+// once per request: the tab's title and the page read the same lookup. A database busy for a
+// moment shows "busy, try again" (the error page reads the digest), not a failure
+const lookUp = cache((token: string) => orBusy(lookUpInvitation(token)));
+
+/**
+ * The tab says what happened to a refused link, as its card does. The page itself answers 200: an
+ * App Router page can answer 404 (an unknown link, `notFound()`) but not 410; the API says 410.
+ */
+export async function generateMetadata({ params }: { params: Promise<{ token: string }> }): Promise<Metadata> {
+  const view = await lookUp((await params).token);
+  const refused = view ? invitationRefusal(view) : null;
+  return { title: refused?.title ?? "Invitation", robots: { index: false, follow: false } };
+}
 
 const primary = "inline-flex w-full justify-center rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft";
 
 export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const view = await lookUpInvitation(token);
+  const view = await lookUp(token);
   const session = await currentSession();
   const here = `/invite/${token}`;
 
@@ -70,7 +85,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     );
   }
 
-  if (await accountExists(view.email)) {
+  if (await orBusy(accountExists(view.email))) {
     return (
       <AuthCard title="Join the workspace" lead={lead}>
         <Link href={`/sign-in?next=${encodeURIComponent(here)}&email=${encodeURIComponent(view.email)}`} className={primary}>
