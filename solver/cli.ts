@@ -15,7 +15,10 @@
 //                     where the body itself starts to tip (no set of its contacts and ties holds it)
 //                     or to slide as a whole (Σμ·n − |Σt| of its bearing friction contacts reaches
 //                     zero): the limit itself, so no --target; for sliding, "tipsFrom" says where
-//                     the body tips in the range (sliding is read only while it is held)
+//                     the body tips in the range (sliding is read only while it is held); for
+//                     tipping, "slidesFrom" says where it already slides as a whole (friction is
+//                     checked, not enforced: a tipping value past it holds only while the body is
+//                     held against sliding)
 import { readFileSync } from "node:fs";
 import { solveCases } from "./cases";
 import { evaluateToNumber } from "./expressions";

@@ -7,10 +7,10 @@ import { caseInputErrors, caseSketch, combineModels } from "./cases";
 import { planOf, resolveFile } from "./parse";
 import type { SketchFile } from "./schema";
 import { prepare, solveModels } from "./solve";
-import { findBodySlidingWith, findLimitWith, findTippingWith, formatLimit, limitTolerance, type LimitOptions, type LimitResult } from "./limit";
+import { bodySlidingMargin, findBodySlidingWith, findLimitWith, findTippingWith, formatLimit, limitTolerance, type LimitOptions, type LimitResult } from "./limit";
 import type { QuantitySpec } from "./quantity";
 import { createSetter, createSweeper, FLOW_FACTOR, type ParameterSetter, type Sweeper } from "./sweep";
-import type { FieldError, Sketch, SolveWarning } from "./types";
+import type { FieldError, Sketch, SolveResult, SolveWarning, Support } from "./types";
 
 /** What a sweep runs on: a case, or a combination, or (neither) the sketch as drawn. */
 export interface SweepOn {
@@ -155,8 +155,15 @@ export const isBodyLimit = (q: LimitQuantity): q is BodyLimitSpec => "body" in q
  * A body's limit searched: where it is reached, or why not. For sliding, `tipsFrom` is where the
  * body starts to tip in the same range, going from its start (absent: it does not): sliding is read
  * only while the body is held, so a body that tips first never slides in the search.
+ *
+ * For tipping, `slidesFrom` is where the body starts to slide as a whole in the same range, going
+ * from its start (its start itself when it slides there already; absent: it does not). The solve
+ * checks friction but does not enforce it: a body found sliding as a whole is still solved as if
+ * its contacts held it along its base, so it can be reported tipping at a larger value. That
+ * tipping value holds only for a body kept from sliding (a stop, a heavier anchor); the answers
+ * say so wherever `slidesFrom` comes before it.
  */
-export type BodyLimitResult = LimitResult & { tipsFrom?: number };
+export type BodyLimitResult = LimitResult & { tipsFrom?: number; slidesFrom?: number };
 
 /**
  * The bodies whose own limits can be searched, as the calc sheet's limits table lists them: each
@@ -177,10 +184,57 @@ export function bodyLimits(file: Pick<SketchFile, "bodies" | "supports">): BodyL
   return out;
 }
 
+/**
+ * Where a body starts to slide as a whole going from the range's start: the start itself when its
+ * sliding margin is below zero there, else its first crossing (into sliding); undefined when it
+ * holds against sliding throughout (or never bears on friction).
+ */
+export function slidesFromWith(sweeper: Sweeper, range: readonly [number, number], body: string, options: LimitOptions = {}): number | undefined {
+  let atStart: number;
+  try {
+    const p = sweeper.at(range[0]);
+    atStart = p.ok ? bodySlidingMargin(p.result, body) : Number.NaN;
+  } finally {
+    sweeper.restore();
+  }
+  if (atStart < 0) return range[0];
+  return reachedAt(findBodySlidingWith(sweeper, range, body, options), range[0], range[1]);
+}
+
+/** A body's own state at one solve, beside holding (`bodyStateIn`). */
+export type BodyState = "slides" | "tips" | "unrestrained";
+
+/**
+ * What a body itself does in a solve, as its own limits name it (`bodyLimits`): it tips (no set of
+ * its one-sided reactions holds it; `about`: the support it turns about, when the turn is about
+ * one), it is unrestrained, or it slides as a whole (its sliding margin `bodySlidingMargin` is
+ * below zero: the solve's `SLIP` on the body, ids `[body]`); null while it holds (with a contact
+ * lifted or slipping alone, perhaps: one contact over its own μ while the others have friction to
+ * spare gives its share to them, and the body stays put). `supports`: where each support is, to
+ * name the pivot (`freeMotion.about` is a support's own point).
+ */
+export function bodyStateIn(result: SolveResult, body: string, supports: ReadonlyArray<Pick<Support, "id" | "at">> = []): { state: BodyState; about?: string } | null {
+  const b = result.bodies[body];
+  if (!b) return null;
+  if (b.status === "tips") {
+    const fm = b.freeMotion;
+    const at = fm?.kind === "rotation" ? supports.find((s) => result.reactions[s.id]?.body === body && Math.hypot(s.at[0] - fm.about[0], s.at[1] - fm.about[1]) < 1e-6) : undefined;
+    return at ? { state: "tips", about: at.id } : { state: "tips" };
+  }
+  if (b.status === "unrestrained") return { state: "unrestrained" };
+  return bodySlidingMargin(result, body) < 0 ? { state: "slides" } : null;
+}
+
 /** A body's own limit with a sweeper made for it (`findTippingWith`, `findBodySlidingWith`); for
- *  sliding, also where the body tips in the range (`tipsFrom`), the reason it may never slide. */
+ *  sliding, also where the body tips in the range (`tipsFrom`), the reason it may never slide; for
+ *  tipping, where it already slides as a whole (`slidesFrom`), the reason the tipping value may
+ *  never be reached by a body free to slide. */
 export function findBodyLimitWith(sweeper: Sweeper, range: readonly [number, number], q: BodyLimitSpec, options: LimitOptions = {}): BodyLimitResult {
-  if (q.limit === "tips") return findTippingWith(sweeper, range, q.body, options);
+  if (q.limit === "tips") {
+    const tipping = findTippingWith(sweeper, range, q.body, options);
+    const slidesFrom = slidesFromWith(sweeper, range, q.body, options);
+    return slidesFrom === undefined ? tipping : { ...tipping, slidesFrom };
+  }
   const sliding = findBodySlidingWith(sweeper, range, q.body, options);
   const tipsFrom = reachedAt(findTippingWith(sweeper, range, q.body, options), range[0], range[1]);
   return tipsFrom === undefined ? sliding : { ...sliding, tipsFrom };

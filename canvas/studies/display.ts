@@ -2,13 +2,17 @@
 // kN·m / lbf·ft (N, N·m for a plot that stays below a kilonewton), the friction needed as a plain ratio. The chart, the limit finder's target and
 // the calc sheet all convert through here, so a moment is never shown or converted as a force.
 // Also the words a sweep says of its supports' states (a contact off the ground, a friction margin
-// left out where its body is not held), shared by the Sweep tab, a version's page and the calc sheet.
+// left out where its body is not held) and of its bodies' own (one slides as a whole, tips), shared
+// by the Sweep tab (its lines and its hover), a version's page and the calc sheet.
 import type { QuantityComponent } from "@/solver/quantity";
 import { columnUnit } from "@/solver/report";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { convert, formatNumber, prettyUnit, type Quantity, type UnitSystem } from "@/solver/units";
 import type { PointStretch, SweepData } from "./run";
+import { bodyLimits, bodyStateIn, type BodyState } from "@/solver/studySweep";
+import type { SketchFile } from "@/solver/schema";
+import type { SolveResult, Support } from "@/solver/types";
 
 export type DisplayKind = Extract<Quantity, "force" | "moment" | "ratio">;
 
@@ -85,14 +89,104 @@ export function stretchWords(o: PointStretch, parameter: string, unit: string): 
   return `from ${label} = ${formatNumber(o.from, 4)} to ${formatNumber(o.to, 4)}${u}`;
 }
 
-/** What a sweep's words read of it: its plotted quantities and where their supports are off their seat or their bodies not held. */
-export type SweepStates = Pick<SweepData, "parameter" | "unit" | "quantities" | "off" | "notHeld" | "slips">;
+/** A stretch of a sweep's points where a body itself tips (about a support, when it turns about
+ *  one), is unrestrained, or slides as a whole (`bodyStateIn`, solver/studySweep.ts). */
+export interface BodyStretch extends PointStretch {
+  body: string;
+  state: BodyState;
+  /** the support a tipping body turns about */
+  about?: string;
+}
+
+/**
+ * The bodies' own states over a sweep: each body watched (one that may tip or slide as a whole,
+ * `bodyLimits`) with its supports, and where it does not hold. A stretch where one contact slips
+ * and its body is watched with no "slides" stretch there is one where the body as a whole holds.
+ */
+export interface BodyStates {
+  watched: Array<{ body: string; supports: string[] }>;
+  stretches: BodyStretch[];
+}
+
+/**
+ * Gathers the bodies' own states point by point as a sweep solves them (`add`: a point's result, or
+ * null where it did not solve), then says them as stretches (`states`). Engineering judgement, said
+ * here once: a contact slipping alone (its own μ·n short of its |t|) is a local slip whose share
+ * the other friction contacts take up; the body itself moves only where they cannot together, Σμ·n
+ * below |Σt| (Coulomb friction, common practice) — that, and where it tips, is what an anchor's
+ * designer needs beside each contact's slip.
+ */
+export function watchBodies(file: Pick<SketchFile, "bodies" | "supports">, at: ReadonlyArray<Pick<Support, "id" | "at">> = []) {
+  const bodies = [...new Set(bodyLimits(file).map((l) => l.body))];
+  const keys = new Map<string, Array<string | null>>(bodies.map((b) => [b, []]));
+  return {
+    add(result: SolveResult | null): void {
+      for (const b of bodies) {
+        const st = result ? bodyStateIn(result, b, at) : null;
+        keys.get(b)!.push(st ? `${st.state}${st.about ? ` ${st.about}` : ""}` : null);
+      }
+    },
+    states(xs: readonly number[]): BodyStates {
+      return {
+        watched: bodies.map((body) => ({ body, supports: file.supports.filter((s) => s.body === body).map((s) => s.id) })),
+        stretches: bodies.flatMap((body) =>
+          stretchesOf(xs, keys.get(body)!).map(({ key, ...s }) => {
+            const [state, about] = key.split(" ");
+            return { ...s, body, state: state as BodyState, ...(about ? { about } : {}) };
+          }),
+        ),
+      };
+    },
+  };
+}
+
+/** Stretches of neighbouring points with the same key (null: none there), in sweep order. */
+export function stretchesOf(xs: readonly number[], keys: ReadonlyArray<string | null>): Array<PointStretch & { key: string }> {
+  const out: Array<PointStretch & { key: string }> = [];
+  keys.forEach((key, i) => {
+    if (key === null) return;
+    const last = out[out.length - 1];
+    if (last && i > 0 && keys[i - 1] === key) {
+      last.to = xs[i];
+      last.points++;
+    } else out.push({ key, from: xs[i], to: xs[i], points: 1, whole: false });
+  });
+  for (const s of out) s.whole = s.points === xs.length;
+  return out;
+}
+
+/** What a sweep's words read of it: its plotted quantities and where their supports are off their
+ *  seat or their bodies not held; and the bodies' own states, where the sweep kept them. */
+export type SweepStates = Pick<SweepData, "parameter" | "unit" | "quantities" | "off" | "notHeld" | "slips"> & { bodies?: BodyStates };
+
+/** What a body itself does over a stretch, in the calc sheet's limits table's words: "slides as a
+ *  whole", "tips about front pad", "is unrestrained". */
+export function bodyStateWords(o: Pick<BodyStretch, "state" | "about">, names: Readonly<Record<string, string>>): string {
+  if (o.state === "slides") return "slides as a whole";
+  if (o.state === "tips") return o.about ? `tips about ${names[o.about] ?? o.about}` : "tips";
+  return "is unrestrained";
+}
+
+const overlaps = (a: PointStretch, b: PointStretch) => Math.max(Math.min(a.from, a.to), Math.min(b.from, b.to)) <= Math.min(Math.max(a.from, a.to), Math.max(b.from, b.to));
+
+/** What the body of a slipping contact does over the stretch it slips: it holds (its other friction
+ *  contacts take up the rest), slides as a whole there too, or over a part of it. */
+function slipBodyWords(o: PointStretch & { support: string }, data: SweepStates, names: Readonly<Record<string, string>>): string {
+  const watched = data.bodies?.watched.find((w) => w.supports.includes(o.support));
+  if (!watched) return "";
+  const name = names[watched.body] ?? watched.body;
+  const slides = data.bodies!.stretches.filter((b) => b.body === watched.body && b.state === "slides" && overlaps(b, o));
+  const points = slides.reduce((n, b) => n + b.points, 0);
+  if (!slides.length) return ` ${name} as a whole holds there: its friction contacts together give the friction it needs (Σμ·n ≥ |Σt|), the others taking up what this one cannot.`;
+  if (points >= o.points) return ` ${name} slides as a whole there too (Σμ·n − |Σt| below zero).`;
+  return ` ${name} slides as a whole over part of it (${slides.map((b) => stretchWords(b, data.parameter, data.unit)).join("; ")}) and holds over the rest.`;
+}
 
 /** A line of a sweep's words about its supports' states: a support off its seat ("off"), a contact
  *  short of friction ("slips"), a friction margin left out where its body is not held ("notHeld"),
  *  or how many more stretches there are ("more"). */
 export interface SweepStateLine {
-  kind: "off" | "notHeld" | "slips" | "more";
+  kind: "off" | "notHeld" | "slips" | "body" | "more";
   words: string;
 }
 
@@ -100,8 +194,11 @@ export interface SweepStateLine {
  * Where a plotted contact is off the ground (a tie slack) over the range or a part of it, where a
  * plotted friction margin is below zero (the contact slips), and where a plotted friction margin is
  * left out because its body tips or is unrestrained, in words: the Sweep tab, a version's page
- * and the calc sheet say the same. At most `max` stretches where a body is not held and twice as
- * many off their seat (or slipping); the rest are counted.
+ * and the calc sheet say the same. Where the sweep kept its bodies' own states (`bodies`), each
+ * contact's slip also says whether its body as a whole holds there or slides, and each body's own
+ * stretches follow in the calc sheet's limits table's words ("slides as a whole", "tips about …").
+ * At most `max` stretches where a body is not held (and of each body's own), twice as many off
+ * their seat (or slipping); the rest are counted.
  */
 export function sweepStateLines(data: SweepStates, names: Readonly<Record<string, string>>, max = MAX_STRETCHES): SweepStateLine[] {
   const friction = (support: string) => data.quantities.some((q) => q.support === support && (q.component === "frictionMargin" || q.component === "frictionRatio"));
@@ -118,13 +215,51 @@ export function sweepStateLines(data: SweepStates, names: Readonly<Record<string
   });
   const slips = data.slips ?? [];
   for (const o of slips.slice(0, max * 2))
-    lines.push({ kind: "slips", words: `${names[o.support] ?? o.support} slips ${where(o)}: it needs more friction than μ·n gives there (its friction margin is below zero).` });
+    lines.push({ kind: "slips", words: `${names[o.support] ?? o.support} slips ${where(o)}: it needs more friction than μ·n gives there (its friction margin is below zero).${slipBodyWords(o, data, names)}` });
+  // the bodies' own stretches: where one slides as a whole, tips or is unrestrained
+  const own = data.bodies?.stretches ?? [];
+  for (const o of own.slice(0, max))
+    lines.push({
+      kind: "body",
+      words: `${names[o.body] ?? o.body} ${bodyStateWords(o, names)} ${where(o)}: ${
+        o.state === "slides"
+          ? "its friction contacts together cannot give the friction it needs (Σμ·n − |Σt| below zero), so the body itself moves along its base"
+          : o.state === "tips"
+            ? "no set of its contacts and ties holds it"
+            : "its supports leave it free to move"
+      }.`,
+    });
   for (const o of notHeld.slice(0, max))
     lines.push({
       kind: "notHeld",
       words: `The friction margin at ${names[o.support] ?? o.support} is not plotted ${where(o)}, where ${names[o.body] ?? o.body} ${o.status === "tips" ? "tips" : "is unrestrained"}: a body that is not held has no friction margin (its reactions are only what would hold it).`,
     });
-  const hidden = Math.max(0, off.length - max * 2) + Math.max(0, slips.length - max * 2) + Math.max(0, notHeld.length - max);
-  if (hidden > 0) lines.push({ kind: "more", words: `… and ${hidden} more stretches where a support is off its seat or slips, or its body is not held.` });
+  const hidden = Math.max(0, off.length - max * 2) + Math.max(0, slips.length - max * 2) + Math.max(0, notHeld.length - max) + Math.max(0, own.length - max);
+  if (hidden > 0) lines.push({ kind: "more", words: `… and ${hidden} more stretches where a support is off its seat or slips, or its body is not held or slides as a whole.` });
   return lines;
+}
+
+const within = (o: PointStretch, x: number) => x >= Math.min(o.from, o.to) && x <= Math.max(o.from, o.to);
+
+/**
+ * What happens at one swept value, for the plot's hover: each body's own state where the sweep kept
+ * them ("Block holds", "Block slides as a whole", "Block tips about front pad"), else a body that
+ * tips or is unrestrained there (`statuses`); then each plotted support off its seat or slipping
+ * ("rear pad slips"). Empty where nothing is said of the point.
+ */
+export function pointStateWords(data: SweepStates & Pick<SweepData, "xs" | "statuses">, x: number, names: Readonly<Record<string, string>>): string {
+  const out: string[] = [];
+  if (data.bodies) {
+    for (const w of data.bodies.watched) {
+      const o = data.bodies.stretches.find((b) => b.body === w.body && within(b, x));
+      out.push(`${names[w.body] ?? w.body} ${o ? bodyStateWords(o, names) : "holds"}`);
+    }
+  } else {
+    const status = data.statuses[data.xs.indexOf(x)];
+    if (status === "tips") out.push("a body tips");
+    if (status === "unrestrained") out.push("a body is unrestrained");
+  }
+  for (const o of data.off ?? []) if (within(o, x)) out.push(`${names[o.support] ?? o.support} ${o.kind === "tie" ? "slack" : "off the ground"}`);
+  for (const o of data.slips ?? []) if (within(o, x)) out.push(`${names[o.support] ?? o.support} slips`);
+  return out.join("; ");
 }

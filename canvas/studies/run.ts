@@ -8,7 +8,8 @@ import { findAnyLimitWith, limitEverywhere, SketchInputError, sweeperOn, type Bo
 export { bodyLimits, firstReached, isBodyLimit, reachedAt, SketchInputError, type BodyLimitResult, type BodyLimitSpec, type LimitEverywhere, type LimitQuantity } from "@/solver/studySweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
 import type { FieldError } from "@/solver/types";
-import { marksZero } from "./display";
+import { marksZero, stretchesOf, watchBodies, type BodyStates } from "./display";
+export { stretchesOf };
 
 /** How far a job is: sweep points or runs (cases and combinations) done, of how many. */
 export type OnProgress = (done: number, total: number) => void;
@@ -61,6 +62,9 @@ export interface SweepData {
   /** where a plotted friction margin is below zero (the contact needs more friction than μ·n): the
    *  crossing alone does not say on which side of it the contact slips */
   slips?: Array<PointStretch & { support: string }>;
+  /** each body that may tip or slide as a whole, and where it does (`watchBodies`): whether the body
+   *  itself holds where one of its contacts slips */
+  bodies?: BodyStates;
 }
 
 /** Neighbouring points of a sweep that share something: the first and last swept value, how many. */
@@ -70,21 +74,6 @@ export interface PointStretch {
   points: number;
   /** the stretch is every point of the sweep */
   whole: boolean;
-}
-
-/** Stretches of neighbouring points with the same key (null: none there), in sweep order. */
-export function stretchesOf(xs: readonly number[], keys: ReadonlyArray<string | null>): Array<PointStretch & { key: string }> {
-  const out: Array<PointStretch & { key: string }> = [];
-  keys.forEach((key, i) => {
-    const last = out[out.length - 1];
-    if (key === null) return;
-    if (last && i > 0 && keys[i - 1] === key) {
-      last.to = xs[i];
-      last.points++;
-    } else out.push({ key, from: xs[i], to: xs[i], points: 1, whole: false });
-  });
-  for (const s of out) s.whole = s.points === xs.length;
-  return out;
 }
 
 const STATUS_RANK: Record<string, number> = { holds: 0, lifts: 1, tips: 2, unrestrained: 3 };
@@ -113,6 +102,8 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
   const off = new Map<string, Array<string | null>>(supports.map((id) => [id, []]));
   /** per point: "<body> <status>" where the support's body is not held and the support is on its seat */
   const loose = new Map<string, Array<string | null>>(withFriction.map((id) => [id, []]));
+  /** per point: what each body itself does (slides as a whole, tips, is unrestrained) */
+  const bodies = watchBodies(p.file, p.sketch.supports);
   try {
     for (let i = 0; i < xs.length; i++) {
       const pt = sweeper.at(xs[i]);
@@ -126,10 +117,12 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
         }
         const worst = Object.values(pt.result.bodies).reduce((w, b) => (STATUS_RANK[b.status] > STATUS_RANK[w] ? b.status : w), "holds");
         data.statuses.push(worst);
+        bodies.add(pt.result);
       } else {
         spec.quantities.forEach((_, k) => data.series[k].push(Number.NaN));
         for (const list of [...off.values(), ...loose.values()]) list.push(null);
         data.statuses.push("error");
+        bodies.add(null);
         data.errors.push({ value: xs[i], errors: pt.errors });
       }
       if ((i + 1) % chunk === 0 && i + 1 < xs.length && !onChunk((i + 1) / xs.length)) break;
@@ -149,6 +142,7 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
     const k = spec.quantities.findIndex((q) => q.support === support && q.component === "frictionMargin");
     return stretchesOf(data.xs, data.series[k].map((y) => (y < 0 ? "slip" : null))).map(({ key: _key, ...s }) => ({ ...s, support }));
   });
+  data.bodies = bodies.states(data.xs);
   data.series.forEach((ys, k) => {
     if (!marksZero(spec.quantities[k].component)) return;
     for (let i = 1; i < ys.length; i++) {

@@ -51,8 +51,10 @@ export function caseStateFindings(study: StudyResult): string[] {
       if (r.state === "lifted") bits.push(`${name} lifts off (its body is held by the other supports)`);
       else if (r.state === "slack") bits.push(`${name} goes slack (its body is held by the other supports)`);
       else if (stateWord(r, status) === "slips") {
-        const sliding = run.stability[r.body]?.sliding;
-        if (sliding && !("notApplicable" in sliding) && sliding.pass) bits.push(`${name} needs more friction than its own μ gives (the body as a whole has friction to spare)`);
+        // the body as a whole holds where the solve warns no SLIP on the body itself (Σ μ·n at least
+        // |Σ t|), as the case table's slip note reads it: whether its factor against sliding also
+        // meets the required one is the stability table's finding, said with it
+        if (!run.result.warnings.some((w) => w.code === "SLIP" && w.ids.includes(r.body))) bits.push(`${name} needs more friction than its own μ gives (the body as a whole holds: its other contacts take up the rest)`);
       }
     }
     if (bits.length) out.push(`${run.name} — ${bits.join("; ")}`);

@@ -7,7 +7,7 @@ import { formatLimit } from "@/solver/limit";
 import { describeQuantity } from "@/solver/quantity";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { sweepAxisTicks } from "@/lib/calcsheet/chart";
-import { displayKind, displayUnit, largestByKind, marksZero, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestByKind, marksZero, pointStateWords, toDisplay } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 
 const COLORS = ["rgb(var(--reaction))", "rgb(var(--accent))", "rgb(var(--ink))", "rgb(var(--caution))", "rgb(var(--plot-5))", "rgb(var(--plot-6))"];
@@ -99,7 +99,18 @@ export function SweepChart({
               const s = Number(String(item?.dataKey ?? "q0").slice(1));
               return [typeof v === "number" ? `${formatNumber(v, 4)}${unitOf(s) ? ` ${unitOf(s)}` : ""}` : "—", String(name)];
             }}
-            labelFormatter={(x) => `${parameterLabel} = ${formatNumber(Number(x), 5)}${data.unit ? ` ${prettyUnit(data.unit)}` : ""}`}
+            labelFormatter={(x) => {
+              const at = `${parameterLabel} = ${formatNumber(Number(x), 5)}${data.unit ? ` ${prettyUnit(data.unit)}` : ""}`;
+              // what the bodies and the plotted supports do there: a contact slipping alone, or the body as a whole
+              const state = pointStateWords(data, Number(x), names ?? {});
+              return state ? (
+                <>
+                  {at}
+                  <br />
+                  <span className="font-normal" data-testid="sweep-point-state">{state}</span>
+                </>
+              ) : at;
+            }}
             // compact: on a short chart the values must not hide the curves they read
             contentStyle={{ fontSize: 11, lineHeight: 1.3, padding: "3px 7px", borderColor: "rgb(var(--rule))", backgroundColor: "rgb(var(--paper-card) / 0.92)" }}
             itemStyle={{ padding: 0 }}

@@ -122,7 +122,7 @@ const BODY_LIMIT_WHY: Record<BodyLimitSpec["limit"], string> = {
  */
 export function bodyNoCrossingWords(result: BodyLimitResult & { found: false }, q: BodyLimitSpec, pName: string, unit: string): string {
   if (!Number.isFinite(result.min)) return "no crossing in this range: not held anywhere in it, or nothing bears";
-  if (q.limit === "tips") return "no crossing in this range: it does not tip";
+  if (q.limit === "tips") return `no crossing in this range: it does not tip${result.slidesFrom !== undefined ? `; it slides as a whole from ${pName} = ${limitWithUnit(result.slidesFrom, unit)}` : ""}`;
   const tips = result.tipsFrom !== undefined ? `, it tips first, from ${pName} = ${limitWithUnit(result.tipsFrom, unit)}` : "";
   if (result.max < 0) return `no crossing in this range: it slides as a whole throughout (Σμ·n − |Σt| stays below zero)${tips ? `, while it is held; then${tips.slice(1).replace(" first", "")}` : ""}`;
   if (tips) return `no crossing in this range: searched while the body is held${tips}`;
@@ -130,19 +130,36 @@ export function bodyNoCrossingWords(result: BodyLimitResult & { found: false }, 
 }
 
 /**
+ * Where a body found tipping has already slid as a whole, in words, after its tipping value: the
+ * solve checks friction but does not enforce it, so a body found sliding is still solved as if held
+ * along its base, and its tipping value stands only while it is held against sliding (kept from
+ * sliding by a stop or an anchor). Empty when it does not slide first, going from the range's start.
+ */
+export function slidFirstWords(result: BodyLimitResult, q: BodyLimitSpec, pName: string, from: number, to: number): string {
+  if (q.limit !== "tips" || !result.found || result.slidesFrom === undefined) return "";
+  const tips = reachedAt(result, from, to)!;
+  const first = from <= to ? result.slidesFrom <= tips : result.slidesFrom >= tips;
+  if (!first) return "";
+  return `while it is held against sliding: it already slides as a whole from ${pName} = ${limitWithUnit(result.slidesFrom, result.unit)}`;
+}
+
+/**
  * The answer of a search of a body's own limit in one run: where it tips or slides as a whole, and
  * why that is the limit; else why it is not reached in the range. `over`: "for the flow factor from 0
  * to 4"; `precision`: how far the value is given.
  */
-export function bodyLimitWords(result: BodyLimitResult, q: BodyLimitSpec, label: string, pName: string, over: string, precision: string, from: number): string {
+export function bodyLimitWords(result: BodyLimitResult, q: BodyLimitSpec, label: string, pName: string, over: string, precision: string, from: number, to = Number.POSITIVE_INFINITY): string {
   if (result.found) {
     const again = result.crossings.length > 1 ? ` and again at ${result.crossings.slice(1).map((x) => limitWithUnit(x, result.unit)).join(", ")}` : "";
     const start = result.value === from ? ", already at the range's start" : "";
-    return `${label} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again}${start} (${precision}): ${BODY_LIMIT_WHY[q.limit]}.`;
+    const slid = slidFirstWords(result, q, pName, from, to);
+    const held = slid ? ` — ${slid}; the solve checks friction but does not enforce it, so it tips there only if it is kept from sliding` : "";
+    return `${label} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again}${start} (${precision}): ${BODY_LIMIT_WHY[q.limit]}${held}.`;
   }
   const name = label.slice(0, label.length - (q.limit === "tips" ? " tips" : " slides as a whole").length);
   if (!Number.isFinite(result.min)) return `No crossing in this range: ${name} is not held anywhere ${over}${q.limit === "slides" ? ", or no contact with friction bears" : ""}.`;
-  if (q.limit === "tips") return `No crossing in this range: ${name} does not tip ${over} (a set of its contacts and ties holds it throughout).`;
+  if (q.limit === "tips")
+    return `No crossing in this range: ${name} does not tip ${over} (a set of its contacts and ties holds it throughout)${result.slidesFrom !== undefined ? `; it slides as a whole from ${pName} = ${limitWithUnit(result.slidesFrom, result.unit)}` : ""}.`;
   const tips = result.tipsFrom !== undefined ? `from ${pName} = ${limitWithUnit(result.tipsFrom, result.unit)}` : "";
   if (result.max < 0)
     return `No crossing in this range: ${name} slides as a whole throughout, ${over} (Σμ·n − |Σt| stays below zero)${tips ? `, while it is held; it tips ${tips} (sliding is searched only while the body is held)` : ""}.`;
@@ -426,7 +443,7 @@ export function SweepPanel() {
         const precision = result.found ? limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit, result.crossings) : "";
         const over = `for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}`;
         const words = isBodyLimit(q)
-          ? bodyLimitWords(result, q, label, pName, over, precision, s.from) + otherRange
+          ? bodyLimitWords(result, q, label, pName, over, precision, s.from, s.to) + otherRange
           : result.found
           ? `The ${label} reaches ${tgt.shown} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again} (${limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit, result.crossings)}).${otherRange}`
           : Number.isFinite(result.min)
@@ -650,7 +667,7 @@ export function SweepPanel() {
                 </li>
               ))}
               {stateLines.map((l, i) => (
-                <li key={`${l.kind}-${i}`} className="text-ink-soft" data-testid={l.kind === "off" ? "off-stretch" : l.kind === "notHeld" ? "not-held-stretch" : undefined}>
+                <li key={`${l.kind}-${i}`} className="text-ink-soft" data-testid={l.kind === "off" ? "off-stretch" : l.kind === "notHeld" ? "not-held-stretch" : l.kind === "body" ? "body-stretch" : undefined}>
                   {l.words}
                 </li>
               ))}
@@ -758,7 +775,7 @@ export function SweepPanel() {
                           {"error" in r.result
                             ? `not solved: ${runErrorWords(ran?.sketch ?? sketch, r.result)}`
                             : r.result.found
-                              ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — first (a tie)" : " — first") : ""}`
+                              ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — first (a tie)" : " — first") : ""}${everywhere.body && slidFirstWords(r.result, everywhere.body, everywhere.pName, everywhere.from, everywhere.to) ? `, ${slidFirstWords(r.result, everywhere.body, everywhere.pName, everywhere.from, everywhere.to)}` : ""}`
                               : everywhere.body
                                 ? bodyNoCrossingWords(r.result, everywhere.body, everywhere.pName, everywhere.unit)
                                 : noCrossingWords(r.result, everywhere.targetSI, everywhere.target)}

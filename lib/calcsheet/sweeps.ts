@@ -6,11 +6,11 @@
 // ground or its body is not held, and the sheet says where, in the tab's words.
 import { displayKind, displayUnit, largestByKind, marksZero, parameterWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { runSweep } from "@/canvas/studies/run";
-import { findBodySlidingWith, findLimitWith, findTippingWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
+import { findBodySlidingWith, findLimitWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
 import { describeQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
-import { bodyLimits, firstReached, limitEverywhere, reachedAt, sweeperOn, type LimitEverywhere } from "@/solver/studySweep";
+import { bodyLimits, findBodyLimitWith, firstReached, limitEverywhere, reachedAt, sweeperOn, type BodyLimitResult, type LimitEverywhere } from "@/solver/studySweep";
 import type { Cell, Table } from "@/solver/report";
 import { convert, formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import type { ChartSpec } from "./chart";
@@ -233,7 +233,9 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile, onProgress?: (do
         return { ...run, result: { error: (err as Error).message } };
       }
     });
-  for (const { body, limit } of tipping) addRows(bodyRuns((s) => findTippingWith(s, range, body)), { support: body, component: "margin" }, limit, "tipping", body);
+  // tipping with where the body already slides as a whole (`slidesFrom`): friction is checked, not
+  // enforced, so a tipping value past that holds only for a body kept from sliding
+  for (const { body, limit } of tipping) addRows(bodyRuns((s) => findBodyLimitWith(s, range, { body, limit: "tips" })), { support: body, component: "margin" }, limit, "tipping", body);
   for (const { body, limit } of sliding) addRows(bodyRuns((s) => findBodySlidingWith(s, range, body)), { support: body, component: "frictionMargin" }, limit, "sliding as a whole", body);
   // the first of every limit: what governs over the sweep's range (every row at that value, a tie)
   const governing = firstReached(all, sw.from, sw.to);
@@ -284,6 +286,8 @@ export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (d
     const res = r.run.result;
     let value: Cell;
     let note: string;
+    // a tipping row: where the body already slides as a whole in the same run (`findBodyLimitWith`)
+    const slidesFrom = r.past === "tipping" && "found" in res ? (res as BodyLimitResult).slidesFrom : undefined;
     if ("error" in res) {
       value = "not solved";
       note = res.error;
@@ -295,13 +299,18 @@ export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (d
         ? `past it throughout: ${r.past} over the whole range (the margin stays below zero)`
         : tips
           ? `searched while the body is held: it tips from ${limitWithUnit(tips.value!, unit)}`
-          : "";
+          : slidesFrom !== undefined
+            ? `it slides as a whole from ${limitWithUnit(slidesFrom, unit)}`
+            : "";
     } else {
       value = r.value;
+      const slidFirst = slidesFrom !== undefined && (sw.from <= sw.to ? slidesFrom <= r.value : slidesFrom >= r.value);
       const bits = [
         r.governs ? (governing.length > 1 ? "governs (first, a tie)" : "governs: reached first of all") : r.first ? "first of this limit" : "",
         r.value === sw.from ? "already at the range's start" : "",
         r.more ? `reached ${r.more} more time${r.more > 1 ? "s" : ""} in the range` : "",
+        // friction is checked, not enforced: the body is solved as if held along its base
+        slidFirst ? `while it is held against sliding: it already slides as a whole from ${limitWithUnit(slidesFrom, unit)}` : "",
       ];
       note = bits.filter(Boolean).join("; ");
     }

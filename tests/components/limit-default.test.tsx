@@ -2,7 +2,7 @@
 // crossing the plot marks (where a contact lifts), not merely the first line of the plot. Its
 // answer and its line on the plot give the value to 4 significant figures with the search's tolerance.
 import { readFileSync } from "node:fs";
-import { screen } from "@testing-library/react";
+import { screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { mountResultsDock } from "./editor-helpers";
@@ -49,6 +49,29 @@ describe("the quantity the limit finder offers first", () => {
   });
 });
 
+/**
+ * Tests have no worker: a study job runs on the test's own thread (canvas/studies/client.ts,
+ * `runHere`), blocking it while the sweep and the limit search solve. Alone they take well under a
+ * second, but on a loaded machine several; a `findBy` with its default 1 s could time out while the
+ * job it waits for is still running (the job blocks the poll too). So the sweeps here take 41 points
+ * (enough to see the crossing: the answer comes from the limit finder, not the points), the answers
+ * are awaited for up to 15 s and each test may take 60 s: a real failure (no answer, a wrong one)
+ * still fails, only later.
+ */
+const SLOW = { timeout: 15_000 };
+const TEST_TIMEOUT_MS = 60_000;
+
+async function runSweep(user: ReturnType<typeof userEvent.setup>) {
+  const points = screen.getByRole("textbox", { name: "Points" });
+  await user.clear(points);
+  await user.type(points, "41");
+  // a run again keeps the last plot until the new one is in: wait for the chart of this run
+  const before = screen.queryByTestId("sweep-chart")?.getAttribute("data-run") ?? null;
+  await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+  await waitFor(() => expect(screen.getByTestId("sweep-chart").getAttribute("data-run")).not.toBe(before), SLOW);
+  return screen.getByTestId("crossings");
+}
+
 describe("the limit finder on the thrust stand", () => {
   it("searches the rear pad's margin the plot marks, and finds where it lifts: 0.8·cos s − 0.7·sin s = 0.6·T / W", async () => {
     const user = userEvent.setup();
@@ -64,8 +87,7 @@ describe("the limit finder on the thrust stand", () => {
       ["rear pad: tangential force t", false],
       ["rear pad: resultant", false],
     ]);
-    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
-    expect((await screen.findByTestId("crossings")).textContent).toContain("margin at rear pad crosses zero between slope");
+    expect((await runSweep(user)).textContent).toContain("margin at rear pad crosses zero between slope");
     const quantity = screen.getByRole("combobox", { name: "Quantity for the limit" }) as HTMLSelectElement;
     expect([...quantity.options].map((o) => o.textContent)).toEqual(["resultant at front pin", "margin at rear pad", "Stand tips"]);
     expect(quantity.selectedOptions[0].textContent).toBe("margin at rear pad");
@@ -78,18 +100,16 @@ describe("the limit finder on the thrust stand", () => {
     expect(formatLimit(s)).toBe("9.534");
     // the sweep's default range is the slope ±90°, −87° to 93°: searched to 1e-9 of it, 1.8e-7°,
     // far finer than the 0.001° the answer is written to, so the words leave it out
-    expect((await screen.findByTestId("limit-answer")).textContent).toBe(`The margin at rear pad reaches 0 kN at slope = ${formatLimit(s)} deg (to 4 significant figures).`);
-  });
+    expect((await screen.findByTestId("limit-answer", {}, SLOW)).textContent).toBe(`The margin at rear pad reaches 0 kN at slope = ${formatLimit(s)} deg (to 4 significant figures).`);
+  }, TEST_TIMEOUT_MS);
 
   it("keeps the quantity picked while it is still plotted", async () => {
     const user = userEvent.setup();
     mountResultsDock(thrustStandOnSlope());
     await user.click(screen.getByRole("tab", { name: "Sweep" }));
-    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
-    await screen.findByTestId("crossings");
+    await runSweep(user);
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "resultant at front pin");
-    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
-    await screen.findByTestId("crossings");
+    await runSweep(user);
     expect((screen.getByRole("combobox", { name: "Quantity for the limit" }) as HTMLSelectElement).selectedOptions[0].textContent).toBe("resultant at front pin");
-  });
+  }, TEST_TIMEOUT_MS);
 });

@@ -100,9 +100,11 @@ describe("the limit finder on a body's own limits", () => {
     await user.click(screen.getByRole("button", { name: "In every case" }));
     const again = await screen.findByTestId("limit-everywhere");
     expect(within(again).getByRole("status").textContent).toBe("Block tips first in Full flow.");
+    // friction is checked, not enforced: each case says where the block already slides as a whole,
+    // f = √(μ·g0) = 1.715 at full flow and 1.715 / 0.8 = 2.144 throttled (hand calculation above)
     expect([...again.querySelectorAll("tbody tr")].map((tr) => tr.textContent)).toEqual([
-      `Case Full flowflow factor = ${formatLimit(tipsAt)} — first`,
-      "Case Throttledno crossing in this range: it does not tip",
+      `Case Full flowflow factor = ${formatLimit(tipsAt)} — first, while it is held against sliding: it already slides as a whole from flow factor = ${formatLimit(slidesAt(0.3))}`,
+      `Case Throttledno crossing in this range: it does not tip; it slides as a whole from flow factor = ${formatLimit(slidesAt(0.3) / 0.8)}`,
     ]);
   });
 

@@ -80,7 +80,7 @@ describe("a version's kept sweeps", { timeout: 30000 }, () => {
     expect(within(section).getByTestId("sweep-limits-summary").textContent).toBe(direct.summary);
   });
 
-  it("says where a plotted contact is off the ground and its friction margin is left out, as the Sweep tab and the calc sheet do", async () => {
+  it("says where a plotted contact is off the ground, where the cart tips, and that its friction margin is left out, as the Sweep tab and the calc sheet do", async () => {
     // the washing cart's kept sweep: the lance raised from −90° to 0°; the front caster lifts at
     // about −59° and the cart tips back onto its braked rear wheels (the example's notes)
     const doc = structuredClone(exampleById("washing-cart")!.sketch) as unknown as SketchFile;
@@ -88,6 +88,8 @@ describe("a version's kept sweeps", { timeout: 30000 }, () => {
     await settled();
     expect(screen.getAllByTestId("sweep-state").map((li) => li.textContent)).toEqual([
       "front caster is off the ground from theta = −59 to 0 deg.",
+      // the body's own state over the same stretch, as the calc sheet's limits table words it
+      "Washing cart tips about rear wheels (braked) from theta = −59 to 0 deg: no set of its contacts and ties holds it.",
       "The friction margin at rear wheels (braked) is not plotted from theta = −59 to 0 deg, where Washing cart tips: a body that is not held has no friction margin (its reactions are only what would hold it).",
     ]);
   });

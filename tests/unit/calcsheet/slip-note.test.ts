@@ -37,7 +37,7 @@ describe("a contact over its μ in a body with friction to spare, on the calc sh
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Block", version: 1, savedAt: new Date(0), generatedAt: new Date(0), signoff: [], file: pushedTallBlock(), units: "SI" });
     const { text } = await pdfText(buf);
     expect(text).toMatch(/slips \*/);
-    expect(text).toContain("but its body passes the sliding check, which takes all its contacts together");
+    expect(text).toContain("but its body as a whole holds: all its contacts together give the friction it needs");
   }, 60000);
 
   it("leaves a table without such a state as it was", () => {
@@ -53,7 +53,7 @@ describe("a contact over its μ in a body with friction to spare, on the calc sh
 
 describe("a case in which a contact is not as drawn, on the sheet's first page and in the sign-off concerns", () => {
   it("the uplift check's upwind pad, over its own μ while the block has friction to spare", async () => {
-    const line = "Uplift check — upwind pad needs more friction than its own μ gives (the body as a whole has friction to spare)";
+    const line = "Uplift check — upwind pad needs more friction than its own μ gives (the body as a whole holds: its other contacts take up the rest)";
     expect(versionConcerns(pushedTallBlock())).toContain(line);
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Block", version: 1, savedAt: new Date(0), generatedAt: new Date(0), signoff: [], file: pushedTallBlock(), units: "SI" });
     const { text } = await pdfText(buf);

@@ -75,6 +75,7 @@ describe("a kept sweep's friction margin on the calc sheet", () => {
     expect(tipping.every(([, y]) => y === null)).toBe(true);
     expect(states).toEqual([
       "front caster is off the ground from theta = −59 to 0 deg.",
+      "Washing cart tips about rear wheels (braked) from theta = −59 to 0 deg: no set of its contacts and ties holds it.",
       "The friction margin at rear wheels (braked) is not plotted from theta = −59 to 0 deg, where Washing cart tips: a body that is not held has no friction margin (its reactions are only what would hold it).",
     ]);
     // one function says it for the Sweep tab too

@@ -35,6 +35,18 @@ describe("npm run solve -- --limit … --quantity BODY.tips | BODY.slides", () =
     expect(out).toMatchObject({ ok: true, parameter: "flowFactor", from: 0, to: 4, quantity: { body: "blk", limit: "tips" }, result: { found: true, unit: "" } });
     expect(out).not.toHaveProperty("target");
     expect(out.result.value).toBeCloseTo(Math.sqrt(W / 500), 7); // 3.1316
+    // μ = 1.2: sliding would need f = √(1.2·g0) = 3.43, past the tipping: nothing slides first
+    expect(out.result).not.toHaveProperty("slidesFrom");
+  }, 30000);
+
+  it("BODY.tips past where the block already slides: slidesFrom says where, f²·ṁ0·V0 = μ·W (hand calculation above)", () => {
+    // μ = 0.3: it slides as a whole from f = √(0.3·g0) = 1.7152 and is found tipping at f = 3.1316,
+    // a value it reaches only if it is kept from sliding (friction is checked, not enforced)
+    const r = solveCli("--limit", "flowFactor=0..4", "--quantity", "blk.tips", written(block(0.3)));
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.result.value).toBeCloseTo(Math.sqrt(W / 500), 7); // 3.1316
+    expect(out.result.slidesFrom).toBeCloseTo(Math.sqrt((0.3 * W) / 500), 7); // 1.7152
   }, 30000);
 
   it("BODY.slides in every case: f²·ṁ0·V0 = μ·W, the first case named, and where a case tips", () => {

@@ -41,8 +41,10 @@ describe("where a sweep's contact slips", () => {
     data.xs.forEach((F, i) => expect(data.series[0][i]).toBeCloseTo((0.5 * W - F) / 2, 6));
     // F = 50 … 100 N are past μ·W = 49.03 N
     expect(data.slips).toEqual([{ support: "L", from: 50, to: 100, points: 6, whole: false }]);
+    // both feet have μ = 0.5: past μ·W the box itself slides as a whole over the same stretch
     expect(sweepStateLines(data, elementNames(file)).map((l) => l.words)).toEqual([
-      "left foot slips from F = 50 to 100 N: it needs more friction than μ·n gives there (its friction margin is below zero).",
+      "left foot slips from F = 50 to 100 N: it needs more friction than μ·n gives there (its friction margin is below zero). b slides as a whole there too (Σμ·n − |Σt| below zero).",
+      "b slides as a whole from F = 50 to 100 N: its friction contacts together cannot give the friction it needs (Σμ·n − |Σt| below zero), so the body itself moves along its base.",
     ]);
   });
 
@@ -52,6 +54,9 @@ describe("where a sweep's contact slips", () => {
     const { markers, states } = sweepCharts(file, file.sweeps![0], "SI", []);
     expect(markers).toHaveLength(1);
     expect(markers[0].x).toBeCloseTo(100 - 0.5 * W, 6);
-    expect(states).toEqual(["left foot slips from F = 0 to 50 N: it needs more friction than μ·n gives there (its friction margin is below zero)."]);
+    expect(states).toEqual([
+      "left foot slips from F = 0 to 50 N: it needs more friction than μ·n gives there (its friction margin is below zero). b slides as a whole there too (Σμ·n − |Σt| below zero).",
+      "b slides as a whole from F = 0 to 50 N: its friction contacts together cannot give the friction it needs (Σμ·n − |Σt| below zero), so the body itself moves along its base.",
+    ]);
   });
 });
