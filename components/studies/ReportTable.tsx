@@ -2,8 +2,7 @@
 // A result table from the solver's report (the rows the CSV and the calc sheet use), with a CSV button.
 // Long names wrap in their cell, so the table fits its panel instead of scrolling sideways.
 import { useEffect, useId, useRef, useState, type ReactNode } from "react";
-import type { Cell, Table } from "@/solver/report";
-import { formatNumber } from "@/solver/units";
+import { cellNumberText, type Cell, type Table } from "@/solver/report";
 import { BUTTON } from "@/components/editor/ui";
 import { downloadCsv, useCsvName } from "./csv";
 
@@ -125,7 +124,7 @@ export function ReportTable({
                   {cellMark.symbol}
                 </span>
               )}
-              {cell === null ? "—" : typeof cell === "number" ? formatNumber(cell, 4, { keepZeros: true }) : text ? <span className={`inline-block ${minWidthOf(cell)}`.trim()}>{cell}</span> : cell}
+              {cell === null ? "—" : typeof cell === "number" ? cellNumberText(table, cell) : text ? <span className={`inline-block ${minWidthOf(cell)}`.trim()}>{cell}</span> : cell}
               {extra}
             </td>
           );
