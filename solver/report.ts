@@ -101,20 +101,6 @@ export function handCheckScale(eq: SolveResult["equations"][string], about: Vec2
   );
 }
 
-/**
- * The scale that chooses a hand check's units: its forces and the couples the terms bring (a
- * fixed support's, a given couple), not the moments about the picked point. Those grow with the
- * arm to wherever the checker picks; letting them choose would put the check in kip while the
- * drawing and the reactions of the same result read lbf.
- */
-export function handCheckUnitScale(eq: SolveResult["equations"][string]): Scale {
-  const terms = [...eq.forces, ...eq.momentum];
-  return scaleOf(
-    terms.flatMap((t) => [t.fx, t.fy]),
-    terms.map((t) => t.m),
-  );
-}
-
 /** The figures behind a body's factors of safety: restoring and overturning moments, friction available and the force driving sliding. */
 function stabilityFigures(stability: Readonly<Record<string, BodyStability>> | null | undefined, forces: Array<number | undefined>, moments: Array<number | undefined>): void {
   for (const st of Object.values(stability ?? {})) {
@@ -171,6 +157,24 @@ export function studyScale(study: StudyResult): Scale {
     stabilityFigures(run.stability, forces, moments);
   }
   return scaleOf(forces, moments);
+}
+
+/**
+ * The one scale of a saved version, its calc sheet and its review page alike: the largest of its
+ * cases' scales (`studyScale` of `study`, every case and combination), the sketch as drawn solved
+ * apart (`asDrawn`, with its factors of safety) and the result as drawn as the results panel scales
+ * it (`resultScale`: its reactions, the terms of its hand checks, its factors of safety). Every
+ * table, the drawing and the figures in words of the version then write a force in one unit: N with
+ * N·m only when all of it is below 1 kN (1 kN·m), else kN with kN·m; lbf with lbf·ft, or kip with
+ * kip·ft from 10 kip (10 kip·ft). A sketch without cases reads in the units of its editor's screen.
+ */
+export function versionScale(
+  result: SolveResult,
+  study: StudyResult | null,
+  asDrawn: StudyResult | null,
+  stability?: Readonly<Record<string, BodyStability>> | null,
+): Scale {
+  return largestScale(...[study, asDrawn].flatMap((s) => (s ? [studyScale(s)] : [])), resultScale(result, stability));
 }
 
 /** A table's force and moment units. */

@@ -75,6 +75,7 @@ export const boxesOverlap = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.
 const overlapArea = (a: Box, b: Box) => Math.max(0, Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0)) * Math.max(0, Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0));
 const union = (a: Box, b: Box): Box => ({ x0: Math.min(a.x0, b.x0), y0: Math.min(a.y0, b.y0), x1: Math.max(a.x1, b.x1), y1: Math.max(a.y1, b.y1) });
 const moveBox = (b: Box, dx: number, dy: number): Box => ({ x0: b.x0 + dx, y0: b.y0 + dy, x1: b.x1 + dx, y1: b.y1 + dy });
+const inBox = (p: Pt, b: Box) => p[0] >= b.x0 && p[0] <= b.x1 && p[1] >= b.y0 && p[1] <= b.y1;
 const clampTo = (p: Pt, b: Box): Pt => [Math.min(Math.max(p[0], b.x0), b.x1), Math.min(Math.max(p[1], b.y0), b.y1)];
 
 /**
@@ -293,13 +294,15 @@ function cost(b: Box, placed: readonly Box[], own: Own, moved: boolean, frame?: 
 /**
  * The cheapest offset for a label whose own place is `box`; the earliest wins a tie. A label that
  * reaches past the edge of the drawing area (`frame`) but is partly inside it also tries the
- * places just inside the edge; one inside it does not move out past the edge (under the legend)
- * to make way; one wholly off the area stays with what it labels.
+ * places just inside the edge, as does one wholly past it whose own point (`own.anchor`) is inside
+ * (an inlet placed near the left edge of a phone's view writes its values past that edge, left of
+ * its arrow's tail); one inside it does not move out past the edge (under the legend) to make way;
+ * one wholly off the area with what it labels stays with it.
  */
 function bestOffset(box: Box, placed: readonly Box[], own: Own, frame?: Box): Pt {
   let best: Pt = [0, 0];
   let bestCost = Infinity;
-  const within = frame && boxesOverlap(box, frame) ? frame : undefined;
+  const within = frame && (boxesOverlap(box, frame) || (own.anchor && inBox(own.anchor, frame))) ? frame : undefined;
   const edge = within && outside(box, within) > 0.5 ? within : undefined;
   const tries = offsets(box, own.anchor);
   if (edge) {

@@ -201,7 +201,7 @@ export function ResultsDock() {
               <button
                 key={id}
                 {...tabList.tabProps(id)}
-                className={`-mb-px whitespace-nowrap border-b-2 px-3 py-1 text-[12.5px] font-medium ${tab === id ? "border-accent text-ink" : "border-transparent text-ink-faint hover:text-ink"}`}
+                className={`-mb-px whitespace-nowrap border-b-2 px-3 py-1 text-[12.5px] font-medium pointer-coarse:min-h-10 ${tab === id ? "border-accent text-ink" : "border-transparent text-ink-faint hover:text-ink"}`}
               >
                 {label}
               </button>
@@ -223,7 +223,7 @@ export function ResultsDock() {
                   aria-checked={sense === id}
                   {...radioKeys(i, 2, sense === id, (k) => setSense(k === 0 ? "body" : "support"))}
                   onClick={() => setSense(id)}
-                  className={`rounded px-2 py-0.5 pointer-coarse:min-h-7 ${sense === id ? "bg-reaction-soft font-semibold text-reaction" : "text-ink-soft hover:text-ink"}`}
+                  className={`rounded px-2 py-0.5 pointer-coarse:min-h-10 ${sense === id ? "bg-reaction-soft font-semibold text-reaction" : "text-ink-soft hover:text-ink"}`}
                 >
                   {label}
                 </button>
@@ -260,7 +260,7 @@ function ReactionsCsv({ sense }: { sense: Sense }) {
   return (
     <button
       type="button"
-      className="order-last ml-2 pb-1 text-[12px] text-ink-soft hover:text-ink disabled:opacity-40 pointer-coarse:min-h-7 pointer-coarse:min-w-7"
+      className="order-last ml-2 pb-1 text-[12px] text-ink-soft hover:text-ink disabled:opacity-40 pointer-coarse:min-h-10 pointer-coarse:min-w-10"
       disabled={!shown}
       aria-label="Download the reactions as CSV"
       // the supports by their labels, as the table on screen names them

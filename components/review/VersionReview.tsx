@@ -14,10 +14,10 @@ import type { SketchStatus } from "@/lib/sketch-schemas";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
-import { asDrawnTwin, reactionTable, stabilityTable } from "@/solver/report";
+import { asDrawnTwin, reactionTable, stabilityTable, unitFamily, versionScale, type Scale } from "@/solver/report";
 import { withoutColumn, withoutEmptyReactionColumns } from "@/canvas/studies/tables";
 import { ReportTable } from "@/components/studies/ReportTable";
-import { asDrawnOfDocument, studyOfDocument } from "@/lib/review/compare";
+import { asDrawnOfDocument, solveDocument, studyOfDocument } from "@/lib/review/compare";
 import { elementLabels } from "@/lib/review/pin-words";
 import { asDrawnName, belowRequired, CaseTables } from "@/components/studies/CaseTables";
 import { CsvSubject } from "@/components/studies/csv";
@@ -42,22 +42,34 @@ export function asDrawnCase(document: SketchFile): { id: string; name: string } 
   return run ? { id: run.id, name: run.name } : null;
 }
 
+/** The scale of every force and moment a version's page shows, chosen as its calc sheet chooses it
+ *  (`versionScale`: its cases, the sketch as drawn with its factors of safety, and the result as
+ *  drawn), so a figure reads in the same unit on the page and on the sheet; null when it does not solve. */
+export function versionScaleOf(document: SketchFile): Scale | null {
+  const { result } = solveDocument(document);
+  if (!result) return null;
+  const asDrawn = asDrawnOfDocument(document);
+  const run = asDrawn?.runs[0];
+  return versionScale(result, studyOfDocument(document), asDrawn, run?.ok ? run.stability : null);
+}
+
 /** The version's reactions as drawn, in one unit a table (the rows the editor, the CSV and the calc
  *  sheet use), and its factors of safety as drawn (with cases, the cases' tables below carry each
  *  case's; the values on the drawing are a state of their own, unless a case is that state over
  *  again: then they are said once, with that case, "<case name>, as drawn"). */
 export function VersionReactions({ document, units }: { document: SketchFile; units: UnitSystem }) {
   const { result, parsed } = useSolved(document);
+  const scale = useMemo(() => versionScaleOf(document) ?? undefined, [document]);
   const study = useMemo(() => asDrawnOfDocument(document), [document]);
   const twin = useMemo(() => asDrawnCase(document), [document]);
   const hasCases = !!(document.cases?.length || document.combinations?.length);
   if (!result) return <Notice tone="error">This version does not solve{!parsed.ok ? `: ${parsed.errors[0]?.path} ${parsed.errors[0]?.message}` : "."}</Notice>;
   const names = Object.fromEntries(document.supports.map((s) => [s.id, s.label || s.id]));
-  const stability = study && !twin ? { ...withoutColumn(stabilityTable(study, units), "case"), ...(hasCases ? { title: "Factors of safety as drawn" } : {}) } : null;
+  const stability = study && !twin ? { ...withoutColumn(stabilityTable(study, units, scale), "case"), ...(hasCases ? { title: "Factors of safety as drawn" } : {}) } : null;
   return (
     <>
       <ReportTable
-        table={withoutEmptyReactionColumns(reactionTable(result, units, { names }))}
+        table={withoutEmptyReactionColumns(reactionTable(result, units, { names, scale }))}
         fileName="reactions"
         testId="version-reactions"
         caption="Forces on the body from each support, as drawn."
@@ -81,6 +93,8 @@ export function VersionCases({ document, units }: { document: SketchFile; units:
   const study = useMemo(() => (document.cases?.length || document.combinations?.length ? studyOfDocument(document) : null), [document]);
   // the case that is the sketch as drawn: its factors of safety are the drawing's, said once
   const twin = useMemo(() => (study ? asDrawnCase(document) : null), [study, document]);
+  // the unit family of the page and of the version's calc sheet
+  const scale = useMemo(() => (study ? (versionScaleOf(document) ?? undefined) : undefined), [study, document]);
   if (!study) return null;
   const n = study.runs.length;
   return (
@@ -89,7 +103,7 @@ export function VersionCases({ document, units }: { document: SketchFile; units:
       <p className="text-xs text-ink-soft">
         {n} {n === 1 ? "run" : "runs"} (cases and combinations, each solved as its own load set), as saved in this version.
       </p>
-      <CaseTables result={study} units={units} asDrawn={twin?.id} sketch={document} />
+      <CaseTables result={study} units={units} asDrawn={twin?.id} sketch={document} scale={scale} />
     </section>
   );
 }
@@ -118,6 +132,11 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
     window.history.replaceState(window.history.state, "", id ? `#thread-${id}` : window.location.pathname + window.location.search);
   };
   const doc = version.data?.version.document;
+  // one force and one moment unit for the whole page, as its calc sheet writes them
+  const family = useMemo(() => {
+    const scale = doc ? versionScaleOf(doc) : null;
+    return scale ? unitFamily(units, scale) : undefined;
+  }, [doc, units]);
   const labels = useMemo(() => (doc ? elementLabels(doc) : {}), [doc]);
   const pins = useMemo(
     () =>
@@ -128,7 +147,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   );
   const refresh = () => void qc.invalidateQueries({ queryKey: apiKey(`/api/sketches/${sketchId}`) });
   // what the version's own results say: a body not held, a slip, a factor of safety short
-  const results = useMemo(() => (doc ? versionConcerns(doc) : []), [doc]);
+  const results = useMemo(() => (doc ? versionConcerns(doc, units, family?.force) : []), [doc, units, family]);
   const concerns = withOpenThreads(results, comments.data?.threads ?? [], comments.data?.earlierOpen ?? []);
 
   if (version.isError) return <Notice tone="error">{version.error instanceof ApiError ? version.error.message : "The version could not be loaded."}</Notice>;
@@ -179,7 +198,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
         {v ? (
           <p className="flex flex-wrap items-center gap-x-3 text-sm text-ink-soft">
             <StatusMark status={v.status} warnings={v.warnings} />
-            <span>largest reaction {formatForceCell(v.largestReaction, units)}</span>
+            <span>largest reaction {formatForceCell(v.largestReaction, units, family?.force)}</span>
             <span>
               saved by {v.authorName ?? "a deleted account"}, {formatDateTime(v.createdAt)}
             </span>
@@ -218,6 +237,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
               }}
               onSelectThread={setSelected}
               units={units}
+              family={family}
               label={`Drawing of version ${number} with its reactions and ${pins.length} comment pins`}
             />
           ) : (

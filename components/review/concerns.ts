@@ -5,13 +5,16 @@
 // dialogs list them; the calc sheet's first page says the same.
 import { parseSketch, requirementsOf, solveWithStability, type ParseResult } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
+import type { UnitSystem } from "@/solver/units";
 import { asDrawnOfDocument, solveDocument, studyOfDocument } from "@/lib/review/compare";
 import type { StudyResult } from "@/solver/cases";
 import { caseFindings, nameIn, stateWord } from "@/solver/report";
 import { statusSentences } from "@/components/results/statusSentence";
 
-/** `doc`: a sketch file as saved (any format version; it is read as the CLI reads it). */
-export function versionConcerns(doc: unknown): string[] {
+/** `doc`: a sketch file as saved (any format version; it is read as the CLI reads it). `units` and
+ *  `forceUnit`: the page's, so a force in a finding reads as in the tables beside it and on the
+ *  calc sheet (`unitFamily(units, versionScale(…)).force`); by default SI, each force its own unit. */
+export function versionConcerns(doc: unknown, units: UnitSystem = "SI", forceUnit?: string): string[] {
   // a document object is parsed and solved once for the whole page (its drawing and tables too)
   if (typeof doc !== "object" || doc === null) return notSolved(parseSketch(doc));
   const file = doc as SketchFile;
@@ -22,7 +25,7 @@ export function versionConcerns(doc: unknown): string[] {
   const out: string[] = [];
   // with the factors of safety, so a body that tips and slides says which comes first, as on screen
   const solved = solveWithStability(parsed.sketch, requirementsOf(parsed.file));
-  for (const s of statusSentences(parsed.sketch, solved.result, "SI", undefined, solved.stability)) if (s.tone !== "holds") out.push(`As drawn: ${s.headline}`);
+  for (const s of statusSentences(parsed.sketch, solved.result, units, forceUnit, solved.stability, parsed.file)) if (s.tone !== "holds") out.push(`As drawn: ${s.headline}`);
   // with cases, the values on the drawing are a state of their own: its factors of safety too
   const asDrawn = hasCases ? asDrawnOfDocument(file) : null;
   if (asDrawn) out.push(...caseFindings(asDrawn, false).map((f) => `As drawn: ${f}`));

@@ -5,7 +5,7 @@
 import type { StudyResult } from "@/solver/cases";
 import type { SketchFile } from "@/solver/schema";
 import { errorInWords } from "@/components/results/errorPlace";
-import { type Cell, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, tiedNames, unsolvedWords, withRunName } from "@/solver/report";
+import { type Cell, type Scale, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, tiedNames, unsolvedWords, withRunName } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
@@ -32,11 +32,13 @@ export const asDrawnName = (name: string) => `${name}, as drawn`;
  * `sketch`: the sketch the study ran on, so a run that could not be solved names its errors'
  * places as the editor does.
  */
-export function CaseTables({ result, units, asDrawn, sketch = null }: { result: StudyResult; units: UnitSystem; asDrawn?: string | null; sketch?: SketchFile | null }) {
+/** `scale`: the unit family of the page the tables are on (a version's page: the calc sheet's,
+ *  `versionScale`); by default each table's own. */
+export function CaseTables({ result, units, asDrawn, sketch = null, scale }: { result: StudyResult; units: UnitSystem; asDrawn?: string | null; sketch?: SketchFile | null; scale?: Scale }) {
   const unsolved = unsolvedWords(result);
   const twin = asDrawn ? result.runs.find((r) => r.id === asDrawn) : undefined;
-  const stability = stabilityTable(twin ? withRunName(result, twin.id, asDrawnName(twin.name)) : result, units);
-  const reactions = withoutAbsentMoment(caseReactionTable(result, units), result);
+  const stability = stabilityTable(twin ? withRunName(result, twin.id, asDrawnName(twin.name)) : result, units, scale);
+  const reactions = withoutAbsentMoment(caseReactionTable(result, units, scale), result);
   const spare = slipsWithFrictionToSpare(result);
   const col = (key: string) => reactions.columns.findIndex((c) => c.key === key);
   const markSlip = (row: readonly Cell[], key: string) =>
@@ -80,10 +82,10 @@ export function CaseTables({ result, units, asDrawn, sketch = null }: { result: 
         <>
           <div className="mt-3">
             {/* cases that tie for a governing value are named in its row ("A and B (a tie)") and each marked in the table above */}
-            <ReportTable table={withoutAbsentMoment(envelopeTable(result, units), result)} fileName="envelope" testId="envelope" groupBy={["support"]} />
+            <ReportTable table={withoutAbsentMoment(envelopeTable(result, units, scale), result)} fileName="envelope" testId="envelope" groupBy={["support"]} />
           </div>
           <div className="mt-3">
-            <ReportTable table={withoutAbsentMoment(designLoadTable(result, units), result)} fileName="design-loads" testId="design-loads" />
+            <ReportTable table={withoutAbsentMoment(designLoadTable(result, units, scale), result)} fileName="design-loads" testId="design-loads" />
           </div>
         </>
       )}

@@ -37,12 +37,10 @@ import {
   caseFindings,
   designLoadTable,
   excludedWords,
-  largestScale,
-  resultScale,
   slipWords,
-  studyScale,
   unitFamily,
   unsolvedWords,
+  versionScale,
   withRunName,
   type Table,
 } from "@/solver/report";
@@ -131,7 +129,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // factors of safety; every case's reactions and factors of safety): N with N·m only when all of it
   // is below 1 kN (1 kN·m), else kN with kN·m; lbf with lbf·ft, or kip with kip·ft from 10 kip
   // (10 kip·ft). A sketch without cases reads on the sheet in the units of its screen
-  const sheetScale = largestScale(studyScale(study), studyScale(asDrawn), resultScale(result, stability));
+  // (`versionScale`, which the version's review page shares)
+  const sheetScale = versionScale(result, study, asDrawn, stability);
   const family = unitFamily(units, sheetScale);
 
   const doc = new PDFDocument({ size: "A4", margins: { top: 44, bottom: 54, left: 44, right: 44 }, bufferPages: true, info: { Title: `${input.sketchTitle} v${input.version}`, Author: "Counterpoise", Subject: "Calculation sheet" } });

@@ -2,13 +2,8 @@
 // after Fit, and with the labels placed as the canvas places them (inside its drawing area, see
 // `canvas/konva/labelLayout.ts`), no word is cut at the left or the right edge.
 import { describe, expect, it } from "vitest";
-import { drawingFrame, fitScene, LEGEND_ROOM } from "@/canvas/geometry/fit";
-import { placeElementLabels, shiftTexts } from "@/canvas/render/labels";
-import { textExtent } from "@/canvas/render/prims";
-import { drawingFamily, supportStates } from "@/canvas/render/results";
-import { elementGroups, resultLayer } from "@/canvas/render/scenePrims";
-import { buildScene, fieldValuesById } from "@/canvas/scene";
-import { parseSketch, solve } from "@/solver/index";
+import { fitScene, LEGEND_ROOM } from "@/canvas/geometry/fit";
+import { placedWords, solvedScene } from "../support/canvas-words";
 
 /** A fan 1.2 m × 0.8 m on a fixed frame, air in at the left edge and out at the right, both ports named with `left` and `right`. */
 function fan(left: string, right: string) {
@@ -27,23 +22,9 @@ function fan(left: string, right: string) {
 
 /** Every word the canvas draws after Fit, in screen px, placed as the canvas places it. */
 function wordsAfterFit(file: unknown, width: number, height: number) {
-  const parsed = parseSketch(file);
-  if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
-  const scene = buildScene(parsed.file, fieldValuesById(parsed.file, parsed.fields, []));
-  const result = solve(parsed.sketch);
-  const view = fitScene(scene, width, height, { result });
-  const frame = drawingFrame(view, { width, height });
-  const states = supportStates(result, scene.items);
-  const family = drawingFamily(result, "SI", scene.items);
-  const groups = elementGroups(scene, view.scale, "SI", states, family);
-  const results = resultLayer(groups, scene, view.scale, "SI", result, states, false, frame, family);
-  const shifts = placeElementLabels(groups, results, undefined, frame);
-  const prims = [...groups.flatMap((g) => (shifts.has(g.id) ? shiftTexts(g.prims, shifts.get(g.id)) : g.prims)), ...results];
-  return prims.flatMap((p) => {
-    if (p.t !== "text") return [];
-    const b = textExtent(p);
-    return [{ text: p.text, x0: view.x + b.x0, x1: view.x + b.x1, y0: view.y + b.y0, y1: view.y + b.y1 }];
-  });
+  const solved = solvedScene(file);
+  const view = fitScene(solved.scene, width, height, { result: solved.result });
+  return placedWords(solved, view, width, height).words;
 }
 
 describe("Fit on a 390 px canvas with wide labels at the left and the right edge", () => {

@@ -21,7 +21,8 @@ import { announceSaved, watchSaved, type SavedElsewhere } from "./savedElsewhere
 import { sameDocument, type SaveFlow } from "./savedPersistence";
 import { NarrowLabel } from "@/components/editor/NarrowLabel";
 
-const CHIP = "h-7 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
+// on a touch screen 40 px tall, a finger's tap target (as the toolbar's own controls: components/editor/ui.ts)
+const CHIP = "h-7 pointer-coarse:h-10 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
 const CARD = "rounded-lg border p-3 text-[13px] text-ink shadow-[0_6px_24px_rgb(var(--shade)/0.14)]";
 
 function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; latest: number; workspaceId: string; onDiscard: () => void }) {
@@ -285,8 +286,10 @@ function Bar({ flow }: { flow: SaveFlow }) {
   };
 
   return (
-    <div className="ml-3 flex items-center gap-2" data-testid="version-bar">
-      <span className="num whitespace-nowrap text-[12px] text-ink-faint" data-testid="version-label">
+    // on a phone its items flow in the toolbar's rows (the bar is no block of its own that cannot
+    // wrap), so a submitted version's toolbar packs into fewer rows
+    <div className="ml-3 flex items-center gap-2 max-sm:contents" data-testid="version-bar">
+      <span className="num whitespace-nowrap text-[12px] text-ink-faint max-sm:ml-2 max-sm:mr-1" data-testid="version-label">
         {restored ? `kept changes on v${base}` : `v${base}${base < info.latest ? ` of ${info.latest}` : ""}`}
         {review && review !== "draft" && !restored ? (
           <span title={STATE_WORDS[review].sentence} data-testid="version-review-state" data-review-state={review}>

@@ -187,7 +187,7 @@ function ScratchSaveButton({ onSaved }: { onSaved?: () => void }) {
   const [open, setOpen] = useState(params.get("save") === "1");
   return (
     <div className="ml-3">
-      <button type="button" onClick={() => setOpen(true)} className="h-7 whitespace-nowrap rounded bg-ink px-2.5 text-[12.5px] font-medium text-paper hover:bg-ink-soft" data-testid="save-to-workspace" aria-label="Save to a workspace">
+      <button type="button" onClick={() => setOpen(true)} className="h-7 whitespace-nowrap rounded bg-ink px-2.5 text-[12.5px] font-medium text-paper hover:bg-ink-soft pointer-coarse:h-10" data-testid="save-to-workspace" aria-label="Save to a workspace">
         <NarrowLabel full="Save to a workspace" short="Save…" />
       </button>
       {open ? <SaveToWorkspace onClose={() => setOpen(false)} onSaved={onSaved} /> : null}

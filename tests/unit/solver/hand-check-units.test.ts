@@ -6,7 +6,7 @@ import { EXAMPLES, exampleById } from "@/canvas/examples";
 import { buildScene, fieldValuesById } from "@/canvas/scene";
 import { drawingFamily } from "@/canvas/render/results";
 import { parseSketch, solve } from "@/solver";
-import { handCheckScale, handCheckTable, handCheckUnitScale, unitFamily } from "@/solver/report";
+import { handCheckScale, handCheckTable, resultScale, unitFamily } from "@/solver/report";
 import type { Vec2 } from "@/solver/types";
 
 function example(id: string) {
@@ -26,7 +26,7 @@ describe("the hand check's units", () => {
     expect(unitFamily("US", handCheckScale(eq, far)).force).toBe("kip");
     // ... but the forces choose: the drawing's lbf, in the table's headings too
     expect(drawingFamily(result, "US", scene.items).force).toBe("lbf");
-    expect(unitFamily("US", handCheckUnitScale(eq)).force).toBe("lbf");
+    expect(unitFamily("US", resultScale(result)).force).toBe("lbf");
     const t = handCheckTable(result, body, far, "US");
     const units = t.columns.map((c) => c.unit).filter(Boolean);
     expect(units).toContain("lbf");
