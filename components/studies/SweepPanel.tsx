@@ -22,7 +22,7 @@ import { errorInWords } from "@/components/results/errorPlace";
 import { runErrorWords, studyErrorWords } from "./studyError";
 import { defaultLimitQuantity, SweepChart } from "./SweepChart";
 import { invalidStretches } from "./sweepErrors";
-import { defaultSweepParameter, defaultSweepRange, parseRangeValue, type ParameterValue } from "./sweepRange";
+import { defaultSweepParameter, defaultSweepRange, parseRangeValue, solvesAtIn, type ParameterValue } from "./sweepRange";
 
 const NO_VALUES: Record<string, ParameterValue> = {};
 
@@ -217,11 +217,13 @@ export function SweepPanel() {
     return kind === "ratio" ? undefined : scale?.[kind];
   };
   const [parameter, setParameter] = useState(() => saved?.parameter ?? defaultSweepParameter(parameters, values));
-  const [from, setFrom] = useState(() => String(saved?.from ?? defaultSweepRange(parameter, values[parameter]).from));
-  const [to, setTo] = useState(() => String(saved?.to ?? defaultSweepRange(parameter, values[parameter]).to));
+  // a new sweep's range starts where the sketch solves (a density is not swept from 0): one or two solves
+  const [firstRange] = useState(() => saved ?? defaultSweepRange(parameter, values[parameter], solvesAtIn(sketch, parameter)));
+  const [from, setFrom] = useState(() => String(firstRange.from));
+  const [to, setTo] = useState(() => String(firstRange.to));
   const pickParameter = (name: string) => {
     setParameter(name);
-    const range = saved?.parameter === name ? saved : defaultSweepRange(name, values[name]);
+    const range = saved?.parameter === name ? saved : defaultSweepRange(name, values[name], solvesAtIn(sketch, name));
     setFrom(String(range.from));
     setTo(String(range.to));
   };
