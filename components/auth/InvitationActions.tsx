@@ -80,19 +80,36 @@ export function InvitationSignUpForm({ token, email }: { token: string; email: s
   );
 }
 
-/** Signed in as someone else: sign out, then sign in with the invited address. */
-export function SwitchAccountButton({ next, email }: { next: string; email: string }) {
+/**
+ * Signed in as someone else: sign out, then sign in with the invited address (`next`: the invitation,
+ * to come back to) — or, when that address has no account yet, back to the invitation page, which
+ * then offers the form that creates it and joins.
+ */
+export function SwitchAccountButton({ next, email, hasAccount }: { next: string; email: string; hasAccount: boolean }) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
   async function switchAccount() {
     setBusy(true);
-    await authClient.signOut();
-    router.push(`/sign-in?next=${encodeURIComponent(next)}&email=${encodeURIComponent(email)}`);
+    setError(null);
+    const out = await authClient.signOut().catch(() => ({ error: true }));
+    if (out?.error) {
+      setBusy(false);
+      setError("Signing out did not work. Try again.");
+      return;
+    }
+    router.push(hasAccount ? `/sign-in?next=${encodeURIComponent(next)}&email=${encodeURIComponent(email)}` : next);
     router.refresh();
   }
   return (
-    <Button tone="secondary" onClick={switchAccount} busy={busy} className="w-full">
-      Sign out and sign in as {email}
-    </Button>
+    <div className="space-y-3">
+      {error ? <Notice tone="error">{error}</Notice> : null}
+      <Button tone="secondary" onClick={switchAccount} busy={busy} className="w-full">
+        {/* a long address wraps inside the button rather than running out of it */}
+        <span className="min-w-0 whitespace-normal text-center [overflow-wrap:anywhere]">
+          {hasAccount ? `Sign out and sign in as ${email}` : `Sign out and create the account for ${email}`}
+        </span>
+      </Button>
+    </div>
   );
 }

@@ -2,14 +2,15 @@
 // and a withdrawn link each get a page that says which and what to do, never the sign-up form.
 import { eq } from "drizzle-orm";
 import { renderToStaticMarkup } from "react-dom/server";
-import { beforeAll, describe, expect, it, vi } from "vitest";
+import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { db } from "@/db";
 import { invitation } from "@/db/schema";
 import { hashInvitationToken, newInvitationToken } from "@/lib/invitations";
-import { makeAccount, makeWorkspace, uniqueEmail, type Person } from "./helpers";
+import { makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 
-// rendered outside a request: nobody is signed in
-vi.mock("@/lib/session", () => ({ currentSession: async () => null }));
+// rendered outside a request: nobody is signed in, unless a test sets who is
+const signedIn = vi.hoisted(() => ({ as: null as null | { user: { id: string; email: string; name: string } } }));
+vi.mock("@/lib/session", () => ({ currentSession: async () => signedIn.as }));
 // the open link's form is a client component that asks for the router
 vi.mock("next/navigation", () => ({
   useRouter: () => ({ push: () => undefined, refresh: () => undefined, replace: () => undefined }),
@@ -27,11 +28,11 @@ beforeAll(async () => {
   ws = await makeWorkspace("Invitation page bay", [[owner, "owner"]]);
 });
 
-async function link(state: "pending" | "expired" | "used" | "withdrawn"): Promise<string> {
+async function link(state: "pending" | "expired" | "used" | "withdrawn", email = uniqueEmail("invitee")): Promise<string> {
   const token = newInvitationToken();
   const [row] = await db
     .insert(invitation)
-    .values({ workspaceId: ws, email: uniqueEmail("invitee"), role: "checker", tokenHash: hashInvitationToken(token), invitedBy: owner.id, expiresAt: new Date(Date.now() + 3600_000) })
+    .values({ workspaceId: ws, email, role: "checker", tokenHash: hashInvitationToken(token), invitedBy: owner.id, expiresAt: new Date(Date.now() + 3600_000) })
     .returning({ id: invitation.id });
   if (state === "expired") await db.update(invitation).set({ expiresAt: new Date(Date.now() - 60_000) }).where(eq(invitation.id, row.id));
   if (state === "used") await db.update(invitation).set({ acceptedAt: new Date() }).where(eq(invitation.id, row.id));
@@ -82,5 +83,70 @@ describe("the invitation page", () => {
     expect(out).toContain("This invitation link is not valid");
     expect(out).toContain("Check that the whole address from the mail was copied");
     expect(out).toContain("Sign in");
+  });
+});
+
+describe("the invitation page's next step on an open link", () => {
+  const as = (u: { id: string; email: string; name: string } | null) => (signedIn.as = u ? { user: u } : null);
+  afterEach(() => as(null));
+
+  it("signed out, to an address with no account: the form that creates it with the invited address filled in, then joins", async () => {
+    const email = uniqueEmail("newcomer");
+    const html = await page(await link("pending", email));
+    const out = text(html);
+    expect(out).toContain("Create your account to join");
+    expect(out).toContain(`Page Owner invited ${email} to the workspace Invitation page bay`);
+    // the invited address, filled in and not to be changed: the link vouches for it
+    const input = html.match(/<input id="invite-email"[^>]*>/)?.[0] ?? "";
+    expect(input).toContain(`value="${email}"`);
+    expect(input).toContain('readOnly=""');
+    expect(out).toContain("Create account and join");
+    expect(out).toMatch(/Expires \w{3}, \d\d \w{3} \d{4} \d\d:\d\d UTC/);
+    expect(out).not.toContain("Sign in");
+  });
+
+  it("signed out, to an address that has an account (in any case of letters): sign in with the address filled in, back to the invitation", async () => {
+    const person = await makeBareUser("member-to-be");
+    const token = await link("pending", person.email);
+    // the account was made as "Member-To-Be…": the invitation's address is stored lower-case
+    const { user } = await import("@/db/schema");
+    const { eq } = await import("drizzle-orm");
+    await db.update(user).set({ email: person.email.toUpperCase() }).where(eq(user.id, person.id));
+    const html = await page(token);
+    const out = text(html);
+    expect(out).toContain("Join the workspace");
+    expect(out).toContain(`Sign in as ${person.email} to join`);
+    expect(html).toContain(`href="/sign-in?next=${encodeURIComponent(`/invite/${token}`)}&amp;email=${encodeURIComponent(person.email)}"`);
+    expect(out).toMatch(/Expires .* UTC/);
+    expect(out).not.toMatch(/password/i);
+  });
+
+  it("signed in as the invited address: one button to join, nothing to sign in to", async () => {
+    const person = await makeBareUser("joiner");
+    const token = await link("pending", person.email);
+    as(person);
+    const out = text(await page(token));
+    expect(out).toContain("Join the workspace");
+    expect(out).toContain("Join Invitation page bay");
+    expect(out).not.toMatch(/Sign in|Sign out|password/i);
+  });
+
+  it("signed in as someone else: says so plainly, and the invited address's own next step (create its account, or sign in)", async () => {
+    const other = await makeBareUser("someone-else");
+    as(other);
+    const fresh = uniqueEmail("no-account-yet");
+    // (the markup's tags leave a space before a full stop)
+    const out = text(await page(await link("pending", fresh))).replace(/ \./g, ".");
+    expect(out).toContain("This invitation is for another address");
+    expect(out).toContain(`You are signed in as ${other.email}. Only ${fresh} can accept this invitation, and it has no account yet: sign out, then create one.`);
+    expect(out).toContain(`To join as ${other.email} instead, ask Page Owner to invite that address.`);
+    expect(out).toContain(`Sign out and create the account for ${fresh}`);
+    expect(out).not.toMatch(/sign in/i);
+
+    const member = await makeBareUser("has-account");
+    const again = text(await page(await link("pending", member.email))).replace(/ \./g, ".");
+    expect(again).toContain(`Only ${member.email} can accept this invitation: sign out, then sign in with that address.`);
+    expect(again).toContain(`Sign out and sign in as ${member.email}`);
+    expect(again).not.toMatch(/no account|create/);
   });
 });

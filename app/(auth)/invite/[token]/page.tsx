@@ -52,9 +52,10 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     );
   }
 
+  // a long address wraps anywhere rather than running out of the card
   const lead = (
     <div className="space-y-3">
-      <p>
+      <p className="[overflow-wrap:anywhere]">
         {view.inviterName ?? "An owner"} invited <strong className="text-ink">{view.email}</strong> to the workspace{" "}
         <strong className="text-ink">{view.workspaceName}</strong>.
       </p>
@@ -65,30 +66,42 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     </div>
   );
 
-  if (session) {
-    if (session.user.email.toLowerCase() === view.email) {
-      return (
-        <AuthCard title="Join the workspace" lead={lead}>
-          <AcceptInvitationButton token={token} workspaceName={view.workspaceName} />
-        </AuthCard>
-      );
-    }
+  const expires = <>Expires {view.expiresAt.toUTCString().replace(/:\d\d GMT$/, " UTC")}</>;
+
+  if (session && session.user.email.toLowerCase() === view.email) {
     return (
-      <AuthCard title="This invitation is for another address" lead={lead}>
+      <AuthCard title="Join the workspace" lead={lead} foot={expires}>
+        <AcceptInvitationButton token={token} workspaceName={view.workspaceName} />
+      </AuthCard>
+    );
+  }
+
+  // whoever holds the link is the invitee: telling them whether their address has an account yet is
+  // the next step they need, not something a stranger learns (the link is a secret sent to them)
+  const hasAccount = await orBusy(accountExists(view.email));
+
+  if (session) {
+    // signed in as someone else: say so plainly, and offer the invited address's own next step
+    return (
+      <AuthCard title="This invitation is for another address" lead={lead} foot={expires}>
         <div className="space-y-4">
           <Notice tone="info">
-            You are signed in as <strong>{session.user.email}</strong>. Only {view.email} can accept this invitation.
+            <span className="[overflow-wrap:anywhere]">
+              You are signed in as <strong>{session.user.email}</strong>. Only {view.email} can accept this invitation
+              {hasAccount ? ": sign out, then sign in with that address." : ", and it has no account yet: sign out, then create one."} To join as{" "}
+              {session.user.email} instead, ask {view.inviterName ?? "an owner of the workspace"} to invite that address.
+            </span>
           </Notice>
-          <SwitchAccountButton next={here} email={view.email} />
+          <SwitchAccountButton next={here} email={view.email} hasAccount={hasAccount} />
         </div>
       </AuthCard>
     );
   }
 
-  if (await orBusy(accountExists(view.email))) {
+  if (hasAccount) {
     return (
-      <AuthCard title="Join the workspace" lead={lead}>
-        <Link href={`/sign-in?next=${encodeURIComponent(here)}&email=${encodeURIComponent(view.email)}`} className={primary}>
+      <AuthCard title="Join the workspace" lead={lead} foot={expires}>
+        <Link href={`/sign-in?next=${encodeURIComponent(here)}&email=${encodeURIComponent(view.email)}`} className={`${primary} text-center [overflow-wrap:anywhere]`}>
           Sign in as {view.email} to join
         </Link>
       </AuthCard>
@@ -96,7 +109,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
   }
 
   return (
-    <AuthCard title="Create your account to join" lead={lead} foot={<>Expires {view.expiresAt.toUTCString().replace(/:\d\d GMT$/, " UTC")}</>}>
+    <AuthCard title="Create your account to join" lead={lead} foot={expires}>
       <InvitationSignUpForm token={token} email={view.email} />
     </AuthCard>
   );
