@@ -218,6 +218,12 @@ export function sweepStateLines(data: SweepStates, names: Readonly<Record<string
     lines.push({ kind: "slips", words: `${names[o.support] ?? o.support} slips ${where(o)}: it needs more friction than μ·n gives there (its friction margin is below zero).${slipBodyWords(o, data, names)}` });
   // the bodies' own stretches: where one slides as a whole, tips or is unrestrained
   const own = data.bodies?.stretches ?? [];
+  // the solve checks friction but does not enforce it: a body that tips after it already slides as
+  // a whole tips there only if it is kept from sliding, as the limit finder's answers say
+  const slidBefore = (o: BodyStretch) => {
+    const first = own.find((b) => b.body === o.body && b.state === "slides" && own.indexOf(b) < own.indexOf(o));
+    return first ? ` (while it is held against sliding: it already slides as a whole ${where(first)})` : "";
+  };
   for (const o of own.slice(0, max))
     lines.push({
       kind: "body",
@@ -225,7 +231,7 @@ export function sweepStateLines(data: SweepStates, names: Readonly<Record<string
         o.state === "slides"
           ? "its friction contacts together cannot give the friction it needs (Σμ·n − |Σt| below zero), so the body itself moves along its base"
           : o.state === "tips"
-            ? "no set of its contacts and ties holds it"
+            ? `no set of its contacts and ties holds it${slidBefore(o)}`
             : "its supports leave it free to move"
       }.`,
     });
