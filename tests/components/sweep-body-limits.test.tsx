@@ -27,13 +27,19 @@ const tipsAt = Math.sqrt(W / 500);
 const slidesAt = (mu: number) => Math.sqrt((mu * W) / 500);
 const quantity = () => screen.getByRole("combobox", { name: "Quantity for the limit" }) as HTMLSelectElement;
 
+/** The block with friction `mu` mounted, its flow factor swept over `range` (From, To, Points) and run. */
+async function sweptBlock(mu: number, range: [string, string, string]) {
+  const user = userEvent.setup();
+  mountResultsDock(block(mu));
+  await setUpSweep(user, FLOW_FACTOR, range);
+  await user.click(screen.getByRole("button", { name: "Run the sweep" }));
+  await screen.findByTestId("crossings");
+  return user;
+}
+
 describe("the limit finder on a body's own limits", () => {
   it("offers the block's tipping and sliding, with no target, and answers with the value in words", async () => {
-    const user = userEvent.setup();
-    mountResultsDock(block(1.2));
-    await setUpSweep(user, FLOW_FACTOR, ["0", "4", "41"]);
-    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
-    await screen.findByTestId("crossings");
+    const user = await sweptBlock(1.2, ["0", "4", "41"]);
     expect([...quantity().querySelectorAll("optgroup")].map((g) => [g.label, [...g.querySelectorAll("option")].map((o) => o.textContent)])).toEqual([
       ["Plotted (reaches a target)", ["margin at rear pad", "friction margin (μ·n − |t|) at rear pad", "margin at front pad", "friction margin (μ·n − |t|) at front pad"]],
       ["The body itself (its own limit)", ["Block tips", "Block slides as a whole"]],
@@ -60,11 +66,7 @@ describe("the limit finder on a body's own limits", () => {
   });
 
   it("finds where the block slides as a whole: f²·ṁ0·V0 = μ·W", async () => {
-    const user = userEvent.setup();
-    mountResultsDock(block(0.3));
-    await setUpSweep(user, FLOW_FACTOR, ["0", "3", "31"]);
-    await user.click(screen.getByRole("button", { name: "Run the sweep" }));
-    await screen.findByTestId("crossings");
+    const user = await sweptBlock(0.3, ["0", "3", "31"]);
     await user.selectOptions(quantity(), "Block slides as a whole");
     await user.click(screen.getByRole("button", { name: "Find" }));
     expect(formatLimit(slidesAt(0.3))).toBe("1.715"); // hand calculation above
