@@ -21,9 +21,23 @@ export function s3ClientConfig(st: StorageSettings): S3ClientConfig {
   };
 }
 
+/**
+ * How long one call to the store may take. The SDK's own default is no limit at all: a store that
+ * takes the connection and never answers (a hung fake, a proxy in front of a bucket) would hold an
+ * upload, a drawing's image and the sweep forever. A call over its time fails (and the SDK tries
+ * it again, three attempts in all), so the caller gets the store's 503 within about a minute.
+ * The request time covers sending the body: 20 s passes a 10 MB file at 0.5 MB/s.
+ */
+export const STORAGE_TIMEOUTS = { connectMs: 3000, requestMs: 20000 };
+
+/** The SDK's HTTP handler settings: `throwOnRequestTimeout`, or the request time only logs a warning. */
+export function s3RequestHandler(t: { connectMs: number; requestMs: number } = STORAGE_TIMEOUTS) {
+  return { connectionTimeout: t.connectMs, requestTimeout: t.requestMs, throwOnRequestTimeout: true };
+}
+
 export function s3(): S3Client {
   if (globalForS3.counterpoiseS3) return globalForS3.counterpoiseS3;
-  const client = new S3Client(s3ClientConfig(storageSettings()));
+  const client = new S3Client({ ...s3ClientConfig(storageSettings()), requestHandler: s3RequestHandler() });
   globalForS3.counterpoiseS3 = client;
   return client;
 }

@@ -14,26 +14,51 @@ import { underlayOnScreen } from "../geometry/underlay";
 import { ACCENT, INK_FAINT, PAPER_CARD } from "../render/palette";
 import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
-import { underlayFrameNote } from "./underlayStatus";
+import { fetchUnderlayFile, underlayFrameNote, underlayRetryMs, type UnderlayFailure } from "./underlayStatus";
 
 /** Where an underlay's file is fetched from (the route checks the reader's role). */
 export const underlayUrl = (uploadId: string) => `/api/uploads/${encodeURIComponent(uploadId)}`;
 
-type Loaded = { src: string; img: HTMLImageElement | null; failed: boolean };
+type Loaded = { src: string; img: HTMLImageElement | null; failed: boolean; reason?: UnderlayFailure };
 
+/**
+ * The drawing's image: fetched (so a failure has its status and the server's words), drawn from
+ * the bytes, and fetched again after a failure that may pass (the file store down, the app out of
+ * reach), so the drawing comes back on its own once it can.
+ */
 function useImage(src: string | null): Loaded | null {
   const [state, setState] = useState<Loaded | null>(null);
+  const [attempt, setAttempt] = useState(0);
   useEffect(() => {
     if (!src) return;
     let live = true;
-    const img = new window.Image();
-    img.onload = () => live && setState({ src, img, failed: false });
-    img.onerror = () => live && setState({ src, img: null, failed: true });
-    img.src = src;
+    let url: string | null = null;
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const fail = (reason: UnderlayFailure) => {
+      if (!live) return;
+      setState({ src, img: null, failed: true, reason });
+      const wait = underlayRetryMs(reason);
+      if (wait) timer = setTimeout(() => live && setAttempt((n) => n + 1), wait);
+    };
+    void fetchUnderlayFile(src).then((got) => {
+      if (!live) return;
+      if (!got.ok) return fail(got.failure);
+      url = URL.createObjectURL(got.blob);
+      const img = new window.Image();
+      img.onload = () => live && setState({ src, img, failed: false });
+      img.onerror = () => fail({ status: 200 });
+      img.src = url;
+    });
     return () => {
       live = false;
+      clearTimeout(timer);
+      // the image keeps its decoded pixels; the bytes' address is no longer needed once it is replaced
+      if (url) {
+        const gone = url;
+        setTimeout(() => URL.revokeObjectURL(gone), 0);
+      }
     };
-  }, [src]);
+  }, [src, attempt]);
   return state && state.src === src ? state : null;
 }
 

@@ -20,6 +20,17 @@ export type UploadAnswer = {
   thumbnailUrl: string;
 };
 
+/**
+ * Words for a refusal that did not come from the app (no JSON error): a proxy or load balancer in
+ * front of it refusing the size, or not reaching it. Nothing was kept in either case.
+ */
+export function withoutOurAnswer(status: number): string {
+  if (status === 413)
+    return `The server in front of the app refused the file as too large (HTTP 413) before the app saw it, though uploads up to ${MAX_UPLOAD_BYTES / 1048576} MB are allowed: ask whoever runs the server to let ${MAX_UPLOAD_BYTES / 1048576} MB through. Nothing was kept.`;
+  if (status === 502 || status === 503 || status === 504) return `The app did not answer in time (HTTP ${status}). Nothing was kept; try again shortly.`;
+  return `The server answered HTTP ${status} without saying why. Nothing was kept; try again, and if it persists tell whoever runs the server.`;
+}
+
 export async function uploadFile(path: string, file: File): Promise<UploadAnswer> {
   if (file.size > MAX_UPLOAD_BYTES) {
     throw new ApiError(413, "payload_too_large", `“${file.name}” is ${(file.size / 1048576).toFixed(1)} MB; uploads are limited to ${MAX_UPLOAD_BYTES / 1048576} MB.`);
@@ -30,11 +41,11 @@ export async function uploadFile(path: string, file: File): Promise<UploadAnswer
   try {
     res = await fetch(path, { method: "POST", body: form, credentials: "same-origin", cache: "no-store" });
   } catch {
-    throw new ApiError(0, "network", "The app could not be reached. Check the connection and try again.");
+    throw new ApiError(0, "network", `“${file.name}” was not sent: the app could not be reached. Check the connection and try again.`);
   }
   const data = (await res.json().catch(() => null)) as { upload?: UploadAnswer; error?: { code?: ErrorCode; message?: string; fields?: FieldError[] } } | null;
   if (!res.ok || !data?.upload) {
-    const message = data?.error?.message ?? `The server answered ${res.status}.`;
+    const message = data?.error?.message ?? withoutOurAnswer(res.status);
     // the refusal names the file, as the size check above does (several may be sent at once)
     const named = message.includes(file.name) ? message : `“${file.name}”: ${message}`;
     throw new ApiError(res.status, data?.error?.code ?? "internal", named, data?.error?.fields ?? []);

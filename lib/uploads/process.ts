@@ -56,7 +56,36 @@ export interface ProcessedUpload {
   thumbnail: Buffer;
 }
 
+/**
+ * What to do with a file of a kind people often have at hand but that is not taken: a phone's HEIC
+ * photo, a scanner's TIFF, an office document. Null for the rest (the general words do).
+ */
+export function whatToDoWith(mime: string): string | null {
+  if (/^image\/hei[cf]/.test(mime)) return "a photo in the HEIC format phones save by default. Export or share it as JPEG (or set the camera to save JPEG), then upload that.";
+  if (mime === "image/tiff") return "a TIFF image, as scanners save. Save it as PNG (a drawing) or JPEG (a photo), then upload that.";
+  if (/^image\/(gif|bmp|avif|jxl)$/.test(mime)) return `a ${mime.slice(6).toUpperCase()} image. Save it as PNG, then upload that.`;
+  if (/officedocument|msword|ms-excel|ms-powerpoint|opendocument/.test(mime)) return "an office document. Print or export it to PDF, then upload the PDF.";
+  return null;
+}
+
+/**
+ * A refusal of the uploaded file names its field, `file` (the form field it is sent in), as every
+ * other refusal of the API names the field it is about; the message stays the same.
+ */
+export function onTheFile(err: unknown): unknown {
+  if (!(err instanceof AppError) || err.fields?.length || err.status >= 500) return err;
+  return new AppError(err.code, err.message, { fields: [{ path: "file", message: err.message }], headers: err.headers, extra: err.extra });
+}
+
 export async function processUpload(input: Buffer): Promise<ProcessedUpload> {
+  try {
+    return await checkAndClean(input);
+  } catch (err) {
+    throw onTheFile(err);
+  }
+}
+
+async function checkAndClean(input: Buffer): Promise<ProcessedUpload> {
   if (input.length === 0) throw new AppError("validation_failed", "The file is empty.");
   if (input.length > UPLOAD_LIMITS.maxBytes)
     throw new AppError("payload_too_large", `The file is ${(input.length / 1048576).toFixed(1)} MB; uploads are limited to ${UPLOAD_LIMITS.maxBytes / 1048576} MB.`);
@@ -65,7 +94,9 @@ export async function processUpload(input: Buffer): Promise<ProcessedUpload> {
   if (!mime || !(mime in ACCEPTED)) {
     throw new AppError(
       "unsupported_media_type",
-      sniffed ? `This file is ${sniffed.mime}, whatever its name says; upload a PNG, JPEG or WebP image, or a PDF.` : "This file is not a PNG, JPEG or WebP image or a PDF (whatever its name says).",
+      sniffed
+        ? `This file is ${sniffed.mime}, whatever its name says${whatToDoWith(sniffed.mime) ? `: ${whatToDoWith(sniffed.mime)}` : "; upload a PNG, JPEG or WebP image, or a PDF."}`
+        : "This file is not a PNG, JPEG or WebP image or a PDF (whatever its name says).",
     );
   }
   const image = mime === "application/pdf" ? await firstPageOfPdf(input, UPLOAD_LIMITS) : input;

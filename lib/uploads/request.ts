@@ -17,7 +17,8 @@ export const uploadQuery = z.object({ name: z.string().optional() });
 export type UploadBody = { bytes: Buffer; name: string };
 
 function tooLarge(): AppError {
-  return new AppError("payload_too_large", `The file is larger than the ${UPLOAD_LIMITS.maxBytes / 1048576} MB an upload may be.`);
+  const message = `The file is larger than the ${UPLOAD_LIMITS.maxBytes / 1048576} MB an upload may be.`;
+  return new AppError("payload_too_large", message, { fields: [{ path: "file", message }] });
 }
 
 const readCapped = (req: Request, max: number) => readBytesCapped(req, max, tooLarge);

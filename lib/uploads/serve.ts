@@ -8,12 +8,12 @@ import { getUploadForReader } from "@/db/queries/uploads";
 import { storageSettings } from "../env";
 import { AppError } from "../errors";
 import { s3 } from "../storage";
+import { downloadName } from "./names";
 
 const NOT_FOUND = "No such file, or you are not a member of its workspace.";
 
 /** `Content-Disposition` with the display name (ASCII fallback and the UTF-8 form). */
 function disposition(kind: "inline" | "attachment", name: string): string {
-  if (!name) return kind;
   const ascii = name.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
   return `${kind}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`;
 }
@@ -50,8 +50,7 @@ export async function serveUpload(req: Request, uploadId: string, userId: string
     console.error("[uploads] storage did not answer", err);
     throw new AppError("unavailable", "The file store is not answering. Try again shortly.");
   }
-  const base = u.originalName.replace(/\.[a-z0-9]{1,5}$/i, "");
-  const name = which === "thumbnail" ? `${base || "file"}-thumbnail.png` : u.storedType === u.sourceType ? u.originalName : `${base || "file"}.${u.storedType.split("/")[1].replace("jpeg", "jpg")}`;
+  const name = downloadName(u.originalName, u.storedType, which);
   return new Response(body, {
     status: 200,
     headers: {
