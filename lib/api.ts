@@ -119,7 +119,7 @@ export async function parseJsonBody<T extends z.ZodType>(req: Request, schema: T
 
 /**
  * Parse the query against a schema: 400 with `query.<name>` paths for a bad value, a missing one,
- * or a name the endpoint does not read (a mistyped `limit` for `pageSize` would otherwise be
+ * one given more than once, or a name the endpoint does not read (a mistyped `limit` for `pageSize` would otherwise be
  * ignored without a word, and the answer look like the default).
  */
 export function parseQuery<T extends z.ZodType>(req: Request, schema: T): z.output<T> {
@@ -127,9 +127,12 @@ export function parseQuery<T extends z.ZodType>(req: Request, schema: T): z.outp
   const given = Object.fromEntries(url.searchParams);
   const known = schema instanceof ZodObject ? Object.keys(schema.shape) : null;
   const unknown = known ? Object.keys(given).filter((key) => !known.includes(key)) : [];
+  // each parameter is read once: the last of several would otherwise win without a word
+  const repeated = [...new Set(url.searchParams.keys())].filter((key) => url.searchParams.getAll(key).length > 1 && (!known || known.includes(key)));
   const parsed = schema.safeParse(given);
   const fields = [
     ...unknown.map((key) => ({ path: `query.${key}`, message: `Is not a query parameter here (check the spelling): this address reads ${known!.join(", ")}.` })),
+    ...repeated.map((key) => ({ path: `query.${key}`, message: `Is given ${url.searchParams.getAll(key).length} times: send it once.` })),
     ...(parsed.success ? [] : fieldErrors(parsed.error, ["query"], given)),
   ];
   if (fields.length || !parsed.success) throw new AppError("validation_failed", "Some query parameters are not valid.", { fields });

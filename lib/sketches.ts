@@ -1,6 +1,8 @@
 import "server-only";
 import { db } from "@/db";
-import { deleteSketch, getSketchAccess, getSketchForMember, lockRole, updateSketch } from "@/db/queries/sketches";
+import { forkTitle } from "@/components/sketches/format";
+import { formatDateTime } from "@/components/workspaces/format";
+import { deleteSketch, getSketchAccess, getSketchDeletion, getSketchForMember, lockRole, updateSketch } from "@/db/queries/sketches";
 import type { DbOrTx } from "@/db/queries/tx";
 import { getRole } from "@/db/queries/workspaces";
 import { getVersion, insertSketchWithFirstVersion, saveNextVersion, type NewVersion, type VersionListItem } from "@/db/queries/versions";
@@ -23,9 +25,23 @@ const NO_SKETCH = "No such sketch, or you are not a member of its workspace.";
  */
 export async function requireSketchRole(sketchId: string, userId: string, permission: Permission) {
   const access = await getSketchAccess(sketchId, userId);
-  if (!access || !access.role) throw new AppError("not_found", NO_SKETCH);
+  if (!access) throw await noSketchError(sketchId, userId);
+  if (!access.role) throw new AppError("not_found", NO_SKETCH);
   if (!can(access.role, permission)) throw new AppError("forbidden", refusedWords(access.role, permission));
   return access as typeof access & { role: Role };
+}
+
+/**
+ * The 404 for a sketch that is not there: to a member of the workspace it was deleted from, who
+ * deleted it and when (`error.deleted`); to anyone else, the words of a sketch that never was.
+ */
+async function noSketchError(sketchId: string, userId: string): Promise<AppError> {
+  const gone = await getSketchDeletion(sketchId, userId);
+  if (!gone) return new AppError("not_found", NO_SKETCH);
+  const by = gone.deletedBy ? ` by ${gone.deletedBy}` : "";
+  return new AppError("not_found", `“${gone.title}” was deleted${by} on ${formatDateTime(gone.deletedAt)}, with all its versions. Forks of it keep their own copies.`, {
+    extra: { deleted: { title: gone.title, deletedBy: gone.deletedBy, deletedAt: gone.deletedAt, workspaceId: gone.workspaceId } },
+  });
 }
 
 /**
@@ -92,28 +108,23 @@ export async function createSketch(
 }
 
 /**
- * 409 body facts about the version that won; or, for a base version the sketch has never had (a
- * script that counted wrong), a 400 naming `baseVersion`: no one saved "since" it.
+ * 409 body facts about the version that won (`byYou`: the caller's own save, from another tab or a
+ * script); or, for a base version the sketch has never had (a script that counted wrong), a 400
+ * naming `baseVersion`: no one saved "since" it.
  */
-function conflictError(latest: VersionListItem, base: number): AppError {
+function conflictError(latest: VersionListItem, base: number, actorId: string): AppError {
+  const byYou = latest.authorId === actorId;
+  const facts = { number: latest.number, message: latest.message, authorName: latest.authorName, createdAt: latest.createdAt, status: latest.status, byYou };
   if (base > latest.number) {
     return new AppError("validation_failed", `This sketch has no version ${base}: its newest is version ${latest.number}. Save on the version you started from.`, {
       fields: [{ path: "baseVersion", message: `There is no version ${base}; the newest is ${latest.number}.` }],
-      extra: { latest: { number: latest.number, message: latest.message, authorName: latest.authorName, createdAt: latest.createdAt, status: latest.status } },
+      extra: { latest: facts },
     });
   }
-  const who = latest.authorName ? `${latest.authorName} saved` : "Someone saved";
-  return new AppError("version_conflict", `${who} version ${latest.number} since you opened version ${base}. Nothing was overwritten.`, {
-    extra: {
-      latest: {
-        number: latest.number,
-        message: latest.message,
-        authorName: latest.authorName,
-        createdAt: latest.createdAt,
-        status: latest.status,
-      },
-    },
-  });
+  const message = byYou
+    ? `You saved version ${latest.number} (in another tab or window, or by a script) since version ${base} was opened here. Nothing was overwritten.`
+    : `${latest.authorName ? `${latest.authorName} saved` : "Someone saved"} version ${latest.number} since you opened version ${base}. Nothing was overwritten.`;
+  return new AppError("version_conflict", message, { extra: { latest: facts } });
 }
 
 function isUniqueViolation(err: unknown): boolean {
@@ -132,7 +143,7 @@ export async function saveVersion(sketchId: string, actor: Actor, input: { baseV
       await assertUnderlayIn(access.workspaceId, input.document.file, tx);
       const out = await saveNextVersion(tx, { ...content, sketchId, actorId: actor.id, baseVersion: input.baseVersion });
       if (!out.ok && out.reason === "forbidden") throw await accessLostError(sketchId, actor.id, "version.save", tx);
-      if (!out.ok) throw conflictError(out.latest, input.baseVersion);
+      if (!out.ok) throw conflictError(out.latest, input.baseVersion, actor.id);
       await recordAudit(
         {
           action: "sketch.save",
@@ -166,7 +177,7 @@ export async function saveVersion(sketchId: string, actor: Actor, input: { baseV
     const access = await getSketchAccess(sketchId, actor.id);
     const latest = access ? await getVersion(sketchId, access.latestVersion, actor.id) : null;
     if (!latest) throw new AppError("conflict");
-    throw conflictError(latest, input.baseVersion);
+    throw conflictError(latest, input.baseVersion, actor.id);
   }
 }
 
@@ -257,7 +268,7 @@ function forkInTransaction(
   return db.transaction(async (tx) => {
     const refused = forkTargetError(await lockRole(tx, input.workspaceId, actor.id));
     if (refused) throw refused;
-    const title = input.title ?? `${source.title} (fork)`.slice(0, 120);
+    const title = input.title ?? forkTitle(source.title);
     const made = await insertSketchWithFirstVersion(tx, {
       // the drawing carries the fork's name (the editor, the calc sheet and the listings agree)
       document: { ...copy.document, title },

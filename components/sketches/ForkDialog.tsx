@@ -6,6 +6,7 @@ import { Button, Field, Notice, Select } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
+import { forkTitle } from "./format";
 
 export type WorkspaceChoice = { id: string; name: string; role: Role; personal: boolean };
 export type ForkResult = { sketch: { id: string; workspaceId: string; title: string; latestVersion: number } };
@@ -40,7 +41,7 @@ export function ForkDialog({
 }) {
   const targets = useForkTargets();
   const [workspaceId, setWorkspaceId] = useState<string>("");
-  const [title, setTitle] = useState(`${sketchTitle} (fork)`.slice(0, 120));
+  const [title, setTitle] = useState(forkTitle(sketchTitle));
   const chosen = workspaceId || (targets.data?.find((w) => w.id === defaultWorkspaceId) ?? targets.data?.[0])?.id || "";
   const fork = useMutation({
     mutationFn: () => apiFetch<ForkResult>(`/api/sketches/${sketchId}/fork`, { method: "POST", body: { workspaceId: chosen, version, title: title.trim() } }),

@@ -22,7 +22,8 @@ import { StatusMark } from "./StatusMark";
 
 export type ForkOrigin =
   | { visible: true; sketchId: string; title: string; workspaceId: string; versionNumber: number }
-  | { visible: false; title: string | null; versionNumber: number };
+  | { visible: false; title: string | null; versionNumber: number }
+  | { visible: false; deleted: true; title: string | null; versionNumber: number | null };
 
 export type SketchData = {
   sketch: {
@@ -54,9 +55,11 @@ export function ForkedFrom({ origin }: { origin: ForkOrigin }) {
         </Link>
       </p>
     );
+  const named = `${origin.title ? `“${origin.title}”` : "a sketch"}${origin.versionNumber === null ? "" : ` v${origin.versionNumber}`}`;
   return (
     <p className="text-sm text-ink-soft" data-testid="forked-from">
-      <ForkGlyph /> Forked from {origin.title ? `“${origin.title}”` : "a sketch"} v{origin.versionNumber}, in a workspace you are not a member of
+      <ForkGlyph /> Forked from {named}
+      {"deleted" in origin ? ", a sketch since deleted (this fork keeps its own copy)" : ", in a workspace you are not a member of"}
     </p>
   );
 }
@@ -89,6 +92,29 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
       router.refresh();
     },
   });
+
+  // deleted (or the reader removed from the workspace) since the page was opened: say so in the
+  // server's words (to a member, who deleted it and when) and offer nothing more to do on it
+  const gone = q.error instanceof ApiError && q.error.status === 404 ? q.error : null;
+  if (gone)
+    return (
+      <div className="space-y-6">
+        <div className="space-y-2">
+          <Crumb href={`/workspaces/${sketch.workspaceId}`} parent={sketch.workspaceName} here="Sketch" />
+          <h1 className="text-2xl font-semibold tracking-tight">{sketch.title}</h1>
+        </div>
+        <div data-testid="sketch-gone">
+          <Notice tone="error" title="This sketch is no longer here">
+            <p>{gone.message}</p>
+            <p className="mt-2">
+              <Link href={`/workspaces/${sketch.workspaceId}`} className="font-medium underline underline-offset-2">
+                Back to {sketch.workspaceName}
+              </Link>
+            </p>
+          </Notice>
+        </div>
+      </div>
+    );
 
   return (
     <div className="space-y-6">
@@ -184,7 +210,8 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
       <Dialog open={deleting} onClose={() => setDeleting(false)} title={`Delete “${sketch.title}”?`} testId="delete-dialog">
         <div className="space-y-4 text-sm">
           <p className="text-ink-soft">
-            All {sketch.latestVersion} version{sketch.latestVersion === 1 ? "" : "s"} go with it, for everyone in {sketch.workspaceName}. Forks elsewhere keep their own copies. This cannot be undone.
+            {sketch.latestVersion === 1 ? "Its one version goes" : `All ${sketch.latestVersion} versions go`} with it, for everyone in {sketch.workspaceName}
+            {sketch.approvedVersion ? ` — v${sketch.approvedVersion}, the approved version, and its sign-off record too` : ""}. Forks keep their own copies. This cannot be undone.
           </p>
           {remove.error ? <Notice tone="error">{remove.error instanceof ApiError ? remove.error.message : "Nothing was deleted."}</Notice> : null}
           <div className="flex justify-end gap-2">

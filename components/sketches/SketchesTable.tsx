@@ -101,7 +101,8 @@ export function filtersFromSearch(search: string): Filters {
   const page = Math.max(1, Math.floor(Number(p.get("page")) || 1));
   // a status the list does not know (an old or mistyped address) is dropped, not sent on to fail
   const status = (STATUS_FILTERS as readonly string[]).includes(p.get("status") ?? "") ? p.get("status")! : "";
-  return { q: p.get("q") ?? "", tag: p.get("tag") ?? "", status, sort, dir, page };
+  // a tag is filed in lower case, trimmed (as the server reads it), so the Tag box can show it
+  return { q: p.get("q") ?? "", tag: (p.get("tag") ?? "").trim().toLowerCase(), status, sort, dir, page };
 }
 
 export function searchOfFilters(f: Filters): string {
@@ -167,6 +168,8 @@ export function SketchesTable({ workspaceId, canCreate }: { workspaceId: string;
         <div className="w-40 max-sm:w-full">
           <Select id="sketch-tag" label="Tag" value={filters.tag} onChange={(e) => set({ tag: e.target.value })}>
             <option value="">Any tag</option>
+            {/* a tag from the address that no sketch has (any more) stays in view, not hidden behind "Any tag" */}
+            {filters.tag && !(data?.tags ?? []).includes(filters.tag) ? <option value={filters.tag}>{data ? `${filters.tag} (no sketch has it)` : filters.tag}</option> : null}
             {(data?.tags ?? []).map((t) => (
               <option key={t} value={t}>
                 {t}

@@ -60,3 +60,15 @@ export function timeAgo(value: string | Date, now = Date.now()): string | null {
   }
   return null;
 }
+
+/**
+ * A fork's default title: "Riser bend (fork)", and for a fork of that "Riser bend (fork 2)", then 3…;
+ * the original's words are shortened, never the suffix, to keep within `max` characters.
+ */
+export function forkTitle(title: string, max = 120): string {
+  const trimmed = title.trim();
+  const m = /^(.*\S) \(fork(?: (\d+))?\)$/.exec(trimmed);
+  const base = m ? m[1] : trimmed;
+  const suffix = m ? ` (fork ${m[2] ? Number(m[2]) + 1 : 2})` : " (fork)";
+  return `${base.slice(0, Math.max(0, max - suffix.length)).trimEnd()}${suffix}`;
+}

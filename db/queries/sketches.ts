@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, count, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
-import { membership, sketch, sketchVersion, user, workspace, type LowFactor, type SolveSummary } from "@/db/schema";
+import { auditEvent, membership, sketch, sketchVersion, user, workspace, type LowFactor, type SolveSummary } from "@/db/schema";
 import type { Role } from "@/lib/roles";
 import type { ReviewState } from "@/lib/review/rules";
 import type { ListSketchesQuery, SketchStatus } from "@/lib/sketch-schemas";
@@ -117,6 +117,7 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       updaterId: updater.id,
       updaterName: updater.name,
       forkedFrom: sketch.forkedFromVersionId,
+      forkedFromTitle: sketch.forkedFromTitle,
       approvedVersion: sql<number | null>`(select max(av.number) from sketch_version av where av.sketch_id = ${sketch.id} and av.review_state = 'approved')`,
     })
     .from(sketch)
@@ -147,7 +148,8 @@ export async function listSketches(workspaceId: string, viewerId: string, q: Lis
       latestMessage: r.latestMessage ?? "",
       updatedAt: r.updatedAt,
       updatedBy: r.updaterId ? { id: r.updaterId, name: r.updaterName ?? "" } : null,
-      forked: r.forkedFrom !== null,
+      // a fork stays one when its origin is deleted (the link goes, the copied title stays)
+      forked: r.forkedFrom !== null || r.forkedFromTitle !== null,
       approvedVersion: r.approvedVersion === null ? null : Number(r.approvedVersion),
       latestReviewState: (r.latestReviewState ?? "draft") as ReviewState,
     })),
@@ -165,7 +167,18 @@ export async function listWorkspaceTags(workspaceId: string, viewerId: string): 
 
 export type ForkOrigin =
   | { visible: true; sketchId: string; title: string; workspaceId: string; versionNumber: number }
-  | { visible: false; title: string | null; versionNumber: number };
+  | { visible: false; title: string | null; versionNumber: number }
+  /** the origin was deleted since: its title as copied when forked, its version from the fork's own audit record (null if none) */
+  | { visible: false; deleted: true; title: string | null; versionNumber: number | null };
+
+/**
+ * The version a sketch was forked from, as its own `sketch.fork` record wrote it (the record on
+ * the fork, not the one on an origin it was later forked from): it outlives the origin, whose
+ * version row goes when the origin is deleted.
+ */
+const forkRecordVersion = sql<number | null>`(select (a.detail ->> 'fromVersion')::int from ${auditEvent} a
+  where a.target_type = 'sketch' and a.target_id = ${sketch.id}::text and a.action = 'sketch.fork' and not jsonb_exists(a.detail, 'origin')
+  order by a.id limit 1)`;
 
 /** One sketch as a member sees it, with where it was forked from (named only when the viewer may read the origin). */
 export async function getSketchForMember(sketchId: string, viewerId: string) {
@@ -185,6 +198,7 @@ export async function getSketchForMember(sketchId: string, viewerId: string) {
       role: membership.role,
       originNumber: origin.number,
       forkedFromTitle: sketch.forkedFromTitle,
+      forkRecordVersion: sql<number | null>`case when ${sketch.forkedFromVersionId} is null and ${sketch.forkedFromTitle} is not null then ${forkRecordVersion} end`,
       originSketchId: originSketch.id,
       originTitle: originSketch.title,
       originWorkspaceId: originSketch.workspaceId,
@@ -202,7 +216,9 @@ export async function getSketchForMember(sketchId: string, viewerId: string) {
   if (!row) return null;
   const forkedFrom: ForkOrigin | null =
     row.originNumber === null
-      ? null
+      ? row.forkedFromTitle === null
+        ? null
+        : { visible: false, deleted: true, title: row.forkedFromTitle, versionNumber: row.forkRecordVersion === null ? null : Number(row.forkRecordVersion) }
       : row.originVisible && row.originSketchId && row.originTitle && row.originWorkspaceId
         ? { visible: true, sketchId: row.originSketchId, title: row.originTitle, workspaceId: row.originWorkspaceId, versionNumber: row.originNumber }
         : { visible: false, title: row.forkedFromTitle, versionNumber: row.originNumber };
@@ -242,6 +258,26 @@ export async function updateSketch(
     .where(and(eq(sketch.id, input.sketchId), actorMay(sketch.workspaceId, input.actorId, "sketch.edit")))
     .returning({ id: sketch.id, title: sketch.title, description: sketch.description, tags: sketch.tags, workspaceId: sketch.workspaceId });
   return row ?? null;
+}
+
+export type SketchDeletion = { title: string; deletedBy: string | null; deletedAt: Date; workspaceId: string };
+
+/**
+ * Who deleted a sketch and when, from its `sketch.delete` audit record, for a reader who is a member
+ * of the workspace it was in (null for anyone else, and for a sketch never deleted): a link to it
+ * can then say what happened instead of "no such sketch".
+ */
+export async function getSketchDeletion(sketchId: string, viewerId: string): Promise<SketchDeletion | null> {
+  const [row] = await db
+    .select({ title: sql<string | null>`${auditEvent.detail} ->> 'title'`, at: auditEvent.at, workspaceId: auditEvent.workspaceId, name: user.name, email: auditEvent.actorEmail })
+    .from(auditEvent)
+    .innerJoin(membership, and(eq(membership.workspaceId, auditEvent.workspaceId), eq(membership.userId, viewerId)))
+    .leftJoin(user, eq(user.id, auditEvent.actorId))
+    .where(and(eq(auditEvent.targetType, "sketch"), eq(auditEvent.targetId, sketchId), eq(auditEvent.action, "sketch.delete")))
+    .orderBy(desc(auditEvent.id))
+    .limit(1);
+  if (!row || !row.workspaceId) return null;
+  return { title: row.title ?? "The sketch", deletedBy: row.name ?? row.email ?? null, deletedAt: row.at, workspaceId: row.workspaceId };
 }
 
 /** Delete a sketch and its versions (owners; checked in the DELETE). Forks of it keep their copy. */
