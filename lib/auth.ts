@@ -6,9 +6,10 @@ import { db } from "@/db";
 import { ensurePersonalWorkspace } from "@/db/queries/workspaces";
 import { account, rateLimit, session, user, verification } from "@/db/schema";
 import { recordAudit } from "./audit";
+import { unavailableReason } from "./db-unavailable";
 import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp, trustedProxies } from "./env";
 import { sendMailInBackground } from "./mail";
-import { passwordResetMail, verificationMail } from "./mail-templates";
+import { existingAccountMail, passwordResetMail, verificationMail } from "./mail-templates";
 import { personNameSchema } from "./schemas";
 
 /** Paths (after /api/auth) that take a password or send mail: these get the AUTH_RATE_LIMIT_* budget. */
@@ -22,11 +23,37 @@ export const CREDENTIAL_PATHS = [
   "/send-verification-email",
 ] as const;
 
-/** Confirmation links land on /verify (sign-in resends them without a page to return to). */
-export function withVerifyCallback(url: string): string {
+/**
+ * The page a sign-in was asked to return to (its `next`), read from the Referer of the sign-in
+ * request, and only when that is this app's own /sign-in page; "" when there is none.
+ */
+function signInNext(referer: string | null | undefined): string {
+  if (!referer) return "";
+  let from: URL;
+  try {
+    from = new URL(referer);
+  } catch {
+    return "";
+  }
+  if (from.origin !== appOrigin() || from.pathname !== "/sign-in") return "";
+  const next = from.searchParams.get("next");
+  // a path in this app only (as lib/session.ts safeNext), and never the default
+  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\") || next === "/workspaces") return "";
+  return next;
+}
+
+/**
+ * Confirmation links land on /verify. A sign-in by an unconfirmed account resends the link with no
+ * page to return to: it keeps the sign-in page's own `next` (an invitation to join, a scratch sketch
+ * to save), so confirming and signing in still ends there.
+ */
+export function withVerifyCallback(url: string, referer?: string | null): string {
   const u = new URL(url);
   const callback = u.searchParams.get("callbackURL");
-  if (!callback || callback === "/") u.searchParams.set("callbackURL", "/verify?confirmed=1");
+  if (!callback || callback === "/") {
+    const next = signInNext(referer);
+    u.searchParams.set("callbackURL", next ? `/verify?confirmed=1&next=${encodeURIComponent(next)}` : "/verify?confirmed=1");
+  }
   return u.toString();
 }
 
@@ -44,6 +71,39 @@ export function checkedName(name: unknown): string {
   throw new APIError("BAD_REQUEST", { code: "INVALID_NAME", field: "name", message: `name: ${message}` });
 }
 
+// Each error already written as "database unavailable", and everything it wraps: better-auth logs a
+// failed session lookup in its route and again in its router's error hook (the second wraps the first).
+const loggedUnavailable = new WeakSet<object>();
+
+function causeChain(err: unknown): object[] {
+  const chain: object[] = [];
+  for (let e = err; e && typeof e === "object" && chain.length < 8 && !chain.includes(e); e = (e as { cause?: unknown }).cause) chain.push(e);
+  return chain;
+}
+
+/**
+ * better-auth's log (its `logger.log`). A database out of reach (PostgreSQL down or restarting, the
+ * pool busy: lib/db-unavailable.ts) is load, not a bug: one warning line with the driver's words, as
+ * the API's 503s write, once per failure, instead of a stack trace per request that would hide the
+ * real faults. Anything else keeps its full detail (the error and its stack) at its own level.
+ */
+export function authLog(level: "debug" | "info" | "warn" | "error", message: unknown, ...args: unknown[]): void {
+  for (const arg of [message, ...args]) {
+    const reason = unavailableReason(arg);
+    if (reason === null) continue;
+    const chain = causeChain(arg);
+    if (chain.some((e) => loggedUnavailable.has(e))) return;
+    for (const e of chain) loggedUnavailable.add(e);
+    console.warn(`[auth] database unavailable (${typeof message === "string" && message ? message : level}): ${reason}`);
+    return;
+  }
+  const line = `[auth] ${typeof message === "string" ? message : ""}`.trimEnd();
+  const detail = typeof message === "string" ? args : [message, ...args];
+  if (level === "error") console.error(line, ...detail);
+  else if (level === "warn") console.warn(line, ...detail);
+  else console.log(line, ...detail);
+}
+
 export type AuthOverrides = { rateLimit?: { max: number; window: number } };
 
 /** The better-auth instance: e-mail and password on PostgreSQL, mail through lib/mail. */
@@ -56,6 +116,7 @@ export function createAuth(overrides: AuthOverrides = {}) {
     basePath: "/api/auth",
     secret: authSecret(),
     trustedOrigins: [appOrigin()],
+    logger: { level: "warn", log: authLog },
     database: drizzleAdapter(db, { provider: "pg", schema: { user, session, account, verification, rateLimit }, transaction: true }),
     user: {
       additionalFields: {
@@ -72,6 +133,9 @@ export function createAuth(overrides: AuthOverrides = {}) {
       async sendResetPassword({ user: u, url }) {
         sendMailInBackground(passwordResetMail({ to: u.email, name: u.name, url }));
       },
+      async onExistingUserSignUp({ user: u }) {
+        sendMailInBackground(existingAccountMail({ to: u.email, name: u.name, url: `${appUrl()}/sign-in?email=${encodeURIComponent(u.email)}` }));
+      },
       async onPasswordReset({ user: u }) {
         await recordAudit({ action: "auth.password_reset", actorId: u.id, actorEmail: u.email });
       },
@@ -81,8 +145,8 @@ export function createAuth(overrides: AuthOverrides = {}) {
       sendOnSignIn: true,
       autoSignInAfterVerification: false,
       expiresIn: 60 * 60,
-      async sendVerificationEmail({ user: u, url }) {
-        sendMailInBackground(verificationMail({ to: u.email, name: u.name, url: withVerifyCallback(url) }));
+      async sendVerificationEmail({ user: u, url }, request) {
+        sendMailInBackground(verificationMail({ to: u.email, name: u.name, url: withVerifyCallback(url, request?.headers.get("referer")) }));
       },
     },
     session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },

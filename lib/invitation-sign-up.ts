@@ -2,7 +2,18 @@ import "server-only";
 import { getAuth } from "./auth";
 import { withClientAddress } from "./client-address";
 import { AppError } from "./errors";
-import { accountExists, acceptInvitation, invitationStateError, lookUpInvitation } from "./invitations";
+import { accountExists, acceptInvitation, invitationSignInPath, invitationStateError, lookUpInvitation } from "./invitations";
+
+/**
+ * The invited address has an account already (made since the mail was sent, or in another tab):
+ * the way on is to sign in with it, filled in, and come back to the invitation to join. `signIn`
+ * is that page's path, for the form to offer as a link.
+ */
+export function existingAccountError(token: string, email: string): AppError {
+  return new AppError("conflict", `An account for ${email} already exists. Sign in with it to accept the invitation.`, {
+    extra: { signIn: invitationSignInPath(token, email) },
+  });
+}
 
 /**
  * A new account made from an invitation link. The link reached the invited address, which
@@ -19,7 +30,7 @@ export async function signUpFromInvitation(
   if (stateError) throw stateError;
   const email = view!.email;
   if (await accountExists(email)) {
-    throw new AppError("conflict", `An account for ${email} already exists. Sign in to accept the invitation.`);
+    throw existingAccountError(token, email);
   }
 
   const auth = getAuth();
@@ -36,7 +47,7 @@ export async function signUpFromInvitation(
     });
   } catch (err) {
     // Two sign-ups from one link at once: the e-mail's unique index lets only one through.
-    if (await accountExists(email)) throw new AppError("conflict", `An account for ${email} already exists. Sign in to accept the invitation.`);
+    if (await accountExists(email)) throw existingAccountError(token, email);
     throw err;
   }
 

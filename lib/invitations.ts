@@ -25,6 +25,16 @@ export function invitationUrl(token: string): string {
   return `${appUrl()}/invite/${encodeURIComponent(token)}`;
 }
 
+/** The invitation's own page, as a path in the app (where signing in comes back to). */
+export function invitationPath(token: string): string {
+  return `/invite/${encodeURIComponent(token)}`;
+}
+
+/** Sign in with the invited address filled in, then back to the invitation to join. */
+export function invitationSignInPath(token: string, email: string): string {
+  return `/sign-in?next=${encodeURIComponent(invitationPath(token))}&email=${encodeURIComponent(email)}`;
+}
+
 export function normalizeEmail(email: string): string {
   return email.trim().toLowerCase();
 }

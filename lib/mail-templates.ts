@@ -46,6 +46,25 @@ export function passwordResetMail(input: { to: string; name: string; url: string
   );
 }
 
+/**
+ * The mail for a sign-up with an address that already has an account. better-auth answers such a
+ * sign-up as it answers a new one (a stranger learns nothing), and the page says a mail went out:
+ * this is that mail, to the address's owner, with the way in (`url`: the sign-in page, address filled in).
+ */
+export function existingAccountMail(input: { to: string; name: string; url: string }): Mail {
+  return compose(
+    input.to,
+    "You already have a Counterpoise account",
+    [
+      `Hello ${input.name},`,
+      "Someone tried to create a Counterpoise account with this address, which already has one. To get in, sign in with your password.",
+      'Forgot your password? Choose "Forgot your password?" on the sign-in page and we mail you a link to set a new one.',
+    ],
+    { label: "Sign in", url: input.url },
+    "If it was not you, ignore this mail: your account and its password are unchanged.",
+  );
+}
+
 export function invitationMail(input: {
   to: string;
   inviterName: string;

@@ -1,6 +1,9 @@
 import "server-only";
+import { and, desc, eq } from "drizzle-orm";
+import { z } from "zod";
 import { db } from "@/db";
 import { changeMemberRole, removeMember, renameWorkspace, type MemberChange } from "@/db/queries/workspaces";
+import { auditEvent, workspace } from "@/db/schema";
 import { recordAudit } from "./audit";
 import { AppError } from "./errors";
 import type { Role } from "./roles";
@@ -11,6 +14,23 @@ function refuse(result: Extract<MemberChange, { ok: false }>): never {
   if (result.reason === "last_owner") throw new AppError("last_owner");
   if (result.reason === "not_found") throw new AppError("not_found", "That person is not a member of this workspace.");
   throw new AppError("forbidden");
+}
+
+/**
+ * The name of a workspace this person left themselves (their own "left the workspace" in its audit
+ * log), for the notice on the workspaces list after leaving. Anything else, a malformed id or a
+ * workspace they never left, is null: the address cannot make the page name a workspace.
+ */
+export async function leftWorkspaceName(userId: string, workspaceId: string | undefined): Promise<string | null> {
+  if (!z.uuid().safeParse(workspaceId).success) return null;
+  const [row] = await db
+    .select({ name: workspace.name })
+    .from(auditEvent)
+    .innerJoin(workspace, eq(workspace.id, auditEvent.workspaceId))
+    .where(and(eq(auditEvent.workspaceId, workspaceId!), eq(auditEvent.actorId, userId), eq(auditEvent.action, "member.leave")))
+    .orderBy(desc(auditEvent.id))
+    .limit(1);
+  return row?.name ?? null;
 }
 
 /** An owner changes a member's role (the last owner cannot be demoted). */

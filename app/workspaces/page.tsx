@@ -1,17 +1,23 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { AppShell } from "@/components/shell/AppShell";
-import { EmptyState, Panel } from "@/components/shell/controls";
+import { EmptyState, Notice, Panel } from "@/components/shell/controls";
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
 import { CreateWorkspaceForm } from "@/components/workspaces/WorkspaceForms";
 import { listWorkspacesForUser } from "@/db/queries/workspaces";
+import { orBusy } from "@/lib/db-unavailable";
+import { leftWorkspaceName } from "@/lib/members";
 import { requirePageSession } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Workspaces" };
 
-export default async function WorkspacesPage() {
+export default async function WorkspacesPage({ searchParams }: { searchParams: Promise<{ left?: string | string[] }> }) {
   const session = await requirePageSession("/workspaces");
   const workspaces = await listWorkspacesForUser(session.user.id);
+  // after "Leave" on the members page: say it happened (not once they are back in it)
+  const { left } = await searchParams;
+  const leftId = typeof left === "string" && !workspaces.some((w) => w.id === left) ? left : undefined;
+  const leftName = leftId ? await orBusy(leftWorkspaceName(session.user.id, leftId)) : null;
   return (
     <AppShell next="/workspaces">
       <div className="space-y-8">
@@ -19,6 +25,13 @@ export default async function WorkspacesPage() {
           <h1 className="text-2xl font-semibold tracking-tight">Workspaces</h1>
           <p className="mt-1 text-ink-soft">Each workspace holds sketches and the people who prepare, check and approve them.</p>
         </div>
+        {leftName ? (
+          <Notice tone="success">
+            <span className="[overflow-wrap:anywhere]">
+              You left <strong>{leftName}</strong>. To join it again, ask one of its owners to invite you.
+            </span>
+          </Notice>
+        ) : null}
         {workspaces.length ? (
           <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
             {workspaces.map((w) => (

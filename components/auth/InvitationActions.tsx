@@ -1,4 +1,5 @@
 "use client";
+import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
@@ -43,6 +44,8 @@ export function InvitationSignUpForm({ token, email }: { token: string; email: s
   const [password, setPassword] = useState("");
   const [errors, setErrors] = useState<{ name?: string; password?: string }>({});
   const [error, setError] = useState<string | null>(null);
+  // the address has an account already: the server names the sign-in that comes back here
+  const [signIn, setSignIn] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   useFocusFirstError(errors);
 
@@ -56,6 +59,7 @@ export function InvitationSignUpForm({ token, email }: { token: string; email: s
     if (next.name || next.password) return;
     setBusy(true);
     setError(null);
+    setSignIn(null);
     try {
       const r = await apiFetch<{ workspaceId: string }>(path(token, "sign-up"), { method: "POST", body: { name: name.trim(), password } });
       router.push(`/workspaces/${r.workspaceId}`);
@@ -64,12 +68,23 @@ export function InvitationSignUpForm({ token, email }: { token: string; email: s
       setBusy(false);
       if (err instanceof ApiError && err.fields.length) setErrors({ name: err.field("name"), password: err.field("password") });
       else setError(err instanceof ApiError ? err.message : "Something went wrong. Try again.");
+      const to = err instanceof ApiError ? err.detail.signIn : undefined;
+      setSignIn(typeof to === "string" && to.startsWith("/sign-in?") ? to : null);
     }
   }
 
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
-      {error ? <Notice tone="error">{error}</Notice> : null}
+      {error ? (
+        <Notice tone="error">
+          <span className="[overflow-wrap:anywhere]">{error}</span>
+          {signIn ? (
+            <Link href={signIn} className="mt-2 block font-semibold underline underline-offset-2 [overflow-wrap:anywhere]">
+              Sign in as {email} to join
+            </Link>
+          ) : null}
+        </Notice>
+      ) : null}
       <Field id="invite-email" label="E-mail address" value={email} readOnly disabled hint="The invitation was sent here, so it needs no separate confirmation." />
       <Field id="name" name="name" label="Your name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
       <Field id="password" name="password" type="password" label="Choose a password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} error={errors.password} hint="At least 8 characters." />

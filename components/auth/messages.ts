@@ -1,5 +1,7 @@
 // better-auth's error codes in our own words.
-type AuthError = { status?: number; code?: string; message?: string } | null | undefined;
+// `error`: the app's own error object, which the auth route adds to better-auth's refusals and
+// is all there is on the route's own answers (a database out of reach: 503 `unavailable`).
+type AuthError = { status?: number; code?: string; message?: string; error?: { message?: unknown } } | null | undefined;
 
 export function authErrorMessage(err: AuthError, ctx: { email?: string; retryAfter?: number | null } = {}): string {
   if (!err) return "Something went wrong. Try again.";
@@ -7,6 +9,8 @@ export function authErrorMessage(err: AuthError, ctx: { email?: string; retryAft
     const wait = ctx.retryAfter && ctx.retryAfter > 0 ? `${ctx.retryAfter} second${ctx.retryAfter === 1 ? "" : "s"}` : "a few seconds";
     return `Too many attempts from this connection. Wait ${wait} and try again.`;
   }
+  const appMessage = typeof err.error?.message === "string" ? err.error.message : undefined;
+  if (err.status === 503) return appMessage ?? "The server is busy. Nothing was changed: try again in a few seconds.";
   switch (err.code) {
     case "INVALID_EMAIL_OR_PASSWORD":
       return "That e-mail address and password do not match an account.";
@@ -28,5 +32,5 @@ export function authErrorMessage(err: AuthError, ctx: { email?: string; retryAft
       return "An account with this e-mail address already exists. Sign in instead.";
   }
   if (err.status === 403) return "The request was refused. Reload the page and try again.";
-  return err.message || "Something went wrong. Try again.";
+  return err.message || appMessage || "Something went wrong. Try again.";
 }

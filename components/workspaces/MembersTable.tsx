@@ -81,6 +81,9 @@ export function MembersTable({
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const owners = members?.filter((m) => m.role === "owner").length ?? 0;
   const manage = can(viewerRole, "members.changeRole");
+  // the only owner cannot leave or step down: say so where they look, not only in a tooltip
+  const viewerIsLastOwner = owners === 1 && Boolean(members?.some((m) => m.userId === viewerId && m.role === "owner"));
+  const lastOwnerNote = `members-last-owner-${workspaceId}`;
 
   const changeRole = useMutation({
     mutationFn: (v: { member: Member; role: Role }) => apiFetch(`${membersPath}/${encodeURIComponent(v.member.userId)}`, { method: "PATCH", body: { role: v.role } }),
@@ -99,7 +102,8 @@ export function MembersTable({
     mutationFn: (member: Member) => apiFetch(`${membersPath}/${encodeURIComponent(member.userId)}`, { method: "DELETE" }),
     onSuccess: (_d, member) => {
       if (member.userId === viewerId) {
-        router.push("/workspaces");
+        // the workspaces list says which one was left (it reads the leaving from the audit log)
+        router.push(`/workspaces?left=${encodeURIComponent(workspaceId)}`);
         router.refresh();
         return;
       }
@@ -165,6 +169,7 @@ export function MembersTable({
                             disabled={lastOwner}
                             aria-busy={(changeRole.isPending && changeRole.variables?.member.userId === m.userId) || undefined}
                             title={lastOwner ? "The last owner keeps the owner role: make someone else an owner first." : undefined}
+                            aria-describedby={lastOwner && isSelf ? lastOwnerNote : undefined}
                             onChange={(e) => changeRole.mutate({ member: m, role: e.target.value as Role })}
                           >
                             {ROLES.map((r) => (
@@ -194,6 +199,14 @@ export function MembersTable({
           </tbody>
         </table>
       </div>
+      {viewerIsLastOwner ? (
+        <p id={lastOwnerNote} className="text-xs leading-relaxed text-ink-soft">
+          You are the only owner, so you cannot leave this workspace or give up the owner role.{" "}
+          {members && members.length > 1
+            ? "To do either, make another member an owner first."
+            : "To do either, invite a colleague, then make them an owner."}
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -55,7 +55,9 @@ export default async function VerifyPage({ searchParams }: { searchParams: Searc
       lead={
         sent ? (
           <>
-            We sent a confirmation link to <strong className="text-ink">{sent}</strong>. Open it to finish setting up your account; it works for one hour.
+            We sent a confirmation link to <strong className="text-ink [overflow-wrap:anywhere]">{sent}</strong>. Open it to finish setting up your account; it works for one hour.
+            {/* an address with an account already gets a mail that says so (lib/auth.ts), not a link */}{" "}
+            If the address already has an account, the mail says so instead, with a link to sign in.
           </>
         ) : (
           "We sent you a confirmation link. Open it to finish setting up your account; it works for one hour."

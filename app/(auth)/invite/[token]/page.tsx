@@ -7,7 +7,7 @@ import { AcceptInvitationButton, InvitationSignUpForm, SwitchAccountButton } fro
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
 import { Notice } from "@/components/shell/controls";
 import { orBusy } from "@/lib/db-unavailable";
-import { accountExists, invitationRefusal, lookUpInvitation } from "@/lib/invitations";
+import { accountExists, invitationPath, invitationRefusal, invitationSignInPath, lookUpInvitation } from "@/lib/invitations";
 import { ROLE_INFO } from "@/lib/roles";
 import { currentSession } from "@/lib/session";
 
@@ -33,7 +33,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
   const { token } = await params;
   const view = await lookUp(token);
   const session = await currentSession();
-  const here = `/invite/${token}`;
+  const here = invitationPath(token);
 
   // an unknown link answers 404 (its page: not-found.tsx); nothing streams before this check
   if (!view) notFound();
@@ -101,7 +101,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
   if (hasAccount) {
     return (
       <AuthCard title="Join the workspace" lead={lead} foot={expires}>
-        <Link href={`/sign-in?next=${encodeURIComponent(here)}&email=${encodeURIComponent(view.email)}`} className={`${primary} text-center [overflow-wrap:anywhere]`}>
+        <Link href={invitationSignInPath(token, view.email)} className={`${primary} text-center [overflow-wrap:anywhere]`}>
           Sign in as {view.email} to join
         </Link>
       </AuthCard>

@@ -13,8 +13,19 @@ export const dynamic = "force-dynamic";
 // (better-auth checks Origin only when cookies are sent, which would let another site sign a
 // visitor into an account of its choosing), and the body is capped before it is parsed. Its
 // refusals also carry the app's `{ error: { code, message, fields? } }` (withAppErrorShape).
+// What better-auth throws instead of answering (its rate limiter reads PostgreSQL before any
+// endpoint runs: with the database down it throws) gets the app's answer too: a 503 to retry with
+// one log line, not Next's HTML 500 with a stack.
+async function handled(req: Request): Promise<Response> {
+  try {
+    return withAppErrorShape(await getAuth().handler(req));
+  } catch (err) {
+    return errorResponse(err);
+  }
+}
+
 export async function GET(req: Request): Promise<Response> {
-  return withAppErrorShape(await getAuth().handler(new Request(req, { headers: withClientAddress(req.headers) })));
+  return handled(new Request(req, { headers: withClientAddress(req.headers) }));
 }
 
 export async function POST(req: Request): Promise<Response> {
@@ -31,7 +42,7 @@ export async function POST(req: Request): Promise<Response> {
   }
   const headers = withClientAddress(req.headers);
   headers.delete("content-length"); // the body is now what was read, whatever the header claimed
-  return withAppErrorShape(await getAuth().handler(new Request(req.url, { method: "POST", headers, body: new Uint8Array(body), signal: req.signal })));
+  return handled(new Request(req.url, { method: "POST", headers, body: new Uint8Array(body), signal: req.signal }));
 }
 
 export const { PUT, PATCH, DELETE, OPTIONS } = otherMethods("GET", "POST");
