@@ -98,8 +98,16 @@ function Blank({ kind, field }: { kind?: string; field: string }) {
   return <span className="font-normal text-ink-faint">{words ?? "—"}</span>;
 }
 
-/** Rows of one group; `kind` (an element kind, or "sketch") turns file field names into the properties form's words. */
-function Rows({ group, rows, kind }: { group: string; rows: FieldChange[]; kind?: string }) {
+/** A field in the properties form's words: the element's kind now, else the kind it was (a
+ *  contact's friction on a support now a pin), else the file's name. */
+function fieldName(field: string, kind?: string, kindBefore?: string): string {
+  if (!kind) return field;
+  const now = fieldLabel(kind, field);
+  return now === field && kindBefore ? fieldLabel(kindBefore, field) : now;
+}
+
+/** Rows of one group; `kind` (an element kind, or "sketch") turns file field names into the properties form's words; `kindBefore`, the kind it was, when that changed. */
+function Rows({ group, rows, kind, kindBefore }: { group: string; rows: FieldChange[]; kind?: string; kindBefore?: string }) {
   return (
     <>
       {rows.map((f, i) => (
@@ -108,8 +116,8 @@ function Rows({ group, rows, kind }: { group: string; rows: FieldChange[]; kind?
             {/* the group is written once on screen, and read as the header of every row in it */}
             {i === 0 ? group : <span className="sr-only">{group}</span>}
           </th>
-          <td className="py-1.5 pr-3 text-ink-soft">{kind ? fieldLabel(kind, f.field) : f.field}</td>
-          <td className="num py-1.5 pr-3">{f.before ?? <Blank kind={kind} field={f.field} />}</td>
+          <td className="py-1.5 pr-3 text-ink-soft">{fieldName(f.field, kind, kindBefore)}</td>
+          <td className="num py-1.5 pr-3">{f.before ?? <Blank kind={kindBefore ?? kind} field={f.field} />}</td>
           <td className="py-1.5 pr-1 text-ink-faint" aria-hidden="true">
             →
           </td>
@@ -162,7 +170,7 @@ export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
             <Rows group="Cases and studies" rows={studies} />
             {c.elements.changed.map((e) => (
               <Fragment key={e.id}>
-                <Rows group={`${e.label} (${e.kind})`} rows={e.fields} kind={e.kind} />
+                <Rows group={`${e.label} (${e.kind})`} rows={e.fields} kind={e.kind} kindBefore={e.kindBefore} />
               </Fragment>
             ))}
           </tbody>

@@ -105,7 +105,11 @@ export function TitleBlock({ block, state }: { block: SignOffData["titleBlock"];
   );
 }
 
-function StepDialog({ step, path, concerns, onClose, onDone }: { step: SignOffStep; path: string; concerns: readonly string[]; onClose: () => void; onDone: () => void }) {
+/** What a check or an approval of a superseded version signs off: that version, not the newer one. */
+const SUPERSEDED_STEP: Partial<Record<SignOffStep, string>> = { check: "marking a superseded version checked", approve: "approving a superseded version" };
+const SUPERSEDED_ACT: Partial<Record<SignOffStep, string>> = { check: "this check", approve: "this approval" };
+
+function StepDialog({ step, path, concerns, newer, onClose, onDone }: { step: SignOffStep; path: string; concerns: readonly string[]; newer?: number | null; onClose: () => void; onDone: () => void }) {
   const rule = SIGN_OFF_RULES[step];
   const [note, setNote] = useState("");
   const take = useMutation({ mutationFn: () => apiFetch(path, { method: "POST", body: { step, ...(note.trim() ? { note: note.trim() } : {}) } }), onSuccess: onDone });
@@ -135,6 +139,11 @@ function StepDialog({ step, path, concerns, onClose, onDone }: { step: SignOffSt
               ))}
             </ul>
           </div>
+        ) : null}
+        {newer && SUPERSEDED_STEP[step] ? (
+          <p className="rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-[13px] text-ink" data-testid="signoff-dialog-superseded" role="note">
+            You are {SUPERSEDED_STEP[step]}: v{newer} was saved after it, and {SUPERSEDED_ACT[step]} does not carry over to v{newer}.
+          </p>
         ) : null}
         <label htmlFor="signoff-note" className="block text-sm font-medium text-ink">
           {prompt[step]}
@@ -178,6 +187,11 @@ export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: S
         <p className="text-sm text-ink-soft" data-testid="signoff-superseded">
           v{data.newer} is newer: only the latest version is submitted for checking.
         </p>
+      ) : data.newer && (data.state === "submitted" || data.state === "checked") ? (
+        // still checked and approved on its own, but the newer version does not inherit it
+        <p className="text-sm text-caution" data-testid="signoff-superseded" role="note">
+          v{data.newer} was saved after this version: a check or approval given here is of this version only and does not carry over to v{data.newer}.
+        </p>
       ) : null}
       {why ? (
         <p className="text-sm text-ink-soft" data-testid="signoff-why-not" role="note">
@@ -209,6 +223,7 @@ export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: S
           step={step}
           path={path}
           concerns={concerns}
+          newer={data.newer}
           onClose={() => setStep(null)}
           onDone={() => {
             setStep(null);

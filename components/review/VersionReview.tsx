@@ -14,10 +14,11 @@ import type { SketchStatus } from "@/lib/sketch-schemas";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
-import { asDrawnTwin, reactionTable, stabilityTable, unitFamily, versionScale, type Scale } from "@/solver/report";
+import { asDrawnTwin, reactionTable, stabilityTable, unitFamily } from "@/solver/report";
 import { withoutColumn, withoutEmptyReactionColumns } from "@/canvas/studies/tables";
 import { ReportTable } from "@/components/studies/ReportTable";
-import { asDrawnOfDocument, solveDocument, studyOfDocument } from "@/lib/review/compare";
+import { asDrawnOfDocument, studyOfDocument } from "@/lib/review/compare";
+import { versionScaleOf } from "./versionScale";
 import { elementLabels } from "@/lib/review/pin-words";
 import { asDrawnName, belowRequired, CaseTables } from "@/components/studies/CaseTables";
 import { CsvSubject } from "@/components/studies/csv";
@@ -42,16 +43,7 @@ export function asDrawnCase(document: SketchFile): { id: string; name: string } 
   return run ? { id: run.id, name: run.name } : null;
 }
 
-/** The scale of every force and moment a version's page shows, chosen as its calc sheet chooses it
- *  (`versionScale`: its cases, the sketch as drawn with its factors of safety, and the result as
- *  drawn), so a figure reads in the same unit on the page and on the sheet; null when it does not solve. */
-export function versionScaleOf(document: SketchFile): Scale | null {
-  const { result } = solveDocument(document);
-  if (!result) return null;
-  const asDrawn = asDrawnOfDocument(document);
-  const run = asDrawn?.runs[0];
-  return versionScale(result, studyOfDocument(document), asDrawn, run?.ok ? run.stability : null);
-}
+export { versionScaleOf } from "./versionScale";
 
 /** The version's reactions as drawn, in one unit a table (the rows the editor, the CSV and the calc
  *  sheet use), and its factors of safety as drawn (with cases, the cases' tables below carry each

@@ -10,10 +10,12 @@ import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
-import { SweepChart } from "@/components/studies/SweepChart";
+import { SweepChart, type ChartFamily } from "@/components/studies/SweepChart";
 import { ReportTable } from "@/components/studies/ReportTable";
 import { planOf } from "@/solver/parse";
 import { useSolved } from "./ReviewDrawing";
+import { versionScaleOf } from "./versionScale";
+import { unitFamily } from "@/solver/report";
 import { Button } from "@/components/shell/controls";
 import { useKeptSweeps, type KeptSweepState, type KeptSweepsRun } from "./useKeptSweeps";
 
@@ -52,6 +54,12 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
   // per document): the captions say it before the worker answers, and the sweeps are in that unit
   const { sketch } = useSolved(document);
   const parameterUnits = useMemo(() => (sketch ? (planOf(sketch)?.parameterUnits ?? {}) : {}), [sketch]);
+  // the charts' forces and moments in the one family of the rest of the page and of the calc sheet's
+  // charts (`versionScaleOf`: the page's own solves, cached per document), not one of their own
+  const family = useMemo(() => {
+    const scale = document.sweeps?.length ? versionScaleOf(document) : null;
+    return scale ? unitFamily(units, scale) : undefined;
+  }, [document, units]);
   const sweeps = document.sweeps ?? [];
   if (!sweeps.length) return null;
   const busy = run.current !== null;
@@ -82,6 +90,7 @@ export function VersionSweeps({ document, units }: { document: SketchFile; units
           stopped={run.stopped}
           drawnUnit={parameterUnits[sw.parameter] ?? ""}
           units={units}
+          family={family}
           names={names}
         />
       ))}
@@ -97,6 +106,7 @@ const KeptSweep = memo(function KeptSweep({
   stopped,
   drawnUnit,
   units,
+  family,
   names,
 }: {
   document: SketchFile;
@@ -107,6 +117,7 @@ const KeptSweep = memo(function KeptSweep({
   /** the unit the sketch writes the swept parameter in ("" for none), until the sweep says its own */
   drawnUnit: string;
   units: UnitSystem;
+  family: ChartFamily | undefined;
   names: Readonly<Record<string, string>>;
 }) {
   const name = parameterName(sw);
@@ -127,7 +138,7 @@ const KeptSweep = memo(function KeptSweep({
         </p>
       ) : plot ? (
         <>
-          <SweepChart data={plot.data} units={units} parameterLabel={name} limit={null} run={0} names={names} />
+          <SweepChart data={plot.data} units={units} parameterLabel={name} limit={null} run={0} names={names} family={family} />
           <ul className="text-xs text-ink-soft">
             {plot.markers.length ? plot.markers.map((m) => <li key={m.words}>Crossing: {m.words}.</li>) : <li>No plotted margin reaches zero in this range.</li>}
             {sweepStateLines(plot.data, names).map((l) => (

@@ -4,10 +4,10 @@
 // and the limit found, if any. Hover shows values.
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { formatLimit } from "@/solver/limit";
-import { describeQuantity } from "@/solver/quantity";
-import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
+import { describeQuantity, type QuantityComponent } from "@/solver/quantity";
+import { convert, formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { sweepAxisTicks } from "@/lib/calcsheet/chart";
-import { displayKind, displayUnit, largestByKind, marksZero, pointStateWords, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestByKind, marksZero, pointStateWords, toDisplay, type DisplayKind } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 
 const COLORS = ["rgb(var(--reaction))", "rgb(var(--accent))", "rgb(var(--ink))", "rgb(var(--caution))", "rgb(var(--plot-5))", "rgb(var(--plot-6))"];
@@ -16,15 +16,27 @@ const DASHES = ["", "6 3", "2 3", "8 3 2 3", "1 2", "10 4"];
 /** The largest force and moment plotted: N (N·m) for a sweep that stays below 1 kN (1 kN·m). */
 const scaleOf = (data: SweepData) => largestByKind(data.quantities.map((q) => q.component), data.series);
 
-/** The chart's rows: each series in its own display unit (kN or kN·m, N or N·m, lbf or lbf·ft). */
-export function chartRows(data: SweepData, units: UnitSystem): Array<Record<string, number | null>> {
+/** The force and moment units of a page the chart sits on (a version's: `unitFamily`), or none:
+ *  then the chart picks its own from its values. */
+export type ChartFamily = { force: string; moment: string };
+
+/** The display unit of a quantity: the page's `family`, else one for the plot's largest value. */
+function unitIn(component: QuantityComponent, units: UnitSystem, largest: Record<DisplayKind, number>, family?: ChartFamily): string {
+  const kind = displayKind(component);
+  return family && kind !== "ratio" ? family[kind] : displayUnit(component, units, largest[kind]);
+}
+
+/** The chart's rows: each series in its own display unit (kN or kN·m, N or N·m, lbf or lbf·ft), or
+ *  in the page's `family`. */
+export function chartRows(data: SweepData, units: UnitSystem, family?: ChartFamily): Array<Record<string, number | null>> {
   const largest = scaleOf(data);
   return data.xs.map((x, i) => {
     const row: Record<string, number | null> = { x };
     data.series.forEach((ys, s) => {
       const v = ys[i];
       const c = data.quantities[s].component;
-      row[`q${s}`] = Number.isFinite(v) ? toDisplay(v, c, units, largest[displayKind(c)]) : null;
+      const kind = displayKind(c);
+      row[`q${s}`] = !Number.isFinite(v) ? null : family && kind !== "ratio" ? convert(v, kind, units, family[kind]).value : toDisplay(v, c, units, largest[kind]);
     });
     return row;
   });
@@ -47,7 +59,8 @@ export function defaultLimitQuantity(data: SweepData): number {
   return margin >= 0 ? margin : 0;
 }
 
-/** `names`: the supports' labels by id, to name the lines as the drawing names the supports. */
+/** `names`: the supports' labels by id, to name the lines as the drawing names the supports;
+ *  `family`: the page's force and moment units (a version's page), else the chart's own. */
 export function SweepChart({
   data,
   units,
@@ -55,6 +68,7 @@ export function SweepChart({
   limit,
   run,
   names,
+  family,
 }: {
   data: SweepData;
   units: UnitSystem;
@@ -62,14 +76,15 @@ export function SweepChart({
   limit: { x: number; label: string } | null;
   run: number;
   names?: Readonly<Record<string, string>>;
+  family?: ChartFamily;
 }) {
-  const rows = chartRows(data, units);
+  const rows = chartRows(data, units, family);
   // forces on the left axis; a moment (or a ratio) on its own axis on the right, in its own unit
   const kinds = [...new Set(data.quantities.map((q) => displayKind(q.component)))];
   const axisOf = (s: number) => (displayKind(data.quantities[s].component) === kinds[0] ? "left" : "right");
   const largest = scaleOf(data);
-  const unitOf = (s: number) => displayUnit(data.quantities[s].component, units, largest[displayKind(data.quantities[s].component)]);
-  const leftUnit = displayUnit(data.quantities.find((q) => displayKind(q.component) === kinds[0])?.component ?? "fx", units, largest[kinds[0] ?? "force"]);
+  const unitOf = (s: number) => unitIn(data.quantities[s].component, units, largest, family);
+  const leftUnit = unitIn(data.quantities.find((q) => displayKind(q.component) === kinds[0])?.component ?? "fx", units, largest, family);
   const rightUnits = [...new Set(data.quantities.map((q, s) => (axisOf(s) === "right" ? unitOf(s) : null)).filter((u): u is string => u !== null))];
   const crossingsX = data.crossings.map((c) => {
     const ys = data.series[c.quantity];

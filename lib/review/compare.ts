@@ -7,6 +7,7 @@ import { asDrawnStudy, parseSketch, solve, solveCases, type ParseResult, type So
 import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } from "@/solver/schema";
 import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
 import { stateWord } from "@/solver/report";
+import { describeQuantity } from "@/solver/quantity";
 import type { FieldError } from "@/solver/types";
 import { FOOT_M, LBF_N } from "@/solver/constants";
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
@@ -16,7 +17,9 @@ export type Collection = (typeof COLLECTIONS)[number];
 
 export type ElementRef = { id: string; collection: Collection; kind: string; label: string };
 export type FieldChange = { field: string; before: string | null; after: string | null };
-export type ElementChange = ElementRef & { fields: FieldChange[] };
+/** `kindBefore`: the element's kind before, when it changed (a contact bolted down as a pin), so its
+ *  old fields are named as that kind's form names them. */
+export type ElementChange = ElementRef & { fields: FieldChange[]; kindBefore?: string };
 /** `state` as the file format has it; `word` as the tables say it ("lifts", "slips") */
 export type ReactionSnapshot = { fx: number; fy: number; m: number; resultant: number; n: number | null; state: string; word: string };
 export type ReactionChange = {
@@ -252,8 +255,10 @@ function caseText(c: CaseFile): string {
 const combinationText = (k: CombinationFile) =>
   `${k.name}: ${k.terms.map((t) => `${num(t.factor)} × ${t.case}`).join(" + ")}${k.stability ? `; required ${Object.entries(k.stability).map(([what, v]) => `${num(v)} against ${what}`).join(", ")}` : ""}`;
 
-function sweepText(s: SweepFile): string {
-  const plots = s.quantities?.length ? `; plots ${s.quantities.map((q) => `${q.component} at ${q.support}`).join(", ")}` : "";
+/** A sweep in words; its plotted quantities named as its chart's legend names them, by the supports' labels in `file`. */
+function sweepText(s: SweepFile, file: SketchFile): string {
+  const names = Object.fromEntries(file.supports.map((x) => [x.id, x.label || x.id]));
+  const plots = s.quantities?.length ? `; plots ${s.quantities.map((q) => describeQuantity(q, names)).join(", ")}` : "";
   return `${s.parameter} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case ${s.case}` : ""}${s.combination ? `, combination ${s.combination}` : ""}${plots}`;
 }
 
@@ -262,16 +267,16 @@ function underlayText(u: UnderlayFile): string {
 }
 
 /** Items of a list matched by id: added, removed, or changed (old → new). */
-function listChanges<T extends { id: string }>(what: string, a: T[] | undefined, b: T[] | undefined, text: (x: T) => string): StudyChange[] {
+function listChanges<T extends { id: string }>(what: string, a: T[] | undefined, b: T[] | undefined, text: (x: T, side: "before" | "after") => string): StudyChange[] {
   const out: StudyChange[] = [];
   const before = new Map((a ?? []).map((x) => [x.id, x]));
   const after = new Map((b ?? []).map((x) => [x.id, x]));
   for (const [id, x] of before) {
     const y = after.get(id);
-    if (!y) out.push({ field: `${what} ${id}`, before: text(x), after: null, change: "removed" });
-    else if (!same(x, y)) out.push({ field: `${what} ${id}`, before: text(x), after: text(y), change: "changed" });
+    if (!y) out.push({ field: `${what} ${id}`, before: text(x, "before"), after: null, change: "removed" });
+    else if (!same(x, y)) out.push({ field: `${what} ${id}`, before: text(x, "before"), after: text(y, "after"), change: "changed" });
   }
-  for (const [id, y] of after) if (!before.has(id)) out.push({ field: `${what} ${id}`, before: null, after: text(y), change: "added" });
+  for (const [id, y] of after) if (!before.has(id)) out.push({ field: `${what} ${id}`, before: null, after: text(y, "after"), change: "added" });
   return out;
 }
 
@@ -290,7 +295,7 @@ export function studyChanges(a: SketchFile, b: SketchFile): StudyChange[] {
     if (shown(x) === shown(y)) continue;
     out.push({ field: `required factor against ${k}`, before: shown(x), after: shown(y), change: "changed" });
   }
-  out.push(...listChanges("sweep", a.sweeps, b.sweeps, sweepText));
+  out.push(...listChanges("sweep", a.sweeps, b.sweeps, (s, at) => sweepText(s, at === "before" ? a : b)));
   if (!same(a.underlay, b.underlay)) {
     out.push({
       field: "underlay",
@@ -340,7 +345,8 @@ export function compareSketches(fileA: SketchFile, fileB: SketchFile, units: Uni
     }
     const fields = elementFields(a, b, fa, fb, units);
     if (fields.length) {
-      elements.changed.push({ ...refOf(b), fields });
+      const was = refOf(a).kind;
+      elements.changed.push({ ...refOf(b), ...(was !== refOf(b).kind ? { kindBefore: was } : {}), fields });
       marks.before[id] = "changed";
       marks.after[id] = "changed";
     }

@@ -1,9 +1,9 @@
 // An owner who may not approve a checked version is told why on its sign-off panel: they prepared
 // (or checked) it, and, when no other owner could approve it, how to get someone who can.
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { render, screen, within } from "@testing-library/react";
+import { screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import { SignOffPanel, type SignOffData } from "@/components/review/SignOff";
+import type { SignOffData } from "@/components/review/SignOff";
+import { showSignOff } from "./signoff-support";
 
 const checked = (over: Partial<SignOffData>): SignOffData => ({
   state: "checked",
@@ -14,12 +14,7 @@ const checked = (over: Partial<SignOffData>): SignOffData => ({
   ...over,
 });
 
-const show = (d: SignOffData) =>
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <SignOffPanel data={d} path="/api/sketches/s1/versions/1/signoff" onChanged={() => {}} />
-    </QueryClientProvider>,
-  );
+const show = (d: SignOffData) => showSignOff(d, undefined, 1);
 
 describe("why an owner may not approve a checked version", () => {
   it("the sole owner who prepared it: the reason, and the Members page to make another owner", () => {

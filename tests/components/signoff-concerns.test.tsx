@@ -1,11 +1,11 @@
 // The sign-off dialogs put the version's own findings first — a factor of safety short, a case
 // in which a body is not held — when it is submitted, checked or approved, so nobody takes a step
 // past them unseen; the superseded version's page says why it offers no submit.
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { render, screen, within } from "@testing-library/react";
+import { screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { beforeAll, describe, expect, it } from "vitest";
-import { SignOffPanel, type SignOffData } from "@/components/review/SignOff";
+import type { SignOffData } from "@/components/review/SignOff";
+import { showSignOff } from "./signoff-support";
 import { withModalDialogs } from "./dialog-support";
 
 beforeAll(withModalDialogs);
@@ -19,12 +19,7 @@ const data = (over: Partial<SignOffData>): SignOffData => ({
   ...over,
 });
 
-const show = (d: SignOffData, concerns: string[] = []) =>
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <SignOffPanel data={d} path="/api/sketches/s1/versions/2/signoff" concerns={concerns} onChanged={() => {}} />
-    </QueryClientProvider>,
-  );
+const show = (d: SignOffData, concerns: string[] = []) => showSignOff(d, concerns, 2);
 
 describe("the version's findings in the sign-off dialogs", () => {
   it.each([

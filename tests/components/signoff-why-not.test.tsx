@@ -1,9 +1,9 @@
 // A reader whose role takes the version's next step but who is offered no button is told why, in
 // the rules table's words: the author of a submitted version may not check it (no self-check).
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { render, screen } from "@testing-library/react";
+import { screen } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import { SignOffPanel, whyNoStep, type SignOffData } from "@/components/review/SignOff";
+import { whyNoStep, type SignOffData } from "@/components/review/SignOff";
+import { showSignOff } from "./signoff-support";
 import { SIGN_OFF_RULES } from "@/lib/review/rules";
 
 const submitted = (over: Partial<SignOffData>): SignOffData => ({
@@ -15,12 +15,7 @@ const submitted = (over: Partial<SignOffData>): SignOffData => ({
   ...over,
 });
 
-const show = (d: SignOffData) =>
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <SignOffPanel data={d} path="/api/sketches/s1/versions/3/signoff" onChanged={() => {}} />
-    </QueryClientProvider>,
-  );
+const show = (d: SignOffData) => showSignOff(d, undefined, 3);
 
 describe("why the reader is offered no sign-off step", () => {
   it("an owner who prepared a submitted version: someone else must check it", () => {
