@@ -8,7 +8,7 @@ import { memo, useMemo } from "react";
 import { sweepStateLines } from "@/canvas/studies/display";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
-import { FLOW_FACTOR } from "@/solver/sweep";
+import { sweptName } from "@/lib/review/compare";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { SweepChart, type ChartFamily } from "@/components/studies/SweepChart";
 import { ReportTable } from "@/components/studies/ReportTable";
@@ -25,11 +25,10 @@ function onWords(doc: SketchFile, sw: SweepFile): string {
   return "as drawn";
 }
 
-const parameterName = (sw: SweepFile) => (sw.parameter === FLOW_FACTOR ? "flow factor" : sw.parameter);
 
 /** "the sweep of v from 20 to 45 m/s on case Engine stopped", for a status or an error */
 function sweepWords(doc: SketchFile, sw: SweepFile, unit = ""): string {
-  return `the sweep of ${parameterName(sw)} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)}${unit ? ` ${prettyUnit(unit)}` : ""} ${sw.case || sw.combination ? `on ${onWords(doc, sw)}` : "as drawn"}`;
+  return `the sweep of ${sweptName(sw)} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)}${unit ? ` ${prettyUnit(unit)}` : ""} ${sw.case || sw.combination ? `on ${onWords(doc, sw)}` : "as drawn"}`;
 }
 
 /** What the worker is doing now, in words, for the section's status line. */
@@ -120,7 +119,7 @@ const KeptSweep = memo(function KeptSweep({
   family: ChartFamily | undefined;
   names: Readonly<Record<string, string>>;
 }) {
-  const name = parameterName(sw);
+  const name = sweptName(sw);
   const plot = state?.plot;
   const parameterUnit = plot ? plot.data.unit : drawnUnit;
   const unit = parameterUnit ? ` ${prettyUnit(parameterUnit)}` : "";

@@ -8,6 +8,7 @@ import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } f
 import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
 import { stateWord } from "@/solver/report";
 import { describeQuantity } from "@/solver/quantity";
+import { FLOW_FACTOR } from "@/solver/sweep";
 import type { FieldError } from "@/solver/types";
 import { FOOT_M, LBF_N } from "@/solver/constants";
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
@@ -252,40 +253,59 @@ function caseText(c: CaseFile): string {
   return `${c.name}: ${bits.length ? bits.join(", ") : "as drawn"}`;
 }
 
-const combinationText = (k: CombinationFile) =>
-  `${k.name}: ${k.terms.map((t) => `${num(t.factor)} × ${t.case}`).join(" + ")}${k.stability ? `; required ${Object.entries(k.stability).map(([what, v]) => `${num(v)} against ${what}`).join(", ")}` : ""}`;
+/** A case or combination of `list` by its name, as the Cases tab names it (its id when it has none there). */
+const nameIn = (list: Array<{ id: string; name: string }> | undefined, id: string) => list?.find((x) => x.id === id)?.name ?? id;
+
+const combinationText = (k: CombinationFile, file: SketchFile) =>
+  `${k.name}: ${k.terms.map((t) => `${num(t.factor)} × ${nameIn(file.cases, t.case)}`).join(" + ")}${k.stability ? `; required ${Object.entries(k.stability).map(([what, v]) => `${num(v)} against ${what}`).join(", ")}` : ""}`;
+
+/** The swept parameter as the Sweep tab names it. */
+export const sweptName = (sw: SweepFile) => (sw.parameter === FLOW_FACTOR ? "flow factor" : sw.parameter);
 
 /** A sweep in words; its plotted quantities named as its chart's legend names them, by the supports' labels in `file`. */
 function sweepText(s: SweepFile, file: SketchFile): string {
   const names = Object.fromEntries(file.supports.map((x) => [x.id, x.label || x.id]));
   const plots = s.quantities?.length ? `; plots ${s.quantities.map((q) => describeQuantity(q, names)).join(", ")}` : "";
-  return `${s.parameter} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case ${s.case}` : ""}${s.combination ? `, combination ${s.combination}` : ""}${plots}`;
+  return `${sweptName(s)} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case “${nameIn(file.cases, s.case)}”` : ""}${s.combination ? `, combination “${nameIn(file.combinations, s.combination)}”` : ""}${plots}`;
 }
 
 function underlayText(u: UnderlayFile): string {
   return `upload ${u.upload}, ${num(u.metresPerPixel)} m/px, corner (${num(u.origin[0])}, ${num(u.origin[1])}) m, turned ${num(u.rotation ?? 0)}°, opacity ${num(u.opacity ?? 0.6)}${u.calibration ? `, scale from two marks ${u.calibration.distance} apart` : ""}${u.hidden ? ", hidden" : ""}${u.locked ? ", locked" : ""}`;
 }
 
-/** Items of a list matched by id: added, removed, or changed (old → new). */
-function listChanges<T extends { id: string }>(what: string, a: T[] | undefined, b: T[] | undefined, text: (x: T, side: "before" | "after") => string): StudyChange[] {
+/**
+ * Items of a list matched by id: added, removed, or changed (old → new). Each row is named as the
+ * Cases and Sweep tabs name the item (`name`: its name after the change, or before when removed),
+ * not by the id the file keeps.
+ */
+function listChanges<T extends { id: string }>(
+  what: string,
+  a: T[] | undefined,
+  b: T[] | undefined,
+  text: (x: T, side: "before" | "after") => string,
+  name: (x: T) => string,
+): StudyChange[] {
   const out: StudyChange[] = [];
   const before = new Map((a ?? []).map((x) => [x.id, x]));
   const after = new Map((b ?? []).map((x) => [x.id, x]));
+  const field = (x: T) => `${what} ${name(x)}`;
   for (const [id, x] of before) {
     const y = after.get(id);
-    if (!y) out.push({ field: `${what} ${id}`, before: text(x, "before"), after: null, change: "removed" });
-    else if (!same(x, y)) out.push({ field: `${what} ${id}`, before: text(x, "before"), after: text(y, "after"), change: "changed" });
+    if (!y) out.push({ field: field(x), before: text(x, "before"), after: null, change: "removed" });
+    else if (!same(x, y)) out.push({ field: field(y), before: text(x, "before"), after: text(y, "after"), change: "changed" });
   }
-  for (const [id, y] of after) if (!before.has(id)) out.push({ field: `${what} ${id}`, before: null, after: text(y, "after"), change: "added" });
+  for (const [id, y] of after) if (!before.has(id)) out.push({ field: field(y), before: null, after: text(y, "after"), change: "added" });
   return out;
 }
+
+const quoted = (x: { name: string }) => `“${x.name}”`;
 
 /** What changed in the design studies: cases, combinations, the required factors of safety,
  *  saved sweeps and the underlay. A checker must see a changed required factor. */
 export function studyChanges(a: SketchFile, b: SketchFile): StudyChange[] {
   const out: StudyChange[] = [
-    ...listChanges("case", a.cases, b.cases, caseText),
-    ...listChanges("combination", a.combinations, b.combinations, combinationText),
+    ...listChanges("case", a.cases, b.cases, caseText, quoted),
+    ...listChanges("combination", a.combinations, b.combinations, (k, at) => combinationText(k, at === "before" ? a : b), quoted),
   ];
   for (const k of ["overturning", "sliding"] as const) {
     const x = a.stability?.[k];
@@ -295,7 +315,7 @@ export function studyChanges(a: SketchFile, b: SketchFile): StudyChange[] {
     if (shown(x) === shown(y)) continue;
     out.push({ field: `required factor against ${k}`, before: shown(x), after: shown(y), change: "changed" });
   }
-  out.push(...listChanges("sweep", a.sweeps, b.sweeps, (s, at) => sweepText(s, at === "before" ? a : b)));
+  out.push(...listChanges("sweep", a.sweeps, b.sweeps, (s, at) => sweepText(s, at === "before" ? a : b), (s) => `of ${sweptName(s)}`));
   if (!same(a.underlay, b.underlay)) {
     out.push({
       field: "underlay",

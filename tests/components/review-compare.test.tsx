@@ -60,12 +60,12 @@ describe("changes to the design studies", () => {
     b.underlay = { upload: "u1", width: 800, height: 600, origin: [0, 3], metresPerPixel: 0.005, rotation: 0, opacity: 0.6, locked: true };
     const c = compareSketches(a, b);
     expect(c.studies).toEqual([
-      { field: "case low", before: "Low throw: theta = 15 deg", after: "Low throw: theta = 20 deg", change: "changed" },
-      { field: "case dead", before: "Dead: flow × 0", after: null, change: "removed" },
-      { field: "case high", before: null, after: "High throw: theta = 60 deg", change: "added" },
-      { field: "combination k", before: "Factored: 1.2 × dead", after: "Factored: 1.4 × low", change: "changed" },
+      { field: "case “Low throw”", before: "Low throw: theta = 15 deg", after: "Low throw: theta = 20 deg", change: "changed" },
+      { field: "case “Dead”", before: "Dead: flow × 0", after: null, change: "removed" },
+      { field: "case “High throw”", before: null, after: "High throw: theta = 60 deg", change: "added" },
+      { field: "combination “Factored”", before: "Factored: 1.2 × Dead", after: "Factored: 1.4 × Low throw", change: "changed" },
       { field: "required factor against overturning", before: "1.5 (default)", after: "2", change: "changed" },
-      { field: "sweep sw", before: "theta from 0 to 80, 41 points", after: null, change: "removed" },
+      { field: "sweep of theta", before: "theta from 0 to 80, 41 points", after: null, change: "removed" },
       { field: "underlay", before: null, after: "upload u1, 0.005 m/px, corner (0, 3) m, turned 0°, opacity 0.6, locked", change: "added" },
     ]);
     expect(changeCount(c)).toBe(7);
@@ -78,9 +78,9 @@ describe("changes to the design studies", () => {
     b.combinations = [{ ...a.combinations![0], stability: { overturning: 1 } }];
     b.sweeps = a.sweeps!.map((sw) => ({ ...sw, combination: "k" }));
     expect(compareSketches(a, b).studies).toEqual([
-      { field: "case dead", before: "Dead: flow × 0", after: "Dead: flow × 0, only in combinations", change: "changed" },
-      { field: "combination k", before: "Factored: 1.2 × dead", after: "Factored: 1.2 × dead; required 1 against overturning", change: "changed" },
-      { field: "sweep sw", before: "theta from 0 to 80, 41 points", after: "theta from 0 to 80, 41 points, combination k", change: "changed" },
+      { field: "case “Dead”", before: "Dead: flow × 0", after: "Dead: flow × 0, only in combinations", change: "changed" },
+      { field: "combination “Factored”", before: "Factored: 1.2 × Dead", after: "Factored: 1.2 × Dead; required 1 against overturning", change: "changed" },
+      { field: "sweep of theta", before: "theta from 0 to 80, 41 points", after: "theta from 0 to 80, 41 points, combination “Factored”", change: "changed" },
     ]);
   });
 
