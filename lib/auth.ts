@@ -6,7 +6,7 @@ import { db } from "@/db";
 import { ensurePersonalWorkspace } from "@/db/queries/workspaces";
 import { account, rateLimit, session, user, verification } from "@/db/schema";
 import { recordAudit } from "./audit";
-import { unavailableReason } from "./db-unavailable";
+import { firstReport, unavailableReason } from "./db-unavailable";
 import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp, trustedProxies } from "./env";
 import { sendMailInBackground } from "./mail";
 import { existingAccountMail, passwordResetMail, verificationMail } from "./mail-templates";
@@ -71,16 +71,6 @@ export function checkedName(name: unknown): string {
   throw new APIError("BAD_REQUEST", { code: "INVALID_NAME", field: "name", message: `name: ${message}` });
 }
 
-// Each error already written as "database unavailable", and everything it wraps: better-auth logs a
-// failed session lookup in its route and again in its router's error hook (the second wraps the first).
-const loggedUnavailable = new WeakSet<object>();
-
-function causeChain(err: unknown): object[] {
-  const chain: object[] = [];
-  for (let e = err; e && typeof e === "object" && chain.length < 8 && !chain.includes(e); e = (e as { cause?: unknown }).cause) chain.push(e);
-  return chain;
-}
-
 /**
  * better-auth's log (its `logger.log`). A database out of reach (PostgreSQL down or restarting, the
  * pool busy: lib/db-unavailable.ts) is load, not a bug: one warning line with the driver's words, as
@@ -91,10 +81,7 @@ export function authLog(level: "debug" | "info" | "warn" | "error", message: unk
   for (const arg of [message, ...args]) {
     const reason = unavailableReason(arg);
     if (reason === null) continue;
-    const chain = causeChain(arg);
-    if (chain.some((e) => loggedUnavailable.has(e))) return;
-    for (const e of chain) loggedUnavailable.add(e);
-    console.warn(`[auth] database unavailable (${typeof message === "string" && message ? message : level}): ${reason}`);
+    if (firstReport(arg)) console.warn(`[auth] database unavailable (${typeof message === "string" && message ? message : level}): ${reason}`);
     return;
   }
   const line = `[auth] ${typeof message === "string" ? message : ""}`.trimEnd();

@@ -76,3 +76,20 @@ export async function orBusy<T>(work: Promise<T>): Promise<T> {
     throw asBusy(err);
   }
 }
+
+// Each database-unavailable error already written to the log, and every error it wraps: one failure
+// reaches the log from several places (better-auth's session lookup, its router's error hook, then
+// the route that asked for the session), and one line is enough.
+const reported = new WeakSet<object>();
+
+/**
+ * True the first time a failure is to be logged; false when it, or an error it wraps, was already
+ * (`firstReport` marks the whole chain of causes).
+ */
+export function firstReport(err: unknown): boolean {
+  const chain: object[] = [];
+  for (let e = err; e && typeof e === "object" && chain.length < 8 && !chain.includes(e); e = (e as { cause?: unknown }).cause) chain.push(e);
+  if (chain.some((e) => reported.has(e))) return false;
+  for (const e of chain) reported.add(e);
+  return true;
+}

@@ -2,7 +2,7 @@
 // Nothing else reaches a response: database and library errors become `internal` with a
 // generic message (the details go to the server log).
 import { ZodError } from "zod";
-import { BUSY_MESSAGE, BUSY_RETRY_SECONDS, isDatabaseUnavailable, unavailableReason } from "./db-unavailable";
+import { BUSY_MESSAGE, BUSY_RETRY_SECONDS, firstReport, isDatabaseUnavailable, unavailableReason } from "./db-unavailable";
 
 export const ERROR_STATUS = {
   bad_request: 400,
@@ -148,8 +148,9 @@ export function errorResponse(err: unknown): Response {
   const appError = toAppError(err);
   if (appError.code === "internal" && !(err instanceof AppError)) {
     console.error("[api] unexpected error", err);
-  } else if (appError.code === "unavailable" && !(err instanceof AppError)) {
-    // load, not a bug: one line (the driver's words), not a stack per refused request
+  } else if (appError.code === "unavailable" && !(err instanceof AppError) && firstReport(err)) {
+    // load, not a bug: one line (the driver's words), not a stack per refused request, and none
+    // when the session lookup already wrote this failure (lib/auth.ts authLog)
     console.warn(`[api] database busy, answered 503: ${unavailableReason(err)}`);
   }
   return Response.json(errorBody(appError), { status: appError.status, headers: appError.headers });

@@ -78,6 +78,17 @@ describe("better-auth's log with the database out of reach", () => {
     expect(String(lines[0].args[0])).toMatch(/ECONNREFUSED: connect ECONNREFUSED 127\.0\.0\.1:9$/);
   });
 
+  it("through an API route (the session lookup fails first): a 503 and one line in all, not one from the lookup and one from the route", async () => {
+    const { GET } = await import("@/app/api/workspaces/route");
+    const { appUrl, authSecret } = await import("@/lib/env");
+    const lines = captureConsole();
+
+    const res = await GET(new Request(`${appUrl()}/api/workspaces`, { headers: { cookie: sessionCookie(authSecret(), "a-third-session-token-here") } }), { params: Promise.resolve({}) });
+    expect(res.status).toBe(503);
+    expect(lines.map((l) => [l.level, l.args.length])).toEqual([["warn", 1]]);
+    expect(String(lines[0].args[0])).toMatch(/ECONNREFUSED: connect ECONNREFUSED 127\.0\.0\.1:9$/);
+  });
+
   it("the same failure logged again (the session route, then the router's error hook) is not written twice", async () => {
     const { authLog } = await import("@/lib/auth");
     const lines = captureConsole();
