@@ -20,7 +20,8 @@ export const tagSchema = z
   .string({ error: "A tag is text." })
   .trim()
   .toLowerCase()
-  .min(1, "A tag cannot be empty.")
+  // an empty tag breaks the character rule too; one message says it
+  .min(1, { error: "A tag cannot be empty.", abort: true })
   .max(32, "Keep each tag under 32 characters.")
   .regex(/^[\p{L}\p{N}][\p{L}\p{N} ._/-]*$/u, "Tags are letters, digits, spaces and . _ / -, starting with a letter or digit.");
 

@@ -5,7 +5,8 @@ import { pageTarget } from "@/lib/page-target";
 
 /**
  * What the workspace layout found missing (it answers 404 before the page streams): a workspace,
- * a sketch, or a version of a sketch, in the app's frame. Nothing is drawn when nothing is missing.
+ * a sketch (to a member of its workspace: who deleted it and when), or a version of a sketch, in
+ * the app's frame. Nothing is drawn when nothing is missing.
  */
 export default async function WorkspacesNotFound() {
   const target = await pageTarget();
@@ -16,7 +17,7 @@ export default async function WorkspacesNotFound() {
       {target.kind === "no-workspace" ? (
         <NoSuchWorkspace />
       ) : target.kind === "no-sketch" ? (
-        <NoSuchSketch />
+        <NoSuchSketch deleted={target.deleted ?? null} />
       ) : (
         <NoSuchVersion workspaceId={target.workspaceId} sketchId={target.sketchId} sketchTitle={target.sketchTitle} latest={target.latest} asked={target.asked} here={target.here} />
       )}

@@ -3,17 +3,27 @@ import type { ReactNode } from "react";
 import { CautionFooter } from "@/components/site/CautionFooter";
 import { Wordmark } from "@/components/site/Wordmark";
 
-/** The frame of the signed-out pages: the mark, one card on the drafting grid, the cautions below. */
-export function AuthFrame({ children }: { children: ReactNode }) {
+/**
+ * The frame of the signed-out pages: the mark, one card on the drafting grid, the cautions below.
+ * `signedIn`: the visitor has an account and a session (an invitation's Join page), so the header
+ * leads to their workspaces instead of offering a sketch without an account.
+ */
+export function AuthFrame({ children, signedIn = false }: { children: ReactNode; signedIn?: boolean }) {
   return (
     <div className="flex min-h-screen flex-col">
       <header className="border-b border-rule/70">
         <nav className="mx-auto flex max-w-6xl items-center justify-between px-6 py-4" aria-label="Main">
           <Wordmark />
-          {/* a phone has room beside the mark for the short words only; two lines would crowd it */}
-          <Link href="/sketches/new" className="whitespace-nowrap text-sm font-medium text-ink-soft hover:text-ink">
-            Try a sketch<span className="max-sm:hidden"> without an account</span>
-          </Link>
+          {signedIn ? (
+            <Link href="/workspaces" className="whitespace-nowrap text-sm font-medium text-ink-soft hover:text-ink">
+              Your workspaces
+            </Link>
+          ) : (
+            // a phone has room beside the mark for the short words only; two lines would crowd it
+            <Link href="/sketches/new" className="whitespace-nowrap text-sm font-medium text-ink-soft hover:text-ink">
+              Try a sketch<span className="max-sm:hidden"> without an account</span>
+            </Link>
+          )}
         </nav>
       </header>
       <main className="drafting-grid flex flex-1 items-start justify-center px-4 py-12 md:py-16">{children}</main>

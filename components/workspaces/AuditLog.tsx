@@ -8,7 +8,9 @@ import { auditSentence, type AuditEntry } from "./auditSentence";
 import { formatDateTime } from "./format";
 import Link from "next/link";
 
-type Page = { events: AuditEntry[]; nextBefore: number | null };
+/** `targetDeleted`: the sketch the entry is about has since been deleted (its address is a 404). */
+type LogEntry = AuditEntry & { targetDeleted?: boolean };
+type Page = { events: LogEntry[]; nextBefore: number | null };
 
 /** Where an entry about a sketch leads: its version's page when it names one, else the sketch's
  *  (nothing for a deletion: the sketch is gone). */
@@ -19,8 +21,15 @@ export function entryHref(workspaceId: string, e: AuditEntry): string | null {
   return number !== null && (e.action.startsWith("signoff.") || e.action.startsWith("comment.") || e.action === "sketch.save") ? `${base}/versions/${number}` : base;
 }
 
-function EntryLink({ workspaceId, entry }: { workspaceId: string; entry: AuditEntry }) {
+function EntryLink({ workspaceId, entry }: { workspaceId: string; entry: LogEntry }) {
   const href = entryHref(workspaceId, entry);
+  // a sketch deleted since: its address leads to a 404, so the entry says so instead of offering it
+  if (href && entry.targetDeleted)
+    return (
+      <span className="ml-2 whitespace-nowrap text-xs text-ink-faint" data-testid="audit-since-deleted">
+        since deleted
+      </span>
+    );
   const title = typeof entry.detail?.title === "string" ? entry.detail.title : "the sketch";
   const version = href?.includes("/versions/") ? ` v${String(entry.detail.number)}` : "";
   return href ? (

@@ -7,6 +7,7 @@ import { actorMay } from "./workspaces";
 
 const actorUser = alias(user, "actor_user");
 const targetUser = alias(user, "target_user");
+const deletion = alias(auditEvent, "deletion");
 
 export type AuditRow = {
   id: number;
@@ -17,6 +18,8 @@ export type AuditRow = {
   targetType: string | null;
   targetId: string | null;
   targetName: string | null;
+  /** A sketch entry whose sketch has since been deleted (a `sketch.delete` names it): nothing to open. */
+  targetDeleted: boolean;
   detail: Record<string, unknown>;
 };
 
@@ -54,6 +57,9 @@ export async function listAuditEvents(
       targetType: auditEvent.targetType,
       targetId: auditEvent.targetId,
       targetName: targetUser.name,
+      // one index probe per row (audit_target_idx) in the same query, never a request per row
+      targetDeleted: sql<boolean>`(${auditEvent.targetType} = 'sketch' and exists (select 1 from ${auditEvent} as ${deletion}
+        where ${deletion.targetType} = 'sketch' and ${deletion.targetId} = ${auditEvent.targetId} and ${deletion.action} = 'sketch.delete'))`,
       detail: auditEvent.detail,
     })
     .from(auditEvent)

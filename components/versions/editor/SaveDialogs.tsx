@@ -10,7 +10,8 @@ import { apiFetch, ApiError } from "@/lib/api-client";
 import type { SketchFile } from "@/solver/schema";
 import { Dialog } from "../Dialog";
 
-export type LatestVersion = { number: number; message: string; authorName: string | null; createdAt: string };
+/** `byYou`: the newer version is the user's own save, from another tab or window (or a script). */
+export type LatestVersion = { number: number; message: string; authorName: string | null; createdAt: string; byYou?: boolean };
 /** `sketchTitle`: the sketch's name after the save (it follows the drawing's title when that changed). */
 export type SavedVersion = { number: number; createdAt: string; sketchTitle?: string };
 
@@ -143,10 +144,20 @@ export function ConflictDialog({
   onKeepEditing: () => void;
 }) {
   return (
-    <Dialog open={open} onClose={onKeepEditing} title="Someone saved a newer version" testId="conflict-dialog" wide>
+    <Dialog open={open} onClose={onKeepEditing} title={latest.byYou ? "You saved a newer version elsewhere" : "Someone saved a newer version"} testId="conflict-dialog" wide>
       <div className="space-y-4 text-sm">
         <p className="text-ink">
-          <strong>{latest.authorName ?? "Someone"}</strong> saved <strong>v{latest.number}</strong> on {formatDateTime(latest.createdAt)}, after you opened v{base}
+          {latest.byYou ? (
+            // the user's own save: their own name here would read as a colleague's
+            <>
+              You saved <strong>v{latest.number}</strong> on {formatDateTime(latest.createdAt)} in another tab or window (or a script did, signed in as you), after v{base} was
+              opened here
+            </>
+          ) : (
+            <>
+              <strong>{latest.authorName ?? "Someone"}</strong> saved <strong>v{latest.number}</strong> on {formatDateTime(latest.createdAt)}, after you opened v{base}
+            </>
+          )}
           {latest.message ? (
             <>
               : <q>{latest.message}</q>

@@ -57,7 +57,8 @@ function loadFailure(err: unknown): LoadOutcome {
     return {
       ok: false,
       reason: "not-found",
-      message: SKETCH_NOT_FOUND_MESSAGE,
+      // a member of the workspace it was deleted from is told who deleted it and when (`error.deleted`)
+      message: err.detail.deleted ? err.message : SKETCH_NOT_FOUND_MESSAGE,
     };
   return { ok: false, reason: "unavailable", message: err instanceof ApiError ? err.message : "The sketch could not be loaded. Try again in a moment." };
 }
