@@ -1,7 +1,6 @@
 import "server-only";
 import { db } from "@/db";
-import { forkTitle } from "@/components/sketches/format";
-import { formatDateTime } from "@/components/workspaces/format";
+import { deletionSentence, forkTitle } from "@/components/sketches/format";
 import { deleteSketch, getSketchAccess, getSketchDeletion, getSketchForMember, lockRole, updateSketch } from "@/db/queries/sketches";
 import type { DbOrTx } from "@/db/queries/tx";
 import { getRole } from "@/db/queries/workspaces";
@@ -38,8 +37,7 @@ export async function requireSketchRole(sketchId: string, userId: string, permis
 async function noSketchError(sketchId: string, userId: string): Promise<AppError> {
   const gone = await getSketchDeletion(sketchId, userId);
   if (!gone) return new AppError("not_found", NO_SKETCH);
-  const by = gone.deletedBy ? ` by ${gone.deletedBy}` : "";
-  return new AppError("not_found", `“${gone.title}” was deleted${by} on ${formatDateTime(gone.deletedAt)}, with all its versions. Forks of it keep their own copies.`, {
+  return new AppError("not_found", deletionSentence(gone), {
     extra: { deleted: { title: gone.title, deletedBy: gone.deletedBy, deletedAt: gone.deletedAt, workspaceId: gone.workspaceId } },
   });
 }

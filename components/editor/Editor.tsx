@@ -318,7 +318,8 @@ function useAutosave(store: EditorStore, persistence: SketchPersistence, ready: 
  * `signedOut`: the reader is not signed in, so signing in is the way on (and back to this sketch);
  * a signed-in reader would only be sent back here by the sign-in page, so is offered their workspaces.
  */
-export function SketchUnavailable({ message, signedOut }: { message: string; signedOut: boolean }) {
+/** `back`: the way back when there is a better one than the workspaces list (the workspace a deleted sketch was in). */
+export function SketchUnavailable({ message, signedOut, back }: { message: string; signedOut: boolean; back?: { href: string; label: string } }) {
   const [here] = useState(() => (typeof window === "undefined" ? "/sketches/new" : window.location.pathname + window.location.search));
   return (
     <div className="drafting-grid flex min-h-screen items-center justify-center px-6">
@@ -334,8 +335,8 @@ export function SketchUnavailable({ message, signedOut }: { message: string; sig
               Sign in
             </Link>
           ) : (
-            <Link href="/workspaces" className="rounded-md bg-ink px-3.5 py-1.5 font-medium text-paper hover:bg-ink-soft">
-              Your workspaces
+            <Link href={back?.href ?? "/workspaces"} className="rounded-md bg-ink px-3.5 py-1.5 font-medium text-paper hover:bg-ink-soft">
+              {back?.label ?? "Your workspaces"}
             </Link>
           )}
           <Link href="/sketches/new" className="rounded-md border border-ink/20 px-3.5 py-1.5 font-medium hover:border-ink/40">

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
-import { formatDateTime } from "@/components/workspaces/format";
+import { deletionSentence } from "@/components/sketches/format";
 import { pageTarget, type DeletedSketch } from "@/lib/page-target";
 import { EmptyState, buttonClass } from "./controls";
 
@@ -32,12 +32,6 @@ export function NoSuchWorkspace() {
       It does not exist, or you are not a member of it (any more). If you expected to see it, ask one of its owners to invite you.
     </NotHere>
   );
-}
-
-/** The sentence a member of its workspace reads about a deleted sketch: the API's 404 and this page say the same. */
-export function deletionSentence(gone: { title: string; deletedBy: string | null; deletedAt: Date | string }): string {
-  const by = gone.deletedBy ? ` by ${gone.deletedBy}` : "";
-  return `“${gone.title}” was deleted${by} on ${formatDateTime(gone.deletedAt)}, with all its versions. Forks of it keep their own copies.`;
 }
 
 /**

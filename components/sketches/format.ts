@@ -1,6 +1,7 @@
 // Numbers and words the sketch screens share. Browser-safe.
 import { LBF_N } from "@/solver/constants";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
+import { formatDateTime } from "@/components/workspaces/format";
 
 /** Where the browser keeps the reader's choice of SI or US customary units (editor and review screens). */
 export const UNITS_KEY = "counterpoise:units";
@@ -71,4 +72,11 @@ export function forkTitle(title: string, max = 120): string {
   const base = m ? m[1] : trimmed;
   const suffix = m ? ` (fork ${m[2] ? Number(m[2]) + 1 : 2})` : " (fork)";
   return `${base.slice(0, Math.max(0, max - suffix.length)).trimEnd()}${suffix}`;
+}
+
+/** The sentence a member of its workspace reads about a deleted sketch: the API's 404, the sketch's
+ *  pages and the editor's address say the same. */
+export function deletionSentence(gone: { title: string; deletedBy: string | null; deletedAt: Date | string }): string {
+  const by = gone.deletedBy ? ` by ${gone.deletedBy}` : "";
+  return `“${gone.title}” was deleted${by} on ${formatDateTime(gone.deletedAt)}, with all its versions. Forks of it keep their own copies.`;
 }

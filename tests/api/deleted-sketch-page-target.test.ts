@@ -7,6 +7,8 @@ import { NoSuchSketch } from "@/components/shell/NotHere";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { editorPageDeletion, pageTarget } from "@/lib/page-target";
+import SavedSketchNotFound from "@/app/sketches/[id]/not-found";
+import { SKETCH_NOT_FOUND_MESSAGE } from "@/components/versions/editor/notFound";
 import { PATH_HEADER } from "@/lib/request-path";
 import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
@@ -107,6 +109,19 @@ describe("the editor's address for a deleted sketch", () => {
       asked.path = path;
       expect(await editorPageDeletion()).toMatchObject({ title: "Riser bend", deletedBy: "Olivia Deleter", workspaceId: ws, workspaceName: "Deletions on the page" });
     }
+  });
+
+  it("its page says the API's sentence and leads back to the workspace; anyone else reads the words of a sketch that never was", async () => {
+    asked.path = `/sketches/${id}`;
+    asked.cookie = vera.cookie;
+    const api = await call(sketchRoute.GET, { params: { id }, cookie: vera.cookie });
+    const member = renderToStaticMarkup(await SavedSketchNotFound());
+    expect(/data-testid="unavailable-message">([^<]*)</.exec(member)?.[1]).toBe(api.body.error.message);
+    expect(member).toContain(`href="/workspaces/${ws}">Back to Deletions on the page</a>`);
+    asked.cookie = outsider.cookie;
+    const stranger = renderToStaticMarkup(await SavedSketchNotFound());
+    expect(/data-testid="unavailable-message">([^<]*)</.exec(stranger)?.[1]).toBe(SKETCH_NOT_FOUND_MESSAGE);
+    expect(stranger).toContain('href="/workspaces">Your workspaces</a>');
   });
 
   it("gives nothing to anyone else, nor for a sketch never deleted or another address", async () => {

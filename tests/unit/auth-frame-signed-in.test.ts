@@ -45,3 +45,19 @@ describe("the signed-out pages' header", () => {
     expect(nav).toContain('href="/sketches/new"');
   });
 });
+
+describe("the header of an address the app does not have", () => {
+  const notFoundHeader = async () => {
+    const { default: NotFound } = await import("@/app/not-found");
+    const html = renderToStaticMarkup(await NotFound());
+    return /<nav[^>]*aria-label="Main"[^>]*>([\s\S]*?)<\/nav>/.exec(html)?.[1] ?? "";
+  };
+
+  it("leads a signed-in visitor to their workspaces, and offers a signed-out one a sketch", async () => {
+    signedIn.as = { user: { id: "u1", email: "cho@example.com", name: "Cho Checker" } };
+    expect(await notFoundHeader()).toMatch(/href="\/workspaces"[^>]*>Your workspaces<\/a>/);
+    expect(await notFoundHeader()).not.toContain("without an account");
+    signedIn.as = null;
+    expect(await notFoundHeader()).toContain('href="/sketches/new"');
+  });
+});
