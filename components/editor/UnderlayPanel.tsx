@@ -14,25 +14,44 @@ import { useUnderlayUpload } from "./usePersistence";
 import { UnderlayScale, underlayFieldError } from "./UnderlayScale";
 import { BUTTON, HEADING, INPUT } from "./ui";
 
-/** A number field that commits on Enter or leaving it; takes expressions with units. */
+/**
+ * A number field that commits on Enter or leaving it; takes expressions with units. Nothing typed is
+ * lost: text it cannot read stays in the field when it is left, with its error (which names the
+ * field), until it is put right, Escape puts the value back, or the value changes from elsewhere
+ * (the drawing dragged, replaced or undone). Entering and leaving without a change commits nothing.
+ */
 function ValueField({ label, value, unit, kind, onCommit, disabled, testId }: { label: string; value: number; unit: string; kind: "length" | "angle"; onCommit: (v: number) => void; disabled: boolean; testId: string }) {
   const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
+  // the value under a refused text left in the field: a change of it from elsewhere ends the text
+  const [keptOver, setKeptOver] = useState<number | null>(null);
+  if (keptOver !== null && keptOver !== value) {
+    setKeptOver(null);
+    setDraft(null);
+    setError(null);
+  }
+  // the text the field showed when it was entered: leaving it unchanged moves nothing
+  const shownRef = useRef<string | null>(null);
   const errorId = useId();
-  const commit = () => {
-    if (draft === null) return;
+  /** Reads the draft and commits it; false when it cannot be read (the error is then set). */
+  const commit = (): boolean => {
+    if (draft === null || draft === shownRef.current) return true;
     try {
       const v = evaluateToNumber(/^\s*-?[\d.]+(e-?\d+)?\s*$/i.test(draft) ? `${draft} ${unit}` : draft, kind);
       onCommit(v);
       setError(null);
       setDraft(null);
+      shownRef.current = null;
+      return true;
     } catch (err) {
-      setError(underlayFieldError((err as Error).message, kind));
+      setError(`${label}: ${underlayFieldError((err as Error).message, kind)}`);
+      return false;
     }
   };
   return (
-    <label className="block min-w-0 flex-1 text-[12px] font-medium text-ink-soft">
-      {label}
+    <>
+      <label className="block min-w-0 flex-1 text-[12px] font-medium text-ink-soft">
+        {label}
       <span className="mt-0.5 flex items-center gap-1">
         <input
           className={INPUT}
@@ -42,25 +61,40 @@ function ValueField({ label, value, unit, kind, onCommit, disabled, testId }: { 
           aria-describedby={error ? errorId : undefined}
           title={error ?? undefined}
           data-testid={testId}
-          onFocus={() => setDraft(formatNumber(value, 5))}
+          onFocus={() => {
+            setKeptOver(null);
+            if (draft !== null) return;
+            shownRef.current = formatNumber(value, 5);
+            setDraft(shownRef.current);
+          }}
           onChange={(e) => setDraft(e.target.value)}
           onBlur={() => {
-            commit();
-            setDraft(null);
+            if (commit()) {
+              setDraft(null);
+              setError(null);
+              shownRef.current = null;
+            } else setKeptOver(value);
           }}
           onKeyDown={(e) => {
             if (e.key === "Enter") commit();
-            if (e.key === "Escape") setDraft(null);
+            if (e.key === "Escape") {
+              // back to the value, its error gone with the text that caused it
+              shownRef.current = formatNumber(value, 5);
+              setDraft(shownRef.current);
+              setError(null);
+            }
           }}
         />
         <span className="text-[11.5px] text-ink-faint">{unit === "deg" ? "°" : unit}</span>
       </span>
+      </label>
+      {/* under the row of fields, its whole width (it names its field) */}
       {error ? (
-        <span id={errorId} className="mt-0.5 block text-[11px] font-normal text-caution">
+        <span id={errorId} role="alert" className="order-last block basis-full text-[11px] font-normal leading-snug text-caution">
           {error}
         </span>
       ) : null}
-    </label>
+    </>
   );
 }
 
@@ -163,7 +197,7 @@ export function UnderlayPanel() {
               data-testid="underlay-opacity"
             />
           </label>
-          <div className="flex gap-2">
+          <div className="flex flex-wrap gap-x-2 gap-y-0.5">
             <ValueField label="Top-left x" value={u.origin[0]} unit="m" kind="length" disabled={readOnly || Boolean(u.locked)} onCommit={(v) => apply(moveUnderlay({ to: [v, u.origin[1]] }))} testId="underlay-x" />
             <ValueField label="Top-left y" value={u.origin[1]} unit="m" kind="length" disabled={readOnly || Boolean(u.locked)} onCommit={(v) => apply(moveUnderlay({ to: [u.origin[0], v] }))} testId="underlay-y" />
             <ValueField label="Turn" value={u.rotation ?? 0} unit="deg" kind="angle" disabled={readOnly || Boolean(u.locked)} onCommit={(v) => apply(rotateUnderlay({ rotation: v }))} testId="underlay-rotation" />

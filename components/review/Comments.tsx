@@ -9,7 +9,7 @@ import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import type { Member } from "@/lib/review/comment-text";
 import { pinWords } from "@/lib/review/pin-words";
-import { AttachmentList, attachFiles, FilePicker, removeAttachment, type Attachment } from "./Attachments";
+import { AttachmentList, attachEach, FilePicker, MAX_COMMENT_FILES, removeAttachment, type Attachment, type PendingFile } from "./Attachments";
 import { CommentText } from "./CommentText";
 import type { PickedPin } from "./ReviewDrawing";
 
@@ -148,15 +148,40 @@ function useCommentMutations(commentsPath: string, onChanged: () => void) {
     void qc.invalidateQueries({ queryKey: ["api", "sketches"] });
     onChanged();
   };
+  // files waiting to be attached to a comment, by its id: the ones that failed once it was posted
+  // (with their reasons), or ones chosen by its "Attach files…"; shown under that comment
+  const [waiting, setWaiting] = useState<Record<string, PendingFile[]>>({});
+  const wait = (commentId: string, files: PendingFile[] | null) =>
+    setWaiting((w) => {
+      const next = { ...w };
+      if (files) next[commentId] = files;
+      else delete next[commentId];
+      return next;
+    });
   return {
+    waiting,
+    wait,
     // the comment first, then its files (each attached to the comment that now exists)
     post: useOneAtATime(
       useMutation({
         mutationFn: async ({ files, ...body }: { body: string; pin?: CommentPin | null; parentId?: string; files?: File[] }) => {
           const made = await apiFetch<{ comment: { id: string } }>(commentsPath, { method: "POST", body });
-          return { problems: files?.length ? await attachFiles(made.comment.id, files) : [] };
+          return { commentId: made.comment.id, failed: files?.length ? await attachEach(made.comment.id, files) : [] };
         },
-        onSuccess: done,
+        onSuccess: (out) => {
+          // what failed waits under the comment it was for, with its reasons, to be sent again
+          if (out.failed.length) wait(out.commentId, out.failed);
+          done();
+        },
+      }),
+    ),
+    attach: useOneAtATime(
+      useMutation({
+        mutationFn: ({ commentId, files }: { commentId: string; files: File[] }) => attachEach(commentId, files),
+        onSuccess: (failed, v) => {
+          wait(v.commentId, failed.length ? failed : null);
+          done();
+        },
       }),
     ),
     unattach: useOneAtATime(useMutation({ mutationFn: removeAttachment, onSuccess: done })),
@@ -168,7 +193,12 @@ function useCommentMutations(commentsPath: string, onChanged: () => void) {
 function OneComment({ c, viewerId, members, writable, m }: { c: CommentItem; viewerId: string; members: Member[]; writable: boolean; m: ReturnType<typeof useCommentMutations> }) {
   const [editing, setEditing] = useState(false);
   const [text, setText] = useState(c.body);
+  // as the server allows (lib/uploads/service.ts attachable): its author, not deleted, not approved
   const mine = c.authorId === viewerId && !c.deleted && writable;
+  const waiting = mine ? m.waiting[c.id] : undefined;
+  const room = MAX_COMMENT_FILES - (c.attachments?.length ?? 0);
+  // the box appeared on "Attach files…": the browser's chooser opens at once
+  const [choosing, setChoosing] = useState(false);
   return (
     <li className="space-y-1" data-testid="comment">
       <p className="text-xs text-ink-faint">
@@ -193,11 +223,51 @@ function OneComment({ c, viewerId, members, writable, m }: { c: CommentItem; vie
         <CommentText text={c.body} members={members} />
       )}
       {!c.deleted ? <AttachmentList files={c.attachments ?? []} onRemove={mine ? (a) => m.unattach.mutate(a) : undefined} /> : null}
+      {waiting ? (
+        <div role="group" aria-label="Attach files to this comment" className="space-y-1.5 rounded border border-rule-soft bg-paper p-2" data-testid={`attach-${c.id}-waiting`}>
+          <FilePicker
+            id={`attach-${c.id}`}
+            files={waiting.map((w) => w.file)}
+            problems={new Map(waiting.flatMap((w) => (w.problem ? [[w.file, w.problem] as const] : [])))}
+            max={room}
+            addLabel="Add files…"
+            openOnMount={choosing}
+            onChange={(files) => m.wait(c.id, files.map((f) => waiting.find((w) => w.file === f) ?? { file: f }))}
+          />
+          <div className="flex gap-2">
+            <Button size="sm" busy={m.attach.isPending} disabled={!waiting.length} onClick={() => m.attach.mutate({ commentId: c.id, files: waiting.map((w) => w.file) })}>
+              {waiting.length ? `Attach ${waiting.length} file${waiting.length === 1 ? "" : "s"}` : "Attach"}
+            </Button>
+            <Button
+              size="sm"
+              tone="quiet"
+              onClick={() => {
+                m.wait(c.id, null);
+                setChoosing(false);
+              }}
+            >
+              Cancel
+            </Button>
+          </div>
+        </div>
+      ) : null}
       {mine && !editing ? (
         <p className="flex gap-3 text-xs">
           <button type="button" className="text-ink-soft hover:text-ink" onClick={() => setEditing(true)}>
             Edit
           </button>
+          {!waiting && room > 0 ? (
+            <button
+              type="button"
+              className="text-ink-soft hover:text-ink"
+              onClick={() => {
+                setChoosing(true);
+                m.wait(c.id, []);
+              }}
+            >
+              Attach files…
+            </button>
+          ) : null}
           <button type="button" className="text-ink-soft hover:text-accent-deep" onClick={() => window.confirm("Delete this comment?") && m.remove.mutate(c.id)}>
             Delete
           </button>
@@ -295,8 +365,10 @@ export function CommentsPanel({
   const m = useCommentMutations(commentsPath, onChanged);
   const [text, setText] = useState("");
   const [files, setFiles] = useState<File[]>([]);
-  const err = [m.post.error, m.patch.error, m.remove.error, m.unattach.error].find((e) => e instanceof ApiError) as ApiError | undefined;
-  const attachProblems = m.post.data?.problems ?? [];
+  const err = [m.post.error, m.patch.error, m.remove.error, m.unattach.error, m.attach.error].find((e) => e instanceof ApiError) as ApiError | undefined;
+  // the files of the comment just posted that did not attach, while they still wait under it
+  const posted = m.post.data?.commentId;
+  const attachProblems = posted ? (m.waiting[posted] ?? []).flatMap((f) => (f.problem ? [f.problem] : [])) : [];
   const open = data.threads.filter((t) => !t.resolvedAt).length;
   // Escape gives up pinning, wherever the focus is
   useEffect(() => {
@@ -370,6 +442,7 @@ export function CommentsPanel({
               <li key={p}>{p}</li>
             ))}
           </ul>
+          <p className="mt-1">They wait under the comment: attach them again from there, or take them off.</p>
         </Notice>
       ) : null}
       <p className="text-xs text-ink-faint">

@@ -5,6 +5,7 @@ import { render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { CommentsPanel, mentionQuery, type CommentsData } from "@/components/review/Comments";
+import { commentsPanelProps } from "./comments-support";
 
 const data: CommentsData = {
   threads: [],
@@ -20,21 +21,7 @@ const data: CommentsData = {
 function show() {
   return render(
     <QueryClientProvider client={new QueryClient({ defaultOptions: { mutations: { retry: false } } })}>
-      <CommentsPanel
-        data={data}
-        commentsPath="/api/sketches/s1/versions/1/comments"
-        viewerId="u-chen"
-        labels={{}}
-        pin={null}
-        picking={false}
-        onPicking={() => {}}
-        onClearPin={() => {}}
-        onPin={() => {}}
-        selected={null}
-        onSelect={() => {}}
-        onChanged={() => {}}
-        versionHref={(n) => `/v/${n}`}
-      />
+      <CommentsPanel {...commentsPanelProps(data)} />
     </QueryClientProvider>,
   );
 }
