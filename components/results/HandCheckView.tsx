@@ -7,13 +7,14 @@ import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
 import { columnUnit, HAND_CHECK_FIGURES, handCheckNumber, handCheckScale, handCheckTable, unitFamily, type Scale } from "@/solver/report";
 import { downloadCsv, useCsvName } from "@/components/studies/csv";
 import { convert, type UnitSystem } from "@/solver/units";
-import type { Vec2 } from "@/solver/types";
+import type { Status, Vec2 } from "@/solver/types";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { BUTTON, INPUT } from "@/components/editor/ui";
 import { useActionRunner } from "@/components/editor/useActions";
 import { useResultScale } from "./useHeldScale";
 import { defaultMomentPoint, handCheckBlocks, handCheckText, type HandCheckBlock, type HandCheckLine } from "./handCheck";
 import { StabilityCheck } from "./StabilityCheck";
+import { STALE_CSV } from "./staleCsv";
 import { stabilityLines } from "./stabilityCheck";
 
 /**
@@ -25,11 +26,11 @@ export function parseLength(text: string, units: UnitSystem): number {
   return typeof v === "number" ? v / convert(1, "length", units).value : toFieldNumber(v, "length");
 }
 
-function Block({ b, units, unit, scale }: { b: HandCheckBlock; units: UnitSystem; unit: string; scale: Scale }) {
+function Block({ b, units, unit, scale, status }: { b: HandCheckBlock; units: UnitSystem; unit: string; scale: Scale; status?: Status }) {
   // every number of the check by one rule (4 significant figures, trailing zeros kept): the points too
   const len = (v: number) => handCheckNumber(convert(v, "length", units).value);
   const lenUnit = convert(1, "length", units).unit;
-  const text = handCheckText(b, scale, (v) => convert(v, b.key === "m" ? "moment" : "force", units, unit).value, unit);
+  const text = handCheckText(b, scale, (v) => convert(v, b.key === "m" ? "moment" : "force", units, unit).value, unit, status);
   // where a term acts, in the moment block: r × F (or r × ṁV) is then a line a checker can redo;
   // "acting at", as a label may end in a place of its own ("pressure at “from pump”")
   const where = (t: HandCheckLine) =>
@@ -71,7 +72,8 @@ function Block({ b, units, unit, scale }: { b: HandCheckBlock; units: UnitSystem
           </li>
         ))}
         <li className="flex justify-between gap-2 pt-0.5 font-semibold">
-          <span>= Σ(ṁV)out − Σ(ṁV)in</span>
+          {/* the moment block's momentum side is the moments of the flux about P, not the flux */}
+          <span>{b.key === "m" ? "= Σ r × (ṁV)out − Σ r × (ṁV)in" : "= Σ(ṁV)out − Σ(ṁV)in"}</span>
           <span className="num" data-testid="momentum-sum">
             {text.momentumSum}
           </span>
@@ -201,6 +203,8 @@ export function HandCheckView() {
         <button
           type="button"
           className={`${BUTTON} ml-auto`}
+          disabled={stale}
+          title={stale ? STALE_CSV : undefined}
           aria-label="Download the hand check as CSV"
           onClick={() => shown && downloadCsv(handCheckTable(shown, body.id, about, units, { name: body.label?.trim() || body.id, scale }), csvName(`hand-check-${body.id}`))}
         >
@@ -215,7 +219,7 @@ export function HandCheckView() {
       <div className={`@container ${stale ? "opacity-60" : ""}`} data-testid="hand-sums" data-stale={stale || undefined}>
         <div className="grid grid-cols-1 gap-x-4 gap-y-3 @4xl:grid-cols-3">
           {blocks.map((b) => (
-            <Block key={b.key} b={b} units={units} unit={unitsOfSums[b.key]} scale={size ?? { force: 0, moment: 0 }} />
+            <Block key={b.key} b={b} units={units} unit={unitsOfSums[b.key]} scale={size ?? { force: 0, moment: 0 }} status={shown?.bodies[body.id]?.status} />
           ))}
         </div>
         {factors && <StabilityCheck lines={factors} units={units} force={unitsOfSums.fx} moment={unitsOfSums.m} />}

@@ -14,6 +14,7 @@ import { CautionsAside, CautionsLine } from "./CautionsAside";
 import { HandCheckView } from "./HandCheckView";
 import { ReactionsTable, type Sense } from "./ReactionsTable";
 import { StatusBanner } from "./StatusBanner";
+import { STALE_CSV } from "./staleCsv";
 import { useResultScale } from "./useHeldScale";
 
 type Tab = "reactions" | "hand" | "cases" | "sweep";
@@ -257,11 +258,14 @@ function ReactionsCsv({ sense }: { sense: Sense }) {
   const units = useEditor((s) => s.units);
   const sketch = useEditor((s) => s.sketch);
   const scale = useResultScale();
+  // the result shown is an earlier sketch's: a file carries no fading, so none is offered
+  const stale = useAnalysis((s) => s.stale);
   return (
     <button
       type="button"
       className="order-last ml-2 pb-1 text-[12px] text-ink-soft hover:text-ink disabled:opacity-40 pointer-coarse:min-h-10 pointer-coarse:min-w-10"
-      disabled={!shown}
+      disabled={!shown || stale}
+      title={stale ? STALE_CSV : undefined}
       aria-label="Download the reactions as CSV"
       // the supports by their labels, as the table on screen names them
       onClick={() => shown && downloadCsv(reactionTable(shown, units, { onSupport: sense === "support", names: elementNames(sketch), scale }), csvName(sense === "support" ? "loads-on-supports" : "reactions"))}

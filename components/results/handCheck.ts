@@ -2,7 +2,7 @@
 // sum of labelled terms on the control volume, set against the momentum flux out minus in.
 import { handCheckSums, termMomentAbout } from "@/solver/equations";
 import { HAND_CHECK_FIGURES, handCheckClean, handCheckDifferenceText, handCheckNumber, handCheckSides, type Scale } from "@/solver/report";
-import type { BodyEquations, EquationTerm, Vec2 } from "@/solver/types";
+import type { BodyEquations, EquationTerm, Status, Vec2 } from "@/solver/types";
 
 export interface HandCheckLine {
   id: string;
@@ -77,8 +77,10 @@ export interface HandCheckText {
  * against which floating-point noise is told from a figure; `show` converts an SI value to the unit.
  * Each Σ is of the unrounded terms; two sums that differ by rounding only print alike (see
  * `handCheckSides`), and their difference is said to be rounding, never a bare 0 beside them.
+ * `status` is the body's: one that tips balances only with a support giving what it cannot (a contact
+ * pulling), so two sides that agree are never said to agree without saying the body is not held.
  */
-export function handCheckText(b: HandCheckBlock, scale: Scale, show: (si: number) => number, unit: string): HandCheckText {
+export function handCheckText(b: HandCheckBlock, scale: Scale, show: (si: number) => number, unit: string, status?: Status): HandCheckText {
   const figure = (si: number) => `${handCheckNumber(show(handCheckClean(si, scale)))} ${unit}`;
   const sides = handCheckSides(b.forcesSum, b.momentumSum, b.imbalance, scale);
   const forcesSum = `${handCheckNumber(show(sides.forces))} ${unit}`;
@@ -90,8 +92,10 @@ export function handCheckText(b: HandCheckBlock, scale: Scale, show: (si: number
     momentumSum,
     difference: handCheckDifferenceText(show(sides.difference), sides.rounding, unit),
     verdict:
-      forcesSum === momentumSum
-        ? `the two sides agree to ${HAND_CHECK_FIGURES} significant figures`
-        : "the two sides differ: the body is not in equilibrium on its supports as drawn",
+      forcesSum !== momentumSum
+        ? "the two sides differ: the body is not in equilibrium on its supports as drawn"
+        : status === "tips" || status === "unrestrained"
+          ? `the two sides agree to ${HAND_CHECK_FIGURES} significant figures only with the reactions equilibrium would need: the body is not held (it ${status === "tips" ? "tips" : "is free to move"}), a support here would have to give a force it cannot`
+          : `the two sides agree to ${HAND_CHECK_FIGURES} significant figures`,
   };
 }
