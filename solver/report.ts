@@ -8,7 +8,7 @@ import { FIELD_UNIT_LABELS, kindOfUnit } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
 import type { BodyStability } from "./stability";
-import type { SolveResult, Vec2 } from "./types";
+import type { SolveResult, Status, Vec2 } from "./types";
 import { formatFigures, formatTiny } from "./quantity";
 import { convert, formatNumber, formatQuantity, prettyUnit, unitsFor, type Quantity, type UnitSystem } from "./units";
 import { gravityActs, overMu } from "./words";
@@ -660,8 +660,19 @@ export function handCheckDifferenceText(shown: number, rounding: boolean, unit =
 
 /** The hand check: every term with its components, point of action and moment about `about`.
  *  `opts.scale`: the units of a larger whole (the calc sheet's, the panel's held ones), else the whole result's (`resultScale`). */
+/**
+ * What two sides of a hand check that agree are worth for a body that is not held (it tips, or is
+ * free to move): they balance only with a support giving a force it cannot (a contact pulling), so
+ * the panel and the calc sheet never say "agree" without saying so; "" for a body that is held.
+ */
+export function notHeldAgreement(status: Status | undefined): string {
+  if (status !== "tips" && status !== "unrestrained") return "";
+  return ` only with the reactions equilibrium would need: the body is not held (it ${status === "tips" ? "tips" : "is free to move"}), a support here would have to give a force it cannot`;
+}
+
 export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2, system: UnitSystem, opts: { scale?: Scale; name?: string } = {}): Table {
   const eq = result.equations[bodyId];
+  const notHeld = notHeldAgreement(result.bodies[bodyId]?.status);
   const sums = handCheckSums(eq, about);
   // its own scale says what is floating-point noise; the units may be the sheet's
   const scale = handCheckScale(eq, about);
@@ -728,7 +739,7 @@ export function handCheckTable(result: SolveResult, bodyId: string, about: Vec2,
       `Every number to ${HAND_CHECK_FIGURES} significant figures. Each Σ adds the unrounded terms, so it may differ in its last figure from the printed terms added up.`,
       ...(agree.length
         ? [
-            `The two sides agree to ${HAND_CHECK_FIGURES} significant figures in ${list(agree.map((k) => name[k]))}${rounded.length ? `; a difference marked “rounding” is floating-point noise of the sums (below a billionth of the largest value), not a figure of the check` : ""}.`,
+            `The two sides agree to ${HAND_CHECK_FIGURES} significant figures in ${list(agree.map((k) => name[k]))}${notHeld}${rounded.length ? `; a difference marked “rounding” is floating-point noise of the sums (below a billionth of the largest value), not a figure of the check` : ""}.`,
           ]
         : []),
       ...differ.map((k) => `${name[k]}: the two sides differ by ${fmt(sides[k].difference, qOf(k))}; the body is not in equilibrium on its supports as drawn.`),

@@ -1,7 +1,7 @@
 // The hand check as lines a person can follow: ΣFx, ΣFy and ΣM about a chosen point, each the
 // sum of labelled terms on the control volume, set against the momentum flux out minus in.
 import { handCheckSums, termMomentAbout } from "@/solver/equations";
-import { HAND_CHECK_FIGURES, handCheckClean, handCheckDifferenceText, handCheckNumber, handCheckSides, type Scale } from "@/solver/report";
+import { HAND_CHECK_FIGURES, handCheckClean, handCheckDifferenceText, handCheckNumber, handCheckSides, notHeldAgreement, type Scale } from "@/solver/report";
 import type { BodyEquations, EquationTerm, Status, Vec2 } from "@/solver/types";
 
 export interface HandCheckLine {
@@ -94,8 +94,6 @@ export function handCheckText(b: HandCheckBlock, scale: Scale, show: (si: number
     verdict:
       forcesSum !== momentumSum
         ? "the two sides differ: the body is not in equilibrium on its supports as drawn"
-        : status === "tips" || status === "unrestrained"
-          ? `the two sides agree to ${HAND_CHECK_FIGURES} significant figures only with the reactions equilibrium would need: the body is not held (it ${status === "tips" ? "tips" : "is free to move"}), a support here would have to give a force it cannot`
-          : `the two sides agree to ${HAND_CHECK_FIGURES} significant figures`,
+        : `the two sides agree to ${HAND_CHECK_FIGURES} significant figures${notHeldAgreement(status)}`,
   };
 }
