@@ -6,11 +6,14 @@ import type { EditorStores } from "./context";
 import type { EditorStore, Tool } from "./store";
 import type { PointerController } from "./konva/pointer";
 import type { Command } from "./commands/define";
-import { deleteElements, duplicateElements, pasteElements } from "./commands/elements";
+import { deleteElements, deletionEffects, duplicateElements, pasteElements } from "./commands/elements";
+import type { SketchFile } from "@/solver/schema";
 import { copyFragment, fragmentText, pasteNotice, planPaste, readFragment } from "./clipboard";
-import { moveElement } from "./commands/move";
+import { moveElement, replacedWords } from "./commands/move";
 import { rotateElement } from "./commands/shape";
-import { describeElement, DIRECTED, findElement, GROUPS, KIND_LABEL, type ElementKind } from "./model/elements";
+import { describeElement, DIRECTED, findElement, GROUPS, KIND_LABEL, withAttached, type ElementKind } from "./model/elements";
+import { plural } from "./commands/define";
+import { FLOW_FACTOR } from "@/solver/sweep";
 import { anchorOf } from "./scene";
 import { polygonAround, rectangleAround } from "./model/factory";
 import { valueLookup } from "./analysis/store";
@@ -130,6 +133,12 @@ function addBodyNow(ctx: ActionContext, shape: "rectangle" | "polygon") {
   );
 }
 
+/** After a nudge or a turn: say which expressions it wrote as numbers, and what no longer follows them. */
+function sayReplaced(ctx: ActionContext, before: SketchFile, ids: readonly string[]) {
+  const words = replacedWords(before, ed(ctx).sketch, ids);
+  if (words) ed(ctx).notify(words);
+}
+
 function nudge(id: string, label: string, key: string, d: Vec2, far: boolean): Action {
   return {
     id,
@@ -140,7 +149,7 @@ function nudge(id: string, label: string, key: string, d: Vec2, far: boolean): A
     run: (ctx) => {
       const s = ed(ctx);
       const step = gridStep(s.view.scale) * (far ? 10 : 1);
-      s.apply(moveElement({ ids: s.selection, delta: [d[0] * step, d[1] * step], lookup: valueLookup(ctx.stores.analysis) }) as Command<unknown>);
+      if (s.apply(moveElement({ ids: s.selection, delta: [d[0] * step, d[1] * step], lookup: valueLookup(ctx.stores.analysis) }) as Command<unknown>)) sayReplaced(ctx, s.sketch, s.selection);
     },
   };
 }
@@ -161,7 +170,7 @@ function turn(id: string, label: string, key: string, by: number): Action {
       const item = ctx.stores.scene.getState().byId.get(id0);
       if (!item || !("angle" in item)) return;
       const angle = Math.round(((item.angle as number) + by) / 5) * 5;
-      s.apply(rotateElement({ id: id0, angle, magnitude: item.kind === "force" ? item.magnitude : undefined }) as Command<unknown>);
+      if (s.apply(rotateElement({ id: id0, angle, magnitude: item.kind === "force" ? item.magnitude : undefined }) as Command<unknown>)) sayReplaced(ctx, s.sketch, [id0]);
     },
   };
 }
@@ -210,7 +219,11 @@ export const ACTIONS: readonly Action[] = [
     group: "edit",
     shortcuts: ["Delete", "Backspace"],
     enabled: hasSelection,
-    run: (c) => ed(c).apply(deleteElements({ ids: ed(c).selection }) as Command<unknown>),
+    run: (c) => {
+      const s = ed(c);
+      const also = deletionWords(s.sketch, s.selection);
+      if (s.apply(deleteElements({ ids: s.selection }) as Command<unknown>) && also) s.notify(`Deleted ${plural(withAttached(s.sketch, s.selection).size, "element")}.${also}`);
+    },
   },
   {
     id: "edit.duplicate",
@@ -364,6 +377,25 @@ export function actionTitle(id: string, label?: string): string {
   return key ? `${label ?? a.label} (${shortcutLabel(key)})` : (label ?? a.label);
 }
 
+/**
+ * What a delete does to the kept sweeps, for the status line (empty when it touches none): " The
+ * kept sweep of p from 0 to 10 no longer plots front; … Undo brings them back."
+ */
+export function deletionWords(sketch: SketchFile, ids: readonly string[]): string {
+  const { sweepsChanged, sweepsRemoved } = deletionEffects(sketch, ids);
+  if (!sweepsChanged.length && !sweepsRemoved.length) return "";
+  const gone = withAttached(sketch, [...ids]);
+  const nameOf = (id: string) => findElement(sketch, id)?.el.label || id;
+  const parts = (sketch.sweeps ?? []).flatMap((w) => {
+    const what = `the kept sweep of ${w.parameter === FLOW_FACTOR ? "flow factor" : w.parameter} from ${w.from} to ${w.to}`;
+    const names = [...new Set((w.quantities ?? []).filter((q) => gone.has(q.support)).map((q) => nameOf(q.support)))].join(" and ");
+    if (sweepsRemoved.includes(w.id)) return [`${what} plotted only ${names} and is gone`];
+    return sweepsChanged.includes(w.id) ? [`${what} no longer plots ${names}`] : [];
+  });
+  const text = parts.join("; ");
+  return ` ${text[0].toUpperCase()}${text.slice(1)}. Undo brings them back.`;
+}
+
 // ---------------------------------------------------------------- clipboard
 
 const PASTE_BY_KEYS = "The browser did not let the page read the clipboard: press Ctrl+V (⌘V) to paste.";
@@ -374,8 +406,9 @@ export function copySelection(ctx: ActionContext, cut: boolean): string | null {
   const fragment = copyFragment(s.sketch, s.selection);
   if (!fragment) return null;
   const n = GROUPS.reduce((t, g) => t + fragment[g].length, 0);
+  const also = cut ? deletionWords(s.sketch, s.selection) : "";
   if (cut && !s.apply(deleteElements({ ids: s.selection }) as Command<unknown>)) return null;
-  s.notify(`${cut ? "Cut" : "Copied"} ${n} element${n === 1 ? "" : "s"}: paste them here or in another sketch.`);
+  s.notify(`${cut ? "Cut" : "Copied"} ${n} element${n === 1 ? "" : "s"}: paste them here or in another sketch.${also}`);
   return fragmentText(fragment);
 }
 

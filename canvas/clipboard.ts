@@ -6,6 +6,7 @@ import { compileExpression } from "@/solver/expressions";
 import { CURRENT_VERSION, FORMAT, type Numeric, type SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
 import { resolveSketch } from "@/solver/resolve";
+import { relabelCopies } from "./commands/elements";
 import { shiftElement, type ValueOf } from "./commands/move";
 import { checkSketchJson } from "./files";
 import { fieldValuesById } from "./scene";
@@ -185,6 +186,7 @@ export function planPaste(target: SketchFile, fragment: Fragment, opts: { attach
     }
     return { group, el: moved };
   });
+  relabelCopies(target, copies);
 
   const own = target.parameters ?? {};
   const parameters: Record<string, Numeric> = {};

@@ -25,6 +25,18 @@ export const addElement = defineCommand<{ kind: ElementKind; element: AnyElement
   select: (before, after) => newIds(before, after),
 });
 
+/**
+ * What deleting elements does to the kept sweeps: a sweep that plots a deleted support stops
+ * plotting it, and one left plotting nothing goes (as removing a case takes the sweeps run on it).
+ * A sweep with no list of its own plots every support there is, and is left as it is.
+ */
+export function deletionEffects(sketch: SketchFile, ids: readonly string[]): { sweepsChanged: string[]; sweepsRemoved: string[] } {
+  const gone = withAttached(sketch, [...ids]);
+  const hit = (sketch.sweeps ?? []).filter((w) => w.quantities?.some((q) => gone.has(q.support)));
+  const removed = hit.filter((w) => w.quantities!.every((q) => gone.has(q.support))).map((w) => w.id);
+  return { sweepsChanged: hit.map((w) => w.id).filter((id) => !removed.includes(id)), sweepsRemoved: removed };
+}
+
 export const deleteElements = defineCommand<{ ids: string[] }>({
   name: "deleteElements",
   label: ({ ids }, sketch) => `Delete ${plural(withAttached(sketch, ids).size, "element")}`,
@@ -32,17 +44,47 @@ export const deleteElements = defineCommand<{ ids: string[] }>({
   run: (sketch, { ids }) => {
     const gone = withAttached(sketch, ids);
     if (!gone.size) return sketch;
+    const { sweepsChanged, sweepsRemoved } = deletionEffects(sketch, ids);
     return edit(sketch, (d) => {
       for (const g of Object.keys(GROUP_NAMES) as Group[]) {
         const list = d[g] as AnyElement[];
         if (list.some((e) => gone.has(e.id))) d[g] = list.filter((e) => !gone.has(e.id)) as never;
       }
+      if (!sweepsChanged.length && !sweepsRemoved.length) return;
+      const sweeps = (sketch.sweeps ?? [])
+        .filter((w) => !sweepsRemoved.includes(w.id))
+        .map((w) => (sweepsChanged.includes(w.id) ? { ...w, quantities: w.quantities!.filter((q) => !gone.has(q.support)) } : w));
+      if (sweeps.length) d.sweeps = sweeps;
+      else delete d.sweeps;
     });
   },
   select: (_b, after, _a, selection) => selection.filter((id) => findElement(after, id)),
 });
 
 const GROUP_NAMES: Record<Group, true> = { bodies: true, supports: true, loads: true, ports: true, massSources: true };
+
+/** A copy's label: its own when no element has it yet, else the next free number ("Body 1" → "Body 2", "Front foot" → "Front foot 2"). */
+export function freshLabel(label: string, taken: ReadonlySet<string>): string {
+  if (!taken.has(label)) return label;
+  const m = /^(.*?)\s*(\d+)$/.exec(label);
+  const stem = m ? m[1] : label;
+  for (let n = m ? Number(m[2]) + 1 : 2; ; n++) if (!taken.has(`${stem} ${n}`)) return `${stem} ${n}`;
+}
+
+/** The labels every element of the sketch has. */
+export function labelsIn(sketch: SketchFile): Set<string> {
+  return new Set([...elementIndex(sketch).values()].map((l) => l.el.label).filter((x): x is string => !!x));
+}
+
+/** Copies given labels no element of the sketch (or an earlier copy) has already; changes them in place. */
+export function relabelCopies(sketch: SketchFile, copies: ReadonlyArray<{ el: AnyElement }>): void {
+  const taken = labelsIn(sketch);
+  for (const c of copies) {
+    if (!c.el.label) continue;
+    c.el.label = freshLabel(c.el.label, taken);
+    taken.add(c.el.label);
+  }
+}
 
 /** The copies a duplicate makes: bodies bring their elements along. Deterministic, so `select` can replay it. */
 export function planDuplicate(sketch: SketchFile, ids: readonly string[], offset: Vec2, lookup?: ValueOf) {
@@ -72,6 +114,7 @@ export function planDuplicate(sketch: SketchFile, ids: readonly string[], offset
     for (const c of childrenOf(sketch, id)) if (!copyOf.has(c.el.id)) copy(c.el.id, nid);
   }
   for (const id of chosen) if (!copyOf.has(id)) copy(id);
+  relabelCopies(sketch, copies);
   return { copies, copyOf, chosen };
 }
 

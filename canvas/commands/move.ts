@@ -84,3 +84,65 @@ export function bodyOf(sketch: SketchFile, id: string): string | undefined {
   const l = findElement(sketch, id);
   return l && l.group !== "bodies" ? (l.el as Attached).body : undefined;
 }
+
+/** A field of an element that was an expression and that a turn or a move wrote as a number. */
+export interface ReplacedExpression {
+  id: string;
+  /** the field's name in the file: "angle", "at", "outline", "from", "to", "cg", "fx", "fy" */
+  field: string;
+  was: string;
+  /** the sketch's parameters the expression read */
+  parameters: string[];
+}
+
+/** The expressions of the given elements (and what sits on them) that `after` holds as numbers instead. */
+export function expressionsReplaced(before: SketchFile, after: SketchFile, ids: readonly string[]): ReplacedExpression[] {
+  if (before === after) return [];
+  const params = Object.keys(before.parameters ?? {});
+  const out: ReplacedExpression[] = [];
+  for (const id of withAttached(before, [...ids])) {
+    const was = findElement(before, id);
+    const now = findElement(after, id);
+    if (!was || !now) continue;
+    for (const [field, v] of Object.entries(was.el as Record<string, unknown>)) {
+      if (field === "id" || field === "label" || field === "body" || field === "kind") continue;
+      const exprs = new Set<string>();
+      const walk = (a: unknown, b: unknown) => {
+        if (Array.isArray(a)) a.forEach((x, i) => walk(x, Array.isArray(b) ? b[i] : undefined));
+        else if (typeof a === "string" && typeof b === "number" && plainNumber(a) === undefined) exprs.add(a);
+      };
+      walk(v, (now.el as Record<string, unknown>)[field]);
+      if (!exprs.size) continue;
+      const text = [...exprs].join(", ");
+      const read = params.filter((p) => new RegExp(`(?<![A-Za-z0-9_.])${p}(?![A-Za-z0-9_])`).test(text));
+      out.push({ id, field, was: text, parameters: read });
+    }
+  }
+  return out;
+}
+
+const FIELD_WORDS: Record<string, string> = { angle: "direction", at: "position", outline: "corners", from: "start", to: "end", cg: "centre of gravity", fx: "x component", fy: "y component" };
+
+/**
+ * What a turn or a move did to expressions, for the status line (two lines; empty when it replaced
+ * none): "Lance tip's direction is now a number, not “theta”: 3 cases and the kept sweep that set
+ * theta no longer change it. Undo brings “theta” back."
+ */
+export function replacedWords(before: SketchFile, after: SketchFile, ids: readonly string[]): string {
+  const hit = expressionsReplaced(before, after, ids);
+  if (!hit.length) return "";
+  const params = [...new Set(hit.flatMap((h) => h.parameters))];
+  const whose = (h: ReplacedExpression) => `${findElement(before, h.id)!.el.label || h.id}'s ${FIELD_WORDS[h.field] ?? h.field}`;
+  const head =
+    hit.length === 1
+      ? `${whose(hit[0])} is now a number, not “${hit[0].was}”`
+      : `${hit.map(whose).join(", ")} are now numbers, not the expressions they were`;
+  const back = `Undo brings ${hit.length === 1 ? `“${hit[0].was}”` : "them"} back.`;
+  const names = params.join(" and ");
+  const cases = (before.cases ?? []).filter((c) => params.some((p) => c.parameters && p in c.parameters)).length;
+  const sweeps = (before.sweeps ?? []).filter((w) => params.includes(w.parameter)).length;
+  const studies = [cases ? (cases === 1 ? "the case" : `${cases} cases`) : "", sweeps ? (sweeps === 1 ? "the kept sweep" : `${sweeps} kept sweeps`) : ""].filter(Boolean).join(" and ");
+  const one = cases + sweeps === 1;
+  const reach = studies ? `: ${studies} that ${one ? "sets" : "set"} ${names} no longer ${one ? "changes" : "change"} ${hit.length === 1 ? "it" : "them"}` : "";
+  return `${head[0].toUpperCase()}${head.slice(1)}${reach}. ${back}`;
+}

@@ -4,7 +4,7 @@
 import type { Vec2 } from "@/solver/types";
 import { handleSign } from "../render/handles";
 import { valueLookup } from "../analysis/store";
-import { moveElement, moveCentreOfGravity } from "../commands/move";
+import { moveElement, moveCentreOfGravity, replacedWords } from "../commands/move";
 import { rotateElement, reshapeBody } from "../commands/shape";
 import type { Command } from "../commands/define";
 import type { EditorStores } from "../context";
@@ -355,11 +355,13 @@ export function createPointerController(deps: PointerDeps) {
         const cmds = dropAttachments(s.sketch, stores.scene.getState(), m.ids, tolerance());
         // the move from the origin, then the attachments: still one undo step
         if (cmds.length && m.last) s.updateGesture([m.last, ...cmds]);
-        s.endGesture();
+        endSayingReplaced(m.ids);
         return;
       }
       case "rotate":
       case "corner":
+        endSayingReplaced([m.id]);
+        return;
       case "cg":
       case "underlay":
         s.endGesture();
@@ -390,6 +392,14 @@ export function createPointerController(deps: PointerDeps) {
   function onDragCancel(e: PointerEvent) {
     if (e.pointerType === "touch") touches.delete(e.pointerId);
     cancel();
+  }
+
+  /** A drag's end: one undo step, and the status line says which expressions it wrote as numbers. */
+  function endSayingReplaced(ids: readonly string[]) {
+    const origin = ed().gesture?.origin;
+    ed().endGesture();
+    const words = origin ? replacedWords(origin, ed().sketch, ids) : "";
+    if (words) ed().notify(words);
   }
 
   /** Escape: roll back the drag in progress, or leave the current tool. */
