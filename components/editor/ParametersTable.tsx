@@ -124,14 +124,24 @@ function ParamRow({ name, expression, taken }: { name: string; expression: strin
           className={INPUT}
           value={nameDraft ?? name}
           aria-invalid={!!nameErr}
+          aria-describedby={nameErr ? `${id}-name-error` : undefined}
           onChange={(e) => setNameDraft(e.target.value)}
           onBlur={() => {
-            if (nameDraft !== null && !nameErr && nameDraft !== name) apply(renameParameter({ from: name, to: nameDraft }) as Command<unknown>);
+            // a name it cannot take stays in the field with its reason (nothing typed is lost); Escape puts the old one back
+            if (nameErr) return;
+            if (nameDraft !== null && nameDraft !== name) apply(renameParameter({ from: name, to: nameDraft }) as Command<unknown>);
             setNameDraft(null);
           }}
-          onKeyDown={(e) => e.key === "Enter" && (e.target as HTMLInputElement).blur()}
+          onKeyDown={(e) => {
+            if (e.key === "Enter") (e.target as HTMLInputElement).blur();
+            if (e.key === "Escape") setNameDraft(null);
+          }}
         />
-        {nameErr && <p className="mt-0.5 text-[11px] text-caution">⚠ {nameErr}</p>}
+        {nameErr && (
+          <p id={`${id}-name-error`} className="mt-0.5 text-[11px] text-caution">
+            ⚠ Name: {nameErr}
+          </p>
+        )}
       </td>
       <td className="py-1 pr-1">
         <input

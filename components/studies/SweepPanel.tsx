@@ -492,6 +492,9 @@ export function SweepPanel() {
     if (k.case && !sketch.cases?.some((c) => c.id === k.case)) return `its case "${k.case}" is gone`;
     if (k.combination && !sketch.combinations?.some((c) => c.id === k.combination)) return `its combination "${k.combination}" is gone`;
     if (k.parameter !== FLOW_FACTOR && !(k.parameter in (sketch.parameters ?? {}))) return `the sketch has no parameter "${k.parameter}" any more`;
+    // deleting a support in the editor takes it off the sweeps; a file from elsewhere may still name one
+    const gone = k.quantities?.find((q) => !sketch.supports.some((s) => s.id === q.support));
+    if (gone) return `its support "${gone.support}" is gone`;
     return null;
   };
 

@@ -185,7 +185,14 @@ describe("parameters table", () => {
     await user.type(name, "L");
     expect(name).toHaveAttribute("aria-invalid", "true");
     await user.tab();
-    expect(params.getByLabelText("Name of parameter w")).toBeInTheDocument();
+    // left with a name it cannot take: the text stays with its reason, the parameter keeps its name
+    expect(params.getByLabelText("Name of parameter w")).toHaveValue("L");
+    expect(name).toHaveAccessibleDescription("⚠ Name: L is already a parameter");
+    // Escape puts the old name back and the reason goes
+    await user.click(name);
+    await user.keyboard("{Escape}");
+    expect(params.getByLabelText("Name of parameter w")).toHaveValue("w");
+    expect(params.queryByText(/Name: L is already a parameter/)).toBeNull();
   });
 
   it("an edited expression updates the value; delete removes the row, and undo brings it back", async () => {

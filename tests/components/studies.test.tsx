@@ -517,6 +517,7 @@ describe("a kept sweep that names what is gone", () => {
       { id: "s1", parameter: "theta", from: 0, to: 60, points: 11, case: "gone" },
       { id: "s2", parameter: "zz", from: 0, to: 1, points: 11 },
       { id: "s3", parameter: "theta", from: 0, to: 60, points: 11, combination: "k" },
+      { id: "s4", parameter: "theta", from: 0, to: 60, points: 11, quantities: [{ support: "no-such-foot", component: "n" }] },
     ];
     mount(file);
     await user.click(screen.getByRole("tab", { name: "Sweep" }));
@@ -525,6 +526,7 @@ describe("a kept sweep that names what is gone", () => {
       'its case "gone" is gone: the calc sheet cannot plot it. Open it, pick another, and keep it again.',
       'the sketch has no parameter "zz" any more: the calc sheet cannot plot it. Open it, pick another, and keep it again.',
       null,
+      'its support "no-such-foot" is gone: the calc sheet cannot plot it. Open it, pick another, and keep it again.',
     ]);
   });
 });
