@@ -13,7 +13,7 @@ import { moveElement, replacedWords } from "./commands/move";
 import { rotateElement } from "./commands/shape";
 import { describeElement, DIRECTED, findElement, GROUPS, KIND_LABEL, withAttached, type ElementKind } from "./model/elements";
 import { plural } from "./commands/define";
-import { FLOW_FACTOR } from "@/solver/sweep";
+import { parameterWords } from "./studies/display";
 import { anchorOf } from "./scene";
 import { polygonAround, rectangleAround } from "./model/factory";
 import { valueLookup } from "./analysis/store";
@@ -387,7 +387,7 @@ export function deletionWords(sketch: SketchFile, ids: readonly string[]): strin
   const gone = withAttached(sketch, [...ids]);
   const nameOf = (id: string) => findElement(sketch, id)?.el.label || id;
   const parts = (sketch.sweeps ?? []).flatMap((w) => {
-    const what = `the kept sweep of ${w.parameter === FLOW_FACTOR ? "flow factor" : w.parameter} from ${w.from} to ${w.to}`;
+    const what = `the kept sweep of ${parameterWords(w.parameter)} from ${w.from} to ${w.to}`;
     const names = [...new Set((w.quantities ?? []).filter((q) => gone.has(q.support)).map((q) => nameOf(q.support)))].join(" and ");
     if (sweepsRemoved.includes(w.id)) return [`${what} plotted only ${names} and is gone`];
     return sweepsChanged.includes(w.id) ? [`${what} no longer plots ${names}`] : [];

@@ -8,7 +8,7 @@ import { memo, useMemo } from "react";
 import { sweepStateLines } from "@/canvas/studies/display";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
-import { sweptName } from "@/lib/review/compare";
+import { parameterWords } from "@/canvas/studies/display";
 import { formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { SweepChart, type ChartFamily } from "@/components/studies/SweepChart";
 import { ReportTable } from "@/components/studies/ReportTable";
@@ -28,7 +28,7 @@ function onWords(doc: SketchFile, sw: SweepFile): string {
 
 /** "the sweep of v from 20 to 45 m/s on case Engine stopped", for a status or an error */
 function sweepWords(doc: SketchFile, sw: SweepFile, unit = ""): string {
-  return `the sweep of ${sweptName(sw)} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)}${unit ? ` ${prettyUnit(unit)}` : ""} ${sw.case || sw.combination ? `on ${onWords(doc, sw)}` : "as drawn"}`;
+  return `the sweep of ${parameterWords(sw.parameter)} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)}${unit ? ` ${prettyUnit(unit)}` : ""} ${sw.case || sw.combination ? `on ${onWords(doc, sw)}` : "as drawn"}`;
 }
 
 /** What the worker is doing now, in words, for the section's status line. */
@@ -119,7 +119,7 @@ const KeptSweep = memo(function KeptSweep({
   family: ChartFamily | undefined;
   names: Readonly<Record<string, string>>;
 }) {
-  const name = sweptName(sw);
+  const name = parameterWords(sw.parameter);
   const plot = state?.plot;
   const parameterUnit = plot ? plot.data.unit : drawnUnit;
   const unit = parameterUnit ? ` ${prettyUnit(parameterUnit)}` : "";

@@ -9,7 +9,7 @@ import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/s
 import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit } from "@/solver/units";
-import { displayKind, displayUnit, MAX_STRETCHES, parseTarget, sweepStateLines, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, MAX_STRETCHES, parameterWords, parseTarget, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
@@ -412,7 +412,7 @@ export function SweepPanel() {
           to: s.to,
           precision: limitPrecisionWords(tolerance, unitText, reached),
           overrides: overridesIn(ran!.sketch, rows, s.parameter),
-          pName: s.parameter === FLOW_FACTOR ? "flow factor" : s.parameter,
+          pName: parameterWords(s.parameter),
           ...(isBodyLimit(q) ? { body: q } : {}),
         });
       })
@@ -523,9 +523,9 @@ export function SweepPanel() {
   const limitQuantity: LimitQuantity | undefined = limitChoices.find((q) => keyOf(q) === limitKey) ?? plotted.find((q) => shownByDefault && keyOf(q) === keyOf(shownByDefault)) ?? limitChoices[0];
   const bodyLimit = limitQuantity && isBodyLimit(limitQuantity) ? limitQuantity : undefined;
   const targetUnit = limitQuantity && !isBodyLimit(limitQuantity) ? displayUnit(limitQuantity.component, units, scaleFor(limitQuantity.component)) : "";
-  const pLabel = parameter === FLOW_FACTOR ? "flow factor" : parameter;
+  const pLabel = parameterWords(parameter);
   // the plot's parameter, which the form may have left since
-  const dLabel = data ? (data.parameter === FLOW_FACTOR ? "flow factor" : data.parameter) : pLabel;
+  const dLabel = data ? parameterWords(data.parameter) : pLabel;
   const invalid = data ? invalidStretches(data) : [];
   // where a plotted support is off its seat or its body not held: in the words a version's page and the calc sheet use
   const stateLines = data ? sweepStateLines(data, names) : [];
@@ -533,7 +533,7 @@ export function SweepPanel() {
   const rangeNote = (() => {
     if (!ran || !data) return null;
     const s = ran.spec;
-    const sName = s.parameter === FLOW_FACTOR ? "flow factor" : s.parameter;
+    const sName = parameterWords(s.parameter);
     const sUnit = data.unit ? ` ${prettyUnit(data.unit)}` : "";
     if (parameter !== s.parameter) return `Find searches the plotted ${sName}, from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${sUnit}: run the sweep to search ${pLabel}.`;
     const typed = typedRange();
@@ -633,7 +633,7 @@ export function SweepPanel() {
               {kept.map((k) => (
                 <li key={k.id} className="flex items-start gap-1.5">
                   <span className="min-w-0 flex-1 text-ink-soft">
-                    {k.parameter === FLOW_FACTOR ? "flow factor" : k.parameter} from {formatNumber(k.from, 6)} to {formatNumber(k.to, 6)}{unitWords(k.parameter)}, {k.points} points — {onLabel(k.case, k.combination)}
+                    {parameterWords(k.parameter)} from {formatNumber(k.from, 6)} to {formatNumber(k.to, 6)}{unitWords(k.parameter)}, {k.points} points — {onLabel(k.case, k.combination)}
                     {keptProblem(k) && <span className="block text-caution" data-testid="kept-sweep-problem">{keptProblem(k)}: the calc sheet cannot plot it. Open it, pick another, and keep it again.</span>}
                   </span>
                   <button type="button" className="text-[11.5px] text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink" onClick={() => open(k)} aria-label={`Open the kept sweep ${k.id}`}>

@@ -8,7 +8,7 @@ import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } f
 import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
 import { stateWord } from "@/solver/report";
 import { describeQuantity } from "@/solver/quantity";
-import { FLOW_FACTOR } from "@/solver/sweep";
+import { parameterWords } from "@/canvas/studies/display";
 import type { FieldError } from "@/solver/types";
 import { FOOT_M, LBF_N } from "@/solver/constants";
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
@@ -259,14 +259,11 @@ const nameIn = (list: Array<{ id: string; name: string }> | undefined, id: strin
 const combinationText = (k: CombinationFile, file: SketchFile) =>
   `${k.name}: ${k.terms.map((t) => `${num(t.factor)} × ${nameIn(file.cases, t.case)}`).join(" + ")}${k.stability ? `; required ${Object.entries(k.stability).map(([what, v]) => `${num(v)} against ${what}`).join(", ")}` : ""}`;
 
-/** The swept parameter as the Sweep tab names it. */
-export const sweptName = (sw: SweepFile) => (sw.parameter === FLOW_FACTOR ? "flow factor" : sw.parameter);
-
 /** A sweep in words; its plotted quantities named as its chart's legend names them, by the supports' labels in `file`. */
 function sweepText(s: SweepFile, file: SketchFile): string {
   const names = Object.fromEntries(file.supports.map((x) => [x.id, x.label || x.id]));
   const plots = s.quantities?.length ? `; plots ${s.quantities.map((q) => describeQuantity(q, names)).join(", ")}` : "";
-  return `${sweptName(s)} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case “${nameIn(file.cases, s.case)}”` : ""}${s.combination ? `, combination “${nameIn(file.combinations, s.combination)}”` : ""}${plots}`;
+  return `${parameterWords(s.parameter)} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case “${nameIn(file.cases, s.case)}”` : ""}${s.combination ? `, combination “${nameIn(file.combinations, s.combination)}”` : ""}${plots}`;
 }
 
 function underlayText(u: UnderlayFile): string {
@@ -315,7 +312,7 @@ export function studyChanges(a: SketchFile, b: SketchFile): StudyChange[] {
     if (shown(x) === shown(y)) continue;
     out.push({ field: `required factor against ${k}`, before: shown(x), after: shown(y), change: "changed" });
   }
-  out.push(...listChanges("sweep", a.sweeps, b.sweeps, (s, at) => sweepText(s, at === "before" ? a : b), (s) => `of ${sweptName(s)}`));
+  out.push(...listChanges("sweep", a.sweeps, b.sweeps, (s, at) => sweepText(s, at === "before" ? a : b), (s) => `of ${parameterWords(s.parameter)}`));
   if (!same(a.underlay, b.underlay)) {
     out.push({
       field: "underlay",
