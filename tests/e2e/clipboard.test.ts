@@ -35,8 +35,9 @@ describe("copy and paste", () => {
     await page.keyboard.press("Control+v");
     await expect.poll(count).toBe(2 * before);
     await expect.poll(() => page.getByTestId("notice").textContent()).toMatch(new RegExp(`Pasted ${n} elements`));
-    // the copy is solved as a body of its own: two status sentences, the same reactions twice
-    await expect.poll(() => page.getByTestId("status").textContent()).toMatch(/Pump skid: Holds[\s\S]*Pump skid: Holds/);
+    // the copy is solved as a body of its own: two status sentences, the same reactions twice; its
+    // labels, taken here already, are the next free ones
+    await expect.poll(() => page.getByTestId("status").textContent()).toMatch(/Pump skid: Holds[\s\S]*at the front bearer[\s\S]*Pump skid 2: Holds[\s\S]*at the front bearer 2/);
     await shot(page, "clipboard-01-pasted-beside");
   });
 
