@@ -5,8 +5,8 @@ import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
 import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { apiFetch, ApiError } from "@/lib/api-client";
-import { authClient } from "@/lib/auth-client";
 import { passwordSchema, personNameSchema } from "@/lib/schemas";
+import { useSignOut } from "./useSignOut";
 
 const path = (token: string, action: string) => `/api/invitations/${encodeURIComponent(token)}/${action}`;
 
@@ -101,25 +101,11 @@ export function InvitationSignUpForm({ token, email }: { token: string; email: s
  * then offers the form that creates it and joins.
  */
 export function SwitchAccountButton({ next, email, hasAccount }: { next: string; email: string; hasAccount: boolean }) {
-  const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  async function switchAccount() {
-    setBusy(true);
-    setError(null);
-    const out = await authClient.signOut().catch(() => ({ error: true }));
-    if (out?.error) {
-      setBusy(false);
-      setError("Signing out did not work. Try again.");
-      return;
-    }
-    router.push(hasAccount ? `/sign-in?next=${encodeURIComponent(next)}&email=${encodeURIComponent(email)}` : next);
-    router.refresh();
-  }
+  const { busy, failed, signOut } = useSignOut();
   return (
     <div className="space-y-3">
-      {error ? <Notice tone="error">{error}</Notice> : null}
-      <Button tone="secondary" onClick={switchAccount} busy={busy} className="w-full">
+      {failed ? <Notice tone="error">Signing out did not work. Try again.</Notice> : null}
+      <Button tone="secondary" onClick={() => signOut(hasAccount ? `/sign-in?next=${encodeURIComponent(next)}&email=${encodeURIComponent(email)}` : next)} busy={busy} className="w-full">
         {/* a long address wraps inside the button rather than running out of it */}
         <span className="min-w-0 whitespace-normal text-center [overflow-wrap:anywhere]">
           {hasAccount ? `Sign out and sign in as ${email}` : `Sign out and create the account for ${email}`}

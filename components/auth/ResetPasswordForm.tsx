@@ -6,13 +6,20 @@ import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { authClient } from "@/lib/auth-client";
 import { passwordSchema } from "@/lib/schemas";
 import { authErrorMessage } from "./messages";
+import { SignedInNote } from "./SignedInNote";
 
-export function ResetPasswordForm({ token }: { token: string }) {
+/**
+ * `signedInAs`: the page was opened while signed in. A reset of that account signs it out (as every
+ * device); a reset of another account leaves this session, so the page says whose it still is and
+ * offers to sign out before signing in with the new password.
+ */
+export function ResetPasswordForm({ token, signedInAs }: { token: string; signedInAs?: string }) {
   const [password, setPassword] = useState("");
   const [repeat, setRepeat] = useState("");
   const [errors, setErrors] = useState<{ password?: string; repeat?: string }>({});
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState(false);
+  const [stillSignedIn, setStillSignedIn] = useState(false);
   const [busy, setBusy] = useState(false);
   useFocusFirstError(errors);
 
@@ -27,11 +34,27 @@ export function ResetPasswordForm({ token }: { token: string }) {
     setBusy(true);
     setError(null);
     const { error: err } = await authClient.resetPassword({ newPassword: password, token });
+    if (!err && signedInAs) {
+      const { data } = await authClient.getSession().catch(() => ({ data: null }));
+      setStillSignedIn(Boolean(data));
+    }
     setBusy(false);
     if (err) setError(authErrorMessage(err));
     else setDone(true);
   }
 
+  if (done && stillSignedIn && signedInAs) {
+    return (
+      <div className="space-y-4">
+        <Notice tone="success" title="Password changed">
+          The new password is set for the account the link was mailed to, and every device signed in to that account has been signed out.
+        </Notice>
+        <SignedInNote email={signedInAs} signOut={{ label: "Sign out, then sign in with the new password", to: "/sign-in" }}>
+          That is another account, so you are still signed in here.
+        </SignedInNote>
+      </div>
+    );
+  }
   if (done) {
     return (
       <div className="space-y-4">
@@ -46,6 +69,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   }
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
+      {signedInAs ? <SignedInNote email={signedInAs}>The new password is for the account this link was mailed to: setting it signs that account out on every device.</SignedInNote> : null}
       {error ? (
         <Notice tone="error">
           {error}{" "}

@@ -1,8 +1,6 @@
 "use client";
-import { useRouter } from "next/navigation";
 import Link from "next/link";
-import { useState } from "react";
-import { authClient } from "@/lib/auth-client";
+import { useSignOut } from "@/components/auth/useSignOut";
 import { Disclosure } from "./Disclosure";
 
 function initials(name: string): string {
@@ -12,22 +10,8 @@ function initials(name: string): string {
 
 /** The signed-in person: their settings, and signing out. */
 export function AccountMenu({ name, email }: { name: string; email: string }) {
-  const router = useRouter();
-  const [leaving, setLeaving] = useState(false);
-  const [failed, setFailed] = useState(false);
-  async function signOut() {
-    setLeaving(true);
-    setFailed(false);
-    // only a sign-out the server took leaves the page: on a shared machine, "signed out" must be true
-    const { error } = await authClient.signOut().catch(() => ({ error: true }));
-    if (error) {
-      setLeaving(false);
-      setFailed(true);
-      return;
-    }
-    router.push("/sign-in");
-    router.refresh();
-  }
+  // only a sign-out the server took leaves the page: on a shared machine, "signed out" must be true
+  const { busy: leaving, failed, signOut } = useSignOut();
   return (
     <Disclosure
       align="right"
@@ -54,7 +38,7 @@ export function AccountMenu({ name, email }: { name: string; email: string }) {
           <Link href="/workspaces" onClick={close} className="block rounded-md px-2.5 py-2 text-sm text-ink hover:bg-paper-deep">
             All workspaces
           </Link>
-          <button type="button" onClick={signOut} disabled={leaving} className="block w-full rounded-md px-2.5 py-2 text-left text-sm text-accent-deep hover:bg-accent-soft/50">
+          <button type="button" onClick={() => signOut("/sign-in")} disabled={leaving} className="block w-full rounded-md px-2.5 py-2 text-left text-sm text-accent-deep hover:bg-accent-soft/50">
             {leaving ? "Signing out…" : "Sign out"}
           </button>
           {failed ? (

@@ -1,10 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { redirect } from "next/navigation";
 import { AuthCard } from "@/components/auth/AuthFrame";
+import { OtherAddressNote } from "@/components/auth/SignedInNote";
 import { SignInForm } from "@/components/auth/SignInForm";
 import { withNext } from "@/components/auth/nextPath";
-import { currentSession, safeNext } from "@/lib/session";
+import { sessionForOtherAddress } from "@/components/auth/signedInPage";
+import { safeNext } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Sign in" };
 
@@ -13,7 +14,14 @@ type Search = Promise<{ next?: string; email?: string }>;
 export default async function SignInPage({ searchParams }: { searchParams: Search }) {
   const { next, email } = await searchParams;
   const target = safeNext(next);
-  if (await currentSession()) redirect(target);
+  const session = await sessionForOtherAddress(email, target);
+  if (session) {
+    return (
+      <AuthCard title="Sign in">
+        <OtherAddressNote signedInAs={session.user.email} email={email ?? ""} action="sign in" signOutTo={withNext(`/sign-in?email=${encodeURIComponent(email ?? "")}`, target)} carryOnTo={target} />
+      </AuthCard>
+    );
+  }
   return (
     <AuthCard
       title="Sign in"

@@ -1,17 +1,25 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { redirect } from "next/navigation";
 import { AuthCard } from "@/components/auth/AuthFrame";
+import { OtherAddressNote } from "@/components/auth/SignedInNote";
 import { SignUpForm } from "@/components/auth/SignUpForm";
 import { withNext } from "@/components/auth/nextPath";
-import { currentSession, safeNext } from "@/lib/session";
+import { sessionForOtherAddress } from "@/components/auth/signedInPage";
+import { safeNext } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Create an account" };
 
 export default async function SignUpPage({ searchParams }: { searchParams: Promise<{ email?: string; next?: string }> }) {
   const { email, next } = await searchParams;
   const target = safeNext(next);
-  if (await currentSession()) redirect(target);
+  const session = await sessionForOtherAddress(email, target);
+  if (session) {
+    return (
+      <AuthCard title="Create an account">
+        <OtherAddressNote signedInAs={session.user.email} email={email ?? ""} action="create an account" signOutTo={withNext(`/sign-up?email=${encodeURIComponent(email ?? "")}`, target)} carryOnTo={target} />
+      </AuthCard>
+    );
+  }
   return (
     <AuthCard
       title="Create an account"

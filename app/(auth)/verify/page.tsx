@@ -3,9 +3,10 @@ import Link from "next/link";
 import { AuthCard } from "@/components/auth/AuthFrame";
 import { MailboxHint } from "@/components/auth/MailboxHint";
 import { ResendVerificationForm } from "@/components/auth/ResendVerificationForm";
+import { SignedInNote } from "@/components/auth/SignedInNote";
 import { Notice } from "@/components/shell/controls";
 import { DEFAULT_NEXT, withNext } from "@/components/auth/nextPath";
-import { safeNext } from "@/lib/session";
+import { currentSession, safeNext } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Confirm your e-mail" };
 
@@ -18,6 +19,12 @@ export default async function VerifyPage({ searchParams }: { searchParams: Searc
   const { sent, confirmed, error } = search;
   // the page the user was on before "Create an account" (a scratch sketch to save), kept for the sign-in
   const next = safeNext(search.next);
+  // signed in already: a confirmation link opened here is for another account (an account signs in
+  // only once confirmed), so the page says whose session this is and how to use the other one
+  const session = await currentSession();
+  const signedIn = session ? (
+    <SignedInNote email={session.user.email} signOut={{ label: "Sign out to use another account", to: withNext("/sign-in", next) }} />
+  ) : null;
 
   if (error) {
     const expired = error === "TOKEN_EXPIRED";
@@ -31,6 +38,23 @@ export default async function VerifyPage({ searchParams }: { searchParams: Searc
           </Notice>
           <ResendVerificationForm next={next} />
           <MailboxHint />
+          {signedIn}
+        </div>
+      </AuthCard>
+    );
+  }
+
+  if (confirmed && session) {
+    return (
+      <AuthCard title="E-mail address confirmed">
+        <div className="space-y-4">
+          <Notice tone="success">The account is ready.</Notice>
+          <SignedInNote email={session.user.email} signOut={{ label: "Sign out, then sign in with the confirmed address", to: withNext("/sign-in", next) }}>
+            To use the account you just confirmed, sign out first.
+          </SignedInNote>
+          <Link href={next} className={`${primary} text-center [overflow-wrap:anywhere]`}>
+            {next === DEFAULT_NEXT ? `Carry on as ${session.user.email}` : `Carry on where you left off, as ${session.user.email}`}
+          </Link>
         </div>
       </AuthCard>
     );
@@ -68,6 +92,7 @@ export default async function VerifyPage({ searchParams }: { searchParams: Searc
         <p className="text-sm text-ink-soft">Nothing arrived after a few minutes? Check the spam folder, or send the link again.</p>
         <ResendVerificationForm defaultEmail={sent ?? ""} label="Send the link again" next={next} />
         <MailboxHint />
+        {signedIn}
       </div>
     </AuthCard>
   );
