@@ -11,6 +11,7 @@ import type { SketchFile } from "@/solver/schema";
 import { copyFragment, fragmentText, pasteNotice, planPaste, readFragment } from "./clipboard";
 import { moveElement, replacedWords } from "./commands/move";
 import { rotateElement } from "./commands/shape";
+import { mirrorElements, mirrorKeeps, mirrorLeavesAlone, mirrorLine, mirroredIds, type MirrorAxis } from "./commands/mirror";
 import { describeElement, DIRECTED, findElement, GROUPS, KIND_LABEL, withAttached, type ElementKind } from "./model/elements";
 import { plural } from "./commands/define";
 import { parameterWords } from "./studies/display";
@@ -175,6 +176,41 @@ function turn(id: string, label: string, key: string, by: number): Action {
   };
 }
 
+/**
+ * Mirror the selection about the centre line of its bounding box (a body brings what sits on it);
+ * with nothing selected, the whole sketch. One undo step; the status line says what was mirrored,
+ * about which line, what stays as it was and any expression written as a number.
+ */
+function mirror(id: string, label: string, key: string, axis: MirrorAxis): Action {
+  const how = axis === "leftRight" ? "left–right" : "up–down";
+  return {
+    id,
+    label,
+    group: "edit",
+    shortcuts: [key],
+    hint: `Mirrors the selection ${how} about the middle of its extent (a body with everything on it); with nothing selected, the whole sketch.`,
+    enabled: hasBody,
+    disabledNotice: "Nothing to mirror yet: draw a body first.",
+    run: (ctx) => {
+      const s = ed(ctx);
+      const before = s.sketch;
+      const ids = [...s.selection];
+      const lookup = valueLookup(ctx.stores.analysis);
+      const about = mirrorLine(before, ids, axis, lookup);
+      if (about === undefined) return s.notify("Nothing to mirror: the selection has no position that can be worked out.");
+      const stuck = mirrorLeavesAlone(before, ids, axis, about, lookup);
+      if (!s.apply(mirrorElements({ ids, axis, lookup, about }) as Command<unknown>)) return;
+      const n = mirroredIds(before, ids).size;
+      const what = ids.length ? `Mirrored ${plural(n, "element")}` : "Nothing was selected: mirrored the whole sketch";
+      const line = `${axis === "leftRight" ? "x" : "y"} = ${metres(about)}`;
+      const replaced = replacedWords(before, ed(ctx).sketch, ids.length ? ids : [...mirroredIds(before, ids)]);
+      const one = stuck.length === 1;
+      const alone = stuck.length ? ` ${stuck.join(", ")} ${one ? "is" : "are"} not mirrored: ${one ? "its expression has an error" : "their expressions have errors"}. Undo, fix ${one ? "it" : "them"} and mirror again.` : "";
+      ed(ctx).notify(`${what} ${how} about ${line}.${mirrorKeeps(before, ids, axis)}${replaced ? ` ${replaced}` : ""}${alone}`);
+    },
+  };
+}
+
 export const ACTIONS: readonly Action[] = [
   // ---- add (the tray)
   {
@@ -290,6 +326,8 @@ export const ACTIONS: readonly Action[] = [
   nudge("edit.nudgeDownFar", "Nudge down ×10", "ArrowDown", [0, -1], true),
   turn("edit.turnLeft", "Turn 15° counter-clockwise", "]", 15),
   turn("edit.turnRight", "Turn 15° clockwise", "[", -15),
+  mirror("edit.mirrorLeftRight", "Mirror left–right", "Shift+H", "leftRight"),
+  mirror("edit.mirrorUpDown", "Mirror up–down", "Shift+V", "upDown"),
 
   // ---- view
   {

@@ -121,7 +121,8 @@ export function expressionsReplaced(before: SketchFile, after: SketchFile, ids: 
   return out;
 }
 
-const FIELD_WORDS: Record<string, string> = { angle: "direction", at: "position", outline: "corners", from: "start", to: "end", cg: "centre of gravity", fx: "x component", fy: "y component" };
+/** A field of an element in words: "Discharge's direction". */
+export const FIELD_WORDS: Record<string, string> = { angle: "direction", at: "position", outline: "corners", from: "start", to: "end", cg: "centre of gravity", fx: "x component", fy: "y component" };
 
 /**
  * What a turn or a move did to expressions, for the status line (two lines; empty when it replaced

@@ -13,15 +13,16 @@ import { useActionRunner } from "./useActions";
 import { BUTTON, HEADING } from "./ui";
 
 /**
- * Copy, Paste, Duplicate and Delete for the selection, by their registered actions (the same as
- * Ctrl+C, Ctrl+V, Ctrl+D and Delete); a read-only sketch can still be copied from.
+ * Copy, Paste, Duplicate, Mirror and Delete for the selection, by their registered actions (the
+ * same as Ctrl+C, Ctrl+V, Ctrl+D, Shift+H, Shift+V and Delete); a read-only sketch can still be
+ * copied from.
  */
 function SelectionActions({ readOnlyCopy = false }: { readOnlyCopy?: boolean }) {
   const run = useActionRunner();
   const readOnly = useEditor((s) => s.readOnly);
   // inside the forms' fieldset (disabled when read only), or below it with Copy alone
   if (readOnly !== readOnlyCopy) return null;
-  const ids = readOnly ? ["edit.copy"] : ["edit.copy", "edit.paste", "edit.duplicate", "edit.delete"];
+  const ids = readOnly ? ["edit.copy"] : ["edit.copy", "edit.paste", "edit.duplicate", "edit.mirrorLeftRight", "edit.mirrorUpDown", "edit.delete"];
   return (
     <div className="flex flex-wrap gap-1.5" data-testid="selection-actions">
       {ids.map((id) => (
@@ -40,6 +41,33 @@ function SelectionActions({ readOnlyCopy = false }: { readOnlyCopy?: boolean }) 
           }}
         >
           {actionById(id).label}
+        </button>
+      ))}
+    </div>
+  );
+}
+
+/**
+ * With nothing selected: the mirror commands act on the whole sketch (the same actions as
+ * Shift+H and Shift+V), said here so that the keys' reach is no surprise.
+ */
+function MirrorWholeSketch() {
+  const run = useActionRunner();
+  const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
+  if (!hasBody) return null;
+  return (
+    <div role="group" aria-labelledby="mirror-all-heading" className="mt-3 flex flex-wrap items-center gap-1.5" data-testid="mirror-whole-sketch">
+      <span id="mirror-all-heading" className="text-[12px] text-ink-soft">
+        Mirror the whole sketch
+      </span>
+      {(
+        [
+          ["edit.mirrorLeftRight", "Left–right"],
+          ["edit.mirrorUpDown", "Up–down"],
+        ] as const
+      ).map(([id, words]) => (
+        <button key={id} type="button" className={BUTTON} title={actionTitle(id, `Mirror the whole sketch ${words.toLowerCase()}`)} aria-label={`Mirror the whole sketch ${words.toLowerCase()}`} onClick={() => run(id)}>
+          {words}
         </button>
       ))}
     </div>
@@ -81,7 +109,10 @@ export function PropertiesPanel() {
         {/* a disabled fieldset disables every field and button of the forms inside it */}
         <fieldset disabled={readOnly} className="min-w-0">
           {selection.length === 0 ? (
-            <SketchForm />
+            <>
+              <SketchForm />
+              <MirrorWholeSketch />
+            </>
           ) : selection.length === 1 ? (
             <div className="space-y-3">
               <ElementForm key={selection[0]} id={selection[0]} />
