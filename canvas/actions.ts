@@ -14,7 +14,7 @@ import { rotateElement } from "./commands/shape";
 import { mirrorElements, mirrorKeeps, mirrorLeavesAlone, mirrorLine, mirroredIds, type MirrorAxis } from "./commands/mirror";
 import { describeElement, DIRECTED, findElement, GROUPS, KIND_LABEL, withAttached, type ElementKind } from "./model/elements";
 import { plural } from "./commands/define";
-import { parameterWords } from "./studies/display";
+import { sweepRangeWords, sweptUnitIn } from "./studies/display";
 import { anchorOf } from "./scene";
 import { polygonAround, rectangleAround } from "./model/factory";
 import { valueLookup } from "./analysis/store";
@@ -417,7 +417,7 @@ export function actionTitle(id: string, label?: string): string {
 
 /**
  * What a delete does to the kept sweeps, for the status line (empty when it touches none): " The
- * kept sweep of p from 0 to 10 no longer plots front; … Undo brings them back."
+ * kept sweep of p from 0 to 10 bar no longer plots front; … Undo brings them back."
  */
 export function deletionWords(sketch: SketchFile, ids: readonly string[]): string {
   const { sweepsChanged, sweepsRemoved } = deletionEffects(sketch, ids);
@@ -425,7 +425,7 @@ export function deletionWords(sketch: SketchFile, ids: readonly string[]): strin
   const gone = withAttached(sketch, [...ids]);
   const nameOf = (id: string) => findElement(sketch, id)?.el.label || id;
   const parts = (sketch.sweeps ?? []).flatMap((w) => {
-    const what = `the kept sweep of ${parameterWords(w.parameter)} from ${w.from} to ${w.to}`;
+    const what = `the kept sweep of ${sweepRangeWords(w.parameter, w.from, w.to, sweptUnitIn(sketch, w.parameter))}`;
     const names = [...new Set((w.quantities ?? []).filter((q) => gone.has(q.support)).map((q) => nameOf(q.support)))].join(" and ");
     if (sweepsRemoved.includes(w.id)) return [`${what} plotted only ${names} and is gone`];
     return sweepsChanged.includes(w.id) ? [`${what} no longer plots ${names}`] : [];

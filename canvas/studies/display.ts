@@ -8,6 +8,7 @@ import type { QuantityComponent } from "@/solver/quantity";
 import { columnUnit } from "@/solver/report";
 import { evaluateTyped, toFieldNumber } from "@/solver/expressions";
 import { FLOW_FACTOR } from "@/solver/sweep";
+import { resolveFile } from "@/solver/parse";
 import { convert, formatNumber, prettyUnit, type Quantity, type UnitSystem } from "@/solver/units";
 import type { PointStretch, SweepData } from "./run";
 import { bodyLimits, bodyStateIn, type BodyState } from "@/solver/studySweep";
@@ -75,6 +76,31 @@ export const marksZero = (component: QuantityComponent): boolean => component ==
 
 /** The swept parameter as the words call it: the built-in flow factor by its name in words. */
 export const parameterWords = (parameter: string): string => (parameter === FLOW_FACTOR ? "flow factor" : parameter);
+
+/**
+ * The unit a sketch writes `parameter` in, the unit a kept sweep's From and To are in ("bar",
+ * "deg"); "" for the flow factor, a plain number, or a parameter that does not evaluate. For words
+ * said once (a delete's notice, a comparison), not per point: it reads the whole sketch.
+ */
+export function sweptUnitIn(file: SketchFile, parameter: string): string {
+  if (parameter === FLOW_FACTOR) return "";
+  try {
+    const v = resolveFile(file).parameterValues[parameter];
+    return v && !("error" in v) ? v.unit : "";
+  } catch {
+    // a file from elsewhere that does not read as a sketch: its words go without the unit
+    return "";
+  }
+}
+
+/**
+ * A swept range in words with its unit, wherever a sweep's range is said (the Sweep tab's kept
+ * list, the status line, a version's page, a comparison, the calc sheet): "theta from 0 to 30 deg",
+ * "p from 0 to 10 bar", "flow factor from 0.5 to 1.5" (a plain factor: no unit).
+ */
+export function sweepRangeWords(parameter: string, from: number, to: number, unit: string, digits = 6): string {
+  return `${parameterWords(parameter)} from ${formatNumber(from, digits)} to ${formatNumber(to, digits)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
+}
 
 /** Stretches of a sweep's points (a support off its seat, a body not held) said one by one; more are counted. */
 export const MAX_STRETCHES = 4;

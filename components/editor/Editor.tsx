@@ -4,7 +4,7 @@
 // by a SketchPersistence (local storage for the scratch sketch; the versions API later).
 import dynamic from "next/dynamic";
 import Link from "next/link";
-import { useCallback, useEffect, useRef, useState, type ReactNode } from "react";
+import { useCallback, useEffect, useLayoutEffect, useRef, useState, type KeyboardEvent as ReactKeyboardEvent, type ReactNode } from "react";
 import { EditorProvider, useEditor, useStores } from "@/canvas/context";
 import { createEditorStore, type EditorStore } from "@/canvas/store";
 import { keepHistory, restoreHistory, type HistoryStorage } from "@/canvas/keptHistory";
@@ -83,6 +83,26 @@ function useStopTool() {
   };
 }
 
+/**
+ * Whether a clamped line's text runs past what it shows (its two lines), measured after each
+ * change of `text` and of the line's width: a notice cut short gets its "More" button.
+ */
+function useCutShort(text: string | null) {
+  const ref = useRef<HTMLParagraphElement>(null);
+  const [cut, setCut] = useState(false);
+  useLayoutEffect(() => {
+    const el = ref.current;
+    if (!el || text === null) return setCut(false);
+    const measure = () => setCut(el.scrollHeight > el.clientHeight + 1);
+    measure();
+    if (typeof ResizeObserver === "undefined") return;
+    const watch = new ResizeObserver(measure);
+    watch.observe(el);
+    return () => watch.disconnect();
+  }, [text]);
+  return { ref, cut };
+}
+
 function StatusLine() {
   const notice = useEditor((s) => s.notice);
   const tool = useEditor((s) => s.tool);
@@ -99,13 +119,56 @@ function StatusLine() {
       : "Esc: back to selecting · Alt: no snapping";
   const touchHint = tool.kind === "select" && !readOnly ? "Drag: move · two fingers: zoom and pan · ? lists the rest" : tool.kind === "select" ? hint : "two fingers: zoom and pan";
   const said = notice !== null || keysTool !== null;
+  // a notice longer than the line's two lines: "More" opens the whole of it over the drawing, for
+  // keyboard and touch users too (a tooltip is for a mouse only); the line itself never grows, so
+  // the drawing does not move while a drag keeps saying things
+  const { ref: noticeRef, cut } = useCutShort(notice ?? keysTool);
+  const [whole, setWhole] = useState(false);
+  // a notice that fits again closes it: the next long one starts folded
+  if (whole && !cut) setWhole(false);
+  const showWhole = whole && cut;
+  const moreRef = useRef<HTMLButtonElement>(null);
+  const closeOnEscape = (e: ReactKeyboardEvent) => {
+    if (e.key !== "Escape" || !showWhole) return;
+    // the editor's own Escape (put the tool down, clear the selection) is not for this press
+    e.preventDefault();
+    e.stopPropagation();
+    setWhole(false);
+    moreRef.current?.focus();
+  };
   return (
     // two lines tall, always (a notice coming and going must not resize the drawing): a notice may
     // take both, and on a narrow window it takes the whole width from the hint
-    <div className="flex h-9 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px] leading-[15px] pointer-coarse:h-12" id="canvas-help">
-      <p className="line-clamp-2 min-w-0 flex-1 text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? keysTool ?? undefined}>
+    <div className="relative flex h-9 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px] leading-[15px] pointer-coarse:h-12" id="canvas-help" onKeyDown={closeOnEscape}>
+      <p ref={noticeRef} className="line-clamp-2 min-w-0 flex-1 text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? keysTool ?? undefined}>
         {notice ?? (keysTool !== null && touchTool !== null ? <KeysOrTouch keys={keysTool} touch={touchTool} /> : null)}
       </p>
+      {cut ? (
+        <button
+          ref={moreRef}
+          type="button"
+          onClick={() => setWhole(!showWhole)}
+          aria-expanded={showWhole}
+          aria-controls="notice-whole"
+          aria-label={showWhole ? "Hide the whole message" : "Show the whole message"}
+          className="h-7 shrink-0 rounded border border-ink/20 px-2 text-[12px] font-medium text-ink hover:border-ink/45 pointer-coarse:h-10 pointer-coarse:px-3"
+          data-testid="notice-more"
+        >
+          {showWhole ? "Less" : "More"}
+        </button>
+      ) : null}
+      {showWhole ? (
+        // over the foot of the drawing, not in the line: nothing below or beside it moves
+        <div
+          id="notice-whole"
+          role="region"
+          aria-label="The whole message"
+          className="absolute bottom-full left-0 right-0 z-20 max-h-48 overflow-y-auto border-t border-rule bg-paper px-3 py-2 text-[12.5px] leading-snug text-ink shadow-[0_-6px_18px_rgb(var(--shade)/0.12)]"
+          data-testid="notice-whole"
+        >
+          <p className="max-w-[80ch] whitespace-pre-line">{notice ?? (keysTool !== null && touchTool !== null ? <KeysOrTouch keys={keysTool} touch={touchTool} /> : null)}</p>
+        </div>
+      ) : null}
       <p className={`line-clamp-2 min-w-0 text-right text-ink-faint ${said ? "max-w-[45%] max-md:hidden" : "max-w-[70%]"}`} title={hint}>
         <KeysOrTouch keys={hint} touch={touchHint} />
       </p>

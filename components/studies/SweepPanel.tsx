@@ -9,7 +9,7 @@ import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/s
 import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit } from "@/solver/units";
-import { displayKind, displayUnit, MAX_STRETCHES, parameterWords, parseTarget, sweepStateLines, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, MAX_STRETCHES, parameterWords, parseTarget, sweepRangeWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
@@ -483,9 +483,10 @@ export function SweepPanel() {
     if (k.quantities?.length) setPicked(k.quantities.map((q) => `${q.support}:${q.component}`));
     setKeptNote(null);
   };
-  const unitWords = (name: string) => {
+  /** the unit a kept sweep's ends are in: the one the sketch writes its parameter in */
+  const unitOf = (name: string) => {
     const v = name === FLOW_FACTOR ? undefined : values[name];
-    return v && !("error" in v) && v.unit ? ` ${prettyUnit(v.unit)}` : "";
+    return v && !("error" in v) ? v.unit : "";
   };
   /** what a kept sweep names that the sketch no longer has */
   const keptProblem = (k: SweepFile): string | null => {
@@ -633,7 +634,7 @@ export function SweepPanel() {
               {kept.map((k) => (
                 <li key={k.id} className="flex items-start gap-1.5">
                   <span className="min-w-0 flex-1 text-ink-soft">
-                    {parameterWords(k.parameter)} from {formatNumber(k.from, 6)} to {formatNumber(k.to, 6)}{unitWords(k.parameter)}, {k.points} points — {onLabel(k.case, k.combination)}
+                    {sweepRangeWords(k.parameter, k.from, k.to, unitOf(k.parameter))}, {k.points} points — {onLabel(k.case, k.combination)}
                     {keptProblem(k) && <span className="block text-caution" data-testid="kept-sweep-problem">{keptProblem(k)}: the calc sheet cannot plot it. Open it, pick another, and keep it again.</span>}
                   </span>
                   <button type="button" className="text-[11.5px] text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink" onClick={() => open(k)} aria-label={`Open the kept sweep ${k.id}`}>
@@ -660,8 +661,7 @@ export function SweepPanel() {
               </p>
             )}
             <p className="mb-1 text-[11.5px] text-ink-faint" data-testid="sweep-ran-on">
-              {dLabel} from {formatNumber(ran?.spec.from ?? 0, 6)} to {formatNumber(ran?.spec.to ?? 0, 6)}
-              {data.unit ? ` ${prettyUnit(data.unit)}` : ""}, {data.xs.length} points — {ran?.on}
+              {sweepRangeWords(data.parameter, ran?.spec.from ?? 0, ran?.spec.to ?? 0, data.unit)}, {data.xs.length} points — {ran?.on}
             </p>
             <SweepChart data={data} run={runs} units={units} names={names} parameterLabel={dLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target}` } : null} />
             <ul className="mt-1 space-y-0.5 text-[12px]" data-testid="crossings">

@@ -8,7 +8,7 @@ import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } f
 import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
 import { stateWord } from "@/solver/report";
 import { describeQuantity } from "@/solver/quantity";
-import { parameterWords } from "@/canvas/studies/display";
+import { parameterWords, sweepRangeWords, sweptUnitIn } from "@/canvas/studies/display";
 import type { FieldError } from "@/solver/types";
 import { FOOT_M, LBF_N } from "@/solver/constants";
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
@@ -263,7 +263,7 @@ const combinationText = (k: CombinationFile, file: SketchFile) =>
 function sweepText(s: SweepFile, file: SketchFile): string {
   const names = Object.fromEntries(file.supports.map((x) => [x.id, x.label || x.id]));
   const plots = s.quantities?.length ? `; plots ${s.quantities.map((q) => describeQuantity(q, names)).join(", ")}` : "";
-  return `${parameterWords(s.parameter)} from ${num(s.from)} to ${num(s.to)}, ${s.points} points${s.case ? `, case “${nameIn(file.cases, s.case)}”` : ""}${s.combination ? `, combination “${nameIn(file.combinations, s.combination)}”` : ""}${plots}`;
+  return `${sweepRangeWords(s.parameter, s.from, s.to, sweptUnitIn(file, s.parameter))}, ${s.points} points${s.case ? `, case “${nameIn(file.cases, s.case)}”` : ""}${s.combination ? `, combination “${nameIn(file.combinations, s.combination)}”` : ""}${plots}`;
 }
 
 function underlayText(u: UnderlayFile): string {

@@ -33,7 +33,7 @@ describe("the comparison's words for a support whose kind changed", () => {
     expect(pad.fields.map((f) => f.field)).toEqual(["label", "kind", "mu"]);
     // the sweep's plotted quantity, named as its chart's legend names it (describeQuantity)
     expect(c.studies).toEqual([
-      { field: "sweep of P", before: "P from 0 to 500, 11 points; plots friction margin (μ·n − |t|) at neoprene pad", after: "P from 0 to 500, 11 points; plots normal force at bolted foot", change: "changed" },
+      { field: "sweep of P", before: "P from 0 to 500 N, 11 points; plots friction margin (μ·n − |t|) at neoprene pad", after: "P from 0 to 500 N, 11 points; plots normal force at bolted foot", change: "changed" },
     ]);
     render(<ChangesTable comparison={c} />);
     const rows = within(screen.getByTestId("field-changes")).getAllByRole("row").map((r) => [...r.querySelectorAll("td")].map((td) => td.textContent));

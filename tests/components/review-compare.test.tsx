@@ -65,7 +65,7 @@ describe("changes to the design studies", () => {
       { field: "case “High throw”", before: null, after: "High throw: theta = 60 deg", change: "added" },
       { field: "combination “Factored”", before: "Factored: 1.2 × Dead", after: "Factored: 1.4 × Low throw", change: "changed" },
       { field: "required factor against overturning", before: "1.5 (default)", after: "2", change: "changed" },
-      { field: "sweep of theta", before: "theta from 0 to 80, 41 points", after: null, change: "removed" },
+      { field: "sweep of theta", before: "theta from 0 to 80 deg, 41 points", after: null, change: "removed" },
       { field: "underlay", before: null, after: "upload u1, 0.005 m/px, corner (0, 3) m, turned 0°, opacity 0.6, locked", change: "added" },
     ]);
     expect(changeCount(c)).toBe(7);
@@ -80,7 +80,7 @@ describe("changes to the design studies", () => {
     expect(compareSketches(a, b).studies).toEqual([
       { field: "case “Dead”", before: "Dead: flow × 0", after: "Dead: flow × 0, only in combinations", change: "changed" },
       { field: "combination “Factored”", before: "Factored: 1.2 × Dead", after: "Factored: 1.2 × Dead; required 1 against overturning", change: "changed" },
-      { field: "sweep of theta", before: "theta from 0 to 80, 41 points", after: "theta from 0 to 80, 41 points, combination “Factored”", change: "changed" },
+      { field: "sweep of theta", before: "theta from 0 to 80 deg, 41 points", after: "theta from 0 to 80 deg, 41 points, combination “Factored”", change: "changed" },
     ]);
   });
 

@@ -7,29 +7,12 @@ import { describe, expect, it } from "vitest";
 import { actionById, copySelection, type ActionContext } from "@/canvas/actions";
 import { deleteElements, deletionEffects } from "@/canvas/commands/elements";
 import { runCommand } from "@/canvas/commands/define";
-import { emptySketch } from "@/canvas/model/elements";
-import { newBody } from "@/canvas/model/factory";
 import { createEditorStore } from "@/canvas/store";
 import { parseSketch } from "@/solver";
 import type { SketchFile } from "@/solver/schema";
+import { skidWithKeptSweeps } from "../fixtures/skid-kept-sweeps";
 
-/** A pump skid on two feet with a discharge nozzle; two kept sweeps of the nozzle pressure. */
-function skid(): SketchFile {
-  return {
-    ...emptySketch("Pump skid"),
-    parameters: { p: "4 bar" },
-    bodies: [newBody("b1", [[0, 0], [2, 0], [2, 1], [0, 1]], "Skid")],
-    supports: [
-      { id: "front", body: "b1", kind: "contact", at: [0.25, 0], angle: 90, mu: 0.3 },
-      { id: "rear", body: "b1", kind: "contact", at: [1.75, 0], angle: 90, mu: 0.3 },
-    ],
-    ports: [{ id: "out", body: "b1", kind: "outlet", at: [2, 0.5], angle: 0, area: "0.002 m^2", velocity: "3 m/s", pressure: "p", density: "998 kg/m^3" }],
-    sweeps: [
-      { id: "sweep-1", parameter: "p", from: 0, to: 10, points: 11, quantities: [{ support: "front", component: "margin" }, { support: "rear", component: "frictionMargin" }] },
-      { id: "sweep-2", parameter: "p", from: 0, to: 20, points: 21, quantities: [{ support: "front", component: "resultant" }] },
-    ],
-  } as SketchFile;
-}
+const skid = () => skidWithKeptSweeps();
 
 const ctxOf = (sketch: SketchFile) => {
   const editor = createEditorStore({ sketch });
@@ -69,7 +52,7 @@ describe("deleting a support a kept sweep plots", () => {
     actionById("edit.delete").run(ctx);
     expect(editor.getState().sketch.supports.map((s) => s.id)).toEqual(["rear"]);
     expect(editor.getState().notice).toBe(
-      "Deleted 1 element. The kept sweep of p from 0 to 10 no longer plots front; the kept sweep of p from 0 to 20 plotted only front and is gone. Undo brings them back.",
+      "Deleted 1 element. The kept sweep of p from 0 to 10 bar no longer plots front; the kept sweep of p from 0 to 20 bar plotted only front and is gone. Undo brings them back.",
     );
     editor.getState().undo();
     expect(editor.getState().sketch).toEqual(skid());
@@ -80,7 +63,7 @@ describe("deleting a support a kept sweep plots", () => {
     editor.getState().select(["front"]);
     expect(copySelection(ctx, true)).not.toBeNull();
     expect(editor.getState().notice).toBe(
-      "Cut 1 element: paste them here or in another sketch. The kept sweep of p from 0 to 10 no longer plots front; the kept sweep of p from 0 to 20 plotted only front and is gone. Undo brings them back.",
+      "Cut 1 element: paste them here or in another sketch. The kept sweep of p from 0 to 10 bar no longer plots front; the kept sweep of p from 0 to 20 bar plotted only front and is gone. Undo brings them back.",
     );
   });
 
