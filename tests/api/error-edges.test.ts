@@ -12,9 +12,8 @@ import * as membersRoute from "@/app/api/workspaces/[id]/members/route";
 import { db } from "@/db";
 import { session, sketchVersion } from "@/db/schema";
 import { createSketch } from "@/lib/sketches";
-import { parseSketch } from "@/solver";
-import { call, makeAccount, makeWorkspace, signIn, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { call, makeTeam, signIn, type Person } from "./helpers";
+import { fixture, parsedFixture } from "./sketch-fixtures";
 
 const ENDED = "Your session has ended (it expired, you signed out, or your password was changed): sign in again.";
 let owner: Person;
@@ -23,15 +22,8 @@ let ws: string;
 let sketchId: string;
 
 beforeAll(async () => {
-  owner = await makeAccount("edges-owner");
-  viewer = await makeAccount("edges-viewer");
-  ws = await makeWorkspace("Edges bay", [
-    [owner, "owner"],
-    [viewer, "viewer"],
-  ]);
-  const parsed = parseSketch(fixture("pump-skid-discharge"));
-  if (!parsed.ok) throw new Error("fixture does not parse");
-  sketchId = (await createSketch(ws, owner, { title: "Edges skid", document: parsed, message: "v1" })).sketch.id;
+  ({ ws, owner, viewer } = await makeTeam("Edges bay", { owner: "owner", viewer: "viewer" }, { prefix: "edges" }));
+  sketchId = (await createSketch(ws, owner, { title: "Edges skid", document: parsedFixture("pump-skid-discharge"), message: "v1" })).sketch.id;
 });
 
 const tokenOf = (cookie: string) => decodeURIComponent(/counterpoise\.session_token=([^;]+)/.exec(cookie)![1]).split(".")[0];

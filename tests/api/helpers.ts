@@ -54,6 +54,25 @@ export async function makeWorkspace(name: string, members: Array<[{ id: string }
   return ws.id;
 }
 
+/** How a team names a member: the role, or the role with the account's tag and name. */
+export type TeamMember = Role | { role: Role; tag?: string; name?: string };
+
+/**
+ * A workspace and signed-in accounts in it, one per key, made in the order written: the key is the
+ * account's tag (`prefix-key` with a prefix), the value its role. `{ ws, ...people }`.
+ */
+export async function makeTeam<K extends string>(workspaceName: string, members: Record<K, TeamMember>, opts: { prefix?: string } = {}): Promise<{ ws: string } & Record<K, Person>> {
+  const people = {} as Record<K, Person>;
+  const roles: Array<[Person, Role]> = [];
+  for (const key of Object.keys(members) as K[]) {
+    const m = members[key];
+    const { role, tag, name } = typeof m === "string" ? { role: m, tag: undefined, name: undefined } : m;
+    people[key] = await makeAccount(tag ?? (opts.prefix ? `${opts.prefix}-${key}` : key), name ? { name } : {});
+    roles.push([people[key], role]);
+  }
+  return { ws: await makeWorkspace(workspaceName, roles), ...people };
+}
+
 export async function roleOf(workspaceId: string, userId: string): Promise<Role | null> {
   const rows = await db.select({ role: membership.role, userId: membership.userId }).from(membership).where(eq(membership.workspaceId, workspaceId));
   return rows.find((r) => r.userId === userId)?.role ?? null;

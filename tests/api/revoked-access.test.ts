@@ -14,8 +14,9 @@ import * as workspacesRoute from "@/app/api/workspaces/route";
 import { db } from "@/db";
 import { comment, sketchVersion, upload } from "@/db/schema";
 import { createUnderlay } from "@/lib/uploads/service";
-import { call, makeAccount, makeWorkspace, roleOf, type Person } from "./helpers";
-import { edited, fixture } from "./sketch-fixtures";
+import { call, makeAccount, makeTeam, makeWorkspace, roleOf, type Person } from "./helpers";
+import { edited } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 let owner: Person;
 let member: Person;
@@ -25,15 +26,8 @@ let uploadId: string;
 let png: Buffer;
 
 beforeEach(async () => {
-  owner = await makeAccount("revoke-owner");
-  member = await makeAccount("revoke-member");
-  ws = await makeWorkspace("Revocation bay", [
-    [owner, "owner"],
-    [member, "editor"],
-  ]);
-  const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: member.cookie, body: { title: "Skid", document: fixture("pump-skid-discharge") } });
-  expect(made.status).toBe(201);
-  sketchId = made.body.sketch.id;
+  ({ ws, owner, member } = await makeTeam("Revocation bay", { owner: "owner", member: "editor" }, { prefix: "revoke" }));
+  sketchId = await postSketch(ws, member, "Skid");
   png = await sharp({ create: { width: 8, height: 6, channels: 3, background: "#ffffff" } }).png().toBuffer();
   uploadId = (await createUnderlay(sketchId, member, async () => ({ bytes: png, name: "ga.png" }))).id;
 });

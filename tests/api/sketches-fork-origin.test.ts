@@ -5,8 +5,9 @@ import * as forkRoute from "@/app/api/sketches/[id]/fork/route";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
-import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { edited, fixture } from "./sketch-fixtures";
+import { call, makeTeam, makeWorkspace, type Person } from "./helpers";
+import { edited } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 let olivia: Person;
 let eddie: Person;
@@ -14,19 +15,13 @@ let ws: string;
 let eddiesWs: string;
 
 beforeAll(async () => {
-  olivia = await makeAccount("olivia");
-  eddie = await makeAccount("eddie");
-  ws = await makeWorkspace("Origin bay", [
-    [olivia, "owner"],
-    [eddie, "editor"],
-  ]);
+  ({ ws, olivia, eddie } = await makeTeam("Origin bay", { olivia: "owner", eddie: "editor" }));
   eddiesWs = await makeWorkspace("Eddie's own", [[eddie, "owner"]]);
 });
 
 describe("a fork whose origin is deleted", () => {
   it("keeps the origin's title and version, marked deleted, on the sketch and in the listing", async () => {
-    const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title: "Riser bend", document: fixture("pipe-bend-anchor") } });
-    const id = made.body.sketch.id;
+    const id = await postSketch(ws, eddie, "Riser bend", "pipe-bend-anchor");
     const v2 = await call(versionsRoute.POST, {
       method: "POST",
       params: { id },
@@ -56,13 +51,11 @@ describe("a fork's default title", () => {
   it("counts forks of forks and keeps the suffix within the 120 characters a title may have", async () => {
     const long = `Pump skid ${"x".repeat(110)}`;
     expect(long.length).toBe(120);
-    const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title: long, document: fixture("pipe-bend-anchor") } });
-    const first = await call(forkRoute.POST, { method: "POST", params: { id: made.body.sketch.id }, cookie: eddie.cookie, body: { workspaceId: eddiesWs } });
+    const first = await call(forkRoute.POST, { method: "POST", params: { id: await postSketch(ws, eddie, long, "pipe-bend-anchor") }, cookie: eddie.cookie, body: { workspaceId: eddiesWs } });
     expect(first.body.sketch.title).toHaveLength(120);
     expect(first.body.sketch.title.endsWith("x (fork)")).toBe(true);
 
-    const bend = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title: "Riser bend", document: fixture("pipe-bend-anchor") } });
-    const a = await call(forkRoute.POST, { method: "POST", params: { id: bend.body.sketch.id }, cookie: eddie.cookie, body: { workspaceId: eddiesWs } });
+    const a = await call(forkRoute.POST, { method: "POST", params: { id: await postSketch(ws, eddie, "Riser bend", "pipe-bend-anchor") }, cookie: eddie.cookie, body: { workspaceId: eddiesWs } });
     expect(a.body.sketch.title).toBe("Riser bend (fork)");
     const b = await call(forkRoute.POST, { method: "POST", params: { id: a.body.sketch.id }, cookie: eddie.cookie, body: { workspaceId: eddiesWs } });
     expect(b.body.sketch.title).toBe("Riser bend (fork 2)");

@@ -11,26 +11,20 @@ import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
 import { appRateLimit, auditEvent, sketch, sketchVersion } from "@/db/schema";
 import { solveFile } from "@/solver";
-import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
+import { call, makeTeam, type Person } from "./helpers";
 import { edited, fixture } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 let eddie: Person;
 let olivia: Person;
 let ws: string;
 
 beforeAll(async () => {
-  eddie = await makeAccount("eddie");
-  olivia = await makeAccount("olivia");
-  ws = await makeWorkspace("Race track", [
-    [olivia, "owner"],
-    [eddie, "editor"],
-  ]);
+  ({ ws, olivia, eddie } = await makeTeam("Race track", { olivia: "owner", eddie: "editor" }));
 });
 
 async function newSketch(title: string): Promise<string> {
-  const res = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title, document: fixture("pump-skid-discharge") } });
-  expect(res.status).toBe(201);
-  return res.body.sketch.id;
+  return postSketch(ws, eddie, title);
 }
 
 async function counts(sketchId: string) {
