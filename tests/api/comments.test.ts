@@ -8,12 +8,12 @@ import * as commentRoute from "@/app/api/comments/[commentId]/route";
 import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
-import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import { db } from "@/db";
 import { devMail, membership, user } from "@/db/schema";
 import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Person, type Json } from "./helpers";
 import { fixture } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 let stopMail: () => Promise<void>;
 let eddie: Person;
@@ -42,8 +42,7 @@ beforeAll(async () => {
 afterAll(async () => stopMail?.());
 
 async function newSketch(): Promise<string> {
-  const res = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title: "Skid for comments", document: fixture("pump-skid-discharge") } });
-  return res.body.sketch.id;
+  return postSketch(ws, eddie, "Skid for comments");
 }
 const p = (sketchId: string) => ({ id: sketchId, number: "1" });
 const post = (sketchId: string, who: Person, body: Record<string, unknown>) => call(commentsRoute.POST, { method: "POST", params: p(sketchId), cookie: who.cookie, body });

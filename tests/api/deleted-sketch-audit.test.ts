@@ -4,9 +4,9 @@ import { describe, expect, it } from "vitest";
 import * as auditRoute from "@/app/api/workspaces/[id]/audit/route";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
-import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { call, makeAccount, makeWorkspace } from "./helpers";
-import { edited, fixture } from "./sketch-fixtures";
+import { edited } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 type Entry = { action: string; targetId: string | null; targetDeleted: boolean };
 
@@ -14,9 +14,8 @@ describe("the audit log's entries about a deleted sketch", () => {
   it("are marked as such in one listing; a kept sketch's and other entries are not", async () => {
     const olivia = await makeAccount("olivia", { name: "Olivia Auditor" });
     const ws = await makeWorkspace("Audit after deletion", [[olivia, "owner"]]);
-    const create = (title: string) => call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: olivia.cookie, body: { title, document: fixture("pipe-bend-anchor") } });
-    const gone = (await create("Riser bend")).body.sketch.id as string;
-    const kept = (await create("Pump skid")).body.sketch.id as string;
+    const gone = await postSketch(ws, olivia, "Riser bend", "pipe-bend-anchor");
+    const kept = await postSketch(ws, olivia, "Pump skid", "pipe-bend-anchor");
     for (const id of [gone, kept]) {
       const saved = await call(versionsRoute.POST, {
         method: "POST",

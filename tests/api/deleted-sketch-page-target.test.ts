@@ -5,13 +5,12 @@ import { renderToStaticMarkup } from "react-dom/server";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { NoSuchSketch } from "@/components/shell/NotHere";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
-import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { editorPageDeletion, pageTarget } from "@/lib/page-target";
 import SavedSketchNotFound from "@/app/sketches/[id]/not-found";
 import { SKETCH_NOT_FOUND_MESSAGE } from "@/components/versions/editor/notFound";
 import { PATH_HEADER } from "@/lib/request-path";
-import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { call, makeAccount, makeTeam, makeWorkspace, type Person } from "./helpers";
+import { postSketch } from "./sketch-setup";
 
 // the page helpers read the request's cookies and address through next/headers; here they are this test's
 const asked = vi.hoisted(() => ({ cookie: "", path: "" }));
@@ -26,18 +25,13 @@ let id: string;
 let before: number;
 
 beforeAll(async () => {
-  olivia = await makeAccount("olivia", { name: "Olivia Deleter" });
-  vera = await makeAccount("vera");
+  ({ ws, olivia, vera } = await makeTeam("Deletions on the page", { olivia: { role: "owner", name: "Olivia Deleter" }, vera: "viewer" }));
   outsider = await makeAccount("outsider");
-  ws = await makeWorkspace("Deletions on the page", [
-    [olivia, "owner"],
-    [vera, "viewer"],
-  ]);
   elsewhere = await makeWorkspace("Another bay", [
     [vera, "owner"],
     [outsider, "owner"],
   ]);
-  id = (await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: olivia.cookie, body: { title: "Riser bend", document: fixture("pipe-bend-anchor") } })).body.sketch.id;
+  id = await postSketch(ws, olivia, "Riser bend", "pipe-bend-anchor");
   before = Date.now();
   expect((await call(sketchRoute.DELETE, { method: "DELETE", params: { id }, cookie: olivia.cookie })).status).toBe(200);
 });

@@ -58,19 +58,27 @@ export async function makeWorkspace(name: string, members: Array<[{ id: string }
 export type TeamMember = Role | { role: Role; tag?: string; name?: string };
 
 /**
- * A workspace and signed-in accounts in it, one per key, made in the order written: the key is the
- * account's tag (`prefix-key` with a prefix), the value its role. `{ ws, ...people }`.
+ * A workspace and signed-in accounts in it, one per key (members in the order written): the key is
+ * the account's tag (`prefix-key` with a prefix), the value its role. `{ ws, ...people }`.
  */
 export async function makeTeam<K extends string>(workspaceName: string, members: Record<K, TeamMember>, opts: { prefix?: string } = {}): Promise<{ ws: string } & Record<K, Person>> {
-  const people = {} as Record<K, Person>;
-  const roles: Array<[Person, Role]> = [];
-  for (const key of Object.keys(members) as K[]) {
-    const m = members[key];
-    const { role, tag, name } = typeof m === "string" ? { role: m, tag: undefined, name: undefined } : m;
-    people[key] = await makeAccount(tag ?? (opts.prefix ? `${opts.prefix}-${key}` : key), name ? { name } : {});
-    roles.push([people[key], role]);
-  }
-  return { ws: await makeWorkspace(workspaceName, roles), ...people };
+  const keys = Object.keys(members) as K[];
+  const made = await Promise.all(
+    keys.map((key) => {
+      const m: TeamMember = members[key];
+      const { tag, name } = typeof m === "string" ? { tag: undefined, name: undefined } : m;
+      return makeAccount(tag ?? (opts.prefix ? `${opts.prefix}-${key}` : key), name ? { name } : {});
+    }),
+  );
+  const people = Object.fromEntries(keys.map((key, i) => [key, made[i]])) as Record<K, Person>;
+  const ws = await makeWorkspace(
+    workspaceName,
+    keys.map((key, i): [Person, Role] => {
+      const m: TeamMember = members[key];
+      return [made[i], typeof m === "string" ? m : m.role];
+    }),
+  );
+  return { ws, ...people };
 }
 
 export async function roleOf(workspaceId: string, userId: string): Promise<Role | null> {

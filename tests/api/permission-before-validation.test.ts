@@ -8,14 +8,14 @@ import * as forkRoute from "@/app/api/sketches/[id]/fork/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
-import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
 import { comment, signOff, sketchVersion } from "@/db/schema";
-import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
+import { call, ensureMailFake, makeAccount, makeTeam, type Person } from "./helpers";
 import type { Handler } from "./matrix-types";
 import { edited, fixture } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
-let owner: Person, editor: Person, checker: Person, viewer: Person, outsider: Person;
+let editor: Person, checker: Person, viewer: Person, outsider: Person;
 let ws: string;
 let sketchId: string;
 let stopMail: () => Promise<void>;
@@ -23,16 +23,9 @@ afterAll(async () => stopMail?.());
 
 beforeAll(async () => {
   stopMail = await ensureMailFake();
-  [owner, editor, checker, viewer, outsider] = await Promise.all(["pbv-owner", "pbv-editor", "pbv-checker", "pbv-viewer", "pbv-outsider"].map((n) => makeAccount(n)));
-  ws = await makeWorkspace("Permission first bay", [
-    [owner, "owner"],
-    [editor, "editor"],
-    [checker, "checker"],
-    [viewer, "viewer"],
-  ]);
-  const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: editor.cookie, body: { title: "Permission first skid", document: fixture("pump-skid-discharge") } });
-  expect(made.status).toBe(201);
-  sketchId = made.body.sketch.id;
+  ({ ws, editor, checker, viewer } = await makeTeam("Permission first bay", { owner: "owner", editor: "editor", checker: "checker", viewer: "viewer" }, { prefix: "pbv" }));
+  outsider = await makeAccount("pbv-outsider");
+  sketchId = await postSketch(ws, editor, "Permission first skid");
 });
 
 /** A version whose document breaks two fields (a velocity in kg, a support on no body). */

@@ -6,22 +6,14 @@ import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import * as auditRoute from "@/app/api/workspaces/[id]/audit/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { refusedWords } from "@/lib/roles";
-import { call, makeAccount, makeWorkspace } from "./helpers";
-import { edited, fixture } from "./sketch-fixtures";
+import { call, makeTeam } from "./helpers";
+import { edited } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 describe("a 403 says the role, the action and who may take it", () => {
   it("a viewer saving, renaming or deleting a sketch, a checker creating one, an editor reading the audit log", async () => {
-    const editor = await makeAccount("words-editor");
-    const checker = await makeAccount("words-checker");
-    const viewer = await makeAccount("words-viewer");
-    const ws = await makeWorkspace("Words bay", [
-      [editor, "editor"],
-      [checker, "checker"],
-      [viewer, "viewer"],
-    ]);
-    const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: editor.cookie, body: { title: "Skid", document: fixture("pump-skid-discharge") } });
-    expect(made.status).toBe(201);
-    const id = made.body.sketch.id as string;
+    const { ws, editor, checker, viewer } = await makeTeam("Words bay", { editor: "editor", checker: "checker", viewer: "viewer" }, { prefix: "words" });
+    const id = await postSketch(ws, editor, "Skid");
 
     const save = await call(versionsRoute.POST, { method: "POST", params: { id }, cookie: viewer.cookie, body: { baseVersion: 1, message: "x", document: edited("pump-skid-discharge", (d) => (d.title = "x")) } });
     expect(save.status).toBe(403);

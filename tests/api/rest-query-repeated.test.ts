@@ -3,7 +3,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 let eddie: Person;
 let ws: string;
@@ -11,7 +11,7 @@ let ws: string;
 beforeAll(async () => {
   eddie = await makeAccount("eddie");
   ws = await makeWorkspace("Repeats", [[eddie, "editor"]]);
-  await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title: "Bend", tags: ["anchors"], document: fixture("pipe-bend-anchor") } });
+  await postSketch(ws, eddie, "Bend", "pipe-bend-anchor", { tags: ["anchors"] });
 });
 
 describe("a query parameter given twice", () => {

@@ -6,9 +6,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as queueRoute from "@/app/api/workspaces/[id]/review-queue/route";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
-import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
-import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
+import { call, ensureMailFake, makeAccount, makeTeam, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 let ws: string;
 let owner: Person, editor: Person, checker: Person, viewer: Person, outsider: Person;
@@ -17,14 +17,12 @@ afterAll(async () => stopMail?.());
 
 beforeAll(async () => {
   stopMail = await ensureMailFake();
-  [owner, editor, checker, viewer, outsider] = await Promise.all(["q-owner", "q-editor", "q-checker", "q-viewer", "q-outsider"].map((n) => makeAccount(n)));
-  ws = await makeWorkspace("Queue", [[owner, "owner"], [editor, "editor"], [checker, "checker"], [viewer, "viewer"]]);
+  ({ ws, owner, editor, checker, viewer } = await makeTeam("Queue", { owner: "owner", editor: "editor", checker: "checker", viewer: "viewer" }, { prefix: "q" }));
+  outsider = await makeAccount("q-outsider");
 });
 
 async function sketchBy(who: Person, title: string): Promise<string> {
-  const r = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: who.cookie, body: { title, document: fixture("pipe-bend-anchor") } });
-  expect(r.status).toBe(201);
-  return (r.body as { sketch: { id: string } }).sketch.id;
+  return postSketch(ws, who, title, "pipe-bend-anchor");
 }
 const step = async (sketchId: string, number: number, who: Person, s: string, note = "") => {
   const r = await call(signoffRoute.POST, { method: "POST", params: { id: sketchId, number: String(number) }, cookie: who.cookie, body: { step: s, note } });

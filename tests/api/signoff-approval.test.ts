@@ -3,11 +3,10 @@
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
-import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
 import { membership } from "@/db/schema";
 import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { postSketch } from "./sketch-setup";
 
 const PREPARED = "You prepared this version: another owner must approve it.";
 const CHECKED = "You checked this version: another owner must approve it.";
@@ -23,9 +22,7 @@ beforeAll(async () => {
 });
 
 async function sketchIn(ws: string, who: Person, title: string): Promise<string> {
-  const r = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: who.cookie, body: { title, document: fixture("pipe-bend-anchor") } });
-  expect(r.status).toBe(201);
-  return r.body.sketch.id;
+  return postSketch(ws, who, title, "pipe-bend-anchor");
 }
 const step = async (sketchId: string, who: Person, s: string) => {
   const r = await call(signoffRoute.POST, { method: "POST", params: { id: sketchId, number: "1" }, cookie: who.cookie, body: { step: s } });

@@ -8,8 +8,8 @@ import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
 import { devMail } from "@/db/schema";
-import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Json, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { call, ensureMailFake, makeTeam, waitForMail, type Json, type Person } from "./helpers";
+import { postSketch } from "./sketch-setup";
 
 let owner: Person;
 let author: Person;
@@ -21,16 +21,8 @@ const title = `Notice skid ${Date.now()}`;
 
 beforeAll(async () => {
   await ensureMailFake();
-  [owner, author, checker, viewer] = await Promise.all(["owner", "author", "checker", "viewer"].map((t) => makeAccount(`notice-${t}`)));
-  ws = await makeWorkspace("Notice bay", [
-    [owner, "owner"],
-    [author, "editor"],
-    [checker, "checker"],
-    [viewer, "viewer"],
-  ]);
-  const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: author.cookie, body: { title, document: fixture("pipe-bend-anchor") } });
-  expect(made.status).toBe(201);
-  sketchId = made.body.sketch.id;
+  ({ ws, owner, author, checker, viewer } = await makeTeam("Notice bay", { owner: "owner", author: "editor", checker: "checker", viewer: "viewer" }, { prefix: "notice" }));
+  sketchId = await postSketch(ws, author, title, "pipe-bend-anchor");
 });
 
 const take = (who: Person, step: string, note?: string) =>

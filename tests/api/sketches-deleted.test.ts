@@ -4,9 +4,8 @@ import { beforeAll, describe, expect, it } from "vitest";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as versionRoute from "@/app/api/sketches/[id]/versions/[number]/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
-import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
-import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { call, makeAccount, makeTeam, type Person } from "./helpers";
+import { postSketch } from "./sketch-setup";
 
 let olivia: Person;
 let vera: Person;
@@ -16,14 +15,9 @@ let id: string;
 let deletedAt: number;
 
 beforeAll(async () => {
-  olivia = await makeAccount("olivia", { name: "Olivia Deleter" });
-  vera = await makeAccount("vera");
+  ({ ws, olivia, vera } = await makeTeam("Deletions", { olivia: { role: "owner", name: "Olivia Deleter" }, vera: "viewer" }));
   outsider = await makeAccount("outsider");
-  ws = await makeWorkspace("Deletions", [
-    [olivia, "owner"],
-    [vera, "viewer"],
-  ]);
-  id = (await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: olivia.cookie, body: { title: "Riser bend", document: fixture("pipe-bend-anchor") } })).body.sketch.id;
+  id = await postSketch(ws, olivia, "Riser bend", "pipe-bend-anchor");
   const before = Date.now();
   expect((await call(sketchRoute.DELETE, { method: "DELETE", params: { id }, cookie: olivia.cookie })).status).toBe(200);
   deletedAt = before;
