@@ -6,10 +6,9 @@ import { db } from "@/db";
 import { invitation } from "@/db/schema";
 import { hashInvitationToken, newInvitationToken } from "@/lib/invitations";
 import { createSketch } from "@/lib/sketches";
-import { parseSketch } from "@/solver";
 import { isNotAllowed, routeFiles, routePath } from "./route-files";
 import { call, ensureMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
-import { fixture as sketchFile } from "./sketch-fixtures";
+import { fixture as sketchFile, parsedFixture } from "./sketch-fixtures";
 import { REVIEW_ROWS } from "./matrix-review-rows";
 import { STUDIES_ROWS } from "./matrix-studies-rows";
 import { UPLOADS_ROWS } from "./matrix-uploads-rows";
@@ -134,9 +133,7 @@ describe("authorization matrix of every API route", () => {
       return { token, id: row.id };
     };
     const pending = await addInvitation(uniqueEmail("pending"));
-    const parsed = parseSketch(sketchFile("pump-skid-discharge"));
-    if (!parsed.ok) throw new Error("fixture does not parse");
-    const made = await createSketch(ws, people.editor, { title: "Matrix skid", document: parsed, message: "v1" });
+    const made = await createSketch(ws, people.editor, { title: "Matrix skid", document: parsedFixture("pump-skid-discharge"), message: "v1" });
     return {
       ws,
       sketchId: made.sketch.id,

@@ -14,11 +14,10 @@ import { addComment } from "@/lib/review/comments";
 import { createSketch } from "@/lib/sketches";
 import { s3 } from "@/lib/storage";
 import { createUnderlay } from "@/lib/uploads/service";
-import { parseSketch } from "@/solver";
 import { isNotAllowed, routeFiles, routePath } from "./route-files";
 import { call, ensureMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 import type { Handler } from "./matrix-types";
-import { fixture as sketchFile } from "./sketch-fixtures";
+import { parsedFixture } from "./sketch-fixtures";
 
 const MUTATIONS = ["POST", "PUT", "PATCH", "DELETE"] as const;
 
@@ -87,9 +86,7 @@ describe("bad bodies on every route that takes one: 4xx, never 500, nothing writ
       [owner, "owner"],
       [target, "viewer"],
     ]);
-    const parsed = parseSketch(sketchFile("pump-skid-discharge"));
-    if (!parsed.ok) throw new Error("fixture does not parse");
-    const made = await createSketch(ws, owner, { title: "Bad body skid", document: parsed, message: "v1" });
+    const made = await createSketch(ws, owner, { title: "Bad body skid", document: parsedFixture("pump-skid-discharge"), message: "v1" });
     const commentId = (await addComment(made.sketch.id, 1, owner, { body: "A remark" })).id;
     const png = await sharp({ create: { width: 8, height: 6, channels: 3, background: "#ffffff" } }).png().toBuffer();
     const uploadId = (await createUnderlay(made.sketch.id, owner, async () => ({ bytes: png, name: "ga.png" }))).id;

@@ -4,9 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getVersionForCalcSheet } from "@/db/queries/review";
 import { takeSignOffStep } from "@/lib/review/signoff";
 import { createSketch } from "@/lib/sketches";
-import { parseSketch } from "@/solver";
 import { ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { parsedFixture } from "./sketch-fixtures";
 
 let stopMail: () => Promise<void>;
 let prep: Person;
@@ -29,8 +28,7 @@ describe("getVersionForCalcSheet", () => {
       [chk, "checker"],
       [lead, "owner"],
     ]);
-    const parsed = parseSketch(fixture("pipe-bend-anchor"));
-    if (!parsed.ok) throw new Error("fixture does not parse");
+    const parsed = parsedFixture("pipe-bend-anchor");
     const made = await createSketch(ws, prep, { title: "Bend anchor", document: parsed, message: "As designed" });
     const sketchId = made.sketch.id;
 

@@ -3,12 +3,11 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET } from "@/app/api/sketches/[id]/versions/[number]/calc-sheet/route";
 import { createSketch, saveVersion } from "@/lib/sketches";
-import { parseSketch } from "@/solver";
 import { appOrigin } from "@/lib/env";
 import { addComment, resolveThread } from "@/lib/review/comments";
 import { takeSignOffStep } from "@/lib/review/signoff";
 import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture as sketchFile } from "./sketch-fixtures";
+import { parsedFixture } from "./sketch-fixtures";
 import { pdfText } from "../support/pdf-text";
 
 describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
@@ -21,8 +20,7 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
     owner = await makeAccount("calc-owner");
     outsider = await makeAccount("calc-outsider");
     const ws = await makeWorkspace("Calc sheet works", [[owner, "owner"]]);
-    const parsed = parseSketch(sketchFile("pipe-bend-anchor"));
-    if (!parsed.ok) throw new Error("fixture does not parse");
+    const parsed = parsedFixture("pipe-bend-anchor");
     const made = await createSketch(ws, owner, { title: "Bend on an anchor", document: parsed, message: "first" });
     sketchId = made.sketch.id;
   }, 60000);
@@ -73,8 +71,7 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
       [chk, "checker"],
       [owner, "owner"],
     ]);
-    const parsed = parseSketch(sketchFile("pipe-bend-anchor"));
-    if (!parsed.ok) throw new Error("fixture does not parse");
+    const parsed = parsedFixture("pipe-bend-anchor");
     const made = await createSketch(ws, prep, { title: "Bend revised", document: parsed, message: "as built" });
     const id = made.sketch.id;
     await takeSignOffStep(id, 1, prep, { step: "submit" });

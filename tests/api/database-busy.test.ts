@@ -8,9 +8,8 @@ import { db } from "@/db";
 import { BUSY_DIGEST, isDatabaseUnavailable } from "@/lib/db-unavailable";
 import { errorResponse } from "@/lib/errors";
 import { createSketch } from "@/lib/sketches";
-import { parseSketch } from "@/solver";
 import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture as sketchFile } from "./sketch-fixtures";
+import { parsedFixture } from "./sketch-fixtures";
 
 // the page helpers read the request's cookies through next/headers; here they are this test's
 const asked = vi.hoisted(() => ({ cookie: "" }));
@@ -33,9 +32,7 @@ let sketchId: string;
 beforeAll(async () => {
   owner = await makeAccount("busy-owner");
   ws = await makeWorkspace("Busy bay", [[owner, "owner"]]);
-  const parsed = parseSketch(sketchFile("pump-skid-discharge"));
-  if (!parsed.ok) throw new Error("fixture does not parse");
-  sketchId = (await createSketch(ws, owner, { title: "Busy skid", document: parsed, message: "v1" })).sketch.id;
+  sketchId = (await createSketch(ws, owner, { title: "Busy skid", document: parsedFixture("pump-skid-discharge"), message: "v1" })).sketch.id;
 });
 
 /** A fresh copy of the app's modules over a pool of two connections that waits 4 s for one. */

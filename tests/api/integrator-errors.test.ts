@@ -11,9 +11,8 @@ import * as compareRoute from "@/app/api/sketches/[id]/compare/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
 import * as solveRoute from "@/app/api/solve/route";
 import { createSketch } from "@/lib/sketches";
-import { parseSketch } from "@/solver";
 import { call, makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture as sketchFile } from "./sketch-fixtures";
+import { fixture as sketchFile, parsedFixture } from "./sketch-fixtures";
 
 describe("errors an integrator can act on", () => {
   let owner: Person;
@@ -23,9 +22,7 @@ describe("errors an integrator can act on", () => {
   beforeAll(async () => {
     owner = await makeAccount("integrator");
     ws = await makeWorkspace("Integrator bay", [[owner, "owner"]]);
-    const parsed = parseSketch(sketchFile("pump-skid-discharge"));
-    if (!parsed.ok) throw new Error("fixture does not parse");
-    sketchId = (await createSketch(ws, owner, { title: "Integrator skid", document: parsed })).sketch.id;
+    sketchId = (await createSketch(ws, owner, { title: "Integrator skid", document: parsedFixture("pump-skid-discharge") })).sketch.id;
   });
 
   it("a query parameter the endpoint does not read is named, with the ones it does", async () => {

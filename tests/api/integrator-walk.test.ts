@@ -14,9 +14,8 @@ import { db } from "@/db";
 import { invitation, membership, sketchVersion } from "@/db/schema";
 import { hashInvitationToken, newInvitationToken } from "@/lib/invitations";
 import { createSketch } from "@/lib/sketches";
-import { parseSketch } from "@/solver";
 import { call, ensureMailFake, makeAccount, makeWorkspace, uniqueEmail, waitForMail, type Person } from "./helpers";
-import { fixture as sketchFile } from "./sketch-fixtures";
+import { fixture as sketchFile, parsedFixture } from "./sketch-fixtures";
 
 let owner: Person;
 let ws = "";
@@ -80,9 +79,7 @@ describe("GET /api/invitations/:token", () => {
 
 describe("a save on a base version the sketch never had", () => {
   it("is a 400 naming baseVersion and the newest version, not a conflict with someone who saved 'since'; nothing is written", async () => {
-    const parsed = parseSketch(sketchFile("pipe-bend-anchor"));
-    if (!parsed.ok) throw new Error("fixture does not parse");
-    const sketchId = (await createSketch(ws, owner, { title: "Bend at pier 7", document: parsed })).sketch.id;
+    const sketchId = (await createSketch(ws, owner, { title: "Bend at pier 7", document: parsedFixture("pipe-bend-anchor") })).sketch.id;
     const versions = async () => Number((await db.select({ n: count() }).from(sketchVersion).where(eq(sketchVersion.sketchId, sketchId)))[0].n);
 
     const { status, body } = await call(versionsRoute.POST, { method: "POST", params: { id: sketchId }, cookie: owner.cookie, body: { baseVersion: 7, message: "counted wrong", document: sketchFile("pipe-bend-anchor") } });
@@ -146,9 +143,7 @@ describe("a query parameter sent to an address that reads none", () => {
   });
 
   it("a read names each stray parameter once", async () => {
-    const parsed = parseSketch(sketchFile("pipe-bend-anchor"));
-    if (!parsed.ok) throw new Error("fixture does not parse");
-    const id = (await createSketch(ws, owner, { title: "Bend, read with a query", document: parsed })).sketch.id;
+    const id = (await createSketch(ws, owner, { title: "Bend, read with a query", document: parsedFixture("pipe-bend-anchor") })).sketch.id;
     const { status, body } = await call(sketchRoute.GET, { path: `/api/sketches/${id}?version=2&version=3&units=US`, params: { id }, cookie: owner.cookie });
     expect(status).toBe(400);
     expect(body.error.fields.map((f: { path: string }) => f.path)).toEqual(["query.version", "query.units"]);

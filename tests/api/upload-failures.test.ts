@@ -12,9 +12,8 @@ import { addComment } from "@/lib/review/comments";
 import { createSketch } from "@/lib/sketches";
 import { s3 } from "@/lib/storage";
 import { attachToComment, createUnderlay } from "@/lib/uploads/service";
-import { parseSketch } from "@/solver";
 import { makeAccount, makeWorkspace, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { parsedFixture } from "./sketch-fixtures";
 
 const globalForS3 = globalThis as unknown as { counterpoiseS3?: S3Client };
 
@@ -26,9 +25,7 @@ let working: S3Client;
 beforeEach(async () => {
   eddie = await makeAccount("upfail-eddie");
   ws = await makeWorkspace("Failing uploads", [[eddie, "editor"]]);
-  const parsed = parseSketch(fixture("pump-skid-discharge"));
-  if (!parsed.ok) throw new Error("fixture does not parse");
-  sketchId = (await createSketch(ws, eddie, { title: "Skid", document: parsed, message: "v1" })).sketch.id;
+  sketchId = (await createSketch(ws, eddie, { title: "Skid", document: parsedFixture("pump-skid-discharge"), message: "v1" })).sketch.id;
   working = s3();
 });
 
