@@ -22,8 +22,10 @@ import {
   stabilityTable,
   asDrawnStudy,
   withAsDrawnRun,
+  formatQuantity,
   type UnitSystem,
 } from "@/solver";
+import type { Port } from "@/solver/types";
 import { caseWarnings } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { combinationWarningWords } from "@/components/studies/casesText";
@@ -101,6 +103,8 @@ const CAUTION_BG = "#f6ebcf";
 
 /** The room (pt) a section heading takes: the space above it, its line and its rule. */
 const HEADING_ROOM = 32;
+/** The room (pt) under a heading for the first lines of prose (three lines at 9.5 pt, and a little). */
+const PROSE_KEEP = 40;
 
 const fmtDate = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
 
@@ -141,8 +145,9 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const left = doc.page.margins.left;
   const width = doc.page.width - left - doc.page.margins.right;
 
-  /** `keep`: the room (pt) the heading's first block needs on its page, so the two stay together */
-  const heading = (text: string, keep = 60) => {
+  /** `keep`: the room (pt) the heading's first block needs on its page, so the two stay together
+   *  (by default: a paragraph's first three lines, what `para` keeps on its first page) */
+  const heading = (text: string, keep = HEADING_ROOM + PROSE_KEEP) => {
     ensureSpace(doc, keep);
     doc.moveDown(0.6).font("Inter-SemiBold").fontSize(11.5).fillColor(INK).text(text, left, doc.y, { width });
     doc.moveTo(left, doc.y + 2).lineTo(left + width, doc.y + 2).lineWidth(0.6).strokeColor(RULE).stroke();
@@ -152,7 +157,20 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const tableHeading = (text: string, table: Table, options: DrawTableOptions = {}) => heading(text, HEADING_ROOM + tableLeadHeight(doc, table, width, options));
   // prose without kerning: a kerned "7," reads back (copied, or by a text reader) as "7 ,", and an
   // engineer copies figures out of the sheet
-  const para = (text: string, size = 9, color = SOFT) => doc.font("Inter").fontSize(size).fillColor(color).text(text, left, doc.y, { width, features: PROSE_FEATURES });
+  // a paragraph of up to three lines is never split across pages, a longer one leaves at least two
+  // lines on its first; `next`: the room (pt) what follows needs on the same page (a label's text)
+  const paraLead = (text: string, size = 9) => proseLead(doc, text, size, width);
+  const para = (text: string, size = 9, color = SOFT, next = 0) => {
+    ensureSpace(doc, paraLead(text, size) + next);
+    doc.font("Inter").fontSize(size).fillColor(color).text(text, left, doc.y, { width, features: PROSE_FEATURES });
+  };
+  /** A label over lines (a list's caption): kept on the page of the first line under it. */
+  const label = (text: string, first: string, size = 9, color = INK, firstSize = 8.5) => para(text, size, color, paraLead(first, firstSize));
+  const boldLabel = (text: string, first: string) => {
+    doc.font("Inter-SemiBold").fontSize(8.5);
+    ensureSpace(doc, doc.currentLineHeight(true) + paraLead(first, 8.5));
+    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text(text, left, doc.y, { width });
+  };
 
   // ---- title block
   titleBlock(doc, input, left, width);
@@ -186,7 +204,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const drawnLines = hasCases && !twin ? caseFindings(asDrawn, false) : [];
   if (drawnLines.length) {
     doc.moveDown(0.3);
-    para("Factors of safety as drawn:", 9, INK);
+    label("Factors of safety as drawn:", `• ${drawnLines[0]}`);
     for (const l of drawnLines) para(`• ${l}`, 8.5, ACCENT);
   }
   // and a case in which a contact lifts, a tie goes slack or a contact is over its own μ while the
@@ -194,7 +212,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const caseLines = [...caseFindings(named, hasCases), ...(hasCases ? caseStateFindings(named) : [])];
   if (caseLines.length) {
     doc.moveDown(0.3);
-    para(hasCases ? "In the cases and combinations:" : "Factors of safety:", 9, INK);
+    label(hasCases ? "In the cases and combinations:" : "Factors of safety:", `• ${caseLines[0]}`);
     for (const l of caseLines) para(`• ${l}`, 8.5, ACCENT);
   }
 
@@ -211,18 +229,24 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   doc.y += drawnHeight + 6;
 
   // ---- inputs: the sketch's notes first (the design basis its author wrote), then the values
-  heading("Inputs");
-  if (parsed.file.description?.trim()) {
-    para("Notes", 9, INK);
-    para(parsed.file.description.trim(), 8.5, SOFT);
+  const notes = parsed.file.description?.trim();
+  const inputTables = [
+    ...(Object.keys(parsed.parameterValues).length ? [parametersTable(parsed, units)] : []),
+    // the fields and kinds in the words of the properties form, not the file format's names
+    inputsTable(parsed, units, { field: fieldWords, kind: (k) => KIND_LABEL[k as ElementKind]?.toLowerCase() ?? k }),
+  ];
+  // the heading kept with the notes' label and first lines, or with the first table's header and row
+  doc.font("Inter").fontSize(9);
+  heading("Inputs", HEADING_ROOM + (notes ? doc.currentLineHeight(true) + paraLead(notes, 8.5) : tableLeadHeight(doc, inputTables[0], width)));
+  if (notes) {
+    label("Notes", notes);
+    para(notes, 8.5, SOFT);
     doc.moveDown(0.4);
   }
-  if (Object.keys(parsed.parameterValues).length) drawTable(doc, parametersTable(parsed, units), left, width);
-  // the fields and kinds in the words of the properties form, not the file format's names
-  drawTable(doc, inputsTable(parsed, units, { field: fieldWords, kind: (k) => KIND_LABEL[k as ElementKind]?.toLowerCase() ?? k }), left, width);
+  for (const t of inputTables) drawTable(doc, t, left, width);
 
   // ---- cases
-  if (parsed.file.cases?.length || parsed.file.combinations?.length) {
+  if (hasCases) {
     heading("Operating cases and combinations");
     for (const c of parsed.file.cases ?? []) {
       const over = Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${v}`);
@@ -286,30 +310,43 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   drawTable(doc, stabilityRows, left, width, { groupBy: "case" });
 
   // ---- sweeps: each on its saved case, one chart per unit (forces, moments, ratios)
+  const chartHeight = width * (260 / 500);
   for (const sw of parsed.file.sweeps ?? []) {
-    ensureSpace(doc, 320);
     const caseName = sw.case ? (parsed.file.cases?.find((c) => c.id === sw.case)?.name ?? sw.case) : null;
     const combination = sw.combination ? parsed.file.combinations?.find((k) => k.id === sw.combination) : undefined;
     const on = sw.combination ? ` — combination ${combination?.name ?? sw.combination}` : caseName ? ` — case ${caseName}` : " — as drawn";
-    heading(`Sweep of ${parameterWords(sw.parameter)}${on}`);
+    const intro: string[] = [];
     // a case that sets the swept parameter itself: the sweep's values stand in for the case's
     const overridden = sw.case ? parsed.file.cases?.find((c) => c.id === sw.case)?.parameters?.[sw.parameter] : undefined;
-    if (overridden !== undefined) para(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`, 8.5, INK);
+    if (overridden !== undefined) intro.push(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`);
     // a case's own flow factor is scaled by the swept one, not replaced (solver/sweep.ts)
     const ownFlow = sw.case && sw.parameter === FLOW_FACTOR ? parsed.file.cases?.find((c) => c.id === sw.case)?.flowFactor : undefined;
-    if (ownFlow !== undefined && ownFlow !== 1) para(`The sweep's flow factor multiplies the case's own (flow × ${ownFlow}): each point runs the flow × ${ownFlow}·f; everything else is as in the case.`, 8.5, INK);
+    if (ownFlow !== undefined && ownFlow !== 1) intro.push(`The sweep's flow factor multiplies the case's own (flow × ${ownFlow}): each point runs the flow × ${ownFlow}·f; everything else is as in the case.`);
     if (combination)
-      para(
+      intro.push(
         `Each point is solved as the combination's factored load set (${combinationTerms(combination, parsed.file.cases)}), with the sweep's value of ${parameterWords(sw.parameter)} ${sw.parameter === FLOW_FACTOR ? "multiplying each of its cases' own (1 unless the case gives one)" : "in every one of its cases"}.`,
-        8.5,
-        INK,
       );
+    let swept: ReturnType<typeof sweepCharts> | null = null;
+    let failed = "";
     try {
-      const { charts, markers, states } = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions), family);
+      swept = sweepCharts(parsed.file, sw, units, Object.keys(result.reactions), family);
+    } catch (err) {
+      failed = `This sweep could not be run: ${(err as Error).message}`;
+    }
+    // the heading kept with the sentences under it and the first chart (or the reason there is none)
+    const introHeight = intro.reduce((h, t) => h + doc.font("Inter").fontSize(8.5).heightOfString(t, { width, features: PROSE_FEATURES }), 0);
+    heading(`Sweep of ${parameterWords(sw.parameter)}${on}`, HEADING_ROOM + introHeight + (swept?.charts.length ? chartHeight + 4 : paraLead(failed || " ", 8.5)));
+    for (const t of intro) para(t, 8.5, INK);
+    if (!swept) {
+      para(failed, 8.5, ACCENT);
+      continue;
+    }
+    try {
+      const { charts, markers, states } = swept;
       for (const spec of charts) {
-        ensureSpace(doc, 280);
-        SVGtoPDF(doc, haloBehindLabels(lineChartSvg(spec)), left, doc.y, { width, height: width * (260 / 500), preserveAspectRatio: "xMidYMid meet", fontCallback: () => "Inter" });
-        doc.y += width * (260 / 500) + 4;
+        ensureSpace(doc, chartHeight + 4);
+        SVGtoPDF(doc, haloBehindLabels(lineChartSvg(spec)), left, doc.y, { width, height: chartHeight, preserveAspectRatio: "xMidYMid meet", fontCallback: () => "Inter" });
+        doc.y += chartHeight + 4;
       }
       for (const mk of markers) para(`Crossing: ${mk.words}.`, 8.5, INK);
       // where a plotted contact is off the ground (a tie slack), or a friction margin is left out
@@ -339,18 +376,29 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     heading("Check record");
     para(rec.summary, 9, INK);
     doc.moveDown(0.3);
-    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text("Sign-off", left, doc.y, { width });
+    const noSteps = "Not yet submitted for checking.";
+    boldLabel("Sign-off", rec.steps[0] ?? noSteps);
     if (rec.steps.length) for (const line of rec.steps) para(line, 8.5, SOFT);
-    else para("Not yet submitted for checking.", 8.5, SOFT);
+    else para(noSteps, 8.5, SOFT);
     if (rec.threads.length) {
       doc.moveDown(0.4);
+      const first = rec.threads[0];
+      doc.font("Inter-SemiBold").fontSize(8.5);
+      // the label kept with the first thread's heading and its first lines
+      ensureSpace(doc, 2 * doc.currentLineHeight(true) + 4 + (first.lines[0] ? proseLead(doc, first.lines[0], 8.5, width - 12) : 0));
       doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text("Comments", left, doc.y, { width });
     }
     for (const t of rec.threads) {
-      ensureSpace(doc, 36);
+      // a thread's heading kept with its first lines; a short thread whole
+      doc.font("Inter-SemiBold").fontSize(8.5);
+      const head = doc.heightOfString(t.heading, { width, features: PROSE_FEATURES });
+      ensureSpace(doc, 3 + head + (t.lines[0] ? proseLead(doc, t.lines[0], 8.5, width - 12) : 0));
       doc.moveDown(0.25);
       doc.font("Inter-SemiBold").fontSize(8.5).fillColor(t.open ? ACCENT : INK).text(t.heading, left, doc.y, { width, features: PROSE_FEATURES });
-      for (const line of t.lines) doc.font("Inter").fontSize(8.5).fillColor(SOFT).text(line, left + 12, doc.y, { width: width - 12, features: PROSE_FEATURES });
+      for (const line of t.lines) {
+        ensureSpace(doc, proseLead(doc, line, 8.5, width - 12));
+        doc.font("Inter").fontSize(8.5).fillColor(SOFT).text(line, left + 12, doc.y, { width: width - 12, features: PROSE_FEATURES });
+      }
     }
     if (rec.earlier) {
       doc.moveDown(0.4);
@@ -359,18 +407,67 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   }
 
   // ---- method, assumptions, cautions
-  heading("Method");
-  para(
-    "For each body, the linear momentum and moment-of-momentum equations of a control volume fixed to the body, in steady flow: ΣF(reactions) + ΣF(loads) + W + ΣF(pressure) − m·a = Σ(ṁV)out − Σ(ṁV)in, and the same for moments. A port's momentum flux is β·ṁ·V, with β its momentum-flux factor (1, uniform flow, unless given). Gauge pressure at a port pushes inward (p·A along the flow at an inlet, against it at an outlet). Supports are stiff springs on the rigid body: a statically determinate body's reactions follow from equilibrium alone; an indeterminate one's from the support stiffnesses. Contacts push only and ties pull only; a contact or tie that would have to pull or push is released (lifts, goes slack), and a body that no engagement can hold tips (the reactions shown are then those equilibrium would require with every support bilateral). Friction is checked (|t| ≤ μ·n), not enforced.",
-  );
+  // the equations on lines of their own, as a checker writes them out
+  heading("Method", HEADING_ROOM + paraLead(METHOD[0]) + 2 * 14);
+  para(METHOD[0]);
+  doc.moveDown(0.25);
+  for (const eq of EQUATIONS) {
+    doc.font("Inter").fontSize(9.5);
+    ensureSpace(doc, doc.heightOfString(eq, { width: width - 24, features: PROSE_FEATURES }) + 3);
+    doc.fillColor(INK).text(eq, left + 24, doc.y, { width: width - 24, features: PROSE_FEATURES });
+    doc.y += 3;
+  }
+  doc.moveDown(0.25);
+  for (const m of METHOD.slice(1)) para(m);
   heading("Assumptions");
-  for (const a of ASSUMPTIONS) para(`• ${a}`);
-  heading("Cautions", cautionBoxHeight(doc, width, [...CAUTIONS]) + 40);
+  const assumptions = [...ASSUMPTIONS, ...fluidAssumptions(parsed.sketch.ports, units, hasCases)];
+  // the cautions close the sheet and never stand alone on its last page: the last two assumptions
+  // go to the next page with them when the page cannot hold all of them
+  const closing = HEADING_ROOM + cautionBoxHeight(doc, width, [...CAUTIONS]) + 6;
+  const tail = Math.max(0, assumptions.length - 2);
+  assumptions.forEach((a, i) => {
+    if (i === tail) ensureSpace(doc, assumptions.slice(tail).reduce((h, t) => h + doc.font("Inter").fontSize(9).heightOfString(`• ${t}`, { width, features: PROSE_FEATURES }), 0) + closing);
+    para(`• ${a}`);
+  });
+  heading("Cautions", closing);
   cautionBox(doc, left, width, [...CAUTIONS]);
 
   footer(doc, input);
   doc.end();
   return done;
+}
+
+/** The method in words, around its two equations (`EQUATIONS`, printed on lines of their own). */
+export const METHOD: readonly string[] = [
+  "For each body, the linear momentum and moment-of-momentum equations of a control volume fixed to the body, in steady flow (W the body's weight, at its centre of gravity G; m·a its mass times the acceleration the sketch gives, none unless it gives one):",
+  "Moments are taken about a point O, counter-clockwise positive, with r measured from O; each sum runs over the body's supports, loads and ports, and a couple counts whole. A port's momentum flux is β·ṁ·V, with β its momentum-flux factor (1, uniform flow, unless given). Gauge pressure at a port pushes inward (p·A along the flow at an inlet, against it at an outlet). Supports are stiff springs on the rigid body: a statically determinate body's reactions follow from equilibrium alone; an indeterminate one's from the support stiffnesses. Contacts push only and ties pull only; a contact or tie that would have to pull or push is released (lifts, goes slack), and a body that no engagement can hold tips (the reactions shown are then those equilibrium would require with every support bilateral). Friction is checked (|t| ≤ μ·n), not enforced.",
+];
+
+/** Linear momentum and moment of momentum for a control volume in steady flow. */
+export const EQUATIONS: readonly string[] = [
+  "ΣF(reactions) + ΣF(loads) + W + ΣF(pressure) − m·a = Σ(ṁV)out − Σ(ṁV)in",
+  "ΣM(reactions) + ΣM(loads) + r(G) × W + Σ r × F(pressure) − r(G) × m·a = Σ(r × ṁV)out − Σ(r × ṁV)in",
+];
+
+/**
+ * The sheet's assumption on the fluid: the density each port's flow is worked out at, by port
+ * (the sketch as drawn: a case may set its own through a parameter). None for a sketch without ports.
+ */
+export function fluidAssumptions(ports: ReadonlyArray<Pick<Port, "id" | "label" | "density">>, units: UnitSystem, hasCases = false): string[] {
+  if (!ports.length) return [];
+  const name = (p: Pick<Port, "id" | "label">) => p.label?.trim() || p.id;
+  const given = ports.filter((p) => p.density !== undefined && Number.isFinite(p.density));
+  const byValue = new Map<string, string[]>();
+  for (const p of given) {
+    const v = formatQuantity(p.density!, "density", units);
+    byValue.set(v, [...(byValue.get(v) ?? []), name(p)]);
+  }
+  const without = ports.filter((p) => !given.includes(p)).map(name);
+  const drawn = hasCases ? " (as drawn; a case may set its own)" : "";
+  const parts: string[] = [];
+  if (given.length) parts.push(`Fluid density as each port gives it, constant across the port${drawn}: ${[...byValue].map(([v, names]) => `${v} at ${names.join(", ")}`).join("; ")}.`);
+  if (without.length) parts.push(`${without.length === 1 ? "Port" : "Ports"} ${without.join(", ")} ${without.length === 1 ? "gives" : "give"} no density: ${without.length === 1 ? "its" : "their"} mass flow and velocity are taken as given.`);
+  return [parts.join(" ")];
 }
 
 /** The conventions' line on units: the sheet's one family for forces and moments, and the rule that chose it. */
@@ -401,6 +498,15 @@ function singleRunTable(t: Table): Table {
   const drop = new Set(["case", "governs"]);
   const keep = t.columns.map((c) => !drop.has(c.key));
   return { ...t, title: "Reactions as drawn (forces on the body)", columns: t.columns.filter((_, i) => keep[i]), rows: t.rows.map((r) => r.filter((_, i) => keep[i])), marks: undefined, notes: undefined };
+}
+
+/** The room (pt) a paragraph needs on the page it starts on: all of it up to three lines, else
+ *  its first two (the rest flows on; no line is left alone at the foot of a page). */
+function proseLead(doc: PDFKit.PDFDocument, text: string, size: number, width: number): number {
+  doc.font("Inter").fontSize(size);
+  const line = doc.currentLineHeight(true);
+  const h = doc.heightOfString(text, { width, features: PROSE_FEATURES });
+  return h <= 3 * line + 0.5 ? h : 2 * line;
 }
 
 function ensureSpace(doc: PDFKit.PDFDocument, needed: number) {

@@ -11,12 +11,13 @@ export async function pdfText(buf: Uint8Array | ArrayBuffer): Promise<{ text: st
   return { text: text.replace(/\s+/g, " "), pages: doc.numPages };
 }
 
-/** A piece of a page's text with its place: left edge, baseline and width (pt, from the page's bottom left). */
+/** A piece of a page's text with its place: left edge, baseline and width (pt, from the page's bottom left), and its type size (pt). */
 export interface PdfItem {
   str: string;
   x: number;
   y: number;
   width: number;
+  size: number;
 }
 
 /** Every piece of text with its place, per page, and the page width (pt). */
@@ -29,7 +30,7 @@ export async function pdfItems(buf: Uint8Array | ArrayBuffer): Promise<{ pages: 
     const page = await doc.getPage(i);
     pageWidth = page.view[2];
     const content = await page.getTextContent();
-    pages.push(content.items.flatMap((it) => ("str" in it && it.str.trim() ? [{ str: it.str, x: it.transform[4], y: it.transform[5], width: it.width }] : [])));
+    pages.push(content.items.flatMap((it) => ("str" in it && it.str.trim() ? [{ str: it.str, x: it.transform[4], y: it.transform[5], width: it.width, size: Math.hypot(it.transform[2], it.transform[3]) }] : [])));
   }
   return { pages, pageWidth };
 }
