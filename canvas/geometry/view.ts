@@ -36,8 +36,7 @@ export type Margins = number | { top: number; right: number; bottom: number; lef
  * what it needs (up to half the room), the larger gets the rest — so only one side's labels reach
  * past the edge, not both.
  */
-function squeeze(a: number, b: number, size: number): [number, number] {
-  const room = size * 0.7;
+function squeeze(a: number, b: number, size: number, room = size * 0.7): [number, number] {
   if (a + b <= room) return [a, b];
   const small = Math.min(Math.min(a, b), room / 2);
   return a <= b ? [small, room - small] : [room - small, small];
@@ -51,7 +50,11 @@ export function fitView(box: Box, width: number, height: number, margin: Margins
   // margins then shrink to leave it at least 30% of each direction (the labels of one side may
   // then reach past the edge, but the body is drawn whole)
   const [left, right] = squeeze(given.left, given.right, width);
-  const [top, bottom] = squeeze(given.top, given.bottom, height);
+  // a short, wide area (a laptop or a landscape tablet with the results below): the words and
+  // arrows above and below the body take most of the height, and there is width to spare; the body
+  // is drawn smaller rather than have them cut by the edges, down to 15% of the height (48 px at least)
+  const landscape = width >= 2 * height;
+  const [top, bottom] = squeeze(given.top, given.bottom, height, landscape ? height - Math.max(48, 0.15 * height) : height * 0.7);
   const m = { left, right, top, bottom };
   const w = Math.max(box.maxX - box.minX, 0.5);
   const h = Math.max(box.maxY - box.minY, 0.5);

@@ -30,9 +30,23 @@ const TAB_IDS = TABS.map(([id]) => id);
 const HEIGHT_KEY = "counterpoise:results-height";
 const MIN_HEIGHT = 150;
 
-/** The reactions' own height in a window this tall: 292 px on a laptop, more of a taller screen (up to 420 px) so the table's rows show under the words, never more than 38% of it. */
+/** What a wide window's toolbar and the drawing's hint line take above and below the drawing (px). */
+const WIDE_CHROME = 84;
+/** On a short window the drawing keeps this much height first (px): room for the body and, around
+ *  it, the labels and arrows drawn at a fixed size on screen (about 285 px of them for a pump skid). */
+export const DRAWING_KEEPS = 340;
+/** The least the dock's own height gets on a short window: its status words, caution and tabs. */
+const SHORT_MIN = 160;
+
+/**
+ * The reactions' own height in a window this tall: 292 px on a laptop, more of a taller screen (up
+ * to 420 px) so the table's rows show under the words, never more than 38% of it. On a short window
+ * (below about 720 px: a laptop with its browser's bars, a landscape tablet) the drawing first keeps
+ * DRAWING_KEEPS, down to a dock of 160 px; the line above the dock gives either more.
+ */
 export function ownHeight(windowHeight: number): number {
-  return Math.max(292, Math.min(420, Math.round(windowHeight * 0.38)));
+  const own = Math.max(292, Math.min(420, Math.round(windowHeight * 0.38)));
+  return Math.max(SHORT_MIN, Math.min(own, windowHeight - WIDE_CHROME - DRAWING_KEEPS));
 }
 
 /** Below this window width (Tailwind's `sm`) the drawing and the dock share one narrow column: a phone. */
