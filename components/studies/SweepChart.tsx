@@ -3,7 +3,7 @@
 // (forces on the left axis, a moment on the right), with the margins' zero crossings marked (✕)
 // and the limit found, if any. Hover shows values.
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { formatLimit } from "@/solver/limit";
+import { limitWithUnit } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent } from "@/solver/quantity";
 import { convert, formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { sweepAxisTicks } from "@/lib/calcsheet/chart";
@@ -58,6 +58,9 @@ export function defaultLimitQuantity(data: SweepData): number {
   const margin = data.quantities.findIndex((q) => marksZero(q.component));
   return margin >= 0 ? margin : 0;
 }
+
+/** The words on a found limit's line across the plot, with the swept parameter's unit: "limit: 1,482 gpm". */
+export const limitMark = (x: number, unit: string): string => `limit: ${limitWithUnit(x, unit)}`;
 
 /** `names`: the supports' labels by id, to name the lines as the drawing names the supports;
  *  `family`: the page's force and moment units (a version's page), else the chart's own. */
@@ -140,7 +143,7 @@ export function SweepChart({
           {crossingsX.map((c, i) => (
             <ReferenceDot key={i} yAxisId={axisOf(c.quantity)} x={c.x} y={0} r={5} fill="rgb(var(--paper-card))" stroke={COLORS[c.quantity % COLORS.length]} strokeWidth={2} label={{ value: "✕", position: "top", fontSize: 12, fill: COLORS[c.quantity % COLORS.length] }} />
           ))}
-          {limit && <ReferenceLine yAxisId="left" x={limit.x} stroke="rgb(var(--accent))" strokeDasharray="4 3" label={{ value: `limit: ${formatLimit(limit.x)}`, position: "insideTopRight", fontSize: 11, fill: "rgb(var(--accent))" }} />}
+          {limit && <ReferenceLine yAxisId="left" x={limit.x} stroke="rgb(var(--accent))" strokeDasharray="4 3" label={{ value: limitMark(limit.x, data.unit), position: "insideTopRight", fontSize: 11, fill: "rgb(var(--accent))" }} />}
         </LineChart>
       </ResponsiveContainer>
     </figure>

@@ -3,6 +3,7 @@
 // its parameter in (solver/studySweep.ts, `sweeperOn`), so that is the unit said beside them.
 import { describe, expect, it } from "vitest";
 import { sweepRangeWords, sweptUnitIn } from "@/canvas/studies/display";
+import { limitMark } from "@/components/studies/SweepChart";
 import { emptySketch } from "@/canvas/model/elements";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import type { SketchFile } from "@/solver/schema";
@@ -44,5 +45,14 @@ describe("a swept range in words", () => {
 
   it("rounds the ends to six significant figures, not the float's noise", () => {
     expect(sweepRangeWords("theta", 0.1 + 0.2, 29.999999999999996, "deg")).toBe("theta from 0.3 to 30 deg");
+  });
+});
+
+describe("the line a found limit draws across the plot", () => {
+  it("carries the swept parameter's unit, 4 significant figures as the answer beside it", () => {
+    expect(limitMark(1482.46, "gpm")).toBe("limit: 1,482 gpm");
+    expect(limitMark(35.3812, "m / s")).toBe("limit: 35.38 m/s");
+    // the flow factor is a plain number
+    expect(limitMark(1.18634, "")).toBe("limit: 1.186");
   });
 });
