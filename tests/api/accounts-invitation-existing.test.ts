@@ -1,25 +1,23 @@
 // Signing up from an invitation when the invited address already has an account (made since the
 // mail was sent, or in another tab): the refusal gives the way on — sign in with that address,
 // filled in, and come back to the invitation to join — and the invitation stays open for it.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as signUpRoute from "@/app/api/invitations/[token]/sign-up/route";
 import * as invitationsRoute from "@/app/api/workspaces/[id]/invitations/route";
 import { lookUpInvitation } from "@/lib/invitations";
-import { call, ensureMailFake, makeAccount, makeWorkspace, uniqueEmail, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 
 const tokenOf = (url: string) => decodeURIComponent(url.split("/invite/")[1]);
 
 describe("invitation sign-up for an address that already has an account", () => {
   let owner: Person;
   let ws: string;
-  let stopMail: () => Promise<void>;
 
+  withMailFake();
   beforeAll(async () => {
-    stopMail = await ensureMailFake();
     owner = await makeAccount("inv-existing-owner");
     ws = await makeWorkspace("Quay Pump House", [[owner, "owner"]]);
   });
-  afterAll(async () => stopMail?.());
 
   it("answers 409 naming the address and the sign-in page that comes back to the invitation", async () => {
     const invitee = await makeAccount("inv-existing-invitee", { signIn: false });

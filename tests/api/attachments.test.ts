@@ -9,7 +9,7 @@ import { promisify } from "node:util";
 import { ListObjectsV2Command } from "@aws-sdk/client-s3";
 import { eq } from "drizzle-orm";
 import sharp from "sharp";
-import { beforeAll, afterAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as attachmentsRoute from "@/app/api/comments/[commentId]/attachments/route";
 import * as commentRoute from "@/app/api/comments/[commentId]/route";
 import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
@@ -23,7 +23,7 @@ import { appOrigin, storageSettings } from "@/lib/env";
 import { getObject, objectExists, s3 } from "@/lib/storage";
 import { MAX_ATTACHMENTS } from "@/lib/uploads/service";
 import { PDF_AUTHOR, PDF_XMP_CREATOR, pdf, png, textPretendingToBePng } from "../fixtures/uploads";
-import { call, ensureMailFake, makeAccount, makeWorkspace, type Json, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeWorkspace, type Json, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 
 type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
@@ -34,10 +34,9 @@ let olivia: Person;
 let vera: Person;
 let stranger: Person;
 let ws: string;
-let stopMail: () => Promise<void>;
 
+withMailFake();
 beforeAll(async () => {
-  stopMail = await ensureMailFake();
   [eddie, chen, olivia, vera, stranger] = await Promise.all(["eddie", "chen", "olivia", "vera", "stranger"].map((t) => makeAccount(`att-${t}`)));
   ws = await makeWorkspace("Attachment bay", [
     [olivia, "owner"],
@@ -47,7 +46,6 @@ beforeAll(async () => {
   ]);
   await makeWorkspace("Stranger's bay", [[stranger, "viewer"]]);
 });
-afterAll(async () => stopMail?.());
 
 async function sketchWithComment(by: Person = chen) {
   const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title: "Skid with attachments", document: fixture("pump-skid-discharge") } });

@@ -2,26 +2,15 @@
 // address (so a stranger cannot learn who has an account), and the page says a mail was sent. The
 // mail must then come, to the owner of the address, with the way in: sign in (the address filled
 // in) or, for a password forgotten, choose a new one. Without it the person waits for nothing.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import * as authRoute from "@/app/api/auth/[...all]/route";
+import { describe, expect, it } from "vitest";
 import { appOrigin } from "@/lib/env";
-import { ensureMailFake, firstLink, makeAccount, PASSWORD, uniqueEmail, waitForMail } from "./helpers";
+import { withMailFake, firstLink, makeAccount, PASSWORD, uniqueEmail, waitForMail } from "./helpers";
+import { authPoster } from "./auth-setup";
 
-const post = (path: string, body: unknown) =>
-  authRoute.POST(
-    new Request(`${appOrigin()}/api/auth${path}`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin: appOrigin(), "x-forwarded-for": "10.9.8.42" },
-      body: JSON.stringify(body),
-    }),
-  );
+const post = authPoster("10.9.8.42");
 
 describe("sign-up with an address that has an account", () => {
-  let stopMail: () => Promise<void>;
-  beforeAll(async () => {
-    stopMail = await ensureMailFake();
-  });
-  afterAll(async () => stopMail?.());
+  withMailFake();
 
   it("answers as for a new address, and mails the owner a sign-in link with the address filled in", async () => {
     const existing = await makeAccount("already-here", { signIn: false, name: "Ada Already" });

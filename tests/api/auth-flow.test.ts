@@ -1,29 +1,19 @@
 // Sign-up, e-mail verification, sign-in, the personal workspace, the sign-in audit row and the
 // cookie attributes, through better-auth's own HTTP handler as a browser would call it.
 import { and, eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import * as authRoute from "@/app/api/auth/[...all]/route";
+import { describe, expect, it } from "vitest";
 import * as workspacesRoute from "@/app/api/workspaces/route";
 import { db } from "@/db";
 import { auditEvent, membership, user, workspace } from "@/db/schema";
 import { appOrigin } from "@/lib/env";
-import { call, cookieHeader, ensureMailFake, firstLink, PASSWORD, uniqueEmail, waitForMail } from "./helpers";
+import { call, cookieHeader, withMailFake, firstLink, PASSWORD, uniqueEmail, waitForMail } from "./helpers";
+import { authPoster } from "./auth-setup";
+import * as authRoute from "@/app/api/auth/[...all]/route";
 
-const post = (path: string, body: unknown, headers: Record<string, string> = {}) =>
-  authRoute.POST(
-    new Request(`${appOrigin()}/api/auth${path}`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin: appOrigin(), "x-forwarded-for": "10.9.8.7", ...headers },
-      body: JSON.stringify(body),
-    }),
-  );
+const post = authPoster("10.9.8.7");
 
 describe("sign-up, verification and sign-in", () => {
-  let stopMail: () => Promise<void>;
-  beforeAll(async () => {
-    stopMail = await ensureMailFake();
-  });
-  afterAll(async () => stopMail?.());
+  withMailFake();
 
   const email = uniqueEmail("newcomer");
 

@@ -1,32 +1,21 @@
 // An account not yet confirmed signs in from a page that asked to come back somewhere (an
 // invitation to join): the refusal mails a fresh confirmation link, and that link must still lead
 // back there (through /verify and the sign-in it offers), or the invitation is lost on the way.
-import { describe, expect, it, beforeAll, afterAll } from "vitest";
+import { describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import * as authRoute from "@/app/api/auth/[...all]/route";
 import { db } from "@/db";
 import { user } from "@/db/schema";
 import { withVerifyCallback } from "@/lib/auth";
 import { appOrigin } from "@/lib/env";
-import { ensureMailFake, firstLink, makeAccount, PASSWORD, waitForMail } from "./helpers";
+import { withMailFake, firstLink, makeAccount, PASSWORD, waitForMail } from "./helpers";
+import { authPoster } from "./auth-setup";
 
-const signInFrom = (referer: string | null, email: string) =>
-  authRoute.POST(
-    new Request(`${appOrigin()}/api/auth/sign-in/email`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin: appOrigin(), "x-forwarded-for": "10.9.8.77", ...(referer ? { referer } : {}) },
-      body: JSON.stringify({ email, password: PASSWORD }),
-    }),
-  );
+const signInFrom = (referer: string | null, email: string) => authPoster("10.9.8.77")("/sign-in/email", { email, password: PASSWORD }, referer ? { referer } : {});
 
 const callbackOf = (link: string) => new URL(link).searchParams.get("callbackURL");
 
 describe("the confirmation link a sign-in resends", () => {
-  let stopMail: () => Promise<void>;
-  beforeAll(async () => {
-    stopMail = await ensureMailFake();
-  });
-  afterAll(async () => stopMail?.());
+  withMailFake();
 
   it("keeps the sign-in page's next: confirmed, then signed in, it ends at the invitation", async () => {
     const person = await makeAccount("unconfirmed-invitee", { signIn: false });

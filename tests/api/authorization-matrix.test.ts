@@ -1,13 +1,13 @@
 // Every route handler under app/api, found on disk with each method it exports, and the status
 // each kind of caller gets: owner, editor, checker, viewer, a signed-in outsider, signed out.
 // A route or method missing from ROWS (or a row without a route) fails the first test.
-import { beforeAll, afterAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { invitation } from "@/db/schema";
 import { hashInvitationToken, newInvitationToken } from "@/lib/invitations";
 import { createSketch } from "@/lib/sketches";
 import { isNotAllowed, routeFiles, routePath } from "./route-files";
-import { call, ensureMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 import { fixture as sketchFile, parsedFixture } from "./sketch-fixtures";
 import { REVIEW_ROWS } from "./matrix-review-rows";
 import { STUDIES_ROWS } from "./matrix-studies-rows";
@@ -98,17 +98,15 @@ const ROWS: Record<string, Row> = {
 describe("authorization matrix of every API route", () => {
   const people = {} as Record<Exclude<Caller, "signedOut">, Person>;
   const handlers = new Map<string, Handler>();
-  let stopMail: () => Promise<void>;
 
+  withMailFake();
   beforeAll(async () => {
-    stopMail = await ensureMailFake();
     for (const r of ["owner", "editor", "checker", "viewer", "outsider"] as const) people[r] = await makeAccount(r);
     for (const file of routeFiles()) {
       const mod = (await import(file)) as Record<string, unknown>;
       for (const m of METHODS) if (typeof mod[m] === "function" && !isNotAllowed(mod[m])) handlers.set(`${m} ${routePath(file)}`, mod[m] as Handler);
     }
   });
-  afterAll(async () => stopMail?.());
 
   it("has a row for every route and method on disk, and no row without one", () => {
     expect([...handlers.keys()].sort()).toEqual(Object.keys(ROWS).sort());

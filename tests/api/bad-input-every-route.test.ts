@@ -5,7 +5,7 @@
 import { ListObjectsV2Command } from "@aws-sdk/client-s3";
 import { count } from "drizzle-orm";
 import sharp from "sharp";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { account, auditEvent, comment, invitation, membership, session, signOff, sketch, sketchVersion, upload, user, verification, workspace } from "@/db/schema";
 import { storageSettings } from "@/lib/env";
@@ -15,7 +15,7 @@ import { createSketch } from "@/lib/sketches";
 import { s3 } from "@/lib/storage";
 import { createUnderlay } from "@/lib/uploads/service";
 import { isNotAllowed, routeFiles, routePath } from "./route-files";
-import { call, ensureMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 import type { Handler } from "./matrix-types";
 import { parsedFixture } from "./sketch-fixtures";
 
@@ -72,10 +72,9 @@ describe("bad bodies on every route that takes one: 4xx, never 500, nothing writ
   const handlers = new Map<string, Handler>();
   let owner: Person;
   let f: Fx;
-  let stopMail: () => Promise<void>;
 
+  withMailFake();
   beforeAll(async () => {
-    stopMail = await ensureMailFake();
     for (const file of routeFiles()) {
       const mod = (await import(file)) as Record<string, unknown>;
       for (const m of MUTATIONS) if (typeof mod[m] === "function" && !isNotAllowed(mod[m])) handlers.set(`${m} ${routePath(file)}`, mod[m] as Handler);
@@ -97,7 +96,6 @@ describe("bad bodies on every route that takes one: 4xx, never 500, nothing writ
       .returning({ id: invitation.id });
     f = { ws, sketchId: made.sketch.id, commentId, uploadId, invitationId: inv.id, targetId: target.id, token };
   });
-  afterAll(async () => stopMail?.());
 
   it("knows every mutation route on disk: each reads a body, or is listed as reading none", () => {
     expect(handlers.size).toBeGreaterThan(15);

@@ -1,25 +1,23 @@
 // What the calc sheet's title block reads for a version: workspace, sketch, number, message,
 // saved date, and the sign-off of the current round, for members only.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { getVersionForCalcSheet } from "@/db/queries/review";
 import { takeSignOffStep } from "@/lib/review/signoff";
 import { createSketch } from "@/lib/sketches";
-import { ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
+import { withMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { parsedFixture } from "./sketch-fixtures";
 
-let stopMail: () => Promise<void>;
 let prep: Person;
 let chk: Person;
 let lead: Person;
 let outsider: Person;
+withMailFake();
 beforeAll(async () => {
-  stopMail = await ensureMailFake();
   prep = await makeAccount("prep", { name: "Pat Preparer" });
   chk = await makeAccount("chk", { name: "Cam Checker" });
   lead = await makeAccount("lead", { name: "Lee Lead" });
   outsider = await makeAccount("outsider");
 });
-afterAll(async () => stopMail?.());
 
 describe("getVersionForCalcSheet", () => {
   it("returns the title block's facts and the sign-off entries with names and dates", async () => {

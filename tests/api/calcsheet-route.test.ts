@@ -1,12 +1,12 @@
 // The calc sheet route: a PDF of a saved version for its readers, in SI or US units; 404 across
 // workspaces; a clear 400 for a bad units value.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { GET } from "@/app/api/sketches/[id]/versions/[number]/calc-sheet/route";
 import { createSketch, saveVersion } from "@/lib/sketches";
 import { appOrigin } from "@/lib/env";
 import { addComment, resolveThread } from "@/lib/review/comments";
 import { takeSignOffStep } from "@/lib/review/signoff";
-import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { parsedFixture } from "./sketch-fixtures";
 import { pdfText } from "../support/pdf-text";
 
@@ -14,9 +14,8 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
   let owner: Person;
   let outsider: Person;
   let sketchId: string;
-  let stopMail: () => Promise<void>;
+  withMailFake();
   beforeAll(async () => {
-    stopMail = await ensureMailFake();
     owner = await makeAccount("calc-owner");
     outsider = await makeAccount("calc-outsider");
     const ws = await makeWorkspace("Calc sheet works", [[owner, "owner"]]);
@@ -24,7 +23,6 @@ describe("GET /api/sketches/[id]/versions/[number]/calc-sheet", () => {
     const made = await createSketch(ws, owner, { title: "Bend on an anchor", document: parsed, message: "first" });
     sketchId = made.sketch.id;
   }, 60000);
-  afterAll(async () => stopMail?.());
 
   it("answers a PDF attachment named after the sketch, version and units", async () => {
     const { status, res } = await call(GET as never, { params: { id: sketchId, number: "1" }, cookie: owner.cookie, path: `/api/sketches/${sketchId}/versions/1/calc-sheet?units=US` });

@@ -3,7 +3,7 @@
 // sketch's activity; @mentions mailed through the SMTP fake unless the member turned mail off;
 // an approved version takes no new comments.
 import { and, eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as commentRoute from "@/app/api/comments/[commentId]/route";
 import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
@@ -11,11 +11,10 @@ import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import { db } from "@/db";
 import { devMail, membership, user } from "@/db/schema";
-import { call, ensureMailFake, makeAccount, makeWorkspace, waitForMail, type Person, type Json } from "./helpers";
+import { call, withMailFake, makeAccount, makeWorkspace, waitForMail, type Person, type Json } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 import { postSketch } from "./sketch-setup";
 
-let stopMail: () => Promise<void>;
 let eddie: Person;
 let chen: Person;
 let olivia: Person;
@@ -23,8 +22,8 @@ let vera: Person;
 let quiet: Person;
 let ws: string;
 
+withMailFake();
 beforeAll(async () => {
-  stopMail = await ensureMailFake();
   eddie = await makeAccount("eddie", { name: "Eddie Drafter" });
   chen = await makeAccount("chen", { name: "Chen Checkwell" });
   olivia = await makeAccount("olivia", { name: "Olivia Lead" });
@@ -39,7 +38,6 @@ beforeAll(async () => {
     [quiet, "checker"],
   ]);
 });
-afterAll(async () => stopMail?.());
 
 async function newSketch(): Promise<string> {
   return postSketch(ws, eddie, "Skid for comments");

@@ -2,6 +2,7 @@
 import { randomBytes } from "node:crypto";
 import { createServer } from "node:net";
 import { desc, eq } from "drizzle-orm";
+import { afterAll, beforeAll } from "vitest";
 import { db } from "@/db";
 import { devMail, membership, user, workspace } from "@/db/schema";
 import { getAuth } from "@/lib/auth";
@@ -148,6 +149,15 @@ export async function ensureMailFake(): Promise<() => Promise<void>> {
     await stop();
     await store.close();
   };
+}
+
+/** Mail for this file (or the describe block it is called in): the fake made sure of before its tests, stopped after. */
+export function withMailFake(): void {
+  let stop: (() => Promise<void>) | undefined;
+  beforeAll(async () => {
+    stop = await ensureMailFake();
+  });
+  afterAll(async () => stop?.());
 }
 
 /** The newest mail to an address, waiting up to `timeoutMs` for it to arrive. */

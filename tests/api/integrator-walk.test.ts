@@ -4,7 +4,7 @@
 // `baseVersion`, not a 409 saying someone saved "since"), and the mail of an invitation sent
 // again saying it replaces the earlier one. Nothing is written by any refusal.
 import { count, eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as invitationRoute from "@/app/api/invitations/[token]/route";
 import * as invitationsRoute from "@/app/api/workspaces/[id]/invitations/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
@@ -14,19 +14,17 @@ import { db } from "@/db";
 import { invitation, membership, sketchVersion } from "@/db/schema";
 import { hashInvitationToken, newInvitationToken } from "@/lib/invitations";
 import { createSketch } from "@/lib/sketches";
-import { call, ensureMailFake, makeAccount, makeWorkspace, uniqueEmail, waitForMail, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeWorkspace, uniqueEmail, waitForMail, type Person } from "./helpers";
 import { fixture as sketchFile, parsedFixture } from "./sketch-fixtures";
 
 let owner: Person;
 let ws = "";
-let stopMail: () => Promise<void>;
 
+withMailFake();
 beforeAll(async () => {
-  stopMail = await ensureMailFake();
   owner = await makeAccount("walk-owner", { name: "Wanda Owner" });
   ws = await makeWorkspace("Pier 7 anchors", [[owner, "owner"]]);
 });
-afterAll(async () => stopMail?.());
 
 async function link(state: "pending" | "expired" | "used" | "withdrawn", email = uniqueEmail("walk-invitee")): Promise<string> {
   const token = newInvitationToken();

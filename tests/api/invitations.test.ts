@@ -1,7 +1,7 @@
 // Invitations end to end on the API: the mailed link, signing up from it, single use, expiry,
 // withdrawal, the wrong account, and a removed member losing access on their next request.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as acceptRoute from "@/app/api/invitations/[token]/accept/route";
 import * as signUpRoute from "@/app/api/invitations/[token]/sign-up/route";
 import * as auditRoute from "@/app/api/workspaces/[id]/audit/route";
@@ -12,21 +12,19 @@ import { db } from "@/db";
 import { invitation, user } from "@/db/schema";
 import { appOrigin } from "@/lib/env";
 import { hashInvitationToken, lookUpInvitation } from "@/lib/invitations";
-import { call, cookieHeader, ensureMailFake, makeAccount, makeWorkspace, roleOf, uniqueEmail, waitForMail, type Person } from "./helpers";
+import { call, cookieHeader, withMailFake, makeAccount, makeWorkspace, roleOf, uniqueEmail, waitForMail, type Person } from "./helpers";
 
 const tokenOf = (url: string) => decodeURIComponent(url.split("/invite/")[1]);
 
 describe("invitations", () => {
   let owner: Person;
   let ws: string;
-  let stopMail: () => Promise<void>;
 
+  withMailFake();
   beforeAll(async () => {
-    stopMail = await ensureMailFake();
     owner = await makeAccount("olga");
     ws = await makeWorkspace("Harbour Intake Screens", [[owner, "owner"]]);
   });
-  afterAll(async () => stopMail?.());
 
   async function invite(email: string, role: string) {
     const res = await call(invitationsRoute.POST, { method: "POST", params: { id: ws }, cookie: owner.cookie, body: { email, role } });

@@ -1,12 +1,12 @@
 // Mail: the MIME reader on what nodemailer writes, and a round trip through the local SMTP
 // fake into the table /dev/mailbox lists.
 import nodemailer from "nodemailer";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { getDevMail, listDevMail } from "@/db/queries/mailbox";
 import { sendMail } from "@/lib/mail";
 import { invitationMail, passwordResetMail } from "@/lib/mail-templates";
 import { linksIn, parseMail } from "@/lib/mime";
-import { ensureMailFake, uniqueEmail, waitForMail } from "./helpers";
+import { withMailFake, uniqueEmail, waitForMail } from "./helpers";
 
 async function compose(opts: { subject: string; text: string; html?: string; textEncoding?: "base64" | "quoted-printable" }): Promise<Buffer> {
   const t = nodemailer.createTransport({ streamTransport: true, buffer: true, newline: "windows" });
@@ -34,11 +34,7 @@ describe("MIME reader", () => {
 });
 
 describe("mail through the local SMTP fake", () => {
-  let stop: () => Promise<void>;
-  beforeAll(async () => {
-    stop = await ensureMailFake();
-  });
-  afterAll(async () => stop?.());
+  withMailFake();
 
   it("stores what the app sends, readable by the mailbox queries", async () => {
     const to = uniqueEmail("mailbox");

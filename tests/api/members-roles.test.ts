@@ -2,7 +2,7 @@
 // workspace, from one table. Every case runs in a fresh workspace: owner, editor, checker and
 // viewer, plus a "target" viewer to act upon; an outsider and a signed-out caller complete the row.
 import { and, eq, isNull } from "drizzle-orm";
-import { beforeAll, afterAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as auditRoute from "@/app/api/workspaces/[id]/audit/route";
 import * as invitationRoute from "@/app/api/workspaces/[id]/invitations/[invitationId]/route";
 import * as invitationsRoute from "@/app/api/workspaces/[id]/invitations/route";
@@ -12,7 +12,7 @@ import * as workspaceRoute from "@/app/api/workspaces/[id]/route";
 import { db } from "@/db";
 import { invitation, workspace } from "@/db/schema";
 import { hashInvitationToken } from "@/lib/invitations";
-import { ensureMailFake, makeAccount, makeBareUser, makeWorkspace, roleOf, call, type Person } from "./helpers";
+import { withMailFake, makeAccount, makeBareUser, makeWorkspace, roleOf, call, type Person } from "./helpers";
 
 type Caller = "owner" | "editor" | "checker" | "viewer" | "outsider" | "signedOut";
 const CALLERS: Caller[] = ["owner", "editor", "checker", "viewer", "outsider", "signedOut"];
@@ -100,13 +100,11 @@ const CASES: Case[] = [
 
 describe("what each role may do with members and invitations", () => {
   const people = {} as Record<Exclude<Caller, "signedOut">, Person>;
-  let stopMail: () => Promise<void>;
 
+  withMailFake();
   beforeAll(async () => {
-    stopMail = await ensureMailFake();
     for (const r of ["owner", "editor", "checker", "viewer", "outsider"] as const) people[r] = await makeAccount(r);
   });
-  afterAll(async () => stopMail?.());
 
   async function fixture(): Promise<Fixture> {
     const target = await makeBareUser("target");

@@ -2,7 +2,7 @@
 // role may not take the action gets 403, and a non-member 404, whatever the body (invalid fields,
 // malformed JSON, not JSON at all); only a caller who may act is told what is wrong with the body.
 import { count, eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as forkRoute from "@/app/api/sketches/[id]/fork/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
@@ -10,7 +10,7 @@ import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/commen
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import { db } from "@/db";
 import { comment, signOff, sketchVersion } from "@/db/schema";
-import { call, ensureMailFake, makeAccount, makeTeam, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeTeam, type Person } from "./helpers";
 import type { Handler } from "./matrix-types";
 import { edited, fixture } from "./sketch-fixtures";
 import { postSketch } from "./sketch-setup";
@@ -18,11 +18,9 @@ import { postSketch } from "./sketch-setup";
 let editor: Person, checker: Person, viewer: Person, outsider: Person;
 let ws: string;
 let sketchId: string;
-let stopMail: () => Promise<void>;
-afterAll(async () => stopMail?.());
 
+withMailFake();
 beforeAll(async () => {
-  stopMail = await ensureMailFake();
   ({ ws, editor, checker, viewer } = await makeTeam("Permission first bay", { owner: "owner", editor: "editor", checker: "checker", viewer: "viewer" }, { prefix: "pbv" }));
   outsider = await makeAccount("pbv-outsider");
   sketchId = await postSketch(ws, editor, "Permission first skid");

@@ -2,21 +2,19 @@
 // the sign-off rules (lib/review/rules.ts) — a checker the submitted ones they did not prepare,
 // an owner the checked ones they neither prepared nor checked, an author their returned version
 // until a newer one replaces it — and nobody outside the workspace sees any.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as queueRoute from "@/app/api/workspaces/[id]/review-queue/route";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
-import { call, ensureMailFake, makeAccount, makeTeam, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeTeam, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 import { postSketch } from "./sketch-setup";
 
 let ws: string;
 let owner: Person, editor: Person, checker: Person, viewer: Person, outsider: Person;
-let stopMail: () => Promise<void>;
-afterAll(async () => stopMail?.());
 
+withMailFake();
 beforeAll(async () => {
-  stopMail = await ensureMailFake();
   ({ ws, owner, editor, checker, viewer } = await makeTeam("Queue", { owner: "owner", editor: "editor", checker: "checker", viewer: "viewer" }, { prefix: "q" }));
   outsider = await makeAccount("q-outsider");
 });

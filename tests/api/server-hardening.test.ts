@@ -5,7 +5,6 @@
 // sign-ins to itself, and detail edits are logged as edits.
 import { and, eq, like } from "drizzle-orm";
 import { afterEach, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
-import * as authRoute from "@/app/api/auth/[...all]/route";
 import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
 import * as forkRoute from "@/app/api/sketches/[id]/fork/route";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
@@ -17,11 +16,12 @@ import { auditSentence } from "@/components/workspaces/auditSentence";
 import { db } from "@/db";
 import { appRateLimit, auditEvent, membership, sketch, user } from "@/db/schema";
 import { addressFromForwardedFor, clientAddress, proxyList } from "@/lib/client-address";
-import { appOrigin, authRateLimit, isLoopbackHost, mailboxEnabled } from "@/lib/env";
+import { authRateLimit, isLoopbackHost, mailboxEnabled } from "@/lib/env";
 import { isUuid } from "@/lib/schemas";
 import { accessLostError } from "@/lib/sketches";
 import { copyUnderlayForFork } from "@/lib/uploads/underlay";
 import { call, makeAccount, makeWorkspace, PASSWORD, signIn, uniqueEmail, type Person } from "./helpers";
+import { authPoster } from "./auth-setup";
 import { fixture } from "./sketch-fixtures";
 
 // watch the underlay copy of forks without changing what it does
@@ -43,14 +43,7 @@ const setEnv = (k: string, v: string | undefined) => {
   else process.env[k] = v;
 };
 
-const authPost = (path: string, body: unknown, headers: Record<string, string> = {}) =>
-  authRoute.POST(
-    new Request(`${appOrigin()}/api/auth${path}`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin: appOrigin(), "x-forwarded-for": "192.0.2.200", ...headers },
-      body: typeof body === "string" ? body : JSON.stringify(body),
-    }),
-  );
+const authPost = authPoster("192.0.2.200");
 
 describe("the client address behind X-Forwarded-For", () => {
   it("without trusted proxies is the last hop, whatever the client wrote on the left", () => {

@@ -1,11 +1,11 @@
 // An owner who may not approve a checked version hears why from the sign-off read: they prepared
 // it (or checked it), and, when no other owner of the workspace could approve it, how to get one.
 import { and, eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import { db } from "@/db";
 import { membership } from "@/db/schema";
-import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { postSketch } from "./sketch-setup";
 
 const PREPARED = "You prepared this version: another owner must approve it.";
@@ -13,11 +13,9 @@ const CHECKED = "You checked this version: another owner must approve it.";
 const NO_OTHER_OWNER = "This workspace has no other owner: make a colleague an owner on the Members page to approve it.";
 
 let olivia: Person, owen: Person, chen: Person, eddie: Person;
-let stopMail: () => Promise<void>;
-afterAll(async () => stopMail?.());
 
+withMailFake();
 beforeAll(async () => {
-  stopMail = await ensureMailFake();
   [olivia, owen, chen, eddie] = await Promise.all(["appr-olivia", "appr-owen", "appr-chen", "appr-eddie"].map((n) => makeAccount(n)));
 });
 

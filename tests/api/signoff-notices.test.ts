@@ -8,7 +8,7 @@ import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
 import { devMail } from "@/db/schema";
-import { call, ensureMailFake, makeTeam, waitForMail, type Json, type Person } from "./helpers";
+import { call, withMailFake, makeTeam, waitForMail, type Json, type Person } from "./helpers";
 import { postSketch } from "./sketch-setup";
 
 let owner: Person;
@@ -19,8 +19,8 @@ let ws: string;
 let sketchId: string;
 const title = `Notice skid ${Date.now()}`;
 
+withMailFake();
 beforeAll(async () => {
-  await ensureMailFake();
   ({ ws, owner, author, checker, viewer } = await makeTeam("Notice bay", { owner: "owner", author: "editor", checker: "checker", viewer: "viewer" }, { prefix: "notice" }));
   sketchId = await postSketch(ws, author, title, "pipe-bend-anchor");
 });

@@ -3,7 +3,7 @@
 // comes from the same rules table the server enforces (lib/review/rules.ts), so the two cannot
 // drift apart; the spot checks below pin the table itself to what the trade expects.
 import { and, count, eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import { db } from "@/db";
 import { auditEvent, signOff, sketch, sketchVersion } from "@/db/schema";
@@ -11,7 +11,7 @@ import { decideSignOff, REVIEW_STATES, SIGN_OFF_RULES, SIGN_OFF_STEPS, type Revi
 import { ROLES, type Role } from "@/lib/roles";
 import { summarizeSolve } from "@/lib/sketch-document";
 import { parseSketch } from "@/solver";
-import { call, ensureMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeWorkspace, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 
 type Relation = "neither" | "author" | "checker";
@@ -25,11 +25,9 @@ const parsed = parseSketch(fixture("pipe-bend-anchor"));
 if (!parsed.ok) throw new Error("fixture does not parse");
 const summary = summarizeSolve(parsed);
 
-let stopMail: () => Promise<void>;
-afterAll(async () => stopMail?.());
 
+withMailFake();
 beforeAll(async () => {
-  stopMail = await ensureMailFake();
   for (const r of ROLES) actors[r] = await makeAccount(`signoff-${r}`);
   prep = await makeAccount("signoff-prep");
   chk = await makeAccount("signoff-chk");
