@@ -178,7 +178,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
               href={`/api/sketches/${sketchId}/versions/${number}/calc-sheet?units=${units}`}
               download
               className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45"
-              title="A PDF of this version: title block, drawing, inputs, hand check, reactions per case, envelope, sweeps, method and cautions"
+              title="A PDF of this version: title block, drawing, inputs, hand check, reactions per case, envelope, stability, sweeps, check record, method, assumptions and cautions"
             >
               Calc sheet (PDF)
             </a>

@@ -440,7 +440,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
 /** The method in words, around its two equations (`EQUATIONS`, printed on lines of their own). */
 export const METHOD: readonly string[] = [
   "For each body, the linear momentum and moment-of-momentum equations of a control volume fixed to the body, in steady flow (W the body's weight, at its centre of gravity G; m·a its mass times the acceleration the sketch gives, none unless it gives one):",
-  "Moments are taken about a point O, counter-clockwise positive, with r measured from O; each sum runs over the body's supports, loads and ports, and a couple counts whole. A port's momentum flux is β·ṁ·V, with β its momentum-flux factor (1, uniform flow, unless given). Gauge pressure at a port pushes inward (p·A along the flow at an inlet, against it at an outlet). Supports are stiff springs on the rigid body: a statically determinate body's reactions follow from equilibrium alone; an indeterminate one's from the support stiffnesses. Contacts push only and ties pull only; a contact or tie that would have to pull or push is released (lifts, goes slack), and a body that no engagement can hold tips (the reactions shown are then those equilibrium would require with every support bilateral). Friction is checked (|t| ≤ μ·n), not enforced.",
+  "Moments are taken about a point O, counter-clockwise positive, with r measured from O; each sum runs over the body's supports, loads and ports, and a couple counts whole. A port's momentum flux is β·ṁ·V, with β its momentum-flux factor (1, uniform flow, unless given). Gauge pressure at a port pushes inward (p·A along the flow at an inlet, against it at an outlet). Supports are stiff springs on the rigid body: a statically determinate body's reactions follow from equilibrium alone; an indeterminate one's from the support stiffnesses. Contacts push only and ties pull only; a contact or tie that would have to pull or push is released (lifts, goes slack), and a body that no engagement can hold tips (the reactions shown are then those equilibrium would require with every support bilateral). Friction is checked (|t|\u00a0≤\u00a0μ·n), not enforced.",
 ];
 
 /** Linear momentum and moment of momentum for a control volume in steady flow. */
@@ -456,6 +456,7 @@ export const EQUATIONS: readonly string[] = [
 export function fluidAssumptions(ports: ReadonlyArray<Pick<Port, "id" | "label" | "density">>, units: UnitSystem, hasCases = false): string[] {
   if (!ports.length) return [];
   const name = (p: Pick<Port, "id" | "label">) => p.label?.trim() || p.id;
+  const list = (names: string[]) => (names.length < 2 ? names.join("") : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`);
   const given = ports.filter((p) => p.density !== undefined && Number.isFinite(p.density));
   const byValue = new Map<string, string[]>();
   for (const p of given) {
@@ -465,8 +466,8 @@ export function fluidAssumptions(ports: ReadonlyArray<Pick<Port, "id" | "label" 
   const without = ports.filter((p) => !given.includes(p)).map(name);
   const drawn = hasCases ? " (as drawn; a case may set its own)" : "";
   const parts: string[] = [];
-  if (given.length) parts.push(`Fluid density as each port gives it, constant across the port${drawn}: ${[...byValue].map(([v, names]) => `${v} at ${names.join(", ")}`).join("; ")}.`);
-  if (without.length) parts.push(`${without.length === 1 ? "Port" : "Ports"} ${without.join(", ")} ${without.length === 1 ? "gives" : "give"} no density: ${without.length === 1 ? "its" : "their"} mass flow and velocity are taken as given.`);
+  if (given.length) parts.push(`Fluid density as each port gives it, constant across the port${drawn}: ${[...byValue].map(([v, names]) => `${v} at ${list(names)}`).join("; ")}.`);
+  if (without.length) parts.push(`${without.length === 1 ? "Port" : "Ports"} ${list(without)} ${without.length === 1 ? "gives" : "give"} no density: ${without.length === 1 ? "its" : "their"} mass flow and velocity are taken as given.`);
   return [parts.join(" ")];
 }
 
@@ -520,9 +521,19 @@ function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number
   const split = left + width * 0.52;
   doc.moveTo(split, top).lineTo(split, top + h).lineWidth(0.6).stroke();
   doc.font("Inter-SemiBold").fontSize(8).fillColor(ACCENT).text("COUNTERPOISE · CALCULATION SHEET", left + 10, top + 9, { width: split - left - 20 });
-  doc.font("Inter-SemiBold").fontSize(13).fillColor(INK).text(input.sketchTitle, left + 10, top + 24, { width: split - left - 20, height: 36, ellipsis: true });
-  doc.font("Inter").fontSize(8.5).fillColor(SOFT).text(`Workspace: ${input.workspace}`, left + 10, top + 62, { width: split - left - 20 });
-  doc.text(`Version ${input.version}${input.versionMessage ? ` — ${input.versionMessage}` : ""}`, left + 10, top + 74, { width: split - left - 20, height: 22, ellipsis: true });
+  // each text in its place in the box, cut with an ellipsis where it is too long; what is cut is
+  // printed whole under the box, so no word of the title or the revision note is lost
+  const inner = split - left - 20;
+  const cut: Array<[string, string]> = [];
+  const boxed = (text: string, font: string, size: number, y: number, lines: number, color: string, name: string, whole = text) => {
+    doc.font(font).fontSize(size);
+    const room = lines * doc.currentLineHeight(true) + 1;
+    if (doc.heightOfString(text, { width: inner }) > room) cut.push([name, whole]);
+    doc.fillColor(color).text(text, left + 10, y, { width: inner, height: room, ellipsis: true });
+  };
+  boxed(input.sketchTitle, "Inter-SemiBold", 13, top + 24, 2, INK, "Title");
+  boxed(`Workspace: ${input.workspace}`, "Inter", 8.5, top + 62, 1, SOFT, "Workspace", input.workspace);
+  boxed(`Version ${input.version}${input.versionMessage ? ` — ${input.versionMessage}` : ""}`, "Inter", 8.5, top + 74, 2, SOFT, `Version ${input.version}`, input.versionMessage ?? "");
   const rows: Array<[string, string]> = [
     ["Saved", fmtDate(input.savedAt)],
     ["Printed", fmtDate(input.generatedAt ?? new Date())],
@@ -537,6 +548,11 @@ function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number
     doc.font("Inter-SemiBold").fontSize(7.8).fillColor(INK).text(v, split + 72, y - 0.5, { width: left + width - split - 78, height: 12, lineBreak: false });
   });
   doc.y = top + h + 8;
+  for (const [name, whole] of cut) {
+    doc.font("Inter-SemiBold").fontSize(8.5).fillColor(INK).text(`${name}: `, left, doc.y, { continued: true });
+    doc.font("Inter").fillColor(SOFT).text(whole, { width, features: PROSE_FEATURES });
+    doc.y += 4;
+  }
   // where the review stands, under the box across its width: a withdrawn approval is not left to be
   // read as current, and its reason is printed whole
   if (input.review) {

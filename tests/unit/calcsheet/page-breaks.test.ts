@@ -112,11 +112,11 @@ describe("the method and the fluid on the calc sheet", () => {
       { id: "jet", label: "jet" },
     ];
     expect(fluidAssumptions(ports, "SI")).toEqual([
-      "Fluid density as each port gives it, constant across the port: 1,000 kg/m³ at suction, discharge; 1.2 kg/m³ at vent. Port jet gives no density: its mass flow and velocity are taken as given.",
+      "Fluid density as each port gives it, constant across the port: 1,000 kg/m³ at suction and discharge; 1.2 kg/m³ at vent. Port jet gives no density: its mass flow and velocity are taken as given.",
     ]);
     // 1 lb/ft³ = 16.018 46 kg/m³ (NIST SP 811, appendix B.8): 1000 kg/m³ = 62.43 lb/ft³
     expect(fluidAssumptions(ports.slice(0, 1), "US", true)).toEqual(["Fluid density as each port gives it, constant across the port (as drawn; a case may set its own): 62.43 lb/ft³ at suction."]);
     expect(fluidAssumptions([], "SI")).toEqual([]);
-    expect(fluidAssumptions([{ id: "a" }, { id: "b", label: "b" }], "SI")).toEqual(["Ports a, b give no density: their mass flow and velocity are taken as given."]);
+    expect(fluidAssumptions([{ id: "a" }, { id: "b", label: "b" }], "SI")).toEqual(["Ports a and b give no density: their mass flow and velocity are taken as given."]);
   });
 });
