@@ -2,6 +2,7 @@
 // SI value. Expressions take their value from the last analysis (`FieldValues`); plain numbers
 // are read directly, so a drag redraws without waiting for a parse. Scene elements are cached per
 // element object, so an unchanged element keeps the same scene object (and is not redrawn).
+import { gravityNote } from "@/solver/words";
 import type { FieldValue } from "@/solver/resolve";
 import type { SketchFile } from "@/solver/schema";
 import { portFlow } from "@/solver/ports";
@@ -109,6 +110,9 @@ export interface Scene {
   byId: Map<string, SceneElement>;
   /** ids in drawing order; the same array objects while the ids do not change (narrow redraws) */
   bodyIds?: readonly string[];
+  /** rows the canvas's legend has beyond its key of arrows (1 when it says gravity is turned): the
+   *  fit and the labels keep below it */
+  legendRows?: number;
   itemIds?: readonly string[];
 }
 
@@ -269,7 +273,9 @@ export function buildScene(file: SketchFile, fv: FieldValues = NO_VALUES): Scene
   const itemIds = items.map((i) => i.id);
   if (!sameIds(bodyIds, lastBodyIds)) lastBodyIds = bodyIds;
   if (!sameIds(itemIds, lastItemIds)) lastItemIds = itemIds;
-  return { bodies, items, byId, bodyIds: lastBodyIds, itemIds: lastItemIds };
+  const g = typeof file.gravityAngle === "number" ? file.gravityAngle : fv.values.get("gravityAngle");
+  const legendRows = gravityNote(g) ? 1 : 0;
+  return { bodies, items, byId, bodyIds: lastBodyIds, itemIds: lastItemIds, ...(legendRows ? { legendRows } : {}) };
 }
 
 /** The point an element is held by: where a drag snaps and the outline's "at". */

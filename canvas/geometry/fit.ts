@@ -14,6 +14,8 @@ import { fitView, type View } from "./view";
 
 /** Room kept at the top of the canvas for the legend of line styles, which sits over its top edge. */
 export const LEGEND_ROOM = 44;
+/** What each further row of the legend adds (gravity's direction when the sketch turns it). */
+export const LEGEND_ROW = 22;
 const GAP = 14;
 
 type Drawn = { scene: Scene; result?: SolveResult | null };
@@ -69,9 +71,10 @@ export function fitScenes(drawn: Drawn[], width: number, height: number, opts: {
  * The canvas's drawing area in content pixels (the drawing's own coordinates at the view's scale),
  * below the legend and a hair inside the edges: the labels keep inside it.
  */
-export function drawingFrame(view: View, viewport: { width: number; height: number }): Box | undefined {
-  if (viewport.width <= 1 || viewport.height <= LEGEND_ROOM) return undefined;
-  return { x0: 2 - view.x, y0: LEGEND_ROOM - view.y, x1: viewport.width - 2 - view.x, y1: viewport.height - 2 - view.y };
+export function drawingFrame(view: View, viewport: { width: number; height: number }, legendRows = 0): Box | undefined {
+  const top = LEGEND_ROOM + LEGEND_ROW * legendRows;
+  if (viewport.width <= 1 || viewport.height <= top) return undefined;
+  return { x0: 2 - view.x, y0: top - view.y, x1: viewport.width - 2 - view.x, y1: viewport.height - 2 - view.y };
 }
 
 const fitted = new WeakSet<View>();
@@ -79,7 +82,7 @@ const fitted = new WeakSet<View>();
 /** The canvas's fit to view: one scene, clear of the legend. The view it gives is known as a fit
  *  (`isFitted`) until a zoom or a pan replaces it. */
 export function fitScene(scene: Scene, width: number, height: number, drawn: { result?: SolveResult | null; units?: UnitSystem } = {}): View {
-  const view = fitScenes([{ scene, result: drawn.result }], width, height, { units: drawn.units, top: LEGEND_ROOM });
+  const view = fitScenes([{ scene, result: drawn.result }], width, height, { units: drawn.units, top: LEGEND_ROOM + LEGEND_ROW * (scene.legendRows ?? 0) });
   fitted.add(view);
   return view;
 }

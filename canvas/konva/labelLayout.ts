@@ -54,7 +54,7 @@ export function followLabelLayout(stores: EditorStores, interaction: Interaction
     // one force unit for the given loads and the reactions, as the drawing writes them
     const family = drawingFamily(shown, e.units, scene.items, stores.analysis.getState().shownStability);
     const groups = elementGroups(scene, view.scale, e.units, statesOf(shown, supports), family);
-    const frame = drawingFrame(view, viewport);
+    const frame = drawingFrame(view, viewport, scene.legendRows);
     const results = shown ? resultLayer(groups, scene, view.scale, e.units, shown, supportStates(shown, supports), stale, frame, family) : [];
     const handle = turnHandleBoxes(scene, e.selection, e.tool.kind, view.scale, e.units, frame);
     const shifts = placeElementLabels(groups, results, it.labelShifts, frame, handle);

@@ -53,7 +53,7 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       const kept = sc.items.filter((i) => KEPT_OFF.has(i.kind));
       // held while a pan lasts: the labels keep inside the drawing area where it ends
       if (interaction.getState().panning) return;
-      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, e.view.x, e.view.y, e.viewport, e.momentPoint, ...parts];
+      const key: unknown[] = [a.shown, a.stale, e.view.scale, e.units, e.view.x, e.view.y, e.viewport, e.momentPoint, sc.legendRows, ...parts];
       if (same(key, last) && (same(kept, lastKept) || interaction.getState().dragging)) return;
       last = key;
       lastKept = kept;
@@ -68,7 +68,7 @@ export function ResultsShape({ interaction }: { interaction: InteractionStore })
       const states = a.shown ? supportStates(a.shown, a.shownSketch?.supports) : null;
       const family = drawingFamily(a.shown, e.units, scene.items, a.shownStability);
       const groups = a.shown || e.momentPoint ? elementGroups(scene, e.view.scale, e.units, states, family) : [];
-      const found = a.shown && states ? resultLayer(groups, scene, e.view.scale, e.units, a.shown, states, a.stale, drawingFrame(e.view, e.viewport), family) : [];
+      const found = a.shown && states ? resultLayer(groups, scene, e.view.scale, e.units, a.shown, states, a.stale, drawingFrame(e.view, e.viewport, sc.legendRows), family) : [];
       // the hand check's P, its words clear of the result's and the elements' own
       primsRef.current = e.momentPoint ? [...found, ...momentPointPrims(px(e.momentPoint, e.view.scale), [...found, ...groups.flatMap((g) => g.prims)])] : found;
       const layer = shapeRef.current?.getLayer();
@@ -100,6 +100,7 @@ export const SelectionHandles = memo(function SelectionHandles() {
   const tool = useEditor((s) => s.tool.kind);
   const view = useEditor((s) => s.view);
   const viewport = useEditor((s) => s.viewport);
+  const legendRows = useScene((s) => s.legendRows);
   const directed = el && el.kind !== "body" && DIRECTED.has(el.kind) && "angle" in el ? (el as SceneItem & { angle: number }) : null;
   // the element's words are measured once per change of the element, the scale or the units (not
   // per pan frame); the handle's place among them follows the view
@@ -107,9 +108,9 @@ export const SelectionHandles = memo(function SelectionHandles() {
   const place = useMemo(() => {
     if (!directed || !words) return null;
     const along = handleAlong(directed);
-    const frame = drawingFrame(view, viewport);
+    const frame = drawingFrame(view, viewport, legendRows);
     return { along, ...placeHandle(words, along, frame && shiftBox(frame, px(anchorOf(directed), view.scale))) };
-  }, [directed, words, view, viewport]);
+  }, [directed, words, view, viewport, legendRows]);
   if (!el || tool !== "select") return null;
   if (el.kind === "body") {
     return (
