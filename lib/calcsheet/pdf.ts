@@ -545,7 +545,11 @@ function titleBlock(doc: PDFKit.PDFDocument, input: CalcSheetInput, left: number
   rows.forEach(([k, v], i) => {
     const y = top + 9 + i * 18.5;
     doc.font("Inter").fontSize(7.5).fillColor(FAINT).text(k, split + 10, y, { width: 62 });
-    doc.font("Inter-SemiBold").fontSize(7.8).fillColor(INK).text(v, split + 72, y - 0.5, { width: left + width - split - 78, height: 12, lineBreak: false });
+    // a long name is cut in the box and printed whole under it, with its date
+    doc.font("Inter-SemiBold").fontSize(7.8);
+    const w = left + width - split - 78;
+    if (doc.widthOfString(v) > w) cut.push([k, v]);
+    doc.fillColor(INK).text(v, split + 72, y - 0.5, { width: w, height: doc.currentLineHeight(true) + 1, ellipsis: true });
   });
   doc.y = top + h + 8;
   for (const [name, whole] of cut) {
