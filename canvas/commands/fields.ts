@@ -180,9 +180,13 @@ export const renameParameter = defineCommand<{ from: string; to: string }>({
       return x;
     };
     // keep the parameter's place in the table
-    const entries = Object.entries(params).map(([k, v]) => [k === from ? to : k, rewrite(v)] as const);
+    const renamed = (ps: Record<string, Numeric>): Record<string, Numeric> => Object.fromEntries(Object.entries(ps).map(([k, v]) => [k === from ? to : k, v] as const));
     const { parameters: _p, title: _t, description: _d, format: _f, ...rest } = sketch;
-    return { ...sketch, ...(rewrite(rest) as object), parameters: Object.fromEntries(entries) as SketchFile["parameters"] };
+    const out = { ...sketch, ...(rewrite(rest) as object), parameters: renamed(Object.fromEntries(Object.entries(params).map(([k, v]) => [k, rewrite(v) as Numeric]))) as SketchFile["parameters"] } as SketchFile;
+    // an operating case sets parameters by name (its values were rewritten with the rest): the one
+    // it set for the old name is now for the new one, in the same place
+    if (out.cases) out.cases = out.cases.map((c) => (c.parameters && from in c.parameters ? { ...c, parameters: renamed(c.parameters) } : c));
+    return out;
   },
 });
 
