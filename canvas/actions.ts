@@ -199,7 +199,10 @@ function mirror(id: string, label: string, key: string, axis: MirrorAxis): Actio
       const about = mirrorLine(before, ids, axis, lookup);
       if (about === undefined) return s.notify("Nothing to mirror: the selection has no position that can be worked out.");
       const stuck = mirrorLeavesAlone(before, ids, axis, about, lookup);
-      if (!s.apply(mirrorElements({ ids, axis, lookup, about }) as Command<unknown>)) return;
+      if (!s.apply(mirrorElements({ ids, axis, lookup, about }) as Command<unknown>)) {
+        if (!s.readOnly) s.notify("The selection is its own mirror image: nothing changed. Select the body to mirror it with what sits on it.");
+        return;
+      }
       const n = mirroredIds(before, ids).size;
       const what = ids.length ? `Mirrored ${plural(n, "element")}` : "Nothing was selected: mirrored the whole sketch";
       const line = `${axis === "leftRight" ? "x" : "y"} = ${metres(about)}`;

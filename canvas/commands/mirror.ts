@@ -140,7 +140,8 @@ export const mirrorElements = defineCommand<MirrorArgs>({
     if (c === undefined) return sketch;
     const k = axis === "leftRight" ? 0 : 1;
     const lr = axis === "leftRight";
-    return edit(sketch, (d) => {
+    let changed = false;
+    const next = edit(sketch, (d) => {
       for (const id of moving) {
         const l = findElement(sketch, id)!;
         const src = l.el as unknown as Record<string, unknown>;
@@ -189,9 +190,13 @@ export const mirrorElements = defineCommand<MirrorArgs>({
             out.angle = angle(src.angle as Numeric);
           }
         }
+        // a lone pin or fixed support is its own mirror image: nothing to change, no undo step
+        if (JSON.stringify(out) === JSON.stringify(src)) continue;
+        changed = true;
         (d[l.group] as AnyElement[])[l.index] = out as unknown as AnyElement;
       }
     });
+    return changed ? next : sketch;
   },
 });
 

@@ -55,6 +55,11 @@ describe("mirroring from the keyboard", () => {
     await user.click(actions.getByRole("button", { name: "Mirror up–down" }));
     // a lone contact is its own bounding box: it stays put and turns to push down
     expect(screen.getByTestId("notice")).toHaveTextContent("Mirrored 1 element up–down about y = 0 m.");
+    // a lone pin is its own mirror image: said, and no undo step
+    row(/^Pin s1/).focus();
+    await user.keyboard("{Enter}");
+    await user.keyboard("{Shift>}H{/Shift}");
+    expect(screen.getByTestId("notice")).toHaveTextContent("The selection is its own mirror image: nothing changed. Select the body to mirror it with what sits on it.");
   }, 15_000);
 
   it("no two actions share a key", () => {

@@ -250,3 +250,15 @@ describe("every example, weightless, mirrored up–down", () => {
     }
   });
 });
+
+describe("a selection that is its own mirror image", () => {
+  it("a lone pin mirrored changes nothing and makes no undo step", () => {
+    const s = bend();
+    expect(mirrorElements.run(s, { ids: ["s1"], axis: "leftRight" })).toBe(s);
+    const store = createEditorStore({ sketch: s });
+    expect(store.getState().apply(mirrorElements({ ids: ["s1"], axis: "upDown" }))).toBe(false);
+    expect(store.getState().past).toHaveLength(0);
+    // a roller on its own turns: 160° mirrored left–right is 20°
+    expect(el(mirrorElements.run(s, { ids: ["s2"], axis: "leftRight" }), "s2")).toMatchObject({ at: [1.4, 1.2], angle: 20 });
+  });
+});
