@@ -1,6 +1,6 @@
 // The editor in Chromium: the pipe bend of the fixture built from an empty sketch with the mouse
 // and the properties panel, exported, and solved by `npm run solve` to the fixture's answer;
-// undo and redo; a bad file refused; dragging from the tray.
+// undo and redo; a bad file refused; dragging from the tray; the whole sketch mirrored.
 import { execFileSync } from "node:child_process";
 import { readFileSync } from "node:fs";
 import type { BrowserContext, Page } from "playwright-core";
@@ -146,6 +146,36 @@ describe("sketch editor", () => {
     await page.getByTestId("sketch-canvas").waitFor();
     expect(await page.getByTestId("sketch-title").textContent()).toBe("Reducing bend on a thrust anchor");
     expect(await page.getByRole("heading", { name: /Elements/ }).textContent()).toMatch(/\(5\)/);
+  });
+
+  it("mirrors the whole bend left–right with Shift+H; the exported file solves to the mirrored reactions, and Ctrl+Z undoes it", async () => {
+    const exportJson = () =>
+      download(page, async () => {
+        await page.getByTestId("menu-file").click();
+        await page.getByRole("menuitem", { name: "Export JSON" }).click();
+      });
+    const before = await exportJson();
+    await page.keyboard.press("Escape");
+    await page.getByTestId("sketch-canvas").focus();
+    await page.keyboard.press("Shift+H");
+    await expect.poll(() => page.getByTestId("notice").textContent()).toMatch(/^Nothing was selected: mirrored the whole sketch left–right about x = /);
+    await shot(page, "editor-pipe-bend-mirrored");
+    const after = await exportJson();
+    // the outlet's direction a is now 180° − a
+    const outlet = (text: string) => JSON.parse(text).ports.find((p: { id: string }) => p.id === "p2");
+    const a = Number(outlet(before.text).angle);
+    expect(Number(outlet(after.text).angle)).toBeCloseTo(((((180 - a) % 360) + 540) % 360) - 180, 6);
+    // reflection symmetry of statics (common practice): Fx and M change sign, Fy stays
+    const r0 = npmSolve(before.path);
+    const r1 = npmSolve(after.path);
+    expect(r0.ok && r1.ok).toBe(true);
+    const [f, r] = [r0.reactions.s1, r1.reactions.s1];
+    expect(Math.abs(f.fx)).toBeGreaterThan(1000);
+    expect(r.fx).toBeCloseTo(-f.fx, 6);
+    expect(r.fy).toBeCloseTo(f.fy, 6);
+    expect(r.m).toBeCloseTo(-f.m, 6);
+    await page.keyboard.press("Control+z");
+    await expect.poll(() => page.getByTestId("notice").textContent()).toBe("Undid: Mirror the whole sketch left–right");
   });
 
   it("says clearly when a saved sketch cannot be opened", async () => {
