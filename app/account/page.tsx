@@ -1,25 +1,31 @@
 import type { Metadata } from "next";
 import { ChangePasswordForm, NotificationsForm, ProfileForm } from "@/components/auth/AccountForms";
+import { DevicesPanel } from "@/components/auth/DevicesPanel";
 import { AppShell } from "@/components/shell/AppShell";
 import { Panel } from "@/components/shell/controls";
+import { activeSessions } from "@/lib/account-sessions";
 import { requirePageSession } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Account settings" };
 
 export default async function AccountPage() {
-  const { user } = await requirePageSession("/account");
+  const { user, session } = await requirePageSession("/account");
+  const devices = await activeSessions(user.id, session.id);
   return (
     <AppShell next="/account">
       <div className="mx-auto max-w-3xl space-y-6">
         <div>
           <h1 className="text-2xl font-semibold tracking-tight">Account settings</h1>
-          <p className="mt-1 text-ink-soft">Your name, your password and the mail you get.</p>
+          <p className="mt-1 text-ink-soft">Your name, your password, where you are signed in and the mail you get.</p>
         </div>
         <Panel title="Profile">
           <ProfileForm name={user.name} email={user.email} />
         </Panel>
         <Panel title="Password" description="Changing it keeps you signed in here.">
           <ChangePasswordForm />
+        </Panel>
+        <Panel title="Signed-in devices" description="Every browser where your account is signed in now. One you do not know? Sign it out, then change your password.">
+          <DevicesPanel sessions={devices} />
         </Panel>
         <Panel title="Notifications">
           <NotificationsForm enabled={user.emailNotifications !== false} />
