@@ -176,6 +176,10 @@ describe("mirror up–down", () => {
     expect(mirrorKeeps(bend(), [], "upDown")).toBe("");
     expect(mirrorKeeps(skid(), [], "leftRight")).toBe("");
     expect(mirrorKeeps({ ...skid(), motion: { ax: 2 } }, [], "leftRight")).toBe(" The body's acceleration ax keeps its sign.");
+    // an image under the sketch cannot be mirrored: the whole sketch's mirror says so, a selection's does not
+    const traced = { ...bend(), underlay: { upload: "u1", width: 800, height: 600, origin: [0, 2] as [number, number], metresPerPixel: 0.0025, rotation: 0, opacity: 0.6 } };
+    expect(mirrorKeeps(traced, [], "leftRight")).toBe(" The underlay is not mirrored.");
+    expect(mirrorKeeps(traced, ["b1"], "leftRight")).toBe("");
   });
 });
 
