@@ -41,16 +41,17 @@ export function SignedInNote({ email, children, signOut: offer }: { email: strin
 
 /**
  * Signed in, on a sign-in or sign-up link that names another address: whose session this is, signing
- * out to `action` ("sign in") with that address (`signOutTo`), or carrying on as the signed-in person.
+ * out to `action` ("sign in") with that address (`signOutTo`), or carrying on as the signed-in person
+ * (`name`: the address is in the note above, and a long one would break across the button).
  */
-export function OtherAddressNote({ signedInAs, email, action, signOutTo, carryOnTo }: { signedInAs: string; email: string; action: string; signOutTo: string; carryOnTo: string }) {
+export function OtherAddressNote({ signedInAs, name, email, action, signOutTo, carryOnTo }: { signedInAs: string; name: string; email: string; action: string; signOutTo: string; carryOnTo: string }) {
   return (
     <div className="space-y-4">
       <SignedInNote email={signedInAs} signOut={{ label: `Sign out to ${action} as ${email}`, to: signOutTo }}>
         This link is for <strong>{email}</strong>.
       </SignedInNote>
       <Link href={carryOnTo} className="inline-flex w-full justify-center rounded-md bg-ink px-4 py-2 text-center text-sm font-medium text-paper [overflow-wrap:anywhere] hover:bg-ink-soft">
-        Carry on as {signedInAs}
+        Carry on as {name}
       </Link>
     </div>
   );

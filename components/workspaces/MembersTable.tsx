@@ -182,7 +182,7 @@ export function MembersTable({
                           <RoleBadge role={m.role} />
                         )}
                       </td>
-                      <td className="num py-2.5 pr-3 text-ink-soft max-sm:hidden">{formatDate(m.joinedAt)}</td>
+                      <td className="num whitespace-nowrap py-2.5 pr-3 text-ink-soft max-sm:hidden">{formatDate(m.joinedAt)}</td>
                       <td className="py-2 text-right">
                         <RowActions
                           member={m}

@@ -1,7 +1,7 @@
 // The signed-out pages opened by someone who is signed in: each says as whom, leads back to their
 // workspaces (never "Back to sign-in", which would only bounce), and offers signing out where using
 // another account is what the page is for. Signed out, the pages stay as they were.
-import { render, screen, within } from "@testing-library/react";
+import { cleanup, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import type { ReactElement } from "react";
 import { beforeEach, describe, expect, it, vi } from "vitest";
@@ -79,6 +79,8 @@ describe("the reset-password page", () => {
   it("signed in: says as whom and that the reset signs the link's account out everywhere", async () => {
     await show(ResetPasswordPage(search({ token: "tok" })));
     expect(note()).toContain("As olivia@example.com. The new password is for the account this link was mailed to: setting it signs that account out on every device.");
+    // the card's own lead ("your account") would contradict it: left off while signed in
+    expect(screen.queryByText("After this, every device signed in to your account is signed out.")).toBeNull();
   });
 
   it("a link for another account: after the reset, says the session is still Olivia's and signs out to the sign-in", async () => {
@@ -100,8 +102,11 @@ describe("the reset-password page", () => {
     expect((await screen.findByRole("link", { name: "Sign in with the new password" })).getAttribute("href")).toBe("/sign-in");
   });
 
-  it("signed out: asks no session after the reset", async () => {
+  it("signed out: says what the reset does, and asks no session after it", async () => {
     signedIn.as = null;
+    await show(ResetPasswordPage(search({ token: "tok" })));
+    expect(screen.getByText("After this, every device signed in to your account is signed out.")).toBeTruthy();
+    cleanup();
     auth.resetPassword.mockResolvedValue({ data: { status: true }, error: null });
     await setPassword();
     expect(await screen.findByRole("link", { name: "Sign in with the new password" })).toBeTruthy();
@@ -120,7 +125,7 @@ describe("the confirmation page", () => {
     const user = userEvent.setup();
     await show(VerifyPage(search({ confirmed: "1", next: "/sketches/new?save=1" })));
     expect(screen.queryByRole("link", { name: "Sign in" })).toBeNull();
-    expect(screen.getByRole("link", { name: "Carry on where you left off, as olivia@example.com" }).getAttribute("href")).toBe("/sketches/new?save=1");
+    expect(screen.getByRole("link", { name: "Carry on where you left off, as Olivia" }).getAttribute("href")).toBe("/sketches/new?save=1");
     await user.click(screen.getByRole("button", { name: "Sign out, then sign in with the confirmed address" }));
     await vi.waitFor(() => expect(router.push).toHaveBeenCalledWith("/sign-in?next=%2Fsketches%2Fnew%3Fsave%3D1"));
   });
@@ -159,7 +164,7 @@ describe("sign-in and sign-up while signed in", () => {
     const user = userEvent.setup();
     await show(SignInPage(search({ email: "eddie@example.com", next: "/invite/tok" })));
     expect(screen.getByText(/This link is for/).textContent).toContain("eddie@example.com");
-    expect(screen.getByRole("link", { name: "Carry on as olivia@example.com" }).getAttribute("href")).toBe("/invite/tok");
+    expect(screen.getByRole("link", { name: "Carry on as Olivia" }).getAttribute("href")).toBe("/invite/tok");
     await user.click(screen.getByRole("button", { name: "Sign out to sign in as eddie@example.com" }));
     await vi.waitFor(() => expect(router.push).toHaveBeenCalledWith("/sign-in?email=eddie%40example.com&next=%2Finvite%2Ftok"));
   });

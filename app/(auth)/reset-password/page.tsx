@@ -34,7 +34,7 @@ export default async function ResetPasswordPage({ searchParams }: { searchParams
     );
   }
   return (
-    <AuthCard title="Choose a new password" lead="After this, every device signed in to your account is signed out.">
+    <AuthCard title="Choose a new password" lead={session ? undefined : "After this, every device signed in to your account is signed out."}>
       <ResetPasswordForm token={token} signedInAs={session?.user.email} />
     </AuthCard>
   );

@@ -18,7 +18,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
   if (session) {
     return (
       <AuthCard title="Sign in">
-        <OtherAddressNote signedInAs={session.user.email} email={email ?? ""} action="sign in" signOutTo={withNext(`/sign-in?email=${encodeURIComponent(email ?? "")}`, target)} carryOnTo={target} />
+        <OtherAddressNote signedInAs={session.user.email} name={session.user.name} email={email ?? ""} action="sign in" signOutTo={withNext(`/sign-in?email=${encodeURIComponent(email ?? "")}`, target)} carryOnTo={target} />
       </AuthCard>
     );
   }

@@ -16,7 +16,7 @@ export default async function SignUpPage({ searchParams }: { searchParams: Promi
   if (session) {
     return (
       <AuthCard title="Create an account">
-        <OtherAddressNote signedInAs={session.user.email} email={email ?? ""} action="create an account" signOutTo={withNext(`/sign-up?email=${encodeURIComponent(email ?? "")}`, target)} carryOnTo={target} />
+        <OtherAddressNote signedInAs={session.user.email} name={session.user.name} email={email ?? ""} action="create an account" signOutTo={withNext(`/sign-up?email=${encodeURIComponent(email ?? "")}`, target)} carryOnTo={target} />
       </AuthCard>
     );
   }

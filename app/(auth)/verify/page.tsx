@@ -53,7 +53,7 @@ export default async function VerifyPage({ searchParams }: { searchParams: Searc
             To use the account you just confirmed, sign out first.
           </SignedInNote>
           <Link href={next} className={`${primary} text-center [overflow-wrap:anywhere]`}>
-            {next === DEFAULT_NEXT ? `Carry on as ${session.user.email}` : `Carry on where you left off, as ${session.user.email}`}
+            {next === DEFAULT_NEXT ? `Carry on as ${session.user.name}` : `Carry on where you left off, as ${session.user.name}`}
           </Link>
         </div>
       </AuthCard>
