@@ -11,7 +11,7 @@ import type { SketchFile } from "@/solver/schema";
 import { copyFragment, fragmentText, pasteNotice, planPaste, readFragment } from "./clipboard";
 import { moveElement, replacedWords } from "./commands/move";
 import { rotateElement } from "./commands/shape";
-import { mirrorElements, mirrorKeeps, mirrorLeavesAlone, mirrorLine, mirroredIds, type MirrorAxis } from "./commands/mirror";
+import { mirrorElements, mirrorKeeps, mirrorLeavesAlone, mirrorLine, mirrorMixedKinds, mirroredIds, mirroredMomentPoint, type MirrorAxis } from "./commands/mirror";
 import { describeElement, DIRECTED, findElement, GROUPS, KIND_LABEL, withAttached, type ElementKind } from "./model/elements";
 import { plural } from "./commands/define";
 import { sweepRangeWords, sweptUnitIn } from "./studies/display";
@@ -198,8 +198,17 @@ function mirror(id: string, label: string, key: string, axis: MirrorAxis): Actio
       const lookup = valueLookup(ctx.stores.analysis);
       const about = mirrorLine(before, ids, axis, lookup);
       if (about === undefined) return s.notify("Nothing to mirror: the selection has no position that can be worked out.");
+      const mixed = mirrorMixedKinds(before, ids, axis, about);
+      if (mixed.length) {
+        const one = mixed.length === 1;
+        return s.notify(
+          `Nothing was mirrored: ${mixed.join(", ")}, and ${one ? "its mirror" : "a mirror"} (“180 deg - x” with a unit, “180 - x” without) can be written for only one of the two. Write the parameters ${one ? "it reads" : "they read"} the same way, with a unit or without, in the sketch and in every case, then mirror again.`,
+        );
+      }
       const stuck = mirrorLeavesAlone(before, ids, axis, about, lookup);
-      if (!s.apply(mirrorElements({ ids, axis, lookup, about }) as Command<unknown>)) {
+      // the hand check's P goes with the drawing (the whole sketch) or with the part it was picked on
+      const momentPoint = mirroredMomentPoint(before, ids, axis, about, s.momentPoint, lookup);
+      if (!s.apply(mirrorElements({ ids, axis, lookup, about }) as Command<unknown>, { momentPoint })) {
         if (!s.readOnly) s.notify("The selection is its own mirror image: nothing changed. Select the body to mirror it with what sits on it.");
         return;
       }
@@ -209,7 +218,9 @@ function mirror(id: string, label: string, key: string, axis: MirrorAxis): Actio
       const replaced = replacedWords(before, ed(ctx).sketch, ids.length ? ids : [...mirroredIds(before, ids)]);
       const one = stuck.length === 1;
       const alone = stuck.length ? ` ${stuck.join(", ")} ${one ? "is" : "are"} not mirrored: ${one ? "its expression has an error" : "their expressions have errors"}. Undo, fix ${one ? "it" : "them"} and mirror again.` : "";
-      ed(ctx).notify(`${what} ${how} about ${line}.${mirrorKeeps(before, ids, axis)}${replaced ? ` ${replaced}` : ""}${alone}`);
+      const moved = momentPoint && s.momentPoint && (momentPoint[0] !== s.momentPoint[0] || momentPoint[1] !== s.momentPoint[1]);
+      const pWords = moved ? ` The hand check's point P went with it, to (${metres(momentPoint[0])}, ${metres(momentPoint[1])}).` : "";
+      ed(ctx).notify(`${what} ${how} about ${line}.${pWords}${mirrorKeeps(before, ids, axis)}${replaced ? ` ${replaced}` : ""}${alone}`);
     },
   };
 }

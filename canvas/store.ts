@@ -22,6 +22,8 @@ export interface HistoryEntry {
   coalesce?: string;
   /** the whole sketch was replaced: undo and redo ask for a fit to view too */
   replacesSketch?: boolean;
+  /** the hand check's point P moved with the edit (a mirror): undo and redo put it back */
+  momentPoint?: { before: Vec2 | null; after: Vec2 | null };
 }
 
 /** What a pointer press on the canvas does. */
@@ -68,7 +70,8 @@ export interface EditorState {
   readOnly: boolean;
 
   /** Any command, whatever its arguments' type. */
-  apply: (cmd: AnyCommand, opts?: { coalesce?: string }) => boolean;
+  /** `momentPoint`: where the hand check's P goes with this edit (undo puts it back) */
+  apply: (cmd: AnyCommand, opts?: { coalesce?: string; momentPoint?: Vec2 | null }) => boolean;
   undo: () => void;
   redo: () => void;
   beginGesture: (label?: string) => void;
@@ -135,10 +138,12 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
         // the edit under way ends where it began (typed, then taken back): it leaves no undo step
         const last = get().past[get().past.length - 1];
         const backToStart = !!opts?.coalesce && last?.coalesce === opts.coalesce && get().future.length === 0 && equal(last.before, after);
+        const movesPoint = opts?.momentPoint !== undefined && !equal(opts.momentPoint, s.momentPoint);
         set((d) => {
           d.sketch = after;
           d.selection = selectionAfter;
           d.revision += 1;
+          if (movesPoint) d.momentPoint = opts!.momentPoint!;
           if (c.def.replacesSketch) d.fitRequest += 1;
           if (!c.def.undoable) return;
           if (isHistoryNotice(d.notice)) d.notice = null;
@@ -152,7 +157,16 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
             top.selectionAfter = selectionAfter;
             return;
           }
-          d.past.push({ label, before, after, selectionBefore, selectionAfter, coalesce: opts?.coalesce, ...(c.def.replacesSketch ? { replacesSketch: true } : {}) });
+          d.past.push({
+            label,
+            before,
+            after,
+            selectionBefore,
+            selectionAfter,
+            coalesce: opts?.coalesce,
+            ...(c.def.replacesSketch ? { replacesSketch: true } : {}),
+            ...(movesPoint ? { momentPoint: { before: s.momentPoint, after: opts!.momentPoint! } } : {}),
+          });
           if (d.past.length > HISTORY_LIMIT) d.past.splice(0, d.past.length - HISTORY_LIMIT);
           d.future = [];
         });
@@ -169,6 +183,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.future.push(entry);
           d.sketch = entry.before;
           d.selection = entry.selectionBefore.filter((id) => findElement(entry.before, id));
+          if (entry.momentPoint) d.momentPoint = entry.momentPoint.before;
           d.revision += 1;
           if (entry.replacesSketch) d.fitRequest += 1;
           d.notice = `Undid: ${entry.label}`;
@@ -185,6 +200,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.past.push(entry);
           d.sketch = entry.after;
           d.selection = entry.selectionAfter.filter((id) => findElement(entry.after, id));
+          if (entry.momentPoint) d.momentPoint = entry.momentPoint.after;
           d.revision += 1;
           if (entry.replacesSketch) d.fitRequest += 1;
           d.notice = `Redid: ${entry.label}`;

@@ -99,11 +99,14 @@ export function reflectedText(text: string, k: number, unit: string): string {
   return `${head}${operand(t)}`;
 }
 
-/** Does the expression give a quantity with a unit (true), a plain number (false), or nothing readable (null)? */
-function carriesUnit(text: string, sketch: SketchFile): boolean | null {
+/**
+ * Does the expression give a quantity with a unit (true), a plain number (false), or nothing
+ * readable (null)? `parameters`: the values to read it with (default: the sketch's own).
+ */
+function carriesUnit(text: string, sketch: SketchFile, parameters = sketch.parameters): boolean | null {
   try {
-    const params = resolveParameters(sketch.parameters);
-    const v = compileExpression(text, new Set(Object.keys(sketch.parameters ?? {}))).evaluate(params.scope);
+    const params = resolveParameters(parameters);
+    const v = compileExpression(text, new Set(Object.keys(parameters ?? {}))).evaluate(params.scope);
     if (isUnit(v)) return true;
     return typeof v === "number" ? false : null;
   } catch {
@@ -201,6 +204,38 @@ export const mirrorElements = defineCommand<MirrorArgs>({
 });
 
 /**
+ * Where the hand check's point P goes with a mirror. The whole sketch mirrored: P is mirrored with
+ * it (moments are then taken about the same place on the mirrored drawing). Only a selection
+ * mirrored: P follows only when it sits on a point of what is mirrored (picked on a support, a
+ * corner or a centre of gravity of it, as the pick snaps there); a P on what stays, or in open
+ * space, stays. null (the default, the first support) stays null: it follows the support itself.
+ */
+export function mirroredMomentPoint(
+  sketch: SketchFile,
+  ids: readonly string[],
+  axis: MirrorAxis,
+  about: number,
+  p: readonly [number, number] | null,
+  lookup?: ValueOf,
+): [number, number] | null {
+  if (!p) return null;
+  const k = axis === "leftRight" ? 0 : 1;
+  const flipped: [number, number] = [p[0], p[1]];
+  flipped[k] = roundTo(2 * about - p[k]);
+  if (!ids.length) return flipped;
+  const near = (a: number | undefined, b: number) => a !== undefined && Math.abs(a - b) <= 1e-6 * Math.max(1, Math.abs(b));
+  for (const id of mirroredIds(sketch, ids)) {
+    const l = findElement(sketch, id);
+    if (!l) continue;
+    const pts = pointsOf(l.el, lookup);
+    const cg = (l.el as unknown as { cg?: Numeric[] }).cg;
+    if (cg) pts.push([coordOf(cg[0], id, "cg[0]", lookup), coordOf(cg[1], id, "cg[1]", lookup)]);
+    if (pts.some(([x, y]) => near(x, p[0]) && near(y, p[1]))) return flipped;
+  }
+  return [p[0], p[1]];
+}
+
+/**
  * The expressions a mirror can neither rewrite nor replace by a value (they hold an error now):
  * they stay as they were, so the status line names them ("Discharge's direction").
  */
@@ -220,6 +255,51 @@ export function mirrorLeavesAlone(sketch: SketchFile, ids: readonly string[], ax
     }
     if (axis === "leftRight" && l.kind !== "couple" && stuck(r.angle, id, "angle")) hit.add("angle");
     for (const f of hit) out.push(`${l.el.label || id}'s ${FIELD_WORDS[f] ?? f}`);
+  }
+  return out;
+}
+
+/**
+ * The expressions whose mirror cannot be written for the sketch and every operating case at once:
+ * "k − x" needs k with a unit when x has one ("180 deg - theta") and a plain k when x is a plain
+ * number ("180 - a"), so an expression that is a plain number in the sketch but has a unit in a case
+ * (or the other way round) would break in one of them. The mirror is refused and these are named
+ * ("Discharge's direction (a plain number in the sketch, with a unit in case “Hot day”)").
+ * A negation ("-x", an up–down angle or a mirror about 0) fits both and is never named.
+ */
+export function mirrorMixedKinds(sketch: SketchFile, ids: readonly string[], axis: MirrorAxis, about: number): string[] {
+  const cases = sketch.cases ?? [];
+  if (!cases.length) return [];
+  const k = axis === "leftRight" ? 0 : 1;
+  const kind = (u: boolean) => (u ? "with a unit" : "a plain number");
+  const out: string[] = [];
+  const mixed = (v: unknown): string | null => {
+    if (typeof v !== "string" || plainNumber(v) !== undefined) return null;
+    const base = carriesUnit(v, sketch);
+    if (base === null) return null;
+    for (const c of cases) {
+      if (!c.parameters || !Object.keys(c.parameters).length) continue;
+      const there = carriesUnit(v, sketch, { ...(sketch.parameters ?? {}), ...c.parameters });
+      if (there !== null && there !== base) return `${kind(base)} in the sketch, ${kind(there)} in case “${c.name}”`;
+    }
+    return null;
+  };
+  for (const id of mirroredIds(sketch, ids)) {
+    const l = findElement(sketch, id);
+    if (!l) continue;
+    const r = l.el as unknown as Record<string, unknown>;
+    const hit = new Map<string, string>();
+    const check = (v: unknown, field: string) => {
+      if (hit.has(field)) return;
+      const why = mixed(v);
+      if (why) hit.set(field, why);
+    };
+    if (about !== 0) {
+      (Array.isArray(r.outline) ? (r.outline as Numeric[][]) : []).forEach((p) => check(p[k], "outline"));
+      for (const f of ["at", "from", "to", "cg"]) if (Array.isArray(r[f])) check((r[f] as Numeric[])[k], f);
+    }
+    if (axis === "leftRight" && l.kind !== "couple") check(r.angle, "angle");
+    for (const [f, why] of hit) out.push(`${l.el.label || id}'s ${FIELD_WORDS[f] ?? f} (${why})`);
   }
   return out;
 }
