@@ -4,7 +4,7 @@
 // finder (which a version's page lists under its own plot too). Each quantity is read as the
 // Sweep tab reads it (`sweptQuantity`): a contact's friction margin is a gap where it is off the
 // ground or its body is not held, and the sheet says where, in the tab's words.
-import { displayKind, displayUnit, largestByKind, marksZero, parameterWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestByKind, marksZero, parameterWords, sweepRangeWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { runSweep } from "@/canvas/studies/run";
 import { findBodySlidingWith, findLimitWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
 import { describeQuantity, type QuantitySpec } from "@/solver/quantity";
@@ -89,7 +89,7 @@ export function sweepCharts(
     const unit = family && kind !== "ratio" ? family[kind] : displayUnit(mine[0].component, units, largest);
     const shown = (si: number, q: QuantitySpec) => (family && kind !== "ratio" ? convert(si, kind, units, unit).value : toDisplay(si, q.component, units, largest));
     return {
-      title: `${parameterWords(sw.parameter)} from ${formatNumber(sw.from, 6)} to ${formatNumber(sw.to, 6)} ${prettyUnit(data.unit)}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
+      title: `${sweepRangeWords(sw.parameter, sw.from, sw.to, data.unit)}${kinds.length > 1 ? ` — ${KIND_WORDS[kind]}` : ""}`,
       xLabel: `${parameterWords(sw.parameter)}${data.unit ? ` (${prettyUnit(data.unit)})` : ""}`,
       yLabel: unit || "ratio",
       series: mine.map((q, k) => ({

@@ -4,6 +4,8 @@
 import { describe, expect, it } from "vitest";
 import { sweepRangeWords, sweptUnitIn } from "@/canvas/studies/display";
 import { limitMark } from "@/components/studies/SweepChart";
+import { sweepCharts } from "@/lib/calcsheet/sweeps";
+import { exampleById } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import type { SketchFile } from "@/solver/schema";
@@ -54,5 +56,15 @@ describe("the line a found limit draws across the plot", () => {
     expect(limitMark(35.3812, "m / s")).toBe("limit: 35.38 m/s");
     // the flow factor is a plain number
     expect(limitMark(1.18634, "")).toBe("limit: 1.186");
+  });
+});
+
+describe("a kept sweep's chart on the calc sheet", () => {
+  it("is titled by its range with the unit, and a flow-factor sweep's title ends with its last figure", () => {
+    const cart = exampleById("fire-monitor-trailer")!.sketch;
+    const bySpeed = { id: "q", parameter: "Q", from: 1000, to: 2000, points: 3, quantities: [{ support: "axle", component: "frictionMargin" as const }] };
+    expect(sweepCharts(cart, bySpeed, "SI", ["axle"]).charts.map((c) => c.title)).toEqual(["Q from 1,000 to 2,000 gpm"]);
+    const byFlow = { ...bySpeed, id: "f", parameter: FLOW_FACTOR, from: 0, to: 2 };
+    expect(sweepCharts(cart, byFlow, "SI", ["axle"]).charts.map((c) => c.title)).toEqual(["flow factor from 0 to 2"]);
   });
 });
