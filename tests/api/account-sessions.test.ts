@@ -8,11 +8,10 @@ import { session } from "@/db/schema";
 import { activeSessions } from "@/lib/account-sessions";
 import { getAuth } from "@/lib/auth";
 import { authPoster } from "./auth-setup";
-import { makeAccount, signIn } from "./helpers";
+import { sessionTokenOf, makeAccount, signIn } from "./helpers";
 
 const post = authPoster("10.9.8.61");
-const tokenOf = (cookie: string) => decodeURIComponent(/counterpoise\.session_token=([^;]+)/.exec(cookie)![1]).split(".")[0];
-const idOf = async (cookie: string) => (await db.select({ id: session.id }).from(session).where(eq(session.token, tokenOf(cookie))))[0].id;
+const idOf = async (cookie: string) => (await db.select({ id: session.id }).from(session).where(eq(session.token, sessionTokenOf(cookie))))[0].id;
 
 describe("activeSessions", () => {
   it("lists the account's live sessions, the current one first and marked; expired and other people's are left out", async () => {
@@ -20,7 +19,7 @@ describe("activeSessions", () => {
     const laptop = ada.cookie;
     const phone = await signIn(ada.email);
     const old = await signIn(ada.email);
-    await db.update(session).set({ expiresAt: new Date(Date.now() - 60_000) }).where(eq(session.token, tokenOf(old)));
+    await db.update(session).set({ expiresAt: new Date(Date.now() - 60_000) }).where(eq(session.token, sessionTokenOf(old)));
     await makeAccount("devices-bob");
 
     const list = await activeSessions(ada.id, await idOf(laptop));
@@ -29,7 +28,7 @@ describe("activeSessions", () => {
     expect(list[0].id).toBe(await idOf(laptop));
     expect(list[1].id).toBe(await idOf(phone));
     // never the token itself: the page is HTML a script could read
-    expect(JSON.stringify(list)).not.toContain(tokenOf(laptop));
+    expect(JSON.stringify(list)).not.toContain(sessionTokenOf(laptop));
   });
 
   it("after 'sign out every other device', only the current session is left, and it still works", async () => {

@@ -5,9 +5,8 @@ import { beforeAll, describe, expect, it } from "vitest";
 import * as signUpRoute from "@/app/api/invitations/[token]/sign-up/route";
 import * as invitationsRoute from "@/app/api/workspaces/[id]/invitations/route";
 import { lookUpInvitation } from "@/lib/invitations";
-import { call, withMailFake, makeAccount, makeWorkspace, uniqueEmail, type Person } from "./helpers";
+import { invitationTokenOf, call, withMailFake, makeAccount, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 
-const tokenOf = (url: string) => decodeURIComponent(url.split("/invite/")[1]);
 
 describe("invitation sign-up for an address that already has an account", () => {
   let owner: Person;
@@ -23,7 +22,7 @@ describe("invitation sign-up for an address that already has an account", () => 
     const invitee = await makeAccount("inv-existing-invitee", { signIn: false });
     const sent = await call(invitationsRoute.POST, { method: "POST", params: { id: ws }, cookie: owner.cookie, body: { email: invitee.email, role: "editor" } });
     expect(sent.status).toBe(201);
-    const token = tokenOf(sent.body.invitation.url);
+    const token = invitationTokenOf(sent.body.invitation.url);
 
     const res = await call(signUpRoute.POST, { method: "POST", params: { token }, body: { name: "Second Try", password: "another-password-2" } });
     expect(res.status).toBe(409);
@@ -39,7 +38,7 @@ describe("invitation sign-up for an address that already has an account", () => 
   it("a new address still signs up and joins (the refusal is only for an existing account)", async () => {
     const email = uniqueEmail("inv-existing-new");
     const sent = await call(invitationsRoute.POST, { method: "POST", params: { id: ws }, cookie: owner.cookie, body: { email, role: "viewer" } });
-    const res = await call(signUpRoute.POST, { method: "POST", params: { token: tokenOf(sent.body.invitation.url) }, body: { name: "New Person", password: "new-password-3" } });
+    const res = await call(signUpRoute.POST, { method: "POST", params: { token: invitationTokenOf(sent.body.invitation.url) }, body: { name: "New Person", password: "new-password-3" } });
     expect(res.status).toBe(201);
     expect(res.body.workspaceId).toBe(ws);
   });

@@ -12,7 +12,7 @@ import * as membersRoute from "@/app/api/workspaces/[id]/members/route";
 import { db } from "@/db";
 import { session, sketchVersion } from "@/db/schema";
 import { createSketch } from "@/lib/sketches";
-import { call, makeTeam, signIn, type Person } from "./helpers";
+import { sessionTokenOf, call, makeTeam, signIn, type Person } from "./helpers";
 import { fixture, parsedFixture } from "./sketch-fixtures";
 
 const ENDED = "Your session has ended (it expired, you signed out, or your password was changed): sign in again.";
@@ -26,7 +26,6 @@ beforeAll(async () => {
   sketchId = (await createSketch(ws, owner, { title: "Edges skid", document: parsedFixture("pump-skid-discharge"), message: "v1" })).sketch.id;
 });
 
-const tokenOf = (cookie: string) => decodeURIComponent(/counterpoise\.session_token=([^;]+)/.exec(cookie)![1]).split(".")[0];
 
 describe("401: the session", () => {
   it("none sent: 'Sign in to continue.'", async () => {
@@ -37,7 +36,7 @@ describe("401: the session", () => {
 
   it("expired: the cookie is still sent, and the 401 says the session ended, on a read and on a save", async () => {
     const cookie = await signIn(owner.email);
-    await db.update(session).set({ expiresAt: new Date(Date.now() - 60_000) }).where(eq(session.token, tokenOf(cookie)));
+    await db.update(session).set({ expiresAt: new Date(Date.now() - 60_000) }).where(eq(session.token, sessionTokenOf(cookie)));
     const read = await call(sketchRoute.GET, { params: { id: sketchId }, cookie });
     expect(read.status).toBe(401);
     expect(read.body.error).toEqual({ code: "unauthenticated", message: ENDED, reason: "session_ended" });
@@ -49,7 +48,7 @@ describe("401: the session", () => {
 
   it("signed out elsewhere (the session row gone): the same words, on a workspace route too", async () => {
     const cookie = await signIn(owner.email);
-    await db.delete(session).where(eq(session.token, tokenOf(cookie)));
+    await db.delete(session).where(eq(session.token, sessionTokenOf(cookie)));
     const res = await call(membersRoute.GET, { params: { id: ws }, cookie });
     expect(res.status).toBe(401);
     expect(res.body.error).toMatchObject({ code: "unauthenticated", message: ENDED });

@@ -44,6 +44,16 @@ export async function signIn(email: string, password = PASSWORD): Promise<string
   return cookieHeader(res.headers.getSetCookie());
 }
 
+/** The session token a Cookie header carries (its row in `session`), without the signature. */
+export function sessionTokenOf(cookie: string): string {
+  return decodeURIComponent(/counterpoise\.session_token=([^;]+)/.exec(cookie)![1]).split(".")[0];
+}
+
+/** The token of an invitation link (`…/invite/<token>`), as its routes take it. */
+export function invitationTokenOf(url: string): string {
+  return decodeURIComponent(url.split("/invite/")[1]);
+}
+
 export function cookieHeader(setCookies: string[]): string {
   return setCookies.map((c) => c.split(";")[0]).join("; ");
 }

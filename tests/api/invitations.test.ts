@@ -12,9 +12,8 @@ import { db } from "@/db";
 import { invitation, user } from "@/db/schema";
 import { appOrigin } from "@/lib/env";
 import { hashInvitationToken, lookUpInvitation } from "@/lib/invitations";
-import { call, cookieHeader, withMailFake, makeAccount, makeWorkspace, roleOf, uniqueEmail, waitForMail, type Person } from "./helpers";
+import { invitationTokenOf, call, cookieHeader, withMailFake, makeAccount, makeWorkspace, roleOf, uniqueEmail, waitForMail, type Person } from "./helpers";
 
-const tokenOf = (url: string) => decodeURIComponent(url.split("/invite/")[1]);
 
 describe("invitations", () => {
   let owner: Person;
@@ -42,7 +41,7 @@ describe("invitations", () => {
     expect(mail.text).toContain(inv.url);
     expect(inv.url.startsWith(`${appOrigin()}/invite/`)).toBe(true);
 
-    const token = tokenOf(inv.url);
+    const token = invitationTokenOf(inv.url);
     const stored = await db.select({ tokenHash: invitation.tokenHash }).from(invitation).where(eq(invitation.id, inv.id));
     expect(stored[0].tokenHash).toBe(hashInvitationToken(token));
     expect(stored[0].tokenHash).not.toContain(token);
@@ -76,7 +75,7 @@ describe("invitations", () => {
     const existing = await makeAccount("late");
     const inv = await invite(existing.email, "viewer");
     await db.update(invitation).set({ expiresAt: new Date(Date.now() - 60_000) }).where(eq(invitation.id, inv.id));
-    const res = await call(acceptRoute.POST, { method: "POST", params: { token: tokenOf(inv.url) }, cookie: existing.cookie });
+    const res = await call(acceptRoute.POST, { method: "POST", params: { token: invitationTokenOf(inv.url) }, cookie: existing.cookie });
     expect(res.status).toBe(410);
     expect(res.body.error).toEqual({
       code: "invitation_expired",
@@ -92,11 +91,11 @@ describe("invitations", () => {
     const existing = await makeAccount("eddie");
     const first = await invite(existing.email, "viewer");
     const second = await invite(existing.email, "editor");
-    const withdrawn = await call(acceptRoute.POST, { method: "POST", params: { token: tokenOf(first.url) }, cookie: existing.cookie });
+    const withdrawn = await call(acceptRoute.POST, { method: "POST", params: { token: invitationTokenOf(first.url) }, cookie: existing.cookie });
     expect(withdrawn.status).toBe(410);
     expect(withdrawn.body.error.code).toBe("invitation_withdrawn");
 
-    const ok = await call(acceptRoute.POST, { method: "POST", params: { token: tokenOf(second.url) }, cookie: existing.cookie });
+    const ok = await call(acceptRoute.POST, { method: "POST", params: { token: invitationTokenOf(second.url) }, cookie: existing.cookie });
     expect(ok.status).toBe(200);
     expect(ok.body).toEqual({ workspaceId: ws, role: "editor" });
     expect(await roleOf(ws, existing.id)).toBe("editor");
@@ -109,7 +108,7 @@ describe("invitations", () => {
 
     const inv = await invite(uniqueEmail("intended"), "viewer");
     const stranger = await makeAccount("stranger");
-    const res = await call(acceptRoute.POST, { method: "POST", params: { token: tokenOf(inv.url) }, cookie: stranger.cookie });
+    const res = await call(acceptRoute.POST, { method: "POST", params: { token: invitationTokenOf(inv.url) }, cookie: stranger.cookie });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe("email_mismatch");
     expect(res.body.error.message).toContain(inv.email);
@@ -118,7 +117,7 @@ describe("invitations", () => {
   it("two acceptances of one link at once: exactly one succeeds", async () => {
     const existing = await makeAccount("twice");
     const inv = await invite(existing.email, "checker");
-    const token = tokenOf(inv.url);
+    const token = invitationTokenOf(inv.url);
     const results = await Promise.all([1, 2, 3].map(() => call(acceptRoute.POST, { method: "POST", params: { token }, cookie: existing.cookie })));
     expect(results.map((r) => r.status).sort()).toEqual([200, 410, 410]);
     expect(await roleOf(ws, existing.id)).toBe("checker");
