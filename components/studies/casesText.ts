@@ -71,11 +71,15 @@ export function parseTerms(text: string, cases: ReadonlyArray<string | { id: str
   const out: Array<{ case: string; factor: number }> = [];
   const fold = (x: string) => x.trim().replace(/\s+/g, " ").toLowerCase();
   for (const part of parts) {
-    const m = /^(?:(-?\d+(?:\.\d+)?)\s*[×x*]?\s+|(-?\d+(?:\.\d+)?)\s*[×*]\s*)?([A-Za-z0-9_].*)$/i.exec(part);
+    // a factor, then the case: "1.5 test", "1.5 × test", "1.5·test", "1.5*test"
+    const m = /^(?:(-?\d+(?:\.\d+)?)\s*[×x*·]?\s+|(-?\d+(?:\.\d+)?)\s*[×*·]\s*)?([A-Za-z0-9_].*)$/i.exec(part);
     if (!m) return { ok: false, error: `"${part}" should read factor case (e.g. 1.2 normal)` };
     const word = m[3].trim();
     const found = list.find((c) => c.id === word) ?? list.find((c) => c.name !== undefined && fold(c.name) === fold(word)) ?? list.find((c) => fold(c.id) === fold(word));
     if (!found) {
+      // "1,5 wind": a decimal comma read as part of the case's name
+      const comma = /^(-?\d+),(\d+)\s*[×x*·]?\s*\S/i.exec(part);
+      if (comma && !m[1] && !m[2]) return { ok: false, error: `"${comma[1]},${comma[2]}" has a decimal comma: write the factor with a point (${comma[1]}.${comma[2]})` };
       const known = list.map((c) => (c.name && c.name !== c.id ? `${c.name} (${c.id})` : c.id)).join(", ");
       return { ok: false, error: `there is no case "${word}"${list.length ? ` (cases: ${known})` : ""}` };
     }

@@ -35,6 +35,11 @@ describe("case text forms", () => {
     expect(parseTerms("1.2 dead + 1.5 Rated  flow", cases)).toEqual({ ok: true, value: [{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 1.5 }] });
     expect(parseTerms("1.2*case-5 + 0.9 x rated flow", cases)).toEqual({ ok: true, value: [{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 0.9 }] });
     expect(parseTerms("1.5 wind", cases)).toEqual({ ok: false, error: 'there is no case "wind" (cases: Dead (case-5), Rated flow (case-6))' });
+    // the middle dot the sheet itself writes products with (μ·n) reads as a product too
+    expect(parseTerms("0.9·Dead + 1.5 · rated flow", cases)).toEqual({ ok: true, value: [{ case: "case-5", factor: 0.9 }, { case: "case-6", factor: 1.5 }] });
+    // a decimal comma is said as such, not as a case named "1,5 Rated flow"
+    expect(parseTerms("0.9 Dead + 1,5 Rated flow", cases)).toEqual({ ok: false, error: '"1,5" has a decimal comma: write the factor with a point (1.5)' });
+    expect(parseTerms("1,5×Dead", cases)).toEqual({ ok: false, error: '"1,5" has a decimal comma: write the factor with a point (1.5)' });
     // written back by name, as typed, and read back to the same cases
     const text = formatTerms([{ case: "case-5", factor: 1.2 }, { case: "case-6", factor: 1.5 }], cases);
     expect(text).toBe("1.2 Dead + 1.5 Rated flow");
