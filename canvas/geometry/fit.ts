@@ -16,6 +16,18 @@ import { fitView, type View } from "./view";
 export const LEGEND_ROOM = 44;
 /** What each further row of the legend adds (gravity's direction when the sketch turns it). */
 export const LEGEND_ROW = 22;
+/**
+ * The narrowest canvas on which the "Results faded" note sits in the band the legend's key keeps,
+ * at the top left, beside the key. On a narrower one it is a row of the legend, and the room for
+ * that row is kept always: the note comes and goes as a typed value holds an error and is put
+ * right, and the drawing must not jump at each keystroke.
+ */
+export const FADED_BESIDE = 720;
+
+/** The room kept at the top of a canvas `width` wide for the legend with its `legendRows` further rows. */
+export function legendRoom(width: number, legendRows = 0): number {
+  return LEGEND_ROOM + LEGEND_ROW * (legendRows + (width < FADED_BESIDE ? 1 : 0));
+}
 const GAP = 14;
 
 type Drawn = { scene: Scene; result?: SolveResult | null };
@@ -72,7 +84,7 @@ export function fitScenes(drawn: Drawn[], width: number, height: number, opts: {
  * below the legend and a hair inside the edges: the labels keep inside it.
  */
 export function drawingFrame(view: View, viewport: { width: number; height: number }, legendRows = 0): Box | undefined {
-  const top = LEGEND_ROOM + LEGEND_ROW * legendRows;
+  const top = legendRoom(viewport.width, legendRows);
   if (viewport.width <= 1 || viewport.height <= top) return undefined;
   return { x0: 2 - view.x, y0: top - view.y, x1: viewport.width - 2 - view.x, y1: viewport.height - 2 - view.y };
 }
@@ -82,7 +94,7 @@ const fitted = new WeakSet<View>();
 /** The canvas's fit to view: one scene, clear of the legend. The view it gives is known as a fit
  *  (`isFitted`) until a zoom or a pan replaces it. */
 export function fitScene(scene: Scene, width: number, height: number, drawn: { result?: SolveResult | null; units?: UnitSystem } = {}): View {
-  const view = fitScenes([{ scene, result: drawn.result }], width, height, { units: drawn.units, top: LEGEND_ROOM + LEGEND_ROW * (scene.legendRows ?? 0) });
+  const view = fitScenes([{ scene, result: drawn.result }], width, height, { units: drawn.units, top: legendRoom(width, scene.legendRows) });
   fitted.add(view);
   return view;
 }
