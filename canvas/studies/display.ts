@@ -102,6 +102,39 @@ export function sweepRangeWords(parameter: string, from: number, to: number, uni
   return `${parameterWords(parameter)} from ${formatNumber(from, digits)} to ${formatNumber(to, digits)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
 }
 
+/**
+ * The kept sweeps of `parameter` once the sketch writes it in `now` instead of `was` ("30 m/s"
+ * edited to "108 km/hr"): a kept sweep's ends are numbers in the parameter's unit, so left alone
+ * 20 to 45 m/s would silently become 20 to 45 km/hr. Their ends are rewritten as the same values
+ * in the new unit, with the status line's words; null when no kept sweep changes (the same unit,
+ * a plain number on either side, units of another kind, or no sweep of it).
+ */
+export function sweepsInNewUnit(file: Pick<SketchFile, "sweeps">, parameter: string, was: string, now: string): { sweeps: NonNullable<SketchFile["sweeps"]>; words: string } | null {
+  if (!was || !now || was === now || parameter === FLOW_FACTOR) return null;
+  const inNow = (x: number): number | null => {
+    try {
+      const v = evaluateTyped(`${x} ${was}`);
+      if (typeof v === "number") return null;
+      // the float's noise off (20 m/s is 72 km/hr, not 72.00000000000001)
+      return Number(v.toNumber(now).toPrecision(12));
+    } catch {
+      return null;
+    }
+  };
+  const said: string[] = [];
+  const sweeps = (file.sweeps ?? []).map((w) => {
+    if (w.parameter !== parameter) return w;
+    const from = inNow(w.from);
+    const to = inNow(w.to);
+    if (from === null || to === null) return w;
+    said.push(`the kept sweep of ${sweepRangeWords(parameter, w.from, w.to, was)} now runs from ${formatNumber(from, 6)} to ${formatNumber(to, 6)} ${prettyUnit(now)}`);
+    return { ...w, from, to };
+  });
+  if (!said.length) return null;
+  const text = said.join("; ");
+  return { sweeps, words: `${text[0].toUpperCase()}${text.slice(1)}: the same values, in the unit ${parameter} is written in now.` };
+}
+
 /** Stretches of a sweep's points (a support off its seat, a body not held) said one by one; more are counted. */
 export const MAX_STRETCHES = 4;
 

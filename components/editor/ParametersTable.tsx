@@ -1,9 +1,11 @@
 "use client";
 // Parameters: named values every expression may use ("theta", "rho", "Q"). Name, expression, value.
-import { useDeferredValue, useId, useMemo, useState } from "react";
+import { useDeferredValue, useId, useMemo, useRef, useState } from "react";
 import { evaluateToNumber, reservedNameReason, type FieldKind } from "@/solver/expressions";
 import { useAnalysis, useEditor, useStores } from "@/canvas/context";
 import { deleteParameter, renameParameter, setParameter } from "@/canvas/commands/fields";
+import { setStudy } from "@/canvas/commands/studies";
+import { sweepsInNewUnit, sweptUnitIn } from "@/canvas/studies/display";
 import type { Command } from "@/canvas/commands/define";
 import { numericText, toNumeric } from "@/canvas/model/numeric";
 import { formatNumber, formatQuantity, prettyUnit, type Quantity, type UnitSystem } from "@/solver/units";
@@ -108,6 +110,20 @@ function ParamRow({ name, expression, taken }: { name: string; expression: strin
   const units = useEditor((s) => s.units);
   const apply = (c: Command<unknown>, coalesce?: string) => editor.getState().apply(c, coalesce ? { coalesce } : undefined);
   const nameErr = nameDraft !== null ? nameProblem(nameDraft, taken, name) : null;
+  // a kept sweep of this parameter keeps its values when the unit it is written in changes: the
+  // unit when the field was entered, and its sweeps rewritten (same undo step) when it is left
+  const unitBefore = useRef<string | null>(null);
+  const sweepsOfIt = () => (editor.getState().sketch.sweeps ?? []).some((w) => w.parameter === name);
+  const keepSweepValues = () => {
+    const was = unitBefore.current;
+    unitBefore.current = null;
+    if (was === null) return;
+    const sketch = editor.getState().sketch;
+    const moved = sweepsInNewUnit(sketch, name, was, sweptUnitIn(sketch, name));
+    if (!moved) return;
+    apply(setStudy({ key: "sweeps", value: moved.sweeps }) as Command<unknown>, `param:${id}`);
+    editor.getState().notify(moved.words);
+  };
   const shown = value === undefined ? "" : "error" in value ? value.error : readableValue(value.value, value.unit, units);
   // a bare number the fields that read it fail on: said here, where the cause is (deferred: it
   // parses the sketch again with a unit of each kind, only while there are input errors)
@@ -149,8 +165,14 @@ function ParamRow({ name, expression, taken }: { name: string; expression: strin
           className={INPUT}
           value={exprDraft ?? expression}
           spellCheck={false}
-          onFocus={() => setExprDraft(expression)}
-          onBlur={() => setExprDraft(null)}
+          onFocus={() => {
+            setExprDraft(expression);
+            unitBefore.current = sweepsOfIt() ? sweptUnitIn(editor.getState().sketch, name) : null;
+          }}
+          onBlur={() => {
+            setExprDraft(null);
+            keepSweepValues();
+          }}
           onChange={(e) => {
             setExprDraft(e.target.value);
             const v = toNumeric(e.target.value);
