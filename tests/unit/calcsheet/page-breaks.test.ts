@@ -76,6 +76,21 @@ describe("the calc sheet's page breaks", () => {
     expect(faults).toEqual([]);
   });
 
+  it("repeats a table's header and its group's name on every page the table runs onto", { timeout: 120_000 }, async () => {
+    // the limits tables of the kept sweeps run over two or three pages in these examples
+    for (const id of ["roof-fan", "washing-cart"]) {
+      const pages = await sheet(EXAMPLES.find((e) => e.id === id)!.sketch, false);
+      const withRows = pages.map((items, p) => ({ items, p })).filter(({ items }) => items.some((i) => i.str.startsWith("none in ")));
+      expect(withRows.length, id).toBeGreaterThan(1);
+      for (const { items, p } of withRows) {
+        const firstRow = Math.max(...items.filter((i) => i.str.startsWith("none in ")).map((i) => i.y));
+        // the header's first column and the name of the limit the rows are of, above the page's first row
+        expect(items.some((i) => i.str.trim() === "Case or combination" && i.y > firstRow), `${id}, page ${p + 1}: header`).toBe(true);
+        expect(items.some((i) => i.str.startsWith("Limit: ") && i.y > firstRow), `${id}, page ${p + 1}: group`).toBe(true);
+      }
+    }
+  });
+
   it("…wherever the pages end: longer notes move everything down three lines at a time through a page", { timeout: 240_000 }, async () => {
     const trailer = EXAMPLES.find((e) => e.id === "fire-monitor-trailer")!.sketch;
     // one line of the notes each (a page holds about 70 of them)
