@@ -9,7 +9,7 @@ import { recordAudit } from "./audit";
 import { firstReport, unavailableReason } from "./db-unavailable";
 import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp, trustedProxies } from "./env";
 import { sendMailInBackground } from "./mail";
-import { existingAccountMail, passwordResetMail, verificationMail } from "./mail-templates";
+import { emailChangeMail, existingAccountMail, passwordResetMail, verificationMail } from "./mail-templates";
 import { personNameSchema } from "./schemas";
 
 /** Paths (after /api/auth) that take a password or send mail: these get the AUTH_RATE_LIMIT_* budget. */
@@ -55,6 +55,21 @@ export function withVerifyCallback(url: string, referer?: string | null): string
     u.searchParams.set("callbackURL", next ? `/verify?confirmed=1&next=${encodeURIComponent(next)}` : "/verify?confirmed=1");
   }
   return u.toString();
+}
+
+/**
+ * Whether a confirmation link (better-auth's signed token in `url`) is for a change of address
+ * rather than a new account: its payload says so (`requestType`). Read only to choose the mail's
+ * words; better-auth checks the signature when the link is opened.
+ */
+export function isEmailChangeLink(url: string): boolean {
+  try {
+    const token = new URL(url).searchParams.get("token") ?? "";
+    const payload = JSON.parse(Buffer.from(token.split(".")[1] ?? "", "base64url").toString("utf8")) as { requestType?: unknown };
+    return payload.requestType === "change-email-verification";
+  } catch {
+    return false;
+  }
 }
 
 /** Sign-up, sign-in and the rest carry a few short fields; nothing legitimate comes near this. */
@@ -106,6 +121,9 @@ export function createAuth(overrides: AuthOverrides = {}) {
     logger: { level: "warn", log: authLog },
     database: drizzleAdapter(db, { provider: "pg", schema: { user, session, account, verification, rateLimit }, transaction: true }),
     user: {
+      // a new address takes effect only once a link mailed to it is opened (better-auth's
+      // change-email-verification); an address with an account gets no mail and changes nothing
+      changeEmail: { enabled: true },
       additionalFields: {
         emailNotifications: { type: "boolean", required: false, defaultValue: true, input: true },
       },
@@ -133,7 +151,8 @@ export function createAuth(overrides: AuthOverrides = {}) {
       autoSignInAfterVerification: false,
       expiresIn: 60 * 60,
       async sendVerificationEmail({ user: u, url }, request) {
-        sendMailInBackground(verificationMail({ to: u.email, name: u.name, url: withVerifyCallback(url, request?.headers.get("referer")) }));
+        const link = withVerifyCallback(url, request?.headers.get("referer"));
+        sendMailInBackground(isEmailChangeLink(url) ? emailChangeMail({ to: u.email, name: u.name, url: link }) : verificationMail({ to: u.email, name: u.name, url: link }));
       },
     },
     session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },

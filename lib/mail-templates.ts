@@ -36,6 +36,17 @@ export function verificationMail(input: { to: string; name: string; url: string 
   );
 }
 
+/** To the new address of an account changing its e-mail: the link makes the change (one hour). */
+export function emailChangeMail(input: { to: string; name: string; url: string }): Mail {
+  return compose(
+    input.to,
+    "Confirm your new e-mail address for Counterpoise",
+    [`Hello ${input.name},`, "You asked to sign in to Counterpoise with this address from now on. Confirm it is yours and the change is made; until then the old address stays. The link works for one hour."],
+    { label: "Use this address", url: input.url },
+    "If you did not ask for this, ignore this mail: nothing changes without the link.",
+  );
+}
+
 export function passwordResetMail(input: { to: string; name: string; url: string }): Mail {
   return compose(
     input.to,

@@ -1,25 +1,36 @@
 import type { Metadata } from "next";
-import { ChangePasswordForm, NotificationsForm, ProfileForm } from "@/components/auth/AccountForms";
+import { ChangeEmailForm, ChangePasswordForm, NotificationsForm, ProfileForm } from "@/components/auth/AccountForms";
 import { DevicesPanel } from "@/components/auth/DevicesPanel";
 import { AppShell } from "@/components/shell/AppShell";
-import { Panel } from "@/components/shell/controls";
+import { Notice, Panel } from "@/components/shell/controls";
 import { activeSessions } from "@/lib/account-sessions";
 import { requirePageSession } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Account settings" };
 
-export default async function AccountPage() {
+export default async function AccountPage({ searchParams }: { searchParams: Promise<{ email?: string; error?: string }> }) {
   const { user, session } = await requirePageSession("/account");
   const devices = await activeSessions(user.id, session.id);
+  // back from the link mailed to a new address (better-auth adds `error` when the link failed)
+  const { email: emailStep, error } = await searchParams;
   return (
     <AppShell next="/account">
       <div className="mx-auto max-w-3xl space-y-6">
         <div>
           <h1 className="text-2xl font-semibold tracking-tight">Account settings</h1>
-          <p className="mt-1 text-ink-soft">Your name, your password, where you are signed in and the mail you get.</p>
+          <p className="mt-1 text-ink-soft">Your name, your sign-in address and password, where you are signed in, and the mail you get.</p>
         </div>
+        {emailStep === "changed" && !error ? (
+          <Notice tone="success">
+            <span className="[overflow-wrap:anywhere]">You now sign in with {user.email}.</span>
+          </Notice>
+        ) : null}
+        {emailStep === "changed" && error ? <Notice tone="error">That link did not change your address: it has expired or was used already. Ask for a new one below.</Notice> : null}
         <Panel title="Profile">
-          <ProfileForm name={user.name} email={user.email} />
+          <ProfileForm name={user.name} />
+        </Panel>
+        <Panel title="E-mail address">
+          <ChangeEmailForm email={user.email} />
         </Panel>
         <Panel title="Password" description="Changing it keeps you signed in here.">
           <ChangePasswordForm />

@@ -4,12 +4,12 @@ import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
 import { useFocusFirstError } from "@/components/shell/useFocusFirstError";
 import { authClient } from "@/lib/auth-client";
-import { passwordSchema, personNameSchema } from "@/lib/schemas";
+import { emailSchema, passwordSchema, personNameSchema } from "@/lib/schemas";
 import { authErrorMessage } from "./messages";
 
 type Status = { tone: "success" | "error"; text: string } | null;
 
-export function ProfileForm({ name: initial, email }: { name: string; email: string }) {
+export function ProfileForm({ name: initial }: { name: string }) {
   const router = useRouter();
   const [name, setName] = useState(initial);
   const [error, setError] = useState<{ name?: string }>({});
@@ -31,9 +31,48 @@ export function ProfileForm({ name: initial, email }: { name: string; email: str
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
       {status ? <Notice tone={status.tone}>{status.text}</Notice> : null}
       <Field id="profile-name" label="Name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={error.name} hint="Shown on versions you prepare, check or approve." />
-      <Field id="profile-email" label="E-mail address" value={email} readOnly disabled hint="You sign in with this address; it is confirmed." />
       <Button type="submit" tone="secondary" busy={busy} disabled={name.trim() === initial}>
         Save name
+      </Button>
+    </form>
+  );
+}
+
+/**
+ * A new sign-in address: better-auth mails a link to it, and the change is made when it is opened
+ * (the page comes back with `?email=changed`). Until then the current address stays.
+ */
+export function ChangeEmailForm({ email }: { email: string }) {
+  const [next, setNext] = useState("");
+  const [error, setError] = useState<{ email?: string }>({});
+  const [status, setStatus] = useState<Status>(null);
+  const [busy, setBusy] = useState(false);
+  useFocusFirstError(error, () => "new-email");
+  async function onSubmit(e: FormEvent) {
+    e.preventDefault();
+    const parsed = emailSchema.safeParse(next);
+    const same = parsed.success && parsed.data.toLowerCase() === email.toLowerCase();
+    setError({ email: !next.trim() ? "Enter the new e-mail address." : same ? "That is the address you sign in with now." : parsed.error?.issues[0]?.message });
+    if (!parsed.success || same) return;
+    setBusy(true);
+    setStatus(null);
+    const { error: err } = await authClient.changeEmail({ newEmail: parsed.data, callbackURL: "/account?email=changed" });
+    setBusy(false);
+    if (err) {
+      if (err.code === "INVALID_EMAIL") setError({ email: authErrorMessage(err) });
+      else setStatus({ tone: "error", text: authErrorMessage(err) });
+      return;
+    }
+    setStatus({ tone: "success", text: `We sent a link to ${parsed.data}. Open it within an hour to sign in with that address from then on; until then you sign in with ${email}. An address that already has an account gets no link.` });
+    setNext("");
+  }
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+      {status ? <Notice tone={status.tone}><span className="[overflow-wrap:anywhere]">{status.text}</span></Notice> : null}
+      <Field id="profile-email" label="Current e-mail address" value={email} readOnly disabled hint="You sign in with this address; it is confirmed." />
+      <Field id="new-email" type="email" label="New e-mail address" autoComplete="email" value={next} onChange={(e) => setNext(e.target.value)} error={error.email} hint="We send a link to it; the change is made when you open it." />
+      <Button type="submit" tone="secondary" busy={busy}>
+        Send the link
       </Button>
     </form>
   );

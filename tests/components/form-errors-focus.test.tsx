@@ -144,7 +144,7 @@ describe("the account and password forms", () => {
 
   it("profile: a blank name takes the focus", async () => {
     const user = userEvent.setup();
-    render(<ProfileForm name="Olivia Owner" email="olivia@example.com" />);
+    render(<ProfileForm name="Olivia Owner" />);
     await user.clear(screen.getByLabelText("Name"));
     await user.click(screen.getByRole("button", { name: "Save name" }));
     expectRefused(screen.getByLabelText("Name"), "Enter your name.");
