@@ -101,6 +101,16 @@ export function nameProblem(name: string, taken: string[], self?: string): strin
   return reservedNameReason(name);
 }
 
+/**
+ * "Q = 1500 gpm" typed whole in the new parameter's name box (as it is written on paper): its name
+ * and its expression. Null when there is no "=".
+ */
+export function splitAssignment(text: string): { name: string; expression: string } | null {
+  const i = text.indexOf("=");
+  if (i < 0) return null;
+  return { name: text.slice(0, i).trim(), expression: text.slice(i + 1).trim() };
+}
+
 function ParamRow({ name, expression, taken }: { name: string; expression: string; taken: string[] }) {
   const { editor } = useStores();
   const id = useId();
@@ -208,11 +218,15 @@ export function ParametersTable() {
   const [newName, setNewName] = useState("");
   const [newExpr, setNewExpr] = useState("");
   const units = useEditor((s) => s.units);
-  const problem = newName ? nameProblem(newName, names) : null;
+  // "Q = 1500 gpm" in the name box, the expression box empty: taken as the name and its expression
+  const typed = newExpr.trim() ? null : splitAssignment(newName);
+  const name = typed ? typed.name : newName.trim();
+  const expression = typed ? typed.expression : newExpr;
+  const problem = newName && !(typed && !typed.name && !typed.expression) ? nameProblem(name, names) : null;
   const add = () => {
-    const v = toNumeric(newExpr);
-    if (problem || !newName || v === undefined) return;
-    editor.getState().apply(setParameter({ name: newName, expression: v }) as Command<unknown>);
+    const v = toNumeric(expression);
+    if (problem || !name || v === undefined) return;
+    editor.getState().apply(setParameter({ name, expression: v }) as Command<unknown>);
     setNewName("");
     setNewExpr("");
   };
@@ -255,9 +269,14 @@ export function ParametersTable() {
         <div className="w-[28%]">
           <input aria-label="New parameter name" placeholder="name" className={INPUT} value={newName} onChange={(e) => setNewName(e.target.value)} aria-invalid={!!problem} />
           {problem && <p className="mt-0.5 text-[11px] text-caution">⚠ {problem}</p>}
+          {!problem && typed && (
+            <p className="mt-0.5 text-[11px] text-ink-faint" data-testid="parameter-typed-whole">
+              {typed.expression ? `Enter adds ${name} = ${typed.expression}` : `Type its value after “=”, or in the expression box`}
+            </p>
+          )}
         </div>
         <input aria-label="New parameter expression" placeholder={units === "US" ? "e.g. 50 psi" : "e.g. 350 kPa"} className={`${INPUT} w-[40%]`} value={newExpr} onChange={(e) => setNewExpr(e.target.value)} spellCheck={false} />
-        <button type="submit" className={BUTTON} disabled={!newName || !!problem || !newExpr.trim()}>
+        <button type="submit" className={BUTTON} disabled={!name || !!problem || !expression.trim()}>
           Add
         </button>
       </form>
