@@ -4,6 +4,7 @@
 export const AUDIT_ACTIONS = {
   "auth.sign_in": "signed in",
   "auth.password_reset": "reset their password",
+  "auth.email_change": "changed their sign-in address",
   "workspace.create": "created the workspace",
   "workspace.rename": "renamed the workspace",
   "invitation.create": "invited",

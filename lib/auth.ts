@@ -9,7 +9,7 @@ import { recordAudit } from "./audit";
 import { firstReport, unavailableReason } from "./db-unavailable";
 import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp, trustedProxies } from "./env";
 import { sendMailInBackground } from "./mail";
-import { emailChangeMail, existingAccountMail, passwordResetMail, verificationMail } from "./mail-templates";
+import { emailChangedNotice, emailChangeMail, existingAccountMail, passwordResetMail, verificationMail } from "./mail-templates";
 import { personNameSchema } from "./schemas";
 
 /** Paths (after /api/auth) that take a password or send mail: these get the AUTH_RATE_LIMIT_* budget. */
@@ -58,19 +58,23 @@ export function withVerifyCallback(url: string, referer?: string | null): string
 }
 
 /**
- * Whether a confirmation link (better-auth's signed token in `url`) is for a change of address
- * rather than a new account: its payload says so (`requestType`). Read only to choose the mail's
- * words; better-auth checks the signature when the link is opened.
+ * The change of address a confirmation link (better-auth's signed token in `url`) makes, `{ from,
+ * to }`, or null for a new account's link: its payload says so (`requestType`). Read only to choose
+ * the mail's words and to tell the old address; better-auth checks the signature itself.
  */
-export function isEmailChangeLink(url: string): boolean {
+export function emailChangeOf(url: string): { from: string; to: string } | null {
   try {
     const token = new URL(url).searchParams.get("token") ?? "";
-    const payload = JSON.parse(Buffer.from(token.split(".")[1] ?? "", "base64url").toString("utf8")) as { requestType?: unknown };
-    return payload.requestType === "change-email-verification";
+    const payload = JSON.parse(Buffer.from(token.split(".")[1] ?? "", "base64url").toString("utf8")) as { requestType?: unknown; email?: unknown; updateTo?: unknown };
+    if (payload.requestType !== "change-email-verification" || typeof payload.email !== "string" || typeof payload.updateTo !== "string") return null;
+    return { from: payload.email, to: payload.updateTo };
   } catch {
-    return false;
+    return null;
   }
 }
+
+/** Whether a confirmation link is for a change of address rather than a new account. */
+export const isEmailChangeLink = (url: string): boolean => emailChangeOf(url) !== null;
 
 /** Sign-up, sign-in and the rest carry a few short fields; nothing legitimate comes near this. */
 export const MAX_AUTH_BODY_BYTES = 64 * 1024;
@@ -150,6 +154,14 @@ export function createAuth(overrides: AuthOverrides = {}) {
       sendOnSignIn: true,
       autoSignInAfterVerification: false,
       expiresIn: 60 * 60,
+      // a change of address was just made (its link opened): the old address is told, so an
+      // owner whose session was taken learns of it, and the audit log keeps both addresses
+      async afterEmailVerification(u, request) {
+        const change = request ? emailChangeOf(request.url) : null;
+        if (!change) return;
+        sendMailInBackground(emailChangedNotice({ to: change.from, name: u.name, newEmail: change.to, url: `${appUrl()}/sign-in` }));
+        await recordAudit({ action: "auth.email_change", actorId: u.id, actorEmail: change.to, detail: { from: change.from, to: change.to } });
+      },
       async sendVerificationEmail({ user: u, url }, request) {
         const link = withVerifyCallback(url, request?.headers.get("referer"));
         sendMailInBackground(isEmailChangeLink(url) ? emailChangeMail({ to: u.email, name: u.name, url: link }) : verificationMail({ to: u.email, name: u.name, url: link }));

@@ -47,6 +47,17 @@ export function emailChangeMail(input: { to: string; name: string; url: string }
   );
 }
 
+/** To the old address once a change of address is made: what changed, and what to do if it was not them. */
+export function emailChangedNotice(input: { to: string; name: string; newEmail: string; url: string }): Mail {
+  return compose(
+    input.to,
+    "Your Counterpoise sign-in address was changed",
+    [`Hello ${input.name},`, `Your Counterpoise account now signs in with ${input.newEmail}, not with this address.`],
+    { label: "Open Counterpoise", url: input.url },
+    "If you did not make this change, someone else may hold your account: tell an owner of each of your workspaces at once, so they can remove it.",
+  );
+}
+
 export function passwordResetMail(input: { to: string; name: string; url: string }): Mail {
   return compose(
     input.to,

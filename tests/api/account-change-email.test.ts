@@ -2,11 +2,11 @@
 // for a change, not a sign-up), the address changes only when the link is opened, and then the
 // new address signs in and the old one does not. An address that has an account gets no mail and
 // changes nothing.
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import * as authRoute from "@/app/api/auth/[...all]/route";
 import { db } from "@/db";
-import { devMail, user } from "@/db/schema";
+import { auditEvent, devMail, user } from "@/db/schema";
 import { isEmailChangeLink } from "@/lib/auth";
 import { appOrigin } from "@/lib/env";
 import { firstLink, makeAccount, PASSWORD, uniqueEmail, waitForMail, withMailFake } from "./helpers";
@@ -41,6 +41,13 @@ describe("changing the e-mail address", () => {
     expect(row).toEqual({ email: next, verified: true });
     expect((await post("/sign-in/email", { email: next, password: PASSWORD })).status).toBe(200);
     expect((await post("/sign-in/email", { email: ada.email, password: PASSWORD })).status).toBe(401);
+
+    // the old address is told, and the audit log keeps both addresses
+    const notice = await waitForMail(ada.email, { subject: /sign-in address was changed/ });
+    expect(notice.text).toContain(`Your Counterpoise account now signs in with ${next}, not with this address.`);
+    expect(notice.text).toContain("If you did not make this change, someone else may hold your account");
+    const [audit] = await db.select().from(auditEvent).where(and(eq(auditEvent.actorId, ada.id), eq(auditEvent.action, "auth.email_change")));
+    expect(audit.detail).toEqual({ from: ada.email, to: next });
   });
 
   it("an address that has an account: the same answer, no mail to it, no change", async () => {
@@ -58,11 +65,16 @@ describe("changing the e-mail address", () => {
     expect((await db.select({ email: user.email }).from(user).where(eq(user.id, bo.id)))[0].email).toBe(bo.email);
   });
 
-  it("a sign-up's confirmation link is not taken for a change of address", async () => {
+  it("a sign-up's confirmation link is not taken for a change of address, and tells no old address", async () => {
     const email = uniqueEmail("change-signup");
     expect((await post("/sign-up/email", { email, password: PASSWORD, name: "Cy Signup", callbackURL: "/verify?confirmed=1" })).status).toBe(200);
     const mail = await waitForMail(email);
     expect(mail.subject).toBe("Confirm your e-mail address for Counterpoise");
     expect(isEmailChangeLink(firstLink(mail.text))).toBe(false);
+    const opened = await authRoute.GET(new Request(firstLink(mail.text), { headers: { "x-forwarded-for": "10.9.8.63" } }));
+    expect(opened.status).toBe(302);
+    const [row] = await db.select({ id: user.id, verified: user.emailVerified }).from(user).where(eq(user.email, email));
+    expect(row.verified).toBe(true);
+    expect(await db.select().from(auditEvent).where(and(eq(auditEvent.actorId, row.id), eq(auditEvent.action, "auth.email_change")))).toEqual([]);
   });
 });
