@@ -148,6 +148,12 @@ export function HandCheckView() {
   };
   // in the length unit on screen, like the terms' positions
   const shownText = (m: number) => String(Number(convert(m, "length", units).value.toFixed(4)));
+  // a field's draft starts from P as the store has it now: Px just taken (Tab to Py) has moved it
+  // already, though this render's `about` is still the point before
+  const startDraft = () => {
+    const p = editor.getState().momentPoint ?? about;
+    return { x: shownText(p[0]), y: shownText(p[1]) };
+  };
 
   return (
     <div data-testid="hand-check">
@@ -177,8 +183,8 @@ export function HandCheckView() {
               value={draft ? draft[k] : shownText(about[i])}
               aria-invalid={error?.field === k || undefined}
               aria-describedby={error?.field === k ? "moment-point-error" : undefined}
-              onFocus={() => setDraft((d) => d ?? { x: shownText(about[0]), y: shownText(about[1]) })}
-              onChange={(e) => setDraft((d) => ({ ...(d ?? { x: "", y: "" }), [k]: e.target.value }))}
+              onFocus={() => setDraft((d) => d ?? startDraft())}
+              onChange={(e) => setDraft((d) => ({ ...(d ?? startDraft()), [k]: e.target.value }))}
               onBlur={() => {
                 // what was typed stays when it is refused, beside the reason, never swapped for the old value
                 if (!draft || commitPoint(draft.x, draft.y)) setDraft(null);
