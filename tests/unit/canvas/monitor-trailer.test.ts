@@ -17,7 +17,7 @@ const G = 9.80665;
 const GAL = 3.785411784e-3;
 const IN = 0.0254;
 
-/** The trailer: deck 0…5 m at 0.4…1.4 m with a riser for the monitor; braked rear axle a pin, front axle a roller. */
+/** The trailer as drawn in the editor: 5 m long, 1.4 m to the deck (wheels inside the control volume), a riser for the monitor; braked rear axle a pin, front axle a roller. */
 function trailer(extra: Partial<SketchFile> = {}): SketchFile {
   return {
     ...emptySketch("Monitor trailer"),
@@ -26,7 +26,7 @@ function trailer(extra: Partial<SketchFile> = {}): SketchFile {
       {
         id: "b1",
         label: "Trailer",
-        outline: [[0, 0.4], [5, 0.4], [5, 1.4], [3.2, 1.4], [3, 2.2], [2.2, 2.2], [2, 1.4], [0, 1.4]],
+        outline: [[0, 0], [5, 0], [5, 1.4], [3.2, 1.4], [3, 2.2], [2.2, 2.2], [2, 1.4], [0, 1.4]],
         mass: "1800 kg",
         cg: [2.4, 1],
       },
