@@ -102,6 +102,19 @@ export function sweepRangeWords(parameter: string, from: number, to: number, uni
   return `${parameterWords(parameter)} from ${formatNumber(from, digits)} to ${formatNumber(to, digits)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
 }
 
+/** `x` in the unit `was`, written in `now` (20, "m / s", "km / hr" → 72), the float's noise off;
+ *  null when either is no unit or they are of different kinds. */
+export function inOtherUnit(x: number, was: string, now: string): number | null {
+  if (!was || !now) return null;
+  try {
+    const v = evaluateTyped(`${x} ${was}`);
+    if (typeof v === "number") return null;
+    return Number(v.toNumber(now).toPrecision(12));
+  } catch {
+    return null;
+  }
+}
+
 /**
  * The kept sweeps of `parameter` once the sketch writes it in `now` instead of `was` ("30 m/s"
  * edited to "108 km/hr"): a kept sweep's ends are numbers in the parameter's unit, so left alone
@@ -111,16 +124,7 @@ export function sweepRangeWords(parameter: string, from: number, to: number, uni
  */
 export function sweepsInNewUnit(file: Pick<SketchFile, "sweeps">, parameter: string, was: string, now: string): { sweeps: NonNullable<SketchFile["sweeps"]>; words: string } | null {
   if (!was || !now || was === now || parameter === FLOW_FACTOR) return null;
-  const inNow = (x: number): number | null => {
-    try {
-      const v = evaluateTyped(`${x} ${was}`);
-      if (typeof v === "number") return null;
-      // the float's noise off (20 m/s is 72 km/hr, not 72.00000000000001)
-      return Number(v.toNumber(now).toPrecision(12));
-    } catch {
-      return null;
-    }
-  };
+  const inNow = (x: number) => inOtherUnit(x, was, now);
   const said: string[] = [];
   const sweeps = (file.sweeps ?? []).map((w) => {
     if (w.parameter !== parameter) return w;

@@ -9,7 +9,7 @@ import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/s
 import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit } from "@/solver/units";
-import { displayKind, displayUnit, MAX_STRETCHES, parameterWords, parseTarget, sweepRangeWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, inOtherUnit, MAX_STRETCHES, parameterWords, parseTarget, sweepRangeWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
@@ -221,8 +221,14 @@ export function SweepPanel() {
   const [firstRange] = useState(() => saved ?? defaultSweepRange(parameter, values[parameter], solvesAtIn(sketch, parameter)));
   const [from, setFrom] = useState(() => String(firstRange.from));
   const [to, setTo] = useState(() => String(firstRange.to));
+  /** the unit a parameter is written in now ("" for the flow factor or a plain number) */
+  const unitNow = (name: string) => {
+    const v = name === FLOW_FACTOR ? undefined : values[name];
+    return v && !("error" in v) ? v.unit : "";
+  };
   const pickParameter = (name: string) => {
     setParameter(name);
+    setFormUnit(unitNow(name));
     const range = saved?.parameter === name ? saved : defaultSweepRange(name, values[name], solvesAtIn(sketch, name));
     setFrom(String(range.from));
     setTo(String(range.to));
@@ -232,6 +238,26 @@ export function SweepPanel() {
   // the parameter as chosen now, not from the last plot
   const chosenValue = parameter === FLOW_FACTOR ? undefined : values[parameter];
   const parameterUnit = chosenValue && !("error" in chosenValue) ? chosenValue.unit : "";
+  // the unit the plain numbers in From and To were given in: when the parameter is written in
+  // another unit of the same kind ("30 m/s" edited to "108 km/hr"), they are rewritten as the same
+  // values in it, as the kept sweeps are (a unit of another kind on the way there is passed over)
+  const [formUnit, setFormUnit] = useState(parameterUnit);
+  if (parameterUnit && parameterUnit !== formUnit) {
+    const moved = (text: string): string | null => {
+      const n = text.trim() === "" ? NaN : Number(text);
+      // a value typed with its own unit ("72 km/hr") means the same in any
+      if (!Number.isFinite(n)) return text;
+      const x = inOtherUnit(n, formUnit, parameterUnit);
+      return x === null ? null : String(x);
+    };
+    const f = formUnit ? moved(from) : from;
+    const t = formUnit ? moved(to) : to;
+    if (f !== null && t !== null) {
+      setFrom(f);
+      setTo(t);
+      setFormUnit(parameterUnit);
+    }
+  }
   // what the sweep runs on: "" (as drawn), "case:<id>" or "combination:<id>"
   const [on, setOn] = useState<string>(saved?.combination ? `combination:${saved.combination}` : saved?.case ? `case:${saved.case}` : "");
   const caseId = on.startsWith("case:") ? on.slice(5) : undefined;
@@ -476,17 +502,14 @@ export function SweepPanel() {
   /** a kept sweep's settings back in the form */
   const open = (k: SweepFile) => {
     setParameter(k.parameter);
+    // a kept sweep's ends are in the unit its parameter is written in
+    setFormUnit(unitNow(k.parameter));
     setFrom(String(k.from));
     setTo(String(k.to));
     setPoints(String(k.points));
     setOn(k.combination ? `combination:${k.combination}` : k.case ? `case:${k.case}` : "");
     if (k.quantities?.length) setPicked(k.quantities.map((q) => `${q.support}:${q.component}`));
     setKeptNote(null);
-  };
-  /** the unit a kept sweep's ends are in: the one the sketch writes its parameter in */
-  const unitOf = (name: string) => {
-    const v = name === FLOW_FACTOR ? undefined : values[name];
-    return v && !("error" in v) ? v.unit : "";
   };
   /** what a kept sweep names that the sketch no longer has */
   const keptProblem = (k: SweepFile): string | null => {
@@ -634,7 +657,7 @@ export function SweepPanel() {
               {kept.map((k) => (
                 <li key={k.id} className="flex items-start gap-1.5">
                   <span className="min-w-0 flex-1 text-ink-soft">
-                    {sweepRangeWords(k.parameter, k.from, k.to, unitOf(k.parameter))}, {k.points} points — {onLabel(k.case, k.combination)}
+                    {sweepRangeWords(k.parameter, k.from, k.to, unitNow(k.parameter))}, {k.points} points — {onLabel(k.case, k.combination)}
                     {keptProblem(k) && <span className="block text-caution" data-testid="kept-sweep-problem">{keptProblem(k)}: the calc sheet cannot plot it. Open it, pick another, and keep it again.</span>}
                   </span>
                   <button type="button" className="text-[11.5px] text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink" onClick={() => open(k)} aria-label={`Open the kept sweep ${k.id}`}>

@@ -62,4 +62,28 @@ describe("the kept sweeps' ends when their parameter's unit changes", () => {
     expect(storedSketch(mem)?.sweeps?.map((w) => [w.from, w.to])).toEqual([[0, 10], [0, 20]]);
     expect(screen.getByTestId("notice")).not.toHaveTextContent("now runs from");
   }, 20_000);
+
+  it("the Sweep tab's From and To follow too: plain numbers become the same values, a value with its unit stays", async () => {
+    const user = userEvent.setup();
+    await renderEditor(skidWithKeptSweeps());
+    await user.click(screen.getByRole("tab", { name: "Sweep" }));
+    const from = screen.getByRole("textbox", { name: "From" });
+    const to = screen.getByRole("textbox", { name: "To" });
+    // the first kept sweep's settings, in bar
+    expect([(from as HTMLInputElement).value, (to as HTMLInputElement).value]).toEqual(["0", "10"]);
+    await user.clear(from);
+    await user.type(from, "2");
+    await user.clear(to);
+    await user.type(to, "900 kPa");
+    await retypeP(user, "400 kPa");
+    await waitFor(() => expect(screen.getByTestId("sweep-unit-hint")).toHaveTextContent("Numbers in kPa"));
+    expect((from as HTMLInputElement).value).toBe("200");
+    expect((to as HTMLInputElement).value).toBe("900 kPa");
+    // the kept list says the kept sweeps' new ends in the new unit
+    expect(screen.getByTestId("kept-sweeps")).toHaveTextContent("p from 0 to 1,000 kPa, 11 points");
+    // and back: 200 kPa is 2 bar
+    await retypeP(user, "4 bar");
+    await waitFor(() => expect((from as HTMLInputElement).value).toBe("2"));
+    expect(screen.getByTestId("kept-sweeps")).toHaveTextContent("p from 0 to 10 bar, 11 points");
+  }, 30_000);
 });
