@@ -18,7 +18,7 @@ import { sweepRangeWords, sweptUnitIn } from "./studies/display";
 import { anchorOf } from "./scene";
 import { polygonAround, rectangleAround } from "./model/factory";
 import { valueLookup } from "./analysis/store";
-import { fitScene } from "./geometry/fit";
+import { fitScene, isFitted } from "./geometry/fit";
 import { fitUnderlayView } from "./geometry/underlay";
 import { snapTo } from "./geometry/snap";
 import { gridStep, toWorld, zoomAt } from "./geometry/view";
@@ -208,7 +208,9 @@ function mirror(id: string, label: string, key: string, axis: MirrorAxis): Actio
       const stuck = mirrorLeavesAlone(before, ids, axis, about, lookup);
       // the hand check's P goes with the drawing (the whole sketch) or with the part it was picked on
       const momentPoint = mirroredMomentPoint(before, ids, axis, about, s.momentPoint, lookup);
-      if (!s.apply(mirrorElements({ ids, axis, lookup, about }) as Command<unknown>, { momentPoint })) {
+      // the whole sketch mirrored in a fitted view: fitted again (the words drawn around it change sides)
+      const refit = !ids.length && isFitted(s.view);
+      if (!s.apply(mirrorElements({ ids, axis, lookup, about }) as Command<unknown>, { momentPoint, refit })) {
         if (!s.readOnly) s.notify("The selection is its own mirror image: nothing changed. Select the body to mirror it with what sits on it.");
         return;
       }

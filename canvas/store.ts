@@ -70,8 +70,12 @@ export interface EditorState {
   readOnly: boolean;
 
   /** Any command, whatever its arguments' type. */
-  /** `momentPoint`: where the hand check's P goes with this edit (undo puts it back) */
-  apply: (cmd: AnyCommand, opts?: { coalesce?: string; momentPoint?: Vec2 | null }) => boolean;
+  /**
+   * `momentPoint`: where the hand check's P goes with this edit (undo puts it back). `refit`: the
+   * edit moves the drawing about as a new sketch would (a whole-sketch mirror): the view is fitted
+   * again, on undo and redo too.
+   */
+  apply: (cmd: AnyCommand, opts?: { coalesce?: string; momentPoint?: Vec2 | null; refit?: boolean }) => boolean;
   undo: () => void;
   redo: () => void;
   beginGesture: (label?: string) => void;
@@ -144,7 +148,8 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
           d.selection = selectionAfter;
           d.revision += 1;
           if (movesPoint) d.momentPoint = opts!.momentPoint!;
-          if (c.def.replacesSketch) d.fitRequest += 1;
+          const refit = c.def.replacesSketch || !!opts?.refit;
+          if (refit) d.fitRequest += 1;
           if (!c.def.undoable) return;
           if (isHistoryNotice(d.notice)) d.notice = null;
           const top = d.past[d.past.length - 1];
@@ -164,7 +169,7 @@ export function createEditorStore(initial: Partial<Pick<EditorState, "sketch" | 
             selectionBefore,
             selectionAfter,
             coalesce: opts?.coalesce,
-            ...(c.def.replacesSketch ? { replacesSketch: true } : {}),
+            ...(refit ? { replacesSketch: true } : {}),
             ...(movesPoint ? { momentPoint: { before: s.momentPoint, after: opts!.momentPoint! } } : {}),
           });
           if (d.past.length > HISTORY_LIMIT) d.past.splice(0, d.past.length - HISTORY_LIMIT);

@@ -13,6 +13,8 @@ import { createEditorStore } from "@/canvas/store";
 import { mirrorElements, mirrorMixedKinds, mirroredMomentPoint } from "@/canvas/commands/mirror";
 import { emptySketch, findElement } from "@/canvas/model/elements";
 import { termMomentAbout } from "@/solver/equations";
+import { fitScene } from "@/canvas/geometry/fit";
+import { buildScene } from "@/canvas/scene";
 
 /** A hose reel on a frame (our own scenario), and a second, separate frame beside it. */
 function reel(): SketchFile {
@@ -129,5 +131,32 @@ describe("an operating case that gives a mirrored expression's parameter with an
     expect(mirrorMixedKinds(withCase("35 deg"), [], "upDown", 0.5)).toEqual([]);
     const m = mirrorElements.run(withCase("40"), { ids: [], axis: "leftRight" });
     expect(caseSketch(m, m.cases![0]).ok).toBe(true);
+  });
+});
+
+describe("the view after a mirror", () => {
+  it("a fitted view is fitted again after the whole sketch is mirrored, and after its undo and redo", () => {
+    const { store, ctx } = editor(reel());
+    store.getState().setView(fitScene(buildScene(reel()), 800, 500));
+    const n = store.getState().fitRequest;
+    actionById("edit.mirrorLeftRight").run(ctx);
+    expect(store.getState().fitRequest).toBe(n + 1);
+    store.getState().undo();
+    expect(store.getState().fitRequest).toBe(n + 2);
+    store.getState().redo();
+    expect(store.getState().fitRequest).toBe(n + 3);
+  });
+
+  it("a zoomed or panned view stays, and so does any view when only a selection is mirrored", () => {
+    const { store, ctx } = editor(reel());
+    store.getState().setView({ scale: 90, x: 100, y: 300 });
+    const n = store.getState().fitRequest;
+    actionById("edit.mirrorLeftRight").run(ctx);
+    expect(store.getState().fitRequest).toBe(n);
+    store.getState().setView(fitScene(buildScene(store.getState().sketch), 800, 500));
+    store.getState().select(["b1"]);
+    actionById("edit.mirrorUpDown").run(ctx);
+    expect(store.getState().past).toHaveLength(2);
+    expect(store.getState().fitRequest).toBe(n);
   });
 });
