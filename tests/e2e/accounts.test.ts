@@ -215,7 +215,7 @@ describe("accounts, workspaces and roles in the browser", () => {
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("Ada's workspace");
 
     await page.goto(`${BASE_URL}/account`);
-    expect(await page.getByLabel("E-mail address").inputValue()).toBe(owner.email);
+    expect(await page.getByLabel("Current e-mail address").inputValue()).toBe(owner.email);
     await shot(page, "accounts-14-account");
   });
 });
