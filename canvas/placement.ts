@@ -216,8 +216,21 @@ function spotAndPlace(body: SceneBody, kind: Exclude<ElementKind, "body">, taken
   // a spot is taken by anything nearer it than halfway to the next spot (an eighth of the edge
   // apart): a foot placed with the mouse a little off the eighth still counts as the left foot, so
   // the next one goes to the right end, not beside it
-  const near = Math.max(tol, Math.hypot(b[0] - a[0], b[1] - a[1]) / 16);
-  const t = order.find((u) => taken.every((q) => Math.hypot(at(u)[0] - q[0], at(u)[1] - q[1]) >= near)) ?? order[0];
+  const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
+  const near = Math.max(tol, len / 16);
+  // for a pair, an end is taken by anything on the edge in that end's half: a first foot typed or
+  // dragged to where the axle is (1.2 m along a 5 m base) is still the left foot, and the second
+  // goes to the right end rather than outside the first
+  const onEdge = taken
+    .map((q) => {
+      const d: Vec2 = [q[0] - a[0], q[1] - a[1]];
+      const u = len > 0 ? (d[0] * (b[0] - a[0]) + d[1] * (b[1] - a[1])) / (len * len) : 0;
+      const off = len > 0 ? Math.abs(d[0] * (b[1] - a[1]) - d[1] * (b[0] - a[0])) / len : Infinity;
+      return { u, off };
+    })
+    .filter((e) => e.off <= near && e.u >= -1e-9 && e.u <= 1 + 1e-9);
+  const endTaken = (u: number) => PAIRED.has(kind) && (u === 0.125 || u === 0.875) && onEdge.some((e) => (u < 0.5 ? e.u < 0.5 : e.u > 0.5));
+  const t = order.find((u) => !endTaken(u) && taken.every((q) => Math.hypot(at(u)[0] - q[0], at(u)[1] - q[1]) >= near)) ?? order[0];
   const words = { "0,-1": "bottom", "0,1": "top", "-1,0": "left", "1,0": "right" } as const;
   return { at: at(t), place: { edge: words[`${side[0]},${side[1]}` as keyof typeof words], along: t } };
 }
