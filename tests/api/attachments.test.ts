@@ -14,7 +14,6 @@ import * as attachmentsRoute from "@/app/api/comments/[commentId]/attachments/ro
 import * as commentRoute from "@/app/api/comments/[commentId]/route";
 import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
-import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import * as uploadRoute from "@/app/api/uploads/[uploadId]/route";
 import * as thumbnailRoute from "@/app/api/uploads/[uploadId]/thumbnail/route";
 import { db } from "@/db";
@@ -23,8 +22,8 @@ import { appOrigin, storageSettings } from "@/lib/env";
 import { getObject, objectExists, s3 } from "@/lib/storage";
 import { MAX_ATTACHMENTS } from "@/lib/uploads/service";
 import { PDF_AUTHOR, PDF_XMP_CREATOR, pdf, png, textPretendingToBePng } from "../fixtures/uploads";
-import { call, withMailFake, makeAccount, makeWorkspace, type Json, type Person } from "./helpers";
-import { fixture } from "./sketch-fixtures";
+import { call, withMailFake, makeTeam, type Json, type Person } from "./helpers";
+import { postSketch } from "./sketch-setup";
 
 type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 
@@ -37,19 +36,12 @@ let ws: string;
 
 withMailFake();
 beforeAll(async () => {
-  [eddie, chen, olivia, vera, stranger] = await Promise.all(["eddie", "chen", "olivia", "vera", "stranger"].map((t) => makeAccount(`att-${t}`)));
-  ws = await makeWorkspace("Attachment bay", [
-    [olivia, "owner"],
-    [eddie, "editor"],
-    [chen, "checker"],
-    [vera, "viewer"],
-  ]);
-  await makeWorkspace("Stranger's bay", [[stranger, "viewer"]]);
+  ({ ws, olivia, eddie, chen, vera } = await makeTeam("Attachment bay", { olivia: "owner", eddie: "editor", chen: "checker", vera: "viewer" }, { prefix: "att" }));
+  ({ stranger } = await makeTeam("Stranger's bay", { stranger: "viewer" }, { prefix: "att" }));
 });
 
 async function sketchWithComment(by: Person = chen) {
-  const made = await call(sketchesRoute.POST, { method: "POST", params: { id: ws }, cookie: eddie.cookie, body: { title: "Skid with attachments", document: fixture("pump-skid-discharge") } });
-  const sketchId = made.body.sketch.id as string;
+  const sketchId = await postSketch(ws, eddie, "Skid with attachments");
   const c = await call(commentsRoute.POST, { method: "POST", params: { id: sketchId, number: "1" }, cookie: by.cookie, body: { body: "See the vendor's sheet and the photo of the foot." } });
   expect(c.status).toBe(201);
   return { sketchId, commentId: c.body.comment.id as string };

@@ -11,7 +11,7 @@ import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import { db } from "@/db";
 import { devMail, membership, user } from "@/db/schema";
-import { call, withMailFake, makeAccount, makeWorkspace, waitForMail, type Person, type Json } from "./helpers";
+import { call, withMailFake, makeAccount, makeTeam, waitForMail, type Person, type Json } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 import { postSketch } from "./sketch-setup";
 
@@ -24,19 +24,14 @@ let ws: string;
 
 withMailFake();
 beforeAll(async () => {
-  eddie = await makeAccount("eddie", { name: "Eddie Drafter" });
-  chen = await makeAccount("chen", { name: "Chen Checkwell" });
-  olivia = await makeAccount("olivia", { name: "Olivia Lead" });
-  vera = await makeAccount("vera", { name: "Vera Reader" });
-  quiet = await makeAccount("quiet", { name: "Quinn Quiet" });
+  ({ ws, olivia, eddie, chen, vera, quiet } = await makeTeam("Comment bay", {
+    olivia: { role: "owner", name: "Olivia Lead" },
+    eddie: { role: "editor", name: "Eddie Drafter" },
+    chen: { role: "checker", name: "Chen Checkwell" },
+    vera: { role: "viewer", name: "Vera Reader" },
+    quiet: { role: "checker", name: "Quinn Quiet" },
+  }));
   await db.update(user).set({ emailNotifications: false }).where(eq(user.id, quiet.id));
-  ws = await makeWorkspace("Comment bay", [
-    [olivia, "owner"],
-    [eddie, "editor"],
-    [chen, "checker"],
-    [vera, "viewer"],
-    [quiet, "checker"],
-  ]);
 });
 
 async function newSketch(): Promise<string> {
