@@ -553,6 +553,9 @@ export function designLoadTable(study: StudyResult, system: UnitSystem, scale?: 
   };
 }
 
+/** The verdict of a stability check that does not apply (its note says why). */
+export const NOT_APPLICABLE = "n/a";
+
 /** Factors of safety with the figures behind them: restoring and overturning moment, or the
  *  friction available and the force that drives sliding. Every number column holds numbers only
  *  (unrounded; a factor without bound is left empty and said in words in the note column), so a
@@ -568,10 +571,11 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI", sc
     if (!run.ok) continue;
     for (const [body, st] of Object.entries(run.stability)) {
       const ot = st.overturning;
-      if ("notApplicable" in ot) rows.push([run.name, nameIn(study, body), "overturning", null, null, "", null, null, ot.notApplicable, ""]);
+      // a check that does not apply: the verdict column stays a verdict ("n/a") and the note says why
+      if ("notApplicable" in ot) rows.push([run.name, nameIn(study, body), "overturning", null, null, "", null, null, NOT_APPLICABLE, ot.notApplicable]);
       else rows.push([run.name, nameIn(study, body), "overturning", inUnit(ot.restoring, "moment", u), inUnit(ot.overturning, "moment", u), u.moment, ...verdict(ot), nameIn(study, ot.about)]);
       const sl = st.sliding;
-      if ("notApplicable" in sl) rows.push([run.name, nameIn(study, body), "sliding", null, null, "", null, null, sl.notApplicable, ""]);
+      if ("notApplicable" in sl) rows.push([run.name, nameIn(study, body), "sliding", null, null, "", null, null, NOT_APPLICABLE, sl.notApplicable]);
       else
         rows.push([
           run.name,

@@ -34,6 +34,8 @@ const COMFORTABLE_LINES = 3;
 const WORDS_SLACK = 1.2;
 /** …but a text column's room to read is never more than this share of the width. */
 const COMFORT_CAP = 0.22;
+/** A text column whose longest text takes at most this share of the width keeps it on one line. */
+const SHORT_TEXT = 0.12;
 /** A heading over numbers is given about this share of its one-line width (two lines). */
 const NUMBER_HEADING = 0.55;
 /** Rounding slack (pt): pdfkit rounds widths, and a word that fits by 0.01 pt must still fit. */
@@ -145,6 +147,9 @@ export function layoutTable(t: Table, options: TableLayoutOptions): TableLayout 
       // room for the longest text in about three lines (a word more than a third, for where lines fall)
       // (but no more than a share of the page: a very long name wraps to more lines rather than
       // pushing the columns beside it into a second stacked part, away from their row)
+      // a short text (a body's name of two words, "pass", "overturning") is not wrapped at all: a
+      // name broken over two lines makes its row two lines tall for the sake of a few points
+      if (body + pad <= width * SHORT_TEXT) return { min, comfortable: natural, natural, roomy: natural };
       const comfortable = Math.min(natural, Math.max(min, head, Math.min((body * WORDS_SLACK) / COMFORTABLE_LINES + pad, width * COMFORT_CAP)));
       return { min, comfortable, natural, roomy: natural };
     });
