@@ -28,6 +28,7 @@ import { CommentsPanel, type CommentsData } from "./Comments";
 import { VersionSweeps } from "./VersionSweeps";
 import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
 import { SignOffPanel, type SignOffData } from "./SignOff";
+import { CalcSheetLink } from "@/components/versions/CalcSheetLink";
 
 type VersionData = {
   version: { id: string; number: number; message: string; authorName: string | null; createdAt: string; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; document: SketchFile };
@@ -174,14 +175,14 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
                 Compare with v{latest} (latest)
               </Link>
             ) : null}
-            <a
+            <CalcSheetLink
               href={`/api/sketches/${sketchId}/versions/${number}/calc-sheet?units=${units}`}
-              download
               className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45"
               title="A PDF of this version: title block, drawing, inputs, hand check, reactions per case, envelope, stability, sweeps, check record, method, assumptions and cautions"
+              testId="version-calc-sheet"
             >
               Calc sheet (PDF)
-            </a>
+            </CalcSheetLink>
             <Link href={number === latest ? `/sketches/${sketchId}` : `/sketches/${sketchId}?version=${number}`} className="rounded-md bg-ink px-3 py-1.5 font-medium text-paper hover:bg-ink-soft">
               {canEdit ? "Open in the editor" : "Open (read only)"}
             </Link>

@@ -20,6 +20,7 @@ import { reviewNote } from "./reviewNote";
 import { announceSaved, watchSaved, type SavedElsewhere } from "./savedElsewhere";
 import { sameDocument, type SaveFlow } from "./savedPersistence";
 import { NarrowLabel } from "@/components/editor/NarrowLabel";
+import { CalcSheetLink } from "@/components/versions/CalcSheetLink";
 
 // on a touch screen 40 px tall, a finger's tap target (as the toolbar's own controls: components/editor/ui.ts)
 const CHIP = "h-7 pointer-coarse:h-10 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
@@ -314,15 +315,18 @@ function Bar({ flow }: { flow: SaveFlow }) {
         </span>
       )}
       {/* below 1280 px the toolbar has no room for it: the File menu has it (useFileMenuLink above) */}
-      <a
-        href={calcSheet ?? undefined}
-        className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45 max-xl:hidden`}
-        title={calcSheetWords}
-        aria-label="Calc sheet (PDF)"
-        data-testid="calc-sheet-link"
-      >
-        Calc sheet
-      </a>
+      {calcSheet ? (
+        <CalcSheetLink
+          href={calcSheet}
+          className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45 max-xl:hidden`}
+          title={calcSheetWords}
+          label="Calc sheet (PDF)"
+          testId="calc-sheet-link"
+          onError={(message) => stores.editor.getState().notify(message)}
+        >
+          Calc sheet
+        </CalcSheetLink>
+      ) : null}
       <Link href={`/workspaces/${info.workspaceId}/sketches/${info.sketchId}`} className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45`}>
         History
       </Link>
