@@ -199,7 +199,7 @@ function portPrims(item: Extract<SceneItem, { kind: "inlet" | "outlet" }>, o: Sy
 }
 
 /**
- * A port's values as its label gives them: "ṁ 10 kg/s · V 5 m/s", then "p 350 psi". A mass flow
+ * A port's values as its label gives them: "ṁ 10 kg/s · V 5 m/s", then "p 50 psig" (gauge). A mass flow
  * nothing gives (no ṁ, nor ρ with Q, nor ρ with A and V: `massFlowGiven` false) is left out, not
  * drawn as "ṁ 0"; a speed is shown when given, or always beside a given flow. A closed end under
  * pressure (ṁ 0 and V 0 given, p given) keeps its zero flow, which is the point of it.
@@ -210,8 +210,15 @@ export function portFlowLines(item: Pick<Extract<SceneItem, { kind: "inlet" | "o
   const parts = noFlow ? [] : [`ṁ ${q(item.massFlow, "massFlow", units)}`];
   if (!(noFlow && item.velocity === 0)) parts.push(`V ${q(item.velocity, "velocity", units)}`);
   const lines = parts.length ? [parts.join(" · ")] : [];
-  if (item.pressure) lines.push(`p ${q(item.pressure, "pressure", units)}`);
+  if (item.pressure) lines.push(`p ${gaugeWords(q(item.pressure, "pressure", units))}`);
   return lines;
+}
+
+/** A port's pressure is a gauge pressure (the file format's rule, the inputs table's "Gauge
+ *  pressure"): the drawing says so as the trade writes it, "350 kPa(g)", "50 psig". */
+export function gaugeWords(pressure: string): string {
+  if (pressure === "?") return pressure;
+  return pressure.endsWith(" psi") ? `${pressure}g` : `${pressure}(g)`;
 }
 
 function loadPrims(item: Extract<SceneItem, { kind: "force" | "couple" | "distributed" }>, o: SymbolOptions): Prim[] {

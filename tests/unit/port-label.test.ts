@@ -2,7 +2,7 @@
 // mass flow that nothing gives.
 import { describe, expect, it } from "vitest";
 import { buildScene, type SceneItem } from "@/canvas/scene";
-import { itemPrims, portFlowLines } from "@/canvas/render/symbols";
+import { gaugeWords, itemPrims, portFlowLines } from "@/canvas/render/symbols";
 import { emptySketch } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
 import type { SketchFile } from "@/solver/schema";
@@ -35,14 +35,14 @@ describe("a port's label", () => {
     // a density typed on a placed port takes its placed mass flow away: ρ and V alone give no ṁ
     expect(labelTexts({ density: 998, velocity: 5 })).toEqual(["jet", "V 5 m/s"]);
     expect(labelTexts({ density: 998 })).toEqual(["jet"]);
-    expect(labelTexts({ density: 998, velocity: 5, pressure: 2e5 })).toEqual(["jet", "V 5 m/s", "p 200 kPa"]);
+    expect(labelTexts({ density: 998, velocity: 5, pressure: 2e5 })).toEqual(["jet", "V 5 m/s", "p 200 kPa(g)"]);
     // with the area, ρ·A·V gives it: 998 kg/m³ × 0.01 m² × 5 m/s = 49.9 kg/s
     expect(labelTexts({ density: 998, velocity: 5, area: 0.01 })).toEqual(["jet", "ṁ 49.9 kg/s · V 5 m/s"]);
   });
 
   it("keeps a zero flow on a closed end under pressure", () => {
-    expect(labelTexts({ massFlow: 0, velocity: 0, pressure: 2e5, area: 0.01 })).toEqual(["jet", "ṁ 0 kg/s · V 0 m/s", "p 200 kPa"]);
-    expect(portFlowLines({ massFlow: 0, velocity: 0, pressure: 2e5 }, "SI")).toEqual(["ṁ 0 kg/s · V 0 m/s", "p 200 kPa"]);
+    expect(labelTexts({ massFlow: 0, velocity: 0, pressure: 2e5, area: 0.01 })).toEqual(["jet", "ṁ 0 kg/s · V 0 m/s", "p 200 kPa(g)"]);
+    expect(portFlowLines({ massFlow: 0, velocity: 0, pressure: 2e5 }, "SI")).toEqual(["ṁ 0 kg/s · V 0 m/s", "p 200 kPa(g)"]);
   });
 
   it("keeps a zero mass flow that was typed, beside a speed (the scene says it was given)", () => {
@@ -52,5 +52,18 @@ describe("a port's label", () => {
 
   it("says ? for a mass flow whose expression cannot be worked out", () => {
     expect(portFlowLines({ massFlow: Number.NaN, velocity: 5, pressure: 0 }, "SI")).toEqual(["ṁ ? · V 5 m/s"]);
+  });
+});
+
+describe("a port's pressure on the drawing", () => {
+  // port pressures are gauge pressures (the file format's rule, the inputs table's "Gauge
+  // pressure"); the trade writes kPa(g) and psig (common practice)
+  it("says gauge as the trade writes it, in either unit system", () => {
+    expect(portFlowLines({ massFlow: 0, velocity: 0, pressure: 350e3 }, "SI")).toEqual(["ṁ 0 kg/s · V 0 m/s", "p 350 kPa(g)"]);
+    // 50 psi = 344.7379 kPa (1 psi = 6894.757 Pa, NIST SP 811)
+    expect(portFlowLines({ massFlow: 0, velocity: 0, pressure: 50 * 6894.757293168 }, "US")[1]).toBe("p 50 psig");
+  });
+  it("leaves an unknown pressure a question mark", () => {
+    expect(gaugeWords("?")).toBe("?");
   });
 });
