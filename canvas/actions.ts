@@ -11,7 +11,7 @@ import type { SketchFile } from "@/solver/schema";
 import { copyFragment, fragmentText, pasteNotice, planPaste, readFragment } from "./clipboard";
 import { moveElement, replacedWords } from "./commands/move";
 import { rotateElement } from "./commands/shape";
-import { mirrorElements, mirrorKeeps, mirrorLeavesAlone, mirrorLine, mirrorMixedKinds, mirroredIds, mirroredMomentPoint, type MirrorAxis } from "./commands/mirror";
+import { mirrorElements, mirrorKeeps, mirrorLeavesAlone, mirrorLine, mirrorMixedKinds, mirroredIds, mirroredMomentPoint, mixedKindsWords, type MirrorAxis } from "./commands/mirror";
 import { describeElement, DIRECTED, findElement, GROUPS, KIND_LABEL, withAttached, type ElementKind } from "./model/elements";
 import { plural } from "./commands/define";
 import { sweepRangeWords, sweptUnitIn } from "./studies/display";
@@ -199,12 +199,7 @@ function mirror(id: string, label: string, key: string, axis: MirrorAxis): Actio
       const about = mirrorLine(before, ids, axis, lookup);
       if (about === undefined) return s.notify("Nothing to mirror: the selection has no position that can be worked out.");
       const mixed = mirrorMixedKinds(before, ids, axis, about);
-      if (mixed.length) {
-        const one = mixed.length === 1;
-        return s.notify(
-          `Nothing was mirrored: ${mixed.join(", ")}, and ${one ? "its mirror" : "a mirror"} (“180 deg - x” with a unit, “180 - x” without) can be written for only one of the two. Write the parameters ${one ? "it reads" : "they read"} the same way, with a unit or without, in the sketch and in every case, then mirror again.`,
-        );
-      }
+      if (mixed.length) return s.notify(mixedKindsWords(mixed));
       const stuck = mirrorLeavesAlone(before, ids, axis, about, lookup);
       // the hand check's P goes with the drawing (the whole sketch) or with the part it was picked on
       const momentPoint = mirroredMomentPoint(before, ids, axis, about, s.momentPoint, lookup);

@@ -259,28 +259,44 @@ export function mirrorLeavesAlone(sketch: SketchFile, ids: readonly string[], ax
   return out;
 }
 
+/** A field a mirror cannot rewrite for the sketch and a case at once (see `mirrorMixedKinds`). */
+export interface MixedKind {
+  /** "nozzle's direction" */
+  field: string;
+  /** the case's name */
+  caseName: string;
+  /** the value has a unit in the sketch (and none in the case), or the other way round */
+  unitInSketch: boolean;
+  /** the parameters the case gives with the other kind of value than the sketch ("tilt") */
+  parameters: string[];
+}
+
 /**
  * The expressions whose mirror cannot be written for the sketch and every operating case at once:
  * "k − x" needs k with a unit when x has one ("180 deg - theta") and a plain k when x is a plain
  * number ("180 - a"), so an expression that is a plain number in the sketch but has a unit in a case
- * (or the other way round) would break in one of them. The mirror is refused and these are named
- * ("Discharge's direction (a plain number in the sketch, with a unit in case “Hot day”)").
+ * (or the other way round) would break in one of them. The mirror is refused and these are named.
  * A negation ("-x", an up–down angle or a mirror about 0) fits both and is never named.
  */
-export function mirrorMixedKinds(sketch: SketchFile, ids: readonly string[], axis: MirrorAxis, about: number): string[] {
+export function mirrorMixedKinds(sketch: SketchFile, ids: readonly string[], axis: MirrorAxis, about: number): MixedKind[] {
   const cases = sketch.cases ?? [];
   if (!cases.length) return [];
   const k = axis === "leftRight" ? 0 : 1;
-  const kind = (u: boolean) => (u ? "with a unit" : "a plain number");
-  const out: string[] = [];
-  const mixed = (v: unknown): string | null => {
+  const out: MixedKind[] = [];
+  const mixed = (v: unknown): Omit<MixedKind, "field"> | null => {
     if (typeof v !== "string" || plainNumber(v) !== undefined) return null;
     const base = carriesUnit(v, sketch);
     if (base === null) return null;
     for (const c of cases) {
       if (!c.parameters || !Object.keys(c.parameters).length) continue;
-      const there = carriesUnit(v, sketch, { ...(sketch.parameters ?? {}), ...c.parameters });
-      if (there !== null && there !== base) return `${kind(base)} in the sketch, ${kind(there)} in case “${c.name}”`;
+      const merged = { ...(sketch.parameters ?? {}), ...c.parameters };
+      const there = carriesUnit(v, sketch, merged);
+      if (there === null || there === base) continue;
+      const parameters = Object.keys(c.parameters).filter((name) => {
+        const [a, b] = [carriesUnit(name, sketch), carriesUnit(name, sketch, merged)];
+        return a !== null && b !== null && a !== b;
+      });
+      return { caseName: c.name, unitInSketch: base, parameters };
     }
     return null;
   };
@@ -288,7 +304,7 @@ export function mirrorMixedKinds(sketch: SketchFile, ids: readonly string[], axi
     const l = findElement(sketch, id);
     if (!l) continue;
     const r = l.el as unknown as Record<string, unknown>;
-    const hit = new Map<string, string>();
+    const hit = new Map<string, Omit<MixedKind, "field">>();
     const check = (v: unknown, field: string) => {
       if (hit.has(field)) return;
       const why = mixed(v);
@@ -299,9 +315,22 @@ export function mirrorMixedKinds(sketch: SketchFile, ids: readonly string[], axi
       for (const f of ["at", "from", "to", "cg"]) if (Array.isArray(r[f])) check((r[f] as Numeric[])[k], f);
     }
     if (axis === "leftRight" && l.kind !== "couple") check(r.angle, "angle");
-    for (const [f, why] of hit) out.push(`${l.el.label || id}'s ${FIELD_WORDS[f] ?? f} (${why})`);
+    for (const [f, why] of hit) out.push({ field: `${l.el.label || id}'s ${FIELD_WORDS[f] ?? f}`, ...why });
   }
   return out;
+}
+
+/** The status line's words for a mirror refused by `mirrorMixedKinds`. */
+export function mixedKindsWords(mixed: readonly MixedKind[]): string {
+  const first = mixed[0];
+  const fields = mixed.map((m) => m.field).join(", ");
+  const params = [...new Set(mixed.flatMap((m) => m.parameters))];
+  const names = params.length ? params.join(" and ") : "the parameters they read";
+  const [here, there] = first.unitInSketch ? ["with a unit", "as a plain number"] : ["as a plain number", "with a unit"];
+  return (
+    `Nothing was mirrored: ${fields} ${mixed.length === 1 ? "reads" : "read"} ${names} ${here} in the sketch but ${there} in case “${first.caseName}”, ` +
+    `and no one mirror (“180 deg - x” or “180 - x”) is right in both. Give ${names} a unit in the sketch and in every case, or in none, then mirror again.`
+  );
 }
 
 /** What a mirror leaves as it was, for the status line: the sketch's own directions and the underlay. */

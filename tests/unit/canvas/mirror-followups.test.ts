@@ -20,7 +20,7 @@ import { buildScene } from "@/canvas/scene";
 function reel(): SketchFile {
   return {
     ...emptySketch("Reel"),
-    parameters: { a: 35 },
+    parameters: { tilt: 35 },
     bodies: [
       { id: "b1", label: "Frame", outline: [[0, 0], [2, 0], [2, 1], [0, 1]], mass: 200, cg: [0.8, 0.5] },
       { id: "b2", label: "Stand", outline: [[4, 0], [5, 0], [5, 1], [4, 1]], mass: 50 },
@@ -30,7 +30,7 @@ function reel(): SketchFile {
       { id: "s2", body: "b1", kind: "roller", at: [1.8, 0], angle: 90 },
       { id: "s3", body: "b2", kind: "fixed", at: [4.5, 0] },
     ],
-    loads: [{ id: "l1", body: "b1", kind: "force", at: [2, 1], magnitude: 400, angle: "a * 2", label: "hose pull" }],
+    loads: [{ id: "l1", body: "b1", kind: "force", at: [2, 1], magnitude: 400, angle: "tilt * 2", label: "hose pull" }],
     ports: [],
   };
 }
@@ -103,26 +103,26 @@ describe("the hand check's point P and a mirror", () => {
 });
 
 describe("an operating case that gives a mirrored expression's parameter with another kind of unit", () => {
-  const withCase = (value: string): SketchFile => ({ ...reel(), cases: [{ id: "c1", name: "Gusty", parameters: { a: value } }] });
+  const withCase = (value: string): SketchFile => ({ ...reel(), cases: [{ id: "c1", name: "Gusty", parameters: { tilt: value } }] });
 
-  it("is a real break: the rewritten 180 − (a * 2) fails in the case although a * 2 read there", () => {
+  it("is a real break: the rewritten 180 − (tilt * 2) fails in the case although tilt * 2 read there", () => {
     const s = withCase("35 deg");
     // before the mirror the case reads: 35 deg * 2 is an angle, as the field wants
     expect(caseSketch(s, s.cases![0]).ok).toBe(true);
     const m = mirrorElements.run(s, { ids: [], axis: "leftRight" });
-    expect(findElement(m, "l1")!.el).toMatchObject({ angle: "180 - (a * 2)" });
+    expect(findElement(m, "l1")!.el).toMatchObject({ angle: "180 - (tilt * 2)" });
     expect(caseSketch(m, m.cases![0]).ok).toBe(false);
   });
 
   it("is named, and the mirror refused with the sketch unchanged and no undo step", () => {
     const s = withCase("35 deg");
-    expect(mirrorMixedKinds(s, [], "leftRight", 2.5)).toEqual(["hose pull's direction (a plain number in the sketch, with a unit in case “Gusty”)"]);
+    expect(mirrorMixedKinds(s, [], "leftRight", 2.5)).toEqual([{ field: "hose pull's direction", caseName: "Gusty", unitInSketch: false, parameters: ["tilt"] }]);
     const { store, ctx } = editor(s);
     actionById("edit.mirrorLeftRight").run(ctx);
     expect(store.getState().sketch).toBe(s);
     expect(store.getState().past).toHaveLength(0);
     expect(store.getState().notice).toBe(
-      "Nothing was mirrored: hose pull's direction (a plain number in the sketch, with a unit in case “Gusty”), and its mirror (“180 deg - x” with a unit, “180 - x” without) can be written for only one of the two. Write the parameters it reads the same way, with a unit or without, in the sketch and in every case, then mirror again.",
+      "Nothing was mirrored: hose pull's direction reads tilt as a plain number in the sketch but with a unit in case “Gusty”, and no one mirror (“180 deg - x” or “180 - x”) is right in both. Give tilt a unit in the sketch and in every case, or in none, then mirror again.",
     );
   });
 
