@@ -1,6 +1,8 @@
 import "server-only";
 import { ZodObject, type z } from "zod";
 import { getRole } from "@/db/queries/workspaces";
+import { getWorkspaceDeletion } from "@/db/queries/workspace-deletion";
+import { workspaceDeletionSentence } from "@/components/workspaces/format";
 import type { AuthSession } from "./auth";
 import { appOrigin } from "./env";
 import { AppError, errorResponse, fieldErrors } from "./errors";
@@ -156,7 +158,12 @@ function refuseAnyQuery(req: Request): undefined {
 /** The caller's role where a permission is needed: 404 for non-members (nothing leaks), 403 for a role without it. */
 export async function requireWorkspaceRole(workspaceId: string, userId: string, permission: Permission): Promise<Role> {
   const role = await getRole(workspaceId, userId);
-  if (!role) throw new AppError("not_found", "No such workspace, or you are not a member of it.");
+  if (!role) {
+    // someone who was a member when it was deleted is told so (an open page's next request)
+    const gone = await getWorkspaceDeletion(workspaceId, userId);
+    if (gone) throw new AppError("not_found", workspaceDeletionSentence(gone), { extra: { workspaceDeleted: gone } });
+    throw new AppError("not_found", "No such workspace, or you are not a member of it.");
+  }
   if (!can(role, permission)) throw new AppError("forbidden", refusedWords(role, permission));
   return role;
 }

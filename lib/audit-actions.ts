@@ -7,6 +7,7 @@ export const AUDIT_ACTIONS = {
   "auth.email_change": "changed their sign-in address",
   "workspace.create": "created the workspace",
   "workspace.rename": "renamed the workspace",
+  "workspace.delete": "deleted the workspace",
   "invitation.create": "invited",
   "invitation.withdraw": "withdrew the invitation of",
   "invitation.accept": "joined through an invitation",

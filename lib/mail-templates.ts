@@ -111,3 +111,28 @@ export function invitationMail(input: {
     "If you did not expect this, ignore this mail.",
   );
 }
+
+/** To every other member when an owner deletes a workspace: what went, and that nothing can be brought back. */
+export function workspaceDeletedMail(input: {
+  to: string;
+  name: string;
+  workspaceName: string;
+  deletedBy: string;
+  sketches: number;
+  versions: number;
+  url: string;
+}): Mail {
+  const sketches = `${input.sketches} ${input.sketches === 1 ? "sketch" : "sketches"}`;
+  const versions = `${input.versions} ${input.versions === 1 ? "version" : "versions"}`;
+  return compose(
+    input.to,
+    `"${input.workspaceName}" was deleted on Counterpoise`,
+    [
+      `Hello ${input.name},`,
+      `${input.deletedBy} deleted the workspace "${input.workspaceName}", which you were a member of. Its ${sketches} with their ${versions}, comments, sign-offs and uploaded files were deleted with it and cannot be brought back.`,
+      "Your account and your other workspaces are unchanged.",
+    ],
+    { label: "Open your workspaces", url: input.url },
+    "If you did not expect this, ask the person who deleted it: exported sketch files or calc sheets they kept are the only copies left.",
+  );
+}

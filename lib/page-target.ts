@@ -3,6 +3,7 @@ import { headers } from "next/headers";
 import { cache } from "react";
 import { getSketchAccess, getSketchDeletion, type SketchDeletion } from "@/db/queries/sketches";
 import { getRole, getWorkspaceForMember } from "@/db/queries/workspaces";
+import { getWorkspaceDeletion, type WorkspaceDeletion } from "@/db/queries/workspace-deletion";
 import { orBusy } from "./db-unavailable";
 import { PATH_HEADER } from "./request-path";
 import { isUuid } from "./schemas";
@@ -21,6 +22,8 @@ export type PageTarget =
   /** Signed out, or an address that is not a workspace page: nothing to say. */
   | { kind: "unknown" }
   | { kind: "no-workspace" }
+  /** The workspace was deleted while the reader was a member: by whom and when. */
+  | { kind: "workspace-deleted"; deleted: WorkspaceDeletion }
   /** `workspaceId`: the workspace, when the reader is a member of it (its tabs stay on the page);
    *  `deleted`: who deleted the sketch and when, when it was deleted from that workspace. */
   | { kind: "no-sketch"; workspaceId: string | null; deleted?: DeletedSketch }
@@ -34,7 +37,10 @@ async function deletionFor(sketchId: string, userId: string, workspaceId?: strin
   const deleted = await getSketchDeletion(sketchId, userId);
   if (!deleted || (workspaceId && deleted.workspaceId !== workspaceId)) return null;
   const ws = await getWorkspaceForMember(deleted.workspaceId, userId);
-  return ws ? { ...deleted, workspaceName: ws.name } : null;
+  if (ws) return { ...deleted, workspaceName: ws.name };
+  // deleted with its workspace: the way back leads to the workspace's own "was deleted" page
+  const gone = deleted.withWorkspace ? await getWorkspaceDeletion(deleted.workspaceId, userId) : null;
+  return gone ? { ...deleted, workspaceName: gone.name } : null;
 }
 
 /**
@@ -59,6 +65,10 @@ async function findPageTarget(): Promise<PageTarget> {
   const asked = path ? parseWorkspacePath(path) : null;
   if (!session || !asked) return { kind: "unknown" };
   const role = isUuid(asked.workspaceId) ? await getRole(asked.workspaceId, session.user.id) : null;
+  if (!role) {
+    const gone = isUuid(asked.workspaceId) ? await getWorkspaceDeletion(asked.workspaceId, session.user.id) : null;
+    if (gone) return { kind: "workspace-deleted", deleted: gone };
+  }
   if (!asked.sketchId) return role ? { kind: "found" } : { kind: "no-workspace" };
   if (!role) return { kind: "no-sketch", workspaceId: null };
   const sketch = isUuid(asked.sketchId) ? await getSketchAccess(asked.sketchId, session.user.id) : null;

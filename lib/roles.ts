@@ -18,6 +18,8 @@ export const ROLE_INFO: Record<Role, { label: string; summary: string }> = {
 export const PERMISSIONS = {
   "workspace.read": ["owner", "editor", "checker", "viewer"],
   "workspace.rename": ["owner"],
+  /** delete the workspace with its sketches, versions, comments and files */
+  "workspace.delete": ["owner"],
   "members.list": ["owner", "editor", "checker", "viewer"],
   "members.changeRole": ["owner"],
   "members.remove": ["owner"],
@@ -60,6 +62,7 @@ export function isRole(value: unknown): value is Role {
 const ACTION_WORDS: Record<Permission, string> = {
   "workspace.read": "read this workspace",
   "workspace.rename": "rename the workspace",
+  "workspace.delete": "delete the workspace",
   "members.list": "see the members",
   "members.changeRole": "change members' roles",
   "members.remove": "remove members",

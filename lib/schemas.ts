@@ -26,6 +26,10 @@ export const personNameSchema = z.string().trim().min(1, "Enter your name.").max
 
 export const createWorkspaceInput = z.object({ name: workspaceNameSchema });
 export const renameWorkspaceInput = z.object({ name: workspaceNameSchema });
+/** Deleting a workspace: its name typed again (compared on the server, which says so under this field). */
+export const deleteWorkspaceInput = z.object({
+  confirmName: z.string({ error: "Type the workspace's name to confirm." }).max(200, "Type the workspace's name to confirm.").refine((s) => s.trim().length > 0, "Type the workspace's name to confirm."),
+});
 export const inviteInput = z.object({ email: emailSchema, role: roleSchema });
 export const changeRoleInput = z.object({ role: roleSchema });
 export const invitationSignUpInput = z.object({ name: personNameSchema, password: passwordSchema });

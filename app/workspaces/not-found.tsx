@@ -1,6 +1,7 @@
 import { NoSuchVersion } from "@/components/review/NoSuchVersion";
 import { AppShell } from "@/components/shell/AppShell";
 import { NoSuchSketch, NoSuchWorkspace } from "@/components/shell/NotHere";
+import { WorkspaceDeleted } from "@/components/workspaces/WorkspaceDeleted";
 import { pageTarget } from "@/lib/page-target";
 
 /**
@@ -11,6 +12,13 @@ import { pageTarget } from "@/lib/page-target";
 export default async function WorkspacesNotFound() {
   const target = await pageTarget();
   if (target.kind === "found" || target.kind === "unknown") return <NoSuchWorkspace />;
+  if (target.kind === "workspace-deleted") {
+    return (
+      <AppShell next="/workspaces">
+        <WorkspaceDeleted deleted={target.deleted} />
+      </AppShell>
+    );
+  }
   const workspaceId = target.kind === "no-workspace" ? undefined : (target.workspaceId ?? undefined);
   return (
     <AppShell workspaceId={workspaceId} next={workspaceId ? `/workspaces/${workspaceId}` : "/workspaces"}>

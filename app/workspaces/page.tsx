@@ -5,17 +5,22 @@ import { EmptyState, Notice, Panel } from "@/components/shell/controls";
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
 import { CreateWorkspaceForm } from "@/components/workspaces/WorkspaceForms";
 import { listWorkspacesForUser } from "@/db/queries/workspaces";
+import { getWorkspaceDeletion } from "@/db/queries/workspace-deletion";
+import { workspaceDeletionSentence } from "@/components/workspaces/format";
+import { isUuid } from "@/lib/schemas";
 import { orBusy } from "@/lib/db-unavailable";
 import { leftWorkspaceName } from "@/lib/members";
 import { requirePageSession } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Workspaces" };
 
-export default async function WorkspacesPage({ searchParams }: { searchParams: Promise<{ left?: string | string[] }> }) {
+export default async function WorkspacesPage({ searchParams }: { searchParams: Promise<{ left?: string | string[]; deleted?: string | string[] }> }) {
   const session = await requirePageSession("/workspaces");
   const workspaces = await listWorkspacesForUser(session.user.id);
   // after "Leave" on the members page: say it happened (not once they are back in it)
-  const { left } = await searchParams;
+  const { left, deleted } = await searchParams;
+  // after deleting one: say it happened (only to someone who was a member of it)
+  const gone = typeof deleted === "string" && isUuid(deleted) ? await orBusy(getWorkspaceDeletion(deleted, session.user.id)) : null;
   const leftId = typeof left === "string" && !workspaces.some((w) => w.id === left) ? left : undefined;
   const leftName = leftId ? await orBusy(leftWorkspaceName(session.user.id, leftId)) : null;
   return (
@@ -25,6 +30,13 @@ export default async function WorkspacesPage({ searchParams }: { searchParams: P
           <h1 className="text-2xl font-semibold tracking-tight">Workspaces</h1>
           <p className="mt-1 text-ink-soft">Each workspace holds sketches and the people who prepare, check and approve them.</p>
         </div>
+        {gone ? (
+          <Notice tone="success">
+            <span className="[overflow-wrap:anywhere]" data-testid="workspace-deleted-notice">
+              {workspaceDeletionSentence(gone)}
+            </span>
+          </Notice>
+        ) : null}
         {leftName ? (
           <Notice tone="success">
             <span className="[overflow-wrap:anywhere]">

@@ -76,7 +76,8 @@ export function forkTitle(title: string, max = 120): string {
 
 /** The sentence a member of its workspace reads about a deleted sketch: the API's 404, the sketch's
  *  pages and the editor's address say the same. */
-export function deletionSentence(gone: { title: string; deletedBy: string | null; deletedAt: Date | string }): string {
+export function deletionSentence(gone: { title: string; deletedBy: string | null; deletedAt: Date | string; withWorkspace?: boolean }): string {
   const by = gone.deletedBy ? ` by ${gone.deletedBy}` : "";
+  if (gone.withWorkspace) return `“${gone.title}” was deleted${by} on ${formatDateTime(gone.deletedAt)} with the workspace it was in, and all its versions. Forks of it in other workspaces keep their own copies.`;
   return `“${gone.title}” was deleted${by} on ${formatDateTime(gone.deletedAt)}, with all its versions. Forks of it keep their own copies.`;
 }

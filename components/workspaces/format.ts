@@ -20,3 +20,15 @@ export function relativeExpiry(value: string | Date, now = Date.now()): string {
   const text = `${n} ${unit[0]}${n === 1 ? "" : "s"}`;
   return ms > 0 ? `in ${text}` : `expired ${text} ago`;
 }
+
+/** What a former member is told of a deleted workspace (its pages, the API's 404). */
+export function workspaceDeletionSentence(gone: { name: string; deletedBy: string | null; deletedAt: Date | string }): string {
+  const by = gone.deletedBy ? ` by ${gone.deletedBy}` : "";
+  return `The workspace “${gone.name}” was deleted${by} on ${formatDateTime(gone.deletedAt)}, with its sketches, their versions, comments and files.`;
+}
+
+/** The name typed to confirm a deletion matches the workspace's: same characters, outer spaces and runs of spaces aside. */
+export function nameConfirms(typed: string, name: string): boolean {
+  const norm = (s: string) => s.trim().replace(/\s+/g, " ");
+  return norm(typed) === norm(name);
+}

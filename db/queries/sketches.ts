@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, ilike, isNotNull, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { auditEvent, membership, sketch, sketchVersion, user, workspace, type LowFactor, type SolveSummary } from "@/db/schema";
@@ -7,6 +7,7 @@ import type { Role } from "@/lib/roles";
 import type { ReviewState } from "@/lib/review/rules";
 import type { ListSketchesQuery, SketchStatus } from "@/lib/sketch-schemas";
 import type { DbOrTx } from "./tx";
+import { wasMemberOfDeleted } from "./workspace-deletion";
 import { actorMay } from "./workspaces";
 
 const updater = alias(user, "updater");
@@ -260,7 +261,8 @@ export async function updateSketch(
   return row ?? null;
 }
 
-export type SketchDeletion = { title: string; deletedBy: string | null; deletedAt: Date; workspaceId: string };
+/** `withWorkspace`: deleted as part of deleting its workspace. */
+export type SketchDeletion = { title: string; deletedBy: string | null; deletedAt: Date; workspaceId: string; withWorkspace?: boolean };
 
 /**
  * Who deleted a sketch and when, from its `sketch.delete` audit record, for a reader who is a member
@@ -269,15 +271,30 @@ export type SketchDeletion = { title: string; deletedBy: string | null; deletedA
  */
 export async function getSketchDeletion(sketchId: string, viewerId: string): Promise<SketchDeletion | null> {
   const [row] = await db
-    .select({ title: sql<string | null>`${auditEvent.detail} ->> 'title'`, at: auditEvent.at, workspaceId: auditEvent.workspaceId, name: user.name, email: auditEvent.actorEmail })
+    .select({
+      title: sql<string | null>`${auditEvent.detail} ->> 'title'`,
+      at: auditEvent.at,
+      workspaceId: auditEvent.workspaceId,
+      name: user.name,
+      email: auditEvent.actorEmail,
+      withWorkspace: sql<boolean>`coalesce((${auditEvent.detail} ->> 'withWorkspace')::boolean, false)`,
+    })
     .from(auditEvent)
-    .innerJoin(membership, and(eq(membership.workspaceId, auditEvent.workspaceId), eq(membership.userId, viewerId)))
+    .leftJoin(membership, and(eq(membership.workspaceId, auditEvent.workspaceId), eq(membership.userId, viewerId)))
     .leftJoin(user, eq(user.id, auditEvent.actorId))
-    .where(and(eq(auditEvent.targetType, "sketch"), eq(auditEvent.targetId, sketchId), eq(auditEvent.action, "sketch.delete")))
+    .where(
+      and(
+        eq(auditEvent.targetType, "sketch"),
+        eq(auditEvent.targetId, sketchId),
+        eq(auditEvent.action, "sketch.delete"),
+        // a member of its workspace, or (the workspace deleted with it) a member of it then
+        or(isNotNull(membership.userId), wasMemberOfDeleted(auditEvent.workspaceId, viewerId)),
+      ),
+    )
     .orderBy(desc(auditEvent.id))
     .limit(1);
   if (!row || !row.workspaceId) return null;
-  return { title: row.title ?? "The sketch", deletedBy: row.name ?? row.email ?? null, deletedAt: row.at, workspaceId: row.workspaceId };
+  return { title: row.title ?? "The sketch", deletedBy: row.name ?? row.email ?? null, deletedAt: row.at, workspaceId: row.workspaceId, ...(row.withWorkspace ? { withWorkspace: true } : {}) };
 }
 
 /** Delete a sketch and its versions (owners; checked in the DELETE). Forks of it keep their copy. */

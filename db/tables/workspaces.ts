@@ -10,6 +10,13 @@ export const workspace = pgTable("workspace", {
   name: text("name").notNull(),
   personalOf: text("personal_of").references(() => user.id, { onDelete: "cascade" }),
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  /**
+   * Set when an owner deleted the workspace. The row stays as a tombstone (name, when, by whom) so
+   * its audit log, the record of what was done in it, outlives it; its sketches, files, members and
+   * open invitations are gone (`lib/workspace-deletion.ts`).
+   */
+  deletedAt: timestamp("deleted_at", { withTimezone: true }),
+  deletedBy: text("deleted_by").references(() => user.id, { onDelete: "set null" }),
 });
 
 export const membership = pgTable(

@@ -3,7 +3,9 @@ import Link from "next/link";
 import { Panel } from "@/components/shell/controls";
 import { SketchesTable } from "@/components/sketches/SketchesTable";
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
+import { DeleteWorkspace } from "@/components/workspaces/DeleteWorkspace";
 import { RenameWorkspaceForm } from "@/components/workspaces/WorkspaceForms";
+import { workspaceContents } from "@/db/queries/workspace-deletion";
 import { getWorkspaceForMember, listMembers } from "@/db/queries/workspaces";
 import { can, ROLE_INFO } from "@/lib/roles";
 import { requirePageRole } from "@/lib/session";
@@ -17,6 +19,7 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
   const { session, role } = await requirePageRole(id, `/workspaces/${id}`);
   const [ws, members, queue] = await Promise.all([getWorkspaceForMember(id, session.user.id), listMembers(id, session.user.id), reviewQueueFor(id, session.user.id, role)]);
   if (!ws) return null;
+  const contents = can(role, "workspace.delete") ? await workspaceContents(id) : null;
   const shown = members.slice(0, 6);
   return (
     <div className="space-y-6">
@@ -64,6 +67,7 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
         {can(role, "workspace.rename") ? (
           <Panel title="Settings">
             <RenameWorkspaceForm workspaceId={id} name={ws.name} />
+            {contents ? <DeleteWorkspace workspaceId={id} name={ws.name} contents={contents} /> : null}
           </Panel>
         ) : null}
       </div>

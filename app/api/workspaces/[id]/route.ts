@@ -2,7 +2,8 @@ import { getWorkspaceForMember } from "@/db/queries/workspaces";
 import { otherMethods, route } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 import { rename } from "@/lib/members";
-import { renameWorkspaceInput, workspaceParams } from "@/lib/schemas";
+import { deleteWorkspaceInput, renameWorkspaceInput, workspaceParams } from "@/lib/schemas";
+import { deleteWorkspace } from "@/lib/workspace-deletion";
 
 export const dynamic = "force-dynamic";
 
@@ -22,4 +23,13 @@ export const PATCH = route(
   async ({ params, user, body }) => ({ workspace: await rename(params.id, user, body.name) }),
 );
 
-export const { POST, PUT, DELETE, OPTIONS } = otherMethods("GET", "PATCH");
+/**
+ * Delete the workspace (owners), its name typed again as `confirmName`: its sketches with their
+ * versions, comments, sign-offs and files go; the members are told by mail. Answers what went.
+ */
+export const DELETE = route(
+  { params: workspaceParams, body: deleteWorkspaceInput, workspace: { param: "id", permission: "workspace.delete" } },
+  async ({ params, user, body }) => ({ workspace: await deleteWorkspace(params.id, { id: user.id, email: user.email, name: user.name }, body.confirmName) }),
+);
+
+export const { POST, PUT, OPTIONS } = otherMethods("GET", "PATCH", "DELETE");
