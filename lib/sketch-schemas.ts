@@ -71,6 +71,12 @@ export const updateSketchInput = z
   .strictObject({ title: sketchTitleSchema.optional(), description: sketchDescriptionSchema.optional(), tags: tagsSchema.optional() })
   .refine((v) => v.title !== undefined || v.description !== undefined || v.tags !== undefined, { error: "Send a title, a description or tags." });
 
+/** Make a version the latest again: a new version on top of `baseVersion` (the latest the caller has seen). */
+export const restoreInput = z.strictObject({
+  baseVersion: versionNumberSchema,
+  message: versionMessageSchema.optional(),
+});
+
 export const forkInput = z.strictObject({
   workspaceId: z.uuid({ error: "Choose the workspace to fork into." }),
   version: versionNumberSchema.optional(),

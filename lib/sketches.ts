@@ -131,7 +131,7 @@ function isUniqueViolation(err: unknown): boolean {
 }
 
 /** Save the next version on top of `baseVersion`; 409 with the latest version when someone saved since. */
-export async function saveVersion(sketchId: string, actor: Actor, input: { baseVersion: number; message?: string; document: ParsedSketch }) {
+export async function saveVersion(sketchId: string, actor: Actor, input: { baseVersion: number; message?: string; document: ParsedSketch; restoredFrom?: number }) {
   const access = await requireSketchRole(sketchId, actor.id, "version.save");
   const content = versionContent(input.document, input.message);
   try {
@@ -150,7 +150,7 @@ export async function saveVersion(sketchId: string, actor: Actor, input: { baseV
           workspaceId: out.workspaceId,
           targetType: "sketch",
           targetId: sketchId,
-          detail: { sketchId, title: out.title, number: out.version.number, message: content.message },
+          detail: { sketchId, title: out.title, number: out.version.number, message: content.message, ...(input.restoredFrom ? { restoredFrom: input.restoredFrom } : {}) },
         },
         tx,
       );
@@ -177,6 +177,32 @@ export async function saveVersion(sketchId: string, actor: Actor, input: { baseV
     if (!latest) throw new AppError("conflict");
     throw conflictError(latest, input.baseVersion, actor.id);
   }
+}
+
+/** The message a restored version is saved with when the caller gives none. */
+export function restoredMessage(number: number, message: string | null | undefined): string {
+  const said = message?.trim() ? ` — ${message.trim()}` : "";
+  return `Restored v${number}${said}`.slice(0, 500);
+}
+
+/**
+ * Make an older version the latest again: a new version, on top of `baseVersion` (409 when someone
+ * saved since), whose drawing is version `number`'s as saved. The sketch keeps its present title
+ * (a restore brings back the drawing, not an old name). Nothing is overwritten: the versions in
+ * between stay in the history.
+ */
+export async function restoreVersion(sketchId: string, actor: Actor, input: { number: number; baseVersion: number; message?: string }) {
+  const access = await requireSketchRole(sketchId, actor.id, "version.save");
+  const old = await getVersion(sketchId, input.number, actor.id);
+  if (!old) throw new AppError("not_found", `This sketch has no version ${input.number}.`);
+  if (input.number === access.latestVersion)
+    throw new AppError("validation_failed", `Version ${input.number} is already the latest: there is nothing to restore.`, {
+      fields: [{ path: "number", message: `v${input.number} is the latest version.` }],
+    });
+  const parsed = parseSketch({ ...(old.document as object), title: access.title });
+  if (!parsed.ok) throw new AppError("validation_failed", `Version ${input.number} no longer reads as a sketch: ${parsed.errors[0]?.path} ${parsed.errors[0]?.message}`);
+  const message = input.message?.trim() || restoredMessage(input.number, old.message);
+  return saveVersion(sketchId, actor, { baseVersion: input.baseVersion, message, document: parsed, restoredFrom: input.number });
 }
 
 /**

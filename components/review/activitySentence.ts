@@ -22,7 +22,8 @@ export function activitySentence(e: ActivityEvent): string {
     case "sketch.create":
       return "created the sketch";
     case "sketch.save":
-      return `saved ${n(d.number)}${quote(d.message)}`;
+      // a restore is a save with an older version's drawing: said as such, with its own message
+      return typeof d.restoredFrom === "number" ? `restored ${n(d.restoredFrom)} as ${n(d.number)}${quote(d.message)}` : `saved ${n(d.number)}${quote(d.message)}`;
     case "sketch.rename":
       return s(d.from) && s(d.from) !== s(d.title) ? `renamed it from “${s(d.from)}” to “${s(d.title)}”` : "edited its details";
     case "sketch.edit":

@@ -8,7 +8,8 @@ import { ActivityFeed } from "@/components/review/ActivityFeed";
 import { ReviewBadge } from "@/components/review/SignOff";
 import { Button, Crumb, Notice, Panel, buttonClass } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
-import { editorHref, VersionHistory } from "@/components/versions/VersionHistory";
+import { editorHref, VersionHistory, type VersionItem } from "@/components/versions/VersionHistory";
+import { RestoreDialog, type Restored } from "@/components/versions/RestoreDialog";
 import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
@@ -83,6 +84,8 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
   }, [editing]);
   const [forking, setForking] = useState<number | null>(null);
   const [deleting, setDeleting] = useState(false);
+  const [restoring, setRestoring] = useState<VersionItem | null>(null);
+  const [restored, setRestored] = useState<Restored | null>(null);
   const base = `/workspaces/${sketch.workspaceId}/sketches/${sketch.id}`;
 
   const remove = useMutation({
@@ -190,7 +193,18 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
           reviewCell={(v) => <ReviewBadge state={v.reviewState} />}
           reviewHref={(n) => `${base}/versions/${n}`}
           compareHref={(a, b) => `${base}/compare?from=${a}&to=${b}`}
+          onRestore={can(role, "version.save") ? setRestoring : undefined}
         />
+        {restored ? (
+          <div className="pt-3" data-testid="restored-notice">
+            <Notice tone="success">
+              Saved v{restored.number} with the drawing of v{restored.restoredFrom}: it is the latest version now.{" "}
+              <Link href={`${base}/compare?from=${restored.number - 1}&to=${restored.number}`} className="font-medium underline underline-offset-2">
+                What it changed from v{restored.number - 1}
+              </Link>
+            </Notice>
+          </div>
+        ) : null}
       </Panel>
       <Panel title="Activity" description="Saves, forks, comments and sign-off steps, newest first.">
         <ActivityFeed sketchId={sketch.id} />
@@ -205,6 +219,19 @@ export function SketchScreen({ initial }: { initial: SketchData }) {
           version={forking}
           defaultWorkspaceId={sketch.workspaceId}
           onForked={(made) => router.push(`/workspaces/${made.sketch.workspaceId}/sketches/${made.sketch.id}`)}
+        />
+      ) : null}
+      {restoring ? (
+        <RestoreDialog
+          sketchId={sketch.id}
+          sketchTitle={sketch.title}
+          version={restoring}
+          latest={sketch.latestVersion}
+          onClose={() => setRestoring(null)}
+          onRestored={(made) => {
+            setRestoring(null);
+            setRestored(made);
+          }}
         />
       ) : null}
       <Dialog open={deleting} onClose={() => setDeleting(false)} title={`Delete “${sketch.title}”?`} testId="delete-dialog">

@@ -96,7 +96,7 @@ export function CalcSheetLink({
         {busy ? <span className="sr-only">Making the calc sheet</span> : null}
       </a>
       {error ? (
-        <span role="alert" className="basis-full text-sm text-caution" data-testid="calc-sheet-error">
+        <span role="alert" className="order-last basis-full text-sm text-caution" data-testid="calc-sheet-error">
           {error}
         </span>
       ) : null}

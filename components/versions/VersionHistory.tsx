@@ -1,6 +1,7 @@
 "use client";
 // The version history of a sketch: newest first, with each version's message, author, time,
-// solve status and largest reaction, and the actions on it (open, fork, compare).
+// solve status and largest reaction, and the actions on it (review, open, restore as the latest,
+// fork, compare).
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState, type ReactNode } from "react";
@@ -42,6 +43,7 @@ export function VersionHistory({
   reviewHref,
   reviewCell,
   compareHref,
+  onRestore,
 }: {
   sketchId: string;
   latest: number;
@@ -53,6 +55,8 @@ export function VersionHistory({
   reviewCell?: (v: VersionItem) => ReactNode;
   /** the comparison of two versions */
   compareHref?: (from: number, to: number) => string;
+  /** make an older version the latest again (for those who may save versions) */
+  onRestore?: (v: VersionItem) => void;
 }) {
   const [units] = useUnitsPreference();
   const q = useVersions(sketchId);
@@ -144,6 +148,11 @@ export function VersionHistory({
                     <Link href={editorHref(sketchId, v.number, latest)} className="rounded-md border border-ink/20 px-2.5 py-1 text-[13px] font-medium hover:border-ink/45" aria-label={`Open version ${v.number}`}>
                       Open
                     </Link>
+                    {onRestore && v.number !== latest ? (
+                      <Button size="sm" tone="secondary" onClick={() => onRestore(v)} aria-label={`Make version ${v.number} the latest again`} title={`Save v${v.number}'s drawing as a new latest version (nothing is deleted)`}>
+                        Restore
+                      </Button>
+                    ) : null}
                     {canFork ? (
                       <Button size="sm" tone="secondary" onClick={() => onFork(v.number)} aria-label={`Fork version ${v.number}`}>
                         Fork

@@ -5,7 +5,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db";
 import { invitation } from "@/db/schema";
 import { hashInvitationToken, newInvitationToken } from "@/lib/invitations";
-import { createSketch } from "@/lib/sketches";
+import { createSketch, saveVersion } from "@/lib/sketches";
 import { isNotAllowed, routeFiles, routePath } from "./route-files";
 import { call, withMailFake, makeAccount, makeBareUser, makeWorkspace, uniqueEmail, type Person } from "./helpers";
 import { fixture as sketchFile, parsedFixture } from "./sketch-fixtures";
@@ -90,6 +90,12 @@ const ROWS: Record<string, Row> = {
     run: (h, f, p) => call(h, { method: "POST", params: S(f), cookie: p.cookie, body: { baseVersion: 1, message: "matrix", document: sketchFile("pipe-bend-anchor") } }),
   },
   "GET /api/sketches/[id]/versions/[number]": { expect: members(200), run: (h, f, p) => call(h, { params: { id: f.sketchId, number: "1" }, cookie: p.cookie }) },
+  "POST /api/sketches/[id]/versions/[number]/restore": {
+    expect: editors(201),
+    // a v2 on top, so v1 is an older version to make the latest again
+    prepare: async (f) => void (await saveVersion(f.sketchId, f.people.editor, { baseVersion: 1, message: "v2", document: parsedFixture("pipe-bend-anchor") })),
+    run: (h, f, p) => call(h, { method: "POST", params: { id: f.sketchId, number: "1" }, cookie: p.cookie, body: { baseVersion: 2 } }),
+  },
   "POST /api/sketches/[id]/fork": { expect: editors(201), run: (h, f, p) => call(h, { method: "POST", params: S(f), cookie: p.cookie, body: { workspaceId: f.ws } }) },
   ...REVIEW_ROWS,
   ...STUDIES_ROWS,

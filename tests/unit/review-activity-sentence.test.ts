@@ -23,4 +23,8 @@ describe("a fork in its own activity feed", () => {
     expect(activitySentence(event("sketch.fork", { fromVersion: 3, fromTitle: "Fire-fighting monitor trailer" }))).toBe("started it as a fork of v3 of “Fire-fighting monitor trailer”");
     expect(activitySentence(event("sketch.fork", { fromVersion: 3 }))).toBe("started it as a fork of v3 of another sketch");
   });
+  it("says a restore as one, with the message it was saved with", () => {
+    expect(activitySentence(event("sketch.save", { number: 5, message: "Back to 900 kg", restoredFrom: 2 }))).toBe("restored v2 as v5: “Back to 900 kg”");
+    expect(activitySentence(event("sketch.save", { number: 5, message: "Back to 900 kg" }))).toBe("saved v5: “Back to 900 kg”");
+  });
 });
