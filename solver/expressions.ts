@@ -86,6 +86,8 @@ math.createUnit("psi", { definition: `${LBF_N / (INCH_M * INCH_M)} Pa` }, { over
 math.createUnit("ksi", { definition: `${(1000 * LBF_N) / (INCH_M * INCH_M)} Pa` });
 // duct and fan pressures: the conventional inch of water column, and pound-force per square foot
 math.createUnit("inH2O", { definition: `${INCH_WATER_PA} Pa` }, { override: true });
+// mathjs's own kip is 4448.2216 N, short of 1000 lbf: the exact one, as the display converts with
+math.createUnit("kip", { definition: `${1000 * LBF_N} N` }, { override: true });
 math.createUnit("psf", { definition: `${PSF_PA} Pa` });
 math.createUnit("gpm", { definition: `${GALLON_US_M3 / 60} m^3/s` });
 math.createUnit("lpm", { definition: `${0.001 / 60} m^3/s` });
@@ -209,10 +211,27 @@ function unitlessValue(u: Unit): number {
   throw new PlainMathError(`has units (${u.formatUnits()}) where a plain number is needed`);
 }
 
-/** Text users type that mathjs does not read: 30°, N·m, m², L/min, L/s, the minus sign. "L/min"
- *  is litres per minute only when it cannot be anything else: not `L / min(a, b)`, and not when a
- *  parameter is called L (or l); "L/s" is litres per second on the same terms (the app writes
- *  flows in L/s, so what it shows can be typed back). */
+/** Our unit names, longest first, as one alternation for the patterns below. */
+const UNIT_PATTERN = [...UNIT_NAMES].sort((a, b) => b.length - a.length).join("|");
+/** Not inside a longer name: "xm3" and "a2m3" are names, "2m3" is 2 m³. */
+const NAME_START = "(?<![A-Za-z_]\\w*)";
+/** m2, mm2, m3, cm3, ft3, in2: a length unit with the power written as a plain digit. */
+const DIGIT_POWER = new RegExp(`${NAME_START}(mm|cm|km|m|ft|in|yd)([23])\\b(?!\\s*[(^])`, "g");
+/** a unit (or its square or cube) per h: km/h, kg/h, m^3/h, L/h */
+const PER_H = new RegExp(`${NAME_START}(${UNIT_PATTERN}|L|l)(\\^[23])?(\\s*\\/\\s*)h\\b(?!\\s*[(^])`, "g");
+/** feet and inches together, "5 ft 3 in" (mathjs multiplies them into an area) */
+const FEET_INCHES = /(?<![\w.])(\d+(?:\.\d+)?)\s*(ft|foot|feet)\s+(\d+(?:\.\d+)?)\s*(in|inch)\b(?!\s*[\w(^])/g;
+/** a force and a length joined by a hyphen, as torques are written (kN-m, lbf-ft, ft-lb) */
+const HYPHEN_MOMENT = /(?<![A-Za-z_]\w*)(?:(N|kN|MN|lbf|kip|kgf)-(m|mm|cm|ft|in)|(ft|in)-(lbf|lb|kip))\b(?!\s*[(^])/g;
+/** digits grouped by spaces, as SI writes them: 12 500, 1 000 000 (also thin spaces) */
+const SPACE_GROUPS = /(?<![\w.])(\d{1,3})((?:[ \u2009\u202f]\d{3})+)(?!\d)/g;
+
+/** Text users type that mathjs does not read: 30°, N·m, m², m3, kN-m, L/min, L/s, km/h, 5 ft 3 in,
+ *  12 500, the minus sign. "L/min" is litres per minute only when it cannot be anything else: not
+ *  `L / min(a, b)`, and not when a parameter is called L (or l); "L/s" is litres per second on the
+ *  same terms (the app writes flows in L/s, so what it shows can be typed back). "/h" after a unit
+ *  (km/h, m³/h, kg/h, L/h) is per hour only when no parameter is called h (with one, "W/h" is a
+ *  division), and not in `h(…)` or `h^2`; "m3" is m³ only when no parameter is called m3. */
 export function normaliseExpressionText(text: string, parameterNames: ReadonlySet<string> = new Set()): string {
   return text
     .replace(/°/g, " deg")
@@ -220,9 +239,32 @@ export function normaliseExpressionText(text: string, parameterNames: ReadonlySe
     .replace(/²/g, "^2")
     .replace(/³/g, "^3")
     .replace(/−/g, "-")
+    .replace(SPACE_GROUPS, (_all, head: string, rest: string) => head + rest.replace(/[ \u2009\u202f]/g, ""))
+    .replace(DIGIT_POWER, (all, unit: string, power: string) => (parameterNames.has(`${unit}${power}`) ? all : `${unit}^${power}`))
+    .replace(HYPHEN_MOMENT, (_all, force?: string, length?: string, lengthFirst?: string, forceAfter?: string) =>
+      force ? `${force}*${length}` : `${lengthFirst}*${forceAfter === "lb" ? "lbf" : forceAfter}`,
+    )
+    .replace(FEET_INCHES, (_all, feet: string, ft: string, inches: string, inch: string) => `(${feet} ${ft} + ${inches} ${inch})`)
+    .replace(PER_H, (all, unit: string, power: string | undefined, slash: string) => {
+      if (parameterNames.has("h")) return all;
+      if (unit === "L" || unit === "l") return parameterNames.has(unit) ? all : `litre${power ?? ""}${slash}hr`;
+      return `${unit}${power ?? ""}${slash}hr`;
+    })
     .replace(/\b([Ll])\s*\/\s*min\b(?!\s*\()/g, (all, letter: string) => (parameterNames.has(letter) ? all : "lpm"))
     .replace(/\b([Ll])\s*\/\s*s\b(?!\s*[(^])/g, (all, letter: string) => (parameterNames.has(letter) ? all : "lps"))
     .trim();
+}
+
+/** With a parameter called h, "3.6 km/h" is km divided by h: when such a field fails, the words
+ *  that say so (null when the text has no unit per h, or no parameter h). */
+export function perHourNote(text: string, parameterNames: ReadonlySet<string>): string | null {
+  if (!parameterNames.has("h")) return null;
+  const source = text.replace(/³/g, "^3").replace(/²/g, "^2").replace(DIGIT_POWER, (all, unit: string, power: string) => (parameterNames.has(`${unit}${power}`) ? all : `${unit}^${power}`));
+  PER_H.lastIndex = 0;
+  const m = PER_H.exec(source);
+  if (!m || ((m[1] === "L" || m[1] === "l") && parameterNames.has(m[1]))) return null;
+  const unit = `${m[1]}${m[2] ?? ""}`;
+  return `"${unit}/h" reads ${unit} divided by the parameter h here, not per hour: write per hour as ${unit}/hr`;
 }
 
 export interface CompiledExpression {
@@ -288,6 +330,9 @@ function compileUncached(text: string, parameterNames: ReadonlySet<string>): Com
   } catch (err) {
     // a decimal comma (1,5 or 0,55 kg/s): say what to type instead of the parser's words
     const comma = text.includes("(") ? null : /(^|[^\w.])(\d+),(\d+)/.exec(text);
+    // three digits after it may be a thousands separator (the app's own tables write 1,151): say both
+    if (comma && /^\d{3}(?![\d,])/.test(text.slice(comma.index + comma[0].length - comma[3].length)))
+      throw new ExpressionError(`cannot read "${text}": write ${comma[2]}${comma[3]} if the comma groups thousands, or ${comma[2]}.${comma[3]} if it is a decimal comma (no separators here)`);
     if (comma) throw new ExpressionError(`cannot read "${text}": write decimals with a point (${comma[2]}.${comma[3]}, not ${comma[2]},${comma[3]})`);
     throw new ExpressionError(`cannot read "${text}": ${(err as Error).message}`);
   }
@@ -350,6 +395,9 @@ function functionAsNameMessage(name: string, source: string, parameterNames: Rea
 }
 
 function unknownNameMessage(name: string): string {
+  // "x/h" with no parameter h: an hour after a name that is no unit is not guessed
+  if (name === "h")
+    return `unknown name "h": it is not a parameter, and Counterpoise does not read "h" as a unit on its own (write hours as hr: 5 hr, x/hr; after a unit, /h is per hour: 3.6 km/h, 50 m³/h)`;
   const known = math.Unit.isValuelessUnit(name);
   return known
     ? `unknown name "${name}": it is not a parameter, and Counterpoise does not read "${name}" as a unit (define a parameter ${name}, or write the unit out)`

@@ -4,6 +4,7 @@
 import {
   compileExpression,
   describeValue,
+  perHourNote,
   toFieldNumber,
   unitlessTrigWarning,
   type CompiledExpression,
@@ -124,7 +125,10 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
       const missing = expr.deps.filter((d) => !scope.has(d));
       for (const d of expr.deps) for (const id of ids) (readers.get(d) ?? readers.set(d, new Set()).get(d)!).add(id);
       if (missing.length) throw new Error(`reads parameter ${missing.join(", ")}, which has an error`);
-      const value = toFieldNumber(expr.evaluate(scope), kind);
+      const evaluated = expr.evaluate(scope);
+      // "3.6 km/h" with a parameter h of length cancels to a plain number, which a field would take as SI
+      if (typeof evaluated === "number" && kind !== "ratio" && perHourNote(raw, names)) throw new Error(`"${raw}" gives a plain number here (${Number(evaluated.toPrecision(6))})`);
+      const value = toFieldNumber(evaluated, kind);
       target[key] = value;
       fields[path] = { value };
       if (expr.deps.length) slots.push({ path, kind, expr, target, key });
@@ -135,7 +139,10 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
       }
     } catch (err) {
       // an unknown name's error suggests units of the field's own kind ("kg, tonne, lb" for a mass)
-      const message = suggestUnitsFor((err as Error).message, kind);
+      const said = suggestUnitsFor((err as Error).message, kind);
+      // "3.6 km/h" beside a parameter h is km divided by it: say so where the field fails
+      const note = perHourNote(raw, names);
+      const message = note ? `${said}; ${note}` : said;
       errors.push({ path, message });
       fields[path] = { error: message };
       target[key] = Number.NaN;

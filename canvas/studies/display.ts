@@ -74,6 +74,11 @@ export function parseTarget(text: string, component: QuantityComponent, system: 
  *  friction is used up. A moment or a force changing sign is no event. */
 export const marksZero = (component: QuantityComponent): boolean => component === "margin" || component === "frictionMargin";
 
+/** A value as a case writes it (-75, "-75 deg", "theta0 - 5 deg") in words beside figures the app
+ *  writes: its minus signs the true minus (−75 deg) that formatNumber, the tables and the plots
+ *  write. Only the words change: the case keeps the text as typed (and − reads back as minus). */
+export const typedValueWords = (v: number | string): string => String(v).replace(/-/g, "−");
+
 /** The swept parameter as the words call it: the built-in flow factor by its name in words. */
 export const parameterWords = (parameter: string): string => (parameter === FLOW_FACTOR ? "flow factor" : parameter);
 

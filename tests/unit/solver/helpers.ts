@@ -16,6 +16,13 @@ export function parsed(doc: unknown): Sketch {
   return p.sketch;
 }
 
+/** The errors of a sketch that must not parse (failing the test if it does). */
+export function errorsOf(doc: unknown) {
+  const p = parseSketch(doc);
+  if (p.ok) throw new Error("expected errors");
+  return p.errors;
+}
+
 export function solved(doc: unknown): SolveResult {
   return solve(parsed(doc));
 }

@@ -1,0 +1,190 @@
+// Units as engineers type them: per hour (km/h, m³/h, kg/h, L/h), powers as digits (m3, mm2),
+// torques with a hyphen (kN-m, ft-lb), feet and inches together, digits grouped by spaces, and the
+// thousands comma told apart from a decimal comma. A parameter of the same name always wins.
+import { describe, expect, it } from "vitest";
+import { compileExpression, evaluateToNumber, evaluateTyped, normaliseExpressionText } from "@/solver/expressions";
+import { typedValueWords } from "@/canvas/studies/display";
+import { box, errorsOf, parsed, sketch } from "./helpers";
+
+/** A sketch whose body mass is the given field. */
+const withMass = (parameters: Record<string, string | number>, mass: string | number) =>
+  sketch({
+    parameters,
+    bodies: [{ id: "b", outline: box(1, 1), mass }],
+    supports: [
+      { id: "left", body: "b", kind: "pin", at: [0, 0] },
+      { id: "right", body: "b", kind: "roller", at: [1, 0], angle: 90 },
+    ],
+  });
+
+const massOf = (doc: unknown): number => parsed(doc).bodies[0].mass;
+
+/** One body on a pin with the parameter h = 2 m, and the given jet speed or push. */
+const besideH = (part: { velocity?: string; push?: string }) =>
+  sketch({
+    parameters: { h: "2 m" },
+    bodies: [{ id: "b", outline: box(1, 1), mass: 10 }],
+    supports: [{ id: "left", body: "b", kind: "pin", at: [0, 0] }],
+    ...(part.velocity ? { ports: [{ id: "jet", body: "b", kind: "outlet", at: [1, 0.5], angle: 0, massFlow: "2 kg/s", velocity: part.velocity }] } : {}),
+    ...(part.push ? { loads: [{ id: "push", body: "b", kind: "force", at: [1, 1], magnitude: part.push, angle: 0 }] } : {}),
+  });
+
+describe("per hour after a unit, when no parameter is called h", () => {
+  // 1 h = 3600 s, 1 km = 1000 m (NIST SP 811, Table 6 and the SI prefixes); 1 L = 0.001 m³ (SI Brochure, 9th ed., Table 8)
+  it("3.6 km/h is 1 m/s", () => {
+    expect(evaluateToNumber("3.6 km/h", "velocity")).toBeCloseTo(1, 14);
+    expect(evaluateToNumber("90 km / h", "velocity")).toBeCloseTo(25, 12);
+  });
+
+  it("1 m³/h is 1/3600 m³/s however the cube is written", () => {
+    for (const text of ["1 m³/h", "1 m3/h", "1 m^3/h", "1 m^3 / h", "1000 L/h", "1000 l/h"]) {
+      expect(evaluateToNumber(text, "volumeFlow"), text).toBeCloseTo(1 / 3600, 18);
+    }
+    expect(evaluateToNumber("1500 m³/h", "volumeFlow")).toBeCloseTo(0.41666666666666667, 14);
+  });
+
+  it("3600 kg/h is 1 kg/s; the app's own hr still reads", () => {
+    expect(evaluateToNumber("3600 kg/h", "massFlow")).toBeCloseTo(1, 14);
+    expect(evaluateToNumber("3.6 km/hr", "velocity")).toBeCloseTo(1, 14);
+  });
+
+  it("a parameter flow in m³/h feeds a field in m³/s", () => {
+    // 72/3600 m³/s × 1000 kg/m³ × 1 s = 20 kg
+    expect(massOf(withMass({ Q: "72 m³/h", rho: "1000 kg/m3" }, "Q * rho * 1 s"))).toBeCloseTo(20, 12);
+  });
+
+  it("with a parameter called h, x/h is a division and km/h is km divided by h", () => {
+    expect(normaliseExpressionText("3.6 km/h", new Set(["h"]))).toBe("3.6 km/h");
+    expect(massOf(withMass({ h: "2 m", W: "10 kg*m" }, "W/h"))).toBe(5);
+    expect(massOf(withMass({ h: 4, W: "10 kg" }, "W / h"))).toBe(2.5);
+    // a unit per h with h a parameter: a moment over a height (kg·m / m) stays a division
+    expect(massOf(withMass({ h: "2 m" }, "6 kg*m/h"))).toBe(3);
+  });
+
+  it("h followed by a call or a power is never an hour", () => {
+    expect(normaliseExpressionText("2 m/h^2")).toBe("2 m/h^2");
+    expect(normaliseExpressionText("2 m/h(3)")).toBe("2 m/h(3)");
+    // not a name ending in a unit: "xkm/h" is no kilometre
+    expect(normaliseExpressionText("xkm/h")).toBe("xkm/h");
+  });
+
+  it("h after a name that is no unit is not guessed: the error says how to write hours", () => {
+    expect(errorsOf(withMass({ x: "10 kg" }, "x/h"))).toEqual([
+      { path: "bodies[0].mass", message: 'unknown name "h": it is not a parameter, and Counterpoise does not read "h" as a unit on its own (write hours as hr: 5 hr, x/hr; after a unit, /h is per hour: 3.6 km/h, 50 m³/h)' },
+    ]);
+  });
+});
+
+describe("a power written as a digit after a length unit, when no parameter has that name", () => {
+  it("1000 kg/m3 is a density, 0.5 mm2 an area, 2m3 a volume", () => {
+    expect(evaluateToNumber("1000 kg/m3", "density")).toBe(1000);
+    expect(evaluateToNumber("0.5 mm2", "area")).toBeCloseTo(5e-7, 20);
+    // 1 ft = 0.3048 m exactly (NIST SP 811, Appendix B)
+    expect(evaluateToNumber("10 ft2", "area")).toBeCloseTo(10 * 0.3048 ** 2, 14);
+    expect(evaluateToNumber("2 m3/s", "volumeFlow")).toBe(2);
+  });
+
+  it("a parameter called m3 is read as itself", () => {
+    expect(normaliseExpressionText("2*m3", new Set(["m3"]))).toBe("2*m3");
+    expect(massOf(withMass({ m3: "4 kg" }, "m3 / 2"))).toBe(2);
+    // and longer names ending in m3 are names
+    expect(normaliseExpressionText("qm3 + am3")).toBe("qm3 + am3");
+  });
+});
+
+describe("torques with a hyphen between force and length", () => {
+  // 1 lbf = 4.4482216152605 N, 1 ft = 0.3048 m, 1 kip = 1000 lbf (NIST SP 811, Appendix B)
+  it("200 N-m, 2 kN-m, 1500 ft-lb (a foot-pound of torque: lbf, common practice), 2 kip-ft", () => {
+    expect(evaluateToNumber("200 N-m", "moment")).toBe(200);
+    expect(evaluateToNumber("2 kN-m", "moment")).toBe(2000);
+    expect(evaluateToNumber("1500 ft-lb", "moment")).toBeCloseTo(1500 * 0.3048 * 4.4482216152605, 9);
+    expect(evaluateToNumber("1500 lbf-ft", "moment")).toBeCloseTo(1500 * 0.3048 * 4.4482216152605, 9);
+    expect(evaluateToNumber("2 kip-ft", "moment")).toBeCloseTo(2000 * 0.3048 * 4.4482216152605, 9);
+    // a kip is 1000 lbf exactly, to the last figure (mathjs's own stops at 4448.2216 N)
+    expect(evaluateToNumber("1 kip", "force")).toBeCloseTo(4448.2216152605, 9);
+  });
+
+  it("a minus between numbers and units stays a minus", () => {
+    expect(evaluateToNumber("2 m - 500 mm", "length")).toBe(1.5);
+    expect(evaluateToNumber("5 kN-2 kN", "force")).toBe(3000);
+    expect(() => evaluateToNumber("2 m-ft", "length")).toThrow("m and ft cannot be subtracted");
+  });
+});
+
+describe("feet and inches together", () => {
+  // 12 in = 1 ft = 0.3048 m (NIST SP 811, Appendix B)
+  it("5 ft 3 in is 1.6002 m, not 15 ft·in", () => {
+    expect(evaluateToNumber("5 ft 3 in", "length")).toBeCloseTo(1.6002, 12);
+    expect(evaluateToNumber("-5 ft 3 in", "length")).toBeCloseTo(-1.6002, 12);
+    expect(evaluateToNumber("6 feet 1.5 inch", "length")).toBeCloseTo(6 * 0.3048 + 1.5 * 0.0254, 12);
+    // before, "5 ft 3 in" in an area field was silently 180 in²
+    expect(() => evaluateToNumber("5 ft 3 in", "area")).toThrow("needs an area");
+  });
+});
+
+describe("digits grouped as the SI writes them, and the comma", () => {
+  // SI Brochure, 9th ed., 5.4.4: digits may be grouped in threes by a space
+  it("12 500 N, 1 000 000 N and a thin space read as the whole number", () => {
+    expect(evaluateToNumber("12 500 N", "force")).toBe(12500);
+    expect(evaluateToNumber("1 000 000 N", "force")).toBe(1e6);
+    expect(evaluateToNumber("2\u2009500.5 kg", "mass")).toBe(2500.5);
+    // not three digits: no grouping, the parser's error stands
+    expect(() => evaluateTyped("12 50 N")).toThrow('cannot read "12 50 N"');
+  });
+
+  it("1,000 N says both readings; 1,5 kg says to write a point", () => {
+    expect(() => evaluateTyped("1,000 N")).toThrow('cannot read "1,000 N": write 1000 if the comma groups thousands, or 1.000 if it is a decimal comma (no separators here)');
+    expect(() => evaluateTyped("1,5 kg")).toThrow('cannot read "1,5 kg": write decimals with a point (1.5, not 1,5)');
+    expect(() => evaluateTyped("0,5500 kg")).toThrow("write decimals with a point (0.5500, not 0,5500)");
+  });
+
+  it("30deg with no space is 30°", () => {
+    expect(evaluateToNumber("30deg", "angle")).toBeCloseTo(30, 12);
+    expect(evaluateToNumber("30°", "angle")).toBeCloseTo(30, 12);
+  });
+});
+
+describe("what the app shows flows in can be typed back", () => {
+  // the flows' display units (solver/units.ts): m³/s, L/s, gpm; parameters show "m^3 / hr" as m³/hr
+  it("0.05 m³/s, 50 L/s, 792.5 gpm and 180 m³/hr", () => {
+    expect(evaluateToNumber("0.05 m³/s", "volumeFlow")).toBeCloseTo(0.05, 15);
+    expect(evaluateToNumber("50 L/s", "volumeFlow")).toBeCloseTo(0.05, 15);
+    // 1 US gal = 3.785411784 L (NIST SP 811, Appendix B)
+    expect(evaluateToNumber("792.5 gpm", "volumeFlow")).toBeCloseTo((792.5 * 3.785411784e-3) / 60, 12);
+    expect(evaluateToNumber("180 m³/hr", "volumeFlow")).toBeCloseTo(0.05, 15);
+  });
+
+  it("a compiled text keeps the text as typed", () => {
+    expect(compileExpression("3.6 km/h", new Set()).text).toBe("3.6 km/h");
+  });
+});
+
+describe("a value as a case writes it, in words", () => {
+  it("its minus signs are the true minus; the stored text is untouched", () => {
+    const stored = "-75 deg";
+    expect(typedValueWords(stored)).toBe("−75 deg");
+    expect(typedValueWords(-50)).toBe("−50");
+    expect(typedValueWords("theta0 - 5 deg")).toBe("theta0 − 5 deg");
+    expect(stored).toBe("-75 deg");
+    // and what it shows reads back as the same value
+    expect(evaluateToNumber(typedValueWords(stored), "angle")).toBeCloseTo(-75, 12);
+  });
+});
+
+describe("km/h beside a parameter h", () => {
+  it("a field that fails says that /h is the parameter here, and how to write per hour", () => {
+    const errors = errorsOf(besideH({ velocity: "3.6 km/h" }));
+    expect(errors).toHaveLength(1);
+    expect(errors[0].path).toBe("ports[0].velocity");
+    expect(errors[0].message).toMatch(/^"3.6 km\/h" gives a plain number here \(1800\); "km\/h" reads km divided by the parameter h here, not per hour: write per hour as km\/hr$/);
+  });
+
+  it("a unit over the parameter h that keeps a unit is a plain division, with no note", () => {
+    // a 6 kN·m couple over a 2 m lever: 3 kN
+    expect(parsed(besideH({ push: "6 kN*m/h" })).loads[0]).toMatchObject({ magnitude: 3000 });
+  });
+
+  it("the same field with km/hr reads 1 m/s", () => {
+    expect(parsed(besideH({ velocity: "3.6 km/hr" })).ports[0].velocity).toBeCloseTo(1, 14);
+  });
+});
