@@ -9,7 +9,7 @@ import { describeQuantity, type QuantityComponent, type QuantitySpec } from "@/s
 import { elementNames } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit } from "@/solver/units";
-import { displayKind, displayUnit, inOtherUnit, MAX_STRETCHES, parameterWords, parseTarget, sweepRangeWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
+import { displayKind, displayUnit, inOtherUnit, MAX_STRETCHES, parameterWords, parseTarget, sweepRangeWords, sweepStateLines, toDisplay, typedValueWords } from "@/canvas/studies/display";
 import { reactionScale } from "@/solver/report";
 import type { Command } from "@/canvas/commands/define";
 import { setStudy } from "@/canvas/commands/studies";
@@ -73,7 +73,7 @@ export function overridesIn(sketch: SketchFile, rows: readonly LimitEverywhere[]
     if (!ids.has(c.id)) return [];
     if (parameter === FLOW_FACTOR) return c.flowFactor !== undefined && c.flowFactor !== 1 ? [`${c.name}: flow × ${c.flowFactor}`] : [];
     const v = c.parameters?.[parameter];
-    return v === undefined ? [] : [`${c.name}: ${String(v)}`];
+    return v === undefined ? [] : [`${c.name}: ${typedValueWords(v)}`];
   });
 }
 
@@ -461,7 +461,8 @@ export function SweepPanel() {
         const shownUnit = displayUnit(component, units, scaleFor(component));
         const inShown = (si: number) => `${formatNumber(toDisplay(si, component, units, scaleFor(component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
         const pUnit = result.unit ? ` ${prettyUnit(result.unit)}` : "";
-        const pName = s.parameter === FLOW_FACTOR ? "the flow factor" : s.parameter;
+        // the flow factor is named as everywhere else ("at flow factor = 1.186", as "In every case" says it)
+        const pName = parameterWords(s.parameter);
         // one rule for a found limit wherever it is shown: 4 significant figures, with the search's
         // tolerance where it shows in them
         const again = result.found && result.crossings.length > 1 ? ` and again at ${result.crossings.slice(1).map((x) => limitWithUnit(x, result.unit)).join(", ")}` : "";
@@ -532,7 +533,7 @@ export function SweepPanel() {
         const c = sketch.cases?.find((x) => x.id === t.case);
         if (parameter === FLOW_FACTOR) return c && c.flowFactor !== undefined && c.flowFactor !== 1 ? [`${c.name} (flow × ${c.flowFactor})`] : [];
         const v = c?.parameters?.[parameter];
-        return c && v !== undefined ? [`${c.name} (${parameter} = ${String(v)})`] : [];
+        return c && v !== undefined ? [`${c.name} (${parameter} = ${typedValueWords(v)})`] : [];
       })
     : [];
   const plotted = ran?.spec.quantities ?? [];
@@ -613,7 +614,7 @@ export function SweepPanel() {
             )}
             {caseOverride !== undefined && (
               <span className="mt-0.5 block text-[11px] text-ink-faint" data-testid="case-sets-parameter">
-                This case sets {parameter} = {String(caseOverride)}; the sweep&apos;s values stand in for it.
+                This case sets {parameter} = {typedValueWords(caseOverride)}; the sweep&apos;s values stand in for it.
               </span>
             )}
             {caseFlow !== undefined && caseFlow !== 1 && (

@@ -214,7 +214,7 @@ describe("the Sweep tab's words", () => {
     const rows = [...box.querySelectorAll("tbody tr")].map((tr) => tr.textContent);
     expect(rows.filter((r) => r?.endsWith("— first (a tie)"))).toHaveLength(2);
     expect(screen.getByTestId("limit-everywhere-overrides").textContent).toBe(
-      "Each is searched over theta from −90 to 0 deg: the searched value stands in for the theta a case sets itself (Lance aimed down at −75° (tank foot): -75 deg; Lance raised to −50°: -50 deg; Rinse at 150 bar, lance at −50°: -50 deg).",
+      "Each is searched over theta from −90 to 0 deg: the searched value stands in for the theta a case sets itself (Lance aimed down at −75° (tank foot): −75 deg; Lance raised to −50°: −50 deg; Rinse at 150 bar, lance at −50°: −50 deg).",
     );
   });
 });

@@ -52,13 +52,13 @@ describe("the limit finder on a body's own limits", () => {
     await user.click(screen.getByRole("button", { name: "Find" }));
     expect(formatLimit(tipsAt)).toBe("3.132"); // hand calculation above
     expect((await screen.findByTestId("limit-answer")).textContent).toBe(
-      "Block tips at the flow factor = 3.132 (to 4 significant figures): from there no set of its contacts and ties holds it.",
+      "Block tips at flow factor = 3.132 (to 4 significant figures): from there no set of its contacts and ties holds it.",
     );
     // sliding: μ = 1.2 > b/(2h) = 1, so it tips before the push reaches μ·W: no crossing, and why
     await user.selectOptions(quantity(), "Block slides as a whole");
     await user.click(screen.getByRole("button", { name: "Find" }));
     expect((await screen.findByTestId("limit-answer")).textContent).toBe(
-      "No crossing in this range: Block does not slide as a whole while it is held, for the flow factor from 0 to 4; it tips first, from the flow factor = 3.132 (sliding is searched only while the body is held).",
+      "No crossing in this range: Block does not slide as a whole while it is held, for flow factor from 0 to 4; it tips first, from flow factor = 3.132 (sliding is searched only while the body is held).",
     );
     // a support's quantity takes its target again
     await user.selectOptions(quantity(), "margin at rear pad");
@@ -71,7 +71,7 @@ describe("the limit finder on a body's own limits", () => {
     await user.click(screen.getByRole("button", { name: "Find" }));
     expect(formatLimit(slidesAt(0.3))).toBe("1.715"); // hand calculation above
     expect((await screen.findByTestId("limit-answer")).textContent).toBe(
-      "Block slides as a whole at the flow factor = 1.715 (to 4 significant figures): its friction contacts together are used up there (Σμ·n − |Σt| = 0, a factor of 1 against sliding).",
+      "Block slides as a whole at flow factor = 1.715 (to 4 significant figures): its friction contacts together are used up there (Σμ·n − |Σt| = 0, a factor of 1 against sliding).",
     );
   });
 
