@@ -29,6 +29,7 @@ import { VersionSweeps } from "./VersionSweeps";
 import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
 import { SignOffPanel, type SignOffData } from "./SignOff";
 import { CalcSheetLink } from "@/components/versions/CalcSheetLink";
+import { RestoreDialog, type Restored } from "@/components/versions/RestoreDialog";
 
 type VersionData = {
   version: { id: string; number: number; message: string; authorName: string | null; createdAt: string; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; document: SketchFile };
@@ -112,8 +113,12 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   const comments = useQuery({ queryKey: apiKey(`${base}/comments`), queryFn: () => apiFetch<CommentsData>(`${base}/comments`) });
   // which version of the sketch stands approved: a later revision is not read as carrying its approval
   const sketchPath = `/api/sketches/${sketchId}`;
-  const sketch = useQuery({ queryKey: apiKey(sketchPath), queryFn: () => apiFetch<{ sketch?: { approvedVersion?: number | null } }>(sketchPath) });
+  const sketch = useQuery({ queryKey: apiKey(sketchPath), queryFn: () => apiFetch<{ sketch?: { approvedVersion?: number | null; latestVersion?: number } }>(sketchPath) });
   const approvedVersion = sketch.data?.sketch?.approvedVersion ?? null;
+  // the latest as the server says it now (a save since the page was made counts)
+  const newest = Math.max(latest, sketch.data?.sketch?.latestVersion ?? latest);
+  const [restoring, setRestoring] = useState(false);
+  const [restored, setRestored] = useState<Restored | null>(null);
   const [units, setUnits] = useUnitsPreference();
   const [pin, setPin] = useState<PickedPin | null>(null);
   const [picking, setPicking] = useState(false);
@@ -170,9 +175,9 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
               </Link>
             ) : null}
             {/* an earlier version: what has changed since, up to the latest */}
-            {number < latest ? (
-              <Link href={`${sketchHref}/compare?from=${number}&to=${latest}`} className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45">
-                Compare with v{latest} (latest)
+            {number < newest ? (
+              <Link href={`${sketchHref}/compare?from=${number}&to=${newest}`} className="rounded-md border border-ink/20 px-3 py-1.5 font-medium hover:border-ink/45">
+                Compare with v{newest} (latest)
               </Link>
             ) : null}
             <CalcSheetLink
@@ -183,7 +188,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             >
               Calc sheet (PDF)
             </CalcSheetLink>
-            <Link href={number === latest ? `/sketches/${sketchId}` : `/sketches/${sketchId}?version=${number}`} className="rounded-md bg-ink px-3 py-1.5 font-medium text-paper hover:bg-ink-soft">
+            <Link href={number === newest ? `/sketches/${sketchId}` : `/sketches/${sketchId}?version=${number}`} className="rounded-md bg-ink px-3 py-1.5 font-medium text-paper hover:bg-ink-soft">
               {canEdit ? "Open in the editor" : "Open (read only)"}
             </Link>
           </div>
@@ -195,12 +200,41 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             <span>
               saved by {v.authorName ?? "a deleted account"}, {formatDateTime(v.createdAt)}
             </span>
-            {number < latest ? (
-              <Link href={`${sketchHref}/versions/${latest}`} className="text-caution underline decoration-caution/40 underline-offset-2 hover:decoration-caution">
-                v{latest} is newer
+            {number < newest ? (
+              <Link href={`${sketchHref}/versions/${newest}`} className="text-caution underline decoration-caution/40 underline-offset-2 hover:decoration-caution">
+                v{newest} is newer
               </Link>
             ) : null}
+            {/* an older version: make it the latest again (a new version with its drawing) */}
+            {number < newest && canEdit && !restored ? (
+              <button type="button" onClick={() => setRestoring(true)} className="rounded-md border border-ink/20 px-2 py-0.5 text-[13px] font-medium text-ink hover:border-ink/45" data-testid="version-restore">
+                Make v{number} the latest again…
+              </button>
+            ) : null}
           </p>
+        ) : null}
+        {restored ? (
+          <div data-testid="restored-notice">
+            <Notice tone="success">
+              Saved v{restored.number} with the drawing of v{number}: it is the latest version now.{" "}
+              <Link href={`${sketchHref}/versions/${restored.number}`} className="font-medium underline underline-offset-2">
+                Open v{restored.number}
+              </Link>
+            </Notice>
+          </div>
+        ) : null}
+        {restoring && v ? (
+          <RestoreDialog
+            sketchId={sketchId}
+            sketchTitle={sketchTitle}
+            version={v}
+            latest={newest}
+            onClose={() => setRestoring(false)}
+            onRestored={(made) => {
+              setRestoring(false);
+              setRestored(made);
+            }}
+          />
         ) : null}
         {/* another version stands approved and this one is not: said as the calc sheet's "Revision" line says it */}
         {approvedVersion !== null && approvedVersion !== number && signoff.data && signoff.data.state !== "approved" ? (
