@@ -5,6 +5,7 @@ export const AUDIT_ACTIONS = {
   "auth.sign_in": "signed in",
   "auth.password_reset": "reset their password",
   "auth.email_change": "changed their sign-in address",
+  "auth.account_delete": "deleted their account",
   "workspace.create": "created the workspace",
   "workspace.rename": "renamed the workspace",
   "workspace.delete": "deleted the workspace",

@@ -136,3 +136,22 @@ export function workspaceDeletedMail(input: {
     "If you did not expect this, ask the person who deleted it: exported sketch files or calc sheets they kept are the only copies left.",
   );
 }
+
+/** To the address of an account just deleted: what went, what stays, and what to do if it was not them. */
+export function accountDeletedMail(input: { to: string; name: string; workspacesDeleted: string[]; url: string }): Mail {
+  const deleted = input.workspacesDeleted.length
+    ? [`The workspaces only you were in were deleted with it: ${input.workspacesDeleted.map((n) => `"${n}"`).join(", ")}.`]
+    : [];
+  return compose(
+    input.to,
+    "Your Counterpoise account was deleted",
+    [
+      `Hello ${input.name},`,
+      "Your Counterpoise account was deleted: you can no longer sign in with this address and password, and you are no longer a member of any workspace.",
+      ...deleted,
+      `In the workspaces you shared, what you did stays as their record, under the name "former member: ${input.name}".`,
+    ],
+    { label: "Open Counterpoise", url: input.url },
+    "If you did not do this, tell an owner of each workspace you were in at once. You can make a new account with this address.",
+  );
+}

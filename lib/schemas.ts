@@ -26,6 +26,8 @@ export const personNameSchema = z.string().trim().min(1, "Enter your name.").max
 
 export const createWorkspaceInput = z.object({ name: workspaceNameSchema });
 export const renameWorkspaceInput = z.object({ name: workspaceNameSchema });
+/** Deleting one's account: the password typed again. */
+export const deleteAccountInput = z.object({ password: z.string({ error: "Type your password to confirm." }).min(1, "Type your password to confirm.").max(128, "Type your password to confirm.") });
 /** Deleting a workspace: its name typed again (compared on the server, which says so under this field). */
 export const deleteWorkspaceInput = z.object({
   confirmName: z.string({ error: "Type the workspace's name to confirm." }).max(200, "Type the workspace's name to confirm.").refine((s) => s.trim().length > 0, "Type the workspace's name to confirm."),

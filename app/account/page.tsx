@@ -1,8 +1,10 @@
 import type { Metadata } from "next";
 import { ChangeEmailForm, ChangePasswordForm, NotificationsForm, ProfileForm } from "@/components/auth/AccountForms";
+import { DeleteAccount } from "@/components/auth/DeleteAccount";
 import { DevicesPanel } from "@/components/auth/DevicesPanel";
 import { AppShell } from "@/components/shell/AppShell";
 import { Notice, Panel } from "@/components/shell/controls";
+import { accountDeletionPlan } from "@/lib/account-deletion";
 import { activeSessions } from "@/lib/account-sessions";
 import { requirePageSession } from "@/lib/session";
 
@@ -10,7 +12,8 @@ export const metadata: Metadata = { title: "Account settings" };
 
 export default async function AccountPage({ searchParams }: { searchParams: Promise<{ email?: string; error?: string }> }) {
   const { user, session } = await requirePageSession("/account");
-  const devices = await activeSessions(user.id, session.id);
+  const [devices, plan] = await Promise.all([activeSessions(user.id, session.id), accountDeletionPlan(user.id)]);
+  const held = (list: typeof plan.left) => list.map((w) => ({ id: w.id, name: w.name, members: w.members }));
   // back from the link mailed to a new address (better-auth adds `error` when the link failed)
   const { email: emailStep, error } = await searchParams;
   return (
@@ -40,6 +43,9 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
         </Panel>
         <Panel title="Notifications">
           <NotificationsForm enabled={user.emailNotifications !== false} />
+        </Panel>
+        <Panel title="Delete your account">
+          <DeleteAccount name={user.name} plan={{ blocking: held(plan.blocking), deleted: held(plan.deleted), left: held(plan.left) }} />
         </Panel>
       </div>
     </AppShell>

@@ -12,6 +12,13 @@ export const user = pgTable("user", {
   emailNotifications: boolean("email_notifications").notNull().default(true),
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  /**
+   * Set when the person deleted their account. The row stays as a tombstone so their name stays on
+   * what they did (versions, comments, sign-offs): `name` becomes "former member: <name>", the
+   * address a never-delivered placeholder, and the password, sessions and memberships go
+   * (`lib/account-deletion.ts`). Not declared to better-auth: it never reads it.
+   */
+  deletedAt: timestamp("deleted_at", { withTimezone: true }),
 });
 
 export const session = pgTable(

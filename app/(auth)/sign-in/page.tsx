@@ -3,16 +3,17 @@ import Link from "next/link";
 import { AuthCard } from "@/components/auth/AuthFrame";
 import { OtherAddressNote } from "@/components/auth/SignedInNote";
 import { SignInForm } from "@/components/auth/SignInForm";
+import { Notice } from "@/components/shell/controls";
 import { withNext } from "@/components/auth/nextPath";
 import { sessionForOtherAddress } from "@/components/auth/signedInPage";
 import { safeNext } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-type Search = Promise<{ next?: string; email?: string }>;
+type Search = Promise<{ next?: string; email?: string; account?: string }>;
 
 export default async function SignInPage({ searchParams }: { searchParams: Search }) {
-  const { next, email } = await searchParams;
+  const { next, email, account } = await searchParams;
   const target = safeNext(next);
   const session = await sessionForOtherAddress(email, target);
   if (session) {
@@ -35,6 +36,11 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
         </>
       }
     >
+      {account === "deleted" ? (
+        <div className="mb-4">
+          <Notice tone="success">Your account was deleted, and a mail says so at its address. What you did in shared workspaces stays on their record under your former name.</Notice>
+        </div>
+      ) : null}
       <SignInForm next={target} defaultEmail={email ?? ""} />
     </AuthCard>
   );

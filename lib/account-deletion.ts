@@ -1,0 +1,115 @@
+import "server-only";
+import { APIError } from "better-auth/api";
+import { db } from "@/db";
+import { lockOwnersAround, tombstoneUser, workspacesHeldBy, type HeldWorkspace } from "@/db/queries/account-deletion";
+import { recordAudit } from "./audit";
+import { getAuth } from "./auth";
+import { appUrl } from "./env";
+import { AppError } from "./errors";
+import { sendMail } from "./mail";
+import { accountDeletedMail } from "./mail-templates";
+import { createRateLimiter } from "./rate-limit";
+import { deleteWorkspace } from "./workspace-deletion";
+
+type Actor = { id: string; email: string; name: string };
+
+/**
+ * What deleting an account does to each workspace the person is in:
+ * - `blocking`: they are its only owner and others are in it: refused until they make someone else
+ *   an owner or delete the workspace (its members would be left with no one to manage it);
+ * - `deleted`: they are its only member: it is deleted with the account (as an owner deletes a workspace);
+ * - `left`: they leave it; what they did there stays under their tombstone name.
+ */
+export type AccountDeletionPlan = { blocking: HeldWorkspace[]; deleted: HeldWorkspace[]; left: HeldWorkspace[] };
+
+export function planOf(held: HeldWorkspace[]): AccountDeletionPlan {
+  const blocking = held.filter((w) => w.role === "owner" && w.owners <= 1 && w.members > 1);
+  const deleted = held.filter((w) => w.members <= 1);
+  const left = held.filter((w) => !blocking.includes(w) && !deleted.includes(w));
+  return { blocking, deleted, left };
+}
+
+export async function accountDeletionPlan(userId: string): Promise<AccountDeletionPlan> {
+  return planOf(await workspacesHeldBy(userId));
+}
+
+const quoted = (names: string[]) => (names.length < 2 ? `“${names[0]}”` : `${names.slice(0, -1).map((n) => `“${n}”`).join(", ")} and “${names[names.length - 1]}”`);
+
+/** The refusal while the person is the last owner of a workspace that has other members, naming each. */
+export function lastOwnerRefusal(blocking: HeldWorkspace[]): AppError {
+  const one = blocking.length === 1;
+  return new AppError(
+    "last_owner",
+    `You are the only owner of ${quoted(blocking.map((w) => w.name))}, which ${one ? "has" : "have"} other members: make one of them an owner, or delete ${one ? "the workspace" : "those workspaces"}, before deleting your account.`,
+    { extra: { workspaces: blocking.map((w) => ({ id: w.id, name: w.name, members: w.members })) } },
+  );
+}
+
+const attempts = createRateLimiter("account-delete");
+
+/** The password of the signed-in account, checked by better-auth (400 naming the `password` field when wrong). */
+async function checkPassword(password: string, headers: Headers) {
+  try {
+    await getAuth().api.verifyPassword({ body: { password }, headers });
+  } catch (err) {
+    if (err instanceof APIError && err.statusCode === 400) {
+      throw new AppError("validation_failed", "That is not your password: nothing was deleted.", { fields: [{ path: "password", message: "That is not your password." }] });
+    }
+    throw err;
+  }
+}
+
+/**
+ * Delete the signed-in person's account, their password typed again. Refused while they are the last
+ * owner of a shared workspace. Workspaces where they are alone go first (through `deleteWorkspace`,
+ * so each leaves its tombstone and audit record), then in one transaction they leave every other
+ * workspace (a `member.leave` record each) and their row becomes a tombstone: the name
+ * "former member: <name>" stays on their versions, comments and sign-offs, the address is freed,
+ * the password, sessions and reset links go. better-auth's own deleteUser removes the row (and with
+ * it every name on the record), so it is not used. A mail to the old address says it happened.
+ */
+export async function deleteAccount(actor: Actor, password: string, headers: Headers) {
+  const first = await accountDeletionPlan(actor.id);
+  if (first.blocking.length) throw lastOwnerRefusal(first.blocking);
+  await attempts.hit(actor.id, 10, 15 * 60);
+  await checkPassword(password, headers);
+
+  const workspacesDeleted: string[] = [];
+  for (const w of first.deleted) {
+    const out = await deleteWorkspace(w.id, actor, w.name);
+    workspacesDeleted.push(out.name);
+  }
+  const out = await db.transaction(async (tx) => {
+    await lockOwnersAround(actor.id, tx);
+    const now = planOf(await workspacesHeldBy(actor.id, tx));
+    // someone joined a workspace of theirs, or an owner stepped down, since the first look
+    if (now.blocking.length) throw lastOwnerRefusal(now.blocking);
+    // a workspace where they became the only member meanwhile would be left empty: ask again
+    if (now.deleted.length) throw new AppError("conflict", `You became the only member of ${quoted(now.deleted.map((w) => w.name))} meanwhile: try again to delete it with your account.`);
+    const leaving = now.left;
+    for (const w of leaving) {
+      await recordAudit(
+        { action: "member.leave", actorId: actor.id, actorEmail: actor.email, workspaceId: w.id, targetType: "user", targetId: actor.id, detail: { email: actor.email, name: actor.name, role: w.role, accountDeleted: true } },
+        tx,
+      );
+    }
+    const row = await tombstoneUser(actor.id, tx);
+    if (!row) throw new AppError("not_found", "This account was deleted already.");
+    await recordAudit(
+      {
+        action: "auth.account_delete",
+        actorId: actor.id,
+        actorEmail: actor.email,
+        targetType: "user",
+        targetId: actor.id,
+        detail: { name: actor.name, workspacesDeleted, left: leaving.map((w) => ({ id: w.id, name: w.name, role: w.role })) },
+      },
+      tx,
+    );
+    return { deleted: true as const, workspacesDeleted, left: leaving.map((w) => w.name) };
+  });
+  await sendMail(accountDeletedMail({ to: actor.email, name: actor.name, workspacesDeleted, url: appUrl() })).catch((err: unknown) => {
+    console.error(`[mail] could not tell ${actor.email} that their account was deleted:`, err instanceof Error ? err.message : err);
+  });
+  return out;
+}
