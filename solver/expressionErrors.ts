@@ -187,7 +187,7 @@ export const UNITS_TO_SUGGEST: Readonly<Record<string, readonly string[]>> = {
   pressure: ["kPa", "bar", "psi"],
   area: ["m^2", "mm^2", "in^2"],
   density: ["kg/m^3", "lb/ft^3"],
-  volumeFlow: ["lpm", "m^3/s", "gpm"],
+  volumeFlow: ["lpm", "m^3/s", "m^3/h", "gpm"],
   stiffness: ["kN/m", "lbf/in"],
   rotationalStiffness: ["kN m/rad", "lbf ft/rad"],
   acceleration: ["m/s^2", "ft/s^2"],

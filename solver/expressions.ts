@@ -216,22 +216,36 @@ const UNIT_PATTERN = [...UNIT_NAMES].sort((a, b) => b.length - a.length).join("|
 /** Not inside a longer name: "xm3" and "a2m3" are names, "2m3" is 2 m³. */
 const NAME_START = "(?<![A-Za-z_]\\w*)";
 /** m2, mm2, m3, cm3, ft3, in2: a length unit with the power written as a plain digit. */
-const DIGIT_POWER = new RegExp(`${NAME_START}(mm|cm|km|m|ft|in|yd)([23])\\b(?!\\s*[(^])`, "g");
+const DIGIT_POWER = new RegExp(`${NAME_START}(?:(mm|cm|km|m|ft|in|yd)([23])|(s)(2))\\b(?!\\s*[(^])`, "g");
 /** a unit (or its square or cube) per h: km/h, kg/h, m^3/h, L/h */
 const PER_H = new RegExp(`${NAME_START}(${UNIT_PATTERN}|L|l)(\\^[23])?(\\s*\\/\\s*)h\\b(?!\\s*[(^])`, "g");
 /** feet and inches together, "5 ft 3 in" (mathjs multiplies them into an area) */
 const FEET_INCHES = /(?<![\w.])(\d+(?:\.\d+)?)\s*(ft|foot|feet)\s+(\d+(?:\.\d+)?)\s*(in|inch)\b(?!\s*[\w(^])/g;
-/** a force and a length joined by a hyphen, as torques are written (kN-m, lbf-ft, ft-lb) */
-const HYPHEN_MOMENT = /(?<![A-Za-z_]\w*)(?:(N|kN|MN|lbf|kip|kgf)-(m|mm|cm|ft|in)|(ft|in)-(lbf|lb|kip))\b(?!\s*[(^])/g;
+/** a force and a length joined by a hyphen or a point, as torques are written (kN-m, kN.m, lbf-ft, ft-lb) */
+const HYPHEN_MOMENT = /(?<![A-Za-z_]\w*)(?:(N|kN|MN|lbf|kip|kgf)[-.](m|mm|cm|ft|in)|(ft|in)[-.](lbf|lb|kip))\b(?!\s*[(^])/g;
+/** feet and inches as marks after a number: 5' 3", 5′ 3″ */
+const FOOT_MARK = /(\d)\s*['′]/g;
+const INCH_MARK = /(\d)\s*["″]/g;
+/** gauge pressures as the trade writes them: every pressure here is gauge, so psig is psi */
+const GAUGE = /(?<![A-Za-z_]\w*)(psi|bar|kPa|MPa)g\b/g;
 /** digits grouped by spaces, as SI writes them: 12 500, 1 000 000 (also thin spaces) */
 const SPACE_GROUPS = /(?<![\w.])(\d{1,3})((?:[ \u2009\u202f]\d{3})+)(?!\d)/g;
 
-/** Text users type that mathjs does not read: 30°, N·m, m², m3, kN-m, L/min, L/s, km/h, 5 ft 3 in,
- *  12 500, the minus sign. "L/min" is litres per minute only when it cannot be anything else: not
- *  `L / min(a, b)`, and not when a parameter is called L (or l); "L/s" is litres per second on the
- *  same terms (the app writes flows in L/s, so what it shows can be typed back). "/h" after a unit
- *  (km/h, m³/h, kg/h, L/h) is per hour only when no parameter is called h (with one, "W/h" is a
- *  division), and not in `h(…)` or `h^2`; "m3" is m³ only when no parameter is called m3. */
+/** m3 → m^3 (s2 → s^2) unless a parameter has that name. */
+const digitPower =
+  (parameterNames: ReadonlySet<string>) =>
+  (all: string, unit?: string, power?: string, second?: string, secondPower?: string): string => {
+    const [u, p] = unit ? [unit, power!] : [second!, secondPower!];
+    return parameterNames.has(`${u}${p}`) ? all : `${u}^${p}`;
+  };
+
+/** Text users type that mathjs does not read: 30°, N·m, m², m3, m/s2, kN-m, kN.m, L/min, L/s,
+ *  km/h, 5 ft 3 in, 5' 3", psig, 12 500, the minus sign. "L/min" is litres per minute only when it
+ *  cannot be anything else: not `L / min(a, b)`, and not when a parameter is called L (or l); "L/s"
+ *  is litres per second on the same terms (the app writes flows in L/s, so what it shows can be
+ *  typed back). "/h" after a unit (km/h, m³/h, kg/h, L/h) is per hour only when no parameter is
+ *  called h (with one, "W/h" is a division), and not in `h(…)` or `h^2`; "m3" is m³ (and "psig"
+ *  psi) only when no parameter has that name. */
 export function normaliseExpressionText(text: string, parameterNames: ReadonlySet<string> = new Set()): string {
   return text
     .replace(/°/g, " deg")
@@ -240,7 +254,10 @@ export function normaliseExpressionText(text: string, parameterNames: ReadonlySe
     .replace(/³/g, "^3")
     .replace(/−/g, "-")
     .replace(SPACE_GROUPS, (_all, head: string, rest: string) => head + rest.replace(/[ \u2009\u202f]/g, ""))
-    .replace(DIGIT_POWER, (all, unit: string, power: string) => (parameterNames.has(`${unit}${power}`) ? all : `${unit}^${power}`))
+    .replace(DIGIT_POWER, digitPower(parameterNames))
+    .replace(FOOT_MARK, "$1 ft ")
+    .replace(INCH_MARK, "$1 in ")
+    .replace(GAUGE, (all, unit: string) => (parameterNames.has(all) ? all : unit))
     .replace(HYPHEN_MOMENT, (_all, force?: string, length?: string, lengthFirst?: string, forceAfter?: string) =>
       force ? `${force}*${length}` : `${lengthFirst}*${forceAfter === "lb" ? "lbf" : forceAfter}`,
     )
@@ -259,7 +276,7 @@ export function normaliseExpressionText(text: string, parameterNames: ReadonlySe
  *  that say so (null when the text has no unit per h, or no parameter h). */
 export function perHourNote(text: string, parameterNames: ReadonlySet<string>): string | null {
   if (!parameterNames.has("h")) return null;
-  const source = text.replace(/³/g, "^3").replace(/²/g, "^2").replace(DIGIT_POWER, (all, unit: string, power: string) => (parameterNames.has(`${unit}${power}`) ? all : `${unit}^${power}`));
+  const source = text.replace(/³/g, "^3").replace(/²/g, "^2").replace(DIGIT_POWER, digitPower(parameterNames));
   PER_H.lastIndex = 0;
   const m = PER_H.exec(source);
   if (!m || ((m[1] === "L" || m[1] === "l") && parameterNames.has(m[1]))) return null;
@@ -394,10 +411,21 @@ function functionAsNameMessage(name: string, source: string, parameterNames: Rea
   return `"${name}" is a function: call it with its arguments, as in ${name}(…)`;
 }
 
+/** What an engineer probably meant by a name we do not read (the pressures here are gauge). */
+const UNKNOWN_HINTS: Readonly<Record<string, string>> = {
+  psia: "every pressure here is gauge: write psi (gauge), the absolute value less the atmosphere (1 atm = 14.696 psi)",
+  bara: "every pressure here is gauge: write bar (gauge), the absolute value less the atmosphere (1 atm = 1.01325 bar)",
+  lbs: "write lb for a mass or lbf for a force",
+  tons: "write tonne (1000 kg), or lb (1 short ton = 2000 lb)",
+  kips: "write kip (1000 lbf)",
+};
+
 function unknownNameMessage(name: string): string {
   // "x/h" with no parameter h: an hour after a name that is no unit is not guessed
   if (name === "h")
     return `unknown name "h": it is not a parameter, and Counterpoise does not read "h" as a unit on its own (write hours as hr: 5 hr, x/hr; after a unit, /h is per hour: 3.6 km/h, 50 m³/h)`;
+  const hint = UNKNOWN_HINTS[name];
+  if (hint) return `unknown name "${name}": it is not a parameter or a unit here: ${hint}`;
   const known = math.Unit.isValuelessUnit(name);
   return known
     ? `unknown name "${name}": it is not a parameter, and Counterpoise does not read "${name}" as a unit (define a parameter ${name}, or write the unit out)`

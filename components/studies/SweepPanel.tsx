@@ -145,7 +145,7 @@ export function slidFirstWords(result: BodyLimitResult, q: BodyLimitSpec, pName:
 
 /**
  * The answer of a search of a body's own limit in one run: where it tips or slides as a whole, and
- * why that is the limit; else why it is not reached in the range. `over`: "for the flow factor from 0
+ * why that is the limit; else why it is not reached in the range. `over`: "for flow factor from 0
  * to 4"; `precision`: how far the value is given.
  */
 export function bodyLimitWords(result: BodyLimitResult, q: BodyLimitSpec, label: string, pName: string, over: string, precision: string, from: number, to = Number.POSITIVE_INFINITY): string {

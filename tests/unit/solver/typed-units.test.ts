@@ -111,6 +111,38 @@ describe("torques with a hyphen between force and length", () => {
   });
 });
 
+describe("more of what engineers type", () => {
+  it("kN.m and N.m (a point between units) are torques; m/s2 an acceleration", () => {
+    expect(evaluateToNumber("2 kN.m", "moment")).toBe(2000);
+    expect(evaluateToNumber("350 N.m", "moment")).toBe(350);
+    expect(evaluateToNumber("9.81 m/s2", "acceleration")).toBeCloseTo(9.81, 14);
+    expect(massOf(withMass({ s2: "3 kg" }, "2*s2"))).toBe(6);
+  });
+
+  // 12 in = 1 ft = 0.3048 m (NIST SP 811, Appendix B)
+  it("feet and inch marks: 5' 3\" and 5′ 3″ are 1.6002 m, 6\" is 0.1524 m", () => {
+    expect(evaluateToNumber("5' 3\"", "length")).toBeCloseTo(1.6002, 12);
+    expect(evaluateToNumber("5′ 3″", "length")).toBeCloseTo(1.6002, 12);
+    expect(evaluateToNumber("6\"", "length")).toBeCloseTo(0.1524, 14);
+    expect(evaluateToNumber("12'", "length")).toBeCloseTo(3.6576, 12);
+  });
+
+  // every pressure a sketch takes is gauge (solver/cautions.ts); 1 psi = 6894.757 Pa (NIST SP 811, Appendix B)
+  it("psig and barg are gauge psi and bar; psia and bara say that pressures here are gauge", () => {
+    expect(evaluateToNumber("150 psig", "pressure")).toBeCloseTo(150 * 6894.757293168, 5);
+    expect(evaluateToNumber("2 barg", "pressure")).toBe(200000);
+    expect(() => evaluateTyped("150 psia")).toThrow('unknown name "psia": it is not a parameter or a unit here: every pressure here is gauge: write psi (gauge), the absolute value less the atmosphere (1 atm = 14.696 psi)');
+    expect(() => evaluateTyped("3 bara")).toThrow("every pressure here is gauge: write bar (gauge)");
+    expect(normaliseExpressionText("2*psig", new Set(["psig"]))).toBe("2*psig");
+  });
+
+  it("lbs, tons and kips say what to write", () => {
+    expect(() => evaluateTyped("2 lbs")).toThrow('unknown name "lbs": it is not a parameter or a unit here: write lb for a mass or lbf for a force');
+    expect(() => evaluateTyped("2 tons")).toThrow("write tonne (1000 kg), or lb (1 short ton = 2000 lb)");
+    expect(() => evaluateTyped("2 kips")).toThrow("write kip (1000 lbf)");
+  });
+});
+
 describe("feet and inches together", () => {
   // 12 in = 1 ft = 0.3048 m (NIST SP 811, Appendix B)
   it("5 ft 3 in is 1.6002 m, not 15 ft·in", () => {
