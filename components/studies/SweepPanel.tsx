@@ -53,8 +53,8 @@ const COMPONENT_TITLES: Partial<Record<QuantityComponent, string>> = {
 };
 
 /** An example of a value typed with its own unit, of the parameter's kind. */
-function unitExample(unit: string): string {
-  const examples: Record<string, string> = { deg: "0.3 rad", rad: "15 deg", m: "250 mm", mm: "0.25 m", "m / s": "90 km/hr", "m/s": "90 km/hr", kg: "2 t", bar: "150 psi", Pa: "2 kPa", kPa: "0.5 bar" };
+export function unitExample(unit: string): string {
+  const examples: Record<string, string> = { deg: "0.3 rad", rad: "15 deg", m: "250 mm", mm: "0.25 m", "m / s": "90 km/h", "m/s": "90 km/h", kg: "2 tonne", bar: "150 psi", Pa: "2 kPa", kPa: "0.5 bar", "m^3 / s": "50 m³/h", "m^3/s": "50 m³/h", lps: "50 m³/h" };
   return examples[unit.replace(/\s+/g, " ")] ?? examples[unit.replace(/\s+/g, "")] ?? `2 ${prettyUnit(unit)}`;
 }
 

@@ -14,6 +14,8 @@ import { runLimit } from "@/canvas/studies/run";
 import { parseSketch, solveCases } from "@/solver/index";
 import { formatLimit } from "@/solver/limit";
 import { G0 } from "@/solver/constants";
+import { evaluateToNumber, evaluateTyped, kindOfUnit } from "@/solver/expressions";
+import { unitExample } from "@/components/studies/SweepPanel";
 
 const cart = () => JSON.parse(readFileSync("canvas/examples/washing-cart.json", "utf8"));
 
@@ -164,6 +166,16 @@ describe("the Sweep tab's words", () => {
     expect(hint.textContent).toBe("Numbers in bar, the unit p_pump is written in, or give a unit of the same kind (“150 psi”).");
     await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "flowFactor");
     expect(hint.textContent).toBe("The flow factor is a plain number (1: the flow as drawn).");
+  });
+
+  it("every unit hint's example reads as a value of the parameter's kind (2 tonne, not 2 t, which is no unit here)", () => {
+    for (const unit of ["deg", "rad", "m", "mm", "m / s", "kg", "bar", "Pa", "kPa", "m^3 / s", "lps"]) {
+      const example = unitExample(unit);
+      const v = evaluateTyped(example);
+      expect(typeof v === "number" ? null : kindOfUnit(v.formatUnits()), `${example} for ${unit}`).toBe(kindOfUnit(unit));
+    }
+    // 50 m³/h = 50/3600 m³/s (1 h = 3600 s, NIST SP 811)
+    expect(evaluateToNumber(unitExample("m^3 / s"), "volumeFlow")).toBeCloseTo(50 / 3600, 15);
   });
 
   it("refuses points that are not a whole number, naming the field and keeping what was typed", async () => {
