@@ -1,5 +1,4 @@
 import "server-only";
-import { APIError } from "better-auth/api";
 import { db } from "@/db";
 import { lockOwnersAround, tombstoneUser, workspacesHeldBy, type HeldWorkspace } from "@/db/queries/account-deletion";
 import { recordAudit } from "./audit";
@@ -47,12 +46,18 @@ export function lastOwnerRefusal(blocking: HeldWorkspace[]): AppError {
 
 const attempts = createRateLimiter("account-delete");
 
+function isInvalidPassword(err: unknown): boolean {
+  const e = err as { statusCode?: unknown; body?: { code?: unknown } } | null;
+  return typeof e === "object" && e !== null && e.statusCode === 400 && e.body?.code === "INVALID_PASSWORD";
+}
+
 /** The password of the signed-in account, checked by better-auth (400 naming the `password` field when wrong). */
 async function checkPassword(password: string, headers: Headers) {
   try {
     await getAuth().api.verifyPassword({ body: { password }, headers });
   } catch (err) {
-    if (err instanceof APIError && err.statusCode === 400) {
+    // read by its fields: the class better-auth throws is not always the one imported here (bundled twice under next)
+    if (isInvalidPassword(err)) {
       throw new AppError("validation_failed", "That is not your password: nothing was deleted.", { fields: [{ path: "password", message: "That is not your password." }] });
     }
     throw err;

@@ -35,11 +35,11 @@ export function DeleteAccount({ name, plan, go = (to: string) => window.location
               <span className="text-ink-faint">
                 <span className="num">{w.members}</span> members
               </span>
-              <Link href={`/workspaces/${w.id}/members`} className="font-medium text-ink-soft underline decoration-rule underline-offset-2 hover:text-ink">
-                Members
+              <Link href={`/workspaces/${w.id}/members`} aria-label={`Hand over ownership of ${w.name}`} className="font-medium text-ink-soft underline decoration-rule underline-offset-2 hover:text-ink">
+                Hand over ownership
               </Link>
-              <Link href={`/workspaces/${w.id}`} className="font-medium text-ink-soft underline decoration-rule underline-offset-2 hover:text-ink">
-                Settings
+              <Link href={`/workspaces/${w.id}`} aria-label={`Delete the workspace ${w.name}`} className="font-medium text-ink-soft underline decoration-rule underline-offset-2 hover:text-ink">
+                Delete the workspace
               </Link>
             </li>
           ))}

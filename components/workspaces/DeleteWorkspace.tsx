@@ -76,7 +76,7 @@ export function DeleteWorkspace({ workspaceId, name, contents }: { workspaceId: 
           <p className="text-ink-soft">The audit log keeps a record that you deleted it and what it held. Links to its sketches will say they were deleted.</p>
           <Field
             id="delete-workspace-name"
-            label={`Type the workspace's name, ${name}, to confirm`}
+            label={`Type the workspace’s name, “${name}”, to confirm`}
             value={typed}
             autoComplete="off"
             spellCheck={false}

@@ -23,8 +23,8 @@ describe("deleting your account", () => {
     render(<DeleteAccount name="Olivia Lead" plan={{ blocking: [ws("w1", "Penstock 3", 3)], deleted: [], left: [] }} />);
     const box = screen.getByTestId("delete-account-blocked");
     expect(box.textContent).toContain("Penstock 3");
-    expect(within(box).getByRole("link", { name: "Members" }).getAttribute("href")).toBe("/workspaces/w1/members");
-    expect(within(box).getByRole("link", { name: "Settings" }).getAttribute("href")).toBe("/workspaces/w1");
+    expect(within(box).getByRole("link", { name: "Hand over ownership of Penstock 3" }).getAttribute("href")).toBe("/workspaces/w1/members");
+    expect(within(box).getByRole("link", { name: "Delete the workspace Penstock 3" }).getAttribute("href")).toBe("/workspaces/w1");
     expect(screen.queryByRole("button", { name: /Delete my account/ })).toBeNull();
   });
 

@@ -52,14 +52,14 @@ describe("deleting a workspace", () => {
     expect(within(dialog).getByTestId("delete-workspace-contents").textContent).toContain("3 sketches with 11 versions, 2 of them approved");
     expect(dialog.textContent).toContain("Export JSON (Ctrl/⌘+E)");
     expect(dialog.textContent).toContain("calc sheet (PDF)");
-    expect(within(dialog).getByLabelText("Type the workspace's name, Booster station 4, to confirm")).toBeTruthy();
+    expect(within(dialog).getByLabelText("Type the workspace’s name, “Booster station 4”, to confirm")).toBeTruthy();
   });
 
   it("refuses a name that does not match under the field, sends nothing, and keeps what was typed", async () => {
     const user = userEvent.setup();
     show();
     await user.click(screen.getByRole("button", { name: "Delete workspace…" }));
-    const field = screen.getByLabelText("Type the workspace's name, Booster station 4, to confirm") as HTMLInputElement;
+    const field = screen.getByLabelText("Type the workspace’s name, “Booster station 4”, to confirm") as HTMLInputElement;
     await user.type(field, "Booster station");
     await user.click(screen.getByRole("button", { name: "Delete the workspace" }));
     expect(apiFetch).not.toHaveBeenCalled();
@@ -73,7 +73,7 @@ describe("deleting a workspace", () => {
     const user = userEvent.setup();
     show();
     await user.click(screen.getByRole("button", { name: "Delete workspace…" }));
-    await user.type(screen.getByLabelText("Type the workspace's name, Booster station 4, to confirm"), "Booster station 4");
+    await user.type(screen.getByLabelText("Type the workspace’s name, “Booster station 4”, to confirm"), "Booster station 4");
     await user.click(screen.getByRole("button", { name: "Delete the workspace" }));
     await vi.waitFor(() => expect(router.push).toHaveBeenCalledWith(`/workspaces?deleted=${WS}`));
     expect(apiFetch).toHaveBeenCalledWith(`/api/workspaces/${WS}`, { method: "DELETE", body: { confirmName: "Booster station 4" } });
@@ -84,7 +84,7 @@ describe("deleting a workspace", () => {
     const user = userEvent.setup();
     show();
     await user.click(screen.getByRole("button", { name: "Delete workspace…" }));
-    const field = screen.getByLabelText("Type the workspace's name, Booster station 4, to confirm") as HTMLInputElement;
+    const field = screen.getByLabelText("Type the workspace’s name, “Booster station 4”, to confirm") as HTMLInputElement;
     await user.type(field, "Booster station 4");
     await user.click(screen.getByRole("button", { name: "Delete the workspace" }));
     await vi.waitFor(() => expect(field.getAttribute("aria-invalid")).toBe("true"));

@@ -38,7 +38,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
     >
       {account === "deleted" ? (
         <div className="mb-4">
-          <Notice tone="success">Your account was deleted, and a mail says so at its address. What you did in shared workspaces stays on their record under your former name.</Notice>
+          <Notice tone="success">Your account was deleted, and a mail to its address says so. What you did in shared workspaces stays on their record, marked as a former member’s.</Notice>
         </div>
       ) : null}
       <SignInForm next={target} defaultEmail={email ?? ""} />
