@@ -111,7 +111,10 @@ export async function lookUpInvitation(token: string): Promise<InvitationView | 
  * What a refused link says, on its page and in the API's 410: which state, and whom to ask. The
  * inviter is named when known, so the reader knows who can send a fresh link.
  */
-export function invitationRefusal(view: Pick<InvitationView, "status" | "workspaceName" | "inviterName">): { title: string; body: string } | null {
+export function invitationRefusal(view: Pick<InvitationView, "status" | "workspaceName" | "inviterName" | "workspaceDeleted">): { title: string; body: string } | null {
+  if (view.workspaceDeleted && view.status !== "used") {
+    return { title: "This workspace was deleted", body: `"${view.workspaceName}" was deleted after this invitation was sent, so there is nothing to join.${view.inviterName ? ` ${view.inviterName} invited you, if you want to ask why.` : ""}` };
+  }
   const ask = view.inviterName ? `${view.inviterName}, who invited you, or another owner of "${view.workspaceName}"` : `an owner of "${view.workspaceName}"`;
   if (view.status === "expired") {
     return { title: "This invitation has expired", body: `Invitation links work for a limited time. Ask ${ask} to send the invitation again; the new mail has a fresh link.` };
@@ -137,7 +140,7 @@ export function invitationStateError(view: InvitationView | null): AppError | nu
   const refusal = invitationRefusal(view);
   if (!refusal || view.status === "pending") return null;
   return new AppError(REFUSAL_CODE[view.status], `${refusal.title}. ${refusal.body}`, {
-    extra: { invitationStatus: view.status, workspaceName: view.workspaceName, inviterName: view.inviterName },
+    extra: { invitationStatus: view.status, workspaceName: view.workspaceName, inviterName: view.inviterName, ...(view.workspaceDeleted ? { workspaceDeleted: true } : {}) },
   });
 }
 

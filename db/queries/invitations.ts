@@ -120,6 +120,8 @@ export type InvitationView = {
   inviterName: string | null;
   expiresAt: Date;
   status: InvitationStatus;
+  /** the workspace was deleted since (its open invitations were withdrawn then) */
+  workspaceDeleted?: boolean;
 };
 
 /** What an invitation link leads to (for its page), by the hash of the link's token. */
@@ -135,14 +137,15 @@ export async function findInvitation(tokenHash: string): Promise<InvitationView 
       expiresAt: invitation.expiresAt,
       acceptedAt: invitation.acceptedAt,
       withdrawnAt: invitation.withdrawnAt,
+      deletedAt: workspace.deletedAt,
     })
     .from(invitation)
     .innerJoin(workspace, eq(workspace.id, invitation.workspaceId))
     .leftJoin(user, eq(user.id, invitation.invitedBy))
     .where(eq(invitation.tokenHash, tokenHash));
   if (!row) return null;
-  const { acceptedAt: _accepted, withdrawnAt: _withdrawn, ...rest } = row;
-  return { ...rest, status: statusOf(row) };
+  const { acceptedAt: _accepted, withdrawnAt: _withdrawn, deletedAt, ...rest } = row;
+  return { ...rest, status: statusOf(row), ...(deletedAt ? { workspaceDeleted: true } : {}) };
 }
 
 /**

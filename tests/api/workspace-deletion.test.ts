@@ -6,6 +6,7 @@ import { and, arrayContains, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import * as workspaceRoute from "@/app/api/workspaces/[id]/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
+import * as invitationRoute from "@/app/api/invitations/[token]/route";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as sketchUploadsRoute from "@/app/api/sketches/[id]/uploads/route";
 import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
@@ -152,6 +153,11 @@ describe("deleting a workspace", () => {
     }
     const [inv] = await db.select().from(invitation).where(and(eq(invitation.workspaceId, ws), eq(invitation.tokenHash, hashInvitationToken(invitationToken))));
     expect(inv.withdrawnAt).not.toBeNull();
+    // the link says why it no longer works
+    const link = await call(invitationRoute.GET, { params: { token: invitationToken } });
+    expect(link.status).toBe(410);
+    expect(link.body.error).toMatchObject({ code: "invitation_withdrawn", workspaceDeleted: true, workspaceName: "Pump house 7" });
+    expect(link.body.error.message).toBe('This workspace was deleted. "Pump house 7" was deleted after this invitation was sent, so there is nothing to join. Olivia Closer invited you, if you want to ask why.');
     const again = await remove(ws, olivia, "Pump house 7");
     expect(again.status).toBe(404);
   });
