@@ -30,6 +30,8 @@ export function auditSentence(e: AuditEntry): string {
       return d.alreadyMember ? "used an invitation (already a member)" : `joined as ${str(d.role)} through an invitation`;
     case "member.role_change":
       return `changed the role of ${who} from ${str(d.from)} to ${str(d.to)}`;
+    case "member.leave":
+      return d.accountDeleted ? "left the workspace: they deleted their account" : "left the workspace";
     case "member.remove":
       return `removed ${who}${d.role ? ` (${str(d.role)})` : ""}`;
     case "workspace.create":
