@@ -5,7 +5,7 @@ import PDFDocument from "pdfkit";
 import SVGtoPDF from "svg-to-pdfkit";
 import { renderSketchSvg } from "@/canvas/render/svg";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
-import { parameterWords } from "@/canvas/studies/display";
+import { parameterWords, typedValueWords } from "@/canvas/studies/display";
 import {
   ASSUMPTIONS,
   CAUTIONS,
@@ -249,9 +249,9 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   if (hasCases) {
     heading("Operating cases and combinations");
     for (const c of parsed.file.cases ?? []) {
-      const over = Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${v}`);
+      const over = Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${typedValueWords(v)}`);
       // a load group's factor scales its loads; the flow factor scales ṁ and V, so momentum flux by f²
-      const fac = Object.entries(c.factors ?? {}).map(([k, v]) => `loads of group “${k}” × ${v}`);
+      const fac = Object.entries(c.factors ?? {}).map(([k, v]) => `loads of group “${k}” × ${typedValueWords(v)}`);
       const f = c.flowFactor;
       const flow = f !== undefined && f !== 1 ? [`flow factor ${f} (every port's ṁ and V × ${f}, momentum flux × ${Number((f * f).toPrecision(4))})`] : [];
       const bits = [...over, ...fac, ...flow, ...(c.onlyInCombinations ? ["a load case, solved only in the combinations that name it"] : [])];
@@ -318,7 +318,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     const intro: string[] = [];
     // a case that sets the swept parameter itself: the sweep's values stand in for the case's
     const overridden = sw.case ? parsed.file.cases?.find((c) => c.id === sw.case)?.parameters?.[sw.parameter] : undefined;
-    if (overridden !== undefined) intro.push(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${overridden}); everything else is as in the case.`);
+    if (overridden !== undefined) intro.push(`The sweep's values of ${sw.parameter} stand in for the case's own (${sw.parameter} = ${typedValueWords(overridden)}); everything else is as in the case.`);
     // a case's own flow factor is scaled by the swept one, not replaced (solver/sweep.ts)
     const ownFlow = sw.case && sw.parameter === FLOW_FACTOR ? parsed.file.cases?.find((c) => c.id === sw.case)?.flowFactor : undefined;
     if (ownFlow !== undefined && ownFlow !== 1) intro.push(`The sweep's flow factor multiplies the case's own (flow × ${ownFlow}): each point runs the flow × ${ownFlow}·f; everything else is as in the case.`);

@@ -8,7 +8,7 @@ import type { CaseFile, CombinationFile, SketchFile, SweepFile, UnderlayFile } f
 import { DEFAULT_REQUIREMENTS } from "@/solver/stability";
 import { stateWord } from "@/solver/report";
 import { describeQuantity } from "@/solver/quantity";
-import { parameterWords, sweepRangeWords, sweptUnitIn } from "@/canvas/studies/display";
+import { parameterWords, sweepRangeWords, sweptUnitIn, typedValueWords } from "@/canvas/studies/display";
 import type { FieldError } from "@/solver/types";
 import { FOOT_M, LBF_N } from "@/solver/constants";
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from "@/solver/units";
@@ -245,7 +245,7 @@ const num = (x: number) => formatNumber(x, 6);
 
 function caseText(c: CaseFile): string {
   const bits = [
-    ...Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${v}`),
+    ...Object.entries(c.parameters ?? {}).map(([k, v]) => `${k} = ${typedValueWords(v)}`),
     ...Object.entries(c.factors ?? {}).map(([k, v]) => `${k} × ${num(v)}`),
     ...(c.flowFactor !== undefined && c.flowFactor !== 1 ? [`flow × ${num(c.flowFactor)}`] : []),
     ...(c.onlyInCombinations ? ["only in combinations"] : []),

@@ -117,7 +117,7 @@ describe("a case that is the sketch as drawn", () => {
     expect(text).toContain("• Lance aimed down at −75° (tank foot), as drawn — factor of safety against overturning about rear wheels (braked) 1.311, below the required 1.5");
     expect(text).toContain("• Lance raised to −50° — Washing cart tips; factor of safety against overturning about rear wheels (braked) 0.9078");
     expect(text).toContain("Case: Lance aimed down at −75° (tank foot), as drawn");
-    expect(text).toContain("Lance aimed down at −75° (tank foot), as drawn: theta = -75 deg");
+    expect(text).toContain("Lance aimed down at −75° (tank foot), as drawn: theta = −75 deg");
     expect(text).not.toContain("Case: As drawn");
     expect(text).not.toContain("Factors of safety as drawn:");
     // the v3 sheet draws the lance raised: that case is the one said to be as drawn
