@@ -158,7 +158,8 @@ export default function SketchCanvas({ interaction, onController }: SketchCanvas
   }, [stores, interaction]);
 
   // a whole other sketch (an example, an import, or the one they replaced, back with undo) is fitted into view
-  useEffect(() => followFitRequests(stores), [stores]);
+  // (and, still as a fit left it, once more when the first result brings the reactions' arrows)
+  useEffect(() => followFitRequests(stores, () => interaction.getState().dragging), [stores, interaction]);
 
   // the pointer controller and its native listeners (wheel must not be passive); all outside render
   useEffect(() => {
