@@ -18,18 +18,20 @@ export interface EditorStores {
 const Ctx = createContext<EditorStores | null>(null);
 
 export function createSceneStore(editor: EditorStore, analysis: AnalysisStore): StoreApi<Scene> {
-  return createStore<Scene>(() => buildScene(editor.getState().sketch, analysis.getState().fieldValues));
+  return createStore<Scene>(() => buildScene(editor.getState().sketch, analysis.getState().fieldValues, analysis.getState()));
 }
 
-/** Keep a scene store following the sketch and the latest expression values. */
+/** Keep a scene store following the sketch, the latest expression values, and the gravity
+ *  direction the legend says (the shown result's). */
 export function linkScene(editor: EditorStore, analysis: AnalysisStore, scene: StoreApi<Scene>): () => void {
-  const update = () => scene.setState(buildScene(editor.getState().sketch, analysis.getState().fieldValues), true);
+  const update = () => scene.setState(buildScene(editor.getState().sketch, analysis.getState().fieldValues, analysis.getState()), true);
   update();
   const a = editor.subscribe((s, prev) => {
     if (s.sketch !== prev.sketch) update();
   });
   const b = analysis.subscribe((s, prev) => {
-    if (s.fieldValues !== prev.fieldValues) update();
+    const legend = (a: Analysis) => (a.shown ? a.shownSketch?.gravityAngle : null);
+    if (s.fieldValues !== prev.fieldValues || legend(s) !== legend(prev)) update();
   });
   return () => {
     a();

@@ -37,7 +37,7 @@ export function followFitRequests(stores: EditorStores, busy: () => boolean = ()
     }
     owed = false;
     if (!isFitted(s.view) || !s.sketch.bodies.length) return;
-    s.setView(fitScene(buildScene(s.sketch, a.fieldValues), s.viewport.width, s.viewport.height, { result: a.shown, units: s.units }));
+    s.setView(fitScene(buildScene(s.sketch, a.fieldValues, a), s.viewport.width, s.viewport.height, { result: a.shown, units: s.units }));
   };
   const tryFit = () => {
     const s = stores.editor.getState();
@@ -46,7 +46,7 @@ export function followFitRequests(stores: EditorStores, busy: () => boolean = ()
     if (a.sketch !== s.sketch) return; // the analysis will call again when it has this sketch
     done = s.fitRequest;
     // built here rather than read from the scene store, which may not have heard of the change yet
-    const scene = buildScene(s.sketch, a.fieldValues);
+    const scene = buildScene(s.sketch, a.fieldValues, a);
     s.setView(fitScene(scene, s.viewport.width, s.viewport.height, { result: a.shown, units: s.units }));
   };
   const stopEditor = stores.editor.subscribe((s, prev) => {

@@ -235,8 +235,21 @@ interface CacheEntry {
 }
 const cache = new WeakMap<AnyElement, CacheEntry>();
 
-/** The numeric scene of a sketch; unchanged elements keep their scene objects. */
-export function buildScene(file: SketchFile, fv: FieldValues = NO_VALUES): Scene {
+/** What the canvas's legend is drawn from: the result on screen and the numeric sketch it is of
+ *  (the analysis store's `shown` and `shownSketch`). */
+export interface ShownResult {
+  shown: unknown;
+  shownSketch: { gravityAngle?: number } | null;
+}
+
+/**
+ * The numeric scene of a sketch; unchanged elements keep their scene objects. Given the result on
+ * screen (`onScreen`), the legend's rows are those the legend draws: gravity's direction as the
+ * shown result's sketch has it (the last good one while a typed direction holds an error; none
+ * with no result), so the fit keeps room for the row the legend shows. Without it, the sketch's
+ * own direction.
+ */
+export function buildScene(file: SketchFile, fv: FieldValues = NO_VALUES, onScreen?: ShownResult): Scene {
   const byId = new Map<string, SceneElement>();
   const bodies: SceneBody[] = [];
   const items: SceneItem[] = [];
@@ -273,7 +286,7 @@ export function buildScene(file: SketchFile, fv: FieldValues = NO_VALUES): Scene
   const itemIds = items.map((i) => i.id);
   if (!sameIds(bodyIds, lastBodyIds)) lastBodyIds = bodyIds;
   if (!sameIds(itemIds, lastItemIds)) lastItemIds = itemIds;
-  const g = typeof file.gravityAngle === "number" ? file.gravityAngle : fv.values.get("gravityAngle");
+  const g = onScreen ? (onScreen.shown ? onScreen.shownSketch?.gravityAngle : undefined) : typeof file.gravityAngle === "number" ? file.gravityAngle : fv.values.get("gravityAngle");
   const legendRows = gravityNote(g) ? 1 : 0;
   return { bodies, items, byId, bodyIds: lastBodyIds, itemIds: lastItemIds, ...(legendRows ? { legendRows } : {}) };
 }
