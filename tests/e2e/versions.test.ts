@@ -282,4 +282,26 @@ describe("versioned sketches in the browser", () => {
     expect(await form.getByLabel("Notes").inputValue()).toBe("Wall thickness checked at the outlet weld.");
     await shot(drafter, "versions-11-kept-work-merged");
   });
+  it("the lead makes v2 the latest again from the history: a new version with v2's drawing, the sketch's name kept", async () => {
+    const lead = await as("owner");
+    await lead.goto(`${BASE_URL}/workspaces/${ws}/sketches/${sketchId}`);
+    await lead.getByTestId("version-row-2").waitFor();
+    const before = (await (await lead.request.get(`${BASE_URL}/api/sketches/${sketchId}`)).json()).sketch;
+    const next = before.latestVersion + 1;
+    await lead.getByRole("button", { name: "Make version 2 the latest again" }).click();
+    const dialog = lead.getByTestId("restore-dialog");
+    expect(await dialog.getByTestId("restore-what").textContent()).toContain(`saved as a new version, v${next}, on top of v${before.latestVersion}`);
+    await dialog.getByLabel("Why (the new version's message)").fill("Back to v2 for the tender");
+    await dialog.getByRole("button", { name: `Save as v${next}` }).click();
+    await lead.getByTestId("restored-notice").waitFor();
+    await lead.getByTestId(`version-row-${next}`).waitFor();
+    expect(await lead.getByTestId(`version-row-${next}`).textContent()).toContain("Back to v2 for the tender");
+    await shot(lead, "versions-12-restored");
+    const version = async (n: number) => (await (await lead.request.get(`${BASE_URL}/api/sketches/${sketchId}/versions/${n}`)).json()).version;
+    const [v2, made] = [await version(2), await version(next)];
+    // the same drawing as v2, under the name the sketch has now
+    expect({ ...made.document, title: v2.document.title }).toEqual(v2.document);
+    expect(made.document.title).toBe(before.title);
+    expect(made.largestReaction).toBe(v2.largestReaction);
+  });
 });
