@@ -119,6 +119,7 @@ function StatusLine() {
       : "Esc: back to selecting · Alt: no snapping";
   const touchHint = tool.kind === "select" && !readOnly ? "Drag: move · two fingers: zoom and pan · ? lists the rest" : tool.kind === "select" ? hint : "two fingers: zoom and pan";
   const said = notice !== null || keysTool !== null;
+  const saying = notice ?? (keysTool !== null && touchTool !== null ? <KeysOrTouch keys={keysTool} touch={touchTool} /> : null);
   // a notice longer than the line's two lines: "More" opens the whole of it over the drawing, for
   // keyboard and touch users too (a tooltip is for a mouse only); the line itself never grows, so
   // the drawing does not move while a drag keeps saying things
@@ -141,7 +142,7 @@ function StatusLine() {
     // take both, and on a narrow window it takes the whole width from the hint
     <div className="relative flex h-9 shrink-0 items-center gap-3 border-t border-rule bg-paper px-3 text-[11.5px] leading-[15px] pointer-coarse:h-12" id="canvas-help" onKeyDown={closeOnEscape}>
       <p ref={noticeRef} className="line-clamp-2 min-w-0 flex-1 text-ink-soft" aria-live="polite" data-testid="notice" title={notice ?? keysTool ?? undefined}>
-        {notice ?? (keysTool !== null && touchTool !== null ? <KeysOrTouch keys={keysTool} touch={touchTool} /> : null)}
+        {saying}
       </p>
       {cut ? (
         <button
@@ -166,7 +167,7 @@ function StatusLine() {
           className="absolute bottom-full left-0 right-0 z-20 max-h-48 overflow-y-auto border-t border-rule bg-paper px-3 py-2 text-[12.5px] leading-snug text-ink shadow-[0_-6px_18px_rgb(var(--shade)/0.12)]"
           data-testid="notice-whole"
         >
-          <p className="max-w-[80ch] whitespace-pre-line">{notice ?? (keysTool !== null && touchTool !== null ? <KeysOrTouch keys={keysTool} touch={touchTool} /> : null)}</p>
+          <p className="max-w-[80ch] whitespace-pre-line">{saying}</p>
         </div>
       ) : null}
       <p className={`line-clamp-2 min-w-0 text-right text-ink-faint ${said ? "max-w-[45%] max-md:hidden" : "max-w-[70%]"}`} title={hint}>
