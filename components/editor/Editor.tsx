@@ -151,7 +151,7 @@ function StatusLine() {
           onClick={() => setWhole(!showWhole)}
           aria-expanded={showWhole}
           aria-controls="notice-whole"
-          aria-label={showWhole ? "Hide the whole message" : "Show the whole message"}
+          aria-label={showWhole ? "Less of the message" : "More of the message"}
           className="h-7 shrink-0 rounded border border-ink/20 px-2 text-[12px] font-medium text-ink hover:border-ink/45 pointer-coarse:h-10 pointer-coarse:px-3"
           data-testid="notice-more"
         >

@@ -149,7 +149,7 @@ export function VersionHistory({
                       Open
                     </Link>
                     {onRestore && v.number !== latest ? (
-                      <Button size="sm" tone="secondary" onClick={() => onRestore(v)} aria-label={`Make version ${v.number} the latest again`} title={`Save v${v.number}'s drawing as a new latest version (nothing is deleted)`}>
+                      <Button size="sm" tone="secondary" onClick={() => onRestore(v)} aria-label={`Restore version ${v.number}`} title={`Save v${v.number}'s drawing as a new latest version (nothing is deleted)`}>
                         Restore
                       </Button>
                     ) : null}

@@ -47,7 +47,7 @@ describe("a notice longer than the status line", () => {
     await user.keyboard("{Delete}");
     const notice = screen.getByTestId("notice");
     await waitFor(() => expect(notice).toHaveTextContent(WHOLE));
-    const more = await screen.findByRole("button", { name: "Show the whole message" });
+    const more = await screen.findByRole("button", { name: "More of the message" });
     expect(more).toHaveTextContent("More");
     expect(more).toHaveAttribute("aria-expanded", "false");
     expect(screen.queryByRole("region", { name: "The whole message" })).toBeNull();
@@ -59,7 +59,7 @@ describe("a notice longer than the status line", () => {
     expect(whole).toHaveTextContent(WHOLE);
     expect(more).toHaveAttribute("aria-expanded", "true");
     expect(more).toHaveAttribute("aria-controls", whole.id);
-    expect(more).toHaveAccessibleName("Hide the whole message");
+    expect(more).toHaveAccessibleName("Less of the message");
     // laid over the drawing: the status line keeps its height, the live region its clamp
     expect(whole.className).toMatch(/\babsolute\b/);
     expect(whole.className).toMatch(/\bbottom-full\b/);
@@ -76,7 +76,7 @@ describe("a notice longer than the status line", () => {
     // a click opens it too, and a second one folds it
     await user.click(more);
     expect(screen.getByRole("region", { name: "The whole message" })).toHaveTextContent(WHOLE);
-    await user.click(screen.getByRole("button", { name: "Hide the whole message" }));
+    await user.click(screen.getByRole("button", { name: "Less of the message" }));
     expect(screen.queryByRole("region", { name: "The whole message" })).toBeNull();
   }, 20_000);
 
@@ -85,7 +85,7 @@ describe("a notice longer than the status line", () => {
     await renderEditor(skid());
     await user.click(outline().getByRole("button", { name: /front pad/ }));
     await user.keyboard("{Delete}");
-    await user.click(await screen.findByRole("button", { name: "Show the whole message" }));
+    await user.click(await screen.findByRole("button", { name: "More of the message" }));
     expect(screen.getByRole("region", { name: "The whole message" })).toBeInTheDocument();
     // Undo says a short thing: the button and the open text go with the long notice
     await user.keyboard("{Control>}z{/Control}");
@@ -95,7 +95,7 @@ describe("a notice longer than the status line", () => {
     // the same delete again: cut short, folded
     await user.click(outline().getByRole("button", { name: /front pad/ }));
     await user.keyboard("{Delete}");
-    expect(await screen.findByRole("button", { name: "Show the whole message" })).toHaveAttribute("aria-expanded", "false");
+    expect(await screen.findByRole("button", { name: "More of the message" })).toHaveAttribute("aria-expanded", "false");
     expect(screen.queryByRole("region", { name: "The whole message" })).toBeNull();
   }, 20_000);
 });

@@ -52,12 +52,12 @@ describe("restoring a version from the history", () => {
     vi.stubGlobal("fetch", vi.fn(async () => jsonResponse({ versions: VERSIONS })));
     const { unmount } = renderPage({ canSave: true });
     await screen.findByTestId("version-row-1");
-    expect(within(screen.getByTestId("version-row-3")).queryByRole("button", { name: /latest again/ })).toBeNull();
-    expect(within(screen.getByTestId("version-row-1")).getByRole("button", { name: "Make version 1 the latest again" })).toBeTruthy();
+    expect(within(screen.getByTestId("version-row-3")).queryByRole("button", { name: /^Restore version/ })).toBeNull();
+    expect(within(screen.getByTestId("version-row-1")).getByRole("button", { name: "Restore version 1" })).toBeTruthy();
     unmount();
     renderPage({ canSave: false });
     await screen.findByTestId("version-row-1");
-    expect(screen.queryByRole("button", { name: /latest again/ })).toBeNull();
+    expect(screen.queryByRole("button", { name: /^Restore version/ })).toBeNull();
   });
 
   it("says what happens and saves on top of the latest with the message given", async () => {
@@ -74,7 +74,7 @@ describe("restoring a version from the history", () => {
     );
     const restored = vi.fn();
     renderPage({ canSave: true, onRestored: restored });
-    await userEvent.click(await screen.findByRole("button", { name: "Make version 1 the latest again" }));
+    await userEvent.click(await screen.findByRole("button", { name: "Restore version 1" }));
     const dialog = screen.getByTestId("restore-dialog");
     expect(within(dialog).getByTestId("restore-what").textContent).toBe(
       "Its drawing is saved as a new version, v4, on top of v3. v2 to v3 stay in the history: nothing is deleted. The sketch keeps its name, “Bend DN150”. The new version starts its own sign-off.",
@@ -96,7 +96,7 @@ describe("restoring a version from the history", () => {
       ),
     );
     renderPage({ canSave: true });
-    await userEvent.click(await screen.findByRole("button", { name: "Make version 2 the latest again" }));
+    await userEvent.click(await screen.findByRole("button", { name: "Restore version 2" }));
     const dialog = screen.getByTestId("restore-dialog");
     await userEvent.type(within(dialog).getByLabelText("Why (the new version's message)"), "wall back");
     await userEvent.click(within(dialog).getByRole("button", { name: "Save as v4" }));

@@ -288,7 +288,7 @@ describe("versioned sketches in the browser", () => {
     await lead.getByTestId("version-row-2").waitFor();
     const before = (await (await lead.request.get(`${BASE_URL}/api/sketches/${sketchId}`)).json()).sketch;
     const next = before.latestVersion + 1;
-    await lead.getByRole("button", { name: "Make version 2 the latest again" }).click();
+    await lead.getByRole("button", { name: "Restore version 2" }).click();
     const dialog = lead.getByTestId("restore-dialog");
     expect(await dialog.getByTestId("restore-what").textContent()).toContain(`saved as a new version, v${next}, on top of v${before.latestVersion}`);
     await dialog.getByLabel("Why (the new version's message)").fill("Back to v2 for the tender");
