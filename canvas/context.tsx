@@ -21,6 +21,9 @@ export function createSceneStore(editor: EditorStore, analysis: AnalysisStore): 
   return createStore<Scene>(() => buildScene(editor.getState().sketch, analysis.getState().fieldValues, analysis.getState()));
 }
 
+/** The gravity direction the legend says: the shown result's sketch's (null with no result). */
+const legendGravity = (a: Analysis) => (a.shown ? a.shownSketch?.gravityAngle : null);
+
 /** Keep a scene store following the sketch, the latest expression values, and the gravity
  *  direction the legend says (the shown result's). */
 export function linkScene(editor: EditorStore, analysis: AnalysisStore, scene: StoreApi<Scene>): () => void {
@@ -30,8 +33,7 @@ export function linkScene(editor: EditorStore, analysis: AnalysisStore, scene: S
     if (s.sketch !== prev.sketch) update();
   });
   const b = analysis.subscribe((s, prev) => {
-    const legend = (a: Analysis) => (a.shown ? a.shownSketch?.gravityAngle : null);
-    if (s.fieldValues !== prev.fieldValues || legend(s) !== legend(prev)) update();
+    if (s.fieldValues !== prev.fieldValues || legendGravity(s) !== legendGravity(prev)) update();
   });
   return () => {
     a();
