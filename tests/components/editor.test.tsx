@@ -6,6 +6,7 @@ import { describe, expect, it } from "vitest";
 import { ACTIONS, actionById, shortcutLabel } from "@/canvas/actions";
 import { exampleById } from "@/canvas/examples";
 import { emptySketch } from "@/canvas/model/elements";
+import { CURRENT_VERSION } from "@/solver/schema";
 import { beam, renderEditor, storedSketch } from "./editor-helpers";
 
 
@@ -186,6 +187,24 @@ describe("editor", () => {
     expect(dialog).toHaveTextContent("bodies[0].outline");
     expect(screen.getByTestId("sketch-title")).toHaveTextContent("Beam on a pin and a contact");
     expect(mem.get("counterpoise:scratch-sketch:v1")).toBe(before);
+  });
+
+  it("opens a file of the first format version brought up to date, says so, and Undo gives the sketch back", async () => {
+    const { mem } = await renderEditor(beam());
+    await waitFor(() => expect(storedSketch(mem)).toBeDefined());
+    // a version-1 file (before load cases): one body on a pin, nothing else
+    const old = { format: "counterpoise.sketch", version: 1, title: "Crate on a pin", bodies: [{ id: "c", label: "Crate", mass: "40 kg", outline: [[0, 0], [1, 0], [1, 1], [0, 1]] }], supports: [{ id: "p", body: "c", kind: "pin", at: [0.5, 0] }], loads: [], ports: [], massSources: [] };
+    const input = screen.getByTestId("import-input") as HTMLInputElement;
+    const file = new File([JSON.stringify(old)], "crate-v1.json", { type: "application/json" });
+    await act(async () => {
+      fireEvent.change(input, { target: { files: [file] } });
+    });
+    expect(screen.queryByRole("alertdialog")).toBeNull();
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent("Crate on a pin");
+    expect(screen.getByTestId("notice")).toHaveTextContent("Opened crate-v1.json (format version 1, brought up to date).");
+    await waitFor(() => expect(storedSketch(mem)).toMatchObject({ version: CURRENT_VERSION, title: "Crate on a pin" }));
+    await userEvent.setup().click(screen.getByTestId("undo"));
+    expect(screen.getByTestId("sketch-title")).toHaveTextContent("Beam on a pin and a contact");
   });
 });
 

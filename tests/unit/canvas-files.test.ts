@@ -31,6 +31,21 @@ describe("import", () => {
     const o = importSketchText(JSON.stringify(orphan));
     expect(o).toMatchObject({ ok: false, errors: [{ path: "supports[0].body", message: expect.stringMatching(/ghost/) }] });
   });
+  it("brings a file of the first format version up to date, saying which version it was, and it solves as written", () => {
+    // a version-1 file: no cases, no underlay, no β, no gravity direction (solver/migrations)
+    const v1 = { format: "counterpoise.sketch", version: 1, title: "Crate on a pin and a pad", bodies: [{ id: "c", mass: "100 kg", outline: [[0, 0], [2, 0], [2, 1], [0, 1]] }], supports: [{ id: "pin", body: "c", kind: "pin", at: [0, 0] }, { id: "pad", body: "c", kind: "contact", at: [2, 0], angle: 90 }], loads: [], ports: [], massSources: [] };
+    const out = importSketchText(JSON.stringify(v1));
+    expect(out).toMatchObject({ ok: true, migratedFrom: [1, 2, 3, 4, 5].slice(0, CURRENT_VERSION - 1), sketch: { version: CURRENT_VERSION, title: "Crate on a pin and a pad" } });
+    if (!out.ok) return;
+    // the weight 100 kg × 9.80665 m/s² (standard gravity, ISO 80000-3) shared by two supports 2 m
+    // apart with the centre of gravity halfway: 490.3 N each (hand calculation, moments about the pin)
+    const r = solveFile(out.sketch);
+    expect(r.ok).toBe(true);
+    if (r.ok) {
+      expect(r.reactions.pad.fy).toBeCloseTo(490.3325, 3);
+      expect(r.reactions.pin.fy).toBeCloseTo(490.3325, 3);
+    }
+  });
   it("keeps a file whose expressions have errors: those show at their fields", () => {
     const f = good();
     f.ports[0].pressure = "-0.4 bar + zebra";
