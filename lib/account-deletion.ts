@@ -8,7 +8,7 @@ import { AppError } from "./errors";
 import { sendMail } from "./mail";
 import { accountDeletedMail } from "./mail-templates";
 import { createRateLimiter } from "./rate-limit";
-import { deleteWorkspace } from "./workspace-deletion";
+import { afterWorkspaceDeleted, deleteWorkspaceIn, type WorkspaceDeleted } from "./workspace-deletion";
 
 type Actor = { id: string; email: string; name: string };
 
@@ -66,12 +66,15 @@ async function checkPassword(password: string, headers: Headers) {
 
 /**
  * Delete the signed-in person's account, their password typed again. Refused while they are the last
- * owner of a shared workspace. Workspaces where they are alone go first (through `deleteWorkspace`,
- * so each leaves its tombstone and audit record), then in one transaction they leave every other
- * workspace (a `member.leave` record each) and their row becomes a tombstone: the name
+ * owner of a shared workspace. All or nothing, in one transaction once the password is checked: the
+ * owners around them are locked, the plan is read again (someone may have joined or stepped down
+ * since the first look) and any refusal comes before anything is deleted; then the workspaces where
+ * they are alone go (as an owner deletes a workspace: tombstone and audit records), they leave every
+ * other workspace (a `member.leave` record each) and their row becomes a tombstone: the name
  * "former member: <name>" stays on their versions, comments and sign-offs, the address is freed,
  * the password, sessions and reset links go. better-auth's own deleteUser removes the row (and with
- * it every name on the record), so it is not used. A mail to the old address says it happened.
+ * it every name on the record), so it is not used. After the commit the deleted workspaces' files
+ * leave the store, and a mail to the old address says it happened.
  */
 export async function deleteAccount(actor: Actor, password: string, headers: Headers) {
   const first = await accountDeletionPlan(actor.id);
@@ -79,18 +82,14 @@ export async function deleteAccount(actor: Actor, password: string, headers: Hea
   await attempts.hit(actor.id, 10, 15 * 60);
   await checkPassword(password, headers);
 
-  const workspacesDeleted: string[] = [];
-  for (const w of first.deleted) {
-    const out = await deleteWorkspace(w.id, actor, w.name);
-    workspacesDeleted.push(out.name);
-  }
+  const removed: WorkspaceDeleted[] = [];
   const out = await db.transaction(async (tx) => {
     await lockOwnersAround(actor.id, tx);
     const now = planOf(await workspacesHeldBy(actor.id, tx));
-    // someone joined a workspace of theirs, or an owner stepped down, since the first look
+    // someone joined a workspace of theirs, or an owner stepped down, since the first look: nothing is deleted yet
     if (now.blocking.length) throw lastOwnerRefusal(now.blocking);
-    // a workspace where they became the only member meanwhile would be left empty: ask again
-    if (now.deleted.length) throw new AppError("conflict", `You became the only member of ${quoted(now.deleted.map((w) => w.name))} meanwhile: try again to delete it with your account.`);
+    for (const w of now.deleted) removed.push(await deleteWorkspaceIn(tx, w.id, actor, w.name, { onlyMember: true }));
+    const workspacesDeleted = removed.map((d) => d.workspace.name);
     const leaving = now.left;
     for (const w of leaving) {
       await recordAudit(
@@ -113,7 +112,8 @@ export async function deleteAccount(actor: Actor, password: string, headers: Hea
     );
     return { deleted: true as const, workspacesDeleted, left: leaving.map((w) => w.name) };
   });
-  await sendMail(accountDeletedMail({ to: actor.email, name: actor.name, workspacesDeleted, url: appUrl() })).catch((err: unknown) => {
+  for (const d of removed) await afterWorkspaceDeleted(d, actor);
+  await sendMail(accountDeletedMail({ to: actor.email, name: actor.name, workspacesDeleted: out.workspacesDeleted, url: appUrl() })).catch((err: unknown) => {
     console.error(`[mail] could not tell ${actor.email} that their account was deleted:`, err instanceof Error ? err.message : err);
   });
   return out;

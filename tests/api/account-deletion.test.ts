@@ -2,7 +2,7 @@
 // is the last owner of a workspace others are in; workspaces only they are in go with it; their row
 // stays as a tombstone so their name stays on what they did ("former member: <name>"), and their
 // password, sessions and memberships go.
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import * as accountRoute from "@/app/api/account/route";
 import * as membersRoute from "@/app/api/workspaces/[id]/members/[userId]/route";
@@ -10,7 +10,7 @@ import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/commen
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
 import { db } from "@/db";
-import { account, auditEvent, membership, session, user, workspace } from "@/db/schema";
+import { account, auditEvent, membership, session, sketch, user, workspace } from "@/db/schema";
 import { getAuth } from "@/lib/auth";
 import { call, makeAccount, makeWorkspace, PASSWORD, waitForMail, withMailFake, type Json, type Person } from "./helpers";
 import { postSketch } from "./sketch-setup";
@@ -117,5 +117,58 @@ describe("deleting an account", () => {
     expect(out.status).toBe(200);
     expect(out.body.account.left).toEqual(["Penstock 3"]);
     expect(await db.select({ userId: membership.userId, role: membership.role }).from(membership).where(eq(membership.workspaceId, shared))).toEqual([{ userId: vera.id, role: "owner" }]);
+  });
+});
+
+describe("a deletion refused at its last look", () => {
+  it("deletes nothing, not even the workspace only they were in, when the other owner steps down while it waits", async () => {
+    const ada = await makeAccount("acct-del-race-ada", { name: "Ada Sizer" });
+    const ben = await makeAccount("acct-del-race-ben", { name: "Ben Checker" });
+    const cal = await makeAccount("acct-del-race-cal", { name: "Cal Drafter" });
+    const shared = await makeWorkspace("Spillway 2", [
+      [ada, "owner"],
+      [ben, "owner"],
+      [cal, "editor"],
+    ]);
+    const mine = await personalOf(ada.id);
+    const solo = await postSketch(mine.id, ada, "Gate hoist frame", "pipe-bend-anchor");
+
+    // Ben steps down in a transaction that holds his membership row until the deletion waits on it
+    let release!: () => void;
+    const released = new Promise<void>((resolve) => (release = resolve));
+    let blockerPid!: number;
+    let stepped!: () => void;
+    const steppedDown = new Promise<void>((resolve) => (stepped = resolve));
+    const blocker = db.transaction(async (tx) => {
+      await tx.update(membership).set({ role: "editor" }).where(and(eq(membership.workspaceId, shared), eq(membership.userId, ben.id)));
+      blockerPid = Number((await tx.execute<{ pid: number }>(sql`select pg_backend_pid() as pid`)).rows[0].pid);
+      stepped();
+      await released;
+    });
+    await steppedDown;
+    const deletion = remove(ada, { password: PASSWORD });
+    // the deletion's transaction waits for Ben's row (its first look, before the lock, still saw two owners)
+    for (;;) {
+      const { rows } = await db.execute<{ n: number }>(sql`select count(*)::int as n from pg_stat_activity where ${blockerPid}::int = any(pg_blocking_pids(pid))`);
+      if (Number(rows[0].n) > 0) break;
+      await new Promise((resolve) => setTimeout(resolve, 20));
+    }
+    release();
+    await blocker;
+
+    const out = await deletion;
+    expect(out.status).toBe(409);
+    expect(out.body.error.code).toBe("last_owner");
+    expect(out.body.error.workspaces).toEqual([{ id: shared, name: "Spillway 2", members: 3 }]);
+    // all or nothing: the solo workspace and its sketch are still there, and so is the account
+    const [ws] = await db.select().from(workspace).where(eq(workspace.id, mine.id));
+    expect(ws.deletedAt).toBeNull();
+    const [kept] = await db.select().from(sketch).where(eq(sketch.id, solo));
+    expect(kept.title).toBe("Gate hoist frame");
+    expect(await db.select().from(auditEvent).where(and(eq(auditEvent.workspaceId, mine.id), eq(auditEvent.action, "workspace.delete")))).toEqual([]);
+    const [row] = await db.select().from(user).where(eq(user.id, ada.id));
+    expect(row).toMatchObject({ name: "Ada Sizer", email: ada.email, deletedAt: null });
+    expect((await call(workspacesRoute.GET, { cookie: ada.cookie })).status).toBe(200);
+    expect((await db.select({ role: membership.role }).from(membership).where(and(eq(membership.workspaceId, shared), eq(membership.userId, ada.id))))[0].role).toBe("owner");
   });
 });
