@@ -1,6 +1,6 @@
 import "server-only";
 import { betterAuth } from "better-auth";
-import { APIError } from "better-auth/api";
+import { APIError, createAuthMiddleware, isAPIError } from "better-auth/api";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { db } from "@/db";
 import { ensurePersonalWorkspace } from "@/db/queries/workspaces";
@@ -179,6 +179,9 @@ export function createAuth(overrides: AuthOverrides = {}) {
       // (lib/client-address.ts); the same proxies are named here for calls that pass raw headers.
       ipAddress: { ipAddressHeaders: ["x-forwarded-for"], trustedProxies: trustedProxies() },
     },
+    // account events that leave no row of their own to hook on: signing out on every device (or every
+    // other one) and changing the password go into the audit log once better-auth has done them
+    hooks: { after: createAuthMiddleware(auditAccountEvent) },
     databaseHooks: {
       user: {
         create: {
@@ -204,6 +207,21 @@ export function createAuth(overrides: AuthOverrides = {}) {
       },
     },
   });
+}
+
+/** The audit action of an account route, when it succeeded: see AUDIT_ACTIONS. */
+const ACCOUNT_EVENTS: Record<string, "auth.sign_out_all" | "auth.sign_out_others" | "auth.password_change"> = {
+  "/revoke-sessions": "auth.sign_out_all",
+  "/revoke-other-sessions": "auth.sign_out_others",
+  "/change-password": "auth.password_change",
+};
+
+async function auditAccountEvent(ctx: { path: string; body?: unknown; context: { returned?: unknown; session?: { user: { id: string; email: string } } | null } }) {
+  const action = ACCOUNT_EVENTS[ctx.path];
+  const who = ctx.context.session?.user;
+  if (!action || !who || ctx.context.returned === undefined || isAPIError(ctx.context.returned)) return;
+  const signedOutOthers = action === "auth.password_change" ? (ctx.body as { revokeOtherSessions?: unknown } | undefined)?.revokeOtherSessions === true : undefined;
+  await recordAudit({ action, actorId: who.id, actorEmail: who.email, targetType: "user", targetId: who.id, detail: signedOutOthers === undefined ? {} : { signedOutOthers } });
 }
 
 export type Auth = ReturnType<typeof createAuth>;

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, exists, isNull, lt, lte, or, sql } from "drizzle-orm";
+import { and, desc, eq, exists, inArray, isNull, lt, lte, or, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { auditEvent, membership, user } from "@/db/schema";
@@ -8,6 +8,8 @@ import { actorMay } from "./workspaces";
 const actorUser = alias(user, "actor_user");
 const targetUser = alias(user, "target_user");
 const deletion = alias(auditEvent, "deletion");
+/** A member's signing out on every device, or every other one: shown with the sign-ins, and kept when those are hidden. */
+const SIGN_OUTS = ["auth.sign_out_all", "auth.sign_out_others"];
 
 export type AuditRow = {
   id: number;
@@ -31,8 +33,8 @@ export function withoutHiddenDetail<T extends { detail: Record<string, unknown> 
 }
 
 /**
- * A workspace's audit log, newest first: its own events plus the sign-ins of its current
- * members made since they joined (what they did before is not this workspace's business).
+ * A workspace's audit log, newest first: its own events plus the sign-ins and sign-outs on every
+ * device of its current members made since they joined (what they did before is not this workspace's business).
  * Empty unless the viewer may read it. `before` pages back by event id.
  */
 export async function listAuditEvents(
@@ -67,12 +69,12 @@ export async function listAuditEvents(
     .leftJoin(targetUser, and(eq(auditEvent.targetType, "user"), eq(targetUser.id, auditEvent.targetId)))
     .where(
       and(
-        opts.signIns === "hide"
-          ? eq(auditEvent.workspaceId, workspaceId)
-          : or(
-              eq(auditEvent.workspaceId, workspaceId),
-              and(isNull(auditEvent.workspaceId), eq(auditEvent.action, "auth.sign_in"), memberAtTheTime),
-            ),
+        or(
+          eq(auditEvent.workspaceId, workspaceId),
+          // a member's account events the owners should see: their sign-ins (unless hidden), and
+          // their signing out on every device (a lost laptop, a session someone else may hold)
+          and(isNull(auditEvent.workspaceId), inArray(auditEvent.action, opts.signIns === "hide" ? SIGN_OUTS : ["auth.sign_in", ...SIGN_OUTS]), memberAtTheTime),
+        ),
         opts.before ? lt(auditEvent.id, opts.before) : undefined,
         actorMay(workspaceId, viewerId, "audit.read"),
       ),

@@ -22,6 +22,8 @@ const entry = (action: string, detail: Record<string, unknown> = {}, targetName:
 describe("audit sentences", () => {
   it.each([
     [entry("auth.sign_in"), "signed in"],
+    [entry("auth.sign_out_all"), "signed out on every device"],
+    [entry("auth.sign_out_others"), "signed out every other device"],
     [entry("invitation.create", { email: "c@x.y", role: "checker" }), "invited c@x.y as checker"],
     [entry("invitation.withdraw", { email: "c@x.y" }), "withdrew the invitation of c@x.y"],
     [entry("invitation.accept", { role: "viewer" }), "joined as viewer through an invitation"],
