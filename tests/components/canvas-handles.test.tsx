@@ -22,7 +22,7 @@ import { useShortcuts } from "@/components/editor/useShortcuts";
 import { ActionContextCtx } from "@/components/editor/useActions";
 import { Tray } from "@/components/editor/Tray";
 import { TRAY_MIME } from "@/canvas/konva/interaction";
-import "./editor-helpers";
+import { measuredAs, stage } from "./canvas-support";
 
 /** A frame on a pad, with one of each directed element (invented demo data). */
 function frame(): SketchFile {
@@ -81,7 +81,7 @@ function Keys() {
 
 beforeEach(async () => {
   mocks.push(
-    vi.spyOn(HTMLElement.prototype, "getBoundingClientRect").mockReturnValue({ x: 0, y: 0, left: 0, top: 0, right: SIZE.width, bottom: SIZE.height, ...SIZE, toJSON: () => ({}) } as DOMRect),
+    measuredAs(SIZE.width, SIZE.height),
     vi.spyOn(Konva.Stage.prototype, "getIntersection").mockImplementation(function (this: Konva.Stage, pos: { x: number; y: number }) {
       return handleAt(this, pos);
     } as never),
@@ -105,7 +105,6 @@ afterEach(() => {
 
 const ed = () => editor.getState();
 const el = (id: string) => findElement(ed().sketch, id)!.el as unknown as Record<string, unknown>;
-const stage = () => Konva.stages[Konva.stages.length - 1];
 const screenOf = (p: Vec2) => toScreen(ed().view, p);
 
 function press(at: Vec2, extra: MouseEventInit = {}) {

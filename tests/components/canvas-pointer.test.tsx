@@ -2,21 +2,16 @@
 // back (from the keyboard too); a support dropped on another body attaches to it; handles turn
 // and reshape; tools place; a finger is forgotten when it lifts; a finished drag is autosaved;
 // a dragged body snaps to other bodies; tray items dropped on the canvas place what they show.
-import { useCallback } from "react";
 import { fireEvent, render } from "@testing-library/react";
-import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import type { SketchFile } from "@/solver/schema";
-import { createEditorStore } from "@/canvas/store";
-import { createAnalysisStore, linkAnalysis } from "@/canvas/analysis/store";
-import { createSceneStore, linkScene, type EditorStores } from "@/canvas/context";
 import { createInteractionStore } from "@/canvas/konva/interaction";
-import { createPointerController, type HitInfo } from "@/canvas/konva/pointer";
 import { emptySketch, findElement } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
-import { toolHint, type ActionContext } from "@/canvas/actions";
+import { toolHint } from "@/canvas/actions";
 import { startAutosave } from "@/canvas/autosave";
 import type { SketchPersistence } from "@/canvas/persistence";
-import { useShortcuts } from "@/components/editor/useShortcuts";
+import { HarnessKeys, pointerHarness } from "./pointer-harness";
 
 function sketch(): SketchFile {
   return {
@@ -27,44 +22,12 @@ function sketch(): SketchFile {
   };
 }
 
-// view: 100 px per metre, world origin at screen (100, 500)
-const VIEW = { scale: 100, x: 100, y: 500 };
-const screenOf = (x: number, y: number) => ({ clientX: VIEW.x + x * VIEW.scale, clientY: VIEW.y - y * VIEW.scale });
-
-let stores: EditorStores;
-let stops: Array<() => void> = [];
-let hit: HitInfo | null = null;
-let controller: ReturnType<typeof createPointerController>;
-let interaction: ReturnType<typeof createInteractionStore>;
-
-function pointer(type: "pointermove" | "pointerup", x: number, y: number, extra: Partial<PointerEventInit> = {}) {
-  window.dispatchEvent(new MouseEvent(type, { ...screenOf(x, y), bubbles: true, ...extra }));
-}
-function down(x: number, y: number, extra: { shiftKey?: boolean; altKey?: boolean } = {}) {
-  controller.down({ ...screenOf(x, y), button: 0, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, timeStamp: performance.now(), preventDefault() {}, ...extra } as unknown as PointerEvent);
-}
-
-beforeEach(() => {
-  const editor = createEditorStore({ sketch: sketch(), view: VIEW });
-  const analysis = createAnalysisStore();
-  const scene = createSceneStore(editor, analysis);
-  stops = [linkAnalysis(editor, analysis), linkScene(editor, analysis, scene)];
-  stores = { editor, analysis, scene };
-  hit = null;
-  interaction = createInteractionStore();
-  controller = createPointerController({ stores, interaction, container: () => null, hitTest: () => hit });
-});
-afterEach(() => {
-  controller.dispose();
-  stops.forEach((s) => s());
-});
-
-const ed = () => stores.editor.getState();
-const el = (id: string) => findElement(ed().sketch, id)?.el as unknown as Record<string, unknown>;
+const h = pointerHarness(sketch);
+const { ed, el, screenOf, down, pointer, fingerDown, finger } = h;
 
 describe("dragging", () => {
   it("moves the element with the pointer, snapped, as one undo step", () => {
-    hit = { type: "element", id: "s1" };
+    h.hit = { type: "element", id: "s1" };
     down(1, 0);
     expect(ed().selection).toEqual(["s1"]);
     for (const x of [1.1, 1.25, 1.38, 1.52]) pointer("pointermove", x, 0);
@@ -77,11 +40,11 @@ describe("dragging", () => {
   });
 
   it("rolls the drag back on Escape, recording nothing", () => {
-    hit = { type: "element", id: "s1" };
+    h.hit = { type: "element", id: "s1" };
     down(1, 0);
     pointer("pointermove", 1.7, 0.4);
     expect(el("s1").at).not.toEqual([1, 0]);
-    expect(controller.cancel()).toBe(true);
+    expect(h.controller.cancel()).toBe(true);
     expect(el("s1").at).toEqual([1, 0]);
     expect(ed().past).toHaveLength(0);
     pointer("pointerup", 1.7, 0.4);
@@ -89,7 +52,7 @@ describe("dragging", () => {
   });
 
   it("attaches a support dropped on another body to that body, in the same step", () => {
-    hit = { type: "element", id: "s1" };
+    h.hit = { type: "element", id: "s1" };
     down(1, 0);
     pointer("pointermove", 5, 0);
     pointer("pointerup", 5, 0);
@@ -100,7 +63,7 @@ describe("dragging", () => {
   });
 
   it("moves a body with its elements; Alt turns snapping off", () => {
-    hit = { type: "element", id: "b1" };
+    h.hit = { type: "element", id: "b1" };
     down(1, 0.5);
     pointer("pointermove", 1.33, 0.5, { altKey: true });
     pointer("pointerup", 1.33, 0.5, { altKey: true });
@@ -110,7 +73,7 @@ describe("dragging", () => {
   });
 
   it("a click without movement only selects", () => {
-    hit = { type: "element", id: "p1" };
+    h.hit = { type: "element", id: "p1" };
     down(2, 0.5);
     pointer("pointerup", 2, 0.5);
     expect(ed().selection).toEqual(["p1"]);
@@ -126,16 +89,16 @@ describe("dragging a body near another body", () => {
 
   it("lands its nearest corner exactly on the other body's corner, showing the corner mark, as one undo step", () => {
     addOffGrid();
-    hit = { type: "element", id: "b1" };
+    h.hit = { type: "element", id: "b1" };
     down(1, 0.5);
     // b1's top-right corner (2, 1) is carried to (3.0, 2.1): 0.042 m from b3's corner (3.03, 2.07), within 9 px
     pointer("pointermove", 2, 1.6);
-    expect(interaction.getState().snap).toMatchObject({ kind: "corner", body: "b3", point: [3.03, 2.07] });
+    expect(h.interaction.getState().snap).toMatchObject({ kind: "corner", body: "b3", point: [3.03, 2.07] });
     pointer("pointerup", 2, 1.6);
     expect(outline("b1")).toEqual([[1.03, 1.07], [3.03, 1.07], [3.03, 2.07], [1.03, 2.07]]);
     // the body's elements go with it
     expect(el("s1").at).toEqual([2.03, 1.07]);
-    expect(interaction.getState().snap).toBeNull();
+    expect(h.interaction.getState().snap).toBeNull();
     expect(ed().past).toHaveLength(1);
     ed().undo();
     expect(outline("b1")).toEqual([[0, 0], [2, 0], [2, 1], [0, 1]]);
@@ -143,10 +106,10 @@ describe("dragging a body near another body", () => {
 
   it("with Alt held moves by the pointer alone: no corner, no grid, no mark", () => {
     addOffGrid();
-    hit = { type: "element", id: "b1" };
+    h.hit = { type: "element", id: "b1" };
     down(1, 0.5);
     pointer("pointermove", 2, 1.6, { altKey: true });
-    expect(interaction.getState().snap).toBeNull();
+    expect(h.interaction.getState().snap).toBeNull();
     pointer("pointerup", 2, 1.6, { altKey: true });
     const [x, y] = outline("b1")[2] as number[];
     expect(x).toBeCloseTo(3, 9);
@@ -155,28 +118,28 @@ describe("dragging a body near another body", () => {
 
   it("puts a corner on another body's edge, keeping to the grid along it", () => {
     addOffGrid();
-    hit = { type: "element", id: "b1" };
+    h.hit = { type: "element", id: "b1" };
     down(1, 0.5);
     // b1's bottom-right corner (2, 0) is carried to (3.0, 2.45): 0.03 m from b3's left edge x = 3.03,
     // and along that edge y keeps to the grid's 2.4
     pointer("pointermove", 2, 2.95);
-    expect(interaction.getState().snap).toMatchObject({ kind: "edge", body: "b3", point: [3.03, 2.4] });
+    expect(h.interaction.getState().snap).toMatchObject({ kind: "edge", body: "b3", point: [3.03, 2.4] });
     pointer("pointerup", 2, 2.95);
     expect(outline("b1")).toEqual([[1.03, 2.4], [3.03, 2.4], [3.03, 3.4], [1.03, 3.4]]);
   });
 
   it("away from other bodies keeps the move on the grid, with no mark", () => {
-    hit = { type: "element", id: "b1" };
+    h.hit = { type: "element", id: "b1" };
     down(1, 0.5);
     pointer("pointermove", 1.33, 2.47);
-    expect(interaction.getState().snap).toBeNull();
+    expect(h.interaction.getState().snap).toBeNull();
     pointer("pointerup", 1.33, 2.47);
     expect(outline("b1")[0]).toEqual([0.4, 2]);
   });
 });
 
 describe("dropping a tray item on the canvas", () => {
-  const drop = (what: Parameters<typeof controller.drop>[0], x: number, y: number, altKey = false) => controller.drop(what, { ...screenOf(x, y), altKey });
+  const drop = (what: Parameters<typeof h.controller.drop>[0], x: number, y: number, altKey = false) => h.controller.drop(what, { ...screenOf(x, y), altKey });
 
   it("a rectangle body: 2 m × 1 m centred on the snapped drop point, selected, one undo step", () => {
     drop({ kind: "body" }, 1.03, 3.08);
@@ -192,7 +155,7 @@ describe("dropping a tray item on the canvas", () => {
 
   it("a rectangle body when zoomed far out is ten times the size, so it is not a speck", () => {
     ed().setView({ scale: 10, x: 100, y: 500 });
-    controller.drop({ kind: "body" }, { clientX: 100 + 30 * 10, clientY: 500 - 36 * 10, altKey: false });
+    h.controller.drop({ kind: "body" }, { clientX: 100 + 30 * 10, clientY: 500 - 36 * 10, altKey: false });
     expect(ed().sketch.bodies[2].outline).toEqual([[20, 31], [40, 31], [40, 41], [20, 41]]);
   });
 
@@ -203,7 +166,7 @@ describe("dropping a tray item on the canvas", () => {
     // the status line's hint, read from the tool, says so
     expect(toolHint(ed().tool)).toMatch(/^Polygon body: 1 corner placed\. Click each next corner/);
     for (const [x, y] of [[2, 3], [1, 4.4]]) down(x, y);
-    controller.finishPolygon();
+    h.controller.finishPolygon();
     expect(ed().sketch.bodies[2]).toMatchObject({ id: "b3", outline: [[0, 3], [2, 3], [1, 4.4]] });
     expect(ed().past).toHaveLength(1);
   });
@@ -224,7 +187,7 @@ describe("dropping a tray item on the canvas", () => {
 
 describe("handles", () => {
   it("turns a port with its handle in 5° steps", () => {
-    hit = { type: "rotate", id: "p1" };
+    h.hit = { type: "rotate", id: "p1" };
     down(2.66, 0.5);
     pointer("pointermove", 2.5, 1.03);
     pointer("pointerup", 2.5, 1.03);
@@ -234,7 +197,7 @@ describe("handles", () => {
   });
 
   it("reshapes a rectangle by its corner, keeping it a rectangle", () => {
-    hit = { type: "corner", id: "b1", index: 2 };
+    h.hit = { type: "corner", id: "b1", index: 2 };
     down(2, 1);
     pointer("pointermove", 2.8, 1.6);
     pointer("pointerup", 2.8, 1.6);
@@ -244,14 +207,14 @@ describe("handles", () => {
 
 describe("several elements at once", () => {
   it("Shift+click adds to the selection and takes away again; a drag moves them all, one undo step", () => {
-    hit = { type: "element", id: "s1" };
+    h.hit = { type: "element", id: "s1" };
     down(1, 0);
     pointer("pointerup", 1, 0);
-    hit = { type: "element", id: "b2" };
+    h.hit = { type: "element", id: "b2" };
     down(5, 0.5, { shiftKey: true });
     pointer("pointerup", 5, 0.5);
     expect(ed().selection).toEqual(["s1", "b2"]);
-    hit = { type: "element", id: "p1" };
+    h.hit = { type: "element", id: "p1" };
     down(2, 0.5, { shiftKey: true });
     pointer("pointerup", 2, 0.5);
     expect(ed().selection).toEqual(["s1", "b2", "p1"]);
@@ -259,7 +222,7 @@ describe("several elements at once", () => {
     pointer("pointerup", 2, 0.5);
     expect(ed().selection).toEqual(["s1", "b2"]);
     // dragging one of them carries the others by the same step
-    hit = { type: "element", id: "s1" };
+    h.hit = { type: "element", id: "s1" };
     down(1, 0);
     pointer("pointermove", 1.6, 0);
     pointer("pointerup", 1.6, 0);
@@ -272,10 +235,10 @@ describe("several elements at once", () => {
 
 describe("a held Alt turns snapping off", () => {
   it("for a dragged support: it follows the pointer, off the grid", () => {
-    hit = { type: "element", id: "s1" };
+    h.hit = { type: "element", id: "s1" };
     down(1, 0);
     pointer("pointermove", 1.33, 0.07, { altKey: true });
-    expect(interaction.getState().snap).toBeNull();
+    expect(h.interaction.getState().snap).toBeNull();
     pointer("pointerup", 1.33, 0.07, { altKey: true });
     const [x, y] = el("s1").at as number[];
     expect(x).toBeCloseTo(1.33, 9);
@@ -296,7 +259,7 @@ describe("a held Alt turns snapping off", () => {
   });
 
   it("for a tray item dropped on the canvas: the body is centred on the drop point itself", () => {
-    controller.drop({ kind: "body" }, { ...screenOf(1.03, 3.08), altKey: true });
+    h.controller.drop({ kind: "body" }, { ...screenOf(1.03, 3.08), altKey: true });
     const [x0, y0] = ed().sketch.bodies[2].outline[0] as number[];
     expect(x0).toBeCloseTo(0.03, 9);
     expect(y0).toBeCloseTo(2.58, 9);
@@ -304,7 +267,7 @@ describe("a held Alt turns snapping off", () => {
 
   it("and the snap switch turns it off for good", () => {
     ed().setSnap(false);
-    hit = { type: "element", id: "s1" };
+    h.hit = { type: "element", id: "s1" };
     down(1, 0);
     pointer("pointermove", 1.33, 0.07);
     pointer("pointerup", 1.33, 0.07);
@@ -314,22 +277,21 @@ describe("a held Alt turns snapping off", () => {
 
 describe("zoom and pan", () => {
   it("pinches with two fingers: zooms about their midpoint and follows it", () => {
-    const touch = (id: number, x: number, y: number) =>
-      controller.down({ clientX: x, clientY: y, button: 0, pointerType: "touch", pointerId: id, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, timeStamp: 0, preventDefault() {} } as unknown as PointerEvent);
-    const move = (id: number, x: number, y: number) => window.dispatchEvent(Object.assign(new MouseEvent("pointermove", { clientX: x, clientY: y }), { pointerType: "touch", pointerId: id }));
+    const touch = (id: number, x: number, y: number) => fingerDown(id, { clientX: x, clientY: y });
+    const move = (id: number, x: number, y: number) => finger("pointermove", id, { clientX: x, clientY: y });
     touch(1, 300, 300);
     touch(2, 400, 300);
     move(2, 500, 300);
     // the fingers are twice as far apart: twice the scale, about (350, 300), then the midpoint moved to (400, 300)
     expect(ed().view.scale).toBeCloseTo(200, 9);
     expect(ed().view.x).toBeCloseTo(350 - (350 - 100) * 2 + 50, 9);
-    window.dispatchEvent(Object.assign(new MouseEvent("pointerup", { clientX: 500, clientY: 300 }), { pointerType: "touch", pointerId: 2 }));
-    window.dispatchEvent(Object.assign(new MouseEvent("pointerup", { clientX: 300, clientY: 300 }), { pointerType: "touch", pointerId: 1 }));
+    finger("pointerup", 2, { clientX: 500, clientY: 300 });
+    finger("pointerup", 1, { clientX: 300, clientY: 300 });
     expect(ed().past).toHaveLength(0);
   });
 
   it("zooms with the wheel about the pointer", () => {
-    controller.wheel({ clientX: 300, clientY: 300, deltaY: -100, deltaMode: 0, ctrlKey: false, preventDefault() {} } as unknown as WheelEvent);
+    h.controller.wheel({ clientX: 300, clientY: 300, deltaY: -100, deltaMode: 0, ctrlKey: false, preventDefault() {} } as unknown as WheelEvent);
     expect(ed().view.scale).toBeCloseTo(100 * Math.exp(0.16), 9);
   });
 });
@@ -375,18 +337,17 @@ describe("tools", () => {
   it("leaves no snap mark (\"corner\") or hover ring behind once the moment point is picked", () => {
     ed().setTool({ kind: "pick-point" });
     const at = { ...screenOf(1.97, 0.02), altKey: false } as unknown as PointerEvent;
-    controller.hover(at);
-    expect(interaction.getState().snap).toMatchObject({ kind: "corner", point: [2, 0] });
+    h.controller.hover(at);
+    expect(h.interaction.getState().snap).toMatchObject({ kind: "corner", point: [2, 0] });
     down(1.97, 0.02);
     expect(ed().tool.kind).toBe("select");
-    expect(interaction.getState().snap).toBeNull();
-    expect(interaction.getState().hover).toBeNull();
+    expect(h.interaction.getState().snap).toBeNull();
+    expect(h.interaction.getState().hover).toBeNull();
   });
 });
 
 describe("placing on an outline, and in view", () => {
-  const tap = (x: number, y: number) =>
-    controller.down({ ...screenOf(x, y), button: 0, pointerType: "touch", pointerId: 7, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, timeStamp: 0, preventDefault() {} } as unknown as PointerEvent);
+  const tap = (x: number, y: number) => fingerDown(7, screenOf(x, y));
 
   it("a pin clicked in empty space, 0.9 m from the nearest body, is not placed: the hint says where, and the tool stays on", () => {
     ed().setTool({ kind: "place", element: "pin" });
@@ -408,7 +369,7 @@ describe("placing on an outline, and in view", () => {
     ed().setTool({ kind: "place", element: "tie" });
     tap(3, 2);
     expect(ed().notice).toBe("Tap on or near a body's outline to place a support.");
-    controller.drop({ kind: "outlet" }, { ...screenOf(3, 0.5), altKey: false });
+    h.controller.drop({ kind: "outlet" }, { ...screenOf(3, 0.5), altKey: false });
     expect(ed().sketch.ports).toHaveLength(1);
     expect(ed().notice).toMatch(/^Click on or near a body's outline to place a port/);
   });
@@ -418,7 +379,7 @@ describe("placing on an outline, and in view", () => {
     ed().setViewport({ width: 390, height: 600 });
     ed().setTool({ kind: "body", shape: "rectangle", points: [] });
     tap(2.6, 1);
-    window.dispatchEvent(Object.assign(new MouseEvent("pointerup", screenOf(2.6, 1)), { pointerType: "touch", pointerId: 7 }));
+    finger("pointerup", 7, screenOf(2.6, 1));
     // centred on (2.6, 1) at 360 px it would reach 460 px, 78 px past 382: 0.8 m in (whole 0.2 m
     // steps), so its right side is at 380 px (a body with its corner at the tap reached 560 px)
     expect(ed().sketch.bodies[2].outline).toEqual([[0.8, 0.5], [2.8, 0.5], [2.8, 1.5], [0.8, 1.5]]);
@@ -428,70 +389,62 @@ describe("placing on an outline, and in view", () => {
 });
 
 describe("touch", () => {
-  const touch = (id: number, x: number, y: number) =>
-    controller.down({ ...screenOf(x, y), button: 0, pointerType: "touch", pointerId: id, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, timeStamp: 0, preventDefault() {} } as unknown as PointerEvent);
-  const finger = (type: "pointermove" | "pointerup" | "pointercancel", id: number, x: number, y: number) =>
-    window.dispatchEvent(Object.assign(new MouseEvent(type, screenOf(x, y)), { pointerType: "touch", pointerId: id }));
+  const touch = (id: number, x: number, y: number) => fingerDown(id, screenOf(x, y));
+  const lift = (type: "pointermove" | "pointerup" | "pointercancel", id: number, x: number, y: number) => finger(type, id, screenOf(x, y));
 
   it("a tap that places an element is forgotten when the finger lifts: the next finger drags, not pinches", () => {
     ed().setTool({ kind: "place", element: "contact" });
     touch(1, 5.02, 1.03);
-    finger("pointerup", 1, 5.02, 1.03);
+    lift("pointerup", 1, 5.02, 1.03);
     expect(ed().sketch.supports.map((s) => s.id)).toEqual(["s1", "s2"]);
-    hit = { type: "element", id: "s1" };
+    h.hit = { type: "element", id: "s1" };
     touch(2, 1, 0);
-    expect(controller.mode).toBe("move");
-    finger("pointermove", 2, 1.6, 0);
-    finger("pointerup", 2, 1.6, 0);
+    expect(h.controller.mode).toBe("move");
+    lift("pointermove", 2, 1.6, 0);
+    lift("pointerup", 2, 1.6, 0);
     expect(ed().view.scale).toBe(100);
     expect(el("s1").at).toEqual([1.6, 0]);
-    expect(controller.mode).toBe("idle");
+    expect(h.controller.mode).toBe("idle");
   });
 
   it("a tap with the moment-point tool and a polygon corner do not leave a finger behind", () => {
     ed().setTool({ kind: "pick-point" });
     touch(1, 2, 0);
-    finger("pointerup", 1, 2, 0);
+    lift("pointerup", 1, 2, 0);
     ed().setTool({ kind: "body", shape: "polygon", points: [] });
     touch(2, 0, 3);
-    finger("pointercancel", 2, 0, 3);
+    lift("pointercancel", 2, 0, 3);
     expect(ed().tool).toMatchObject({ kind: "body", points: [[0, 3]] });
     // then one finger on empty paper: a rubber band, not a pinch
     ed().setTool({ kind: "select" });
     touch(3, -0.5, -0.5);
-    expect(controller.mode).toBe("band");
-    finger("pointerup", 3, -0.5, -0.5);
-    expect(controller.mode).toBe("idle");
+    expect(h.controller.mode).toBe("band");
+    lift("pointerup", 3, -0.5, -0.5);
+    expect(h.controller.mode).toBe("idle");
     expect(ed().view.scale).toBe(100);
   });
 
   it("Escape forgets the fingers counted so far", () => {
     ed().setTool({ kind: "place", element: "contact" });
     touch(1, 5.02, 1.03);
-    expect(controller.cancel()).toBe(false);
-    hit = { type: "element", id: "s1" };
+    expect(h.controller.cancel()).toBe(false);
+    h.hit = { type: "element", id: "s1" };
     touch(2, 1, 0);
-    expect(controller.mode).toBe("move");
+    expect(h.controller.mode).toBe("move");
   });
 });
 
 describe("Escape", () => {
-  function Keys({ interaction }: { interaction: ReturnType<typeof createInteractionStore> }) {
-    const getCtx = useCallback((): ActionContext => ({ stores, controller, ui: {} as ActionContext["ui"] }), []);
-    useShortcuts(getCtx, interaction);
-    return null;
-  }
-
   it("pressed on the keyboard rolls back a drag in progress, recording nothing", () => {
-    render(<Keys interaction={createInteractionStore()} />);
-    hit = { type: "element", id: "s1" };
+    render(<HarnessKeys harness={h} interaction={createInteractionStore()} />);
+    h.hit = { type: "element", id: "s1" };
     down(1, 0);
     pointer("pointermove", 1.52, 0);
     expect(el("s1").at).toEqual([1.6, 0]);
     fireEvent.keyDown(window, { key: "Escape" });
     expect(el("s1").at).toEqual([1, 0]);
     expect(ed().gesture).toBeNull();
-    expect(controller.mode).toBe("idle");
+    expect(h.controller.mode).toBe("idle");
     pointer("pointerup", 1.7, 0);
     expect(ed().past).toHaveLength(0);
     // the element stays selected: Escape spent itself on the drag
@@ -499,7 +452,7 @@ describe("Escape", () => {
   });
 
   it("during a rubber band gives back the selection from before it", () => {
-    render(<Keys interaction={createInteractionStore()} />);
+    render(<HarnessKeys harness={h} interaction={createInteractionStore()} />);
     ed().select(["p1", "b2"]);
     down(-0.5, -0.5);
     expect(ed().selection).toEqual([]);
@@ -516,12 +469,12 @@ describe("autosave of a drag", () => {
     vi.useFakeTimers();
     const saved: SketchFile[] = [];
     const persistence: SketchPersistence = { kind: "scratch", autosave: true, describe: () => "", load: async () => ({ ok: true, sketch: null }), save: async (s) => (saved.push(s), { ok: true, savedAt: "" }) };
-    const autosave = startAutosave(stores.editor, persistence);
+    const autosave = startAutosave(h.stores.editor, persistence);
     try {
-      hit = { type: "element", id: "s1" };
+      h.hit = { type: "element", id: "s1" };
       down(1, 0);
       pointer("pointermove", 1.7, 0.4);
-      controller.cancel();
+      h.controller.cancel();
       pointer("pointerup", 1.7, 0.4);
       await vi.advanceTimersByTimeAsync(1000);
       expect(saved).toHaveLength(0);

@@ -1,7 +1,7 @@
 // The Konva canvas under jsdom (vitest-canvas-mock), for the tests that read what it drew.
 import { render, waitFor } from "@testing-library/react";
 import Konva from "konva";
-import { expect } from "vitest";
+import { expect, vi } from "vitest";
 import { createEditorStore } from "@/canvas/store";
 import { EditorProvider } from "@/canvas/context";
 import { createInteractionStore } from "@/canvas/konva/interaction";
@@ -10,6 +10,11 @@ import type { SketchFile } from "@/solver/schema";
 import "./editor-helpers";
 
 export const stage = () => Konva.stages[Konva.stages.length - 1];
+
+/** jsdom lays nothing out: every element measures `width` × `height` at the page's origin (the spy; mockRestore it after). */
+export function measuredAs(width: number, height: number) {
+  return vi.spyOn(HTMLElement.prototype, "getBoundingClientRect").mockReturnValue({ x: 0, y: 0, left: 0, top: 0, right: width, bottom: height, width, height, toJSON: () => ({}) } as DOMRect);
+}
 
 /** Every text the canvas's layers filled, from the canvas mock's record of calls. */
 export function drawnTexts(): string[] {

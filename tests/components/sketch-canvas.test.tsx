@@ -13,7 +13,7 @@ import { toScreen } from "@/canvas/geometry/view";
 import { newBody } from "@/canvas/model/factory";
 import { emptySketch } from "@/canvas/model/elements";
 import type { Vec2 } from "@/solver/types";
-import "./editor-helpers";
+import { measuredAs, stage } from "./canvas-support";
 
 function mount(id: string) {
   const editor = createEditorStore({ sketch: exampleById(id)!.sketch });
@@ -27,7 +27,6 @@ function mount(id: string) {
   return { editor, ...utils };
 }
 
-const stage = () => Konva.stages[Konva.stages.length - 1];
 const hits = () => stage().find((n: Konva.Node) => !!n.getAttr("hit")).map((n) => n.getAttr("hit") as { type: string; id: string });
 
 describe("SketchCanvas", () => {
@@ -74,7 +73,7 @@ describe("SketchCanvas", () => {
 describe("undo of opening an example over one's own sketch", () => {
   it("fits the view to the sketch that comes back, and redo fits the example again", async () => {
     // jsdom lays nothing out: give the canvas's container a size
-    const rect = vi.spyOn(HTMLElement.prototype, "getBoundingClientRect").mockReturnValue({ x: 0, y: 0, left: 0, top: 0, right: 800, bottom: 600, width: 800, height: 600, toJSON: () => ({}) } as DOMRect);
+    const rect = measuredAs(800, 600);
     try {
       const own = { ...emptySketch("A crate far out"), bodies: [newBody("b1", [[50, 40], [51, 40], [51, 40.6], [50, 40.6]], "Crate")] };
       const editor = createEditorStore({ sketch: own });

@@ -3,13 +3,14 @@
 // under the tool goes with it; a touch screen reads taps and a Done button instead of Shift and Esc.
 import { act, fireEvent, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { beam, renderEditor } from "./editor-helpers";
+import { measuredAs } from "./canvas-support";
 
 const SIZE = { width: 800, height: 600 };
 let mocks: Array<{ mockRestore: () => void }> = [];
 beforeEach(() => {
-  mocks = [vi.spyOn(HTMLElement.prototype, "getBoundingClientRect").mockReturnValue({ x: 0, y: 0, left: 0, top: 0, right: SIZE.width, bottom: SIZE.height, ...SIZE, toJSON: () => ({}) } as DOMRect)];
+  mocks = [measuredAs(SIZE.width, SIZE.height)];
 });
 afterEach(() => mocks.splice(0).forEach((m) => m.mockRestore()));
 
