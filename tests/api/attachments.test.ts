@@ -21,7 +21,7 @@ import { upload } from "@/db/schema";
 import { appOrigin, storageSettings } from "@/lib/env";
 import { getObject, objectExists, s3 } from "@/lib/storage";
 import { MAX_ATTACHMENTS } from "@/lib/uploads/service";
-import { PDF_AUTHOR, PDF_XMP_CREATOR, pdf, png, textPretendingToBePng } from "../fixtures/uploads";
+import { PDF_AUTHOR, PDF_XMP_CREATOR, pdf, photoWithExif, png, textPretendingToBePng } from "../fixtures/uploads";
 import { call, withMailFake, makeTeam, type Json, type Person } from "./helpers";
 import { postSketch } from "./sketch-setup";
 
@@ -121,6 +121,44 @@ describe("attachments on comments", () => {
     for (const s of ["/Author", PDF_AUTHOR, PDF_XMP_CREATOR, "/Metadata", "Pump data sheet"]) expect(stored.includes(Buffer.from(s))).toBe(false);
     expect(await pdfPages(stored)).toBe(2);
     expect(row.size).toBe(stored.length);
+  });
+
+  it("a site photo loses its EXIF and GPS, is turned upright, and its thumbnail carries none either (read back from storage)", async () => {
+    const { sketchId, commentId } = await sketchWithComment();
+    const photo = await photoWithExif();
+    expect((await sharp(photo).metadata()).exif).toBeDefined();
+    const res = await attach(commentId, chen, photo, "foot on the slab.jpg", "image/jpeg");
+    expect(res.status).toBe(201);
+    expect(res.body.upload).toMatchObject({ storedType: "image/jpeg", width: 40, height: 80 });
+    const [row] = await db.select().from(upload).where(eq(upload.id, res.body.upload.id));
+    for (const key of [row.storageKey, row.thumbnailKey]) {
+      const stored = await getObject(key);
+      const meta = await sharp(stored).metadata();
+      expect(meta.exif).toBeUndefined();
+      expect(meta.orientation).toBeUndefined();
+      expect(meta.height! > meta.width!).toBe(true);
+      for (const s of ["SomeCamera", "Site photo 2031", "GPS"]) expect(stored.includes(Buffer.from(s))).toBe(false);
+    }
+    // what readers are served is what was stored; a viewer of another workspace learns nothing
+    const full = await get(uploadRoute.GET as Handler, res.body.upload.id, vera);
+    expect(full.bytes.equals(await getObject(row.storageKey))).toBe(true);
+    const thumb = await get(thumbnailRoute.GET as Handler, res.body.upload.id, vera);
+    expect([thumb.status, thumb.type]).toEqual([200, "image/png"]);
+    expect((await get(uploadRoute.GET as Handler, res.body.upload.id, stranger)).status).toBe(404);
+    expect((await get(thumbnailRoute.GET as Handler, res.body.upload.id, stranger)).status).toBe(404);
+    const list = await call(commentsRoute.GET, { params: { id: sketchId, number: "1" }, cookie: vera.cookie });
+    expect(list.body.threads[0].comments[0].attachments.map((f: Json) => f.name)).toEqual(["foot on the slab.jpg"]);
+  });
+
+  it("an oversized file on a comment: 413 naming the file field, and nothing is kept", async () => {
+    const { commentId } = await sketchWithComment();
+    const before = await bucketKeys(ws);
+    const res = await attach(commentId, chen, Buffer.alloc(10 * 1048576 + 1024, 7), "scan.png", "image/png");
+    expect(res.status).toBe(413);
+    expect(res.body.error.message).toMatch(/10 MB/);
+    expect(res.body.error.fields.map((f: Json) => f.path)).toEqual(["file"]);
+    expect(await db.select().from(upload).where(eq(upload.commentId, commentId))).toHaveLength(0);
+    expect(await bucketKeys(ws)).toEqual(before);
   });
 
   it("only the comment's author attaches; viewers and strangers are refused", async () => {

@@ -167,22 +167,28 @@ describe("an underlay upload", () => {
     expect(got.headers.get("content-disposition")).toContain('filename="vendor sheet.png"');
   });
 
-  it("strips EXIF and GPS and turns the photo upright (read back from storage)", async () => {
-    const sketchId = await newSketch();
-    const photo = await photoWithExif();
-    expect((await sharp(photo).metadata()).exif).toBeDefined();
-    const res = await underlay(sketchId, eddie, photo, { name: "skid.jpg", type: "image/jpeg" });
-    expect(res.status).toBe(201);
-    const [row] = await db.select().from(upload).where(eq(upload.id, res.body.upload.id));
-    const stored = await getObject(row.storageKey);
-    const meta = await sharp(stored).metadata();
-    expect(meta.format).toBe("jpeg");
-    expect(meta.exif).toBeUndefined();
-    expect(meta.orientation).toBeUndefined();
-    // orientation 6 turned the 80 × 40 photo a quarter turn
-    expect([meta.width, meta.height]).toEqual([40, 80]);
-    for (const s of ["SomeCamera", "Site photo 2031", "GPS"]) expect(stored.includes(Buffer.from(s))).toBe(false);
-  });
+  // a JPEG named as one; a WebP whose name and header say PNG (the bytes decide)
+  for (const [format, ext, name, type] of [["jpeg", "jpg", "skid.jpg", "image/jpeg"], ["webp", "webp", "skid.png", "image/png"]] as const) {
+    it(`strips EXIF and GPS and turns the photo upright, kept as ${format} (read back from storage)`, async () => {
+      const sketchId = await newSketch();
+      const photo = await photoWithExif(format);
+      const sent = await sharp(photo).metadata();
+      expect([sent.format, sent.orientation, sent.exif === undefined]).toEqual([format, 6, false]);
+      const res = await underlay(sketchId, eddie, photo, { name, type });
+      expect(res.status).toBe(201);
+      // orientation 6 turned the 80 × 40 photo a quarter turn
+      expect(res.body.upload).toMatchObject({ sourceType: `image/${format}`, storedType: `image/${format}`, width: 40, height: 80 });
+      const [row] = await db.select().from(upload).where(eq(upload.id, res.body.upload.id));
+      expect(row.storageKey.endsWith(`.${ext}`)).toBe(true);
+      const stored = await getObject(row.storageKey);
+      const meta = await sharp(stored).metadata();
+      expect([meta.format, meta.exif, meta.orientation, meta.width, meta.height]).toEqual([format, undefined, undefined, 40, 80]);
+      for (const s of ["SomeCamera", "Site photo 2031", "GPS"]) expect(stored.includes(Buffer.from(s))).toBe(false);
+      const got = await fetchFile(uploadRoute.GET as Handler, res.body.upload.id, vera);
+      expect(got.headers.get("content-type")).toBe(`image/${format}`);
+      expect(got.bytes.equals(stored)).toBe(true);
+    });
+  }
 
   it("is for editors and owners: a checker and a viewer get 403, an outsider 404", async () => {
     const sketchId = await newSketch();
@@ -250,6 +256,29 @@ describe("the underlay and the sketch's versions", () => {
     const del = await call(uploadRoute.DELETE, { method: "DELETE", params: { uploadId: up.id }, cookie: eddie.cookie });
     expect(del.status).toBe(409);
     expect(del.body.error.message).toMatch(/saved versions never change/);
+  });
+
+  it("hidden and locked are saved with the version; a later save that leaves the underlay alone keeps it, one that takes it off leaves the earlier versions theirs", async () => {
+    const sketchId = await newSketch();
+    const up = (await underlay(sketchId, eddie, await markedDrawing())).body.upload;
+    const placed = { upload: up.id, width: 1000, height: 600, origin: [-1, 2], metresPerPixel: 0.005, rotation: 12.5, opacity: 0.35, hidden: true, locked: true, calibration: { a: [300, 520], b: [700, 520], distance: "2.0 m" } };
+    const versionRoute = await import("@/app/api/sketches/[id]/versions/[number]/route");
+    const save = (base: number, document: Json) => call(versionsRoute.POST, { method: "POST", params: { id: sketchId }, cookie: eddie.cookie, body: { baseVersion: base, message: `on v${base}`, document } });
+    const read = async (n: number) => (await call(versionRoute.GET, { params: { id: sketchId, number: String(n) }, cookie: vera.cookie })).body.version.document;
+    const v2doc = { ...fixture("pump-skid-discharge"), underlay: placed };
+    expect((await save(1, v2doc)).status).toBe(201);
+    expect((await read(2)).underlay).toEqual(placed);
+    // the next save changes the drawing only: the underlay, its scale and its state come along
+    const v3doc = { ...(await read(2)), description: "traced, then the discharge moved" };
+    expect((await save(2, v3doc)).status).toBe(201);
+    expect((await read(3)).underlay).toEqual(placed);
+    // v4 takes the underlay off; v2 and v3 still draw it, so its file stays
+    const { underlay: _gone, ...v4doc } = await read(3);
+    expect((await save(3, v4doc)).status).toBe(201);
+    expect((await read(4)).underlay).toBeUndefined();
+    expect((await read(2)).underlay).toEqual(placed);
+    expect((await call(uploadRoute.DELETE, { method: "DELETE", params: { uploadId: up.id }, cookie: eddie.cookie })).status).toBe(409);
+    expect((await fetchFile(uploadRoute.GET as Handler, up.id, vera)).status).toBe(200);
   });
 
   it("an underlay not yet saved in a version can be deleted by an editor, objects and all", async () => {

@@ -8,24 +8,13 @@ import { useState } from "react";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { RestoreDialog, type Restored } from "@/components/versions/RestoreDialog";
 import { VersionHistory, type VersionItem } from "@/components/versions/VersionHistory";
+import { versionItem as item } from "./version-items";
 import { withModalDialogs } from "./dialog-support";
 import { jsonResponse } from "./editor-helpers";
 
 beforeAll(() => withModalDialogs());
 afterEach(() => vi.unstubAllGlobals());
 
-const item = (number: number, message: string): VersionItem => ({
-  id: `v${number}`,
-  number,
-  message,
-  authorId: "u1",
-  authorName: "Eddie Editor",
-  createdAt: "2026-12-01T09:00:00Z",
-  status: "holds",
-  largestReaction: 1200,
-  warnings: [],
-  reviewState: "draft",
-});
 const VERSIONS = [item(3, "smaller block"), item(2, "thicker wall"), item(1, "anchor block as quoted")];
 
 function Page({ canSave, onRestored }: { canSave: boolean; onRestored?: (m: Restored) => void }) {
