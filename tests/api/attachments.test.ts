@@ -189,13 +189,34 @@ describe("attachments on comments", () => {
     expect(before).toHaveLength(2 * (await db.select().from(upload).where(eq(upload.workspaceId, ws))).length);
   });
 
-  it("an approved version takes no new attachments", async () => {
+  it("an approved version takes no new attachments and keeps the ones it has, until its approval is withdrawn", async () => {
     const { sketchId, commentId } = await sketchWithComment(olivia);
-    const step = (who: Person, s: string) => call(signoffRoute.POST, { method: "POST", params: { id: sketchId, number: "1" }, cookie: who.cookie, body: { step: s } });
+    const early = (await attach(commentId, olivia, await png(11, 11), "before.png", "image/png")).body.upload;
+    const step = (who: Person, s: string) => call(signoffRoute.POST, { method: "POST", params: { id: sketchId, number: "1" }, cookie: who.cookie, body: { step: s, note: "The wrong pump curve was used." } });
     for (const [who, s] of [[eddie, "submit"], [chen, "check"], [olivia, "approve"]] as const) expect((await step(who, s)).status).toBe(200);
     const res = await attach(commentId, olivia, await png(10, 10), "late.png", "image/png");
     expect(res.status).toBe(409);
-    expect(res.body.error.message).toMatch(/approved/);
+    expect(res.body.error.message).toBe("This version is approved: its comments take no new attachments.");
+    // nor does its author take one off: the approved record stays as it was signed
+    const off = await call(uploadRoute.DELETE, { method: "DELETE", params: { uploadId: early.id }, cookie: olivia.cookie });
+    expect(off.status).toBe(409);
+    expect(off.body.error.message).toBe("This version is approved: its comments take no new attachments.");
+    expect((await get(uploadRoute.GET as Handler, early.id, vera)).status).toBe(200);
+    // withdrawn, the comment is its author's again
+    expect((await step(olivia, "withdraw")).status).toBe(200);
+    expect((await attach(commentId, olivia, await png(10, 10), "late.png", "image/png")).status).toBe(201);
+    expect((await call(uploadRoute.DELETE, { method: "DELETE", params: { uploadId: early.id }, cookie: olivia.cookie })).status).toBe(200);
+  });
+
+  it("a deleted comment takes no attachment: 410, nothing stored", async () => {
+    const { commentId } = await sketchWithComment();
+    expect((await call(commentRoute.DELETE, { method: "DELETE", params: { commentId }, cookie: chen.cookie })).status).toBe(200);
+    const before = await bucketKeys(ws);
+    const res = await attach(commentId, chen, await png(10, 10), "after.png", "image/png");
+    expect(res.status).toBe(410);
+    expect(res.body.error.message).toBe("This comment was deleted.");
+    expect(await db.select().from(upload).where(eq(upload.commentId, commentId))).toHaveLength(0);
+    expect(await bucketKeys(ws)).toEqual(before);
   });
 
   it("removing an attachment, and deleting the comment, take the files out of the bucket", async () => {
