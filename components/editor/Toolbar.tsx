@@ -4,6 +4,7 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { radioKeys } from "@/components/shell/controls";
+import { ProductMark } from "@/components/site/Wordmark";
 import { actionTitle, menuActions, shortcutLabel, type Action } from "@/canvas/actions";
 import { useEditor } from "@/canvas/context";
 import { EXAMPLES } from "@/canvas/examples";
@@ -108,13 +109,7 @@ export function Toolbar({
     // touch screen its controls are 40 px, a finger's tap target
     <header className="flex h-12 shrink-0 items-center gap-1 border-b border-rule bg-paper px-3 max-lg:h-auto max-lg:min-h-12 max-lg:flex-wrap max-lg:py-1.5">
       <Link href="/" className="mr-2 flex items-center gap-1.5 text-ink pointer-coarse:min-h-10 pointer-coarse:min-w-10" aria-label="Counterpoise home">
-        <svg width="22" height="22" viewBox="0 0 28 28" aria-hidden="true">
-          <path d="M3 13h22" stroke="currentColor" strokeWidth="2.2" strokeLinecap="round" />
-          <path d="M14 14l-4 7h8z" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinejoin="round" />
-          <path d="M7 21h14" stroke="currentColor" strokeWidth="1.2" />
-          <rect x="19" y="6.5" width="5" height="5" className="fill-accent" rx="0.5" />
-          <path d="M8 10V4.5M8 4.5l-2 2.3M8 4.5l2 2.3" className="stroke-reaction" strokeWidth="1.5" fill="none" strokeLinecap="round" />
-        </svg>
+        <ProductMark size={22} />
       </Link>
       {/* which sketch this is stays readable: up to 22rem on wide screens, at least 7rem on narrow
           ones (the menus and buttons take short words there), a row of its own on a phone */}

@@ -97,19 +97,10 @@ export function useShortcuts(getCtx: () => ActionContext, interaction: Interacti
       if (e.defaultPrevented || typingIn(e.target)) return;
       if (pasteText(getCtx(), e.clipboardData?.getData("text/plain") ?? "")) e.preventDefault();
     };
-    window.addEventListener("copy", copy);
-    window.addEventListener("cut", copy);
-    window.addEventListener("paste", paste);
-    window.addEventListener("keydown", down);
-    window.addEventListener("keyup", up);
-    window.addEventListener("blur", blur);
+    const listeners: Array<[string, (e: never) => void]> = [["copy", copy], ["cut", copy], ["paste", paste], ["keydown", down], ["keyup", up], ["blur", blur]];
+    for (const [type, fn] of listeners) window.addEventListener(type, fn as EventListener);
     return () => {
-      window.removeEventListener("copy", copy);
-      window.removeEventListener("cut", copy);
-      window.removeEventListener("paste", paste);
-      window.removeEventListener("keydown", down);
-      window.removeEventListener("keyup", up);
-      window.removeEventListener("blur", blur);
+      for (const [type, fn] of listeners) window.removeEventListener(type, fn as EventListener);
     };
   }, [getCtx, interaction]);
 }
