@@ -5,8 +5,17 @@ export const DEG = Math.PI / 180;
 
 /** Unit vector at an angle in degrees, counter-clockwise from +x. */
 export function direction(angleDeg: number): Vec2 {
+  // exact zeros at the quarter turns keep reactions clean (cos 90° is not 6e-17). Most angles
+  // drawn are whole quarter turns (−90, 0, 90, 180), told here by integer arithmetic: every solve
+  // turns each support, load and port through this, and the float remainder below costs more.
+  // q·90 === angle proves the angle an exact multiple of 90°; anything else (other angles, and
+  // turns past 2³¹ quarters) takes the remainder as before, with the same answers.
+  const q = angleDeg / 90;
+  if (q === Math.trunc(q) && q < 2147483648 && q >= -2147483648 && q * 90 === angleDeg) {
+    const k = q & 3; // the quarter turn, 0…3, for negative q too (two's complement)
+    return k === 0 ? [1, 0] : k === 1 ? [0, 1] : k === 2 ? [-1, 0] : [0, -1];
+  }
   const a = angleDeg * DEG;
-  // exact zeros at the quarter turns keep reactions clean (cos 90° is not 6e-17)
   const r = ((angleDeg % 360) + 360) % 360;
   if (r === 0) return [1, 0];
   if (r === 90) return [0, 1];

@@ -158,12 +158,23 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
   const tag = (label: string, f: number) => (f === 1 ? label : `${label} × ${Number(f.toPrecision(6))}`);
   // the factor as data too, so nothing has to read it back out of the label
   const factored = (f: number) => (f === 1 ? {} : { factor: f });
+  // A term is built by a plain object literal when it has no factor, β or optional point, which is
+  // nearly always: a literal with a spread in it is built key by key, several times slower, and a
+  // live drag or a sweep builds every term on every solve. The spread form stays for the rest, so
+  // the keys of every term come in the same order either way.
 
   const fw = factorOf(body.group, DEFAULT_GROUPS.weight);
   if (m * g * fw !== 0) {
     // down the page unless the sketch turns gravity (a body on a slope, a tilt-table check)
     const [gx, gy] = direction(sketch.gravityAngle ?? -90);
-    forceTerms.push({ id: body.id, body: body.id, kind: "weight", label: tag(`weight of ${name}`, fw), name, ...factored(fw), fx: m * g * fw * gx, fy: m * g * fw * gy, m: 0, at: cg });
+    const label = tag(`weight of ${name}`, fw);
+    const fx = m * g * fw * gx;
+    const fy = m * g * fw * gy;
+    forceTerms.push(
+      fw === 1
+        ? { id: body.id, body: body.id, kind: "weight", label, name, fx, fy, m: 0, at: cg }
+        : { id: body.id, body: body.id, kind: "weight", label, name, ...factored(fw), fx, fy, m: 0, at: cg },
+    );
   }
 
   for (const l of sketch.loads) {
@@ -185,7 +196,12 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
       }
       forceTerms.push({ id: l.id, body: body.id, kind: "force", label: `force ${lname}`, name: lname, fx, fy, m: 0, at: copy(l.at) });
     } else if (l.kind === "couple") {
-      forceTerms.push({ id: l.id, body: body.id, kind: "couple", label: `couple ${lname}`, name: lname, fx: 0, fy: 0, m: l.value, ...(l.at ? { at: copy(l.at) } : {}) });
+      const label = `couple ${lname}`;
+      forceTerms.push(
+        l.at
+          ? { id: l.id, body: body.id, kind: "couple", label, name: lname, fx: 0, fy: 0, m: l.value, at: copy(l.at) }
+          : { id: l.id, body: body.id, kind: "couple", label, name: lname, fx: 0, fy: 0, m: l.value },
+      );
     } else {
       // A linear load = two triangles: w1·ℓ/2 at ℓ/3 from `from`, w2·ℓ/2 at ℓ/3 from `to`.
       const len = Math.hypot(l.to[0] - l.from[0], l.to[1] - l.from[1]);
@@ -225,7 +241,12 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
     if (pressure * fp !== 0) {
       // pushes inward at both: along the flow at an inlet, against it at an outlet
       const f = pressure * (p.area ?? 0) * (p.kind === "inlet" ? 1 : -1) * fp;
-      forceTerms.push({ id: p.id, body: body.id, kind: "pressure", label: tag(`pressure at ${pname}`, fp), name: pname, ...factored(fp), fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) });
+      const label = tag(`pressure at ${pname}`, fp);
+      forceTerms.push(
+        fp === 1
+          ? { id: p.id, body: body.id, kind: "pressure", label, name: pname, fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) }
+          : { id: p.id, body: body.id, kind: "pressure", label, name: pname, ...factored(fp), fx: f * e[0], fy: f * e[1], m: 0, at: copy(p.at) },
+      );
     }
     const flow = flows.get(p.id)!;
     // β: the momentum-flux correction factor of a velocity profile that is not uniform across the port
@@ -234,22 +255,15 @@ export function buildBodyModel(sketch: Sketch, body: Body, flows: Map<string, Po
     if (mv !== 0) {
       const fx = mv * e[0];
       const fy = mv * e[1];
-      momentumTerms.push({
-        id: p.id,
-        body: body.id,
-        kind: "momentum",
-        // an inlet's term is its momentum flux with a minus sign (Σ out − Σ in): said in the label,
-        // so a negative value beside it does not read as a double negative
-        label: tag(`${p.kind === "outlet" ? "momentum out" : "momentum in"} at ${pname}${beta === 1 ? "" : ` (β = ${Number(beta.toPrecision(4))})`}${p.kind === "outlet" ? "" : `, as −${beta === 1 ? "" : "β"}ṁV`}`, fp),
-        name: pname,
-        flow: p.kind === "outlet" ? "out" : "in",
-        ...(beta === 1 ? {} : { beta }),
-        ...factored(fp),
-        fx,
-        fy,
-        m: 0,
-        at: copy(p.at),
-      });
+      // an inlet's term is its momentum flux with a minus sign (Σ out − Σ in): said in the label,
+      // so a negative value beside it does not read as a double negative
+      const label = tag(`${p.kind === "outlet" ? "momentum out" : "momentum in"} at ${pname}${beta === 1 ? "" : ` (β = ${Number(beta.toPrecision(4))})`}${p.kind === "outlet" ? "" : `, as −${beta === 1 ? "" : "β"}ṁV`}`, fp);
+      const flowWay = p.kind === "outlet" ? "out" : "in";
+      momentumTerms.push(
+        beta === 1 && fp === 1
+          ? { id: p.id, body: body.id, kind: "momentum", label, name: pname, flow: flowWay, fx, fy, m: 0, at: copy(p.at) }
+          : { id: p.id, body: body.id, kind: "momentum", label, name: pname, flow: flowWay, ...(beta === 1 ? {} : { beta }), ...factored(fp), fx, fy, m: 0, at: copy(p.at) },
+      );
       mfx += fx;
       mfy += fy;
       mm += momentOf(p.at[0], p.at[1], fx, fy);

@@ -162,12 +162,13 @@ function solveBody(model: BodyModel, out: SolveResult): void {
     }
     largest = Math.max(largest, Math.hypot(reaction.fx, reaction.fy));
     out.reactions[s.id] = reaction;
+    const sname = elementName(s);
     reactionTerms.push({
       id: s.id,
       body: body.id,
       kind: "reaction" as const,
-      label: `reaction at ${elementName(s)}`,
-      name: elementName(s),
+      label: `reaction at ${sname}`,
+      name: sname,
       fx: reaction.fx,
       fy: reaction.fy,
       m: reaction.m,
