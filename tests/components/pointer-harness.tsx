@@ -6,13 +6,13 @@ import { useCallback } from "react";
 import { afterEach, beforeEach } from "vitest";
 import type { SketchFile } from "@/solver/schema";
 import { createEditorStore } from "@/canvas/store";
-import { createAnalysisStore, linkAnalysis } from "@/canvas/analysis/store";
-import { createSceneStore, linkScene, type EditorStores } from "@/canvas/context";
+import type { EditorStores } from "@/canvas/context";
 import { createInteractionStore, type InteractionStore } from "@/canvas/konva/interaction";
 import { createPointerController, type HitInfo, type PointerController } from "@/canvas/konva/pointer";
 import { findElement } from "@/canvas/model/elements";
 import type { ActionContext } from "@/canvas/actions";
 import { useShortcuts } from "@/components/editor/useShortcuts";
+import { linkStores } from "../support/linked-stores";
 
 /** 100 px per metre, the world origin at screen (100, 500). */
 export const POINTER_VIEW = { scale: 100, x: 100, y: 500 };
@@ -76,11 +76,7 @@ export function pointerHarness(sketch: () => SketchFile, view = POINTER_VIEW): P
     },
   };
   beforeEach(() => {
-    const editor = createEditorStore({ sketch: sketch(), view });
-    const analysis = createAnalysisStore();
-    const scene = createSceneStore(editor, analysis);
-    stops = [linkAnalysis(editor, analysis), linkScene(editor, analysis, scene)];
-    stores = { editor, analysis, scene };
+    ({ stores, stops } = linkStores(createEditorStore({ sketch: sketch(), view })));
     h.hit = null;
     interaction = createInteractionStore();
     controller = createPointerController({ stores, interaction, container: () => null, hitTest: () => h.hit });

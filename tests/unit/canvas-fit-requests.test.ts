@@ -6,14 +6,14 @@ import type { SketchFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
 import { createEditorStore, type EditorStore } from "@/canvas/store";
 import { moveElement, replaceSketch, type Command } from "@/canvas/commands";
-import { createAnalysisStore, linkAnalysis, type Runner } from "@/canvas/analysis/store";
+import type { Runner } from "@/canvas/analysis/store";
 import { analyseCore } from "@/canvas/analysis/core";
-import { createSceneStore, linkScene, type EditorStores } from "@/canvas/context";
 import { followFitRequests } from "@/canvas/fitRequests";
 import { emptySketch } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
 import { exampleById } from "@/canvas/examples";
 import { toScreen } from "@/canvas/geometry/view";
+import { linkStores } from "../support/linked-stores";
 
 const c = <A,>(cmd: Command<A>) => cmd as unknown as Command<unknown>;
 
@@ -31,10 +31,8 @@ const VIEWPORT = { width: 900, height: 600 };
 function linked(sketch: SketchFile, runner?: Runner) {
   const editor = createEditorStore({ sketch });
   editor.getState().setViewport(VIEWPORT);
-  const analysis = createAnalysisStore();
-  const scene = createSceneStore(editor, analysis);
-  const stores: EditorStores = { editor, analysis, scene };
-  const stops = [linkAnalysis(editor, analysis, runner), linkScene(editor, analysis, scene), followFitRequests(stores)];
+  const { stores, stops } = linkStores(editor, runner);
+  stops.push(followFitRequests(stores));
   return { stores, editor, stop: () => stops.forEach((s) => s()) };
 }
 

@@ -6,14 +6,13 @@ import { describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
 import { createEditorStore } from "@/canvas/store";
 import { addElement, moveElement, type Command } from "@/canvas/commands";
-import { createAnalysisStore, linkAnalysis } from "@/canvas/analysis/store";
-import { createSceneStore, linkScene, type EditorStores } from "@/canvas/context";
 import { followFitRequests } from "@/canvas/fitRequests";
 import { fitScene, isFitted } from "@/canvas/geometry/fit";
 import { emptySketch } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
 import { primsBox } from "@/canvas/render/prims";
 import { scenePrims } from "@/canvas/render/scenePrims";
+import { linkStores } from "../../support/linked-stores";
 
 const c = <A,>(cmd: Command<A>) => cmd as unknown as Command<unknown>;
 const VIEWPORT = { width: 900, height: 600 };
@@ -30,10 +29,9 @@ const ROLLER = { id: "s2", body: "b1", kind: "contact", at: [5.7, 0], angle: 90 
 function linked(busy: () => boolean = () => false) {
   const editor = createEditorStore({ sketch: skid() });
   editor.getState().setViewport(VIEWPORT);
-  const analysis = createAnalysisStore();
-  const scene = createSceneStore(editor, analysis);
-  const stores: EditorStores = { editor, analysis, scene };
-  const stops = [linkAnalysis(editor, analysis), linkScene(editor, analysis, scene), followFitRequests(stores, busy)];
+  const { stores, stops } = linkStores(editor);
+  const { analysis, scene } = stores;
+  stops.push(followFitRequests(stores, busy));
   // the canvas's first fit: a body, no result
   const s = editor.getState();
   s.setView(fitScene(scene.getState(), VIEWPORT.width, VIEWPORT.height, { result: analysis.getState().shown, units: s.units }));

@@ -6,13 +6,12 @@ import { describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
 import { createEditorStore } from "@/canvas/store";
 import { setSketchField, type Command } from "@/canvas/commands";
-import { createAnalysisStore, linkAnalysis } from "@/canvas/analysis/store";
-import { createSceneStore, linkScene } from "@/canvas/context";
 import { buildScene } from "@/canvas/scene";
 import { fitScene, LEGEND_ROOM, LEGEND_ROW } from "@/canvas/geometry/fit";
 import { emptySketch } from "@/canvas/model/elements";
 import { newBody } from "@/canvas/model/factory";
 import { gravityNote } from "@/solver/words";
+import { linkStores } from "../../support/linked-stores";
 
 const c = <A,>(cmd: Command<A>) => cmd as unknown as Command<unknown>;
 
@@ -30,9 +29,10 @@ function crate(): SketchFile {
 function linked() {
   const editor = createEditorStore({ sketch: crate() });
   editor.getState().setViewport({ width: 900, height: 600 });
-  const analysis = createAnalysisStore();
-  const scene = createSceneStore(editor, analysis);
-  const stops = [linkAnalysis(editor, analysis), linkScene(editor, analysis, scene)];
+  const {
+    stores: { analysis, scene },
+    stops,
+  } = linkStores(editor);
   const type = (value: string) => editor.getState().apply(c(setSketchField({ field: "gravityAngle", value })));
   /** what the legend says of gravity (CanvasLegend: the shown result's sketch) */
   const legendSays = () => (analysis.getState().shown ? gravityNote(analysis.getState().shownSketch?.gravityAngle) : null);
