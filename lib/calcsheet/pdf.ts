@@ -160,10 +160,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   // a paragraph of up to three lines is never split across pages, a longer one leaves at least two
   // lines on its first; `next`: the room (pt) what follows needs on the same page (a label's text)
   const paraLead = (text: string, size = 9) => proseLead(doc, text, size, width);
-  const para = (text: string, size = 9, color = SOFT, next = 0) => {
-    ensureSpace(doc, paraLead(text, size) + next);
-    doc.font("Inter").fontSize(size).fillColor(color).text(text, left, doc.y, { width, features: PROSE_FEATURES });
-  };
+  const para = (text: string, size = 9, color = SOFT, next = 0) => paragraph(doc.fillColor(color), text, left, width, size, next);
   /** A label over lines (a list's caption): kept on the page of the first line under it. */
   const label = (text: string, first: string, size = 9, color = INK, firstSize = 8.5) => para(text, size, color, paraLead(first, firstSize));
   const boldLabel = (text: string, first: string) => {
@@ -239,8 +236,13 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   doc.font("Inter").fontSize(9);
   heading("Inputs", HEADING_ROOM + (notes ? doc.currentLineHeight(true) + paraLead(notes, 8.5) : tableLeadHeight(doc, inputTables[0], width)));
   if (notes) {
-    label("Notes", notes);
-    para(notes, 8.5, SOFT);
+    // each of the notes' paragraphs (its lines as typed) on its own, so each keeps its lines together
+    const paragraphs = notes.split("\n");
+    label("Notes", paragraphs[0]);
+    for (const p of paragraphs) {
+      if (p.trim()) para(p, 8.5, SOFT);
+      else doc.font("Inter").fontSize(8.5).moveDown(1);
+    }
     doc.moveDown(0.4);
   }
   for (const t of inputTables) drawTable(doc, t, left, width);
@@ -396,8 +398,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       doc.moveDown(0.25);
       doc.font("Inter-SemiBold").fontSize(8.5).fillColor(t.open ? ACCENT : INK).text(t.heading, left, doc.y, { width, features: PROSE_FEATURES });
       for (const line of t.lines) {
-        ensureSpace(doc, proseLead(doc, line, 8.5, width - 12));
-        doc.font("Inter").fontSize(8.5).fillColor(SOFT).text(line, left + 12, doc.y, { width: width - 12, features: PROSE_FEATURES });
+        paragraph(doc.fillColor(SOFT), line, left + 12, width - 12, 8.5);
       }
     }
     if (rec.earlier) {
@@ -508,6 +509,41 @@ function proseLead(doc: PDFKit.PDFDocument, text: string, size: number, width: n
   const line = doc.currentLineHeight(true);
   const h = doc.heightOfString(text, { width, features: PROSE_FEATURES });
   return h <= 3 * line + 0.5 ? h : 2 * line;
+}
+
+/** A paragraph of prose at `size` pt: up to three lines whole on one page, a longer one with two
+ *  lines at least on each side of a page break; `next`: the room (pt) what follows needs with it. */
+export function paragraph(doc: PDFKit.PDFDocument, text: string, x: number, width: number, size: number, next = 0) {
+  ensureSpace(doc, proseLead(doc, text, size, width) + next);
+  flowProse(doc.font("Inter").fontSize(size), text, x, width);
+}
+
+/**
+ * Prose in the current font from `doc.y`, flowing onto the next page as it must, but never leaving
+ * one line alone at the top of that page (a widow): when only the last line would go over, the
+ * page ends a line early, so two go over. (The page it starts on keeps two lines at least:
+ * `proseLead`, checked before.) A paragraph over more than two pages keeps this at its first break.
+ */
+export function flowProse(doc: PDFKit.PDFDocument, text: string, x: number, width: number) {
+  const options = { width, features: PROSE_FEATURES };
+  const line = doc.currentLineHeight(true);
+  const lines = Math.round(doc.heightOfString(text, options) / line);
+  const page = doc.page;
+  // the lines the page holds from here (pdfkit breaks once the next line would pass its foot)
+  const fit = Math.floor((page.height - page.margins.bottom - doc.y) / line + 1e-6);
+  if (lines - fit !== 1 || fit < 3) {
+    doc.text(text, x, doc.y, options);
+    return;
+  }
+  // pdfkit reads the page's foot when the text starts: raise it half a line above the last line's
+  // foot for this paragraph, then put it back (the footer is drawn on the page later)
+  const margins = page.margins;
+  page.margins = { ...margins, bottom: page.height - (doc.y + (fit - 1) * line + line / 2) };
+  try {
+    doc.text(text, x, doc.y, options);
+  } finally {
+    page.margins = margins;
+  }
 }
 
 function ensureSpace(doc: PDFKit.PDFDocument, needed: number) {
