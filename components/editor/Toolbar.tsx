@@ -122,7 +122,7 @@ export function Toolbar({
           {saved ? ` · saved ${saved}` : ""}
         </p>
       </div>
-      <Menu label="File" testId="menu-file" items={[...menuItems(fileActions, run), ...fileLinks.links.map((l) => ({ id: l.id, label: l.label, detail: l.detail, href: l.href }))]} />
+      <Menu label="File" testId="menu-file" items={[...menuItems(fileActions, run), ...fileLinks.links.map((l) => ({ id: l.id, label: l.label, detail: l.detail, href: l.href, onSelect: l.onSelect }))]} />
       {readOnly ? null : (
         <Menu
           label="Open an example"

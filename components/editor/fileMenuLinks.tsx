@@ -3,12 +3,14 @@
 // toolbar button has no room below 1280 px, is still one tap away there on a tablet or a phone.
 // Whatever the page puts in the toolbar's slot registers them with `useFileMenuLink`, so the
 // link and the menu item are made from the same href.
-import { createContext, useCallback, useContext, useEffect, useMemo, useState } from "react";
+import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState } from "react";
 
 export interface FileMenuLink {
   id: string;
   label: string;
-  href: string;
+  /** a link (the calc sheet), or else an action (`onSelect`: making an older version the latest again) */
+  href?: string;
+  onSelect?: () => void;
   /** longer words under the label */
   detail?: string;
 }
@@ -25,7 +27,7 @@ export function useFileMenuLinkList(): { links: FileMenuLink[]; put: Put } {
       const at = now.findIndex((l) => l.id === id);
       if (!link) return at < 0 ? now : now.filter((l) => l.id !== id);
       const old = now[at];
-      if (old && old.label === link.label && old.href === link.href && old.detail === link.detail) return now;
+      if (old && old.label === link.label && old.href === link.href && old.detail === link.detail && !!old.onSelect === !!link.onSelect) return now;
       return at < 0 ? [...now, { ...link, id }] : now.map((l, i) => (i === at ? { ...link, id } : l));
     });
   }, []);
@@ -48,9 +50,16 @@ export function useFileMenuLink(id: string, link: Omit<FileMenuLink, "id"> | nul
   const label = link?.label;
   const href = link?.href;
   const detail = link?.detail;
+  // the latest action, called through one stable function (a new closure each render changes nothing)
+  const action = useRef(link?.onSelect);
+  useEffect(() => {
+    action.current = link?.onSelect;
+  });
+  const acts = !!link?.onSelect;
   useEffect(() => {
     if (!put) return;
-    put(id, label !== undefined && href !== undefined ? { id, label, href, detail } : null);
-  }, [put, id, label, href, detail]);
+    const onSelect = acts ? () => action.current?.() : undefined;
+    put(id, label !== undefined && (href !== undefined || onSelect) ? { id, label, href, detail, onSelect } : null);
+  }, [put, id, label, href, detail, acts]);
   useEffect(() => (put ? () => put(id, null) : undefined), [put, id]);
 }

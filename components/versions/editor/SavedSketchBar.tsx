@@ -21,6 +21,8 @@ import { announceSaved, watchSaved, type SavedElsewhere } from "./savedElsewhere
 import { sameDocument, type SaveFlow } from "./savedPersistence";
 import { NarrowLabel } from "@/components/editor/NarrowLabel";
 import { CalcSheetLink } from "@/components/versions/CalcSheetLink";
+import { RestoreDialog, type Restored } from "@/components/versions/RestoreDialog";
+import type { VersionItem } from "@/components/versions/VersionHistory";
 
 // on a touch screen 40 px tall, a finger's tap target (as the toolbar's own controls: components/editor/ui.ts)
 const CHIP = "h-7 pointer-coarse:h-10 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
@@ -170,6 +172,31 @@ function useReviewState(sketchId: string | undefined, base: number | null): Revi
   return q.data?.state ?? null;
 }
 
+/**
+ * What "Make vN the latest again" asks on top of: the newest version the server knows (a save
+ * since the editor opened counts; the restore dialog refreshes it after a 409), and, once asked,
+ * the facts of vN the dialog names (message, author, date).
+ */
+function useRestoreFacts(sketchId: string | undefined, base: number | null, asking: boolean, known: number) {
+  const sketchPath = sketchId ? `/api/sketches/${sketchId}` : "/none";
+  const sketchQ = useQuery({ queryKey: apiKey(sketchPath), queryFn: () => apiFetch<{ sketch: { latestVersion: number } }>(sketchPath), enabled: asking && !!sketchId });
+  const versionPath = sketchId && base !== null ? `/api/sketches/${sketchId}/versions/${base}` : "/none";
+  const versionQ = useQuery({
+    queryKey: apiKey(versionPath),
+    queryFn: () => apiFetch<{ version: Pick<VersionItem, "number" | "message" | "authorName" | "createdAt"> }>(versionPath),
+    enabled: asking && base !== null && !!sketchId,
+  });
+  return {
+    latest: Math.max(known, sketchQ.data?.sketch.latestVersion ?? 0),
+    version: versionQ.data?.version ?? null,
+    failed: sketchQ.isError || versionQ.isError,
+    retry: () => {
+      if (sketchQ.isError) void sketchQ.refetch();
+      if (versionQ.isError) void versionQ.refetch();
+    },
+  };
+}
+
 function Bar({ flow }: { flow: SaveFlow }) {
   const { info, base, pending, lastSaved, restored, restoredNotice, tab, savedElsewhere } = useStore(flow);
   const stores = useStores();
@@ -179,6 +206,10 @@ function Bar({ flow }: { flow: SaveFlow }) {
   const [error, setError] = useState<ApiError | null>(null);
   const [conflict, setConflict] = useState<{ latest: LatestVersion; message: string } | null>(null);
   const [forking, setForking] = useState(false);
+  // "Make vN the latest again…" on an older version (as on its page): asked, and done
+  const [restoring, setRestoring] = useState(false);
+  const [madeLatest, setMadeLatest] = useState<Restored | null>(null);
+  const restoreFacts = useRestoreFacts(info?.sketchId, base, restoring, info?.latest ?? 0);
   // the Bar mounts once the sketch has loaded, so `info` is known here
   // (only a closed tab's: a tab still open keeps its own, named by <OpenInAnotherTab>)
   const [draft, setDraft] = useState<Draft | null>(() => (info && !restored ? readDraft(info.sketchId) : null));
@@ -199,6 +230,17 @@ function Bar({ flow }: { flow: SaveFlow }) {
   const calcSheet = info && base !== null ? `/api/sketches/${info.sketchId}/versions/${base}/calc-sheet?units=${units}` : null;
   const calcSheetWords = dirty ? `The calc sheet (PDF) of v${base} as saved: your unsaved changes are not in it` : `The calc sheet (PDF) of v${base}`;
   useFileMenuLink("file.calcSheet", calcSheet ? { label: "Calc sheet (PDF)", href: calcSheet, detail: dirty ? `v${base} as saved: your unsaved changes are not in it` : `v${base} as saved` } : null);
+  // an older version, as saved, with nothing changed here: "Make vN the latest again…" (with
+  // changes, Save offers a fork or reload and compare instead); below 1280 px in the File menu
+  const askRestore = () => {
+    setRestoring(true);
+    if (restoreFacts.failed) restoreFacts.retry();
+  };
+  const offerLatest = !!info && base !== null && can(info.role, "version.save") && base < info.latest && !restored && !dirty && !madeLatest;
+  useFileMenuLink(
+    "file.makeLatest",
+    offerLatest ? { label: `Make v${base} the latest again…`, detail: `v${base}'s drawing saved as a new version; nothing is deleted`, onSelect: askRestore } : null,
+  );
   const leaving = useRef(false);
   const leave = (href: string) => {
     leaving.current = true;
@@ -330,6 +372,39 @@ function Bar({ flow }: { flow: SaveFlow }) {
       <Link href={`/workspaces/${info.workspaceId}/sketches/${info.sketchId}`} className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45`}>
         History
       </Link>
+      {/* below 1280 px the toolbar has no room for it: the File menu has it (offerLatest above) */}
+      {offerLatest ? (
+        <button
+          type="button"
+          onClick={askRestore}
+          className={`${CHIP} inline-flex items-center border border-ink/20 text-ink hover:border-ink/45 max-xl:hidden`}
+          title={`Save v${base}'s drawing as a new version on top of v${info.latest}; nothing is deleted`}
+          data-testid="make-latest"
+        >
+          Make v{base} the latest again…
+        </button>
+      ) : null}
+      {restoring && restoreFacts.failed ? (
+        <span role="alert" className="text-[12px] font-medium text-accent-deep">
+          v{base} could not be read to restore it: nothing was saved. Try again in a moment.
+        </span>
+      ) : null}
+      {restoring && restoreFacts.version ? (
+        <RestoreDialog
+          sketchId={info.sketchId}
+          sketchTitle={info.title}
+          version={restoreFacts.version}
+          latest={restoreFacts.latest}
+          onClose={() => setRestoring(false)}
+          onRestored={(made) => {
+            setRestoring(false);
+            setMadeLatest(made);
+            flow.setState({ info: { ...info, latest: made.number } });
+            announceSaved(info.sketchId, { version: made.number, at: new Date().toISOString() });
+            stores.editor.getState().notify(`Saved v${made.number} with the drawing of v${base}: it is the latest version now.`);
+          }}
+        />
+      ) : null}
 
       {pending && !conflict && !forking ? (
         <SaveDialog
@@ -397,6 +472,21 @@ function Bar({ flow }: { flow: SaveFlow }) {
             setDraft(null);
           }}
         />
+      ) : null}
+      {madeLatest ? (
+        <div role="status" data-testid="made-latest" className={`${CARD} border-ink/15 bg-paper-card`}>
+          <p>
+            Saved <strong>v{madeLatest.number}</strong> with the drawing of v{madeLatest.restoredFrom}: it is the latest version now.
+          </p>
+          <div className="mt-2 flex flex-wrap gap-2">
+            <button type="button" onClick={() => leave(`/sketches/${info.sketchId}`)} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
+              Open v{madeLatest.number}
+            </button>
+            <button type="button" onClick={() => setMadeLatest(null)} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+              Got it
+            </button>
+          </div>
+        </div>
       ) : null}
       {restored && restoredNotice ? (
         <div role="status" data-testid="restored-work" className={`${CARD} border-caution/40 bg-caution-soft`}>
