@@ -1,13 +1,13 @@
 // What a sign-off step tells others: mail to the people it concerns (never the one who took it),
 // an entry in the sketch's activity feed, and the approved version named in the listings.
-import { like } from "drizzle-orm";
+import { eq, like } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import * as activityRoute from "@/app/api/sketches/[id]/activity/route";
 import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import { db } from "@/db";
-import { devMail } from "@/db/schema";
+import { devMail, user } from "@/db/schema";
 import { call, withMailFake, makeTeam, waitForMail, type Json, type Person } from "./helpers";
 import { postSketch } from "./sketch-setup";
 
@@ -72,6 +72,43 @@ describe("a sign-off round tells the people involved", () => {
       ["signoff.check", checker.name],
       ["signoff.submit", author.name],
     ]);
+  });
+
+  it("a return mails its author the checker's note; a withdrawal mails the author and checker the reason; a checker with mail off hears of nothing", async () => {
+    const team = await makeTeam("Quiet bay", { lead: "owner", drafter: "editor", checker: "checker", quiet: "checker" }, { prefix: "notice-q" });
+    await db.update(user).set({ emailNotifications: false }).where(eq(user.id, team.quiet.id));
+    const title2 = `Returned skid ${Date.now()}`;
+    const id = await postSketch(team.ws, team.drafter, title2, "pipe-bend-anchor");
+    const before = (await db.select({ id: devMail.id }).from(devMail).orderBy(devMail.id)).at(-1)?.id ?? 0;
+    const step = (who: Person, s: string, note?: string) => call(signoffRoute.POST, { method: "POST", params: { id, number: "1" }, cookie: who.cookie, body: { step: s, ...(note ? { note } : {}) } });
+    expect((await step(team.drafter, "submit")).status).toBe(200);
+    expect((await step(team.checker, "return", "The anchor's moment arm is taken to the wrong face.")).status).toBe(200);
+    const returned = await waitForMail(team.drafter.email, { subject: /: returned with comments$/, after: before });
+    expect(returned.subject).toBe(`v1 of "${title2}": returned with comments`);
+    expect(returned.text).toContain(`${team.checker.name} returned version 1 of "${title2}".`);
+    expect(returned.text).toContain(`"The anchor's moment arm is taken to the wrong face."`);
+    expect(returned.text).toContain("Answer the comments, save a new version and submit it again.");
+    for (const [who, s] of [[team.drafter, "submit"], [team.checker, "check"], [team.lead, "approve"]] as const) expect((await step(who, s)).status).toBe(200);
+    expect((await step(team.lead, "withdraw", "The site changed the pump to a larger one.")).status).toBe(200);
+    const toDrafter = await waitForMail(team.drafter.email, { subject: /: approval withdrawn$/, after: before });
+    await waitForMail(team.checker.email, { subject: /: approval withdrawn$/, after: before });
+    expect(toDrafter.text).toContain(`"The site changed the pump to a larger one."`);
+    await new Promise((r) => setTimeout(r, 500));
+    const rows = (await db.select().from(devMail).where(like(devMail.subject, `%${title2}%`))).filter((m) => m.id > before);
+    const name = (to: string[]) => Object.entries(team).find(([, p]) => typeof p !== "string" && to.includes(p.email.toLowerCase()))?.[0] ?? to.join(", ");
+    expect(rows.map((m) => `${name(m.to)}: ${m.subject.split(": ").pop()}`).sort()).toEqual(
+      [
+        "checker: submitted for checking", // the first submit; the quiet checker gets neither
+        "drafter: returned with comments",
+        "checker: submitted for checking",
+        "drafter: checked",
+        "lead: checked",
+        "drafter: approved",
+        "checker: approved",
+        "drafter: approval withdrawn",
+        "checker: approval withdrawn", // the lead who approved withdrew it: not mailed
+      ].sort(),
+    );
   });
 
   it("the listing and the sketch name the approved version, and drop it once the approval is withdrawn", async () => {
