@@ -174,6 +174,11 @@ describe("attachments on comments", () => {
     const { commentId } = await sketchWithComment();
     const text = await attach(commentId, chen, textPretendingToBePng(), "photo.png", "image/png");
     expect(text.status).toBe(415);
+    expect(text.body.error.message).toBe("This file is not a PNG, JPEG or WebP image or a PDF (whatever its name says).");
+    // a PDF is kept whole, but one with no pages has nothing to show: refused like an underlay
+    const empty = await attach(commentId, chen, pdf(0), "blank.pdf", "application/pdf");
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.fields).toEqual([{ path: "file", message: "The PDF has no pages." }]);
     const file = await png(10, 10);
     for (let i = 0; i < MAX_ATTACHMENTS; i++) expect((await attach(commentId, chen, file, `p${i}.png`, "image/png")).status).toBe(201);
     const before = await bucketKeys(ws);
