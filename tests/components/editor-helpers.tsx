@@ -1,6 +1,8 @@
 // Rendering the editor under jsdom: in-memory persistence, a ResizeObserver stand-in, and the
 // store of the mounted editor for assertions.
-import { act, render, screen } from "@testing-library/react";
+import { act, render, screen, waitFor, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { expect } from "vitest";
 import { Editor } from "@/components/editor/Editor";
 import { scratchPersistence } from "@/canvas/persistence";
 import type { SketchFile } from "@/solver/schema";
@@ -84,4 +86,14 @@ export async function setUpSweep(user: { click: (e: Element) => Promise<void>; s
     await user.clear(screen.getByRole("textbox", { name }));
     await user.type(screen.getByRole("textbox", { name }), v);
   }
+}
+
+/** A change to save in a saved sketch's editor (beamWithInlet): the inlet's area typed anew, until the bar marks it unsaved. */
+export async function changeInletArea(value = "0.02") {
+  const user = userEvent.setup();
+  await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Inlet p1/ }));
+  const area = await screen.findByTestId("field-area");
+  await user.clear(area);
+  await user.type(area, `${value}{Enter}`);
+  await waitFor(() => expect(screen.getByTestId("version-label")).toHaveTextContent("unsaved"));
 }

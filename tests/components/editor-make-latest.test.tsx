@@ -7,7 +7,7 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Role } from "@/lib/roles";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
-import { beamWithInlet, jsonResponse } from "./editor-helpers";
+import { beamWithInlet, changeInletArea, jsonResponse } from "./editor-helpers";
 
 const search = { value: "version=1" };
 vi.mock("next/navigation", () => ({
@@ -121,12 +121,7 @@ describe("making an older version the latest again from the editor", () => {
   it("is withdrawn once the drawing is changed here (Save then offers a fork), and back when the change is undone", async () => {
     await open("editor", "1");
     expect(screen.getByRole("button", { name: "Make v1 the latest again…" })).toBeInTheDocument();
-    const user = userEvent.setup();
-    await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Inlet p1/ }));
-    const area = await screen.findByTestId("field-area");
-    await user.clear(area);
-    await user.type(area, "0.02{Enter}");
-    await waitFor(() => expect(screen.getByTestId("version-label")).toHaveTextContent("unsaved"));
+    await changeInletArea();
     expect(screen.queryByRole("button", { name: /latest again/ })).toBeNull();
     fireEvent.keyDown(document.body, { key: "z", ctrlKey: true });
     await waitFor(() => expect(screen.getByTestId("version-label")).not.toHaveTextContent("unsaved"));

@@ -3,12 +3,11 @@
 // the new one starts its own review (a saved version never changes; common practice for a
 // checked-and-approved calculation: a revision is checked and approved again).
 import { act, fireEvent, render, screen, waitFor, within } from "@testing-library/react";
-import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import type { ReviewState } from "@/lib/review/rules";
 import { reviewNote } from "@/components/versions/editor/reviewNote";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
-import { beamWithInlet, jsonResponse } from "./editor-helpers";
+import { beamWithInlet, changeInletArea, jsonResponse } from "./editor-helpers";
 
 vi.mock("next/navigation", () => ({
   useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
@@ -47,12 +46,7 @@ async function openAndSave(state: ReviewState | null) {
   await act(async () => {});
   await waitFor(() => expect(asked).toContain("/api/sketches/sk1/versions/3/signoff"));
   // a change to save: the inlet's area
-  const user = userEvent.setup();
-  await user.click(within(screen.getByRole("list", { name: "Elements of the sketch" })).getByRole("button", { name: /Inlet p1/ }));
-  const area = await screen.findByTestId("field-area");
-  await user.clear(area);
-  await user.type(area, "0.02{Enter}");
-  await waitFor(() => expect(screen.getByTestId("version-label")).toHaveTextContent("unsaved"));
+  await changeInletArea();
   fireEvent.keyDown(document.body, { key: "s", ctrlKey: true });
   return screen.findByTestId("save-dialog");
 }
