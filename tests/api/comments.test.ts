@@ -12,6 +12,7 @@ import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import { db } from "@/db";
 import { devMail, membership, user } from "@/db/schema";
 import { call, withMailFake, makeAccount, makeTeam, waitForMail, type Person, type Json } from "./helpers";
+import { authPoster } from "./auth-setup";
 import { fixture } from "./sketch-fixtures";
 import { postSketch } from "./sketch-setup";
 
@@ -197,6 +198,33 @@ describe("mentions", () => {
 
     const read = await list(id, vera);
     expect(read.body.threads[0].comments[0].mentions.map((m: { name: string }) => m.name).sort()).toEqual(["Chen Checkwell", "Eddie Drafter", "Olivia Lead", "Quinn Quiet"]);
+  });
+});
+
+describe("turning mention mail off and on again, from the account", () => {
+  it("a member's own switch (POST /api/auth/update-user) stops the mails and starts them again", async () => {
+    const vic = await makeAccount("comments-switch", { name: "Vic Switcher" });
+    await db.insert(membership).values({ workspaceId: ws, userId: vic.id, role: "checker" });
+    const setMail = (on: boolean) => authPoster("192.0.2.81")("/update-user", { emailNotifications: on }, { cookie: vic.cookie });
+    const id = await newSketch();
+    const mailsToVic = async (after: number) => (await db.select({ to: devMail.to, id: devMail.id }).from(devMail)).filter((m) => m.id > after && m.to.includes(vic.email.toLowerCase()));
+
+    expect((await setMail(false)).status).toBe(200);
+    const [row] = await db.select({ on: user.emailNotifications }).from(user).where(eq(user.id, vic.id));
+    expect(row.on).toBe(false);
+    const before = (await db.select({ id: devMail.id }).from(devMail).orderBy(devMail.id)).at(-1)?.id ?? 0;
+    expect((await post(id, chen, { body: "@Vic Switcher, the rear foot please." })).status).toBe(201);
+    // a mention of the author as well: once that one arrives, any mail to Vic would have been sent too
+    expect((await post(id, chen, { body: "@Eddie Drafter, and the bend." })).status).toBe(201);
+    await waitForMail(eddie.email, { subject: /mentioned you/, after: before });
+    await new Promise((r) => setTimeout(r, 500));
+    expect(await mailsToVic(before)).toEqual([]);
+
+    expect((await setMail(true)).status).toBe(200);
+    expect((await post(id, chen, { body: "@Vic Switcher, now the front foot." })).status).toBe(201);
+    const mail = await waitForMail(vic.email, { subject: /mentioned you/, after: before });
+    expect(mail.text).toContain("now the front foot");
+    expect(await mailsToVic(before)).toHaveLength(1);
   });
 });
 
