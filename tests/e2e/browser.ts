@@ -45,6 +45,24 @@ export async function openBrowser(): Promise<BrowserContext> {
   return context;
 }
 
+/** A phone's window (CSS pixels), as the phone-width stories use it. */
+export const PHONE = { width: 390, height: 844 };
+
+/** A fresh browser (1440 × 900) with one page open: the set-up of a story told in one window.
+ *  `permissions` (such as the clipboard's) are granted for the app's origin before the page opens. */
+export async function openPage(opts: { permissions?: string[] } = {}): Promise<{ ctx: BrowserContext; page: Page }> {
+  const ctx = await openBrowser();
+  if (opts.permissions) await ctx.grantPermissions(opts.permissions, { origin: BASE_URL });
+  return { ctx, page: await ctx.newPage() };
+}
+
+/** A new page in `ctx` sized to `viewport`: a phone's unless told otherwise. */
+export async function pageSized(ctx: BrowserContext, viewport = PHONE): Promise<Page> {
+  const page = await ctx.newPage();
+  await page.setViewportSize(viewport);
+  return page;
+}
+
 export async function shot(page: Page, name: string): Promise<string> {
   mkdirSync(SHOTS_DIR, { recursive: true });
   const path = join(SHOTS_DIR, `${name}.png`);

@@ -3,20 +3,16 @@
 // with the parameters its expressions read.
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BASE_URL, openBrowser, shot } from "./browser";
+import { openPage, shot } from "./browser";
 import { openScratch } from "./editor-helpers";
 
 describe("copy and paste", () => {
   let ctx: BrowserContext;
   let page: Page;
   beforeAll(async () => {
-    ctx = await openBrowser();
-    await ctx.grantPermissions(["clipboard-read", "clipboard-write"], { origin: BASE_URL });
-    page = await ctx.newPage();
+    ({ ctx, page } = await openPage({ permissions: ["clipboard-read", "clipboard-write"] }));
   });
-  afterAll(async () => {
-    await ctx?.close();
-  });
+  afterAll(() => ctx?.close());
 
   const count = async () => Number(/\((\d+)\)/.exec((await page.getByRole("heading", { name: /Elements/ }).textContent()) ?? "")?.[1]);
   const elements = () => page.getByRole("list", { name: "Elements of the sketch" });

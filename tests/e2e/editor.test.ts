@@ -6,7 +6,7 @@ import { readFileSync } from "node:fs";
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { solveFile, type SolveResult } from "@/solver/index";
-import { BASE_URL, openBrowser, shot } from "./browser";
+import { BASE_URL, openPage, shot } from "./browser";
 import { addParameter, clickAt, download, dragFromTo, emptySketchView, fill, form, openScratch, tray } from "./editor-helpers";
 
 const FIXTURE = "tests/fixtures/sketches/pipe-bend-anchor.json";
@@ -20,12 +20,9 @@ describe("sketch editor", () => {
   let ctx: BrowserContext;
   let page: Page;
   beforeAll(async () => {
-    ctx = await openBrowser();
-    page = await ctx.newPage();
+    ({ ctx, page } = await openPage());
   });
-  afterAll(async () => {
-    await ctx?.close();
-  });
+  afterAll(() => ctx?.close());
 
   it("builds the pipe bend from an empty sketch; the exported file solves to the fixture's answer", async () => {
     const fixture = JSON.parse(readFileSync(FIXTURE, "utf8"));

@@ -7,19 +7,16 @@
 // at the nozzle goes with the whole sketch mirrored (Shift+H) and comes back with Ctrl+Z.
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openBrowser, shot } from "./browser";
+import { openPage, shot } from "./browser";
 import { clickAt, emptySketchView, fill, form, openScratch, tray } from "./editor-helpers";
 
 describe("a monitor trailer built from an empty sketch", () => {
   let ctx: BrowserContext;
   let page: Page;
   beforeAll(async () => {
-    ctx = await openBrowser();
-    page = await ctx.newPage();
+    ({ ctx, page } = await openPage());
   });
-  afterAll(async () => {
-    await ctx?.close();
-  });
+  afterAll(() => ctx?.close());
 
   it("gives the hand calculation's axle reactions; P goes with a mirror of the whole sketch", async () => {
     await openScratch(page);

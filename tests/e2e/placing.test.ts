@@ -5,7 +5,7 @@
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
-import { openBrowser, shot } from "./browser";
+import { openPage, shot } from "./browser";
 import { clickAt, emptySketchView, form, openScratch } from "./editor-helpers";
 
 const SCRATCH_KEY = "counterpoise:scratch-sketch:v1";
@@ -26,12 +26,9 @@ describe("placing elements from the tray and the keyboard", () => {
   let ctx: BrowserContext;
   let page: Page;
   beforeAll(async () => {
-    ctx = await openBrowser();
-    page = await ctx.newPage();
+    ({ ctx, page } = await openPage());
   });
-  afterAll(async () => {
-    await ctx?.close();
-  });
+  afterAll(() => ctx?.close());
 
   it("says to draw a body first when the pin shortcut is pressed on an empty sketch", async () => {
     await openScratch(page);

@@ -4,7 +4,7 @@
 // open, solve and explain themselves.
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BASE_URL, openBrowser, shot } from "./browser";
+import { BASE_URL, openPage, shot } from "./browser";
 import { readFileSync } from "node:fs";
 import { download, dragFromTo } from "./editor-helpers";
 import { handlePlace } from "@/canvas/render/handles";
@@ -44,16 +44,13 @@ describe("live results", () => {
   let ctx: BrowserContext;
   let page: Page;
   beforeAll(async () => {
-    ctx = await openBrowser();
-    page = await ctx.newPage();
+    ({ ctx, page } = await openPage());
     await page.goto(BASE_URL + "/sketches/new");
     await page.getByTestId("sketch-canvas").waitFor();
     await page.getByTestId("import-input").setInputFiles({ name: "beam.json", mimeType: "application/json", buffer: Buffer.from(JSON.stringify(BEAM)) });
     await page.getByText("Beam with a weight and a jet").first().waitFor();
   });
-  afterAll(async () => {
-    await ctx?.close();
-  });
+  afterAll(() => ctx?.close());
 
   it("drags the weight toward the contact and the contact's reaction grows", async () => {
     await expect.poll(() => sentence(page)).toMatch(/^HoldsHolds — all supports within their limits/);
