@@ -219,6 +219,10 @@ const NAME_START = "(?<![A-Za-z_]\\w*)";
 const DIGIT_POWER = new RegExp(`${NAME_START}(?:(mm|cm|km|m|ft|in|yd)([23])|(s)(2))\\b(?!\\s*[(^])`, "g");
 /** a unit (or its square or cube) per h: km/h, kg/h, m^3/h, L/h */
 const PER_H = new RegExp(`${NAME_START}(${UNIT_PATTERN}|L|l)(\\^[23])?(\\s*\\/\\s*)h\\b(?!\\s*[(^])`, "g");
+/** L/min and L/s (or l): not `L / min(a, b)`, not `L/s^2`, not the end of a longer name */
+const LITRES_PER_MINUTE = new RegExp(`${NAME_START}([Ll])\\s*\\/\\s*min\\b(?!\\s*\\()`, "g");
+const LITRES_PER_SECOND = new RegExp(`${NAME_START}([Ll])\\s*\\/\\s*s\\b(?!\\s*[(^])`, "g");
+const LITRES_PER = new RegExp(`${NAME_START}([Ll])\\s*\\/\\s*(min|s|h)\\b`, "g");
 /** feet and inches together, "5 ft 3 in" (mathjs multiplies them into an area) */
 const FEET_INCHES = /(?<![\w.])(\d+(?:\.\d+)?)\s*(ft|foot|feet)\s+(\d+(?:\.\d+)?)\s*(in|inch)\b(?!\s*[\w(^])/g;
 /** a force and a length joined by a hyphen or a point, as torques are written (kN-m, kN.m, lbf-ft, ft-lb) */
@@ -231,21 +235,43 @@ const GAUGE = /(?<![A-Za-z_]\w*)(psi|bar|kPa|MPa)g\b/g;
 /** digits grouped by spaces, as SI writes them: 12 500, 1 000 000 (also thin spaces) */
 const SPACE_GROUPS = /(?<![\w.])(\d{1,3})((?:[ \u2009\u202f]\d{3})+)(?!\d)/g;
 
-/** m3 → m^3 (s2 → s^2) unless a parameter has that name. */
+/** The text before a position ends in a number: "600 " or "2" before "L/min", "m3". */
+const AFTER_NUMBER = /(?<![\w.])\d+(?:\.\d+)?(?:[eE][+-]?\d+)?\s*$/;
+/** …or in a unit and a slash or a product sign written tight against it: "kg/" before "m3". */
+const AFTER_UNIT_TIGHT = new RegExp(`${NAME_START}(?:${UNIT_PATTERN}|lpm|lps)(?:\\^[23])?[/*]$`);
+/**
+ * Part of a quantity as written: right after a number ("2 m3", "600 L/min", "50 psig"), or inside
+ * a compound unit, after a unit and a slash or product sign with no space ("1000 kg/m3"). There a
+ * name is the unit whatever the parameters are called; anywhere else a parameter of the same name
+ * wins (see DEVELOPERS.md, "Units beside parameters of the same name").
+ */
+const inQuantity = (source: string, offset: number): boolean => {
+  const before = source.slice(0, offset);
+  return AFTER_NUMBER.test(before) || AFTER_UNIT_TIGHT.test(before);
+};
+
+/** m3 → m^3 (s2 → s^2) in a quantity, or unless a parameter has that name. */
 const digitPower =
   (parameterNames: ReadonlySet<string>) =>
-  (all: string, unit?: string, power?: string, second?: string, secondPower?: string): string => {
+  (all: string, unit: string | undefined, power: string | undefined, second: string | undefined, secondPower: string | undefined, offset: number, source: string): string => {
     const [u, p] = unit ? [unit, power!] : [second!, secondPower!];
-    return parameterNames.has(`${u}${p}`) ? all : `${u}^${p}`;
+    return parameterNames.has(`${u}${p}`) && !inQuantity(source, offset) ? all : `${u}^${p}`;
   };
 
+/** "/h" tight against a unit ("km/h", "m^3/h": no space either side of the slash) is per hour. */
+const tightSlash = (slash: string) => slash === "/";
+
 /** Text users type that mathjs does not read: 30°, N·m, m², m3, m/s2, kN-m, kN.m, L/min, L/s,
- *  km/h, 5 ft 3 in, 5' 3", psig, 12 500, the minus sign. "L/min" is litres per minute only when it
- *  cannot be anything else: not `L / min(a, b)`, and not when a parameter is called L (or l); "L/s"
- *  is litres per second on the same terms (the app writes flows in L/s, so what it shows can be
- *  typed back). "/h" after a unit (km/h, m³/h, kg/h, L/h) is per hour only when no parameter is
- *  called h (with one, "W/h" is a division), and not in `h(…)` or `h^2`; "m3" is m³ (and "psig"
- *  psi) only when no parameter has that name. */
+ *  km/h, 5 ft 3 in, 5' 3", psig, 12 500, the minus sign. Beside a parameter of the same name:
+ *  - "/h" tight against a unit (km/h, m³/h, kg/h, L/h) is per hour, parameter h or not; with
+ *    spaces ("6 kN*m / h") or after anything but a unit ("W/h", "2/h") h is the parameter (with
+ *    no parameter h a spaced "km / h" is still per hour: nothing else it could be). Never in
+ *    `h(…)` or `h^2`.
+ *  - "L/min", "L/s", "L/h" (and l) right after a number ("600 L/min") are litres per minute,
+ *    second, hour; elsewhere a parameter called L is L ("L/min" then divides it by a minute).
+ *    Never `L / min(a, b)`.
+ *  - "m3", "mm2", "s2", "psig", "barg" right after a number or tight after a unit ("2 m3",
+ *    "1000 kg/m3", "50 psig") are units; elsewhere a parameter of that name wins. */
 export function normaliseExpressionText(text: string, parameterNames: ReadonlySet<string> = new Set()): string {
   return text
     .replace(/°/g, " deg")
@@ -257,31 +283,47 @@ export function normaliseExpressionText(text: string, parameterNames: ReadonlySe
     .replace(DIGIT_POWER, digitPower(parameterNames))
     .replace(FOOT_MARK, "$1 ft ")
     .replace(INCH_MARK, "$1 in ")
-    .replace(GAUGE, (all, unit: string) => (parameterNames.has(all) ? all : unit))
+    .replace(GAUGE, (all, unit: string, offset: number, source: string) => (parameterNames.has(all) && !inQuantity(source, offset) ? all : unit))
     .replace(HYPHEN_MOMENT, (_all, force?: string, length?: string, lengthFirst?: string, forceAfter?: string) =>
       force ? `${force}*${length}` : `${lengthFirst}*${forceAfter === "lb" ? "lbf" : forceAfter}`,
     )
     .replace(FEET_INCHES, (_all, feet: string, ft: string, inches: string, inch: string) => `(${feet} ${ft} + ${inches} ${inch})`)
-    .replace(PER_H, (all, unit: string, power: string | undefined, slash: string) => {
-      if (parameterNames.has("h")) return all;
-      if (unit === "L" || unit === "l") return parameterNames.has(unit) ? all : `litre${power ?? ""}${slash}hr`;
-      return `${unit}${power ?? ""}${slash}hr`;
+    .replace(PER_H, (all, unit: string, power: string | undefined, slash: string, offset: number, source: string) => {
+      const litre = unit === "L" || unit === "l";
+      // the parameter L is not a unit, so neither is an h after it
+      if (litre && parameterNames.has(unit) && !inQuantity(source, offset)) return all;
+      if (parameterNames.has("h") && !tightSlash(slash)) return all;
+      return `${litre ? "litre" : unit}${power ?? ""}${slash}hr`;
     })
-    .replace(/\b([Ll])\s*\/\s*min\b(?!\s*\()/g, (all, letter: string) => (parameterNames.has(letter) ? all : "lpm"))
-    .replace(/\b([Ll])\s*\/\s*s\b(?!\s*[(^])/g, (all, letter: string) => (parameterNames.has(letter) ? all : "lps"))
+    .replace(LITRES_PER_MINUTE, (all, letter: string, offset: number, source: string) => (parameterNames.has(letter) && !inQuantity(source, offset) ? all : "lpm"))
+    .replace(LITRES_PER_SECOND, (all, letter: string, offset: number, source: string) => (parameterNames.has(letter) && !inQuantity(source, offset) ? all : "lps"))
     .trim();
 }
 
-/** With a parameter called h, "3.6 km/h" is km divided by h: when such a field fails, the words
- *  that say so (null when the text has no unit per h, or no parameter h). */
-export function perHourNote(text: string, parameterNames: ReadonlySet<string>): string | null {
-  if (!parameterNames.has("h")) return null;
-  const source = text.replace(/³/g, "^3").replace(/²/g, "^2").replace(DIGIT_POWER, digitPower(parameterNames));
-  PER_H.lastIndex = 0;
-  const m = PER_H.exec(source);
-  if (!m || ((m[1] === "L" || m[1] === "l") && parameterNames.has(m[1]))) return null;
-  const unit = `${m[1]}${m[2] ?? ""}`;
-  return `"${unit}/h" reads ${unit} divided by the parameter h here, not per hour: write per hour as ${unit}/hr`;
+/**
+ * When a field fails (or comes out a plain number) and its text has a reading that a parameter
+ * of the same name would have given otherwise, the words that say which reading was taken and
+ * how to write the other; null when there is no such place. The readings themselves are
+ * `normaliseExpressionText`'s.
+ */
+export function readingNote(text: string, parameterNames: ReadonlySet<string>): string | null {
+  const source = text.replace(/³/g, "^3").replace(/²/g, "^2").replace(/−/g, "-").replace(DIGIT_POWER, digitPower(parameterNames));
+  if (parameterNames.has("h")) {
+    for (const m of source.matchAll(PER_H)) {
+      const [, unit, power, slash] = m;
+      if ((unit === "L" || unit === "l") && parameterNames.has(unit) && !inQuantity(source, m.index)) continue;
+      const u = `${unit}${power ?? ""}`;
+      return tightSlash(slash)
+        ? `"${u}/h" is per hour here (h written tight against a unit is the hour); to divide by the parameter h, write ${u} / h with spaces`
+        : `"${u} / h" divides by the parameter h here (with spaces); for per hour write ${u}/h with no spaces`;
+    }
+  }
+  for (const m of source.matchAll(LITRES_PER)) {
+    if (!parameterNames.has(m[1]) || !inQuantity(source, m.index)) continue;
+    const number = AFTER_NUMBER.exec(source.slice(0, m.index))![0].trim();
+    return `"${number} ${m[1]}/${m[2]}" is litres per ${m[2] === "min" ? "minute" : m[2] === "s" ? "second" : "hour"} here (a unit right after a number); to multiply by the parameter ${m[1]}, write ${number}*${m[1]}/${m[2]}`;
+  }
+  return null;
 }
 
 export interface CompiledExpression {
@@ -407,7 +449,7 @@ function compileUncached(text: string, parameterNames: ReadonlySet<string>): Com
 function functionAsNameMessage(name: string, source: string, parameterNames: ReadonlySet<string>): string {
   const letter = /\b([Ll])\s*\/\s*min\b/.exec(source)?.[1];
   if (name === "min" && letter && parameterNames.has(letter))
-    return `"${letter}/min" reads the parameter ${letter} divided by min here, not litres per minute: write litres per minute as lpm`;
+    return `"${letter}/min" reads the parameter ${letter} divided by min here, not litres per minute: litres per minute are ${letter}/min right after a number (600 ${letter}/min), or lpm`;
   return `"${name}" is a function: call it with its arguments, as in ${name}(…)`;
 }
 

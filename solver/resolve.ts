@@ -4,7 +4,7 @@
 import {
   compileExpression,
   describeValue,
-  perHourNote,
+  readingNote,
   toFieldNumber,
   unitlessTrigWarning,
   type CompiledExpression,
@@ -126,8 +126,8 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
       for (const d of expr.deps) for (const id of ids) (readers.get(d) ?? readers.set(d, new Set()).get(d)!).add(id);
       if (missing.length) throw new Error(`reads parameter ${missing.join(", ")}, which has an error`);
       const evaluated = expr.evaluate(scope);
-      // "3.6 km/h" with a parameter h of length cancels to a plain number, which a field would take as SI
-      if (typeof evaluated === "number" && kind !== "ratio" && perHourNote(raw, names)) throw new Error(`"${raw}" gives a plain number here (${Number(evaluated.toPrecision(6))})`);
+      // "3.6 km / h" with a parameter h of length cancels to a plain number, which a field would take as SI
+      if (typeof evaluated === "number" && kind !== "ratio" && readingNote(raw, names)) throw new Error(`"${raw}" gives a plain number here (${Number(evaluated.toPrecision(6))})`);
       const value = toFieldNumber(evaluated, kind);
       target[key] = value;
       fields[path] = { value };
@@ -140,8 +140,9 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
     } catch (err) {
       // an unknown name's error suggests units of the field's own kind ("kg, tonne, lb" for a mass)
       const said = suggestUnitsFor((err as Error).message, kind);
-      // "3.6 km/h" beside a parameter h is km divided by it: say so where the field fails
-      const note = perHourNote(raw, names);
+      // "6 kN*m/h" beside a parameter h is per hour, "600 L/min" beside a parameter L litres: say
+      // which reading was taken, and how to write the other, where the field fails
+      const note = readingNote(raw, names);
       const message = note ? `${said}; ${note}` : said;
       errors.push({ path, message });
       fields[path] = { error: message };

@@ -184,11 +184,13 @@ describe("L/min is litres per minute only when it can be nothing else", () => {
     if (p.ok) expect(p.fields["bodies[0].mass"]).toEqual({ value: 3 });
   });
 
-  it("with a parameter called L, 'L/min' is not rewritten, and the error says why", () => {
-    expect(normaliseExpressionText("600 L/min", new Set(["L"]))).toBe("600 L/min");
+  it("with a parameter called L, 'L/min' right after a number is still litres per minute; elsewhere L is the parameter, and the error says why", () => {
+    expect(normaliseExpressionText("600 L/min", new Set(["L"]))).toBe("600 lpm");
+    expect(normaliseExpressionText("600L/min", new Set(["L"]))).toBe("600lpm");
     expect(normaliseExpressionText("600 L/min", new Set(["a"]))).toBe("600 lpm");
-    expect(() => compileExpression("600 L/min", new Set(["L"]))).toThrow(
-      '"L/min" reads the parameter L divided by min here, not litres per minute: write litres per minute as lpm',
+    expect(normaliseExpressionText("2*L/min", new Set(["L"]))).toBe("2*L/min");
+    expect(() => compileExpression("2*L/min", new Set(["L"]))).toThrow(
+      '"L/min" reads the parameter L divided by min here, not litres per minute: litres per minute are L/min right after a number (600 L/min), or lpm',
     );
   });
 });
@@ -200,8 +202,9 @@ describe("litres per second, as the app writes flows", () => {
     expect((evaluateTyped("600 L/min") as Unit).toNumber("m^3/s")).toBeCloseTo(0.01, 12);
   });
 
-  it("with a parameter called L, 'L/s' stays L divided by seconds", () => {
-    expect(normaliseExpressionText("40 L/s", new Set(["L"]))).toBe("40 L/s");
+  it("with a parameter called L, 'L/s' right after a number is litres per second; elsewhere L divided by seconds", () => {
+    expect(normaliseExpressionText("40 L/s", new Set(["L"]))).toBe("40 lps");
+    expect(normaliseExpressionText("rho*L/s", new Set(["L", "rho"]))).toBe("rho*L/s");
     expect(normaliseExpressionText("40 L/s", new Set(["a"]))).toBe("40 lps");
     // a power of a second is not a flow
     expect(normaliseExpressionText("L/s^2", new Set())).toBe("L/s^2");

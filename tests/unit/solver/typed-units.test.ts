@@ -1,6 +1,7 @@
 // Units as engineers type them: per hour (km/h, m³/h, kg/h, L/h), powers as digits (m3, mm2),
 // torques with a hyphen (kN-m, ft-lb), feet and inches together, digits grouped by spaces, and the
-// thousands comma told apart from a decimal comma. A parameter of the same name always wins.
+// thousands comma told apart from a decimal comma. Beside a parameter of the same name, a unit
+// right after a number or tight inside a compound unit stays the unit; anywhere else the parameter wins.
 import { describe, expect, it } from "vitest";
 import { compileExpression, evaluateToNumber, evaluateTyped, normaliseExpressionText } from "@/solver/expressions";
 import { typedValueWords } from "@/canvas/studies/display";
@@ -53,12 +54,24 @@ describe("per hour after a unit, when no parameter is called h", () => {
     expect(massOf(withMass({ Q: "72 m³/h", rho: "1000 kg/m3" }, "Q * rho * 1 s"))).toBeCloseTo(20, 12);
   });
 
-  it("with a parameter called h, x/h is a division and km/h is km divided by h", () => {
-    expect(normaliseExpressionText("3.6 km/h", new Set(["h"]))).toBe("3.6 km/h");
+  it("with a parameter called h, h used as a value divides: x/h, W / h, and a unit / h with spaces", () => {
     expect(massOf(withMass({ h: "2 m", W: "10 kg*m" }, "W/h"))).toBe(5);
     expect(massOf(withMass({ h: 4, W: "10 kg" }, "W / h"))).toBe(2.5);
-    // a unit per h with h a parameter: a moment over a height (kg·m / m) stays a division
-    expect(massOf(withMass({ h: "2 m" }, "6 kg*m/h"))).toBe(3);
+    expect(massOf(withMass({ h: 4 }, "(10 kg)/h"))).toBe(2.5);
+    // a moment over a height (kg·m / m), the slash spaced: the parameter
+    expect(normaliseExpressionText("6 kg*m / h", new Set(["h"]))).toBe("6 kg*m / h");
+    expect(massOf(withMass({ h: "2 m" }, "6 kg*m / h"))).toBe(3);
+  });
+
+  it("with a parameter called h, /h tight against a unit is still per hour: 3.6 km/h, 50 m³/h, 3600 kg/h, 1000 L/h", () => {
+    const h = new Set(["h"]);
+    expect(normaliseExpressionText("3.6 km/h", h)).toBe("3.6 km/hr");
+    expect(normaliseExpressionText("50 m³/h", h)).toBe("50 m^3/hr");
+    expect(normaliseExpressionText("50 m3/h", h)).toBe("50 m^3/hr");
+    expect(normaliseExpressionText("1000 L/h", h)).toBe("1000 litre/hr");
+    expect(massOf(withMass({ h: "2 m" }, "3600 kg/h * 1 s"))).toBeCloseTo(1, 14);
+    // 1 h = 3600 s (NIST SP 811, Table 6)
+    expect(massOf(withMass({ h: "2 m", Q: "50 m³/h" }, "Q * 1000 kg/m3 * 72 s"))).toBeCloseTo(1000, 10);
   });
 
   it("h followed by a call or a power is never an hour", () => {
@@ -204,19 +217,72 @@ describe("a value as a case writes it, in words", () => {
 });
 
 describe("km/h beside a parameter h", () => {
-  it("a field that fails says that /h is the parameter here, and how to write per hour", () => {
-    const errors = errorsOf(besideH({ velocity: "3.6 km/h" }));
-    expect(errors).toHaveLength(1);
-    expect(errors[0].path).toBe("ports[0].velocity");
-    expect(errors[0].message).toMatch(/^"3.6 km\/h" gives a plain number here \(1800\); "km\/h" reads km divided by the parameter h here, not per hour: write per hour as km\/hr$/);
-  });
-
-  it("a unit over the parameter h that keeps a unit is a plain division, with no note", () => {
-    // a 6 kN·m couple over a 2 m lever: 3 kN
-    expect(parsed(besideH({ push: "6 kN*m/h" })).loads[0]).toMatchObject({ magnitude: 3000 });
-  });
-
-  it("the same field with km/hr reads 1 m/s", () => {
+  it("3.6 km/h reads 1 m/s, as km/hr does", () => {
+    expect(parsed(besideH({ velocity: "3.6 km/h" })).ports[0].velocity).toBeCloseTo(1, 14);
     expect(parsed(besideH({ velocity: "3.6 km/hr" })).ports[0].velocity).toBeCloseTo(1, 14);
+  });
+
+  it("spaced, km / h divides by the parameter: the field fails as a plain number, and the words say how to write per hour", () => {
+    const errors = errorsOf(besideH({ velocity: "3.6 km / h" }));
+    expect(errors).toEqual([
+      {
+        path: "ports[0].velocity",
+        message: '"3.6 km / h" gives a plain number here (1800); "km / h" divides by the parameter h here (with spaces); for per hour write km/h with no spaces',
+      },
+    ]);
+  });
+
+  it("a moment over the lever h: spaced it divides (6 kN·m over 2 m is 3 kN); tight it is per hour, and the error says how to divide", () => {
+    expect(parsed(besideH({ push: "6 kN*m / h" })).loads[0]).toMatchObject({ magnitude: 3000 });
+    const errors = errorsOf(besideH({ push: "6 kN*m/h" }));
+    expect(errors).toHaveLength(1);
+    expect(errors[0].path).toBe("loads[0].magnitude");
+    expect(errors[0].message).toMatch(/; "m\/h" is per hour here \(h written tight against a unit is the hour\); to divide by the parameter h, write m \/ h with spaces$/);
+  });
+});
+
+describe("litres and digit powers beside a parameter of the same name", () => {
+  const flowWith = (parameters: Record<string, string>, volumeFlow: string) =>
+    sketch({
+      parameters,
+      bodies: [{ id: "b", outline: box(1, 1), mass: 10 }],
+      supports: [{ id: "left", body: "b", kind: "fixed", at: [0, 0] }],
+      ports: [{ id: "jet", body: "b", kind: "outlet", at: [1, 0.5], angle: 0, density: 1000, volumeFlow, area: 0.01 }],
+    });
+
+  it("600 L/min and 40 L/s right after a number are litres whatever L is (1 L = 0.001 m³, SI Brochure, 9th ed., Table 8)", () => {
+    expect(parsed(flowWith({ L: "3 m" }, "600 L/min")).ports[0].volumeFlow).toBeCloseTo(0.01, 15);
+    expect(parsed(flowWith({ L: "3 m" }, "40 L/s")).ports[0].volumeFlow).toBeCloseTo(0.04, 15);
+  });
+
+  it("L used as a value is the parameter: 0.02 m² times L = 3 m per minute is 0.001 m³/s", () => {
+    expect(parsed(flowWith({ L: "3 m" }, "0.02 m^2 * L/(60 s)")).ports[0].volumeFlow).toBeCloseTo(0.001, 15);
+  });
+
+  it("a failing field with litres after a number beside the parameter L says how to multiply by it", () => {
+    const errors = errorsOf(
+      sketch({
+        parameters: { L: "3 m" },
+        bodies: [{ id: "b", outline: box(1, 1), mass: "600 L/min" }],
+        supports: [{ id: "left", body: "b", kind: "fixed", at: [0, 0] }],
+      }),
+    );
+    expect(errors).toHaveLength(1);
+    expect(errors[0].message).toMatch(/; "600 L\/min" is litres per minute here \(a unit right after a number\); to multiply by the parameter L, write 600\*L\/min$/);
+  });
+
+  it("with a parameter called m3, 1000 kg/m3 and 2 m3 are still the units; m3 on its own is the parameter", () => {
+    const names = new Set(["m3"]);
+    expect(normaliseExpressionText("1000 kg/m3", names)).toBe("1000 kg/m^3");
+    expect(normaliseExpressionText("2 m3", names)).toBe("2 m^3");
+    expect(normaliseExpressionText("2*m3 + x/m3", names)).toBe("2*m3 + x/m3");
+    // a parameter density 1000 kg/m3 times 0.002 m3: 2 kg, with m3 = 5 kg beside it
+    expect(massOf(withMass({ m3: "5 kg", rho: "1000 kg/m3" }, "rho * 0.002 m3"))).toBeCloseTo(2, 12);
+  });
+
+  it("50 psig right after a number is psi whatever psig is; psig alone is the parameter", () => {
+    const names = new Set(["psig"]);
+    expect(normaliseExpressionText("50 psig", names)).toBe("50 psi");
+    expect(normaliseExpressionText("2*psig", names)).toBe("2*psig");
   });
 });
