@@ -28,6 +28,11 @@ export function ReviewQueue({ workspaceId, items }: { workspaceId: string; items
               <span className="text-xs text-ink-soft">
                 prepared by {i.authorName ?? "a deleted account"} · {i.state === "withdrawn" ? "approval withdrawn" : a.since} {formatDateTime(i.since)}
               </span>
+              {i.newer ? (
+                <span className="text-xs text-caution" data-testid="queue-newer">
+                  v{i.newer} was saved since: {i.action === "approve" ? "an approval" : "a check"} here is of v{i.number} only
+                </span>
+              ) : null}
             </li>
           );
         })}

@@ -7,7 +7,17 @@ import type { Role } from "@/lib/roles";
 import { allowedSteps, newerThan, type ReviewState } from "./rules";
 
 export type QueueAction = "check" | "approve" | "revise";
-export type QueueItem = { sketchId: string; sketchTitle: string; number: number; state: ReviewState; authorName: string | null; since: string; action: QueueAction };
+export type QueueItem = {
+  sketchId: string;
+  sketchTitle: string;
+  number: number;
+  state: ReviewState;
+  authorName: string | null;
+  since: string;
+  action: QueueAction;
+  /** the sketch's latest version when a newer one was saved since (a check or approval is of this version only) */
+  newer: number | null;
+};
 
 export async function reviewQueueFor(workspaceId: string, userId: string, role: Role): Promise<QueueItem[]> {
   const rows = await listVersionsInReview(workspaceId);
@@ -21,7 +31,7 @@ export async function reviewQueueFor(workspaceId: string, userId: string, role: 
     // a returned version, or one whose approval was withdrawn, is its author's to revise until a
     // newer version of the sketch is saved
     else if ((r.state === "returned" || r.state === "withdrawn") && isAuthor && r.number === r.latestVersion) action = "revise";
-    if (action) out.push({ sketchId: r.sketchId, sketchTitle: r.sketchTitle, number: r.number, state: r.state, authorName: r.authorName, since: r.since.toISOString(), action });
+    if (action) out.push({ sketchId: r.sketchId, sketchTitle: r.sketchTitle, number: r.number, state: r.state, authorName: r.authorName, since: r.since.toISOString(), action, newer: newerThan(r) });
   }
   return out;
 }

@@ -6,7 +6,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import * as queueRoute from "@/app/api/workspaces/[id]/review-queue/route";
 import * as signoffRoute from "@/app/api/sketches/[id]/versions/[number]/signoff/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
-import { call, withMailFake, makeAccount, makeTeam, type Person } from "./helpers";
+import { call, withMailFake, makeAccount, makeTeam, type Json, type Person } from "./helpers";
 import { fixture } from "./sketch-fixtures";
 import { postSketch } from "./sketch-setup";
 
@@ -64,5 +64,21 @@ describe("the sign-off steps waiting for each person", () => {
     await step(b, 1, owner, "withdraw", "The bend's angle changed on site.");
     expect(await queueOf(editor)).toEqual(["revise Bend B v1"]);
     expect(await queueOf(owner)).toEqual(["check Bend A v1"]);
+  });
+
+  it("a submitted version with a newer one saved since stays to check, and says which version is newer; the newer one joins once submitted", async () => {
+    const d = await sketchBy(editor, "Bend D");
+    await step(d, 1, editor, "submit");
+    const items = async (who: Person) => ((await call(queueRoute.GET, { params: { id: ws }, cookie: who.cookie })).body.items as Json[]).filter((i) => i.sketchTitle === "Bend D").map((i) => [i.action, i.number, i.newer]).sort((a, b) => a[1] - b[1]);
+    expect(await items(checker)).toEqual([["check", 1, null]]);
+    const doc = fixture("pipe-bend-anchor") as { parameters: Record<string, string> };
+    const saved = await call(versionsRoute.POST, { method: "POST", params: { id: d }, cookie: editor.cookie, body: { baseVersion: 1, message: "Bend turned", document: { ...doc, parameters: { ...doc.parameters, theta: "75 deg" } } } });
+    expect(saved.status).toBe(201);
+    expect(await items(checker)).toEqual([["check", 1, 2]]);
+    await step(d, 2, editor, "submit");
+    expect(await items(checker)).toEqual([
+      ["check", 1, 2],
+      ["check", 2, null],
+    ]);
   });
 });
