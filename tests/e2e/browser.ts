@@ -6,6 +6,9 @@ import { chromium, type Browser, type BrowserContext, type Page } from "playwrig
 
 export const BASE_URL = process.env.E2E_BASE_URL || "http://127.0.0.1:3100";
 export const SHOTS_DIR = join(process.cwd(), "test-results", "screenshots");
+/** The desktop window every browser opens with, and a phone's (CSS pixels). */
+export const DESKTOP = { width: 1440, height: 900 };
+export const PHONE = { width: 390, height: 844 };
 
 const CHROMIUM_PATH = process.env.CHROMIUM_PATH || "/usr/bin/chromium";
 const CHROMIUM_ARGS = [
@@ -28,7 +31,7 @@ export async function openBrowser(): Promise<BrowserContext> {
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: CHROMIUM_PATH,
     headless: true,
-    viewport: { width: 1440, height: 900 },
+    viewport: DESKTOP,
     acceptDownloads: true,
     args: CHROMIUM_ARGS,
   });
@@ -45,9 +48,6 @@ export async function openBrowser(): Promise<BrowserContext> {
   return context;
 }
 
-/** A phone's window (CSS pixels), as the phone-width stories use it. */
-export const PHONE = { width: 390, height: 844 };
-
 /** A fresh browser (1440 × 900) with one page open: the set-up of a story told in one window.
  *  `permissions` (such as the clipboard's) are granted for the app's origin before the page opens. */
 export async function openPage(opts: { permissions?: string[] } = {}): Promise<{ ctx: BrowserContext; page: Page }> {
@@ -56,11 +56,14 @@ export async function openPage(opts: { permissions?: string[] } = {}): Promise<{
   return { ctx, page: await ctx.newPage() };
 }
 
-/** A new page in `ctx` sized to `viewport`: a phone's unless told otherwise. */
-export async function pageSized(ctx: BrowserContext, viewport = PHONE): Promise<Page> {
-  const page = await ctx.newPage();
+/** Runs `story` with the page's window at `viewport`, then gives it the desktop window back, pass or fail. */
+export async function atViewport(page: Page, viewport: { width: number; height: number }, story: () => Promise<void>): Promise<void> {
   await page.setViewportSize(viewport);
-  return page;
+  try {
+    await story();
+  } finally {
+    await page.setViewportSize(DESKTOP);
+  }
 }
 
 export async function shot(page: Page, name: string): Promise<string> {

@@ -1,10 +1,11 @@
 // The dark theme follows the operating system: with prefers-color-scheme dark the page is the dark
 // paper and the text the dark ink, the drawings stay light sheets, print stays light, and axe finds no
 // colour-contrast failure. On a phone the home page's diagram takes its narrow layout, labels readable.
-import type { BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { seriousViolations } from "./axe";
-import { BASE_URL, openBrowser, shot } from "./browser";
+import { BASE_URL, PHONE, shot } from "./browser";
+import { sharedBrowser } from "./session";
 
 // the palettes of app/globals.css as the browser computes them
 const DARK_PAPER = "rgb(27, 32, 37)";
@@ -23,16 +24,10 @@ const colours = (page: Page, selector: string) =>
   page.locator(selector).first().evaluate((el) => ({ background: getComputedStyle(el).backgroundColor, color: getComputedStyle(el).color }));
 
 describe("dark theme (prefers-color-scheme: dark)", () => {
-  let ctx: BrowserContext;
-  beforeAll(async () => {
-    ctx = await openBrowser();
-  });
-  afterAll(async () => {
-    await ctx?.close();
-  });
+  const browser = sharedBrowser();
 
   it("the home page: dark paper, light ink, its diagram on a light sheet, no contrast failures; print and light stay light", async () => {
-    const page = await ctx.newPage();
+    const page = await browser.newPage();
     await page.emulateMedia({ colorScheme: "dark" });
     await page.goto(`${BASE_URL}/`);
     await page.getByRole("heading", { level: 1 }).waitFor();
@@ -54,7 +49,7 @@ describe("dark theme (prefers-color-scheme: dark)", () => {
   });
 
   it("the editor: dark shell around a light drawing sheet, the tray's icons in the dark ink, no contrast failures", async () => {
-    const page = await ctx.newPage();
+    const page = await browser.newPage();
     await page.emulateMedia({ colorScheme: "dark" });
     await page.goto(`${BASE_URL}/sketches/new?example=pump-skid`);
     await page.getByTestId("sketch-canvas").locator("canvas").first().waitFor();
@@ -72,17 +67,10 @@ describe("dark theme (prefers-color-scheme: dark)", () => {
 });
 
 describe("the home page's diagram on a phone (390 × 844)", () => {
-  let ctx: BrowserContext;
-  beforeAll(async () => {
-    ctx = await openBrowser();
-  });
-  afterAll(async () => {
-    await ctx?.close();
-  });
+  const browser = sharedBrowser();
 
   it("takes its narrow layout, whose labels are at least 12 px on screen; a wide window keeps the wide one", async () => {
-    const page = await ctx.newPage();
-    await page.setViewportSize({ width: 390, height: 844 });
+    const page = await browser.newPage(PHONE);
     await page.goto(`${BASE_URL}/`);
     const compact = page.getByTestId("hero-diagram-compact");
     await compact.waitFor();

@@ -1,18 +1,12 @@
-import type { BrowserContext } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BASE_URL, openBrowser, shot } from "./browser";
+import { describe, expect, it } from "vitest";
+import { BASE_URL, PHONE, shot } from "./browser";
+import { sharedBrowser } from "./session";
 
 describe("first page", () => {
-  let ctx: BrowserContext;
-  beforeAll(async () => {
-    ctx = await openBrowser();
-  });
-  afterAll(async () => {
-    await ctx?.close();
-  });
+  const browser = sharedBrowser();
 
   it("shows the product, the entry points and the cautions in the shipped font", async () => {
-    const page = await ctx.newPage();
+    const page = await browser.newPage();
     const failed: string[] = [];
     page.on("response", (r) => {
       if (r.status() >= 400) failed.push(`${r.status()} ${r.url()}`);
@@ -48,8 +42,7 @@ describe("first page", () => {
   });
 
   it("at phone width the signed-out pages keep the header's link on one line, clear of the mark", async () => {
-    const page = await ctx.newPage();
-    await page.setViewportSize({ width: 390, height: 844 });
+    const page = await browser.newPage(PHONE);
     for (const path of ["/sign-in", "/sign-up", "/forgot-password"]) {
       await page.goto(BASE_URL + path);
       const nav = page.getByRole("navigation", { name: "Main" });
@@ -66,7 +59,7 @@ describe("first page", () => {
   });
 
   it("reports the database as up", async () => {
-    const page = await ctx.newPage();
+    const page = await browser.newPage();
     const res = await page.goto(BASE_URL + "/api/health");
     expect(res?.status()).toBe(200);
     expect(await res?.json()).toEqual({ ok: true, db: "up" });

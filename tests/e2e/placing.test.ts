@@ -5,7 +5,7 @@
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { SketchFile } from "@/solver/schema";
-import { openPage, shot } from "./browser";
+import { atViewport, openPage, PHONE, shot } from "./browser";
 import { clickAt, emptySketchView, form, openScratch } from "./editor-helpers";
 
 const SCRATCH_KEY = "counterpoise:scratch-sketch:v1";
@@ -194,8 +194,7 @@ describe("placing elements from the tray and the keyboard", () => {
   });
 
   it("on a window too narrow for three columns, the properties open over the drawing from the toolbar", async () => {
-    await page.setViewportSize({ width: 820, height: 1000 });
-    try {
+    await atViewport(page, { width: 820, height: 1000 }, async () => {
       await openScratch(page, "?example=pump-skid");
       await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
       const panel = page.getByRole("complementary", { name: "Properties and parameters" });
@@ -223,14 +222,11 @@ describe("placing elements from the tray and the keyboard", () => {
       await page.keyboard.press("Escape");
       await expect.poll(() => panel.isVisible()).toBe(false);
       expect(await page.evaluate(() => document.activeElement?.getAttribute("data-testid"))).toBe("toggle-properties");
-    } finally {
-      await page.setViewportSize({ width: 1440, height: 900 });
-    }
+    });
   });
 
   it("on a phone-width window the toolbar wraps inside it and the tray opens over the drawing, closing when a kind is chosen", async () => {
-    await page.setViewportSize({ width: 390, height: 844 });
-    try {
+    await atViewport(page, PHONE, async () => {
       await openScratch(page, "?example=pump-skid");
       await expect.poll(() => page.getByTestId("sketch-title").textContent()).toBe("Dewatering pump skid, discharge test");
       // every toolbar control is inside the window
@@ -261,8 +257,6 @@ describe("placing elements from the tray and the keyboard", () => {
       expect(await keys.textContent()).toContain("drag two fingers");
       await page.keyboard.press("Escape");
       await expect.poll(() => keys.isVisible()).toBe(false);
-    } finally {
-      await page.setViewportSize({ width: 1440, height: 900 });
-    }
+    });
   });
 });

@@ -1,0 +1,25 @@
+// Browsers a describe block's tests share, opened before its first test and closed after its last
+// (vitest's hooks, so only for test files; scripts use ./browser directly).
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
+import { openBrowser } from "./browser";
+
+/** Call inside a describe block: one signed-out browser for its tests; `newPage(viewport?)` opens a
+ *  page in it, at the desktop window (1440 × 900) unless a viewport is given. */
+export function sharedBrowser(): { newPage: (viewport?: { width: number; height: number }) => Promise<Page> } {
+  let ctx: BrowserContext | undefined;
+  beforeAll(async () => {
+    ctx = await openBrowser();
+  });
+  afterAll(async () => {
+    await ctx?.close();
+  });
+  return {
+    newPage: async (viewport) => {
+      if (!ctx) throw new Error("sharedBrowser(): the browser opens in beforeAll; open pages inside tests or later hooks");
+      const page = await ctx.newPage();
+      if (viewport) await page.setViewportSize(viewport);
+      return page;
+    },
+  };
+}
