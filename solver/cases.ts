@@ -10,7 +10,7 @@ import { bodyStability, requirementsOf, type BodyStability, type Requirements } 
 import { DEFAULT_GROUPS, type EquationTerm, type FieldError, type Reaction, type SolveResult, type SolveWarning } from "./types";
 import { generalizedLoad, type BodyModel } from "./model";
 import { prettyUnit } from "./units";
-import { kindOfUnit, type FieldKind } from "./expressions";
+import { compileExpression, isUnit, kindOfUnit, type FieldKind } from "./expressions";
 
 export type CaseRun =
   | { id: string; name: string; kind: "case" | "combination"; ok: true; result: SolveResult; stability: Record<string, BodyStability> }
@@ -83,6 +83,19 @@ export const NO_UNIT = "has no unit";
 /** A plain number as typed: "30", "-2.5", "1e3" (no unit, no name, no operation). */
 const PLAIN_NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?$/i;
 
+/** A unit to tell someone to type: as the app shows it ("m³/h", "L/min") when that reads back as
+ *  the same unit among the sketch's parameters, else as the parser wrote it ("m^4"). */
+function typeableUnit(unit: string, parameterNames: ReadonlySet<string>): string {
+  const shown = prettyUnit(unit);
+  try {
+    const [a, b] = [shown, unit].map((u) => compileExpression(`1 ${u}`, parameterNames).evaluate(new Map()));
+    if (isUnit(a) && isUnit(b) && a.equals(b)) return shown;
+  } catch {
+    // not readable as shown
+  }
+  return unit.replace(/\s*\/\s*/g, "/");
+}
+
 /**
  * What a case's changes break in the sketch: the input errors of its variant that the sketch as
  * drawn does not have (a parameter given in the wrong unit, say). Empty when the case reads.
@@ -99,7 +112,7 @@ export function caseInputErrors(file: SketchFile, c: CaseFile): FieldError[] {
     const text = String(value).trim();
     const asDrawn = drawn.parameterValues[name];
     if (!PLAIN_NUMBER.test(text) || Number(text) === 0 || !asDrawn || !("unit" in asDrawn) || !asDrawn.unit) continue;
-    const unit = asDrawn.unit.replace(/\s*\/\s*/g, "/");
+    const unit = typeableUnit(asDrawn.unit, new Set(Object.keys(file.parameters ?? {})));
     unitless.push({ path: `cases[${c.id}].parameters.${name}`, message: `${NO_UNIT}; the sketch gives ${name} in ${prettyUnit(unit)}: write ${text} ${unit}` });
   }
   const own = caseSketch(file, c);

@@ -124,7 +124,25 @@ export function unitsFor(q: Quantity, system: UnitSystem): string[] {
   return UNITS[q][system].map((s) => s.unit);
 }
 
-/** mathjs writes "kg / m^3"; people write "kg/m³". */
+const SUPERSCRIPT: Readonly<Record<string, string>> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
+/** mathjs's names of units that have a symbol of their own (SI Brochure, 9th ed., table 8: the hour
+ *  is h, the litre L); each reads back as typed ("50 m³/h", "600 L/min" after a number). */
+const SYMBOL: Readonly<Record<string, string>> = { hr: "h", hour: "h", hours: "h", lpm: "L/min", lps: "L/s", litre: "L", liter: "L" };
+
+/**
+ * A unit as the expression parser writes it, as engineers write it (SI Brochure, 9th ed., §5.4.6:
+ * the solidus, superscript powers, a half-high dot for a product): "kg / m^3" → "kg/m³",
+ * "m^3 / hr" → "m³/h", "kg^3 / (m^4 s^4)" → "kg³/(m⁴·s⁴)", "N m" → "N·m". The one display of a
+ * unit the app has: the editor, the results, the studies and the calc sheet all write it so.
+ */
 export function prettyUnit(u: string): string {
-  return u.replace(/\s*\/\s*/g, "/").replace(/\^2\b/g, "²").replace(/\^3\b/g, "³").replace(/\s\*\s/g, "·");
+  return u
+    .trim()
+    // a symbol with a solidus of its own is bracketed after another ("kg/(L/min)")
+    .replace(/(\/\s*)?\b(hr|hours?|lp[ms]|lit(?:re|er))\b/g, (_, over: string | undefined, name: string) => (over ?? "") + (over && SYMBOL[name].includes("/") ? `(${SYMBOL[name]})` : SYMBOL[name]))
+    .replace(/\s*\/\s*/g, "/")
+    .replace(/\s*\*\s*/g, "·")
+    .replace(/\^(?:\((-?\d+)\)|(-?\d+))(?![\d.])/g, (_, a: string | undefined, b: string | undefined) => [...(a ?? b ?? "")].map((c) => SUPERSCRIPT[c]).join(""))
+    // a product written with a space ("N m", "m² s"); not after a bare number ("998 kg" stays)
+    .replace(/(?<=[\p{L}¹²³⁰⁴-⁹⁻)])\s+(?=[(\p{L}])/gu, "·");
 }

@@ -6,6 +6,7 @@ import { FORCE_COMPONENTS, FORCE_POLAR, FORM, fieldLabel, fieldWords as formFiel
 import { kindAndName } from "@/solver/words";
 import { FIELD_KIND_BY_NAME } from "@/solver/resolve";
 import { suggestUnitsFor } from "@/solver/expressionErrors";
+import { prettyUnit } from "@/solver/units";
 
 // a field's key may hold digits: a distributed load's w1 and w2
 const ELEMENT_PATH = /^(bodies|supports|loads|ports|massSources)\[(\d+)\](?:\.([A-Za-z][A-Za-z0-9]*))?((?:\[\d+\])*)(?:\.(.+))?$/;
@@ -90,14 +91,10 @@ export function fieldKindAt(path: string): string | null {
 const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
 
 /** A unit as the expression parser writes it, as engineers write it: "kg / m^2" → "kg/m²",
- *  "kg^3 / (m^4 s^4)" → "kg³/(m⁴·s⁴)", "N m" → "N·m". */
+ *  "kg^3 / (m^4 s^4)" → "kg³/(m⁴·s⁴)", "N m" → "N·m", "m^3 / hr" → "m³/h" (`prettyUnit`, the one
+ *  display of a unit). */
 export function unitAsWritten(unit: string): string {
-  return unit
-    .trim()
-    .replace(/\s*\/\s*/g, "/")
-    .replace(/\s*\*\s*/g, "·")
-    .replace(/\^(?:\((-?\d+)\)|(-?\d+))/g, (_, a: string | undefined, b: string | undefined) => [...(a ?? b ?? "")].map((c) => SUPERSCRIPT[c]).join(""))
-    .replace(/(?<=[\p{L}\d¹²³⁰⁴-⁹⁻)])\s+(?=[(\p{L}])/gu, "·");
+  return prettyUnit(unit);
 }
 
 /** A value and unit the parser printed ("236.25 kg / m^2"), as written: "236.25 kg/m²". */

@@ -36,7 +36,8 @@ describe("a swept range in words", () => {
     expect(sweepRangeWords("p", 0, 10, "bar")).toBe("p from 0 to 10 bar");
     expect(sweepRangeWords("theta", -58, 0, "deg")).toBe("theta from −58 to 0 deg");
     // mathjs's spelling is shown as written on paper
-    expect(sweepRangeWords("v", 20, 140, "km / hr")).toBe("v from 20 to 140 km/hr");
+    // the hour is h (SI Brochure, table 8), as the Sweep tab's fields read it back
+    expect(sweepRangeWords("v", 20, 140, "km / hr")).toBe("v from 20 to 140 km/h");
     expect(sweepRangeWords("rho", 800, 1000, "kg / m^3")).toBe("rho from 800 to 1,000 kg/m³");
   });
 

@@ -25,12 +25,19 @@ describe("a case's change typed without a unit", () => {
 
   it("a density rho = 1000 is told its unit as the sketch writes it; 0 and a value with its unit read", () => {
     const skid = example("pump-skid");
-    expect(caseInputErrors(skid, { id: "c", name: "C", parameters: { rho: "1000" } })[0].message).toBe(`${NO_UNIT}; the sketch gives rho in kg/m³: write 1000 kg/m^3`);
+    expect(caseInputErrors(skid, { id: "c", name: "C", parameters: { rho: "1000" } })[0].message).toBe(`${NO_UNIT}; the sketch gives rho in kg/m³: write 1000 kg/m³`);
     expect(caseInputErrors(skid, { id: "c", name: "C", parameters: { rho: "1000 kg/m^3" } })).toEqual([]);
-    // a bare number that breaks nothing would be read in SI units (1800 m³/s for a flow in lpm): refused too
+    // what it says to write reads: the unit as shown
+    expect(caseInputErrors(skid, { id: "c", name: "C", parameters: { rho: "1000 kg/m³" } })).toEqual([]);
+    // a bare number that breaks nothing would be read in SI units (1800 m³/s for a flow in L/min): refused too
     expect(caseInputErrors(skid, { id: "c", name: "C", parameters: { Q: "1800" } })).toEqual([
-      { path: "cases[c].parameters.Q", message: `${NO_UNIT}; the sketch gives Q in lpm: write 1800 lpm` },
+      { path: "cases[c].parameters.Q", message: `${NO_UNIT}; the sketch gives Q in L/min: write 1800 L/min` },
     ]);
+    expect(caseInputErrors(skid, { id: "c", name: "C", parameters: { Q: "1800 L/min" } })).toEqual([]);
+    // a flow per hour is said and written with h, and what it says reads back
+    const perHour = { ...skid, parameters: { ...skid.parameters, Q: "108 m3/hr" } };
+    expect(caseInputErrors(perHour, { id: "c", name: "C", parameters: { Q: "90" } })[0].message).toBe(`${NO_UNIT}; the sketch gives Q in m³/h: write 90 m³/h`);
+    expect(caseInputErrors(perHour, { id: "c", name: "C", parameters: { Q: "90 m³/h" } })).toEqual([]);
     // zero is zero in any unit
     expect(caseInputErrors(skid, { id: "c", name: "C", parameters: { Q: "0" } })).toEqual([]);
   });
