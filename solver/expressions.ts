@@ -300,30 +300,74 @@ export function normaliseExpressionText(text: string, parameterNames: ReadonlySe
     .trim();
 }
 
+/** A text that a parameter of the same name lets read two ways: the reading taken, and the other. */
+export interface TwoReadings {
+  /** which reading was taken and how to write the other, in words */
+  note: string;
+  /** the other reading, as an expression text */
+  other: string;
+  /** the reading taken and the other, in a few words each, with how to write the one taken unmistakably */
+  taken: string;
+  otherWords: string;
+  takenText: string;
+}
+
 /**
- * When a field fails (or comes out a plain number) and its text has a reading that a parameter
- * of the same name would have given otherwise, the words that say which reading was taken and
- * how to write the other; null when there is no such place. The readings themselves are
- * `normaliseExpressionText`'s.
+ * The first place in a text where a parameter of the same name could have given another reading
+ * (the readings are `normaliseExpressionText`'s): "km/h" tight beside a parameter h (per hour, or
+ * divided by h), "km / h" spaced (divided by h, or per hour), "600 L/min" beside a parameter L
+ * (litres per minute, or 600 × L per minute). Null when there is none.
  */
-export function readingNote(text: string, parameterNames: ReadonlySet<string>): string | null {
+export function twoReadings(text: string, parameterNames: ReadonlySet<string>): TwoReadings | null {
   const source = text.replace(/³/g, "^3").replace(/²/g, "^2").replace(/−/g, "-").replace(DIGIT_POWER, digitPower(parameterNames));
+  const swap = (m: RegExpExecArray, by: string) => source.slice(0, m.index) + by + source.slice(m.index + m[0].length);
   if (parameterNames.has("h")) {
     for (const m of source.matchAll(PER_H)) {
       const [, unit, power, slash] = m;
       if ((unit === "L" || unit === "l") && parameterNames.has(unit) && !inQuantity(source, m.index)) continue;
       const u = `${unit}${power ?? ""}`;
+      const w = u.replace("^2", "²").replace("^3", "³");
       return tightSlash(slash)
-        ? `"${u}/h" is per hour here (h written tight against a unit is the hour); to divide by the parameter h, write ${u} / h with spaces`
-        : `"${u} / h" divides by the parameter h here (with spaces); for per hour write ${u}/h with no spaces`;
+        ? {
+            note: `"${u}/h" is per hour here (h written tight against a unit is the hour); to divide by the parameter h, write ${u} / h with spaces`,
+            other: swap(m, `${u} / h`),
+            taken: `${w} per hour`,
+            otherWords: `${w} divided by the parameter h (${u} / h)`,
+            takenText: `${source.slice(0, m.index)}${u}/hr`,
+          }
+        : {
+            note: `"${u} / h" divides by the parameter h here (with spaces); for per hour write ${u}/h with no spaces`,
+            other: swap(m, `${u}/hr`),
+            taken: `${w} divided by the parameter h`,
+            otherWords: `${w} per hour (${u}/h)`,
+            takenText: `(${source.slice(0, m.index)}${u}) / h`,
+          };
     }
   }
   for (const m of source.matchAll(LITRES_PER)) {
     if (!parameterNames.has(m[1]) || !inQuantity(source, m.index)) continue;
     const number = AFTER_NUMBER.exec(source.slice(0, m.index))![0].trim();
-    return `"${number} ${m[1]}/${m[2]}" is litres per ${m[2] === "min" ? "minute" : m[2] === "s" ? "second" : "hour"} here (a unit right after a number); to multiply by the parameter ${m[1]}, write ${number}*${m[1]}/${m[2]}`;
+    const per = m[2] === "min" ? "minute" : m[2] === "s" ? "second" : "hour";
+    const before = source.slice(0, m.index).replace(/\s*$/, "");
+    return {
+      note: `"${number} ${m[1]}/${m[2]}" is litres per ${per} here (a unit right after a number); to multiply by the parameter ${m[1]}, write ${number}*${m[1]}/${m[2]}`,
+      // "min" is a function to the parser, not a unit: a minute is written as 60 s
+      other: `${before}*${m[1]}/${m[2] === "min" ? "(60 s)" : m[2] === "s" ? "s" : "hr"}${source.slice(m.index + m[0].length)}`,
+      taken: `litres per ${per}`,
+      otherWords: `${number} times the parameter ${m[1]} per ${per} (${number}*${m[1]}/${m[2]})`,
+      takenText: `${number} ${m[2] === "min" ? "lpm" : m[2] === "s" ? "lps" : "litre/hr"}`,
+    };
   }
   return null;
+}
+
+/**
+ * When a field fails (or comes out a plain number) and its text has a reading that a parameter
+ * of the same name would have given otherwise, the words that say which reading was taken and
+ * how to write the other; null when there is no such place.
+ */
+export function readingNote(text: string, parameterNames: ReadonlySet<string>): string | null {
+  return twoReadings(text, parameterNames)?.note ?? null;
 }
 
 export interface CompiledExpression {

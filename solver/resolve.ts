@@ -4,8 +4,10 @@
 import {
   compileExpression,
   describeValue,
+  FIELD_UNIT_LABELS,
   readingNote,
   toFieldNumber,
+  twoReadings,
   unitlessTrigWarning,
   type CompiledExpression,
   type FieldKind,
@@ -17,6 +19,9 @@ import type { FieldError, Sketch, SolveWarning } from "./types";
 import { G0 } from "./constants";
 import { suggestUnitsFor } from "./expressionErrors";
 import { NEGATIVE_GRAVITY } from "./validate";
+
+/** A field whose text reads as two different valid values beside a parameter of the same name. */
+class TwoWays extends Error {}
 
 /** Where an evaluated expression is written, and how to evaluate it again. */
 export interface FieldSlot {
@@ -107,6 +112,29 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
   const readers = new Map<string, Set<string>>();
 
   /** Evaluate one field value in place; `ids` names the element it belongs to (for warnings). */
+  /**
+   * Beside a parameter h or L, a text that reads as a valid value of the field both ways
+   * ("600 L/min" with L a volume: litres per minute, or 600 × L per minute) is refused, naming both
+   * values: the reading taken by the rule is not silently assumed to be the one meant.
+   */
+  const twoWays = (raw: string, value: number, kind: FieldKind) => {
+    const two = twoReadings(raw, names);
+    if (!two) return;
+    let other: number;
+    try {
+      const evaluated = compileExpression(two.other, names).evaluate(scope);
+      // units that cancel to a plain number are no value of a field with a unit (see evalField)
+      if (typeof evaluated === "number" && kind !== "ratio") return;
+      other = toFieldNumber(evaluated, kind);
+    } catch {
+      return; // the other reading is no value of this field: nothing to choose between
+    }
+    if (!Number.isFinite(other) || Math.abs(other - value) <= 1e-9 * Math.max(Math.abs(other), Math.abs(value))) return;
+    const unit = FIELD_UNIT_LABELS[kind];
+    const say = (v: number) => `${Number(v.toPrecision(4))}${unit && unit !== "°" ? ` ${unit}` : unit}`;
+    throw new TwoWays(`"${raw}" reads two ways here: ${say(value)} as ${two.taken}, or ${say(other)} as ${two.otherWords}; write ${two.takenText} for the first`);
+  };
+
   const evalField = (raw: unknown, kind: FieldKind, path: string, target: Record<string | number, unknown>, key: string | number, ids: string[] = []) => {
     if (typeof raw === "number") {
       if (!Number.isFinite(raw)) {
@@ -129,6 +157,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
       // "3.6 km / h" with a parameter h of length cancels to a plain number, which a field would take as SI
       if (typeof evaluated === "number" && kind !== "ratio" && readingNote(raw, names)) throw new Error(`"${raw}" gives a plain number here (${Number(evaluated.toPrecision(6))})`);
       const value = toFieldNumber(evaluated, kind);
+      if (names.has("h") || names.has("L") || names.has("l")) twoWays(raw, value, kind);
       target[key] = value;
       fields[path] = { value };
       if (expr.deps.length) slots.push({ path, kind, expr, target, key });
@@ -142,7 +171,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
       const said = suggestUnitsFor((err as Error).message, kind);
       // "6 kN*m/h" beside a parameter h is per hour, "600 L/min" beside a parameter L litres: say
       // which reading was taken, and how to write the other, where the field fails
-      const note = readingNote(raw, names);
+      const note = err instanceof TwoWays ? null : readingNote(raw, names);
       const message = note ? `${said}; ${note}` : said;
       errors.push({ path, message });
       fields[path] = { error: message };

@@ -280,6 +280,28 @@ describe("litres and digit powers beside a parameter of the same name", () => {
     expect(massOf(withMass({ m3: "5 kg", rho: "1000 kg/m3" }, "rho * 0.002 m3"))).toBeCloseTo(2, 12);
   });
 
+  it("both readings valid for the field (L a volume, h a time): refused, naming both values and how to write the first", () => {
+    // 600 L/min = 0.01 m³/s (1 L = 0.001 m³); 600 × 2 m³ per 60 s = 20 m³/s
+    expect(errorsOf(flowWith({ L: "2 m^3" }, "600 L/min"))).toEqual([
+      {
+        path: "ports[0].volumeFlow",
+        message: '"600 L/min" reads two ways here: 0.01 m³/s as litres per minute, or 20 m³/s as 600 times the parameter L per minute (600*L/min); write 600 lpm for the first',
+      },
+    ]);
+    // 50 m³/h = 0.01389 m³/s (1 h = 3600 s); 50 m³ over h = 2 s is 25 m³/s
+    expect(errorsOf(flowWith({ h: "2 s" }, "50 m³/h"))[0].message).toBe(
+      '"50 m³/h" reads two ways here: 0.01389 m³/s as m³ per hour, or 25 m³/s as m³ divided by the parameter h (m^3 / h); write 50 m^3/hr for the first',
+    );
+    expect(errorsOf(flowWith({ h: "2 s" }, "50 m³ / h"))[0].message).toBe(
+      '"50 m³ / h" reads two ways here: 25 m³/s as m³ divided by the parameter h, or 0.01389 m³/s as m³ per hour (m^3/h); write (50 m^3) / h for the first',
+    );
+    // written unmistakably, each reads
+    expect(parsed(flowWith({ L: "2 m^3" }, "600 lpm")).ports[0].volumeFlow).toBeCloseTo(0.01, 15);
+    expect(parsed(flowWith({ L: "2 m^3" }, "600*L/(60 s)")).ports[0].volumeFlow).toBeCloseTo(20, 12);
+    expect(parsed(flowWith({ h: "2 s" }, "50 m^3/hr")).ports[0].volumeFlow).toBeCloseTo(50 / 3600, 15);
+    expect(parsed(flowWith({ h: "2 s" }, "(50 m^3) / h")).ports[0].volumeFlow).toBeCloseTo(25, 12);
+  });
+
   it("50 psig right after a number is psi whatever psig is; psig alone is the parameter", () => {
     const names = new Set(["psig"]);
     expect(normaliseExpressionText("50 psig", names)).toBe("50 psi");
