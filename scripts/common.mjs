@@ -32,11 +32,16 @@ function aptInstall(pkgs) {
   go(["apt-get", "install", "-y", "-qq", ...pkgs]);
 }
 
+/** node_modules is there and no older than the lockfile (npm writes its own copy of it last). */
+export function installIsFresh(base = root) {
+  const marker = join(base, "node_modules", ".package-lock.json");
+  const lock = join(base, "package-lock.json");
+  return existsSync(marker) && statSync(marker).mtimeMs >= statSync(lock).mtimeMs;
+}
+
 /** `npm ci` when node_modules is missing or older than the lockfile. */
 export function ensureInstalled() {
-  const marker = join(root, "node_modules", ".package-lock.json");
-  const lock = join(root, "package-lock.json");
-  if (existsSync(marker) && statSync(marker).mtimeMs >= statSync(lock).mtimeMs) return;
+  if (installIsFresh()) return;
   log("setup", "installing npm packages (npm ci)");
   run("npm", ["ci", "--no-audit", "--no-fund", "--loglevel=warn"]);
 }
@@ -70,8 +75,7 @@ export function readEnvFile(file) {
 }
 
 /** A fresh machine has no auth secret: make one, once, in the git-ignored .env.local. */
-export function ensureLocalSecrets() {
-  const file = join(root, ".env.local");
+export function ensureLocalSecrets(file = join(root, ".env.local")) {
   const env = readEnvFile(file);
   if (!process.env.BETTER_AUTH_SECRET && !env.BETTER_AUTH_SECRET) {
     const secret = randomBytes(32).toString("base64url");
@@ -97,11 +101,11 @@ function newestMtime(path) {
 }
 
 /** True when `distDir` holds a build newer than every source file. */
-export function buildIsFresh(distDir = ".next") {
-  const id = join(root, distDir, "BUILD_ID");
+export function buildIsFresh(distDir = ".next", base = root) {
+  const id = join(base, distDir, "BUILD_ID");
   if (!existsSync(id)) return false;
   const built = statSync(id).mtimeMs;
-  const src = Math.max(...SOURCE_DIRS.map((d) => newestMtime(join(root, d))), ...SOURCE_FILES.map((f) => newestMtime(join(root, f))));
+  const src = Math.max(...SOURCE_DIRS.map((d) => newestMtime(join(base, d))), ...SOURCE_FILES.map((f) => newestMtime(join(base, f))));
   return built >= src;
 }
 

@@ -173,7 +173,8 @@ export function startPostgres({ test = false, resetDatabase = false } = {}) {
 }
 
 export function stopPostgres({ test = false } = {}) {
-  if (process.env.DATABASE_URL && !test) return;
+  // an external server (DATABASE_URL, or TEST_DATABASE_URL for the test run) is not ours to stop
+  if (test ? process.env.TEST_DATABASE_URL : process.env.DATABASE_URL) return;
   const s = pgSettings({ test });
   const bin = findBinDir();
   if (!bin || !existsSync(join(s.dataDir, "PG_VERSION"))) return;
