@@ -3,28 +3,22 @@
 // owner approves it; v3 shows locked with the title block; the owner's mention mail is in the
 // local mailbox.
 import { randomBytes } from "node:crypto";
-import type { BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { beforeAll, describe, expect, it } from "vitest";
 import { createSketch, saveVersion as saveVersionApi } from "@/lib/sketches";
-import { parseSketch } from "@/solver";
 import { fixture } from "../api/sketch-fixtures";
 import { BASE_URL, shot } from "./browser";
-import { makeCast, openEditor, retitle, saveVersion, signInAs, type Cast } from "./versions-helpers";
+import { browsersClosedAfterAll } from "./session";
+import { makeCast, openEditor, parsed, retitle, saveVersion, type Cast } from "./versions-helpers";
 
 const tag = randomBytes(3).toString("hex");
-
-function parsed(doc: unknown) {
-  const p = parseSketch(doc);
-  if (!p.ok) throw new Error("fixture does not parse");
-  return p;
-}
 
 describe("review of a calculation in the browser", () => {
   let cast: Cast;
   let ws = "";
   let sketchId = "";
   const pages = {} as Record<"editor" | "checker" | "owner", Page>;
-  const contexts: BrowserContext[] = [];
+  const browsers = browsersClosedAfterAll();
   const review = (n: number) => `${BASE_URL}/workspaces/${ws}/sketches/${sketchId}/versions/${n}`;
   const stepButton = (page: Page, step: string) => page.getByTestId(`signoff-${step}`);
 
@@ -42,14 +36,7 @@ describe("review of a calculation in the browser", () => {
     const made = await createSketch(ws, cast.editor, { title: `Skid ${tag}`, document: parsed(v1), message: "As drawn" });
     sketchId = made.sketch.id;
     await saveVersionApi(sketchId, cast.editor, { baseVersion: 1, message: "Duty flow 12 → 15 kg/s", document: parsed({ ...v1, parameters: { mdot: "15 kg/s" } }) });
-    for (const who of ["editor", "checker", "owner"] as const) {
-      const s = await signInAs(cast[who]);
-      contexts.push(s.ctx);
-      pages[who] = s.page;
-    }
-  });
-  afterAll(async () => {
-    for (const c of contexts) await c.close();
+    for (const who of ["editor", "checker", "owner"] as const) pages[who] = await browsers.signIn(cast[who]);
   });
 
   it("the author submits v2 for checking", async () => {

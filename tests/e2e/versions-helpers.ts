@@ -1,6 +1,7 @@
 // People and workspaces for the versions and review stories, made directly in the test database
 // (sign-up by mail has its own story), then signed in through the browser like anyone else.
 import type { BrowserContext, Page } from "playwright-core";
+import { parseSketch } from "@/solver";
 import { makeAccount, makeWorkspace, PASSWORD, type Person } from "../api/helpers";
 import { BASE_URL, openBrowser } from "./browser";
 
@@ -18,6 +19,13 @@ export async function makeCast(tag: string, names: Partial<Record<keyof Cast, st
     [cast.viewer, "viewer"],
   ]);
   return { cast, ws };
+}
+
+/** A sketch document as the server stores it (`parseSketch`'s result), for `createSketch` and `saveVersion`. */
+export function parsed(doc: unknown): Extract<ReturnType<typeof parseSketch>, { ok: true }> {
+  const p = parseSketch(doc);
+  if (!p.ok) throw new Error("fixture does not parse");
+  return p;
 }
 
 export async function signInAs(person: Person): Promise<{ ctx: BrowserContext; page: Page }> {
