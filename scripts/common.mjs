@@ -135,6 +135,22 @@ export async function waitForHttp(url, { timeoutMs = 60000, okOnly = false } = {
   throw new Error(`${url} did not answer within ${timeoutMs} ms (${last})`);
 }
 
+/** What `npm start` prints once the app answers: where it runs, the local mailbox, the demo sign-ins. */
+export function startBanner(appUrl, host) {
+  return `
+  Counterpoise is running at ${appUrl}
+  ${/^(127\.|localhost$|::1$)/.test(host) ? `Local mailbox (development mail): ${appUrl}/dev/mailbox` : "Local mailbox: off while the app listens beyond this machine (HOST)"}
+
+  Demo sign-ins (local only, password "counterpoise-demo"):
+    owner    olivia.owner@demo.counterpoise.local
+    editor   eddie.editor@demo.counterpoise.local
+    checker  chen.checker@demo.counterpoise.local
+    viewer   vera.viewer@demo.counterpoise.local
+
+  Ctrl+C stops the app; PostgreSQL keeps running (npm run db:stop stops it).
+`;
+}
+
 export function writeFileIfChanged(file, text) {
   if (existsSync(file) && readFileSync(file, "utf8") === text) return;
   writeFileSync(file, text);

@@ -1,7 +1,7 @@
 #!/usr/bin/env node
 // `npm start`: install, start PostgreSQL, migrate, seed the demo workspace, build when stale, serve.
 // `npm run dev` (with --dev): the same, then `next dev` with hot reload instead of a build.
-import { buildIsFresh, ensureInstalled, ensureLocalSecrets, log, nodeBin, run, startChild, waitForHttp } from "./common.mjs";
+import { buildIsFresh, ensureInstalled, ensureLocalSecrets, log, nodeBin, run, startBanner, startChild, waitForHttp } from "./common.mjs";
 import { startPostgres } from "./pg.mjs";
 
 const dev = process.argv.includes("--dev");
@@ -46,18 +46,7 @@ async function main() {
   });
 
   await waitForHttp(`${env.APP_URL}/api/health`, { timeoutMs: 120000 });
-  console.log(`
-  Counterpoise is running at ${env.APP_URL}
-  ${/^(127\.|localhost$|::1$)/.test(host) ? `Local mailbox (development mail): ${env.APP_URL}/dev/mailbox` : "Local mailbox: off while the app listens beyond this machine (HOST)"}
-
-  Demo sign-ins (local only, password "counterpoise-demo"):
-    owner    olivia.owner@demo.counterpoise.local
-    editor   eddie.editor@demo.counterpoise.local
-    checker  chen.checker@demo.counterpoise.local
-    viewer   vera.viewer@demo.counterpoise.local
-
-  Ctrl+C stops the app; PostgreSQL keeps running (npm run db:stop stops it).
-`);
+  console.log(startBanner(env.APP_URL, host));
 }
 
 main().catch((err) => {

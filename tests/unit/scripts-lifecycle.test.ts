@@ -8,7 +8,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 // @ts-expect-error — plain .mjs scripts (they run before npm ci) without type declarations
-import { buildIsFresh, ensureLocalSecrets, installIsFresh } from "../../scripts/common.mjs";
+import { buildIsFresh, ensureLocalSecrets, installIsFresh, startBanner } from "../../scripts/common.mjs";
 // @ts-expect-error — as above
 import { databaseUrl, pgSettings, startPostgres, stopPostgres } from "../../scripts/pg.mjs";
 
@@ -112,6 +112,23 @@ describe("what is stale", () => {
     expect(installIsFresh(dir)).toBe(false);
     touch(join(dir, "node_modules", ".package-lock.json"), 3000);
     expect(installIsFresh(dir)).toBe(true);
+  });
+});
+
+describe("what npm start prints once the app answers", () => {
+  it("the address, the local mailbox, every demo sign-in with its password, and how to stop", () => {
+    const text: string = startBanner("http://127.0.0.1:3000", "127.0.0.1");
+    expect(text).toContain("Counterpoise is running at http://127.0.0.1:3000");
+    expect(text).toContain("Local mailbox (development mail): http://127.0.0.1:3000/dev/mailbox");
+    expect(text).toContain('password "counterpoise-demo"');
+    for (const who of ["olivia.owner", "eddie.editor", "chen.checker", "vera.viewer"]) expect(text).toContain(`${who}@demo.counterpoise.local`);
+    expect(text).toContain("Ctrl+C stops the app");
+  });
+
+  it("listening beyond this machine (HOST=0.0.0.0), the mailbox is off and says why", () => {
+    const text: string = startBanner("http://127.0.0.1:3000", "0.0.0.0");
+    expect(text).not.toContain("/dev/mailbox");
+    expect(text).toContain("Local mailbox: off while the app listens beyond this machine (HOST)");
   });
 });
 
