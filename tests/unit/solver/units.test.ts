@@ -26,6 +26,11 @@ describe("formatQuantity", () => {
     [6894.757293168361, "pressure", "US", "1 psi"],
     [0, "pressure", "US", "0 psi"],
     [-250, "pressure", "SI", "−250 Pa"],
+    // lengths: 1 ft = 0.3048 m and 1 in = 0.0254 m exactly (NIST SP 811, Appendix B)
+    [2.5, "length", "SI", "2.5 m"],
+    [1.6002, "length", "US", "5.25 ft"],
+    [0.1, "smallLength", "SI", "100 mm"],
+    [0.1016, "smallLength", "US", "4 in"],
   ] as const)("%s %s in %s → %s", (v, q, sys, out) => {
     expect(formatQuantity(v, q, sys)).toBe(out);
   });
