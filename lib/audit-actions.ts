@@ -12,6 +12,7 @@ export const AUDIT_ACTIONS = {
   "workspace.create": "created the workspace",
   "workspace.rename": "renamed the workspace",
   "workspace.delete": "deleted the workspace",
+  "workspace.export": "exported the sketches of the workspace",
   "invitation.create": "invited",
   "invitation.withdraw": "withdrew the invitation of",
   "invitation.accept": "joined through an invitation",

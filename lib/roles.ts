@@ -20,6 +20,8 @@ export const PERMISSIONS = {
   "workspace.rename": ["owner"],
   /** delete the workspace with its sketches, versions, comments and files */
   "workspace.delete": ["owner"],
+  /** download every sketch of the workspace (the latest version of each) in one file */
+  "workspace.export": ["owner"],
   "members.list": ["owner", "editor", "checker", "viewer"],
   "members.changeRole": ["owner"],
   "members.remove": ["owner"],
@@ -63,6 +65,7 @@ const ACTION_WORDS: Record<Permission, string> = {
   "workspace.read": "read this workspace",
   "workspace.rename": "rename the workspace",
   "workspace.delete": "delete the workspace",
+  "workspace.export": "export the workspace's sketches",
   "members.list": "see the members",
   "members.changeRole": "change members' roles",
   "members.remove": "remove members",

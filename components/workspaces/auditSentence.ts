@@ -36,6 +36,8 @@ export function auditSentence(e: AuditEntry): string {
       return `removed ${who}${d.role ? ` (${str(d.role)})` : ""}`;
     case "workspace.create":
       return `created the workspace "${str(d.name)}"`;
+    case "workspace.export":
+      return `exported the workspace's sketches (${num(d.sketches)}, the latest version of each)`;
     case "workspace.rename":
       return `renamed the workspace to "${str(d.name)}"`;
     case "sketch.create":

@@ -59,6 +59,7 @@ const ROWS: Record<string, Row> = {
   "PATCH /api/workspaces/[id]": { expect: ownersOnly(200), run: (h, f, p) => call(h, { method: "PATCH", params: W(f), cookie: p.cookie, body: { name: "Renamed bay" } }) },
   "DELETE /api/workspaces/[id]": { expect: ownersOnly(200), run: (h, f, p) => call(h, { method: "DELETE", params: W(f), cookie: p.cookie, body: { confirmName: "Matrix bay" } }) },
   "GET /api/workspaces/[id]/audit": { expect: ownersOnly(200), run: (h, f, p) => call(h, { params: W(f), cookie: p.cookie }) },
+  "GET /api/workspaces/[id]/export": { expect: ownersOnly(200), run: (h, f, p) => call(h, { params: W(f), cookie: p.cookie }) },
   "GET /api/workspaces/[id]/invitations": { expect: ownersOnly(200), run: (h, f, p) => call(h, { params: W(f), cookie: p.cookie }) },
   "POST /api/workspaces/[id]/invitations": {
     expect: ownersOnly(201),

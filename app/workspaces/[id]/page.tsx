@@ -4,6 +4,7 @@ import { Panel } from "@/components/shell/controls";
 import { SketchesTable } from "@/components/sketches/SketchesTable";
 import { RoleBadge } from "@/components/workspaces/RoleBadge";
 import { DeleteWorkspace } from "@/components/workspaces/DeleteWorkspace";
+import { ExportWorkspace } from "@/components/workspaces/ExportWorkspace";
 import { RenameWorkspaceForm } from "@/components/workspaces/WorkspaceForms";
 import { workspaceContents } from "@/db/queries/workspace-deletion";
 import { getWorkspaceForMember, listMembers } from "@/db/queries/workspaces";
@@ -67,6 +68,7 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
         {can(role, "workspace.rename") ? (
           <Panel title="Settings">
             <RenameWorkspaceForm workspaceId={id} name={ws.name} />
+            {contents && can(role, "workspace.export") ? <ExportWorkspace workspaceId={id} sketches={contents.sketches} /> : null}
             {contents ? <DeleteWorkspace workspaceId={id} name={ws.name} contents={contents} /> : null}
           </Panel>
         ) : null}
