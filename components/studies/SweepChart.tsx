@@ -9,6 +9,7 @@ import { convert, formatNumber, prettyUnit, type UnitSystem } from "@/solver/uni
 import { sweepAxisTicks } from "@/lib/calcsheet/chart";
 import { displayKind, displayUnit, largestByKind, marksZero, pointStateWords, toDisplay, type DisplayKind } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
+import type { Table } from "@/solver/report";
 
 const COLORS = ["rgb(var(--reaction))", "rgb(var(--accent))", "rgb(var(--ink))", "rgb(var(--caution))", "rgb(var(--plot-5))", "rgb(var(--plot-6))"];
 const DASHES = ["", "6 3", "2 3", "8 3 2 3", "1 2", "10 4"];
@@ -40,6 +41,23 @@ export function chartRows(data: SweepData, units: UnitSystem, family?: ChartFami
     });
     return row;
   });
+}
+
+/** The plotted values as a result table, for the CSV: the swept value, each quantity in the chart's
+ *  unit at full precision (empty where the point did not solve) and each point's state. */
+export function sweepTable(data: SweepData, units: UnitSystem, parameterLabel: string, names: Readonly<Record<string, string>> = {}, family?: ChartFamily): Table {
+  const largest = scaleOf(data);
+  const rows = chartRows(data, units, family);
+  return {
+    id: "sweep",
+    title: `Sweep of ${parameterLabel}`,
+    columns: [
+      { key: "x", label: parameterLabel, unit: data.unit ? prettyUnit(data.unit) : undefined, align: "right" },
+      ...data.quantities.map((q, s) => ({ key: `q${s}`, label: describeQuantity(q, names), unit: unitIn(q.component, units, largest, family) || undefined, align: "right" as const })),
+      { key: "state", label: "State", align: "left" },
+    ],
+    rows: rows.map((r, i) => [data.xs[i], ...data.quantities.map((_, s) => r[`q${s}`]), data.statuses[i] ?? null]),
+  };
 }
 
 /**

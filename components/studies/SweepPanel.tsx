@@ -20,7 +20,8 @@ import { bodyLimits, firstReached, isBodyLimit, reachedAt, type BodyLimitResult,
 import { BUTTON, INPUT, LABEL, PRIMARY_BUTTON } from "@/components/editor/ui";
 import { errorInWords } from "@/components/results/errorPlace";
 import { runErrorWords, studyErrorWords } from "./studyError";
-import { defaultLimitQuantity, SweepChart } from "./SweepChart";
+import { defaultLimitQuantity, SweepChart, sweepTable } from "./SweepChart";
+import { downloadCsv, useCsvName } from "./csv";
 import { invalidStretches } from "./sweepErrors";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, solvesAtIn, type ParameterValue } from "./sweepRange";
 
@@ -177,6 +178,7 @@ export function bodySidesWords(rows: readonly LimitEverywhere[], q: BodyLimitSpe
 
 export function SweepPanel() {
   const { editor } = useStores();
+  const csvName = useCsvName();
   const noTargetId = useId();
   const sketch = useEditor((s) => s.sketch);
   const units = useEditor((s) => s.units);
@@ -688,6 +690,11 @@ export function SweepPanel() {
               {sweepRangeWords(data.parameter, ran?.spec.from ?? 0, ran?.spec.to ?? 0, data.unit)}, {data.xs.length} points — {ran?.on}
             </p>
             <SweepChart data={data} run={runs} units={units} names={names} parameterLabel={dLabel} limit={limit?.result.found ? { x: limit.result.value, label: `${limit.label} = ${limit.target}` } : null} />
+            <div className="flex justify-end">
+              <button type="button" className={`${BUTTON} h-6 px-2 text-[11.5px]`} onClick={() => downloadCsv(sweepTable(data, units, dLabel, names), csvName(`sweep-${data.parameter}`))} aria-label="Download the sweep's values as CSV">
+                CSV
+              </button>
+            </div>
             <ul className="mt-1 space-y-0.5 text-[12px]" data-testid="crossings">
               {data.crossings.length === 0 && <li className="text-ink-faint">No margin crosses zero in this range.</li>}
               {data.crossings.map((c, i) => (

@@ -370,6 +370,8 @@ describe("Sweep tab", () => {
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     const crossings = await screen.findByTestId("crossings");
     expect(crossings.textContent).toMatch(/margin at front jack crosses zero between theta = 18 and 19 deg/);
+    // the plotted values download as CSV (tests/unit/studies/sweep-csv.test.ts checks the file)
+    expect(screen.getByRole("button", { name: "Download the sweep's values as CSV" })).toBeVisible();
     await user.selectOptions(screen.getByRole("combobox", { name: "Quantity for the limit" }), "margin at front jack");
     await user.click(screen.getByRole("button", { name: "Find" }));
     const answer = await screen.findByTestId("limit-answer");
