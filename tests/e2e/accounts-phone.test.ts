@@ -1,15 +1,16 @@
 // The owners' workspace pages on a phone (390 px): nothing runs off the side, and the audit log's
 // sentences (what was done) are on screen, with the time and the person above each.
 import { randomBytes } from "node:crypto";
-import type { BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BASE_URL, shot } from "./browser";
-import { makeCast, signInAs } from "./versions-helpers";
+import type { Page } from "playwright-core";
+import { beforeAll, describe, expect, it } from "vitest";
+import { BASE_URL, PHONE, shot } from "./browser";
+import { browsersClosedAfterAll } from "./session";
+import { makeCast } from "./versions-helpers";
 
 const tag = randomBytes(3).toString("hex");
 
 describe("members and audit log at phone width", () => {
-  let ctx: BrowserContext;
+  const browsers = browsersClosedAfterAll();
   let page: Page;
   let ws = "";
   let ownerName = "";
@@ -18,11 +19,8 @@ describe("members and audit log at phone width", () => {
     const made = await makeCast(`ph${tag}`);
     ws = made.ws;
     ownerName = made.cast.owner.name;
-    ({ ctx, page } = await signInAs(made.cast.owner));
-    await page.setViewportSize({ width: 390, height: 844 });
-  });
-  afterAll(async () => {
-    await ctx?.close();
+    page = await browsers.signIn(made.cast.owner);
+    await page.setViewportSize(PHONE);
   });
 
   /** No element wider than the screen: the page does not scroll sideways. */

@@ -56,6 +56,13 @@ export async function openPage(opts: { permissions?: string[] } = {}): Promise<{
   return { ctx, page: await ctx.newPage() };
 }
 
+/** Fills in the sign-in form the page shows and sends it (where it leads is the caller's to wait for). */
+export async function fillSignIn(page: Page, email: string, password: string): Promise<void> {
+  await page.getByLabel("E-mail address").fill(email);
+  await page.getByLabel("Password", { exact: true }).fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+}
+
 /** Runs `story` with the page's window at `viewport`, then gives it the desktop window back, pass or fail. */
 export async function atViewport(page: Page, viewport: { width: number; height: number }, story: () => Promise<void>): Promise<void> {
   await page.setViewportSize(viewport);

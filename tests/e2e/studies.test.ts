@@ -2,12 +2,13 @@
 // support; a sweep with its plot, the crossing and the limit found; the calc sheet downloaded
 // from the saved version.
 import { readFileSync } from "node:fs";
-import type { BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { beforeAll, describe, expect, it } from "vitest";
 import { createSketch } from "@/lib/sketches";
 import { parseSketch, solveCases } from "@/solver";
 import { shot, BASE_URL } from "./browser";
-import { makeCast, openEditor, saveVersion, signInAs, type Cast } from "./versions-helpers";
+import { browsersClosedAfterAll } from "./session";
+import { makeCast, openEditor, saveVersion, type Cast } from "./versions-helpers";
 
 const tag = Date.now().toString(36).slice(-5);
 const trailer = () => JSON.parse(readFileSync("tests/fixtures/sketches/fire-monitor-trailer.json", "utf8"));
@@ -16,7 +17,7 @@ describe("design studies", () => {
   let cast: Cast;
   let ws: string;
   let sketchId: string;
-  let ctx: BrowserContext;
+  const browsers = browsersClosedAfterAll();
   let page: Page;
 
   beforeAll(async () => {
@@ -25,9 +26,8 @@ describe("design studies", () => {
     if (!parsed.ok) throw new Error("fixture");
     const made = await createSketch(ws, cast.editor, { title: `Monitor trailer ${tag}`, document: parsed, message: "as surveyed" });
     sketchId = made.sketch.id;
-    ({ ctx, page } = await signInAs(cast.editor));
+    page = await browsers.signIn(cast.editor);
   });
-  afterAll(async () => ctx?.close());
 
   it("adds two cases, runs them and shows the governing case", async () => {
     await openEditor(page, sketchId);

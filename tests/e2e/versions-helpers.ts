@@ -3,7 +3,7 @@
 import type { BrowserContext, Page } from "playwright-core";
 import { parseSketch } from "@/solver";
 import { makeAccount, makeWorkspace, PASSWORD, type Person } from "../api/helpers";
-import { BASE_URL, openBrowser } from "./browser";
+import { BASE_URL, fillSignIn, openBrowser } from "./browser";
 
 export type Cast = Record<"owner" | "editor" | "checker" | "viewer" | "outsider", Person>;
 
@@ -32,9 +32,7 @@ export async function signInAs(person: Person): Promise<{ ctx: BrowserContext; p
   const ctx = await openBrowser();
   const page = await ctx.newPage();
   await page.goto(`${BASE_URL}/sign-in`);
-  await page.getByLabel("E-mail address").fill(person.email);
-  await page.getByLabel("Password", { exact: true }).fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
+  await fillSignIn(page, person.email, PASSWORD);
   await page.waitForURL(/\/workspaces$/);
   return { ctx, page };
 }
