@@ -6,6 +6,7 @@ export const AUDIT_ACTIONS = {
   "auth.password_reset": "reset their password",
   "auth.email_change": "changed their sign-in address",
   "auth.account_delete": "deleted their account",
+  "auth.sign_out": "signed out",
   "auth.sign_out_all": "signed out on every device",
   "auth.sign_out_others": "signed out every other device",
   "auth.password_change": "changed their password",

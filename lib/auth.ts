@@ -201,7 +201,15 @@ export function createAuth(overrides: AuthOverrides = {}) {
       session: {
         create: {
           async after(s) {
-            await recordAudit({ action: "auth.sign_in", actorId: s.userId, detail: { ip: s.ipAddress ?? null } });
+            await recordAudit({ action: "auth.sign_in", actorId: s.userId, detail: { ip: s.ipAddress ?? null, userAgent: s.userAgent ?? null } });
+          },
+        },
+        // a plain sign-out (this device only): the person's own account activity lists it; the
+        // everywhere and every-other-device sign-outs are recorded once by auditAccountEvent
+        delete: {
+          async after(s, ctx) {
+            if (ctx?.path !== "/sign-out") return;
+            await recordAudit({ action: "auth.sign_out", actorId: s.userId, targetType: "user", targetId: s.userId, detail: { ip: s.ipAddress ?? null, userAgent: s.userAgent ?? null } });
           },
         },
       },

@@ -1,9 +1,11 @@
 import type { Metadata } from "next";
+import { AccountActivity } from "@/components/auth/AccountActivity";
 import { ChangeEmailForm, ChangePasswordForm, NotificationsForm, ProfileForm } from "@/components/auth/AccountForms";
 import { DeleteAccount } from "@/components/auth/DeleteAccount";
 import { DevicesPanel } from "@/components/auth/DevicesPanel";
 import { AppShell } from "@/components/shell/AppShell";
 import { Notice, Panel } from "@/components/shell/controls";
+import { accountActivity } from "@/lib/account-activity";
 import { accountDeletionPlan } from "@/lib/account-deletion";
 import { activeSessions } from "@/lib/account-sessions";
 import { requirePageSession } from "@/lib/session";
@@ -12,7 +14,8 @@ export const metadata: Metadata = { title: "Account settings" };
 
 export default async function AccountPage({ searchParams }: { searchParams: Promise<{ email?: string; error?: string }> }) {
   const { user, session } = await requirePageSession("/account");
-  const [devices, plan] = await Promise.all([activeSessions(user.id, session.id), accountDeletionPlan(user.id)]);
+  // the user's id comes from the session, never from the request: only their own events
+  const [devices, activity, plan] = await Promise.all([activeSessions(user.id, session.id), accountActivity(user.id), accountDeletionPlan(user.id)]);
   const held = (list: typeof plan.left) => list.map((w) => ({ id: w.id, name: w.name, members: w.members }));
   // back from the link mailed to a new address (better-auth adds `error` when the link failed)
   const { email: emailStep, error } = await searchParams;
@@ -40,6 +43,9 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
         </Panel>
         <Panel title="Signed-in devices" description="Every browser where your account is signed in now. One you do not know? Sign it out, then change your password.">
           <DevicesPanel sessions={devices} />
+        </Panel>
+        <Panel title="Recent account activity" description="Your last 20 sign-ins, sign-outs and changes of password or address, newest first. One you did not make? Sign out everywhere, then change your password.">
+          <AccountActivity events={activity} />
         </Panel>
         <Panel title="Notifications">
           <NotificationsForm enabled={user.emailNotifications !== false} />

@@ -41,6 +41,8 @@ const ROWS: Record<string, Row> = {
   "GET /api/health": { expect: all(200), run: (h) => call(h, {}) },
   // Deleting one's own account, with a wrong password (a right one would end the caller's account for
   // the rows after): the owner is the last owner of the matrix's workspace, refused before the password.
+  // One's own account activity: every signed-in person reads their own, whatever their role.
+  "GET /api/account/activity": { expect: signedIn(200), run: (h, _f, p) => call(h, { cookie: p.cookie }) },
   "DELETE /api/account": { expect: { ...signedIn(400), owner: 409 }, run: (h, _f, p) => call(h, { method: "DELETE", cookie: p.cookie, body: { password: "not-the-password" } }) },
   // Token routes: the link is the key, not a role. Accepting needs a session whose address the
   // invitation names (a member keeps their role); signing up from a link needs no session at all.
