@@ -287,7 +287,7 @@ function ThreadView({ t, n, labels, data, viewerId, selected, onSelect, m }: { t
   }, [selected]);
   const writable = !data.locked && data.canComment;
   return (
-    <article ref={ref} id={`thread-${t.id}`} onClick={onSelect} data-testid={`thread-${n}`} data-selected={selected || undefined} className={`space-y-2 rounded-md border p-3 ${selected ? "border-accent bg-accent-soft/20" : t.resolvedAt ? "border-dashed border-rule bg-paper" : "border-rule bg-paper-card"}`}>
+    <article ref={ref} id={`thread-${t.id}`} tabIndex={-1} onClick={onSelect} data-testid={`thread-${n}`} data-selected={selected || undefined} className={`space-y-2 rounded-md border p-3 focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-accent ${selected ? "border-accent bg-accent-soft/20" : t.resolvedAt ? "border-dashed border-rule bg-paper" : "border-rule bg-paper-card"}`}>
       <header className="flex items-center justify-between gap-2 text-xs">
         <span className="flex items-center gap-1.5 font-semibold text-ink">
           <span className={`inline-flex h-5 min-w-5 items-center justify-center rounded-full px-1 text-[11px] ${t.resolvedAt ? "bg-rule-soft text-ink-soft" : "bg-ink text-paper"}`}>{t.resolvedAt ? `✓${n}` : n}</span>

@@ -10,6 +10,14 @@ import { Dialog } from "@/components/versions/Dialog";
 /** Shown below this share of its own width, a drawing's words are too small to read comfortably. */
 const READABLE = 0.8;
 
+/** The drawing as shown, without what is marked `data-enlarge-skip` (the comment pins' buttons) and without posing as the page's drawing. */
+function copyOf(el: HTMLElement | null): string {
+  if (!el) return "";
+  const copy = el.cloneNode(true) as HTMLElement;
+  for (const skip of copy.querySelectorAll("[data-enlarge-skip]")) skip.remove();
+  return copy.innerHTML.replace(/ data-testid="[^"]*"/g, "").replace(/ role="img"/g, "");
+}
+
 export function Enlargeable({ naturalWidth, label, children }: { naturalWidth: number; label: string; children: ReactNode }) {
   const box = useRef<HTMLDivElement>(null);
   const [shown, setShown] = useState<number | null>(null);
@@ -42,7 +50,7 @@ export function Enlargeable({ naturalWidth, label, children }: { naturalWidth: n
           type="button"
           className="absolute right-2 top-2 rounded border border-rule bg-paper-card/95 px-2 py-1 text-xs font-medium text-ink shadow-sm hover:bg-paper focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-accent"
           aria-label={`Enlarge: ${label}`}
-          onClick={() => setCopy((box.current?.innerHTML ?? "").replace(/ data-testid="[^"]*"/g, "").replace(/ role="img"/g, ""))}
+          onClick={() => setCopy(copyOf(box.current))}
         >
           Enlarge
         </button>

@@ -9,7 +9,7 @@ import { renderSketchSvg } from "@/canvas/render/svg";
 import { solveDocument } from "@/lib/review/compare";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
-import { drawingScale, drawMarks, drawPins, worldPoint, type MarkKind, type PinMarker } from "./drawingOverlay";
+import { drawingScale, drawMarks, drawPins, worldPoint, type MarkKind, type PinMarker, type PinSpot } from "./drawingOverlay";
 
 export type PickedPin = { kind: "element"; elementId: string; label: string } | { kind: "point"; at: [number, number] };
 
@@ -100,11 +100,16 @@ export function ReviewDrawing({
     [document, result, drawnWidth, drawnHeight, caption, units, frame, layer, onlyLabelsOf, family],
   );
 
+  // each pin is also a button laid over the drawing (outside its role="img", whose insides a
+  // screen reader does not enter): at the pin's head, in shares of the drawing's own size
+  const [spots, setSpots] = useState<Array<PinSpot & { left: number; top: number }>>([]);
   useLayoutEffect(() => {
     const el = box.current?.querySelector("svg");
     if (!el) return;
     if (marks) drawMarks(el, marks);
-    if (pins) drawPins(el, pins, drawingScale(el, sketch), sketch ? elementAnchors(sketch) : undefined);
+    const placed = pins ? drawPins(el, pins, drawingScale(el, sketch), sketch ? elementAnchors(sketch) : undefined) : [];
+    const [w, h] = [Number(el.getAttribute("width")), Number(el.getAttribute("height"))];
+    setSpots(w > 0 && h > 0 ? placed.map((p) => ({ ...p, left: (100 * p.x) / w, top: (100 * p.y) / h })) : []);
   }, [svg, marks, pins, sketch]);
 
   const drawing = (
@@ -137,11 +142,35 @@ export function ReviewDrawing({
       dangerouslySetInnerHTML={{ __html: svg }}
     />
   );
-  // a layer is enlarged with the drawing it lies over (the caller wraps the pair)
+  // (always this shape: a drawing re-made when its first pin arrives would lose the marks drawn on it)
+  const withPins = (
+    <div className="relative">
+      {drawing}
+      {/* for the keyboard and assistive technology; a mouse clicks the drawn pin under it (which
+          does the same), and a click while pinning lands on the drawing. Not copied into the
+          enlarged drawing, which takes no clicks. */}
+      {spots.length ? (
+        <div className="pointer-events-none absolute inset-0" data-enlarge-skip data-testid="comment-pins">
+          {spots.map((p) => (
+            <button
+              key={p.threadId}
+              type="button"
+              aria-label={p.name}
+              data-pin={p.n}
+              onClick={() => onSelectThread?.(p.threadId)}
+              className="absolute h-7 w-7 -translate-x-1/2 -translate-y-1/2 rounded-full focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-accent focus-visible:ring-offset-2 focus-visible:ring-offset-paper"
+              style={{ left: `${p.left}%`, top: `${p.top}%` }}
+            />
+          ))}
+        </div>
+      ) : null}
+    </div>
+  );
+  // a layer (no pins) is enlarged with the drawing it lies over (the caller wraps and places the pair)
   if (layer) return drawing;
   return (
     <Enlargeable naturalWidth={drawnWidth} label={label}>
-      {drawing}
+      {withPins}
     </Enlargeable>
   );
 }

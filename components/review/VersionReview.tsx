@@ -27,6 +27,8 @@ import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnits
 import { CommentsPanel, type CommentsData } from "./Comments";
 import { VersionSweeps } from "./VersionSweeps";
 import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
+import { pinName } from "./drawingOverlay";
+import { plainText } from "@/lib/review/comment-text";
 import { SignOffPanel, type SignOffData } from "./SignOff";
 import { CalcSheetLink } from "@/components/versions/CalcSheetLink";
 import { RestoreDialog, type Restored } from "@/components/versions/RestoreDialog";
@@ -139,7 +141,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   const pins = useMemo(
     () =>
       (comments.data?.threads ?? []).flatMap((t, i) =>
-        t.pin ? [{ threadId: t.id, n: i + 1, at: t.pin.kind === "element" ? { elementId: t.pin.elementId } : { point: t.pin.at }, resolved: t.resolvedAt !== null, selected: t.id === selected }] : [],
+        t.pin ? [{ threadId: t.id, n: i + 1, name: pinName(i + 1, t.comments[0], t.resolvedAt !== null, plainText), at: t.pin.kind === "element" ? { elementId: t.pin.elementId } : { point: t.pin.at }, resolved: t.resolvedAt !== null, selected: t.id === selected }] : [],
       ),
     [comments.data, selected],
   );
@@ -262,7 +264,11 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
                 setPin(p);
                 setPicking(false);
               }}
-              onSelectThread={setSelected}
+              onSelectThread={(id) => {
+                setSelected(id);
+                // the thread takes the focus, so a keyboard carries on there (reading it, replying)
+                requestAnimationFrame(() => document.getElementById(`thread-${id}`)?.focus({ preventScroll: true }));
+              }}
               units={units}
               family={family}
               label={`Drawing of version ${number} with its reactions and ${pins.length} comment pins`}

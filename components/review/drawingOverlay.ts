@@ -9,7 +9,20 @@ const NS = "http://www.w3.org/2000/svg";
 export const OVERLAY_CLASS = "review-overlay";
 
 export type MarkKind = "changed" | "added" | "removed";
-export type PinMarker = { threadId: string; n: number; at: { elementId: string } | { point: [number, number] }; resolved: boolean; selected: boolean };
+/** `name`: what the pin's button is called (see `pinName`) */
+export type PinMarker = { threadId: string; n: number; name: string; at: { elementId: string } | { point: [number, number] }; resolved: boolean; selected: boolean };
+/** Where a pin's head is drawn, in the svg's own pixels (its viewBox), for the button laid over it. */
+export type PinSpot = { threadId: string; n: number; name: string; x: number; y: number };
+
+/** A pin's button's name: "Comment 3 by Chen Checker: the anchor bolts look short…", and "(resolved)". */
+export function pinName(n: number, first: { authorName: string | null; body: string; deleted: boolean } | undefined, resolved: boolean, plain: (text: string) => string): string {
+  const who = first?.authorName ?? "a deleted account";
+  let words = !first ? "" : first.deleted ? "a deleted comment" : plain(first.body);
+  const cut = words.split(" ");
+  if (cut.length > 8) words = `${cut.slice(0, 8).join(" ")}…`;
+  else if (words.length > 60) words = `${words.slice(0, 60)}…`;
+  return `Comment ${n} by ${who}${words ? `: ${words}` : ""}${resolved ? " (resolved)" : ""}`;
+}
 
 /** The group the renderer translates, which holds every element. */
 export function contentGroup(svg: SVGSVGElement): SVGGElement | null {
@@ -64,20 +77,76 @@ const MARK_STYLE: Record<MarkKind, { dash: string; word: string; stroke: string 
   removed: { dash: "2 3", word: "removed", stroke: "#8c3520" },
 };
 
-/** Outline each marked element: dashed for changed, solid with “+” for added, dotted with “×” for removed, and the word. */
+type Box = { x: number; y: number; width: number; height: number };
+export type WordSpot = { x: number; y: number; anchor: "start" | "end"; box: Box };
+
+/** A mark's word's box, estimated (11 px semi-bold: about 0.62 em a character), so that it is the same in every browser. */
+export function wordSize(text: string, size = 11): { width: number; height: number } {
+  return { width: Math.ceil([...text].length * size * 0.62), height: size + 3 };
+}
+
+const overlap = (a: Box, b: Box) => Math.max(0, Math.min(a.x + a.width, b.x + b.width) - Math.max(a.x, b.x)) * Math.max(0, Math.min(a.y + a.height, b.y + b.height) - Math.max(a.y, b.y));
+
+/**
+ * Where a mark's word goes beside its outline (drawing pixels): above its left corner, else above
+ * its right corner, below its left, below its right: the first place that covers none of `avoid`
+ * (the labels drawn near it, its own included, and the words placed before), else the one that
+ * covers least of them. `x`, `y` are the text's anchor point and baseline.
+ */
+export function placeMarkWord(outline: Box, word: { width: number; height: number }, avoid: readonly Box[]): WordSpot {
+  const gap = 4;
+  const above = outline.y - gap;
+  const below = outline.y + outline.height + gap + word.height - 3;
+  const spots: WordSpot[] = [
+    [outline.x + 2, above, "start"],
+    [outline.x + outline.width - 2, above, "end"],
+    [outline.x + 2, below, "start"],
+    [outline.x + outline.width - 2, below, "end"],
+  ].map(([x, y, anchor]) => {
+    const left = anchor === "start" ? (x as number) : (x as number) - word.width;
+    return { x: x as number, y: y as number, anchor: anchor as WordSpot["anchor"], box: { x: left, y: (y as number) - word.height + 3, width: word.width, height: word.height } };
+  });
+  let best = spots[0];
+  let least = Infinity;
+  for (const s of spots) {
+    const covered = avoid.reduce((sum, b) => sum + overlap(s.box, b), 0);
+    if (covered === 0) return s;
+    if (covered < least) [best, least] = [s, covered];
+  }
+  return best;
+}
+
+/** The drawn boxes of the drawing's words (labels and results), outside the review marks. */
+function textBoxes(group: SVGGElement): Box[] {
+  const out: Box[] = [];
+  for (const t of group.querySelectorAll<SVGTextElement>("text")) {
+    if (t.closest(`.${OVERLAY_CLASS}`)) continue;
+    try {
+      const b = t.getBBox();
+      if (b.width || b.height) out.push({ x: b.x, y: b.y, width: b.width, height: b.height });
+    } catch {
+      // not laid out (no layout engine): nothing to avoid
+    }
+  }
+  return out;
+}
+
+/** Outline each marked element: dashed for changed, solid with “+” for added, dotted with “×” for removed, and the word, placed clear of the labels near it. */
 export function drawMarks(svg: SVGSVGElement, marks: Record<string, MarkKind>): void {
   const group = contentGroup(svg);
   if (!group) return;
   const g = overlay(group, "marks");
+  const avoid = textBoxes(group);
   for (const [id, kind] of Object.entries(marks)) {
     const b = boxOf(group, id);
     if (!b) continue;
     const s = MARK_STYLE[kind];
-    const x = b.x - 7;
-    const y = b.y - 7;
-    g.appendChild(el("rect", { x, y, width: b.width + 14, height: b.height + 14, rx: 4, fill: "none", stroke: s.stroke, "stroke-width": 1.6, "stroke-dasharray": s.dash, "data-mark": kind, "data-mark-id": id }));
+    const outline = { x: b.x - 7, y: b.y - 7, width: b.width + 14, height: b.height + 14 };
+    g.appendChild(el("rect", { ...outline, rx: 4, fill: "none", stroke: s.stroke, "stroke-width": 1.6, "stroke-dasharray": s.dash, "data-mark": kind, "data-mark-id": id }));
     const tag = kind === "added" ? "+ added" : kind === "removed" ? "× removed" : "△ changed";
-    const label = el("text", { x: x + 2, y: y - 4, "font-size": 11, "font-weight": 600, fill: s.stroke, stroke: "#fbfaf6", "stroke-width": 3, "paint-order": "stroke" });
+    const spot = placeMarkWord(outline, wordSize(tag), avoid);
+    avoid.push(spot.box);
+    const label = el("text", { x: spot.x, y: spot.y, "text-anchor": spot.anchor, "font-size": 11, "font-weight": 600, fill: s.stroke, stroke: "#fbfaf6", "stroke-width": 3, "paint-order": "stroke", "data-mark-word": id });
     label.textContent = tag;
     g.appendChild(label);
   }
@@ -88,10 +157,14 @@ export function drawMarks(svg: SVGSVGElement, marks: Record<string, MarkKind>): 
  * `anchors`: where each element is (world, m): a support's, load's or port's point, a body's top
  * right corner. A pin stands on it; without one (or the scale) it stands on the element's drawn box.
  */
-export function drawPins(svg: SVGSVGElement, pins: PinMarker[], scale: number | null, anchors: ReadonlyMap<string, [number, number]> = new Map()): void {
+export function drawPins(svg: SVGSVGElement, pins: PinMarker[], scale: number | null, anchors: ReadonlyMap<string, [number, number]> = new Map()): PinSpot[] {
   const group = contentGroup(svg);
-  if (!group) return;
+  if (!group) return [];
   const g = overlay(group, "pins");
+  // the group's own shift, so that a spot is in the svg's pixels
+  const shift = /translate\(\s*(-?[\d.]+)[\s,]+(-?[\d.]+)\s*\)/.exec(group.getAttribute("transform") ?? "");
+  const [dx, dy] = shift ? [Number(shift[1]), Number(shift[2])] : [0, 0];
+  const spots: PinSpot[] = [];
   for (const p of pins) {
     let at: [number, number] | null = null;
     if ("elementId" in p.at) {
@@ -103,13 +176,16 @@ export function drawPins(svg: SVGSVGElement, pins: PinMarker[], scale: number | 
       }
     } else if (scale) at = [p.at.point[0] * scale, -p.at.point[1] * scale];
     if (!at) continue;
-    const pin = el("g", { "data-thread": p.threadId, transform: `translate(${at[0].toFixed(1)} ${at[1].toFixed(1)})`, style: "cursor:pointer", role: "button", "aria-label": `Comment ${p.n}` });
+    // drawn only: the button laid over it (ReviewDrawing) is what a keyboard and a screen reader reach
+    const pin = el("g", { "data-thread": p.threadId, transform: `translate(${at[0].toFixed(1)} ${at[1].toFixed(1)})`, style: "cursor:pointer", "aria-hidden": "true" });
     pin.appendChild(el("path", { d: "M0 0 L-5 -10 A11 11 0 1 1 5 -10 Z", fill: p.resolved ? "#e2dccf" : p.selected ? "#b4462b" : "#1d2329", stroke: "#fbfaf6", "stroke-width": 1.5 }));
     const n = el("text", { x: 0, y: -18, "text-anchor": "middle", "dominant-baseline": "central", "font-size": 11, "font-weight": 700, fill: p.resolved ? "#3d4650" : "#fbfaf6" });
     n.textContent = p.resolved ? `✓${p.n}` : String(p.n);
     pin.appendChild(n);
     g.appendChild(pin);
+    spots.push({ threadId: p.threadId, n: p.n, name: p.name, x: Math.round((dx + at[0]) * 10) / 10, y: Math.round((dy + at[1] - 18) * 10) / 10 });
   }
+  return spots;
 }
 
 /** The world point (m) under a pointer event, or null when the scale is unknown. */

@@ -63,6 +63,8 @@ describe("marks on a comparison's drawing", () => {
     trailer: { x: 10, y: 20, width: 200, height: 80 },
     wind: { x: 250, y: 30, width: 40, height: 12 },
     supply: { x: 300, y: 90, width: 24, height: 24 },
+    // a neighbouring port's name, written just above the trailer's top left corner
+    "inlet-name": { x: 0, y: -4, width: 70, height: 14 },
   };
   beforeAll(() => {
     Object.defineProperty(SVGElement.prototype, "getBBox", {
@@ -99,6 +101,18 @@ describe("marks on a comparison's drawing", () => {
     // each word sits just above its outline
     const trailerWord = svg.querySelectorAll(`g.${OVERLAY_CLASS}-marks text`)[0];
     expect([Number(trailerWord.getAttribute("x")), Number(trailerWord.getAttribute("y"))]).toEqual([5, 9]);
+  });
+
+  it("a word that would cover a neighbour's label goes to the outline's other corner", () => {
+    const svg = drawing();
+    const name = document.createElementNS("http://www.w3.org/2000/svg", "text");
+    name.setAttribute("data-id", "inlet-name");
+    name.textContent = "inlet";
+    svg.querySelector("g[data-id='trailer']")!.parentElement!.appendChild(name);
+    drawMarks(svg, { trailer: "changed" });
+    const word = svg.querySelector(`g.${OVERLAY_CLASS}-marks text[data-mark-word="trailer"]`)!;
+    // above the right corner (outline 3 … 217), its end 2 px inside it: clear of the label (0 … 70)
+    expect([word.getAttribute("x"), word.getAttribute("y"), word.getAttribute("text-anchor")]).toEqual(["215", "9", "end"]);
   });
 
   it("an element with nothing to mark, or not drawn, gets no mark; drawing again replaces the marks rather than adding to them", () => {

@@ -105,6 +105,20 @@ describe("review of a calculation in the browser", () => {
     // a pin on the drawing opens its thread
     await page.locator('[data-testid="review-drawing"] [data-thread]').first().click();
     await page.locator('[data-testid="thread-1"][data-selected]').waitFor();
+    // and by keyboard: each pin is a button named by its number, author and first words (outside the
+    // drawing's image, so a screen reader finds it); Enter opens its thread and moves the focus there
+    const second = page.getByRole("button", { name: "Comment 2 by Chet Checkley: Where does the drain channel run?" });
+    await second.focus();
+    // (arrived at by Tab, as a keyboard would: its ring shows)
+    await page.keyboard.press("Shift+Tab");
+    await page.keyboard.press("Tab");
+    expect(await second.evaluate((el) => el === document.activeElement)).toBe(true);
+    expect(await second.evaluate((el) => getComputedStyle(el).boxShadow)).not.toBe("none");
+    await page.keyboard.press("Enter");
+    await page.locator('[data-testid="thread-2"][data-selected]').waitFor();
+    await page.waitForFunction(() => document.activeElement?.getAttribute("data-testid") === "thread-2");
+    await page.locator('[data-testid="thread-1"]').click();
+    await page.locator('[data-testid="thread-1"][data-selected]').waitFor();
     await shot(page, "review-02-pinned-comment");
 
     await takeStep(page, "return", "See the pinned comment on the rear foot.");
