@@ -11,7 +11,7 @@ import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { Dialog } from "./Dialog";
 import type { VersionItem } from "./VersionHistory";
 
-export type Restored = { number: number; restoredFrom: number; message: string };
+export type Restored = { number: number; restoredFrom: number; message: string; createdAt?: string };
 
 export function RestoreDialog({
   sketchId,

@@ -28,6 +28,11 @@ import type { VersionItem } from "@/components/versions/VersionHistory";
 const CHIP = "h-7 pointer-coarse:h-10 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
 const CARD = "rounded-lg border p-3 text-[13px] text-ink shadow-[0_6px_24px_rgb(var(--shade)/0.14)]";
 
+/** What the editor says once an older version is the latest again: "v5 is now the latest: a copy of v2." */
+export function latestAgainWords(made: Pick<Restored, "number" | "restoredFrom">): string {
+  return `v${made.number} is now the latest: a copy of v${made.restoredFrom}.`;
+}
+
 function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; latest: number; workspaceId: string; onDiscard: () => void }) {
   return (
     <div role="status" data-testid="kept-work" className={`${CARD} border-caution/40 bg-caution-soft`}>
@@ -297,6 +302,24 @@ function Bar({ flow }: { flow: SaveFlow }) {
 
   if (!info || base === null) return null;
   const canSave = can(info.role, "version.save");
+  // vN made the latest again as v{made}: the drawing open here, unchanged (the offer is only made
+  // with nothing changed), is what v{made} holds, so the editor goes on as v{made}, the latest, and
+  // the address stops naming vN (a reload opens the latest). The restore keeps the sketch's present
+  // name: an older version's own title is brought up to it, without a step in the undo history.
+  const onLatestAgain = (made: Restored) => {
+    const editor = stores.editor.getState();
+    const doc = editor.sketch.title === info.title ? editor.sketch : { ...editor.sketch, title: info.title };
+    if (doc !== editor.sketch) editor.reset(doc);
+    const at = made.createdAt ?? new Date().toISOString();
+    flow.setState({ base: made.number, baseDoc: doc, lastSaved: { number: made.number, at }, info: { ...info, latest: made.number }, savedElsewhere: undefined });
+    announceSaved(info.sketchId, { version: made.number, at });
+    const url = new URL(window.location.href);
+    if (url.searchParams.has("version")) {
+      url.searchParams.delete("version");
+      window.history.replaceState(window.history.state, "", url);
+    }
+    editor.notify(latestAgainWords(made));
+  };
   const settle = (outcome: Parameters<NonNullable<typeof pending>["resolve"]>[0]) => {
     pending?.resolve(outcome);
     flow.setState({ pending: null });
@@ -399,9 +422,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
           onRestored={(made) => {
             setRestoring(false);
             setMadeLatest(made);
-            flow.setState({ info: { ...info, latest: made.number } });
-            announceSaved(info.sketchId, { version: made.number, at: new Date().toISOString() });
-            stores.editor.getState().notify(`Saved v${made.number} with the drawing of v${base}: it is the latest version now.`);
+            onLatestAgain(made);
           }}
         />
       ) : null}
@@ -476,12 +497,9 @@ function Bar({ flow }: { flow: SaveFlow }) {
       {madeLatest ? (
         <div role="status" data-testid="made-latest" className={`${CARD} border-ink/15 bg-paper-card`}>
           <p>
-            Saved <strong>v{madeLatest.number}</strong> with the drawing of v{madeLatest.restoredFrom}: it is the latest version now.
+            <strong>v{madeLatest.number}</strong> is now the latest: a copy of v{madeLatest.restoredFrom}. The editor shows v{madeLatest.number}; v{madeLatest.restoredFrom} stays in the history.
           </p>
           <div className="mt-2 flex flex-wrap gap-2">
-            <button type="button" onClick={() => leave(`/sketches/${info.sketchId}`)} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
-              Open v{madeLatest.number}
-            </button>
             <button type="button" onClick={() => setMadeLatest(null)} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
               Got it
             </button>
