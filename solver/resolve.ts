@@ -111,7 +111,6 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
   /** parameter name → ids of the elements whose fields read it directly */
   const readers = new Map<string, Set<string>>();
 
-  /** Evaluate one field value in place; `ids` names the element it belongs to (for warnings). */
   /**
    * Beside a parameter h or L, a text that reads as a valid value of the field both ways
    * ("600 L/min" with L a volume: litres per minute, or 600 × L per minute) is refused, naming both
@@ -135,6 +134,7 @@ export function resolveSketch(file: SketchFile): ResolveOutput {
     throw new TwoWays(`"${raw}" reads two ways here: ${say(value)} as ${two.taken}, or ${say(other)} as ${two.otherWords}; write ${two.takenText} for the first`);
   };
 
+  /** Evaluate one field value in place; `ids` names the element it belongs to (for warnings). */
   const evalField = (raw: unknown, kind: FieldKind, path: string, target: Record<string | number, unknown>, key: string | number, ids: string[] = []) => {
     if (typeof raw === "number") {
       if (!Number.isFinite(raw)) {
