@@ -22,6 +22,8 @@ import { errorInWords } from "@/components/results/errorPlace";
 import { runErrorWords, studyErrorWords } from "./studyError";
 import { defaultLimitQuantity, SweepChart, sweepTable } from "./SweepChart";
 import { downloadCsv, useCsvName } from "./csv";
+import { limitRowsTable, type SweepLimitRow } from "@/lib/calcsheet/sweeps";
+import type { Table } from "@/solver/report";
 import { invalidStretches } from "./sweepErrors";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, solvesAtIn, type ParameterValue } from "./sweepRange";
 
@@ -176,6 +178,61 @@ export function bodySidesWords(rows: readonly LimitEverywhere[], q: BodyLimitSpe
   return ` ${names[q.body] ?? q.body} slides as a whole throughout the range in ${andList(all)}.`;
 }
 
+/** "In every case" as answered: the same limit searched in every case and combination. */
+export interface Everywhere {
+  rows: LimitEverywhere[];
+  label: string;
+  target: string;
+  /** the target in SI, to say which side of it a run that never reaches it stays on */
+  targetSI: number;
+  /** the runs where it comes first: more than one when they tie */
+  first: string[];
+  firstValue: number | null;
+  unit: string;
+  from: number;
+  to: number;
+  precision: string;
+  /** the searched runs' cases that set the parameter themselves: "name: value" */
+  overrides: string[];
+  pName: string;
+  /** a body's own limit searched (no target) */
+  body?: BodyLimitSpec;
+  /** the parameter searched (its name in the sketch) */
+  parameter: string;
+  /** what was searched: a support's quantity or a body's own limit */
+  quantity: LimitQuantity;
+  /** the search's tolerance, in the parameter's unit */
+  tolerance: number;
+}
+
+/**
+ * "In every case" as a result table, for its CSV: built by the same builder as a version page's
+ * table of a kept sweep's limits (`limitRowsTable`), a row per case or combination, with where the
+ * limit is reached (full precision), and the words on screen for a run that does not reach it.
+ */
+export function everywhereTable(e: Everywhere, sketch: SketchFile): Table {
+  const rows: SweepLimitRow[] = e.rows.map((run) => {
+    const r = run.result;
+    const value = reachedAt(r, e.from, e.to);
+    const first = e.first.includes(run.id);
+    return {
+      run,
+      quantity: e.body ? { support: e.body.body, component: e.body.limit === "tips" ? "margin" : "frictionMargin" } : (e.quantity as QuantitySpec),
+      limit: e.body ? e.label : `${e.label} reaches ${e.target}`,
+      past: e.body ? (e.body.limit === "tips" ? "tipping" : "sliding as a whole") : "",
+      value,
+      more: "found" in r && r.found ? Math.max(0, r.crossings.length - 1) : 0,
+      pastThroughout: false,
+      first,
+      governs: first,
+      ...(e.body ? { body: e.body.body } : {}),
+      ...("error" in r ? { unreached: runErrorWords(sketch, r) } : !r.found ? { unreached: e.body ? bodyNoCrossingWords(r, e.body, e.pName, e.unit) : noCrossingWords(r, e.targetSI, e.target) } : {}),
+    };
+  });
+  const title = e.body ? `Where ${e.label}, in each case and combination` : `Where the ${e.label} reaches ${e.target}, in each case and combination`;
+  return limitRowsTable(rows, { id: "limit-everywhere", title, parameter: e.parameter, from: e.from, to: e.to, unit: e.unit, tolerance: e.tolerance });
+}
+
 export function SweepPanel() {
   const { editor } = useStores();
   const csvName = useCsvName();
@@ -286,25 +343,7 @@ export function SweepPanel() {
   const [target, setTarget] = useState("0");
   const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** in the unit on screen ("" for a body's own limit) */ target: string; /** the answer, in words with units */ words: string } | null>(null);
   /** the same limit in every case and combination */
-  const [everywhere, setEverywhere] = useState<{
-    rows: LimitEverywhere[];
-    label: string;
-    target: string;
-    /** the target in SI, to say which side of it a run that never reaches it stays on */
-    targetSI: number;
-    /** the runs where it comes first: more than one when they tie */
-    first: string[];
-    firstValue: number | null;
-    unit: string;
-    from: number;
-    to: number;
-    precision: string;
-    /** the searched runs' cases that set the parameter themselves: "name: value" */
-    overrides: string[];
-    pName: string;
-    /** a body's own limit searched (no target) */
-    body?: BodyLimitSpec;
-  } | null>(null);
+  const [everywhere, setEverywhere] = useState<Everywhere | null>(null);
   /** a target that does not read: said beside the limit finder, not up by the sweep's Run */
   const [limitError, setLimitError] = useState<string | null>(null);
   const [searching, setSearching] = useState<(() => void) | null>(null);
@@ -442,6 +481,9 @@ export function SweepPanel() {
           overrides: overridesIn(ran!.sketch, rows, s.parameter),
           pName: parameterWords(s.parameter),
           ...(isBodyLimit(q) ? { body: q } : {}),
+          parameter: s.parameter,
+          quantity: q,
+          tolerance,
         });
       })
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(studyErrorWords(ran?.sketch ?? sketch, err))))
@@ -820,6 +862,14 @@ export function SweepPanel() {
                     ))}
                   </tbody>
                 </table>
+                <button
+                  type="button"
+                  className={`${BUTTON} mt-0.5 h-6 px-2 text-[11.5px]`}
+                  onClick={() => downloadCsv(everywhereTable(everywhere, ran?.sketch ?? sketch), csvName(`limit-in-every-case-${everywhere.parameter}`))}
+                  aria-label="Download the limit in every case as CSV"
+                >
+                  CSV
+                </button>
                 <p className="mt-0.5 text-[11.5px] text-ink-faint" data-testid="limit-everywhere-overrides">
                   {everywhere.overrides.length
                     ? `Each is searched over ${everywhere.pName} from ${formatNumber(everywhere.from, 5)} to ${formatNumber(everywhere.to, 5)}${everywhere.unit ? ` ${prettyUnit(everywhere.unit)}` : ""}: ${everywhere.pName === "flow factor" ? "the searched flow factor multiplies a case's own" : `the searched value stands in for the ${everywhere.pName} a case sets itself`} (${everywhere.overrides.join("; ")}).`

@@ -128,6 +128,9 @@ export interface SweepLimitRow {
   governs: boolean;
   /** the body whose own limit it is (it tips, or slides as a whole); absent for a support's */
   body?: string;
+  /** the note for a run that does not reach the limit, or is not solved, in the caller's words (the
+   *  editor's "In every case" says which side of its target the quantity stays on); else the table's own */
+  unreached?: string;
 }
 
 /**
@@ -269,17 +272,20 @@ function bodyWords(rows: SweepLimitRow[], sw: SweepFile, p: string, unit: string
 }
 
 /**
- * The calc sheet's table of a kept sweep's limits (`sweepLimitRows`): grouped by limit, a row for
- * each run, with where the limit is first reached, or "none in 0 … 80 deg". The one that governs is
- * marked ◆ and said in words, the first of each other limit ◇, so the mark is never colour alone.
- * When what governs is a support's limit, the summary says each body's own first limit after it.
+ * A table of limits searched in runs (`SweepLimitRow`s), a row for each run, with where the limit is
+ * first reached, or "none in 0 … 80 deg" and why. The calc sheet's and a version page's table of a
+ * kept sweep's limits (`sweepLimitTable`), and the editor's "In every case" (one limit): one
+ * builder, so the CSV of each says the same in the same columns. `plotted`: the run whose plot the
+ * table sits under, marked "(plotted)".
  */
-export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (done: number, total: number) => void): { table: Table; summary: string } {
-  const { rows, unit, tolerance } = sweepLimitRows(file, sw, onProgress);
-  const ownId = sw.combination ?? sw.case ?? "";
+export function limitRowsTable(
+  rows: SweepLimitRow[],
+  o: { id: string; title: string; parameter: string; from: number; to: number; unit: string; tolerance: number; plotted?: { id: string; combination: boolean } },
+): Table {
+  const { unit, tolerance } = o;
   const u = unit ? ` ${prettyUnit(unit)}` : "";
-  const span = `${formatNumber(sw.from, 6)} … ${formatNumber(sw.to, 6)}${u}`;
-  const p = parameterWords(sw.parameter);
+  const span = `${formatNumber(o.from, 6)} … ${formatNumber(o.to, 6)}${u}`;
+  const p = parameterWords(o.parameter);
   const governing = rows.filter((r) => r.governs);
   const marks: Table["marks"] = [];
   const cells = rows.map((r): Cell[] => {
@@ -290,24 +296,24 @@ export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (d
     const slidesFrom = r.past === "tipping" && "found" in res ? (res as BodyLimitResult).slidesFrom : undefined;
     if ("error" in res) {
       value = "not solved";
-      note = res.error;
+      note = r.unreached ?? res.error;
     } else if (r.value === undefined) {
       value = `none in ${span}`;
       // sliding is read only while the body is held: where it tips in this run, say so
       const tips = r.past === "sliding as a whole" ? rows.find((t) => t.body === r.body && t.past === "tipping" && t.run.kind === r.run.kind && t.run.id === r.run.id && t.value !== undefined) : undefined;
-      note = r.pastThroughout
+      note = r.unreached ?? (r.pastThroughout
         ? `past it throughout: ${r.past} over the whole range (the margin stays below zero)`
         : tips
           ? `searched while the body is held: it tips from ${limitWithUnit(tips.value!, unit)}`
           : slidesFrom !== undefined
             ? `it slides as a whole from ${limitWithUnit(slidesFrom, unit)}`
-            : "";
+            : "");
     } else {
       value = r.value;
-      const slidFirst = slidesFrom !== undefined && (sw.from <= sw.to ? slidesFrom <= r.value : slidesFrom >= r.value);
+      const slidFirst = slidesFrom !== undefined && (o.from <= o.to ? slidesFrom <= r.value : slidesFrom >= r.value);
       const bits = [
         r.governs ? (governing.length > 1 ? "governs (first, a tie)" : "governs: reached first of all") : r.first ? "first of this limit" : "",
-        r.value === sw.from ? "already at the range's start" : "",
+        r.value === o.from ? "already at the range's start" : "",
         r.more ? `reached ${r.more} more time${r.more > 1 ? "s" : ""} in the range` : "",
         // friction is checked, not enforced: the body is solved as if held along its base
         slidFirst ? `while it is held against sliding: it already slides as a whole from ${limitWithUnit(slidesFrom, unit)}` : "",
@@ -316,13 +322,13 @@ export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (d
     }
     marks.push(r.governs ? { value: { symbol: "◆", text: "governs: the first limit reached over the sweep's range" } } : r.first && r.value !== undefined ? { value: { symbol: "◇", text: "the first run to reach this limit" } } : undefined);
     // the run plotted above, so the chart and its row are read together
-    const plotted = r.run.id === ownId && (r.run.kind === "combination") === !!sw.combination ? " (plotted)" : "";
+    const plotted = o.plotted && r.run.id === o.plotted.id && (r.run.kind === "combination") === o.plotted.combination ? " (plotted)" : "";
     return [r.limit, `${r.run.kind === "as drawn" ? "As drawn" : r.run.name}${plotted}`, value, note];
   });
   const reached = rows.map((r) => r.value).filter((x): x is number => x !== undefined);
-  const table: Table = {
-    id: `sweep-limits-${sw.id}`,
-    title: `Limits searched — ${p}`,
+  return {
+    id: o.id,
+    title: o.title,
     columns: [
       { key: "limit", label: "Limit", align: "left" },
       { key: "run", label: "Case or combination", align: "left" },
@@ -333,9 +339,24 @@ export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (d
     marks,
     figures: 4,
     notes: [
-      `Each limit searched by the limit finder over ${span} in every run listed (${limitPrecisionWords(tolerance, unit, reached)}); from ${formatNumber(sw.from, 6)}${u}, the first crossing is given. ◆\u00a0governs: the limit reached first of all; ◇\u00a0the first run to reach each other limit.`,
+      `Each limit searched by the limit finder over ${span} in every run listed (${limitPrecisionWords(tolerance, unit, reached)}); from ${formatNumber(o.from, 6)}${u}, the first crossing is given. ◆\u00a0governs: the limit reached first of all; ◇\u00a0the first run to reach each other limit.`,
     ],
   };
+}
+
+/**
+ * The calc sheet's table of a kept sweep's limits (`sweepLimitRows`): grouped by limit, a row for
+ * each run, with where the limit is first reached, or "none in 0 … 80 deg". The one that governs is
+ * marked ◆ and said in words, the first of each other limit ◇, so the mark is never colour alone.
+ * When what governs is a support's limit, the summary says each body's own first limit after it.
+ */
+export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (done: number, total: number) => void): { table: Table; summary: string } {
+  const { rows, unit, tolerance } = sweepLimitRows(file, sw, onProgress);
+  const u = unit ? ` ${prettyUnit(unit)}` : "";
+  const span = `${formatNumber(sw.from, 6)} … ${formatNumber(sw.to, 6)}${u}`;
+  const p = parameterWords(sw.parameter);
+  const governing = rows.filter((r) => r.governs);
+  const table = limitRowsTable(rows, { id: `sweep-limits-${sw.id}`, title: `Limits searched — ${p}`, parameter: sw.parameter, from: sw.from, to: sw.to, unit, tolerance, plotted: { id: sw.combination ?? sw.case ?? "", combination: !!sw.combination } });
   // a tie said once, at its value: each limit with the runs that reach it there
   const runWords = (r: SweepLimitRow) => (r.run.kind === "as drawn" ? "the sketch as drawn" : r.run.name);
   const tiedLimits = [...new Set(governing.map((r) => r.limit))].map((l) => `${l} in ${andWords(governing.filter((r) => r.limit === l).map(runWords))}`);
