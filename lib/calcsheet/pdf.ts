@@ -519,30 +519,69 @@ export function paragraph(doc: PDFKit.PDFDocument, text: string, x: number, widt
 }
 
 /**
- * Prose in the current font from `doc.y`, flowing onto the next page as it must, but never leaving
- * one line alone at the top of that page (a widow): when only the last line would go over, the
- * page ends a line early, so two go over. (The page it starts on keeps two lines at least:
- * `proseLead`, checked before.) A paragraph over more than two pages keeps this at its first break.
+ * How many of a paragraph's `lines` go on each page it runs over: as many as each page holds
+ * (`fit` on the first, `full` on each after it), but where only one line would be left for the next
+ * page (a widow), that page ends a line early, so two go over (common practice in typesetting). A
+ * page that holds fewer than three keeps what it holds (`proseLead` gives the first page two at least).
+ */
+export function proseBreaks(lines: number, fit: number, full: number): number[] {
+  const out: number[] = [];
+  let left = lines;
+  let room = fit;
+  while (left > 0) {
+    let take = Math.min(left, Math.max(room, 0));
+    if (left - take === 1 && take >= 3) take--;
+    // a page with no room at all (the paragraph starts at its foot): pdfkit moves on at once
+    if (take > 0 || out.length === 0) out.push(take);
+    left -= take;
+    room = full;
+    if (full < 1) break;
+  }
+  return out;
+}
+
+/**
+ * Prose in the current font from `doc.y`, flowing onto the next pages as it must, but never leaving
+ * one line alone at the top of a page (a widow) at any of its breaks: where only the last line
+ * would go over, the page ends a line early, so two go over (`proseBreaks`). (The page it starts
+ * on keeps two lines at least: `proseLead`, checked before.)
  */
 export function flowProse(doc: PDFKit.PDFDocument, text: string, x: number, width: number) {
   const options = { width, features: PROSE_FEATURES };
   const line = doc.currentLineHeight(true);
   const lines = Math.round(doc.heightOfString(text, options) / line);
   const page = doc.page;
-  // the lines the page holds from here (pdfkit breaks once the next line would pass its foot)
-  const fit = Math.floor((page.height - page.margins.bottom - doc.y) / line + 1e-6);
-  if (lines - fit !== 1 || fit < 3) {
+  // the lines a page holds from a height (pdfkit breaks once the next line would pass its foot)
+  const holds = (p: PDFKit.PDFPage, y: number) => Math.floor((p.height - p.margins.bottom - y) / line + 1e-6);
+  const fit = holds(page, doc.y);
+  const full = holds(page, page.margins.top);
+  const plan = proseBreaks(lines, fit, full);
+  // the pages (by their place in the plan) that end a line early
+  const early = new Set(plan.flatMap((take, k) => (k < plan.length - 1 && take < (k === 0 ? fit : full) ? [k] : [])));
+  if (!early.size) {
     doc.text(text, x, doc.y, options);
     return;
   }
-  // pdfkit reads the page's foot when the text starts: raise it half a line above the last line's
-  // foot for this paragraph, then put it back (the footer is drawn on the page later)
-  const margins = page.margins;
-  page.margins = { ...margins, bottom: page.height - (doc.y + (fit - 1) * line + line / 2) };
+  // pdfkit reads a page's foot when the text starts on it and at each page it adds: raise it half a
+  // line below the last line it keeps, for this paragraph, then put it back (the footer is drawn
+  // on each page later)
+  const raised: Array<[PDFKit.PDFPage, PDFKit.PDFPage["margins"]]> = [];
+  const raise = (p: PDFKit.PDFPage, y: number, take: number) => {
+    raised.push([p, p.margins]);
+    p.margins = { ...p.margins, bottom: p.height - (y + take * line + line / 2) };
+  };
+  let k = 0;
+  if (early.has(0)) raise(page, doc.y, plan[0]);
+  const added = () => {
+    k++;
+    if (early.has(k)) raise(doc.page, doc.page.margins.top, plan[k]);
+  };
+  doc.on("pageAdded", added);
   try {
     doc.text(text, x, doc.y, options);
   } finally {
-    page.margins = margins;
+    doc.off("pageAdded", added);
+    for (const [p, margins] of raised) p.margins = margins;
   }
 }
 

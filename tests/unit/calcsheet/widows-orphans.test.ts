@@ -1,9 +1,9 @@
-// A long paragraph at a page's end keeps at least two of its lines on each side of the break: no
-// single line left at the foot of a page (an orphan) nor alone at the top of the next (a widow),
-// common practice in typesetting. Read back with pdfjs-dist.
+// A long paragraph at a page's end keeps at least two of its lines on each side of every break, over
+// as many pages as it runs: no single line left at the foot of a page (an orphan) nor alone at the
+// top of the next (a widow), common practice in typesetting. Read back with pdfjs-dist.
 import PDFDocument from "pdfkit";
 import { describe, expect, it } from "vitest";
-import { buildCalcSheet, paragraph } from "@/lib/calcsheet/pdf";
+import { buildCalcSheet, paragraph, proseBreaks } from "@/lib/calcsheet/pdf";
 import { registerFonts } from "@/lib/calcsheet/fonts";
 import { pdfItems, type PdfItem } from "../../support/pdf-text";
 import { loadFixture } from "../solver/helpers";
@@ -79,6 +79,70 @@ describe("a paragraph at a page break", () => {
       expect(d.page.margins.bottom).toBe(MARGINS.bottom);
     });
     expect(linesPerPage(got, "r")).toEqual([2, 2]);
+  });
+});
+
+describe("a paragraph over more than two pages", () => {
+  it("plans two lines at least over every break, a page ending a line early wherever one would go over alone", () => {
+    // 10 lines held here, 50 on a full page
+    expect(proseBreaks(61, 10, 50)).toEqual([10, 49, 2]);
+    expect(proseBreaks(111, 10, 50)).toEqual([10, 50, 49, 2]);
+    // the first break guarded, as before
+    expect(proseBreaks(11, 10, 50)).toEqual([9, 2]);
+    expect(proseBreaks(60, 9, 50)).toEqual([9, 49, 2]);
+    // nothing to guard: each page full, the rest (two lines or more) on the last
+    expect(proseBreaks(62, 10, 50)).toEqual([10, 50, 2]);
+    expect(proseBreaks(60, 10, 50)).toEqual([10, 50]);
+    // every line placed, none alone on a page, wherever it starts and however long
+    for (let lines = 4; lines <= 160; lines++)
+      for (let fit = 2; fit <= 12; fit++) {
+        const plan = proseBreaks(lines, fit, 50);
+        expect(plan.reduce((a, b) => a + b, 0)).toBe(lines);
+        for (const n of plan) expect(n, `${lines} lines from ${fit}: ${plan.join("+")}`).toBeGreaterThanOrEqual(2);
+      }
+  });
+
+  it("on paper: no line alone at the top of the third or the fourth page, and every line in order", async () => {
+    const doc = new PDFDocument({ size: "A4", margins: MARGINS });
+    registerFonts(doc);
+    const line = doc.font("Inter").fontSize(9).currentLineHeight(true);
+    const full = Math.floor((doc.page.height - MARGINS.top - MARGINS.bottom) / line + 1e-6);
+    const lineCount = (n: number) => Math.round(doc.heightOfString(words(n, "p"), { width: WIDTH }) / line);
+    /** The fewest words that make `target` lines (a binary search: the count only grows with them). */
+    const wordsFor = (target: number) => {
+      let [lo, hi] = [1, 40 * target];
+      while (lo < hi) {
+        const mid = Math.floor((lo + hi) / 2);
+        if (lineCount(mid) >= target) hi = mid;
+        else lo = mid + 1;
+      }
+      return lo;
+    };
+    const room = 6;
+    for (const [lines, expected] of [
+      // 6 + full + 1: the second page ends a line early
+      [room + full + 1, [room, full - 1, 2]],
+      // 6 + 2 full + 1: the third does
+      [room + 2 * full + 1, [room, full, full - 1, 2]],
+      // 6 + full: each page as full as it holds
+      [room + full, [room, full]],
+    ] as const) {
+      const n = wordsFor(lines);
+      const text = words(n, "p");
+      expect(lineCount(n)).toBe(lines);
+      const got = await pages((d) => {
+        d.y = d.page.height - MARGINS.bottom - room * line - 0.3 * line;
+        const all = [d.page];
+        d.on("pageAdded", () => all.push(d.page));
+        paragraph(d, text, MARGINS.left, WIDTH, 9);
+        // every page's foot put back for the footer
+        expect(all.map((p) => p.margins.bottom)).toEqual(expected.map(() => MARGINS.bottom));
+        d.font("Inter").fontSize(9).text("after", MARGINS.left, d.y);
+      });
+      expect(linesPerPage(got, "p"), `${lines} lines`).toEqual(expected);
+      const read = got.flatMap((items) => items.filter((i) => i.str.includes("p")).map((i) => i.str)).join(" ").split(/\s+/).filter((w) => /^p\d+$/.test(w));
+      expect(read).toEqual(text.split(" "));
+    }
   });
 });
 
