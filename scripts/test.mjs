@@ -7,8 +7,40 @@
 //   npm test                 everything
 //   npm test -- --skip-e2e   without the build and the browser tests
 //   npm test -- --only-e2e   build and browser tests only
-import { ensureChromium, ensureInstalled, ensureLocalSecrets, ensurePoppler, log, nodeBin, run, startChild, waitForHttp } from "./common.mjs";
+import { join } from "node:path";
+import { pathToFileURL } from "node:url";
+import { ensureChromium, ensureInstalled, ensureLocalSecrets, ensurePoppler, log, nodeBin, root, run, startChild, waitForHttp } from "./common.mjs";
 import { startPostgres, stopPostgres } from "./pg.mjs";
+
+const guard = pathToFileURL(join(root, "scripts", "exit-with-parent.mjs")).href;
+
+/**
+ * What `npm test` runs, each a `node` argument list: migrate, the local services, lint, types,
+ * vitest (unit, components, api), the build, the app server, vitest e2e. The long-running ones
+ * (services, app) load exit-with-parent.mjs, like `npm start`'s, so a killed `npm test` does not
+ * leave them holding their ports.
+ */
+export function testPlan({ appPort = 3100 } = {}) {
+  const guarded = (args) => ["--import", guard, ...args];
+  return {
+    setup: [nodeBin("tsx"), "scripts/db-setup.ts"],
+    services: guarded([nodeBin("tsx"), "scripts/local-services.ts"]),
+    lint: [nodeBin("eslint"), ".", "--max-warnings=0"],
+    types: [nodeBin("tsc"), "--noEmit", "-p", "tsconfig.json"],
+    vitest: [nodeBin("vitest"), "run", "--project", "unit", "--project", "components", "--project", "api"],
+    build: [nodeBin("next"), "build"],
+    app: guarded(["scripts/serve.mjs", "-H", "127.0.0.1", "-p", String(appPort)]),
+    e2e: [nodeBin("vitest"), "run", "--project", "e2e"],
+  };
+}
+
+/**
+ * Start one of the plan's long-running children with the IPC channel exit-with-parent.mjs watches
+ * (stdin ignored, `stdout` "inherit" or "ignore", stderr inherited).
+ */
+export function startLongRunning(args, { env, stdout = "inherit" } = {}) {
+  return startChild(process.execPath, args, { env, stdio: ["ignore", stdout, "inherit", "ipc"] });
+}
 
 const args = process.argv.slice(2);
 const skipE2e = args.includes("--skip-e2e");
@@ -19,14 +51,23 @@ const appPort = Number(process.env.TEST_APP_PORT || 3100);
 const distDir = process.env.TEST_DIST_DIR || ".next-test";
 
 const children = [];
-function cleanup() {
-  for (const c of children) if (c.exitCode === null) c.kill("SIGTERM");
+/** Stop the children and wait until they have gone (their ports free; one that hangs is killed), then the test cluster. */
+async function cleanup() {
+  const running = children.filter((c) => c.exitCode === null && c.signalCode === null);
+  for (const c of running) c.kill("SIGTERM");
+  const killLate = setTimeout(() => {
+    for (const c of running) if (c.exitCode === null && c.signalCode === null) c.kill("SIGKILL");
+  }, 15000);
+  await Promise.all(running.map((c) => (c.exitCode === null && c.signalCode === null ? new Promise((r) => c.once("exit", r)) : null)));
+  clearTimeout(killLate);
   if (!keepDb) stopPostgres({ test: true });
 }
-process.on("SIGINT", () => {
-  cleanup();
-  process.exit(130);
-});
+let stopping = false;
+const stopOn = (code) => () => {
+  if (stopping) return;
+  stopping = true;
+  cleanup().finally(() => process.exit(code));
+};
 
 async function main() {
   const t0 = Date.now();
@@ -42,48 +83,43 @@ async function main() {
     TEST_DATABASE_URL: dbUrl,
     BETTER_AUTH_SECRET: base.BETTER_AUTH_SECRET || "test-secret-test-secret-test-secret-0",
     SMTP_PORT: process.env.TEST_SMTP_PORT || "2526",
-    MAILBOX_PORT: process.env.TEST_MAILBOX_PORT || "2527",
     S3_PORT: process.env.TEST_S3_PORT || "4570",
     COUNTERPOISE_LOCAL_STATE: `/tmp/counterpoise-test-state-${appPort}`,
   };
-  run(process.execPath, [nodeBin("tsx"), "scripts/db-setup.ts"], { env });
+  const plan = testPlan({ appPort });
+  run(process.execPath, plan.setup, { env });
 
-  const services = startChild(process.execPath, [nodeBin("tsx"), "scripts/local-services.ts"], { env, stdio: ["ignore", "inherit", "inherit"] });
-  children.push(services);
+  children.push(startLongRunning(plan.services, { env }));
 
   if (!onlyE2e) {
     log("test", "lint (eslint .)");
-    run(process.execPath, [nodeBin("eslint"), ".", "--max-warnings=0"], { env });
+    run(process.execPath, plan.lint, { env });
     log("test", "type check (tsc --noEmit)");
-    run(process.execPath, [nodeBin("tsc"), "--noEmit", "-p", "tsconfig.json"], { env });
+    run(process.execPath, plan.types, { env });
     log("test", "vitest: unit, components, api");
-    run(process.execPath, [nodeBin("vitest"), "run", "--project", "unit", "--project", "components", "--project", "api"], { env });
+    run(process.execPath, plan.vitest, { env });
   }
 
   if (!skipE2e) {
     log("test", `building the app into ${distDir}`);
     const appUrl = `http://127.0.0.1:${appPort}`;
     const appEnv = { ...env, NODE_ENV: "production", NEXT_DIST_DIR: distDir, APP_URL: appUrl, AUTH_RATE_LIMIT_MAX: process.env.AUTH_RATE_LIMIT_MAX || "1000" };
-    run(process.execPath, [nodeBin("next"), "build"], { env: appEnv });
-    const app = startChild(process.execPath, ["scripts/serve.mjs", "-H", "127.0.0.1", "-p", String(appPort)], {
-      env: appEnv,
-      stdio: ["ignore", "ignore", "inherit"],
-    });
-    children.push(app);
+    run(process.execPath, plan.build, { env: appEnv });
+    children.push(startLongRunning(plan.app, { env: appEnv, stdout: "ignore" }));
     await waitForHttp(`${appUrl}/api/health`, { timeoutMs: 90000, okOnly: true });
     log("test", "vitest: e2e in Chromium");
-    run(process.execPath, [nodeBin("vitest"), "run", "--project", "e2e"], { env: { ...appEnv, NODE_ENV: "test", E2E_BASE_URL: appUrl } });
+    run(process.execPath, plan.e2e, { env: { ...appEnv, NODE_ENV: "test", E2E_BASE_URL: appUrl } });
   }
   log("test", `all green in ${Math.round((Date.now() - t0) / 1000)} s`);
 }
 
-main()
-  .then(() => {
-    cleanup();
-    process.exit(0);
-  })
-  .catch((err) => {
-    log("test", `FAILED: ${err.message}`);
-    cleanup();
-    process.exit(err.exitCode || 1);
-  });
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  process.on("SIGINT", stopOn(130));
+  process.on("SIGTERM", stopOn(143));
+  main()
+    .then(stopOn(0))
+    .catch((err) => {
+      log("test", `FAILED: ${err.message}`);
+      stopOn(err.exitCode || 1)();
+    });
+}
