@@ -1,4 +1,5 @@
 import "server-only";
+import { createHash } from "node:crypto";
 import { and, desc, eq, inArray, isNull } from "drizzle-orm";
 import { db } from "@/db";
 import { auditEvent } from "@/db/schema";
@@ -29,16 +30,29 @@ export type AccountActivityEntry = {
   to: string | null;
   /** A password change that also signed out every other device. */
   signedOutOthers: boolean;
+  /** The sign-in that started the session this list is shown in. */
+  thisDevice: boolean;
 };
+
+/**
+ * What a sign-in's audit detail keeps of its session (`sessionHash`): a SHA-256 of the session's
+ * id, never the id itself nor its token (the cookie's secret). Enough to tell, later, which sign-in
+ * started the session asking; of no use for anything else.
+ */
+export function sessionAuditKey(sessionId: string): string {
+  return createHash("sha256").update(`counterpoise-session:${sessionId}`).digest("hex");
+}
 
 const text = (v: unknown) => (typeof v === "string" && v ? v : null);
 
 /**
  * The last `limit` account events of `userId` (sign-ins, sign-outs, password and address
  * changes), newest first. Only the rows that person made on their own account (no workspace):
- * pass the id of the signed-in session's user, never one taken from the request.
+ * pass the id of the signed-in session's user, never one taken from the request, and that
+ * session's id (`currentSessionId`) to mark the sign-in that started it.
  */
-export async function accountActivity(userId: string, limit = 20): Promise<AccountActivityEntry[]> {
+export async function accountActivity(userId: string, currentSessionId: string | null, limit = 20): Promise<AccountActivityEntry[]> {
+  const current = currentSessionId ? sessionAuditKey(currentSessionId) : null;
   const rows = await orBusy(
     db
       .select({ id: auditEvent.id, at: auditEvent.at, action: auditEvent.action, detail: auditEvent.detail })
@@ -58,6 +72,7 @@ export async function accountActivity(userId: string, limit = 20): Promise<Accou
       from: text(d.from),
       to: text(d.to),
       signedOutOthers: d.signedOutOthers === true,
+      thisDevice: r.action === "auth.sign_in" && current !== null && d.sessionHash === current,
     };
   });
 }

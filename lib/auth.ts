@@ -5,6 +5,7 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { db } from "@/db";
 import { ensurePersonalWorkspace } from "@/db/queries/workspaces";
 import { account, rateLimit, session, user, verification } from "@/db/schema";
+import { sessionAuditKey } from "./account-activity";
 import { recordAudit } from "./audit";
 import { firstReport, unavailableReason } from "./db-unavailable";
 import { appOrigin, appUrl, authRateLimit, authSecret, isHttpsApp, trustedProxies } from "./env";
@@ -201,7 +202,8 @@ export function createAuth(overrides: AuthOverrides = {}) {
       session: {
         create: {
           async after(s) {
-            await recordAudit({ action: "auth.sign_in", actorId: s.userId, detail: { ip: s.ipAddress ?? null, userAgent: s.userAgent ?? null } });
+            // the session's id only hashed: enough for the account page to mark "this device"
+            await recordAudit({ action: "auth.sign_in", actorId: s.userId, detail: { ip: s.ipAddress ?? null, userAgent: s.userAgent ?? null, sessionHash: sessionAuditKey(s.id) } });
           },
         },
         // a plain sign-out (this device only): the person's own account activity lists it; the

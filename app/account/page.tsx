@@ -15,7 +15,7 @@ export const metadata: Metadata = { title: "Account settings" };
 export default async function AccountPage({ searchParams }: { searchParams: Promise<{ email?: string; error?: string }> }) {
   const { user, session } = await requirePageSession("/account");
   // the user's id comes from the session, never from the request: only their own events
-  const [devices, activity, plan] = await Promise.all([activeSessions(user.id, session.id), accountActivity(user.id), accountDeletionPlan(user.id)]);
+  const [devices, activity, plan] = await Promise.all([activeSessions(user.id, session.id), accountActivity(user.id, session.id), accountDeletionPlan(user.id)]);
   const held = (list: typeof plan.left) => list.map((w) => ({ id: w.id, name: w.name, members: w.members }));
   // back from the link mailed to a new address (better-auth adds `error` when the link failed)
   const { email: emailStep, error } = await searchParams;

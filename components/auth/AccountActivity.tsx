@@ -25,7 +25,8 @@ export function activityWords(e: AccountActivityEntry): string {
 
 /**
  * The account page's "Recent account activity": the signed-in person's own last sign-ins,
- * sign-outs, password and address changes, newest first, each with its time (UTC).
+ * sign-outs, password and address changes, newest first, each with its time (UTC); the sign-in
+ * that started the session looking at it says "This device", as the device list does.
  */
 export function AccountActivity({ events }: { events: AccountActivityEntry[] }) {
   if (events.length === 0) {
@@ -35,7 +36,11 @@ export function AccountActivity({ events }: { events: AccountActivityEntry[] }) 
     <ol className="divide-y divide-rule-soft rounded-md border border-rule" aria-label="Recent account activity">
       {events.map((e) => (
         <li key={e.id} className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1 px-3.5 py-2.5 text-sm">
-          <span className="text-ink [overflow-wrap:anywhere]">{activityWords(e)}</span>
+          <span className="text-ink [overflow-wrap:anywhere]">
+            {activityWords(e)}
+            {/* the same words and look as the device list above: the sign-in that started this session */}
+            {e.thisDevice ? <span className="ml-2 whitespace-nowrap rounded bg-paper-deep px-1.5 py-0.5 text-xs font-medium text-ink-soft">This device</span> : null}
+          </span>
           <span className="text-xs text-ink-soft">
             <time dateTime={e.at}>{formatDateTime(e.at)}</time>
             {e.ip ? ` from ${e.ip}` : ""}

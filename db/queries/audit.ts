@@ -25,10 +25,13 @@ export type AuditRow = {
   detail: Record<string, unknown>;
 };
 
-/** Details no reader of a log needs and some may not see: a fork's origin sketch, perhaps in another workspace. */
+/**
+ * Details no reader of a log needs and some may not see: a fork's origin sketch, perhaps in another
+ * workspace; a sign-in's session hash (only the person's own account page uses it, to say "This device").
+ */
 export function withoutHiddenDetail<T extends { detail: Record<string, unknown> }>(row: T): T {
-  if (!("fromSketchId" in row.detail)) return row;
-  const { fromSketchId: _hidden, ...detail } = row.detail;
+  if (!("fromSketchId" in row.detail) && !("sessionHash" in row.detail)) return row;
+  const { fromSketchId: _hidden, sessionHash: _session, ...detail } = row.detail;
   return { ...row, detail };
 }
 

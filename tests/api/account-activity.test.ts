@@ -1,9 +1,16 @@
 // The account page's "Recent account activity", read through GET /api/account/activity: a person
 // sees their own sign-ins (with the browser that made them), sign-outs (one device, every other,
 // everywhere), password and address changes, newest first, the last 20; never another person's,
-// whatever the request asks for; and a new account's list holds only its first sign-in.
+// whatever the request asks for; and a new account's list holds only its first sign-in. The sign-in
+// that started the asking session is marked thisDevice: its audit row keeps a hash of the session id,
+// never the id or the token.
+import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import * as activityRoute from "@/app/api/account/activity/route";
+import * as auditRoute from "@/app/api/workspaces/[id]/audit/route";
+import { db } from "@/db";
+import { auditEvent, session } from "@/db/schema";
+import { sessionAuditKey } from "@/lib/account-activity";
 import { recordAudit } from "@/lib/audit";
 import { authPoster } from "./auth-setup";
 import { call, cookieHeader, makeAccount, makeWorkspace, PASSWORD, signIn, type Json } from "./helpers";
@@ -42,6 +49,55 @@ describe("GET /api/account/activity", () => {
     // newest first: the times never go forward down the list
     const times = events.map((e) => Date.parse(e.at));
     expect([...times].sort((a, b) => b - a)).toEqual(times);
+  });
+
+  it("marks the sign-in of the asking session as this device, from a hash of its session id kept in the audit row", async () => {
+    const eve = await makeAccount("activity-eve");
+    const owner = await makeAccount("activity-eve-owner");
+    const ws = await makeWorkspace("Spillway gate", [
+      [owner, "owner"],
+      [eve, "editor"],
+    ]);
+    const laptop = await signInWith(eve.email, FIREFOX);
+    const phone = await signInWith(eve.email, SAFARI_PHONE);
+
+    const fromLaptop = await activityOf(laptop);
+    // newest first: the phone's sign-in, the laptop's, the one that made the account
+    expect(fromLaptop.map((e) => e.action)).toEqual(["auth.sign_in", "auth.sign_in", "auth.sign_in"]);
+    expect(fromLaptop.slice(0, 2).map((e) => e.userAgent)).toEqual([SAFARI_PHONE, FIREFOX]);
+    expect(fromLaptop.map((e) => e.thisDevice)).toEqual([false, true, false]);
+    const fromPhone = await activityOf(phone);
+    expect(fromPhone.map((e) => e.thisDevice)).toEqual([true, false, false]);
+    // nothing of the hash reaches the browser
+    expect(JSON.stringify(fromPhone)).not.toContain("sessionHash");
+
+    // the audit rows hold the hash of each session's id, and neither the id nor the token
+    const sessions = await db.select({ id: session.id, token: session.token }).from(session).where(eq(session.userId, eve.id));
+    const rows = await db.select({ detail: auditEvent.detail }).from(auditEvent).where(and(eq(auditEvent.actorId, eve.id), eq(auditEvent.action, "auth.sign_in")));
+    expect(rows).toHaveLength(3);
+    expect(rows.map((r) => (r.detail as { sessionHash?: string }).sessionHash).sort()).toEqual(sessions.map((x) => sessionAuditKey(x.id)).sort());
+    const stored = JSON.stringify(rows);
+    for (const x of sessions) {
+      expect(stored).not.toContain(x.id);
+      expect(stored).not.toContain(x.token);
+    }
+
+    // the owners' log lists her sign-ins (browser, address) without the hash: only her own page uses it
+    const log = await call(auditRoute.GET, { params: { id: ws }, cookie: owner.cookie, path: `/api/workspaces/${ws}/audit` });
+    expect(log.status).toBe(200);
+    const eves = log.body.events.filter((e: Json) => e.actorEmail === eve.email && e.action === "auth.sign_in");
+    expect(eves.map((e: Json) => e.detail.userAgent)).toEqual([SAFARI_PHONE, FIREFOX]);
+    expect(eves.every((e: Json) => !("sessionHash" in e.detail))).toBe(true);
+
+    // signed out on the laptop: its sign-in is no longer this device for anyone, the phone's still is
+    expect((await post("/sign-out", {}, { cookie: laptop, "user-agent": FIREFOX })).status).toBe(200);
+    const after = await activityOf(phone);
+    expect(after.map((e) => [e.action, e.thisDevice])).toEqual([
+      ["auth.sign_out", false],
+      ["auth.sign_in", true],
+      ["auth.sign_in", false],
+      ["auth.sign_in", false],
+    ]);
   });
 
   it("never shows another person's events, whatever the address asks for", async () => {

@@ -1,12 +1,13 @@
 // The account page's "Recent account activity": each event in the person's own words with the
 // browser that made a sign-in or sign-out, its time (UTC) and address, in the order given (newest
-// first); an account with none says what will be listed.
+// first), the sign-in that started the session looking at it marked "This device"; an account with
+// none says what will be listed.
 import { render, screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { AccountActivity } from "@/components/auth/AccountActivity";
 import type { AccountActivityEntry } from "@/lib/account-activity";
 
-const base = { userAgent: null, ip: null, from: null, to: null, signedOutOthers: false };
+const base = { userAgent: null, ip: null, from: null, to: null, signedOutOthers: false, thisDevice: false };
 const EVENTS: AccountActivityEntry[] = [
   { ...base, id: 9, at: "2026-03-06T10:15:00Z", action: "auth.email_change", from: "ada@old.example", to: "ada@new.example" },
   { ...base, id: 8, at: "2026-03-06T09:00:00Z", action: "auth.password_change", signedOutOthers: true },
@@ -35,6 +36,17 @@ describe("recent account activity", () => {
       "Changed the password1 Mar 2026, 07:00 UTC",
     ]);
     expect(rows[0].querySelector("time")?.getAttribute("dateTime")).toBe("2026-03-06T10:15:00Z");
+  });
+
+  it("marks the sign-in that started this session \"This device\", and only that one", () => {
+    const events = EVENTS.map((e) => (e.id === 4 ? { ...e, thisDevice: true } : e));
+    render(<AccountActivity events={events} />);
+    const rows = within(screen.getByRole("list", { name: "Recent account activity" })).getAllByRole("listitem");
+    expect(rows[5].textContent).toBe("Signed in on Firefox on WindowsThis device4 Mar 2026, 08:00 UTC from 203.0.113.5");
+    expect(within(rows[5]).getByText("This device")).toBeTruthy();
+    expect(screen.getAllByText("This device")).toHaveLength(1);
+    // the other sign-in (same words, another session) carries no mark
+    expect(rows[6].textContent).toBe("Signed in3 Mar 2026, 07:00 UTC");
   });
 
   it("with no events, says what will be listed and shows no empty list", () => {
