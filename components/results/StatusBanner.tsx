@@ -17,6 +17,8 @@ const BADGE: Record<Tone, { word: string; cls: string }> = {
   unrestrained: { word: "Free", cls: "border-caution bg-caution text-on-accent" },
 };
 
+/** a body held with a tie gone slack and every contact still bearing: nothing has lifted off */
+const SLACK = { ...BADGE.lifts, word: "Slack" };
 const TIPS_AND_SLIDES = { ...BADGE.tips, word: "Tips, slides" };
 /** slides first, then tips (by the factors of safety): the badge puts the first first, as the sentence does */
 const SLIDES_THEN_TIPS = { ...BADGE.tips, word: "Slides, tips" };
@@ -84,9 +86,11 @@ export function StatusBanner() {
       )}
       {sentences.map((s) => {
         const factors = numeric ? stabilitySentence(numeric, s.body, stability?.[s.body]) : null;
-        const short = factors?.pass === false && (s.tone === "holds" || s.tone === "strained");
+        // a body held (a tie slack beside bearing contacts included) that falls short of a required
+        // factor: the badge says so; a contact lifted off keeps "Lifts"
+        const short = factors?.pass === false && (s.tone === "holds" || s.tone === "strained" || !!s.slackOnly);
         // a body that tips and slides: both in the badge, as in the sentence
-        const badge = short ? SHORT : s.alsoSlips && s.tone === "tips" ? (s.first === "slides" ? SLIDES_THEN_TIPS : TIPS_AND_SLIDES) : BADGE[s.tone];
+        const badge = short ? SHORT : s.alsoSlips && s.tone === "tips" ? (s.first === "slides" ? SLIDES_THEN_TIPS : TIPS_AND_SLIDES) : s.slackOnly ? SLACK : BADGE[s.tone];
         return (
           <div key={s.body} className={`grid grid-cols-[auto_minmax(0,1fr)] gap-x-2 ${stale ? "opacity-60" : ""}`}>
             {/* the badge and the headline read as one sentence; the details line up under the headline */}

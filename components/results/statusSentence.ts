@@ -25,6 +25,9 @@ export interface StatusSentence {
   alsoSlips?: boolean;
   /** of a body that tips and slides, which comes first by the factors of safety (when they say) */
   first?: "tips" | "slides";
+  /** a "lifts" body whose only released supports are ties gone slack: no contact has lifted off,
+   *  so the badge says "Slack", not "Lifts" (an anchor bolt slack on the far side of a moment) */
+  slackOnly?: boolean;
 }
 
 const KIND_WORD: Record<Support["kind"], string> = { pin: "pin", roller: "roller", contact: "contact", fixed: "fixed support", tie: "tie" };
@@ -357,7 +360,8 @@ export function statusSentences(
         if (w.ids.some((i) => ids.has(i))) details.push(w.message.endsWith(".") ? w.message : `${w.message}.`);
       }
     }
-    out.push(alsoSlips ? { body: b.id, tone, headline, details, alsoSlips, ...(order ? { first: order.first } : {}) } : { body: b.id, tone, headline, details });
+    const slackOnly = tone === "lifts" && reactions.some(([s, r]) => s.kind === "tie" && r.state === "slack") && !reactions.some(([, r]) => r.state === "lifted");
+    out.push({ body: b.id, tone, headline, details, ...(alsoSlips ? { alsoSlips, ...(order ? { first: order.first } : {}) } : {}), ...(slackOnly ? { slackOnly } : {}) });
   }
   // warnings that belong to no body (unitless trigonometry in a parameter)
   const general = result.warnings

@@ -395,7 +395,7 @@ describe("the examples menu", () => {
       await user.click(screen.getByTestId("menu-examples"));
       await user.click(screen.getByRole("menuitem", { name: new RegExp(ex.title) }));
       expect(screen.getByTestId("sketch-title")).toHaveTextContent(ex.sketch.title!);
-      expect(screen.getByTestId("status-sentence"), ex.id).toHaveTextContent(/^[\w ]+(Holds|Lifts|Tips|Slips) — /);
+      expect(screen.getByTestId("status-sentence"), ex.id).toHaveTextContent(/^[\w ]+(Holds|Lifts|Slack|Tips|Slips) — /);
       expect(cells("fy").length, ex.id).toBeGreaterThan(0);
       expect(screen.queryByTestId("stale")).toBeNull();
     }
@@ -487,5 +487,65 @@ describe("factors of safety that do not apply", () => {
     if (!still.ok) throw new Error("block does not parse");
     const b = solveWithStability(still.sketch, DEFAULT_REQUIREMENTS);
     expect(stabilitySentence(still.sketch, "b", b.stability.b)?.text).toBe("Factors of safety as drawn: against sliding: no load tends to slide it");
+  });
+});
+
+describe("a body held with an anchor bolt slack: the badge says Slack, not Lifts", () => {
+  // A 90° reducing bend (DN150 in, DN100 down) cast in a 3.3 t thrust block on one sliding pad
+  // (μ 0.6) with an anchor bolt (a tie) at each end; water 998 kg/m³, 40 L/s, 8 bar gauge at both
+  // ports. Control-volume momentum balance, moments about the pad (0.75, 0) (textbook method):
+  //   p·A: 14.137 kN (+x) at the inlet (0, 0.6), 6.283 kN (+y) at the outlet (0.45, 0);
+  //   ṁ = 39.92 kg/s, ṁV 0.0904 kN in (+x), 0.2033 kN out (−y); W = 32.36 kN at (0.8, 0.5).
+  //   ΣM: 0.6·T = 8.482 + 1.885 + 1.618 + 0.1152 → T(left bolt) = 20.17 kN, the right bolt slack;
+  //   n = 32.36 − 6.283 − 0.2033 + 20.17 = 46.04 kN, t = 14.14 + 0.0904 = 14.23 kN;
+  //   sliding factor μ·n/t = 27.63/14.23 = 1.942. At 12 bar (a 1.5× test): T = 28.81 kN,
+  //   n = 51.54 kN, t = 21.30 kN, factor 30.92/21.30 = 1.452 < 1.5.
+  const bend = (p: string) => ({
+    format: "counterpoise.sketch",
+    version: 6,
+    title: "Reducing bend on a thrust block",
+    parameters: { rho: "998 kg/m3", Q: "40 L/s", p, D1: "150 mm", D2: "100 mm" },
+    bodies: [{ id: "b1", label: "Thrust block", outline: [[0, 0], [1.6, 0], [1.6, 1], [0, 1]], mass: "3300 kg" }],
+    supports: [
+      { id: "s1", body: "b1", kind: "contact", at: [0.75, 0], angle: 90, mu: 0.6, label: "Sliding pad" },
+      { id: "s2", body: "b1", kind: "tie", at: [0.15, 0], angle: -90, label: "Bolt L" },
+      { id: "s3", body: "b1", kind: "tie", at: [1.35, 0], angle: -90, label: "Bolt R" },
+    ],
+    loads: [],
+    ports: [
+      { id: "p1", body: "b1", kind: "inlet", label: "DN150 in", at: [0, 0.6], angle: 0, density: "rho", volumeFlow: "Q", area: "pi/4*D1^2", pressure: "p" },
+      { id: "p2", body: "b1", kind: "outlet", label: "DN100 down", at: [0.45, 0], angle: -90, density: "rho", volumeFlow: "Q", area: "pi/4*D2^2", pressure: "p" },
+    ],
+    massSources: [],
+  });
+
+  it("reactions as worked by hand; the sentence names the slack bolt and the badge says Slack", async () => {
+    const { sketch, result } = solved(bend("8 bar"));
+    expect(result.reactions.s2.n).toBeCloseTo(20168, -1);
+    expect(result.reactions.s1.n).toBeCloseTo(46043, -1);
+    expect(result.reactions.s1.t).toBeCloseTo(14228, -1);
+    expect(result.reactions.s3.state).toBe("slack");
+    const [s] = statusSentences(sketch, result);
+    expect(s.tone).toBe("lifts");
+    expect(s.slackOnly).toBe(true);
+    expect(s.headline).toBe("Bolt R goes slack — Sliding pad and Bolt L still hold the body");
+    mountResultsDock(bend("8 bar"));
+    expect((await screen.findByTestId("stability-as-drawn")).textContent).toContain("against sliding 1.94 (1.5 required)");
+    expect(screen.getByTestId("status-badge")).toHaveTextContent(/^Slack$/);
+  });
+
+  it("at the test pressure the sliding factor falls short: the badge says FoS short, not Slack", async () => {
+    mountResultsDock(bend("12 bar"));
+    const line = await screen.findByTestId("stability-as-drawn");
+    expect(line).toHaveTextContent("against sliding 1.45, below the required 1.5");
+    expect(line).toHaveAttribute("data-pass", "false");
+    expect(screen.getByTestId("status-badge")).toHaveTextContent("FoS short");
+  });
+
+  it("a contact lifted off keeps the Lifts badge", () => {
+    const { sketch, result } = solved(load("pump-set-hold-down"));
+    const [s] = statusSentences(sketch, result);
+    expect(s.tone).toBe("lifts");
+    expect(s.slackOnly).toBeUndefined();
   });
 });
