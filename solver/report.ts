@@ -418,7 +418,9 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?
           gov.push(`${COMPONENT_LABEL[c]} ${symbol}`);
         }
         if (gov.length) words.push(`governs ${gov.join(", ")}`);
-        if (governs(env, "margin", run.id)) words.push(`least margin (closest to ${r.kind === "tie" ? "going slack" : "lifting"})`);
+        // below zero it has already lifted or gone slack: not "closest to" it
+        if (governs(env, "margin", run.id))
+          words.push(`least margin (${r.margin !== undefined && r.margin < 0 ? (r.kind === "tie" ? "slack" : "lifted off") : `closest to ${r.kind === "tie" ? "going slack" : "lifting"}`})`);
       }
       rows.push([
         run.name,

@@ -333,3 +333,41 @@ describe("governing cases that tie, named and marked in every table", () => {
     expect(t.rows[at("Light push")][gov]).toBe("governs Fy ▲");
   });
 });
+
+describe("the least margin of a tie already slack is not said as closest to going slack", () => {
+  // A 200 kg beam (weight at x = 1 m) on a pin at x = 0 and a contact at x = 2 m, with an anchor
+  // bolt (a tie pulling down) at x = 1 m. Statics by hand (common practice): the weight presses
+  // the beam down, so the bolt would have to push and goes slack in every case; the contact
+  // carries n = W/2 (moments about the pin), 1.5·W/2 in the heavy case.
+  const doc = sketch({
+    bodies: [{ id: "s", outline: box(2, 0.5), mass: 200, cg: [1, 0.25] }],
+    supports: [
+      { id: "pin", body: "s", kind: "pin", at: [0, 0] },
+      { id: "pad", body: "s", kind: "contact", at: [2, 0], angle: 90 },
+      { id: "bolt", body: "s", kind: "tie", at: [1, 0], angle: -90 },
+    ],
+    cases: [
+      { id: "dead", name: "Dead" },
+      { id: "heavy", name: "Heavy", factors: { dead: 1.5 } },
+    ],
+  });
+  const study = solveCases(fileOf(doc));
+
+  it("names the slack bolt's least margin as slack, and the bearing pad's as closest to lifting", () => {
+    const t = caseReactionTable(study, "SI");
+    const gov = t.columns.findIndex((c) => c.key === "governs");
+    const row = (caseName: string, support: string) => t.rows.find((r) => r[0] === caseName && r[1] === support)!;
+    for (const run of study.runs) {
+      if (!run.ok) throw new Error();
+      expect(run.result.reactions.bolt.state).toBe("slack");
+      expect(run.result.reactions.bolt.margin).toBeLessThan(0);
+    }
+    const dead = study.runs.find((r) => r.id === "dead")!;
+    if (!dead.ok) throw new Error();
+    expectRel(dead.result.reactions.pad.n!, W / 2, 1e-6);
+    const slackRows = ["Dead", "Heavy"].map((c) => String(row(c, "bolt")[gov]));
+    expect(slackRows.some((w) => w.includes("least margin (slack)"))).toBe(true);
+    expect(slackRows.join(" ")).not.toMatch(/closest to going slack/);
+    expect(String(row("Dead", "pad")[gov])).toContain("least margin (closest to lifting)");
+  });
+});
