@@ -150,6 +150,8 @@ export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
           ))}
         </ul>
       ) : null}
+      {/* only additions or removals: no table of fields, not a header over nothing */}
+      {!c.sketch.length && !params.length && !studies.length && !c.elements.changed.length ? null : (
       <SideScroll>
         <table className="w-full text-sm" data-testid="field-changes">
           <caption className="sr-only">Inputs that changed, before and after</caption>
@@ -176,6 +178,7 @@ export function ChangesTable({ comparison: c }: { comparison: Comparison }) {
           </tbody>
         </table>
       </SideScroll>
+      )}
     </div>
   );
 }

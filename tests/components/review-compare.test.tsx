@@ -241,3 +241,29 @@ describe("the changed fields in the properties form's words", () => {
     for (const key of ["gravityAngle", "beta", "motion", "group", "angle"]) expect(rows.map((r) => r[0])).not.toContain(key);
   });
 });
+
+describe("a comparison whose only change is an added or removed element", () => {
+  it("lists the element and shows no table of fields (no header over nothing)", () => {
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any
+    const b: any = structuredClone(before);
+    b.supports.push({ id: "tie", label: "rear tie-down", body: "trailer", kind: "tie", at: [0.4, 0.3], angle: -90 });
+    const c = compareSketches(before, b);
+    render(<ChangesTable comparison={c} />);
+    expect(screen.getByTestId("added-removed").textContent).toBe("+ added tie rear tie-down");
+    expect(screen.queryByTestId("field-changes")).toBeNull();
+    expect(screen.queryByText("Nothing in the inputs differs.")).toBeNull();
+  });
+
+  it("keeps the table when a field changed as well", () => {
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any
+    const b: any = structuredClone(before);
+    b.supports = b.supports.filter((s: { id: string }) => s.id !== "jack");
+    b.bodies[0].mass = 1400;
+    const c = compareSketches(before, b);
+    render(<ChangesTable comparison={c} />);
+    expect(screen.getByTestId("added-removed").textContent).toBe("× removed contact front jack");
+    const rows = [...screen.getByTestId("field-changes").querySelectorAll("tbody tr")].map((r) => r.textContent);
+    // 1100 kg and 1400 kg, written in tonnes
+    expect(rows).toEqual(["Trailer (body)Mass1.1 t→1.4 t"]);
+  });
+});
