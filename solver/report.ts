@@ -372,10 +372,10 @@ function governs(env: SupportEnvelope, c: Component, run: string, value?: number
   return Math.abs(e.max.value) >= Math.abs(e.min.value) ? "max" : "min";
 }
 
-/** The names of the runs that give a governing value: one name, or every run of a tie ("A and B (a tie)"). */
+/** The names of the runs that give a governing value: one name, or every run of a tie ("A and B (equal)"). */
 export function tiedNames(study: StudyResult, ids: readonly string[]): string {
   const names = ids.map((id) => study.runs.find((r) => r.id === id)?.name ?? id);
-  return names.length < 2 ? names.join("") : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]} (a tie)`;
+  return names.length < 2 ? names.join("") : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]} (equal)`;
 }
 
 /** Every support in every case: the table of the studies. The governing case of each component is
@@ -437,7 +437,7 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?
       marks.push(Object.keys(rowMarks).length ? rowMarks : undefined);
     }
   }
-  const notes = ["▲ / ▼: the governing case of that component (its largest magnitude over the cases), by its maximum (▲) or its minimum (▼); cases that give it alike (a tie) are each marked. “design load”: the case of the support's largest resultant."];
+  const notes = ["▲ / ▼: the governing case of that component (its largest magnitude over the cases), by its maximum (▲) or its minimum (▼); cases that give it alike (equal) are each marked. “design load”: the case of the support's largest resultant."];
   return {
     id: "cases",
     title: "Reactions per case (forces on the body)",
@@ -480,7 +480,7 @@ export function envelopeTable(study: StudyResult, system: UnitSystem, scale?: Sc
     for (const c of envelopeComponents(env)) {
       const e = env.components[c]!;
       const q: Quantity = c === "m" ? "moment" : "force";
-      // every case of a tie is named: "A and B (a tie)"
+      // every case of a tie is named: "A and B (equal)" (never "a tie": a tie is a support here)
       const gov = governingRuns(env, c);
       // a component that is zero in every case (a frictionless contact's t) has no governing case
       const zero = Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING;
@@ -502,7 +502,7 @@ export function envelopeTable(study: StudyResult, system: UnitSystem, scale?: Sc
     ],
     rows,
     notes: [
-      "Governing case: the one with the largest magnitude; for the margin of a contact or tie, the smallest (the case where it comes closest to lifting or going slack; below zero it has lifted or gone slack). Cases that give it alike are all named (a tie).",
+      "Governing case: the one with the largest magnitude; for the margin of a contact or tie, the smallest (the case where it comes closest to lifting or going slack; below zero it has lifted or gone slack). Cases that give it alike are all named (equal).",
       "A case in which the body tips or is unrestrained is not in the envelope or the design loads (see the note above the tables).",
     ],
   });
@@ -546,11 +546,11 @@ export function designLoadTable(study: StudyResult, system: UnitSystem, scale?: 
       inUnit(env.design.fx, "force", u),
       inUnit(env.design.fy, "force", u),
       inUnit(env.design.m, "moment", u),
-      // every case of a tie for the largest resultant: "A and B (a tie)"
+      // every case of a tie for the largest resultant: "A and B (equal)"
       tiedNames(study, env.ties?.resultant ?? [env.design.case]),
     ]),
     notes: [
-      "The design load of a support is its largest resultant over all cases and combinations in which its body is held, with its direction (force on the body). Cases that give it alike are all named (a tie); the direction and components are those of the first named.",
+      "The design load of a support is its largest resultant over all cases and combinations in which its body is held, with its direction (force on the body). Cases that give it alike are all named (equal); the direction and components are those of the first named.",
     ],
   };
 }

@@ -81,7 +81,7 @@ export function CaseTables({ result, units, asDrawn, sketch = null, scale }: { r
       ) : (
         <>
           <div className="mt-3">
-            {/* cases that tie for a governing value are named in its row ("A and B (a tie)") and each marked in the table above */}
+            {/* cases that tie for a governing value are named in its row ("A and B (equal)") and each marked in the table above */}
             <ReportTable table={withoutAbsentMoment(envelopeTable(result, units, scale), result)} fileName="envelope" testId="envelope" groupBy={["support"]} />
           </div>
           <div className="mt-3">

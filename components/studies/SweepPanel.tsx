@@ -823,12 +823,12 @@ export function SweepPanel() {
                 <p role="status">
                   {everywhere.body
                     ? everywhere.first.length > 1
-                      ? `${everywhere.label} first in ${andList(everywhere.rows.filter((r) => everywhere.first.includes(r.id)).map((r) => r.name))}: a tie, each at ${everywhere.pName} = ${limitWithUnit(everywhere.firstValue!, everywhere.unit)}.`
+                      ? `${everywhere.label} first in ${andList(everywhere.rows.filter((r) => everywhere.first.includes(r.id)).map((r) => r.name))}: equal first, each at ${everywhere.pName} = ${limitWithUnit(everywhere.firstValue!, everywhere.unit)}.`
                       : everywhere.first.length === 1
                         ? `${everywhere.label} first in ${everywhere.rows.find((r) => r.id === everywhere.first[0])!.name}.`
                         : `${everywhere.label} in none of them in this range.`
                     : everywhere.first.length > 1
-                    ? `The ${everywhere.label} reaches ${everywhere.target} first in ${andList(everywhere.rows.filter((r) => everywhere.first.includes(r.id)).map((r) => r.name))}: a tie, each at ${everywhere.pName} = ${limitWithUnit(everywhere.firstValue!, everywhere.unit)}.`
+                    ? `The ${everywhere.label} reaches ${everywhere.target} first in ${andList(everywhere.rows.filter((r) => everywhere.first.includes(r.id)).map((r) => r.name))}: equal first, each at ${everywhere.pName} = ${limitWithUnit(everywhere.firstValue!, everywhere.unit)}.`
                     : everywhere.first.length === 1
                       ? `The ${everywhere.label} reaches ${everywhere.target} first in ${everywhere.rows.find((r) => r.id === everywhere.first[0])!.name}.`
                       : `The ${everywhere.label} reaches ${everywhere.target} in none of them in this range.`}
@@ -853,7 +853,7 @@ export function SweepPanel() {
                           {"error" in r.result
                             ? `not solved: ${runErrorWords(ran?.sketch ?? sketch, r.result)}`
                             : r.result.found
-                              ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — first (a tie)" : " — first") : ""}${everywhere.body && slidFirstWords(r.result, everywhere.body, everywhere.pName, everywhere.from, everywhere.to) ? `, ${slidFirstWords(r.result, everywhere.body, everywhere.pName, everywhere.from, everywhere.to)}` : ""}`
+                              ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — equal first" : " — first") : ""}${everywhere.body && slidFirstWords(r.result, everywhere.body, everywhere.pName, everywhere.from, everywhere.to) ? `, ${slidFirstWords(r.result, everywhere.body, everywhere.pName, everywhere.from, everywhere.to)}` : ""}`
                               : everywhere.body
                                 ? bodyNoCrossingWords(r.result, everywhere.body, everywhere.pName, everywhere.unit)
                                 : noCrossingWords(r.result, everywhere.targetSI, everywhere.target)}

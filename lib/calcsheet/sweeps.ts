@@ -266,7 +266,7 @@ function bodyWords(rows: SweepLimitRow[], sw: SweepFile, p: string, unit: string
       }
       const tied = own.filter((r) => first.tied.includes(r.run));
       const limits = [...new Set(tied.map(what))].map((l) => `${l} in ${andWords(tied.filter((r) => what(r) === l).map(runWords))}`);
-      return ` ${name} itself (the body, not one support) first ${limits.length > 1 || tied.length > 1 ? "gives way in a tie" : "gives way"} at ${p} = ${limitWithUnit(first.value, unit)}: ${limits.join("; ")}.`;
+      return ` ${name} itself (the body, not one support) first ${limits.length > 1 || tied.length > 1 ? "gives way in more than one way at once" : "gives way"} at ${p} = ${limitWithUnit(first.value, unit)}: ${limits.join("; ")}.`;
     })
     .join("");
 }
@@ -312,7 +312,7 @@ export function limitRowsTable(
       value = r.value;
       const slidFirst = slidesFrom !== undefined && (o.from <= o.to ? slidesFrom <= r.value : slidesFrom >= r.value);
       const bits = [
-        r.governs ? (governing.length > 1 ? "governs (first, a tie)" : "governs: reached first of all") : r.first ? "first of this limit" : "",
+        r.governs ? (governing.length > 1 ? "governs (equal first)" : "governs: reached first of all") : r.first ? "first of this limit" : "",
         r.value === o.from ? "already at the range's start" : "",
         r.more ? `reached ${r.more} more time${r.more > 1 ? "s" : ""} in the range` : "",
         // friction is checked, not enforced: the body is solved as if held along its base
@@ -361,7 +361,7 @@ export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (d
   const runWords = (r: SweepLimitRow) => (r.run.kind === "as drawn" ? "the sketch as drawn" : r.run.name);
   const tiedLimits = [...new Set(governing.map((r) => r.limit))].map((l) => `${l} in ${andWords(governing.filter((r) => r.limit === l).map(runWords))}`);
   const summary = governing.length
-    ? `Governs over ${span}: ${governing.length > 1 ? `a tie at ${p} = ${limitWithUnit(governing[0].value!, unit)}: ${tiedLimits.join("; ")}` : `${tiedLimits[0]} at ${p} = ${limitWithUnit(governing[0].value!, unit)}`}.${bodyWords(rows, sw, p, unit, runWords)}`
+    ? `Governs over ${span}: ${governing.length > 1 ? `equal first at ${p} = ${limitWithUnit(governing[0].value!, unit)}: ${tiedLimits.join("; ")}` : `${tiedLimits[0]} at ${p} = ${limitWithUnit(governing[0].value!, unit)}`}.${bodyWords(rows, sw, p, unit, runWords)}`
     : rows.length
       ? `No limit is reached in ${span} in any run searched: ${rows.some((r) => r.pastThroughout) ? "each is either past throughout or not reached (see the notes)" : "every contact stays in bearing, every tie taut and every friction margin above zero"}.`
       : "The sketch has no contact or tie: no limit to search.";

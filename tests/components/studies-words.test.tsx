@@ -85,7 +85,7 @@ describe("the case tables", () => {
       { id: "off", name: "Pump off", flowFactor: 0 },
     ];
     render(<CaseTables result={studyOf(doc)} units="SI" />);
-    const both = "Aimed down, day crew and Aimed down, night crew (a tie)";
+    const both = "Aimed down, day crew and Aimed down, night crew (equal)";
     // the envelope's governing case: both crews wherever one of them governs
     const envelope = screen.getByTestId("envelope");
     const governing = (support: string, component: string) =>
@@ -221,10 +221,10 @@ describe("the Sweep tab's words", () => {
     if (!down.found || !raised.found) throw new Error("the caster lifts in both");
     expect(raised.value).toBe(down.value);
     expect(within(box).getByRole("status").textContent).toMatch(
-      new RegExp(`^The margin at front caster reaches 0 k?N first in Lance aimed down at −75° \\(tank foot\\) and Lance raised to −50°: a tie, each at theta = ${formatLimit(down.value)} deg\\.$`),
+      new RegExp(`^The margin at front caster reaches 0 k?N first in Lance aimed down at −75° \\(tank foot\\) and Lance raised to −50°: equal first, each at theta = ${formatLimit(down.value)} deg\\.$`),
     );
     const rows = [...box.querySelectorAll("tbody tr")].map((tr) => tr.textContent);
-    expect(rows.filter((r) => r?.endsWith("— first (a tie)"))).toHaveLength(2);
+    expect(rows.filter((r) => r?.endsWith("— equal first"))).toHaveLength(2);
     expect(screen.getByTestId("limit-everywhere-overrides").textContent).toBe(
       "Each is searched over theta from −90 to 0 deg: the searched value stands in for the theta a case sets itself (Lance aimed down at −75° (tank foot): −75 deg; Lance raised to −50°: −50 deg; Rinse at 150 bar, lance at −50°: −50 deg).",
     );

@@ -94,7 +94,7 @@ describe("design studies", () => {
     const rows = await every.locator("tbody tr").allTextContents();
     expect(rows).toHaveLength(2);
     for (const r of rows) expect(r).toMatch(/theta = 18\.1\d+ deg/);
-    expect(await every.getByRole("status").textContent()).toMatch(/^The margin at front jack reaches 0 kN first in Low forward throw and High throw: a tie, each at theta = 18\.1\d deg\.$/);
+    expect(await every.getByRole("status").textContent()).toMatch(/^The margin at front jack reaches 0 kN first in Low forward throw and High throw: equal first, each at theta = 18\.1\d deg\.$/);
     // hover shows the values
     const chart = page.getByTestId("sweep-chart");
     await chart.scrollIntoViewIfNeeded();

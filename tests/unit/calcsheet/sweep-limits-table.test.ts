@@ -41,15 +41,15 @@ describe("the table of a sweep's limits in every case", () => {
     expect(table.columns.map((c) => c.label)).toEqual(["Limit", "Case or combination", "T where first reached", "Note"]);
     expect(table.columns[2].unit).toBe("kN");
     // the plotted run is named so; full flow lifts first and governs (with its tipping, a tie)
-    expect(row("rear pad: lift-off (n = 0)", "Full flow (plotted)")).toEqual(["rear pad: lift-off (n = 0)", "Full flow (plotted)", "◆\u00a01.046", "governs (first, a tie)"]);
+    expect(row("rear pad: lift-off (n = 0)", "Full flow (plotted)")).toEqual(["rear pad: lift-off (n = 0)", "Full flow (plotted)", "◆\u00a01.046", "governs (equal first)"]);
     expect(row("rear pad: lift-off (n = 0)", "Throttled")).toEqual(["rear pad: lift-off (n = 0)", "Throttled", "1.634", ""]);
-    expect(row("Stand: tips (not held)", "Full flow (plotted)")).toEqual(["Stand: tips (not held)", "Full flow (plotted)", "◆\u00a01.046", "governs (first, a tie)"]);
+    expect(row("Stand: tips (not held)", "Full flow (plotted)")).toEqual(["Stand: tips (not held)", "Full flow (plotted)", "◆\u00a01.046", "governs (equal first)"]);
     expect(row("Stand: tips (not held)", "Throttled")[2]).toBe("1.634");
     const { rows } = sweepLimitRows(file, sweep);
     const lift = rows.filter((r) => r.limit.startsWith("rear pad"));
     expect(lift[0].value! * 1000).toBeCloseTo(T0, 2); // hand calculation above
     expect(lift[1].value! * 1000).toBeCloseTo(T0 / 0.64, 2); // hand calculation above
-    expect(summary).toBe("Governs over 0 … 3 kN: a tie at T = 1.046 kN: rear pad: lift-off (n = 0) in Full flow; Stand: tips (not held) in Full flow.");
+    expect(summary).toBe("Governs over 0 … 3 kN: equal first at T = 1.046 kN: rear pad: lift-off (n = 0) in Full flow; Stand: tips (not held) in Full flow.");
     expect(table.notes?.[0]).toContain("◆\u00a0governs: the limit reached first of all");
   });
 

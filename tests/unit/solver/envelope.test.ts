@@ -307,15 +307,15 @@ describe("governing cases that tie, named and marked in every table", () => {
     // |Fx| = 100 N pushed either way: east gives −100 N, west +100 N
     expect(row("pin", "Fx")[3]).toBeCloseTo(100, 9);
     expect(row("pin", "Fx")[5]).toBeCloseTo(-100, 9);
-    expect(row("pin", "Fx")[gov]).toBe("Push east and Push west (a tie)");
+    expect(row("pin", "Fx")[gov]).toBe("Push east and Push west (equal)");
     // Fy = W/2 = 490.3 N in all three: a tie of three
     expectRel(row("pin", "Fy")[3] as number, Wb / 2, 1e-9);
-    expect(row("pin", "Fy")[gov]).toBe("Push east, Push west and Light push (a tie)");
-    expect(row("foot", "Margin")[gov]).toBe("Push east, Push west and Light push (a tie)");
+    expect(row("pin", "Fy")[gov]).toBe("Push east, Push west and Light push (equal)");
+    expect(row("foot", "Margin")[gov]).toBe("Push east, Push west and Light push (equal)");
     // the pin's largest resultant, √(100² + (W/2)²) = 500.4 N, east and west alike
     const d = designLoadTable(s, "SI").rows.find((r) => r[0] === "pin")!;
     expectRel(d[1] as number, Math.hypot(100, Wb / 2), 1e-9);
-    expect(d[6]).toBe("Push east and Push west (a tie)");
+    expect(d[6]).toBe("Push east and Push west (equal)");
   });
 
   it("the cases table marks each case of a tie, by the end its own value is at", () => {
