@@ -87,7 +87,7 @@ describe("design studies", () => {
     await answer.waitFor();
     expect(await answer.textContent()).toMatch(/^The margin at front jack reaches 0 kN at theta = 18\.1\d deg \(to 4 significant figures\)\.$/);
     // the same search in every case, in the page's worker: both cases set theta, which the sweep's
-    // values stand in for, so both lift where the sketch does: a tie, and both are named
+    // values stand in for, so both lift where the sketch does: equal first, and both are named
     await page.getByRole("button", { name: "In every case" }).click();
     const every = page.getByTestId("limit-everywhere");
     await every.waitFor();
