@@ -211,12 +211,14 @@ function useSharedFrame(before: SketchFile, after: SketchFile, width: number, he
 function SideBySide({ before, after, beforeLabel, afterLabel, marks, units }: DrawingPair) {
   const { frame, family } = useSharedFrame(before, after, 640, 400, units, true);
   return (
-    <div className="grid gap-4 lg:grid-cols-2" aria-label="The two drawings side by side" data-testid="compare-side-by-side">
-      <figure className="space-y-1">
+    // the captions share one row (a subgrid), so a message that wraps on one side does not push
+    // that drawing down: the two frames stay level, as the one scale and origin mean them to be
+    <div className="grid gap-4 lg:grid-cols-2 lg:grid-rows-[auto_auto] lg:gap-y-1" aria-label="The two drawings side by side" data-testid="compare-side-by-side">
+      <figure className="space-y-1 lg:row-span-2 lg:grid lg:grid-rows-subgrid lg:space-y-0">
         <figcaption className="text-sm font-semibold">Before: {beforeLabel}</figcaption>
         <ReviewDrawing document={before} marks={marks.before} label={`Before: ${beforeLabel}`} width={640} height={400} units={units} frame={frame} family={family} />
       </figure>
-      <figure className="space-y-1">
+      <figure className="space-y-1 lg:row-span-2 lg:grid lg:grid-rows-subgrid lg:space-y-0">
         <figcaption className="text-sm font-semibold">After: {afterLabel}</figcaption>
         <ReviewDrawing document={after} marks={marks.after} label={`After: ${afterLabel}`} width={640} height={400} units={units} frame={frame} family={family} />
       </figure>

@@ -7,7 +7,7 @@ import type { Page } from "playwright-core";
 import { beforeAll, describe, expect, it } from "vitest";
 import { createSketch, saveVersion as saveVersionApi } from "@/lib/sketches";
 import { fixture } from "../api/sketch-fixtures";
-import { BASE_URL, shot } from "./browser";
+import { atViewport, BASE_URL, shot } from "./browser";
 import { browsersClosedAfterAll } from "./session";
 import { makeCast, openEditor, parsed, retitle, saveVersion, type Cast } from "./versions-helpers";
 
@@ -131,7 +131,7 @@ describe("review of a calculation in the browser", () => {
     const page = pages.editor;
     await openEditor(page, sketchId);
     await retitle(page, "Skid with μ = 0.3 on the wet slab");
-    await saveVersion(page, "Friction 0.3 on a wet slab, as the checker asked");
+    await saveVersion(page, "Friction 0.3 on a wet slab, as the checker asked; the front foot and the drain channel left as drawn");
     await page.getByText("✓ saved").waitFor();
     await page.goto(review(3));
     await stepButton(page, "submit").waitFor();
@@ -184,6 +184,12 @@ describe("review of a calculation in the browser", () => {
     await owner.getByTestId("reaction-changes").waitFor();
     expect(await owner.getByTestId("compare-summary").textContent()).toContain("1 change in the inputs");
     await shot(owner, "review-06-compare");
+    // side by side, the two drawings start level even where one side's caption wraps (two columns from 1024 px)
+    await atViewport(owner, { width: 1024, height: 800 }, async () => {
+      const tops = await owner.getByTestId("compare-side-by-side").locator("figure > figcaption + *").evaluateAll((els) => els.map((e) => Math.round(e.getBoundingClientRect().top)));
+      expect(tops).toHaveLength(2);
+      expect(tops[1]).toBe(tops[0]);
+    });
     // the two drawings laid over each other at one scale, and the tables in US customary units
     await owner.getByRole("radio", { name: "Overlaid" }).click();
     await owner.getByTestId("compare-overlay").waitFor();
