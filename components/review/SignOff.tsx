@@ -121,6 +121,8 @@ function StepDialog({ step, path, concerns, newer, onClose, onDone }: { step: Si
     approve: "A note for the record (optional)",
     withdraw: "Why the approval is withdrawn (required)",
   };
+  // the findings above ask "or say why not": the box says it is the place for that
+  const findings = (step === "submit" || step === "check" || step === "approve") && concerns.length > 0;
   return (
     <Dialog open onClose={onClose} title={rule.label} testId="signoff-dialog">
       <form
@@ -130,7 +132,7 @@ function StepDialog({ step, path, concerns, newer, onClose, onDone }: { step: Si
           take.mutate();
         }}
       >
-        {(step === "submit" || step === "check" || step === "approve") && concerns.length ? (
+        {findings ? (
           <div className="rounded-md border border-caution/40 bg-caution-soft p-3 text-[13px] text-ink" data-testid="signoff-concerns" role="note">
             <p className="font-semibold">Before you {step === "approve" ? "approve" : step === "check" ? "mark it checked" : "submit it (say in the note why it stands)"}, this version shows:</p>
             <ul className="mt-1 list-disc space-y-0.5 pl-5">
@@ -146,7 +148,7 @@ function StepDialog({ step, path, concerns, newer, onClose, onDone }: { step: Si
           </p>
         ) : null}
         <label htmlFor="signoff-note" className="block text-sm font-medium text-ink">
-          {prompt[step]}
+          {findings ? "Why it stands despite the above (optional; kept in the sign-off record)" : prompt[step]}
         </label>
         <textarea
           id="signoff-note"

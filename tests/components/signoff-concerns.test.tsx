@@ -32,6 +32,16 @@ describe("the version's findings in the sign-off dialogs", () => {
     const box = within(screen.getByTestId("signoff-dialog")).getByTestId("signoff-concerns");
     expect(box.querySelector("p")!.textContent).toBe(heading);
     expect(within(box).getByText("Sliding factor of safety 1.213, below the required 1.5 (as drawn)")).toBeTruthy();
+    // the findings ask to say why it stands: the note's label names that place
+    expect(within(screen.getByTestId("signoff-dialog")).getByLabelText("Why it stands despite the above (optional; kept in the sign-off record)").tagName).toBe("TEXTAREA");
+  });
+
+  it("without findings the note keeps its own words", async () => {
+    show(data({ state: "checked", allowed: ["approve"] }));
+    await userEvent.setup().click(screen.getByRole("button", { name: "Approve" }));
+    const dialog = within(screen.getByTestId("signoff-dialog"));
+    expect(dialog.getByLabelText("A note for the record (optional)").tagName).toBe("TEXTAREA");
+    expect(dialog.queryByText(/Why it stands/)).toBeNull();
   });
 
   it("a return needs no such list; without findings there is none", async () => {
