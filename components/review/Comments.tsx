@@ -321,7 +321,8 @@ function ThreadView({ t, n, labels, data, viewerId, selected, onSelect, m }: { t
             </Button>
           )}
           {!replying ? (
-            <Button size="sm" tone="quiet" onClick={() => m.patch.mutate({ id: t.id, body: { resolved: !t.resolvedAt } })}>
+            // busy while this thread's resolve or reopen is on its way: a press that shows nothing invites a second
+            <Button size="sm" tone="quiet" busy={m.patch.isPending && m.patch.variables?.id === t.id && m.patch.variables.body.resolved !== undefined} onClick={() => m.patch.mutate({ id: t.id, body: { resolved: !t.resolvedAt } })}>
               {t.resolvedAt ? "Reopen" : "Resolve"}
             </Button>
           ) : null}
