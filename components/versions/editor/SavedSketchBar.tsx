@@ -15,6 +15,7 @@ import { ApiError, apiFetch, apiKey } from "@/lib/api-client";
 import { STATE_WORDS, type ReviewState } from "@/lib/review/rules";
 import { can } from "@/lib/roles";
 import { BEAT_MS, discardDraft, draftsOpenElsewhere, isTabOpenKey, keepDraft, keepTabOpen, readDraft, type Draft } from "./drafts";
+import { ForkDialog, type ForkResult } from "@/components/sketches/ForkDialog";
 import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
 import { reviewNote } from "./reviewNote";
 import { announceSaved, watchSaved, type SavedElsewhere } from "./savedElsewhere";
@@ -245,6 +246,17 @@ function Bar({ flow }: { flow: SaveFlow }) {
   useFileMenuLink(
     "file.makeLatest",
     offerLatest ? { label: `Make v${base} the latest again…`, detail: `v${base}'s drawing saved as a new version; nothing is deleted`, onSelect: askRestore } : null,
+  );
+  // "Fork this sketch…" (as on the History page): the version open here, as saved; the fork's own
+  // editor is then one click away, and nothing here changes
+  const [forkAsked, setForkAsked] = useState(false);
+  const [forked, setForked] = useState<(ForkResult["sketch"] & { from: number }) | null>(null);
+  const offerFork = !!info && base !== null && can(info.role, "sketch.fork");
+  useFileMenuLink(
+    "file.fork",
+    offerFork
+      ? { label: "Fork this sketch…", detail: dirty ? `A new sketch from v${base} as saved: your unsaved changes are not in it` : `A new sketch starting from v${base}`, onSelect: () => setForkAsked(true) }
+      : null,
   );
   const leaving = useRef(false);
   const leave = (href: string) => {
@@ -478,6 +490,26 @@ function Bar({ flow }: { flow: SaveFlow }) {
           }}
         />
       ) : null}
+      {forkAsked ? (
+        <ForkDialog
+          open
+          onClose={() => setForkAsked(false)}
+          sketchId={info.sketchId}
+          sketchTitle={info.title}
+          version={base}
+          defaultWorkspaceId={info.workspaceId}
+          intro={
+            dirty
+              ? `The fork is a new sketch that starts from v${base} as saved. Your unsaved changes are not in it: they stay here, in this editor (save them first to fork with them). The original stays as it is.`
+              : undefined
+          }
+          onForked={(made) => {
+            setForkAsked(false);
+            setForked({ ...made.sketch, from: base });
+            stores.editor.getState().notify(`Forked v${base} as “${made.sketch.title}”.`);
+          }}
+        />
+      ) : null}
       <div className="fixed bottom-10 right-4 z-40 flex max-w-sm flex-col gap-2">
       {savedElsewhere && savedElsewhere.version > base ? (
         <SavedInAnotherTab saved={savedElsewhere} base={base} dirty={dirty} onOpen={() => leave(`/sketches/${info.sketchId}`)} onDismiss={() => flow.setState({ savedElsewhere: undefined })} />
@@ -493,6 +525,22 @@ function Bar({ flow }: { flow: SaveFlow }) {
             setDraft(null);
           }}
         />
+      ) : null}
+      {forked ? (
+        <div role="status" data-testid="forked-notice" className={`${CARD} border-ink/15 bg-paper-card`}>
+          <p>
+            <strong>“{forked.title}”</strong> is a new sketch, forked from v{forked.from} of this one. This editor stays on “{info.title}”.
+          </p>
+          <div className="mt-2 flex flex-wrap gap-2">
+            {/* a plain link: with unsaved changes here, the browser asks before leaving (and they are kept) */}
+            <a href={`/sketches/${forked.id}`} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
+              Open the fork
+            </a>
+            <button type="button" onClick={() => setForked(null)} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+              Stay here
+            </button>
+          </div>
+        </div>
       ) : null}
       {madeLatest ? (
         <div role="status" data-testid="made-latest" className={`${CARD} border-ink/15 bg-paper-card`}>
