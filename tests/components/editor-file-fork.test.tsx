@@ -1,6 +1,6 @@
 // The editor's File menu offers "Fork this sketch…" (as the History page offers Fork) to those who
 // may fork: it opens the same fork dialog, for the version open in the editor as saved, and once
-// forked offers to open the fork. A viewer is not offered it.
+// forked offers to open the fork. A viewer is offered it only with a workspace of their own to fork into.
 import { act, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
@@ -22,7 +22,7 @@ beforeAll(() => {
 afterEach(() => vi.unstubAllGlobals());
 
 /** Sketch sk1 "Skid at pier 7" with v1..v3; a fork answers sketch fk1 in workspace w2. */
-function serve(role: Role) {
+function serve(role: Role, ownsElsewhere = true) {
   const posts: { url: string; body: unknown }[] = [];
   vi.stubGlobal(
     "fetch",
@@ -37,7 +37,7 @@ function serve(role: Role) {
         return jsonResponse({
           workspaces: [
             { id: "w1", name: "Bay 4", role, personal: false },
-            { id: "w2", name: "Olivia's sketches", role: "owner", personal: true },
+            ...(ownsElsewhere ? [{ id: "w2", name: "Olivia's sketches", role: "owner", personal: true }] : []),
           ],
         });
       const v = /^\/api\/sketches\/sk1\/versions\/(\d)$/.exec(path);
@@ -49,9 +49,9 @@ function serve(role: Role) {
   return posts;
 }
 
-async function open(role: Role, version: string) {
+async function open(role: Role, version: string, ownsElsewhere = true) {
   search.value = version ? `version=${version}` : "";
-  const posts = serve(role);
+  const posts = serve(role, ownsElsewhere);
   render(<SavedSketchEditor id="sk1" />);
   await screen.findByTestId("version-bar");
   await act(async () => {});
@@ -102,10 +102,21 @@ describe("Fork this sketch… in the editor's File menu", () => {
     expect(screen.getByTestId("version-label")).toHaveTextContent("unsaved");
   });
 
-  it("a viewer is not offered it", async () => {
-    await open("viewer", "");
+  it("a viewer with nowhere to fork into is not offered it", async () => {
+    await open("viewer", "", false);
     await userEvent.click(screen.getByTestId("menu-file"));
     await screen.findByRole("menuitem", { name: /Calc sheet/ });
     expect(screen.queryByRole("menuitem", { name: /Fork/ })).toBeNull();
+  });
+
+  it("a viewer here who owns a workspace of their own is offered it, into that workspace (as on the History page)", async () => {
+    const posts = await open("viewer", "");
+    await userEvent.click(screen.getByTestId("menu-file"));
+    await userEvent.click(await screen.findByRole("menuitem", { name: /Fork this sketch/ }));
+    const dialog = await screen.findByTestId("fork-dialog");
+    expect(within(dialog).getByLabelText("Into the workspace")).toHaveValue("w2");
+    await userEvent.click(within(dialog).getByRole("button", { name: /^Fork/ }));
+    await waitFor(() => expect(posts).toHaveLength(1));
+    expect(posts[0].body).toMatchObject({ workspaceId: "w2", version: 3 });
   });
 });

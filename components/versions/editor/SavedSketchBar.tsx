@@ -15,7 +15,7 @@ import { ApiError, apiFetch, apiKey } from "@/lib/api-client";
 import { STATE_WORDS, type ReviewState } from "@/lib/review/rules";
 import { can } from "@/lib/roles";
 import { BEAT_MS, discardDraft, draftsOpenElsewhere, isTabOpenKey, keepDraft, keepTabOpen, readDraft, type Draft } from "./drafts";
-import { ForkDialog, type ForkResult } from "@/components/sketches/ForkDialog";
+import { ForkDialog, useForkTargets, type ForkResult } from "@/components/sketches/ForkDialog";
 import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type LatestVersion } from "./SaveDialogs";
 import { reviewNote } from "./reviewNote";
 import { announceSaved, watchSaved, type SavedElsewhere } from "./savedElsewhere";
@@ -251,7 +251,10 @@ function Bar({ flow }: { flow: SaveFlow }) {
   // editor is then one click away, and nothing here changes
   const [forkAsked, setForkAsked] = useState(false);
   const [forked, setForked] = useState<(ForkResult["sketch"] & { from: number }) | null>(null);
-  const offerFork = !!info && base !== null && can(info.role, "sketch.fork");
+  // as on the History page: anyone who may fork into some workspace (a viewer here who owns a
+  // workspace of their own too); the list is the fork dialog's own, asked for once
+  const forkTargets = useForkTargets();
+  const offerFork = !!info && base !== null && (can(info.role, "sketch.fork") || (forkTargets.data?.length ?? 0) > 0);
   useFileMenuLink(
     "file.fork",
     offerFork
