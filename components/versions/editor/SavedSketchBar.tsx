@@ -28,6 +28,8 @@ import type { VersionItem } from "@/components/versions/VersionHistory";
 // on a touch screen 40 px tall, a finger's tap target (as the toolbar's own controls: components/editor/ui.ts)
 const CHIP = "h-7 pointer-coarse:h-10 whitespace-nowrap rounded px-2.5 text-[12.5px] font-medium";
 const CARD = "rounded-lg border p-3 text-[13px] text-ink shadow-[0_6px_24px_rgb(var(--shade)/0.14)]";
+/** a card's plain button ("Got it", "Stay here", "Discard"…) */
+const CARD_BUTTON = "rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50";
 
 /** What the editor says once an older version is the latest again: "v5 is now the latest: a copy of v2." */
 export function latestAgainWords(made: Pick<Restored, "number" | "restoredFrom">): string {
@@ -45,7 +47,7 @@ function KeptWork({ draft, latest, workspaceId, onDiscard }: { draft: Draft; lat
         <Link href={`/workspaces/${workspaceId}/sketches/${draft.sketchId}/compare?from=${latest}&to=draft&draft=${encodeURIComponent(draft.tab ?? "")}`} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
           Compare v{latest} with them
         </Link>
-        <a href={`/sketches/${draft.sketchId}?restore=1&draft=${encodeURIComponent(draft.tab ?? "")}`} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+        <a href={`/sketches/${draft.sketchId}?restore=1&draft=${encodeURIComponent(draft.tab ?? "")}`} className={CARD_BUTTON}>
           Bring them back
         </a>
         <button type="button" onClick={onDiscard} className="rounded-md px-2 py-1 text-ink-soft hover:text-ink">
@@ -71,7 +73,7 @@ function OpenInAnotherTab({ drafts, onDismiss }: { drafts: Draft[]; onDismiss: (
         Made on v{d.baseVersion}, kept {formatDateTime(d.keptAt)}. They stay with that tab: save or discard them there. Once that tab is closed, they are offered here.
       </p>
       <div className="mt-2 flex flex-wrap gap-2">
-        <button type="button" onClick={onDismiss} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+        <button type="button" onClick={onDismiss} className={CARD_BUTTON}>
           Got it
         </button>
       </div>
@@ -99,7 +101,7 @@ function SavedInAnotherTab({ saved, base, dirty, onOpen, onDismiss }: { saved: S
             Open v{saved.version}
           </button>
         )}
-        <button type="button" onClick={onDismiss} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+        <button type="button" onClick={onDismiss} className={CARD_BUTTON}>
           Got it
         </button>
       </div>
@@ -539,7 +541,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
             <a href={`/sketches/${forked.id}`} className="rounded-md bg-ink px-2.5 py-1 font-medium text-paper hover:bg-ink-soft">
               Open the fork
             </a>
-            <button type="button" onClick={() => setForked(null)} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+            <button type="button" onClick={() => setForked(null)} className={CARD_BUTTON}>
               Stay here
             </button>
           </div>
@@ -551,7 +553,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
             <strong>v{madeLatest.number}</strong> is now the latest: a copy of v{madeLatest.restoredFrom}. The editor shows v{madeLatest.number}; v{madeLatest.restoredFrom} stays in the history.
           </p>
           <div className="mt-2 flex flex-wrap gap-2">
-            <button type="button" onClick={() => setMadeLatest(null)} className="rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+            <button type="button" onClick={() => setMadeLatest(null)} className={CARD_BUTTON}>
               Got it
             </button>
           </div>
@@ -560,7 +562,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
       {restored && restoredNotice ? (
         <div role="status" data-testid="restored-work" className={`${CARD} border-caution/40 bg-caution-soft`}>
           <p>{restoredNotice}</p>
-          <button type="button" onClick={() => flow.setState({ restoredNotice: undefined })} className="mt-2 rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50">
+          <button type="button" onClick={() => flow.setState({ restoredNotice: undefined })} className={`mt-2 ${CARD_BUTTON}`}>
             Got it
           </button>
         </div>
