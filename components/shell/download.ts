@@ -20,11 +20,12 @@ export function serverMessage(body: string): string | undefined {
   return said ? said.replace(/\.?$/, ".") : undefined;
 }
 
-export type Fetched = { ok: true; name: string } | { ok: false; status: number; body: string };
+export type Fetched = { ok: true; name: string } | { ok: false; status: number; body: string; brokeOff?: true };
 
 /**
  * Fetch `href` and save it under the name the server gives (`fallback` without one) when `isFile`
- * accepts the reply; otherwise its status (0: the app could not be reached) and body.
+ * accepts the reply; otherwise its status (0: the app could not be reached, or a streamed file
+ * broke off part-way, then with `brokeOff`: nothing is saved) and body.
  */
 export async function fetchAndSave(href: string, fallback: string, isFile: (res: Response) => boolean): Promise<Fetched> {
   let res: Response;
@@ -35,7 +36,13 @@ export async function fetchAndSave(href: string, fallback: string, isFile: (res:
   }
   if (!res.ok || !isFile(res)) return { ok: false, status: res.ok ? 500 : res.status, body: await res.text().catch(() => "") };
   const name = attachmentName(res.headers.get("content-disposition"), fallback);
-  const url = URL.createObjectURL(await res.blob());
+  let blob: Blob;
+  try {
+    blob = await res.blob();
+  } catch {
+    return { ok: false, status: 0, body: "", brokeOff: true };
+  }
+  const url = URL.createObjectURL(blob);
   const a = document.createElement("a");
   a.href = url;
   a.download = name;

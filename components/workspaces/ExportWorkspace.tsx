@@ -1,12 +1,14 @@
 "use client";
 // The owners' download of every sketch in the workspace (the latest version of each) as one JSON
 // file, fetched first (components/shell/download.ts) so a failure is said here in words; without
-// JavaScript the plain link downloads it (the route answers it as an attachment).
+// JavaScript the plain link downloads it (the route answers it as an attachment). The server
+// streams it; one that breaks off part-way is not saved.
 import { useState } from "react";
 import { fetchAndSave, serverMessage, useFetchOnClick } from "@/components/shell/download";
 
 /** The words for an export that could not be had. */
-export function exportFailure(status: number, body: string): string {
+export function exportFailure(status: number, body: string, brokeOff = false): string {
+  if (brokeOff) return "Nothing was saved: the download broke off part-way, and a part of the file would not open. Try again.";
   if (status === 0) return "Nothing was downloaded: the app could not be reached. Check the connection and try again.";
   if (status === 401) return "Nothing was downloaded: your session has ended. Sign in again, then ask again.";
   return `Nothing was downloaded (the server answered ${status}): ${serverMessage(body) ?? "the export could not be made."}${status >= 500 ? " Try again in a moment." : ""}`;
@@ -21,7 +23,7 @@ export function ExportWorkspace({ workspaceId, sketches }: { workspaceId: string
     setDone(null);
     const got = await fetchAndSave(href, "workspace-sketches.json", (res) => res.headers.get("content-disposition") !== null);
     if (got.ok) setDone(`Downloaded ${got.name}.`);
-    else setError(exportFailure(got.status, got.body));
+    else setError(exportFailure(got.status, got.body, got.brokeOff));
   });
 
   return (

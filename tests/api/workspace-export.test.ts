@@ -2,14 +2,15 @@
 // with the latest version of every sketch in the sketch-file format; each file inside parses with
 // the solver's own parser (so it re-imports) and is the very document of that version. Other
 // members are refused (403), everyone else told nothing exists (404), and the export is logged.
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import * as exportRoute from "@/app/api/workspaces/[id]/export/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
 import * as versionsRoute from "@/app/api/sketches/[id]/versions/route";
 import { db } from "@/db";
 import { auditEvent } from "@/db/schema";
-import { exportFileName } from "@/lib/workspace-export";
+import { appOrigin } from "@/lib/env";
+import { EXPORT_PAGE_SIZE, exportFileName } from "@/lib/workspace-export";
 import { parseSketch } from "@/solver";
 import { call, makeTeam, type Json, type Person } from "./helpers";
 import { edited, fixture } from "./sketch-fixtures";
@@ -96,6 +97,67 @@ describe("exporting a workspace's sketches", () => {
     const out = await get(empty.ws, empty.lone);
     expect(out.status).toBe(200);
     expect(out.body.sketches).toEqual([]);
+  });
+});
+
+describe("a large export is streamed, a page of sketches at a time", () => {
+  const MANY = 2 * EXPORT_PAGE_SIZE + 11;
+  let big: { ws: string; lone: Person };
+  const decoder = new TextDecoder();
+  // the reply itself, its body unread (`call` reads it whole)
+  const download = () => exportRoute.GET(new Request(`${appOrigin()}/api/workspaces/${big.ws}/export`, { headers: { cookie: big.lone.cookie } }), { params: Promise.resolve({ id: big.ws }) });
+
+  beforeAll(async () => {
+    big = await makeTeam("Tank farm", { lone: "owner" }, { prefix: "export-big" });
+    const template = await postSketch(big.ws, big.lone, "Bay 000", "pipe-bend-anchor");
+    // MANY - 1 more sketches, each a copy of the first's saved version (made in SQL: the routes
+    // would solve each one again)
+    await db.execute(sql`
+      WITH made AS (
+        INSERT INTO sketch (workspace_id, title, latest_version, created_by)
+        SELECT ${big.ws}::uuid, 'Bay ' || lpad(g::text, 3, '0'), 1, ${big.lone.id} FROM generate_series(1, ${MANY - 1}::int) g
+        RETURNING id
+      )
+      INSERT INTO sketch_version (sketch_id, number, message, document, format_version, status, largest_reaction, summary, author_id)
+      SELECT made.id, 1, v.message, v.document, v.format_version, v.status, v.largest_reaction, v.summary, v.author_id
+      FROM made, sketch_version v WHERE v.sketch_id = ${template}::uuid AND v.number = 1`);
+  });
+
+  it("comes as the bundle's head, then one chunk per sketch, then the close, and parses as a whole", async () => {
+    const res = await download();
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-length")).toBeNull();
+    const chunks: string[] = [];
+    for await (const chunk of res.body as ReadableStream<Uint8Array>) chunks.push(decoder.decode(chunk));
+    expect(chunks).toHaveLength(1 + MANY + 1);
+    expect(chunks[0]).toMatch(/^\{"format":"counterpoise\.workspace-export","version":1,.*"sketches":\[$/);
+    expect(chunks[1]).toMatch(/^\{"id":"[0-9a-f-]{36}","title":"Bay 000",/);
+    expect(chunks[2]).toMatch(/^,\{"id":"[0-9a-f-]{36}","title":"Bay 001",/);
+    expect(chunks.at(-1)).toBe("]}");
+    const bundle = JSON.parse(chunks.join(""));
+    expect(bundle.sketches).toHaveLength(MANY);
+    // in order across the pages' seams, none twice
+    expect(bundle.sketches.map((s: Json) => s.title)).toEqual(Array.from({ length: MANY }, (_, i) => `Bay ${String(i).padStart(3, "0")}`));
+    expect(new Set(bundle.sketches.map((s: Json) => s.id)).size).toBe(MANY);
+    for (const s of [bundle.sketches[0], bundle.sketches[MANY - 1]]) expect(parseSketch(s.file).ok).toBe(true);
+    expect(bundle.sketches[MANY - 1].file).toEqual(bundle.sketches[0].file);
+  });
+
+  it("reads the sketches only as the download asks for them: one saved after the first chunk is read is still in it", async () => {
+    const res = await download();
+    const reader = (res.body as ReadableStream<Uint8Array>).getReader();
+    const first = await reader.read();
+    expect(decoder.decode(first.value)).toMatch(/"sketches":\[$/);
+    // saved now, after the download began; its title sorts last, on the last page
+    await postSketch(big.ws, big.lone, "Zone Z, last bay", "pump-skid-discharge");
+    let rest = "";
+    for (let got = await reader.read(); !got.done; got = await reader.read()) rest += decoder.decode(got.value);
+    const bundle = JSON.parse(decoder.decode(first.value) + rest);
+    expect(bundle.sketches).toHaveLength(MANY + 1);
+    expect(bundle.sketches.at(-1).title).toBe("Zone Z, last bay");
+    // the audit record counts the sketches as the export began
+    const [logged] = await db.select().from(auditEvent).where(and(eq(auditEvent.workspaceId, big.ws), eq(auditEvent.action, "workspace.export"))).orderBy(sql`${auditEvent.at} desc`).limit(1);
+    expect(logged.detail).toMatchObject({ sketches: MANY });
   });
 });
 

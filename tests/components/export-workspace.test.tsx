@@ -62,6 +62,28 @@ describe("downloading a workspace's sketches", () => {
     expect(exportFailure(503, "")).toBe("Nothing was downloaded (the server answered 503): the export could not be made. Try again in a moment.");
   });
 
+  it("saves nothing when the streamed file breaks off part-way, and says so", async () => {
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => {
+        let sent = false;
+        const body = new ReadableStream<Uint8Array>({
+          pull(controller) {
+            if (sent) return controller.error(new TypeError("network error"));
+            sent = true;
+            controller.enqueue(new TextEncoder().encode('{"format":"counterpoise.workspace-export","sketches":['));
+          },
+        });
+        return new Response(body, { status: 200, headers: { "content-type": "application/json", "content-disposition": 'attachment; filename="bay-4-sketches-2026-12-05.json"' } });
+      }),
+    );
+    render(<ExportWorkspace workspaceId="w1" sketches={40} />);
+    await userEvent.click(screen.getByRole("link", { name: "Download all sketches (JSON)" }));
+    expect(await screen.findByRole("alert")).toHaveTextContent("Nothing was saved: the download broke off part-way, and a part of the file would not open. Try again.");
+    expect(saved).toEqual([]);
+    expect(screen.queryByRole("status")).toBeNull();
+  });
+
   it("offers nothing to download in a workspace without sketches", () => {
     render(<ExportWorkspace workspaceId="w1" sketches={0} />);
     expect(screen.getByText("There are no sketches to export yet.")).toBeInTheDocument();
