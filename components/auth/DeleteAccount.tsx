@@ -3,6 +3,7 @@ import Link from "next/link";
 import { useState, type FormEvent } from "react";
 import { Button, Field, Notice } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
+import { ExportLink } from "@/components/workspaces/ExportWorkspace";
 import { apiFetch, ApiError } from "@/lib/api-client";
 
 type Held = { id: string; name: string; members: number };
@@ -77,7 +78,7 @@ export function DeleteAccount({ name, plan, go = (to: string) => window.location
       <Dialog open={open} onClose={() => setOpen(false)} title="Delete your account?" testId="delete-account-dialog" wide>
         <form onSubmit={onSubmit} className="space-y-4 text-sm" noValidate>
           <ul className="list-disc space-y-1 pl-5 text-ink-soft" data-testid="delete-account-effects">
-            <li>You can no longer sign in; every device is signed out.</li>
+            <li>It happens at once and cannot be undone. You can no longer sign in; every device is signed out.</li>
             {plan.deleted.length ? <li>Deleted with it, as only you are in {plan.deleted.length === 1 ? "it" : "them"}, with every sketch, version and file: {names(plan.deleted)}.</li> : null}
             {plan.left.length ? <li>You leave {names(plan.left)}; the other members keep everything in {plan.left.length === 1 ? "it" : "them"}.</li> : null}
             <li>
@@ -85,9 +86,19 @@ export function DeleteAccount({ name, plan, go = (to: string) => window.location
             </li>
           </ul>
           {plan.deleted.length ? (
-            <Notice tone="info" title="Keep copies first">
-              Open each sketch you need and use Export JSON (Ctrl/⌘+E) in the editor, and download the calc sheets (PDF) you must keep from their version pages.
-            </Notice>
+            <section aria-labelledby="delete-account-copy" className="space-y-2 rounded-md border border-rule-soft px-3.5 py-3" data-testid="delete-account-copy">
+              <h4 id="delete-account-copy" className="font-semibold text-ink">
+                Keep a copy first
+              </h4>
+              <p className="text-ink-soft">Each workspace’s sketches, the latest version of each, come in one JSON file that opens again with File › Import JSON. Download the calc sheets (PDF) you must keep from their version pages.</p>
+              <ul className="space-y-2">
+                {plan.deleted.map((w) => (
+                  <li key={w.id}>
+                    <ExportLink workspaceId={w.id} label={`Download the sketches of “${w.name}” (JSON)`} />
+                  </li>
+                ))}
+              </ul>
+            </section>
           ) : null}
           {refusal ? <Notice tone="error">{refusal}</Notice> : null}
           <Field

@@ -2,9 +2,10 @@
 import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
-import { Button, Field, Notice } from "@/components/shell/controls";
+import { Button, Field } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
 import { apiFetch, ApiError } from "@/lib/api-client";
+import { ExportLink } from "./ExportWorkspace";
 import { nameConfirms } from "./format";
 
 export type DeletionContents = { sketches: number; versions: number; approved: number; comments: number; uploads: number; members: number };
@@ -23,8 +24,10 @@ export function whatGoes(c: DeletionContents): string[] {
 }
 
 /**
- * Owners delete the workspace: a dialog that says what goes, how to keep copies first, and asks for
- * the workspace's name typed again (the button waits for it; the server checks it too).
+ * Owners delete the workspace: at once and for good (no grace period: the server deletes the
+ * sketches and files in the same request, and only the audit record stays). So the dialog says
+ * that first, then what goes, offers the workspace's export right there, and asks for the
+ * workspace's name typed again (the button waits for it; the server checks it too).
  */
 export function DeleteWorkspace({ workspaceId, name, contents }: { workspaceId: string; name: string; contents: DeletionContents }) {
   const router = useRouter();
@@ -50,12 +53,15 @@ export function DeleteWorkspace({ workspaceId, name, contents }: { workspaceId: 
   return (
     <div className="space-y-2 border-t border-rule-soft pt-4">
       <h3 className="text-sm font-semibold text-ink">Delete this workspace</h3>
-      <p className="text-sm text-ink-soft">Everything in it goes for everyone, and cannot be brought back.</p>
+      <p className="text-sm text-ink-soft">Everything in it goes at once, for everyone, and cannot be brought back.</p>
       <Button tone="danger" onClick={() => setOpen(true)} data-testid="delete-workspace">
         Delete workspace…
       </Button>
       <Dialog open={open} onClose={() => setOpen(false)} title={`Delete “${name}”?`} testId="delete-workspace-dialog" wide>
         <form onSubmit={onSubmit} className="space-y-4 text-sm" noValidate>
+          <p className="font-medium text-ink" data-testid="delete-workspace-final">
+            This happens at once and cannot be undone: there is no bin to restore it from, for you or anyone else.
+          </p>
           {goes.length ? (
             <div>
               <p className="text-ink">These go with it:</p>
@@ -69,9 +75,13 @@ export function DeleteWorkspace({ workspaceId, name, contents }: { workspaceId: 
             <p className="text-ink-soft">It holds no sketches, comments or files.</p>
           )}
           {contents.sketches ? (
-            <Notice tone="info" title="Keep copies first">
-              There is no export of a whole workspace. Open each sketch you need and use Export JSON (Ctrl/⌘+E) in the editor for its sketch file, and download the calc sheet (PDF) of each version you must keep from its version page.
-            </Notice>
+            <section aria-labelledby="delete-workspace-copy" className="space-y-2 rounded-md border border-rule-soft px-3.5 py-3" data-testid="delete-workspace-copy">
+              <h4 id="delete-workspace-copy" className="font-semibold text-ink">
+                Keep a copy first
+              </h4>
+              <p className="text-ink-soft">Download every sketch, the latest version of each, in one JSON file that opens again with File › Import JSON. For a version you must keep as issued, download its calc sheet (PDF) from its version page.{contents.uploads ? " Uploaded files are not in the JSON file." : ""}</p>
+              <ExportLink workspaceId={workspaceId} />
+            </section>
           ) : null}
           <p className="text-ink-soft">The audit log keeps a record that you deleted it and what it held. Links to its sketches will say they were deleted.</p>
           <Field

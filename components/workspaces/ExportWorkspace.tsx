@@ -14,7 +14,11 @@ export function exportFailure(status: number, body: string, brokeOff = false): s
   return `Nothing was downloaded (the server answered ${status}): ${serverMessage(body) ?? "the export could not be made."}${status >= 500 ? " Try again in a moment." : ""}`;
 }
 
-export function ExportWorkspace({ workspaceId, sketches }: { workspaceId: string; sketches: number }) {
+/**
+ * The download link with what came of it under it: fetched first, so a refusal, an unreachable app
+ * or a download that broke off is said here in words and nothing is saved.
+ */
+export function ExportLink({ workspaceId, label = "Download all sketches (JSON)" }: { workspaceId: string; label?: string }) {
   const href = `/api/workspaces/${workspaceId}/export`;
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
@@ -25,25 +29,16 @@ export function ExportWorkspace({ workspaceId, sketches }: { workspaceId: string
     if (got.ok) setDone(`Downloaded ${got.name}.`);
     else setError(exportFailure(got.status, got.body, got.brokeOff));
   });
-
   return (
-    <div className="mt-6 space-y-2 border-t border-rule-soft pt-4 text-sm" data-testid="export-workspace">
-      <h3 className="font-medium text-ink">Export the sketches</h3>
-      <p className="text-ink-soft">
-        {sketches === 0
-          ? "There are no sketches to export yet."
-          : `All ${sketches === 1 ? "1 sketch" : `${sketches} sketches`}, the latest version of each, in one JSON file. Each sketch's drawing opens again with File › Import JSON.`}
-      </p>
-      {sketches > 0 ? (
-        <a
-          href={href}
-          onClick={onClick}
-          aria-busy={busy || undefined}
-          className="inline-flex items-center rounded-md border border-ink/25 px-3 py-1.5 font-medium text-ink hover:border-ink/50 focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-accent"
-        >
-          {busy ? "Preparing the file…" : "Download all sketches (JSON)"}
-        </a>
-      ) : null}
+    <div className="space-y-2">
+      <a
+        href={href}
+        onClick={onClick}
+        aria-busy={busy || undefined}
+        className="inline-flex items-center rounded-md border border-ink/25 px-3 py-1.5 font-medium text-ink hover:border-ink/50 focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-accent"
+      >
+        {busy ? "Preparing the file…" : label}
+      </a>
       {error ? (
         <p role="alert" className="text-sm font-medium text-accent-deep">
           {error}
@@ -54,6 +49,20 @@ export function ExportWorkspace({ workspaceId, sketches }: { workspaceId: string
           {done}
         </p>
       ) : null}
+    </div>
+  );
+}
+
+export function ExportWorkspace({ workspaceId, sketches }: { workspaceId: string; sketches: number }) {
+  return (
+    <div className="mt-6 space-y-2 border-t border-rule-soft pt-4 text-sm" data-testid="export-workspace">
+      <h3 className="font-medium text-ink">Export the sketches</h3>
+      <p className="text-ink-soft">
+        {sketches === 0
+          ? "There are no sketches to export yet."
+          : `All ${sketches === 1 ? "1 sketch" : `${sketches} sketches`}, the latest version of each, in one JSON file. Each sketch's drawing opens again with File › Import JSON.`}
+      </p>
+      {sketches > 0 ? <ExportLink workspaceId={workspaceId} /> : null}
     </div>
   );
 }

@@ -11,6 +11,7 @@ import * as sketchRoute from "@/app/api/sketches/[id]/route";
 import * as sketchUploadsRoute from "@/app/api/sketches/[id]/uploads/route";
 import * as commentsRoute from "@/app/api/sketches/[id]/versions/[number]/comments/route";
 import * as sketchesRoute from "@/app/api/workspaces/[id]/sketches/route";
+import * as exportRoute from "@/app/api/workspaces/[id]/export/route";
 import { db } from "@/db";
 import { auditEvent, comment, devMail, invitation, membership, sketch, sketchVersion, upload, workspace } from "@/db/schema";
 import { appOrigin } from "@/lib/env";
@@ -84,6 +85,12 @@ describe("deleting a workspace", () => {
     expect(await db.select().from(sketch).where(eq(sketch.workspaceId, ws))).toHaveLength(2);
   });
 
+  it("lets the owner take the copy the dialog offers first: the export holds every sketch", async () => {
+    const copy = await call(exportRoute.GET, { params: { id: ws }, cookie: olivia.cookie });
+    expect(copy.status).toBe(200);
+    expect(copy.body.sketches.map((s: Json) => s.title)).toEqual(["Discharge bend", "Skid frame"]);
+  });
+
   it("deletes it for the owner: sketches, versions, comments, files, members; says what went", async () => {
     startedAt = Date.now();
     const out = await remove(ws, olivia, "  Pump house   7 ");
@@ -136,6 +143,15 @@ describe("deleting a workspace", () => {
     const s = await call(sketchRoute.GET, { params: { id: sketchA }, cookie: chen.cookie });
     expect(s.status).toBe(404);
     expect(s.body.error.message).toMatch(/^“Discharge bend” was deleted by Olivia Closer on .* UTC with the workspace it was in, and all its versions\./);
+  });
+
+  it("is final at once: no copy can be had afterwards, not even by the owner who deleted it", async () => {
+    const late = await call(exportRoute.GET, { params: { id: ws }, cookie: olivia.cookie });
+    expect(late.status).toBe(404);
+    expect(late.body.error.workspaceDeleted).toMatchObject({ workspaceId: ws, deletedBy: "Olivia Closer" });
+    expect(late.res.headers.get("content-disposition")).toBeNull();
+    // and it cannot be undone by deleting again with the right name (there is nothing left to act on)
+    expect((await remove(ws, olivia, "Pump house 7")).status).toBe(404);
   });
 
   it("tells an outsider nothing: the words of a workspace and a sketch that never were", async () => {

@@ -36,7 +36,10 @@ describe("deleting your account", () => {
     expect(effects).toContain("Deleted with it, as only you are in it, with every sketch, version and file: “Eddie's workspace”.");
     expect(effects).toContain("You leave “Penstock 3”; the other members keep everything in it.");
     expect(effects).toContain("under the name “former member: Eddie Drafter”");
-    expect(screen.getByTestId("delete-account-dialog").textContent).toContain("Export JSON (Ctrl/⌘+E)");
+    expect(effects).toContain("It happens at once and cannot be undone.");
+    // a copy of each workspace that goes, offered there; none of one it leaves
+    const copy = screen.getByRole("region", { name: "Keep a copy first" });
+    expect(within(copy).getAllByRole("link").map((a) => [a.textContent, a.getAttribute("href")])).toEqual([["Download the sketches of “Eddie's workspace” (JSON)", "/api/workspaces/w2/export"]]);
   });
 
   it("asks for the password before sending anything", async () => {

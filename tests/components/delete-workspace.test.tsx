@@ -1,4 +1,5 @@
-// Deleting a workspace from its page: the dialog says what goes and how to keep copies, and deletes
+// Deleting a workspace from its page (at once and for good): the dialog says so first, what goes,
+// offers the workspace's export right there, and deletes
 // only once the workspace's name is typed again; a wrong name or the server's refusal is said under
 // the field, and what was typed stays.
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
@@ -50,9 +51,49 @@ describe("deleting a workspace", () => {
     const dialog = screen.getByTestId("delete-workspace-dialog");
     expect(within(dialog).getByRole("heading", { name: "Delete “Booster station 4”?" })).toBeTruthy();
     expect(within(dialog).getByTestId("delete-workspace-contents").textContent).toContain("3 sketches with 11 versions, 2 of them approved");
-    expect(dialog.textContent).toContain("Export JSON (Ctrl/⌘+E)");
-    expect(dialog.textContent).toContain("calc sheet (PDF)");
+    // said first, in plain words: at once and for good
+    expect(within(dialog).getByTestId("delete-workspace-final").textContent).toBe("This happens at once and cannot be undone: there is no bin to restore it from, for you or anyone else.");
+    const copy = within(dialog).getByRole("region", { name: "Keep a copy first" });
+    expect(within(copy).getByRole("link", { name: "Download all sketches (JSON)" })).toHaveAttribute("href", `/api/workspaces/${WS}/export`);
+    expect(copy.textContent).toContain("calc sheet (PDF)");
+    expect(copy.textContent).toContain("Uploaded files are not in the JSON file.");
+    expect(dialog.textContent).not.toContain("There is no export");
     expect(within(dialog).getByLabelText("Type the workspace’s name, “Booster station 4”, to confirm")).toBeTruthy();
+  });
+
+  it("downloads the copy from inside the dialog and says so there, the name field and Delete untouched", async () => {
+    const saved: string[] = [];
+    vi.stubGlobal("URL", Object.assign(URL, { createObjectURL: () => "blob:export", revokeObjectURL: () => {} }));
+    const click = vi.spyOn(HTMLAnchorElement.prototype, "click").mockImplementation(function (this: HTMLAnchorElement) {
+      if (this.download) saved.push(this.download);
+    });
+    const fetched = vi.fn(async () => new Response('{"sketches":[]}', { status: 200, headers: { "content-disposition": 'attachment; filename="booster-station-4-sketches-2026-12-05.json"' } }));
+    vi.stubGlobal("fetch", fetched);
+    try {
+      const user = userEvent.setup();
+      show();
+      await user.click(screen.getByRole("button", { name: "Delete workspace…" }));
+      const copy = screen.getByRole("region", { name: "Keep a copy first" });
+      await user.click(within(copy).getByRole("link", { name: "Download all sketches (JSON)" }));
+      expect(await within(copy).findByRole("status")).toHaveTextContent("Downloaded booster-station-4-sketches-2026-12-05.json.");
+      expect(fetched).toHaveBeenCalledWith(`/api/workspaces/${WS}/export`, expect.anything());
+      expect(saved).toEqual(["booster-station-4-sketches-2026-12-05.json"]);
+      expect(screen.getByTestId("delete-workspace-dialog")).toBeVisible();
+      expect(apiFetch).not.toHaveBeenCalled();
+    } finally {
+      click.mockRestore();
+      vi.unstubAllGlobals();
+    }
+  });
+
+  it("offers no copy for a workspace without sketches, and still says it is final", async () => {
+    const user = userEvent.setup();
+    show({ sketches: 0, versions: 0, approved: 0, comments: 0, uploads: 0, members: 1 });
+    await user.click(screen.getByRole("button", { name: "Delete workspace…" }));
+    const dialog = screen.getByTestId("delete-workspace-dialog");
+    expect(within(dialog).queryByRole("region", { name: "Keep a copy first" })).toBeNull();
+    expect(dialog.textContent).toContain("It holds no sketches, comments or files.");
+    expect(within(dialog).getByTestId("delete-workspace-final")).toBeTruthy();
   });
 
   it("refuses a name that does not match under the field, sends nothing, and keeps what was typed", async () => {
