@@ -21,6 +21,7 @@ import { valueLookup } from "./analysis/store";
 import { fitScene, isFitted } from "./geometry/fit";
 import { fitUnderlayView } from "./geometry/underlay";
 import { snapTo } from "./geometry/snap";
+import { roundTo } from "./model/numeric";
 import { gridStep, toWorld, zoomAt } from "./geometry/view";
 import { bodyCommand, bodyPlaceInView, NEEDS_BODY, placedAtOutline, placeWithoutPointer, spotWords, type SpotPlace } from "./placement";
 
@@ -170,7 +171,8 @@ function turn(id: string, label: string, key: string, by: number): Action {
       const id0 = s.selection[0];
       const item = ctx.stores.scene.getState().byId.get(id0);
       if (!item || !("angle" in item)) return;
-      const angle = Math.round(((item.angle as number) + by) / 5) * 5;
+      // by exactly the step (a direction typed as 37° turns to 52°, as a nudge keeps a typed offset)
+      const angle = (item.angle as number) + by;
       if (s.apply(rotateElement({ id: id0, angle, magnitude: item.kind === "force" ? item.magnitude : undefined }) as Command<unknown>)) sayReplaced(ctx, s.sketch, [id0]);
     },
   };
@@ -397,7 +399,8 @@ export function pickSelectedPoint(ctx: ActionContext): boolean {
     return true;
   }
   const p = anchorOf(item);
-  s.setMomentPoint([snapTo(p[0], 1e-4), snapTo(p[1], 1e-4)]);
+  // the element's point as it is (typed to the micron or not), free of floating-point noise
+  s.setMomentPoint([roundTo(p[0], 1e-9), roundTo(p[1], 1e-9)]);
   s.setTool({ kind: "select" });
   s.notify(`The hand check takes moments about ${describeElement(l)}${l.kind === "body" ? "'s centre of gravity" : ""} (x = ${metres(p[0])}, y = ${metres(p[1])}).`);
   return true;

@@ -1,6 +1,6 @@
 // Snapping a point while placing or dragging: body corners first, then body edges, then the grid.
 import type { Vec2 } from "@/solver/types";
-import { nearestOnOutline } from "./polygon";
+import { nearestOnOutline, nearestOnSegment } from "./polygon";
 
 export type SnapKind = "corner" | "edge" | "grid" | "none";
 
@@ -23,10 +23,24 @@ export interface SnapOptions {
   exclude?: ReadonlySet<string>;
   /** false while the user holds the key that turns snapping off */
   enabled?: boolean;
+  /**
+   * Where the dragged point was when the drag began (a corner or a position maybe typed in the
+   * panel, off the grid): while the pointer is within the tolerance of it, it is kept exactly,
+   * before the grid (also the grid along an edge it sits on or next to), and before a corner or
+   * another edge only when it is nearer. A press that wobbles a few pixels leaves a typed value as
+   * typed; snapping is for moving.
+   */
+  keep?: Vec2;
 }
+
+/** Nearer than this (m) to an outline, a kept point sits on it. */
+const ON_EDGE = 1e-7;
 
 export function snapPoint(p: Vec2, o: SnapOptions): SnapResult {
   if (o.enabled === false) return { point: p, kind: "none" };
+  const keep = o.keep;
+  const keepD = keep ? Math.hypot(keep[0] - p[0], keep[1] - p[1]) : Infinity;
+  const kept = keep && keepD <= o.tolerance ? ({ point: [keep[0], keep[1]], kind: "none" } satisfies SnapResult) : null;
   let best: SnapResult | null = null;
   let bestD = o.tolerance;
   for (const b of o.bodies) {
@@ -39,8 +53,9 @@ export function snapPoint(p: Vec2, o: SnapOptions): SnapResult {
       }
     }
   }
-  if (best) return best;
+  if (best) return kept && keepD < bestD ? kept : best;
   bestD = o.tolerance;
+  let ends: [Vec2, Vec2] | null = null;
   for (const b of o.bodies) {
     if (o.exclude?.has(b.id) || b.outline.length < 2) continue;
     const h = nearestOnOutline(p, b.outline);
@@ -53,9 +68,17 @@ export function snapPoint(p: Vec2, o: SnapOptions): SnapResult {
       if (o.grid > 0 && a[1] === c[1]) pt[0] = clamp(snapTo(pt[0], o.grid), Math.min(a[0], c[0]), Math.max(a[0], c[0]));
       if (o.grid > 0 && a[0] === c[0]) pt[1] = clamp(snapTo(pt[1], o.grid), Math.min(a[1], c[1]), Math.max(a[1], c[1]));
       best = { point: pt, kind: "edge", body: b.id, edge: h.edge };
+      ends = [a, c];
     }
   }
-  if (best) return best;
+  if (best && ends) {
+    if (!kept) return best;
+    // a kept point on that edge still says "on edge"; one just off it (typed so) stays off it
+    const off = nearestOnSegment(kept.point, ends[0], ends[1]).distance;
+    if (off <= ON_EDGE) return { ...best, point: kept.point };
+    return off <= o.tolerance || keepD < bestD ? kept : best;
+  }
+  if (kept) return kept;
   if (o.grid > 0) return { point: [snapTo(p[0], o.grid), snapTo(p[1], o.grid)], kind: "grid" };
   return { point: p, kind: "none" };
 }

@@ -11,7 +11,7 @@ import type { EditorStores } from "../context";
 import { childrenOf, findElement, type ElementKind } from "../model/elements";
 import { snapCorners, snapPoint, snapTo, type SnapResult } from "../geometry/snap";
 import { gridStep, toWorld, zoomAt } from "../geometry/view";
-import { angleOf } from "../geometry/polygon";
+import { angleOf, normaliseAngle } from "../geometry/polygon";
 import { anchorOf, type SceneItem } from "../scene";
 import { bodyCommand, bodyPlaceInView, dropAttachments, elementsInBox, OUTLINE_REACH_PX, placeCommand, placedAtOutline } from "../placement";
 import { rectangleAround, rectangleOutline } from "../model/factory";
@@ -39,9 +39,12 @@ type Mode =
   | { kind: "pan"; start: Vec2; view: { scale: number; x: number; y: number } }
   /** `corners`: the moving bodies' corners when the drag began (they snap to other bodies) */
   | { kind: "move"; ids: string[]; start: Vec2; anchor: Vec2; moved: boolean; exclude: Set<string>; snapAnchor: boolean; corners: Vec2[]; last?: Command<unknown> }
-  | { kind: "rotate"; id: string; anchor: Vec2; flip: boolean; magnitude?: number }
-  | { kind: "corner"; id: string; index: number }
-  | { kind: "cg"; id: string; start: Vec2; origin: Vec2 }
+  /** `from`: the element's direction when the turn began; `grip`: the pointer's direction from the
+   *  anchor then (the turn follows the pointer's change of direction, not where it was pressed) */
+  | { kind: "rotate"; id: string; anchor: Vec2; flip: boolean; magnitude?: number; from: number; grip: number; moved: boolean }
+  /** `origin`: the corner when the drag began (kept while the pointer stays near it) */
+  | { kind: "corner"; id: string; index: number; start: Vec2; origin: Vec2; moved: boolean }
+  | { kind: "cg"; id: string; start: Vec2; origin: Vec2; moved: boolean }
   /** `before`: the selection when the band began, which Escape gives back */
   | { kind: "band"; start: Vec2; mode: "replace" | "add"; before: string[] }
   | { kind: "rect"; start: Vec2 }
@@ -50,6 +53,10 @@ type Mode =
 
 const DRAG_THRESHOLD_PX = 3;
 const ANGLE_STEP = 5;
+/** A turn within this many degrees of the direction it began from keeps that direction exactly
+ *  (one typed as 37° is not rounded to 35° by a press that wobbles); less than a step, so every
+ *  step stays reachable. */
+const ANGLE_KEEP = 4;
 
 export function createPointerController(deps: PointerDeps) {
   const { stores, interaction } = deps;
@@ -67,11 +74,15 @@ export function createPointerController(deps: PointerDeps) {
   const worldOf = (s: Vec2) => toWorld(ed().view, s);
   const tolerance = () => 9 / ed().view.scale;
 
-  function snap(p: Vec2, e: { altKey: boolean }, exclude?: Set<string>, tol = tolerance()): SnapResult {
+  /** `keep`: where the dragged point began, kept exactly while the pointer stays near it (see `snapPoint`) */
+  function snap(p: Vec2, e: { altKey: boolean }, exclude?: Set<string>, tol = tolerance(), keep?: Vec2): SnapResult {
     const s = ed();
     const scene = stores.scene.getState();
-    return snapPoint(p, { bodies: scene.bodies, grid: gridStep(s.view.scale), tolerance: tol, exclude, enabled: s.snap && !e.altKey });
+    return snapPoint(p, { bodies: scene.bodies, grid: gridStep(s.view.scale), tolerance: tol, exclude, enabled: s.snap && !e.altKey, keep });
   }
+  /** Past the few pixels a click wobbles: before that, a press on a handle changes nothing. */
+  const pastThreshold = (screen: Vec2) => Math.hypot(screen[0] - downScreen[0], screen[1] - downScreen[1]) >= DRAG_THRESHOLD_PX;
+  const same = (a: Vec2, b: Vec2) => a[0] === b[0] && a[1] === b[1];
 
   /**
    * The command that places a support, load or port at a world point (a click, a tap, a tray item
@@ -216,17 +227,24 @@ export function createPointerController(deps: PointerDeps) {
       const l = findElement(s.sketch, hit.id);
       const el = l?.el as Record<string, unknown> | undefined;
       const cartesian = item.kind === "force" && el && el.magnitude === undefined && el.angle === undefined;
-      mode = { kind: "rotate", id: hit.id, anchor: anchorOf(item), flip: handleSign(item) < 0, magnitude: cartesian && item.kind === "force" ? item.magnitude : undefined };
+      const anchor = anchorOf(item);
+      const flip = handleSign(item) < 0;
+      const from = "angle" in item && Number.isFinite(item.angle) ? (item.angle as number) : NaN;
+      const grip = angleOf([world[0] - anchor[0], world[1] - anchor[1]]) + (flip ? 180 : 0);
+      mode = { kind: "rotate", id: hit.id, anchor, flip, magnitude: cartesian && item.kind === "force" ? item.magnitude : undefined, from, grip, moved: false };
       s.beginGesture("Turn");
       lift([hit.id]);
     } else if (hit?.type === "corner") {
-      mode = { kind: "corner", id: hit.id, index: hit.index };
+      const b = stores.scene.getState().byId.get(hit.id);
+      const origin = b?.kind === "body" ? b.outline[hit.index] : undefined;
+      if (!origin) return;
+      mode = { kind: "corner", id: hit.id, index: hit.index, start: world, origin, moved: false };
       s.beginGesture("Reshape");
       lift([hit.id]);
     } else if (hit?.type === "cg") {
       const b = stores.scene.getState().byId.get(hit.id);
       if (!b || b.kind !== "body") return;
-      mode = { kind: "cg", id: hit.id, start: world, origin: b.cg };
+      mode = { kind: "cg", id: hit.id, start: world, origin: b.cg, moved: false };
       s.beginGesture("Move the centre of gravity");
     } else if (hit?.type === "underlay" && s.sketch.underlay) {
       mode = { kind: "underlay", start: world, origin: s.sketch.underlay.origin };
@@ -279,43 +297,65 @@ export function createPointerController(deps: PointerDeps) {
         markInput(e.timeStamp);
         let delta: Vec2 = [world[0] - mode.start[0], world[1] - mode.start[1]];
         if (mode.snapAnchor) {
-          const r = snap([mode.anchor[0] + delta[0], mode.anchor[1] + delta[1]], e, mode.exclude);
+          // the element's own place (maybe typed) holds while the pointer stays near it
+          const r = snap([mode.anchor[0] + delta[0], mode.anchor[1] + delta[1]], e, mode.exclude, undefined, mode.anchor);
           delta = [r.point[0] - mode.anchor[0], r.point[1] - mode.anchor[1]];
           interaction.setState({ snap: r.kind === "none" ? null : r });
         } else if (s.snap && !e.altKey) {
-          // a body's corner goes onto another body's corner or edge; failing that the move keeps to the grid
+          // a body's corner goes onto another body's corner or edge; failing that the move keeps to
+          // the grid (in whole steps, so corners typed off it stay as far off it); near where it
+          // began it stays put, unless a corner or an edge is nearer still
           const g = gridStep(s.view.scale);
           const d = delta;
           const moved = mode.corners.map((c): Vec2 => [c[0] + d[0], c[1] + d[1]]);
           const r = snapCorners(moved, { bodies: stores.scene.getState().bodies, grid: g, tolerance: tolerance(), exclude: mode.exclude });
-          delta = r ? [d[0] + r.point[0] - r.from[0], d[1] + r.point[1] - r.from[1]] : [snapTo(d[0], g), snapTo(d[1], g)];
-          interaction.setState({ snap: r ? { point: r.point, kind: r.kind, body: r.body, edge: r.edge } : null });
+          const far = Math.hypot(d[0], d[1]);
+          const caught = r && (far > tolerance() || Math.hypot(r.point[0] - r.from[0], r.point[1] - r.from[1]) < far) ? r : null;
+          delta = caught ? [d[0] + caught.point[0] - caught.from[0], d[1] + caught.point[1] - caught.from[1]] : far <= tolerance() ? [0, 0] : [snapTo(d[0], g), snapTo(d[1], g)];
+          interaction.setState({ snap: caught ? { point: caught.point, kind: caught.kind, body: caught.body, edge: caught.edge } : null });
         } else interaction.setState({ snap: null });
         mode.last = moveElement({ ids: mode.ids, delta, lookup: valueOf }) as Command<unknown>;
         s.updateGesture(mode.last);
         return;
       }
       case "rotate": {
+        if (!mode.moved && !pastThreshold(screen)) return;
+        mode.moved = true;
         const v: Vec2 = [world[0] - mode.anchor[0], world[1] - mode.anchor[1]];
         if (Math.hypot(v[0], v[1]) < 1e-9) return;
         markInput(e.timeStamp);
-        let a = angleOf(v) + (mode.flip ? 180 : 0);
+        const pointed = angleOf(v) + (mode.flip ? 180 : 0);
+        // from the direction it had, by as much as the pointer has turned about the anchor
+        let a = Number.isFinite(mode.from) ? mode.from + normaliseAngle(pointed - mode.grip) : pointed;
+        if (!e.altKey && Number.isFinite(mode.from) && Math.abs(normaliseAngle(a - mode.from)) < ANGLE_KEEP) {
+          // still near where it began: the direction as it was (typed, or an expression)
+          s.updateGesture([]);
+          return;
+        }
         a = e.altKey ? Math.round(a * 10) / 10 : Math.round(a / ANGLE_STEP) * ANGLE_STEP;
         s.updateGesture(rotateElement({ id: mode.id, angle: a, magnitude: mode.magnitude }) as Command<unknown>);
         return;
       }
       case "corner": {
-        const r = snap(world, e, new Set([mode.id]));
+        if (!mode.moved && !pastThreshold(screen)) return;
+        mode.moved = true;
+        // the corner follows the pointer's move (not the pointer's spot on the handle)
+        const p: Vec2 = [mode.origin[0] + world[0] - mode.start[0], mode.origin[1] + world[1] - mode.start[1]];
+        const r = snap(p, e, new Set([mode.id]), undefined, mode.origin);
         interaction.setState({ snap: r.kind === "none" ? null : r });
         markInput(e.timeStamp);
-        s.updateGesture(reshapeBody({ id: mode.id, corner: mode.index, to: r.point, keepRectangle: !e.shiftKey }) as Command<unknown>);
+        if (same(r.point, mode.origin)) s.updateGesture([]);
+        else s.updateGesture(reshapeBody({ id: mode.id, corner: mode.index, to: r.point, keepRectangle: !e.shiftKey }) as Command<unknown>);
         return;
       }
       case "cg": {
+        if (!mode.moved && !pastThreshold(screen)) return;
+        mode.moved = true;
         const p: Vec2 = [mode.origin[0] + world[0] - mode.start[0], mode.origin[1] + world[1] - mode.start[1]];
-        const r = snap(p, e);
+        const r = snap(p, e, undefined, undefined, mode.origin);
         markInput(e.timeStamp);
-        s.updateGesture(moveCentreOfGravity({ id: mode.id, to: r.point }) as Command<unknown>);
+        if (same(r.point, mode.origin)) s.updateGesture([]);
+        else s.updateGesture(moveCentreOfGravity({ id: mode.id, to: r.point }) as Command<unknown>);
         return;
       }
       case "underlay":
@@ -347,7 +387,8 @@ export function createPointerController(deps: PointerDeps) {
     interaction.setState({ snap: null });
     switch (m.kind) {
       case "move": {
-        if (!m.moved) {
+        // not moved, or back where it began: nothing to attach, no undo step
+        if (!m.moved || s.sketch === s.gesture?.origin) {
           s.cancelGesture();
           return;
         }

@@ -22,7 +22,7 @@ import { useShortcuts } from "@/components/editor/useShortcuts";
 import { ActionContextCtx } from "@/components/editor/useActions";
 import { Tray } from "@/components/editor/Tray";
 import { TRAY_MIME } from "@/canvas/konva/interaction";
-import { measuredAs, stage } from "./canvas-support";
+import { measuredAs, mouseOn, stage } from "./canvas-support";
 
 /** A frame on a pad, with one of each directed element (invented demo data). */
 function frame(): SketchFile {
@@ -107,21 +107,7 @@ const ed = () => editor.getState();
 const el = (id: string) => findElement(ed().sketch, id)!.el as unknown as Record<string, unknown>;
 const screenOf = (p: Vec2) => toScreen(ed().view, p);
 
-function press(at: Vec2, extra: MouseEventInit = {}) {
-  act(() => {
-    container.dispatchEvent(new MouseEvent("pointerdown", { clientX: at[0], clientY: at[1], button: 0, bubbles: true, ...extra }));
-  });
-}
-function moveTo(at: Vec2, extra: MouseEventInit = {}) {
-  act(() => {
-    window.dispatchEvent(new MouseEvent("pointermove", { clientX: at[0], clientY: at[1], bubbles: true, ...extra }));
-  });
-}
-function release(at: Vec2, extra: MouseEventInit = {}) {
-  act(() => {
-    window.dispatchEvent(new MouseEvent("pointerup", { clientX: at[0], clientY: at[1], bubbles: true, ...extra }));
-  });
-}
+const { press, moveTo, release } = mouseOn(() => container);
 
 /** The turn handle of the selected element, where it is drawn on screen. */
 async function turnHandle(id: string): Promise<Vec2> {

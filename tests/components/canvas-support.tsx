@@ -1,5 +1,5 @@
 // The Konva canvas under jsdom (vitest-canvas-mock), for the tests that read what it drew.
-import { render, waitFor } from "@testing-library/react";
+import { act, render, waitFor } from "@testing-library/react";
 import Konva from "konva";
 import { expect, vi } from "vitest";
 import { createEditorStore } from "@/canvas/store";
@@ -7,6 +7,7 @@ import { EditorProvider } from "@/canvas/context";
 import { createInteractionStore } from "@/canvas/konva/interaction";
 import SketchCanvas from "@/canvas/konva/SketchCanvas";
 import type { SketchFile } from "@/solver/schema";
+import type { Vec2 } from "@/solver/types";
 import "./editor-helpers";
 
 export const stage = () => Konva.stages[Konva.stages.length - 1];
@@ -38,4 +39,20 @@ export async function onCanvas(sketch: SketchFile) {
   );
   await waitFor(() => expect(container.querySelector("canvas")).not.toBeNull());
   return editor;
+}
+
+/**
+ * A mouse on the canvas at screen points, as the browser sends a drag: the press on the canvas's
+ * container (`canvas()`, read at each press), the moves and the release on the window.
+ */
+export function mouseOn(canvas: () => HTMLElement) {
+  const send = (target: EventTarget, type: string, at: Vec2, extra: MouseEventInit) =>
+    act(() => {
+      target.dispatchEvent(new MouseEvent(type, { clientX: at[0], clientY: at[1], bubbles: true, ...extra }));
+    });
+  return {
+    press: (at: Vec2, extra: MouseEventInit = {}) => send(canvas(), "pointerdown", at, { button: 0, ...extra }),
+    moveTo: (at: Vec2, extra: MouseEventInit = {}) => send(window, "pointermove", at, extra),
+    release: (at: Vec2, extra: MouseEventInit = {}) => send(window, "pointerup", at, extra),
+  };
 }

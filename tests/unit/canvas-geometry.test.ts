@@ -42,6 +42,17 @@ describe("snapping", () => {
     expect(snapPoint([1.23, 0.03], { bodies, grid: 0.1, tolerance: 0.08 })).toMatchObject({ kind: "edge", point: [1.2, 0], edge: 0 });
     expect(snapPoint([3.26, 2.04], { bodies, grid: 0.1, tolerance: 0.08 })).toMatchObject({ kind: "grid", point: [3.3, 2] });
   });
+  it("keeps where the dragged point began while the pointer is near it: before the grid, the grid along an edge, and a farther corner", () => {
+    const o = { bodies, grid: 0.1, tolerance: 0.08 };
+    // typed at (3.27, 2.04): a wobble of 0.05 leaves it there; 0.09 away the grid has it
+    expect(snapPoint([3.3, 2.0], { ...o, keep: [3.27, 2.04] })).toEqual({ point: [3.27, 2.04], kind: "none" });
+    expect(snapPoint([3.36, 2.0], { ...o, keep: [3.27, 2.04] })).toMatchObject({ kind: "grid", point: [3.4, 2] });
+    // on the bottom edge at x = 1.23: still on the edge (the mark says so), not moved to 1.2
+    expect(snapPoint([1.25, -0.03], { ...o, keep: [1.23, 0] })).toEqual({ point: [1.23, 0], kind: "edge", body: "b1", edge: 0 });
+    // typed 0.05 off the corner (2, 0): nearer the typed place it stays; nearer the corner it goes there
+    expect(snapPoint([1.95, 0.06], { ...o, keep: [1.95, 0.05] })).toEqual({ point: [1.95, 0.05], kind: "none" });
+    expect(snapPoint([1.99, 0.01], { ...o, keep: [1.95, 0.05] })).toMatchObject({ kind: "corner", point: [2, 0] });
+  });
   it("is off while the key is held, and ignores the body being dragged", () => {
     expect(snapPoint([1.97, 0.04], { bodies, grid: 0.1, tolerance: 0.08, enabled: false })).toEqual({ point: [1.97, 0.04], kind: "none" });
     expect(snapPoint([1.97, 0.04], { bodies, grid: 0.1, tolerance: 0.08, exclude: new Set(["b1"]) }).kind).toBe("grid");
