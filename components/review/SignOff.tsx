@@ -8,7 +8,7 @@ import { Button, Notice } from "@/components/shell/controls";
 import { Dialog } from "@/components/versions/Dialog";
 import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, ApiError } from "@/lib/api-client";
-import { decideSignOff, SIGN_OFF_RULES, SIGN_OFF_STEPS, STATE_WORDS, STEP_RECORD, type ReviewState, type SignOffStep } from "@/lib/review/rules";
+import { decideSignOff, noteForOpenThreads, SIGN_OFF_RULES, SIGN_OFF_STEPS, STATE_WORDS, STEP_RECORD, type OpenThreads, type ReviewState, type SignOffStep } from "@/lib/review/rules";
 import type { Role } from "@/lib/roles";
 
 export type TitleBlockEntry = { name: string; date: string };
@@ -24,6 +24,8 @@ export type SignOffData = {
   approval?: { reason: string; remedy: string | null; membersPath: string } | null;
   /** the reader's part in this version */
   you?: { role: Role; isAuthor: boolean; isChecker: boolean };
+  /** open comment threads per version of the sketch (not approved ones; this one too): a check or an approval over them needs a note */
+  openThreads?: OpenThreads;
 };
 
 /**
@@ -109,8 +111,26 @@ export function TitleBlock({ block, state }: { block: SignOffData["titleBlock"];
 const SUPERSEDED_STEP: Partial<Record<SignOffStep, string>> = { check: "marking a superseded version checked", approve: "approving a superseded version" };
 const SUPERSEDED_ACT: Partial<Record<SignOffStep, string>> = { check: "this check", approve: "this approval" };
 
-function StepDialog({ step, path, concerns, newer, onClose, onDone }: { step: SignOffStep; path: string; concerns: readonly string[]; newer?: number | null; onClose: () => void; onDone: () => void }) {
+function StepDialog({
+  step,
+  path,
+  concerns,
+  newer,
+  unanswered,
+  onClose,
+  onDone,
+}: {
+  step: SignOffStep;
+  path: string;
+  concerns: readonly string[];
+  newer?: number | null;
+  /** `noteForOpenThreads`: the step needs a note, as comment threads are still open */
+  unanswered: string | null;
+  onClose: () => void;
+  onDone: () => void;
+}) {
   const rule = SIGN_OFF_RULES[step];
+  const noteRequired = rule.noteRequired || unanswered !== null;
   const [note, setNote] = useState("");
   const take = useMutation({ mutationFn: () => apiFetch(path, { method: "POST", body: { step, ...(note.trim() ? { note: note.trim() } : {}) } }), onSuccess: onDone });
   const err = take.error instanceof ApiError ? take.error : null;
@@ -147,8 +167,17 @@ function StepDialog({ step, path, concerns, newer, onClose, onDone }: { step: Si
             You are {SUPERSEDED_STEP[step]}: v{newer} was saved after it, and {SUPERSEDED_ACT[step]} does not carry over to v{newer}.
           </p>
         ) : null}
+        {unanswered ? (
+          <p className="rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-[13px] text-ink" data-testid="signoff-open-threads" role="note">
+            {unanswered}
+          </p>
+        ) : null}
         <label htmlFor="signoff-note" className="block text-sm font-medium text-ink">
-          {findings ? "Why it stands despite the above (optional; kept in the sign-off record)" : prompt[step]}
+          {unanswered
+            ? "Why it stands with the open threads (required; kept in the sign-off record)"
+            : findings
+              ? "Why it stands despite the above (optional; kept in the sign-off record)"
+              : prompt[step]}
         </label>
         <textarea
           id="signoff-note"
@@ -163,7 +192,7 @@ function StepDialog({ step, path, concerns, newer, onClose, onDone }: { step: Si
           <Button type="button" tone="quiet" onClick={onClose}>
             Cancel
           </Button>
-          <Button type="submit" busy={take.isPending} disabled={rule.noteRequired && !note.trim()}>
+          <Button type="submit" busy={take.isPending} disabled={noteRequired && !note.trim()}>
             {rule.label}
           </Button>
         </div>
@@ -173,7 +202,8 @@ function StepDialog({ step, path, concerns, newer, onClose, onDone }: { step: Si
 }
 
 /** `concerns`: what the version's own results say its author, checker or approver must not miss (a case not held, a factor of safety short). */
-export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: SignOffData; path: string; concerns?: readonly string[]; onChanged: () => void }) {
+/** `number`: the version signed off (its open threads are told apart from other versions'). */
+export function SignOffPanel({ data, path, number, concerns = [], onChanged }: { data: SignOffData; path: string; number: number; concerns?: readonly string[]; onChanged: () => void }) {
   const [step, setStep] = useState<SignOffStep | null>(null);
   const qc = useQueryClient();
   const why = whyNoStep(data);
@@ -226,6 +256,7 @@ export function SignOffPanel({ data, path, concerns = [], onChanged }: { data: S
           path={path}
           concerns={concerns}
           newer={data.newer}
+          unanswered={noteForOpenThreads(step, data.openThreads ?? [], number)}
           onClose={() => setStep(null)}
           onDone={() => {
             setStep(null);

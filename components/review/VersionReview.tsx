@@ -148,7 +148,8 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   const refresh = () => void qc.invalidateQueries({ queryKey: apiKey(`/api/sketches/${sketchId}`) });
   // what the version's own results say: a body not held, a slip, a factor of safety short
   const results = useMemo(() => (doc ? versionConcerns(doc, units, family?.force) : []), [doc, units, family]);
-  const concerns = withOpenThreads(results, comments.data?.threads ?? [], comments.data?.earlierOpen ?? []);
+  // open threads on this and the other versions, as the sign-off reads them (refreshed with every comment change)
+  const concerns = withOpenThreads(results, signoff.data?.openThreads ?? [], number);
 
   if (version.isError) return <Notice tone="error">{version.error instanceof ApiError ? version.error.message : "The version could not be loaded."}</Notice>;
   const v = version.data?.version;
@@ -250,7 +251,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
       </div>
 
       <Panel title="Sign-off" description="Prepared by one engineer, checked by another, approved by an owner.">
-        {signoff.data ? <SignOffPanel data={signoff.data} path={`${base}/signoff`} concerns={concerns} onChanged={refresh} /> : <Skeleton className="h-24 w-full" />}
+        {signoff.data ? <SignOffPanel data={signoff.data} path={`${base}/signoff`} number={number} concerns={concerns} onChanged={refresh} /> : <Skeleton className="h-24 w-full" />}
       </Panel>
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">

@@ -10,6 +10,7 @@ import { asDrawnOfDocument, solveDocument, studyOfDocument } from "@/lib/review/
 import type { StudyResult } from "@/solver/cases";
 import { caseFindings, nameIn, stateWord } from "@/solver/report";
 import { statusSentences } from "@/components/results/statusSentence";
+import type { OpenThreads } from "@/lib/review/rules";
 
 /** `doc`: a sketch file as saved (any format version; it is read as the CLI reads it). `units` and
  *  `forceUnit`: the page's, so a force in a finding reads as in the tables beside it and on the
@@ -69,21 +70,28 @@ function notSolved(parsed: ParseResult): string[] {
   return parsed.ok ? [] : [`The sketch does not solve: ${parsed.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`];
 }
 
-/** The results' concerns and, when threads are still open on the version (or on earlier versions
- *  that were not approved), how many: a question not yet answered is said before a check or an
- *  approval too. */
-export function withOpenThreads(
-  concerns: string[],
-  threads: ReadonlyArray<{ resolvedAt: string | null }>,
-  earlier: ReadonlyArray<{ number: number; open: number }> = [],
-): string[] {
+/** The results' concerns and, when comment threads are still open on the version or on other
+ *  versions of the sketch that are not approved (`openThreads`, as the sign-off reads them), how
+ *  many and where: a question not yet answered is said before a check or an approval, which then
+ *  needs a note (`noteForOpenThreads`). */
+export function withOpenThreads(concerns: string[], openThreads: OpenThreads, number: number): string[] {
   const out = [...concerns];
-  const open = threads.filter((t) => !t.resolvedAt).length;
-  if (open) out.push(`${open} open comment thread${open === 1 ? "" : "s"} on this version: answer or resolve ${open === 1 ? "it" : "them"} first, or say why not`);
-  const before = earlier.reduce((n, e) => n + e.open, 0);
-  if (before)
-    out.push(
-      `${before} comment thread${before === 1 ? "" : "s"} still open on ${earlier.length === 1 ? "an earlier version" : "earlier versions"} (${earlier.map((e) => `v${e.number}`).join(", ")}): resolve ${before === 1 ? "it" : "them"} there if this version settles ${before === 1 ? "it" : "them"}, or say why not`,
-    );
+  const here = openThreads.find((v) => v.number === number)?.open ?? 0;
+  if (here) out.push(`${here} open comment thread${here === 1 ? "" : "s"} on this version: answer or resolve ${here === 1 ? "it" : "them"} first, or say why not`);
+  const say = (list: OpenThreads, [one, many]: [string, string], what: (n: number) => string) => {
+    const n = list.reduce((sum, v) => sum + v.open, 0);
+    if (n) out.push(`${n} comment thread${n === 1 ? "" : "s"} still open on ${list.length === 1 ? one : many} (${list.map((v) => `v${v.number}`).join(", ")}): ${what(n)}`);
+  };
+  const them = (n: number) => (n === 1 ? "it" : "them");
+  say(
+    openThreads.filter((v) => v.number < number && v.open > 0),
+    ["an earlier version", "earlier versions"],
+    (n) => `resolve ${them(n)} there if this version settles ${them(n)}, or say why not`,
+  );
+  say(
+    openThreads.filter((v) => v.number > number && v.open > 0),
+    ["a later version", "later versions"],
+    (n) => `asked of the drawing as it went on; if ${n === 1 ? "it applies" : "they apply"} to this version too, resolve ${them(n)} or say why not`,
+  );
   return out.length === concerns.length ? concerns : out;
 }

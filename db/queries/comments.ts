@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, eq, exists, inArray, isNull, lt, ne, or } from "drizzle-orm";
+import { and, asc, count, eq, exists, inArray, isNull, ne, or } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { comment, membership, sketch, sketchVersion, user, type CommentPin } from "@/db/schema";
@@ -52,27 +52,32 @@ export async function listVersionComments(versionId: string, viewerId: string): 
 const reply = alias(comment, "reply");
 
 /**
- * Open threads on the sketch's versions before `number`, per version, oldest first: threads whose
- * first comment stands (or has replies), not resolved, on a version that is not approved (an
- * approved version's threads are locked and its approval stands).
+ * Open threads on the sketch's versions, per version, oldest first: threads whose first comment
+ * stands (or has replies), not resolved, on a version that is not approved (an approved version's
+ * threads are locked and its approval stands). What a check or an approval must answer for
+ * (`noteForOpenThreads`, `lib/review/rules.ts`).
  */
-export async function openThreadsBefore(sketchId: string, number: number): Promise<Array<{ number: number; open: number }>> {
-  return db
+export async function openThreadsOnSketch(sketchId: string, tx: DbOrTx = db): Promise<Array<{ number: number; open: number }>> {
+  return tx
     .select({ number: sketchVersion.number, open: count() })
     .from(comment)
     .innerJoin(sketchVersion, eq(sketchVersion.id, comment.versionId))
     .where(
       and(
         eq(sketchVersion.sketchId, sketchId),
-        lt(sketchVersion.number, number),
         ne(sketchVersion.reviewState, "approved"),
         isNull(comment.parentId),
         isNull(comment.resolvedAt),
-        or(isNull(comment.deletedAt), exists(db.select({ one: reply.id }).from(reply).where(eq(reply.parentId, comment.id)))),
+        or(isNull(comment.deletedAt), exists(tx.select({ one: reply.id }).from(reply).where(eq(reply.parentId, comment.id)))),
       ),
     )
     .groupBy(sketchVersion.number)
     .orderBy(asc(sketchVersion.number));
+}
+
+/** The open threads (as `openThreadsOnSketch`) on the sketch's versions before `number`. */
+export async function openThreadsBefore(sketchId: string, number: number): Promise<Array<{ number: number; open: number }>> {
+  return (await openThreadsOnSketch(sketchId)).filter((v) => v.number < number);
 }
 
 /**

@@ -44,6 +44,9 @@ export type SignOffRule = {
   notChecker: boolean;
   /** a note is required (the reason of a return or a withdrawal) */
   noteRequired: boolean;
+  /** a note is required while comment threads are open on the sketch (`noteForOpenThreads`): a
+   *  signature given over an unanswered question says why it stands */
+  noteWhenThreadsOpen: boolean;
   /** only the sketch's latest version may take it (a superseded version is not put forward) */
   latestOnly?: boolean;
   /** reasons of refusal, for people */
@@ -60,6 +63,7 @@ export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
     author: "also",
     notChecker: false,
     noteRequired: false,
+    noteWhenThreadsOpen: false,
     latestOnly: true,
     refused: {
       role: "Submitting is for the version's author, editors and owners.",
@@ -76,6 +80,7 @@ export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
     author: "never",
     notChecker: false,
     noteRequired: false,
+    noteWhenThreadsOpen: true,
     refused: {
       role: "Checking is for checkers and owners.",
       author: "You prepared this version: someone else must check it.",
@@ -91,6 +96,7 @@ export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
     author: "never",
     notChecker: false,
     noteRequired: true,
+    noteWhenThreadsOpen: false,
     refused: {
       role: "Returning a version is for checkers and owners.",
       author: "You prepared this version: someone else must check it.",
@@ -106,6 +112,7 @@ export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
     author: "never",
     notChecker: true,
     noteRequired: false,
+    noteWhenThreadsOpen: true,
     refused: {
       role: "Approval is for owners of the workspace.",
       author: "You prepared this version: another owner must approve it.",
@@ -122,6 +129,7 @@ export const SIGN_OFF_RULES: Record<SignOffStep, SignOffRule> = {
     author: "as role",
     notChecker: false,
     noteRequired: true,
+    noteWhenThreadsOpen: false,
     refused: {
       role: "Withdrawing an approval is for owners of the workspace.",
       state: (s) => `Only an approved version can have its approval withdrawn; this one is ${STATE_WORDS[s].label}.`,
@@ -167,4 +175,32 @@ export function decideSignOff({ step, role, isAuthor, isChecker, state, newer }:
 /** The steps this person may take on the version now (for the buttons). */
 export function allowedSteps(input: Omit<SignOffInput, "step">): SignOffStep[] {
   return SIGN_OFF_STEPS.filter((step) => decideSignOff({ ...input, step }).ok);
+}
+
+/** Open comment threads per version of a sketch (`openThreadsOnSketch`: versions not approved). */
+export type OpenThreads = ReadonlyArray<{ number: number; open: number }>;
+
+function threads(n: number): string {
+  return `${n} comment thread${n === 1 ? "" : "s"}`;
+}
+
+/** "2 on this version, 1 on v1 and 1 on v4": where the open threads are, said from version `number`. */
+export function openThreadsWhere(open: OpenThreads, number: number): string {
+  const parts = open.filter((v) => v.open > 0).map((v) => (v.number === number ? `${v.open} on this version` : `${v.open} on v${v.number}`));
+  return parts.length <= 1 ? (parts[0] ?? "") : `${parts.slice(0, -1).join(", ")} and ${parts[parts.length - 1]}`;
+}
+
+/**
+ * Why a step on version `number` needs a note it was not given, or null: a check or an approval
+ * (`noteWhenThreadsOpen`) while comment threads are still open on any version of the sketch that
+ * is not approved — this one, an earlier one (a question asked of v1 stands until answered) or a
+ * later one (asked of the drawing as it went on). The same words on the server (the refusal) and
+ * in the dialog (the label of the note box).
+ */
+export function noteForOpenThreads(step: SignOffStep, open: OpenThreads, number: number): string | null {
+  if (!SIGN_OFF_RULES[step].noteWhenThreadsOpen) return null;
+  const total = open.reduce((n, v) => n + v.open, 0);
+  if (!total) return null;
+  const what = step === "approve" ? "approved" : "checked";
+  return `${threads(total)} ${total === 1 ? "is" : "are"} still open (${openThreadsWhere(open, number)}): resolve ${total === 1 ? "it" : "them"}, or say in the note why the version stands ${what} with ${total === 1 ? "it" : "them"} open.`;
 }

@@ -1,6 +1,6 @@
 import "server-only";
 import { db } from "@/db";
-import { workspaceContacts, type MemberContact } from "@/db/queries/comments";
+import { openThreadsOnSketch, workspaceContacts, type MemberContact } from "@/db/queries/comments";
 import { applySignOff, getVersionAccess, listSignOffs, titleBlockOf, type VersionAccess } from "@/db/queries/review";
 import { lockRole } from "@/db/queries/sketches";
 import { recordAudit } from "../audit";
@@ -9,7 +9,7 @@ import { AppError } from "../errors";
 import { sendMailInBackground } from "../mail";
 import { can } from "../roles";
 import { signOffMail } from "./mail";
-import { allowedSteps, decideSignOff, newerThan, SIGN_OFF_RULES, SIGN_OFF_STEPS, STATE_WORDS, type SignOffStep } from "./rules";
+import { allowedSteps, decideSignOff, newerThan, noteForOpenThreads, SIGN_OFF_RULES, SIGN_OFF_STEPS, STATE_WORDS, type SignOffStep } from "./rules";
 
 type Actor = { id: string; email: string; name: string };
 
@@ -23,7 +23,7 @@ export function versionUrl(workspaceId: string, sketchId: string, number: number
 export async function readSignOff(sketchId: string, number: number, viewerId: string) {
   const access = await getVersionAccess(sketchId, number, viewerId);
   if (!access || !access.role || !can(access.role, "sketch.read")) throw new AppError("not_found", NO_VERSION);
-  const entries = await listSignOffs(access.versionId);
+  const [entries, openThreads] = await Promise.all([listSignOffs(access.versionId), openThreadsOnSketch(sketchId)]);
   const contacts = await workspaceContacts(access.workspaceId, db, access.authorId ? [access.authorId] : []);
   const authorName = contacts[0]?.name ?? "a deleted account";
   const isAuthor = access.authorId === viewerId;
@@ -39,6 +39,8 @@ export async function readSignOff(sketchId: string, number: number, viewerId: st
     allowed,
     /** the sketch's latest version, when it is newer than this one */
     newer,
+    /** open comment threads per version of the sketch (versions not approved; this one too): a check or an approval over them needs a note */
+    openThreads,
     /** why an owner may not approve this checked version, and what would let someone approve it (null otherwise) */
     approval: access.reviewState === "checked" && access.role === "owner" && !allowed.includes("approve") ? await approvalRefusal(access, viewerId, isAuthor, isChecker) : null,
   };
@@ -116,6 +118,11 @@ export async function takeSignOffStep(sketchId: string, number: number, actor: A
       const what = input.step === "return" ? "Say what needs to change" : "Give the reason for withdrawing the approval";
       throw new AppError("validation_failed", `${what}.`, { fields: [{ path: "note", message: `${what}.` }] });
     }
+    // a check or an approval over open questions says why it stands (the threads are counted in
+    // the transaction, after the version's lock: a thread resolved a moment ago counts as resolved)
+    const openThreads = rule.noteWhenThreadsOpen && !note ? await openThreadsOnSketch(sketchId, tx) : [];
+    const unanswered = noteForOpenThreads(input.step, openThreads, number);
+    if (unanswered) throw new AppError("validation_failed", unanswered, { fields: [{ path: "note", message: unanswered }], extra: { openThreads } });
     const entry = await applySignOff(tx, { versionId: access.versionId, workspaceId: access.workspaceId, step: input.step, from: access.reviewState, to: decision.to, actor, note });
     if (!entry) throw new AppError("conflict", "The version changed while you were deciding; reload it.");
     await recordAudit(

@@ -233,7 +233,8 @@ describe("an approved version", () => {
     const id = await newSketch();
     const root = (await post(id, chen, { body: "Before approval" })).body.comment.id;
     const step = (who: Person, s: string, note?: string) => call(signoffRoute.POST, { method: "POST", params: p(id), cookie: who.cookie, body: { step: s, note } });
-    for (const [who, s] of [[eddie, "submit"], [chen, "check"], [olivia, "approve"]] as const) expect((await step(who, s)).status).toBe(200);
+    // its thread stays open: the check and the approval say why (a note is required over open threads)
+    for (const [who, s, note] of [[eddie, "submit", undefined], [chen, "check", "The thread is a site note."], [olivia, "approve", "Approved with the site note open."]] as const) expect((await step(who, s, note)).status).toBe(200);
     const refused = [
       await post(id, chen, { body: "After approval" }),
       await post(id, chen, { body: "A reply", parentId: root }),
@@ -280,8 +281,9 @@ describe("threads left open on earlier versions", () => {
   it("leave out an approved version's threads: they are locked and its approval stands", async () => {
     const id = await newSketch();
     await post(id, chen, { body: "Noted for the next revision." });
-    const step = (who: Person, s: string) => call(signoffRoute.POST, { method: "POST", params: p(id), cookie: who.cookie, body: { step: s } });
-    for (const [who, s] of [[eddie, "submit"], [chen, "check"], [olivia, "approve"]] as const) expect((await step(who, s)).status).toBe(200);
+    const step = (who: Person, s: string, note?: string) => call(signoffRoute.POST, { method: "POST", params: p(id), cookie: who.cookie, body: { step: s, note } });
+    // approved over its open thread, with the note that asks for
+    for (const [who, s, note] of [[eddie, "submit", undefined], [chen, "check", "Noted for the next revision."], [olivia, "approve", "The thread is for the next revision."]] as const) expect((await step(who, s, note)).status).toBe(200);
     expect((await saveNext(id, 1)).status).toBe(201);
     expect((await listOf(id, 2)).body.earlierOpen).toEqual([]);
   });

@@ -81,7 +81,9 @@ describe("a version saved on top of one in sign-off", () => {
     expect((await call(sketchRoute.GET, { params: { id: sketchId }, cookie: viewer.cookie })).body.sketch).toMatchObject({ latestVersion: 2, approvedVersion: 1 });
 
     // v2's own round; once approved, the listing names v2 (the newest approved version)
-    for (const [who, s] of [[author, "submit"], [checker, "check"], [owner, "approve"]] as const) expect((await step(sketchId, 2, who, s)).status).toBe(200);
+    // the checker's question on v2 stands open: the check and the approval say why (a note is required over open threads)
+    for (const [who, s, note] of [[author, "submit", undefined], [checker, "check", "The anchor holds at 75°: see the reactions."], [owner, "approve", "Answered by the check note."]] as const)
+      expect((await step(sketchId, 2, who, s, note)).status).toBe(200);
     const after = (await call(sketchesRoute.GET, { params: { id: ws }, cookie: viewer.cookie })).body.items.find((s: Json) => s.id === sketchId);
     expect(after.approvedVersion).toBe(2);
     expect((await signOff(sketchId, 1, viewer)).body.state).toBe("approved");

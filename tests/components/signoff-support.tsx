@@ -6,7 +6,7 @@ import { SignOffPanel, type SignOffData } from "@/components/review/SignOff";
 export function showSignOff(data: SignOffData, concerns?: string[], version = 3) {
   return render(
     <QueryClientProvider client={new QueryClient()}>
-      <SignOffPanel data={data} path={`/api/sketches/s1/versions/${version}/signoff`} concerns={concerns} onChanged={() => {}} />
+      <SignOffPanel data={data} path={`/api/sketches/s1/versions/${version}/signoff`} number={version} concerns={concerns} onChanged={() => {}} />
     </QueryClientProvider>,
   );
 }

@@ -159,7 +159,15 @@ describe("review of a calculation in the browser", () => {
     const owner = pages.owner;
     await owner.goto(review(3));
     await stepButton(owner, "approve").waitFor();
-    await takeStep(owner, "approve");
+    // v2's threads are still open: the approval is not taken without a note saying why it stands
+    await stepButton(owner, "approve").click();
+    const approving = owner.getByTestId("signoff-dialog");
+    expect(await approving.getByTestId("signoff-open-threads").textContent()).toBe(
+      "2 comment threads are still open (2 on v2): resolve them, or say in the note why the version stands approved with them open.",
+    );
+    expect(await approving.locator("button[type=submit]").isDisabled()).toBe(true);
+    await approving.getByRole("button", { name: "Cancel" }).click();
+    await takeStep(owner, "approve", "The drain question stays open for site, as the check says.");
     await owner.locator('[data-review-state="approved"]').first().waitFor();
     expect(await owner.getByTestId("title-block-prepared").textContent()).toContain("Edda Preparer");
     expect(await owner.getByTestId("title-block-checked").textContent()).toContain("Chet Checkley");

@@ -32,25 +32,25 @@ describe("a version's concerns for sign-off", () => {
     expect(versionConcerns(loadFixture("pipe-bend-anchor.json"))).toEqual([]);
   });
 
-  it("open comment threads are named before a check or an approval; resolved ones are not", () => {
-    const threads = [{ resolvedAt: null }, { resolvedAt: "2026-12-01T10:00:00Z" }, { resolvedAt: null }];
-    expect(withOpenThreads(["As drawn: Lifts off at the front jack"], threads)).toEqual([
+  it("open comment threads on this version are named before a check or an approval", () => {
+    expect(withOpenThreads(["As drawn: Lifts off at the front jack"], [{ number: 4, open: 2 }], 4)).toEqual([
       "As drawn: Lifts off at the front jack",
       "2 open comment threads on this version: answer or resolve them first, or say why not",
     ]);
-    expect(withOpenThreads([], [{ resolvedAt: null }])).toEqual(["1 open comment thread on this version: answer or resolve it first, or say why not"]);
-    expect(withOpenThreads([], [{ resolvedAt: "2026-12-01T10:00:00Z" }])).toEqual([]);
+    expect(withOpenThreads([], [{ number: 4, open: 1 }], 4)).toEqual(["1 open comment thread on this version: answer or resolve it first, or say why not"]);
+    expect(withOpenThreads([], [], 4)).toEqual([]);
   });
 
-  it("threads still open on earlier versions are named too, with the versions", () => {
-    expect(withOpenThreads([], [], [{ number: 1, open: 2 }, { number: 3, open: 1 }])).toEqual([
+  it("threads still open on earlier and later versions are named too, with the versions", () => {
+    expect(withOpenThreads([], [{ number: 1, open: 2 }, { number: 3, open: 1 }], 4)).toEqual([
       "3 comment threads still open on earlier versions (v1, v3): resolve them there if this version settles them, or say why not",
     ]);
-    expect(withOpenThreads([], [{ resolvedAt: null }], [{ number: 2, open: 1 }])).toEqual([
+    expect(withOpenThreads([], [{ number: 2, open: 1 }, { number: 4, open: 1 }, { number: 5, open: 3 }], 4)).toEqual([
       "1 open comment thread on this version: answer or resolve it first, or say why not",
       "1 comment thread still open on an earlier version (v2): resolve it there if this version settles it, or say why not",
+      "3 comment threads still open on a later version (v5): asked of the drawing as it went on; if they apply to this version too, resolve them or say why not",
     ]);
-    expect(withOpenThreads(["x"], [], [])).toEqual(["x"]);
+    expect(withOpenThreads(["x"], [], 2)).toEqual(["x"]);
   });
 });
 
