@@ -66,6 +66,11 @@ export function createPointerController(deps: PointerDeps) {
   let polygonLastClick = 0;
   /** touch points down on the canvas (two of them pinch-zoom and pan) */
   const touches = new Map<number, Vec2>();
+  // back to selecting (a click placed, a polygon closed, Escape, the tray): a tool's hover mark
+  // and its snap mark ("on edge") go with the tool, not at the next pointer move
+  const stopToolWatch = stores.editor.subscribe((s, prev) => {
+    if (s.tool !== prev.tool && s.tool.kind === "select" && mode.kind === "idle" && (interaction.getState().hover || interaction.getState().snap)) interaction.setState({ hover: null, snap: null });
+  });
 
   const screenOf = (e: { clientX: number; clientY: number }): Vec2 => {
     const r = deps.container()?.getBoundingClientRect();
@@ -536,6 +541,7 @@ export function createPointerController(deps: PointerDeps) {
   }
 
   function dispose() {
+    stopToolWatch();
     stopWindowDrag();
     stopTouchWatch();
     touches.clear();

@@ -346,6 +346,41 @@ describe("tools", () => {
   });
 });
 
+describe("a tool's marks go with the tool", () => {
+  const hoverAt = (x: number, y: number) => h.controller.hover({ ...screenOf(x, y), altKey: false } as unknown as PointerEvent);
+
+  it("a contact clicked onto an edge leaves no \"on edge\" mark behind once the tool is back to selecting", () => {
+    ed().setTool({ kind: "place", element: "contact" });
+    hoverAt(5.5, 1.03);
+    expect(h.interaction.getState().snap).toMatchObject({ kind: "edge" });
+    down(5.5, 1.03);
+    expect(ed().tool.kind).toBe("select");
+    expect(h.interaction.getState().snap).toBeNull();
+    expect(h.interaction.getState().hover).toBeNull();
+  });
+
+  it("with Shift held the tool stays on for the next one, and so does its mark; Escape takes both away", () => {
+    ed().setTool({ kind: "place", element: "contact" });
+    hoverAt(5.5, 1.03);
+    down(5.5, 1.03, { shiftKey: true });
+    expect(ed().tool.kind).toBe("place");
+    expect(h.interaction.getState().hover).not.toBeNull();
+    h.controller.cancel();
+    expect(h.interaction.getState().snap).toBeNull();
+    expect(h.interaction.getState().hover).toBeNull();
+  });
+
+  it("a polygon closed on its first corner, begun on the left body's corner, leaves no \"corner\" mark there", () => {
+    ed().setTool({ kind: "body", shape: "polygon", points: [] });
+    for (const [x, y] of [[2, 1], [3.4, 1], [2.6, 2]]) down(x, y);
+    hoverAt(2.01, 1.02);
+    expect(h.interaction.getState().snap).toMatchObject({ kind: "corner" });
+    down(2.01, 1.02);
+    expect(ed().tool.kind).toBe("select");
+    expect(h.interaction.getState().snap).toBeNull();
+  });
+});
+
 describe("placing on an outline, and in view", () => {
   const tap = (x: number, y: number) => fingerDown(7, screenOf(x, y));
 
