@@ -59,6 +59,7 @@ export function CompareScreen({
   from,
   to,
   draftTab,
+  draftOpen = false,
   layout: initialLayout = "side",
 }: {
   workspaceId: string;
@@ -68,6 +69,9 @@ export function CompareScreen({
   to: number | "draft";
   /** with `to` "draft": the tab whose kept changes to compare (as "Kept work" offered them) */
   draftTab?: string;
+  /** the changes are still open in the editor tab that opened this one (its save conflict's
+   *  "Compare"): they are looked at here, and brought in or forked there */
+  draftOpen?: boolean;
   /** the drawings side by side or overlaid, as the address says */
   layout?: "side" | "overlay";
 }) {
@@ -131,7 +135,16 @@ export function CompareScreen({
             onChange={setUnits}
             options={UNIT_OPTIONS}
           />
-          {to === "draft" && b.doc ? (
+          {to === "draft" && b.doc && draftOpen ? (
+            <div className="flex flex-wrap items-center gap-2 text-sm" data-testid="draft-open-elsewhere">
+              {b.conflicts.length ? (
+                <p className="basis-full text-[12.5px] text-caution" data-testid="kept-work-conflicts">
+                  You and a later version both changed {b.conflicts.join(", ")}: bringing v{from} in keeps yours there.
+                </p>
+              ) : null}
+              <p className="text-ink-soft">Your changes are still open in the editor tab you came from: go back there to bring v{from} in, or to save them as a fork. Nothing here changes them.</p>
+            </div>
+          ) : to === "draft" && b.doc ? (
             <div className="flex flex-wrap items-center gap-2 text-sm">
               {b.conflicts.length ? (
                 <p className="basis-full text-[12.5px] text-caution" data-testid="kept-work-conflicts">

@@ -14,6 +14,9 @@ const show = (latest: { byYou?: boolean; authorName: string | null }) =>
       base={2}
       latest={{ number: 3, message: "moved the anchor 0.3 m east", createdAt: "2026-12-05T13:38:00.000Z", ...latest }}
       onFork={() => undefined}
+      onStay={() => undefined}
+      compareHref="/workspaces/w1/sketches/s1/compare?from=3&to=draft&draft=t1&open=1"
+      onCompare={() => undefined}
       onReload={() => undefined}
       onKeepEditing={() => undefined}
     />,

@@ -50,4 +50,20 @@ describe("comparing the kept work a tab offered", () => {
     expect(document.body.textContent).toContain("950 kg→1250 kg");
     expect(document.body.textContent).not.toContain("2000 kg");
   });
+
+  it("changes still open in the editor tab that asked (a save conflict's Compare) are looked at here, not brought back or discarded", async () => {
+    kept("editing", "2026-11-30T10:00:00.000Z", "1250 kg");
+    serve();
+    render(
+      <QueryClientProvider client={new QueryClient()}>
+        <CompareScreen workspaceId="w1" sketchId="s1" sketchTitle="Trailer" from={1} to="draft" draftTab="editing" draftOpen />
+      </QueryClientProvider>,
+    );
+    const note = await screen.findByTestId("draft-open-elsewhere");
+    expect(note.textContent).toBe("Your changes are still open in the editor tab you came from: go back there to bring v1 in, or to save them as a fork. Nothing here changes them.");
+    expect(document.body.textContent).toContain("950 kg→1250 kg");
+    expect(screen.queryByRole("link", { name: "Bring my changes back on top of the newest version" })).toBeNull();
+    expect(screen.queryByRole("button", { name: "Discard them" })).toBeNull();
+    expect(window.localStorage.getItem("counterpoise:draft:s1:editing")).not.toBeNull();
+  });
 });

@@ -133,6 +133,11 @@ export function ConflictDialog({
   base,
   latest,
   onFork,
+  onStay,
+  staying = false,
+  stayError = null,
+  compareHref,
+  onCompare,
   onReload,
   onKeepEditing,
 }: {
@@ -140,6 +145,15 @@ export function ConflictDialog({
   base: number;
   latest: LatestVersion;
   onFork: () => void;
+  /** stay in this editor and merge v{latest} into the changes (nothing saved, nothing lost) */
+  onStay: () => void;
+  staying?: boolean;
+  /** why the merge could not be made (nothing here changed) */
+  stayError?: string | null;
+  /** the comparison of v{latest} with the changes, opened in a new tab while this one stays */
+  compareHref: string;
+  /** before the comparison opens: the changes are kept where it reads them */
+  onCompare: () => void;
   onReload: () => void;
   onKeepEditing: () => void;
 }) {
@@ -170,6 +184,31 @@ export function ConflictDialog({
           <li className="rounded-md border border-rule p-3">
             <Button onClick={onFork}>Save as a fork</Button>
             <p className="mt-1.5 text-ink-soft">A new sketch that starts from v{base} and saves your changes as its next version. This sketch stays as it is.</p>
+          </li>
+          <li className="rounded-md border border-rule p-3" data-testid="conflict-stay">
+            <div className="flex flex-wrap items-center gap-x-3 gap-y-2">
+              <Button tone="secondary" onClick={onStay} busy={staying}>
+                Stay and bring v{latest.number} in
+              </Button>
+              <a
+                href={compareHref}
+                target="_blank"
+                rel="noopener"
+                onClick={onCompare}
+                className="rounded font-medium text-ink underline decoration-ink/30 underline-offset-2 outline-none hover:decoration-ink focus-visible:ring-2 focus-visible:ring-accent/40"
+              >
+                Compare v{latest.number} with my changes <span className="sr-only">(opens in a new tab)</span>
+                <span aria-hidden="true"> ↗</span>
+              </a>
+            </div>
+            <p className="mt-1.5 text-ink-soft">
+              You stay here with everything you typed: what v{latest.number} changed since v{base} is merged into your changes (where you both changed a field, yours is kept and named), and the next save goes on top of v{latest.number}. Nothing is saved until you save; Undo takes the merge back out. The comparison opens beside this tab and changes nothing here.
+            </p>
+            {stayError ? (
+              <div className="mt-2" role="alert">
+                <Notice tone="error">{stayError}</Notice>
+              </div>
+            ) : null}
           </li>
           <li className="rounded-md border border-rule p-3">
             <Button tone="secondary" onClick={onReload}>

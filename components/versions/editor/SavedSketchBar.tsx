@@ -20,6 +20,9 @@ import { ConflictDialog, ForkAndSave, SaveDialog, saveVersionRequest, type Lates
 import { reviewNote } from "./reviewNote";
 import { announceSaved, watchSaved, type SavedElsewhere } from "./savedElsewhere";
 import { sameDocument, type SaveFlow } from "./savedPersistence";
+import { mergedHereNotice, mergeOntoNewest } from "./restoreDraft";
+import { replaceSketch } from "@/canvas/commands/fields";
+import type { Command } from "@/canvas/commands/define";
 import { NarrowLabel } from "@/components/editor/NarrowLabel";
 import { CalcSheetLink } from "@/components/versions/CalcSheetLink";
 import { RestoreDialog, type Restored } from "@/components/versions/RestoreDialog";
@@ -30,6 +33,14 @@ const CHIP = "h-7 pointer-coarse:h-10 whitespace-nowrap rounded px-2.5 text-[12.
 const CARD = "rounded-lg border p-3 text-[13px] text-ink shadow-[0_6px_24px_rgb(var(--shade)/0.14)]";
 /** a card's plain button ("Got it", "Stay here", "Discard"…) */
 const CARD_BUTTON = "rounded-md border border-ink/25 bg-paper-card px-2.5 py-1 font-medium hover:border-ink/50";
+
+/** The editor is on the latest version now: a reload opens the latest, not the version once named in the address. */
+function dropVersionFromAddress() {
+  const url = new URL(window.location.href);
+  if (!url.searchParams.has("version")) return;
+  url.searchParams.delete("version");
+  window.history.replaceState(window.history.state, "", url);
+}
 
 /** What the editor says once an older version is the latest again: "v5 is now the latest: a copy of v2." */
 export function latestAgainWords(made: Pick<Restored, "number" | "restoredFrom">): string {
@@ -214,6 +225,10 @@ function Bar({ flow }: { flow: SaveFlow }) {
   const [error, setError] = useState<ApiError | null>(null);
   const [conflict, setConflict] = useState<{ latest: LatestVersion; message: string } | null>(null);
   const [forking, setForking] = useState(false);
+  // the conflict's "stay": v{latest} merged into the changes here (busy, failed, done)
+  const [staying, setStaying] = useState(false);
+  const [stayError, setStayError] = useState<string | null>(null);
+  const [mergedHere, setMergedHere] = useState<string | null>(null);
   // "Make vN the latest again…" on an older version (as on its page): asked, and done
   const [restoring, setRestoring] = useState(false);
   const [madeLatest, setMadeLatest] = useState<Restored | null>(null);
@@ -330,11 +345,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
     const at = made.createdAt ?? new Date().toISOString();
     flow.setState({ base: made.number, baseDoc: doc, lastSaved: { number: made.number, at }, info: { ...info, latest: made.number }, savedElsewhere: undefined });
     announceSaved(info.sketchId, { version: made.number, at });
-    const url = new URL(window.location.href);
-    if (url.searchParams.has("version")) {
-      url.searchParams.delete("version");
-      window.history.replaceState(window.history.state, "", url);
-    }
+    dropVersionFromAddress();
     editor.notify(latestAgainWords(made));
   };
   const settle = (outcome: Parameters<NonNullable<typeof pending>["resolve"]>[0]) => {
@@ -365,6 +376,33 @@ function Bar({ flow }: { flow: SaveFlow }) {
       } else setError(e);
     } finally {
       setBusy(false);
+    }
+  };
+
+  // the conflict's "stay": v{latest}'s changes since the base merged into the work here, as one
+  // undoable step; the editor goes on based on v{latest} (the next save goes on top of it), and
+  // the address stops naming an older version
+  const stayAndMerge = async () => {
+    if (!conflict || !pending) return;
+    const newest = conflict.latest.number;
+    setStaying(true);
+    setStayError(null);
+    try {
+      const editor = stores.editor.getState();
+      const mine = editor.sketch;
+      const merged = await mergeOntoNewest(info.sketchId, base, mine, newest);
+      if (!sameDocument(merged.sketch, mine)) editor.apply(replaceSketch({ sketch: merged.sketch, label: `Bring v${newest} in` }) as Command<unknown>);
+      flow.setState({ base: newest, baseDoc: merged.theirs, info: { ...info, latest: Math.max(info.latest, newest) }, savedElsewhere: undefined });
+      dropVersionFromAddress();
+      const words = mergedHereNotice(newest, base, merged.conflicts);
+      setConflict(null);
+      setMergedHere(words);
+      editor.notify(words);
+      settle({ ok: false, reason: "conflict", message: `Not saved yet: v${newest} is merged into your changes.`, latestVersion: newest });
+    } catch (err) {
+      setStayError(`v${newest} could not be read to merge it (${err instanceof ApiError ? err.message : "no answer from the server"}). Nothing here changed: try again, or choose another way.`);
+    } finally {
+      setStaying(false);
     }
   };
 
@@ -469,12 +507,18 @@ function Bar({ flow }: { flow: SaveFlow }) {
           base={base}
           latest={conflict.latest}
           onFork={() => setForking(true)}
+          onStay={() => void stayAndMerge()}
+          staying={staying}
+          stayError={stayError}
+          compareHref={`/workspaces/${info.workspaceId}/sketches/${info.sketchId}/compare?from=${conflict.latest.number}&to=draft&draft=${encodeURIComponent(tab)}&open=1`}
+          onCompare={() => keepDraft({ sketchId: info.sketchId, tab, baseVersion: base, latestVersion: conflict.latest.number, message: conflict.message, sketch: pending.sketch })}
           onReload={() => {
             keepDraft({ sketchId: info.sketchId, tab, baseVersion: base, latestVersion: conflict.latest.number, message: conflict.message, sketch: pending.sketch });
             leave(`/sketches/${info.sketchId}`);
           }}
           onKeepEditing={() => {
             setConflict(null);
+            setStayError(null);
             stores.editor.getState().notify(`Not saved: v${conflict.latest.number} is newer than the v${base} you are editing. Your changes are still here.`);
             settle({ ok: false, reason: "conflict", message: "Not saved: someone saved a newer version.", latestVersion: conflict.latest.number });
           }}
@@ -559,7 +603,15 @@ function Bar({ flow }: { flow: SaveFlow }) {
           </div>
         </div>
       ) : null}
-      {restored && restoredNotice ? (
+      {mergedHere ? (
+        <div role="status" data-testid="merged-here" className={`${CARD} border-caution/40 bg-caution-soft`}>
+          <p>{mergedHere}</p>
+          <button type="button" onClick={() => setMergedHere(null)} className={`mt-2 ${CARD_BUTTON}`}>
+            Got it
+          </button>
+        </div>
+      ) : null}
+            {restored && restoredNotice ? (
         <div role="status" data-testid="restored-work" className={`${CARD} border-caution/40 bg-caution-soft`}>
           <p>{restoredNotice}</p>
           <button type="button" onClick={() => flow.setState({ restoredNotice: undefined })} className={`mt-2 ${CARD_BUTTON}`}>

@@ -27,10 +27,27 @@ export interface DraftOnNewest {
 export async function draftOnNewest(draft: Draft, newest?: number): Promise<DraftOnNewest> {
   const latest = newest ?? (await apiFetch<SketchResponse>(`/api/sketches/${draft.sketchId}`)).sketch.latestVersion;
   if (draft.baseVersion >= latest) return { sketch: draft.sketch, newest: latest, conflicts: [] };
-  const version = (n: number) => apiFetch<VersionResponse>(`/api/sketches/${draft.sketchId}/versions/${n}`).then((r) => current(r.version.document));
-  const [base, theirs] = await Promise.all([version(draft.baseVersion), version(latest)]);
-  const { sketch, conflicts } = mergeSketch(base, current(draft.sketch), theirs);
+  const { sketch, conflicts } = await mergeOntoNewest(draft.sketchId, draft.baseVersion, draft.sketch, latest);
   return { sketch, newest: latest, conflicts };
+}
+
+/**
+ * Unsaved work made on v{base} with v{newest}'s changes merged in (`mergeSketch`: a field both
+ * changed keeps mine and is named), and v{newest} as saved (what the work is now based on).
+ */
+export async function mergeOntoNewest(sketchId: string, base: number, mine: SketchFile, newest: number): Promise<{ sketch: SketchFile; conflicts: string[]; theirs: SketchFile }> {
+  const version = (n: number) => apiFetch<VersionResponse>(`/api/sketches/${sketchId}/versions/${n}`).then((r) => current(r.version.document));
+  const [baseDoc, theirs] = await Promise.all([version(base), version(newest)]);
+  const { sketch, conflicts } = mergeSketch(baseDoc, current(mine), theirs);
+  return { sketch, conflicts, theirs };
+}
+
+/** What the editor says once v{newest} is merged into the work open in it (the conflict dialog's "stay"). */
+export function mergedHereNotice(newest: number, base: number, conflicts: readonly string[]): string {
+  const head = `v${newest} is merged into your changes: what it changed since v${base} is here too, and the next save goes on top of v${newest}.`;
+  if (!conflicts.length) return `${head} Check, then save. Undo takes the merge back out.`;
+  const named = conflicts.slice(0, 4).join(", ") + (conflicts.length > 4 ? ` and ${conflicts.length - 4} more` : "");
+  return `${head} You and v${newest} both changed ${named}: yours are kept there — check them before saving. Undo takes the merge back out.`;
 }
 
 /** What the editor says once the kept work is back. */

@@ -9,7 +9,7 @@ export const metadata: Metadata = { title: "Compare versions" };
 /** `?from=2&to=3` compares two versions; `?to=draft` compares with the changes kept in this browser
  *  (`&draft=<tab>`: the ones that tab kept, as "Kept work" offered them);
  *  `&drawings=overlay` lays the drawings over each other (the link a colleague is sent shows the same). */
-export default async function ComparePage({ params, searchParams }: { params: Promise<{ id: string; sketchId: string }>; searchParams: Promise<{ from?: string; to?: string; drawings?: string; draft?: string }> }) {
+export default async function ComparePage({ params, searchParams }: { params: Promise<{ id: string; sketchId: string }>; searchParams: Promise<{ from?: string; to?: string; drawings?: string; draft?: string; open?: string }> }) {
   const { id, sketchId } = await params;
   const q = await searchParams;
   const { data } = await loadSketchPage(id, sketchId, `/workspaces/${id}/sketches/${sketchId}/compare`);
@@ -24,5 +24,5 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   }
   // the default comparison of a sketch with one version would be v1 against itself
   if (latest === 1 && to !== "draft") return <NothingToCompare workspaceId={id} sketchId={sketchId} sketchTitle={title} />;
-  return <CompareScreen key={`${from}-${to}`} workspaceId={id} sketchId={sketchId} sketchTitle={title} from={from} to={to} draftTab={typeof q.draft === "string" ? q.draft : undefined} layout={q.drawings === "overlay" ? "overlay" : "side"} />;
+  return <CompareScreen key={`${from}-${to}`} workspaceId={id} sketchId={sketchId} sketchTitle={title} from={from} to={to} draftTab={typeof q.draft === "string" ? q.draft : undefined} draftOpen={q.open === "1"} layout={q.drawings === "overlay" ? "overlay" : "side"} />;
 }
