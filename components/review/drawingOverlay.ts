@@ -152,10 +152,40 @@ export function drawMarks(svg: SVGSVGElement, marks: Record<string, MarkKind>): 
   }
 }
 
-/** Numbered pins: at an element's top-right corner, or at a point of the drawing. */
+/** How far a pin's head stands from its tip (px), and its radius. */
+const PIN_STALK = 18;
+const PIN_HEAD = 11;
+/** The pin's leans, degrees clockwise from upright, in the order tried. */
+const PIN_LEANS = [0, 40, -40, 80, -80, 125, -125, 180];
+
+export type PinHead = { angle: number; x: number; y: number; box: Box };
+
 /**
+ * Where a pin's head goes (drawing pixels), its tip staying on `tip`: upright, else leaning right
+ * or left, further and further, down to hanging: the first lean whose head covers none of `avoid`
+ * (the drawing's labels and values, and the heads placed before), else the one that covers least.
+ * A pin never hides a number of the drawing it could stand clear of.
+ */
+export function placePinHead(tip: readonly [number, number], avoid: readonly Box[]): PinHead {
+  let best: PinHead | null = null;
+  let least = Infinity;
+  for (const angle of PIN_LEANS) {
+    const r = (angle * Math.PI) / 180;
+    const x = Math.round((tip[0] + PIN_STALK * Math.sin(r)) * 10) / 10;
+    const y = Math.round((tip[1] - PIN_STALK * Math.cos(r)) * 10) / 10;
+    const head: PinHead = { angle, x, y, box: { x: x - PIN_HEAD, y: y - PIN_HEAD, width: 2 * PIN_HEAD, height: 2 * PIN_HEAD } };
+    const covered = avoid.reduce((sum, b) => sum + overlap(head.box, b), 0);
+    if (covered === 0) return head;
+    if (covered < least) [best, least] = [head, covered];
+  }
+  return best!;
+}
+
+/**
+ * Numbered pins: at an element's top-right corner, or at a point of the drawing.
  * `anchors`: where each element is (world, m): a support's, load's or port's point, a body's top
  * right corner. A pin stands on it; without one (or the scale) it stands on the element's drawn box.
+ * Its head leans clear of the drawing's words and of the pins before it (`placePinHead`).
  */
 export function drawPins(svg: SVGSVGElement, pins: PinMarker[], scale: number | null, anchors: ReadonlyMap<string, [number, number]> = new Map()): PinSpot[] {
   const group = contentGroup(svg);
@@ -165,6 +195,7 @@ export function drawPins(svg: SVGSVGElement, pins: PinMarker[], scale: number | 
   const shift = /translate\(\s*(-?[\d.]+)[\s,]+(-?[\d.]+)\s*\)/.exec(group.getAttribute("transform") ?? "");
   const [dx, dy] = shift ? [Number(shift[1]), Number(shift[2])] : [0, 0];
   const spots: PinSpot[] = [];
+  const avoid = textBoxes(group);
   for (const p of pins) {
     let at: [number, number] | null = null;
     if ("elementId" in p.at) {
@@ -177,13 +208,20 @@ export function drawPins(svg: SVGSVGElement, pins: PinMarker[], scale: number | 
     } else if (scale) at = [p.at.point[0] * scale, -p.at.point[1] * scale];
     if (!at) continue;
     // drawn only: the button laid over it (ReviewDrawing) is what a keyboard and a screen reader reach
-    const pin = el("g", { "data-thread": p.threadId, transform: `translate(${at[0].toFixed(1)} ${at[1].toFixed(1)})`, style: "cursor:pointer", "aria-hidden": "true" });
-    pin.appendChild(el("path", { d: "M0 0 L-5 -10 A11 11 0 1 1 5 -10 Z", fill: p.resolved ? "#e2dccf" : p.selected ? "#b4462b" : "#1d2329", stroke: "#fbfaf6", "stroke-width": 1.5 }));
-    const n = el("text", { x: 0, y: -18, "text-anchor": "middle", "dominant-baseline": "central", "font-size": 11, "font-weight": 700, fill: p.resolved ? "#3d4650" : "#fbfaf6" });
+    const head = placePinHead(at, avoid);
+    avoid.push(head.box);
+    const hx = Math.round((head.x - at[0]) * 10) / 10;
+    const hy = Math.round((head.y - at[1]) * 10) / 10;
+    const pin = el("g", { "data-thread": p.threadId, "data-lean": head.angle, transform: `translate(${at[0].toFixed(1)} ${at[1].toFixed(1)})`, style: "cursor:pointer", "aria-hidden": "true" });
+    // the pin's shape turns with its lean; its number stays upright in the head
+    pin.appendChild(
+      el("path", { d: "M0 0 L-5 -10 A11 11 0 1 1 5 -10 Z", ...(head.angle ? { transform: `rotate(${head.angle})` } : {}), fill: p.resolved ? "#e2dccf" : p.selected ? "#b4462b" : "#1d2329", stroke: "#fbfaf6", "stroke-width": 1.5 }),
+    );
+    const n = el("text", { x: hx, y: hy, "text-anchor": "middle", "dominant-baseline": "central", "font-size": 11, "font-weight": 700, fill: p.resolved ? "#3d4650" : "#fbfaf6" });
     n.textContent = p.resolved ? `✓${p.n}` : String(p.n);
     pin.appendChild(n);
     g.appendChild(pin);
-    spots.push({ threadId: p.threadId, n: p.n, name: p.name, x: Math.round((dx + at[0]) * 10) / 10, y: Math.round((dy + at[1] - 18) * 10) / 10 });
+    spots.push({ threadId: p.threadId, n: p.n, name: p.name, x: Math.round((dx + head.x) * 10) / 10, y: Math.round((dy + head.y) * 10) / 10 });
   }
   return spots;
 }
