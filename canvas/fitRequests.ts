@@ -5,7 +5,7 @@
 // (no supports yet, or the first solve still running) kept only a guess of room for their arrows.
 import type { SolveResult } from "@/solver/types";
 import type { EditorStores } from "./context";
-import { fitScene, isFitted } from "./geometry/fit";
+import { drawnInFrame, fitScene, isFitted } from "./geometry/fit";
 import { buildScene } from "./scene";
 
 /** A result with reactions to draw (a body on no support solves too, with none). */
@@ -19,7 +19,8 @@ const hasReactions = (r: SolveResult | null): boolean => !!r && Object.keys(r.re
  *
  * And when the first result appears (there were no reactions on screen: no supports yet, or the
  * first solve not back), a view still as a fit left it (`isFitted`: no zoom or pan since) is
- * fitted once more, now with room for the reactions' arrows. Only then, never on a later result,
+ * fitted once more, now with room for the reactions' arrows, if any of what is drawn would
+ * otherwise be cut by the edges or lie under the legend (`drawnInFrame`). Only then, never on a later result,
  * so the drawing does not jump while something is dragged; a first result that comes during a
  * drag (`busy`) is fitted for at the next result after it. Returns the stop.
  */
@@ -37,7 +38,12 @@ export function followFitRequests(stores: EditorStores, busy: () => boolean = ()
     }
     owed = false;
     if (!isFitted(s.view) || !s.sketch.bodies.length) return;
-    s.setView(fitScene(buildScene(s.sketch, a.fieldValues, a), s.viewport.width, s.viewport.height, { result: a.shown, units: s.units }));
+    const scene = buildScene(s.sketch, a.fieldValues, a);
+    const drawn = { result: a.shown, units: s.units };
+    // all of it already in view: the drawing stays where it is (a refit right after the first
+    // support is placed would move the body from under the pointer placing the next)
+    if (drawnInFrame(scene, s.view, s.viewport, drawn)) return;
+    s.setView(fitScene(scene, s.viewport.width, s.viewport.height, drawn));
   };
   const tryFit = () => {
     const s = stores.editor.getState();

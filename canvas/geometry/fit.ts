@@ -89,6 +89,20 @@ export function drawingFrame(view: View, viewport: { width: number; height: numb
   return { x0: 2 - view.x, y0: top - view.y, x1: viewport.width - 2 - view.x, y1: viewport.height - 2 - view.y };
 }
 
+/**
+ * Everything the canvas draws for the scene and its result (symbols, words, the reactions' arrows)
+ * lies inside the drawing area at this view, below the legend: a refit would only move the
+ * drawing under the user's pointer.
+ */
+export function drawnInFrame(scene: Scene, view: View, viewport: { width: number; height: number }, drawn: { result?: SolveResult | null; units?: UnitSystem } = {}): boolean {
+  const frame = drawingFrame(view, viewport, scene.legendRows);
+  if (!frame) return false;
+  const { groups, results } = scenePrims(scene, view.scale, drawn.units ?? "SI", drawn.result ?? null);
+  const p = primsBox([...groups.flatMap((g) => g.prims), ...results]);
+  if (!Number.isFinite(p.minX)) return true;
+  return p.minX >= frame.x0 && p.maxX <= frame.x1 && p.minY >= frame.y0 && p.maxY <= frame.y1;
+}
+
 const fitted = new WeakSet<View>();
 
 /** The canvas's fit to view: one scene, clear of the legend. The view it gives is known as a fit
