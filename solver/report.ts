@@ -7,7 +7,7 @@ import { FOOT_M, G0, LBF_N } from "./constants";
 import { FIELD_UNIT_LABELS, kindOfUnit } from "./expressions";
 import { FIELD_KIND_BY_NAME } from "./resolve";
 import type { ParseResult } from "./parse";
-import type { BodyStability } from "./stability";
+import { pivotWords, type BodyStability } from "./stability";
 import type { SolveResult, Status, Vec2 } from "./types";
 import { formatFigures, formatTiny } from "./quantity";
 import { convert, formatNumber, formatQuantity, prettyUnit, unitsFor, type Quantity, type UnitSystem } from "./units";
@@ -558,6 +558,15 @@ export function designLoadTable(study: StudyResult, system: UnitSystem, scale?: 
 /** The verdict of a stability check that does not apply (its note says why). */
 export const NOT_APPLICABLE = "n/a";
 
+/** The stability table's "tips about" note: the support, or an instant centre with the point it is at, "(0.4000, 1.520) m". */
+function pivotNote(study: Pick<StudyResult, "names">, ot: { about: string; with?: string; pivot: Vec2 }, system: UnitSystem): string {
+  const words = pivotWords(ot, (id) => nameIn(study, id));
+  if (ot.with === undefined) return words;
+  const L = columnUnit("length", system);
+  const coord = (x: number) => handCheckNumber(convert(x, "length", system, L).value);
+  return `${words} at (${coord(ot.pivot[0])}, ${coord(ot.pivot[1])}) ${L}`;
+}
+
 /** Factors of safety with the figures behind them: restoring and overturning moment, or the
  *  friction available and the force that drives sliding. Every number column holds numbers only
  *  (unrounded; a factor without bound is left empty and said in words in the note column), so a
@@ -575,7 +584,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI", sc
       const ot = st.overturning;
       // a check that does not apply: the verdict column stays a verdict ("n/a") and the note says why
       if ("notApplicable" in ot) rows.push([run.name, nameIn(study, body), "overturning", null, null, "", null, null, NOT_APPLICABLE, ot.notApplicable]);
-      else rows.push([run.name, nameIn(study, body), "overturning", inUnit(ot.restoring, "moment", u), inUnit(ot.overturning, "moment", u), u.moment, ...verdict(ot), nameIn(study, ot.about)]);
+      else rows.push([run.name, nameIn(study, body), "overturning", inUnit(ot.restoring, "moment", u), inUnit(ot.overturning, "moment", u), u.moment, ...verdict(ot), pivotNote(study, ot, system)]);
       const sl = st.sliding;
       if ("notApplicable" in sl) rows.push([run.name, nameIn(study, body), "sliding", null, null, "", null, null, NOT_APPLICABLE, sl.notApplicable]);
       else
@@ -608,7 +617,7 @@ export function stabilityTable(study: StudyResult, system: UnitSystem = "SI", sc
     ],
     rows,
     notes: [
-      "Overturning: factor = restoring over overturning moment of the applied loads about the support the body would tip about (a contact, or a pin or roller once the contacts lift off), each load resolved across and along the base it stands on (a weight on a slope restores by W·cos θ and overturns by W·sin θ), each component of a load counted apart.",
+      "Overturning: factor = restoring over overturning moment of the applied loads about the support the body would tip about (a contact, or a pin or roller once the contacts lift off, or the instant centre of two contacts whose lines of action meet, as a wheel climbing a chock turns), each load resolved across and along the base it stands on (a weight on a slope restores by W·cos θ and overturns by W·sin θ), each component of a load counted apart.",
       "Sliding: factor = friction the bearing contacts can give (Σ μ·n) over the tangential force they must resist (|Σ t|). A body that tips is taken as a whole: μ·Σn over |Σt| of all its contacts (μ·W over the sliding force on level ground), when they share one base and one μ.",
     ],
   };
@@ -912,7 +921,7 @@ export function caseFindings(study: StudyResult, hasCases: boolean): string[] {
       const st = run.stability[body];
       for (const [against, check] of [["overturning", st?.overturning], ["sliding", st?.sliding]] as const) {
         if (!check || "notApplicable" in check || check.pass) continue;
-        const about = "about" in check ? ` about ${nameIn(study, check.about)}` : "";
+        const about = "about" in check ? ` about ${pivotWords(check, (id) => nameIn(study, id))}` : "";
         bits.push(`factor of safety against ${against}${about} ${factorWords(check.factor, check.required)}, below the required ${formatNumber(check.required, 4)}`);
       }
       if (bits.length) out.push(`${hasCases ? `${run.name} — ` : ""}${bits.join("; ")}`);

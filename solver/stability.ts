@@ -1,11 +1,13 @@
 // Factors of safety per body (common practice):
 //  - against overturning: the restoring over the overturning moment of the applied loads about
 //    the support the body would tip about (a contact, or a pin or roller once the other
-//    contacts lift), each load resolved across and along the base it stands on (so a weight on
-//    a slope restores by W·cos θ and overturns by W·sin θ, and an inclined jet's two components
-//    count apart) (each such support and each sense of turning is tried; a mode counts only if
-//    every other support lets it happen: other contacts open, nothing bilateral or pulling
-//    holds it), the smallest ratio governs;
+//    contacts lift), or about the instant centre of two contacts or rollers whose lines of
+//    action meet (a wheel that climbs a chock turns about the point where the rear wheel's
+//    normal and the chock's meet, not about either support), each load resolved across and
+//    along the base it stands on (so a weight on a slope restores by W·cos θ and overturns by
+//    W·sin θ, and an inclined jet's two components count apart) (each such support and each
+//    sense of turning is tried; a mode counts only if every other support lets it happen: other
+//    contacts open, nothing bilateral or pulling holds it), the smallest ratio governs;
 //  - against sliding: the friction the bearing contacts can give, Σ μ·n, over the tangential
 //    force they must resist, |Σ t|. Only for bodies held by contacts and ties alone. A body that
 //    tips has no reactions of its own (the ones shown would need a contact to pull), so it is
@@ -18,8 +20,12 @@ import type { BodyResult, ContactSupport, EquationTerm, Reaction, Support, Vec2 
 
 export interface OverturningCheck {
   factor: number;
-  /** the support it would tip about: a contact, or a pin or roller once the contacts lift */
+  /** the support it would tip about: a contact, or a pin or roller once the contacts lift; with
+   *  `with`, the first of two contacts or rollers that stay closed while the body turns about
+   *  their instant centre (`pivot`, where their lines of action meet) */
   about: string;
+  /** the second support of an instant-centre mode (see `about`) */
+  with?: string;
   pivot: Vec2;
   /** turning sense: +1 counter-clockwise, −1 clockwise */
   sense: 1 | -1;
@@ -82,12 +88,25 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
   if (contacts.length === 0) return { notApplicable: "no contacts to tip about" };
   // the pivots: each contact, and each pin or roller (a stand pinned at one edge tips about the
   // pin once its other contacts open: the pin holds it in place, not upright)
-  const pivots = supports.map((s, si) => ({ s, si })).filter(({ s, si }) => s.kind === "pin" || s.kind === "roller" || contacts.some((g) => g.support === si));
+  const pivots: Array<{ s: Support; si: number; P: Vec2; other?: number }> = supports
+    .map((s, si) => ({ s, si, P: s.at }))
+    .filter(({ s, si }) => s.kind === "pin" || s.kind === "roller" || contacts.some((g) => g.support === si));
+  // two contacts (or a contact and a roller, or two rollers) whose lines of action meet: the body
+  // can turn about that point with both staying closed, each sliding along its face (a front wheel
+  // climbing a chock) — a mode no single support's point shows
+  for (let i = 0; i < supports.length; i++) {
+    for (let j = i + 1; j < supports.length; j++) {
+      const a = supports[i];
+      const b = supports[j];
+      if ((a.kind !== "contact" && a.kind !== "roller") || (b.kind !== "contact" && b.kind !== "roller")) continue;
+      const P = linesMeet(a.at, a.angle, b.at, b.angle, L);
+      if (P) pivots.push({ s: a, si: i, P, other: j });
+    }
+  }
   let best: OverturningCheck | null = null;
   let blockedBy: Support | null = null;
   let free = false;
-  for (const { s, si } of pivots) {
-    const P = s.at;
+  for (const { s, si, P, other } of pivots) {
     for (const sense of [1, -1] as const) {
       // rotation about P: displacement of the reference point and scaled turn
       const d = [sense * (P[1] - origin[1]), sense * (origin[0] - P[0]), sense * L];
@@ -97,7 +116,7 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
       const opening: ContactSupport[] = [];
       for (let i = 0; i < springs.length; i++) {
         const sp = springs[i];
-        if (sp.support === si) continue;
+        if (sp.support === si || sp.support === other) continue;
         const v = dot3(sp.g, d);
         const grp = sp.group >= 0 ? groups[sp.group] : null;
         // another contact or tie must open (or stay); a bilateral support must not move at all;
@@ -112,9 +131,10 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
       }
       // about a pin or a roller the body tips only by lifting a contact off (with nothing to
       // lift, it would turn freely: unrestrained, not a tipping mode)
-      if (!valid || (s.kind !== "contact" && opening.length === 0)) continue;
+      // about an instant centre likewise: with nothing lifting, the two supports leave a free turn
+      if (!valid || ((s.kind !== "contact" || other !== undefined) && opening.length === 0)) continue;
       free = true;
-      const n = baseNormal(s.kind === "contact" ? [s] : opening);
+      const n = baseNormal(s.kind === "contact" && other === undefined ? [s] : opening);
       const terms = turningTerms(model, P, sense, n);
       let restoring = 0;
       let overturning = 0;
@@ -125,7 +145,7 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
       if (overturning <= 1e-12 * (restoring + 1)) continue;
       const factor = restoring / overturning;
       if (!best || factor < best.factor) {
-        best = { factor, about: s.id, pivot: [P[0], P[1]], sense, restoring, overturning, terms, required, pass: factor >= required };
+        best = { factor, about: s.id, ...(other === undefined ? {} : { with: supports[other].id }), pivot: [P[0], P[1]], sense, restoring, overturning, terms, required, pass: factor >= required };
       }
     }
   }
@@ -133,6 +153,30 @@ export function overturningCheck(model: BodyModel, required: number): BodyStabil
   // a body free to tip about some support, with no load tending to: say that, not which support
   // blocks the other ways it could turn
   return { notApplicable: blockedBy && !free ? `tipping is prevented by ${supportWords(blockedBy)}` : "no load tends to tip it" };
+}
+
+/**
+ * Where the lines of action through `a` (angle `ta`, degrees) and `b` (angle `tb`) meet, or null when
+ * they are parallel or meet farther than 1000 body sizes `L` away (a turn about so far a point is a
+ * translation, which the sliding check covers).
+ */
+function linesMeet(a: Vec2, ta: number, b: Vec2, tb: number, L: number): Vec2 | null {
+  const ea = direction(ta);
+  const eb = direction(tb);
+  const cross = ea[0] * eb[1] - ea[1] * eb[0];
+  if (Math.abs(cross) < 1e-9) return null;
+  // a + s·ea = b + u·eb  →  s = ((b − a) × eb) / (ea × eb)
+  const s = ((b[0] - a[0]) * eb[1] - (b[1] - a[1]) * eb[0]) / cross;
+  if (Math.abs(s) > 1000 * L) return null;
+  return [a[0] + s * ea[0], a[1] + s * ea[1]];
+}
+
+/**
+ * What an overturning check turns about, in words: the support's name ("the chock"), or for an
+ * instant-centre mode "the instant centre of rear wheel and chock". `nameOf` names a support id.
+ */
+export function pivotWords(check: Pick<OverturningCheck, "about" | "with">, nameOf: (id: string) => string): string {
+  return check.with === undefined ? nameOf(check.about) : `the instant centre of ${nameOf(check.about)} and ${nameOf(check.with)}`;
 }
 
 /**

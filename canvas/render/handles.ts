@@ -12,6 +12,8 @@ export const ROTATE_HANDLE_PX = 66;
 
 /** The farthest a turn handle moves out to clear the element's words (further, it would look detached). */
 const HANDLE_REACH_PX = 120;
+/** The nearest a turn handle comes in to stay in the drawing area (nearer, it sits on the symbol). */
+const HANDLE_NEAR_PX = 30;
 
 /**
  * Where an element's turn handle sits along its direction, and where its angle readout goes: the
@@ -37,12 +39,21 @@ export function handleWords(item: SceneItem, scale: number, units: UnitSystem): 
 /** `handlePlace` from words already measured (`handleWords`). */
 export function placeHandle(boxes: readonly Box[], along: Vec2, keepIn?: Box): { distance: number; readout: Vec2 } {
   const clear = (x0: number, y0: number, x1: number, y1: number) => boxes.every((b) => !(b.x0 < x1 + 2 && x0 - 2 < b.x1 && b.y0 < y1 + 2 && y0 - 2 < b.y1));
+  const clearAt = (t: number) => clear(along[0] * t - 8, along[1] * t - 8, along[0] * t + 8, along[1] * t + 8);
   let distance = ROTATE_HANDLE_PX;
   for (let t = ROTATE_HANDLE_PX; t <= HANDLE_REACH_PX; t += 6) {
-    if (clear(along[0] * t - 8, along[1] * t - 8, along[0] * t + 8, along[1] * t + 8)) {
+    if (clearAt(t)) {
       distance = t;
       break;
     }
+  }
+  // a handle whose centre the legend or the canvas's edge would hide (an element near the top of a
+  // short drawing) comes in along its line, clear of the words where it can be
+  const shown = (t: number) => !keepIn || (along[0] * t >= keepIn.x0 && along[0] * t <= keepIn.x1 && along[1] * t >= keepIn.y0 && along[1] * t <= keepIn.y1);
+  if (!shown(distance)) {
+    const nearer: number[] = [];
+    for (let t = Math.min(distance, ROTATE_HANDLE_PX) - 6; t >= HANDLE_NEAR_PX; t -= 6) if (shown(t)) nearer.push(t);
+    distance = nearer.find(clearAt) ?? nearer[0] ?? distance;
   }
   const h = [along[0] * distance, along[1] * distance];
   // "90°" is about 30 × 12 px: upper right, lower right, upper left, lower left of the handle

@@ -1,7 +1,7 @@
 // The factors of safety as a hand check: every load's moment about the pivot, split into the part
 // that restores and the part that overturns, and every bearing contact's μ·n against the
 // tangential force it carries — so the factor the status quotes can be added up by hand.
-import type { BodyStability } from "@/solver/stability";
+import { pivotWords, type BodyStability } from "@/solver/stability";
 import type { Reaction, Sketch, Support } from "@/solver/types";
 import { supportName } from "./statusSentence";
 
@@ -81,7 +81,7 @@ export function stabilityLines(sketch: Sketch, body: string, reactions: Record<s
     "notApplicable" in o
       ? o
       : {
-          about: `${names.has(o.about) ? supportName(names.get(o.about)!) : o.about}, turning ${o.sense > 0 ? "counter-clockwise" : "clockwise"}`,
+          about: `${pivotWords(o, (id) => (names.has(id) ? supportName(names.get(id)!) : id))}${o.with === undefined ? "" : " (where their lines of action meet)"}, turning ${o.sense > 0 ? "counter-clockwise" : "clockwise"}`,
           lines: o.terms.map((t) => ({ ...t })),
           restoring: o.restoring,
           overturning: o.overturning,

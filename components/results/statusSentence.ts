@@ -6,7 +6,7 @@ import { portDirectionNotes } from "@/solver/ports";
 import { nearestOnOutline, pointInPolygon, polygonDiameter } from "@/solver/geometry";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
 import type { BodyResult, Reaction, Sketch, SolveResult, Support, Vec2 } from "@/solver/types";
-import type { BodyStability } from "@/solver/stability";
+import { pivotWords, type BodyStability } from "@/solver/stability";
 import { tipSlide } from "@/canvas/render/tipSlide";
 import type { SketchFile } from "@/solver/schema";
 import { warningInWords } from "./errorPlace";
@@ -398,7 +398,7 @@ export function stabilitySentence(sketch: Sketch, body: string, st: BodyStabilit
   let pass = true;
   for (const [against, c] of [["overturning", st.overturning], ["sliding", st.sliding]] as const) {
     if ("notApplicable" in c) continue;
-    const about = "about" in c ? ` about ${names.get(c.about) ?? c.about}` : "";
+    const about = "about" in c ? ` about ${pivotWords(c, (id) => names.get(id) ?? id)}` : "";
     const whole = "wholeBody" in c && c.wholeBody ? " (as a whole)" : "";
     const f = factorText(c.factor, c.required);
     // no load tends to turn or slide it: no ratio to write, "∞" tells nobody that

@@ -59,4 +59,20 @@ describe("the turn handle's place", () => {
     const corner = handlePlace(item, [-along[0], -along[1]], SCALE, "SI", { ...keepIn, x1: h[0] + 20 });
     expect(corner.readout).toEqual([-41, 5]);
   });
+
+  it("comes in along its line when the legend would hide it (an element near the top of a short drawing), and no nearer than 30 px", () => {
+    // the contact's handle turned to point straight up (screen y down): 66 px above its anchor
+    const item = itemOf("pump-skid", "rear") as SceneItem & { angle: number };
+    const up: [number, number] = [0, -1];
+    expect(handlePlace(item, up, SCALE, "SI").distance).toBe(ROTATE_HANDLE_PX);
+    // the drawing area begins 40 px above the anchor: the handle comes in to 36 px, inside it
+    const keepIn = { x0: -1000, y0: -40, x1: 1000, y1: 1000 };
+    const placed = handlePlace(item, up, SCALE, "SI", keepIn);
+    expect(placed.distance).toBe(36);
+    expect(-placed.distance).toBeGreaterThanOrEqual(keepIn.y0);
+    // its angle is written inside the area too
+    expect(-placed.distance + placed.readout[1]).toBeGreaterThanOrEqual(keepIn.y0);
+    // with the area's edge 20 px above the anchor there is no room outside the symbol: it stays out where it was
+    expect(handlePlace(item, up, SCALE, "SI", { ...keepIn, y0: -20 }).distance).toBe(ROTATE_HANDLE_PX);
+  });
 });
