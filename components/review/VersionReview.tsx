@@ -30,6 +30,7 @@ import { ReviewDrawing, useSolved, type PickedPin } from "./ReviewDrawing";
 import { pinName } from "./drawingOverlay";
 import { plainText } from "@/lib/review/comment-text";
 import { SignOffPanel, type SignOffData } from "./SignOff";
+import { ForkedFrom, type ForkOrigin } from "@/components/sketches/ForkedFrom";
 import { CalcSheetLink } from "@/components/versions/CalcSheetLink";
 import { RestoreDialog, type Restored } from "@/components/versions/RestoreDialog";
 
@@ -115,7 +116,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
   const comments = useQuery({ queryKey: apiKey(`${base}/comments`), queryFn: () => apiFetch<CommentsData>(`${base}/comments`) });
   // which version of the sketch stands approved: a later revision is not read as carrying its approval
   const sketchPath = `/api/sketches/${sketchId}`;
-  const sketch = useQuery({ queryKey: apiKey(sketchPath), queryFn: () => apiFetch<{ sketch?: { approvedVersion?: number | null; latestVersion?: number } }>(sketchPath) });
+  const sketch = useQuery({ queryKey: apiKey(sketchPath), queryFn: () => apiFetch<{ sketch?: { approvedVersion?: number | null; latestVersion?: number; forkedFrom?: ForkOrigin | null } }>(sketchPath) });
   const approvedVersion = sketch.data?.sketch?.approvedVersion ?? null;
   // the latest as the server says it now (a save since the page was made counts)
   const newest = Math.max(latest, sketch.data?.sketch?.latestVersion ?? latest);
@@ -196,6 +197,8 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
             </Link>
           </div>
         </div>
+        {/* a fork's every version says where the fork came from (the origin's review stays there) */}
+        {sketch.data?.sketch?.forkedFrom ? <ForkedFrom origin={sketch.data.sketch.forkedFrom} /> : null}
         {v ? (
           <p className="flex flex-wrap items-center gap-x-3 text-sm text-ink-soft">
             <StatusMark status={v.status} warnings={v.warnings} />

@@ -15,16 +15,13 @@ import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
 import type { SketchStatus } from "@/lib/sketch-schemas";
 import { ForkDialog, useForkTargets } from "./ForkDialog";
-import { ForkGlyph } from "./ForkGlyph";
+import { ForkedFrom, type ForkOrigin } from "./ForkedFrom";
 import { formatForceCell } from "./format";
 import { useUnitsPreference } from "./useUnitsPreference";
 import { SketchDetailsForm } from "./SketchDetailsForm";
 import { StatusMark } from "./StatusMark";
 
-export type ForkOrigin =
-  | { visible: true; sketchId: string; title: string; workspaceId: string; versionNumber: number }
-  | { visible: false; title: string | null; versionNumber: number }
-  | { visible: false; deleted: true; title: string | null; versionNumber: number | null };
+export { ForkedFrom, type ForkOrigin };
 
 export type SketchData = {
   sketch: {
@@ -46,24 +43,6 @@ export type SketchData = {
   latest: { number: number; status: SketchStatus | null; largestReaction: number | null; warnings: string[]; message: string } | null;
 };
 
-export function ForkedFrom({ origin }: { origin: ForkOrigin }) {
-  if (origin.visible)
-    return (
-      <p className="text-sm text-ink-soft" data-testid="forked-from">
-        <ForkGlyph /> Forked from{" "}
-        <Link href={`/workspaces/${origin.workspaceId}/sketches/${origin.sketchId}`} className="font-medium text-ink underline decoration-rule underline-offset-2 hover:decoration-ink">
-          {origin.title} v{origin.versionNumber}
-        </Link>
-      </p>
-    );
-  const named = `${origin.title ? `“${origin.title}”` : "a sketch"}${origin.versionNumber === null ? "" : ` v${origin.versionNumber}`}`;
-  return (
-    <p className="text-sm text-ink-soft" data-testid="forked-from">
-      <ForkGlyph /> Forked from {named}
-      {"deleted" in origin ? ", a sketch since deleted (this fork keeps its own copy)" : ", in a workspace you are not a member of"}
-    </p>
-  );
-}
 
 export function SketchScreen({ initial }: { initial: SketchData }) {
   const [units] = useUnitsPreference();

@@ -7,7 +7,7 @@ import { ForkedFrom } from "@/components/sketches/SketchScreen";
 describe("ForkedFrom", () => {
   it("links to an origin the reader may see", () => {
     render(<ForkedFrom origin={{ visible: true, sketchId: "s1", title: "Riser bend", workspaceId: "w1", versionNumber: 2 }} />);
-    expect(screen.getByRole("link", { name: "Riser bend v2" }).getAttribute("href")).toBe("/workspaces/w1/sketches/s1");
+    expect(screen.getByRole("link", { name: "Riser bend v2" }).getAttribute("href")).toBe("/workspaces/w1/sketches/s1/versions/2");
   });
 
   it("names an origin in another workspace without a link", () => {
