@@ -152,7 +152,17 @@ function pivotName(c: Context, about: Vec2): string {
   if (near) return supportName(near);
   const L = c.units === "SI" ? "m" : "ft";
   const k = c.units === "SI" ? 1 : 1 / 0.3048;
-  return `the point (${Number((about[0] * k).toPrecision(3))}, ${Number((about[1] * k).toPrecision(3))}) ${L}`;
+  const point = `the point (${Number((about[0] * k).toPrecision(3))}, ${Number((about[1] * k).toPrecision(3))}) ${L}`;
+  // a turn about no support's point is about the instant centre of two that stay closed (a front
+  // wheel climbing a chock turns where the rear wheel's and the chock's lines of action meet): name them
+  const through = c.supports.filter((s) => "angle" in s && lineMisses(s.at, s.angle, about) < 1e-6 * Math.max(1, Math.hypot(about[0], about[1])) && c.result.reactions[s.id]?.state === "bearing");
+  return through.length === 2 ? `${point}, where the lines of action of ${supportName(through[0])} and ${supportName(through[1])} meet` : point;
+}
+
+/** How far the point p lies off the line through `at` at `angle` degrees (m). */
+function lineMisses(at: Vec2, angle: number, p: Vec2): number {
+  const t = (angle * Math.PI) / 180;
+  return Math.abs((p[0] - at[0]) * Math.sin(t) - (p[1] - at[1]) * Math.cos(t));
 }
 
 /** A factor of safety as the order sentence compares it: never with a "<" between two equal-looking numbers. */

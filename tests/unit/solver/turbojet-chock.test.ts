@@ -22,7 +22,7 @@ import { describe, expect, it } from "vitest";
 import { findLimit, parseSketch, solve, solveCases, type OverturningCheck, type SketchFileInput } from "@/solver";
 import { createSweeper } from "@/solver/sweep";
 import { findTippingWith } from "@/solver/limit";
-import { stabilitySentence } from "@/components/results/statusSentence";
+import { stabilitySentence, statusSentences } from "@/components/results/statusSentence";
 import { stabilityLines } from "@/components/results/stabilityCheck";
 import { stabilityTable } from "@/solver/report";
 import { parsed } from "./helpers";
@@ -120,6 +120,10 @@ describe("turbojet cart on a wheel chock, by hand", () => {
     near(fm.about[0], 0.4, 1);
     near(fm.about[1], 0.125 + (chock[0] - 0.4) * tan30, 1);
     expect(fm.about[1]).toBeCloseTo(1.5202, 4);
+    // in words: the point, and which two supports stay closed while it turns
+    expect(statusSentences(parsed(cart("1")), r)[0].headline).toBe(
+      "Tips about the point (0.4, 1.52) m, where the lines of action of the rear wheel and the chock meet — the front wheel would have to pull 479.6 N",
+    );
   });
 
   it("against overturning: the factor about that instant centre, W·1.05 over 0.77017·T — the thrust margin to the limit", () => {
