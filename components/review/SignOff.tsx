@@ -10,6 +10,7 @@ import { formatDateTime } from "@/components/workspaces/format";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { decideSignOff, noteForOpenThreads, SIGN_OFF_RULES, SIGN_OFF_STEPS, STATE_WORDS, STEP_RECORD, type OpenThreads, type ReviewState, type SignOffStep } from "@/lib/review/rules";
 import type { Role } from "@/lib/roles";
+import { withOpenThreads } from "./concerns";
 
 export type TitleBlockEntry = { name: string; date: string };
 export type SignOffData = {
@@ -117,6 +118,7 @@ function StepDialog({
   concerns,
   newer,
   unanswered,
+  threadLines,
   onClose,
   onDone,
 }: {
@@ -126,6 +128,8 @@ function StepDialog({
   newer?: number | null;
   /** `noteForOpenThreads`: the step needs a note, as comment threads are still open */
   unanswered: string | null;
+  /** the findings that speak of open threads (`withOpenThreads`): said once, by `unanswered`, when it is set */
+  threadLines: readonly string[];
   onClose: () => void;
   onDone: () => void;
 }) {
@@ -142,7 +146,8 @@ function StepDialog({
     withdraw: "Why the approval is withdrawn (required)",
   };
   // the findings above ask "or say why not": the box says it is the place for that
-  const findings = (step === "submit" || step === "check" || step === "approve") && concerns.length > 0;
+  const listed = unanswered ? concerns.filter((c) => !threadLines.includes(c)) : concerns;
+  const findings = (step === "submit" || step === "check" || step === "approve") && listed.length > 0;
   return (
     <Dialog open onClose={onClose} title={rule.label} testId="signoff-dialog">
       <form
@@ -156,7 +161,7 @@ function StepDialog({
           <div className="rounded-md border border-caution/40 bg-caution-soft p-3 text-[13px] text-ink" data-testid="signoff-concerns" role="note">
             <p className="font-semibold">Before you {step === "approve" ? "approve" : step === "check" ? "mark it checked" : "submit it (say in the note why it stands)"}, this version shows:</p>
             <ul className="mt-1 list-disc space-y-0.5 pl-5">
-              {concerns.map((c) => (
+              {listed.map((c) => (
                 <li key={c}>{c}</li>
               ))}
             </ul>
@@ -257,6 +262,7 @@ export function SignOffPanel({ data, path, number, concerns = [], onChanged }: {
           concerns={concerns}
           newer={data.newer}
           unanswered={noteForOpenThreads(step, data.openThreads ?? [], number)}
+          threadLines={withOpenThreads([], data.openThreads ?? [], number)}
           onClose={() => setStep(null)}
           onDone={() => {
             setStep(null);

@@ -55,6 +55,17 @@ describe("signing off over open comment threads", () => {
     expect(sent).toEqual([{ step: "check", note: "v1's question is for site; v2's two are answered in their replies." }]);
   });
 
+  it("the threads are said once: the findings keep the results' own, not the open threads again", async () => {
+    const threads = "1 comment thread still open on an earlier version (v1): resolve it there if this version settles it, or say why not";
+    showSignOff(data({ openThreads: [{ number: 1, open: 1 }] }), ["Sliding factor of safety 1.213, below the required 1.5 (as drawn)", threads], 2);
+    await userEvent.setup().click(screen.getByRole("button", { name: "Mark checked" }));
+    const dialog = within(screen.getByTestId("signoff-dialog"));
+    expect(dialog.getByTestId("signoff-concerns").querySelectorAll("li")).toHaveLength(1);
+    expect(dialog.getByTestId("signoff-concerns").textContent).toContain("Sliding factor of safety 1.213");
+    expect(dialog.queryByText(threads)).toBeNull();
+    expect(dialog.getByTestId("signoff-open-threads").textContent).toBe("1 comment thread is still open (1 on v1): resolve it, or say in the note why the version stands checked with it open.");
+  });
+
   it("an approval says so with its own word, a later version's thread counted too", async () => {
     showSignOff(data({ state: "checked", allowed: ["approve"], openThreads: [{ number: 4, open: 1 }] }), [], 3);
     await userEvent.setup().click(screen.getByRole("button", { name: "Approve" }));

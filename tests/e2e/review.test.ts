@@ -150,7 +150,11 @@ describe("review of a calculation in the browser", () => {
     expect(await earlier.textContent()).toBe("Still open on earlier versions: v2 (2 threads). Answer or resolve them there if this version settles them.");
     expect(await earlier.getByRole("link", { name: "v2" }).getAttribute("href")).toBe(`/workspaces/${ws}/sketches/${sketchId}/versions/2#comments`);
     await stepButton(checker, "check").click();
-    expect(await checker.getByTestId("signoff-dialog").textContent()).toContain("2 comment threads still open on an earlier version (v2): resolve them there if this version settles them, or say why not");
+    // said once, and the check is not taken without a note saying why v3 stands with them open
+    expect(await checker.getByTestId("signoff-open-threads").textContent()).toBe(
+      "2 comment threads are still open (2 on v2): resolve them, or say in the note why the version stands checked with them open.",
+    );
+    expect(await checker.getByTestId("signoff-dialog").getByTestId("signoff-concerns").count()).toBe(0);
     await shot(checker, "review-035-earlier-threads");
     await checker.getByTestId("signoff-dialog").getByRole("button", { name: "Cancel" }).click();
     await takeStep(checker, "check", "Friction demand now well inside μ = 0.3; the drain question stays open for site.");
