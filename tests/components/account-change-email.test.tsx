@@ -5,7 +5,6 @@ import { render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: vi.fn(), refresh: vi.fn() }) }));
 const auth = vi.hoisted(() => ({ changeEmail: vi.fn() }));
 vi.mock("@/lib/auth-client", () => ({ authClient: auth }));
 const { ChangeEmailForm } = await import("@/components/auth/AccountForms");

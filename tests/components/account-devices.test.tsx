@@ -5,9 +5,8 @@ import { render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import type { DeviceSession } from "@/lib/account-sessions";
+import { router } from "../support/navigation";
 
-const router = vi.hoisted(() => ({ push: vi.fn(), refresh: vi.fn() }));
-vi.mock("next/navigation", () => ({ useRouter: () => router }));
 const auth = vi.hoisted(() => ({ revokeOtherSessions: vi.fn(), revokeSessions: vi.fn() }));
 vi.mock("@/lib/auth-client", () => ({ authClient: auth }));
 const { DevicesPanel } = await import("@/components/auth/DevicesPanel");

@@ -3,9 +3,8 @@
 import { render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { beforeEach, describe, expect, it, vi } from "vitest";
+import { router } from "../support/navigation";
 
-const router = vi.hoisted(() => ({ push: vi.fn(), refresh: vi.fn() }));
-vi.mock("next/navigation", () => ({ useRouter: () => router }));
 const signOut = vi.hoisted(() => vi.fn());
 vi.mock("@/lib/auth-client", () => ({ authClient: { signOut } }));
 const { AccountMenu } = await import("@/components/shell/AccountMenu");

@@ -3,11 +3,8 @@
 // keyboard or a touch screen never shows, and says what to do instead.
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { render, screen } from "@testing-library/react";
-import { describe, expect, it, vi } from "vitest";
-import type { Member } from "@/components/workspaces/MembersTable";
-
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: vi.fn(), refresh: vi.fn() }) }));
-const { MembersTable } = await import("@/components/workspaces/MembersTable");
+import { describe, expect, it } from "vitest";
+import { MembersTable, type Member } from "@/components/workspaces/MembersTable";
 
 const orla: Member = { userId: "u-owner", name: "Orla Owner", email: "orla@example.com", role: "owner", joinedAt: "2026-11-01T00:00:00Z" };
 const eli: Member = { userId: "u-eli", name: "Eli Editor", email: "eli@example.com", role: "editor", joinedAt: "2026-11-02T00:00:00Z" };

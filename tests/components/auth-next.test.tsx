@@ -4,9 +4,9 @@
 import { render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { beforeEach, describe, expect, it, vi } from "vitest";
+import { router } from "../support/navigation";
 
-const push = vi.hoisted(() => vi.fn());
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push, refresh: vi.fn() }) }));
+const { push } = router;
 const auth = vi.hoisted(() => ({ signUp: { email: vi.fn() }, sendVerificationEmail: vi.fn() }));
 vi.mock("@/lib/auth-client", () => ({ authClient: auth }));
 

@@ -5,15 +5,8 @@ import { cleanup, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import type { ReactElement } from "react";
 import { beforeEach, describe, expect, it, vi } from "vitest";
+import { router } from "../support/navigation";
 
-const router = vi.hoisted(() => ({ push: vi.fn(), refresh: vi.fn(), replace: vi.fn() }));
-vi.mock("next/navigation", () => ({
-  useRouter: () => router,
-  // as Next's: thrown, so nothing after it renders
-  redirect: (to: string) => {
-    throw new Error(`NEXT_REDIRECT ${to}`);
-  },
-}));
 const auth = vi.hoisted(() => ({ signOut: vi.fn(), resetPassword: vi.fn(), getSession: vi.fn(), requestPasswordReset: vi.fn() }));
 vi.mock("@/lib/auth-client", () => ({ authClient: auth }));
 const signedIn = vi.hoisted(() => ({ as: null as null | { user: { id: string; email: string; name: string } } }));

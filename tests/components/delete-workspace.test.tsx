@@ -8,9 +8,8 @@ import userEvent from "@testing-library/user-event";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { ApiError } from "@/lib/api-client";
 import { withModalDialogs } from "./dialog-support";
+import { router } from "../support/navigation";
 
-const router = vi.hoisted(() => ({ push: vi.fn(), refresh: vi.fn() }));
-vi.mock("next/navigation", () => ({ useRouter: () => router }));
 const apiFetch = vi.hoisted(() => vi.fn());
 vi.mock("@/lib/api-client", async (original) => ({ ...(await original<typeof import("@/lib/api-client")>()), apiFetch }));
 const { DeleteWorkspace, whatGoes } = await import("@/components/workspaces/DeleteWorkspace");

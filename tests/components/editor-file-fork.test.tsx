@@ -7,12 +7,8 @@ import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Role } from "@/lib/roles";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
 import { beamWithInlet, changeInletArea, jsonResponse } from "./editor-helpers";
+import { setSearch } from "../support/navigation";
 
-const search = { value: "" };
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => new URLSearchParams(search.value),
-}));
 const { SavedSketchEditor } = await import("@/components/versions/editor/SavedSketchEditor");
 
 beforeAll(() => {
@@ -50,7 +46,7 @@ function serve(role: Role, ownsElsewhere = true) {
 }
 
 async function open(role: Role, version: string, ownsElsewhere = true) {
-  search.value = version ? `version=${version}` : "";
+  setSearch(version ? `version=${version}` : "");
   const posts = serve(role, ownsElsewhere);
   render(<SavedSketchEditor id="sk1" />);
   await screen.findByTestId("version-bar");

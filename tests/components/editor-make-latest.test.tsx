@@ -9,12 +9,8 @@ import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Role } from "@/lib/roles";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
 import { beamWithInlet, changeInletArea, jsonResponse } from "./editor-helpers";
+import { setSearch } from "../support/navigation";
 
-const search = { value: "version=1" };
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => new URLSearchParams(search.value),
-}));
 const { SavedSketchEditor } = await import("@/components/versions/editor/SavedSketchEditor");
 
 beforeAll(() => {
@@ -52,7 +48,7 @@ function serve(role: Role, serverLatest = 3, oldTitle?: string) {
 }
 
 async function open(role: Role, version: string, serverLatest = 3, oldTitle?: string) {
-  search.value = version ? `version=${version}` : "";
+  setSearch(version ? `version=${version}` : "");
   window.history.replaceState(null, "", `/sketches/sk1${version ? `?version=${version}` : ""}`);
   const posts = serve(role, serverLatest, oldTitle);
   render(<SavedSketchEditor id="sk1" />);

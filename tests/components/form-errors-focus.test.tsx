@@ -7,7 +7,6 @@ import userEvent from "@testing-library/user-event";
 import type { ReactElement } from "react";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: vi.fn(), refresh: vi.fn() }) }));
 const auth = vi.hoisted(() => ({
   signUp: { email: vi.fn() },
   signIn: { email: vi.fn() },

@@ -3,10 +3,8 @@
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { describe, expect, it, vi } from "vitest";
-
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: vi.fn(), refresh: vi.fn() }) }));
-const { MembersTable } = await import("@/components/workspaces/MembersTable");
+import { describe, expect, it } from "vitest";
+import { MembersTable } from "@/components/workspaces/MembersTable";
 
 const members = [
   { userId: "u-owner", name: "Orla Owner", email: "orla@example.com", role: "owner" as const, joinedAt: "2026-11-01T00:00:00Z" },

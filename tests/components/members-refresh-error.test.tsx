@@ -6,7 +6,6 @@ import { render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: vi.fn(), refresh: vi.fn() }) }));
 const { MembersScreen } = await import("@/components/workspaces/MembersScreen");
 
 const W = "6d656d6f-0000-4000-8000-000000000001";

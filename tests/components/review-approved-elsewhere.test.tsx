@@ -12,7 +12,6 @@ const parsed = parseSketch(fixture("pump-skid-discharge"));
 if (!parsed.ok) throw new Error("fixture does not parse");
 const document = parsed.file;
 
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: () => {}, replace: () => {}, refresh: () => {} }), usePathname: () => "/", useSearchParams: () => new URLSearchParams() }));
 
 function answers(number: number, state: "draft" | "approved", approvedVersion: number | null) {
   const body = (url: string) => {

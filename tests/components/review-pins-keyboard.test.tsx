@@ -15,7 +15,6 @@ const parsed = parseSketch(fixture("pump-skid-discharge"));
 if (!parsed.ok) throw new Error("fixture does not parse");
 const document_ = parsed.file;
 
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: () => {}, replace: () => {}, refresh: () => {} }), usePathname: () => "/", useSearchParams: () => new URLSearchParams() }));
 
 const comment = (id: string, authorName: string | null, body: string, deleted = false) => ({ id, authorId: "u-x", authorName, body, deleted, editedAt: null, createdAt: "2026-11-30T10:00:00Z" });
 const threads = [

@@ -9,10 +9,6 @@ import { reviewNote } from "@/components/versions/editor/reviewNote";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
 import { beamWithInlet, changeInletArea, jsonResponse } from "./editor-helpers";
 
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => new URLSearchParams(),
-}));
 const { SavedSketchEditor } = await import("@/components/versions/editor/SavedSketchEditor");
 
 beforeAll(() => {

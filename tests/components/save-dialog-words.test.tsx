@@ -9,10 +9,6 @@ import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
 import { beamWithInlet, jsonResponse } from "./editor-helpers";
 
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => new URLSearchParams(),
-}));
 const { SavedSketchEditor } = await import("@/components/versions/editor/SavedSketchEditor");
 
 beforeAll(() => {

@@ -10,10 +10,6 @@ import { draftsOpenElsewhere, keepDraft, keepTabOpen, OPEN_MS, readDraft, tabOpe
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
 import { beam, jsonResponse } from "./editor-helpers";
 
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => new URLSearchParams(),
-}));
 const { SavedSketchEditor } = await import("@/components/versions/editor/SavedSketchEditor");
 
 beforeAll(() => {

@@ -9,12 +9,8 @@ import type { SketchFile } from "@/solver/schema";
 import { discardDraft, keepDraft, readDraft } from "@/components/versions/editor/drafts";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
 import { beam, jsonResponse } from "./editor-helpers";
+import { setSearch } from "../support/navigation";
 
-let params = new URLSearchParams();
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => params,
-}));
 const { SavedSketchEditor } = await import("@/components/versions/editor/SavedSketchEditor");
 
 beforeAll(() => {
@@ -22,7 +18,6 @@ beforeAll(() => {
   withResizeObserver();
 });
 beforeEach(() => {
-  params = new URLSearchParams();
   window.localStorage.clear();
 });
 afterEach(() => {
@@ -163,7 +158,7 @@ describe("unsaved drafts of two tabs", () => {
     // a newer draft of a third tab does not take its place
     keepDraft({ sketchId: "sk1", tab: "third", baseVersion: 1, latestVersion: 1, message: "", sketch: { ...beam(), title: "A third tab's beam" } });
     unmount();
-    params = new URLSearchParams("restore=1&draft=othertab");
+    setSearch("restore=1&draft=othertab");
     await openSaved();
     await waitFor(() => expect(screen.getByLabelText("Title")).toHaveValue("The other tab's beam"));
     expect(readDraft("sk1", "othertab")).toBeNull();

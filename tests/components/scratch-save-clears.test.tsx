@@ -7,17 +7,15 @@ import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { SCRATCH_KEY } from "@/canvas/persistence";
 import { withModalDialogs } from "./dialog-support";
 import { beam, jsonResponse } from "./editor-helpers";
+import { router, setSearch } from "../support/navigation";
 
-const push = vi.fn();
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push, replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => new URLSearchParams("workspace=w1"),
-}));
+const { push } = router;
 const { NewSketchClient } = await import("@/app/sketches/new/NewSketchClient");
 
 beforeAll(() => {
   withModalDialogs();
 });
+beforeEach(() => setSearch("workspace=w1"));
 afterEach(() => {
   vi.unstubAllGlobals();
   push.mockReset();

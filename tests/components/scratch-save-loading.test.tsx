@@ -8,19 +8,15 @@ import { createEditorStore } from "@/canvas/store";
 import { EditorProvider } from "@/canvas/context";
 import { withModalDialogs } from "./dialog-support";
 import { beam, jsonResponse } from "./editor-helpers";
+import { setSearch } from "../support/navigation";
 
-let search = "save=1";
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => new URLSearchParams(search),
-}));
 const { ScratchSave } = await import("@/components/versions/editor/ScratchSave");
 
 beforeAll(() => withModalDialogs());
+beforeEach(() => setSearch("save=1"));
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
-  search = "save=1";
 });
 
 /** `/api/workspaces` answers only when `answer` is called. */
@@ -62,7 +58,7 @@ describe("saving the scratch sketch while the workspaces load", () => {
   });
 
   it("keeps the workspace asked for in the way back", async () => {
-    search = "save=1&workspace=w1";
+    setSearch("save=1&workspace=w1");
     const api = heldWorkspaces();
     const dialog = open();
     await api.answer(jsonResponse({ error: { code: "unauthorized", message: "Sign in first." } }, 401));

@@ -9,7 +9,6 @@ import { withModalDialogs } from "./dialog-support";
 
 withModalDialogs();
 
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: () => {}, replace: () => {}, refresh: () => {} }), usePathname: () => "/", useSearchParams: () => new URLSearchParams() }));
 
 const initial = (approvedVersion: number | null): SketchData => ({
   sketch: {

@@ -14,7 +14,6 @@ const parsed = parseSketch(fixture("pump-skid-discharge"));
 if (!parsed.ok) throw new Error("fixture does not parse");
 const document = parsed.file;
 
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: () => {}, replace: () => {}, refresh: () => {} }), usePathname: () => "/", useSearchParams: () => new URLSearchParams() }));
 beforeAll(() => withModalDialogs());
 afterEach(() => vi.unstubAllGlobals());
 
