@@ -242,7 +242,11 @@ export function withAsDrawnRun(study: StudyResult, asDrawn: StudyResult): StudyR
   return study === asDrawn || study.runs.some((r) => r.id === AS_DRAWN.id) ? study : { ...study, runs: [...asDrawn.runs, ...study.runs] };
 }
 
-const componentOf = (r: Reaction, c: Component): number | undefined => (c === "resultant" ? Math.hypot(r.fx, r.fy) : r[c]);
+// A lifted contact or a slack tie (on a held body: the envelope leaves the others out) carries
+// nothing and has no margin left: 0, not the solver's −stiffness × gap, whose size follows the
+// support stiffnesses and would rank the cases it is released in by them.
+const componentOf = (r: Reaction, c: Component): number | undefined =>
+  c === "resultant" ? Math.hypot(r.fx, r.fy) : c === "margin" && (r.state === "lifted" || r.state === "slack") ? 0 : r[c];
 
 const notHeld = (status: string): status is ExcludedRun["status"] => status === "tips" || status === "unrestrained";
 

@@ -43,7 +43,27 @@ export type LimitResult =
       /** the least and largest value of the quantity seen in the range */
       min: number;
       max: number;
+      /** where in the range the quantity comes closest to the target, and its value there (a
+       *  support's quantity searched by `findLimitWith`; absent where it is undefined throughout) */
+      closest?: { at: number; value: number };
+      /** at each end of the range, which way the quantity goes (see `EndTrend`) */
+      ends?: { lo: EndTrend; hi: EndTrend };
+      /** whether the body was held (holds or lifts) at every sample where the quantity is defined,
+       *  at none of them (it tips, or nothing holds it, all through), or at some */
+      held?: "all" | "none" | "some";
     };
+
+/**
+ * The quantity at one end of a range searched without a crossing: whether, going out past that
+ * end, it is heading for the target (the gap to it shrinks over the last step of the samples), and
+ * if so where a straight line through the last two samples would reach the target. That line is an
+ * extrapolation, not a finding: it says whether a wider range is worth a search, and how wide.
+ */
+export interface EndTrend {
+  toward: boolean;
+  /** the parameter value where the line through the last two samples reaches the target (only when `toward`) */
+  estimate?: number;
+}
 
 /** How close to the target, relative to the quantity's size in the range, counts as reaching it at a change of status. */
 const TOUCH = 1e-6;
@@ -251,6 +271,7 @@ function searchWith(
         : "no crossing in this range: the quantity is undefined there",
       min: finite.length ? Math.min(...finite) + target : Number.NaN,
       max: finite.length ? Math.max(...finite) + target : Number.NaN,
+      ...(finite.length ? { closest: closestIn(grid, f, tol, target), ends: { lo: endTrend(grid[0], grid[1]), hi: endTrend(grid[samples], grid[samples - 1]) }, held: heldIn(grid) } : {}),
     };
   } finally {
     sweeper.restore();
@@ -300,6 +321,72 @@ export function findTippingWith(sweeper: Sweeper, range: readonly [number, numbe
   } finally {
     sweeper.restore();
   }
+}
+
+/**
+ * Where the samples come closest to the target (least |quantity − target|), refined by a golden-
+ * section search between that sample's neighbours (a local minimum of the gap; the sample itself
+ * when the refinement finds nothing closer, as at a kink where a support's state changes).
+ */
+function closestIn(grid: readonly Sample[], f: (x: number) => number, tol: number, target: number): { at: number; value: number } {
+  let best = -1;
+  grid.forEach((s, i) => {
+    if (Number.isFinite(s.f) && (best < 0 || Math.abs(s.f) < Math.abs(grid[best].f))) best = i;
+  });
+  let at = grid[best].x;
+  let gap = grid[best].f;
+  const a0 = grid[Math.max(0, best - 1)];
+  const b0 = grid[Math.min(grid.length - 1, best + 1)];
+  if (Number.isFinite(a0.f) && Number.isFinite(b0.f) && b0.x > a0.x) {
+    const r = (Math.sqrt(5) - 1) / 2;
+    let a = a0.x;
+    let b = b0.x;
+    let c = b - r * (b - a);
+    let d = a + r * (b - a);
+    // an undefined point (NaN) counts as far from the target
+    const g = (x: number) => {
+      const v = Math.abs(f(x));
+      return Number.isFinite(v) ? v : Infinity;
+    };
+    let fc = g(c);
+    let fd = g(d);
+    for (let i = 0; i < 80 && b - a > tol; i++) {
+      if (fc <= fd) {
+        b = d;
+        d = c;
+        fd = fc;
+        c = b - r * (b - a);
+        fc = g(c);
+      } else {
+        a = c;
+        c = d;
+        fc = fd;
+        d = a + r * (b - a);
+        fd = g(d);
+      }
+    }
+    const x = (a + b) / 2;
+    const fx = f(x);
+    if (Number.isFinite(fx) && Math.abs(fx) < Math.abs(gap)) {
+      at = x;
+      gap = fx;
+    }
+  }
+  return { at, value: gap + target };
+}
+
+/** Whether the body is held at all, none or some of the samples where the quantity is defined. */
+function heldIn(grid: readonly Sample[]): "all" | "none" | "some" {
+  const defined = grid.filter((s) => Number.isFinite(s.f));
+  return defined.every((s) => s.held) ? "all" : defined.every((s) => !s.held) ? "none" : "some";
+}
+
+/** The trend at an end of the range from its sample and the one next to it (`EndTrend`). */
+function endTrend(end: Sample, inner: Sample): EndTrend {
+  if (!Number.isFinite(end.f) || !Number.isFinite(inner.f) || end.f === inner.f) return { toward: false };
+  // the line through the two samples reaches the target at x*; heading for it when x* lies outward
+  const estimate = end.x - (end.f * (end.x - inner.x)) / (end.f - inner.f);
+  return (estimate - end.x) * (end.x - inner.x) > 0 ? { toward: true, estimate } : { toward: false };
 }
 
 /** The search's tolerance on the parameter over a range, unless one is given: a billionth of the range. */

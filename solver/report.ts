@@ -11,7 +11,7 @@ import { pivotWords, type BodyStability } from "./stability";
 import type { SolveResult, Status, Vec2 } from "./types";
 import { formatFigures, formatTiny } from "./quantity";
 import { convert, formatNumber, formatQuantity, prettyUnit, unitsFor, type Quantity, type UnitSystem } from "./units";
-import { gravityActs, overMu } from "./words";
+import { carriesNothing, gravityActs, overMu } from "./words";
 
 export type Cell = string | number | null;
 
@@ -267,7 +267,8 @@ export function reactionTable(
         at(r.n === undefined ? undefined : sign * r.n, "force"),
         at(r.t === undefined ? undefined : sign * r.t, "force"),
         stateWord(r, result.bodies[r.body]?.status),
-        at(r.margin, "force"),
+        // a released one-sided support carries nothing: no margin to show (see `carriesNothing`)
+        carriesNothing(r, result.bodies[r.body]?.status) ? null : at(r.margin, "force"),
       ];
     }),
     notes: reactionNotes(result, opts),
@@ -283,6 +284,13 @@ export function reactionTable(
 function reactionNotes(result: SolveResult, opts: { onSupport?: boolean; names?: Readonly<Record<string, string>> }): string[] | undefined {
   const notes: string[] = [];
   if (opts.onSupport) notes.push("Loads on the supports are the reactions with the sign reversed (what an anchor must carry).");
+  const idle = Object.values(result.reactions).filter((r) => carriesNothing(r, result.bodies[r.body]?.status));
+  if (idle.length) {
+    const what = idle.every((r) => r.kind === "tie") ? "A slack tie" : idle.every((r) => r.kind === "contact") ? "A lifted contact" : "A lifted contact or a slack tie";
+    notes.push(
+      `${what} carries nothing, so it has no margin to show (—). At what value of a parameter it takes load again, the limit finder on its margin answers (Sweep tab).`,
+    );
+  }
   const loose = Object.entries(result.bodies).filter(([, b]) => b.status === "tips" || b.status === "unrestrained");
   if (loose.length) {
     const names = loose.map(([id]) => opts.names?.[id] ?? id).join(", ");
@@ -407,7 +415,8 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?
         words.push(`not in the envelope: ${nameIn(study, r.body)} ${status === "tips" ? "tips" : "is unrestrained"}`);
       } else if (env) {
         // every run of a tie is marked and named: each governs as much
-        if ((env.ties?.resultant ?? [env.design.case]).includes(run.id)) words.push("design load");
+        // a support that carries nothing in every case (a tie slack throughout) has no design load
+        if (hasDesignLoad(env) && (env.ties?.resultant ?? [env.design.case]).includes(run.id)) words.push("design load");
         const gov: string[] = [];
         // the resultant's governing case is the design load, said above
         for (const c of ["fx", "fy", "m", "n", "t"] as const) {
@@ -419,8 +428,9 @@ export function caseReactionTable(study: StudyResult, system: UnitSystem, scale?
         }
         if (gov.length) words.push(`governs ${gov.join(", ")}`);
         // below zero it has already lifted or gone slack: not "closest to" it
+        // lifted or slack, it carries nothing: no margin left (the envelope counts it 0)
         if (governs(env, "margin", run.id))
-          words.push(`least margin (${r.margin !== undefined && r.margin < 0 ? (r.kind === "tie" ? "slack" : "lifted off") : `closest to ${r.kind === "tie" ? "going slack" : "lifting"}`})`);
+          words.push(`least margin (${r.state === "lifted" || r.state === "slack" ? (r.kind === "tie" ? "slack: carries nothing" : "lifted off: carries nothing") : `closest to ${r.kind === "tie" ? "going slack" : "lifting"}`})`);
       }
       rows.push([
         run.name,
@@ -484,7 +494,11 @@ export function envelopeTable(study: StudyResult, system: UnitSystem, scale?: Sc
       const gov = governingRuns(env, c);
       // a component that is zero in every case (a frictionless contact's t) has no governing case
       const zero = Math.max(Math.abs(e.max.value), Math.abs(e.min.value)) < NOTHING;
-      rows.push([nameIn(study, id), COMPONENT_LABEL[c], unitOf(q, u), inUnit(e.max.value, q, u), name(e.max.case), inUnit(e.min.value, q, u), name(e.min.case), zero ? "none (zero in every case)" : tiedNames(study, gov)]);
+      // a margin whose least value is a release (lifted or slack: 0, it carries nothing) is said so;
+      // the cases it is released in are each marked in the cases table, so a long list is not repeated here
+      const released = c === "margin" && e.min.value === 0 ? (env.kind === "tie" ? "slack" : "lifted off") : null;
+      const governing = zero ? "none (zero in every case)" : released ? `${name(gov[0])}${gov.length > 1 ? ` and ${gov.length - 1} more` : ""} (${released})` : tiedNames(study, gov);
+      rows.push([nameIn(study, id), COMPONENT_LABEL[c], unitOf(q, u), inUnit(e.max.value, q, u), name(e.max.case), inUnit(e.min.value, q, u), name(e.min.case), governing]);
     }
   }
   return withRowUnitsInHeader({
@@ -502,7 +516,7 @@ export function envelopeTable(study: StudyResult, system: UnitSystem, scale?: Sc
     ],
     rows,
     notes: [
-      "Governing case: the one with the largest magnitude; for the margin of a contact or tie, the smallest (the case where it comes closest to lifting or going slack; below zero it has lifted or gone slack). Cases that give it alike are all named (equal).",
+      "Governing case: the one with the largest magnitude; for the margin of a contact or tie, the smallest (the case where it comes closest to lifting or going slack). A contact lifted off or a tie gone slack carries nothing: its margin is 0 there, and the cases it does so in are each marked in the cases table. Cases that give a value alike are all named (equal).",
       "A case in which the body tips or is unrestrained is not in the envelope or the design loads (see the note above the tables).",
     ],
   });
@@ -520,6 +534,22 @@ export function withRowUnitsInHeader(t: Table): Table {
   const unit = units.length ? units.join(" / ") : undefined;
   return { ...t, columns: t.columns.map((c) => ((c.align ?? "right") === "right" && c.key !== "unit" ? { ...c, unit } : c)) };
 }
+
+/** Whether a support carries load in any case where its body is held: one that carries nothing in
+ *  all of them (a tie slack in every case, a contact lifted in every case) has no design load, and
+ *  no case is "the design load" of it. */
+export function hasDesignLoad(env: SupportEnvelope): boolean {
+  return env.design.resultant >= NOTHING;
+}
+
+/** The words of a support's design load case: the case (or cases alike), or that it carries nothing. */
+export function designCaseWords(study: StudyResult, id: string): string {
+  const env = study.envelope[id];
+  return hasDesignLoad(env) ? tiedNames(study, env.ties?.resultant ?? [env.design.case]) : NO_DESIGN_LOAD;
+}
+
+/** A support with no design load: said in place of its case. */
+export const NO_DESIGN_LOAD = "none: carries nothing in any case";
 
 /** Each support's design load: its largest resultant over the cases, with its direction. */
 export function designLoadTable(study: StudyResult, system: UnitSystem, scale?: Scale): Table {
@@ -542,12 +572,13 @@ export function designLoadTable(study: StudyResult, system: UnitSystem, scale?: 
     rows: Object.entries(study.envelope).map(([id, env]) => [
       nameIn(study, id),
       inUnit(env.design.resultant, "force", u),
-      env.design.angle,
+      // a zero resultant has no direction
+      hasDesignLoad(env) ? env.design.angle : null,
       inUnit(env.design.fx, "force", u),
       inUnit(env.design.fy, "force", u),
       inUnit(env.design.m, "moment", u),
       // every case of a tie for the largest resultant: "A and B (equal)"
-      tiedNames(study, env.ties?.resultant ?? [env.design.case]),
+      designCaseWords(study, id),
     ]),
     notes: [
       "The design load of a support is its largest resultant over all cases and combinations in which its body is held, with its direction (force on the body). Cases that give it alike are all named (equal); the direction and components are those of the first named.",

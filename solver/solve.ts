@@ -189,11 +189,26 @@ function solveBody(model: BodyModel, out: SolveResult): void {
     });
   }
 
-  if (determinacy.kind === "indeterminate") {
+  // Whether the reactions depend on the stiffnesses is a property of the supports that carry load in
+  // this solve: a contact that lifts or a tie that goes slack carries nothing, so a guyed stack whose
+  // lee guy is slack stands on its pin and one guy, a determinate set (reactions by equilibrium
+  // alone). The contract's `determinacy` stays that of the supports as drawn.
+  const anyReleased = (status === "holds" || status === "lifts") && released.some(Boolean);
+  const active = anyReleased ? determinacyOf({ ...model, springs: springs.filter((s) => s.group < 0 || !released[s.group]) }) : null;
+  const activeIds = supports.filter((_, si) => !anyReleased || !released[groupOf.get(si) ?? -1]).map((s) => s.id);
+  const solvedSet = active ?? { determinacy, redundant };
+  if (solvedSet.determinacy.kind === "indeterminate") {
     warnings.push({
       code: "INDETERMINATE",
-      message: `${body.label || body.id} is statically indeterminate (degree ${determinacy.degree}): the reactions depend on the support stiffnesses`,
-      ids: supports.map((s) => s.id),
+      message: `${body.label || body.id} is statically indeterminate (degree ${solvedSet.determinacy.degree}${active ? ` with the supports that carry load` : ""}): the reactions depend on the support stiffnesses`,
+      ids: activeIds,
+    });
+  } else if (determinacy.kind !== "mechanism" && solvedSet.determinacy.kind === "mechanism" && solvedSet.redundant > 0) {
+    // over-supported as drawn; with some released, the rest leave a motion free the loads do not drive
+    warnings.push({
+      code: "INDETERMINATE",
+      message: `${body.label || body.id} is statically indeterminate (degree ${solvedSet.redundant}) in the directions the supports that carry load resist: the reactions depend on the support stiffnesses`,
+      ids: activeIds,
     });
   } else if (determinacy.kind === "mechanism" && status !== "unrestrained") {
     warnings.push({
@@ -202,11 +217,11 @@ function solveBody(model: BodyModel, out: SolveResult): void {
       ids: [body.id],
     });
     // free one way and over-supported the others: the shares still depend on the stiffnesses
-    if (redundant > 0)
+    if (solvedSet.redundant > 0)
       warnings.push({
         code: "INDETERMINATE",
-        message: `${body.label || body.id} is statically indeterminate (degree ${redundant}) in the directions its supports resist: the reactions depend on the support stiffnesses`,
-        ids: supports.map((s) => s.id),
+        message: `${body.label || body.id} is statically indeterminate (degree ${solvedSet.redundant}) in the directions its supports resist: the reactions depend on the support stiffnesses`,
+        ids: activeIds,
       });
   }
 
@@ -220,6 +235,7 @@ function solveBody(model: BodyModel, out: SolveResult): void {
   out.bodies[body.id] = {
     status,
     determinacy,
+    ...(active ? { activeDeterminacy: active.determinacy } : {}),
     acceleration: { ax: model.ax, ay: model.ay },
     momentum: model.momentum,
     residual: { fx: cleanR(rfx), fy: cleanR(rfy), m: cleanR(rm) },

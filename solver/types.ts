@@ -140,6 +140,11 @@ export interface ForceMoment {
 export interface BodyResult {
   status: Status;
   determinacy: Determinacy;
+  /** with a contact lifted or a tie slack in a body that holds (`lifts`): the determinacy of the
+   *  supports that carry load in this solve, the released ones left out. `determinacy` is that of
+   *  the supports as drawn (the contract's); whether the reactions depend on the stiffnesses is
+   *  this one's to say (a guyed stack whose lee guy is slack stands on a pin and one guy). */
+  activeDeterminacy?: Determinacy;
   acceleration: { ax: number; ay: number };
   /** Σ_out ṁV − Σ_in ṁV, and its moment about the origin */
   momentum: ForceMoment;

@@ -1,6 +1,6 @@
 // Short phrases shared by warnings and status sentences.
 import { formatNumber, formatQuantity } from "./units";
-import type { FreeMotion, Support } from "./types";
+import type { FreeMotion, Reaction, Support } from "./types";
 
 const KIND_WORD: Record<Support["kind"], string> = {
   pin: "Pin",
@@ -72,4 +72,16 @@ export function gravityNote(angle: number | undefined): string | null {
 export function gravityActs(angle: number): string {
   const words = turnWords(angle, " from +x");
   return words ? `acts ${words}` : "acts in −y";
+}
+
+/**
+ * A contact that has lifted off or a tie that has gone slack on a body that is held: it carries
+ * nothing, and it has no margin to show. The solver's `margin` there (−stiffness × gap, the
+ * contract's) only keeps the side of zero continuous for sweeps and the limit finder: its size
+ * follows the ratio of the support stiffnesses, not any load. How much more load would make it
+ * engage is no single number either (it depends on which load changes): the limit finder answers
+ * it for the parameter the user picks. On a body that tips the row is the force it would need.
+ */
+export function carriesNothing(r: Pick<Reaction, "state">, bodyStatus: string | undefined): boolean {
+  return (r.state === "lifted" || r.state === "slack") && (bodyStatus === "holds" || bodyStatus === "lifts");
 }

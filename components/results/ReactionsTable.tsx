@@ -12,7 +12,7 @@ export type Sense = "body" | "support";
 
 /** Short headings: the table is read beside the drawing, often in a narrow window. */
 const SHORT: Record<string, string> = { support: "Support", fx: "Fx", fy: "Fy", resultant: "Resultant", angle: "Direction", m: "M", n: "n", t: "t", state: "State", margin: "Margin" };
-const TITLES: Record<string, string> = { n: "Normal force along the support's direction", t: "Tangential (friction) force, positive 90° counter-clockwise from the contact's normal", margin: "Contacts and ties: n while bearing; below zero once lifted or slack", angle: "Direction of the force, degrees counter-clockwise from +x" };
+const TITLES: Record<string, string> = { n: "Normal force along the support's direction", t: "Tangential (friction) force, positive 90° counter-clockwise from the contact's normal", margin: "Contacts and ties: n while bearing or taut; none (—) once lifted or slack, when it carries nothing", angle: "Direction of the force, degrees counter-clockwise from +x" };
 
 export function ReactionsTable({ sense }: { sense: Sense }) {
   // deferred: a drag's frames come first, the panel catches up when the main thread is free
@@ -41,7 +41,7 @@ export function ReactionsTable({ sense }: { sense: Sense }) {
         <caption id="reactions-caption" className="caption-top pb-1 text-left text-[11.5px] text-ink-faint">
           {sense === "body" ? "Forces on the body from each support, as drawn (double arrows)." : "Loads on the supports: every reaction reversed, n and t too (a bearing contact's n is negative here) — what each anchor, foot or foundation must carry."}
           {table.columns.some((c) => c.key === "t") ? " t: the friction force along the contact's surface, positive 90° counter-clockwise from its normal n (a contact facing up: positive toward −x)." : ""}
-          {table.columns.some((c) => c.key === "margin") ? " Margin: how far a contact's normal force (a tie's tension) is from zero, where it lifts off (goes slack); friction is judged in the words above, not here." : ""}
+          {table.columns.some((c) => c.key === "margin") ? " Margin: how far a bearing contact's normal force (a taut tie's tension) is from zero, where it lifts off (goes slack); one that has lifted or gone slack carries nothing and has none (—); friction is judged in the words above, not here." : ""}
         </caption>
         <thead>
           <tr className="border-b border-rule text-[11px] text-ink-faint">

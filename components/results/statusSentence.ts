@@ -1,7 +1,7 @@
 // The result in words, one sentence per body, leading with what matters: slip first (the status
 // stays "holds" but a contact cannot hold what it must), then tipping, lift-off and the rest.
 // Pure: the results panel, the calc sheet and the tests all use it.
-import { describeFreeMotion, overMu } from "@/solver/words";
+import { carriesNothing, describeFreeMotion, overMu } from "@/solver/words";
 import { portDirectionNotes } from "@/solver/ports";
 import { nearestOnOutline, pointInPolygon, polygonDiameter } from "@/solver/geometry";
 import { formatQuantity, type UnitSystem } from "@/solver/units";
@@ -357,8 +357,14 @@ export function statusSentences(
     if (sketch.motion?.freeX && body.status !== "unrestrained" && Number.isFinite(ax))
       details.push(`Free to move in x: the loads accelerate it at ax = ${formatQuantity(ax, "acceleration", units)} (its inertial force −m·ax acts at its centre of gravity).`);
     if (mech && mechSaid) details.push(`${cap(mech.message.slice(mech.message.indexOf(": ") + 2))}; any load that does will move it.`);
-    if (body.determinacy.kind === "indeterminate")
-      details.push(`Statically indeterminate (degree ${body.determinacy.degree}): the reactions depend on the support stiffnesses.`);
+    // whether the reactions depend on the stiffnesses: the supports that carry load say (a lifted
+    // contact or a slack tie carries nothing), not the supports as drawn
+    const solved = body.activeDeterminacy ?? body.determinacy;
+    const idle = body.activeDeterminacy ? reactions.filter(([, r]) => carriesNothing(r, body.status)).map(([s]) => supportName(s)) : [];
+    if (solved.kind === "indeterminate")
+      details.push(`Statically indeterminate (degree ${solved.degree}${idle.length ? ` with the supports that carry load, ${list(idle)} left out` : ""}): the reactions depend on the support stiffnesses.`);
+    else if (body.determinacy.kind === "indeterminate" && solved.kind === "determinate")
+      details.push(`Statically determinate as solved: ${list(idle)} ${idle.length > 1 ? "carry" : "carries"} nothing, and the reactions of the supports that do follow from equilibrium alone, whatever their stiffnesses (as drawn, every support engaged, indeterminate of degree ${body.determinacy.degree}).`);
     else {
       // free to move one way, yet more supports than the other directions need
       const over = result.warnings.find((w) => w.code === "INDETERMINATE" && w.ids.some((i) => supports.some((s) => s.id === i)));

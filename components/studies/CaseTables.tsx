@@ -5,7 +5,7 @@
 import type { StudyResult } from "@/solver/cases";
 import type { SketchFile } from "@/solver/schema";
 import { errorInWords } from "@/components/results/errorPlace";
-import { type Cell, type Scale, type Table, caseReactionTable, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, tiedNames, unsolvedWords, withRunName } from "@/solver/report";
+import { type Cell, type Scale, type Table, caseReactionTable, designCaseWords, designLoadTable, envelopeTable, excludedWords, nameIn, slipWords, stabilityTable, unsolvedWords, withRunName } from "@/solver/report";
 import type { UnitSystem } from "@/solver/units";
 import { withoutAbsentMoment } from "@/canvas/studies/tables";
 import { ReportTable } from "./ReportTable";
@@ -96,7 +96,7 @@ export function CaseTables({ result, units, asDrawn, sketch = null, scale }: { r
         <p className="mt-2 text-[11.5px] text-ink-faint">
           Design load from —{" "}
           {Object.keys(result.envelope)
-            .map((id) => `${nameIn(result, id)}: ${tiedNames(result, result.envelope[id].ties?.resultant ?? [result.envelope[id].design.case])}`)
+            .map((id) => `${nameIn(result, id)}: ${designCaseWords(result, id)}`)
             .join(" · ")}
         </p>
       )}

@@ -25,6 +25,7 @@ import { downloadCsv, useCsvName } from "./csv";
 import { limitRowsTable, type SweepLimitRow } from "@/lib/calcsheet/sweeps";
 import type { Table } from "@/solver/report";
 import { invalidStretches } from "./sweepErrors";
+import { noLimitHint, rangeWords } from "./limitHint";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, solvesAtIn, type ParameterValue } from "./sweepRange";
 
 const NO_VALUES: Record<string, ParameterValue> = {};
@@ -106,6 +107,9 @@ export function sidesWords(rows: readonly LimitEverywhere[], targetSI: number, t
   if (!below.length) return "";
   return ` ${andList(below)} ${below.length > 1 ? "stay" : "stays"} below ${target} over the whole range.`;
 }
+
+/** A support's name at the head of a clause: "the front caster" for a label in lower case, as the status sentences name it. */
+const theName = (name: string) => (/^[a-z]/.test(name) ? `the ${name}` : name);
 
 /** A body's own limit as the picker and the answers name it: "Cart tips", "Cart slides as a whole". */
 export function bodyLimitLabel(q: BodyLimitSpec, names: Readonly<Record<string, string>>): string {
@@ -341,7 +345,7 @@ export function SweepPanel() {
   /** the quantity the limit finder searches, as "support:component" (null: the plot's default, see defaultLimitQuantity) */
   const [limitKey, setLimitKey] = useState<string | null>(null);
   const [target, setTarget] = useState("0");
-  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** in the unit on screen ("" for a body's own limit) */ target: string; /** the answer, in words with units */ words: string } | null>(null);
+  const [limit, setLimit] = useState<{ result: LimitResult; label: string; /** in the unit on screen ("" for a body's own limit) */ target: string; /** the answer, in words with units */ words: string; /** no crossing, but heading for one past an end: the range worth a search */ wider?: { from: number; to: number }; unit?: string } | null>(null);
   /** the same limit in every case and combination */
   const [everywhere, setEverywhere] = useState<Everywhere | null>(null);
   /** a target that does not read: said beside the limit finder, not up by the sweep's Run */
@@ -413,14 +417,16 @@ export function SweepPanel() {
   };
 
   /** The plotted run's settings, the quantity and the target read for a limit search (null: said why). */
-  const limitInputs = () => {
+  const limitInputs = (wider?: { from: number; to: number }) => {
     // on what the plot shows (the form may have changed since): its case or combination and its
     // parameter, over the range as typed now while the form still sweeps that parameter
+    // (`wider`: the range a search without a crossing offered, put in the form as it runs)
     const s = ran?.spec;
     if (!s || !limitQuantity) return null;
     const q = limitQuantity;
     let range = { from: s.from, to: s.to };
-    if (parameter === s.parameter) {
+    if (wider) range = wider;
+    else if (parameter === s.parameter) {
       const typed = typedRange();
       if (typeof typed === "string") {
         setLimit(null);
@@ -490,8 +496,8 @@ export function SweepPanel() {
       .finally(() => setSearching(null));
   };
 
-  const findLimit = () => {
-    const inputs = limitInputs();
+  const findLimit = (wider?: { from: number; to: number }) => {
+    const inputs = limitInputs(wider);
     if (!inputs) return;
     const { s, q, tgt, text, id } = inputs;
     const job = runner.current!.run({ kind: "limit", text, spec: { parameter: s.parameter, from: s.from, to: s.to, caseId: s.caseId, combinationId: s.combinationId, quantity: q, target: tgt.si } });
@@ -515,14 +521,30 @@ export function SweepPanel() {
         const otherRange = s.from !== plotted.from || s.to !== plotted.to ? ` Searched from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit} as typed now; the plot shows ${formatNumber(plotted.from, 5)} to ${formatNumber(plotted.to, 5)}${pUnit}.` : "";
         const precision = result.found ? limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit, result.crossings) : "";
         const over = `for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}`;
+        // no crossing: where it came closest, and whether a wider range may find one
+        // a contact's or tie's margin below zero all through: it is lifted off (slack) there and carries
+        // nothing; the margin's size then follows the support stiffnesses, so no figure of it is said
+        const kind = isBodyLimit(q) ? undefined : (ran!.sketch.supports ?? []).find((x) => x.id === q.support)?.kind;
+        const released = !isBodyLimit(q) && q.component === "margin" && !result.found && result.held === "all" && result.max < 0 && tgt.si <= 0 ? (kind === "tie" ? ("slack" as const) : ("lifted off" as const)) : undefined;
+        // not held anywhere in the range (it tips all through): its margins are those of the last set
+        // of supports that held it, carried on, not loads its supports carry
+        const bodyId = isBodyLimit(q) ? undefined : (ran!.sketch.supports ?? []).find((x) => x.id === q.support)?.body;
+        const loose = !isBodyLimit(q) && !result.found && result.held === "none" && bodyId !== undefined ? names[bodyId] ?? bodyId : undefined;
+        // below zero a margin of a held body is no force: "lifted off" (or "slack") in place of its figure
+        const marginShown = (si: number) => (!isBodyLimit(q) && q.component === "margin" && si < 0 && loose === undefined ? (kind === "tie" ? "slack" : "lifted off") : inShown(si));
+        const hint = !isBodyLimit(q) && !result.found && Number.isFinite(result.min) ? noLimitHint(result, s, { parameter: s.parameter, pName, target: tgt.shown, shown: marginShown, released }) : null;
         const words = isBodyLimit(q)
           ? bodyLimitWords(result, q, label, pName, over, precision, s.from, s.to) + otherRange
           : result.found
           ? `The ${label} reaches ${tgt.shown} at ${pName} = ${limitWithUnit(result.value, result.unit)}${again} (${limitPrecisionWords(result.tolerance ?? limitTolerance([s.from, s.to]), result.unit, result.crossings)}).${otherRange}`
+          : loose !== undefined
+            ? `No crossing in this range: ${loose} is not held anywhere in it (it tips, or nothing holds it, all through ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}); the ${label} there is what its supports would need, not a load they carry.${hint?.words ? ` ${hint.words}` : ""}${otherRange}`
+          : released
+            ? `No crossing in this range: ${theName(names[q.support] ?? q.support)} is ${released} (it carries nothing) all through ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.${hint?.words ? ` ${hint.words}` : ""}${otherRange}`
           : Number.isFinite(result.min)
-            ? `No crossing in this range: the ${label} stays ${result.min >= tgt.si ? "above" : "below"} ${tgt.shown} (it runs from ${inShown(result.min)} to ${inShown(result.max)}) for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`
+            ? `No crossing in this range: the ${label} stays ${result.min >= tgt.si ? "above" : "below"} ${tgt.shown} (it runs from ${marginShown(result.min)} to ${marginShown(result.max)}) for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.${hint?.words ? ` ${hint.words}` : ""}${otherRange}`
             : `No crossing in this range: the ${label} is undefined for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}.`;
-        setLimit({ result, label, target: tgt.shown, words });
+        setLimit({ result, label, target: tgt.shown, words, ...(hint?.wider ? { wider: hint.wider, unit: result.unit } : {}) });
       })
       // Stop ends every study of this panel at once (they share one worker)
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(studyErrorWords(ran?.sketch ?? sketch, err))))
@@ -780,7 +802,7 @@ export function SweepPanel() {
                   <span className={`${LABEL} whitespace-nowrap`}>{targetUnit}?</span>
                 </>
               )}
-              <button type="button" className={BUTTON} onClick={findLimit} disabled={!!searching || progress !== null}>Find</button>
+              <button type="button" className={BUTTON} onClick={() => findLimit()} disabled={!!searching || progress !== null}>Find</button>
               {(sketch.cases?.length ?? 0) + (sketch.combinations?.length ?? 0) > 0 && (
                 <button type="button" className={BUTTON} onClick={findEverywhere} disabled={!!searching || progress !== null} title="The same search in each case (but those only in combinations) and each combination: under which does it happen first?">
                   In every case
@@ -817,6 +839,26 @@ export function SweepPanel() {
               <p className="mt-1 text-[12.5px]" data-testid="limit-answer" role="status">
                 {limit.words}
               </p>
+            )}
+            {limit?.wider && !limitStopped && (
+              <button
+                type="button"
+                className={`${BUTTON} mt-1`}
+                data-testid="limit-wider"
+                disabled={!!searching || progress !== null}
+                title="Puts this range in From and To and searches it (run the sweep again to plot it)"
+                onClick={() => {
+                  const w = limit.wider!;
+                  // the form says the range searched (Run plots it); the plotted parameter is the one searched
+                  if (parameter === ran?.spec.parameter) {
+                    setFrom(String(w.from));
+                    setTo(String(w.to));
+                  }
+                  findLimit(w);
+                }}
+              >
+                Search {rangeWords(limit.wider, limit.unit ?? "")}
+              </button>
             )}
             {everywhere && !limitStopped && (
               <div className="mt-1 text-[12.5px]" data-testid="limit-everywhere">

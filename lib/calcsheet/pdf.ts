@@ -182,7 +182,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
   const said = new Set<string>();
   for (const s of statusSentences(parsed.sketch, result, units, family.force, stability, parsed.file)) {
     const b = result.bodies[s.body];
-    const determinacy = b.determinacy.kind === "indeterminate" ? "" : ` Statically ${b.determinacy.kind}.`;
+    // a body with a support released: its details say what the supports that carry load are
+    const determinacy = b.determinacy.kind === "indeterminate" || b.activeDeterminacy ? "" : ` Statically ${b.determinacy.kind}.`;
     para(`${s.headline}.${determinacy}`, 9.5, s.tone === "holds" ? INK : ACCENT);
     for (const d of s.details) {
       para(d, 8.5, SOFT);

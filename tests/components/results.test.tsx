@@ -96,7 +96,16 @@ describe("status sentence", () => {
     const [s] = statusSentences(stack.sketch, stack.result);
     expect(s.tone).toBe("lifts");
     expect(s.headline).toMatch(/^The \w+ guy goes slack — the base pin and the \w+ guy still hold the body$/);
-    expect(s.details[0]).toMatch(/^Statically indeterminate \(degree 1\)/);
+    // the slack guy carries nothing: the pin and the west guy that hold it are determinate
+    expect(s.details[0]).toBe(
+      "Statically determinate as solved: the east guy carries nothing, and the reactions of the supports that do follow from equilibrium alone, whatever their stiffnesses (as drawn, every support engaged, indeterminate of degree 1).",
+    );
+  });
+
+  it("lifts, with the supports that still bear indeterminate: says so of them, the lifted one left out", () => {
+    const trailer = solved(load("fire-monitor-trailer"));
+    const [s] = statusSentences(trailer.sketch, trailer.result);
+    expect(s.details[0]).toBe("Statically indeterminate (degree 1 with the supports that carry load, the front jack left out): the reactions depend on the support stiffnesses.");
   });
 
   it("lists the flow checks (inconsistent port, mass imbalance) and unitless trigonometry", () => {
@@ -155,14 +164,21 @@ describe("results panel", () => {
     expect(screen.getByRole("caption")).toHaveTextContent("Forces on the body from each support");
     // the margin is said to be lift-off, not friction (a slipping contact still has a margin)
     expect(screen.getByRole("caption")).toHaveTextContent("t: the friction force along the contact's surface, positive 90° counter-clockwise from its normal n (a contact facing up: positive toward −x).");
-    expect(screen.getByRole("caption")).toHaveTextContent("Margin: how far a contact's normal force (a tie's tension) is from zero, where it lifts off");
+    expect(screen.getByRole("caption")).toHaveTextContent("Margin: how far a bearing contact's normal force (a taut tie's tension) is from zero, where it lifts off (goes slack); one that has lifted or gone slack carries nothing and has none (—)");
+    // the lifted jack carries nothing: no margin (the solver's −k·gap is no force), said under the table
+    const jack = [...document.querySelectorAll("[data-testid=reactions] tr[data-support=jack] td")].map((c) => c.textContent);
+    expect(jack.at(-2)).toBe("lifts");
+    expect(jack.at(-1)).toBe("—");
+    expect(screen.getAllByTestId("reactions-note").map((n) => n.textContent)).toEqual([
+      "A lifted contact carries nothing, so it has no margin to show (—). At what value of a parameter it takes load again, the limit finder on its margin answers (Sweep tab).",
+    ]);
     await user.click(within(screen.getByTestId("sense")).getByRole("radio", { name: "Load on the support" }));
     for (const c of cols) cells(c).map(num).forEach((v, i) => expect(v === null ? null : v + 0).toBe(before[c][i] === null ? null : -before[c][i]! + 0));
     cells("angle").map(num).forEach((a, i) => {
       if (a !== null) expect(Math.abs(((a - dir[i]! + 720) % 360) - 180)).toBeLessThan(0.1);
     });
     expect(screen.getByRole("caption")).toHaveTextContent("Loads on the supports: every reaction reversed, n and t too (a bearing contact's n is negative here)");
-    expect(screen.getByTestId("reactions-note")).toHaveTextContent("Loads on the supports are the reactions with the sign reversed");
+    expect(screen.getAllByTestId("reactions-note")[0]).toHaveTextContent("Loads on the supports are the reactions with the sign reversed");
   });
 
   it("shows the hand check's sums about the point picked", async () => {

@@ -201,7 +201,17 @@ describe("the Sweep tab's words", () => {
     await user.type(screen.getByRole("textbox", { name: "From" }), "-50");
     expect(screen.getByTestId("limit-range-note").textContent).toBe("Find searches theta from −50 to 0 deg, as typed now; the plot shows −90 to 0 deg (run the sweep to plot the new range).");
     await user.click(screen.getByRole("button", { name: "Find" }));
-    expect((await screen.findByTestId("limit-answer")).textContent).toMatch(/^No crossing in this range: the margin at front caster stays below 0 k?N \(it runs from .*\) for theta from −50 to 0 deg\.$/);
+    // the cart tips all through (its caster would have to pull): no crossing, and the words say the
+    // margin there is what the caster would need, −35.81 N at −50° (the case "Lance raised to −50°"
+    // of the demo gives the same n); the ends say which way it goes (the caster bears again toward −59°)
+    const answer = (await screen.findByTestId("limit-answer")).textContent!;
+    expect(answer).toMatch(
+      /^No crossing in this range: Washing cart is not held anywhere in it \(it tips, or nothing holds it, all through theta from −50 to 0 deg\); the margin at front caster there is what its supports would need, not a load they carry\. It comes closest at theta = −50\.00 deg, where it is −35\.81 N\. Below −50 deg it is still heading for 0 N: a straight line through the last samples reaches it near theta = −(\d+\.\d+) deg \(an extrapolation, not a finding\)\./,
+    );
+    const back = Number(/near theta = −(\d+\.\d+) deg/.exec(answer)![1]);
+    expect(back).toBeGreaterThan(59);
+    expect(back).toBeLessThan(62);
+    expect(answer).toMatch(/Searched from −50 to 0 deg as typed now; the plot shows −90 to 0 deg\.$/);
   });
 
   it("In every case: names each case of a tie, and says the searched value stands in for the case's own", async () => {

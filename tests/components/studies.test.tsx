@@ -312,8 +312,23 @@ describe("Sweep tab", () => {
     await waitFor(() => expect(screen.getByTestId("limit-answer").textContent).toBe("The moment at base reaches 30 N·m at a = 1.300 m (to 4 significant figures)."));
     // 20 lbf·ft = 27.12 N·m (1 lbf·ft = 1.3558179483 N·m, NIST SP 811), out of reach: every figure
     // of the answer in N·m, none in the unit typed
+    // M = 100·(a − 1) N·m is linear: the line through the last samples is the exact one, 271.2 N·m at
+    // a = 1 + 2.712 = 3.712 m; the range offered goes half as far again past 2 m (to 4.568), rounded out
     await findLimit(user, "200 lbf ft");
-    expect((await screen.findByTestId("limit-answer")).textContent).toBe("No crossing in this range: the moment at base stays below 271.2 N·m (it runs from −100 N·m to 100 N·m) for a from 0 to 2 m.");
+    expect((await screen.findByTestId("limit-answer")).textContent).toBe(
+      "No crossing in this range: the moment at base stays below 271.2 N·m (it runs from −100 N·m to 100 N·m) for a from 0 to 2 m. It comes closest at a = 2.000 m, where it is 100 N·m. Past 2 m it is still heading for 271.2 N·m: a straight line through the last samples reaches it near a = 3.712 m (an extrapolation, not a finding).",
+    );
+    await user.click(screen.getByRole("button", { name: "Search from 0 to 4.57 m" }));
+    await waitFor(() =>
+      expect(screen.getByTestId("limit-answer").textContent).toBe(
+        "The moment at base reaches 271.2 N·m at a = 3.712 m (to 4 significant figures). Searched from 0 to 4.57 m as typed now; the plot shows 0 to 2 m.",
+      ),
+    );
+    // the form says the range searched; no wider range is offered once found
+    expect(screen.getByRole("textbox", { name: "To" })).toHaveValue("4.57");
+    expect(screen.queryByTestId("limit-wider")).toBeNull();
+    await user.clear(screen.getByRole("textbox", { name: "To" }));
+    await user.type(screen.getByRole("textbox", { name: "To" }), "2");
     // the wrong kind of quantity is refused in words, naming the target
     await findLimit(user, "3 kg");
     expect((await screen.findByRole("alert")).textContent).toBe("Target: 3 kg is a mass (kg), but this field needs a moment (N·m).");
@@ -322,7 +337,7 @@ describe("Sweep tab", () => {
     expect(screen.queryByTestId("limit-answer")).toBeNull();
     // out of reach: M_base runs from −100 N·m (a = 0) to 100 N·m (a = 2 m), in words with units
     await findLimit(user, "200");
-    expect((await screen.findByTestId("limit-answer")).textContent).toBe("No crossing in this range: the moment at base stays below 200 N·m (it runs from −100 N·m to 100 N·m) for a from 0 to 2 m.");
+    expect((await screen.findByTestId("limit-answer")).textContent).toMatch(/^No crossing in this range: the moment at base stays below 200 N·m \(it runs from −100 N·m to 100 N·m\) for a from 0 to 2 m\. It comes closest at a = 2\.000 m, where it is 100 N·m\. Past 2 m it is still heading for 200 N·m: a straight line through the last samples reaches it near a = 3\.000 m/);
     expect(screen.queryByTestId("limit-error")).toBeNull();
   });
 

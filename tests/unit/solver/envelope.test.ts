@@ -334,18 +334,25 @@ describe("governing cases that tie, named and marked in every table", () => {
   });
 });
 
-describe("the least margin of a tie already slack is not said as closest to going slack", () => {
-  // A 200 kg beam (weight at x = 1 m) on a pin at x = 0 and a contact at x = 2 m, with an anchor
-  // bolt (a tie pulling down) at x = 1 m. Statics by hand (common practice): the weight presses
-  // the beam down, so the bolt would have to push and goes slack in every case; the contact
-  // carries n = W/2 (moments about the pin), 1.5·W/2 in the heavy case.
-  const doc = sketch({
+/** A 200 kg beam (weight at x = 1 m) on a pin at x = 0, a pad (a contact facing up) at x = 2 m
+ *  and an anchor bolt (a tie pulling down) at x = 1 m. */
+const beamOnBolt = (extra: Partial<SketchFileInput>): SketchFileInput =>
+  sketch({
     bodies: [{ id: "s", outline: box(2, 0.5), mass: 200, cg: [1, 0.25] }],
     supports: [
       { id: "pin", body: "s", kind: "pin", at: [0, 0] },
       { id: "pad", body: "s", kind: "contact", at: [2, 0], angle: 90 },
       { id: "bolt", body: "s", kind: "tie", at: [1, 0], angle: -90 },
     ],
+    ...extra,
+  });
+
+describe("a tie slack in every case carries nothing: no margin, no design load", () => {
+  // A 200 kg beam (weight at x = 1 m) on a pin at x = 0 and a contact at x = 2 m, with an anchor
+  // bolt (a tie pulling down) at x = 1 m. Statics by hand (common practice): the weight presses
+  // the beam down, so the bolt would have to push and goes slack in every case; the contact
+  // carries n = W/2 (moments about the pin), 1.5·W/2 in the heavy case.
+  const doc = beamOnBolt({
     cases: [
       { id: "dead", name: "Dead" },
       { id: "heavy", name: "Heavy", factors: { dead: 1.5 } },
@@ -353,21 +360,70 @@ describe("the least margin of a tie already slack is not said as closest to goin
   });
   const study = solveCases(fileOf(doc));
 
-  it("names the slack bolt's least margin as slack, and the bearing pad's as closest to lifting", () => {
+  it("says no case governs the slack bolt's margin or is its design load; the bearing pad's least margin is closest to lifting", () => {
     const t = caseReactionTable(study, "SI");
     const gov = t.columns.findIndex((c) => c.key === "governs");
     const row = (caseName: string, support: string) => t.rows.find((r) => r[0] === caseName && r[1] === support)!;
     for (const run of study.runs) {
       if (!run.ok) throw new Error();
       expect(run.result.reactions.bolt.state).toBe("slack");
+      // the solver's margin (−k·gap) stays below zero for sweeps; the envelope counts it 0
       expect(run.result.reactions.bolt.margin).toBeLessThan(0);
     }
+    expect(study.envelope.bolt.components.margin).toMatchObject({ max: { value: 0 }, min: { value: 0 } });
     const dead = study.runs.find((r) => r.id === "dead")!;
     if (!dead.ok) throw new Error();
     expectRel(dead.result.reactions.pad.n!, W / 2, 1e-6);
-    const slackRows = ["Dead", "Heavy"].map((c) => String(row(c, "bolt")[gov]));
-    expect(slackRows.some((w) => w.includes("least margin (slack)"))).toBe(true);
-    expect(slackRows.join(" ")).not.toMatch(/closest to going slack/);
+    const boltWords = ["Dead", "Heavy"].map((c) => String(row(c, "bolt")[gov])).join(" | ");
+    expect(boltWords).not.toMatch(/design load|closest to going slack|least margin/);
     expect(String(row("Dead", "pad")[gov])).toContain("least margin (closest to lifting)");
+    expect(String(row("Heavy", "pad")[gov])).toContain("design load");
+  });
+
+  it("the design-load table gives the bolt no case and no direction", () => {
+    const t = designLoadTable(study, "SI");
+    const r = t.rows.find((x) => x[0] === "bolt")!;
+    const col = (k: string) => t.columns.findIndex((c) => c.key === k);
+    expect(r[col("design")]).toBe(0);
+    expect(r[col("angle")]).toBeNull();
+    expect(r[col("case")]).toBe("none: carries nothing in any case");
+    // the pad: W/2 up in Dead, 1.5·W/2 in Heavy (kN)
+    const pad = t.rows.find((x) => x[0] === "pad")!;
+    expectRel(pad[col("design")] as number, (1.5 * W) / 2 / 1000, 1e-6);
+    expect(pad[col("angle")]).toBeCloseTo(90, 9);
+    expect(pad[col("case")]).toBe("Heavy");
+  });
+});
+
+describe("a tie slack in one case and taut in another: its least margin is where it is slack, said as carrying nothing", () => {
+  // The same beam with an uplift P = 4000 N up at x = 1.5 m in the "Uplift" case. With the pad
+  // lifted, the pin and the bolt are determinate; moments about the pin (common practice):
+  // P·1.5 − W·1 − T·1 = 0 → T = 1.5·P − W = 4038.7 N. In "Dead" (P × 0) the bolt is slack as above.
+  const P = 4000;
+  const doc = beamOnBolt({
+    loads: [{ id: "up", body: "s", kind: "force", at: [1.5, 0.5], fx: 0, fy: P }],
+    cases: [
+      { id: "dead", name: "Dead", factors: { loads: 0 } },
+      { id: "uplift", name: "Uplift" },
+    ],
+  });
+  const study = solveCases(fileOf(doc));
+
+  it("takes T = 1.5·P − W in Uplift, and names Dead (slack: carries nothing) as the least margin", () => {
+    const up = study.runs.find((r) => r.id === "uplift")!;
+    if (!up.ok) throw new Error();
+    expect(up.result.reactions.pad.state).toBe("lifted");
+    expectRel(up.result.reactions.bolt.n!, 1.5 * P - W, 1e-9);
+    // pin, pad lifted and bolt taut: determinate as solved, though three supports as drawn are not
+    expect(up.result.bodies.s.determinacy).toEqual({ kind: "indeterminate", degree: 1 });
+    expect(up.result.bodies.s.activeDeterminacy).toEqual({ kind: "determinate", degree: 0 });
+    expect(up.result.warnings.map((w) => w.code)).toEqual(["LIFTOFF"]);
+    expect(study.envelope.bolt.components.margin).toMatchObject({ min: { value: 0, case: "dead" } });
+    const t = caseReactionTable(study, "SI");
+    const gov = t.columns.findIndex((c) => c.key === "governs");
+    const row = (caseName: string, support: string) => String(t.rows.find((r) => r[0] === caseName && r[1] === support)![gov]);
+    expect(row("Dead", "bolt")).toContain("least margin (slack: carries nothing)");
+    expect(row("Uplift", "bolt")).toContain("design load");
+    expect(row("Uplift", "pad")).toContain("least margin (lifted off: carries nothing)");
   });
 });

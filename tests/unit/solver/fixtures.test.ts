@@ -135,6 +135,13 @@ describe("fire-monitor-trailer: lifts (LIFTOFF at the jack), INDETERMINATE", () 
     expect(r.reactions.jack.margin!).toBeLessThan(0);
     expect(r.bodies.trailer.status).toBe("lifts");
     expect(codes(r)).toEqual(["INDETERMINATE", "LIFTOFF"]);
+    // with the jack off, the leg and the wheel (n and t each, both with μ: 4 unknowns) are still
+    // indeterminate, degree 1: the friction they share follows their stiffnesses; as drawn, degree 3
+    expect(r.bodies.trailer.determinacy).toEqual({ kind: "indeterminate", degree: 3 });
+    expect(r.bodies.trailer.activeDeterminacy).toEqual({ kind: "indeterminate", degree: 1 });
+    const ind = r.warnings.find((w) => w.code === "INDETERMINATE")!;
+    expect(ind.message).toMatch(/degree 1 with the supports that carry load/);
+    expect(ind.ids.sort()).toEqual(["leg", "wheel"]);
     // the friction is shared equally by the two bearing contacts
     expectRel(r.reactions.leg.fx, -F[0] / 2, 1e-9);
   });
@@ -214,7 +221,7 @@ describe("skid-vertical-mechanism: holds with MECHANISM", () => {
   });
 });
 
-describe("exhaust-stack-guyed: lifts (SLACK east guy), INDETERMINATE", () => {
+describe("exhaust-stack-guyed: lifts (SLACK east guy), determinate as solved", () => {
   it("with the east guy slack, the pin and the west guy are determinate", () => {
     const r = run("exhaust-stack-guyed.json");
     const W = 1800 * G0;
@@ -236,7 +243,11 @@ describe("exhaust-stack-guyed: lifts (SLACK east guy), INDETERMINATE", () => {
     expectRel(r.reactions.base.fx, outF[0] - inF[0] - wind + T / Math.SQRT2, 1e-9);
     expectRel(r.reactions.base.fy, outF[1] - inF[1] + W + T / Math.SQRT2, 1e-9);
     expect(r.bodies.stack.status).toBe("lifts");
-    expect(codes(r)).toEqual(["INDETERMINATE", "SLACK"]);
+    // three supports as drawn (4 unknowns) are indeterminate; the slack guy carries nothing, and the
+    // pin and the west guy (3 unknowns) are determinate: the reactions above come from statics alone
+    expect(r.bodies.stack.determinacy).toEqual({ kind: "indeterminate", degree: 1 });
+    expect(r.bodies.stack.activeDeterminacy).toEqual({ kind: "determinate", degree: 0 });
+    expect(codes(r)).toEqual(["SLACK"]);
   });
 });
 
@@ -268,7 +279,9 @@ describe("pump-set-hold-down: the strap re-engages when a pad lifts", () => {
     expectRel(r.reactions.leftPad.fx, J, 1e-9);
     expect(r.reactions.rightPad.state).toBe("lifted");
     expect(r.bodies.set.status).toBe("lifts");
-    expect(codes(r)).toEqual(["INDETERMINATE", "LIFTOFF"]);
+    // the left pad (n and t: it has μ) and the strap carry load, 3 unknowns: determinate as solved
+    expect(r.bodies.set.activeDeterminacy).toEqual({ kind: "determinate", degree: 0 });
+    expect(codes(r)).toEqual(["LIFTOFF"]);
   });
 
   it("the answer does not depend on the strap's stiffness, even when it is released first", async () => {

@@ -1,0 +1,142 @@
+// The limit finder when the target is not reached in the range: where the quantity came closest,
+// which way it goes at each end, and the wider range worth a search — checked against statics
+// worked by hand for a stand on a front pin and a rear contact (common practice).
+import { describe, expect, it } from "vitest";
+import { findLimit } from "@/solver";
+import { G0 } from "@/solver/constants";
+import { noLimitHint, rangeWords, roundOut } from "@/components/studies/limitHint";
+import { box, expectRel, parsed, sketch } from "../solver/helpers";
+
+// A 200 kg stand (weight at x = 1 m) on a front pin at x = 2 m and a rear contact at x = 0 facing
+// up. Moments about the pin: −2·n + W·1 + M_load = 0, so n = (W + M_load)/2.
+const W = 200 * G0;
+const shown = (si: number) => `${(si / 1000).toFixed(4)} kN`;
+
+describe("a thrust T in +x at 1.2 m: the rear lifts at T = W·d/h (common practice)", () => {
+  // M_load = −1.2·T → n = (W − 1.2·T)/2, zero at T* = W/1.2 = 1634.4 N (d = 1 m from the pin to
+  // the weight, h = 1.2 m)
+  const sk = parsed(
+    sketch({
+      parameters: { T: "500 N" },
+      bodies: [{ id: "s", outline: box(2, 1.5), mass: 200, cg: [1, 0.7] }],
+      supports: [
+        { id: "front", body: "s", kind: "pin", at: [2, 0] },
+        { id: "rear", body: "s", kind: "contact", at: [0, 0], angle: 90 },
+      ],
+      loads: [{ id: "thrust", body: "s", kind: "force", at: [0, 1.2], fx: "T", fy: 0 }],
+    }),
+  );
+  const Tstar = W / 1.2;
+
+  it("searched from 0 to 1000 N: no crossing, closest at 1000 N with n = (W − 1200)/2, heading for zero near T*", () => {
+    const r = findLimit(sk, "T", [0, 1000], { support: "rear", component: "margin" });
+    if (r.found) throw new Error("found");
+    expectRel(r.closest!.at, 1000, 1e-12);
+    expectRel(r.closest!.value, (W - 1200) / 2, 1e-9);
+    expect(r.ends!.lo).toEqual({ toward: false });
+    expect(r.ends!.hi.toward).toBe(true);
+    // n is linear in T: the line through the last two samples is the exact one
+    expectRel(r.ends!.hi.estimate!, Tstar, 1e-9);
+    const hint = noLimitHint(r, { from: 0, to: 1000 }, { parameter: "T", pName: "T", target: "0 kN", shown });
+    expect(hint.words).toBe(
+      "It comes closest at T = 1,000 N, where it is 0.3807 kN. Past 1,000 N it is still heading for 0 kN: a straight line through the last samples reaches it near T = 1,634 N (an extrapolation, not a finding).",
+    );
+    // half as far again past the end as the line says (1.5 × 634.4 = 951.7 N), rounded out to 10 N
+    expect(hint.wider).toEqual({ from: 0, to: 1960 });
+    expect(rangeWords(hint.wider!, "N")).toBe("from 0 to 1,960 N");
+    // and the wider search finds it
+    const again = findLimit(sk, "T", [hint.wider!.from, hint.wider!.to], { support: "rear", component: "margin" });
+    if (!again.found) throw new Error("not found");
+    expectRel(again.value, Tstar, 1e-8);
+  });
+
+  it("a range typed high to low is offered high to low", () => {
+    const r = findLimit(sk, "T", [1000, 0], { support: "rear", component: "margin" });
+    if (r.found) throw new Error("found");
+    expect(noLimitHint(r, { from: 1000, to: 0 }, { parameter: "T", pName: "T", target: "0 kN", shown }).wider).toEqual({ from: 1960, to: 0 });
+  });
+});
+
+describe("a force of 500 N turned through θ at the rear top corner: the margin dips inside the range and rises at both ends", () => {
+  // F·(cos θ, sin θ) at (0, 1.2): its moment about the pin (2, 0) is −F·(2·sin θ + 1.2·cos θ), so
+  // n = (W − F·(2·sin θ + 1.2·cos θ))/2, least where 2·sin θ + 1.2·cos θ is largest: at
+  // θ = atan2(2, 1.2) = 59.04°, n = (W − F·√(2² + 1.2²))/2 = 397.6 N
+  const F = 500;
+  const sk = parsed(
+    sketch({
+      parameters: { theta: "30 deg" },
+      bodies: [{ id: "s", outline: box(2, 1.5), mass: 200, cg: [1, 0.7] }],
+      supports: [
+        { id: "front", body: "s", kind: "pin", at: [2, 0] },
+        { id: "rear", body: "s", kind: "contact", at: [0, 0], angle: 90 },
+      ],
+      loads: [{ id: "pull", body: "s", kind: "force", at: [0, 1.2], magnitude: F, angle: "theta" }],
+    }),
+  );
+
+  it("finds the least margin and where, and offers no wider range", () => {
+    const r = findLimit(sk, "theta", [20, 100], { support: "rear", component: "margin" });
+    if (r.found) throw new Error("found");
+    const at = (Math.atan2(2, 1.2) * 180) / Math.PI;
+    expect(Math.abs(r.closest!.at - at)).toBeLessThan(1e-4);
+    expectRel(r.closest!.value, (W - F * Math.hypot(2, 1.2)) / 2, 1e-9);
+    expect(r.ends).toEqual({ lo: { toward: false }, hi: { toward: false } });
+    const hint = noLimitHint(r, { from: 20, to: 100 }, { parameter: "theta", pName: "θ", target: "0 kN", shown });
+    expect(hint.wider).toBeUndefined();
+    expect(hint.words).toBe(
+      "It comes closest at θ = 59.04 deg, where it is 0.3976 kN. At both ends it is moving away from 0 kN: a wider range finds a crossing only if the curve turns back (the plot shows its shape).",
+    );
+  });
+});
+
+describe("the wider range", () => {
+  it("is rounded outward to three figures of its width", () => {
+    // a width of 162: whole units; of 1.62: hundredths
+    expect(roundOut(-91.234, 71.02)).toEqual({ from: -92, to: 72 });
+    expect(roundOut(-0.91234, 0.7102)).toEqual({ from: -0.92, to: 0.72 });
+    expect(roundOut(0, 1951.66)).toEqual({ from: 0, to: 1960 });
+  });
+
+  it("does not take the flow factor below zero, and goes at most ten ranges past an end", () => {
+    const base = { found: false as const, unit: "", reason: "", min: 1, max: 2, closest: { at: 0.5, value: 1 } };
+    const down = noLimitHint({ ...base, ends: { lo: { toward: true, estimate: -3 }, hi: { toward: false } } }, { from: 0.5, to: 1.5 }, { parameter: "flowFactor", pName: "flow factor", target: "0 kN", shown });
+    expect(down.wider).toEqual({ from: 0, to: 1.5 });
+    const far = noLimitHint({ ...base, ends: { lo: { toward: false }, hi: { toward: true, estimate: 500 } } }, { from: 0, to: 1 }, { parameter: "p", pName: "p", target: "0 kN", shown });
+    expect(far.wider).toEqual({ from: 0, to: 11 });
+    expect(far.words).toContain("reaches it only far out, near p = 500");
+  });
+});
+
+describe("a tie slack all through the range: it carries nothing, and no figure of its margin is said", () => {
+  // The beam of a pin at x = 0, a pad (contact facing up) at x = 2 m and an anchor bolt (a tie
+  // pulling down) at x = 1 m, weight W at x = 1 m, and an uplift P at x = 1.5 m. With the bolt
+  // slack, moments about the pin: 2·n − W + 1.5·P = 0, so the pad bears n = (W − 1.5·P)/2 and lifts
+  // at P = W/1.5 = 1307.6 N, where the bolt takes over: T = 1.5·P − W (common practice).
+  const sk = parsed(
+    sketch({
+      parameters: { P: "100 N" },
+      bodies: [{ id: "s", outline: box(2, 0.5), mass: 200, cg: [1, 0.25] }],
+      supports: [
+        { id: "pin", body: "s", kind: "pin", at: [0, 0] },
+        { id: "pad", body: "s", kind: "contact", at: [2, 0], angle: 90 },
+        { id: "bolt", body: "s", kind: "tie", at: [1, 0], angle: -90 },
+      ],
+      loads: [{ id: "up", body: "s", kind: "force", at: [1.5, 0.5], fx: 0, fy: "P" }],
+    }),
+  );
+
+  it("searched from 0 to 1000 N: held all through, slack all through, heading back toward taking load; the wider range finds P = W/1.5", () => {
+    const r = findLimit(sk, "P", [0, 1000], { support: "bolt", component: "margin" });
+    if (r.found) throw new Error("found");
+    expect(r.held).toBe("all");
+    expect(r.max).toBeLessThan(0);
+    expect(r.ends!.hi.toward).toBe(true);
+    const hint = noLimitHint(r, { from: 0, to: 1000 }, { parameter: "P", pName: "P", target: "0 kN", shown, released: "slack" });
+    expect(hint.words).toBe("Past 1,000 N it is heading back toward taking load: a wider range may find where it does.");
+    expect(hint.wider!.from).toBe(0);
+    expect(hint.wider!.to).toBeGreaterThan(W / 1.5);
+    const again = findLimit(sk, "P", [hint.wider!.from, hint.wider!.to], { support: "bolt", component: "margin" });
+    if (!again.found) throw new Error("not found");
+    expectRel(again.value, W / 1.5, 1e-7);
+  });
+});
