@@ -9,12 +9,7 @@ import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import type { SketchFile } from "@/solver/schema";
 import { withModalDialogs, withResizeObserver } from "./dialog-support";
 import { beamWithInlet, changeInletArea, jsonResponse } from "./editor-helpers";
-
-vi.mock("next/navigation", () => ({
-  useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }),
-  useSearchParams: () => new URLSearchParams(""),
-}));
-const { SavedSketchEditor } = await import("@/components/versions/editor/SavedSketchEditor");
+import { SavedSketchEditor } from "@/components/versions/editor/SavedSketchEditor";
 
 beforeAll(() => {
   withModalDialogs();

@@ -6,8 +6,7 @@ import { render, screen } from "@testing-library/react";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { withResizeObserver } from "./dialog-support";
 
-vi.mock("next/navigation", () => ({ useRouter: () => ({ push: vi.fn(), replace: vi.fn(), refresh: vi.fn() }) }));
-const { CompareScreen } = await import("@/components/review/CompareScreen");
+import { CompareScreen } from "@/components/review/CompareScreen";
 
 const trailer = JSON.parse(readFileSync("canvas/examples/fire-monitor-trailer.json", "utf8"));
 
