@@ -14,6 +14,7 @@ import { useVersions } from "@/components/versions/VersionHistory";
 import { setAddressParam } from "@/lib/address";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { changeCount, compareSketches } from "@/lib/review/compare";
+import { clashList } from "@/lib/review/mergeWords";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
@@ -39,6 +40,7 @@ function useDocument(sketchId: string, which: number | "draft", draftTab?: strin
       error: merged.error ? "The versions your kept changes are merged with could not be loaded." : null,
       pending: merged.isPending,
       conflicts: m?.conflicts ?? [],
+      merged: m ?? null,
       // the tab that kept it: bringing back or discarding acts on this draft, not a newer one another tab keeps meanwhile
       tab: draft.tab ?? "",
     };
@@ -49,6 +51,7 @@ function useDocument(sketchId: string, which: number | "draft", draftTab?: strin
     error: remote.error instanceof ApiError ? remote.error.message : remote.error ? "The version could not be loaded." : null,
     pending: remote.isPending,
     conflicts: [] as string[],
+    merged: null,
   };
 }
 
@@ -90,6 +93,8 @@ export function CompareScreen({
   const base = `/workspaces/${workspaceId}/sketches/${sketchId}`;
   const go = (f: number, t: number | "draft") => router.replace(`${base}/compare?from=${f}&to=${t}${layout === "overlay" ? "&drawings=overlay" : ""}`);
   const toLabel = to === "draft" ? "your changes" : `v${to}`;
+  // the fields you and a later version both changed, in words with both values (`clashList`)
+  const clashes = b.merged && b.conflicts.length ? clashList(b.conflicts, b.merged.sketch, b.merged.theirs, `v${b.merged.newest}`, units) : "";
 
   return (
     <div className="space-y-5">
@@ -139,7 +144,7 @@ export function CompareScreen({
             <div className="flex flex-wrap items-center gap-2 text-sm" data-testid="draft-open-elsewhere">
               {b.conflicts.length ? (
                 <p className="basis-full text-[12.5px] text-caution" data-testid="kept-work-conflicts">
-                  You and a later version both changed {b.conflicts.join(", ")}: bringing v{from} in keeps yours there.
+                  You and a later version both changed these, and bringing v{from} in keeps yours: {clashes}.
                 </p>
               ) : null}
               <p className="text-ink-soft">Your changes are still open in the editor tab you came from: go back there to bring v{from} in, or to save them as a fork. Nothing here changes them.</p>
@@ -148,7 +153,7 @@ export function CompareScreen({
             <div className="flex flex-wrap items-center gap-2 text-sm">
               {b.conflicts.length ? (
                 <p className="basis-full text-[12.5px] text-caution" data-testid="kept-work-conflicts">
-                  You and a later version both changed {b.conflicts.join(", ")}: bringing your changes back uses yours there.
+                  You and a later version both changed these, and bringing your changes back uses yours: {clashes}.
                 </p>
               ) : null}
               <a href={`/sketches/${sketchId}?restore=1&draft=${encodeURIComponent(b.tab ?? "")}`} className="rounded-md bg-ink px-3 py-2 font-medium text-paper hover:bg-ink-soft">

@@ -52,7 +52,7 @@ export type Comparison = {
 };
 
 /** The unit of each numeric field, by its name. */
-const FIELD_QUANTITY: Record<string, Quantity | "rotationalStiffness"> = {
+export const FIELD_QUANTITY: Record<string, Quantity | "rotationalStiffness"> = {
   mass: "mass",
   cg: "length",
   at: "length",
@@ -140,13 +140,14 @@ const sameText = (a: string, b: string) => a.replace(/[\s,]/g, "") === b.replace
 
 const LBF_FT_PER_NM = 1 / (LBF_N * FOOT_M);
 
-function quantityText(si: number, q: Quantity | "rotationalStiffness", units: UnitSystem): string {
+/** A value in SI as `units` write it, with its unit ("1,963 mm²"). */
+export function quantityText(si: number, q: Quantity | "rotationalStiffness", units: UnitSystem): string {
   if (q === "rotationalStiffness") return units === "SI" ? `${formatNumber(si)} N·m/rad` : `${formatNumber(si * LBF_FT_PER_NM)} lbf·ft/rad`;
   return formatQuantity(si, q, units);
 }
 
 /** A point (m) in the chosen units. */
-function pointText(xs: number[], units: UnitSystem): string {
+export function pointText(xs: number[], units: UnitSystem): string {
   return units === "SI" ? `(${xs.map((x) => formatNumber(x)).join(", ")}) m` : `(${xs.map((x) => formatNumber(x / FOOT_M)).join(", ")}) ft`;
 }
 

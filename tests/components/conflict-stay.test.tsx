@@ -92,7 +92,10 @@ describe("staying on the sketch after a save conflict", { timeout: 30000 }, () =
     serve((s) => ({ ...s, ports: [{ ...s.ports[0], area: 0.015 }] }) as SketchFile);
     const { user, dialog } = await saveIntoConflict();
     await user.click(within(dialog).getByRole("button", { name: "Stay and bring v4 in" }));
-    expect((await screen.findByTestId("merged-here")).textContent).toContain("You and v4 both changed ports[p1].area: yours are kept there — check them before saving.");
+    // named as the screens name it, with both values and their unit: 0.02 m² typed here, 0.015 m² in v4, as the area field shows them
+    const notice = (await screen.findByTestId("merged-here")).textContent;
+    expect(notice).toContain("You and v4 both changed these, and yours are kept — check them before saving: Inlet p1: area (yours 20,000 mm²; v4 has 15,000 mm²).");
+    expect(notice).not.toContain("ports[");
     await user.click(screen.getByRole("button", { name: "Got it" }));
     expect(screen.queryByTestId("merged-here")).toBeNull();
   });

@@ -394,7 +394,7 @@ function Bar({ flow }: { flow: SaveFlow }) {
       if (!sameDocument(merged.sketch, mine)) editor.apply(replaceSketch({ sketch: merged.sketch, label: `Bring v${newest} in` }) as Command<unknown>);
       flow.setState({ base: newest, baseDoc: merged.theirs, info: { ...info, latest: Math.max(info.latest, newest) }, savedElsewhere: undefined });
       dropVersionFromAddress();
-      const words = mergedHereNotice(newest, base, merged.conflicts);
+      const words = mergedHereNotice(newest, base, merged, editor.units);
       setConflict(null);
       setMergedHere(words);
       editor.notify(words);

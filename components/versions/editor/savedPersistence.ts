@@ -3,6 +3,7 @@
 // steps are shown by <SavedSketchBar>, which reads and answers the controller's state.
 import { createStore, type StoreApi } from "zustand/vanilla";
 import type { LoadOutcome, SaveOutcome, SketchPersistence } from "@/canvas/persistence";
+import { readUnitsPreference } from "@/components/sketches/format";
 import { uploadFile } from "@/components/uploads/uploadFile";
 import { apiFetch, ApiError } from "@/lib/api-client";
 import { can, type Role } from "@/lib/roles";
@@ -91,7 +92,7 @@ export function savedPersistence(sketchId: string, flow: SaveFlow, opts: { versi
           // still open, goes on writing its own)
           const { tab } = flow.getState();
           if (draft.tab !== tab && keepDraft({ ...draft, tab })) discardDraft(sketchId, draft.tab ?? "");
-          flow.setState({ info, base: s.latestVersion, restored: true, restoredNotice: restoredNotice(merged, draft.baseVersion) });
+          flow.setState({ info, base: s.latestVersion, restored: true, restoredNotice: restoredNotice(merged, draft.baseVersion, readUnitsPreference()) });
           return { ok: true, sketch: merged.sketch, version: s.latestVersion, readOnly: !can(s.role, "version.save") };
         }
         const number = opts.version && opts.version <= s.latestVersion ? opts.version : s.latestVersion;
