@@ -7,6 +7,7 @@ import type { Command } from "./commands/define";
 import { nearestOnOutline, nearestOnSegment, outwardNormal, angleOf, pointInPolygon, polygonCentroid, boxContains, type Box } from "./geometry/polygon";
 import { findElement, nextId, type Attached, type ElementKind, GROUP_OF } from "./model/elements";
 import { defaultBodySize, newAttached, newBody, DEFAULT_ANGLE } from "./model/factory";
+import { roundTo } from "./model/numeric";
 import { LEGEND_ROOM } from "./geometry/fit";
 import { toScreen, type View } from "./geometry/view";
 import { anchorOf, pointsOf, type Scene, type SceneBody } from "./scene";
@@ -42,7 +43,7 @@ export function angleOnEdge(kind: ElementKind, body: SceneBody | undefined, p: V
   const hit = nearestOnOutline(p, body.outline);
   if (hit.edge < 0 || hit.distance > tol) return fallback;
   const out = angleOf(outwardNormal(body.outline, hit.edge));
-  const r = (a: number) => Math.round(a * 1000) / 1000 || 0;
+  const r = (a: number) => roundTo(a, 1e-3);
   if (kind === "tie" || kind === "outlet") return r(out);
   return r(out + 180 > 180 ? out - 180 : out + 180);
 }

@@ -5,13 +5,11 @@
 import { rescaleAbout } from "@/solver/underlay";
 import type { UnderlayFile } from "@/solver/schema";
 import type { Vec2 } from "@/solver/types";
+import { roundTo } from "../model/numeric";
 import { defineCommand, edit } from "./define";
 
-/** Round to a step given as a power of ten (1e-6 m, 0.01): multiplying by its inverse keeps decimals clean. */
-const round = (v: number, step = 1e-6) => {
-  const k = Math.round(1 / step);
-  return Math.round(v * k) / k;
-};
+/** Round to a step (1e-6 m, 0.01), a half away from zero, without floating noise. */
+const round = (v: number, step = 1e-6) => roundTo(v, step);
 const pt = (p: Vec2): Vec2 => [round(p[0]), round(p[1])];
 
 /** Put an uploaded image under the sketch (replacing any underlay there was). */

@@ -1,5 +1,6 @@
 // Snapping a point while placing or dragging: body corners first, then body edges, then the grid.
 import type { Vec2 } from "@/solver/types";
+import { roundTo } from "../model/numeric";
 import { nearestOnOutline, nearestOnSegment } from "./polygon";
 
 export type SnapKind = "corner" | "edge" | "grid" | "none";
@@ -83,10 +84,12 @@ export function snapPoint(p: Vec2, o: SnapOptions): SnapResult {
   return { point: p, kind: "none" };
 }
 
+/**
+ * The grid point nearest x: a half step goes away from zero, with floating error forgiven (0.3 on
+ * a 0.2 grid → 0.4, −0.3 → −0.4); grid values stay clean in the file (0.30000000000000004 → 0.3).
+ */
 export function snapTo(x: number, step: number): number {
-  const r = Math.round(x / step) * step;
-  // keep grid values clean in the file: 0.30000000000000004 → 0.3
-  return Number(r.toFixed(Math.max(0, Math.ceil(-Math.log10(step)) + 2))) || 0;
+  return roundTo(x, step);
 }
 
 const clamp = (x: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, x));

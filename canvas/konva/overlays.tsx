@@ -8,6 +8,7 @@ import { useStore } from "zustand";
 import type { Vec2 } from "@/solver/types";
 import { useEditor, useScene, useStores } from "../context";
 import { DIRECTED, GROUP_OF } from "../model/elements";
+import { roundTo } from "../model/numeric";
 import { elementGroups, resultLayer } from "../render/scenePrims";
 import { drawingFamily, supportStates } from "../render/results";
 import { itemPrims } from "../render/symbols";
@@ -22,6 +23,8 @@ import { canvasFont } from "./font";
 import type { InteractionStore } from "./interaction";
 import { shiftBox } from "../render/labels";
 import { momentPointPrims } from "../render/momentPoint";
+import { NOTE_GAP, noteWidth, pointerNotePlace } from "../render/pointerNote";
+import { toScreen } from "../geometry/view";
 
 const px = (p: Vec2, s: number): [number, number] => [p[0] * s, -p[1] * s];
 export { ROTATE_HANDLE_PX, handlePlace } from "../render/handles";
@@ -147,10 +150,21 @@ export const SelectionHandles = memo(function SelectionHandles() {
     <Group>
       <Line points={[a[0], a[1], h[0], h[1]]} stroke={ACCENT} strokeWidth={1} dash={[3, 3]} listening={false} />
       <Circle x={h[0]} y={h[1]} radius={6.5} fill={PAPER_CARD} stroke={ACCENT} strokeWidth={1.8} hit={{ type: "rotate", id: item.id }} hitStrokeWidth={10} />
-      <Text x={h[0] + place.readout[0]} y={h[1] + place.readout[1]} text={`${Math.round(item.angle * 10) / 10}°`} fontSize={10.5} fill={ACCENT} fontFamily={canvasFont()} listening={false} />
+      <Text x={h[0] + place.readout[0]} y={h[1] + place.readout[1]} text={`${roundTo(item.angle, 0.1)}°`} fontSize={10.5} fill={ACCENT} fontFamily={canvasFont()} listening={false} />
     </Group>
   );
 });
+
+/**
+ * A note beside the pointer at world point `at`, drawn in a group already placed there: right of
+ * and below the pointer, or flipped to its other side where the canvas's edge would cut it off.
+ */
+function PointerNote({ at, text, fontSize, fill, gap = NOTE_GAP }: { at: Vec2; text: string; fontSize: number; fill: string; gap?: Vec2 }) {
+  const view = useEditor((s) => s.view);
+  const viewport = useEditor((s) => s.viewport);
+  const [dx, dy] = pointerNotePlace(toScreen(view, at), { width: noteWidth(text, fontSize), height: fontSize * 1.25 }, viewport, gap);
+  return <Text x={dx} y={dy} text={text} fontSize={fontSize} fill={fill} fontFamily={canvasFont()} name="pointer-note" />;
+}
 
 export const PointerOverlay = memo(function PointerOverlay({ interaction }: { interaction: InteractionStore }) {
   const snap = useStore(interaction, (s) => s.snap);
@@ -185,7 +199,7 @@ export const PointerOverlay = memo(function PointerOverlay({ interaction }: { in
       {snap && snap.kind !== "none" && snap.kind !== "grid" && (
         <Group x={snap.point[0] * scale} y={-snap.point[1] * scale}>
           <Rect x={-5} y={-5} width={10} height={10} rotation={snap.kind === "corner" ? 45 : 0} offsetX={0} stroke={ACCENT} strokeWidth={1.4} />
-          <Text x={8} y={6} text={snap.kind === "corner" ? "corner" : "on edge"} fontSize={10} fill={ACCENT} fontFamily={canvasFont()} />
+          <PointerNote at={snap.point} text={snap.kind === "corner" ? "corner" : "on edge"} fontSize={10} fill={ACCENT} gap={[8, 6]} />
         </Group>
       )}
       {band && (
@@ -227,13 +241,13 @@ export const PointerOverlay = memo(function PointerOverlay({ interaction }: { in
       )}
       {ghost && !ghost.at && hover && (
         <Group x={hover[0] * scale} y={-hover[1] * scale}>
-          <Text x={10} y={8} text="not on a body: move onto or near its outline" fontSize={10.5} fill={CAUTION} fontFamily={canvasFont()} />
+          <PointerNote at={hover} text="not on a body: move onto or near its outline" fontSize={10.5} fill={CAUTION} />
         </Group>
       )}
       {tool.kind === "pick-point" && hover && (
         <Group x={hover[0] * scale} y={-hover[1] * scale}>
           <Circle radius={7} stroke={CAUTION} strokeWidth={1.5} />
-          <Text x={10} y={8} text="click: take moments about this point" fontSize={10.5} fill={INK_FAINT} fontFamily={canvasFont()} />
+          <PointerNote at={hover} text="click: take moments about this point" fontSize={10.5} fill={INK_FAINT} />
         </Group>
       )}
     </Group>

@@ -15,6 +15,7 @@ import { angleOf, normaliseAngle } from "../geometry/polygon";
 import { anchorOf, type SceneItem } from "../scene";
 import { bodyCommand, bodyPlaceInView, dropAttachments, elementsInBox, OUTLINE_REACH_PX, placeCommand, placedAtOutline } from "../placement";
 import { rectangleAround, rectangleOutline } from "../model/factory";
+import { roundTo } from "../model/numeric";
 import { markInput } from "../perf";
 import { moveUnderlay } from "../commands/underlay";
 import { calibrationClick } from "./underlayPointer";
@@ -337,7 +338,7 @@ export function createPointerController(deps: PointerDeps) {
           s.updateGesture([]);
           return;
         }
-        a = e.altKey ? Math.round(a * 10) / 10 : Math.round(a / ANGLE_STEP) * ANGLE_STEP;
+        a = roundTo(a, e.altKey ? 0.1 : ANGLE_STEP);
         s.updateGesture(rotateElement({ id: mode.id, angle: a, magnitude: mode.magnitude }) as Command<unknown>);
         return;
       }

@@ -2,6 +2,7 @@
 // snapping: the marks are features of the image, not of the grid). A third click starts again.
 import { worldToImage } from "@/solver/underlay";
 import type { Vec2 } from "@/solver/types";
+import { roundTo } from "../model/numeric";
 import type { EditorState } from "../store";
 
 export function calibrationClick(s: EditorState, world: Vec2): void {
@@ -11,7 +12,7 @@ export function calibrationClick(s: EditorState, world: Vec2): void {
     return;
   }
   const px = worldToImage({ origin: u.origin, metresPerPixel: u.metresPerPixel, rotation: u.rotation ?? 0 }, world);
-  const mark: Vec2 = [Math.round(px[0] * 100) / 100, Math.round(px[1] * 100) / 100];
+  const mark: Vec2 = [roundTo(px[0], 0.01), roundTo(px[1], 0.01)];
   const points = s.tool.points.length >= 2 ? [mark] : [...s.tool.points, mark];
   s.setTool({ kind: "calibrate", points });
   s.notify(

@@ -22,12 +22,35 @@ export function numericText(v: Numeric | undefined | null): string {
   return v;
 }
 
-/** Round to a step, without the 0.30000000000000004 noise. */
+/** How far a quotient may be from a half, relative to it, and still count as one: a few dozen
+ *  units of floating round-off (64 ε ≈ 1.4e-14), never a real difference in the value. */
+const HALF_TOLERANCE = 64 * Number.EPSILON;
+
+/**
+ * The whole number nearest q, a half going away from zero (2.5 → 3, −2.5 → −3: a drawing mirrored
+ * about an axis snaps as its mirror image does). A quotient within floating error of a half counts
+ * as that half: 0.3 / 0.2 computes as 1.4999999999999998 and rounds as 1.5 does, to 2. Every
+ * rounding of a typed or snapped value in the editor goes through here.
+ */
+export function roundHalfAway(q: number): number {
+  if (!Number.isFinite(q)) return q;
+  const a = Math.abs(q);
+  const whole = Math.floor(a);
+  const up = a - whole >= 0.5 - HALF_TOLERANCE * Math.max(1, a);
+  return Math.sign(q) * (up ? whole + 1 : whole) || 0;
+}
+
+/** The decimals a multiple of this step needs at most (0.2 → 1, 0.25 → 2, 1e-6 → 6, 5 → 0). */
+export function decimalsOf(step: number): number {
+  const [mantissa, exponent] = step.toExponential().split("e");
+  return Math.max(0, (mantissa.split(".")[1]?.length ?? 0) - Number(exponent));
+}
+
+/** Round to a step (a half away from zero, see `roundHalfAway`), without the 0.30000000000000004 noise. */
 export function roundTo(x: number, step = 1e-6): number {
-  if (!Number.isFinite(x)) return x;
-  const r = Math.round(x / step) * step;
-  const digits = Math.max(0, Math.ceil(-Math.log10(step)));
-  return Number(r.toFixed(Math.min(digits, 12))) || 0;
+  if (!Number.isFinite(x) || !(step > 0)) return x;
+  const r = roundHalfAway(x / step) * step;
+  return Number(r.toFixed(Math.min(decimalsOf(step), 15))) || 0;
 }
 
 /** A stored value as a plain number when it is one (or a string holding only a number). */

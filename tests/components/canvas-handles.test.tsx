@@ -22,6 +22,7 @@ import { useShortcuts } from "@/components/editor/useShortcuts";
 import { ActionContextCtx } from "@/components/editor/useActions";
 import { Tray } from "@/components/editor/Tray";
 import { TRAY_MIME } from "@/canvas/konva/interaction";
+import { noteWidth } from "@/canvas/render/pointerNote";
 import { measuredAs, mouseOn, stage } from "./canvas-support";
 
 /** A frame on a pad, with one of each directed element (invented demo data). */
@@ -410,5 +411,31 @@ describe("the preview of what a click places", () => {
     act(() => ed().setTool({ kind: "place", element: "force" }));
     hoverAt(screenOf([2, 2.6]));
     await waitFor(() => expect(warning()).toHaveLength(0));
+  });
+
+  it("the note beside the pointer stays inside the canvas: right of and below the pointer, flipped left at the right edge and above it at the bottom", async () => {
+    act(() => ed().setTool({ kind: "place", element: "pin" }));
+    // the note's box on screen: its top-left as drawn, its width as the drawing's words are estimated
+    const box = () => {
+      const t = warning()[0] as Konva.Text;
+      const p = t.getAbsolutePosition();
+      return { x0: p.x, y0: p.y, x1: p.x + noteWidth(t.text(), t.fontSize()), y1: p.y + t.fontSize() * 1.25 };
+    };
+    // (the pointer's spots are on the 0.2 m grid at 100 px/m, so the preview stays where it points)
+    // in the open, 1.4 m above the frame: 10 px right of and 8 px below the pointer
+    hoverAt([300, 160]);
+    await waitFor(() => expect(warning()).toHaveLength(1));
+    expect(box()).toMatchObject({ x0: 310, y0: 168 });
+    // 20 px from the canvas's right edge (800 px wide), far above the wedge: the 44-character note
+    // (about 259 px) would end past the edge; it goes left of the pointer, ending 10 px before it
+    hoverAt([780, 100]);
+    await waitFor(() => expect(box().x0).toBeLessThan(780));
+    expect(box().x1).toBeCloseTo(770, 6);
+    expect(box().y0).toBe(108);
+    // 20 px above the canvas's bottom edge (600 px), right of the wedge: above the pointer, and left of it
+    hoverAt([780, 580]);
+    await waitFor(() => expect(box().y1).toBeCloseTo(572, 6));
+    expect(box().x1).toBeCloseTo(770, 6);
+    expect(box().y0).toBeGreaterThanOrEqual(4);
   });
 });
