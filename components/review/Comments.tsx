@@ -20,10 +20,33 @@ export type CommentsData = {
   threads: ThreadItem[];
   /** open threads on earlier versions that are not approved, per version, oldest first */
   earlierOpen: Array<{ number: number; open: number }>;
+  /** the same on later versions (the sign-off counts both ways); absent from an older answer */
+  laterOpen?: Array<{ number: number; open: number }>;
   members: Member[];
   locked: boolean;
   canComment: boolean;
 };
+
+/** Open threads on other versions of the sketch, each version linked to its comments. */
+function OtherOpen({ testId, lead, list, tail, versionHref }: { testId: string; lead: string; list: ReadonlyArray<{ number: number; open: number }>; tail: string; versionHref: (n: number) => string }) {
+  const shown = list.filter((e) => e.open > 0);
+  if (!shown.length) return null;
+  return (
+    <p className="rounded-md border border-caution/40 bg-caution/5 px-2.5 py-1.5 text-xs text-ink-soft" data-testid={testId}>
+      {lead}:{" "}
+      {shown.map((e, i) => (
+        <span key={e.number}>
+          {i ? ", " : ""}
+          <Link href={`${versionHref(e.number)}#comments`} className="font-medium text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink">
+            v{e.number}
+          </Link>{" "}
+          ({e.open} thread{e.open === 1 ? "" : "s"})
+        </span>
+      ))}
+      . {tail}
+    </p>
+  );
+}
 
 /** The @mention being typed at the end of `text` (the words after “@”, "" right after it), or null when it does not end in one. */
 export function mentionQuery(text: string): string | null {
@@ -449,21 +472,20 @@ export function CommentsPanel({
       <p className="text-xs text-ink-faint">
         {data.threads.length} thread{data.threads.length === 1 ? "" : "s"}, {open} open
       </p>
-      {data.earlierOpen.length ? (
-        <p className="rounded-md border border-caution/40 bg-caution/5 px-2.5 py-1.5 text-xs text-ink-soft" data-testid="earlier-open">
-          Still open on earlier versions:{" "}
-          {data.earlierOpen.map((e, i) => (
-            <span key={e.number}>
-              {i ? ", " : ""}
-              <Link href={`${versionHref(e.number)}#comments`} className="font-medium text-ink underline decoration-ink/30 underline-offset-2 hover:decoration-ink">
-                v{e.number}
-              </Link>{" "}
-              ({e.open} thread{e.open === 1 ? "" : "s"})
-            </span>
-          ))}
-          . Answer or resolve them there if this version settles them.
-        </p>
-      ) : null}
+      <OtherOpen
+        testId="earlier-open"
+        lead="Still open on earlier versions"
+        list={data.earlierOpen}
+        tail="Answer or resolve them there if this version settles them."
+        versionHref={versionHref}
+      />
+      <OtherOpen
+        testId="later-open"
+        lead="Still open on later versions"
+        list={data.laterOpen ?? []}
+        tail="Asked of the drawing as it went on. A check or an approval of this version counts them too: resolve them there, or say in its note why they do not apply here."
+        versionHref={versionHref}
+      />
       {data.threads.length === 0 ? (
         data.canComment && !data.locked ? (
           <EmptyState title="No comments yet">Pin a comment to a support, a port or a point, or comment on the whole version.</EmptyState>

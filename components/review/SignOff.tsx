@@ -108,6 +108,29 @@ export function TitleBlock({ block, state }: { block: SignOffData["titleBlock"];
   );
 }
 
+/**
+ * Words that name versions ("1 on v1 and 1 on v4"), each of `versions` linked to its comments,
+ * where the open threads are; plain words without `href`.
+ */
+export function VersionLinkedText({ text, versions, href }: { text: string; versions: ReadonlyArray<number>; href?: (n: number) => string }) {
+  if (!href) return <>{text}</>;
+  const parts = text.split(/\b(v\d+)\b/);
+  return (
+    <>
+      {parts.map((part, i) => {
+        const n = /^v(\d+)$/.exec(part)?.[1];
+        return n !== undefined && versions.includes(Number(n)) ? (
+          <Link key={i} href={`${href(Number(n))}#comments`} className="font-medium underline decoration-ink/30 underline-offset-2 hover:decoration-ink">
+            {part}
+          </Link>
+        ) : (
+          part
+        );
+      })}
+    </>
+  );
+}
+
 /** What a check or an approval of a superseded version signs off: that version, not the newer one. */
 const SUPERSEDED_STEP: Partial<Record<SignOffStep, string>> = { check: "marking a superseded version checked", approve: "approving a superseded version" };
 const SUPERSEDED_ACT: Partial<Record<SignOffStep, string>> = { check: "this check", approve: "this approval" };
@@ -119,6 +142,8 @@ function StepDialog({
   newer,
   unanswered,
   threadLines,
+  openVersions = [],
+  versionHref,
   onClose,
   onDone,
 }: {
@@ -130,6 +155,9 @@ function StepDialog({
   unanswered: string | null;
   /** the findings that speak of open threads (`withOpenThreads`): said once, by `unanswered`, when it is set */
   threadLines: readonly string[];
+  /** the other versions with open threads: named in the words above, each linked to its comments */
+  openVersions?: readonly number[];
+  versionHref?: (n: number) => string;
   onClose: () => void;
   onDone: () => void;
 }) {
@@ -162,7 +190,7 @@ function StepDialog({
             <p className="font-semibold">Before you {step === "approve" ? "approve" : step === "check" ? "mark it checked" : "submit it (say in the note why it stands)"}, this version shows:</p>
             <ul className="mt-1 list-disc space-y-0.5 pl-5">
               {listed.map((c) => (
-                <li key={c}>{c}</li>
+                <li key={c}>{threadLines.includes(c) ? <VersionLinkedText text={c} versions={openVersions} href={versionHref} /> : c}</li>
               ))}
             </ul>
           </div>
@@ -174,7 +202,7 @@ function StepDialog({
         ) : null}
         {unanswered ? (
           <p className="rounded-md border border-caution/40 bg-caution-soft px-3 py-2 text-[13px] text-ink" data-testid="signoff-open-threads" role="note">
-            {unanswered}
+            <VersionLinkedText text={unanswered} versions={openVersions} href={versionHref} />
           </p>
         ) : null}
         <label htmlFor="signoff-note" className="block text-sm font-medium text-ink">
@@ -208,7 +236,22 @@ function StepDialog({
 
 /** `concerns`: what the version's own results say its author, checker or approver must not miss (a case not held, a factor of safety short). */
 /** `number`: the version signed off (its open threads are told apart from other versions'). */
-export function SignOffPanel({ data, path, number, concerns = [], onChanged }: { data: SignOffData; path: string; number: number; concerns?: readonly string[]; onChanged: () => void }) {
+/** `versionHref`: the review page of another version (the open threads' versions link there). */
+export function SignOffPanel({
+  data,
+  path,
+  number,
+  concerns = [],
+  versionHref,
+  onChanged,
+}: {
+  data: SignOffData;
+  path: string;
+  number: number;
+  concerns?: readonly string[];
+  versionHref?: (n: number) => string;
+  onChanged: () => void;
+}) {
   const [step, setStep] = useState<SignOffStep | null>(null);
   const qc = useQueryClient();
   const why = whyNoStep(data);
@@ -263,6 +306,8 @@ export function SignOffPanel({ data, path, number, concerns = [], onChanged }: {
           newer={data.newer}
           unanswered={noteForOpenThreads(step, data.openThreads ?? [], number)}
           threadLines={withOpenThreads([], data.openThreads ?? [], number)}
+          openVersions={(data.openThreads ?? []).filter((v) => v.open > 0 && v.number !== number).map((v) => v.number)}
+          versionHref={versionHref}
           onClose={() => setStep(null)}
           onDone={() => {
             setStep(null);

@@ -254,7 +254,7 @@ export function VersionReview({ workspaceId, sketchId, sketchTitle, number, late
       </div>
 
       <Panel title="Sign-off" description="Prepared by one engineer, checked by another, approved by an owner.">
-        {signoff.data ? <SignOffPanel data={signoff.data} path={`${base}/signoff`} number={number} concerns={concerns} onChanged={refresh} /> : <Skeleton className="h-24 w-full" />}
+        {signoff.data ? <SignOffPanel data={signoff.data} path={`${base}/signoff`} number={number} concerns={concerns} versionHref={(n) => `${sketchHref}/versions/${n}`} onChanged={refresh} /> : <Skeleton className="h-24 w-full" />}
       </Panel>
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">

@@ -1,6 +1,6 @@
 import "server-only";
 import { db } from "@/db";
-import { getCommentAccess, insertComment, listVersionComments, openThreadsBefore, setThreadResolved, softDeleteComment, updateCommentBody, workspaceContacts, type CommentAccess, type CommentRow } from "@/db/queries/comments";
+import { getCommentAccess, insertComment, listVersionComments, openThreadsOnSketch, setThreadResolved, softDeleteComment, updateCommentBody, workspaceContacts, type CommentAccess, type CommentRow } from "@/db/queries/comments";
 import { getVersionAccess } from "@/db/queries/review";
 import { lockRole } from "@/db/queries/sketches";
 import { getVersion } from "@/db/queries/versions";
@@ -31,7 +31,7 @@ export type Thread = { id: string; pin: CommentPin | null; resolvedAt: Date | nu
 export async function readComments(sketchId: string, number: number, viewerId: string) {
   const access = await getVersionAccess(sketchId, number, viewerId);
   if (!access || !access.role) throw new AppError("not_found", NO_VERSION);
-  const [rows, contacts, earlierOpen] = await Promise.all([listVersionComments(access.versionId, viewerId), workspaceContacts(access.workspaceId), openThreadsBefore(sketchId, number)]);
+  const [rows, contacts, openOnSketch] = await Promise.all([listVersionComments(access.versionId, viewerId), workspaceContacts(access.workspaceId), openThreadsOnSketch(sketchId)]);
   const names = new Map(contacts.map((c) => [c.id, c.name]));
   const files = new Map<string, UploadView[]>();
   for (const u of await attachmentsOf(rows.filter((r) => !r.deletedAt).map((r) => r.id), viewerId)) files.set(u.commentId!, [...(files.get(u.commentId!) ?? []), uploadView(u)]);
@@ -51,7 +51,10 @@ export async function readComments(sketchId: string, number: number, viewerId: s
   return {
     threads,
     /** open threads left on earlier versions that are not approved: a question asked of v1 is still open on v2 */
-    earlierOpen,
+    earlierOpen: openOnSketch.filter((v) => v.number < number),
+    /** open threads on later versions that are not approved: asked of the drawing as it went on (the
+     *  sign-off counts them too, `noteForOpenThreads`) */
+    laterOpen: openOnSketch.filter((v) => v.number > number),
     members: contacts.map((c) => ({ id: c.id, name: c.name })),
     locked: access.reviewState === "approved",
     canComment: can(access.role, "comment.create") && access.reviewState !== "approved",

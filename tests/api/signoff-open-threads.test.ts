@@ -91,6 +91,15 @@ describe("a check or an approval over open comment threads", () => {
     // a note of spaces is no note
     expect((await step(id, 2, checker, "check", "   ")).status).toBe(400);
     expect((await step(id, 2, checker, "check", "Answered in the thread replies; v3 is its own round.")).status).toBe(200);
+
+    // the comments of each version say where else threads are open, both ways, as the sign-off counts them
+    const comments = (n: number) => call(commentsRoute.GET, { params: at(id, n), cookie: checker.cookie });
+    const v1 = (await comments(1)).body;
+    expect([v1.earlierOpen, v1.laterOpen]).toEqual([[], [{ number: 2, open: 2 }, { number: 3, open: 1 }]]);
+    const v2 = (await comments(2)).body;
+    expect([v2.earlierOpen, v2.laterOpen]).toEqual([[], [{ number: 3, open: 1 }]]);
+    const v3 = (await comments(3)).body;
+    expect([v3.earlierOpen, v3.laterOpen]).toEqual([[{ number: 2, open: 2 }], []]);
   });
 
   it("asks nothing of submit and return, nor for threads on an approved version (locked: they cannot be resolved)", async () => {

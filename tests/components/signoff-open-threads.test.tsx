@@ -76,6 +76,29 @@ describe("signing off over open comment threads", () => {
     expect(dialog.getByRole("button", { name: "Approve" })).toHaveProperty("disabled", true);
   });
 
+  it("each other version named links to its comments; this version's own threads are here", async () => {
+    showSignOff(data({ openThreads: [{ number: 1, open: 2 }, { number: 3, open: 1 }, { number: 5, open: 1 }] }), [], 3);
+    await userEvent.setup().click(screen.getByRole("button", { name: "Mark checked" }));
+    const note = within(within(screen.getByTestId("signoff-dialog")).getByTestId("signoff-open-threads"));
+    expect(note.getByText(/still open/).closest("p")!.textContent).toBe(
+      "4 comment threads are still open (2 on v1, 1 on this version and 1 on v5): resolve them, or say in the note why the version stands checked with them open.",
+    );
+    const links = note.getAllByRole("link");
+    expect(links.map((a) => [a.textContent, a.getAttribute("href")])).toEqual([
+      ["v1", "/workspaces/w1/sketches/s1/versions/1#comments"],
+      ["v5", "/workspaces/w1/sketches/s1/versions/5#comments"],
+    ]);
+  });
+
+  it("a submit lists the other versions' threads among its findings, linked the same way", async () => {
+    const earlier = "2 comment threads still open on an earlier version (v1): resolve them there if this version settles them, or say why not";
+    showSignOff(data({ state: "draft", allowed: ["submit"], openThreads: [{ number: 1, open: 2 }] }), [earlier], 2);
+    await userEvent.setup().click(screen.getByRole("button", { name: "Submit for checking" }));
+    const findings = within(within(screen.getByTestId("signoff-dialog")).getByTestId("signoff-concerns"));
+    expect(findings.getByRole("listitem").textContent).toBe(earlier);
+    expect(findings.getByRole("link", { name: "v1" }).getAttribute("href")).toBe("/workspaces/w1/sketches/s1/versions/1#comments");
+  });
+
   it("with every thread resolved, or for a submit, the note stays optional", async () => {
     const user = userEvent.setup();
     const { unmount } = showSignOff(data({ openThreads: [] }), [], 2);
