@@ -114,6 +114,59 @@ function useSharedRoom(dock: RefObject<HTMLElement | null>): number | null {
   return room;
 }
 
+/** A tab's own height on a tall window never goes below the laptop's (px): the dock does not jump
+ *  as a sketch gains its first few supports. */
+const FITTED_FLOOR = 292;
+
+/**
+ * The height the open tab's content needs in the dock (px): the column's fixed part (status,
+ * caution line, tabs) plus what the panel holds, and the dock's top border. Null until measured
+ * (or where nothing is laid out, as under jsdom); followed as the content changes.
+ */
+function useContentHeight(column: RefObject<HTMLElement | null>, panel: RefObject<HTMLElement | null>): number | null {
+  const [need, setNeed] = useState<number | null>(null);
+  useEffect(() => {
+    const col = column.current;
+    const pan = panel.current;
+    if (!col || !pan || typeof ResizeObserver === "undefined") return;
+    const measure = () => {
+      const colH = col.getBoundingClientRect().height;
+      if (!(colH > 0)) return setNeed(null);
+      const inner = Array.from(pan.children).reduce((h, c) => h + c.getBoundingClientRect().height, 0);
+      const style = getComputedStyle(pan);
+      const pad = parseFloat(style.paddingTop) + parseFloat(style.paddingBottom) || 0;
+      const h = Math.ceil(colH - pan.getBoundingClientRect().height + inner + pad + 1);
+      setNeed((prev) => (prev === h ? prev : h));
+    };
+    const ro = new ResizeObserver(measure);
+    const watch = () => {
+      ro.disconnect();
+      ro.observe(col);
+      for (const c of [...Array.from(col.children), ...Array.from(pan.children)]) ro.observe(c);
+      measure();
+    };
+    watch();
+    const mo = new MutationObserver(watch);
+    mo.observe(col, { childList: true });
+    mo.observe(pan, { childList: true });
+    return () => {
+      ro.disconnect();
+      mo.disconnect();
+    };
+  }, [column, panel]);
+  return need;
+}
+
+/**
+ * The dock's height with no height chosen: the tab's own height for the window (`ownHeight`), or
+ * less on a tall window when the open tab needs less (a sketch with a few supports), never below
+ * the laptop's 292 px; the drawing takes the rest rather than the results leaving a gap.
+ */
+export function fittedHeight(own: number, content: number | null): number {
+  if (content === null) return own;
+  return Math.min(own, Math.max(Math.min(own, FITTED_FLOOR), content));
+}
+
 function readHeight(): number | null {
   if (typeof window === "undefined") return null;
   const v = Number(window.localStorage?.getItem(HEIGHT_KEY));
@@ -182,10 +235,16 @@ export function ResultsDock() {
   const { width: windowWidth, height: windowHeight } = useWindowSize();
   const ref = useRef<HTMLElement>(null);
   const room = useSharedRoom(ref);
+  const columnRef = useRef<HTMLDivElement>(null);
+  const panelRef = useRef<HTMLDivElement>(null);
+  const content = useContentHeight(columnRef, panelRef);
   // a height saved in a taller window (or another device's) is held to this one, never past the
   // drawing's room; on a phone the drawing keeps DRAWING_SHARE of the screen and the dock scrolls
   const limit = dockLimit(windowHeight, windowWidth, room);
-  const height = Math.min(chosen ?? (study ? Math.min(560, Math.round(windowHeight * 0.5)) : ownHeight(windowHeight)), limit);
+  // the reactions and the hand check take what they need on a tall window, up to their own height;
+  // a phone's column scrolls as a whole and keeps its own
+  const own = windowWidth >= NARROW_WIDTH && !study ? fittedHeight(ownHeight(windowHeight), content) : ownHeight(windowHeight);
+  const height = Math.min(chosen ?? (study ? Math.min(560, Math.round(windowHeight * 0.5)) : own), limit);
   const choose = (h: number | null) => {
     setChosen(h);
     try {
@@ -204,7 +263,7 @@ export function ResultsDock() {
       <Resizer height={height} limit={limit} onChange={choose} />
       {/* on a narrow screen the whole column scrolls (the status and the cautions take much of a
           phone's dock), the tabs held at its top; wider, only the open tab's panel scrolls */}
-      <div className="flex min-w-0 flex-1 flex-col px-3 pt-2 max-sm:overflow-y-auto max-sm:overscroll-contain max-sm:pt-0" data-testid="results-column">
+      <div ref={columnRef} className="flex min-w-0 flex-1 flex-col px-3 pt-2 max-sm:overflow-y-auto max-sm:overscroll-contain max-sm:pt-0" data-testid="results-column">
         {/* the column's top padding, inside the scrolling box: the tabs held at its top leave no gap above them */}
         <div className="h-2 shrink-0 sm:hidden" aria-hidden="true" />
         <StatusBanner />
@@ -246,7 +305,7 @@ export function ResultsDock() {
             </div>
           )}
         </div>
-        <div {...tabList.panelProps()} className="relative min-h-0 flex-1 overflow-auto py-2 outline-none focus-visible:ring-2 focus-visible:ring-inset focus-visible:ring-accent/60 max-sm:flex-none max-sm:overflow-visible">
+        <div ref={panelRef} {...tabList.panelProps()} className="relative min-h-0 flex-1 overflow-auto py-2 outline-none focus-visible:ring-2 focus-visible:ring-inset focus-visible:ring-accent/60 max-sm:flex-none max-sm:overflow-visible">
           {tab === "reactions" ? <ReactionsTable sense={sense} /> : tab === "hand" ? <HandCheckView /> : null}
           {kept.has("cases") && (
             <Activity mode={tab === "cases" ? "visible" : "hidden"}>

@@ -15,13 +15,18 @@ export interface CanvasMap {
   at: (x: number, y: number) => { x: number; y: number };
 }
 
-/** Screen position of a world point for the view a new, empty sketch opens with. */
+/**
+ * Screen position of a world point for the view a new, empty sketch opens with (120 px/m, the
+ * origin 30% in from the left and 70% down), as the canvas holds it: the results under the drawing
+ * take the height their content needs on a tall window, so the canvas's height may have changed
+ * since the view was set, and the view is read rather than worked out from today's height.
+ */
 export async function emptySketchView(page: Page): Promise<CanvasMap> {
-  const box = (await page.getByTestId("sketch-canvas").boundingBox())!;
-  const w = Math.floor(box.width);
-  const h = Math.floor(box.height);
-  const view = { scale: 120, x: Math.round(w * 0.3), y: Math.round(h * 0.7) };
-  return { at: (x, y) => ({ x: box.x + view.x + x * view.scale, y: box.y + view.y - y * view.scale }) };
+  const canvas = page.getByTestId("sketch-canvas");
+  const box = (await canvas.boundingBox())!;
+  const [scale, x, y] = ((await canvas.getAttribute("data-view")) ?? "").split(" ").map(Number);
+  if (scale !== 120) throw new Error(`the empty sketch's view is not at 120 px/m but at ${scale}`);
+  return { at: (wx, wy) => ({ x: box.x + x + wx * scale, y: box.y + y - wy * scale }) };
 }
 
 export async function clickAt(page: Page, p: { x: number; y: number }) {
