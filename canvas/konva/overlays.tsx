@@ -162,8 +162,15 @@ export const SelectionHandles = memo(function SelectionHandles() {
 function PointerNote({ at, text, fontSize, fill, gap = NOTE_GAP }: { at: Vec2; text: string; fontSize: number; fill: string; gap?: Vec2 }) {
   const view = useEditor((s) => s.view);
   const viewport = useEditor((s) => s.viewport);
-  const [dx, dy] = pointerNotePlace(toScreen(view, at), { width: noteWidth(text, fontSize), height: fontSize * 1.25 }, viewport, gap);
-  return <Text x={dx} y={dy} text={text} fontSize={fontSize} fill={fill} fontFamily={canvasFont()} name="pointer-note" />;
+  const size = { width: noteWidth(text, fontSize), height: fontSize * 1.25 };
+  const [dx, dy] = pointerNotePlace(toScreen(view, at), size, viewport, gap);
+  // on a light ground, so it reads over the drawing's own words
+  return (
+    <Group x={dx} y={dy}>
+      <Rect x={-2} y={-2} width={size.width + 4} height={size.height + 2} fill={PAPER_CARD} opacity={0.85} cornerRadius={2} />
+      <Text text={text} fontSize={fontSize} fill={fill} fontFamily={canvasFont()} name="pointer-note" />
+    </Group>
+  );
 }
 
 export const PointerOverlay = memo(function PointerOverlay({ interaction }: { interaction: InteractionStore }) {
