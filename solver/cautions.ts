@@ -14,6 +14,10 @@ export const CAUTIONS: readonly string[] = [
  * The conventions a checker needs to redo the sheet by hand: axes and signs, what the reaction
  * tables give, how an indeterminate body shares its load, and what the factors count.
  */
+/** What the flow factor leaves alone, said where it is set (a case's "Flow ×", the Sweep tab) and in
+ *  the calc sheet's method. */
+export const FLOW_FACTOR_PRESSURES = "The flow factor scales mass flows (and velocities), not port gauge pressures: those are as entered; write them as expressions of a parameter if they change with flow.";
+
 export const CONVENTIONS: readonly string[] = [
   "Axes as drawn: x to the right, y up, lengths from the sketch's origin (the sketch is drawn in m; a sheet in US customary units gives them in ft too, and its hand check in ft); angles in degrees, counter-clockwise from +x. Moments are positive counter-clockwise.",
   "Reaction tables give the force of each support on the body; the load on the support is equal and opposite. At a contact or roller, n is the component along its normal (positive: pressing on the body) and t the component along the normal turned 90° counter-clockwise.",

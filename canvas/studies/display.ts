@@ -313,6 +313,18 @@ export function sweepStateLines(data: SweepStates, names: Readonly<Record<string
   return lines;
 }
 
+/**
+ * What the plot's hover says of a plotted value at `x` instead of a number, or null: a contact's
+ * margin where it has lifted off (a tie's where it is slack) and its body is held carries nothing
+ * (`carriesNothing` in solver/words.ts); the line runs on below zero only to show the crossing.
+ */
+export function releasedWords(data: Pick<SweepData, "quantities" | "idle">, quantity: number, x: number): string | null {
+  const q = data.quantities[quantity];
+  if (!q || q.component !== "margin") return null;
+  const o = (data.idle ?? []).find((s) => s.support === q.support && within(s, x));
+  return o ? `carries nothing (${o.kind === "tie" ? "slack" : "lifted off"})` : null;
+}
+
 const within = (o: PointStretch, x: number) => x >= Math.min(o.from, o.to) && x <= Math.max(o.from, o.to);
 
 /**

@@ -8,6 +8,7 @@ import { findAnyLimitWith, limitEverywhere, SketchInputError, sweeperOn, type Bo
 export { bodyLimits, firstReached, isBodyLimit, reachedAt, SketchInputError, type BodyLimitResult, type BodyLimitSpec, type LimitEverywhere, type LimitQuantity } from "@/solver/studySweep";
 import { solveCases, type StudyResult } from "@/solver/cases";
 import type { FieldError } from "@/solver/types";
+import { carriesNothing } from "@/solver/words";
 import { marksZero, stretchesOf, watchBodies, type BodyStates } from "./display";
 export { stretchesOf };
 
@@ -56,6 +57,9 @@ export interface SweepData {
   /** where a plotted contact is off the ground (a plotted tie slack): stretches of neighbouring
    *  points, in sweep order (absent on data made before they were kept) */
   off?: Array<PointStretch & { support: string; kind: "contact" | "tie" }>;
+  /** where a plotted contact lifted off (a tie gone slack) carries nothing, its body held
+   *  (`carriesNothing`): its margin there is no force, only the side of zero (absent on older data) */
+  idle?: Array<PointStretch & { support: string; kind: "contact" | "tie" }>;
   /** where a plotted friction margin is left out (NaN) while its contact bears, because its body
    *  tips or is unrestrained: its reactions are then only what would hold it */
   notHeld?: Array<PointStretch & { support: string; body: string; status: string }>;
@@ -100,6 +104,8 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
   const withFriction = [...new Set(spec.quantities.filter((q) => q.component === "frictionMargin" || q.component === "frictionRatio").map((q) => q.support))];
   /** per point: "contact" / "tie" where the support is off its seat, else null */
   const off = new Map<string, Array<string | null>>(supports.map((id) => [id, []]));
+  /** per point: "contact" / "tie" where the support carries nothing, its body held, else null */
+  const idle = new Map<string, Array<string | null>>(supports.map((id) => [id, []]));
   /** per point: "<body> <status>" where the support's body is not held and the support is on its seat */
   const loose = new Map<string, Array<string | null>>(withFriction.map((id) => [id, []]));
   /** per point: what each body itself does (slides as a whole, tips, is unrestrained) */
@@ -110,7 +116,11 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
       data.xs.push(xs[i]);
       if (pt.ok) {
         spec.quantities.forEach((q, k) => data.series[k].push(sweptQuantity(pt.result, q)));
-        for (const id of supports) off.get(id)!.push(supportOff(pt.result, id) ? pt.result.reactions[id].kind : null);
+        for (const id of supports) {
+          const r = pt.result.reactions[id];
+          off.get(id)!.push(supportOff(pt.result, id) ? r.kind : null);
+          idle.get(id)!.push(r && carriesNothing(r, pt.result.bodies[r.body]?.status) ? r.kind : null);
+        }
         for (const id of withFriction) {
           const r = pt.result.reactions[id];
           loose.get(id)!.push(r && !supportOff(pt.result, id) && !supportBodyHeld(pt.result, id) ? `${r.body} ${pt.result.bodies[r.body]?.status}` : null);
@@ -120,7 +130,7 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
         bodies.add(pt.result);
       } else {
         spec.quantities.forEach((_, k) => data.series[k].push(Number.NaN));
-        for (const list of [...off.values(), ...loose.values()]) list.push(null);
+        for (const list of [...off.values(), ...idle.values(), ...loose.values()]) list.push(null);
         data.statuses.push("error");
         bodies.add(null);
         data.errors.push({ value: xs[i], errors: pt.errors });
@@ -131,6 +141,7 @@ export function runSweep(file: unknown, spec: SweepSpec, onChunk: (done: number)
     sweeper.restore();
   }
   data.off = supports.flatMap((support) => stretchesOf(data.xs, off.get(support)!).map(({ key, ...s }) => ({ ...s, support, kind: key as "contact" | "tie" })));
+  data.idle = supports.flatMap((support) => stretchesOf(data.xs, idle.get(support)!).map(({ key, ...s }) => ({ ...s, support, kind: key as "contact" | "tie" })));
   data.notHeld = withFriction.flatMap((support) =>
     stretchesOf(data.xs, loose.get(support)!).map(({ key, ...s }) => {
       const cut = key.lastIndexOf(" ");

@@ -36,16 +36,17 @@ export function CanvasSummary() {
   const sketch = useDeferredValue(useEditor((s) => s.sketch));
   const shown = useDeferredValue(useAnalysis((s) => s.shown));
   const numeric = useDeferredValue(useAnalysis((s) => s.shownSketch));
+  const stability = useDeferredValue(useAnalysis((s) => s.shownStability));
   const stale = useAnalysis((s) => s.stale);
   const units = useEditor((s) => s.units);
   // forces in the unit the results panel writes them in
   const forceUnit = useResultForceUnit(units);
   const result = useMemo(() => {
     if (!shown || !numeric) return "No result yet.";
-    const said = statusSentences(numeric, shown, units, forceUnit).map((s) => s.headline);
+    const said = statusSentences(numeric, shown, units, forceUnit, stability ?? undefined).map((s) => s.headline);
     if (!said.length) return "No result yet.";
     return `${stale ? "Last good result (the input has errors): " : "Result: "}${said.join(" ")}`;
-  }, [shown, numeric, units, forceUnit, stale]);
+  }, [shown, numeric, units, forceUnit, stale, stability]);
   const drawn = useMemo(() => drawnWords(sketch), [sketch]);
   return (
     <p id="canvas-summary" className="sr-only" data-testid="canvas-summary">

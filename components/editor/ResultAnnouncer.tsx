@@ -12,6 +12,8 @@ export const SETTLE_MS = 700;
 export function ResultAnnouncer({ settleMs = SETTLE_MS }: { settleMs?: number }) {
   const shown = useAnalysis((s) => s.shown);
   const numeric = useAnalysis((s) => s.shownSketch);
+  // the factors of safety too: a body short of one is said so first, as in the results panel
+  const stability = useAnalysis((s) => s.shownStability);
   const stale = useAnalysis((s) => s.stale);
   const units = useEditor((s) => s.units);
   // forces in the unit the results panel writes them in
@@ -20,9 +22,9 @@ export function ResultAnnouncer({ settleMs = SETTLE_MS }: { settleMs?: number })
   const hasBody = useEditor((s) => s.sketch.bodies.length > 0);
   const words = useMemo(() => {
     if (!hasBody || !shown || !numeric) return "";
-    const said = statusSentences(numeric, shown, units, forceUnit).map((s) => s.headline);
+    const said = statusSentences(numeric, shown, units, forceUnit, stability ?? undefined).map((s) => s.headline);
     return said.length ? `${stale ? "Last good result, the input has errors: " : ""}${said.join(" ")}` : "";
-  }, [hasBody, shown, numeric, units, forceUnit, stale]);
+  }, [hasBody, shown, numeric, units, forceUnit, stale, stability]);
   const [said, setSaid] = useState("");
   useEffect(() => {
     if (dragging) return;

@@ -87,8 +87,8 @@ export function StatusBanner() {
       {sentences.map((s) => {
         const factors = numeric ? stabilitySentence(numeric, s.body, stability?.[s.body]) : null;
         // a body held (a tie slack beside bearing contacts included) that falls short of a required
-        // factor: the badge says so; a contact lifted off keeps "Lifts"
-        const short = factors?.pass === false && (s.tone === "holds" || s.tone === "strained" || !!s.slackOnly);
+        // factor: the badge says so, as the headline does; a contact lifted off keeps "Lifts"
+        const short = !!s.short;
         // a body that tips and slides: both in the badge, as in the sentence
         const badge = short ? SHORT : s.alsoSlips && s.tone === "tips" ? (s.first === "slides" ? SLIDES_THEN_TIPS : TIPS_AND_SLIDES) : s.slackOnly ? SLACK : BADGE[s.tone];
         return (

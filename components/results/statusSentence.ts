@@ -28,6 +28,9 @@ export interface StatusSentence {
   /** a "lifts" body whose only released supports are ties gone slack: no contact has lifted off,
    *  so the badge says "Slack", not "Lifts" (an anchor bolt slack on the far side of a moment) */
   slackOnly?: boolean;
+  /** a body that holds (or holds with a tie slack, or one contact over its μ) but falls short of a
+   *  required factor of safety: the headline leads with the governing check, the badge says "FoS short" */
+  short?: "overturning" | "sliding";
 }
 
 const KIND_WORD: Record<Support["kind"], string> = { pin: "pin", roller: "roller", contact: "contact", fixed: "fixed support", tie: "tie" };
@@ -377,7 +380,14 @@ export function statusSentences(
       }
     }
     const slackOnly = tone === "lifts" && reactions.some(([s, r]) => s.kind === "tie" && r.state === "slack") && !reactions.some(([, r]) => r.state === "lifted");
-    out.push({ body: b.id, tone, headline, details, ...(alsoSlips ? { alsoSlips, ...(order ? { first: order.first } : {}) } : {}), ...(slackOnly ? { slackOnly } : {}) });
+    // held, but short of a required factor of safety: the failing check leads, never "Holds"; what
+    // the headline said of the supports follows as the first detail
+    const short = tone === "holds" || tone === "strained" || slackOnly ? shortfall(sketch, stability?.[b.id]) : null;
+    if (short) {
+      details.unshift(`${headline.replace(/^Holds/, "It holds")}.`);
+      headline = short.text;
+    }
+    out.push({ body: b.id, tone, headline, details, ...(alsoSlips ? { alsoSlips, ...(order ? { first: order.first } : {}) } : {}), ...(slackOnly ? { slackOnly } : {}), ...(short ? { short: short.check } : {}) });
   }
   // warnings that belong to no body (unitless trigonometry in a parameter)
   const general = result.warnings
@@ -397,6 +407,33 @@ function factorText(factor: number, required: number): string {
     if (factor >= required || shown < required) return String(shown);
   }
   return String(factor);
+}
+
+/**
+ * The governing failing factor of safety of a body, as a headline: "Short of the required factor
+ * of safety against overturning about the far foot: 1.23 < 1.5" (the check furthest below its
+ * required value first; the other after it when it falls short too). Null when none falls short.
+ */
+export function shortfall(sketch: Sketch, st: BodyStability | undefined): { text: string; check: "overturning" | "sliding" } | null {
+  if (!st) return null;
+  const names = new Map(sketch.supports.map((s) => [s.id, supportName(s)]));
+  const failing = (
+    [
+      ["overturning", st.overturning],
+      ["sliding", st.sliding],
+    ] as const
+  )
+    .flatMap(([against, c]) => ("notApplicable" in c || c.pass || !Number.isFinite(c.factor) ? [] : [{ against, c, ratio: c.factor / c.required }]))
+    .sort((a, b) => a.ratio - b.ratio);
+  if (!failing.length) return null;
+  const words = failing.map(({ against, c }) => {
+    const about = "about" in c ? ` about ${pivotWords(c, (id) => names.get(id) ?? id)}` : "";
+    const whole = "wholeBody" in c && c.wholeBody ? " (as a whole)" : "";
+    // the figures kept on one line with their sign: "1.13 < 1.5", never broken at the "<"
+    return `against ${against}${about}${whole}: ${factorText(c.factor, c.required)}\u00a0<\u00a0${c.required}${c.factor < 1 ? ` (${BELOW_ONE[against]})` : ""}`;
+  });
+  const [first, ...more] = words;
+  return { text: `Short of the required factor of safety ${first}${more.length ? `; also ${more.join("; ")}` : ""}`, check: failing[0].against };
 }
 
 /** A factor below 1 is no margin short but the thing itself: said, for each check (both, when both are). */

@@ -17,6 +17,7 @@ import { combinationWarningWords, formatFactors, formatOverrides, formatTerms, i
 import { asDrawnName, CaseTables } from "./CaseTables";
 import { SideScroll } from "./ReportTable";
 import { studyErrorWords } from "./studyError";
+import { FLOW_FACTOR_PRESSURES } from "@/solver/cautions";
 
 /** Each field's refusal, by its label: reported up so the run waits until they are put right. */
 const FieldErrors = createContext<(label: string, error: string | null) => void>(() => {});
@@ -226,7 +227,7 @@ export function CasesPanel() {
           {cases.length === 0 ? (
             <p className="mt-1 text-[12px] text-ink-faint">
               No cases yet: the sketch is solved as drawn. A case changes parameters (“Q = 1500 gpm”), scales load groups (“dead 1.2, flow 1.5”; weights are in
-              “dead”, loads in “loads”, ports in “flow” unless given a group) or the flow (× f: momentum flux × f²).
+              “dead”, loads in “loads”, ports in “flow” unless given a group) or the flow (× f: momentum flux × f²; port gauge pressures stay as entered).
             </p>
           ) : (
             // the columns share the panel's width down to a width each field still reads at; on a
@@ -282,6 +283,11 @@ export function CasesPanel() {
               </tbody>
             </table>
             </SideScroll>
+          )}
+          {cases.some((c) => c.flowFactor !== undefined && c.flowFactor !== 1) && sketch.ports.some((p) => p.pressure !== undefined && Number(p.pressure) !== 0) && (
+            <p className="mt-1 text-[11.5px] text-ink-soft" data-testid="flow-factor-pressures">
+              {FLOW_FACTOR_PRESSURES}
+            </p>
           )}
           {removedNote && (
             <p className="mt-1 text-[11.5px] text-ink-soft" role="status" data-testid="removed-note">

@@ -7,7 +7,7 @@ import { limitWithUnit } from "@/solver/limit";
 import { describeQuantity, type QuantityComponent } from "@/solver/quantity";
 import { convert, formatNumber, prettyUnit, type UnitSystem } from "@/solver/units";
 import { sweepAxisTicks } from "@/lib/calcsheet/chart";
-import { displayKind, displayUnit, largestByKind, marksZero, pointStateWords, toDisplay, type DisplayKind } from "@/canvas/studies/display";
+import { displayKind, displayUnit, largestByKind, marksZero, pointStateWords, releasedWords, toDisplay, type DisplayKind } from "@/canvas/studies/display";
 import type { SweepData } from "@/canvas/studies/run";
 import type { Table } from "@/solver/report";
 
@@ -133,6 +133,9 @@ export function SweepChart({
           <Tooltip
             formatter={(v, name, item) => {
               const s = Number(String(item?.dataKey ?? "q0").slice(1));
+              // a released support's margin below zero is no force: said in words, as the table's "—"
+              const released = releasedWords(data, s, Number((item?.payload as { x?: number } | undefined)?.x));
+              if (released) return [released, String(name)];
               return [typeof v === "number" ? `${formatNumber(v, 4)}${unitOf(s) ? ` ${unitOf(s)}` : ""}` : "—", String(name)];
             }}
             labelFormatter={(x) => {

@@ -27,6 +27,7 @@ import type { Table } from "@/solver/report";
 import { invalidStretches } from "./sweepErrors";
 import { noLimitHint, rangeWords } from "./limitHint";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, solvesAtIn, type ParameterValue } from "./sweepRange";
+import { FLOW_FACTOR_PRESSURES } from "@/solver/cautions";
 
 const NO_VALUES: Record<string, ParameterValue> = {};
 
@@ -255,7 +256,8 @@ export function SweepPanel() {
         add(s, "margin");
         if (s.kind === "contact" && s.mu !== undefined) add(s, "frictionMargin");
         if (s.kind === "contact") {
-          add(s, "t");
+          // without friction a contact's tangential force is zero at every point: nothing to plot
+          if (s.mu !== undefined && Number(s.mu) !== 0) add(s, "t");
           add(s, "resultant");
         }
       } else {
@@ -653,7 +655,7 @@ export function SweepPanel() {
         </div>
         <p className="col-span-2 text-[11px] text-ink-faint @xl:col-span-4 @4xl:col-span-1" data-testid="sweep-unit-hint">
           {parameter === FLOW_FACTOR
-            ? "The flow factor is a plain number (1: the flow as drawn)."
+            ? `The flow factor is a plain number (1: the flow as drawn). ${FLOW_FACTOR_PRESSURES}`
             : parameterUnit
               ? `Numbers in ${prettyUnit(parameterUnit)}, the unit ${parameter} is written in, or give a unit of the same kind (“${unitExample(parameterUnit)}”).`
               : `${parameter} is a plain number.`}

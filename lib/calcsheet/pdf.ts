@@ -28,6 +28,7 @@ import {
 import type { Port } from "@/solver/types";
 import { caseWarnings } from "@/solver/cases";
 import { FLOW_FACTOR } from "@/solver/sweep";
+import { FLOW_FACTOR_PRESSURES } from "@/solver/cautions";
 import { combinationWarningWords } from "@/components/studies/casesText";
 import { withSlipNote } from "@/components/studies/slipNote";
 import type { CombinationFile } from "@/solver/schema";
@@ -184,7 +185,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     const b = result.bodies[s.body];
     // a body with a support released: its details say what the supports that carry load are
     const determinacy = b.determinacy.kind === "indeterminate" || b.activeDeterminacy ? "" : ` Statically ${b.determinacy.kind}.`;
-    para(`${s.headline}.${determinacy}`, 9.5, s.tone === "holds" ? INK : ACCENT);
+    para(`${s.headline}.${determinacy}`, 9.5, s.tone === "holds" && !s.short ? INK : ACCENT);
     for (const d of s.details) {
       para(d, 8.5, SOFT);
       said.add(d.replace(/\.$/, ""));
@@ -442,7 +443,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
 /** The method in words, around its two equations (`EQUATIONS`, printed on lines of their own). */
 export const METHOD: readonly string[] = [
   "For each body, the linear momentum and moment-of-momentum equations of a control volume fixed to the body, in steady flow (W the body's weight, at its centre of gravity G; m·a its mass times the acceleration the sketch gives, none unless it gives one):",
-  "Moments are taken about a point O, counter-clockwise positive, with r measured from O; each sum runs over the body's supports, loads and ports, and a couple counts whole. A port's momentum flux is β·ṁ·V, with β its momentum-flux factor (1, uniform flow, unless given). Gauge pressure at a port pushes inward (p·A along the flow at an inlet, against it at an outlet). Supports are stiff springs on the rigid body: a statically determinate body's reactions follow from equilibrium alone; an indeterminate one's from the support stiffnesses. Contacts push only and ties pull only; a contact or tie that would have to pull or push is released (lifts, goes slack), and a body that no engagement can hold tips (the reactions shown are then those equilibrium would require with every support bilateral). Friction is checked (|t|\u00a0≤\u00a0μ·n), not enforced.",
+  `Moments are taken about a point O, counter-clockwise positive, with r measured from O; each sum runs over the body's supports, loads and ports, and a couple counts whole. A port's momentum flux is β·ṁ·V, with β its momentum-flux factor (1, uniform flow, unless given). Gauge pressure at a port pushes inward (p·A along the flow at an inlet, against it at an outlet). ${FLOW_FACTOR_PRESSURES} Supports are stiff springs on the rigid body: a statically determinate body's reactions follow from equilibrium alone; an indeterminate one's from the support stiffnesses. Contacts push only and ties pull only; a contact or tie that would have to pull or push is released (lifts, goes slack), and a body that no engagement can hold tips (the reactions shown are then those equilibrium would require with every support bilateral). Friction is checked (|t|\u00a0≤\u00a0μ·n), not enforced.`,
 ];
 
 /** Linear momentum and moment of momentum for a control volume in steady flow. */

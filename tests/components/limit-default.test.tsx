@@ -84,7 +84,6 @@ describe("the limit finder on the thrust stand", () => {
       ["front pin: Fx", false],
       ["front pin: Fy", false],
       ["rear pad: margin", true],
-      ["rear pad: tangential force t", false],
       ["rear pad: resultant", false],
     ]);
     expect((await runSweep(user)).textContent).toContain("margin at rear pad crosses zero between slope");

@@ -165,7 +165,7 @@ describe("the Sweep tab's words", () => {
     await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "p_pump");
     expect(hint.textContent).toBe("Numbers in bar, the unit p_pump is written in, or give a unit of the same kind (“150 psi”).");
     await user.selectOptions(screen.getByRole("combobox", { name: "Parameter to sweep" }), "flowFactor");
-    expect(hint.textContent).toBe("The flow factor is a plain number (1: the flow as drawn).");
+    expect(hint.textContent).toBe("The flow factor is a plain number (1: the flow as drawn). The flow factor scales mass flows (and velocities), not port gauge pressures: those are as entered; write them as expressions of a parameter if they change with flow.");
   });
 
   it("every unit hint's example reads as a value of the parameter's kind (2 tonne, not 2 t, which is no unit here)", () => {

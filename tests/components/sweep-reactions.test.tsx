@@ -5,25 +5,10 @@ import { screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { describe, expect, it } from "vitest";
 import { mountResultsDock, setUpSweep } from "./editor-helpers";
+import { pinPadBlock } from "../support/pin-pad-block";
 
-/** A weightless 2 m × 1 m block on a pin at (0, 0) and a frictionless contact at (2, 0), pushed
- *  sideways by P at its top (y = 1 m) and down by 10 kN at its middle. */
-const block = {
-  format: "counterpoise.sketch",
-  version: 3,
-  parameters: { P: "2 kN" },
-  bodies: [{ id: "b", label: "block", outline: [[0, 0], [2, 0], [2, 1], [0, 1]], mass: 0 }],
-  supports: [
-    { id: "pin", label: "pin", body: "b", kind: "pin", at: [0, 0] },
-    { id: "pad", label: "pad", body: "b", kind: "contact", at: [2, 0], angle: 90 },
-  ],
-  loads: [
-    { id: "push", body: "b", kind: "force", at: [0, 1], fx: "P", fy: 0 },
-    { id: "down", body: "b", kind: "force", at: [1, 0.5], fx: 0, fy: "-10 kN" },
-  ],
-  ports: [],
-  massSources: [],
-};
+/** The block of tests/support/pin-pad-block.ts: pin at (0, 0), frictionless pad at (2, 0), P at its top. */
+const block = pinPadBlock();
 
 describe("sweeping a reaction's component", () => {
   it("offers each reaction, ticks the margins and resultants, and finds where the pin's Fx reaches a value", async () => {
@@ -35,14 +20,14 @@ describe("sweeping a reaction's component", () => {
       ["pin: Fx", false],
       ["pin: Fy", false],
       ["pad: margin", true],
-      ["pad: tangential force t", false],
+      // a frictionless pad's tangential force is zero at every point: not offered
       ["pad: resultant", false],
     ]);
     await user.click(screen.getByRole("checkbox", { name: "pin: Fx" }));
     await user.click(screen.getByRole("button", { name: "Run the sweep" }));
     // ΣFx = 0 (statics): the pin alone resists P, Fx = −P, crossing zero at P = 0 — not a crossing
     // the plot marks; the pad's margin (its normal force) is the only quantity whose zero is marked.
-    // Moments about the pin: n·2 = 10·1 − P·1, so the pad lifts at P = 10 kN, the end of the range.
+    // Moments about the pin: n·2 = 10·1 + P·1, so the pad bears all through P = 0…10 kN (n from 5 to 10 kN).
     const crossings = await screen.findByTestId("crossings");
     expect(crossings.textContent).not.toMatch(/x-reaction/);
     const quantity = screen.getByRole("combobox", { name: "Quantity for the limit" }) as HTMLSelectElement;
@@ -55,5 +40,12 @@ describe("sweeping a reaction's component", () => {
     await user.click(screen.getByRole("button", { name: "Find" }));
     // Fx = −P reaches −4 kN at P = 4 kN
     expect((await screen.findByTestId("limit-answer")).textContent).toMatch(/^The x-reaction at pin reaches −4 kN at P = 4\.000 kN/);
+  });
+
+  it("offers a contact's tangential force and friction margin only when it has friction", async () => {
+    const user = userEvent.setup();
+    mountResultsDock({ ...block, supports: [block.supports[0], { ...block.supports[1], mu: 0.4 }] });
+    await setUpSweep(user, "P", ["0", "10", "11"]);
+    expect(screen.getAllByRole("checkbox").map((c) => c.closest("label")?.textContent)).toEqual(["pin: resultant", "pin: Fx", "pin: Fy", "pad: margin", "pad: friction margin", "pad: tangential force t", "pad: resultant"]);
   });
 });

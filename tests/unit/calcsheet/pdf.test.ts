@@ -137,7 +137,8 @@ describe("calc sheet PDF", () => {
     const file = pushedBlock("4 kN", { cases: [{ id: "light", name: "Light push", parameters: { P: "2 kN" } }] });
     const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Block", version: 1, savedAt: new Date(), signoff: [], file });
     const { text } = await pdfText(buf);
-    expect(text).toMatch(/Result as drawn Holds .* Factors of safety as drawn: • factor of safety against overturning about far foot 1\.226, below the required 1\.5/);
+    // the headline leads with the short factor, not "Holds"; that the supports hold follows it
+    expect(text).toMatch(/Result as drawn Short of the required factor of safety against overturning about the far foot: 1\.23\s<\s1\.5\. Statically determinate\. It holds — all supports within their limits.* Factors of safety as drawn: • factor of safety against overturning about far foot 1\.226, below the required 1\.5/);
     // the stability table: the sketch as drawn (FAIL), then the case (pass)
     const table = text.slice(text.indexOf("Stability"));
     expect(table.indexOf("As drawn")).toBeGreaterThan(0);
