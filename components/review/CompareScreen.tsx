@@ -3,7 +3,7 @@
 // changed in the inputs, field by field with units, and what it did to the reactions.
 import { useQuery } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useMemo, useState } from "react";
+import { useMemo, useState, useSyncExternalStore } from "react";
 import { sharedFrame } from "@/canvas/render/svg";
 import { drawingFamily } from "@/canvas/render/results";
 import { UNIT_OPTIONS, useUnitsPreference } from "@/components/sketches/useUnitsPreference";
@@ -14,7 +14,7 @@ import { useVersions } from "@/components/versions/VersionHistory";
 import { setAddressParam } from "@/lib/address";
 import { apiFetch, apiKey, ApiError } from "@/lib/api-client";
 import { changeCount, compareSketches } from "@/lib/review/compare";
-import { clashList } from "@/lib/review/mergeWords";
+import { clashItems } from "@/lib/review/mergeWords";
 import { CAUTION_SHORT } from "@/solver/cautions";
 import type { SketchFile } from "@/solver/schema";
 import type { UnitSystem } from "@/solver/units";
@@ -24,14 +24,23 @@ import { ReviewDrawing, useSolved } from "./ReviewDrawing";
 
 type VersionDoc = { version: { number: number; message: string; document: SketchFile } };
 
+const NO_CHANGES = () => () => {};
+
 function useDocument(sketchId: string, which: number | "draft", draftTab?: string) {
   const path = `/api/sketches/${sketchId}/versions/${which}`;
   const remote = useQuery({ queryKey: apiKey(path), queryFn: () => apiFetch<VersionDoc>(path), enabled: which !== "draft", staleTime: Infinity });
-  // the draft "Kept work" offered (that tab's), else the newest of a closed tab
-  const [draft] = useState(() => (which === "draft" ? ((draftTab !== undefined ? readDraft(sketchId, draftTab) : null) ?? readDraft(sketchId)) : null));
+  // the draft "Kept work" offered (that tab's), else the newest of a closed tab; read once the page
+  // is in the browser (the server has no kept changes to read: reading them while hydrating would
+  // render a "no kept changes" notice the browser then contradicts)
+  const inBrowser = useSyncExternalStore(NO_CHANGES, () => true, () => false);
+  const draft = useMemo(
+    () => (inBrowser && which === "draft" ? ((draftTab !== undefined ? readDraft(sketchId, draftTab) : null) ?? readDraft(sketchId)) : null),
+    [inBrowser, which, draftTab, sketchId],
+  );
   // the kept work as "Bring them back" would open it: merged onto the newest version
   const merged = useQuery({ queryKey: ["kept-work", sketchId, draft?.keptAt], queryFn: () => draftOnNewest(draft!), enabled: !!draft, staleTime: Infinity });
   if (which === "draft") {
+    if (!inBrowser) return { doc: null, label: null, error: null, pending: true, conflicts: [] as string[], merged: null };
     if (!draft) return { doc: null, label: null, error: "There are no kept changes for this sketch in this browser.", pending: false };
     const m = merged.data;
     return {
@@ -53,6 +62,21 @@ function useDocument(sketchId: string, which: number | "draft", draftTab?: strin
     conflicts: [] as string[],
     merged: null,
   };
+}
+
+/** The fields your kept changes and a later version both changed, one a line (`clashItems`). */
+function Clashes({ items, lead }: { items: readonly string[]; lead: string }) {
+  if (!items.length) return null;
+  return (
+    <div className="basis-full text-[12.5px] text-caution" data-testid="kept-work-conflicts">
+      <p>{lead}</p>
+      <ul className="mt-0.5 list-disc pl-5">
+        {items.map((c) => (
+          <li key={c}>{c}</li>
+        ))}
+      </ul>
+    </div>
+  );
 }
 
 export function CompareScreen({
@@ -94,7 +118,7 @@ export function CompareScreen({
   const go = (f: number, t: number | "draft") => router.replace(`${base}/compare?from=${f}&to=${t}${layout === "overlay" ? "&drawings=overlay" : ""}`);
   const toLabel = to === "draft" ? "your changes" : `v${to}`;
   // the fields you and a later version both changed, in words with both values (`clashList`)
-  const clashes = b.merged && b.conflicts.length ? clashList(b.conflicts, b.merged.sketch, b.merged.theirs, `v${b.merged.newest}`, units) : "";
+  const clashes = b.merged && b.conflicts.length ? clashItems(b.conflicts, b.merged.sketch, b.merged.theirs, `v${b.merged.newest}`, units) : [];
 
   return (
     <div className="space-y-5">
@@ -142,20 +166,12 @@ export function CompareScreen({
           />
           {to === "draft" && b.doc && draftOpen ? (
             <div className="flex flex-wrap items-center gap-2 text-sm" data-testid="draft-open-elsewhere">
-              {b.conflicts.length ? (
-                <p className="basis-full text-[12.5px] text-caution" data-testid="kept-work-conflicts">
-                  You and a later version both changed these, and bringing v{from} in keeps yours: {clashes}.
-                </p>
-              ) : null}
+              <Clashes items={clashes} lead={`You and a later version both changed these, and bringing v${from} in keeps yours:`} />
               <p className="text-ink-soft">Your changes are still open in the editor tab you came from: go back there to bring v{from} in, or to save them as a fork. Nothing here changes them.</p>
             </div>
           ) : to === "draft" && b.doc ? (
             <div className="flex flex-wrap items-center gap-2 text-sm">
-              {b.conflicts.length ? (
-                <p className="basis-full text-[12.5px] text-caution" data-testid="kept-work-conflicts">
-                  You and a later version both changed these, and bringing your changes back uses yours: {clashes}.
-                </p>
-              ) : null}
+              <Clashes items={clashes} lead="You and a later version both changed these, and bringing your changes back uses yours:" />
               <a href={`/sketches/${sketchId}?restore=1&draft=${encodeURIComponent(b.tab ?? "")}`} className="rounded-md bg-ink px-3 py-2 font-medium text-paper hover:bg-ink-soft">
                 Bring my changes back on top of the newest version
               </a>

@@ -141,17 +141,21 @@ export function clashWords(path: string, mine: SketchFile, theirs: SketchFile, u
   return { place: where.place, yours: valueWords(valueAt(mine, path), w, units), theirs: valueWords(valueAt(theirs, path), w, units) };
 }
 
+/** Each clash as one item: "Outlet nozzle N1 (p1): area (yours 1,963 mm²; v3 has 2,827 mm²)". */
+export function clashItems(paths: readonly string[], mine: SketchFile, theirs: SketchFile, newer: string, units: UnitSystem = "SI"): string[] {
+  return paths.map((p) => {
+    const c = clashWords(p, mine, theirs, units);
+    return `${c.place} (yours ${c.yours}; ${newer} has ${c.theirs})`;
+  });
+}
+
 /**
  * The clashes as a sentence's list: "Outlet nozzle N1 (p1): area (yours 1,963 mm²; v3 has
- * 2,827 mm²); Parameter tip (yours “1.6 in”; v3 has “1.8 in”)". `newer`: how the newer version is
+ * 2,827 mm²); Parameter tip (yours 1.6 in; v3 has 1.8 in)". `newer`: how the newer version is
  * called ("v3"). `limit`: how many are named before "and N more" (all when omitted).
  */
 export function clashList(paths: readonly string[], mine: SketchFile, theirs: SketchFile, newer: string, units: UnitSystem = "SI", limit?: number): string {
   const shown = limit === undefined ? paths : paths.slice(0, limit);
-  const words = shown.map((p) => {
-    const c = clashWords(p, mine, theirs, units);
-    return `${c.place} (yours ${c.yours}; ${newer} has ${c.theirs})`;
-  });
   const more = paths.length - shown.length;
-  return words.join("; ") + (more > 0 ? ` and ${more} more` : "");
+  return clashItems(shown, mine, theirs, newer, units).join("; ") + (more > 0 ? ` and ${more} more` : "");
 }

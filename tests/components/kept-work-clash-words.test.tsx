@@ -5,6 +5,7 @@
 import { readFileSync } from "node:fs";
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { act, render, screen } from "@testing-library/react";
+import { renderToString } from "react-dom/server";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { emptySketch } from "@/canvas/model/elements";
 import type { SketchFile } from "@/solver/schema";
@@ -71,8 +72,26 @@ describe("fields both sides changed, in words", () => {
       </QueryClientProvider>,
     );
     const clash = await screen.findByTestId("kept-work-conflicts");
-    expect(clash.textContent).toBe(
-      "You and a later version both changed these, and bringing your changes back uses yours: Parameter Q (yours 1400 gpm; v2 has 1300 gpm); Body Monitor trailer (trailer): mass (yours 1250 kg; v2 has 1100 kg).",
+    expect(clash.querySelector("p")!.textContent).toBe("You and a later version both changed these, and bringing your changes back uses yours:");
+    expect([...clash.querySelectorAll("li")].map((li) => li.textContent)).toEqual([
+      "Parameter Q (yours 1400 gpm; v2 has 1300 gpm)",
+      "Body Monitor trailer (trailer): mass (yours 1250 kg; v2 has 1100 kg)",
+    ]);
+  });
+
+  it("the server's page of the kept changes waits for the browser, which alone can read them (no mismatch when hydrating)", async () => {
+    serve();
+    const page = () => (
+      <QueryClientProvider client={new QueryClient()}>
+        <CompareScreen workspaceId="w1" sketchId="sk1" sketchTitle="Trailer" from={2} to="draft" draftTab="othertab" />
+      </QueryClientProvider>
     );
+    // nothing kept here: the server still does not say so, as it cannot know
+    const html = renderToString(page());
+    expect(html).not.toContain("There are no kept changes");
+    expect(html).toContain("animate-pulse");
+    // the browser says it
+    render(page());
+    expect(await screen.findByText("There are no kept changes for this sketch in this browser.")).toBeTruthy();
   });
 });
