@@ -483,7 +483,11 @@ export function CommentsPanel({
         testId="later-open"
         lead="Still open on later versions"
         list={data.laterOpen ?? []}
-        tail="Asked of the drawing as it went on. A check or an approval of this version counts them too: resolve them there, or say in its note why they do not apply here."
+        tail={
+          data.locked
+            ? "Asked of the drawing as it went on."
+            : "Asked of the drawing as it went on. A check or an approval of this version counts them too: resolve them there, or say in its note why they do not apply here."
+        }
         versionHref={versionHref}
       />
       {data.threads.length === 0 ? (

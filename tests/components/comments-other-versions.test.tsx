@@ -42,4 +42,9 @@ describe("open threads on other versions", () => {
     expect(screen.queryByTestId("earlier-open")).toBeNull();
     expect(screen.queryByTestId("later-open")).toBeNull();
   });
+
+  it("on an approved version they are listed, without asking for a sign-off it no longer takes", () => {
+    show({ ...base, locked: true, canComment: false, laterOpen: [{ number: 3, open: 1 }] });
+    expect(screen.getByTestId("later-open").textContent).toBe("Still open on later versions: v3 (1 thread). Asked of the drawing as it went on.");
+  });
 });
