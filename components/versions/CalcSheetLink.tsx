@@ -2,13 +2,18 @@
 // The link to a version's calc sheet (a PDF the server makes). Without JavaScript it is a plain
 // link: the PDF downloads (the route answers it as an attachment) and a failure shows the route's
 // error page. With JavaScript the sheet is fetched first, so a failure (503 while the database is
-// out of reach, 404 for a version that is gone, a session that ended) is said beside the link in
-// words, and only a PDF is ever saved: an error reply is never kept as a "PDF".
+// out of reach, 404 for a version that is gone, a session that ended, a download that broke off
+// part-way) is said beside the link in words, and only a whole PDF is ever saved: an error reply or
+// a part of the file is never kept as a "PDF".
 import { useState, type ReactNode } from "react";
 import { attachmentName, fetchAndSave, serverMessage, useFetchOnClick } from "@/components/shell/download";
 
-/** The words for a calc sheet that could not be had: what the server said, and its status. */
-export function calcSheetFailure(status: number, body: string): string {
+/**
+ * The words for a calc sheet that could not be had: what the server said, and its status; a
+ * download that broke off part-way (`brokeOff`, `fetchAndSave`) is not an app out of reach.
+ */
+export function calcSheetFailure(status: number, body: string, brokeOff = false): string {
+  if (brokeOff) return "The calc sheet was not saved: its download broke off part-way, and a part of the PDF would not open. Try again.";
   if (status === 0) return "The calc sheet could not be fetched: the app could not be reached. Check the connection and try again.";
   if (status === 401) return "The calc sheet could not be made: your session has ended. Sign in again, then ask for it again.";
   const why = serverMessage(body) ?? (status === 503 ? "the server is not available just now." : "the server could not make it.");
@@ -45,7 +50,7 @@ export function CalcSheetLink({
   const { busy, onClick: open } = useFetchOnClick(async () => {
     setError(null);
     const got = await fetchAndSave(href, "calc-sheet.pdf", (res) => (res.headers.get("content-type") ?? "").startsWith("application/pdf"));
-    if (!got.ok) fail(calcSheetFailure(got.status, got.body));
+    if (!got.ok) fail(calcSheetFailure(got.status, got.body, got.brokeOff));
   });
 
   return (

@@ -5,6 +5,7 @@ import { render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { attachmentName, calcSheetFailure, CalcSheetLink } from "@/components/versions/CalcSheetLink";
+import { brokenOffReply } from "../support/broken-off";
 
 const HREF = "/api/sketches/sk1/versions/3/calc-sheet?units=SI";
 
@@ -61,8 +62,42 @@ describe("calc sheet link", () => {
     click.mockRestore();
   });
 
+  it("saves nothing when the PDF breaks off part-way, and says it broke off rather than that the app could not be reached", async () => {
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => brokenOffReply("%PDF-1.7\n1 0 obj", { "content-type": "application/pdf", "content-disposition": 'attachment; filename="Pump-set-v3-calc-sheet-SI.pdf"' })),
+    );
+    const created = vi.fn(() => "blob:part");
+    vi.stubGlobal("URL", Object.assign(URL, { createObjectURL: created, revokeObjectURL: vi.fn() }));
+    const click = vi.spyOn(HTMLAnchorElement.prototype, "click");
+    const a = link();
+    await userEvent.click(a);
+    const alert = await screen.findByRole("alert");
+    expect(alert.textContent).toBe("The calc sheet was not saved: its download broke off part-way, and a part of the PDF would not open. Try again.");
+    expect(alert.textContent).not.toMatch(/could not be reached/);
+    expect(created).not.toHaveBeenCalled();
+    expect(click).not.toHaveBeenCalled();
+    // the link is back to itself, ready to be asked again
+    expect(a.getAttribute("aria-busy")).toBeNull();
+    click.mockRestore();
+  });
+
+  it("says a failure where the editor asks (onError) when given one", async () => {
+    vi.stubGlobal("fetch", vi.fn(async () => Promise.reject(new TypeError("Failed to fetch"))));
+    const said: string[] = [];
+    render(
+      <CalcSheetLink href={HREF} className="chip" onError={(m) => said.push(m)}>
+        Calc sheet (PDF)
+      </CalcSheetLink>,
+    );
+    await userEvent.click(screen.getByRole("link", { name: "Calc sheet (PDF)" }));
+    await waitFor(() => expect(said).toEqual(["The calc sheet could not be fetched: the app could not be reached. Check the connection and try again."]));
+    expect(screen.queryByRole("alert")).toBeNull();
+  });
+
   it("words the other failures", () => {
     expect(calcSheetFailure(0, "")).toMatch(/could not be reached/);
+    expect(calcSheetFailure(0, "", true)).toMatch(/^The calc sheet was not saved: its download broke off part-way/);
     expect(calcSheetFailure(401, "")).toMatch(/your session has ended/);
     expect(calcSheetFailure(500, "<html>")).toBe("The calc sheet could not be made (the server answered 500): the server could not make it. Try again in a moment.");
     expect(attachmentName(null, "calc-sheet.pdf")).toBe("calc-sheet.pdf");

@@ -5,6 +5,7 @@ import { render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { ExportWorkspace, exportFailure } from "@/components/workspaces/ExportWorkspace";
+import { brokenOffReply } from "../support/broken-off";
 
 const saved: string[] = [];
 beforeEach(() => {
@@ -65,17 +66,7 @@ describe("downloading a workspace's sketches", () => {
   it("saves nothing when the streamed file breaks off part-way, and says so", async () => {
     vi.stubGlobal(
       "fetch",
-      vi.fn(async () => {
-        let sent = false;
-        const body = new ReadableStream<Uint8Array>({
-          pull(controller) {
-            if (sent) return controller.error(new TypeError("network error"));
-            sent = true;
-            controller.enqueue(new TextEncoder().encode('{"format":"counterpoise.workspace-export","sketches":['));
-          },
-        });
-        return new Response(body, { status: 200, headers: { "content-type": "application/json", "content-disposition": 'attachment; filename="bay-4-sketches-2026-12-05.json"' } });
-      }),
+      vi.fn(async () => brokenOffReply('{"format":"counterpoise.workspace-export","sketches":[', { "content-type": "application/json", "content-disposition": 'attachment; filename="bay-4-sketches-2026-12-05.json"' })),
     );
     render(<ExportWorkspace workspaceId="w1" sketches={40} />);
     await userEvent.click(screen.getByRole("link", { name: "Download all sketches (JSON)" }));
