@@ -75,11 +75,6 @@ export async function openThreadsOnSketch(sketchId: string, tx: DbOrTx = db): Pr
     .orderBy(asc(sketchVersion.number));
 }
 
-/** The open threads (as `openThreadsOnSketch`) on the sketch's versions before `number`. */
-export async function openThreadsBefore(sketchId: string, number: number): Promise<Array<{ number: number; open: number }>> {
-  return (await openThreadsOnSketch(sketchId)).filter((v) => v.number < number);
-}
-
 /**
  * A comment with its version, sketch and the caller's role (null role: not a member). `lock`
  * holds the comment's version row, so a sign-off step cannot slip between check and write.

@@ -403,10 +403,8 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
         paragraph(doc.fillColor(SOFT), line, left + 12, width - 12, 8.5);
       }
     }
-    if (rec.earlier) {
-      doc.moveDown(0.4);
-      para(rec.earlier, 8.5, ACCENT);
-    }
+    if (rec.earlier || rec.later) doc.moveDown(0.4);
+    for (const line of [rec.earlier, rec.later]) if (line) para(line, 8.5, ACCENT);
   }
 
   // ---- method, assumptions, cautions

@@ -1,6 +1,7 @@
 // The calc sheet's check record: the version's sign-off steps with their notes, and its comment
-// threads — what each is on, who said what and when, open or resolved by whom — so the printed
-// sheet carries its own checking history. Pure: the route reads the rows, this words them.
+// threads — what each is on, who said what and when, open or resolved by whom — and the threads
+// still open on the sketch's other versions, earlier and later, so the printed sheet carries its own
+// checking history. Pure: the route reads the rows, this words them.
 import { plainText } from "@/lib/review/comment-text";
 import { pinWords, type PinLike } from "@/lib/review/pin-words";
 import { STEP_RECORD, type SignOffStep } from "@/lib/review/rules";
@@ -30,8 +31,10 @@ export interface CheckRecordInput {
   steps: RecordStep[];
   /** the version's comments, oldest first (first comments and replies) */
   comments: RecordComment[];
-  /** open threads left on earlier versions that are not approved */
+  /** open threads left on earlier versions that are not approved (`openThreadsBesides`) */
   earlierOpen?: Array<{ number: number; open: number }>;
+  /** open threads on later versions that are not approved: the sign-off counts them too */
+  laterOpen?: Array<{ number: number; open: number }>;
 }
 
 export interface RecordThread {
@@ -49,6 +52,8 @@ export interface CheckRecord {
   threads: RecordThread[];
   /** a line on open threads of earlier versions, when there are any */
   earlier: string | null;
+  /** a line on open threads of later versions, when there are any */
+  later: string | null;
 }
 
 const stamp = (d: Date) => d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
@@ -73,7 +78,11 @@ export function checkRecord(input: CheckRecordInput, labels: Record<string, stri
   const summary = threads.length
     ? `${plural(threads.length, "comment thread", "comment threads")} on this version: ${openCount ? `${openCount} open` : "none open"}${threads.length > openCount ? `, ${threads.length - openCount} resolved` : ""}.`
     : "No comments on this version.";
-  const earlierOpen = (input.earlierOpen ?? []).filter((e) => e.open > 0);
-  const earlier = earlierOpen.length ? `Still open on earlier versions: ${earlierOpen.map((e) => `v${e.number} (${plural(e.open, "thread", "threads")})`).join(", ")}.` : null;
-  return { summary, steps, threads, earlier };
+  return { summary, steps, threads, earlier: openLine("earlier", input.earlierOpen), later: openLine("later", input.laterOpen) };
+}
+
+/** "Still open on later versions: v4 (1 thread), v5 (2 threads).", as the comments panel says it; null with none open. */
+function openLine(which: "earlier" | "later", list: CheckRecordInput["earlierOpen"]): string | null {
+  const open = (list ?? []).filter((e) => e.open > 0);
+  return open.length ? `Still open on ${which} versions: ${open.map((e) => `v${e.number} (${plural(e.open, "thread", "threads")})`).join(", ")}.` : null;
 }

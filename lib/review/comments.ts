@@ -2,6 +2,7 @@ import "server-only";
 import { db } from "@/db";
 import { getCommentAccess, insertComment, listVersionComments, openThreadsOnSketch, setThreadResolved, softDeleteComment, updateCommentBody, workspaceContacts, type CommentAccess, type CommentRow } from "@/db/queries/comments";
 import { getVersionAccess } from "@/db/queries/review";
+import { openThreadsBesides } from "./rules";
 import { lockRole } from "@/db/queries/sketches";
 import { getVersion } from "@/db/queries/versions";
 import { attachmentsOf, commentAttachmentKeys, deleteCommentAttachments } from "@/db/queries/uploads";
@@ -50,11 +51,10 @@ export async function readComments(sketchId: string, number: number, viewerId: s
   const threads: Thread[] = threadsOf(rows).map(({ first: r, all }) => ({ id: r.id, pin: r.pin, resolvedAt: r.resolvedAt, resolvedByName: r.resolvedByName, comments: all.map(view) }));
   return {
     threads,
-    /** open threads left on earlier versions that are not approved: a question asked of v1 is still open on v2 */
-    earlierOpen: openOnSketch.filter((v) => v.number < number),
-    /** open threads on later versions that are not approved: asked of the drawing as it went on (the
-     *  sign-off counts them too, `noteForOpenThreads`) */
-    laterOpen: openOnSketch.filter((v) => v.number > number),
+    /** open threads on the other versions that are not approved: earlier ones (a question asked of
+     *  v1 is still open on v2) and later ones (asked of the drawing as it went on; the sign-off counts
+     *  them too, `noteForOpenThreads`) */
+    ...openThreadsBesides(openOnSketch, number),
     members: contacts.map((c) => ({ id: c.id, name: c.name })),
     locked: access.reviewState === "approved",
     canComment: can(access.role, "comment.create") && access.reviewState !== "approved",

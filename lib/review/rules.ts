@@ -184,6 +184,17 @@ function threads(n: number): string {
   return `${n} comment thread${n === 1 ? "" : "s"}`;
 }
 
+/**
+ * The open threads on the sketch's other versions, from version `number`: earlier ones (a question
+ * asked of v1 stands until answered) and later ones (asked of the drawing as it went on). What the
+ * comments panel and the calc sheet's check record list, and what the sign-off counts besides the
+ * version's own (`noteForOpenThreads`).
+ */
+export function openThreadsBesides(open: OpenThreads, number: number): { earlierOpen: Array<{ number: number; open: number }>; laterOpen: Array<{ number: number; open: number }> } {
+  const shown = open.filter((v) => v.open > 0).map((v) => ({ number: v.number, open: v.open }));
+  return { earlierOpen: shown.filter((v) => v.number < number), laterOpen: shown.filter((v) => v.number > number) };
+}
+
 /** "2 on this version, 1 on v1 and 1 on v4": where the open threads are, said from version `number`. */
 export function openThreadsWhere(open: OpenThreads, number: number): string {
   const parts = open.filter((v) => v.open > 0).map((v) => (v.number === number ? `${v.open} on this version` : `${v.open} on v${v.number}`));

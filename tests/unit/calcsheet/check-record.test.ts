@@ -6,6 +6,7 @@ import { writeFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
 import { checkRecord, type CheckRecordInput } from "@/lib/calcsheet/record";
+import { openThreadsBesides } from "@/lib/review/rules";
 import { loadFixture } from "../solver/helpers";
 import { pdfText } from "../../support/pdf-text";
 
@@ -40,10 +41,14 @@ const record: CheckRecordInput = {
     { number: 1, open: 2 },
     { number: 2, open: 0 },
   ],
+  laterOpen: [
+    { number: 3, open: 1 },
+    { number: 5, open: 3 },
+  ],
 };
 
 describe("the check record", () => {
-  it("words the steps (an approval withdrawn with its reason), the threads (a deleted first comment with no replies is left out) and the earlier open threads", () => {
+  it("words the steps (an approval withdrawn with its reason), the threads (a deleted first comment with no replies is left out) and the open threads of earlier and later versions", () => {
     const rec = checkRecord(record, { leg: "rear stabiliser leg" });
     expect(rec.steps).toEqual([
       "2026-11-30 10:00 UTC · Eddie Editor submitted it for checking",
@@ -63,12 +68,29 @@ describe("the check record", () => {
     expect(rec.threads[2].lines).toEqual(["A deleted account, 2026-11-30 15:20 UTC: Whole sheet reads well.", "Chen Checker, 2026-11-30 15:25 UTC: (comment deleted)"]);
     expect(rec.summary).toBe("3 comment threads on this version: 2 open, 1 resolved.");
     expect(rec.earlier).toBe("Still open on earlier versions: v1 (2 threads).");
+    expect(rec.later).toBe("Still open on later versions: v3 (1 thread), v5 (3 threads).");
     expect(checkRecord({ steps: [{ step: "withdraw", actorName: "Olivia Owner", at: at("2026-12-01T09:00"), note: "Wrong μ" }], comments: [] }, {}).steps).toEqual([
       "2026-12-01 09:00 UTC · Olivia Owner withdrew the approval: “Wrong μ”",
     ]);
     // all open: no "0 resolved"
     expect(checkRecord({ steps: [], comments: [record.comments[2]] }, {}).summary).toBe("1 comment thread on this version: 1 open.");
-    expect(checkRecord({ steps: [], comments: [] }, {})).toEqual({ summary: "No comments on this version.", steps: [], threads: [], earlier: null });
+    expect(checkRecord({ steps: [], comments: [] }, {})).toEqual({ summary: "No comments on this version.", steps: [], threads: [], earlier: null, later: null });
+    // only later ones open: no line on earlier versions
+    expect(checkRecord({ steps: [], comments: [], earlierOpen: [{ number: 1, open: 0 }], laterOpen: [{ number: 4, open: 1 }] }, {})).toMatchObject({ earlier: null, later: "Still open on later versions: v4 (1 thread)." });
+  });
+
+  it("splits the sketch's open threads (approved versions already left out by the query) into the other versions, earlier and later, as the sign-off counts them", () => {
+    // v2's sheet: its own 2 are its threads (printed above), v1 and v4 are the others; v3 has none open
+    const open = [
+      { number: 1, open: 1 },
+      { number: 2, open: 2 },
+      { number: 3, open: 0 },
+      { number: 4, open: 3 },
+    ];
+    expect(openThreadsBesides(open, 2)).toEqual({ earlierOpen: [{ number: 1, open: 1 }], laterOpen: [{ number: 4, open: 3 }] });
+    expect(openThreadsBesides(open, 1)).toEqual({ earlierOpen: [], laterOpen: [{ number: 2, open: 2 }, { number: 4, open: 3 }] });
+    expect(openThreadsBesides(open, 5)).toEqual({ earlierOpen: [{ number: 1, open: 1 }, { number: 2, open: 2 }, { number: 4, open: 3 }], laterOpen: [] });
+    expect(openThreadsBesides([], 3)).toEqual({ earlierOpen: [], laterOpen: [] });
   });
 
   it("is printed on the calc sheet, which says when a newer version supersedes it", async () => {
@@ -94,6 +116,8 @@ describe("the check record", () => {
     expect(text).toContain("2. At (3.8, 0.35) m — open");
     expect(text).toContain("Eddie Editor, 2026-11-30 11:30 UTC: Yes: tyre on wet asphalt");
     expect(text).toContain("Still open on earlier versions: v1 (2 threads).");
+    expect(text).toContain("Still open on later versions: v3 (1 thread), v5 (3 threads).");
+    expect(text.indexOf("Still open on earlier versions")).toBeLessThan(text.indexOf("Still open on later versions"));
     // the record comes before the method
     expect(text.indexOf("Check record")).toBeLessThan(text.indexOf("Method"));
   }, 60000);

@@ -1,11 +1,12 @@
 import { z } from "zod";
 import { getVersion } from "@/db/queries/versions";
 import { approvedAfter, approvedBefore, getVersionForCalcSheet } from "@/db/queries/review";
-import { listVersionComments, openThreadsBefore } from "@/db/queries/comments";
+import { listVersionComments, openThreadsOnSketch } from "@/db/queries/comments";
 import { otherMethods, route } from "@/lib/api";
 import { calcSheetErrorPage, wantsHtml } from "@/lib/calcsheet/error-page";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
 import { AppError } from "@/lib/errors";
+import { openThreadsBesides } from "@/lib/review/rules";
 import { isUuid } from "@/lib/schemas";
 import { versionParams } from "@/lib/sketch-schemas";
 import { requireSketchRole } from "@/lib/sketches";
@@ -34,9 +35,9 @@ const makeSheet = route({ params: versionParams, query }, async ({ params, query
     );
   }
   const approved = sheet.reviewState === "approved";
-  const [comments, earlierOpen, approvedEarlier, approvedLater] = await Promise.all([
+  const [comments, openOnSketch, approvedEarlier, approvedLater] = await Promise.all([
     listVersionComments(sheet.versionId, user.id),
-    openThreadsBefore(params.id, sheet.versionNumber),
+    openThreadsOnSketch(params.id),
     approved ? null : approvedBefore(params.id, sheet.versionNumber),
     approved && sheet.latestVersion > sheet.versionNumber ? approvedAfter(params.id, sheet.versionNumber) : undefined,
   ]);
@@ -52,7 +53,9 @@ const makeSheet = route({ params: versionParams, query }, async ({ params, query
     approvedEarlier: approvedEarlier ?? undefined,
     approvedLater,
     file: sheet.document,
-    record: { steps: sheet.steps, comments, earlierOpen },
+    // the open threads of the other versions, earlier and later, as the comments panel lists them
+    // and the sign-off counts them
+    record: { steps: sheet.steps, comments, ...openThreadsBesides(openOnSketch, sheet.versionNumber) },
     units: query.units,
   });
   const name = `${sheet.sketchTitle.replace(/[^\w.-]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "sketch"}-v${sheet.versionNumber}-calc-sheet-${query.units}.pdf`;
