@@ -25,7 +25,7 @@ import { downloadCsv, useCsvName } from "./csv";
 import { limitRowsTable, type SweepLimitRow } from "@/lib/calcsheet/sweeps";
 import type { Table } from "@/solver/report";
 import { invalidStretches } from "./sweepErrors";
-import { noLimitHint, rangeWords } from "./limitHint";
+import { compactNoLimitHint, noLimitHint, noLimitReading, rangeWords, widestOf } from "./limitHint";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, solvesAtIn, type ParameterValue } from "./sweepRange";
 import { FLOW_FACTOR_PRESSURES } from "@/solver/cautions";
 
@@ -208,6 +208,39 @@ export interface Everywhere {
   quantity: LimitQuantity;
   /** the search's tolerance, in the parameter's unit */
   tolerance: number;
+  /** for each run of a support's quantity that does not reach the target (by `runKey`): how it is read
+   *  (`noLimitReading`) and where it came closest and which way it goes at the ends (`compactNoLimitHint`) */
+  hints?: Record<string, EverywhereHint>;
+  /** a range covering every run's wider range worth a search (`widestOf`), in the parameter's unit */
+  wider?: { from: number; to: number };
+}
+
+/** A run of "In every case" without a crossing, as read for its row. */
+export interface EverywhereHint {
+  released?: "lifted off" | "slack";
+  /** the body's name when it is held nowhere in the range */
+  loose?: string;
+  /** "closest … at …; past … heading for …" */
+  words: string;
+}
+
+/** A run's key among the rows of "In every case": its kind and id. */
+export const runKey = (r: LimitEverywhere) => `${r.kind}:${r.id}`;
+
+/**
+ * The words of a run of a support's quantity that does not reach the target: which side of it the
+ * quantity stays on (lifted off, or slack, throughout for a released support; not held, for a body
+ * held nowhere), then where it came closest and which way it goes at each end, as the single
+ * search says them in full. On screen and in the CSV.
+ */
+export function unreachedWords(e: Everywhere, run: LimitEverywhere, result: { min: number; max: number }): string {
+  const h = e.hints?.[runKey(run)];
+  const head = h?.loose !== undefined
+    ? `no crossing in this range: ${h.loose} is not held anywhere in it (what its supports would need, not a load they carry)`
+    : h?.released
+      ? `no crossing in this range: ${h.released} (it carries nothing) throughout`
+      : noCrossingWords(result, e.targetSI, e.target);
+  return h?.words ? `${head}; ${h.words}` : head;
 }
 
 /**
@@ -231,7 +264,7 @@ export function everywhereTable(e: Everywhere, sketch: SketchFile): Table {
       first,
       governs: first,
       ...(e.body ? { body: e.body.body } : {}),
-      ...("error" in r ? { unreached: runErrorWords(sketch, r) } : !r.found ? { unreached: e.body ? bodyNoCrossingWords(r, e.body, e.pName, e.unit) : noCrossingWords(r, e.targetSI, e.target) } : {}),
+      ...("error" in r ? { unreached: runErrorWords(sketch, r) } : !r.found ? { unreached: e.body ? bodyNoCrossingWords(r, e.body, e.pName, e.unit) : unreachedWords(e, run, r) } : {}),
     };
   });
   const title = e.body ? `Where ${e.label}, in each case and combination` : `Where the ${e.label} reaches ${e.target}, in each case and combination`;
@@ -459,8 +492,14 @@ export function SweepPanel() {
     return { s: { ...s, ...range }, q, tgt, text: ran.text, id: ran.id };
   };
 
-  const findEverywhere = () => {
-    const inputs = limitInputs();
+  /** a value of a component (SI) in the unit on screen, with the unit */
+  const shownIn = (component: QuantityComponent) => {
+    const shownUnit = displayUnit(component, units, scaleFor(component));
+    return (si: number) => `${formatNumber(toDisplay(si, component, units, scaleFor(component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
+  };
+
+  const findEverywhere = (wider?: { from: number; to: number }) => {
+    const inputs = limitInputs(wider);
     if (!inputs) return;
     const { s, q, tgt, text, id } = inputs;
     const job = runner.current!.run({ kind: "limits", text, spec: { parameter: s.parameter, from: s.from, to: s.to, quantity: q, target: tgt.si } });
@@ -475,6 +514,19 @@ export function SweepPanel() {
         const found = rows.find((r) => "found" in r.result && r.result.found)?.result;
         const tolerance = (found && "found" in found && found.found && found.tolerance) || limitTolerance([s.from, s.to]);
         const reached = rows.map((r) => reachedAt(r.result, s.from, s.to)).filter((x): x is number => x !== undefined);
+        // each run of a support's quantity without a crossing read as the single search reads it
+        const pName = parameterWords(s.parameter);
+        const hints: Record<string, EverywhereHint> = {};
+        const offered: { from: number; to: number }[] = [];
+        if (!isBodyLimit(q))
+          for (const r of rows) {
+            if (!("found" in r.result) || r.result.found || !Number.isFinite(r.result.min)) continue;
+            const reading = noLimitReading(r.result, q, ran!.sketch.supports ?? [], names, tgt.si, shownIn(q.component));
+            const hint = compactNoLimitHint(r.result, s, { parameter: s.parameter, pName, target: tgt.shown, shown: reading.shown, released: reading.released });
+            hints[runKey(r)] = { ...(reading.released ? { released: reading.released } : {}), ...(reading.loose !== undefined ? { loose: reading.loose } : {}), words: hint.words };
+            if (hint.wider) offered.push(hint.wider);
+          }
+        const widest = widestOf(offered, s);
         setEverywhere({
           rows,
           label: isBodyLimit(q) ? bodyLimitLabel(q, names) : describeQuantity(q, names),
@@ -487,11 +539,13 @@ export function SweepPanel() {
           to: s.to,
           precision: limitPrecisionWords(tolerance, unitText, reached),
           overrides: overridesIn(ran!.sketch, rows, s.parameter),
-          pName: parameterWords(s.parameter),
+          pName,
           ...(isBodyLimit(q) ? { body: q } : {}),
           parameter: s.parameter,
           quantity: q,
           tolerance,
+          hints,
+          ...(widest ? { wider: widest } : {}),
         });
       })
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(studyErrorWords(ran?.sketch ?? sketch, err))))
@@ -510,8 +564,7 @@ export function SweepPanel() {
         const label = isBodyLimit(q) ? bodyLimitLabel(q, names) : describeQuantity(q, names);
         // a body's sliding margin is a force, as a friction margin is
         const component = isBodyLimit(q) ? "frictionMargin" : q.component;
-        const shownUnit = displayUnit(component, units, scaleFor(component));
-        const inShown = (si: number) => `${formatNumber(toDisplay(si, component, units, scaleFor(component)), 4)}${shownUnit ? ` ${shownUnit}` : ""}`;
+        const inShown = shownIn(component);
         const pUnit = result.unit ? ` ${prettyUnit(result.unit)}` : "";
         // the flow factor is named as everywhere else ("at flow factor = 1.186", as "In every case" says it)
         const pName = parameterWords(s.parameter);
@@ -525,15 +578,14 @@ export function SweepPanel() {
         const over = `for ${pName} from ${formatNumber(s.from, 5)} to ${formatNumber(s.to, 5)}${pUnit}`;
         // no crossing: where it came closest, and whether a wider range may find one
         // a contact's or tie's margin below zero all through: it is lifted off (slack) there and carries
-        // nothing; the margin's size then follows the support stiffnesses, so no figure of it is said
-        const kind = isBodyLimit(q) ? undefined : (ran!.sketch.supports ?? []).find((x) => x.id === q.support)?.kind;
-        const released = !isBodyLimit(q) && q.component === "margin" && !result.found && result.held === "all" && result.max < 0 && tgt.si <= 0 ? (kind === "tie" ? ("slack" as const) : ("lifted off" as const)) : undefined;
-        // not held anywhere in the range (it tips all through): its margins are those of the last set
+        // nothing; the margin's size then follows the support stiffnesses, so no figure of it is said.
+        // Not held anywhere in the range (it tips all through): its margins are those of the last set
         // of supports that held it, carried on, not loads its supports carry
-        const bodyId = isBodyLimit(q) ? undefined : (ran!.sketch.supports ?? []).find((x) => x.id === q.support)?.body;
-        const loose = !isBodyLimit(q) && !result.found && result.held === "none" && bodyId !== undefined ? names[bodyId] ?? bodyId : undefined;
+        const reading = !isBodyLimit(q) && !result.found ? noLimitReading(result, q, ran!.sketch.supports ?? [], names, tgt.si, inShown) : undefined;
+        const released = reading?.released;
+        const loose = reading?.loose;
         // below zero a margin of a held body is no force: "lifted off" (or "slack") in place of its figure
-        const marginShown = (si: number) => (!isBodyLimit(q) && q.component === "margin" && si < 0 && loose === undefined ? (kind === "tie" ? "slack" : "lifted off") : inShown(si));
+        const marginShown = reading?.shown ?? inShown;
         const hint = !isBodyLimit(q) && !result.found && Number.isFinite(result.min) ? noLimitHint(result, s, { parameter: s.parameter, pName, target: tgt.shown, shown: marginShown, released }) : null;
         const words = isBodyLimit(q)
           ? bodyLimitWords(result, q, label, pName, over, precision, s.from, s.to) + otherRange
@@ -551,6 +603,15 @@ export function SweepPanel() {
       // Stop ends every study of this panel at once (they share one worker)
       .catch((err) => (err instanceof CancelledError ? setLimitStopped(true) : setError(studyErrorWords(ran?.sketch ?? sketch, err))))
       .finally(() => setSearching(null));
+  };
+
+  /** A wider range offered searched: put in From and To (Run plots it) while the form sweeps the plotted parameter, the one searched. */
+  const searchWider = (w: { from: number; to: number }, search: (w: { from: number; to: number }) => void) => {
+    if (parameter === ran?.spec.parameter) {
+      setFrom(String(w.from));
+      setTo(String(w.to));
+    }
+    search(w);
   };
 
   const kept = sketch.sweeps ?? [];
@@ -806,7 +867,7 @@ export function SweepPanel() {
               )}
               <button type="button" className={BUTTON} onClick={() => findLimit()} disabled={!!searching || progress !== null}>Find</button>
               {(sketch.cases?.length ?? 0) + (sketch.combinations?.length ?? 0) > 0 && (
-                <button type="button" className={BUTTON} onClick={findEverywhere} disabled={!!searching || progress !== null} title="The same search in each case (but those only in combinations) and each combination: under which does it happen first?">
+                <button type="button" className={BUTTON} onClick={() => findEverywhere()} disabled={!!searching || progress !== null} title="The same search in each case (but those only in combinations) and each combination: under which does it happen first?">
                   In every case
                 </button>
               )}
@@ -849,15 +910,7 @@ export function SweepPanel() {
                 data-testid="limit-wider"
                 disabled={!!searching || progress !== null}
                 title="Puts this range in From and To and searches it (run the sweep again to plot it)"
-                onClick={() => {
-                  const w = limit.wider!;
-                  // the form says the range searched (Run plots it); the plotted parameter is the one searched
-                  if (parameter === ran?.spec.parameter) {
-                    setFrom(String(w.from));
-                    setTo(String(w.to));
-                  }
-                  findLimit(w);
-                }}
+                onClick={() => searchWider(limit.wider!, findLimit)}
               >
                 Search {rangeWords(limit.wider, limit.unit ?? "")}
               </button>
@@ -900,7 +953,7 @@ export function SweepPanel() {
                               ? `${everywhere.pName} = ${limitWithUnit(reachedAt(r.result, everywhere.from, everywhere.to)!, everywhere.unit)}${everywhere.first.includes(r.id) ? (everywhere.first.length > 1 ? " — equal first" : " — first") : ""}${everywhere.body && slidFirstWords(r.result, everywhere.body, everywhere.pName, everywhere.from, everywhere.to) ? `, ${slidFirstWords(r.result, everywhere.body, everywhere.pName, everywhere.from, everywhere.to)}` : ""}`
                               : everywhere.body
                                 ? bodyNoCrossingWords(r.result, everywhere.body, everywhere.pName, everywhere.unit)
-                                : noCrossingWords(r.result, everywhere.targetSI, everywhere.target)}
+                                : unreachedWords(everywhere, r, r.result)}
                         </td>
                       </tr>
                     ))}
@@ -914,6 +967,18 @@ export function SweepPanel() {
                 >
                   CSV
                 </button>
+                {everywhere.wider && (
+                  <button
+                    type="button"
+                    className={`${BUTTON} mt-0.5 ml-1.5`}
+                    data-testid="limit-everywhere-wider"
+                    disabled={!!searching || progress !== null}
+                    title="Puts this range in From and To and searches every case and combination over it (run the sweep again to plot it)"
+                    onClick={() => searchWider(everywhere.wider!, findEverywhere)}
+                  >
+                    Search every case {rangeWords(everywhere.wider, everywhere.unit)}
+                  </button>
+                )}
                 <p className="mt-0.5 text-[11.5px] text-ink-faint" data-testid="limit-everywhere-overrides">
                   {everywhere.overrides.length
                     ? `Each is searched over ${everywhere.pName} from ${formatNumber(everywhere.from, 5)} to ${formatNumber(everywhere.to, 5)}${everywhere.unit ? ` ${prettyUnit(everywhere.unit)}` : ""}: ${everywhere.pName === "flow factor" ? "the searched flow factor multiplies a case's own" : `the searched value stands in for the ${everywhere.pName} a case sets itself`} (${everywhere.overrides.join("; ")}).`

@@ -6,6 +6,8 @@ import type { EndTrend, LimitResult } from "@/solver/limit";
 import { limitWithUnit } from "@/solver/limit";
 import { FLOW_FACTOR } from "@/solver/sweep";
 import { formatNumber, prettyUnit } from "@/solver/units";
+import type { QuantitySpec } from "@/solver/quantity";
+import type { SketchFile } from "@/solver/schema";
 
 export interface NoLimitHint {
   /** the sentences after "No crossing in this range: …" */
@@ -17,63 +19,112 @@ export interface NoLimitHint {
 /** How far past an end a wider search goes at most: ten times the range searched. */
 const MAX_WIDEN = 10;
 
-/**
- * The hint under a search that found no crossing. `shown` writes a value of the quantity (SI) in
- * the unit on screen; `target` is the target as shown; `pName` the parameter in words.
- * A range that starts at or above zero for the flow factor is not widened below zero (no flow).
- */
-export function noLimitHint(
-  result: Extract<LimitResult, { found: false }>,
-  range: { from: number; to: number },
-  opts: {
-    parameter: string;
-    pName: string;
-    target: string;
-    shown: (si: number) => string;
-    /** a contact's or tie's margin below zero all through the range: lifted off (slack) throughout,
-     *  carrying nothing, where the margin's size is no force (see `carriesNothing`): no "closest" figure */
-    released?: "lifted off" | "slack";
-  },
-): NoLimitHint {
+interface HintOpts {
+  parameter: string;
+  pName: string;
+  target: string;
+  shown: (si: number) => string;
+  /** a contact's or tie's margin below zero all through the range: lifted off (slack) throughout,
+   *  carrying nothing, where the margin's size is no force (see `carriesNothing`): no "closest" figure */
+  released?: "lifted off" | "slack";
+}
+
+/** An end of the range past which the quantity heads for the target, and where a line reaches it. */
+interface Heading {
+  side: "below" | "above";
+  end: number;
+  estimate: number;
+  /** the line reaches the target only more than ten ranges out */
+  far: boolean;
+}
+
+/** What both renderings say, read once from the result: the closest point, the ends heading for the target, the wider range. */
+function hintParts(result: Extract<LimitResult, { found: false }>, range: { from: number; to: number }, opts: HintOpts) {
   const lo = Math.min(range.from, range.to);
   const hi = Math.max(range.from, range.to);
-  const unit = result.unit;
-  const out: string[] = [];
-  if (result.closest && !opts.released) out.push(`It comes closest at ${opts.pName} = ${limitWithUnit(result.closest.at, unit)}, where it is ${opts.shown(result.closest.value)}.`);
+  const closest = result.closest && !opts.released ? result.closest : undefined;
   const ends = result.ends;
-  if (!ends) return { words: out.join(" ") };
+  if (!ends) return { closest, headings: null as Heading[] | null, wider: undefined };
   const width = hi - lo;
   const floor = opts.parameter === FLOW_FACTOR && lo >= 0 ? 0 : -Infinity;
+  const headings: Heading[] = [];
   const heading = (trend: EndTrend, end: number, side: "below" | "above"): number | null => {
     if (!trend.toward || trend.estimate === undefined) return null;
     const past = Math.abs(trend.estimate - end);
-    const far = past > MAX_WIDEN * width;
-    const endWords = `${side === "above" ? "Past" : "Below"} ${formatNumber(end, 5)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
-    // a released support's margin (−k·gap) changes with the support stiffnesses and with which other
-    // supports bear, so a line through it gives no value to quote: only the way it goes
-    out.push(
-      opts.released
-        ? `${endWords} it is heading back toward ${opts.released === "slack" ? "taking load" : "bearing"}: a wider range may find where it does.`
-        : `${endWords} it is still heading for ${opts.target}: a straight line through the last samples reaches it ${far ? "only far out, " : ""}near ${opts.pName} = ${limitWithUnit(trend.estimate, unit)} (an extrapolation, not a finding).`,
-    );
+    headings.push({ side, end, estimate: trend.estimate, far: past > MAX_WIDEN * width });
     // half as far again as the line says (the curve may bend away), at most ten ranges out
     const step = Math.min(1.5 * past, MAX_WIDEN * width);
     return side === "above" ? end + step : Math.max(floor, end - step);
   };
   const newLo = heading(ends.lo, lo, "below");
   const newHi = heading(ends.hi, hi, "above");
-  if (newLo === null && newHi === null) {
+  if (newLo === null && newHi === null) return { closest, headings, wider: undefined };
+  const w = roundOut(newLo ?? lo, newHi ?? hi);
+  const wider = w.from === lo && w.to === hi ? undefined : range.from <= range.to ? w : { from: w.to, to: w.from };
+  return { closest, headings, wider };
+}
+
+/** What the quantity is heading back toward when released all through: "bearing" or "taking load". */
+const backToward = (released: "lifted off" | "slack") => (released === "slack" ? "taking load" : "bearing");
+
+/**
+ * The hint under a search that found no crossing. `shown` writes a value of the quantity (SI) in
+ * the unit on screen; `target` is the target as shown; `pName` the parameter in words.
+ * A range that starts at or above zero for the flow factor is not widened below zero (no flow).
+ */
+export function noLimitHint(result: Extract<LimitResult, { found: false }>, range: { from: number; to: number }, opts: HintOpts): NoLimitHint {
+  const unit = result.unit;
+  const { closest, headings, wider } = hintParts(result, range, opts);
+  const out: string[] = [];
+  if (closest) out.push(`It comes closest at ${opts.pName} = ${limitWithUnit(closest.at, unit)}, where it is ${opts.shown(closest.value)}.`);
+  if (!headings) return { words: out.join(" ") };
+  for (const h of headings) {
+    const endWords = `${h.side === "above" ? "Past" : "Below"} ${endWithUnit(h.end, unit)}`;
+    // a released support's margin (−k·gap) changes with the support stiffnesses and with which other
+    // supports bear, so a line through it gives no value to quote: only the way it goes
     out.push(
       opts.released
-        ? `At both ends it is moving further from ${opts.released === "slack" ? "taking load" : "bearing"}: a wider range finds a crossing only if the curve turns back (the plot shows its shape).`
-        : `At both ends it is moving away from ${opts.target}: a wider range finds a crossing only if the curve turns back (the plot shows its shape).`,
+        ? `${endWords} it is heading back toward ${backToward(opts.released)}: a wider range may find where it does.`
+        : `${endWords} it is still heading for ${opts.target}: a straight line through the last samples reaches it ${h.far ? "only far out, " : ""}near ${opts.pName} = ${limitWithUnit(h.estimate, unit)} (an extrapolation, not a finding).`,
     );
-    return { words: out.join(" ") };
   }
-  const wider = roundOut(newLo ?? lo, newHi ?? hi);
-  if (wider.from === lo && wider.to === hi) return { words: out.join(" ") };
-  return { words: out.join(" "), wider: range.from <= range.to ? wider : { from: wider.to, to: wider.from } };
+  if (!headings.length)
+    out.push(
+      `At both ends it is moving ${opts.released ? "further from" : "away from"} ${opts.released ? backToward(opts.released) : opts.target}: a wider range finds a crossing only if the curve turns back (the plot shows its shape).`,
+    );
+  return { words: out.join(" "), ...(wider ? { wider } : {}) };
 }
+
+/**
+ * The same hint for a row of "In every case", in a few words after "no crossing in this range":
+ * "closest 0.3807 kN at T = 1,000 N; past 1,000 N heading for 0 kN (a line reaches it near T =
+ * 1,634 N)". Read from the result as `noLimitHint` reads it, with the same wider range.
+ */
+export function compactNoLimitHint(result: Extract<LimitResult, { found: false }>, range: { from: number; to: number }, opts: HintOpts): NoLimitHint {
+  const unit = result.unit;
+  const { closest, headings, wider } = hintParts(result, range, opts);
+  const out: string[] = [];
+  if (closest) out.push(`closest ${opts.shown(closest.value)} at ${opts.pName} = ${limitWithUnit(closest.at, unit)}`);
+  for (const h of headings ?? [])
+    out.push(
+      `${h.side === "above" ? "past" : "below"} ${endWithUnit(h.end, unit)} heading ${
+        opts.released ? `back toward ${backToward(opts.released)}` : `for ${opts.target} (a line reaches it ${h.far ? "only far out, " : ""}near ${opts.pName} = ${limitWithUnit(h.estimate, unit)})`
+      }`,
+    );
+  if (headings && !headings.length) out.push(`moving ${opts.released ? `further from ${backToward(opts.released)}` : `away from ${opts.target}`} at both ends`);
+  return { words: out.join("; "), ...(wider ? { wider } : {}) };
+}
+
+/** The widest of the ranges offered (in the direction searched): one search that covers them all. */
+export function widestOf(ranges: readonly ({ from: number; to: number } | undefined)[], range: { from: number; to: number }): { from: number; to: number } | undefined {
+  const some = ranges.filter((r): r is { from: number; to: number } => r !== undefined);
+  if (!some.length) return undefined;
+  const lo = Math.min(...some.map((r) => Math.min(r.from, r.to)));
+  const hi = Math.max(...some.map((r) => Math.max(r.from, r.to)));
+  return range.from <= range.to ? { from: lo, to: hi } : { from: hi, to: lo };
+}
+
+const endWithUnit = (end: number, unit: string) => `${formatNumber(end, 5)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
 
 /** The ends of a range rounded outward to three figures of its width: values a person would type. */
 export function roundOut(lo: number, hi: number): { from: number; to: number } {
@@ -87,4 +138,26 @@ export function roundOut(lo: number, hi: number): { from: number; to: number } {
 /** A range as the button says it: "from −90 to 70 deg". */
 export function rangeWords(r: { from: number; to: number }, unit: string): string {
   return `from ${formatNumber(r.from, 5)} to ${formatNumber(r.to, 5)}${unit ? ` ${prettyUnit(unit)}` : ""}`;
+}
+
+/**
+ * How a search of a support's quantity without a crossing is read, in the single search and in
+ * each row of "In every case" alike: a contact's or tie's margin below zero all through on a held
+ * body is `released` (lifted off, or slack: it carries nothing, and its size is no force); a body
+ * not held anywhere in the range is `loose` (its name: the quantity is what its supports would
+ * need); `shown` writes a value (SI), "lifted off" ("slack") for a held body's margin below zero.
+ */
+export function noLimitReading(
+  result: Extract<LimitResult, { found: false }>,
+  q: QuantitySpec,
+  supports: SketchFile["supports"],
+  names: Readonly<Record<string, string>>,
+  targetSI: number,
+  inShown: (si: number) => string,
+): { released?: "lifted off" | "slack"; loose?: string; shown: (si: number) => string } {
+  const support = supports.find((x) => x.id === q.support);
+  const released = q.component === "margin" && result.held === "all" && result.max < 0 && targetSI <= 0 ? (support?.kind === "tie" ? ("slack" as const) : ("lifted off" as const)) : undefined;
+  const loose = result.held === "none" && support ? names[support.body] ?? support.body : undefined;
+  const shown = (si: number) => (q.component === "margin" && si < 0 && loose === undefined ? (support?.kind === "tie" ? "slack" : "lifted off") : inShown(si));
+  return { ...(released ? { released } : {}), ...(loose !== undefined ? { loose } : {}), shown };
 }

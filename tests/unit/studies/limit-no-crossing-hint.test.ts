@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { findLimit } from "@/solver";
 import { G0 } from "@/solver/constants";
-import { noLimitHint, rangeWords, roundOut } from "@/components/studies/limitHint";
+import { compactNoLimitHint, noLimitHint, rangeWords, roundOut, widestOf } from "@/components/studies/limitHint";
 import { box, expectRel, parsed, sketch } from "../solver/helpers";
 
 // A 200 kg stand (weight at x = 1 m) on a front pin at x = 2 m and a rear contact at x = 0 facing
@@ -86,6 +86,10 @@ describe("a force of 500 N turned through θ at the rear top corner: the margin 
     expect(hint.words).toBe(
       "It comes closest at θ = 59.04 deg, where it is 0.3976 kN. At both ends it is moving away from 0 kN: a wider range finds a crossing only if the curve turns back (the plot shows its shape).",
     );
+    // a row of "In every case" says the same in a few words
+    expect(compactNoLimitHint(r, { from: 20, to: 100 }, { parameter: "theta", pName: "θ", target: "0 kN", shown })).toEqual({
+      words: "closest 0.3976 kN at θ = 59.04 deg; moving away from 0 kN at both ends",
+    });
   });
 });
 
@@ -104,6 +108,14 @@ describe("the wider range", () => {
     const far = noLimitHint({ ...base, ends: { lo: { toward: false }, hi: { toward: true, estimate: 500 } } }, { from: 0, to: 1 }, { parameter: "p", pName: "p", target: "0 kN", shown });
     expect(far.wider).toEqual({ from: 0, to: 11 });
     expect(far.words).toContain("reaches it only far out, near p = 500");
+  });
+});
+
+describe("one range covering the wider ranges of every case", () => {
+  it("spans them all, in the direction searched; none offered, none", () => {
+    expect(widestOf([{ from: 0, to: 1960 }, undefined, { from: -40, to: 1000 }], { from: 0, to: 1000 })).toEqual({ from: -40, to: 1960 });
+    expect(widestOf([{ from: 1960, to: 0 }], { from: 1000, to: 0 })).toEqual({ from: 1960, to: 0 });
+    expect(widestOf([undefined], { from: 0, to: 1 })).toBeUndefined();
   });
 });
 
@@ -133,6 +145,9 @@ describe("a tie slack all through the range: it carries nothing, and no figure o
     expect(r.ends!.hi.toward).toBe(true);
     const hint = noLimitHint(r, { from: 0, to: 1000 }, { parameter: "P", pName: "P", target: "0 kN", shown, released: "slack" });
     expect(hint.words).toBe("Past 1,000 N it is heading back toward taking load: a wider range may find where it does.");
+    // the row of "In every case": no figure of the margin either, and the same wider range
+    const row = compactNoLimitHint(r, { from: 0, to: 1000 }, { parameter: "P", pName: "P", target: "0 kN", shown, released: "slack" });
+    expect(row).toEqual({ words: "past 1,000 N heading back toward taking load", wider: hint.wider });
     expect(hint.wider!.from).toBe(0);
     expect(hint.wider!.to).toBeGreaterThan(W / 1.5);
     const again = findLimit(sk, "P", [hint.wider!.from, hint.wider!.to], { support: "bolt", component: "margin" });
