@@ -41,6 +41,8 @@ function MoreErrors({ words }: { words: string[] }) {
 
 /** A body that holds but falls short of a required factor of safety: the badge says so, not "Holds". */
 const SHORT = { word: "FoS short", cls: "border-caution bg-caution text-on-accent" };
+/** short of a factor with a contact lifted off: both, the governing check first, as the headline says them */
+const SHORT_LIFTS = { ...SHORT, word: "FoS short, lifts" };
 
 /** The body's factors of safety as drawn, under its status: in the caution colour when one falls short. */
 function StabilityLine({ sentence }: { sentence: { text: string; pass: boolean } | null }) {
@@ -86,11 +88,11 @@ export function StatusBanner() {
       )}
       {sentences.map((s) => {
         const factors = numeric ? stabilitySentence(numeric, s.body, stability?.[s.body]) : null;
-        // a body held (a tie slack beside bearing contacts included) that falls short of a required
-        // factor: the badge says so, as the headline does; a contact lifted off keeps "Lifts"
+        // a body held (a tie slack beside bearing contacts, a contact lifted off included) that falls
+        // short of a required factor: the badge says so, as the headline does, and a lift-off after it
         const short = !!s.short;
         // a body that tips and slides: both in the badge, as in the sentence
-        const badge = short ? SHORT : s.alsoSlips && s.tone === "tips" ? (s.first === "slides" ? SLIDES_THEN_TIPS : TIPS_AND_SLIDES) : s.slackOnly ? SLACK : BADGE[s.tone];
+        const badge = short ? (s.tone === "lifts" && !s.slackOnly ? SHORT_LIFTS : SHORT) : s.alsoSlips && s.tone === "tips" ? (s.first === "slides" ? SLIDES_THEN_TIPS : TIPS_AND_SLIDES) : s.slackOnly ? SLACK : BADGE[s.tone];
         return (
           <div key={s.body} className={`grid grid-cols-[auto_minmax(0,1fr)] gap-x-2 ${stale ? "opacity-60" : ""}`}>
             {/* the badge and the headline read as one sentence; the details line up under the headline */}

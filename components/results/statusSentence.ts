@@ -28,8 +28,10 @@ export interface StatusSentence {
   /** a "lifts" body whose only released supports are ties gone slack: no contact has lifted off,
    *  so the badge says "Slack", not "Lifts" (an anchor bolt slack on the far side of a moment) */
   slackOnly?: boolean;
-  /** a body that holds (or holds with a tie slack, or one contact over its μ) but falls short of a
-   *  required factor of safety: the headline leads with the governing check, the badge says "FoS short" */
+  /** a body that holds (or holds with a tie slack, or one contact over its μ, or with a contact lifted
+   *  off) but falls short of a required factor of safety: the headline leads with the governing
+   *  check, the badge says "FoS short" ("FoS short, lifts" with a contact lifted off: the headline
+   *  says the lift-off after the check) */
   short?: "overturning" | "sliding";
 }
 
@@ -240,7 +242,9 @@ function tipSentence(c: Context, slip: { words: string; wholeBody: boolean } | n
   return `${head} — ${pull}${also}`;
 }
 
-function liftSentence(c: Context): string {
+/** A lift-off in its two halves: what is released ("Lifts off at the near foot; the rear tie goes
+ *  slack") and what still holds the body ("the far foot still holds the body", "" when nothing). */
+function liftParts(c: Context): { released: string; holding: string } {
   const off = c.reactions.filter(([, r]) => r.state === "lifted" || r.state === "slack");
   const holding = c.reactions.filter(([, r]) => r.state !== "lifted" && r.state !== "slack").map(([s]) => supportName(s));
   const lifted = off.filter(([s]) => s.kind === "contact").map(([s]) => supportName(s));
@@ -248,8 +252,12 @@ function liftSentence(c: Context): string {
   const parts: string[] = [];
   if (lifted.length) parts.push(`Lifts off at ${list(lifted)}`);
   if (slack.length) parts.push(`${list(slack)} ${slack.length === 1 ? "goes" : "go"} slack`);
-  const first = cap(parts.join("; "));
-  return holding.length ? `${first} — ${list(holding)} still ${holding.length === 1 ? "holds" : "hold"} the body` : first;
+  return { released: cap(parts.join("; ")), holding: holding.length ? `${list(holding)} still ${holding.length === 1 ? "holds" : "hold"} the body` : "" };
+}
+
+function liftSentence(c: Context): string {
+  const { released, holding } = liftParts(c);
+  return holding ? `${released} — ${holding}` : released;
 }
 
 function holdSentence(c: Context): string {
@@ -382,8 +390,14 @@ export function statusSentences(
     const slackOnly = tone === "lifts" && reactions.some(([s, r]) => s.kind === "tie" && r.state === "slack") && !reactions.some(([, r]) => r.state === "lifted");
     // held, but short of a required factor of safety: the failing check leads, never "Holds"; what
     // the headline said of the supports follows as the first detail
-    const short = tone === "holds" || tone === "strained" || slackOnly ? shortfall(sketch, stability?.[b.id]) : null;
-    if (short) {
+    const short = tone === "holds" || tone === "strained" || tone === "lifts" ? shortfall(sketch, stability?.[b.id]) : null;
+    if (short && tone === "lifts" && !slackOnly) {
+      // a contact lifted off is a finding of its own: said in the headline after the governing
+      // check (the badge and the screen reader's words too), what still holds the body following
+      const { released, holding } = liftParts(c);
+      if (holding) details.unshift(`${cap(holding)}.`);
+      headline = `${short.text}; it ${released.charAt(0).toLowerCase()}${released.slice(1)}`;
+    } else if (short) {
       details.unshift(`${headline.replace(/^Holds/, "It holds")}.`);
       headline = short.text;
     }

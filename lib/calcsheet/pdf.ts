@@ -185,11 +185,14 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
     const b = result.bodies[s.body];
     // a body with a support released: its details say what the supports that carry load are
     const determinacy = b.determinacy.kind === "indeterminate" || b.activeDeterminacy ? "" : ` Statically ${b.determinacy.kind}.`;
-    para(`${s.headline}.${determinacy}`, 9.5, s.tone === "holds" && !s.short ? INK : ACCENT);
-    for (const d of s.details) {
-      para(d, 8.5, SOFT);
+    // short of a factor: the first detail says what the supports do ("It holds — …"), and the
+    // determinacy follows it, not the failing check
+    const after = s.short && s.details.length ? 0 : -1;
+    para(`${s.headline}.${after < 0 ? determinacy : ""}`, 9.5, s.tone === "holds" && !s.short ? INK : ACCENT);
+    s.details.forEach((d, i) => {
+      para(i === after ? `${d}${determinacy}` : d, 8.5, SOFT);
       said.add(d.replace(/\.$/, ""));
-    }
+    });
   }
   // the warnings the sentences above have not said already (they name the supports by id)
   // (a body's own "slides as a whole" is its status sentence's headline already)

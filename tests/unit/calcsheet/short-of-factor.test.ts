@@ -3,10 +3,11 @@
 import { describe, expect, it } from "vitest";
 import { buildCalcSheet } from "@/lib/calcsheet/pdf";
 import { pushedBlock } from "../../support/pushed-block";
+import { threeFootBlock } from "../../support/three-foot-block";
 import { pdfText } from "../../support/pdf-text";
 
-const sheet = async (P: string) => {
-  const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Pushed block", version: 1, savedAt: new Date(0), generatedAt: new Date(0), signoff: [], file: pushedBlock(P), units: "SI" });
+const sheet = async (P: string, block = pushedBlock) => {
+  const buf = await buildCalcSheet({ workspace: "W", sketchTitle: "Pushed block", version: 1, savedAt: new Date(0), generatedAt: new Date(0), signoff: [], file: block(P), units: "SI" });
   return (await pdfText(buf)).text.replace(/\s+/g, " ");
 };
 
@@ -18,6 +19,17 @@ describe("the calc sheet's result of a held body", () => {
     const holds = text.indexOf("It holds — all supports within their limits; the largest reaction is 9.761 kN at the far foot.");
     expect(holds).toBeGreaterThan(lead);
     expect(text).not.toMatch(/ Holds — all supports/);
+    // two feet, the far one with friction: three reactions, three equations; said after what the
+    // supports do, not between the failing check and it
+    expect(text).toContain("1.5. It holds — all supports within their limits; the largest reaction is 9.761 kN at the far foot. Statically determinate.");
+    expect(text).not.toContain("1.5. Statically determinate.");
+  }, 60000);
+
+  it("a contact lifted off (three feet, P = 4 kN): the failing check leads, the lift-off in the same sentence, what holds it after", async () => {
+    const text = await sheet("4 kN", threeFootBlock);
+    // W·0.5/(P·1) = 1.226; the near foot lifts once P·h > W/3 (tests/support/three-foot-block.ts)
+    expect(text).toContain("Short of the required factor of safety against overturning about the far foot: 1.23 < 1.5; it lifts off at the near foot. The far foot and the middle foot still hold the body.");
+    expect(text).not.toMatch(/Lifts off at the near foot/);
   }, 60000);
 
   it("P = 2 kN: both factors pass (2.45 and 3.11), the result says Holds", async () => {
