@@ -19,12 +19,18 @@
 //                     tipping, "slidesFrom" says where it already slides as a whole (friction is
 //                     checked, not enforced: a tipping value past it holds only while the body is
 //                     held against sliding)
+//                     A support's quantity that does not reach the target in a run gets "hint":
+//                     where it came closest and which way it goes past each end, in the words of
+//                     the Sweep tab's "In every case" (values in N, N·m), and "wider", a range a
+//                     further search may find it in
 import { readFileSync } from "node:fs";
-import { solveCases } from "./cases";
+import { elementNames, solveCases } from "./cases";
 import { evaluateToNumber } from "./expressions";
 import { parseSketch, solveFile } from "./index";
+import { runNoLimitWords } from "./limitHint";
 import type { QuantityComponent } from "./quantity";
-import { bodyLimits, findAnyLimitWith, firstReached, limitEverywhere, sweeperOn, type LimitQuantity } from "./studySweep";
+import { formatNumber } from "./units";
+import { bodyLimits, findAnyLimitWith, firstReached, limitEverywhere, sweeperOn, type LimitEverywhere, type LimitQuantity } from "./studySweep";
 import type { FieldError } from "./types";
 
 const USAGE =
@@ -35,6 +41,8 @@ const BODY_LIMITS = ["tips", "slides"] as const;
 
 type Out = { code: number; body: unknown };
 const fail = (errors: FieldError[]): Out => ({ code: 1, body: { ok: false, errors } });
+/** A value of a component (SI) with its SI unit, as the hint says it: "43.17 N". */
+const inSI = (component: QuantityComponent) => (si: number) => `${formatNumber(si, 4)}${component === "frictionRatio" ? "" : component === "m" ? " N·m" : " N"}`;
 const usage = (why?: string): Out => fail([{ path: "", message: why ? `${why}; ${USAGE}` : USAGE }]);
 
 function read(file: string): string | Out {
@@ -115,6 +123,14 @@ function limit(opts: Map<string, string>, text: string): Out {
       ]);
   } else if (!p.file.supports.some((s) => s.id === qm[1])) return fail([{ path: "--quantity", message: `the sketch has no support "${qm[1]}"` }]);
   const head = { ok: true, parameter: range[1], from, to, quantity, ...(bodyLimit ? {} : { target }) };
+  // a support's quantity short of the target: the compact hint, as "In every case" says it
+  const names = elementNames(p.file);
+  const hinted = (result: LimitEverywhere["result"]) => {
+    if (bodyLimit || "error" in result || result.found) return {};
+    const shown = inSI(component);
+    const h = runNoLimitWords(result, { support: qm[1], component }, p.file.supports, names, { from, to }, { parameter: range[1], pName: range[1], targetSI: target, target: shown(target), shown });
+    return h ? { hint: h.words, ...(h.wider ? { wider: h.wider } : {}) } : {};
+  };
   try {
     if (opts.has("--every-case")) {
       if (opts.has("--case") || opts.has("--combination")) return usage("--every-case searches every case and combination: give it no --case or --combination");
@@ -123,10 +139,11 @@ function limit(opts: Map<string, string>, text: string): Out {
       const failed = runs.flatMap((r) => ("error" in r.result ? [r.result.error] : []));
       if (failed.length === runs.length) return fail([{ path: "", message: failed[0] }]);
       const first = firstReached(runs, from, to);
-      return { code: 0, body: { ...head, runs, first: first?.row.id ?? null, firstValue: first?.value ?? null } };
+      return { code: 0, body: { ...head, runs: runs.map((r) => ({ ...r, ...hinted(r.result) })), first: first?.row.id ?? null, firstValue: first?.value ?? null } };
     }
     const sweeper = sweeperOn(p.file, { case: opts.get("--case"), combination: opts.get("--combination") }, range[1], p.sketch);
-    return { code: 0, body: { ...head, result: findAnyLimitWith(sweeper, [from, to], quantity, target) } };
+    const result = findAnyLimitWith(sweeper, [from, to], quantity, target);
+    return { code: 0, body: { ...head, result, ...hinted(result) } };
   } catch (err) {
     return fail([{ path: "", message: (err as Error).message }]);
   }

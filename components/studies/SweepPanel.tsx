@@ -25,7 +25,7 @@ import { downloadCsv, useCsvName } from "./csv";
 import { limitRowsTable, type SweepLimitRow } from "@/lib/calcsheet/sweeps";
 import type { Table } from "@/solver/report";
 import { invalidStretches } from "./sweepErrors";
-import { compactNoLimitHint, noLimitHint, noLimitReading, rangeWords, widestOf } from "./limitHint";
+import { compactNoLimitHint, noLimitHint, noLimitReading, rangeWords, widestOf } from "@/solver/limitHint";
 import { defaultSweepParameter, defaultSweepRange, parseRangeValue, solvesAtIn, type ParameterValue } from "./sweepRange";
 import { FLOW_FACTOR_PRESSURES } from "@/solver/cautions";
 

@@ -7,6 +7,7 @@
 import { displayKind, displayUnit, largestByKind, marksZero, parameterWords, sweepRangeWords, sweepStateLines, toDisplay } from "@/canvas/studies/display";
 import { runSweep } from "@/canvas/studies/run";
 import { findBodySlidingWith, findLimitWith, limitPrecisionWords, limitTolerance, limitWithUnit } from "@/solver/limit";
+import { runNoLimitWords } from "@/solver/limitHint";
 import { describeQuantity, type QuantitySpec } from "@/solver/quantity";
 import type { SketchFile, SweepFile } from "@/solver/schema";
 import { elementNames } from "@/solver/cases";
@@ -131,6 +132,16 @@ export interface SweepLimitRow {
   /** the note for a run that does not reach the limit, or is not solved, in the caller's words (the
    *  editor's "In every case" says which side of its target the quantity stays on); else the table's own */
   unreached?: string;
+  /** a support's margin not reaching zero: where it came closest and which way it goes past each end
+   *  ("closest 0.3807 kN at T = 1 kN; past 1 kN heading for 0 kN (…)"), as "In every case" says it */
+  hint?: string;
+}
+
+/** A value of a quantity (SI) with its unit, as a run's hint in the limits table says it: in the
+ *  sheet's units, N (N·m) below 1 kN (1 kN·m) as a table does. */
+function hintShown(q: QuantitySpec, units: UnitSystem, largest: number) {
+  const unit = displayUnit(q.component, units, largest);
+  return (si: number) => `${formatNumber(toDisplay(si, q.component, units, largest), 4)}${unit ? ` ${unit}` : ""}`;
 }
 
 /**
@@ -148,8 +159,9 @@ export interface SweepLimitRow {
  * first and still leave the body held: the table marks the first limit of all, and the summary says
  * each body's own first limit beside it.
  */
-export function sweepLimitRows(file: SketchFile, sw: SweepFile, onProgress?: (done: number, total: number) => void): { rows: SweepLimitRow[]; unit: string; tolerance: number } {
+export function sweepLimitRows(file: SketchFile, sw: SweepFile, onProgress?: (done: number, total: number) => void, units: UnitSystem = "SI"): { rows: SweepLimitRow[]; unit: string; tolerance: number } {
   const names = elementNames(file);
+  const pName = parameterWords(sw.parameter);
   const limits: Array<{ q: QuantitySpec; limit: string; past: string }> = [];
   for (const s of file.supports) {
     if (s.kind !== "contact" && s.kind !== "tie") continue;
@@ -195,7 +207,14 @@ export function sweepLimitRows(file: SketchFile, sw: SweepFile, onProgress?: (do
       const crossings = "found" in r && r.found ? r.crossings.length : 0;
       // tipping's "margin" is a sign only (held or not): never "past it throughout" in words of a margin
       const pastThroughout = past !== "tipping" && "found" in r && !r.found && r.max < 0;
-      rows.push({ run, quantity, limit, past, value, more: Math.max(0, crossings - 1), pastThroughout, first: !!first?.tied.includes(run), governs: false, ...(body ? { body } : {}) });
+      // a support's margin that never reaches zero: where it came closest, and which way it goes at the ends
+      let hint: string | undefined;
+      if (!body && "found" in r && !r.found) {
+        const largest = Math.max(Math.abs(r.min), Math.abs(r.max));
+        const shown = hintShown(quantity, units, Number.isFinite(largest) ? largest : 0);
+        hint = runNoLimitWords(r, quantity, file.supports, names, { from: sw.from, to: sw.to }, { parameter: sw.parameter, pName, targetSI: 0, target: shown(0), shown })?.words;
+      }
+      rows.push({ run, quantity, limit, past, value, more: Math.max(0, crossings - 1), pastThroughout, first: !!first?.tied.includes(run), governs: false, ...(body ? { body } : {}), ...(hint ? { hint } : {}) });
       all.push(run);
     }
     onProgress?.(++searchedLimits, limits.length + tipping.length + sliding.length);
@@ -301,13 +320,18 @@ export function limitRowsTable(
       value = `none in ${span}`;
       // sliding is read only while the body is held: where it tips in this run, say so
       const tips = r.past === "sliding as a whole" ? rows.find((t) => t.body === r.body && t.past === "tipping" && t.run.kind === r.run.kind && t.run.id === r.run.id && t.value !== undefined) : undefined;
-      note = r.unreached ?? (r.pastThroughout
-        ? `past it throughout: ${r.past} over the whole range (the margin stays below zero)`
-        : tips
-          ? `searched while the body is held: it tips from ${limitWithUnit(tips.value!, unit)}`
-          : slidesFrom !== undefined
-            ? `it slides as a whole from ${limitWithUnit(slidesFrom, unit)}`
-            : "");
+      note = r.unreached ?? [
+        r.pastThroughout
+          ? `past it throughout: ${r.past} over the whole range (the margin stays below zero)`
+          : tips
+            ? `searched while the body is held: it tips from ${limitWithUnit(tips.value!, unit)}`
+            : slidesFrom !== undefined
+              ? `it slides as a whole from ${limitWithUnit(slidesFrom, unit)}`
+              : "",
+        r.hint ?? "",
+      ]
+        .filter(Boolean)
+        .join("; ");
     } else {
       value = r.value;
       const slidFirst = slidesFrom !== undefined && (o.from <= o.to ? slidesFrom <= r.value : slidesFrom >= r.value);
@@ -350,8 +374,8 @@ export function limitRowsTable(
  * marked ◆ and said in words, the first of each other limit ◇, so the mark is never colour alone.
  * When what governs is a support's limit, the summary says each body's own first limit after it.
  */
-export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (done: number, total: number) => void): { table: Table; summary: string } {
-  const { rows, unit, tolerance } = sweepLimitRows(file, sw, onProgress);
+export function sweepLimitTable(file: SketchFile, sw: SweepFile, onProgress?: (done: number, total: number) => void, units: UnitSystem = "SI"): { table: Table; summary: string } {
+  const { rows, unit, tolerance } = sweepLimitRows(file, sw, onProgress, units);
   const u = unit ? ` ${prettyUnit(unit)}` : "";
   const span = `${formatNumber(sw.from, 6)} … ${formatNumber(sw.to, 6)}${u}`;
   const p = parameterWords(sw.parameter);

@@ -47,7 +47,9 @@ describe("a flow-factor sweep on the calc sheet", () => {
     const slip = (run: string) => cells.find((r) => r[0] === "rear bearer: slip (μ·n − |t| = 0)" && r[1] === run)!;
     // with the pull doubled to 3 kN the rear bearer's friction is used up even with no flow
     // (the solver's own sweep: every point's μ·n − |t| below zero), so it has no crossing
-    expect(slip("Surge").slice(2)).toEqual(["none in 0 … 3", "past it throughout: slipping over the whole range (the margin stays below zero)"]);
+    // closest with no flow (the margin falls as the flow grows), and nothing said of where it heads
+    // below a flow factor of 0: there is no flow below none
+    expect(slip("Surge").slice(2)).toEqual(["none in 0 … 3", "past it throughout: slipping over the whole range (the margin stays below zero); closest −0.1323 kN at flow factor = 0; moving away from 0 kN past 3"]);
     expect(slip("Duty")[2]).toMatch(/\d/);
   });
 });

@@ -4,8 +4,9 @@
 import { describe, expect, it } from "vitest";
 import { findLimit } from "@/solver";
 import { G0 } from "@/solver/constants";
-import { compactNoLimitHint, noLimitHint, rangeWords, roundOut, widestOf } from "@/components/studies/limitHint";
+import { compactNoLimitHint, noLimitHint, rangeWords, roundOut, widestOf } from "@/solver/limitHint";
 import { box, expectRel, parsed, sketch } from "../solver/helpers";
+import { tieBeam } from "./tie-beam";
 
 // A 200 kg stand (weight at x = 1 m) on a front pin at x = 2 m and a rear contact at x = 0 facing
 // up. Moments about the pin: −2·n + W·1 + M_load = 0, so n = (W + M_load)/2.
@@ -120,22 +121,8 @@ describe("one range covering the wider ranges of every case", () => {
 });
 
 describe("a tie slack all through the range: it carries nothing, and no figure of its margin is said", () => {
-  // The beam of a pin at x = 0, a pad (contact facing up) at x = 2 m and an anchor bolt (a tie
-  // pulling down) at x = 1 m, weight W at x = 1 m, and an uplift P at x = 1.5 m. With the bolt
-  // slack, moments about the pin: 2·n − W + 1.5·P = 0, so the pad bears n = (W − 1.5·P)/2 and lifts
-  // at P = W/1.5 = 1307.6 N, where the bolt takes over: T = 1.5·P − W (common practice).
-  const sk = parsed(
-    sketch({
-      parameters: { P: "100 N" },
-      bodies: [{ id: "s", outline: box(2, 0.5), mass: 200, cg: [1, 0.25] }],
-      supports: [
-        { id: "pin", body: "s", kind: "pin", at: [0, 0] },
-        { id: "pad", body: "s", kind: "contact", at: [2, 0], angle: 90 },
-        { id: "bolt", body: "s", kind: "tie", at: [1, 0], angle: -90 },
-      ],
-      loads: [{ id: "up", body: "s", kind: "force", at: [1.5, 0.5], fx: 0, fy: "P" }],
-    }),
-  );
+  // the tie beam (./tie-beam.ts): the pad bears n = (W − 1.5·P)/2 and lifts at P = W/1.5 = 1307.6 N
+  const sk = parsed(tieBeam());
 
   it("searched from 0 to 1000 N: held all through, slack all through, heading back toward taking load; the wider range finds P = W/1.5", () => {
     const r = findLimit(sk, "P", [0, 1000], { support: "bolt", component: "margin" });
@@ -153,5 +140,21 @@ describe("a tie slack all through the range: it carries nothing, and no figure o
     const again = findLimit(sk, "P", [hint.wider!.from, hint.wider!.to], { support: "bolt", component: "margin" });
     if (!again.found) throw new Error("not found");
     expectRel(again.value, W / 1.5, 1e-7);
+  });
+});
+
+describe("a flow factor searched from 0", () => {
+  it("says nothing of where the quantity heads below no flow, and offers no range below it", () => {
+    // a margin rising from the end at no flow, falling past the other: the line below 0 is no finding
+    const r = { found: false as const, unit: "", reason: "", min: -0.3, max: -0.1, closest: { at: 0, value: -100 }, ends: { lo: { toward: true, estimate: -2 }, hi: { toward: false } } };
+    const o = { parameter: "flowFactor", pName: "flow factor", target: "0 kN", shown };
+    expect(compactNoLimitHint(r, { from: 0, to: 3 }, o)).toEqual({ words: "closest -0.1000 kN at flow factor = 0; moving away from 0 kN past 3" });
+    expect(noLimitHint(r, { from: 0, to: 3 }, o).words).toBe(
+      "It comes closest at flow factor = 0, where it is -0.1000 kN. Past 3 it is moving away from 0 kN: a wider range finds a crossing only if the curve turns back (the plot shows its shape).",
+    );
+    // from 0.5 the factor may go lower: the line's estimate is said and the range goes down to 0
+    const from = noLimitHint({ ...r, closest: { at: 0.5, value: -100 } }, { from: 0.5, to: 3 }, o);
+    expect(from.words).toContain("Below 0.5 it is still heading for 0 kN");
+    expect(from.wider).toEqual({ from: 0, to: 3 });
   });
 });

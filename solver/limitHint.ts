@@ -1,13 +1,14 @@
 // What the limit finder says when the quantity does not reach its target in the range searched:
 // where it came closest, whether it is still heading for the target at an end of the range (so a
 // wider search may find it), and the wider range to search. Pure: the Sweep tab shows the words and
-// offers the range as a button.
-import type { EndTrend, LimitResult } from "@/solver/limit";
-import { limitWithUnit } from "@/solver/limit";
-import { FLOW_FACTOR } from "@/solver/sweep";
-import { formatNumber, prettyUnit } from "@/solver/units";
-import type { QuantitySpec } from "@/solver/quantity";
-import type { SketchFile } from "@/solver/schema";
+// offers the range as a button; the calc sheet's and a version page's limits table
+// (lib/calcsheet/sweeps.ts) and `npm run solve -- --limit` (cli.ts) say the compact words.
+import type { EndTrend, LimitResult } from "./limit";
+import { limitWithUnit } from "./limit";
+import { FLOW_FACTOR } from "./sweep";
+import { formatNumber, prettyUnit } from "./units";
+import type { QuantitySpec } from "./quantity";
+import type { SketchFile } from "./schema";
 
 export interface NoLimitHint {
   /** the sentences after "No crossing in this range: …" */
@@ -44,9 +45,11 @@ function hintParts(result: Extract<LimitResult, { found: false }>, range: { from
   const hi = Math.max(range.from, range.to);
   const closest = result.closest && !opts.released ? result.closest : undefined;
   const ends = result.ends;
-  if (!ends) return { closest, headings: null as Heading[] | null, wider: undefined };
-  const width = hi - lo;
   const floor = opts.parameter === FLOW_FACTOR && lo >= 0 ? 0 : -Infinity;
+  // a flow factor searched from 0: there is nothing below it (no flow), so no way to go there
+  const floored = lo === floor;
+  if (!ends) return { closest, headings: null as Heading[] | null, wider: undefined, floored, hi };
+  const width = hi - lo;
   const headings: Heading[] = [];
   const heading = (trend: EndTrend, end: number, side: "below" | "above"): number | null => {
     if (!trend.toward || trend.estimate === undefined) return null;
@@ -56,12 +59,12 @@ function hintParts(result: Extract<LimitResult, { found: false }>, range: { from
     const step = Math.min(1.5 * past, MAX_WIDEN * width);
     return side === "above" ? end + step : Math.max(floor, end - step);
   };
-  const newLo = heading(ends.lo, lo, "below");
+  const newLo = floored ? null : heading(ends.lo, lo, "below");
   const newHi = heading(ends.hi, hi, "above");
-  if (newLo === null && newHi === null) return { closest, headings, wider: undefined };
+  if (newLo === null && newHi === null) return { closest, headings, wider: undefined, floored, hi };
   const w = roundOut(newLo ?? lo, newHi ?? hi);
   const wider = w.from === lo && w.to === hi ? undefined : range.from <= range.to ? w : { from: w.to, to: w.from };
-  return { closest, headings, wider };
+  return { closest, headings, wider, floored, hi };
 }
 
 /** What the quantity is heading back toward when released all through: "bearing" or "taking load". */
@@ -70,11 +73,12 @@ const backToward = (released: "lifted off" | "slack") => (released === "slack" ?
 /**
  * The hint under a search that found no crossing. `shown` writes a value of the quantity (SI) in
  * the unit on screen; `target` is the target as shown; `pName` the parameter in words.
- * A range that starts at or above zero for the flow factor is not widened below zero (no flow).
+ * A range that starts at or above zero for the flow factor is not widened below zero (no flow), and
+ * one that starts at zero says nothing of where the quantity heads below it.
  */
 export function noLimitHint(result: Extract<LimitResult, { found: false }>, range: { from: number; to: number }, opts: HintOpts): NoLimitHint {
   const unit = result.unit;
-  const { closest, headings, wider } = hintParts(result, range, opts);
+  const { closest, headings, wider, floored, hi } = hintParts(result, range, opts);
   const out: string[] = [];
   if (closest) out.push(`It comes closest at ${opts.pName} = ${limitWithUnit(closest.at, unit)}, where it is ${opts.shown(closest.value)}.`);
   if (!headings) return { words: out.join(" ") };
@@ -90,7 +94,7 @@ export function noLimitHint(result: Extract<LimitResult, { found: false }>, rang
   }
   if (!headings.length)
     out.push(
-      `At both ends it is moving ${opts.released ? "further from" : "away from"} ${opts.released ? backToward(opts.released) : opts.target}: a wider range finds a crossing only if the curve turns back (the plot shows its shape).`,
+      `${floored ? `Past ${endWithUnit(hi, unit)}` : "At both ends"} it is moving ${opts.released ? "further from" : "away from"} ${opts.released ? backToward(opts.released) : opts.target}: a wider range finds a crossing only if the curve turns back (the plot shows its shape).`,
     );
   return { words: out.join(" "), ...(wider ? { wider } : {}) };
 }
@@ -102,7 +106,7 @@ export function noLimitHint(result: Extract<LimitResult, { found: false }>, rang
  */
 export function compactNoLimitHint(result: Extract<LimitResult, { found: false }>, range: { from: number; to: number }, opts: HintOpts): NoLimitHint {
   const unit = result.unit;
-  const { closest, headings, wider } = hintParts(result, range, opts);
+  const { closest, headings, wider, floored, hi } = hintParts(result, range, opts);
   const out: string[] = [];
   if (closest) out.push(`closest ${opts.shown(closest.value)} at ${opts.pName} = ${limitWithUnit(closest.at, unit)}`);
   for (const h of headings ?? [])
@@ -111,7 +115,7 @@ export function compactNoLimitHint(result: Extract<LimitResult, { found: false }
         opts.released ? `back toward ${backToward(opts.released)}` : `for ${opts.target} (a line reaches it ${h.far ? "only far out, " : ""}near ${opts.pName} = ${limitWithUnit(h.estimate, unit)})`
       }`,
     );
-  if (headings && !headings.length) out.push(`moving ${opts.released ? `further from ${backToward(opts.released)}` : `away from ${opts.target}`} at both ends`);
+  if (headings && !headings.length) out.push(`moving ${opts.released ? `further from ${backToward(opts.released)}` : `away from ${opts.target}`} ${floored ? `past ${endWithUnit(hi, unit)}` : "at both ends"}`);
   return { words: out.join("; "), ...(wider ? { wider } : {}) };
 }
 
@@ -160,4 +164,27 @@ export function noLimitReading(
   const loose = result.held === "none" && support ? names[support.body] ?? support.body : undefined;
   const shown = (si: number) => (q.component === "margin" && si < 0 && loose === undefined ? (support?.kind === "tie" ? "slack" : "lifted off") : inShown(si));
   return { ...(released ? { released } : {}), ...(loose !== undefined ? { loose } : {}), shown };
+}
+
+/**
+ * A run of a support's quantity without a crossing, in the compact words of a row of "In every
+ * case" (`noLimitReading`, then `compactNoLimitHint`): the calc sheet's and a version page's limits
+ * table and `npm run solve -- --limit` say it so. `shown` writes a value (SI) with its unit, `target`
+ * is the target as shown. Nothing for a body held nowhere in the range (`loose`: its quantity is what
+ * its supports would need, not a figure to quote) or a run with nothing sampled.
+ */
+export function runNoLimitWords(
+  result: Extract<LimitResult, { found: false }>,
+  q: QuantitySpec,
+  supports: SketchFile["supports"],
+  names: Readonly<Record<string, string>>,
+  range: { from: number; to: number },
+  o: { parameter: string; pName: string; targetSI: number; target: string; shown: (si: number) => string },
+): { words: string; released?: "lifted off" | "slack"; wider?: { from: number; to: number } } | undefined {
+  if (!Number.isFinite(result.min)) return undefined;
+  const reading = noLimitReading(result, q, supports, names, o.targetSI, o.shown);
+  if (reading.loose !== undefined) return undefined;
+  const hint = compactNoLimitHint(result, range, { parameter: o.parameter, pName: o.pName, target: o.target, shown: reading.shown, released: reading.released });
+  if (!hint.words) return undefined;
+  return { words: hint.words, ...(reading.released ? { released: reading.released } : {}), ...(hint.wider ? { wider: hint.wider } : {}) };
 }
