@@ -6,6 +6,7 @@
 import type { EndTrend, LimitResult } from "./limit";
 import { limitWithUnit } from "./limit";
 import { FLOW_FACTOR } from "./sweep";
+import { kindOfUnit, type FieldKind } from "./expressions";
 import { formatNumber, prettyUnit } from "./units";
 import type { QuantitySpec } from "./quantity";
 import type { SketchFile } from "./schema";
@@ -37,7 +38,13 @@ interface Heading {
   estimate: number;
   /** the line reaches the target only more than ten ranges out */
   far: boolean;
+  /** the line reaches it only below zero, which the parameter cannot be (`NON_NEGATIVE`): no value to quote */
+  belowZero: boolean;
 }
+
+/** Quantities that have no meaning below zero: a range that starts at or above zero in one of these
+ *  (a wind speed, a mass flow, a mass) is not widened, nor its trend told, below zero. */
+const NON_NEGATIVE = new Set<FieldKind>(["mass", "massFlow", "velocity", "area", "density", "volumeFlow", "stiffness", "rotationalStiffness"]);
 
 /** What both renderings say, read once from the result: the closest point, the ends heading for the target, the wider range. */
 function hintParts(result: Extract<LimitResult, { found: false }>, range: { from: number; to: number }, opts: HintOpts) {
@@ -45,8 +52,9 @@ function hintParts(result: Extract<LimitResult, { found: false }>, range: { from
   const hi = Math.max(range.from, range.to);
   const closest = result.closest && !opts.released ? result.closest : undefined;
   const ends = result.ends;
-  const floor = opts.parameter === FLOW_FACTOR && lo >= 0 ? 0 : -Infinity;
-  // a flow factor searched from 0: there is nothing below it (no flow), so no way to go there
+  const kind = kindOfUnit(result.unit);
+  const floor = lo >= 0 && (opts.parameter === FLOW_FACTOR || (kind !== null && NON_NEGATIVE.has(kind))) ? 0 : -Infinity;
+  // a flow factor (or a speed, a mass flow…) searched from 0: there is nothing below it, so no way to go there
   const floored = lo === floor;
   if (!ends) return { closest, headings: null as Heading[] | null, wider: undefined, floored, hi };
   const width = hi - lo;
@@ -54,7 +62,7 @@ function hintParts(result: Extract<LimitResult, { found: false }>, range: { from
   const heading = (trend: EndTrend, end: number, side: "below" | "above"): number | null => {
     if (!trend.toward || trend.estimate === undefined) return null;
     const past = Math.abs(trend.estimate - end);
-    headings.push({ side, end, estimate: trend.estimate, far: past > MAX_WIDEN * width });
+    headings.push({ side, end, estimate: trend.estimate, far: past > MAX_WIDEN * width, belowZero: trend.estimate < floor });
     // half as far again as the line says (the curve may bend away), at most ten ranges out
     const step = Math.min(1.5 * past, MAX_WIDEN * width);
     return side === "above" ? end + step : Math.max(floor, end - step);
@@ -67,14 +75,23 @@ function hintParts(result: Extract<LimitResult, { found: false }>, range: { from
   return { closest, headings, wider, floored, hi };
 }
 
+/** Where the line through the last samples reaches the target: "near T = 1,634 N", "only far out, near …",
+ *  or "only below 0 m/s" for a speed or a mass flow (no value it can take, so none is quoted). */
+function lineWords(h: Heading, pName: string, unit: string): string {
+  if (h.belowZero) return `only below ${endWithUnit(0, unit)}`;
+  return `${h.far ? "only far out, " : ""}near ${pName} = ${limitWithUnit(h.estimate, unit)}`;
+}
+
 /** What the quantity is heading back toward when released all through: "bearing" or "taking load". */
 const backToward = (released: "lifted off" | "slack") => (released === "slack" ? "taking load" : "bearing");
 
 /**
  * The hint under a search that found no crossing. `shown` writes a value of the quantity (SI) in
  * the unit on screen; `target` is the target as shown; `pName` the parameter in words.
- * A range that starts at or above zero for the flow factor is not widened below zero (no flow), and
- * one that starts at zero says nothing of where the quantity heads below it.
+ * A range that starts at or above zero for the flow factor, or for a quantity with no meaning below
+ * zero (`NON_NEGATIVE`: a speed, a mass flow…), is not widened below zero; one that starts at zero
+ * says nothing of where the quantity heads below it, and a line that meets the target only below
+ * zero is said so, with no value.
  */
 export function noLimitHint(result: Extract<LimitResult, { found: false }>, range: { from: number; to: number }, opts: HintOpts): NoLimitHint {
   const unit = result.unit;
@@ -89,7 +106,7 @@ export function noLimitHint(result: Extract<LimitResult, { found: false }>, rang
     out.push(
       opts.released
         ? `${endWords} it is heading back toward ${backToward(opts.released)}: a wider range may find where it does.`
-        : `${endWords} it is still heading for ${opts.target}: a straight line through the last samples reaches it ${h.far ? "only far out, " : ""}near ${opts.pName} = ${limitWithUnit(h.estimate, unit)} (an extrapolation, not a finding).`,
+        : `${endWords} it is still heading for ${opts.target}: a straight line through the last samples reaches it ${lineWords(h, opts.pName, unit)} (an extrapolation, not a finding).`,
     );
   }
   if (!headings.length)
@@ -112,7 +129,7 @@ export function compactNoLimitHint(result: Extract<LimitResult, { found: false }
   for (const h of headings ?? [])
     out.push(
       `${h.side === "above" ? "past" : "below"} ${endWithUnit(h.end, unit)} heading ${
-        opts.released ? `back toward ${backToward(opts.released)}` : `for ${opts.target} (a line reaches it ${h.far ? "only far out, " : ""}near ${opts.pName} = ${limitWithUnit(h.estimate, unit)})`
+        opts.released ? `back toward ${backToward(opts.released)}` : `for ${opts.target} (a line reaches it ${lineWords(h, opts.pName, unit)})`
       }`,
     );
   if (headings && !headings.length) out.push(`moving ${opts.released ? `further from ${backToward(opts.released)}` : `away from ${opts.target}`} ${floored ? `past ${endWithUnit(hi, unit)}` : "at both ends"}`);

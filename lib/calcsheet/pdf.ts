@@ -364,7 +364,7 @@ export async function buildCalcSheet(input: CalcSheetInput): Promise<Buffer> {
       if (!markers.length && charts.some((c) => c.series.some((se) => se.markZero))) para(`No crossing in this range for ${plotted}: none of the plotted margins reaches zero.`, 8.5, INK);
       // every limit (lift-off, slack, slip) searched in every run the sweep covers, reached or not:
       // the numbers of the editor's "In every case"
-      const limits = sweepLimitTable(parsed.file, sw);
+      const limits = sweepLimitTable(parsed.file, sw, undefined, units);
       if (limits.table.rows.length) {
         // the heading kept with the sentence under it and the table's first rows
         const said = doc.font("Inter").fontSize(8.5).heightOfString(limits.summary, { width, features: PROSE_FEATURES });

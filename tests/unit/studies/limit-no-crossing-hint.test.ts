@@ -158,3 +158,21 @@ describe("a flow factor searched from 0", () => {
     expect(from.wider).toEqual({ from: 0, to: 3 });
   });
 });
+
+describe("a quantity that cannot be below zero (common practice: a wind speed or a mass flow is a size)", () => {
+  // a margin falling toward the low end of a wind-speed range: its line meets zero only at a negative speed
+  const r = { found: false as const, unit: "m/s", reason: "", min: 5, max: 9, closest: { at: 20, value: 5565 }, ends: { lo: { toward: true, estimate: -19.09 }, hi: { toward: false } } };
+  const o = { parameter: "v", pName: "v", target: "0 kN", shown };
+
+  it("quotes no negative speed, and widens the range down to zero at most", () => {
+    const compact = compactNoLimitHint(r, { from: 20, to: 45 }, o);
+    expect(compact.words).toBe("closest 5.5650 kN at v = 20.00 m/s; below 20 m/s heading for 0 kN (a line reaches it only below 0 m/s)");
+    expect(compact.wider).toEqual({ from: 0, to: 45 });
+    expect(noLimitHint(r, { from: 20, to: 45 }, o).words).toContain("reaches it only below 0 m/s (an extrapolation, not a finding)");
+  });
+
+  it("an angle may go below zero: its line's value is quoted", () => {
+    const deg = { ...r, unit: "deg", closest: { at: 20, value: 5565 } };
+    expect(compactNoLimitHint(deg, { from: 20, to: 45 }, { ...o, parameter: "theta", pName: "θ" }).words).toContain("(a line reaches it near θ = −19.09 deg)");
+  });
+});
