@@ -118,6 +118,9 @@ function useSharedRoom(dock: RefObject<HTMLElement | null>): number | null {
  *  as a sketch gains its first few supports. */
 const FITTED_FLOOR = 292;
 
+/** How long the dock's content stays unchanged before its height is measured (ms). */
+const SETTLE_MS = 120;
+
 /**
  * The height the open tab's content needs in the dock (px): the column's fixed part (status,
  * caution line, tabs) plus what the panel holds, and the dock's top border. Null until measured
@@ -138,18 +141,37 @@ function useContentHeight(column: RefObject<HTMLElement | null>, panel: RefObjec
       const h = Math.ceil(colH - pan.getBoundingClientRect().height + inner + pad + 1);
       setNeed((prev) => (prev === h ? prev : h));
     };
-    const ro = new ResizeObserver(measure);
-    const watch = () => {
-      ro.disconnect();
-      ro.observe(col);
-      for (const c of [...Array.from(col.children), ...Array.from(pan.children)]) ro.observe(c);
-      measure();
+    // measured once things settle, not in the frame that changed them: a drag re-renders the table
+    // every frame, and a layout read there (and the dock's height following it) would cost each
+    // frame a whole layout and a redraw of the canvas
+    const observed = new Set<Element>();
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const settle = () => {
+      clearTimeout(timer);
+      timer = setTimeout(() => {
+        // newly mounted children only: observing one again would notify again, and loop
+        for (const c of observed) {
+          if (!c.isConnected) {
+            ro.unobserve(c);
+            observed.delete(c);
+          }
+        }
+        for (const c of [col, ...Array.from(col.children), ...Array.from(pan.children)]) {
+          if (!observed.has(c)) {
+            observed.add(c);
+            ro.observe(c);
+          }
+        }
+        measure();
+      }, SETTLE_MS);
     };
-    watch();
-    const mo = new MutationObserver(watch);
+    const ro = new ResizeObserver(settle);
+    const mo = new MutationObserver(settle);
     mo.observe(col, { childList: true });
     mo.observe(pan, { childList: true });
+    settle();
     return () => {
+      clearTimeout(timer);
       ro.disconnect();
       mo.disconnect();
     };
